@@ -1,0 +1,210 @@
+/**
+ * The data every stage of Firnline passes on. Plain data only: no classes, no functions.
+ * Each stage folder (source/, prose/, quantities/, claims/, checks/, review/, report/) takes and
+ * returns these shapes, and engine.ts joins them.
+ */
+
+/** The SARIF levels, in order of severity. */
+export const LEVELS = ['error', 'warning', 'note'] as const;
+export type Level = (typeof LEVELS)[number];
+
+/** A place in an original file: 1-based line and column (Unicode code points), 0-based offset (code points). */
+export interface Point {
+  line: number;
+  column: number;
+  offset: number;
+}
+
+/** A stretch of an original file; `end` is just past the last character. */
+export interface Span {
+  start: Point;
+  end: Point;
+}
+
+// ---------------------------------------------------------------------------------------------
+// source/: drafts as read from disk
+// ---------------------------------------------------------------------------------------------
+
+export const BLOCK_KINDS = ['paragraph', 'heading', 'list-item', 'table-cell', 'blockquote', 'text'] as const;
+export type BlockKind = (typeof BLOCK_KINDS)[number];
+
+/**
+ * One run of prose from a draft (a paragraph, heading, table cell...), with markup removed.
+ * `offsets[i]` is the UTF-16 index in the ORIGINAL file text of `text[i]`; `offsets` has one extra
+ * final entry: the original index just past the block's last character. Sentences never cross blocks.
+ */
+export interface ProseBlock {
+  kind: BlockKind;
+  text: string;
+  offsets: number[];
+  /** Text of the nearest heading above the block (empty when there is none). */
+  heading: string;
+}
+
+/** A draft after reading: the original text, and its prose blocks in document order. */
+export interface Draft {
+  /** The path as reported: relative POSIX path from the working folder, or `-` for standard input. */
+  path: string;
+  /** The original text exactly as read (after UTF-8 decoding; a leading BOM is kept). */
+  text: string;
+  format: 'markdown' | 'text';
+  blocks: ProseBlock[];
+}
+
+// ---------------------------------------------------------------------------------------------
+// prose/: sentences
+// ---------------------------------------------------------------------------------------------
+
+/** One sentence inside a block. `start`/`end` are UTF-16 indices into `block.text`. */
+export interface Sentence {
+  text: string;
+  blockIndex: number;
+  start: number;
+  end: number;
+}
+
+// ---------------------------------------------------------------------------------------------
+// quantities/: numbers with units, read as intervals
+// ---------------------------------------------------------------------------------------------
+
+/**
+ * What a quantity measures. Canonical units: duration `yr`; age `yr BP` (years before AD 1950);
+ * concentration `ppm`; temperature-change `K`; temperature `degC`; length `m`;
+ * concentration-rate `ppm/yr`; temperature-rate `K/yr`; count `count`; ratio `ratio` (2 = twice);
+ * percent `%` (a bare percentage not converted to anything else).
+ */
+export const DIMENSIONS = [
+  'duration',
+  'age',
+  'concentration',
+  'temperature-change',
+  'temperature',
+  'length',
+  'concentration-rate',
+  'temperature-rate',
+  'count',
+  'ratio',
+  'percent',
+  'number',
+] as const;
+export type Dimension = (typeof DIMENSIONS)[number];
+
+/**
+ * A number as the draft states it, read as an interval in the dimension's canonical unit.
+ * `start`/`end` are UTF-16 indices into the text given to the parser (one sentence).
+ */
+export interface Quantity {
+  /** The quantity as written, e.g. "about 800,000 years". */
+  text: string;
+  start: number;
+  end: number;
+  /** The stated central value in the canonical unit. */
+  value: number;
+  /** The interval in the canonical unit after precision and hedges. */
+  low: number;
+  high: number;
+  dimension: Dimension;
+  /** The canonical unit of the dimension, e.g. `yr`, `ppm`, `K`. */
+  unit: string;
+  /** The unit as written, normalised (e.g. `kyr`, `degF`, `ft`, `BCE`, `%`); empty when none. */
+  statedUnit: string;
+  /** The hedge or bound word as written ("about", "more than"...), if any. */
+  hedge?: string;
+}
+
+// ---------------------------------------------------------------------------------------------
+// rulepack/: sources, reference values, direction facts, reasoning checks
+// ---------------------------------------------------------------------------------------------
+
+/** One bibliographic entry a rule cites. */
+export interface Source {
+  id: string;
+  /** Full citation: authors (year). Title. Journal volume, pages. */
+  cite: string;
+  doi?: string;
+  url?: string;
+  /** How the value was obtained from it: `read in the source`, `verified: <url>`, `computed: ...`, `from memory`. */
+  how: string;
+}
+
+// ---------------------------------------------------------------------------------------------
+// checks/: flags
+// ---------------------------------------------------------------------------------------------
+
+/** A value with its interval and unit, as shown to an editor. */
+export interface ShownValue {
+  /** Words as the draft wrote them, or as the reference states them. */
+  text: string;
+  low: number;
+  high: number;
+  unit: string;
+}
+
+/**
+ * A problem found on a claim. Data only: reporters turn it into words.
+ * `span` is where the editor should look (usually the quantity or the cue words).
+ */
+export interface Flag {
+  /** Dotted rule id, e.g. `value.vostok-record-span`, `logic.lag-rules-out-cause`. */
+  ruleId: string;
+  level: Level;
+  file: string;
+  span: Span;
+  /** The flagged text as it stands in the draft. */
+  excerpt: string;
+  /** The whole sentence the flag is in, as prose text (markup removed). */
+  sentence: string;
+  /** One or two plain sentences: what is wrong. */
+  reason: string;
+  claimed?: ShownValue;
+  reference?: ShownValue & { id: string; measures: string; asOf?: string };
+  /** Replacement for the text at `span`, when an exact one exists. */
+  correction?: string;
+  /** Rewording advice when no exact replacement exists (reasoning checks). */
+  suggestion?: string;
+  sources: Source[];
+  /** The id of the claim the flag belongs to (see review/claim-id). */
+  claimId?: string;
+}
+
+/** A flag before positions are resolved: offsets are UTF-16 indices into the sentence text. */
+export interface FlagDraft extends Omit<Flag, 'file' | 'span' | 'excerpt' | 'sentence' | 'claimId'> {
+  start: number;
+  end: number;
+}
+
+// ---------------------------------------------------------------------------------------------
+// claims/: what is checked
+// ---------------------------------------------------------------------------------------------
+
+/** per claim: inside the reference range, outside it, or nothing in the packs covers it. */
+export const VERDICTS = ['agrees', 'conflicts', 'no reference'] as const;
+export type Verdict = (typeof VERDICTS)[number];
+
+/** A quantity bound to the reference value it speaks about. */
+export interface Binding {
+  quantityIndex: number;
+  referenceId: string;
+}
+
+/** One checkable statement: a sentence on the subject with its quantities and what they bind to. */
+export interface Claim {
+  id: string;
+  file: string;
+  span: Span;
+  text: string;
+  heading: string;
+  quantities: Quantity[];
+  bindings: Binding[];
+  verdict: Verdict;
+  flags: Flag[];
+}
+
+/** What one run found. */
+export interface CheckResult {
+  files: string[];
+  claims: Claim[];
+  flags: Flag[];
+  /** Files passed over with the reason (binary, no topic term...), for the report. */
+  skipped: { file: string; reason: string }[];
+}
