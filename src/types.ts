@@ -200,9 +200,22 @@ export interface Claim {
   flags: Flag[];
 }
 
+/** What a report says about one rule id: for SARIF `tool.driver.rules`, `explain` and the checklist. */
+export interface RuleInfo {
+  id: string;
+  /** One line: what the rule checks. */
+  summary: string;
+  /** Longer text: the reference range or the reasoning error, with notes. */
+  description: string;
+  defaultLevel: Level;
+  sources: Source[];
+}
+
 /** What one run found. */
 export interface CheckResult {
   files: string[];
+  /** Every rule id that appears in `flags`, described. */
+  rules: RuleInfo[];
   claims: Claim[];
   flags: Flag[];
   /** Files passed over with the reason (binary, no topic term...), for the report. */
