@@ -1,0 +1,147 @@
+/**
+ * The shapes of a rule pack after loading: sources resolved from ids to entries, values converted to
+ * the canonical unit of their dimension, defaults filled in. Plain data only. The YAML format these
+ * come from is described by schemas/rulepack.schema.json and docs/rule-packs.md.
+ */
+import type { Dimension, Level, Source } from '../types.js';
+
+/** A subject term: its words are matched case-insensitively on word boundaries. */
+export interface Term {
+  /** e.g. `co2` */
+  id: string;
+  /** e.g. `['CO2', 'CO₂', 'carbon dioxide']` */
+  words: string[];
+}
+
+/** Which sentences a reference value speaks about, in term ids. */
+export interface TermBinding {
+  /** Every group must be satisfied; a group is satisfied when any one of its term ids appears. */
+  all: string[][];
+  /** Term ids that veto the binding when any of them appears. */
+  none: string[];
+}
+
+/**
+ * Relative distance outside the reference range at which each level starts. Distance is
+ * `gap / width` where gap is how far the claim's interval lies from the reference interval and
+ * width is `max(high - low, |central or midpoint| * 0.01)`. `{ warning: 0, error: 0.25 }`: any
+ * disjoint claim is a warning; one a quarter of the range's width (or more) away is an error.
+ * A level left out never applies; the highest level whose threshold is reached wins.
+ */
+export type LevelSteps = Partial<Record<Level, number>>;
+
+/** A sourced, accepted range for one measurable thing. */
+export interface ReferenceValue {
+  id: string;
+  /** What is measured, in words, e.g. "time span of the EPICA Dome C ice-core record". */
+  measures: string;
+  /** The dimension the range is stated in. */
+  dimension: Dimension;
+  /** What a claim's quantity may be to bind (e.g. a record span may be stated as duration or age). */
+  dimensions: Dimension[];
+  /** Bounds in the canonical unit of `dimension`. */
+  low: number;
+  high: number;
+  central?: number;
+  /** Canonical unit of `dimension` (see DIMENSIONS in src/types.ts). */
+  unit: string;
+  binding: TermBinding;
+  /** How a correction states the value, e.g. "about 800,000 years". */
+  wording: string;
+  /** ISO date, for values that change with time (e.g. today's CO2). */
+  asOf?: string;
+  levels: LevelSteps;
+  sources: Source[];
+  notes?: string;
+}
+
+/** A sourced statement of which way an effect goes. */
+export interface DirectionFact {
+  id: string;
+  statement: string;
+  /**
+   * Phrasings of the wrong direction to catch, as JavaScript regular expressions (source text,
+   * compiled by the loader with the `iu` flags; each is checked for validity and length on load).
+   */
+  wrong: string[];
+  /** Phrasings of the right direction (same syntax), used to avoid flagging a correct sentence. */
+  right?: string[];
+  level: Level;
+  sources: Source[];
+}
+
+/** Settings of one reasoning check (a detector written in code, tuned by the pack). */
+export interface ReasoningCheck {
+  /** Rule id, e.g. `logic.lag-rules-out-cause`. */
+  id: string;
+  level: Level;
+  summary: string;
+  reason: string;
+  suggestion: string;
+  sources: Source[];
+  /** Cue word lists the detector reads, e.g. `lag: [lag, lagged, after, followed]`. */
+  words: Record<string, string[]>;
+  enabled: boolean;
+}
+
+/** A team's own rule: a phrase to catch, in compromise match syntax or as a regular expression. */
+export interface PatternRule {
+  /** Rule id, e.g. `house.no-ppmv`. */
+  id: string;
+  level: Level;
+  reason: string;
+  suggestion?: string;
+  /** compromise match syntax, e.g. `carbon dioxide (lagged|trailed)`. */
+  match?: string;
+  /** JavaScript regular expression source, compiled with the `iu` flags. */
+  regex?: string;
+  sources: Source[];
+}
+
+/** One loaded pack file. */
+export interface RulePack {
+  id: string;
+  version: string;
+  /** ISO date the pack's values were last reviewed. */
+  asOf: string;
+  /** The file it was loaded from (absolute path). */
+  file: string;
+  sources: Source[];
+  terms: Term[];
+  references: ReferenceValue[];
+  directions: DirectionFact[];
+  reasoning: ReasoningCheck[];
+  patterns: PatternRule[];
+}
+
+/** All packs of a run merged (built-in first, then extra packs in order). Ids are unique across packs. */
+export interface LoadedPacks {
+  packs: RulePack[];
+  references: ReferenceValue[];
+  terms: Term[];
+  directions: DirectionFact[];
+  reasoning: ReasoningCheck[];
+  patterns: PatternRule[];
+  sources: Source[];
+  /** Every term word, lower-case, for the file and sentence prefilter. */
+  topicWords: string[];
+  reference(id: string): ReferenceValue | undefined;
+  term(id: string): Term | undefined;
+}
+
+/** Project settings from `firnline.yaml`; paths are resolved relative to the settings file. */
+export interface Settings {
+  /** Absolute path of the settings file. */
+  file: string;
+  /** Glob patterns (gitignore syntax) of drafts to check. */
+  include: string[];
+  /** Glob patterns (gitignore syntax) to leave out. */
+  exclude: string[];
+  /** Extra rule packs (absolute paths). */
+  packs: string[];
+  /** Level overrides per rule id; `off` turns a rule off. */
+  levels: Record<string, Level | 'off'>;
+  failOn?: Level | 'never';
+  /** Sign-off ledger (absolute path). */
+  ledger?: string;
+}
