@@ -1,0 +1,74 @@
+import { Command, Option } from 'commander';
+import { resolve } from 'node:path';
+import { checkPaths } from '../../engine.js';
+import { renderReport, REPORT_FORMATS } from '../../report/index.js';
+import { LEVELS, type Level } from '../../types.js';
+import { VERSION } from '../../version.js';
+import type { CliContext } from '../context.js';
+import { applyGate } from '../gate.js';
+import { loadRunSettings } from '../run-settings.js';
+import { writeFileAtomic } from '../write-file-atomic.js';
+import { exitCodeFor } from '../exit-code.js';
+
+interface CheckFlags {
+  format: string;
+  failOn?: Level | 'never';
+  config?: string;
+  pack: string[];
+  output?: string;
+  requireSignoff?: boolean;
+  changedSince?: string;
+}
+
+/** `firnline check [paths...]`: scan drafts, print flags, set the exit status. */
+export function registerCheck(program: Command, ctx: CliContext): void {
+  program
+    .command('check')
+    .description('scan drafts (files, folders, or - for standard input) and report flags')
+    .argument('[paths...]', 'drafts or folders of drafts (.md, .markdown, .txt)', [])
+    .addOption(new Option('--format <name>', 'output format').choices([...REPORT_FORMATS]).default('text'))
+    .addOption(new Option('--fail-on <level>', 'lowest level that makes the exit status 1 (default: error)').choices([...LEVELS, 'never']))
+    .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
+    .option('--pack <file>', 'add a rule pack (repeatable)', collect, [])
+    .option('-o, --output <file>', 'write the report to a file instead of standard output')
+    .option('--require-signoff', 'exit 1 while any claim lacks a current sign-off in the ledger')
+    .option('--changed-since <rev>', 'check only claims on lines changed since a git revision')
+    .action(async (paths: string[], flags: CheckFlags) => {
+      const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
+      const failOn = flags.failOn ?? run.failOn;
+      const targets = paths.length > 0 ? paths : ['.'];
+      const result = await checkPaths(targets, {
+        cwd: ctx.cwd,
+        packs: run.packs,
+        include: run.include,
+        exclude: run.exclude,
+        levels: run.levels,
+        readStdin: ctx.readStdin,
+      });
+      const gate = await applyGate(result, {
+        requireSignoff: flags.requireSignoff === true,
+        ...(flags.changedSince === undefined ? {} : { changedSince: flags.changedSince }),
+        ledgerFile: run.ledger,
+        cwd: ctx.cwd,
+      });
+      const color = flags.output === undefined && ctx.isTTY && !('NO_COLOR' in ctx.env && ctx.env.NO_COLOR !== '');
+      const report = renderReport(flags.format as (typeof REPORT_FORMATS)[number], gate.result, {
+        color,
+        toolVersion: VERSION,
+        failOn,
+      });
+      const summary = gate.summary.length > 0 ? `${gate.summary.join('\n')}\n` : '';
+      if (flags.output === undefined) {
+        ctx.stdout(report.endsWith('\n') ? report : `${report}\n`);
+        if (summary !== '') (flags.format === 'text' ? ctx.stdout : ctx.stderr)(summary);
+      } else {
+        await writeFileAtomic(resolve(ctx.cwd, flags.output), report.endsWith('\n') ? report : `${report}\n`);
+        ctx.stderr(summary);
+      }
+      ctx.exitCode = Math.max(exitCodeFor(gate.failingFlags, failOn), gate.failed ? 1 : 0);
+    });
+}
+
+function collect(value: string, previous: string[]): string[] {
+  return [...previous, value];
+}

@@ -1,0 +1,199 @@
+import { bindQuantities } from './claims/bind.js';
+import { checkArithmetic } from './checks/arithmetic.js';
+import { checkReasoning } from './checks/reasoning/index.js';
+import { checkReferences } from './checks/reference.js';
+import { checkUnits } from './checks/units.js';
+import { FirnlineError } from './errors.js';
+import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
+import { parseQuantities } from './quantities/index.js';
+import { claimIdOf, foldClaimText } from './review/claim-id.js';
+import { describeRule, loadPacks } from './rulepack/index.js';
+import type { LoadedPacks } from './rulepack/types.js';
+import { createLineIndex, draftFromText, findDrafts, readDraft } from './source/index.js';
+import type { CheckResult, Claim, Draft, Flag, FlagDraft, Level, RuleInfo, Sentence, Verdict } from './types.js';
+
+/** How a run is set up. Only `cwd` is required; packs default to the built-in pack. */
+export interface CheckOptions {
+  cwd: string;
+  /** Packs already loaded (the CLI loads them once); otherwise loaded from `packFiles` + built-in. */
+  packs?: LoadedPacks;
+  packFiles?: string[];
+  include?: string[];
+  exclude?: string[];
+  /** Per rule id: a new level, or `off` to drop the rule's flags. */
+  levels?: Record<string, Level | 'off'>;
+  /** Reads standard input for the path `-`. */
+  readStdin?: () => Promise<string>;
+}
+
+/** The part of a run that concerns one draft. */
+export interface DraftResult {
+  claims: Claim[];
+  flags: Flag[];
+}
+
+/** Checks files and folders (folders recurse over drafts); `-` reads standard input as Markdown. */
+export async function checkPaths(paths: string[], options: CheckOptions): Promise<CheckResult> {
+  const packs = options.packs ?? (await loadPacks(options.packFiles ?? []));
+  const topic = createTopicMatcher(packs.topicWords);
+  const fromDisk = paths.filter((p) => p !== '-');
+  const { files } =
+    fromDisk.length > 0 ? await findDrafts(fromDisk, options.cwd, pickDefined(options)) : { files: [] as string[] };
+  const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
+
+  if (paths.includes('-')) {
+    if (options.readStdin === undefined) throw new FirnlineError('stdin-unavailable', 'standard input cannot be read here');
+    addDraft(result, draftFromText('-', await options.readStdin(), 'markdown'), packs, topic, options.levels);
+  }
+  for (const file of files) {
+    const draft = await readDraft(file, options.cwd);
+    if ('skipped' in draft) result.skipped.push({ file, reason: draft.skipped });
+    else addDraft(result, draft, packs, topic, options.levels);
+  }
+  result.rules = describeFlaggedRules(result.flags, packs);
+  return result;
+}
+
+/** Checks one text in memory: the library entry point (`import { checkText } from 'firnline'`). */
+export async function checkText(
+  text: string,
+  options: { path?: string; format?: 'markdown' | 'text'; packs?: LoadedPacks; levels?: Record<string, Level | 'off'> } = {},
+): Promise<CheckResult> {
+  const packs = options.packs ?? (await loadPacks([]));
+  const draft = draftFromText(options.path ?? '-', text, options.format ?? 'markdown');
+  const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
+  addDraft(result, draft, packs, createTopicMatcher(packs.topicWords), options.levels);
+  result.rules = describeFlaggedRules(result.flags, packs);
+  return result;
+}
+
+function addDraft(
+  result: CheckResult,
+  draft: Draft,
+  packs: LoadedPacks,
+  topic: TopicMatcher,
+  levels: Record<string, Level | 'off'> | undefined,
+): void {
+  result.files.push(draft.path);
+  if (!topic.test(draft.text)) {
+    result.skipped.push({ file: draft.path, reason: 'no topic term' });
+    return;
+  }
+  const { claims, flags } = checkDraft(draft, packs, topic, levels);
+  result.claims.push(...claims);
+  result.flags.push(...flags);
+}
+
+/**
+ * Runs every stage on one draft: sentences per block, the topic prefilter, quantities, bindings,
+ * then the checks; flag offsets are mapped back to the original file at the very end.
+ */
+export function checkDraft(
+  draft: Draft,
+  packs: LoadedPacks,
+  topic: TopicMatcher = createTopicMatcher(packs.topicWords),
+  levels: Record<string, Level | 'off'> = {},
+): DraftResult {
+  const lines = createLineIndex(draft.text);
+  const claims: Claim[] = [];
+  const seen = new Map<string, number>();
+  draft.blocks.forEach((block, blockIndex) => {
+    const sentences = splitSentences(block.text, blockIndex);
+    const paragraph = sentences.map((s) => s.text);
+    sentences.forEach((sentence, index) => {
+      if (!topic.test(sentence.text)) return;
+      const quantities = parseQuantities(sentence.text);
+      const { bindings } = bindQuantities(sentence.text, quantities, packs);
+      const reference = checkReferences(sentence.text, quantities, bindings, packs);
+      const drafts: FlagDraft[] = [
+        ...reference.flags,
+        ...checkArithmetic(sentence.text, quantities),
+        ...checkUnits(sentence.text, quantities),
+        ...checkReasoning(paragraph, index, packs),
+      ];
+      const measured = quantities.some((q) => q.dimension !== 'number');
+      if (!measured && bindings.length === 0 && drafts.length === 0) return;
+
+      const folded = foldClaimText(sentence.text);
+      const occurrence = (seen.get(folded) ?? 0) + 1;
+      seen.set(folded, occurrence);
+      const id = claimIdOf(draft.path, sentence.text, occurrence);
+      const toSpan = (start: number, end: number) => mapSpan(block.offsets, sentence, start, end, lines);
+      const flags = applyLevels(drafts, levels).map((d) => resolveFlag(d, draft, sentence, id, toSpan));
+      claims.push({
+        id,
+        file: draft.path,
+        span: toSpan(0, sentence.text.length),
+        text: sentence.text,
+        heading: block.heading,
+        quantities,
+        bindings,
+        verdict: verdictOf(reference.verdicts),
+        flags,
+      });
+    });
+  });
+  return { claims, flags: claims.flatMap((c) => c.flags) };
+}
+
+function verdictOf(verdicts: Verdict[]): Verdict {
+  if (verdicts.includes('conflicts')) return 'conflicts';
+  if (verdicts.includes('agrees')) return 'agrees';
+  return 'no reference';
+}
+
+function applyLevels(drafts: FlagDraft[], levels: Record<string, Level | 'off'>): FlagDraft[] {
+  const kept: FlagDraft[] = [];
+  for (const d of drafts) {
+    const level = levels[d.ruleId];
+    if (level === 'off') continue;
+    kept.push(level === undefined ? d : { ...d, level });
+  }
+  return kept;
+}
+
+function resolveFlag(
+  d: FlagDraft,
+  draft: Draft,
+  sentence: Sentence,
+  claimId: string,
+  toSpan: (start: number, end: number) => Flag['span'],
+): Flag {
+  const { start, end, ...rest } = d;
+  return { ...rest, file: draft.path, span: toSpan(start, end), excerpt: sentence.text.slice(start, end), sentence: sentence.text, claimId };
+}
+
+/** Maps [start, end) in a sentence to the original file through the block's offset table. */
+function mapSpan(
+  offsets: number[],
+  sentence: Sentence,
+  start: number,
+  end: number,
+  lines: ReturnType<typeof createLineIndex>,
+): Flag['span'] {
+  const from = offsets[sentence.start + start] ?? offsets[offsets.length - 1] ?? 0;
+  const last = end > start ? offsets[sentence.start + end - 1] : undefined;
+  const to = last === undefined ? from : last + 1;
+  return lines.toSpan(from, to);
+}
+
+function describeFlaggedRules(flags: Flag[], packs: LoadedPacks): RuleInfo[] {
+  const rules = new Map<string, RuleInfo>();
+  for (const flag of flags) {
+    if (rules.has(flag.ruleId)) continue;
+    rules.set(flag.ruleId, describeRule(packs, flag.ruleId) ?? describeFromFlag(flag));
+  }
+  return [...rules.values()].sort((a, b) => a.id.localeCompare(b.id));
+}
+
+/** Rules that live in code (arith.*, unit.*) describe themselves through their first flag. */
+function describeFromFlag(flag: Flag): RuleInfo {
+  return { id: flag.ruleId, summary: flag.reason, description: flag.reason, defaultLevel: flag.level, sources: flag.sources };
+}
+
+function pickDefined(options: CheckOptions): { include?: string[]; exclude?: string[] } {
+  const picked: { include?: string[]; exclude?: string[] } = {};
+  if (options.include !== undefined) picked.include = options.include;
+  if (options.exclude !== undefined) picked.exclude = options.exclude;
+  return picked;
+}

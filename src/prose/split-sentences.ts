@@ -1,0 +1,67 @@
+import type { Sentence } from '../types.js';
+
+/** Abbreviations whose full stop does not end a sentence (lower-case, without the final dot). */
+const ABBREVIATIONS = new Set([
+  'c', 'ca', 'cf', 'e.g', 'i.e', 'al', 'approx', 'fig', 'figs', 'dr', 'prof', 'mr', 'mrs', 'ms', 'st',
+  'no', 'vol', 'pp', 'p', 'ed', 'eds', 'etc', 'vs', 'jan', 'feb', 'mar', 'apr', 'jun', 'jul', 'aug',
+  'sep', 'sept', 'oct', 'nov', 'dec', 'yr', 'yrs', 'kyr', 'approx', 'est', 'resp', 'incl',
+]);
+
+/** Sentence-final punctuation, then closing quotes or brackets, then white space. */
+const BOUNDARY = /([.!?…]+)(["'”’)\]]*)(\s+)/gu;
+
+/**
+ * Splits one prose block into sentences with their offsets in the block. A full stop ends a sentence
+ * unless it closes a known abbreviation ("c. 800 years", "Petit et al. 1999") or an initial, or the
+ * next word starts in lower case. A blank line always ends a sentence.
+ *
+ *   splitSentences('Vostok spans c. 420,000 years. EPICA is longer.', 0)
+ *   → ['Vostok spans c. 420,000 years.', 'EPICA is longer.']
+ */
+export function splitSentences(text: string, blockIndex: number): Sentence[] {
+  const sentences: Sentence[] = [];
+  let chunkStart = 0;
+  for (const gap of text.matchAll(BLANK_LINE)) {
+    splitChunk(sentences, text, blockIndex, chunkStart, gap.index);
+    chunkStart = gap.index + gap[0].length;
+  }
+  splitChunk(sentences, text, blockIndex, chunkStart, text.length);
+  return sentences;
+}
+
+const BLANK_LINE = /\n[ \t]*\n/gu;
+
+function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, from: number, to: number): void {
+  const text = whole.slice(0, to);
+  let start = skipSpace(text, from);
+  BOUNDARY.lastIndex = from;
+  for (let match = BOUNDARY.exec(text); match !== null; match = BOUNDARY.exec(text)) {
+    const stopAt = match.index + match[1]!.length + match[2]!.length;
+    const next = match.index + match[0].length;
+    if (stopAt <= start || !endsSentence(text, match.index, match[1]!, match[3]!, next)) continue;
+    push(sentences, text, blockIndex, start, stopAt);
+    start = next;
+  }
+  push(sentences, text, blockIndex, start, text.length);
+}
+
+function endsSentence(text: string, dotAt: number, marks: string, space: string, next: number): boolean {
+  if (next >= text.length) return true;
+  if (marks !== '.') return /^[\p{Lu}\p{N}"'“‘(\[*]/u.test(text.slice(next, next + 1));
+  const word = /([\p{L}.]+)$/u.exec(text.slice(Math.max(0, dotAt - 12), dotAt))?.[1]?.toLowerCase() ?? '';
+  if (ABBREVIATIONS.has(word)) return false;
+  if (/^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1))) return false; // an initial: "J. R. Petit"
+  return /^[\p{Lu}\p{N}"'“‘(\[]/u.test(text.slice(next, next + 1));
+}
+
+function push(into: Sentence[], text: string, blockIndex: number, start: number, end: number): void {
+  let stop = end;
+  while (stop > start && /\s/u.test(text.charAt(stop - 1))) stop -= 1;
+  if (stop > start) into.push({ text: text.slice(start, stop), blockIndex, start, end: stop });
+}
+
+function skipSpace(text: string, from: number): number {
+  let at = from;
+  while (at < text.length && /\s/u.test(text.charAt(at))) at += 1;
+  return at;
+}

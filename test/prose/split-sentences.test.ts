@@ -1,0 +1,45 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { splitSentences } from '../../src/prose/index.js';
+
+const texts = (text: string) => splitSentences(text, 0).map((s) => s.text);
+
+describe('splitSentences', () => {
+  it.each([
+    ['Vostok spans about 420,000 years. EPICA Dome C reaches 800,000 years.', ['Vostok spans about 420,000 years.', 'EPICA Dome C reaches 800,000 years.']],
+    // Abbreviations common in science writing do not end a sentence (common practice).
+    ['CO2 lagged by c. 800 years in that study. Later work found less.', ['CO2 lagged by c. 800 years in that study.', 'Later work found less.']],
+    ['Petit et al. 1999 describe four cycles. That is the Vostok record.', ['Petit et al. 1999 describe four cycles.', 'That is the Vostok record.']],
+    ['The rise was 2.4 ppm per year. It was 0.013 ppm per year before.', ['The rise was 2.4 ppm per year.', 'It was 0.013 ppm per year before.']],
+    ['Was it CO2? Yes! It was.', ['Was it CO2?', 'Yes!', 'It was.']],
+    ['He said "CO2 lagged." Then he stopped.', ['He said "CO2 lagged."', 'Then he stopped.']],
+    ['J. R. Petit led the study. It was published in 1999.', ['J. R. Petit led the study.', 'It was published in 1999.']],
+    ['First line\n\nSecond paragraph text', ['First line', 'Second paragraph text']],
+    ['No full stop at the end', ['No full stop at the end']],
+    ['  Leading space. ', ['Leading space.']],
+  ])('%j', (input, expected) => {
+    expect(texts(input)).toEqual(expected);
+  });
+
+  it('keeps offsets that slice back to the sentence text', () => {
+    const text = 'One core. Two cores (EDC). Three!';
+    for (const s of splitSentences(text, 3)) {
+      expect(text.slice(s.start, s.end)).toBe(s.text);
+      expect(s.blockIndex).toBe(3);
+    }
+  });
+
+  it('never throws, and every sentence is a non-empty slice of its block (property)', () => {
+    fc.assert(
+      fc.property(fc.string({ unit: 'grapheme', maxLength: 300 }), (text) => {
+        let last = 0;
+        for (const s of splitSentences(text, 0)) {
+          expect(s.text.length).toBeGreaterThan(0);
+          expect(text.slice(s.start, s.end)).toBe(s.text);
+          expect(s.start).toBeGreaterThanOrEqual(last);
+          last = s.end;
+        }
+      }),
+    );
+  });
+});
