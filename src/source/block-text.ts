@@ -1,0 +1,114 @@
+import type { BlockKind, ProseBlock } from '../types.js';
+import { decodeReference, matchReference } from './character-reference.js';
+
+/**
+ * A prose block being assembled: its text, one UTF-16 unit at a time, each with the UTF-16 index
+ * in the original file it came from. `end` is the original index just past what was consumed last.
+ */
+export interface BlockText {
+  units: string[];
+  offsets: number[];
+  end: number;
+}
+
+/** An empty block under construction. */
+export function startBlockText(): BlockText {
+  return { units: [], offsets: [], end: 0 };
+}
+
+/** One value character (or decoded reference) found in the source. */
+interface Step {
+  text: string;
+  at: number;
+  next: number;
+  consumed: number;
+}
+
+/**
+ * Appends a parser's decoded text `value` whose source is `original[from..to)`, finding each value
+ * character in the source. The source may hold more than the value (indentation, `>` markers,
+ * trailing spaces), or spell a character differently: a backslash escape (`\*` → `*`, mapped to
+ * the `*`), a character reference (`&amp;` → `&`, mapped to the `&`), or a `\r\n` / `\r` line end
+ * (→ one `\n`, mapped to its first unit). A value character not found keeps the last position, so
+ * offsets never run backwards and odd input never throws.
+ */
+export function appendValue(block: BlockText, value: string, original: string, from: number, to: number): void {
+  let j = from;
+  let i = 0;
+  while (i < value.length) {
+    let step: Step | undefined;
+    for (let k = j; k < to && step === undefined; k += 1) {
+      step = matchAt(original, k, value, i);
+      if (step === undefined && isEscape(original, k)) k += 1; // an escape of another character
+    }
+    if (step === undefined) {
+      const unit = value[i] ?? '';
+      step = { text: isLineEnd(unit) ? '\n' : unit, at: Math.max(from, Math.min(j, to - 1)), next: j, consumed: lineEndWidth(value, i) };
+    }
+    for (let u = 0; u < step.text.length; u += 1) push(block, step.text[u] ?? '', step.at);
+    j = step.next;
+    i += step.consumed;
+  }
+  block.end = Math.max(block.end, j);
+}
+
+function matchAt(original: string, k: number, value: string, i: number): Step | undefined {
+  const unit = value[i];
+  const source = original[k];
+  if (unit === undefined) return undefined;
+  if (isEscape(original, k)) {
+    return original[k + 1] === unit ? { text: unit, at: k + 1, next: k + 2, consumed: 1 } : undefined;
+  }
+  const reference = source === '&' ? matchReference(original, k) : undefined;
+  if (reference !== undefined) {
+    const decoded = decodeReference(reference);
+    if (decoded !== reference && value.startsWith(decoded, i)) {
+      return { text: decoded, at: k, next: k + reference.length, consumed: decoded.length };
+    }
+  }
+  if (isLineEnd(unit) && source !== undefined && isLineEnd(source)) {
+    return { text: '\n', at: k, next: k + lineEndWidth(original, k), consumed: lineEndWidth(value, i) };
+  }
+  return source === unit ? { text: unit, at: k, next: k + 1, consumed: 1 } : undefined;
+}
+
+const ASCII_PUNCTUATION = new Set('!"#$%&\'()*+,-./:;<=>?@[\\]^_`{|}~');
+
+/** A CommonMark backslash escape starts at `k`: a backslash before ASCII punctuation. */
+function isEscape(original: string, k: number): boolean {
+  return original[k] === '\\' && ASCII_PUNCTUATION.has(original[k + 1] ?? '');
+}
+
+function isLineEnd(unit: string): boolean {
+  return unit === '\r' || unit === '\n';
+}
+
+/** 2 for a `\r\n` at `k`, else 1. */
+function lineEndWidth(text: string, k: number): number {
+  return text[k] === '\r' && text[k + 1] === '\n' ? 2 : 1;
+}
+
+/** Appends one space for a removed inline element (code, HTML, image...), so words do not merge. */
+export function appendGap(block: BlockText, start: number, end: number): void {
+  push(block, ' ', start);
+  block.end = Math.max(block.end, end);
+}
+
+/** The finished block, trimmed of surrounding whitespace; undefined when nothing but whitespace. */
+export function finishBlock(block: BlockText, kind: BlockKind, heading: string): ProseBlock | undefined {
+  const text = block.units.join('');
+  const first = text.search(/\S/u);
+  if (first < 0) return undefined;
+  const last = text.length - (/\s*$/u.exec(text)?.[0].length ?? 0);
+  // Just past the block: where trimmed whitespace began, or just past the last thing consumed.
+  const lastOffset = block.offsets[last - 1] ?? 0;
+  const final = last < text.length ? (block.offsets[last] ?? lastOffset + 1) : Math.max(block.end, lastOffset + 1);
+  const offsets = block.offsets.slice(first, last);
+  offsets.push(final);
+  return { kind, text: text.slice(first, last), offsets, heading };
+}
+
+function push(block: BlockText, unit: string, at: number): void {
+  block.units.push(unit);
+  block.offsets.push(at);
+}

@@ -1,0 +1,53 @@
+import { readFile } from 'node:fs/promises';
+import { resolve } from 'node:path';
+import { FirnlineError } from '../errors.js';
+import type { Draft } from '../types.js';
+import { readMarkdownBlocks } from './markdown.js';
+import { readPlainTextBlocks } from './plain-text.js';
+
+/** How many leading bytes are searched for a NUL byte, the mark of a binary file. */
+const SNIFF_BYTES = 8192;
+
+const MARKDOWN_ENDINGS = ['.md', '.markdown'];
+
+/** The format a draft is read as, from its file name: `.md`/`.markdown` is Markdown, anything else text. */
+export function draftFormat(path: string): Draft['format'] {
+  const lower = path.toLowerCase();
+  return MARKDOWN_ENDINGS.some((ending) => lower.endsWith(ending)) ? 'markdown' : 'text';
+}
+
+/** A draft from text already in memory (standard input, the library's `checkText`). */
+export function draftFromText(path: string, text: string, format: Draft['format']): Draft {
+  const blocks = format === 'markdown' ? readMarkdownBlocks(text) : readPlainTextBlocks(text);
+  return { path, text, format, blocks };
+}
+
+/**
+ * Reads one draft; `path` is kept as given (relative to `cwd`) for reports. A file with a NUL byte
+ * in its first 8 KB or that is not valid UTF-8 is passed over as `{ skipped: 'binary file' }`; a
+ * leading byte-order mark is kept in `text`. A file that cannot be read throws FirnlineError
+ * `file-unreadable` (or `path-missing` when it has gone).
+ */
+export async function readDraft(path: string, cwd: string): Promise<Draft | { skipped: string }> {
+  let bytes: Uint8Array;
+  try {
+    bytes = await readFile(resolve(cwd, path));
+  } catch (error) {
+    throw readError(error as NodeJS.ErrnoException, path);
+  }
+  if (bytes.subarray(0, SNIFF_BYTES).includes(0)) return { skipped: 'binary file' };
+  let text: string;
+  try {
+    // ignoreBOM keeps a byte-order mark in the text, so the text is the file exactly.
+    text = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true }).decode(bytes);
+  } catch {
+    return { skipped: 'binary file' };
+  }
+  return draftFromText(path, text, draftFormat(path));
+}
+
+function readError(error: NodeJS.ErrnoException, path: string): FirnlineError {
+  if (error.code === 'ENOENT') return new FirnlineError('path-missing', 'no such file or folder; check the path', { file: path });
+  const why = error.code === 'EISDIR' ? 'it is a folder' : error.code === 'EACCES' || error.code === 'EPERM' ? 'permission denied' : (error.code ?? error.message);
+  return new FirnlineError('file-unreadable', `cannot read this file (${why}); check that it is a readable file`, { file: path });
+}
