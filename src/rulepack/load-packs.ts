@@ -1,0 +1,97 @@
+/**
+ * Loading rule packs: the built-in pack, a user's pack files, and all of them merged. Every mistake
+ * in every file is collected and thrown together; nothing is returned from a half-loaded pack.
+ */
+import { resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { FirnlineError, FirnlineErrors } from '../errors.js';
+import type { Source } from '../types.js';
+import { resolvePack, type KnownIds } from './resolve-pack.js';
+import type { LoadedPacks, RulePack } from './types.js';
+import { byPlace, schemaErrors } from './validate-schema.js';
+import { readYamlFile } from './yaml-file.js';
+
+/** Where the built-in pack lives, from both src/ and dist/. */
+export const BUILTIN_PACK_FILE = fileURLToPath(new URL('../../rules/paleoclimate.yaml', import.meta.url));
+
+const NOTHING_KNOWN: KnownIds = { sources: new Map(), terms: new Set(), defined: new Map() };
+
+/**
+ * Loads one pack file; messages name the file as given. `known` holds what packs loaded before it define (a user pack may cite the
+ * built-in pack's sources and terms by id). Throws FirnlineErrors listing every mistake.
+ */
+export async function loadRulePack(file: string, known: KnownIds = NOTHING_KNOWN): Promise<RulePack> {
+  const absolute = resolve(file);
+  const yaml = await readYamlFile(absolute, file);
+  const problems = schemaErrors(yaml, 'rulepack');
+  if (problems.length > 0) throw new FirnlineErrors(problems);
+  const pack = resolvePack(yaml, absolute, known);
+  if (Array.isArray(pack)) throw new FirnlineErrors(pack.sort(byPlace));
+  return pack;
+}
+
+/** Loads the built-in pack, rules/paleoclimate.yaml. */
+export async function loadBuiltinPack(): Promise<RulePack> {
+  return loadRulePack(BUILTIN_PACK_FILE);
+}
+
+/**
+ * Loads the built-in pack (unless `builtin: false`) and the extra packs in order, and merges them.
+ * An id defined in two packs is an error, reported at the later definition.
+ */
+export async function loadPacks(extraPackFiles: string[], options: { builtin?: boolean } = {}): Promise<LoadedPacks> {
+  const packs: RulePack[] = [];
+  const errors: FirnlineError[] = [];
+  const files = [...(options.builtin === false ? [] : [BUILTIN_PACK_FILE]), ...extraPackFiles];
+  for (const file of files) {
+    try {
+      packs.push(await loadRulePack(file, knownIn(packs)));
+    } catch (error) {
+      if (error instanceof FirnlineErrors) errors.push(...error.errors);
+      else if (error instanceof FirnlineError) errors.push(error);
+      else throw error;
+    }
+  }
+  if (errors.length > 0) throw new FirnlineErrors(errors);
+  return mergePacks(packs);
+}
+
+/** Joins loaded packs into one lookup. */
+export function mergePacks(packs: RulePack[]): LoadedPacks {
+  const all = <T>(pick: (p: RulePack) => T[]): T[] => packs.flatMap(pick);
+  const references = all((p) => p.references);
+  const terms = all((p) => p.terms);
+  const byRef = new Map(references.map((r) => [r.id, r]));
+  const byTerm = new Map(terms.map((t) => [t.id, t]));
+  return {
+    packs, references, terms,
+    directions: all((p) => p.directions),
+    reasoning: all((p) => p.reasoning),
+    patterns: all((p) => p.patterns),
+    sources: all((p) => p.sources),
+    topicWords: [...new Set(terms.flatMap((t) => t.words.map((w) => w.toLowerCase())))],
+    reference: (id) => byRef.get(id),
+    term: (id) => byTerm.get(id),
+  };
+}
+
+function knownIn(packs: RulePack[]): KnownIds {
+  const defined = new Map<string, string>();
+  for (const pack of packs) {
+    for (const [section, pick] of SECTIONS) for (const item of pick(pack)) defined.set(`${section}:${item.id}`, pack.id);
+  }
+  return {
+    sources: new Map<string, Source>(packs.flatMap((p) => p.sources.map((s) => [s.id, s] as const))),
+    terms: new Set(packs.flatMap((p) => p.terms.map((t) => t.id))),
+    defined,
+  };
+}
+
+const SECTIONS = [
+  ['sources', (p: RulePack) => p.sources],
+  ['terms', (p: RulePack) => p.terms],
+  ['reference_values', (p: RulePack) => p.references],
+  ['direction_facts', (p: RulePack) => p.directions],
+  ['patterns', (p: RulePack) => p.patterns],
+  ['reasoning_checks', (p: RulePack) => p.reasoning],
+] as const;

@@ -1,0 +1,78 @@
+/**
+ * The rule pack as written in YAML, after schema validation (schemas/rulepack.schema.json).
+ * These types mirror the schema; test/rulepack/schema-types.test.ts checks that they stay in step.
+ */
+import type { Dimension, Level } from '../types.js';
+
+/** A source entry as written. */
+export interface RawSource {
+  id: string;
+  cite: string;
+  doi?: string;
+  url?: string;
+  how: string;
+}
+
+/** A reference value as written: bounds in `unit`, sources as ids. */
+export interface RawReferenceValue {
+  id: string;
+  measures: string;
+  low: number;
+  high: number;
+  central?: number;
+  unit: string;
+  also_as?: Dimension[];
+  binds_when: { all: string[][]; none?: string[] };
+  correction: string;
+  levels?: Partial<Record<Level, number>>;
+  as_of?: string;
+  sources: string[];
+  notes?: string;
+}
+
+/** A direction fact as written. */
+export interface RawDirectionFact {
+  id: string;
+  statement: string;
+  wrong: string[];
+  right?: string[];
+  level?: Level;
+  sources: string[];
+}
+
+/** A pattern rule as written. */
+export interface RawPattern {
+  id: string;
+  level?: Level;
+  reason: string;
+  suggestion?: string;
+  match?: string;
+  regex?: string;
+  sources?: string[];
+}
+
+/** Reasoning-check settings as written. */
+export interface RawReasoningCheck {
+  id: string;
+  level?: Level;
+  enabled?: boolean;
+  summary: string;
+  reason: string;
+  suggestion: string;
+  cue_words?: Record<string, string[]>;
+  sources: string[];
+}
+
+/** A whole pack as written. */
+export interface RawPack {
+  pack: string;
+  version: string;
+  as_of: string;
+  description?: string;
+  sources?: RawSource[];
+  terms?: { id: string; words: string[] }[];
+  reference_values?: RawReferenceValue[];
+  direction_facts?: RawDirectionFact[];
+  patterns?: RawPattern[];
+  reasoning_checks?: RawReasoningCheck[];
+}

@@ -1,0 +1,112 @@
+/**
+ * Turns a schema-valid pack into its loaded shape: source ids resolved, values converted to
+ * canonical units, defaults filled. Collects every mistake the schema cannot see (unknown source
+ * or term id, unknown unit, low > high, an invalid regular expression, duplicate ids) so that the
+ * user fixes them all in one pass; a pack with any mistake is never returned.
+ */
+import type { FirnlineError } from '../errors.js';
+import type { Source } from '../types.js';
+import type { RawPack } from './raw-pack.js';
+import { resolveReference } from './resolve-reference.js';
+import type { DirectionFact, PatternRule, ReasoningCheck, RulePack, Term } from './types.js';
+import type { YamlFile } from './yaml-file.js';
+import { regexProblem } from './regex-problem.js';
+
+/** What earlier packs already define, so a user pack may cite their sources and terms. */
+export interface KnownIds {
+  sources: ReadonlyMap<string, Source>;
+  terms: ReadonlySet<string>;
+  /** `section:id` of everything earlier packs define, to the id of the pack that defines it. */
+  defined: ReadonlyMap<string, string>;
+}
+
+/** A resolver's view of one pack: its YAML (for positions) and a place to put errors. */
+export interface PackScope {
+  yaml: YamlFile;
+  errors: FirnlineError[];
+  sources: ReadonlyMap<string, Source>;
+  terms: ReadonlySet<string>;
+  /** Looks up source ids written at `path`; unknown ids are reported and left out. */
+  sourcesAt(ids: readonly string[], path: (string | number)[]): Source[];
+}
+
+/** The loaded pack, or the list of its mistakes. */
+export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): RulePack | FirnlineError[] {
+  const raw = yaml.data as RawPack;
+  const errors: FirnlineError[] = [];
+  const own = (raw.sources ?? []).map(({ id, cite, doi, url, how }) => ({
+    id, cite, how, ...(doi === undefined ? {} : { doi }), ...(url === undefined ? {} : { url }),
+  }));
+  const sources = new Map(known.sources);
+  for (const s of own) sources.set(s.id, s);
+  const terms = new Set([...known.terms, ...(raw.terms ?? []).map((t) => t.id)]);
+  const scope: PackScope = {
+    yaml, errors, sources, terms,
+    sourcesAt: (ids, path) => ids.flatMap((id, i) => {
+      const source = sources.get(id);
+      if (source === undefined) errors.push(yaml.errorAt('pack-unknown-source', [...path, i], `unknown source id \`${id}\`; add it under \`sources\``));
+      return source === undefined ? [] : [source];
+    }),
+  };
+  const sections = ['sources', 'terms', 'reference_values', 'direction_facts', 'patterns', 'reasoning_checks'] as const;
+  for (const section of sections) reportDuplicates(scope, section, (raw[section] ?? []).map((x) => x.id), known.defined);
+
+  const termList: Term[] = (raw.terms ?? []).map((t) => ({ id: t.id, words: t.words }));
+  const references = (raw.reference_values ?? []).flatMap((r, i) => resolveReference(scope, r, ['reference_values', i]) ?? []);
+  const directions: DirectionFact[] = (raw.direction_facts ?? []).map((d, i) => {
+    const path = ['direction_facts', i];
+    checkRegexes(scope, d.wrong, [...path, 'wrong']);
+    checkRegexes(scope, d.right ?? [], [...path, 'right']);
+    return {
+      id: d.id, statement: d.statement, wrong: d.wrong, level: d.level ?? 'warning',
+      sources: scope.sourcesAt(d.sources, [...path, 'sources']),
+      ...(d.right === undefined ? {} : { right: d.right }),
+    };
+  });
+  const patterns: PatternRule[] = (raw.patterns ?? []).map((p, i) => {
+    const path = ['patterns', i];
+    if (p.match === undefined && p.regex === undefined) errors.push(yaml.errorAt('pack-schema', path, 'a pattern needs `match` or `regex`'));
+    if (p.regex !== undefined) checkRegexes(scope, [p.regex], [...path, 'regex'], true);
+    return {
+      id: p.id, level: p.level ?? 'warning', reason: p.reason,
+      sources: scope.sourcesAt(p.sources ?? [], [...path, 'sources']),
+      ...(p.suggestion === undefined ? {} : { suggestion: p.suggestion }),
+      ...(p.match === undefined ? {} : { match: p.match }),
+      ...(p.regex === undefined ? {} : { regex: p.regex }),
+    };
+  });
+  const reasoning: ReasoningCheck[] = (raw.reasoning_checks ?? []).map((c, i) => ({
+    id: c.id, level: c.level ?? 'warning', summary: c.summary, reason: c.reason, suggestion: c.suggestion,
+    sources: scope.sourcesAt(c.sources, ['reasoning_checks', i, 'sources']),
+    words: c.cue_words ?? {}, enabled: c.enabled ?? true,
+  }));
+  if (errors.length > 0) return errors;
+  return {
+    id: raw.pack, version: raw.version, asOf: raw.as_of, file,
+    sources: own, terms: termList, references, directions, reasoning, patterns,
+  };
+}
+
+function reportDuplicates(scope: PackScope, section: string, ids: string[], defined: ReadonlyMap<string, string>): void {
+  const first = new Map<string, number>();
+  ids.forEach((id, i) => {
+    const otherPack = defined.get(`${section}:${id}`);
+    if (otherPack !== undefined) {
+      scope.errors.push(scope.yaml.errorAt('pack-duplicate-id', [section, i, 'id'], `id \`${id}\` is already defined in pack \`${otherPack}\`; ids must be unique across packs`));
+      return;
+    }
+    const earlier = first.get(id);
+    if (earlier === undefined) first.set(id, i);
+    else {
+      const at = scope.yaml.locate([section, earlier, 'id']);
+      scope.errors.push(scope.yaml.errorAt('pack-duplicate-id', [section, i, 'id'], `duplicate id \`${id}\` (first defined at line ${at.line}); ids must be unique`));
+    }
+  });
+}
+
+function checkRegexes(scope: PackScope, sources: string[], path: (string | number)[], single = false): void {
+  sources.forEach((source, i) => {
+    const problem = regexProblem(source);
+    if (problem !== undefined) scope.errors.push(scope.yaml.errorAt('pack-regex', single ? path : [...path, i], problem));
+  });
+}

@@ -1,0 +1,87 @@
+/**
+ * Project settings: `firnline.yaml` in a docs repository, found by walking up from the working
+ * folder, validated against schemas/settings.schema.json, with paths resolved against the file.
+ */
+import { existsSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
+import { FirnlineErrors } from '../errors.js';
+import type { Level } from '../types.js';
+import type { Settings } from './types.js';
+import { schemaErrors } from './validate-schema.js';
+import { readYamlFile } from './yaml-file.js';
+
+/** The settings file's name. */
+export const SETTINGS_FILE = 'firnline.yaml';
+
+/** The nearest `firnline.yaml` in `cwd` or a folder above it, or undefined when there is none. */
+export function findSettingsFile(cwd: string): string | undefined {
+  let folder = resolve(cwd);
+  for (;;) {
+    const candidate = join(folder, SETTINGS_FILE);
+    if (existsSync(candidate)) return candidate;
+    const parent = dirname(folder);
+    if (parent === folder) return undefined;
+    folder = parent;
+  }
+}
+
+interface RawSettings {
+  include?: string[];
+  exclude?: string[];
+  packs?: string[];
+  levels?: Record<string, Level | 'off'>;
+  fail_on?: Level | 'never';
+  ledger?: string;
+}
+
+/** Reads and checks a settings file; every mistake is thrown together as FirnlineErrors. */
+export async function loadSettings(file: string): Promise<Settings> {
+  const yaml = await readYamlFile(resolve(file), file);
+  const problems = schemaErrors(yaml, 'settings');
+  if (problems.length > 0) throw new FirnlineErrors(problems);
+  const raw = (yaml.data ?? {}) as RawSettings;
+  const folder = dirname(resolve(file));
+  return {
+    file: resolve(file),
+    include: raw.include ?? [],
+    exclude: raw.exclude ?? [],
+    packs: (raw.packs ?? []).map((p) => resolve(folder, p)),
+    levels: raw.levels ?? {},
+    ...(raw.fail_on === undefined ? {} : { failOn: raw.fail_on }),
+    ...(raw.ledger === undefined ? {} : { ledger: resolve(folder, raw.ledger) }),
+  };
+}
+
+/** The commented starter file `firnline init` writes; every line of it is valid settings. */
+export function starterSettings(): string {
+  return `# Firnline settings for this docs repository.
+# Firnline finds this file by walking up from the folder it runs in; --config names another one.
+# Paths below are relative to this file. Schema: schemas/settings.schema.json in the firnline package.
+
+# Drafts to check (gitignore-style patterns). Empty: every Markdown and text file.
+include:
+  - "**/*.md"
+  - "**/*.txt"
+
+# Files and folders to leave out.
+exclude:
+  - node_modules/
+  - "drafts/archive/"
+
+# Extra rule packs: your own reference values, terms and house rules (see docs/rule-packs.md).
+# The built-in pack rules/paleoclimate.yaml is always loaded; ids must not repeat across packs.
+packs: []
+#  - rules/house-style.yaml
+
+# Level per rule id: error, warning, note, or off.
+levels: {}
+#  value.co2-lgm: error
+#  logic.lag-rules-out-cause: note
+
+# Lowest level that makes the exit status 1: error, warning, note or never.
+fail_on: error
+
+# Where expert sign-offs are kept.
+ledger: firnline-signoffs.yaml
+`;
+}

@@ -1,0 +1,82 @@
+/**
+ * A YAML file read for validation: its plain data, and a way back from a data path
+ * (`['reference_values', 3, 'low']`) to the line and column where that node starts.
+ */
+import { readFile } from 'node:fs/promises';
+import { isMap, isSeq, LineCounter, parseDocument, type Document, type Node } from 'yaml';
+import { FirnlineError, FirnlineErrors } from '../errors.js';
+
+/** A parsed YAML file that can say where each of its values stands. */
+export interface YamlFile {
+  file: string;
+  data: unknown;
+  /** 1-based line and column (code points) of the node at `path`, or of its nearest existing parent. */
+  locate(path: readonly (string | number)[], part?: 'key' | 'value'): { line: number; column: number };
+  /** A FirnlineError placed at `path`. */
+  errorAt(code: string, path: readonly (string | number)[], message: string, part?: 'key' | 'value'): FirnlineError;
+}
+
+/** Reads and parses `file`; YAML syntax errors throw FirnlineErrors with line and column. */
+export async function readYamlFile(file: string, shownAs = file): Promise<YamlFile> {
+  let text: string;
+  try {
+    text = await readFile(file, 'utf8');
+  } catch {
+    throw new FirnlineError('file-missing', `cannot read this file; check the path`, { file: shownAs });
+  }
+  return parseYamlText(text, shownAs);
+}
+
+/** Parses YAML text already read; `file` is the name used in messages. */
+export function parseYamlText(text: string, file: string): YamlFile {
+  const lineCounter = new LineCounter();
+  const doc = parseDocument(text, { lineCounter, prettyErrors: false, uniqueKeys: true });
+  const position = (offset: number): { line: number; column: number } => {
+    const { line } = lineCounter.linePos(offset);
+    const lineStart = lineCounter.lineStarts[line - 1] ?? 0;
+    return { line, column: [...text.slice(lineStart, offset)].length + 1 };
+  };
+  if (doc.errors.length > 0) {
+    throw new FirnlineErrors(
+      doc.errors.map((e) => {
+        const where = position(e.pos[0]);
+        return new FirnlineError('yaml-syntax', `YAML syntax: ${firstLine(e.message)}`, { file, ...where });
+      }),
+    );
+  }
+  const locate = (path: readonly (string | number)[], part: 'key' | 'value' = 'value') =>
+    position(offsetOf(doc, path, part));
+  return {
+    file,
+    data: doc.toJS({ maxAliasCount: 100 }) as unknown,
+    locate,
+    errorAt: (code, path, message, part) => new FirnlineError(code, message, { file, ...locate(path, part) }),
+  };
+}
+
+/** The offset where the node at `path` starts; walks as far as the path exists. */
+function offsetOf(doc: Document, path: readonly (string | number)[], part: 'key' | 'value'): number {
+  let node: unknown = doc.contents;
+  let offset = (doc.contents as Node | null)?.range?.[0] ?? 0;
+  for (const [i, step] of path.entries()) {
+    const last = i === path.length - 1;
+    if (isMap(node)) {
+      const pair = node.items.find((p) => String((p.key as { value?: unknown } | null)?.value ?? p.key) === String(step));
+      if (pair === undefined) break;
+      const keyStart = (pair.key as Node | null)?.range?.[0];
+      const valueStart = (pair.value as Node | null)?.range?.[0];
+      offset = (last && part === 'key' ? keyStart : (valueStart ?? keyStart)) ?? offset;
+      node = pair.value;
+    } else if (isSeq(node) && typeof step === 'number') {
+      const item = node.items[step] as Node | undefined;
+      if (item?.range === undefined || item.range === null) break;
+      offset = item.range[0];
+      node = item;
+    } else break;
+  }
+  return offset;
+}
+
+function firstLine(message: string): string {
+  return (message.split('\n')[0] ?? message).replace(/ at line \d+, column \d+:?$/u, '').trim();
+}
