@@ -1,0 +1,46 @@
+import type { CheckResult, Claim, Flag, ShownValue } from '../types.js';
+import type { JsonBound, JsonClaim, JsonFlag, JsonReport, JsonShownValue } from './json-report.js';
+import type { ReportOptions } from './report-options.js';
+import { sortByPlace, sortRules } from './sort.js';
+import { summarize } from './summarize.js';
+
+// JSON has no Infinity (JSON.stringify would write null silently); say so on purpose instead.
+function bound(value: number): JsonBound {
+  return Number.isFinite(value) ? value : null;
+}
+
+function shown<T extends ShownValue>(value: T): Omit<T, 'low' | 'high'> & JsonShownValue {
+  return { ...value, low: bound(value.low), high: bound(value.high) };
+}
+
+function jsonFlag(flag: Flag): JsonFlag {
+  const { claimed, reference, ...rest } = flag;
+  return {
+    ...rest,
+    ...(claimed === undefined ? {} : { claimed: shown(claimed) }),
+    ...(reference === undefined ? {} : { reference: shown(reference) }),
+  };
+}
+
+function jsonClaim(claim: Claim): JsonClaim {
+  const { flags: _flags, quantities, ...rest } = claim;
+  return { ...rest, quantities: quantities.map((q) => ({ ...q, low: bound(q.low), high: bound(q.high) })) };
+}
+
+/** The `json` report as data (what `renderJson` writes), for callers that want the object. */
+export function toJsonReport(result: CheckResult, options: ReportOptions): JsonReport {
+  return {
+    tool: { name: 'firnline', version: options.toolVersion },
+    files: [...result.files],
+    summary: summarize(result),
+    claims: sortByPlace(result.claims).map(jsonClaim),
+    flags: sortByPlace(result.flags).map(jsonFlag),
+    rules: sortRules(result.rules),
+    skipped: result.skipped.map((entry) => ({ ...entry })),
+  };
+}
+
+/** Firnline's own machine-readable report, described by schemas/report.schema.json. */
+export function renderJson(result: CheckResult, options: ReportOptions): string {
+  return `${JSON.stringify(toJsonReport(result, options), null, 2)}\n`;
+}
