@@ -1,5 +1,6 @@
 import type { ProseBlock } from '../types.js';
-import { matchReference } from './character-reference.js';
+import { isEscape } from './block-text.js';
+import { decodeReference, matchReference } from './character-reference.js';
 
 /**
  * The original UTF-16 range `[start, end)` of the block text `block.text[start..end)`: it starts at
@@ -19,7 +20,10 @@ export function blockRange(original: string, block: ProseBlock, start: number, e
 /** How many original units the block character `unit` found at `at` stands for. */
 function originalWidth(original: string, at: number, unit: string): number {
   // A decoded character reference (`&amp;` → `&`) stands for the whole reference.
-  if (original[at] === '&' && unit !== '&') return matchReference(original, at)?.length ?? 1;
+  const reference = original[at] === '&' ? matchReference(original, at) : undefined;
+  if (reference !== undefined && decodeReference(reference) !== reference) return reference.length;
+  // A backslash escape (`\*` → `*`) stands for both halves.
+  if (isEscape(original, at) && original[at + 1] === unit) return 2;
   // A line end normalised to `\n` may stand for `\r\n`.
   if (unit === '\n' && original[at] === '\r' && original[at + 1] === '\n') return 2;
   return 1;

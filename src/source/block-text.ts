@@ -27,10 +27,10 @@ interface Step {
 /**
  * Appends a parser's decoded text `value` whose source is `original[from..to)`, finding each value
  * character in the source. The source may hold more than the value (indentation, `>` markers,
- * trailing spaces), or spell a character differently: a backslash escape (`\*` → `*`, mapped to
- * the `*`), a character reference (`&amp;` → `&`, mapped to the `&`), or a `\r\n` / `\r` line end
- * (→ one `\n`, mapped to its first unit). A value character not found keeps the last position, so
- * offsets never run backwards and odd input never throws.
+ * trailing spaces), or spell a character differently: a backslash escape (`\*` → `*`), a
+ * character reference (`&amp;` → `&`) or a `\r\n` / `\r` line end (→ `\n`). Each is mapped to its
+ * first unit, so a range starting there covers the whole spelling. A value character not found
+ * keeps the last position, so offsets never run backwards and odd input never throws.
  */
 export function appendValue(block: BlockText, value: string, original: string, from: number, to: number): void {
   let j = from;
@@ -57,7 +57,7 @@ function matchAt(original: string, k: number, value: string, i: number): Step | 
   const source = original[k];
   if (unit === undefined) return undefined;
   if (isEscape(original, k)) {
-    return original[k + 1] === unit ? { text: unit, at: k + 1, next: k + 2, consumed: 1 } : undefined;
+    return original[k + 1] === unit ? { text: unit, at: k, next: k + 2, consumed: 1 } : undefined;
   }
   const reference = source === '&' ? matchReference(original, k) : undefined;
   if (reference !== undefined) {
@@ -72,10 +72,11 @@ function matchAt(original: string, k: number, value: string, i: number): Step | 
   return source === unit ? { text: unit, at: k, next: k + 1, consumed: 1 } : undefined;
 }
 
-const ASCII_PUNCTUATION = new Set('!"#$%&\'()*+,-./:;<=>?@[\\]^_`{|}~');
+/** CommonMark's escapable characters (§2.4). */
+export const ASCII_PUNCTUATION = new Set('!"#$%&\'()*+,-./:;<=>?@[\\]^_`{|}~');
 
 /** A CommonMark backslash escape starts at `k`: a backslash before ASCII punctuation. */
-function isEscape(original: string, k: number): boolean {
+export function isEscape(original: string, k: number): boolean {
   return original[k] === '\\' && ASCII_PUNCTUATION.has(original[k + 1] ?? '');
 }
 
