@@ -1,0 +1,86 @@
+/**
+ * What `check --require-signoff` and `check --changed-since` add to a run: keep only the claims on
+ * changed lines, join claims with the sign-off ledger, let flags on signed-off claims show as signed
+ * off without failing the run, and fail while any claim is open or changed since sign-off.
+ */
+import { relative } from 'node:path';
+import { changedLines } from '../review/changed-lines.js';
+import { describeReview, signedBy } from '../review/describe-review.js';
+import { readLedger } from '../review/read-ledger.js';
+import { reviewClaims, type ReviewSummary } from '../review/review-claims.js';
+import type { CheckResult, Claim, Flag } from '../types.js';
+
+/** How the gate is set up; `ledgerFile` is absolute. */
+export interface GateOptions {
+  requireSignoff: boolean;
+  changedSince?: string;
+  ledgerFile: string;
+  cwd: string;
+}
+
+/** The run as reported after the gate, and whether the gate fails it. */
+export interface GateOutcome {
+  /** Claims and flags left after `--changed-since`; flags on signed-off claims say so in their reason. */
+  result: CheckResult;
+  /** Flags that may still fail the run (those on signed-off claims are left out). */
+  failingFlags: Flag[];
+  /** True when sign-off is required and some claim is open or stale. */
+  failed: boolean;
+  /** Lines for the reader: counts, stale claims with old and new wording, open claims. */
+  summary: string[];
+  /** The review, when sign-off was required. */
+  review?: ReviewSummary;
+}
+
+/** Applies `--changed-since` and `--require-signoff` to a run. */
+export async function applyGate(result: CheckResult, options: GateOptions): Promise<GateOutcome> {
+  const summary: string[] = [];
+  let scoped = result;
+  if (options.changedSince !== undefined) {
+    const changed = await changedLines(options.changedSince, options.cwd);
+    scoped = onChangedLines(result, changed);
+    summary.push(`Changed since ${options.changedSince}: ${scoped.claims.length} of ${result.claims.length} claims are on changed lines.`);
+  }
+  if (!options.requireSignoff) return { result: scoped, failingFlags: scoped.flags, failed: false, summary };
+
+  const review = reviewClaims(scoped.claims, await readLedger(options.ledgerFile, options.cwd));
+  const signedOff = new Map(review.claims.filter((r) => r.status === 'signed off').map((r) => [r.claim.id, r.signoff]));
+  const failingFlags: Flag[] = [];
+  const flags = scoped.flags.map((flag) => {
+    const entry = flag.claimId === undefined ? undefined : signedOff.get(flag.claimId);
+    if (entry === undefined) {
+      failingFlags.push(flag);
+      return flag;
+    }
+    return { ...flag, reason: `${flag.reason} [${signedBy(entry)}]` };
+  });
+  const claims = scoped.claims.map((c) => ({ ...c, flags: flags.filter((f) => f.claimId === c.id) }));
+  summary.push(...describeReview(review));
+  const excused = flags.length - failingFlags.length;
+  if (excused > 0) summary.push(`${excused} flag${excused === 1 ? '' : 's'} on signed-off claims shown as signed off; they do not fail the run.`);
+  summary.push(`Ledger: ${relative(options.cwd, options.ledgerFile) || options.ledgerFile}`);
+  return {
+    result: { ...scoped, claims, flags },
+    failingFlags,
+    failed: review.counts.open + review.counts.stale > 0,
+    summary,
+    review,
+  };
+}
+
+/** Keeps claims with a line in `changed`, and the flags that belong to them. */
+function onChangedLines(result: CheckResult, changed: Map<string, Set<number>>): CheckResult {
+  const touches = (file: string, from: number, to: number) => {
+    const lines = changed.get(file);
+    if (lines === undefined) return false;
+    for (let n = from; n <= to; n += 1) if (lines.has(n)) return true;
+    return false;
+  };
+  const claims: Claim[] = result.claims.filter((c) => touches(c.file, c.span.start.line, c.span.end.line));
+  const kept = new Set(claims.map((c) => c.id));
+  const flags = result.flags.filter((f) =>
+    f.claimId === undefined ? touches(f.file, f.span.start.line, f.span.end.line) : kept.has(f.claimId),
+  );
+  const ruleIds = new Set(flags.map((f) => f.ruleId));
+  return { ...result, claims, flags, rules: result.rules.filter((r) => ruleIds.has(r.id)) };
+}

@@ -1,0 +1,94 @@
+/**
+ * The sign-off checklist in Markdown: a short header (what the checklist is, its cautions, how to
+ * sign off), then one section per file and one sub-section per heading, with one task-list box per
+ * claim. The box line carries the claim id (bold) and the sentence; the details sit beneath it,
+ * indented, so they survive an editor's reflowing. `parseTickedChecklist` reads the ticks back.
+ *
+ *   - [ ] **c9f3a0b12cd** line 3: The Dome C core reaches back about 420,000 years.
+ *     - Values read: "about 420,000 years" (415,000 to 425,000 yr)
+ */
+import type { Checklist, ChecklistInput, ChecklistItem, ChecklistRange } from './checklist-json.js';
+import { toChecklist } from './checklist-json.js';
+import { formatRange } from './format-value.js';
+import { formatSource } from './format-source.js';
+
+/** How each verdict is put for the reviewer. */
+const VERDICT_WORDS: Record<ChecklistItem['verdict'], (item: ChecklistItem) => string> = {
+  agrees: (item) => `agrees with ${referenceWords(item)}`,
+  conflicts: (item) => `conflicts with ${referenceWords(item)}`,
+  'no reference': () => 'no reference (nothing in the rule packs covers this claim; judge it from the literature)',
+};
+
+/** The header's instructions; the words `corrected:`, `waived:` and `note:` are what the parser reads. */
+export const SIGN_OFF_INSTRUCTIONS = [
+  '**How to sign off.** Check each claim against its sources, then tick its box (`- [x]`). A tick on its',
+  'own records the decision `approved`. For another decision, write it on the ticked line in brackets:',
+  '`(corrected: what you changed)` or `(waived: why the claim stands as it is)`; add `(note: ...)` for a',
+  'remark. Then run `firnline signoff --from <this file> --by "Your Name"`. Leave the claim ids as they are.',
+].join('\n');
+
+/** `checklist --format markdown`. */
+export function renderChecklistMarkdown(input: ChecklistInput): string {
+  return checklistToMarkdown(toChecklist(input));
+}
+
+/** Writes a checklist already built. */
+export function checklistToMarkdown(checklist: Checklist): string {
+  const { counts } = checklist;
+  const out = [
+    '# Sign-off checklist',
+    '',
+    `Made by Firnline ${checklist.tool.version} on ${checklist.generated.slice(0, 10)}, against the rule packs ${checklist.packs || '(none)'}.`,
+    `${counts.claims} claims in ${counts.files} files: ${counts.conflicts} conflict with a reference value, ${counts.agrees} agree, ${counts['no reference']} have no reference. ` +
+      `Already signed off: ${counts['signed off']}; changed since sign-off: ${counts.stale}.`,
+    '',
+    `> ${checklist.cautions}`,
+    '',
+    SIGN_OFF_INSTRUCTIONS,
+  ];
+  let file: string | undefined;
+  let heading: string | undefined;
+  for (const item of checklist.claims) {
+    if (item.file !== file) {
+      out.push('', `## File \`${item.file}\``);
+      file = item.file;
+      heading = undefined;
+    }
+    if (item.heading !== heading) {
+      out.push('', item.heading === '' ? '### Before the first heading' : `### Under "${item.heading}"`, '');
+      heading = item.heading;
+    }
+    out.push(...itemLines(item));
+  }
+  return `${out.join('\n')}\n`;
+}
+
+function itemLines(item: ChecklistItem): string[] {
+  const lines = [`- [ ] **${item.id}** line ${item.line}: ${item.sentence}`];
+  const detail = (label: string, text: string) => lines.push(`  - ${label}: ${text}`);
+  if (item.values.length > 0) detail('Values read', item.values.map((v) => `"${v.text}" (${range(v)})`).join('; '));
+  detail('Verdict', VERDICT_WORDS[item.verdict](item));
+  for (const f of item.flags) {
+    const advice = f.correction === undefined ? (f.suggestion === undefined ? '' : ` Suggestion: ${f.suggestion}`) : ` Correction: "${f.correction}"`;
+    detail(`Flag (${f.level}, ${f.ruleId})`, `${f.reason}${advice}`);
+  }
+  if (item.sources.length > 0) {
+    lines.push('  - Sources:');
+    for (const s of item.sources) lines.push(`    - ${formatSource(s)}`);
+  }
+  const s = item.signoff;
+  if (s.status === 'signed off') detail('Signed off', `by ${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}, ${s.decision ?? ''}`);
+  if (s.status === 'stale') detail('Changed since sign-off', `${s.reviewer ?? '?'} signed off this wording on ${(s.date ?? '').slice(0, 10)}: "${s.signedOffText ?? ''}"`);
+  return lines;
+}
+
+function referenceWords(item: ChecklistItem): string {
+  if (item.references.length === 0) return 'the rule packs';
+  return item.references
+    .map((r) => `${r.measures}: ${r.wording} (${range(r)}${r.asOf === undefined ? '' : `, as of ${r.asOf}`})`)
+    .join('; ');
+}
+
+function range(r: ChecklistRange): string {
+  return formatRange(r.low ?? -Infinity, r.high ?? Infinity, r.unit);
+}

@@ -1,0 +1,45 @@
+/**
+ * The words of the sign-off summary, made last from the review data: a count line, then each stale
+ * claim with its signed-off wording beside the new one, then each open claim, one line each.
+ *
+ *   Sign-off: 1 of 3 claims signed off; 1 claim open, 1 changed since sign-off.
+ *   changed since sign-off: drafts/ice-hall.md:3:1 c9f3a0b12cd (signed off by R. Okafor on 2025-02-11, approved)
+ *     signed off: The Dome C core reaches back about 420,000 years.
+ *     now:        The Dome C core reaches back about 800,000 years.
+ *   open: drafts/ice-hall.md:5:1 c51d0e7a9b2 CO2 rose from about 180 ppm to 280 ppm.
+ */
+import type { ReviewSummary } from './review-claims.js';
+import { foldClaimText } from './claim-id.js';
+
+/** Summary lines for `check --require-signoff`. */
+export function describeReview(review: ReviewSummary): string[] {
+  const { counts } = review;
+  const total = review.claims.length;
+  const lines = [
+    `Sign-off: ${counts['signed off']} of ${plural(total, 'claim')} signed off; ${plural(counts.open, 'claim')} open, ${counts.stale} changed since sign-off.`,
+  ];
+  for (const r of review.claims) {
+    const place = `${r.claim.file}:${r.claim.span.start.line}:${r.claim.span.start.column} ${r.claim.id}`;
+    if (r.status === 'stale' && r.signoff !== undefined) {
+      lines.push(`changed since sign-off: ${place} (${signedBy(r.signoff)})`);
+      lines.push(`  signed off: ${foldClaimText(r.signoff.text)}`);
+      lines.push(`  now:        ${foldClaimText(r.claim.text)}`);
+    }
+  }
+  for (const r of review.claims) {
+    if (r.status === 'open') lines.push(`open: ${r.claim.file}:${r.claim.span.start.line}:${r.claim.span.start.column} ${r.claim.id} ${foldClaimText(r.claim.text)}`);
+  }
+  if (counts.open + counts.stale > 0) {
+    lines.push('To sign off: firnline checklist -o checklist.md, tick the boxes, then firnline signoff --from checklist.md --by "Your Name".');
+  }
+  return lines;
+}
+
+/** "signed off by R. Okafor on 2025-02-11, approved" */
+export function signedBy(entry: { reviewer: string; date: string; decision: string }): string {
+  return `signed off by ${entry.reviewer} on ${entry.date.slice(0, 10)}, ${entry.decision}`;
+}
+
+function plural(n: number, word: string): string {
+  return `${n} ${word}${n === 1 ? '' : 's'}`;
+}
