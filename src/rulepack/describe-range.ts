@@ -29,3 +29,8 @@ export function formatRange(low: number, high: number, unit: string): string {
 export function describeRange(r: ReferenceValue): string {
   return formatRange(r.low, r.high, r.unit);
 }
+
+/** A phrase to use mid-sentence: first letter lower-cased unless the word is an acronym (CO2, EPICA). */
+export function midSentence(text: string): string {
+  return /^\p{Lu}\p{Ll}/u.test(text) ? `${text.charAt(0).toLowerCase()}${text.slice(1)}` : text;
+}

@@ -4,7 +4,7 @@
  */
 import type { RuleInfo } from '../types.js';
 import type { LoadedPacks } from './types.js';
-import { describeRange } from './describe-range.js';
+import { describeRange, midSentence } from './describe-range.js';
 
 type Describe = (packs: LoadedPacks, id: string) => RuleInfo | undefined;
 
@@ -16,7 +16,7 @@ const BY_PREFIX: [string, Describe][] = [
     const notes = r.notes === undefined ? '' : ` ${r.notes}`;
     return {
       id: `value.${r.id}`,
-      summary: `Checks the ${r.measures.charAt(0).toLowerCase()}${r.measures.slice(1)} against the sourced range.`,
+      summary: `Checks the ${midSentence(r.measures)} against the sourced range.`,
       description: `Accepted range: ${describeRange(r)}${dated}. A correction reads "${r.wording}".${notes}`,
       defaultLevel: 'warning',
       sources: r.sources,

@@ -1,0 +1,47 @@
+/**
+ * Reference ranges and corrections in the draft's own unit: a draft that writes "400 kyr" is shown
+ * "790–810 kyr", one that writes "°F" sees degrees Fahrenheit. Falls back to the canonical unit when
+ * the draft's unit is not in the unit table.
+ */
+import { formatNumber, formatRange, unitLabel } from '../rulepack/describe-range.js';
+import type { ReferenceValue } from '../rulepack/types.js';
+import { CANONICAL_UNITS, fromCanonical, unitDef } from '../rulepack/units.js';
+import type { Quantity, ShownValue } from '../types.js';
+
+/** The unit to show values in for this quantity: its stated unit when known, else the canonical. */
+export function displayUnit(q: Quantity): string {
+  const stated = q.statedUnit.replace(/^°/u, 'deg');
+  for (const name of [stated, `${stated}-change`]) {
+    if (name !== '' && unitDef(name)?.dimension === q.dimension) return name;
+  }
+  return CANONICAL_UNITS[q.dimension];
+}
+
+/** The reference range as shown beside a claim, in the claim's unit. */
+export function shownReference(r: ReferenceValue, q: Quantity): ShownValue & { id: string; measures: string; asOf?: string } {
+  const unit = displayUnit(q);
+  const [low, high] = [fromCanonical(r.low, unit), fromCanonical(r.high, unit)].sort((a, b) => a - b) as [number, number];
+  return {
+    id: r.id, measures: r.measures, text: formatRange(r.low, r.high, unit), low, high, unit,
+    ...(r.asOf === undefined ? {} : { asOf: r.asOf }),
+  };
+}
+
+/** The claim as shown: its own words, with its interval in its own unit. */
+export function shownClaim(q: Quantity): ShownValue {
+  const unit = displayUnit(q);
+  const [low, high] = [fromCanonical(q.low, unit), fromCanonical(q.high, unit)].sort((a, b) => a - b) as [number, number];
+  return { text: q.text, low, high, unit };
+}
+
+/**
+ * The correction for a claim: the pack's wording when the draft uses the canonical unit (or no
+ * unit), else the central value (or the range) restated in the draft's unit.
+ */
+export function correctionFor(r: ReferenceValue, q: Quantity): string {
+  const unit = displayUnit(q);
+  if (unit === CANONICAL_UNITS[q.dimension] && unitDef(unit)?.factor === 1) return r.wording;
+  if (r.central === undefined) return formatRange(r.low, r.high, unit);
+  const label = unitLabel(unit);
+  return `about ${formatNumber(fromCanonical(r.central, unit), 2)}${label === '' ? '' : ` ${label}`}`;
+}

@@ -1,0 +1,67 @@
+/**
+ * The reference check: a bound claim's interval against its reference interval. Overlapping
+ * intervals agree; disjoint ones conflict, and the level grows with the distance by the value's
+ * `levels`. A flag carries the claimed value and the reference range in the draft's own unit, the
+ * correction, the citations, and the as-of date of values that change with time.
+ */
+import { findTerms } from '../claims/bind.js';
+import { midSentence } from '../rulepack/describe-range.js';
+import { levelAt } from '../rulepack/resolve-reference.js';
+import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
+import type { Binding, FlagDraft, Quantity, Verdict } from '../types.js';
+import { correctionFor, shownClaim, shownReference } from './reference-format.js';
+
+/** The pack term whose words mark a claim about the present ("today", "now"...). */
+export const TODAY_TERM = 'today';
+
+/**
+ * How far a claim lies outside a reference range, relative to the range's magnitude:
+ * 0 when they overlap; `gap / max(|low|, |high|, high - low)` otherwise.
+ */
+export function relativeDistance(low: number, high: number, r: Pick<ReferenceValue, 'low' | 'high'>): number {
+  const gap = Math.max(r.low - high, low - r.high, 0);
+  if (gap === 0) return 0;
+  const scale = Math.max(Math.abs(r.low), Math.abs(r.high), r.high - r.low);
+  return scale === 0 ? Infinity : gap / scale;
+}
+
+/** Checks each binding; returns the flags of conflicting claims and a verdict per binding. */
+export function checkReferences(sentence: string, quantities: Quantity[], bindings: Binding[], packs: LoadedPacks): { flags: FlagDraft[]; verdicts: Verdict[] } {
+  const flags: FlagDraft[] = [];
+  const verdicts: Verdict[] = [];
+  let aboutToday: boolean | undefined;
+  for (const binding of bindings) {
+    const q = quantities[binding.quantityIndex];
+    const r = packs.reference(binding.referenceId);
+    if (q === undefined || r === undefined) {
+      verdicts.push('no reference');
+      continue;
+    }
+    const distance = relativeDistance(q.low, q.high, r);
+    verdicts.push(distance === 0 ? 'agrees' : 'conflicts');
+    const level = distance === 0 ? undefined : levelAt(r.levels, distance);
+    if (level === undefined) continue;
+    aboutToday ??= findTerms(sentence, packs).has(TODAY_TERM);
+    const reference = shownReference(r, q);
+    flags.push({
+      ruleId: `value.${r.id}`,
+      level,
+      start: q.start,
+      end: q.end,
+      reason: reasonFor(r, q, reference.text, aboutToday),
+      claimed: shownClaim(q),
+      reference,
+      correction: correctionFor(r, q),
+      sources: r.sources,
+    });
+  }
+  return { flags, verdicts };
+}
+
+function reasonFor(r: ReferenceValue, q: Quantity, range: string, aboutToday: boolean): string {
+  const measures = midSentence(r.measures);
+  const base = `The draft gives ${q.text} for the ${measures}; the sources give ${range}`;
+  if (r.asOf === undefined) return `${base}.`;
+  const today = aboutToday ? ` The draft speaks of today; the reference value is dated ${r.asOf} and changes with time.` : '';
+  return `${base} as of ${r.asOf}.${today}`;
+}
