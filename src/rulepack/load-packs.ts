@@ -2,7 +2,7 @@
  * Loading rule packs: the built-in pack, a user's pack files, and all of them merged. Every mistake
  * in every file is collected and thrown together; nothing is returned from a half-loaded pack.
  */
-import { resolve } from 'node:path';
+import { isAbsolute, relative, resolve, sep } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { FirnlineError, FirnlineErrors } from '../errors.js';
 import type { Source } from '../types.js';
@@ -22,7 +22,7 @@ const NOTHING_KNOWN: KnownIds = { sources: new Map(), terms: new Set(), defined:
  */
 export async function loadRulePack(file: string, known: KnownIds = NOTHING_KNOWN): Promise<RulePack> {
   const absolute = resolve(file);
-  const yaml = await readYamlFile(absolute, file);
+  const yaml = await readYamlFile(absolute, shownPath(file));
   const problems = schemaErrors(yaml, 'rulepack');
   if (problems.length > 0) throw new FirnlineErrors(problems);
   const pack = resolvePack(yaml, absolute, known);
@@ -95,3 +95,10 @@ const SECTIONS = [
   ['patterns', (p: RulePack) => p.patterns],
   ['reasoning_checks', (p: RulePack) => p.reasoning],
 ] as const;
+
+/** A pack path as messages show it: as given, or relative to the working folder when inside it. */
+function shownPath(file: string): string {
+  if (!isAbsolute(file)) return file;
+  const rel = relative(process.cwd(), file);
+  return rel === '' || rel.startsWith('..') || isAbsolute(rel) ? file : rel.split(sep).join('/');
+}

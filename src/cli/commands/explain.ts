@@ -1,0 +1,27 @@
+import type { Command } from 'commander';
+import { FirnlineError } from '../../errors.js';
+import { describeRule } from '../../rulepack/describe-rule.js';
+import type { CliContext } from '../context.js';
+import { loadRunSettings } from '../run-settings.js';
+
+/** `firnline explain <id>`: one rule or reference value in full, with its citations. */
+export function registerExplain(program: Command, ctx: CliContext): void {
+  program
+    .command('explain')
+    .description('show one rule or reference value in full, with citations (e.g. value.edc-record-span)')
+    .argument('<id>', 'rule id, or a reference value id without the value. prefix')
+    .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
+    .option('--pack <file>', 'add a rule pack (repeatable)', (v: string, all: string[]) => [...all, v], [] as string[])
+    .action(async (id: string, flags: { config?: string; pack: string[] }) => {
+      const { packs } = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
+      const info = describeRule(packs, id) ?? describeRule(packs, `value.${id}`);
+      if (info === undefined) {
+        throw new FirnlineError('unknown-rule', `no rule or reference value has the id \`${id}\`; run \`firnline refs\` to list them`);
+      }
+      const sources = info.sources.map((s) => {
+        const link = [s.doi === undefined ? undefined : `doi: ${s.doi}`, s.url === undefined ? undefined : `url: ${s.url}`].filter((x) => x !== undefined);
+        return `  - ${s.cite}\n${link.map((l) => `    ${l}\n`).join('')}    how: ${s.how}\n`;
+      });
+      ctx.stdout(`${info.id} (default level: ${info.defaultLevel})\n${info.summary}\n\n${info.description}\n\nSources:\n${sources.join('')}`);
+    });
+}
