@@ -13,18 +13,37 @@ function shown<T extends ShownValue>(value: T): Omit<T, 'low' | 'high'> & JsonSh
   return { ...value, low: bound(value.low), high: bound(value.high) };
 }
 
+// Written member by member so every report lists them in the same order, whatever the producer did.
 function jsonFlag(flag: Flag): JsonFlag {
-  const { claimed, reference, ...rest } = flag;
+  const { claimed, reference, correction, suggestion, claimId } = flag;
   return {
-    ...rest,
+    ruleId: flag.ruleId,
+    level: flag.level,
+    file: flag.file,
+    span: flag.span,
+    excerpt: flag.excerpt,
+    sentence: flag.sentence,
+    reason: flag.reason,
     ...(claimed === undefined ? {} : { claimed: shown(claimed) }),
     ...(reference === undefined ? {} : { reference: shown(reference) }),
+    ...(correction === undefined ? {} : { correction }),
+    ...(suggestion === undefined ? {} : { suggestion }),
+    sources: flag.sources,
+    ...(claimId === undefined ? {} : { claimId }),
   };
 }
 
 function jsonClaim(claim: Claim): JsonClaim {
-  const { flags: _flags, quantities, ...rest } = claim;
-  return { ...rest, quantities: quantities.map((q) => ({ ...q, low: bound(q.low), high: bound(q.high) })) };
+  return {
+    id: claim.id,
+    file: claim.file,
+    span: claim.span,
+    text: claim.text,
+    heading: claim.heading,
+    quantities: claim.quantities.map((q) => ({ ...q, low: bound(q.low), high: bound(q.high) })),
+    bindings: claim.bindings,
+    verdict: claim.verdict,
+  };
 }
 
 /** The `json` report as data (what `renderJson` writes), for callers that want the object. */
