@@ -36,13 +36,11 @@ export function parseYamlText(text: string, file: string): YamlFile {
     const lineStart = lineCounter.lineStarts[line - 1] ?? 0;
     return { line, column: [...text.slice(lineStart, offset)].length + 1 };
   };
-  if (doc.errors.length > 0) {
-    throw new FirnlineErrors(
-      doc.errors.map((e) => {
-        const where = position(e.pos[0]);
-        return new FirnlineError('yaml-syntax', `YAML syntax: ${firstLine(e.message)}`, { file, ...where });
-      }),
-    );
+  const [syntax] = doc.errors;
+  if (syntax !== undefined) {
+    // Only the first: later syntax errors are nearly always echoes of it.
+    const where = position(syntax.pos[0]);
+    throw new FirnlineErrors([new FirnlineError('yaml-syntax', `YAML syntax: ${firstLine(syntax.message)}`, { file, ...where })]);
   }
   const locate = (path: readonly (string | number)[], part: 'key' | 'value' = 'value') =>
     position(offsetOf(doc, path, part));
