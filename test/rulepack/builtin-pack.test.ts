@@ -1,0 +1,65 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { BUILTIN_PACK_FILE, describeRule, loadPacks, toCanonical } from '../../src/rulepack/index.js';
+
+const packs = await loadPacks([]);
+
+describe('the built-in paleoclimate pack', () => {
+  it('holds at least 40 reference values, each with a published source that has a DOI or URL', () => {
+    expect(packs.references.length).toBeGreaterThanOrEqual(40);
+    const unsourced = packs.references.filter((r) => !r.sources.some((s) => s.doi !== undefined || s.url !== undefined));
+    expect(unsourced.map((r) => r.id)).toEqual([]);
+  });
+
+  it('keeps every "from memory" mark of the vetted research table', () => {
+    // /work/shared/reference-values.yaml marks recalled values "from memory"; the pack keeps them in `how`.
+    const marked = packs.sources.filter((s) => s.how.includes('from memory')).map((s) => s.id);
+    expect(marked).toEqual(expect.arrayContaining(['gulev-2021', 'loulergue-2007', 'shakun-2012', 'weiss-1974']));
+  });
+
+  it('dates the values that change with time', () => {
+    expect(packs.reference('co2-present-day')?.asOf).toBe('2025-05-31');
+    expect(packs.reference('co2-increase-since-1750-pct-2019')?.asOf).toBe('2019-12-31');
+  });
+
+  it('states values in canonical units: b2k ages become BP (BP = b2k - 50; Walker et al. 2009, doi 10.1002/jqs.1227)', () => {
+    expect(packs.reference('holocene-start')).toMatchObject({ low: 11551, high: 11749, unit: 'yr BP', dimension: 'age' });
+  });
+
+  it('carries the three direction facts the issue names', () => {
+    expect(packs.directions.map((d) => d.id)).toEqual(['co2-solubility-falls-with-warming', 'trapped-air-younger-than-ice', 'global-co2-ahead-of-warming']);
+  });
+
+  it('ends with the reasoning checks section, starting with logic.lag-rules-out-cause and its three sources', () => {
+    const text = readFileSync(BUILTIN_PACK_FILE, 'utf8');
+    expect(text.indexOf('# reasoning checks')).toBeGreaterThan(text.indexOf('\npatterns:'));
+    expect(text.slice(text.indexOf('\nreasoning_checks:'))).not.toMatch(/^\S(?!easoning_checks)/mu);
+    const lag = packs.reasoning.find((c) => c.id === 'logic.lag-rules-out-cause');
+    // Shakun et al. 2012, Nature 484, 49-54; Pedro et al. 2012; Parrenin et al. 2013.
+    expect(lag?.sources.map((s) => s.doi)).toEqual(['10.1038/nature10915', '10.5194/cp-8-1213-2012', '10.1126/science.1226368']);
+    expect(lag).toMatchObject({ level: 'warning', enabled: true });
+    expect(lag?.words['lag']).toContain('lagged');
+  });
+
+  it('describes rules of every kind for reports and explain', () => {
+    expect(describeRule(packs, 'value.edc-record-span')?.description).toMatch(/^Accepted range: 790,000–810,000 years\./u);
+    expect(describeRule(packs, 'direction.trapped-air-younger-than-ice')?.defaultLevel).toBe('warning');
+    expect(describeRule(packs, 'logic.lag-rules-out-cause')?.sources).toHaveLength(3);
+    expect(describeRule(packs, 'value.no-such-value')).toBeUndefined();
+  });
+});
+
+describe('unit conversions used by the loader', () => {
+  // SI Brochure (9th ed.) and NIST SP 811 B.8: 1 ft = 0.3048 m exactly; a 1 °C difference is 1 K and 1.8 °F.
+  it.each([
+    [1, 'ft', 0.3048],
+    [1.8, 'degF-change', 1],
+    [800, 'kyr', 800_000],
+    [21, 'ka', 21_000],
+    [11_700, 'yr b2k', 11_650],
+    // 1 BCE is 1950 years before AD 1950 (there is no year 0): common practice.
+    [10_000, 'BCE', 11_949],
+  ])('%d %s = %d in the canonical unit', (value, unit, expected) => {
+    expect(toCanonical(value, unit)).toBeCloseTo(expected, 9);
+  });
+});
