@@ -2,6 +2,7 @@ import type { CheckResult, Flag } from '../types.js';
 import { describeFlag } from './describe-flag.js';
 import { escapeXmlAttribute as attr, escapeXmlText as text } from './escape-xml.js';
 import { formatSource } from './format-source.js';
+import { asSentence } from './format-value.js';
 import type { JunitCase, JunitSuite } from './junit-suites.js';
 import { toJunitSuites } from './junit-suites.js';
 import type { ReportOptions } from './report-options.js';
@@ -39,7 +40,7 @@ function caseXml(file: string, junitCase: JunitCase): string[] {
   const inner: string[] = [];
   if (junitCase.skipped !== undefined) inner.push(`      <skipped message="${attr(junitCase.skipped)}"/>`);
   for (const flag of junitCase.failures) {
-    const message = attr(`${flag.ruleId}: ${flag.reason}`);
+    const message = attr(`${flag.ruleId}: ${asSentence(flag.reason)}`);
     inner.push(`      <failure type="${attr(flag.ruleId)}" message="${message}">${text(flagText(flag))}</failure>`);
   }
   if (junitCase.passed.length > 0) {
