@@ -32,9 +32,10 @@ export async function findDrafts(paths: string[], cwd: string, options: DraftFil
     if (info instanceof Error) {
       errors.push(statError(info, given));
     } else if (info.isDirectory()) {
-      const before = found.size;
-      await walkFolder(path, await rulesAbove(cwd, path), { cwd, filter, found });
-      if (found.size === before) {
+      const walk: Walk = { cwd, filter, found: new Set() };
+      await walkFolder(path, await rulesAbove(cwd, path), walk);
+      for (const file of walk.found) found.add(file);
+      if (walk.found.size === 0) {
         errors.push(new FirnlineError('no-drafts', 'no .md, .markdown or .txt drafts in this folder (hidden and ignored files are passed over); name a file or another folder', { file: given }));
       }
     } else {

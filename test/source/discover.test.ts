@@ -62,6 +62,10 @@ describe('findDrafts', () => {
 
   // Globs, like .gitignore patterns here, compare without case (git's core.ignorecase=true, its
   // default on macOS and Windows), so one setting reads the same on every editor's machine.
+  it('regression: a folder whose drafts were already named is not a folder without drafts', async () => {
+    expect(await findDrafts(['docs/deep/Upper.MD', 'docs/deep', 'docs/deep'], root)).toEqual({ files: ['docs/deep/Upper.MD'] });
+  });
+
   it('applies exclude and include globs relative to the working folder', async () => {
     expect(await findDrafts(['.'], root, { exclude: ['docs/'] })).toEqual({ files: ['a.md', 'b.markdown', 'notes.txt'] });
     expect(await findDrafts(['.'], root, { include: ['*.md'] })).toEqual({
