@@ -22,7 +22,8 @@ type PathFilter = ReturnType<typeof createPathFilter>;
  * `include`/`exclude` leave out. Every missing path and every folder without drafts is reported
  * together (FirnlineError codes `path-missing`, `no-drafts`).
  */
-export async function findDrafts(paths: string[], cwd: string, options: DraftFilters = {}): Promise<{ files: string[] }> {
+export async function findDrafts(paths: string[], workingFolder: string, options: DraftFilters = {}): Promise<{ files: string[] }> {
+  const cwd = resolve(workingFolder);
   const filter = createPathFilter(cwd, options.include, options.exclude);
   const found = new Set<string>();
   const errors: FirnlineError[] = [];
