@@ -7,6 +7,7 @@ import { renderText } from './render-text.js';
 
 /** The output formats `check --format` accepts; `text` is the default. */
 export const REPORT_FORMATS = ['text', 'json', 'sarif', 'junit'] as const;
+/** One of REPORT_FORMATS. */
 export type ReportFormat = (typeof REPORT_FORMATS)[number];
 
 /** The one place a format name meets its reporter. */

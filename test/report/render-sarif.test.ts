@@ -146,6 +146,12 @@ describe('SARIF 2.1.0 report', () => {
     expect(lone.runs[0].results[0]).not.toHaveProperty('partialFingerprints');
   });
 
+  it('leaves out ruleIndex for a flag whose rule is not described, and still validates', () => {
+    const undescribed = renderSarif({ ...ICE_AGE_RESULT, rules: [] }, OPTIONS);
+    expect(errorsOf(undescribed)).toEqual([]);
+    expect((JSON.parse(undescribed) as SarifLog).runs[0].results.every((r) => !('ruleIndex' in r))).toBe(true);
+  });
+
   it('writes paths as relative URI references that still validate', () => {
     const odd: CheckResult = { ...ICE_AGE_RESULT, flags: [{ ...SPAN_FLAG, file: 'notes #2/ice age.md' }] };
     const written = renderSarif(odd, OPTIONS);
