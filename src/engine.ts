@@ -9,7 +9,7 @@ import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
 import type { LoadedPacks } from './rulepack/types.js';
-import { createLineIndex, draftFromText, findDrafts, readDraft } from './source/index.js';
+import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, readDraftText } from './source/index.js';
 import type { CheckResult, Claim, Draft, Flag, FlagDraft, Level, RuleInfo, Sentence, Verdict } from './types.js';
 
 /** How a run is set up. Only `cwd` is required; packs default to the built-in pack. */
@@ -43,12 +43,12 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
 
   if (paths.includes('-')) {
     if (options.readStdin === undefined) throw new FirnlineError('stdin-unavailable', 'standard input cannot be read here');
-    addDraft(result, draftFromText('-', await options.readStdin(), 'markdown'), packs, topic, options.levels);
+    addText(result, '-', await options.readStdin(), 'markdown', packs, topic, options.levels);
   }
   for (const file of files) {
-    const draft = await readDraft(file, options.cwd);
-    if ('skipped' in draft) result.skipped.push({ file, reason: draft.skipped });
-    else addDraft(result, draft, packs, topic, options.levels);
+    const text = await readDraftText(file, options.cwd);
+    if (typeof text === 'string') addText(result, file, text, draftFormat(file), packs, topic, options.levels);
+    else result.skipped.push({ file, reason: text.skipped });
   }
   result.rules = describeFlaggedRules(result.flags, packs);
   return result;
@@ -60,26 +60,29 @@ export async function checkText(
   options: { path?: string; format?: 'markdown' | 'text'; packs?: LoadedPacks; levels?: Record<string, Level | 'off'> } = {},
 ): Promise<CheckResult> {
   const packs = options.packs ?? (await loadPacks([]));
-  const draft = draftFromText(options.path ?? '-', text, options.format ?? 'markdown');
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
-  addDraft(result, draft, packs, createTopicMatcher(packs.topicWords), options.levels);
+  const path = options.path ?? '-';
+  addText(result, path, text, options.format ?? draftFormat(path), packs, createTopicMatcher(packs.topicWords), options.levels);
   result.rules = describeFlaggedRules(result.flags, packs);
   return result;
 }
 
-function addDraft(
+/** Adds one draft's findings; a text with no topic word is skipped before it is even parsed. */
+function addText(
   result: CheckResult,
-  draft: Draft,
+  path: string,
+  text: string,
+  format: Draft['format'],
   packs: LoadedPacks,
   topic: TopicMatcher,
   levels: Record<string, Level | 'off'> | undefined,
 ): void {
-  result.files.push(draft.path);
-  if (!topic.test(draft.text)) {
-    result.skipped.push({ file: draft.path, reason: 'no topic term' });
+  result.files.push(path);
+  if (!topic.test(text)) {
+    result.skipped.push({ file: path, reason: 'no topic term' });
     return;
   }
-  const { claims, flags } = checkDraft(draft, packs, topic, levels);
+  const { claims, flags } = checkDraft(draftFromText(path, text, format), packs, topic, levels);
   result.claims.push(...claims);
   result.flags.push(...flags);
 }
@@ -118,7 +121,10 @@ export function checkDraft(
       const occurrence = (seen.get(folded) ?? 0) + 1;
       seen.set(folded, occurrence);
       const id = claimIdOf(draft.path, sentence.text, occurrence);
-      const toSpan = (start: number, end: number) => mapSpan(block.offsets, sentence, start, end, lines);
+      const toSpan = (start: number, end: number): Flag['span'] => {
+        const range = blockRange(draft.text, block, sentence.start + start, sentence.start + end);
+        return lines.toSpan(range.start, range.end);
+      };
       const flags = applyLevels(drafts, levels).map((d) => resolveFlag(d, draft, sentence, id, toSpan));
       claims.push({
         id,
@@ -161,20 +167,6 @@ function resolveFlag(
 ): Flag {
   const { start, end, ...rest } = d;
   return { ...rest, file: draft.path, span: toSpan(start, end), excerpt: sentence.text.slice(start, end), sentence: sentence.text, claimId };
-}
-
-/** Maps [start, end) in a sentence to the original file through the block's offset table. */
-function mapSpan(
-  offsets: number[],
-  sentence: Sentence,
-  start: number,
-  end: number,
-  lines: ReturnType<typeof createLineIndex>,
-): Flag['span'] {
-  const from = offsets[sentence.start + start] ?? offsets[offsets.length - 1] ?? 0;
-  const last = end > start ? offsets[sentence.start + end - 1] : undefined;
-  const to = last === undefined ? from : last + 1;
-  return lines.toSpan(from, to);
 }
 
 function describeFlaggedRules(flags: Flag[], packs: LoadedPacks): RuleInfo[] {

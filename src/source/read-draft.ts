@@ -29,6 +29,15 @@ export function draftFromText(path: string, text: string, format: Draft['format'
  * `file-unreadable` (or `path-missing` when it has gone).
  */
 export async function readDraft(path: string, cwd: string): Promise<Draft | { skipped: string }> {
+  const text = await readDraftText(path, cwd);
+  return typeof text === 'string' ? draftFromText(path, text, draftFormat(path)) : text;
+}
+
+/**
+ * Reads a draft's text without parsing it, so a caller can skip off-topic files before the
+ * (much slower) Markdown parse. Same rules for binary and unreadable files as `readDraft`.
+ */
+export async function readDraftText(path: string, cwd: string): Promise<string | { skipped: string }> {
   let bytes: Uint8Array;
   try {
     bytes = await readFile(resolve(cwd, path));
@@ -43,7 +52,7 @@ export async function readDraft(path: string, cwd: string): Promise<Draft | { sk
   } catch {
     return { skipped: 'binary file' };
   }
-  return draftFromText(path, text, draftFormat(path));
+  return text;
 }
 
 function readError(error: NodeJS.ErrnoException, path: string): FirnlineError {
