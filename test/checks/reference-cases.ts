@@ -1,0 +1,179 @@
+/**
+ * One agreeing and one conflicting sentence per reference value of the built-in pack, in our own
+ * words (invented museums, newsletters and teams), each with the quantity the parser should read
+ * as an interval in the canonical unit. The source of each reference range is named beside it.
+ */
+import type { Dimension } from '../../src/types.js';
+
+/** A sentence and the one quantity in it: its text, dimension, interval, and stated unit. */
+export type Said = [sentence: string, text: string, dimension: Dimension, low: number, high: number, statedUnit?: string];
+
+/** Reference id, agreeing sentence, conflicting sentence. */
+export type Case = [id: string, agrees: Said, conflicts: Said];
+
+const Y = 'duration';
+const A = 'age';
+const C = 'concentration';
+const T = 'temperature-change';
+const L = 'length';
+
+export const CASES: Case[] = [
+  // Petit et al. 1999, Nature 399, 429-436 (doi 10.1038/20859)
+  ['vostok-record-span', ['The Vostok record at the Harbour Museum reaches back about 420,000 years.', 'about 420,000 years', Y, 400_000, 440_000], ['Our newsletter claimed the Vostok record spans 800,000 years.', '800,000 years', Y, 795_000, 805_000]],
+  // Vostok 5G review abstract and CNRS dossier (verified pages)
+  ['vostok-drilled-depth', ['The Vostok drill reached 3,623 metres in January 1998.', '3,623 metres', L, 3622.5, 3623.5], ['The Vostok drill reached 2,000 metres before stopping.', '2,000 metres', L, 1950, 2050]],
+  // NSF Ice Core Facility inventory: Vostok
+  ['vostok-undisturbed-depth', ['Vostok ice stays undisturbed down to about 3,350 metres.', 'about 3,350 metres', L, 3300, 3400], ['Vostok ice stays undisturbed down to 3,600 metres.', '3,600 metres', L, 3550, 3650]],
+  // Petit et al. 1999
+  ['vostok-glacial-cycles', ['Vostok holds four glacial cycles.', 'four', 'count', 4, 4], ['Vostok holds eight glacial cycles.', 'eight', 'count', 8, 8]],
+  // Jouzel et al. 2007 (doi 10.1126/science.1141038); Lüthi et al. 2008 (doi 10.1038/nature06949)
+  ['edc-record-span', ['The EPICA Dome C record reaches back about 800,000 years.', 'about 800,000 years', Y, 780_000, 820_000], ['The EPICA Dome C record reaches back 400,000 years.', '400,000 years', Y, 395_000, 405_000]],
+  // Lüthi et al. 2008; EPICA project page
+  ['edc-drilled-depth', ['At Dome C the drill stopped at 3,270 metres.', '3,270 metres', L, 3265, 3275], ['At Dome C the drill stopped at 4,500 metres.', '4,500 metres', L, 4450, 4550]],
+  // EPICA community members 2004 (doi 10.1038/nature02599)
+  ['edc-glacial-cycles', ['The Dome C core spans eight glacial cycles.', 'eight', 'count', 8, 8], ['The Dome C core spans four glacial cycles.', 'four', 'count', 4, 4]],
+  // Oerter & EPICA team 2008
+  ['edml-drilled-depth', ['At Kohnen the EDML drill reached 2,774 metres.', '2,774 metres', L, 2773.5, 2774.5], ['At Kohnen the EDML drill reached 3,500 metres.', '3,500 metres', L, 3450, 3550]],
+  // Motoyama 2007 (doi 10.2204/iodp.sd.5.05.2007)
+  ['dome-fuji-drilled-depth', ['The second Dome Fuji core ended at 3,035 metres.', '3,035 metres', L, 3034.5, 3035.5], ['The second Dome Fuji core ended at 2,500 metres.', '2,500 metres', L, 2450, 2550]],
+  // Motoyama 2007; Dome Fuji Ice Core Project Members 2017 (from memory)
+  ['dome-fuji-record-span', ['The Dome Fuji record spans about 720,000 years.', 'about 720,000 years', Y, 700_000, 740_000], ['The Dome Fuji record spans 300,000 years.', '300,000 years', Y, 295_000, 305_000]],
+  // Dansgaard et al. 1996 (verified page)
+  ['grip-depth-and-span', ['The GRIP core is 3,029 metres long.', '3,029 metres', L, 3028.5, 3029.5], ['The GRIP core is 1,200 metres long.', '1,200 metres', L, 1150, 1250]],
+  // Lüthi et al. 2008 and later reports
+  ['oldest-continuous-ice-core-record', ['The oldest continuous ice-core record so far covers about 800,000 years.', 'about 800,000 years', Y, 780_000, 820_000], ['The oldest continuous ice-core record covers 3 million years.', '3 million years', Y, 2_500_000, 3_500_000]],
+  // Beyond EPICA - Oldest Ice consortium 2025 (verified page)
+  ['beyond-epica-drilled-depth', ['Beyond EPICA hit bedrock at about 2,800 metres.', 'about 2,800 metres', L, 2750, 2850], ['Beyond EPICA hit bedrock at 3,900 metres.', '3,900 metres', L, 3850, 3950]],
+  // Yan et al. 2019 (doi 10.1038/s41586-019-1692-3)
+  ['allan-hills-oldest-ice', ['Ice from the Allan Hills is up to 2.7 million years old.', '2.7 million years', A, 2_650_000, 2_750_000], ['Ice from the Allan Hills is 10 million years old.', '10 million years', A, 9_500_000, 10_500_000]],
+  // Caillon et al. 2003 (doi 10.1126/science.1078758)
+  ['delta-age-vostok', ['At Vostok the gas age trails the ice by about 4,000 years.', 'about 4,000 years', Y, 3500, 4500], ['At Vostok the gas age trails the ice by 20 years.', '20 years', Y, 15, 25]],
+  // Loulergue et al. 2007 (from memory)
+  ['delta-age-edc', ['At Dome C the gas age trails the ice by 2,000 to 5,000 years.', '2,000 to 5,000 years', Y, 2000, 5000], ['At Dome C the gas age trails the ice by 50 years.', '50 years', Y, 45, 55]],
+  // Lüthi et al. 2008; Bereiter et al. 2015 (doi 10.1002/2014GL061957)
+  ['co2-lowest-800kyr', ['The lowest CO2 in the ice was about 172 ppm.', 'about 172 ppm', C, 165, 179], ['The lowest CO2 in the ice was 100 ppm.', '100 ppm', C, 99.5, 100.5]],
+  // Forster et al. 2021 (IPCC AR6 WG1 ch. 7); Monnin et al. 2001
+  ['co2-lgm', ['During the Last Glacial Maximum CO2 stood near 190 ppm.', 'near 190 ppm', C, 185, 195], ['During the Last Glacial Maximum CO2 stood at 250 ppm.', '250 ppm', C, 249.5, 250.5]],
+  // Lüthi et al. 2008; Siegenthaler et al. 2005
+  ['co2-glacial-minimum-typical', ['In each ice age CO2 sank to about 185 ppm.', 'about 185 ppm', C, 180, 190], ['In each ice age CO2 sank to 120 ppm.', '120 ppm', C, 119.5, 120.5]],
+  // Lüthi et al. 2008; Siegenthaler et al. 2005
+  ['co2-interglacial-maximum-typical', ['In warm periods CO2 reached about 280 ppm.', 'about 280 ppm', C, 270, 290], ['In warm periods CO2 reached 400 ppm.', '400 ppm', C, 399.5, 400.5]],
+  // Lüthi et al. 2008
+  ['co2-highest-preindustrial-800kyr', ['Natural CO2 in the ice never rose above about 300 ppm.', 'about 300 ppm', C, 290, 310], ['Natural CO2 in the ice never rose above 350 ppm.', '350 ppm', C, 349.5, 350.5]],
+  // Fischer et al. 1999 (doi 10.1126/science.283.5408.1712); Caillon et al. 2003
+  ['co2-glacial-interglacial-amplitude', ['From glacial to interglacial, CO2 rose by about 90 ppm.', 'about 90 ppm', C, 85, 95], ['From glacial to interglacial, CO2 rose by 300 ppm.', '300 ppm', C, 299.5, 300.5]],
+  // IPCC AR6 SPM (doi 10.1017/9781009157896.001); Gulev et al. 2021 (from memory)
+  ['co2-preindustrial-1750', ['The pre-industrial CO2 level was about 278 ppm.', 'about 278 ppm', C, 273, 283], ['The pre-industrial CO2 level was 320 ppm.', '320 ppm', C, 319.5, 320.5]],
+  // Monnin et al. 2001; Pedro et al. 2012
+  ['co2-deglacial-rise-magnitude', ['Over the deglaciation CO2 rose by about 80 ppm.', 'about 80 ppm', C, 75, 85], ['Over the deglaciation CO2 rose by 200 ppm.', '200 ppm', C, 199.5, 200.5]],
+  // Monnin et al. 2001; Marcott et al. 2014 (doi 10.1038/nature13799)
+  ['co2-deglacial-rise-duration', ['The deglacial CO2 increase took about 7,000 years.', 'about 7,000 years', Y, 6500, 7500], ['The deglacial CO2 increase took 500 years.', '500 years', Y, 450, 550]],
+  // Marcott et al. 2014
+  ['co2-deglacial-abrupt-step', ['CO2 made abrupt steps of about 12 ppm.', 'about 12 ppm', C, 11, 13], ['CO2 made abrupt steps of 60 ppm.', '60 ppm', C, 59.5, 60.5]],
+  // Takahashi et al. 1993 (computed); Sigman & Boyle 2000 (from memory)
+  ['deglacial-co2-from-ocean-warming', ['Ocean warming alone explains about 20 ppm of CO2.', 'about 20 ppm', C, 18, 22], ['Ocean warming alone explains 90 ppm of CO2.', '90 ppm', C, 89.5, 90.5]],
+  // Monnin et al. 2001 (computed: 76 ppm / ~6,000 yr)
+  ['co2-deglacial-mean-rate', ['During the deglaciation CO2 climbed about 0.012 ppm per year.', 'about 0.012 ppm per year', 'concentration-rate', 0.011, 0.013], ['During the deglaciation CO2 climbed 2 ppm per year.', '2 ppm per year', 'concentration-rate', 1.95, 2.05]],
+  // IPCC AR6 SPM A.2.1
+  ['co2-increase-since-1750-pct-2019', ['CO2 has risen about 47% since pre-industrial times.', 'about 47%', 'percent', 45, 49], ['CO2 has risen 10% since pre-industrial times.', '10%', 'percent', 9.5, 10.5]],
+  // NOAA Global Monitoring Laboratory annual means (verified page)
+  ['co2-global-2019', ['In 2019 global CO2 averaged 410 ppm.', '410 ppm', C, 409.5, 410.5], ['In 2019 global CO2 averaged 380 ppm.', '380 ppm', C, 379.5, 380.5]],
+  // NOAA Research 2024 press release; WMO Greenhouse Gas Bulletin No. 20
+  ['co2-global-2023', ['In 2023 global CO2 averaged 419 ppm.', '419 ppm', C, 418.5, 419.5], ['In 2023 global CO2 averaged 400 ppm.', '400 ppm', C, 399.5, 400.5]],
+  // WMO Greenhouse Gas Bulletin No. 21
+  ['co2-global-2024', ['In 2024 global CO2 averaged 423.9 ppm.', '423.9 ppm', C, 423.85, 423.95], ['In 2024 global CO2 averaged 440 ppm.', '440 ppm', C, 439.5, 440.5]],
+  // NOAA GML / Scripps Mauna Loa annual means
+  ['co2-mlo-2023', ['At Mauna Loa, CO2 averaged 421 ppm in 2023.', '421 ppm', C, 420.5, 421.5], ['At Mauna Loa, CO2 averaged 410 ppm in 2023.', '410 ppm', C, 409.5, 410.5]],
+  // NOAA / Scripps May-peak press releases
+  ['co2-mlo-may-2024', ['At Mauna Loa the May 2024 CO2 peak was 426.9 ppm.', '426.9 ppm', C, 426.85, 426.95], ['At Mauna Loa the May 2024 CO2 peak was 415 ppm.', '415 ppm', C, 414.5, 415.5]],
+  // NOAA / Scripps May-peak press releases
+  ['co2-mlo-may-2025', ['At Mauna Loa the May 2025 CO2 peak passed 430 ppm.', '430 ppm', C, 429.5, 430.5], ['At Mauna Loa the May 2025 CO2 peak was 450 ppm.', '450 ppm', C, 449.5, 450.5]],
+  // Lan, Tans & Thoning, NOAA GML growth rates (doi 10.15138/9N0H-ZH07)
+  ['co2-growth-1960s', ['In the 1960s CO2 grew about 0.8 ppm per year.', 'about 0.8 ppm per year', 'concentration-rate', 0.75, 0.85], ['In the 1960s CO2 grew 2.5 ppm per year.', '2.5 ppm per year', 'concentration-rate', 2.45, 2.55]],
+  // Lan, Tans & Thoning, NOAA GML growth rates
+  ['co2-growth-2000s', ['In the 2000s CO2 grew about 1.9 ppm per year.', 'about 1.9 ppm per year', 'concentration-rate', 1.85, 1.95], ['In the 2000s CO2 grew 0.5 ppm per year.', '0.5 ppm per year', 'concentration-rate', 0.45, 0.55]],
+  // Lan, Tans & Thoning, NOAA GML growth rates
+  ['co2-growth-2010s', ['In the 2010s CO2 grew about 2.4 ppm per year.', 'about 2.4 ppm per year', 'concentration-rate', 2.35, 2.45], ['In the 2010s CO2 grew 5 ppm per year.', '5 ppm per year', 'concentration-rate', 4.95, 5.05]],
+  // WMO Greenhouse Gas Bulletin No. 21
+  ['co2-growth-2024', ['In 2024 CO2 grew by 3.5 ppm per year.', '3.5 ppm per year', 'concentration-rate', 3.45, 3.55], ['In 2024 CO2 grew by 1 ppm per year.', '1 ppm per year', 'concentration-rate', 0.95, 1.05]],
+  // computed from NOAA GML 2010s rate and Monnin et al. 2001
+  ['co2-modern-vs-deglacial-rate-ratio', ['CO2 now climbs about 190 times faster than in the deglaciation.', 'about 190 times', 'ratio', 180, 200], ['CO2 now climbs 10 times faster than in the deglaciation.', '10 times', 'ratio', 9.5, 10.5]],
+  // computed: 420 ppm = 0.042% (NOAA GML 2023 annual mean; Mauna Loa May 2025)
+  ['co2-420ppm-as-percent', ['Today CO2 makes up about 0.042% of the air.', 'about 0.042%', 'percent', 0.0415, 0.0425], ['Today CO2 makes up 4% of the air.', '4%', 'percent', 3.5, 4.5]],
+  // computed: 280 ppm = 0.028% (IPCC AR6 pre-industrial value)
+  ['co2-280ppm-as-percent', ['Pre-industrial CO2 made up 0.028% of the air.', '0.028%', 'percent', 0.0275, 0.0285], ['Pre-industrial CO2 made up 0.28% of the air.', '0.28%', 'percent', 0.275, 0.285]],
+  // Gulev et al. 2021 (from memory); Tierney et al. 2020; Annan et al. 2022
+  ['gmst-lgm-to-preindustrial-warming', ['Global temperature at the Last Glacial Maximum was about 6 °C lower.', 'about 6 °C', T, 5.5, 6.5, 'degC'], ['Global temperature at the Last Glacial Maximum was 15 °C lower.', '15 °C', T, 14.5, 15.5, 'degC']],
+  // Tierney et al. 2020 (doi 10.1038/s41586-020-2617-x)
+  ['gmst-lgm-cooling-tierney2020', ['Tierney and colleagues found cooling of 6.1 °C.', '6.1 °C', T, 6.05, 6.15, 'degC'], ['Tierney and colleagues found cooling of 2 °C.', '2 °C', T, 1.5, 2.5, 'degC']],
+  // Annan, Hargreaves & Mauritsen 2022 (doi 10.5194/cp-18-1883-2022)
+  ['gmst-lgm-cooling-annan2022', ['Annan and colleagues found cooling of 4.5 °C.', '4.5 °C', T, 4.45, 4.55, 'degC'], ['Annan and colleagues found cooling of 9 °C.', '9 °C', T, 8.5, 9.5, 'degC']],
+  // Pedro et al. 2012; Buizert et al. 2021; Jouzel et al. 2007 (from memory)
+  ['antarctic-deglacial-warming-isotope', ['Antarctic temperature rose about 9 °C out of the last ice age.', 'about 9 °C', T, 8, 10, 'degC'], ['Antarctic temperature rose 2 °C out of the last ice age.', '2 °C', T, 1.5, 2.5, 'degC']],
+  // Buizert et al. 2021 (doi 10.1126/science.abd2897)
+  ['east-antarctic-lgm-cooling-buizert2021', ['East Antarctica was about 5 °C colder then.', 'about 5 °C', T, 4.5, 5.5, 'degC'], ['East Antarctica was 15 °C colder then.', '15 °C', T, 14.5, 15.5, 'degC']],
+  // Buizert et al. 2021
+  ['west-antarctic-lgm-cooling-buizert2021', ['West Antarctica was about 10 °C colder then.', 'about 10 °C', T, 9, 11, 'degC'], ['West Antarctica was 3 °C colder then.', '3 °C', T, 2.5, 3.5, 'degC']],
+  // Dahl-Jensen et al. 1998 (doi 10.1126/science.282.5387.268)
+  ['greenland-lgm-cooling', ['Greenland was about 20 °C colder in the ice age.', 'about 20 °C', T, 18, 22, 'degC'], ['Greenland was 5 °C colder in the ice age.', '5 °C', T, 4.5, 5.5, 'degC']],
+  // verified encyclopedic page and Greenland ice-core literature
+  ['greenland-younger-dryas-end-warming', ['Greenland warming at the end of the Younger Dryas was about 10 °C.', 'about 10 °C', T, 9, 11, 'degC'], ['Greenland warming at the end of the Younger Dryas was 1 °C.', '1 °C', T, 0.5, 1.5, 'degC']],
+  // Arias et al. 2021 (IPCC AR6 Technical Summary, doi 10.1017/9781009157896.002)
+  ['ecs-ar6-very-likely', ['Climate sensitivity is about 3 °C.', 'about 3 °C', T, 2.5, 3.5, 'degC'], ['Climate sensitivity is 8 °C.', '8 °C', T, 7.5, 8.5, 'degC']],
+  // Annan & Hargreaves 2015 (EPILOG window); Mix et al. 2001 (from memory)
+  ['lgm-chronozone', ['The Last Glacial Maximum peaked about 21,000 years ago.', 'about 21,000 years ago', A, 20_000, 22_000], ['The Last Glacial Maximum peaked 50,000 years ago.', '50,000 years ago', A, 49_500, 50_500]],
+  // Clark et al. 2009 (doi 10.1126/science.1172873)
+  ['lgm-ice-sheet-maximum', ['At the LGM the ice sheets stood largest about 22,000 years ago.', 'about 22,000 years ago', A, 21_000, 23_000], ['At the LGM the ice sheets stood largest 40,000 years ago.', '40,000 years ago', A, 39_500, 40_500]],
+  // Chowdhry Beeman et al. 2019; Clark et al. 2009; Pedro et al. 2012
+  ['termination-1-start', ['The deglaciation began about 18,000 years ago.', 'about 18,000 years ago', A, 17_500, 18_500], ['The deglaciation began 30,000 years ago.', '30,000 years ago', A, 29_500, 30_500]],
+  // Chowdhry Beeman et al. 2019; Walker et al. 2009
+  ['termination-1-end', ['The deglaciation ended about 11,500 years ago.', 'about 11,500 years ago', A, 11_000, 12_000], ['The deglaciation ended 5,000 years ago.', '5,000 years ago', A, 4_950, 5_050]],
+  // Chowdhry Beeman et al. 2019 (computed); Clark et al. 2012
+  ['termination-1-duration', ['The deglaciation lasted about 7,000 years.', 'about 7,000 years', Y, 6500, 7500], ['The deglaciation lasted 500 years.', '500 years', Y, 450, 550]],
+  // verified encyclopedic page; Rasmussen et al. 2006 (from memory)
+  ['younger-dryas-start', ['The Younger Dryas began about 12,900 years ago.', 'about 12,900 years ago', A, 12_850, 12_950], ['The Younger Dryas began 20,000 years ago.', '20,000 years ago', A, 19_500, 20_500]],
+  // Walker et al. 2009 (doi 10.1002/jqs.1227)
+  ['younger-dryas-end', ['The Younger Dryas ended about 11,700 years ago.', 'about 11,700 years ago', A, 11_650, 11_750], ['The Younger Dryas ended 9,000 years ago.', '9,000 years ago', A, 8_950, 9_050]],
+  // computed from the start and end rows
+  ['younger-dryas-duration', ['The Younger Dryas lasted about 1,200 years.', 'about 1,200 years', Y, 1150, 1250], ['The Younger Dryas lasted 5,000 years.', '5,000 years', Y, 4950, 5050]],
+  // Pedro et al. 2016 (doi 10.1038/ngeo2580); Putnam et al. 2010 (doi 10.1038/ngeo962)
+  ['acr-start', ['The Antarctic Cold Reversal began about 14,700 years ago.', 'about 14,700 years ago', A, 14_650, 14_750], ['The Antarctic Cold Reversal began 25,000 years ago.', '25,000 years ago', A, 24_500, 25_500]],
+  // Pedro et al. 2016; Putnam et al. 2010
+  ['acr-end', ['The Antarctic Cold Reversal ended about 13,000 years ago.', 'about 13,000 years ago', A, 12_900, 13_100], ['The Antarctic Cold Reversal ended 8,000 years ago.', '8,000 years ago', A, 7_950, 8_050]],
+  // Walker et al. 2009: 11,700 yr b2k
+  ['holocene-start', ['The Holocene began about 11,700 years ago.', 'about 11,700 years ago', A, 11_650, 11_750], ['The Holocene began 20,000 years ago.', '20,000 years ago', A, 19_500, 20_500]],
+  // Kopp et al. 2009 (doi 10.1038/nature08686)
+  ['last-interglacial', ['The Eemian was about 125,000 years ago.', 'about 125,000 years ago', A, 120_000, 130_000], ['The Eemian was 50,000 years ago.', '50,000 years ago', A, 49_500, 50_500]],
+  // Cohen & Gibbard 2010 (ICS chart, verified page)
+  ['pleistocene-base', ['The Pleistocene began 2.58 million years ago.', '2.58 million years ago', A, 2_575_000, 2_585_000], ['The Pleistocene began 10,000 years ago.', '10,000 years ago', A, 9_950, 10_050]],
+  // Clark et al. 2006 (from memory); Yan et al. 2019
+  ['mid-pleistocene-transition', ['The Mid-Pleistocene Transition happened about a million years ago.', 'about a million years ago', A, 900_000, 1_100_000], ['The Mid-Pleistocene Transition happened 100,000 years ago.', '100,000 years ago', A, 99_500, 100_500]],
+  // Hays, Imbrie & Shackleton 1976 (doi 10.1126/science.194.4270.1121)
+  ['milankovitch-eccentricity-period', ['Eccentricity varies on a cycle of about 100,000 years.', 'about 100,000 years', Y, 95_000, 105_000], ['Eccentricity varies on a cycle of 10,000 years.', '10,000 years', Y, 9_950, 10_050]],
+  // Hays, Imbrie & Shackleton 1976
+  ['milankovitch-obliquity-period', ['Obliquity varies every 41,000 years.', '41,000 years', Y, 40_500, 41_500], ['Obliquity varies every 100,000 years.', '100,000 years', Y, 99_500, 100_500]],
+  // Hays, Imbrie & Shackleton 1976
+  ['milankovitch-precession-period', ['Precession repeats every 19,000 to 23,000 years.', '19,000 to 23,000 years', Y, 19_000, 23_000], ['Precession repeats every 41,000 years.', '41,000 years', Y, 40_500, 41_500]],
+  // Fischer et al. 1999
+  ['lag-fischer1999', ['Early studies found CO2 lagged by about 600 years.', 'about 600 years', Y, 550, 650], ['Early studies found CO2 lagged by 5,000 years.', '5,000 years', Y, 4950, 5050]],
+  // Caillon et al. 2003
+  ['lag-caillon2003-termination-iii', ['Caillon found CO2 lagged by about 800 years.', 'about 800 years', Y, 750, 850], ['Caillon found CO2 lagged by 3,000 years.', '3,000 years', Y, 2950, 3050]],
+  // Monnin et al. 2001
+  ['lag-monnin2001', ['Monnin found CO2 lagged by about 800 years.', 'about 800 years', Y, 750, 850], ['Monnin found CO2 lagged by 4,000 years.', '4,000 years', Y, 3950, 4050]],
+  // Pedro et al. 2012 (doi 10.5194/cp-8-1213-2012)
+  ['lag-pedro2012', ['Pedro found CO2 lagged by about 200 years.', 'about 200 years', Y, 150, 250], ['Pedro found CO2 lagged by 1,000 years.', '1,000 years', Y, 950, 1050]],
+  // Parrenin et al. 2013 (doi 10.1126/science.1226368)
+  ['lag-parrenin2013', ['Parrenin found CO2 lagged by under 200 years.', 'under 200 years', Y, 0, 200], ['Parrenin found CO2 lagged by 800 years.', '800 years', Y, 750, 850]],
+  // Pedro et al. 2012; Parrenin et al. 2013; Chowdhry Beeman et al. 2019
+  ['antarctic-co2-phasing-termination-1-consensus', ['CO2 lagged Antarctic warming by about 300 years.', 'about 300 years', Y, 250, 350], ['CO2 lagged Antarctic warming by 5,000 years.', '5,000 years', Y, 4950, 5050]],
+  // Shakun et al. 2012 (doi 10.1038/nature10915; from memory)
+  ['fraction-global-warming-after-co2-rise', ['About 90% of global warming came after CO2 began to rise.', 'About 90%', 'percent', 88, 92], ['Only 20% of global warming came after CO2 began to rise.', '20%', 'percent', 19.5, 20.5]],
+  // Lambeck et al. 2014 (doi 10.1073/pnas.1411762111)
+  ['lgm-sea-level-lowstand', ['At the Last Glacial Maximum sea level stood about 130 metres lower.', 'about 130 metres', L, 125, 135], ['At the Last Glacial Maximum sea level stood 20 metres lower.', '20 metres', L, 19.5, 20.5]],
+  // Clark et al. 2012 (doi 10.1073/pnas.1116619109)
+  ['deglacial-sea-level-rise', ['Over the deglaciation sea level rose about 80 metres.', 'about 80 metres', L, 75, 85], ['Over the deglaciation sea level rose 10 metres.', '10 metres', L, 9.5, 10.5]],
+  // computed envelope: NOAA 2023 global mean to Mauna Loa May 2025 (dated 2025-05-31)
+  ['co2-present-day', ['Today CO2 stands at about 425 ppm.', 'about 425 ppm', C, 420, 430], ['Today CO2 stands at 380 ppm.', '380 ppm', C, 379.5, 380.5]],
+  // computed envelope: NOAA GML 2020-2022 and WMO 2024 growth (dated 2024-12-31)
+  ['co2-growth-recent', ['Today CO2 grows about 2.5 ppm per year.', 'about 2.5 ppm per year', 'concentration-rate', 2.4, 2.6], ['Today CO2 grows 0.5 ppm per year.', '0.5 ppm per year', 'concentration-rate', 0.45, 0.55]],
+];
