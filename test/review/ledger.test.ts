@@ -1,11 +1,17 @@
 import { mkdtemp, readFile, writeFile, readdir } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { execFile } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
+import { promisify } from 'node:util';
 import { describe, expect, it } from 'vitest';
 import { FirnlineError } from '../../src/errors.js';
 import { appendSignoffs, appendToLedgerText } from '../../src/review/append-signoffs.js';
 import { readLedger } from '../../src/review/read-ledger.js';
 import type { SignoffEntry } from '../../src/review/signoff-entry.js';
+
+const run = promisify(execFile);
+const here = (name: string) => fileURLToPath(new URL(name, import.meta.url));
 
 // Invented sign-offs for an invented museum newsletter (demo data, not facts under test).
 const entry = (n: number, extra: Partial<SignoffEntry> = {}): SignoffEntry => ({
@@ -105,6 +111,17 @@ describe('appendSignoffs', () => {
     expect(claims).toEqual(Array.from({ length: 25 }, (_, i) => entry(i + 1).claim));
     expect(await readdir(join(file, '..'))).toEqual(['firnline-signoffs.yaml']);
   });
+
+  it('loses no entry when two processes append 15 entries each, one call at a time', async () => {
+    const file = await tempLedger();
+    const child = (prefix: string) =>
+      run(process.execPath, ['--import', here('./ts-register.mjs'), here('./append-child.mjs'), file, prefix, '15']);
+    await Promise.all([child('a'), child('b')]);
+    const claims = (await readLedger(file)).signoffs.map((e) => e.claim);
+    expect(claims).toHaveLength(30);
+    // Each writer's own entries stay in the order it wrote them.
+    expect(claims.filter((c) => c.startsWith('ca'))).toEqual(Array.from({ length: 15 }, (_, i) => `ca${String(i + 1).padStart(9, '0')}`));
+  }, 60_000);
 
   it('refuses to write into a broken ledger', async () => {
     const file = await tempLedger('signoffs: [\n');
