@@ -33,9 +33,9 @@ const REGIONAL = 'scope.regional-record-as-global';
 const ANT_LAG = 'scope.antarctic-lag-as-global';
 const SINGLE = 'logic.single-cause';
 const CERTAIN = 'logic.ice-core-certainty';
-const SOLUBILITY = 'direction.warm-water-holds-less-co2';
+const SOLUBILITY = 'direction.co2-solubility-falls-with-warming';
 const AIR_AGE = 'direction.trapped-air-younger-than-ice';
-const GLOBAL_ORDER = 'direction.co2-led-global-warming';
+const GLOBAL_ORDER = 'direction.global-co2-ahead-of-warming';
 
 type Row = [CorpusItem['scenario'], string | string[], string[]];
 
