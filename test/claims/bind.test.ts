@@ -1,0 +1,59 @@
+import { describe, expect, it } from 'vitest';
+import { bindQuantities, findTerms } from '../../src/claims/bind.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+import type { Dimension, Quantity } from '../../src/types.js';
+
+const packs = await loadPacks([]);
+
+/** A hand-built quantity for `text` inside `sentence` (the parser's job, done by hand here). */
+function q(sentence: string, text: string, dimension: Dimension, low: number, high: number): Quantity {
+  const start = sentence.indexOf(text);
+  return { text, start, end: start + text.length, value: (low + high) / 2, low, high, dimension, unit: 'yr', statedUnit: '' };
+}
+
+describe('bindQuantities', () => {
+  it('binds two subjects in one sentence each to its own number', () => {
+    const s = 'Vostok reaches back 420,000 years and EPICA Dome C 800,000 years.';
+    const quantities = [q(s, '420,000 years', 'duration', 415e3, 425e3), q(s, '800,000 years', 'duration', 795e3, 805e3)];
+    expect(bindQuantities(s, quantities, packs)).toEqual({
+      bindings: [
+        { quantityIndex: 0, referenceId: 'vostok-record-span' },
+        { quantityIndex: 1, referenceId: 'edc-record-span' },
+      ],
+      ambiguous: [],
+    });
+  });
+
+  it('binds a present-day and a pre-industrial level in one sentence by the nearest words', () => {
+    const s = 'CO2 now tops 420 ppm, up from about 280 ppm before the industrial revolution.';
+    const quantities = [q(s, '420 ppm', 'concentration', 419.5, 420.5), q(s, 'about 280 ppm', 'concentration', 275, 285)];
+    expect(bindQuantities(s, quantities, packs).bindings).toEqual([
+      { quantityIndex: 0, referenceId: 'co2-present-day' },
+      { quantityIndex: 1, referenceId: 'co2-preindustrial-1750' },
+    ]);
+  });
+
+  it('binds nothing when the quantity is of a dimension the value does not accept', () => {
+    const s = 'The Vostok record reaches back 3,600 metres.';
+    expect(bindQuantities(s, [q(s, '3,600 metres', 'length', 3550, 3650)], packs).bindings).toEqual([{ quantityIndex: 0, referenceId: 'vostok-drilled-depth' }]);
+    expect(bindQuantities(s, [q(s, '3,600 metres', 'count', 3550, 3650)], packs)).toEqual({ bindings: [], ambiguous: [] });
+  });
+
+  it('lets a veto term stop a binding', () => {
+    // vostok-record-span is vetoed by delta-age words: the 4,000 years is the gas-age gap, not the span.
+    const s = 'In the Vostok record the gas age trails the ice by 4,000 years.';
+    expect(bindQuantities(s, [q(s, '4,000 years', 'duration', 3950, 4050)], packs).bindings).toEqual([{ quantityIndex: 0, referenceId: 'delta-age-vostok' }]);
+  });
+
+  it('lists a quantity as ambiguous when two values tie', () => {
+    // Both record-span values are satisfied and their core names stand equally far from the number.
+    const s = 'Vostok 500,000 years EPICA Dome C record.';
+    const result = bindQuantities(s, [q(s, '500,000 years', 'duration', 495e3, 505e3)], packs);
+    expect(result).toEqual({ bindings: [], ambiguous: [0] });
+  });
+
+  it('matches terms case-insensitively on word boundaries, including CO₂ with a subscript', () => {
+    expect(findTerms('Carbon dioxide and CO₂ and co2', packs).get('co2')).toEqual([[0, 14], [19, 22], [27, 30]]);
+    expect(findTerms('the interglacial', packs).has('glacial')).toBe(false);
+  });
+});
