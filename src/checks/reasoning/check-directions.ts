@@ -1,0 +1,37 @@
+/**
+ * Direction facts: an effect stated the wrong way round ("warmer water holds more CO2"). Each
+ * fact in the packs lists regular expressions for wrong phrasings and, optionally, right ones;
+ * a sentence that states the right direction is left alone even when a wrong pattern also matches.
+ */
+import { FirnlineError } from '../../errors.js';
+import type { FlagDraft } from '../../types.js';
+import type { CompiledPacks } from './compile-packs.js';
+import { guardedMatches, MAX_SENTENCE_LENGTH, TIME_LIMIT_MS } from './time-limit.js';
+
+/** Flags (with offsets into `sentence`) for every direction fact stated the wrong way round. */
+export function checkDirections(sentence: string, compiled: CompiledPacks): FlagDraft[] {
+  if (sentence.length > MAX_SENTENCE_LENGTH) return [];
+  const flags: FlagDraft[] = [];
+  for (const { fact, wrong, right, file } of compiled.directions) {
+    const run = (regex: RegExp) => {
+      const found = guardedMatches(regex, sentence);
+      if (found === undefined) {
+        throw new FirnlineError('pack-regex-slow', `direction fact ${fact.id}: /${regex.source}/ ran longer than ${TIME_LIMIT_MS} ms on one sentence; simplify it`, { file });
+      }
+      return found;
+    };
+    if (right.some((regex) => run(regex).length > 0)) continue;
+    const hit = wrong.flatMap(run)[0];
+    if (hit === undefined) continue;
+    flags.push({
+      ruleId: fact.id.startsWith('direction.') ? fact.id : `direction.${fact.id}`,
+      level: fact.level,
+      start: hit.start,
+      end: hit.end,
+      reason: `This states the effect the wrong way round. ${fact.statement}`,
+      suggestion: `Reword so that the direction matches the sources: ${fact.statement}`,
+      sources: fact.sources,
+    });
+  }
+  return flags;
+}

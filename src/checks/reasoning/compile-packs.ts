@@ -1,0 +1,88 @@
+/**
+ * The loaded packs compiled once for the reasoning checks: cue words into phrases, each check's
+ * cheap prefilter, direction facts and pattern rules into regular expressions. Cached per
+ * LoadedPacks object, so every sentence of a run shares one compilation.
+ */
+import { compilePhrases } from '../../claims/frames-match.js';
+import { FRAME_WORDS } from '../../claims/frames-words.js';
+import { DEFAULT_STANCE_WORDS, type StanceWords } from '../../claims/stance.js';
+import { FirnlineError } from '../../errors.js';
+import { regexProblem } from '../../rulepack/regex-problem.js';
+import type { DirectionFact, LoadedPacks, PatternRule, ReasoningCheck } from '../../rulepack/types.js';
+import { compileSlots, type DetectorEntry, type Slots } from './detector.js';
+import { DETECTORS } from './registry.js';
+import { MAX_PATTERN_LENGTH } from './time-limit.js';
+
+/** A reasoning check ready to run. */
+export interface CompiledCheck {
+  check: ReasoningCheck;
+  entry: DetectorEntry;
+  words: Slots;
+  stance: StanceWords;
+  /** One regex per key cue list; the detector runs only when all of them match. */
+  prefilter: RegExp[];
+}
+
+/** Everything the reasoning stage runs. */
+export interface CompiledPacks {
+  checks: CompiledCheck[];
+  directions: { fact: DirectionFact; wrong: RegExp[]; right: RegExp[]; file: string }[];
+  patterns: { rule: PatternRule; regex?: RegExp; file: string }[];
+}
+
+const cache = new WeakMap<LoadedPacks, CompiledPacks>();
+
+/** Compiles (once per packs object). Throws FirnlineError for a pattern that is unsafe to run. */
+export function compilePacks(packs: LoadedPacks): CompiledPacks {
+  const hit = cache.get(packs);
+  if (hit !== undefined) return hit;
+  const fileOf = (has: (p: LoadedPacks['packs'][number]) => boolean) => packs.packs.find(has)?.file ?? '(rule pack)';
+  const compiled: CompiledPacks = {
+    checks: packs.reasoning.flatMap((check) => {
+      const entry = DETECTORS[check.id];
+      if (entry === undefined || !check.enabled) return [];
+      const words = compileSlots(check.words);
+      const stance = {
+        reported: [...DEFAULT_STANCE_WORDS.reported, ...compilePhrases(check.words['reported'] ?? [])],
+        answered: [...DEFAULT_STANCE_WORDS.answered, ...compilePhrases(check.words['answered'] ?? [])],
+        clauseBreaks: FRAME_WORDS.clauseBreaks,
+      };
+      return [{ check, entry, words, stance, prefilter: entry.keys.map((k) => prefilterFor(check.words[k] ?? [])) }];
+    }),
+    directions: packs.directions.map((fact) => {
+      const file = fileOf((p) => p.directions.includes(fact));
+      const compile = (source: string) => safeRegex(source, `direction fact ${fact.id}`, file);
+      return { fact, wrong: fact.wrong.map(compile), right: (fact.right ?? []).map(compile), file };
+    }),
+    patterns: packs.patterns.map((rule) => {
+      const file = fileOf((p) => p.patterns.includes(rule));
+      if (rule.match !== undefined && rule.match.length > MAX_PATTERN_LENGTH) {
+        throw new FirnlineError('pack-pattern', `pattern ${rule.id}: match is longer than ${MAX_PATTERN_LENGTH} characters`, { file });
+      }
+      return { rule, file, ...(rule.regex === undefined ? {} : { regex: safeRegex(rule.regex, `pattern ${rule.id}`, file) }) };
+    }),
+  };
+  cache.set(packs, compiled);
+  return compiled;
+}
+
+/** Check ids in the packs that no detector implements (for the loader or `explain` to report). */
+export function unknownReasoningChecks(packs: LoadedPacks): string[] {
+  return packs.reasoning.filter((c) => DETECTORS[c.id] === undefined).map((c) => c.id);
+}
+
+function safeRegex(source: string, what: string, file: string): RegExp {
+  const problem = source.length > MAX_PATTERN_LENGTH ? `longer than ${MAX_PATTERN_LENGTH} characters` : regexProblem(source);
+  if (problem !== undefined) throw new FirnlineError('pack-regex', `${what}: ${problem}`, { file });
+  return new RegExp(source, 'iu');
+}
+
+// The first word of each phrase, cut to four letters so inflections still pass ("lagged" → "lagg").
+function prefilterFor(phrases: readonly string[]): RegExp {
+  const stems = phrases.map((p) => {
+    const first = p.toLowerCase().replace(/-/gu, ' ').trim().split(/\s+/u)[0]?.replace(/\*$/u, '') ?? '';
+    return [...first].slice(0, 4).join('').replace(/[.*+?^${}()|[\]\\]/gu, '\\$&');
+  });
+  const body = [...new Set(stems.filter((s) => s.length > 0 && s !== '...'))].join('|');
+  return body.length === 0 ? /(?!)/u : new RegExp(`(?<![\\p{L}\\p{N}])(?:${body})`, 'iu');
+}

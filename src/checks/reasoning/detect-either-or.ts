@@ -1,0 +1,59 @@
+/**
+ * `logic.either-or-causation`: CO2 and temperature framed as alternatives, when each drives the other.
+ *
+ *   "The ice-core record shows that temperature drives CO2, not the other way round."
+ *                                                           ^^^^^^^^^^^^^^^^^^^^^^^ flagged
+ *   "...warming drives CO2, and CO2 does not drive warming."   (one direction asserted, the
+ *        ^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^      other denied: flagged)
+ *
+ * Fires on an either/or marker (`either-or`) in a sentence that names CO2, temperature and a
+ * causal word (`causal`), or on two causal statements in opposite directions joined by "or" or
+ * with one of them denied. A veto (`both`: "each drives the other", "feedback", "not either/or")
+ * anywhere in the sentence, or for a question anywhere in the paragraph, lets it pass.
+ */
+import { findPhrases, isNegated, type PhraseHit } from '../../claims/frames-match.js';
+import { nearestMention, subjectMentions } from '../../claims/frames-order.js';
+import { tokenizeSentence } from '../../claims/frames-tokens.js';
+import { spanOf, type Cue, type DetectInput, type DetectorEntry } from './detector.js';
+
+interface Causal {
+  hit: PhraseHit;
+  cause?: string;
+  effect?: string;
+  negated: boolean;
+}
+
+function causalStatements({ sentence, words }: DetectInput): Causal[] {
+  const mentions = subjectMentions(sentence, { co2: words('co2'), temperature: words('temperature') });
+  return findPhrases(sentence, words('causal')).map((hit) => {
+    const passive = [1, 2].some((k) => sentence.tokens[sentence.words[hit.last + k] ?? -1]?.text === 'by');
+    const left = nearestMention(sentence, mentions, hit, -1)?.kind;
+    const right = nearestMention(sentence, mentions, hit, 1)?.kind;
+    const [cause, effect] = passive ? [right, left] : [left, right];
+    return { hit, negated: isNegated(sentence, hit.first, words('negation')), ...(cause ? { cause } : {}), ...(effect ? { effect } : {}) };
+  });
+}
+
+function detect(input: DetectInput): Cue[] {
+  const { sentence, words, paragraph, index } = input;
+  if (findPhrases(sentence, words('both')).length > 0) return [];
+  if (sentence.text.trimEnd().endsWith('?')) {
+    const answered = paragraph.some((s, i) => i !== index && findPhrases(tokenizeSentence(s, [], null), words('both')).length > 0);
+    if (answered) return [];
+  }
+  const causal = causalStatements(input);
+  const names = (kind: string) => findPhrases(sentence, words(kind)).length > 0;
+  const marker = findPhrases(sentence, words('either-or'))[0];
+  if (marker !== undefined && causal.length > 0 && names('co2') && names('temperature')) return [spanOf(marker, marker)];
+  for (const [i, a] of causal.entries()) {
+    for (const b of causal.slice(i + 1)) {
+      const opposite = a.cause !== undefined && a.cause === b.effect && a.effect !== undefined && a.effect === b.cause && a.cause !== a.effect;
+      const joinedByOr = sentence.words.slice(a.hit.last + 1, b.hit.first).some((w) => sentence.tokens[w]?.text === 'or');
+      if (opposite && (joinedByOr || a.negated !== b.negated)) return [spanOf(a.hit, b.hit)];
+    }
+  }
+  return [];
+}
+
+/** The detector entry for the registry. */
+export const eitherOrCausation: DetectorEntry = { detect, keys: ['co2', 'temperature', 'causal'] };

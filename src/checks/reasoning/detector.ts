@@ -1,0 +1,50 @@
+/**
+ * What a reasoning detector is: a plain function from a tokenized sentence and the cue words of
+ * its check (from the rule pack) to the stretches of the sentence that carry the error.
+ */
+import { compilePhrases, type Phrase, type PhraseHit } from '../../claims/frames-match.js';
+import type { SentenceTokens } from '../../claims/frames-tokens.js';
+
+/** The cue-word lists of one check, by name; a list the pack leaves out is empty. */
+export type Slots = (name: string) => Phrase[];
+
+/** What a detector sees. `paragraph[index]` is the sentence; the rest is context. */
+export interface DetectInput {
+  sentence: SentenceTokens;
+  words: Slots;
+  paragraph: readonly string[];
+  index: number;
+}
+
+/** A stretch of the sentence to flag (UTF-16 offsets). */
+export interface Cue {
+  start: number;
+  end: number;
+}
+
+/** A detector and the cue-word lists that must all occur for it to fire (the cheap prefilter). */
+export interface DetectorEntry {
+  detect: (input: DetectInput) => Cue[];
+  keys: string[];
+}
+
+/** Compiles a check's `words` once. */
+export function compileSlots(words: Record<string, string[]>): Slots {
+  const compiled = new Map(Object.entries(words).map(([name, list]) => [name, compilePhrases(list)]));
+  return (name) => compiled.get(name) ?? [];
+}
+
+/** True when a hit of `blockers` overlaps `hit` or ends within `window` words before it, in its clause. */
+export function isBlocked(sentence: SentenceTokens, hit: PhraseHit, blockers: readonly PhraseHit[], window = 4): boolean {
+  const clause = sentence.tokens[sentence.words[hit.first] ?? 0]?.clause;
+  return blockers.some((b) => {
+    const sameClause = sentence.tokens[sentence.words[b.first] ?? 0]?.clause === clause;
+    const overlaps = b.first <= hit.last && b.last >= hit.first;
+    return overlaps || (sameClause && b.last < hit.first && hit.first - b.last <= window);
+  });
+}
+
+/** The stretch from one hit to another. */
+export function spanOf(from: { start: number }, to: { end: number }): Cue {
+  return { start: from.start, end: to.end };
+}
