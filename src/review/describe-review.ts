@@ -11,6 +11,9 @@
 import type { ReviewSummary } from './review-claims.js';
 import { foldClaimText } from './claim-id.js';
 
+/** Open claims listed one by one, at most; stale claims are always all listed. */
+export const MAX_OPEN_LINES = 20;
+
 /** Summary lines for `check --require-signoff`. */
 export function describeReview(review: ReviewSummary): string[] {
   const { counts } = review;
@@ -26,9 +29,12 @@ export function describeReview(review: ReviewSummary): string[] {
       lines.push(`  now:        ${foldClaimText(r.claim.text)}`);
     }
   }
-  for (const r of review.claims) {
-    if (r.status === 'open') lines.push(`open: ${r.claim.file}:${r.claim.span.start.line}:${r.claim.span.start.column} ${r.claim.id} ${foldClaimText(r.claim.text)}`);
+  // A first run on a large repository has hundreds of open claims: the checklist lists them all.
+  const open = review.claims.filter((r) => r.status === 'open');
+  for (const r of open.slice(0, MAX_OPEN_LINES)) {
+    lines.push(`open: ${r.claim.file}:${r.claim.span.start.line}:${r.claim.span.start.column} ${r.claim.id} ${foldClaimText(r.claim.text)}`);
   }
+  if (open.length > MAX_OPEN_LINES) lines.push(`... and ${open.length - MAX_OPEN_LINES} more open claims.`);
   if (counts.open + counts.stale > 0) {
     lines.push('To sign off: firnline checklist -o checklist.md, tick the boxes, then firnline signoff --from checklist.md --by "Your Name".');
   }

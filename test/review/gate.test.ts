@@ -5,7 +5,9 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { applyGate } from '../../src/cli/gate.js';
 import { appendSignoffs } from '../../src/review/append-signoffs.js';
+import { describeReview } from '../../src/review/describe-review.js';
 import { planSignoffs } from '../../src/review/plan-signoffs.js';
+import { reviewClaims } from '../../src/review/review-claims.js';
 import type { CheckResult, Claim, Flag } from '../../src/types.js';
 import { approve, makeClaim } from './make-claim.js';
 
@@ -101,5 +103,14 @@ describe('planSignoffs', () => {
     ['a waiver without a reason', { claimId: myth.id, decision: 'waived' as const }, 'signoff-no-reason'],
   ])('rejects %s', (_name, request, code) => {
     expect(() => planSignoffs([request], [myth], { file: 'l', signoffs: [] }, context)).toThrow(expect.objectContaining({ code }));
+  });
+});
+
+describe('describeReview', () => {
+  it('lists at most 20 open claims, then says how many more', () => {
+    const many = Array.from({ length: 23 }, (_, i) => makeClaim(F, i + 1, `Panel ${i + 1} gives CO2 near 190 ppm.`));
+    const lines = describeReview(reviewClaims(many, { file: 'l', signoffs: [] }));
+    expect(lines.filter((l) => l.startsWith('open: '))).toHaveLength(20);
+    expect(lines).toContain('... and 3 more open claims.');
   });
 });
