@@ -117,8 +117,9 @@ export const CASES: Case[] = [
   // Dahl-Jensen et al. 1998 (doi 10.1126/science.282.5387.268)
   ['greenland-lgm-cooling', ['Greenland was about 20 °C colder in the ice age.', 'about 20 °C', T, 18, 22, 'degC'], ['Greenland was 5 °C colder in the ice age.', '5 °C', T, 4.5, 5.5, 'degC']],
   // verified encyclopedic page and Greenland ice-core literature
-  ['greenland-younger-dryas-end-warming', ['Greenland warming at the end of the Younger Dryas was about 10 °C.', 'about 10 °C', T, 9, 11, 'degC'], ['Greenland warming at the end of the Younger Dryas was 1 °C.', '1 °C', T, 0.5, 1.5, 'degC']],
-  // Arias et al. 2021 (IPCC AR6 Technical Summary, doi 10.1017/9781009157896.002)
+  ['greenland-younger-dryas-end-warming', ['Greenland warmed by about 10 °C at the end of the Younger Dryas.', 'about 10 °C', T, 9, 11, 'degC'], ['Greenland warmed by 1 °C at the end of the Younger Dryas.', '1 °C', T, 0.5, 1.5, 'degC']],
+  // Arias et al. 2021 (IPCC AR6 Technical Summary, doi 10.1017/9781009157896.002). A sensitivity is always a
+  // change; the value also accepts a reading as temperature, since "is 3 °C" carries no cue for the parser.
   ['ecs-ar6-very-likely', ['Climate sensitivity is about 3 °C.', 'about 3 °C', T, 2.5, 3.5, 'degC'], ['Climate sensitivity is 8 °C.', '8 °C', T, 7.5, 8.5, 'degC']],
   // Annan & Hargreaves 2015 (EPILOG window); Mix et al. 2001 (from memory)
   ['lgm-chronozone', ['The Last Glacial Maximum peaked about 21,000 years ago.', 'about 21,000 years ago', A, 20_000, 22_000], ['The Last Glacial Maximum peaked 50,000 years ago.', '50,000 years ago', A, 49_500, 50_500]],
