@@ -1,0 +1,101 @@
+/**
+ * Finds the numbers in a sentence, before units: digits ("420,000", "8 × 10^5", "1.5 million"),
+ * number words ("half a million"), vague magnitudes ("tens of thousands of") and multipliers
+ * ("twice", "three-fold", "a third"). Overlaps go to the earliest, then the longest:
+ * in "half a million", [half a million] wins over [half].
+ */
+import { findMultipliers } from './find-multipliers.js';
+import { NUMBER_WORDS, readNumberWords } from './number-words.js';
+import { halfPlace, halfPlaceOfValue } from './precision.js';
+
+/** One number as written, with its value (scale applied) and its precision. */
+export interface Atom {
+  start: number;
+  end: number;
+  value: number;
+  /** Half the last significant place, scale applied (0 for vague words and multipliers). */
+  half: number;
+  /** The value of a scale word ("thousand" → 1000), 1 when none. */
+  scale: number;
+  form: 'digits' | 'words' | 'vague' | 'multiplier';
+  /** The interval-table row that reads it first: precision, multiplier-word or a vague row. */
+  rule: string;
+  /** A whole number of 3 or 4 digits with no separator, sign, exponent or scale: maybe a calendar year. */
+  plainInteger: boolean;
+  sign: '' | '+' | '-';
+}
+
+const SEP = String.raw`[,\u2009\u202F\u00A0 ]`;
+const NUM = String.raw`\d{1,3}(?:${SEP}\d{3}(?!\d))+(?:\.\d+)?|\d+(?:\.\d+)?|\.\d+`;
+const SUP = '⁰¹²³⁴⁵⁶⁷⁸⁹';
+const EXP = String.raw`[eE](?<e1>[-−+]?\d+)(?![\p{L}\p{N}])|[\s\u00A0]*[×xX*·][\s\u00A0]*10(?:[\s\u00A0]*\^[\s\u00A0]*(?<e2>[-−+]?\d+)|(?<e3>[⁻⁺]?[${SUP}]+))`;
+const SCALE = String.raw`[\s\u00A0]+(?<scale>hundred|thousand|million|billion)(?![\p{L}])`;
+const DIGITS = new RegExp(
+  String.raw`(?<sign>(?<![\p{L}\p{N}.])[-−+])?(?<![\p{L}\p{N}_.])(?<num>${NUM})(?:${EXP})?(?:${SCALE})?`,
+  'giu',
+);
+const WORD_PHRASE = new RegExp(
+  String.raw`(?<![\p{L}\p{N}])(?:${NUMBER_WORDS.join('|')})(?:(?:[\s\u00A0]+|-)(?:${NUMBER_WORDS.join('|')}))*(?![\p{L}\p{N}])`,
+  'giu',
+);
+const VAGUE = new RegExp(
+  String.raw`(?<![\p{L}])(?:(?<plural>tens|hundreds|thousands|millions|dozens)[\s\u00A0]+of(?:[\s\u00A0]+(?<inner>thousands|millions)[\s\u00A0]+of)?|(?<few>a[\s\u00A0]+few|several)(?:[\s\u00A0]+(?<fewScale>hundred|thousand|million))?)(?=[\s\u00A0])`,
+  'giu',
+);
+const SCALES: Record<string, number> = { hundred: 1e2, thousand: 1e3, million: 1e6, billion: 1e9, tens: 10, hundreds: 1e2, thousands: 1e3, millions: 1e6, dozens: 12 };
+const SUPERSCRIPT: Record<string, string> = { '⁻': '-', '⁺': '+', ...Object.fromEntries([...SUP].map((c, i) => [c, String(i)])) };
+
+function digitAtom(m: RegExpExecArray): Atom {
+  const g = m.groups ?? {};
+  const sign = g['sign'] === undefined ? '' : g['sign'] === '+' ? '+' : '-';
+  const digits = (g['num'] ?? '').replace(/[^\d.]/g, '');
+  const expText = g['e1'] ?? g['e2'] ?? [...(g['e3'] ?? '')].map((c) => SUPERSCRIPT[c] ?? '').join('');
+  const exponent = expText === '' ? 0 : Number(expText.replace('−', '-'));
+  const scale = g['scale'] === undefined ? 1 : (SCALES[g['scale'].toLowerCase()] ?? 1);
+  const magnitude = Number(digits) * 10 ** exponent * scale;
+  const plainInteger = /^\d{3,4}$/.test(g['num'] ?? '') && expText === '' && scale === 1 && sign === '';
+  return {
+    start: m.index, end: m.index + m[0].length, value: sign === '-' ? -magnitude : magnitude,
+    half: halfPlace(digits) * 10 ** exponent * scale, scale, form: 'digits', rule: 'precision', plainInteger, sign,
+  };
+}
+
+function wordAtoms(m: RegExpExecArray): Atom[] {
+  const tokens = [...m[0].matchAll(/\p{L}+/gu)].map((t) => ({ word: t[0].toLowerCase(), start: m.index + t.index, end: m.index + t.index + t[0].length }));
+  const atoms: Atom[] = [];
+  for (let i = 0; i < tokens.length; ) {
+    const read = readNumberWords(tokens.slice(i).map((t) => t.word));
+    const first = tokens[i];
+    const last = tokens[i + (read?.used ?? 1) - 1];
+    if (read === undefined || first === undefined || last === undefined) { i++; continue; }
+    atoms.push({ start: first.start, end: last.end, value: read.value, half: halfPlaceOfValue(read.value), scale: 1, form: 'words', rule: 'precision', plainInteger: false, sign: '' });
+    i += read.used;
+  }
+  return atoms;
+}
+
+function vagueAtom(m: RegExpExecArray): Atom {
+  const g = m.groups ?? {};
+  const outer = g['plural'] ?? g['fewScale'];
+  const s = (outer === undefined ? 1 : (SCALES[outer.toLowerCase()] ?? 1)) * (g['inner'] === undefined ? 1 : (SCALES[g['inner'].toLowerCase()] ?? 1));
+  const few = g['few']?.toLowerCase().replace(/\s+/g, ' ');
+  const rule = g['plural'] !== undefined ? 'plural-magnitude' : few === 'several' ? 'several' : 'a-few';
+  return { start: m.index, end: m.index + m[0].length, value: s, half: 0, scale: s, form: 'vague', rule, plainInteger: false, sign: '' };
+}
+
+/** Every number in `text`, in order, without overlaps. */
+export function findAtoms(text: string): Atom[] {
+  const found: Atom[] = [
+    ...findMultipliers(text),
+    ...[...text.matchAll(DIGITS)].map(digitAtom),
+    ...[...text.matchAll(VAGUE)].map(vagueAtom),
+    ...[...text.matchAll(WORD_PHRASE)].flatMap(wordAtoms),
+  ];
+  found.sort((a, b) => a.start - b.start || b.end - a.end);
+  const kept: Atom[] = [];
+  for (const atom of found) {
+    const prev = kept[kept.length - 1];
+    if (prev === undefined || atom.start >= prev.end) kept.push(atom);
+  }
+  return kept;
+}

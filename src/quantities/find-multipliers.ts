@@ -1,0 +1,69 @@
+/**
+ * Multipliers and fractions, read as ratios: "twice", "doubled", "three-fold", "2.5 times higher",
+ * "a third", "two thirds", "halved". Written in words they take the multiplier-word row of the
+ * interval table; written in digits ("3-fold"), the precision row.
+ */
+import type { Atom } from './find-atoms.js';
+import { halfPlace } from './precision.js';
+
+const SMALL: Record<string, number> = {
+  two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, twenty: 20, hundred: 100, thousand: 1000,
+};
+const VERBS: [RegExp, number][] = [
+  [/^(?:twice|double[sd]?|doubling)$/i, 2],
+  [/^(?:thrice|triple[sd]?|tripling)$/i, 3],
+  [/^(?:quadruple[sd]?|quadrupling)$/i, 4],
+  [/^(?:halved|halves|halving|halve)$/i, 0.5],
+];
+const FRACTIONS: Record<string, number> = { half: 1 / 2, third: 1 / 3, quarter: 1 / 4, fifth: 1 / 5, tenth: 1 / 10, thirds: 1 / 3, quarters: 1 / 4, fifths: 1 / 5, tenths: 1 / 10 };
+const COUNTS: Record<string, number> = { a: 1, one: 1, two: 2, three: 3, four: 4 };
+const SMALL_WORDS = Object.keys(SMALL).join('|');
+
+const VERB = /(?<![\p{L}])(?:twice|thrice|double[sd]?|doubling|triple[sd]?|tripling|quadruple[sd]?|quadrupling|halved|halves|halving|halve)(?![\p{L}])/giu;
+const FOLD = new RegExp(String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS}))[-\s]?fold(?![\p{L}])`, 'giu');
+const TIMES = new RegExp(
+  String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS}))[\s\u00A0]+times(?=[\s\u00A0]+(?:as|more|higher|greater|larger|bigger|lower|smaller|less|faster|slower|longer|shorter|that|the|what|its|their|above|below|over)(?![\p{L}]))`,
+  'giu',
+);
+const FRACTION = /(?<![\p{L}])(?:(?<count>a|one|two|three|four)[\s\u00A0-]+(?<part>half|third|quarter|fifth|tenth|thirds|quarters|fifths|tenths)|(?<half>half))(?![\p{L}])/giu;
+/** A fraction counts only in a ratio frame: "by a third", "about half", "half as much", "a third of". */
+const FRACTION_BEFORE = /(?:^|[^\p{L}])(?:by|to|in|about|nearly|almost|roughly|only|some|around|over|than|just|cut|fell|rose|lost|gained|barely|more|less)[\s\u00A0]+$/iu;
+const FRACTION_AFTER = /^[\s\u00A0]+(?:as|of|that)(?![\p{L}])/iu;
+const NOT_FRACTION_BEFORE = /(?:^|[^\p{L}])(?:the|first|second|latter|former|other|last|next|and|southern|northern|eastern|western)[\s\u00A0]+$/iu;
+
+function atom(start: number, end: number, value: number, half: number, rule: string): Atom {
+  return { start, end, value, half, scale: 1, form: 'multiplier', rule, plainInteger: false, sign: '' };
+}
+
+function numberAtom(m: RegExpExecArray): Atom {
+  const d = m.groups?.['d'];
+  const end = m.index + m[0].length;
+  if (d !== undefined) return atom(m.index, end, Number(d), halfPlace(d), 'precision');
+  return atom(m.index, end, SMALL[(m.groups?.['w'] ?? '').toLowerCase()] ?? Number.NaN, 0, 'multiplier-word');
+}
+
+function fractionAtom(text: string, m: RegExpExecArray): Atom | undefined {
+  const end = m.index + m[0].length;
+  const before = text.slice(Math.max(0, m.index - 24), m.index);
+  if (NOT_FRACTION_BEFORE.test(before)) return undefined;
+  if (!FRACTION_BEFORE.test(before) && !FRACTION_AFTER.test(text.slice(end, end + 8))) return undefined;
+  const g = m.groups ?? {};
+  const value = g['half'] !== undefined ? 0.5 : (COUNTS[(g['count'] ?? '').toLowerCase()] ?? 1) * (FRACTIONS[(g['part'] ?? '').toLowerCase()] ?? Number.NaN);
+  return atom(m.index, end, value, 0, 'multiplier-word');
+}
+
+/** Every multiplier and fraction in `text` (they may overlap other numbers; findAtoms resolves that). */
+export function findMultipliers(text: string): Atom[] {
+  const out: Atom[] = [];
+  for (const m of text.matchAll(VERB)) {
+    const value = VERBS.find(([re]) => re.test(m[0]))?.[1] ?? Number.NaN;
+    out.push(atom(m.index, m.index + m[0].length, value, 0, 'multiplier-word'));
+  }
+  for (const m of text.matchAll(FOLD)) out.push(numberAtom(m));
+  for (const m of text.matchAll(TIMES)) out.push(numberAtom(m));
+  for (const m of text.matchAll(FRACTION)) {
+    const a = fractionAtom(text, m);
+    if (a !== undefined) out.push(a);
+  }
+  return out.filter((a) => Number.isFinite(a.value));
+}

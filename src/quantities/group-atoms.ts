@@ -1,0 +1,89 @@
+/**
+ * Joins numbers that belong together and shares units between them:
+ *  - ranges, one quantity: "7,000 to 8,000 years", "180–190 ppm", "7-8 thousand", "between 180 and 190";
+ *  - "±": "5 ± 1 °C" is one quantity with a stated uncertainty;
+ *  - from-to pairs, two quantities (the ends of a change): "rose from [180] to [280 ppm]".
+ * A number with no unit of its own takes its partner's unit and scale ("7-8 thousand years").
+ */
+import type { Atom } from './find-atoms.js';
+import { matchUnit, type UnitMatch } from './match-unit.js';
+import { isLabelCue } from './reading-cues.js';
+
+/** A number and the unit that applies to it (written after it, or shared from its partner). */
+export interface Part {
+  atom: Atom;
+  unit: UnitMatch | undefined;
+  /** True when the unit is written after this very number (so it belongs in this quantity's text). */
+  ownUnit: boolean;
+}
+
+/** One quantity to be: a single number, a range, or a value ± uncertainty; from-to ends are singles with a role. */
+export interface Group {
+  kind: 'single' | 'range' | 'plus-minus';
+  parts: Part[];
+  role: 'alone' | 'from' | 'to';
+  /** Where a leading "between" starts, for ranges written that way. */
+  prefixStart: number | undefined;
+}
+
+const S = String.raw`[\s\u00A0]`;
+const PLUS_MINUS = new RegExp(String.raw`^${S}*(?:±|\+\/-|\+\/−)${S}*$`, 'u');
+const RANGE_JOIN = new RegExp(String.raw`^(?:${S}*(?:to|through|until|till)${S}+|-|${S}*[–—]${S}*)$`, 'iu');
+const AND_JOIN = new RegExp(String.raw`^${S}+and${S}+$`, 'iu');
+const BETWEEN = new RegExp(String.raw`(?:^|[^\p{L}])(?<word>between)${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
+const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
+const RANGE_VERB = new RegExp(String.raw`(?:rang(?:e|es|ed|ing)|var(?:y|ies|ied|ying)|anywhere|estimates?)${S}+from${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
+
+const joinable = (a: Atom): boolean => a.form === 'digits' || a.form === 'words';
+const sameUnit = (a: UnitMatch | undefined, b: UnitMatch | undefined): boolean =>
+  a === undefined || b === undefined || a.defs[0]?.id === b.defs[0]?.id;
+
+/** The numbers of `text` with their units, dropping labels ("MIS 11") and numbers glued to words ("1990s"). */
+export function partsOf(text: string, atoms: Atom[]): Part[] {
+  const parts: Part[] = [];
+  for (const atom of atoms) {
+    const unit = atom.form === 'multiplier' ? undefined : matchUnit(text, atom.end);
+    const glued = /[\p{L}\p{N}]/u.test(text[atom.end] ?? '');
+    if (glued && unit?.start !== atom.end) continue;
+    if (unit === undefined && atom.form === 'digits' && isLabelCue(text.slice(Math.max(0, atom.start - 16), atom.start))) continue;
+    parts.push({ atom, unit, ownUnit: unit !== undefined });
+  }
+  return parts;
+}
+
+function shareScale(from: Atom, to: Atom): Atom {
+  if (from.scale !== 1 || to.scale === 1 || Math.abs(from.value) >= to.scale) return from;
+  return { ...from, value: from.value * to.scale, half: from.half * to.scale, scale: to.scale, plainInteger: false };
+}
+
+/** Groups the parts of `text` into quantities-to-be, in order. */
+export function groupParts(text: string, parts: Part[]): Group[] {
+  const groups: Group[] = [];
+  for (let i = 0; i < parts.length; i++) {
+    const p = parts[i] as Part;
+    const q = parts[i + 1];
+    if (q === undefined || !joinable(p.atom) || !joinable(q.atom) || !sameUnit(p.unit, q.unit)) {
+      groups.push({ kind: 'single', parts: [p], role: 'alone', prefixStart: undefined });
+      continue;
+    }
+    const joiner = text.slice(p.unit?.end ?? p.atom.end, q.atom.start);
+    const before = text.slice(Math.max(0, p.atom.start - 48), p.atom.start);
+    const between = AND_JOIN.test(joiner) ? BETWEEN.exec(before) : null;
+    const shared: Part = { atom: shareScale(p.atom, q.atom), unit: p.unit ?? q.unit, ownUnit: p.ownUnit };
+    const second: Part = { ...q, unit: q.unit ?? p.unit };
+    if (PLUS_MINUS.test(joiner)) {
+      groups.push({ kind: 'plus-minus', parts: [shared, second], role: 'alone', prefixStart: undefined });
+    } else if (RANGE_JOIN.test(joiner) && FROM.test(before) && !RANGE_VERB.test(before)) {
+      groups.push({ kind: 'single', parts: [shared], role: 'from', prefixStart: undefined });
+      groups.push({ kind: 'single', parts: [second], role: 'to', prefixStart: undefined });
+    } else if (RANGE_JOIN.test(joiner) || between !== null) {
+      const prefixStart = between === null ? undefined : p.atom.start - before.length + between.index + between[0].indexOf(between.groups?.['word'] ?? '');
+      groups.push({ kind: 'range', parts: [shared, second], role: 'alone', prefixStart });
+    } else {
+      groups.push({ kind: 'single', parts: [p], role: 'alone', prefixStart: undefined });
+      continue;
+    }
+    i++;
+  }
+  return groups;
+}

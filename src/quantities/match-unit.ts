@@ -1,0 +1,41 @@
+/**
+ * Reads the unit written right after a number: "420,000 years", "800 kyr", "5°C", "180 ppm",
+ * "800,000-year record" (hyphenated), "0.01 ppm per year". The longest written form wins; when one
+ * form belongs to two dimensions (°C as a temperature and as a change, ka as a date and as a
+ * duration) every reading is returned and the cue tables decide.
+ */
+import { NUMBER_UNIT_GAP, UNIT_END } from './unit-forms.js';
+import { UNIT_TABLE, type UnitDef } from './unit-table.js';
+
+/** The unit found after a number. */
+export interface UnitMatch {
+  /** Where the unit's written form starts and ends. */
+  start: number;
+  end: number;
+  /** Every reading of the written form (one id, one or two dimensions). */
+  defs: UnitDef[];
+}
+
+const GAP = new RegExp(NUMBER_UNIT_GAP, 'uy');
+/** One sticky matcher per unit, compiled once at module load. */
+const MATCHERS: { def: UnitDef; re: RegExp }[] = UNIT_TABLE.filter((d) => d.forms.length > 0).map((def) => ({
+  def,
+  re: new RegExp(`(?:${def.forms.join('|')})${UNIT_END}`, 'uy'),
+}));
+
+/** The unit starting at `from` (after an optional space or hyphen), or undefined. */
+export function matchUnit(text: string, from: number): UnitMatch | undefined {
+  GAP.lastIndex = from;
+  const gap = GAP.exec(text);
+  const start = from + (gap?.[0].length ?? 0);
+  let best: UnitMatch | undefined;
+  for (const { def, re } of MATCHERS) {
+    re.lastIndex = start;
+    const m = re.exec(text);
+    if (m === null || m[0].length === 0) continue;
+    const end = start + m[0].length;
+    if (best === undefined || end > best.end) best = { start, end, defs: [def] };
+    else if (end === best.end && best.defs[0]?.id === def.id) best.defs.push(def);
+  }
+  return best;
+}

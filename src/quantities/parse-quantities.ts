@@ -1,0 +1,125 @@
+/**
+ * The quantity reader: one sentence in, its quantities out, each as an interval in the canonical
+ * unit of its dimension. Example:
+ *   "CO2 rose from [about 180] to [280 ppm] over [some 8,000 years]."
+ * Numbers are found (find-atoms), given units (match-unit), grouped (group-atoms), read by the cue
+ * tables (reading-cues), and turned into intervals by the interval table (interval-rules).
+ */
+import type { Dimension, Quantity } from '../types.js';
+import { toCanonical } from './convert.js';
+import { findAtoms } from './find-atoms.js';
+import { hedgeAfter, hedgeBefore, type HedgeMatch } from './find-hedge.js';
+import { groupParts, partsOf, type Group } from './group-atoms.js';
+import { applyRule, intervalRule } from './interval-rules.js';
+import { isCalendarCue, readKiloAnnum, readTemperature } from './reading-cues.js';
+import { CANONICAL_UNIT, UNIT_TABLE, type UnitDef } from './unit-table.js';
+
+const S = String.raw`[\s\u00A0]`;
+const AD_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?<ad>AD|A\.D\.)${S}*$`, 'u');
+const EQUIVALENT = new RegExp(String.raw`^${S}*(?:\(|,?${S}*or${S}+|\/|,?${S}*i\.e\.,?${S}*|=${S}*|,${S}*)$`, 'iu');
+const CE = UNIT_TABLE.find((d) => d.id === 'CE') as UnitDef;
+const NUMBER = UNIT_TABLE.find((d) => d.dimension === 'number') as UnitDef;
+const RATIO = UNIT_TABLE.find((d) => d.dimension === 'ratio') as UnitDef;
+
+interface Reading {
+  def: UnitDef;
+  rule: string;
+  prefixStart: number | undefined;
+}
+
+const first = (g: Group) => g.parts[0] as Group['parts'][number];
+const last = (g: Group) => g.parts[g.parts.length - 1] as Group['parts'][number];
+
+/** Which unit definition applies, or undefined when the group is not a quantity (number words with no unit). */
+function readGroup(text: string, g: Group, previous: Quantity | undefined): Reading | undefined {
+  const a = first(g).atom;
+  const unit = last(g).unit;
+  // Cue words are read before the hedge: in "up to 2 °C", "to" belongs to the hedge, not a cue.
+  const cueEnd = hedgeBefore(text, g.prefixStart ?? a.start, 'temperature')?.start ?? g.prefixStart ?? a.start;
+  const before = text.slice(Math.max(0, cueEnd - 48), cueEnd);
+  const rawBefore = text.slice(Math.max(0, a.start - 48), a.start);
+  const after = text.slice(unit?.end ?? last(g).atom.end, (unit?.end ?? last(g).atom.end) + 32);
+  const rule = g.kind === 'range' ? 'range' : g.kind === 'plus-minus' ? 'plus-minus' : a.rule;
+  if (unit === undefined) {
+    if (a.form === 'multiplier') return { def: RATIO, rule, prefixStart: g.prefixStart };
+    if (a.form !== 'digits') return undefined;
+    const years = g.parts.every((p) => p.atom.plainInteger && p.atom.value >= 1000 && p.atom.value <= 2100);
+    const ad = AD_BEFORE.exec(rawBefore);
+    if (ad !== null) return { def: CE, rule: g.kind === 'single' ? 'calendar-year' : rule, prefixStart: a.start - rawBefore.length + ad.index + ad[0].indexOf(ad.groups?.['ad'] ?? '') };
+    if (years && isCalendarCue(rawBefore)) return { def: CE, rule: g.kind === 'single' ? 'calendar-year' : rule, prefixStart: g.prefixStart };
+    return { def: NUMBER, rule, prefixStart: g.prefixStart };
+  }
+  let def = unit.defs[0] as UnitDef;
+  if (unit.defs.length > 1) {
+    const dims = unit.defs.map((d) => d.dimension);
+    const equivalent = previous !== undefined && EQUIVALENT.test(text.slice(previous.end, g.prefixStart ?? a.start));
+    let wanted: Dimension;
+    if (dims.includes('temperature')) {
+      wanted = equivalent && (previous.dimension === 'temperature' || previous.dimension === 'temperature-change')
+        ? previous.dimension
+        : readTemperature(before, after, a.sign);
+    } else wanted = readKiloAnnum(before, after);
+    def = unit.defs.find((d) => d.dimension === wanted) ?? def;
+  }
+  const calendar = def.id === 'CE' && g.kind === 'single';
+  return { def, rule: calendar ? 'calendar-year' : rule, prefixStart: g.prefixStart };
+}
+
+/**
+ * The interval: the stated row works on the number as written (precision, range, vague words),
+ * then the result goes to the canonical unit, where the hedge row works. Hedging in the canonical
+ * unit keeps "around 1750" at 200 ± 20 years before 1950 rather than ± 175 years.
+ */
+function interval(g: Group, rule: string, def: UnitDef, hedge: HedgeMatch | undefined): { value: number; low: number; high: number } {
+  const a = first(g).atom;
+  const b = last(g).atom;
+  const L = Math.min(a.value, b.value);
+  const H = Math.max(a.value, b.value);
+  const inputs = g.kind === 'range'
+    ? { v: (L + H) / 2, h: 0, L, H, s: 1 }
+    : { v: a.value, h: g.kind === 'plus-minus' ? Math.abs(b.value) : a.half, L: a.value, H: a.value, s: a.scale };
+  const [l0, h0] = applyRule(intervalRule(rule), inputs);
+  const canonical = (x: number): number => toCanonical(x, def.id, def.dimension);
+  const v = canonical(a.form === 'vague' ? (l0 + h0) / 2 : inputs.v);
+  const [low, high] = [canonical(l0), canonical(h0)].sort((x, y) => x - y) as [number, number];
+  if (hedge === undefined) return { value: v, low, high };
+  const [hl, hh] = applyRule(hedge.rule, { v, h: 0, L: low, H: high, s: 1 });
+  return { value: v, low: hl, high: hh };
+}
+
+/**
+ * Every quantity in one sentence, in order. `start`/`end` are UTF-16 indices into `text`, and
+ * `text.slice(start, end)` is the quantity as written, with its hedge and unit.
+ */
+export function parseQuantities(text: string): Quantity[] {
+  const out: Quantity[] = [];
+  for (const g of groupParts(text, partsOf(text, findAtoms(text)))) {
+    const reading = readGroup(text, g, out[out.length - 1]);
+    if (reading === undefined) continue;
+    const { def } = reading;
+    const a = first(g).atom;
+    const numberStart = Math.min(a.start, reading.prefixStart ?? a.start);
+    const ownEnd = g.role === 'from' && !first(g).ownUnit ? a.end : (last(g).unit?.end ?? last(g).atom.end);
+    const hedge =
+      hedgeBefore(text, numberStart, def.dimension) ??
+      (numberStart < a.start ? hedgeBefore(text, a.start, def.dimension) : undefined) ??
+      (g.role === 'from' ? undefined : hedgeAfter(text, ownEnd));
+    const start = Math.min(numberStart, hedge?.start ?? numberStart);
+    const end = Math.max(ownEnd, hedge?.end ?? ownEnd);
+    const { value, low, high } = interval(g, reading.rule, def, hedge);
+    const q: Quantity = {
+      text: text.slice(start, end),
+      start,
+      end,
+      value,
+      low,
+      high,
+      dimension: def.dimension,
+      unit: CANONICAL_UNIT[def.dimension],
+      statedUnit: def.id,
+    };
+    if (hedge !== undefined) q.hedge = hedge.word;
+    out.push(q);
+  }
+  return out;
+}

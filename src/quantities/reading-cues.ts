@@ -1,0 +1,85 @@
+/**
+ * The small cue tables that decide between two readings of one written unit, from the words next
+ * to the quantity. Data first, so docs/quantities.md can show them and an editor can see why.
+ *  - °C, °F, K: a temperature change ("5 °C warmer", "warmed by 5 °C") or a temperature ("was −30 °C").
+ *  - ka, Ma: a date ("at 21 ka") or a duration ("lasting 10 ka", "a 100 ka cycle").
+ *  - a bare four-digit whole number: a calendar year ("in 1750", "by 2019") or just a number.
+ */
+import type { Dimension } from '../types.js';
+
+/** One cue: words that, found just before or just after the quantity, pick a reading. */
+export interface Cue {
+  reading: Dimension;
+  where: 'before' | 'after';
+  words: string[];
+}
+
+/** Temperature cues, tried in order; the first that matches decides. */
+export const TEMPERATURE_CUES: readonly Cue[] = [
+  { reading: 'temperature-change', where: 'after', words: ['warmer', 'cooler', 'colder', 'hotter', 'higher', 'lower', 'rise', 'increase', 'drop', 'fall', 'decline', 'change', 'shift', 'difference', 'swing', 'warming', 'cooling', 'anomaly', 'above', 'below', 'more', 'less', 'of warming', 'of cooling', 'amplitude'] },
+  { reading: 'temperature-change', where: 'before', words: ['by', 'warmed', 'cooled', 'rose', 'fell', 'dropped', 'climbed', 'increased', 'decreased', 'changed', 'rise of', 'drop of', 'fall of', 'change of', 'increase of', 'decrease of', 'swing of', 'difference of', 'warming of', 'cooling of', 'anomaly of', 'amplitude of', 'shift of', 'a', 'an'] },
+  { reading: 'temperature', where: 'before', words: ['was', 'were', 'is', 'are', 'at', 'reached', 'averaged', 'averages', 'stood at', 'of', 'to', 'from', 'between', 'minus'] },
+];
+
+/** What the temperature cues do not settle: a signed "+5 °C" is a change, a negative number a temperature, anything else a change. */
+export const TEMPERATURE_DEFAULT = 'a leading + reads as a change; a negative number as a temperature; otherwise a change (most temperatures in ice-age writing are differences)';
+
+/** Cues that make "ka" or "Ma" a duration; without one they are dates (ka = thousand years before present). */
+export const DURATION_CUES: readonly Cue[] = [
+  { reading: 'duration', where: 'before', words: ['for', 'lasted', 'lasting', 'lasts', 'span', 'spans', 'spanned', 'spanning', 'every', 'took', 'takes', 'period of', 'duration of', 'interval of', 'cycle of', 'cycles of', 'periodicity of', 'within', 'length of'] },
+  { reading: 'duration', where: 'after', words: ['long', 'cycle', 'cycles', 'periodicity', 'period', 'record', 'interval'] },
+];
+
+/** Words before a bare four-digit whole number (1000–2100) that make it a calendar year (CE). */
+export const CALENDAR_CUES: readonly string[] = ['in', 'by', 'since', 'from', 'until', 'till', 'to', 'after', 'before', 'around', 'about', 'circa', 'c.', 'ca.', 'of', 'between', 'and', 'during', 'year', 'early', 'late', 'mid', 'mid-', 'through', '–', '—', '-'];
+
+/** Words before a bare number that make it a label, not a quantity ("MIS 11", "Figure 3"). */
+export const LABEL_CUES: readonly string[] = ['MIS', 'stage', 'termination', 'figure', 'fig.', 'table', 'page', 'p.', 'pp.', 'chapter', 'section', 'no.', 'issue', 'volume', 'vol.', 'panel', 'room', 'gallery', '#'];
+
+const escape = (s: string): string => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&').replace(/ /g, String.raw`[\s\u00A0]+`);
+const wordList = (words: readonly string[]): string => [...words].sort((a, b) => b.length - a.length).map(escape).join('|');
+
+/** A matcher for `words` ending the text before a quantity, compiled once. */
+export function beforeMatcher(words: readonly string[]): RegExp {
+  return new RegExp(String.raw`(?:^|[^\p{L}\p{N}])(?:${wordList(words)})[\s\u00A0]*$`, 'iu');
+}
+
+/** A matcher for `words` starting the text after a quantity (a hyphen may join: "100-kyr-long"). */
+export function afterMatcher(words: readonly string[]): RegExp {
+  return new RegExp(String.raw`^[\s\u00A0-]*(?:${wordList(words)})(?![\p{L}])`, 'iu');
+}
+
+const compiled = (cues: readonly Cue[]): { cue: Cue; re: RegExp }[] =>
+  cues.map((cue) => ({ cue, re: cue.where === 'before' ? beforeMatcher(cue.words) : afterMatcher(cue.words) }));
+const TEMPERATURE = compiled(TEMPERATURE_CUES);
+const DURATION = compiled(DURATION_CUES);
+const CALENDAR = beforeMatcher(CALENDAR_CUES);
+const LABEL = beforeMatcher(LABEL_CUES);
+
+/** The first cue matching `before` / `after`, or undefined. */
+function firstCue(table: { cue: Cue; re: RegExp }[], before: string, after: string): Cue | undefined {
+  return table.find(({ cue, re }) => re.test(cue.where === 'before' ? before : after))?.cue;
+}
+
+/** Temperature or temperature change, from the words around the quantity and its sign. */
+export function readTemperature(before: string, after: string, sign: string): Dimension {
+  const cue = firstCue(TEMPERATURE, before, after);
+  if (cue !== undefined) return cue.reading;
+  if (sign === '+') return 'temperature-change';
+  return sign === '-' ? 'temperature' : 'temperature-change';
+}
+
+/** Duration or age for "ka" and "Ma". */
+export function readKiloAnnum(before: string, after: string): Dimension {
+  return firstCue(DURATION, before, after)?.reading ?? 'age';
+}
+
+/** True when the words before a bare four-digit number make it a calendar year. */
+export function isCalendarCue(before: string): boolean {
+  return CALENDAR.test(before);
+}
+
+/** True when the words before a bare number make it a label. */
+export function isLabelCue(before: string): boolean {
+  return LABEL.test(before);
+}

@@ -1,0 +1,29 @@
+/**
+ * A quantity's own words with a new value in place of its number, for corrections: the hedge and
+ * the unit stay as the draft wrote them. "about 120 ppm" with 100 ppm → "about 100 ppm";
+ * "41 °F" with 5 K → "9 °F"; "10,000 years ago" with 11,949 yr BP → "11,900 years ago".
+ */
+import type { Quantity } from '../types.js';
+import { fromCanonical } from './convert.js';
+import { findAtoms } from './find-atoms.js';
+import { formatNumber, formatQuantity } from './format-quantity.js';
+
+/** `q.text` with its number replaced by `value` (canonical unit), rounded to `significant` figures. */
+export function rewriteQuantity(q: Quantity, value: number, significant = 3): string {
+  const atoms = findAtoms(q.text);
+  const atom = atoms[0];
+  const id = q.statedUnit === '' ? q.unit : q.statedUnit;
+  if (atom === undefined || atoms.length > 1 || atom.form === 'vague') return formatQuantity(value, q.unit, q.statedUnit, significant);
+  const stated = fromCanonical(value, id, q.dimension);
+  let written: string;
+  if (atom.form === 'multiplier') written = `${formatNumber(stated, 2)} times`;
+  else if (q.statedUnit === 'CE') {
+    if (Math.round(stated) < 1) return formatQuantity(value, q.unit, q.statedUnit);
+    written = String(Math.round(stated));
+  } else if (atom.scale > 1) {
+    const scaleWord = /\p{L}+$/u.exec(q.text.slice(atom.start, atom.end))?.[0] ?? '';
+    written = `${formatNumber(stated / atom.scale, significant)} ${scaleWord}`;
+  } else written = formatNumber(stated, significant, q.statedUnit !== 'BCE' || Math.abs(stated) >= 10000);
+  if (q.text.slice(atom.start, atom.end).startsWith('−')) written = written.replace(/^-/, '−');
+  return q.text.slice(0, atom.start) + written + q.text.slice(atom.end);
+}

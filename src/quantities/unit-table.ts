@@ -1,0 +1,133 @@
+/**
+ * Every unit Firnline reads or writes, as data: canonical value = factor × stated value + offset,
+ * where the canonical unit of each dimension is the one named in src/types.ts.
+ * Factors: 1 ft = 0.3048 m and 1 mile = 1609.344 m exactly, 1 °F (interval) = 5/9 K, t/°C =
+ * (t/°F − 32)/1.8 and t/°C = T/K − 273.15 (NIST SP 811, 2008 edition, Appendix B.8 and B.9).
+ * Ages: BP = years before AD 1950 (Stuiver & Polach 1977); b2k = years before AD 2000 (Walker et al.
+ * 2009), so BP = b2k − 50; there is no year 0, so Y BCE = (1949 + Y) BP and Y CE = (1950 − Y) BP.
+ */
+import type { Dimension } from '../types.js';
+import { ANNUM, YEAR_WORD, symbol, words } from './unit-forms.js';
+
+/** One unit of one dimension. The same id may appear in two dimensions (°C as a temperature and as a change). */
+export interface UnitDef {
+  /** The normalised stated unit, e.g. `kyr`, `degF`, `yr ago`. */
+  id: string;
+  dimension: Dimension;
+  factor: number;
+  offset: number;
+  /** How a corrected value is written in this unit, e.g. `kyr`, `°F`, `years ago`. */
+  display: string;
+  /** Written forms, as case-sensitive regular-expression sources; empty for units only used in conversions. */
+  forms: string[];
+}
+
+const u = (id: string, dimension: Dimension, factor: number, display: string, forms: string[], offset = 0): UnitDef => ({
+  id,
+  dimension,
+  factor,
+  offset,
+  display,
+  forms,
+});
+
+const BP = String.raw`(?:BP|B\.P\.)`;
+const AGO = words('(?:ago|before present)');
+const DEG_C = [symbol('° C'), 'ºC', '℃', words('degrees? (?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C')];
+const DEG_F = [symbol('° F'), 'ºF', '℉', words('degrees? fahrenheit'), symbol('degrees? F')];
+const KELVIN = ['K', words('kelvins?')];
+const PPM = ['ppmv?', words('parts per million(?: by volume)?')];
+const PPB = ['ppbv?', words('parts per billion(?: by volume)?')];
+
+const BASE_UNITS: UnitDef[] = [
+  u('yr', 'duration', 1, 'years', [YEAR_WORD, ANNUM]),
+  u('kyr', 'duration', 1e3, 'kyr', ['kyrs?', 'ky', String.raw`k\.y\.`]),
+  u('Myr', 'duration', 1e6, 'Myr', ['Myrs?', 'My', String.raw`m\.y\.`]),
+  u('ka', 'duration', 1e3, 'ka', ['ka']),
+  u('Ma', 'duration', 1e6, 'Ma', ['Ma']),
+  u('decade', 'duration', 10, 'decades', [words('decades?')]),
+  u('century', 'duration', 100, 'centuries', [words('(?:century|centuries)')]),
+  u('millennium', 'duration', 1e3, 'millennia', [words('(?:millennium|millennia|millenniums)')]),
+  u('yr BP', 'age', 1, 'years BP', [
+    String.raw`(?:[cC]al(?:ibrated)?\.?[\s\u00A0]+)?(?:${YEAR_WORD}[\s\u00A0]+)?${BP}`,
+    words('(?:years?|yrs?) before present'),
+  ]),
+  u('yr ago', 'age', 1, 'years ago', [words('(?:years?|yrs?) ago')]),
+  u('ka', 'age', 1e3, 'ka', [String.raw`(?:[cC]al[\s\u00A0]+)?(?:ka|kyrs?|ky)[\s\u00A0]+(?:${BP}|${AGO})`, 'ka']),
+  u('Ma', 'age', 1e6, 'Ma', [String.raw`(?:Ma|Myrs?|My)[\s\u00A0]+(?:${BP}|${AGO})`, 'Ma']),
+  u('yr b2k', 'age', 1, 'years b2k', [
+    String.raw`(?:${YEAR_WORD}[\s\u00A0]+)?b2k`,
+    words('(?:years?|yrs?) before (?:ad )?2000'),
+  ], -50),
+  u('ka b2k', 'age', 1e3, 'ka b2k', [String.raw`(?:ka|kyrs?)[\s\u00A0]+b2k`], -50),
+  u('BCE', 'age', 1, 'BCE', ['BCE', 'BC', String.raw`B\.C\.E\.`, String.raw`B\.C\.`], 1949),
+  u('CE', 'age', -1, 'CE', ['CE', 'AD', String.raw`C\.E\.`, String.raw`A\.D\.`], 1950),
+  u('ppm', 'concentration', 1, 'ppm', PPM),
+  u('ppb', 'concentration', 1e-3, 'ppb', PPB),
+  // A percentage of the air, for the ppm ↔ % check only: the parser reads "%" as a percent.
+  u('%', 'concentration', 1e4, '%', []),
+  u('%', 'percent', 1, '%', ['%', words('per(?: |)cent')]),
+  u('degC', 'temperature', 1, '°C', DEG_C),
+  u('degF', 'temperature', 5 / 9, '°F', DEG_F, -32 * (5 / 9)),
+  u('K', 'temperature', 1, 'K', KELVIN, -273.15),
+  u('degC', 'temperature-change', 1, '°C', DEG_C),
+  u('degF', 'temperature-change', 5 / 9, '°F', DEG_F),
+  u('K', 'temperature-change', 1, 'K', KELVIN),
+  u('m', 'length', 1, 'm', ['m', words('(?:metres?|meters?)')]),
+  u('km', 'length', 1e3, 'km', ['km', words('(?:kilometres?|kilometers?)')]),
+  u('cm', 'length', 1e-2, 'cm', ['cm', words('(?:centimetres?|centimeters?)')]),
+  u('ft', 'length', 0.3048, 'ft', ['ft', words('(?:feet|foot)')]),
+  u('mi', 'length', 1609.344, 'miles', [words('miles?')]),
+  u('count', 'count', 1, '', [
+    words(
+      '(?:(?:full|major|complete|distinct|separate|great|big|large) )?(?:glacial(?:[-–]| )interglacial (?:cycles?|periods?)|glacial (?:cycles?|periods?)|ice(?:-| )age cycles|ice(?:-| )ages?|glaciations?|interglacials?|glacials|terminations?|cycles)',
+    ),
+  ]),
+  u('ratio', 'ratio', 1, 'times', []),
+  u('', 'number', 1, '', []),
+  u('number', 'number', 1, '', []),
+];
+
+const PER = String.raw`[\s\u00A0]*(?:\/|${words('per|an?|each|every')})[\s\u00A0]*`;
+const PER_DURATION: { id: string; years: number; forms: string }[] = [
+  { id: 'yr', years: 1, forms: String.raw`(?:${PER}(?:${YEAR_WORD}|${words('annum')}|a)|[\s\u00A0]*(?:yr|a)(?:⁻¹|-1|\^-1))` },
+  { id: 'decade', years: 10, forms: `${PER}${words('decade')}` },
+  { id: 'century', years: 100, forms: `${PER}${words('century')}` },
+  { id: 'kyr', years: 1e3, forms: `${PER}(?:${words('millennium|thousand years')}|kyr|ka)` },
+];
+const RATE_BASES: { id: string; dimension: Dimension; factor: number; display: string; forms: string[] }[] = [
+  { id: 'ppm', dimension: 'concentration-rate', factor: 1, display: 'ppm', forms: PPM },
+  { id: 'ppb', dimension: 'concentration-rate', factor: 1e-3, display: 'ppb', forms: PPB },
+  { id: 'degC', dimension: 'temperature-rate', factor: 1, display: '°C', forms: DEG_C },
+  { id: 'K', dimension: 'temperature-rate', factor: 1, display: 'K', forms: KELVIN },
+  { id: 'degF', dimension: 'temperature-rate', factor: 5 / 9, display: '°F', forms: DEG_F },
+];
+const PER_WORDS: Record<string, string> = { yr: 'year', decade: 'decade', century: 'century', kyr: 'thousand years' };
+
+/** Rates: every concentration or temperature-change unit per every duration (ppm/yr, degC/century...). */
+const RATE_UNITS: UnitDef[] = RATE_BASES.flatMap((base) =>
+  PER_DURATION.map((per) =>
+    u(`${base.id}/${per.id}`, base.dimension, base.factor / per.years, `${base.display} per ${PER_WORDS[per.id] ?? per.id}`, [
+      `(?:${base.forms.join('|')})${per.forms}`,
+    ]),
+  ),
+);
+
+/** The unit table: every unit, its dimension, its factor and offset to the canonical unit, and its written forms. */
+export const UNIT_TABLE: readonly UnitDef[] = [...BASE_UNITS, ...RATE_UNITS];
+
+/** The canonical unit of each dimension (as in src/types.ts). */
+export const CANONICAL_UNIT: Record<Dimension, string> = {
+  duration: 'yr',
+  age: 'yr BP',
+  concentration: 'ppm',
+  'temperature-change': 'K',
+  temperature: 'degC',
+  length: 'm',
+  'concentration-rate': 'ppm/yr',
+  'temperature-rate': 'K/yr',
+  count: 'count',
+  ratio: 'ratio',
+  percent: '%',
+  number: 'number',
+};
