@@ -35,12 +35,13 @@ export function shownClaim(q: Quantity): ShownValue {
 }
 
 /**
- * The correction for a claim: the pack's wording when the draft uses the canonical unit (or no
- * unit), else the central value (or the range) restated in the draft's unit.
+ * The correction for a claim: the pack's wording when the draft's unit equals the canonical one
+ * (years, ppm, °C as a difference...), else the central value (or the range) restated in the draft's unit.
  */
 export function correctionFor(r: ReferenceValue, q: Quantity): string {
   const unit = displayUnit(q);
-  if (unit === CANONICAL_UNITS[q.dimension] && unitDef(unit)?.factor === 1) return r.wording;
+  const def = unitDef(unit);
+  if (def === undefined || (def.factor === 1 && def.offset === 0)) return r.wording;
   if (r.central === undefined) return formatRange(r.low, r.high, unit);
   const label = unitLabel(unit);
   return `about ${formatNumber(fromCanonical(r.central, unit), 2)}${label === '' ? '' : ` ${label}`}`;

@@ -76,3 +76,12 @@ describe('checkReferences', () => {
     expect(relativeDistance(410, 415, { low: 400, high: 423 })).toBe(0);
   });
 });
+
+describe('corrections', () => {
+  it('use the pack wording when the draft writes °C for a temperature change (1 °C difference = 1 K, SI Brochure)', () => {
+    const s = 'Global temperature at the Last Glacial Maximum was 15 °C lower.';
+    const [flag] = check(s, q(s, '15 °C', 'temperature-change', 14.5, 15.5, 'degC')).flags;
+    expect(flag?.correction).toBe('about 6 °C (estimates run from about 4 to 7 °C)');
+    expect(flag?.reference?.text).toBe('3.6–7 °C');
+  });
+});
