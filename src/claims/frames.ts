@@ -86,10 +86,17 @@ export function extractFrames(sentence: string, words: FrameWords = FRAME_WORDS)
   return frames.sort((a, b) => a.start - b.start || b.end - a.end);
 }
 
+const PRONOUNS = new Set(['it', 'they', 'this', 'these', 'those']);
+
 function causalFrame(tokens: SentenceTokens, hit: PhraseHit, mentions: ReturnType<typeof subjectMentions>, negation: Phrase[], base: FrameBase): Frame {
   // "X drives Y"; in the passive "Y is driven by X" the cause stands after "by".
   const passive = [1, 2].some((k) => tokens.tokens[tokens.words[hit.last + k] ?? -1]?.text === 'by');
-  const left = nearestMention(tokens, mentions, hit, -1)?.kind;
+  const leftMention = nearestMention(tokens, mentions, hit, -1);
+  // "Temperature rose first, so it cannot have caused...": a pronoun stands for an unknown subject.
+  const pronounBetween =
+    leftMention !== undefined &&
+    tokens.words.slice(leftMention.hit.last + 1, hit.first).some((w) => PRONOUNS.has(tokens.tokens[w]?.text ?? ''));
+  const left = pronounBetween ? undefined : leftMention?.kind;
   const right = nearestMention(tokens, mentions, hit, 1)?.kind;
   const [cause, effect] = passive ? [right, left] : [left, right];
   return {
