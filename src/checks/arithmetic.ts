@@ -1,0 +1,51 @@
+/**
+ * Checks the draft's own arithmetic inside one sentence: a change that is not to − from, a rate that
+ * is not change ÷ duration, a duration that contradicts its start and end dates, a ratio or
+ * percentage that contradicts its two values. Tolerances come from the intervals (see
+ * src/quantities/interval-rules.ts); correct arithmetic is never flagged.
+ */
+import { formatQuantity, hedgeRule, rewriteQuantity } from '../quantities/index.js';
+import type { FlagDraft, Quantity } from '../types.js';
+import type { Derived } from './arithmetic-derive.js';
+import { disjoint, levelFor } from './arithmetic-levels.js';
+import { ARITHMETIC_RULES, findPairs } from './arithmetic-rules.js';
+
+/**
+ * The replacement for a stated quantity: its own words with the right value. An approximation
+ * hedge stays ("about 100 ppm"); a bound is dropped, since "more than 1.6 times" would misstate it.
+ */
+export function correctionFor(q: Quantity, value: number): string {
+  const rewritten = rewriteQuantity(q, value);
+  if (q.hedge === undefined || hedgeRule(q.hedge)?.id === 'about') return rewritten;
+  const lower = rewritten.toLowerCase();
+  const hedge = q.hedge.toLowerCase();
+  if (lower.startsWith(hedge)) return rewritten.slice(hedge.length).trimStart();
+  const at = lower.lastIndexOf(hedge);
+  return at > 0 ? rewritten.slice(0, at).replace(/[\s,]+$/u, '') : rewritten;
+}
+
+const shown = (q: Quantity, d: Derived): string => formatQuantity(d.value, q.unit, q.statedUnit);
+
+/** Every arithmetic contradiction in one sentence, with the right value in the correction. */
+export function checkArithmetic(text: string, quantities: Quantity[]): FlagDraft[] {
+  const pairs = findPairs(text, quantities);
+  const flags: FlagDraft[] = [];
+  for (const rule of ARITHMETIC_RULES) {
+    for (const { stated, computed, measures } of rule.derive(text, quantities, pairs)) {
+      if (!disjoint(stated, computed)) continue;
+      const right = shown(stated, computed);
+      flags.push({
+        ruleId: rule.id,
+        level: levelFor(stated, computed),
+        start: stated.start,
+        end: stated.end,
+        reason: `By the sentence's own numbers, ${measures} is ${right}, not ${stated.text}.`,
+        claimed: { text: stated.text, low: stated.low, high: stated.high, unit: stated.unit },
+        reference: { id: rule.id, measures, text: right, low: computed.low, high: computed.high, unit: stated.unit },
+        correction: correctionFor(stated, computed.value),
+        sources: [],
+      });
+    }
+  }
+  return flags.sort((a, b) => a.start - b.start);
+}

@@ -1,0 +1,36 @@
+/**
+ * Checks unit use in one sentence: conversions restated in another unit (ppm ↔ %, °C ↔ °F for
+ * changes and readings, BCE/CE ↔ years ago/BP/b2k, m ↔ ft, kyr ↔ years) and CO2 levels written in
+ * the wrong unit. Each flag carries the right value in the correction and cites the definition
+ * (NIST SP 811 for factors; Stuiver & Polach 1977 for BP; Walker et al. 2009 for b2k).
+ */
+import { formatQuantity } from '../quantities/index.js';
+import type { FlagDraft, Quantity } from '../types.js';
+import { correctionFor } from './arithmetic.js';
+import { disjoint, levelFor } from './arithmetic-levels.js';
+import { UNIT_RULES } from './units-rules.js';
+
+/** Every unit slip in one sentence. */
+export function checkUnits(text: string, quantities: Quantity[]): FlagDraft[] {
+  const flags: FlagDraft[] = [];
+  for (const rule of UNIT_RULES) {
+    for (const f of rule.find(text, quantities)) {
+      const single = f.level !== undefined;
+      if (!single && !disjoint(f.stated, f.computed)) continue;
+      const q: Quantity = f.stated;
+      const right = single ? (f.correction ?? q.text) : formatQuantity(f.computed.value, q.unit, q.statedUnit);
+      flags.push({
+        ruleId: rule.id,
+        level: f.level ?? levelFor(q, f.computed),
+        start: q.start,
+        end: q.end,
+        reason: single ? f.reason : `${q.text} should be ${right}. ${f.reason}`,
+        claimed: { text: q.text, low: q.low, high: q.high, unit: q.unit },
+        reference: { id: rule.id, measures: rule.summary, text: right, low: f.computed.low, high: f.computed.high, unit: f.unit ?? q.unit },
+        correction: f.correction ?? correctionFor(q, f.computed.value),
+        sources: f.sources,
+      });
+    }
+  }
+  return flags.sort((a, b) => a.start - b.start);
+}
