@@ -27,6 +27,12 @@ export const SIGN_OFF_INSTRUCTIONS = [
   'remark. Then run `firnline signoff --from <this file> --by "Your Name"`. Leave the claim ids as they are.',
 ].join('\n');
 
+/**
+ * The checklist's first line. A checklist repeats the drafts' sentences, so a run over the folder
+ * it sits in would read it as one more draft; this line lets a reader (and Firnline) tell it apart.
+ */
+export const CHECKLIST_MARKER = '<!-- firnline sign-off checklist: a review aid made from the drafts, not a draft -->';
+
 /** `checklist --format markdown`. */
 export function renderChecklistMarkdown(input: ChecklistInput): string {
   return checklistToMarkdown(toChecklist(input));
@@ -36,11 +42,12 @@ export function renderChecklistMarkdown(input: ChecklistInput): string {
 export function checklistToMarkdown(checklist: Checklist): string {
   const { counts } = checklist;
   const out = [
+    CHECKLIST_MARKER,
     '# Sign-off checklist',
     '',
     `Made by Firnline ${checklist.tool.version} on ${checklist.generated.slice(0, 10)}, against the rule packs ${checklist.packs || '(none)'}.`,
-    `${counts.claims} claims in ${counts.files} files: ${counts.conflicts} conflict with a reference value, ${counts.agrees} agree, ${counts['no reference']} have no reference. ` +
-      `Already signed off: ${counts['signed off']}; changed since sign-off: ${counts.stale}.`,
+    `${plural(counts.claims, 'claim')} in ${plural(counts.files, 'file')}. Verdicts: conflicts ${counts.conflicts}, agrees ${counts.agrees}, no reference ${counts['no reference']}. ` +
+      `Sign-off: signed off ${counts['signed off']}, changed since sign-off ${counts.stale}, open ${counts.open}.`,
     '',
     `> ${checklist.cautions}`,
     '',
@@ -87,6 +94,10 @@ function referenceWords(item: ChecklistItem): string {
   return item.references
     .map((r) => `${r.measures}: ${r.wording} (${range(r)}${r.asOf === undefined ? '' : `, as of ${r.asOf}`})`)
     .join('; ');
+}
+
+function plural(n: number, word: string): string {
+  return `${n} ${word}${n === 1 ? '' : 's'}`;
 }
 
 function range(r: ChecklistRange): string {

@@ -1,5 +1,5 @@
 import { Command, Option } from 'commander';
-import { relative, resolve } from 'node:path';
+import { isAbsolute, relative, resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import { renderChecklistJson } from '../../report/checklist-json.js';
 import { renderChecklistMarkdown } from '../../report/checklist-markdown.js';
@@ -35,7 +35,8 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
     .option('--pack <file>', 'add a rule pack (repeatable)', (value: string, previous: string[]) => [...previous, value], [])
     .action(async (paths: string[], flags: ChecklistFlags) => {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
-      const result = await checkPaths(paths.length > 0 ? paths : ['.'], {
+      const targets = paths.length > 0 ? paths : ['.'];
+      const result = await checkPaths(targets, {
         cwd: ctx.cwd,
         packs: run.packs,
         include: run.include,
@@ -58,7 +59,15 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
       }
       const target = resolve(ctx.cwd, flags.output);
       await writeFileAtomic(target, text);
+      if (/\.(?:md|markdown|txt)$/iu.test(target) && targets.some((p) => p !== '-' && isInside(target, resolve(ctx.cwd, p)))) {
+        ctx.stderr(`Note: ${relative(ctx.cwd, target)} is inside the folders checked, so later runs would read it as a draft; write it elsewhere or add it to \`exclude\` in firnline.yaml.\n`);
+      }
       const { counts } = review;
       ctx.stderr(`Wrote ${result.claims.length} claims to ${relative(ctx.cwd, target)} (${counts['signed off']} signed off, ${counts.stale} changed since sign-off, ${counts.open} open).\n`);
     });
+}
+
+function isInside(file: string, folder: string): boolean {
+  const rel = relative(folder, file);
+  return rel === '' || (!rel.startsWith('..') && !isAbsolute(rel));
 }
