@@ -68,7 +68,9 @@ function wordAtoms(m: RegExpExecArray): Atom[] {
     const first = tokens[i];
     const last = tokens[i + (read?.used ?? 1) - 1];
     if (read === undefined || first === undefined || last === undefined) { i++; continue; }
-    atoms.push({ start: first.start, end: last.end, value: read.value, half: halfPlaceOfValue(read.value), scale: 1, form: 'words', rule: 'precision', plainInteger: false, sign: '' });
+    // A phrase ending in a scale word carries it, so "two and three million" can share it.
+    const scale = SCALES[last.word] !== undefined && last.word !== 'hundred' ? (SCALES[last.word] as number) : 1;
+    atoms.push({ start: first.start, end: last.end, value: read.value, half: halfPlaceOfValue(read.value), scale, form: 'words', rule: 'precision', plainInteger: false, sign: '' });
     i += read.used;
   }
   return atoms;

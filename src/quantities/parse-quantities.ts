@@ -57,7 +57,7 @@ function readGroup(text: string, g: Group, previous: Quantity | undefined): Read
     if (dims.includes('temperature')) {
       wanted = equivalent && (previous.dimension === 'temperature' || previous.dimension === 'temperature-change')
         ? previous.dimension
-        : readTemperature(before, after, a.sign);
+        : readTemperature(before, after, a.sign, unit.defs[0]?.id ?? '', a.value);
     } else wanted = readKiloAnnum(before, after);
     def = unit.defs.find((d) => d.dimension === wanted) ?? def;
   }

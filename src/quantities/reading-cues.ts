@@ -18,11 +18,14 @@ export interface Cue {
 export const TEMPERATURE_CUES: readonly Cue[] = [
   { reading: 'temperature-change', where: 'after', words: ['warmer', 'cooler', 'colder', 'hotter', 'higher', 'lower', 'rise', 'increase', 'drop', 'fall', 'decline', 'change', 'shift', 'difference', 'swing', 'warming', 'cooling', 'anomaly', 'above', 'below', 'more', 'less', 'of warming', 'of cooling', 'amplitude'] },
   { reading: 'temperature-change', where: 'before', words: ['by', 'warmed', 'cooled', 'rose', 'fell', 'dropped', 'climbed', 'increased', 'decreased', 'changed', 'rise of', 'drop of', 'fall of', 'change of', 'increase of', 'decrease of', 'swing of', 'difference of', 'warming of', 'cooling of', 'anomaly of', 'amplitude of', 'shift of', 'a', 'an'] },
-  { reading: 'temperature', where: 'before', words: ['was', 'were', 'is', 'are', 'at', 'reached', 'averaged', 'averages', 'stood at', 'of', 'to', 'from', 'between', 'minus'] },
+  { reading: 'temperature', where: 'before', words: ['was', 'were', 'is', 'are', 'at', 'reach', 'reaches', 'reached', 'hit', 'hits', 'averaged', 'averages', 'stood at', 'of', 'to', 'from', 'between', 'minus'] },
 ];
 
-/** What the temperature cues do not settle: a signed "+5 °C" is a change, a negative number a temperature, anything else a change. */
-export const TEMPERATURE_DEFAULT = 'a leading + reads as a change; a negative number as a temperature; otherwise a change (most temperatures in ice-age writing are differences)';
+/**
+ * What comes before the cues and what the cues do not settle. A kelvin value below 100 is a change
+ * whatever the words (no air on Earth is that cold); then the cue tables; then the sign.
+ */
+export const TEMPERATURE_DEFAULT = 'a value in K below 100 is a change before any cue is read; with no cue, a leading + reads as a change, a negative number as a temperature, anything else as a change (most temperatures in ice-age writing are differences)';
 
 /** Cues that make "ka" or "Ma" a duration; without one they are dates (ka = thousand years before present). */
 export const DURATION_CUES: readonly Cue[] = [
@@ -31,7 +34,7 @@ export const DURATION_CUES: readonly Cue[] = [
 ];
 
 /** Words before a bare four-digit whole number (1000–2100) that make it a calendar year (CE). */
-export const CALENDAR_CUES: readonly string[] = ['in', 'by', 'since', 'from', 'until', 'till', 'to', 'after', 'before', 'around', 'about', 'circa', 'c.', 'ca.', 'of', 'between', 'and', 'during', 'year', 'early', 'late', 'mid', 'mid-', 'through', '–', '—', '-'];
+export const CALENDAR_CUES: readonly string[] = ['in', 'by', 'for', 'since', 'from', 'until', 'till', 'to', 'after', 'before', 'around', 'about', 'circa', 'c.', 'ca.', 'of', 'between', 'and', 'during', 'year', 'early', 'late', 'mid', 'mid-', 'through', '–', '—', '-'];
 
 /** Words before a bare number that make it a label, not a quantity ("MIS 11", "Figure 3"). */
 export const LABEL_CUES: readonly string[] = ['MIS', 'stage', 'termination', 'figure', 'fig.', 'table', 'page', 'p.', 'pp.', 'chapter', 'section', 'no.', 'issue', 'volume', 'vol.', 'panel', 'room', 'gallery', '#'];
@@ -61,8 +64,9 @@ function firstCue(table: { cue: Cue; re: RegExp }[], before: string, after: stri
   return table.find(({ cue, re }) => re.test(cue.where === 'before' ? before : after))?.cue;
 }
 
-/** Temperature or temperature change, from the words around the quantity and its sign. */
-export function readTemperature(before: string, after: string, sign: string): Dimension {
+/** Temperature or temperature change, from the unit and value, the words around the quantity, and its sign. */
+export function readTemperature(before: string, after: string, sign: string, unitId: string, value: number): Dimension {
+  if (unitId === 'K' && Math.abs(value) < 100) return 'temperature-change';
   const cue = firstCue(TEMPERATURE, before, after);
   if (cue !== undefined) return cue.reading;
   if (sign === '+') return 'temperature-change';
