@@ -64,7 +64,10 @@ describe('the sign-off workflow in a fresh git repository (issue 6, "Done when")
 
   it('importing the same ticked checklist twice adds nothing the second time', async () => {
     const dir = await draftRepository(ICE_HALL);
-    await firnline(dir, 'checklist', 'drafts', '-o', 'checklist.md');
+    // Written in the repository root this time, which Firnline warns about; signoff --from still
+    // only scans the drafts the checklist names.
+    const written = await firnline(dir, 'checklist', '-o', 'checklist.md');
+    expect(written.out).toContain('Note: checklist.md is inside the folders checked, so later runs would read it as a draft;');
     const ticked = (await readFile(join(dir, 'checklist.md'), 'utf8')).replaceAll('- [ ] **', '- [x] **');
     await writeFile(join(dir, 'checklist.md'), ticked);
     await firnline(dir, 'signoff', '--from', 'checklist.md', '--by', 'R. Okafor');
