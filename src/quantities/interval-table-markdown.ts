@@ -25,7 +25,7 @@ const cell = (s: string): string => s.replace(/\|/g, '\\|');
 /** The Markdown table: rule, kind, words, low, high, why. */
 export function renderIntervalTable(): string {
   const rows = INTERVAL_RULES.map((r) =>
-    `| ${r.id} | ${r.kind} | ${r.words.map((w) => `"${cell(w)}"`).join(', ')} | ${describeBound(r.low)} | ${describeBound(r.high)} | ${cell(r.why)} |`,
+    `| ${r.id} | ${r.kind} | ${r.words.map((w) => `"${cell(w)}"`).join(', ')} | ${cell(describeBound(r.low))} | ${cell(describeBound(r.high))} | ${cell(r.why)} |`,
   );
   return ['| rule | kind | words | low | high | why |', '|---|---|---|---|---|---|', ...rows].join('\n');
 }

@@ -1,0 +1,46 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { INTERVAL_RULES, parseQuantities, renderIntervalTable } from '../../src/quantities/index.js';
+
+const DOC = new URL('../../docs/quantities.md', import.meta.url);
+
+describe('the interval table', () => {
+  it('is shown in docs/quantities.md exactly as the code has it', () => {
+    const doc = readFileSync(DOC, 'utf8');
+    const between = /<!-- interval-table:start -->\n([\s\S]*?)\n<!-- interval-table:end -->/.exec(doc);
+    expect(between?.[1]).toBe(renderIntervalTable());
+  });
+
+  it('has one row per id, and every hedge word belongs to one row only', () => {
+    const ids = INTERVAL_RULES.map((r) => r.id);
+    expect(new Set(ids).size).toBe(ids.length);
+    const words = INTERVAL_RULES.filter((r) => r.kind === 'hedge').flatMap((r) => r.words.map((w) => w.toLowerCase()));
+    expect(new Set(words).size).toBe(words.length);
+  });
+
+  // Each row at work on one written number: [sentence, quantity text, low, high] in canonical units.
+  const ROWS: [string, string, string, number, number][] = [
+    ['precision', 'The core holds 420,000 years.', '420,000 years', 415000, 425000],
+    ['precision', 'It was 0.5 °C warmer.', '0.5 °C', 0.45, 0.55],
+    ['calendar-year', 'The rise began in 1750.', '1750', 199.5, 200.5],
+    ['plus-minus', 'It was 9 ± 1 °C colder.', '9 ± 1 °C', 8, 10],
+    ['range', 'Peaks reached 280–300 ppm.', '280–300 ppm', 280, 300],
+    ['multiplier-word', 'Dust rose threefold.', 'threefold', 2.85, 3.15],
+    ['plural-magnitude', 'It took thousands of years.', 'thousands of years', 2000, 10000],
+    ['a-few', 'It took a few centuries.', 'a few centuries', 200, 500],
+    ['several', 'It took several millennia.', 'several millennia', 3000, 7000],
+    ['about', 'It spans about 420,000 years.', 'about 420,000 years', 373000, 467000],
+    ['nearly', 'It spans nearly 100,000 years.', 'nearly 100,000 years', 90000, 100000],
+    ['just-over', 'It holds just over 400 ppm.', 'just over 400 ppm', 400, 440],
+    ['more-than', 'It spans more than 800,000 years.', 'more than 800,000 years', 800000, 1200000],
+    ['at-least', 'It spans at least 800,000 years.', 'at least 800,000 years', 800000, 1600000],
+    ['up-to', 'It swung up to 15 °C.', 'up to 15 °C', 7.5, 15],
+    ['less-than', 'It was less than 300 ppm.', 'less than 300 ppm', 0, 300],
+  ];
+  it.each(ROWS)('row %s: %s', (_row, sentence, text, low, high) => {
+    const [q] = parseQuantities(sentence);
+    expect(q?.text).toBe(text);
+    expect(q?.low).toBeCloseTo(low, 9);
+    expect(q?.high).toBeCloseTo(high, 9);
+  });
+});
