@@ -22,7 +22,8 @@ const SPAN_OF_CHANGE = before(['lasting', 'spanning', 'span of', 'period of', 'o
 const NOT_A_SPAN = before(['past', 'last', 'previous', 'preceding', 'next', 'every', 'each', 'per']);
 const RATIO_AFTER = after([...CHANGE_NOUNS, 'higher', 'larger', 'greater', 'more', 'lower', 'less', 'smaller', 'above', 'below', 'as high', 'as large', 'as much', 'as great', 'as long']);
 const RATIO_VERB = /^(?:doubled|tripled|quadrupled|halved|doubling|tripling|halving|[\p{N}.]+[-\s]?fold|\p{L}+[-\s]?fold)$/iu;
-const COMPARATIVE_AFTER = after(['higher than', 'more than', 'greater than', 'larger than', 'above', 'lower than', 'less than', 'below', 'smaller than']);
+/** "higher than", "more CO2 than", "above": a comparison, with up to three words before "than". */
+const COMPARATIVE_AFTER = new RegExp(String.raw`^[\s\u00A0-]*(?:(?:higher|more|greater|larger|lower|less|smaller)(?:${S}+[^\s.;,]+){0,3}${S}+than|above|below)(?![\p{L}])`, 'iu');
 
 /** A from-to pair: indices of the two ends in the quantity list. */
 export interface Pair {
