@@ -28,7 +28,7 @@ export interface Atom {
 const SEP = String.raw`[,\u2009\u202F\u00A0 ]`;
 const NUM = String.raw`\d{1,3}(?:${SEP}\d{3}(?!\d))+(?:\.\d+)?|\d+(?:\.\d+)?|\.\d+`;
 const SUP = '⁰¹²³⁴⁵⁶⁷⁸⁹';
-const EXP = String.raw`[eE](?<e1>[-−+]?\d+)(?![\p{L}\p{N}])|[\s\u00A0]*[×xX*·][\s\u00A0]*10(?:[\s\u00A0]*\^[\s\u00A0]*(?<e2>[-−+]?\d+)|(?<e3>[⁻⁺]?[${SUP}]+))`;
+const EXP = String.raw`[eE](?<e1>[-−+]?\d{1,3})(?![\p{L}\p{N}])|[\s\u00A0]*[×xX*·][\s\u00A0]*10(?:[\s\u00A0]*\^[\s\u00A0]*(?<e2>[-−+]?\d{1,3})(?!\d)|(?<e3>[⁻⁺]?[${SUP}]{1,3})(?![${SUP}]))`;
 const SCALE = String.raw`[\s\u00A0]+(?<scale>hundred|thousand|million|billion)(?![\p{L}])`;
 const DIGITS = new RegExp(
   String.raw`(?<sign>(?<![\p{L}\p{N}.])[-−+])?(?<![\p{L}\p{N}_.])(?<num>${NUM})(?:${EXP})?(?:${SCALE})?`,
@@ -93,9 +93,11 @@ export function findAtoms(text: string): Atom[] {
     ...[...text.matchAll(VAGUE)].map(vagueAtom),
     ...[...text.matchAll(WORD_PHRASE)].flatMap(wordAtoms),
   ];
-  found.sort((a, b) => a.start - b.start || b.end - a.end);
+  // An exponent such as 8e300 written by mistake must not become Infinity in an interval.
+  const finite = found.filter((a) => Number.isFinite(a.value) && Number.isFinite(a.half) && Math.abs(a.value) < 1e15);
+  finite.sort((a, b) => a.start - b.start || b.end - a.end);
   const kept: Atom[] = [];
-  for (const atom of found) {
+  for (const atom of finite) {
     const prev = kept[kept.length - 1];
     if (prev === undefined || atom.start >= prev.end) kept.push(atom);
   }

@@ -38,7 +38,10 @@ function readGroup(text: string, g: Group, previous: Quantity | undefined): Read
   const cueEnd = hedgeBefore(text, g.prefixStart ?? a.start, 'temperature')?.start ?? g.prefixStart ?? a.start;
   const before = text.slice(Math.max(0, cueEnd - 48), cueEnd);
   const rawBefore = text.slice(Math.max(0, a.start - 48), a.start);
-  const after = text.slice(unit?.end ?? last(g).atom.end, (unit?.end ?? last(g).atom.end) + 32);
+  // Cue words after a restatement still count: in "8 °C, or 46 °F, colder", "colder" is the cue.
+  const after = text
+    .slice(unit?.end ?? last(g).atom.end, (unit?.end ?? last(g).atom.end) + 64)
+    .replace(/^[\s\u00A0]*(?:\([^)]{0,24}\)|,?[\s\u00A0]*or[\s\u00A0]+[^,;]{0,24},)/u, '');
   const rule = g.kind === 'range' ? 'range' : g.kind === 'plus-minus' ? 'plus-minus' : a.rule;
   if (unit === undefined) {
     if (a.form === 'multiplier') return { def: RATIO, rule, prefixStart: g.prefixStart };

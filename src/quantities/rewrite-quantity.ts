@@ -8,12 +8,23 @@ import { fromCanonical } from './convert.js';
 import { findAtoms } from './find-atoms.js';
 import { formatNumber, formatQuantity } from './format-quantity.js';
 
-/** `q.text` with its number replaced by `value` (canonical unit), rounded to `significant` figures. */
-export function rewriteQuantity(q: Quantity, value: number, significant = 3): string {
+/** Significant digits as written: "11,703" → 5, "10,000" → 1, "0.040" → 2. */
+function writtenFigures(written: string): number {
+  const digits = written.replace(/[^\d.]/g, '');
+  const bare = digits.replace('.', '').replace(/^0+/, '');
+  return digits.includes('.') ? bare.length : bare.replace(/0+$/, '').length;
+}
+
+/**
+ * `q.text` with its number replaced by `value` (canonical unit), rounded to `significant` figures:
+ * by default as many as the draft wrote, and at least 3.
+ */
+export function rewriteQuantity(q: Quantity, value: number, significant?: number): string {
   const atoms = findAtoms(q.text);
   const atom = atoms[0];
+  const figures = significant ?? Math.max(3, atom === undefined ? 0 : writtenFigures(q.text.slice(atom.start, atom.end)));
   const id = q.statedUnit === '' ? q.unit : q.statedUnit;
-  if (atom === undefined || atoms.length > 1 || atom.form === 'vague') return formatQuantity(value, q.unit, q.statedUnit, significant);
+  if (atom === undefined || atoms.length > 1 || atom.form === 'vague') return formatQuantity(value, q.unit, q.statedUnit, figures);
   const stated = fromCanonical(value, id, q.dimension);
   let written: string;
   if (atom.form === 'multiplier') written = `${formatNumber(stated, 2)} times`;
@@ -22,8 +33,8 @@ export function rewriteQuantity(q: Quantity, value: number, significant = 3): st
     written = String(Math.round(stated));
   } else if (atom.scale > 1) {
     const scaleWord = /\p{L}+$/u.exec(q.text.slice(atom.start, atom.end))?.[0] ?? '';
-    written = `${formatNumber(stated / atom.scale, significant)} ${scaleWord}`;
-  } else written = formatNumber(stated, significant, q.statedUnit !== 'BCE' || Math.abs(stated) >= 10000);
+    written = `${formatNumber(stated / atom.scale, figures)} ${scaleWord}`;
+  } else written = formatNumber(stated, figures, q.statedUnit !== 'BCE' || Math.abs(stated) >= 10000);
   if (q.text.slice(atom.start, atom.end).startsWith('−')) written = written.replace(/^-/, '−');
   return q.text.slice(0, atom.start) + written + q.text.slice(atom.end);
 }

@@ -83,3 +83,9 @@ describe('property: any Unicode input', () => {
     );
   });
 });
+
+describe('regressions found by the property tests', () => {
+  it('does not read "8e51750" as 8 × 10^51750 (Infinity)', () => {
+    for (const q of parseQuantities('8e51750')) expect(Number.isFinite(q.low) && Number.isFinite(q.high)).toBe(true);
+  });
+});
