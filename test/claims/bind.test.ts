@@ -34,7 +34,7 @@ describe('bindQuantities', () => {
   });
 
   it('binds nothing when the quantity is of a dimension the value does not accept', () => {
-    const s = 'The Vostok record reaches back 3,600 metres.';
+    const s = 'The Vostok core reaches down to 3,600 metres.';
     expect(bindQuantities(s, [q(s, '3,600 metres', 'length', 3550, 3650)], packs).bindings).toEqual([{ quantityIndex: 0, referenceId: 'vostok-drilled-depth' }]);
     expect(bindQuantities(s, [q(s, '3,600 metres', 'count', 3550, 3650)], packs)).toEqual({ bindings: [], ambiguous: [] });
   });
@@ -55,5 +55,15 @@ describe('bindQuantities', () => {
   it('matches terms case-insensitively on word boundaries, including CO₂ with a subscript', () => {
     expect(findTerms('Carbon dioxide and CO₂ and co2', packs).get('co2')).toEqual([[0, 14], [19, 22], [27, 30]]);
     expect(findTerms('the interglacial', packs).has('glacial')).toBe(false);
+  });
+});
+
+describe('bindQuantities on depths', () => {
+  it('does not bind a distance to a core depth when the sentence says nothing of depth', async () => {
+    // Regression: "about 560 km away" bound to the EPICA Dome C drilled depth (Lüthi et al. 2008 give 3270 m).
+    const packs = await loadPacks([]);
+    const s = 'The EPICA Dome C core, about 560 km away, reaches further.';
+    const km = { text: 'about 560 km', start: s.indexOf('about'), end: s.indexOf(' away'), value: 560000, low: 499000, high: 621000, dimension: 'length' as const, unit: 'm', statedUnit: 'km' };
+    expect(bindQuantities(s, [km], packs).bindings).toEqual([]);
   });
 });
