@@ -3,6 +3,11 @@ import type { ShownValue } from '../types.js';
 /** How a canonical unit is written after a number; a unit not listed is written as it is. */
 const UNIT_WORDS: Record<string, string> = {
   degC: '°C',
+  // Temperature differences: the draft's own unit, not the internal name (1 K = 1 °C difference, SI).
+  'degC-change': '°C',
+  'degF-change': '°F',
+  'ppm/yr': 'ppm per year',
+  'K/yr': '°C per year',
   ratio: 'times',
   count: '',
 };

@@ -34,7 +34,7 @@ function flagBlock(chalk: ChalkInstance, flag: Flag): string {
     LEVEL_COLOUR[flag.level](chalk)(flag.level),
     flag.ruleId,
   ].join(chalk.dim(' · '));
-  const said = flag.claimed === undefined ? `"${flag.excerpt}"` : formatClaimed(flag.claimed);
+  const said = flag.claimed === undefined ? `"${flag.excerpt.replace(/\s+/gu, ' ')}"` : formatClaimed(flag.claimed);
   const lines = [head, `  ${asSentence(flag.reason)}`, ...rows(chalk, 'draft says', [said])];
   if (flag.reference !== undefined) lines.push(...rows(chalk, 'reference', [formatReference(flag.reference)]));
   if (flag.correction !== undefined) {
