@@ -4,6 +4,8 @@ import { checkReasoning } from './checks/reasoning/index.js';
 import { checkReferences } from './checks/reference.js';
 import { checkUnits } from './checks/units.js';
 import { FirnlineError } from './errors.js';
+import { relative, resolve, sep } from 'node:path';
+import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
 import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
@@ -24,6 +26,16 @@ export interface CheckOptions {
   levels?: Record<string, Level | 'off'>;
   /** Reads standard input for the path `-`. */
   readStdin?: () => Promise<string>;
+  /** Claim ids and the ledger use paths relative to this folder (default: `cwd`). */
+  projectRoot?: string;
+}
+
+/** Per-draft settings of `checkDraft`. */
+export interface DraftOptions {
+  topic?: TopicMatcher;
+  levels?: Record<string, Level | 'off'>;
+  /** The draft's path relative to the project root, for claim ids (default: the draft's path). */
+  projectPath?: string;
 }
 
 /** The part of a run that concerns one draft. */
@@ -41,14 +53,19 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
     fromDisk.length > 0 ? await findDrafts(fromDisk, options.cwd, pickDefined(options)) : { files: [] as string[] };
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
 
+  const levels = options.levels ?? {};
   if (paths.includes('-')) {
     if (options.readStdin === undefined) throw new FirnlineError('stdin-unavailable', 'standard input cannot be read here');
-    addText(result, '-', await options.readStdin(), 'markdown', packs, topic, options.levels);
+    addText(result, draftFromText('-', await options.readStdin(), 'markdown'), packs, { topic, levels });
   }
   for (const file of files) {
     const text = await readDraftText(file, options.cwd);
-    if (typeof text === 'string') addText(result, file, text, draftFormat(file), packs, topic, options.levels);
-    else result.skipped.push({ file, reason: text.skipped });
+    if (typeof text !== 'string') {
+      result.skipped.push({ file, reason: text.skipped });
+      continue;
+    }
+    const projectPath = toPosix(relative(options.projectRoot ?? options.cwd, resolve(options.cwd, file)));
+    addText(result, { path: file, text, format: draftFormat(file) }, packs, { topic, levels, projectPath });
   }
   result.rules = describeFlaggedRules(result.flags, packs);
   return result;
@@ -62,27 +79,34 @@ export async function checkText(
   const packs = options.packs ?? (await loadPacks([]));
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
   const path = options.path ?? '-';
-  addText(result, path, text, options.format ?? draftFormat(path), packs, createTopicMatcher(packs.topicWords), options.levels);
+  const draft = { path, text, format: options.format ?? draftFormat(path) };
+  addText(result, draft, packs, { topic: createTopicMatcher(packs.topicWords), levels: options.levels ?? {} });
   result.rules = describeFlaggedRules(result.flags, packs);
   return result;
 }
 
-/** Adds one draft's findings; a text with no topic word is skipped before it is even parsed. */
+/**
+ * Adds one draft's findings. A text with no topic word is skipped before it is even parsed, and so
+ * is a sign-off checklist that Firnline wrote (it quotes every claim, and is not a draft).
+ */
 function addText(
   result: CheckResult,
-  path: string,
-  text: string,
-  format: Draft['format'],
+  raw: Pick<Draft, 'path' | 'text' | 'format'> | Draft,
   packs: LoadedPacks,
-  topic: TopicMatcher,
-  levels: Record<string, Level | 'off'> | undefined,
+  options: DraftOptions,
 ): void {
+  const { path, text, format } = raw;
   result.files.push(path);
-  if (!topic.test(text)) {
+  if (text.trimStart().startsWith(CHECKLIST_MARKER)) {
+    result.skipped.push({ file: path, reason: 'sign-off checklist' });
+    return;
+  }
+  if (!(options.topic ?? createTopicMatcher(packs.topicWords)).test(text)) {
     result.skipped.push({ file: path, reason: 'no topic term' });
     return;
   }
-  const { claims, flags } = checkDraft(draftFromText(path, text, format), packs, topic, levels);
+  const draft = 'blocks' in raw ? raw : draftFromText(path, text, format);
+  const { claims, flags } = checkDraft(draft, packs, options);
   result.claims.push(...claims);
   result.flags.push(...flags);
 }
@@ -91,12 +115,10 @@ function addText(
  * Runs every stage on one draft: sentences per block, the topic prefilter, quantities, bindings,
  * then the checks; flag offsets are mapped back to the original file at the very end.
  */
-export function checkDraft(
-  draft: Draft,
-  packs: LoadedPacks,
-  topic: TopicMatcher = createTopicMatcher(packs.topicWords),
-  levels: Record<string, Level | 'off'> = {},
-): DraftResult {
+export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptions = {}): DraftResult {
+  const topic = options.topic ?? createTopicMatcher(packs.topicWords);
+  const levels = options.levels ?? {};
+  const projectPath = options.projectPath ?? draft.path;
   const lines = createLineIndex(draft.text);
   const claims: Claim[] = [];
   const seen = new Map<string, number>();
@@ -120,7 +142,7 @@ export function checkDraft(
       const folded = foldClaimText(sentence.text);
       const occurrence = (seen.get(folded) ?? 0) + 1;
       seen.set(folded, occurrence);
-      const id = claimIdOf(draft.path, sentence.text, occurrence);
+      const id = claimIdOf(projectPath, sentence.text, occurrence);
       const toSpan = (start: number, end: number): Flag['span'] => {
         const range = blockRange(draft.text, block, sentence.start + start, sentence.start + end);
         return lines.toSpan(range.start, range.end);
@@ -129,6 +151,7 @@ export function checkDraft(
       claims.push({
         id,
         file: draft.path,
+        ...(projectPath === draft.path ? {} : { projectPath }),
         span: toSpan(0, sentence.text.length),
         text: sentence.text,
         heading: block.heading,
@@ -188,4 +211,8 @@ function pickDefined(options: CheckOptions): { include?: string[]; exclude?: str
   if (options.include !== undefined) picked.include = options.include;
   if (options.exclude !== undefined) picked.exclude = options.exclude;
   return picked;
+}
+
+function toPosix(path: string): string {
+  return sep === '/' ? path : path.split(sep).join('/');
 }

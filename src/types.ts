@@ -190,7 +190,14 @@ export interface Binding {
 /** One checkable statement: a sentence on the subject with its quantities and what they bind to. */
 export interface Claim {
   id: string;
+  /** The path as reported (relative to the working folder). */
   file: string;
+  /**
+   * The path relative to the project root (the folder of firnline.yaml, else the git work tree,
+   * else the working folder): what claim ids and the ledger use, so that they do not depend on the
+   * folder a command runs in. Absent when it equals `file`.
+   */
+  projectPath?: string;
   span: Span;
   text: string;
   heading: string;

@@ -1,4 +1,6 @@
+import { execFile } from 'node:child_process';
 import { dirname, join, resolve } from 'node:path';
+import { promisify } from 'node:util';
 import { findSettingsFile, loadPacks, loadSettings } from '../rulepack/index.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Level } from '../types.js';
@@ -11,8 +13,13 @@ export interface RunSettings {
   exclude: string[];
   levels: Record<string, Level | 'off'>;
   failOn: Level | 'never';
-  /** The ledger path: from the settings, else beside the settings file, else in the working folder. */
+  /** The ledger path: from the settings, else `firnline-signoffs.yaml` in the project root. */
   ledger: string;
+  /**
+   * What claim ids are relative to: the settings file's folder, else the git work tree, else the
+   * working folder; so a sign-off holds whichever folder the command runs in.
+   */
+  projectRoot: string;
 }
 
 /** Finds and loads the settings (or `--config`), then every pack they and `--pack` name. */
@@ -21,6 +28,7 @@ export async function loadRunSettings(cwd: string, config: string | undefined, e
   const settings = settingsFile === undefined ? undefined : await loadSettings(settingsFile);
   const packFiles = [...(settings?.packs ?? []), ...extraPacks.map((p) => resolve(cwd, p))];
   const packs = await loadPacks(packFiles);
+  const projectRoot = settingsFile === undefined ? ((await gitTopLevel(cwd)) ?? cwd) : dirname(settingsFile);
   return {
     settingsFile,
     packs,
@@ -28,6 +36,18 @@ export async function loadRunSettings(cwd: string, config: string | undefined, e
     exclude: settings?.exclude ?? [],
     levels: settings?.levels ?? {},
     failOn: settings?.failOn ?? 'error',
-    ledger: settings?.ledger ?? join(settingsFile === undefined ? cwd : dirname(settingsFile), 'firnline-signoffs.yaml'),
+    ledger: settings?.ledger ?? join(projectRoot, 'firnline-signoffs.yaml'),
+    projectRoot,
   };
+}
+
+/** The top folder of the git work tree around `cwd`, or undefined outside git (or without git). */
+async function gitTopLevel(cwd: string): Promise<string | undefined> {
+  try {
+    // --show-cdup ("../../") rather than --show-toplevel, so a symlinked working folder stays comparable.
+    const { stdout } = await promisify(execFile)('git', ['rev-parse', '--show-cdup'], { cwd });
+    return resolve(cwd, stdout.trim());
+  } catch {
+    return undefined;
+  }
 }

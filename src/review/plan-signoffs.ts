@@ -48,7 +48,7 @@ export function planSignoffs(requests: SignoffRequest[], claims: Claim[], ledger
     }
     const entry: SignoffEntry = {
       claim: claim.id,
-      file: claim.file,
+      file: claim.projectPath ?? claim.file,
       text: foldClaimText(claim.text),
       decision: request.decision,
       ...(request.reason === undefined || request.decision === 'approved' ? {} : { reason: request.reason.trim() }),

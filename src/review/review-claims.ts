@@ -52,7 +52,7 @@ function matchStale(claims: Claim[], orphans: SignoffEntry[]): Map<Claim, Signof
   const pairs: { claim: Claim; entry: SignoffEntry; score: number; order: number }[] = [];
   claims.forEach((claim, order) => {
     for (const entry of orphans) {
-      if (entry.file !== claim.file) continue;
+      if (entry.file !== (claim.projectPath ?? claim.file)) continue;
       const score = wordingSimilarity(claim.text, entry.text);
       if (score >= SAME_CLAIM_THRESHOLD) pairs.push({ claim, entry, score, order });
     }

@@ -62,12 +62,25 @@ describe('the sign-off workflow in a fresh git repository (issue 6, "Done when")
     expect(entries.at(-1)).toMatchObject({ text: LGM_EDITED, decision: 'approved', note: 'new LGM figure checked' });
   });
 
+  it('keeps sign-offs valid when the gate runs from a subfolder of the repository', async () => {
+    // Regression: claim ids hashed the path as seen from the working folder, so every sign-off
+    // given at the repository root looked open when CI ran inside drafts/.
+    const dir = await draftRepository(ICE_HALL);
+    await firnline(dir, 'checklist', 'drafts', '-o', 'checklist.md');
+    const ticked = (await readFile(join(dir, 'checklist.md'), 'utf8')).replaceAll('- [ ] **', '- [x] **');
+    await writeFile(join(dir, 'checklist.md'), ticked);
+    expect((await firnline(dir, 'signoff', '--from', 'checklist.md', '--by', 'R. Okafor')).code).toBe(0);
+    const inside = await firnline(join(dir, 'drafts'), 'check', '.', '--require-signoff');
+    expect(inside.out).toMatch(/Sign-off: (\d+) of \1 claims signed off; 0 claims open/u);
+  });
+
   it('importing the same ticked checklist twice adds nothing the second time', async () => {
     const dir = await draftRepository(ICE_HALL);
-    // Written in the repository root this time, which Firnline warns about; signoff --from still
-    // only scans the drafts the checklist names.
+    // Written in the repository root this time: later runs recognise it by its first line and skip it.
     const written = await firnline(dir, 'checklist', '-o', 'checklist.md');
-    expect(written.out).toContain('Note: checklist.md is inside the folders checked, so later runs would read it as a draft;');
+    expect(written.code).toBe(0);
+    const rerun = JSON.parse((await firnline(dir, 'check', '--format', 'json')).out) as { skipped: { file: string; reason: string }[] };
+    expect(rerun.skipped).toContainEqual({ file: 'checklist.md', reason: 'sign-off checklist' });
     const ticked = (await readFile(join(dir, 'checklist.md'), 'utf8')).replaceAll('- [ ] **', '- [x] **');
     await writeFile(join(dir, 'checklist.md'), ticked);
     await firnline(dir, 'signoff', '--from', 'checklist.md', '--by', 'R. Okafor');

@@ -39,6 +39,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
       const targets = paths.length > 0 ? paths : ['.'];
       const result = await checkPaths(targets, {
         cwd: ctx.cwd,
+        projectRoot: run.projectRoot,
         packs: run.packs,
         include: run.include,
         exclude: run.exclude,

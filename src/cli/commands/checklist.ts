@@ -38,6 +38,7 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
       const targets = paths.length > 0 ? paths : ['.'];
       const result = await checkPaths(targets, {
         cwd: ctx.cwd,
+        projectRoot: run.projectRoot,
         packs: run.packs,
         include: run.include,
         exclude: run.exclude,
@@ -59,9 +60,6 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
       }
       const target = resolve(ctx.cwd, flags.output);
       await writeFileAtomic(target, text);
-      if (/\.(?:md|markdown|txt)$/iu.test(target) && targets.some((p) => p !== '-' && isInside(target, resolve(ctx.cwd, p)))) {
-        ctx.stderr(`Note: ${relative(ctx.cwd, target)} is inside the folders checked, so later runs would read it as a draft; write it elsewhere or add it to \`exclude\` in firnline.yaml.\n`);
-      }
       const { counts } = review;
       ctx.stderr(`Wrote ${result.claims.length} claims to ${relative(ctx.cwd, target)} (${counts['signed off']} signed off, ${counts.stale} changed since sign-off, ${counts.open} open).\n`);
     });

@@ -47,6 +47,7 @@ export function registerSignoff(program: Command, ctx: CliContext): void {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const result = await checkPaths(drafts.length > 0 ? drafts : ['.'], {
         cwd: ctx.cwd,
+        projectRoot: run.projectRoot,
         packs: run.packs,
         include: run.include,
         exclude: run.exclude,
