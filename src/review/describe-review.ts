@@ -36,7 +36,7 @@ export function describeReview(review: ReviewSummary): string[] {
   }
   if (open.length > MAX_OPEN_LINES) lines.push(`... and ${open.length - MAX_OPEN_LINES} more open claims.`);
   if (counts.open + counts.stale > 0) {
-    lines.push('To sign off: firnline checklist -o FILE (outside the folders checked), tick the boxes, then firnline signoff --from FILE --by "Your Name".');
+    lines.push('To sign off: firnline checklist -o FILE, tick the boxes, then firnline signoff --from FILE --by "Your Name".');
   }
   return lines;
 }
