@@ -1,7 +1,8 @@
 import { Command, Option } from 'commander';
 import { resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
-import { renderReport, REPORT_FORMATS } from '../../report/index.js';
+import { renderReport, REPORT_FORMATS, type ReportFormat } from '../../report/index.js';
+import { renderChecklistOf } from '../render-checklist.js';
 import { LEVELS, type Level } from '../../types.js';
 import { VERSION } from '../../version.js';
 import type { CliContext } from '../context.js';
@@ -9,6 +10,9 @@ import { applyGate } from '../gate.js';
 import { loadRunSettings } from '../run-settings.js';
 import { writeFileAtomic } from '../write-file-atomic.js';
 import { exitCodeFor } from '../exit-code.js';
+
+/** The report formats, plus `markdown`: the sign-off checklist (GLOSSARY.md). */
+const CHECK_FORMATS = [...REPORT_FORMATS, 'markdown'] as const;
 
 interface CheckFlags {
   format: string;
@@ -26,7 +30,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .command('check')
     .description('scan drafts (files, folders, or - for standard input) and report flags')
     .argument('[paths...]', 'drafts or folders of drafts (.md, .markdown, .txt)', [])
-    .addOption(new Option('--format <name>', 'output format').choices([...REPORT_FORMATS]).default('text'))
+    .addOption(new Option('--format <name>', 'output format (markdown: the sign-off checklist)').choices([...CHECK_FORMATS]).default('text'))
     .addOption(new Option('--fail-on <level>', 'lowest level that makes the exit status 1 (default: error)').choices([...LEVELS, 'never']))
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', collect, [])
@@ -53,11 +57,10 @@ export function registerCheck(program: Command, ctx: CliContext): void {
         cwd: ctx.cwd,
       });
       const color = flags.output === undefined && ctx.isTTY && !('NO_COLOR' in ctx.env && ctx.env.NO_COLOR !== '');
-      const report = renderReport(flags.format as (typeof REPORT_FORMATS)[number], gate.result, {
-        color,
-        toolVersion: VERSION,
-        failOn,
-      });
+      const report =
+        flags.format === 'markdown'
+          ? (await renderChecklistOf(gate.result, run, 'markdown', ctx.cwd)).text
+          : renderReport(flags.format as ReportFormat, gate.result, { color, toolVersion: VERSION, failOn, srcRoot: ctx.cwd });
       const summary = gate.summary.length > 0 ? `${gate.summary.join('\n')}\n` : '';
       if (flags.output === undefined) {
         ctx.stdout(report.endsWith('\n') ? report : `${report}\n`);

@@ -1,20 +1,10 @@
 import { Command, Option } from 'commander';
-import { isAbsolute, relative, resolve } from 'node:path';
+import { relative, resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
-import { renderChecklistJson } from '../../report/checklist-json.js';
-import { renderChecklistMarkdown } from '../../report/checklist-markdown.js';
-import { packVersionOf } from '../../review/plan-signoffs.js';
-import { readLedger } from '../../review/read-ledger.js';
-import { reviewClaims } from '../../review/review-claims.js';
-import { ledgerDate } from '../../review/signoff-entry.js';
-import { VERSION } from '../../version.js';
 import type { CliContext } from '../context.js';
+import { CHECKLIST_RENDERERS, renderChecklistOf, type ChecklistFormat } from '../render-checklist.js';
 import { loadRunSettings } from '../run-settings.js';
 import { writeFileAtomic } from '../write-file-atomic.js';
-
-/** The checklist formats, each a pure renderer of the same input. */
-const CHECKLIST_RENDERERS = { markdown: renderChecklistMarkdown, json: renderChecklistJson } as const;
-type ChecklistFormat = keyof typeof CHECKLIST_RENDERERS;
 
 interface ChecklistFlags {
   format: ChecklistFormat;
@@ -45,15 +35,7 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
         levels: run.levels,
         readStdin: ctx.readStdin,
       });
-      const review = reviewClaims(result.claims, await readLedger(run.ledger, ctx.cwd));
-      const text = CHECKLIST_RENDERERS[flags.format]({
-        claims: result.claims,
-        review,
-        reference: (id) => run.packs.reference(id),
-        packVersion: packVersionOf(run.packs),
-        toolVersion: VERSION,
-        generated: ledgerDate(),
-      });
+      const { text, review } = await renderChecklistOf(result, run, flags.format, ctx.cwd);
       if (flags.output === undefined) {
         ctx.stdout(text);
         return;
@@ -63,9 +45,4 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
       const { counts } = review;
       ctx.stderr(`Wrote ${result.claims.length} claims to ${relative(ctx.cwd, target)} (${counts['signed off']} signed off, ${counts.stale} changed since sign-off, ${counts.open} open).\n`);
     });
-}
-
-function isInside(file: string, folder: string): boolean {
-  const rel = relative(folder, file);
-  return rel === '' || (!rel.startsWith('..') && !isAbsolute(rel));
 }
