@@ -2,7 +2,9 @@ import { execFile } from 'node:child_process';
 import { dirname, join, resolve } from 'node:path';
 import { promisify } from 'node:util';
 import { findSettingsFile, loadPacks, loadSettings } from '../rulepack/index.js';
+import type { CheckOptions } from '../engine.js';
 import type { LoadedPacks } from '../rulepack/types.js';
+import type { CliContext } from './context.js';
 import type { Level } from '../types.js';
 
 /** Everything a command needs from firnline.yaml and --pack, resolved once. */
@@ -50,4 +52,17 @@ async function gitTopLevel(cwd: string): Promise<string | undefined> {
   } catch {
     return undefined;
   }
+}
+
+/** The engine options of a run: settings, packs and the project root, as every scanning command uses them. */
+export function checkOptionsOf(run: RunSettings, ctx: Pick<CliContext, 'cwd' | 'readStdin'>): CheckOptions {
+  return {
+    cwd: ctx.cwd,
+    projectRoot: run.projectRoot,
+    packs: run.packs,
+    include: run.include,
+    exclude: run.exclude,
+    levels: run.levels,
+    readStdin: ctx.readStdin,
+  };
 }

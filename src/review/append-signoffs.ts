@@ -5,11 +5,10 @@
  * added lines. Other layouts are edited through the yaml Document API, which keeps comments, key
  * order and keys Firnline does not know. The write is atomic and runs under `<ledger>.lock`.
  */
-import { randomBytes } from 'node:crypto';
-import { readFile, rename, rm, writeFile } from 'node:fs/promises';
-import { basename, dirname, join } from 'node:path';
+import { readFile } from 'node:fs/promises';
 import { isMap, isScalar, isSeq, parseDocument, stringify, type Pair, type YAMLMap } from 'yaml';
 import { FirnlineError } from '../errors.js';
+import { writeFileAtomic } from '../write-file-atomic.js';
 import { parseLedger } from './read-ledger.js';
 import { entryToYaml, type SignoffEntry } from './signoff-entry.js';
 import { withFileLock } from './with-file-lock.js';
@@ -26,7 +25,7 @@ export async function appendSignoffs(file: string, entries: SignoffEntry[]): Pro
   await withFileLock(file, async () => {
     const before = await readOrEmpty(file);
     parseLedger(before, file); // refuse to touch a ledger that is already broken
-    await writeAtomic(file, appendToLedgerText(before, entries));
+    await writeFileAtomic(file, appendToLedgerText(before, entries), 'the sign-off ledger');
   });
 }
 
@@ -88,18 +87,5 @@ async function readOrEmpty(file: string): Promise<string> {
   } catch (error) {
     if ((error as NodeJS.ErrnoException).code === 'ENOENT') return '';
     throw new FirnlineError('ledger-unreadable', 'cannot read the sign-off ledger; check its permissions', { file });
-  }
-}
-
-/** A temporary file in the same folder, renamed over the ledger: readers see the old or the new file, never half. */
-async function writeAtomic(file: string, text: string): Promise<void> {
-  const temp = join(dirname(file), `.${basename(file)}.${randomBytes(6).toString('hex')}.tmp`);
-  try {
-    await writeFile(temp, text, { encoding: 'utf8', flag: 'wx' });
-    await rename(temp, file);
-  } catch (error) {
-    await rm(temp, { force: true });
-    const reason = (error as NodeJS.ErrnoException).code ?? 'write failed';
-    throw new FirnlineError('ledger-write', `cannot write the sign-off ledger (${reason}); check the folder is writable`, { file });
   }
 }

@@ -4,6 +4,7 @@
  * yet when the pack loader was written; the two tables should agree, and a test checks the factors
  * against SI/NIST definitions.
  */
+import { CANONICAL_UNIT } from '../quantities/unit-table.js';
 import type { Dimension } from '../types.js';
 
 /** One unit: canonical value = stated value * factor + offset. */
@@ -22,21 +23,8 @@ const unit = (dimension: Dimension, factor: number, label: string, offset = 0): 
   label,
 });
 
-/** Canonical unit of each dimension, as in src/types.ts. */
-export const CANONICAL_UNITS: Record<Dimension, string> = {
-  duration: 'yr',
-  age: 'yr BP',
-  concentration: 'ppm',
-  'temperature-change': 'K',
-  temperature: 'degC',
-  length: 'm',
-  'concentration-rate': 'ppm/yr',
-  'temperature-rate': 'K/yr',
-  count: 'count',
-  ratio: 'ratio',
-  percent: '%',
-  number: 'number',
-};
+/** Canonical unit of each dimension: the quantity reader's table, the one truth for both. */
+export const CANONICAL_UNITS: Record<Dimension, string> = CANONICAL_UNIT;
 
 /**
  * Unit names (as normalised by the quantity parser and as written in packs) to definitions.

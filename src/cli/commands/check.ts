@@ -7,8 +7,8 @@ import { LEVELS, type Level } from '../../types.js';
 import { VERSION } from '../../version.js';
 import type { CliContext } from '../context.js';
 import { applyGate } from '../gate.js';
-import { loadRunSettings } from '../run-settings.js';
-import { writeFileAtomic } from '../write-file-atomic.js';
+import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
+import { writeFileAtomic } from '../../write-file-atomic.js';
 import { exitCodeFor } from '../exit-code.js';
 
 /** The report formats, plus `markdown`: the sign-off checklist (GLOSSARY.md). */
@@ -41,15 +41,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const failOn = flags.failOn ?? run.failOn;
       const targets = paths.length > 0 ? paths : ['.'];
-      const result = await checkPaths(targets, {
-        cwd: ctx.cwd,
-        projectRoot: run.projectRoot,
-        packs: run.packs,
-        include: run.include,
-        exclude: run.exclude,
-        levels: run.levels,
-        readStdin: ctx.readStdin,
-      });
+      const result = await checkPaths(targets, checkOptionsOf(run, ctx));
       const gate = await applyGate(result, {
         requireSignoff: flags.requireSignoff === true,
         ...(flags.changedSince === undefined ? {} : { changedSince: flags.changedSince }),

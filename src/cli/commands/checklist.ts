@@ -3,8 +3,8 @@ import { relative, resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import type { CliContext } from '../context.js';
 import { CHECKLIST_RENDERERS, renderChecklistOf, type ChecklistFormat } from '../render-checklist.js';
-import { loadRunSettings } from '../run-settings.js';
-import { writeFileAtomic } from '../write-file-atomic.js';
+import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
+import { writeFileAtomic } from '../../write-file-atomic.js';
 
 interface ChecklistFlags {
   format: ChecklistFormat;
@@ -26,15 +26,7 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
     .action(async (paths: string[], flags: ChecklistFlags) => {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const targets = paths.length > 0 ? paths : ['.'];
-      const result = await checkPaths(targets, {
-        cwd: ctx.cwd,
-        projectRoot: run.projectRoot,
-        packs: run.packs,
-        include: run.include,
-        exclude: run.exclude,
-        levels: run.levels,
-        readStdin: ctx.readStdin,
-      });
+      const result = await checkPaths(targets, checkOptionsOf(run, ctx));
       const { text, review } = await renderChecklistOf(result, run, flags.format, ctx.cwd);
       if (flags.output === undefined) {
         ctx.stdout(text);

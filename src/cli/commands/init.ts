@@ -4,7 +4,7 @@ import type { Command } from 'commander';
 import { FirnlineError } from '../../errors.js';
 import { SETTINGS_FILE, starterSettings } from '../../rulepack/settings.js';
 import type { CliContext } from '../context.js';
-import { writeFileAtomic } from '../write-file-atomic.js';
+import { writeFileAtomic } from '../../write-file-atomic.js';
 
 /** `firnline init`: write a commented starter firnline.yaml in the working folder. */
 export function registerInit(program: Command, ctx: CliContext): void {

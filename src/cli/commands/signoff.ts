@@ -9,7 +9,7 @@ import { packVersionOf, planSignoffs, type SignoffRequest } from '../../review/p
 import { readLedger } from '../../review/read-ledger.js';
 import { DECISIONS, ledgerDate, type Decision } from '../../review/signoff-entry.js';
 import type { CliContext } from '../context.js';
-import { loadRunSettings } from '../run-settings.js';
+import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
 
 interface SignoffFlags {
   from?: string;
@@ -45,14 +45,7 @@ export function registerSignoff(program: Command, ctx: CliContext): void {
       }
       const { requests, drafts } = flags.from === undefined ? fromIds(ids, flags) : await fromChecklist(resolve(ctx.cwd, flags.from), flags.from);
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
-      const result = await checkPaths(drafts.length > 0 ? drafts : ['.'], {
-        cwd: ctx.cwd,
-        projectRoot: run.projectRoot,
-        packs: run.packs,
-        include: run.include,
-        exclude: run.exclude,
-        levels: run.levels,
-      });
+      const result = await checkPaths(drafts.length > 0 ? drafts : ['.'], checkOptionsOf(run, ctx));
       const withNote = requests.map((r) => (r.note === undefined && flags.note !== undefined ? { ...r, note: flags.note } : r));
       const plan = planSignoffs(withNote, result.claims, await readLedger(run.ledger, ctx.cwd), {
         reviewer,

@@ -1,13 +1,13 @@
 import { randomBytes } from 'node:crypto';
 import { rename, rm, writeFile } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
-import { FirnlineError } from '../errors.js';
+import { FirnlineError } from './errors.js';
 
 /**
  * Writes a whole file or nothing: the text goes to a temporary file in the same folder, which is
  * then renamed over the target, so a reader never sees half a report and a crash leaves the old file.
  */
-export async function writeFileAtomic(file: string, text: string): Promise<void> {
+export async function writeFileAtomic(file: string, text: string, what = 'the file'): Promise<void> {
   const temp = join(dirname(file), `.${basename(file)}.${randomBytes(6).toString('hex')}.tmp`);
   try {
     await writeFile(temp, text, { encoding: 'utf8', flag: 'wx' });
@@ -15,6 +15,6 @@ export async function writeFileAtomic(file: string, text: string): Promise<void>
   } catch (error) {
     await rm(temp, { force: true });
     const reason = (error as NodeJS.ErrnoException).code ?? 'write failed';
-    throw new FirnlineError('write-failed', `cannot write the file (${reason}); check the folder exists and is writable`, { file });
+    throw new FirnlineError('write-failed', `cannot write ${what} (${reason}); check the folder exists and is writable`, { file });
   }
 }
