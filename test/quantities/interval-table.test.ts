@@ -3,11 +3,18 @@ import { describe, expect, it } from 'vitest';
 import { INTERVAL_RULES, parseQuantities, renderIntervalTable } from '../../src/quantities/index.js';
 
 const DOC = new URL('../../docs/quantities.md', import.meta.url);
+const README = new URL('../../README.md', import.meta.url);
 
 describe('the interval table', () => {
   it('is shown in docs/quantities.md exactly as the code has it', () => {
     const doc = readFileSync(DOC, 'utf8');
     const between = /<!-- interval-table:start -->\n([\s\S]*?)\n<!-- interval-table:end -->/.exec(doc);
+    expect(between?.[1]).toBe(renderIntervalTable());
+  });
+
+  it('is shown in the README exactly as the code has it, so an editor sees why a number was judged', () => {
+    const readme = readFileSync(README, 'utf8');
+    const between = /<!-- interval-table:start -->\n([\s\S]*?)\n<!-- interval-table:end -->/.exec(readme);
     expect(between?.[1]).toBe(renderIntervalTable());
   });
 
