@@ -47,11 +47,11 @@ function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, fr
 
 function endsSentence(text: string, dotAt: number, marks: string, space: string, next: number): boolean {
   if (next >= text.length) return true;
-  if (marks !== '.') return /^[\p{Lu}\p{N}"'“‘(\[*]/u.test(text.slice(next, next + 1));
+  if (marks !== '.') return /^[\p{Lu}\p{N}"'“‘([*]/u.test(text.slice(next, next + 1));
   const word = /([\p{L}.]+)$/u.exec(text.slice(Math.max(0, dotAt - 12), dotAt))?.[1]?.toLowerCase() ?? '';
   if (ABBREVIATIONS.has(word)) return false;
   if (/^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1))) return false; // an initial: "J. R. Petit"
-  return /^[\p{Lu}\p{N}"'“‘(\[]/u.test(text.slice(next, next + 1));
+  return /^[\p{Lu}\p{N}"'“‘([]/u.test(text.slice(next, next + 1));
 }
 
 function push(into: Sentence[], text: string, blockIndex: number, start: number, end: number): void {

@@ -1,5 +1,6 @@
 // XML 1.0 cannot carry these at all, not even as character references (XML 1.0 §2.2, Char):
 // C0 controls other than tab, line feed and carriage return, U+FFFE, U+FFFF, and lone surrogates.
+// eslint-disable-next-line no-control-regex -- matching these control characters is the point
 const FORBIDDEN = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g;
 
 /**

@@ -46,7 +46,7 @@ export function appendToLedgerText(text: string, entries: SignoffEntry[]): strin
   if (isLast && (pair.value === null || (isScalar(pair.value) && pair.value.value === null && pair.value.source === ''))) {
     return `${base}${items(column(keyStart(pair, root)) + 2)}`;
   }
-  if (isLast && isSeq(pair.value) && pair.value.flow !== true && pair.value.range != null) {
+  if (isLast && isSeq(pair.value) && pair.value.flow !== true && pair.value.range !== null && pair.value.range !== undefined) {
     return `${base}${items(column(pair.value.range[0]))}`;
   }
   return editWithDocument(text, entries);

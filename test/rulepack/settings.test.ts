@@ -2,7 +2,7 @@ import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { FirnlineErrors } from '../../src/errors.js';
+import type { FirnlineErrors } from '../../src/errors.js';
 import { findSettingsFile, loadSettings, starterSettings } from '../../src/rulepack/index.js';
 
 function repo(settings: string): string {

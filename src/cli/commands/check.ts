@@ -1,4 +1,5 @@
-import { Command, Option } from 'commander';
+import type { Command} from 'commander';
+import { Option } from 'commander';
 import { resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import { renderReport, REPORT_FORMATS, type ReportFormat } from '../../report/index.js';

@@ -1,4 +1,5 @@
-import { Command, Option } from 'commander';
+import type { Command} from 'commander';
+import { Option } from 'commander';
 import { relative, resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import type { CliContext } from '../context.js';

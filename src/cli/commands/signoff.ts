@@ -1,4 +1,5 @@
-import { Command, Option } from 'commander';
+import type { Command} from 'commander';
+import { Option } from 'commander';
 import { readFile } from 'node:fs/promises';
 import { relative, resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
