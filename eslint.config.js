@@ -17,7 +17,7 @@ export default tseslint.config(
     },
   },
   {
-    files: ['bin/**/*.js', 'bench/**/*.js', 'test/**/*.mjs'],
+    files: ['bin/**/*.js', 'bench/**/*.js', 'scripts/**/*.js', 'test/**/*.mjs'],
     languageOptions: { globals: { process: 'readonly', console: 'readonly', URL: 'readonly' } },
   },
 );

@@ -5,7 +5,12 @@ import { asSentence, formatClaimed, formatRange } from './format-value.js';
 export function formatReference(reference: NonNullable<Flag['reference']>): string {
   const range = formatRange(reference.low, reference.high, reference.unit);
   const asOf = reference.asOf === undefined ? '' : ` (as of ${reference.asOf})`;
-  return `${range} for ${reference.measures}${asOf}`;
+  return `${range} for ${lowerFirst(reference.measures)}${asOf}`;
+}
+
+/** "Time span of..." reads "time span of..." mid-sentence; acronyms such as "CO2" or "EPICA" stay. */
+function lowerFirst(text: string): string {
+  return /^\p{Lu}\p{Ll}/u.test(text) ? `${text.charAt(0).toLowerCase()}${text.slice(1)}` : text;
 }
 
 /**
