@@ -18,6 +18,6 @@ export default tseslint.config(
   },
   {
     files: ['bin/**/*.js', 'bench/**/*.js', 'scripts/**/*.js', 'test/**/*.mjs'],
-    languageOptions: { globals: { process: 'readonly', console: 'readonly', URL: 'readonly' } },
+    languageOptions: { globals: { process: 'readonly', console: 'readonly', URL: 'readonly', Buffer: 'readonly', performance: 'readonly', setTimeout: 'readonly' } },
   },
 );
