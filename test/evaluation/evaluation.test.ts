@@ -82,7 +82,7 @@ describe('the engine on the blind drafts', () => {
         const here = all.filter(
           (flag) => flag.file === error.file && flag.span.start.line <= error.line && error.line <= flag.span.end.line,
         );
-        const tool = here.length === 0 ? 'no flag on the line' : here.map((flag) => `${flag.ruleId} (${flag.level})`).join(', ');
+        const tool = here.length === 0 ? 'no flag on the line' : here.map((flag) => `${flag.ruleId} (${flag.level}) on "${shorten(flag.excerpt ?? '')}"`).join(', ');
         return [`  ${error.file}:${error.line} [${error.kind}] "${error.text}" -> ${tool}`];
       }),
       'false flags:',
