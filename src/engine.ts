@@ -130,12 +130,12 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       const quantities = parseQuantities(sentence.text);
       const { bindings } = bindQuantities(sentence.text, quantities, packs);
       const reference = checkReferences(sentence.text, quantities, bindings, packs);
-      const drafts: FlagDraft[] = [
+      const drafts: FlagDraft[] = preferSpecific([
         ...reference.flags,
         ...checkArithmetic(sentence.text, quantities),
         ...checkUnits(sentence.text, quantities),
         ...checkReasoning(paragraph, index, packs),
-      ];
+      ]);
       const measured = quantities.some((q) => q.dimension !== 'number');
       if (!measured && bindings.length === 0 && drafts.length === 0) return;
 
@@ -163,6 +163,18 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     });
   });
   return { claims, flags: claims.flatMap((c) => c.flags) };
+}
+
+/**
+ * One number, one explanation: when the draft's own arithmetic or a unit slip explains a number,
+ * a reference-value flag on the same words is dropped ("0.4 percent" is a ppm/percent slip, and
+ * "a rise of 50 ppm" between two stated levels is a subtraction error, before either is a value
+ * out of range). The arithmetic or unit flag carries the corrected number.
+ */
+function preferSpecific(drafts: FlagDraft[]): FlagDraft[] {
+  const specific = drafts.filter((d) => d.ruleId.startsWith('arith.') || d.ruleId.startsWith('unit.'));
+  if (specific.length === 0) return drafts;
+  return drafts.filter((d) => !d.ruleId.startsWith('value.') || !specific.some((s) => s.start < d.end && d.start < s.end));
 }
 
 function verdictOf(verdicts: Verdict[]): Verdict {
