@@ -1,64 +1,71 @@
 #!/usr/bin/env node
-// Benchmark: a synthetic docs repository (most files off-topic, as in a real one) checked end to end
-// through the built library. Prints files/s, sentences/s and peak memory; the README quotes these.
-// Invented demo text only. Run with `npm run bench` (builds first through `prepare` on install).
+// Benchmark: two synthetic scenarios checked end to end through the built library (`npm run build`
+// first: it reads dist/). (1) A docs repository of many small Markdown files, most of them off
+// topic, as a real one is. (2) One long Markdown draft, mostly on topic. For each: best of N runs,
+// files/s, sentences/s, peak resident memory, and (from one further run) the time per stage.
+// Invented demo text only (bench/corpus.js). Settings: BENCH_FILES (2000), BENCH_LARGE_KB (500),
+// BENCH_RUNS (3), BENCH_STAGES=0 to leave out the stage table.
 import { mkdtemp, mkdir, writeFile, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { availableParallelism, cpus, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { checkPaths, loadPacks } from '../dist/index.js';
+import { docsPage, largeDraft } from './corpus.js';
+import { formatStages, timeStages } from './stages.js';
 
 const FILES = Number(process.env.BENCH_FILES ?? 2000);
+const LARGE_KB = Number(process.env.BENCH_LARGE_KB ?? 500);
+const RUNS = Number(process.env.BENCH_RUNS ?? 3);
+const STAGES = process.env.BENCH_STAGES !== '0';
 const ON_TOPIC_SHARE = 0.1;
 
-const offTopic = [
-  'The volunteer rota for the spring fair is pinned in the staff kitchen.',
-  'Please return the gallery keys to the front desk before six.',
-  'Our new accessibility guide explains the lift and the quiet room.',
-  'The café will close early on Thursday for a private event.',
-];
-const onTopic = [
-  'The Vostok core holds a climate record of about 420,000 years.',
-  'EPICA Dome C reaches back roughly 800,000 years.',
-  'At the Last Glacial Maximum, CO2 stood near 190 ppm.',
-  'Ice cores show that CO2 rose about 800 years after the warming, so CO2 cannot have caused it.',
-  'Global mean temperature was about 6 °C lower at the peak of the last ice age.',
-  'Before the industrial era, CO2 was about 280 ppm.',
-];
+const packs = await loadPacks([]);
+let peak = 0;
 
-function page(i, topical) {
-  const lines = [`# Page ${i}`, ''];
-  for (let p = 0; p < 12; p += 1) {
-    const pool = topical && p % 3 === 0 ? onTopic : offTopic;
-    lines.push(`${pool[(i + p) % pool.length]} ${pool[(i + p + 1) % pool.length]}`, '');
+/** Best of RUNS for `paths`, then one more run with a clock per stage. */
+async function measure(label, paths, cwd, files, sentences) {
+  const runs = [];
+  for (let r = 0; r < RUNS; r += 1) {
+    const t0 = performance.now();
+    const result = await checkPaths(paths, { cwd, packs });
+    runs.push({ ms: performance.now() - t0, claims: result.claims.length, flags: result.flags.length });
+    peak = Math.max(peak, process.memoryUsage().rss);
   }
-  return lines.join('\n');
+  const best = Math.min(...runs.map((r) => r.ms));
+  console.log(label);
+  console.log(`  best of ${RUNS}: ${best.toFixed(0)} ms  → ${(files / (best / 1000)).toFixed(0)} files/s, ${(sentences / (best / 1000)).toFixed(0)} sentences/s`);
+  console.log(`  claims found: ${runs[0].claims}, flags: ${runs[0].flags}`);
+  console.log(`  peak resident memory: ${(peak / 1024 / 1024).toFixed(0)} MiB`);
+  if (!STAGES) return;
+  const staged = await timeStages(paths, cwd, packs);
+  const drift = staged.claims === runs[0].claims ? '' : ` (stage walk found ${staged.claims} claims: out of step with the engine)`;
+  console.log(`  time per stage (one further run)${drift}:\n${formatStages(staged.ms)}`);
 }
 
 const root = await mkdtemp(join(tmpdir(), 'firnline-bench-'));
 try {
+  console.log(`machine: ${availableParallelism()} cores (${cpus()[0]?.model ?? 'unknown'}), node ${process.version}`);
   let sentences = 0;
   for (let i = 0; i < FILES; i += 1) {
     const dir = join(root, 'docs', `section-${i % 40}`);
     await mkdir(dir, { recursive: true });
     const topical = i % Math.round(1 / ON_TOPIC_SHARE) === 0;
-    await writeFile(join(dir, `page-${i}.md`), page(i, topical));
+    await writeFile(join(dir, `page-${i}.md`), docsPage(i, topical));
     sentences += 24;
   }
-  const packs = await loadPacks([]);
-  const runs = [];
-  let peak = 0;
-  for (let r = 0; r < 3; r += 1) {
-    const t0 = performance.now();
-    const result = await checkPaths(['docs'], { cwd: root, packs });
-    runs.push({ ms: performance.now() - t0, claims: result.claims.length, flags: result.flags.length });
-    peak = Math.max(peak, process.memoryUsage().rss);
+  await measure(`firnline bench: ${FILES} Markdown files (${ON_TOPIC_SHARE * 100}% on topic), ${sentences} sentences`, ['docs'], root, FILES, sentences);
+
+  if (LARGE_KB > 0) {
+    const text = largeDraft(LARGE_KB * 1024);
+    await writeFile(join(root, 'long-draft.md'), text);
+    // Sentences counted as the engine splits them, over every prose block of the draft.
+    const { draftFromText } = await import('../dist/source/index.js');
+    const { splitSentences } = await import('../dist/prose/index.js');
+    const blocks = draftFromText('long-draft.md', text, 'markdown').blocks;
+    const count = blocks.reduce((n, b, i) => n + splitSentences(b.text, i).length, 0);
+    const kb = (Buffer.byteLength(text) / 1024).toFixed(0);
+    await measure(`firnline bench: one ${kb} KB Markdown draft (mostly on topic), ${count} sentences`, ['long-draft.md'], root, 1, count);
   }
-  const best = Math.min(...runs.map((r) => r.ms));
-  console.log(`firnline bench: ${FILES} Markdown files (${ON_TOPIC_SHARE * 100}% on topic), ${sentences} sentences`);
-  console.log(`  best of 3: ${best.toFixed(0)} ms  → ${(FILES / (best / 1000)).toFixed(0)} files/s, ${(sentences / (best / 1000)).toFixed(0)} sentences/s`);
-  console.log(`  claims found: ${runs[0].claims}, flags: ${runs[0].flags}`);
-  console.log(`  peak resident memory: ${(peak / 1024 / 1024).toFixed(0)} MiB`);
 } finally {
   await rm(root, { recursive: true, force: true });
 }
