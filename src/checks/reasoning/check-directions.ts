@@ -6,15 +6,20 @@
 import { FirnlineError } from '../../errors.js';
 import type { FlagDraft } from '../../types.js';
 import type { CompiledPacks } from './compile-packs.js';
-import { guardedMatches, MAX_SENTENCE_LENGTH, TIME_LIMIT_MS } from './time-limit.js';
+import { guardedMatches, guardedMatchesEach, MAX_SENTENCE_LENGTH, TIME_LIMIT_MS } from './time-limit.js';
 
 /** Flags (with offsets into `sentence`) for every direction fact stated the wrong way round. */
 export function checkDirections(sentence: string, compiled: CompiledPacks): FlagDraft[] {
-  if (sentence.length > MAX_SENTENCE_LENGTH) return [];
+  if (sentence.length > MAX_SENTENCE_LENGTH || compiled.directions.length === 0) return [];
   const flags: FlagDraft[] = [];
+  // Every pattern of every fact in one guarded call; when that call is stopped, each pattern runs
+  // on its own below, in the order the facts give, so the slow one is found and named.
+  const all = patternsOf(compiled);
+  const batch = guardedMatchesEach(all, sentence);
+  const matched = batch === undefined ? undefined : new Map(all.map((regex, i) => [regex, batch[i] ?? []]));
   for (const { fact, wrong, right, file } of compiled.directions) {
     const run = (regex: RegExp) => {
-      const found = guardedMatches(regex, sentence);
+      const found = matched?.get(regex) ?? guardedMatches(regex, sentence);
       if (found === undefined) {
         throw new FirnlineError('pack-regex-slow', `direction fact ${fact.id}: /${regex.source}/ ran longer than ${TIME_LIMIT_MS} ms on one sentence; simplify it`, { file });
       }
@@ -34,4 +39,15 @@ export function checkDirections(sentence: string, compiled: CompiledPacks): Flag
     });
   }
   return flags;
+}
+
+const patternLists = new WeakMap<CompiledPacks, RegExp[]>();
+
+function patternsOf(compiled: CompiledPacks): RegExp[] {
+  let all = patternLists.get(compiled);
+  if (all === undefined) {
+    all = compiled.directions.flatMap((d) => [...d.right, ...d.wrong]);
+    patternLists.set(compiled, all);
+  }
+  return all;
 }
