@@ -6,16 +6,20 @@
 import { FirnlineError } from '../../errors.js';
 import type { FlagDraft } from '../../types.js';
 import type { CompiledPacks } from './compile-packs.js';
-import { guardedMatches, guardedMatchesEach, MAX_SENTENCE_LENGTH, TIME_LIMIT_MS } from './time-limit.js';
+import { guardedMatches, guardedMatchesEach, MAX_SENTENCE_LENGTH, TIME_LIMIT_MS, type Span } from './time-limit.js';
 
-/** Flags (with offsets into `sentence`) for every direction fact stated the wrong way round. */
-export function checkDirections(sentence: string, compiled: CompiledPacks): FlagDraft[] {
+/**
+ * Flags (with offsets into `sentence`) for every direction fact stated the wrong way round.
+ * `batched` holds the matches of every pattern (right then wrong, fact by fact) when a caller has
+ * run them already; otherwise they run here, in one guarded call.
+ */
+export function checkDirections(sentence: string, compiled: CompiledPacks, batched?: Span[][]): FlagDraft[] {
   if (sentence.length > MAX_SENTENCE_LENGTH || compiled.directions.length === 0) return [];
   const flags: FlagDraft[] = [];
-  // Every pattern of every fact in one guarded call; when that call is stopped, each pattern runs
-  // on its own below, in the order the facts give, so the slow one is found and named.
-  const all = patternsOf(compiled);
-  const batch = guardedMatchesEach(all, sentence);
+  // When the guarded call is stopped, each pattern runs on its own below, in the order the facts
+  // give, so the slow one is found and named.
+  const all = directionPatterns(compiled);
+  const batch = batched ?? guardedMatchesEach(all, sentence);
   const matched = batch === undefined ? undefined : new Map(all.map((regex, i) => [regex, batch[i] ?? []]));
   for (const { fact, wrong, right, file } of compiled.directions) {
     const run = (regex: RegExp) => {
@@ -43,7 +47,8 @@ export function checkDirections(sentence: string, compiled: CompiledPacks): Flag
 
 const patternLists = new WeakMap<CompiledPacks, RegExp[]>();
 
-function patternsOf(compiled: CompiledPacks): RegExp[] {
+/** Every pattern of the direction facts in one list, right before wrong, fact by fact. */
+export function directionPatterns(compiled: CompiledPacks): RegExp[] {
   let all = patternLists.get(compiled);
   if (all === undefined) {
     all = compiled.directions.flatMap((d) => [...d.right, ...d.wrong]);

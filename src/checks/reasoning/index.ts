@@ -11,6 +11,7 @@ import type { FlagDraft } from '../../types.js';
 import { checkDirections } from './check-directions.js';
 import { checkPatterns } from './check-patterns.js';
 import { compilePacks } from './compile-packs.js';
+import { paragraphDirectionMatches } from './paragraph-matches.js';
 import { applyStance } from './reported-claims.js';
 
 export { compilePacks, unknownReasoningChecks } from './compile-packs.js';
@@ -41,7 +42,8 @@ export function checkReasoning(paragraph: string[], index: number, packs: Loaded
       found.push({ flag, stance });
     }
   }
-  for (const flag of [...checkDirections(text, compiled), ...checkPatterns(text, compiled, parsed)]) {
+  const directions = checkDirections(text, compiled, paragraphDirectionMatches(paragraph, index, compiled, packs));
+  for (const flag of [...directions, ...checkPatterns(text, compiled, parsed)]) {
     found.push({ flag, stance: DEFAULT_STANCE_WORDS });
   }
 

@@ -11,6 +11,8 @@
 import { createContext, runInContext } from 'node:vm';
 import { workerMatches, type Span } from './worker-matches.js';
 
+export type { Span } from './worker-matches.js';
+
 /** The longest pattern (regex or compromise match) a rule may hold, in characters. */
 export const MAX_PATTERN_LENGTH = 500;
 /** Sentences longer than this (UTF-16 units) are not matched against pattern rules. */
@@ -44,11 +46,19 @@ export function guardedMatches(regex: RegExp, text: string, ms: number = TIME_LI
  * stopped run each regex on its own to find (and name) the slow one.
  */
 export function guardedMatchesEach(regexes: readonly RegExp[], text: string, ms: number = TIME_LIMIT_MS): Span[][] | undefined {
+  return guardedMatchesOfTexts(regexes, [text], ms)?.[0];
+}
+
+/**
+ * For each of `texts`, the matches of every regex in `regexes`, all under one time limit: when the
+ * lot finishes within it, so did every text on its own. Undefined when the lot was stopped.
+ */
+export function guardedMatchesOfTexts(regexes: readonly RegExp[], texts: readonly string[], ms: number = TIME_LIMIT_MS): Span[][][] | undefined {
   // A worker thread is the cheap guard (worker-matches.ts); node:vm is the fallback.
-  const found = workerMatches(regexes, text, ms);
+  const found = workerMatches(regexes, texts, ms);
   if (found !== 'unavailable') return found;
   const globals = regexes.map(globalOf);
-  const run = withTimeLimit(() => globals.map((g) => allMatches(g, text)), ms);
+  const run = withTimeLimit(() => texts.map((text) => globals.map((g) => allMatches(g, text))), ms);
   return run.done ? run.value : undefined;
 }
 

@@ -23,15 +23,15 @@ const { workerData } = require('node:worker_threads');
 const { port, shared } = workerData;
 const state = new Int32Array(shared);
 const patterns = new Map();
-port.on('message', ({ added, ids, text }) => {
+port.on('message', ({ added, ids, texts }) => {
   let reply;
   try {
     for (const [n, source, flags] of added) patterns.set(n, new RegExp(source, flags.includes('g') ? flags : flags + 'g'));
-    reply = { spans: ids.map((n) => {
+    reply = { spans: texts.map((text) => ids.map((n) => {
       const spans = [];
       for (const m of text.matchAll(patterns.get(n))) if (m[0].length > 0) spans.push({ start: m.index, end: m.index + m[0].length });
       return spans;
-    }) };
+    })) };
   } catch (error) {
     reply = { error: String(error && error.message || error) };
   }
@@ -58,10 +58,11 @@ let unavailable = false;
 let nextId = 0;
 
 /**
- * The matches of each regex in `regexes` in `text`, run on the worker under a limit of `ms`;
- * `undefined` when the limit ran out, `'unavailable'` when no worker thread can run here.
+ * For each text of `texts`, the matches of each regex in `regexes`, run on the worker under one
+ * limit of `ms` for the lot; `undefined` when the limit ran out, `'unavailable'` when no worker
+ * thread can run here.
  */
-export function workerMatches(regexes: readonly RegExp[], text: string, ms: number): Span[][] | undefined | 'unavailable' {
+export function workerMatches(regexes: readonly RegExp[], texts: readonly string[], ms: number): Span[][][] | undefined | 'unavailable' {
   const current = guard ?? start();
   if (current === undefined) return 'unavailable';
   const added: [number, string, string][] = [];
@@ -75,12 +76,12 @@ export function workerMatches(regexes: readonly RegExp[], text: string, ms: numb
     return id;
   });
   Atomics.store(current.state, 0, 0);
-  current.port.postMessage({ added, ids, text });
+  current.port.postMessage({ added, ids, texts });
   if (Atomics.wait(current.state, 0, 0, ms) === 'timed-out') {
     stop(current);
     return undefined;
   }
-  const reply = receiveMessageOnPort(current.port)?.message as { spans?: Span[][]; error?: string } | undefined;
+  const reply = receiveMessageOnPort(current.port)?.message as { spans?: Span[][][]; error?: string } | undefined;
   if (reply?.spans === undefined) throw new Error(`regular-expression worker failed: ${reply?.error ?? 'no reply'}`);
   return reply.spans;
 }
