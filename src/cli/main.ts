@@ -26,6 +26,7 @@ export async function main(argv: string[], context: Partial<CliContext> = {}): P
   for (const register of [registerCheck, registerChecklist, registerSignoff, registerRefs, registerExplain, registerInit]) {
     register(program, ctx);
   }
+  for (const command of program.commands) command.addHelpText('after', `\n${CAUTIONS}\n`);
   try {
     await program.parseAsync(argv, { from: 'user' });
     return ctx.exitCode;

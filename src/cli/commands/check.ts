@@ -30,7 +30,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
   program
     .command('check')
     .description('scan drafts (files, folders, or - for standard input) and report flags')
-    .argument('[paths...]', 'drafts or folders of drafts (.md, .markdown, .txt)', [])
+    .argument('[paths...]', 'drafts or folders of drafts (.md, .markdown, .txt; default: the current folder)')
     .addOption(new Option('--format <name>', 'output format (markdown: the sign-off checklist)').choices([...CHECK_FORMATS]).default('text'))
     .addOption(new Option('--fail-on <level>', 'lowest level that makes the exit status 1 (default: error)').choices([...LEVELS, 'never']))
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
@@ -38,10 +38,10 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('-o, --output <file>', 'write the report to a file instead of standard output')
     .option('--require-signoff', 'exit 1 while any claim lacks a current sign-off in the ledger')
     .option('--changed-since <rev>', 'check only claims on lines changed since a git revision')
-    .action(async (paths: string[], flags: CheckFlags) => {
+    .action(async (paths: string[] | undefined, flags: CheckFlags) => {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const failOn = flags.failOn ?? run.failOn;
-      const targets = paths.length > 0 ? paths : ['.'];
+      const targets = paths !== undefined && paths.length > 0 ? paths : ['.'];
       const result = await checkPaths(targets, checkOptionsOf(run, ctx));
       const gate = await applyGate(result, {
         requireSignoff: flags.requireSignoff === true,

@@ -19,14 +19,14 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
   program
     .command('checklist')
     .description('write the sign-off checklist of every claim in the drafts, flagged or not')
-    .argument('[paths...]', 'drafts or folders of drafts (default: the current folder)', [])
+    .argument('[paths...]', 'drafts or folders of drafts (default: the current folder)')
     .addOption(new Option('--format <name>', 'checklist format').choices(Object.keys(CHECKLIST_RENDERERS)).default('markdown'))
     .option('-o, --output <file>', 'write the checklist to a file instead of standard output')
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (value: string, previous: string[]) => [...previous, value], [])
-    .action(async (paths: string[], flags: ChecklistFlags) => {
+    .action(async (paths: string[] | undefined, flags: ChecklistFlags) => {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
-      const targets = paths.length > 0 ? paths : ['.'];
+      const targets = paths !== undefined && paths.length > 0 ? paths : ['.'];
       const result = await checkPaths(targets, checkOptionsOf(run, ctx));
       const { text, review } = await renderChecklistOf(result, run, flags.format, ctx.cwd);
       if (flags.output === undefined) {
