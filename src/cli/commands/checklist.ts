@@ -1,9 +1,9 @@
-import type { Command} from 'commander';
-import { Option } from 'commander';
+import { Option, type Command } from 'commander';
 import { relative, resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import type { CliContext } from '../context.js';
 import { CHECKLIST_RENDERERS, renderChecklistOf, type ChecklistFormat } from '../render-checklist.js';
+import { guardChecklistOutput } from '../guard-checklist-output.js';
 import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
 import { writeFileAtomic } from '../../write-file-atomic.js';
 
@@ -12,6 +12,7 @@ interface ChecklistFlags {
   output?: string;
   config?: string;
   pack: string[];
+  force?: boolean;
 }
 
 /** `firnline checklist [paths...]`: every claim, flagged or not, as boxes for an expert to tick. */
@@ -22,6 +23,7 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
     .argument('[paths...]', 'drafts or folders of drafts (default: the current folder)')
     .addOption(new Option('--format <name>', 'checklist format').choices(Object.keys(CHECKLIST_RENDERERS)).default('markdown'))
     .option('-o, --output <file>', 'write the checklist to a file instead of standard output')
+    .option('--force', 'replace the output file even if it holds ticks not yet in the ledger')
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (value: string, previous: string[]) => [...previous, value], [])
     .action(async (paths: string[] | undefined, flags: ChecklistFlags) => {
@@ -34,6 +36,7 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
         return;
       }
       const target = resolve(ctx.cwd, flags.output);
+      if (flags.force !== true) await guardChecklistOutput(target, run.ledger, ctx.cwd);
       await writeFileAtomic(target, text);
       const { counts } = review;
       ctx.stderr(`Wrote ${result.claims.length} claims to ${relative(ctx.cwd, target)} (${counts['signed off']} signed off, ${counts.stale} changed since sign-off, ${counts.open} open).\n`);
