@@ -165,10 +165,20 @@ export interface Flag {
   sources: Source[];
   /** The id of the claim the flag belongs to (see review/claim-id). */
   claimId?: string;
+  /** Set by the sign-off gate when an expert has signed off the claim: shown, but not failing. */
+  signoff?: FlagSignoff;
+}
+
+/** Who signed off a flagged claim, when, and how. */
+export interface FlagSignoff {
+  reviewer: string;
+  /** ISO 8601 date. */
+  date: string;
+  decision: string;
 }
 
 /** A flag before positions are resolved: offsets are UTF-16 indices into the sentence text. */
-export interface FlagDraft extends Omit<Flag, 'file' | 'span' | 'excerpt' | 'sentence' | 'claimId'> {
+export interface FlagDraft extends Omit<Flag, 'file' | 'span' | 'excerpt' | 'sentence' | 'claimId' | 'signoff'> {
   start: number;
   end: number;
 }

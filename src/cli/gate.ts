@@ -5,7 +5,7 @@
  */
 import { relative } from 'node:path';
 import { changedLines } from '../review/changed-lines.js';
-import { describeReview, signedBy } from '../review/describe-review.js';
+import { describeReview } from '../review/describe-review.js';
 import { readLedger } from '../review/read-ledger.js';
 import { reviewClaims, type ReviewSummary } from '../review/review-claims.js';
 import type { CheckResult, Claim, Flag } from '../types.js';
@@ -20,7 +20,7 @@ export interface GateOptions {
 
 /** The run as reported after the gate, and whether the gate fails it. */
 export interface GateOutcome {
-  /** Claims and flags left after `--changed-since`; flags on signed-off claims say so in their reason. */
+  /** Claims and flags left after `--changed-since`; flags on signed-off claims carry their `signoff`. */
   result: CheckResult;
   /** Flags that may still fail the run (those on signed-off claims are left out). */
   failingFlags: Flag[];
@@ -52,7 +52,7 @@ export async function applyGate(result: CheckResult, options: GateOptions): Prom
       failingFlags.push(flag);
       return flag;
     }
-    return { ...flag, reason: `${flag.reason} [${signedBy(entry)}]` };
+    return { ...flag, signoff: { reviewer: entry.reviewer, date: entry.date, decision: entry.decision } };
   });
   const claims = scoped.claims.map((c) => ({ ...c, flags: flags.filter((f) => f.claimId === c.id) }));
   summary.push(...describeReview(review));

@@ -34,8 +34,8 @@ export function caseName(line: number, column: number, text: string): string {
 
 function splitByFailLevel(flags: Flag[], options: ReportOptions): Pick<JunitCase, 'failures' | 'passed'> {
   return {
-    failures: flags.filter((flag) => reachesFailLevel(flag.level, options.failOn)),
-    passed: flags.filter((flag) => !reachesFailLevel(flag.level, options.failOn)),
+    failures: flags.filter((flag) => flag.signoff === undefined && reachesFailLevel(flag.level, options.failOn)),
+    passed: flags.filter((flag) => flag.signoff !== undefined || !reachesFailLevel(flag.level, options.failOn)),
   };
 }
 

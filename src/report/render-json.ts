@@ -15,7 +15,7 @@ function shown<T extends ShownValue>(value: T): Omit<T, 'low' | 'high'> & JsonSh
 
 // Written member by member so every report lists them in the same order, whatever the producer did.
 function jsonFlag(flag: Flag): JsonFlag {
-  const { claimed, reference, correction, suggestion, claimId } = flag;
+  const { claimed, reference, correction, suggestion, claimId, signoff } = flag;
   return {
     ruleId: flag.ruleId,
     level: flag.level,
@@ -30,6 +30,7 @@ function jsonFlag(flag: Flag): JsonFlag {
     ...(suggestion === undefined ? {} : { suggestion }),
     sources: flag.sources,
     ...(claimId === undefined ? {} : { claimId }),
+    ...(signoff === undefined ? {} : { signoff }),
   };
 }
 

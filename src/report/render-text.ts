@@ -43,6 +43,10 @@ function flagBlock(chalk: ChalkInstance, flag: Flag): string {
     lines.push(...rows(chalk, 'suggestion', [asSentence(flag.suggestion)]));
   }
   if (flag.sources.length > 0) lines.push(...rows(chalk, 'sources', flag.sources.map(formatSource)));
+  if (flag.signoff !== undefined) {
+    const { reviewer, date, decision } = flag.signoff;
+    lines.push(...rows(chalk, 'signed off', [`by ${reviewer} on ${date} (${decision}); this flag does not fail the run`]));
+  }
   return lines.join('\n');
 }
 

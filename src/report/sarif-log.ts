@@ -47,6 +47,8 @@ export interface SarifResult {
   locations: { physicalLocation: { artifactLocation: SarifArtifactLocation; region: SarifRegion } }[];
   partialFingerprints?: Record<string, string>;
   fixes?: SarifFix[];
+  /** SARIF §3.35: an expert's sign-off is an external, accepted suppression. */
+  suppressions?: { kind: 'external'; status: 'accepted'; justification: string }[];
 }
 
 /** One rule's metadata (SARIF §3.49). */

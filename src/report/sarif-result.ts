@@ -49,6 +49,10 @@ export function toSarifResult(flag: Flag, ruleIndex: number | undefined): SarifR
     ],
   };
   if (flag.claimId !== undefined) result.partialFingerprints = { [CLAIM_FINGERPRINT]: flag.claimId };
+  if (flag.signoff !== undefined) {
+    const { reviewer, date, decision } = flag.signoff;
+    result.suppressions = [{ kind: 'external', status: 'accepted', justification: `Signed off by ${reviewer} on ${date} (${decision}).` }];
+  }
   if (flag.correction !== undefined) {
     result.fixes = [
       {

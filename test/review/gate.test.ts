@@ -51,7 +51,7 @@ describe('applyGate', () => {
     const gate = await applyGate(result, { requireSignoff: true, ledgerFile, cwd });
     expect(gate.failed).toBe(false);
     expect(gate.failingFlags).toEqual([]);
-    expect(gate.result.flags[0]?.reason).toBe('A lag does not rule out a cause. [signed off by J. Berg on 2025-03-01, waived]');
+    expect(gate.result.flags[0]).toMatchObject({ reason: 'A lag does not rule out a cause.', signoff: { reviewer: 'J. Berg', date: '2025-03-01T08:00:00Z', decision: 'waived' } });
     expect(gate.summary).toContain('1 flag on signed-off claims shown as signed off; they do not fail the run.');
   });
 
