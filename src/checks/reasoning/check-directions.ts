@@ -1,11 +1,13 @@
 /**
  * Direction facts: an effect stated the wrong way round ("warmer water holds more CO2"). Each
  * fact in the packs lists regular expressions for wrong phrasings and, optionally, right ones;
- * a sentence that states the right direction is left alone even when a wrong pattern also matches.
+ * a sentence that states the right direction is left alone even when a wrong pattern also matches,
+ * and so is a wrong phrasing that the sentence denies, asks about or concedes (direction-guards.ts).
  */
 import { FirnlineError } from '../../errors.js';
 import type { FlagDraft } from '../../types.js';
 import type { CompiledPacks } from './compile-packs.js';
+import { isGuarded } from './direction-guards.js';
 import { guardedMatches, guardedMatchesEach, MAX_SENTENCE_LENGTH, TIME_LIMIT_MS, type Span } from './time-limit.js';
 
 /**
@@ -30,7 +32,7 @@ export function checkDirections(sentence: string, compiled: CompiledPacks, batch
       return found;
     };
     if (right.some((regex) => run(regex).length > 0)) continue;
-    const hit = wrong.flatMap(run)[0];
+    const hit = wrong.flatMap(run).find((span) => !isGuarded(sentence, span));
     if (hit === undefined) continue;
     flags.push({
       ruleId: fact.id.startsWith('direction.') ? fact.id : `direction.${fact.id}`,

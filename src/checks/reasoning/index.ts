@@ -11,6 +11,7 @@ import type { FlagDraft } from '../../types.js';
 import { checkDirections } from './check-directions.js';
 import { checkPatterns } from './check-patterns.js';
 import { compilePacks } from './compile-packs.js';
+import { dropOutranked } from './flag-precedence.js';
 import { paragraphDirectionMatches } from './paragraph-matches.js';
 import { applyStance } from './reported-claims.js';
 
@@ -23,7 +24,8 @@ export { MAX_PATTERN_LENGTH, MAX_SENTENCE_LENGTH, TIME_LIMIT_MS } from './time-l
  * context that can answer a reported argument. Offsets are UTF-16 indices into `paragraph[index]`.
  * compromise runs at most once, and only when a check's cue words pass the cheap prefilter (or a
  * pattern rule needs it). Overlapping flags keep the first in pack order (checks, then direction
- * facts, then pattern rules), so one stretch of text gets one explanation.
+ * facts, then pattern rules), so one stretch of text gets one explanation; the exceptions, where a
+ * more specific flag wins, are listed in flag-precedence.ts.
  */
 export function checkReasoning(paragraph: string[], index: number, packs: LoadedPacks): FlagDraft[] {
   const text = paragraph[index];
@@ -48,7 +50,7 @@ export function checkReasoning(paragraph: string[], index: number, packs: Loaded
   }
 
   const kept: FlagDraft[] = [];
-  for (const { flag, stance } of found) {
+  for (const { flag, stance } of dropOutranked(found)) {
     if (kept.some((k) => k.start < flag.end && flag.start < k.end)) continue;
     const judged = applyStance(flag, paragraph, index, sentence(), stance);
     if (judged !== undefined) kept.push(judged);
