@@ -34,6 +34,8 @@ const CLAUSE_PUNCT = new Set([';', ':', '(', ')', '—', '–']);
 const OPENERS = new Set(['“', '‘']);
 const CLOSERS = new Set(['”', '’']);
 const TOGGLES = new Set(['"', "'"]);
+// "nothing but the orbit", "all but certain": here "but" means "except" and joins, not a new clause.
+const EXCEPT_WORDS = new Set(['nothing', 'anything', 'everything', 'all', 'none']);
 
 /**
  * Tokenizes a sentence. `clauseBreaks` are the words that start a new clause. `doc` is the
@@ -67,7 +69,7 @@ export function tokenizeSentence(
       continue;
     }
     const lower = raw.toLowerCase();
-    if (breaks.has(lower)) clause += 1;
+    if (breaks.has(lower) && !(lower === 'but' && EXCEPT_WORDS.has(tokens.filter((t) => t.isWord).at(-1)?.text ?? ''))) clause += 1;
     const contraction = CONTRACTION.exec(lower);
     if (contraction !== null && contraction[1] !== undefined && contraction[2] !== undefined) {
       const base = CONTRACTION_BASE[contraction[1]] ?? contraction[1];

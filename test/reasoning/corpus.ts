@@ -17,6 +17,8 @@
  * - Warmer water holds less dissolved CO2: Weiss 1974, Marine Chemistry 2, 203-215 (from memory).
  * Written before the detectors were tuned; hard items were kept.
  */
+import { PHRASINGS } from './corpus-phrasings.js';
+
 export interface CorpusItem {
   id: string;
   scenario: 'audio guide' | 'newsletter' | 'science desk';
@@ -202,5 +204,8 @@ function toItems(rows: Row[], prefix: string): CorpusItem[] {
   }));
 }
 
-/** Every labelled item: errors first (`err-001`...), then correct statements (`ok-001`...). */
-export const CORPUS: CorpusItem[] = [...toItems(errors, 'err'), ...toItems(correct, 'ok')];
+/**
+ * Every labelled item: errors first (`err-001`...), then correct statements (`ok-001`...), then
+ * the items written for later phrasing families (corpus-phrasings.ts).
+ */
+export const CORPUS: CorpusItem[] = [...toItems(errors, 'err'), ...toItems(correct, 'ok'), ...PHRASINGS];

@@ -9,7 +9,7 @@
  *
  * Fires on an exclusive word (`exclusive`: alone, solely, entirely, "the only cause", "had one
  * cause", ", not CO2,") in a clause that also has a causal word (`causal`) and a named cause
- * (`causes`). When the exclusive words end right before a colon or dash, the clause after it
+ * (`causes`). When the clause of the exclusive words ends at a colon or dash, the clause after it
  * names the one cause, so the named cause must stand there. Passes when the clause says the single
  * cause falls short (`limits`: "too weak", "cannot", "together", "only part"), when the exclusive
  * words are denied (`negation`: "no single cause"), in a question, and when the sentence is about
@@ -17,28 +17,36 @@
  */
 import { clauseOf, findPhrases, isNegated, type PhraseHit } from '../../claims/frames-match.js';
 import type { SentenceTokens } from '../../claims/frames-tokens.js';
-import { spanOf, type Cue, type DetectInput, type DetectorEntry } from './detector.js';
+import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 
 const INTRODUCERS = new Set([':', '—', '–']);
 
-/** The clause a cue named by `exclusive` stands in, and the clause it introduces after a colon. */
+/**
+ * The clause that a colon or dash closing the exclusive words' clause opens ("had one cause: the
+ * orbit", "only one cause ended it: CO2"); undefined when the clause ends otherwise.
+ */
 function introducedClause(sentence: SentenceTokens, exclusive: PhraseHit): number | undefined {
-  const after = sentence.tokens[(sentence.words[exclusive.last] ?? -2) + 1];
-  return after !== undefined && INTRODUCERS.has(after.text) ? after.clause : undefined;
+  const from = (sentence.words[exclusive.last] ?? -2) + 1;
+  const clause = clauseOf(sentence, exclusive.first);
+  const end = sentence.tokens.slice(from).find((t) => t.clause !== clause || INTRODUCERS.has(t.text));
+  return end !== undefined && INTRODUCERS.has(end.text) ? end.clause : undefined;
 }
 
 function detect({ sentence, words }: DetectInput): Cue[] {
   if (sentence.text.trimEnd().endsWith('?') || findPhrases(sentence, words('modern')).length > 0) return [];
   const inClauses = (slot: string, clauses: number[]) =>
     findPhrases(sentence, words(slot)).filter((h) => clauses.includes(clauseOf(sentence, h.first)));
-  for (const exclusive of findPhrases(sentence, words('exclusive'))) {
+  const exclusives = findPhrases(sentence, words('exclusive'));
+  for (const exclusive of exclusives) {
     if (isNegated(sentence, exclusive.first, words('negation'), 2)) continue;
     const clause = clauseOf(sentence, exclusive.first);
     const introduced = introducedClause(sentence, exclusive);
     const both = introduced === undefined ? [clause] : [clause, introduced];
     if (inClauses('causal', both).length === 0 || inClauses('causes', introduced === undefined ? both : [introduced]).length === 0) continue;
     if (inClauses('limits', both).length > 0) continue;
-    return [spanOf(exclusive, exclusive)];
+    // "for one reason" and "one reason only" overlap: flag the whole stretch they cover.
+    const end = Math.max(...exclusives.filter((e) => e.start < exclusive.end && exclusive.start < e.end).map((e) => e.end));
+    return [{ start: exclusive.start, end }];
   }
   return [];
 }
