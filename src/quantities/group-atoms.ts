@@ -6,8 +6,9 @@
  * A number with no unit of its own takes its partner's unit and scale ("7-8 thousand years").
  */
 import type { Atom } from './find-atoms.js';
+import { INTERVAL_RULES } from './interval-rules.js';
 import { matchUnit, type UnitMatch } from './match-unit.js';
-import { isLabelCue } from './reading-cues.js';
+import { isCalendarCue, isLabelCue } from './reading-cues.js';
 
 /** A number and the unit that applies to it (written after it, or shared from its partner). */
 export interface Part {
@@ -27,14 +28,32 @@ export interface Group {
 }
 
 const S = String.raw`[\s\u00A0]`;
+const HEDGE_PREFIXES = INTERVAL_RULES.filter((r) => r.kind === 'hedge')
+  .flatMap((r) => r.words)
+  .filter((w) => !w.startsWith('or '))
+  .sort((a, b) => b.length - a.length)
+  .map((w) => w.replace(/[.*+?^${}()|[\]\\]/g, '\\$&').replace(/ /g, `${S}+`))
+  .join('|');
 const PLUS_MINUS = new RegExp(String.raw`^${S}*(?:±|\+\/-|\+\/−)${S}*$`, 'u');
 const RANGE_JOIN = new RegExp(String.raw`^(?:${S}*(?:to|through|until|till)${S}+|-|${S}*[–—]${S}*)$`, 'iu');
 const AND_JOIN = new RegExp(String.raw`^${S}+and${S}+$`, 'iu');
 const BETWEEN = new RegExp(String.raw`(?:^|[^\p{L}])(?<word>between)${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
 const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
+/** "to about", "to more than": the far end of a from-to pair may carry its own hedge (a range may not). */
+const TO_HEDGED = new RegExp(String.raw`^${S}*(?:to|through|until|till)${S}+(?:${HEDGE_PREFIXES})${S}*$`, 'iu');
 const RANGE_VERB = new RegExp(String.raw`(?:rang(?:e|es|ed|ing)|var(?:y|ies|ied|ying)|anywhere|estimates?)${S}+from${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
 
 const joinable = (a: Atom): boolean => a.form === 'digits' || a.form === 'words';
+const TIME_DIMENSIONS = new Set(['age', 'duration']);
+
+/**
+ * True when bare `p` is a calendar year ("in 1750") and `q` a number in a unit that is not a time:
+ * in "from 280 ppm in 1750 to 420 ppm" the year is a date, not the low end of a ppm range.
+ */
+function yearBeforeOtherUnit(text: string, p: Part, q: Part): boolean {
+  if (p.unit !== undefined || q.unit === undefined || !p.atom.plainInteger || p.atom.value < 1000 || p.atom.value > 2100) return false;
+  return isCalendarCue(text.slice(Math.max(0, p.atom.start - 16), p.atom.start)) && !q.unit.defs.some((d) => TIME_DIMENSIONS.has(d.dimension));
+}
 const sameUnit = (a: UnitMatch | undefined, b: UnitMatch | undefined): boolean =>
   a === undefined || b === undefined || a.defs[0]?.id === b.defs[0]?.id;
 
@@ -62,7 +81,7 @@ export function groupParts(text: string, parts: Part[]): Group[] {
   for (let i = 0; i < parts.length; i++) {
     const p = parts[i] as Part;
     const q = parts[i + 1];
-    if (q === undefined || !joinable(p.atom) || !joinable(q.atom) || !sameUnit(p.unit, q.unit)) {
+    if (q === undefined || !joinable(p.atom) || !joinable(q.atom) || !sameUnit(p.unit, q.unit) || yearBeforeOtherUnit(text, p, q)) {
       groups.push({ kind: 'single', parts: [p], role: 'alone', prefixStart: undefined });
       continue;
     }
@@ -73,7 +92,7 @@ export function groupParts(text: string, parts: Part[]): Group[] {
     const second: Part = { ...q, unit: q.unit ?? p.unit };
     if (PLUS_MINUS.test(joiner)) {
       groups.push({ kind: 'plus-minus', parts: [shared, second], role: 'alone', prefixStart: undefined });
-    } else if (RANGE_JOIN.test(joiner) && FROM.test(before) && !RANGE_VERB.test(before)) {
+    } else if ((RANGE_JOIN.test(joiner) || TO_HEDGED.test(joiner)) && FROM.test(before) && !RANGE_VERB.test(before)) {
       groups.push({ kind: 'single', parts: [shared], role: 'from', prefixStart: undefined });
       groups.push({ kind: 'single', parts: [second], role: 'to', prefixStart: undefined });
     } else if (RANGE_JOIN.test(joiner) || between !== null) {

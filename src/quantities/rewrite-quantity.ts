@@ -15,6 +15,12 @@ function writtenFigures(written: string): number {
   return digits.includes('.') ? bare.length : bare.replace(/0+$/, '').length;
 }
 
+/** The significant figures a correction of `q` keeps: as many as the draft wrote, and at least 3. */
+export function correctionFigures(q: Quantity): number {
+  const atom = findAtoms(q.text)[0];
+  return Math.max(3, atom === undefined ? 0 : writtenFigures(q.text.slice(atom.start, atom.end)));
+}
+
 /**
  * `q.text` with its number replaced by `value` (canonical unit), rounded to `significant` figures:
  * by default as many as the draft wrote, and at least 3.
@@ -22,7 +28,7 @@ function writtenFigures(written: string): number {
 export function rewriteQuantity(q: Quantity, value: number, significant?: number): string {
   const atoms = findAtoms(q.text);
   const atom = atoms[0];
-  const figures = significant ?? Math.max(3, atom === undefined ? 0 : writtenFigures(q.text.slice(atom.start, atom.end)));
+  const figures = significant ?? correctionFigures(q);
   const id = q.statedUnit === '' ? q.unit : q.statedUnit;
   if (atom === undefined || atoms.length > 1 || atom.form === 'vague') return formatQuantity(value, q.unit, q.statedUnit, figures);
   const stated = fromCanonical(value, id, q.dimension);

@@ -203,4 +203,9 @@ export const LABELLED_SET: LabelledSentence[] = [
   s('Ice cores show CO2 at 280 ppm in 1750 and 410 ppm in 2019.', ppm('280 ppm', 275, 285), age('1750', 199.5, 200.5), ppm('410 ppm', 405, 415), age('2019', -69.5, -68.5)),
   s('A 5 °C (9 °F) warming is glacial-scale.', dT('5 °C', 4.5, 5.5), dT('9 °F', 8.5 * (5 / 9), 9.5 * (5 / 9))),
   s('The pack says 8,000 years, i.e. 8 kyr.', d('8,000 years', 7950, 8050), d('8 kyr', 7500, 8500)),
+  // The far end of a from-to pair may carry its own hedge; the near end still takes its unit.
+  s('At Halden the panel says CO2 went from about 185 to about 290 ppm.', ppm('about 185', 166, 204), ppm('about 290 ppm', 256, 324)),
+  s('The Northmoor log has CO2 going from 190 to nearly 300 ppm.', ppm('190', 185, 195), ppm('nearly 300 ppm', 270, 300)),
+  // A calendar year is a date, not the low end of a ppm range: "in 1850 to 300 ppm" is two things.
+  s('Firn & Flux charts CO2 from 285 ppm in 1850 to 300 ppm in 1910.', ppm('285 ppm', 284.5, 285.5), age('1850', 99.5, 100.5), ppm('300 ppm', 295, 305), age('1910', 39.5, 40.5)),
 ];
