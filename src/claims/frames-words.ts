@@ -65,7 +65,8 @@ export const FRAME_WORDS: FrameWords = {
     hemispheric: ['southern hemisphere', 'northern hemisphere', 'hemispheric', 'hemisphere'],
     global: [
       'global', 'globally', 'worldwide', 'the planet', 'whole planet', 'the whole earth', "earth's temperature",
-      'the world', 'across the globe', 'global mean', 'global average',
+      'the world', 'across the globe', 'global mean', 'global average', 'around the globe', 'around the world',
+      'all over the world', 'the globe', 'entire planet', 'earth as a whole', 'on a global scale',
     ],
   },
   subjects: {

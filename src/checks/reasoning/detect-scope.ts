@@ -5,8 +5,8 @@
  *   `scope.regional-record-as-global`
  *   "The Vostok ice core shows that global temperature swung by about 10 °C."
  *        ^^^^^^ record                 ^^^^^^^^^^^^^^^^^^ flagged
- *   Fires when one sentence names a regional record (`record`), a global scope (`global`) and a
- *   temperature word (`temperature`), and no contrast (`contrast`: "than", "not", "unlike",
+ *   Fires when one sentence names a regional record (`record`) and, in the same clause, a global
+ *   scope (`global`), with a temperature word (`temperature`), and no contrast (`contrast`: "than", "not", "unlike",
  *   "while", "combined"...) sets them apart. CO2 from Antarctic ice is a global signal: a
  *   sentence without a temperature word passes, and so does a global word that CO2 acts on
  *   ("the CO2 then warmed the planet").
@@ -36,7 +36,10 @@ function detectRegional({ sentence, words }: DetectInput): Cue[] {
   const has = (slot: string) => findPhrases(sentence, words(slot));
   const temperature = has('temperature');
   if (has('record').length === 0 || temperature.length === 0 || has('contrast').length > 0) return [];
-  const global = has('global').find((g) => !isCo2Acting(sentence, g, temperature, has('co2')));
+  // A record in one clause and the globe in the next ("In Antarctica, ...: for the globe as a
+  // whole, ...") set the two side by side; only a record and the globe in one clause equate them.
+  const recordClauses = new Set(has('record').map((r) => clauseOf(sentence, r.first)));
+  const global = has('global').find((g) => recordClauses.has(clauseOf(sentence, g.first)) && !isCo2Acting(sentence, g, temperature, has('co2')));
   if (global === undefined) return [];
   const next = temperature.find((t) => t.first > global.last && t.first - global.last <= 3);
   return [spanOf(global, next ?? global)];
