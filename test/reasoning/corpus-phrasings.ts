@@ -101,6 +101,7 @@ const correct: Row[] = [
   ['science desk', 'Antarctic temperature climbed some centuries before CO2, and the extra CO2 then warmed the globe.', []],
   ['science desk', "Greenland's thermometer in the ice, the isotope record, swung far more than the globe as a whole.", []],
   ['science desk', 'All over the world, temperatures rose in the centuries after carbon dioxide began to climb.', []],
+  ['audio guide', 'At Dome C, temperature and CO2 rose within a few centuries of each other: for the planet as a whole, most of the warming came after the CO2.', []],
   // Solubility the right way round, denied, asked, conceded, or about heat.
   ['science desk', 'As the seas warm they absorb less CO2, so a warmer ocean gives some back to the air.', []],
   ['science desk', 'Even as the oceans warm, they absorb more CO2 every year, because there is more of it in the air.', []],
