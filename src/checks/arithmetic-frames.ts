@@ -13,12 +13,25 @@ const after = (words: string[]): RegExp => new RegExp(String.raw`^[\s\u00A0-]*(?
 
 const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+$`, 'iu');
 const TO = new RegExp(String.raw`^${S}*(?:to|until|till|through|–|—|-)${S}*$`, 'iu');
+/** A phrase of time or place between the start of a from-to pair and its "to" (a date in it reads DATE). */
+const WHEN_TO = new RegExp(String.raw`^,?${S}+(?:in|by|at|around|circa|during|before|after|near)${S}+[^\d.;:!?()]{1,40}?${S}+(?:to|until|till)${S}+$`, 'iu');
+/** Words that open the start of a stretch of time or a change, and words that mark its end. */
+const START_CUE = before(['began', 'begun', 'begins', 'started', 'starts', 'set in', 'opened', 'onset', 'beginning', 'starting', 'began at', 'started at', 'starting at']);
+const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at)${S}*$`, 'iu');
 const CHANGE_NOUNS = ['rise', 'increase', 'drop', 'fall', 'decline', 'change', 'jump', 'gain', 'loss', 'swing', 'difference', 'warming', 'cooling', 'growth', 'decrease', 'reduction'];
 const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
 const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
 const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down']);
 const SPAN_OF_PAIR = before(['lasting', 'lasted', 'lasts', 'spanning', 'spanned', 'spans', 'span of', 'period of', 'interval of', 'stretch of', 'over', 'across', 'within', 'took', 'taking', 'during', 'for', 'or', 'that is', 'i.e.', 'i.e.,', '(', '—']);
 const SPAN_OF_CHANGE = before(['lasting', 'spanning', 'span of', 'period of', 'over', 'across', 'within', 'in', 'took', 'taking', 'during', 'for', 'after', '(']);
+/**
+ * Between the end date and a duration that restates the span: a comma, colon, semicolon, bracket or
+ * dash, then perhaps "or", "that is", and a short noun phrase ending in "of" ("a cold spell of").
+ */
+const PAIR_GAP = new RegExp(
+  String.raw`^${S}*[,:;(—–]${S}*(?:(?:or|that is|i\.e\.)[,\s\u00A0]+)?(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+)?$`,
+  'iu',
+);
 const NOT_A_SPAN = before(['past', 'last', 'previous', 'preceding', 'next', 'every', 'each', 'per']);
 const RATIO_AFTER = after([...CHANGE_NOUNS, 'higher', 'larger', 'greater', 'more', 'lower', 'less', 'smaller', 'above', 'below', 'as high', 'as large', 'as much', 'as great', 'as long']);
 const RATIO_VERB = /^(?:doubled|tripled|quadrupled|halved|doubling|tripling|halving|[\p{N}.]+[-\s]?fold|\p{L}+[-\s]?fold)$/iu;
@@ -34,15 +47,50 @@ export interface Pair {
 const head = (text: string, q: Quantity): string => text.slice(Math.max(0, q.start - 40), q.start);
 const tail = (text: string, q: Quantity): string => text.slice(q.end, q.end + 32);
 
-/** Every "from A to B" pair of one dimension. */
+/**
+ * Every pair of one dimension that states a start and an end: "from [A] to [B]" (a date may sit
+ * between them: "from 280 ppm in 1750 to 420 ppm"), and "began [A] ... ended [B]" ("began 14,700
+ * years ago and ended 12,900 years ago"; "started at 190 ppm and ended at 280 ppm").
+ */
 export function findPairs(text: string, qs: Quantity[]): Pair[] {
   const pairs: Pair[] = [];
   for (let i = 0; i + 1 < qs.length; i++) {
     const a = qs[i] as Quantity;
-    const b = qs[i + 1] as Quantity;
-    if (a.dimension === b.dimension && FROM.test(head(text, a)) && TO.test(text.slice(a.end, b.start))) pairs.push({ from: i, to: i + 1 });
+    const to = toEnd(text, qs, i);
+    if (to !== undefined && FROM.test(head(text, a))) pairs.push({ from: i, to });
+    else {
+      const end = startEnd(text, qs, i);
+      if (end !== undefined) pairs.push({ from: i, to: end });
+    }
   }
   return pairs;
+}
+
+/**
+ * The index of B in "from A to B", or undefined. A short phrase of time or place may stand before
+ * "to", with at most one date in it: "from 190 ppm [at the glacial maximum] to 280 ppm", "from 280
+ * ppm [in 1750] to 420 ppm".
+ */
+function toEnd(text: string, qs: Quantity[], i: number): number | undefined {
+  const a = qs[i] as Quantity;
+  const j = qs.findIndex((q, k) => k > i && q.dimension === a.dimension);
+  const b = qs[j];
+  if (b === undefined || j > i + 2) return undefined;
+  const middle = j === i + 2 ? (qs[i + 1] as Quantity) : undefined;
+  if (middle !== undefined && middle.dimension !== 'age') return undefined;
+  const between = middle === undefined ? text.slice(a.end, b.start) : `${text.slice(a.end, middle.start)}DATE${text.slice(middle.end, b.start)}`;
+  return TO.test(between) || WHEN_TO.test(between) ? j : undefined;
+}
+
+/** The index of B in "began A ... ended B" (the next quantity of A's dimension), or undefined. */
+function startEnd(text: string, qs: Quantity[], i: number): number | undefined {
+  const a = qs[i] as Quantity;
+  if (!START_CUE.test(head(text, a))) return undefined;
+  const j = qs.findIndex((q, k) => k > i && q.dimension === a.dimension);
+  const b = qs[j];
+  if (b === undefined) return undefined;
+  const between = text.slice(a.end, b.start);
+  return END_CUE.test(between) && !/[.!?]/u.test(between) && between.length <= 80 ? j : undefined;
 }
 
 /** True when `q` is stated as a change ("by 100 ppm", "a rise of 5 °C", "5 °C warmer"). */
@@ -53,7 +101,7 @@ export function isStatedChange(text: string, q: Quantity): boolean {
 /** True when duration `q` states the span of a from-to pair of dates (pair ending at `pairEnd`). */
 export function isSpanOfPair(text: string, q: Quantity, pairEnd: number): boolean {
   if (NOT_A_SPAN.test(head(text, q))) return false;
-  return SPAN_OF_PAIR.test(head(text, q)) || /^[\s\u00A0]*(?:,|\(|—|–)[\s\u00A0]*(?:or[\s\u00A0]+)?$/u.test(text.slice(pairEnd, q.start));
+  return SPAN_OF_PAIR.test(head(text, q)) || PAIR_GAP.test(text.slice(pairEnd, q.start));
 }
 
 /** True when duration `q` states how long a change took ("in 8,000 years", "over a century"). */

@@ -1,7 +1,10 @@
 /**
  * The arithmetic rules as data: each derives values from the draft's own numbers and returns the
- * stated numbers they should equal. checkArithmetic runs every rule the same way.
+ * stated numbers they should equal. checkArithmetic runs every rule the same way. The inputs are
+ * read as written, without their hedges (quantities/written-interval.ts): the writer did the sum
+ * on the numbers they wrote. The stated result keeps its hedge.
  */
+import { writtenInterval as w } from '../quantities/index.js';
 import type { Dimension, Quantity } from '../types.js';
 import { divide, facing, invert, minus, percentChange, rangeSpan, size, type Derived } from './arithmetic-derive.js';
 import { comparesToNext, findPairs, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
@@ -38,14 +41,14 @@ function changes(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
     const [a, b] = ends(qs, p);
     const stated = only(others(qs, p).filter((q) => q.dimension === DIFFERENCE[a.dimension] && isStatedChange(text, q)));
     if (stated === undefined) return [];
-    return [{ stated, computed: facing(minus(b, a), stated.value), measures: `the change ${words(a, b)}` }];
+    return [{ stated, computed: facing(minus(w(b), w(a)), stated.value), measures: `the change ${words(a, b)}` }];
   });
 }
 
 function spanOfDates(text: string, qs: Quantity[], pairs: Pair[]): { span: Derived; after: number; measures: string }[] {
   const fromPairs = pairs.filter((p) => qs[p.from]?.dimension === 'age').map((p) => {
     const [a, b] = ends(qs, p);
-    return { span: size(minus(a, b)), after: b.end, measures: `the time ${words(a, b)}` };
+    return { span: size(minus(w(a), w(b))), after: b.end, measures: `the time ${words(a, b)}` };
   });
   const fromRanges = qs.filter((q) => q.dimension === 'age').flatMap((q) => {
     const span = rangeSpan(q);
@@ -68,8 +71,9 @@ function rates(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
     const explicit = only(qs.filter((q) => q.dimension === changeDim && isStatedChange(text, q)));
     const pair = only(pairs.filter((p) => DIFFERENCE[qs[p.from]?.dimension ?? 'number'] === changeDim));
     const pairEnds = pair === undefined ? undefined : ends(qs, pair);
-    const change = explicit ?? (pairEnds === undefined ? undefined : minus(pairEnds[1], pairEnds[0]));
-    const duration = only(qs.filter((q) => q.dimension === 'duration' && isSpanOfChange(text, q))) ?? only(spanOfDates(text, qs, pairs))?.span;
+    const change = explicit !== undefined ? w(explicit) : pairEnds === undefined ? undefined : minus(w(pairEnds[1]), w(pairEnds[0]));
+    const spanOfChange = only(qs.filter((q) => q.dimension === 'duration' && isSpanOfChange(text, q)));
+    const duration = spanOfChange !== undefined ? w(spanOfChange) : only(spanOfDates(text, qs, pairs))?.span;
     if (change === undefined || duration === undefined) return [];
     const computed = divide(size(change), duration);
     return computed === undefined ? [] : [{ stated: rate, computed: facing(computed, rate.value), measures: 'the change divided by the time it took' }];
@@ -86,13 +90,13 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
     let measures: string;
     if (pair !== undefined) {
       const [a, b] = ends(qs, pair);
-      pairRatio = divide(b, a);
+      pairRatio = divide(w(b), w(a));
       measures = `${isPercent ? 'the percentage change' : 'the ratio'} ${words(a, b)}`;
     } else {
       const after = qs.slice(i + 1).find((q) => RATIOED.includes(q.dimension));
       const x = after === undefined ? undefined : only(qs.filter((q) => q !== after && q !== stated && q.dimension === after.dimension));
       if (after === undefined || x === undefined || !comparesToNext(text, stated)) return [];
-      pairRatio = divide(x, after);
+      pairRatio = divide(w(x), w(after));
       measures = `${isPercent ? 'the percentage difference' : 'the ratio'} of ${x.text} to ${after.text}`;
     }
     if (pairRatio === undefined) return [];

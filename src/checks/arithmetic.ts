@@ -4,7 +4,7 @@
  * percentage that contradicts its two values. Tolerances come from the intervals (see
  * src/quantities/interval-rules.ts); correct arithmetic is never flagged.
  */
-import { formatQuantity, hedgeRule, rewriteQuantity } from '../quantities/index.js';
+import { correctionFigures, formatQuantity, hedgeRule, rewriteQuantity } from '../quantities/index.js';
 import type { FlagDraft, Quantity } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
 import { disjoint, levelFor } from './arithmetic-levels.js';
@@ -24,7 +24,7 @@ export function correctionFor(q: Quantity, value: number): string {
   return at > 0 ? rewritten.slice(0, at).replace(/[\s,]+$/u, '') : rewritten;
 }
 
-const shown = (q: Quantity, d: Derived): string => formatQuantity(d.value, q.unit, q.statedUnit);
+const shown = (q: Quantity, d: Derived): string => formatQuantity(d.value, q.unit, q.statedUnit, correctionFigures(q));
 
 /** Every arithmetic contradiction in one sentence, with the right value in the correction. */
 export function checkArithmetic(text: string, quantities: Quantity[]): FlagDraft[] {

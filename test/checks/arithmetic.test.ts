@@ -22,6 +22,17 @@ const WRONG: [string, string, string, string, string][] = [
   ['arith.ratio', 'CO2 rose from 190 to 280 ppm; it doubled.', 'doubled', '1.5 times', 'error'],
   ['arith.ratio', 'CO2 fell from 280 to 180 ppm, a drop of 50 percent.', '50 percent', '35.7 percent', 'error'],
   ['arith.ratio', 'At 420 ppm, today\'s air holds three times more CO2 than the 180 ppm of the ice age.', 'three times', '2.33 times', 'warning'],
+  // Start and end dates in "began ... ended ..." wording, across a comma, colon or semicolon.
+  ['arith.duration', 'The Antarctic Cold Reversal began 14,700 years ago and ended 12,700 years ago, a pause of about 3,000 years.', 'about 3,000 years', 'about 2,000 years', 'warning'],
+  ['arith.duration', 'The warm spell started 5,900 years ago; it ended 5,300 years ago: about 900 years of mild winters.', 'about 900 years', 'about 600 years', 'warning'],
+  // A hedged start date: the writer subtracts the numbers written (8,200 − 7,100), not the widest reading of "about".
+  ['arith.duration', 'The Northmoor team dates the wet phase from about 8,200 to 7,100 years ago, a stretch of some 2,100 years.', 'some 2,100 years', 'some 1,100 years', 'warning'],
+  // A phrase of time between "from" and "to"; hedges on both ends.
+  ['arith.change', 'CO2 fell from 300 ppm at the interglacial peak to 180 ppm at the glacial maximum, a drop of 200 ppm.', '200 ppm', '120 ppm', 'error'],
+  ['arith.change', 'The Halden panel says CO2 went from about 185 to about 275 ppm as the ice melted, a rise of roughly 40 ppm.', 'roughly 40 ppm', 'roughly 90 ppm', 'error'],
+  // Percentages: 280 / 190 = 1.474, a 47.4% rise; 400 / 270 = 1.481. "more than 400" is read as the 400 written.
+  ['arith.ratio', 'CO2 climbed from 190 to 280 ppm, an increase of roughly 30 percent.', 'roughly 30 percent', 'roughly 47.4 percent', 'warning'],
+  ['arith.ratio', 'CO2 rose from about 270 ppm in 1800 to more than 400 ppm today, a rise of roughly 70 percent.', 'roughly 70 percent', 'roughly 48.1 percent', 'warning'],
 ];
 
 // Right arithmetic, never flagged.
@@ -41,6 +52,24 @@ const RIGHT: string[] = [
   'The 800,000-year record was extended from 1750 to 2019 by direct measurement.',
   'CO2 rose from 180 to 280 ppm while temperatures rose twice as fast in Antarctica.',
   'Between 20 and 18 ka the ice sheets stood at their largest.',
+  // Start and end dates whose stated span is right, or rounded as the hedge allows.
+  'The Bølling warm phase began about 14,700 years ago and ended about 12,900 years ago, some 1,800 years in all.',
+  'Termination I ran from roughly 18,000 to 11,700 years ago: some 6,000 years of warming.',
+  'The Last Glacial Maximum lasted from about 26,500 to 19,000 years ago, roughly 7,500 years.',
+  'The stadial set in 12,850 years ago; it ended 11,650 years ago; in all it lasted about 1,200 years.',
+  'The record begins 800,000 years ago and ends in 1911, a span of about 800,000 years.',
+  // Two starts are not a start and an end; a later span is not the span of the pair.
+  'Warming began 18,000 years ago, and CO2 began rising 17,500 years ago.',
+  'The Halden core\'s warm layer began forming 9,300 years ago and stopped 8,900 years ago, after which came 600 years of cold.',
+  // Changes and percentages, right or rounded within their hedges (410 / 280 = 1.464; 410 / 278 = 1.475).
+  'CO2 went from about 180 ppm in the glacial to about 280 ppm in the Holocene, a rise of roughly 100 ppm.',
+  'CO2 rose from 190 ppm at the glacial maximum to 265 ppm by the early Holocene, a gain of about 75 ppm.',
+  'CO2 started at 190 ppm and ended at 280 ppm: a rise of 90 ppm.',
+  'From 280 ppm in 1750 to 410 ppm in 2019, CO2 rose by about 46 percent.',
+  'Between 1750 and 2019, CO2 rose from 278 to 410 ppm, a 47 percent increase.',
+  'CO2 rose from about 185 to about 280 ppm, roughly a 50 percent rise.',
+  'CO2 rose from 280 to over 400 ppm, a rise of more than 40 percent.',
+  'CO2 rose by about 80 ppm in about 6,000 years, about 0.013 ppm a year.',
 ];
 
 describe('checkArithmetic', () => {
@@ -64,6 +93,14 @@ describe('checkArithmetic', () => {
     expect(f?.claimed).toEqual({ text: '120 ppm', low: 115, high: 125, unit: 'ppm' });
     // to − from as intervals: [275 − 185, 285 − 175] = [90, 110].
     expect(f?.reference).toMatchObject({ low: 90, high: 110, unit: 'ppm', text: '100 ppm' });
+  });
+
+  it('subtracts the numbers as written: a hedge on an input does not widen the derived value', () => {
+    const [f] = check('The Northmoor team dates the wet phase from about 8,200 to 7,100 years ago, a stretch of some 2,100 years.');
+    // 8,200 and 7,100 are each read to ±50 (the precision row); "about" is set aside for the sum:
+    // [8,150 − 7,150, 8,250 − 7,050] = [1,000, 1,200]. With "about" (±820) it would reach 2,110.
+    expect(f?.reference).toMatchObject({ low: 1000, high: 1200, text: '1,100 years' });
+    expect(f?.claimed).toMatchObject({ text: 'some 2,100 years', low: 1840, high: 2360 });
   });
 
   it('keeps the level rule in one table: error only past the sum of both widths', () => {
