@@ -1,7 +1,14 @@
 /**
- * Restatements: one quantity followed by the same quantity in another unit, joined by a
- * parenthesis, "or", "i.e.", "=" or a comma: "3,270 m (10,700 ft)", "5 °C, or 9 °F",
- * "12,000 years ago, around 10,000 BCE". The second is the conversion the unit checks verify.
+ * Restatements: one quantity followed by the same quantity in another unit. Three ways of writing
+ * one are read:
+ *  - tight: a parenthesis, "or", "i.e.", "=" or a comma right between them: "3,270 m (10,700 ft)",
+ *    "5 °C, or 9 °F", "12,000 years ago, around 10,000 BCE";
+ *  - loose: a few words and no other quantity between them, ending in a restatement word: "420 ppm of
+ *    CO2, which is 0.042 percent", "about 6 °C colder than before industry, that is, 10.8 °F colder";
+ *  - across sentences: the next sentence of the paragraph restates the last date of this one:
+ *    "... at 11,700 b2k. That is 11,650 years BP."
+ * The second is the conversion the unit checks verify, except that a °F figure is always taken as
+ * the conversion of its °C or K partner, whichever comes first.
  */
 import type { Quantity } from '../types.js';
 
@@ -10,21 +17,74 @@ const JOINER = new RegExp(
   String.raw`^${S}*(?:\(|\[|,?${S}*or${S}+|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|=${S}*|\/${S}*|,?${S}*equivalent to${S}+|,?${S}*which is${S}+|,${S}*|—${S}*)$`,
   'iu',
 );
+/** Words that end a loose gap and announce the same amount again. */
+const LEAD = String.raw`(?:or|i\.e\.,?|that is,?|that's|that’s|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|=|\(|—)`;
+const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}${S}*$`, 'iu');
+/** A loose gap: short, with no clause break that would end the thought (no other quantity: they are adjacent). */
+const LOOSE_GAP = /^[^;:!?]{0,60}$/u;
+/** A sentence that opens by restating: "That is 11,650 years BP", "On the BP scale, that's ...". */
+const OPENING = /^[^;!?]{0,80}$/u;
 
-/** A quantity and its restatement in another unit. */
+/** A quantity and its restatement in another unit; `loose` when words stand between them. */
 export interface Restatement {
   first: Quantity;
   second: Quantity;
+  loose: boolean;
 }
 
-/** Every adjacent pair of one dimension, in different stated units, joined as a restatement. */
-export function findRestatements(text: string, qs: Quantity[]): Restatement[] {
+/** The sentence before, for restatements that cross a sentence boundary. */
+export interface PreviousSentence {
+  text: string;
+  quantities: Quantity[];
+}
+
+const sameThing = (a: Quantity, b: Quantity): boolean =>
+  a.dimension === b.dimension || (a.dimension === 'concentration' && b.dimension === 'percent') || (a.dimension === 'percent' && b.dimension === 'concentration');
+
+/**
+ * Two dates a loose restatement could join: a slip moves a date by an era offset (50, 1,950 or
+ * 2,000 years), never to another order of magnitude. "Counts back from 1950, that's 11,750 years
+ * BP" names a reference year, not the date restated.
+ */
+function closeDates(a: Quantity, b: Quantity): boolean {
+  if (a.dimension !== 'age') return true;
+  const [x, y] = [Math.abs(a.value), Math.abs(b.value)].sort((m, n) => m - n) as [number, number];
+  return y <= 2 * x + 100;
+}
+
+/** The °F side of a °C ↔ °F pair is the conversion; otherwise the second one is. */
+function ordered(a: Quantity, b: Quantity, loose: boolean): Restatement {
+  return a.statedUnit === 'degF' && b.statedUnit !== 'degF' ? { first: b, second: a, loose } : { first: a, second: b, loose };
+}
+
+/** Every adjacent pair of one thing in different stated units, joined as a restatement. */
+export function findRestatements(text: string, qs: Quantity[], previous?: PreviousSentence): Restatement[] {
   const out: Restatement[] = [];
   for (let i = 0; i + 1 < qs.length; i++) {
     const first = qs[i] as Quantity;
     const second = qs[i + 1] as Quantity;
-    const sameThing = first.dimension === second.dimension || (first.dimension === 'concentration' && second.dimension === 'percent') || (first.dimension === 'percent' && second.dimension === 'concentration');
-    if (sameThing && first.statedUnit !== second.statedUnit && JOINER.test(text.slice(first.end, second.start))) out.push({ first, second });
+    if (!sameThing(first, second) || first.statedUnit === second.statedUnit) continue;
+    const gap = text.slice(first.end, second.start);
+    if (JOINER.test(gap)) out.push(ordered(first, second, false));
+    else if (LOOSE_GAP.test(gap) && LOOSE_END.test(gap) && closeDates(first, second)) out.push(ordered(first, second, true));
   }
-  return out;
+  const opening = previous === undefined ? undefined : acrossSentences(text, qs, previous, out);
+  return opening === undefined ? out : [...out, opening];
+}
+
+/**
+ * The first quantity of a sentence that opens by restating the last quantity of the sentence
+ * before ("... at 11,700 b2k. That is 11,650 years BP."). Words and a reference year may come
+ * first ("On the BP scale, which counts back from 1950, that's ..."), but no other candidate.
+ */
+function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentence, found: Restatement[]): Restatement | undefined {
+  const first = previous.quantities[previous.quantities.length - 1];
+  if (first === undefined) return undefined;
+  const second = qs.find((q) => sameThing(first, q) && closeDates(first, q));
+  if (second === undefined || first.statedUnit === second.statedUnit || found.some((r) => r.second === second || r.first === second)) return undefined;
+  const head = text.slice(0, second.start);
+  if (!OPENING.test(head) || !LOOSE_END.test(head)) return undefined;
+  // Only a number in this sentence can be flagged here, so it must be the conversion.
+  const pair = ordered(first, second, true);
+  return pair.second === second ? pair : undefined;
 }

@@ -1,15 +1,15 @@
 /**
  * The unit rules as data. Restated conversions (ppm ↔ %, °C ↔ °F for changes and for readings,
- * dates across eras, m ↔ ft) are compared as intervals in the canonical unit; two slips are caught
- * on their own: a CO2 level written as a percentage above 1 ("280 percent") and a CO2 level in ppm
- * below 1 ("0.04 ppm").
+ * dates across eras, m ↔ ft) are compared as intervals in the canonical unit; CO2 levels in the
+ * wrong unit are also caught on their own (units-co2-share.ts).
  */
-import { convert, formatQuantity } from '../quantities/index.js';
+import { afterMatcher, beforeMatcher } from '../quantities/reading-cues.js';
+import { convert, formatQuantity, TEMPERATURE_CUES } from '../quantities/index.js';
 import type { Dimension, Level, Quantity, Source } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
-import { isStatedChange } from './arithmetic-frames.js';
 import { B2K_CONVENTION, BP_CONVENTION, NIST_SP_811 } from './standard-sources.js';
-import { findRestatements } from './units-pairs.js';
+import { co2UnitSlips } from './units-co2-share.js';
+import { findRestatements, type PreviousSentence, type Restatement } from './units-pairs.js';
 
 /** A quantity whose unit use is in doubt, with the value it should have. */
 export interface UnitFinding {
@@ -26,33 +26,20 @@ export interface UnitFinding {
   sources: Source[];
 }
 
-/** One unit rule. */
+/** One unit rule: `previous` is the sentence before in the same paragraph, when known. */
 export interface UnitRule {
   id: string;
   summary: string;
-  find: (text: string, qs: Quantity[]) => UnitFinding[];
+  find: (text: string, qs: Quantity[], previous?: PreviousSentence) => UnitFinding[];
 }
 
 /** How far "years ago" may count from a year later than 1950: the present year, at most. */
 const YEARS_SINCE_1950 = Math.max(0, new Date().getUTCFullYear() - 1950);
-const CO2 = /(?:CO2|CO₂|carbon dioxide)/iu;
-const OTHER_GAS = /(?:methane|CH4|CH₄|nitrous|N2O|N₂O)/iu;
-const LEVEL_BEFORE = /(?:^|[^\p{L}])(?:at|of|reached|reaching|was|were|is|are|stood at|to|hit|peaked at|near|around|about|from|between|and)[\s\u00A0]*$/iu;
 
 /** The stated quantity as an interval, widened for "years ago" counted from a later year than 1950. */
 function heldAs(q: Quantity): Derived {
   const slack = q.statedUnit === 'yr ago' ? YEARS_SINCE_1950 : 0;
   return { value: q.value, low: q.low - slack, high: q.high };
-}
-
-function restated(dimensions: Dimension[], sources: (a: Quantity, b: Quantity) => Source[], why: (a: Quantity, b: Quantity) => string) {
-  return (text: string, qs: Quantity[]): UnitFinding[] =>
-    findRestatements(text, qs)
-      .filter(({ first, second }) => dimensions.includes(first.dimension) && dimensions.includes(second.dimension))
-      .map(({ first, second }) => {
-        const computed = second.dimension === first.dimension ? heldAs(first) : percentOf(first);
-        return { stated: { ...second, ...heldAs(second) }, computed, reason: why(first, second), sources: sources(first, second) };
-      });
 }
 
 /** A concentration as a percentage of the air, or a percentage as ppm: the other reading of `q`. */
@@ -61,23 +48,50 @@ function percentOf(q: Quantity): Derived {
   return { value: q.value * k, low: q.low * k, high: q.high * k };
 }
 
-function standaloneSlips(text: string, qs: Quantity[]): UnitFinding[] {
-  if (!CO2.test(text)) return [];
-  return qs.flatMap((q): UnitFinding[] => {
-    const before = text.slice(Math.max(0, q.start - 24), q.start);
-    const levelFrame = LEVEL_BEFORE.test(before) && !isStatedChange(text, q);
-    if (q.dimension === 'percent' && levelFrame && q.value > 1) {
-      return [{ stated: q, computed: { value: q.value, low: q.low, high: q.high }, unit: 'ppm', level: 'error', sources: [NIST_SP_811],
-        reason: `CO2 has never made up ${q.text} of the air; ${q.value} reads as a level in ppm (1% = 10,000 ppm).`,
-        correction: q.text.replace(/[\s\u00A0]*(?:%|per[\s\u00A0]?cent)$/iu, ' ppm') }];
-    }
-    if (q.dimension === 'concentration' && q.statedUnit === 'ppm' && levelFrame && q.high < 1 && !OTHER_GAS.test(text)) {
-      return [{ stated: q, computed: { value: q.value, low: q.low, high: q.high }, unit: '%', level: 'warning', sources: [NIST_SP_811],
-        reason: `A CO2 level of ${q.text} is far below any measured value; ${q.value} reads as a percentage of the air (${q.value}% = ${q.value * 1e4} ppm).`,
-        correction: q.text.replace(/[\s\u00A0]*(?:ppmv?|parts per million)$/iu, '%') }];
-    }
-    return [];
-  });
+const restatementsOf = (dimensions: Dimension[], text: string, qs: Quantity[], previous?: PreviousSentence): Restatement[] =>
+  findRestatements(text, qs, previous).filter(({ first, second }) => dimensions.includes(first.dimension) && dimensions.includes(second.dimension));
+
+type Keep = (text: string, r: Restatement) => boolean;
+
+function restated(dimensions: Dimension[], sources: (a: Quantity, b: Quantity) => Source[], why: (a: Quantity, b: Quantity) => string, keep: Keep = () => true) {
+  return (text: string, qs: Quantity[], previous?: PreviousSentence): UnitFinding[] =>
+    restatementsOf(dimensions, text, qs, previous).filter((r) => keep(text, r)).map(({ first, second }) => {
+      const computed = second.dimension === first.dimension ? heldAs(first) : percentOf(first);
+      return { stated: { ...second, ...heldAs(second) }, computed, reason: why(first, second), sources: sources(first, second) };
+    });
+}
+
+/** ppm ↔ % restatements, then CO2 levels in the wrong unit that no restatement covers. */
+function percentPpm(text: string, qs: Quantity[], previous?: PreviousSentence): UnitFinding[] {
+  const pairs = restatementsOf(['concentration', 'percent'], text, qs, previous);
+  const found = restated(['concentration', 'percent'], nist, () => '1% of the air is 10,000 ppm.')(text, qs, previous);
+  return [...found, ...co2UnitSlips(text, qs, new Set(pairs.flatMap((p) => [p.first, p.second])))];
+}
+
+const CHANGE_CUES = TEMPERATURE_CUES.filter((c) => c.reading === 'temperature-change');
+const CHANGE_BEFORE = CHANGE_CUES.filter((c) => c.where === 'before').map((c) => beforeMatcher(c.words));
+const CHANGE_AFTER = CHANGE_CUES.filter((c) => c.where === 'after').map((c) => afterMatcher(c.words));
+
+/**
+ * True when the words, not the default, make the pair a change: a change word before the first
+ * ("warmed by 5 °C (9 °F)") or after either ("6 °C (10.8 °F) colder"), or a leading +. A pair read
+ * as a change only for want of a cue ("the thermostat reads 68 °F (20 °C)") is left alone, since
+ * a correct reading conversion would look like the 32 slip.
+ */
+function cuedAsChange(text: string, { first, second }: Restatement): boolean {
+  const [a, b] = first.start < second.start ? [first, second] : [second, first];
+  const before = text.slice(Math.max(0, a.start - 48), a.start);
+  const afters = [a, b].map((q) => text.slice(q.end, q.end + 48).replace(/^[\s\u00A0]*[)\],]/u, ''));
+  return /^[+]/u.test(a.text) || CHANGE_BEFORE.some((re) => re.test(before)) || afters.some((t) => CHANGE_AFTER.some((re) => re.test(t)));
+}
+
+/** Says what a °F figure that added 32 to a change did, when that is what happened. */
+function temperatureChangeWhy(a: Quantity, b: Quantity): string {
+  const right = formatQuantity(a.value, 'K', 'degF');
+  const asReading = convert(a.value, 'degC', 'degF', 'temperature');
+  const added32 = b.statedUnit === 'degF' && Math.abs(b.value * 1.8 - asReading) <= Math.max(1, Math.abs(asReading) * 0.05);
+  const slip = added32 ? ` ${b.text} is ${a.text} converted as a reading (× 1.8 + 32).` : '';
+  return `A change of ${a.text} is a change of ${right}: differences convert by 9/5 alone; the 32 belongs to readings.${slip}`;
 }
 
 const nist = (): Source[] => [NIST_SP_811];
@@ -85,10 +99,10 @@ const eras = (a: Quantity, b: Quantity): Source[] => (a.statedUnit.includes('b2k
 
 /** The unit rule table. */
 export const UNIT_RULES: readonly UnitRule[] = [
-  { id: 'unit.percent-ppm', summary: 'A CO2 level restated between ppm and percent converts at 1% = 10,000 ppm.',
-    find: (text, qs) => [...restated(['concentration', 'percent'], nist, () => '1% of the air is 10,000 ppm.')(text, qs), ...standaloneSlips(text, qs)] },
+  { id: 'unit.percent-ppm', summary: 'A CO2 level restated between ppm and percent converts at 1% = 10,000 ppm; a CO2 share in percent is a level someone has measured.',
+    find: percentPpm },
   { id: 'unit.temperature-difference', summary: 'A temperature change restated in °F is 1.8 times the change in °C or K, with no 32 added.',
-    find: restated(['temperature-change'], nist, (a) => `A change of ${a.text} is a change of ${formatQuantity(a.value, 'K', 'degF')}: differences convert by 9/5 alone; the 32 belongs to readings.`) },
+    find: restated(['temperature-change'], nist, temperatureChangeWhy, cuedAsChange) },
   { id: 'unit.temperature', summary: 'A temperature reading restated in °F is 1.8 × °C + 32.',
     find: restated(['temperature'], nist, () => 'A temperature reading converts as °F = 1.8 × °C + 32.') },
   { id: 'unit.age-era', summary: 'A date restated in another era converts through years before AD 1950 (BP); b2k counts from AD 2000; there is no year 0.',

@@ -4,21 +4,27 @@
  * the wrong unit. Each flag carries the right value in the correction and cites the definition
  * (NIST SP 811 for factors; Stuiver & Polach 1977 for BP; Walker et al. 2009 for b2k).
  */
-import { formatQuantity } from '../quantities/index.js';
+import { correctionFigures, formatQuantity, parseQuantities } from '../quantities/index.js';
 import type { FlagDraft, Quantity } from '../types.js';
 import { correctionFor } from './arithmetic.js';
 import { disjoint, levelFor } from './arithmetic-levels.js';
 import { UNIT_RULES } from './units-rules.js';
 
-/** Every unit slip in one sentence. */
-export function checkUnits(text: string, quantities: Quantity[]): FlagDraft[] {
+/**
+ * Every unit slip in one sentence. `context` is the sentences before it in the same paragraph, in
+ * order; the last one is read for a date or level that this sentence restates ("... at 11,700
+ * b2k. That is 11,650 years BP."). Flags always fall on this sentence's own words.
+ */
+export function checkUnits(text: string, quantities: Quantity[], context: readonly string[] = []): FlagDraft[] {
+  const last = context[context.length - 1];
+  const previous = last === undefined ? undefined : { text: last, quantities: parseQuantities(last) };
   const flags: FlagDraft[] = [];
   for (const rule of UNIT_RULES) {
-    for (const f of rule.find(text, quantities)) {
+    for (const f of rule.find(text, quantities, previous)) {
       const single = f.level !== undefined;
       if (!single && !disjoint(f.stated, f.computed)) continue;
       const q: Quantity = f.stated;
-      const right = single ? (f.correction ?? q.text) : formatQuantity(f.computed.value, q.unit, q.statedUnit);
+      const right = single ? (f.correction ?? q.text) : formatQuantity(f.computed.value, q.unit, q.statedUnit, correctionFigures(q));
       flags.push({
         ruleId: rule.id,
         level: f.level ?? levelFor(q, f.computed),

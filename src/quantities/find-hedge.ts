@@ -22,6 +22,9 @@ const byLength = (a: string, b: string): number => b.length - a.length;
 const SUFFIXES = HEDGE_WORDS.filter((w) => w.startsWith('or ')).sort(byLength);
 const PREFIXES = HEDGE_WORDS.filter((w) => !w.startsWith('or ')).sort(byLength);
 
+/** Every hedge word written before a number, longest first, as a regular-expression alternation. */
+export const HEDGE_PREFIX_PATTERN = PREFIXES.map(escape).join('|');
+
 const BEFORE = new RegExp(String.raw`(?:^|(?<=[^\p{L}\p{N}]))(?<word>${PREFIXES.map(escape).join('|')})[\s\u00A0]*$`, 'iu');
 const AFTER = new RegExp(String.raw`^[\s\u00A0]*,?[\s\u00A0]*(?<word>${SUFFIXES.map(escape).join('|')})(?![\p{L}])`, 'iu');
 const PLACE_WORDS = /^(?:over|under|below|above)$/i;

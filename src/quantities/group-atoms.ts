@@ -6,7 +6,7 @@
  * A number with no unit of its own takes its partner's unit and scale ("7-8 thousand years").
  */
 import type { Atom } from './find-atoms.js';
-import { INTERVAL_RULES } from './interval-rules.js';
+import { HEDGE_PREFIX_PATTERN } from './find-hedge.js';
 import { matchUnit, type UnitMatch } from './match-unit.js';
 import { isCalendarCue, isLabelCue } from './reading-cues.js';
 
@@ -28,19 +28,13 @@ export interface Group {
 }
 
 const S = String.raw`[\s\u00A0]`;
-const HEDGE_PREFIXES = INTERVAL_RULES.filter((r) => r.kind === 'hedge')
-  .flatMap((r) => r.words)
-  .filter((w) => !w.startsWith('or '))
-  .sort((a, b) => b.length - a.length)
-  .map((w) => w.replace(/[.*+?^${}()|[\]\\]/g, '\\$&').replace(/ /g, `${S}+`))
-  .join('|');
 const PLUS_MINUS = new RegExp(String.raw`^${S}*(?:±|\+\/-|\+\/−)${S}*$`, 'u');
 const RANGE_JOIN = new RegExp(String.raw`^(?:${S}*(?:to|through|until|till)${S}+|-|${S}*[–—]${S}*)$`, 'iu');
 const AND_JOIN = new RegExp(String.raw`^${S}+and${S}+$`, 'iu');
 const BETWEEN = new RegExp(String.raw`(?:^|[^\p{L}])(?<word>between)${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
 const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
 /** "to about", "to more than": the far end of a from-to pair may carry its own hedge (a range may not). */
-const TO_HEDGED = new RegExp(String.raw`^${S}*(?:to|through|until|till)${S}+(?:${HEDGE_PREFIXES})${S}*$`, 'iu');
+const TO_HEDGED = new RegExp(String.raw`^${S}*(?:to|through|until|till)${S}+(?:${HEDGE_PREFIX_PATTERN})${S}*$`, 'iu');
 const RANGE_VERB = new RegExp(String.raw`(?:rang(?:e|es|ed|ing)|var(?:y|ies|ied|ying)|anywhere|estimates?)${S}+from${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
 
 const joinable = (a: Atom): boolean => a.form === 'digits' || a.form === 'words';

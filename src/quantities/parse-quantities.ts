@@ -8,7 +8,7 @@
 import type { Dimension, Quantity } from '../types.js';
 import { toCanonical } from './convert.js';
 import { findAtoms } from './find-atoms.js';
-import { hedgeAfter, hedgeBefore, type HedgeMatch } from './find-hedge.js';
+import { HEDGE_PREFIX_PATTERN, hedgeAfter, hedgeBefore, type HedgeMatch } from './find-hedge.js';
 import { groupParts, partsOf, type Group } from './group-atoms.js';
 import { applyRule, intervalRule } from './interval-rules.js';
 import { isCalendarCue, readKiloAnnum, readTemperature } from './reading-cues.js';
@@ -16,7 +16,11 @@ import { CANONICAL_UNIT, UNIT_TABLE, type UnitDef } from './unit-table.js';
 
 const S = String.raw`[\s\u00A0]`;
 const AD_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?<ad>AD|A\.D\.)${S}*$`, 'u');
-const EQUIVALENT = new RegExp(String.raw`^${S}*(?:\(|,?${S}*or${S}+|\/|,?${S}*i\.e\.,?${S}*|=${S}*|,${S}*)$`, 'iu');
+/** Words that restate the quantity before in another unit ("5 °C (about 9 °F)", "3 °C, which is 5.4 °F"). */
+const EQUIVALENT = new RegExp(
+  String.raw`^${S}*(?:\(|,?${S}*or${S}+|\/|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|,?${S}*that['’]s${S}+|,?${S}*which is${S}+|,?${S}*in other words,?${S}*|=${S}*|,${S}*)(?:(?:${HEDGE_PREFIX_PATTERN})${S}*)?$`,
+  'iu',
+);
 const CE = UNIT_TABLE.find((d) => d.id === 'CE') as UnitDef;
 const NUMBER = UNIT_TABLE.find((d) => d.dimension === 'number') as UnitDef;
 const RATIO = UNIT_TABLE.find((d) => d.dimension === 'ratio') as UnitDef;

@@ -18,7 +18,7 @@ export interface Cue {
 export const TEMPERATURE_CUES: readonly Cue[] = [
   { reading: 'temperature-change', where: 'after', words: ['warmer', 'cooler', 'colder', 'hotter', 'higher', 'lower', 'rise', 'increase', 'drop', 'fall', 'decline', 'change', 'shift', 'difference', 'swing', 'warming', 'cooling', 'anomaly', 'above', 'below', 'more', 'less', 'of warming', 'of cooling', 'amplitude'] },
   { reading: 'temperature-change', where: 'before', words: ['by', 'warmed', 'cooled', 'rose', 'fell', 'dropped', 'climbed', 'increased', 'decreased', 'changed', 'rise of', 'drop of', 'fall of', 'change of', 'increase of', 'decrease of', 'swing of', 'difference of', 'warming of', 'cooling of', 'anomaly of', 'amplitude of', 'shift of', 'a', 'an'] },
-  { reading: 'temperature', where: 'before', words: ['was', 'were', 'is', 'are', 'at', 'reach', 'reaches', 'reached', 'hit', 'hits', 'averaged', 'averages', 'stood at', 'of', 'to', 'from', 'between', 'minus'] },
+  { reading: 'temperature', where: 'before', words: ['was', 'were', 'is', 'are', 'at', 'reach', 'reaches', 'reached', 'hit', 'hits', 'averaged', 'averages', 'stood at', 'of', 'to', 'from', 'between', 'minus', 'reads', 'read', 'registered', 'recorded'] },
 ];
 
 /**

@@ -1,0 +1,100 @@
+/**
+ * CO2 levels written in the wrong unit, caught on their own (with no restatement beside them):
+ *   "CO2 is [0.4 percent] of the air"   → 4,000 ppm, never measured: 0.04 percent;
+ *   "CO2 stood at [280 percent]"        → a level in ppm written as a percentage: 280 ppm;
+ *   "CO2 was [0.028 ppm]"               → a percentage written as ppm: 0.028%.
+ * A percentage is a CO2 share only when the nearest gas named before it is CO2 and the words
+ * around it state a level ("is", "made up", "of the air"), not a change, a rate or a share of
+ * something else ("30 percent of emissions").
+ */
+import { formatNumber, rewriteQuantity } from '../quantities/index.js';
+import type { Quantity } from '../types.js';
+import { comparesToNext, isStatedChange } from './arithmetic-frames.js';
+import { LUTHI_2008, NIST_SP_811, NOAA_2024 } from './standard-sources.js';
+import type { UnitFinding } from './units-rules.js';
+
+/**
+ * Every CO2 level a draft on ice ages can mean, in ppm: below the 800,000-year ice-core minimum
+ * (172 ppm, Lüthi et al. 2008) and far above today's global mean (419.3 ppm in 2023, NOAA), with
+ * room for emission scenarios (1,000 ppm). A share outside it is a slip of a power of ten.
+ */
+export const PLAUSIBLE_CO2_PPM = { low: 150, high: 2000 } as const;
+
+const PPM_PER_PERCENT = 1e4;
+/**
+ * Deep time, before the ice ages began (2.58 million years ago, the base of the Quaternary): CO2
+ * was far higher in some of it, so a large share there is a claim for the reference values, not a
+ * unit slip. Named periods, "millions of years ago", or a date before the Quaternary.
+ */
+const DEEP_TIME = /(?:Pliocene|Miocene|Oligocene|Eocene|Palaeocene|Paleocene|PETM|Cretaceous|Jurassic|Triassic|Permian|Carboniferous|Devonian|Silurian|Ordovician|Cambrian|Mesozoic|Paleozoic|Palaeozoic|Cenozoic|dinosaurs?|million[\s\u00A0]+years[\s\u00A0]+ago)/iu;
+const QUATERNARY_BASE_YR = 2.58e6;
+const S = String.raw`[\s\u00A0]`;
+const CO2 = /(?:CO2|CO₂|carbon dioxide)/iu;
+const GAS = /(?<co2>CO2|CO₂|carbon[\s\u00A0]+dioxide)|methane|CH4|CH₄|nitrous[\s\u00A0]+oxide|N2O|N₂O|nitrogen|oxygen|argon|water[\s\u00A0]+vapou?r|ozone|neon|helium|hydrogen/giu;
+const OTHER_GAS = /(?:methane|CH4|CH₄|nitrous|N2O|N₂O)/iu;
+const AIR = String.raw`(?:the${S}+|today's${S}+|today’s${S}+|Earth's${S}+|Earth’s${S}+|dry${S}+)?(?:air|atmosphere)`;
+const SHARE_AFTER = new RegExp(String.raw`^${S}*(?:of${S}+${AIR}|by${S}+volume)`, 'iu');
+const OF_SOMETHING_ELSE = new RegExp(String.raw`^${S}*of(?!${S}+${AIR})(?![\p{L}])`, 'iu');
+const RATE_AFTER = new RegExp(String.raw`^${S}*(?:(?:per|a|an|each|every)${S}+(?:year|decade|century|annum|millennium)|annually|yearly)`, 'iu');
+const LEVEL_BEFORE = new RegExp(
+  String.raw`(?:^|[^\p{L}])(?:at|of|reached|reaching|was|were|is|are|stood${S}+at|to|hit|peaked${S}+at|near|around|about|from|between|and|made${S}+up|makes${S}+up|make${S}+up|only|just|holds|held|forms|comprises|constitutes|amounts${S}+to|accounts${S}+for)${S}*$`,
+  'iu',
+);
+
+/** True when the nearest gas named before `at` is CO2. */
+function nearestGasIsCo2(text: string, at: number): boolean {
+  const named = [...text.slice(0, at).matchAll(GAS)];
+  return named[named.length - 1]?.groups?.['co2'] !== undefined;
+}
+
+/** True when percentage `q` states CO2's share of the air. */
+function isCo2Share(text: string, q: Quantity): boolean {
+  const before = text.slice(Math.max(0, q.start - 24), q.start);
+  const after = text.slice(q.end, q.end + 40);
+  if (isStatedChange(text, q) || comparesToNext(text, q) || RATE_AFTER.test(after) || OF_SOMETHING_ELSE.test(after)) return false;
+  return nearestGasIsCo2(text, q.start) && (SHARE_AFTER.test(after) || LEVEL_BEFORE.test(before));
+}
+
+/** The power of ten, nearest first, that brings `ppm` into the plausible range (0 when none does). */
+function nearestPlausible(ppm: number): number {
+  const inRange = (x: number): boolean => x >= PLAUSIBLE_CO2_PPM.low && x <= PLAUSIBLE_CO2_PPM.high;
+  return [-1, 1, -2, 2, -3, 3, -4, 4].find((k) => inRange(ppm * 10 ** k)) ?? 0;
+}
+
+function percentSlip(q: Quantity): UnitFinding | undefined {
+  const ppm = q.value * PPM_PER_PERCENT;
+  if (ppm >= PLAUSIBLE_CO2_PPM.low && ppm <= PLAUSIBLE_CO2_PPM.high) return undefined;
+  const sources = [NIST_SP_811, LUTHI_2008, NOAA_2024];
+  const range = `${PLAUSIBLE_CO2_PPM.low}-${formatNumber(PLAUSIBLE_CO2_PPM.high)} ppm`;
+  if (q.value >= PLAUSIBLE_CO2_PPM.low && q.value <= PLAUSIBLE_CO2_PPM.high) {
+    return { stated: q, computed: { value: q.value, low: q.low, high: q.high }, unit: 'ppm', level: 'error', sources,
+      reason: `CO2 has never made up ${q.text} of the air; ${q.value} reads as a level in ppm (1% = 10,000 ppm).`,
+      correction: q.text.replace(/[\s\u00A0]*(?:%|per[\s\u00A0]?cent)$/iu, ' ppm') };
+  }
+  const k = nearestPlausible(ppm);
+  if (k === 0) return undefined;
+  const value = q.value * 10 ** k;
+  const correction = rewriteQuantity(q, value);
+  return { stated: q, computed: { value, low: q.low * 10 ** k, high: q.high * 10 ** k }, level: 'error', sources, correction,
+    reason: `${q.text} of the air would be ${formatNumber(ppm)} ppm of CO2 (1% = 10,000 ppm), outside every level measured or projected (${range}: 172-300 ppm in 800,000 years of ice cores, about 420 ppm today); ${correction} is ${formatNumber(value * PPM_PER_PERCENT)} ppm.` };
+}
+
+/** CO2 levels in the wrong unit, except the quantities in `restated` (the restatement check has them). */
+export function co2UnitSlips(text: string, qs: Quantity[], restated: ReadonlySet<Quantity>): UnitFinding[] {
+  if (!CO2.test(text)) return [];
+  const deepTime = DEEP_TIME.test(text) || qs.some((q) => q.dimension === 'age' && q.low >= QUATERNARY_BASE_YR);
+  return qs.flatMap((q): UnitFinding[] => {
+    if (restated.has(q)) return [];
+    if (q.dimension === 'percent') {
+      const slip = isCo2Share(text, q) && !deepTime ? percentSlip(q) : undefined;
+      return slip === undefined ? [] : [slip];
+    }
+    const before = text.slice(Math.max(0, q.start - 24), q.start);
+    if (q.dimension === 'concentration' && q.statedUnit === 'ppm' && LEVEL_BEFORE.test(before) && !isStatedChange(text, q) && q.high < 1 && !OTHER_GAS.test(text)) {
+      return [{ stated: q, computed: { value: q.value, low: q.low, high: q.high }, unit: '%', level: 'warning', sources: [NIST_SP_811],
+        reason: `A CO2 level of ${q.text} is far below any measured value; ${q.value} reads as a percentage of the air (${q.value}% = ${formatNumber(q.value * PPM_PER_PERCENT)} ppm).`,
+        correction: q.text.replace(/[\s\u00A0]*(?:ppmv?|parts per million)$/iu, '%') }];
+    }
+    return [];
+  });
+}
