@@ -207,5 +207,8 @@ export const LABELLED_SET: LabelledSentence[] = [
   s('At Halden the panel says CO2 went from about 185 to about 290 ppm.', ppm('about 185', 166, 204), ppm('about 290 ppm', 256, 324)),
   s('The Northmoor log has CO2 going from 190 to nearly 300 ppm.', ppm('190', 185, 195), ppm('nearly 300 ppm', 270, 300)),
   // A calendar year is a date, not the low end of a ppm range: "in 1850 to 300 ppm" is two things.
+  // A °F figure after "that is" or "which is" is a difference when its partner is (NIST SP 811: °F interval = 5/9 K).
+  s('The Halden guide puts the ice-age world about 6 °C colder than before industry, that is, roughly 43 °F colder.', dT('about 6 °C', 4.9, 7.1), dT('roughly 43 °F', (42.5 * 5) / 9 - (43 * 5) / 90, (43.5 * 5) / 9 + (43 * 5) / 90)),
+  s('The tropics cooled by 3 °C, which is 5.4 °F.', dT('3 °C', 2.5, 3.5), dT('5.4 °F', (5.35 * 5) / 9, (5.45 * 5) / 9)),
   s('Firn & Flux charts CO2 from 285 ppm in 1850 to 300 ppm in 1910.', ppm('285 ppm', 284.5, 285.5), age('1850', 99.5, 100.5), ppm('300 ppm', 295, 305), age('1910', 39.5, 40.5)),
 ];
