@@ -128,7 +128,8 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     sentences.forEach((sentence, index) => {
       if (!topic.test(sentence.text)) return;
       const quantities = parseQuantities(sentence.text);
-      const { bindings } = bindQuantities(sentence.text, quantities, packs);
+      // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
+      const { bindings } = bindQuantities(sentence.text, quantities, packs, paragraph[index - 1]);
       const reference = checkReferences(sentence.text, quantities, bindings, packs);
       const drafts: FlagDraft[] = preferSpecific([
         ...reference.flags,

@@ -1,23 +1,28 @@
 /**
  * Binds each quantity in a sentence to the reference value it speaks about. A value is a candidate
- * when the sentence has a word of every one of its term groups, none of its veto terms, and the
- * quantity's dimension is one the value accepts. Among candidates the one whose terms stand nearest
- * the quantity wins, a clause boundary counting as far; a tie binds nothing (the quantity is listed
- * as ambiguous and goes to the checklist instead of raising a flag).
+ * when the quantity's words (its view of the sentence, bind-view.ts) have a word of every one of
+ * its term groups and none of its veto terms, the quantity's dimension is one the value accepts,
+ * and its role (level or change, bind-role.ts) is one the value accepts. Among candidates the one
+ * whose terms stand nearest the quantity wins, a clause boundary counting as far; a tie binds
+ * nothing (the quantity is listed as ambiguous and goes to the checklist instead of raising a flag).
+ * Numbers in a parallel list bind in order or not at all (bind-list.ts); a quantity with no
+ * candidate may take its subject from the previous sentence of the paragraph (bind-context.ts).
  *
  *   "Vostok reaches back 420,000 years and EPICA Dome C 800,000 years"
  *    ^^^^^^ ─────────── 420,000 ──┘      ^^^^^^^^^^^^ ─── 800,000 (each binds its nearest core)
  */
-import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
+import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
+import { bindFromContext } from './bind-context.js';
+import { bindList, parallelLists } from './bind-list.js';
+import { nearness, satisfies } from './bind-match.js';
+import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
+import { clauseBreaks, termViews, type TermHits } from './bind-view.js';
 
-/** Characters added to a distance for each clause boundary between a term and the quantity. */
-const CLAUSE_PENALTY = 1000;
-const CLAUSE_BREAK = /[;:,()–—]|\b(?:and|but|while|whereas|although|though|versus|vs\.?|compared with)\b/giu;
+export type { TermHits } from './bind-view.js';
 
-/** Where each term of the packs appears in a sentence: term id → [start, end) spans. */
-export type TermHits = Map<string, [number, number][]>;
-
+/** A quantity whose best values tie: it binds nothing and goes to the checklist. */
+const AMBIGUOUS = 'ambiguous';
 const compiled = new WeakMap<object, Map<string, RegExp>>();
 
 /** Finds every term occurrence (case-insensitive, on word boundaries) in `sentence`. */
@@ -40,45 +45,48 @@ function termRegex(words: string[]): RegExp {
   return new RegExp(`(^|[^\\p{L}\\p{N}])(?:${escaped.join('|')})(?![\\p{L}\\p{N}])`, 'giu');
 }
 
-/** Binds `quantities` (parsed from `sentence`) to reference values of `packs`. */
-export function bindQuantities(sentence: string, quantities: Quantity[], packs: LoadedPacks): { bindings: Binding[]; ambiguous: number[] } {
-  const hits = findTerms(sentence, packs);
-  const breaks = [...sentence.matchAll(CLAUSE_BREAK)].map((m) => m.index);
-  const candidates = packs.references.filter((r) => satisfies(r, hits));
-  const bindings: Binding[] = [];
-  const ambiguous: number[] = [];
-  quantities.forEach((q, quantityIndex) => {
-    const scored = candidates
-      .filter((r) => r.dimensions.includes(q.dimension))
-      .map((r) => ({ r, score: nearness(r, hits, q, breaks) }))
+/**
+ * Binds `quantities` (parsed from `sentence`) to reference values of `packs`. `context` is the
+ * previous sentence of the same paragraph, if any: its terms may name the subject of a quantity
+ * that has no candidate in its own sentence.
+ */
+export function bindQuantities(sentence: string, quantities: Quantity[], packs: LoadedPacks, context?: string): { bindings: Binding[]; ambiguous: number[] } {
+  const pairs = endpointPairs(sentence, quantities);
+  const roles = quantityRoles(sentence, quantities);
+  const lists = parallelLists(sentence, quantities, pairs);
+  const views = termViews(sentence, quantities, findTerms(sentence, packs), pairs, lists);
+  const breaks = clauseBreaks(sentence);
+  // Per quantity: the value it binds, AMBIGUOUS, or null when its list left it unbound.
+  const decided = new Map<number, string | null>();
+  for (const list of lists) {
+    const outcome = bindList(list, quantities, roles, views, packs.references);
+    if (outcome === undefined) continue;
+    for (const i of list) decided.set(i, outcome.ambiguous.includes(i) ? AMBIGUOUS : null);
+    for (const b of outcome.bindings) decided.set(b.quantityIndex, b.referenceId);
+  }
+  let contextHits: TermHits | undefined;
+  quantities.forEach((q, i) => {
+    if (decided.has(i)) return;
+    const view = views[i] as TermHits;
+    const role = roles[i] ?? 'unknown';
+    const scored = packs.references
+      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view))
+      .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
       .sort((a, b) => a.score - b.score);
     const [best, next] = scored;
-    if (best === undefined) return;
-    if (next !== undefined && next.score === best.score) ambiguous.push(quantityIndex);
-    else bindings.push({ quantityIndex, referenceId: best.r.id });
+    if (best !== undefined) decided.set(i, next !== undefined && next.score === best.score ? AMBIGUOUS : best.r.id);
+    // A calendar year ("before the year 2000") dates the sentence; it takes no subject from the one before.
+    else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE') {
+      contextHits ??= findTerms(context, packs);
+      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks);
+      if (found !== undefined) decided.set(i, found);
+    }
+  });
+  const bindings: Binding[] = [];
+  const ambiguous: number[] = [];
+  [...decided].sort(([a], [b]) => a - b).forEach(([quantityIndex, found]) => {
+    if (found === AMBIGUOUS) ambiguous.push(quantityIndex);
+    else if (found !== null) bindings.push({ quantityIndex, referenceId: found });
   });
   return { bindings, ambiguous };
-}
-
-function satisfies(r: ReferenceValue, hits: TermHits): boolean {
-  return r.binding.all.every((group) => group.some((id) => hits.has(id))) && !r.binding.none.some((id) => hits.has(id));
-}
-
-/** Sum over term groups of the distance from the quantity to the group's nearest term. */
-function nearness(r: ReferenceValue, hits: TermHits, q: Quantity, breaks: number[]): number {
-  let total = 0;
-  for (const group of r.binding.all) {
-    let nearest = Infinity;
-    for (const id of group) {
-      for (const [start, end] of hits.get(id) ?? []) nearest = Math.min(nearest, distance(start, end, q, breaks));
-    }
-    total += nearest;
-  }
-  return total;
-}
-
-function distance(start: number, end: number, q: Quantity, breaks: number[]): number {
-  const [from, to] = end <= q.start ? [end, q.start] : start >= q.end ? [q.end, start] : [0, 0];
-  const crossed = breaks.filter((b) => b >= from && b < to).length;
-  return to - from + crossed * CLAUSE_PENALTY;
 }

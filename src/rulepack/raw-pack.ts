@@ -22,7 +22,7 @@ export interface RawReferenceValue {
   central?: number;
   unit: string;
   also_as?: Dimension[];
-  binds_when: { all: string[][]; none?: string[] };
+  binds_when: { all: string[][]; none?: string[]; role?: 'level' | 'change' | 'any' };
   correction: string;
   levels?: Partial<Record<Level, number>>;
   as_of?: string;

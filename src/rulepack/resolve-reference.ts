@@ -43,7 +43,11 @@ export function resolveReference(scope: PackScope, raw: RawReferenceValue, path:
     low,
     high,
     unit: CANONICAL_UNITS[def.dimension],
-    binding: { all: raw.binds_when.all, none: raw.binds_when.none ?? [] },
+    binding: {
+      all: raw.binds_when.all,
+      none: raw.binds_when.none ?? [],
+      ...(raw.binds_when.role === undefined || raw.binds_when.role === 'any' ? {} : { role: raw.binds_when.role }),
+    },
     wording: raw.correction,
     levels: raw.levels ?? DEFAULT_LEVELS,
     sources,

@@ -13,12 +13,20 @@ export interface Term {
   words: string[];
 }
 
+/**
+ * The part a number plays in its sentence: a `level` (a value at a time, "stood at 190 ppm", either
+ * end of "from 190 to 280 ppm") or a `change` (a difference, "rose by 80 ppm", "a rise of 80 ppm").
+ */
+export type QuantityRole = 'level' | 'change';
+
 /** Which sentences a reference value speaks about, in term ids. */
 export interface TermBinding {
   /** Every group must be satisfied; a group is satisfied when any one of its term ids appears. */
   all: string[][];
   /** Term ids that veto the binding when any of them appears. */
   none: string[];
+  /** The only role of number the value binds (absent: any role). */
+  role?: QuantityRole;
 }
 
 /**

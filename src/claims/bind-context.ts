@@ -1,0 +1,69 @@
+/**
+ * Subjects named one sentence back. Drafts often name a subject and give its number in the next
+ * sentence of the same paragraph:
+ *
+ *   "The GRIP team drilled at Summit. They drilled down just over 2,000 metres."
+ *        ^^^^ ──────────────────────────────────────────────────── 2,000 metres (GRIP depth)
+ *
+ * Only a quantity with no candidate in its own sentence looks back; only when its sentence refers
+ * back with a pronoun ("they", "it", "its"...), as a sentence that takes its subject from the one
+ * before does (a sentence that names its own subject, "The EPICA Dome C core, 560 km away, ...", does
+ * not look back); and only when its own words name no other subject: every term it can see that
+ * some value binds on must serve the value, unless it is the baseline of a comparison ("colder than
+ * in pre-industrial times"). The previous sentence may fill the groups the quantity's own sentence
+ * lacks, never lift a veto; a group filled from there counts as far. Two values reachable this way
+ * with the same score tie, and bind nothing.
+ */
+import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
+import type { Quantity } from '../types.js';
+import { nearness } from './bind-match.js';
+import { roleFits, type ReadRole } from './bind-role.js';
+import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
+
+/** What a group filled from the previous sentence adds to a value's distance. */
+export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
+const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her)(?![\p{L}])/iu;
+const BASELINE = /(?:^|[^\p{L}])than(?:\s+[\p{L}-]+){0,2}\s*$/iu;
+
+const bindingTerms = new WeakMap<object, Set<string>>();
+
+/** The reference value the previous sentence's terms let the quantity bind, `ambiguous`, or undefined. */
+export function bindFromContext(
+  sentence: string,
+  q: Quantity,
+  role: ReadRole,
+  view: TermHits,
+  context: TermHits,
+  packs: LoadedPacks,
+  breaks: number[],
+): string | 'ambiguous' | undefined {
+  if (!REFERS_BACK.test(sentence)) return undefined;
+  const own = subjectTerms(sentence, view, packs);
+  const scored = packs.references
+    .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role))
+    .filter((r) => !r.binding.none.some((id) => view.has(id)) && own.every((id) => r.binding.all.some((g) => g.includes(id))))
+    .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))))
+    .map((r) => ({ r, score: scoreWithContext(r, view, q, breaks) }))
+    .sort((a, b) => a.score - b.score);
+  const [best, next] = scored;
+  if (best === undefined) return undefined;
+  return next !== undefined && next.score === best.score ? 'ambiguous' : best.r.id;
+}
+
+/** The terms a quantity sees that some value binds on, leaving out the baselines of comparisons. */
+function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks): string[] {
+  let binding = bindingTerms.get(packs);
+  if (binding === undefined) {
+    binding = new Set(packs.references.flatMap((r) => r.binding.all.flat()));
+    bindingTerms.set(packs, binding);
+  }
+  const used = binding;
+  return [...view].filter(([id, spans]) => used.has(id) && spans.some(([start]) => !BASELINE.test(sentence.slice(Math.max(0, start - 40), start)))).map(([id]) => id);
+}
+
+/** Own groups count by nearness; a group only the previous sentence fills counts `CONTEXT_PENALTY`. */
+function scoreWithContext(r: ReferenceValue, view: TermHits, q: Quantity, breaks: number[]): number {
+  const ownGroups = r.binding.all.filter((g) => g.some((id) => view.has(id)));
+  const fromContext = r.binding.all.length - ownGroups.length;
+  return nearness({ ...r, binding: { ...r.binding, all: ownGroups } }, view, q, breaks) + fromContext * CONTEXT_PENALTY;
+}

@@ -1,0 +1,72 @@
+/**
+ * The part a number plays in its sentence, read from the words around it: a `level` (a value at a
+ * time: an endpoint of "from X to Y" or "between X and Y", "fell to X", "stood at X") or a `change`
+ * (a difference: "rose by X", "a rise of X", "an X swing"). A reference value may accept only one
+ * role, so the two endpoints of a rise never bind to the size of the rise, nor the rise to a level.
+ *
+ *   "CO2 rose by roughly 80 ppm, from about 190 ppm to about 270 ppm"
+ *                 └ change ┘        └ level ┘      └ level ┘
+ */
+import type { QuantityRole } from '../rulepack/types.js';
+import type { Quantity } from '../types.js';
+
+/** What the words around a quantity say it is; `unknown` binds to values of either role. */
+export type ReadRole = QuantityRole | 'unknown';
+
+/** Two quantities that are the endpoints of one "from X to Y" or "between X and Y". */
+export interface EndpointPair {
+  first: number;
+  second: number;
+  /** Where the joining word ("to", "and", a dash) starts: words before it speak of `first`. */
+  join: number;
+}
+
+const CHANGE_NOUNS = 'rise|rises|increase|increases|drop|drops|fall|falls|decline|decrease|swing|swings|amplitude|change|jump|step|gain|growth|difference';
+const CHANGE_VERBS = 'rose|rise|rises|risen|rising|fell|falls|fallen|falling|dropped|dropping|climbed|climbing|jumped|increased|decreased|declined|grew|gained|up';
+/** Change words just before the quantity: "by", "a rise of", "the swing was", "rose", "fell", "up". */
+const CHANGE_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:by|(?:${CHANGE_NOUNS})\s+(?:of|was|is|were|came to|amounted to)|${CHANGE_VERBS})\s*$`, 'iu');
+/** Change words just after the quantity: "an 80 ppm rise", "90 ppm higher", "130 metres above the lake". */
+const CHANGE_AFTER = /^[\s-]*(?:rise|increase|drop|fall|decline|swing|jump|step|gain|higher|lower|more|less|greater|smaller|above|below|beneath|short of|deeper|shallower)(?![\p{L}])/iu;
+/** Level words just before the quantity: "fell to", "stood at", "reached", "from". */
+const LEVEL_BEFORE = /(?:^|[^\p{L}])(?:from|to|at|between|reached|reaching|hovered around)\s*$/iu;
+/** A bound read as a place on the scale: "never rose above 300 ppm", "fell below 200 ppm". */
+const LEVEL_HEDGE = /^(?:above|below|beyond|past|under)(?![\p{L}])/iu;
+/** "over" after a change verb may be either: "rose over 80 ppm" (a change) or "never rose over 300 ppm" (a level). */
+const EITHER_HEDGE = /^over(?![\p{L}])/iu;
+const PAIR_OPEN = /(?:^|[^\p{L}])(?:from|between)\s*$/iu;
+/** What may stand between two endpoints: a few words without a sentence break, then the joining word. */
+const PAIR_JOIN = /^[^;.!?]{0,80}?(?:(?:^|\s)(?:to|and)|[–—-])\s*$/iu;
+const JOIN_WORD = /(?:to|and|[–—-])$/iu;
+
+/** The endpoint pairs of a sentence: consecutive quantities joined by from…to or between…and. */
+export function endpointPairs(sentence: string, quantities: Quantity[]): EndpointPair[] {
+  const pairs: EndpointPair[] = [];
+  for (let first = 0; first + 1 < quantities.length; first++) {
+    const a = quantities[first] as Quantity;
+    const b = quantities[first + 1] as Quantity;
+    const between = sentence.slice(a.end, b.start);
+    if (!PAIR_OPEN.test(sentence.slice(Math.max(0, a.start - 20), a.start)) || !PAIR_JOIN.test(between)) continue;
+    const trimmed = between.trimEnd();
+    const join = JOIN_WORD.exec(trimmed);
+    pairs.push({ first, second: first + 1, join: a.end + (join === null ? trimmed.length : join.index) });
+  }
+  return pairs;
+}
+
+/** The role of each quantity, in order. */
+export function quantityRoles(sentence: string, quantities: Quantity[]): ReadRole[] {
+  const endpoints = new Set(endpointPairs(sentence, quantities).flatMap((p) => [p.first, p.second]));
+  return quantities.map((q, i) => {
+    const before = sentence.slice(Math.max(0, q.start - 40), q.start);
+    if (LEVEL_HEDGE.test(q.text)) return 'level';
+    if (CHANGE_BEFORE.test(before)) return EITHER_HEDGE.test(q.text) ? 'unknown' : 'change';
+    if (endpoints.has(i) || LEVEL_BEFORE.test(before)) return 'level';
+    if (CHANGE_AFTER.test(sentence.slice(q.end, q.end + 20))) return 'change';
+    return 'unknown';
+  });
+}
+
+/** Whether a value that accepts `accepted` (undefined: any) may bind a quantity read as `read`. */
+export function roleFits(accepted: QuantityRole | undefined, read: ReadRole): boolean {
+  return accepted === undefined || read === 'unknown' || accepted === read;
+}

@@ -1,0 +1,51 @@
+/**
+ * Subjects named one sentence back (src/claims/bind-context.ts), on our own two-sentence passages.
+ * Quantities are built by hand (quantity-at.ts) so that only the binder is measured.
+ */
+import { describe, expect, it } from 'vitest';
+import { bindQuantities } from '../../src/claims/bind.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+import { quantitiesIn, type Written } from './quantity-at.js';
+
+const packs = await loadPacks([]);
+
+/** Previous sentence, sentence, its quantities, and per quantity the reference id ('-' none, '?' ambiguous). */
+type Row = [context: string, sentence: string, written: Written[], expected: string[]];
+
+function bound(context: string, sentence: string, written: Written[]): string[] {
+  const { bindings, ambiguous } = bindQuantities(sentence, quantitiesIn(sentence, written), packs, context);
+  return written.map((_, i) => bindings.find((b) => b.quantityIndex === i)?.referenceId ?? (ambiguous.includes(i) ? '?' : '-'));
+}
+
+const REACHED: Row[] = [
+  ['The Harwick team spent three summers at the GRIP site.', 'They drilled down to 3,029 metres.', [['3,029 metres', 'length']], ['grip-depth-and-span']],
+  ['The last ice age peaked around 21,000 years ago.', 'At its height, the global mean was some 6 °C colder than in pre-industrial times.', [['some 6 °C', 'temperature-change']], ['gmst-lgm-to-preindustrial-warming']],
+  ['The Younger Dryas began about 12,900 years ago.', 'It ended about 11,700 years ago.', [['about 11,700 years ago', 'age']], ['younger-dryas-end']],
+];
+
+const KEPT_APART: Row[] = [
+  // The sentence names its own subject: a depth word one sentence back does not make 560 km a depth.
+  ['The Vostok core was drilled by three nations.', 'The EPICA Dome C core, about 560 km away, reaches further.', [['about 560 km', 'length']], ['-']],
+  // No word refers back: the sentence does not take its subject from the one before.
+  ['The GRIP team drilled at Summit.', 'Sediment cores from the fjord reach down 40 metres.', [['40 metres', 'length']], ['-']],
+  // Its own words name another subject (a record span), so the Younger Dryas is not borrowed.
+  ['The Younger Dryas began about 12,900 years ago.', 'Its ice cores hold a record of 800,000 years.', [['800,000 years', 'duration']], ['-']],
+  // A veto word in the sentence still vetoes (the lake is not the core).
+  ['The Vostok core reached 3,623 metres.', 'Beneath it, the subglacial lake is some 250 km long.', [['some 250 km', 'length']], ['-']],
+  // A calendar year dates the sentence; it takes no subject from the one before.
+  ['And then came the Holocene.', 'It officially begins 11,700 years before the year 2000.', [['11,700 years', 'duration'], ['2000', 'age', 'CE']], ['-', '-']],
+  // A number with a subject of its own never looks back.
+  ['The GRIP team drilled at Summit.', 'Their Vostok colleagues drilled to 3,623 metres.', [['3,623 metres', 'length']], ['vostok-drilled-depth']],
+  // Two subjects one sentence back: no way to choose, so nothing binds.
+  ['The Dome C and Dome Fuji teams both reached bedrock.', 'They drilled down about 3,100 metres.', [['about 3,100 metres', 'length']], ['?']],
+];
+
+describe('bindQuantities with the previous sentence', () => {
+  it.each(REACHED)('binds: %s / %s', (context, sentence, written, expected) => expect(bound(context, sentence, written)).toEqual(expected));
+  it.each(KEPT_APART)('keeps apart: %s / %s', (context, sentence, written, expected) => expect(bound(context, sentence, written)).toEqual(expected));
+
+  it('binds nothing from context when no previous sentence is given', () => {
+    const s = 'They drilled down to 3,029 metres.';
+    expect(bindQuantities(s, quantitiesIn(s, [['3,029 metres', 'length']]), packs)).toEqual({ bindings: [], ambiguous: [] });
+  });
+});
