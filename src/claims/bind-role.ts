@@ -27,6 +27,8 @@ const CHANGE_VERBS = 'rose|rise|rises|risen|rising|fell|falls|fallen|falling|dro
 const CHANGE_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:by|(?:${CHANGE_NOUNS})\s+(?:of|was|is|were|came to|amounted to)|${CHANGE_VERBS})\s*$`, 'iu');
 /** Change words just after the quantity: "an 80 ppm rise", "90 ppm higher", "130 metres above the lake". */
 const CHANGE_AFTER = /^[\s-]*(?:rise|increase|drop|fall|decline|swing|jump|step|gain|higher|lower|more|less|greater|smaller|above|below|beneath|short of|deeper|shallower)(?![\p{L}])/iu;
+/** A place measured from a datum is a level: "3,623 metres below the surface", "2,800 m above sea level". */
+const DATUM_AFTER = /^\s*(?:below|beneath|under|above)\s+(?:the\s+)?(?:ice\s+|snow\s+)?(?:surface|sea\s+level)(?![\p{L}])/iu;
 /** Level words just before the quantity: "fell to", "stood at", "reached", "from". */
 const LEVEL_BEFORE = /(?:^|[^\p{L}])(?:from|to|at|between|reached|reaching|hovered around)\s*$/iu;
 /** A bound read as a place on the scale: "never rose above 300 ppm", "fell below 200 ppm". */
@@ -60,8 +62,9 @@ export function quantityRoles(sentence: string, quantities: Quantity[]): ReadRol
     const before = sentence.slice(Math.max(0, q.start - 40), q.start);
     if (LEVEL_HEDGE.test(q.text)) return 'level';
     if (CHANGE_BEFORE.test(before)) return EITHER_HEDGE.test(q.text) ? 'unknown' : 'change';
-    if (endpoints.has(i) || LEVEL_BEFORE.test(before)) return 'level';
-    if (CHANGE_AFTER.test(sentence.slice(q.end, q.end + 20))) return 'change';
+    const after = sentence.slice(q.end, q.end + 30);
+    if (endpoints.has(i) || LEVEL_BEFORE.test(before) || DATUM_AFTER.test(after)) return 'level';
+    if (CHANGE_AFTER.test(after)) return 'change';
     return 'unknown';
   });
 }

@@ -16,6 +16,8 @@ const ROLES: [sentence: string, written: Written[], roles: ReadRole[]][] = [
   ['A 90 ppm swing separates the cold and warm phases.', [['90 ppm', C]], ['change']],
   ['The drill stopped at 3,200 metres, 20 metres above the bedrock.', [['3,200 metres', L], ['20 metres', L]], ['level', 'change']],
   ['CO2 swung between about 185 ppm in the cold phases and about 275 ppm in the warm ones.', [['about 185 ppm', C], ['about 275 ppm', C]], ['level', 'level']],
+  ['The Orra borehole ends 2,950 metres below the surface.', [['2,950 metres', L]], ['level']],
+  ['The camp sits 3,200 m above sea level, 150 m below the summit.', [['3,200 m', L], ['150 m', L]], ['level', 'change']],
   ['In the cold phases CO2 fell to 185 ppm.', [['185 ppm', C]], ['level']],
   ['The natural peaks never rose above 300 ppm.', [['above 300 ppm', C]], ['level']],
   ['CO2 stood at 280 ppm in 1750.', [['280 ppm', C], ['1750', 'age', 'CE']], ['level', 'unknown']],
