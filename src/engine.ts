@@ -12,7 +12,7 @@ import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
 import type { LoadedPacks } from './rulepack/types.js';
 import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, readDraftText } from './source/index.js';
-import type { CheckResult, Claim, Draft, Flag, FlagDraft, Level, RuleInfo, Sentence, Verdict } from './types.js';
+import type { Binding, CheckResult, Claim, Draft, Flag, FlagDraft, Level, Quantity, RuleInfo, Sentence, Verdict } from './types.js';
 
 /** How a run is set up. Only `cwd` is required; packs default to the built-in pack. */
 export interface CheckOptions {
@@ -126,19 +126,9 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
     sentences.forEach((sentence, index) => {
-      if (!topic.test(sentence.text)) return;
-      const quantities = parseQuantities(sentence.text);
-      // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
-      const { bindings } = bindQuantities(sentence.text, quantities, packs, paragraph[index - 1]);
-      const reference = checkReferences(sentence.text, quantities, bindings, packs);
-      const drafts: FlagDraft[] = preferSpecific([
-        ...reference.flags,
-        ...checkArithmetic(sentence.text, quantities),
-        ...checkUnits(sentence.text, quantities),
-        ...checkReasoning(paragraph, index, packs),
-      ]);
-      const measured = quantities.some((q) => q.dimension !== 'number');
-      if (!measured && bindings.length === 0 && drafts.length === 0) return;
+      const found = examineSentence(paragraph, index, packs, topic.test(sentence.text));
+      if (found === undefined) return;
+      const { quantities, bindings, verdicts, drafts } = found;
 
       const folded = foldClaimText(sentence.text);
       const occurrence = (seen.get(folded) ?? 0) + 1;
@@ -158,12 +148,53 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
         heading: block.heading,
         quantities,
         bindings,
-        verdict: verdictOf(reference.verdicts),
+        verdict: verdictOf(verdicts),
         flags,
       });
     });
   });
   return { claims, flags: claims.flatMap((c) => c.flags) };
+}
+
+/** What the stages found in one sentence, before positions are resolved. */
+interface SentenceFindings {
+  quantities: Quantity[];
+  bindings: Binding[];
+  verdicts: Verdict[];
+  drafts: FlagDraft[];
+}
+
+/** Two numerals apart: the least a sentence needs for its own arithmetic or a restated unit. */
+const TWO_NUMBERS = /\d[^\d]+\d/u;
+
+/**
+ * Runs the stages on `paragraph[index]`. A sentence with a topic word gets every check; one without
+ * (in a draft that is on topic) gets only the draft's own arithmetic and unit checks, and only
+ * counts as a claim when they flag it: "from 12,900 to 11,700 years ago: a cold spell of some 2,000
+ * years" is wrong whatever its subject. Undefined when the sentence holds no claim.
+ */
+function examineSentence(paragraph: string[], index: number, packs: LoadedPacks, onTopic: boolean): SentenceFindings | undefined {
+  const text = paragraph[index] ?? '';
+  const context = paragraph.slice(0, index);
+  if (!onTopic) {
+    if (!TWO_NUMBERS.test(text)) return undefined;
+    const quantities = parseQuantities(text);
+    const drafts = [...checkArithmetic(text, quantities), ...checkUnits(text, quantities, context)];
+    return drafts.length === 0 ? undefined : { quantities, bindings: [], verdicts: [], drafts };
+  }
+  const quantities = parseQuantities(text);
+  // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
+  const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
+  const reference = checkReferences(text, quantities, bindings, packs);
+  const drafts = preferSpecific([
+    ...reference.flags,
+    ...checkArithmetic(text, quantities),
+    ...checkUnits(text, quantities, context),
+    ...checkReasoning(paragraph, index, packs),
+  ]);
+  const measured = quantities.some((q) => q.dimension !== 'number');
+  if (!measured && bindings.length === 0 && drafts.length === 0) return undefined;
+  return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
 
 /**

@@ -24,4 +24,20 @@ describe('checkText (the library entry point)', () => {
     expect(flag?.span.start).toEqual({ line: 3, column: 32, offset: 40 });
     expect(flag?.file).toBe('notes.txt');
   });
+
+  it("checks a sentence's own arithmetic even when it names no subject, in a draft that is on topic", async () => {
+    // 12,900 − 11,700 = 1,200 years (common practice: subtraction); the Younger Dryas lasted about
+    // 1,200 years (Rasmussen et al. 2006, GICC05; REFERENCE-VALUES younger-dryas-duration).
+    const text = 'The Younger Dryas was a cold return in the last deglaciation.\n\nIt ran from about 12,900 to 11,700 years ago: a cold spell of some 2,000 years.\n';
+    const result = await checkText(text);
+    const flag = result.flags.find((f) => f.ruleId === 'arith.duration');
+    expect(flag?.span.start.line).toBe(3);
+    expect(flag?.correction).toContain('1,200');
+  });
+
+  it('does not turn an off-topic sentence with correct arithmetic into a claim', async () => {
+    const text = 'CO2 and the ice ages.\n\nThe gallery was open from 1990 to 2000, ten years in all.\n';
+    const result = await checkText(text);
+    expect(result.claims.map((c) => c.text)).toEqual([]);
+  });
 });
