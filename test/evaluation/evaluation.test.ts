@@ -53,7 +53,10 @@ describe('the answer key', () => {
 });
 
 describe('the engine on the blind drafts', () => {
-  it('detects at least half the seeded errors with at most 10 false flags', async () => {
+  // The floors guard against regressions. They were 50% and 10 when the set was written blind; the
+  // engine was then tuned on this set (it scored 41% and 12 false flags before), so its figures are
+  // optimistic: test/holdout, never tuned on, is the honest measure.
+  it('detects at least 85% of the seeded errors with at most 3 false flags', async () => {
     const result = await checkPaths(['test/evaluation/drafts'], { cwd: root });
     const all: readonly FlagLike[] = result.flags;
     const serious = all.filter(isSerious);
@@ -96,8 +99,8 @@ describe('the engine on the blind drafts', () => {
     ];
     console.log(lines.join('\n'));
 
-    expect(found / errors.length).toBeGreaterThanOrEqual(0.5);
-    expect(falseFlags.length).toBeLessThanOrEqual(10);
+    expect(found / errors.length).toBeGreaterThanOrEqual(0.85);
+    expect(falseFlags.length).toBeLessThanOrEqual(3);
   });
 });
 
