@@ -33,7 +33,8 @@ async function measure(label, paths, cwd, files, sentences) {
   }
   const best = Math.min(...runs.map((r) => r.ms));
   console.log(label);
-  console.log(`  best of ${RUNS}: ${best.toFixed(0)} ms  → ${(files / (best / 1000)).toFixed(0)} files/s, ${(sentences / (best / 1000)).toFixed(0)} sentences/s`);
+  const perSecond = (n) => (n < 10 ? n.toFixed(2) : n.toFixed(0));
+  console.log(`  best of ${RUNS}: ${best.toFixed(0)} ms  → ${perSecond(files / (best / 1000))} files/s, ${perSecond(sentences / (best / 1000))} sentences/s`);
   console.log(`  claims found: ${runs[0].claims}, flags: ${runs[0].flags}`);
   console.log(`  peak resident memory: ${(peak / 1024 / 1024).toFixed(0)} MiB`);
   if (!STAGES) return;
