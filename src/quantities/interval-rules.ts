@@ -5,13 +5,14 @@
  *
  * A bound is a sum of terms: v = the stated value, |v| its size, h = half the last significant place
  * (or the stated ± uncertainty), L and H = the interval before the hedge, s = the scale of a vague
- * word (hundreds → 100), 1 = a constant. "stated" rows make the first interval from the number as
+ * word (hundreds → 100), n = the larger of 10% of |v| and half the width H − L (so a small round number
+ * such as "one", ±0.5, keeps its precision under "just over"), 1 = a constant. "stated" rows make the first interval from the number as
  * written; it is then converted to the canonical unit, where "hedge" rows widen or cut it (so
  * "around 1750" is 200 ± 20 years before 1950, and "about −30 °C" is −33 to −27 °C).
  */
 
 /** The inputs a bound may use. */
-export type Term = 'v' | 'absV' | 'h' | 'L' | 'H' | 's' | 'one';
+export type Term = 'v' | 'absV' | 'h' | 'L' | 'H' | 's' | 'n' | 'one';
 /** A bound: the sum of coefficient × term. */
 export type Bound = Partial<Record<Term, number>>;
 
@@ -47,10 +48,10 @@ export const INTERVAL_RULES: readonly IntervalRule[] = [
     why: '"Several millennia" = 3 to 7 millennia; the value is the middle.' },
   { id: 'about', kind: 'hedge', words: ['about', 'around', 'roughly', 'some', 'approximately', 'approx.', '~', '∼', '≈', 'c.', 'ca.', 'circa', 'close to', 'an estimated', 'or so'], low: { L: 1, absV: -0.1 }, high: { H: 1, absV: 0.1 },
     why: 'An approximation: the stated precision, widened by a further 10% of the value each way.' },
-  { id: 'nearly', kind: 'hedge', words: ['nearly', 'almost', 'just under', 'just below', 'not quite', 'slightly less than', 'slightly under'], low: { v: 1, absV: -0.1 }, high: { v: 1 },
-    why: 'Close to the value from below: within 10% under it.' },
-  { id: 'just-over', kind: 'hedge', words: ['just over', 'just above', 'slightly more than', 'slightly over', 'a little over', 'a little more than'], low: { v: 1 }, high: { v: 1, absV: 0.1 },
-    why: 'Close to the value from above: within 10% over it.' },
+  { id: 'nearly', kind: 'hedge', words: ['nearly', 'almost', 'just under', 'just below', 'not quite', 'slightly less than', 'slightly under', 'a little under', 'a little less than'], low: { v: 1, n: -1 }, high: { v: 1 },
+    why: 'Close to the value from below: within 10% under it, or within its stated precision when that is wider ("nearly two ppm per century" allows 1.5).' },
+  { id: 'just-over', kind: 'hedge', words: ['just over', 'just above', 'slightly more than', 'slightly over', 'a little over', 'a little more than'], low: { v: 1 }, high: { v: 1, n: 1 },
+    why: 'Close to the value from above: within 10% over it, or within its stated precision when that is wider ("a little over one ppm per century" allows 1.14: one is ±0.5).' },
   { id: 'more-than', kind: 'hedge', words: ['more than', 'over', 'above', 'exceeding', 'in excess of', 'greater than', 'upwards of', 'well over'], low: { v: 1 }, high: { v: 1, absV: 0.5 },
     why: 'A lower bound. Writers use it near the value, so it is capped at 1.5 v; a larger true value is a different claim.' },
   { id: 'at-least', kind: 'hedge', words: ['at least', 'no less than', 'no fewer than', 'or more', 'or longer'], low: { v: 1 }, high: { v: 1, absV: 1 },
@@ -72,7 +73,8 @@ export interface BoundInputs {
 
 /** The value of one bound for the given inputs. */
 export function evaluateBound(bound: Bound, inputs: BoundInputs): number {
-  const terms: Record<Term, number> = { ...inputs, absV: Math.abs(inputs.v), one: 1 };
+  const n = Math.max(0.1 * Math.abs(inputs.v), (inputs.H - inputs.L) / 2);
+  const terms: Record<Term, number> = { ...inputs, absV: Math.abs(inputs.v), n, one: 1 };
   let sum = 0;
   for (const [term, k] of Object.entries(bound) as [Term, number][]) sum += k * terms[term];
   return sum;

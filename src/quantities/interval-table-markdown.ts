@@ -4,8 +4,8 @@
  */
 import { INTERVAL_RULES, type Bound, type Term } from './interval-rules.js';
 
-const ORDER: Term[] = ['v', 'L', 'H', 's', 'h', 'absV', 'one'];
-const NAMES: Record<Term, string> = { v: 'v', L: 'L', H: 'H', s: 's', h: 'h', absV: '|v|', one: '1' };
+const ORDER: Term[] = ['v', 'L', 'H', 's', 'h', 'absV', 'n', 'one'];
+const NAMES: Record<Term, string> = { v: 'v', L: 'L', H: 'H', s: 's', h: 'h', absV: '|v|', n: 'n', one: '1' };
 
 function term(t: Term, k: number): string {
   const size = Math.abs(k);

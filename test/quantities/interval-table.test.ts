@@ -39,6 +39,8 @@ describe('the interval table', () => {
     ['about', 'It spans about 420,000 years.', 'about 420,000 years', 373000, 467000],
     ['nearly', 'It spans nearly 100,000 years.', 'nearly 100,000 years', 90000, 100000],
     ['just-over', 'It holds just over 400 ppm.', 'just over 400 ppm', 400, 440],
+    ['just-over', 'It comes to a little over one ppm per century.', 'a little over one ppm per century', 0.01, 0.015],
+    ['nearly', 'The shelf is a little under 1,000 feet thick.', 'a little under 1,000 feet', 274.32, 304.8],
     ['more-than', 'It spans more than 800,000 years.', 'more than 800,000 years', 800000, 1200000],
     ['at-least', 'It spans at least 800,000 years.', 'at least 800,000 years', 800000, 1600000],
     ['up-to', 'It swung up to 15 °C.', 'up to 15 °C', 7.5, 15],
