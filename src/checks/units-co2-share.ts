@@ -5,7 +5,8 @@
  *   "CO2 was [0.028 ppm]"               → a percentage written as ppm: 0.028%.
  * A percentage is a CO2 share only when the nearest gas named before it is CO2 and the words
  * around it state a level ("is", "made up", "of the air"), not a change, a rate or a share of
- * something else ("30 percent of emissions").
+ * something else ("30 percent of emissions"), nor the size of a change named before it ("the rise
+ * in CO2 since 1750 was 47 percent").
  */
 import { formatNumber, rewriteQuantity } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
@@ -35,6 +36,11 @@ const OTHER_GAS = /(?:methane|CH4|CH₄|nitrous|N2O|N₂O)/iu;
 const AIR = String.raw`(?:the${S}+|today's${S}+|today’s${S}+|Earth's${S}+|Earth’s${S}+|dry${S}+)?(?:air|atmosphere)`;
 const SHARE_AFTER = new RegExp(String.raw`^${S}*(?:of${S}+${AIR}|by${S}+volume)`, 'iu');
 const OF_SOMETHING_ELSE = new RegExp(String.raw`^${S}*of(?!${S}+${AIR})(?![\p{L}])`, 'iu');
+/**
+ * A change named as the subject ("the rise in CO2 ... at 47 percent", "the growth of carbon dioxide
+ * was 50 percent"): a percentage of it is relative to the start, not a share of the air.
+ */
+const CHANGE_SUBJECT = /(?:^|[^\p{L}])(?:rise|increase|growth|gain|jump|climb|drop|fall|decline|decrease|change|loss|reduction)[\s\u00A0]+(?:in|of)[\s\u00A0]+(?:[\p{L}-]+[\s\u00A0]+){0,2}(?:CO2|CO₂|carbon[\s\u00A0]+dioxide)(?![\p{L}\d])[^;:.!?]*$/iu;
 const RATE_AFTER = new RegExp(String.raw`^${S}*(?:(?:per|a|an|each|every)${S}+(?:year|decade|century|annum|millennium)|annually|yearly)`, 'iu');
 const LEVEL_BEFORE = new RegExp(
   String.raw`(?:^|[^\p{L}])(?:at|of|reached|reaching|was|were|is|are|stood${S}+at|to|hit|peaked${S}+at|near|around|about|from|between|and|made${S}+up|makes${S}+up|make${S}+up|only|just|holds|held|forms|comprises|constitutes|amounts${S}+to|accounts${S}+for)${S}*$`,
@@ -52,7 +58,8 @@ function isCo2Share(text: string, q: Quantity): boolean {
   const before = text.slice(Math.max(0, q.start - 24), q.start);
   const after = text.slice(q.end, q.end + 40);
   if (isStatedChange(text, q) || comparesToNext(text, q) || RATE_AFTER.test(after) || OF_SOMETHING_ELSE.test(after)) return false;
-  return nearestGasIsCo2(text, q.start) && (SHARE_AFTER.test(after) || LEVEL_BEFORE.test(before));
+  if (SHARE_AFTER.test(after)) return nearestGasIsCo2(text, q.start);
+  return nearestGasIsCo2(text, q.start) && LEVEL_BEFORE.test(before) && !CHANGE_SUBJECT.test(text.slice(0, q.start));
 }
 
 /** The power of ten, nearest first, that brings `ppm` into the plausible range (0 when none does). */

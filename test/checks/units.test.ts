@@ -40,6 +40,9 @@ const WRONG: [string, string, string, string, string][] = [
   ['unit.percent-ppm', 'In 1750, carbon dioxide was about 0.0028 percent of the air.', 'about 0.0028 percent', 'about 0.028 percent', LUTHI_2008.id],
   ['unit.percent-ppm', 'Firn & Flux wrote that CO2 is now 4 percent of the air.', '4 percent', '0.04 percent', NOAA_2024.id],
   ['unit.percent-ppm', 'CO2 is now higher than at any time in two million years, at 0.42 percent of the air.', '0.42 percent', '0.042 percent', NIST_SP_811.id],
+  // A change named elsewhere in the sentence does not make a stated share relative.
+  ['unit.percent-ppm', 'Despite the rise of coal, CO2 was 0.4 percent in 1900.', '0.4 percent', '0.04 percent', LUTHI_2008.id],
+  ['unit.percent-ppm', 'After the increase in CO2 since 1850, the gas stood at 4 percent of the air.', '4 percent', '0.04 percent', LUTHI_2008.id],
 ];
 
 // Right conversions, never flagged.
@@ -49,6 +52,9 @@ const RIGHT: string[] = [
   'The air there was -40 °C, or -40 °F.',
   'CO2 reached 0.04 percent (400 ppm) of the atmosphere.',
   'CO2 rose by 40 percent since 1750.',
+  // The size of a change named as the subject is relative to its start (420 / 280 = 1.5), not a share of the air.
+  'The Marlow almanac put the growth of CO2 from 1850 to 2020 at 45 percent.',
+  'The increase in atmospheric carbon dioxide since the glacial maximum was about 120 percent by 2020.',
   'CO2 levels are 50 percent higher than before industry.',
   'The ice sheet melted back around 10,000 BCE, some 12,000 years ago.',
   'In 1750, about 270 years ago, CO2 was 280 ppm.',
