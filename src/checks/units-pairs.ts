@@ -17,8 +17,8 @@ const JOINER = new RegExp(
   String.raw`^${S}*(?:\(|\[|,?${S}*or${S}+|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|=${S}*|\/${S}*|,?${S}*equivalent to${S}+|,?${S}*which is${S}+|,${S}*|—${S}*)$`,
   'iu',
 );
-/** Words that end a loose gap and announce the same amount again. */
-const LEAD = String.raw`(?:or|i\.e\.,?|that is,?|that's|that’s|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|=|\(|—)`;
+/** Words that end a loose gap and announce the same amount again ("which readers would call"). */
+const LEAD = String.raw`(?:or|i\.e\.,?|that is,?|that's|that’s|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|(?:would|might|will|can|could)${S}+call|call${S}+it|=|\(|—)`;
 const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}${S}*$`, 'iu');
 /** A loose gap: short, with no clause break that would end the thought (no other quantity: they are adjacent). */
 const LOOSE_GAP = /^[^;:!?]{0,60}$/u;
