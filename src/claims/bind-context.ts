@@ -16,7 +16,7 @@
  */
 import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
 import type { Quantity } from '../types.js';
-import { nearness } from './bind-match.js';
+import { canState, nearness } from './bind-match.js';
 import { roleFits, type ReadRole } from './bind-role.js';
 import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 
@@ -40,7 +40,7 @@ export function bindFromContext(
   if (!REFERS_BACK.test(sentence)) return undefined;
   const own = subjectTerms(sentence, view, packs);
   const scored = packs.references
-    .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role))
+    .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && canState(r, q))
     .filter((r) => !r.binding.none.some((id) => view.has(id)) && own.every((id) => r.binding.all.some((g) => g.includes(id))))
     .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))))
     .map((r) => ({ r, score: scoreWithContext(r, view, q, breaks) }))

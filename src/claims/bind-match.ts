@@ -6,6 +6,19 @@ import type { ReferenceValue } from '../rulepack/types.js';
 import type { Quantity } from '../types.js';
 import { distance, type TermHits } from './bind-view.js';
 
+/**
+ * Vague words that give an order of magnitude rather than a figure: "a few centuries", "several
+ * thousand years", "tens of thousands of years". Such a phrase often times something other than the
+ * value its subject words name ("rising within a few centuries of each other" is a lag, not the
+ * length of the rise), so it speaks of a value only when it could state that value's range.
+ */
+const VAGUE = /(?:^|[^\p{L}])(?:a\s+few|several|(?:tens|hundreds|thousands|millions|dozens)\s+of)(?![\p{L}])/iu;
+
+/** Whether `q` could state the value: any figure can, a vague phrase only a range its interval meets. */
+export function canState(r: Pick<ReferenceValue, 'low' | 'high'>, q: Pick<Quantity, 'text' | 'low' | 'high'>): boolean {
+  return !VAGUE.test(q.text) || (q.low <= r.high && r.low <= q.high);
+}
+
 /** Every `all` group has one of its terms in `hits`, and no `none` term is there. */
 export function satisfies(r: ReferenceValue, hits: TermHits): boolean {
   return r.binding.all.every((group) => group.some((id) => hits.has(id))) && !r.binding.none.some((id) => hits.has(id));

@@ -15,7 +15,7 @@ import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindFromContext } from './bind-context.js';
 import { bindList, parallelLists } from './bind-list.js';
-import { nearness, satisfies } from './bind-match.js';
+import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
 import { clauseBreaks, termViews, type TermHits } from './bind-view.js';
 
@@ -70,7 +70,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const scored = packs.references
-      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view))
+      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view) && canState(r, q))
       .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
       .sort((a, b) => a.score - b.score);
     const [best, next] = scored;
