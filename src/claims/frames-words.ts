@@ -84,6 +84,7 @@ export const FRAME_WORDS: FrameWords = {
     'but', 'however', 'in fact', 'actually', 'wrong', 'mistaken', 'misleading', 'not so', 'they do not',
     'it does not', 'nothing of the kind', 'confuse', 'confuses', 'mixes up', 'misreads', 'does not hold',
     'false', 'that argument', 'this argument', 'not true', 'untrue', 'the evidence shows', 'is a myth',
+    'not right', 'not correct', 'incorrect',
   ],
   clauseBreaks: ['but', 'while', 'whereas', 'although', 'though', 'yet', 'however'],
 };

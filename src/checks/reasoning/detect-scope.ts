@@ -35,7 +35,10 @@ function isCo2Acting(sentence: SentenceTokens, global: PhraseHit, temperature: P
 function detectRegional({ sentence, words }: DetectInput): Cue[] {
   const has = (slot: string) => findPhrases(sentence, words(slot));
   const temperature = has('temperature');
-  if (has('record').length === 0 || temperature.length === 0 || has('contrast').length > 0) return [];
+  // "colder than today" compares two times, not the record with the globe: no contrast.
+  const times = has('time-comparison');
+  const contrast = has('contrast').filter((c) => !times.some((t) => t.first <= c.first && t.last >= c.last));
+  if (has('record').length === 0 || temperature.length === 0 || contrast.length > 0) return [];
   // A record in one clause and the globe in the next ("In Antarctica, ...: for the globe as a
   // whole, ...") set the two side by side; only a record and the globe in one clause equate them.
   const recordClauses = new Set(has('record').map((r) => clauseOf(sentence, r.first)));
@@ -53,7 +56,11 @@ function isRegionalOrder(sentence: SentenceTokens, frame: OrderFrame, subjects: 
   const mentions = subjectMentions(sentence, subjects);
   const first = nearestMention(sentence, mentions, frame.cue, frame.relation === 'before' ? -1 : 1);
   if (first?.kind !== 'temperature') return false;
-  return regional.some((r) => r.last < first.hit.first && first.hit.first - r.last <= REGION_WINDOW && clauseOf(sentence, r.first) === clauseOf(sentence, first.hit.first));
+  const clause = clauseOf(sentence, first.hit.first);
+  const before = (r: PhraseHit) => r.last < first.hit.first && first.hit.first - r.last <= REGION_WINDOW;
+  // "the warming in Antarctica": the region stands just after the temperature, after "in".
+  const after = (r: PhraseHit) => r.first === first.hit.last + 2 && sentence.tokens[sentence.words[first.hit.last + 1] ?? -1]?.text.toLowerCase() === 'in';
+  return regional.some((r) => (before(r) || after(r)) && clauseOf(sentence, r.first) === clause);
 }
 
 function detectLag({ sentence, words }: DetectInput): Cue[] {
