@@ -23,7 +23,9 @@ const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'climbed', 'dropped', '
 const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
 const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down']);
 const SPAN_OF_PAIR = before(['lasting', 'lasted', 'lasts', 'spanning', 'spanned', 'spans', 'span of', 'period of', 'interval of', 'stretch of', 'over', 'across', 'within', 'took', 'taking', 'during', 'for', 'or', 'that is', 'i.e.', 'i.e.,', '(', '—']);
-const SPAN_OF_CHANGE = before(['lasting', 'spanning', 'span of', 'period of', 'over', 'across', 'within', 'in', 'took', 'taking', 'during', 'for', 'after', '(']);
+const SPAN_OF_CHANGE = before(['lasting', 'spanning', 'span of', 'period of', 'over', 'across', 'within', 'in', 'took', 'taking', 'during', 'for', 'after', '(', 'over the', 'across the', 'within the', 'during the']);
+/** Words that equate an amount with the rate it comes to ("80 ppm of CO2 would be 1.3 ppm per century"). */
+const COMES_TO = new RegExp(String.raw`^[^;:.!?,]{0,30}?(?:^|[^\p{L}])(?:would${S}+be|comes${S}+to|come${S}+to|works${S}+out${S}+(?:at|to)|work${S}+out${S}+(?:at|to)|amounts${S}+to|translates${S}+(?:in)?to|is${S}+equivalent${S}+to|equals)${S}*$`, 'iu');
 /**
  * Between the end date and a duration that restates the span: a comma, colon, semicolon, bracket or
  * dash, then perhaps "or", "that is", and a short noun phrase ending in "of" ("a cold spell of").
@@ -96,6 +98,11 @@ function startEnd(text: string, qs: Quantity[], i: number): number | undefined {
 /** True when `q` is stated as a change ("by 100 ppm", "a rise of 5 °C", "5 °C warmer"). */
 export function isStatedChange(text: string, q: Quantity): boolean {
   return CHANGE_BEFORE.test(head(text, q)) || CHANGE_AFTER.test(tail(text, q)) || /^[+−-]/.test(q.text);
+}
+
+/** True when `amount` is equated with `rate` just after it: "the same 80 ppm would be 5 ppm per century". */
+export function comesToRate(text: string, amount: Quantity, rate: Quantity): boolean {
+  return amount.end <= rate.start && COMES_TO.test(text.slice(amount.end, rate.start));
 }
 
 /** True when duration `q` states the span of a from-to pair of dates (pair ending at `pairEnd`). */

@@ -7,7 +7,7 @@
 import { writtenInterval as w } from '../quantities/index.js';
 import type { Dimension, Quantity } from '../types.js';
 import { divide, facing, invert, minus, percentChange, rangeSpan, size, type Derived } from './arithmetic-derive.js';
-import { comparesToNext, findPairs, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
+import { comesToRate, comparesToNext, findPairs, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
 export interface Finding {
@@ -68,7 +68,7 @@ function rates(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return qs.flatMap((rate) => {
     const changeDim = RATE_OF[rate.dimension];
     if (changeDim === undefined) return [];
-    const explicit = only(qs.filter((q) => q.dimension === changeDim && isStatedChange(text, q)));
+    const explicit = only(qs.filter((q) => q.dimension === changeDim && (isStatedChange(text, q) || comesToRate(text, q, rate))));
     const pair = only(pairs.filter((p) => DIFFERENCE[qs[p.from]?.dimension ?? 'number'] === changeDim));
     const pairEnds = pair === undefined ? undefined : ends(qs, pair);
     const change = explicit !== undefined ? w(explicit) : pairEnds === undefined ? undefined : minus(w(pairEnds[1]), w(pairEnds[0]));
