@@ -23,6 +23,10 @@ const FLAGGED: [passage: string, ruleId: string, excerpt: string][] = [
   ['The shape of the orbit varies over about 100,000 years, the tilt of Earth\'s axis over a cycle of about 29,000 years, and the wobble over about 21,000 years.', 'value.milankovitch-obliquity-period', 'about 29,000 years'],
   // GRIP drilled 3,029 m (Dansgaard et al. 1996): the core is named one sentence back.
   ['The Nordfjell team worked at the GRIP camp for two seasons. They drilled down just over 2,000 metres.', 'value.grip-depth-and-span', 'just over 2,000 metres'],
+  // Mauna Loa annual mean 2022, 418.53 ppm (NOAA GML, from memory): a ppm figure at Mauna Loa is CO2 though the gas is not named.
+  ['In 2022 the yearly mean at Mauna Loa, the Brackwater Almanac says, came to 412 ppm.', 'value.co2-mlo-2022', '412 ppm'],
+  // End of Termination I 11.0-11.7 ka BP (Walker et al. 2009): an end told as "was over by".
+  ['The Brackwater Almanac says the deglaciation was over by about 9,000 years ago.', 'value.termination-1-end', 'about 9,000 years ago'],
   // Global LGM cooling 3.6-7 K (Gulev et al. 2021, IPCC AR6 WGI ch. 2; Tierney et al. 2020): the ice age is named one sentence back.
   ['The last ice age peaked around 21,000 years ago. At its height, the global mean was some 11 °C colder than in pre-industrial times.', 'value.gmst-lgm-to-preindustrial-warming', 'some 11 °C'],
 ];
@@ -40,6 +44,12 @@ const QUIET: [passage: string][] = [
   ['The shape of Earth\'s orbit, the tilt of its axis and the wobble of that axis change over roughly 100,000, 41,000 and 23,000 years.'],
   // Vostok drilled 3,623 m (Vostok 5G review): the height above the lake is not the drilled depth.
   ['The Vostok drill reached 3,623 metres in January 1998, roughly 130 metres above the lake beneath the ice.'],
+  // Methane at Mauna Loa, about 1.9 ppm in 2022 (NOAA GML, from memory): another gas never binds the CO2 value.
+  ['In 2022 methane at Mauna Loa averaged about 1,910 ppb.'],
+  // Start of Termination I 17-20 ka (Chowdhry Beeman et al. 2019), end 11.0-11.7 ka (Walker et al. 2009): the end date is not the start.
+  ['The Brackwater deglaciation panel says it began about 18,500 years ago and was complete by about 11,300 years ago.'],
+  // Deglacial CO2 rise took about 6,000-7,500 years (Monnin et al. 2001): a lag of a few centuries is not its length.
+  ['In the Brackwater cores, CO2 and Antarctic temperature rose within a few centuries of each other during the deglaciation.'],
 ];
 
 describe('reference values: wider reach', () => {

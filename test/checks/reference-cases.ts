@@ -84,6 +84,8 @@ export const CASES: Case[] = [
   ['co2-global-2024', ['In 2024 global CO2 averaged 423.9 ppm.', '423.9 ppm', C, 423.85, 423.95], ['In 2024 global CO2 averaged 440 ppm.', '440 ppm', C, 439.5, 440.5]],
   // NOAA GML / Scripps Mauna Loa annual means
   ['co2-mlo-2023', ['At Mauna Loa, CO2 averaged 421 ppm in 2023.', '421 ppm', C, 420.5, 421.5], ['At Mauna Loa, CO2 averaged 410 ppm in 2023.', '410 ppm', C, 409.5, 410.5]],
+  // NOAA GML Mauna Loa annual mean 2022, 418.53 ppm (from memory): a ppm figure at Mauna Loa is CO2 even when the gas is not named.
+  ['co2-mlo-2022', ['The Kittering Observatory blog gives the 2022 Mauna Loa annual mean as 418.5 ppm.', '418.5 ppm', C, 418.45, 418.55], ['The Kittering Observatory blog gives the 2022 Mauna Loa annual mean as 425 ppm.', '425 ppm', C, 424.5, 425.5]],
   // NOAA / Scripps May-peak press releases
   ['co2-mlo-may-2024', ['At Mauna Loa the May 2024 CO2 peak was 426.9 ppm.', '426.9 ppm', C, 426.85, 426.95], ['At Mauna Loa the May 2024 CO2 peak was 415 ppm.', '415 ppm', C, 414.5, 415.5]],
   // NOAA / Scripps May-peak press releases
