@@ -15,9 +15,11 @@ const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+$`, 'iu');
 const TO = new RegExp(String.raw`^${S}*(?:to|until|till|through|–|—|-)${S}*$`, 'iu');
 /** A phrase of time or place between the start of a from-to pair and its "to" (a date in it reads DATE). */
 const WHEN_TO = new RegExp(String.raw`^,?${S}+(?:in|by|at|around|circa|during|before|after|near)${S}+[^\d.;:!?()]{1,40}?${S}+(?:to|until|till)${S}+$`, 'iu');
-/** Words that open the start of a stretch of time or a change, and words that mark its end. */
-const START_CUE = before(['began', 'begun', 'begins', 'started', 'starts', 'set in', 'opened', 'onset', 'beginning', 'starting', 'began at', 'started at', 'starting at']);
-const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at)${S}*$`, 'iu');
+/** Words that open the start of a stretch of time or a change, and words that mark its end ("... clear by B"). */
+const START_WORDS = list(['began', 'begun', 'begins', 'started', 'starts', 'set in', 'opened', 'onset', 'beginning', 'starting']);
+/** A start word, perhaps with a short phrase after it (up to seven words): "began at", "began to withdraw from the moor". */
+const START_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:${START_WORDS})(?:${S}+[\p{L}'’-]+){0,7}${S}*$`, 'iu');
+const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at|by)${S}*$`, 'iu');
 const CHANGE_NOUNS = ['rise', 'increase', 'drop', 'fall', 'decline', 'change', 'jump', 'gain', 'loss', 'swing', 'difference', 'warming', 'cooling', 'growth', 'decrease', 'reduction'];
 const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
 const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...CHANGE_NOUNS.map((n) => `${n} of`)]);

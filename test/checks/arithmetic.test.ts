@@ -33,6 +33,8 @@ const WRONG: [string, string, string, string, string][] = [
   // Percentages: 280 / 190 = 1.474, a 47.4% rise; 400 / 270 = 1.481. "more than 400" is read as the 400 written.
   ['arith.ratio', 'CO2 climbed from 190 to 280 ppm, an increase of roughly 30 percent.', 'roughly 30 percent', 'roughly 47.4 percent', 'warning'],
   ['arith.ratio', 'CO2 rose from about 270 ppm in 1800 to more than 400 ppm today, a rise of roughly 70 percent.', 'roughly 70 percent', 'roughly 48.1 percent', 'warning'],
+  // A start in a short verb phrase and an end after "by": 16,500 − 12,000 = 4,500 years.
+  ['arith.duration', 'Meltwater began to pour out of the Alder basin about 16,500 years ago and the lake had drained by 12,000 years ago, an outflow of some 2,500 years.', 'some 2,500 years', 'some 4,500 years', 'warning'],
   // An amount equated with a rate over a span named earlier: 100 ppm / 5,000 years = 0.2 ppm per decade;
   // 80 ppm / 6,300 years = 1.27 ppm per century.
   ['arith.rate', 'Spread across the 5,000 years of the warming, the Alder Hall team\'s 100 ppm of CO2 would be about 0.5 ppm per decade.', 'about 0.5 ppm per decade', 'about 0.2 ppm per decade', 'warning'],
@@ -76,6 +78,8 @@ const RIGHT: string[] = [
   'CO2 rose from about 185 to about 280 ppm, roughly a 50 percent rise.',
   'CO2 rose from 280 to over 400 ppm, a rise of more than 40 percent.',
   'CO2 rose by about 80 ppm in about 6,000 years, about 0.013 ppm a year.',
+  'Meltwater began to pour out of the Alder basin about 16,500 years ago and the lake had drained by 12,000 years ago, an outflow of some 4,500 years.',
+  'Peat began forming at Tollan Moss 9,800 years ago; by 6,000 years ago it was 2 m thick.',
   'Spread across the 5,000 years of the warming, the same 100 ppm of CO2 would be about 2 ppm per century.',
   'Over the 60 years of the Kestrel Bay record CO2 reached 420 ppm, and it is now rising at 2.4 ppm per year.',
   // "Just over" and "nearly" keep a small round number's own precision ("one" is ±0.5):
