@@ -17,6 +17,7 @@
  * - Warmer water holds less dissolved CO2: Weiss 1974, Marine Chemistry 2, 203-215 (from memory).
  * Written before the detectors were tuned; hard items were kept.
  */
+import { DIRECTIONS } from './corpus-directions.js';
 import { PHRASINGS } from './corpus-phrasings.js';
 
 export interface CorpusItem {
@@ -208,4 +209,4 @@ function toItems(rows: Row[], prefix: string): CorpusItem[] {
  * Every labelled item: errors first (`err-001`...), then correct statements (`ok-001`...), then
  * the items written for later phrasing families (corpus-phrasings.ts).
  */
-export const CORPUS: CorpusItem[] = [...toItems(errors, 'err'), ...toItems(correct, 'ok'), ...PHRASINGS];
+export const CORPUS: CorpusItem[] = [...toItems(errors, 'err'), ...toItems(correct, 'ok'), ...PHRASINGS, ...DIRECTIONS];
