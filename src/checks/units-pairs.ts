@@ -25,6 +25,15 @@ const LOOSE_GAP = /^[^;:!?]{0,60}$/u;
 /** A sentence that opens by restating: "That is 11,650 years BP", "On the BP scale, that's ...". */
 const OPENING = /^[^;!?]{0,80}$/u;
 
+/**
+ * The scale word of a quantity ("0.8 billion years" → billion), or "" for plain digits. A unit
+ * written the same with another scale word is a restatement too ("800,000 years, or 0.8 million
+ * years"; "600,000 years old, or 0.6 million"), but only behind a bracket or "or": a bare comma
+ * there joins the items of a list.
+ */
+const scaleOf = (q: Quantity): string => /(?:thousand|million|billion|trillion)/iu.exec(q.text)?.[0].toLowerCase() ?? '';
+const SCALE_JOINER = new RegExp(String.raw`^(?:${S}+(?:old|long))?${S}*(?:\(|\[|,?${S}*or${S}+|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|=${S}*)$`, 'iu');
+
 /** A quantity and its restatement in another unit; `loose` when words stand between them. */
 export interface Restatement {
   first: Quantity;
@@ -63,8 +72,12 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
   for (let i = 0; i + 1 < qs.length; i++) {
     const first = qs[i] as Quantity;
     const second = qs[i + 1] as Quantity;
-    if (!sameThing(first, second) || first.statedUnit === second.statedUnit) continue;
+    if (!sameThing(first, second)) continue;
     const gap = text.slice(first.end, second.start);
+    if (first.statedUnit === second.statedUnit) {
+      if (scaleOf(first) !== scaleOf(second) && SCALE_JOINER.test(gap)) out.push(ordered(first, second, false));
+      continue;
+    }
     if (JOINER.test(gap)) out.push(ordered(first, second, false));
     else if (LOOSE_GAP.test(gap) && LOOSE_END.test(gap) && closeDates(first, second)) out.push(ordered(first, second, true));
   }

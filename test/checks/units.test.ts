@@ -42,6 +42,8 @@ const WRONG: [string, string, string, string, string][] = [
   ['unit.percent-ppm', 'CO2 is now higher than at any time in two million years, at 0.42 percent of the air.', '0.42 percent', '0.042 percent', NIST_SP_811.id],
   // "would call" restates: a change of 7 °C is 12.6 °F (7 × 1.8 + 32 = 44.6 is the reading).
   ['unit.temperature-difference', 'The Kestrel Bay models cool the tropics by 7 °C, which visitors from Ohio would call roughly 44.6 °F.', 'roughly 44.6 °F', 'roughly 12.6 °F', NIST_SP_811.id],
+  // The same unit with another scale word: 600,000 years is 0.6 million years, not 0.6 billion.
+  ['unit.duration', 'The Harrow Hill ice is some 600,000 years old, or 0.6 billion years.', '0.6 billion years', '0.0006 billion years', NIST_SP_811.id],
   // A change named elsewhere in the sentence does not make a stated share relative.
   ['unit.percent-ppm', 'Despite the rise of coal, CO2 was 0.4 percent in 1900.', '0.4 percent', '0.04 percent', LUTHI_2008.id],
   ['unit.percent-ppm', 'After the increase in CO2 since 1850, the gas stood at 4 percent of the air.', '4 percent', '0.04 percent', LUTHI_2008.id],
@@ -56,6 +58,8 @@ const RIGHT: string[] = [
   'CO2 rose by 40 percent since 1750.',
   'The Kestrel Bay models cool the tropics by 7 °C, which visitors from Ohio would call roughly 12.6 °F.',
   'A summer day at the Kestrel Bay station reads 30 °C, which a visitor from Ohio would call 86 °F.',
+  'The Harrow Hill ice is some 600,000 years old, or 0.6 million years.',
+  'The Harrow Hill cores hold ice 400,000 years old, 600,000 years old and 0.9 million years old.',
   // The size of a change named as the subject is relative to its start (420 / 280 = 1.5), not a share of the air.
   'The Marlow almanac put the growth of CO2 from 1850 to 2020 at 45 percent.',
   'The increase in atmospheric carbon dioxide since the glacial maximum was about 120 percent by 2020.',
