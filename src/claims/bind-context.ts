@@ -6,11 +6,12 @@
  *        ^^^^ ──────────────────────────────────────────────────── 2,000 metres (GRIP depth)
  *
  * Only a quantity with no candidate in its own sentence looks back; only when its sentence refers
- * back with a pronoun ("they", "it", "its"...), as a sentence that takes its subject from the one
- * before does (a sentence that names its own subject, "The EPICA Dome C core, 560 km away, ...", does
- * not look back); and only when its own words name no other subject: every term it can see that
- * some value binds on must serve the value, unless it is the baseline of a comparison ("colder than
- * in pre-industrial times"). The previous sentence may fill the groups the quantity's own sentence
+ * back with a pronoun ("they", "it", "its"...) or a time phrase ("at that time", "by then"), as a
+ * sentence that takes its subject from the one before does (a sentence that names its own subject,
+ * "The EPICA Dome C core, 560 km away, ...", does not look back); and only when its own words name no
+ * other subject: every term it can see that some value binds on must serve the value, unless it is
+ * the baseline of a comparison ("colder than in pre-industrial times", "below today's") or qualifies
+ * a term that serves ("global sea level"). The previous sentence may fill the groups the quantity's own sentence
  * lacks, never lift a veto; a group filled from there counts as far. Two values reachable this way
  * with the same score tie, and bind nothing.
  */
@@ -22,8 +23,11 @@ import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 
 /** What a group filled from the previous sentence adds to a value's distance. */
 export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
-const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her)(?![\p{L}])/iu;
-const BASELINE = /(?:^|[^\p{L}])than(?:\s+[\p{L}-]+){0,2}\s*$/iu;
+const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|(?:at|by|during|in)\s+(?:that|the)\s+(?:time|point|stage|period)(?!\s+of(?![\p{L}]))|(?:by|back)\s+then)(?![\p{L}])/iu;
+/** The baseline of a comparison: "colder than in pre-industrial times", "40 metres below today's". */
+const BASELINE = /(?:^|[^\p{L}])(?:than|below|above|beneath)(?:\s+[\p{L}-]+){0,2}\s*$/iu;
+/** What may stand between a qualifier and the subject it qualifies: "global sea level", "global-mean". */
+const QUALIFIES = /^[\s-]*$/u;
 
 const bindingTerms = new WeakMap<object, Set<string>>();
 
@@ -39,9 +43,11 @@ export function bindFromContext(
 ): string | 'ambiguous' | undefined {
   if (!REFERS_BACK.test(sentence)) return undefined;
   const own = subjectTerms(sentence, view, packs);
+  const serves = (r: ReferenceValue, id: string): boolean => r.binding.all.some((g) => g.includes(id));
   const scored = packs.references
     .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && canState(r, q))
-    .filter((r) => !r.binding.none.some((id) => view.has(id)) && own.every((id) => r.binding.all.some((g) => g.includes(id))))
+    .filter((r) => !r.binding.none.some((id) => view.has(id)))
+    .filter((r) => own.every(([id, spans]) => serves(r, id) || spans.every((span) => qualifiesServing(sentence, span, view, (other) => serves(r, other)))))
     .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))))
     .map((r) => ({ r, score: scoreWithContext(r, view, q, breaks) }))
     .sort((a, b) => a.score - b.score);
@@ -50,15 +56,25 @@ export function bindFromContext(
   return next !== undefined && next.score === best.score ? 'ambiguous' : best.r.id;
 }
 
-/** The terms a quantity sees that some value binds on, leaving out the baselines of comparisons. */
-function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks): string[] {
+/**
+ * Whether a term stands directly before a term that serves the value, qualifying it: in "global sea
+ * level" the word "global" names no subject of its own, so it does not stop a sea-level value.
+ */
+function qualifiesServing(sentence: string, [, end]: [number, number], view: TermHits, serves: (id: string) => boolean): boolean {
+  return [...view].some(([id, spans]) => serves(id) && spans.some(([start]) => start >= end && QUALIFIES.test(sentence.slice(end, start))));
+}
+
+/** The terms a quantity sees that some value binds on (with their own spans), leaving out the baselines of comparisons. */
+function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks): [string, [number, number][]][] {
   let binding = bindingTerms.get(packs);
   if (binding === undefined) {
     binding = new Set(packs.references.flatMap((r) => r.binding.all.flat()));
     bindingTerms.set(packs, binding);
   }
   const used = binding;
-  return [...view].filter(([id, spans]) => used.has(id) && spans.some(([start]) => !BASELINE.test(sentence.slice(Math.max(0, start - 40), start)))).map(([id]) => id);
+  return [...view]
+    .map(([id, spans]): [string, [number, number][]] => [id, used.has(id) ? spans.filter(([start]) => !BASELINE.test(sentence.slice(Math.max(0, start - 40), start))) : []])
+    .filter(([, spans]) => spans.length > 0);
 }
 
 /** Own groups count by nearness; a group only the previous sentence fills counts `CONTEXT_PENALTY`. */

@@ -23,6 +23,8 @@ const FLAGGED: [passage: string, ruleId: string, excerpt: string][] = [
   ['The shape of the orbit varies over about 100,000 years, the tilt of Earth\'s axis over a cycle of about 29,000 years, and the wobble over about 21,000 years.', 'value.milankovitch-obliquity-period', 'about 29,000 years'],
   // GRIP drilled 3,029 m (Dansgaard et al. 1996): the core is named one sentence back.
   ['The Nordfjell team worked at the GRIP camp for two seasons. They drilled down just over 2,000 metres.', 'value.grip-depth-and-span', 'just over 2,000 metres'],
+  // LGM sea-level lowstand 120-135 m (Lambeck et al. 2014, PNAS 111): the LGM is named one sentence back, "at that time" refers to it.
+  ["The Hollin Museum panel puts the Last Glacial Maximum at about 21,000 years ago. Global sea level at that time stood some 50 metres below today's.", 'value.lgm-sea-level-lowstand', 'some 50 metres'],
   // Mauna Loa annual mean 2022, 418.53 ppm (NOAA GML, from memory): a ppm figure at Mauna Loa is CO2 though the gas is not named.
   ['In 2022 the yearly mean at Mauna Loa, the Brackwater Almanac says, came to 412 ppm.', 'value.co2-mlo-2022', '412 ppm'],
   // End of Termination I 11.0-11.7 ka BP (Walker et al. 2009): an end told as "was over by".

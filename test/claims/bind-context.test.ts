@@ -21,6 +21,10 @@ const REACHED: Row[] = [
   ['The Harwick team spent three summers at the GRIP site.', 'They drilled down to 3,029 metres.', [['3,029 metres', 'length']], ['grip-depth-and-span']],
   ['The last ice age peaked around 21,000 years ago.', 'At its height, the global mean was some 6 °C colder than in pre-industrial times.', [['some 6 °C', 'temperature-change']], ['gmst-lgm-to-preindustrial-warming']],
   ['The Younger Dryas began about 12,900 years ago.', 'It ended about 11,700 years ago.', [['about 11,700 years ago', 'age']], ['younger-dryas-end']],
+  // A time phrase refers back; "global" qualifies "sea level"; "below today's" is a baseline (Lambeck et al. 2014: LGM lowstand 120-135 m).
+  ['The Hollin Museum panel puts the Last Glacial Maximum at about 21,000 years ago.', "Global sea level at that time stood some 125 metres below today's.", [['some 125 metres', 'length']], ['lgm-sea-level-lowstand']],
+  // "By then" refers back (Gulev et al. 2021: LGM global cooling about 5-7 °C).
+  ['The last ice age peaked around 21,000 years ago.', 'By then the global mean temperature had fallen some 6 °C below pre-industrial levels.', [['some 6 °C', 'temperature-change']], ['gmst-lgm-to-preindustrial-warming']],
 ];
 
 const KEPT_APART: Row[] = [
@@ -36,6 +40,12 @@ const KEPT_APART: Row[] = [
   ['And then came the Holocene.', 'It officially begins 11,700 years before the year 2000.', [['11,700 years', 'duration'], ['2000', 'age', 'CE']], ['-', '-']],
   // A number with a subject of its own never looks back.
   ['The GRIP team drilled at Summit.', 'Their Vostok colleagues drilled to 3,623 metres.', [['3,623 metres', 'length']], ['vostok-drilled-depth']],
+  // "At the time of writing" dates the sentence; it does not refer back.
+  ['The Hollin panel shows the Last Glacial Maximum.', 'At the time of writing, sea level stands some 125 metres higher.', [['some 125 metres', 'length']], ['-']],
+  // A sea-level datum is a baseline, and the station named is a subject of its own: no sea-level value.
+  ['The Last Glacial Maximum came about 21,000 years ago.', 'At that time the Vostok site lay some 3,500 metres above sea level.', [['some 3,500 metres', 'length']], ['-']],
+  // A qualifier of a term that does not serve the value still names another subject.
+  ['The Last Glacial Maximum came about 21,000 years ago.', 'At that time Vostok ice was some 125 metres thinner.', [['some 125 metres', 'length']], ['-']],
   // Two subjects one sentence back: no way to choose, so nothing binds.
   ['The Dome C and Dome Fuji teams both reached bedrock.', 'They drilled down about 3,100 metres.', [['about 3,100 metres', 'length']], ['?']],
 ];
