@@ -61,6 +61,19 @@ function closeDates(a: Quantity, b: Quantity): boolean {
   return y <= 2 * x + 100;
 }
 
+/**
+ * "The 3,270-metre borehole is 10,700 feet deep": a measure written as a hyphenated modifier of the
+ * subject, then the subject's measure in another unit after "is", ending in a word of measure
+ * (deep, long, thick, old...: "is 300 feet from the camp" is another length). The modifier must
+ * end there ("a 10-km-wide shelf is 300 feet thick" measures two things).
+ */
+const MODIFIER = /\d-\p{L}+$/u;
+const MODIFIER_GAP = new RegExp(String.raw`^${S}+[^\d,;:.!?()]{1,40}${S}(?:is|was|measures|measured|runs|ran)${S}+$`, 'iu');
+const MEASURE_AFTER = new RegExp(String.raw`^${S}+(?:deep|long|tall|high|thick|old|in${S}+(?:depth|length|height|thickness))(?![\p{L}])`, 'iu');
+function restatesModifier(text: string, first: Quantity, gap: string, second: Quantity): boolean {
+  return MODIFIER.test(first.text) && text[first.end] !== '-' && MODIFIER_GAP.test(gap) && MEASURE_AFTER.test(text.slice(second.end));
+}
+
 /** The °F side of a °C ↔ °F pair is the conversion; otherwise the second one is. */
 function ordered(a: Quantity, b: Quantity, loose: boolean): Restatement {
   return a.statedUnit === 'degF' && b.statedUnit !== 'degF' ? { first: b, second: a, loose } : { first: a, second: b, loose };
@@ -80,6 +93,7 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
     }
     if (JOINER.test(gap)) out.push(ordered(first, second, false));
     else if (LOOSE_GAP.test(gap) && LOOSE_END.test(gap) && closeDates(first, second)) out.push(ordered(first, second, true));
+    else if (restatesModifier(text, first, gap, second) && closeDates(first, second)) out.push(ordered(first, second, true));
   }
   const opening = previous === undefined ? undefined : acrossSentences(text, qs, previous, out);
   return opening === undefined ? out : [...out, opening];

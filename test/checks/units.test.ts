@@ -44,6 +44,8 @@ const WRONG: [string, string, string, string, string][] = [
   ['unit.temperature-difference', 'The Kestrel Bay models cool the tropics by 7 °C, which visitors from Ohio would call roughly 44.6 °F.', 'roughly 44.6 °F', 'roughly 12.6 °F', NIST_SP_811.id],
   // The same unit with another scale word: 600,000 years is 0.6 million years, not 0.6 billion.
   ['unit.duration', 'The Harrow Hill ice is some 600,000 years old, or 0.6 billion years.', '0.6 billion years', '0.0006 billion years', NIST_SP_811.id],
+  // A hyphenated measure of the subject restated after "is": 2,500 m = 8,202 ft (÷ 0.3048).
+  ['unit.length', 'For visitors from Denver, the 2,500-metre Harrow Hill core is nearly 800 feet long.', 'nearly 800 feet', '8,200 feet', NIST_SP_811.id],
   // A change named elsewhere in the sentence does not make a stated share relative.
   ['unit.percent-ppm', 'Despite the rise of coal, CO2 was 0.4 percent in 1900.', '0.4 percent', '0.04 percent', LUTHI_2008.id],
   ['unit.percent-ppm', 'After the increase in CO2 since 1850, the gas stood at 4 percent of the air.', '4 percent', '0.04 percent', LUTHI_2008.id],
@@ -60,6 +62,9 @@ const RIGHT: string[] = [
   'A summer day at the Kestrel Bay station reads 30 °C, which a visitor from Ohio would call 86 °F.',
   'The Harrow Hill ice is some 600,000 years old, or 0.6 million years.',
   'The Harrow Hill cores hold ice 400,000 years old, 600,000 years old and 0.9 million years old.',
+  'For visitors from Denver, the 2,500-metre Harrow Hill core is just over 8,200 feet long.',
+  'The 2,500-metre Harrow Hill core was 300 feet from the old camp.',
+  'The 4-km-wide Harrow ice shelf is 900 feet thick.',
   // The size of a change named as the subject is relative to its start (420 / 280 = 1.5), not a share of the air.
   'The Marlow almanac put the growth of CO2 from 1850 to 2020 at 45 percent.',
   'The increase in atmospheric carbon dioxide since the glacial maximum was about 120 percent by 2020.',
