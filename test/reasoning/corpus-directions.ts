@@ -48,6 +48,7 @@ const errors: Row[] = [
   ['science desk', 'The southern hemisphere cooled too during the Younger Dryas, in step with the north.', [SEESAW]],
   ['science desk', 'In the Antarctic Cold Reversal, Greenland cooled too, as the whole planet chilled.', [SEESAW]],
   ['newsletter', 'Cold polar oceans hold less CO2 than the warm tropical seas do.', [SOLUBILITY]],
+  ['science desk', 'The polar regions warmed less than the rest of the planet at the end of each ice age.', [POLAR]],
   ['science desk', 'As the sea warms through this century, it will absorb ever more carbon dioxide from the air.', [SOLUBILITY]],
   ['science desk', 'Warmer surface waters hold more dissolved CO2 than cold deep water.', [SOLUBILITY]],
   ['science desk', 'Worldwide, temperature led and carbon dioxide followed at the end of the last ice age.', [GLOBAL_LEAD]],
@@ -64,6 +65,9 @@ const correct: Row[] = [
   ['science desk', 'Antarctic temperature changes were larger than the global mean change, by a factor of about 1.5 to 2.', []],
   ['science desk', 'Greenland warmed far more than the globe as a whole at the end of the Younger Dryas.', []],
   ['audio guide', 'The polar regions hold less than a tenth of the world population of seabirds.', []],
+  // Added after the first run, as look-alikes for the tightened polar and seesaw patterns.
+  ['newsletter', 'The poles receive less sunlight than the tropics over a whole year.', []],
+  ['science desk', 'The Younger Dryas hit the north hard, and Antarctica, far away, cooled only later in the Holocene.', []],
   ['science desk', 'Each extra ppm of CO2 warms the planet a little less than the one before, because the forcing is logarithmic.', []],
   ['newsletter', 'Every extra ppm we add now costs more to remove later than the one before.', []],
   ['science desk', 'Each doubling of CO2 adds about the same forcing, which is why the effect is called logarithmic.', []],
