@@ -6,10 +6,12 @@
  *   "...warming drives CO2, and CO2 does not drive warming."   (one direction asserted, the
  *        ^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^      other denied: flagged)
  *
- * Fires on an either/or marker (`either-or`) in a sentence that names CO2, temperature and a
+ * Fires on an either/or marker (`either-or`, or an "either" with an "or" anywhere later in its
+ * clause) in a sentence that names CO2, temperature and a
  * causal word (`causal`), or on two causal statements in opposite directions joined by "or" or
  * with one of them denied. A veto (`both`: "each drives the other", "feedback", "not either/or")
- * anywhere in the sentence, or for a question anywhere in the paragraph, lets it pass.
+ * anywhere in the sentence, or for a question anywhere in the paragraph, lets it pass; a denied
+ * veto ("it cannot be both") does not.
  */
 import { clauseOf, findPhrases, isNegated, type PhraseHit } from '../../claims/frames-match.js';
 import { nearestMention, subjectMentions } from '../../claims/frames-order.js';

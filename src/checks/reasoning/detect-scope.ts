@@ -7,7 +7,8 @@
  *        ^^^^^^ record                 ^^^^^^^^^^^^^^^^^^ flagged
  *   Fires when one sentence names a regional record (`record`) and, in the same clause, a global
  *   scope (`global`), with a temperature word (`temperature`), and no contrast (`contrast`: "than", "not", "unlike",
- *   "while", "combined"...) sets them apart. CO2 from Antarctic ice is a global signal: a
+ *   "while", "combined"...) sets them apart; a "than" inside a comparison of two times
+ *   (`time-comparison`: "colder than today") is no contrast. CO2 from Antarctic ice is a global signal: a
  *   sentence without a temperature word passes, and so does a global word that CO2 acts on
  *   ("the CO2 then warmed the planet").
  *
