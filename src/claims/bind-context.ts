@@ -23,7 +23,7 @@ import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 
 /** What a group filled from the previous sentence adds to a value's distance. */
 export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
-const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|(?:at|by|during|in)\s+(?:that|the)\s+(?:time|point|stage|period)(?!\s+of(?![\p{L}]))|(?:by|back)\s+then)(?![\p{L}])/iu;
+const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|(?:at|by|during|in)\s+that\s+(?:time|point|stage|period)|at\s+the\s+time(?!\s+of(?![\p{L}]))|(?:by|back)\s+then)(?![\p{L}])/iu;
 /** The baseline of a comparison: "colder than in pre-industrial times", "40 metres below today's". */
 const BASELINE = /(?:^|[^\p{L}])(?:than|below|above|beneath)(?:\s+[\p{L}-]+){0,2}\s*$/iu;
 /** What may stand between a qualifier and the subject it qualifies: "global sea level", "global-mean". */

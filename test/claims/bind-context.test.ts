@@ -42,6 +42,8 @@ const KEPT_APART: Row[] = [
   ['The GRIP team drilled at Summit.', 'Their Vostok colleagues drilled to 3,623 metres.', [['3,623 metres', 'length']], ['vostok-drilled-depth']],
   // "At the time of writing" dates the sentence; it does not refer back.
   ['The Hollin panel shows the Last Glacial Maximum.', 'At the time of writing, sea level stands some 125 metres higher.', [['some 125 metres', 'length']], ['-']],
+  // "In the period" opens a time span of its own; only "that" time refers back.
+  ['The Hollin panel shows the Last Glacial Maximum.', 'In the period since, global sea level has risen some 60 metres.', [['some 60 metres', 'length']], ['-']],
   // A sea-level datum is a baseline, and the station named is a subject of its own: no sea-level value.
   ['The Last Glacial Maximum came about 21,000 years ago.', 'At that time the Vostok site lay some 3,500 metres above sea level.', [['some 3,500 metres', 'length']], ['-']],
   // A qualifier of a term that does not serve the value still names another subject.
