@@ -46,6 +46,10 @@ const QUIET: [passage: string][] = [
   ['The shape of Earth\'s orbit, the tilt of its axis and the wobble of that axis change over roughly 100,000, 41,000 and 23,000 years.'],
   // Vostok drilled 3,623 m (Vostok 5G review): the height above the lake is not the drilled depth.
   ['The Vostok drill reached 3,623 metres in January 1998, roughly 130 metres above the lake beneath the ice.'],
+  // Global LGM-to-pre-industrial warming 3.6-7 K (Gulev et al. 2021) vs Antarctic 8-10 K (Jouzel et al. 2007): a figure read
+  // from a named Antarctic core is the site's own; calling it global is the scope check's to explain, not the global value's.
+  ['The Brackwater panel says the Vostok deuterium shows the whole planet warming by about 11 °C at each deglaciation.'],
+  ['According to the Brackwater panel, the EPICA Dome C ice shows global temperature rising about 10 °C at the end of every glacial.'],
   // Methane at Mauna Loa, about 1.9 ppm in 2022 (NOAA GML, from memory): another gas never binds the CO2 value.
   ['In 2022 methane at Mauna Loa averaged about 1,910 ppb.'],
   // Start of Termination I 17-20 ka (Chowdhry Beeman et al. 2019), end 11.0-11.7 ka (Walker et al. 2009): the end date is not the start.
