@@ -38,9 +38,25 @@ export function rewriteQuantity(q: Quantity, value: number, significant?: number
     if (Math.round(stated) < 1) return formatQuantity(value, q.unit, q.statedUnit);
     written = String(Math.round(stated));
   } else if (atom.scale > 1) {
-    const scaleWord = /\p{L}+$/u.exec(q.text.slice(atom.start, atom.end))?.[0] ?? '';
-    written = `${formatNumber(stated / atom.scale, figures)} ${scaleWord}`;
+    written = scaledNumber(stated, atom.scale, /\p{L}+$/u.exec(q.text.slice(atom.start, atom.end))?.[0] ?? '', figures);
   } else written = formatNumber(stated, figures, q.statedUnit !== 'BCE' || Math.abs(stated) >= 10000);
   if (q.text.slice(atom.start, atom.end).startsWith('−')) written = written.replace(/^-/, '−');
   return q.text.slice(0, atom.start) + written + q.text.slice(atom.end);
+}
+
+const SCALE_WORDS: [string, number][] = [
+  ['trillion', 1e12],
+  ['billion', 1e9],
+  ['million', 1e6],
+  ['thousand', 1e3],
+];
+
+/**
+ * A number in the draft's scale word, or a smaller one when the value would fall below 1 in it:
+ * 800,000 with "billion" reads "0.8 million", not "0.0008 billion"; plain digits below a thousand.
+ */
+function scaledNumber(stated: number, scale: number, word: string, figures: number): string {
+  if (Math.abs(stated) >= scale || word === '') return `${formatNumber(stated / scale, figures)} ${word}`.trimEnd();
+  const [smaller, size] = SCALE_WORDS.find(([, size]) => Math.abs(stated) >= size) ?? ['', 1];
+  return size === 1 ? formatNumber(stated, figures) : `${formatNumber(stated / size, figures)} ${smaller}`;
 }
