@@ -43,7 +43,7 @@ const WRONG: [string, string, string, string, string][] = [
   // "would call" restates: a change of 7 °C is 12.6 °F (7 × 1.8 + 32 = 44.6 is the reading).
   ['unit.temperature-difference', 'The Kestrel Bay models cool the tropics by 7 °C, which visitors from Ohio would call roughly 44.6 °F.', 'roughly 44.6 °F', 'roughly 12.6 °F', NIST_SP_811.id],
   // The same unit with another scale word: 600,000 years is 0.6 million years, not 0.6 billion.
-  ['unit.duration', 'The Harrow Hill ice is some 600,000 years old, or 0.6 billion years.', '0.6 billion years', '0.0006 billion years', NIST_SP_811.id],
+  ['unit.duration', 'The Harrow Hill ice is some 600,000 years old, or 0.6 billion years.', '0.6 billion years', '600 thousand years', NIST_SP_811.id],
   // A hyphenated measure of the subject restated after "is": 2,500 m = 8,202 ft (÷ 0.3048).
   ['unit.length', 'For visitors from Denver, the 2,500-metre Harrow Hill core is nearly 800 feet long.', 'nearly 800 feet', '8,200 feet', NIST_SP_811.id],
   // A change named elsewhere in the sentence does not make a stated share relative.
