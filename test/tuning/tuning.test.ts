@@ -10,8 +10,10 @@ import { tuningKey } from './answer-key.js';
 // The third blind set measures the engine on drafts written without reading it; it does not steer.
 // Floors are deliberately low starting points for the developers to raise.
 const ROOT = resolve(fileURLToPath(new URL('.', import.meta.url)), '../..');
-const DETECTION_FLOOR = 0.2;
-const FALSE_FLAG_CEILING = 15;
+// Regression guards: written blind, this set scored 45% with 5 false claims before the engine was
+// tuned on it (then 92%, 0). test/holdout, never tuned on, is the honest measure.
+const DETECTION_FLOOR = 0.85;
+const FALSE_FLAG_CEILING = 3;
 
 const errors = tuningKey.flatMap((draft) => draft.errors);
 const correct = tuningKey.flatMap((draft) => draft.correct);
