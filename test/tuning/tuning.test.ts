@@ -8,7 +8,6 @@ import { assignFlags, countByKind, flagTouches, isSerious, locateClaim } from '.
 import { tuningKey } from './answer-key.js';
 
 // The third blind set measures the engine on drafts written without reading it; it does not steer.
-// Floors are deliberately low starting points for the developers to raise.
 const ROOT = resolve(fileURLToPath(new URL('.', import.meta.url)), '../..');
 // Regression guards: written blind, this set scored 45% with 5 false claims before the engine was
 // tuned on it (then 92%, 0). test/holdout, never tuned on, is the honest measure.
