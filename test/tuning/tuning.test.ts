@@ -7,7 +7,7 @@ import type { FlagLike } from '../evaluation/score.js';
 import { assignFlags, countByKind, flagTouches, isSerious, locateClaim } from '../evaluation/score.js';
 import { tuningKey } from './answer-key.js';
 
-// The third blind set measures the engine on drafts written without reading it; it does not steer.
+// The third blind set: drafts written without reading the engine, then used to tune it (general causes only).
 const ROOT = resolve(fileURLToPath(new URL('.', import.meta.url)), '../..');
 // Regression guards: written blind, this set scored 45% with 5 false claims before the engine was
 // tuned on it (then 92%, 0). test/holdout, never tuned on, is the honest measure.
