@@ -22,7 +22,7 @@
  * - Global temperature generally lagged CO2 in the last deglaciation: Shakun et al. 2012, Nature
  *   484, 49-54, doi 10.1038/nature10915.
  */
-import type { CorpusItem } from './corpus.js';
+import { toItems, type CorpusItem, type Row } from './corpus-item.js';
 
 const POLAR = 'direction.polar-swings-exceed-global';
 const LOG = 'direction.co2-forcing-logarithmic';
@@ -34,7 +34,6 @@ const REGIONAL = 'scope.regional-record-as-global';
 const ANT_LAG = 'scope.antarctic-lag-as-global';
 const CORRELATION = 'logic.correlation-as-proof';
 
-type Row = [CorpusItem['scenario'], string | string[], string[]];
 
 const errors: Row[] = [
   ['newsletter', 'The poles warm and cool less than the rest of the planet, which is why the ice there has lasted so long.', [POLAR]],
@@ -89,15 +88,6 @@ const correct: Row[] = [
   ['newsletter', ['It is often said that the polar regions change temperature less than the rest of the world.', 'That is incorrect: polar swings are larger than the global mean.'], []],
   ['newsletter', 'The two curves match closely, but the match by itself does not prove which one drives the other.', []],
 ];
-
-function toItems(rows: Row[], prefix: string): CorpusItem[] {
-  return rows.map(([scenario, text, expect], i) => ({
-    id: `${prefix}-${String(i + 1).padStart(3, '0')}`,
-    scenario,
-    paragraph: typeof text === 'string' ? [text] : text,
-    expect,
-  }));
-}
 
 /** The added items: errors (`err-d-001`...), then correct statements (`ok-d-001`...). */
 export const DIRECTIONS: CorpusItem[] = [...toItems(errors, 'err-d'), ...toItems(correct, 'ok-d')];

@@ -21,7 +21,7 @@
  *   up: Weiss 1974, Marine Chemistry 2, 203-215, doi 10.1016/0304-4203(74)90015-2 (from memory).
  * - The CO2 rise since 1850 comes from fossil fuels and land use (common practice; IPCC AR6 WG1).
  */
-import type { CorpusItem } from './corpus.js';
+import { toItems, type CorpusItem, type Row } from './corpus-item.js';
 
 const LAG = 'logic.lag-rules-out-cause';
 const REGIONAL = 'scope.regional-record-as-global';
@@ -30,7 +30,6 @@ const SINGLE = 'logic.single-cause';
 const CERTAIN = 'logic.ice-core-certainty';
 const SOLUBILITY = 'direction.co2-solubility-falls-with-warming';
 
-type Row = [CorpusItem['scenario'], string | string[], string[]];
 
 const errors: Row[] = [
   // A lag, then a denial of any role.
@@ -117,15 +116,6 @@ const correct: Row[] = [
   ['science desk', 'Colder water can hold more dissolved CO2, which is why the glacial ocean stored extra carbon.', []],
   ['audio guide', 'The warmer the water, the less CO2 it can hold.', []],
 ];
-
-function toItems(rows: Row[], prefix: string): CorpusItem[] {
-  return rows.map(([scenario, text, expect], i) => ({
-    id: `${prefix}-${String(i + 1).padStart(3, '0')}`,
-    scenario,
-    paragraph: typeof text === 'string' ? [text] : text,
-    expect,
-  }));
-}
 
 /** The added items: errors (`err-p-001`...), then correct statements (`ok-p-001`...). */
 export const PHRASINGS: CorpusItem[] = [...toItems(errors, 'err-p'), ...toItems(correct, 'ok-p')];

@@ -19,15 +19,9 @@
  */
 import { DIRECTIONS } from './corpus-directions.js';
 import { PHRASINGS } from './corpus-phrasings.js';
+import { toItems, type CorpusItem, type Row } from './corpus-item.js';
 
-export interface CorpusItem {
-  id: string;
-  scenario: 'audio guide' | 'newsletter' | 'science desk';
-  /** The sentences of one paragraph, in order. */
-  paragraph: string[];
-  /** Rule ids expected anywhere in the paragraph; empty for a correct paragraph. */
-  expect: string[];
-}
+export type { CorpusItem } from './corpus-item.js';
 
 const LAG = 'logic.lag-rules-out-cause';
 const EITHER = 'logic.either-or-causation';
@@ -40,7 +34,6 @@ const SOLUBILITY = 'direction.co2-solubility-falls-with-warming';
 const AIR_AGE = 'direction.trapped-air-younger-than-ice';
 const GLOBAL_ORDER = 'direction.global-co2-ahead-of-warming';
 
-type Row = [CorpusItem['scenario'], string | string[], string[]];
 
 /** Errors: each paragraph makes (or reports without answering) at least one argument error. */
 const errors: Row[] = [
@@ -195,15 +188,6 @@ const correct: Row[] = [
   ['newsletter', 'Warming oceans hold less CO2, so they released some of it to the atmosphere as they warmed.', []],
   ['audio guide', 'Feedbacks work both ways: warming releases CO2, and CO2 causes more warming.', []],
 ];
-
-function toItems(rows: Row[], prefix: string): CorpusItem[] {
-  return rows.map(([scenario, text, expect], i) => ({
-    id: `${prefix}-${String(i + 1).padStart(3, '0')}`,
-    scenario,
-    paragraph: typeof text === 'string' ? [text] : text,
-    expect,
-  }));
-}
 
 /**
  * Every labelled item: errors first (`err-001`...), then correct statements (`ok-001`...), then
