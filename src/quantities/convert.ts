@@ -2,7 +2,7 @@
  * Conversion between units of one dimension through the unit table. Affine: canonical = factor ×
  * value + offset, so absolute temperatures and calendar years convert correctly.
  */
-import type { Dimension } from '../types.js';
+import { DIMENSIONS, type Dimension } from '../types.js';
 import { CANONICAL_UNIT, UNIT_TABLE, type UnitDef } from './unit-table.js';
 
 const BY_KEY = new Map<string, UnitDef>(UNIT_TABLE.map((d) => [`${d.dimension}\u0000${d.id}`, d]));
@@ -12,20 +12,7 @@ const BY_KEY = new Map<string, UnitDef>(UNIT_TABLE.map((d) => [`${d.dimension}\u
  * reading without a stated dimension is the absolute one, as NIST SP 811 B.9 writes the formula;
  * pass the dimension to convert a difference.
  */
-const PREFERENCE: Dimension[] = [
-  'temperature',
-  'temperature-change',
-  'duration',
-  'age',
-  'concentration',
-  'length',
-  'concentration-rate',
-  'temperature-rate',
-  'count',
-  'ratio',
-  'percent',
-  'number',
-];
+const PREFERENCE: Dimension[] = ['temperature', ...DIMENSIONS.filter((d) => d !== 'temperature')];
 
 /** The definition of `id` in `dimension`, or undefined. */
 export function findUnit(id: string, dimension: Dimension): UnitDef | undefined {
