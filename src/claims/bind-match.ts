@@ -14,9 +14,14 @@ import { distance, type TermHits } from './bind-view.js';
  */
 const VAGUE = /(?:^|[^\p{L}])(?:a\s+few|several|(?:tens|hundreds|thousands|millions|dozens)\s+of)(?![\p{L}])/iu;
 
-/** Whether `q` could state the value: any figure can, a vague phrase only a range its interval meets. */
-export function canState(r: Pick<ReferenceValue, 'low' | 'high'>, q: Pick<Quantity, 'text' | 'low' | 'high'>): boolean {
-  return !VAGUE.test(q.text) || (q.low <= r.high && r.low <= q.high);
+/**
+ * Whether `q` could state the value: any figure can; a vague phrase, or a calendar year ("in 1998",
+ * "AD 2000": the date of a drilling season or a paper, not an age of the ice), only a range its
+ * interval meets.
+ */
+export function canState(r: Pick<ReferenceValue, 'low' | 'high'>, q: Pick<Quantity, 'text' | 'low' | 'high'> & { statedUnit?: string }): boolean {
+  const loose = VAGUE.test(q.text) || q.statedUnit === 'CE';
+  return !loose || (q.low <= r.high && r.low <= q.high);
 }
 
 /** Every `all` group has one of its terms in `hits`, and no `none` term is there. */

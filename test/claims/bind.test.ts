@@ -67,3 +67,16 @@ describe('bindQuantities on depths', () => {
     expect(bindQuantities(s, [km], packs).bindings).toEqual([]);
   });
 });
+
+describe('bindQuantities on calendar years', () => {
+  it('does not read the year of a drilling season or a paper as the span of a record', async () => {
+    // Regression: "in 1998" (a calendar year, an age of −48 yr BP) bound to the Vostok record span,
+    // 400,000–423,000 years (Petit et al. 1999, Nature 399, 429-436, doi 10.1038/20859).
+    const packs = await loadPacks([]);
+    for (const s of ['The Vostok core, finished in January 1998, holds a climate record.', 'The Vostok record, published in Nature in 1999, changed the debate.']) {
+      const year = /\d{4}/u.exec(s);
+      const q = { text: year?.[0] ?? '', start: year?.index ?? 0, end: (year?.index ?? 0) + 4, value: 1950 - Number(year?.[0]), low: 1949.5 - Number(year?.[0]), high: 1950.5 - Number(year?.[0]), dimension: 'age' as const, unit: 'yr BP', statedUnit: 'CE' };
+      expect(bindQuantities(s, [q], packs).bindings).toEqual([]);
+    }
+  });
+});
