@@ -179,7 +179,7 @@ function examineSentence(paragraph: string[], index: number, packs: LoadedPacks,
   if (!onTopic) {
     if (!TWO_NUMBERS.test(text)) return undefined;
     const quantities = parseQuantities(text);
-    const drafts = [...checkArithmetic(text, quantities), ...checkUnits(text, quantities, context)];
+    const drafts = [...checkArithmetic(text, quantities, context), ...checkUnits(text, quantities, context)];
     return drafts.length === 0 ? undefined : { quantities, bindings: [], verdicts: [], drafts };
   }
   const quantities = parseQuantities(text);
@@ -188,7 +188,7 @@ function examineSentence(paragraph: string[], index: number, packs: LoadedPacks,
   const reference = checkReferences(text, quantities, bindings, packs);
   const drafts = preferSpecific([
     ...reference.flags,
-    ...checkArithmetic(text, quantities),
+    ...checkArithmetic(text, quantities, context),
     ...checkUnits(text, quantities, context),
     ...checkReasoning(paragraph, index, packs),
   ]);

@@ -6,6 +6,7 @@
  */
 import { writtenInterval as w } from '../quantities/index.js';
 import type { Dimension, Quantity } from '../types.js';
+import { changesAcross, type Previous } from './arithmetic-context.js';
 import { divide, facing, invert, minus, percentChange, rangeSpan, size, type Derived } from './arithmetic-derive.js';
 import { comesToRate, comparesToNext, findPairs, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
 
@@ -15,13 +16,16 @@ export interface Finding {
   computed: Derived;
   /** What the computed value is, in words: "the change from 180 to 280 ppm". */
   measures: string;
+  /** Whose numbers these are, when not the sentence's own alone: "the paragraph's". */
+  basis?: string;
 }
 
 /** One arithmetic rule. */
 export interface ArithmeticRule {
   id: string;
   summary: string;
-  derive: (text: string, qs: Quantity[], pairs: Pair[]) => Finding[];
+  /** `previous` is the sentence before in the same paragraph, read only by rules that span two. */
+  derive: (text: string, qs: Quantity[], pairs: Pair[], previous?: Previous) => Finding[];
 }
 
 const DIFFERENCE: Partial<Record<Dimension, Dimension>> = {
@@ -108,7 +112,7 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
 
 /** The arithmetic rule table. */
 export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
-  { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: changes },
+  { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: (t, qs, p, prev) => [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)] },
   { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: durations },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took.', derive: rates },
   { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: ratios },

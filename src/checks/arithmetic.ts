@@ -1,10 +1,11 @@
 /**
- * Checks the draft's own arithmetic inside one sentence: a change that is not to − from, a rate that
+ * Checks the draft's own arithmetic inside one sentence (and a change whose start is in the
+ * sentence before, src/checks/arithmetic-context.ts): a change that is not to − from, a rate that
  * is not change ÷ duration, a duration that contradicts its start and end dates, a ratio or
  * percentage that contradicts its two values. Tolerances come from the intervals (see
  * src/quantities/interval-rules.ts); correct arithmetic is never flagged.
  */
-import { correctionFigures, formatQuantity, hedgeRule, rewriteQuantity } from '../quantities/index.js';
+import { correctionFigures, formatQuantity, hedgeRule, parseQuantities, rewriteQuantity } from '../quantities/index.js';
 import type { FlagDraft, Quantity } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
 import { disjoint, levelFor } from './arithmetic-levels.js';
@@ -26,12 +27,19 @@ export function correctionFor(q: Quantity, value: number): string {
 
 const shown = (q: Quantity, d: Derived): string => formatQuantity(d.value, q.unit, q.statedUnit, correctionFigures(q));
 
-/** Every arithmetic contradiction in one sentence, with the right value in the correction. */
-export function checkArithmetic(text: string, quantities: Quantity[]): FlagDraft[] {
+/**
+ * Every arithmetic contradiction in one sentence, with the right value in the correction.
+ * `context` is the sentences before it in the same paragraph, in order; the last one may hold the
+ * start of a change this sentence states ("... stood near 190 ppm. By then it had climbed to 280
+ * ppm, a rise of 110 ppm."). Flags always fall on this sentence's own words.
+ */
+export function checkArithmetic(text: string, quantities: Quantity[], context: readonly string[] = []): FlagDraft[] {
+  const last = context[context.length - 1];
+  const previous = last === undefined ? undefined : { text: last, quantities: parseQuantities(last) };
   const pairs = findPairs(text, quantities);
   const flags: FlagDraft[] = [];
   for (const rule of ARITHMETIC_RULES) {
-    for (const { stated, computed, measures } of rule.derive(text, quantities, pairs)) {
+    for (const { stated, computed, measures, basis } of rule.derive(text, quantities, pairs, previous)) {
       if (!disjoint(stated, computed)) continue;
       const right = shown(stated, computed);
       flags.push({
@@ -39,7 +47,7 @@ export function checkArithmetic(text: string, quantities: Quantity[]): FlagDraft
         level: levelFor(stated, computed),
         start: stated.start,
         end: stated.end,
-        reason: `By the sentence's own numbers, ${measures} is ${right}, not ${stated.text}.`,
+        reason: `By ${basis ?? "the sentence's"} own numbers, ${measures} is ${right}, not ${stated.text}.`,
         claimed: { text: stated.text, low: stated.low, high: stated.high, unit: stated.unit },
         reference: { id: rule.id, measures, text: right, low: computed.low, high: computed.high, unit: stated.unit },
         correction: correctionFor(stated, computed.value),
