@@ -78,9 +78,15 @@ function safeRegex(source: string, what: string, file: string): RegExp {
 }
 
 // The first word of each phrase, cut to four letters so inflections still pass ("lagged" → "lagg").
+/** Words that begin many cue phrases and say nothing about whether a phrase can match. */
+const ARTICLES = new Set(['the', 'a', 'an']);
+
 function prefilterFor(phrases: readonly string[]): RegExp {
   const stems = phrases.map((p) => {
-    const first = p.toLowerCase().replace(/-/gu, ' ').trim().split(/\s+/u)[0]?.replace(/\*$/u, '') ?? '';
+    const words = p.toLowerCase().replace(/-/gu, ' ').trim().split(/\s+/u);
+    // A leading article matches almost every sentence; the word after it must be there as well.
+    const lead = ARTICLES.has(words[0] ?? '') && words.length > 1 && words[1] !== '...' ? words[1] : words[0];
+    const first = lead?.replace(/\*$/u, '') ?? '';
     return [...first].slice(0, 4).join('').replace(/[.*+?^${}()|[\]\\]/gu, '\\$&');
   });
   const body = [...new Set(stems.filter((s) => s.length > 0 && s !== '...'))].join('|');
