@@ -3,8 +3,9 @@ import { parseQuantities } from '../../src/quantities/index.js';
 import { rewriteQuantity } from '../../src/quantities/rewrite-quantity.js';
 
 describe('rewriteQuantity', () => {
-  // Scale words (thousand = 10^3, million = 10^6, billion = 10^9; SI prefixes k, M, G, NIST SP 811
-  // section 4.3): a correction keeps the draft's scale word unless the value would fall below 1 in it.
+  // Scale words: thousand = 10^3, million = 10^6, billion = 10^9 (short scale, as the SI prefixes
+  // k, M, G; NIST SP 811 section number from memory). A correction keeps the draft's scale word
+  // unless the value would fall below 1 in it.
   it.each([
     ['It spans 0.8 billion years.', 800_000, '800 thousand years'],
     ['It spans 2.6 million years.', 2_580_000, '2.58 million years'],
