@@ -34,7 +34,11 @@ function detectRegional({ index, read, sentence, words }: DetectInput): Cue[] {
     r !== undefined && (r.s.of('entities', 'ice-core').length + r.s.of('regions', 'antarctic').length + r.s.of('regions', 'greenland').length > 0 || r.s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text)));
   // "This tells us that the whole Earth was 9 °C colder": the record read may be named one sentence back.
   const record = recordIn(here) || (ANAPHORIC_READING.test(s.words.map((w) => w.text).join(' ')) && recordIn(read(index - 1)));
-  const global = s.of('regions', 'global')[0];
+  // A record in one clause and the globe in the next ("At Dome C, ...: for the planet as a whole, ...")
+  // set the two side by side; only a record and the globe in one clause equate them.
+  const recordClauses = new Set([...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].map((h) => s.words[h.first]?.clause));
+  const anaphoric = !recordIn(here) && record;
+  const global = s.of('regions', 'global').find((g) => anaphoric || recordClauses.has(s.words[g.first]?.clause) || s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text) && w.clause === s.words[g.first]?.clause));
   const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text));
   if (!record || global === undefined || !temperature) return [];
   // "colder than today" compares two times, not the record with the globe: no contrast.
