@@ -31,6 +31,7 @@ import { checkDocument, type DocumentCheck } from './check-document.js';
 import { codeActionsOf, COPY_CITATION_COMMAND } from './code-actions.js';
 import { createKeyedDebounce } from './debounce.js';
 import { diagnosticOf, DIAGNOSTIC_SOURCE } from './diagnostics.js';
+import { createFrameGuard } from './frame-guard.js';
 import { hoverMarkdown } from './hover.js';
 import { createPositionMap, type PositionMap } from './positions.js';
 import type { Workspace, WorkspaceLoader } from './workspace.js';
@@ -63,7 +64,8 @@ interface Checked {
 
 /** Starts the server on the given streams; it runs until the client sends `exit`. */
 export function startServer(options: ServerOptions): Connection {
-  const connection = createConnection(options.input, options.output);
+  const guard = createFrameGuard((why) => process.stderr.write(`firnline lsp: dropped a malformed message: ${why}\n`));
+  const connection = createConnection(options.input.pipe(guard), options.output);
   const documents = new TextDocuments(TextDocument);
   const checked = new Map<string, Checked>();
   const debounce = createKeyedDebounce(options.debounceMs ?? DEFAULT_DEBOUNCE_MS);

@@ -7,7 +7,8 @@
 import { sourceLink } from '../report/format-source.js';
 import type { Source } from '../types.js';
 
-const AUTHORS_AND_YEAR = /^(?<authors>.+?)\s*\((?<year>\d{4}[a-z]?(?:\/\d{4})?)\)/u;
+// `(1999)`, `(1999a)`, `(1999/2001)`; a full date `(2024-04-05)` gives its year.
+const AUTHORS_AND_YEAR = /^(?<authors>.+?)\s*\((?<year>\d{4}(?:[a-z]|\/\d{4})?)(?:-\d{2}){0,2}\)/u;
 
 /** `Petit et al. 1999` from `Petit, J. R., Jouzel, J., ... & Stievenard, M. (1999). Climate ...`. */
 export function shortCitation(cite: string): string {
@@ -30,7 +31,8 @@ export function shortCitationWithLink(source: Source): string {
  * `et al.` counts as many; a body such as `IPCC` is one author.
  */
 function authorSurnames(authors: string): string[] {
-  const trimmed = authors.replace(/[.,\s]+$/u, '');
+  // "EPICA community members (Augustin, L. et al.)": the body is the author.
+  const trimmed = authors.replace(/\s*\([^)]*\)/gu, '').replace(/[.,\s]+$/u, '');
   if (/\bet al\b/u.test(trimmed)) {
     const first = trimmed.split(/,|\bet al\b/u)[0]?.trim() ?? trimmed;
     return [first, '', ''];

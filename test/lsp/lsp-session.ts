@@ -16,6 +16,11 @@ export interface LspSession {
   published: PublishDiagnosticsParams[];
   /** Waits for the next diagnostics of `uri` (after those already seen) that pass `test`. */
   diagnostics(uri: string, test?: (d: Diagnostic[]) => boolean): Promise<Diagnostic[]>;
+  /**
+   * The server's answer to a request written by hand (outside the connection, which ignores
+   * answers it did not ask for), read from the raw output stream.
+   */
+  rawAnswer(id: string): Promise<unknown>;
   /** Everything the server wrote to standard error. */
   stderr(): string;
   /** Resolves with the exit status once the process has ended. */
@@ -29,6 +34,8 @@ export function startSession(cwd: string, ...extra: string[]): LspSession {
     stdio: 'pipe',
   });
   let err = '';
+  let out = '';
+  child.stdout.on('data', (chunk: Buffer) => void (out += chunk.toString('utf8')));
   child.stderr.on('data', (chunk: Buffer) => void (err += chunk.toString('utf8')));
   const exited = new Promise<number | null>((done) => child.on('exit', (code) => done(code)));
   const connection = createMessageConnection(new StreamMessageReader(child.stdout), new StreamMessageWriter(child.stdin));
@@ -61,6 +68,15 @@ export function startSession(cwd: string, ...extra: string[]): LspSession {
       new Promise((done) => {
         waiting.push({ uri, from: seen.get(uri) ?? 0, test, done });
         settle();
+      }),
+    rawAnswer: (id) =>
+      new Promise((done) => {
+        const look = () => {
+          const body = out.split(/Content-Length: \d+\r\n\r\n/u).find((b) => b.includes(`"id":${JSON.stringify(id)}`));
+          if (body === undefined) setTimeout(look, 20);
+          else done(JSON.parse(body));
+        };
+        look();
       }),
     stderr: () => err,
     exited,

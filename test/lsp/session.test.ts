@@ -123,6 +123,11 @@ describe('firnline lsp --stdio', () => {
     for (const body of ['{"jsonrpc": "2.0", "method": ', '{"hello": "world"}']) {
       session.child.stdin.write(`Content-Length: ${Buffer.byteLength(body)}\r\n\r\n${body}`);
     }
+    // Header blocks without the Content-Length the LSP base protocol requires, then a good request
+    // written in the same chunk: it must be answered at once, not left waiting for more input.
+    const hover = JSON.stringify({ jsonrpc: '2.0', id: 'after-junk', method: 'textDocument/hover', params: { textDocument: { uri: uriOf('none.md') }, position: { line: 0, character: 0 } } });
+    session.child.stdin.write(`garbage line\r\n\r\nContent-Type: text/plain\r\n\r\nContent-Length: ${Buffer.byteLength(hover)}\r\n\r\n${hover}`);
+    await expect(session.rawAnswer('after-junk')).resolves.toEqual({ jsonrpc: '2.0', id: 'after-junk', result: null });
     // A request whose parameters miss the document: an error answer, not a crash.
     await expect(session.connection.sendRequest('textDocument/hover', {})).rejects.toThrow();
     const uri = uriOf('after.md');
