@@ -27,12 +27,13 @@ import { isUserError, FirnlineError } from '../errors.js';
 import { SETTINGS_FILE } from '../rulepack/settings.js';
 import type { Draft } from '../types.js';
 import { VERSION } from '../version.js';
-import { checkDocument, type DocumentCheck } from './check-document.js';
+import type { DocumentCheck } from './check-document.js';
 import { codeActionsOf, COPY_CITATION_COMMAND } from './code-actions.js';
 import { createKeyedDebounce } from './debounce.js';
 import { diagnosticOf, DIAGNOSTIC_SOURCE } from './diagnostics.js';
 import { createFrameGuard } from './frame-guard.js';
 import { hoverMarkdown } from './hover.js';
+import { createDocumentChecker, type DocumentChecker } from './incremental-check.js';
 import { createPositionMap, type PositionMap } from './positions.js';
 import type { Workspace, WorkspaceLoader } from './workspace.js';
 
@@ -68,6 +69,8 @@ export function startServer(options: ServerOptions): Connection {
   const connection = createConnection(options.input.pipe(guard), options.output);
   const documents = new TextDocuments(TextDocument);
   const checked = new Map<string, Checked>();
+  // One checker per open document: it keeps the claims of unchanged blocks between checks.
+  const checkers = new Map<string, DocumentChecker>();
   const debounce = createKeyedDebounce(options.debounceMs ?? DEFAULT_DEBOUNCE_MS);
   const reloads = createKeyedDebounce(100);
   let root = options.fallbackRoot;
@@ -108,12 +111,18 @@ export function startServer(options: ServerOptions): Connection {
       const file = filePathOf(uri);
       const shown = file === undefined ? uri : toPosix(relative(root, file)) || basename(file);
       const projectPath = file === undefined ? uri : toPosix(relative(workspace.projectRoot, file));
-      const check = checkDocument(text, format, shown, projectPath, workspace.setup);
+      let checker = checkers.get(uri);
+      if (checker === undefined) {
+        checker = createDocumentChecker(workspace.setup);
+        checkers.set(uri, checker);
+      }
+      const check = checker.check(text, format, shown, projectPath);
       const positions = createPositionMap(text);
       checked.set(uri, { version: document.version, check, positions });
       publish(uri, check.flags.map((flag) => diagnosticOf(flag, positions)), document.version);
     } catch (error) {
       checked.delete(uri);
+      checkers.delete(uri);
       const message = describeError(error);
       connection.console.error(`firnline: could not check ${uri}: ${message}`);
       publish(uri, [problemDiagnostic(message)], document.version);
@@ -134,6 +143,7 @@ export function startServer(options: ServerOptions): Connection {
       const next = await options.loadWorkspace(root);
       workspace = next;
       loadProblem = undefined;
+      checkers.clear();
       watchFiles(next.watched);
       log(`firnline: settings loaded (${next.setup.packs.packs.map((p) => `${p.id} ${p.version}`).join(', ')})`);
     } catch (error) {
@@ -212,6 +222,7 @@ export function startServer(options: ServerOptions): Connection {
   documents.onDidClose(({ document }) => {
     debounce.cancel(document.uri);
     checked.delete(document.uri);
+    checkers.delete(document.uri);
     publish(document.uri, []);
   });
 

@@ -1,12 +1,12 @@
-// A real editor session with `firnline lsp --stdio`: a child process running the CLI from the
-// TypeScript sources (test/review/ts-register.mjs), spoken to over its standard input and output
-// with vscode-jsonrpc, the JSON-RPC library the LSP's reference client uses.
+// A real editor session with `firnline lsp --stdio`: a child process running the built CLI through
+// bin/firnline.js, as an editor starts it (`npm test` builds first), spoken to over its standard
+// input and output with vscode-jsonrpc, the JSON-RPC library the LSP's reference client uses.
 import { spawn, type ChildProcessWithoutNullStreams } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { createMessageConnection, StreamMessageReader, StreamMessageWriter, type MessageConnection } from 'vscode-jsonrpc/node';
 import type { Diagnostic, PublishDiagnosticsParams } from 'vscode-languageserver';
 
-const review = (p: string) => fileURLToPath(new URL(`../review/${p}`, import.meta.url));
+const LAUNCHER = fileURLToPath(new URL('../../bin/firnline.js', import.meta.url));
 
 /** One running server and the client side of its connection. */
 export interface LspSession {
@@ -29,7 +29,7 @@ export interface LspSession {
 
 /** Starts `firnline lsp --stdio` in `cwd` (extra arguments after `--stdio`). */
 export function startSession(cwd: string, ...extra: string[]): LspSession {
-  const child = spawn(process.execPath, ['--import', review('ts-register.mjs'), review('firnline-from-source.mjs'), 'lsp', '--stdio', ...extra], {
+  const child = spawn(process.execPath, [LAUNCHER, 'lsp', '--stdio', ...extra], {
     cwd,
     stdio: 'pipe',
   });

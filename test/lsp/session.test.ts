@@ -35,7 +35,8 @@ const uriOf = (name: string) => pathToFileURL(join(dir, name)).href;
 const open = (s: LspSession, uri: string, text: string, languageId = 'markdown') =>
   s.connection.sendNotification('textDocument/didOpen', { textDocument: { uri, languageId, version: 1, text } });
 
-describe('firnline lsp --stdio', () => {
+// Each test starts a server process; on a busy machine that takes seconds (not a speed target).
+describe('firnline lsp --stdio', { timeout: 90_000 }, () => {
   it('flags a wrong claim at its exact range, fixes it, clears the flag, and shuts down cleanly', async () => {
     session = startSession(dir);
     const init = await initialize(session, pathToFileURL(dir).href);
