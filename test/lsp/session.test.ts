@@ -10,6 +10,7 @@ import type { CodeAction, Diagnostic, Hover } from 'vscode-languageserver';
 import { TextDocument } from 'vscode-languageserver-textdocument';
 import { appendSignoffs } from '../../src/review/append-signoffs.js';
 import { claimIdOf } from '../../src/review/claim-id.js';
+import { runCli } from '../cli/run-cli.js';
 import { initialize, shutdown, startSession, type LspSession } from './lsp-session.js';
 
 // The Vostok record spans about 420,000 years, not 800,000: Petit et al. (1999), Nature 399,
@@ -178,5 +179,43 @@ describe('firnline lsp --stdio', { timeout: 90_000 }, () => {
     await session.connection.sendNotification('workspace/didChangeWatchedFiles', { changes: [{ uri: uriOf('firnline.yaml'), type: 2 }] });
     expect(await session.diagnostics(uri, (d: Diagnostic[]) => d.length === 0)).toEqual([]);
     expect(await shutdown(session)).toBe(0);
+  });
+
+  it('reloads when a pack changes on disk, with no file events from the client', async () => {
+    // A team pack that turns the Vostok span into a pattern rule of its own level; the client here
+    // registers no file watching, so only the server's own watcher can see the change.
+    await writeFile(join(dir, 'firnline.yaml'), 'packs: [house.yaml]\n');
+    const pack = (level: string) => `pack: house\nversion: '1.0.0'\nas_of: 2026-01-01\npatterns:\n  - id: house.old-span\n    level: ${level}\n    reason: Our style guide retired this figure.\n    regex: '800,000 years'\n`;
+    await writeFile(join(dir, 'house.yaml'), pack('note'));
+    session = startSession(dir);
+    await initialize(session, pathToFileURL(dir).href);
+    const uri = uriOf('notes.md');
+    await open(session, uri, `${WRONG}\n`);
+    const first = await session.diagnostics(uri, (d) => d.some((x) => x.code === 'house.old-span'));
+    expect(first.find((d) => d.code === 'house.old-span')?.severity).toBe(3); // note → Information
+    await writeFile(join(dir, 'house.yaml'), pack('error'));
+    const after = await session.diagnostics(uri, (d) => d.some((x) => x.code === 'house.old-span' && x.severity === 1));
+    expect(after.find((d) => d.code === 'house.old-span')?.severity).toBe(1); // error → Error
+    expect(await shutdown(session)).toBe(0);
+  });
+
+  it('shows a broken firnline.yaml as one line at file:line:column, and recovers once it is fixed', async () => {
+    await writeFile(join(dir, 'firnline.yaml'), 'levels:\n  value.vostok-record-span: loud\n');
+    session = startSession(dir);
+    await initialize(session, pathToFileURL(dir).href);
+    const uri = uriOf('draft.md');
+    await open(session, uri, `${WRONG}\n`);
+    const [problem] = await session.diagnostics(uri, (d) => d.length > 0);
+    expect(problem?.message).toMatch(/^Firnline could not check this draft: .*firnline\.yaml:2:\d+: /u);
+    await writeFile(join(dir, 'firnline.yaml'), 'levels:\n  value.vostok-record-span: warning\n');
+    const fixed = await session.diagnostics(uri, (d) => d.some((x) => x.code === 'value.vostok-record-span'));
+    expect(fixed.map((d) => [d.code, d.severity])).toEqual([['value.vostok-record-span', 2]]); // the level from the settings
+    expect(await shutdown(session)).toBe(0);
+  });
+
+  it('refuses to start without --stdio, in one line', async () => {
+    const run = await runCli(['lsp'], dir);
+    expect(run.code).toBe(2);
+    expect(run.stderr).toBe('the server talks over standard input and output only: run `firnline lsp --stdio`\n');
   });
 });
