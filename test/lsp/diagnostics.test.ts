@@ -1,7 +1,6 @@
 // Flags as LSP diagnostics. LSP 3.17, "Diagnostic": severity 1 Error, 2 Warning, 3 Information,
 // 4 Hint; `code`, `codeDescription.href` (a URI), `source`, `message`. SARIF 2.1.0 `result.level`
-// (§3.27.10, section number from memory) names
-// the levels error, warning and note.
+// (§3.27.10, section number from memory) names the levels error, warning and note.
 import { describe, expect, it } from 'vitest';
 import { diagnosticOf } from '../../src/lsp/diagnostics.js';
 import { createPositionMap } from '../../src/lsp/positions.js';
