@@ -8,6 +8,7 @@ import type { FirnlineError } from '../errors.js';
 import type { Source } from '../types.js';
 import type { RawPack } from './raw-pack.js';
 import { resolveReference } from './resolve-reference.js';
+import { resolveSource } from './resolve-source.js';
 import type { DirectionFact, PatternRule, ReasoningCheck, RulePack, Term } from './types.js';
 import type { YamlFile } from './yaml-file.js';
 import { regexProblem } from './regex-problem.js';
@@ -34,9 +35,7 @@ export interface PackScope {
 export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): RulePack | FirnlineError[] {
   const raw = yaml.data as RawPack;
   const errors: FirnlineError[] = [];
-  const own = (raw.sources ?? []).map(({ id, cite, doi, url, how }) => ({
-    id, cite, how, ...(doi === undefined ? {} : { doi }), ...(url === undefined ? {} : { url }),
-  }));
+  const own = (raw.sources ?? []).map(resolveSource);
   const sources = new Map(known.sources);
   for (const s of own) sources.set(s.id, s);
   const terms = new Set([...known.terms, ...(raw.terms ?? []).map((t) => t.id)]);
