@@ -41,7 +41,7 @@ export const FULL_STYLE = `<?xml version="1.0" encoding="utf-8"?>
 <style xmlns="http://purl.org/net/xbiblio/csl" class="in-text" version="1.0" default-locale="en-US">
   ${INFO('firnline-full', 'Firnline full reference')}
   <macro name="names"><names variable="author"><name name-as-sort-order="all" sort-separator=", " initialize-with=". " delimiter=", " delimiter-precedes-last="never" and="symbol"/><substitute><text variable="publisher"/></substitute></names></macro>
-  <macro name="year"><choose><if variable="issued"><date variable="issued" form="numeric" date-parts="year-month-day"/></if><else><text term="no date" form="short"/></else></choose></macro>
+  <macro name="year"><choose><if variable="issued"><date variable="issued" delimiter="-"><date-part name="year"/><date-part name="month" form="numeric-leading-zeros"/><date-part name="day" form="numeric-leading-zeros"/></date></if><else><text term="no date" form="short"/></else></choose></macro>
   <macro name="container">
     <choose>
       <if type="chapter"><group delimiter=" "><text term="in" text-case="capitalize-first" suffix=":"/><group delimiter=", "><text variable="container-title"/><group delimiter=" "><text term="chapter" text-case="capitalize-first"/><text variable="chapter-number"/></group><group delimiter=" "><text term="section" form="short"/><text variable="section"/></group><text variable="publisher"/><text variable="page"/></group></group></if>

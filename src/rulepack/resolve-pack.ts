@@ -36,6 +36,11 @@ export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): Rule
   const raw = yaml.data as RawPack;
   const errors: FirnlineError[] = [];
   const own = (raw.sources ?? []).map(resolveSource);
+  (raw.sources ?? []).forEach((s, i) => {
+    if (s.cite === undefined && (s.kind === undefined || s.title === undefined)) {
+      errors.push(yaml.errorAt('pack-schema', ['sources', i], 'a source needs `cite`, or `kind` and `title` (with author, issued, container-title... as in CSL-JSON)'));
+    }
+  });
   const sources = new Map(known.sources);
   for (const s of own) sources.set(s.id, s);
   const terms = new Set([...known.terms, ...(raw.terms ?? []).map((t) => t.id)]);
