@@ -57,6 +57,13 @@ export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): Rule
 
   const termList: Term[] = (raw.terms ?? []).map((t) => ({ id: t.id, words: t.words }));
   const references = (raw.reference_values ?? []).flatMap((r, i) => resolveReference(scope, r, ['reference_values', i]) ?? []);
+  const valueIds = new Set((raw.reference_values ?? []).map((r) => r.id));
+  (raw.reference_values ?? []).forEach((r, i) => {
+    const newer = r.superseded_by;
+    if (newer !== undefined && !valueIds.has(newer) && !known.defined.has(`reference_values:${newer}`)) {
+      errors.push(yaml.errorAt('pack-unknown-value', ['reference_values', i, 'superseded_by'], `unknown reference value id \`${newer}\`; superseded_by names the value that replaced this one`));
+    }
+  });
   const directions: DirectionFact[] = (raw.direction_facts ?? []).map((d, i) => {
     const path = ['direction_facts', i];
     checkRegexes(scope, d.wrong, [...path, 'wrong']);
