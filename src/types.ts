@@ -250,4 +250,13 @@ export interface CheckResult {
   flags: Flag[];
   /** Files passed over with the reason (binary, no topic term...), for the report. */
   skipped: { file: string; reason: string }[];
+  /** The rule packs the run checked against, with the date their values were last reviewed. */
+  packs?: PackInfo[];
+}
+
+/** A rule pack as a report names it: id, version and as-of date. */
+export interface PackInfo {
+  id: string;
+  version: string;
+  asOf: string;
 }
