@@ -39,10 +39,20 @@ export function memoryMark(source: Source): string {
  */
 export function shortReference(source: Source): string {
   if (source.short !== undefined) return source.short;
-  const head = /^.*?\(\d{4}[^)]*\)/u.exec(source.cite)?.[0] ?? source.cite;
-  const names = /^([^,(]+),[^(]*?(?:,|&)/u.test(head) ? head.replace(/^([^,]+),[^(]*\(/u, '$1 et al. (') : head;
   const link = source.doi === undefined ? source.url : `doi:${source.doi.replace(DOI_PREFIX, '')}`;
-  return [names.replace(/\s*\((\d{4}[^)]*)\)/u, ' $1').trim(), link].filter((x) => x !== undefined && x !== '').join(', ');
+  const m = /^(.*?)\s*\((\d{4})[^)]*\)/u.exec(source.cite);
+  const head = m === null ? source.cite : `${namesOf(m[1] ?? '')} ${m[2] ?? ''}`;
+  return [head.trim(), link].filter((x) => x !== undefined && x !== '').join(', ');
+}
+
+/** `Jouzel et al.`, `Sigman & Boyle`, `Berger` from an author list written as text. */
+function namesOf(authors: string): string {
+  const family = (text: string) => (text.split(',')[0] ?? '').trim();
+  if (/\bet al\b/u.test(authors)) return `${family(authors)} et al.`;
+  const [before, after] = authors.split(/\s+(?:&|and)\s+/u);
+  if (after === undefined) return family(authors);
+  // "Family, I. & Other, J.": two people; "Family, I., Second, J. & Third, K.": three or more.
+  return /\.,\s*\S/u.test(before ?? '') ? `${family(authors)} et al.` : `${family(before ?? '')} & ${family(after)}`;
 }
 
 /**
