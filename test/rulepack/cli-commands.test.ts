@@ -85,6 +85,10 @@ describe('firnline explain', () => {
     expect(out).toMatch(/^value\.co2-lgm \(default level: warning\)\nChecks the atmospheric CO2 at the Last Glacial Maximum/u);
     expect(out).toContain('Accepted range: 180–200 ppm.');
     expect(out).toContain('doi: 10.1017/9781009157896.009');
+    // The full reference: every author and the chapter of the assessment (IPCC AR6 WGI ch. 7, Forster et al. 2021).
+    expect(out).toContain('  - Forster, P., Storelvmo, T., Armour, K.');
+    expect(out).toContain('In: Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, Chapter 7, Cambridge University Press, 923–1054. https://doi.org/10.1017/9781009157896.009');
+    expect(out).toContain('    kind: assessment\n');
   });
 
   it('accepts a value id without its prefix, and a reasoning check id', async () => {
