@@ -69,9 +69,9 @@ function supersededMatch(r: ReferenceValue, q: Quantity, packs: LoadedPacks): Re
 }
 
 function supersededReason(r: ReferenceValue, q: Quantity, older: ReferenceValue, range: string): string {
-  const when = older.asOf === undefined ? '' : ` as of ${older.asOf.slice(0, 4)}`;
+  const when = older.asOf === undefined ? 'an earlier figure' : `the figure of ${older.asOf.slice(0, 4)}`;
   const now = r.asOf === undefined ? '' : ` (as of ${r.asOf})`;
-  return `The draft gives ${q.text} for the ${midSentence(r.measures)}: right${when} (${older.wording}), since superseded; the sources now give ${range}${now}`;
+  return `The draft gives ${q.text} for the ${midSentence(r.measures)}: ${when}, right when published and since superseded; the sources now give ${range}${now}`;
 }
 
 function reasonFor(r: ReferenceValue, q: Quantity, range: string, aboutToday: boolean): string {
