@@ -4,7 +4,9 @@
  * 1-based line and column (code points).
  */
 export { findDrafts, DRAFT_EXTENSIONS, type DraftFilters } from './discover.js';
-export { readDraft, readDraftText, draftFromText, draftFormat } from './read-draft.js';
+export { readDraft, readDraftText, readWordDraft, draftFromText, draftFormat } from './read-draft.js';
+export { readHtmlBlocks } from './html.js';
+export { readWordDocument, wordDraftFrom, type WordDocument } from './word/word-draft.js';
 export { createLineIndex, type LineIndex } from './line-index.js';
 export { readMarkdownBlocks } from './markdown.js';
 export { readPlainTextBlocks } from './plain-text.js';
