@@ -43,15 +43,20 @@ export function readWordParagraphs(document: Document, headingStyles: ReadonlySe
 function visitBody(container: Element, inCell: boolean, headingStyles: ReadonlySet<string>, found: WordParagraph[]): void {
   for (const child of childElements(container)) {
     if (isW(child, 'p')) {
-      const pieces: WordPiece[] = [];
-      const units: string[] = [];
-      collectRuns(child, { inInstruction: false }, pieces, units);
-      const text = units.join('');
+      const { text, pieces } = readParagraphText(child);
       if (/\S/u.test(text)) found.push({ element: child, text, pieces, kind: kindOf(child, inCell, headingStyles) });
     } else if (child.namespaceURI === W_NS && BODY_CONTAINERS.has(child.localName ?? '')) {
       visitBody(child, inCell || child.localName === 'tc', headingStyles, found);
     }
   }
+}
+
+/** One paragraph's text and where each of its characters came from (read again after an edit). */
+export function readParagraphText(paragraph: Element): { text: string; pieces: WordPiece[] } {
+  const pieces: WordPiece[] = [];
+  const units: string[] = [];
+  collectRuns(paragraph, { inInstruction: false }, pieces, units);
+  return { text: units.join(''), pieces };
 }
 
 function collectRuns(container: Element, field: { inInstruction: boolean }, pieces: WordPiece[], units: string[]): void {
