@@ -6,7 +6,7 @@
 export { findDrafts, DRAFT_EXTENSIONS, type DraftFilters } from './discover.js';
 export { readDraft, readDraftText, readWordDraft, draftFromText, draftFormat } from './read-draft.js';
 export { readHtmlBlocks } from './html.js';
-export { readWordDocument, wordDraftFrom, type WordDocument } from './word/word-draft.js';
+export type { WordDocument } from './word/word-draft.js';
 export { createLineIndex, type LineIndex } from './line-index.js';
 export { readMarkdownBlocks } from './markdown.js';
 export { readPlainTextBlocks } from './plain-text.js';

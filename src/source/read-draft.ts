@@ -5,8 +5,7 @@ import type { Draft } from '../types.js';
 import { readMarkdownBlocks } from './markdown.js';
 import { readPlainTextBlocks } from './plain-text.js';
 import { readHtmlBlocks } from './html.js';
-import { readWordDocument, wordDraftFrom } from './word/word-draft.js';
-import { WordPackageError } from './word/word-package.js';
+import { WordPackageError } from './word/word-package-error.js';
 
 /** How many leading bytes are searched for a NUL byte, the mark of a binary file. */
 const SNIFF_BYTES = 8192;
@@ -49,6 +48,8 @@ export async function readWordDraft(path: string, cwd: string): Promise<Draft> {
   } catch (error) {
     throw readError(error as NodeJS.ErrnoException, path);
   }
+  // The Word reader (zip and XML libraries) is loaded only when a Word draft is met.
+  const { readWordDocument, wordDraftFrom } = await import('./word/word-draft.js');
   try {
     return wordDraftFrom(path, readWordDocument(bytes));
   } catch (error) {

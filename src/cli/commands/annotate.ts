@@ -4,8 +4,7 @@ import { readFile, realpath, stat } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import { FirnlineError } from '../../errors.js';
-import { annotateWord } from '../../report/word-comments/annotate-word.js';
-import { WordPackageError } from '../../source/word/word-package.js';
+import { WordPackageError } from '../../source/word/word-package-error.js';
 import { draftFormat } from '../../source/index.js';
 import { countOf, summarize } from '../../report/summarize.js';
 import { LEVELS, type Level } from '../../types.js';
@@ -42,6 +41,8 @@ export function registerAnnotate(program: Command, ctx: CliContext): void {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const result = await checkPaths([draft], checkOptionsOf(run, ctx));
       const bytes = await readFile(resolve(ctx.cwd, draft));
+      // Loaded here, not at start-up: only this command needs the zip and XML libraries.
+      const { annotateWord } = await import('../../report/word-comments/annotate-word.js');
       let copy: Uint8Array;
       try {
         copy = annotateWord(bytes, result.flags, { date: new Date().toISOString().replace(/\.\d+Z$/u, 'Z') });

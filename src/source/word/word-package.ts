@@ -1,5 +1,8 @@
 import { DOMParser, type Document } from '@xmldom/xmldom';
 import { strFromU8, unzipSync } from 'fflate';
+import { WordPackageError } from './word-package-error.js';
+
+export { WordPackageError };
 
 /** The WordprocessingML main namespace (ECMA-376 Part 1, §17). */
 export const W_NS = 'http://schemas.openxmlformats.org/wordprocessingml/2006/main';
@@ -11,9 +14,6 @@ export interface WordPackage {
   parts: Record<string, Uint8Array>;
   document: Document;
 }
-
-/** Why a file could not be read as a Word draft; the caller adds the file name. */
-export class WordPackageError extends Error {}
 
 /**
  * Opens the bytes of a `.docx` file (a zip package, ECMA-376 Part 2) and parses its main document.
