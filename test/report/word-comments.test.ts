@@ -133,3 +133,39 @@ describe('firnline annotate', () => {
     expect(shortCitation({ id: 'i', cite: 'IPCC (2021). Summary for Policymakers.', how: 'read in the source' })).toBe('IPCC 2021');
   });
 });
+
+describe('firnline annotate on a draft with links and comments of its own', () => {
+  it('anchors inside a hyperlink, keeps the comments already there, and takes the next free ids', async () => {
+    const dir = await mkdtemp(join(tmpdir(), 'firnline-annotate-'));
+    const COMMENTS = `<?xml version="1.0" encoding="UTF-8"?><w:comments xmlns:w="${W}"><w:comment w:id="0" w:author="Editor"><w:p><w:r><w:t>Check the intro.</w:t></w:r></w:p></w:comment></w:comments>`;
+    // The Vostok record spans about 420,000 years (Petit et al. 1999, Nature 399, 429-436).
+    const body =
+      heading('Ice cores') +
+      '<w:p><w:commentRangeStart w:id="0"/><w:r><w:t xml:space="preserve">The Vostok ice core spans </w:t></w:r><w:commentRangeEnd w:id="0"/><w:r><w:commentReference w:id="0"/></w:r>' +
+      '<w:hyperlink w:anchor="vostok"><w:r><w:t>800,000 years</w:t></w:r></w:hyperlink><w:r><w:t>.</w:t></w:r></w:p>';
+    const extra = {
+      'word/comments.xml': COMMENTS,
+      'word/_rels/document.xml.rels':
+        '<?xml version="1.0" encoding="UTF-8"?><Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships">' +
+        '<Relationship Id="rId1" Type="http://schemas.openxmlformats.org/officeDocument/2006/relationships/styles" Target="styles.xml"/>' +
+        '<Relationship Id="rId2" Type="http://schemas.openxmlformats.org/officeDocument/2006/relationships/comments" Target="comments.xml"/></Relationships>',
+    };
+    await writeFile(join(dir, 'draft.docx'), buildDocx(body, extra));
+    // The output folder does not exist: one line, exit 2, nothing half-written.
+    const run = await runCli(['annotate', 'draft.docx', '-o', 'out/reviewed.docx'], dir);
+    expect(run.code).toBe(2);
+    expect(run.stderr).toMatch(/^\S*out\/reviewed\.docx: cannot write the annotated copy \(ENOENT\); check the folder exists and is writable\n$/u);
+
+    const ok = await runCli(['annotate', 'draft.docx', '-o', 'reviewed.docx'], dir);
+    expect(ok.code).toBe(1);
+    const parts = unzipSync(await readFile(join(dir, 'reviewed.docx')));
+    const comments = parse(parts['word/comments.xml']).getElementsByTagNameNS(W, 'comment');
+    expect(Array.from({ length: comments.length }, (_, i) => comments.item(i)?.getAttributeNS(W, 'id'))).toEqual(['0', '1']);
+    expect(comments.item(0)?.textContent).toBe('Check the intro.');
+    const document = parse(parts['word/document.xml']);
+    expect(Object.fromEntries(anchoredText(document))).toEqual({ '0': 'The Vostok ice core spans ', '1': '800,000 years' });
+    expect(document.getElementsByTagNameNS(W, 'hyperlink').item(0)?.getElementsByTagNameNS(W, 'commentRangeStart').length).toBe(1);
+    const after = await mammoth.extractRawText({ path: join(dir, 'reviewed.docx') });
+    expect(after.value).toBe((await mammoth.extractRawText({ path: join(dir, 'draft.docx') })).value);
+  });
+});
