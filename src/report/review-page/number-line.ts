@@ -73,8 +73,13 @@ export function numberLine(flag: Flag, id: string): string {
     openEnds(reference.low, reference.high, 29),
     '</g>',
     `<g class="draft"><line x1="${d0.toFixed(1)}" y1="62" x2="${d1.toFixed(1)}" y2="62" class="bar"/>`,
-    Number.isFinite(claimed.low) ? `<circle cx="${d0.toFixed(1)}" cy="62" r="5"/>` : '',
-    Number.isFinite(claimed.high) ? `<circle cx="${d1.toFixed(1)}" cy="62" r="5"/>` : '',
+    // Caps closer than their own size would merge into one blot: a narrow interval gets one round mark.
+    d1 - d0 < 12 && Number.isFinite(claimed.low) && Number.isFinite(claimed.high)
+      ? `<circle cx="${((d0 + d1) / 2).toFixed(1)}" cy="62" r="5"/>`
+      : [
+          Number.isFinite(claimed.low) ? `<circle cx="${d0.toFixed(1)}" cy="62" r="5"/>` : '',
+          Number.isFinite(claimed.high) ? `<circle cx="${d1.toFixed(1)}" cy="62" r="5"/>` : '',
+        ].join(''),
     label(draftText, (d0 + d1) / 2, 82),
     openEnds(claimed.low, claimed.high, 62),
     '</g>',
