@@ -11,7 +11,7 @@ import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
 import type { LoadedPacks } from './rulepack/types.js';
-import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, readDraftText, readWordDraft } from './source/index.js';
+import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, loadHtmlReader, readDraftText, readWordDraft } from './source/index.js';
 import type { Binding, CheckResult, Claim, Draft, Flag, FlagDraft, Level, Quantity, RuleInfo, Sentence, Verdict } from './types.js';
 
 /** How a run is set up. Only `cwd` is required; packs default to the built-in pack. */
@@ -54,6 +54,7 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
 
   const levels = options.levels ?? {};
+  if (files.some((file) => draftFormat(file) === 'html')) await loadHtmlReader();
   if (paths.includes('-')) {
     if (options.readStdin === undefined) throw new FirnlineError('stdin-unavailable', 'standard input cannot be read here');
     addText(result, draftFromText('-', await options.readStdin(), 'markdown'), packs, { topic, levels });
@@ -86,6 +87,7 @@ export async function checkText(
   const path = options.path ?? '-';
   const format = options.format ?? draftFormat(path);
   if (format === 'docx') throw new FirnlineError('not-text', 'a Word draft is not text: check the file with checkPaths', { file: path });
+  if (format === 'html') await loadHtmlReader();
   const draft = { path, text, format };
   addText(result, draft, packs, { topic: createTopicMatcher(packs.topicWords), levels: options.levels ?? {} });
   result.rules = describeFlaggedRules(result.flags, packs);

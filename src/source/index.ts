@@ -4,8 +4,7 @@
  * 1-based line and column (code points).
  */
 export { findDrafts, DRAFT_EXTENSIONS, type DraftFilters } from './discover.js';
-export { readDraft, readDraftText, readWordDraft, draftFromText, draftFormat } from './read-draft.js';
-export { readHtmlBlocks } from './html.js';
+export { readDraft, readDraftText, readWordDraft, draftFromText, draftFormat, loadHtmlReader } from './read-draft.js';
 export type { WordDocument } from './word/word-draft.js';
 export { createLineIndex, type LineIndex } from './line-index.js';
 export { readMarkdownBlocks } from './markdown.js';

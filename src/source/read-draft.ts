@@ -1,10 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { FirnlineError } from '../errors.js';
-import type { Draft } from '../types.js';
+import type { Draft, ProseBlock } from '../types.js';
 import { readMarkdownBlocks } from './markdown.js';
 import { readPlainTextBlocks } from './plain-text.js';
-import { readHtmlBlocks } from './html.js';
 import { WordPackageError } from './word/word-package-error.js';
 
 /** How many leading bytes are searched for a NUL byte, the mark of a binary file. */
@@ -30,9 +29,23 @@ export function draftFormat(path: string): Draft['format'] {
   return ENDINGS.find(([ending]) => lower.endsWith(ending))?.[1] ?? 'text';
 }
 
-/** A draft from text already in memory (standard input, the library's `checkText`); not for Word files. */
+let htmlReader: ((text: string) => ProseBlock[]) | undefined;
+
+/**
+ * Loads the HTML reader (parse5) once. It is loaded only when an HTML draft is met, as the Word
+ * reader is, so a run over Markdown never pays for it; `draftFromText(..., 'html')` needs it first.
+ */
+export async function loadHtmlReader(): Promise<void> {
+  htmlReader ??= (await import('./html.js')).readHtmlBlocks;
+}
+
+/**
+ * A draft from text already in memory (standard input, the library's `checkText`); not for Word
+ * files. For HTML, `loadHtmlReader()` must have been awaited (checkPaths and checkText do).
+ */
 export function draftFromText(path: string, text: string, format: Exclude<Draft['format'], 'docx'>): Draft {
-  const blocks = format === 'markdown' ? readMarkdownBlocks(text) : format === 'html' ? readHtmlBlocks(text) : readPlainTextBlocks(text);
+  if (format === 'html' && htmlReader === undefined) throw new Error('internal: draftFromText(html) before loadHtmlReader()');
+  const blocks = format === 'markdown' ? readMarkdownBlocks(text) : format === 'html' ? (htmlReader?.(text) ?? []) : readPlainTextBlocks(text);
   return { path, text, format, blocks };
 }
 
@@ -67,6 +80,7 @@ export async function readWordDraft(path: string, cwd: string): Promise<Draft> {
 export async function readDraft(path: string, cwd: string): Promise<Draft | { skipped: string }> {
   const format = draftFormat(path);
   if (format === 'docx') return readWordDraft(path, cwd);
+  if (format === 'html') await loadHtmlReader();
   const text = await readDraftText(path, cwd);
   return typeof text === 'string' ? draftFromText(path, text, format) : text;
 }

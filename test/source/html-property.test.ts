@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { readHtmlBlocks } from '../../src/source/index.js';
+import { readHtmlBlocks } from '../../src/source/html.js';
 
 /** A generated piece of HTML: its source, and the prose it carries with where that starts in the source. */
 interface Piece {
