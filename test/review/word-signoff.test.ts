@@ -33,3 +33,24 @@ describe('checklist and sign-off on a Word draft', () => {
     expect(stale.out).toContain('drafts/panels.docx, paragraph 2 (under "The long record")');
   });
 });
+
+describe('--changed-since on a Word draft', () => {
+  it('counts every claim of a changed or new Word draft as changed, since git cannot diff it by line', async () => {
+    const { execFileSync } = await import('node:child_process');
+    const dir = await draftRepository('# Placeholder\n');
+    const git = (...args: string[]) => execFileSync('git', args, { cwd: dir, encoding: 'utf8' });
+    await writeFile(join(dir, 'drafts', 'panels.docx'), panels(RECORD));
+    // New (untracked): every claim is in scope, and none is signed off.
+    const untracked = await firnline(dir, 'check', 'drafts', '--changed-since', 'HEAD', '--require-signoff');
+    expect(untracked.code).toBe(1);
+    expect(untracked.out).toMatch(/0 of 3 claims signed off/u);
+    git('add', '.');
+    git('commit', '-q', '-m', 'Word panels');
+    expect((await firnline(dir, 'check', 'drafts', '--changed-since', 'HEAD', '--require-signoff')).code).toBe(0);
+    // Changed (a binary diff): every claim of the file is in scope again.
+    await writeFile(join(dir, 'drafts', 'panels.docx'), panels(RECORD.replace('800,000', '780,000')));
+    const changed = await firnline(dir, 'check', 'drafts', '--changed-since', 'HEAD', '--require-signoff');
+    expect(changed.code).toBe(1);
+    expect(changed.out).toMatch(/0 of 3 claims signed off/u);
+  });
+});
