@@ -12,7 +12,7 @@ import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
 import type { LoadedPacks } from './rulepack/types.js';
-import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, readDraftText } from './source/index.js';
+import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, loadHtmlReader, readDraftText, readWordDraft } from './source/index.js';
 import type { Binding, CheckResult, Claim, Draft, Flag, FlagDraft, Level, Quantity, RuleInfo, Sentence, Verdict } from './types.js';
 
 /** How a run is set up. Only `cwd` is required; packs default to the built-in pack. */
@@ -55,18 +55,24 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
 
   const levels = options.levels ?? {};
+  if (files.some((file) => draftFormat(file) === 'html')) await loadHtmlReader();
   if (paths.includes('-')) {
     if (options.readStdin === undefined) throw new FirnlineError('stdin-unavailable', 'standard input cannot be read here');
     addText(result, draftFromText('-', await options.readStdin(), 'markdown'), packs, { topic, levels });
   }
   for (const file of files) {
+    const format = draftFormat(file);
+    const projectPath = toPosix(relative(options.projectRoot ?? options.cwd, resolve(options.cwd, file)));
+    if (format === 'docx') {
+      addText(result, await readWordDraft(file, options.cwd), packs, { topic, levels, projectPath });
+      continue;
+    }
     const text = await readDraftText(file, options.cwd);
     if (typeof text !== 'string') {
       result.skipped.push({ file, reason: text.skipped });
       continue;
     }
-    const projectPath = toPosix(relative(options.projectRoot ?? options.cwd, resolve(options.cwd, file)));
-    addText(result, { path: file, text, format: draftFormat(file) }, packs, { topic, levels, projectPath });
+    addText(result, { path: file, text, format }, packs, { topic, levels, projectPath });
   }
   result.rules = describeFlaggedRules(result.flags, packs);
   result.packs = packs.packs.map(({ id, version, asOf }) => ({ id, version, asOf }));
@@ -76,12 +82,15 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
 /** Checks one text in memory: the library entry point (`import { checkText } from 'firnline'`). */
 export async function checkText(
   text: string,
-  options: { path?: string; format?: 'markdown' | 'text'; packs?: LoadedPacks; levels?: Record<string, Level | 'off'> } = {},
+  options: { path?: string; format?: 'markdown' | 'text' | 'html'; packs?: LoadedPacks; levels?: Record<string, Level | 'off'> } = {},
 ): Promise<CheckResult> {
   const packs = options.packs ?? (await loadPacks([]));
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
   const path = options.path ?? '-';
-  const draft = { path, text, format: options.format ?? draftFormat(path) };
+  const format = options.format ?? draftFormat(path);
+  if (format === 'docx') throw new FirnlineError('not-text', 'a Word draft is not text: check the file with checkPaths', { file: path });
+  if (format === 'html') await loadHtmlReader();
+  const draft = { path, text, format };
   addText(result, draft, packs, { topic: createTopicMatcher(packs.topicWords), levels: options.levels ?? {} });
   result.rules = describeFlaggedRules(result.flags, packs);
   result.packs = packs.packs.map(({ id, version, asOf }) => ({ id, version, asOf }));
@@ -109,7 +118,7 @@ function addText(
     result.skipped.push({ file: path, reason: 'names no subject of the packs' });
     return;
   }
-  const draft = 'blocks' in raw ? raw : draftFromText(path, text, format);
+  const draft = 'blocks' in raw ? raw : draftFromText(path, text, format === 'docx' ? 'text' : format);
   const { claims, flags } = checkDraft(draft, packs, options);
   result.claims.push(...claims);
   result.flags.push(...flags);
@@ -144,12 +153,16 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
         const range = blockRange(draft.text, block, sentence.start + start, sentence.start + end);
         return lines.toSpan(range.start, range.end);
       };
-      const flags = applyLevels(drafts, levels).map((d) => resolveFlag(d, draft, sentence, id, toSpan));
+      const span = toSpan(0, sentence.text.length);
+      // A Word draft's line N is its paragraph N (source/word/word-draft.ts).
+      const place = draft.format === 'docx' ? { paragraph: { number: span.start.line, heading: block.heading } } : {};
+      const flags = applyLevels(drafts, levels).map((d) => ({ ...resolveFlag(d, draft, sentence, id, toSpan), ...place }));
       claims.push({
         id,
         file: draft.path,
         ...(projectPath === draft.path ? {} : { projectPath }),
-        span: toSpan(0, sentence.text.length),
+        span,
+        ...place,
         text: sentence.text,
         heading: block.heading,
         quantities,

@@ -71,7 +71,8 @@ export function checklistToMarkdown(checklist: Checklist): string {
 }
 
 function itemLines(item: ChecklistItem): string[] {
-  const lines = [`- [ ] **${item.id}** line ${item.line}: ${item.sentence}`];
+  const where = item.paragraph === undefined ? `line ${item.line}` : `paragraph ${item.paragraph}`;
+  const lines = [`- [ ] **${item.id}** ${where}: ${item.sentence}`];
   const detail = (label: string, text: string) => lines.push(`  - ${label}: ${text}`);
   if (item.values.length > 0) detail('Values read', item.values.map((v) => `"${v.text}" (${range(v)})`).join('; '));
   detail('Verdict', VERDICT_WORDS[item.verdict](item));
