@@ -40,13 +40,14 @@ export function bindFromContext(
   context: TermHits,
   packs: LoadedPacks,
   breaks: number[],
+  vetoes: TermHits = view,
 ): string | 'ambiguous' | undefined {
   if (!REFERS_BACK.test(sentence)) return undefined;
   const own = subjectTerms(sentence, view, packs);
   const serves = (r: ReferenceValue, id: string): boolean => r.binding.all.some((g) => g.includes(id));
   const scored = packs.references
     .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && canState(r, q))
-    .filter((r) => !r.binding.none.some((id) => view.has(id)))
+    .filter((r) => !r.binding.none.some((id) => vetoes.has(id)))
     .filter((r) => own.every(([id, spans]) => serves(r, id) || spans.every((span) => qualifiesServing(sentence, span, view, (other) => serves(r, other)))))
     .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))))
     .map((r) => ({ r, score: scoreWithContext(r, view, q, breaks) }))

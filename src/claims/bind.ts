@@ -17,6 +17,7 @@ import { bindFromContext } from './bind-context.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
+import { vetoView } from './bind-veto.js';
 import { clauseBreaks, termViews, type TermHits } from './bind-view.js';
 
 export type { TermHits } from './bind-view.js';
@@ -25,7 +26,11 @@ export type { TermHits } from './bind-view.js';
 const AMBIGUOUS = 'ambiguous';
 const compiled = new WeakMap<object, Map<string, RegExp>>();
 
-/** Finds every term occurrence (case-insensitive, on word boundaries) in `sentence`. */
+/**
+ * Finds every term occurrence (case-insensitive, on word boundaries) in `sentence`. A term whose id
+ * is another term's id, a dot and a name ("glacial.in-other-words") adds words to that term: its
+ * hits count as the other term's, so a pack adds a synonym without editing an entry.
+ */
 export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
   let regexes = compiled.get(packs);
   if (regexes === undefined) {
@@ -35,9 +40,19 @@ export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
   const hits: TermHits = new Map();
   for (const [id, regex] of regexes) {
     const spans = [...sentence.matchAll(regex)].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
-    if (spans.length > 0) hits.set(id, spans);
+    if (spans.length === 0) continue;
+    const as = extendedTerm(id, packs);
+    hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
   }
   return hits;
+}
+
+/** The term a dotted id extends ("glacial.in-other-words" → "glacial"), or the id itself. */
+export function extendedTerm(id: string, packs: LoadedPacks): string {
+  const dot = id.indexOf('.');
+  if (dot < 0) return id;
+  const base = id.slice(0, dot);
+  return packs.term(base) === undefined ? id : base;
 }
 
 function termRegex(words: string[]): RegExp {
@@ -69,8 +84,9 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (decided.has(i)) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
+    const vetoes = vetoView(sentence, view, q, role);
     const scored = packs.references
-      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view) && canState(r, q))
+      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view, vetoes) && canState(r, q))
       .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
       .sort((a, b) => a.score - b.score);
     const [best, next] = scored;
@@ -78,7 +94,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     // A calendar year ("before the year 2000") dates the sentence; it takes no subject from the one before.
     else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE') {
       contextHits ??= findTerms(context, packs);
-      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks);
+      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes);
       if (found !== undefined) decided.set(i, found);
     }
   });
