@@ -1,5 +1,6 @@
 import { bindQuantities } from './claims/bind.js';
 import { checkArithmetic } from './checks/arithmetic.js';
+import { checkRanks } from './checks/rank/index.js';
 import { checkReasoning } from './checks/reasoning/index.js';
 import { checkReferences } from './checks/reference.js';
 import { checkUnits } from './checks/units.js';
@@ -191,6 +192,7 @@ function examineSentence(paragraph: string[], index: number, packs: LoadedPacks,
     ...checkArithmetic(text, quantities, context),
     ...checkUnits(text, quantities, context),
     ...checkReasoning(paragraph, index, packs),
+    ...checkRanks(text, packs),
   ]);
   const measured = quantities.some((q) => q.dimension !== 'number');
   if (!measured && bindings.length === 0 && drafts.length === 0) return undefined;
