@@ -1,4 +1,5 @@
 import { bindQuantities } from './claims/bind.js';
+import { restoreElidedUnits } from './claims/elided-units.js';
 import { checkArithmetic } from './checks/arithmetic.js';
 import { checkRanks } from './checks/rank/index.js';
 import { checkReasoning } from './checks/reasoning/index.js';
@@ -183,7 +184,8 @@ function examineSentence(paragraph: string[], index: number, packs: LoadedPacks,
     const drafts = [...checkArithmetic(text, quantities, context), ...checkUnits(text, quantities, context)];
     return drafts.length === 0 ? undefined : { quantities, bindings: [], verdicts: [], drafts };
   }
-  const quantities = parseQuantities(text);
+  // "four cycles and EPICA Dome C eight": a number whose unit a neighbour states takes that unit.
+  const quantities = restoreElidedUnits(text, parseQuantities(text));
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
   const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
   const reference = checkReferences(text, quantities, bindings, packs);
