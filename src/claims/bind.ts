@@ -13,6 +13,7 @@
  */
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
+import { clauseView, sharedSubjects } from './bind-clauses.js';
 import { bindFromContext } from './bind-context.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
@@ -70,6 +71,12 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   const roles = quantityRoles(sentence, quantities);
   const lists = parallelLists(sentence, quantities, pairs);
   const views = termViews(sentence, quantities, findTerms(sentence, packs), pairs, lists);
+  // "… began to fade 18,000 years ago and was over by 3,000 years ago": a predicate sharing the subject speaks for itself.
+  for (const c of sharedSubjects(sentence, quantities)) {
+    quantities.forEach((q, i) => {
+      if (q.start >= c.clause[0] && q.end <= c.clause[1]) views[i] = clauseView(sentence, views[i] as TermHits, c, (text) => findTerms(text, packs));
+    });
+  }
   const breaks = clauseBreaks(sentence);
   // Per quantity: the value it binds, AMBIGUOUS, or null when its list left it unbound.
   const decided = new Map<number, string | null>();
