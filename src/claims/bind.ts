@@ -13,6 +13,7 @@
  */
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
+import { bindApposition } from './bind-apposition.js';
 import { clauseView, sharedSubjects } from './bind-clauses.js';
 import { bindFromContext } from './bind-context.js';
 import { bindList, parallelLists } from './bind-list.js';
@@ -70,7 +71,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   const pairs = endpointPairs(sentence, quantities);
   const roles = quantityRoles(sentence, quantities);
   const lists = parallelLists(sentence, quantities, pairs);
-  const views = termViews(sentence, quantities, findTerms(sentence, packs), pairs, lists);
+  const hits = findTerms(sentence, packs);
+  const views = termViews(sentence, quantities, hits, pairs, lists);
   // "… began to fade 18,000 years ago and was over by 3,000 years ago": a predicate sharing the subject speaks for itself.
   for (const c of sharedSubjects(sentence, quantities)) {
     quantities.forEach((q, i) => {
@@ -87,6 +89,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     for (const b of outcome.bindings) decided.set(b.quantityIndex, b.referenceId);
   }
   let contextHits: TermHits | undefined;
+  let fromApposition: string | undefined;
   quantities.forEach((q, i) => {
     if (decided.has(i)) return;
     const view = views[i] as TermHits;
@@ -98,6 +101,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
       .sort((a, b) => a.score - b.score);
     const [best, next] = scored;
     if (best !== undefined) decided.set(i, next !== undefined && next.score === best.score ? AMBIGUOUS : best.r.id);
+    else if ((fromApposition = bindApposition(sentence, q, role, view, hits, packs)) !== undefined) decided.set(i, fromApposition);
     // A calendar year ("before the year 2000") dates the sentence; it takes no subject from the one before.
     else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE') {
       contextHits ??= findTerms(context, packs);
