@@ -128,7 +128,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
     sentences.forEach((sentence, index) => {
-      const found = examineSentence(paragraph, index, packs, topic.test(sentence.text));
+      const found = examineSentence(paragraph, index, packs, topic.test(sentence.text), () => topic.test(paragraph[index - 1] ?? ''));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -175,10 +175,18 @@ const TWO_NUMBERS = /\d[^\d]+\d/u;
  * counts as a claim when they flag it: "from 12,900 to 11,700 years ago: a cold spell of some 2,000
  * years" is wrong whatever its subject. Undefined when the sentence holds no claim.
  */
-function examineSentence(paragraph: string[], index: number, packs: LoadedPacks, onTopic: boolean): SentenceFindings | undefined {
+function examineSentence(
+  paragraph: string[],
+  index: number,
+  packs: LoadedPacks,
+  onTopic: boolean,
+  previousOnTopic: () => boolean,
+): SentenceFindings | undefined {
   const text = paragraph[index] ?? '';
   const context = paragraph.slice(0, index);
   if (!onTopic) {
+    const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs) : undefined;
+    if (carried !== undefined) return carried;
     if (!TWO_NUMBERS.test(text)) return undefined;
     const quantities = parseQuantities(text);
     const drafts = [...checkArithmetic(text, quantities, context), ...checkUnits(text, quantities, context)];
@@ -198,6 +206,24 @@ function examineSentence(paragraph: string[], index: number, packs: LoadedPacks,
   ]);
   const measured = quantities.some((q) => q.dimension !== 'number');
   if (!measured && bindings.length === 0 && drafts.length === 0) return undefined;
+  return { quantities, bindings, verdicts: reference.verdicts, drafts };
+}
+
+const DIGIT = /\d/u;
+
+/**
+ * A sentence with no topic word whose number takes its subject from the sentence before ("The EPICA
+ * Dome C core was drilled by ten nations. It reaches down 3,270 metres."): a claim when that number
+ * binds, checked like any other; undefined otherwise.
+ */
+function carriedSubject(paragraph: string[], index: number, packs: LoadedPacks): SentenceFindings | undefined {
+  const text = paragraph[index] ?? '';
+  const quantities = restoreElidedUnits(text, parseQuantities(text));
+  const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
+  if (bindings.length === 0) return undefined;
+  const context = paragraph.slice(0, index);
+  const reference = checkReferences(text, quantities, bindings, packs);
+  const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, context), ...checkUnits(text, quantities, context)]);
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
 

@@ -39,14 +39,10 @@ export function sharedSubjects(sentence: string, quantities: Quantity[]): Shared
   const gate = GATE.exec(sentence);
   if (gate === null || !quantities.some((q) => q.start > gate.index)) return [];
   const tokens = tokensOf(sentence);
-  const isVerb = (t: Token | undefined): boolean => t !== undefined && VERB_TAGS.some((tag) => t.tags.includes(tag));
-  const first = tokens.findIndex((t, k) => k > 0 && isVerb(t));
-  if (first < 0) return [];
+  const found = subjectOf(sentence, tokens);
+  if (found === undefined) return [];
+  const { first, subjectStart } = found;
   const verb = tokens[first] as Token;
-  // An opening phrase ("During the coldest spells,") is not the subject.
-  const opening = tokens[0]?.tags.includes('Preposition') ? sentence.lastIndexOf(',', verb.start) + 1 : 0;
-  const subjectStart = opening + (sentence.slice(opening).length - sentence.slice(opening).trimStart().length);
-  if (subjectStart >= verb.start) return [];
   const joins = tokens
     .map((t, k) => ({ t, k }))
     .filter(({ t, k }) => k > first && COORDINATOR.test(t.text) && isVerb(tokens[k + 1]));
@@ -82,6 +78,29 @@ export function clauseView(sentence: string, view: TermHits, c: SharedSubject, f
     }
   }
   return kept;
+}
+
+/**
+ * The subject of a sentence: from its start (after an opening phrase such as "During the coldest
+ * spells,") to its first verb. Undefined when no verb follows a word.
+ */
+export function subjectSpan(sentence: string): [number, number] | undefined {
+  const tokens = tokensOf(sentence);
+  const found = subjectOf(sentence, tokens);
+  return found === undefined ? undefined : [found.subjectStart, (tokens[found.first] as Token).start];
+}
+
+function subjectOf(sentence: string, tokens: Token[]): { first: number; subjectStart: number } | undefined {
+  const first = tokens.findIndex((t, k) => k > 0 && isVerb(t));
+  if (first < 0) return undefined;
+  const verb = tokens[first] as Token;
+  const opening = tokens[0]?.tags.includes('Preposition') ? sentence.lastIndexOf(',', verb.start) + 1 : 0;
+  const subjectStart = opening + (sentence.slice(opening).length - sentence.slice(opening).trimStart().length);
+  return subjectStart >= verb.start ? undefined : { first, subjectStart };
+}
+
+function isVerb(t: Token | undefined): boolean {
+  return t !== undefined && VERB_TAGS.some((tag) => t.tags.includes(tag));
 }
 
 function tokensOf(sentence: string): Token[] {

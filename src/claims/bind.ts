@@ -14,7 +14,7 @@
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
-import { clauseView, sharedSubjects } from './bind-clauses.js';
+import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext } from './bind-context.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
@@ -90,6 +90,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   }
   let contextHits: TermHits | undefined;
   let fromApposition: string | undefined;
+  let contextSubject: [number, number] | null | undefined;
   quantities.forEach((q, i) => {
     if (decided.has(i)) return;
     const view = views[i] as TermHits;
@@ -105,7 +106,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     // A calendar year ("before the year 2000") dates the sentence; it takes no subject from the one before.
     else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE') {
       contextHits ??= findTerms(context, packs);
-      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes);
+      contextSubject ??= subjectSpan(context) ?? null;
+      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, contextSubject ?? undefined);
       if (found !== undefined) decided.set(i, found);
     }
   });
