@@ -16,6 +16,7 @@ import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext } from './bind-context.js';
+import { withoutOthers } from './bind-others.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
@@ -71,7 +72,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   const pairs = endpointPairs(sentence, quantities);
   const roles = quantityRoles(sentence, quantities);
   const lists = parallelLists(sentence, quantities, pairs);
-  const hits = findTerms(sentence, packs);
+  const hits = withoutOthers(sentence, findTerms(sentence, packs));
   const views = termViews(sentence, quantities, hits, pairs, lists);
   // "… began to fade 18,000 years ago and was over by 3,000 years ago": a predicate sharing the subject speaks for itself.
   for (const c of sharedSubjects(sentence, quantities)) {
