@@ -24,6 +24,11 @@ import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 /** What a group filled from the previous sentence adds to a value's distance. */
 export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
 const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|(?:at|by|during|in)\s+that\s+(?:time|point|stage|period)|(?:in|at|from|of|during|for|within|across|over|on)\s+(?:that|the\s+same)\s+\p{L}+|at\s+the\s+time(?!\s+of(?![\p{L}]))|(?:by|back)\s+then)(?![\p{L}])/iu;
+/**
+ * A sentence whose subject is a bare measure ("The global average for 2019 was …", "The annual mean
+ * …") names no subject of its own: the measure is of the subject before.
+ */
+const MEASURE_SUBJECT = /^\s*the\s+(?:[\p{L}-]+\s+){0,2}?(?:average|mean|level|concentration|figure|value|reading|total)(?![\p{L}])/iu;
 /** A term right after a demonstrative ("in that record", "this core") is the back-reference itself, not a subject of its own. */
 const DEMONSTRATIVE = /(?:^|[^\p{L}])(?:that|this|these|those|the\s+same)\s+$/iu;
 /** The baseline of a comparison: "colder than in pre-industrial times", "40 metres below today's". */
@@ -45,7 +50,7 @@ export function bindFromContext(
   vetoes: TermHits = view,
   contextSubject?: [number, number],
 ): string | 'ambiguous' | undefined {
-  if (!REFERS_BACK.test(sentence)) return undefined;
+  if (!REFERS_BACK.test(sentence) && !MEASURE_SUBJECT.test(sentence)) return undefined;
   const own = subjectTerms(sentence, vetoes, packs);
   const serves = (r: ReferenceValue, id: string): boolean => r.binding.all.some((g) => g.includes(id));
   const candidates = packs.references
@@ -81,11 +86,12 @@ function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks): [st
     bindingTerms.set(packs, binding);
   }
   const used = binding;
+  // The words of a bare measure subject ("The global average") are the back-reference itself.
+  const measureEnd = MEASURE_SUBJECT.exec(sentence)?.[0].length ?? 0;
+  const ownSubject = ([start, end]: [number, number]): boolean =>
+    end > measureEnd && !BASELINE.test(sentence.slice(Math.max(0, start - 40), start)) && !DEMONSTRATIVE.test(sentence.slice(Math.max(0, start - 20), start));
   return [...view]
-    .map(([id, spans]): [string, [number, number][]] => [
-      id,
-      used.has(id) ? spans.filter(([start]) => !BASELINE.test(sentence.slice(Math.max(0, start - 40), start)) && !DEMONSTRATIVE.test(sentence.slice(Math.max(0, start - 20), start))) : [],
-    ])
+    .map(([id, spans]): [string, [number, number][]] => [id, used.has(id) ? spans.filter(ownSubject) : []])
     .filter(([, spans]) => spans.length > 0);
 }
 

@@ -26,6 +26,11 @@ const ROWS: [context: string, sentence: string, expected: string[]][] = [
   ['About 21,000 years ago, at the Last Glacial Maximum, sea level stood some 130 metres below today.', 'Carbon dioxide at that time hovered near 240 parts per million.', ['co2-lgm']],
   // "In that record" refers back to the CO2 record (Lüthi et al. 2008: interglacial peaks about 240-300 ppm).
   ['Across the last 800,000 years, ice-core CO2 swung between roughly 180 and 300 ppm.', 'Interglacial peaks in that record reached 350 ppm.', ['co2-interglacial-maximum-typical']],
+  // A bare measure as subject ("The global average") is the measure of the subject before (NOAA: 2019 global mean about 410 ppm).
+  ['The Kestrel Bay newsletter charts carbon dioxide since 1958.', 'The global average for 2019 was 430 ppm.', ['-', 'co2-global-2019']],
+  ['The Vostok team drilled through four Antarctic winters.', 'The total was 3,623 metres.', ['vostok-drilled-depth']],
+  // A measure subject with no subject before it binds nothing.
+  ['The Kestrel Bay newsletter has a new editor.', 'The average was 430 ppm.', ['-']],
   // A change word in the sentence before does not stop today's level (NOAA/WMO: about 420-430 ppm in 2023-2025).
   ['CO2 rose by about 80 ppm during the deglaciation.', 'Today it stands at 425 ppm.', ['co2-present-day']],
 ];
