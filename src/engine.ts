@@ -1,5 +1,7 @@
 import { bindQuantities } from './claims/bind.js';
+import { restoreElidedUnits } from './claims/elided-units.js';
 import { checkArithmetic } from './checks/arithmetic.js';
+import { checkRanks } from './checks/rank/index.js';
 import { checkReasoning, judgeByStance, paragraphReader, type ParagraphContext } from './checks/reasoning/index.js';
 import { checkReferences } from './checks/reference.js';
 import { checkUnits } from './checks/units.js';
@@ -141,7 +143,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
     sentences.forEach((sentence, index) => {
       const onTopic = topic.test(sentence.text) || subjectMatcherOf(packs).test(sentence.text);
-      const found = examineSentence(paragraph, index, packs, onTopic, context);
+      const found = examineSentence(paragraph, index, packs, onTopic, context, () => topic.test(paragraph[index - 1] ?? ''));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -193,21 +195,31 @@ const TWO_NUMBERS = /\d[^\d]+\d/u;
  * counts as a claim when they flag it: "from 12,900 to 11,700 years ago: a cold spell of some 2,000
  * years" is wrong whatever its subject. Undefined when the sentence holds no claim.
  */
-function examineSentence(paragraph: string[], index: number, packs: LoadedPacks, onTopic: boolean, context: ParagraphContext): SentenceFindings | undefined {
+function examineSentence(
+  paragraph: string[],
+  index: number,
+  packs: LoadedPacks,
+  onTopic: boolean,
+  context: ParagraphContext,
+  previousOnTopic: () => boolean,
+): SentenceFindings | undefined {
   const text = paragraph[index] ?? '';
   const before = paragraph.slice(0, index);
   if (!onTopic) {
+    const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs) : undefined;
+    if (carried !== undefined) return carried;
     if (!TWO_NUMBERS.test(text)) return undefined;
     const quantities = parseQuantities(text);
     const drafts = [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
     return drafts.length === 0 ? undefined : { quantities, bindings: [], verdicts: [], drafts };
   }
-  const quantities = parseQuantities(text);
+  // "four cycles and EPICA Dome C eight": a number whose unit a neighbour states takes that unit.
+  const quantities = restoreElidedUnits(text, parseQuantities(text));
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
   const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
   const reference = checkReferences(text, quantities, bindings, packs);
   const reading = paragraphReader(paragraph, packs, context)(index);
-  const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)]);
+  const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before), ...checkRanks(text, packs)]);
   const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(paragraph, index, packs, context)];
   const p = reading?.props;
   // A causal or order statement is a claim to sign off even without a number.
@@ -216,6 +228,24 @@ function examineSentence(paragraph: string[], index: number, packs: LoadedPacks,
   const subjects = subjectMatcherOf(packs);
   const measured = quantities.some((q) => q.dimension !== 'number') && (subjects.test(text) || subjects.test(paragraph[index - 1] ?? ''));
   if (!measured && bindings.length === 0 && drafts.length === 0 && !asserts) return undefined;
+  return { quantities, bindings, verdicts: reference.verdicts, drafts };
+}
+
+const DIGIT = /\d/u;
+
+/**
+ * A sentence with no topic word whose number takes its subject from the sentence before ("The EPICA
+ * Dome C core was drilled by ten nations. It reaches down 3,270 metres."): a claim when that number
+ * binds, checked like any other; undefined otherwise.
+ */
+function carriedSubject(paragraph: string[], index: number, packs: LoadedPacks): SentenceFindings | undefined {
+  const text = paragraph[index] ?? '';
+  const quantities = restoreElidedUnits(text, parseQuantities(text));
+  const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
+  if (bindings.length === 0) return undefined;
+  const context = paragraph.slice(0, index);
+  const reference = checkReferences(text, quantities, bindings, packs);
+  const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, context), ...checkUnits(text, quantities, context)]);
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
 
