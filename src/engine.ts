@@ -61,7 +61,7 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
   for (const file of files) {
     const text = await readDraftText(file, options.cwd);
     if (typeof text !== 'string') {
-      result.skipped.push({ file, reason: text.skipped });
+      addUnchecked(result, text.problem, file);
       continue;
     }
     const projectPath = toPosix(relative(options.projectRoot ?? options.cwd, resolve(options.cwd, file)));
@@ -105,10 +105,23 @@ function addText(
     result.skipped.push({ file: path, reason: 'no topic term' });
     return;
   }
-  const draft = 'blocks' in raw ? raw : draftFromText(path, text, format);
+  let draft: Draft;
+  try {
+    draft = 'blocks' in raw ? raw : draftFromText(path, text, format);
+  } catch (error) {
+    // A draft too deeply nested to read is named and fails the run; the other drafts go on.
+    if (error instanceof FirnlineError) return addUnchecked(result, error, path);
+    throw error;
+  }
   const { claims, flags } = checkDraft(draft, packs, options);
   result.claims.push(...claims);
   result.flags.push(...flags);
+}
+
+/** Records a draft that was named or walked but could not be checked; it fails the run. */
+function addUnchecked(result: CheckResult, problem: FirnlineError, file: string): void {
+  const { line, column } = problem.where ?? {};
+  result.skipped.push({ file, reason: problem.message, unchecked: true, ...(line === undefined ? {} : { line }), ...(column === undefined ? {} : { column }) });
 }
 
 /**
@@ -125,8 +138,10 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
   draft.blocks.forEach((block, blockIndex) => {
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
+    const windowOf = paragraphWindows(paragraph);
     sentences.forEach((sentence, index) => {
-      const found = examineSentence(paragraph, index, packs, topic.test(sentence.text));
+      const { window, at } = windowOf(index);
+      const found = examineSentence(window, at, packs, topic.test(sentence.text));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -156,6 +171,30 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
   return { claims, flags: claims.flatMap((c) => c.flags) };
 }
 
+/** Sentences per window of a long paragraph, and the context kept on each side of a window. */
+const WINDOW_SENTENCES = 32;
+const WINDOW_CONTEXT = 8;
+
+/**
+ * The part of a paragraph a sentence's checks see. A paragraph of up to WINDOW_SENTENCES +
+ * 2 × WINDOW_CONTEXT sentences is seen whole; a longer one (a hard-wrapped text with no blank
+ * lines, an export with one line per paragraph) in fixed windows with WINDOW_CONTEXT sentences
+ * of context on each side, so the work per sentence is bounded and a run is linear in the
+ * paragraph's length. Each window is one array, made once, so per-paragraph caches still hit.
+ */
+function paragraphWindows(paragraph: string[]): (index: number) => { window: string[]; at: number } {
+  if (paragraph.length <= WINDOW_SENTENCES + 2 * WINDOW_CONTEXT) return (index) => ({ window: paragraph, at: index });
+  let made: { chunk: number; window: string[]; start: number } | undefined;
+  return (index) => {
+    const chunk = Math.floor(index / WINDOW_SENTENCES);
+    if (made?.chunk !== chunk) {
+      const start = Math.max(0, chunk * WINDOW_SENTENCES - WINDOW_CONTEXT);
+      made = { chunk, start, window: paragraph.slice(start, (chunk + 1) * WINDOW_SENTENCES + WINDOW_CONTEXT) };
+    }
+    return { window: made.window, at: index - made.start };
+  };
+}
+
 /** What the stages found in one sentence, before positions are resolved. */
 interface SentenceFindings {
   quantities: Quantity[];
@@ -163,6 +202,9 @@ interface SentenceFindings {
   verdicts: Verdict[];
   drafts: FlagDraft[];
 }
+
+/** How many earlier sentences of a paragraph the arithmetic and unit checks see. */
+const CONTEXT_SENTENCES = 4;
 
 /** Two numerals apart: the least a sentence needs for its own arithmetic or a restated unit. */
 const TWO_NUMBERS = /\d[^\d]+\d/u;
@@ -175,7 +217,9 @@ const TWO_NUMBERS = /\d[^\d]+\d/u;
  */
 function examineSentence(paragraph: string[], index: number, packs: LoadedPacks, onTopic: boolean): SentenceFindings | undefined {
   const text = paragraph[index] ?? '';
-  const context = paragraph.slice(0, index);
+  // Only the last few sentences are context (the checks read the one before): copying every
+  // earlier sentence would make a long paragraph quadratic.
+  const context = paragraph.slice(Math.max(0, index - CONTEXT_SENTENCES), index);
   if (!onTopic) {
     if (!TWO_NUMBERS.test(text)) return undefined;
     const quantities = parseQuantities(text);
@@ -218,7 +262,8 @@ function verdictOf(verdicts: Verdict[]): Verdict {
 function applyLevels(drafts: FlagDraft[], levels: Record<string, Level | 'off'>): FlagDraft[] {
   const kept: FlagDraft[] = [];
   for (const d of drafts) {
-    const level = levels[d.ruleId];
+    // An own property only: a rule id such as `constructor` must not find Object.prototype's.
+    const level = Object.hasOwn(levels, d.ruleId) ? levels[d.ruleId] : undefined;
     if (level === 'off') continue;
     kept.push(level === undefined ? d : { ...d, level });
   }

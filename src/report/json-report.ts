@@ -38,7 +38,7 @@ export interface JsonReport {
   flags: JsonFlag[];
   /** Every rule that has a flag, by id. */
   rules: RuleInfo[];
-  skipped: { file: string; reason: string }[];
+  skipped: { file: string; reason: string; unchecked?: true; line?: number; column?: number }[];
 }
 
 /** The `$id` of the schema that describes `JsonReport` (a reserved domain: it names, it does not locate). */
