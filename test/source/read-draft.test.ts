@@ -3,7 +3,7 @@ import { chmod, mkdtemp, mkdir, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { draftFormat, draftFromText, readDraft } from '../../src/source/index.js';
-import { FirnlineError } from '../../src/errors.js';
+import type { FirnlineError } from '../../src/errors.js';
 
 let root = '';
 
