@@ -6,7 +6,9 @@ import { checkUnits } from './checks/units.js';
 import { FirnlineError } from './errors.js';
 import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
+import { isChecklistText } from './report/checklist-lines.js';
 import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
+import { paragraphWindows } from './prose/paragraph-windows.js';
 import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
@@ -97,7 +99,7 @@ function addText(
 ): void {
   const { path, text, format } = raw;
   result.files.push(path);
-  if (text.trimStart().startsWith(CHECKLIST_MARKER)) {
+  if (text.trimStart().startsWith(CHECKLIST_MARKER) && isChecklistText(text)) {
     result.skipped.push({ file: path, reason: 'sign-off checklist' });
     return;
   }
@@ -110,7 +112,11 @@ function addText(
     draft = 'blocks' in raw ? raw : draftFromText(path, text, format);
   } catch (error) {
     // A draft too deeply nested to read is named and fails the run; the other drafts go on.
-    if (error instanceof FirnlineError) return addUnchecked(result, error, path);
+    if (error instanceof FirnlineError) {
+      result.files.pop(); // it was not checked after all
+      addUnchecked(result, error, path);
+      return;
+    }
     throw error;
   }
   const { claims, flags } = checkDraft(draft, packs, options);
@@ -169,30 +175,6 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     });
   });
   return { claims, flags: claims.flatMap((c) => c.flags) };
-}
-
-/** Sentences per window of a long paragraph, and the context kept on each side of a window. */
-const WINDOW_SENTENCES = 32;
-const WINDOW_CONTEXT = 8;
-
-/**
- * The part of a paragraph a sentence's checks see. A paragraph of up to WINDOW_SENTENCES +
- * 2 × WINDOW_CONTEXT sentences is seen whole; a longer one (a hard-wrapped text with no blank
- * lines, an export with one line per paragraph) in fixed windows with WINDOW_CONTEXT sentences
- * of context on each side, so the work per sentence is bounded and a run is linear in the
- * paragraph's length. Each window is one array, made once, so per-paragraph caches still hit.
- */
-function paragraphWindows(paragraph: string[]): (index: number) => { window: string[]; at: number } {
-  if (paragraph.length <= WINDOW_SENTENCES + 2 * WINDOW_CONTEXT) return (index) => ({ window: paragraph, at: index });
-  let made: { chunk: number; window: string[]; start: number } | undefined;
-  return (index) => {
-    const chunk = Math.floor(index / WINDOW_SENTENCES);
-    if (made?.chunk !== chunk) {
-      const start = Math.max(0, chunk * WINDOW_SENTENCES - WINDOW_CONTEXT);
-      made = { chunk, start, window: paragraph.slice(start, (chunk + 1) * WINDOW_SENTENCES + WINDOW_CONTEXT) };
-    }
-    return { window: made.window, at: index - made.start };
-  };
 }
 
 /** What the stages found in one sentence, before positions are resolved. */

@@ -1,7 +1,8 @@
 import { readRegularText } from '../guard/read-regular-file.js';
 import { relative } from 'node:path';
 import { FirnlineError } from '../errors.js';
-import { CHECKLIST_MARKER, SIGN_OFF_INSTRUCTIONS } from '../report/checklist-markdown.js';
+import { CHECKLIST_MARKER } from '../report/checklist-markdown.js';
+import { isWriterLine } from '../report/checklist-lines.js';
 import { parseTickedChecklist } from '../report/checklist-ticks.js';
 import { readLedger } from '../review/read-ledger.js';
 
@@ -43,17 +44,6 @@ export async function guardChecklistOutput(target: string, ledgerFile: string, c
   }
 }
 
-/** Lines of the forms the checklist writer uses, whatever the drafts say. */
-const WRITER_LINES = [
-  /^$/u,
-  /^#{1,3} /u,
-  /^> /u,
-  /^Made by Firnline /u,
-  /^\d+ claims? in \d+ files?\. /u,
-  /^- \[ \] \*\*c[0-9a-f]{10}(?:-\d+)?\*\* line \d+: /u,
-  /^ {2}- (?:Values read|Verdict|Flag \(|Sources:|Signed off|Changed since sign-off)/u,
-  /^ {4}- /u,
-];
 const TICKED = /^- \[[xX]\] \*\*(c[0-9a-f]{10}(?:-\d+)?)\*\* line \d+: /u;
 const REVIEWER_MARK = /(?<!\\)\((?:approved|corrected|waived|note)\s*:/iu;
 
@@ -71,12 +61,7 @@ function firstForeignLine(existing: string, regenerated: string, recorded: Reado
     if (tick !== null && recorded.has(tick[1] ?? '')) continue;
     if (tick !== null) continue; // a plain tick not yet recorded is reported below, by claim
     if (REVIEWER_MARK.test(line)) return i + 1;
-    if (!WRITER_LINES.some((form) => form.test(line)) && !isHeaderText(line)) return i + 1;
+    if (!isWriterLine(line)) return i + 1;
   }
   return undefined;
-}
-
-/** The fixed header paragraphs (cautions, sign-off instructions) wrap over several lines. */
-function isHeaderText(line: string): boolean {
-  return SIGN_OFF_INSTRUCTIONS.split('\n').includes(line) || line === CHECKLIST_MARKER;
 }
