@@ -43,14 +43,14 @@ export function parseTickedChecklist(markdown: string, file = 'checklist'): Tick
     if (box === null) {
       const odd = BOX_LIKE.exec(line);
       // A box ticked in a form this reader does not take ([x ], [✓], -[x]) must not pass unnoticed.
-      if (odd !== null && odd[1] !== ' ' && odd[1] !== '' && CLAIM_ID.test(line)) {
+      if (odd !== null && isOddBox(line)) {
         throw new FirnlineError('checklist-odd-tick', `this box reads [${odd[1] ?? ''}], which is not a tick Firnline reads; write - [x] to tick it, or - [ ] to leave it open`, { file, line: i + 1, column: line.indexOf('[') + 1 });
       }
       continue;
     }
     if (box[1] === ' ') continue;
     let end = i + 1;
-    while (end < lines.length && !BOX.test(lines[end] ?? '') && !HEADING.test(lines[end] ?? '')) end += 1;
+    while (end < lines.length && !BOX.test(lines[end] ?? '') && !isOddBox(lines[end] ?? '') && !HEADING.test(lines[end] ?? '')) end += 1;
     const id = CLAIM_ID.exec(line.slice(box[0].length));
     const column = line.indexOf('[') + 1;
     if (id === null) {
@@ -87,6 +87,12 @@ function readMarks(text: string, item: TickedClaim, where: { file: string; line:
   }
   const note = found.get('note') ?? found.get('approved');
   if (note !== undefined && note !== '') item.note = note;
+}
+
+/** A box with a claim id whose tick is neither `[ ]` nor a form BOX reads. */
+function isOddBox(line: string): boolean {
+  const odd = BOX_LIKE.exec(line);
+  return odd !== null && odd[1] !== ' ' && odd[1] !== '' && !BOX.test(line) && CLAIM_ID.test(line);
 }
 
 function fileNameOf(quoted: string): string {
