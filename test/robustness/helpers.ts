@@ -49,5 +49,6 @@ export function expectUserError(run: CliRun, line: RegExp): void {
   expect(run.code).toBe(2);
   const lines = run.stderr.split('\n').filter((l) => l !== '');
   expect(lines.some((l) => line.test(l)), run.stderr).toBe(true);
+  // eslint-disable-next-line no-control-regex -- finding control characters is the point
   expect(run.stderr).not.toMatch(/[\u0000-\u0008\u000b-\u001f\u007f]/u);
 }

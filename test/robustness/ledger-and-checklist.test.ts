@@ -9,7 +9,7 @@ import { chmod, mkdtemp, readFile, stat, utimes, writeFile } from 'node:fs/promi
 import { hostname, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { FirnlineError } from '../../src/errors.js';
+import type { FirnlineError } from '../../src/errors.js';
 import { parseTickedChecklist } from '../../src/report/checklist-ticks.js';
 import { appendSignoffs } from '../../src/review/append-signoffs.js';
 import { readLedger } from '../../src/review/read-ledger.js';

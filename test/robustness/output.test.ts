@@ -14,6 +14,7 @@ import { expectNoCrash, expectUserError, folderWith, runBin, runCli } from './he
 
 const VOSTOK = 'The Vostok core spans 800,000 years of CO2 history.';
 // ECMA-48 control functions: ESC [ ... m (SGR), ESC [ 2 K (erase line), ESC ] 0 ; ... BEL (OSC window title).
+  // eslint-disable-next-line no-control-regex -- finding control characters is the point
 const RAW_CONTROLS = /[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/u;
 
 describe('control characters are shown, never sent (B17)', () => {
