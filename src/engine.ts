@@ -51,9 +51,12 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
   const packs = options.packs ?? (await loadPacks(options.packFiles ?? []));
   const topic = createTopicMatcher(packs.topicWords);
   const fromDisk = paths.filter((p) => p !== '-');
-  const { files } =
+  const { files, outside = [] } =
     fromDisk.length > 0 ? await findDrafts(fromDisk, options.cwd, pickDefined(options)) : { files: [] as string[] };
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
+  for (const file of outside) {
+    addUnchecked(result, new FirnlineError('draft-link-outside', 'a link to a file outside the folder being checked, not followed; name the file itself to check it, or exclude the link', { file }), file);
+  }
 
   const levels = options.levels ?? {};
   if (paths.includes('-')) {

@@ -103,3 +103,18 @@ describe('special files are refused, never opened for reading (P7, P8)', () => {
     expect((JSON.parse(run.stdout) as { files: string[] }).files).toEqual(['d.md', 'e.md']);
   });
 });
+
+describe('links out of the folder (P5)', () => {
+  it('a walked link to a file outside the working folder is not followed, and fails the run by name', async () => {
+    const { symlink, mkdir } = await import('node:fs/promises');
+    const outside = await folderWith({ 'secret.txt': `${VOSTOK} Staff password: hunter2.\n` });
+    const dir = await folderWith({ 'ok.md': `${VOSTOK}\n` });
+    await mkdir(join(dir, 'drafts'));
+    await symlink(join(outside, 'secret.txt'), join(dir, 'drafts', 'leak.md'));
+    await symlink(join(dir, 'ok.md'), join(dir, 'drafts', 'inside.md'));
+    const run = await runCli(['check', '.', '--format', 'json'], dir);
+    expectUserError(run, /^drafts\/leak\.md: a link to a file outside the folder being checked, not followed/u);
+    expect(run.stdout).not.toContain('hunter2');
+    expect((JSON.parse(run.stdout) as { files: string[] }).files).toEqual(['drafts/inside.md', 'ok.md']);
+  });
+});
