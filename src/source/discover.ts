@@ -54,7 +54,8 @@ function statError(error: NodeJS.ErrnoException, given: string): FirnlineError {
   if (error.code === 'ENOENT' || error.code === 'ENOTDIR') {
     return new FirnlineError('path-missing', 'no such file or folder; check the path', { file: given });
   }
-  return new FirnlineError('file-unreadable', `cannot read this path (${error.code ?? error.message}); check its permissions`, { file: given });
+  const hint = error.code === 'ELOOP' ? 'a symbolic link that points back to itself; remove or fix the link' : 'check its permissions';
+  return new FirnlineError('file-unreadable', `cannot read this path (${error.code ?? error.message}); ${hint}`, { file: given });
 }
 
 /** The `.gitignore` rules of the folders from `cwd` down to the parent of `folder`, if it is inside `cwd`. */

@@ -55,7 +55,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
       });
       // Decided before anything is written, so a refused target leaves no half-done run behind.
       const target = flags.output === undefined ? { stdout: true as const } : await outputTarget(flags.output, ctx.cwd, [...result.files, ...result.skipped.map((s) => s.file)]);
-      const color = target.stdout && ctx.isTTY && !('NO_COLOR' in ctx.env && ctx.env.NO_COLOR !== '');
+      const color = target.stdout && ctx.isTTY && ctx.env.TERM !== 'dumb' && !('NO_COLOR' in ctx.env && ctx.env.NO_COLOR !== '');
       // Text goes to terminals and CI logs: control characters from drafts and file names are shown, never sent.
       const shown = flags.format === 'text' ? visibleData(gate.result) : gate.result;
       const report =
