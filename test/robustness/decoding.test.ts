@@ -7,7 +7,8 @@
  * 420,000 years (Petit et al. 1999, Nature 399, 429-436), so the built-in pack flags it.
  */
 import { describe, expect, it } from 'vitest';
-import { expectNoCrash, expectUserError, folderWith, runCli } from './helpers.js';
+import { CHECKLIST_MARKER } from '../../src/report/checklist-markdown.js';
+import { expectNoCrash, expectUserError, folderWith, runBin, runCli } from './helpers.js';
 
 const VOSTOK = 'The Vostok core spans 800,000 years of CO2 history.\n';
 const latin1 = (text: string) => Uint8Array.from([...text].map((c) => c.charCodeAt(0)));
@@ -59,7 +60,20 @@ describe('drafts that are not UTF-8', () => {
     expect(invocation?.toolExecutionNotifications.map((n) => [n.level, n.locations[0]?.physicalLocation.artifactLocation.uri, n.locations[0]?.physicalLocation.region.startLine])).toEqual([['error', 'bad.md', 1]]);
   });
 
-  it('O8: standard input follows the same rule as a file', async () => {
+  it('B23: a draft that only borrows the checklist marker line is still checked', async () => {
+    const dir = await folderWith({ 'm.md': `${CHECKLIST_MARKER}\n${VOSTOK}` });
+    const run = await runCli(['check', 'm.md', '--require-signoff', '--fail-on', 'note'], dir);
+    expectNoCrash(run);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toContain('m.md:2:23 · error · value.vostok-record-span');
+  });
+
+  it('O8: invalid UTF-8 on standard input is refused with its place, as in a file', async () => {
+    const dir = await folderWith({ 'latin1.md': latin1(`Temperature \u00b0C: ${VOSTOK}`) });
+    expectUserError(await runBin([], dir, { shell: 'FL check - < latin1.md' }), /^-:1:13: not valid UTF-8 \(byte 0xB0\)/u);
+  });
+
+  it('O8: the decoder standard input uses places the first bad byte', async () => {
     // runCli hands the CLI text, so the stdin decoder is the real process's; here the same decoder is checked directly.
     const { decodeDraftBytes } = await import('../../src/source/decode-text.js');
     expect(decodeDraftBytes(latin1('x\u00b0'))).toEqual({ problem: expect.stringMatching(/^not valid UTF-8 \(byte 0xB0\)/u) as unknown, line: 1, column: 2 });
