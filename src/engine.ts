@@ -129,7 +129,8 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const paragraph = sentences.map((s) => s.text);
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
     sentences.forEach((sentence, index) => {
-      const found = examineSentence(paragraph, index, packs, topic.test(sentence.text), context);
+      const onTopic = topic.test(sentence.text) || subjectMatcherOf(packs).test(sentence.text);
+      const found = examineSentence(paragraph, index, packs, onTopic, context);
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 

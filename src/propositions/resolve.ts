@@ -41,7 +41,9 @@ export function subjectOf(s: ReadSentence, i: number): Thing | undefined {
 /** The nearest thing after word `i` in the same clause, within `window` words. */
 export function thingAfter(s: ReadSentence, i: number, window = 8): Thing | undefined {
   const clause = s.words[i]?.clause;
-  return s.things.find((t) => t.first > i && t.first - i <= window && s.words[t.first]?.clause === clause);
+  const segment = s.words[i]?.segment;
+  // A pronoun past a comma or a linking word ("..., and they are right") starts a clause of its own.
+  return s.things.find((t) => t.first > i && t.first - i <= window && s.words[t.first]?.clause === clause && (t.kind !== 'pronoun' || s.words[t.first]?.segment === segment));
 }
 
 /** The first thing of the clause of word `i`, before it. */
