@@ -56,6 +56,18 @@ describe('checkUnits: phrasings of restatements and scale slips', () => {
     expect(check(sentence)).toEqual([]);
   });
 
+  // A share of the air in a sentence that names no gas, after a sentence with a level in ppm:
+  // 0.42% = 4,200 ppm, never measured (1% = 10^4 ppm, NIST SP 811); 0.042% = 420 ppm.
+  it('reads a share of the air as CO2 when the sentence before gives a level in ppm', () => {
+    const at = (...s: string[]) => checkUnits(s[1] ?? '', parseQuantities(s[1] ?? ''), [s[0] ?? '']);
+    const [f] = at('The Harrow Fell station logged a yearly rise of about 2.5 ppm.', 'Expressed as a share of the air, the level there is about 0.42 percent.');
+    expect(f?.ruleId).toBe('unit.percent-ppm');
+    expect(f?.correction).toBe('about 0.042 percent');
+    expect(at('The Harrow Fell station logged a yearly rise of about 2.5 ppm.', 'Expressed as a share of the air, the level there is about 0.042 percent.')).toEqual([]);
+    // No ppm in the sentence before: the share could be of anything.
+    expect(at('The Harrow Fell station opened in 1998.', 'As a share of the air, water vapour there is about 0.4 percent.')).toEqual([]);
+  });
+
   it('says when a K figure is a °C change converted as a reading (+ 273.15)', () => {
     const [f] = check('Antarctic air warmed by 10 °C (a rise of some 283 K) as the ice age ended.');
     expect(f?.reason).toContain('+ 273.15');
