@@ -69,6 +69,7 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
     addText(result, { path: file, text, format: draftFormat(file) }, packs, { topic, levels, projectPath });
   }
   result.rules = describeFlaggedRules(result.flags, packs);
+  result.packs = packs.packs.map(({ id, version, asOf }) => ({ id, version, asOf }));
   return result;
 }
 
@@ -83,6 +84,7 @@ export async function checkText(
   const draft = { path, text, format: options.format ?? draftFormat(path) };
   addText(result, draft, packs, { topic: createTopicMatcher(packs.topicWords), levels: options.levels ?? {} });
   result.rules = describeFlaggedRules(result.flags, packs);
+  result.packs = packs.packs.map(({ id, version, asOf }) => ({ id, version, asOf }));
   return result;
 }
 

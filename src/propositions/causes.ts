@@ -195,7 +195,9 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
     if (['not', 'no'].includes(s.words[e.first - 1]?.text ?? '')) return false;
     const nearAgent = agent !== undefined && (Math.abs(e.first - agent.last) <= 2 || Math.abs(e.last - agent.first) <= 2);
     const nearCue = Math.abs(e.last - h.first) <= 2 || (e.first > h.last && e.first - h.last <= 2);
+    // "The change in sunshine, on its own, is what brought...": between the agent and the cue word.
+    const between = agent !== undefined && e.first > agent.last && e.last < h.first;
     const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by itself|on its own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
-    return nearAgent || (nearCue && strong);
+    return nearAgent || ((nearCue || between) && strong);
   });
 }
