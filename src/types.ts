@@ -51,8 +51,18 @@ export interface Draft {
   path: string;
   /** The original text exactly as read (after UTF-8 decoding; a leading BOM is kept). */
   text: string;
-  format: 'markdown' | 'text';
+  format: 'markdown' | 'text' | 'html' | 'docx';
   blocks: ProseBlock[];
+}
+
+/**
+ * Where something stands in a Word draft, which has no lines: the paragraph (1-based, counting
+ * the paragraphs that hold text, as a word processor's statistics do) and the heading above it.
+ */
+export interface ParagraphPlace {
+  number: number;
+  /** Text of the nearest heading above (the paragraph's own text for a heading); empty when none. */
+  heading: string;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -165,6 +175,8 @@ export interface Flag {
   level: Level;
   file: string;
   span: Span;
+  /** In a Word draft, the paragraph (reports show it instead of line and column). */
+  paragraph?: ParagraphPlace;
   /** The flagged text as it stands in the draft. */
   excerpt: string;
   /** The whole sentence the flag is in, as prose text (markup removed). */
@@ -193,7 +205,7 @@ export interface FlagSignoff {
 }
 
 /** A flag before positions are resolved: offsets are UTF-16 indices into the sentence text. */
-export interface FlagDraft extends Omit<Flag, 'file' | 'span' | 'excerpt' | 'sentence' | 'claimId' | 'signoff'> {
+export interface FlagDraft extends Omit<Flag, 'file' | 'span' | 'paragraph' | 'excerpt' | 'sentence' | 'claimId' | 'signoff'> {
   start: number;
   end: number;
 }
@@ -224,6 +236,8 @@ export interface Claim {
    */
   projectPath?: string;
   span: Span;
+  /** In a Word draft, the paragraph (reports show it instead of line and column). */
+  paragraph?: ParagraphPlace;
   text: string;
   heading: string;
   quantities: Quantity[];
@@ -252,8 +266,12 @@ export interface CheckResult {
   rules: RuleInfo[];
   claims: Claim[];
   flags: Flag[];
-  /** Files passed over with the reason (binary, no topic term...), for the report. */
-  skipped: { file: string; reason: string }[];
+  /**
+   * Files passed over with the reason (no subject named, a checklist...), for the report. `unchecked`
+   * marks a draft that was named or walked but could not be read (not UTF-8, a special file, too
+   * large, nested too deep): it fails the run; `line` and `column` say where, when known.
+   */
+  skipped: { file: string; reason: string; unchecked?: true; line?: number; column?: number }[];
   /** The rule packs the run checked against, with the date their values were last reviewed. */
   packs?: PackInfo[];
 }

@@ -1,7 +1,8 @@
-import { readFile } from 'node:fs/promises';
+import { readRegularText } from '../guard/read-regular-file.js';
 import { relative } from 'node:path';
 import { FirnlineError } from '../errors.js';
 import { CHECKLIST_MARKER } from '../report/checklist-markdown.js';
+import { isWriterLine } from '../report/checklist-lines.js';
 import { parseTickedChecklist } from '../report/checklist-ticks.js';
 import { readLedger } from '../review/read-ledger.js';
 
@@ -10,11 +11,12 @@ import { readLedger } from '../review/read-ledger.js';
  * checklist whose ticked boxes are not all in the ledger yet (an expert's ticks would be lost).
  * A missing file, or a checklist whose ticks are all recorded, may be replaced.
  */
-export async function guardChecklistOutput(target: string, ledgerFile: string, cwd: string): Promise<void> {
+export async function guardChecklistOutput(target: string, ledgerFile: string, cwd: string, regenerated = ''): Promise<void> {
   let existing: string;
   try {
-    existing = await readFile(target, 'utf8');
-  } catch {
+    existing = await readRegularText(target, { shown: relative(cwd, target) });
+  } catch (error) {
+    if (error instanceof FirnlineError) throw error;
     return;
   }
   const shown = relative(cwd, target);
@@ -22,8 +24,16 @@ export async function guardChecklistOutput(target: string, ledgerFile: string, c
     throw new FirnlineError('output-not-checklist', 'this file exists and is not a checklist Firnline wrote; choose another path, or pass --force to replace it', { file: shown });
   }
   const ticked = parseTickedChecklist(existing, shown);
-  if (ticked.length === 0) return;
   const recorded = new Set((await readLedger(ledgerFile, cwd)).signoffs.map((s) => s.claim));
+  const foreign = firstForeignLine(existing, regenerated, recorded);
+  if (foreign !== undefined) {
+    throw new FirnlineError(
+      'output-has-notes',
+      'this checklist holds a mark or text Firnline did not write (a reviewer\'s note, or a tick in another form); record it with `firnline signoff --from` or move it elsewhere, or pass --force to replace the file',
+      { file: shown, line: foreign, column: 1 },
+    );
+  }
+  if (ticked.length === 0) return;
   const pending = ticked.filter((t) => !recorded.has(t.claimId));
   if (pending.length > 0) {
     throw new FirnlineError(
@@ -32,4 +42,26 @@ export async function guardChecklistOutput(target: string, ledgerFile: string, c
       { file: shown, line: pending[0]?.line ?? 1 },
     );
   }
+}
+
+const TICKED = /^- \[[xX]\] \*\*(c[0-9a-f]{10}(?:-\d+)?)\*\* line \d+: /u;
+const REVIEWER_MARK = /(?<!\\)\((?:approved|corrected|waived|note)\s*:/iu;
+
+/**
+ * The line number of the first line a person added or changed, or undefined. A line counts as
+ * Firnline's when the writer would produce it now, or when it has one of the writer's forms and no
+ * unescaped reviewer mark; a box ticked as `[x]` counts when its claim is already in the ledger.
+ */
+function firstForeignLine(existing: string, regenerated: string, recorded: ReadonlySet<string>): number | undefined {
+  const known = new Set(regenerated.split('\n'));
+  const lines = existing.split(/\r\n|\r|\n/u);
+  for (const [i, line] of lines.entries()) {
+    if (known.has(line)) continue;
+    const tick = TICKED.exec(line);
+    if (tick !== null && recorded.has(tick[1] ?? '')) continue;
+    if (tick !== null) continue; // a plain tick not yet recorded is reported below, by claim
+    if (REVIEWER_MARK.test(line)) return i + 1;
+    if (!isWriterLine(line)) return i + 1;
+  }
+  return undefined;
 }

@@ -11,6 +11,7 @@ import type { Checklist, ChecklistInput, ChecklistItem, ChecklistRange } from '.
 import { toChecklist } from './checklist-json.js';
 import { formatRange } from './format-value.js';
 import { formatSource } from './format-source.js';
+import { markdownFileName, markdownText } from './markdown-escape.js';
 
 /** How each verdict is put for the reviewer. */
 const VERDICT_WORDS: Record<ChecklistItem['verdict'], (item: ChecklistItem) => string> = {
@@ -57,12 +58,12 @@ export function checklistToMarkdown(checklist: Checklist): string {
   let heading: string | undefined;
   for (const item of checklist.claims) {
     if (item.file !== file) {
-      out.push('', `## File \`${item.file}\``);
+      out.push('', `## File ${markdownFileName(item.file)}`);
       file = item.file;
       heading = undefined;
     }
     if (item.heading !== heading) {
-      out.push('', item.heading === '' ? '### Before the first heading' : `### Under "${item.heading}"`, '');
+      out.push('', item.heading === '' ? '### Before the first heading' : `### Under "${markdownText(item.heading)}"`, '');
       heading = item.heading;
     }
     out.push(...itemLines(item));
@@ -71,9 +72,10 @@ export function checklistToMarkdown(checklist: Checklist): string {
 }
 
 function itemLines(item: ChecklistItem): string[] {
-  const lines = [`- [ ] **${item.id}** line ${item.line}: ${item.sentence}`];
+  const where = item.paragraph === undefined ? `line ${item.line}` : `paragraph ${item.paragraph}`;
+  const lines = [`- [ ] **${item.id}** ${where}: ${markdownText(item.sentence)}`];
   const detail = (label: string, text: string) => lines.push(`  - ${label}: ${text}`);
-  if (item.values.length > 0) detail('Values read', item.values.map((v) => `"${v.text}" (${range(v)})`).join('; '));
+  if (item.values.length > 0) detail('Values read', item.values.map((v) => `"${markdownText(v.text)}" (${range(v)})`).join('; '));
   detail('Verdict', VERDICT_WORDS[item.verdict](item));
   for (const f of item.flags) {
     const advice = f.correction === undefined ? (f.suggestion === undefined ? '' : ` Suggestion: ${f.suggestion}`) : ` Correction: "${f.correction}"`;
@@ -85,7 +87,7 @@ function itemLines(item: ChecklistItem): string[] {
   }
   const s = item.signoff;
   if (s.status === 'signed off') detail('Signed off', `by ${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}, ${s.decision ?? ''}`);
-  if (s.status === 'stale') detail('Changed since sign-off', `${s.reviewer ?? '?'} signed off this wording on ${(s.date ?? '').slice(0, 10)}: "${s.signedOffText ?? ''}"`);
+  if (s.status === 'stale') detail('Changed since sign-off', `${s.reviewer ?? '?'} signed off this wording on ${(s.date ?? '').slice(0, 10)}: "${markdownText(s.signedOffText ?? '')}"`);
   return lines;
 }
 

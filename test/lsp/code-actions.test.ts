@@ -10,7 +10,7 @@ import type { Draft } from '../../src/types.js';
 
 const WRONG = 'The Vostok ice core spans 800,000 years of climate history.';
 
-async function actionsFor(text: string, format: Draft['format']) {
+async function actionsFor(text: string, format: 'markdown' | 'text') {
   const setup = createCheckSetup(await loadPacks([]), {}, { file: 'firnline-signoffs.yaml', signoffs: [] });
   const check = checkDocument(text, format, 'draft', 'draft', setup);
   const [flag] = check.flags;

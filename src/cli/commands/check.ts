@@ -1,6 +1,5 @@
 import type { Command} from 'commander';
 import { Option } from 'commander';
-import { resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import { renderReport, REPORT_FORMATS, type ReportFormat } from '../../report/index.js';
 import { renderChecklistOf } from '../render-checklist.js';
@@ -11,6 +10,9 @@ import { applyGate } from '../gate.js';
 import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
 import { writeFileAtomic } from '../../write-file-atomic.js';
 import { exitCodeFor } from '../exit-code.js';
+import { outputTarget } from '../../guard/output-target.js';
+import { visibleData, visibleText } from '../../guard/visible-text.js';
+import { reportUnchecked } from '../unchecked.js';
 
 /** The report formats, plus `markdown`: the sign-off checklist (GLOSSARY.md). */
 const CHECK_FORMATS = [...REPORT_FORMATS, 'markdown'] as const;
@@ -23,6 +25,7 @@ interface CheckFlags {
   output?: string;
   requireSignoff?: boolean;
   changedSince?: string;
+  absolutePaths?: boolean;
 }
 
 /** `firnline check [paths...]`: scan drafts, print flags, set the exit status. */
@@ -30,7 +33,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
   program
     .command('check')
     .description('scan drafts (files, folders, or - for standard input) and report flags')
-    .argument('[paths...]', 'drafts or folders of drafts (.md, .markdown, .txt; default: the current folder)')
+    .argument('[paths...]', 'drafts or folders of drafts (.md, .markdown, .txt, .html, .htm, .docx; default: the current folder)')
     .addOption(new Option('--format <name>', 'output format (markdown: the sign-off checklist)').choices([...CHECK_FORMATS]).default('text'))
     .addOption(new Option('--fail-on <level>', 'lowest level that makes the exit status 1 (default: error)').choices([...LEVELS, 'never']))
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
@@ -38,6 +41,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('-o, --output <file>', 'write the report to a file instead of standard output')
     .option('--require-signoff', 'exit 1 while any claim lacks a current sign-off in the ledger')
     .option('--changed-since <rev>', 'check only claims on lines changed since a git revision')
+    .option('--absolute-paths', 'SARIF: record the working folder as an absolute file URI (off by default, so a shared report does not show the machine\'s folders)')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const failOn = flags.failOn ?? run.failOn;
@@ -49,20 +53,25 @@ export function registerCheck(program: Command, ctx: CliContext): void {
         ledgerFile: run.ledger,
         cwd: ctx.cwd,
       });
-      const color = flags.output === undefined && ctx.isTTY && !('NO_COLOR' in ctx.env && ctx.env.NO_COLOR !== '');
+      // Decided before anything is written, so a refused target leaves no half-done run behind.
+      const target = flags.output === undefined ? { stdout: true as const } : await outputTarget(flags.output, ctx.cwd, [...result.files, ...result.skipped.map((s) => s.file)]);
+      const color = target.stdout && ctx.isTTY && ctx.env.TERM !== 'dumb' && !('NO_COLOR' in ctx.env && ctx.env.NO_COLOR !== '');
+      // Text goes to terminals and CI logs: control characters from drafts and file names are shown, never sent.
+      const shown = flags.format === 'text' ? visibleData(gate.result) : gate.result;
       const report =
         flags.format === 'markdown'
           ? (await renderChecklistOf(gate.result, run, 'markdown', ctx.cwd)).text
-          : renderReport(flags.format as ReportFormat, gate.result, { color, toolVersion: VERSION, failOn, srcRoot: ctx.cwd });
-      const summary = gate.summary.length > 0 ? `${gate.summary.join('\n')}\n` : '';
-      if (flags.output === undefined) {
+          : renderReport(flags.format as ReportFormat, shown, { color, toolVersion: VERSION, failOn, ...(flags.absolutePaths === true ? { srcRoot: ctx.cwd } : {}) });
+      const summary = gate.summary.length > 0 ? `${gate.summary.map(visibleText).join('\n')}\n` : '';
+      if (target.stdout) {
         ctx.stdout(report.endsWith('\n') ? report : `${report}\n`);
-        if (summary !== '') (flags.format === 'text' ? ctx.stdout : ctx.stderr)(summary);
+        if (summary !== '') (flags.format === 'text' && flags.output === undefined ? ctx.stdout : ctx.stderr)(summary);
       } else {
-        await writeFileAtomic(resolve(ctx.cwd, flags.output), report.endsWith('\n') ? report : `${report}\n`);
+        await writeFileAtomic(target.file, report.endsWith('\n') ? report : `${report}\n`);
         ctx.stderr(summary);
       }
       ctx.exitCode = Math.max(exitCodeFor(gate.failingFlags, failOn), gate.failed ? 1 : 0);
+      if (reportUnchecked(result, ctx) > 0) ctx.exitCode = 2;
     });
 }
 

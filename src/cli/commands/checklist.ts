@@ -1,5 +1,7 @@
 import { Option, type Command } from 'commander';
-import { relative, resolve } from 'node:path';
+import { relative } from 'node:path';
+import { outputTarget } from '../../guard/output-target.js';
+import { reportUnchecked } from '../unchecked.js';
 import { checkPaths } from '../../engine.js';
 import type { CliContext } from '../context.js';
 import { CHECKLIST_RENDERERS, renderChecklistOf, type ChecklistFormat } from '../render-checklist.js';
@@ -31,14 +33,17 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
       const targets = paths !== undefined && paths.length > 0 ? paths : ['.'];
       const result = await checkPaths(targets, checkOptionsOf(run, ctx));
       const { text, review } = await renderChecklistOf(result, run, flags.format, ctx.cwd);
-      if (flags.output === undefined) {
+      const target = flags.output === undefined ? { stdout: true as const } : await outputTarget(flags.output, ctx.cwd, [...result.files, ...result.skipped.map((s) => s.file)]);
+      if (target.stdout) {
         ctx.stdout(text);
+        if (reportUnchecked(result, ctx) > 0) ctx.exitCode = 2;
         return;
       }
-      const target = resolve(ctx.cwd, flags.output);
-      if (flags.force !== true) await guardChecklistOutput(target, run.ledger, ctx.cwd);
-      await writeFileAtomic(target, text);
+      if (flags.force !== true) await guardChecklistOutput(target.file, run.ledger, ctx.cwd, text);
+      await writeFileAtomic(target.file, text);
+      if (reportUnchecked(result, ctx) > 0) ctx.exitCode = 2;
+      const shownTarget = relative(ctx.cwd, target.file);
       const { counts } = review;
-      ctx.stderr(`Wrote ${result.claims.length} claims to ${relative(ctx.cwd, target)} (${counts['signed off']} signed off, ${counts.stale} changed since sign-off, ${counts.open} open).\n`);
+      ctx.stderr(`Wrote ${result.claims.length} claims to ${shownTarget} (${counts['signed off']} signed off, ${counts.stale} changed since sign-off, ${counts.open} open).\n`);
     });
 }

@@ -1,6 +1,7 @@
 import type { Command} from 'commander';
 import { Option } from 'commander';
-import { readFile } from 'node:fs/promises';
+import { readRegularText } from '../../guard/read-regular-file.js';
+import { visibleLine } from '../../guard/visible-text.js';
 import { relative, resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import { FirnlineError } from '../../errors.js';
@@ -53,9 +54,10 @@ export function registerSignoff(program: Command, ctx: CliContext): void {
         date: ledgerDate(),
         packVersion: packVersionOf(run.packs),
       });
-      await appendSignoffs(run.ledger, plan.entries);
-      const again = plan.unchanged > 0 ? ` (${plan.unchanged} already recorded as they are, left out)` : '';
-      ctx.stdout(`Recorded ${plan.entries.length} sign-off${plan.entries.length === 1 ? '' : 's'} by ${reviewer} in ${relative(ctx.cwd, run.ledger) || run.ledger}${again}.\n`);
+      const written = await appendSignoffs(run.ledger, plan.entries);
+      const unchanged = plan.unchanged + plan.entries.length - written;
+      const again = unchanged > 0 ? ` (${unchanged} already recorded as they are, left out)` : '';
+      ctx.stdout(`Recorded ${written} sign-off${written === 1 ? '' : 's'} by ${visibleLine(reviewer)} in ${visibleLine(relative(ctx.cwd, run.ledger) || run.ledger)}${again}.\n`);
     });
 }
 
@@ -72,8 +74,9 @@ function fromIds(ids: string[], flags: SignoffFlags): { requests: SignoffRequest
 async function fromChecklist(file: string, shown: string): Promise<{ requests: SignoffRequest[]; drafts: string[] }> {
   let text: string;
   try {
-    text = await readFile(file, 'utf8');
-  } catch {
+    text = await readRegularText(file, { shown, code: 'checklist-missing' });
+  } catch (error) {
+    if (error instanceof FirnlineError) throw error;
     throw new FirnlineError('checklist-missing', 'cannot read this checklist; check the path', { file: shown });
   }
   const ticked = parseTickedChecklist(text, shown);
