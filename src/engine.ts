@@ -239,8 +239,12 @@ function examineSentence(
     if (carried !== undefined) return carried;
     if (!TWO_NUMBERS.test(text)) return undefined;
     const quantities = parseQuantities(text);
-    const drafts = [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
-    return drafts.length === 0 ? undefined : { quantities, bindings: [], verdicts: [], drafts };
+    const slips = [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
+    if (slips.length === 0) return undefined;
+    // A slip in a quotation or a marked passage is the quoted writer's, not the draft's.
+    const reading = paragraphReader(paragraph, packs, context)(index);
+    const drafts = reading === undefined ? slips : judgeByStance(slips, reading.stance);
+    return { quantities, bindings: [], verdicts: [], drafts };
   }
   // "four cycles and EPICA Dome C eight": a number whose unit a neighbour states takes that unit.
   const quantities = restoreElidedUnits(text, parseQuantities(text));
