@@ -6,6 +6,8 @@ import { frontmatter } from 'micromark-extension-frontmatter';
 import { gfm } from 'micromark-extension-gfm';
 import type { BlockKind, ProseBlock } from '../types.js';
 import { appendGap, appendValue, finishBlock, startBlockText, type BlockText } from './block-text.js';
+// Installs the linear merge of inline text runs before the first parse (see the module).
+import './micromark-linear-text.js';
 
 const PARSE_OPTIONS = {
   extensions: [gfm(), frontmatter(['yaml', 'toml'])],

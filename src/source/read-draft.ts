@@ -2,6 +2,7 @@ import { resolve } from 'node:path';
 import { FirnlineError } from '../errors.js';
 import { readRegularFileSync } from '../guard/read-regular-file.js';
 import { decodeDraftBytes } from './decode-text.js';
+import { checkMarkdownLimits } from './markdown-limits.js';
 import { checkNestingDepth } from './nesting-depth.js';
 import type { Draft, ProseBlock } from '../types.js';
 import { readMarkdownBlocks } from './markdown.js';
@@ -41,7 +42,10 @@ export async function loadHtmlReader(): Promise<void> {
  */
 export function draftFromText(path: string, text: string, format: Exclude<Draft['format'], 'docx'>): Draft {
   if (format === 'html' && htmlReader === undefined) throw new Error('internal: draftFromText(html) before loadHtmlReader()');
-  if (format === 'markdown') checkNestingDepth(text, path);
+  if (format === 'markdown') {
+    checkMarkdownLimits(text, path);
+    checkNestingDepth(text, path);
+  }
   const blocks = format === 'markdown' ? readMarkdownBlocks(text) : format === 'html' ? (htmlReader?.(text) ?? []) : readPlainTextBlocks(text);
   return { path, text, format, blocks };
 }
