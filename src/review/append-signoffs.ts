@@ -12,7 +12,7 @@ import { isMap, isScalar, isSeq, parseDocument, stringify, type Pair, type YAMLM
 import { FirnlineError } from '../errors.js';
 import { writeFileAtomic } from '../write-file-atomic.js';
 import { parseLedger } from './read-ledger.js';
-import { entryToYaml, type SignoffEntry } from './signoff-entry.js';
+import { entryFromYaml, entryToYaml, type SignoffEntry } from './signoff-entry.js';
 import { withFileLock } from './with-file-lock.js';
 
 /** The first lines of a new ledger. */
@@ -38,8 +38,7 @@ export async function appendSignoffs(file: string, entries: SignoffEntry[]): Pro
       await refuseReadOnly(file);
       const fresh = entries.filter((entry) => !alreadyRecorded(ledger.signoffs, entry));
       if (fresh.length === 0) return 0;
-      let after = appendToLedgerText(before, fresh);
-      if (before.includes('\r\n')) after = after.replace(/\r?\n/gu, '\r\n');
+      const after = appendToLedgerText(before, fresh);
       if (!(await lock.stillHeld()) || (await readOrEmpty(file)) !== before) return undefined;
       await writeFileAtomic(file, after, 'the sign-off ledger');
       return fresh.length;
@@ -69,27 +68,92 @@ async function refuseReadOnly(file: string): Promise<void> {
   }
 }
 
-/** The ledger text with `entries` added at the end of its `signoffs` list. Pure: used by the writer and the tests. */
+/**
+ * The ledger text with `entries` added at the end of its `signoffs` list. Pure: used by the writer
+ * and the tests. Every earlier byte is kept: the new entries are inserted as text in the layout
+ * the ledger already uses (a block list, wherever `signoffs:` stands, or a flow list `[...]`),
+ * with the ledger's own line ending (CRLF when its first line ends so). The result is parsed back
+ * and must hold every earlier entry and key plus the new entries; only a layout the text edit
+ * cannot serve (or gets wrong) goes through the yaml Document API, which keeps comments and keys.
+ */
 export function appendToLedgerText(text: string, entries: SignoffEntry[]): string {
+  const eol = /^[^\n]*\r\n/u.test(text) ? '\r\n' : '\n';
+  const inserted = insertAsText(text, entries, eol);
+  if (inserted !== undefined && holdsAppended(text, inserted, entries)) return inserted;
+  const edited = editWithDocument(text, entries);
+  return eol === '\r\n' ? edited.replace(/\r?\n/gu, '\r\n') : edited;
+}
+
+function insertAsText(text: string, entries: SignoffEntry[], eol: string): string | undefined {
   const doc = parseDocument(text);
   const root = doc.contents;
-  const items = (indent: number) => indentLines(stringify(entries.map(entryToYaml), { lineWidth: 0 }), indent);
-  const base = text === '' ? LEDGER_HEADER : text.endsWith('\n') ? text : `${text}\n`;
-
-  if (root === null || (isScalar(root) && root.value === null)) return `${base}signoffs:\n${items(2)}`;
-  if (!isMap(root) || root.flow === true) return editWithDocument(text, entries);
-  const pair = root.items.find((p) => keyOf(p) === 'signoffs');
-  const isLast = pair !== undefined && pair === root.items[root.items.length - 1];
+  const items = (indent: number) => indentLines(stringify(entries.map(entryToYaml), { lineWidth: 0 }), indent).replace(/\n/gu, eol);
+  const base = text === '' ? LEDGER_HEADER.replace(/\n/gu, eol) : /\r?\n$/u.test(text) ? text : `${text}${eol}`;
   const column = (offset: number) => offset - (text.lastIndexOf('\n', offset - 1) + 1);
+  const at = (offset: number, insert: string) => `${text.slice(0, offset)}${insert}${text.slice(offset)}`;
+  /** The start of the line after the one holding `offset - 1` (the end of the text when there is none). */
+  const nextLine = (offset: number) => {
+    if (offset > 0 && text[offset - 1] === '\n') return offset;
+    const newline = text.indexOf('\n', offset);
+    return newline < 0 ? -1 : newline + 1;
+  };
+  const atLine = (offset: number, insert: string) => (offset < 0 ? `${base}${insert}` : at(offset, insert));
 
-  if (pair === undefined) return `${base}signoffs:\n${items(2)}`;
-  if (isLast && (pair.value === null || (isScalar(pair.value) && pair.value.value === null && pair.value.source === ''))) {
-    return `${base}${items(column(keyStart(pair, root)) + 2)}`;
+  if (root === null || (isScalar(root) && root.value === null)) return `${base}signoffs:${eol}${items(2)}`;
+  if (!isMap(root)) return undefined;
+  const pair = root.items.find((p) => keyOf(p) === 'signoffs');
+  const value = pair?.value;
+  if (pair === undefined) {
+    if (root.flow === true) return flowInsert(text, root.range, `signoffs: [${entries.map(flowEntry).join(', ')}]`, root.items.length > 0);
+    return `${base}signoffs:${eol}${items(2)}`;
   }
-  if (isLast && isSeq(pair.value) && pair.value.flow !== true && pair.value.range !== null && pair.value.range !== undefined) {
-    return `${base}${items(column(pair.value.range[0]))}`;
+  if (isSeq(value) && value.flow === true) return flowInsert(text, value.range, entries.map(flowEntry).join(', '), value.items.length > 0);
+  if (root.flow === true) return undefined;
+  if (value === null || (isScalar(value) && value.value === null && value.source === '')) {
+    return atLine(nextLine(isScalar(pair.key) ? (pair.key.range?.[1] ?? 0) : 0), items(column(keyStart(pair, root)) + 2));
   }
-  return editWithDocument(text, entries);
+  if (isSeq(value) && value.range !== null && value.range !== undefined) {
+    return atLine(nextLine(value.range[1]), items(column(value.range[0])));
+  }
+  return undefined;
+}
+
+/** One entry as a flow mapping, `{ claim: ..., ... }`, on one line. */
+function flowEntry(entry: SignoffEntry): string {
+  return stringify(entryToYaml(entry), { collectionStyle: 'flow', lineWidth: 0 }).trimEnd();
+}
+
+/**
+ * `insert` placed just before the closing bracket of the flow collection at `range`, after a comma
+ * when the collection already holds items (unless the last item is followed by one already).
+ */
+function flowInsert(text: string, range: readonly number[] | null | undefined, insert: string, hasItems: boolean): string | undefined {
+  const end = range?.[1];
+  if (end === undefined || !/[\]}]/u.test(text[end - 1] ?? '')) return undefined;
+  const close = end - 1;
+  // A comment just before the bracket would swallow the insert; the caller parses the result back
+  // and falls back to the Document API when anything is lost.
+  const before = text.slice(range?.[0] ?? 0, close);
+  const trailingComma = /,\s*$/u.test(before);
+  const lead = hasItems && !trailingComma ? ', ' : trailingComma ? ' ' : '';
+  return `${text.slice(0, close)}${lead}${insert}${text.slice(close)}`;
+}
+
+/** The edited text reads as a ledger holding the earlier entries and keys, then `entries`. */
+function holdsAppended(text: string, edited: string, entries: SignoffEntry[]): boolean {
+  try {
+    const before = parseLedger(text, 'ledger').signoffs;
+    const after = parseLedger(edited, 'ledger').signoffs;
+    if (JSON.stringify(after) !== JSON.stringify([...before, ...entries.map((e) => entryFromYaml(entryToYaml(e) as Record<string, unknown>))])) return false;
+    const keys = (t: string) => {
+      const data = parseDocument(t).toJS({ maxAliasCount: 1_000 }) as Record<string, unknown> | null;
+      const { signoffs: _, ...rest } = data ?? {};
+      return JSON.stringify(rest);
+    };
+    return keys(text) === keys(edited);
+  } catch {
+    return false;
+  }
 }
 
 /** The fallback for unusual layouts: the Document API keeps comments and unknown keys. */

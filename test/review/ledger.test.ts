@@ -85,8 +85,15 @@ describe('appendToLedgerText', () => {
     expect(after.slice(before.length).split('\n')[0]).toBe('- claim: c0000000002');
   });
 
-  it('falls back to the Document API when signoffs is not the last key, keeping comments and unknown keys', () => {
+  it('keeps a flow list as a flow list when signoffs is not the last key, with comments and unknown keys as typed', () => {
     const before = 'signoffs: []\n# settings below\nproject: winter gallery\n';
+    const after = appendToLedgerText(before, [entry(3)]);
+    expect(after).toMatch(/^signoffs: \[\{ claim: c0000000003, [^\n]*\}\]\n# settings below\nproject: winter gallery\n$/u);
+  });
+
+  it('falls back to the Document API for a layout a text edit cannot serve, keeping comments and unknown keys', () => {
+    // A comment just before the closing bracket would swallow an inserted entry.
+    const before = 'signoffs: [ # none yet\n]\n# settings below\nproject: winter gallery\n';
     const after = appendToLedgerText(before, [entry(3)]);
     expect(after).toContain('# settings below\nproject: winter gallery');
     expect(after).toContain('  - claim: c0000000003\n');

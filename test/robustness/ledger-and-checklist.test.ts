@@ -108,6 +108,36 @@ describe('writing the ledger', () => {
     expect((await readLedger(file)).signoffs).toHaveLength(2);
   });
 
+  /** `after` is `before` with one contiguous insertion: every earlier byte kept, in place. */
+  const insertedInto = (before: string, after: string): string => {
+    let head = 0;
+    while (head < before.length && before[head] === after[head]) head += 1;
+    let tail = 0;
+    while (tail < before.length - head && before[before.length - 1 - tail] === after[after.length - 1 - tail]) tail += 1;
+    expect(head + tail).toBe(before.length);
+    return after.slice(head, after.length - tail);
+  };
+
+  it.each([
+    ['L5: a flow list', 'signoffs: [{claim: c0000000001, file: a.md, text: t, decision: approved, reviewer: R, date: 2025-01-01, pack_version: p 1}]\nextra_key: {a: 1}  # inline\n'],
+    ['L5: an empty flow list', '# ledger\nsignoffs: []\n'],
+    ['L5: a flow list over several lines with a trailing comma', 'signoffs: [\n  {claim: c0000000001, file: a.md, text: t, decision: approved, reviewer: R, date: 2025-01-01, pack_version: p 1},\n]\n'],
+    ['L5: a key after signoffs:', 'signoffs:\n  - claim: c0000000001\n    file: a.md\n    text: t\n    decision: approved\n    reviewer: R\n    date: 2025-01-01\n    pack_version: p 1\n# the team\nteam: {lead: R}\n'],
+    ['L5: an empty signoffs: before another key', 'signoffs:\nteam: {lead: R}   # kept as typed\n'],
+    ['L5: a flow mapping as the whole ledger', '{team: x}\n'],
+    ['L6: a CRLF flow list', 'signoffs: [{claim: c0000000001, file: a.md, text: t, decision: approved, reviewer: R, date: 2025-01-01, pack_version: p 1}]\r\nteam: {lead: R}\r\n'],
+  ])('%s keeps every earlier byte in place; only the new entry is inserted, in the ledger\'s own line ending', async (_what, text) => {
+    const file = await ledgerFile(text);
+    const before = (await readLedger(file)).signoffs;
+    await appendSignoffs(file, [entry(2)]);
+    const after = await readFile(file, 'utf8');
+    const inserted = insertedInto(text, after);
+    expect(inserted).toContain(entry(2).claim);
+    if (text.includes('\r\n')) expect(inserted.replaceAll('\r\n', '')).not.toContain('\n');
+    else expect(inserted).not.toContain('\r');
+    expect((await readLedger(file)).signoffs).toEqual([...before, entry(2)]);
+  });
+
   it('keeps the ledger\'s file mode', async () => {
     const file = await ledgerFile('signoffs:\n');
     await chmod(file, 0o640);
