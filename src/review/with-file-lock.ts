@@ -12,6 +12,7 @@ import { hostname } from 'node:os';
 import { open, readFile, rename, rm, stat } from 'node:fs/promises';
 import { randomBytes } from 'node:crypto';
 import { FirnlineError } from '../errors.js';
+import { isProcessAlive } from '../guard/process-alive.js';
 
 /** How long to wait, and when a lock from another host counts as abandoned. */
 export interface LockTiming {
@@ -88,7 +89,7 @@ async function clearIfAbandoned(lock: string, staleAfterMs: number): Promise<Hol
     const holder = await readHolder(lock);
     const age = Date.now() - info.mtimeMs;
     const abandoned =
-      holder === undefined ? age > EMPTY_LOCK_GRACE_MS : holder.host === hostname() ? !isAlive(holder.pid) : age > staleAfterMs;
+      holder === undefined ? age > EMPTY_LOCK_GRACE_MS : holder.host === hostname() ? !isProcessAlive(holder.pid) : age > staleAfterMs;
     if (!abandoned) return holder;
     // Move it aside first: a rename succeeds for one run only, so two runs never both clear it.
     const aside = `${lock}.${randomBytes(4).toString('hex')}.stale`;
@@ -105,17 +106,6 @@ async function readHolder(lock: string): Promise<Holder | undefined> {
   const [pid, host, token] = text.trim().split(/\s+/u);
   if (pid === undefined || !/^\d+$/u.test(pid) || host === undefined || token === undefined) return undefined;
   return { pid: Number(pid), host, token };
-}
-
-function isAlive(pid: number): boolean {
-  if (pid === process.pid) return true;
-  try {
-    process.kill(pid, 0);
-    return true;
-  } catch (error) {
-    // EPERM: the process exists but belongs to someone else.
-    return (error as NodeJS.ErrnoException).code === 'EPERM';
-  }
 }
 
 function sleep(ms: number): Promise<void> {

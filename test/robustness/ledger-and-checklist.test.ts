@@ -5,7 +5,8 @@
  * note a reviewer typed is lost or silently ignored. Invented sign-offs (demo data).
  */
 import { spawn } from 'node:child_process';
-import { chmod, mkdtemp, readFile, stat, utimes, writeFile } from 'node:fs/promises';
+import { chmod, mkdtemp, readdir, readFile, stat, utimes, writeFile } from 'node:fs/promises';
+import { fileURLToPath } from 'node:url';
 import { hostname, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -15,6 +16,7 @@ import { appendSignoffs } from '../../src/review/append-signoffs.js';
 import { readLedger } from '../../src/review/read-ledger.js';
 import type { SignoffEntry } from '../../src/review/signoff-entry.js';
 import { withFileLock } from '../../src/review/with-file-lock.js';
+import { temporaryFileFor, writeFileAtomic } from '../../src/write-file-atomic.js';
 import { expectUserError, folderWith, runCli } from './helpers.js';
 
 const entry = (n: number, extra: Partial<SignoffEntry> = {}): SignoffEntry => ({
@@ -83,6 +85,47 @@ describe('the ledger lock', () => {
     await utimes(`${file}.lock`, new Date(Date.now() - 10_000), new Date(Date.now() - 10_000));
     // staleAfterMs of an hour: only the dead-holder rule can clear it within the 2 s timeout.
     expect(await withFileLock(file, async () => 'ran', { timeoutMs: 2_000, staleAfterMs: 3_600_000 })).toBe('ran');
+  });
+});
+
+describe('temporary files after kill -9 (L9)', () => {
+  const temps = async (file: string) => (await readdir(join(file, '..'))).filter((n) => n.endsWith('.tmp'));
+
+  it('a write killed with SIGKILL leaves a temporary file that the next write removes; the ledger stays whole', async () => {
+    const file = await ledgerFile('signoffs:\n');
+    const writer = fileURLToPath(new URL('../../dist/write-file-atomic.js', import.meta.url));
+    let seen = false;
+    for (let attempt = 0; attempt < 3 && !seen; attempt += 1) {
+      // A large write takes long enough to be caught half-way.
+      const child = spawn(process.execPath, ['--input-type=module', '-e', `const { writeFileAtomic } = await import(${JSON.stringify(writer)}); await writeFileAtomic(${JSON.stringify(file)}, new Uint8Array(400_000_000).fill(35));`], { stdio: 'ignore' });
+      const exited = new Promise((done) => child.on('exit', done));
+      for (let i = 0; i < 2_000 && !seen && child.exitCode === null; i += 1) {
+        seen = (await temps(file)).length > 0;
+        if (!seen) await new Promise((done) => setTimeout(done, 2));
+      }
+      child.kill('SIGKILL');
+      await exited;
+      if (seen && (await temps(file)).length === 0) seen = false;
+      if (!seen) await writeFile(file, 'signoffs:\n');
+    }
+    expect(seen).toBe(true);
+    expect(await readFile(file, 'utf8')).toBe('signoffs:\n');
+    await appendSignoffs(file, [entry(1)]);
+    expect(await temps(file)).toEqual([]);
+    expect((await readLedger(file)).signoffs).toEqual([entry(1)]);
+  }, 60_000);
+
+  it('the temporary file of a live process is left alone', async () => {
+    const file = await ledgerFile('signoffs:\n');
+    const holder = liveProcess();
+    try {
+      const theirs = temporaryFileFor(file, holder.pid);
+      await writeFile(theirs, 'half');
+      await writeFileAtomic(file, 'signoffs:\n');
+      expect(await readFile(theirs, 'utf8')).toBe('half');
+    } finally {
+      holder.stop();
+    }
   });
 });
 
