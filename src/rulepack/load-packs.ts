@@ -9,6 +9,7 @@ import type { Source } from '../types.js';
 import { resolvePack, type KnownIds } from './resolve-pack.js';
 import type { Lexicon, LoadedPacks, RulePack } from './types.js';
 import { byPlace, schemaErrors } from './validate-schema.js';
+import { MAX_PACK_BYTES, packLimitProblems } from './pack-limits.js';
 import { readYamlFile } from './yaml-file.js';
 
 /** Where the built-in pack lives, from both src/ and dist/. */
@@ -22,12 +23,15 @@ const NOTHING_KNOWN: KnownIds = { sources: new Map(), terms: new Set(), defined:
  */
 export async function loadRulePack(file: string, known: KnownIds = NOTHING_KNOWN): Promise<RulePack> {
   const absolute = resolve(file);
-  const yaml = await readYamlFile(absolute, shownPath(file));
+  const yaml = await readYamlFile(absolute, shownPath(file), MAX_PACK_BYTES);
   // A file that is not a pack at all gets one line, and never an echo of its content.
   const data = yaml.data;
   if (data === null || typeof data !== 'object' || Array.isArray(data) || !Object.hasOwn(data, 'pack')) {
     throw new FirnlineErrors([new FirnlineError('pack-not-a-pack', 'this is not a rule pack (no `pack:` key at the top level); see docs/rule-packs.md', { file: shownPath(file) })]);
   }
+  // Size first: a pack of any size is refused in bounded time (pack-limits.ts).
+  const tooLarge = packLimitProblems(yaml);
+  if (tooLarge.length > 0) throw new FirnlineErrors(tooLarge);
   const problems = schemaErrors(yaml, 'rulepack');
   if (problems.length > 0) throw new FirnlineErrors(problems);
   const pack = resolvePack(yaml, absolute, known);

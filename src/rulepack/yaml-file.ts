@@ -16,11 +16,11 @@ export interface YamlFile {
   errorAt(code: string, path: readonly (string | number)[], message: string, part?: 'key' | 'value'): FirnlineError;
 }
 
-/** Reads and parses `file`; YAML syntax errors throw FirnlineErrors with line and column. */
-export async function readYamlFile(file: string, shownAs = file): Promise<YamlFile> {
+/** Reads and parses `file` (at most `maxBytes`); YAML syntax errors throw FirnlineErrors with line and column. */
+export async function readYamlFile(file: string, shownAs = file, maxBytes?: number): Promise<YamlFile> {
   let text: string;
   try {
-    text = await readRegularText(file, { shown: shownAs, code: 'file-missing' });
+    text = await readRegularText(file, { shown: shownAs, code: 'file-missing', ...(maxBytes === undefined ? {} : { maxBytes }) });
   } catch (error) {
     if (error instanceof FirnlineError) throw error;
     throw new FirnlineError('file-missing', `cannot read this file; check the path`, { file: shownAs });

@@ -13,6 +13,7 @@ import { checkPatterns } from '../../src/checks/reasoning/check-patterns.js';
 import { compilePacks } from '../../src/checks/reasoning/compile-packs.js';
 import { FirnlineError } from '../../src/errors.js';
 import { loadPacks } from '../../src/rulepack/index.js';
+import { MAX_PACK_BYTES, MAX_PACK_ENTRIES, MAX_PACK_WORDS, MAX_WORDS_PER_LIST } from '../../src/rulepack/pack-limits.js';
 import { expectNoCrash, expectUserError, folderWith, runCli } from './helpers.js';
 
 const VOSTOK = 'The Vostok core spans 800,000 years of CO2 history.\n';
@@ -97,6 +98,39 @@ describe('a whole-run budget for pattern rules (R10)', () => {
     expect(stopped).toBeInstanceOf(FirnlineError);
     expect((stopped as FirnlineError).toLine()).toMatch(/p\.yaml: pattern rules ran for more than 0\.001 s in this run, most of it in house\.slowish/u);
     expect(checked).toBeLessThan(10_000);
+  });
+});
+
+describe('very large packs are refused in bounded time (R11)', () => {
+  const sources = (n: number) => `sources:\n${Array.from({ length: n }, (_, i) => `  - id: s${i}\n    cite: Source ${i}\n    how: read in the source\n`).join('')}`;
+  const values = (n: number) => `reference_values:\n${Array.from({ length: n }, (_, i) => `  - id: house-${i}\n    measures: "value ${i}"\n    low: 1\n    high: 2\n    unit: ppm\n    binds_when:\n      all: [[vostok]]\n    correction: "1 ppm"\n    sources: [s0]\n`).join('')}`;
+
+  it('more reference values than a pack may hold: one line at the first one beyond the limit', async () => {
+    const dir = await folderWith({ 'd.md': VOSTOK, 'big.yaml': `${HEAD}${sources(1)}${values(MAX_PACK_ENTRIES + 1)}` });
+    // Line of entry 2,000 (0-based): head 3 lines, sources 4 lines, the section key, then 9 lines per value.
+    expectUserError(await runCli(['check', 'd.md', '--pack', 'big.yaml'], dir), new RegExp(`(?:^|/)big\\.yaml:${3 + 4 + 1 + 9 * MAX_PACK_ENTRIES + 1}:5: more than 2,000 entries in \`reference_values\` \\(2,001\\); split the pack`, 'u'));
+  });
+
+  it('a term with more words than a list may hold, and too many words in all', async () => {
+    const many = (n: number, tag: string) => `[${Array.from({ length: n }, (_, i) => `${tag}${i}`).join(', ')}]`;
+    const oneLong = `${HEAD}terms:\n  - id: house-term\n    words: ${many(MAX_WORDS_PER_LIST + 1, 'w')}\n`;
+    const dir = await folderWith({ 'd.md': VOSTOK, 'long.yaml': oneLong });
+    expectUserError(await runCli(['check', 'd.md', '--pack', 'long.yaml'], dir), /(?:^|\/)long\.yaml:6:\d+: more than 500 words in one list \(501\); split them over several terms/u);
+    const terms = Array.from({ length: Math.ceil(MAX_PACK_WORDS / MAX_WORDS_PER_LIST) + 1 }, (_, t) => `  - id: house-t${t}\n    words: ${many(MAX_WORDS_PER_LIST, `t${t}w`)}\n`).join('');
+    await writeFile(join(dir, 'wide.yaml'), `${HEAD}terms:\n${terms}`);
+    expectUserError(await runCli(['check', 'd.md', '--pack', 'wide.yaml'], dir), /(?:^|\/)wide\.yaml:\d+:\d+: more than 20,000 words in the pack's terms and lexicon together/u);
+  });
+
+  it('a pack file over the size limit is refused from its size, before it is parsed', async () => {
+    const dir = await folderWith({ 'd.md': VOSTOK, 'huge.yaml': `${HEAD}description: "${'x'.repeat(MAX_PACK_BYTES)}"\n` });
+    expectUserError(await runCli(['check', 'd.md', '--pack', 'huge.yaml'], dir), /(?:^|\/)huge\.yaml: larger than 2 MiB, the most Firnline reads from one file; split it/u);
+  });
+
+  it('a pack at the entry limit loads and is used', async () => {
+    const dir = await folderWith({ 'd.md': VOSTOK, 'p.yaml': `${HEAD}${sources(MAX_PACK_ENTRIES)}patterns:\n  - id: house.vostok\n    reason: r\n    regex: Vostok\n    sources: [s1999]\n` });
+    const run = await runCli(['check', 'd.md', '--pack', 'p.yaml', '--format', 'json'], dir);
+    expectNoCrash(run);
+    expect((JSON.parse(run.stdout) as { flags: { ruleId: string }[] }).flags.map((f) => f.ruleId)).toContain('house.vostok');
   });
 });
 
