@@ -30,6 +30,14 @@ describe('control characters are shown, never sent (B17)', () => {
     expect(run.stdout).toContain('800,000\u241b[2K years');
   });
 
+  it('in the checklist Markdown', async () => {
+    const dir = await folderWith({ 'esc.md': 'The Vostok core spans 800,000\u001b[2K years of CO2 history.\u0007\n' });
+    const run = await runCli(['checklist', 'esc.md'], dir);
+    expectNoCrash(run);
+    expect(run.stdout).not.toMatch(RAW_CONTROLS);
+    expect(run.stdout).toContain('800,000\u241b\\[2K years');
+  });
+
   it('in error lines that name a file', async () => {
     const run = await runCli(['check', 'nonexist\u001b[31m.md'], await folderWith({}));
     expectUserError(run, /^nonexist\u241b\[31m\.md: no such file or folder/u);
