@@ -103,3 +103,15 @@ describe('a draft is on topic because it names the subject', () => {
     expect(result.claims.map((c) => c.text)).toEqual(['The Vostok core spans about 420,000 years.']);
   });
 });
+
+describe('order and comparison read past verbs of change and adverbs of degree', () => {
+  // Shakun et al. 2012 (global temperature lagged CO2); Caillon et al. 2003 (air younger than its
+  // ice); Jouzel et al. 2007 and Tierney et al. 2020 (polar swings exceed the global mean).
+  it.each([
+    ['In the last deglaciation the global mean temperature started climbing before CO2 did.', 'direction.global-co2-ahead-of-warming'],
+    ['In the ice-core era the poles respond more sluggishly than the planet as a whole.', 'direction.polar-swings-exceed-global'],
+    ['In an ice core the trapped air has been around longer than the ice that surrounds it.', 'direction.trapped-air-younger-than-ice'],
+  ])('%s → %s', async (text, ruleId) => {
+    expect(await serious(text)).toContain(ruleId);
+  });
+});
