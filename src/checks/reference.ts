@@ -10,6 +10,7 @@ import { levelAt } from '../rulepack/resolve-reference.js';
 import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
 import type { Binding, FlagDraft, Quantity, Verdict } from '../types.js';
 import { correctionFor, shownClaim, shownReference } from './reference-format.js';
+import { factorOff, levelWithDistance } from './distance-level.js';
 
 /** The pack term whose words mark a claim about the present ("today", "now"...). */
 export const TODAY_TERM = 'today';
@@ -39,7 +40,7 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     }
     const distance = relativeDistance(q.low, q.high, r);
     verdicts.push(distance === 0 ? 'agrees' : 'conflicts');
-    const level = distance === 0 ? undefined : levelAt(r.levels, distance);
+    const level = distance === 0 ? undefined : levelWithDistance(levelAt(r.levels, distance), factorOff(q.low, q.high, r));
     if (level === undefined) continue;
     aboutToday ??= findTerms(sentence, packs).has(TODAY_TERM);
     const reference = shownReference(r, q);

@@ -3,6 +3,7 @@ import { relative } from 'node:path';
 import { FirnlineError } from '../errors.js';
 import { CHECKLIST_MARKER } from '../report/checklist-markdown.js';
 import { parseTickedChecklist } from '../report/checklist-ticks.js';
+import { readChecklistBoxes } from '../report/checklist-remarks.js';
 import { readLedger } from '../review/read-ledger.js';
 
 /**
@@ -21,14 +22,17 @@ export async function guardChecklistOutput(target: string, ledgerFile: string, c
   if (!existing.trimStart().startsWith(CHECKLIST_MARKER)) {
     throw new FirnlineError('output-not-checklist', 'this file exists and is not a checklist Firnline wrote; choose another path, or pass --force to replace it', { file: shown });
   }
-  const ticked = parseTickedChecklist(existing, shown);
-  if (ticked.length === 0) return;
+  // Boxes Firnline ticked itself (their sign-off held) are not the reviewer's; comments on unticked boxes are.
+  const boxes = new Map(readChecklistBoxes(existing).map((b) => [b.line, b]));
+  const ticked = parseTickedChecklist(existing, shown).filter((t) => boxes.get(t.line)?.alreadySignedOff !== true);
+  const commented = [...boxes.values()].filter((b) => !b.ticked && (b.needsChange !== undefined || b.note !== undefined));
+  if (ticked.length + commented.length === 0) return;
   const recorded = new Set((await readLedger(ledgerFile, cwd)).signoffs.map((s) => s.claim));
-  const pending = ticked.filter((t) => !recorded.has(t.claimId));
+  const pending = [...ticked, ...commented].filter((t) => !recorded.has(t.claimId)).sort((a, b) => a.line - b.line);
   if (pending.length > 0) {
     throw new FirnlineError(
       'output-has-ticks',
-      `this checklist has ${pending.length} ticked ${pending.length === 1 ? 'box' : 'boxes'} not yet in the ledger; run \`firnline signoff --from ${shown} --by NAME\` first, or pass --force to replace it`,
+      `this checklist has ${pending.length} ticked or commented ${pending.length === 1 ? 'box' : 'boxes'} not yet in the ledger; run \`firnline signoff --from ${shown} --by NAME\` first, or pass --force to replace it`,
       { file: shown, line: pending[0]?.line ?? 1 },
     );
   }

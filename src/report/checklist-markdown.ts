@@ -24,7 +24,9 @@ export const SIGN_OFF_INSTRUCTIONS = [
   '**How to sign off.** Check each claim against its sources, then tick its box (`- [x]`). A tick on its',
   'own records the decision `approved`. For another decision, write it on the ticked line in brackets:',
   '`(corrected: what you changed)` or `(waived: why the claim stands as it is)`; add `(note: ...)` for a',
-  'remark. Then run `firnline signoff --from <this file> --by "Your Name"`. Leave the claim ids as they are.',
+  'remark. If a claim must change before it can be signed off, leave its box empty and write',
+  '`(needs change: what must change)` on its line: the editor sees it on the claim and the gate stays red.',
+  'Then run `firnline signoff --from <this file> --by "Your Name"`. Leave the claim ids as they are.',
 ].join('\n');
 
 /**
@@ -47,7 +49,7 @@ export function checklistToMarkdown(checklist: Checklist): string {
     '',
     `Made by Firnline ${checklist.tool.version} on ${checklist.generated.slice(0, 10)}, against the rule packs ${checklist.packs || '(none)'}.`,
     `${plural(counts.claims, 'claim')} in ${plural(counts.files, 'file')}. Verdicts: conflicts ${counts.conflicts}, agrees ${counts.agrees}, no reference ${counts['no reference']}. ` +
-      `Sign-off: signed off ${counts['signed off']}, changed since sign-off ${counts.stale}, open ${counts.open}.`,
+      `Sign-off: signed off ${counts['signed off']}, needs change ${counts['needs change']}, changed since sign-off ${counts.stale}, open ${counts.open}.`,
     '',
     `> ${checklist.cautions}`,
     '',
@@ -71,7 +73,9 @@ export function checklistToMarkdown(checklist: Checklist): string {
 }
 
 function itemLines(item: ChecklistItem): string[] {
-  const lines = [`- [ ] **${item.id}** line ${item.line}: ${item.sentence}`];
+  // A claim whose sign-off holds is shown ticked, with who and when; `signoff --from` leaves it as it is.
+  const box = item.signoff.status === 'signed off' ? '[x]' : '[ ]';
+  const lines = [`- ${box} **${item.id}** line ${item.line}: ${item.sentence}`];
   const detail = (label: string, text: string) => lines.push(`  - ${label}: ${text}`);
   if (item.values.length > 0) detail('Values read', item.values.map((v) => `"${v.text}" (${range(v)})`).join('; '));
   detail('Verdict', VERDICT_WORDS[item.verdict](item));
@@ -84,8 +88,14 @@ function itemLines(item: ChecklistItem): string[] {
     for (const s of item.sources) lines.push(`    - ${formatSource(s)}`);
   }
   const s = item.signoff;
-  if (s.status === 'signed off') detail('Signed off', `by ${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}, ${s.decision ?? ''}`);
-  if (s.status === 'stale') detail('Changed since sign-off', `${s.reviewer ?? '?'} signed off this wording on ${(s.date ?? '').slice(0, 10)}: "${s.signedOffText ?? ''}"`);
+  const where = s.movedFrom !== undefined ? ` (moved from ${s.movedFrom})` : s.sharedWith !== undefined ? ` (same sentence in ${s.sharedWith})` : '';
+  if (s.status === 'signed off') detail('Signed off', `by ${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}, ${s.decision ?? ''}${where}`);
+  if (s.status === 'needs change') detail('Needs change', `${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}: ${s.reason ?? ''}${where}`);
+  if (s.status === 'stale') {
+    const earlier = s.decision === 'needs-change' ? `marked this wording as needing a change (${s.reason ?? ''})` : 'signed off this wording';
+    detail('Changed since sign-off', `${s.reviewer ?? '?'} ${earlier} on ${(s.date ?? '').slice(0, 10)}${where}: "${s.signedOffText ?? ''}"`);
+    if (s.changes !== undefined) detail('What changed', s.changes);
+  }
   return lines;
 }
 

@@ -19,14 +19,22 @@ export function describeReview(review: ReviewSummary): string[] {
   const { counts } = review;
   const total = review.claims.length;
   const lines = [
-    `Sign-off: ${counts['signed off']} of ${plural(total, 'claim')} signed off; ${plural(counts.open, 'claim')} open, ${counts.stale} changed since sign-off.`,
+    `Sign-off: ${counts['signed off']} of ${plural(total, 'claim')} signed off; ${plural(counts.open, 'claim')} open, ${counts.stale} changed since sign-off, ${counts['needs change']} marked needs change.`,
   ];
   for (const r of review.claims) {
     const place = `${r.claim.file}:${r.claim.span.start.line}:${r.claim.span.start.column} ${r.claim.id}`;
+    const moved = r.movedFrom === undefined ? '' : `, moved from ${r.movedFrom}`;
     if (r.status === 'stale' && r.signoff !== undefined) {
-      lines.push(`changed since sign-off: ${place} (${signedBy(r.signoff)})`);
+      lines.push(`changed since sign-off: ${place} (${signedBy(r.signoff)}${moved})`);
       lines.push(`  signed off: ${foldClaimText(r.signoff.text)}`);
       lines.push(`  now:        ${foldClaimText(r.claim.text)}`);
+      if (r.changes !== undefined) lines.push(`  changed:    ${r.changes}`);
+    }
+    if (r.status === 'needs change' && r.signoff !== undefined) {
+      lines.push(`needs change: ${place} (${r.signoff.reviewer} on ${r.signoff.date.slice(0, 10)}${moved}): ${r.signoff.reason ?? ''}`);
+    }
+    if (r.status === 'signed off' && r.movedFrom !== undefined) {
+      lines.push(`signed off, moved from ${r.movedFrom}: ${place}`);
     }
   }
   // A first run on a large repository has hundreds of open claims: the checklist lists them all.
@@ -35,7 +43,7 @@ export function describeReview(review: ReviewSummary): string[] {
     lines.push(`open: ${r.claim.file}:${r.claim.span.start.line}:${r.claim.span.start.column} ${r.claim.id} ${foldClaimText(r.claim.text)}`);
   }
   if (open.length > MAX_OPEN_LINES) lines.push(`... and ${open.length - MAX_OPEN_LINES} more open claims.`);
-  if (counts.open + counts.stale > 0) {
+  if (counts.open + counts.stale + counts['needs change'] > 0) {
     lines.push('To sign off: firnline checklist -o FILE, tick the boxes, then firnline signoff --from FILE --by "Your Name".');
   }
   return lines;

@@ -23,7 +23,7 @@ describe('checklist -o protects what is already there', () => {
     const refused = await firnline(dir, 'checklist', 'drafts', '-o', 'checklist.md');
     expect(refused.code).toBe(2);
     expect(refused.out).toBe(
-      `checklist.md:${tickLine}: this checklist has 1 ticked box not yet in the ledger; run \`firnline signoff --from checklist.md --by NAME\` first, or pass --force to replace it\n`,
+      `checklist.md:${tickLine}: this checklist has 1 ticked or commented box not yet in the ledger; run \`firnline signoff --from checklist.md --by NAME\` first, or pass --force to replace it\n`,
     );
     expect(await readFile(join(dir, 'checklist.md'), 'utf8')).toBe(ticked);
 

@@ -27,7 +27,7 @@ describe('reviewClaims', () => {
       [span.id, 'signed off'],
       [rise.id, 'open'],
     ]);
-    expect(review.counts).toEqual({ 'signed off': 1, stale: 0, open: 1 });
+    expect(review.counts).toEqual({ 'signed off': 1, 'needs change': 0, stale: 0, open: 1 });
   });
 
   it('keeps a sign-off when the claim moved to another line: the id does not hold a line number', () => {
@@ -39,13 +39,16 @@ describe('reviewClaims', () => {
     const edited = makeClaim(F, 3, 'The Dome C core reaches back about 800,000 years.');
     const review = reviewClaims([edited, rise], { file: 'l.yaml', signoffs: [approve(span), approve(rise)] });
     expect(review.claims[0]).toMatchObject({ status: 'stale', signoff: { claim: span.id, text: span.text } });
-    expect(review.counts).toEqual({ 'signed off': 1, stale: 1, open: 0 });
+    expect(review.counts).toEqual({ 'signed off': 1, 'needs change': 0, stale: 1, open: 0 });
   });
 
-  it('does not call a claim stale after a sign-off in another file, or after one its claim still carries', () => {
+  it('does not call a claim stale after a sign-off in another file of the run, or after one its claim still carries', () => {
     const edited = makeClaim(F, 3, 'The Dome C core reaches back about 800,000 years.');
+    const other = makeClaim('drafts/other.md', 1, 'Sea level stood lower in the last ice age.');
     const elsewhere = { ...approve(span), file: 'drafts/other.md' };
-    expect(reviewClaims([edited], { file: 'l.yaml', signoffs: [elsewhere] }).claims[0]?.status).toBe('open');
+    expect(reviewClaims([edited, other], { file: 'l.yaml', signoffs: [elsewhere] }).claims[0]?.status).toBe('open');
+    // A file that is not in the run any more was renamed or moved: its sign-offs follow the claims.
+    expect(reviewClaims([edited], { file: 'l.yaml', signoffs: [elsewhere] }).claims[0]).toMatchObject({ status: 'stale', movedFrom: 'drafts/other.md' });
     expect(reviewClaims([edited, span], { file: 'l.yaml', signoffs: [approve(span)] }).claims[0]?.status).toBe('open');
   });
 

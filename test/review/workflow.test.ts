@@ -15,7 +15,7 @@ describe('the sign-off workflow in a fresh git repository (issue 6, "Done when")
     // 1. Nothing signed off yet: the gate fails and says how many claims are open.
     const first = await firnline(dir, 'check', 'drafts', '--require-signoff');
     expect(first.code).toBe(1);
-    expect(first.out).toMatch(/Sign-off: 0 of (\d+) claims signed off; \1 claims open, 0 changed since sign-off\./u);
+    expect(first.out).toMatch(/Sign-off: 0 of (\d+) claims signed off; \1 claims open, 0 changed since sign-off, 0 marked needs change\./u);
 
     // 2. The checklist is written, every box ticked, and imported.
     expect((await firnline(dir, 'checklist', 'drafts', '-o', 'checklist.md')).code).toBe(0);

@@ -38,7 +38,7 @@ describe('firnline.yaml', () => {
       (e: unknown) => (e as FirnlineErrors).errors.map((x) => x.toLine().slice(root.length + 1)),
     );
     expect(lines).toEqual([
-      'firnline.yaml:2:10: `fail_on` must be one of: error, warning, note, never',
+      'firnline.yaml:2:10: `fail_on` must be one of: error, warning, note, never, strict',
       'firnline.yaml:4:18: `value.co2-lgm` must be one of: error, warning, note, off',
       'firnline.yaml:5:1: unknown key `colour`; see docs/rule-packs.md for the keys',
     ]);

@@ -11,6 +11,7 @@ import { applyGate } from '../gate.js';
 import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
 import { writeFileAtomic } from '../../write-file-atomic.js';
 import { exitCodeFor } from '../exit-code.js';
+import { applyStrictPreset } from '../strict-preset.js';
 
 /** The report formats, plus `markdown`: the sign-off checklist (GLOSSARY.md). */
 const CHECK_FORMATS = [...REPORT_FORMATS, 'markdown'] as const;
@@ -23,6 +24,7 @@ interface CheckFlags {
   output?: string;
   requireSignoff?: boolean;
   changedSince?: string;
+  strict?: boolean;
 }
 
 /** `firnline check [paths...]`: scan drafts, print flags, set the exit status. */
@@ -38,11 +40,14 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('-o, --output <file>', 'write the report to a file instead of standard output')
     .option('--require-signoff', 'exit 1 while any claim lacks a current sign-off in the ledger')
     .option('--changed-since <rev>', 'check only claims on lines changed since a git revision')
+    .option('--strict', 'the strict preset for publication: every conflicting value and every reasoning error is an error, and errors fail the run')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
-      const failOn = flags.failOn ?? run.failOn;
+      const strict = flags.strict === true || (flags.failOn === undefined && run.failOn === 'strict');
+      const failOn = flags.failOn ?? (run.failOn === 'strict' ? 'error' : run.failOn);
       const targets = paths !== undefined && paths.length > 0 ? paths : ['.'];
-      const result = await checkPaths(targets, checkOptionsOf(run, ctx));
+      const checked = await checkPaths(targets, checkOptionsOf(run, ctx));
+      const result = strict ? applyStrictPreset(checked) : checked;
       const gate = await applyGate(result, {
         requireSignoff: flags.requireSignoff === true,
         ...(flags.changedSince === undefined ? {} : { changedSince: flags.changedSince }),
