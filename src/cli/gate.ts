@@ -80,7 +80,7 @@ export async function applyGate(result: CheckResult, options: GateOptions): Prom
 }
 
 /** Keeps claims with a line in `changed`, and the flags that belong to them. */
-function onChangedLines(result: CheckResult, changed: Map<string, Set<number>>): CheckResult {
+export function onChangedLines(result: CheckResult, changed: Map<string, Set<number>>): CheckResult {
   const touches = (file: string, from: number, to: number) => {
     const lines = changed.get(file);
     if (lines === undefined) return false;

@@ -1,10 +1,16 @@
 import { Option, type Command } from 'commander';
-import { relative, resolve } from 'node:path';
+import { mkdir } from 'node:fs/promises';
+import { dirname, join, relative, resolve } from 'node:path';
+import { FirnlineError } from '../../errors.js';
+import { changedLines } from '../../review/changed-lines.js';
+import type { ReviewSummary } from '../../review/review-claims.js';
+import type { CheckResult } from '../../types.js';
+import { onChangedLines } from '../gate.js';
 import { checkPaths } from '../../engine.js';
 import type { CliContext } from '../context.js';
 import { CHECKLIST_RENDERERS, renderChecklistOf, type ChecklistFormat } from '../render-checklist.js';
 import { guardChecklistOutput } from '../guard-checklist-output.js';
-import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
+import { checkOptionsOf, loadRunSettings, type RunSettings } from '../run-settings.js';
 import { writeFileAtomic } from '../../write-file-atomic.js';
 
 interface ChecklistFlags {
@@ -13,6 +19,9 @@ interface ChecklistFlags {
   config?: string;
   pack: string[];
   force?: boolean;
+  open?: boolean;
+  changedSince?: string;
+  perFile?: boolean;
 }
 
 /** `firnline checklist [paths...]`: every claim, flagged or not, as boxes for an expert to tick. */
@@ -24,21 +33,56 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
     .addOption(new Option('--format <name>', 'checklist format').choices(Object.keys(CHECKLIST_RENDERERS)).default('markdown'))
     .option('-o, --output <file>', 'write the checklist to a file instead of standard output')
     .option('--force', 'replace the output file even if it holds ticks not yet in the ledger')
+    .option('--open', 'only claims that still need the expert: open, changed since sign-off, or marked needs change')
+    .option('--changed-since <rev>', 'only claims on lines changed since a git revision (a pull request\'s base)')
+    .option('--per-file', 'with -o FOLDER: one checklist per draft, at FOLDER/<draft path>.checklist.md')
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (value: string, previous: string[]) => [...previous, value], [])
     .action(async (paths: string[] | undefined, flags: ChecklistFlags) => {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const targets = paths !== undefined && paths.length > 0 ? paths : ['.'];
-      const result = await checkPaths(targets, checkOptionsOf(run, ctx));
-      const { text, review } = await renderChecklistOf(result, run, flags.format, ctx.cwd);
+      const found = await checkPaths(targets, checkOptionsOf(run, ctx));
+      const result = flags.changedSince === undefined ? found : onChangedLines(found, await changedLines(flags.changedSince, ctx.cwd));
+      const options = { openOnly: flags.open === true };
+      if (flags.perFile === true) {
+        if (flags.output === undefined) throw new FirnlineError('checklist-per-file-output', '--per-file writes one checklist per draft: give the folder with -o FOLDER');
+        await writePerFile(result, run, flags, ctx, options);
+        return;
+      }
+      const { text, review } = await renderChecklistOf(result, run, flags.format, ctx.cwd, options);
       if (flags.output === undefined) {
         ctx.stdout(text);
         return;
       }
       const target = resolve(ctx.cwd, flags.output);
       if (flags.force !== true) await guardChecklistOutput(target, run.ledger, ctx.cwd);
+      await mkdir(dirname(target), { recursive: true });
       await writeFileAtomic(target, text);
-      const { counts } = review;
-      ctx.stderr(`Wrote ${result.claims.length} claims to ${relative(ctx.cwd, target)} (${counts['signed off']} signed off, ${counts.stale} changed since sign-off, ${counts.open} open).\n`);
+      ctx.stderr(`Wrote ${review.claims.length} claims to ${relative(ctx.cwd, target)} (${countWords(review)}).\n`);
     });
+}
+
+function countWords(review: ReviewSummary): string {
+  const { counts } = review;
+  return `${counts['signed off']} signed off, ${counts['needs change']} needs change, ${counts.stale} changed since sign-off, ${counts.open} open`;
+}
+
+/** `--per-file -o FOLDER`: one checklist per draft that has claims, named after the draft. */
+async function writePerFile(result: CheckResult, run: RunSettings, flags: ChecklistFlags, ctx: CliContext, options: { openOnly: boolean }): Promise<void> {
+  const folder = resolve(ctx.cwd, flags.output ?? '.');
+  const ending = flags.format === 'json' ? '.checklist.json' : '.checklist.md';
+  const files = [...new Set(result.claims.map((c) => c.file))].sort();
+  let written = 0;
+  for (const file of files) {
+    const claims = result.claims.filter((c) => c.file === file);
+    const { text, review } = await renderChecklistOf({ ...result, claims, flags: claims.flatMap((c) => c.flags) }, run, flags.format, ctx.cwd, options);
+    if (review.claims.length === 0) continue;
+    const target = join(folder, `${file.replace(/^(\.\.\/)+/u, '')}${ending}`);
+    if (flags.force !== true) await guardChecklistOutput(target, run.ledger, ctx.cwd);
+    await mkdir(dirname(target), { recursive: true });
+    await writeFileAtomic(target, text);
+    ctx.stderr(`Wrote ${review.claims.length} claims to ${relative(ctx.cwd, target)} (${countWords(review)}).\n`);
+    written += 1;
+  }
+  if (written === 0) ctx.stderr('No claims to put on a checklist; nothing written.\n');
 }
