@@ -26,7 +26,7 @@ export function describeReview(review: ReviewSummary): string[] {
     const moved = r.movedFrom === undefined ? '' : `, moved from ${r.movedFrom}`;
     if (r.status === 'stale' && r.signoff !== undefined) {
       lines.push(`changed since sign-off: ${place} (${signedBy(r.signoff)}${moved})`);
-      lines.push(`  signed off: ${foldClaimText(r.signoff.text)}`);
+      lines.push(`  ${r.signoff.decision === 'needs-change' ? 'commented: ' : 'signed off:'} ${foldClaimText(r.signoff.text)}`);
       lines.push(`  now:        ${foldClaimText(r.claim.text)}`);
       if (r.changes !== undefined) lines.push(`  changed:    ${r.changes}`);
     }
@@ -49,8 +49,9 @@ export function describeReview(review: ReviewSummary): string[] {
   return lines;
 }
 
-/** "signed off by R. Okafor on 2025-02-11, approved" */
+/** "signed off by R. Okafor on 2025-02-11, approved", or "marked needs change by ..." for a needs-change entry. */
 export function signedBy(entry: { reviewer: string; date: string; decision: string }): string {
+  if (entry.decision === 'needs-change') return `marked needs change by ${entry.reviewer} on ${entry.date.slice(0, 10)}`;
   return `signed off by ${entry.reviewer} on ${entry.date.slice(0, 10)}, ${entry.decision}`;
 }
 

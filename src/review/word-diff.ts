@@ -43,12 +43,13 @@ export function diffWords(before: string, after: string): WordChange[] {
       push('same', b[j] as string);
       i += 1;
       j += 1;
-    } else if (j < b.length && (i >= a.length || (lcs[i]?.[j + 1] ?? 0) >= (lcs[i + 1]?.[j] ?? 0))) {
-      push('added', b[j] as string);
-      j += 1;
-    } else {
+    } else if (i < a.length && (j >= b.length || (lcs[i + 1]?.[j] ?? 0) >= (lcs[i]?.[j + 1] ?? 0))) {
+      // Removals first, so a replacement reads old → new.
       push('removed', a[i] as string);
       i += 1;
+    } else {
+      push('added', b[j] as string);
+      j += 1;
     }
   }
   return runs;

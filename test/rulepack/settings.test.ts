@@ -28,6 +28,8 @@ describe('firnline.yaml', () => {
       levels: { 'value.co2-lgm': 'error', 'logic.lag-rules-out-cause': 'off' },
       failOn: 'note',
       ledger: join(root, 'review', 'signoffs.yaml'),
+      // Where each levels key stands (line 3, inside the flow mapping), for errors found once the packs are loaded.
+      levelPlaces: { 'value.co2-lgm': { line: 3, column: 11 }, 'logic.lag-rules-out-cause': { line: 3, column: 33 } },
     });
   });
 

@@ -1,6 +1,7 @@
 import type { Command} from 'commander';
 import { Option } from 'commander';
-import { resolve } from 'node:path';
+import { mkdir } from 'node:fs/promises';
+import { dirname, resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import { renderReport, REPORT_FORMATS, type ReportFormat } from '../../report/index.js';
 import { renderChecklistOf } from '../render-checklist.js';
@@ -12,6 +13,7 @@ import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
 import { writeFileAtomic } from '../../write-file-atomic.js';
 import { exitCodeFor } from '../exit-code.js';
 import { applyStrictPreset } from '../strict-preset.js';
+import { describeBreakdown, wantsBreakdown } from '../../report/run-breakdown.js';
 
 /** The report formats, plus `markdown`: the sign-off checklist (GLOSSARY.md). */
 const CHECK_FORMATS = [...REPORT_FORMATS, 'markdown'] as const;
@@ -25,6 +27,7 @@ interface CheckFlags {
   requireSignoff?: boolean;
   changedSince?: string;
   strict?: boolean;
+  summary?: boolean;
 }
 
 /** `firnline check [paths...]`: scan drafts, print flags, set the exit status. */
@@ -40,6 +43,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('-o, --output <file>', 'write the report to a file instead of standard output')
     .option('--require-signoff', 'exit 1 while any claim lacks a current sign-off in the ledger')
     .option('--changed-since <rev>', 'check only claims on lines changed since a git revision')
+    .option('--summary', 'text format: print the counts by rule and by file instead of each flag (shown after the flags anyway when 20 or more files have flags)')
     .option('--strict', 'the strict preset for publication: every conflicting value and every reasoning error is an error, and errors fail the run')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
@@ -55,16 +59,24 @@ export function registerCheck(program: Command, ctx: CliContext): void {
         cwd: ctx.cwd,
       });
       const color = flags.output === undefined && ctx.isTTY && !('NO_COLOR' in ctx.env && ctx.env.NO_COLOR !== '');
-      const report =
+      const options = { color, toolVersion: VERSION, failOn, srcRoot: ctx.cwd };
+      const onlyCounts = flags.summary === true && flags.format === 'text';
+      const full =
         flags.format === 'markdown'
           ? (await renderChecklistOf(gate.result, run, 'markdown', ctx.cwd)).text
-          : renderReport(flags.format as ReportFormat, gate.result, { color, toolVersion: VERSION, failOn, srcRoot: ctx.cwd });
-      const summary = gate.summary.length > 0 ? `${gate.summary.join('\n')}\n` : '';
+          : renderReport(flags.format as ReportFormat, gate.result, options);
+      // --summary keeps the text report's closing block (skipped files and the count line) only.
+      const report = onlyCounts ? (full.trimEnd().split('\n\n').pop() ?? '') : full;
+      const breakdown = flags.format === 'text' && (onlyCounts || wantsBreakdown(gate.result)) ? describeBreakdown(gate.result) : [];
+      const lines = [...breakdown, ...gate.summary];
+      const summary = lines.length > 0 ? `${lines.join('\n')}\n` : '';
       if (flags.output === undefined) {
         ctx.stdout(report.endsWith('\n') ? report : `${report}\n`);
         if (summary !== '') (flags.format === 'text' ? ctx.stdout : ctx.stderr)(summary);
       } else {
-        await writeFileAtomic(resolve(ctx.cwd, flags.output), report.endsWith('\n') ? report : `${report}\n`);
+        const target = resolve(ctx.cwd, flags.output);
+        await mkdir(dirname(target), { recursive: true });
+        await writeFileAtomic(target, report.endsWith('\n') ? report : `${report}\n`);
         ctx.stderr(summary);
       }
       ctx.exitCode = Math.max(exitCodeFor(gate.failingFlags, failOn), gate.failed ? 1 : 0);

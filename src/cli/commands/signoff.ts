@@ -68,8 +68,8 @@ export function registerSignoff(program: Command, ctx: CliContext): void {
       const changes = entries.filter((e) => e.decision === 'needs-change').length;
       const signed = entries.length - changes;
       const again = plan.unchanged > 0 ? ` (${plan.unchanged} already recorded as they are, left out)` : '';
-      const asGit = identity === undefined ? '' : ` (git: ${identity})`;
-      const lines = [`Recorded ${signed} sign-off${signed === 1 ? '' : 's'} and ${changes} needs-change comment${changes === 1 ? '' : 's'} by ${reviewer}${asGit} in ${relative(ctx.cwd, run.ledger) || run.ledger}${again}.`];
+      const comments = changes === 0 ? '' : ` and ${changes} needs-change comment${changes === 1 ? '' : 's'}`;
+      const lines = [`Recorded ${signed} sign-off${signed === 1 ? '' : 's'}${comments} by ${reviewer} in ${relative(ctx.cwd, run.ledger) || run.ledger}${again}.`];
       if (read.alreadySignedOff > 0) lines.push(`${read.alreadySignedOff} box${read.alreadySignedOff === 1 ? ' was' : 'es were'} ticked because the sign-off already held; nothing new recorded for them.`);
       if (read.notRecorded.length > 0) lines.push('Not recorded, and why:', ...read.notRecorded.map((n) => `  ${n}`));
       ctx.stdout(`${lines.join('\n')}\n`);
