@@ -39,7 +39,7 @@ export function frontMatterBlocks(node: Yaml, original: string, start: number): 
   for (const pair of doc.contents.items) {
     const key = isScalar(pair.key) ? String(pair.key.value) : '';
     if (!(PUBLISHED_FRONT_MATTER as readonly string[]).includes(key.toLowerCase())) continue;
-    if (!isScalar(pair.value) || typeof pair.value.value !== 'string' || pair.value.range == null) continue;
+    if (!isScalar(pair.value) || typeof pair.value.value !== 'string' || pair.value.range === null || pair.value.range === undefined) continue;
     const [from, to] = pair.value.range;
     const block = blockOf(pair.value.value, original, contentStart + from, contentStart + to, 'front-matter', '');
     if (block !== undefined) blocks.push(block);

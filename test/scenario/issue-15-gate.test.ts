@@ -7,6 +7,10 @@
  * exit status, JUnit, SARIF and JSON agree in every state.
  */
 import { execFileSync } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { Ajv2020 } from 'ajv/dist/2020.js';
+import type { FormatsPlugin } from 'ajv-formats';
 import { mkdir, mkdtemp, readFile, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -32,6 +36,8 @@ const SEEDED = [
   { find: 'global temperature rose before CO2', fix: ['show that global temperature rose before CO2 at the end of every ice age', 'show that Antarctic temperature rose with CO2 at the end of the last ice age'] },
   { find: 'CO2 cannot have caused the warming', fix: ['Because the CO2 rise lagged the warming by several centuries, CO2 cannot have caused the warming.', 'The CO2 rise amplified the warming that orbital changes began.'] },
   { find: 'CO2 stood near 400 ppm', fix: ['near 400 ppm', 'near 190 ppm'] },
+  // A causal claim without a number (Shakun et al. 2012 again: CO2 was both a feedback and a driver).
+  { find: 'CO2 was an effect of the warming, not a cause', fix: ['CO2 was an effect of the warming, not a cause.', 'CO2 was both an effect of the warming and a cause of further warming.'] },
 ] as const;
 
 // Correct claims (values as above; pre-industrial 278 ppm in 1750: Gulev et al. 2021, IPCC AR6 WG1 ch. 2).
@@ -51,6 +57,8 @@ The Vostok core from East Antarctica reaches back about 800,000 years.
 ${RIGHT_EDC}
 
 During the last ice age, CO2 stood near 100 ppm.
+
+CO2 was an effect of the warming, not a cause.
 
 | Core | Span (years) |
 | --- | --- |
@@ -94,6 +102,17 @@ async function museumRepository(): Promise<{ dir: string; git: (...args: string[
   return { dir, git };
 }
 
+// The OASIS SARIF 2.1.0 schema, as shipped in the SARIF SDK package (draft 2020-12; strict off), and
+// our own report schema.
+const sarifAjv = new Ajv2020({ strict: false, allErrors: true });
+(createRequire(import.meta.url)('ajv-formats') as FormatsPlugin)(sarifAjv);
+const validateSarif = sarifAjv.compile(
+  JSON.parse(readFileSync(new URL('../../node_modules/@microsoft/sarif-multitool-linux/sarif-2.1.0.json', import.meta.url), 'utf8')) as object,
+);
+const validateJson = new Ajv2020({ strict: true, allErrors: true }).compile(
+  JSON.parse(readFileSync(new URL('../../schemas/report.schema.json', import.meta.url), 'utf8')) as object,
+);
+
 interface Reports {
   code: number;
   text: string;
@@ -123,6 +142,8 @@ async function gate(dir: string, ...extra: string[]): Promise<Reports> {
     .filter((r) => r.level === 'error' && (r.suppressions ?? []).length === 0)
     .map((r) => ({ ruleId: r.ruleId, message: r.message.text }));
   const report = JSON.parse(await readFile(join(dir, 'out/report.json'), 'utf8')) as { flags: { level: string; signoff?: unknown }[] };
+  expect(validateSarif(log), JSON.stringify(validateSarif.errors)).toBe(true);
+  expect(validateJson(report), JSON.stringify(validateJson.errors)).toBe(true);
   const jsonBlocking = report.flags.filter((f) => f.level === 'error' && f.signoff === undefined).length;
   // The three reports and the exit status say the same thing.
   expect(junitFailures > 0).toBe(text.code === 1);
@@ -214,11 +235,13 @@ describe('issue 15: a sign-off gate that means what it says', () => {
     // 5. The next checklist holds only what still needs the expert; every box ticked, the gate is green.
     const open = await firnline(dir, 'checklist', '--open', '--format', 'json');
     const round2 = JSON.parse(open.out) as Checklist;
-    // The seven corrected numbers are claims changed since the comment; the two reasoning errors were
-    // reworded into sentences without a number or an error, which the engine may or may not read as claims.
+    // The seven corrected numbers are claims changed since the comment; the reasoning errors were
+    // rewritten, and a rewritten sentence is changed since its comment when its words are close
+    // enough, else a new open claim: either way it goes back in front of the expert.
     const statuses = round2.claims.map((c) => c.signoff.status);
-    expect(statuses.filter((s) => s === 'stale')).toHaveLength(7);
+    expect(statuses.filter((s) => s === 'stale').length).toBeGreaterThanOrEqual(7);
     expect(statuses.every((s) => s === 'stale' || s === 'open')).toBe(true);
+    expect(round2.claims.map((c) => c.sentence)).toContain('CO2 was both an effect of the warming and a cause of further warming.');
     await firnline(dir, 'checklist', '--open', '-o', 'review/round-2.md');
     const ticked = (await readFile(join(dir, 'review/round-2.md'), 'utf8')).replaceAll('- [ ] **', '- [x] **');
     await writeFile(join(dir, 'review/round-2.md'), ticked);
