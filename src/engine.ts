@@ -7,6 +7,7 @@ import { FirnlineError } from './errors.js';
 import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
+import { subjectWordsOf } from './propositions/index.js';
 import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
@@ -88,7 +89,8 @@ export async function checkText(
 }
 
 /**
- * Adds one draft's findings. A text with no topic word is skipped before it is even parsed, and so
+ * Adds one draft's findings. A text that names no subject of the packs (a CO2 term, an ice core,
+ * an ice age, the orbit, a period: `lexicon.subjects`) is skipped before it is even parsed, and so
  * is a sign-off checklist that Firnline wrote (it quotes every claim, and is not a draft).
  */
 function addText(
@@ -103,8 +105,8 @@ function addText(
     result.skipped.push({ file: path, reason: 'sign-off checklist' });
     return;
   }
-  if (!(options.topic ?? createTopicMatcher(packs.topicWords)).test(text)) {
-    result.skipped.push({ file: path, reason: 'no topic term' });
+  if (!subjectMatcherOf(packs).test(text)) {
+    result.skipped.push({ file: path, reason: 'names no subject of the packs' });
     return;
   }
   const draft = 'blocks' in raw ? raw : draftFromText(path, text, format);
@@ -153,6 +155,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
         bindings,
         verdict: verdictOf(verdicts),
         flags,
+        ...(block.marked === true ? { marked: true as const } : {}),
       });
     });
   });
@@ -192,10 +195,12 @@ function examineSentence(paragraph: string[], index: number, packs: LoadedPacks,
   const reading = paragraphReader(paragraph, packs, context)(index);
   const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)]);
   const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(paragraph, index, packs, context)];
-  const measured = quantities.some((q) => q.dimension !== 'number');
   const p = reading?.props;
   // A causal or order statement is a claim to sign off even without a number.
   const asserts = p !== undefined && p.causes.length + p.orders.length + p.relations.length + p.comparisons.length + p.evidence.length > 0;
+  // A number is a claim when its sentence (or the one before: "It reaches down 3,270 m.") names a subject.
+  const subjects = subjectMatcherOf(packs);
+  const measured = quantities.some((q) => q.dimension !== 'number') && (subjects.test(text) || subjects.test(paragraph[index - 1] ?? ''));
   if (!measured && bindings.length === 0 && drafts.length === 0 && !asserts) return undefined;
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
@@ -210,6 +215,18 @@ function preferSpecific(drafts: FlagDraft[]): FlagDraft[] {
   const specific = drafts.filter((d) => d.ruleId.startsWith('arith.') || d.ruleId.startsWith('unit.'));
   if (specific.length === 0) return drafts;
   return drafts.filter((d) => !d.ruleId.startsWith('value.') || !specific.some((s) => s.start < d.end && d.start < s.end));
+}
+
+const subjectMatchers = new WeakMap<LoadedPacks, TopicMatcher>();
+
+/** The matcher for the words that put a draft on topic (compiled once per packs). */
+function subjectMatcherOf(packs: LoadedPacks): TopicMatcher {
+  let matcher = subjectMatchers.get(packs);
+  if (matcher === undefined) {
+    matcher = createTopicMatcher(subjectWordsOf(packs.lexicon));
+    subjectMatchers.set(packs, matcher);
+  }
+  return matcher;
 }
 
 function verdictOf(verdicts: Verdict[]): Verdict {

@@ -7,7 +7,7 @@
  *    "Orbital changes alone ended the ice ages."                     agent orbit, exclusive
  */
 import type { LexHit } from './lexicon.js';
-import { clauseSubject, kindOf, subjectOf, thingAfter, thingBefore } from './resolve.js';
+import { appositionSubject, clauseSubject, kindOf, PREPOSITIONS, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
 import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Cause, Polarity } from './types.js';
 
@@ -15,7 +15,7 @@ import type { Cause, Polarity } from './types.js';
 const DETERMINERS = new Set(['the', 'a', 'an', 'its', 'their', 'our', 'of', 'in', 'for', 'with', 'from', 'after', 'before', 'than']);
 const INFERENCE_VERBS = new Set(['mean', 'means', 'meant', 'show', 'shows', 'showed', 'prove', 'proves', 'proved', 'imply', 'implies', 'implied', 'follow', 'follows', 'suggest', 'suggests', 'tell', 'tells']);
 const OBJECT_LINKS = new Set(['of', 'in', 'on', 'for', 'behind', 'to']);
-const ROLE: Record<string, Cause['role']> = { verbs: 'cause', because: 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
+const ROLE: Record<string, Cause['role']> = { verbs: 'cause', because: 'cause', 'because-only': 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
 
 /** The causes one sentence states or denies; `previous` resolves a pronoun that opens it. */
 export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
@@ -49,11 +49,12 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   let patientThing: Thing | undefined;
   if (passive) {
     const by = next === 'by' ? h.last + 1 : h.last + 2;
-    agentThing = thingAfter(s, by, 4);
+    agentThing = s.things.find((t) => t.first > by && t.first - by <= 7 && t.kind !== 'pronoun');
     patientThing = thingBefore(s, h.first, 'clause');
-  } else if (h.key === 'because') {
-    // "The ice ages ended because of changes in Earth's orbit": the orbit acts on the clause's subject.
-    agentThing = thingAfter(s, h.last, 6);
+  } else if (h.key === 'because' || h.key === 'because-only') {
+    // "The ice ages ended because of changes in Earth's orbit": the orbit acts on the clause's subject;
+    // "ended for one reason: the orbit...": the cause may follow a colon or a dash.
+    agentThing = s.things.find((t) => t.first > h.last && t.first - h.last <= 8 && t.kind !== 'pronoun');
     patientThing = subjectOf(s, h.first) ?? clauseSubject(s, h.first);
   } else if (noun && copulaAfter(s, h.last) !== undefined) {
     // "The real driver of the glacial cycles was temperature": the agent follows the copula.
@@ -64,12 +65,16 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     // "CO2 only the consequence": the subject stands just before; "CO2 ... was only a passenger": before
     // the copula, past any relative clause; "CO2 was an effect of the warming, not a cause": an
     // elliptic segment takes the clause's subject.
-    agentThing = asRole ? thingBefore(s, h.first, 'clause') : (subjectBefore(s, h.first) ?? copulaSubject(s, h.first) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first));
+    agentThing = asRole
+      ? thingBefore(s, h.first, 'clause')
+      : (subjectBefore(s, h.first) ?? copulaSubject(s, h.first) ?? subjectOf(s, h.first) ?? appositionSubject(s, h.first) ?? clauseSubject(s, h.first));
     const linked = OBJECT_LINKS.has(next) ? thingAfter(s, h.last, 4) : undefined;
+    // "Only one cause ended the ice age: carbon dioxide": the agent named after a colon or dash.
+    const named = s.things.find((t) => t.first > h.last && t.first - h.last <= 10 && t.kind !== 'pronoun' && s.words[t.first]?.clause !== s.words[h.first]?.clause);
     // "the role of CO2", "the greenhouse effect of CO2": what follows "of" is the one acting.
     if (h.key === 'roles' && next === 'of') agentThing = linked ?? agentThing;
     else patientThing = linked;
-    agentThing ??= thingAfter(s, h.last, 3);
+    agentThing ??= thingAfter(s, h.last, 3) ?? named;
   } else {
     agentThing = subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first) ?? thingBefore(s, h.first, 'clause');
     patientThing = thingAfter(s, h.last);
@@ -87,7 +92,7 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   const start = Math.min(s.words[h.first]?.start ?? 0, agentThing !== undefined && agentThing.first < h.first ? (s.words[agentThing.first]?.start ?? 0) : Infinity);
   const end = s.words[h.last]?.end ?? 0;
   // "It was CO2 that set the temperature": a cleft singles its focus out as the one agent.
-  const exclusive = isExclusive(s, h, agentThing) || (cleft !== undefined && h.key !== 'amplify');
+  const exclusive = isExclusive(s, h, agentThing) || (cleft !== undefined && h.key !== 'amplify') || h.key === 'because-only';
   const cause: Cause = {
     kind: 'cause', role: ROLE[h.key] ?? 'cause', polarity, exclusive, start, end,
     ...(agent === undefined ? {} : { agent }), ...(patient === undefined ? {} : { patient }),
@@ -107,35 +112,6 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
 }
 
 const COPULAS = new Set(['is', 'was', 'are', 'were', 'be', 'been', 'being']);
-/** Words a subject search steps over on its way back from a verb. */
-const SKIP = /^(?:the|a|an|only|merely|just|simply|also|then|alone|itself|themselves|solely|really|actually|clearly|probably|certainly|surely|had|has|have|was|were|is|are|be|been|did|does|do|can|could|will|would|may|might|must|should|not|never|first|turn|always|ever|indeed|largely|mostly|partly|mainly|chiefly|directly|helped|help|helps|to|all|nothing|else|in|itself|once|later|again|still|further|now|eventually|ultimately|finally)$/u;
-const PREPOSITIONS = new Set(['of', 'in', 'after', 'before', 'behind', 'from', 'with', 'than', 'like', 'by', 'on', 'at', 'to', 'into', 'over', 'during', 'about', 'for']);
-const AUX_AFTER = /^(?:had|has|have|was|were|is|are|did|does|do|can|could|will|would|may|might|must|should|alone|only|itself|then|also)$/u;
-
-/**
- * The subject of the verb at `i`: the nearest thing before it in its segment with nothing but
- * auxiliaries, adverbs and negations between; a thing inside a prepositional phrase ("the rise in
- * CO2") is passed over unless a verb follows it ("after the ice had started").
- */
-function subjectBefore(s: ReadSentence, i: number): Thing | undefined {
-  const segment = s.words[i]?.segment;
-  for (let k = i - 1; k >= 0 && s.words[k]?.segment === segment; k -= 1) {
-    const thing = s.things.find((t) => t.last === k);
-    if (thing !== undefined) {
-      const lead = s.words[thing.first - 1]?.text ?? '';
-      const lead2 = s.words[thing.first - 2]?.text ?? '';
-      const inPhrase = PREPOSITIONS.has(lead) || (['the', 'a', 'an'].includes(lead) && PREPOSITIONS.has(lead2));
-      if (lead === 'not' || (inPhrase && !AUX_AFTER.test(s.words[thing.last + 1]?.text ?? ''))) {
-        k = thing.first;
-        continue;
-      }
-      return thing;
-    }
-    if (!SKIP.test(s.words[k]?.text ?? '')) return undefined;
-  }
-  return undefined;
-}
-
 /** The copula within six words after a predicate noun, in its clause ("the driver ... was"). */
 function copulaAfter(s: ReadSentence, i: number): number | undefined {
   let inPhrase = false;
@@ -215,7 +191,7 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
     if (['not', 'no'].includes(s.words[e.first - 1]?.text ?? '')) return false;
     const nearAgent = agent !== undefined && (Math.abs(e.first - agent.last) <= 2 || Math.abs(e.last - agent.first) <= 2);
     const nearCue = Math.abs(e.last - h.first) <= 2 || (e.first > h.last && e.first - h.last <= 2);
-    const strong = /sole|single|one cause|one factor|nothing but|all down|no other|nothing else|by itself|on its own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
+    const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by itself|on its own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
     return nearAgent || (nearCue && strong);
   });
 }

@@ -18,11 +18,13 @@ const SIZE_UP = new Set(['more', 'greater', 'larger', 'higher', 'extra']);
 export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed[] {
   const out: Directed[] = [];
   const push = (of: string, attribute: Directed['attribute'], dir: 1 | -1, h: LexHit, thing?: Thing) => {
-    // A relation takes its denial once, as a whole (readRelations); a lone change takes its own.
-    const flip = attribute === 'uptake' ? 1 : denialsBefore(s, h.first, 5) % 2 === 1 ? -1 : 1;
     const first = Math.min(h.first, thing?.first ?? h.first);
-    const last = Math.max(h.last, thing?.last ?? h.last);
-    out.push({ of, attribute, dir: (dir * flip) as 1 | -1, first, last, start: s.words[first]?.start ?? 0, end: s.words[last]?.end ?? 0 });
+    // "absorbed more", "holds less": the size word belongs to the claim.
+    const size = attribute === 'uptake' && /^(?:more|less|fewer|extra)$/u.test(s.words[h.last + 1]?.text ?? '') ? 1 : 0;
+    const last = Math.max(h.last + size, thing?.last ?? h.last);
+    const negated = denialsBefore(s, h.first, 5) % 2 === 1;
+    const form = thing !== undefined && thing.first > h.last ? 'state' : 'change';
+    out.push({ of, attribute, dir, negated, form, first, last, start: s.words[first]?.start ?? 0, end: s.words[last]?.end ?? 0 });
   };
   for (const h of s.of('changes')) {
     if (h.key === 'warm' || h.key === 'cool') {
@@ -57,6 +59,9 @@ export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed
 function temperatureHolder(s: ReadSentence, h: LexHit): Thing | undefined {
   const next = s.words[h.last + 1]?.text;
   if (next === 'of') return thingAfter(s, h.last, 3);
+  // "cold polar oceans": the water, not the region that qualifies it.
+  const water = s.things.find((t) => t.kind === 'water' && t.first > h.last && t.first - h.last <= 3);
+  if (water !== undefined && s.things.every((t) => t === water || t.first <= h.last || t.first > water.first || t.region !== undefined || t.kind === 'temperature')) return water;
   const before = thingBefore(s, h.first);
   const adjacentBefore = before !== undefined && h.first - before.last <= 4;
   const after = thingAfter(s, h.last, 2);
@@ -83,14 +88,15 @@ function uptakeDirection(s: ReadSentence, h: LexHit): 1 | -1 | undefined {
     base = change.key === 'up' ? 1 : -1;
   } else {
     // "less dissolved CO2": a participle before CO2 describes it, and states no uptake.
-    if (/ed$/u.test(s.words[h.last]?.text ?? '') && s.of('entities', 'co2').some((c) => c.first === h.last + 1)) return undefined;
+    const lead = s.words[h.first - 1]?.text ?? '';
+    if (/ed$/u.test(s.words[h.last]?.text ?? '') && s.of('entities', 'co2').some((c) => c.first === h.last + 1) && /^(?:less|more|of|the|a|much|little|extra|some|no)$/u.test(lead)) return undefined;
     const objectCo2 = s.of('entities', 'co2').some((c) => c.first > h.last && c.first - h.last <= 5) || s.words.slice(h.last + 1, h.last + 4).some((w) => /^(?:it|carbon|gas|them)$/u.test(w.text));
     // "the less carbon dioxide it can keep dissolved": CO2 stands before the verb.
     const subjectCo2 = s.of('entities', 'co2').some((c) => c.last < h.first && h.first - c.last <= 5);
     if (!objectCo2 && !subjectCo2) return undefined;
     // "holds less CO2", "releases less of it", "the less CO2 it can keep": a size word on the verb's object.
     const segment = s.words[h.first]?.segment;
-    const co2Before = s.of('entities', 'co2').find((c) => c.last < h.first && h.first - c.last <= 5);
+    const co2Before = s.of('entities', 'co2').find((c) => c.last < h.first && h.first - c.last <= 5 && s.words[c.first]?.segment === segment);
     const window = [
       ...s.words.slice(h.last + 1, h.last + 4).filter((w) => w.segment === segment),
       ...(co2Before === undefined ? [] : s.words.slice(Math.max(0, co2Before.first - 2), co2Before.first)),
@@ -113,10 +119,12 @@ export function readRelations(s: ReadSentence, directed: Directed[]): Relation[]
     const clause = s.words[u.first]?.clause;
     const sameClause = temps.filter((t) => s.words[t.first]?.clause === clause && !isAfterThan(s, t));
     const pool = sameClause.length > 0 ? sameClause : temps.length === 1 ? temps : [];
-    const t = pool.sort((a, b) => Math.abs(a.first - u.first) - Math.abs(b.first - u.first))[0];
+    // "Cold water releases CO2 when it warms": the change the release goes with, not the starting state.
+    const changes = pool.filter((t) => t.form === 'change');
+    const t = (changes.length > 0 ? changes : pool).sort((a, b) => Math.abs(a.first - u.first) - Math.abs(b.first - u.first))[0];
     if (t === undefined || isConcessive(s, t)) continue;
     // "It is not true that warmer seas absorb more CO2": one denial turns the whole relation round.
-    const denied = Math.max(denialsBefore(s, t.first, 8), denialsBefore(s, u.first, 6)) % 2 === 1;
+    const denied = t.negated || u.negated;
     const y = denied ? { ...u, dir: (-u.dir) as 1 | -1 } : u;
     relations.push({ kind: 'relation', x: { ...t, of: 'water' }, y, start: Math.min(t.start, u.start), end: Math.max(t.end, u.end) });
   }
@@ -143,7 +151,7 @@ export function readChanges(s: ReadSentence, directed: Directed[], previous?: Re
   const period = periodIn(s) ?? periodIn(previous);
   const changes: Change[] = directed
     .filter((d) => d.attribute === 'temperature')
-    .map((d) => ({ kind: 'change', of: d.of, attribute: 'temperature', dir: d.dir, start: d.start, end: d.end, ...(period === undefined ? {} : { during: period }) }));
+    .map((d) => ({ kind: 'change', of: d.of, attribute: 'temperature', dir: (d.negated ? -d.dir : d.dir) as 1 | -1, start: d.start, end: d.end, ...(period === undefined ? {} : { during: period }) }));
   for (const m of s.of('entities', 'marginal-forcing')) {
     const clause = s.words[m.first]?.clause;
     // "each extra ppm costs more to remove" is no claim about warming.
@@ -153,7 +161,7 @@ export function readChanges(s: ReadSentence, directed: Directed[], previous?: Re
     const up = s.hits.some((h) => after(h) && ((h.cls === 'changes' && (h.key === 'up' || h.key === 'accelerating')) || (h.cls === 'comparatives' && h.key === 'size-up')));
     const down = s.hits.some((h) => after(h) && ((h.cls === 'changes' && h.key === 'down') || (h.cls === 'comparatives' && h.key === 'size-down')));
     if (up === down) continue;
-    const flip = denialsBefore(s, m.last + 3, 6) % 2 === 1 ? -1 : 1;
+    const flip = denialsBefore(s, m.first, 6) % 2 === 1 ? -1 : 1;
     changes.push({ kind: 'change', of: 'marginal-forcing', attribute: 'amount', dir: ((up ? 1 : -1) * flip) as 1 | -1, start: s.words[m.first]?.start ?? 0, end: s.words.filter((w) => w.clause === clause).at(-1)?.end ?? 0 });
   }
   // "the warming effect of CO2 grows exponentially": the effect per ppm said to speed up.

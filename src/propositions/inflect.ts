@@ -42,7 +42,8 @@ function plural(w: string): string {
 
 /** Doubles a final consonant after one short vowel: lag → lagg(ed), trap → trapp(ing). */
 function stem(w: string): string {
-  const cvc = /^[^aeiou]*[aeiou][^aeiouwxy]$/u.test(w) || /(?:mit|fer|pel|gas)$/u.test(w);
+  // Stressed final syllables double too: control → controlling, begin → beginning, emit → emitted.
+  const cvc = /^[^aeiou]*[aeiou][^aeiouwxy]$/u.test(w) || /(?:mit|fer|pel|gas|rol|cur|gin|bat)$/u.test(w);
   return cvc ? w + w.at(-1) : w;
 }
 

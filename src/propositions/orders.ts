@@ -6,7 +6,7 @@
  *   "The lag is the sceptics' favourite argument."              implicit: temperature first, co2 then
  */
 import type { LexHit } from './lexicon.js';
-import { kindOf, subjectOf, thingAfter, thingBefore } from './resolve.js';
+import { kindOf, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
 import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Order } from './types.js';
 
@@ -32,12 +32,14 @@ export function readOrders(s: ReadSentence, previous?: ReadSentence): Order[] {
     const sentenceRegion = keys.size === 1 ? [...keys][0] : undefined;
     // "the lag" is by convention the Antarctic lag: a region elsewhere in the sentence is not its own.
     const region = order.implicit ? undefined : (order.region ?? s.of('regions').find((r) => s.words[r.first]?.clause === clause)?.key ?? sentenceRegion);
-    orders.push({ ...order, recordNamed, amount: inClause.some((w) => DURATIONS.test(w)), ...(region === undefined ? {} : { region }) });
+    // "CO2 merely followed the temperature": the follower cast as nothing more.
+    const dismissive = s.words.slice(Math.max(0, h.first - 2), h.first).some((w) => /^(?:merely|simply|just)$/u.test(w.text));
+    orders.push({ ...order, recordNamed, dismissive, amount: inClause.some((w) => DURATIONS.test(w)), ...(region === undefined ? {} : { region }) });
   }
   return orders;
 }
 
-function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Order, 'recordNamed' | 'amount'> | undefined {
+function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Order, 'recordNamed' | 'amount' | 'dismissive'> | undefined {
   const phrase = s.words.slice(h.first, h.last + 1).map((w) => w.text).join(' ');
   const kind = (t: Thing | undefined) => kindOf(s, t, previous);
   const span = { start: s.words[h.first]?.start ?? 0, end: s.words[h.last]?.end ?? 0 };
@@ -47,7 +49,7 @@ function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Orde
   if (isNoun && after !== 'behind' && !ofThing) {
     return { kind: 'order', first: 'temperature', then: 'co2', together: false, implicit: true, ...span };
   }
-  let a: Thing | undefined = subjectOf(s, h.first) ?? thingBefore(s, h.first, 'clause');
+  let a: Thing | undefined = subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? thingBefore(s, h.first, 'clause');
   let b: Thing | undefined;
   if (ABSOLUTE.test(phrase)) {
     a ??= thingAfter(s, h.last, 4);

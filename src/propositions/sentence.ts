@@ -49,7 +49,7 @@ export interface ReadSentence {
 
 const CONTRAST = ['but', 'while', 'whereas', 'although', 'though', 'yet', 'however'];
 /** Words that open a new segment: a linked clause with its own subject. */
-const LINKS = new Set(['so', 'therefore', 'thus', 'hence', 'because', 'since', 'when', 'if', 'which', 'meaning', 'means', 'then', 'whereby', 'once', 'unless', 'until', 'consequently']);
+const LINKS = new Set(['so', 'therefore', 'thus', 'hence', 'because', 'since', 'when', 'if', 'which', 'meaning', 'means', 'whereby', 'once', 'unless', 'until', 'consequently']);
 /** Words after which "that" opens a clause of its own ("shows that temperature drives CO2"). */
 const COMPLEMENT_TAKERS = /^(?:show|prove|mean|say|said|know|knew|think|thought|argue|claim|suggest|find|found|note|clear|plain|true|evident|obvious|likely|so|insist|assert|believe|tell|told|demonstrate|confirm|establish|reveal|indicate|impl(?:y|ies|ied)|conclude|maintain|contend|write|wrote|hear|heard|fact|idea|notion|view|belief|myth|argument|sure|certain|agree|recogni[sz]e|shown|proof|evidence|sign|means)\w*$/u;
 const AUXILIARIES = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);

@@ -36,6 +36,8 @@ export interface Order {
   amount: boolean;
   /** Read from a bare "the lag", which by convention means CO2 after temperature. */
   implicit: boolean;
+  /** The later thing "merely" or "simply" followed: it is cast as a mere follower. */
+  dismissive: boolean;
   start: number;
   end: number;
 }
@@ -45,7 +47,12 @@ export interface Directed {
   /** Entity or region key. */
   of: string;
   attribute: 'temperature' | 'uptake' | 'amount';
+  /** The direction as the words state it, before any denial. */
   dir: 1 | -1;
+  /** A denial stands before it in its clause ("does not hold more"). */
+  negated: boolean;
+  /** A state ("warmer water") or a change ("the ocean warms"). */
+  form: 'state' | 'change';
   first: number;
   last: number;
   start: number;

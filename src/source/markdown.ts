@@ -26,6 +26,13 @@ const CONTAINER_KINDS: Partial<Record<Nodes['type'], BlockKind>> = {
   blockquote: 'blockquote',
 };
 
+/**
+ * The marker an editor puts before a passage that quotes a claim on purpose (a myth being answered,
+ * a reader's letter): `<!-- firnline: reported -->`. Before a block, it marks that block (a whole
+ * quotation, list or table when it stands before one); at the start of a paragraph, that paragraph.
+ */
+export const REPORTED_MARKER = /^<!--\s*firnline:\s*reported\s*-->$/u;
+
 /** Nodes that are never prose: code, HTML, front matter, link definitions. */
 const NOT_PROSE = new Set<string>(['code', 'html', 'yaml', 'toml', 'definition', 'thematicBreak']);
 
@@ -47,7 +54,7 @@ export function readMarkdownBlocks(text: string): ProseBlock[] {
   // The parser drops a leading byte-order mark and counts its offsets from after it.
   const base = text.charCodeAt(0) === 0xfeff ? 1 : 0;
   const tree = fromMarkdown(base === 1 ? text.slice(1) : text, PARSE_OPTIONS);
-  const walk = { text, base, heading: '', blocks: [] as ProseBlock[] };
+  const walk = { text, base, heading: '', blocks: [] as ProseBlock[], pendingMark: false, marking: false };
   visitBlocks(tree, 'paragraph', walk);
   return walk.blocks;
 }
@@ -57,30 +64,48 @@ interface Walk {
   base: number;
   heading: string;
   blocks: ProseBlock[];
+  /** A marker stood just before: the next block (or container) is reported. */
+  pendingMark: boolean;
+  /** Inside a marked container. */
+  marking: boolean;
 }
 
 function visitBlocks(parent: Parents, containerKind: BlockKind, walk: Walk): void {
   for (const node of parent.children) {
+    if (node.type === 'html' && REPORTED_MARKER.test(node.value.trim())) {
+      walk.pendingMark = true;
+      continue;
+    }
     // Published text outside paragraphs: front-matter fields, alt text and captions in HTML, tables.
     const start = (node.position?.start.offset ?? 0) + walk.base;
     if (node.type === 'yaml') walk.blocks.push(...frontMatterBlocks(node, walk.text, start));
     if (node.type === 'html') walk.blocks.push(...htmlTextBlocks(node, walk.text, start, walk.heading));
     if (isTable(node)) {
       const cells = node.children.map((row) => row.children.map((cell) => proseBlockOf(cell, 'table-cell', walk)));
-      walk.blocks.push(...tableBlocks(cells));
+      const marked = walk.marking || walk.pendingMark;
+      walk.pendingMark = false;
+      walk.blocks.push(...tableBlocks(cells).map((b) => (marked ? { ...b, marked: true } : b)));
       continue;
     }
     if (NOT_PROSE.has(node.type)) continue;
     const proseKind = PROSE_NODES[node.type];
     if (proseKind !== undefined && 'children' in node) {
       const kind = proseKind === 'paragraph' ? containerKind : proseKind;
+      const first = node.children[0];
+      const inlineMark = first?.type === 'html' && REPORTED_MARKER.test(first.value.trim());
+      const marked = walk.marking || walk.pendingMark || inlineMark;
+      walk.pendingMark = false;
       const isHeading = node.type === 'heading';
       const block = proseBlockOf(node, kind, walk);
       if (isHeading) walk.heading = block?.text ?? '';
-      if (block !== undefined) walk.blocks.push(isHeading ? { ...block, heading: block.text } : block);
+      if (block !== undefined) walk.blocks.push({ ...block, ...(isHeading ? { heading: block.text } : {}), ...(marked ? { marked: true } : {}) });
       walk.blocks.push(...inlineImageText(node, walk));
     } else if ('children' in node) {
+      const outer = walk.marking;
+      walk.marking = outer || walk.pendingMark;
+      walk.pendingMark = false;
       visitBlocks(node, CONTAINER_KINDS[node.type] ?? containerKind, walk);
+      walk.marking = outer;
     }
   }
 }

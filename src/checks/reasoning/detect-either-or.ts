@@ -18,7 +18,10 @@ function detect({ index, read }: DetectInput): Cue[] {
   if (here === undefined) return [];
   const loop = [index - 1, index, index + 1].some((i) => {
     const r = read(i);
-    return r !== undefined && (r.props.causes.some((c) => c.role === 'feedback' && c.polarity === 'asserted') || r.s.words.some((w) => w.text === 'both'));
+    // "it cannot be both" denies the loop; "both" alone grants it.
+    const both = r?.s.words.findIndex((w) => w.text === 'both') ?? -1;
+    const bothGranted = r !== undefined && both >= 0 && !r.s.words.slice(Math.max(0, both - 3), both).some((w) => ['not', 'never', 'no'].includes(w.text));
+    return r !== undefined && (r.props.causes.some((c) => c.role === 'feedback' && c.polarity === 'asserted') || bothGranted);
   });
   if (loop) return [];
   const causes = here.props.causes.filter((c) => c.polarity !== 'open' && c.role !== 'start');

@@ -26,7 +26,9 @@ function detect({ index, read }: DetectInput): Cue[] {
   const denial = here.props.causes.find(
     (c) => c.polarity === 'denied' && c.role !== 'start' && c.role !== 'feedback' && (isCo2OnWarming(c) || (aboutCo2 && c.agent === undefined)) && !onlyTheStart(here.s.text, c.end),
   );
-  return denial === undefined ? [] : [{ start: denial.start, end: denial.end }];
+  if (denial !== undefined) return [{ start: denial.start, end: denial.end }];
+  const follower = here.props.orders.find((o) => isTemperatureFirst(o) && o.dismissive);
+  return follower === undefined ? [] : [{ start: follower.start, end: follower.end }];
 }
 
 /** "played no part in starting it": a denial about the start only. */

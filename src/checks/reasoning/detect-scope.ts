@@ -34,7 +34,11 @@ function detectRegional({ index, read, sentence, words }: DetectInput): Cue[] {
     r !== undefined && (r.s.of('entities', 'ice-core').length + r.s.of('regions', 'antarctic').length + r.s.of('regions', 'greenland').length > 0 || r.s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text)));
   // "This tells us that the whole Earth was 9 °C colder": the record read may be named one sentence back.
   const record = recordIn(here) || (ANAPHORIC_READING.test(s.words.map((w) => w.text).join(' ')) && recordIn(read(index - 1)));
-  const global = s.of('regions', 'global')[0];
+  // A record in one clause and the globe in the next ("At Dome C, ...: for the planet as a whole, ...")
+  // set the two side by side; only a record and the globe in one clause equate them.
+  const recordClauses = new Set([...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].map((h) => s.words[h.first]?.clause));
+  const anaphoric = !recordIn(here) && record;
+  const global = s.of('regions', 'global').find((g) => anaphoric || recordClauses.has(s.words[g.first]?.clause) || s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text) && w.clause === s.words[g.first]?.clause));
   const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text));
   if (!record || global === undefined || !temperature) return [];
   // "colder than today" compares two times, not the record with the globe: no contrast.
@@ -43,8 +47,10 @@ function detectRegional({ index, read, sentence, words }: DetectInput): Cue[] {
   if (contrast.length > 0) return [];
   // "...and the CO2 then warmed the planet": CO2 acting on the globe, not a record read as global.
   if (here.props.causes.some((c) => c.agent === 'co2' && c.polarity === 'asserted')) return [];
-  const start = s.words[global.first]?.start ?? 0;
-  return [{ start, end: s.words[global.last]?.end ?? start }];
+  // "global temperature": the temperature word just after the global one is part of the claim.
+  const next = s.words.slice(global.last + 1, global.last + 4).findIndex((w) => /^(?:temperatures?|climate|average|mean|warming|cooling)$/u.test(w.text));
+  const last = next < 0 ? global.last : global.last + 1 + next;
+  return [{ start: s.words[global.first]?.start ?? 0, end: s.words[last]?.end ?? 0 }];
 }
 
 /**
@@ -53,8 +59,15 @@ function detectRegional({ index, read, sentence, words }: DetectInput): Cue[] {
  * has its own region ("Antarctic temperature rose centuries before CO2") is regional, and passes.
  */
 function detectLag({ index, read }: DetectInput): Cue[] {
-  const order = read(index)?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && (o.amount || o.recordNamed));
-  return order === undefined ? [] : [{ start: order.start, end: order.end }];
+  const here = read(index);
+  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && (o.amount || o.recordNamed));
+  if (here === undefined || order === undefined) return [];
+  // "about 800 years before": the lag figure just before the order word is part of the claim.
+  const at = here.s.words.findIndex((w) => w.start === order.start);
+  const lead = here.s.words.slice(Math.max(0, at - 3), at);
+  const figure = lead.findIndex((w) => /^(?:\d[\d,.]*|years?|centur(?:y|ies)|millenni(?:um|a)|decades?|few|several|hundreds?)$/u.test(w.text));
+  const start = figure < 0 ? order.start : (lead[figure]?.start ?? order.start);
+  return [{ start, end: order.end }];
 }
 
 /** `scope.regional-record-as-global` for the registry. */

@@ -5,7 +5,7 @@
 import type { Cause, Order, ReadSentence } from '../../propositions/index.js';
 
 /** Things a warming claim can be about: temperature itself, a region's, the ice ages' end. */
-const WARMING_SIDE = new Set(['temperature', 'ice-age', 'ice', 'global', 'antarctic', 'greenland', 'polar', 'south', 'north', 'tropics']);
+const WARMING_SIDE = new Set(['temperature', 'ice-age', 'ice', 'water', 'global', 'antarctic', 'greenland', 'polar', 'south', 'north', 'tropics']);
 
 /** True for the temperature side of a cause or order. */
 export function isWarmingSide(kind: string | undefined): boolean {
