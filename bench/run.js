@@ -4,7 +4,9 @@
 // topic, as a real one is. (2) One long Markdown draft, mostly on topic. For each: best of N runs,
 // files/s, sentences/s, peak resident memory, and (from one further run) the time per stage.
 // Invented demo text only (bench/corpus.js). Settings: BENCH_FILES (2000), BENCH_LARGE_KB (500),
-// BENCH_RUNS (3), BENCH_STAGES=0 to leave out the stage table.
+// BENCH_RUNS (3), BENCH_STAGES=0 to leave out the stage table. (3) The editor server's warm
+// re-check: one 5,000-word draft checked again through the library API, as `firnline lsp` does
+// after each pause in typing (bench/warm-recheck.js).
 import { mkdtemp, mkdir, writeFile, rm } from 'node:fs/promises';
 import { availableParallelism, cpus, tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -12,6 +14,7 @@ import { performance } from 'node:perf_hooks';
 import { checkPaths, loadPacks } from '../dist/index.js';
 import { docsPage, largeDraft } from './corpus.js';
 import { formatStages, timeStages } from './stages.js';
+import { measureWarmRecheck } from './warm-recheck.js';
 
 const FILES = Number(process.env.BENCH_FILES ?? 2000);
 const LARGE_KB = Number(process.env.BENCH_LARGE_KB ?? 500);
@@ -67,6 +70,7 @@ try {
     const kb = (Buffer.byteLength(text) / 1024).toFixed(0);
     await measure(`firnline bench: one ${kb} KB Markdown draft (mostly on topic), ${count} sentences`, ['long-draft.md'], root, 1, count);
   }
+  await measureWarmRecheck(packs);
 } finally {
   await rm(root, { recursive: true, force: true });
 }

@@ -1,5 +1,6 @@
 import type { Command } from 'commander';
 import { FirnlineError } from '../../errors.js';
+import { fullReference } from '../../report/format-source.js';
 import { describeRule } from '../../rulepack/describe-rule.js';
 import { closeIds, knownRuleIds } from '../../rulepack/known-rule-ids.js';
 import { SIGNOFF_RULES } from '../../review/review-flags.js';
@@ -22,9 +23,10 @@ export function registerExplain(program: Command, ctx: CliContext): void {
         const hint = close.length > 0 ? `did you mean ${close.map((c) => `\`${c}\``).join(' or ')}? ` : '';
         throw new FirnlineError('unknown-rule', `no rule or reference value has the id \`${id}\`; ${hint}run \`firnline refs\` or \`firnline refs --reasoning\` to list them`);
       }
+      // The full reference (every author, container, pages, link), then the locators and how the value was checked.
       const sources = info.sources.map((s) => {
-        const link = [s.doi === undefined ? undefined : `doi: ${s.doi}`, s.url === undefined ? undefined : `url: ${s.url}`].filter((x) => x !== undefined);
-        return `  - ${s.cite}\n${link.map((l) => `    ${l}\n`).join('')}    how: ${s.how}\n`;
+        const link = [s.kind === undefined ? undefined : `kind: ${s.kind}`, s.doi === undefined ? undefined : `doi: ${s.doi}`, s.url === undefined ? undefined : `url: ${s.url}`].filter((x) => x !== undefined);
+        return `  - ${fullReference(s)}\n${link.map((l) => `    ${l}\n`).join('')}    how: ${s.how}\n`;
       });
       ctx.stdout(`${info.id} (default level: ${info.defaultLevel})\n${info.summary}\n\n${info.description}\n\nSources:\n${sources.join('')}`);
     });
