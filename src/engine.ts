@@ -1,5 +1,7 @@
 import { bindQuantities } from './claims/bind.js';
+import { restoreElidedUnits } from './claims/elided-units.js';
 import { checkArithmetic } from './checks/arithmetic.js';
+import { checkRanks } from './checks/rank/index.js';
 import { checkReasoning, judgeByStance, paragraphReader, type ParagraphContext } from './checks/reasoning/index.js';
 import { checkReferences } from './checks/reference.js';
 import { checkUnits } from './checks/units.js';
@@ -12,7 +14,7 @@ import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
 import type { LoadedPacks } from './rulepack/types.js';
-import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, readDraftText } from './source/index.js';
+import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, loadHtmlReader, readDraftText, readWordDraft } from './source/index.js';
 import type { Binding, CheckResult, Claim, Draft, Flag, FlagDraft, Level, Quantity, RuleInfo, Sentence, Verdict } from './types.js';
 
 /** How a run is set up. Only `cwd` is required; packs default to the built-in pack. */
@@ -57,18 +59,24 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
 
   const levels = options.levels ?? {};
+  if (files.some((file) => draftFormat(file) === 'html')) await loadHtmlReader();
   if (paths.includes('-')) {
     if (options.readStdin === undefined) throw new FirnlineError('stdin-unavailable', 'standard input cannot be read here');
     addText(result, draftFromText('-', await options.readStdin(), 'markdown'), packs, { topic, levels });
   }
   for (const file of files) {
+    const format = draftFormat(file);
+    const projectPath = toPosix(relative(options.projectRoot ?? options.cwd, resolve(options.cwd, file)));
+    if (format === 'docx') {
+      addText(result, await readWordDraft(file, options.cwd), packs, { topic, levels, projectPath });
+      continue;
+    }
     const text = await readDraftText(file, options.cwd);
     if (typeof text !== 'string') {
       result.skipped.push({ file, reason: text.skipped });
       continue;
     }
-    const projectPath = toPosix(relative(options.projectRoot ?? options.cwd, resolve(options.cwd, file)));
-    addText(result, { path: file, text, format: draftFormat(file) }, packs, { topic, levels, projectPath });
+    addText(result, { path: file, text, format }, packs, { topic, levels, projectPath });
   }
   result.rules = describeFlaggedRules(result.flags, packs);
   result.packs = packs.packs.map(({ id, version, asOf }) => ({ id, version, asOf }));
@@ -78,12 +86,15 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
 /** Checks one text in memory: the library entry point (`import { checkText } from 'firnline'`). */
 export async function checkText(
   text: string,
-  options: { path?: string; format?: 'markdown' | 'text'; packs?: LoadedPacks; levels?: Record<string, Level | 'off'> } = {},
+  options: { path?: string; format?: 'markdown' | 'text' | 'html'; packs?: LoadedPacks; levels?: Record<string, Level | 'off'> } = {},
 ): Promise<CheckResult> {
   const packs = options.packs ?? (await loadPacks([]));
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
   const path = options.path ?? '-';
-  const draft = { path, text, format: options.format ?? draftFormat(path) };
+  const format = options.format ?? draftFormat(path);
+  if (format === 'docx') throw new FirnlineError('not-text', 'a Word draft is not text: check the file with checkPaths', { file: path });
+  if (format === 'html') await loadHtmlReader();
+  const draft = { path, text, format };
   addText(result, draft, packs, { topic: createTopicMatcher(packs.topicWords), levels: options.levels ?? {} });
   result.rules = describeFlaggedRules(result.flags, packs);
   result.packs = packs.packs.map(({ id, version, asOf }) => ({ id, version, asOf }));
@@ -111,7 +122,7 @@ function addText(
     result.skipped.push({ file: path, reason: 'names no subject of the packs' });
     return;
   }
-  const draft = 'blocks' in raw ? raw : draftFromText(path, text, format);
+  const draft = 'blocks' in raw ? raw : draftFromText(path, text, format === 'docx' ? 'text' : format);
   const { claims, flags } = checkDraft(draft, packs, options);
   result.claims.push(...claims);
   result.flags.push(...flags);
@@ -134,7 +145,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
     sentences.forEach((sentence, index) => {
       const onTopic = topic.test(sentence.text) || subjectMatcherOf(packs).test(sentence.text);
-      const found = examineSentence(paragraph, index, packs, onTopic, context);
+      const found = examineSentence(paragraph, index, packs, onTopic, context, () => topic.test(paragraph[index - 1] ?? ''));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -146,12 +157,16 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
         const range = blockRange(draft.text, block, sentence.start + start, sentence.start + end);
         return lines.toSpan(range.start, range.end);
       };
-      const flags = applyLevels(drafts, levels).map((d) => resolveFlag(d, draft, sentence, id, toSpan));
+      const span = toSpan(0, sentence.text.length);
+      // A Word draft's line N is its paragraph N (source/word/word-draft.ts).
+      const place = draft.format === 'docx' ? { paragraph: { number: span.start.line, heading: block.heading } } : {};
+      const flags = applyLevels(drafts, levels).map((d) => ({ ...resolveFlag(d, draft, sentence, id, toSpan), ...place }));
       claims.push({
         id,
         file: draft.path,
         ...(projectPath === draft.path ? {} : { projectPath }),
-        span: toSpan(0, sentence.text.length),
+        span,
+        ...place,
         text: sentence.text,
         heading: block.heading,
         quantities,
@@ -182,21 +197,31 @@ const TWO_NUMBERS = /\d[^\d]+\d/u;
  * counts as a claim when they flag it: "from 12,900 to 11,700 years ago: a cold spell of some 2,000
  * years" is wrong whatever its subject. Undefined when the sentence holds no claim.
  */
-function examineSentence(paragraph: string[], index: number, packs: LoadedPacks, onTopic: boolean, context: ParagraphContext): SentenceFindings | undefined {
+function examineSentence(
+  paragraph: string[],
+  index: number,
+  packs: LoadedPacks,
+  onTopic: boolean,
+  context: ParagraphContext,
+  previousOnTopic: () => boolean,
+): SentenceFindings | undefined {
   const text = paragraph[index] ?? '';
   const before = paragraph.slice(0, index);
   if (!onTopic) {
+    const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs) : undefined;
+    if (carried !== undefined) return carried;
     if (!TWO_NUMBERS.test(text)) return undefined;
     const quantities = parseQuantities(text);
     const drafts = [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
     return drafts.length === 0 ? undefined : { quantities, bindings: [], verdicts: [], drafts };
   }
-  const quantities = parseQuantities(text);
+  // "four cycles and EPICA Dome C eight": a number whose unit a neighbour states takes that unit.
+  const quantities = restoreElidedUnits(text, parseQuantities(text));
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
   const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
   const reference = checkReferences(text, quantities, bindings, packs);
   const reading = paragraphReader(paragraph, packs, context)(index);
-  const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)]);
+  const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before), ...checkRanks(text, packs)]);
   const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(paragraph, index, packs, context)];
   const p = reading?.props;
   // A causal or order statement is a claim to sign off even without a number.
@@ -205,6 +230,24 @@ function examineSentence(paragraph: string[], index: number, packs: LoadedPacks,
   const subjects = subjectMatcherOf(packs);
   const measured = quantities.some((q) => q.dimension !== 'number') && (subjects.test(text) || subjects.test(paragraph[index - 1] ?? ''));
   if (!measured && bindings.length === 0 && drafts.length === 0 && !asserts) return undefined;
+  return { quantities, bindings, verdicts: reference.verdicts, drafts };
+}
+
+const DIGIT = /\d/u;
+
+/**
+ * A sentence with no topic word whose number takes its subject from the sentence before ("The EPICA
+ * Dome C core was drilled by ten nations. It reaches down 3,270 metres."): a claim when that number
+ * binds, checked like any other; undefined otherwise.
+ */
+function carriedSubject(paragraph: string[], index: number, packs: LoadedPacks): SentenceFindings | undefined {
+  const text = paragraph[index] ?? '';
+  const quantities = restoreElidedUnits(text, parseQuantities(text));
+  const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
+  if (bindings.length === 0) return undefined;
+  const context = paragraph.slice(0, index);
+  const reference = checkReferences(text, quantities, bindings, packs);
+  const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, context), ...checkUnits(text, quantities, context)]);
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
 

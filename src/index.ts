@@ -12,5 +12,7 @@ export { loadPacks, loadRulePack } from './rulepack/index.js';
 export type { LoadedPacks, RulePack } from './rulepack/types.js';
 export { renderReport, REPORT_FORMATS } from './report/index.js';
 export { claimIdOf } from './review/claim-id.js';
+export { annotateWord, type AnnotateOptions } from './report/word-comments/annotate-word.js';
+export { readWordDraft } from './source/index.js';
 export { VERSION } from './version.js';
 export * from './types.js';

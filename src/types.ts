@@ -51,8 +51,18 @@ export interface Draft {
   path: string;
   /** The original text exactly as read (after UTF-8 decoding; a leading BOM is kept). */
   text: string;
-  format: 'markdown' | 'text';
+  format: 'markdown' | 'text' | 'html' | 'docx';
   blocks: ProseBlock[];
+}
+
+/**
+ * Where something stands in a Word draft, which has no lines: the paragraph (1-based, counting
+ * the paragraphs that hold text, as a word processor's statistics do) and the heading above it.
+ */
+export interface ParagraphPlace {
+  number: number;
+  /** Text of the nearest heading above (the paragraph's own text for a heading); empty when none. */
+  heading: string;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -165,6 +175,8 @@ export interface Flag {
   level: Level;
   file: string;
   span: Span;
+  /** In a Word draft, the paragraph (reports show it instead of line and column). */
+  paragraph?: ParagraphPlace;
   /** The flagged text as it stands in the draft. */
   excerpt: string;
   /** The whole sentence the flag is in, as prose text (markup removed). */
@@ -193,7 +205,7 @@ export interface FlagSignoff {
 }
 
 /** A flag before positions are resolved: offsets are UTF-16 indices into the sentence text. */
-export interface FlagDraft extends Omit<Flag, 'file' | 'span' | 'excerpt' | 'sentence' | 'claimId' | 'signoff'> {
+export interface FlagDraft extends Omit<Flag, 'file' | 'span' | 'paragraph' | 'excerpt' | 'sentence' | 'claimId' | 'signoff'> {
   start: number;
   end: number;
 }
@@ -224,6 +236,8 @@ export interface Claim {
    */
   projectPath?: string;
   span: Span;
+  /** In a Word draft, the paragraph (reports show it instead of line and column). */
+  paragraph?: ParagraphPlace;
   text: string;
   heading: string;
   quantities: Quantity[];

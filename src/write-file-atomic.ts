@@ -7,10 +7,10 @@ import { FirnlineError } from './errors.js';
  * Writes a whole file or nothing: the text goes to a temporary file in the same folder, which is
  * then renamed over the target, so a reader never sees half a report and a crash leaves the old file.
  */
-export async function writeFileAtomic(file: string, text: string, what = 'the file'): Promise<void> {
+export async function writeFileAtomic(file: string, text: string | Uint8Array, what = 'the file'): Promise<void> {
   const temp = join(dirname(file), `.${basename(file)}.${randomBytes(6).toString('hex')}.tmp`);
   try {
-    await writeFile(temp, text, { encoding: 'utf8', flag: 'wx' });
+    await writeFile(temp, text, typeof text === 'string' ? { encoding: 'utf8', flag: 'wx' } : { flag: 'wx' });
     await rename(temp, file);
   } catch (error) {
     await rm(temp, { force: true });

@@ -23,7 +23,14 @@ import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 
 /** What a group filled from the previous sentence adds to a value's distance. */
 export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
-const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|(?:at|by|during|in)\s+that\s+(?:time|point|stage|period)|at\s+the\s+time(?!\s+of(?![\p{L}]))|(?:by|back)\s+then)(?![\p{L}])/iu;
+const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|(?:at|by|during|in)\s+that\s+(?:time|point|stage|period)|(?:in|at|from|of|during|for|within|across|over|on)\s+(?:that|the\s+same)\s+\p{L}+|at\s+the\s+time(?!\s+of(?![\p{L}]))|(?:by|back)\s+then)(?![\p{L}])/iu;
+/**
+ * A sentence whose subject is a bare measure ("The global average for 2019 was …", "The annual mean
+ * …") names no subject of its own: the measure is of the subject before.
+ */
+const MEASURE_SUBJECT = /^\s*the\s+(?:[\p{L}-]+\s+){0,2}?(?:average|mean|level|concentration|figure|value|reading|total)(?![\p{L}])/iu;
+/** A term right after a demonstrative ("in that record", "this core") is the back-reference itself, not a subject of its own. */
+const DEMONSTRATIVE = /(?:^|[^\p{L}])(?:that|this|these|those|the\s+same)\s+$/iu;
 /** The baseline of a comparison: "colder than in pre-industrial times", "40 metres below today's". */
 const BASELINE = /(?:^|[^\p{L}])(?:than|below|above|beneath)(?:\s+[\p{L}-]+){0,2}\s*$/iu;
 /** What may stand between a qualifier and the subject it qualifies: "global sea level", "global-mean". */
@@ -40,16 +47,23 @@ export function bindFromContext(
   context: TermHits,
   packs: LoadedPacks,
   breaks: number[],
+  vetoes: TermHits = view,
+  contextSubject?: [number, number],
 ): string | 'ambiguous' | undefined {
-  if (!REFERS_BACK.test(sentence)) return undefined;
-  const own = subjectTerms(sentence, view, packs);
+  if (!REFERS_BACK.test(sentence) && !MEASURE_SUBJECT.test(sentence)) return undefined;
+  const own = subjectTerms(sentence, vetoes, packs);
   const serves = (r: ReferenceValue, id: string): boolean => r.binding.all.some((g) => g.includes(id));
-  const scored = packs.references
+  const candidates = packs.references
     .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && canState(r, q))
-    .filter((r) => !r.binding.none.some((id) => view.has(id)))
+    .filter((r) => !r.binding.none.some((id) => vetoes.has(id)))
     .filter((r) => own.every(([id, spans]) => serves(r, id) || spans.every((span) => qualifiesServing(sentence, span, view, (other) => serves(r, other)))))
-    .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))))
-    .map((r) => ({ r, score: scoreWithContext(r, view, q, breaks) }))
+    .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))));
+  // The more specific reading wins: a value that vetoes a word present in either sentence gives way
+  // to one that needs it ("at that time" after "the Last Glacial Maximum": the LGM level, not the typical glacial one).
+  const present = (id: string): boolean => view.has(id) || context.has(id);
+  const specific = candidates.filter((r) => !candidates.some((o) => o !== r && r.binding.none.some((id) => present(id) && o.binding.all.some((g) => g.includes(id)))));
+  const scored = specific
+    .map((r) => ({ r, score: scoreWithContext(r, view, q, breaks, context, contextSubject) }))
     .sort((a, b) => a.score - b.score);
   const [best, next] = scored;
   if (best === undefined) return undefined;
@@ -72,14 +86,24 @@ function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks): [st
     bindingTerms.set(packs, binding);
   }
   const used = binding;
+  // The words of a bare measure subject ("The global average") are the back-reference itself.
+  const measureEnd = MEASURE_SUBJECT.exec(sentence)?.[0].length ?? 0;
+  const ownSubject = ([start, end]: [number, number]): boolean =>
+    end > measureEnd && !BASELINE.test(sentence.slice(Math.max(0, start - 40), start)) && !DEMONSTRATIVE.test(sentence.slice(Math.max(0, start - 20), start));
   return [...view]
-    .map(([id, spans]): [string, [number, number][]] => [id, used.has(id) ? spans.filter(([start]) => !BASELINE.test(sentence.slice(Math.max(0, start - 40), start))) : []])
+    .map(([id, spans]): [string, [number, number][]] => [id, used.has(id) ? spans.filter(ownSubject) : []])
     .filter(([, spans]) => spans.length > 0);
 }
 
-/** Own groups count by nearness; a group only the previous sentence fills counts `CONTEXT_PENALTY`. */
-function scoreWithContext(r: ReferenceValue, view: TermHits, q: Quantity, breaks: number[]): number {
+/**
+ * Own groups count by nearness; a group only the previous sentence fills counts `CONTEXT_PENALTY`,
+ * and a `CLAUSE_PENALTY` more when none of its words stands in that sentence's subject: a pronoun
+ * follows the subject of the sentence before, not any word of it.
+ */
+function scoreWithContext(r: ReferenceValue, view: TermHits, q: Quantity, breaks: number[], context: TermHits, subject: [number, number] | undefined): number {
   const ownGroups = r.binding.all.filter((g) => g.some((id) => view.has(id)));
-  const fromContext = r.binding.all.length - ownGroups.length;
-  return nearness({ ...r, binding: { ...r.binding, all: ownGroups } }, view, q, breaks) + fromContext * CONTEXT_PENALTY;
+  const inSubject = (g: string[]): boolean =>
+    subject !== undefined && g.some((id) => (context.get(id) ?? []).some(([start, end]) => start >= subject[0] && end <= subject[1]));
+  const fromContext = r.binding.all.filter((g) => !ownGroups.includes(g)).reduce((sum, g) => sum + CONTEXT_PENALTY + (inSubject(g) ? 0 : CLAUSE_PENALTY), 0);
+  return nearness({ ...r, binding: { ...r.binding, all: ownGroups } }, view, q, breaks) + fromContext;
 }

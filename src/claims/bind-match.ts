@@ -24,9 +24,9 @@ export function canState(r: Pick<ReferenceValue, 'low' | 'high'>, q: Pick<Quanti
   return !loose || (q.low <= r.high && r.low <= q.high);
 }
 
-/** Every `all` group has one of its terms in `hits`, and no `none` term is there. */
-export function satisfies(r: ReferenceValue, hits: TermHits): boolean {
-  return r.binding.all.every((group) => group.some((id) => hits.has(id))) && !r.binding.none.some((id) => hits.has(id));
+/** Every `all` group has one of its terms in `hits`, and no `none` term is in `vetoes` (by default the same hits). */
+export function satisfies(r: ReferenceValue, hits: TermHits, vetoes: TermHits = hits): boolean {
+  return r.binding.all.every((group) => group.some((id) => hits.has(id))) && !r.binding.none.some((id) => vetoes.has(id));
 }
 
 /** The term ids of `hits` that serve one of the value's `all` groups. */

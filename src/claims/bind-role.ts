@@ -31,8 +31,8 @@ const CHANGE_AFTER = /^[\s-]*(?:rise|increase|drop|fall|decline|swing|jump|step|
 const DATUM_AFTER = /^\s*(?:below|beneath|under|above)\s+(?:the\s+)?(?:ice\s+|snow\s+)?(?:surface|sea\s+level)(?![\p{L}])/iu;
 /** Level words just before the quantity: "fell to", "stood at", "reached", "from". */
 const LEVEL_BEFORE = /(?:^|[^\p{L}])(?:from|to|at|between|reached|reaching|hovered around)\s*$/iu;
-/** A bound read as a place on the scale: "never rose above 300 ppm", "fell below 200 ppm". */
-const LEVEL_HEDGE = /^(?:above|below|beyond|past|under)(?![\p{L}])/iu;
+/** A bound read as a place on the scale: "never rose above 300 ppm", "fell below 200 ppm", "climbed as high as 350 ppm". */
+const LEVEL_HEDGE = /^(?:above|below|beyond|past|under|as\s+(?:high|low)\s+as)(?![\p{L}])/iu;
 /** "over" after a change verb may be either: "rose over 80 ppm" (a change) or "never rose over 300 ppm" (a level). */
 const EITHER_HEDGE = /^over(?![\p{L}])/iu;
 const PAIR_OPEN = /(?:^|[^\p{L}])(?:from|between)\s*$/iu;

@@ -13,10 +13,14 @@
  */
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
+import { bindApposition } from './bind-apposition.js';
+import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext } from './bind-context.js';
+import { withoutOthers } from './bind-others.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
+import { vetoView } from './bind-veto.js';
 import { clauseBreaks, termViews, type TermHits } from './bind-view.js';
 
 export type { TermHits } from './bind-view.js';
@@ -25,7 +29,11 @@ export type { TermHits } from './bind-view.js';
 const AMBIGUOUS = 'ambiguous';
 const compiled = new WeakMap<object, Map<string, RegExp>>();
 
-/** Finds every term occurrence (case-insensitive, on word boundaries) in `sentence`. */
+/**
+ * Finds every term occurrence (case-insensitive, on word boundaries) in `sentence`. A term whose id
+ * is another term's id, a dot and a name ("glacial.in-other-words") adds words to that term: its
+ * hits count as the other term's, so a pack adds a synonym without editing an entry.
+ */
 export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
   let regexes = compiled.get(packs);
   if (regexes === undefined) {
@@ -35,9 +43,19 @@ export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
   const hits: TermHits = new Map();
   for (const [id, regex] of regexes) {
     const spans = [...sentence.matchAll(regex)].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
-    if (spans.length > 0) hits.set(id, spans);
+    if (spans.length === 0) continue;
+    const as = extendedTerm(id, packs);
+    hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
   }
   return hits;
+}
+
+/** The term a dotted id extends ("glacial.in-other-words" → "glacial"), or the id itself. */
+export function extendedTerm(id: string, packs: LoadedPacks): string {
+  const dot = id.indexOf('.');
+  if (dot < 0) return id;
+  const base = id.slice(0, dot);
+  return packs.term(base) === undefined ? id : base;
 }
 
 function termRegex(words: string[]): RegExp {
@@ -54,7 +72,14 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   const pairs = endpointPairs(sentence, quantities);
   const roles = quantityRoles(sentence, quantities);
   const lists = parallelLists(sentence, quantities, pairs);
-  const views = termViews(sentence, quantities, findTerms(sentence, packs), pairs, lists);
+  const hits = withoutOthers(sentence, findTerms(sentence, packs));
+  const views = termViews(sentence, quantities, hits, pairs, lists);
+  // "… began to fade 18,000 years ago and was over by 3,000 years ago": a predicate sharing the subject speaks for itself.
+  for (const c of sharedSubjects(sentence, quantities)) {
+    quantities.forEach((q, i) => {
+      if (q.start >= c.clause[0] && q.end <= c.clause[1]) views[i] = clauseView(sentence, views[i] as TermHits, c, (text) => findTerms(text, packs));
+    });
+  }
   const breaks = clauseBreaks(sentence);
   // Per quantity: the value it binds, AMBIGUOUS, or null when its list left it unbound.
   const decided = new Map<number, string | null>();
@@ -65,20 +90,25 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     for (const b of outcome.bindings) decided.set(b.quantityIndex, b.referenceId);
   }
   let contextHits: TermHits | undefined;
+  let fromApposition: string | undefined;
+  let contextSubject: [number, number] | null | undefined;
   quantities.forEach((q, i) => {
     if (decided.has(i)) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
+    const vetoes = vetoView(sentence, view, q, role);
     const scored = packs.references
-      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view) && canState(r, q))
+      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view, vetoes) && canState(r, q))
       .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
       .sort((a, b) => a.score - b.score);
     const [best, next] = scored;
     if (best !== undefined) decided.set(i, next !== undefined && next.score === best.score ? AMBIGUOUS : best.r.id);
+    else if ((fromApposition = bindApposition(sentence, q, role, view, hits, packs)) !== undefined) decided.set(i, fromApposition);
     // A calendar year ("before the year 2000") dates the sentence; it takes no subject from the one before.
     else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE') {
       contextHits ??= findTerms(context, packs);
-      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks);
+      contextSubject ??= subjectSpan(context) ?? null;
+      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, contextSubject ?? undefined);
       if (found !== undefined) decided.set(i, found);
     }
   });

@@ -7,7 +7,7 @@
  * the exit status.
  */
 import { relative } from 'node:path';
-import { changedLines } from '../review/changed-lines.js';
+import { changedLines, EVERY_LINE } from '../review/changed-lines.js';
 import { describeReview } from '../review/describe-review.js';
 import { readLedger } from '../review/read-ledger.js';
 import { reviewClaims, type ReviewSummary } from '../review/review-claims.js';
@@ -84,6 +84,7 @@ export function onChangedLines(result: CheckResult, changed: Map<string, Set<num
   const touches = (file: string, from: number, to: number) => {
     const lines = changed.get(file);
     if (lines === undefined) return false;
+    if (lines.has(EVERY_LINE)) return true;
     for (let n = from; n <= to; n += 1) if (lines.has(n)) return true;
     return false;
   };

@@ -2,6 +2,7 @@ import { Command, CommanderError } from 'commander';
 import { FirnlineError, isUserError } from '../errors.js';
 import { VERSION } from '../version.js';
 import { CAUTIONS } from './cautions.js';
+import { registerAnnotate } from './commands/annotate.js';
 import { registerCheck } from './commands/check.js';
 import { registerChecklist } from './commands/checklist.js';
 import { registerExplain } from './commands/explain.js';
@@ -24,7 +25,7 @@ export async function main(argv: string[], context: Partial<CliContext> = {}): P
     .addHelpText('after', `\n${CAUTIONS}\n`)
     .exitOverride()
     .configureOutput({ writeOut: ctx.stdout, writeErr: ctx.stderr });
-  for (const register of [registerCheck, registerChecklist, registerSignoff, registerRefs, registerExplain, registerInit, registerLsp]) {
+  for (const register of [registerCheck, registerChecklist, registerSignoff, registerAnnotate, registerRefs, registerExplain, registerInit, registerLsp]) {
     register(program, ctx);
   }
   for (const command of program.commands) command.addHelpText('after', `\n${CAUTIONS}\n`);

@@ -36,7 +36,7 @@ export interface DocumentCheck {
  * (relative to the project root) is what claim ids use. A sign-off checklist and an off-topic text
  * give no flags. (The server re-checks through incremental-check.ts, which gives the same result.)
  */
-export function checkDocument(text: string, format: Draft['format'], path: string, projectPath: string, setup: CheckSetup): DocumentCheck {
+export function checkDocument(text: string, format: Exclude<Draft['format'], 'docx'>, path: string, projectPath: string, setup: CheckSetup): DocumentCheck {
   const draft = draftFromText(path, text, format);
   if (text.trimStart().startsWith(CHECKLIST_MARKER) || !setup.topic.test(text)) return { draft, flags: [] };
   const { claims } = checkDraft(draft, setup.packs, { topic: setup.topic, levels: setup.levels, projectPath });

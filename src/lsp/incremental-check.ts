@@ -15,6 +15,9 @@ import type { Claim, Draft, Flag, ProseBlock, Span } from '../types.js';
 import { joinSignoffs, type CheckSetup, type DocumentCheck } from './check-document.js';
 import { createPositionMap, type PositionMap } from './positions.js';
 
+/** The formats an editor sends as text (a Word file never comes through the protocol). */
+type TextFormat = Exclude<Draft['format'], 'docx'>;
+
 /** A claim of a block, with its spans (and its flags' spans) as UTF-16 indices from the block start. */
 interface CachedClaim {
   claim: Claim;
@@ -24,13 +27,13 @@ interface CachedClaim {
 
 /** Checks one document again and again, reusing the claims of unchanged blocks. */
 export interface DocumentChecker {
-  check(text: string, format: Draft['format'], path: string, projectPath: string): DocumentCheck;
+  check(text: string, format: TextFormat, path: string, projectPath: string): DocumentCheck;
 }
 
 /** A checker bound to one setup (a new setup means a new checker: the packs or levels changed). */
 export function createDocumentChecker(setup: CheckSetup): DocumentChecker {
   let cache = new Map<string, CachedClaim[][]>();
-  let cacheFormat: Draft['format'] | undefined;
+  let cacheFormat: TextFormat | undefined;
   let cachePath: string | undefined;
   return {
     check(text, format, path, projectPath) {

@@ -37,6 +37,9 @@ import { createDocumentChecker, type DocumentChecker } from './incremental-check
 import { createPositionMap, type PositionMap } from './positions.js';
 import type { Workspace, WorkspaceLoader } from './workspace.js';
 
+/** The formats an editor sends as text (a Word file never comes through the protocol). */
+type TextFormat = Exclude<Draft['format'], 'docx'>;
+
 /** How the server is set up by the `lsp` command. */
 export interface ServerOptions {
   input: NodeJS.ReadableStream;
@@ -52,9 +55,9 @@ export interface ServerOptions {
 export const DEFAULT_DEBOUNCE_MS = 250;
 
 /** LSP language ids (LSP 3.17, "TextDocumentItem") and the draft format each is read as. */
-const FORMAT_OF_LANGUAGE: Record<string, Draft['format']> = { markdown: 'markdown', plaintext: 'text', text: 'text' };
+const FORMAT_OF_LANGUAGE: Record<string, TextFormat> = { markdown: 'markdown', plaintext: 'text', text: 'text' };
 /** File endings read as drafts when the client sends a language id we do not know. */
-const FORMAT_OF_ENDING: [RegExp, Draft['format']][] = [[/\.(?:md|markdown)$/iu, 'markdown'], [/\.txt$/iu, 'text']];
+const FORMAT_OF_ENDING: [RegExp, TextFormat][] = [[/\.(?:md|markdown)$/iu, 'markdown'], [/\.txt$/iu, 'text']];
 
 /** The last check of one document, at one version. */
 interface Checked {
@@ -269,7 +272,7 @@ export function startServer(options: ServerOptions): Connection {
 }
 
 /** The draft format of a document, or undefined for a language Firnline does not read. */
-function formatOf(document: TextDocument): Draft['format'] | undefined {
+function formatOf(document: TextDocument): TextFormat | undefined {
   const byLanguage = FORMAT_OF_LANGUAGE[document.languageId];
   if (byLanguage !== undefined) return byLanguage;
   return FORMAT_OF_ENDING.find(([ending]) => ending.test(document.uri))?.[1];

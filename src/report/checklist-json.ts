@@ -35,6 +35,8 @@ export interface ChecklistItem {
   file: string;
   line: number;
   column: number;
+  /** In a Word draft, the paragraph number (`line` is then the same number; there are no lines). */
+  paragraph?: number;
   heading: string;
   sentence: string;
   values: (ChecklistRange & { text: string })[];
@@ -101,6 +103,7 @@ export function toChecklist(input: ChecklistInput): Checklist {
       file: claim.file,
       line: claim.span.start.line,
       column: claim.span.start.column,
+      ...(claim.paragraph === undefined ? {} : { paragraph: claim.paragraph.number }),
       heading: claim.heading,
       sentence: claim.text.replace(/\s+/gu, ' ').trim(),
       values: claim.quantities.map((q) => ({ text: q.text, low: bound(q.low), high: bound(q.high), unit: q.unit })),

@@ -75,7 +75,8 @@ export function checklistToMarkdown(checklist: Checklist): string {
 function itemLines(item: ChecklistItem): string[] {
   // A claim whose sign-off holds is shown ticked, with who and when; `signoff --from` leaves it as it is.
   const box = item.signoff.status === 'signed off' ? '[x]' : '[ ]';
-  const lines = [`- ${box} **${item.id}** line ${item.line}: ${item.sentence}`];
+  const where = item.paragraph === undefined ? `line ${item.line}` : `paragraph ${item.paragraph}`;
+  const lines = [`- ${box} **${item.id}** ${where}: ${item.sentence}`];
   const detail = (label: string, text: string) => lines.push(`  - ${label}: ${text}`);
   if (item.values.length > 0) detail('Values read', item.values.map((v) => `"${v.text}" (${range(v)})`).join('; '));
   detail('Verdict', VERDICT_WORDS[item.verdict](item));
@@ -88,12 +89,12 @@ function itemLines(item: ChecklistItem): string[] {
     for (const s of item.sources) lines.push(`    - ${formatSource(s)}`);
   }
   const s = item.signoff;
-  const where = s.movedFrom !== undefined ? ` (moved from ${s.movedFrom})` : s.sharedWith !== undefined ? ` (same sentence in ${s.sharedWith})` : '';
-  if (s.status === 'signed off') detail('Signed off', `by ${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}, ${s.decision ?? ''}${where}`);
-  if (s.status === 'needs change') detail('Needs change', `${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}: ${s.reason ?? ''}${where}`);
+  const from = s.movedFrom !== undefined ? ` (moved from ${s.movedFrom})` : s.sharedWith !== undefined ? ` (same sentence in ${s.sharedWith})` : '';
+  if (s.status === 'signed off') detail('Signed off', `by ${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}, ${s.decision ?? ''}${from}`);
+  if (s.status === 'needs change') detail('Needs change', `${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}: ${s.reason ?? ''}${from}`);
   if (s.status === 'stale') {
     const earlier = s.decision === 'needs-change' ? `marked this wording as needing a change (${s.reason ?? ''})` : 'signed off this wording';
-    detail('Changed since sign-off', `${s.reviewer ?? '?'} ${earlier} on ${(s.date ?? '').slice(0, 10)}${where}: "${s.signedOffText ?? ''}"`);
+    detail('Changed since sign-off', `${s.reviewer ?? '?'} ${earlier} on ${(s.date ?? '').slice(0, 10)}${from}: "${s.signedOffText ?? ''}"`);
     if (s.changes !== undefined) detail('What changed', s.changes);
   }
   return lines;

@@ -2,11 +2,12 @@ import type { CheckResult } from '../types.js';
 import type { ReportOptions, Reporter } from './report-options.js';
 import { renderJson } from './render-json.js';
 import { renderJunit } from './render-junit.js';
+import { renderHtml } from './review-page/render-html.js';
 import { renderSarif } from './render-sarif.js';
 import { renderText } from './render-text.js';
 
 /** The output formats `check --format` accepts; `text` is the default. */
-export const REPORT_FORMATS = ['text', 'json', 'sarif', 'junit'] as const;
+export const REPORT_FORMATS = ['text', 'json', 'sarif', 'junit', 'html'] as const;
 /** One of REPORT_FORMATS. */
 export type ReportFormat = (typeof REPORT_FORMATS)[number];
 
@@ -16,6 +17,7 @@ const REPORTERS: Record<ReportFormat, Reporter> = {
   json: renderJson,
   sarif: renderSarif,
   junit: renderJunit,
+  html: renderHtml,
 };
 
 /** True when `name` is one of REPORT_FORMATS (for the CLI, before it calls renderReport). */
@@ -45,4 +47,5 @@ export { renderSarif, toSarifLog, SARIF_SCHEMA_URI } from './render-sarif.js';
 export type { SarifLog, SarifResult, SarifRegion, SarifReportingDescriptor } from './sarif-log.js';
 export { SARIF_LEVELS } from './sarif-rules.js';
 export { renderJunit } from './render-junit.js';
+export { renderHtml } from './review-page/render-html.js';
 export { escapeXmlAttribute, escapeXmlText } from './escape-xml.js';

@@ -1,3 +1,4 @@
+import { formatPlaceInFile } from './format-place.js';
 import type { CheckResult, Flag, Span } from '../types.js';
 import { reachesFailLevel } from './report-options.js';
 import type { ReportOptions } from './report-options.js';
@@ -26,11 +27,11 @@ type PlacedCase = JunitCase & { file: string; span: Span };
 // CI viewers show test names on one line; long claim sentences are cut at a readable length.
 const NAME_LIMIT = 80;
 
-/** `3:5 The EPICA Dome C core…`: a claim's place and its text on one line, at most 80 code points of text. */
-export function caseName(line: number, column: number, text: string): string {
+/** `3:5 The EPICA Dome C core…` (`paragraph 4 ...` in a Word draft): a claim's place and its text on one line, at most 80 code points of text. */
+export function caseName(place: string, text: string): string {
   const chars = [...text.replace(/\s+/g, ' ').trim()];
   const shown = chars.length > NAME_LIMIT ? `${chars.slice(0, NAME_LIMIT - 1).join('')}…` : chars.join('');
-  return `${line}:${column} ${shown}`;
+  return `${place} ${shown}`;
 }
 
 function splitByFailLevel(flags: Flag[], options: ReportOptions): Pick<JunitCase, 'failures' | 'passed'> {
@@ -54,7 +55,7 @@ export function toJunitSuites(result: CheckResult, options: ReportOptions): Juni
     const claimCases = claims.map((claim): PlacedCase => ({
       file,
       span: claim.span,
-      name: caseName(claim.span.start.line, claim.span.start.column, claim.text),
+      name: caseName(formatPlaceInFile(claim), claim.text),
       ...splitByFailLevel(flags.filter((flag) => flag.claimId === claim.id), options),
     }));
     // A flag whose claim is not in this file still gets a case: nothing found may go unreported.
@@ -63,7 +64,7 @@ export function toJunitSuites(result: CheckResult, options: ReportOptions): Juni
       .map((flag): PlacedCase => ({
         file,
         span: flag.span,
-        name: caseName(flag.span.start.line, flag.span.start.column, `${flag.ruleId}: "${flag.excerpt}"`),
+        name: caseName(formatPlaceInFile(flag), `${flag.ruleId}: "${flag.excerpt}"`),
         ...splitByFailLevel([flag], options),
       }));
     const cases = sortByPlace([...claimCases, ...loneCases]).map(({ file: _file, span: _span, ...rest }) => rest);

@@ -1,6 +1,7 @@
 import type { CheckResult, Flag } from '../types.js';
 import { describeFlag } from './describe-flag.js';
 import { escapeXmlAttribute as attr, escapeXmlText as text } from './escape-xml.js';
+import { formatPlace } from './format-place.js';
 import { formatSource } from './format-source.js';
 import { asSentence } from './format-value.js';
 import type { JunitCase, JunitSuite } from './junit-suites.js';
@@ -29,8 +30,7 @@ function countAttributes({ tests, failures, skipped }: Counts): string {
 
 /** A flag in full, for a failure body or standard output: place, level, rule, words, sources. */
 function flagText(flag: Flag): string {
-  const { line, column } = flag.span.start;
-  const lines = [`${flag.file}:${line}:${column} ${flag.level} ${flag.ruleId}`, describeFlag(flag)];
+  const lines = [`${formatPlace(flag)} ${flag.level} ${flag.ruleId}`, describeFlag(flag)];
   if (flag.sources.length > 0) lines.push('Sources:', ...flag.sources.map((s) => `- ${formatSource(s)}`));
   return lines.join('\n');
 }

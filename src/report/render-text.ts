@@ -2,6 +2,7 @@ import { Chalk } from 'chalk';
 import type { ChalkInstance } from 'chalk';
 import type { CheckResult, Flag, Level } from '../types.js';
 import { formatReference } from './describe-flag.js';
+import { formatPlace } from './format-place.js';
 import { formatSource } from './format-source.js';
 import { asSentence, formatClaimed } from './format-value.js';
 import type { ReportOptions } from './report-options.js';
@@ -28,9 +29,8 @@ function rows(chalk: ChalkInstance, label: string, values: string[]): string[] {
 
 /** One flag as a block: place, level and rule; the reason; then labelled rows of the evidence. */
 function flagBlock(chalk: ChalkInstance, flag: Flag): string {
-  const { line, column } = flag.span.start;
   const head = [
-    chalk.bold(`${flag.file}:${line}:${column}`),
+    chalk.bold(formatPlace(flag)),
     LEVEL_COLOUR[flag.level](chalk)(flag.level),
     flag.ruleId,
   ].join(chalk.dim(' · '));

@@ -38,13 +38,25 @@ export interface SarifFix {
   }[];
 }
 
+/**
+ * Where a result is (SARIF §3.28). A text draft gives a region; a Word draft, whose file is a zip
+ * package with no lines, gives no region but a logical location naming the paragraph (§3.33), a
+ * message saying it in words (§3.28.5) and the paragraph number and heading as properties (§3.8).
+ */
+export interface SarifLocation {
+  physicalLocation: { artifactLocation: SarifArtifactLocation; region?: SarifRegion };
+  logicalLocations?: { name: string; fullyQualifiedName: string; kind: 'element' }[];
+  message?: SarifMessage;
+  properties?: { paragraph: number; heading: string };
+}
+
 /** One finding (SARIF §3.27). */
 export interface SarifResult {
   ruleId: string;
   ruleIndex?: number;
   level: SarifLevel;
   message: SarifMessage;
-  locations: { physicalLocation: { artifactLocation: SarifArtifactLocation; region: SarifRegion } }[];
+  locations: SarifLocation[];
   partialFingerprints?: Record<string, string>;
   fixes?: SarifFix[];
   /** SARIF §3.35: an expert's sign-off is an external, accepted suppression. */

@@ -1,6 +1,7 @@
 import type { Flag, Span } from '../types.js';
 import { describeFlag } from './describe-flag.js';
-import type { SarifArtifactLocation, SarifRegion, SarifResult } from './sarif-log.js';
+import { formatParagraph } from './format-place.js';
+import type { SarifArtifactLocation, SarifLocation, SarifRegion, SarifResult } from './sarif-log.js';
 import { SARIF_LEVELS } from './sarif-rules.js';
 
 /** The base every artifact URI is relative to: the folder Firnline ran in. */
@@ -44,16 +45,15 @@ export function toSarifResult(flag: Flag, ruleIndex: number | undefined): SarifR
     ...(ruleIndex === undefined ? {} : { ruleIndex }),
     level: SARIF_LEVELS[flag.level],
     message: { text: describeFlag(flag) },
-    locations: [
-      { physicalLocation: { artifactLocation: location, region: { ...toRegion(flag.span), snippet: { text: flag.excerpt } } } },
-    ],
+    locations: [locationOf(flag, location)],
   };
   if (flag.claimId !== undefined) result.partialFingerprints = { [CLAIM_FINGERPRINT]: flag.claimId };
   if (flag.signoff !== undefined) {
     const { reviewer, date, decision } = flag.signoff;
     result.suppressions = [{ kind: 'external', status: 'accepted', justification: `Signed off by ${reviewer} on ${date} (${decision}).` }];
   }
-  if (flag.correction !== undefined) {
+  // A fix needs a text region to replace; a Word draft has none, and its message carries the correction.
+  if (flag.correction !== undefined && flag.paragraph === undefined) {
     result.fixes = [
       {
         description: { text: `Replace "${flag.excerpt}" with "${flag.correction}".` },
@@ -67,4 +67,19 @@ export function toSarifResult(flag: Flag, ruleIndex: number | undefined): SarifR
     ];
   }
   return result;
+}
+
+/** A text draft's region; or, in a Word draft, the paragraph as a logical location (see SarifLocation). */
+function locationOf(flag: Flag, artifactLocation: SarifArtifactLocation): SarifLocation {
+  if (flag.paragraph === undefined) {
+    return { physicalLocation: { artifactLocation, region: { ...toRegion(flag.span), snippet: { text: flag.excerpt } } } };
+  }
+  const { number, heading } = flag.paragraph;
+  const name = `paragraph ${number}`;
+  return {
+    physicalLocation: { artifactLocation },
+    logicalLocations: [{ name, fullyQualifiedName: name, kind: 'element' }],
+    message: { text: `${formatParagraph(flag.paragraph)}: "${flag.excerpt}"` },
+    properties: { paragraph: number, heading },
+  };
 }

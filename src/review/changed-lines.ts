@@ -14,6 +14,12 @@ import { FirnlineError } from '../errors.js';
 
 const run = promisify(execFile);
 
+/**
+ * Stands in a file's set when every line counts as changed: a Word draft, which git diffs as a
+ * binary file, not by line (lines are 1-based, so 0 is free to mean "all").
+ */
+export const EVERY_LINE = 0;
+
 /** Changed line numbers (1-based, in the current file) per path relative to `cwd`, POSIX separators. */
 export async function changedLines(rev: string, cwd: string): Promise<Map<string, Set<number>>> {
   await git(['rev-parse', '--verify', '--quiet', `${rev}^{commit}`], cwd, `unknown git revision '${rev}'; give a commit, branch or tag that exists here (in CI, fetch enough history)`);
@@ -25,6 +31,10 @@ export async function changedLines(rev: string, cwd: string): Promise<Map<string
   const changed = parseUnifiedDiff(diff);
   const untracked = await git(['-c', 'core.quotePath=false', 'ls-files', '--others', '--exclude-standard', '-z', '--', '.'], cwd, 'git ls-files failed');
   for (const file of untracked.split('\0').filter((f) => f !== '')) {
+    if (file.toLowerCase().endsWith('.docx')) {
+      changed.set(file, new Set([EVERY_LINE]));
+      continue;
+    }
     const text = await readFile(join(cwd, file), 'utf8').catch(() => '');
     const count = text.replace(/(\r\n|\r|\n)$/u, '').split(/\r\n|\r|\n/u).length;
     changed.set(file, new Set(Array.from({ length: count }, (_, i) => i + 1)));
@@ -44,6 +54,14 @@ export function parseUnifiedDiff(diff: string): Map<string, Set<number>> {
       const path = header[1] ?? (header[2] === undefined ? undefined : unquote(header[2]));
       lines = path === undefined ? undefined : new Set<number>();
       if (path !== undefined && lines !== undefined) changed.set(path, lines);
+      continue;
+    }
+    // A changed binary file (a Word draft): git says only that it differs, so every claim in it counts.
+    const binary = /^Binary files (?:a\/.*|\/dev\/null) and (?:b\/(.*)|"b\/(.*)") differ$/u.exec(line);
+    if (binary !== null) {
+      const path = binary[1] ?? unquote(binary[2] ?? '');
+      changed.set(path, new Set([EVERY_LINE]));
+      lines = undefined;
       continue;
     }
     const hunk = /^@@ -\d+(?:,\d+)? \+(\d+)(?:,(\d+))? @@/u.exec(line);

@@ -10,6 +10,7 @@
  */
 import type { ReviewSummary } from './review-claims.js';
 import { foldClaimText } from './claim-id.js';
+import { formatPlace } from '../report/format-place.js';
 
 /** Open claims listed one by one, at most; stale claims are always all listed. */
 export const MAX_OPEN_LINES = 20;
@@ -22,7 +23,7 @@ export function describeReview(review: ReviewSummary): string[] {
     `Sign-off: ${counts['signed off']} of ${plural(total, 'claim')} signed off; ${plural(counts.open, 'claim')} open, ${counts.stale} changed since sign-off, ${counts['needs change']} marked needs change.`,
   ];
   for (const r of review.claims) {
-    const place = `${r.claim.file}:${r.claim.span.start.line}:${r.claim.span.start.column} ${r.claim.id}`;
+    const place = `${formatPlace(r.claim)} ${r.claim.id}`;
     const moved = r.movedFrom === undefined ? '' : `, moved from ${r.movedFrom}`;
     if (r.status === 'stale' && r.signoff !== undefined) {
       lines.push(`changed since sign-off: ${place} (${signedBy(r.signoff)}${moved})`);
@@ -40,7 +41,7 @@ export function describeReview(review: ReviewSummary): string[] {
   // A first run on a large repository has hundreds of open claims: the checklist lists them all.
   const open = review.claims.filter((r) => r.status === 'open');
   for (const r of open.slice(0, MAX_OPEN_LINES)) {
-    lines.push(`open: ${r.claim.file}:${r.claim.span.start.line}:${r.claim.span.start.column} ${r.claim.id} ${foldClaimText(r.claim.text)}`);
+    lines.push(`open: ${formatPlace(r.claim)} ${r.claim.id} ${foldClaimText(r.claim.text)}`);
   }
   if (open.length > MAX_OPEN_LINES) lines.push(`... and ${open.length - MAX_OPEN_LINES} more open claims.`);
   if (counts.open + counts.stale + counts['needs change'] > 0) {

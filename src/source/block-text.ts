@@ -16,6 +16,27 @@ export function startBlockText(): BlockText {
   return { units: [], offsets: [], end: 0 };
 }
 
+/**
+ * How a source language spells characters in text: its escapes and its character references.
+ * Markdown has both; HTML has only references (a backslash is a backslash).
+ */
+export interface ValueSyntax {
+  isEscape(original: string, k: number): boolean;
+  /** The reference starting at `k` (its length in the source and what it decodes to), if any. */
+  reference(original: string, k: number): { length: number; decoded: string } | undefined;
+}
+
+/** CommonMark's spelling: backslash escapes and `&name;` / `&#...;` references. */
+export const MARKDOWN_SYNTAX: ValueSyntax = {
+  isEscape,
+  reference(original, k) {
+    const reference = original[k] === '&' ? matchReference(original, k) : undefined;
+    if (reference === undefined) return undefined;
+    const decoded = decodeReference(reference);
+    return decoded === reference ? undefined : { length: reference.length, decoded };
+  },
+};
+
 /** One value character (or decoded reference) found in the source. */
 interface Step {
   text: string;
@@ -32,14 +53,21 @@ interface Step {
  * first unit, so a range starting there covers the whole spelling. A value character not found
  * keeps the last position, so offsets never run backwards and odd input never throws.
  */
-export function appendValue(block: BlockText, value: string, original: string, from: number, to: number): void {
+export function appendValue(
+  block: BlockText,
+  value: string,
+  original: string,
+  from: number,
+  to: number,
+  syntax: ValueSyntax = MARKDOWN_SYNTAX,
+): void {
   let j = from;
   let i = 0;
   while (i < value.length) {
     let step: Step | undefined;
     for (let k = j; k < to && step === undefined; k += 1) {
-      step = matchAt(original, k, value, i);
-      if (step === undefined && isEscape(original, k)) k += 1; // an escape of another character
+      step = matchAt(original, k, value, i, syntax);
+      if (step === undefined && syntax.isEscape(original, k)) k += 1; // an escape of another character
     }
     if (step === undefined) {
       const unit = value[i] ?? '';
@@ -52,19 +80,16 @@ export function appendValue(block: BlockText, value: string, original: string, f
   block.end = Math.max(block.end, j);
 }
 
-function matchAt(original: string, k: number, value: string, i: number): Step | undefined {
+function matchAt(original: string, k: number, value: string, i: number, syntax: ValueSyntax): Step | undefined {
   const unit = value[i];
   const source = original[k];
   if (unit === undefined) return undefined;
-  if (isEscape(original, k)) {
+  if (syntax.isEscape(original, k)) {
     return original[k + 1] === unit ? { text: unit, at: k, next: k + 2, consumed: 1 } : undefined;
   }
-  const reference = source === '&' ? matchReference(original, k) : undefined;
-  if (reference !== undefined) {
-    const decoded = decodeReference(reference);
-    if (decoded !== reference && value.startsWith(decoded, i)) {
-      return { text: decoded, at: k, next: k + reference.length, consumed: decoded.length };
-    }
+  const reference = syntax.reference(original, k);
+  if (reference !== undefined && value.startsWith(reference.decoded, i)) {
+    return { text: reference.decoded, at: k, next: k + reference.length, consumed: reference.decoded.length };
   }
   if (isLineEnd(unit) && source !== undefined && isLineEnd(source)) {
     return { text: '\n', at: k, next: k + lineEndWidth(original, k), consumed: lineEndWidth(value, i) };

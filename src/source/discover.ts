@@ -5,7 +5,7 @@ import { FirnlineError, FirnlineErrors } from '../errors.js';
 import { createPathFilter, isIgnored, rulesForFolder, toPosixPath, type IgnoreRules } from './ignore-rules.js';
 
 /** File endings taken when walking a folder (any file named directly is taken whatever its ending). */
-export const DRAFT_EXTENSIONS = ['.md', '.markdown', '.txt'] as const;
+export const DRAFT_EXTENSIONS = ['.md', '.markdown', '.txt', '.html', '.htm', '.docx'] as const;
 
 /** Which files a folder walk keeps: gitignore-style globs relative to `root` (default: the working folder). */
 export interface DraftFilters {
@@ -19,8 +19,8 @@ type PathFilter = ReturnType<typeof createPathFilter>;
 
 /**
  * The drafts to check, as sorted, deduplicated POSIX paths relative to `cwd`. A file is taken as
- * given. A folder is walked for `.md`, `.markdown` and `.txt` files, passing over hidden names,
- * `node_modules`, whatever the `.gitignore` files from `cwd` down say, and whatever
+ * given. A folder is walked for `.md`, `.markdown`, `.txt`, `.html`, `.htm` and `.docx` files, passing
+ * over hidden names, a word processor's `~$` lock files, `node_modules`, whatever the `.gitignore` files from `cwd` down say, and whatever
  * `include`/`exclude` leave out. Every missing path and every folder without drafts is reported
  * together (FirnlineError codes `path-missing`, `no-drafts`).
  */
@@ -39,7 +39,7 @@ export async function findDrafts(paths: string[], workingFolder: string, options
       await walkFolder(path, await rulesAbove(cwd, path), walk);
       for (const file of walk.found) found.add(file);
       if (walk.found.size === 0) {
-        errors.push(new FirnlineError('no-drafts', 'no .md, .markdown or .txt drafts in this folder (hidden and ignored files are passed over); name a file or another folder', { file: given }));
+        errors.push(new FirnlineError('no-drafts', 'no .md, .markdown, .txt, .html, .htm or .docx drafts in this folder (hidden and ignored files are passed over); name a file or another folder', { file: given }));
       }
     } else {
       found.add(path);
@@ -83,7 +83,7 @@ async function walkFolder(folder: string, parents: IgnoreRules, walk: Walk): Pro
     throw new FirnlineError('file-unreadable', `cannot read this folder (${code}); check its permissions`, { file: toPosixPath(walk.cwd, folder) });
   });
   for (const entry of entries) {
-    if (entry.name.startsWith('.') || entry.name === 'node_modules') continue;
+    if (entry.name.startsWith('.') || entry.name.startsWith('~$') || entry.name === 'node_modules') continue;
     const path = join(folder, entry.name);
     const kind = await entryKind(entry, path);
     if (kind === undefined || isIgnored(rules, path, kind === 'folder') || !walk.filter(path, kind === 'folder')) continue;

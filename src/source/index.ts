@@ -4,7 +4,8 @@
  * 1-based line and column (code points).
  */
 export { findDrafts, DRAFT_EXTENSIONS, type DraftFilters } from './discover.js';
-export { readDraft, readDraftText, draftFromText, draftFormat } from './read-draft.js';
+export { readDraft, readDraftText, readWordDraft, draftFromText, draftFormat, loadHtmlReader } from './read-draft.js';
+export type { WordDocument } from './word/word-draft.js';
 export { createLineIndex, type LineIndex } from './line-index.js';
 export { readMarkdownBlocks } from './markdown.js';
 export { readPlainTextBlocks } from './plain-text.js';

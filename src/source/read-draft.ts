@@ -1,9 +1,10 @@
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { FirnlineError } from '../errors.js';
-import type { Draft } from '../types.js';
+import type { Draft, ProseBlock } from '../types.js';
 import { readMarkdownBlocks } from './markdown.js';
 import { readPlainTextBlocks } from './plain-text.js';
+import { WordPackageError } from './word/word-package-error.js';
 
 /** How many leading bytes are searched for a NUL byte, the mark of a binary file. */
 const SNIFF_BYTES = 8192;
@@ -11,18 +12,63 @@ const SNIFF_BYTES = 8192;
 // One decoder for every file: without `stream`, decode() keeps no state between calls.
 const UTF8 = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true });
 
-const MARKDOWN_ENDINGS = ['.md', '.markdown'];
+const ENDINGS: [string, Draft['format']][] = [
+  ['.md', 'markdown'],
+  ['.markdown', 'markdown'],
+  ['.html', 'html'],
+  ['.htm', 'html'],
+  ['.docx', 'docx'],
+];
 
-/** The format a draft is read as, from its file name: `.md`/`.markdown` is Markdown, anything else text. */
+/**
+ * The format a draft is read as, from its file name: `.md`/`.markdown` Markdown, `.html`/`.htm`
+ * HTML, `.docx` a Word document, anything else plain text.
+ */
 export function draftFormat(path: string): Draft['format'] {
   const lower = path.toLowerCase();
-  return MARKDOWN_ENDINGS.some((ending) => lower.endsWith(ending)) ? 'markdown' : 'text';
+  return ENDINGS.find(([ending]) => lower.endsWith(ending))?.[1] ?? 'text';
 }
 
-/** A draft from text already in memory (standard input, the library's `checkText`). */
-export function draftFromText(path: string, text: string, format: Draft['format']): Draft {
-  const blocks = format === 'markdown' ? readMarkdownBlocks(text) : readPlainTextBlocks(text);
+let htmlReader: ((text: string) => ProseBlock[]) | undefined;
+
+/**
+ * Loads the HTML reader (parse5) once. It is loaded only when an HTML draft is met, as the Word
+ * reader is, so a run over Markdown never pays for it; `draftFromText(..., 'html')` needs it first.
+ */
+export async function loadHtmlReader(): Promise<void> {
+  htmlReader ??= (await import('./html.js')).readHtmlBlocks;
+}
+
+/**
+ * A draft from text already in memory (standard input, the library's `checkText`); not for Word
+ * files. For HTML, `loadHtmlReader()` must have been awaited (checkPaths and checkText do).
+ */
+export function draftFromText(path: string, text: string, format: Exclude<Draft['format'], 'docx'>): Draft {
+  if (format === 'html' && htmlReader === undefined) throw new Error('internal: draftFromText(html) before loadHtmlReader()');
+  const blocks = format === 'markdown' ? readMarkdownBlocks(text) : format === 'html' ? (htmlReader?.(text) ?? []) : readPlainTextBlocks(text);
   return { path, text, format, blocks };
+}
+
+/**
+ * Reads a Word draft (`.docx`): its paragraphs, one per line of the draft's text (see
+ * word/word-draft.ts). A file that is not a readable Word package throws FirnlineError
+ * `draft-unreadable`, one line naming the file and what is wrong.
+ */
+export async function readWordDraft(path: string, cwd: string): Promise<Draft> {
+  let bytes: Uint8Array;
+  try {
+    bytes = readFileSync(resolve(cwd, path));
+  } catch (error) {
+    throw readError(error as NodeJS.ErrnoException, path);
+  }
+  // The Word reader (zip and XML libraries) is loaded only when a Word draft is met.
+  const { readWordDocument, wordDraftFrom } = await import('./word/word-draft.js');
+  try {
+    return wordDraftFrom(path, readWordDocument(bytes));
+  } catch (error) {
+    if (error instanceof WordPackageError) throw new FirnlineError('draft-unreadable', error.message, { file: path });
+    throw error;
+  }
 }
 
 /**
@@ -32,8 +78,11 @@ export function draftFromText(path: string, text: string, format: Draft['format'
  * `file-unreadable` (or `path-missing` when it has gone).
  */
 export async function readDraft(path: string, cwd: string): Promise<Draft | { skipped: string }> {
+  const format = draftFormat(path);
+  if (format === 'docx') return readWordDraft(path, cwd);
+  if (format === 'html') await loadHtmlReader();
   const text = await readDraftText(path, cwd);
-  return typeof text === 'string' ? draftFromText(path, text, draftFormat(path)) : text;
+  return typeof text === 'string' ? draftFromText(path, text, format) : text;
 }
 
 /**

@@ -34,8 +34,9 @@ const ROWS: Row[] = [
   ['The Pellow Heritage Trust notes that the deglaciation was complete by about 11,600 years ago.', '11,600', 'termination-1-end'],
   ['The Pellow Heritage Trust notes that the deglaciation was over by about 11,400 years ago.', '11,400', 'termination-1-end'],
   // Start and end in one sentence: the end date never binds the start value (Beeman et al. 2019: start ~18 ka).
-  // With "began" opening the sentence (it speaks for both numbers) the end date binds nothing rather than the start.
-  ['The deglaciation, the Pellow Trust writes, began some 19,000 years ago and was completed by about 11,400 years ago.', '11,400', '-'],
+  // "began" belongs to the first of two predicates that share the subject (bind-clauses.ts), so the end
+  // date binds the end: Termination I ended about 11,700-11,000 years ago (Walker et al. 2009; Beeman et al. 2019).
+  ['The deglaciation, the Pellow Trust writes, began some 19,000 years ago and was completed by about 11,400 years ago.', '11,400', 'termination-1-end'],
   ['The deglaciation, the Pellow Trust writes, began some 19,000 years ago and was completed by about 11,400 years ago.', '19,000', 'termination-1-start'],
   // With no start word, "completed by" alone makes the later date the end.
   ['The deglaciation, the Pellow Trust writes, got under way some 19,000 years ago and was completed by about 11,400 years ago.', '11,400', 'termination-1-end'],

@@ -6,11 +6,10 @@ import { checkDocument, createCheckSetup } from '../../src/lsp/check-document.js
 import { codeActionsOf, REPORTED_MARKER } from '../../src/lsp/code-actions.js';
 import { createPositionMap } from '../../src/lsp/positions.js';
 import { loadPacks } from '../../src/rulepack/index.js';
-import type { Draft } from '../../src/types.js';
 
 const WRONG = 'The Vostok ice core spans 800,000 years of climate history.';
 
-async function actionsFor(text: string, format: Draft['format']) {
+async function actionsFor(text: string, format: 'markdown' | 'text') {
   const setup = createCheckSetup(await loadPacks([]), {}, { file: 'firnline-signoffs.yaml', signoffs: [] });
   const check = checkDocument(text, format, 'draft', 'draft', setup);
   const [flag] = check.flags;

@@ -1,3 +1,4 @@
+import { renderHtml } from '../../src/report/review-page/render-html.js';
 import { describe, expect, it } from 'vitest';
 import {
   isReportFormat,
@@ -16,8 +17,8 @@ import { ICE_AGE_RESULT } from './fixtures/ice-age-result.js';
 const OPTIONS: ReportOptions = { color: false, toolVersion: '0.1.0', failOn: 'warning' };
 
 describe('the reporter registry', () => {
-  it('offers text, json, sarif and junit, text first as the default', () => {
-    expect(REPORT_FORMATS).toEqual(['text', 'json', 'sarif', 'junit']);
+  it('offers text, json, sarif, junit and html, text first as the default', () => {
+    expect(REPORT_FORMATS).toEqual(['text', 'json', 'sarif', 'junit', 'html']);
   });
 
   const formats = [
@@ -25,6 +26,7 @@ describe('the reporter registry', () => {
     ['json', renderJson],
     ['sarif', renderSarif],
     ['junit', renderJunit],
+    ['html', renderHtml],
   ] as const;
   it.each(formats)('renderReport("%s") is that format\'s reporter', (format, reporter) => {
     expect(renderReport(format, ICE_AGE_RESULT, OPTIONS)).toBe(reporter(ICE_AGE_RESULT, OPTIONS));
@@ -33,6 +35,7 @@ describe('the reporter registry', () => {
   const names: [string, boolean][] = [
     ['sarif', true],
     ['junit', true],
+    ['html', true],
     ['SARIF', false],
     ['markdown', false],
     ['', false],

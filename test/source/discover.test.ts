@@ -90,7 +90,7 @@ describe('findDrafts', () => {
   it('rejects a folder with no drafts', async () => {
     const error = await findDrafts(['pictures'], root).catch((e: unknown) => e);
     expect((error as FirnlineError).code).toBe('no-drafts');
-    expect((error as FirnlineError).toLine()).toMatch(/^pictures: no \.md, \.markdown or \.txt drafts in this folder/u);
+    expect((error as FirnlineError).toLine()).toMatch(/^pictures: no \.md, \.markdown, \.txt, \.html, \.htm or \.docx drafts in this folder/u);
   });
 
   it('reports every bad path at once', async () => {

@@ -35,7 +35,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
   program
     .command('check')
     .description('scan drafts (files, folders, or - for standard input) and report flags')
-    .argument('[paths...]', 'drafts or folders of drafts (.md, .markdown, .txt; default: the current folder)')
+    .argument('[paths...]', 'drafts or folders of drafts (.md, .markdown, .txt, .html, .htm, .docx; default: the current folder)')
     .addOption(new Option('--format <name>', 'output format (markdown: the sign-off checklist)').choices([...CHECK_FORMATS]).default('text'))
     .addOption(new Option('--fail-on <level>', 'lowest level that makes the exit status 1 (default: error)').choices([...LEVELS, 'never']))
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')

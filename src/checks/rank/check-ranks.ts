@@ -1,0 +1,180 @@
+/**
+ * Rank and comparison claims read against the reference values of one measure (measure-families.ts):
+ *
+ *   "The longest ice-core record is Vostok's."              superlative → Vostok must rank first
+ *   "Vostok's record is twice as long as EPICA Dome C's."   multiple → 420 kyr / 800 kyr ≈ 0.5, not 2
+ *
+ * The entity a superlative speaks of is tied to it by the sentence: "<entity> is/has/holds … the
+ * longest …" or "the longest … is/comes from/belongs to <entity>"; a comparison joins the entity
+ * named last before its word with the one named first after it. A claim is flagged only when the
+ * values' intervals settle it; a claim hedged ("one of the longest"), negated, placed in the past
+ * ("at the time", a calendar year) or narrowed to a region or kind ("the longest Greenland record")
+ * is not read. Rule id: `value.rank.<family>`.
+ */
+import { findTerms } from '../../claims/bind.js';
+import type { LoadedPacks, ReferenceValue } from '../../rulepack/types.js';
+import type { FlagDraft, Source } from '../../types.js';
+import { measureFamilies, type FamilyMember, type MeasureFamily } from './measure-families.js';
+import { comparativeOf, findRankWords, OPPOSITE, type FoundRankWord } from './rank-words.js';
+
+/** The sentence places the claim in the past, hedges or denies it: a rank then is not a rank now. */
+const NOT_NOW = /(?<![\p{L}])(?:not|no\s+longer|never|until|once|formerly|previously|used\s+to|at\s+the\s+time|back\s+then|then|one\s+of|among|(?:1[89]|20)\d\d)(?![\p{L}])/iu;
+/** What ties an entity before a superlative to it: a verb, then "the" (and at most two words). */
+const TIES_BEFORE = /(?<![\p{L}])(?:is|was|has|had|holds?|held|gives?|gave|provides?|provided|yields?|yielded|offers?|contains?|boasts?|remains?|remained|keeps?|produced)(?![\p{L}])[^;:.!?]*\bthe(?:\s+[\p{L}'’-]+){0,2}\s*$/iu;
+/** What ties a superlative to an entity after it. */
+const TIES_AFTER = /^[^;:.!?]*?(?:(?<![\p{L}])(?:is|was|comes\s+from|came\s+from|belongs\s+to|belonged\s+to|from|at)|,)\s+(?:the\s+)?$/iu;
+const CLAUSE_END = /[;:.!?]|(?<![\p{L}])(?:but|while|whereas|although)(?![\p{L}])/iu;
+
+interface Named {
+  entity: string;
+  start: number;
+  end: number;
+}
+
+/** Flags the rank and comparison claims of `sentence` that the reference values contradict. */
+export function checkRanks(sentence: string, packs: LoadedPacks): FlagDraft[] {
+  const words = findRankWords(sentence);
+  if (words.length === 0 || NOT_NOW.test(sentence)) return [];
+  const families = measureFamilies(packs);
+  const entities = new Set(families.flatMap((f) => f.members.map((m) => m.entity)));
+  const hits = findTerms(sentence, packs);
+  const named: Named[] = [...hits]
+    .filter(([id]) => entities.has(id))
+    .flatMap(([entity, spans]) => spans.map(([start, end]) => ({ entity, start, end })))
+    .sort((a, b) => a.start - b.start);
+  const flags: FlagDraft[] = [];
+  for (const word of words) {
+    const flag = word.kind === 'superlative' ? superlativeFlag(sentence, word, named, hits, families, packs) : comparisonFlag(sentence, word, named, hits, families, packs);
+    if (flag !== undefined) flags.push(flag);
+  }
+  return flags;
+}
+
+function superlativeFlag(sentence: string, word: FoundRankWord, named: Named[], hits: Map<string, [number, number][]>, families: MeasureFamily[], packs: LoadedPacks): FlagDraft | undefined {
+  const clauseStart = lastClauseEnd(sentence.slice(0, word.start));
+  const before = named.filter((n) => n.end <= word.start && n.start >= clauseStart).at(-1);
+  const after = named.find((n) => n.start >= word.end);
+  let subject: Named | undefined;
+  let phraseEnd: number;
+  if (before !== undefined && TIES_BEFORE.test(sentence.slice(before.end, word.start))) {
+    subject = before;
+    const rest = sentence.slice(word.end);
+    const stop = CLAUSE_END.exec(rest);
+    phraseEnd = word.end + (stop === null ? rest.length : stop.index);
+  } else if (after !== undefined && TIES_AFTER.test(sentence.slice(word.end, after.start))) {
+    subject = after;
+    phraseEnd = after.start;
+  } else return undefined;
+  // "the longest Greenland record", "the deepest core in Japan": a rank within a group the values do not mark.
+  const phrase = sentence.slice(word.end, phraseEnd);
+  if (/(?<![\p{L}])\p{Lu}/u.test(phrase.replace(/[\p{L}\p{N}-]+/gu, (w, at: number) => (named.some((n) => n.start <= word.end + at && word.end + at < n.end) ? 'x' : w)))) return undefined;
+  const family = chooseFamily(word, [subject.entity], hits, families);
+  if (family === undefined) return undefined;
+  const own = family.members.find((m) => m.entity === subject.entity) as FamilyMember;
+  const others = family.members.filter((m) => m !== own);
+  const up = (a: ReferenceValue, b: ReferenceValue): boolean => (word.sign === 1 ? a.low > b.high : a.high < b.low);
+  const surelyAhead = others.filter((m) => up(m.reference, own.reference)).length;
+  const maybeAhead = others.filter((m) => !up(own.reference, m.reference)).length;
+  const rank = word.rank ?? 1;
+  if (rank >= surelyAhead + 1 && rank <= maybeAhead + 1) return undefined;
+  const ordered = [...family.members].sort((a, b) => word.sign * (middle(b.reference) - middle(a.reference)));
+  const right = ordered[rank - 1] ?? ordered[0] as FamilyMember;
+  const list = ordered.map((m) => `${nameOf(m.entity, packs)} ${m.reference.wording}`).join(', ');
+  return {
+    ruleId: `value.rank.${family.name}`,
+    level: 'error',
+    start: subject.start,
+    end: subject.end,
+    reason: `The draft ranks ${nameOf(subject.entity, packs)} ${ordinal(rank)} by ${measureOf(family)}; by the reference values ${nameOf(right.entity, packs)} is: ${list}.`,
+    claimed: { text: sentence.slice(subject.start, subject.end), low: own.reference.low, high: own.reference.high, unit: own.reference.unit },
+    reference: shown(right.reference),
+    correction: `${nameOf(right.entity, packs)} (${right.reference.wording}; ${nameOf(own.entity, packs)}: ${own.reference.wording})`,
+    sources: sourcesOf(family.members.map((m) => m.reference)),
+  };
+}
+
+function comparisonFlag(sentence: string, word: FoundRankWord, named: Named[], hits: Map<string, [number, number][]>, families: MeasureFamily[], packs: LoadedPacks): FlagDraft | undefined {
+  const clauseStart = lastClauseEnd(sentence.slice(0, word.start));
+  const a = named.filter((n) => n.end <= word.start && n.start >= clauseStart).at(-1);
+  const b = named.find((n) => n.start >= word.end && !CLAUSE_END.test(sentence.slice(word.end, n.start)) && n.start - word.end <= 40);
+  if (a === undefined || b === undefined || a.entity === b.entity) return undefined;
+  const family = chooseFamily(word, [a.entity, b.entity], hits, families);
+  if (family === undefined) return undefined;
+  const ra = (family.members.find((m) => m.entity === a.entity) as FamilyMember).reference;
+  const rb = (family.members.find((m) => m.entity === b.entity) as FamilyMember).reference;
+  let wrong: boolean;
+  let phrase: string;
+  if (word.ratio !== undefined) {
+    // "twice as long as" says a / b ≈ 2; "twice as short as" says b / a ≈ 2.
+    const [low, high] = [ra.low / rb.high, ra.high / rb.low];
+    const claimed = word.sign === 1 ? word.ratio : 1 / word.ratio;
+    wrong = claimed * 1.15 < low || claimed * 0.85 > high;
+    const actual = word.sign === 1 ? middle(ra) / middle(rb) : middle(rb) / middle(ra);
+    phrase = `${timesWords(actual)}as ${word.stem} as`;
+  } else {
+    wrong = word.sign === 1 ? ra.high < rb.low : ra.low > rb.high;
+    phrase = `${comparativeOf(OPPOSITE[word.stem] ?? word.stem)} than`;
+  }
+  if (!wrong) return undefined;
+  const [an, bn] = [nameOf(a.entity, packs), nameOf(b.entity, packs)];
+  return {
+    ruleId: `value.rank.${family.name}`,
+    level: 'error',
+    start: word.start,
+    end: word.end,
+    reason: `The draft compares the ${measureOf(family)} of ${an} and ${bn}; the reference values give ${an} ${ra.wording} and ${bn} ${rb.wording}.`,
+    reference: shown(ra),
+    correction: `${phrase} (${an}: ${ra.wording}; ${bn}: ${rb.wording})`,
+    sources: sourcesOf([ra, rb]),
+  };
+}
+
+/** The family the word measures for these entities: one whose dimension fits; on a choice, the one whose measure words are in the sentence. */
+function chooseFamily(word: FoundRankWord, entities: string[], hits: Map<string, [number, number][]>, families: MeasureFamily[]): MeasureFamily | undefined {
+  const fitting = families.filter((f) => word.dimensions.includes(f.dimension) && entities.every((e) => f.members.some((m) => m.entity === e)));
+  if (fitting.length <= 1) return fitting[0];
+  // The rank word's own letters ("long" in "as long as") do not name a measure.
+  const outside = (t: string): boolean => (hits.get(t) ?? []).some(([start, end]) => end <= word.start || start >= word.end);
+  const spoken = fitting.filter((f) => f.measureTerms.some(outside));
+  return spoken.length === 1 ? spoken[0] : undefined;
+}
+
+function lastClauseEnd(text: string): number {
+  let at = 0;
+  for (const m of text.matchAll(new RegExp(CLAUSE_END.source, 'giu'))) at = m.index + m[0].length;
+  return at;
+}
+
+function middle(r: ReferenceValue): number {
+  return r.central ?? (r.low + r.high) / 2;
+}
+
+/** "about half ", "about 1.9 times ", "" (about as long as): a ratio in words, before "as long as". */
+function timesWords(ratio: number): string {
+  if (Math.abs(ratio - 1) < 0.1) return 'about ';
+  if (Math.abs(ratio - 0.5) < 0.06) return 'about half ';
+  if (Math.abs(ratio - 2) < 0.15) return 'about twice ';
+  return `about ${ratio >= 10 ? Math.round(ratio) : Math.round(ratio * 10) / 10} times `;
+}
+
+function nameOf(entity: string, packs: LoadedPacks): string {
+  return packs.term(entity)?.words[0] ?? entity;
+}
+
+function measureOf(f: MeasureFamily): string {
+  return f.name.replace(/-/gu, ' ');
+}
+
+function ordinal(n: number): string {
+  return ['first', 'second', 'third', 'fourth', 'fifth'][n - 1] ?? `${n}th`;
+}
+
+function shown(r: ReferenceValue): NonNullable<FlagDraft['reference']> {
+  return { id: r.id, measures: r.measures, text: r.wording, low: r.low, high: r.high, unit: r.unit };
+}
+
+function sourcesOf(references: ReferenceValue[]): Source[] {
+  const byId = new Map<string, Source>();
+  for (const r of references) for (const s of r.sources) byId.set(s.id, s);
+  return [...byId.values()];
+}

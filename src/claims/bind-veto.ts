@@ -1,0 +1,26 @@
+/**
+ * Which of a quantity's words may veto a value. A change verb that carries its quantity to a level
+ * names the level reached, not a change: in "carbon dioxide fell to about 240 ppm" or "peaks climbed
+ * as high as 350 ppm" the verb does not stop a level value that vetoes change words, since the
+ * quantity's role (bind-role.ts) already says it is a level.
+ *
+ *   "During the coldest spells, carbon dioxide fell to about 240 parts per million."
+ *                                              ^^^^ ── level verb: no veto for the glacial CO2 level
+ */
+import type { Quantity } from '../types.js';
+import type { ReadRole } from './bind-role.js';
+import type { TermHits } from './bind-view.js';
+
+/** What may stand between a level verb and its quantity: "to", "at", or nothing ("climbed as high as"). */
+const LEVEL_LINK = /^\s*(?:to|at)?\s*$/iu;
+
+/** The hits of `view` that may veto a value for `q`: all of them, less the verb that brings a level quantity to its level. */
+export function vetoView(sentence: string, view: TermHits, q: Pick<Quantity, 'start'>, role: ReadRole): TermHits {
+  if (role !== 'level') return view;
+  const kept: TermHits = new Map();
+  for (const [id, spans] of view) {
+    const left = spans.filter(([, end]) => end > q.start || !LEVEL_LINK.test(sentence.slice(end, q.start)));
+    if (left.length > 0) kept.set(id, left);
+  }
+  return kept;
+}
