@@ -8,7 +8,9 @@ import { checkUnits } from './checks/units.js';
 import { FirnlineError } from './errors.js';
 import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
+import { isChecklistText } from './report/checklist-lines.js';
 import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
+import { paragraphWindows } from './prose/paragraph-windows.js';
 import { subjectWordsOf } from './propositions/index.js';
 import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
@@ -54,9 +56,12 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
   const packs = options.packs ?? (await loadPacks(options.packFiles ?? []));
   const topic = createTopicMatcher(packs.topicWords);
   const fromDisk = paths.filter((p) => p !== '-');
-  const { files } =
+  const { files, outside = [] } =
     fromDisk.length > 0 ? await findDrafts(fromDisk, options.cwd, pickDefined(options)) : { files: [] as string[] };
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
+  for (const file of outside) {
+    addUnchecked(result, new FirnlineError('draft-link-outside', 'a link to a file outside the folder being checked, not followed; name the file itself to check it, or exclude the link', { file }), file);
+  }
 
   const levels = options.levels ?? {};
   if (files.some((file) => draftFormat(file) === 'html')) await loadHtmlReader();
@@ -73,7 +78,7 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
     }
     const text = await readDraftText(file, options.cwd);
     if (typeof text !== 'string') {
-      result.skipped.push({ file, reason: text.skipped });
+      addUnchecked(result, text.problem, file);
       continue;
     }
     addText(result, { path: file, text, format }, packs, { topic, levels, projectPath });
@@ -114,7 +119,7 @@ function addText(
 ): void {
   const { path, text, format } = raw;
   result.files.push(path);
-  if (text.trimStart().startsWith(CHECKLIST_MARKER)) {
+  if (text.trimStart().startsWith(CHECKLIST_MARKER) && isChecklistText(text)) {
     result.skipped.push({ file: path, reason: 'sign-off checklist' });
     return;
   }
@@ -122,10 +127,27 @@ function addText(
     result.skipped.push({ file: path, reason: 'names no subject of the packs' });
     return;
   }
-  const draft = 'blocks' in raw ? raw : draftFromText(path, text, format === 'docx' ? 'text' : format);
+  let draft: Draft;
+  try {
+    draft = 'blocks' in raw ? raw : draftFromText(path, text, format === 'docx' ? 'text' : format);
+  } catch (error) {
+    // A draft too deeply nested to read is named and fails the run; the other drafts go on.
+    if (error instanceof FirnlineError) {
+      result.files.pop(); // it was not checked after all
+      addUnchecked(result, error, path);
+      return;
+    }
+    throw error;
+  }
   const { claims, flags } = checkDraft(draft, packs, options);
   result.claims.push(...claims);
   result.flags.push(...flags);
+}
+
+/** Records a draft that was named or walked but could not be checked; it fails the run. */
+function addUnchecked(result: CheckResult, problem: FirnlineError, file: string): void {
+  const { line, column } = problem.where ?? {};
+  result.skipped.push({ file, reason: problem.message, unchecked: true, ...(line === undefined ? {} : { line }), ...(column === undefined ? {} : { column }) });
 }
 
 /**
@@ -143,9 +165,11 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
+    const windowOf = paragraphWindows(paragraph);
     sentences.forEach((sentence, index) => {
+      const { window, at } = windowOf(index);
       const onTopic = topic.test(sentence.text) || subjectMatcherOf(packs).test(sentence.text);
-      const found = examineSentence(paragraph, index, packs, onTopic, context, () => topic.test(paragraph[index - 1] ?? ''));
+      const found = examineSentence(window, at, packs, onTopic, context, () => topic.test(window[at - 1] ?? ''));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -188,6 +212,9 @@ interface SentenceFindings {
   drafts: FlagDraft[];
 }
 
+/** How many earlier sentences of a paragraph the arithmetic and unit checks see. */
+const CONTEXT_SENTENCES = 4;
+
 /** Two numerals apart: the least a sentence needs for its own arithmetic or a restated unit. */
 const TWO_NUMBERS = /\d[^\d]+\d/u;
 
@@ -206,14 +233,20 @@ function examineSentence(
   previousOnTopic: () => boolean,
 ): SentenceFindings | undefined {
   const text = paragraph[index] ?? '';
-  const before = paragraph.slice(0, index);
+  // Only the last few sentences are context (the checks read the one before): copying every
+  // earlier sentence would make a long paragraph quadratic.
+  const before = paragraph.slice(Math.max(0, index - CONTEXT_SENTENCES), index);
   if (!onTopic) {
     const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs) : undefined;
     if (carried !== undefined) return carried;
     if (!TWO_NUMBERS.test(text)) return undefined;
     const quantities = parseQuantities(text);
-    const drafts = [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
-    return drafts.length === 0 ? undefined : { quantities, bindings: [], verdicts: [], drafts };
+    const slips = [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
+    if (slips.length === 0) return undefined;
+    // A slip in a quotation or a marked passage is the quoted writer's, not the draft's.
+    const reading = paragraphReader(paragraph, packs, context)(index);
+    const drafts = reading === undefined ? slips : judgeByStance(slips, reading.stance);
+    return { quantities, bindings: [], verdicts: [], drafts };
   }
   // "four cycles and EPICA Dome C eight": a number whose unit a neighbour states takes that unit.
   const quantities = restoreElidedUnits(text, parseQuantities(text));
@@ -284,7 +317,8 @@ function verdictOf(verdicts: Verdict[]): Verdict {
 function applyLevels(drafts: FlagDraft[], levels: Record<string, Level | 'off'>): FlagDraft[] {
   const kept: FlagDraft[] = [];
   for (const d of drafts) {
-    const level = levels[d.ruleId];
+    // An own property only: a rule id such as `constructor` must not find Object.prototype's.
+    const level = Object.hasOwn(levels, d.ruleId) ? levels[d.ruleId] : undefined;
     if (level === 'off') continue;
     kept.push(level === undefined ? d : { ...d, level });
   }

@@ -266,8 +266,12 @@ export interface CheckResult {
   rules: RuleInfo[];
   claims: Claim[];
   flags: Flag[];
-  /** Files passed over with the reason (binary, no topic term...), for the report. */
-  skipped: { file: string; reason: string }[];
+  /**
+   * Files passed over with the reason (no subject named, a checklist...), for the report. `unchecked`
+   * marks a draft that was named or walked but could not be read (not UTF-8, a special file, too
+   * large, nested too deep): it fails the run; `line` and `column` say where, when known.
+   */
+  skipped: { file: string; reason: string; unchecked?: true; line?: number; column?: number }[];
   /** The rule packs the run checked against, with the date their values were last reviewed. */
   packs?: PackInfo[];
 }

@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import { rename, rm, writeFile } from 'node:fs/promises';
+import { chmod, rename, rm, stat, writeFile } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { FirnlineError } from './errors.js';
 
@@ -11,6 +11,9 @@ export async function writeFileAtomic(file: string, text: string | Uint8Array, w
   const temp = join(dirname(file), `.${basename(file)}.${randomBytes(6).toString('hex')}.tmp`);
   try {
     await writeFile(temp, text, typeof text === 'string' ? { encoding: 'utf8', flag: 'wx' } : { flag: 'wx' });
+    // The replaced file keeps its permissions (a shared ledger may be group-writable).
+    const before = await stat(file).catch(() => undefined);
+    if (before?.isFile() === true) await chmod(temp, before.mode & 0o7777);
     await rename(temp, file);
   } catch (error) {
     await rm(temp, { force: true });

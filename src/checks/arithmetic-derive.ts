@@ -3,6 +3,7 @@
  * a stated value conflicts with a derived one only when no reading of the inputs allows it
  * (a change C conflicts with "from A to B" only if C misses [B.low − A.high, B.high − A.low]).
  */
+import { writtenInterval } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
 
 /** A derived value: a central value and the interval every reading of the inputs allows. */
@@ -49,9 +50,14 @@ export function percentChange(r: Derived, like: number): Derived {
   return facing({ value: (r.value - 1) * 100, low: (r.low - 1) * 100, high: (r.high - 1) * 100 }, like);
 }
 
-/** The ends of an unhedged range of dates ("between 1750 and 2019", "18–11.7 ka"), exactly as stated. */
+/**
+ * The span between the ends of a range of dates ("between 1750 and 2019", "18–11.7 ka"), exactly
+ * as stated. A hedge on the range ("between about 18,000 and 11,500 years ago") is set aside, as
+ * for every input to a sum: the writer subtracted the two numbers written.
+ */
 export function rangeSpan(q: Quantity): Derived | undefined {
-  if (q.hedge !== undefined || !/\d[^\d]*(?:to|–|—|-|and)[^\d]*\d/iu.test(q.text)) return undefined;
-  const span = q.high - q.low;
+  if (!/\d[^\d]*(?:to|–|—|-|and)[^\d]*\d/iu.test(q.text)) return undefined;
+  const { low, high } = q.hedge === undefined ? q : writtenInterval(q);
+  const span = high - low;
   return { value: span, low: span, high: span };
 }

@@ -20,10 +20,10 @@ const START_WORDS = list(['began', 'begun', 'begins', 'started', 'starts', 'set 
 /** A start word, perhaps with a short phrase after it (up to seven words): "began at", "began to withdraw from the moor". */
 const START_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:${START_WORDS})(?:${S}+[\p{L}'’-]+){0,7}${S}*$`, 'iu');
 const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at|by)${S}*$`, 'iu');
-const CHANGE_NOUNS = ['rise', 'increase', 'drop', 'fall', 'decline', 'change', 'jump', 'gain', 'loss', 'swing', 'difference', 'warming', 'cooling', 'growth', 'decrease', 'reduction'];
+const CHANGE_NOUNS = ['rise', 'increase', 'drop', 'fall', 'decline', 'change', 'jump', 'gain', 'loss', 'swing', 'difference', 'warming', 'cooling', 'growth', 'decrease', 'reduction', 'climb', 'leap', 'surge', 'plunge', 'slide'];
 const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
 const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
-const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down']);
+const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down', 'added', 'extra']);
 const SPAN_OF_PAIR = before(['lasting', 'lasted', 'lasts', 'spanning', 'spanned', 'spans', 'span of', 'period of', 'interval of', 'stretch of', 'over', 'across', 'within', 'took', 'taking', 'during', 'for', 'or', 'that is', 'i.e.', 'i.e.,', '(', '—']);
 const SPAN_OF_CHANGE = before(['lasting', 'spanning', 'span of', 'period of', 'over', 'across', 'within', 'in', 'took', 'taking', 'during', 'for', 'after', '(', 'over the', 'across the', 'within the', 'during the']);
 /** Words that equate an amount with the rate it comes to ("80 ppm of CO2 would be 1.3 ppm per century"). */
@@ -33,14 +33,14 @@ const COMES_TO = new RegExp(String.raw`^[^;:.!?,]{0,30}?(?:^|[^\p{L}])(?:would${
  * dash, then perhaps "or", "that is", and a short noun phrase ending in "of" ("a cold spell of").
  */
 const PAIR_GAP = new RegExp(
-  String.raw`^${S}*[,:;(—–]${S}*(?:(?:or|that is|i\.e\.)[,\s\u00A0]+)?(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+)?$`,
+  String.raw`^${S}*[,:;(—–]${S}*(?:(?:or|that is|i\.e\.|so|thus|hence|so${S}+call${S}+it|call${S}+it|in${S}+all|all${S}+told)[,\s\u00A0]+)?(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+)?$`,
   'iu',
 );
 const NOT_A_SPAN = before(['past', 'last', 'previous', 'preceding', 'next', 'every', 'each', 'per']);
-const RATIO_AFTER = after([...CHANGE_NOUNS, 'higher', 'larger', 'greater', 'more', 'lower', 'less', 'smaller', 'above', 'below', 'as high', 'as large', 'as much', 'as great', 'as long']);
+const RATIO_AFTER = after([...CHANGE_NOUNS, 'faster', 'slower', 'quicker', 'higher', 'larger', 'greater', 'more', 'lower', 'less', 'smaller', 'above', 'below', 'as high', 'as large', 'as much', 'as great', 'as long']);
 const RATIO_VERB = /^(?:doubled|tripled|quadrupled|halved|doubling|tripling|halving|[\p{N}.]+[-\s]?fold|\p{L}+[-\s]?fold)$/iu;
 /** "higher than", "more CO2 than", "above": a comparison, with up to three words before "than". */
-const COMPARATIVE_AFTER = new RegExp(String.raw`^[\s\u00A0-]*(?:(?:higher|more|greater|larger|lower|less|smaller)(?:${S}+[^\s.;,]+){0,3}${S}+than|above|below)(?![\p{L}])`, 'iu');
+const COMPARATIVE_AFTER = new RegExp(String.raw`^[\s\u00A0-]*(?:(?:higher|more|greater|larger|lower|less|smaller|faster|slower|quicker)(?:${S}+[^\s.;,]+){0,3}${S}+than|above|below)(?![\p{L}])`, 'iu');
 
 /** A from-to pair: indices of the two ends in the quantity list. */
 export interface Pair {
@@ -127,4 +127,34 @@ export function isStatedRatio(text: string, q: Quantity): boolean {
 /** True when `q` is followed by a comparison ("55 percent higher than", "twice as large as"). */
 export function comparesToNext(text: string, q: Quantity): boolean {
   return COMPARATIVE_AFTER.test(tail(text, q)) || /^[\s\u00A0]+as[\s\u00A0]+\p{L}+[\s\u00A0]+as(?![\p{L}])/iu.test(tail(text, q));
+}
+
+/** "[76 ppm] over [6,000 years]": an amount followed at once by the time it took is a change. */
+const OVER_SPAN = new RegExp(String.raw`^${S}+(?:over|in|across|within|during)${S}+(?:the${S}+)?$`, 'iu');
+
+/** True when `amount` is followed at once by `span`, the time it took: "76 ppm over 6,000 years". */
+export function changesOver(text: string, amount: Quantity, span: Quantity): boolean {
+  return span.dimension === 'duration' && amount.end <= span.start && OVER_SPAN.test(text.slice(amount.end, span.start));
+}
+
+/** "one third of [today's] 420 ppm", "half of the 280 ppm": a fraction taken of the quantity after it. */
+const FRACTION_OF = new RegExp(String.raw`^${S}+of(?:${S}+(?!than)[^\s\d.;:,()]+){0,3}${S}+$`, 'iu');
+
+/** True when ratio `q` is a fraction of the quantity `next` that follows it. */
+export function fractionOf(text: string, q: Quantity, next: Quantity): boolean {
+  return q.dimension === 'ratio' && q.value < 1 && q.end <= next.start && FRACTION_OF.test(text.slice(q.end, next.start));
+}
+
+/**
+ * A change in apposition after the values it joins: ", a swing of", ": a difference of", "— a
+ * climb of". The words between end in a change noun and "of".
+ */
+const APPOSED_CHANGE = new RegExp(
+  String.raw`^[^\d;.!?]{0,40}?[,:(—–]${S}*(?:(?:that is|or|so|thus|i\.e\.)[,\s\u00A0]+)?(?:(?:a|an|the|some)${S}+)?(?:[\p{L}-]+${S}+)?(?:${list(CHANGE_NOUNS)}|gap|contrast|range)${S}+of${S}*$`,
+  'iu',
+);
+
+/** True when `change` follows `level` as an apposition naming the change between them. */
+export function isApposedChange(text: string, level: Quantity, change: Quantity): boolean {
+  return level.end <= change.start && APPOSED_CHANGE.test(text.slice(level.end, change.start));
 }

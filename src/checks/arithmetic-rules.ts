@@ -7,8 +7,11 @@
 import { writtenInterval as w } from '../quantities/index.js';
 import type { Dimension, Quantity } from '../types.js';
 import { changesAcross, type Previous } from './arithmetic-context.js';
-import { divide, facing, invert, minus, percentChange, rangeSpan, size, type Derived } from './arithmetic-derive.js';
-import { comesToRate, comparesToNext, findPairs, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
+import { divide, facing, invert, minus, percentChange, size, type Derived } from './arithmetic-derive.js';
+import { spanOfDates } from './arithmetic-spans.js';
+import { durationsAcross, paceRatiosAcross } from './arithmetic-across.js';
+import { writtenSums } from './arithmetic-equations.js';
+import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
 export interface Finding {
@@ -41,6 +44,30 @@ const words = (a: Quantity, b: Quantity): string => `from ${a.text} to ${b.text}
 const others = (qs: Quantity[], p: Pair | undefined): Quantity[] => qs.filter((_, i) => p === undefined || (i !== p.from && i !== p.to));
 
 function changes(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
+  return [...pairChanges(text, qs, pairs), ...apposedChanges(text, qs, pairs), ...writtenSums(text, qs)];
+}
+
+/** Dimensions whose two levels name a change between them, and the dimension of that change. */
+const LEVELS: Partial<Record<Dimension, Dimension>> = { concentration: 'concentration', temperature: 'temperature-change', length: 'length' };
+
+/**
+ * "it sat near 180 ppm in the cold phases and near 280 ppm in the warm ones, a swing of some 140
+ * ppm": exactly two levels of one dimension, no from-to pair, and a change in apposition right
+ * after the second. The change is the size of their difference, whichever came first.
+ */
+function apposedChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
+  return Object.entries(LEVELS).flatMap(([level, changeDim]) => {
+    if (pairs.some((p) => qs[p.from]?.dimension === level)) return [];
+    const levels = qs.filter((q) => q.dimension === level && !isStatedChange(text, q));
+    if (levels.length !== 2) return [];
+    const [a, b] = levels as [Quantity, Quantity];
+    const stated = only(qs.filter((q) => q.dimension === changeDim && q !== a && q !== b && isApposedChange(text, b, q)));
+    if (stated === undefined || !isStatedChange(text, stated)) return [];
+    return [{ stated, computed: facing(size(minus(w(b), w(a))), stated.value), measures: `the difference between ${a.text} and ${b.text}` }];
+  });
+}
+
+function pairChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return pairs.flatMap((p) => {
     const [a, b] = ends(qs, p);
     const stated = only(others(qs, p).filter((q) => q.dimension === DIFFERENCE[a.dimension] && isStatedChange(text, q)));
@@ -49,20 +76,8 @@ function changes(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   });
 }
 
-function spanOfDates(text: string, qs: Quantity[], pairs: Pair[]): { span: Derived; after: number; measures: string }[] {
-  const fromPairs = pairs.filter((p) => qs[p.from]?.dimension === 'age').map((p) => {
-    const [a, b] = ends(qs, p);
-    return { span: size(minus(w(a), w(b))), after: b.end, measures: `the time ${words(a, b)}` };
-  });
-  const fromRanges = qs.filter((q) => q.dimension === 'age').flatMap((q) => {
-    const span = rangeSpan(q);
-    return span === undefined ? [] : [{ span, after: q.end, measures: `the time ${q.text}` }];
-  });
-  return [...fromPairs, ...fromRanges];
-}
-
 function durations(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
-  return spanOfDates(text, qs, pairs).flatMap(({ span, after, measures }) => {
+  return spanOfDates(qs, pairs).flatMap(({ span, after, measures }) => {
     const stated = only(qs.filter((q) => q.dimension === 'duration' && isSpanOfPair(text, q, after)));
     return stated === undefined ? [] : [{ stated, computed: span, measures }];
   });
@@ -72,12 +87,14 @@ function rates(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return qs.flatMap((rate) => {
     const changeDim = RATE_OF[rate.dimension];
     if (changeDim === undefined) return [];
-    const explicit = only(qs.filter((q) => q.dimension === changeDim && (isStatedChange(text, q) || comesToRate(text, q, rate))));
+    const paired = new Set(pairs.flatMap((p) => [qs[p.from], qs[p.to]]));
+    const over = (q: Quantity): boolean => !paired.has(q) && qs.some((d) => changesOver(text, q, d));
+    const explicit = only(qs.filter((q) => q.dimension === changeDim && (isStatedChange(text, q) || comesToRate(text, q, rate) || over(q))));
     const pair = only(pairs.filter((p) => DIFFERENCE[qs[p.from]?.dimension ?? 'number'] === changeDim));
     const pairEnds = pair === undefined ? undefined : ends(qs, pair);
     const change = explicit !== undefined ? w(explicit) : pairEnds === undefined ? undefined : minus(w(pairEnds[1]), w(pairEnds[0]));
     const spanOfChange = only(qs.filter((q) => q.dimension === 'duration' && isSpanOfChange(text, q)));
-    const duration = spanOfChange !== undefined ? w(spanOfChange) : only(spanOfDates(text, qs, pairs))?.span;
+    const duration = spanOfChange !== undefined ? w(spanOfChange) : only(spanOfDates(qs, pairs))?.span;
     if (change === undefined || duration === undefined) return [];
     const computed = divide(size(change), duration);
     return computed === undefined ? [] : [{ stated: rate, computed: facing(computed, rate.value), measures: 'the change divided by the time it took' }];
@@ -87,8 +104,10 @@ function rates(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
 function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   const pair = only(pairs.filter((p) => RATIOED.includes(qs[p.from]?.dimension ?? 'number')));
   return qs.flatMap((stated, i) => {
+    const after = qs.slice(i + 1).find((q) => RATIOED.includes(q.dimension));
+    const fraction = after !== undefined && fractionOf(text, stated, after);
     const isPercent = stated.dimension === 'percent' && (isStatedChange(text, stated) || comparesToNext(text, stated));
-    const isRatio = stated.dimension === 'ratio' && (isStatedRatio(text, stated) || comparesToNext(text, stated));
+    const isRatio = stated.dimension === 'ratio' && (isStatedRatio(text, stated) || comparesToNext(text, stated) || fraction);
     if (!isPercent && !isRatio) return [];
     let pairRatio: Derived | undefined;
     let measures: string;
@@ -96,10 +115,11 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
       const [a, b] = ends(qs, pair);
       pairRatio = divide(w(b), w(a));
       measures = `${isPercent ? 'the percentage change' : 'the ratio'} ${words(a, b)}`;
+    } else if (after === undefined) {
+      return isPercent ? percentOfBase(text, qs, stated) : [];
     } else {
-      const after = qs.slice(i + 1).find((q) => RATIOED.includes(q.dimension));
-      const x = after === undefined ? undefined : only(qs.filter((q) => q !== after && q !== stated && q.dimension === after.dimension));
-      if (after === undefined || x === undefined || !comparesToNext(text, stated)) return [];
+      const x = only(qs.filter((q) => q !== after && q !== stated && q.dimension === after.dimension));
+      if (x === undefined || !(comparesToNext(text, stated) || fraction)) return [];
       pairRatio = divide(w(x), w(after));
       measures = `${isPercent ? 'the percentage difference' : 'the ratio'} of ${x.text} to ${after.text}`;
     }
@@ -110,12 +130,29 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   });
 }
 
+/**
+ * "Measured against the 280 ppm of 1750, that is about 140 ppm added, a jump of 50 percent": a
+ * percentage change after one stated change and one level of its dimension is the change as a
+ * share of the level. Both must come before the percentage, and be the only ones of their kind.
+ */
+function percentOfBase(text: string, qs: Quantity[], stated: Quantity): Finding[] {
+  const before = qs.filter((q) => q.end <= stated.start && RATIOED.includes(q.dimension));
+  const change = only(before.filter((q) => isStatedChange(text, q)));
+  if (change === undefined) return [];
+  const base = only(before.filter((q) => q !== change && q.dimension === change.dimension));
+  if (base === undefined || isStatedChange(text, base) || qs.some((q) => q !== base && q !== change && q.dimension === change.dimension)) return [];
+  const share = divide(size(w(change)), w(base));
+  if (share === undefined) return [];
+  const computed = facing({ value: share.value * 100, low: share.low * 100, high: share.high * 100 }, stated.value);
+  return [{ stated, computed, measures: `${change.text} as a percentage of ${base.text}` }];
+}
+
 /** The arithmetic rule table. */
 export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: (t, qs, p, prev) => [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)] },
-  { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: durations },
+  { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => [...durations(t, qs, p), ...durationsAcross(t, qs, prev)] },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took.', derive: rates },
-  { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: ratios },
+  { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev) => [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)] },
 ];
 
 export { findPairs };

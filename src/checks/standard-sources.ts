@@ -65,5 +65,21 @@ export const NOAA_2024: Source = resolveSource({
   how: 'read in the source: global mean CO2 of 419.3 ppm in 2023, up 2.8 ppm, more than 50% above pre-industrial (title and numbers confirmed; the page address is from memory)',
 });
 
+/** The Last Glacial Maximum, about 26,500 to 19,000 years ago. The same entry as the built-in pack's `clark-2009`. */
+export const CLARK_2009: Source = {
+  id: 'clark-2009',
+  cite: 'Clark, P. U., Dyke, A. S., Shakun, J. D., Carlson, A. E., Clark, J., Wohlfarth, B., Mitrovica, J. X., Hostetler, S. W. & McCabe, A. M. (2009). The Last Glacial Maximum. Science 325, 710-714.',
+  doi: '10.1126/science.1172873',
+  how: 'verified: https://pennds.org/archaeobib/items/show/26610',
+};
+
+/** The oldest dated ice, about 2.7 million years (Allan Hills blue ice). The same entry as the built-in pack's `yan-2019`. */
+export const YAN_2019: Source = {
+  id: 'yan-2019',
+  cite: 'Yan, Y., Bender, M. L., Brook, E. J., Clifford, H. M., Kemeny, P. C., Kurbatov, A. V., Mackay, S., Mayewski, P. A., Ng, J., Severinghaus, J. P. & Higgins, J. A. (2019). Two-million-year-old snapshots of atmospheric gases from Antarctic ice. Nature 574, 663-666 (pages from memory).',
+  doi: '10.1038/s41586-019-1692-3',
+  how: 'verified: https://collaborate.princeton.edu/en/publications/two-million-year-old-snapshots-of-atmospheric-gases-from-antarcti; verified: Discover magazine report of the 2017 Goldschmidt announcement: https://www.discovermagazine.com/ancient-antarctic-ice-discovered-18047',
+};
+
 /** Every standard source, by id, for reporters and `firnline explain`. */
-export const STANDARD_SOURCES: readonly Source[] = [NIST_SP_811, BP_CONVENTION, B2K_CONVENTION, LUTHI_2008, NOAA_2024];
+export const STANDARD_SOURCES: readonly Source[] = [NIST_SP_811, BP_CONVENTION, B2K_CONVENTION, LUTHI_2008, NOAA_2024, CLARK_2009, YAN_2019];

@@ -47,19 +47,34 @@ const LEVEL_BEFORE = new RegExp(
   'iu',
 );
 
-/** True when the nearest gas named before `at` is CO2. */
-function nearestGasIsCo2(text: string, at: number): boolean {
+/** True when the nearest gas named before `at` is CO2, or no gas is named and the paragraph's CO2 is meant. */
+function nearestGasIsCo2(text: string, at: number, co2ByContext = false): boolean {
   const named = [...text.slice(0, at).matchAll(GAS)];
+  if (named.length === 0 && co2ByContext) return true;
   return named[named.length - 1]?.groups?.['co2'] !== undefined;
 }
 
+/** "Expressed as a share of the air, today's level is ...": a share of the air named in words. */
+const SHARE_OF_AIR = new RegExp(String.raw`(?:share|fraction|proportion|percentage)${S}+of${S}+${AIR}|of${S}+${AIR}`, 'iu');
+const PPM_WORDS = /(?:ppmv?|parts[\s\u00A0]+per[\s\u00A0]+million)(?![\p{L}])/iu;
+
+/**
+ * True when a sentence that names no gas speaks of CO2 by context: it states a share of the air,
+ * and the sentence before gives a level in ppm and names no other gas ("... the annual increase
+ * was under one ppm. Expressed as a share of the air, today's level is about 0.42 percent.").
+ */
+function co2FromContext(text: string, previous: string | undefined): boolean {
+  if (previous === undefined || [...text.matchAll(GAS)].length > 0 || !SHARE_OF_AIR.test(text)) return false;
+  return PPM_WORDS.test(previous) && !OTHER_GAS.test(previous);
+}
+
 /** True when percentage `q` states CO2's share of the air. */
-function isCo2Share(text: string, q: Quantity): boolean {
+function isCo2Share(text: string, q: Quantity, byContext = false): boolean {
   const before = text.slice(Math.max(0, q.start - 24), q.start);
   const after = text.slice(q.end, q.end + 40);
   if (isStatedChange(text, q) || comparesToNext(text, q) || RATE_AFTER.test(after) || OF_SOMETHING_ELSE.test(after)) return false;
-  if (SHARE_AFTER.test(after)) return nearestGasIsCo2(text, q.start);
-  return nearestGasIsCo2(text, q.start) && LEVEL_BEFORE.test(before) && !CHANGE_SUBJECT.test(text.slice(0, q.start));
+  if (SHARE_AFTER.test(after)) return nearestGasIsCo2(text, q.start, byContext);
+  return nearestGasIsCo2(text, q.start, byContext) && LEVEL_BEFORE.test(before) && !CHANGE_SUBJECT.test(text.slice(0, q.start));
 }
 
 /** The power of ten, nearest first, that brings `ppm` into the plausible range (0 when none does). */
@@ -87,13 +102,14 @@ function percentSlip(q: Quantity): UnitFinding | undefined {
 }
 
 /** CO2 levels in the wrong unit, except the quantities in `restated` (the restatement check has them). */
-export function co2UnitSlips(text: string, qs: Quantity[], restated: ReadonlySet<Quantity>): UnitFinding[] {
-  if (!CO2.test(text)) return [];
+export function co2UnitSlips(text: string, qs: Quantity[], restated: ReadonlySet<Quantity>, previous?: string): UnitFinding[] {
+  const byContext = co2FromContext(text, previous);
+  if (!CO2.test(text) && !byContext) return [];
   const deepTime = DEEP_TIME.test(text) || qs.some((q) => q.dimension === 'age' && q.low >= QUATERNARY_BASE_YR);
   return qs.flatMap((q): UnitFinding[] => {
     if (restated.has(q)) return [];
     if (q.dimension === 'percent') {
-      const slip = isCo2Share(text, q) && !deepTime ? percentSlip(q) : undefined;
+      const slip = isCo2Share(text, q, byContext) && !deepTime ? percentSlip(q) : undefined;
       return slip === undefined ? [] : [slip];
     }
     const before = text.slice(Math.max(0, q.start - 24), q.start);

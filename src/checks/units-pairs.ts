@@ -10,6 +10,7 @@
  * The second is the conversion the unit checks verify, except that a °F figure is always taken as
  * the conversion of its °C or K partner, whichever comes first.
  */
+import { CHANGE_SUBJECT_NOUNS, RESTATING_VERB_PATTERN } from '../quantities/reading-cues.js';
 import type { Quantity } from '../types.js';
 
 const S = String.raw`[\s\u00A0]`;
@@ -18,7 +19,7 @@ const JOINER = new RegExp(
   'iu',
 );
 /** Words that end a loose gap and announce the same amount again ("which readers would call"). */
-const LEAD = String.raw`(?:or|i\.e\.,?|that is,?|that's|that’s|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|(?:would|might|will|can|could)${S}+call|call${S}+it|=|\(|—)`;
+const LEAD = String.raw`(?:(?:or|i\.e\.,?|that is,?|that's|that’s|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|(?:would|might|will|can|could)${S}+call|call${S}+it|=|\(|—)(?:${S}*(?:a|an)${S}+(?:${CHANGE_SUBJECT_NOUNS.join('|')})${S}+of)?|${RESTATING_VERB_PATTERN})`;
 const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}${S}*$`, 'iu');
 /** A loose gap: short, with no clause break that would end the thought (no other quantity: they are adjacent). */
 const LOOSE_GAP = /^[^;:!?]{0,60}$/u;

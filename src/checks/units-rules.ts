@@ -4,11 +4,12 @@
  * wrong unit are also caught on their own (units-co2-share.ts).
  */
 import { afterMatcher, beforeMatcher } from '../quantities/reading-cues.js';
-import { convert, formatQuantity, TEMPERATURE_CUES } from '../quantities/index.js';
+import { convert, formatQuantity, namesChangeBefore, TEMPERATURE_CUES } from '../quantities/index.js';
 import type { Dimension, Level, Quantity, Source } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
 import { B2K_CONVENTION, BP_CONVENTION, NIST_SP_811 } from './standard-sources.js';
 import { co2UnitSlips } from './units-co2-share.js';
+import { scaleSlips } from './units-scale.js';
 import { findRestatements, type PreviousSentence, type Restatement } from './units-pairs.js';
 
 /** A quantity whose unit use is in doubt, with the value it should have. */
@@ -65,7 +66,7 @@ function restated(dimensions: Dimension[], sources: (a: Quantity, b: Quantity) =
 function percentPpm(text: string, qs: Quantity[], previous?: PreviousSentence): UnitFinding[] {
   const pairs = restatementsOf(['concentration', 'percent'], text, qs, previous);
   const found = restated(['concentration', 'percent'], nist, () => '1% of the air is 10,000 ppm.')(text, qs, previous);
-  return [...found, ...co2UnitSlips(text, qs, new Set(pairs.flatMap((p) => [p.first, p.second])))];
+  return [...found, ...co2UnitSlips(text, qs, new Set(pairs.flatMap((p) => [p.first, p.second])), previous?.text)];
 }
 
 const CHANGE_CUES = TEMPERATURE_CUES.filter((c) => c.reading === 'temperature-change');
@@ -82,16 +83,30 @@ function cuedAsChange(text: string, { first, second }: Restatement): boolean {
   const [a, b] = first.start < second.start ? [first, second] : [second, first];
   const before = text.slice(Math.max(0, a.start - 48), a.start);
   const afters = [a, b].map((q) => text.slice(q.end, q.end + 48).replace(/^[\s\u00A0]*[)\],]/u, ''));
-  return /^[+]/u.test(a.text) || CHANGE_BEFORE.some((re) => re.test(before)) || afters.some((t) => CHANGE_AFTER.some((re) => re.test(t)));
+  const clause = text.slice(Math.max(0, a.start - 160), a.start);
+  return /^[+]/u.test(a.text) || CHANGE_BEFORE.some((re) => re.test(before)) || namesChangeBefore(clause) || afters.some((t) => CHANGE_AFTER.some((re) => re.test(t)));
 }
 
 /** Says what a °F figure that added 32 to a change did, when that is what happened. */
 function temperatureChangeWhy(a: Quantity, b: Quantity): string {
+  if (a.statedUnit !== 'degF' && b.statedUnit !== 'degF') return kelvinChangeWhy(a, b);
   const right = formatQuantity(a.value, 'K', 'degF');
   const asReading = convert(a.value, 'degC', 'degF', 'temperature');
   const added32 = b.statedUnit === 'degF' && Math.abs(b.value * 1.8 - asReading) <= Math.max(1, Math.abs(asReading) * 0.05);
   const slip = added32 ? ` ${b.text} is ${a.text} converted as a reading (× 1.8 + 32).` : '';
   return `A change of ${a.text} is a change of ${right}: differences convert by 9/5 alone; the 32 belongs to readings.${slip}`;
+}
+
+/**
+ * A change in °C restated in K (or back): the same number, since 1 K and 1 °C are the same
+ * difference. When the K figure is the change read as a reading (+ 273.15: "a cooling of 22 °C, a
+ * drop of some 295 K"), the reason says so.
+ */
+function kelvinChangeWhy(a: Quantity, b: Quantity): string {
+  const offset = convert(0, 'degC', 'K', 'temperature');
+  const added = b.statedUnit === 'K' && Math.abs(b.value - (a.value + offset)) <= Math.max(2, Math.abs(b.value) * 0.05);
+  const slip = added ? ` ${b.text} is ${a.text} converted as a reading (+ 273.15).` : '';
+  return `A change of ${a.text} is a change of ${formatQuantity(a.value, 'K', 'K')}: as a difference 1 K equals 1 °C; the 273.15 belongs to readings.${slip}`;
 }
 
 const nist = (): Source[] => [NIST_SP_811];
@@ -101,7 +116,7 @@ const eras = (a: Quantity, b: Quantity): Source[] => (a.statedUnit.includes('b2k
 export const UNIT_RULES: readonly UnitRule[] = [
   { id: 'unit.percent-ppm', summary: 'A CO2 level restated between ppm and percent converts at 1% = 10,000 ppm; a CO2 share in percent is a level someone has measured.',
     find: percentPpm },
-  { id: 'unit.temperature-difference', summary: 'A temperature change restated in °F is 1.8 times the change in °C or K, with no 32 added.',
+  { id: 'unit.temperature-difference', summary: 'A temperature change restated in °F is 1.8 times the change in °C or K, with no 32 added; restated in K it is the same number as in °C, with no 273.15 added.',
     find: restated(['temperature-change'], nist, temperatureChangeWhy, cuedAsChange) },
   { id: 'unit.temperature', summary: 'A temperature reading restated in °F is 1.8 × °C + 32.',
     find: restated(['temperature'], nist, () => 'A temperature reading converts as °F = 1.8 × °C + 32.') },
@@ -109,6 +124,8 @@ export const UNIT_RULES: readonly UnitRule[] = [
     find: restated(['age'], eras, () => 'BP counts years before AD 1950 and b2k before AD 2000; Y BCE is 1949 + Y years before 1950 (there is no year 0).') },
   { id: 'unit.length', summary: 'A length restated in feet or miles converts at 1 ft = 0.3048 m and 1 mile = 1609.344 m.',
     find: restated(['length'], nist, () => '1 ft = 0.3048 m and 1 mile = 1609.344 m exactly.') },
+  { id: 'unit.age-scale', summary: 'A date or span of the last glacial cycle or of an ice core written in millions of years where thousands were meant (Ma for ka, million for thousand).',
+    find: (text, qs) => scaleSlips(text, qs) },
   { id: 'unit.duration', summary: 'A duration restated in another unit (kyr, years, centuries) converts by powers of ten.',
     find: restated(['duration'], nist, () => '1 kyr = 1,000 years; 1 century = 100 years; 1 millennium = 1,000 years.') },
 ];

@@ -13,7 +13,9 @@ import type { Order } from './types.js';
 /** Order words that name no second thing: the other one is understood ("CO2 came second"). */
 const ABSOLUTE = /^(?:first|came first|went first|start first|rise first|move first|earlier|beforehand|ahead|second|come second|later|afterwards|only later|delay|delayed|trailing|laggard|head start|catch up|tag along|in its wake)$/u;
 const NOUN_BEFORE = new Set(['the', 'a', 'an', 'this', 'that', 'its', 'co2', 'co₂', 'famous', 'observed', 'supposed', 'long', 'short', 'same', 'such', 'any', 'no']);
-const DURATIONS = /^(?:\d[\d,.]*|years?|centur(?:y|ies)|millenni(?:um|a)|decades?|kyr|hundreds?|thousands?|few|several)$/u;
+const DURATIONS = /^(?:years?|centur(?:y|ies)|millenni(?:um|a)|decades?|kyr|hundreds?|thousands?)$/u;
+/** Order words that are verbs: with no object they still set their subject against the other thing. */
+const ORDER_VERB = /^(?:lag|lags|lagged|lagging|follow|follows|followed|following|trail|trails|trailed|trailing|lead|leads|led|leading|precede[sd]?|preceding|lag behind|lagged behind)$/u;
 const COUNTERPART: Record<string, string> = { co2: 'temperature', temperature: 'co2' };
 
 /** The orders one sentence states (a denied order states none). */
@@ -60,8 +62,9 @@ function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Orde
     return withRelation(h.key, first, other, s, a, span);
   }
   b = thingAfter(s, h.last, 6);
-  // "CO2 lagged, so...": an order verb with no object sets its subject against the other one.
-  if (a !== undefined && b === undefined && h.key !== 'together') {
+  // "CO2 lagged, so...": an order verb with no object sets its subject against the other one (a
+  // preposition with no object, "colder than before industrialisation", names a time, not an order).
+  if (a !== undefined && b === undefined && h.key !== 'together' && ORDER_VERB.test(phrase)) {
     const first = kind(a);
     const other = first === undefined ? undefined : COUNTERPART[first];
     return first === undefined || other === undefined ? undefined : withRelation(h.key, first, other, s, a, span);

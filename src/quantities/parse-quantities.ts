@@ -11,7 +11,7 @@ import { findAtoms } from './find-atoms.js';
 import { HEDGE_PREFIX_PATTERN, hedgeAfter, hedgeBefore, type HedgeMatch } from './find-hedge.js';
 import { groupParts, partsOf, type Group } from './group-atoms.js';
 import { applyRule, intervalRule } from './interval-rules.js';
-import { isCalendarCue, readKiloAnnum, readTemperature } from './reading-cues.js';
+import { isCalendarCue, readKiloAnnum, readTemperature, RESTATING_VERB_PATTERN } from './reading-cues.js';
 import { CANONICAL_UNIT, UNIT_TABLE, type UnitDef } from './unit-table.js';
 
 const S = String.raw`[\s\u00A0]`;
@@ -21,6 +21,8 @@ const EQUIVALENT = new RegExp(
   String.raw`^${S}*(?:\(|,?${S}*or${S}+|\/|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|,?${S}*that['’]s${S}+|,?${S}*which is${S}+|,?${S}*in other words,?${S}*|=${S}*|,${S}*)(?:(?:${HEDGE_PREFIX_PATTERN})${S}*)?$`,
   'iu',
 );
+/** A looser restatement: a few words, then a restating verb ("colder than before, which works out at 38 °F"). */
+const EQUIVALENT_BY_VERB = new RegExp(String.raw`^[^\d;:!?]{0,60}?(?:^|[^\p{L}])(?:${RESTATING_VERB_PATTERN})${S}+(?:(?:${HEDGE_PREFIX_PATTERN})${S}*)?$`, 'iu');
 const CE = UNIT_TABLE.find((d) => d.id === 'CE') as UnitDef;
 const NUMBER = UNIT_TABLE.find((d) => d.dimension === 'number') as UnitDef;
 const RATIO = UNIT_TABLE.find((d) => d.dimension === 'ratio') as UnitDef;
@@ -59,12 +61,13 @@ function readGroup(text: string, g: Group, previous: Quantity | undefined): Read
   let def = unit.defs[0] as UnitDef;
   if (unit.defs.length > 1) {
     const dims = unit.defs.map((d) => d.dimension);
-    const equivalent = previous !== undefined && EQUIVALENT.test(text.slice(previous.end, g.prefixStart ?? a.start));
+    const gap = previous === undefined ? '' : text.slice(previous.end, g.prefixStart ?? a.start);
+    const equivalent = previous !== undefined && (EQUIVALENT.test(gap) || EQUIVALENT_BY_VERB.test(gap));
     let wanted: Dimension;
     if (dims.includes('temperature')) {
       wanted = equivalent && (previous.dimension === 'temperature' || previous.dimension === 'temperature-change')
         ? previous.dimension
-        : readTemperature(before, after, a.sign, unit.defs[0]?.id ?? '', a.value);
+        : readTemperature(before, after, a.sign, unit.defs[0]?.id ?? '', a.value, text.slice(Math.max(0, cueEnd - 160), cueEnd));
     } else wanted = readKiloAnnum(before, after);
     def = unit.defs.find((d) => d.dimension === wanted) ?? def;
   }

@@ -22,6 +22,31 @@ export const TEMPERATURE_CUES: readonly Cue[] = [
 ];
 
 /**
+ * A change named as the subject of the clause, then its value: "the temperature change in
+ * Antarctica between glacial and interglacial was about 9 °C", "the warming across the
+ * deglaciation amounted to 8 °C". The value is a change even after "was" or "is".
+ */
+export const CHANGE_SUBJECT_NOUNS: readonly string[] = ['change', 'difference', 'warming', 'cooling', 'rise', 'drop', 'fall', 'swing', 'amplitude', 'anomaly', 'shift', 'increase', 'decrease'];
+const CHANGE_SUBJECT = new RegExp(
+  String.raw`(?:^|[^\p{L}])(?:${CHANGE_SUBJECT_NOUNS.join('|')})(?:[\s\u00A0]+(?:in|of|between|across|from|during|over|at)[\s\u00A0][^,;:()]{0,80}?)?[\s\u00A0]+(?:was|were|is|are|amounted[\s\u00A0]+to|amounts[\s\u00A0]+to|came[\s\u00A0]+to|comes[\s\u00A0]+to|reached|measured)[\s\u00A0]*$`,
+  'iu',
+);
+
+/** True when the clause before a temperature names a change as its subject and the verb joins them. */
+export function namesChangeBefore(clause: string): boolean {
+  const own = clause.slice(Math.max(0, ...[',', ';', ':', '(', '.'].map((c) => clause.lastIndexOf(c) + 1)));
+  return CHANGE_SUBJECT.test(own);
+}
+
+/**
+ * Words that say the next amount is the one before in other words, when a verb does it: "which
+ * works out at", "equals", "corresponds to". A change noun may follow: "equals a warming of".
+ */
+export const RESTATING_VERBS: readonly string[] = ['works out at', 'works out to', 'work out at', 'work out to', 'comes to', 'come to', 'amounts to', 'amount to', 'corresponds to', 'correspond to', 'equals', 'equal to', 'is equal to', 'is the same as', 'the same as', 'translates to', 'translates into'];
+/** The restating verbs as one pattern, with an optional "a warming of" after them. */
+export const RESTATING_VERB_PATTERN = String.raw`(?:${[...RESTATING_VERBS].sort((a, b) => b.length - a.length).map((w) => w.replace(/ /g, String.raw`[\s\u00A0]+`)).join('|')})(?:[\s\u00A0]+(?:a|an)[\s\u00A0]+(?:${CHANGE_SUBJECT_NOUNS.join('|')}|reading|temperature|date|level|depth)[\s\u00A0]+of)?`;
+
+/**
  * What comes before the cues and what the cues do not settle. A kelvin value below 100 is a change
  * whatever the words (no air on Earth is that cold); then the cue tables; then the sign.
  */
@@ -65,8 +90,9 @@ function firstCue(table: { cue: Cue; re: RegExp }[], before: string, after: stri
 }
 
 /** Temperature or temperature change, from the unit and value, the words around the quantity, and its sign. */
-export function readTemperature(before: string, after: string, sign: string, unitId: string, value: number): Dimension {
+export function readTemperature(before: string, after: string, sign: string, unitId: string, value: number, clause = before): Dimension {
   if (unitId === 'K' && Math.abs(value) < 100) return 'temperature-change';
+  if (namesChangeBefore(clause)) return 'temperature-change';
   const cue = firstCue(TEMPERATURE, before, after);
   if (cue !== undefined) return cue.reading;
   if (sign === '+') return 'temperature-change';

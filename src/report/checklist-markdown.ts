@@ -11,6 +11,7 @@ import type { Checklist, ChecklistInput, ChecklistItem, ChecklistRange } from '.
 import { toChecklist } from './checklist-json.js';
 import { formatRange } from './format-value.js';
 import { formatSource } from './format-source.js';
+import { markdownFileName, markdownText } from './markdown-escape.js';
 
 /** How each verdict is put for the reviewer. */
 const VERDICT_WORDS: Record<ChecklistItem['verdict'], (item: ChecklistItem) => string> = {
@@ -59,12 +60,12 @@ export function checklistToMarkdown(checklist: Checklist): string {
   let heading: string | undefined;
   for (const item of checklist.claims) {
     if (item.file !== file) {
-      out.push('', `## File \`${item.file}\``);
+      out.push('', `## File ${markdownFileName(item.file)}`);
       file = item.file;
       heading = undefined;
     }
     if (item.heading !== heading) {
-      out.push('', item.heading === '' ? '### Before the first heading' : `### Under "${item.heading}"`, '');
+      out.push('', item.heading === '' ? '### Before the first heading' : `### Under "${markdownText(item.heading)}"`, '');
       heading = item.heading;
     }
     out.push(...itemLines(item));
@@ -76,9 +77,9 @@ function itemLines(item: ChecklistItem): string[] {
   // A claim whose sign-off holds is shown ticked, with who and when; `signoff --from` leaves it as it is.
   const box = item.signoff.status === 'signed off' ? '[x]' : '[ ]';
   const where = item.paragraph === undefined ? `line ${item.line}` : `paragraph ${item.paragraph}`;
-  const lines = [`- ${box} **${item.id}** ${where}: ${item.sentence}`];
+  const lines = [`- ${box} **${item.id}** ${where}: ${markdownText(item.sentence)}`];
   const detail = (label: string, text: string) => lines.push(`  - ${label}: ${text}`);
-  if (item.values.length > 0) detail('Values read', item.values.map((v) => `"${v.text}" (${range(v)})`).join('; '));
+  if (item.values.length > 0) detail('Values read', item.values.map((v) => `"${markdownText(v.text)}" (${range(v)})`).join('; '));
   detail('Verdict', VERDICT_WORDS[item.verdict](item));
   for (const f of item.flags) {
     const advice = f.correction === undefined ? (f.suggestion === undefined ? '' : ` Suggestion: ${f.suggestion}`) : ` Correction: "${f.correction}"`;
@@ -89,13 +90,15 @@ function itemLines(item: ChecklistItem): string[] {
     for (const s of item.sources) lines.push(`    - ${formatSource(s)}`);
   }
   const s = item.signoff;
-  const from = s.movedFrom !== undefined ? ` (moved from ${s.movedFrom})` : s.sharedWith !== undefined ? ` (same sentence in ${s.sharedWith})` : '';
-  if (s.status === 'signed off') detail('Signed off', `by ${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}, ${s.decision ?? ''}${from}`);
-  if (s.status === 'needs change') detail('Needs change', `${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}: ${s.reason ?? ''}${from}`);
+  // File names and reviewers' words come from the drafts and the ledger: kept as text, like the sentences.
+  const from = s.movedFrom !== undefined ? ` (moved from ${markdownText(s.movedFrom)})` : s.sharedWith !== undefined ? ` (same sentence in ${markdownText(s.sharedWith)})` : '';
+  const who = markdownText(s.reviewer ?? '?');
+  if (s.status === 'signed off') detail('Signed off', `by ${who} on ${(s.date ?? '').slice(0, 10)}, ${s.decision ?? ''}${from}`);
+  if (s.status === 'needs change') detail('Needs change', `${who} on ${(s.date ?? '').slice(0, 10)}: ${markdownText(s.reason ?? '')}${from}`);
   if (s.status === 'stale') {
-    const earlier = s.decision === 'needs-change' ? `marked this wording as needing a change (${s.reason ?? ''})` : 'signed off this wording';
-    detail('Changed since sign-off', `${s.reviewer ?? '?'} ${earlier} on ${(s.date ?? '').slice(0, 10)}${from}: "${s.signedOffText ?? ''}"`);
-    if (s.changes !== undefined) detail('What changed', s.changes);
+    const earlier = s.decision === 'needs-change' ? `marked this wording as needing a change (${markdownText(s.reason ?? '')})` : 'signed off this wording';
+    detail('Changed since sign-off', `${who} ${earlier} on ${(s.date ?? '').slice(0, 10)}${from}: "${markdownText(s.signedOffText ?? '')}"`);
+    if (s.changes !== undefined) detail('What changed', markdownText(s.changes));
   }
   return lines;
 }

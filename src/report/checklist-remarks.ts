@@ -9,6 +9,8 @@
  *     → { claimId: 'c9f3a0b12cd', ticked: false, boxText: 'Sea level was 50 m lower. wrong: about 120 to 130 m lower' }
  */
 
+import { markdownText } from './markdown-escape.js';
+
 /** One box of the checklist, with what the reviewer may have added to it. */
 export interface ChecklistBox {
   claimId: string;
@@ -31,13 +33,14 @@ export interface ChecklistBox {
 
 const BOX = /^\s*(?:[-*+]|\d+[.)])\s+\[([ xX])\]/u;
 const HEADING = /^\s{0,3}#{1,6}\s/u;
-const FILE_HEADING = /^\s{0,3}##\s+File\s+`([^`]+)`\s*$/u;
+const FILE_HEADING = /^\s{0,3}##\s+File\s+(?:`([^`]+)`|("(?:[^"\\]|\\.)*"))\s*$/u;
 const CLAIM_ID = /\bc[0-9a-f]{10}(?:-\d+)?\b/u;
 const PLACE = /^\s*\*{0,2}c[0-9a-f]{10}(?:-\d+)?\*{0,2}\s+line\s+\d+:\s?/u;
 /** The detail lines Firnline writes under a box (report/checklist-markdown). */
 const DETAIL = /^\s+[-*+]\s+(Values read|Verdict|Flag \(|Sources:|Signed off:|Needs change:|Changed since sign-off:|What changed:)/u;
 const SOURCE_ENTRY = /^\s{4,}[-*+]\s/u;
-const MARK = /\((needs[ -]change|note|corrected|waived)\s*:\s*([^)]*)\)/giu;
+// A bracket escaped by the checklist writer (`\(`) is the draft's own text, never a mark.
+const MARK = /(?<!\\)\((needs[ -]change|note|corrected|waived)\s*:\s*([^)]*)\)/giu;
 
 /** Every box with a claim id, in checklist order. */
 export function readChecklistBoxes(markdown: string): ChecklistBox[] {
@@ -47,7 +50,7 @@ export function readChecklistBoxes(markdown: string): ChecklistBox[] {
   for (let i = 0; i < lines.length; i += 1) {
     const line = lines[i] ?? '';
     const heading = FILE_HEADING.exec(line);
-    if (heading !== null) section = heading[1];
+    if (heading !== null) section = heading[1] ?? fileNameOf(heading[2] ?? '""');
     const box = BOX.exec(line);
     if (box === null) continue;
     const rest = line.slice(box[0].length);
@@ -97,8 +100,18 @@ export function readChecklistBoxes(markdown: string): ChecklistBox[] {
 export function remarkOf(box: ChecklistBox, sentence: string): string {
   const fold = (t: string) => t.replace(/\s+/gu, ' ').trim();
   const text = fold(box.boxText.replace(MARK, ' '));
-  const claim = fold(sentence);
-  if (text === claim) return '';
-  if (text.startsWith(claim)) return text.slice(claim.length).replace(/^[\s:;,.–—-]+/u, '').trim();
+  // The checklist writes the sentence escaped (markdown-escape.ts); a reviewer's editor may show or keep either form.
+  for (const claim of [fold(markdownText(sentence)), fold(sentence)]) {
+    if (text === claim) return '';
+    if (text.startsWith(claim)) return text.slice(claim.length).replace(/^[\s:;,.–—-]+/u, '').trim();
+  }
   return `the reviewer changed the line to: ${text}`;
+}
+
+function fileNameOf(quoted: string): string {
+  try {
+    return String(JSON.parse(quoted));
+  } catch {
+    return quoted;
+  }
 }

@@ -23,9 +23,12 @@ export interface TickedClaim {
 
 const BOX = /^\s*(?:[-*+]|\d+[.)])\s+\[([ xX])\]/u;
 const HEADING = /^\s{0,3}#{1,6}\s/u;
-const FILE_HEADING = /^\s{0,3}##\s+File\s+`([^`]+)`\s*$/u;
+const FILE_HEADING = /^\s{0,3}##\s+File\s+(?:`([^`]+)`|("(?:[^"\\]|\\.)*"))\s*$/u;
+/** Anything a reviewer may have meant as a tick: a bracket pair of up to three characters at the start of a line. */
+const BOX_LIKE = /^\s*(?:[-*+]|\d+[.)])?\s*\[([^\]]{0,3})\]/u;
 const CLAIM_ID = /\bc[0-9a-f]{10}(?:-\d+)?\b/u;
-const MARK = /\((approved|corrected|waived|note)\s*:\s*([^)]*)\)/giu;
+// A bracket escaped by the checklist writer (`\(`) is the draft's own text, never a mark.
+const MARK = /(?<!\\)\((approved|corrected|waived|note)\s*:\s*([^)]*)\)/giu;
 
 /** Every ticked box, in checklist order; `file` names the checklist in error messages. */
 export function parseTickedChecklist(markdown: string, file = 'checklist'): TickedClaim[] {
@@ -35,11 +38,19 @@ export function parseTickedChecklist(markdown: string, file = 'checklist'): Tick
   for (let i = 0; i < lines.length; i += 1) {
     const line = lines[i] ?? '';
     const heading = FILE_HEADING.exec(line);
-    if (heading !== null) section = heading[1];
+    if (heading !== null) section = heading[1] ?? fileNameOf(heading[2] ?? '""');
     const box = BOX.exec(line);
-    if (box === null || box[1] === ' ') continue;
+    if (box === null) {
+      const odd = BOX_LIKE.exec(line);
+      // A box ticked in a form this reader does not take ([x ], [✓], -[x]) must not pass unnoticed.
+      if (odd !== null && isOddBox(line)) {
+        throw new FirnlineError('checklist-odd-tick', `this box reads [${odd[1] ?? ''}], which is not a tick Firnline reads; write - [x] to tick it, or - [ ] to leave it open`, { file, line: i + 1, column: line.indexOf('[') + 1 });
+      }
+      continue;
+    }
+    if (box[1] === ' ') continue;
     let end = i + 1;
-    while (end < lines.length && !BOX.test(lines[end] ?? '') && !HEADING.test(lines[end] ?? '')) end += 1;
+    while (end < lines.length && !BOX.test(lines[end] ?? '') && !isOddBox(lines[end] ?? '') && !HEADING.test(lines[end] ?? '')) end += 1;
     const id = CLAIM_ID.exec(line.slice(box[0].length));
     const column = line.indexOf('[') + 1;
     if (id === null) {
@@ -47,7 +58,11 @@ export function parseTickedChecklist(markdown: string, file = 'checklist'): Tick
     }
     const item: TickedClaim = { claimId: id[0], decision: 'approved', line: i + 1, ...(section === undefined ? {} : { file: section }) };
     readMarks(lines.slice(i, end).join(' ').replace(/\s+/gu, ' '), item, { file, line: i + 1, column });
-    ticked.push(item);
+    const twin = ticked.find((t) => t.claimId === item.claimId && t.file === item.file);
+    if (twin !== undefined && (twin.decision !== item.decision || twin.reason !== item.reason)) {
+      throw new FirnlineError('checklist-twice', `claim ${item.claimId} is ticked twice with different decisions (see line ${twin.line}); keep one`, { file, line: i + 1, column });
+    }
+    if (twin === undefined) ticked.push(item);
     i = end - 1;
   }
   return ticked;
@@ -72,4 +87,18 @@ function readMarks(text: string, item: TickedClaim, where: { file: string; line:
   }
   const note = found.get('note') ?? found.get('approved');
   if (note !== undefined && note !== '') item.note = note;
+}
+
+/** A box with a claim id whose tick is neither `[ ]` nor a form BOX reads. */
+function isOddBox(line: string): boolean {
+  const odd = BOX_LIKE.exec(line);
+  return odd !== null && odd[1] !== ' ' && odd[1] !== '' && !BOX.test(line) && CLAIM_ID.test(line);
+}
+
+function fileNameOf(quoted: string): string {
+  try {
+    return String(JSON.parse(quoted));
+  } catch {
+    return quoted;
+  }
 }

@@ -38,7 +38,7 @@ export interface JsonReport {
   flags: JsonFlag[];
   /** Every rule that has a flag, by id. */
   rules: RuleInfo[];
-  skipped: { file: string; reason: string }[];
+  skipped: { file: string; reason: string; unchecked?: true; line?: number; column?: number }[];
   /** The rule packs checked against, with the date their values were last reviewed. */
   packs: PackInfo[];
 }

@@ -45,6 +45,7 @@ function jsonClaim(claim: Claim): JsonClaim {
     heading: claim.heading,
     quantities: claim.quantities.map((q) => ({ ...q, low: bound(q.low), high: bound(q.high) })),
     bindings: claim.bindings,
+    ...(claim.marked === true ? { marked: true as const } : {}),
     verdict: claim.verdict,
   };
 }

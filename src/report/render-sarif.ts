@@ -1,8 +1,8 @@
 import { pathToFileURL } from 'node:url';
 import type { CheckResult } from '../types.js';
 import type { ReportOptions } from './report-options.js';
-import type { SarifArtifactLocation, SarifLog } from './sarif-log.js';
-import { SRCROOT, toSarifResult } from './sarif-result.js';
+import type { SarifArtifactLocation, SarifInvocation, SarifLog } from './sarif-log.js';
+import { SRCROOT, toArtifactUri, toSarifResult } from './sarif-result.js';
 import { toReportingDescriptor } from './sarif-rules.js';
 import { sortByPlace, sortRules } from './sort.js';
 
@@ -33,8 +33,31 @@ export function toSarifLog(result: CheckResult, options: ReportOptions): SarifLo
         originalUriBaseIds: { [SRCROOT]: srcRootLocation(options.srcRoot) },
         columnKind: 'unicodeCodePoints',
         results: sortByPlace(result.flags).map((flag) => toSarifResult(flag, indexById.get(flag.ruleId))),
+        ...(result.skipped.length === 0 ? {} : { invocations: [skippedFiles(result)] }),
       },
     ],
+  };
+}
+
+/**
+ * Every file passed over, as a tool execution notification: `error` for a draft that could not be
+ * checked (the run then did not succeed), `note` for one with nothing to check.
+ */
+function skippedFiles(result: CheckResult): SarifInvocation {
+  return {
+    executionSuccessful: !result.skipped.some((s) => s.unchecked === true),
+    toolExecutionNotifications: result.skipped.map((s) => ({
+      level: s.unchecked === true ? 'error' : 'note',
+      message: { text: `${s.unchecked === true ? 'Not checked' : 'Skipped'}: ${s.reason}` },
+      locations: [
+        {
+          physicalLocation: {
+            artifactLocation: { uri: toArtifactUri(s.file), uriBaseId: SRCROOT },
+            ...(s.line === undefined ? {} : { region: { startLine: s.line, ...(s.column === undefined ? {} : { startColumn: s.column }) } }),
+          },
+        },
+      ],
+    })),
   };
 }
 

@@ -83,6 +83,17 @@ export interface SarifLog {
       originalUriBaseIds: Record<string, SarifArtifactLocation>;
       columnKind: 'unicodeCodePoints';
       results: SarifResult[];
+      invocations?: SarifInvocation[];
     },
   ];
+}
+
+/** One run of the tool (SARIF §3.20): whether it succeeded, and a notification per file passed over (§3.58). */
+export interface SarifInvocation {
+  executionSuccessful: boolean;
+  toolExecutionNotifications: {
+    level: SarifLevel;
+    message: { text: string };
+    locations: { physicalLocation: { artifactLocation: SarifArtifactLocation; region?: { startLine: number; startColumn?: number } } }[];
+  }[];
 }

@@ -3,7 +3,7 @@
  * YAML or an entry that does not fit schemas/ledger.schema.json is a one-line error at its place.
  */
 import { readFileSync } from 'node:fs';
-import { readFile } from 'node:fs/promises';
+import { readRegularText } from '../guard/read-regular-file.js';
 import { relative } from 'node:path';
 import { Ajv2020, type ErrorObject } from 'ajv/dist/2020.js';
 import { FirnlineError, FirnlineErrors } from '../errors.js';
@@ -28,9 +28,10 @@ export async function readLedger(file: string, cwd?: string): Promise<Ledger> {
   const shown = cwd === undefined ? file : relative(cwd, file) || file;
   let text: string;
   try {
-    text = await readFile(file, 'utf8');
+    text = await readRegularText(file, { shown, code: 'ledger-unreadable' });
   } catch (error) {
     if ((error as NodeJS.ErrnoException).code === 'ENOENT') return { file, signoffs: [] };
+    if (error instanceof FirnlineError) throw error;
     throw new FirnlineError('ledger-unreadable', 'cannot read the sign-off ledger; check its permissions', { file: shown });
   }
   return parseLedger(text, file, shown);

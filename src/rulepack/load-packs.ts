@@ -23,6 +23,11 @@ const NOTHING_KNOWN: KnownIds = { sources: new Map(), terms: new Set(), defined:
 export async function loadRulePack(file: string, known: KnownIds = NOTHING_KNOWN): Promise<RulePack> {
   const absolute = resolve(file);
   const yaml = await readYamlFile(absolute, shownPath(file));
+  // A file that is not a pack at all gets one line, and never an echo of its content.
+  const data = yaml.data;
+  if (data === null || typeof data !== 'object' || Array.isArray(data) || !Object.hasOwn(data, 'pack')) {
+    throw new FirnlineErrors([new FirnlineError('pack-not-a-pack', 'this is not a rule pack (no `pack:` key at the top level); see docs/rule-packs.md', { file: shownPath(file) })]);
+  }
   const problems = schemaErrors(yaml, 'rulepack');
   if (problems.length > 0) throw new FirnlineErrors(problems);
   const pack = resolvePack(yaml, absolute, known);

@@ -80,6 +80,8 @@ export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): Rule
   });
   const patterns: PatternRule[] = (raw.patterns ?? []).map((p, i) => {
     const path = ['patterns', i];
+    // A pattern's id is its rule id in every report, so it takes the reports' form (schemas/report.schema.json).
+    if (!RULE_ID.test(p.id)) errors.push(yaml.errorAt('pack-rule-id', [...path, 'id'], `a pattern id is a rule id: lower-case and dotted, group first (e.g. \`house.${p.id.replace(/[^a-z0-9-]/gu, '') || 'rule'}\`)`));
     if (p.match === undefined && p.regex === undefined) errors.push(yaml.errorAt('pack-schema', path, 'a pattern needs `match` or `regex`'));
     if (p.regex !== undefined) checkRegexes(scope, [p.regex], [...path, 'regex'], true);
     return {
@@ -101,6 +103,9 @@ export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): Rule
     sources: own, terms: termList, references, directions, reasoning, patterns, lexicon: lexiconOf(raw),
   };
 }
+
+/** The form of a rule id in reports: dotted, lower-case, group first (schemas/report.schema.json, flags.ruleId). */
+const RULE_ID = /^[a-z][a-z0-9-]*(\.[a-z0-9][a-z0-9-]*)+$/u;
 
 function reportDuplicates(scope: PackScope, section: string, ids: string[], defined: ReadonlyMap<string, string>): void {
   const first = new Map<string, number>();

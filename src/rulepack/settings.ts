@@ -2,8 +2,8 @@
  * Project settings: `firnline.yaml` in a docs repository, found by walking up from the working
  * folder, validated against schemas/settings.schema.json, with paths resolved against the file.
  */
-import { existsSync } from 'node:fs';
-import { dirname, join, resolve } from 'node:path';
+import { existsSync, realpathSync } from 'node:fs';
+import { dirname, isAbsolute, join, relative, resolve } from 'node:path';
 import { FirnlineErrors } from '../errors.js';
 import type { Level } from '../types.js';
 import type { Settings } from './types.js';
@@ -42,6 +42,12 @@ export async function loadSettings(file: string): Promise<Settings> {
   if (problems.length > 0) throw new FirnlineErrors(problems);
   const raw = (yaml.data ?? {}) as RawSettings;
   const folder = dirname(resolve(file));
+  const outside = (raw.packs ?? []).flatMap((p, i) =>
+    isInside(folder, resolve(folder, p))
+      ? []
+      : [yaml.errorAt('settings-pack-outside', ['packs', i], 'this pack is outside the project folder (the folder of this settings file); settings may only name packs inside it: copy the pack in, or name it on the command line with --pack')],
+  );
+  if (outside.length > 0) throw new FirnlineErrors(outside);
   return {
     file: resolve(file),
     include: raw.include ?? [],
@@ -53,6 +59,19 @@ export async function loadSettings(file: string): Promise<Settings> {
     ...(raw.reviewers === undefined ? {} : { reviewers: raw.reviewers }),
     levelPlaces: Object.fromEntries(Object.keys(raw.levels ?? {}).map((id) => [id, yaml.locate(['levels', id], 'key')])),
   };
+}
+
+/** True when `path` (after following links) lies in `folder` (after following links). */
+function isInside(folder: string, path: string): boolean {
+  const real = (p: string): string => {
+    try {
+      return realpathSync(p);
+    } catch {
+      return p;
+    }
+  };
+  const rel = relative(real(folder), real(path));
+  return rel !== '' && !rel.startsWith('..') && !isAbsolute(rel);
 }
 
 /** The commented starter file `firnline init` writes; every line of it is valid settings. */

@@ -2,7 +2,7 @@
  * A YAML file read for validation: its plain data, and a way back from a data path
  * (`['reference_values', 3, 'low']`) to the line and column where that node starts.
  */
-import { readFile } from 'node:fs/promises';
+import { readRegularText } from '../guard/read-regular-file.js';
 import { isMap, isSeq, LineCounter, parseDocument, type Document, type Node } from 'yaml';
 import { FirnlineError, FirnlineErrors } from '../errors.js';
 
@@ -20,8 +20,9 @@ export interface YamlFile {
 export async function readYamlFile(file: string, shownAs = file): Promise<YamlFile> {
   let text: string;
   try {
-    text = await readFile(file, 'utf8');
-  } catch {
+    text = await readRegularText(file, { shown: shownAs, code: 'file-missing' });
+  } catch (error) {
+    if (error instanceof FirnlineError) throw error;
     throw new FirnlineError('file-missing', `cannot read this file; check the path`, { file: shownAs });
   }
   return parseYamlText(text, shownAs);
@@ -44,9 +45,17 @@ export function parseYamlText(text: string, file: string): YamlFile {
   }
   const locate = (path: readonly (string | number)[], part: 'key' | 'value' = 'value') =>
     position(offsetOf(doc, path, part));
+  let data: unknown;
+  try {
+    data = doc.toJS({ maxAliasCount: 100 }) as unknown;
+  } catch (error) {
+    // yaml refuses a document whose aliases would expand without bound (an "alias bomb").
+    if (!/alias/iu.test((error as Error).message)) throw error;
+    throw new FirnlineErrors([new FirnlineError('yaml-aliases', 'too many YAML aliases (more than 100 expansions); write the values out, or use fewer anchors', { file, ...firstAlias(text, position) })]);
+  }
   return {
     file,
-    data: doc.toJS({ maxAliasCount: 100 }) as unknown,
+    data,
     locate,
     errorAt: (code, path, message, part) => new FirnlineError(code, message, { file, ...locate(path, part) }),
   };
@@ -77,4 +86,10 @@ function offsetOf(doc: Document, path: readonly (string | number)[], part: 'key'
 
 function firstLine(message: string): string {
   return (message.split('\n')[0] ?? message).replace(/ at line \d+, column \d+:?$/u, '').trim();
+}
+
+/** Where the first alias (`*name`) stands, for the alias-bomb message. */
+function firstAlias(text: string, position: (offset: number) => { line: number; column: number }): { line: number; column: number } {
+  const at = /(?:^|[\s[{,:-])\*[^\s,\]}]+/u.exec(text);
+  return position(at === null ? 0 : at.index + at[0].indexOf('*'));
 }

@@ -1,6 +1,6 @@
-import { readdir, stat } from 'node:fs/promises';
+import { readdir, realpath, stat } from 'node:fs/promises';
 import type { Dirent } from 'node:fs';
-import { isAbsolute, join, resolve } from 'node:path';
+import { isAbsolute, join, relative, resolve } from 'node:path';
 import { FirnlineError, FirnlineErrors } from '../errors.js';
 import { createPathFilter, isIgnored, rulesForFolder, toPosixPath, type IgnoreRules } from './ignore-rules.js';
 
@@ -24,10 +24,11 @@ type PathFilter = ReturnType<typeof createPathFilter>;
  * `include`/`exclude` leave out. Every missing path and every folder without drafts is reported
  * together (FirnlineError codes `path-missing`, `no-drafts`).
  */
-export async function findDrafts(paths: string[], workingFolder: string, options: DraftFilters = {}): Promise<{ files: string[] }> {
+export async function findDrafts(paths: string[], workingFolder: string, options: DraftFilters = {}): Promise<{ files: string[]; outside?: string[] }> {
   const cwd = resolve(workingFolder);
   const filter = createPathFilter(options.root === undefined ? cwd : resolve(options.root), options.include, options.exclude);
   const found = new Set<string>();
+  const outside = new Set<string>();
   const errors: FirnlineError[] = [];
   for (const given of paths) {
     const path = resolve(cwd, given);
@@ -35,7 +36,7 @@ export async function findDrafts(paths: string[], workingFolder: string, options
     if (info instanceof Error) {
       errors.push(statError(info, given));
     } else if (info.isDirectory()) {
-      const walk: Walk = { cwd, filter, found: new Set() };
+      const walk: Walk = { cwd, filter, found: new Set(), outside };
       await walkFolder(path, await rulesAbove(cwd, path), walk);
       for (const file of walk.found) found.add(file);
       if (walk.found.size === 0) {
@@ -47,14 +48,16 @@ export async function findDrafts(paths: string[], workingFolder: string, options
   }
   if (errors.length === 1 && errors[0] !== undefined) throw errors[0];
   if (errors.length > 1) throw new FirnlineErrors(errors);
-  return { files: [...found].map((path) => toPosixPath(cwd, path)).sort() };
+  const files = [...found].map((path) => toPosixPath(cwd, path)).sort();
+  return outside.size === 0 ? { files } : { files, outside: [...outside].map((path) => toPosixPath(cwd, path)).sort() };
 }
 
 function statError(error: NodeJS.ErrnoException, given: string): FirnlineError {
   if (error.code === 'ENOENT' || error.code === 'ENOTDIR') {
     return new FirnlineError('path-missing', 'no such file or folder; check the path', { file: given });
   }
-  return new FirnlineError('file-unreadable', `cannot read this path (${error.code ?? error.message}); check its permissions`, { file: given });
+  const hint = error.code === 'ELOOP' ? 'a symbolic link that points back to itself; remove or fix the link' : 'check its permissions';
+  return new FirnlineError('file-unreadable', `cannot read this path (${error.code ?? error.message}); ${hint}`, { file: given });
 }
 
 /** The `.gitignore` rules of the folders from `cwd` down to the parent of `folder`, if it is inside `cwd`. */
@@ -74,6 +77,8 @@ interface Walk {
   cwd: string;
   filter: PathFilter;
   found: Set<string>;
+  /** Links met in a walk whose target lies outside the working folder: not followed, but reported. */
+  outside: Set<string>;
 }
 
 async function walkFolder(folder: string, parents: IgnoreRules, walk: Walk): Promise<void> {
@@ -86,10 +91,25 @@ async function walkFolder(folder: string, parents: IgnoreRules, walk: Walk): Pro
     if (entry.name.startsWith('.') || entry.name.startsWith('~$') || entry.name === 'node_modules') continue;
     const path = join(folder, entry.name);
     const kind = await entryKind(entry, path);
+    if (kind === 'file' && entry.isSymbolicLink() && !(await linksInside(path, walk.cwd))) {
+      if (isDraftName(entry.name) && !isIgnored(rules, path, false) && walk.filter(path, false)) walk.outside.add(path);
+      continue;
+    }
     if (kind === undefined || isIgnored(rules, path, kind === 'folder') || !walk.filter(path, kind === 'folder')) continue;
     if (kind === 'folder') await walkFolder(path, rules, walk);
     else if (DRAFT_EXTENSIONS.some((ending) => entry.name.toLowerCase().endsWith(ending))) walk.found.add(path);
   }
+}
+
+/** True when the link at `path` resolves to a file inside `cwd` (a pull request may add a link to any file). */
+async function linksInside(path: string, cwd: string): Promise<boolean> {
+  const [target, root] = await Promise.all([realpath(path).catch(() => path), realpath(cwd).catch(() => cwd)]);
+  const rel = relative(root, target);
+  return rel !== '' && !rel.startsWith('..') && !isAbsolute(rel);
+}
+
+function isDraftName(name: string): boolean {
+  return DRAFT_EXTENSIONS.some((ending) => name.toLowerCase().endsWith(ending));
 }
 
 /** Files, folders and links to files; a link to a folder is not followed, so walks cannot loop. */

@@ -28,8 +28,9 @@ const CONTAINER_KINDS: Partial<Record<Nodes['type'], BlockKind>> = {
 
 /**
  * The marker an editor puts before a passage that quotes a claim on purpose (a myth being answered,
- * a reader's letter): `<!-- firnline: reported -->`. Before a block, it marks that block (a whole
- * quotation, list or table when it stands before one); at the start of a paragraph, that paragraph.
+ * a reader's letter): `<!-- firnline: reported -->`, on its own line before a block. It marks that
+ * block (a whole quotation, list or table when it stands before one); within a line of a paragraph
+ * (where Markdown keeps it inline), it marks that paragraph.
  */
 export const REPORTED_MARKER = /^<!--\s*firnline:\s*reported\s*-->$/u;
 

@@ -47,12 +47,14 @@ describe('firnline check', () => {
     expect(run.stderr).not.toMatch(/\bat .+:\d+:\d+\)/u);
   });
 
-  it('skips a binary file with a note and still checks the rest', async () => {
+  it('reports a binary file it could not check, still checks the rest, and fails the run', async () => {
     const dir = await tempFolder({ 'a.md': 'Nothing here.\n', 'b.txt': new Uint8Array([0x43, 0x4f, 0x32, 0x00, 0xff]) });
     const run = await runCli(['check', '.', '--format', 'json'], dir);
-    const report = JSON.parse(run.stdout) as { skipped: { file: string; reason: string }[] };
-    expect(report.skipped).toContainEqual({ file: 'b.txt', reason: 'binary file' });
-    expect(run.code).toBe(0);
+    const report = JSON.parse(run.stdout) as { files: string[]; skipped: { file: string; reason: string; unchecked?: boolean }[] };
+    expect(report.files).toContain('a.md');
+    expect(report.skipped).toContainEqual(expect.objectContaining({ file: 'b.txt', unchecked: true }));
+    expect(run.stderr).toMatch(/^b\.txt:1:5: not valid UTF-8 \(byte 0xFF\)/u);
+    expect(run.code).toBe(2);
   });
 
   it('reads standard input for the path -', async () => {

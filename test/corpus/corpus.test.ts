@@ -34,8 +34,9 @@ describe('the evaluation corpus', () => {
     const score = await scoreSet(set, packs);
     console.log(summarizeScore(score));
     expect(score.keyProblems).toEqual([]);
-    // Floors set from the measured figures after tuning (see README); they guard against regressions.
-    expect(score.recall.hit / score.recall.of).toBeGreaterThanOrEqual(0.45);
-    expect(score.falseFlags.hit / score.falseFlags.of).toBeLessThanOrEqual(0.07);
+    // Floors from the figures measured after tuning (68.8-81.3% caught, 2.5-7.8% false flags per set);
+    // they guard against regressions, they are not targets.
+    expect(score.recall.hit / score.recall.of).toBeGreaterThanOrEqual(0.6);
+    expect(score.falseFlags.hit / score.falseFlags.of).toBeLessThanOrEqual(0.08);
   });
 });

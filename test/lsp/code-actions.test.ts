@@ -23,7 +23,7 @@ describe('codeActionsOf', () => {
     expect(titles).toEqual([
       'Replace "800,000 years" with "about 420,000 years"',
       `Mark this paragraph as a deliberate quotation (firnline: reported)`,
-      'Copy citation: Petit et al. 1999; Petit et al. 1999/2001',
+      'Copy citation: Petit et al. 1999; Petit et al. 2001',
     ]);
   });
 

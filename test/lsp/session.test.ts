@@ -102,14 +102,14 @@ describe('firnline lsp --stdio', { timeout: 90_000 }, () => {
       { range: { start: { line: 2, character: 0 }, end: { line: 2, character: 0 } }, newText: '<!-- firnline: reported -->\r\n' },
     ]);
     const copy = actions.find((a) => a.command?.command === 'firnline.copyCitation');
-    expect(copy?.title).toBe('Copy citation: Petit et al. 1999; Petit et al. 1999/2001');
+    expect(copy?.title).toBe('Copy citation: Petit et al. 1999; Petit et al. 2001');
     const citation: string = await session.connection.sendRequest('workspace/executeCommand', copy?.command);
-    expect(citation).toContain('Nature 399, 429-436. https://doi.org/10.1038/20859');
+    expect(citation).toContain('Nature 399, doi:10.1038/20859');
 
     const hover: Hover = await session.connection.sendRequest('textDocument/hover', { textDocument: { uri }, position: { line: 3, character: 30 } });
     const value = (hover.contents as { value: string }).value;
-    expect(value).toContain('draft says: "800,000 years" (read as 795,000 to 805,000 yr)');
-    expect(value).toContain('reference: 400,000 to 423,000 yr');
+    expect(value).toContain('draft says: "800,000 years" (read as 795,000–805,000 years)');
+    expect(value).toContain('reference: 400,000–423,000 years');
     expect(value).toContain('source: Petit et al. 1999, https://doi.org/10.1038/20859');
     expect(value).toContain('does not replace, expert review');
     expect(hover.range).toEqual(diagnostic?.range);

@@ -72,8 +72,8 @@ describe('firnline annotate', () => {
     expect(comments.length).toBe(2);
     const texts = Array.from({ length: comments.length }, (_, i) => comments.item(i)?.textContent ?? '');
     expect(texts[0]).toContain('value.vostok-record-span');
-    expect(texts[0]).toContain('Draft says: "800,000 years" (read as 795,000 to 805,000 yr)');
-    expect(texts[0]).toContain('Reference: 400,000 to 423,000 yr');
+    expect(texts[0]).toContain('Draft says: "800,000 years" (read as 795,000–805,000 years)');
+    expect(texts[0]).toContain('Reference: 400,000–423,000 years');
     expect(texts[0]).toContain('Correction: about 420,000 years');
     expect(texts[0]).toContain('Source: Petit et al. 1999, https://doi.org/10.1038/20859');
     expect(texts[1]).toContain('Correction: about 278 ppm');

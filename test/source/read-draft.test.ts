@@ -3,7 +3,7 @@ import { chmod, mkdtemp, mkdir, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { draftFormat, draftFromText, readDraft } from '../../src/source/index.js';
-import { FirnlineError } from '../../src/errors.js';
+import type { FirnlineError } from '../../src/errors.js';
 
 let root = '';
 
@@ -50,19 +50,20 @@ describe('readDraft', () => {
     expect('blocks' in draft && draft.blocks[0]?.offsets[0]).toBe(1);
   });
 
+  // Byte positions per RFC 3629: 0xE9 alone (Latin-1 é) and 0xC3 followed by 0x28 are not UTF-8.
   it.each([
-    ['a NUL byte', 'nul.md'],
-    ['Latin-1 bytes (not UTF-8)', 'latin1.txt'],
-    ['a broken UTF-8 sequence', 'broken.md'],
-  ])('passes over a file with %s as binary', async (_what, name) => {
-    expect(await readDraft(name, root)).toEqual({ skipped: 'binary file' });
+    ['a NUL byte', 'nul.md', 'nul.md:1:4: holds a NUL byte'],
+    ['Latin-1 bytes (not UTF-8)', 'latin1.txt', 'latin1.txt:1:4: not valid UTF-8 (byte 0xE9)'],
+    ['a broken UTF-8 sequence', 'broken.md', 'broken.md:1:2: not valid UTF-8 (byte 0xC3)'],
+  ])('does not check a file with %s, and says where the first bad byte is', async (_what, name, line) => {
+    const read = await readDraft(name, root);
+    expect('problem' in read && read.problem.toLine().startsWith(line)).toBe(true);
   });
 
-  it('rejects a folder with file-unreadable', async () => {
-    const error = await readDraft('folder.md', root).catch((e: unknown) => e);
-    expect(error).toBeInstanceOf(FirnlineError);
-    expect((error as FirnlineError).code).toBe('file-unreadable');
-    expect((error as FirnlineError).toLine()).toBe('folder.md: cannot read this file (it is a folder); check that it is a readable file');
+  it('does not check a folder named as a draft (file-unreadable)', async () => {
+    const read = await readDraft('folder.md', root);
+    expect('problem' in read && read.problem.code).toBe('file-unreadable');
+    expect('problem' in read && read.problem.toLine()).toBe('folder.md: cannot read this file (it is a folder); check that it is a readable file');
   });
 
   it('rejects a file that has gone with path-missing', async () => {

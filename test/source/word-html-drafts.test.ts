@@ -94,7 +94,7 @@ describe('Word and HTML drafts', () => {
     expect(report.flags.map((f) => [f.paragraph, f.span.start.column])).toEqual([
       [{ number: 2, heading: 'Ice cores' }, 27], // "800,000 years" starts at character 27 of its paragraph
       [{ number: 3, heading: 'Ice cores' }, 55],
-      [{ number: 5, heading: 'Timing' }, 39],
+      [{ number: 5, heading: 'Timing' }, 42], // the lag flag covers the denied cause, "CO2 cannot have caused"
     ]);
     expect(report.claims[0]?.paragraph).toEqual({ number: 2, heading: 'Ice cores' });
 

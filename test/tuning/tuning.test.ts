@@ -10,8 +10,10 @@ import { tuningKey } from './answer-key.js';
 // The third blind set: drafts written without reading the engine, then used to tune it (general causes only).
 const ROOT = resolve(fileURLToPath(new URL('.', import.meta.url)), '../..');
 // Regression guards: written blind, this set scored 45% with 5 false claims before the engine was
-// tuned on it (then 92%, 0). test/holdout, never tuned on, is the honest measure.
-const DETECTION_FLOOR = 0.85;
+// tuned on it (then 92%, 0). The proposition reader replaced the cue lists it was tuned with, and
+// it now scores 31-32 of 38 with no false flag; the floor guards that. The blind measure is the
+// hold-out of test/corpus (README).
+const DETECTION_FLOOR = 0.8;
 const FALSE_FLAG_CEILING = 3;
 
 const errors = tuningKey.flatMap((draft) => draft.errors);

@@ -68,7 +68,7 @@ function superlativeFlag(sentence: string, word: FoundRankWord, named: Named[], 
   // "the longest Greenland record", "the deepest core in Japan": a rank within a group the values do not mark.
   const phrase = sentence.slice(word.end, phraseEnd);
   if (/(?<![\p{L}])\p{Lu}/u.test(phrase.replace(/[\p{L}\p{N}-]+/gu, (w, at: number) => (named.some((n) => n.start <= word.end + at && word.end + at < n.end) ? 'x' : w)))) return undefined;
-  const family = chooseFamily(word, [subject.entity], hits, families);
+  const family = chooseFamily(sentence, word, [subject.entity], hits, families);
   if (family === undefined) return undefined;
   const own = family.members.find((m) => m.entity === subject.entity) as FamilyMember;
   const others = family.members.filter((m) => m !== own);
@@ -98,7 +98,7 @@ function comparisonFlag(sentence: string, word: FoundRankWord, named: Named[], h
   const a = named.filter((n) => n.end <= word.start && n.start >= clauseStart).at(-1);
   const b = named.find((n) => n.start >= word.end && !CLAUSE_END.test(sentence.slice(word.end, n.start)) && n.start - word.end <= 40);
   if (a === undefined || b === undefined || a.entity === b.entity) return undefined;
-  const family = chooseFamily(word, [a.entity, b.entity], hits, families);
+  const family = chooseFamily(sentence, word, [a.entity, b.entity], hits, families);
   if (family === undefined) return undefined;
   const ra = (family.members.find((m) => m.entity === a.entity) as FamilyMember).reference;
   const rb = (family.members.find((m) => m.entity === b.entity) as FamilyMember).reference;
@@ -130,8 +130,16 @@ function comparisonFlag(sentence: string, word: FoundRankWord, named: Named[], h
 }
 
 /** The family the word measures for these entities: one whose dimension fits; on a choice, the one whose measure words are in the sentence. */
-function chooseFamily(word: FoundRankWord, entities: string[], hits: Map<string, [number, number][]>, families: MeasureFamily[]): MeasureFamily | undefined {
-  const fitting = families.filter((f) => word.dimensions.includes(f.dimension) && entities.every((e) => f.members.some((m) => m.entity === e)));
+function chooseFamily(sentence: string, word: FoundRankWord, entities: string[], hits: Map<string, [number, number][]>, families: MeasureFamily[]): MeasureFamily | undefined {
+  let fitting = families.filter((f) => word.dimensions.includes(f.dimension) && entities.every((e) => f.members.some((m) => m.entity === e)));
+  // "the longest record": a record is long in time; "the longest core", "3,270 metres": in length.
+  // The noun the rank word qualifies decides first ("the longest peer-reviewed continuous record").
+  const after = sentence.slice(word.end, word.end + 50);
+  const recordNext = /^(?:\W+[\w-]+){0,3}?\W+(?:records?|history|archives?)\b/iu.test(after);
+  const inTime = recordNext || /\b(?:records?|history|archives?|years?|millenni(?:um|a)|kyr|ka)\b/iu.test(sentence);
+  const inLength = !recordNext && /\b(?:metres?|meters?|feet|ft|km|deep|depth|drilled|bedrock)\b|\d\s?m\b/iu.test(sentence);
+  // A rank said in time is never read as one in length, nor the other way round.
+  if (inTime !== inLength) fitting = fitting.filter((f) => (inTime ? f.dimension !== 'length' : f.dimension === 'length'));
   if (fitting.length <= 1) return fitting[0];
   // The rank word's own letters ("long" in "as long as") do not name a measure.
   const outside = (t: string): boolean => (hits.get(t) ?? []).some(([start, end]) => end <= word.start || start >= word.end);

@@ -36,11 +36,14 @@ export function measureFamilies(packs: LoadedPacks): MeasureFamily[] {
   const cached = cache.get(packs);
   if (cached !== undefined) return cached;
   const readings = new Map<string, { measure: string[]; dimension: Dimension; members: FamilyMember[] }>();
-  const keyOf = (measure: string[], dimension: Dimension): string => `${[...measure].sort().join('|')}@${dimension}`;
+  // A measure group is named by its first term: "[record, record-reach]" widens the words that bind
+  // EPICA Dome C's span, and it is still the record-span family of "[record]".
+  const keyOf = (measure: string[], dimension: Dimension): string => `${measure[0] ?? ''}@${dimension}`;
   for (const r of packs.references) {
     for (const [entity, measure] of splits(r)) {
       const key = keyOf(measure, r.dimension);
-      const found = readings.get(key) ?? { measure, dimension: r.dimension, members: [] };
+      const found = readings.get(key) ?? { measure: [], dimension: r.dimension, members: [] };
+      found.measure = [...new Set([...found.measure, ...measure])];
       found.members.push({ entity, reference: r });
       readings.set(key, found);
     }

@@ -6,6 +6,7 @@
  */
 import { FirnlineError } from '../../errors.js';
 import type { FlagDraft } from '../../types.js';
+import { directionFlag } from './check-facts.js';
 import type { CompiledPacks } from './compile-packs.js';
 import { isGuarded } from './direction-guards.js';
 import { guardedMatches, guardedMatchesEach, MAX_SENTENCE_LENGTH, TIME_LIMIT_MS, type Span } from './time-limit.js';
@@ -33,16 +34,7 @@ export function checkDirections(sentence: string, compiled: CompiledPacks, batch
     };
     if (right.some((regex) => run(regex).length > 0)) continue;
     const hit = wrong.flatMap(run).find((span) => !isGuarded(sentence, span));
-    if (hit === undefined) continue;
-    flags.push({
-      ruleId: fact.id.startsWith('direction.') ? fact.id : `direction.${fact.id}`,
-      level: fact.level,
-      start: hit.start,
-      end: hit.end,
-      reason: `This states the effect the wrong way round. ${fact.statement}`,
-      suggestion: `Reword so that the direction matches the sources: ${fact.statement}`,
-      sources: fact.sources,
-    });
+    if (hit !== undefined) flags.push(directionFlag(fact, hit));
   }
   return flags;
 }

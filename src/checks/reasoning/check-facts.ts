@@ -15,18 +15,22 @@ export function checkFacts(props: Propositions, facts: readonly DirectionFact[])
   const flags: FlagDraft[] = [];
   for (const fact of facts) {
     const hit = fact.says.map((form) => contradiction(props, form)).find((span) => span !== undefined);
-    if (hit === undefined) continue;
-    flags.push({
-      ruleId: fact.id.startsWith('direction.') ? fact.id : `direction.${fact.id}`,
-      level: fact.level,
-      start: hit.start,
-      end: hit.end,
-      reason: `This states the effect the wrong way round. ${fact.statement}`,
-      suggestion: `Reword so that the direction matches the sources: ${fact.statement}`,
-      sources: fact.sources,
-    });
+    if (hit !== undefined) flags.push(directionFlag(fact, hit));
   }
   return flags;
+}
+
+/** The flag of a direction fact stated the wrong way round at `span`, however it was found. */
+export function directionFlag(fact: DirectionFact, span: { start: number; end: number }): FlagDraft {
+  return {
+    ruleId: fact.id.startsWith('direction.') ? fact.id : `direction.${fact.id}`,
+    level: fact.level,
+    start: span.start,
+    end: span.end,
+    reason: `This states the effect the wrong way round. ${fact.statement}`,
+    suggestion: `Reword so that the direction matches the sources: ${fact.statement}`,
+    sources: fact.sources,
+  };
 }
 
 type Span = { start: number; end: number };

@@ -35,7 +35,7 @@ export function compilePacks(packs: LoadedPacks): CompiledPacks {
   const fileOf = (has: (p: LoadedPacks['packs'][number]) => boolean) => packs.packs.find(has)?.file ?? '(rule pack)';
   const compiled: CompiledPacks = {
     checks: packs.reasoning.flatMap((check) => {
-      const entry = DETECTORS[check.id];
+      const entry = Object.hasOwn(DETECTORS, check.id) ? DETECTORS[check.id] : undefined;
       if (entry === undefined || !check.enabled) return [];
       const words = compileSlots(check.words);
       return [{ check, entry, words, prefilter: entry.keys.map((k) => prefilterFor(check.words[k] ?? [])) }];
@@ -59,7 +59,7 @@ export function compilePacks(packs: LoadedPacks): CompiledPacks {
 
 /** Check ids in the packs that no detector implements (for the loader or `explain` to report). */
 export function unknownReasoningChecks(packs: LoadedPacks): string[] {
-  return packs.reasoning.filter((c) => DETECTORS[c.id] === undefined).map((c) => c.id);
+  return packs.reasoning.filter((c) => !Object.hasOwn(DETECTORS, c.id)).map((c) => c.id);
 }
 
 function safeRegex(source: string, what: string, file: string): RegExp {

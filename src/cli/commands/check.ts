@@ -1,7 +1,7 @@
 import type { Command} from 'commander';
 import { Option } from 'commander';
 import { mkdir } from 'node:fs/promises';
-import { dirname, resolve } from 'node:path';
+import { dirname } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import { renderReport, REPORT_FORMATS, type ReportFormat } from '../../report/index.js';
 import { renderChecklistOf } from '../render-checklist.js';
@@ -14,6 +14,9 @@ import { writeFileAtomic } from '../../write-file-atomic.js';
 import { exitCodeFor } from '../exit-code.js';
 import { applyStrictPreset } from '../strict-preset.js';
 import { describeBreakdown, wantsBreakdown } from '../../report/run-breakdown.js';
+import { outputTarget } from '../../guard/output-target.js';
+import { visibleData, visibleText } from '../../guard/visible-text.js';
+import { reportUnchecked } from '../unchecked.js';
 
 /** The report formats, plus `markdown`: the sign-off checklist (GLOSSARY.md). */
 const CHECK_FORMATS = [...REPORT_FORMATS, 'markdown'] as const;
@@ -28,6 +31,7 @@ interface CheckFlags {
   changedSince?: string;
   strict?: boolean;
   summary?: boolean;
+  absolutePaths?: boolean;
 }
 
 /** `firnline check [paths...]`: scan drafts, print flags, set the exit status. */
@@ -44,6 +48,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('--require-signoff', 'exit 1 while any claim lacks a current sign-off in the ledger')
     .option('--changed-since <rev>', 'check only claims on lines changed since a git revision')
     .option('--summary', 'text format: print the counts by rule and by file instead of each flag (shown after the flags anyway when 20 or more files have flags)')
+    .option('--absolute-paths', 'SARIF: record the working folder as an absolute file URI (off by default, so a shared report does not show the machine\'s folders)')
     .option('--strict', 'the strict preset for publication: every conflicting value and every reasoning error is an error, and errors fail the run')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
@@ -58,28 +63,32 @@ export function registerCheck(program: Command, ctx: CliContext): void {
         ledgerFile: run.ledger,
         cwd: ctx.cwd,
       });
-      const color = flags.output === undefined && ctx.isTTY && !('NO_COLOR' in ctx.env && ctx.env.NO_COLOR !== '');
-      const options = { color, toolVersion: VERSION, failOn, srcRoot: ctx.cwd };
+      // Decided before anything is written, so a refused target leaves no half-done run behind.
+      const target = flags.output === undefined ? { stdout: true as const } : await outputTarget(flags.output, ctx.cwd, [...result.files, ...result.skipped.map((s) => s.file)]);
+      const color = target.stdout && ctx.isTTY && ctx.env.TERM !== 'dumb' && !('NO_COLOR' in ctx.env && ctx.env.NO_COLOR !== '');
+      // Text goes to terminals and CI logs: control characters from drafts and file names are shown, never sent.
+      const shown = flags.format === 'text' ? visibleData(gate.result) : gate.result;
+      const options = { color, toolVersion: VERSION, failOn, ...(flags.absolutePaths === true ? { srcRoot: ctx.cwd } : {}) };
       const onlyCounts = flags.summary === true && flags.format === 'text';
       const full =
         flags.format === 'markdown'
           ? (await renderChecklistOf(gate.result, run, 'markdown', ctx.cwd)).text
-          : renderReport(flags.format as ReportFormat, gate.result, options);
+          : renderReport(flags.format as ReportFormat, shown, options);
       // --summary keeps the text report's closing block (skipped files and the count line) only.
       const report = onlyCounts ? (full.trimEnd().split('\n\n').pop() ?? '') : full;
-      const breakdown = flags.format === 'text' && (onlyCounts || wantsBreakdown(gate.result)) ? describeBreakdown(gate.result) : [];
-      const lines = [...breakdown, ...gate.summary];
+      const breakdown = flags.format === 'text' && (onlyCounts || wantsBreakdown(shown)) ? describeBreakdown(shown) : [];
+      const lines = [...breakdown, ...gate.summary.map(visibleText)];
       const summary = lines.length > 0 ? `${lines.join('\n')}\n` : '';
-      if (flags.output === undefined) {
+      if (target.stdout) {
         ctx.stdout(report.endsWith('\n') ? report : `${report}\n`);
-        if (summary !== '') (flags.format === 'text' ? ctx.stdout : ctx.stderr)(summary);
+        if (summary !== '') (flags.format === 'text' && flags.output === undefined ? ctx.stdout : ctx.stderr)(summary);
       } else {
-        const target = resolve(ctx.cwd, flags.output);
-        await mkdir(dirname(target), { recursive: true });
-        await writeFileAtomic(target, report.endsWith('\n') ? report : `${report}\n`);
+        await mkdir(dirname(target.file), { recursive: true });
+        await writeFileAtomic(target.file, report.endsWith('\n') ? report : `${report}\n`);
         ctx.stderr(summary);
       }
       ctx.exitCode = Math.max(exitCodeFor(gate.failingFlags, failOn), gate.failed ? 1 : 0);
+      if (reportUnchecked(result, ctx) > 0) ctx.exitCode = 2;
     });
 }
 

@@ -2,16 +2,19 @@ import { Option, type Command } from 'commander';
 import { mkdir } from 'node:fs/promises';
 import { dirname, join, relative, resolve } from 'node:path';
 import { FirnlineError } from '../../errors.js';
+import { outputTarget } from '../../guard/output-target.js';
 import { changedLines } from '../../review/changed-lines.js';
 import type { ReviewSummary } from '../../review/review-claims.js';
 import type { CheckResult } from '../../types.js';
 import { onChangedLines } from '../gate.js';
+import { reportUnchecked } from '../unchecked.js';
 import { checkPaths } from '../../engine.js';
 import type { CliContext } from '../context.js';
 import { CHECKLIST_RENDERERS, renderChecklistOf, type ChecklistFormat } from '../render-checklist.js';
 import { guardChecklistOutput } from '../guard-checklist-output.js';
 import { checkOptionsOf, loadRunSettings, type RunSettings } from '../run-settings.js';
 import { writeFileAtomic } from '../../write-file-atomic.js';
+import { visibleLine } from '../../guard/visible-text.js';
 
 interface ChecklistFlags {
   format: ChecklistFormat;
@@ -47,19 +50,27 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
       if (flags.perFile === true) {
         if (flags.output === undefined) throw new FirnlineError('checklist-per-file-output', '--per-file writes one checklist per draft: give the folder with -o FOLDER');
         await writePerFile(result, run, flags, ctx, options);
+        if (reportUnchecked(result, ctx) > 0) ctx.exitCode = 2;
         return;
       }
       const { text, review } = await renderChecklistOf(result, run, flags.format, ctx.cwd, options);
-      if (flags.output === undefined) {
+      const target = flags.output === undefined ? { stdout: true as const } : await outputTarget(flags.output, ctx.cwd, draftsRead(result));
+      if (target.stdout) {
         ctx.stdout(text);
+        if (reportUnchecked(result, ctx) > 0) ctx.exitCode = 2;
         return;
       }
-      const target = resolve(ctx.cwd, flags.output);
-      if (flags.force !== true) await guardChecklistOutput(target, run.ledger, ctx.cwd);
-      await mkdir(dirname(target), { recursive: true });
-      await writeFileAtomic(target, text);
-      ctx.stderr(`Wrote ${review.claims.length} claims to ${relative(ctx.cwd, target)} (${countWords(review)}).\n`);
+      if (flags.force !== true) await guardChecklistOutput(target.file, run.ledger, ctx.cwd, text);
+      await mkdir(dirname(target.file), { recursive: true });
+      await writeFileAtomic(target.file, text);
+      if (reportUnchecked(result, ctx) > 0) ctx.exitCode = 2;
+      ctx.stderr(`Wrote ${review.claims.length} claims to ${visibleLine(relative(ctx.cwd, target.file))} (${countWords(review)}).\n`);
     });
+}
+
+/** Every draft the run read or was asked to read: a checklist must never be written over one of them. */
+function draftsRead(result: CheckResult): string[] {
+  return [...result.files, ...result.skipped.map((s) => s.file)];
 }
 
 function countWords(review: ReviewSummary): string {
@@ -77,11 +88,13 @@ async function writePerFile(result: CheckResult, run: RunSettings, flags: Checkl
     const claims = result.claims.filter((c) => c.file === file);
     const { text, review } = await renderChecklistOf({ ...result, claims, flags: claims.flatMap((c) => c.flags) }, run, flags.format, ctx.cwd, options);
     if (review.claims.length === 0) continue;
-    const target = join(folder, `${file.replace(/^(\.\.\/)+/u, '')}${ending}`);
-    if (flags.force !== true) await guardChecklistOutput(target, run.ledger, ctx.cwd);
+    const checked = await outputTarget(join(folder, `${file.replace(/^(\.\.\/)+/u, '')}${ending}`), ctx.cwd, draftsRead(result));
+    if (checked.stdout) continue;
+    const target = checked.file;
+    if (flags.force !== true) await guardChecklistOutput(target, run.ledger, ctx.cwd, text);
     await mkdir(dirname(target), { recursive: true });
     await writeFileAtomic(target, text);
-    ctx.stderr(`Wrote ${review.claims.length} claims to ${relative(ctx.cwd, target)} (${countWords(review)}).\n`);
+    ctx.stderr(`Wrote ${review.claims.length} claims to ${visibleLine(relative(ctx.cwd, target))} (${countWords(review)}).\n`);
     written += 1;
   }
   if (written === 0) ctx.stderr('No claims to put on a checklist; nothing written.\n');

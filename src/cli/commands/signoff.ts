@@ -1,6 +1,7 @@
 import type { Command } from 'commander';
 import { Option } from 'commander';
-import { readFile } from 'node:fs/promises';
+import { readRegularText } from '../../guard/read-regular-file.js';
+import { visibleLine } from '../../guard/visible-text.js';
 import { relative, resolve } from 'node:path';
 import { checkPaths } from '../../engine.js';
 import { FirnlineError } from '../../errors.js';
@@ -8,7 +9,7 @@ import { readChecklistBoxes } from '../../report/checklist-remarks.js';
 import { checkReviewer, formatGitIdentity, readGitIdentity } from '../../review/reviewers.js';
 import { checklistRequests } from '../checklist-requests.js';
 import { existsSync } from 'node:fs';
-import { appendSignoffs } from '../../review/append-signoffs.js';
+import { appendSignoffEntries } from '../../review/append-signoffs.js';
 import { packVersionOf, planSignoffs, type SignoffRequest } from '../../review/plan-signoffs.js';
 import { readLedger } from '../../review/read-ledger.js';
 import { DECISIONS, ledgerDate, type Decision } from '../../review/signoff-entry.js';
@@ -64,14 +65,16 @@ export function registerSignoff(program: Command, ctx: CliContext): void {
       });
       const identity = git === undefined || git.email === '' ? undefined : formatGitIdentity(git);
       const entries = identity === undefined ? plan.entries : plan.entries.map((e) => ({ ...e, gitIdentity: identity }));
-      await appendSignoffs(run.ledger, entries);
-      const changes = entries.filter((e) => e.decision === 'needs-change').length;
-      const signed = entries.length - changes;
-      const again = plan.unchanged > 0 ? ` (${plan.unchanged} already recorded as they are, left out)` : '';
+      // Under the ledger lock, an entry another run recorded meanwhile is left out: report what was written.
+      const written = await appendSignoffEntries(run.ledger, entries);
+      const unchanged = plan.unchanged + entries.length - written.length;
+      const changes = written.filter((e) => e.decision === 'needs-change').length;
+      const signed = written.length - changes;
+      const again = unchanged > 0 ? ` (${unchanged} already recorded as they are, left out)` : '';
       const comments = changes === 0 ? '' : ` and ${changes} needs-change comment${changes === 1 ? '' : 's'}`;
-      const lines = [`Recorded ${signed} sign-off${signed === 1 ? '' : 's'}${comments} by ${reviewer} in ${relative(ctx.cwd, run.ledger) || run.ledger}${again}.`];
+      const lines = [`Recorded ${signed} sign-off${signed === 1 ? '' : 's'}${comments} by ${visibleLine(reviewer)} in ${visibleLine(relative(ctx.cwd, run.ledger) || run.ledger)}${again}.`];
       if (read.alreadySignedOff > 0) lines.push(`${read.alreadySignedOff} box${read.alreadySignedOff === 1 ? ' was' : 'es were'} ticked because the sign-off already held; nothing new recorded for them.`);
-      if (read.notRecorded.length > 0) lines.push('Not recorded, and why:', ...read.notRecorded.map((n) => `  ${n}`));
+      if (read.notRecorded.length > 0) lines.push('Not recorded, and why:', ...read.notRecorded.map((n) => `  ${visibleLine(n)}`));
       ctx.stdout(`${lines.join('\n')}\n`);
     });
 }
@@ -89,8 +92,9 @@ function fromIds(ids: string[], flags: SignoffFlags): SignoffRequest[] {
 async function readChecklist(file: string, shown: string, cwd: string): Promise<{ text: string; shown: string; drafts: string[] }> {
   let text: string;
   try {
-    text = await readFile(file, 'utf8');
-  } catch {
+    text = await readRegularText(file, { shown, code: 'checklist-missing' });
+  } catch (error) {
+    if (error instanceof FirnlineError) throw error;
     throw new FirnlineError('checklist-missing', 'cannot read this checklist; check the path', { file: shown });
   }
   const boxes = readChecklistBoxes(text);

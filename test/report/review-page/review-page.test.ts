@@ -78,9 +78,9 @@ describe('the review page (--format html), parsed', () => {
     const vostok = numeric.find((f) => attr(f, 'data-rule') === 'value.vostok-record-span')!;
     const labels = elements(vostok).filter((e) => e.tagName === 'text').map((e) => text(e));
     // Petit et al. 1999: the pack's range for the Vostok record is 400,000 to 423,000 years.
-    expect(labels).toEqual(expect.arrayContaining(['reference 400,000 to 423,000 yr', 'draft 795,000 to 805,000 yr', 'yr']));
+    expect(labels).toEqual(expect.arrayContaining(['reference 400,000–423,000 years', 'draft 795,000–805,000 years']));
     expect(elements(vostok).find((e) => e.tagName === 'title') && text(elements(vostok).find((e) => e.tagName === 'title')!)).toBe(
-      "Number line: the draft's 795,000 to 805,000 yr against the reference 400,000 to 423,000 yr.",
+      "Number line: the draft's 795,000–805,000 years against the reference 400,000–423,000 years.",
     );
   });
 

@@ -1,0 +1,65 @@
+/**
+ * Arithmetic whose inputs stand in the sentence before, beyond the change of
+ * arithmetic-context.ts:
+ *  - a span: "The thaw began about 17,000 years ago and ended about 11,700 years ago. That is a
+ *    stretch of some 4,000 years." (17,000 − 11,700 = 5,300);
+ *  - a ratio of rates: "... close to 1.3 ppm per century. Today's 2.5 ppm a year is some 20 times
+ *    faster." (2.5 ÷ 0.013 = 192).
+ * Precision first: this sentence must open by referring back ("That is", "So", "Thus", "It",
+ * a label such as "Answer:" first), state no date of its own, and the sentence before must hold
+ * exactly one span of dates (or one rate). Flags fall only on this sentence's own numbers.
+ */
+import { writtenInterval as w } from '../quantities/index.js';
+import type { Quantity } from '../types.js';
+import { divide, invert, type Derived } from './arithmetic-derive.js';
+import { findPairs } from './arithmetic-frames.js';
+import type { Previous } from './arithmetic-context.js';
+import { spanOfDates } from './arithmetic-spans.js';
+
+/** A finding from two sentences, with the basis named. */
+export interface AcrossFinding {
+  stated: Quantity;
+  computed: Derived;
+  measures: string;
+  basis: string;
+}
+
+const S = String.raw`[\s\u00A0]`;
+/** An opening that carries the reader on: "That is", "So", "Thus", "**Answer:** so", "It lasted". */
+const OPENS_BY_REFERRING = new RegExp(
+  String.raw`^[^\p{L}\p{N}]*(?:\p{L}+(?:${S}+\p{L}+){0,2}${S}*:[^\p{L}\p{N}]*)?(?:that|this|so|thus|hence|therefore|altogether|in${S}+all|all${S}+told|it)(?![\p{L}])`,
+  'iu',
+);
+/** Words just before a duration that make it the length of something ("lasted", "a transition of", "spread over"). */
+const SPAN_WORDS = new RegExp(String.raw`(?:^|[^\p{L}])(?:lasted|lasting|lasts|took|taking|spans|spanned|spanning|span${S}+of|over|across|within|of|for)${S}*$`, 'iu');
+const NOT_A_SPAN = new RegExp(String.raw`(?:^|[^\p{L}])(?:past|last|previous|next|every|each|per|after|before)${S}*$`, 'iu');
+/** "some 19 times faster", "ten times slower": a ratio of paces. */
+const PACE_AFTER = new RegExp(String.raw`^${S}*(?:faster|slower|quicker|more${S}+(?:quickly|rapidly|rapid)|as${S}+fast)(?![\p{L}])`, 'iu');
+const RATES = new Set(['concentration-rate', 'temperature-rate']);
+const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
+
+/** "That is a transition of roughly 3,000 years": a duration restating the span of the sentence before. */
+export function durationsAcross(text: string, qs: Quantity[], previous: Previous | undefined): AcrossFinding[] {
+  if (previous === undefined || qs.some((q) => q.dimension === 'age')) return [];
+  const stated = only(qs.filter((q) => q.dimension === 'duration'));
+  if (stated === undefined || !OPENS_BY_REFERRING.test(text)) return [];
+  const head = text.slice(Math.max(0, stated.start - 40), stated.start);
+  if (!SPAN_WORDS.test(head) || NOT_A_SPAN.test(head)) return [];
+  const earlier = only(spanOfDates(previous.quantities, findPairs(previous.text, previous.quantities)));
+  if (earlier === undefined) return [];
+  return [{ stated, computed: earlier.span, measures: `${earlier.measures} in the sentence before`, basis: "the paragraph's" }];
+}
+
+/** "Today's 2.4 ppm a year is some 19 times faster": this rate over the one rate of the sentence before. */
+export function paceRatiosAcross(text: string, qs: Quantity[], previous: Previous | undefined): AcrossFinding[] {
+  if (previous === undefined) return [];
+  const stated = only(qs.filter((q) => q.dimension === 'ratio' && PACE_AFTER.test(text.slice(q.end, q.end + 24))));
+  const now = only(qs.filter((q) => RATES.has(q.dimension)));
+  if (stated === undefined || now === undefined || now.start > stated.start) return [];
+  const then = only(previous.quantities.filter((q) => q.dimension === now.dimension));
+  if (then === undefined) return [];
+  const r = divide(w(now), w(then));
+  if (r === undefined) return [];
+  const faced = (stated.value < 1) === (r.value < 1) ? r : invert(r);
+  return [{ stated, computed: faced, measures: `the ratio of ${now.text} to ${then.text} in the sentence before`, basis: "the paragraph's" }];
+}

@@ -1,0 +1,73 @@
+/**
+ * Sums written out in the draft, as worked answers and explainers show them: "265 − 188 = 77",
+ * "420 − 280 = 140 ppm", "9 × 1.8 = 16.2". The result after "=" must be what the two numbers
+ * before it give. Each number is read as written (its last written place), so "18.2 − 9 = 9"
+ * passes: 9.2 rounds to 9. Only a sum whose three numbers the quantity reader found on their own
+ * is read; "3-4" and the like are ranges, not subtractions.
+ */
+import { writtenInterval as w } from '../quantities/index.js';
+import type { Quantity } from '../types.js';
+import { divide, minus, type Derived } from './arithmetic-derive.js';
+
+const S = String.raw`[\s\u00A0]`;
+/** The operator between the first two numbers of a written sum. */
+const OPERATOR = new RegExp(String.raw`^${S}*([−+×x*÷/]|${S}-${S})${S}*$`, 'u');
+const EQUALS = new RegExp(String.raw`^${S}*=${S}*$`, 'u');
+
+const plus = (a: Derived, b: Derived): Derived => ({ value: a.value + b.value, low: a.low + b.low, high: a.high + b.high });
+function times(a: Derived, b: Derived): Derived | undefined {
+  if (a.low < 0 || b.low < 0) return undefined;
+  return { value: a.value * b.value, low: a.low * b.low, high: a.high * b.high };
+}
+
+/** What the operator makes of the two numbers, or undefined when it cannot say. */
+function apply(op: string, a: Derived, b: Derived): Derived | undefined {
+  switch (op.trim()) {
+    case '−':
+    case '-':
+      return minus(a, b);
+    case '+':
+      return plus(a, b);
+    case '×':
+    case 'x':
+    case '*':
+      return times(a, b);
+    default:
+      return divide(a, b);
+  }
+}
+
+/** A written sum whose stated result is not what its two numbers give. */
+export interface SumFinding {
+  stated: Quantity;
+  computed: Derived;
+  measures: string;
+}
+
+/** Every written sum "A op B = C" in a sentence, with C set against A op B. */
+export function writtenSums(text: string, qs: Quantity[]): SumFinding[] {
+  const out: SumFinding[] = [];
+  for (let i = 0; i + 2 < qs.length; i++) {
+    const [a, b, c] = [qs[i], qs[i + 1], qs[i + 2]] as [Quantity, Quantity, Quantity];
+    const op = OPERATOR.exec(text.slice(a.end, b.start))?.[1];
+    if (op === undefined || !EQUALS.test(text.slice(b.end, c.start))) continue;
+    if (a.hedge !== undefined || b.hedge !== undefined || !comparable(op, a, b, c)) continue;
+    const computed = apply(op, w(a), w(b));
+    if (computed === undefined) continue;
+    out.push({ stated: c, computed, measures: `${a.text} ${op.trim()} ${b.text}` });
+  }
+  return out;
+}
+
+/**
+ * Whether the three numbers can be set against each other in their canonical units: bare numbers
+ * (the result may carry the unit: "265 − 188 = 77 ppm"), or, for a sum or difference, one
+ * dimension throughout ("420 ppm − 280 ppm = 140 ppm"). A product or quotient of measures
+ * changes the unit ("10 m × 750 years per metre") and is left alone.
+ */
+function comparable(op: string, a: Quantity, b: Quantity, c: Quantity): boolean {
+  if (a.dimension === 'number' && b.dimension === 'number') return true;
+  const additive = op.trim() === '−' || op.trim() === '-' || op === '+';
+  const same = (q: Quantity): boolean => q.dimension === a.dimension || (a.dimension === 'temperature' && q.dimension === 'temperature-change');
+  return additive && a.dimension !== 'age' && same(b) && same(c);
+}

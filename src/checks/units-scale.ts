@@ -1,0 +1,83 @@
+/**
+ * Thousand-for-million slips: a date or span of the ice ages written in millions of years where
+ * thousands were meant. "The Last Glacial Maximum, some [twenty-one million years ago]" (21,000
+ * years ago); "the Vostok core reaches back [420 Ma]" (420 ka). Each subject in the table has a
+ * ceiling no reading of the literature comes near; a figure in millions above it is the same
+ * number in thousands, and the correction swaps the scale word (million → thousand, Ma → ka,
+ * Myr → kyr). The subject must be named shortly before the figure, and words of deep time or of
+ * another record (a lake, rock, sediment, the ice sheet's birth) keep the rule quiet.
+ */
+import type { Quantity, Source } from '../types.js';
+import { CLARK_2009, NIST_SP_811, YAN_2019 } from './standard-sources.js';
+import type { UnitFinding } from './units-rules.js';
+
+/** A kind of subject with the oldest age or longest span it can have, in years. */
+export interface TimescaleSubject {
+  what: string;
+  names: string[];
+  /** Words anywhere in the sentence that make a figure in millions of years plausible after all. */
+  unless: string[];
+  ceiling: number;
+  sources: Source[];
+}
+
+/** Periods before the ice ages and other records whose ages run to millions of years. */
+const DEEP_TIME = ['Pliocene', 'Miocene', 'Oligocene', 'Eocene', 'Paleocene', 'Palaeocene', 'Cretaceous', 'Jurassic', 'Triassic', 'Permian', 'Cenozoic', 'Mesozoic', 'dinosaur', 'dinosaurs', 'sediment', 'sediments', 'rock', 'rocks', 'seafloor', 'sea floor', 'marine', 'fossil', 'fossils'];
+
+/**
+ * The subjects. The last glacial cycle and its events lie within the last 130,000 years (the
+ * Last Glacial Maximum about 26,500-19,000 years ago, Clark et al. 2009); the oldest ice ever
+ * dated is about 2.7 million years old (Yan et al. 2019), so no ice core reaches back 10 million.
+ */
+export const TIMESCALE_SUBJECTS: readonly TimescaleSubject[] = [
+  {
+    what: 'the last glacial cycle',
+    names: ['Last Glacial Maximum', 'LGM', 'Younger Dryas', 'Holocene', 'last ice age', 'last glacial period', 'last glaciation', 'last deglaciation', 'Termination I', 'Bølling', 'Allerød', 'Heinrich event', 'Heinrich events', 'Antarctic Cold Reversal', 'Eemian', 'last interglacial'],
+    unless: DEEP_TIME,
+    ceiling: 1e6,
+    sources: [CLARK_2009, NIST_SP_811],
+  },
+  {
+    what: 'an ice core',
+    names: ['ice core', 'ice cores', 'ice-core', 'Vostok core', 'Vostok record', 'Vostok ice', 'EPICA', 'Dome C', 'Dome Fuji', 'Dome A', 'GRIP', 'GISP2', 'NGRIP', 'NEEM', 'Law Dome', 'WAIS Divide', 'Talos Dome', 'Siple Dome', 'oldest ice', 'the core'],
+    unless: [...DEEP_TIME, 'lake', 'ice sheet', 'ice sheets', 'ice cap', 'formed', 'began to form', 'first formed', 'glaciation of Antarctica'],
+    ceiling: 1e7,
+    sources: [YAN_2019, NIST_SP_811],
+  },
+];
+
+const S = String.raw`[\s\u00A0]`;
+const words = (list: readonly string[]): RegExp =>
+  new RegExp(String.raw`(?:^|[^\p{L}])(?:${list.map((w) => w.replace(/[.*+?^${}()|[\]\\]/g, '\\$&').replace(/ /g, `${S}+`)).join('|')})(?![\p{L}])`, 'iu');
+const COMPILED = TIMESCALE_SUBJECTS.map((s) => ({ subject: s, name: words(s.names), unless: words(s.unless) }));
+/** The scale word of a figure in millions, and the word for the same number in thousands. */
+const SWAPS: [RegExp, string][] = [
+  [/million/iu, 'thousand'],
+  [/(?<![\p{L}])Ma(?![\p{L}])/u, 'ka'],
+  [/(?<![\p{L}])Myr(?![\p{L}])/u, 'kyr'],
+  [/(?<![\p{L}])My(?![\p{L}])/u, 'ky'],
+];
+/** How far before the figure its subject may be named. */
+const REACH = 120;
+
+/** Every figure in millions of years above the ceiling of the subject named before it. */
+export function scaleSlips(text: string, qs: Quantity[]): UnitFinding[] {
+  return qs.flatMap((q) => {
+    if ((q.dimension !== 'age' && q.dimension !== 'duration') || q.value <= 0) return [];
+    const swap = SWAPS.find(([re]) => re.test(q.text));
+    if (swap === undefined) return [];
+    const before = text.slice(Math.max(0, q.start - REACH), q.start);
+    const hit = COMPILED.find(({ subject, name, unless }) => q.low > subject.ceiling && name.test(before) && !unless.test(text));
+    if (hit === undefined) return [];
+    const correction = q.text.replace(swap[0], swap[1]);
+    const k = 1e-3;
+    return [{
+      stated: q,
+      computed: { value: q.value * k, low: q.low * k, high: q.high * k },
+      reason: `${q.text} is more than ${hit.subject.what} can span; the same figure in thousands of years (${correction}) fits. A million years is a thousand thousand (SI prefixes: k = 10^3, M = 10^6).`,
+      correction,
+      level: 'error',
+      sources: hit.subject.sources,
+    }];
+  });
+}
