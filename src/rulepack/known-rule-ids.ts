@@ -10,7 +10,7 @@ import type { LoadedPacks } from './types.js';
 /** Rule ids that live in code (src/checks/arithmetic*.ts, src/checks/units*.ts). A test keeps this list complete. */
 export const CODE_RULE_IDS: readonly string[] = [
   'arith.change', 'arith.duration', 'arith.rate', 'arith.ratio',
-  'unit.age-era', 'unit.duration', 'unit.length', 'unit.percent-ppm', 'unit.temperature', 'unit.temperature-difference',
+  'unit.age-era', 'unit.age-scale', 'unit.duration', 'unit.length', 'unit.percent-ppm', 'unit.temperature', 'unit.temperature-difference',
 ];
 
 /** Every known rule id, sorted. */
@@ -42,7 +42,8 @@ export function editDistance(a: string, b: string): number {
 
 /**
  * Up to `max` known ids close to `id`: within an edit distance of a third of its length, or
- * containing it (or its part after the group), closest first.
+ * containing it (or its part after the group), closest first, and none more than one edit further
+ * off than the closest.
  */
 export function closeIds(id: string, known: readonly string[], max = 3): string[] {
   const wanted = id.toLowerCase();
@@ -57,6 +58,8 @@ export function closeIds(id: string, known: readonly string[], max = 3): string[
     })
     .filter((x) => x.score <= limit)
     .sort((a, b) => a.score - b.score || a.k.localeCompare(b.k))
+    // Only the nearest: beside a one-letter slip, an id four edits away is noise, not a hint.
+    .filter((x, _, all) => x.score <= (all[0]?.score ?? 0) + 1)
     .slice(0, max)
     .map((x) => x.k);
 }

@@ -6,7 +6,7 @@
  */
 import { execFileSync } from 'node:child_process';
 import { mkdir, mkdtemp, readdir, readFile, writeFile } from 'node:fs/promises';
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -48,7 +48,10 @@ describe('settings', () => {
 
   it('lists every rule id written in code, so levels can name them', () => {
     const ids = new Set<string>();
-    for (const file of ['arithmetic-rules.ts', 'arithmetic.ts', 'arithmetic-frames.ts', 'units.ts', 'units-rules.ts', 'units-pairs.ts', 'units-co2-share.ts']) {
+    // Every arithmetic and unit module, so a module added later cannot slip past the list.
+    const modules = readdirSync(new URL('../../src/checks/', import.meta.url)).filter((f) => /^(?:arithmetic|units)[a-z0-9-]*\.ts$/u.test(f));
+    expect(modules.length).toBeGreaterThan(8);
+    for (const file of modules) {
       const text = readFileSync(new URL(`../../src/checks/${file}`, import.meta.url), 'utf8');
       for (const m of text.matchAll(/'((?:arith|unit)\.[a-z0-9-]+)'/gu)) ids.add(m[1] ?? '');
     }
