@@ -60,6 +60,21 @@ describe('settings', () => {
 });
 
 describe('commands', () => {
+  it('never passes a Word file it could not read, even under --require-signoff', async () => {
+    // A legacy .doc starts with the OLE compound file signature D0 CF 11 E0 A1 B1 1A E1 ([MS-CFB]
+    // section 2.2); a .docx is a zip package (ECMA-376 Part 2), and one that is not is refused.
+    const ole = new Uint8Array([0xd0, 0xcf, 0x11, 0xe0, 0xa1, 0xb1, 0x1a, 0xe1, 0, 0, 0, 0, 0x3e, 0, 3, 0]);
+    const dir = await project({ 'a.md': WRONG });
+    await writeFile(join(dir, 'panels.doc'), ole);
+    await writeFile(join(dir, 'broken.docx'), 'not a zip package');
+    const legacy = await runCli(['check', 'panels.doc', '--require-signoff'], dir);
+    expect(legacy.code).toBe(2);
+    expect(legacy.stderr).toBe('panels.doc: a Word 97-2003 document (or another OLE compound file), which Firnline does not read; save it as .docx or as UTF-8 text, then check it again (not checked)\n');
+    const broken = await runCli(['check', 'broken.docx', 'a.md', '--require-signoff'], dir);
+    expect(broken.code).toBe(2);
+    expect(broken.stderr).toMatch(/^broken\.docx: not a Word document/mu);
+  });
+
   it('checklist -o creates the folder it writes into', async () => {
     const dir = await project({ 'a.md': WRONG });
     const run = await runCli(['checklist', 'a.md', '-o', 'review/2026/list.md'], dir);

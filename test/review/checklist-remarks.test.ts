@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { checklistRequests } from '../../src/cli/checklist-requests.js';
+import { markdownText } from '../../src/report/markdown-escape.js';
 import { checkReviewer } from '../../src/review/reviewers.js';
 import { makeClaim } from './make-claim.js';
 
@@ -33,6 +34,15 @@ describe('checklistRequests: nothing the reviewer wrote is dropped', () => {
     const read = checklistRequests(list(box(' ', sea, ' (needs change: 120 to 130 m)'), box(' ', co2)), 'c.md', [co2]);
     expect(read.requests).toEqual([]);
     expect(read.notRecorded).toEqual([`c.md:3: the comment on claim ${sea.id} was not recorded: the claim is not in the drafts as they stand now (changed or removed); make the checklist again and copy the comment over.`]);
+  });
+
+  it('reads a remark after a sentence the writer escaped, and never takes the draft\'s own "(note: ...)" for one', () => {
+    // The checklist writes draft text escaped (report/markdown-escape.ts), so the box line is not the claim's text.
+    const odd = makeClaim(F, 7, 'CO2 (note: the *glacial* value) stood near 100 ppm at the <b>LGM</b>.');
+    const line = (extra: string) => list(`- [ ] **${odd.id}** line 7: ${markdownText(odd.text)}${extra}\n  - Verdict: conflicts\n`);
+    expect(checklistRequests(line(''), 'c.md', [odd])).toEqual({ requests: [], notRecorded: [], alreadySignedOff: 0 });
+    const read = checklistRequests(line(' wrong: about 185 ppm'), 'c.md', [odd]);
+    expect(read.requests.map((r) => [r.decision, r.reason])).toEqual([['needs-change', 'wrong: about 185 ppm']]);
   });
 
   it('leaves boxes Firnline ticked for a sign-off that already held', () => {
