@@ -38,7 +38,8 @@ export async function guardChecklistOutput(target: string, ledgerFile: string, c
   const boxes = readChecklistBoxes(existing);
   const byLine = new Map(boxes.map((b) => [b.line, b]));
   const mine = ticked.filter((t) => byLine.get(t.line)?.alreadySignedOff !== true);
-  const commented = boxes.filter((b) => !b.ticked && (b.needsChange !== undefined || b.note !== undefined || hasRemark(b.line, existing, regenerated)));
+  const remarked = remarkedLines(existing, regenerated);
+  const commented = boxes.filter((b) => !b.ticked && (b.needsChange !== undefined || b.note !== undefined || remarked.has(b.line)));
   const pending = [...mine, ...commented].filter((t) => !recorded.has(t.claimId)).sort((a, b) => a.line - b.line);
   if (pending.length > 0) {
     throw new FirnlineError(
@@ -54,15 +55,21 @@ const UNTICKED_ID = /^- \[ \] \*\*(c[0-9a-f]{10}(?:-\d+)?)\*\* /u;
 const REVIEWER_MARK = /(?<!\\)\((?:approved|corrected|waived|note|needs[ -]change)\s*:/iu;
 
 /**
- * True when the unticked box at `line` has words typed after its sentence ("wrong: about 120 m"):
- * the freshly written checklist has a box for the same claim whose line the old one extends.
+ * The lines (1-based) of unticked boxes with words typed after their sentence ("wrong: about
+ * 120 m"): the freshly written checklist has a box for the same claim whose line the old one extends.
  */
-function hasRemark(line: number, existing: string, regenerated: string): boolean {
-  const old = existing.split(/\r\n|\r|\n/u)[line - 1] ?? '';
-  const id = UNTICKED_ID.exec(old)?.[1];
-  if (id === undefined) return false;
-  const fresh = regenerated.split('\n').find((l) => UNTICKED_ID.exec(l)?.[1] === id);
-  return fresh !== undefined && old !== fresh && old.startsWith(fresh) && old.slice(fresh.length).trim() !== '';
+function remarkedLines(existing: string, regenerated: string): Set<number> {
+  const fresh = new Map<string, string>();
+  for (const line of regenerated.split('\n')) {
+    const id = UNTICKED_ID.exec(line)?.[1];
+    if (id !== undefined && !fresh.has(id)) fresh.set(id, line);
+  }
+  const found = new Set<number>();
+  for (const [i, old] of existing.split(/\r\n|\r|\n/u).entries()) {
+    const now = fresh.get(UNTICKED_ID.exec(old)?.[1] ?? '');
+    if (now !== undefined && old !== now && old.startsWith(now) && old.slice(now.length).trim() !== '') found.add(i + 1);
+  }
+  return found;
 }
 
 /**
