@@ -10,9 +10,11 @@ import { readLedger } from '../review/read-ledger.js';
 /**
  * Refuses to overwrite what a person wrote: a file that is not a checklist Firnline made, or a
  * checklist whose ticked boxes are not all in the ledger yet (an expert's ticks would be lost).
- * A missing file, or a checklist whose ticks are all recorded, may be replaced.
+ * A missing file, or a checklist whose ticks are all recorded, may be replaced. With
+ * `onlyChecklists` (`check --format markdown -o`, which like every report may replace any file),
+ * only a checklist is guarded.
  */
-export async function guardChecklistOutput(target: string, ledgerFile: string, cwd: string, regenerated = ''): Promise<void> {
+export async function guardChecklistOutput(target: string, ledgerFile: string, cwd: string, regenerated = '', options: { onlyChecklists?: boolean } = {}): Promise<void> {
   let existing: string;
   try {
     existing = await readRegularText(target, { shown: relative(cwd, target) });
@@ -22,6 +24,7 @@ export async function guardChecklistOutput(target: string, ledgerFile: string, c
   }
   const shown = relative(cwd, target);
   if (!existing.trimStart().startsWith(CHECKLIST_MARKER)) {
+    if (options.onlyChecklists === true) return;
     throw new FirnlineError('output-not-checklist', 'this file exists and is not a checklist Firnline wrote; choose another path, or pass --force to replace it', { file: shown });
   }
   const ticked = parseTickedChecklist(existing, shown);

@@ -66,6 +66,21 @@ describe('checklist -o protects what is already there', () => {
     expect(fresh).toContain(': say which core');
   });
 
+  it('guards a checklist written by check --format markdown -o the same way', async () => {
+    const dir = await draftRepository(ICE_HALL);
+    expect((await firnline(dir, 'check', 'drafts', '--format', 'markdown', '-o', 'checklist.md')).code).toBe(0);
+    const ticked = (await readFile(join(dir, 'checklist.md'), 'utf8')).replace('- [ ] **', '- [x] **');
+    await writeFile(join(dir, 'checklist.md'), ticked);
+    const refused = await firnline(dir, 'check', 'drafts', '--format', 'markdown', '-o', 'checklist.md');
+    expect(refused.code).toBe(2);
+    expect(refused.out).toContain('this checklist has 1 ticked or commented box not yet in the ledger');
+    expect(await readFile(join(dir, 'checklist.md'), 'utf8')).toBe(ticked);
+    expect((await firnline(dir, 'check', 'drafts', '--format', 'markdown', '-o', 'checklist.md', '--force')).code).toBe(0);
+    // Any other file may be replaced by a report, as before.
+    await writeFile(join(dir, 'notes.md'), 'My own notes.\n');
+    expect((await firnline(dir, 'check', 'drafts', '--format', 'markdown', '-o', 'notes.md')).code).toBe(0);
+  });
+
   it('replaces anything with --force', async () => {
     const dir = await draftRepository(ICE_HALL);
     await writeFile(join(dir, 'notes.md'), 'My own notes.\n');

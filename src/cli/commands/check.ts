@@ -17,6 +17,7 @@ import { describeBreakdown, wantsBreakdown } from '../../report/run-breakdown.js
 import { outputTarget } from '../../guard/output-target.js';
 import { visibleData, visibleText } from '../../guard/visible-text.js';
 import { reportUnchecked } from '../unchecked.js';
+import { guardChecklistOutput } from '../guard-checklist-output.js';
 
 /** The report formats, plus `markdown`: the sign-off checklist (GLOSSARY.md). */
 const CHECK_FORMATS = [...REPORT_FORMATS, 'markdown'] as const;
@@ -32,6 +33,7 @@ interface CheckFlags {
   strict?: boolean;
   summary?: boolean;
   absolutePaths?: boolean;
+  force?: boolean;
 }
 
 /** `firnline check [paths...]`: scan drafts, print flags, set the exit status. */
@@ -48,6 +50,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('--require-signoff', 'exit 1 while any claim lacks a current sign-off in the ledger')
     .option('--changed-since <rev>', 'check only claims on lines changed since a git revision')
     .option('--summary', 'text format: print the counts by rule and by file instead of each flag (shown after the flags anyway when 20 or more files have flags)')
+    .option('--force', 'with --format markdown -o: replace a checklist even if it holds ticks or comments not yet in the ledger')
     .option('--absolute-paths', 'SARIF: record the working folder as an absolute file URI (off by default, so a shared report does not show the machine\'s folders)')
     .option('--strict', 'the strict preset for publication: every conflicting value and every reasoning error is an error, and errors fail the run')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
@@ -83,6 +86,8 @@ export function registerCheck(program: Command, ctx: CliContext): void {
         ctx.stdout(report.endsWith('\n') ? report : `${report}\n`);
         if (summary !== '') (flags.format === 'text' && flags.output === undefined ? ctx.stdout : ctx.stderr)(summary);
       } else {
+        // A checklist written by `check --format markdown` is guarded as `checklist -o` guards it.
+        if (flags.format === 'markdown' && flags.force !== true) await guardChecklistOutput(target.file, run.ledger, ctx.cwd, full, { onlyChecklists: true });
         await mkdir(dirname(target.file), { recursive: true });
         await writeFileAtomic(target.file, report.endsWith('\n') ? report : `${report}\n`);
         ctx.stderr(summary);
