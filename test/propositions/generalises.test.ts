@@ -39,6 +39,15 @@ describe('claims read as propositions, in wordings of our own', () => {
     ['Every additional part per million of CO2 heats the planet more than the previous one did.', 'direction.co2-forcing-logarithmic'],
     ['The two curves shadow each other so closely that CO2 must be the thermostat.', 'logic.correlation-as-proof'],
     ['It was the tilt of the orbit, and nothing else, that brought the last glaciation to an end.', 'logic.single-cause'],
+    // Pseudo-clefts, "purely because", "all it took": one agent singled out without "alone".
+    ['What finished off the last glaciation was carbon dioxide and nothing else.', 'logic.single-cause'],
+    ['Carbon welling up from the deep ocean was, on its own, what ended the last ice age.', 'logic.single-cause'],
+    ['The glaciers retreated purely because the orbit shifted; the air had no hand in it.', 'logic.single-cause'],
+    ["A change in Earth's tilt is all it took to end the last ice age.", 'logic.single-cause'],
+    // A role ruled out by degree ("too faint to find"), beside the other direction asserted.
+    ["Warming drives CO2, and CO2's influence on temperature is too weak to detect in the cores.", 'logic.either-or-causation'],
+    // "once" orders two events; "carbon" is the gas.
+    ['Since the carbon only appears once the warming is well under way, none of that warming can be blamed on it.', 'logic.lag-rules-out-cause'],
   ])('%s → %s', async (text, ruleId) => {
     expect(await serious(text)).toContain(ruleId);
   });
@@ -53,6 +62,9 @@ describe('claims read as propositions, in wordings of our own', () => {
     'Each additional ppm adds a little less warming than the one before.',
     'The curves move together, as expected when each amplifies the other, but the match alone proves nothing.',
     'The orbit alone was too weak to end the ice age.',
+    'What ended the ice ages was a combination of orbital changes and CO2.',
+    'The orbit was what set the pace of the ice ages.',
+    'It was CO2 that pulled the planet out of the ice age, after the orbit set things in motion.',
   ])('passes: %s', async (text) => {
     expect(await serious(text)).toEqual([]);
   });
