@@ -103,3 +103,33 @@ describe('a draft is on topic because it names the subject', () => {
     expect(result.claims.map((c) => c.text)).toEqual(['The Vostok core spans about 420,000 years.']);
   });
 });
+
+describe('order and comparison read past verbs of change and adverbs of degree', () => {
+  // Shakun et al. 2012 (global temperature lagged CO2); Caillon et al. 2003 (air younger than its
+  // ice); Jouzel et al. 2007 and Tierney et al. 2020 (polar swings exceed the global mean).
+  it.each([
+    ['In the last deglaciation the global mean temperature started climbing before CO2 did.', 'direction.global-co2-ahead-of-warming'],
+    ['In the ice-core era the poles respond more sluggishly than the planet as a whole.', 'direction.polar-swings-exceed-global'],
+    ['In an ice core the trapped air has been around longer than the ice that surrounds it.', 'direction.trapped-air-younger-than-ice'],
+  ])('%s → %s', async (text, ruleId) => {
+    expect(await serious(text)).toContain(ruleId);
+  });
+});
+
+describe('a record named in a closing "as" clause is the record the sentence reads', () => {
+  // Regional polar records are not global temperature: Jouzel et al. 2007 (EPICA Dome C, Antarctic
+  // swings of about 8-10 °C); Tierney et al. 2020 (global LGM cooling about 6 °C); Buizert et al. 2014
+  // (Greenland's abrupt warmings far larger than the global mean).
+  it.each([
+    'At the end of the Younger Dryas the whole planet warmed by about 10 °C in a few decades, as the Greenland ice records.',
+    'Follow this line and you follow the temperature of the entire Earth for 800,000 years, as preserved in the EPICA Dome C ice.',
+  ])('flags: %s', async (text) => {
+    expect(await serious(text)).toContain('scope.regional-record-as-global');
+  });
+  it.each([
+    'The global mean fell by about 6 °C in the last ice age, as ocean sediment records show.',
+    'Antarctica warmed by about 9 °C, as the Dome C ice records, while the global mean rose by about 5 °C.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).not.toContain('scope.regional-record-as-global');
+  });
+});
