@@ -33,6 +33,8 @@ export interface CheckOptions {
   readStdin?: () => Promise<string>;
   /** Claim ids and the ledger use paths relative to this folder (default: `cwd`). */
   projectRoot?: string;
+  /** The folder `include`/`exclude` patterns are relative to (default: `cwd`). */
+  filterRoot?: string;
 }
 
 /** Per-draft settings of `checkDraft`. */
@@ -348,8 +350,9 @@ function describeFromFlag(flag: Flag): RuleInfo {
   return { id: flag.ruleId, summary: flag.reason, description: flag.reason, defaultLevel: flag.level, sources: flag.sources };
 }
 
-function pickDefined(options: CheckOptions): { include?: string[]; exclude?: string[] } {
-  const picked: { include?: string[]; exclude?: string[] } = {};
+function pickDefined(options: CheckOptions): { include?: string[]; exclude?: string[]; root?: string } {
+  const picked: { include?: string[]; exclude?: string[]; root?: string } = {};
+  if (options.filterRoot !== undefined) picked.root = options.filterRoot;
   if (options.include !== undefined) picked.include = options.include;
   if (options.exclude !== undefined) picked.exclude = options.exclude;
   return picked;
