@@ -6,12 +6,15 @@ import { checkUnits } from './checks/units.js';
 import { FirnlineError } from './errors.js';
 import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
-import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
+import { createTopicMatcher, splitSentences, topicPattern, topicWordsOf, type TopicMatcher } from './prose/index.js';
 import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
 import type { LoadedPacks } from './rulepack/types.js';
-import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, readDraftText } from './source/index.js';
+import { blockRange, createLineIndex, draftAroundHits, draftFormat, findDrafts, readDraftText } from './source/index.js';
+import { runFiles, type FileTask } from './speed/run-files.js';
+import type { ResultCache } from './speed/cache.js';
+import { inShard, type Shard } from './speed/shard.js';
 import type { Binding, CheckResult, Claim, Draft, Flag, FlagDraft, Level, Quantity, RuleInfo, Sentence, Verdict } from './types.js';
 
 /** How a run is set up. Only `cwd` is required; packs default to the built-in pack. */
@@ -28,11 +31,21 @@ export interface CheckOptions {
   readStdin?: () => Promise<string>;
   /** Claim ids and the ledger use paths relative to this folder (default: `cwd`). */
   projectRoot?: string;
+  /** Worker threads for a run over many files (default: the machine's cores); 1 runs in this thread. */
+  jobs?: number;
+  /** A result cache (src/speed/cache.ts); none by default. */
+  cache?: ResultCache;
+  /** Only the files of this shard (split by project path). */
+  shard?: Shard;
+  /** Called as files are done: how many of how many. */
+  onProgress?: (done: number, total: number) => void;
 }
 
 /** Per-draft settings of `checkDraft`. */
 export interface DraftOptions {
   topic?: TopicMatcher;
+  /** The subject matcher (topicWordsOf) with the `g` flag: which parts of a file to analyse. */
+  subjects?: RegExp | undefined;
   levels?: Record<string, Level | 'off'>;
   /** The draft's path relative to the project root, for claim ids (default: the draft's path). */
   projectPath?: string;
@@ -48,25 +61,36 @@ export interface DraftResult {
 export async function checkPaths(paths: string[], options: CheckOptions): Promise<CheckResult> {
   const packs = options.packs ?? (await loadPacks(options.packFiles ?? []));
   const topic = createTopicMatcher(packs.topicWords);
+  const subjects = subjectPattern(packs);
   const fromDisk = paths.filter((p) => p !== '-');
   const { files } =
     fromDisk.length > 0 ? await findDrafts(fromDisk, options.cwd, pickDefined(options)) : { files: [] as string[] };
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
 
   const levels = options.levels ?? {};
-  if (paths.includes('-')) {
+  if (paths.includes('-') && (options.shard === undefined || options.shard.index === 1)) {
     if (options.readStdin === undefined) throw new FirnlineError('stdin-unavailable', 'standard input cannot be read here');
-    addText(result, draftFromText('-', await options.readStdin(), 'markdown'), packs, { topic, levels });
+    addText(result, { path: '-', text: await options.readStdin(), format: 'markdown' }, packs, { topic, subjects, levels });
   }
+  const tasks: FileTask[] = [];
   for (const file of files) {
-    const text = await readDraftText(file, options.cwd);
-    if (typeof text !== 'string') {
-      result.skipped.push({ file, reason: text.skipped });
-      continue;
-    }
     const projectPath = toPosix(relative(options.projectRoot ?? options.cwd, resolve(options.cwd, file)));
-    addText(result, { path: file, text, format: draftFormat(file) }, packs, { topic, levels, projectPath });
+    if (options.shard !== undefined && !inShard(projectPath, options.shard)) continue;
+    tasks.push({ path: file, projectPath, format: draftFormat(file) });
   }
+  const outcomes = await runFiles(tasks, { cwd: options.cwd, packs, levels, subjects, topic, ...pickRun(options) });
+  tasks.forEach((task, i) => {
+    const outcome = outcomes[i];
+    if (outcome === undefined) return;
+    if (outcome.skipped === 'binary file') {
+      result.skipped.push({ file: task.path, reason: outcome.skipped });
+      return;
+    }
+    result.files.push(task.path);
+    if (outcome.skipped !== undefined) result.skipped.push({ file: task.path, reason: outcome.skipped });
+    result.claims.push(...outcome.claims);
+    result.flags.push(...outcome.flags);
+  });
   result.rules = describeFlaggedRules(result.flags, packs);
   return result;
 }
@@ -80,35 +104,42 @@ export async function checkText(
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
   const path = options.path ?? '-';
   const draft = { path, text, format: options.format ?? draftFormat(path) };
-  addText(result, draft, packs, { topic: createTopicMatcher(packs.topicWords), levels: options.levels ?? {} });
+  addText(result, draft, packs, { topic: createTopicMatcher(packs.topicWords), subjects: subjectPattern(packs), levels: options.levels ?? {} });
   result.rules = describeFlaggedRules(result.flags, packs);
   return result;
 }
 
-/**
- * Adds one draft's findings. A text with no topic word is skipped before it is even parsed, and so
- * is a sign-off checklist that Firnline wrote (it quotes every claim, and is not a draft).
- */
-function addText(
-  result: CheckResult,
-  raw: Pick<Draft, 'path' | 'text' | 'format'> | Draft,
-  packs: LoadedPacks,
-  options: DraftOptions,
-): void {
-  const { path, text, format } = raw;
-  result.files.push(path);
-  if (text.trimStart().startsWith(CHECKLIST_MARKER)) {
-    result.skipped.push({ file: path, reason: 'sign-off checklist' });
-    return;
-  }
-  if (!(options.topic ?? createTopicMatcher(packs.topicWords)).test(text)) {
-    result.skipped.push({ file: path, reason: 'no topic term' });
-    return;
-  }
-  const draft = 'blocks' in raw ? raw : draftFromText(path, text, format);
-  const { claims, flags } = checkDraft(draft, packs, options);
+/** Adds one draft's findings (see checkFileText). */
+function addText(result: CheckResult, raw: Pick<Draft, 'path' | 'text' | 'format'>, packs: LoadedPacks, options: DraftOptions): void {
+  result.files.push(raw.path);
+  const { claims, flags, skipped } = checkFileText(raw, packs, options);
+  if (skipped !== undefined) result.skipped.push({ file: raw.path, reason: skipped });
   result.claims.push(...claims);
   result.flags.push(...flags);
+}
+
+/**
+ * One file's findings. A text that names no subject (topicWordsOf) is skipped before it is even
+ * parsed, and so is a sign-off checklist that Firnline wrote (it quotes every claim, and is not a
+ * draft); otherwise only the blocks around the subject's mentions are parsed and checked
+ * (source/windows.ts).
+ */
+export function checkFileText(
+  raw: Pick<Draft, 'path' | 'text' | 'format'>,
+  packs: LoadedPacks,
+  options: DraftOptions,
+): DraftResult & { skipped?: string } {
+  const { path, text, format } = raw;
+  if (text.trimStart().startsWith(CHECKLIST_MARKER)) return { claims: [], flags: [], skipped: 'sign-off checklist' };
+  const subjects = options.subjects ?? subjectPattern(packs);
+  const draft = subjects === undefined ? undefined : draftAroundHits(path, text, format, subjects);
+  if (draft === undefined) return { claims: [], flags: [], skipped: 'no topic term' };
+  return checkDraft(draft, packs, options);
+}
+
+/** The compiled subject matcher of the packs, global (it finds every mention). */
+export function subjectPattern(packs: LoadedPacks): RegExp | undefined {
+  return topicPattern(topicWordsOf(packs), 'giu');
 }
 
 /**
@@ -248,6 +279,14 @@ function describeFlaggedRules(flags: Flag[], packs: LoadedPacks): RuleInfo[] {
 /** Rules that live in code (arith.*, unit.*) describe themselves through their first flag. */
 function describeFromFlag(flag: Flag): RuleInfo {
   return { id: flag.ruleId, summary: flag.reason, description: flag.reason, defaultLevel: flag.level, sources: flag.sources };
+}
+
+function pickRun(options: CheckOptions): Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress'> {
+  const picked: Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress'> = {};
+  if (options.jobs !== undefined) picked.jobs = options.jobs;
+  if (options.cache !== undefined) picked.cache = options.cache;
+  if (options.onProgress !== undefined) picked.onProgress = options.onProgress;
+  return picked;
 }
 
 function pickDefined(options: CheckOptions): { include?: string[]; exclude?: string[] } {

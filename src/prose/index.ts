@@ -1,2 +1,3 @@
 export { splitSentences } from './split-sentences.js';
-export { createTopicMatcher, type TopicMatcher } from './topic-matcher.js';
+export { createTopicMatcher, topicPattern, type TopicMatcher } from './topic-matcher.js';
+export { topicWordsOf } from './topic-words.js';

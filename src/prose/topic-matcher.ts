@@ -10,12 +10,18 @@ export interface TopicMatcher {
 
 /** Builds the matcher; longer words first so "carbon dioxide" wins over "carbon". */
 export function createTopicMatcher(words: readonly string[]): TopicMatcher {
+  const pattern = topicPattern(words, 'iu');
+  if (pattern === undefined) return { test: () => false };
+  return { test: (text) => pattern.test(text) };
+}
+
+/** The matcher's one regular expression (with `flags`, e.g. `giu` to find every hit); undefined for no words. */
+export function topicPattern(words: readonly string[], flags: string): RegExp | undefined {
   const unique = [...new Set(words.map((w) => w.trim().toLowerCase()).filter((w) => w.length > 0))];
-  if (unique.length === 0) return { test: () => false };
+  if (unique.length === 0) return undefined;
   unique.sort((a, b) => b.length - a.length);
   const body = unique.map(escapeForPattern).join('|');
-  const pattern = new RegExp(`(?<![\\p{L}\\p{N}])(?:${body})(?![\\p{L}\\p{N}])`, 'iu');
-  return { test: (text) => pattern.test(text) };
+  return new RegExp(`(?<![\\p{L}\\p{N}])(?:${body})(?![\\p{L}\\p{N}])`, flags);
 }
 
 function escapeForPattern(word: string): string {

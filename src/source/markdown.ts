@@ -40,11 +40,12 @@ const REMOVED_INLINE = new Set<string>(['inlineCode', 'html', 'break', 'image', 
  *     // [{ kind: 'heading', text: 'Cores', ... }, { kind: 'paragraph', text: 'The EPICA core',
  *     //    offsets: [9, 10, 11, 12, 15, ...], heading: 'Cores' }]
  */
-export function readMarkdownBlocks(text: string): ProseBlock[] {
+export function readMarkdownBlocks(text: string, heading = ''): ProseBlock[] {
   // The parser drops a leading byte-order mark and counts its offsets from after it.
   const base = text.charCodeAt(0) === 0xfeff ? 1 : 0;
   const tree = fromMarkdown(base === 1 ? text.slice(1) : text, PARSE_OPTIONS);
-  const walk = { text, base, heading: '', blocks: [] as ProseBlock[] };
+  // `heading`: the heading above `text` when `text` is a window of a longer file (source/windows.ts).
+  const walk = { text, base, heading, blocks: [] as ProseBlock[] };
   visitBlocks(tree, 'paragraph', walk);
   return walk.blocks;
 }
