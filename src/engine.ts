@@ -11,7 +11,7 @@ import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
 import type { LoadedPacks } from './rulepack/types.js';
-import { blockRange, createLineIndex, draftAroundHits, draftFormat, findDrafts, readDraftText } from './source/index.js';
+import { blockRange, createLineIndex, draftAroundHits, draftFormat, findDrafts } from './source/index.js';
 import { runFiles, type FileTask } from './speed/run-files.js';
 import type { ResultCache } from './speed/cache.js';
 import { inShard, type Shard } from './speed/shard.js';

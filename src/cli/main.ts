@@ -6,6 +6,7 @@ import { registerCheck } from './commands/check.js';
 import { registerChecklist } from './commands/checklist.js';
 import { registerExplain } from './commands/explain.js';
 import { registerInit } from './commands/init.js';
+import { registerMerge } from './commands/merge.js';
 import { registerRefs } from './commands/refs.js';
 import { registerSignoff } from './commands/signoff.js';
 import type { CliContext } from './context.js';
@@ -23,7 +24,7 @@ export async function main(argv: string[], context: Partial<CliContext> = {}): P
     .addHelpText('after', `\n${CAUTIONS}\n`)
     .exitOverride()
     .configureOutput({ writeOut: ctx.stdout, writeErr: ctx.stderr });
-  for (const register of [registerCheck, registerChecklist, registerSignoff, registerRefs, registerExplain, registerInit]) {
+  for (const register of [registerCheck, registerChecklist, registerSignoff, registerRefs, registerExplain, registerInit, registerMerge]) {
     register(program, ctx);
   }
   for (const command of program.commands) command.addHelpText('after', `\n${CAUTIONS}\n`);
@@ -54,5 +55,6 @@ function processContext(): Omit<CliContext, 'exitCode'> {
       return Buffer.concat(chunks).toString('utf8');
     },
     isTTY: process.stdout.isTTY === true,
+    stderrIsTTY: process.stderr.isTTY === true,
   };
 }

@@ -1,8 +1,6 @@
 import type { Command } from 'commander';
 import { FirnlineError } from '../../errors.js';
-import { describeRule } from '../../rulepack/describe-rule.js';
 import type { CliContext } from '../context.js';
-import { loadRunSettings } from '../run-settings.js';
 
 /** `firnline explain <id>`: one rule or reference value in full, with its citations. */
 export function registerExplain(program: Command, ctx: CliContext): void {
@@ -13,6 +11,7 @@ export function registerExplain(program: Command, ctx: CliContext): void {
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (v: string, all: string[]) => [...all, v], [] as string[])
     .action(async (id: string, flags: { config?: string; pack: string[] }) => {
+      const [{ describeRule }, { loadRunSettings }] = await Promise.all([import('../../rulepack/describe-rule.js'), import('../run-settings.js')]);
       const { packs } = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const info = describeRule(packs, id) ?? describeRule(packs, `value.${id}`);
       if (info === undefined) {

@@ -1,10 +1,8 @@
 import type { Command } from 'commander';
 import { Option } from 'commander';
-import { describeRange } from '../../rulepack/describe-range.js';
 import type { ReferenceValue } from '../../rulepack/types.js';
 import type { Source } from '../../types.js';
 import type { CliContext } from '../context.js';
-import { loadRunSettings } from '../run-settings.js';
 
 /** One reference value in `firnline refs --format json`. */
 export interface RefEntry {
@@ -45,12 +43,6 @@ function sourceEntry(s: Source): RefEntry['sources'][number] {
   return { cite: s.cite, ...(s.doi === undefined ? {} : { doi: s.doi }), ...(s.url === undefined ? {} : { url: s.url }), how: s.how };
 }
 
-function refText(r: ReferenceValue): string {
-  const dated = r.asOf === undefined ? '' : ` (as of ${r.asOf})`;
-  const cites = r.sources.map((s) => `    ${shortCite(s)}`).join('\n');
-  return `value.${r.id}\n  ${r.measures}\n  ${describeRange(r)}${dated}\n${cites}\n`;
-}
-
 /** `Authors (year) doi:...`: the citation cut after its year, with its DOI or URL. */
 export function shortCite(s: Source): string {
   const head = /^.*?\(\d{4}[^)]*\)/u.exec(s.cite)?.[0] ?? s.cite;
@@ -68,7 +60,13 @@ export function registerRefs(program: Command, ctx: CliContext): void {
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (v: string, all: string[]) => [...all, v], [] as string[])
     .action(async (query: string | undefined, flags: { format: 'text' | 'json'; config?: string; pack: string[] }) => {
+      const [{ loadRunSettings }, { describeRange }] = await Promise.all([import('../run-settings.js'), import('../../rulepack/describe-range.js')]);
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
+      const refText = (r: ReferenceValue): string => {
+        const dated = r.asOf === undefined ? '' : ` (as of ${r.asOf})`;
+        const cites = r.sources.map((s) => `    ${shortCite(s)}`).join('\n');
+        return `value.${r.id}\n  ${r.measures}\n  ${describeRange(r)}${dated}\n${cites}\n`;
+      };
       const found = matchingReferences(run.packs.references, query);
       if (flags.format === 'json') ctx.stdout(`${JSON.stringify(found.map(refEntry), null, 2)}\n`);
       else ctx.stdout(found.length === 0 ? `No reference value matches "${query ?? ''}".\n` : found.map(refText).join('\n'));
