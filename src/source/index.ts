@@ -9,4 +9,4 @@ export { createLineIndex, type LineIndex } from './line-index.js';
 export { readMarkdownBlocks } from './markdown.js';
 export { readPlainTextBlocks } from './plain-text.js';
 export { blockRange } from './block-range.js';
-export { draftAroundHits, markdownSegments, type Window } from './windows.js';
+export { draftAroundHits, markdownSegments, readWindowBlocks, type Window } from './windows.js';

@@ -23,7 +23,7 @@ export function draftAroundHits(path: string, text: string, format: Draft['forma
     const all = format === 'markdown' ? readMarkdownBlocks(text) : readPlainTextBlocks(text);
     blocks = all.filter((b) => windows.some((w) => (b.offsets[0] ?? -1) >= w.start && (b.offsets[0] ?? -1) < w.end));
   } else {
-    blocks = windows.flatMap((w) => windowBlocks(text, w, headingBefore(text, segments.headings, w.start)));
+    blocks = readWindowBlocks(text, windows, segments.headings);
   }
   return { path, text, format, blocks };
 }
@@ -185,6 +185,11 @@ function headingBefore(text: string, headings: Window[], offset: number): string
   }
   if (found === undefined) return '';
   return readMarkdownBlocks(text.slice(found.start, found.end))[0]?.text ?? '';
+}
+
+/** The blocks of each window (ascending, from markdownSegments), each parsed on its own. */
+export function readWindowBlocks(text: string, windows: Window[], headings: Window[]): ProseBlock[] {
+  return windows.flatMap((w) => windowBlocks(text, w, headingBefore(text, headings, w.start)));
 }
 
 /** The blocks of one window, parsed on its own, with offsets into the whole file. */
