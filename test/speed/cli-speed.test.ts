@@ -16,7 +16,7 @@ async function firnline(cwd: string, ...args: string[]): Promise<string> {
   } catch (error) {
     const e = error as { code?: number; stdout?: string; stderr?: string };
     if (e.code === 1 && e.stdout !== undefined) return e.stdout;
-    throw new Error(`firnline ${args.join(' ')} failed (${e.code}): ${e.stderr}`);
+    throw new Error(`firnline ${args.join(" ")} failed (${e.code}): ${e.stderr}`, { cause: error });
   }
 }
 
