@@ -39,9 +39,9 @@ export interface RunFilesOptions {
 
 /**
  * How many on-topic files must wait before a pool is worth its start (each worker loads the NLP
- * library and the packs, some 0.5 s): below this, one thread does the lot.
+ * library and the packs, some 0.5 s on an idle core): below this, one thread does the lot.
  */
-export const POOL_MIN_FILES = 24;
+export const POOL_MIN_FILES = 8;
 
 /** The worker's module; absent when running from the TypeScript sources (tests), then no pool. */
 const WORKER_FILE = fileURLToPath(new URL('./pool-worker.js', import.meta.url));
