@@ -1,6 +1,6 @@
 import { bindQuantities } from './claims/bind.js';
 import { checkArithmetic } from './checks/arithmetic.js';
-import { checkReasoning } from './checks/reasoning/index.js';
+import { checkReasoning, judgeByStance, paragraphReader, type ParagraphContext } from './checks/reasoning/index.js';
 import { checkReferences } from './checks/reference.js';
 import { checkUnits } from './checks/units.js';
 import { FirnlineError } from './errors.js';
@@ -156,8 +156,9 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
   draft.blocks.forEach((block, blockIndex) => {
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
+    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
     sentences.forEach((sentence, index) => {
-      const found = examineSentence(paragraph, index, packs, topic.test(sentence.text));
+      const found = examineSentence(paragraph, index, packs, topic.test(sentence.text), context);
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -204,27 +205,27 @@ const TWO_NUMBERS = /\d[^\d]+\d/u;
  * counts as a claim when they flag it: "from 12,900 to 11,700 years ago: a cold spell of some 2,000
  * years" is wrong whatever its subject. Undefined when the sentence holds no claim.
  */
-function examineSentence(paragraph: string[], index: number, packs: LoadedPacks, onTopic: boolean): SentenceFindings | undefined {
+function examineSentence(paragraph: string[], index: number, packs: LoadedPacks, onTopic: boolean, context: ParagraphContext): SentenceFindings | undefined {
   const text = paragraph[index] ?? '';
-  const context = paragraph.slice(0, index);
+  const before = paragraph.slice(0, index);
   if (!onTopic) {
     if (!TWO_NUMBERS.test(text)) return undefined;
     const quantities = parseQuantities(text);
-    const drafts = [...checkArithmetic(text, quantities, context), ...checkUnits(text, quantities, context)];
+    const drafts = [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
     return drafts.length === 0 ? undefined : { quantities, bindings: [], verdicts: [], drafts };
   }
   const quantities = parseQuantities(text);
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
   const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
   const reference = checkReferences(text, quantities, bindings, packs);
-  const drafts = preferSpecific([
-    ...reference.flags,
-    ...checkArithmetic(text, quantities, context),
-    ...checkUnits(text, quantities, context),
-    ...checkReasoning(paragraph, index, packs),
-  ]);
+  const reading = paragraphReader(paragraph, packs, context)(index);
+  const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)]);
+  const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(paragraph, index, packs, context)];
   const measured = quantities.some((q) => q.dimension !== 'number');
-  if (!measured && bindings.length === 0 && drafts.length === 0) return undefined;
+  const p = reading?.props;
+  // A causal or order statement is a claim to sign off even without a number.
+  const asserts = p !== undefined && p.causes.length + p.orders.length + p.relations.length + p.comparisons.length + p.evidence.length > 0;
+  if (!measured && bindings.length === 0 && drafts.length === 0 && !asserts) return undefined;
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
 

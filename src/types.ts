@@ -39,6 +39,8 @@ export interface ProseBlock {
   offsets: number[];
   /** Text of the nearest heading above the block (empty when there is none). */
   heading: string;
+  /** The draft marks this block as a deliberate quotation of a claim (`<!-- firnline: reported -->`). */
+  marked?: boolean;
 }
 
 /** A draft after reading: the original text, and its prose blocks in document order. */

@@ -49,6 +49,8 @@ function endsSentence(text: string, dotAt: number, marks: string, space: string,
   if (next >= text.length) return true;
   if (marks !== '.') return /^[\p{Lu}\p{N}"'“‘([*]/u.test(text.slice(next, next + 1));
   const word = /([\p{L}.]+)$/u.exec(text.slice(Math.max(0, dotAt - 12), dotAt))?.[1]?.toLowerCase() ?? '';
+  // "about 9 °C." and "by 5 K." end with a unit symbol, not with "c." (circa) or an initial.
+  if (/(?:°|\d\s?)\p{L}$/u.test(text.slice(Math.max(0, dotAt - 3), dotAt))) return /^[\p{Lu}\p{N}"'“‘([]/u.test(text.slice(next, next + 1));
   if (ABBREVIATIONS.has(word)) return false;
   if (/^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1))) return false; // an initial: "J. R. Petit"
   return /^[\p{Lu}\p{N}"'“‘([]/u.test(text.slice(next, next + 1));

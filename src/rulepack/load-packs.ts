@@ -7,7 +7,7 @@ import { fileURLToPath } from 'node:url';
 import { FirnlineError, FirnlineErrors } from '../errors.js';
 import type { Source } from '../types.js';
 import { resolvePack, type KnownIds } from './resolve-pack.js';
-import type { LoadedPacks, RulePack } from './types.js';
+import type { Lexicon, LoadedPacks, RulePack } from './types.js';
 import { byPlace, schemaErrors } from './validate-schema.js';
 import { readYamlFile } from './yaml-file.js';
 
@@ -69,10 +69,23 @@ export function mergePacks(packs: RulePack[]): LoadedPacks {
     reasoning: all((p) => p.reasoning),
     patterns: all((p) => p.patterns),
     sources: all((p) => p.sources),
+    lexicon: joinLexicons(packs.map((p) => p.lexicon)),
     topicWords: [...new Set(terms.flatMap((t) => t.words.map((w) => w.toLowerCase())))],
     reference: (id) => byRef.get(id),
     term: (id) => byTerm.get(id),
   };
+}
+
+/** Lexicons joined class by class and key by key, in pack order. */
+function joinLexicons(lexicons: Lexicon[]): Lexicon {
+  const out: Lexicon = {};
+  for (const lexicon of lexicons) {
+    for (const [cls, keys] of Object.entries(lexicon)) {
+      const into = (out[cls] ??= {});
+      for (const [key, words] of Object.entries(keys)) into[key] = [...(into[key] ?? []), ...words];
+    }
+  }
+  return out;
 }
 
 function knownIn(packs: RulePack[]): KnownIds {

@@ -34,11 +34,18 @@ export interface RawReferenceValue {
 export interface RawDirectionFact {
   id: string;
   statement: string;
-  wrong: string[];
+  wrong?: string[];
+  relation?: OneOrMany<{ x: string; y: string; sign: 'same' | 'opposite' }>;
+  comparison?: OneOrMany<{ a: OneOrMany<string>; b: OneOrMany<string>; attribute: 'age' | 'size'; sign: 'higher' | 'lower' }>;
+  order?: OneOrMany<{ first: string; then: string; regions?: OneOrMany<string>; during?: OneOrMany<string> }>;
+  change?: OneOrMany<{ of: OneOrMany<string>; attribute?: 'temperature' | 'amount'; during?: OneOrMany<string>; sign: 'up' | 'down' }>;
   right?: string[];
   level?: Level;
   sources: string[];
 }
+
+/** One item or a list of them, as the schema allows. */
+export type OneOrMany<T> = T | T[];
 
 /** A pattern rule as written. */
 export interface RawPattern {
@@ -75,4 +82,5 @@ export interface RawPack {
   direction_facts?: RawDirectionFact[];
   patterns?: RawPattern[];
   reasoning_checks?: RawReasoningCheck[];
+  lexicon?: Record<string, string[] | Record<string, string[]>>;
 }

@@ -8,7 +8,8 @@ import type { FirnlineError } from '../errors.js';
 import type { Source } from '../types.js';
 import type { RawPack } from './raw-pack.js';
 import { resolveReference } from './resolve-reference.js';
-import type { DirectionFact, PatternRule, ReasoningCheck, RulePack, Term } from './types.js';
+import type { DirectionFact, FactForm, Lexicon, PatternRule, ReasoningCheck, RulePack, Term } from './types.js';
+import type { OneOrMany, RawDirectionFact } from './raw-pack.js';
 import type { YamlFile } from './yaml-file.js';
 import { regexProblem } from './regex-problem.js';
 
@@ -55,10 +56,13 @@ export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): Rule
   const references = (raw.reference_values ?? []).flatMap((r, i) => resolveReference(scope, r, ['reference_values', i]) ?? []);
   const directions: DirectionFact[] = (raw.direction_facts ?? []).map((d, i) => {
     const path = ['direction_facts', i];
-    checkRegexes(scope, d.wrong, [...path, 'wrong']);
+    checkRegexes(scope, d.wrong ?? [], [...path, 'wrong']);
+    if (d.wrong === undefined && factForms(d).length === 0) {
+      errors.push(yaml.errorAt('pack-schema', path, 'a direction fact needs `relation`, `comparison`, `order`, `change` or `wrong`'));
+    }
     checkRegexes(scope, d.right ?? [], [...path, 'right']);
     return {
-      id: d.id, statement: d.statement, wrong: d.wrong, level: d.level ?? 'warning',
+      id: d.id, statement: d.statement, says: factForms(d), wrong: d.wrong ?? [], level: d.level ?? 'warning',
       sources: scope.sourcesAt(d.sources, [...path, 'sources']),
       ...(d.right === undefined ? {} : { right: d.right }),
     };
@@ -83,7 +87,7 @@ export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): Rule
   if (errors.length > 0) return errors;
   return {
     id: raw.pack, version: raw.version, asOf: raw.as_of, file,
-    sources: own, terms: termList, references, directions, reasoning, patterns,
+    sources: own, terms: termList, references, directions, reasoning, patterns, lexicon: lexiconOf(raw),
   };
 }
 
@@ -109,4 +113,29 @@ function checkRegexes(scope: PackScope, sources: string[], path: (string | numbe
     const problem = regexProblem(source);
     if (problem !== undefined) scope.errors.push(scope.yaml.errorAt('pack-regex', single ? path : [...path, i], problem));
   });
+}
+
+const list = <T>(x: OneOrMany<T> | undefined): T[] => (x === undefined ? [] : Array.isArray(x) ? x : [x]);
+
+/** A fact's `relation`, `comparison`, `order` and `change` entries as one list of forms. */
+function factForms(d: RawDirectionFact): FactForm[] {
+  const variable = (v: string) => {
+    const [key = v, attribute = 'amount'] = v.split(':');
+    return { key, attribute };
+  };
+  return [
+    ...list(d.relation).map((r): FactForm => ({ kind: 'relation', x: variable(r.x), y: variable(r.y), sign: r.sign === 'same' ? 1 : -1 })),
+    ...list(d.comparison).map((c): FactForm => ({ kind: 'comparison', a: list(c.a), b: list(c.b), attribute: c.attribute, sign: c.sign === 'higher' ? 1 : -1 })),
+    ...list(d.order).map((o): FactForm => ({ kind: 'order', first: o.first, then: o.then, regions: list(o.regions), during: list(o.during) })),
+    ...list(d.change).map((c): FactForm => ({
+      kind: 'change', of: list(c.of), attribute: c.attribute ?? 'temperature', during: list(c.during), sign: c.sign === 'up' ? 1 : -1,
+    })),
+  ];
+}
+
+/** The pack's lexicon with every class as key → phrases (a flat list becomes the key `all`). */
+function lexiconOf(raw: { lexicon?: Record<string, string[] | Record<string, string[]>> }): Lexicon {
+  const out: Lexicon = {};
+  for (const [cls, value] of Object.entries(raw.lexicon ?? {})) out[cls] = Array.isArray(value) ? { all: value } : { ...value };
+  return out;
 }

@@ -63,13 +63,38 @@ export interface ReferenceValue {
   notes?: string;
 }
 
+/**
+ * What a direction fact says, as data over the lexicon's keys (see src/propositions):
+ * - relation: y moves with x (`sign` 1) or against it (-1), e.g. water:temperature vs co2:uptake;
+ * - comparison: `a` stands higher (1) or lower (-1) than `b` in `attribute` (age, size of swings);
+ * - order: `first` changed before `then`, where a region of `regions` is named (any, when empty);
+ * - change: what `of` (an entity or region) did in `attribute` during a period of `during`.
+ */
+export type FactForm =
+  | { kind: 'relation'; x: FactVariable; y: FactVariable; sign: 1 | -1 }
+  | { kind: 'comparison'; a: string[]; b: string[]; attribute: 'age' | 'size'; sign: 1 | -1 }
+  | { kind: 'order'; first: string; then: string; regions: string[]; during: string[] }
+  | { kind: 'change'; of: string[]; attribute: 'temperature' | 'amount'; during: string[]; sign: 1 | -1 };
+
+/** A lexicon key with the attribute a relation reads (`water:temperature`, `co2:uptake`). */
+export interface FactVariable {
+  key: string;
+  attribute: string;
+}
+
+/** The lexicon of the loaded packs: class → key → phrases (a flat class has the key `all`). */
+export type Lexicon = Record<string, Record<string, string[]>>;
+
 /** A sourced statement of which way an effect goes. */
 export interface DirectionFact {
   id: string;
   statement: string;
+  /** What the fact says, read against the propositions of each sentence. */
+  says: FactForm[];
   /**
    * Phrasings of the wrong direction to catch, as JavaScript regular expressions (source text,
    * compiled by the loader with the `iu` flags; each is checked for validity and length on load).
+   * For team packs; the built-in pack states its facts as `says` data only.
    */
   wrong: string[];
   /** Phrasings of the right direction (same syntax), used to avoid flagging a correct sentence. */
@@ -120,6 +145,7 @@ export interface RulePack {
   directions: DirectionFact[];
   reasoning: ReasoningCheck[];
   patterns: PatternRule[];
+  lexicon: Lexicon;
 }
 
 /** All packs of a run merged (built-in first, then extra packs in order). Ids are unique across packs. */
@@ -131,6 +157,8 @@ export interface LoadedPacks {
   reasoning: ReasoningCheck[];
   patterns: PatternRule[];
   sources: Source[];
+  /** The lexicons of all packs joined, class by class and key by key. */
+  lexicon: Lexicon;
   /** Every term word, lower-case, for the file and sentence prefilter. */
   topicWords: string[];
   reference(id: string): ReferenceValue | undefined;

@@ -14,7 +14,7 @@ import type { PatternRule, RulePack } from '../../src/rulepack/types.js';
 function teamPack(patterns: PatternRule[]): ReturnType<typeof mergePacks> {
   const pack: RulePack = {
     id: 'house', version: '1.0.0', asOf: '2026-01-01', file: '/docs/house-rules.yaml',
-    sources: [], terms: [], references: [], directions: [], reasoning: [], patterns,
+    sources: [], terms: [], references: [], directions: [], reasoning: [], patterns, lexicon: {},
   };
   return mergePacks([pack]);
 }

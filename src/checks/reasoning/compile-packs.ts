@@ -3,9 +3,6 @@
  * cheap prefilter, direction facts and pattern rules into regular expressions. Cached per
  * LoadedPacks object, so every sentence of a run shares one compilation.
  */
-import { compilePhrases } from '../../claims/frames-match.js';
-import { FRAME_WORDS } from '../../claims/frames-words.js';
-import { DEFAULT_STANCE_WORDS, type StanceWords } from '../../claims/stance.js';
 import { FirnlineError } from '../../errors.js';
 import { regexProblem } from '../../rulepack/regex-problem.js';
 import type { DirectionFact, LoadedPacks, PatternRule, ReasoningCheck } from '../../rulepack/types.js';
@@ -18,7 +15,6 @@ export interface CompiledCheck {
   check: ReasoningCheck;
   entry: DetectorEntry;
   words: Slots;
-  stance: StanceWords;
   /** One regex per key cue list; the detector runs only when all of them match. */
   prefilter: RegExp[];
 }
@@ -42,14 +38,9 @@ export function compilePacks(packs: LoadedPacks): CompiledPacks {
       const entry = DETECTORS[check.id];
       if (entry === undefined || !check.enabled) return [];
       const words = compileSlots(check.words);
-      const stance = {
-        reported: [...DEFAULT_STANCE_WORDS.reported, ...compilePhrases(check.words['reported'] ?? [])],
-        answered: [...DEFAULT_STANCE_WORDS.answered, ...compilePhrases(check.words['answered'] ?? [])],
-        clauseBreaks: FRAME_WORDS.clauseBreaks,
-      };
-      return [{ check, entry, words, stance, prefilter: entry.keys.map((k) => prefilterFor(check.words[k] ?? [])) }];
+      return [{ check, entry, words, prefilter: entry.keys.map((k) => prefilterFor(check.words[k] ?? [])) }];
     }),
-    directions: packs.directions.map((fact) => {
+    directions: packs.directions.filter((fact) => fact.wrong.length > 0).map((fact) => {
       const file = fileOf((p) => p.directions.includes(fact));
       const compile = (source: string) => safeRegex(source, `direction fact ${fact.id}`, file);
       return { fact, wrong: fact.wrong.map(compile), right: (fact.right ?? []).map(compile), file };

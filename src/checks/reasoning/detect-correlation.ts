@@ -1,29 +1,18 @@
 /**
- * `logic.correlation-as-proof`: two curves moving together presented as proof of which drives which.
+ * `logic.correlation-as-proof`: co-variation offered as proof of a cause.
  *
- *   "The close match between the CO2 and temperature curves proves that CO2 controls the climate."
- *        ^^^^^^^^^^^ correlation                           ^^^^^^^^^^^^^^^^^^^^^^^^^ flagged
+ *   "The close match between the two curves proves that CO2 controls the climate."
+ *    evidence: correlation → proof (undenied) → cause  ^ flagged from the correlation to the cause
  *
- * Fires on a correlation cue (`correlation`), then a proof word (`proof`) that is not denied
- * (`negation` just before it, or a `not-proof` phrase such as "does not by itself"), then a word
- * of causal direction (`direction`) after the proof word. "The match alone does not prove it"
- * and "the correlation is consistent with a feedback" pass.
+ * "The match alone does not prove it" and "the curves move together, as expected when each
+ * amplifies the other" pass: the proof is denied, or there is none.
  */
-import { findPhrases, isNegated } from '../../claims/frames-match.js';
-import { isBlocked, spanOf, type Cue, type DetectInput, type DetectorEntry } from './detector.js';
+import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 
-function detect({ sentence, words }: DetectInput): Cue[] {
-  const correlation = findPhrases(sentence, words('correlation'))[0];
-  if (correlation === undefined) return [];
-  const blockers = findPhrases(sentence, words('not-proof'));
-  const directions = findPhrases(sentence, words('direction'));
-  for (const proof of findPhrases(sentence, words('proof'))) {
-    if (isNegated(sentence, proof.first, words('negation')) || isBlocked(sentence, proof, blockers)) continue;
-    const direction = directions.find((d) => d.first > proof.last && d.first - proof.last <= 10);
-    if (direction !== undefined) return [spanOf(proof, direction)];
-  }
-  return [];
+function detect({ index, read }: DetectInput): Cue[] {
+  const evidence = read(index)?.props.evidence[0];
+  return evidence === undefined ? [] : [{ start: evidence.start, end: evidence.end }];
 }
 
 /** The detector entry for the registry. */
-export const correlationAsProof: DetectorEntry = { detect, keys: ['correlation', 'proof', 'direction'] };
+export const correlationAsProof: DetectorEntry = { detect, keys: [] };

@@ -1,77 +1,64 @@
 /**
- * `logic.either-or-causation`: CO2 and temperature framed as alternatives, when each drives the other.
+ * `logic.either-or-causation`: CO2 and temperature framed as alternatives, one direction asserted
+ * and the other denied, when each drove the other.
  *
- *   "The ice-core record shows that temperature drives CO2, not the other way round."
- *                                                           ^^^^^^^^^^^^^^^^^^^^^^^ flagged
- *   "...warming drives CO2, and CO2 does not drive warming."   (one direction asserted, the
- *        ^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^      other denied: flagged)
+ *   "CO2 was an effect of the warming, not a cause."         temperature → co2 asserted; co2 → temperature denied
+ *   "Temperature drives CO2, not the other way round."       the reverse denied
  *
- * Fires on an either/or marker (`either-or`, or an "either" with an "or" anywhere later in its
- * clause) in a sentence that names CO2, temperature and a
- * causal word (`causal`), or on two causal statements in opposite directions joined by "or" or
- * with one of them denied. A veto (`both`: "each drives the other", "feedback", "not either/or")
- * anywhere in the sentence, or for a question anywhere in the paragraph, lets it pass; a denied
- * veto ("it cannot be both") does not.
+ * A feedback, a loop or "both" in the sentence or its neighbours answers the framing, and passes.
  */
-import { clauseOf, findPhrases, isNegated, type PhraseHit } from '../../claims/frames-match.js';
-import { nearestMention, subjectMentions } from '../../claims/frames-order.js';
-import { tokenizeSentence, type SentenceTokens } from '../../claims/frames-tokens.js';
-import { spanOf, type Cue, type DetectInput, type DetectorEntry } from './detector.js';
+import type { Cause } from '../../propositions/index.js';
+import type { Cue, DetectInput, DetectorEntry } from './detector.js';
+import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
 
-interface Causal {
-  hit: PhraseHit;
-  cause?: string;
-  effect?: string;
-  negated: boolean;
-}
+const REVERSE = /\b(?:not|never|rather than|instead of)\s+(?:\w+\s+){0,2}(?:the other way (?:round|around)|vice versa|the reverse|the opposite way)\b|\b(?:one-way|one way street|only one way)\b/iu;
 
-function causalStatements({ sentence, words }: DetectInput): Causal[] {
-  const mentions = subjectMentions(sentence, { co2: words('co2'), temperature: words('temperature') });
-  return findPhrases(sentence, words('causal')).map((hit) => {
-    const passive = [1, 2].some((k) => sentence.tokens[sentence.words[hit.last + k] ?? -1]?.text === 'by');
-    const left = nearestMention(sentence, mentions, hit, -1)?.kind;
-    const right = nearestMention(sentence, mentions, hit, 1)?.kind;
-    const [cause, effect] = passive ? [right, left] : [left, right];
-    return { hit, negated: isNegated(sentence, hit.first, words('negation')), ...(cause ? { cause } : {}), ...(effect ? { effect } : {}) };
+function detect({ index, read }: DetectInput): Cue[] {
+  const here = read(index);
+  if (here === undefined) return [];
+  const loop = [index - 1, index, index + 1].some((i) => {
+    const r = read(i);
+    // "it cannot be both" denies the loop; "both" alone grants it.
+    const both = r?.s.words.findIndex((w) => w.text === 'both') ?? -1;
+    const bothGranted = r !== undefined && both >= 0 && !r.s.words.slice(Math.max(0, both - 3), both).some((w) => ['not', 'never', 'no'].includes(w.text));
+    return r !== undefined && (r.props.causes.some((c) => c.role === 'feedback' && c.polarity === 'asserted') || bothGranted);
   });
-}
-
-// "Either the ocean warmed and gave off CO2 or CO2 warmed the ocean": the two halves of an
-// either/or can be longer than the six-word gap of a cue phrase, so any "either" with an "or"
-// later in the same clause is a marker too.
-function longEitherOr(sentence: SentenceTokens): PhraseHit | undefined {
-  const text = (w: number) => sentence.tokens[sentence.words[w] ?? -1]?.text.toLowerCase();
-  const either = sentence.words.findIndex((_, w) => text(w) === 'either');
-  if (either === -1) return undefined;
-  const or = sentence.words.findIndex((_, w) => w > either && text(w) === 'or' && clauseOf(sentence, w) === clauseOf(sentence, either));
-  const first = sentence.tokens[sentence.words[either] ?? -1];
-  const last = sentence.tokens[sentence.words[or] ?? -1];
-  if (or === -1 || first === undefined || last === undefined) return undefined;
-  return { phrase: 'either ... or', first: either, last: or, start: first.start, end: last.end };
-}
-
-function detect(input: DetectInput): Cue[] {
-  const { sentence, words, paragraph, index } = input;
-  // "should not pretend it can be both" denies the veto, so it does not count as one.
-  const vetoes = findPhrases(sentence, words('both')).filter((hit) => !isNegated(sentence, hit.first, words('negation'), 5));
-  if (vetoes.length > 0) return [];
-  if (sentence.text.trimEnd().endsWith('?')) {
-    const answered = paragraph.some((s, i) => i !== index && findPhrases(tokenizeSentence(s, [], null), words('both')).length > 0);
-    if (answered) return [];
-  }
-  const causal = causalStatements(input);
-  const names = (kind: string) => findPhrases(sentence, words(kind)).length > 0;
-  const marker = findPhrases(sentence, words('either-or'))[0] ?? longEitherOr(sentence);
-  if (marker !== undefined && causal.length > 0 && names('co2') && names('temperature')) return [spanOf(marker, marker)];
-  for (const [i, a] of causal.entries()) {
-    for (const b of causal.slice(i + 1)) {
-      const opposite = a.cause !== undefined && a.cause === b.effect && a.effect !== undefined && a.effect === b.cause && a.cause !== a.effect;
-      const joinedByOr = sentence.words.slice(a.hit.last + 1, b.hit.first).some((w) => sentence.tokens[w]?.text === 'or');
-      if (opposite && (joinedByOr || a.negated !== b.negated)) return [spanOf(a.hit, b.hit)];
+  if (loop) return [];
+  const causes = here.props.causes.filter((c) => c.polarity !== 'open' && c.role !== 'start');
+  const aboutCo2 = here.s.of('entities', 'co2').length > 0;
+  // An unnamed agent denied beside an asserted "CO2 is an effect" is CO2 ("a consequence cannot be a cause").
+  // Which side acts: CO2, or temperature (on CO2 or on what the sentence is about).
+  const direction = (c: Cause) => {
+    if (isCo2OnWarming(c) || (aboutCo2 && c.agent === undefined && c.polarity === 'denied')) return 'co2';
+    // "temperature drives CO2"; "the driver of the glacial cycles was temperature rather than CO2".
+    if (isWarmingOnCo2(c) || (isWarmingSide(c.agent) && c.patient !== undefined && c.patient !== c.agent)) return 'temperature';
+    return undefined;
+  };
+  const answer = answersEitherOr(read(index - 1), here.s.text);
+  if (answer) return [{ start: 0, end: here.s.text.length }];
+  for (const asserted of causes.filter((c) => c.polarity === 'asserted' && direction(c) !== undefined)) {
+    const denied = causes.find((c) => c.polarity === 'denied' && direction(c) !== undefined && direction(c) !== direction(asserted));
+    if (denied !== undefined) return [{ start: Math.min(asserted.start, denied.start), end: Math.max(asserted.end, denied.end) }];
+    // "Either CO2 drives temperature or temperature drives CO2": two directions set up as a choice.
+    const choice = causes.find((c) => c.polarity === 'asserted' && direction(c) !== undefined && direction(c) !== direction(asserted));
+    if (choice !== undefined && here.s.words.some((w) => w.text === 'or' || w.text === 'either') && !here.s.question) {
+      return [{ start: Math.min(asserted.start, choice.start), end: Math.max(asserted.end, choice.end) }];
     }
+    const reverse = REVERSE.exec(here.s.text);
+    if (reverse !== null && reverse.index >= asserted.end - 1) return [{ start: asserted.start, end: reverse.index + reverse[0].length }];
   }
   return [];
 }
 
+/** A question that sets the two directions against each other ("...or did temperature drive CO2?"), answered by picking one. */
+function answersEitherOr(question: ReturnType<DetectInput['read']>, text: string): boolean {
+  if (question === undefined || !question.s.question || !question.s.words.some((w) => w.text === 'or')) return false;
+  const both = question.props.causes.some(isCo2OnWarming) && question.props.causes.some(isWarmingOnCo2);
+  if (!both) return false;
+  // "The cores give a clear answer: temperature." picks one side, as "the latter" does.
+  const short = text.split(/\s+/u).length <= 12 && /\b(?:temperature|warming|co2|co₂|carbon dioxide)\b/iu.test(text) && !/\b(?:both|each|feedback|loop|and)\b/iu.test(text);
+  return short || /\b(?:the (?:first|second|former|latter)|the one|only one)\b/iu.test(text);
+}
+
 /** The detector entry for the registry. */
-export const eitherOrCausation: DetectorEntry = { detect, keys: ['co2', 'temperature', 'causal'] };
+export const eitherOrCausation: DetectorEntry = { detect, keys: [] };

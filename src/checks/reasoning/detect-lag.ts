@@ -1,44 +1,40 @@
 /**
- * `logic.lag-rules-out-cause`: a lag or lead used to rule out a cause.
+ * `logic.lag-rules-out-cause`: an order of events (temperature first, CO2 after) used to deny that
+ * CO2 acts on temperature, in the same sentence or in one that draws its conclusion.
  *
- *   "CO2 rose about 800 years after Antarctic temperature, so CO2 cannot have caused the warming."
- *                              ^^^^^ order cue           ^^^^^^^^^^^^^^^^^^^^^^^^^^^ flagged
- *   "Because the warming started first, carbon dioxide played no part in ending the ice ages."
- *                                                      ^^^^^^^^^^^^^^ flagged
+ *   "CO2 rose 800 years after Antarctic temperature, so it cannot have caused the warming."
+ *    order: temperature → co2                            cause co2 → temperature, denied  ^ flagged
+ *   "If CO2 trails temperature, how could it be the cause?"   (a rhetorical question denies it)
+ *   "The lag means the cores tell us nothing about climate sensitivity."
  *
- * Fires when the sentence names CO2, states an order of events (`order`), and after it denies
- * that CO2 causes warming (`rules-out`), unless the denial is itself denied (`not-rules-out`:
- * "does not mean CO2 cannot..."). A denial may carry the order in its own words ("merely
- * followed"). The flag starts at an inference word (`inference`) between the two when there is one.
- * Denying that CO2 was the *trigger* is correct and passes: a `trigger` word just after the denial
- * ("played no part in starting it"), or an amplifying role granted after it (`role-kept`: "...; it
- * amplified the warming"), shows the sentence denies the start, not every role.
+ * Denying only the trigger is right (orbital changes started each deglaciation): a denied `start`
+ * role passes, and so does a sentence that grants CO2 an amplifying or feedback role.
  */
-import { findPhrases, type PhraseHit } from '../../claims/frames-match.js';
-import { isBlocked, spanOf, type Cue, type DetectInput, type DetectorEntry } from './detector.js';
+import type { Cue, DetectInput, DetectorEntry } from './detector.js';
+import { isCo2OnWarming, isTemperatureFirst, opensWithInference } from './queries.js';
 
-/** How many words after a denial a trigger word may stand ("no part in ending the start" is too far). */
-const TRIGGER_WINDOW = 3;
+function detect({ index, read }: DetectInput): Cue[] {
+  const here = read(index);
+  if (here === undefined) return [];
+  const before = index > 0 && opensWithInference(here.s) ? read(index - 1) : undefined;
+  const ordered = here.props.orders.some(isTemperatureFirst) || (before?.props.orders.some(isTemperatureFirst) ?? false);
+  if (!ordered) return [];
+  const kept = here.props.causes.some((c) => c.polarity === 'asserted' && (c.role === 'amplify' || c.role === 'feedback') && (c.agent === 'co2' || c.agent === undefined));
+  if (kept) return [];
+  // "a consequence cannot also be a cause": an agent left unnamed in a sentence about CO2 is CO2.
+  const aboutCo2 = here.s.of('entities', 'co2').length > 0;
+  const denial = here.props.causes.find(
+    (c) => c.polarity === 'denied' && c.role !== 'start' && c.role !== 'feedback' && (isCo2OnWarming(c) || (aboutCo2 && c.agent === undefined)) && !onlyTheStart(here.s.text, c.end),
+  );
+  if (denial !== undefined) return [{ start: denial.start, end: denial.end }];
+  const follower = here.props.orders.find((o) => isTemperatureFirst(o) && o.dismissive);
+  return follower === undefined ? [] : [{ start: follower.start, end: follower.end }];
+}
 
-function detect({ sentence, words }: DetectInput): Cue[] {
-  if (findPhrases(sentence, words('co2')).length === 0) return [];
-  const orders = findPhrases(sentence, words('order'));
-  const blockers = findPhrases(sentence, words('not-rules-out'));
-  const inferences = findPhrases(sentence, words('inference'));
-  const triggers = findPhrases(sentence, words('trigger'));
-  const kept = findPhrases(sentence, words('role-kept'));
-  const cues: Cue[] = [];
-  for (const denial of findPhrases(sentence, words('rules-out'))) {
-    const inside = (o: PhraseHit) => o.first >= denial.first && o.last <= denial.last;
-    const order = orders.find((o) => o.last < denial.first || inside(o));
-    if (order === undefined || isBlocked(sentence, denial, blockers, 5)) continue;
-    if (triggers.some((t) => t.first > denial.last && t.first - denial.last <= TRIGGER_WINDOW)) continue;
-    if (kept.some((k) => k.first > denial.last)) continue;
-    const link = inferences.filter((i) => i.first > order.last && i.last < denial.first && denial.first - i.last <= 8).at(-1);
-    cues.push(spanOf(link ?? denial, denial));
-  }
-  return cues.slice(0, 1);
+/** "played no part in starting it": a denial about the start only. */
+function onlyTheStart(text: string, end: number): boolean {
+  return /^\W*(?:\w+\W+){0,2}(?:start|starting|trigger|triggering|initiat\w*|kick\w*|set(?:ting)? (?:it )?off|begin\w*|onset)\b/iu.test(text.slice(end));
 }
 
 /** The detector entry for the registry. */
-export const lagRulesOutCause: DetectorEntry = { detect, keys: ['co2', 'order', 'rules-out'] };
+export const lagRulesOutCause: DetectorEntry = { detect, keys: [] };

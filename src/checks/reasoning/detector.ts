@@ -4,6 +4,7 @@
  */
 import { compilePhrases, type Phrase, type PhraseHit } from '../../claims/frames-match.js';
 import type { SentenceTokens } from '../../claims/frames-tokens.js';
+import type { Reader } from './reading.js';
 
 /** The cue-word lists of one check, by name; a list the pack leaves out is empty. */
 export type Slots = (name: string) => Phrase[];
@@ -14,6 +15,8 @@ export interface DetectInput {
   words: Slots;
   paragraph: readonly string[];
   index: number;
+  /** The propositions and stance of sentence `i` of the paragraph. */
+  read: Reader;
 }
 
 /** A stretch of the sentence to flag (UTF-16 offsets). */

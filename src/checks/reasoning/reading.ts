@@ -1,0 +1,60 @@
+/**
+ * The propositions of a paragraph's sentences, read once and shared by every reasoning check and
+ * direction fact: a check about one sentence may need the one before ("CO2 lagged by 800 years.
+ * So it cannot have caused the warming.") or the one after (an answer to a question).
+ */
+import { compileLexicon, readPropositions, readSentence, stanceOf, type Propositions, type ReadSentence, type SentenceStance } from '../../propositions/index.js';
+import type { LoadedPacks } from '../../rulepack/types.js';
+import type { BlockKind } from '../../types.js';
+
+/** One sentence read: its words, how it holds its claims, and what it asserts. */
+export interface SentenceReading {
+  s: ReadSentence;
+  stance: SentenceStance;
+  props: Propositions;
+}
+
+/** What the engine knows about the block a paragraph comes from. */
+export interface ParagraphContext {
+  blockKind?: BlockKind;
+  heading?: string;
+  /** The block carries the deliberate-quotation marker. */
+  marked?: boolean;
+}
+
+/** Reads sentence `i` of a paragraph (undefined past its ends). */
+export type Reader = (i: number) => SentenceReading | undefined;
+
+const cache = new WeakMap<readonly string[], { packs: LoadedPacks; read: Reader }>();
+
+/** A reader over `paragraph`, cached per paragraph array and packs. */
+export function paragraphReader(paragraph: readonly string[], packs: LoadedPacks, context: ParagraphContext = {}): Reader {
+  const known = cache.get(paragraph);
+  if (known !== undefined && known.packs === packs) return known.read;
+  const lexicon = compileLexicon(packs);
+  const sentences = new Map<number, ReadSentence>();
+  const readings = new Map<number, SentenceReading>();
+  const sentenceAt = (i: number): ReadSentence | undefined => {
+    const text = paragraph[i];
+    if (text === undefined) return undefined;
+    let s = sentences.get(i);
+    if (s === undefined) {
+      s = readSentence(text, lexicon);
+      sentences.set(i, s);
+    }
+    return s;
+  };
+  const read: Reader = (i) => {
+    const hit = readings.get(i);
+    if (hit !== undefined) return hit;
+    const s = sentenceAt(i);
+    if (s === undefined) return undefined;
+    const next = sentenceAt(i + 1);
+    const stance = stanceOf(s, { ...context, ...(next === undefined ? {} : { next }) });
+    const reading = { s, stance, props: readPropositions(s, sentenceAt(i - 1), stance) };
+    readings.set(i, reading);
+    return reading;
+  };
+  cache.set(paragraph, { packs, read });
+  return read;
+}

@@ -1,0 +1,27 @@
+/**
+ * What stance does to a flag: a claim the draft holds as its own keeps its flag; one it reports,
+ * quotes, labels a myth, asks about, supposes or gives as an old view becomes a note that says so,
+ * so an editor still sees it but a debunking piece does not fail for the myths it answers.
+ */
+import type { SentenceStance, StanceKind } from '../../propositions/index.js';
+import { isOwnClaim } from '../../propositions/index.js';
+import type { FlagDraft } from '../../types.js';
+
+const WORDS: Record<StanceKind, string> = {
+  asserted: '',
+  rhetorical: '',
+  reported: 'This sentence reports what others say',
+  quoted: 'This sentence is a quotation',
+  myth: 'This sentence states a myth as a myth',
+  asked: 'This sentence asks a question',
+  hypothetical: 'This sentence supposes a case',
+  superseded: 'This sentence gives an earlier view',
+  marked: 'The draft marks this passage as reported',
+};
+
+/** The flags as they stand under the sentence's stance. */
+export function judgeByStance(flags: readonly FlagDraft[], stance: SentenceStance): FlagDraft[] {
+  if (isOwnClaim(stance)) return [...flags];
+  const said = WORDS[stance.kind];
+  return flags.map((f) => ({ ...f, level: 'note', reason: `${said}, so it is not flagged as the draft's own claim; check that the draft answers it. ${f.reason}` }));
+}

@@ -1,0 +1,197 @@
+/**
+ * Cause propositions: who acts on what, asserted or denied, alone or not.
+ *
+ *   "Since CO2 came after the warming, it cannot have caused it."   agent co2 (it), denied
+ *    "CO2 was an effect of the warming, not a cause."                temperature → co2 asserted; co2 → ? denied
+ *    "The lag rules out carbon dioxide as a driver."                 agent co2, denied
+ *    "Orbital changes alone ended the ice ages."                     agent orbit, exclusive
+ */
+import type { LexHit } from './lexicon.js';
+import { appositionSubject, clauseSubject, kindOf, PREPOSITIONS, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
+import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
+import type { Cause, Polarity } from './types.js';
+
+/** Words that make the next word a noun ("the end", "of warming"): no verb follows them. */
+const DETERMINERS = new Set(['the', 'a', 'an', 'its', 'their', 'our', 'of', 'in', 'for', 'with', 'from', 'after', 'before', 'than']);
+const INFERENCE_VERBS = new Set(['mean', 'means', 'meant', 'show', 'shows', 'showed', 'prove', 'proves', 'proved', 'imply', 'implies', 'implied', 'follow', 'follows', 'suggest', 'suggests', 'tell', 'tells']);
+const OBJECT_LINKS = new Set(['of', 'in', 'on', 'for', 'behind', 'to']);
+const ROLE: Record<string, Cause['role']> = { verbs: 'cause', because: 'cause', 'because-only': 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
+
+/** The causes one sentence states or denies; `previous` resolves a pronoun that opens it. */
+export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
+  const entities = s.of('entities');
+  const hits = s
+    .of('causes')
+    .filter((h, _, all) => !all.some((o) => o !== h && o.first <= h.first && o.last >= h.last && o.last - o.first > h.last - h.first))
+    // "orbital forcing" names the orbit: its "forcing" is no cause word of its own.
+    .filter((h) => !entities.some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first));
+  const causes: Cause[] = [];
+  for (const h of hits) {
+    if (h.key === 'reverse') continue;
+    const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify';
+    // "the end of the ice age" is a noun; "it was CO2 doing the pushing" is still a verb.
+    if (verbLike && DETERMINERS.has(s.words[h.first - 1]?.text ?? '') && s.words[h.first - 2]?.text !== 'doing') continue;
+    if (h.key === 'effects' && s.words[h.first - 1]?.text === 'in') continue;
+    causes.push(...causeAt(s, h, previous));
+  }
+  return causes;
+}
+
+function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
+  const kind = (t: Thing | undefined) => kindOf(s, t, previous);
+  const noun = h.key === 'nouns' || h.key === 'effects' || h.key === 'roles' || h.key === 'feedback';
+  let polarity = polarityAt(s, h.first);
+  // "the greenhouse effect of CO2 must be negligible": a role denied after the noun.
+  if (noun && polarity !== 'open' && deniedAfter(s, h.last)) polarity = polarity === 'denied' ? 'asserted' : 'denied';
+  const next = s.words[h.last + 1]?.text ?? '';
+  const passive = !noun && (next === 'by' || s.words[h.last + 2]?.text === 'by');
+  let agentThing: Thing | undefined;
+  let patientThing: Thing | undefined;
+  if (passive) {
+    const by = next === 'by' ? h.last + 1 : h.last + 2;
+    agentThing = s.things.find((t) => t.first > by && t.first - by <= 7 && t.kind !== 'pronoun');
+    patientThing = thingBefore(s, h.first, 'clause');
+  } else if (h.key === 'because' || h.key === 'because-only') {
+    // "The ice ages ended because of changes in Earth's orbit": the orbit acts on the clause's subject;
+    // "ended for one reason: the orbit...": the cause may follow a colon or a dash.
+    agentThing = s.things.find((t) => t.first > h.last && t.first - h.last <= 8 && t.kind !== 'pronoun');
+    patientThing = subjectOf(s, h.first) ?? clauseSubject(s, h.first);
+  } else if (noun && copulaAfter(s, h.last) !== undefined) {
+    // "The real driver of the glacial cycles was temperature": the agent follows the copula.
+    agentThing = thingAfter(s, copulaAfter(s, h.last) as number, 4);
+    patientThing = OBJECT_LINKS.has(next) ? thingAfter(s, h.last, 4) : undefined;
+  } else if (noun) {
+    const asRole = ['as', 'be'].includes(s.words[h.first - 2]?.text ?? '') || s.words[h.first - 1]?.text === 'as';
+    // "CO2 only the consequence": the subject stands just before; "CO2 ... was only a passenger": before
+    // the copula, past any relative clause; "CO2 was an effect of the warming, not a cause": an
+    // elliptic segment takes the clause's subject.
+    agentThing = asRole
+      ? thingBefore(s, h.first, 'clause')
+      : (subjectBefore(s, h.first) ?? copulaSubject(s, h.first) ?? subjectOf(s, h.first) ?? appositionSubject(s, h.first) ?? clauseSubject(s, h.first));
+    const linked = OBJECT_LINKS.has(next) ? thingAfter(s, h.last, 4) : undefined;
+    // "Only one cause ended the ice age: carbon dioxide": the agent named after a colon or dash.
+    const named = s.things.find((t) => t.first > h.last && t.first - h.last <= 10 && t.kind !== 'pronoun' && s.words[t.first]?.clause !== s.words[h.first]?.clause);
+    // "the role of CO2", "the greenhouse effect of CO2": what follows "of" is the one acting.
+    if (h.key === 'roles' && next === 'of') agentThing = linked ?? agentThing;
+    else patientThing = linked;
+    agentThing ??= thingAfter(s, h.last, 3) ?? named;
+  } else {
+    agentThing = subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first) ?? thingBefore(s, h.first, 'clause');
+    patientThing = thingAfter(s, h.last);
+  }
+  const cleft = cleftFocus(s, agentThing);
+  if (cleft !== undefined) agentThing = cleft;
+  let agent = kind(agentThing);
+  let patient = kind(patientThing);
+  if (h.key === 'effects') {
+    // "CO2 was an effect of the warming": the warming acts on CO2.
+    [agent, patient] = [patient ?? (agent === 'co2' ? 'temperature' : undefined), agent];
+  }
+  // Climate sensitivity, the greenhouse effect: CO2's own effect, whoever the sentence's subject is.
+  if (h.key === 'roles' && agent !== 'co2' && agent !== 'orbit' && isCo2Effect(s, h)) agent = 'co2';
+  const start = Math.min(s.words[h.first]?.start ?? 0, agentThing !== undefined && agentThing.first < h.first ? (s.words[agentThing.first]?.start ?? 0) : Infinity);
+  const end = s.words[h.last]?.end ?? 0;
+  // "It was CO2 that set the temperature": a cleft singles its focus out as the one agent.
+  const exclusive = isExclusive(s, h, agentThing) || (cleft !== undefined && h.key !== 'amplify') || h.key === 'because-only';
+  const cause: Cause = {
+    kind: 'cause', role: ROLE[h.key] ?? 'cause', polarity, exclusive, start, end,
+    ...(agent === undefined ? {} : { agent }), ...(patient === undefined ? {} : { patient }),
+  };
+  const out = [cause];
+  // "Orbital changes, not CO2, caused the warming"; "temperature rather than CO2": the other one denied.
+  const rival = contrastedThing(s, h);
+  const rivalKind = kind(rival);
+  if (rival !== undefined && rivalKind !== undefined && rivalKind !== agent && polarity === 'asserted' && h.key !== 'effects') {
+    out.push({ kind: 'cause', agent: rivalKind, role: cause.role, polarity: 'denied', exclusive: false, start, end, ...(patient === undefined ? {} : { patient }) });
+  }
+  // "nothing but a consequence", "merely a response": the subject is denied any causal role.
+  if (h.key === 'effects' && polarity === 'asserted' && hasExclusiveBefore(s, h.first, 3) && patient !== undefined) {
+    out.push({ kind: 'cause', agent: patient, role: 'cause', polarity: 'denied', exclusive: false, start, end });
+  }
+  return out;
+}
+
+const COPULAS = new Set(['is', 'was', 'are', 'were', 'be', 'been', 'being']);
+/** The copula within six words after a predicate noun, in its clause ("the driver ... was"). */
+function copulaAfter(s: ReadSentence, i: number): number | undefined {
+  let inPhrase = false;
+  for (let k = i + 1; k <= i + 7; k += 1) {
+    const w = s.words[k];
+    if (w === undefined || w.clause !== s.words[i]?.clause) return undefined;
+    if (COPULAS.has(w.text) && s.things.some((t) => t.first > k && t.first <= k + 4)) return k;
+    if (PREPOSITIONS.has(w.text)) inPhrase = true;
+    // A thing outside an "of ..." phrase is the subject: "the cause ... CO2 was" is no predicate noun.
+    if (s.things.some((t) => t.first === k) && !inPhrase) return undefined;
+  }
+  return undefined;
+}
+
+/** "must be negligible", "is irrelevant": a role denied by what is said of it. */
+function deniedAfter(s: ReadSentence, i: number): boolean {
+  return s.words.slice(i + 1, i + 6).some((w) => w.clause === s.words[i]?.clause && /^(?:negligible|irrelevant|unimportant|insignificant|immaterial|trivial|tiny|nil|zero|minimal)$/u.test(w.text));
+}
+
+/** The thing set against the agent in its clause: "not Y", "rather than Y", "instead of Y". */
+function contrastedThing(s: ReadSentence, h: LexHit): Thing | undefined {
+  const clause = s.words[h.first]?.clause;
+  return s.things.find((t) => {
+    if (s.words[t.first]?.clause !== clause || t.kind === 'pronoun') return false;
+    const lead = s.words.slice(Math.max(0, t.first - 2), t.first).map((w) => w.text).join(' ');
+    return /(?:^|\s)not$|rather than$|instead of$|and not$|but not$/u.test(lead) && !/^(?:only|just|merely)$/u.test(s.words[t.first - 1]?.text ?? '');
+  });
+}
+
+/** The thing before the copula that links word `i` (a predicate noun) to its subject. */
+function copulaSubject(s: ReadSentence, i: number): Thing | undefined {
+  for (let k = i - 1; k >= Math.max(0, i - 8); k -= 1) {
+    if (s.words[k]?.clause !== s.words[i]?.clause) return undefined;
+    if (COPULAS.has(s.words[k]?.text ?? '')) return s.things.filter((t) => t.last < k && s.words[t.first]?.clause === s.words[i]?.clause).at(-1);
+  }
+  return undefined;
+}
+
+/** "it was X that...", "it is X doing...": the focused thing X, when `agent` is that "it". */
+function cleftFocus(s: ReadSentence, agent: Thing | undefined): Thing | undefined {
+  if (agent?.kind !== 'pronoun' || s.words[agent.first]?.text !== 'it') return undefined;
+  let k = agent.first + 1;
+  if (!COPULAS.has(s.words[k]?.text ?? '')) return undefined;
+  k += 1;
+  while (/^(?:always|really|just|only|actually|all|ever|in|fact|clearly|simply)$/u.test(s.words[k]?.text ?? '')) k += 1;
+  const focus = s.things.find((t) => t.first >= k && t.first <= k + 1 && t.kind !== 'pronoun');
+  if (focus === undefined) return undefined;
+  // "It was the orbit, and nothing else, that warmed...": the relative word may follow an aside.
+  const rest = s.words.slice(focus.last + 1, focus.last + 6).map((w) => w.text);
+  return rest.some((w) => /^(?:that|which|who|doing|driving|setting|making)$/u.test(w)) ? focus : undefined;
+}
+
+/** Denied when an odd number of denials precede; open under a denied inference or "whether". */
+export function polarityAt(s: ReadSentence, i: number): Polarity {
+  const seg = s.words[i]?.segment;
+  for (let k = 0; k < i; k += 1) {
+    const w = s.words[k]?.text ?? '';
+    if (w === 'whether' && s.words[k]?.segment === seg) return 'open';
+    if (INFERENCE_VERBS.has(w) && denialsBefore(s, k, 3) % 2 === 1) return 'open';
+  }
+  return denialsBefore(s, i) % 2 === 1 ? 'denied' : 'asserted';
+}
+
+function isCo2Effect(s: ReadSentence, h: LexHit): boolean {
+  const phrase = s.words.slice(h.first, h.last + 1).map((w) => w.text).join(' ');
+  return /sensitivity|greenhouse|warming (?:effect|power)|heat-?trapping|trapping/u.test(phrase) || s.of('entities', 'co2').length > 0 || s.of('order').length > 0;
+}
+
+function hasExclusiveBefore(s: ReadSentence, i: number, window: number): boolean {
+  return s.of('exclusive').some((e) => e.last < i && i - e.last <= window && s.words[e.first]?.segment === s.words[i]?.segment);
+}
+
+/** "X alone", "solely X", "the sole cause", "nothing but X"; "not alone" and "not only" are not. */
+function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): boolean {
+  return s.of('exclusive').some((e) => {
+    if (s.words[e.first]?.segment !== s.words[h.first]?.segment && s.words[e.first]?.clause !== s.words[h.first]?.clause) return false;
+    if (['not', 'no'].includes(s.words[e.first - 1]?.text ?? '')) return false;
+    const nearAgent = agent !== undefined && (Math.abs(e.first - agent.last) <= 2 || Math.abs(e.last - agent.first) <= 2);
+    const nearCue = Math.abs(e.last - h.first) <= 2 || (e.first > h.last && e.first - h.last <= 2);
+    const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by itself|on its own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
+    return nearAgent || (nearCue && strong);
+  });
+}

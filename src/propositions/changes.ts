@@ -1,0 +1,171 @@
+/**
+ * Signed changes and the relations between them.
+ *
+ *   "Seawater that warms up takes in more CO2."   water:temperature +1, co2:uptake +1 → relation
+ *   "Warmer water holds less CO2."                 water:temperature +1, co2:uptake -1 → relation
+ *   "Antarctica cooled during the Younger Dryas."  antarctic:temperature -1 during younger-dryas
+ *   "Each extra ppm warms more than the last."     marginal-forcing +1
+ */
+import type { LexHit } from './lexicon.js';
+import { kindOf, thingAfter, thingBefore } from './resolve.js';
+import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
+import type { Change, Directed, Relation } from './types.js';
+
+const SIZE_DOWN = new Set(['less', 'fewer', 'smaller', 'lower']);
+const SIZE_UP = new Set(['more', 'greater', 'larger', 'higher', 'extra']);
+
+/** Every directed thing in the sentence: temperatures, CO2 uptake, amounts. */
+export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed[] {
+  const out: Directed[] = [];
+  const push = (of: string, attribute: Directed['attribute'], dir: 1 | -1, h: LexHit, thing?: Thing) => {
+    const first = Math.min(h.first, thing?.first ?? h.first);
+    const last = Math.max(h.last, thing?.last ?? h.last);
+    const negated = denialsBefore(s, h.first, 5) % 2 === 1;
+    const form = thing !== undefined && thing.first > h.last ? 'state' : 'change';
+    out.push({ of, attribute, dir, negated, form, first, last, start: s.words[first]?.start ?? 0, end: s.words[last]?.end ?? 0 });
+  };
+  for (const h of s.of('changes')) {
+    if (h.key === 'warm' || h.key === 'cool') {
+      const thing = temperatureHolder(s, h);
+      const name = thing === undefined ? 'temperature' : nameOf(s, thing, previous);
+      push(name, 'temperature', h.key === 'warm' ? 1 : -1, h, thing);
+    } else if (h.key === 'up' || h.key === 'down') {
+      const before = thingBefore(s, h.first);
+      const thing = before !== undefined && h.first - before.last <= 4 ? before : thingAfter(s, h.last, 2);
+      if (thing === undefined) continue;
+      const kind = kindOf(s, thing, previous);
+      if (kind === 'temperature') push(nameOf(s, thing, previous), 'temperature', h.key === 'up' ? 1 : -1, h, thing);
+      else if (kind !== undefined) push(kind, 'amount', h.key === 'up' ? 1 : -1, h, thing);
+    }
+  }
+  for (const h of s.of('uptake')) {
+    const dir = uptakeDirection(s, h);
+    if (dir !== undefined) push('co2', 'uptake', dir, h);
+  }
+  // "drives CO2 out of the ocean": a phrasal verb split by its object.
+  for (const h of s.of('causes', 'verbs')) {
+    const verb = s.words[h.first]?.text ?? '';
+    const out = s.words.slice(h.last + 1, h.last + 5).findIndex((w) => w.text === 'out');
+    if (/^(?:drive|drives|drove|driven|driving|force|forces|forced|push|pushes|pushed|kick|kicks|kicked)$/u.test(verb) && out > 0 && s.of('entities', 'co2').some((c) => c.first > h.last && c.first <= h.last + out)) {
+      push('co2', 'uptake', -1, h);
+    }
+  }
+  return out;
+}
+
+/** What a warm/cool word is said of: "warmer water", "the ocean warms", "warming of the sea". */
+function temperatureHolder(s: ReadSentence, h: LexHit): Thing | undefined {
+  const next = s.words[h.last + 1]?.text;
+  if (next === 'of') return thingAfter(s, h.last, 3);
+  // "cold polar oceans": the water, not the region that qualifies it.
+  const water = s.things.find((t) => t.kind === 'water' && t.first > h.last && t.first - h.last <= 3);
+  if (water !== undefined && s.things.every((t) => t === water || t.first <= h.last || t.first > water.first || t.region !== undefined || t.kind === 'temperature')) return water;
+  const before = thingBefore(s, h.first);
+  const adjacentBefore = before !== undefined && h.first - before.last <= 4;
+  const after = thingAfter(s, h.last, 2);
+  if (after !== undefined && (!adjacentBefore || h.first - (before?.last ?? 0) > 1) && after.kind !== 'pronoun') return after;
+  return adjacentBefore ? before : undefined;
+}
+
+/** A thing's name for a fact: a region key for a regional temperature, else its kind. */
+function nameOf(s: ReadSentence, thing: Thing, previous?: ReadSentence): string {
+  if (thing.region !== undefined) return thing.region;
+  const kind = kindOf(s, thing, previous) ?? 'temperature';
+  if (kind !== 'temperature') return kind;
+  const clause = s.words[thing.first]?.clause;
+  return s.of('regions').find((r) => s.words[r.first]?.clause === clause)?.key ?? 'temperature';
+}
+
+/** +1 for taking CO2 in, -1 for letting it out; "less" turns it round. Undefined without CO2. */
+function uptakeDirection(s: ReadSentence, h: LexHit): 1 | -1 | undefined {
+  const noun = h.key === 'nouns';
+  let base: 1 | -1 = h.key === 'out' ? -1 : 1;
+  if (noun) {
+    const change = s.of('changes').find((c) => (c.key === 'up' || c.key === 'down') && Math.abs(c.first - h.last) <= 4);
+    if (change === undefined) return undefined;
+    base = change.key === 'up' ? 1 : -1;
+  } else {
+    // "less dissolved CO2": a participle before CO2 describes it, and states no uptake.
+    if (/ed$/u.test(s.words[h.last]?.text ?? '') && s.of('entities', 'co2').some((c) => c.first === h.last + 1)) return undefined;
+    const objectCo2 = s.of('entities', 'co2').some((c) => c.first > h.last && c.first - h.last <= 5) || s.words.slice(h.last + 1, h.last + 4).some((w) => /^(?:it|carbon|gas|them)$/u.test(w.text));
+    // "the less carbon dioxide it can keep dissolved": CO2 stands before the verb.
+    const subjectCo2 = s.of('entities', 'co2').some((c) => c.last < h.first && h.first - c.last <= 5);
+    if (!objectCo2 && !subjectCo2) return undefined;
+    // "holds less CO2", "releases less of it", "the less CO2 it can keep": a size word on the verb's object.
+    const segment = s.words[h.first]?.segment;
+    const co2Before = s.of('entities', 'co2').find((c) => c.last < h.first && h.first - c.last <= 5 && s.words[c.first]?.segment === segment);
+    const window = [
+      ...s.words.slice(h.last + 1, h.last + 4).filter((w) => w.segment === segment),
+      ...(co2Before === undefined ? [] : s.words.slice(Math.max(0, co2Before.first - 2), co2Before.first)),
+    ].map((w) => w.text);
+    if (window.some((w) => SIZE_DOWN.has(w))) base = (base * -1) as 1 | -1;
+    else if (!window.some((w) => SIZE_UP.has(w)) && h.key === 'in' && /^(?:hold|holds|held|keep|keeps|kept|retain|retains|store|stores|stored)$/u.test(s.words[h.first]?.text ?? '')) {
+      // "warm water holds CO2" states a capacity, not a change: only "more"/"less" makes it one.
+      return undefined;
+    }
+  }
+  return base;
+}
+
+/** Pairs a water temperature with a CO2 uptake in the same clause (or sentence, when only one). */
+export function readRelations(s: ReadSentence, directed: Directed[]): Relation[] {
+  const waterNamed = s.of('entities', 'water').length > 0;
+  const temps = directed.filter((d) => d.attribute === 'temperature' && (d.of === 'water' || (d.of === 'temperature' && waterNamed) || (d.of === 'pronoun' && waterNamed)));
+  const relations: Relation[] = [];
+  for (const u of directed.filter((d) => d.attribute === 'uptake')) {
+    const clause = s.words[u.first]?.clause;
+    const sameClause = temps.filter((t) => s.words[t.first]?.clause === clause && !isAfterThan(s, t));
+    const pool = sameClause.length > 0 ? sameClause : temps.length === 1 ? temps : [];
+    // "Cold water releases CO2 when it warms": the change the release goes with, not the starting state.
+    const changes = pool.filter((t) => t.form === 'change');
+    const t = (changes.length > 0 ? changes : pool).sort((a, b) => Math.abs(a.first - u.first) - Math.abs(b.first - u.first))[0];
+    if (t === undefined || isConcessive(s, t)) continue;
+    // "It is not true that warmer seas absorb more CO2": one denial turns the whole relation round.
+    const denied = t.negated || u.negated;
+    const y = denied ? { ...u, dir: (-u.dir) as 1 | -1 } : u;
+    relations.push({ kind: 'relation', x: { ...t, of: 'water' }, y, start: Math.min(t.start, u.start), end: Math.max(t.end, u.end) });
+  }
+  return relations;
+}
+
+/** "Even as the oceans warm, they absorb more CO2": a concession states no relation between the two. */
+function isConcessive(s: ReadSentence, d: Directed): boolean {
+  const segment = s.words[d.first]?.segment;
+  const first = s.words.findIndex((w) => w.segment === segment);
+  const lead = s.words.slice(Math.max(0, first - 1), first + 2).map((w) => w.text).join(' ');
+  return /\b(?:even as|even though|even if|although|though|despite|in spite of|even when)\b/u.test(lead);
+}
+
+/** "than warm water": the base of a comparison is no claim of its own. */
+function isAfterThan(s: ReadSentence, d: Directed): boolean {
+  return s.words.slice(Math.max(0, d.first - 3), d.first).some((w) => w.text === 'than');
+}
+
+/** Changes of regions and of marginal forcing, with the period they are set in. */
+export function readChanges(s: ReadSentence, directed: Directed[], previous?: ReadSentence): Change[] {
+  // A period named in the sentence before still sets the scene ("During the Younger Dryas... While Greenland froze, ...").
+  const periodIn = (r: ReadSentence | undefined) => r?.of('periods').filter((p) => p.key !== 'deglaciation')[0]?.key;
+  const period = periodIn(s) ?? periodIn(previous);
+  const changes: Change[] = directed
+    .filter((d) => d.attribute === 'temperature')
+    .map((d) => ({ kind: 'change', of: d.of, attribute: 'temperature', dir: (d.negated ? -d.dir : d.dir) as 1 | -1, start: d.start, end: d.end, ...(period === undefined ? {} : { during: period }) }));
+  for (const m of s.of('entities', 'marginal-forcing')) {
+    const clause = s.words[m.first]?.clause;
+    // "each extra ppm costs more to remove" is no claim about warming.
+    const warming = s.hits.some((h) => s.words[h.first]?.clause === clause && ((h.cls === 'changes' && (h.key === 'warm' || h.key === 'cool')) || (h.cls === 'causes' && (h.key === 'roles' || h.key === 'verbs'))));
+    if (!warming) continue;
+    const after = (h: LexHit) => h.first > m.last && s.words[h.first]?.clause === clause;
+    const up = s.hits.some((h) => after(h) && ((h.cls === 'changes' && (h.key === 'up' || h.key === 'accelerating')) || (h.cls === 'comparatives' && h.key === 'size-up')));
+    const down = s.hits.some((h) => after(h) && ((h.cls === 'changes' && h.key === 'down') || (h.cls === 'comparatives' && h.key === 'size-down')));
+    if (up === down) continue;
+    const flip = denialsBefore(s, m.first, 6) % 2 === 1 ? -1 : 1;
+    changes.push({ kind: 'change', of: 'marginal-forcing', attribute: 'amount', dir: ((up ? 1 : -1) * flip) as 1 | -1, start: s.words[m.first]?.start ?? 0, end: s.words.filter((w) => w.clause === clause).at(-1)?.end ?? 0 });
+  }
+  // "the warming effect of CO2 grows exponentially": the effect per ppm said to speed up.
+  const effect = s.of('causes', 'roles').find((r) => /effect|forcing|power/u.test(s.words[r.last]?.text ?? ''));
+  const speeding = s.of('changes', 'accelerating')[0];
+  if (effect !== undefined && speeding !== undefined && s.of('entities', 'co2').length > 0 && s.of('entities', 'marginal-forcing').length === 0) {
+    changes.push({ kind: 'change', of: 'marginal-forcing', attribute: 'amount', dir: 1, start: s.words[effect.first]?.start ?? 0, end: s.words[speeding.last]?.end ?? 0 });
+  }
+  return changes;
+}

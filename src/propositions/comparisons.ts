@@ -1,0 +1,34 @@
+/**
+ * Comparisons: "the trapped air is older than the ice around it", "polar temperatures swung less
+ * than the global mean", "the air is the same age as the ice".
+ */
+import { kindOf, subjectOf, thingAfter, thingBefore } from './resolve.js';
+import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
+import type { Comparison } from './types.js';
+
+const SIGN: Record<string, 1 | -1 | 0> = { 'age-up': 1, 'age-down': -1, 'age-same': 0, 'size-up': 1, 'size-down': -1 };
+const SWING = /^(?:swing|swings|swung|change|changes|changed|vary|varies|varied|range|amplitude|shift|shifts|shifted|moved|move|moves|fluctuat\w*|temperature|temperatures)$/u;
+
+/** The comparisons one sentence states (a denied comparison states none). */
+export function readComparisons(s: ReadSentence, previous?: ReadSentence): Comparison[] {
+  const out: Comparison[] = [];
+  for (const h of s.of('comparatives')) {
+    const sign = SIGN[h.key];
+    if (sign === undefined || denialsBefore(s, h.first, 4) % 2 === 1) continue;
+    const link = s.words.findIndex((w, i) => i > h.last - (sign === 0 ? 2 : 0) && i <= h.last + 4 && (w.text === 'than' || w.text === 'as'));
+    if (link < 0) continue;
+    const b = thingAfter(s, link, 6);
+    const a = subjectOf(s, h.first) ?? thingBefore(s, h.first, 'clause');
+    if (a === undefined || b === undefined) continue;
+    const attribute = h.key.startsWith('age') ? 'age' : 'size';
+    if (attribute === 'size') {
+      const clause = s.words[h.first]?.clause;
+      const words = s.words.filter((w) => w.clause === clause);
+      const aboutTemperature = words.some((w) => SWING.test(w.text)) || s.of('changes').some((c) => (c.key === 'warm' || c.key === 'cool') && s.words[c.first]?.clause === clause);
+      if (!aboutTemperature) continue;
+    }
+    const name = (t: Thing) => t.region ?? kindOf(s, t, previous) ?? t.kind;
+    out.push({ kind: 'comparison', a: name(a), b: name(b), attribute, sign, start: s.words[a.first]?.start ?? 0, end: s.words[b.last]?.end ?? 0 });
+  }
+  return out;
+}

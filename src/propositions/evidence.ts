@@ -1,0 +1,28 @@
+/**
+ * Evidence propositions: co-variation offered as proof of a cause.
+ *
+ *   "The two curves rise and fall together, which proves that CO2 controls the climate."
+ *    correlation ──────────────────────   proof ──  cause ───────────────────────
+ */
+import { denialsBefore, type ReadSentence } from './sentence.js';
+import type { Cause, Evidence } from './types.js';
+
+/** Each correlation followed by an undenied proof word and then a cause. */
+export function readEvidence(s: ReadSentence, causes: readonly Cause[]): Evidence[] {
+  const out: Evidence[] = [];
+  for (const c of s.of('correlation')) {
+    if (denialsBefore(s, c.first, 4) % 2 === 1) continue;
+    const proof = s.of('proof').find((p) => p.first > c.last && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first));
+    if (proof === undefined) continue;
+    const proofEnd = s.words[proof.last]?.end ?? 0;
+    const cause = causes.find((k) => k.end > proofEnd && k.polarity !== 'open' && k.role !== 'feedback');
+    if (cause === undefined) continue;
+    out.push({ kind: 'evidence', start: s.words[c.first]?.start ?? 0, end: cause.end });
+  }
+  return out;
+}
+
+/** "hardly proves", "need not prove", "may suggest": no claim of proof. */
+function hedged(s: ReadSentence, i: number): boolean {
+  return s.words.slice(Math.max(0, i - 3), i).some((w) => ['necessarily', 'hardly', 'need', 'may', 'might', 'whether'].includes(w.text));
+}

@@ -1,0 +1,39 @@
+/**
+ * The proposition stage: what each candidate sentence asserts (causes, orders, signed relations,
+ * comparisons, changes, evidence) and how it holds them (stance), read with the packs' lexicon.
+ * Checks read these, never the words.
+ */
+import { readCauses } from './causes.js';
+import { readChanges, readDirected, readRelations } from './changes.js';
+import { readComparisons } from './comparisons.js';
+import { readEvidence } from './evidence.js';
+import { readOrders } from './orders.js';
+import type { ReadSentence } from './sentence.js';
+import type { SentenceStance } from './stance.js';
+import type { Cause, Propositions } from './types.js';
+
+export { compileLexicon, compile, formsOf, phraseWords, type CompiledLexicon, type LexHit } from './lexicon.js';
+export { readSentence, type ReadSentence, type Word, type Thing } from './sentence.js';
+export { isOwnClaim, stanceOf, STANCES, type SentenceStance, type StanceContext, type StanceKind } from './stance.js';
+export type * from './types.js';
+
+/** Reads the propositions of `s`; `previous` resolves a pronoun that points back one sentence. */
+export function readPropositions(s: ReadSentence, previous?: ReadSentence, stance?: SentenceStance): Propositions {
+  let causes = readCauses(s, previous);
+  if (stance?.kind === 'rhetorical' && stance.flips) causes = causes.map(flip);
+  if (stance?.kind === 'asked') causes = causes.map((c) => ({ ...c, polarity: 'open' as const }));
+  const directed = readDirected(s, previous);
+  return {
+    causes,
+    orders: readOrders(s, previous),
+    relations: readRelations(s, directed),
+    comparisons: readComparisons(s, previous),
+    changes: readChanges(s, directed, previous),
+    evidence: readEvidence(s, causes),
+  };
+}
+
+/** "How could it be the cause?" asserts that it is not. */
+function flip(c: Cause): Cause {
+  return c.polarity === 'open' ? c : { ...c, polarity: c.polarity === 'asserted' ? 'denied' : 'asserted' };
+}

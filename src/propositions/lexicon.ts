@@ -1,0 +1,127 @@
+/**
+ * The packs' lexicon compiled for matching: every phrase with its inflections (inflect.ts, once
+ * per run), indexed by first word. A sentence is matched word by word, so a
+ * phrase matches wherever its words stand in sequence, whatever the sentence around it says.
+ *
+ *   lexicon.causes.verbs: [drive]  →  "drive", "drives", "drove", "driven", "driving"
+ *   lexicon.uptake.in: [take up]   →  "took up", "takes up", "taking up", "taken up"
+ */
+import { inflect } from './inflect.js';
+import type { Lexicon, LoadedPacks } from '../rulepack/types.js';
+
+/** One lexicon phrase found in a sentence: its class and key, and the word indices it covers. */
+export interface LexHit {
+  cls: string;
+  key: string;
+  first: number;
+  last: number;
+}
+
+/** A compiled lexicon: `find` returns every phrase hit in a list of lower-case words. */
+export interface CompiledLexicon {
+  find(words: readonly string[]): LexHit[];
+  /** The phrases of one class and key as written, lower-case (for tests and docs). */
+  phrases(cls: string, key: string): readonly string[];
+}
+
+interface Entry {
+  rest: string[];
+  cls: string;
+  key: string;
+}
+
+/** Grammar words that keep their form inside a phrase ("take up" inflects "take", not "up"). */
+const FIXED = new Set([
+  'a', 'an', 'the', 'of', 'to', 'in', 'on', 'up', 'down', 'off', 'out', 'by', 'as', 'than', 'and', 'or', 'at',
+  'for', 'with', 'into', 'from', 'that', 'it', 'its', 'each', 'every', 'more', 'less', 'most', 'least', 'no',
+  'not', 'same', 'one', 'other', 'another', 'both', 'ways', 'all', 'only', 'just', 'ever', 'so', 'if', 'what',
+  'be', 'is', 'are', 'was', 'were', 'had', 'has', 'have', 'would', 'might', 'could', 'can', 'we', 'they', 'you',
+]);
+
+/** A word or number token as the sentence tokenizer cuts it (hyphens separate words). */
+const WORD = /[\p{L}\p{N}₂]+(?:['’][\p{L}]+)*/gu;
+
+/** Splits a phrase into lower-case words the way sentences are split. */
+export function phraseWords(phrase: string): string[] {
+  return [...phrase.toLowerCase().replace(/’/gu, "'").matchAll(WORD)].map((m) => m[0]);
+}
+
+/** A word with its inflections, unless it is a grammar word that keeps its form. */
+export function formsOf(word: string): string[] {
+  return FIXED.has(word) ? [word] : inflect(word);
+}
+
+/**
+ * Every written form of a phrase. Up to three content words inflect together ("rise and fall
+ * together" → "rising and falling together"); in longer phrases the first and last words inflect.
+ */
+function variantsOf(words: string[]): string[][] {
+  if (words.length === 0) return [];
+  const content = words.filter((w) => !FIXED.has(w)).length;
+  if (content <= 3) {
+    return words.reduce<string[][]>((acc, word) => acc.flatMap((prefix) => formsOf(word).map((f) => [...prefix, f])), [[]]);
+  }
+  const first = formsOf(words[0] as string);
+  if (words.length === 1) return first.map((f) => [f]);
+  const last = formsOf(words.at(-1) as string);
+  const middle = words.slice(1, -1);
+  const out: string[][] = [];
+  for (const f of first) out.push([f, ...middle, words.at(-1) as string]);
+  for (const l of last) out.push([words[0] as string, ...middle, l]);
+  return out;
+}
+
+const cache = new WeakMap<LoadedPacks, CompiledLexicon>();
+
+/** The packs' lexicon compiled (once per packs object). */
+export function compileLexicon(packs: LoadedPacks): CompiledLexicon {
+  const hit = cache.get(packs);
+  if (hit !== undefined) return hit;
+  const compiled = compile(packs.lexicon);
+  cache.set(packs, compiled);
+  return compiled;
+}
+
+/** Compiles a lexicon given as data (tests use small ones). */
+export function compile(lexicon: Lexicon): CompiledLexicon {
+  const index = new Map<string, Entry[]>();
+  const seen = new Set<string>();
+  for (const [cls, keys] of Object.entries(lexicon)) {
+    for (const [key, phrases] of Object.entries(keys)) {
+      for (const phrase of phrases) {
+        for (const words of variantsOf(phraseWords(phrase))) {
+          const id = `${cls}\u0000${key}\u0000${words.join(' ')}`;
+          if (seen.has(id)) continue;
+          seen.add(id);
+          const [head, ...rest] = words;
+          if (head === undefined) continue;
+          const list = index.get(head) ?? [];
+          list.push({ rest, cls, key });
+          index.set(head, list);
+        }
+      }
+    }
+  }
+  return {
+    // "Earth's orbit", "Greenland's cores": a possessive matches the word it is made from.
+    find: (words) => findHits(index, words.map((w) => w.replace(/'s$/u, ''))),
+    phrases: (cls, key) => (lexicon[cls]?.[key] ?? []).map((p) => p.toLowerCase()),
+  };
+}
+
+/** Every hit; at one start, one class and key keeps only its longest phrase. */
+function findHits(index: ReadonlyMap<string, Entry[]>, words: readonly string[]): LexHit[] {
+  const hits: LexHit[] = [];
+  words.forEach((word, i) => {
+    const best = new Map<string, LexHit>();
+    for (const entry of index.get(word) ?? []) {
+      if (!entry.rest.every((w, k) => words[i + 1 + k] === w)) continue;
+      const last = i + entry.rest.length;
+      const id = `${entry.cls}\u0000${entry.key}`;
+      const known = best.get(id);
+      if (known === undefined || last > known.last) best.set(id, { cls: entry.cls, key: entry.key, first: i, last });
+    }
+    hits.push(...best.values());
+  });
+  return hits;
+}

@@ -1,0 +1,79 @@
+/**
+ * Order propositions: which of two things changed first, where, and by how much.
+ *
+ *   "CO2 rose about 800 years after Antarctic temperature."   first temperature (antarctic), then co2, amount
+ *   "Worldwide, temperature led and carbon dioxide followed."  first temperature (global), then co2
+ *   "The lag is the sceptics' favourite argument."              implicit: temperature first, co2 then
+ */
+import type { LexHit } from './lexicon.js';
+import { kindOf, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
+import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
+import type { Order } from './types.js';
+
+/** Order words that name no second thing: the other one is understood ("CO2 came second"). */
+const ABSOLUTE = /^(?:first|came first|went first|start first|rise first|move first|earlier|beforehand|ahead|second|come second|later|afterwards|only later|delay|delayed|trailing|laggard|head start|catch up|tag along|in its wake)$/u;
+const NOUN_BEFORE = new Set(['the', 'a', 'an', 'this', 'that', 'its', 'co2', 'co₂', 'famous', 'observed', 'supposed', 'long', 'short', 'same', 'such', 'any', 'no']);
+const DURATIONS = /^(?:\d[\d,.]*|years?|centur(?:y|ies)|millenni(?:um|a)|decades?|kyr|hundreds?|thousands?|few|several)$/u;
+const COUNTERPART: Record<string, string> = { co2: 'temperature', temperature: 'co2' };
+
+/** The orders one sentence states (a denied order states none). */
+export function readOrders(s: ReadSentence, previous?: ReadSentence): Order[] {
+  const orders: Order[] = [];
+  const names = (r: ReadSentence | undefined) => r !== undefined && (r.of('entities', 'ice-core').length > 0 || r.of('regions', 'antarctic').length > 0);
+  // "The Vostok core ... It shows the planet warmed first": the record may be named one sentence back.
+  const recordNamed = names(s) || names(previous);
+  for (const h of s.of('order')) {
+    if (denialsBefore(s, h.first, 4) % 2 === 1) continue;
+    const order = orderAt(s, h, previous);
+    if (order === undefined) continue;
+    const clause = s.words[h.first]?.clause;
+    const inClause = s.words.filter((w) => w.clause === clause).map((w) => w.text);
+    const keys = new Set(s.of('regions').map((r) => r.key));
+    const sentenceRegion = keys.size === 1 ? [...keys][0] : undefined;
+    // "the lag" is by convention the Antarctic lag: a region elsewhere in the sentence is not its own.
+    const region = order.implicit ? undefined : (order.region ?? s.of('regions').find((r) => s.words[r.first]?.clause === clause)?.key ?? sentenceRegion);
+    // "CO2 merely followed the temperature": the follower cast as nothing more.
+    const dismissive = s.words.slice(Math.max(0, h.first - 2), h.first).some((w) => /^(?:merely|simply|just)$/u.test(w.text));
+    orders.push({ ...order, recordNamed, dismissive, amount: inClause.some((w) => DURATIONS.test(w)), ...(region === undefined ? {} : { region }) });
+  }
+  return orders;
+}
+
+function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Order, 'recordNamed' | 'amount' | 'dismissive'> | undefined {
+  const phrase = s.words.slice(h.first, h.last + 1).map((w) => w.text).join(' ');
+  const kind = (t: Thing | undefined) => kindOf(s, t, previous);
+  const span = { start: s.words[h.first]?.start ?? 0, end: s.words[h.last]?.end ?? 0 };
+  const isNoun = /^(?:lag|lags|delay|delays)$/u.test(phrase) && NOUN_BEFORE.has(s.words[h.first - 1]?.text ?? '');
+  const after = s.words[h.last + 1]?.text;
+  const ofThing = after === 'of' && s.things.some((t) => t.first === h.last + 2 || t.first === h.last + 3);
+  if (isNoun && after !== 'behind' && !ofThing) {
+    return { kind: 'order', first: 'temperature', then: 'co2', together: false, implicit: true, ...span };
+  }
+  let a: Thing | undefined = subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? thingBefore(s, h.first, 'clause');
+  let b: Thing | undefined;
+  if (ABSOLUTE.test(phrase)) {
+    a ??= thingAfter(s, h.last, 4);
+    const first = kind(a);
+    const other = first === undefined ? undefined : COUNTERPART[first];
+    if (first === undefined || other === undefined) return undefined;
+    b = undefined;
+    return withRelation(h.key, first, other, s, a, span);
+  }
+  b = thingAfter(s, h.last, 6);
+  if (a === undefined && b !== undefined) {
+    // "After the warming began, CO2 rose": the main clause follows the comma.
+    a = s.things.find((t) => t.first > b!.last && s.words[t.first]?.segment !== s.words[b!.first]?.segment);
+  }
+  let key = h.key;
+  if (after === 'by' && key !== 'together') key = key === 'before' ? 'after' : 'before';
+  const first = kind(a);
+  const second = kind(b);
+  if (first === undefined || second === undefined || first === second) return undefined;
+  return withRelation(key, first, second, s, a?.region !== undefined ? a : b, span);
+}
+
+function withRelation(key: string, a: string, b: string, s: ReadSentence, regionThing: Thing | undefined, span: { start: number; end: number }) {
+  const [first, then] = key === 'after' ? [b, a] : [a, b];
+  const region = regionThing?.region;
+  return { kind: 'order' as const, first, then, together: key === 'together', implicit: false, ...span, ...(region === undefined ? {} : { region }) };
+}

@@ -1,0 +1,87 @@
+/**
+ * Which thing a word stands for: an entity as named, or a pronoun resolved to the subject of the
+ * nearest earlier segment ("Since CO2 came after the warming, it cannot..." → it = CO2).
+ */
+import type { ReadSentence, Thing } from './sentence.js';
+
+/** The kind of `thing`, with pronouns resolved within the sentence, then in `previous`. */
+export function kindOf(s: ReadSentence, thing: Thing | undefined, previous?: ReadSentence): string | undefined {
+  if (thing === undefined) return undefined;
+  if (thing.kind !== 'pronoun') return thing.kind;
+  const segment = s.words[thing.first]?.segment ?? 0;
+  for (let seg = segment; seg >= 0; seg -= 1) {
+    const subject = s.things.find((t) => t.kind !== 'pronoun' && t.first < thing.first && s.words[t.first]?.segment === seg);
+    if (subject !== undefined) return subject.kind;
+  }
+  return previous?.things.find((t) => t.kind !== 'pronoun')?.kind;
+}
+
+/** The first thing in word range [from, to] of one segment (the subject side of a clause). */
+export function firstThingIn(s: ReadSentence, from: number, to: number): Thing | undefined {
+  return s.things.find((t) => t.first >= from && t.last <= to);
+}
+
+/** The nearest thing before word `i` in the same segment (`segment`) or clause. */
+export function thingBefore(s: ReadSentence, i: number, scope: 'segment' | 'clause' = 'segment'): Thing | undefined {
+  const at = s.words[i];
+  if (at === undefined) return undefined;
+  const same = (t: Thing) => (scope === 'segment' ? s.words[t.first]?.segment === at.segment : s.words[t.first]?.clause === at.clause);
+  return s.things.filter((t) => t.last < i && same(t)).at(-1);
+}
+
+/** The subject of the segment of word `i`: its first thing before `i`. */
+export function subjectOf(s: ReadSentence, i: number): Thing | undefined {
+  const at = s.words[i];
+  if (at === undefined) return undefined;
+  return s.things.find((t) => t.last < i && s.words[t.first]?.segment === at.segment);
+}
+
+/** The nearest thing after word `i` in the same clause, within `window` words. */
+export function thingAfter(s: ReadSentence, i: number, window = 8): Thing | undefined {
+  const clause = s.words[i]?.clause;
+  return s.things.find((t) => t.first > i && t.first - i <= window && s.words[t.first]?.clause === clause);
+}
+
+/** The first thing of the clause of word `i`, before it. */
+export function clauseSubject(s: ReadSentence, i: number): Thing | undefined {
+  const clause = s.words[i]?.clause;
+  return s.things.find((t) => t.last < i && s.words[t.first]?.clause === clause);
+}
+
+/** Words a subject search steps over on its way back from a verb. */
+const SKIP = /^(?:the|a|an|only|merely|just|simply|also|then|alone|itself|themselves|solely|really|actually|clearly|probably|certainly|surely|had|has|have|was|were|is|are|be|been|did|does|do|can|could|will|would|may|might|must|should|not|never|first|turn|always|ever|indeed|largely|mostly|partly|mainly|chiefly|directly|helped|help|helps|to|all|nothing|else|in|itself|once|later|again|still|further|now|eventually|ultimately|finally)$/u;
+export const PREPOSITIONS = new Set(['of', 'in', 'after', 'before', 'behind', 'from', 'with', 'than', 'like', 'by', 'on', 'at', 'to', 'into', 'over', 'during', 'about', 'for']);
+const AUX_AFTER = /^(?:had|has|have|was|were|is|are|did|does|do|can|could|will|would|may|might|must|should|alone|only|itself|then|also)$/u;
+
+/**
+ * The subject of the verb at `i`: the nearest thing before it in its segment with nothing but
+ * auxiliaries, adverbs and negations between; a thing inside a prepositional phrase ("the rise in
+ * CO2") is passed over unless a verb follows it ("after the ice had started").
+ */
+export function subjectBefore(s: ReadSentence, i: number): Thing | undefined {
+  const segment = s.words[i]?.segment;
+  for (let k = i - 1; k >= 0 && s.words[k]?.segment === segment; k -= 1) {
+    const thing = s.things.find((t) => t.last === k);
+    if (thing !== undefined) {
+      const lead = s.words[thing.first - 1]?.text ?? '';
+      const lead2 = s.words[thing.first - 2]?.text ?? '';
+      const inPhrase = PREPOSITIONS.has(lead) || (['the', 'a', 'an'].includes(lead) && PREPOSITIONS.has(lead2));
+      if (lead === 'not' || (inPhrase && !AUX_AFTER.test(s.words[thing.last + 1]?.text ?? ''))) {
+        k = thing.first;
+        continue;
+      }
+      return thing;
+    }
+    if (!SKIP.test(s.words[k]?.text ?? '')) return undefined;
+  }
+  return undefined;
+}
+
+/** ", a bystander to the warming": an apposition describes the previous segment's plain subject. */
+export function appositionSubject(s: ReadSentence, i: number): Thing | undefined {
+  const segment = s.words[i]?.segment ?? 0;
+  const start = s.words.findIndex((w) => w.segment === segment);
+  if (!['a', 'an', 'the', 'merely', 'just', 'only', 'simply'].includes(s.words[start]?.text ?? '')) return undefined;
+  return s.things.find((t) => s.words[t.first]?.segment === segment - 1 && !PREPOSITIONS.has(s.words[t.first - 1]?.text ?? '') && !PREPOSITIONS.has(s.words[t.first - 2]?.text ?? '') && t.kind !== 'pronoun');
+}
+

@@ -1,0 +1,148 @@
+/**
+ * One sentence as the proposition reader sees it: its words (lower-case, with offsets, clause and
+ * segment numbers), the lexicon phrases found in it, and the things it names. No NLP library runs
+ * here: the lexicon carries the inflections, and the grammar below is English's closed classes.
+ *
+ *   "As the oceans warmed, they released CO2."
+ *    segment 0 ──────────  segment 1 ─────────   (a comma or a linking word starts a segment)
+ */
+import { tokenizeSentence } from '../claims/frames-tokens.js';
+import type { CompiledLexicon, LexHit } from './lexicon.js';
+
+/** One word of the sentence. `start`/`end` are UTF-16 offsets into the sentence text. */
+export interface Word {
+  text: string;
+  start: number;
+  end: number;
+  /** Grows at ; : ( ) dashes and at contrast words (but, while, whereas, although...). */
+  clause: number;
+  /** Grows at each clause, comma and linking word (so, because, when, which...). */
+  segment: number;
+  quoted: boolean;
+}
+
+/** A thing a proposition can be about: a lexicon entity or region, or a pronoun standing for one. */
+export interface Thing {
+  /** `co2`, `temperature`, `orbit`, `water`, a region key (`antarctic`, `global`...), or `pronoun`. */
+  kind: string;
+  /** Region key named with a temperature ("Antarctic temperature", "warming in Antarctica"). */
+  region?: string;
+  first: number;
+  last: number;
+}
+
+/** A sentence ready for the proposition readers. */
+export interface ReadSentence {
+  text: string;
+  words: Word[];
+  hits: LexHit[];
+  /** Hits of one class (and key, when given), in order. */
+  of(cls: string, key?: string): LexHit[];
+  /** True when word `i` is inside a hit of `cls` (and `key`). */
+  inside(i: number, cls: string, key?: string): boolean;
+  things: Thing[];
+  /** The sentence ends with a question mark. */
+  question: boolean;
+  /** The `not` of a negative question ("Isn't it...?", "Doesn't that...?"): part of the form, no denial. */
+  questionNot: number;
+}
+
+const CONTRAST = ['but', 'while', 'whereas', 'although', 'though', 'yet', 'however'];
+/** Words that open a new segment: a linked clause with its own subject. */
+const LINKS = new Set(['so', 'therefore', 'thus', 'hence', 'because', 'since', 'when', 'if', 'which', 'meaning', 'means', 'whereby', 'once', 'unless', 'until', 'consequently']);
+/** Words after which "that" opens a clause of its own ("shows that temperature drives CO2"). */
+const COMPLEMENT_TAKERS = /^(?:show|prove|mean|say|said|know|knew|think|thought|argue|claim|suggest|find|found|note|clear|plain|true|evident|obvious|likely|so|insist|assert|believe|tell|told|demonstrate|confirm|establish|reveal|indicate|impl(?:y|ies|ied)|conclude|maintain|contend|write|wrote|hear|heard|fact|idea|notion|view|belief|myth|argument|sure|certain|agree|recogni[sz]e|shown|proof|evidence|sign|means)\w*$/u;
+const AUXILIARIES = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
+const PRONOUNS = new Set(['it', 'they', 'this', 'that', 'these', 'those', 'its', 'their']);
+/** Entities that take part in causes and orders. */
+const PARTICIPANTS = new Set(['co2', 'temperature', 'orbit', 'water', 'ice-age', 'trapped-air', 'ice', 'marginal-forcing']);
+
+/** Reads one sentence: words, segments, lexicon hits and things. */
+export function readSentence(text: string, lexicon: CompiledLexicon): ReadSentence {
+  const tokens = tokenizeSentence(text, CONTRAST, null).tokens;
+  const words: Word[] = [];
+  let segment = 0;
+  let lastClause = 0;
+  let pendingBreak = false;
+  for (const token of tokens) {
+    if (!token.isWord) {
+      if (token.text === ',' || token.clause !== lastClause) pendingBreak = true;
+      lastClause = token.clause;
+      continue;
+    }
+    const complement = token.text === 'that' && COMPLEMENT_TAKERS.test(words.at(-1)?.text ?? '');
+    if (token.clause !== lastClause || pendingBreak || complement || (LINKS.has(token.text) && words.length > 0)) segment += 1;
+    pendingBreak = false;
+    lastClause = token.clause;
+    words.push({ text: token.text, start: token.start, end: token.end, clause: token.clause, segment, quoted: token.quoted });
+  }
+  const hits = lexicon.find(words.map((w) => w.text));
+  const of = (cls: string, key?: string) => hits.filter((h) => h.cls === cls && (key === undefined || h.key === key));
+  const inside = (i: number, cls: string, key?: string) => of(cls, key).some((h) => h.first <= i && i <= h.last);
+  const question = /\?\s*["”’)]*\s*$/u.test(text);
+  const questionNot = question && AUXILIARIES.has(words[0]?.text ?? '') && words[1]?.text === 'not' ? 1 : -1;
+  return { text, words, hits, of, inside, things: thingsOf(words, hits), question, questionNot };
+}
+
+/** Entities, regions (as the temperature of that region) and pronouns, left to right. */
+function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
+  const things: Thing[] = [];
+  const regions = hits.filter((h) => h.cls === 'regions');
+  for (const h of hits) {
+    const inLonger = hits.some((o) => o !== h && o.cls === 'entities' && o.first <= h.first && o.last >= h.last && o.last - o.first > h.last - h.first);
+    if (h.cls === 'entities' && PARTICIPANTS.has(h.key) && !inLonger) {
+      const near = regions.find((r) => Math.abs(r.first - h.first) <= 3 && words[r.first]?.clause === words[h.first]?.clause);
+      things.push({ kind: h.key, first: h.first, last: h.last, ...(h.key === 'temperature' && near !== undefined ? { region: near.key } : {}) });
+    } else if (h.cls === 'changes' && (h.key === 'warm' || h.key === 'cool') && isNominal(words, h.first)) {
+      // "the warming", "Antarctic cooling": a temperature change named as a thing.
+      const near = regions.find((r) => r.last === h.first - 1 || r.first === h.last + 2);
+      things.push({ kind: 'temperature', first: h.first, last: h.last, ...(near === undefined ? {} : { region: near.key }) });
+    } else if (h.cls === 'regions' && !hits.some((o) => o.cls === 'entities' && o.key === 'temperature' && Math.abs(o.first - h.first) <= 3)) {
+      things.push({ kind: 'temperature', region: h.key, first: h.first, last: h.last });
+    }
+  }
+  words.forEach((w, i) => {
+    if (PRONOUNS.has(w.text) && !(w.text === 'that' && i > 0) && !things.some((t) => t.first <= i && i <= t.last)) {
+      things.push({ kind: 'pronoun', first: i, last: i });
+    }
+  });
+  return things.sort((a, b) => a.first - b.first || b.last - a.last).filter((t, k, all) => k === 0 || t.first > (all[k - 1] as Thing).last);
+}
+
+/** "the warming", "warming of the ocean", "Antarctic cooling": a change word used as a noun. */
+function isNominal(words: readonly Word[], i: number): boolean {
+  const w = words[i]?.text ?? '';
+  const before = words[i - 1]?.text ?? '';
+  return (w.endsWith('ing') && !['is', 'are', 'was', 'were', 'be', 'been', 'keep', 'kept', 'started', 'began'].includes(before)) || ['the', 'a', 'this', 'that', 'its'].includes(before);
+}
+
+/** Words that deny what follows within their segment. */
+export const NEGATIONS = new Set(['not', 'no', 'never', 'nothing', 'none', 'neither', 'nor', 'without', 'hardly', 'barely', 'nobody', 'nowhere']);
+/** Words that deny an effect by saying it fell short ("unable to end", "insufficient to explain"). */
+const LIMITS = new Set(['unable', 'insufficient', 'failed', 'fails', 'fail', 'negligible', 'irrelevant', 'unimportant', 'insignificant', 'immaterial']);
+/** Verbs that deny their object ("rules out CO2 as a driver"). */
+export const DENIALS = new Set(['rule', 'rules', 'ruled', 'ruling', 'exclude', 'excludes', 'excluded', 'deny', 'denies', 'denied', 'disprove', 'disproves', 'disproved', 'refute', 'refutes', 'refuted', 'dismiss', 'dismisses', 'dismissed', 'exonerate', 'exonerates', 'exonerated', 'acquit', 'acquits', 'acquitted']);
+
+/**
+ * How many denials stand before word `i` in its clause, within `window` words and not past a linking
+ * word such as "so" or "because" (odd: denied).
+ * "ruled out" counts through its verb; "not only" is no denial.
+ */
+export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
+  let count = 0;
+  const clause = s.words[i]?.clause;
+  for (let k = i - 1; k >= 0 && k >= i - window; k -= 1) {
+    const w = s.words[k] as Word;
+    // "cannot, by definition, have caused": a denial reaches across a parenthetical comma, not past "so" or "because".
+    if (w.clause !== clause || LINKS.has(s.words[k + 1]?.text ?? '') && k + 1 < i) break;
+    if (k === s.questionNot) continue;
+    const after = s.words[k + 1]?.text ?? '';
+    // "Orbital changes, not CO2, caused it": a "not" that sets one thing against another denies no verb.
+    const contrast = w.text === 'not' && s.things.some((t) => (t.first === k + 1 || t.first === k + 2) && s.words[t.last + 1]?.segment !== s.words[t.last]?.segment && t.last < i);
+    if (contrast) continue;
+    if (NEGATIONS.has(w.text) && after !== 'only' && !(w.text === 'no' && after === 'doubt') && !(w.text === 'nothing' && (after === 'else' || after === 'but'))) count += 1;
+    else if (LIMITS.has(w.text) || (w.text === 'too' && /^(?:weak|small|feeble|little|slow|short|modest)$/u.test(after))) count += 1;
+    else if (DENIALS.has(w.text) && (w.text.startsWith('rul') ? s.words[k + 1]?.text === 'out' : true)) count += 1;
+  }
+  return count;
+}

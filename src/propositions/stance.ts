@@ -1,0 +1,104 @@
+/**
+ * Stance: how a sentence holds what it says. Only an asserted claim (or the answer a rhetorical
+ * question asserts) is the writer's own; a reported, quoted, myth-labelled, asked, hypothetical or
+ * superseded one is not, unless the draft endorses it ("...and they are right").
+ *
+ *   "Myth: CO2 lags, so it cannot be the cause."            myth
+ *   "Some commentators claim the lag rules CO2 out."         reported
+ *   "If CO2 trails temperature, how could it be the cause?"  rhetorical (asserts: it is not)
+ *   "Doesn't the lag prove CO2 is not a cause? No: ..."      asked (the next sentence answers)
+ */
+import type { BlockKind } from '../types.js';
+import type { ReadSentence } from './sentence.js';
+
+export const STANCES = ['asserted', 'rhetorical', 'reported', 'quoted', 'myth', 'asked', 'hypothetical', 'superseded', 'marked'] as const;
+export type StanceKind = (typeof STANCES)[number];
+
+/** The stance of one sentence, and whether the draft endorses it anyway. */
+export interface SentenceStance {
+  kind: StanceKind;
+  endorsed: boolean;
+  /** For a rhetorical question: `how` flips what it asks ("how could it be...?" asserts it is not). */
+  flips: boolean;
+}
+
+/** What around a sentence bears on its stance. */
+export interface StanceContext {
+  blockKind?: BlockKind;
+  /** The heading the sentence's block sits under. */
+  heading?: string;
+  /** The block carries the deliberate-quotation marker (`<!-- firnline: reported -->`). */
+  marked?: boolean;
+  /** The next sentence of the paragraph, read (it can answer a question or endorse a report). */
+  next?: ReadSentence;
+}
+
+const AUX = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
+const WH = new Set(['how', 'why']);
+/** Subjects whose report the writer relies on rather than answers. */
+const AUTHORITIES = new Set(['we', 'i', 'scientists', 'researchers', 'study', 'studies', 'data', 'evidence', 'cores', 'core', 'record', 'records', 'team', 'authors', 'our', 'measurements', 'this', 'that', 'it', 'which', 'analysis', 'results', 'paper', 'ipcc', 'report', 'lag', 'physics']);
+const ANSWER_OPENERS = new Set(['no', 'not', 'nope', 'actually', 'yes', 'well', 'short', 'a', 'answer', 'in', 'it', 'they', 'that', 'this', 'quite', 'hardly', 'far', 'nothing', 'partly', 'only', 'both', 'neither', 'sort', 'kind']);
+const LABEL = /^\s*(?:[*_#>\s]*)(myth|misconception|claim|the claim|fiction|false|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|you might hear|you'll hear|the myth|the misconception|misunderstanding|mistake|rumou?r)\b[^:]{0,12}:/iu;
+const FACT_LABEL = /^\s*(?:[*_#>\s]*)(fact|reality|the facts?|the science|the evidence|truth|answer|a)\b[^:]{0,12}:/iu;
+
+/** The stance of `s` in its context. */
+export function stanceOf(s: ReadSentence, context: StanceContext = {}): SentenceStance {
+  const endorsed = s.of('stance', 'endorse').length > 0 || (context.next?.of('stance', 'endorse').some((h) => h.first <= 4) ?? false);
+  const make = (kind: StanceKind, flips = false): SentenceStance => ({ kind, endorsed: kind !== 'asserted' && endorsed, flips });
+  if (context.marked === true) return make('marked');
+  if (context.blockKind === 'blockquote') return make('quoted');
+  if (FACT_LABEL.test(s.text)) return make('asserted');
+  if (LABEL.test(s.text) || isMythHeading(context.heading) || (context.blockKind === 'heading' && s.of('stance', 'myth').length > 0)) return make('myth');
+  const quotedWords = s.words.filter((w) => w.quoted).length;
+  if (s.words.length > 0 && quotedWords / s.words.length >= 0.6) return make('quoted');
+  if (s.question) return questionStance(s, context, make);
+  if (isReported(s)) return make('reported');
+  if (s.of('stance', 'myth').length > 0) return make('myth');
+  if (s.of('stance', 'superseded').length > 0) return make('superseded');
+  if (isHypothetical(s)) return make('hypothetical');
+  return make('asserted');
+}
+
+function questionStance(s: ReadSentence, context: StanceContext, make: (k: StanceKind, flips?: boolean) => SentenceStance): SentenceStance {
+  const first = s.words[0]?.text ?? '';
+  if (first === 'q' || isReported(s)) return make('asked');
+  const answeredNext = context.next !== undefined && ANSWER_OPENERS.has(context.next.words[0]?.text ?? '');
+  const how = s.words.some((w, i) => WH.has(w.text) && (i === 0 || s.words[i - 1]?.segment !== w.segment) && AUX.has(s.words[i + 1]?.text ?? ''));
+  const negative = AUX.has(first) && s.words[1]?.text === 'not';
+  if ((how || negative) && !answeredNext) return make('rhetorical', how);
+  return make('asked');
+}
+
+/** "Some claim that...", "Critics argue...", "You may have heard that...", "It is often said...". */
+function isReported(s: ReadSentence): boolean {
+  const verbs = s.of('stance', 'report-verbs').filter((v) => v.first <= 10);
+  const reporters = s.of('stance', 'reporters');
+  if (verbs.some((v) => reporters.some((r) => r.last < v.first && v.first - r.last <= 4))) return true;
+  // "Mr Pratley writes that...", "The op-ed insists the lag...": a report with a named outside source.
+  const attributed = verbs.some((v) => {
+    const next = s.words[v.last + 1]?.text ?? '';
+    const subject = s.words.slice(Math.max(0, v.first - 3), v.first).map((w) => w.text);
+    return (next === 'that' || s.words[v.last + 1]?.quoted === true) && v.first > 0 && !subject.some((w) => AUTHORITIES.has(w));
+  });
+  if (attributed) return true;
+  const text = s.words.slice(0, 8).map((w) => w.text).join(' ');
+  return /\b(?:it is|it's|is) (?:often|sometimes|commonly|frequently|widely) (?:said|claimed|argued|heard|repeated|asserted)\b|\baccording to (?:some|critics|sceptics|skeptics)\b/u.test(text);
+}
+
+function isHypothetical(s: ReadSentence): boolean {
+  const first = s.words[0]?.text ?? '';
+  if (!['if', 'suppose', 'supposing', 'imagine', 'were'].includes(first)) return false;
+  return s.words.some((w) => ['would', 'might'].includes(w.text));
+}
+
+/** A short heading that labels its section as the myth ("The myth", "What you may hear"). */
+function isMythHeading(heading: string | undefined): boolean {
+  if (heading === undefined) return false;
+  const words = heading.trim().split(/\s+/u);
+  return words.length <= 5 && /\b(?:myths?|misconceptions?|the claim|claims|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|false)\b/iu.test(heading) && !/\b(?:fact|facts|truth|busting|debunk\w*|answer\w*|vs\.?|versus)\b/iu.test(heading);
+}
+
+/** True when a flag on this sentence stands as the writer's own error. */
+export function isOwnClaim(stance: SentenceStance): boolean {
+  return stance.kind === 'asserted' || stance.kind === 'rhetorical' || stance.endorsed;
+}
