@@ -5,32 +5,21 @@ import type { LoadedPacks } from '../rulepack/types.js';
  * periods, regions), never generic words such as "record", "percent" or "now" that every docs page
  * uses. One compiled matcher of these words runs over the raw text of every file before any parse.
  *
- * Where a pack has a `lexicon` section (`entities`, `regions`, `periods`), its lists are the words.
- * Until then the built-in pack's subject terms below stand in, and every term of a team's own pack
- * counts (a team adds a pack to name its own subjects). This is the one place to change.
+ * The built-in pack's subject terms below are the words, and every term of a team's own pack counts
+ * (a team adds a pack to name its own subjects). This is the one place to point at the pack's
+ * `lexicon` section instead, once its word lists name subjects only: today its `entities` also hold
+ * words such as "water", "air", "gas" and "heat", which most pages of a docs repository contain.
  */
 export function topicWordsOf(packs: LoadedPacks): string[] {
   const words: string[] = [];
-  const lexicons = packs.packs.map((p) => (p as { lexicon?: Lexicon }).lexicon).filter((l) => l !== undefined);
-  if (lexicons.length > 0) {
-    for (const l of lexicons) words.push(...(l.entities ?? []), ...(l.regions ?? []), ...(l.periods ?? []));
-  } else {
-    for (const pack of packs.packs) {
-      const builtin = pack.id === BUILTIN_PACK_ID;
-      for (const term of pack.terms) {
-        if (builtin && !SUBJECT_TERMS.has(term.id)) continue;
-        words.push(...term.words.filter((w) => !GENERIC_WORDS.has(w.toLowerCase())));
-      }
+  for (const pack of packs.packs) {
+    const builtin = pack.id === BUILTIN_PACK_ID;
+    for (const term of pack.terms) {
+      if (builtin && !SUBJECT_TERMS.has(term.id)) continue;
+      words.push(...term.words.filter((w) => !GENERIC_WORDS.has(w.toLowerCase())));
     }
   }
   return [...new Set(words.map((w) => w.toLowerCase()))];
-}
-
-/** A pack's word lists of subject names (the lead's planned `lexicon` section). */
-interface Lexicon {
-  entities?: string[];
-  regions?: string[];
-  periods?: string[];
 }
 
 const BUILTIN_PACK_ID = 'paleoclimate';
