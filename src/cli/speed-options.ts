@@ -5,6 +5,7 @@
 import { join } from 'node:path';
 import type { CheckOptions } from '../engine.js';
 import { FirnlineError } from '../errors.js';
+import { parseShard } from '../speed/shard.js';
 import { VERSION } from '../version.js';
 import type { CliContext } from './context.js';
 
@@ -18,6 +19,18 @@ export interface SpeedFlags {
   shard?: string;
 }
 
+/** --jobs and --shard, checked before anything heavy loads (a usage error is one line, exit 2). */
+export function parseSpeedFlags(flags: SpeedFlags): Partial<CheckOptions> {
+  const options: Partial<CheckOptions> = {};
+  if (flags.jobs !== undefined) {
+    const jobs = Number(flags.jobs);
+    if (!/^\d+$/u.test(flags.jobs.trim()) || jobs < 1) throw new FirnlineError('usage', `--jobs ${flags.jobs}: expected a whole number of at least 1`);
+    options.jobs = jobs;
+  }
+  if (flags.shard !== undefined) options.shard = parseShard(flags.shard);
+  return options;
+}
+
 /** How long a run goes before it shows progress, and how often the line is redrawn. */
 const PROGRESS_AFTER_MS = 1000;
 const PROGRESS_EVERY_MS = 100;
@@ -28,16 +41,7 @@ export async function speedOptionsOf(
   projectRoot: string,
   ctx: Pick<CliContext, 'env' | 'stderr' | 'stderrIsTTY'>,
 ): Promise<{ options: Partial<CheckOptions>; done: () => void }> {
-  const options: Partial<CheckOptions> = {};
-  if (flags.jobs !== undefined) {
-    const jobs = Number(flags.jobs);
-    if (!/^\d+$/u.test(flags.jobs.trim()) || jobs < 1) throw new FirnlineError('usage', `--jobs ${flags.jobs}: expected a whole number of at least 1`);
-    options.jobs = jobs;
-  }
-  if (flags.shard !== undefined) {
-    const { parseShard } = await import('../speed/shard.js');
-    options.shard = parseShard(flags.shard);
-  }
+  const options = parseSpeedFlags(flags);
   if (flags.cache !== false) {
     const { CACHE_FOLDER, ResultCache } = await import('../speed/cache.js');
     options.cache = new ResultCache(join(projectRoot, CACHE_FOLDER), VERSION);

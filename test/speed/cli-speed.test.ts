@@ -68,5 +68,5 @@ describe('firnline check over many files: pool, cache and shards change nothing'
       expect(failed).toMatchObject({ code: 2 });
       expect((failed as { stderr: string }).stderr.trim().split('\n')).toHaveLength(1);
     }
-  });
+  }, 120_000);
 });

@@ -5,7 +5,7 @@ import type { ReportFormat } from '../../report/index.js';
 import { LEVELS, type Level } from '../../types.js';
 import { VERSION } from '../../version.js';
 import type { CliContext } from '../context.js';
-import { CHECK_FORMATS, speedOptionsOf, type SpeedFlags } from '../speed-options.js';
+import { CHECK_FORMATS, parseSpeedFlags, speedOptionsOf, type SpeedFlags } from '../speed-options.js';
 
 // The engine, the packs' schemas and the reporters load inside the action (dynamic import), so
 // `--version` and `--help` start in a few hundredths of a second (bench/).
@@ -37,6 +37,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('--no-cache', 'neither read nor write the result cache (.firnline-cache/ in the project root)')
     .option('--shard <k/n>', 'check only the k-th of n parts of the files (split by path), for CI matrix jobs; join the reports with `firnline merge`')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
+      parseSpeedFlags(flags);
       const [{ checkPaths }, { renderReport }, { renderChecklistOf }, { applyGate }, { checkOptionsOf, loadRunSettings }, { writeFileAtomic }, { exitCodeFor }] =
         await Promise.all([
           import('../../engine.js'), import('../../report/index.js'), import('../render-checklist.js'), import('../gate.js'),
