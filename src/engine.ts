@@ -119,7 +119,8 @@ function addText(result: CheckResult, raw: Pick<Draft, 'path' | 'text' | 'format
 }
 
 /**
- * One file's findings. A text that names no subject (topicWordsOf) is skipped before it is even
+ * One file's findings. A text that names no subject of the packs (a CO2 term, an ice core, an ice
+ * age, the orbit, a period: `lexicon.subjects`, see prose/topicWordsOf) is skipped before it is even
  * parsed, and so is a sign-off checklist that Firnline wrote (it quotes every claim, and is not a
  * draft); otherwise only the blocks around the subject's mentions are parsed and checked
  * (source/windows.ts).
@@ -133,9 +134,12 @@ export function checkFileText(
   if (text.trimStart().startsWith(CHECKLIST_MARKER)) return { claims: [], flags: [], skipped: 'sign-off checklist' };
   const subjects = options.subjects ?? subjectPattern(packs);
   const draft = subjects === undefined ? undefined : draftAroundHits(path, text, format, subjects);
-  if (draft === undefined) return { claims: [], flags: [], skipped: 'no topic term' };
+  if (draft === undefined) return { claims: [], flags: [], skipped: NO_SUBJECT };
   return checkDraft(draft, packs, options);
 }
+
+/** Why a file that names no subject of the packs was passed over. */
+export const NO_SUBJECT = 'names no subject of the packs';
 
 /** The compiled subject matcher of the packs, global (it finds every mention). */
 export function subjectPattern(packs: LoadedPacks): RegExp | undefined {
@@ -182,6 +186,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
         bindings,
         verdict: verdictOf(verdicts),
         flags,
+        ...(block.marked === true ? { marked: true as const } : {}),
       });
     });
   });
@@ -221,10 +226,12 @@ function examineSentence(paragraph: string[], index: number, packs: LoadedPacks,
   const reading = paragraphReader(paragraph, packs, context)(index);
   const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)]);
   const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(paragraph, index, packs, context)];
-  const measured = quantities.some((q) => q.dimension !== 'number');
   const p = reading?.props;
   // A causal or order statement is a claim to sign off even without a number.
   const asserts = p !== undefined && p.causes.length + p.orders.length + p.relations.length + p.comparisons.length + p.evidence.length > 0;
+  // A number is a claim when its sentence (or the one before: "It reaches down 3,270 m.") names a subject.
+  const subjects = subjectMatcherOf(packs);
+  const measured = quantities.some((q) => q.dimension !== 'number') && (subjects.test(text) || subjects.test(paragraph[index - 1] ?? ''));
   if (!measured && bindings.length === 0 && drafts.length === 0 && !asserts) return undefined;
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
@@ -239,6 +246,18 @@ function preferSpecific(drafts: FlagDraft[]): FlagDraft[] {
   const specific = drafts.filter((d) => d.ruleId.startsWith('arith.') || d.ruleId.startsWith('unit.'));
   if (specific.length === 0) return drafts;
   return drafts.filter((d) => !d.ruleId.startsWith('value.') || !specific.some((s) => s.start < d.end && d.start < s.end));
+}
+
+const subjectMatchers = new WeakMap<LoadedPacks, TopicMatcher>();
+
+/** The matcher for the words that put a draft on topic (compiled once per packs). */
+function subjectMatcherOf(packs: LoadedPacks): TopicMatcher {
+  let matcher = subjectMatchers.get(packs);
+  if (matcher === undefined) {
+    matcher = createTopicMatcher(topicWordsOf(packs));
+    subjectMatchers.set(packs, matcher);
+  }
+  return matcher;
 }
 
 function verdictOf(verdicts: Verdict[]): Verdict {

@@ -217,6 +217,8 @@ export interface Claim {
   bindings: Binding[];
   verdict: Verdict;
   flags: Flag[];
+  /** The claim stands in a passage the draft marks as reported (`<!-- firnline: reported -->`). */
+  marked?: true;
 }
 
 /** What a report says about one rule id: for SARIF `tool.driver.rules`, `explain` and the checklist. */

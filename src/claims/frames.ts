@@ -9,7 +9,6 @@ import { compilePhrases, findPhrases, isNegated, type Phrase, type PhraseHit } f
 import { nearestMention, orderFrames, subjectMentions } from './frames-order.js';
 import { tokenizeSentence, type SentenceTokens } from './frames-tokens.js';
 import { FRAME_WORDS, type FrameWords } from './frames-words.js';
-import { DEFAULT_STANCE_WORDS } from './stance.js';
 
 interface FrameBase {
   start: number;
@@ -79,7 +78,7 @@ export function extractFrames(sentence: string, words: FrameWords = FRAME_WORDS)
     ...findPhrases(tokens, w.certainty).map(
       (hit): Frame => ({ ...base(hit), kind: 'certainty', negated: isNegated(tokens, hit.first, w.negation) }),
     ),
-    ...findPhrases(tokens, words === FRAME_WORDS ? DEFAULT_STANCE_WORDS.reported : w.reported).map(
+    ...findPhrases(tokens, w.reported).map(
       (hit): Frame => ({ ...base(hit), kind: 'stance', stance: 'reported' }),
     ),
   ];

@@ -19,7 +19,9 @@ export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed
   const out: Directed[] = [];
   const push = (of: string, attribute: Directed['attribute'], dir: 1 | -1, h: LexHit, thing?: Thing) => {
     const first = Math.min(h.first, thing?.first ?? h.first);
-    const last = Math.max(h.last, thing?.last ?? h.last);
+    // "absorbed more", "holds less": the size word belongs to the claim.
+    const size = attribute === 'uptake' && /^(?:more|less|fewer|extra)$/u.test(s.words[h.last + 1]?.text ?? '') ? 1 : 0;
+    const last = Math.max(h.last + size, thing?.last ?? h.last);
     const negated = denialsBefore(s, h.first, 5) % 2 === 1;
     const form = thing !== undefined && thing.first > h.last ? 'state' : 'change';
     out.push({ of, attribute, dir, negated, form, first, last, start: s.words[first]?.start ?? 0, end: s.words[last]?.end ?? 0 });
@@ -86,7 +88,8 @@ function uptakeDirection(s: ReadSentence, h: LexHit): 1 | -1 | undefined {
     base = change.key === 'up' ? 1 : -1;
   } else {
     // "less dissolved CO2": a participle before CO2 describes it, and states no uptake.
-    if (/ed$/u.test(s.words[h.last]?.text ?? '') && s.of('entities', 'co2').some((c) => c.first === h.last + 1)) return undefined;
+    const lead = s.words[h.first - 1]?.text ?? '';
+    if (/ed$/u.test(s.words[h.last]?.text ?? '') && s.of('entities', 'co2').some((c) => c.first === h.last + 1) && /^(?:less|more|of|the|a|much|little|extra|some|no)$/u.test(lead)) return undefined;
     const objectCo2 = s.of('entities', 'co2').some((c) => c.first > h.last && c.first - h.last <= 5) || s.words.slice(h.last + 1, h.last + 4).some((w) => /^(?:it|carbon|gas|them)$/u.test(w.text));
     // "the less carbon dioxide it can keep dissolved": CO2 stands before the verb.
     const subjectCo2 = s.of('entities', 'co2').some((c) => c.last < h.first && h.first - c.last <= 5);

@@ -125,3 +125,17 @@ function findHits(index: ReadonlyMap<string, Entry[]>, words: readonly string[])
   });
   return hits;
 }
+
+/**
+ * The words that put a draft on topic: every form of the phrases of the entity keys listed under
+ * `lexicon.subjects`, and of every period. Generic words ("percent", "record", "years") are not
+ * among them, so a file about something else is skipped before it is parsed.
+ */
+export function subjectWordsOf(lexicon: Lexicon): string[] {
+  const keys = new Set((lexicon['subjects']?.['all'] ?? []).map((k) => k.toLowerCase()));
+  const phrases = [
+    ...Object.entries(lexicon['entities'] ?? {}).filter(([key]) => keys.has(key)).flatMap(([, words]) => words),
+    ...Object.values(lexicon['periods'] ?? {}).flat(),
+  ];
+  return [...new Set(phrases.flatMap((p) => variantsOf(phraseWords(p)).map((w) => w.join(' '))))];
+}

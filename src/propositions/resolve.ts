@@ -10,7 +10,9 @@ export function kindOf(s: ReadSentence, thing: Thing | undefined, previous?: Rea
   if (thing.kind !== 'pronoun') return thing.kind;
   const segment = s.words[thing.first]?.segment ?? 0;
   for (let seg = segment; seg >= 0; seg -= 1) {
-    const subject = s.things.find((t) => t.kind !== 'pronoun' && t.first < thing.first && s.words[t.first]?.segment === seg);
+    // The subject, not a thing in a phrase before it ("At the start of the deglaciation CO2 ...").
+    const candidates = s.things.filter((t) => t.kind !== 'pronoun' && t.first < thing.first && s.words[t.first]?.segment === seg);
+    const subject = candidates.find((t) => !inPhrase(s, t)) ?? candidates[0];
     if (subject !== undefined) return subject.kind;
   }
   return previous?.things.find((t) => t.kind !== 'pronoun')?.kind;
@@ -85,3 +87,10 @@ export function appositionSubject(s: ReadSentence, i: number): Thing | undefined
   return s.things.find((t) => s.words[t.first]?.segment === segment - 1 && !PREPOSITIONS.has(s.words[t.first - 1]?.text ?? '') && !PREPOSITIONS.has(s.words[t.first - 2]?.text ?? '') && t.kind !== 'pronoun');
 }
 
+
+/** True when a thing stands in a prepositional phrase ("of the deglaciation", "in CO2"). */
+export function inPhrase(s: ReadSentence, t: Thing): boolean {
+  const lead = s.words[t.first - 1]?.text ?? '';
+  const lead2 = s.words[t.first - 2]?.text ?? '';
+  return PREPOSITIONS.has(lead) || (['the', 'a', 'an', 'every', 'each', 'this', 'that'].includes(lead) && PREPOSITIONS.has(lead2));
+}

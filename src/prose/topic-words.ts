@@ -1,3 +1,4 @@
+import { subjectWordsOf } from '../propositions/index.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 
 /**
@@ -5,12 +6,14 @@ import type { LoadedPacks } from '../rulepack/types.js';
  * periods, regions), never generic words such as "record", "percent" or "now" that every docs page
  * uses. One compiled matcher of these words runs over the raw text of every file before any parse.
  *
- * The built-in pack's subject terms below are the words, and every term of a team's own pack counts
- * (a team adds a pack to name its own subjects). This is the one place to point at the pack's
- * `lexicon` section instead, once its word lists name subjects only: today its `entities` also hold
- * words such as "water", "air", "gas" and "heat", which most pages of a docs repository contain.
+ * The words are the packs' lexicon subjects (`lexicon.subjects`: their entities, and every period),
+ * as the engine's claim test reads them (propositions/subjectWordsOf), so the file prefilter, the
+ * windows around hits and "a number beside a subject" all use one list. Packs without a lexicon
+ * fall back to the built-in pack's subject terms below, and every term of a team's own pack.
  */
 export function topicWordsOf(packs: LoadedPacks): string[] {
+  const lexicon = subjectWordsOf(packs.lexicon);
+  if (lexicon.length > 0) return [...new Set(lexicon.map((w) => w.toLowerCase()))];
   const words: string[] = [];
   for (const pack of packs.packs) {
     const builtin = pack.id === BUILTIN_PACK_ID;

@@ -56,7 +56,8 @@ function summaryLine(result: CheckResult): string {
   const byLevel = [countOf(s.error, 'error'), countOf(s.warning, 'warning'), countOf(s.note, 'note')];
   return (
     `Checked ${countOf(result.files.length, 'file')}: ${countOf(s.claims, 'claim')} found, ` +
-    `${countOf(s.flags, 'flag')} (${byLevel.join(', ')}), ${countOf(s.skipped, 'file')} skipped.`
+    `${countOf(s.flags, 'flag')} (${byLevel.join(', ')}), ${countOf(s.skipped, 'file')} skipped` +
+    (s.marked > 0 ? `, ${countOf(s.marked, 'claim')} marked as reported.` : '.')
   );
 }
 

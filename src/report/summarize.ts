@@ -1,8 +1,8 @@
 import { LEVELS } from '../types.js';
 import type { CheckResult, Level } from '../types.js';
 
-/** The counts every report states: claims found, flags in all and by level, files skipped. */
-export type ReportSummary = { claims: number; flags: number; skipped: number } & Record<Level, number>;
+/** The counts every report states: claims found, flags in all and by level, files skipped, claims marked as reported. */
+export type ReportSummary = { claims: number; flags: number; skipped: number; marked: number } & Record<Level, number>;
 
 /** Counts one run's claims, flags (in all and per level) and skipped files. */
 export function summarize(result: CheckResult): ReportSummary {
@@ -13,6 +13,7 @@ export function summarize(result: CheckResult): ReportSummary {
     flags: result.flags.length,
     ...byLevel,
     skipped: result.skipped.length,
+    marked: result.claims.filter((c) => c.marked === true).length,
   };
 }
 

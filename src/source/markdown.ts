@@ -25,6 +25,13 @@ const CONTAINER_KINDS: Partial<Record<Nodes['type'], BlockKind>> = {
   blockquote: 'blockquote',
 };
 
+/**
+ * The marker an editor puts before a passage that quotes a claim on purpose (a myth being answered,
+ * a reader's letter): `<!-- firnline: reported -->`. Before a block, it marks that block (a whole
+ * quotation, list or table when it stands before one); at the start of a paragraph, that paragraph.
+ */
+export const REPORTED_MARKER = /^<!--\s*firnline:\s*reported\s*-->$/u;
+
 /** Nodes that are never prose: code, HTML, front matter, link definitions. */
 const NOT_PROSE = new Set<string>(['code', 'html', 'yaml', 'toml', 'definition', 'thematicBreak']);
 
@@ -45,7 +52,7 @@ export function readMarkdownBlocks(text: string, heading = ''): ProseBlock[] {
   const base = text.charCodeAt(0) === 0xfeff ? 1 : 0;
   const tree = fromMarkdown(base === 1 ? text.slice(1) : text, PARSE_OPTIONS);
   // `heading`: the heading above `text` when `text` is a window of a longer file (source/windows.ts).
-  const walk = { text, base, heading, blocks: [] as ProseBlock[] };
+  const walk = { text, base, heading, blocks: [] as ProseBlock[], pendingMark: false, marking: false };
   visitBlocks(tree, 'paragraph', walk);
   return walk.blocks;
 }
@@ -55,22 +62,38 @@ interface Walk {
   base: number;
   heading: string;
   blocks: ProseBlock[];
+  /** A marker stood just before: the next block (or container) is reported. */
+  pendingMark: boolean;
+  /** Inside a marked container. */
+  marking: boolean;
 }
 
 function visitBlocks(parent: Parents, containerKind: BlockKind, walk: Walk): void {
   for (const node of parent.children) {
+    if (node.type === 'html' && REPORTED_MARKER.test(node.value.trim())) {
+      walk.pendingMark = true;
+      continue;
+    }
     if (NOT_PROSE.has(node.type)) continue;
     const proseKind = PROSE_NODES[node.type];
     if (proseKind !== undefined && 'children' in node) {
       const kind = proseKind === 'paragraph' ? containerKind : proseKind;
+      const first = node.children[0];
+      const inlineMark = first?.type === 'html' && REPORTED_MARKER.test(first.value.trim());
+      const marked = walk.marking || walk.pendingMark || inlineMark;
+      walk.pendingMark = false;
       const builder = startBlockText();
       for (const child of node.children) collectInline(child, builder, walk);
       const isHeading = node.type === 'heading';
       const block = finishBlock(builder, kind, isHeading ? '' : walk.heading);
       if (isHeading) walk.heading = block?.text ?? '';
-      if (block !== undefined) walk.blocks.push(isHeading ? { ...block, heading: block.text } : block);
+      if (block !== undefined) walk.blocks.push({ ...block, ...(isHeading ? { heading: block.text } : {}), ...(marked ? { marked: true } : {}) });
     } else if ('children' in node) {
+      const outer = walk.marking;
+      walk.marking = outer || walk.pendingMark;
+      walk.pendingMark = false;
       visitBlocks(node, CONTAINER_KINDS[node.type] ?? containerKind, walk);
+      walk.marking = outer;
     }
   }
 }

@@ -10,7 +10,7 @@ import { readPlainTextBlocks } from './plain-text.js';
  * heading marks its whole section. Only the marked windows are parsed, each on its own, and every
  * block keeps offsets into the original file, so positions stay exact. A Markdown file that cannot
  * be cut safely (link reference definitions, setext headings, headings inside containers, bare CR
- * line ends) is parsed whole and its blocks outside the windows are dropped: the same blocks.
+ * line ends, a `firnline: reported` marker) is parsed whole and its blocks outside the windows are dropped: the same blocks.
  */
 export function draftAroundHits(path: string, text: string, format: Draft['format'], hits: RegExp): Draft | undefined {
   const segments = format === 'markdown' ? markdownSegments(text) : undefined;
@@ -61,7 +61,8 @@ const HTML_BLOCKS: [RegExp, RegExp][] = [
 export function markdownSegments(text: string): Segments {
   const starts = [0];
   const headings: Window[] = [];
-  let safe = !LINK_DEFINITION.test(text) && !CONTAINER_HEADING.test(text) && !/\r(?!\n)/u.test(text);
+  // A `<!-- firnline: reported -->` marker may stand a blank line before the block it marks.
+  let safe = !LINK_DEFINITION.test(text) && !CONTAINER_HEADING.test(text) && !/\r(?!\n)/u.test(text) && !/<!--\s*firnline:/u.test(text);
   let fence: { char: string; length: number; topLevel: boolean } | undefined;
   let htmlEnd: RegExp | undefined;
   let afterBlank = false;

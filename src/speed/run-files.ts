@@ -9,7 +9,7 @@ import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import type { Tinypool as TinypoolType } from 'tinypool';
-import { checkFileText, type DraftOptions } from '../engine.js';
+import { checkFileText, NO_SUBJECT, type DraftOptions } from '../engine.js';
 import { CHECKLIST_MARKER } from '../report/checklist-markdown.js';
 import { BUILTIN_PACK_FILE } from '../rulepack/index.js';
 import type { LoadedPacks } from '../rulepack/types.js';
@@ -87,7 +87,7 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
         continue;
       }
       if (probe === undefined || !probe.test(text)) {
-        finish(index, { claims: [], flags: [], skipped: 'no topic term' });
+        finish(index, { claims: [], flags: [], skipped: NO_SUBJECT });
         continue;
       }
       const key = options.cache === undefined ? undefined

@@ -30,20 +30,20 @@ const SOLUBILITY = 'direction.co2-solubility-falls-with-warming';
 
 // [sentence, expected flags as [rule id, start, end, flagged words]]
 const FLAGGED: [string, [string, number, number, string][]][] = [
-  ['Because the warming started first, carbon dioxide played no part in ending the ice ages, whatever role it plays today.', [[LAG, 50, 64, 'played no part']]],
-  ['In every termination CO2 merely followed the temperature, a bystander to the warming.', [[LAG, 25, 40, 'merely followed']]],
+  ['Because the warming started first, carbon dioxide played no part in ending the ice ages, whatever role it plays today.', [[LAG, 35, 67, 'carbon dioxide played no part in']]],
+  ['In every termination CO2 merely followed the temperature, a bystander to the warming.', [[LAG, 32, 40, 'followed']]],
   ["The warming that ended the last ice age had one cause: the extra summer sunlight that Earth's changing orbit sent to the far north.", [[SINGLE, 40, 53, 'had one cause']]],
   ['The great northern ice sheets melted for one reason only: rising carbon dioxide.', [[SINGLE, 37, 56, 'for one reason only']]],
-  ['Whatever the Dome C thermometer says happened in Antarctica is what happened to the planet as a whole.', [[REGIONAL, 80, 90, 'the planet']]],
-  ['Around the globe, temperatures started climbing about 800 years before carbon dioxide did.', [[ANT_LAG, 58, 70, 'years before']]],
+  ['Whatever the Dome C thermometer says happened in Antarctica is what happened to the planet as a whole.', [[REGIONAL, 84, 90, 'planet']]],
+  ['Around the globe, temperatures started climbing about 800 years before carbon dioxide did.', [[ANT_LAG, 54, 70, '800 years before']]],
   ['As the seas warm they absorb more CO₂, which is why ocean acidification is speeding up.', [[SOLUBILITY, 7, 33, 'seas warm they absorb more']]],
   ['As the oceans cooled going into each ice age, they released carbon dioxide into the air.', [[SOLUBILITY, 7, 59, 'oceans cooled going into each ice age, they released']]],
-  ['The oceans release CO2 as they cool.', [[SOLUBILITY, 4, 35, 'oceans release CO2 as they cool']]],
-  ['The warmer the ocean, the more CO2 it can store.', [[SOLUBILITY, 0, 34, 'The warmer the ocean, the more CO2']]],
+  ['The oceans release CO2 as they cool.', [[SOLUBILITY, 11, 35, 'release CO2 as they cool']]],
+  ['The warmer the ocean, the more CO2 it can store.', [[SOLUBILITY, 4, 47, 'warmer the ocean, the more CO2 it can store']]],
   // The direction fact wins over an either/or flag on overlapping words.
   ['Temperature drives CO2, since as the oceans warm they absorb more CO2, and CO2 does not drive temperature.', [[SOLUBILITY, 37, 65, 'oceans warm they absorb more']]],
   // Without the solubility words the either/or flag stands.
-  ['Temperature drives CO2, and CO2 does not drive temperature.', [['logic.either-or-causation', 12, 46, 'drives CO2, and CO2 does not drive']]],
+  ['Temperature drives CO2, and CO2 does not drive temperature.', [['logic.either-or-causation', 0, 46, 'Temperature drives CO2, and CO2 does not drive']]],
 ];
 
 const QUIET: string[] = [

@@ -47,8 +47,10 @@ function detectRegional({ index, read, sentence, words }: DetectInput): Cue[] {
   if (contrast.length > 0) return [];
   // "...and the CO2 then warmed the planet": CO2 acting on the globe, not a record read as global.
   if (here.props.causes.some((c) => c.agent === 'co2' && c.polarity === 'asserted')) return [];
-  const start = s.words[global.first]?.start ?? 0;
-  return [{ start, end: s.words[global.last]?.end ?? start }];
+  // "global temperature": the temperature word just after the global one is part of the claim.
+  const next = s.words.slice(global.last + 1, global.last + 4).findIndex((w) => /^(?:temperatures?|climate|average|mean|warming|cooling)$/u.test(w.text));
+  const last = next < 0 ? global.last : global.last + 1 + next;
+  return [{ start: s.words[global.first]?.start ?? 0, end: s.words[last]?.end ?? 0 }];
 }
 
 /**
@@ -57,8 +59,15 @@ function detectRegional({ index, read, sentence, words }: DetectInput): Cue[] {
  * has its own region ("Antarctic temperature rose centuries before CO2") is regional, and passes.
  */
 function detectLag({ index, read }: DetectInput): Cue[] {
-  const order = read(index)?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && (o.amount || o.recordNamed));
-  return order === undefined ? [] : [{ start: order.start, end: order.end }];
+  const here = read(index);
+  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && (o.amount || o.recordNamed));
+  if (here === undefined || order === undefined) return [];
+  // "about 800 years before": the lag figure just before the order word is part of the claim.
+  const at = here.s.words.findIndex((w) => w.start === order.start);
+  const lead = here.s.words.slice(Math.max(0, at - 3), at);
+  const figure = lead.findIndex((w) => /^(?:\d[\d,.]*|years?|centur(?:y|ies)|millenni(?:um|a)|decades?|few|several|hundreds?)$/u.test(w.text));
+  const start = figure < 0 ? order.start : (lead[figure]?.start ?? order.start);
+  return [{ start, end: order.end }];
 }
 
 /** `scope.regional-record-as-global` for the registry. */
