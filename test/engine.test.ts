@@ -14,7 +14,7 @@ describe('checkText (the library entry point)', () => {
 
   it('finds nothing in text that never mentions the subject, without parsing it', async () => {
     const result = await checkText('The café closes early on Thursday.');
-    expect(result).toMatchObject({ claims: [], flags: [], skipped: [{ file: '-', reason: 'no topic term' }] });
+    expect(result).toMatchObject({ claims: [], flags: [], skipped: [{ file: '-', reason: 'names no subject of the packs' }] });
   });
 
   it('reads plain text when asked, with positions in the original', async () => {

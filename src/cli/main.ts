@@ -7,6 +7,7 @@ import { registerChecklist } from './commands/checklist.js';
 import { registerExplain } from './commands/explain.js';
 import { registerInit } from './commands/init.js';
 import { registerMerge } from './commands/merge.js';
+import { registerLsp } from './commands/lsp.js';
 import { registerRefs } from './commands/refs.js';
 import { registerSignoff } from './commands/signoff.js';
 import type { CliContext } from './context.js';
@@ -24,7 +25,7 @@ export async function main(argv: string[], context: Partial<CliContext> = {}): P
     .addHelpText('after', `\n${CAUTIONS}\n`)
     .exitOverride()
     .configureOutput({ writeOut: ctx.stdout, writeErr: ctx.stderr });
-  for (const register of [registerCheck, registerChecklist, registerSignoff, registerRefs, registerExplain, registerInit, registerMerge]) {
+  for (const register of [registerCheck, registerChecklist, registerSignoff, registerRefs, registerExplain, registerInit, registerMerge, registerLsp]) {
     register(program, ctx);
   }
   for (const command of program.commands) command.addHelpText('after', `\n${CAUTIONS}\n`);

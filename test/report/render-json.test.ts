@@ -33,7 +33,7 @@ describe('json report', () => {
 
   it('names the tool and counts claims, flags by level and skipped files', () => {
     expect(report.tool).toEqual({ name: 'firnline', version: '0.1.0' });
-    expect(report.summary).toEqual({ claims: 4, flags: 3, error: 1, warning: 1, note: 1, skipped: 1 });
+    expect(report.summary).toEqual({ claims: 4, flags: 3, error: 1, warning: 1, note: 1, skipped: 1, marked: 0 });
     expect(report.files).toEqual(['drafts/ice-ages.md', 'drafts/glacial-co2.md']);
   });
 

@@ -42,15 +42,24 @@ describe('the built-in paleoclimate pack', () => {
     expect(packs.directions.find((d) => d.id === 'co2-forcing-logarithmic')?.sources.map((s) => s.doi)).toContain('10.1029/98GL01908');
   });
 
-  it('ends with the reasoning checks section, starting with logic.lag-rules-out-cause and its three sources', () => {
+  it('ends with the reasoning checks and then the lexicon; the lag check cites its three sources', () => {
     const text = readFileSync(BUILTIN_PACK_FILE, 'utf8');
     expect(text.indexOf('# reasoning checks')).toBeGreaterThan(text.indexOf('\npatterns:'));
-    expect(text.slice(text.indexOf('\nreasoning_checks:'))).not.toMatch(/^\S(?!easoning_checks)/mu);
+    expect(text.indexOf('\nlexicon:')).toBeGreaterThan(text.indexOf('\nreasoning_checks:'));
+    expect(text.slice(text.indexOf('\nlexicon:'))).not.toMatch(/^\S(?!exicon)/mu);
     const lag = packs.reasoning.find((c) => c.id === 'logic.lag-rules-out-cause');
     // Shakun et al. 2012, Nature 484, 49-54; Pedro et al. 2012; Parrenin et al. 2013.
     expect(lag?.sources.map((s) => s.doi)).toEqual(expect.arrayContaining(['10.1038/nature10915', '10.5194/cp-8-1213-2012', '10.1126/science.1226368']));
     expect(lag).toMatchObject({ level: 'warning', enabled: true });
-    expect(Object.values(lag?.words ?? {}).flat()).toContain('lagged');
+  });
+
+  // Issue 9: the built-in pack states its direction facts as data and keeps no regular expression
+  // in its reasoning checks or direction facts (teams' own pattern rules may still use them).
+  it('keeps no regular expression in its direction facts or reasoning checks', () => {
+    const own = packs.packs[0];
+    expect(own?.directions.every((d) => d.wrong.length === 0 && d.says.length > 0)).toBe(true);
+    const words = (own?.reasoning ?? []).flatMap((c) => Object.values(c.words).flat());
+    expect(words.filter((w) => /[\\()[\]{}|^$?+]/u.test(w))).toEqual([]);
   });
 
   it('describes rules of every kind for reports and explain', () => {
