@@ -1,14 +1,15 @@
 /**
  * The result cache: what one file's check found, stored under a key made of everything the finding
  * depends on (the file's text, its path and project path, the loaded packs' content, the level
- * overrides and Firnline's version), so a CI re-run or an editor's re-check skips files that did not
+ * overrides, Firnline's version and a digest of its code), so a CI re-run or an editor's re-check skips files that did not
  * change. Entries live in `.firnline-cache/` in the project root, one JSON file each. An entry that
  * does not parse, names another version or another key, or has the wrong shape is ignored (and
  * overwritten by the fresh result): the cache can make a run faster, never different.
  */
 import { createHash } from 'node:crypto';
-import { mkdirSync, readFileSync } from 'node:fs';
+import { mkdirSync, readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Claim, Flag, Level } from '../types.js';
 import { writeFileAtomic } from '../write-file-atomic.js';
@@ -84,6 +85,23 @@ export function packsDigest(packs: LoadedPacks): string {
   return hash.digest('hex');
 }
 
+let code: string | undefined;
+
+/**
+ * The digest of Firnline's own code (every module of the folder this one was loaded from: dist/ or,
+ * under the tests, src/), so that a changed engine never reuses results of the old one, even while
+ * the version number stays the same between releases.
+ */
+export function codeDigest(): string {
+  if (code !== undefined) return code;
+  const root = fileURLToPath(new URL('..', import.meta.url));
+  const hash = createHash('sha256');
+  const files = (readdirSync(root, { recursive: true }) as string[]).filter((f) => /\.(?:js|ts)$/u.test(f)).sort();
+  for (const file of files) hash.update(`${file}\0`).update(readFileSync(join(root, file))).update('\0');
+  code = hash.digest('hex');
+  return code;
+}
+
 /** The key of one file's outcome. */
 export function cacheKeyOf(parts: {
   version: string;
@@ -95,7 +113,7 @@ export function cacheKeyOf(parts: {
   text: string;
 }): string {
   const levels = Object.entries(parts.levels).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
-  const head = JSON.stringify([parts.version, parts.packs, parts.path, parts.projectPath, parts.format, levels]);
+  const head = JSON.stringify([parts.version, codeDigest(), parts.packs, parts.path, parts.projectPath, parts.format, levels]);
   return createHash('sha256').update(head).update('\0').update(parts.text).digest('hex');
 }
 
