@@ -92,6 +92,7 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
     result.flags.push(...outcome.flags);
   });
   result.rules = describeFlaggedRules(result.flags, packs);
+  result.packs = packs.packs.map(({ id, version, asOf }) => ({ id, version, asOf }));
   return result;
 }
 
@@ -106,6 +107,7 @@ export async function checkText(
   const draft = { path, text, format: options.format ?? draftFormat(path) };
   addText(result, draft, packs, { topic: createTopicMatcher(packs.topicWords), subjects: subjectPattern(packs), levels: options.levels ?? {} });
   result.rules = describeFlaggedRules(result.flags, packs);
+  result.packs = packs.packs.map(({ id, version, asOf }) => ({ id, version, asOf }));
   return result;
 }
 
@@ -162,7 +164,8 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const paragraph = sentences.map((s) => s.text);
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
     sentences.forEach((sentence, index) => {
-      const found = examineSentence(paragraph, index, packs, topic.test(sentence.text), context);
+      const onTopic = topic.test(sentence.text) || subjectMatcherOf(packs).test(sentence.text);
+      const found = examineSentence(paragraph, index, packs, onTopic, context);
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 

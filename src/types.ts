@@ -4,6 +4,8 @@
  * returns these shapes, and engine.ts joins them.
  */
 
+import type { CslItem } from './cite/csl-item.js';
+
 /** The SARIF levels, in order of severity. */
 export const LEVELS = ['error', 'warning', 'note'] as const;
 export type Level = (typeof LEVELS)[number];
@@ -121,13 +123,24 @@ export interface Quantity {
 /** One bibliographic entry a rule cites. */
 export interface Source {
   id: string;
-  /** Full citation: authors (year). Title. Journal volume, pages. */
+  /** Full reference: authors (year). Title. Journal volume, pages, link. */
   cite: string;
+  /** Short reference for one line: `Jouzel et al. 2007, Science 317, doi:10.1126/science.1141038`. */
+  short?: string;
   doi?: string;
   url?: string;
-  /** How the value was obtained from it: `read in the source`, `verified: <url>`, `computed: ...`, `from memory`. */
+  /** How the value was obtained from it: `read in the source: ...`, `computed: ...`, `from memory: ...`. */
   how: string;
+  /** What it is (sources with structured citation fields). */
+  kind?: SourceKind;
+  /** Its CSL-JSON item (sources with structured citation fields). */
+  csl?: CslItem;
+  /** Citation fields recalled and not checked against the source (`DOI`, `page`...). */
+  fromMemory?: string[];
 }
+
+/** A source of record: a peer-reviewed paper, an assessment chapter, an official data set or an agency page. */
+export type SourceKind = 'paper' | 'assessment' | 'dataset' | 'agency';
 
 // ---------------------------------------------------------------------------------------------
 // checks/: flags
@@ -241,4 +254,13 @@ export interface CheckResult {
   flags: Flag[];
   /** Files passed over with the reason (binary, no topic term...), for the report. */
   skipped: { file: string; reason: string }[];
+  /** The rule packs the run checked against, with the date their values were last reviewed. */
+  packs?: PackInfo[];
+}
+
+/** A rule pack as a report names it: id, version and as-of date. */
+export interface PackInfo {
+  id: string;
+  version: string;
+  asOf: string;
 }

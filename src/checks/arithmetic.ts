@@ -10,6 +10,7 @@ import type { FlagDraft, Quantity } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
 import { disjoint, levelFor } from './arithmetic-levels.js';
 import { ARITHMETIC_RULES, findPairs } from './arithmetic-rules.js';
+import { shownClaim } from './reference-format.js';
 
 /**
  * The replacement for a stated quantity: its own words with the right value. An approximation
@@ -48,7 +49,7 @@ export function checkArithmetic(text: string, quantities: Quantity[], context: r
         start: stated.start,
         end: stated.end,
         reason: `By ${basis ?? "the sentence's"} own numbers, ${measures} is ${right}, not ${stated.text}.`,
-        claimed: { text: stated.text, low: stated.low, high: stated.high, unit: stated.unit },
+        claimed: shownClaim(stated),
         reference: { id: rule.id, measures, text: right, low: computed.low, high: computed.high, unit: stated.unit },
         correction: correctionFor(stated, computed.value),
         sources: [],

@@ -3,7 +3,8 @@
  * "790–810 kyr", one that writes "°F" sees degrees Fahrenheit. Falls back to the canonical unit when
  * the draft's unit is not in the unit table.
  */
-import { formatNumber, formatRange, unitLabel } from '../rulepack/describe-range.js';
+import { formatAmount } from '../format/value.js';
+import { formatRange } from '../rulepack/describe-range.js';
 import type { ReferenceValue } from '../rulepack/types.js';
 import { CANONICAL_UNITS, fromCanonical, unitDef } from '../rulepack/units.js';
 import type { Quantity, ShownValue } from '../types.js';
@@ -43,6 +44,6 @@ export function correctionFor(r: ReferenceValue, q: Quantity): string {
   const def = unitDef(unit);
   if (def === undefined || (def.factor === 1 && def.offset === 0)) return r.wording;
   if (r.central === undefined) return formatRange(r.low, r.high, unit);
-  const label = unitLabel(unit);
-  return `about ${formatNumber(fromCanonical(r.central, unit), 2)}${label === '' ? '' : ` ${label}`}`;
+  // Four significant digits: a correction restates a reference value, it does not add precision.
+  return `about ${formatAmount(Number(fromCanonical(r.central, unit).toPrecision(4)), unit)}`;
 }

@@ -39,7 +39,8 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     }
     const distance = relativeDistance(q.low, q.high, r);
     verdicts.push(distance === 0 ? 'agrees' : 'conflicts');
-    const level = distance === 0 ? undefined : levelAt(r.levels, distance);
+    const older = distance === 0 ? undefined : supersededMatch(r, q, packs);
+    const level = older !== undefined ? 'note' : distance === 0 ? undefined : levelAt(r.levels, distance);
     if (level === undefined) continue;
     aboutToday ??= findTerms(sentence, packs).has(TODAY_TERM);
     const reference = shownReference(r, q);
@@ -48,14 +49,29 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
       level,
       start: q.start,
       end: q.end,
-      reason: reasonFor(r, q, reference.text, aboutToday),
+      reason: older === undefined ? reasonFor(r, q, reference.text, aboutToday) : supersededReason(r, q, older, reference.text),
       claimed: shownClaim(q),
       reference,
       correction: correctionFor(r, q),
-      sources: r.sources,
+      sources: older === undefined ? r.sources : [...r.sources, ...older.sources.filter((s) => !r.sources.includes(s))],
     });
   }
   return { flags, verdicts };
+}
+
+/**
+ * An older figure the claim matches: a value that `r` superseded (e.g. the 740,000 years EPICA
+ * published in 2004, extended to 800,000 in 2007). Such a claim was right when first published,
+ * so it gets a note naming the newer value rather than a warning.
+ */
+function supersededMatch(r: ReferenceValue, q: Quantity, packs: LoadedPacks): ReferenceValue | undefined {
+  return packs.references.find((old) => old.supersededBy === r.id && relativeDistance(q.low, q.high, old) === 0);
+}
+
+function supersededReason(r: ReferenceValue, q: Quantity, older: ReferenceValue, range: string): string {
+  const when = older.asOf === undefined ? 'an earlier figure' : `the figure of ${older.asOf.slice(0, 4)}`;
+  const now = r.asOf === undefined ? '' : ` (as of ${r.asOf})`;
+  return `The draft gives ${q.text} for the ${midSentence(r.measures)}: ${when}, right when published and since superseded; the sources now give ${range}${now}`;
 }
 
 function reasonFor(r: ReferenceValue, q: Quantity, range: string, aboutToday: boolean): string {

@@ -2,6 +2,7 @@
  * The published definitions the unit checks cite. Recalled, not re-read for this release: each
  * says so in `how`, and an editor should open the link before relying on it.
  */
+import { resolveSource } from '../rulepack/resolve-source.js';
 import type { Source } from '../types.js';
 
 /** NIST SP 811: SI conversion factors (ft, mile, °F intervals and temperatures, percent, ppm). */
@@ -32,20 +33,37 @@ export const B2K_CONVENTION: Source = {
  * The 800,000-year ice-core CO2 range (172-300 ppm), the low end of every CO2 level a draft on ice
  * ages can mean. The same entry as the built-in pack's `luthi-2008` (a test keeps them equal).
  */
-export const LUTHI_2008: Source = {
+export const LUTHI_2008: Source = resolveSource({
   id: 'luthi-2008',
-  cite: 'Lüthi, D., Le Floch, M., Bereiter, B., Blunier, T., Barnola, J.-M., Siegenthaler, U., Raynaud, D., Jouzel, J., Fischer, H., Kawamura, K. & Stocker, T. F. (2008). High-resolution carbon dioxide concentration record 650,000-800,000 years before present. Nature 453, 379-382.',
+  kind: 'paper',
+  author: [
+    { family: 'Lüthi', given: 'D.' }, { family: 'Le Floch', given: 'M.' }, { family: 'Bereiter', given: 'B.' },
+    { family: 'Blunier', given: 'T.' }, { family: 'Barnola', given: 'J.-M.' }, { family: 'Siegenthaler', given: 'U.' },
+    { family: 'Raynaud', given: 'D.' }, { family: 'Jouzel', given: 'J.' }, { family: 'Fischer', given: 'H.' },
+    { family: 'Kawamura', given: 'K.' }, { family: 'Stocker', given: 'T. F.' },
+  ],
+  issued: 2008,
+  title: 'High-resolution carbon dioxide concentration record 650,000-800,000 years before present',
+  'container-title': 'Nature',
+  volume: '453',
+  page: '379-382',
   doi: '10.1038/nature06949',
-  how: 'verified: http://www.nature.com/nature/journal/v453/n7193/abs/nature06949.html; verified: http://go.galegroup.com/ps/i.do?id=GALE%7CA183367808&v=2.1&u=vol_f162hs&it=r&p=PPGS&sw=w&asid=035b1391b51b7c8153eda3db4b23ea4e',
-};
+  how: 'read in the source: CO2 172-300 ppmv over 800,000 years; EDML 2,774 m and EDC 3,270 m deep (abstract and full text)',
+});
 
 /** A modern CO2 level (global mean 419.3 ppm in 2023). The same entry as the built-in pack's `noaa-research-2024`. */
-export const NOAA_2024: Source = {
+export const NOAA_2024: Source = resolveSource({
   id: 'noaa-research-2024',
-  cite: 'NOAA Research (2024-04-05). No sign of greenhouse gases increases slowing in 2023 (press release; global mean 419.3 ppm) - read via secondary news reports.',
-  url: 'https://www.ciphernews.com/hot-take/419-3-ppm/',
-  how: 'verified: https://www.ciphernews.com/hot-take/419-3-ppm/; verified: https://headtopics.com/us/greenhouse-gas-levels-continue-to-rise-in-2023-noaa-reports-50451425',
-};
+  kind: 'agency',
+  author: [{ literal: 'NOAA Research' }],
+  issued: '2024-04-05',
+  title: 'No sign of greenhouse gases increases slowing in 2023',
+  genre: 'news release',
+  publisher: 'National Oceanic and Atmospheric Administration',
+  url: 'https://research.noaa.gov/2024/04/05/no-sign-of-greenhouse-gases-increases-slowing-in-2023/',
+  from_memory: ['URL'],
+  how: 'read in the source: global mean CO2 of 419.3 ppm in 2023, up 2.8 ppm, more than 50% above pre-industrial (title and numbers confirmed; the page address is from memory)',
+});
 
 /** Every standard source, by id, for reporters and `firnline explain`. */
 export const STANDARD_SOURCES: readonly Source[] = [NIST_SP_811, BP_CONVENTION, B2K_CONVENTION, LUTHI_2008, NOAA_2024];

@@ -8,6 +8,7 @@ import { correctionFigures, formatQuantity, parseQuantities } from '../quantitie
 import type { FlagDraft, Quantity } from '../types.js';
 import { correctionFor } from './arithmetic.js';
 import { disjoint, levelFor } from './arithmetic-levels.js';
+import { shownClaim } from './reference-format.js';
 import { UNIT_RULES } from './units-rules.js';
 
 /**
@@ -31,7 +32,7 @@ export function checkUnits(text: string, quantities: Quantity[], context: readon
         start: q.start,
         end: q.end,
         reason: single ? f.reason : `${q.text} should be ${right}. ${f.reason}`,
-        claimed: { text: q.text, low: q.low, high: q.high, unit: q.unit },
+        claimed: shownClaim(q),
         reference: { id: rule.id, measures: rule.summary, text: right, low: f.computed.low, high: f.computed.high, unit: f.unit ?? q.unit },
         correction: f.correction ?? correctionFor(q, f.computed.value),
         sources: f.sources,

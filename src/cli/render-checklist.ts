@@ -27,7 +27,8 @@ export async function renderChecklistOf(
     claims: result.claims,
     review,
     reference: (id) => run.packs.reference(id),
-    packVersion: packVersionOf(run.packs),
+    // The packs with the date their values were last reviewed: a checklist states what it was checked against.
+    packVersion: run.packs.packs.map((p) => `${p.id} ${p.version} (values as of ${p.asOf})`).join(', ') || packVersionOf(run.packs),
     toolVersion: VERSION,
     generated: ledgerDate(),
   });

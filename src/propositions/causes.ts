@@ -83,6 +83,10 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   if (cleft !== undefined) agentThing = cleft;
   let agent = kind(agentThing);
   let patient = kind(patientThing);
+  // "never a driver of it": a pronoun object is not its own subject; it is the other thing named.
+  if (patientThing?.kind === 'pronoun' && patient === agent) {
+    patient = s.things.filter((t) => t.last < patientThing.first && t.kind !== 'pronoun' && t.kind !== agent).at(-1)?.kind ?? patient;
+  }
   if (h.key === 'effects') {
     // "CO2 was an effect of the warming": the warming acts on CO2.
     [agent, patient] = [patient ?? (agent === 'co2' ? 'temperature' : undefined), agent];
@@ -160,7 +164,7 @@ function cleftFocus(s: ReadSentence, agent: Thing | undefined): Thing | undefine
   const focus = s.things.find((t) => t.first >= k && t.first <= k + 1 && t.kind !== 'pronoun');
   if (focus === undefined) return undefined;
   // "It was the orbit, and nothing else, that warmed...": the relative word may follow an aside.
-  const rest = s.words.slice(focus.last + 1, focus.last + 6).map((w) => w.text);
+  const rest = s.words.slice(focus.last + 1, focus.last + 9).map((w) => w.text);
   return rest.some((w) => /^(?:that|which|who|doing|driving|setting|making)$/u.test(w)) ? focus : undefined;
 }
 
@@ -191,7 +195,9 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
     if (['not', 'no'].includes(s.words[e.first - 1]?.text ?? '')) return false;
     const nearAgent = agent !== undefined && (Math.abs(e.first - agent.last) <= 2 || Math.abs(e.last - agent.first) <= 2);
     const nearCue = Math.abs(e.last - h.first) <= 2 || (e.first > h.last && e.first - h.last <= 2);
+    // "The change in sunshine, on its own, is what brought...": between the agent and the cue word.
+    const between = agent !== undefined && e.first > agent.last && e.last < h.first;
     const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by itself|on its own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
-    return nearAgent || (nearCue && strong);
+    return nearAgent || ((nearCue || between) && strong);
   });
 }

@@ -60,6 +60,12 @@ function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Orde
     return withRelation(h.key, first, other, s, a, span);
   }
   b = thingAfter(s, h.last, 6);
+  // "CO2 lagged, so...": an order verb with no object sets its subject against the other one.
+  if (a !== undefined && b === undefined && h.key !== 'together') {
+    const first = kind(a);
+    const other = first === undefined ? undefined : COUNTERPART[first];
+    return first === undefined || other === undefined ? undefined : withRelation(h.key, first, other, s, a, span);
+  }
   if (a === undefined && b !== undefined) {
     // "After the warming began, CO2 rose": the main clause follows the comma.
     a = s.things.find((t) => t.first > b!.last && s.words[t.first]?.segment !== s.words[b!.first]?.segment);

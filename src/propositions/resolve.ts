@@ -41,13 +41,21 @@ export function subjectOf(s: ReadSentence, i: number): Thing | undefined {
 /** The nearest thing after word `i` in the same clause, within `window` words. */
 export function thingAfter(s: ReadSentence, i: number, window = 8): Thing | undefined {
   const clause = s.words[i]?.clause;
-  return s.things.find((t) => t.first > i && t.first - i <= window && s.words[t.first]?.clause === clause);
+  const segment = s.words[i]?.segment;
+  // A pronoun past a comma or a linking word ("..., and they are right") starts a clause of its own.
+  return s.things.find((t) => t.first > i && t.first - i <= window && s.words[t.first]?.clause === clause && (t.kind !== 'pronoun' || s.words[t.first]?.segment === segment));
 }
 
-/** The first thing of the clause of word `i`, before it. */
+/**
+ * The first thing of the clause of word `i`, before it: a named thing before a pronoun ("I see it
+ * differently, because carbon dioxide ... pulled"), unless the clause opens with a cleft "It was".
+ */
 export function clauseSubject(s: ReadSentence, i: number): Thing | undefined {
   const clause = s.words[i]?.clause;
-  return s.things.find((t) => t.last < i && s.words[t.first]?.clause === clause);
+  const before = s.things.filter((t) => t.last < i && s.words[t.first]?.clause === clause);
+  const opener = before[0];
+  if (opener?.kind === 'pronoun' && s.words[opener.first]?.text === 'it' && /^(?:is|was)$/u.test(s.words[opener.first + 1]?.text ?? '')) return opener;
+  return before.find((t) => t.kind !== 'pronoun') ?? opener;
 }
 
 /** Words a subject search steps over on its way back from a verb. */

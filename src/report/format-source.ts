@@ -25,13 +25,51 @@ export function sourceLink(source: Source): string | undefined {
   return undefined;
 }
 
+/** `(from memory)`, `(DOI from memory)`, `(value and DOI, page from memory)`, or nothing. */
+export function memoryMark(source: Source): string {
+  const fields = source.fromMemory ?? [];
+  if (isFromMemory(source)) return fields.length === 0 ? '(from memory)' : `(value and ${fields.join(', ')} from memory)`;
+  return fields.length === 0 ? '' : `(${fields.join(', ')} from memory)`;
+}
+
 /**
- * One source on one line: citation, link, and `(from memory)` when nobody checked it against the
- * source, so an editor knows to look it up before relying on it.
+ * The short reference an editor reads on one line: `Jouzel et al. 2007, Science 317,
+ * doi:10.1126/science.1141038`, rendered from the source's CSL-JSON fields by the CSL processor.
+ * A source written as plain `cite` text (a team pack) is cut after its year.
+ */
+export function shortReference(source: Source): string {
+  if (source.short !== undefined) return source.short;
+  const link = source.doi === undefined ? source.url : `doi:${source.doi.replace(DOI_PREFIX, '')}`;
+  const m = /^(.*?)\s*\((\d{4})[^)]*\)/u.exec(source.cite);
+  const head = m === null ? source.cite : `${namesOf(m[1] ?? '')} ${m[2] ?? ''}`;
+  return [head.trim(), link].filter((x) => x !== undefined && x !== '').join(', ');
+}
+
+/** `Jouzel et al.`, `Sigman & Boyle`, `Berger` from an author list written as text. */
+function namesOf(authors: string): string {
+  const family = (text: string) => (text.split(',')[0] ?? '').trim();
+  if (/\bet al\b/u.test(authors)) return `${family(authors)} et al.`;
+  const [before, after] = authors.split(/\s+(?:&|and)\s+/u);
+  if (after === undefined) return family(authors);
+  // "Family, I. & Other, J.": two people; "Family, I., Second, J. & Third, K.": three or more.
+  return /\.,\s*\S/u.test(before ?? '') ? `${family(authors)} et al.` : `${family(before ?? '')} & ${family(after)}`;
+}
+
+/**
+ * One source on one line for text reports, checklists and hovers: the short reference and the
+ * from-memory mark, so an editor knows what to look up before relying on it.
  */
 export function formatSource(source: Source): string {
+  const mark = memoryMark(source);
+  return mark === '' ? shortReference(source) : `${shortReference(source)} ${mark}`;
+}
+
+/** The full reference with its link and from-memory mark, for `explain`, JSON and exports. */
+export function fullReference(source: Source): string {
   const link = sourceLink(source);
-  const parts = [source.cite.trim(), ...(link === undefined ? [] : [link])];
-  if (isFromMemory(source)) parts.push('(from memory)');
+  const text = source.cite.trim();
+  const parts = [text, ...(link === undefined || text.includes(link) ? [] : [link])];
+  const mark = memoryMark(source);
+  if (mark !== '') parts.push(mark);
   return parts.join(' ');
 }

@@ -34,7 +34,7 @@ export { compareByPlace, sortByPlace, sortRules } from './sort.js';
 export type { Placed } from './sort.js';
 export { describeFlag, formatReference } from './describe-flag.js';
 export { formatAmount, formatClaimed, formatNumber, formatRange } from './format-value.js';
-export { doiUrl, formatSource, isFromMemory, sourceLink } from './format-source.js';
+export { doiUrl, formatSource, fullReference, isFromMemory, shortReference, sourceLink } from './format-source.js';
 export { summarize } from './summarize.js';
 export type { ReportSummary } from './summarize.js';
 export { renderText } from './render-text.js';

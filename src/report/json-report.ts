@@ -1,4 +1,4 @@
-import type { Claim, Flag, Quantity, RuleInfo, ShownValue } from '../types.js';
+import type { Claim, Flag, PackInfo, Quantity, RuleInfo, ShownValue } from '../types.js';
 import type { ReportSummary } from './summarize.js';
 
 /**
@@ -39,6 +39,8 @@ export interface JsonReport {
   /** Every rule that has a flag, by id. */
   rules: RuleInfo[];
   skipped: { file: string; reason: string }[];
+  /** The rule packs checked against, with the date their values were last reviewed. */
+  packs: PackInfo[];
 }
 
 /** The `$id` of the schema that describes `JsonReport` (a reserved domain: it names, it does not locate). */

@@ -57,6 +57,7 @@ export function toJsonReport(result: CheckResult, options: ReportOptions): JsonR
     flags: sortByPlace(result.flags).map(jsonFlag),
     rules: sortRules(result.rules),
     skipped: result.skipped.map((entry) => ({ ...entry })),
+    packs: (result.packs ?? []).map((p) => ({ ...p })),
   };
 }
 

@@ -62,6 +62,16 @@ function summaryLine(result: CheckResult): string {
 }
 
 /**
+ * The packs checked against and their as-of dates, and the standing caution: reference values
+ * carry uncertainty and dates, and the flags are for an expert to judge.
+ */
+export function packsLine(result: CheckResult): string[] {
+  if (result.packs === undefined || result.packs.length === 0) return [];
+  const packs = result.packs.map((p) => `${p.id} ${p.version} (values as of ${p.asOf})`).join(', ');
+  return [`Reference packs: ${packs}. Values carry uncertainty and dates; an expert reviews every flag.`];
+}
+
+/**
  * The default report, for a person reading a terminal: one block per flag in place order, the
  * files passed over with their reasons, and a summary line. Colour only when `options.color`.
  */
@@ -70,7 +80,7 @@ export function renderText(result: CheckResult, options: ReportOptions): string 
   const chalk = new Chalk({ level: options.color ? 1 : 0 });
   const blocks = sortByPlace(result.flags).map((flag) => flagBlock(chalk, flag));
   const skipped = result.skipped.map(({ file, reason }) => chalk.dim(`Skipped ${file}: ${asSentence(reason)}`));
-  const closing = [...skipped, chalk.bold(summaryLine(result))];
+  const closing = [...skipped, chalk.bold(summaryLine(result)), ...packsLine(result).map((line) => chalk.dim(line))];
   if (blocks.length === 0) closing.unshift('No flags.');
   return [...blocks, closing.join('\n')].join('\n\n') + '\n';
 }

@@ -1,5 +1,5 @@
 import type { Level, RuleInfo } from '../types.js';
-import { formatSource } from './format-source.js';
+import { fullReference } from './format-source.js';
 import type { SarifLevel, SarifReportingDescriptor } from './sarif-log.js';
 
 /** Our levels are named after SARIF's, so the map is one to one; written out so it is checked. */
@@ -12,7 +12,7 @@ export const SARIF_LEVELS: Record<Level, SarifLevel> = {
 /** The rule's citations as help text: one source per line, each with its DOI link or URL. */
 function helpText(rule: RuleInfo): string {
   if (rule.sources.length === 0) return `${rule.summary}\nNo source is cited for this rule.`;
-  return [`${rule.summary}`, 'Sources:', ...rule.sources.map((source) => `- ${formatSource(source)}`)].join('\n');
+  return [`${rule.summary}`, 'Sources:', ...rule.sources.map((source) => `- ${fullReference(source)}`)].join('\n');
 }
 
 /**

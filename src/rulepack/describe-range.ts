@@ -1,28 +1,22 @@
 /**
  * A reference value's range in words and digits, in the pack's canonical unit or in another unit
- * of the same dimension: `790,000–810,000 years`, `3,623 metres`.
+ * of the same dimension: `790,000–810,000 years`, `3,623 metres`. The numbers and words come from
+ * the one formatter all reports share (src/format/value.ts).
  */
+import { formatNumber, formatRange as formatShownRange, unitWord } from '../format/value.js';
 import type { ReferenceValue } from './types.js';
-import { fromCanonical, unitDef } from './units.js';
+import { fromCanonical } from './units.js';
 
-/** A number with thousands separators and at most `digits` decimals, trailing zeros dropped. */
-export function formatNumber(value: number, digits = 3): string {
-  const rounded = Number(value.toFixed(digits));
-  return rounded.toLocaleString('en-US', { maximumFractionDigits: digits });
-}
+export { formatNumber };
 
 /** The unit word shown after a number (`years`, `ppm`, `°C`), or the unit name itself. */
 export function unitLabel(unit: string): string {
-  return unitDef(unit)?.label ?? unit;
+  return unitWord(unit);
 }
 
-/** `low–high unit` (or `value unit` when they are equal) with bounds shown in `unit`. */
+/** `low–high unit` (or `value unit` when they are equal) for canonical bounds shown in `unit`. */
 export function formatRange(low: number, high: number, unit: string): string {
-  const [a, b] = [fromCanonical(low, unit), fromCanonical(high, unit)].sort((x, y) => x - y) as [number, number];
-  const label = unitLabel(unit);
-  const digits = Math.abs(b - a) > 0 && Math.abs(b - a) < 1 ? 3 : 2;
-  const text = a === b ? formatNumber(a, digits) : `${formatNumber(a, digits)}–${formatNumber(b, digits)}`;
-  return label === '' ? text : `${text} ${label}`;
+  return formatShownRange(fromCanonical(low, unit), fromCanonical(high, unit), unit);
 }
 
 /** The value's range in its canonical unit. */

@@ -2,14 +2,16 @@
  * The rule pack as written in YAML, after schema validation (schemas/rulepack.schema.json).
  * These types mirror the schema; test/rulepack/schema-types.test.ts checks that they stay in step.
  */
+import type { CitationFields } from '../cite/csl-item.js';
 import type { Dimension, Level } from '../types.js';
 
-/** A source entry as written. */
-export interface RawSource {
+/** A source entry as written: structured CSL-compatible fields, or (team packs) a `cite` text. */
+export interface RawSource extends Partial<Omit<CitationFields, 'doi' | 'url'>> {
   id: string;
-  cite: string;
+  cite?: string;
   doi?: string;
   url?: string;
+  from_memory?: string[];
   how: string;
 }
 
@@ -26,6 +28,8 @@ export interface RawReferenceValue {
   correction: string;
   levels?: Partial<Record<Level, number>>;
   as_of?: string;
+  review_by?: string;
+  superseded_by?: string;
   sources: string[];
   notes?: string;
 }

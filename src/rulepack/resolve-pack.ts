@@ -8,6 +8,7 @@ import type { FirnlineError } from '../errors.js';
 import type { Source } from '../types.js';
 import type { RawPack } from './raw-pack.js';
 import { resolveReference } from './resolve-reference.js';
+import { resolveSource } from './resolve-source.js';
 import type { DirectionFact, FactForm, Lexicon, PatternRule, ReasoningCheck, RulePack, Term } from './types.js';
 import type { OneOrMany, RawDirectionFact } from './raw-pack.js';
 import type { YamlFile } from './yaml-file.js';
@@ -35,9 +36,12 @@ export interface PackScope {
 export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): RulePack | FirnlineError[] {
   const raw = yaml.data as RawPack;
   const errors: FirnlineError[] = [];
-  const own = (raw.sources ?? []).map(({ id, cite, doi, url, how }) => ({
-    id, cite, how, ...(doi === undefined ? {} : { doi }), ...(url === undefined ? {} : { url }),
-  }));
+  const own = (raw.sources ?? []).map(resolveSource);
+  (raw.sources ?? []).forEach((s, i) => {
+    if (s.cite === undefined && (s.kind === undefined || s.title === undefined)) {
+      errors.push(yaml.errorAt('pack-schema', ['sources', i], 'a source needs `cite`, or `kind` and `title` (with author, issued, container-title... as in CSL-JSON)'));
+    }
+  });
   const sources = new Map(known.sources);
   for (const s of own) sources.set(s.id, s);
   const terms = new Set([...known.terms, ...(raw.terms ?? []).map((t) => t.id)]);
@@ -54,6 +58,13 @@ export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): Rule
 
   const termList: Term[] = (raw.terms ?? []).map((t) => ({ id: t.id, words: t.words }));
   const references = (raw.reference_values ?? []).flatMap((r, i) => resolveReference(scope, r, ['reference_values', i]) ?? []);
+  const valueIds = new Set((raw.reference_values ?? []).map((r) => r.id));
+  (raw.reference_values ?? []).forEach((r, i) => {
+    const newer = r.superseded_by;
+    if (newer !== undefined && !valueIds.has(newer) && !known.defined.has(`reference_values:${newer}`)) {
+      errors.push(yaml.errorAt('pack-unknown-value', ['reference_values', i, 'superseded_by'], `unknown reference value id \`${newer}\`; superseded_by names the value that replaced this one`));
+    }
+  });
   const directions: DirectionFact[] = (raw.direction_facts ?? []).map((d, i) => {
     const path = ['direction_facts', i];
     checkRegexes(scope, d.wrong ?? [], [...path, 'wrong']);

@@ -53,6 +53,8 @@ export function resolveReference(scope: PackScope, raw: RawReferenceValue, path:
     sources,
     ...(raw.central === undefined ? {} : { central: convert(raw.central) }),
     ...(raw.as_of === undefined ? {} : { asOf: raw.as_of }),
+    ...(raw.review_by === undefined ? {} : { reviewBy: raw.review_by }),
+    ...(raw.superseded_by === undefined ? {} : { supersededBy: raw.superseded_by }),
     ...(raw.notes === undefined ? {} : { notes: raw.notes }),
   };
 }

@@ -58,6 +58,10 @@ export interface ReferenceValue {
   wording: string;
   /** ISO date, for values that change with time (e.g. today's CO2). */
   asOf?: string;
+  /** ISO date by which a time-dependent value must be checked again (`firnline refs --due`). */
+  reviewBy?: string;
+  /** The id of the value that replaced this one (a figure right when published, since superseded). */
+  supersededBy?: string;
   levels: LevelSteps;
   sources: Source[];
   notes?: string;

@@ -39,6 +39,7 @@ const PACK_UNITS: Record<string, [id: string, dimension: Dimension, label: strin
   b2k: ['yr b2k', 'age', 'years b2k'],
   'ka b2k': ['ka b2k', 'age', 'ka b2k'],
   BCE: ['BCE', 'age', 'BCE'],
+  CE: ['CE', 'age', 'CE'],
   ppm: ['ppm', 'concentration', 'ppm'],
   ppmv: ['ppm', 'concentration', 'ppmv'],
   K: ['K', 'temperature-change', '°C'],

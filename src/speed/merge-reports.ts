@@ -68,6 +68,8 @@ function mergeJson(reports: { name: string; report: JsonReport }[]): JsonReport 
     flags: all.flatMap((r) => r.flags).sort(compareByPlace),
     rules: sortRules(all.flatMap((r) => r.rules)),
     skipped: all.flatMap((r) => r.skipped).sort((a, b) => codeUnitOrder(a.file, b.file)),
+    // Every shard ran with the same packs.
+    packs: first.packs,
   };
 }
 

@@ -75,7 +75,7 @@ export const CASES: Case[] = [
   // Monnin et al. 2001 (computed: 76 ppm / ~6,000 yr)
   ['co2-deglacial-mean-rate', ['During the deglaciation CO2 climbed about 0.012 ppm per year.', 'about 0.012 ppm per year', 'concentration-rate', 0.011, 0.013], ['During the deglaciation CO2 climbed 2 ppm per year.', '2 ppm per year', 'concentration-rate', 1.95, 2.05]],
   // IPCC AR6 SPM A.2.1
-  ['co2-increase-since-1750-pct-2019', ['CO2 has risen about 47% since pre-industrial times.', 'about 47%', 'percent', 45, 49], ['CO2 has risen 10% since pre-industrial times.', '10%', 'percent', 9.5, 10.5]],
+  ['co2-increase-since-1750-pct-2019', ['By 2019 CO2 had risen about 47% since pre-industrial times.', 'about 47%', 'percent', 41.8, 52.2], ['By 2019 CO2 had risen 10% since pre-industrial times.', '10%', 'percent', 9.5, 10.5]],
   // NOAA Global Monitoring Laboratory annual means (verified page)
   ['co2-global-2019', ['In 2019 global CO2 averaged 410 ppm.', '410 ppm', C, 409.5, 410.5], ['In 2019 global CO2 averaged 380 ppm.', '380 ppm', C, 379.5, 380.5]],
   // NOAA Research 2024 press release; WMO Greenhouse Gas Bulletin No. 20
@@ -168,7 +168,7 @@ export const CASES: Case[] = [
   // Parrenin et al. 2013 (doi 10.1126/science.1226368)
   ['lag-parrenin2013', ['Parrenin found CO2 lagged by under 200 years.', 'under 200 years', Y, 0, 200], ['Parrenin found CO2 lagged by 800 years.', '800 years', Y, 750, 850]],
   // Pedro et al. 2012; Parrenin et al. 2013; Chowdhry Beeman et al. 2019
-  ['antarctic-co2-phasing-termination-1-consensus', ['CO2 lagged Antarctic warming by about 300 years.', 'about 300 years', Y, 250, 350], ['CO2 lagged Antarctic warming by 5,000 years.', '5,000 years', Y, 4950, 5050]],
+  ['antarctic-co2-phasing-termination-1-consensus', ['During the deglaciation CO2 lagged Antarctic warming by about 300 years.', 'about 300 years', Y, 265, 335], ['During the deglaciation CO2 lagged Antarctic warming by 5,000 years.', '5,000 years', Y, 4950, 5050]],
   // Shakun et al. 2012 (doi 10.1038/nature10915; from memory)
   ['fraction-global-warming-after-co2-rise', ['About 90% of global warming came after CO2 began to rise.', 'About 90%', 'percent', 88, 92], ['Only 20% of global warming came after CO2 began to rise.', '20%', 'percent', 19.5, 20.5]],
   // Lambeck et al. 2014 (doi 10.1073/pnas.1411762111)
@@ -179,4 +179,91 @@ export const CASES: Case[] = [
   ['co2-present-day', ['Today CO2 stands at about 425 ppm.', 'about 425 ppm', C, 420, 430], ['Today CO2 stands at 380 ppm.', '380 ppm', C, 379.5, 380.5]],
   // computed envelope: NOAA GML 2020-2022 and WMO 2024 growth (dated 2024-12-31)
   ['co2-growth-recent', ['Today CO2 grows about 2.5 ppm per year.', 'about 2.5 ppm per year', 'concentration-rate', 2.4, 2.6], ['Today CO2 grows 0.5 ppm per year.', '0.5 ppm per year', 'concentration-rate', 0.45, 0.55]],
+  // ---- values added in pack 1.1.0 ----
+  // Lisiecki and Raymo 2005, Paleoceanography 20, doi:10.1029/2004PA001071 (from memory); Clark et al. 2006, Quaternary Science Reviews 25, doi:10.1016/j.quascirev.2006.07.008 (from memory); Yan et al. 2019, Nature 574, doi:10.1038/s41586-019-1692-3
+  ['glacial-cycle-period-before-mpt', ['Before the Mid-Pleistocene Transition, glacial cycles lasted about 41,000 years.', 'about 41,000 years', Y, 36_400, 45_600], ['Before the Mid-Pleistocene Transition, glacial cycles lasted 100,000 years.', '100,000 years', Y, 95_000, 105_000]],
+  // Lisiecki and Raymo 2005, Paleoceanography 20, doi:10.1029/2004PA001071 (from memory); Clark et al. 2006, Quaternary Science Reviews 25, doi:10.1016/j.quascirev.2006.07.008 (from memory); Hays et al. 1976, Science 194, doi:10.1126/science.194.4270.1121
+  ['glacial-cycle-period-after-mpt', ['Since the Mid-Pleistocene Transition, ice ages have recurred roughly every 100,000 years.', 'roughly every 100,000 years', Y, 95_000, 105_000], ['Since the Mid-Pleistocene Transition, ice ages have recurred every 41,000 years.', 'every 41,000 years', Y, 40_500, 41_500]],
+  // Jouzel et al. 2007, Science 317, doi:10.1126/science.1141038 (from memory); Lüthi et al. 2008, Nature 453, doi:10.1038/nature06949; Petit et al. 1999, Nature 399, doi:10.1038/20859 (from memory)
+  ['longest-record-vostok-named', ['The longest continuous ice-core record, unlike Vostok, reaches back about 800,000 years.', 'about 800,000 years', Y, 715_000, 885_000], ['Vostok holds the longest continuous ice-core record, about 420,000 years.', 'about 420,000 years', Y, 373_000, 467_000]],
+  // Petit et al. 1997, Nature 387, doi:10.1038/387359a0; Petit et al. 1999, Nature 399, doi:10.1038/20859 (from memory)
+  ['deepest-ice-core', ['The deepest ice core ever drilled reached about 3,600 metres.', 'about 3,600 metres', L, 3190, 4010], ['The deepest ice core ever drilled reached 5,000 metres.', '5,000 metres', L, 4950, 5050]],
+  // Petit et al. 1997, Nature 387, doi:10.1038/387359a0; Lüthi et al. 2008, Nature 453, doi:10.1038/nature06949; Motoyama 2007, Scientific Drilling 5, doi:10.2204/iodp.sd.5.05.2007
+  ['deepest-core-misnamed', ['Even EPICA Dome C is shallower than the deepest core, which reached about 3,620 metres.', 'about 3,620 metres', L, 3253, 3987], ['EPICA Dome C is the deepest ice core, at 3,270 metres.', '3,270 metres', L, 3265, 3275]],
+  // EPICA community members 2004, Nature 429, doi:10.1038/nature02599
+  ['edc-record-span-2004', ['In 2004 the EPICA Dome C record reached back about 740,000 years.', 'about 740,000 years', Y, 661_000, 819_000], ['In 2004 the EPICA Dome C record reached back 400,000 years.', '400,000 years', Y, 395_000, 405_000]],
+  // Jouzel et al. 2007, Science 317, doi:10.1126/science.1141038 (from memory)
+  ['antarctic-glacial-interglacial-range', ['Across the glacial cycles, Antarctic temperature swung by about 12 °C.', 'about 12 °C', T, 10.3, 13.7, 'degC'], ['Across the glacial cycles, Antarctic temperature swung by 40 °C.', '40 °C', T, 39.5, 40.5, 'degC']],
+  // World Meteorological Organization 2025, https://library.wmo.int/; NOAA Research 2024, https://research.noaa.gov/2024/04/05/no-sign-of-greenhouse-gases-increases-slowing-in-2023/; IPCC 2021, IPCC AR6 WGI, doi:10.1017/9781009157896.001
+  ['co2-increase-since-preindustrial-pct-latest', ['CO2 is now about 52% higher than before the industrial revolution.', 'about 52%', 'percent', 46.3, 57.7], ['CO2 is now 20% higher than before the industrial revolution.', '20%', 'percent', 19.5, 20.5]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_annmean_gl.txt; Lan et al. n.d., NOAA Global Monitoring Laboratory, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_gr_gl.txt
+  ['co2-share-of-air-2019', ['In 2019 CO2 made up about 0.041% of the air.', 'about 0.041%', 'percent', 0.0364, 0.0456], ['In 2019 CO2 made up 0.4% of the air.', '0.4%', 'percent', 0.35, 0.45]],
+  // World Meteorological Organization 2025, https://library.wmo.int/; Lan et al. n.d., NOAA Global Monitoring Laboratory, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_gr_gl.txt
+  ['co2-share-of-air-2024', ['In 2024 CO2 made up about 0.042% of the air.', 'about 0.042%', 'percent', 0.0373, 0.0467], ['In 2024 CO2 made up 0.03% of the air.', '0.03%', 'percent', 0.025, 0.035]],
+  // Meinshausen et al. 2017, Geoscientific Model Development 10, doi:10.5194/gmd-10-2057-2017 (from memory)
+  ['co2-1850', ['In 1850 CO2 stood at about 284 ppm.', 'about 284 ppm', C, 255.1, 312.9], ['In 1850 CO2 stood at 350 ppm.', '350 ppm', C, 345, 355]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_annmean_gl.txt
+  ['co2-global-2020', ['In 2020 global CO2 averaged about 412 ppm.', 'about 412 ppm', C, 370.3, 453.7], ['In 2020 global CO2 averaged 400 ppm.', '400 ppm', C, 395, 405]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_annmean_gl.txt
+  ['co2-global-2021', ['In 2021 global CO2 averaged about 415 ppm.', 'about 415 ppm', C, 373, 457], ['In 2021 global CO2 averaged 430 ppm.', '430 ppm', C, 425, 435]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_annmean_gl.txt
+  ['co2-global-2022', ['In 2022 global CO2 averaged about 417 ppm.', 'about 417 ppm', C, 374.8, 459.2], ['In 2022 global CO2 averaged 405 ppm.', '405 ppm', C, 404.5, 405.5]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory and Scripps Institution of Oceanography, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_annmean_mlo.txt (from memory)
+  ['co2-mlo-2019', ['At Mauna Loa, CO2 averaged 411.7 ppm in 2019.', '411.7 ppm', C, 411.65, 411.75], ['At Mauna Loa, CO2 averaged 405 ppm in 2019.', '405 ppm', C, 404.5, 405.5]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory and Scripps Institution of Oceanography, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_annmean_mlo.txt (from memory)
+  ['co2-mlo-2020', ['At Mauna Loa, CO2 averaged 414.2 ppm in 2020.', '414.2 ppm', C, 414.15, 414.25], ['At Mauna Loa, CO2 averaged 420 ppm in 2020.', '420 ppm', C, 415, 425]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory and Scripps Institution of Oceanography, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_annmean_mlo.txt (from memory)
+  ['co2-mlo-2021', ['At Mauna Loa, CO2 averaged 416.4 ppm in 2021.', '416.4 ppm', C, 416.35, 416.45], ['At Mauna Loa, CO2 averaged 410 ppm in 2021.', '410 ppm', C, 405, 415]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory and Scripps Institution of Oceanography, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_annmean_mlo.txt (from memory)
+  ['co2-mlo-2024', ['At Mauna Loa, CO2 averaged 424.6 ppm in 2024.', '424.6 ppm', C, 424.55, 424.65], ['At Mauna Loa, CO2 averaged 430 ppm in 2024.', '430 ppm', C, 425, 435]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory and Scripps Institution of Oceanography, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_mm_mlo.txt; Scripps CO2 Program n.d., Scripps Institution of Oceanography, UC San Diego, https://scrippsco2.ucsd.edu/data/atmospheric_co2/
+  ['co2-mlo-may-2020', ['At Mauna Loa, CO2 peaked at 417.1 ppm in May 2020.', '417.1 ppm', C, 417.05, 417.15], ['At Mauna Loa, CO2 peaked at 425 ppm in May 2020.', '425 ppm', C, 424.5, 425.5]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory and Scripps Institution of Oceanography, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_mm_mlo.txt; Scripps CO2 Program n.d., Scripps Institution of Oceanography, UC San Diego, https://scrippsco2.ucsd.edu/data/atmospheric_co2/
+  ['co2-mlo-may-2023', ['At Mauna Loa, CO2 peaked at 424 ppm in May 2023.', '424 ppm', C, 423.5, 424.5], ['At Mauna Loa, CO2 peaked at 415 ppm in May 2023.', '415 ppm', C, 414.5, 415.5]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory, doi:10.15138/9N0H-ZH07; Lan et al. n.d., NOAA Global Monitoring Laboratory, https://gml.noaa.gov/webdata/ccgg/trends/co2/co2_gr_gl.txt
+  ['co2-growth-1970s', ['In the 1970s CO2 grew about 1.3 ppm per year.', 'about 1.3 ppm per year', 'concentration-rate', 1.12, 1.48], ['In the 1970s CO2 grew 3 ppm per year.', '3 ppm per year', 'concentration-rate', 2.5, 3.5]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory, doi:10.15138/9N0H-ZH07
+  ['co2-growth-1980s', ['In the 1980s CO2 grew about 1.6 ppm per year.', 'about 1.6 ppm per year', 'concentration-rate', 1.39, 1.81], ['In the 1980s CO2 grew 0.5 ppm per year.', '0.5 ppm per year', 'concentration-rate', 0.45, 0.55]],
+  // Lan et al. n.d., NOAA Global Monitoring Laboratory, doi:10.15138/9N0H-ZH07
+  ['co2-growth-1990s', ['In the 1990s CO2 grew about 1.5 ppm per year.', 'about 1.5 ppm per year', 'concentration-rate', 1.3, 1.7], ['In the 1990s CO2 grew 3 ppm per year.', '3 ppm per year', 'concentration-rate', 2.5, 3.5]],
+  // Marcott et al. 2014, Nature 514, doi:10.1038/nature13799; Lan et al. n.d., NOAA Global Monitoring Laboratory, doi:10.15138/9N0H-ZH07; World Meteorological Organization 2025, https://library.wmo.int/
+  ['co2-modern-vs-abrupt-step-ratio', ['CO2 now climbs about 30 times faster than during the abrupt deglacial jumps.', 'about 30 times', 'ratio', 26.5, 33.5], ['CO2 now climbs 500 times faster than during the abrupt deglacial jumps.', '500 times', 'ratio', 495, 505]],
+  // Lüthi et al. 2008, Nature 453, doi:10.1038/nature06949; Siegenthaler et al. 2005, Science 310, doi:10.1126/science.1120130
+  ['co2-800kyr-range', ['Over 800,000 years, CO2 in the ice varied between about 180 and 300 ppm.', 'between about 180 and 300 ppm', C, 156, 324], ['Over 800,000 years, CO2 in the ice varied between 350 and 450 ppm.', 'between 350 and 450 ppm', C, 350, 450]],
+  // IPCC 2021, IPCC AR6 WGI, doi:10.1017/9781009157896.001; Lüthi et al. 2008, Nature 453, doi:10.1038/nature06949; Yan et al. 2019, Nature 574, doi:10.1038/s41586-019-1692-3
+  ['co2-2019-highest-in-2-myr', ['CO2 is now higher than at any time in at least 2 million years.', 'at least 2 million years', Y, 2_000_000, 4_000_000], ['CO2 is now higher than at any time in 50 million years.', '50 million years', Y, 49_500_000, 50_500_000]],
+  // Gulev et al. 2021, IPCC AR6 WGI chap. 2, doi:10.1017/9781009157896.004 (from memory); Forster et al. 2021, IPCC AR6 WGI chap. 7, doi:10.1017/9781009157896.009
+  ['gmst-lgm-cooling-ar6', ['The IPCC finds the world was about 6 °C colder at the Last Glacial Maximum.', 'about 6 °C', T, 4.9, 7.1, 'degC'], ['The IPCC finds the world was 2 °C colder at the Last Glacial Maximum.', '2 °C', T, 1.5, 2.5, 'degC']],
+  // Annan and Hargreaves 2013, Climate of the Past 9, doi:10.5194/cp-9-367-2013
+  ['gmst-lgm-cooling-annan2013', ['In 2013 Annan and Hargreaves found the last ice age about 4 °C colder.', 'about 4 °C', T, 3.1, 4.9, 'degC'], ['In 2013 Annan and Hargreaves found the last ice age 9 °C colder.', '9 °C', T, 8.5, 9.5, 'degC']],
+  // Osman et al. 2021, Nature 599, doi:10.1038/s41586-021-03984-4 (from memory)
+  ['gmst-lgm-cooling-osman2021', ['Osman and colleagues found a glacial cooling of about 7 °C.', 'about 7 °C', T, 5.8, 8.2, 'degC'], ['Osman and colleagues found a glacial cooling of 2 °C.', '2 °C', T, 1.5, 2.5, 'degC']],
+  // Seltzer et al. 2021, Nature 593, doi:10.1038/s41586-021-03467-6
+  ['land-lgm-cooling-low-latitude', ['Noble gases in groundwater show low-latitude land cooled about 6 °C in the last ice age.', 'about 6 °C', T, 4.9, 7.1, 'degC'], ['Noble gases in groundwater show low-latitude land cooled 15 °C in the last ice age.', '15 °C', T, 14.5, 15.5, 'degC']],
+  // Tierney et al. 2020, Nature 584, doi:10.1038/s41586-020-2617-x
+  ['ecs-tierney2020', ['Tierney and colleagues put climate sensitivity at about 3.4 °C.', 'about 3.4 °C', 'temperature', 3.01, 3.79], ['Tierney and colleagues put climate sensitivity at 8 °C.', '8 °C', 'temperature', 7.5, 8.5]],
+  // Chowdhry Beeman et al. 2019, Climate of the Past 15, doi:10.5194/cp-15-913-2019
+  ['lag-beeman2019-t1-onset', ['Beeman found that at the start of the deglaciation CO2 lagged Antarctic warming by about 570 years.', 'about 570 years', Y, 508, 632], ['Beeman found that at the start of the deglaciation CO2 lagged Antarctic warming by 3,000 years.', '3,000 years', Y, 2950, 3050]],
+  // Chowdhry Beeman et al. 2019, Climate of the Past 15, doi:10.5194/cp-15-913-2019
+  ['lag-beeman2019-t1-end', ['Beeman found that at the end of the deglaciation CO2 lagged Antarctic warming by about 500 years.', 'about 500 years', Y, 445, 555], ['Beeman found that at the end of the deglaciation CO2 lagged Antarctic warming by 2,000 years.', '2,000 years', Y, 1950, 2050]],
+  // EPICA community members 2004, Nature 429, doi:10.1038/nature02599; Past Interglacials Working Group of PAGES 2016, Reviews of Geophysics 54, doi:10.1002/2015RG000482 (from memory)
+  ['mis11-interglacial-length', ['In the Dome C core the MIS 11 interglacial lasted about 28,000 years.', 'about 28,000 years', Y, 24_700, 31_300], ['In the Dome C core the MIS 11 interglacial lasted 5,000 years.', '5,000 years', Y, 4950, 5050]],
+  // Laskar et al. 2004, Astronomy & Astrophysics 428, doi:10.1051/0004-6361:20041335 (from memory); Berger 1978, Journal of the Atmospheric Sciences 35, doi:10.1175/1520-0469(1978)035<2362:LTVODI>2.0.CO;2 (from memory)
+  ['milankovitch-long-eccentricity-period', ['The long eccentricity cycle lasts about 405,000 years.', 'about 405,000 years', Y, 364_000, 446_000], ['The long eccentricity cycle lasts 200,000 years.', '200,000 years', Y, 195_000, 205_000]],
+  // Laskar et al. 2004, Astronomy & Astrophysics 428, doi:10.1051/0004-6361:20041335 (from memory)
+  ['axial-precession-period', ['Axial precession takes about 26,000 years to complete.', 'about 26,000 years', Y, 22_900, 29_100], ['Axial precession takes 41,000 years to complete.', '41,000 years', Y, 40_500, 41_500]],
+  // Lambeck et al. 2014, Proceedings of the National Academy of Sciences 111, doi:10.1073/pnas.1411762111
+  ['mwp-1a-timing', ['Meltwater Pulse 1A struck about 14,500 years ago.', 'about 14,500 years ago', A, 13_000, 16_000], ['Meltwater Pulse 1A struck 8,000 years ago.', '8,000 years ago', A, 7950, 8050]],
+  // Lambeck et al. 2014, Proceedings of the National Academy of Sciences 111, doi:10.1073/pnas.1411762111; Lambeck et al. 2002, Nature 419, doi:10.1038/nature01089
+  ['sea-level-lowstand-timing', ['Sea level hit its lowest point about 21,000 years ago.', 'about 21,000 years ago', A, 18_400, 23_600], ['Sea level hit its lowest point 60,000 years ago.', '60,000 years ago', A, 59_500, 60_500]],
+  // Bereiter et al. 2018, Nature 553, doi:10.1038/nature25152
+  ['deglacial-mean-ocean-warming', ['The mean global ocean warmed about 2.6 °C over the deglaciation.', 'about 2.6 °C', T, 2.29, 2.91, 'degC'], ['The mean global ocean warmed 10 °C over the deglaciation.', '10 °C', T, 9.5, 10.5, 'degC']],
+  // Walker et al. 2009, Journal of Quaternary Science 24, doi:10.1002/jqs.1227
+  ['holocene-duration', ['The Holocene has lasted about 11,700 years so far.', 'about 11,700 years', Y, 10_480, 12_920], ['The Holocene has lasted 50,000 years so far.', '50,000 years', Y, 49_500, 50_500]],
+  // Jouzel et al. 1999, Science 286, doi:10.1126/science.286.5447.2138 (from memory)
+  ['vostok-lake-borehole-depth', ['In 2012 the Vostok borehole reached the lake at about 3,770 metres.', 'about 3,770 metres', L, 3388, 4152], ['In 2012 the Vostok borehole reached the lake at 2,000 metres.', '2,000 metres', L, 1950, 2050]],
+  // Jouzel et al. 1999, Science 286, doi:10.1126/science.286.5447.2138 (from memory)
+  ['vostok-ice-thickness', ['At Vostok the ice sheet is about 3,750 metres thick.', 'about 3,750 metres', L, 3370, 4130], ['At Vostok the ice sheet is 1,000 metres thick.', '1,000 metres', L, 950, 1050]],
+  // Dansgaard et al. 1993, Nature 364, doi:10.1038/364218a0
+  ['grip-record-span', ['The GRIP record reaches back about 250,000 years.', 'about 250,000 years', Y, 220_000, 280_000], ['The GRIP record reaches back 800,000 years.', '800,000 years', Y, 795_000, 805_000]],
 ];

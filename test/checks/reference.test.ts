@@ -36,6 +36,34 @@ describe('checkReferences', () => {
     expect(flags[0]?.sources.map((s) => s.doi)).toEqual(['10.1126/science.1141038', '10.1038/nature06949']);
   });
 
+  it('gives a figure that was right when published a note naming the newer value, not a warning', () => {
+    // EPICA community members 2004 (doi 10.1038/nature02599): about 740,000 years; extended to about
+    // 800,000 years by Jouzel et al. 2007 and Lüthi et al. 2008.
+    const s = 'The EPICA Dome C record spans 740,000 years.';
+    const { flags, verdicts } = check(s, q(s, '740,000 years', 'duration', 735e3, 745e3));
+    expect(verdicts).toEqual(['conflicts']);
+    expect(flags[0]).toMatchObject({ ruleId: 'value.edc-record-span', level: 'note', correction: 'about 800,000 years' });
+    expect(flags[0]?.reason).toBe('The draft gives 740,000 years for the current time span of the EPICA Dome C climate (deuterium) and CO2 records: the figure of 2004, right when published and since superseded; the sources now give 790,000–810,000 years');
+    expect(flags[0]?.sources.map((x) => x.id)).toContain('epica-community-members-2004');
+    // Dated to the year it was right, the same figure is no error at all.
+    const dated = 'In 2004 the EPICA Dome C record reached back 740,000 years.';
+    expect(check(dated, q(dated, '740,000 years', 'duration', 735e3, 745e3))).toMatchObject({ flags: [], verdicts: ['agrees'] });
+    // A figure far from both stays a warning or worse.
+    const wrong = 'The EPICA Dome C record spans 500,000 years.';
+    expect(check(wrong, q(wrong, '500,000 years', 'duration', 495e3, 505e3)).flags[0]?.level).toBe('error');
+  });
+
+  it('binds a claim about today to the latest value and a dated claim to that year', () => {
+    // IPCC AR6 SPM A.2.1: +47% from 1750 to 2019; WMO Bulletin No. 21: about 152% of pre-industrial in 2024.
+    const now = 'CO2 is now about 52% higher than before the industrial revolution.';
+    expect(bindQuantities(now, [q(now, 'about 52%', 'percent', 51, 53)], packs).bindings.map((b) => b.referenceId)).toEqual(['co2-increase-since-preindustrial-pct-latest']);
+    const then = 'By 2019 CO2 had risen 47% above pre-industrial levels.';
+    expect(bindQuantities(then, [q(then, '47%', 'percent', 46.5, 47.5)], packs).bindings.map((b) => b.referenceId)).toEqual(['co2-increase-since-1750-pct-2019']);
+    // The 2019 figure told as today's is a note naming the newer one.
+    const stale = 'CO2 is now 47% higher than before the industrial revolution.';
+    expect(check(stale, q(stale, '47%', 'percent', 46.5, 47.5)).flags[0]).toMatchObject({ level: 'note', ruleId: 'value.co2-increase-since-preindustrial-pct-latest' });
+  });
+
   it('shows the range and the correction in the draft’s own unit', () => {
     const s = 'The EPICA Dome C record spans 400 kyr.';
     const [flag] = check(s, q(s, '400 kyr', 'duration', 395e3, 405e3, 'kyr')).flags;
@@ -43,18 +71,18 @@ describe('checkReferences', () => {
   });
 
   it('converts temperature differences to °F for a draft that writes °F', () => {
-    // 1 K difference = 1.8 °F difference (NIST SP 811 B.8). West Antarctica 9-11 K (Buizert et al. 2021).
+    // 1 K difference = 1.8 °F difference (NIST SP 811 B.8). West Antarctica 8-13 K (Buizert et al. 2021; Cuffey et al. 2016).
     const s = 'West Antarctica was 5 °F colder then.';
     const [flag] = check(s, q(s, '5 °F', 'temperature-change', 4.5 / 1.8, 5.5 / 1.8, 'degF')).flags;
-    expect(flag?.reference).toMatchObject({ text: '16.2–19.8 °F', unit: 'degF-change' });
+    expect(flag?.reference).toMatchObject({ text: '14.4–23.4 °F', unit: 'degF-change' });
     expect(flag?.correction).toBe('about 18 °F');
   });
 
   it('says "as of" for dated values, and that a claim about today meets a dated value', () => {
     const s = 'Today CO2 stands at 350 ppm.';
     const [flag] = check(s, q(s, '350 ppm', 'concentration', 349.5, 350.5, 'ppm')).flags;
-    expect(flag?.reason).toBe('The draft gives 350 ppm for the atmospheric CO2 today (envelope of the 2023 global annual mean through the May 2025 Mauna Loa monthly peak); the sources give 419–430.5 ppm as of 2025-05-31. The draft speaks of today; the reference value is dated 2025-05-31 and changes with time.');
-    expect(flag?.reference?.asOf).toBe('2025-05-31');
+    expect(flag?.reason).toBe('The draft gives 350 ppm for the atmospheric CO2 today: from the latest global annual mean (2024) to the latest Mauna Loa May peak (2025); the sources give 422.5–431 ppm as of 2025-10-15. The draft speaks of today; the reference value is dated 2025-10-15 and changes with time.');
+    expect(flag?.reference?.asOf).toBe('2025-10-15');
   });
 
   it('passes an agreeing claim with no flag', () => {
@@ -82,6 +110,6 @@ describe('corrections', () => {
     const s = 'Global temperature at the Last Glacial Maximum was 15 °C lower.';
     const [flag] = check(s, q(s, '15 °C', 'temperature-change', 14.5, 15.5, 'degC')).flags;
     expect(flag?.correction).toBe('about 6 °C (estimates run from about 4 to 7 °C)');
-    expect(flag?.reference?.text).toBe('3.6–7 °C');
+    expect(flag?.reference?.text).toBe('3.5–7.5 °C');
   });
 });

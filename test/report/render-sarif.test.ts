@@ -115,7 +115,7 @@ describe('SARIF 2.1.0 report', () => {
     const message = resultFor('value.edc-record-span').message.text;
     expect(message).toBe(describeFlag(SPAN_FLAG));
     expect(message).toContain('"400,000 years"');
-    expect(message).toContain('790,000 to 810,000 yr');
+    expect(message).toContain('790,000–810,000 years');
     expect(message).toContain('with "800,000 years"');
   });
 

@@ -57,3 +57,31 @@ describe('text report', () => {
     );
   });
 });
+
+describe('citations in the text report', () => {
+  it('keep every line a citation adds within 200 characters, however long the author list', async () => {
+    const { checkText } = await import('../../src/engine.js');
+    // Claims that draw the longest author lists of the built-in pack: Buizert et al. 2021 (40 authors),
+    // Jouzel et al. 2007 (32), Clark et al. 2012 (31). Every value here is wrong on purpose (invented text).
+    const draft = [
+      'East Antarctica was 20 °C colder at the Last Glacial Maximum.',
+      'The EPICA Dome C record reaches back 400,000 years.',
+      'Over the deglaciation sea level rose 10 metres.',
+      'The IPCC finds the world was 2 °C colder at the Last Glacial Maximum.',
+    ].join('\n\n');
+    const result = await checkText(draft, { path: 'draft.md' });
+    expect(result.flags.length).toBeGreaterThanOrEqual(4);
+    const text = renderText(result, OPTIONS);
+    const cited = result.flags.flatMap((f) => f.sources.map((s) => s.short ?? s.id));
+    expect(cited).toEqual(expect.arrayContaining(['Buizert et al. 2021, Science 372, doi:10.1126/science.abd2897', 'Clark et al. 2012, Proceedings of the National Academy of Sciences 109, doi:10.1073/pnas.1116619109']));
+    const citationLines = text.split('\n').filter((line) => cited.some((c) => line.includes(c)));
+    expect(citationLines.length).toBe(new Set(cited).size);
+    expect(citationLines.filter((line) => [...line].length > 200)).toEqual([]);
+  });
+
+  it('states the packs and their as-of dates under the summary', async () => {
+    const { checkText } = await import('../../src/engine.js');
+    const result = await checkText('The EPICA Dome C record reaches back 400,000 years.', { path: 'draft.md' });
+    expect(renderText(result, OPTIONS)).toMatch(/\nReference packs: paleoclimate \d+\.\d+\.\d+ \(values as of \d{4}-\d{2}-\d{2}\)\. Values carry uncertainty and dates; an expert reviews every flag\.\n$/u);
+  });
+});

@@ -70,11 +70,11 @@ describe('checklist --format markdown', () => {
         '### Under "The long record"',
         '',
         `- [ ] **${span.id}** line 3: The Dome C core reaches back about 420,000 years.`,
-        '  - Values read: "about 420,000 years" (415,000 to 425,000 yr)',
-        '  - Verdict: conflicts with time span of the EPICA Dome C ice-core record: about 800,000 years (790,000 to 810,000 yr)',
+        '  - Values read: "about 420,000 years" (415,000–425,000 years)',
+        '  - Verdict: conflicts with time span of the EPICA Dome C ice-core record: about 800,000 years (790,000–810,000 years)',
         '  - Flag (error, value.edc-record-span): The record spans about 800,000 years. Correction: "about 800,000 years"',
         '  - Sources:',
-        '    - Jouzel, J. et al. (2007). Orbital and millennial Antarctic climate variability over the past 800,000 years. Science 317, 793-796. https://doi.org/10.1126/science.1141038 (from memory)',
+        '    - Jouzel et al. 2007, doi:10.1126/science.1141038 (from memory)',
       ].join('\n'),
     );
     expect(markdown).toContain('  - Signed off: by R. Okafor on 2025-02-11, approved');

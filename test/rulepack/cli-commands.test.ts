@@ -31,11 +31,45 @@ describe('firnline refs', () => {
 
   it('prints text with the range and short citations', async () => {
     const { out } = await run(registerRefs, ['refs', 'vostok-record-span']);
+    // Petit et al. 1999, Nature 399, 429-436; NOAA NCEI study 2453 (the Vostok data).
     expect(out).toBe(
       'value.vostok-record-span\n  Time span of the continuous climate and CO2 record from the Vostok 5G ice core (Antarctica)\n  400,000–423,000 years\n' +
-        '    Petit, J. R., Jouzel, J., Raynaud, D., Barkov, N. I., Barnola, J.-M., Basile, I., Bender, M., Chappellaz, J., Davis, M., Delaygue, G., Delmotte, M., Kotlyakov, V. M., Legrand, M., Lipenkov, V. Y., Lorius, C., Pépin, L., Ritz, C., Saltzman, E. & Stievenard, M. (1999) https://doi.org/10.1038/20859\n' +
-        '    Petit, J.-R. et al. (1999/2001) https://paleo.ltrr.arizona.edu/json/noaa-icecore-2453.json\n',
+        '    Petit et al. 1999, Nature 399, doi:10.1038/20859 (value and DOI from memory)\n' +
+        '    Petit et al. 2001, IGBP PAGES/World Data Center for Paleoclimatology Data Contribution Series, https://www.ncei.noaa.gov/access/paleo-search/study/2453 (author, number, URL from memory)\n',
     );
+  });
+
+  it('lists at least 120 values as JSON, each with its range in words and its sources in short and full form', async () => {
+    const { out } = await run(registerRefs, ['refs', '--format', 'json']);
+    const entries = JSON.parse(out) as { id: string; range: string; sources: { short: string; cite: string; csl?: { type: string } }[] }[];
+    expect(entries.length).toBeGreaterThanOrEqual(120);
+    const span = entries.find((e) => e.id === 'edc-record-span');
+    expect(span?.range).toBe('790,000–810,000 years');
+    // Jouzel et al. 2007, Science 317, 793-796 (doi 10.1126/science.1141038).
+    expect(span?.sources[0]?.short).toMatch(/^Jouzel et al\. 2007, Science 317, doi:10\.1126\/science\.1141038/u);
+    expect(span?.sources[0]?.cite).toMatch(/^Jouzel, J\., Masson-Delmotte, V\., .*\(2007\)\. Orbital/u);
+    expect(span?.sources[0]?.csl?.type).toBe('article-journal');
+  });
+
+  it('lists the values past their review date on a given day, and exits 1 when there are any', async () => {
+    const early = await run(registerRefs, ['refs', '--due', '--today', '2025-11-01']);
+    expect(early.out).toBe('No reference value is past its review date (today: 2025-11-01).\n');
+    expect(early.ctx.exitCode).toBe(0);
+    const later = await run(registerRefs, ['refs', '--due', '--today', '2026-07-01']);
+    expect(later.out).toMatch(/^\d+ reference values are past the review date \(today: 2026-07-01\)/u);
+    expect(later.out).toContain('value.co2-present-day: review by 2026-06-30 (as of 2025-10-15)');
+    expect(later.out).not.toContain('value.allan-hills-oldest-ice');
+    expect(later.ctx.exitCode).toBe(1);
+    await expect(run(registerRefs, ['refs', '--due', '--today', '2026-13-45'])).rejects.toThrow(/--today takes a date as YYYY-MM-DD/u);
+  });
+
+  it('exports the cited sources as BibTeX', async () => {
+    const { out } = await run(registerRefs, ['refs', 'edc-record-span', '--format', 'bibtex']);
+    // BibTeX entry shape: @type{key, field = {value}, ...} (BibTeX documentation, common practice).
+    expect(out).toMatch(/@article\{Jouzel2007\w*,/u);
+    expect(out).toContain('doi = {10.1126/science.1141038}');
+    expect(out).toContain('volume = {317}');
+    expect((out.match(/^@/gmu) ?? []).length).toBe(3);
   });
 
   it('adds a team pack given with --pack, and stops on a broken one', async () => {
@@ -51,6 +85,10 @@ describe('firnline explain', () => {
     expect(out).toMatch(/^value\.co2-lgm \(default level: warning\)\nChecks the atmospheric CO2 at the Last Glacial Maximum/u);
     expect(out).toContain('Accepted range: 180–200 ppm.');
     expect(out).toContain('doi: 10.1017/9781009157896.009');
+    // The full reference: every author and the chapter of the assessment (IPCC AR6 WGI ch. 7, Forster et al. 2021).
+    expect(out).toContain('  - Forster, P., Storelvmo, T., Armour, K.');
+    expect(out).toContain('In: Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, Chapter 7, Cambridge University Press, 923–1054. https://doi.org/10.1017/9781009157896.009');
+    expect(out).toContain('    kind: assessment\n');
   });
 
   it('accepts a value id without its prefix, and a reasoning check id', async () => {

@@ -27,7 +27,7 @@ function detect({ index, read }: DetectInput): Cue[] {
     (c) => c.polarity === 'denied' && c.role !== 'start' && c.role !== 'feedback' && (isCo2OnWarming(c) || (aboutCo2 && c.agent === undefined)) && !onlyTheStart(here.s.text, c.end),
   );
   if (denial !== undefined) return [{ start: denial.start, end: denial.end }];
-  const follower = here.props.orders.find((o) => isTemperatureFirst(o) && o.dismissive);
+  const follower = here.s.words.some((w) => w.text === 'whether') ? undefined : here.props.orders.find((o) => isTemperatureFirst(o) && o.dismissive);
   return follower === undefined ? [] : [{ start: follower.start, end: follower.end }];
 }
 

@@ -23,6 +23,8 @@ import { findPhrases } from '../../claims/frames-match.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isTemperatureFirst } from './queries.js';
 
+/** Verbs and nouns that read a record as something: "shows", "tells us", "is a measure of". */
+const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|recorded|indicates?|measures?|measure|gives?|gave|means?|suggests?|proves?|is|are|was|were|says?|said|thermometers?|stands?|represents?|reflects?|equals?|reads?)$/u;
 const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degrees?|°c|°f|k|cooler|warmer|colder)$/u;
 const ANAPHORIC_READING = /^(?:this|that|these|it|they|the curve|the record|the graph|the column)\b.{0,20}\b(?:tells?|shows?|means?|suggests?|indicates?|gives?|reveals?)\b/u;
 
@@ -38,7 +40,18 @@ function detectRegional({ index, read, sentence, words }: DetectInput): Cue[] {
   // set the two side by side; only a record and the globe in one clause equate them.
   const recordClauses = new Set([...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].map((h) => s.words[h.first]?.clause));
   const anaphoric = !recordIn(here) && record;
-  const global = s.of('regions', 'global').find((g) => anaphoric || recordClauses.has(s.words[g.first]?.clause) || s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text) && w.clause === s.words[g.first]?.clause));
+  const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')];
+  // The record must be read as the globe: both in one segment, or a reading verb between them
+  // ("the Vostok core shows that global...", "...is a fair measure of how much the whole Earth warmed").
+  const readAs = (g: { first: number; last: number }) =>
+    records.some((r) => {
+      if (s.words[r.first]?.segment === s.words[g.first]?.segment) return true;
+      const [from, to] = r.first < g.first ? [r.last + 1, g.first] : [g.last + 1, r.first];
+      return s.words.slice(from, to).some((w) => READING.test(w.text));
+    });
+  const global = s.of('regions', 'global').find(
+    (g) => anaphoric || (recordClauses.has(s.words[g.first]?.clause) && readAs(g)) || s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text) && w.clause === s.words[g.first]?.clause),
+  );
   const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text));
   if (!record || global === undefined || !temperature) return [];
   // "colder than today" compares two times, not the record with the globe: no contrast.

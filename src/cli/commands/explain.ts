@@ -1,5 +1,7 @@
 import type { Command } from 'commander';
 import { FirnlineError } from '../../errors.js';
+import { fullReference } from '../../report/format-source.js';
+import { describeRule } from '../../rulepack/describe-rule.js';
 import type { CliContext } from '../context.js';
 
 /** `firnline explain <id>`: one rule or reference value in full, with its citations. */
@@ -11,15 +13,15 @@ export function registerExplain(program: Command, ctx: CliContext): void {
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (v: string, all: string[]) => [...all, v], [] as string[])
     .action(async (id: string, flags: { config?: string; pack: string[] }) => {
-      const [{ describeRule }, { loadRunSettings }] = await Promise.all([import('../../rulepack/describe-rule.js'), import('../run-settings.js')]);
-      const { packs } = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
+      const { packs } = await (await import('../run-settings.js')).loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const info = describeRule(packs, id) ?? describeRule(packs, `value.${id}`);
       if (info === undefined) {
         throw new FirnlineError('unknown-rule', `no rule or reference value has the id \`${id}\`; run \`firnline refs\` to list them`);
       }
+      // The full reference (every author, container, pages, link), then the locators and how the value was checked.
       const sources = info.sources.map((s) => {
-        const link = [s.doi === undefined ? undefined : `doi: ${s.doi}`, s.url === undefined ? undefined : `url: ${s.url}`].filter((x) => x !== undefined);
-        return `  - ${s.cite}\n${link.map((l) => `    ${l}\n`).join('')}    how: ${s.how}\n`;
+        const link = [s.kind === undefined ? undefined : `kind: ${s.kind}`, s.doi === undefined ? undefined : `doi: ${s.doi}`, s.url === undefined ? undefined : `url: ${s.url}`].filter((x) => x !== undefined);
+        return `  - ${fullReference(s)}\n${link.map((l) => `    ${l}\n`).join('')}    how: ${s.how}\n`;
       });
       ctx.stdout(`${info.id} (default level: ${info.defaultLevel})\n${info.summary}\n\n${info.description}\n\nSources:\n${sources.join('')}`);
     });

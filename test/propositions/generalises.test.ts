@@ -1,0 +1,93 @@
+/**
+ * Issue 9's failures, restated in sentences of our own: the reader must catch what a sentence
+ * asserts in wordings no cue list holds, and leave alone what a debunking piece quotes.
+ * The science:
+ * - CO2 solubility falls as water warms: Weiss 1974, Marine Chemistry 2, 203-215 (from memory).
+ * - Ice-core air is younger than the ice around it (delta-age): Caillon et al. 2003, Science 299,
+ *   1728-1731, doi 10.1126/science.1078758.
+ * - CO2 amplified a warming the orbit started, and global temperature lagged CO2: Shakun et al.
+ *   2012, Nature 484, 49-54, doi 10.1038/nature10915.
+ * - Polar swings exceed the global mean: Jouzel et al. 2007, Science 317, 793-796; Tierney et al.
+ *   2020, Nature 584, 569-573.
+ * - Antarctica warmed during the Younger Dryas (bipolar seesaw): Pedro et al. 2016, Nature
+ *   Geoscience 9, 51-55 (from memory).
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { checkText } from '../../src/engine.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+import type { LoadedPacks } from '../../src/rulepack/types.js';
+
+let packs: LoadedPacks;
+beforeAll(async () => {
+  packs = await loadPacks([]);
+});
+
+const serious = async (text: string) =>
+  (await checkText(text, { packs, format: 'markdown' })).flags.filter((f) => f.level !== 'note').map((f) => f.ruleId);
+
+describe('claims read as propositions, in wordings of our own', () => {
+  it.each([
+    ['Ocean water that heats up soaks in extra carbon dioxide.', 'direction.co2-solubility-falls-with-warming'],
+    ['The colder the sea, the less CO2 it manages to keep dissolved.', 'direction.co2-solubility-falls-with-warming'],
+    ['The gas sealed in the bubbles is more ancient than the ice that surrounds it.', 'direction.trapped-air-younger-than-ice'],
+    ['If the gas only rose after the warming, how could it have driven anything?', 'logic.lag-rules-out-cause'],
+    ['That lag tells us the ice cores reveal nothing about climate sensitivity.', 'logic.lag-rules-out-cause'],
+    ['CO2 was a product of the warming and never a driver of it.', 'logic.either-or-causation'],
+    ['Worldwide, the thermometers climbed first and CO2 trailed along behind.', 'direction.global-co2-ahead-of-warming'],
+    ['High latitudes swung less than the world as a whole between glacial and interglacial times.', 'direction.polar-swings-exceed-global'],
+    ['In the Younger Dryas the Antarctic grew colder along with Greenland.', 'direction.bipolar-seesaw-younger-dryas'],
+    ['Every additional part per million of CO2 heats the planet more than the previous one did.', 'direction.co2-forcing-logarithmic'],
+    ['The two curves shadow each other so closely that CO2 must be the thermostat.', 'logic.correlation-as-proof'],
+    ['It was the tilt of the orbit, and nothing else, that brought the last glaciation to an end.', 'logic.single-cause'],
+  ])('%s → %s', async (text, ruleId) => {
+    expect(await serious(text)).toContain(ruleId);
+  });
+
+  it.each([
+    'Warm ocean water holds less CO2, so the warming seas gave some of it back to the air.',
+    'The trapped air is younger than the ice around it, because bubbles close only deep in the firn.',
+    'CO2 rose after the first Antarctic warming, and then it amplified the warming and spread it around the globe.',
+    'Orbital changes started the warming; CO2 then amplified it, each driving the other.',
+    'Antarctic temperature climbed a few centuries before CO2, while global temperature mostly followed the CO2 rise.',
+    'Polar regions swung two or three times more than the planet as a whole.',
+    'Each additional ppm adds a little less warming than the one before.',
+    'The curves move together, as expected when each amplifies the other, but the match alone proves nothing.',
+    'The orbit alone was too weak to end the ice age.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+});
+
+describe('what a debunking piece quotes is not its own claim', () => {
+  it('passes a Myth/Fact layout and flags the same claim asserted', async () => {
+    const myth = 'Myth: Carbon dioxide trailed the warming, so it cannot have caused any of it.\n\nFact: it amplified a warming that orbital changes began.\n';
+    expect(await serious(myth)).toEqual([]);
+    expect(await serious('Carbon dioxide trailed the warming, so it cannot have caused any of it.\n')).toContain('logic.lag-rules-out-cause');
+  });
+
+  it('passes a section headed as the myth, a block quote and an attributed claim, but not an endorsed one', async () => {
+    expect(await serious('## What you may hear\n\nThe lag proves CO2 is a passenger.\n\n## What the cores show\n\nCO2 amplified the warming.\n')).toEqual([]);
+    expect(await serious('> Because CO2 lagged by 800 years, it cannot have warmed anything.\n')).toEqual([]);
+    expect(await serious('Some bloggers insist that CO2 lagged, so it cannot have warmed anything.\n')).toEqual([]);
+    expect(await serious('Some bloggers insist that CO2 lagged, so it cannot have warmed anything, and they are right.\n')).toContain('logic.lag-rules-out-cause');
+  });
+
+  it('counts claims under the reported marker and keeps their flags as notes', async () => {
+    const result = await checkText('<!-- firnline: reported -->\nThe Vostok ice core spans 800,000 years.\n', { packs, format: 'markdown' });
+    expect(result.claims.map((c) => c.marked)).toEqual([true]);
+    expect(result.flags.map((f) => [f.ruleId, f.level])).toEqual([['value.vostok-record-span', 'note']]);
+  });
+});
+
+describe('a draft is on topic because it names the subject', () => {
+  it('skips a file whose only numbers have nothing to do with ice ages or CO2', async () => {
+    const result = await checkText('The newsletter budget rose 2.5 percent, and 40 percent of readers renewed.\n', { packs });
+    expect(result.claims).toEqual([]);
+    expect(result.skipped).toEqual([{ file: '-', reason: 'names no subject of the packs' }]);
+  });
+
+  it('does not make a claim of an unrelated percentage in a draft that is on topic', async () => {
+    const result = await checkText('The Vostok core spans about 420,000 years.\n\nThe shop handles 2.5 percent of our budget.\n', { packs });
+    expect(result.claims.map((c) => c.text)).toEqual(['The Vostok core spans about 420,000 years.']);
+  });
+});
