@@ -1,23 +1,18 @@
 import type { Command} from 'commander';
 import { Option } from 'commander';
-import { checkPaths } from '../../engine.js';
-import { renderReport, REPORT_FORMATS, type ReportFormat } from '../../report/index.js';
-import { renderChecklistOf } from '../render-checklist.js';
+import type { ReportFormat } from '../../report/index.js';
 import { LEVELS, type Level } from '../../types.js';
 import { VERSION } from '../../version.js';
 import type { CliContext } from '../context.js';
-import { applyGate } from '../gate.js';
-import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
-import { writeFileAtomic } from '../../write-file-atomic.js';
-import { exitCodeFor } from '../exit-code.js';
 import { outputTarget } from '../../guard/output-target.js';
 import { visibleData, visibleText } from '../../guard/visible-text.js';
 import { reportUnchecked } from '../unchecked.js';
+import { CHECK_FORMATS, parseSpeedFlags, speedOptionsOf, type SpeedFlags } from '../speed-options.js';
 
-/** The report formats, plus `markdown`: the sign-off checklist (GLOSSARY.md). */
-const CHECK_FORMATS = [...REPORT_FORMATS, 'markdown'] as const;
+// The engine, the packs' schemas and the reporters load inside the action (dynamic import), so
+// `--version` and `--help` start in a few hundredths of a second (bench/).
 
-interface CheckFlags {
+interface CheckFlags extends SpeedFlags {
   format: string;
   failOn?: Level | 'never';
   config?: string;
@@ -42,11 +37,26 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('--require-signoff', 'exit 1 while any claim lacks a current sign-off in the ledger')
     .option('--changed-since <rev>', 'check only claims on lines changed since a git revision')
     .option('--absolute-paths', 'SARIF: record the working folder as an absolute file URI (off by default, so a shared report does not show the machine\'s folders)')
+    .option('--jobs <n>', 'worker threads for runs over many files (default: the number of cores; 1: no workers)')
+    .option('--no-cache', 'neither read nor write the result cache (.firnline-cache/ in the project root)')
+    .option('--shard <k/n>', 'check only the k-th of n parts of the files (split by path), for CI matrix jobs; join the reports with `firnline merge`')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
+      parseSpeedFlags(flags);
+      const [{ checkPaths }, { renderReport }, { renderChecklistOf }, { applyGate }, { checkOptionsOf, loadRunSettings }, { writeFileAtomic }, { exitCodeFor }] =
+        await Promise.all([
+          import('../../engine.js'), import('../../report/index.js'), import('../render-checklist.js'), import('../gate.js'),
+          import('../run-settings.js'), import('../../write-file-atomic.js'), import('../exit-code.js'),
+        ]);
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const failOn = flags.failOn ?? run.failOn;
       const targets = paths !== undefined && paths.length > 0 ? paths : ['.'];
-      const result = await checkPaths(targets, checkOptionsOf(run, ctx));
+      const speed = await speedOptionsOf(flags, run.projectRoot, ctx);
+      let result;
+      try {
+        result = await checkPaths(targets, { ...checkOptionsOf(run, ctx), ...speed.options });
+      } finally {
+        speed.done();
+      }
       const gate = await applyGate(result, {
         requireSignoff: flags.requireSignoff === true,
         ...(flags.changedSince === undefined ? {} : { changedSince: flags.changedSince }),

@@ -2,12 +2,11 @@ import { Option, type Command } from 'commander';
 import { relative } from 'node:path';
 import { outputTarget } from '../../guard/output-target.js';
 import { reportUnchecked } from '../unchecked.js';
-import { checkPaths } from '../../engine.js';
 import type { CliContext } from '../context.js';
-import { CHECKLIST_RENDERERS, renderChecklistOf, type ChecklistFormat } from '../render-checklist.js';
-import { guardChecklistOutput } from '../guard-checklist-output.js';
-import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
-import { writeFileAtomic } from '../../write-file-atomic.js';
+import type { ChecklistFormat } from '../render-checklist.js';
+
+/** The checklist formats (render-checklist.ts CHECKLIST_RENDERERS); the renderers load when the command runs. */
+export const CHECKLIST_FORMATS = ['markdown', 'json'] as const;
 
 interface ChecklistFlags {
   format: ChecklistFormat;
@@ -23,12 +22,15 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
     .command('checklist')
     .description('write the sign-off checklist of every claim in the drafts, flagged or not')
     .argument('[paths...]', 'drafts or folders of drafts (default: the current folder)')
-    .addOption(new Option('--format <name>', 'checklist format').choices(Object.keys(CHECKLIST_RENDERERS)).default('markdown'))
+    .addOption(new Option('--format <name>', 'checklist format').choices([...CHECKLIST_FORMATS]).default('markdown'))
     .option('-o, --output <file>', 'write the checklist to a file instead of standard output')
     .option('--force', 'replace the output file even if it holds ticks not yet in the ledger')
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (value: string, previous: string[]) => [...previous, value], [])
     .action(async (paths: string[] | undefined, flags: ChecklistFlags) => {
+      const [{ checkPaths }, { renderChecklistOf }, { guardChecklistOutput }, { checkOptionsOf, loadRunSettings }, { writeFileAtomic }] = await Promise.all([
+        import('../../engine.js'), import('../render-checklist.js'), import('../guard-checklist-output.js'), import('../run-settings.js'), import('../../write-file-atomic.js'),
+      ]);
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const targets = paths !== undefined && paths.length > 0 ? paths : ['.'];
       const result = await checkPaths(targets, checkOptionsOf(run, ctx));

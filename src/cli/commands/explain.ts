@@ -3,7 +3,6 @@ import { FirnlineError } from '../../errors.js';
 import { fullReference } from '../../report/format-source.js';
 import { describeRule } from '../../rulepack/describe-rule.js';
 import type { CliContext } from '../context.js';
-import { loadRunSettings } from '../run-settings.js';
 
 /** `firnline explain <id>`: one rule or reference value in full, with its citations. */
 export function registerExplain(program: Command, ctx: CliContext): void {
@@ -14,7 +13,7 @@ export function registerExplain(program: Command, ctx: CliContext): void {
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (v: string, all: string[]) => [...all, v], [] as string[])
     .action(async (id: string, flags: { config?: string; pack: string[] }) => {
-      const { packs } = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
+      const { packs } = await (await import('../run-settings.js')).loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const info = describeRule(packs, id) ?? describeRule(packs, `value.${id}`);
       if (info === undefined) {
         throw new FirnlineError('unknown-rule', `no rule or reference value has the id \`${id}\`; run \`firnline refs\` to list them`);

@@ -3,15 +3,10 @@ import { Option } from 'commander';
 import { readRegularText } from '../../guard/read-regular-file.js';
 import { visibleLine } from '../../guard/visible-text.js';
 import { relative, resolve } from 'node:path';
-import { checkPaths } from '../../engine.js';
 import { FirnlineError } from '../../errors.js';
-import { parseTickedChecklist } from '../../report/checklist-ticks.js';
-import { appendSignoffs } from '../../review/append-signoffs.js';
-import { packVersionOf, planSignoffs, type SignoffRequest } from '../../review/plan-signoffs.js';
-import { readLedger } from '../../review/read-ledger.js';
+import type { SignoffRequest } from '../../review/plan-signoffs.js';
 import { DECISIONS, ledgerDate, type Decision } from '../../review/signoff-entry.js';
 import type { CliContext } from '../context.js';
-import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
 
 interface SignoffFlags {
   from?: string;
@@ -45,6 +40,10 @@ export function registerSignoff(program: Command, ctx: CliContext): void {
       if (flags.from !== undefined && (flags.decision !== undefined || flags.reason !== undefined)) {
         throw new FirnlineError('signoff-decision-from', 'with --from, write decisions on the ticked lines: (corrected: ...) or (waived: ...)');
       }
+      const [{ checkPaths }, { appendSignoffs }, { packVersionOf, planSignoffs }, { readLedger }, { checkOptionsOf, loadRunSettings }] = await Promise.all([
+        import('../../engine.js'), import('../../review/append-signoffs.js'), import('../../review/plan-signoffs.js'),
+        import('../../review/read-ledger.js'), import('../run-settings.js'),
+      ]);
       const { requests, drafts } = flags.from === undefined ? fromIds(ids, flags) : await fromChecklist(resolve(ctx.cwd, flags.from), flags.from);
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const result = await checkPaths(drafts.length > 0 ? drafts : ['.'], checkOptionsOf(run, ctx));
@@ -79,6 +78,7 @@ async function fromChecklist(file: string, shown: string): Promise<{ requests: S
     if (error instanceof FirnlineError) throw error;
     throw new FirnlineError('checklist-missing', 'cannot read this checklist; check the path', { file: shown });
   }
+  const { parseTickedChecklist } = await import('../../report/checklist-ticks.js');
   const ticked = parseTickedChecklist(text, shown);
   if (ticked.length === 0) throw new FirnlineError('checklist-nothing-ticked', 'no ticked boxes (- [x]) in this checklist; tick the claims you have checked', { file: shown });
   const requests = ticked.map(({ claimId, decision, reason, note, line }): SignoffRequest => ({
