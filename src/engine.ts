@@ -192,6 +192,9 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
   const claims: Claim[] = [];
   const seen = new Map<string, number>();
   draft.blocks.forEach((block, blockIndex) => {
+    // A block with no topic word and no digit holds no claim (examineSentence needs one or the
+    // other in a sentence, and sentences are pieces of their block): it is not even split.
+    if (!DIGIT.test(block.text) && !topic.test(block.text) && !subjectMatcherOf(packs).test(block.text)) return;
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
