@@ -40,7 +40,7 @@ interface CompiledTerm {
   firstWords: string[] | undefined;
 }
 
-const ASCII = /^[\x00-\x7f]*$/u;
+const ASCII = /^[^\u0080-\u{10ffff}]*$/u;
 
 /**
  * Finds every term occurrence (case-insensitive, on word boundaries) in `sentence`. A term whose id
