@@ -20,6 +20,7 @@ import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, lo
 import { runFiles, type FileOutcome, type FileTask } from './speed/run-files.js';
 import type { ResultCache } from './speed/cache.js';
 import { inShard, type Shard } from './speed/shard.js';
+import { cachedFindings } from './speed/sentence-cache.js';
 import type { Binding, CheckResult, Claim, Draft, Flag, FlagDraft, Level, Quantity, RuleInfo, Sentence, Verdict } from './types.js';
 
 /** How a run is set up. Only `cwd` is required; packs default to the built-in pack. */
@@ -202,7 +203,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     sentences.forEach((sentence, index) => {
       const { window, at } = windowOf(index);
       const onTopic = topic.test(sentence.text) || subjectMatcherOf(packs).test(sentence.text);
-      const found = examineSentence(window, at, packs, onTopic, context, () => topic.test(window[at - 1] ?? ''));
+      const found = examineCached(window, at, packs, onTopic, context, () => topic.test(window[at - 1] ?? ''));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -235,6 +236,26 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     });
   });
   return { claims, flags: claims.flatMap((c) => c.flags) };
+}
+
+/**
+ * examineSentence through the per-sentence cache (speed/sentence-cache.ts): what a sentence holds
+ * depends only on its paragraph window, its place in it, the paragraph's kind, heading and marker,
+ * the packs and its topic tests, so an editor's re-check after a one-word edit re-reads only the
+ * paragraph that changed.
+ */
+function examineCached(
+  paragraph: string[],
+  index: number,
+  packs: LoadedPacks,
+  onTopic: boolean,
+  context: ParagraphContext,
+  previousOnTopic: () => boolean,
+): SentenceFindings | undefined {
+  const previous = previousOnTopic();
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true], () =>
+    examineSentence(paragraph, index, packs, onTopic, context, () => previous),
+  );
 }
 
 /** What the stages found in one sentence, before positions are resolved. */

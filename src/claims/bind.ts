@@ -30,14 +30,14 @@ const AMBIGUOUS = 'ambiguous';
 const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 
 /**
- * One term's regular expression, and the first word of each of its phrases in lower case: in a
- * sentence of plain ASCII that contains none of them the expression cannot match, and is not run
+ * One term's regular expression, and one word of each of its phrases (the longest) in lower case: in
+ * a sentence of plain ASCII that contains none of them the expression cannot match, and is not run
  * (a few hundred terms were tried on every sentence). A term with a word outside ASCII is always run:
  * case folding beyond ASCII ("K" the kelvin sign, the long s) is the regular expression's to judge.
  */
 interface CompiledTerm {
   regex: RegExp;
-  firstWords: string[] | undefined;
+  keyWords: string[] | undefined;
 }
 
 const ASCII = /^[^\u0080-\u{10ffff}]*$/u;
@@ -50,14 +50,14 @@ const ASCII = /^[^\u0080-\u{10ffff}]*$/u;
 export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
   let terms = compiled.get(packs);
   if (terms === undefined) {
-    terms = new Map(packs.terms.map((t) => [t.id, { regex: termRegex(t.words), firstWords: firstWordsOf(t.words) }]));
+    terms = new Map(packs.terms.map((t) => [t.id, { regex: termRegex(t.words), keyWords: keyWordsOf(t.words) }]));
     compiled.set(packs, terms);
   }
   const plain = ASCII.test(sentence);
   const lower = plain ? sentence.toLowerCase() : '';
   const hits: TermHits = new Map();
-  for (const [id, { regex, firstWords }] of terms) {
-    if (plain && firstWords !== undefined && !firstWords.some((w) => lower.includes(w))) continue;
+  for (const [id, { regex, keyWords }] of terms) {
+    if (plain && keyWords !== undefined && !keyWords.some((w) => lower.includes(w))) continue;
     const spans = [...sentence.matchAll(regex)].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
     if (spans.length === 0) continue;
     const as = extendedTerm(id, packs);
@@ -66,9 +66,10 @@ export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
   return hits;
 }
 
-function firstWordsOf(words: string[]): string[] | undefined {
+function keyWordsOf(words: string[]): string[] | undefined {
   if (!words.every((w) => ASCII.test(w))) return undefined;
-  return words.map((w) => w.trim().split(/\s+/u)[0]?.toLowerCase() ?? '');
+  // Every word of a phrase stands in a sentence the phrase matches; the longest one rules out most.
+  return words.map((w) => w.trim().toLowerCase().split(/\s+/u).reduce((a, b) => (b.length > a.length ? b : a), ''));
 }
 
 /** The term a dotted id extends ("glacial.in-other-words" → "glacial"), or the id itself. */

@@ -26,7 +26,7 @@ let loaded: { key: string; packs: Promise<LoadedPacks>; topic?: TopicMatcher } |
 
 export default async function checkInWorker(task: PoolTask): Promise<FileOutcome> {
   const key = JSON.stringify([task.builtin, task.packFiles]);
-  if (loaded?.key !== key) loaded = { key, packs: loadPacks(task.packFiles, { builtin: task.builtin }) };
+  if (loaded?.key !== key) loaded = { key, packs: loadPacks(task.packFiles, { builtin: task.builtin, validated: true }) };
   const packs = await loaded.packs;
   loaded.topic ??= createTopicMatcher(packs.topicWords);
   if (task.format === 'html') await loadHtmlReader();

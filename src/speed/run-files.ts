@@ -38,10 +38,18 @@ export interface RunFilesOptions {
 }
 
 /**
- * How many on-topic files must wait before a pool is worth its start (each worker loads the NLP
- * library and the packs, some 0.5 s on an idle core): below this, one thread does the lot.
+ * How many on-topic files must wait before a pool is worth its start: below this, one thread does
+ * the lot.
  */
 export const POOL_MIN_FILES = 8;
+
+/**
+ * Without `--jobs`, how much on-topic text must wait as well. Each worker loads the packs (YAML and
+ * schema) and the NLP library, measured at 1 to 4 s of CPU on this 2-core machine under load, about
+ * what checking half a megabyte of on-topic text costs in one thread: a docs repository with a few
+ * on-topic pages is faster without a pool. `--jobs N` (N > 1) starts one at POOL_MIN_FILES.
+ */
+export const POOL_MIN_BYTES = 1_000_000;
 
 /** The worker's module; absent when running from the TypeScript sources (tests), then no pool. */
 const WORKER_FILE = fileURLToPath(new URL('./pool-worker.js', import.meta.url));
@@ -65,6 +73,8 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
   });
 
   let waiting: { index: number; text: string; key: string | undefined }[] = [];
+  let waitingBytes = 0;
+  const enough = (): boolean => waiting.length >= POOL_MIN_FILES && (options.jobs !== undefined || waitingBytes >= POOL_MIN_BYTES);
   let pool: TinypoolType | undefined;
   const running: Promise<void>[] = [];
   const dispatch = async (item: { index: number; text: string; key: string | undefined }): Promise<void> => {
@@ -104,7 +114,8 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
         continue;
       }
       waiting.push({ index, text, key });
-      if (pool === undefined && poolable && waiting.length >= POOL_MIN_FILES) {
+      waitingBytes += text.length;
+      if (pool === undefined && poolable && enough()) {
         const { Tinypool } = await import('tinypool');
         pool = new Tinypool({ filename: WORKER_FILE, minThreads: jobs, maxThreads: jobs, idleTimeout: 1000 });
       }
