@@ -25,10 +25,11 @@ import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
 const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|(?:at|by|during|in)\s+that\s+(?:time|point|stage|period)|(?:in|at|from|of|during|for|within|across|over|on)\s+(?:that|the\s+same)\s+\p{L}+|at\s+the\s+time(?!\s+of(?![\p{L}]))|(?:by|back)\s+then)(?![\p{L}])/iu;
 /**
- * A sentence whose subject is a bare measure ("The global average for 2019 was …", "The annual mean
- * …") names no subject of its own: the measure is of the subject before.
+ * A sentence whose subject is a bare measure ("The global average for 2019 was …", "Before the
+ * Industrial Revolution the level was …") names no subject of its own: the measure is of the subject
+ * before. A measure with an "of" phrase names its own subject ("the level of the sea").
  */
-const MEASURE_SUBJECT = /^\s*the\s+(?:[\p{L}-]+\s+){0,2}?(?:average|mean|level|concentration|figure|value|reading|total)(?![\p{L}])/iu;
+const MEASURE_SUBJECT = /(?:^|[^\p{L}])the\s+(?:[\p{L}-]+\s+){0,2}?(?:average|mean|level|concentration|figure|value|reading|total|amount)(?![\p{L}])(?!\s+of(?![\p{L}]))/iu;
 /** A term right after a demonstrative ("in that record", "this core") is the back-reference itself, not a subject of its own. */
 const DEMONSTRATIVE = /(?:^|[^\p{L}])(?:that|this|these|those|the\s+same)\s+$/iu;
 /** The baseline of a comparison: "colder than in pre-industrial times", "40 metres below today's". */
@@ -91,10 +92,11 @@ function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks): [st
     bindingTerms.set(packs, binding);
   }
   const used = binding;
-  // The words of a bare measure subject ("The global average") are the back-reference itself.
-  const measureEnd = MEASURE_SUBJECT.exec(sentence)?.[0].length ?? 0;
+  // The words of a bare measure subject ("The global average", "the level") are the back-reference itself.
+  const measure = MEASURE_SUBJECT.exec(sentence);
+  const inMeasure = ([start, end]: [number, number]): boolean => measure !== null && start >= measure.index && end <= measure.index + measure[0].length;
   const ownSubject = ([start, end]: [number, number]): boolean =>
-    end > measureEnd && !BASELINE.test(sentence.slice(Math.max(0, start - 40), start)) && !DEMONSTRATIVE.test(sentence.slice(Math.max(0, start - 20), start));
+    !inMeasure([start, end]) && !BASELINE.test(sentence.slice(Math.max(0, start - 40), start)) && !DEMONSTRATIVE.test(sentence.slice(Math.max(0, start - 20), start));
   return [...view]
     .map(([id, spans]): [string, [number, number][]] => [id, used.has(id) ? spans.filter(ownSubject) : []])
     .filter(([, spans]) => spans.length > 0);

@@ -45,12 +45,16 @@ export function endpointPairs(sentence: string, quantities: Quantity[]): Endpoin
   const pairs: EndpointPair[] = [];
   for (let first = 0; first + 1 < quantities.length; first++) {
     const a = quantities[first] as Quantity;
-    const b = quantities[first + 1] as Quantity;
-    const between = sentence.slice(a.end, b.start);
+    // "from 280 ppm in 1750 to 420 ppm": the date of the first end stands between the two ends.
+    const dated = quantities[first + 1]?.statedUnit === 'CE' && a.statedUnit !== 'CE' ? 1 : 0;
+    const second = first + 1 + dated;
+    const b = quantities[second];
+    if (b === undefined) continue;
+    const between = sentence.slice((quantities[second - 1] as Quantity).end, b.start);
     if (!PAIR_OPEN.test(sentence.slice(Math.max(0, a.start - 20), a.start)) || !PAIR_JOIN.test(between)) continue;
     const trimmed = between.trimEnd();
     const join = JOIN_WORD.exec(trimmed);
-    pairs.push({ first, second: first + 1, join: a.end + (join === null ? trimmed.length : join.index) });
+    pairs.push({ first, second, join: (quantities[second - 1] as Quantity).end + (join === null ? trimmed.length : join.index) });
   }
   return pairs;
 }

@@ -52,7 +52,9 @@ export function termViews(sentence: string, quantities: Quantity[], hits: TermHi
   for (const [id, spans] of hits) {
     for (const span of spans) {
       const [start, end] = span;
-      const shared = end <= firstOwned || quantities.some((q) => start < q.end && q.start < end);
+      // A term inside a quantity's own words is every quantity's, except a calendar year ("1750"),
+      // which dates the figure beside it: in "from 280 ppm in 1750 to 420 ppm" it is 280's.
+      const shared = end <= firstOwned || quantities.some((q) => q.statedUnit !== 'CE' && start < q.end && q.start < end);
       const claimants = shared ? [] : claimantsOf(start, end, owners, quantities, breaks, pairs);
       quantities.forEach((_, i) => {
         if (shared || !owned.has(i) || claimants.includes(i)) add(i, id, span);

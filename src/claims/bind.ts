@@ -96,6 +96,14 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   const lists = parallelLists(sentence, quantities, pairs);
   const hits = withoutOthers(sentence, findTerms(sentence, packs));
   const views = termViews(sentence, quantities, hits, pairs, lists);
+  // "at the warm peaks it topped out near 350 ppm": the unit names the gas.
+  quantities.forEach((q, i) => {
+    for (const term of packs.terms) {
+      if (term.units?.includes(q.statedUnit ?? '') !== true || (term.unless ?? []).some((id) => hits.has(id))) continue;
+      const view = views[i] as TermHits;
+      if (!view.has(term.id)) view.set(term.id, [[q.start, q.end]]);
+    }
+  });
   // "… began to fade 18,000 years ago and was over by 3,000 years ago": a predicate sharing the subject speaks for itself.
   for (const c of sharedSubjects(sentence, quantities)) {
     quantities.forEach((q, i) => {

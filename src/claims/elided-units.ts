@@ -23,6 +23,9 @@ const CLAUSE_JOIN = /(?:^|[^\p{L}])(?:and|but|while|whereas)(?![\p{L}])|,/iu;
 /** What may follow the last number of a gapped clause: the end of the clause. */
 const CLAUSE_CLOSE = /^\s*(?:[.;,:!?)]|$|(?:and|but|while|whereas|respectively)(?![\p{L}]))/iu;
 
+/** "a century or ", "one year or ": an approximate count of the noun named just before. */
+const A_NOUN_OR = /(?:^|[^\p{L}])(?:a|an|one)\s+\p{L}+\s+or\s+$/iu;
+
 interface Bare {
   text: string;
   start: number;
@@ -76,6 +79,8 @@ function listPartner(sentence: string, b: Bare, bare: Bare[], measured: Quantity
 function gapPartner(sentence: string, b: Bare, quantities: Quantity[], measured: Quantity[]): Quantity | undefined {
   const model = measured.filter((q) => q.end <= b.start).at(-1);
   if (model === undefined || !CLAUSE_CLOSE.test(sentence.slice(b.end))) return undefined;
+  // "within a century or two": the number counts the noun just before it, not the earlier unit.
+  if (A_NOUN_OR.test(sentence.slice(0, b.start))) return undefined;
   const between = sentence.slice(model.end, b.start);
   if (!CLAUSE_JOIN.test(between) || quantities.some((q) => q.start >= model.end && q.end <= b.start)) return undefined;
   // The clause names what the number counts ("and EPICA Dome C eight"): at least one word before the number.

@@ -79,7 +79,7 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     agentThing = subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first) ?? thingBefore(s, h.first, 'clause');
     patientThing = thingAfter(s, h.last);
   }
-  const cleft = cleftFocus(s, agentThing);
+  const cleft = cleftFocus(s, agentThing) ?? pseudoCleftFocus(s, h);
   if (cleft !== undefined) agentThing = cleft;
   let agent = kind(agentThing);
   let patient = kind(patientThing);
@@ -132,7 +132,10 @@ function copulaAfter(s: ReadSentence, i: number): number | undefined {
 
 /** "must be negligible", "is irrelevant": a role denied by what is said of it. */
 function deniedAfter(s: ReadSentence, i: number): boolean {
-  return s.words.slice(i + 1, i + 6).some((w) => w.clause === s.words[i]?.clause && /^(?:negligible|irrelevant|unimportant|insignificant|immaterial|trivial|tiny|nil|zero|minimal)$/u.test(w.text));
+  const after = s.words.slice(i + 1, i + 8).filter((w) => w.clause === s.words[i]?.clause);
+  if (after.some((w) => /^(?:negligible|irrelevant|unimportant|insignificant|immaterial|trivial|tiny|nil|zero|minimal|undetectable|imperceptible|nonexistent|non-existent|absent|faint)$/u.test(w.text))) return true;
+  // "too faint to find", "too weak to matter": a degree that rules the role out.
+  return after.some((w, k) => w.text === 'too' && after[k + 2]?.text === 'to');
 }
 
 /** The thing set against the agent in its clause: "not Y", "rather than Y", "instead of Y". */
@@ -166,6 +169,32 @@ function cleftFocus(s: ReadSentence, agent: Thing | undefined): Thing | undefine
   // "It was the orbit, and nothing else, that warmed...": the relative word may follow an aside.
   const rest = s.words.slice(focus.last + 1, focus.last + 9).map((w) => w.text);
   return rest.some((w) => /^(?:that|which|who|doing|driving|setting|making)$/u.test(w)) ? focus : undefined;
+}
+
+/**
+ * A pseudo-cleft singles its focus out as the one agent, like a cleft:
+ *   "What ended the ice age was carbon dioxide."          focus after the copula that follows
+ *   "Carbon from the deep ocean was what ended the ice age." focus before the copula that precedes
+ */
+function pseudoCleftFocus(s: ReadSentence, h: LexHit): Thing | undefined {
+  // "what ended", "what finally ended": "what" is the verb's subject ("what a feedback produces" is its object).
+  const adverb = /^(?:\p{L}+ly|then|just|really)$/u.test(s.words[h.first - 1]?.text ?? '');
+  const what = s.words[h.first - 1]?.text === 'what' ? h.first - 1 : adverb && s.words[h.first - 2]?.text === 'what' ? h.first - 2 : -1;
+  if (what < 0) return undefined;
+  // "X was, by itself, what brought…": the copula may stand before an aside.
+  for (let k = what - 1; k >= Math.max(0, what - 5); k -= 1) {
+    if (!COPULAS.has(s.words[k]?.text ?? '')) continue;
+    const clause = s.words[k]?.clause;
+    const own = s.things.filter((t) => t.last < k && t.kind !== 'pronoun');
+    return own.find((t) => s.words[t.first]?.clause === clause) ?? own.at(-1);
+  }
+  for (let k = h.last + 1; k < s.words.length; k += 1) {
+    if (!COPULAS.has(s.words[k]?.text ?? '')) continue;
+    // "What ended the ice ages was the orbit together with CO2": a focus of two is no single agent.
+    const kinds = new Set(s.things.filter((t) => t.first > k && t.kind !== 'pronoun').map((t) => t.kind));
+    return kinds.size > 1 ? undefined : thingAfter(s, k, 4);
+  }
+  return undefined;
 }
 
 /** Denied when an odd number of denials precede; open under a denied inference or "whether". */

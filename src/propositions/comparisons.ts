@@ -2,23 +2,29 @@
  * Comparisons: "the trapped air is older than the ice around it", "polar temperatures swung less
  * than the global mean", "the air is the same age as the ice".
  */
-import { kindOf, subjectOf, thingAfter, thingBefore } from './resolve.js';
+import { inPhrase, kindOf, subjectOf, thingAfter, thingBefore } from './resolve.js';
 import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Comparison } from './types.js';
 
 const SIGN: Record<string, 1 | -1 | 0> = { 'age-up': 1, 'age-down': -1, 'age-same': 0, 'size-up': 1, 'size-down': -1 };
-const SWING = /^(?:swing|swings|swung|change|changes|changed|vary|varies|varied|range|amplitude|shift|shifts|shifted|moved|move|moves|fluctuat\w*|temperature|temperatures)$/u;
+const SWING = /^(?:swing|swings|swung|change|changes|changed|vary|varies|varied|range|amplitude|shift|shifts|shifted|moved|move|moves|fluctuat\w*|respond|responds|responded|react|reacts|reacted|temperature|temperatures)$/u;
 
 /** The comparisons one sentence states (a denied comparison states none). */
 export function readComparisons(s: ReadSentence, previous?: ReadSentence): Comparison[] {
   const out: Comparison[] = [];
-  for (const h of s.of('comparatives')) {
+  const hits = s.of('comparatives');
+  // "more sluggishly" is one comparative, not "more" and another.
+  const longest = hits.filter((h) => !hits.some((o) => o !== h && o.first <= h.first && o.last >= h.last && o.last - o.first > h.last - h.first));
+  for (const h of longest) {
     const sign = SIGN[h.key];
     if (sign === undefined || denialsBefore(s, h.first, 4) % 2 === 1) continue;
     const link = s.words.findIndex((w, i) => i > h.last - (sign === 0 ? 2 : 0) && i <= h.last + 4 && (w.text === 'than' || w.text === 'as'));
     if (link < 0) continue;
     const b = thingAfter(s, link, 6);
-    const a = subjectOf(s, h.first) ?? thingBefore(s, h.first, 'clause');
+    // The subject, not a thing in a phrase before it ("Over the ice ages the poles swung…").
+    const segment = s.words[h.first]?.segment;
+    const plain = s.things.find((t) => t.last < h.first && s.words[t.first]?.segment === segment && t.kind !== 'pronoun' && !inPhrase(s, t));
+    const a = plain ?? subjectOf(s, h.first) ?? thingBefore(s, h.first, 'clause');
     if (a === undefined || b === undefined) continue;
     const attribute = h.key.startsWith('age') ? 'age' : 'size';
     if (attribute === 'size') {

@@ -70,6 +70,9 @@ const AUX_AFTER = /^(?:had|has|have|was|were|is|are|did|does|do|can|could|will|w
  */
 export function subjectBefore(s: ReadSentence, i: number): Thing | undefined {
   const segment = s.words[i]?.segment;
+  // "temperature started climbing before CO2": verbs of change and of starting stand between.
+  const changeVerbs = [...s.of('changes'), ...s.of('causes', 'start')];
+  const stepOver = (k: number): boolean => SKIP.test(s.words[k]?.text ?? '') || changeVerbs.some((h) => h.first <= k && k <= h.last && !s.things.some((t) => t.first <= k && k <= t.last));
   for (let k = i - 1; k >= 0 && s.words[k]?.segment === segment; k -= 1) {
     const thing = s.things.find((t) => t.last === k);
     if (thing !== undefined) {
@@ -82,7 +85,7 @@ export function subjectBefore(s: ReadSentence, i: number): Thing | undefined {
       }
       return thing;
     }
-    if (!SKIP.test(s.words[k]?.text ?? '')) return undefined;
+    if (!stepOver(k)) return undefined;
   }
   return undefined;
 }

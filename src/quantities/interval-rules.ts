@@ -8,7 +8,7 @@
  * word (hundreds → 100), n = the larger of 10% of |v| and half the width H − L (so a small round number
  * such as "one", ±0.5, keeps its precision under "just over"), 1 = a constant. "stated" rows make the first interval from the number as
  * written; it is then converted to the canonical unit, where "hedge" rows widen or cut it (so
- * "around 1750" is 200 ± 20 years before 1950, and "about −30 °C" is −33 to −27 °C).
+ * "around 1750" is 200 ± 5.5 years before 1950, and "about −30 °C" is −31.25 to −28.75 °C).
  */
 
 /** The inputs a bound may use. */
@@ -46,8 +46,8 @@ export const INTERVAL_RULES: readonly IntervalRule[] = [
     why: '"A few centuries" = 2 to 5 centuries; the value is the middle.' },
   { id: 'several', kind: 'stated', words: ['several'], low: { s: 3 }, high: { s: 7 },
     why: '"Several millennia" = 3 to 7 millennia; the value is the middle.' },
-  { id: 'about', kind: 'hedge', words: ['about', 'around', 'roughly', 'some', 'approximately', 'approx.', '~', '∼', '≈', 'c.', 'ca.', 'circa', 'close to', 'an estimated', 'or so'], low: { L: 1, absV: -0.1 }, high: { H: 1, absV: 0.1 },
-    why: 'An approximation: the stated precision, widened by a further 10% of the value each way.' },
+  { id: 'about', kind: 'hedge', words: ['about', 'around', 'roughly', 'some', 'approximately', 'approx.', '~', '∼', '≈', 'c.', 'ca.', 'circa', 'close to', 'an estimated', 'or so'], low: { L: 1, absV: -0.025 }, high: { H: 1, absV: 0.025 },
+    why: 'An approximation: the stated precision, widened by a further 2.5% of the value each way: "about 310 ppm" is 297–323 ppm, too high for the pre-industrial 278 ppm; "about 800,000 years" is 775,000–825,000 years. A 10% margin let errors of 10–15% pass.' },
   { id: 'nearly', kind: 'hedge', words: ['nearly', 'almost', 'just under', 'just below', 'not quite', 'slightly less than', 'slightly under', 'a little under', 'a little less than'], low: { v: 1, n: -1 }, high: { v: 1 },
     why: 'Close to the value from below: within 10% under it, or within its stated precision when that is wider ("nearly two ppm per century" allows 1.5).' },
   { id: 'just-over', kind: 'hedge', words: ['just over', 'just above', 'slightly more than', 'slightly over', 'a little over', 'a little more than'], low: { v: 1 }, high: { v: 1, n: 1 },

@@ -81,7 +81,7 @@ export interface RawPack {
   as_of: string;
   description?: string;
   sources?: RawSource[];
-  terms?: { id: string; words: string[] }[];
+  terms?: { id: string; words: string[]; units?: string[]; unless?: string[] }[];
   reference_values?: RawReferenceValue[];
   direction_facts?: RawDirectionFact[];
   patterns?: RawPattern[];

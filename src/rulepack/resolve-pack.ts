@@ -56,7 +56,7 @@ export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): Rule
   const sections = ['sources', 'terms', 'reference_values', 'direction_facts', 'patterns', 'reasoning_checks'] as const;
   for (const section of sections) reportDuplicates(scope, section, (raw[section] ?? []).map((x) => x.id), known.defined);
 
-  const termList: Term[] = (raw.terms ?? []).map((t) => ({ id: t.id, words: t.words }));
+  const termList: Term[] = (raw.terms ?? []).map((t) => ({ id: t.id, words: t.words, ...(t.units === undefined ? {} : { units: t.units }), ...(t.unless === undefined ? {} : { unless: t.unless }) }));
   const references = (raw.reference_values ?? []).flatMap((r, i) => resolveReference(scope, r, ['reference_values', i]) ?? []);
   const valueIds = new Set((raw.reference_values ?? []).map((r) => r.id));
   (raw.reference_values ?? []).forEach((r, i) => {

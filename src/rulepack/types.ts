@@ -11,6 +11,10 @@ export interface Term {
   id: string;
   /** e.g. `['CO2', 'CO₂', 'carbon dioxide']` */
   words: string[];
+  /** Units whose quantities name this term themselves (a figure in ppm is CO2), e.g. `['ppm']`. */
+  units?: string[];
+  /** Term ids whose presence in the sentence stops `units` from naming this term. */
+  unless?: string[];
 }
 
 /**

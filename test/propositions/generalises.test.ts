@@ -39,6 +39,15 @@ describe('claims read as propositions, in wordings of our own', () => {
     ['Every additional part per million of CO2 heats the planet more than the previous one did.', 'direction.co2-forcing-logarithmic'],
     ['The two curves shadow each other so closely that CO2 must be the thermostat.', 'logic.correlation-as-proof'],
     ['It was the tilt of the orbit, and nothing else, that brought the last glaciation to an end.', 'logic.single-cause'],
+    // Pseudo-clefts, "purely because", "all it took": one agent singled out without "alone".
+    ['What finished off the last glaciation was carbon dioxide and nothing else.', 'logic.single-cause'],
+    ['Carbon welling up from the deep ocean was, on its own, what ended the last ice age.', 'logic.single-cause'],
+    ['The glaciers retreated purely because the orbit shifted; the air had no hand in it.', 'logic.single-cause'],
+    ["A change in Earth's tilt is all it took to end the last ice age.", 'logic.single-cause'],
+    // A role ruled out by degree ("too faint to find"), beside the other direction asserted.
+    ["Warming drives CO2, and CO2's influence on temperature is too weak to detect in the cores.", 'logic.either-or-causation'],
+    // "once" orders two events; "carbon" is the gas.
+    ['Since the carbon only appears once the warming is well under way, none of that warming can be blamed on it.', 'logic.lag-rules-out-cause'],
   ])('%s → %s', async (text, ruleId) => {
     expect(await serious(text)).toContain(ruleId);
   });
@@ -53,6 +62,9 @@ describe('claims read as propositions, in wordings of our own', () => {
     'Each additional ppm adds a little less warming than the one before.',
     'The curves move together, as expected when each amplifies the other, but the match alone proves nothing.',
     'The orbit alone was too weak to end the ice age.',
+    'What ended the ice ages was a combination of orbital changes and CO2.',
+    'The orbit was what set the pace of the ice ages.',
+    'It was CO2 that pulled the planet out of the ice age, after the orbit set things in motion.',
   ])('passes: %s', async (text) => {
     expect(await serious(text)).toEqual([]);
   });
@@ -89,5 +101,17 @@ describe('a draft is on topic because it names the subject', () => {
   it('does not make a claim of an unrelated percentage in a draft that is on topic', async () => {
     const result = await checkText('The Vostok core spans about 420,000 years.\n\nThe shop handles 2.5 percent of our budget.\n', { packs });
     expect(result.claims.map((c) => c.text)).toEqual(['The Vostok core spans about 420,000 years.']);
+  });
+});
+
+describe('order and comparison read past verbs of change and adverbs of degree', () => {
+  // Shakun et al. 2012 (global temperature lagged CO2); Caillon et al. 2003 (air younger than its
+  // ice); Jouzel et al. 2007 and Tierney et al. 2020 (polar swings exceed the global mean).
+  it.each([
+    ['In the last deglaciation the global mean temperature started climbing before CO2 did.', 'direction.global-co2-ahead-of-warming'],
+    ['In the ice-core era the poles respond more sluggishly than the planet as a whole.', 'direction.polar-swings-exceed-global'],
+    ['In an ice core the trapped air has been around longer than the ice that surrounds it.', 'direction.trapped-air-younger-than-ice'],
+  ])('%s → %s', async (text, ruleId) => {
+    expect(await serious(text)).toContain(ruleId);
   });
 });

@@ -36,7 +36,7 @@ describe('the interval table', () => {
     ['plural-magnitude', 'It took thousands of years.', 'thousands of years', 2000, 10000],
     ['a-few', 'It took a few centuries.', 'a few centuries', 200, 500],
     ['several', 'It took several millennia.', 'several millennia', 3000, 7000],
-    ['about', 'It spans about 420,000 years.', 'about 420,000 years', 373000, 467000],
+    ['about', 'It spans about 420,000 years.', 'about 420,000 years', 404500, 435500], // 420,000 ± (5,000 + 2.5% of 420,000)
     ['nearly', 'It spans nearly 100,000 years.', 'nearly 100,000 years', 90000, 100000],
     ['just-over', 'It holds just over 400 ppm.', 'just over 400 ppm', 400, 440],
     ['just-over', 'It comes to a little over one ppm per century.', 'a little over one ppm per century', 0.01, 0.015],

@@ -17,7 +17,9 @@ function detect({ index, read }: DetectInput): Cue[] {
   const single = here.props.causes.find(
     (c) => c.polarity === 'asserted' && c.exclusive && c.role !== 'start' && c.role !== 'amplify' && (c.agent === 'orbit' || c.agent === 'co2') && c.patient !== 'co2',
   );
-  if (single !== undefined) return [{ start: single.start, end: single.end }];
+  // "It was CO2 that pulled the planet out, after the orbit set things in motion": the other factor keeps a role.
+  const other = single === undefined ? undefined : here.props.causes.find((c) => c.polarity === 'asserted' && c !== single && (c.agent === 'orbit' || c.agent === 'co2') && c.agent !== single.agent);
+  if (single !== undefined && other === undefined) return [{ start: single.start, end: single.end }];
   // "Orbital changes, not CO2, caused the warming": one named, the other denied, for the same effect.
   const named = here.props.causes.find((c) => c.polarity === 'asserted' && c.role === 'cause' && (c.agent === 'orbit' || c.agent === 'co2'));
   const denied = here.props.causes.find((c) => c.polarity === 'denied' && c.role === 'cause' && (c.agent === 'orbit' || c.agent === 'co2') && c.agent !== named?.agent && c.start === named?.start);
