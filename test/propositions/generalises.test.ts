@@ -115,3 +115,21 @@ describe('order and comparison read past verbs of change and adverbs of degree',
     expect(await serious(text)).toContain(ruleId);
   });
 });
+
+describe('a record named in a closing "as" clause is the record the sentence reads', () => {
+  // Regional polar records are not global temperature: Jouzel et al. 2007 (EPICA Dome C, Antarctic
+  // swings of about 8-10 °C); Tierney et al. 2020 (global LGM cooling about 6 °C); Buizert et al. 2014
+  // (Greenland's abrupt warmings far larger than the global mean).
+  it.each([
+    'At the end of the Younger Dryas the whole planet warmed by about 10 °C in a few decades, as the Greenland ice records.',
+    'Follow this line and you follow the temperature of the entire Earth for 800,000 years, as preserved in the EPICA Dome C ice.',
+  ])('flags: %s', async (text) => {
+    expect(await serious(text)).toContain('scope.regional-record-as-global');
+  });
+  it.each([
+    'The global mean fell by about 6 °C in the last ice age, as ocean sediment records show.',
+    'Antarctica warmed by about 9 °C, as the Dome C ice records, while the global mean rose by about 5 °C.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).not.toContain('scope.regional-record-as-global');
+  });
+});

@@ -24,7 +24,8 @@ import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isTemperatureFirst } from './queries.js';
 
 /** Verbs and nouns that read a record as something: "shows", "tells us", "is a measure of". */
-const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|recorded|indicates?|measures?|measure|gives?|gave|means?|suggests?|proves?|is|are|was|were|says?|said|thermometers?|stands?|represents?|reflects?|equals?|reads?)$/u;
+const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|recorded|indicates?|measures?|measure|gives?|gave|means?|suggests?|proves?|is|are|was|were|says?|said|thermometers?|stands?|represents?|reflects?|equals?|reads?|written|preserved|captured|logged|registered|history|doubles)$/u;
+const ISOTOPES = /^(?:deuterium|isotope|isotopes|δd|δ18o|d18o)$/u;
 const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degrees?|°c|°f|k|cooler|warmer|colder)$/u;
 const ANAPHORIC_READING = /^(?:this|that|these|it|they|the curve|the record|the graph|the column)\b.{0,20}\b(?:tells?|shows?|means?|suggests?|indicates?|gives?|reveals?)\b/u;
 
@@ -43,7 +44,14 @@ function detectRegional(input: DetectInput): Cue[] {
   // set the two side by side; only a record and the globe in one clause equate them.
   const recordClauses = new Set([...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].map((h) => s.words[h.first]?.clause));
   const anaphoric = !recordIn(here) && record;
-  const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')];
+  const isotopes = s.words.flatMap((w, i) => (ISOTOPES.test(w.text) ? [{ first: i, last: i }] : []));
+  const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland'), ...isotopes];
+  // "…the whole globe warmed by 10 °C, as Greenland's ice records": a closing "as" clause names the
+  // record the whole sentence is read from.
+  const attributed = records.some((r) => {
+    const segment = s.words.filter((w) => w.segment === s.words[r.first]?.segment);
+    return segment[0]?.text === 'as' && segment.some((w) => READING.test(w.text) && w.text !== 'is' && w.text !== 'was');
+  });
   // The record must be read as the globe: both in one segment, or a reading verb between them
   // ("the Vostok core shows that global...", "...is a fair measure of how much the whole Earth warmed").
   const readAs = (g: { first: number; last: number }) =>
@@ -53,7 +61,7 @@ function detectRegional(input: DetectInput): Cue[] {
       return s.words.slice(from, to).some((w) => READING.test(w.text));
     });
   const global = s.of('regions', 'global').find(
-    (g) => anaphoric || (recordClauses.has(s.words[g.first]?.clause) && readAs(g)) || s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text) && w.clause === s.words[g.first]?.clause),
+    (g) => anaphoric || attributed || (recordClauses.has(s.words[g.first]?.clause) && readAs(g)) || isotopes.some((w) => s.words[w.first]?.clause === s.words[g.first]?.clause) || (isotopes.length > 0 && readAs(g)),
   );
   const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text));
   if (!record || global === undefined || !temperature) return [];
