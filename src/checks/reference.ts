@@ -7,9 +7,11 @@
 import { findTerms } from '../claims/bind.js';
 import { midSentence } from '../rulepack/describe-range.js';
 import { levelAt } from '../rulepack/resolve-reference.js';
+import { NIST_SP_811 } from './standard-sources.js';
 import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
 import type { Binding, FlagDraft, Quantity, Verdict } from '../types.js';
 import { correctionFor, shownClaim, shownReference } from './reference-format.js';
+import { unitSlip } from './reference-slips.js';
 
 /** The pack term whose words mark a claim about the present ("today", "now"...). */
 export const TODAY_TERM = 'today';
@@ -40,6 +42,22 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     const distance = relativeDistance(q.low, q.high, r);
     verdicts.push(distance === 0 ? 'agrees' : 'conflicts');
     const older = distance === 0 ? undefined : supersededMatch(r, q, packs);
+    // The right number in the wrong unit ("3,270 feet" for the 3,270 m core): a unit flag says so.
+    const slip = distance === 0 || older !== undefined ? undefined : unitSlip(r, q);
+    if (slip !== undefined) {
+      flags.push({
+        ruleId: 'unit.scale-slip',
+        level: 'error',
+        start: q.start,
+        end: q.end,
+        reason: `${q.text} is out of range for the ${midSentence(r.measures)}, but ${slip.correction} fits it: ${slip.what}.`,
+        claimed: shownClaim(q),
+        reference: shownReference(r, q),
+        correction: slip.correction,
+        sources: [NIST_SP_811, ...r.sources],
+      });
+      continue;
+    }
     const level = older !== undefined ? 'note' : distance === 0 ? undefined : levelAt(r.levels, distance);
     if (level === undefined) continue;
     aboutToday ??= findTerms(sentence, packs).has(TODAY_TERM);

@@ -1,0 +1,45 @@
+/**
+ * The right number in the wrong unit is a unit slip, not a value out of range.
+ * Factors: NIST SP 811 (1 ft = 0.3048 m exactly; SI prefixes k = 10^3, M = 10^6).
+ * Values: the EPICA Dome C core reached 3,270 m (EPICA community members 2004, Nature 429, 623-628,
+ * doi 10.1038/nature02599, from memory); the Pleistocene began 2.58 million years ago (Gibbard et al.
+ * 2010, Journal of Quaternary Science 25, 96-102, doi 10.1002/jqs.1338); global mean CO2 was about
+ * 419 ppm in 2023 (NOAA GML global annual mean, from memory).
+ */
+import { describe, expect, it } from 'vitest';
+import { unitSlip } from '../../src/checks/reference-slips.js';
+import { checkText } from '../../src/engine.js';
+import { parseQuantities } from '../../src/quantities/index.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+
+const packs = await loadPacks([]);
+const flagsOf = async (text: string) => (await checkText(text, { packs, format: 'markdown' })).flags.map((f) => [f.ruleId, f.correction ?? '']);
+
+describe('a unit slip against a reference', () => {
+  it('reads feet written for metres', () => {
+    const [q] = parseQuantities('3,270 feet');
+    expect(unitSlip({ low: 3260, high: 3280, unit: 'm' }, q!)?.correction).toBe('3,270 m');
+  });
+
+  it('reads a thousand-fold slip of a date', () => {
+    const [q] = parseQuantities('2.58 kyr ago');
+    expect(unitSlip({ low: 2_580_000, high: 2_580_000, unit: 'yr BP' }, q!)?.correction).toMatch(/2,580 ka/u);
+  });
+
+  it('finds no slip where no reading fits', () => {
+    const [q] = parseQuantities('1,200 feet');
+    expect(unitSlip({ low: 3260, high: 3280, unit: 'm' }, q!)).toBeUndefined();
+  });
+
+  it('flags the slip through the engine, with the figure in the right unit', async () => {
+    const flags = await flagsOf('The EPICA Dome C ice core was drilled to a depth of 3,270 feet.');
+    expect(flags).toContainEqual(['unit.scale-slip', '3,270 m']);
+    expect(flags.map(([id]) => id)).not.toContain('value.edc-drilled-depth');
+  });
+
+  it('keeps a plain value flag when no unit reading fits', async () => {
+    const flags = await flagsOf('The EPICA Dome C ice core was drilled to a depth of 1,200 metres.');
+    expect(flags.map(([id]) => id).some((id) => id?.startsWith('value.'))).toBe(true);
+    expect(flags.map(([id]) => id)).not.toContain('unit.scale-slip');
+  });
+});
