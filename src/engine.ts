@@ -45,6 +45,8 @@ export interface CheckOptions {
   shard?: Shard;
   /** Called as files are done: how many of how many. */
   onProgress?: (done: number, total: number) => void;
+  /** The folder `include`/`exclude` patterns are relative to (default: `cwd`). */
+  filterRoot?: string;
 }
 
 /** Per-draft settings of `checkDraft`. */
@@ -412,8 +414,9 @@ function pickRun(options: CheckOptions): Pick<CheckOptions, 'jobs' | 'cache' | '
   return picked;
 }
 
-function pickDefined(options: CheckOptions): { include?: string[]; exclude?: string[] } {
-  const picked: { include?: string[]; exclude?: string[] } = {};
+function pickDefined(options: CheckOptions): { include?: string[]; exclude?: string[]; root?: string } {
+  const picked: { include?: string[]; exclude?: string[]; root?: string } = {};
+  if (options.filterRoot !== undefined) picked.root = options.filterRoot;
   if (options.include !== undefined) picked.include = options.include;
   if (options.exclude !== undefined) picked.exclude = options.exclude;
   return picked;

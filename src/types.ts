@@ -27,7 +27,7 @@ export interface Span {
 // source/: drafts as read from disk
 // ---------------------------------------------------------------------------------------------
 
-export const BLOCK_KINDS = ['paragraph', 'heading', 'list-item', 'table-cell', 'blockquote', 'text'] as const;
+export const BLOCK_KINDS = ['paragraph', 'heading', 'list-item', 'table-cell', 'blockquote', 'text', 'front-matter', 'image-text'] as const;
 export type BlockKind = (typeof BLOCK_KINDS)[number];
 
 /**

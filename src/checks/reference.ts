@@ -11,6 +11,7 @@ import { NIST_SP_811 } from './standard-sources.js';
 import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
 import type { Binding, FlagDraft, Quantity, Verdict } from '../types.js';
 import { correctionFor, shownClaim, shownReference } from './reference-format.js';
+import { factorOff, levelWithDistance } from './distance-level.js';
 import { unitSlip } from './reference-slips.js';
 
 /** The pack term whose words mark a claim about the present ("today", "now"...). */
@@ -58,7 +59,7 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
       });
       continue;
     }
-    const level = older !== undefined ? 'note' : distance === 0 ? undefined : levelAt(r.levels, distance);
+    const level = older !== undefined ? 'note' : distance === 0 ? undefined : levelWithDistance(levelAt(r.levels, distance), factorOff(q.low, q.high, r));
     if (level === undefined) continue;
     aboutToday ??= findTerms(sentence, packs).has(TODAY_TERM);
     const reference = shownReference(r, q);

@@ -1,13 +1,17 @@
 /**
- * What `check --require-signoff` and `check --changed-since` add to a run: keep only the claims on
- * changed lines, join claims with the sign-off ledger, let flags on signed-off claims show as signed
- * off without failing the run, and fail while any claim is open or changed since sign-off.
+ * What the ledger and `check --require-signoff` / `--changed-since` add to a run: keep only the
+ * claims on changed lines, join claims with the sign-off ledger (on every run: a waived or approved
+ * flag shows as signed off and does not fail a plain `check`, and a "needs change" comment is a
+ * flag on its claim), and under the gate fail while any claim is open, changed since sign-off or
+ * marked "needs change". The sign-off state becomes `signoff.*` flags, so every report agrees with
+ * the exit status.
  */
 import { relative } from 'node:path';
 import { changedLines, EVERY_LINE } from '../review/changed-lines.js';
 import { describeReview } from '../review/describe-review.js';
 import { readLedger } from '../review/read-ledger.js';
 import { reviewClaims, type ReviewSummary } from '../review/review-claims.js';
+import { SIGNOFF_RULES, signoffFlags } from '../review/review-flags.js';
 import type { CheckResult, Claim, Flag } from '../types.js';
 
 /** How the gate is set up; `ledgerFile` is absolute. */
@@ -24,7 +28,7 @@ export interface GateOutcome {
   result: CheckResult;
   /** Flags that may still fail the run (those on signed-off claims are left out). */
   failingFlags: Flag[];
-  /** True when sign-off is required and some claim is open or stale. */
+  /** True when some claim is marked "needs change", or sign-off is required and some claim is open or stale. */
   failed: boolean;
   /** Lines for the reader: counts, stale claims with old and new wording, open claims. */
   summary: string[];
@@ -41,8 +45,6 @@ export async function applyGate(result: CheckResult, options: GateOptions): Prom
     scoped = onChangedLines(result, changed);
     summary.push(`Changed since ${options.changedSince}: ${scoped.claims.length} of ${result.claims.length} claims are on changed lines.`);
   }
-  if (!options.requireSignoff) return { result: scoped, failingFlags: scoped.flags, failed: false, summary };
-
   const review = reviewClaims(scoped.claims, await readLedger(options.ledgerFile, options.cwd));
   const signedOff = new Map(review.claims.filter((r) => r.status === 'signed off').map((r) => [r.claim.id, r.signoff]));
   const failingFlags: Flag[] = [];
@@ -54,22 +56,31 @@ export async function applyGate(result: CheckResult, options: GateOptions): Prom
     }
     return { ...flag, signoff: { reviewer: entry.reviewer, date: entry.date, decision: entry.decision } };
   });
-  const claims = scoped.claims.map((c) => ({ ...c, flags: flags.filter((f) => f.claimId === c.id) }));
-  summary.push(...describeReview(review));
-  const excused = flags.length - failingFlags.length;
+  const stateFlags = signoffFlags(review.claims, options.requireSignoff);
+  failingFlags.push(...stateFlags);
+  const allFlags = [...flags, ...stateFlags];
+  const claims = scoped.claims.map((c) => ({ ...c, flags: allFlags.filter((f) => f.claimId === c.id) }));
+  const ruleIds = new Set(stateFlags.map((f) => f.ruleId));
+  const rules = [...scoped.rules, ...SIGNOFF_RULES.filter((r) => ruleIds.has(r.id))].sort((a, b) => a.id.localeCompare(b.id));
+  const excused = flags.length - (failingFlags.length - stateFlags.length);
+  if (options.requireSignoff) {
+    summary.push(...describeReview(review));
+  } else if (review.counts['needs change'] > 0) {
+    summary.push(`${review.counts['needs change']} claim${review.counts['needs change'] === 1 ? ' is' : 's are'} marked "needs change" by a reviewer; they fail the run until changed and signed off again.`);
+  }
   if (excused > 0) summary.push(`${excused} flag${excused === 1 ? '' : 's'} on signed-off claims shown as signed off; they do not fail the run.`);
-  summary.push(`Ledger: ${relative(options.cwd, options.ledgerFile) || options.ledgerFile}`);
+  if (options.requireSignoff || excused > 0 || stateFlags.length > 0) summary.push(`Ledger: ${relative(options.cwd, options.ledgerFile) || options.ledgerFile}`);
   return {
-    result: { ...scoped, claims, flags },
+    result: { ...scoped, claims, flags: allFlags, rules },
     failingFlags,
-    failed: review.counts.open + review.counts.stale > 0,
+    failed: stateFlags.length > 0,
     summary,
     review,
   };
 }
 
 /** Keeps claims with a line in `changed`, and the flags that belong to them. */
-function onChangedLines(result: CheckResult, changed: Map<string, Set<number>>): CheckResult {
+export function onChangedLines(result: CheckResult, changed: Map<string, Set<number>>): CheckResult {
   const touches = (file: string, from: number, to: number) => {
     const lines = changed.get(file);
     if (lines === undefined) return false;

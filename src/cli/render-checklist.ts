@@ -2,7 +2,7 @@ import { renderChecklistJson } from '../report/checklist-json.js';
 import { renderChecklistMarkdown } from '../report/checklist-markdown.js';
 import { packVersionOf } from '../review/plan-signoffs.js';
 import { readLedger } from '../review/read-ledger.js';
-import { reviewClaims, type ReviewSummary } from '../review/review-claims.js';
+import { REVIEW_STATUSES, reviewClaims, UNREVIEWED_STATUSES, type ReviewSummary } from '../review/review-claims.js';
 import { ledgerDate } from '../review/signoff-entry.js';
 import type { CheckResult } from '../types.js';
 import { VERSION } from '../version.js';
@@ -21,10 +21,13 @@ export async function renderChecklistOf(
   run: RunSettings,
   format: ChecklistFormat,
   cwd: string,
+  options: { openOnly?: boolean } = {},
 ): Promise<{ text: string; review: ReviewSummary }> {
-  const review = reviewClaims(result.claims, await readLedger(run.ledger, cwd));
+  const full = reviewClaims(result.claims, await readLedger(run.ledger, cwd));
+  // --open: only what still needs the expert (open, changed since sign-off, needs change).
+  const review = options.openOnly === true ? keepUnreviewed(full) : full;
   const text = CHECKLIST_RENDERERS[format]({
-    claims: result.claims,
+    claims: review.claims.map((r) => r.claim),
     review,
     reference: (id) => run.packs.reference(id),
     // The packs with the date their values were last reviewed: a checklist states what it was checked against.
@@ -33,4 +36,10 @@ export async function renderChecklistOf(
     generated: ledgerDate(),
   });
   return { text, review };
+}
+
+function keepUnreviewed(review: ReviewSummary): ReviewSummary {
+  const claims = review.claims.filter((r) => UNREVIEWED_STATUSES.includes(r.status));
+  const counts = Object.fromEntries(REVIEW_STATUSES.map((s) => [s, claims.filter((r) => r.status === s).length])) as ReviewSummary['counts'];
+  return { claims, counts };
 }

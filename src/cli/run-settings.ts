@@ -1,9 +1,11 @@
 import { execFile } from 'node:child_process';
-import { dirname, join, resolve } from 'node:path';
+import { dirname, join, relative, resolve } from 'node:path';
 import { promisify } from 'node:util';
 import { findSettingsFile, loadPacks, loadSettings } from '../rulepack/index.js';
 import type { CheckOptions } from '../engine.js';
-import type { LoadedPacks } from '../rulepack/types.js';
+import type { LoadedPacks, Settings } from '../rulepack/types.js';
+import { closeIds, knownRuleIds } from '../rulepack/known-rule-ids.js';
+import { FirnlineError, FirnlineErrors } from '../errors.js';
 import type { CliContext } from './context.js';
 import type { Level } from '../types.js';
 
@@ -14,7 +16,10 @@ export interface RunSettings {
   include: string[];
   exclude: string[];
   levels: Record<string, Level | 'off'>;
-  failOn: Level | 'never';
+  /** `strict`: the strict preset for publication (cli/strict-preset), failing on errors. */
+  failOn: Level | 'never' | 'strict';
+  /** Who may sign off (firnline.yaml `reviewers`); empty: anyone. */
+  reviewers: { name: string; git?: string }[];
   /** The ledger path: from the settings, else `firnline-signoffs.yaml` in the project root. */
   ledger: string;
   /**
@@ -30,6 +35,7 @@ export async function loadRunSettings(cwd: string, config: string | undefined, e
   const settings = settingsFile === undefined ? undefined : await loadSettings(settingsFile);
   const packFiles = [...(settings?.packs ?? []), ...extraPacks.map((p) => resolve(cwd, p))];
   const packs = await loadPacks(packFiles);
+  if (settings !== undefined) checkLevelIds(settings, packs, cwd);
   const projectRoot = settingsFile === undefined ? ((await gitTopLevel(cwd)) ?? cwd) : dirname(settingsFile);
   return {
     settingsFile,
@@ -40,7 +46,22 @@ export async function loadRunSettings(cwd: string, config: string | undefined, e
     failOn: settings?.failOn ?? 'error',
     ledger: settings?.ledger ?? join(projectRoot, 'firnline-signoffs.yaml'),
     projectRoot,
+    reviewers: settings?.reviewers ?? [],
   };
+}
+
+/** A rule id in `levels` that no pack or check knows is a mistake (most often a misspelling). */
+function checkLevelIds(settings: Settings, packs: LoadedPacks, cwd: string): void {
+  const known = knownRuleIds(packs);
+  const problems = Object.keys(settings.levels)
+    .filter((id) => !known.includes(id))
+    .map((id) => {
+      const close = closeIds(id, known);
+      const hint = close.length > 0 ? `did you mean ${close.map((c) => `\`${c}\``).join(' or ')}?` : 'run `firnline refs` to list the ids';
+      const place = settings.levelPlaces?.[id] ?? { line: 1, column: 1 };
+      return new FirnlineError('settings-unknown-rule', `unknown rule id \`${id}\` in \`levels\`; ${hint}`, { file: relative(cwd, settings.file) || settings.file, ...place });
+    });
+  if (problems.length > 0) throw new FirnlineErrors(problems);
 }
 
 /** The top folder of the git work tree around `cwd`, or undefined outside git (or without git). */
@@ -63,6 +84,8 @@ export function checkOptionsOf(run: RunSettings, ctx: Pick<CliContext, 'cwd' | '
     include: run.include,
     exclude: run.exclude,
     levels: run.levels,
+    // The settings' include/exclude patterns are relative to the settings file, as it says.
+    ...(run.settingsFile === undefined ? {} : { filterRoot: dirname(run.settingsFile) }),
     readStdin: ctx.readStdin,
   };
 }

@@ -44,7 +44,17 @@ export interface ChecklistItem {
   references: (ChecklistRange & { id: string; measures: string; wording: string; asOf?: string })[];
   flags: { ruleId: string; level: Level; reason: string; correction?: string; suggestion?: string }[];
   sources: Source[];
-  signoff: { status: ReviewStatus; reviewer?: string; date?: string; decision?: string; signedOffText?: string };
+  signoff: {
+    status: ReviewStatus;
+    reviewer?: string;
+    date?: string;
+    decision?: string;
+    reason?: string;
+    signedOffText?: string;
+    changes?: string;
+    movedFrom?: string;
+    sharedWith?: string;
+  };
 }
 
 /** The whole checklist. */
@@ -82,7 +92,11 @@ export function toChecklist(input: ChecklistInput): Checklist {
     const signoff: ChecklistItem['signoff'] = { status: reviewed?.status ?? 'open' };
     if (reviewed?.signoff !== undefined) {
       Object.assign(signoff, { reviewer: reviewed.signoff.reviewer, date: reviewed.signoff.date, decision: reviewed.signoff.decision });
+      if (reviewed.signoff.reason !== undefined) signoff.reason = reviewed.signoff.reason;
       if (reviewed.status === 'stale') signoff.signedOffText = reviewed.signoff.text;
+      if (reviewed.changes !== undefined) signoff.changes = reviewed.changes;
+      if (reviewed.movedFrom !== undefined) signoff.movedFrom = reviewed.movedFrom;
+      if (reviewed.sharedWith !== undefined) signoff.sharedWith = reviewed.sharedWith;
     }
     return {
       id: claim.id,
@@ -100,7 +114,7 @@ export function toChecklist(input: ChecklistInput): Checklist {
       signoff,
     };
   });
-  const counts: Checklist['counts'] = { claims: claims.length, files: new Set(claims.map((c) => c.file)).size, agrees: 0, conflicts: 0, 'no reference': 0, 'signed off': 0, stale: 0, open: 0 };
+  const counts: Checklist['counts'] = { claims: claims.length, files: new Set(claims.map((c) => c.file)).size, agrees: 0, conflicts: 0, 'no reference': 0, 'signed off': 0, 'needs change': 0, stale: 0, open: 0 };
   for (const c of claims) {
     counts[c.verdict] += 1;
     counts[c.signoff.status] += 1;

@@ -11,8 +11,8 @@ const WRITER_LINES = [
   /^> /u,
   /^Made by Firnline /u,
   /^\d+ claims? in \d+ files?\. /u,
-  /^- \[ \] \*\*c[0-9a-f]{10}(?:-\d+)?\*\* line \d+: /u,
-  /^ {2}- (?:Values read|Verdict|Flag \(|Sources:|Signed off|Changed since sign-off)/u,
+  /^- \[ \] \*\*c[0-9a-f]{10}(?:-\d+)?\*\* (?:line|paragraph) \d+: /u,
+  /^ {2}- (?:Values read|Verdict|Flag \(|Sources:|Signed off|Needs change|Changed since sign-off|What changed)/u,
   /^ {4}- /u,
 ];
 const INSTRUCTIONS = new Set(SIGN_OFF_INSTRUCTIONS.split('\n'));

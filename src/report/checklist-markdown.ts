@@ -25,7 +25,9 @@ export const SIGN_OFF_INSTRUCTIONS = [
   '**How to sign off.** Check each claim against its sources, then tick its box (`- [x]`). A tick on its',
   'own records the decision `approved`. For another decision, write it on the ticked line in brackets:',
   '`(corrected: what you changed)` or `(waived: why the claim stands as it is)`; add `(note: ...)` for a',
-  'remark. Then run `firnline signoff --from <this file> --by "Your Name"`. Leave the claim ids as they are.',
+  'remark. If a claim must change before it can be signed off, leave its box empty and write',
+  '`(needs change: what must change)` on its line: the editor sees it on the claim and the gate stays red.',
+  'Then run `firnline signoff --from <this file> --by "Your Name"`. Leave the claim ids as they are.',
 ].join('\n');
 
 /**
@@ -48,7 +50,7 @@ export function checklistToMarkdown(checklist: Checklist): string {
     '',
     `Made by Firnline ${checklist.tool.version} on ${checklist.generated.slice(0, 10)}, against the rule packs ${checklist.packs || '(none)'}.`,
     `${plural(counts.claims, 'claim')} in ${plural(counts.files, 'file')}. Verdicts: conflicts ${counts.conflicts}, agrees ${counts.agrees}, no reference ${counts['no reference']}. ` +
-      `Sign-off: signed off ${counts['signed off']}, changed since sign-off ${counts.stale}, open ${counts.open}.`,
+      `Sign-off: signed off ${counts['signed off']}, needs change ${counts['needs change']}, changed since sign-off ${counts.stale}, open ${counts.open}.`,
     '',
     `> ${checklist.cautions}`,
     '',
@@ -72,8 +74,10 @@ export function checklistToMarkdown(checklist: Checklist): string {
 }
 
 function itemLines(item: ChecklistItem): string[] {
+  // A claim whose sign-off holds is shown ticked, with who and when; `signoff --from` leaves it as it is.
+  const box = item.signoff.status === 'signed off' ? '[x]' : '[ ]';
   const where = item.paragraph === undefined ? `line ${item.line}` : `paragraph ${item.paragraph}`;
-  const lines = [`- [ ] **${item.id}** ${where}: ${markdownText(item.sentence)}`];
+  const lines = [`- ${box} **${item.id}** ${where}: ${markdownText(item.sentence)}`];
   const detail = (label: string, text: string) => lines.push(`  - ${label}: ${text}`);
   if (item.values.length > 0) detail('Values read', item.values.map((v) => `"${markdownText(v.text)}" (${range(v)})`).join('; '));
   detail('Verdict', VERDICT_WORDS[item.verdict](item));
@@ -86,8 +90,16 @@ function itemLines(item: ChecklistItem): string[] {
     for (const s of item.sources) lines.push(`    - ${formatSource(s)}`);
   }
   const s = item.signoff;
-  if (s.status === 'signed off') detail('Signed off', `by ${s.reviewer ?? '?'} on ${(s.date ?? '').slice(0, 10)}, ${s.decision ?? ''}`);
-  if (s.status === 'stale') detail('Changed since sign-off', `${s.reviewer ?? '?'} signed off this wording on ${(s.date ?? '').slice(0, 10)}: "${markdownText(s.signedOffText ?? '')}"`);
+  // File names and reviewers' words come from the drafts and the ledger: kept as text, like the sentences.
+  const from = s.movedFrom !== undefined ? ` (moved from ${markdownText(s.movedFrom)})` : s.sharedWith !== undefined ? ` (same sentence in ${markdownText(s.sharedWith)})` : '';
+  const who = markdownText(s.reviewer ?? '?');
+  if (s.status === 'signed off') detail('Signed off', `by ${who} on ${(s.date ?? '').slice(0, 10)}, ${s.decision ?? ''}${from}`);
+  if (s.status === 'needs change') detail('Needs change', `${who} on ${(s.date ?? '').slice(0, 10)}: ${markdownText(s.reason ?? '')}${from}`);
+  if (s.status === 'stale') {
+    const earlier = s.decision === 'needs-change' ? `marked this wording as needing a change (${markdownText(s.reason ?? '')})` : 'signed off this wording';
+    detail('Changed since sign-off', `${who} ${earlier} on ${(s.date ?? '').slice(0, 10)}${from}: "${markdownText(s.signedOffText ?? '')}"`);
+    if (s.changes !== undefined) detail('What changed', markdownText(s.changes));
+  }
   return lines;
 }
 

@@ -3,6 +3,7 @@ import type { CheckResult, Flag, Span } from '../types.js';
 import { reachesFailLevel } from './report-options.js';
 import type { ReportOptions } from './report-options.js';
 import { sortByPlace } from './sort.js';
+import { isSignoffFlag } from '../review/review-flags.js';
 
 /** One JUnit test case: a claim (or a flag no claim owns), or a skipped file. */
 export interface JunitCase {
@@ -34,10 +35,9 @@ export function caseName(place: string, text: string): string {
 }
 
 function splitByFailLevel(flags: Flag[], options: ReportOptions): Pick<JunitCase, 'failures' | 'passed'> {
-  return {
-    failures: flags.filter((flag) => flag.signoff === undefined && reachesFailLevel(flag.level, options.failOn)),
-    passed: flags.filter((flag) => flag.signoff !== undefined || !reachesFailLevel(flag.level, options.failOn)),
-  };
+  // A sign-off flag fails whatever the fail level, as the sign-off gate does.
+  const fails = (flag: Flag) => isSignoffFlag(flag) || (flag.signoff === undefined && reachesFailLevel(flag.level, options.failOn));
+  return { failures: flags.filter(fails), passed: flags.filter((flag) => !fails(flag)) };
 }
 
 /**

@@ -30,19 +30,24 @@ export const LEDGER_HEADER = `${[
  * if not, so no other run's sign-off is ever overwritten.
  */
 export async function appendSignoffs(file: string, entries: SignoffEntry[]): Promise<number> {
-  if (entries.length === 0) return 0;
+  return (await appendSignoffEntries(file, entries)).length;
+}
+
+/** As `appendSignoffs`, returning the entries actually written (the caller reports them by decision). */
+export async function appendSignoffEntries(file: string, entries: SignoffEntry[]): Promise<SignoffEntry[]> {
+  if (entries.length === 0) return [];
   for (let attempt = 0; attempt < 5; attempt += 1) {
     const written = await withFileLock(file, async (lock) => {
       const before = await readOrEmpty(file);
       const ledger = parseLedger(before, file); // refuse to touch a ledger that is already broken
       await refuseReadOnly(file);
       const fresh = entries.filter((entry) => !alreadyRecorded(ledger.signoffs, entry));
-      if (fresh.length === 0) return 0;
+      if (fresh.length === 0) return [];
       let after = appendToLedgerText(before, fresh);
       if (before.includes('\r\n')) after = after.replace(/\r?\n/gu, '\r\n');
       if (!(await lock.stillHeld()) || (await readOrEmpty(file)) !== before) return undefined;
       await writeFileAtomic(file, after, 'the sign-off ledger');
-      return fresh.length;
+      return fresh;
     });
     if (written !== undefined) return written;
   }

@@ -9,6 +9,9 @@ import type { Claim } from '../types.js';
 import { foldClaimText } from './claim-id.js';
 import { DECISIONS_NEEDING_REASON, type Decision, type Ledger, type SignoffEntry } from './signoff-entry.js';
 
+/** What the reason of each decision says, for the error when it is missing. */
+const REASON_WORDS: Partial<Record<Decision, string>> = { waived: 'why the claim stands', corrected: 'what was corrected', 'needs-change': 'what must change' };
+
 /** One sign-off asked for; `where` places errors (a checklist line, or the command line). */
 export interface SignoffRequest {
   claimId: string;
@@ -44,7 +47,7 @@ export function planSignoffs(requests: SignoffRequest[], claims: Claim[], ledger
       throw new FirnlineError('signoff-unknown-claim', `claim ${request.claimId} is not in the drafts as they stand now (changed or removed?); make the checklist again with \`firnline checklist\``, request.where);
     }
     if (DECISIONS_NEEDING_REASON.includes(request.decision) && (request.reason ?? '').trim() === '') {
-      throw new FirnlineError('signoff-no-reason', `a ${request.decision} sign-off needs a reason: say ${request.decision === 'waived' ? 'why the claim stands' : 'what was corrected'}`, request.where);
+      throw new FirnlineError('signoff-no-reason', `a ${request.decision} sign-off needs a reason: say ${REASON_WORDS[request.decision] ?? 'why'}`, request.where);
     }
     const entry: SignoffEntry = {
       claim: claim.id,

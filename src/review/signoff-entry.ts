@@ -4,12 +4,16 @@
  * is one line here and one in the schema.
  */
 
-/** An expert's decision on one claim. */
-export const DECISIONS = ['approved', 'corrected', 'waived'] as const;
+/**
+ * An expert's decision on one claim. `needs-change` is not a sign-off: the claim must change, and
+ * the gate stays red until it has changed and been signed off again; its reason is the comment the
+ * editor sees on the claim.
+ */
+export const DECISIONS = ['approved', 'corrected', 'waived', 'needs-change'] as const;
 export type Decision = (typeof DECISIONS)[number];
 
-/** Decisions that must say why (what was corrected, or why the claim stands). */
-export const DECISIONS_NEEDING_REASON: readonly Decision[] = ['corrected', 'waived'];
+/** Decisions that must say why (what was corrected, why the claim stands, what must change). */
+export const DECISIONS_NEEDING_REASON: readonly Decision[] = ['corrected', 'waived', 'needs-change'];
 
 /** One recorded sign-off. */
 export interface SignoffEntry {
@@ -26,6 +30,8 @@ export interface SignoffEntry {
   note?: string;
   /** The rule packs checked against, e.g. `paleoclimate 1.0.0`. */
   packVersion: string;
+  /** The git identity (`Name <email>`) that ran `firnline signoff`, when it ran in a git work tree. */
+  gitIdentity?: string;
 }
 
 /** The ledger as read: its entries in file order (oldest first). */
@@ -45,6 +51,7 @@ const KEYS: readonly (readonly [keyof SignoffEntry, string])[] = [
   ['date', 'date'],
   ['note', 'note'],
   ['packVersion', 'pack_version'],
+  ['gitIdentity', 'git_identity'],
 ];
 
 /** The entry as a plain YAML mapping, keys in ledger order, absent optional keys left out. */

@@ -30,8 +30,9 @@ interface RawSettings {
   exclude?: string[];
   packs?: string[];
   levels?: Record<string, Level | 'off'>;
-  fail_on?: Level | 'never';
+  fail_on?: Level | 'never' | 'strict';
   ledger?: string;
+  reviewers?: { name: string; git?: string }[];
 }
 
 /** Reads and checks a settings file; every mistake is thrown together as FirnlineErrors. */
@@ -55,6 +56,8 @@ export async function loadSettings(file: string): Promise<Settings> {
     levels: raw.levels ?? {},
     ...(raw.fail_on === undefined ? {} : { failOn: raw.fail_on }),
     ...(raw.ledger === undefined ? {} : { ledger: resolve(folder, raw.ledger) }),
+    ...(raw.reviewers === undefined ? {} : { reviewers: raw.reviewers }),
+    levelPlaces: Object.fromEntries(Object.keys(raw.levels ?? {}).map((id) => [id, yaml.locate(['levels', id], 'key')])),
   };
 }
 
@@ -97,10 +100,17 @@ levels: {}
 #  value.co2-lgm: error
 #  logic.lag-rules-out-cause: note
 
-# Lowest level that makes the exit status 1: error, warning, note or never.
+# Lowest level that makes the exit status 1: error, warning, note or never; or strict, the preset
+# for publication (every conflicting value and every reasoning error is an error).
 fail_on: error
 
 # Where expert sign-offs are kept.
 ledger: firnline-signoffs.yaml
+
+# Who may sign off claims (firnline signoff --by NAME). Empty: anyone. With \`git\`, the reviewer may
+# sign only from a git work tree whose user.email is that address.
+reviewers: []
+#  - name: Dr A. Rahman
+#    git: a.rahman@example.org
 `;
 }

@@ -185,7 +185,11 @@ export interface Settings {
   packs: string[];
   /** Level overrides per rule id; `off` turns a rule off. */
   levels: Record<string, Level | 'off'>;
-  failOn?: Level | 'never';
+  failOn?: Level | 'never' | 'strict';
   /** Sign-off ledger (absolute path). */
   ledger?: string;
+  /** Who may sign off; empty: anyone. */
+  reviewers?: { name: string; git?: string }[];
+  /** Where each `levels` key stands in the file (1-based), for errors found once the packs are loaded. */
+  levelPlaces?: Record<string, { line: number; column: number }>;
 }

@@ -12,12 +12,17 @@
 /** The decoded text, or what stops it being read with the place of the first bad byte. */
 export type DecodedText = { text: string; encoding: 'utf-8' | 'utf-16le' | 'utf-16be' } | { problem: string; line?: number; column?: number };
 
+/** The header signature of an OLE compound file, as a legacy .doc is ([MS-CFB] section 2.2). */
+const OLE_SIGNATURE = [0xd0, 0xcf, 0x11, 0xe0, 0xa1, 0xb1, 0x1a, 0xe1] as const;
 const UTF8 = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true });
 const UTF16LE = new TextDecoder('utf-16le', { fatal: true, ignoreBOM: true });
 const UTF16BE = new TextDecoder('utf-16be', { fatal: true, ignoreBOM: true });
 
 /** Reads `bytes` as UTF-8 or BOM-marked UTF-16 (see the module comment). */
 export function decodeDraftBytes(bytes: Uint8Array): DecodedText {
+  if (OLE_SIGNATURE.every((b, i) => bytes[i] === b)) {
+    return { problem: 'a Word 97-2003 document (or another OLE compound file), which Firnline does not read; save it as .docx or as UTF-8 text, then check it again' };
+  }
   if (bytes[0] === 0xff && bytes[1] === 0xfe) return decodeWide(UTF16LE, bytes, 'utf-16le');
   if (bytes[0] === 0xfe && bytes[1] === 0xff) return decodeWide(UTF16BE, bytes, 'utf-16be');
   let text: string | undefined;

@@ -7,10 +7,12 @@ import { createPathFilter, isIgnored, rulesForFolder, toPosixPath, type IgnoreRu
 /** File endings taken when walking a folder (any file named directly is taken whatever its ending). */
 export const DRAFT_EXTENSIONS = ['.md', '.markdown', '.txt', '.html', '.htm', '.docx'] as const;
 
-/** Which files a folder walk keeps: gitignore-style globs relative to the working folder. */
+/** Which files a folder walk keeps: gitignore-style globs relative to `root` (default: the working folder). */
 export interface DraftFilters {
   include?: string[];
   exclude?: string[];
+  /** The folder the patterns are relative to: the settings file's folder. */
+  root?: string;
 }
 
 type PathFilter = ReturnType<typeof createPathFilter>;
@@ -24,7 +26,7 @@ type PathFilter = ReturnType<typeof createPathFilter>;
  */
 export async function findDrafts(paths: string[], workingFolder: string, options: DraftFilters = {}): Promise<{ files: string[]; outside?: string[] }> {
   const cwd = resolve(workingFolder);
-  const filter = createPathFilter(cwd, options.include, options.exclude);
+  const filter = createPathFilter(options.root === undefined ? cwd : resolve(options.root), options.include, options.exclude);
   const found = new Set<string>();
   const outside = new Set<string>();
   const errors: FirnlineError[] = [];

@@ -6,6 +6,7 @@ import { frontmatter } from 'micromark-extension-frontmatter';
 import { gfm } from 'micromark-extension-gfm';
 import type { BlockKind, ProseBlock } from '../types.js';
 import { appendGap, appendValue, finishBlock, startBlockText, type BlockText } from './block-text.js';
+import { frontMatterBlocks, htmlTextBlocks, imageBlocks, isTable, tableBlocks } from './markdown-published.js';
 
 const PARSE_OPTIONS = {
   extensions: [gfm(), frontmatter(['yaml', 'toml'])],
@@ -42,7 +43,9 @@ const REMOVED_INLINE = new Set<string>(['inlineCode', 'html', 'break', 'image', 
 /**
  * The prose of a Markdown draft (CommonMark + GFM tables, strikethrough and autolinks, YAML or TOML
  * front matter), one block per paragraph, heading or table cell, in document order, with markup
- * removed and every character mapped to its UTF-16 index in `text`.
+ * removed and every character mapped to its UTF-16 index in `text`. Text a page publishes outside
+ * its paragraphs is read too (source/markdown-published): published YAML front-matter fields,
+ * image alt text and captions, and table cells read with their row and column headers.
  *
  *     readMarkdownBlocks('# Cores\n\nThe **EPICA** core')
  *     // [{ kind: 'heading', text: 'Cores', ... }, { kind: 'paragraph', text: 'The EPICA core',
@@ -74,6 +77,17 @@ function visitBlocks(parent: Parents, containerKind: BlockKind, walk: Walk): voi
       walk.pendingMark = true;
       continue;
     }
+    // Published text outside paragraphs: front-matter fields, alt text and captions in HTML, tables.
+    const start = (node.position?.start.offset ?? 0) + walk.base;
+    if (node.type === 'yaml') walk.blocks.push(...frontMatterBlocks(node, walk.text, start));
+    if (node.type === 'html') walk.blocks.push(...htmlTextBlocks(node, walk.text, start, walk.heading));
+    if (isTable(node)) {
+      const cells = node.children.map((row) => row.children.map((cell) => proseBlockOf(cell, 'table-cell', walk)));
+      const marked = walk.marking || walk.pendingMark;
+      walk.pendingMark = false;
+      walk.blocks.push(...tableBlocks(cells).map((b) => (marked ? { ...b, marked: true } : b)));
+      continue;
+    }
     if (NOT_PROSE.has(node.type)) continue;
     const proseKind = PROSE_NODES[node.type];
     if (proseKind !== undefined && 'children' in node) {
@@ -82,12 +96,11 @@ function visitBlocks(parent: Parents, containerKind: BlockKind, walk: Walk): voi
       const inlineMark = first?.type === 'html' && REPORTED_MARKER.test(first.value.trim());
       const marked = walk.marking || walk.pendingMark || inlineMark;
       walk.pendingMark = false;
-      const builder = startBlockText();
-      for (const child of node.children) collectInline(child, builder, walk);
       const isHeading = node.type === 'heading';
-      const block = finishBlock(builder, kind, isHeading ? '' : walk.heading);
+      const block = proseBlockOf(node, kind, walk);
       if (isHeading) walk.heading = block?.text ?? '';
       if (block !== undefined) walk.blocks.push({ ...block, ...(isHeading ? { heading: block.text } : {}), ...(marked ? { marked: true } : {}) });
+      walk.blocks.push(...inlineImageText(node, walk));
     } else if ('children' in node) {
       const outer = walk.marking;
       walk.marking = outer || walk.pendingMark;
@@ -96,6 +109,27 @@ function visitBlocks(parent: Parents, containerKind: BlockKind, walk: Walk): voi
       walk.marking = outer;
     }
   }
+}
+
+/** One prose block from a node's phrasing content (undefined when it holds no text). */
+function proseBlockOf(node: Parents, kind: BlockKind, walk: Walk): ProseBlock | undefined {
+  const builder = startBlockText();
+  for (const child of node.children) collectInline(child as Nodes, builder, walk);
+  return finishBlock(builder, kind, node.type === 'heading' ? '' : walk.heading);
+}
+
+/** The alt text and titles of images, and alt text and captions in inline HTML, inside a block. */
+function inlineImageText(node: Nodes, walk: Walk): ProseBlock[] {
+  if (!('children' in node)) return [];
+  const blocks: ProseBlock[] = [];
+  for (const child of node.children as Nodes[]) {
+    const start = (child.position?.start.offset ?? 0) + walk.base;
+    const end = (child.position?.end.offset ?? 0) + walk.base;
+    if (child.type === 'image') blocks.push(...imageBlocks(child, walk.text, start, end, walk.heading));
+    else if (child.type === 'html') blocks.push(...htmlTextBlocks(child, walk.text, start, walk.heading));
+    else blocks.push(...inlineImageText(child, walk));
+  }
+  return blocks;
 }
 
 function collectInline(node: Nodes, builder: BlockText, walk: Walk): void {

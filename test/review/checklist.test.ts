@@ -7,6 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { FirnlineError } from '../../src/errors.js';
 import { toChecklist } from '../../src/report/checklist-json.js';
 import { checklistToMarkdown, renderChecklistMarkdown } from '../../src/report/checklist-markdown.js';
+import { readChecklistBoxes } from '../../src/report/checklist-remarks.js';
 import { parseTickedChecklist } from '../../src/report/checklist-ticks.js';
 import { reviewClaims } from '../../src/review/review-claims.js';
 import type { ReferenceValue } from '../../src/rulepack/types.js';
@@ -54,7 +55,7 @@ describe('checklist --format json', () => {
       ['drafts/a-letters.md', 7, 'no reference', 'signed off'],
       [F, 3, 'conflicts', 'open'],
     ]);
-    expect(list.counts).toEqual({ claims: 2, files: 2, agrees: 0, conflicts: 1, 'no reference': 1, 'signed off': 1, stale: 0, open: 1 });
+    expect(list.counts).toEqual({ claims: 2, files: 2, agrees: 0, conflicts: 1, 'no reference': 1, 'signed off': 1, 'needs change': 0, stale: 0, open: 1 });
     expect(list.claims[1]?.sources.map((s) => s.id)).toEqual(['jouzel2007']);
   });
 });
@@ -84,7 +85,7 @@ describe('checklist --format markdown', () => {
     expect(markdown).toContain('> Firnline supports, and does not replace, expert review. Reference values carry uncertainty and dates');
   });
 
-  it('is read as GitHub Flavored Markdown task-list items, one unchecked box per claim (GFM spec, task list items extension)', () => {
+  it('is read as GitHub Flavored Markdown task-list items, one box per claim, ticked when its sign-off holds (GFM spec, task list items extension)', () => {
     const tree = fromMarkdown(markdown, { extensions: [gfm()], mdastExtensions: [gfmFromMarkdown()] });
     const boxes: (boolean | null | undefined)[] = [];
     const walk = (node: { type: string; checked?: boolean | null; children?: unknown[] }) => {
@@ -92,20 +93,23 @@ describe('checklist --format markdown', () => {
       for (const child of node.children ?? []) walk(child as typeof node);
     };
     walk(tree);
-    expect(boxes).toEqual([false, false]);
+    expect(boxes).toEqual([true, false]);
   });
 });
 
 describe('parseTickedChecklist', () => {
   const markdown = checklistToMarkdown(toChecklist(input));
 
-  it('reads nothing from an untouched checklist', () => {
-    expect(parseTickedChecklist(markdown)).toEqual([]);
+  it('reads from an untouched checklist only the boxes Firnline ticked, which say they are already signed off', () => {
+    const ticked = parseTickedChecklist(markdown);
+    const boxes = readChecklistBoxes(markdown);
+    expect(ticked.map((t) => t.claimId)).toEqual(boxes.filter((b) => b.alreadySignedOff).map((b) => b.claimId));
+    expect(boxes.filter((b) => b.ticked && !b.alreadySignedOff)).toEqual([]);
   });
 
   it('reads a tick as approved, with its file section, even after the line was reflowed', () => {
     const ticked = markdown.replace(`- [ ] **${span.id}** line 3: The Dome C core reaches back about 420,000 years.`, `* [X] **${span.id}** line 3: The Dome C core\n  reaches back about 420,000 years.`);
-    expect(parseTickedChecklist(ticked)).toEqual([{ claimId: span.id, file: F, decision: 'approved', line: ticked.split('\n').findIndex((l) => l.startsWith('* [X]')) + 1 }]);
+    expect(parseTickedChecklist(ticked)).toContainEqual({ claimId: span.id, file: F, decision: 'approved', line: ticked.split('\n').findIndex((l) => l.startsWith('* [X]')) + 1 });
   });
 
   it.each([

@@ -27,7 +27,7 @@ describe('reviewClaims', () => {
       [span.id, 'signed off'],
       [rise.id, 'open'],
     ]);
-    expect(review.counts).toEqual({ 'signed off': 1, stale: 0, open: 1 });
+    expect(review.counts).toEqual({ 'signed off': 1, 'needs change': 0, stale: 0, open: 1 });
   });
 
   it('keeps a sign-off when the claim moved to another line: the id does not hold a line number', () => {
@@ -39,13 +39,16 @@ describe('reviewClaims', () => {
     const edited = makeClaim(F, 3, 'The Dome C core reaches back about 800,000 years.');
     const review = reviewClaims([edited, rise], { file: 'l.yaml', signoffs: [approve(span), approve(rise)] });
     expect(review.claims[0]).toMatchObject({ status: 'stale', signoff: { claim: span.id, text: span.text } });
-    expect(review.counts).toEqual({ 'signed off': 1, stale: 1, open: 0 });
+    expect(review.counts).toEqual({ 'signed off': 1, 'needs change': 0, stale: 1, open: 0 });
   });
 
-  it('does not call a claim stale after a sign-off in another file, or after one its claim still carries', () => {
+  it('does not call a claim stale after a sign-off in another file of the run, or after one its claim still carries', () => {
     const edited = makeClaim(F, 3, 'The Dome C core reaches back about 800,000 years.');
+    const other = makeClaim('drafts/other.md', 1, 'Sea level stood lower in the last ice age.');
     const elsewhere = { ...approve(span), file: 'drafts/other.md' };
-    expect(reviewClaims([edited], { file: 'l.yaml', signoffs: [elsewhere] }).claims[0]?.status).toBe('open');
+    expect(reviewClaims([edited, other], { file: 'l.yaml', signoffs: [elsewhere] }).claims[0]?.status).toBe('open');
+    // A file that is not in the run any more was renamed or moved: its sign-offs follow the claims.
+    expect(reviewClaims([edited], { file: 'l.yaml', signoffs: [elsewhere] }).claims[0]).toMatchObject({ status: 'stale', movedFrom: 'drafts/other.md' });
     expect(reviewClaims([edited, span], { file: 'l.yaml', signoffs: [approve(span)] }).claims[0]?.status).toBe('open');
   });
 
@@ -59,5 +62,39 @@ describe('reviewClaims', () => {
   it('lets the latest entry for a claim count', () => {
     const later = { ...approve(span, 'J. Berg', '2025-03-01'), decision: 'waived' as const, reason: 'quoted to answer it' };
     expect(reviewClaims([span], { file: 'l.yaml', signoffs: [approve(span), later] }).claims[0]?.signoff).toEqual(later);
+  });
+});
+
+describe('reviewClaims: sign-offs that survive harmless change (issue 15)', () => {
+  // Invented panel text; the value is the accepted one (EPICA Dome C ~800,000 years: Jouzel et al. 2007, Science 317, 793).
+  const TEXT = 'The Dome C core reaches back about 800,000 years – eight glacial cycles.';
+  const old = makeClaim('drafts/hall.md', 3, TEXT);
+
+  it('follows a renamed file and says where the sign-off came from', () => {
+    const moved = makeClaim('drafts/exhibits/hall.md', 3, TEXT);
+    expect(reviewClaims([moved], { file: 'l.yaml', signoffs: [approve(old)] }).claims[0]).toMatchObject({ status: 'signed off', movedFrom: 'drafts/hall.md' });
+  });
+
+  it('keeps a sign-off through a copy-edit, and reopens a meaning change with the words marked', () => {
+    const edited = makeClaim('drafts/hall.md', 3, TEXT.replace(' – ', ' - '));
+    expect(reviewClaims([edited], { file: 'l.yaml', signoffs: [approve(old)] }).claims[0]).toMatchObject({ status: 'signed off', copyEdited: true });
+    const changed = makeClaim('drafts/hall.md', 3, TEXT.replace('about', 'nearly'));
+    expect(reviewClaims([changed], { file: 'l.yaml', signoffs: [approve(old)] }).claims[0]).toMatchObject({
+      status: 'stale',
+      changes: 'The Dome C core reaches back [about → nearly] 800,000 years – eight glacial cycles.',
+    });
+  });
+
+  it('lets one sign-off cover the same sentence in several files', () => {
+    const twin = makeClaim('drafts/leaflet.md', 8, TEXT);
+    const review = reviewClaims([old, twin], { file: 'l.yaml', signoffs: [approve(old)] });
+    expect(review.claims.map((r) => [r.status, r.sharedWith])).toEqual([['signed off', undefined], ['signed off', 'drafts/hall.md']]);
+  });
+
+  it('keeps a needs-change comment until the claim changes, then calls it changed since', () => {
+    const comment = { ...approve(old), decision: 'needs-change' as const, reason: 'Dome C spans 800,000 years but only about eight cycles are resolved' };
+    expect(reviewClaims([old], { file: 'l.yaml', signoffs: [comment] }).counts).toMatchObject({ 'needs change': 1, 'signed off': 0 });
+    const fixed = makeClaim('drafts/hall.md', 3, TEXT.replace('eight', 'about eight'));
+    expect(reviewClaims([fixed], { file: 'l.yaml', signoffs: [comment] }).claims[0]).toMatchObject({ status: 'stale', signoff: comment });
   });
 });

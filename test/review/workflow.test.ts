@@ -15,7 +15,7 @@ describe('the sign-off workflow in a fresh git repository (issue 6, "Done when")
     // 1. Nothing signed off yet: the gate fails and says how many claims are open.
     const first = await firnline(dir, 'check', 'drafts', '--require-signoff');
     expect(first.code).toBe(1);
-    expect(first.out).toMatch(/Sign-off: 0 of (\d+) claims signed off; \1 claims open, 0 changed since sign-off\./u);
+    expect(first.out).toMatch(/Sign-off: 0 of (\d+) claims signed off; \1 claims open, 0 changed since sign-off, 0 marked needs change\./u);
 
     // 2. The checklist is written, every box ticked, and imported.
     expect((await firnline(dir, 'checklist', 'drafts', '-o', 'checklist.md')).code).toBe(0);
@@ -29,7 +29,7 @@ describe('the sign-off workflow in a fresh git repository (issue 6, "Done when")
 
     // 3. The gate passes.
     const signed = await firnline(dir, 'check', 'drafts', '--require-signoff');
-    expect(signed.out).toContain(`Sign-off: ${boxes.length} of ${boxes.length} claims signed off; 0 claims open, 0 changed since sign-off.`);
+    expect(signed.out).toContain(`Sign-off: ${boxes.length} of ${boxes.length} claims signed off; 0 claims open, 0 changed since sign-off, 0 marked needs change.`);
     expect(signed.code).toBe(0);
 
     // 4. Moving the paragraphs (and reflowing one sentence over two lines) keeps it passing.
@@ -42,7 +42,7 @@ describe('the sign-off workflow in a fresh git repository (issue 6, "Done when")
     await writeFile(join(dir, 'drafts', 'ice-hall.md'), moved.replace('185 ppm', '190 ppm'));
     const stale = await firnline(dir, 'check', 'drafts', '--require-signoff');
     expect(stale.code).toBe(1);
-    expect(stale.out).toContain(`0 claims open, 1 changed since sign-off.`);
+    expect(stale.out).toContain(`0 claims open, 1 changed since sign-off, 0 marked needs change.`);
     expect(stale.out).toMatch(/changed since sign-off: drafts\/ice-hall\.md:5:1 c[0-9a-f]{10} \(signed off by R\. Okafor on \d{4}-\d\d-\d\d, approved\)/u);
     expect(stale.out).toContain(`  signed off: ${LGM}\n  now:        ${LGM_EDITED}\n`);
 

@@ -28,6 +28,8 @@ describe('firnline.yaml', () => {
       levels: { 'value.co2-lgm': 'error', 'logic.lag-rules-out-cause': 'off' },
       failOn: 'note',
       ledger: join(root, 'review', 'signoffs.yaml'),
+      // Where each levels key stands (line 3, inside the flow mapping), for errors found once the packs are loaded.
+      levelPlaces: { 'value.co2-lgm': { line: 3, column: 11 }, 'logic.lag-rules-out-cause': { line: 3, column: 33 } },
     });
   });
 
@@ -38,7 +40,7 @@ describe('firnline.yaml', () => {
       (e: unknown) => (e as FirnlineErrors).errors.map((x) => x.toLine().slice(root.length + 1)),
     );
     expect(lines).toEqual([
-      'firnline.yaml:2:10: `fail_on` must be one of: error, warning, note, never',
+      'firnline.yaml:2:10: `fail_on` must be one of: error, warning, note, never, strict',
       'firnline.yaml:4:18: `value.co2-lgm` must be one of: error, warning, note, off',
       'firnline.yaml:5:1: unknown key `colour`; see docs/rule-packs.md for the keys',
     ]);

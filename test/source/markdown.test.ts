@@ -102,6 +102,7 @@ describe('readMarkdownBlocks: what counts as prose', () => {
 
   it('keeps each block with markup removed, inline code and HTML as one space, soft breaks as \\n', () => {
     expect(draft.blocks.map(({ kind, text }) => [kind, text])).toEqual([
+      ['front-matter', 'Firn notes 280 ppm'],
       ['heading', 'Ice cores and CO₂'],
       ['paragraph', 'The Vostok core spans 420,000 years* of air.\nSee the EPICA record & old more.\nDome C   reached 3,270 m   deep.'],
       ['blockquote', 'Quoted 180 ppm\ncontinues’s here'],
@@ -110,15 +111,16 @@ describe('readMarkdownBlocks: what counts as prose', () => {
       ['table-cell', 'Record'],
       ['table-cell', 'Span'],
       ['table-cell', 'Vostok'],
-      ['table-cell', '420 kyr'],
+      ['table-cell', 'Vostok, Span: 420 kyr'],
       ['table-cell', 'EPICA|C'],
-      ['table-cell', '800 kyr'],
+      ['table-cell', 'EPICA|C, Span: 800 kyr'],
       ['paragraph', 'Visit   or   today.\n  after.'],
+      ['image-text', 'glacier 999'],
     ]);
   });
 
   it.each([
-    ['front matter', 'Firn notes'],
+    ['front matter that is not published', 'tags'],
     ['an HTML comment block', 'editor: check'],
     ['an inline HTML comment', '190 ppm'],
     ['a fenced code block', 'code 280'],
@@ -126,7 +128,7 @@ describe('readMarkdownBlocks: what counts as prose', () => {
     ['an angle-bracket autolink', 'example.org/x'],
     ['a literal www autolink', 'www.example.org'],
     ['a link address', 'example.org/epica'],
-    ['image alt text', 'glacier 999'],
+    ['an image address', 'g.png'],
   ])('leaves out %s', (_what, words) => {
     expect(proseOf(draft).join('\n')).not.toContain(words);
   });

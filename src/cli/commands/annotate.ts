@@ -55,7 +55,8 @@ export function registerAnnotate(program: Command, ctx: CliContext): void {
         `Wrote ${flags.output}: ${countOf(s.flags, 'comment')} (${countOf(s.error, 'error')}, ${countOf(s.warning, 'warning')}, ` +
           `${countOf(s.note, 'note')}) on ${countOf(s.claims, 'claim')} of ${draft}. Comments are suggestions for an editor; the sources are what to read.\n`,
       );
-      ctx.exitCode = exitCodeFor(result.flags, flags.failOn ?? run.failOn);
+      const failOn = flags.failOn ?? run.failOn;
+      ctx.exitCode = exitCodeFor(result.flags, failOn === 'strict' ? 'error' : failOn);
     });
 }
 

@@ -1,16 +1,20 @@
 import type { Command} from 'commander';
 import { Option } from 'commander';
+import { mkdir } from 'node:fs/promises';
+import { dirname } from 'node:path';
 import type { ReportFormat } from '../../report/index.js';
 import { LEVELS, type Level } from '../../types.js';
 import { VERSION } from '../../version.js';
 import type { CliContext } from '../context.js';
+import { applyStrictPreset } from '../strict-preset.js';
+import { describeBreakdown, wantsBreakdown } from '../../report/run-breakdown.js';
 import { outputTarget } from '../../guard/output-target.js';
 import { visibleData, visibleText } from '../../guard/visible-text.js';
 import { reportUnchecked } from '../unchecked.js';
 import { CHECK_FORMATS, parseSpeedFlags, speedOptionsOf, type SpeedFlags } from '../speed-options.js';
 
-// The engine, the packs' schemas and the reporters load inside the action (dynamic import), so
-// `--version` and `--help` start in a few hundredths of a second (bench/).
+// The engine, the packs' schemas, the reporters and the ledger reader load inside the action
+// (dynamic import), so `--version` and `--help` start in a few hundredths of a second (bench/).
 
 interface CheckFlags extends SpeedFlags {
   format: string;
@@ -20,7 +24,10 @@ interface CheckFlags extends SpeedFlags {
   output?: string;
   requireSignoff?: boolean;
   changedSince?: string;
+  strict?: boolean;
+  summary?: boolean;
   absolutePaths?: boolean;
+  force?: boolean;
 }
 
 /** `firnline check [paths...]`: scan drafts, print flags, set the exit status. */
@@ -36,27 +43,32 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('-o, --output <file>', 'write the report to a file instead of standard output')
     .option('--require-signoff', 'exit 1 while any claim lacks a current sign-off in the ledger')
     .option('--changed-since <rev>', 'check only claims on lines changed since a git revision')
+    .option('--summary', 'text format: print the counts by rule and by file instead of each flag (shown after the flags anyway when 20 or more files have flags)')
+    .option('--force', 'with --format markdown -o: replace a checklist even if it holds ticks or comments not yet in the ledger')
     .option('--absolute-paths', 'SARIF: record the working folder as an absolute file URI (off by default, so a shared report does not show the machine\'s folders)')
+    .option('--strict', 'the strict preset for publication: every conflicting value and every reasoning error is an error, and errors fail the run')
     .option('--jobs <n>', 'worker threads for runs over many files (default: the number of cores; 1: no workers)')
     .option('--no-cache', 'neither read nor write the result cache (.firnline-cache/ in the project root)')
     .option('--shard <k/n>', 'check only the k-th of n parts of the files (split by path), for CI matrix jobs; join the reports with `firnline merge`')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
       parseSpeedFlags(flags);
-      const [{ checkPaths }, { renderReport }, { renderChecklistOf }, { applyGate }, { checkOptionsOf, loadRunSettings }, { writeFileAtomic }, { exitCodeFor }] =
+      const [{ checkPaths }, { renderReport }, { renderChecklistOf }, { applyGate }, { checkOptionsOf, loadRunSettings }, { writeFileAtomic }, { exitCodeFor }, { guardChecklistOutput }] =
         await Promise.all([
           import('../../engine.js'), import('../../report/index.js'), import('../render-checklist.js'), import('../gate.js'),
-          import('../run-settings.js'), import('../../write-file-atomic.js'), import('../exit-code.js'),
+          import('../run-settings.js'), import('../../write-file-atomic.js'), import('../exit-code.js'), import('../guard-checklist-output.js'),
         ]);
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
-      const failOn = flags.failOn ?? run.failOn;
+      const strict = flags.strict === true || (flags.failOn === undefined && run.failOn === 'strict');
+      const failOn = flags.failOn ?? (run.failOn === 'strict' ? 'error' : run.failOn);
       const targets = paths !== undefined && paths.length > 0 ? paths : ['.'];
       const speed = await speedOptionsOf(flags, run.projectRoot, ctx);
-      let result;
+      let checked;
       try {
-        result = await checkPaths(targets, { ...checkOptionsOf(run, ctx), ...speed.options });
+        checked = await checkPaths(targets, { ...checkOptionsOf(run, ctx), ...speed.options });
       } finally {
         speed.done();
       }
+      const result = strict ? applyStrictPreset(checked) : checked;
       const gate = await applyGate(result, {
         requireSignoff: flags.requireSignoff === true,
         ...(flags.changedSince === undefined ? {} : { changedSince: flags.changedSince }),
@@ -68,15 +80,24 @@ export function registerCheck(program: Command, ctx: CliContext): void {
       const color = target.stdout && ctx.isTTY && ctx.env.TERM !== 'dumb' && !('NO_COLOR' in ctx.env && ctx.env.NO_COLOR !== '');
       // Text goes to terminals and CI logs: control characters from drafts and file names are shown, never sent.
       const shown = flags.format === 'text' ? visibleData(gate.result) : gate.result;
-      const report =
+      const options = { color, toolVersion: VERSION, failOn, ...(flags.absolutePaths === true ? { srcRoot: ctx.cwd } : {}) };
+      const onlyCounts = flags.summary === true && flags.format === 'text';
+      const full =
         flags.format === 'markdown'
           ? (await renderChecklistOf(gate.result, run, 'markdown', ctx.cwd)).text
-          : renderReport(flags.format as ReportFormat, shown, { color, toolVersion: VERSION, failOn, ...(flags.absolutePaths === true ? { srcRoot: ctx.cwd } : {}) });
-      const summary = gate.summary.length > 0 ? `${gate.summary.map(visibleText).join('\n')}\n` : '';
+          : renderReport(flags.format as ReportFormat, shown, options);
+      // --summary keeps the text report's closing block (skipped files and the count line) only.
+      const report = onlyCounts ? (full.trimEnd().split('\n\n').pop() ?? '') : full;
+      const breakdown = flags.format === 'text' && (onlyCounts || wantsBreakdown(shown)) ? describeBreakdown(shown) : [];
+      const lines = [...breakdown, ...gate.summary.map(visibleText)];
+      const summary = lines.length > 0 ? `${lines.join('\n')}\n` : '';
       if (target.stdout) {
         ctx.stdout(report.endsWith('\n') ? report : `${report}\n`);
         if (summary !== '') (flags.format === 'text' && flags.output === undefined ? ctx.stdout : ctx.stderr)(summary);
       } else {
+        // A checklist written by `check --format markdown` is guarded as `checklist -o` guards it.
+        if (flags.format === 'markdown' && flags.force !== true) await guardChecklistOutput(target.file, run.ledger, ctx.cwd, full, { onlyChecklists: true });
+        await mkdir(dirname(target.file), { recursive: true });
         await writeFileAtomic(target.file, report.endsWith('\n') ? report : `${report}\n`);
         ctx.stderr(summary);
       }

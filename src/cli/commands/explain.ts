@@ -2,6 +2,8 @@ import type { Command } from 'commander';
 import { FirnlineError } from '../../errors.js';
 import { fullReference } from '../../report/format-source.js';
 import { describeRule } from '../../rulepack/describe-rule.js';
+import { closeIds, knownRuleIds } from '../../rulepack/known-rule-ids.js';
+import { SIGNOFF_RULES } from '../../review/review-flags.js';
 import type { CliContext } from '../context.js';
 
 /** `firnline explain <id>`: one rule or reference value in full, with its citations. */
@@ -14,9 +16,11 @@ export function registerExplain(program: Command, ctx: CliContext): void {
     .option('--pack <file>', 'add a rule pack (repeatable)', (v: string, all: string[]) => [...all, v], [] as string[])
     .action(async (id: string, flags: { config?: string; pack: string[] }) => {
       const { packs } = await (await import('../run-settings.js')).loadRunSettings(ctx.cwd, flags.config, flags.pack);
-      const info = describeRule(packs, id) ?? describeRule(packs, `value.${id}`);
+      const info = describeRule(packs, id) ?? describeRule(packs, `value.${id}`) ?? SIGNOFF_RULES.find((r) => r.id === id);
       if (info === undefined) {
-        throw new FirnlineError('unknown-rule', `no rule or reference value has the id \`${id}\`; run \`firnline refs\` to list them`);
+        const close = closeIds(id, knownRuleIds(packs));
+        const hint = close.length > 0 ? `did you mean ${close.map((c) => `\`${c}\``).join(' or ')}? ` : '';
+        throw new FirnlineError('unknown-rule', `no rule or reference value has the id \`${id}\`; ${hint}run \`firnline refs\` or \`firnline refs --reasoning\` to list them`);
       }
       // The full reference (every author, container, pages, link), then the locators and how the value was checked.
       const sources = info.sources.map((s) => {

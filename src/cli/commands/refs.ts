@@ -5,7 +5,7 @@ import { renderBibtex } from '../../cite/render.js';
 import { FirnlineError } from '../../errors.js';
 import { fullReference, formatSource } from '../../report/format-source.js';
 import { describeRange } from '../../rulepack/describe-range.js';
-import type { ReferenceValue } from '../../rulepack/types.js';
+import type { LoadedPacks, ReferenceValue } from '../../rulepack/types.js';
 import type { Source } from '../../types.js';
 import type { CliContext } from '../context.js';
 
@@ -117,6 +117,31 @@ function dueText(due: ReferenceValue[], today: string): string {
   return `${due.length} reference value${due.length === 1 ? ' is' : 's are'} past the review date (today: ${today}); check them against newer sources:\n${lines.join('\n')}\n`;
 }
 
+/** One reasoning rule in `firnline refs --reasoning --format json`. */
+export interface ReasoningEntry {
+  ruleId: string;
+  kind: 'reasoning check' | 'direction fact' | 'pattern rule';
+  level: string;
+  summary: string;
+  sources: Source[];
+}
+
+/** Every reasoning rule of the packs (reasoning checks, direction facts, pattern rules) whose words hold every query word. */
+export function matchingReasoningRules(packs: LoadedPacks, query: string | undefined): ReasoningEntry[] {
+  const words = (query ?? '').toLowerCase().split(/\s+/u).filter((w) => w !== '');
+  const all: ReasoningEntry[] = [
+    ...packs.reasoning.filter((c) => c.enabled).map((c) => ({ ruleId: c.id, kind: 'reasoning check' as const, level: c.level, summary: c.summary, sources: c.sources })),
+    ...packs.directions.map((d) => ({ ruleId: `direction.${d.id}`, kind: 'direction fact' as const, level: d.level, summary: d.statement, sources: d.sources })),
+    ...packs.patterns.map((p) => ({ ruleId: p.id, kind: 'pattern rule' as const, level: p.level, summary: p.reason, sources: p.sources })),
+  ];
+  return all.filter((r) => words.every((w) => `${r.ruleId} ${r.summary}`.toLowerCase().includes(w)));
+}
+
+function reasoningText(r: ReasoningEntry): string {
+  const cites = r.sources.map((s) => `    ${formatSource(s)}`).join('\n');
+  return `${r.ruleId} (${r.kind}, ${r.level})\n  ${r.summary}\n${cites}${cites === '' ? '' : '\n'}`;
+}
+
 /** Today's date (UTC) from the clock, or the `--today` date a test or an editor gives. */
 function todayOf(given: string | undefined): string {
   if (given === undefined) return new Date().toISOString().slice(0, 10);
@@ -125,22 +150,30 @@ function todayOf(given: string | undefined): string {
   return given;
 }
 
-interface RefsFlags { format: RefsFormat; config?: string; pack: string[]; due?: boolean; today?: string }
+interface RefsFlags { format: RefsFormat; config?: string; pack: string[]; due?: boolean; today?: string; reasoning?: boolean }
 
-/** `firnline refs [query]`: list reference values and their sources, or export the sources. */
+/** `firnline refs [query...]`: list reference values (or, with --reasoning, reasoning rules) and their sources, or export the sources. */
 export function registerRefs(program: Command, ctx: CliContext): void {
   program
     .command('refs')
     .description('list reference values and their sources (all, or those matching the query words); export the cited sources as CSL-JSON or BibTeX')
-    .argument('[query]', 'words to look for in the id or the description')
+    .argument('[query...]', 'words to look for in the id or the description (quotes not needed)')
     .addOption(new Option('--format <name>', 'output format: text, json, csl-json or bibtex (the cited sources)').choices([...REFS_FORMATS]).default('text'))
+    .option('--reasoning', 'list the reasoning rules (reasoning checks, direction facts, pattern rules) instead of reference values')
     .option('--due', 'list only values past their review date (exit status 1 when there are any)')
     .option('--today <date>', 'the date to compare review dates with (YYYY-MM-DD; default: today, UTC)')
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (v: string, all: string[]) => [...all, v], [] as string[])
-    .action(async (query: string | undefined, flags: RefsFlags) => {
+    .action(async (words: string[] | undefined, flags: RefsFlags) => {
       const today = todayOf(flags.today);
       const run = await (await import('../run-settings.js')).loadRunSettings(ctx.cwd, flags.config, flags.pack);
+      const query = words === undefined || words.length === 0 ? undefined : words.join(' ');
+      if (flags.reasoning === true) {
+        const rules = matchingReasoningRules(run.packs, query);
+        if (flags.format === 'json') ctx.stdout(`${JSON.stringify(rules, null, 2)}\n`);
+        else ctx.stdout(rules.length === 0 ? `No reasoning rule matches "${query ?? ''}".\n` : rules.map(reasoningText).join('\n'));
+        return;
+      }
       const matching = matchingReferences(run.packs.references, query);
       const found = flags.due === true ? dueReferences(matching, today) : matching;
       if (flags.due === true && found.length > 0) ctx.exitCode = 1;
@@ -156,7 +189,11 @@ export function registerRefs(program: Command, ctx: CliContext): void {
           return;
         default:
           if (flags.due === true) ctx.stdout(dueText(found, today));
-          else ctx.stdout(found.length === 0 ? `No reference value matches "${query ?? ''}".\n` : found.map(refText).join('\n'));
+          else {
+            const more = matchingReasoningRules(run.packs, query).length;
+            const hint = more > 0 ? `\n${more} reasoning rule${more === 1 ? '' : 's'} ${query === undefined ? 'in the packs' : 'match too'}: firnline refs --reasoning${query === undefined ? '' : ` ${query}`}\n` : '';
+            ctx.stdout(found.length === 0 ? `No reference value matches "${query ?? ''}".\n${hint}` : `${found.map(refText).join('\n')}${hint}`);
+          }
       }
     });
 }
