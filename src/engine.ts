@@ -16,7 +16,11 @@ import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
 import type { LoadedPacks } from './rulepack/types.js';
-import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, loadHtmlReader, readDraftText, readWordDraft } from './source/index.js';
+import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, loadHtmlReader } from './source/index.js';
+import { runFiles, type FileOutcome, type FileTask } from './speed/run-files.js';
+import type { ResultCache } from './speed/cache.js';
+import { inShard, type Shard } from './speed/shard.js';
+import { cachedFindings } from './speed/sentence-cache.js';
 import type { Binding, CheckResult, Claim, Draft, Flag, FlagDraft, Level, Quantity, RuleInfo, Sentence, Verdict } from './types.js';
 
 /** How a run is set up. Only `cwd` is required; packs default to the built-in pack. */
@@ -33,6 +37,14 @@ export interface CheckOptions {
   readStdin?: () => Promise<string>;
   /** Claim ids and the ledger use paths relative to this folder (default: `cwd`). */
   projectRoot?: string;
+  /** Worker threads for a run over many files (default: the machine's cores); 1 runs in this thread. */
+  jobs?: number;
+  /** A result cache (src/speed/cache.ts); none by default. */
+  cache?: ResultCache;
+  /** Only the files of this shard (split by project path). */
+  shard?: Shard;
+  /** Called as files are done: how many of how many. */
+  onProgress?: (done: number, total: number) => void;
   /** The folder `include`/`exclude` patterns are relative to (default: `cwd`). */
   filterRoot?: string;
 }
@@ -59,30 +71,30 @@ export async function checkPaths(paths: string[], options: CheckOptions): Promis
   const { files, outside = [] } =
     fromDisk.length > 0 ? await findDrafts(fromDisk, options.cwd, pickDefined(options)) : { files: [] as string[] };
   const result: CheckResult = { files: [], rules: [], claims: [], flags: [], skipped: [] };
-  for (const file of outside) {
+  // Like standard input below, links out of the folder are reported by the first shard only.
+  for (const file of options.shard === undefined || options.shard.index === 1 ? outside : []) {
     addUnchecked(result, new FirnlineError('draft-link-outside', 'a link to a file outside the folder being checked, not followed; name the file itself to check it, or exclude the link', { file }), file);
   }
 
   const levels = options.levels ?? {};
   if (files.some((file) => draftFormat(file) === 'html')) await loadHtmlReader();
-  if (paths.includes('-')) {
+  // Standard input belongs to the first shard, so merged shards hold it once.
+  if (paths.includes('-') && (options.shard === undefined || options.shard.index === 1)) {
     if (options.readStdin === undefined) throw new FirnlineError('stdin-unavailable', 'standard input cannot be read here');
     addText(result, draftFromText('-', await options.readStdin(), 'markdown'), packs, { topic, levels });
   }
+  const tasks: FileTask[] = [];
   for (const file of files) {
-    const format = draftFormat(file);
     const projectPath = toPosix(relative(options.projectRoot ?? options.cwd, resolve(options.cwd, file)));
-    if (format === 'docx') {
-      addText(result, await readWordDraft(file, options.cwd), packs, { topic, levels, projectPath });
-      continue;
-    }
-    const text = await readDraftText(file, options.cwd);
-    if (typeof text !== 'string') {
-      addUnchecked(result, text.problem, file);
-      continue;
-    }
-    addText(result, { path: file, text, format }, packs, { topic, levels, projectPath });
+    if (options.shard !== undefined && !inShard(projectPath, options.shard)) continue;
+    tasks.push({ path: file, projectPath, format: draftFormat(file) });
   }
+  const outcomes = await runFiles(tasks, { cwd: options.cwd, packs, levels, topic, ...pickRun(options) });
+  // Outcomes come back in file order whatever ran them (pool, cache or this thread).
+  tasks.forEach((task, i) => {
+    const outcome = outcomes[i];
+    if (outcome !== undefined) addOutcome(result, task.path, outcome);
+  });
   result.rules = describeFlaggedRules(result.flags, packs);
   result.packs = packs.packs.map(({ id, version, asOf }) => ({ id, version, asOf }));
   return result;
@@ -106,48 +118,69 @@ export async function checkText(
   return result;
 }
 
-/**
- * Adds one draft's findings. A text that names no subject of the packs (a CO2 term, an ice core,
- * an ice age, the orbit, a period: `lexicon.subjects`) is skipped before it is even parsed, and so
- * is a sign-off checklist that Firnline wrote (it quotes every claim, and is not a draft).
- */
-function addText(
-  result: CheckResult,
-  raw: Pick<Draft, 'path' | 'text' | 'format'> | Draft,
-  packs: LoadedPacks,
-  options: DraftOptions,
-): void {
-  const { path, text, format } = raw;
+/** Adds one draft's findings (see checkFileText). */
+function addText(result: CheckResult, raw: Pick<Draft, 'path' | 'text' | 'format'> | Draft, packs: LoadedPacks, options: DraftOptions): void {
+  addOutcome(result, raw.path, checkFileText(raw, packs, options));
+}
+
+/** Adds what one file's check found, in the order a run reports it. */
+function addOutcome(result: CheckResult, path: string, outcome: FileOutcome): void {
+  if (outcome.unchecked !== undefined) {
+    // A draft that could not be checked is not counted as checked; it fails the run.
+    const { reason, line, column } = outcome.unchecked;
+    result.skipped.push({ file: path, reason, unchecked: true, ...(line === undefined ? {} : { line }), ...(column === undefined ? {} : { column }) });
+    return;
+  }
   result.files.push(path);
-  if (text.trimStart().startsWith(CHECKLIST_MARKER) && isChecklistText(text)) {
-    result.skipped.push({ file: path, reason: 'sign-off checklist' });
-    return;
-  }
-  if (!subjectMatcherOf(packs).test(text)) {
-    result.skipped.push({ file: path, reason: 'names no subject of the packs' });
-    return;
-  }
+  if (outcome.skipped !== undefined) result.skipped.push({ file: path, reason: outcome.skipped });
+  result.claims.push(...outcome.claims);
+  result.flags.push(...outcome.flags);
+}
+
+/**
+ * One file's findings. A text that names no subject of the packs (a CO2 term, an ice core, an ice
+ * age, the orbit, a period: `lexicon.subjects`) is skipped before it is even parsed, and so is a
+ * sign-off checklist that Firnline wrote (it quotes every claim, and is not a draft). A draft too
+ * deeply nested to read comes back as not checked (`unchecked`), which fails the run while the
+ * other drafts go on. Runs the same in a worker of the pool (speed/pool-worker.ts).
+ */
+export function checkFileText(raw: Pick<Draft, 'path' | 'text' | 'format'> | Draft, packs: LoadedPacks, options: DraftOptions): FileOutcome {
+  const { path, text, format } = raw;
+  const passed = passOver(text, packs);
+  if (passed !== undefined) return passed;
   let draft: Draft;
   try {
     draft = 'blocks' in raw ? raw : draftFromText(path, text, format === 'docx' ? 'text' : format);
   } catch (error) {
-    // A draft too deeply nested to read is named and fails the run; the other drafts go on.
-    if (error instanceof FirnlineError) {
-      result.files.pop(); // it was not checked after all
-      addUnchecked(result, error, path);
-      return;
-    }
+    if (error instanceof FirnlineError) return { claims: [], flags: [], unchecked: uncheckedOf(error) };
     throw error;
   }
-  const { claims, flags } = checkDraft(draft, packs, options);
-  result.claims.push(...claims);
-  result.flags.push(...flags);
+  return checkDraft(draft, packs, options);
+}
+
+/** Why a file that names no subject of the packs was passed over. */
+export const NO_SUBJECT = 'names no subject of the packs';
+
+/** A draft that could not be checked, as a report entry: the one-line message and its place. */
+export function uncheckedOf(problem: FirnlineError): NonNullable<FileOutcome['unchecked']> {
+  const { line, column } = problem.where ?? {};
+  return { reason: problem.message, ...(line === undefined ? {} : { line }), ...(column === undefined ? {} : { column }) };
+}
+
+/**
+ * The cheap first look at a file's raw text, before any parse: a sign-off checklist, or a text in
+ * which the compiled subject matcher finds nothing, is done here. Undefined when the file needs
+ * the full check.
+ */
+export function passOver(text: string, packs: LoadedPacks): FileOutcome | undefined {
+  if (text.trimStart().startsWith(CHECKLIST_MARKER) && isChecklistText(text)) return { claims: [], flags: [], skipped: 'sign-off checklist' };
+  if (!subjectMatcherOf(packs).test(text)) return { claims: [], flags: [], skipped: NO_SUBJECT };
+  return undefined;
 }
 
 /** Records a draft that was named or walked but could not be checked; it fails the run. */
 function addUnchecked(result: CheckResult, problem: FirnlineError, file: string): void {
-  const { line, column } = problem.where ?? {};
-  result.skipped.push({ file, reason: problem.message, unchecked: true, ...(line === undefined ? {} : { line }), ...(column === undefined ? {} : { column }) });
+  addOutcome(result, file, { claims: [], flags: [], unchecked: uncheckedOf(problem) });
 }
 
 /**
@@ -162,6 +195,9 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
   const claims: Claim[] = [];
   const seen = new Map<string, number>();
   draft.blocks.forEach((block, blockIndex) => {
+    // A block with no topic word and no digit holds no claim (examineSentence needs one or the
+    // other in a sentence, and sentences are pieces of their block): it is not even split.
+    if (!DIGIT.test(block.text) && !topic.test(block.text) && !subjectMatcherOf(packs).test(block.text)) return;
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
@@ -169,7 +205,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     sentences.forEach((sentence, index) => {
       const { window, at } = windowOf(index);
       const onTopic = topic.test(sentence.text) || subjectMatcherOf(packs).test(sentence.text);
-      const found = examineSentence(window, at, packs, onTopic, context, () => topic.test(window[at - 1] ?? ''));
+      const found = examineCached(window, at, packs, onTopic, context, () => topic.test(window[at - 1] ?? ''));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -202,6 +238,26 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     });
   });
   return { claims, flags: claims.flatMap((c) => c.flags) };
+}
+
+/**
+ * examineSentence through the per-sentence cache (speed/sentence-cache.ts): what a sentence holds
+ * depends only on its paragraph window, its place in it, the paragraph's kind, heading and marker,
+ * the packs and its topic tests, so an editor's re-check after a one-word edit re-reads only the
+ * paragraph that changed.
+ */
+function examineCached(
+  paragraph: string[],
+  index: number,
+  packs: LoadedPacks,
+  onTopic: boolean,
+  context: ParagraphContext,
+  previousOnTopic: () => boolean,
+): SentenceFindings | undefined {
+  const previous = previousOnTopic();
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true], () =>
+    examineSentence(paragraph, index, packs, onTopic, context, () => previous),
+  );
 }
 
 /** What the stages found in one sentence, before positions are resolved. */
@@ -348,6 +404,14 @@ function describeFlaggedRules(flags: Flag[], packs: LoadedPacks): RuleInfo[] {
 /** Rules that live in code (arith.*, unit.*) describe themselves through their first flag. */
 function describeFromFlag(flag: Flag): RuleInfo {
   return { id: flag.ruleId, summary: flag.reason, description: flag.reason, defaultLevel: flag.level, sources: flag.sources };
+}
+
+function pickRun(options: CheckOptions): Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress'> {
+  const picked: Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress'> = {};
+  if (options.jobs !== undefined) picked.jobs = options.jobs;
+  if (options.cache !== undefined) picked.cache = options.cache;
+  if (options.onProgress !== undefined) picked.onProgress = options.onProgress;
+  return picked;
 }
 
 function pickDefined(options: CheckOptions): { include?: string[]; exclude?: string[]; root?: string } {

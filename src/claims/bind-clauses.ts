@@ -10,7 +10,7 @@
  * ice age was over". compromise tags the verbs; it runs only on sentences with a quantity after "and"
  * or "but".
  */
-import nlp from 'compromise';
+import { termsOf } from '../nlp/sentence-terms.js';
 import type { Quantity } from '../types.js';
 import type { TermHits } from './bind-view.js';
 
@@ -31,7 +31,7 @@ interface Token {
   text: string;
   start: number;
   end: number;
-  tags: string[];
+  tags: readonly string[];
 }
 
 /** The coordinated predicates of `sentence` that hold a quantity, each with the subject it shares. */
@@ -104,6 +104,6 @@ function isVerb(t: Token | undefined): boolean {
 }
 
 function tokensOf(sentence: string): Token[] {
-  const json = nlp(sentence).json({ offset: true }) as { terms: { text: string; tags: string[]; offset: { start: number; length: number } }[] }[];
-  return json.flatMap((s) => s.terms.map((t) => ({ text: t.text, start: t.offset.start, end: t.offset.start + t.offset.length, tags: t.tags })));
+  // compromise reads each distinct sentence once (nlp/sentence-terms.ts).
+  return termsOf(sentence).map((t) => ({ text: t.text, start: t.start, end: t.start + t.length, tags: t.tags }));
 }

@@ -39,6 +39,11 @@ const QUALIFIES = /^[\s-]*$/u;
 
 const bindingTerms = new WeakMap<object, Set<string>>();
 
+/** True when `sentence` may take a subject from the sentence before (a back-reference or a bare measure subject); bindFromContext binds nothing otherwise. */
+export function mayReferBack(sentence: string): boolean {
+  return REFERS_BACK.test(sentence) || MEASURE_SUBJECT.test(sentence);
+}
+
 /** The reference value the previous sentence's terms let the quantity bind, `ambiguous`, or undefined. */
 export function bindFromContext(
   sentence: string,
@@ -51,7 +56,7 @@ export function bindFromContext(
   vetoes: TermHits = view,
   contextSubject?: [number, number],
 ): string | 'ambiguous' | undefined {
-  if (!REFERS_BACK.test(sentence) && !MEASURE_SUBJECT.test(sentence)) return undefined;
+  if (!mayReferBack(sentence)) return undefined;
   const own = subjectTerms(sentence, vetoes, packs);
   const serves = (r: ReferenceValue, id: string): boolean => r.binding.all.some((g) => g.includes(id));
   const candidates = packs.references

@@ -15,7 +15,7 @@ import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
-import { bindFromContext } from './bind-context.js';
+import { bindFromContext, mayReferBack } from './bind-context.js';
 import { withoutOthers } from './bind-others.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
@@ -27,7 +27,20 @@ export type { TermHits } from './bind-view.js';
 
 /** A quantity whose best values tie: it binds nothing and goes to the checklist. */
 const AMBIGUOUS = 'ambiguous';
-const compiled = new WeakMap<object, Map<string, RegExp>>();
+const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
+
+/**
+ * One term's regular expression, and one word of each of its phrases (the longest) in lower case: in
+ * a sentence of plain ASCII that contains none of them the expression cannot match, and is not run
+ * (a few hundred terms were tried on every sentence). A term with a word outside ASCII is always run:
+ * case folding beyond ASCII ("K" the kelvin sign, the long s) is the regular expression's to judge.
+ */
+interface CompiledTerm {
+  regex: RegExp;
+  keyWords: string[] | undefined;
+}
+
+const ASCII = /^[^\u0080-\u{10ffff}]*$/u;
 
 /**
  * Finds every term occurrence (case-insensitive, on word boundaries) in `sentence`. A term whose id
@@ -35,19 +48,28 @@ const compiled = new WeakMap<object, Map<string, RegExp>>();
  * hits count as the other term's, so a pack adds a synonym without editing an entry.
  */
 export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
-  let regexes = compiled.get(packs);
-  if (regexes === undefined) {
-    regexes = new Map(packs.terms.map((t) => [t.id, termRegex(t.words)]));
-    compiled.set(packs, regexes);
+  let terms = compiled.get(packs);
+  if (terms === undefined) {
+    terms = new Map(packs.terms.map((t) => [t.id, { regex: termRegex(t.words), keyWords: keyWordsOf(t.words) }]));
+    compiled.set(packs, terms);
   }
+  const plain = ASCII.test(sentence);
+  const lower = plain ? sentence.toLowerCase() : '';
   const hits: TermHits = new Map();
-  for (const [id, regex] of regexes) {
+  for (const [id, { regex, keyWords }] of terms) {
+    if (plain && keyWords !== undefined && !keyWords.some((w) => lower.includes(w))) continue;
     const spans = [...sentence.matchAll(regex)].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
     if (spans.length === 0) continue;
     const as = extendedTerm(id, packs);
     hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
   }
   return hits;
+}
+
+function keyWordsOf(words: string[]): string[] | undefined {
+  if (!words.every((w) => ASCII.test(w))) return undefined;
+  // Every word of a phrase stands in a sentence the phrase matches; the longest one rules out most.
+  return words.map((w) => w.trim().toLowerCase().split(/\s+/u).reduce((a, b) => (b.length > a.length ? b : a), ''));
 }
 
 /** The term a dotted id extends ("glacial.in-other-words" → "glacial"), or the id itself. */
@@ -113,7 +135,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (best !== undefined) decided.set(i, next !== undefined && next.score === best.score ? AMBIGUOUS : best.r.id);
     else if ((fromApposition = bindApposition(sentence, q, role, view, hits, packs)) !== undefined) decided.set(i, fromApposition);
     // A calendar year ("before the year 2000") dates the sentence; it takes no subject from the one before.
-    else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE') {
+    // Only a sentence that may refer back reads the one before (and only then compromise finds its subject).
+    else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE' && mayReferBack(sentence)) {
       contextHits ??= findTerms(context, packs);
       contextSubject ??= subjectSpan(context) ?? null;
       const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, contextSubject ?? undefined);

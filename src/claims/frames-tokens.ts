@@ -1,8 +1,10 @@
 /**
  * One sentence as tokens with offsets, roots from compromise, clause numbers and quotation state:
- * the common ground of sentence frames and reasoning detectors. compromise runs once per call.
+ * the common ground of sentence frames and reasoning detectors. compromise reads each distinct
+ * sentence once (nlp/sentence-terms.ts).
  */
-import nlp from 'compromise';
+import type nlp from 'compromise';
+import { termsOf } from '../nlp/sentence-terms.js';
 
 /** One word or punctuation mark; `start`/`end` are UTF-16 indices into the sentence. */
 export interface Token {
@@ -38,20 +40,16 @@ const TOGGLES = new Set(['"', "'"]);
 const EXCEPT_WORDS = new Set(['nothing', 'anything', 'everything', 'all', 'none']);
 
 /**
- * Tokenizes a sentence. `clauseBreaks` are the words that start a new clause. `doc` is the
- * sentence already parsed by compromise (parsed here when left out); `null` skips compromise, and
- * roots are then the words themselves.
+ * Tokenizes a sentence. `clauseBreaks` are the words that start a new clause. Roots come from
+ * compromise's reading of the sentence (nlp/sentence-terms.ts); `null` skips compromise, and roots
+ * are then the words themselves.
  *
  *   tokenizeSentence("CO2 lagged, so it can't", ['but']).tokens.map((t) => t.text)
  *   → ['co2', 'lagged', ',', 'so', 'it', 'can', 'not']
  */
-export function tokenizeSentence(
-  text: string,
-  clauseBreaks: readonly string[],
-  doc: CompromiseView | null | undefined = undefined,
-): SentenceTokens {
-  // Context sentences only need plain words (doc null); compromise runs on the sentence being checked.
-  const roots = doc === null ? new Map<number, string>() : rootsByOffset(doc ?? nlp(text));
+export function tokenizeSentence(text: string, clauseBreaks: readonly string[], nlpRoots: null | undefined = undefined): SentenceTokens {
+  // Context sentences only need plain words (null); compromise reads the sentence being checked.
+  const roots = nlpRoots === null ? new Map<number, string>() : rootsByOffset(text);
   const breaks = new Set(clauseBreaks);
   const tokens: Token[] = [];
   let clause = 0;
@@ -90,16 +88,10 @@ export function tokenizeSentence(
 }
 
 /** compromise's root of each term, keyed by the term's start offset in the sentence. */
-function rootsByOffset(doc: CompromiseView): Map<number, string> {
-  doc.compute('root');
+function rootsByOffset(text: string): Map<number, string> {
   const roots = new Map<number, string>();
-  const sentences = doc.json({ offset: true, terms: { offset: true } }) as CompromiseSentence[];
-  for (const sentence of sentences) {
-    for (const term of sentence.terms) {
-      if (term.offset !== undefined && typeof term.root === 'string' && term.root.length > 0) {
-        roots.set(term.offset.start, term.root.toLowerCase());
-      }
-    }
+  for (const term of termsOf(text)) {
+    if (term.root !== undefined && term.root.length > 0) roots.set(term.start, term.root.toLowerCase());
   }
   return roots;
 }
@@ -107,6 +99,3 @@ function rootsByOffset(doc: CompromiseView): Map<number, string> {
 /** A compromise document (the value `nlp(text)` returns). */
 export type CompromiseView = ReturnType<typeof nlp>;
 
-interface CompromiseSentence {
-  terms: { root?: string; offset?: { start: number; length: number } }[];
-}

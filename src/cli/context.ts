@@ -11,6 +11,8 @@ export interface CliContext {
   readStdin: () => Promise<string>;
   /** True when standard output is a terminal (colour is allowed unless NO_COLOR is set). */
   isTTY: boolean;
+  /** True when standard error is a terminal (progress lines are allowed, outside CI). */
+  stderrIsTTY?: boolean;
   /** The exit status the command asks for: 0 clean, 1 flags at or above the fail level, 2 user error. */
   exitCode: number;
 }

@@ -10,6 +10,7 @@ import { registerCheck } from './commands/check.js';
 import { registerChecklist } from './commands/checklist.js';
 import { registerExplain } from './commands/explain.js';
 import { registerInit } from './commands/init.js';
+import { registerMerge } from './commands/merge.js';
 import { registerLsp } from './commands/lsp.js';
 import { registerRefs } from './commands/refs.js';
 import { registerSignoff } from './commands/signoff.js';
@@ -28,7 +29,7 @@ export async function main(argv: string[], context: Partial<CliContext> = {}): P
     .addHelpText('after', `\n${CAUTIONS}\n`)
     .exitOverride()
     .configureOutput({ writeOut: ctx.stdout, writeErr: ctx.stderr });
-  for (const register of [registerCheck, registerChecklist, registerSignoff, registerAnnotate, registerRefs, registerExplain, registerInit, registerLsp]) {
+  for (const register of [registerCheck, registerChecklist, registerSignoff, registerAnnotate, registerRefs, registerExplain, registerInit, registerMerge, registerLsp]) {
     register(program, ctx);
   }
   for (const command of program.commands) command.addHelpText('after', `\n${CAUTIONS}\n`);
@@ -57,6 +58,7 @@ function processContext(): Omit<CliContext, 'exitCode'> {
     stderr: quietWhenClosed(process.stderr),
     readStdin: readStandardInput,
     isTTY: process.stdout.isTTY === true,
+    stderrIsTTY: process.stderr.isTTY === true,
   };
 }
 

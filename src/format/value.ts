@@ -31,8 +31,11 @@ export function formatNumber(value: number, digits = 10): string {
   if (value === Infinity) return 'no upper limit';
   if (value === -Infinity) return 'no lower limit';
   const rounded = Number(value.toPrecision(Math.max(1, digits)));
-  return rounded.toLocaleString('en-US', { maximumFractionDigits: 12 });
+  return NUMBER_FORMAT.format(rounded);
 }
+
+/** What `toLocaleString('en-US', { maximumFractionDigits: 12 })` uses, made once (making one per number was a hot spot). */
+const NUMBER_FORMAT = new Intl.NumberFormat('en-US', { maximumFractionDigits: 12 });
 
 /** The word written after a number in `unit` (`years`, `kyr`, `ppm`, `°F`, `years ago`), or the unit name. */
 export function unitWord(unit: string): string {

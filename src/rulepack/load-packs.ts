@@ -21,7 +21,7 @@ const NOTHING_KNOWN: KnownIds = { sources: new Map(), terms: new Set(), defined:
  * Loads one pack file; messages name the file as given. `known` holds what packs loaded before it define (a user pack may cite the
  * built-in pack's sources and terms by id). Throws FirnlineErrors listing every mistake.
  */
-export async function loadRulePack(file: string, known: KnownIds = NOTHING_KNOWN): Promise<RulePack> {
+export async function loadRulePack(file: string, known: KnownIds = NOTHING_KNOWN, validated = false): Promise<RulePack> {
   const absolute = resolve(file);
   const yaml = await readYamlFile(absolute, shownPath(file), MAX_PACK_BYTES);
   // A file that is not a pack at all gets one line, and never an echo of its content.
@@ -32,7 +32,9 @@ export async function loadRulePack(file: string, known: KnownIds = NOTHING_KNOWN
   // Size first: a pack of any size is refused in bounded time (pack-limits.ts).
   const tooLarge = packLimitProblems(yaml);
   if (tooLarge.length > 0) throw new FirnlineErrors(tooLarge);
-  const problems = schemaErrors(yaml, 'rulepack');
+  // `validated`: the same file passed the schema in this run already (a worker of the pool); the
+  // schema only reports, it never changes the data, so skipping it gives the same pack.
+  const problems = validated ? [] : schemaErrors(yaml, 'rulepack');
   if (problems.length > 0) throw new FirnlineErrors(problems);
   const pack = resolvePack(yaml, absolute, known);
   if (Array.isArray(pack)) throw new FirnlineErrors(pack.sort(byPlace));
@@ -48,13 +50,13 @@ export async function loadBuiltinPack(): Promise<RulePack> {
  * Loads the built-in pack (unless `builtin: false`) and the extra packs in order, and merges them.
  * An id defined in two packs is an error, reported at the later definition.
  */
-export async function loadPacks(extraPackFiles: string[], options: { builtin?: boolean } = {}): Promise<LoadedPacks> {
+export async function loadPacks(extraPackFiles: string[], options: { builtin?: boolean; validated?: boolean } = {}): Promise<LoadedPacks> {
   const packs: RulePack[] = [];
   const errors: FirnlineError[] = [];
   const files = [...(options.builtin === false ? [] : [BUILTIN_PACK_FILE]), ...extraPackFiles];
   for (const file of files) {
     try {
-      packs.push(await loadRulePack(file, knownIn(packs)));
+      packs.push(await loadRulePack(file, knownIn(packs), options.validated === true));
     } catch (error) {
       if (error instanceof FirnlineErrors) errors.push(...error.errors);
       else if (error instanceof FirnlineError) errors.push(error);

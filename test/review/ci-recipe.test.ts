@@ -46,5 +46,5 @@ describe('examples/ci/check-drafts.sh', () => {
 
     // Without a base, every claim must be signed off, and the committed ones are not.
     expect((await recipe(dir, '')).code).toBe(1);
-  }, 60_000);
+  }, 240_000); // seven runs of the command line from source: room for a loaded shared machine (main timed out at 60 s there too)
 });

@@ -29,7 +29,10 @@ const ISOTOPES = /^(?:deuterium|isotope|isotopes|δd|δ18o|d18o)$/u;
 const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degrees?|°c|°f|k|cooler|warmer|colder)$/u;
 const ANAPHORIC_READING = /^(?:this|that|these|it|they|the curve|the record|the graph|the column)\b.{0,20}\b(?:tells?|shows?|means?|suggests?|indicates?|gives?|reveals?)\b/u;
 
-function detectRegional({ index, read, sentence, words }: DetectInput): Cue[] {
+function detectRegional(input: DetectInput): Cue[] {
+  // The tokens (and with them compromise's roots) are read only once a record, the globe and a
+  // temperature are all there: most sentences stop before, and compromise never sees them here.
+  const { index, read, words } = input;
   const here = read(index);
   if (here === undefined) return [];
   const s = here.s;
@@ -63,6 +66,7 @@ function detectRegional({ index, read, sentence, words }: DetectInput): Cue[] {
   const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text));
   if (!record || global === undefined || !temperature) return [];
   // "colder than today" compares two times, not the record with the globe: no contrast.
+  const sentence = input.sentence;
   const times = findPhrases(sentence, words('time-comparison'));
   const contrast = findPhrases(sentence, words('contrast')).filter((c) => !times.some((t) => t.first <= c.first && t.last >= c.last));
   if (contrast.length > 0) return [];

@@ -38,10 +38,18 @@ export function checkReasoning(paragraph: string[], index: number, packs: Loaded
   const compiled = compilePacks(packs);
   const read = paragraphReader(paragraph, packs, context);
   const reading = read(index);
-  let doc: CompromiseView | undefined;
-  const parsed = () => (doc ??= nlp(text));
   let tokens: SentenceTokens | undefined;
-  const sentence = () => (tokens ??= tokenizeSentence(text, FRAME_WORDS.clauseBreaks, parsed()));
+  const sentence = () => (tokens ??= tokenizeSentence(text, FRAME_WORDS.clauseBreaks));
+  // Pattern rules match on a compromise document of their own, made only when a pack has one, with
+  // its roots computed so that a root pattern ("{be}") matches whichever detectors ran before.
+  let doc: CompromiseView | undefined;
+  const parsed = () => {
+    if (doc === undefined) {
+      doc = nlp(text);
+      doc.compute('root');
+    }
+    return doc;
+  };
 
   const found: { flag: FlagDraft }[] = [];
   for (const { check, entry, words, prefilter } of compiled.checks) {

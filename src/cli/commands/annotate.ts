@@ -2,16 +2,13 @@ import type { Command } from 'commander';
 import { Option } from 'commander';
 import { readFile, realpath, stat } from 'node:fs/promises';
 import { resolve } from 'node:path';
-import { checkPaths } from '../../engine.js';
 import { FirnlineError } from '../../errors.js';
 import { WordPackageError } from '../../source/word/word-package-error.js';
-import { draftFormat } from '../../source/index.js';
 import { countOf, summarize } from '../../report/summarize.js';
 import { LEVELS, type Level } from '../../types.js';
 import { writeFileAtomic } from '../../write-file-atomic.js';
 import type { CliContext } from '../context.js';
 import { exitCodeFor } from '../exit-code.js';
-import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
 
 interface AnnotateFlags {
   output: string;
@@ -34,10 +31,12 @@ export function registerAnnotate(program: Command, ctx: CliContext): void {
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', collect, [])
     .action(async (draft: string, flags: AnnotateFlags) => {
-      if (draftFormat(draft) !== 'docx') {
+      if (!draft.toLowerCase().endsWith('.docx')) {
         throw new FirnlineError('not-word', 'annotate writes comments into Word drafts only; give a .docx file', { file: draft });
       }
       await refuseSameFile(resolve(ctx.cwd, draft), resolve(ctx.cwd, flags.output), flags.output);
+      // The engine and the rule-pack loader load here, so that `--version` and `--help` stay light.
+      const [{ checkPaths }, { checkOptionsOf, loadRunSettings }] = await Promise.all([import('../../engine.js'), import('../run-settings.js')]);
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const result = await checkPaths([draft], checkOptionsOf(run, ctx));
       const bytes = await readFile(resolve(ctx.cwd, draft));

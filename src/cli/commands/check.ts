@@ -2,27 +2,21 @@ import type { Command} from 'commander';
 import { Option } from 'commander';
 import { mkdir } from 'node:fs/promises';
 import { dirname } from 'node:path';
-import { checkPaths } from '../../engine.js';
-import { renderReport, REPORT_FORMATS, type ReportFormat } from '../../report/index.js';
-import { renderChecklistOf } from '../render-checklist.js';
+import type { ReportFormat } from '../../report/index.js';
 import { LEVELS, type Level } from '../../types.js';
 import { VERSION } from '../../version.js';
 import type { CliContext } from '../context.js';
-import { applyGate } from '../gate.js';
-import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
-import { writeFileAtomic } from '../../write-file-atomic.js';
-import { exitCodeFor } from '../exit-code.js';
 import { applyStrictPreset } from '../strict-preset.js';
 import { describeBreakdown, wantsBreakdown } from '../../report/run-breakdown.js';
 import { outputTarget } from '../../guard/output-target.js';
 import { visibleData, visibleText } from '../../guard/visible-text.js';
 import { reportUnchecked } from '../unchecked.js';
-import { guardChecklistOutput } from '../guard-checklist-output.js';
+import { CHECK_FORMATS, parseSpeedFlags, speedOptionsOf, type SpeedFlags } from '../speed-options.js';
 
-/** The report formats, plus `markdown`: the sign-off checklist (GLOSSARY.md). */
-const CHECK_FORMATS = [...REPORT_FORMATS, 'markdown'] as const;
+// The engine, the packs' schemas, the reporters and the ledger reader load inside the action
+// (dynamic import), so `--version` and `--help` start in a few hundredths of a second (bench/).
 
-interface CheckFlags {
+interface CheckFlags extends SpeedFlags {
   format: string;
   failOn?: Level | 'never';
   config?: string;
@@ -53,12 +47,27 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('--force', 'with --format markdown -o: replace a checklist even if it holds ticks or comments not yet in the ledger')
     .option('--absolute-paths', 'SARIF: record the working folder as an absolute file URI (off by default, so a shared report does not show the machine\'s folders)')
     .option('--strict', 'the strict preset for publication: every conflicting value and every reasoning error is an error, and errors fail the run')
+    .option('--jobs <n>', 'worker threads for runs over many files (default: the number of cores; 1: no workers)')
+    .option('--no-cache', 'neither read nor write the result cache (.firnline-cache/ in the project root)')
+    .option('--shard <k/n>', 'check only the k-th of n parts of the files (split by path), for CI matrix jobs; join the reports with `firnline merge`')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
+      parseSpeedFlags(flags);
+      const [{ checkPaths }, { renderReport }, { renderChecklistOf }, { applyGate }, { checkOptionsOf, loadRunSettings }, { writeFileAtomic }, { exitCodeFor }, { guardChecklistOutput }] =
+        await Promise.all([
+          import('../../engine.js'), import('../../report/index.js'), import('../render-checklist.js'), import('../gate.js'),
+          import('../run-settings.js'), import('../../write-file-atomic.js'), import('../exit-code.js'), import('../guard-checklist-output.js'),
+        ]);
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const strict = flags.strict === true || (flags.failOn === undefined && run.failOn === 'strict');
       const failOn = flags.failOn ?? (run.failOn === 'strict' ? 'error' : run.failOn);
       const targets = paths !== undefined && paths.length > 0 ? paths : ['.'];
-      const checked = await checkPaths(targets, checkOptionsOf(run, ctx));
+      const speed = await speedOptionsOf(flags, run.projectRoot, ctx);
+      let checked;
+      try {
+        checked = await checkPaths(targets, { ...checkOptionsOf(run, ctx), ...speed.options });
+      } finally {
+        speed.done();
+      }
       const result = strict ? applyStrictPreset(checked) : checked;
       const gate = await applyGate(result, {
         requireSignoff: flags.requireSignoff === true,

@@ -3,18 +3,16 @@ import { mkdir } from 'node:fs/promises';
 import { dirname, join, relative, resolve } from 'node:path';
 import { FirnlineError } from '../../errors.js';
 import { outputTarget } from '../../guard/output-target.js';
-import { changedLines } from '../../review/changed-lines.js';
 import type { ReviewSummary } from '../../review/review-claims.js';
 import type { CheckResult } from '../../types.js';
-import { onChangedLines } from '../gate.js';
 import { reportUnchecked } from '../unchecked.js';
-import { checkPaths } from '../../engine.js';
 import type { CliContext } from '../context.js';
-import { CHECKLIST_RENDERERS, renderChecklistOf, type ChecklistFormat } from '../render-checklist.js';
-import { guardChecklistOutput } from '../guard-checklist-output.js';
-import { checkOptionsOf, loadRunSettings, type RunSettings } from '../run-settings.js';
-import { writeFileAtomic } from '../../write-file-atomic.js';
+import type { ChecklistFormat } from '../render-checklist.js';
+import type { RunSettings } from '../run-settings.js';
 import { visibleLine } from '../../guard/visible-text.js';
+
+/** The checklist formats (render-checklist.ts CHECKLIST_RENDERERS, kept equal by a test); the renderers load when the command runs. */
+export const CHECKLIST_FORMATS = ['markdown', 'json'] as const;
 
 interface ChecklistFlags {
   format: ChecklistFormat;
@@ -33,7 +31,7 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
     .command('checklist')
     .description('write the sign-off checklist of every claim in the drafts, flagged or not')
     .argument('[paths...]', 'drafts or folders of drafts (default: the current folder)')
-    .addOption(new Option('--format <name>', 'checklist format').choices(Object.keys(CHECKLIST_RENDERERS)).default('markdown'))
+    .addOption(new Option('--format <name>', 'checklist format').choices([...CHECKLIST_FORMATS]).default('markdown'))
     .option('-o, --output <file>', 'write the checklist to a file instead of standard output')
     .option('--force', 'replace the output file even if it holds ticks not yet in the ledger')
     .option('--open', 'only claims that still need the expert: open, changed since sign-off, or marked needs change')
@@ -42,6 +40,11 @@ export function registerChecklist(program: Command, ctx: CliContext): void {
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (value: string, previous: string[]) => [...previous, value], [])
     .action(async (paths: string[] | undefined, flags: ChecklistFlags) => {
+      // The engine, the rule-pack loader, the renderers and the ledger load here, so that `--version` and `--help` stay light.
+      const [{ checkPaths }, { checkOptionsOf, loadRunSettings }, { changedLines }, { onChangedLines }, { renderChecklistOf }, { guardChecklistOutput }, { writeFileAtomic }] = await Promise.all([
+        import('../../engine.js'), import('../run-settings.js'), import('../../review/changed-lines.js'), import('../gate.js'),
+        import('../render-checklist.js'), import('../guard-checklist-output.js'), import('../../write-file-atomic.js'),
+      ]);
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const targets = paths !== undefined && paths.length > 0 ? paths : ['.'];
       const found = await checkPaths(targets, checkOptionsOf(run, ctx));
@@ -80,6 +83,9 @@ function countWords(review: ReviewSummary): string {
 
 /** `--per-file -o FOLDER`: one checklist per draft that has claims, named after the draft. */
 async function writePerFile(result: CheckResult, run: RunSettings, flags: ChecklistFlags, ctx: CliContext, options: { openOnly: boolean }): Promise<void> {
+  const [{ renderChecklistOf }, { guardChecklistOutput }, { writeFileAtomic }] = await Promise.all([
+    import('../render-checklist.js'), import('../guard-checklist-output.js'), import('../../write-file-atomic.js'),
+  ]);
   const folder = resolve(ctx.cwd, flags.output ?? '.');
   const ending = flags.format === 'json' ? '.checklist.json' : '.checklist.md';
   const files = [...new Set(result.claims.map((c) => c.file))].sort();

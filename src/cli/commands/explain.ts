@@ -5,7 +5,6 @@ import { describeRule } from '../../rulepack/describe-rule.js';
 import { closeIds, knownRuleIds } from '../../rulepack/known-rule-ids.js';
 import { SIGNOFF_RULES } from '../../review/review-flags.js';
 import type { CliContext } from '../context.js';
-import { loadRunSettings } from '../run-settings.js';
 
 /** `firnline explain <id>`: one rule or reference value in full, with its citations. */
 export function registerExplain(program: Command, ctx: CliContext): void {
@@ -16,7 +15,7 @@ export function registerExplain(program: Command, ctx: CliContext): void {
     .option('--config <file>', 'settings file to use instead of the firnline.yaml found by walking up')
     .option('--pack <file>', 'add a rule pack (repeatable)', (v: string, all: string[]) => [...all, v], [] as string[])
     .action(async (id: string, flags: { config?: string; pack: string[] }) => {
-      const { packs } = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
+      const { packs } = await (await import('../run-settings.js')).loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const info = describeRule(packs, id) ?? describeRule(packs, `value.${id}`) ?? SIGNOFF_RULES.find((r) => r.id === id);
       if (info === undefined) {
         const close = closeIds(id, knownRuleIds(packs));

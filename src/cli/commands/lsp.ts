@@ -1,9 +1,7 @@
 import type { Command } from 'commander';
 import { resolve } from 'node:path';
 import { FirnlineError } from '../../errors.js';
-import { readLedger } from '../../review/read-ledger.js';
 import type { CliContext } from '../context.js';
-import { loadRunSettings } from '../run-settings.js';
 
 interface LspFlags {
   stdio?: boolean;
@@ -28,7 +26,9 @@ export function registerLsp(program: Command, ctx: CliContext): void {
       if (flags.stdio !== true) throw new FirnlineError('lsp-transport', 'the server talks over standard input and output only: run `firnline lsp --stdio`');
       const config = flags.config === undefined ? undefined : resolve(ctx.cwd, flags.config);
       const packs = flags.pack.map((p) => resolve(ctx.cwd, p));
-      const [{ startServer }, { createCheckSetup }] = await Promise.all([import('../../lsp/server.js'), import('../../lsp/check-document.js')]);
+      const [{ startServer }, { createCheckSetup }, { loadRunSettings }, { readLedger }] = await Promise.all([
+        import('../../lsp/server.js'), import('../../lsp/check-document.js'), import('../run-settings.js'), import('../../review/read-ledger.js'),
+      ]);
       // Anything printed to standard output would break the protocol stream: send stray logs to stderr.
       console.log = (...args: unknown[]) => void process.stderr.write(`${args.map(String).join(' ')}\n`);
       const connection = startServer({

@@ -8,7 +8,6 @@ import { describeRange } from '../../rulepack/describe-range.js';
 import type { LoadedPacks, ReferenceValue } from '../../rulepack/types.js';
 import type { Source } from '../../types.js';
 import type { CliContext } from '../context.js';
-import { loadRunSettings } from '../run-settings.js';
 
 export const REFS_FORMATS = ['text', 'json', 'csl-json', 'bibtex'] as const;
 type RefsFormat = (typeof REFS_FORMATS)[number];
@@ -167,7 +166,7 @@ export function registerRefs(program: Command, ctx: CliContext): void {
     .option('--pack <file>', 'add a rule pack (repeatable)', (v: string, all: string[]) => [...all, v], [] as string[])
     .action(async (words: string[] | undefined, flags: RefsFlags) => {
       const today = todayOf(flags.today);
-      const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
+      const run = await (await import('../run-settings.js')).loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const query = words === undefined || words.length === 0 ? undefined : words.join(' ');
       if (flags.reasoning === true) {
         const rules = matchingReasoningRules(run.packs, query);

@@ -3,18 +3,12 @@ import { Option } from 'commander';
 import { readRegularText } from '../../guard/read-regular-file.js';
 import { visibleLine } from '../../guard/visible-text.js';
 import { relative, resolve } from 'node:path';
-import { checkPaths } from '../../engine.js';
 import { FirnlineError } from '../../errors.js';
 import { readChecklistBoxes } from '../../report/checklist-remarks.js';
-import { checkReviewer, formatGitIdentity, readGitIdentity } from '../../review/reviewers.js';
-import { checklistRequests } from '../checklist-requests.js';
 import { existsSync } from 'node:fs';
-import { appendSignoffEntries } from '../../review/append-signoffs.js';
-import { packVersionOf, planSignoffs, type SignoffRequest } from '../../review/plan-signoffs.js';
-import { readLedger } from '../../review/read-ledger.js';
+import type { SignoffRequest } from '../../review/plan-signoffs.js';
 import { DECISIONS, ledgerDate, type Decision } from '../../review/signoff-entry.js';
 import type { CliContext } from '../context.js';
-import { checkOptionsOf, loadRunSettings } from '../run-settings.js';
 
 interface SignoffFlags {
   from?: string;
@@ -48,6 +42,12 @@ export function registerSignoff(program: Command, ctx: CliContext): void {
       if (flags.from !== undefined && (flags.decision !== undefined || flags.reason !== undefined)) {
         throw new FirnlineError('signoff-decision-from', 'with --from, write decisions on the ticked lines: (corrected: ...) or (waived: ...)');
       }
+      // The engine, the rule-pack loader and the ledger load here, so that `--version` and `--help` stay light.
+      const [{ checkPaths }, { checkReviewer, formatGitIdentity, readGitIdentity }, { checklistRequests }, { appendSignoffEntries }, { packVersionOf, planSignoffs }, { readLedger }, { checkOptionsOf, loadRunSettings }] =
+        await Promise.all([
+          import('../../engine.js'), import('../../review/reviewers.js'), import('../checklist-requests.js'), import('../../review/append-signoffs.js'),
+          import('../../review/plan-signoffs.js'), import('../../review/read-ledger.js'), import('../run-settings.js'),
+        ]);
       const run = await loadRunSettings(ctx.cwd, flags.config, flags.pack);
       const git = await readGitIdentity(ctx.cwd);
       const reviewer = checkReviewer(by, run.reviewers, git, relative(ctx.cwd, run.settingsFile ?? '') || 'firnline.yaml').name;

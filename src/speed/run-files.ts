@@ -1,0 +1,138 @@
+/**
+ * Runs the check over a list of files: the least work first, in this thread (read each file and run
+ * the compiled subject matcher over its raw text; a file with no hit is done), then the cache, then
+ * the files that need the full check, in this thread when they are few and on a worker pool when
+ * they are many. Outcomes come back in the order of the input whatever ran them, so the report does
+ * not depend on the pool, the cache or the number of cores.
+ */
+import { existsSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { fileURLToPath } from 'node:url';
+import type { Tinypool as TinypoolType } from 'tinypool';
+import { checkFileText, passOver, uncheckedOf, type DraftOptions } from '../engine.js';
+import { BUILTIN_PACK_FILE } from '../rulepack/index.js';
+import type { LoadedPacks } from '../rulepack/types.js';
+import { readDraftText, readWordDraft } from '../source/index.js';
+import type { Draft, Level } from '../types.js';
+import { VERSION } from '../version.js';
+import { cacheKeyOf, packsDigest, type FileOutcome, type ResultCache } from './cache.js';
+import type { PoolTask } from './pool-worker.js';
+
+export type { FileOutcome } from './cache.js';
+
+/** One file to check. */
+export interface FileTask {
+  path: string;
+  projectPath: string;
+  format: Draft['format'];
+}
+
+export interface RunFilesOptions {
+  cwd: string;
+  packs: LoadedPacks;
+  levels: Record<string, Level | 'off'>;
+  topic: DraftOptions['topic'];
+  jobs?: number;
+  cache?: ResultCache;
+  onProgress?: (done: number, total: number) => void;
+}
+
+/**
+ * How many on-topic files must wait before a pool is worth its start: below this, one thread does
+ * the lot.
+ */
+export const POOL_MIN_FILES = 8;
+
+/**
+ * Without `--jobs`, how much on-topic text must wait as well. Each worker loads the packs (YAML and
+ * schema) and the NLP library, measured at 1 to 4 s of CPU on this 2-core machine under load, about
+ * what checking half a megabyte of on-topic text costs in one thread: a docs repository with a few
+ * on-topic pages is faster without a pool. `--jobs N` (N > 1) starts one at POOL_MIN_FILES.
+ */
+export const POOL_MIN_BYTES = 1_000_000;
+
+/** The worker's module; absent when running from the TypeScript sources (tests), then no pool. */
+const WORKER_FILE = fileURLToPath(new URL('./pool-worker.js', import.meta.url));
+
+export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Promise<(FileOutcome | undefined)[]> {
+  const outcomes: (FileOutcome | undefined)[] = new Array<FileOutcome | undefined>(tasks.length);
+  const packsKey = options.cache === undefined ? '' : packsDigest(options.packs);
+  const jobs = Math.max(1, Math.floor(options.jobs ?? availableParallelism()));
+  const poolable = jobs > 1 && existsSync(WORKER_FILE) && options.packs.packs.every((p) => existsSync(p.file));
+  let done = 0;
+  const finish = (index: number, outcome: FileOutcome, key?: string): void => {
+    outcomes[index] = outcome;
+    if (key !== undefined && options.cache !== undefined && outcome.unchecked === undefined) void options.cache.set(key, outcome);
+    done += 1;
+    options.onProgress?.(done, tasks.length);
+  };
+  const draftOptions = (task: FileTask): DraftOptions => ({
+    levels: options.levels,
+    ...(options.topic === undefined ? {} : { topic: options.topic }),
+    ...(task.projectPath === task.path ? {} : { projectPath: task.projectPath }),
+  });
+
+  let waiting: { index: number; text: string; key: string | undefined }[] = [];
+  let waitingBytes = 0;
+  const enough = (): boolean => waiting.length >= POOL_MIN_FILES && (options.jobs !== undefined || waitingBytes >= POOL_MIN_BYTES);
+  let pool: TinypoolType | undefined;
+  const running: Promise<void>[] = [];
+  const dispatch = async (item: { index: number; text: string; key: string | undefined }): Promise<void> => {
+    const task = tasks[item.index] as FileTask;
+    const message: PoolTask = {
+      path: task.path, projectPath: task.projectPath, format: task.format, text: item.text, levels: options.levels,
+      packFiles: options.packs.packs.map((p) => p.file).filter((f) => f !== BUILTIN_PACK_FILE),
+      builtin: options.packs.packs[0]?.file === BUILTIN_PACK_FILE,
+    };
+    const outcome = (await (pool as TinypoolType).run(message)) as FileOutcome;
+    finish(item.index, outcome, item.key);
+  };
+  try {
+    for (let index = 0; index < tasks.length; index += 1) {
+      const task = tasks[index] as FileTask;
+      if (task.format === 'docx') {
+        // A Word package is read and checked here (a file that is not one fails the run, as before).
+        finish(index, checkFileText(await readWordDraft(task.path, options.cwd), options.packs, draftOptions(task)));
+        continue;
+      }
+      const text = await readDraftText(task.path, options.cwd);
+      if (typeof text !== 'string') {
+        finish(index, { claims: [], flags: [], unchecked: uncheckedOf(text.problem) });
+        continue;
+      }
+      // The raw-text look (a checklist, or no subject named) is done here: most files end at it.
+      const passed = passOver(text, options.packs);
+      if (passed !== undefined) {
+        finish(index, passed);
+        continue;
+      }
+      const key = options.cache === undefined ? undefined
+        : cacheKeyOf({ version: VERSION, packs: packsKey, path: task.path, projectPath: task.projectPath, format: task.format, levels: options.levels, text });
+      const cached = key === undefined ? undefined : options.cache?.get(key);
+      if (cached !== undefined) {
+        finish(index, cached);
+        continue;
+      }
+      waiting.push({ index, text, key });
+      waitingBytes += text.length;
+      if (pool === undefined && poolable && enough()) {
+        const { Tinypool } = await import('tinypool');
+        pool = new Tinypool({ filename: WORKER_FILE, minThreads: jobs, maxThreads: jobs, idleTimeout: 1000 });
+      }
+      if (pool !== undefined) {
+        for (const item of waiting) running.push(dispatch(item));
+        waiting = [];
+        // Hold at most a few files per worker in memory at once.
+        if (running.length >= jobs * 4) await Promise.all(running.splice(0, running.length - jobs * 2));
+      }
+    }
+    for (const item of waiting) {
+      const task = tasks[item.index] as FileTask;
+      finish(item.index, checkFileText({ path: task.path, text: item.text, format: task.format }, options.packs, draftOptions(task)), item.key);
+    }
+    await Promise.all(running);
+  } finally {
+    await pool?.destroy();
+  }
+  return outcomes;
+}
