@@ -52,6 +52,22 @@ describe('claims read as propositions, in wordings of our own', () => {
     expect(await serious(text)).toContain(ruleId);
   });
 
+  // A sentence that names only what a direction fact is about (the air, the ice), in a draft
+  // whose earlier sentence names the subject, and a verb that compares ages with its object.
+  it.each([
+    ['The Dome Fuji core was drilled in the 1990s. The air in the bubbles is older than the ice that holds it.', 'direction.trapped-air-younger-than-ice'],
+    ['The Dome Fuji core was drilled in the 1990s. The gas in each bubble predates the ice that traps it.', 'direction.trapped-air-younger-than-ice'],
+  ])('%s → %s', async (text, ruleId) => {
+    expect(await serious(text)).toContain(ruleId);
+  });
+
+  it.each([
+    'The Dome Fuji core was drilled in the 1990s. The ice predates the air bubbles sealed inside it.',
+    'The Dome Fuji core was drilled in the 1990s. The air in the bubbles postdates the ice around it.',
+  ])('passes the right way round: %s', async (text) => {
+    expect(await serious(text)).not.toContain('direction.trapped-air-younger-than-ice');
+  });
+
   it.each([
     'Warm ocean water holds less CO2, so the warming seas gave some of it back to the air.',
     'The trapped air is younger than the ice around it, because bubbles close only deep in the firn.',
