@@ -48,6 +48,11 @@ describe('claims read as propositions, in wordings of our own', () => {
     ["Warming drives CO2, and CO2's influence on temperature is too weak to detect in the cores.", 'logic.either-or-causation'],
     // "once" orders two events; "carbon" is the gas.
     ['Since the carbon only appears once the warming is well under way, none of that warming can be blamed on it.', 'logic.lag-rules-out-cause'],
+    // A cause phrase that holds its object; the other factor denied any part; another single agent;
+    // idioms of doing the whole work ("did the whole job").
+    ['The tilt of the orbit on its own hauled the planet out of the last ice age, and carbon dioxide had no part in it.', 'logic.single-cause'],
+    ['The deglaciation happened for one reason only: the deep ocean currents started up again.', 'logic.single-cause'],
+    ['Forget the gas: the orbit did the whole job by itself.', 'logic.single-cause'],
   ])('%s → %s', async (text, ruleId) => {
     expect(await serious(text)).toContain(ruleId);
   });
@@ -66,6 +71,14 @@ describe('claims read as propositions, in wordings of our own', () => {
     'The Dome Fuji core was drilled in the 1990s. The air in the bubbles postdates the ice around it.',
   ])('passes the right way round: %s', async (text) => {
     expect(await serious(text)).not.toContain('direction.trapped-air-younger-than-ice');
+  });
+
+  it.each([
+    // A share is not a single cause; "global warming" is a noun, not the orbit warming anything.
+    'Warmer seas alone account for only part of the glacial-to-interglacial CO2 rise, perhaps a quarter of it.',
+    'On their own, the orbital changes cannot account for several degrees of global warming.',
+  ])('no single cause: %s', async (text) => {
+    expect(await serious(text)).not.toContain('logic.single-cause');
   });
 
   it.each([
