@@ -42,6 +42,9 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
 
 function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   const kind = (t: Thing | undefined) => kindOf(s, t, previous);
+  // A pronoun that acts ("it could not have been a cause") stands for something that can act, not
+  // for the record that shows it ("Since the ice shows CO2 trailing the warmth, it ...").
+  const agentKind = (t: Thing | undefined) => kindOf(s, t, previous, RECORDS);
   const noun = h.key === 'nouns' || h.key === 'effects' || h.key === 'roles' || h.key === 'feedback';
   let polarity = polarityAt(s, h.first);
   // "the greenhouse effect of CO2 must be negligible": a role denied after the noun.
@@ -90,8 +93,9 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   }
   const cleft = cleftFocus(s, agentThing) ?? pseudoCleftFocus(s, h);
   if (cleft !== undefined) agentThing = cleft;
-  let agent = kind(agentThing);
   let patient = kind(patientThing);
+  // "it cannot have been a driver of that warmth": the pronoun is not the thing it acts on.
+  let agent = patientThing !== undefined && patientThing.kind !== 'pronoun' ? kindOf(s, agentThing, previous, new Set([...RECORDS, patientThing.kind])) : agentKind(agentThing);
   // "dragged us out of the last ice age": a cause phrase that holds its own object names the patient.
   const inside = s.of('entities').find((e) => e.first >= h.first && e.last <= h.last && (h.key === 'verbs' || h.key === 'start'));
   if (inside !== undefined && inside.key !== agent) patient = inside.key;
@@ -127,6 +131,9 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   return out;
 }
 
+/** Things that hold a record and act on nothing. */
+const RECORDS = new Set(['ice', 'ice-core', 'trapped-air', 'co2-station']);
+
 const COPULAS = new Set(['is', 'was', 'are', 'were', 'be', 'been', 'being']);
 /** The copula within six words after a predicate noun, in its clause ("the driver ... was"). */
 function copulaAfter(s: ReadSentence, i: number): number | undefined {
@@ -144,8 +151,8 @@ function copulaAfter(s: ReadSentence, i: number): number | undefined {
 
 /** "must be negligible", "is irrelevant": a role denied by what is said of it. */
 function deniedAfter(s: ReadSentence, i: number): boolean {
-  const after = s.words.slice(i + 1, i + 8).filter((w) => w.clause === s.words[i]?.clause);
-  if (after.some((w) => /^(?:negligible|irrelevant|unimportant|insignificant|immaterial|trivial|tiny|nil|zero|minimal|undetectable|imperceptible|nonexistent|non-existent|absent|faint)$/u.test(w.text))) return true;
+  const after = s.words.slice(i + 1, i + 11).filter((w) => w.clause === s.words[i]?.clause);
+  if (after.some((w) => /^(?:negligible|irrelevant|unimportant|insignificant|immaterial|trivial|tiny|nil|zero|minimal|undetectable|imperceptible|nonexistent|non-existent|absent|faint|nothing|none)$/u.test(w.text))) return true;
   // "too faint to find", "too weak to matter": a degree that rules the role out.
   return after.some((w, k) => w.text === 'too' && after[k + 2]?.text === 'to');
 }

@@ -48,6 +48,11 @@ describe('claims read as propositions, in wordings of our own', () => {
     ["Warming drives CO2, and CO2's influence on temperature is too weak to detect in the cores.", 'logic.either-or-causation'],
     // "once" orders two events; "carbon" is the gas.
     ['Since the carbon only appears once the warming is well under way, none of that warming can be blamed on it.', 'logic.lag-rules-out-cause'],
+    // A dismissal ("so much for"), a role put at nothing far after its noun, and a pronoun that
+    // acts standing for the gas, not for the ice that records it.
+    ['The cores say the warm-up came first and the CO2 only afterwards, so much for CO2 driving the warming.', 'logic.lag-rules-out-cause'],
+    ['Since carbon dioxide trails the temperature by centuries, its part in the deglacial warming must surely have been next to nothing.', 'logic.lag-rules-out-cause'],
+    ['As the Dome C ice shows carbon dioxide lagging the warmth, it cannot have been a driver of that warmth.', 'logic.lag-rules-out-cause'],
     // A cause phrase that holds its object; the other factor denied any part; another single agent;
     // idioms of doing the whole work ("did the whole job").
     ['The tilt of the orbit on its own hauled the planet out of the last ice age, and carbon dioxide had no part in it.', 'logic.single-cause'],
