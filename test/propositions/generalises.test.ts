@@ -53,6 +53,9 @@ describe('claims read as propositions, in wordings of our own', () => {
     ['The cores say the warm-up came first and the CO2 only afterwards, so much for CO2 driving the warming.', 'logic.lag-rules-out-cause'],
     ['Since carbon dioxide trails the temperature by centuries, its part in the deglacial warming must surely have been next to nothing.', 'logic.lag-rules-out-cause'],
     ['As the Dome C ice shows carbon dioxide lagging the warmth, it cannot have been a driver of that warmth.', 'logic.lag-rules-out-cause'],
+    // Both directions set against each other in one sentence, then one picked.
+    ['Put the question of whether the gas pushed the temperature or the temperature pushed the gas to the ice, and the reply is short: temperature.', 'logic.either-or-causation'],
+    ['Over the glacial cycles it was the warmth that moved the CO2, not the CO2 that moved the warmth.', 'logic.either-or-causation'],
     // A cause phrase that holds its object; the other factor denied any part; another single agent;
     // idioms of doing the whole work ("did the whole job").
     ['The tilt of the orbit on its own hauled the planet out of the last ice age, and carbon dioxide had no part in it.', 'logic.single-cause'],
@@ -84,6 +87,11 @@ describe('claims read as propositions, in wordings of our own', () => {
     'On their own, the orbital changes cannot account for several degrees of global warming.',
   ])('no single cause: %s', async (text) => {
     expect(await serious(text)).not.toContain('logic.single-cause');
+  });
+
+  // The choice answered with both directions is the right answer.
+  it('passes a choice answered with both: each pushed the other', async () => {
+    expect(await serious('Ask whether CO2 pushed the temperature or the temperature pushed CO2, and the answer is both: each pushed the other.')).not.toContain('logic.either-or-causation');
   });
 
   it.each([
