@@ -95,6 +95,18 @@ describe('claims read as propositions, in wordings of our own', () => {
   });
 
   it.each([
+    // "holds less", "keeps more": the size word is the uptake's, not a change of temperature.
+    'Sea water that heats up holds less dissolved CO2, not more, so a warming ocean hands some gas back to the air.',
+    'Ocean water that warms can keep less carbon dioxide in solution.',
+  ])('the solubility fact the right way round: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+
+  it('the solubility fact the wrong way round, with a size word on the verb: a colder sea keeps less CO2', async () => {
+    expect(await serious('A colder ocean keeps less carbon dioxide dissolved, and a warmer one keeps more.')).toContain('direction.co2-solubility-falls-with-warming');
+  });
+
+  it.each([
     'Warm ocean water holds less CO2, so the warming seas gave some of it back to the air.',
     'The trapped air is younger than the ice around it, because bubbles close only deep in the firn.',
     'CO2 rose after the first Antarctic warming, and then it amplified the warming and spread it around the globe.',

@@ -45,7 +45,8 @@ function detect({ index, read }: DetectInput): Cue[] {
     if (second === undefined) continue;
     const between = here.s.text.slice(first.end, second.start + 12);
     const choice = /\bor\b/u.test(between);
-    const against = /(?:^|[,;]\s*|\s)(?:not|rather than|instead of)\s/u.test(here.s.text.slice(first.end, second.end));
+    // "..., not CO2 that moved temperature": the second direction itself is what "not" sets aside.
+    const against = /(?:^|[,;]\s*|\s)(?:not|rather than|instead of)\s+(?:the\s+)?$/u.test(here.s.text.slice(first.end, second.start));
     if (against && first.polarity === 'asserted') return [{ start: first.start, end: second.end }];
     // The answer starts past the second direction's own object ("...or temperature pushes CO2, and ...").
     const after = here.s.text.slice(second.end);
