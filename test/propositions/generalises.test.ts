@@ -56,6 +56,11 @@ describe('claims read as propositions, in wordings of our own', () => {
     // Both directions set against each other in one sentence, then one picked.
     ['Put the question of whether the gas pushed the temperature or the temperature pushed the gas to the ice, and the reply is short: temperature.', 'logic.either-or-causation'],
     ['Over the glacial cycles it was the warmth that moved the CO2, not the CO2 that moved the warmth.', 'logic.either-or-causation'],
+    // A regional record read as the globe, with a "than" that compares two times, not two places,
+    // and a "not just" that widens the claim (Antarctic swing about twice the global mean:
+    // Jouzel et al. 2007; global LGM cooling about 6 °C: Tierney et al. 2020).
+    ['The deuterium in the Vostok ice shows that Earth as a whole was about 9 °C colder at the glacial peak than before industry.', 'scope.regional-record-as-global'],
+    ['The Talos Dome core shows it was far colder in the last glacial, and that is the whole world, not just Antarctica.', 'scope.regional-record-as-global'],
     // A cause phrase that holds its object; the other factor denied any part; another single agent;
     // idioms of doing the whole work ("did the whole job").
     ['The tilt of the orbit on its own hauled the planet out of the last ice age, and carbon dioxide had no part in it.', 'logic.single-cause'],
@@ -87,6 +92,10 @@ describe('claims read as propositions, in wordings of our own', () => {
     'On their own, the orbital changes cannot account for several degrees of global warming.',
   ])('no single cause: %s', async (text) => {
     expect(await serious(text)).not.toContain('logic.single-cause');
+  });
+
+  it('a record set against the global mean passes: Antarctic swings are larger than the global mean', async () => {
+    expect(await serious('The Vostok record swings by about 9 °C, larger than the global mean change of about 5 °C.')).not.toContain('scope.regional-record-as-global');
   });
 
   // The choice answered with both directions is the right answer.
