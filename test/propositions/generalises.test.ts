@@ -61,6 +61,9 @@ describe('claims read as propositions, in wordings of our own', () => {
     // Jouzel et al. 2007; global LGM cooling about 6 °C: Tierney et al. 2020).
     ['The deuterium in the Vostok ice shows that Earth as a whole was about 9 °C colder at the glacial peak than before industry.', 'scope.regional-record-as-global'],
     ['The Talos Dome core shows it was far colder in the last glacial, and that is the whole world, not just Antarctica.', 'scope.regional-record-as-global'],
+    // A global order stated in its own words is a direction error, even after a sentence that
+    // named an Antarctic record (global temperature lagged CO2: Shakun et al. 2012).
+    ['Antarctic temperature rose by about 9 °C in that time. Averaged over the globe, temperature started rising before the carbon dioxide did.', 'direction.global-co2-ahead-of-warming'],
     // A cause phrase that holds its object; the other factor denied any part; another single agent;
     // idioms of doing the whole work ("did the whole job").
     ['The tilt of the orbit on its own hauled the planet out of the last ice age, and carbon dioxide had no part in it.', 'logic.single-cause'],
