@@ -26,6 +26,9 @@ const ROWS: [sentence: string, expected: string[]][] = [
   ['The Younger Dryas began 12,900 years ago and ended 11,700 years ago.', ['younger-dryas-start', 'younger-dryas-end']],
   ['Vostok reaches back 420,000 years and is 3,623 m deep.', ['vostok-record-span', 'vostok-drilled-depth']],
   ['The last ice age started to wane about 18,000 years ago but was over by about 11,700 years ago.', ['termination-1-start', 'termination-1-end']],
+  // A clause with a subject of its own: its later predicate shares that subject (orbital periods of
+  // about 41,000 and 100,000 years: Hays et al. 1976, Science 194, 1121-1132).
+  ['The tilt of the axis swings back and forth over about 41,000 years, and the shape of the orbit stretches and rounds on a cycle of roughly 100,000 years.', ['milankovitch-obliquity-period', 'milankovitch-eccentricity-period']],
 ];
 
 describe('predicates that share a subject', () => {
