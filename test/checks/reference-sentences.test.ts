@@ -51,3 +51,21 @@ describe('sea level in everyday wording', () => {
     expect(verdicts).toEqual([verdict]);
   });
 });
+
+// A span that is a lead, a lag or a sampling step is not how long the deglaciation took (about
+// 7,000 years, 18,000 to 11,500 years ago: Clark et al. 2012, doi 10.1073/pnas.1116619109).
+describe('spans that are not durations of the deglaciation', () => {
+  it.each([
+    ['Across Termination I, Antarctic temperature was leading by roughly 570 years.', '570 years'],
+    ['The new core will measure CO2 at 20-year resolution across Termination I.', '20-year'],
+    ['The rise that took the last deglaciation millennia, we have matched in the past fifty years.', 'fifty years'],
+  ])('%s', (sentence, text) => {
+    const { bound } = judge([sentence, text] as unknown as Said);
+    expect(bound).not.toContain('termination-1-duration');
+    expect(bound).not.toContain('co2-deglacial-rise-duration');
+  });
+
+  it('still binds a real duration: the last deglaciation took about 7,000 years', () => {
+    expect(judge(['The last deglaciation took about 7,000 years.', 'about 7,000 years'] as unknown as Said).bound).toEqual(['termination-1-duration']);
+  });
+});
