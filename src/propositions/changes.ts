@@ -66,7 +66,11 @@ function temperatureHolder(s: ReadSentence, h: LexHit): Thing | undefined {
   if (water !== undefined && s.things.every((t) => t === water || t.first <= h.last || t.first > water.first || t.region !== undefined || t.kind === 'temperature')) return water;
   const before = thingBefore(s, h.first);
   const adjacentBefore = before !== undefined && h.first - before.last <= 4;
-  const after = thingAfter(s, h.last, 2);
+  // "plunged back into the cold, Antarctica was warming": a thing past a comma is another clause's.
+  const following = thingAfter(s, h.last, 2);
+  const ownClause = (t: Thing) =>
+    /^(?:was|were|is|are|had|has|did|got|stayed|kept|went|became|remained|warmed|cooled)$/u.test(s.words[t.last + 1]?.text ?? '') || s.of('changes').some((c) => c.first > t.last && c.first - t.last <= 3);
+  const after = following !== undefined && (s.words[following.first]?.segment === s.words[h.last]?.segment || !ownClause(following)) ? following : undefined;
   if (after !== undefined && (!adjacentBefore || h.first - (before?.last ?? 0) > 1) && after.kind !== 'pronoun') return after;
   return adjacentBefore ? before : undefined;
 }
@@ -124,13 +128,18 @@ export function readRelations(s: ReadSentence, directed: Directed[]): Relation[]
     const segmentOf = (i: number) => s.words[i]?.segment;
     const ownVerb = (t: Directed) => segmentOf(t.first) !== segmentOf(u.first) && s.of('uptake').some((h) => segmentOf(h.first) === segmentOf(t.first));
     const sameClause = temps.filter((t) => s.words[t.first]?.clause === clause && !isAfterThan(s, t) && !ownVerb(t));
-    const pool = sameClause.length > 0 ? sameClause : temps.length === 1 ? temps : [];
+    // "Cold water holds more CO2 than warm water, which is why ... on a hot day".
+    // A warmth said of nothing named ("on a hot day") is the water's only in the uptake's own segment.
+    const own = sameClause.filter((t) => t.of !== 'temperature' || segmentOf(t.first) === segmentOf(u.first));
+    const pool = own.length > 0 ? own : temps.length === 1 ? temps : [];
     // "Cold water releases CO2 when it warms": the change the release goes with, not the starting state.
     const changes = pool.filter((t) => t.form === 'change');
     const t = (changes.length > 0 ? changes : pool).sort((a, b) => Math.abs(a.first - u.first) - Math.abs(b.first - u.first))[0];
     if (t === undefined || isConcessive(s, t)) continue;
     // "It is not true that warmer seas absorb more CO2": one denial turns the whole relation round.
-    const denied = t.negated || u.negated;
+    // "gives up CO2 rather than absorbing more of it": the uptake set aside is denied.
+    const setAside = /^(?:rather than|instead of)$/u.test(s.words.slice(Math.max(0, u.first - 2), u.first).map((w) => w.text).join(' '));
+    const denied = (t.negated || u.negated) !== setAside;
     const y = denied ? { ...u, dir: (-u.dir) as 1 | -1 } : u;
     relations.push({ kind: 'relation', x: { ...t, of: 'water' }, y, start: Math.min(t.start, u.start), end: Math.max(t.end, u.end) });
   }

@@ -116,6 +116,12 @@ describe('claims read as propositions, in wordings of our own', () => {
     // "holds less", "keeps more": the size word is the uptake's, not a change of temperature.
     'Sea water that heats up holds less dissolved CO2, not more, so a warming ocean hands some gas back to the air.',
     'Ocean water that warms can keep less carbon dioxide in solution.',
+    // A warmth of nothing named, in another clause; an uptake set aside with "rather than".
+    'Cold water holds more dissolved CO2 than warm water, which is why a fizzy drink goes flat on a hot day.',
+    'A warmer ocean gives up carbon dioxide rather than absorbing more of it.',
+    // A region past a comma that has its own verb is that clause's subject (Antarctica warmed
+    // during the Younger Dryas: Pedro et al. 2016, from memory).
+    'During the Younger Dryas, while Greenland was plunged back into the cold, Antarctica was slowly warming.',
   ])('the solubility fact the right way round: %s', async (text) => {
     expect(await serious(text)).toEqual([]);
   });
