@@ -21,9 +21,17 @@ const caught = { hit: 0, of: 0 };
 /**
  * Per-set floors where a set stands apart: tuning-e and tuning-f were the blind hold-out until it was
  * measured twice with tuning between; spent, they became sets to tune on (47.9% and 62.5% caught,
- * 10.1% and 7.5% false flags when they joined).
+ * 10.1% and 7.5% false flags when they joined). tuning-h-1..3 were the next hold-out (50.0%, 54.8%
+ * and 51.3% caught, 10.8%, 5.7% and 4.8% false flags when they joined); tuning-g holds claims as
+ * people write them in public (53.7% caught, 13.7% false flags when it joined).
  */
-const FLOORS: Record<string, { recall: number; falseFlags: number }> = { 'tuning-e': { recall: 0.45, falseFlags: 0.11 } };
+const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
+  'tuning-e': { recall: 0.45, falseFlags: 0.11 },
+  'tuning-g': { recall: 0.6, falseFlags: 0.13 },
+  'tuning-h-1': { recall: 0.6, falseFlags: 0.1 },
+  'tuning-h-2': { recall: 0.55, falseFlags: 0.08 },
+  'tuning-h-3': { recall: 0.6, falseFlags: 0.08 },
+};
 const DEFAULT_FLOOR = { recall: 0.5, falseFlags: 0.08 };
 beforeAll(async () => {
   packs = await loadPacks([]);
@@ -52,8 +60,8 @@ describe('the evaluation corpus', () => {
     caught.of += score.recall.of;
   });
 
-  it('catches at least 62% of the seeded errors over all the sets to tune on (66.5% measured)', () => {
+  it('catches at least 70% of the seeded errors over all the sets to tune on (73.5% measured)', () => {
     expect(caught.of).toBeGreaterThan(0);
-    expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.62);
+    expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.7);
   });
 });
