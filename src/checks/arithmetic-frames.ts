@@ -12,7 +12,7 @@ const before = (words: string[]): RegExp => new RegExp(String.raw`(?:^|[^\p{L}])
 const after = (words: string[]): RegExp => new RegExp(String.raw`^[\s\u00A0-]*(?:${list(words)})(?![\p{L}])`, 'iu');
 
 const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+$`, 'iu');
-const TO = new RegExp(String.raw`^${S}*(?:to|until|till|through|–|—|-)${S}*$`, 'iu');
+const TO = new RegExp(String.raw`^${S}*(?:(?:up|down)${S}+to|to|until|till|through|–|—|-)${S}*$`, 'iu');
 /** A phrase of time or place between the start of a from-to pair and its "to" (a date in it reads DATE). */
 const WHEN_TO = new RegExp(String.raw`^,?${S}+(?:in|by|at|around|circa|during|before|after|near)${S}+[^\d.;:!?()]{1,40}?${S}+(?:to|until|till)${S}+$`, 'iu');
 /** Words that open the start of a stretch of time or a change, and words that mark its end ("... clear by B"). */

@@ -42,6 +42,8 @@ export function hedgeBefore(text: string, at: number, dimension: Dimension): Hed
   const start = at - head.length + m.index + (m[0].length - m[0].trimStart().length);
   if (PLACE_WORDS.test(word) && dimension === 'length') return undefined;
   if (/^over$/i.test(word) && dimension === 'duration' && CHANGE_BEFORE_OVER.test(text.slice(Math.max(0, start - 60), start))) return undefined;
+  // "from 190 up to 280": after "from" and a number, "up to" is the other end, not a bound.
+  if (/^(?:up|down) to$/iu.test(word) && /\bfrom\s+(?:about\s+|around\s+|roughly\s+|some\s+)?[\d.,]+(?:\s*[\p{L}%°]+)?\s*$/iu.test(text.slice(Math.max(0, start - 40), start))) return undefined;
   const rule = hedgeRule(word);
   return rule === undefined ? undefined : { word, rule, start, end: start + word.length };
 }

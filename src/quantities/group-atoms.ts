@@ -35,6 +35,8 @@ const BETWEEN = new RegExp(String.raw`(?:^|[^\p{L}])(?<word>between)${S}+(?:[^\s
 const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
 /** "to about", "to more than": the far end of a from-to pair may carry its own hedge (a range may not). */
 const TO_HEDGED = new RegExp(String.raw`^${S}*(?:to|through|until|till)${S}+(?:${HEDGE_PREFIX_PATTERN})${S}*$`, 'iu');
+/** "from 190 up to 280", "from 280 down to 190": the far end of a from-to pair after a direction word. */
+const TO_DIRECTED = new RegExp(String.raw`^${S}*(?:up|down)${S}+to${S}+(?:(?:about|around|roughly|some|nearly|almost)${S}+)?$`, 'iu');
 const RANGE_VERB = new RegExp(String.raw`(?:rang(?:e|es|ed|ing)|var(?:y|ies|ied|ying)|anywhere|estimates?)${S}+from${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
 
 const joinable = (a: Atom): boolean => a.form === 'digits' || a.form === 'words';
@@ -86,7 +88,7 @@ export function groupParts(text: string, parts: Part[]): Group[] {
     const second: Part = { ...q, unit: q.unit ?? p.unit };
     if (PLUS_MINUS.test(joiner)) {
       groups.push({ kind: 'plus-minus', parts: [shared, second], role: 'alone', prefixStart: undefined });
-    } else if ((RANGE_JOIN.test(joiner) || TO_HEDGED.test(joiner)) && FROM.test(before) && !RANGE_VERB.test(before)) {
+    } else if ((RANGE_JOIN.test(joiner) || TO_HEDGED.test(joiner) || TO_DIRECTED.test(joiner)) && FROM.test(before) && !RANGE_VERB.test(before)) {
       groups.push({ kind: 'single', parts: [shared], role: 'from', prefixStart: undefined });
       groups.push({ kind: 'single', parts: [second], role: 'to', prefixStart: undefined });
     } else if (RANGE_JOIN.test(joiner) || between !== null) {
