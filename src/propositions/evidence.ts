@@ -16,11 +16,17 @@ export function readEvidence(s: ReadSentence, causes: readonly Cause[]): Evidenc
     if (proof === undefined) continue;
     const proofEnd = s.words[proof.last]?.end ?? 0;
     const cause = causes.find((k) => k.end > proofEnd && k.polarity !== 'open' && k.role !== 'feedback');
-    if (cause === undefined) continue;
-    out.push({ kind: 'evidence', start: s.words[c.first]?.start ?? 0, end: cause.end });
+    // "a match that close settles the question": the question the draft is about is the causal one.
+    const question = s.words.findIndex((w, i) => i > proof.last && i <= proof.last + 3 && QUESTION.test(w.text) && /^(?:the|this|that)$/u.test(s.words[i - 1]?.text ?? ''));
+    const end = cause?.end ?? (question >= 0 ? s.words[question]?.end : undefined);
+    if (end === undefined) continue;
+    out.push({ kind: 'evidence', start: s.words[c.first]?.start ?? 0, end });
   }
   return out;
 }
+
+/** What a proof word may settle instead of a stated cause: "settles the question", "the matter". */
+const QUESTION = /^(?:question|matter|debate|argument|issue|case)$/u;
 
 /** "hardly proves", "need not prove", "may suggest": no claim of proof. */
 function hedged(s: ReadSentence, i: number): boolean {

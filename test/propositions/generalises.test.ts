@@ -70,6 +70,8 @@ describe('claims read as propositions, in wordings of our own', () => {
     // A °F figure that points back to the °C change of the sentence before, with "readers" inside a
     // phrase that reports nobody's view (NIST SP 811: a change of 1 °C is a change of 1.8 °F).
     ['Global mean temperature at the Last Glacial Maximum was about 6 °C below pre-industrial. For readers who think in Fahrenheit, that makes the ice-age world about 43 °F colder.', 'unit.temperature-difference'],
+    // A co-variation said to settle "the question" (the causal one the piece is about).
+    ['Temperature and CO2 rise and fall together in the Dome C ice, and a fit that tight settles the matter.', 'logic.correlation-as-proof'],
     // A cause phrase that holds its object; the other factor denied any part; another single agent;
     // idioms of doing the whole work ("did the whole job").
     ['The tilt of the orbit on its own hauled the planet out of the last ice age, and carbon dioxide had no part in it.', 'logic.single-cause'],
@@ -105,6 +107,10 @@ describe('claims read as propositions, in wordings of our own', () => {
 
   it('a record set against the global mean passes: Antarctic swings are larger than the global mean', async () => {
     expect(await serious('The Vostok record swings by about 9 °C, larger than the global mean change of about 5 °C.')).not.toContain('scope.regional-record-as-global');
+  });
+
+  it('a co-variation that settles nothing causal passes: the match settles the dating question', async () => {
+    expect(await serious('Temperature and CO2 rise and fall together in the Dome C ice; the match does not settle the question on its own.')).not.toContain('logic.correlation-as-proof');
   });
 
   // The choice answered with both directions is the right answer.
