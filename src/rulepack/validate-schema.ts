@@ -3,26 +3,40 @@
  * error into a FirnlineError placed at the YAML node it is about. Schemas are compiled once.
  */
 import { readFileSync } from 'node:fs';
-import ajvModule, { type ErrorObject, type ValidateFunction } from 'ajv/dist/2020.js';
+import { createRequire } from 'node:module';
+import type { ErrorObject, ValidateFunction } from 'ajv/dist/2020.js';
 import type { FirnlineError } from '../errors.js';
+import { newAjv, schemaDigest } from './validator-code.js';
 import type { YamlFile } from './yaml-file.js';
 
-// ajv is CommonJS: under Node's ESM loader the default import is the module object, whose
-// `default` is the class; bundlers may hand over the class itself.
-const Ajv2020 = (ajvModule as unknown as { default?: typeof ajvModule.default }).default ?? (ajvModule as unknown as typeof ajvModule.default);
-const ajv = new Ajv2020({ allErrors: true, strict: true });
+type Ajv = ReturnType<typeof newAjv>;
+let ajv: Ajv | undefined;
 const compiled = new Map<string, ValidateFunction>();
 
 /** The schemas shipped in the package's `schemas/` folder. */
 export type SchemaName = 'rulepack' | 'settings';
 
+/**
+ * The schema's validator: the one the build generated (validator-code.ts) when it was made from
+ * this very schema text, else compiled here by ajv (from src/, or when the schema has changed).
+ */
 function validator(name: SchemaName): ValidateFunction {
   const known = compiled.get(name);
   if (known !== undefined) return known;
-  const url = new URL(`../../schemas/${name}.schema.json`, import.meta.url);
-  const validate = ajv.compile(JSON.parse(readFileSync(url, 'utf8')) as object);
+  const text = readFileSync(new URL(`../../schemas/${name}.schema.json`, import.meta.url), 'utf8');
+  const validate = precompiled(name, text) ?? (ajv ??= newAjv()).compile(JSON.parse(text) as object);
   compiled.set(name, validate);
   return validate;
+}
+
+function precompiled(name: SchemaName, schemaText: string): ValidateFunction | undefined {
+  let generated: ValidateFunction & { schemaSha256?: unknown };
+  try {
+    generated = createRequire(import.meta.url)(`../generated/${name}.validate.cjs`) as typeof generated;
+  } catch {
+    return undefined;
+  }
+  return typeof generated === 'function' && generated.schemaSha256 === schemaDigest(schemaText) ? generated : undefined;
 }
 
 /** How each ajv keyword is put into words (the `at` part is added by the caller). */
