@@ -2,7 +2,7 @@
 // The second step of `npm run build`, after tsc: writes dist/generated/, what start-up would
 // otherwise compute on every run, each piece with the digests of what it was made from so that a
 // run uses it only while those still match (src/rulepack/compiled-pack.ts, validator-code.ts):
-//   - <name>.validate.cjs: the JSON Schema validators of schemas/rulepack and settings as standalone code;
+//   - <name>.validate.cjs: the JSON Schema validators of schemas/ (rule pack, settings, ledger) as standalone code;
 //   - builtin-pack.json: rules/paleoclimate.yaml loaded (validated, resolved, citations rendered).
 import { mkdir, readFile, writeFile, rename } from 'node:fs/promises';
 import { dirname, join, relative, resolve } from 'node:path';
@@ -19,11 +19,8 @@ async function writeWhole(file, text) {
   await rename(`${file}.tmp`, file);
 }
 
-const { validatorModuleCode } = await import('../dist/rulepack/validator-code.js');
-for (const name of ['rulepack', 'settings']) {
-  const schema = await readFile(join(root, 'schemas', `${name}.schema.json`), 'utf8');
-  await writeWhole(join(out, `${name}.validate.cjs`), validatorModuleCode(schema));
-}
+const { SCHEMA_OPTIONS, validatorModuleCode } = await import('../dist/rulepack/validator-code.js');
+for (const name of Object.keys(SCHEMA_OPTIONS)) await writeWhole(join(out, `${name}.validate.cjs`), validatorModuleCode(name));
 
 /** The modules of dist/ that `entry` loads, following relative static and dynamic imports, sorted. */
 async function moduleGraph(entry) {

@@ -1,43 +1,15 @@
 /**
  * Validates YAML data against one of our JSON Schemas (draft 2020-12) with ajv, and turns each ajv
- * error into a FirnlineError placed at the YAML node it is about. Schemas are compiled once.
+ * error into a FirnlineError placed at the YAML node it is about. Validators come from
+ * validator-code.ts (generated at build time, or compiled once per run).
  */
-import { readFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
-import type { ErrorObject, ValidateFunction } from 'ajv/dist/2020.js';
+import type { ErrorObject } from 'ajv/dist/2020.js';
 import type { FirnlineError } from '../errors.js';
-import { newAjv, schemaDigest } from './validator-code.js';
+import { schemaValidator } from './validator-code.js';
 import type { YamlFile } from './yaml-file.js';
-
-type Ajv = ReturnType<typeof newAjv>;
-let ajv: Ajv | undefined;
-const compiled = new Map<string, ValidateFunction>();
 
 /** The schemas shipped in the package's `schemas/` folder. */
 export type SchemaName = 'rulepack' | 'settings';
-
-/**
- * The schema's validator: the one the build generated (validator-code.ts) when it was made from
- * this very schema text, else compiled here by ajv (from src/, or when the schema has changed).
- */
-function validator(name: SchemaName): ValidateFunction {
-  const known = compiled.get(name);
-  if (known !== undefined) return known;
-  const text = readFileSync(new URL(`../../schemas/${name}.schema.json`, import.meta.url), 'utf8');
-  const validate = precompiled(name, text) ?? (ajv ??= newAjv()).compile(JSON.parse(text) as object);
-  compiled.set(name, validate);
-  return validate;
-}
-
-function precompiled(name: SchemaName, schemaText: string): ValidateFunction | undefined {
-  let generated: ValidateFunction & { schemaSha256?: unknown };
-  try {
-    generated = createRequire(import.meta.url)(`../generated/${name}.validate.cjs`) as typeof generated;
-  } catch {
-    return undefined;
-  }
-  return typeof generated === 'function' && generated.schemaSha256 === schemaDigest(schemaText) ? generated : undefined;
-}
 
 /** How each ajv keyword is put into words (the `at` part is added by the caller). */
 const MESSAGES: Record<string, (e: ErrorObject, key: string) => string> = {
@@ -66,7 +38,7 @@ function article(type: string): string {
 
 /** Every schema problem in `yaml`, one FirnlineError each, in file order; empty when valid. */
 export function schemaErrors(yaml: YamlFile, name: SchemaName): FirnlineError[] {
-  const validate = validator(name);
+  const validate = schemaValidator(name);
   if (validate(yaml.data ?? {})) return [];
   const seen = new Set<string>();
   const errors: FirnlineError[] = [];

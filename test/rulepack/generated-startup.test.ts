@@ -6,14 +6,15 @@ import { copyFileSync, mkdtempSync, readFileSync, writeFileSync, appendFileSync,
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { fileURLToPath, pathToFileURL } from 'node:url';
 import { isDeepStrictEqual } from 'node:util';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
 import type { ValidateFunction } from 'ajv/dist/2020.js';
 import { BUILTIN_PACK_FILE, loadRulePack } from '../../src/rulepack/index.js';
 import { compiledPackText, currentInputs, readCompiledPack, type PackInputPaths } from '../../src/rulepack/compiled-pack.js';
-import { newAjv, validatorModuleCode } from '../../src/rulepack/validator-code.js';
+import { compileNow, validatorModuleCode, type schemaValidator as schemaValidatorType } from '../../src/rulepack/validator-code.js';
+import type { loadPacks as loadPacksType } from '../../src/rulepack/index.js';
 import type { RulePack } from '../../src/rulepack/types.js';
 
 const root = fileURLToPath(new URL('../../', import.meta.url));
@@ -44,6 +45,21 @@ describe('the compiled built-in pack (dist/generated/builtin-pack.json)', () => 
     // A reference value's source is the pack's own source entry, as the YAML loader shares it.
     const cited = compiled!.references.find((r) => r.sources.length > 0)!;
     expect(compiled!.sources).toContain(cited.sources[0]);
+  });
+});
+
+describe('the built code (dist/) takes the generated forms', () => {
+  it('loads the built-in pack from its compiled form: citations are plain data, not rendered on read', async () => {
+    const { loadPacks } = (await import(pathToFileURL(join(root, 'dist/rulepack/index.js')).href)) as { loadPacks: typeof loadPacksType };
+    const packs = await loadPacks([]);
+    const cited = packs.packs[0]!.sources.find((s) => s.csl !== undefined)!;
+    expect(Object.getOwnPropertyDescriptor(cited, 'short')?.get).toBeUndefined();
+    expect(typeof cited.short).toBe('string');
+  });
+
+  it.each(['rulepack', 'settings', 'ledger'] as const)('validates with the generated %s validator', async (name) => {
+    const { schemaValidator } = (await import(pathToFileURL(join(root, 'dist/rulepack/validator-code.js')).href)) as { schemaValidator: typeof schemaValidatorType };
+    expect(schemaValidator(name)).toBe(require(join(generated, `${name}.validate.cjs`)));
   });
 });
 
@@ -117,17 +133,24 @@ describe('the standalone schema validators (dist/generated/<name>.validate.cjs)'
     ['unknown key', { colour: 'blue' }],
   ];
 
-  it.each(['rulepack', 'settings'])('%s: the generated module is what ajv generates from the schema now', (name) => {
-    const schema = readFileSync(schemaFile(name), 'utf8');
-    expect(readFileSync(join(generated, `${name}.validate.cjs`), 'utf8')).toBe(validatorModuleCode(schema));
+  const ledgerSamples: [string, unknown][] = [
+    ['empty', { signoffs: null }],
+    ['one sign-off', { signoffs: [{ claim: 'c0123456789', file: 'docs/a.md', text: 'CO2 rose.', decision: 'approved', reviewer: 'R. Eide', date: '2025-03-14', pack_version: '1.1.0' }] }],
+    ['bad claim id and decision', { signoffs: [{ claim: 'x1', file: 'a.md', text: 't', decision: 'maybe', reviewer: 'R', date: 'soon', pack_version: '1' }] }],
+    ['missing keys', { signoffs: [{ claim: 'c0123456789' }] }],
+  ];
+
+  it.each(['rulepack', 'settings', 'ledger'] as const)('%s: the generated module is what ajv generates from the schema now', (name) => {
+    expect(readFileSync(join(generated, `${name}.validate.cjs`), 'utf8')).toBe(validatorModuleCode(name));
   });
 
   it.each([
     ['rulepack', packSamples],
     ['settings', () => settingsSamples],
+    ['ledger', () => ledgerSamples],
   ] as const)('%s: the generated validator and ajv accept and refuse the same samples, with the same errors', (name, samples) => {
     const generatedValidate = require(join(generated, `${name}.validate.cjs`)) as ValidateFunction;
-    const compiledNow = newAjv().compile(JSON.parse(readFileSync(schemaFile(name), 'utf8')) as object);
+    const compiledNow = compileNow(name);
     let refused = 0;
     for (const [, data] of samples()) {
       const a = generatedValidate(data);
