@@ -2,7 +2,7 @@
  * The schema validators as standalone code (ajv's "standalone validation code"), generated at build
  * time by scripts/build-generated.js into dist/generated/<name>.validate.cjs, so a run compiles no
  * schema and does not even load ajv. The JSON Schemas in schemas/ stay the truth: each generated
- * module carries the SHA-256 of the schema text and ajv options it was made from, and
+ * module carries the SHA-256 of the schema text, ajv options and package.json it was made from, and
  * `schemaValidator` uses it only while that still matches; else (from src/, or after an edit of a
  * schema without a build) it compiles the schema with ajv as before.
  */
@@ -35,9 +35,13 @@ export function schemaText(name: ValidatedSchema): string {
   return readFileSync(new URL(`../../schemas/${name}.schema.json`, import.meta.url), 'utf8');
 }
 
-/** The SHA-256 of a schema's text and its ajv options, as the generated module states it. */
+/**
+ * The SHA-256 of a schema's text, its ajv options and Firnline's package.json (which pins the ajv
+ * version that wrote the code), as the generated module states it.
+ */
 export function schemaDigest(name: ValidatedSchema, text: string): string {
-  return createHash('sha256').update(JSON.stringify(SCHEMA_OPTIONS[name])).update('\0').update(text).digest('hex');
+  const pkg = readFileSync(new URL('../../package.json', import.meta.url));
+  return createHash('sha256').update(JSON.stringify(SCHEMA_OPTIONS[name])).update('\0').update(text).update('\0').update(pkg).digest('hex');
 }
 
 /** ajv compiling the schema text now (the path without a generated module, and the tests' reference). */
