@@ -4,7 +4,7 @@
 // run uses it only while those still match (src/rulepack/compiled-pack.ts, validator-code.ts):
 //   - <name>.validate.cjs: the JSON Schema validators of schemas/ (rule pack, settings, ledger) as standalone code;
 //   - builtin-pack.json: rules/paleoclimate.yaml loaded (validated, resolved, citations rendered).
-import { mkdir, readFile, writeFile, rename } from 'node:fs/promises';
+import { mkdir, readFile, writeFile, rename, rm } from 'node:fs/promises';
 import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -49,5 +49,13 @@ const inputs = currentInputs({
   codeRoot: dist,
 }, modules);
 if (inputs === undefined) throw new Error('build-generated: cannot read the built-in pack inputs');
-const pack = await loadRulePack(BUILTIN_PACK_FILE);
-await writeWhole(join(out, 'builtin-pack.json'), compiledPackText(pack, inputs));
+// A pack with mistakes is not compiled: runs then read the YAML and report each mistake at its place.
+let pack;
+try {
+  pack = await loadRulePack(BUILTIN_PACK_FILE);
+} catch (error) {
+  if (!Array.isArray(error?.errors)) throw error;
+  await rm(join(out, 'builtin-pack.json'), { force: true });
+  console.log(`build-generated: the built-in pack was not compiled, it has mistakes:\n${error.errors.map((e) => e.toLine()).join('\n')}`);
+}
+if (pack !== undefined) await writeWhole(join(out, 'builtin-pack.json'), compiledPackText(pack, inputs));
