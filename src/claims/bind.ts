@@ -32,17 +32,25 @@ const SEGMENT = /\b(?:the|its|their|a|an)\s+(?:very\s+)?(?:lowest|bottom|bottomm
 const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 
 /**
- * One term's regular expression, and one word of each of its phrases (the longest) in lower case: in
- * a sentence of plain ASCII that contains none of them the expression cannot match, and is not run
- * (a few hundred terms were tried on every sentence). A term with a word outside ASCII is always run:
- * case folding beyond ASCII ("K" the kelvin sign, the long s) is the regular expression's to judge.
+ * One term's regular expression, and for each of its phrases one piece of plain ASCII in lower case
+ * (the longest): a sentence whose lower-case form contains none of them cannot match, and the
+ * expression is not run (a few hundred terms were tried on every sentence, and each expression's
+ * first run compiles it, about a millisecond with its Unicode classes). Under the `iu` flags an
+ * ASCII letter or digit matches itself in either case and, of all other characters, only the kelvin
+ * sign (which `toLowerCase` turns into "k") and the long s (turned into "s" here); so the test never
+ * skips a sentence the expression would match. A phrase with no ASCII piece makes its term always run.
  */
 interface CompiledTerm {
-  regex: RegExp;
+  words: string[];
+  /** Made on first use. */
+  regex?: RegExp;
   keyWords: string[] | undefined;
 }
 
-const ASCII = /^[^\u0080-\u{10ffff}]*$/u;
+/** A sentence as the key-word test reads it: lower case, the long s as "s". */
+function keyText(sentence: string): string {
+  return sentence.toLowerCase().replaceAll('\u017f', 's');
+}
 
 /**
  * Finds every term occurrence (case-insensitive, on word boundaries) in `sentence`. A term whose id
@@ -52,15 +60,15 @@ const ASCII = /^[^\u0080-\u{10ffff}]*$/u;
 export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
   let terms = compiled.get(packs);
   if (terms === undefined) {
-    terms = new Map(packs.terms.map((t) => [t.id, { regex: termRegex(t.words), keyWords: keyWordsOf(t.words) }]));
+    terms = new Map(packs.terms.map((t): [string, CompiledTerm] => [t.id, { words: t.words, keyWords: keyWordsOf(t.words) }]));
     compiled.set(packs, terms);
   }
-  const plain = ASCII.test(sentence);
-  const lower = plain ? sentence.toLowerCase() : '';
+  const lower = keyText(sentence);
   const hits: TermHits = new Map();
-  for (const [id, { regex, keyWords }] of terms) {
-    if (plain && keyWords !== undefined && !keyWords.some((w) => lower.includes(w))) continue;
-    const spans = [...sentence.matchAll(regex)].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
+  for (const [id, term] of terms) {
+    const { keyWords } = term;
+    if (keyWords !== undefined && !keyWords.some((w) => lower.includes(w))) continue;
+    const spans = [...sentence.matchAll((term.regex ??= termRegex(term.words)))].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
     if (spans.length === 0) continue;
     const as = extendedTerm(id, packs);
     hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
@@ -69,9 +77,9 @@ export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
 }
 
 function keyWordsOf(words: string[]): string[] | undefined {
-  if (!words.every((w) => ASCII.test(w))) return undefined;
-  // Every word of a phrase stands in a sentence the phrase matches; the longest one rules out most.
-  return words.map((w) => w.trim().toLowerCase().split(/\s+/u).reduce((a, b) => (b.length > a.length ? b : a), ''));
+  // Every ASCII piece of a phrase stands in a sentence the phrase matches; the longest rules out most.
+  const keys = words.map((w) => (w.toLowerCase().match(/[\x21-\x7e]+/gu) ?? []).reduce((a, b) => (b.length > a.length ? b : a), ''));
+  return keys.includes('') ? undefined : keys;
 }
 
 /** The term a dotted id extends ("glacial.in-other-words" → "glacial"), or the id itself. */

@@ -10,7 +10,7 @@
  *   termsOf('CO2 lagged the warming.')
  *   → [{ text: 'CO2', start: 0, length: 3, root: 'co2', tags: ['Noun', ...] }, { text: 'lagged', root: 'lag', ... }, ...]
  */
-import nlp from 'compromise';
+import { compromise } from './compromise.js';
 
 /** One term as compromise reads it; `start` and `length` are UTF-16 offsets into the sentence. */
 export interface SentenceTerm {
@@ -43,7 +43,7 @@ export function termsOf(text: string): readonly SentenceTerm[] {
 }
 
 function readTerms(text: string): readonly SentenceTerm[] {
-  const doc = nlp(text);
+  const doc = compromise()(text);
   doc.compute('root');
   const sentences = doc.json({ offset: true, terms: { offset: true } }) as {
     terms: { text: string; tags?: string[]; root?: string; offset?: { start: number; length: number } }[];

@@ -8,11 +8,20 @@ export interface TopicMatcher {
   test(text: string): boolean;
 }
 
-/** Builds the matcher; longer words first so "carbon dioxide" wins over "carbon". */
+/** Matchers made in this run, by word list: the engine and the reasoning stage ask for the packs' one list. */
+const made = new WeakMap<readonly string[], TopicMatcher>();
+
+/**
+ * Builds the matcher, once per word list (the expression holds no state between tests); longer
+ * words first so "carbon dioxide" wins over "carbon".
+ */
 export function createTopicMatcher(words: readonly string[]): TopicMatcher {
+  const known = made.get(words);
+  if (known !== undefined) return known;
   const pattern = topicPattern(words, 'iu');
-  if (pattern === undefined) return { test: () => false };
-  return { test: (text) => pattern.test(text) };
+  const matcher: TopicMatcher = pattern === undefined ? { test: () => false } : { test: (text) => pattern.test(text) };
+  made.set(words, matcher);
+  return matcher;
 }
 
 /**

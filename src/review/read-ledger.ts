@@ -2,17 +2,14 @@
  * Reads the sign-off ledger. A missing file is an empty ledger (nobody has signed off yet); broken
  * YAML or an entry that does not fit schemas/ledger.schema.json is a one-line error at its place.
  */
-import { readFileSync } from 'node:fs';
 import { readRegularText } from '../guard/read-regular-file.js';
 import { relative } from 'node:path';
-import { Ajv2020, type ErrorObject } from 'ajv/dist/2020.js';
+import type { ErrorObject } from 'ajv/dist/2020.js';
 import { FirnlineError, FirnlineErrors } from '../errors.js';
 import { parseYamlText } from '../rulepack/yaml-file.js';
+import { schemaValidator } from '../rulepack/validator-code.js';
 import { entryFromYaml, type Ledger } from './signoff-entry.js';
 
-const validate = new Ajv2020({ allErrors: false, strict: true }).compile(
-  JSON.parse(readFileSync(new URL('../../schemas/ledger.schema.json', import.meta.url), 'utf8')) as object,
-);
 
 /** How each schema keyword is put into words for the person editing the ledger. */
 const MESSAGES: Record<string, (e: ErrorObject, key: string) => string> = {
@@ -48,6 +45,7 @@ export function parseLedger(text: string, file: string, shown = file): Ledger {
     throw error;
   }
   const data = yaml.data ?? {};
+  const validate = schemaValidator('ledger');
   if (!validate(data)) {
     const e = (validate.errors ?? [])[0] as ErrorObject;
     const path = e.instancePath.split('/').slice(1).map((s) => (/^\d+$/u.test(s) ? Number(s) : s));

@@ -11,9 +11,19 @@ import type { Lexicon, LoadedPacks, RulePack } from './types.js';
 import { byPlace, schemaErrors } from './validate-schema.js';
 import { MAX_PACK_BYTES, packLimitProblems } from './pack-limits.js';
 import { readYamlFile } from './yaml-file.js';
+import { readCompiledPack, type PackInputPaths } from './compiled-pack.js';
 
 /** Where the built-in pack lives, from both src/ and dist/. */
 export const BUILTIN_PACK_FILE = fileURLToPath(new URL('../../rules/paleoclimate.yaml', import.meta.url));
+
+/** The built-in pack as the build compiled it (compiled-pack.ts), and what it must have been made from. */
+const COMPILED_BUILTIN = fileURLToPath(new URL('../generated/builtin-pack.json', import.meta.url));
+const BUILTIN_INPUTS: PackInputPaths = {
+  yaml: BUILTIN_PACK_FILE,
+  schema: fileURLToPath(new URL('../../schemas/rulepack.schema.json', import.meta.url)),
+  packageJson: fileURLToPath(new URL('../../package.json', import.meta.url)),
+  codeRoot: fileURLToPath(new URL('..', import.meta.url)),
+};
 
 const NOTHING_KNOWN: KnownIds = { sources: new Map(), terms: new Set(), defined: new Map() };
 
@@ -43,7 +53,7 @@ export async function loadRulePack(file: string, known: KnownIds = NOTHING_KNOWN
 
 /** Loads the built-in pack, rules/paleoclimate.yaml. */
 export async function loadBuiltinPack(): Promise<RulePack> {
-  return loadRulePack(BUILTIN_PACK_FILE);
+  return readCompiledPack(COMPILED_BUILTIN, BUILTIN_INPUTS) ?? loadRulePack(BUILTIN_PACK_FILE);
 }
 
 /**
@@ -54,7 +64,13 @@ export async function loadPacks(extraPackFiles: string[], options: { builtin?: b
   const packs: RulePack[] = [];
   const errors: FirnlineError[] = [];
   const files = [...(options.builtin === false ? [] : [BUILTIN_PACK_FILE]), ...extraPackFiles];
-  for (const file of files) {
+  for (const [i, file] of files.entries()) {
+    // The built-in pack from its compiled form when that is current; a team's pack always from its YAML.
+    const compiled = i === 0 && options.builtin !== false ? readCompiledPack(COMPILED_BUILTIN, BUILTIN_INPUTS) : undefined;
+    if (compiled !== undefined) {
+      packs.push(compiled);
+      continue;
+    }
     try {
       packs.push(await loadRulePack(file, knownIn(packs), options.validated === true));
     } catch (error) {

@@ -1,29 +1,15 @@
 /**
  * Validates YAML data against one of our JSON Schemas (draft 2020-12) with ajv, and turns each ajv
- * error into a FirnlineError placed at the YAML node it is about. Schemas are compiled once.
+ * error into a FirnlineError placed at the YAML node it is about. Validators come from
+ * validator-code.ts (generated at build time, or compiled once per run).
  */
-import { readFileSync } from 'node:fs';
-import ajvModule, { type ErrorObject, type ValidateFunction } from 'ajv/dist/2020.js';
+import type { ErrorObject } from 'ajv/dist/2020.js';
 import type { FirnlineError } from '../errors.js';
+import { schemaValidator } from './validator-code.js';
 import type { YamlFile } from './yaml-file.js';
-
-// ajv is CommonJS: under Node's ESM loader the default import is the module object, whose
-// `default` is the class; bundlers may hand over the class itself.
-const Ajv2020 = (ajvModule as unknown as { default?: typeof ajvModule.default }).default ?? (ajvModule as unknown as typeof ajvModule.default);
-const ajv = new Ajv2020({ allErrors: true, strict: true });
-const compiled = new Map<string, ValidateFunction>();
 
 /** The schemas shipped in the package's `schemas/` folder. */
 export type SchemaName = 'rulepack' | 'settings';
-
-function validator(name: SchemaName): ValidateFunction {
-  const known = compiled.get(name);
-  if (known !== undefined) return known;
-  const url = new URL(`../../schemas/${name}.schema.json`, import.meta.url);
-  const validate = ajv.compile(JSON.parse(readFileSync(url, 'utf8')) as object);
-  compiled.set(name, validate);
-  return validate;
-}
 
 /** How each ajv keyword is put into words (the `at` part is added by the caller). */
 const MESSAGES: Record<string, (e: ErrorObject, key: string) => string> = {
@@ -52,7 +38,7 @@ function article(type: string): string {
 
 /** Every schema problem in `yaml`, one FirnlineError each, in file order; empty when valid. */
 export function schemaErrors(yaml: YamlFile, name: SchemaName): FirnlineError[] {
-  const validate = validator(name);
+  const validate = schemaValidator(name);
   if (validate(yaml.data ?? {})) return [];
   const seen = new Set<string>();
   const errors: FirnlineError[] = [];

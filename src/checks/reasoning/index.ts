@@ -2,7 +2,7 @@
  * The reasoning stage: argument errors about CO2 and temperature, found with sentence frames and
  * the cue words, direction facts and pattern rules of the loaded packs.
  */
-import nlp from 'compromise';
+import { compromise } from '../../nlp/compromise.js';
 import { tokenizeSentence, type CompromiseView, type SentenceTokens } from '../../claims/frames-tokens.js';
 import { FRAME_WORDS } from '../../claims/frames-words.js';
 import type { LoadedPacks } from '../../rulepack/types.js';
@@ -45,7 +45,7 @@ export function checkReasoning(paragraph: string[], index: number, packs: Loaded
   let doc: CompromiseView | undefined;
   const parsed = () => {
     if (doc === undefined) {
-      doc = nlp(text);
+      doc = compromise()(text);
       doc.compute('root');
     }
     return doc;
