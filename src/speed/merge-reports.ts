@@ -1,7 +1,7 @@
 /**
  * `firnline merge`: joins the JSON or SARIF reports of shards (`check --shard K/N`) into the report
  * one run over every file would have written: files, claims, flags and results in the same order,
- * rules once each by id (SARIF rule indexes renumbered), the summary counts added up.
+ * rules and (JSON) sources once each by id (SARIF rule indexes renumbered), the summary counts added up.
  */
 import { FirnlineError } from '../errors.js';
 import type { JsonReport } from '../report/json-report.js';
@@ -67,6 +67,8 @@ function mergeJson(reports: { name: string; report: JsonReport }[]): JsonReport 
     claims: all.flatMap((r) => r.claims).sort(compareByPlace),
     flags: all.flatMap((r) => r.flags).sort(compareByPlace),
     rules: sortRules(all.flatMap((r) => r.rules)),
+    // Each source once by id: every shard cites from the same packs.
+    sources: [...new Map(all.flatMap((r) => r.sources).map((s) => [s.id, s])).values()].sort((a, b) => codeUnitOrder(a.id, b.id)),
     skipped: all.flatMap((r) => r.skipped).sort((a, b) => codeUnitOrder(a.file, b.file)),
     // Every shard ran with the same packs.
     packs: first.packs,

@@ -50,7 +50,18 @@ describe('json report', () => {
       'drafts/ice-ages.md:7',
     ]);
     expect(report.claims.every((c) => !('flags' in c))).toBe(true);
-    expect(report.flags[1]).toEqual(SPAN_FLAG);
+    expect(report.flags[1]).toEqual({ ...SPAN_FLAG, sources: SPAN_FLAG.sources.map((s) => s.id) });
+  });
+
+  it('writes each cited source once, in id order, and a flag names its sources by id', () => {
+    const cited = ICE_AGE_RESULT.flags.flatMap((f) => f.sources);
+    const ids = [...new Set(cited.map((s) => s.id))].sort();
+    expect(report.sources.map((s) => s.id)).toEqual(ids);
+    for (const source of report.sources) expect(source).toEqual(cited.find((s) => s.id === source.id));
+    expect(report.flags.map((f) => f.sources)).toEqual(
+      [...ICE_AGE_RESULT.flags].sort((a, b) => ['value.deglacial-co2-rise', 'value.edc-record-span', 'logic.lag-rules-out-cause'].indexOf(a.ruleId)
+        - ['value.deglacial-co2-rise', 'value.edc-record-span', 'logic.lag-rules-out-cause'].indexOf(b.ruleId)).map((f) => f.sources.map((s) => s.id)),
+    );
   });
 
   it('writes an open interval end as null, and the schema accepts it', () => {
@@ -78,7 +89,9 @@ describe('the report schema rejects broken reports', () => {
     ],
     ['a property the format does not have', { ...good, verdicts: [] }, 'must NOT have additional properties'],
     ['a negative count', { ...good, summary: { ...(good.summary as object), note: -1 } }, 'must be >= 0'],
-    ['a source without `how`', { ...good, flags: [{ ...flag, sources: [{ id: 'x', cite: 'X (2020).' }] }] }, "must have required property 'how'"],
+    ['a source without `how`', { ...good, sources: [{ id: 'x', cite: 'X (2020).' }] }, "must have required property 'how'"],
+    ['a flag that repeats a source in full instead of its id', { ...good, flags: [{ ...flag, sources: [(good.sources as unknown[])[0]] }] }, 'must be string'],
+    ['no list of sources', { ...good, sources: undefined }, "must have required property 'sources'"],
     ['a rule id that is not dotted', { ...good, flags: [{ ...flag, ruleId: 'EDC_SPAN' }] }, 'must match pattern'],
   ];
   it.each(broken)('%s', (_name, report, message) => {
