@@ -31,9 +31,12 @@ const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 
 /**
  * One term's regular expression, and one word of each of its phrases (the longest) in lower case: in
- * a sentence of plain ASCII that contains none of them the expression cannot match, and is not run
- * (a few hundred terms were tried on every sentence). A term with a word outside ASCII is always run:
- * case folding beyond ASCII ("K" the kelvin sign, the long s) is the regular expression's to judge.
+ * a sentence whose lower-case form contains none of them the expression cannot match, and is not run
+ * (a hundred terms were tried on every sentence). A term with a word outside ASCII is always run.
+ * Under the expressions' case folding (flags `iu`) only two characters outside ASCII match an ASCII
+ * letter, the kelvin sign (U+212A, `k`) and the long s (U+017F, `s`); `toLowerCase` turns the first
+ * into `k`, and `foldedLower` the second into `s`, so a sentence with accents, dashes or "°C" is
+ * filtered as a plain one is (every code point was tried in Node 20; test/claims/term-prefilter.test.ts).
  */
 interface CompiledTerm {
   regex: RegExp;
@@ -41,6 +44,11 @@ interface CompiledTerm {
 }
 
 const ASCII = /^[^\u0080-\u{10ffff}]*$/u;
+
+/** `text` in lower case, the long s folded to `s`: an ASCII word a term expression can match in `text` is in it. */
+export function foldedLower(text: string): string {
+  return text.toLowerCase().replaceAll('\u017f', 's');
+}
 
 /**
  * Finds every term occurrence (case-insensitive, on word boundaries) in `sentence`. A term whose id
@@ -53,11 +61,10 @@ export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
     terms = new Map(packs.terms.map((t) => [t.id, { regex: termRegex(t.words), keyWords: keyWordsOf(t.words) }]));
     compiled.set(packs, terms);
   }
-  const plain = ASCII.test(sentence);
-  const lower = plain ? sentence.toLowerCase() : '';
+  const lower = foldedLower(sentence);
   const hits: TermHits = new Map();
   for (const [id, { regex, keyWords }] of terms) {
-    if (plain && keyWords !== undefined && !keyWords.some((w) => lower.includes(w))) continue;
+    if (keyWords !== undefined && !keyWords.some((w) => lower.includes(w))) continue;
     const spans = [...sentence.matchAll(regex)].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
     if (spans.length === 0) continue;
     const as = extendedTerm(id, packs);
@@ -69,7 +76,9 @@ export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
 function keyWordsOf(words: string[]): string[] | undefined {
   if (!words.every((w) => ASCII.test(w))) return undefined;
   // Every word of a phrase stands in a sentence the phrase matches; the longest one rules out most.
-  return words.map((w) => w.trim().toLowerCase().split(/\s+/u).reduce((a, b) => (b.length > a.length ? b : a), ''));
+  const longest = [...new Set(words.map((w) => w.trim().toLowerCase().split(/\s+/u).reduce((a, b) => (b.length > a.length ? b : a), '')))];
+  // A word that contains another of the list ("records", "record") is present only when that one is.
+  return longest.filter((w) => !longest.some((other) => other !== w && w.includes(other)));
 }
 
 /** The term a dotted id extends ("glacial.in-other-words" → "glacial"), or the id itself. */
