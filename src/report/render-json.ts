@@ -78,5 +78,58 @@ export function toJsonReport(result: CheckResult, options: ReportOptions): JsonR
 
 /** Firnline's own machine-readable report, described by schemas/report.schema.json. */
 export function renderJson(result: CheckResult, options: ReportOptions): string {
-  return `${JSON.stringify(toJsonReport(result, options), null, 2)}\n`;
+  return [...jsonReportPieces(result, options)].join('');
+}
+
+/** How much text `jsonReportPieces` gathers before it hands a piece on. */
+const PIECE_SIZE = 1 << 20;
+
+/**
+ * The text of `renderJson`, in pieces of about a megabyte, for a caller that writes it out as it
+ * goes: the text is `JSON.stringify(toJsonReport(result, options), null, 2)` and a newline, but
+ * neither the whole report object nor the whole text is ever held. Claims and flags are converted
+ * and written one at a time (a JSON string holds no raw line break, so indenting a member's own
+ * text by its depth gives what the whole stringify gives).
+ */
+export function* jsonReportPieces(result: CheckResult, options: ReportOptions): Generator<string> {
+  let pending = '';
+  const members: [string, () => Iterable<unknown> | unknown, boolean][] = [
+    ['tool', () => ({ name: 'firnline', version: options.toolVersion }), false],
+    ['files', () => [...result.files], false],
+    ['summary', () => summarize(result), false],
+    ['claims', () => lazyMap(sortByPlace(result.claims), jsonClaim), true],
+    ['flags', () => lazyMap(sortByPlace(result.flags), jsonFlag), true],
+    ['rules', () => sortRules(result.rules), false],
+    ['sources', () => citedSources(result.flags), false],
+    ['skipped', () => result.skipped.map((entry) => ({ ...entry })), false],
+    ['packs', () => (result.packs ?? []).map((p) => ({ ...p })), false],
+  ];
+  pending += '{\n';
+  for (const [m, [name, value, listed]] of members.entries()) {
+    pending += `  ${JSON.stringify(name)}: `;
+    if (!listed) {
+      pending += indented(value(), '  ');
+    } else {
+      let first = true;
+      for (const item of value() as Iterable<unknown>) {
+        pending += `${first ? '[\n' : ',\n'}    ${indented(item, '    ')}`;
+        first = false;
+        if (pending.length >= PIECE_SIZE) {
+          yield pending;
+          pending = '';
+        }
+      }
+      pending += first ? '[]' : '\n  ]';
+    }
+    pending += m === members.length - 1 ? '\n}\n' : ',\n';
+  }
+  yield pending;
+}
+
+function indented(value: unknown, indent: string): string {
+  return JSON.stringify(value, null, 2).replaceAll('\n', `\n${indent}`);
+}
+
+function* lazyMap<T, U>(items: readonly T[], convert: (item: T) => U): Generator<U> {
+  for (const item of items) yield convert(item);
 }

@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import type { JsonReport } from '../../src/report/json-report.js';
 import { REPORT_SCHEMA_ID } from '../../src/report/json-report.js';
 import type { ReportOptions } from '../../src/report/report-options.js';
-import { renderJson } from '../../src/report/render-json.js';
+import { jsonReportPieces, renderJson, toJsonReport } from '../../src/report/render-json.js';
 import type { CheckResult } from '../../src/types.js';
 import { EMPTY_RESULT, ICE_AGE_RESULT, SPAN_FLAG } from './fixtures/ice-age-result.js';
 
@@ -72,6 +72,29 @@ describe('json report', () => {
     const written = JSON.parse(renderJson(open, OPTIONS)) as JsonReport;
     expect(written.flags[0]?.claimed).toEqual({ text: 'more than 400,000 years', low: 400_000, high: null, unit: 'yr' });
     expect(errorsOf(written)).toEqual([]);
+  });
+});
+
+describe('the json report written in pieces', () => {
+  // JSON.stringify with an indent of 2 (ECMA-262, JSON.stringify) is the text the pieces must make.
+  const whole = (result: CheckResult) => `${JSON.stringify(toJsonReport(result, OPTIONS), null, 2)}\n`;
+  // A long run: the sample's claims and flags repeated in many files, enough for several pieces.
+  const long: CheckResult = {
+    ...ICE_AGE_RESULT,
+    files: Array.from({ length: 3000 }, (_, i) => `drafts/part-${i}.md`),
+    claims: Array.from({ length: 3000 }, (_, i) => ICE_AGE_RESULT.claims.map((c) => ({ ...c, id: `${c.id}-${i}`, file: `drafts/part-${i}.md` }))).flat(),
+    flags: Array.from({ length: 3000 }, (_, i) => ICE_AGE_RESULT.flags.map((f) => ({ ...f, file: `drafts/part-${i}.md` }))).flat(),
+  };
+
+  it('joins to exactly the text of the whole report, empty lists included', () => {
+    for (const result of [ICE_AGE_RESULT, EMPTY_RESULT, long]) expect([...jsonReportPieces(result, OPTIONS)].join('')).toBe(whole(result));
+  });
+
+  it('hands a long report on in pieces of about a megabyte', () => {
+    const pieces = [...jsonReportPieces(long, OPTIONS)];
+    expect(pieces.length).toBeGreaterThan(2);
+    for (const piece of pieces.slice(0, -1)) expect(piece.length).toBeGreaterThanOrEqual(1 << 20);
+    for (const piece of pieces) expect(piece.length).toBeLessThan((1 << 20) + 10_000);
   });
 });
 
