@@ -47,7 +47,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('--force', 'with --format markdown -o: replace a checklist even if it holds ticks or comments not yet in the ledger')
     .option('--absolute-paths', 'SARIF: record the working folder as an absolute file URI (off by default, so a shared report does not show the machine\'s folders)')
     .option('--strict', 'the strict preset for publication: every conflicting value and every reasoning error is an error, and errors fail the run')
-    .option('--jobs <n>', 'worker threads for runs over many files (default: the number of cores; 1: no workers)')
+    .option('--jobs <n>', 'threads that check files in runs over many files, the main one included (default: the number of cores; 1: no workers)')
     .option('--no-cache', 'neither read nor write the result cache (.firnline-cache/ in the project root)')
     .option('--shard <k/n>', 'check only the k-th of n parts of the files (split by path), for CI matrix jobs; join the reports with `firnline merge`')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
