@@ -11,11 +11,11 @@ import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { isChecklistText } from './report/checklist-lines.js';
 import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
-import { subjectWordsOf } from './propositions/index.js';
+import { entityWordsOf, subjectWordsOf } from './propositions/index.js';
 import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
-import type { LoadedPacks } from './rulepack/types.js';
+import type { FactForm, LoadedPacks } from './rulepack/types.js';
 import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, loadHtmlReader } from './source/index.js';
 import { runFiles, type FileOutcome, type FileTask } from './speed/run-files.js';
 import type { ResultCache } from './speed/cache.js';
@@ -197,14 +197,14 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
   draft.blocks.forEach((block, blockIndex) => {
     // A block with no topic word and no digit holds no claim (examineSentence needs one or the
     // other in a sentence, and sentences are pieces of their block): it is not even split.
-    if (!DIGIT.test(block.text) && !topic.test(block.text) && !subjectMatcherOf(packs).test(block.text)) return;
+    if (!DIGIT.test(block.text) && !topic.test(block.text) && !subjectMatcherOf(packs).test(block.text) && !factMatcherOf(packs).test(block.text)) return;
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
     const windowOf = paragraphWindows(paragraph);
     sentences.forEach((sentence, index) => {
       const { window, at } = windowOf(index);
-      const onTopic = topic.test(sentence.text) || subjectMatcherOf(packs).test(sentence.text);
+      const onTopic = topic.test(sentence.text) || subjectMatcherOf(packs).test(sentence.text) || factMatcherOf(packs).test(sentence.text);
       const found = examineCached(window, at, packs, onTopic, context, () => topic.test(window[at - 1] ?? ''));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
@@ -362,6 +362,37 @@ function subjectMatcherOf(packs: LoadedPacks): TopicMatcher {
     subjectMatchers.set(packs, matcher);
   }
   return matcher;
+}
+
+const factMatchers = new WeakMap<LoadedPacks, TopicMatcher>();
+
+/**
+ * The matcher for the things the packs' direction facts are about ("the air in the bubbles", "the
+ * ice", "seawater"): in a draft on topic, a sentence that names one may state a fact the wrong way
+ * round without a number or a subject word ("The air in the bubbles is older than the ice.").
+ */
+function factMatcherOf(packs: LoadedPacks): TopicMatcher {
+  let matcher = factMatchers.get(packs);
+  if (matcher === undefined) {
+    const keys = packs.directions.flatMap((fact) => fact.says.flatMap(factKeys));
+    matcher = createTopicMatcher(entityWordsOf(packs.lexicon, [...new Set(keys)]));
+    factMatchers.set(packs, matcher);
+  }
+  return matcher;
+}
+
+/** The lexicon entity keys a direction fact's form names. */
+function factKeys(form: FactForm): string[] {
+  switch (form.kind) {
+    case 'relation':
+      return [form.x.key, form.y.key];
+    case 'comparison':
+      return [...form.a, ...form.b];
+    case 'order':
+      return [form.first, form.then];
+    case 'change':
+      return form.of;
+  }
 }
 
 function verdictOf(verdicts: Verdict[]): Verdict {
