@@ -1,8 +1,8 @@
 #!/usr/bin/env node
 // Compares two folders of JSON reports written by bench/report-snapshots.js: the findings (claims,
 // flags with their sources in full, rules, summary, skipped files, packs) must be the same, byte
-// for byte once written out. A report whose flags name their sources by id (the top-level
-// `sources` list) is read with each id replaced by its entry, so a report written before that
+// for byte once written out. A report whose flags name their sources by place in the
+// top-level `sources` list is read with each place replaced by its entry, so a report written before that
 // format compares with one written after it. Usage: node bench/compare-reports.js BEFORE AFTER
 import { readdir, readFile } from 'node:fs/promises';
 import { join } from 'node:path';
@@ -18,8 +18,7 @@ function findings(text) {
   const report = JSON.parse(text);
   const { sources, ...rest } = report;
   if (sources !== undefined) {
-    const byId = new Map(sources.map((s) => [s.id, s]));
-    rest.flags = rest.flags.map((f) => ({ ...f, sources: f.sources.map((id) => byId.get(id) ?? { missing: id }) }));
+    rest.flags = rest.flags.map((f) => ({ ...f, sources: f.sources.map((i) => sources[i] ?? { missing: i }) }));
   }
   return JSON.stringify(rest, null, 2);
 }

@@ -6,7 +6,7 @@ import type { ReportSummary } from './summarize.js';
  * data contracts in src/types.ts with two differences JSON forces or makes clearer:
  * an open interval end (±Infinity, which JSON cannot hold) is written as `null`, and a claim
  * does not repeat its flags (each flag names its claim by `claimId`), and a flag names its sources
- * by id (each source is written once, in the report's `sources`).
+ * by their places in the report's `sources`, where each is written once.
  */
 
 /** An interval end: a number, or `null` for an open end. */
@@ -17,8 +17,8 @@ export type JsonShownValue = Omit<ShownValue, 'low' | 'high'> & { low: JsonBound
 
 /** A flag as written in the report. */
 export type JsonFlag = Omit<Flag, 'claimed' | 'reference' | 'sources'> & {
-  /** The ids of the flag's sources, in the flag's order; each is listed once in `JsonReport.sources`. */
-  sources: string[];
+  /** The flag's sources, in the flag's order, as places (from 0) in `JsonReport.sources`. */
+  sources: number[];
   claimed?: JsonShownValue;
   reference?: JsonShownValue & { id: string; measures: string; asOf?: string };
 };
@@ -41,7 +41,7 @@ export interface JsonReport {
   flags: JsonFlag[];
   /** Every rule that has a flag, by id. */
   rules: RuleInfo[];
-  /** Every source a flag cites, once, in code-unit order of id. */
+  /** Every distinct source entry a flag cites, once, in code-unit order of id (then of content). */
   sources: Source[];
   skipped: { file: string; reason: string; unchecked?: true; line?: number; column?: number }[];
   /** The rule packs checked against, with the date their values were last reviewed. */

@@ -5,7 +5,7 @@ import type { JsonReport } from '../../src/report/json-report.js';
 import { REPORT_SCHEMA_ID } from '../../src/report/json-report.js';
 import type { ReportOptions } from '../../src/report/report-options.js';
 import { jsonReportPieces, renderJson, toJsonReport } from '../../src/report/render-json.js';
-import type { CheckResult } from '../../src/types.js';
+import type { CheckResult, Flag, Source } from '../../src/types.js';
 import { EMPTY_RESULT, ICE_AGE_RESULT, SPAN_FLAG } from './fixtures/ice-age-result.js';
 
 const OPTIONS: ReportOptions = { color: false, toolVersion: '0.1.0', failOn: 'error' };
@@ -50,18 +50,27 @@ describe('json report', () => {
       'drafts/ice-ages.md:7',
     ]);
     expect(report.claims.every((c) => !('flags' in c))).toBe(true);
-    expect(report.flags[1]).toEqual({ ...SPAN_FLAG, sources: SPAN_FLAG.sources.map((s) => s.id) });
+    expect(report.flags[1]).toEqual({ ...SPAN_FLAG, sources: [report.sources.findIndex((s) => s.id === 'jouzel-2007')] });
   });
 
-  it('writes each cited source once, in id order, and a flag names its sources by id', () => {
+  it('writes each cited source once, in id order, and a flag names its sources by their places', () => {
     const cited = ICE_AGE_RESULT.flags.flatMap((f) => f.sources);
-    const ids = [...new Set(cited.map((s) => s.id))].sort();
-    expect(report.sources.map((s) => s.id)).toEqual(ids);
-    for (const source of report.sources) expect(source).toEqual(cited.find((s) => s.id === source.id));
-    expect(report.flags.map((f) => f.sources)).toEqual(
-      [...ICE_AGE_RESULT.flags].sort((a, b) => ['value.deglacial-co2-rise', 'value.edc-record-span', 'logic.lag-rules-out-cause'].indexOf(a.ruleId)
-        - ['value.deglacial-co2-rise', 'value.edc-record-span', 'logic.lag-rules-out-cause'].indexOf(b.ruleId)).map((f) => f.sources.map((s) => s.id)),
-    );
+    expect(report.sources.map((s) => s.id)).toEqual([...new Set(cited.map((s) => s.id))].sort());
+    for (const flag of report.flags) {
+      const original = ICE_AGE_RESULT.flags.find((f) => f.ruleId === flag.ruleId && f.file === flag.file && f.span.start.offset === flag.span.start.offset);
+      expect(flag.sources.map((i) => report.sources[i])).toEqual(original?.sources);
+    }
+  });
+
+  it('keeps two entries with one id apart when they differ, each flag pointing at its own', () => {
+    const [first, second] = ICE_AGE_RESULT.flags as [Flag, Flag, ...Flag[]];
+    const full = first.sources[0] as Source;
+    const short: Source = { id: full.id, cite: 'J. Jouzel and others (2007).', how: 'from memory' };
+    const written = JSON.parse(renderJson({ ...ICE_AGE_RESULT, flags: [first, { ...second, sources: [short] }] }, OPTIONS)) as JsonReport;
+    expect(written.sources.filter((s) => s.id === full.id)).toHaveLength(2);
+    const back = written.flags.map((f) => f.sources.map((i) => written.sources[i]));
+    expect(back).toEqual(expect.arrayContaining([first.sources, [short]]));
+    expect(errorsOf(written)).toEqual([]);
   });
 
   it('writes an open interval end as null, and the schema accepts it', () => {
@@ -113,7 +122,7 @@ describe('the report schema rejects broken reports', () => {
     ['a property the format does not have', { ...good, verdicts: [] }, 'must NOT have additional properties'],
     ['a negative count', { ...good, summary: { ...(good.summary as object), note: -1 } }, 'must be >= 0'],
     ['a source without `how`', { ...good, sources: [{ id: 'x', cite: 'X (2020).' }] }, "must have required property 'how'"],
-    ['a flag that repeats a source in full instead of its id', { ...good, flags: [{ ...flag, sources: [(good.sources as unknown[])[0]] }] }, 'must be string'],
+    ['a flag that repeats a source in full instead of its place', { ...good, flags: [{ ...flag, sources: [(good.sources as unknown[])[0]] }] }, 'must be integer'],
     ['no list of sources', { ...good, sources: undefined }, "must have required property 'sources'"],
     ['a rule id that is not dotted', { ...good, flags: [{ ...flag, ruleId: 'EDC_SPAN' }] }, 'must match pattern'],
   ];
