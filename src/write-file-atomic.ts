@@ -16,17 +16,20 @@ const HOST = createHash('sha256').update(hostname()).digest('hex').slice(0, 8);
  * a power cut) cannot remove its own; the next write to the same target removes every such file
  * whose process on this machine has gone, so none is left behind for long.
  */
-export async function writeFileAtomic(file: string, text: string | Uint8Array, what = 'the file'): Promise<void> {
+export async function writeFileAtomic(file: string, text: string | Uint8Array | Iterable<string>, what = 'the file'): Promise<void> {
   await removeAbandonedTemps(dirname(file), `.${basename(file)}.`);
   const temp = temporaryFileFor(file);
   try {
-    await writeFile(temp, text, typeof text === 'string' ? { encoding: 'utf8', flag: 'wx' } : { flag: 'wx' });
+    // Pieces of text (a long report) are written as they come, and the whole text is never held.
+    await writeFile(temp, text, text instanceof Uint8Array ? { flag: 'wx' } : { encoding: 'utf8', flag: 'wx' });
     // The replaced file keeps its permissions (a shared ledger may be group-writable).
     const before = await stat(file).catch(() => undefined);
     if (before?.isFile() === true) await chmod(temp, before.mode & 0o7777);
     await rename(temp, file);
   } catch (error) {
     await rm(temp, { force: true });
+    // A fault while making the pieces is not the file system's: it is not reported as a write failure.
+    if (typeof text !== 'string' && !(text instanceof Uint8Array) && (error as NodeJS.ErrnoException).code === undefined) throw error;
     const reason = (error as NodeJS.ErrnoException).code ?? 'write failed';
     throw new FirnlineError('write-failed', `cannot write ${what} (${reason}); check the folder exists and is writable`, { file });
   }

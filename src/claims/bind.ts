@@ -48,7 +48,7 @@ interface CompiledTerm {
 }
 
 /** A sentence as the key-word test reads it: lower case, the long s as "s". */
-function keyText(sentence: string): string {
+export function foldedLower(sentence: string): string {
   return sentence.toLowerCase().replaceAll('\u017f', 's');
 }
 
@@ -63,7 +63,7 @@ export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
     terms = new Map(packs.terms.map((t): [string, CompiledTerm] => [t.id, { words: t.words, keyWords: keyWordsOf(t.words) }]));
     compiled.set(packs, terms);
   }
-  const lower = keyText(sentence);
+  const lower = foldedLower(sentence);
   const hits: TermHits = new Map();
   for (const [id, term] of terms) {
     const { keyWords } = term;

@@ -73,11 +73,32 @@ export interface BoundInputs {
 
 /** The value of one bound for the given inputs. */
 export function evaluateBound(bound: Bound, inputs: BoundInputs): number {
-  const n = Math.max(0.1 * Math.abs(inputs.v), (inputs.H - inputs.L) / 2);
-  const terms: Record<Term, number> = { ...inputs, absV: Math.abs(inputs.v), n, one: 1 };
+  // Summed in the bound's own member order, as before, so every result is the same to the last bit;
+  // the members are listed once per bound and no record of terms is built (every number of every
+  // sentence passes here several times).
+  let members = boundMembers.get(bound);
+  if (members === undefined) {
+    members = Object.entries(bound) as [Term, number][];
+    boundMembers.set(bound, members);
+  }
   let sum = 0;
-  for (const [term, k] of Object.entries(bound) as [Term, number][]) sum += k * terms[term];
+  for (const [term, k] of members) sum += k * termValue(term, inputs);
   return sum;
+}
+
+const boundMembers = new WeakMap<Bound, [Term, number][]>();
+
+function termValue(term: Term, inputs: BoundInputs): number {
+  switch (term) {
+    case 'absV':
+      return Math.abs(inputs.v);
+    case 'n':
+      return Math.max(0.1 * Math.abs(inputs.v), (inputs.H - inputs.L) / 2);
+    case 'one':
+      return 1;
+    default:
+      return inputs[term];
+  }
 }
 
 /** The interval a rule gives, low first. */

@@ -40,7 +40,7 @@ export { doiUrl, formatSource, fullReference, isFromMemory, shortReference, sour
 export { summarize } from './summarize.js';
 export type { ReportSummary } from './summarize.js';
 export { renderText } from './render-text.js';
-export { renderJson, toJsonReport } from './render-json.js';
+export { jsonReportPieces, renderJson, toJsonReport } from './render-json.js';
 export { REPORT_SCHEMA_ID } from './json-report.js';
 export type { JsonClaim, JsonFlag, JsonQuantity, JsonReport, JsonShownValue, JsonBound } from './json-report.js';
 export { renderSarif, toSarifLog, SARIF_SCHEMA_URI } from './render-sarif.js';

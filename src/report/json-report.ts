@@ -1,11 +1,12 @@
-import type { Claim, Flag, PackInfo, Quantity, RuleInfo, ShownValue } from '../types.js';
+import type { Claim, Flag, PackInfo, Quantity, RuleInfo, ShownValue, Source } from '../types.js';
 import type { ReportSummary } from './summarize.js';
 
 /**
  * The shapes of the `json` report, as described by schemas/report.schema.json. They follow the
  * data contracts in src/types.ts with two differences JSON forces or makes clearer:
  * an open interval end (±Infinity, which JSON cannot hold) is written as `null`, and a claim
- * does not repeat its flags (each flag names its claim by `claimId`).
+ * does not repeat its flags (each flag names its claim by `claimId`), and a flag names its sources
+ * by their places in the report's `sources`, where each is written once.
  */
 
 /** An interval end: a number, or `null` for an open end. */
@@ -15,7 +16,9 @@ export type JsonBound = number | null;
 export type JsonShownValue = Omit<ShownValue, 'low' | 'high'> & { low: JsonBound; high: JsonBound };
 
 /** A flag as written in the report. */
-export type JsonFlag = Omit<Flag, 'claimed' | 'reference'> & {
+export type JsonFlag = Omit<Flag, 'claimed' | 'reference' | 'sources'> & {
+  /** The flag's sources, in the flag's order, as places (from 0) in `JsonReport.sources`. */
+  sources: number[];
   claimed?: JsonShownValue;
   reference?: JsonShownValue & { id: string; measures: string; asOf?: string };
 };
@@ -38,6 +41,8 @@ export interface JsonReport {
   flags: JsonFlag[];
   /** Every rule that has a flag, by id. */
   rules: RuleInfo[];
+  /** Every distinct source entry a flag cites, once, in code-unit order of id (then of content). */
+  sources: Source[];
   skipped: { file: string; reason: string; unchecked?: true; line?: number; column?: number }[];
   /** The rule packs checked against, with the date their values were last reviewed. */
   packs: PackInfo[];

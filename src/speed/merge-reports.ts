@@ -1,12 +1,15 @@
 /**
  * `firnline merge`: joins the JSON or SARIF reports of shards (`check --shard K/N`) into the report
  * one run over every file would have written: files, claims, flags and results in the same order,
- * rules once each by id (SARIF rule indexes renumbered), the summary counts added up.
+ * rules once each by id and (JSON) sources once each (SARIF rule indexes and JSON source places
+ * renumbered), the summary counts added up.
  */
 import { FirnlineError } from '../errors.js';
 import type { JsonReport } from '../report/json-report.js';
 import type { SarifInvocation, SarifLog, SarifResult } from '../report/sarif-log.js';
+import { orderSources } from '../report/render-json.js';
 import { compareByPlace, sortRules } from '../report/sort.js';
+import type { Source } from '../types.js';
 
 /** One report to merge: its name (for messages) and its text. */
 export interface NamedReport {
@@ -60,13 +63,23 @@ function mergeJson(reports: { name: string; report: JsonReport }[]): JsonReport 
   for (const report of all.slice(1)) {
     for (const key of Object.keys(summary) as (keyof typeof summary)[]) summary[key] += report.summary[key] ?? 0;
   }
+  // Each distinct source entry once, in the order one run gives them; flags renumbered to it.
+  const distinct = new Map<string, Source>();
+  for (const report of all) for (const source of report.sources) distinct.set(JSON.stringify(source), source);
+  const ordered = orderSources(distinct);
+  const place = new Map(ordered.map(([key], i) => [key, i]));
+  const flags = all.flatMap((r) => {
+    const renumbered = r.sources.map((source) => place.get(JSON.stringify(source)) as number);
+    return r.flags.map((f) => ({ ...f, sources: f.sources.map((i) => renumbered[i] as number) }));
+  });
   return {
     tool: first.tool,
     files: [...new Set(all.flatMap((r) => r.files))].sort(codeUnitOrder),
     summary,
     claims: all.flatMap((r) => r.claims).sort(compareByPlace),
-    flags: all.flatMap((r) => r.flags).sort(compareByPlace),
+    flags: flags.sort(compareByPlace),
     rules: sortRules(all.flatMap((r) => r.rules)),
+    sources: ordered.map(([, source]) => source),
     skipped: all.flatMap((r) => r.skipped).sort((a, b) => codeUnitOrder(a.file, b.file)),
     // Every shard ran with the same packs.
     packs: first.packs,

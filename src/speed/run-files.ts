@@ -1,8 +1,8 @@
 /**
  * Runs the check over a list of files: the least work first, in this thread (read each file and run
  * the compiled subject matcher over its raw text; a file with no hit is done), then the cache, then
- * the files that need the full check, in this thread when they are few and on a worker pool when
- * they are many. Outcomes come back in the order of the input whatever ran them, so the report does
+ * the files that need the full check, in this thread when they are few, and when they are many in
+ * this thread and `jobs - 1` pool workers side by side. Outcomes come back in the order of the input whatever ran them, so the report does
  * not depend on the pool, the cache or the number of cores.
  */
 import { existsSync } from 'node:fs';
@@ -72,10 +72,15 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
     ...(task.projectPath === task.path ? {} : { projectPath: task.projectPath }),
   });
 
-  let waiting: { index: number; text: string; key: string | undefined }[] = [];
+  // Files that wait for the full check, in input order. Once a pool runs, its workers and this
+  // thread take them from the front: this thread is one of the `jobs` threads, so a 2-core machine
+  // starts one worker (its own packs and NLP library), not two beside an idle main thread.
+  const waiting: { index: number; text: string; key: string | undefined }[] = [];
   let waitingBytes = 0;
   const enough = (): boolean => waiting.length >= POOL_MIN_FILES && (options.jobs !== undefined || waitingBytes >= POOL_MIN_BYTES);
+  const workers = jobs - 1;
   let pool: TinypoolType | undefined;
+  let inFlight = 0;
   const running: Promise<void>[] = [];
   const dispatch = async (item: { index: number; text: string; key: string | undefined }): Promise<void> => {
     const task = tasks[item.index] as FileTask;
@@ -87,6 +92,25 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
     const outcome = (await (pool as TinypoolType).run(message)) as FileOutcome;
     finish(item.index, outcome, item.key);
   };
+  // Each worker has one file running and one queued, so it never waits for this thread to hand on the next.
+  const pump = (): void => {
+    while (pool !== undefined && inFlight < workers * 2 && waiting.length > 0) {
+      inFlight += 1;
+      const done = dispatch(waiting.shift() as (typeof waiting)[number]).finally(() => {
+        inFlight -= 1;
+        pump();
+      });
+      // Awaited below; a failure is thrown there, not left unhandled if the run stops first.
+      done.catch(() => undefined);
+      running.push(done);
+    }
+  };
+  const checkHere = (item: { index: number; text: string; key: string | undefined }): void => {
+    const task = tasks[item.index] as FileTask;
+    finish(item.index, checkFileText({ path: task.path, text: item.text, format: task.format }, options.packs, draftOptions(task)), item.key);
+  };
+  // Between two files this thread lets the workers' answers in, and with them the next dispatches.
+  const nextTurn = (): Promise<void> => new Promise((resolve) => setImmediate(resolve));
   try {
     for (let index = 0; index < tasks.length; index += 1) {
       const task = tasks[index] as FileTask;
@@ -117,20 +141,28 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
       waitingBytes += text.length;
       if (pool === undefined && poolable && enough()) {
         const { Tinypool } = await import('tinypool');
-        pool = new Tinypool({ filename: WORKER_FILE, minThreads: jobs, maxThreads: jobs, idleTimeout: 1000 });
+        pool = new Tinypool({ filename: WORKER_FILE, minThreads: workers, maxThreads: workers, idleTimeout: 1000 });
       }
       if (pool !== undefined) {
-        for (const item of waiting) running.push(dispatch(item));
-        waiting = [];
-        // Hold at most a few files per worker in memory at once.
-        if (running.length >= jobs * 4) await Promise.all(running.splice(0, running.length - jobs * 2));
+        pump();
+        // Hold at most a few files per thread in memory at once: this thread checks one meanwhile.
+        if (waiting.length >= jobs * 2) {
+          checkHere(waiting.shift() as (typeof waiting)[number]);
+          await nextTurn();
+        }
       }
     }
-    for (const item of waiting) {
-      const task = tasks[item.index] as FileTask;
-      finish(item.index, checkFileText({ path: task.path, text: item.text, format: task.format }, options.packs, draftOptions(task)), item.key);
+    pump();
+    while (waiting.length > 0) {
+      checkHere(waiting.shift() as (typeof waiting)[number]);
+      if (pool !== undefined) await nextTurn();
     }
-    await Promise.all(running);
+    // Each dispatch adds its follower to `running` before it settles, so this waits for them all.
+    for (let settled = 0; settled < running.length;) {
+      const batch = running.slice(settled);
+      settled = running.length;
+      await Promise.all(batch);
+    }
   } finally {
     await pool?.destroy();
   }

@@ -55,6 +55,9 @@ describe('firnline check over many files: pool, cache and shards change nothing'
     expect(pooled).toBe(single);
     expect(cold).toBe(single);
     expect(warm).toBe(single);
+    // Written to a file, the report is made and written piece by piece: the same bytes.
+    await firnline(root, 'check', 'docs', '--format', 'json', '--jobs', '2', '--no-cache', '-o', join(root, 'pooled.json'));
+    expect(readFileSync(join(root, 'pooled.json'), 'utf8')).toBe(single);
   }, 180_000);
 
   it('merges shard reports (JSON and SARIF 2.1.0) into the whole run, byte for byte', async () => {

@@ -47,12 +47,12 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('--force', 'with --format markdown -o: replace a checklist even if it holds ticks or comments not yet in the ledger')
     .option('--absolute-paths', 'SARIF: record the working folder as an absolute file URI (off by default, so a shared report does not show the machine\'s folders)')
     .option('--strict', 'the strict preset for publication: every conflicting value and every reasoning error is an error, and errors fail the run')
-    .option('--jobs <n>', 'worker threads for runs over many files (default: the number of cores; 1: no workers)')
+    .option('--jobs <n>', 'threads that check files in runs over many files, the main one included (default: the number of cores; 1: no workers)')
     .option('--no-cache', 'neither read nor write the result cache (.firnline-cache/ in the project root)')
     .option('--shard <k/n>', 'check only the k-th of n parts of the files (split by path), for CI matrix jobs; join the reports with `firnline merge`')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
       parseSpeedFlags(flags);
-      const [{ checkPaths }, { renderReport }, { renderChecklistOf }, { applyGate }, { checkOptionsOf, loadRunSettings }, { writeFileAtomic }, { exitCodeFor }, { guardChecklistOutput }] =
+      const [{ checkPaths }, { jsonReportPieces, renderReport }, { renderChecklistOf }, { applyGate }, { checkOptionsOf, loadRunSettings }, { writeFileAtomic }, { exitCodeFor }, { guardChecklistOutput }] =
         await Promise.all([
           import('../../engine.js'), import('../../report/index.js'), import('../render-checklist.js'), import('../gate.js'),
           import('../run-settings.js'), import('../../write-file-atomic.js'), import('../exit-code.js'), import('../guard-checklist-output.js'),
@@ -82,7 +82,9 @@ export function registerCheck(program: Command, ctx: CliContext): void {
       const shown = flags.format === 'text' ? visibleData(gate.result) : gate.result;
       const options = { color, toolVersion: VERSION, failOn, ...(flags.absolutePaths === true ? { srcRoot: ctx.cwd } : {}) };
       const onlyCounts = flags.summary === true && flags.format === 'text';
-      const full =
+      // A JSON report to a file is written piece by piece (report/render-json.ts): never held whole.
+      const pieces = flags.format === 'json' && !target.stdout ? jsonReportPieces(shown, options) : undefined;
+      const full = pieces !== undefined ? '' :
         flags.format === 'markdown'
           ? (await renderChecklistOf(gate.result, run, 'markdown', ctx.cwd)).text
           : renderReport(flags.format as ReportFormat, shown, options);
@@ -98,7 +100,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
         // A checklist written by `check --format markdown` is guarded as `checklist -o` guards it.
         if (flags.format === 'markdown' && flags.force !== true) await guardChecklistOutput(target.file, run.ledger, ctx.cwd, full, { onlyChecklists: true });
         await mkdir(dirname(target.file), { recursive: true });
-        await writeFileAtomic(target.file, report.endsWith('\n') ? report : `${report}\n`);
+        await writeFileAtomic(target.file, pieces ?? (report.endsWith('\n') ? report : `${report}\n`));
         ctx.stderr(summary);
       }
       ctx.exitCode = Math.max(exitCodeFor(gate.failingFlags, failOn), gate.failed ? 1 : 0);
