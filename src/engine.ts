@@ -20,6 +20,7 @@ import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, lo
 import { runFiles, type FileOutcome, type FileTask } from './speed/run-files.js';
 import type { ResultCache } from './speed/cache.js';
 import { inShard, type Shard } from './speed/shard.js';
+import { sparseMarkdownDraft } from './speed/sparse-markdown.js';
 import { cachedFindings } from './speed/sentence-cache.js';
 import type { Binding, CheckResult, Claim, Draft, Flag, FlagDraft, Level, ProseBlock, Quantity, RuleInfo, Sentence, Verdict } from './types.js';
 
@@ -154,13 +155,18 @@ export function checkFileText(raw: Pick<Draft, 'path' | 'text' | 'format'> | Dra
   const passed = passOver(text, packs);
   if (passed !== undefined) return passed;
   let draft: Draft;
+  let beside: boolean[] | undefined;
   try {
-    draft = 'blocks' in raw ? raw : draftFromText(path, text, format === 'docx' ? 'text' : format);
+    // A Markdown draft is parsed only around its subjects and its sentences with two numbers
+    // (speed/sparse-markdown.ts): the same claims as a parse of the whole.
+    const sparse = 'blocks' in raw || format !== 'markdown' ? undefined : sparseMarkdownDraft(path, text, (t) => namesSubject(t, packs));
+    draft = 'blocks' in raw ? raw : sparse?.draft ?? draftFromText(path, text, format === 'docx' ? 'text' : format);
+    beside = sparse?.subjectBeside;
   } catch (error) {
     if (error instanceof FirnlineError) return { claims: [], flags: [], unchecked: uncheckedOf(error) };
     throw error;
   }
-  return checkDraft(draft, packs, options);
+  return checkDraft(draft, packs, beside === undefined ? options : { ...options, subjectBeside: beside });
 }
 
 /** Why a file that names no subject of the packs was passed over. */
