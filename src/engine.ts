@@ -11,11 +11,11 @@ import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { isChecklistText } from './report/checklist-lines.js';
 import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
-import { subjectWordsOf } from './propositions/index.js';
+import { entityWordsOf, subjectWordsOf } from './propositions/index.js';
 import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
-import type { LoadedPacks } from './rulepack/types.js';
+import type { FactForm, LoadedPacks } from './rulepack/types.js';
 import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, loadHtmlReader } from './source/index.js';
 import { runFiles, type FileOutcome, type FileTask } from './speed/run-files.js';
 import type { ResultCache } from './speed/cache.js';
@@ -225,10 +225,11 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const named = subjectsNamed(paragraph, subjects);
     sentences.forEach((sentence, index) => {
       const { window, at } = windowOf(index);
-      // A generic topic word ("percent", "record") counts only where the sentence's window, or a
-      // block beside its block, names a subject.
+      // A generic topic word ("percent", "record"), or a word for what a direction fact is about
+      // ("the air in the bubbles", "seawater"), counts only where the sentence's window, or a block
+      // beside its block, names a subject.
       const inWindow = nextTo || named(index - at, window.length);
-      const onTopic = named.at(index) || (inWindow && topic.test(sentence.text));
+      const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text)));
       const found = examineCached(window, at, packs, onTopic, context, () => inWindow && topic.test(window[at - 1] ?? ''));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
@@ -415,6 +416,37 @@ function subjectMatcherOf(packs: LoadedPacks): TopicMatcher {
     subjectMatchers.set(packs, matcher);
   }
   return matcher;
+}
+
+const factMatchers = new WeakMap<LoadedPacks, TopicMatcher>();
+
+/**
+ * The matcher for the things the packs' direction facts are about ("the air in the bubbles", "the
+ * ice", "seawater"): in a draft on topic, a sentence that names one may state a fact the wrong way
+ * round without a number or a subject word ("The air in the bubbles is older than the ice.").
+ */
+function factMatcherOf(packs: LoadedPacks): TopicMatcher {
+  let matcher = factMatchers.get(packs);
+  if (matcher === undefined) {
+    const keys = packs.directions.flatMap((fact) => fact.says.flatMap(factKeys));
+    matcher = createTopicMatcher(entityWordsOf(packs.lexicon, [...new Set(keys)]));
+    factMatchers.set(packs, matcher);
+  }
+  return matcher;
+}
+
+/** The lexicon entity keys a direction fact's form names. */
+function factKeys(form: FactForm): string[] {
+  switch (form.kind) {
+    case 'relation':
+      return [form.x.key, form.y.key];
+    case 'comparison':
+      return [...form.a, ...form.b];
+    case 'order':
+      return [form.first, form.then];
+    case 'change':
+      return form.of;
+  }
 }
 
 function verdictOf(verdicts: Verdict[]): Verdict {

@@ -20,6 +20,7 @@ const ROLE: Record<string, Cause['role']> = { verbs: 'cause', because: 'cause', 
 /** The causes one sentence states or denies; `previous` resolves a pronoun that opens it. */
 export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
   const entities = s.of('entities');
+  const regions = s.of('regions');
   const hits = s
     .of('causes')
     .filter((h, _, all) => !all.some((o) => o !== h && o.first <= h.first && o.last >= h.last && o.last - o.first > h.last - h.first))
@@ -31,6 +32,8 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify';
     // "the end of the ice age" is a noun; "it was CO2 doing the pushing" is still a verb.
     if (verbLike && DETERMINERS.has(s.words[h.first - 1]?.text ?? '') && s.words[h.first - 2]?.text !== 'doing') continue;
+    // "global warming", "Antarctic cooling": a region word before it makes the -ing form a noun.
+    if (verbLike && s.words[h.first]?.text.endsWith('ing') && regions.some((r) => r.last === h.first - 1)) continue;
     if (h.key === 'effects' && s.words[h.first - 1]?.text === 'in') continue;
     causes.push(...causeAt(s, h, previous));
   }
@@ -39,12 +42,17 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
 
 function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   const kind = (t: Thing | undefined) => kindOf(s, t, previous);
+  // A pronoun that acts ("it could not have been a cause") stands for something that can act, not
+  // for the record that shows it ("Since the ice shows CO2 trailing the warmth, it ...").
+  const agentKind = (t: Thing | undefined) => kindOf(s, t, previous, RECORDS);
   const noun = h.key === 'nouns' || h.key === 'effects' || h.key === 'roles' || h.key === 'feedback';
   let polarity = polarityAt(s, h.first);
   // "the greenhouse effect of CO2 must be negligible": a role denied after the noun.
   if (noun && polarity !== 'open' && deniedAfter(s, h.last)) polarity = polarity === 'denied' ? 'asserted' : 'denied';
   const next = s.words[h.last + 1]?.text ?? '';
-  const passive = !noun && (next === 'by' || s.words[h.last + 2]?.text === 'by');
+  // "by itself", "by themselves" say the agent acted alone: no passive.
+  const reflexive = /^(?:itself|themselves|its|their)$/u.test(s.words[(next === 'by' ? h.last + 2 : h.last + 3)]?.text ?? '');
+  const passive = !noun && !reflexive && (next === 'by' || s.words[h.last + 2]?.text === 'by');
   let agentThing: Thing | undefined;
   let patientThing: Thing | undefined;
   if (passive) {
@@ -75,14 +83,22 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     if (h.key === 'roles' && next === 'of') agentThing = linked ?? agentThing;
     else patientThing = linked;
     agentThing ??= thingAfter(s, h.last, 3) ?? named;
+  } else if (s.words[h.first]?.text === 'out' && s.words[h.first + 1]?.text === 'of') {
+    // "The orbit hauled the planet out of the ice age": the thing just before is the object moved.
+    agentThing = clauseSubject(s, h.first) ?? subjectBefore(s, h.first);
+    patientThing = thingAfter(s, h.last);
   } else {
     agentThing = subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first) ?? thingBefore(s, h.first, 'clause');
     patientThing = thingAfter(s, h.last);
   }
   const cleft = cleftFocus(s, agentThing) ?? pseudoCleftFocus(s, h);
   if (cleft !== undefined) agentThing = cleft;
-  let agent = kind(agentThing);
   let patient = kind(patientThing);
+  // "it cannot have been a driver of that warmth": the pronoun is not the thing it acts on.
+  let agent = patientThing !== undefined && patientThing.kind !== 'pronoun' ? kindOf(s, agentThing, previous, new Set([...RECORDS, patientThing.kind])) : agentKind(agentThing);
+  // "dragged us out of the last ice age": a cause phrase that holds its own object names the patient.
+  const inside = s.of('entities').find((e) => e.first >= h.first && e.last <= h.last && (h.key === 'verbs' || h.key === 'start'));
+  if (inside !== undefined && inside.key !== agent) patient = inside.key;
   // "never a driver of it": a pronoun object is not its own subject; it is the other thing named.
   if (patientThing?.kind === 'pronoun' && patient === agent) {
     patient = s.things.filter((t) => t.last < patientThing.first && t.kind !== 'pronoun' && t.kind !== agent).at(-1)?.kind ?? patient;
@@ -115,6 +131,9 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   return out;
 }
 
+/** Things that hold a record and act on nothing. */
+const RECORDS = new Set(['ice', 'ice-core', 'trapped-air', 'co2-station']);
+
 const COPULAS = new Set(['is', 'was', 'are', 'were', 'be', 'been', 'being']);
 /** The copula within six words after a predicate noun, in its clause ("the driver ... was"). */
 function copulaAfter(s: ReadSentence, i: number): number | undefined {
@@ -132,8 +151,8 @@ function copulaAfter(s: ReadSentence, i: number): number | undefined {
 
 /** "must be negligible", "is irrelevant": a role denied by what is said of it. */
 function deniedAfter(s: ReadSentence, i: number): boolean {
-  const after = s.words.slice(i + 1, i + 8).filter((w) => w.clause === s.words[i]?.clause);
-  if (after.some((w) => /^(?:negligible|irrelevant|unimportant|insignificant|immaterial|trivial|tiny|nil|zero|minimal|undetectable|imperceptible|nonexistent|non-existent|absent|faint)$/u.test(w.text))) return true;
+  const after = s.words.slice(i + 1, i + 11).filter((w) => w.clause === s.words[i]?.clause);
+  if (after.some((w) => /^(?:negligible|irrelevant|unimportant|insignificant|immaterial|trivial|tiny|nil|zero|minimal|undetectable|imperceptible|nonexistent|non-existent|absent|faint|nothing|none)$/u.test(w.text))) return true;
   // "too faint to find", "too weak to matter": a degree that rules the role out.
   return after.some((w, k) => w.text === 'too' && after[k + 2]?.text === 'to');
 }
@@ -217,9 +236,18 @@ function hasExclusiveBefore(s: ReadSentence, i: number, window: number): boolean
   return s.of('exclusive').some((e) => e.last < i && i - e.last <= window && s.words[e.first]?.segment === s.words[i]?.segment);
 }
 
+/** A share or an amount after "only": "only part", "only a fraction", "only ~20 ppm", "only some". */
+const PARTIAL = /^(?:part|partly|partially|some|half|a|fraction|portion|share|couple|few|little|about|around|roughly|~?\d.*)$/u;
+
 /** "X alone", "solely X", "the sole cause", "nothing but X"; "not alone" and "not only" are not. */
 function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): boolean {
+  // "Ocean warming alone explains only part of the rise": what the agent did is said to be partial.
+  const clause = s.words[h.first]?.clause;
+  const partial = s.words.some((w, i) => w.clause === clause && /^(?:only|just|merely)$/u.test(w.text) && PARTIAL.test(s.words[i + 1]?.text ?? ''));
+  if (partial) return false;
   return s.of('exclusive').some((e) => {
+    // "only part", "just a fraction": a share, not one cause.
+    if (e.first === e.last && /^(?:only|just|merely)$/u.test(s.words[e.first]?.text ?? '') && PARTIAL.test(s.words[e.last + 1]?.text ?? '')) return false;
     if (s.words[e.first]?.segment !== s.words[h.first]?.segment && s.words[e.first]?.clause !== s.words[h.first]?.clause) return false;
     if (['not', 'no'].includes(s.words[e.first - 1]?.text ?? '')) return false;
     const nearAgent = agent !== undefined && (Math.abs(e.first - agent.last) <= 2 || Math.abs(e.last - agent.first) <= 2);

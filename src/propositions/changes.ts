@@ -32,6 +32,8 @@ export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed
       const name = thing === undefined ? 'temperature' : nameOf(s, thing, previous);
       push(name, 'temperature', h.key === 'warm' ? 1 : -1, h, thing);
     } else if (h.key === 'up' || h.key === 'down') {
+      // "holds less", "takes in more": a size word on an uptake verb is the uptake's, not a change of its own.
+      if (s.of('uptake').some((u) => u.key !== 'nouns' && (u.last === h.first - 1 || (u.last === h.first - 2 && /^(?:a|much|far|even|still|no)$/u.test(s.words[h.first - 1]?.text ?? ''))))) continue;
       const before = thingBefore(s, h.first);
       const thing = before !== undefined && h.first - before.last <= 4 ? before : thingAfter(s, h.last, 2);
       if (thing === undefined) continue;
@@ -117,7 +119,11 @@ export function readRelations(s: ReadSentence, directed: Directed[]): Relation[]
   const relations: Relation[] = [];
   for (const u of directed.filter((d) => d.attribute === 'uptake')) {
     const clause = s.words[u.first]?.clause;
-    const sameClause = temps.filter((t) => s.words[t.first]?.clause === clause && !isAfterThan(s, t));
+    // "a colder ocean keeps less CO2, and a warmer one keeps more": a temperature whose own segment has
+    // an uptake verb of its own goes with that verb, not with this one.
+    const segmentOf = (i: number) => s.words[i]?.segment;
+    const ownVerb = (t: Directed) => segmentOf(t.first) !== segmentOf(u.first) && s.of('uptake').some((h) => segmentOf(h.first) === segmentOf(t.first));
+    const sameClause = temps.filter((t) => s.words[t.first]?.clause === clause && !isAfterThan(s, t) && !ownVerb(t));
     const pool = sameClause.length > 0 ? sameClause : temps.length === 1 ? temps : [];
     // "Cold water releases CO2 when it warms": the change the release goes with, not the starting state.
     const changes = pool.filter((t) => t.form === 'change');

@@ -6,7 +6,7 @@ import { inPhrase, kindOf, subjectOf, thingAfter, thingBefore } from './resolve.
 import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Comparison } from './types.js';
 
-const SIGN: Record<string, 1 | -1 | 0> = { 'age-up': 1, 'age-down': -1, 'age-same': 0, 'size-up': 1, 'size-down': -1 };
+const SIGN: Record<string, 1 | -1 | 0> = { 'age-up': 1, 'age-down': -1, 'age-same': 0, 'size-up': 1, 'size-down': -1, 'age-up-verb': 1, 'age-down-verb': -1 };
 const SWING = /^(?:swing|swings|swung|change|changes|changed|vary|varies|varied|range|amplitude|shift|shifts|shifted|moved|move|moves|fluctuat\w*|respond|responds|responded|react|reacts|reacted|temperature|temperatures)$/u;
 
 /** The comparisons one sentence states (a denied comparison states none). */
@@ -18,7 +18,9 @@ export function readComparisons(s: ReadSentence, previous?: ReadSentence): Compa
   for (const h of longest) {
     const sign = SIGN[h.key];
     if (sign === undefined || denialsBefore(s, h.first, 4) % 2 === 1) continue;
-    const link = s.words.findIndex((w, i) => i > h.last - (sign === 0 ? 2 : 0) && i <= h.last + 4 && (w.text === 'than' || w.text === 'as'));
+    // A comparing verb takes its object directly ("the gas predates the ice that traps it").
+    const verb = h.key.endsWith('-verb');
+    const link = verb ? h.last : s.words.findIndex((w, i) => i > h.last - (sign === 0 ? 2 : 0) && i <= h.last + 4 && (w.text === 'than' || w.text === 'as'));
     if (link < 0) continue;
     const b = thingAfter(s, link, 6);
     // The subject, not a thing in a phrase before it ("Over the ice ages the poles swung…").

@@ -28,7 +28,9 @@ const VOWEL = /[aeiou]/u;
 
 /** A word with its verb forms and noun plural. */
 export function inflect(word: string): string[] {
-  if (!/^[a-z]+$/u.test(word) || word.length < 3) return [word];
+  if (!/^[a-z]+$/u.test(word)) return [word];
+  // "do", "be", "go": short irregular verbs still have their forms ("did the whole job").
+  if (word.length < 3) return [word, ...(IRREGULAR[word] ?? [])];
   const forms = new Set([word, plural(word), past(word), gerund(word), ...(IRREGULAR[word] ?? [])]);
   if (IRREGULAR[word] !== undefined) forms.delete(past(word));
   return [...forms];

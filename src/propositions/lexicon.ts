@@ -132,10 +132,19 @@ function findHits(index: ReadonlyMap<string, Entry[]>, words: readonly string[])
  * among them, so a file about something else is skipped before it is parsed.
  */
 export function subjectWordsOf(lexicon: Lexicon): string[] {
-  const keys = new Set((lexicon['subjects']?.['all'] ?? []).map((k) => k.toLowerCase()));
-  const phrases = [
-    ...Object.entries(lexicon['entities'] ?? {}).filter(([key]) => keys.has(key)).flatMap(([, words]) => words),
-    ...Object.values(lexicon['periods'] ?? {}).flat(),
-  ];
+  const keys = (lexicon['subjects']?.['all'] ?? []).map((k) => k.toLowerCase());
+  return [...new Set([...entityWordsOf(lexicon, keys), ...formsOfPhrases(Object.values(lexicon['periods'] ?? {}).flat())])];
+}
+
+/**
+ * Every form of the phrases of the entity keys `keys` (lower-case keys of `lexicon.entities`):
+ * "the air in the bubbles" names `trapped-air`, whatever inflection the draft uses.
+ */
+export function entityWordsOf(lexicon: Lexicon, keys: readonly string[]): string[] {
+  const wanted = new Set(keys);
+  return formsOfPhrases(Object.entries(lexicon['entities'] ?? {}).filter(([key]) => wanted.has(key)).flatMap(([, words]) => words));
+}
+
+function formsOfPhrases(phrases: readonly string[]): string[] {
   return [...new Set(phrases.flatMap((p) => variantsOf(phraseWords(p)).map((w) => w.join(' '))))];
 }

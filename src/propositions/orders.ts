@@ -23,7 +23,9 @@ export function readOrders(s: ReadSentence, previous?: ReadSentence): Order[] {
   const orders: Order[] = [];
   const names = (r: ReadSentence | undefined) => r !== undefined && (r.of('entities', 'ice-core').length > 0 || r.of('regions', 'antarctic').length > 0);
   // "The Vostok core ... It shows the planet warmed first": the record may be named one sentence back.
-  const recordNamed = names(s) || names(previous);
+  // Only a sentence that reads that record ("It shows...", "This means...") takes it from there.
+  const readsBack = ['it', 'this', 'that', 'these', 'those', 'they', 'here'].includes(s.words[0]?.text ?? '');
+  const recordNamed = names(s) || (readsBack && names(previous));
   for (const h of s.of('order')) {
     if (denialsBefore(s, h.first, 4) % 2 === 1) continue;
     const order = orderAt(s, h, previous);

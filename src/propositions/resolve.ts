@@ -5,13 +5,15 @@
 import type { ReadSentence, Thing } from './sentence.js';
 
 /** The kind of `thing`, with pronouns resolved within the sentence, then in `previous`. */
-export function kindOf(s: ReadSentence, thing: Thing | undefined, previous?: ReadSentence): string | undefined {
+export function kindOf(s: ReadSentence, thing: Thing | undefined, previous?: ReadSentence, passOver?: ReadonlySet<string>): string | undefined {
   if (thing === undefined) return undefined;
   if (thing.kind !== 'pronoun') return thing.kind;
   const segment = s.words[thing.first]?.segment ?? 0;
+  // Kinds the pronoun cannot stand for here are passed over when the segment names another thing.
+  const able = (t: Thing) => passOver === undefined || !passOver.has(t.kind) || !s.things.some((o) => o.kind !== 'pronoun' && !passOver.has(o.kind) && o.first < thing.first);
   for (let seg = segment; seg >= 0; seg -= 1) {
     // The subject, not a thing in a phrase before it ("At the start of the deglaciation CO2 ...").
-    const candidates = s.things.filter((t) => t.kind !== 'pronoun' && t.first < thing.first && s.words[t.first]?.segment === seg);
+    const candidates = s.things.filter((t) => t.kind !== 'pronoun' && t.first < thing.first && s.words[t.first]?.segment === seg && able(t));
     const subject = candidates.find((t) => !inPhrase(s, t)) ?? candidates[0];
     if (subject !== undefined) return subject.kind;
   }

@@ -121,7 +121,9 @@ export const NEGATIONS = new Set(['not', 'no', 'never', 'nothing', 'none', 'neit
 /** Words that deny an effect by saying it fell short ("unable to end", "insufficient to explain"). */
 const LIMITS = new Set(['unable', 'insufficient', 'failed', 'fails', 'fail', 'negligible', 'irrelevant', 'unimportant', 'insignificant', 'immaterial']);
 /** Verbs that deny their object ("rules out CO2 as a driver"). */
-export const DENIALS = new Set(['rule', 'rules', 'ruled', 'ruling', 'exclude', 'excludes', 'excluded', 'deny', 'denies', 'denied', 'disprove', 'disproves', 'disproved', 'refute', 'refutes', 'refuted', 'dismiss', 'dismisses', 'dismissed', 'exonerate', 'exonerates', 'exonerated', 'acquit', 'acquits', 'acquitted']);
+export const DENIALS = new Set(['rule', 'rules', 'ruled', 'ruling', 'exclude', 'excludes', 'excluded', 'deny', 'denies', 'denied', 'disprove', 'disproves', 'disproved', 'refute', 'refutes', 'refuted', 'dismiss', 'dismisses', 'dismissed', 'exonerate', 'exonerates', 'exonerated', 'acquit', 'acquits', 'acquitted', 'eliminate', 'eliminates', 'eliminated', 'eliminating', 'discount', 'discounts', 'discounted', 'strike', 'strikes', 'struck', 'cross', 'crosses', 'crossed']);
+/** Denials that need the particle after them ("struck off the list", "crossed off"). */
+const WITH_OFF = new Set(['strike', 'strikes', 'struck', 'cross', 'crosses', 'crossed']);
 
 /**
  * How many denials stand before word `i` in its clause, within `window` words and not past a linking
@@ -142,7 +144,9 @@ export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
     if (contrast) continue;
     if (NEGATIONS.has(w.text) && after !== 'only' && !(w.text === 'no' && after === 'doubt') && !(w.text === 'nothing' && (after === 'else' || after === 'but'))) count += 1;
     else if (LIMITS.has(w.text) || (w.text === 'too' && /^(?:weak|small|feeble|little|slow|short|modest)$/u.test(after))) count += 1;
-    else if (DENIALS.has(w.text) && (w.text.startsWith('rul') ? s.words[k + 1]?.text === 'out' : true)) count += 1;
+    else if (DENIALS.has(w.text) && (w.text.startsWith('rul') ? after === 'out' : WITH_OFF.has(w.text) ? after === 'off' : true)) count += 1;
+    // "so much for CO2 causing the warming": a dismissal.
+    else if (w.text === 'much' && s.words[k - 1]?.text === 'so' && after === 'for') count += 1;
   }
   return count;
 }

@@ -48,8 +48,74 @@ describe('claims read as propositions, in wordings of our own', () => {
     ["Warming drives CO2, and CO2's influence on temperature is too weak to detect in the cores.", 'logic.either-or-causation'],
     // "once" orders two events; "carbon" is the gas.
     ['Since the carbon only appears once the warming is well under way, none of that warming can be blamed on it.', 'logic.lag-rules-out-cause'],
+    // A dismissal ("so much for"), a role put at nothing far after its noun, and a pronoun that
+    // acts standing for the gas, not for the ice that records it.
+    ['The cores say the warm-up came first and the CO2 only afterwards, so much for CO2 driving the warming.', 'logic.lag-rules-out-cause'],
+    ['Since carbon dioxide trails the temperature by centuries, its part in the deglacial warming must surely have been next to nothing.', 'logic.lag-rules-out-cause'],
+    ['As the Dome C ice shows carbon dioxide lagging the warmth, it cannot have been a driver of that warmth.', 'logic.lag-rules-out-cause'],
+    // Both directions set against each other in one sentence, then one picked.
+    ['Put the question of whether the gas pushed the temperature or the temperature pushed the gas to the ice, and the reply is short: temperature.', 'logic.either-or-causation'],
+    ['Over the glacial cycles it was the warmth that moved the CO2, not the CO2 that moved the warmth.', 'logic.either-or-causation'],
+    // A regional record read as the globe, with a "than" that compares two times, not two places,
+    // and a "not just" that widens the claim (Antarctic swing about twice the global mean:
+    // Jouzel et al. 2007; global LGM cooling about 6 °C: Tierney et al. 2020).
+    ['The deuterium in the Vostok ice shows that Earth as a whole was about 9 °C colder at the glacial peak than before industry.', 'scope.regional-record-as-global'],
+    ['The Talos Dome core shows it was far colder in the last glacial, and that is the whole world, not just Antarctica.', 'scope.regional-record-as-global'],
+    // A global order stated in its own words is a direction error, even after a sentence that
+    // named an Antarctic record (global temperature lagged CO2: Shakun et al. 2012).
+    ['Antarctic temperature rose by about 9 °C in that time. Averaged over the globe, temperature started rising before the carbon dioxide did.', 'direction.global-co2-ahead-of-warming'],
+    // A cause phrase that holds its object; the other factor denied any part; another single agent;
+    // idioms of doing the whole work ("did the whole job").
+    ['The tilt of the orbit on its own hauled the planet out of the last ice age, and carbon dioxide had no part in it.', 'logic.single-cause'],
+    ['The deglaciation happened for one reason only: the deep ocean currents started up again.', 'logic.single-cause'],
+    ['Forget the gas: the orbit did the whole job by itself.', 'logic.single-cause'],
   ])('%s → %s', async (text, ruleId) => {
     expect(await serious(text)).toContain(ruleId);
+  });
+
+  // A sentence that names only what a direction fact is about (the air, the ice), in a draft
+  // whose earlier sentence names the subject, and a verb that compares ages with its object.
+  it.each([
+    ['The Dome Fuji core was drilled in the 1990s. The air in the bubbles is older than the ice that holds it.', 'direction.trapped-air-younger-than-ice'],
+    ['The Dome Fuji core was drilled in the 1990s. The gas in each bubble predates the ice that traps it.', 'direction.trapped-air-younger-than-ice'],
+  ])('%s → %s', async (text, ruleId) => {
+    expect(await serious(text)).toContain(ruleId);
+  });
+
+  it.each([
+    'The Dome Fuji core was drilled in the 1990s. The ice predates the air bubbles sealed inside it.',
+    'The Dome Fuji core was drilled in the 1990s. The air in the bubbles postdates the ice around it.',
+  ])('passes the right way round: %s', async (text) => {
+    expect(await serious(text)).not.toContain('direction.trapped-air-younger-than-ice');
+  });
+
+  it.each([
+    // A share is not a single cause; "global warming" is a noun, not the orbit warming anything.
+    'Warmer seas alone account for only part of the glacial-to-interglacial CO2 rise, perhaps a quarter of it.',
+    'On their own, the orbital changes cannot account for several degrees of global warming.',
+  ])('no single cause: %s', async (text) => {
+    expect(await serious(text)).not.toContain('logic.single-cause');
+  });
+
+  it('a record set against the global mean passes: Antarctic swings are larger than the global mean', async () => {
+    expect(await serious('The Vostok record swings by about 9 °C, larger than the global mean change of about 5 °C.')).not.toContain('scope.regional-record-as-global');
+  });
+
+  // The choice answered with both directions is the right answer.
+  it('passes a choice answered with both: each pushed the other', async () => {
+    expect(await serious('Ask whether CO2 pushed the temperature or the temperature pushed CO2, and the answer is both: each pushed the other.')).not.toContain('logic.either-or-causation');
+  });
+
+  it.each([
+    // "holds less", "keeps more": the size word is the uptake's, not a change of temperature.
+    'Sea water that heats up holds less dissolved CO2, not more, so a warming ocean hands some gas back to the air.',
+    'Ocean water that warms can keep less carbon dioxide in solution.',
+  ])('the solubility fact the right way round: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+
+  it('the solubility fact the wrong way round, with a size word on the verb: a colder sea keeps less CO2', async () => {
+    expect(await serious('A colder ocean keeps less carbon dioxide dissolved, and a warmer one keeps more.')).toContain('direction.co2-solubility-falls-with-warming');
   });
 
   it.each([

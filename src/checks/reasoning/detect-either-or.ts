@@ -36,6 +36,23 @@ function detect({ index, read }: DetectInput): Cue[] {
   };
   const answer = answersEitherOr(read(index - 1), here.s.text);
   if (answer) return [{ start: 0, end: here.s.text.length }];
+  // "Ask whether CO2 pushes temperature or temperature pushes CO2, and the ice answers: temperature";
+  // "it was warming that moved CO2, not CO2 that moved temperature": both directions set against
+  // each other in one sentence, then one picked.
+  const all = here.props.causes.filter((c) => c.role !== 'start' && direction(c) !== undefined);
+  for (const first of all) {
+    const second = all.find((c) => c.start > first.start && direction(c) !== direction(first));
+    if (second === undefined) continue;
+    const between = here.s.text.slice(first.end, second.start + 12);
+    const choice = /\bor\b/u.test(between);
+    // "..., not CO2 that moved temperature": the second direction itself is what "not" sets aside.
+    const against = /(?:^|[,;]\s*|\s)(?:not|rather than|instead of)\s+(?:the\s+)?$/u.test(here.s.text.slice(first.end, second.start));
+    if (against && first.polarity === 'asserted') return [{ start: first.start, end: second.end }];
+    // The answer starts past the second direction's own object ("...or temperature pushes CO2, and ...").
+    const after = here.s.text.slice(second.end);
+    const boundary = /[,;:—–]|\s(?:and|but|so)\s/u.exec(after);
+    if (choice && boundary !== null && picksOne(after.slice(boundary.index))) return [{ start: first.start, end: here.s.text.length }];
+  }
   for (const asserted of causes.filter((c) => c.polarity === 'asserted' && direction(c) !== undefined)) {
     const denied = causes.find((c) => c.polarity === 'denied' && direction(c) !== undefined && direction(c) !== direction(asserted));
     if (denied !== undefined) return [{ start: Math.min(asserted.start, denied.start), end: Math.max(asserted.end, denied.end) }];
@@ -58,6 +75,17 @@ function answersEitherOr(question: ReturnType<DetectInput['read']>, text: string
   // "The cores give a clear answer: temperature." picks one side, as "the latter" does.
   const short = text.split(/\s+/u).length <= 12 && /\b(?:temperature|warming|co2|co₂|carbon dioxide)\b/iu.test(text) && !/\b(?:both|each|feedback|loop|and)\b/iu.test(text);
   return short || /\b(?:the (?:first|second|former|latter)|the one|only one)\b/iu.test(text);
+}
+
+/**
+ * After a choice between the two directions, an answer that picks one: "the second", "in favour of
+ * the latter", or a short answer naming one side only ("a one-word answer: temperature").
+ */
+function picksOne(rest: string): boolean {
+  if (/\b(?:both|each|feedback|loop|mutual|two-way)\b/iu.test(rest)) return false;
+  if (/\b(?:the (?:first|second|former|latter)|in favou?r of)\b/iu.test(rest)) return true;
+  const sides = [/\b(?:temperature|temp|warming|warmth|heat)\b/iu, /\b(?:co2|co₂|carbon dioxide|carbon|the gas)\b/iu].filter((side) => side.test(rest));
+  return sides.length === 1 && /[:—–]|\banswers?\b|\bsays?\b|\bsettles?\b|\bclearly\b/iu.test(rest);
 }
 
 /** The detector entry for the registry. */

@@ -68,7 +68,18 @@ function detectRegional(input: DetectInput): Cue[] {
   // "colder than today" compares two times, not the record with the globe: no contrast.
   const sentence = input.sentence;
   const times = findPhrases(sentence, words('time-comparison'));
-  const contrast = findPhrases(sentence, words('contrast')).filter((c) => !times.some((t) => t.first <= c.first && t.last >= c.last));
+  // "than" compares only when a place or a record follows it ("larger than the global mean"); "than it
+  // is today", "than before industrialisation" compare two times. "not just Greenland's" widens.
+  const places = [...s.of('regions'), ...s.of('entities', 'ice-core'), ...s.of('entities', 'temperature')];
+  const contrast = findPhrases(sentence, words('contrast')).filter((c) => {
+    if (times.some((t) => t.first <= c.first && t.last >= c.last)) return false;
+    const phrase = sentence.text.slice(c.start, c.end).toLowerCase();
+    const next = s.words.findIndex((w) => w.start >= c.end);
+    const previous = s.words.filter((w) => w.end <= c.start).at(-1)?.text;
+    if (phrase === 'than') return next >= 0 && places.some((p) => p.first >= next && p.first - next <= 4);
+    if (phrase === 'not' || phrase === 'only') return !/^(?:just|only|merely|simply)$/u.test(s.words[next]?.text ?? '') && previous !== 'not';
+    return true;
+  });
   if (contrast.length > 0) return [];
   // "...and the CO2 then warmed the planet": CO2 acting on the globe, not a record read as global.
   if (here.props.causes.some((c) => c.agent === 'co2' && c.polarity === 'asserted')) return [];

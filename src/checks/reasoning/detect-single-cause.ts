@@ -11,18 +11,28 @@
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isAboutModernRise } from './queries.js';
 
+/** The two factors the sources name together: the orbital trigger and the CO2 feedback. */
+const FACTORS = new Set(['orbit', 'co2']);
+/** Agents that may be singled out as the one cause: the two factors, and the ocean. */
+const SINGLE_AGENTS = new Set(['orbit', 'co2', 'water']);
+
 function detect({ index, read }: DetectInput): Cue[] {
   const here = read(index);
   if (here === undefined || isAboutModernRise(here.s)) return [];
+  // One agent singled out as the cause of the ice ages or of a warming: the orbit, CO2, or another
+  // factor of the climate system ("for one reason only: the ocean currents switched back on").
   const single = here.props.causes.find(
-    (c) => c.polarity === 'asserted' && c.exclusive && c.role !== 'start' && c.role !== 'amplify' && (c.agent === 'orbit' || c.agent === 'co2') && c.patient !== 'co2',
+    (c) => c.polarity === 'asserted' && c.exclusive && c.role !== 'start' && c.role !== 'amplify' && SINGLE_AGENTS.has(c.agent ?? '') && c.patient !== 'co2',
   );
   // "It was CO2 that pulled the planet out, after the orbit set things in motion": the other factor keeps a role.
-  const other = single === undefined ? undefined : here.props.causes.find((c) => c.polarity === 'asserted' && c !== single && (c.agent === 'orbit' || c.agent === 'co2') && c.agent !== single.agent);
+  const other = single === undefined ? undefined : here.props.causes.find((c) => c.polarity === 'asserted' && c !== single && FACTORS.has(c.agent ?? '') && c.agent !== single.agent);
   if (single !== undefined && other === undefined) return [{ start: single.start, end: single.end }];
-  // "Orbital changes, not CO2, caused the warming": one named, the other denied, for the same effect.
-  const named = here.props.causes.find((c) => c.polarity === 'asserted' && c.role === 'cause' && (c.agent === 'orbit' || c.agent === 'co2'));
-  const denied = here.props.causes.find((c) => c.polarity === 'denied' && c.role === 'cause' && (c.agent === 'orbit' || c.agent === 'co2') && c.agent !== named?.agent && c.start === named?.start);
+  // "Orbital changes, not CO2, caused the warming"; "the orbit ended the ice age and CO2 had nothing
+  // to do with it": one factor named as the cause, the other denied any part, for the same effect.
+  const named = here.props.causes.find((c) => c.polarity === 'asserted' && c.role === 'cause' && FACTORS.has(c.agent ?? '') && c.patient !== 'co2');
+  const denied = here.props.causes.find(
+    (c) => c.polarity === 'denied' && c.role === 'cause' && FACTORS.has(c.agent ?? '') && c.agent !== named?.agent && (c.start === named?.start || named?.exclusive === true || c.patient === undefined || c.patient === named?.patient),
+  );
   return named !== undefined && denied !== undefined ? [{ start: named.start, end: named.end }] : [];
 }
 
