@@ -96,6 +96,13 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
     else if (LOOSE_GAP.test(gap) && LOOSE_END.test(gap) && closeDates(first, second)) out.push(ordered(first, second, true));
     else if (restatesModifier(text, first, gap, second) && closeDates(first, second)) out.push(ordered(first, second, true));
   }
+  // A °F figure in this writing is a conversion: "in Fahrenheit that difference is about 43 °F",
+  // "a 6 °C warm-up is about 38 °F". It restates the nearest °C or K figure before it.
+  for (const q of qs) {
+    if (q.statedUnit !== 'degF' || out.some((r) => r.first === q || r.second === q)) continue;
+    const partner = qs.filter((p) => p.end <= q.start && (p.statedUnit === 'degC' || p.statedUnit === 'K')).at(-1);
+    if (partner !== undefined && sameThing(partner, q) && !qs.some((o) => o.start > partner.end && o.end <= q.start && o.statedUnit === 'degF')) out.push(ordered(partner, q, true));
+  }
   const opening = previous === undefined ? undefined : acrossSentences(text, qs, previous, out);
   return opening === undefined ? out : [...out, opening];
 }
@@ -111,7 +118,10 @@ function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentenc
   const second = qs.find((q) => sameThing(first, q) && closeDates(first, q));
   if (second === undefined || first.statedUnit === second.statedUnit || found.some((r) => r.second === second || r.first === second)) return undefined;
   const head = text.slice(0, second.start);
-  if (!OPENING.test(head) || !LOOSE_END.test(head)) return undefined;
+  // "For readers who think in Fahrenheit, that makes it about 43 °F colder": a °F figure that
+  // points back restates the last °C or K figure before it.
+  const fahrenheitBack = second.statedUnit === 'degF' && (first.statedUnit === 'degC' || first.statedUnit === 'K') && /\b(?:fahrenheit|that|this|which)\b/iu.test(head) && !qs.some((q) => q.start < second.start && q.dimension === second.dimension);
+  if (!OPENING.test(head) || !(LOOSE_END.test(head) || fahrenheitBack)) return undefined;
   // Only a number in this sentence can be flagged here, so it must be the conversion.
   const pair = ordered(first, second, true);
   return pair.second === second ? pair : undefined;

@@ -45,7 +45,11 @@ export function sharedSubjects(sentence: string, quantities: Quantity[]): Shared
   const verb = tokens[first] as Token;
   const joins = tokens
     .map((t, k) => ({ t, k }))
-    .filter(({ t, k }) => k > first && COORDINATOR.test(t.text) && isVerb(tokens[k + 1]));
+    .filter(({ t, k }) => k > first && COORDINATOR.test(t.text) && isVerb(tokens[k + 1]))
+    // "The tilt swings over 41,000 years, and the shape of the orbit stretches and rounds on a cycle
+    // of 100,000 years": past a join that opens a clause with its own subject, a later predicate
+    // shares that subject, not the sentence's.
+    .filter(({ k }) => !tokens.some((o, m) => m > first && m < k && COORDINATOR.test(o.text) && !isVerb(tokens[m + 1]) && /^(?:the|a|an|its|their|this|that|these|those|[A-Z]\p{L}*)$/u.test(tokens[m + 1]?.text ?? '')));
   return joins
     .map(({ t, k }, n): SharedSubject => {
       const start = (tokens[k + 1] as Token).start;

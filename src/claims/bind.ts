@@ -27,6 +27,8 @@ export type { TermHits } from './bind-view.js';
 
 /** A quantity whose best values tie: it binds nothing and goes to the checklist. */
 const AMBIGUOUS = 'ambiguous';
+/** Words that make a length a stretch of the ice ("the lowest 200 metres", "its top 50 m"). */
+const SEGMENT = /\b(?:the|its|their|a|an)\s+(?:very\s+)?(?:lowest|bottom|bottommost|deepest|top|topmost|upper|uppermost|lower|last|final|first)\s+(?:(?:few|some|roughly|about|around)\s+)?$/iu;
 const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 
 /**
@@ -145,6 +147,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   let contextSubject: [number, number] | null | undefined;
   quantities.forEach((q, i) => {
     if (decided.has(i)) return;
+    // "the lowest 200 metres hold 150,000 years": a stretch of the core, not its depth.
+    if (q.dimension === 'length' && SEGMENT.test(sentence.slice(Math.max(0, q.start - 24), q.start))) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const vetoes = vetoView(sentence, view, q, role);

@@ -151,10 +151,13 @@ function isAfterThan(s: ReadSentence, d: Directed): boolean {
 }
 
 /** Changes of regions and of marginal forcing, with the period they are set in. */
-export function readChanges(s: ReadSentence, directed: Directed[], previous?: ReadSentence): Change[] {
-  // A period named in the sentence before still sets the scene ("During the Younger Dryas... While Greenland froze, ...").
+export function readChanges(s: ReadSentence, directed: Directed[], previous?: ReadSentence, earlier: readonly ReadSentence[] = []): Change[] {
+  // A period named in the sentence before still sets the scene ("During the Younger Dryas... While
+  // Greenland froze, ..."), and so does one named a sentence or two earlier in the paragraph when
+  // this sentence names no period of its own.
   const periodIn = (r: ReadSentence | undefined) => r?.of('periods').filter((p) => p.key !== 'deglaciation')[0]?.key;
-  const period = periodIn(s) ?? periodIn(previous);
+  const scene = s.of('periods').length === 0 && previous?.of('periods').length === 0 ? earlier.map(periodIn).find((p) => p !== undefined) : undefined;
+  const period = periodIn(s) ?? periodIn(previous) ?? scene;
   const changes: Change[] = directed
     .filter((d) => d.attribute === 'temperature')
     .map((d) => ({ kind: 'change', of: d.of, attribute: 'temperature', dir: (d.negated ? -d.dir : d.dir) as 1 | -1, start: d.start, end: d.end, ...(period === undefined ? {} : { during: period }) }));

@@ -18,7 +18,7 @@ export { isOwnClaim, stanceOf, STANCES, type SentenceStance, type StanceContext,
 export type * from './types.js';
 
 /** Reads the propositions of `s`; `previous` resolves a pronoun that points back one sentence. */
-export function readPropositions(s: ReadSentence, previous?: ReadSentence, stance?: SentenceStance): Propositions {
+export function readPropositions(s: ReadSentence, previous?: ReadSentence, stance?: SentenceStance, earlier: readonly ReadSentence[] = []): Propositions {
   let causes = readCauses(s, previous);
   if (stance?.kind === 'rhetorical' && stance.flips) causes = causes.map(flip);
   if (stance?.kind === 'asked') causes = causes.map((c) => ({ ...c, polarity: 'open' as const }));
@@ -28,7 +28,7 @@ export function readPropositions(s: ReadSentence, previous?: ReadSentence, stanc
     orders: readOrders(s, previous),
     relations: readRelations(s, directed),
     comparisons: readComparisons(s, previous),
-    changes: readChanges(s, directed, previous),
+    changes: readChanges(s, directed, previous, earlier),
     evidence: readEvidence(s, causes),
   };
 }

@@ -72,7 +72,8 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
 /** "Some claim that...", "Critics argue...", "You may have heard that...", "It is often said...". */
 function isReported(s: ReadSentence): boolean {
   const verbs = s.of('stance', 'report-verbs').filter((v) => v.first <= 10);
-  const reporters = s.of('stance', 'reporters');
+  // "For readers who think in Fahrenheit, ...": a reporter inside a phrase is nobody's report.
+  const reporters = s.of('stance', 'reporters').filter((r) => !/^(?:for|to|with|among|of|from)$/u.test(s.words[r.first - 1]?.text ?? ''));
   if (verbs.some((v) => reporters.some((r) => r.last < v.first && v.first - r.last <= 4))) return true;
   // "Mr Pratley writes that...", "The op-ed insists the lag...": a report with a named outside source.
   const attributed = verbs.some((v) => {

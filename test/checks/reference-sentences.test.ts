@@ -33,3 +33,21 @@ describe('parsed sentences: every built-in value passes its agreeing sentence an
     });
   });
 });
+
+// Sea level said the ways people say it: against today's shoreline, as "the sea" or "the oceans",
+// and glacial times named by what they did ("so much water was locked in ice"). Lowstand about
+// 120-135 m below present: Lambeck et al. 2014, PNAS 111, 15296-15303, doi 10.1073/pnas.1411762111;
+// deglacial rise about 80 m: Clark et al. 2012, doi 10.1073/pnas.1116619109.
+describe('sea level in everyday wording', () => {
+  it.each([
+    ['The sea stood only about 60 metres lower than today.', '60 metres', 'lgm-sea-level-lowstand', 'conflicts'],
+    ['Sea level stood about 125 metres below today\'s shoreline.', '125 metres', 'lgm-sea-level-lowstand', 'agrees'],
+    ['So much water was locked in ice sheets that sea level fell by about 300 metres.', '300 metres', 'lgm-sea-level-lowstand', 'conflicts'],
+    ['Between 19,000 and 11,000 years ago, melting ice sheets raised the oceans by about 8 metres.', '8 metres', 'deglacial-sea-level-rise', 'conflicts'],
+    ['Between 19,000 and 11,000 years ago, melting ice sheets raised the oceans by about 80 metres.', '80 metres', 'deglacial-sea-level-rise', 'agrees'],
+  ])('%s', (sentence, text, id, verdict) => {
+    const { bound, verdicts } = judge([sentence, text] as unknown as Said);
+    expect(bound).toEqual([id]);
+    expect(verdicts).toEqual([verdict]);
+  });
+});

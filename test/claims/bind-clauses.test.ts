@@ -26,7 +26,23 @@ const ROWS: [sentence: string, expected: string[]][] = [
   ['The Younger Dryas began 12,900 years ago and ended 11,700 years ago.', ['younger-dryas-start', 'younger-dryas-end']],
   ['Vostok reaches back 420,000 years and is 3,623 m deep.', ['vostok-record-span', 'vostok-drilled-depth']],
   ['The last ice age started to wane about 18,000 years ago but was over by about 11,700 years ago.', ['termination-1-start', 'termination-1-end']],
+  // A clause with a subject of its own: its later predicate shares that subject (orbital periods of
+  // about 41,000 and 100,000 years: Hays et al. 1976, Science 194, 1121-1132).
+  ['The tilt of the axis swings back and forth over about 41,000 years, and the shape of the orbit stretches and rounds on a cycle of roughly 100,000 years.', ['milankovitch-obliquity-period', 'milankovitch-eccentricity-period']],
 ];
+
+// A stretch of the ice is not the core's depth (EPICA Dome C drilled to 3,270 m: EPICA community
+// members 2004, Nature 429, 623-628): "the lowest 200 metres" binds to no depth value.
+describe('a stretch of the core', () => {
+  it.each([
+    'The lowest 200 metres of the Dome C core hold about 150,000 years.',
+    'Deep ice is squeezed thin: the bottom 200 metres of the EPICA core span a long time.',
+  ])('%s', (sentence) => expect(bound(sentence)[0]).toBe('-'));
+
+  it('still binds the depth itself: EPICA Dome C reaches a depth of 3,270 metres', () => {
+    expect(bound('EPICA Dome C reaches a depth of 3,270 metres.')).toEqual(['edc-drilled-depth']);
+  });
+});
 
 describe('predicates that share a subject', () => {
   it.each(ROWS)('%s', (sentence, expected) => expect(bound(sentence)).toEqual(expected));

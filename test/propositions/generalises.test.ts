@@ -64,6 +64,12 @@ describe('claims read as propositions, in wordings of our own', () => {
     // A global order stated in its own words is a direction error, even after a sentence that
     // named an Antarctic record (global temperature lagged CO2: Shakun et al. 2012).
     ['Antarctic temperature rose by about 9 °C in that time. Averaged over the globe, temperature started rising before the carbon dioxide did.', 'direction.global-co2-ahead-of-warming'],
+    // A period named two sentences back still sets the scene (Antarctica warmed during the
+    // Younger Dryas: Pedro et al. 2016, from memory).
+    ['The Younger Dryas was a sharp return to the cold in the north. It lasted from about 12,900 to 11,700 years ago. While Greenland froze, Antarctica cooled too.', 'direction.bipolar-seesaw-younger-dryas'],
+    // A °F figure that points back to the °C change of the sentence before, with "readers" inside a
+    // phrase that reports nobody's view (NIST SP 811: a change of 1 °C is a change of 1.8 °F).
+    ['Global mean temperature at the Last Glacial Maximum was about 6 °C below pre-industrial. For readers who think in Fahrenheit, that makes the ice-age world about 43 °F colder.', 'unit.temperature-difference'],
     // A cause phrase that holds its object; the other factor denied any part; another single agent;
     // idioms of doing the whole work ("did the whole job").
     ['The tilt of the orbit on its own hauled the planet out of the last ice age, and carbon dioxide had no part in it.', 'logic.single-cause'],

@@ -51,7 +51,9 @@ export function paragraphReader(paragraph: readonly string[], packs: LoadedPacks
     if (s === undefined) return undefined;
     const next = sentenceAt(i + 1);
     const stance = stanceOf(s, { ...context, ...(next === undefined ? {} : { next }) });
-    const reading = { s, stance, props: readPropositions(s, sentenceAt(i - 1), stance) };
+    // The two sentences before the previous one, nearest first: the scene a paragraph has set.
+    const earlier = [sentenceAt(i - 2), sentenceAt(i - 3)].filter((e): e is ReadSentence => e !== undefined);
+    const reading = { s, stance, props: readPropositions(s, sentenceAt(i - 1), stance, earlier) };
     readings.set(i, reading);
     return reading;
   };
