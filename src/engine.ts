@@ -20,8 +20,9 @@ import { blockRange, createLineIndex, draftFormat, draftFromText, findDrafts, lo
 import { runFiles, type FileOutcome, type FileTask } from './speed/run-files.js';
 import type { ResultCache } from './speed/cache.js';
 import { inShard, type Shard } from './speed/shard.js';
+import { sparseMarkdownDraft } from './speed/sparse-markdown.js';
 import { cachedFindings } from './speed/sentence-cache.js';
-import type { Binding, CheckResult, Claim, Draft, Flag, FlagDraft, Level, Quantity, RuleInfo, Sentence, Verdict } from './types.js';
+import type { Binding, CheckResult, Claim, Draft, Flag, FlagDraft, Level, ProseBlock, Quantity, RuleInfo, Sentence, Verdict } from './types.js';
 
 /** How a run is set up. Only `cwd` is required; packs default to the built-in pack. */
 export interface CheckOptions {
@@ -55,6 +56,11 @@ export interface DraftOptions {
   levels?: Record<string, Level | 'off'>;
   /** The draft's path relative to the project root, for claim ids (default: the draft's path). */
   projectPath?: string;
+  /**
+   * Per block of the draft, whether a block beside it names a subject (`subjectBeside`); given
+   * when `blocks` are some of a larger draft's (the editor re-checks only changed blocks).
+   */
+  subjectBeside?: readonly boolean[];
 }
 
 /** The part of a run that concerns one draft. */
@@ -149,13 +155,18 @@ export function checkFileText(raw: Pick<Draft, 'path' | 'text' | 'format'> | Dra
   const passed = passOver(text, packs);
   if (passed !== undefined) return passed;
   let draft: Draft;
+  let beside: boolean[] | undefined;
   try {
-    draft = 'blocks' in raw ? raw : draftFromText(path, text, format === 'docx' ? 'text' : format);
+    // A Markdown draft is parsed only around its subjects and its sentences with two numbers
+    // (speed/sparse-markdown.ts): the same claims as a parse of the whole.
+    const sparse = 'blocks' in raw || format !== 'markdown' ? undefined : sparseMarkdownDraft(path, text, (t) => namesSubject(t, packs));
+    draft = 'blocks' in raw ? raw : sparse?.draft ?? draftFromText(path, text, format === 'docx' ? 'text' : format);
+    beside = sparse?.subjectBeside;
   } catch (error) {
     if (error instanceof FirnlineError) return { claims: [], flags: [], unchecked: uncheckedOf(error) };
     throw error;
   }
-  return checkDraft(draft, packs, options);
+  return checkDraft(draft, packs, beside === undefined ? options : { ...options, subjectBeside: beside });
 }
 
 /** Why a file that names no subject of the packs was passed over. */
@@ -174,8 +185,13 @@ export function uncheckedOf(problem: FirnlineError): NonNullable<FileOutcome['un
  */
 export function passOver(text: string, packs: LoadedPacks): FileOutcome | undefined {
   if (text.trimStart().startsWith(CHECKLIST_MARKER) && isChecklistText(text)) return { claims: [], flags: [], skipped: 'sign-off checklist' };
-  if (!subjectMatcherOf(packs).test(text)) return { claims: [], flags: [], skipped: NO_SUBJECT };
+  if (!namesSubject(text, packs)) return { claims: [], flags: [], skipped: NO_SUBJECT };
   return undefined;
+}
+
+/** True when `text` names a subject of the packs (`lexicon.subjects`): what puts a draft on topic. */
+export function namesSubject(text: string, packs: LoadedPacks): boolean {
+  return subjectMatcherOf(packs).test(text);
 }
 
 /** Records a draft that was named or walked but could not be checked; it fails the run. */
@@ -194,18 +210,27 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
   const lines = createLineIndex(draft.text);
   const claims: Claim[] = [];
   const seen = new Map<string, number>();
+  const subjects = subjectMatcherOf(packs);
+  const beside = options.subjectBeside ?? subjectBeside(draft.blocks, packs);
   draft.blocks.forEach((block, blockIndex) => {
-    // A block with no topic word and no digit holds no claim (examineSentence needs one or the
-    // other in a sentence, and sentences are pieces of their block): it is not even split.
-    if (!DIGIT.test(block.text) && !topic.test(block.text) && !subjectMatcherOf(packs).test(block.text) && !factMatcherOf(packs).test(block.text)) return;
+    // A block with no subject in it or beside it holds at most the draft's own arithmetic and unit
+    // slips, which need two numbers in one sentence (sentences are pieces of their block): without
+    // them it is not even split.
+    const nextTo = beside[blockIndex] === true;
+    if (!TWO_NUMBERS.test(block.text) && !nextTo && !subjects.test(block.text)) return;
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
     const windowOf = paragraphWindows(paragraph);
+    const named = subjectsNamed(paragraph, subjects);
     sentences.forEach((sentence, index) => {
       const { window, at } = windowOf(index);
-      const onTopic = topic.test(sentence.text) || subjectMatcherOf(packs).test(sentence.text) || factMatcherOf(packs).test(sentence.text);
-      const found = examineCached(window, at, packs, onTopic, context, () => topic.test(window[at - 1] ?? ''));
+      // A generic topic word ("percent", "record"), or a word for what a direction fact is about
+      // ("the air in the bubbles", "seawater"), counts only where the sentence's window, or a block
+      // beside its block, names a subject.
+      const inWindow = nextTo || named(index - at, window.length);
+      const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text)));
+      const found = examineCached(window, at, packs, onTopic, context, () => inWindow && topic.test(window[at - 1] ?? ''));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -238,6 +263,20 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     });
   });
   return { claims, flags: claims.flatMap((c) => c.flags) };
+}
+
+/**
+ * Per block, whether the block just before or just after it names a subject of the packs
+ * (`lexicon.subjects`). A generic topic word ("percent", "record", "temperature") makes a sentence
+ * a candidate claim only where its paragraph window or a block beside it names a subject: a draft
+ * is on topic because it names the subject, and a sentence may take its subject from its paragraph
+ * or from the block beside it (a list item after its lead-in, a post in a thread). Elsewhere a
+ * sentence is a claim only through the draft's own arithmetic or unit slip.
+ */
+export function subjectBeside(blocks: readonly ProseBlock[], packs: LoadedPacks): boolean[] {
+  const subjects = subjectMatcherOf(packs);
+  const named = blocks.map((b) => subjects.test(b.text));
+  return named.map((_hit, i) => named[i - 1] === true || named[i + 1] === true);
 }
 
 /**
@@ -323,6 +362,21 @@ function examineSentence(
 }
 
 const DIGIT = /\d/u;
+
+/** Which sentences of a paragraph name a subject, and whether a window of it (from, length) names one. */
+interface SubjectsNamed {
+  (from: number, length: number): boolean;
+  at(index: number): boolean;
+}
+
+function subjectsNamed(paragraph: string[], subjects: TopicMatcher): SubjectsNamed {
+  const hits = paragraph.map((s) => subjects.test(s));
+  // Sentences before each index that name a subject, so a window's answer is one subtraction.
+  const before = [0];
+  hits.forEach((hit, i) => before.push((before[i] ?? 0) + (hit ? 1 : 0)));
+  const named = (from: number, length: number): boolean => (before[from + length] ?? 0) - (before[from] ?? 0) > 0;
+  return Object.assign(named, { at: (index: number) => hits[index] === true });
+}
 
 /**
  * A sentence with no topic word whose number takes its subject from the sentence before ("The EPICA

@@ -58,6 +58,27 @@ export function foldedLower(sentence: string): string {
  * hits count as the other term's, so a pack adds a synonym without editing an entry.
  */
 export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
+  // The binder, the reference check, the rank check and the next sentence's context each ask for
+  // the same sentence's terms: the answer is kept for the last few sentences (copies out).
+  let found = foundTerms.get(packs);
+  if (found === undefined) {
+    found = new Map();
+    foundTerms.set(packs, found);
+  }
+  let hits = found.get(sentence);
+  if (hits === undefined) {
+    hits = searchTerms(sentence, packs);
+    if (found.size >= FOUND_TERMS_KEPT) found.delete(found.keys().next().value as string);
+    found.set(sentence, hits);
+  }
+  return new Map([...hits].map(([id, spans]) => [id, spans.map(([s, e]): [number, number] => [s, e])]));
+}
+
+/** Sentences whose terms are kept per packs (a paragraph's worth, and the clauses the binder cuts from them). */
+const FOUND_TERMS_KEPT = 64;
+const foundTerms = new WeakMap<LoadedPacks, Map<string, TermHits>>();
+
+function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
   let terms = compiled.get(packs);
   if (terms === undefined) {
     terms = new Map(packs.terms.map((t): [string, CompiledTerm] => [t.id, { words: t.words, keyWords: keyWordsOf(t.words) }]));

@@ -3,7 +3,7 @@
  * settings' level overrides, claim ids relative to the project root, and the sign-off ledger
  * joined in so that flags on signed-off claims carry their sign-off.
  */
-import { checkDraft } from '../engine.js';
+import { checkDraft, namesSubject } from '../engine.js';
 import { createTopicMatcher, type TopicMatcher } from '../prose/index.js';
 import { CHECKLIST_MARKER } from '../report/checklist-markdown.js';
 import { reviewClaims } from '../review/review-claims.js';
@@ -38,7 +38,7 @@ export interface DocumentCheck {
  */
 export function checkDocument(text: string, format: Exclude<Draft['format'], 'docx'>, path: string, projectPath: string, setup: CheckSetup): DocumentCheck {
   const draft = draftFromText(path, text, format);
-  if (text.trimStart().startsWith(CHECKLIST_MARKER) || !setup.topic.test(text)) return { draft, flags: [] };
+  if (text.trimStart().startsWith(CHECKLIST_MARKER) || !namesSubject(text, setup.packs)) return { draft, flags: [] };
   const { claims } = checkDraft(draft, setup.packs, { topic: setup.topic, levels: setup.levels, projectPath });
   return { draft, flags: joinSignoffs(claims, setup.ledger) };
 }

@@ -1,13 +1,14 @@
 /**
  * Re-checks an edited document block by block. Every check of the engine stays inside one prose
  * block (sentences never cross blocks; the context a check reads is the block's earlier
- * sentences), so a block whose source, prose text, offsets and heading are unchanged has the same
+ * sentences), except one bit: whether a block beside it names a subject (engine.subjectBeside).
+ * So a block whose source, prose text, offsets, heading and that bit are unchanged has the same
  * claims as before, only perhaps further down the file. Those are moved to their new place; only
  * new or changed blocks go through the engine. Claim ids, which count repeated sentences across
  * the whole draft, are then numbered again in document order, exactly as `checkDraft` numbers
  * them, so the result equals a full check (the tests compare the two).
  */
-import { checkDraft } from '../engine.js';
+import { checkDraft, namesSubject, subjectBeside } from '../engine.js';
 import { claimIdOf, foldClaimText } from '../review/claim-id.js';
 import { CHECKLIST_MARKER } from '../report/checklist-markdown.js';
 import { createLineIndex, draftFromText, type LineIndex } from '../source/index.js';
@@ -38,7 +39,7 @@ export function createDocumentChecker(setup: CheckSetup): DocumentChecker {
   return {
     check(text, format, path, projectPath) {
       const draft = draftFromText(path, text, format);
-      if (text.trimStart().startsWith(CHECKLIST_MARKER) || !setup.topic.test(text)) {
+      if (text.trimStart().startsWith(CHECKLIST_MARKER) || !namesSubject(text, setup.packs)) {
         cache = new Map();
         return { draft, flags: [] };
       }
@@ -47,12 +48,15 @@ export function createDocumentChecker(setup: CheckSetup): DocumentChecker {
       cachePath = projectPath;
       const positions = createPositionMap(text);
       const lines = createLineIndex(text);
-      const keys = draft.blocks.map((block) => blockKey(text, block));
+      const beside = subjectBeside(draft.blocks, setup.packs);
+      const keys = draft.blocks.map((block, i) => blockKey(text, block, beside[i] === true));
       // A block that appears twice uses one cached entry per appearance.
       const queues = new Map([...cache].map(([key, entries]) => [key, [...entries]]));
       const reused = keys.map((key) => queues.get(key)?.shift());
-      const changed = draft.blocks.filter((_b, i) => reused[i] === undefined);
-      const fresh = changed.length === 0 ? [] : checkDraft({ ...draft, blocks: changed }, setup.packs, { topic: setup.topic, levels: setup.levels, projectPath }).claims;
+      const changedAt = draft.blocks.flatMap((_b, i) => (reused[i] === undefined ? [i] : []));
+      const changed = changedAt.map((i) => draft.blocks[i] as ProseBlock);
+      const subjectNextTo = changedAt.map((i) => beside[i] === true);
+      const fresh = changed.length === 0 ? [] : checkDraft({ ...draft, blocks: changed }, setup.packs, { topic: setup.topic, levels: setup.levels, projectPath, subjectBeside: subjectNextTo }).claims;
       const freshByBlock = groupByBlock(fresh, changed, positions);
 
       const next = new Map<string, CachedClaim[][]>();
@@ -71,12 +75,12 @@ export function createDocumentChecker(setup: CheckSetup): DocumentChecker {
   };
 }
 
-/** What makes a block's claims the same: its source text, prose text, offset pattern, kind and heading. */
-function blockKey(text: string, block: ProseBlock): string {
+/** What makes a block's claims the same: its source text, prose text, offset pattern, kind, heading and a subject beside it. */
+function blockKey(text: string, block: ProseBlock, subjectBeside: boolean): string {
   const start = block.offsets[0] ?? 0;
   const end = block.offsets[block.offsets.length - 1] ?? start;
   const shape = block.offsets.map((o) => o - start).join(',');
-  return [block.kind, block.heading, text.slice(start, end), block.text, shape].join('\u0000');
+  return [block.kind, block.heading, text.slice(start, end), block.text, shape, subjectBeside].join('\u0000');
 }
 
 /** The claims of `fresh` grouped by the block (of `blocks`) their sentence starts in. */

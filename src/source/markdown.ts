@@ -54,12 +54,27 @@ const REMOVED_INLINE = new Set<string>(['inlineCode', 'html', 'break', 'image', 
  *     //    offsets: [9, 10, 11, 12, 15, ...], heading: 'Cores' }]
  */
 export function readMarkdownBlocks(text: string): ProseBlock[] {
-  // The parser drops a leading byte-order mark and counts its offsets from after it.
-  const base = text.charCodeAt(0) === 0xfeff ? 1 : 0;
-  const tree = fromMarkdown(base === 1 ? text.slice(1) : text, PARSE_OPTIONS);
-  const walk = { text, base, heading: '', blocks: [] as ProseBlock[], pendingMark: false, marking: false };
-  visitBlocks(tree, 'paragraph', walk);
-  return walk.blocks;
+  return readMarkdownParts(text, [[0, text.length]])[0] ?? [];
+}
+
+/**
+ * The prose blocks of some parts of a Markdown draft, each part `[from, to)` parsed on its own, in
+ * order, with offsets in the whole `text` and the heading carried from one part to the next. The
+ * caller vouches that each part starts and ends where a top-level block does, that the parts left
+ * out hold no heading, and that the draft defines no link references (speed/sparse-markdown.ts):
+ * then each part's blocks are exactly those a parse of the whole draft gives there.
+ */
+export function readMarkdownParts(text: string, parts: readonly (readonly [number, number])[]): ProseBlock[][] {
+  const walk: Walk = { text, base: 0, heading: '', blocks: [], pendingMark: false, marking: false };
+  return parts.map(([from, to]) => {
+    // The parser drops a leading byte-order mark and counts its offsets from after it.
+    const bom = from === 0 && text.charCodeAt(0) === 0xfeff ? 1 : 0;
+    walk.base = from + bom;
+    walk.blocks = [];
+    walk.pendingMark = false;
+    visitBlocks(fromMarkdown(text.slice(from + bom, to), PARSE_OPTIONS), 'paragraph', walk);
+    return walk.blocks;
+  });
 }
 
 interface Walk {

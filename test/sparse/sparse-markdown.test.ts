@@ -1,0 +1,126 @@
+// Reading a Markdown draft only around its subjects must give the claims a parse of the whole
+// gives (common practice for a shortcut: compare it with the plain path). The property test
+// checks what that rests on, for drafts made of fragments of our own: every block read is the
+// block a whole parse gives there, with the same subject-beside bit, and every block left out
+// names no subject, stands beside no block that does, and has no sentence with two numbers.
+import fc from 'fast-check';
+import { readFile } from 'node:fs/promises';
+import { describe, expect, it } from 'vitest';
+import { checkDraft, namesSubject, subjectBeside } from '../../src/engine.js';
+import { splitSentences } from '../../src/prose/index.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+import { draftFromText } from '../../src/source/index.js';
+import { sparseMarkdownDraft } from '../../src/speed/sparse-markdown.js';
+import type { LoadedPacks } from '../../src/rulepack/types.js';
+
+const FRAGMENTS = [
+  'The print shop needs 52 days to deliver the new posters.',
+  'Ticket sales rose 12 percent on the record weekend.',
+  'Staff meet in room 4 on Tuesdays. Doors open at 9 and close at 17.',
+  'The gallery was open from 1990 to 2000, some 30 years in all.',
+  'Build the site with `npm run docs 3` and open page 2.',
+  'The Vostok core holds a record of about 420,000 years.',
+  'CO2 stood near 180 ppm at the Last Glacial Maximum.',
+  'It reaches down 3,270 metres.',
+  'A note with *emphasis* and 2 or 3 marks.',
+  'C**O2** rose by 100 ppm.',
+  'See [the map](https://example.org/1) for room 5 and 6.',
+  'Keep it near 18 &deg;C and 50 percent.',
+  '- The print shop needs 52 days.\n- Staff meet in room 4.',
+  '- EPICA Dome C reaches back 800,000 years.\n- Staff meet in room 4 and 5.',
+  '1. First step 1\n2. Second step 2',
+  '## Section 2',
+  '# The ice ages #',
+  'Heading text 3\n---',
+  '> A quoted line 4 and 5.',
+  '```sh\nnpm run docs -- --page 7\n\nmore 8 lines 9\n```',
+  '    indented code 1 and 2',
+  '| Room | Temperature |\n| --- | --- |\n| 4 | 18 °C |',
+  '***',
+  'Then 2024. Next 2025 came.',
+  'in 1990. then 2000',
+  'In e.g. 1990 and 2000.',
+  '<!-- firnline: reported -->',
+  'See www.example.org for rooms 5 and 6.',
+  'Term 1\n: a colon 2',
+  'Line one 1  \nline two 2 with a hard break.',
+  '~~~\ncode 1\n\n2 more\n~~~',
+  '- item 1\n\n  continued 2 after a blank line\n\n- item 3',
+  'A lazy line 1\ncontinues 2 here.',
+  '2024. The year 2025 began.',
+  'Title 3 and 4\n===',
+  'Émile counted 5 and 6 bottles.',
+  '\tTabbed 1 and 2',
+  'Greenland ice, the ice-age era and 2 or 3 cores.',
+];
+
+let packs: LoadedPacks | undefined;
+async function thePacks(): Promise<LoadedPacks> {
+  packs ??= await loadPacks([]);
+  return packs;
+}
+
+/** The invariants above for one draft; the number of blocks left out. */
+function expectSparseHolds(text: string, p: LoadedPacks): number {
+  const names = (t: string): boolean => namesSubject(t, p);
+  const sparse = sparseMarkdownDraft('draft.md', text, names);
+  if (sparse === undefined) return 0;
+  const full = draftFromText('draft.md', text, 'markdown').blocks;
+  const beside = subjectBeside(full, p);
+  // Each block read is the next equal block of the whole parse (a table gives several blocks per place).
+  const kept = new Set<number>();
+  let last = -1;
+  sparse.draft.blocks.forEach((block, k) => {
+    const shown = JSON.stringify(block);
+    let i = last + 1;
+    while (i < full.length && JSON.stringify(full[i]) !== shown) i += 1;
+    expect(full[i]).toEqual(block);
+    expect(sparse.subjectBeside[k]).toBe(beside[i]);
+    kept.add(i);
+    last = i;
+  });
+  const left = full.filter((_b, i) => !kept.has(i));
+  for (const block of left) {
+    const i = full.indexOf(block);
+    expect(names(block.text)).toBe(false);
+    expect(beside[i]).toBe(false);
+    expect(splitSentences(block.text, i).some((s) => /\d[^\d]+\d/u.test(s.text))).toBe(false);
+  }
+  return left.length;
+}
+
+describe('sparseMarkdownDraft', () => {
+  it('reads exactly the blocks a whole parse gives, and leaves out only blocks that cannot hold a claim', async () => {
+    const p = await thePacks();
+    let leftOut = 0;
+    fc.assert(
+      fc.property(
+        fc.array(fc.tuple(fc.constantFrom(...FRAGMENTS), fc.constantFrom('\n\n', '\n\n\n', '\r\n\r\n', '\n', '\n  \n')), { minLength: 3, maxLength: 14 }),
+        fc.boolean(),
+        (parts, frontMatter) => {
+          const text = `${frontMatter ? '---\ntitle: Room 4\n\nnotes: 5 and 6\n---\n\n' : ''}${parts.map(([part, gap]) => part + gap).join('')}`;
+          leftOut += expectSparseHolds(text, p);
+        },
+      ),
+      { numRuns: 300, seed: 20261203 },
+    );
+    // The shortcut is taken: plain chunks far from any subject were left out.
+    expect(leftOut).toBeGreaterThan(20);
+  });
+
+  it('gives the same claims as a whole parse on our demo drafts and on a generated docs page', async () => {
+    const p = await thePacks();
+    // A docs page as the bench makes them: mostly plain paragraphs, a few naming the subject.
+    const page = ['# Visitor pages', ...Array.from({ length: 40 }, (_v, i) => FRAGMENTS[(i * 7) % 12] ?? '')].join('\n\n');
+    const texts = [page, await readFile(new URL('../../examples/winter-newsletter.md', import.meta.url), 'utf8')];
+    const pageBlocks = draftFromText('page.md', page, 'markdown').blocks.length;
+    expect(sparseMarkdownDraft('page.md', page, (t) => namesSubject(t, p))?.draft.blocks.length).toBeLessThan(pageBlocks);
+    for (const text of texts) {
+      const sparse = sparseMarkdownDraft('draft.md', text, (t) => namesSubject(t, p));
+      const whole = checkDraft(draftFromText('draft.md', text, 'markdown'), p).claims;
+      const parts = sparse === undefined ? whole : checkDraft(sparse.draft, p, { subjectBeside: sparse.subjectBeside }).claims;
+      expect(parts).toEqual(whole);
+      expect(whole.length).toBeGreaterThan(0);
+    }
+  });
+});
