@@ -154,7 +154,22 @@ const APPOSED_CHANGE = new RegExp(
   'iu',
 );
 
+/**
+ * A change drawn as the consequence of the two values: ", so it climbed", ", which makes the
+ * increase", "; so the rise was". A consequence word, a few words, then a change word just before
+ * the number.
+ */
+const CONSEQUENCE_CHANGE = new RegExp(
+  String.raw`^[^\d;.!?]{0,40}?[,;:—–]${S}*(?:and${S}+)?(?:so|which|thus|hence|that)${S}+(?:[^\d;.!?,]{0,30}?${S})?(?:${list(CHANGE_NOUNS)}|${list(CHANGE_VERBS)}|added|adds)(?:${S}+(?:of|by|was|is|came${S}+to|comes${S}+to|amounted${S}+to|to))?${S}*$`,
+  'iu',
+);
+
 /** True when `change` follows `level` as an apposition naming the change between them. */
 export function isApposedChange(text: string, level: Quantity, change: Quantity): boolean {
-  return level.end <= change.start && APPOSED_CHANGE.test(text.slice(level.end, change.start));
+  return level.end <= change.start && (APPOSED_CHANGE.test(text.slice(level.end, change.start)) || isConsequenceChange(text, level, change));
+}
+
+/** True when `change` is drawn from the values as their consequence ("…, so it climbed 75 ppm"). */
+export function isConsequenceChange(text: string, level: Quantity, change: Quantity): boolean {
+  return level.end <= change.start && CONSEQUENCE_CHANGE.test(text.slice(level.end, change.start));
 }

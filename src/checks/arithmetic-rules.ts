@@ -11,7 +11,7 @@ import { divide, facing, invert, minus, percentChange, size, type Derived } from
 import { spanOfDates } from './arithmetic-spans.js';
 import { durationsAcross, paceRatiosAcross } from './arithmetic-across.js';
 import { writtenSums } from './arithmetic-equations.js';
-import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
+import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
 export interface Finding {
@@ -58,11 +58,12 @@ const LEVELS: Partial<Record<Dimension, Dimension>> = { concentration: 'concentr
 function apposedChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return Object.entries(LEVELS).flatMap(([level, changeDim]) => {
     if (pairs.some((p) => qs[p.from]?.dimension === level)) return [];
-    const levels = qs.filter((q) => q.dimension === level && !isStatedChange(text, q));
+    // "..., which makes the increase 140 ppm": a change drawn from the value before it is no level.
+    const levels = qs.filter((q, k) => q.dimension === level && !isStatedChange(text, q) && !(k > 0 && isConsequenceChange(text, qs[k - 1] as Quantity, q)));
     if (levels.length !== 2) return [];
     const [a, b] = levels as [Quantity, Quantity];
     const stated = only(qs.filter((q) => q.dimension === changeDim && q !== a && q !== b && isApposedChange(text, b, q)));
-    if (stated === undefined || !isStatedChange(text, stated)) return [];
+    if (stated === undefined || !(isStatedChange(text, stated) || isConsequenceChange(text, b, stated))) return [];
     return [{ stated, computed: facing(size(minus(w(b), w(a))), stated.value), measures: `the difference between ${a.text} and ${b.text}` }];
   });
 }

@@ -16,6 +16,9 @@ const WRONG: [string, string[], string, string][] = [
   ['arith.change', ['In the Harrow Fell core, CO2 stood near 185 ppm in the cold stages and near 275 ppm in the warm ones, a swing of about 150 ppm.'], 'about 150 ppm', 'about 90 ppm'],
   // The same across a semicolon, with a change noun the frames did not know ("climb"): 280 − 200 = 80.
   ['arith.change', ['At the glacial peak CO2 sat close to 200 ppm; by the Holocene it had reached 280 ppm, a climb of some 120 ppm.'], 'some 120 ppm', 'some 80 ppm'],
+  // Two levels, then the change drawn as their consequence: 420 − 280 = 140; 265 − 190 = 75.
+  ['arith.change', ['At the Harrow Fell station the air held 280 ppm in 1900 and holds 420 ppm now, which makes the increase 240 ppm.'], '240 ppm', '140 ppm'],
+  ['arith.change', ['The core gave about 190 ppm at the glacial peak, and about 265 ppm by the early Holocene, so it climbed about 95 ppm.'], 'about 95 ppm', 'about 75 ppm'],
   // A written sum: 420 − 280 = 140.
   ['arith.change', ['Answer: 420 − 280 = 160, so the rise since 1750 is about 160 ppm.'], '160', '140'],
   // An amount followed at once by its span is the change a rate divides: 90 ppm / 7,000 yr = 1.29 ppm per century.
@@ -41,6 +44,8 @@ const RIGHT: string[][] = [
   ['CO2 stood near 180 ppm in glacials and near 280 ppm in interglacials, a swing of about 100 ppm.'],
   ['At the glacial peak CO2 sat close to 190 ppm; by the Holocene it had reached 280 ppm, a climb of some 90 ppm.'],
   ['Answer: 280 − 190 = 90, so CO2 rose by 90 ppm.'],
+  ['At the Harrow Fell station the air held 280 ppm in 1900 and holds 420 ppm now, which makes the increase 140 ppm.'],
+  ['The core gave about 190 ppm at the glacial peak, and about 265 ppm by the early Holocene, so it climbed about 75 ppm.'],
   ['Roughly 80 ppm over some 6,000 years is about 1.3 ppm per century.'],
   ['Glacial air held about 190 ppm of CO2, a little under half of today\'s 420 ppm.'],
   ['Against the 280 ppm of 1750, the 140 ppm added since is a rise of 50 percent.'],
