@@ -23,6 +23,8 @@ const LEAD = String.raw`(?:(?:or|i\.e\.,?|that is,?|that's|that’s|this is|whic
 const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}${S}*$`, 'iu');
 /** A loose gap: short, with no clause break that would end the thought (no other quantity: they are adjacent). */
 const LOOSE_GAP = /^[^;:!?]{0,60}$/u;
+/** A copula alone between two amounts in different units: "420 ppm is 0.042 percent". */
+const COPULA_GAP = new RegExp(String.raw`^${S}+(?:is|was|are|were|equals|makes${S}+up|made${S}+up)(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}+$`, 'iu');
 /** A sentence that opens by restating: "That is 11,650 years BP", "On the BP scale, that's ...". */
 const OPENING = /^[^;!?]{0,80}$/u;
 
@@ -93,6 +95,8 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
       continue;
     }
     if (JOINER.test(gap)) out.push(ordered(first, second, false));
+    // "Today's 420 ppm is about 0.042 percent of the air": one amount, the copula, the same amount.
+    else if (COPULA_GAP.test(gap) && closeDates(first, second)) out.push(ordered(first, second, true));
     else if (LOOSE_GAP.test(gap) && LOOSE_END.test(gap) && closeDates(first, second)) out.push(ordered(first, second, true));
     else if (restatesModifier(text, first, gap, second) && closeDates(first, second)) out.push(ordered(first, second, true));
   }

@@ -22,6 +22,8 @@ const WRONG: [string, string, string, string, string][] = [
   ['unit.age-scale', 'The Younger Dryas cold snap struck around 12.9 million years ago.', 'around 12.9 million years ago', 'around 12.9 thousand years ago', CLARK_2009.id],
   ['unit.age-scale', 'Ice from the Dome Fuji core reaches back about 720 Ma.', 'about 720 Ma', 'about 720 ka', YAN_2019.id],
   ['unit.age-scale', 'The EPICA core holds eight hundred million years of snowfall.', 'eight hundred million years', 'eight hundred thousand years', YAN_2019.id],
+  // A copula alone between the two amounts: 420 ppm is 0.042 percent of the air (1% = 10,000 ppm).
+  ['unit.percent-ppm', 'Today\'s roughly 420 ppm of CO2 is about 0.42 percent of the air.', 'about 0.42 percent', 'about 0.042 percent', NIST_SP_811.id],
   // A °F figure with no restating word is still the conversion of the °C figure before it:
   // 6 × 1.8 = 10.8 °F (43 °F adds 32).
   ['unit.temperature-difference', 'The Harrow Fell valley was about 6 °C colder at the glacial peak; in Fahrenheit the difference is about 43 °F.', 'about 43 °F', 'about 10.8 °F', NIST_SP_811.id],
@@ -30,6 +32,8 @@ const WRONG: [string, string, string, string, string][] = [
 // Right conversions in the same phrasings, and millions of years where they belong: never flagged.
 const RIGHT: string[] = [
   'The cooling between the two stages was about 5 °C, which is about 9 °F.',
+  'Today\'s roughly 420 ppm of CO2 is about 0.042 percent of the air.',
+  'The Dome C core is 3,270 m deep, and 3,270 m is about 10,700 feet.',
   'The Harrow Fell valley was about 6 °C colder at the glacial peak; in Fahrenheit the difference is about 11 °F.',
   'The thermostat in the Harrow lab reads 68 °F, which works out at 20 °C.',
   'The borehole at Dome C read about −54 °C, which is about −65 °F.',
