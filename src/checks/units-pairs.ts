@@ -20,9 +20,11 @@ const JOINER = new RegExp(
 );
 /** Words that end a loose gap and announce the same amount again ("which readers would call"). */
 const LEAD = String.raw`(?:(?:or|i\.e\.,?|that is,?|that's|that’s|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|(?:would|might|will|can|could)${S}+call|call${S}+it|=|\(|—)(?:${S}*(?:a|an)${S}+(?:${CHANGE_SUBJECT_NOUNS.join('|')})${S}+of)?|${RESTATING_VERB_PATTERN})`;
-const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}${S}*$`, 'iu');
+const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}(?:${S}+(?:still|just|only|merely|roughly|about|around|some)){0,2}${S}*$`, 'iu');
 /** A loose gap: short, with no clause break that would end the thought (no other quantity: they are adjacent). */
 const LOOSE_GAP = /^[^;:!?]{0,60}$/u;
+/** Words after a percentage that make it a relative change ("50 percent above", "30 percent higher"). */
+const RELATIVE_AFTER = new RegExp(String.raw`^${S}*(?:above|below|higher|lower|more|less|greater|smaller|up|down|increase|rise|drop|fall|over|under)(?![\p{L}])`, 'iu');
 /** A copula alone between two amounts in different units: "420 ppm is 0.042 percent". */
 const COPULA_GAP = new RegExp(String.raw`^${S}+(?:is|was|are|were|equals|makes${S}+up|made${S}+up)(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}+$`, 'iu');
 /** A sentence that opens by restating: "That is 11,650 years BP", "On the BP scale, that's ...". */
@@ -117,10 +119,14 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
  * first ("On the BP scale, which counts back from 1950, that's ..."), but no other candidate.
  */
 function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentence, found: Restatement[]): Restatement | undefined {
-  const first = previous.quantities[previous.quantities.length - 1];
+  // The last amount of the sentence before that this one could restate ("430 ppm in 2025. That is
+  // 430 parts per billion": the year is passed over).
+  const first = [...previous.quantities].reverse().find((p) => qs.some((q) => sameThing(p, q)));
   if (first === undefined) return undefined;
   const second = qs.find((q) => sameThing(first, q) && closeDates(first, q));
   if (second === undefined || first.statedUnit === second.statedUnit || found.some((r) => r.second === second || r.first === second)) return undefined;
+  // "fifty percent above where it stood in 1750": a relative change, not the amount again.
+  if (second.dimension === 'percent' && RELATIVE_AFTER.test(text.slice(second.end))) return undefined;
   const head = text.slice(0, second.start);
   // "For readers who think in Fahrenheit, that makes it about 43 °F colder": a °F figure that
   // points back restates the last °C or K figure before it.

@@ -111,9 +111,13 @@ const ACROSS_WRONG: [string, string, string, string][] = [
   ['The Halden label dates the boundary to 11,700 b2k.', "On the BP scale, which counts back from 1950, that's 11,750 years BP.", '11,750 years BP', '11,650 years BP'],
   ['The first villages appear around 9,000 BCE.', 'In other words, 9,000 years ago.', '9,000 years ago', '10,900 years ago'],
   ['Pre-industrial air held 280 ppm of CO2.', 'That is 0.28 percent of the air.', '0.28 percent', '0.028 percent'],
+  // A year after the amount is passed over, and an adverb may follow the restating words (1 ppm = 1,000 ppb).
+  ['The Harrow station logged about 430 ppm of CO2 in 2025.', 'That is still only 430 parts per billion of the air.', '430 parts per billion', '430,000 parts per billion'],
 ];
 const ACROSS_RIGHT: [string, string][] = [
   ['The Northmoor ash layer lies at 12,100 b2k.', 'That is 12,050 years BP.'],
+  // A percentage above a level is a relative change, not the level again.
+  ['The Harrow station logged just under 424 ppm of CO2 last year.', "That's more than fifty percent above where it stood in 1750."],
   ["The Halden label dates the boundary to 11,700 b2k.", "On the BP scale, which counts back from 1950, that's 11,650 years BP."],
   // The second sentence does not restate: a new date, or a date with words of its own before it.
   ['The Northmoor ash layer lies at 12,100 b2k.', 'A second layer formed 11,000 years BP.'],
