@@ -60,7 +60,7 @@ describe('the evaluation corpus', () => {
     caught.of += score.recall.of;
   });
 
-  it('catches at least 70% of the seeded errors over all the sets to tune on (74.3% measured)', () => {
+  it('catches at least 70% of the seeded errors over all the sets to tune on (71.5% measured over 14 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.7);
   });
