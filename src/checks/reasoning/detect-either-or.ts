@@ -7,7 +7,7 @@
  *
  * A feedback, a loop or "both" in the sentence or its neighbours answers the framing, and passes.
  */
-import type { Cause } from '../../propositions/index.js';
+import type { Cause, LexHit, ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
 
@@ -51,7 +51,7 @@ function detect({ index, read }: DetectInput): Cue[] {
     // The answer starts past the second direction's own object ("...or temperature pushes CO2, and ...").
     const after = here.s.text.slice(second.end);
     const boundary = /[,;:—–]|\s(?:and|but|so)\s/u.exec(after);
-    if (choice && boundary !== null && picksOne(after.slice(boundary.index))) return [{ start: first.start, end: here.s.text.length }];
+    if (choice && boundary !== null && picksOne(here.s, second.end + boundary.index)) return [{ start: first.start, end: here.s.text.length }];
   }
   for (const asserted of causes.filter((c) => c.polarity === 'asserted' && direction(c) !== undefined)) {
     const denied = causes.find((c) => c.polarity === 'denied' && direction(c) !== undefined && direction(c) !== direction(asserted));
@@ -81,11 +81,17 @@ function answersEitherOr(question: ReturnType<DetectInput['read']>, text: string
  * After a choice between the two directions, an answer that picks one: "the second", "in favour of
  * the latter", or a short answer naming one side only ("a one-word answer: temperature").
  */
-function picksOne(rest: string): boolean {
-  if (/\b(?:both|each|feedback|loop|mutual|two-way)\b/iu.test(rest)) return false;
+function picksOne(s: ReadSentence, from: number): boolean {
+  const rest = s.text.slice(from);
+  const after = (h: LexHit) => (s.words[h.first]?.start ?? -1) >= from;
+  // A feedback or a loop (lexicon `causes.feedback`: "each other", "both ways", "mutual") answers both.
+  if (s.of('causes', 'feedback').some(after) || /\bboth\b/iu.test(rest)) return false;
   if (/\b(?:the (?:first|second|former|latter)|in favou?r of)\b/iu.test(rest)) return true;
-  const sides = [/\b(?:temperature|temp|warming|warmth|heat)\b/iu, /\b(?:co2|co₂|carbon dioxide|carbon|the gas)\b/iu].filter((side) => side.test(rest));
-  return sides.length === 1 && /[:—–]|\banswers?\b|\bsays?\b|\bsettles?\b|\bclearly\b/iu.test(rest);
+  // The sides as the lexicon names them: temperature (or a warming) and CO2.
+  const temperature = [...s.of('entities', 'temperature'), ...s.of('changes', 'warm'), ...s.of('changes', 'cool')].some(after);
+  const co2 = s.of('entities', 'co2').some(after);
+  const answered = /[:—–]|\banswers?\b|\bsays?\b/iu.test(rest) || s.of('proof').some(after);
+  return temperature !== co2 && answered;
 }
 
 /** The detector entry for the registry. */
