@@ -246,8 +246,6 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
   const partial = s.words.some((w, i) => w.clause === clause && /^(?:only|just|merely)$/u.test(w.text) && PARTIAL.test(s.words[i + 1]?.text ?? ''));
   if (partial) return false;
   return s.of('exclusive').some((e) => {
-    // "only part", "just a fraction": a share, not one cause.
-    if (e.first === e.last && /^(?:only|just|merely)$/u.test(s.words[e.first]?.text ?? '') && PARTIAL.test(s.words[e.last + 1]?.text ?? '')) return false;
     if (s.words[e.first]?.segment !== s.words[h.first]?.segment && s.words[e.first]?.clause !== s.words[h.first]?.clause) return false;
     if (['not', 'no'].includes(s.words[e.first - 1]?.text ?? '')) return false;
     const nearAgent = agent !== undefined && (Math.abs(e.first - agent.last) <= 2 || Math.abs(e.last - agent.first) <= 2);
