@@ -10,26 +10,10 @@ import { checkMarkdownLimits, MAX_MARKDOWN_BYTES, MAX_PARAGRAPH_WORK } from '../
 import { readMarkdownBlocks } from '../../src/source/markdown.js';
 import type { FirnlineError } from '../../src/errors.js';
 import { expectUserError, folderWith, runCli } from './helpers.js';
+import { spliceWork } from '../source/splice-work.js';
 
 const VOSTOK = 'The Vostok core spans 800,000 years of CO2 history.';
 const table = (rows: number) => `| Core | Span | Note |\n|---|---|---|\n${Array.from({ length: rows }, (_, i) => `| Site ${i} | ${i} years | *rota* [${i}] |`).join('\n')}\n`;
-
-/** Elements Array#splice had to shift during `work` (see test/source/micromark-linear-text.test.ts). */
-function spliceWork(work: () => void): number {
-  const original = Array.prototype.splice;
-  let moved = 0;
-  Array.prototype.splice = function counted(this: unknown[], ...args: unknown[]) {
-    const start = Number(args[0] ?? 0);
-    moved += Math.max(0, this.length - (start < 0 ? this.length + start : start));
-    return original.apply(this, args as [number, number, ...unknown[]]);
-  } as typeof Array.prototype.splice;
-  try {
-    work();
-  } finally {
-    Array.prototype.splice = original;
-  }
-  return moved;
-}
 
 const thrown = (work: () => void): FirnlineError | undefined => {
   try {

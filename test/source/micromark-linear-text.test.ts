@@ -11,6 +11,7 @@ import { fileURLToPath } from 'node:url';
 import { afterEach, describe, expect, it } from 'vitest';
 import { readMarkdownBlocks } from '../../src/source/markdown.js';
 import { linearTextResolver, mergeDataRuns } from '../../src/source/micromark-linear-text.js';
+import { spliceWork } from './splice-work.js';
 
 const ROOT = fileURLToPath(new URL('../../', import.meta.url));
 const repoMarkdown = [
@@ -25,23 +26,6 @@ function blocksBothWays(text: string): [unknown, unknown] {
   const library = readMarkdownBlocks(text);
   linearTextResolver.enabled = true;
   return [library, readMarkdownBlocks(text)];
-}
-
-/** Elements Array#splice had to shift during `work`: the cost that made long paragraphs quadratic. */
-function spliceWork(work: () => void): number {
-  const original = Array.prototype.splice;
-  let moved = 0;
-  Array.prototype.splice = function counted(this: unknown[], ...args: unknown[]) {
-    const start = Number(args[0] ?? 0);
-    moved += Math.max(0, this.length - (start < 0 ? this.length + start : start));
-    return original.apply(this, args as [number, number, ...unknown[]]);
-  } as typeof Array.prototype.splice;
-  try {
-    work();
-  } finally {
-    Array.prototype.splice = original;
-  }
-  return moved;
 }
 
 const paragraph = (lines: number) => `${Array.from({ length: lines }, (_, i) => `Site ${i} has ${i} years on the rota, with the Vostok \`core\`, www.example.org and [notes](x).`).join('\n')}\n`;
