@@ -51,12 +51,19 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
         level: 'error',
         start: q.start,
         end: q.end,
-        reason: `${q.text} is out of range for the ${midSentence(r.measures)}, but ${slip.correction} fits it: ${slip.what}.`,
+        reason: `${q.text} is out of range for the ${midSentence(r.measures, packs)}, but ${slip.correction} fits it: ${slip.what}.`,
         claimed: shownClaim(q),
         reference: shownReference(r, q),
         correction: slip.correction,
         sources: [NIST_SP_811, ...r.sources],
       });
+      continue;
+    }
+    // A global figure that is the size of a regional change ("the whole Earth was 9 °C colder": the
+    // Antarctic warming) is the regional record told as global: the scope check's flag, not a value's.
+    const regional = distance === 0 || older !== undefined ? undefined : regionalMatch(r, q, packs);
+    if (regional !== undefined) {
+      flags.push(regional);
       continue;
     }
     const level = older !== undefined ? 'note' : distance === 0 ? undefined : levelWithDistance(levelAt(r.levels, distance), factorOff(q.low, q.high, r));
@@ -68,7 +75,7 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
       level,
       start: q.start,
       end: q.end,
-      reason: older === undefined ? reasonFor(r, q, reference.text, aboutToday) : supersededReason(r, q, older, reference.text),
+      reason: older === undefined ? reasonFor(r, q, reference.text, aboutToday, packs) : supersededReason(r, q, older, reference.text, packs),
       claimed: shownClaim(q),
       reference,
       correction: correctionFor(r, q),
@@ -76,6 +83,31 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     });
   }
   return { flags, verdicts };
+}
+
+/** The scope check whose flag a regional figure told as global gets. */
+export const REGIONAL_AS_GLOBAL = 'scope.regional-record-as-global';
+
+/**
+ * A regional value (`regional_version_of: r`) whose range holds the claim, flagged by the scope
+ * check when the packs have it enabled; the correction is the global value's.
+ */
+function regionalMatch(r: ReferenceValue, q: Quantity, packs: LoadedPacks): FlagDraft | undefined {
+  const check = packs.reasoning.find((c) => c.id === REGIONAL_AS_GLOBAL && c.enabled);
+  const local = check === undefined ? undefined : packs.references.find((v) => v.regionalVersionOf === r.id && relativeDistance(q.low, q.high, v) === 0);
+  if (check === undefined || local === undefined) return undefined;
+  const reference = shownReference(r, q);
+  return {
+    ruleId: check.id,
+    level: check.level,
+    start: q.start,
+    end: q.end,
+    reason: `The draft gives ${q.text} for the ${midSentence(r.measures, packs)}, the size of the ${midSentence(local.measures, packs)} (${shownReference(local, q).text}); the sources give ${reference.text} for the globe.`,
+    claimed: shownClaim(q),
+    reference,
+    correction: correctionFor(r, q),
+    sources: [...r.sources, ...local.sources.filter((s) => !r.sources.includes(s))],
+  };
 }
 
 /**
@@ -87,14 +119,14 @@ function supersededMatch(r: ReferenceValue, q: Quantity, packs: LoadedPacks): Re
   return packs.references.find((old) => old.supersededBy === r.id && relativeDistance(q.low, q.high, old) === 0);
 }
 
-function supersededReason(r: ReferenceValue, q: Quantity, older: ReferenceValue, range: string): string {
+function supersededReason(r: ReferenceValue, q: Quantity, older: ReferenceValue, range: string, packs: LoadedPacks): string {
   const when = older.asOf === undefined ? 'an earlier figure' : `the figure of ${older.asOf.slice(0, 4)}`;
   const now = r.asOf === undefined ? '' : ` (as of ${r.asOf})`;
-  return `The draft gives ${q.text} for the ${midSentence(r.measures)}: ${when}, right when published and since superseded; the sources now give ${range}${now}`;
+  return `The draft gives ${q.text} for the ${midSentence(r.measures, packs)}: ${when}, right when published and since superseded; the sources now give ${range}${now}`;
 }
 
-function reasonFor(r: ReferenceValue, q: Quantity, range: string, aboutToday: boolean): string {
-  const measures = midSentence(r.measures);
+function reasonFor(r: ReferenceValue, q: Quantity, range: string, aboutToday: boolean, packs: LoadedPacks): string {
+  const measures = midSentence(r.measures, packs);
   const base = `The draft gives ${q.text} for the ${measures}; the sources give ${range}`;
   if (r.asOf === undefined) return `${base}.`;
   const today = aboutToday ? ` The draft speaks of today; the reference value is dated ${r.asOf} and changes with time.` : '';

@@ -4,7 +4,7 @@
  * the one formatter all reports share (src/format/value.ts).
  */
 import { formatNumber, formatRange as formatShownRange, unitWord } from '../format/value.js';
-import type { ReferenceValue } from './types.js';
+import type { ReferenceValue, Term } from './types.js';
 import { fromCanonical } from './units.js';
 
 export { formatNumber };
@@ -24,7 +24,26 @@ export function describeRange(r: ReferenceValue): string {
   return formatRange(r.low, r.high, r.unit);
 }
 
-/** A phrase to use mid-sentence: first letter lower-cased unless the word is an acronym (CO2, EPICA). */
-export function midSentence(text: string): string {
-  return /^\p{Lu}\p{Ll}/u.test(text) ? `${text.charAt(0).toLowerCase()}${text.slice(1)}` : text;
+const NAMES = new WeakMap<{ terms: readonly Term[] }, Set<string>>();
+
+/** The capitalised words of the packs' terms ("Antarctic", "Greenland", "Vostok"): names that keep their capital. */
+function properNames(packs: { terms: readonly Term[] }): Set<string> {
+  let names = NAMES.get(packs);
+  if (names === undefined) {
+    names = new Set(packs.terms.flatMap((t) => t.words.flatMap((w) => w.split(/\s+/u))).filter((w) => /^\p{Lu}\p{Ll}/u.test(w)));
+    NAMES.set(packs, names);
+  }
+  return names;
+}
+
+/**
+ * A phrase to use mid-sentence: first letter lower-cased unless the word is an acronym (CO2, EPICA),
+ * a name in the packs' terms ("Antarctic warming"), or the start of a name of two capitalised words
+ * ("Mauna Loa", "East Antarctic").
+ */
+export function midSentence(text: string, packs?: { terms: readonly Term[] }): string {
+  const [first = '', second = ''] = text.split(/\s+/u);
+  if (!/^\p{Lu}\p{Ll}/u.test(first) || /^\p{Lu}\p{Ll}/u.test(second)) return text;
+  if (packs !== undefined && properNames(packs).has(first)) return text;
+  return `${text.charAt(0).toLowerCase()}${text.slice(1)}`;
 }

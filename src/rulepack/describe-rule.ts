@@ -16,7 +16,7 @@ const BY_PREFIX: [string, Describe][] = [
     const notes = r.notes === undefined ? '' : ` ${r.notes}`;
     return {
       id: `value.${r.id}`,
-      summary: `Checks the ${midSentence(r.measures)} against the sourced range.`,
+      summary: `Checks the ${midSentence(r.measures, packs)} against the sourced range.`,
       description: `Accepted range: ${describeRange(r)}${dated}. A correction reads "${r.wording}".${notes}`,
       defaultLevel: 'warning',
       sources: r.sources,

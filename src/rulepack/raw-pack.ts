@@ -30,6 +30,7 @@ export interface RawReferenceValue {
   as_of?: string;
   review_by?: string;
   superseded_by?: string;
+  regional_version_of?: string;
   sources: string[];
   notes?: string;
 }

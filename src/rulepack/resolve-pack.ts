@@ -64,6 +64,10 @@ export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): Rule
     if (newer !== undefined && !valueIds.has(newer) && !known.defined.has(`reference_values:${newer}`)) {
       errors.push(yaml.errorAt('pack-unknown-value', ['reference_values', i, 'superseded_by'], `unknown reference value id \`${newer}\`; superseded_by names the value that replaced this one`));
     }
+    const global = r.regional_version_of;
+    if (global !== undefined && !valueIds.has(global) && !known.defined.has(`reference_values:${global}`)) {
+      errors.push(yaml.errorAt('pack-unknown-value', ['reference_values', i, 'regional_version_of'], `unknown reference value id \`${global}\`; regional_version_of names the global value this one is the regional size of`));
+    }
   });
   const directions: DirectionFact[] = (raw.direction_facts ?? []).map((d, i) => {
     const path = ['direction_facts', i];

@@ -55,6 +55,7 @@ export function resolveReference(scope: PackScope, raw: RawReferenceValue, path:
     ...(raw.as_of === undefined ? {} : { asOf: raw.as_of }),
     ...(raw.review_by === undefined ? {} : { reviewBy: raw.review_by }),
     ...(raw.superseded_by === undefined ? {} : { supersededBy: raw.superseded_by }),
+    ...(raw.regional_version_of === undefined ? {} : { regionalVersionOf: raw.regional_version_of }),
     ...(raw.notes === undefined ? {} : { notes: raw.notes }),
   };
 }

@@ -66,6 +66,8 @@ export interface ReferenceValue {
   reviewBy?: string;
   /** The id of the value that replaced this one (a figure right when published, since superseded). */
   supersededBy?: string;
+  /** The id of the global value this one is a regional size of (Antarctic warming beside the global mean). */
+  regionalVersionOf?: string;
   levels: LevelSteps;
   sources: Source[];
   notes?: string;

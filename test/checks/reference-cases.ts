@@ -105,7 +105,7 @@ export const CASES: Case[] = [
   // computed: 280 ppm = 0.028% (IPCC AR6 pre-industrial value)
   ['co2-280ppm-as-percent', ['Pre-industrial CO2 made up 0.028% of the air.', '0.028%', 'percent', 0.0275, 0.0285], ['Pre-industrial CO2 made up 0.28% of the air.', '0.28%', 'percent', 0.275, 0.285]],
   // Gulev et al. 2021 (from memory); Tierney et al. 2020; Annan et al. 2022
-  ['gmst-lgm-to-preindustrial-warming', ['Global temperature at the Last Glacial Maximum was about 6 °C lower.', 'about 6 °C', T, 5.5, 6.5, 'degC'], ['Global temperature at the Last Glacial Maximum was 15 °C lower.', '15 °C', T, 14.5, 15.5, 'degC']],
+  ['gmst-lgm-to-preindustrial-warming', ['Global temperature at the Last Glacial Maximum was about 6 °C lower.', 'about 6 °C', T, 5.5, 6.5, 'degC'], ['Global temperature at the Last Glacial Maximum was 2 °C lower.', '2 °C', T, 1.5, 2.5, 'degC']],
   // Tierney et al. 2020 (doi 10.1038/s41586-020-2617-x)
   ['gmst-lgm-cooling-tierney2020', ['Tierney and colleagues found cooling of 6.1 °C.', '6.1 °C', T, 6.05, 6.15, 'degC'], ['Tierney and colleagues found cooling of 2 °C.', '2 °C', T, 1.5, 2.5, 'degC']],
   // Annan, Hargreaves & Mauritsen 2022 (doi 10.5194/cp-18-1883-2022)

@@ -107,8 +107,8 @@ describe('checkReferences', () => {
 
 describe('corrections', () => {
   it('use the pack wording when the draft writes °C for a temperature change (1 °C difference = 1 K, SI Brochure)', () => {
-    const s = 'Global temperature at the Last Glacial Maximum was 15 °C lower.';
-    const [flag] = check(s, q(s, '15 °C', 'temperature-change', 14.5, 15.5, 'degC')).flags;
+    const s = 'Global temperature at the Last Glacial Maximum was 2 °C lower.';
+    const [flag] = check(s, q(s, '2 °C', 'temperature-change', 1.5, 2.5, 'degC')).flags;
     expect(flag?.correction).toBe('about 6 °C (estimates run from about 4 to 7 °C)');
     expect(flag?.reference?.text).toBe('3.5–7.5 °C');
   });

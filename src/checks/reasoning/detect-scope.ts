@@ -48,7 +48,14 @@ function detectRegional(input: DetectInput): Cue[] {
   const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland'), ...isotopes];
   // "…the whole globe warmed by 10 °C, as Greenland's ice records": a closing "as" clause names the
   // record the whole sentence is read from.
-  const attributed = records.some((r) => {
+  // "Going by Vostok, the planet was 9 °C colder": a record after a read-from phrase (`read-from`) in its
+  // segment is where the whole sentence is read from, too.
+  const readFrom = findPhrases(input.sentence, words('read-from')).map((p) => s.words.find((w) => w.start === p.start));
+  // A region named outside that segment ("Going by Vostok, Antarctica was 9 °C colder; the globe...")
+  // is what the record is read as.
+  const readAfter = (r: { first: number }) => readFrom.some((w) => w !== undefined && w.segment === s.words[r.first]?.segment && w.start < (s.words[r.first]?.start ?? 0));
+  const readFromOnly = records.some(readAfter) && records.every(readAfter);
+  const attributed = readFromOnly || records.some((r) => {
     const segment = s.words.filter((w) => w.segment === s.words[r.first]?.segment);
     return segment[0]?.text === 'as' && segment.some((w) => READING.test(w.text) && w.text !== 'is' && w.text !== 'was');
   });
