@@ -20,8 +20,10 @@ export type * from './types.js';
 /** Reads the propositions of `s`; `previous` resolves a pronoun that points back one sentence. */
 export function readPropositions(s: ReadSentence, previous?: ReadSentence, stance?: SentenceStance, earlier: readonly ReadSentence[] = []): Propositions {
   let causes = readCauses(s, previous);
-  if (stance?.kind === 'rhetorical' && stance.flips) causes = causes.map(flip);
-  if (stance?.kind === 'asked') causes = causes.map((c) => ({ ...c, polarity: 'open' as const }));
+  // Only what the question asks flips or opens; a premise before it stands.
+  const asks = (c: Cause) => stance?.questionFrom === undefined || c.start >= stance.questionFrom;
+  if (stance?.kind === 'rhetorical' && stance.flips) causes = causes.map((c) => (asks(c) ? flip(c) : c));
+  if (stance?.kind === 'asked') causes = causes.map((c) => (asks(c) ? { ...c, polarity: 'open' as const } : c));
   const directed = readDirected(s, previous);
   return {
     causes,

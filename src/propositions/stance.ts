@@ -20,6 +20,12 @@ export interface SentenceStance {
   endorsed: boolean;
   /** For a rhetorical question: `how` flips what it asks ("how could it be...?" asserts it is not). */
   flips: boolean;
+  /**
+   * For a question that follows a statement in the same sentence ("The air is older than the ice,
+   * so how can you trust it?"): where the question starts. What ends before it is the premise, the
+   * writer's own claim.
+   */
+  questionFrom?: number;
 }
 
 /** What around a sentence bears on its stance. */
@@ -33,6 +39,8 @@ export interface StanceContext {
   next?: ReadSentence;
 }
 
+/** Words that join a question to the statement before it ("..., so how can you trust it?"). */
+const JOINS = new Set(['so', 'and', 'but', 'then', 'or', 'yet']);
 const AUX = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const WH = new Set(['how', 'why']);
 /** Subjects whose report the writer relies on rather than answers. */
@@ -63,10 +71,24 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   const first = s.words[0]?.text ?? '';
   if (first === 'q' || isReported(s)) return make('asked');
   const answeredNext = context.next !== undefined && ANSWER_OPENERS.has(context.next.words[0]?.text ?? '');
-  const how = s.words.some((w, i) => WH.has(w.text) && (i === 0 || s.words[i - 1]?.segment !== w.segment) && AUX.has(s.words[i + 1]?.text ?? ''));
+  // A segment opens a question with a wh-word or an auxiliary, after a joining word if any.
+  const opens = (i: number) => {
+    const at = JOINS.has(s.words[i]?.text ?? '') ? i + 1 : i;
+    return (i === 0 || s.words[i - 1]?.segment !== s.words[i]?.segment) && s.words[at]?.segment === s.words[i]?.segment ? at : -1;
+  };
+  const how = s.words.some((w, i) => {
+    const at = opens(i);
+    return at >= 0 && WH.has(s.words[at]?.text ?? '') && AUX.has(s.words[at + 1]?.text ?? '');
+  });
   const negative = AUX.has(first) && s.words[1]?.text === 'not';
-  if ((how || negative) && !answeredNext) return make('rhetorical', how);
-  return make('asked');
+  // "X, so how can you trust it?": a question after a statement leaves the statement asserted.
+  const start = s.words.findIndex((_, i) => {
+    const at = opens(i);
+    return at >= 0 && (WH.has(s.words[at]?.text ?? '') || AUX.has(s.words[at]?.text ?? ''));
+  });
+  const premise = start > 2 && !WH.has(first) && !AUX.has(first) ? { questionFrom: s.words[start]?.start ?? 0 } : {};
+  if ((how || negative) && !answeredNext) return { ...make('rhetorical', how), ...premise };
+  return { ...make('asked'), ...premise };
 }
 
 /** "Some claim that...", "Critics argue...", "You may have heard that...", "It is often said...". */

@@ -168,6 +168,14 @@ describe('what a debunking piece quotes is not its own claim', () => {
     expect(await serious('Some bloggers insist that CO2 lagged, so it cannot have warmed anything, and they are right.\n')).toContain('logic.lag-rules-out-cause');
   });
 
+  it('holds a statement before a question in the same sentence as the draft\'s own, and the question as asked', async () => {
+    // The premise is asserted ("..., so how can you trust any of it?"); delta-age: Caillon et al. 2003.
+    expect(await serious('The gas in the bubbles is older than the ice around it, so how can anyone trust the record?\n')).toContain('direction.trapped-air-younger-than-ice');
+    expect(await serious('The gas in the bubbles is younger than the ice around it, so how can anyone distrust the record?\n')).toEqual([]);
+    // A question from its first word asks, and asserts nothing.
+    expect(await serious('Is the gas in the bubbles older than the ice around it?\n\nNo: it is younger, by centuries to millennia.\n')).toEqual([]);
+  });
+
   it('counts claims under the reported marker and keeps their flags as notes', async () => {
     const result = await checkText('<!-- firnline: reported -->\nThe Vostok ice core spans 800,000 years.\n', { packs, format: 'markdown' });
     expect(result.claims.map((c) => c.marked)).toEqual([true]);
