@@ -221,6 +221,9 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
+    // The period the blocks just before named sets the scene of this block's opening sentences.
+    const scene = sceneBefore(draft.blocks, blockIndex, packs);
+    const opening: ParagraphContext = scene === undefined ? context : { ...context, scene };
     const windowOf = paragraphWindows(paragraph);
     const named = subjectsNamed(paragraph, subjects);
     sentences.forEach((sentence, index) => {
@@ -230,7 +233,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       // beside its block, names a subject.
       const inWindow = nextTo || named(index - at, window.length);
       const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text)));
-      const found = examineCached(window, at, packs, onTopic, context, () => inWindow && topic.test(window[at - 1] ?? ''));
+      const found = examineCached(window, at, packs, onTopic, at === index ? opening : context, () => inWindow && topic.test(window[at - 1] ?? ''));
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -294,7 +297,7 @@ function examineCached(
   previousOnTopic: () => boolean,
 ): SentenceFindings | undefined {
   const previous = previousOnTopic();
-  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true], () =>
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.scene ?? ''], () =>
     examineSentence(paragraph, index, packs, onTopic, context, () => previous),
   );
 }
@@ -416,6 +419,35 @@ function subjectMatcherOf(packs: LoadedPacks): TopicMatcher {
     subjectMatchers.set(packs, matcher);
   }
   return matcher;
+}
+
+const periodFinders = new WeakMap<LoadedPacks, [string, RegExp][]>();
+
+/**
+ * The period (lexicon `periods` key, the deglaciation aside: it is a process, not a scene) named
+ * last in the nearest of the two blocks before `index` that names one, under the same heading.
+ */
+function sceneBefore(blocks: readonly ProseBlock[], index: number, packs: LoadedPacks): string | undefined {
+  let finders = periodFinders.get(packs);
+  if (finders === undefined) {
+    const periods = Object.entries(packs.lexicon['periods'] ?? {}).filter(([key]) => key !== 'deglaciation');
+    finders = periods.map(([key, phrases]) => [key, new RegExp(`(?<![\\p{L}\\p{N}])(?:${phrases.map(escapeRegExp).join('|')})(?![\\p{L}\\p{N}])`, 'giu')]);
+    periodFinders.set(packs, finders);
+  }
+  const heading = blocks[index]?.heading;
+  for (const block of [blocks[index - 1], blocks[index - 2]]) {
+    if (block === undefined || block.heading !== heading) return undefined;
+    let best: { key: string; at: number } | undefined;
+    for (const [key, re] of finders) {
+      for (const m of block.text.matchAll(re)) if (best === undefined || m.index > best.at) best = { key, at: m.index };
+    }
+    if (best !== undefined) return best.key;
+  }
+  return undefined;
+}
+
+function escapeRegExp(text: string): string {
+  return text.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&');
 }
 
 const factMatchers = new WeakMap<LoadedPacks, TopicMatcher>();

@@ -30,6 +30,12 @@ export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed
     if (h.key === 'warm' || h.key === 'cool') {
       const thing = temperatureHolder(s, h);
       const name = thing === undefined ? 'temperature' : nameOf(s, thing, previous);
+      // "Antarctica ..., cooling alongside Greenland": the place after a companion word shares the
+      // change of the place before it, which holds it.
+      const companion = thing !== undefined && thing.first > h.last && COMPANIONS.test(s.words.slice(h.last + 1, thing.first).map((w) => w.text).join(' '));
+      // A participle after a comma ("Antarctica shivered, cooling alongside...") is the sentence's.
+      const before = companion ? s.things.filter((t) => t.last < h.first).at(-1) : undefined;
+      if (before !== undefined && before.kind !== 'pronoun') push(nameOf(s, before, previous), 'temperature', h.key === 'warm' ? 1 : -1, h, before);
       push(name, 'temperature', h.key === 'warm' ? 1 : -1, h, thing);
     } else if (h.key === 'up' || h.key === 'down') {
       // "holds less", "takes in more": a size word on an uptake verb is the uptake's, not a change of its own.
@@ -56,6 +62,9 @@ export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed
   }
   return out;
 }
+
+/** Words that set a companion beside a change ("cooling alongside Greenland", "warmed along with the north"). */
+const COMPANIONS = /^(?:(?:right |just )?(?:alongside|along with|together with|in step with|in tandem with|with|like|as did))$/u;
 
 /** What a warm/cool word is said of: "warmer water", "the ocean warms", "warming of the sea". */
 function temperatureHolder(s: ReadSentence, h: LexHit): Thing | undefined {
@@ -160,13 +169,16 @@ function isAfterThan(s: ReadSentence, d: Directed): boolean {
 }
 
 /** Changes of regions and of marginal forcing, with the period they are set in. */
-export function readChanges(s: ReadSentence, directed: Directed[], previous?: ReadSentence, earlier: readonly ReadSentence[] = []): Change[] {
+export function readChanges(s: ReadSentence, directed: Directed[], previous?: ReadSentence, earlier: readonly ReadSentence[] = [], before?: string): Change[] {
   // A period named in the sentence before still sets the scene ("During the Younger Dryas... While
   // Greenland froze, ..."), and so does one named a sentence or two earlier in the paragraph when
   // this sentence names no period of its own.
   const periodIn = (r: ReadSentence | undefined) => r?.of('periods').filter((p) => p.key !== 'deglaciation')[0]?.key;
   const scene = s.of('periods').length === 0 && previous?.of('periods').length === 0 ? earlier.map(periodIn).find((p) => p !== undefined) : undefined;
-  const period = periodIn(s) ?? periodIn(previous) ?? scene;
+  // `before`: the period the block before this one named, for a paragraph that names none up to
+  // this sentence (a speaker's next turn, the next paragraph of a section).
+  const named = [s, previous, ...earlier].some((r) => r !== undefined && r.of('periods').length > 0);
+  const period = periodIn(s) ?? periodIn(previous) ?? scene ?? (named ? undefined : before);
   const changes: Change[] = directed
     .filter((d) => d.attribute === 'temperature')
     .map((d) => ({ kind: 'change', of: d.of, attribute: 'temperature', dir: (d.negated ? -d.dir : d.dir) as 1 | -1, start: d.start, end: d.end, ...(period === undefined ? {} : { during: period }) }));

@@ -17,8 +17,11 @@ export { readSentence, type ReadSentence, type Word, type Thing } from './senten
 export { isOwnClaim, stanceOf, STANCES, type SentenceStance, type StanceContext, type StanceKind } from './stance.js';
 export type * from './types.js';
 
-/** Reads the propositions of `s`; `previous` resolves a pronoun that points back one sentence. */
-export function readPropositions(s: ReadSentence, previous?: ReadSentence, stance?: SentenceStance, earlier: readonly ReadSentence[] = []): Propositions {
+/**
+ * Reads the propositions of `s`; `previous` resolves a pronoun that points back one sentence,
+ * `earlier` and `scene` (the period the block before named) set the time a change happened in.
+ */
+export function readPropositions(s: ReadSentence, previous?: ReadSentence, stance?: SentenceStance, earlier: readonly ReadSentence[] = [], scene?: string): Propositions {
   let causes = readCauses(s, previous);
   // Only what the question asks flips or opens; a premise before it stands.
   const asks = (c: Cause) => stance?.questionFrom === undefined || c.start >= stance.questionFrom;
@@ -30,7 +33,7 @@ export function readPropositions(s: ReadSentence, previous?: ReadSentence, stanc
     orders: readOrders(s, previous),
     relations: readRelations(s, directed),
     comparisons: readComparisons(s, previous),
-    changes: readChanges(s, directed, previous, earlier),
+    changes: readChanges(s, directed, previous, earlier, scene),
     evidence: readEvidence(s, causes),
   };
 }

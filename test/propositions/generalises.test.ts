@@ -225,3 +225,25 @@ describe('a record named in a closing "as" clause is the record the sentence rea
     expect(await serious(text)).not.toContain('scope.regional-record-as-global');
   });
 });
+
+describe('the time and the places of a change read past the sentence and the comma', () => {
+  // Antarctica warmed slightly during the Younger Dryas while Greenland cooled (bipolar seesaw):
+  // Pedro et al. 2016, Nature Geoscience 9, 51-55 (from memory); WAIS Divide Project Members 2015,
+  // Nature 520, 661-665, doi 10.1038/nature14401 (from memory).
+  it('takes the period the block before named, for a speaker\'s next turn or the next paragraph', async () => {
+    const turns = 'HOST: Then came the Younger Dryas, when the north slid back into the cold.\n\nGUEST: And through that stretch Antarctica was plunging into the cold as well.\n';
+    expect(await serious(turns)).toContain('direction.bipolar-seesaw-younger-dryas');
+    const right = 'HOST: Then came the Younger Dryas, when the north slid back into the cold.\n\nGUEST: Meanwhile Antarctica was slowly warming.\n';
+    expect(await serious(right)).toEqual([]);
+  });
+
+  it('does not carry a period past a new heading', async () => {
+    const text = '## The Younger Dryas\n\nThe north slid back into the cold for about 1,200 years.\n\n## The last glacial maximum\n\nAntarctica was far colder than today.\n';
+    expect(await serious(text)).toEqual([]);
+  });
+
+  it('gives a change said "alongside" another place to the place that holds it', async () => {
+    expect(await serious('In the Younger Dryas, Antarctica shivered too, cooling alongside Greenland.\n')).toContain('direction.bipolar-seesaw-younger-dryas');
+    expect(await serious('In the Younger Dryas, Greenland shivered, cooling alongside Scandinavia, while Antarctica warmed a little.\n')).toEqual([]);
+  });
+});

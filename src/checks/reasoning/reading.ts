@@ -20,6 +20,8 @@ export interface ParagraphContext {
   heading?: string;
   /** The block carries the deliberate-quotation marker. */
   marked?: boolean;
+  /** The period (lexicon `periods` key) the block before named, under the same heading. */
+  scene?: string;
 }
 
 /** Reads sentence `i` of a paragraph (undefined past its ends). */
@@ -53,7 +55,9 @@ export function paragraphReader(paragraph: readonly string[], packs: LoadedPacks
     const stance = stanceOf(s, { ...context, ...(next === undefined ? {} : { next }) });
     // The two sentences before the previous one, nearest first: the scene a paragraph has set.
     const earlier = [sentenceAt(i - 2), sentenceAt(i - 3)].filter((e): e is ReadSentence => e !== undefined);
-    const reading = { s, stance, props: readPropositions(s, sentenceAt(i - 1), stance, earlier) };
+    // The block before sets the scene only for the first sentences, all of which `earlier` sees.
+    const scene = i <= 3 ? context.scene : undefined;
+    const reading = { s, stance, props: readPropositions(s, sentenceAt(i - 1), stance, earlier, scene) };
     readings.set(i, reading);
     return reading;
   };
