@@ -24,8 +24,9 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
   const hits = s
     .of('causes')
     .filter((h, _, all) => !all.some((o) => o !== h && o.first <= h.first && o.last >= h.last && o.last - o.first > h.last - h.first))
-    // "orbital forcing" names the orbit: its "forcing" is no cause word of its own.
-    .filter((h) => !entities.some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first));
+    // "orbital forcing" names the orbit: its "forcing" is no cause word of its own, and "within a few
+    // centuries of each other" is a timing, not a feedback.
+    .filter((h) => ![...entities, ...s.of('order')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first));
   const causes: Cause[] = [];
   for (const h of hits) {
     if (h.key === 'reverse') continue;

@@ -247,3 +247,15 @@ describe('the time and the places of a change read past the sentence and the com
     expect(await serious('In the Younger Dryas, Greenland shivered, cooling alongside Scandinavia, while Antarctica warmed a little.\n')).toEqual([]);
   });
 });
+
+describe('a timing is no feedback', () => {
+  // Antarctic temperature and CO2 within a few centuries in the last deglaciation: Parrenin et al.
+  // 2013, Science 339, 1060-1063, doi 10.1126/science.1226368. Each amplified the other (Shakun et
+  // al. 2012), so "temperature drives CO2, not the other way round" is the either/or error.
+  it('flags the either/or after a sentence that puts the two "within a few centuries of each other"', async () => {
+    const text = 'Better-dated cores put Antarctic warming and the CO2 rise within a few centuries of each other. The ice settles it: temperature drives CO2, not the other way round.\n';
+    expect(await serious(text)).toContain('logic.either-or-causation');
+    const loop = 'Antarctic warming and the CO2 rise fed each other. Temperature drives CO2, and CO2 drives temperature in return.\n';
+    expect(await serious(loop)).not.toContain('logic.either-or-causation');
+  });
+});
