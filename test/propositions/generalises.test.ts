@@ -259,3 +259,23 @@ describe('a timing is no feedback', () => {
     expect(await serious(loop)).not.toContain('logic.either-or-causation');
   });
 });
+
+describe('the lag put as a maxim about latecomers', () => {
+  // A lag of CO2 behind Antarctic temperature does not rule CO2 out as a cause; it amplified the
+  // warming: Shakun et al. 2012, Nature 484, 49-54, doi 10.1038/nature10915; Parrenin et al. 2013.
+  it.each([
+    'In the Dome C ice, CO2 climbed centuries after Antarctic temperature. Anything that arrives after the fire is lit cannot be what started the blaze.',
+    'The record shows CO2 rising after the warming, and a gas that shows up that late can\'t have done any of the heating.',
+  ])('flags %j', async (text) => {
+    expect(await serious(`${text}\n`)).toContain('logic.lag-rules-out-cause');
+  });
+
+  it.each([
+    // The same maxim with no lag before it is not about CO2.
+    'The museum opened its doors in 1998. A visitor who arrives after closing cannot be let in.',
+    // A latecomer granted a part is the right reading.
+    'In the Dome C ice, CO2 climbed centuries after Antarctic temperature. Something that turns up late can still amplify what started before it.',
+  ])('passes %j', async (text) => {
+    expect(await serious(`${text}\n`)).not.toContain('logic.lag-rules-out-cause');
+  });
+});

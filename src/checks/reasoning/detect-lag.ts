@@ -10,6 +10,7 @@
  * Denying only the trigger is right (orbital changes started each deglaciation): a denied `start`
  * role passes, and so does a sentence that grants CO2 an amplifying or feedback role.
  */
+import type { ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isCo2OnWarming, isTemperatureFirst, opensWithInference } from './queries.js';
 
@@ -18,9 +19,13 @@ function detect({ index, read }: DetectInput): Cue[] {
   if (here === undefined) return [];
   const before = index > 0 && opensWithInference(here.s) ? read(index - 1) : undefined;
   const ordered = here.props.orders.some(isTemperatureFirst) || (before?.props.orders.some(isTemperatureFirst) ?? false);
-  if (!ordered) return [];
+  // "Something that turns up after the fire has started cannot be what lit it.": the lag put as a
+  // maxim about latecomers, after a sentence that puts temperature first.
   const kept = here.props.causes.some((c) => c.polarity === 'asserted' && (c.role === 'amplify' || c.role === 'feedback') && (c.agent === 'co2' || c.agent === undefined));
   if (kept) return [];
+  const maxim = latecomerDenied(here.s);
+  if (maxim !== undefined && [here, read(index - 1), read(index - 2)].some((r) => r?.props.orders.some(isTemperatureFirst) ?? false)) return [maxim];
+  if (!ordered) return [];
   // "a consequence cannot also be a cause": an agent left unnamed in a sentence about CO2 is CO2.
   const aboutCo2 = here.s.of('entities', 'co2').length > 0;
   const denial = here.props.causes.find(
@@ -29,6 +34,27 @@ function detect({ index, read }: DetectInput): Cue[] {
   if (denial !== undefined) return [{ start: denial.start, end: denial.end }];
   const follower = here.s.words.some((w) => w.text === 'whether') ? undefined : here.props.orders.find((o) => isTemperatureFirst(o) && o.dismissive);
   return follower === undefined ? [] : [{ start: follower.start, end: follower.end }];
+}
+
+const RELATIVE = new Set(['that', 'which', 'who']);
+const DENYING_MODAL = new Set(['cannot', "can't", 'couldn’t', "couldn't", 'can’t']);
+
+/**
+ * A generic latecomer denied any part: a subject whose relative clause says it came late ("a gas
+ * that turns up late", "something that arrives after the fact"), then "cannot be"/"can't have".
+ * Returns the denial's span.
+ */
+function latecomerDenied(s: ReadSentence): Cue | undefined {
+  const words = s.words.map((w) => w.text);
+  const denying = (i: number) => DENYING_MODAL.has(words[i] ?? '') || (['can', 'could'].includes(words[i] ?? '') && words[i + 1] === 'not');
+  const modal = words.findIndex((_, i) => denying(i));
+  // The relative clause opens at most 12 words before the modal, in its segment or just before it.
+  const rel = modal < 0 ? -1 : words.findLastIndex((w, i) => i < modal - 1 && modal - i <= 12 && i >= 1 && RELATIVE.has(w));
+  if (rel < 0) return undefined;
+  const late = s.of('order', 'after').some((h) => h.first > rel && h.first < modal) || words.slice(rel, modal).includes('late');
+  const verb = words.slice(modal + 1, modal + 4).find((w) => ['be', 'have', 'been'].includes(w));
+  if (!late || verb === undefined) return undefined;
+  return { start: s.words[modal]?.start ?? 0, end: s.words.at(-1)?.end ?? 0 };
 }
 
 /** "played no part in starting it": a denial about the start only. */
