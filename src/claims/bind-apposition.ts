@@ -46,6 +46,10 @@ export function appositionHead(sentence: string, q: Pick<Quantity, 'start' | 'en
     }
   }
   if (/\p{L}/u.test(residue)) return undefined;
+  // An apposition is short: "CO2 rose about 800 years after Antarctic temperature" after a comma is a
+  // clause of its own, though every word of it is a pack term.
+  const words = (sentence.slice(itemStart, q.start) + ' ' + sentence.slice(q.end, itemEnd)).match(/\p{L}[\p{L}\p{N}'’-]*/gu) ?? [];
+  if (words.length > 4) return undefined;
   const headEnd = sentence.slice(0, at).trimEnd().length;
   const heads = [...hits].filter(([, spans]) => spans.some(([, end]) => end === headEnd || sentence.slice(end, headEnd).match(/^['’]s?$|^\s+(?:core|ice\s+core|record|site|station)$/iu)));
   return heads.length === 1 ? heads[0]?.[0] : undefined;
