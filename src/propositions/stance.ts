@@ -45,6 +45,8 @@ const AUX = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'w
 const WH = new Set(['how', 'why']);
 /** Subjects whose report the writer relies on rather than answers. */
 const AUTHORITIES = new Set(['we', 'i', 'scientists', 'researchers', 'study', 'studies', 'data', 'evidence', 'cores', 'core', 'record', 'records', 'team', 'authors', 'our', 'measurements', 'this', 'that', 'it', 'which', 'analysis', 'results', 'paper', 'ipcc', 'report', 'lag', 'physics']);
+/** Whom a record or the writer tells ("tells us that"): no outside source. */
+const SELF = new Set(['us', 'me', 'you', 'is', 'was', 'are']);
 const ANSWER_OPENERS = new Set(['no', 'not', 'nope', 'actually', 'yes', 'well', 'short', 'a', 'answer', 'in', 'it', 'they', 'that', 'this', 'quite', 'hardly', 'far', 'nothing', 'partly', 'only', 'both', 'neither', 'sort', 'kind']);
 const LABEL = /^\s*(?:[*_#>\s]*)(myth|misconception|claim|the claim|fiction|false|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|you might hear|you'll hear|the myth|the misconception|misunderstanding|mistake|rumou?r)\b[^:]{0,12}:/iu;
 const FACT_LABEL = /^\s*(?:[*_#>\s]*)(fact|reality|the facts?|the science|the evidence|truth|answer|a)\b[^:]{0,12}:/iu;
@@ -98,10 +100,16 @@ function isReported(s: ReadSentence): boolean {
   const reporters = s.of('stance', 'reporters').filter((r) => !/^(?:for|to|with|among|of|from)$/u.test(s.words[r.first - 1]?.text ?? ''));
   if (verbs.some((v) => reporters.some((r) => r.last < v.first && v.first - r.last <= 4))) return true;
   // "Mr Pratley writes that...", "The op-ed insists the lag...": a report with a named outside source.
+  // "The column told readers that...", "A correspondent wrote last month that...": up to three words
+  // (whom it was told, when) may stand between the verb and its "that" or quotation.
   const attributed = verbs.some((v) => {
-    const next = s.words[v.last + 1]?.text ?? '';
+    const opens = s.words.slice(v.last + 1, v.last + 5).findIndex((w) => w.text === 'that' || w.quoted === true);
+    // "tells us that" is the record speaking to the writer, not someone else's claim.
+    const between = s.words.slice(v.last + 1, v.last + 2 + Math.max(0, opens));
     const subject = s.words.slice(Math.max(0, v.first - 3), v.first).map((w) => w.text);
-    return (next === 'that' || s.words[v.last + 1]?.quoted === true) && v.first > 0 && !subject.some((w) => AUTHORITIES.has(w));
+    const gap = s.text.slice(s.words[v.last]?.end ?? 0, between.at(-1)?.start ?? 0);
+    const told = between.slice(0, -1).every((w) => !SELF.has(w.text)) && !/[,;:()]/u.test(gap);
+    return opens >= 0 && told && v.first > 0 && !subject.some((w) => AUTHORITIES.has(w));
   });
   if (attributed) return true;
   const text = s.words.slice(0, 8).map((w) => w.text).join(' ');

@@ -168,6 +168,14 @@ describe('what a debunking piece quotes is not its own claim', () => {
     expect(await serious('Some bloggers insist that CO2 lagged, so it cannot have warmed anything, and they are right.\n')).toContain('logic.lag-rules-out-cause');
   });
 
+  it('reads a report whose verb has an object or a time before its "that", and keeps "tells us that" as the record speaking', async () => {
+    // Orbital changes alone were too weak to end the ice age (Shakun et al. 2012): reported here.
+    expect(await serious('Another correspondent wrote last month that the orbit alone ended the ice age; nobody who has read the literature believes that.\n')).toEqual([]);
+    expect(await serious('The council\'s leaflet told residents that the ice cores prove CO2 is a passenger, never a driver.\n')).toEqual([]);
+    // A record telling the writer is no outside report: Antarctic 8-10 °C is not the global change (Tierney et al. 2020).
+    expect(await serious('The Vostok layers tell us that the Earth as a whole was about 9 °C colder at the glacial maximum.\n')).toContain('scope.regional-record-as-global');
+  });
+
   it('holds a statement before a question in the same sentence as the draft\'s own, and the question as asked', async () => {
     // The premise is asserted ("..., so how can you trust any of it?"); delta-age: Caillon et al. 2003.
     expect(await serious('The gas in the bubbles is older than the ice around it, so how can anyone trust the record?\n')).toContain('direction.trapped-air-younger-than-ice');
