@@ -35,7 +35,7 @@ const SPAN_WORDS = new RegExp(String.raw`(?:^|[^\p{L}])(?:lasted|lasting|lasts|t
 const NOT_A_SPAN = new RegExp(String.raw`(?:^|[^\p{L}])(?:past|last|previous|next|every|each|per|after|before)${S}*$`, 'iu');
 /** "some 19 times faster", "ten times slower": a ratio of paces. */
 const PACE_AFTER = new RegExp(String.raw`^${S}*(?:faster|slower|quicker|more${S}+(?:quickly|rapidly|rapid)|as${S}+fast)(?![\p{L}])`, 'iu');
-const RATES = new Set(['concentration-rate', 'temperature-rate']);
+const RATES = new Set(['concentration-rate', 'temperature-rate', 'length-rate']);
 const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
 
 /** "That is a transition of roughly 3,000 years": a duration restating the span of the sentence before. */

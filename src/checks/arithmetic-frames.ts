@@ -21,7 +21,7 @@ const START_WORDS = list(['began', 'begun', 'begins', 'started', 'starts', 'set 
 const START_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:${START_WORDS})(?:${S}+[\p{L}'’-]+){0,7}${S}*$`, 'iu');
 const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at|by)${S}*$`, 'iu');
 const CHANGE_NOUNS = ['rise', 'increase', 'drop', 'fall', 'decline', 'change', 'jump', 'gain', 'loss', 'swing', 'difference', 'warming', 'cooling', 'growth', 'decrease', 'reduction', 'climb', 'leap', 'surge', 'plunge', 'slide'];
-const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
+const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'sank', 'sunk', 'thinned', 'thickened', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
 const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
 const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down', 'added', 'extra']);
 const SPAN_OF_PAIR = before(['lasting', 'lasted', 'lasts', 'spanning', 'spanned', 'spans', 'span of', 'period of', 'interval of', 'stretch of', 'over', 'across', 'within', 'took', 'taking', 'during', 'for', 'or', 'that is', 'i.e.', 'i.e.,', '(', '—']);

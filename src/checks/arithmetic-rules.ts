@@ -35,8 +35,8 @@ const DIFFERENCE: Partial<Record<Dimension, Dimension>> = {
   concentration: 'concentration', temperature: 'temperature-change', 'temperature-change': 'temperature-change',
   length: 'length', duration: 'duration', count: 'count', number: 'number',
 };
-const RATE_OF: Partial<Record<Dimension, Dimension>> = { 'concentration-rate': 'concentration', 'temperature-rate': 'temperature-change' };
-const RATIOED: Dimension[] = ['concentration', 'temperature-change', 'length', 'duration', 'count', 'concentration-rate', 'temperature-rate'];
+const RATE_OF: Partial<Record<Dimension, Dimension>> = { 'concentration-rate': 'concentration', 'temperature-rate': 'temperature-change', 'length-rate': 'length' };
+const RATIOED: Dimension[] = ['concentration', 'temperature-change', 'length', 'duration', 'count', 'concentration-rate', 'temperature-rate', 'length-rate'];
 
 const ends = (qs: Quantity[], p: Pair): [Quantity, Quantity] => [qs[p.from] as Quantity, qs[p.to] as Quantity];
 const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
