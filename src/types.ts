@@ -85,7 +85,7 @@ export interface Sentence {
  * What a quantity measures. Canonical units: duration `yr`; age `yr BP` (years before AD 1950);
  * concentration `ppm`; temperature-change `K`; temperature `degC`; length `m`;
  * concentration-rate `ppm/yr`; temperature-rate `K/yr`; length-rate `m/yr` (a sea-level
- * rise in mm a year); count `count`; ratio `ratio` (2 = twice);
+ * rise in mm a year); duration-per-length `yr/m` (the years one metre of ice holds); count `count`; ratio `ratio` (2 = twice);
  * percent `%` (a bare percentage not converted to anything else).
  */
 export const DIMENSIONS = [
@@ -98,6 +98,7 @@ export const DIMENSIONS = [
   'concentration-rate',
   'temperature-rate',
   'length-rate',
+  'duration-per-length',
   'count',
   'ratio',
   'percent',

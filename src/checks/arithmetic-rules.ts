@@ -11,6 +11,7 @@ import { divide, facing, invert, minus, percentChange, size, type Derived } from
 import { spanOfDates } from './arithmetic-spans.js';
 import { durationsAcross, paceRatiosAcross } from './arithmetic-across.js';
 import { writtenSums } from './arithmetic-equations.js';
+import { perLength } from './arithmetic-per-length.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
@@ -152,7 +153,7 @@ function percentOfBase(text: string, qs: Quantity[], stated: Quantity): Finding[
 export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: (t, qs, p, prev) => [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)] },
   { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => [...durations(t, qs, p), ...durationsAcross(t, qs, prev)] },
-  { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took.', derive: rates },
+  { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev) => [...rates(t, qs, p), ...perLength(t, qs, prev)] },
   { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev) => [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)] },
 ];
 

@@ -119,8 +119,16 @@ const RATE_UNITS: UnitDef[] = RATE_BASES.flatMap((base) =>
   ),
 );
 
+/** "per metre", "to every metre", "a metre", "/m": what follows the years in a depth-age gradient. */
+const PER_LENGTH = String.raw`[\s\u00A0]*(?:\/|${words('(?:per|an?|each|every|(?:to|for|in) (?:each|every|a|one))')}[\s\u00A0]*)`;
+/** Years per metre or centimetre of ice: how much time one unit of depth holds ("75 years per metre"). */
+const PER_LENGTH_UNITS: UnitDef[] = [
+  u('yr/m', 'duration-per-length', 1, 'years per metre', [`${YEAR_WORD}${PER_LENGTH}(?:${words('(?:metres?|meters?)')}|m)`]),
+  u('yr/cm', 'duration-per-length', 100, 'years per centimetre', [`${YEAR_WORD}${PER_LENGTH}(?:${words('(?:centimetres?|centimeters?)')}|cm)`]),
+];
+
 /** The unit table: every unit, its dimension, its factor and offset to the canonical unit, and its written forms. */
-export const UNIT_TABLE: readonly UnitDef[] = [...BASE_UNITS, ...RATE_UNITS];
+export const UNIT_TABLE: readonly UnitDef[] = [...BASE_UNITS, ...RATE_UNITS, ...PER_LENGTH_UNITS];
 
 /** The canonical unit of each dimension (as in src/types.ts). */
 export const CANONICAL_UNIT: Record<Dimension, string> = {
@@ -133,6 +141,7 @@ export const CANONICAL_UNIT: Record<Dimension, string> = {
   'concentration-rate': 'ppm/yr',
   'temperature-rate': 'K/yr',
   'length-rate': 'm/yr',
+  'duration-per-length': 'yr/m',
   count: 'count',
   ratio: 'ratio',
   percent: '%',

@@ -57,6 +57,7 @@ const PACK_UNITS: Record<string, [id: string, dimension: Dimension, label: strin
   'm/yr': ['m/yr', 'length-rate', 'm per year'],
   'mm/yr': ['mm/yr', 'length-rate', 'mm per year'],
   'm/century': ['m/century', 'length-rate', 'm per century'],
+  'yr/m': ['yr/m', 'duration-per-length', 'years per metre'],
   count: ['count', 'count', ''],
   cycles: ['count', 'count', 'cycles'],
   ratio: ['ratio', 'ratio', 'times'],

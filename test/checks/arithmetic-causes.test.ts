@@ -34,3 +34,30 @@ describe('arithmetic slips by the way the sentence is built', () => {
     expect(check(sentence)).toEqual([]);
   });
 });
+
+describe('years per metre of ice', () => {
+  // Common practice: 120,000 years / 300 m = 400 years per metre; 400 × 50 m = 20,000 years.
+  const WRONG_GRADIENT: [string, string, string, string, string[]][] = [
+    ['The last 300 m of the Harnby core hold some 120,000 years, about 40 years per metre.', 'about 40 years per metre', 'about 400 years per metre', 'arith.rate', []],
+    ['Some 120,000 years lie in 300 metres of basal ice: roughly 40 years to every metre.', 'roughly 40 years to every metre', 'roughly 400 years to every metre', 'arith.rate', []],
+    ['Near the bed one metre of the Harnby ice holds about 400 years, so the lowest 50 metres hold some 2,000 years.', 'some 2,000 years', 'some 20,000 years', 'arith.rate', []],
+    ['At Harnby 300 m of ice hold 120,000 years, so one metre there holds some 40 years.', 'some 40 years', 'some 400 years', 'arith.rate', []],
+    ['A 50-metre stretch of that ice therefore spans about 2,000 years.', 'about 2,000 years', 'about 20,000 years', 'arith.rate', ['Near the bed one metre of the Harnby ice holds about 400 years.']],
+  ];
+  it.each(WRONG_GRADIENT)('flags: %s', (sentence, flagged, correction, ruleId, context) => {
+    const flags = check(sentence, context);
+    expect(flags.map((f) => [f.ruleId, sentence.slice(f.start, f.end), f.correction])).toEqual([[ruleId, flagged, correction]]);
+  });
+
+  const RIGHT_GRADIENT: [string, string[]][] = [
+    ['The last 300 m of the Harnby core hold some 120,000 years, about 400 years per metre.', []],
+    ['Near the bed one metre of the Harnby ice holds about 400 years, so the lowest 50 metres hold some 20,000 years.', []],
+    // Two lengths: which one the gradient belongs to is not clear, so nothing is said.
+    ['The top 100 m hold 1,000 years and the lowest 300 m some 120,000 years, about 400 years per metre at the bed.', []],
+    // No word draws the second sentence from the first: the core's whole span is another matter.
+    ['The Harnby core is 2,900 m long and covers about 800,000 years.', ['Near the bed one metre of the Harnby ice holds about 400 years.']],
+  ];
+  it.each(RIGHT_GRADIENT)('leaves alone: %s', (sentence, context) => {
+    expect(check(sentence, context)).toEqual([]);
+  });
+});
