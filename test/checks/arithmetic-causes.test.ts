@@ -15,6 +15,15 @@ const WRONG: [string, string, string, string, string][] = [
   // Common practice: 60 m / 6,000 years = 1 m per century; 30 m / 1,000 years = 30 mm a year.
   ['length rate', 'The Morrow coast sank about 60 metres between 16,000 and 10,000 years ago, on average some 5 metres per century.', 'arith.rate', 'some 5 metres per century', 'some 1 metres per century'],
   ['length rate', 'Between 12,000 and 11,000 years ago the lake rose by 30 m, a rate of about 3 mm a year.', 'arith.rate', 'about 3 mm a year', 'about 30 mm a year'],
+  // A span restated after a date pair in more ways: a lead of two words, a filler, an adjectival
+  // figure with its article, "lay" after "between ... and ...", and two dates whose second ends
+  // something. Common practice: 16,200 − 14,900 = 1,300; 9,400 − 8,200 = 1,200; 24,000 − 17,000 = 7,000.
+  ['span of dates', 'The Kell lake stood high from about 16,200 to 14,900 years ago, so that\'s a good 3,300 years of flooding.', 'arith.duration', '3,300 years', '1,300 years'],
+  ['span of dates', 'The Kell lake stood high from about 16,200 to 14,900 years ago, which comes to some 2,300 years.', 'arith.duration', 'some 2,300 years', 'some 1,300 years'],
+  ['span of dates', 'The Orm glacier readvanced from 9,400 to 8,200 years ago, a span of only 200 years.', 'arith.duration', '200 years', '1,200 years'],
+  ['span of dates', 'The Orm glacier readvanced from 9,400 to 8,200 years ago, a 2,200-year advance.', 'arith.duration', '2,200-year', '1,200-year'],
+  ['span of dates', 'Between the first moraine, about 24,000 years ago, and the last, 17,000 years ago, lay some 9,000 years of retreat.', 'arith.duration', 'some 9,000 years', 'some 7,000 years'],
+  ['span of dates', 'The Skarn ice peaked about 24,000 years ago, and the valley was free of ice by 17,000 years ago - roughly 4,000 years of melt.', 'arith.duration', 'roughly 4,000 years', 'roughly 7,000 years'],
 ];
 
 /** [cause, sentence]: right, or within the hedges. */
@@ -22,6 +31,14 @@ const RIGHT: [string, string][] = [
   ['length rate', 'The Morrow coast sank about 60 metres between 16,000 and 10,000 years ago, on average some 1 metre per century.'],
   ['length rate', 'Between 12,000 and 11,000 years ago the lake rose by 30 m, a rate of about 30 mm a year.'],
   ['length rate', 'Sea level now rises about 4 mm a year, and it rose 120 m after the glacial maximum.'],
+  ['span of dates', 'The Kell lake stood high from about 16,200 to 14,900 years ago, so that\'s a good 1,300 years of flooding.'],
+  ['span of dates', 'The Orm glacier readvanced from 9,400 to 8,200 years ago, a 1,200-year advance.'],
+  ['span of dates', 'Between the first moraine, about 24,000 years ago, and the last, 17,000 years ago, lay some 7,000 years of retreat.'],
+  ['span of dates', 'The Skarn ice peaked about 24,000 years ago, and the valley was free of ice by 17,000 years ago - roughly 7,000 years of melt.'],
+  // Three dates: which two the span joins is not clear.
+  ['span of dates', 'The ice peaked 24,000 years ago, retreated 19,000 years ago, and was gone by 17,000 years ago - roughly 2,000 years of melt.'],
+  // A span that is not the pair's: a lead word, then another stretch of time named.
+  ['span of dates', 'The Orm glacier readvanced from 9,400 to 8,200 years ago, and for the past 8,000 years it has been shrinking.'],
 ];
 
 describe('arithmetic slips by the way the sentence is built', () => {
