@@ -162,6 +162,22 @@ export function comparesToNext(text: string, q: Quantity): boolean {
   return COMPARATIVE_AFTER.test(tail(text, q)) || /^[\s\u00A0]+as[\s\u00A0]+\p{L}+[\s\u00A0]+as(?![\p{L}])/iu.test(tail(text, q));
 }
 
+/** Nouns for the measure a multiple is taken of: "20 times the average deglacial rate", "twice the glacial level". */
+const MEASURE_NOUNS = ['rate', 'pace', 'speed', 'average', 'tempo', 'level', 'value', 'figure', 'amount', 'concentration'];
+const TIMES_THE = new RegExp(String.raw`^${S}+(?:the|that|its|their)${S}+(?:[\p{L}-]+${S}+){0,3}?(?:${list(MEASURE_NOUNS)})(?![\p{L}])`, 'iu');
+/** "faster", "slower", "more quickly": a multiple of a pace with nothing after it. */
+const PACE_AFTER = new RegExp(String.raw`^${S}*(?:faster|slower|quicker|more${S}+(?:quickly|rapidly|rapid)|as${S}+fast)(?![\p{L}])`, 'iu');
+
+/** True when ratio `q` is a multiple of a measure named after it ("20 times the deglacial rate of ..."). */
+export function timesTheMeasure(text: string, q: Quantity): boolean {
+  return q.dimension === 'ratio' && TIMES_THE.test(tail(text, q));
+}
+
+/** True when ratio `q` says how much faster or slower one pace is ("about 20x faster"). */
+export function isPaceRatio(text: string, q: Quantity): boolean {
+  return q.dimension === 'ratio' && PACE_AFTER.test(text.slice(q.end, q.end + 24));
+}
+
 /** "[76 ppm] over [6,000 years]": an amount followed at once by the time it took is a change. */
 const OVER_SPAN = new RegExp(String.raw`^${S}+(?:over|in|across|within|during)${S}+(?:the${S}+)?$`, 'iu');
 

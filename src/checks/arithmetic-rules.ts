@@ -12,7 +12,7 @@ import { spanOfDates } from './arithmetic-spans.js';
 import { durationsAcross, paceRatiosAcross } from './arithmetic-across.js';
 import { writtenSums } from './arithmetic-equations.js';
 import { perLength } from './arithmetic-per-length.js';
-import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
+import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
 export interface Finding {
@@ -109,7 +109,8 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
     const after = qs.slice(i + 1).find((q) => RATIOED.includes(q.dimension));
     const fraction = after !== undefined && fractionOf(text, stated, after);
     const isPercent = stated.dimension === 'percent' && (isStatedChange(text, stated) || comparesToNext(text, stated));
-    const isRatio = stated.dimension === 'ratio' && (isStatedRatio(text, stated) || comparesToNext(text, stated) || fraction);
+    const multiple = timesTheMeasure(text, stated);
+    const isRatio = stated.dimension === 'ratio' && (isStatedRatio(text, stated) || comparesToNext(text, stated) || fraction || multiple);
     if (!isPercent && !isRatio) return [];
     let pairRatio: Derived | undefined;
     let measures: string;
@@ -118,10 +119,10 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
       pairRatio = divide(w(b), w(a));
       measures = `${isPercent ? 'the percentage change' : 'the ratio'} ${words(a, b)}`;
     } else if (after === undefined) {
-      return isPercent ? percentOfBase(text, qs, stated) : [];
+      return isPercent ? percentOfBase(text, qs, stated) : paceOfTwo(text, qs, stated);
     } else {
       const x = only(qs.filter((q) => q !== after && q !== stated && q.dimension === after.dimension));
-      if (x === undefined || !(comparesToNext(text, stated) || fraction)) return [];
+      if (x === undefined || !(comparesToNext(text, stated) || fraction || multiple)) return [];
       pairRatio = divide(w(x), w(after));
       measures = `${isPercent ? 'the percentage difference' : 'the ratio'} of ${x.text} to ${after.text}`;
     }
@@ -130,6 +131,23 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
     const r = (stated.value < 1) === (pairRatio.value < 1) ? pairRatio : invert(pairRatio);
     return [{ stated, computed: r, measures }];
   });
+}
+
+const PACES: Dimension[] = ['concentration-rate', 'temperature-rate', 'length-rate'];
+
+/**
+ * "~2.4 ppm/yr now vs ~0.012 ppm/yr in the deglaciation, so we're going about 20x faster": a pace
+ * ratio after exactly two rates of one dimension is the faster over the slower.
+ */
+function paceOfTwo(text: string, qs: Quantity[], stated: Quantity): Finding[] {
+  if (!isPaceRatio(text, stated)) return [];
+  const before = qs.filter((q) => q.end <= stated.start && PACES.includes(q.dimension));
+  if (before.length !== 2 || qs.some((q) => q.start > stated.end && PACES.includes(q.dimension))) return [];
+  const [a, b] = before as [Quantity, Quantity];
+  if (a.dimension !== b.dimension) return [];
+  const r = divide(w(a), w(b));
+  if (r === undefined) return [];
+  return [{ stated, computed: (stated.value < 1) === (r.value < 1) ? r : invert(r), measures: `the ratio of ${a.text} to ${b.text}` }];
 }
 
 /**

@@ -24,6 +24,11 @@ const WRONG: [string, string, string, string, string][] = [
   ['span of dates', 'The Orm glacier readvanced from 9,400 to 8,200 years ago, a 2,200-year advance.', 'arith.duration', '2,200-year', '1,200-year'],
   ['span of dates', 'Between the first moraine, about 24,000 years ago, and the last, 17,000 years ago, lay some 9,000 years of retreat.', 'arith.duration', 'some 9,000 years', 'some 7,000 years'],
   ['span of dates', 'The Skarn ice peaked about 24,000 years ago, and the valley was free of ice by 17,000 years ago - roughly 4,000 years of melt.', 'arith.duration', 'roughly 4,000 years', 'roughly 7,000 years'],
+  // A multiple of a pace: "N times the ... rate of Y", "twenty-odd times the pace", "Nx faster" after
+  // both rates. Common practice: 1.5 / 0.01 = 150; 0.9 / 0.03 = 30.
+  ['multiple of a pace', 'The Tarn Ridge glacier now thins about 1.5 m a year, some 15 times the average pace of its retreat after the Little Ice Age, about 0.01 m a year.', 'arith.ratio', 'some 15 times', 'some 150 times'],
+  ['multiple of a pace', 'At 0.9 °C per decade the Vell station warms roughly five times the long-term rate of 0.03 °C per decade.', 'arith.ratio', 'roughly five times', 'roughly 30 times'],
+  ['multiple of a pace', 'The methane sensor logged 0.9 ppm per year against 0.03 ppm per year in the old record, so the gas now climbs forty-odd times faster.', 'arith.ratio', 'forty-odd times', '30-odd times'],
 ];
 
 /** [cause, sentence]: right, or within the hedges. */
@@ -35,6 +40,10 @@ const RIGHT: [string, string][] = [
   ['span of dates', 'The Orm glacier readvanced from 9,400 to 8,200 years ago, a 1,200-year advance.'],
   ['span of dates', 'Between the first moraine, about 24,000 years ago, and the last, 17,000 years ago, lay some 7,000 years of retreat.'],
   ['span of dates', 'The Skarn ice peaked about 24,000 years ago, and the valley was free of ice by 17,000 years ago - roughly 7,000 years of melt.'],
+  ['multiple of a pace', 'The Tarn Ridge glacier now thins about 1.5 m a year, some 150 times the average pace of its retreat after the Little Ice Age, about 0.01 m a year.'],
+  ['multiple of a pace', 'The methane sensor logged 0.9 ppm per year against 0.03 ppm per year in the old record, so the gas now climbs thirty-odd times faster.'],
+  // Two rates and a multiple of something else: nothing to check.
+  ['multiple of a pace', 'Sea level rose 4 mm a year in the 2010s and 1.5 mm a year a century ago, and storms were twice as frequent.'],
   // Three dates: which two the span joins is not clear.
   ['span of dates', 'The ice peaked 24,000 years ago, retreated 19,000 years ago, and was gone by 17,000 years ago - roughly 2,000 years of melt.'],
   // A span that is not the pair's: a lead word, then another stretch of time named.
