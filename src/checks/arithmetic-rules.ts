@@ -12,6 +12,7 @@ import { spanOfDates } from './arithmetic-spans.js';
 import { durationsAcross, paceRatiosAcross } from './arithmetic-across.js';
 import { writtenSums } from './arithmetic-equations.js';
 import { perLength } from './arithmetic-per-length.js';
+import { changeShares } from './arithmetic-shares.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
@@ -172,7 +173,10 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: (t, qs, p, prev) => [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)] },
   { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => [...durations(t, qs, p), ...durationsAcross(t, qs, prev)] },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev) => [...rates(t, qs, p), ...perLength(t, qs, prev)] },
-  { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev) => [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)] },
+  { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev) => {
+    const found = [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)];
+    return [...found, ...changeShares(t, qs, p).filter((f) => !found.some((g) => g.stated === f.stated))];
+  } },
 ];
 
 export { findPairs };

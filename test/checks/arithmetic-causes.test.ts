@@ -29,6 +29,12 @@ const WRONG: [string, string, string, string, string][] = [
   ['multiple of a pace', 'The Tarn Ridge glacier now thins about 1.5 m a year, some 15 times the average pace of its retreat after the Little Ice Age, about 0.01 m a year.', 'arith.ratio', 'some 15 times', 'some 150 times'],
   ['multiple of a pace', 'At 0.9 °C per decade the Vell station warms roughly five times the long-term rate of 0.03 °C per decade.', 'arith.ratio', 'roughly five times', 'roughly 30 times'],
   ['multiple of a pace', 'The methane sensor logged 0.9 ppm per year against 0.03 ppm per year in the old record, so the gas now climbs forty-odd times faster.', 'arith.ratio', 'forty-odd times', '30-odd times'],
+  // A change as a share of where it started: a fraction after a change noun, or a percentage restating
+  // a change. Common practice: (300 − 200) / 200 = a half; (250 − 200) / 250 = a fifth (a drop is
+  // measured from the higher level); 60 / 240 = 25 percent.
+  ['share of a change', 'In the Dunholm model CO2 climbs from about 200 ppm to 300 ppm, a rise of roughly a third.', 'arith.ratio', 'roughly a third', 'roughly 0.5 times'],
+  ['share of a change', 'The lake level sat at 250 m, some 50 m above its glacial stand of 200 m: a fall of almost half.', 'arith.ratio', 'almost half', '0.2 times'],
+  ['share of a change', 'In the Dunholm run CO2 rose from 240 ppm to 300 ppm, a gain of 60 ppm, or about 40 percent.', 'arith.ratio', 'about 40 percent', 'about 25 percent'],
 ];
 
 /** [cause, sentence]: right, or within the hedges. */
@@ -44,6 +50,11 @@ const RIGHT: [string, string][] = [
   ['multiple of a pace', 'The methane sensor logged 0.9 ppm per year against 0.03 ppm per year in the old record, so the gas now climbs thirty-odd times faster.'],
   // Two rates and a multiple of something else: nothing to check.
   ['multiple of a pace', 'Sea level rose 4 mm a year in the 2010s and 1.5 mm a year a century ago, and storms were twice as frequent.'],
+  ['share of a change', 'In the Dunholm model CO2 climbs from about 200 ppm to 300 ppm, a rise of roughly a half.'],
+  ['share of a change', 'The lake level sat at 250 m, some 50 m above its glacial stand of 200 m: a fall of a fifth.'],
+  ['share of a change', 'In the Dunholm run CO2 rose from 240 ppm to 300 ppm, a gain of 60 ppm, or about 25 percent.'],
+  // A share of something else: three levels, so which two the change joins is not clear.
+  ['share of a change', 'CO2 was 190 ppm, then 280 ppm, and now 420 ppm, a rise of almost a third since the last peak.'],
   // Three dates: which two the span joins is not clear.
   ['span of dates', 'The ice peaked 24,000 years ago, retreated 19,000 years ago, and was gone by 17,000 years ago - roughly 2,000 years of melt.'],
   // A span that is not the pair's: a lead word, then another stretch of time named.
