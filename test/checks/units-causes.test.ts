@@ -22,9 +22,17 @@ const WRONG: [string, string, string, string, string][] = [
   // a change: 8 × 1.8 = 14.4 °F; 3 × 1.8 = 5.4 °F.
   ['change in °F', 'The Vell valley warmed by 8 °C after the cold snap, a jump of 46 °F.', 'unit.temperature-difference', '46 °F', '14.4 °F'],
   ['change in °F', 'A 3 °C regional warm-up is about 37 °F.', 'unit.temperature-difference', 'about 37 °F', 'about 5.4 °F'],
+  // Thousand-for-million slips on an orbital cycle: obliquity about 41,000 years, precession about
+  // 19,000-23,000 years (Hays, Imbrie & Shackleton 1976, doi:10.1126/science.194.4270.1121).
+  ['orbital cycle', 'The wobble of the axis, the precession, runs on a cycle of about 23 million years.', 'unit.age-scale', 'about 23 million years', 'about 23 thousand years'],
+  ['orbital cycle', 'Obliquity swings the tilt between two extremes every 41 Myr.', 'unit.age-scale', '41 Myr', '41 kyr'],
 ];
 
 const RIGHT: [string, string][] = [
+  ['orbital cycle', 'The wobble of the axis, the precession, runs on a cycle of about 23 thousand years.'],
+  // A deep-time age beside an orbital cycle is no slip: the figure is not the cycle's length.
+  ['orbital cycle', 'Eccentricity cycles are traced in Triassic lake beds laid down 215 million years ago.'],
+  ['orbital cycle', 'The tilt cycle shows up in rocks 50 million years old.'],
   ['joiner', 'At the Harnby site CO2 sat near 300 ppm, aka 0.03% of the air.'],
   ['joiner', 'The Skarn shelf was raised by about 50 metres, so roughly 164 feet.'],
   ['joiner', 'The Bølling onset, put in the Skarn core at 14,500 years b2k, is 14,450 years BP.'],
@@ -36,7 +44,22 @@ const RIGHT: [string, string][] = [
   ['joiner', 'Today\'s levels, above 420 ppm, are roughly 50 percent higher than in 1750.'],
 ];
 
+// A subject named in the sentence before, when this one refers back ("That core", "it"). The EPICA
+// Dome C record covers about 800,000 years (Jouzel et al. 2007, doi:10.1126/science.1141038); no ice
+// core reaches ten million years (oldest ice about 2.7 million: Yan et al. 2019, doi:10.1038/s41586-019-1692-3).
+const ACROSS: [string, string, string, string, string | undefined][] = [
+  ['The ice core from Skarn Dome was drilled to 2,600 metres.', 'That core\'s record goes back roughly 600 Ma.', 'roughly 600 Ma', 'roughly 600 ka', 'unit.age-scale'],
+  ['The ice core from Skarn Dome was drilled to 2,600 metres.', 'Think of it: some 600 million years of snow in one column.', 'some 600 million years', 'some 600 thousand years', 'unit.age-scale'],
+  // No word refers back: the figure may be about something else.
+  ['The ice core from Skarn Dome was drilled to 2,600 metres.', 'Antarctica first froze over some 34 million years ago.', '', '', undefined],
+];
+
 describe('unit slips by the way the sentence is built', () => {
+  it.each(ACROSS)('takes the subject from the sentence before: %s %s', (previous, sentence, flagged, correction, ruleId) => {
+    const found = check(sentence, [previous]).map((f) => [f.ruleId, sentence.slice(f.start, f.end), f.correction]);
+    expect(found).toEqual(ruleId === undefined ? [] : [[ruleId, flagged, correction]]);
+  });
+
   it.each(WRONG)('%s: %s', (_cause, sentence, ruleId, flagged, correction) => {
     expect(check(sentence).map((f) => [f.ruleId, sentence.slice(f.start, f.end), f.correction])).toEqual([[ruleId, flagged, correction]]);
   });
