@@ -129,7 +129,9 @@ function endOfTwoDates(text: string, qs: Quantity[], i: number): number | undefi
 
 /** True when `q` is stated as a change ("by 100 ppm", "a rise of 5 °C", "5 °C warmer"). */
 export function isStatedChange(text: string, q: Quantity): boolean {
-  return CHANGE_BEFORE.test(head(text, q)) || CHANGE_AFTER.test(tail(text, q)) || /^[+−-]/.test(q.text);
+  // "an increase of barely 50", "a rise of only 40 ppm": a filler between the change word and the figure.
+  const before = head(text, q).replace(/(?:^|[^\p{L}])(?:only|just|barely|merely|a[\s\u00A0]+mere)[\s\u00A0]*$/iu, (m) => m.slice(0, m.length - m.trimStart().length) + ' ');
+  return CHANGE_BEFORE.test(before) || CHANGE_AFTER.test(tail(text, q)) || /^[+−-]/.test(q.text);
 }
 
 /** True when `amount` is equated with `rate` just after it: "the same 80 ppm would be 5 ppm per century". */

@@ -70,10 +70,22 @@ function apposedChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] 
   });
 }
 
+/**
+ * True when `q` can be set against the ends `a`, `b` of a pair of `dimension`: of the change's
+ * dimension, or a bare number beside ends in a unit whose numbers are canonical as written ("from
+ * 180 to 280 ppm, an increase of barely 50"), or the other way round ("a jump of 110 ppm, from 190
+ * up to 280"): the writer left the unit off one side.
+ */
+function sameChangeUnit(q: Quantity, a: Quantity, b: Quantity): boolean {
+  const asWritten = (x: Quantity): boolean => x.statedUnit !== '' && x.unit === x.statedUnit.replace(/^degC$/u, 'K');
+  if (a.dimension === 'number' && b.dimension === 'number') return q.dimension !== 'number' && q.dimension !== 'age' && q.dimension !== 'duration' && asWritten(q);
+  return q.dimension === DIFFERENCE[a.dimension] || (q.dimension === 'number' && a.dimension !== 'age' && a.dimension !== 'duration' && asWritten(b));
+}
+
 function pairChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return pairs.flatMap((p) => {
     const [a, b] = ends(qs, p);
-    const stated = only(others(qs, p).filter((q) => q.dimension === DIFFERENCE[a.dimension] && isStatedChange(text, q)));
+    const stated = only(others(qs, p).filter((q) => sameChangeUnit(q, a, b) && isStatedChange(text, q)));
     if (stated === undefined) return [];
     return [{ stated, computed: facing(minus(w(b), w(a)), stated.value), measures: `the change ${words(a, b)}` }];
   });

@@ -35,6 +35,10 @@ const WRONG: [string, string, string, string, string][] = [
   ['share of a change', 'In the Dunholm model CO2 climbs from about 200 ppm to 300 ppm, a rise of roughly a third.', 'arith.ratio', 'roughly a third', 'roughly 0.5 times'],
   ['share of a change', 'The lake level sat at 250 m, some 50 m above its glacial stand of 200 m: a fall of almost half.', 'arith.ratio', 'almost half', '0.2 times'],
   ['share of a change', 'In the Dunholm run CO2 rose from 240 ppm to 300 ppm, a gain of 60 ppm, or about 40 percent.', 'arith.ratio', 'about 40 percent', 'about 25 percent'],
+  // A unit left off one side: bare ends beside a change in ppm, or a bare change beside ends in ppm;
+  // a filler ("barely", "only") between the change word and the figure. Common practice: 300 − 220 = 80.
+  ['unit left off', 'In the Dunholm run the model gives a jump of about 120 ppm, from 220 up to 300.', 'arith.change', 'about 120 ppm', 'about 80 ppm'],
+  ['unit left off', 'In the Dunholm run CO2 went from 220 to 300 ppm, an increase of barely 40.', 'arith.change', '40', '80'],
 ];
 
 /** [cause, sentence]: right, or within the hedges. */
@@ -55,6 +59,10 @@ const RIGHT: [string, string][] = [
   ['share of a change', 'In the Dunholm run CO2 rose from 240 ppm to 300 ppm, a gain of 60 ppm, or about 25 percent.'],
   // A share of something else: three levels, so which two the change joins is not clear.
   ['share of a change', 'CO2 was 190 ppm, then 280 ppm, and now 420 ppm, a rise of almost a third since the last peak.'],
+  ['unit left off', 'In the Dunholm run the model gives a jump of about 80 ppm, from 220 up to 300.'],
+  ['unit left off', 'In the Dunholm run CO2 went from 220 to 300 ppm, an increase of barely 80.'],
+  // Bare ends and a change in °F: the numbers are not in one unit as written, so nothing is said.
+  ['unit left off', 'The Vell record warmed by 14 °F, from 20 up to 30 on the old scale.'],
   // Three dates: which two the span joins is not clear.
   ['span of dates', 'The ice peaked 24,000 years ago, retreated 19,000 years ago, and was gone by 17,000 years ago - roughly 2,000 years of melt.'],
   // A span that is not the pair's: a lead word, then another stretch of time named.
