@@ -44,7 +44,7 @@ const PAIR_GAP = new RegExp(
 );
 const NOT_A_SPAN = before(['past', 'last', 'previous', 'preceding', 'next', 'every', 'each', 'per']);
 const RATIO_AFTER = after([...CHANGE_NOUNS, 'faster', 'slower', 'quicker', 'higher', 'larger', 'greater', 'more', 'lower', 'less', 'smaller', 'above', 'below', 'as high', 'as large', 'as much', 'as great', 'as long']);
-const RATIO_VERB = /^(?:doubled|tripled|quadrupled|halved|doubling|tripling|halving|[\p{N}.]+[-\s]?fold|\p{L}+[-\s]?fold)$/iu;
+const RATIO_VERB = /^(?:doubled|tripled|quadrupled|halved|doubling|tripling|halving|doubles|triples|quadruples|halves|[\p{N}.]+[-\s]?fold|\p{L}+[-\s]?fold)$/iu;
 /** "higher than", "more CO2 than", "above": a comparison, with up to three words before "than". */
 const COMPARATIVE_AFTER = new RegExp(String.raw`^[\s\u00A0-]*(?:(?:higher|more|greater|larger|lower|less|smaller|faster|slower|quicker)(?:${S}+[^\s.;,]+){0,3}${S}+than|above|below)(?![\p{L}])`, 'iu');
 

@@ -150,14 +150,19 @@ const PACES: Dimension[] = ['concentration-rate', 'temperature-rate', 'length-ra
 
 /**
  * "~2.4 ppm/yr now vs ~0.012 ppm/yr in the deglaciation, so we're going about 20x faster": a pace
- * ratio after exactly two rates of one dimension is the faster over the slower.
+ * ratio after exactly two rates of one dimension is the faster over the slower; a ratio verb
+ * ("doubles", "triples") after exactly two figures of one unit is their ratio.
  */
 function paceOfTwo(text: string, qs: Quantity[], stated: Quantity): Finding[] {
-  if (!isPaceRatio(text, stated)) return [];
-  const before = qs.filter((q) => q.end <= stated.start && PACES.includes(q.dimension));
-  if (before.length !== 2 || qs.some((q) => q.start > stated.end && PACES.includes(q.dimension))) return [];
+  // "about 1,200 years in the Holocene and about 2,400 years at the glacial maximum, so the offset
+  // roughly triples": a ratio verb after exactly two figures of one dimension and unit is their ratio.
+  const verb = isStatedRatio(text, stated) && !isPaceRatio(text, stated);
+  const kinds = verb ? RATIOED : PACES;
+  if (!verb && !isPaceRatio(text, stated)) return [];
+  const before = qs.filter((q) => q.end <= stated.start && kinds.includes(q.dimension));
+  if (before.length !== 2 || qs.some((q) => q.start > stated.end && kinds.includes(q.dimension))) return [];
   const [a, b] = before as [Quantity, Quantity];
-  if (a.dimension !== b.dimension) return [];
+  if (a.dimension !== b.dimension || (verb && a.statedUnit !== b.statedUnit)) return [];
   const r = divide(w(a), w(b));
   if (r === undefined) return [];
   return [{ stated, computed: (stated.value < 1) === (r.value < 1) ? r : invert(r), measures: `the ratio of ${a.text} to ${b.text}` }];

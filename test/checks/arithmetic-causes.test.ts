@@ -39,6 +39,8 @@ const WRONG: [string, string, string, string, string][] = [
   // a filler ("barely", "only") between the change word and the figure. Common practice: 300 − 220 = 80.
   ['unit left off', 'In the Dunholm run the model gives a jump of about 120 ppm, from 220 up to 300.', 'arith.change', 'about 120 ppm', 'about 80 ppm'],
   ['unit left off', 'In the Dunholm run CO2 went from 220 to 300 ppm, an increase of barely 40.', 'arith.change', '40', '80'],
+  // A ratio verb in the present tense after the two figures it joins. Common practice: 900 / 300 = 3.
+  ['ratio verb', 'The Harnby delay is about 300 years near the top and about 900 years near the bed, so it roughly doubles with depth.', 'arith.ratio', 'roughly doubles', 'roughly 3 times'],
 ];
 
 /** [cause, sentence]: right, or within the hedges. */
@@ -63,6 +65,9 @@ const RIGHT: [string, string][] = [
   ['unit left off', 'In the Dunholm run CO2 went from 220 to 300 ppm, an increase of barely 80.'],
   // Bare ends and a change in °F: the numbers are not in one unit as written, so nothing is said.
   ['unit left off', 'The Vell record warmed by 14 °F, from 20 up to 30 on the old scale.'],
+  ['ratio verb', 'The Harnby delay is about 300 years near the top and about 900 years near the bed, so it roughly triples with depth.'],
+  // Two figures in different units: not one measure, so no ratio is read.
+  ['ratio verb', 'The Harnby core is 900 m deep and 300 years of it are firn; the cost doubles each season.'],
   // Three dates: which two the span joins is not clear.
   ['span of dates', 'The ice peaked 24,000 years ago, retreated 19,000 years ago, and was gone by 17,000 years ago - roughly 2,000 years of melt.'],
   // A span that is not the pair's: a lead word, then another stretch of time named.
