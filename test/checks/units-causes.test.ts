@@ -22,6 +22,9 @@ const WRONG: [string, string, string, string, string][] = [
   // a change: 8 × 1.8 = 14.4 °F; 3 × 1.8 = 5.4 °F.
   ['change in °F', 'The Vell valley warmed by 8 °C after the cold snap, a jump of 46 °F.', 'unit.temperature-difference', '46 °F', '14.4 °F'],
   ['change in °F', 'A 3 °C regional warm-up is about 37 °F.', 'unit.temperature-difference', 'about 37 °F', 'about 5.4 °F'],
+  // A CO2 share with the gas named after the percentage. 1% = 10,000 ppm, so 0.3 percent would be
+  // 3,000 ppm, never measured (172-300 ppm in the ice cores: Lüthi et al. 2008, doi:10.1038/nature06949).
+  ['share, gas after', 'At the glacial peak the air above Harnby held about 0.3 percent carbon dioxide.', 'unit.percent-ppm', 'about 0.3 percent', 'about 0.03 percent'],
   // Thousand-for-million slips on an orbital cycle: obliquity about 41,000 years, precession about
   // 19,000-23,000 years (Hays, Imbrie & Shackleton 1976, doi:10.1126/science.194.4270.1121).
   ['orbital cycle', 'The wobble of the axis, the precession, runs on a cycle of about 23 million years.', 'unit.age-scale', 'about 23 million years', 'about 23 thousand years'],
@@ -30,6 +33,9 @@ const WRONG: [string, string, string, string, string][] = [
 
 const RIGHT: [string, string][] = [
   ['orbital cycle', 'The wobble of the axis, the precession, runs on a cycle of about 23 thousand years.'],
+  ['share, gas after', 'At the glacial peak the air above Harnby held about 0.03 percent carbon dioxide.'],
+  // A change in percent is no share of the air.
+  ['share, gas after', 'Since 1750 the air has gained about 50 percent carbon dioxide.'],
   // A deep-time age beside an orbital cycle is no slip: the figure is not the cycle's length.
   ['orbital cycle', 'Eccentricity cycles are traced in Triassic lake beds laid down 215 million years ago.'],
   ['orbital cycle', 'The tilt cycle shows up in rocks 50 million years old.'],
