@@ -84,7 +84,8 @@ export interface Sentence {
 /**
  * What a quantity measures. Canonical units: duration `yr`; age `yr BP` (years before AD 1950);
  * concentration `ppm`; temperature-change `K`; temperature `degC`; length `m`;
- * concentration-rate `ppm/yr`; temperature-rate `K/yr`; count `count`; ratio `ratio` (2 = twice);
+ * concentration-rate `ppm/yr`; temperature-rate `K/yr`; length-rate `m/yr` (a sea-level
+ * rise in mm a year); duration-per-length `yr/m` (the years one metre of ice holds); count `count`; ratio `ratio` (2 = twice);
  * percent `%` (a bare percentage not converted to anything else).
  */
 export const DIMENSIONS = [
@@ -96,6 +97,8 @@ export const DIMENSIONS = [
   'length',
   'concentration-rate',
   'temperature-rate',
+  'length-rate',
+  'duration-per-length',
   'count',
   'ratio',
   'percent',

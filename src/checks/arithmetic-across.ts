@@ -12,7 +12,7 @@
 import { writtenInterval as w } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
 import { divide, invert, type Derived } from './arithmetic-derive.js';
-import { findPairs } from './arithmetic-frames.js';
+import { findPairs, isPaceRatio, timesTheMeasure } from './arithmetic-frames.js';
 import type { Previous } from './arithmetic-context.js';
 import { spanOfDates } from './arithmetic-spans.js';
 
@@ -33,9 +33,7 @@ const OPENS_BY_REFERRING = new RegExp(
 /** Words just before a duration that make it the length of something ("lasted", "a transition of", "spread over"). */
 const SPAN_WORDS = new RegExp(String.raw`(?:^|[^\p{L}])(?:lasted|lasting|lasts|took|taking|spans|spanned|spanning|span${S}+of|over|across|within|of|for)${S}*$`, 'iu');
 const NOT_A_SPAN = new RegExp(String.raw`(?:^|[^\p{L}])(?:past|last|previous|next|every|each|per|after|before)${S}*$`, 'iu');
-/** "some 19 times faster", "ten times slower": a ratio of paces. */
-const PACE_AFTER = new RegExp(String.raw`^${S}*(?:faster|slower|quicker|more${S}+(?:quickly|rapidly|rapid)|as${S}+fast)(?![\p{L}])`, 'iu');
-const RATES = new Set(['concentration-rate', 'temperature-rate']);
+const RATES = new Set(['concentration-rate', 'temperature-rate', 'length-rate']);
 const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
 
 /** "That is a transition of roughly 3,000 years": a duration restating the span of the sentence before. */
@@ -53,7 +51,7 @@ export function durationsAcross(text: string, qs: Quantity[], previous: Previous
 /** "Today's 2.4 ppm a year is some 19 times faster": this rate over the one rate of the sentence before. */
 export function paceRatiosAcross(text: string, qs: Quantity[], previous: Previous | undefined): AcrossFinding[] {
   if (previous === undefined) return [];
-  const stated = only(qs.filter((q) => q.dimension === 'ratio' && PACE_AFTER.test(text.slice(q.end, q.end + 24))));
+  const stated = only(qs.filter((q) => isPaceRatio(text, q) || (timesTheMeasure(text, q) && !qs.some((r) => r.start > q.end && RATES.has(r.dimension)))));
   const now = only(qs.filter((q) => RATES.has(q.dimension)));
   if (stated === undefined || now === undefined || now.start > stated.start) return [];
   const then = only(previous.quantities.filter((q) => q.dimension === now.dimension));

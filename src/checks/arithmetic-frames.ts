@@ -21,24 +21,30 @@ const START_WORDS = list(['began', 'begun', 'begins', 'started', 'starts', 'set 
 const START_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:${START_WORDS})(?:${S}+[\p{L}'’-]+){0,7}${S}*$`, 'iu');
 const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at|by)${S}*$`, 'iu');
 const CHANGE_NOUNS = ['rise', 'increase', 'drop', 'fall', 'decline', 'change', 'jump', 'gain', 'loss', 'swing', 'difference', 'warming', 'cooling', 'growth', 'decrease', 'reduction', 'climb', 'leap', 'surge', 'plunge', 'slide'];
-const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
+const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'sank', 'sunk', 'thinned', 'thickened', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
 const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
 const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down', 'added', 'extra']);
-const SPAN_OF_PAIR = before(['lasting', 'lasted', 'lasts', 'spanning', 'spanned', 'spans', 'span of', 'period of', 'interval of', 'stretch of', 'over', 'across', 'within', 'took', 'taking', 'during', 'for', 'or', 'that is', 'i.e.', 'i.e.,', '(', '—']);
+const SPAN_OF_PAIR = before(['lasting', 'lasted', 'lasts', 'spanning', 'spanned', 'spans', 'span of', 'period of', 'interval of', 'stretch of', 'over', 'across', 'within', 'took', 'taking', 'during', 'for', 'or', 'that is', 'i.e.', 'i.e.,', '(', '—', 'lay', 'lie', 'passed', 'elapsed', 'went by']);
 const SPAN_OF_CHANGE = before(['lasting', 'spanning', 'span of', 'period of', 'over', 'across', 'within', 'in', 'took', 'taking', 'during', 'for', 'after', '(', 'over the', 'across the', 'within the', 'during the']);
 /** Words that equate an amount with the rate it comes to ("80 ppm of CO2 would be 1.3 ppm per century"). */
 const COMES_TO = new RegExp(String.raw`^[^;:.!?,]{0,30}?(?:^|[^\p{L}])(?:would${S}+be|comes${S}+to|come${S}+to|works${S}+out${S}+(?:at|to)|work${S}+out${S}+(?:at|to)|amounts${S}+to|translates${S}+(?:in)?to|is${S}+equivalent${S}+to|equals)${S}*$`, 'iu');
+/** Words that lead a restatement of the span just given ("so that's", "which comes to", "in all"). */
+const SPAN_LEADS = ['or', 'that is', "that's", 'that’s', 'i.e.', 'so', 'thus', 'hence', 'so call it', 'call it', 'in all', 'all told', 'which is', 'which comes to', 'which makes', 'which makes it', 'that comes to', 'that makes', 'making', 'giving', 'which means'];
+/** Words that may stand between the lead and the figure without a hedge's meaning ("a span of only 700 years", "a good 6,000 years"). */
+const SPAN_FILLERS = ['only', 'just', 'barely', 'merely', 'a mere', 'a good', 'a full', 'fully', 'all of'];
 /**
- * Between the end date and a duration that restates the span: a comma, colon, semicolon, bracket or
- * dash, then perhaps "or", "that is", and a short noun phrase ending in "of" ("a cold spell of").
+ * Between the end date and a duration that restates the span: a comma, colon, semicolon, bracket,
+ * dash or spaced hyphen, then perhaps up to two lead words ("so that's"), a short noun phrase ending
+ * in "of" ("a cold spell of") and a filler ("only"). An adjectival figure may take its article
+ * alone: ", a 3,000-year thaw" (see isSpanOfPair).
  */
 const PAIR_GAP = new RegExp(
-  String.raw`^${S}*[,:;(—–]${S}*(?:(?:or|that is|i\.e\.|so|thus|hence|so${S}+call${S}+it|call${S}+it|in${S}+all|all${S}+told)[,\s\u00A0]+)?(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+)?$`,
+  String.raw`^${S}*(?:[,:;(—–]|${S}-)${S}*(?:(?:${list(SPAN_LEADS)})(?![\p{L}])[,\s\u00A0]+){0,2}(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+)?(?:(?:${list(SPAN_FILLERS)})${S}+)?$`,
   'iu',
 );
 const NOT_A_SPAN = before(['past', 'last', 'previous', 'preceding', 'next', 'every', 'each', 'per']);
 const RATIO_AFTER = after([...CHANGE_NOUNS, 'faster', 'slower', 'quicker', 'higher', 'larger', 'greater', 'more', 'lower', 'less', 'smaller', 'above', 'below', 'as high', 'as large', 'as much', 'as great', 'as long']);
-const RATIO_VERB = /^(?:doubled|tripled|quadrupled|halved|doubling|tripling|halving|[\p{N}.]+[-\s]?fold|\p{L}+[-\s]?fold)$/iu;
+const RATIO_VERB = /^(?:doubled|tripled|quadrupled|halved|doubling|tripling|halving|doubles|triples|quadruples|halves|[\p{N}.]+[-\s]?fold|\p{L}+[-\s]?fold)$/iu;
 /** "higher than", "more CO2 than", "above": a comparison, with up to three words before "than". */
 const COMPARATIVE_AFTER = new RegExp(String.raw`^[\s\u00A0-]*(?:(?:higher|more|greater|larger|lower|less|smaller|faster|slower|quicker)(?:${S}+[^\s.;,]+){0,3}${S}+than|above|below)(?![\p{L}])`, 'iu');
 
@@ -63,7 +69,7 @@ export function findPairs(text: string, qs: Quantity[]): Pair[] {
     const to = toEnd(text, qs, i);
     if (to !== undefined && FROM.test(head(text, a))) pairs.push({ from: i, to });
     else {
-      const end = startEnd(text, qs, i);
+      const end = startEnd(text, qs, i) ?? datesBetween(text, qs, i) ?? endOfTwoDates(text, qs, i);
       if (end !== undefined) pairs.push({ from: i, to: end });
     }
   }
@@ -97,9 +103,35 @@ function startEnd(text: string, qs: Quantity[], i: number): number | undefined {
   return END_CUE.test(between) && !/[.!?]/u.test(between) && between.length <= 80 ? j : undefined;
 }
 
+/** "Between [the last glacial peak, some] A[, and the start of our warm era] B": words before "between" and "and". */
+const BETWEEN_HEAD = new RegExp(String.raw`(?:^|[^\p{L}])between(?:${S}+[^\d;:.!?]{0,40})?${S}*$`, 'iu');
+const AND_GAP = new RegExp(String.raw`^[^\d;:.!?]{0,60}?(?:^|[^\p{L}])and(?![\p{L}])[^\d;:.!?]{0,60}$`, 'iu');
+
+/** The index of B in "between ... A ... and ... B" when A and B are the next two dates, or undefined. */
+function datesBetween(text: string, qs: Quantity[], i: number): number | undefined {
+  const a = qs[i] as Quantity;
+  const b = qs[i + 1];
+  if (a.dimension !== 'age' || b?.dimension !== 'age') return undefined;
+  return BETWEEN_HEAD.test(head(text, a)) && AND_GAP.test(text.slice(a.end, b.start)) ? i + 1 : undefined;
+}
+
+/**
+ * The index of B when a sentence names exactly two dates and the second ends something ("the
+ * coldest point was 20,000 years ago, and the thaw was over by 11,700 years ago"), or undefined.
+ */
+function endOfTwoDates(text: string, qs: Quantity[], i: number): number | undefined {
+  const a = qs[i] as Quantity;
+  const b = qs[i + 1];
+  if (a.dimension !== 'age' || b?.dimension !== 'age' || qs.filter((q) => q.dimension === 'age').length !== 2) return undefined;
+  const between = text.slice(a.end, b.start);
+  return END_CUE.test(between) && /(?:^|[^\p{L}])and(?![\p{L}])/iu.test(between) && !/[.!?;]/u.test(between) && between.length <= 80 ? i + 1 : undefined;
+}
+
 /** True when `q` is stated as a change ("by 100 ppm", "a rise of 5 °C", "5 °C warmer"). */
 export function isStatedChange(text: string, q: Quantity): boolean {
-  return CHANGE_BEFORE.test(head(text, q)) || CHANGE_AFTER.test(tail(text, q)) || /^[+−-]/.test(q.text);
+  // "an increase of barely 50", "a rise of only 40 ppm": a filler between the change word and the figure.
+  const before = head(text, q).replace(/(?:^|[^\p{L}])(?:only|just|barely|merely|a[\s\u00A0]+mere)[\s\u00A0]*$/iu, (m) => m.slice(0, m.length - m.trimStart().length) + ' ');
+  return CHANGE_BEFORE.test(before) || CHANGE_AFTER.test(tail(text, q)) || /^[+−-]/.test(q.text);
 }
 
 /** True when `amount` is equated with `rate` just after it: "the same 80 ppm would be 5 ppm per century". */
@@ -110,7 +142,10 @@ export function comesToRate(text: string, amount: Quantity, rate: Quantity): boo
 /** True when duration `q` states the span of a from-to pair of dates (pair ending at `pairEnd`). */
 export function isSpanOfPair(text: string, q: Quantity, pairEnd: number): boolean {
   if (NOT_A_SPAN.test(head(text, q))) return false;
-  return SPAN_OF_PAIR.test(head(text, q)) || PAIR_GAP.test(text.slice(pairEnd, q.start));
+  let gap = text.slice(pairEnd, q.start);
+  // ", a 3,000-year thaw": an adjectival figure keeps its article.
+  if (/\d-(?:years?|yr)$/iu.test(q.text)) gap = gap.replace(/(?:^|[^\p{L}])an?[\s\u00A0]+$/iu, (m) => m.slice(0, m.length - m.trimStart().length));
+  return SPAN_OF_PAIR.test(head(text, q)) || PAIR_GAP.test(gap);
 }
 
 /** True when duration `q` states how long a change took ("in 8,000 years", "over a century"). */
@@ -127,6 +162,22 @@ export function isStatedRatio(text: string, q: Quantity): boolean {
 /** True when `q` is followed by a comparison ("55 percent higher than", "twice as large as"). */
 export function comparesToNext(text: string, q: Quantity): boolean {
   return COMPARATIVE_AFTER.test(tail(text, q)) || /^[\s\u00A0]+as[\s\u00A0]+\p{L}+[\s\u00A0]+as(?![\p{L}])/iu.test(tail(text, q));
+}
+
+/** Nouns for the measure a multiple is taken of: "20 times the average deglacial rate", "twice the glacial level". */
+const MEASURE_NOUNS = ['rate', 'pace', 'speed', 'average', 'tempo', 'level', 'value', 'figure', 'amount', 'concentration'];
+const TIMES_THE = new RegExp(String.raw`^${S}+(?:the|that|its|their)${S}+(?:[\p{L}-]+${S}+){0,3}?(?:${list(MEASURE_NOUNS)})(?![\p{L}])`, 'iu');
+/** "faster", "slower", "more quickly": a multiple of a pace with nothing after it. */
+const PACE_AFTER = new RegExp(String.raw`^${S}*(?:faster|slower|quicker|more${S}+(?:quickly|rapidly|rapid)|as${S}+fast)(?![\p{L}])`, 'iu');
+
+/** True when ratio `q` is a multiple of a measure named after it ("20 times the deglacial rate of ..."). */
+export function timesTheMeasure(text: string, q: Quantity): boolean {
+  return q.dimension === 'ratio' && TIMES_THE.test(tail(text, q));
+}
+
+/** True when ratio `q` says how much faster or slower one pace is ("about 20x faster"). */
+export function isPaceRatio(text: string, q: Quantity): boolean {
+  return q.dimension === 'ratio' && PACE_AFTER.test(text.slice(q.end, q.end + 24));
 }
 
 /** "[76 ppm] over [6,000 years]": an amount followed at once by the time it took is a change. */

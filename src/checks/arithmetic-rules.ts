@@ -11,7 +11,9 @@ import { divide, facing, invert, minus, percentChange, size, type Derived } from
 import { spanOfDates } from './arithmetic-spans.js';
 import { durationsAcross, paceRatiosAcross } from './arithmetic-across.js';
 import { writtenSums } from './arithmetic-equations.js';
-import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, type Pair } from './arithmetic-frames.js';
+import { perLength } from './arithmetic-per-length.js';
+import { changeShares } from './arithmetic-shares.js';
+import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
 export interface Finding {
@@ -35,8 +37,8 @@ const DIFFERENCE: Partial<Record<Dimension, Dimension>> = {
   concentration: 'concentration', temperature: 'temperature-change', 'temperature-change': 'temperature-change',
   length: 'length', duration: 'duration', count: 'count', number: 'number',
 };
-const RATE_OF: Partial<Record<Dimension, Dimension>> = { 'concentration-rate': 'concentration', 'temperature-rate': 'temperature-change' };
-const RATIOED: Dimension[] = ['concentration', 'temperature-change', 'length', 'duration', 'count', 'concentration-rate', 'temperature-rate'];
+const RATE_OF: Partial<Record<Dimension, Dimension>> = { 'concentration-rate': 'concentration', 'temperature-rate': 'temperature-change', 'length-rate': 'length' };
+const RATIOED: Dimension[] = ['concentration', 'temperature-change', 'length', 'duration', 'count', 'concentration-rate', 'temperature-rate', 'length-rate'];
 
 const ends = (qs: Quantity[], p: Pair): [Quantity, Quantity] => [qs[p.from] as Quantity, qs[p.to] as Quantity];
 const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
@@ -68,10 +70,22 @@ function apposedChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] 
   });
 }
 
+/**
+ * True when `q` can be set against the ends `a`, `b` of a pair of `dimension`: of the change's
+ * dimension, or a bare number beside ends in a unit whose numbers are canonical as written ("from
+ * 180 to 280 ppm, an increase of barely 50"), or the other way round ("a jump of 110 ppm, from 190
+ * up to 280"): the writer left the unit off one side.
+ */
+function sameChangeUnit(q: Quantity, a: Quantity, b: Quantity): boolean {
+  const asWritten = (x: Quantity): boolean => x.statedUnit !== '' && x.unit === x.statedUnit.replace(/^degC$/u, 'K');
+  if (a.dimension === 'number' && b.dimension === 'number') return q.dimension !== 'number' && q.dimension !== 'age' && q.dimension !== 'duration' && asWritten(q);
+  return q.dimension === DIFFERENCE[a.dimension] || (q.dimension === 'number' && a.dimension !== 'age' && a.dimension !== 'duration' && asWritten(b));
+}
+
 function pairChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return pairs.flatMap((p) => {
     const [a, b] = ends(qs, p);
-    const stated = only(others(qs, p).filter((q) => q.dimension === DIFFERENCE[a.dimension] && isStatedChange(text, q)));
+    const stated = only(others(qs, p).filter((q) => sameChangeUnit(q, a, b) && isStatedChange(text, q)));
     if (stated === undefined) return [];
     return [{ stated, computed: facing(minus(w(b), w(a)), stated.value), measures: `the change ${words(a, b)}` }];
   });
@@ -108,7 +122,8 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
     const after = qs.slice(i + 1).find((q) => RATIOED.includes(q.dimension));
     const fraction = after !== undefined && fractionOf(text, stated, after);
     const isPercent = stated.dimension === 'percent' && (isStatedChange(text, stated) || comparesToNext(text, stated));
-    const isRatio = stated.dimension === 'ratio' && (isStatedRatio(text, stated) || comparesToNext(text, stated) || fraction);
+    const multiple = timesTheMeasure(text, stated);
+    const isRatio = stated.dimension === 'ratio' && (isStatedRatio(text, stated) || comparesToNext(text, stated) || fraction || multiple);
     if (!isPercent && !isRatio) return [];
     let pairRatio: Derived | undefined;
     let measures: string;
@@ -117,10 +132,10 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
       pairRatio = divide(w(b), w(a));
       measures = `${isPercent ? 'the percentage change' : 'the ratio'} ${words(a, b)}`;
     } else if (after === undefined) {
-      return isPercent ? percentOfBase(text, qs, stated) : [];
+      return isPercent ? percentOfBase(text, qs, stated) : paceOfTwo(text, qs, stated);
     } else {
       const x = only(qs.filter((q) => q !== after && q !== stated && q.dimension === after.dimension));
-      if (x === undefined || !(comparesToNext(text, stated) || fraction)) return [];
+      if (x === undefined || !(comparesToNext(text, stated) || fraction || multiple)) return [];
       pairRatio = divide(w(x), w(after));
       measures = `${isPercent ? 'the percentage difference' : 'the ratio'} of ${x.text} to ${after.text}`;
     }
@@ -129,6 +144,28 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
     const r = (stated.value < 1) === (pairRatio.value < 1) ? pairRatio : invert(pairRatio);
     return [{ stated, computed: r, measures }];
   });
+}
+
+const PACES: Dimension[] = ['concentration-rate', 'temperature-rate', 'length-rate'];
+
+/**
+ * "~2.4 ppm/yr now vs ~0.012 ppm/yr in the deglaciation, so we're going about 20x faster": a pace
+ * ratio after exactly two rates of one dimension is the faster over the slower; a ratio verb
+ * ("doubles", "triples") after exactly two figures of one unit is their ratio.
+ */
+function paceOfTwo(text: string, qs: Quantity[], stated: Quantity): Finding[] {
+  // "about 1,200 years in the Holocene and about 2,400 years at the glacial maximum, so the offset
+  // roughly triples": a ratio verb after exactly two figures of one dimension and unit is their ratio.
+  const verb = isStatedRatio(text, stated) && !isPaceRatio(text, stated);
+  const kinds = verb ? RATIOED : PACES;
+  if (!verb && !isPaceRatio(text, stated)) return [];
+  const before = qs.filter((q) => q.end <= stated.start && kinds.includes(q.dimension));
+  if (before.length !== 2 || qs.some((q) => q.start > stated.end && kinds.includes(q.dimension))) return [];
+  const [a, b] = before as [Quantity, Quantity];
+  if (a.dimension !== b.dimension || (verb && a.statedUnit !== b.statedUnit)) return [];
+  const r = divide(w(a), w(b));
+  if (r === undefined) return [];
+  return [{ stated, computed: (stated.value < 1) === (r.value < 1) ? r : invert(r), measures: `the ratio of ${a.text} to ${b.text}` }];
 }
 
 /**
@@ -152,8 +189,11 @@ function percentOfBase(text: string, qs: Quantity[], stated: Quantity): Finding[
 export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: (t, qs, p, prev) => [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)] },
   { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => [...durations(t, qs, p), ...durationsAcross(t, qs, prev)] },
-  { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took.', derive: rates },
-  { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev) => [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)] },
+  { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev) => [...rates(t, qs, p), ...perLength(t, qs, prev)] },
+  { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev) => {
+    const found = [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)];
+    return [...found, ...changeShares(t, qs, p).filter((f) => !found.some((g) => g.stated === f.stated))];
+  } },
 ];
 
 export { findPairs };

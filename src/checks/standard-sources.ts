@@ -81,5 +81,13 @@ export const YAN_2019: Source = {
   how: 'verified: https://collaborate.princeton.edu/en/publications/two-million-year-old-snapshots-of-atmospheric-gases-from-antarcti; verified: Discover magazine report of the 2017 Goldschmidt announcement: https://www.discovermagazine.com/ancient-antarctic-ice-discovered-18047',
 };
 
+/** The orbital periods of the ice ages: near 100,000, 41,000-43,000, 23,000 and 19,000 years. The same entry as the built-in pack's `hays-1976`. */
+export const HAYS_1976: Source = {
+  id: 'hays-1976',
+  cite: 'Hays, J. D., Imbrie, J. & Shackleton, N. J. (1976). Variations in the Earth\'s orbit: pacemaker of the ice ages. Science 194, 1121-1132.',
+  doi: '10.1126/science.194.4270.1121',
+  how: 'read in the source: spectral peaks at 42,000-43,000, 24,000 and 19,500 years and near 100,000 years (DOI from memory)',
+};
+
 /** Every standard source, by id, for reporters and `firnline explain`. */
-export const STANDARD_SOURCES: readonly Source[] = [NIST_SP_811, BP_CONVENTION, B2K_CONVENTION, LUTHI_2008, NOAA_2024, CLARK_2009, YAN_2019];
+export const STANDARD_SOURCES: readonly Source[] = [NIST_SP_811, BP_CONVENTION, B2K_CONVENTION, LUTHI_2008, NOAA_2024, CLARK_2009, YAN_2019, HAYS_1976];

@@ -35,6 +35,7 @@ const GAS = /(?<co2>CO2|CO₂|carbon[\s\u00A0]+dioxide)|methane|CH4|CH₄|nitrou
 const OTHER_GAS = /(?:methane|CH4|CH₄|nitrous|N2O|N₂O)/iu;
 const AIR = String.raw`(?:the${S}+|today's${S}+|today’s${S}+|Earth's${S}+|Earth’s${S}+|dry${S}+)?(?:air|atmosphere)`;
 const SHARE_AFTER = new RegExp(String.raw`^${S}*(?:of${S}+${AIR}|by${S}+volume)`, 'iu');
+const GAS_AFTER = new RegExp(String.raw`^${S}*(?:of${S}+)?(?:CO2|CO₂|carbon${S}+dioxide)(?![\p{L}\d])`, 'iu');
 const OF_SOMETHING_ELSE = new RegExp(String.raw`^${S}*of(?!${S}+${AIR})(?![\p{L}])`, 'iu');
 /**
  * A change named as the subject ("the rise in CO2 ... at 47 percent", "the growth of carbon dioxide
@@ -74,6 +75,8 @@ function isCo2Share(text: string, q: Quantity, byContext = false): boolean {
   const after = text.slice(q.end, q.end + 40);
   if (isStatedChange(text, q) || comparesToNext(text, q) || RATE_AFTER.test(after) || OF_SOMETHING_ELSE.test(after)) return false;
   if (SHARE_AFTER.test(after)) return nearestGasIsCo2(text, q.start, byContext);
+  // "the air holds about 0.42 percent carbon dioxide": the gas named right after the share.
+  if (GAS_AFTER.test(after)) return LEVEL_BEFORE.test(before) && !CHANGE_SUBJECT.test(text.slice(0, q.start));
   return nearestGasIsCo2(text, q.start, byContext) && LEVEL_BEFORE.test(before) && !CHANGE_SUBJECT.test(text.slice(0, q.start));
 }
 

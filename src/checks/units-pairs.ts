@@ -11,11 +11,13 @@
  * the conversion of its °C or K partner, whichever comes first.
  */
 import { CHANGE_SUBJECT_NOUNS, RESTATING_VERB_PATTERN } from '../quantities/reading-cues.js';
+import { fromCanonical, toCanonical } from '../quantities/convert.js';
+import { CANONICAL_UNIT } from '../quantities/unit-table.js';
 import type { Quantity } from '../types.js';
 
 const S = String.raw`[\s\u00A0]`;
 const JOINER = new RegExp(
-  String.raw`^${S}*(?:\(|\[|,?${S}*or${S}+|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|=${S}*|\/${S}*|,?${S}*equivalent to${S}+|,?${S}*which is${S}+|,${S}*|—${S}*)$`,
+  String.raw`^${S}*(?:\(|\[|,?${S}*or${S}+|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|=${S}*|\/${S}*|,?${S}*equivalent to${S}+|,?${S}*which is${S}+|,?${S}*(?:aka|a\.k\.a\.)${S}+|,${S}*so${S}+|,${S}*|—${S}*)$`,
   'iu',
 );
 /** Words that end a loose gap and announce the same amount again ("which readers would call"). */
@@ -26,7 +28,7 @@ const LOOSE_GAP = /^[^;:!?]{0,60}$/u;
 /** Words after a percentage that make it a relative change ("50 percent above", "30 percent higher"). */
 const RELATIVE_AFTER = new RegExp(String.raw`^${S}*(?:above|below|higher|lower|more|less|greater|smaller|up|down|increase|rise|drop|fall|over|under)(?![\p{L}])`, 'iu');
 /** A copula alone between two amounts in different units: "420 ppm is 0.042 percent". */
-const COPULA_GAP = new RegExp(String.raw`^${S}+(?:is|was|are|were|equals|makes${S}+up|made${S}+up)(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}+$`, 'iu');
+const COPULA_GAP = new RegExp(String.raw`^,?${S}+(?:is|was|are|were|equals|makes${S}+up|made${S}+up)(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}+$`, 'iu');
 /** A sentence that opens by restating: "That is 11,650 years BP", "On the BP scale, that's ...". */
 const OPENING = /^[^;!?]{0,80}$/u;
 
@@ -38,6 +40,9 @@ const OPENING = /^[^;!?]{0,80}$/u;
  */
 const scaleOf = (q: Quantity): string => /(?:thousand|million|billion|trillion)/iu.exec(q.text)?.[0].toLowerCase() ?? '';
 const SCALE_JOINER = new RegExp(String.raw`^(?:${S}+(?:old|long))?${S}*(?:\(|\[|,?${S}*or${S}+|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|=${S}*)$`, 'iu');
+
+/** "are roughly 50 percent higher": a percentage that is a relative change, not the amount again. */
+const relativeChange = (text: string, q: Quantity): boolean => q.dimension === 'percent' && RELATIVE_AFTER.test(text.slice(q.end));
 
 /** A quantity and its restatement in another unit; `loose` when words stand between them. */
 export interface Restatement {
@@ -79,6 +84,18 @@ function restatesModifier(text: string, first: Quantity, gap: string, second: Qu
   return MODIFIER.test(first.text) && text[first.end] !== '-' && MODIFIER_GAP.test(gap) && MEASURE_AFTER.test(text.slice(second.end));
 }
 
+/** A short gap in one clause ending in a copula or a restatement word: "global warm-up is", ", or". */
+const READING_AS_CHANGE_GAP = new RegExp(String.raw`^[^;:.!?\d]{0,40}?(?:(?:^|[^\p{L}])(?:is|was|are|were|equals|or|that is|which is|that's|that’s)|${RESTATING_VERB_PATTERN})(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}*$`, 'iu');
+
+/** Words that open another clause, whose reading is its own: "... colder, and a summer day was 38 °F". */
+const NEW_CLAUSE = /(?:^|[^\p{L}])(?:and|but|while|whereas|when|where|though|although)(?![\p{L}])/iu;
+
+/** A temperature read as a reading, read again as a change of the same number of degrees. */
+function asChange(q: Quantity): Quantity {
+  const again = (x: number): number => toCanonical(fromCanonical(x, q.statedUnit, 'temperature'), q.statedUnit, 'temperature-change');
+  return { ...q, dimension: 'temperature-change', unit: CANONICAL_UNIT['temperature-change'], value: again(q.value), low: again(q.low), high: again(q.high) };
+}
+
 /** The °F side of a °C ↔ °F pair is the conversion; otherwise the second one is. */
 function ordered(a: Quantity, b: Quantity, loose: boolean): Restatement {
   return a.statedUnit === 'degF' && b.statedUnit !== 'degF' ? { first: b, second: a, loose } : { first: a, second: b, loose };
@@ -98,7 +115,7 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
     }
     if (JOINER.test(gap)) out.push(ordered(first, second, false));
     // "Today's 420 ppm is about 0.042 percent of the air": one amount, the copula, the same amount.
-    else if (COPULA_GAP.test(gap) && closeDates(first, second)) out.push(ordered(first, second, true));
+    else if (COPULA_GAP.test(gap) && closeDates(first, second) && !relativeChange(text, second)) out.push(ordered(first, second, true));
     else if (LOOSE_GAP.test(gap) && LOOSE_END.test(gap) && closeDates(first, second)) out.push(ordered(first, second, true));
     else if (restatesModifier(text, first, gap, second) && closeDates(first, second)) out.push(ordered(first, second, true));
   }
@@ -107,7 +124,13 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
   for (const q of qs) {
     if (q.statedUnit !== 'degF' || out.some((r) => r.first === q || r.second === q)) continue;
     const partner = qs.filter((p) => p.end <= q.start && (p.statedUnit === 'degC' || p.statedUnit === 'K')).at(-1);
-    if (partner !== undefined && sameThing(partner, q) && !qs.some((o) => o.start > partner.end && o.end <= q.start && o.statedUnit === 'degF')) out.push(ordered(partner, q, true));
+    if (partner === undefined || qs.some((o) => o.start > partner.end && o.end <= q.start && o.statedUnit === 'degF')) continue;
+    // "a 6 °C warm-up is about 38 °F": "is" made the °F figure a reading, but it restates a change.
+    // Only in one short clause that equates them ("is", "or", "which is"), never across a clause break.
+    const gap = text.slice(partner.end, q.start);
+    const equated = READING_AS_CHANGE_GAP.test(gap) && !NEW_CLAUSE.test(gap);
+    const same = sameThing(partner, q) ? q : partner.dimension === 'temperature-change' && q.dimension === 'temperature' && equated ? asChange(q) : undefined;
+    if (same !== undefined) out.push(ordered(partner, same, true));
   }
   const opening = previous === undefined ? undefined : acrossSentences(text, qs, previous, out);
   return opening === undefined ? out : [...out, opening];

@@ -125,7 +125,7 @@ export const UNIT_RULES: readonly UnitRule[] = [
   { id: 'unit.length', summary: 'A length restated in feet or miles converts at 1 ft = 0.3048 m and 1 mile = 1609.344 m.',
     find: restated(['length'], nist, () => '1 ft = 0.3048 m and 1 mile = 1609.344 m exactly.') },
   { id: 'unit.age-scale', summary: 'A date or span of the last glacial cycle or of an ice core written in millions of years where thousands were meant (Ma for ka, million for thousand).',
-    find: (text, qs) => scaleSlips(text, qs) },
+    find: (text, qs, previous) => scaleSlips(text, qs, previous?.text) },
   { id: 'unit.duration', summary: 'A duration restated in another unit (kyr, years, centuries) converts by powers of ten.',
     find: restated(['duration'], nist, () => '1 kyr = 1,000 years; 1 century = 100 years; 1 millennium = 1,000 years.') },
 ];

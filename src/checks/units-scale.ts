@@ -8,7 +8,7 @@
  * another record (a lake, rock, sediment, the ice sheet's birth) keep the rule quiet.
  */
 import type { Quantity, Source } from '../types.js';
-import { CLARK_2009, NIST_SP_811, YAN_2019 } from './standard-sources.js';
+import { CLARK_2009, HAYS_1976, NIST_SP_811, YAN_2019 } from './standard-sources.js';
 import type { UnitFinding } from './units-rules.js';
 
 /** A kind of subject with the oldest age or longest span it can have, in years. */
@@ -19,6 +19,8 @@ export interface TimescaleSubject {
   unless: string[];
   ceiling: number;
   sources: Source[];
+  /** When given, the figure counts only right after one of these words ("a cycle of", "every"). */
+  lead?: string[];
 }
 
 /** Periods before the ice ages and other records whose ages run to millions of years. */
@@ -44,12 +46,29 @@ export const TIMESCALE_SUBJECTS: readonly TimescaleSubject[] = [
     ceiling: 1e7,
     sources: [YAN_2019, NIST_SP_811],
   },
+  {
+    // The orbital cycles that pace the ice ages last about 19,000 to 100,000 years (Hays et al. 1976),
+    // the longest regular one about 405,000 years; none in this writing runs to ten million.
+    what: 'an orbital cycle of the ice ages',
+    names: ['tilt', 'axial tilt', 'obliquity', 'precession', 'eccentricity', 'orbital cycle', 'orbital cycles', 'Milankovitch', 'wobble', 'wobbles'],
+    // Only the length of the cycle itself: a figure after "a cycle of" or "every" is no rock's age,
+    // so "rocks" (also a verb: "the axis rocks") does not silence it; the named periods still do.
+    unless: DEEP_TIME.filter((w) => !['rock', 'rocks'].includes(w)),
+    lead: ['cycle of', 'cycles of', 'period of', 'periods of', 'every', 'repeats every', 'recurs every', 'rhythm of'],
+    ceiling: 1e7,
+    sources: [HAYS_1976, NIST_SP_811],
+  },
 ];
 
 const S = String.raw`[\s\u00A0]`;
 const words = (list: readonly string[]): RegExp =>
   new RegExp(String.raw`(?:^|[^\p{L}])(?:${list.map((w) => w.replace(/[.*+?^${}()|[\]\\]/g, '\\$&').replace(/ /g, `${S}+`)).join('|')})(?![\p{L}])`, 'iu');
-const COMPILED = TIMESCALE_SUBJECTS.map((s) => ({ subject: s, name: words(s.names), unless: words(s.unless) }));
+const COMPILED = TIMESCALE_SUBJECTS.map((s) => ({
+  subject: s,
+  name: words(s.names),
+  unless: words(s.unless),
+  lead: s.lead === undefined ? undefined : new RegExp(String.raw`(?:^|[^\p{L}])(?:${s.lead.map((w) => w.replace(/ /g, `${S}+`)).join('|')})${S}+(?:(?:about|around|roughly|some|nearly)${S}+)?$`, 'iu'),
+}));
 /** The scale word of a figure in millions, and the word for the same number in thousands. */
 const SWAPS: [RegExp, string][] = [
   [/million/iu, 'thousand'],
@@ -60,14 +79,24 @@ const SWAPS: [RegExp, string][] = [
 /** How far before the figure its subject may be named. */
 const REACH = 120;
 
-/** Every figure in millions of years above the ceiling of the subject named before it. */
-export function scaleSlips(text: string, qs: Quantity[]): UnitFinding[] {
+/** Words that refer back to the subject of the sentence before: "That core's record", "This cylinder", "Imagine it". */
+const REFERS_BACK = /(?:^|[^\p{L}])(?:this|that|these|those|it|its|their|there)(?![\p{L}])/iu;
+
+/**
+ * Every figure in millions of years above the ceiling of the subject named before it. A sentence
+ * that names no subject but refers back ("That core's record reaches back 800 Ma") takes the
+ * subject of `previous`, the sentence before.
+ */
+export function scaleSlips(text: string, qs: Quantity[], previous?: string): UnitFinding[] {
   return qs.flatMap((q) => {
     if ((q.dimension !== 'age' && q.dimension !== 'duration') || q.value <= 0) return [];
     const swap = SWAPS.find(([re]) => re.test(q.text));
     if (swap === undefined) return [];
-    const before = text.slice(Math.max(0, q.start - REACH), q.start);
-    const hit = COMPILED.find(({ subject, name, unless }) => q.low > subject.ceiling && name.test(before) && !unless.test(text));
+    const own = text.slice(Math.max(0, q.start - REACH), q.start);
+    const named = COMPILED.some(({ name }) => name.test(text));
+    const before = !named && previous !== undefined && REFERS_BACK.test(own) ? previous : own;
+    const led = (lead: RegExp | undefined): boolean => lead === undefined || lead.test(text.slice(Math.max(0, q.start - 40), q.start));
+    const hit = COMPILED.find(({ subject, name, unless, lead }) => q.low > subject.ceiling && name.test(before) && !unless.test(text) && !unless.test(before) && led(lead));
     if (hit === undefined) return [];
     const correction = q.text.replace(swap[0], swap[1]);
     const k = 1e-3;

@@ -7,7 +7,8 @@ import type { Atom } from './find-atoms.js';
 import { halfPlace } from './precision.js';
 
 const SMALL: Record<string, number> = {
-  two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, twenty: 20, hundred: 100, thousand: 1000,
+  two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, twenty: 20, thirty: 30, forty: 40, fifty: 50,
+  hundred: 100, thousand: 1000,
 };
 const VERBS: [RegExp, number][] = [
   [/^(?:twice|double[sd]?|doubling)$/i, 2],
@@ -21,8 +22,9 @@ const SMALL_WORDS = Object.keys(SMALL).join('|');
 
 const VERB = /(?<![\p{L}])(?:twice|thrice|double[sd]?|doubling|triple[sd]?|tripling|quadruple[sd]?|quadrupling|halved|halves|halving|halve)(?![\p{L}])/giu;
 const FOLD = new RegExp(String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS}))[-\s]?fold(?![\p{L}])`, 'giu');
+// "20 times", "twenty-odd times", "20x faster", "20× the pace" ("-odd" and "x" read as the number written).
 const TIMES = new RegExp(
-  String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS}))[\s\u00A0]+times(?=[\s\u00A0]+(?:as|more|higher|greater|larger|bigger|lower|smaller|less|faster|slower|longer|shorter|that|the|what|its|their|above|below|over)(?![\p{L}]))`,
+  String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS})(?:-odd)?)(?:[\s\u00A0]+times|[\s\u00A0]?[x×])(?=[\s\u00A0]+(?:as|more|higher|greater|larger|bigger|lower|smaller|less|faster|slower|longer|shorter|that|the|what|its|their|above|below|over)(?![\p{L}]))`,
   'giu',
 );
 const FRACTION = /(?<![\p{L}])(?:(?<count>a|one|two|three|four)[\s\u00A0-]+(?<part>half|third|quarter|fifth|tenth|thirds|quarters|fifths|tenths)|(?<half>half))(?![\p{L}])/giu;
@@ -39,6 +41,9 @@ function numberAtom(m: RegExpExecArray): Atom {
   const d = m.groups?.['d'];
   const end = m.index + m[0].length;
   if (d !== undefined) return atom(m.index, end, Number(d), halfPlace(d), 'precision');
+  // "twenty-odd": twenty and some more, below thirty (read by the precision row as 25 ± 5).
+  const word = SMALL[(m.groups?.['w'] ?? '').toLowerCase()] ?? Number.NaN;
+  if (/-odd/iu.test(m[0])) return atom(m.index, end, word * 1.25, word / 4, 'precision');
   return atom(m.index, end, SMALL[(m.groups?.['w'] ?? '').toLowerCase()] ?? Number.NaN, 0, 'multiplier-word');
 }
 

@@ -16,8 +16,8 @@ export interface Cue {
 
 /** Temperature cues, tried in order; the first that matches decides. */
 export const TEMPERATURE_CUES: readonly Cue[] = [
-  { reading: 'temperature-change', where: 'after', words: ['warmer', 'cooler', 'colder', 'hotter', 'higher', 'lower', 'rise', 'increase', 'drop', 'fall', 'decline', 'change', 'shift', 'difference', 'swing', 'warming', 'cooling', 'anomaly', 'above', 'below', 'more', 'less', 'of warming', 'of cooling', 'amplitude'] },
-  { reading: 'temperature-change', where: 'before', words: ['by', 'warmed', 'cooled', 'rose', 'fell', 'dropped', 'climbed', 'increased', 'decreased', 'changed', 'rise of', 'drop of', 'fall of', 'change of', 'increase of', 'decrease of', 'swing of', 'difference of', 'warming of', 'cooling of', 'anomaly of', 'amplitude of', 'shift of', 'a', 'an'] },
+  { reading: 'temperature-change', where: 'after', words: ['warmer', 'cooler', 'colder', 'hotter', 'higher', 'lower', 'rise', 'increase', 'drop', 'fall', 'decline', 'change', 'shift', 'difference', 'swing', 'warming', 'cooling', 'anomaly', 'above', 'below', 'more', 'less', 'of warming', 'of cooling', 'amplitude', 'warm-up', 'warmup', 'cool-down', 'jump', 'leap'] },
+  { reading: 'temperature-change', where: 'before', words: ['by', 'warmed', 'cooled', 'rose', 'fell', 'dropped', 'climbed', 'increased', 'decreased', 'changed', 'rise of', 'drop of', 'fall of', 'change of', 'increase of', 'decrease of', 'swing of', 'difference of', 'warming of', 'cooling of', 'anomaly of', 'amplitude of', 'shift of', 'jump of', 'leap of', 'climb of', 'plunge of', 'warm-up of', 'a', 'an'] },
   { reading: 'temperature', where: 'before', words: ['was', 'were', 'is', 'are', 'at', 'reach', 'reaches', 'reached', 'hit', 'hits', 'averaged', 'averages', 'stood at', 'of', 'to', 'from', 'between', 'minus', 'reads', 'read', 'registered', 'recorded'] },
 ];
 
@@ -42,7 +42,7 @@ export function namesChangeBefore(clause: string): boolean {
  * Words that say the next amount is the one before in other words, when a verb does it: "which
  * works out at", "equals", "corresponds to". A change noun may follow: "equals a warming of".
  */
-export const RESTATING_VERBS: readonly string[] = ['works out at', 'works out to', 'work out at', 'work out to', 'comes to', 'come to', 'amounts to', 'amount to', 'corresponds to', 'correspond to', 'equals', 'equal to', 'is equal to', 'is the same as', 'the same as', 'translates to', 'translates into'];
+export const RESTATING_VERBS: readonly string[] = ['write as', 'written as', 'expressed as', 'works out at', 'works out to', 'work out at', 'work out to', 'comes to', 'come to', 'amounts to', 'amount to', 'corresponds to', 'correspond to', 'equals', 'equal to', 'is equal to', 'is the same as', 'the same as', 'translates to', 'translates into'];
 /** The restating verbs as one pattern, with an optional "a warming of" after them. */
 export const RESTATING_VERB_PATTERN = String.raw`(?:${[...RESTATING_VERBS].sort((a, b) => b.length - a.length).map((w) => w.replace(/ /g, String.raw`[\s\u00A0]+`)).join('|')})(?:[\s\u00A0]+(?:a|an)[\s\u00A0]+(?:${CHANGE_SUBJECT_NOUNS.join('|')}|reading|temperature|date|level|depth)[\s\u00A0]+of)?`;
 

@@ -76,6 +76,7 @@ const BASE_UNITS: UnitDef[] = [
   u('m', 'length', 1, 'm', ['m', words('(?:metres?|meters?)')]),
   u('km', 'length', 1e3, 'km', ['km', words('(?:kilometres?|kilometers?)')]),
   u('cm', 'length', 1e-2, 'cm', ['cm', words('(?:centimetres?|centimeters?)')]),
+  u('mm', 'length', 1e-3, 'mm', ['mm', words('(?:millimetres?|millimeters?)')]),
   u('ft', 'length', 0.3048, 'ft', ['ft', words('(?:feet|foot)')]),
   u('mi', 'length', 1609.344, 'miles', [words('miles?')]),
   u('count', 'count', 1, '', [
@@ -101,10 +102,15 @@ const RATE_BASES: { id: string; dimension: Dimension; factor: number; display: s
   { id: 'degC', dimension: 'temperature-rate', factor: 1, display: '°C', forms: DEG_C },
   { id: 'K', dimension: 'temperature-rate', factor: 1, display: 'K', forms: KELVIN },
   { id: 'degF', dimension: 'temperature-rate', factor: 5 / 9, display: '°F', forms: DEG_F },
+  // Sea level and ice thickness change in metres, centimetres or millimetres a year or century.
+  { id: 'm', dimension: 'length-rate', factor: 1, display: 'm', forms: ['m', words('(?:metres?|meters?)')] },
+  { id: 'cm', dimension: 'length-rate', factor: 1e-2, display: 'cm', forms: ['cm', words('(?:centimetres?|centimeters?)')] },
+  { id: 'mm', dimension: 'length-rate', factor: 1e-3, display: 'mm', forms: ['mm', words('(?:millimetres?|millimeters?)')] },
+  { id: 'ft', dimension: 'length-rate', factor: 0.3048, display: 'ft', forms: ['ft', words('(?:feet|foot)')] },
 ];
 const PER_WORDS: Record<string, string> = { yr: 'year', decade: 'decade', century: 'century', kyr: 'thousand years' };
 
-/** Rates: every concentration or temperature-change unit per every duration (ppm/yr, degC/century...). */
+/** Rates: every concentration, temperature-change or length unit per every duration (ppm/yr, degC/century, mm/yr...). */
 const RATE_UNITS: UnitDef[] = RATE_BASES.flatMap((base) =>
   PER_DURATION.map((per) =>
     u(`${base.id}/${per.id}`, base.dimension, base.factor / per.years, `${base.display} per ${PER_WORDS[per.id] ?? per.id}`, [
@@ -113,8 +119,16 @@ const RATE_UNITS: UnitDef[] = RATE_BASES.flatMap((base) =>
   ),
 );
 
+/** "per metre", "to every metre", "a metre", "/m": what follows the years in a depth-age gradient. */
+const PER_LENGTH = String.raw`[\s\u00A0]*(?:\/|${words('(?:per|an?|each|every|(?:to|for|in) (?:each|every|a|one))')}[\s\u00A0]*)`;
+/** Years per metre or centimetre of ice: how much time one unit of depth holds ("75 years per metre"). */
+const PER_LENGTH_UNITS: UnitDef[] = [
+  u('yr/m', 'duration-per-length', 1, 'years per metre', [`${YEAR_WORD}${PER_LENGTH}(?:${words('(?:metres?|meters?)')}|m)`]),
+  u('yr/cm', 'duration-per-length', 100, 'years per centimetre', [`${YEAR_WORD}${PER_LENGTH}(?:${words('(?:centimetres?|centimeters?)')}|cm)`]),
+];
+
 /** The unit table: every unit, its dimension, its factor and offset to the canonical unit, and its written forms. */
-export const UNIT_TABLE: readonly UnitDef[] = [...BASE_UNITS, ...RATE_UNITS];
+export const UNIT_TABLE: readonly UnitDef[] = [...BASE_UNITS, ...RATE_UNITS, ...PER_LENGTH_UNITS];
 
 /** The canonical unit of each dimension (as in src/types.ts). */
 export const CANONICAL_UNIT: Record<Dimension, string> = {
@@ -126,6 +140,8 @@ export const CANONICAL_UNIT: Record<Dimension, string> = {
   length: 'm',
   'concentration-rate': 'ppm/yr',
   'temperature-rate': 'K/yr',
+  'length-rate': 'm/yr',
+  'duration-per-length': 'yr/m',
   count: 'count',
   ratio: 'ratio',
   percent: '%',

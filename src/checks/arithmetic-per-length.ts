@@ -1,0 +1,94 @@
+/**
+ * How much time a length of ice holds, checked against the draft's own years and metres:
+ *  - a stated gradient after the years and the metres it divides:
+ *    "the lowest [200 m] hold about [150,000 years], or roughly [75 years per metre]" (750);
+ *  - a unit length that holds some years, then another length and what it holds:
+ *    "[one metre] there holds [750 years], so the lowest [200 m] hold about [15,000 years]" (150,000);
+ *  - the same across two sentences, when the second draws its figure from the first ("therefore",
+ *    "so", "at that rate"): "[One metre] stores some [750 years]. A [ten-metre] section therefore
+ *    spans roughly [75,000 years]." (7,500).
+ * Precision first: each side must be the only one of its kind, and a unit length ("one metre",
+ * "1 m") must be followed by its years in the same clause, with no other number between.
+ */
+import { writtenInterval as w } from '../quantities/index.js';
+import type { Quantity } from '../types.js';
+import { divide, type Derived } from './arithmetic-derive.js';
+import type { Previous } from './arithmetic-context.js';
+
+/** A finding on a stated number, with what the computed value is in words. */
+export interface PerLengthFinding {
+  stated: Quantity;
+  computed: Derived;
+  measures: string;
+  basis?: string;
+}
+
+/** A gradient the draft states: its years per metre, and the quantities that state it. */
+interface Gradient {
+  perMetre: Derived;
+  words: string;
+  parts: Quantity[];
+}
+
+const S = String.raw`[\s\u00A0]`;
+/** Between a unit length and the years it holds: a few words in one clause ("of ice there holds"). */
+const HOLDS_GAP = /^[^\d;:.!?()]{1,48}$/u;
+/** Words that draw a figure from the sentence before ("therefore", "so", "at that rate"). */
+const DRAWS_ON = new RegExp(String.raw`(?:^|[^\p{L}])(?:therefore|so|thus|hence|at${S}+that${S}+rate|which${S}+means|that${S}+means|by${S}+the${S}+same${S}+token)(?![\p{L}])`, 'iu');
+const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
+
+function times(a: Derived, b: Derived): Derived {
+  return { value: a.value * b.value, low: a.low * b.low, high: a.high * b.high };
+}
+
+/** Every gradient a sentence states: "75 years per metre", or "one metre ... holds 750 years". */
+function gradients(text: string, qs: Quantity[]): Gradient[] {
+  const stated = qs.filter((q) => q.dimension === 'duration-per-length').map((q) => ({ perMetre: w(q), words: q.text, parts: [q] }));
+  const units = qs.flatMap((q, i) => {
+    const next = qs[i + 1];
+    if (q.dimension !== 'length' || q.value !== 1 || next === undefined || next.dimension !== 'duration') return [];
+    if (!HOLDS_GAP.test(text.slice(q.end, next.start))) return [];
+    const per = w(next);
+    // The unit length is a definition ("one metre"), exact; only the years carry the writer's precision.
+    return [{ perMetre: { value: per.value / q.value, low: per.low / q.value, high: per.high / q.value }, words: `${next.text} in ${q.text}`, parts: [q, next] }];
+  });
+  return [...stated, ...units];
+}
+
+/**
+ * The one length and the one duration of `qs`, or undefined. When `years` is the figure to check,
+ * the length must come first ("the lowest 200 m hold 15,000 years"); as the inputs of a stated
+ * gradient either order reads ("150,000 years in 200 m").
+ */
+function lengthAndYears(qs: Quantity[], lengthFirst: boolean): [Quantity, Quantity] | undefined {
+  const length = only(qs.filter((q) => q.dimension === 'length'));
+  const years = only(qs.filter((q) => q.dimension === 'duration'));
+  return length === undefined || years === undefined || (lengthFirst && length.start > years.start) ? undefined : [length, years];
+}
+
+/** Every contradiction between a gradient and the years and metres beside it. */
+export function perLength(text: string, qs: Quantity[], previous?: Previous): PerLengthFinding[] {
+  const found = only(gradients(text, qs));
+  if (found !== undefined) {
+    const [stated] = found.parts;
+    if (found.parts.length === 1 && stated !== undefined) {
+      // "200 m ... 150,000 years ..., or roughly 75 years per metre": the years over the metres before it.
+      const pair = lengthAndYears(qs.filter((q) => q.end <= stated.start), false);
+      const computed = pair === undefined ? undefined : divide(w(pair[1]), w(pair[0]));
+      return pair === undefined || computed === undefined ? [] : [{ stated, computed, measures: `${pair[1].text} over ${pair[0].text}` }];
+    }
+    // "one metre holds 750 years, so 200 m hold 15,000 years": the metres times the gradient.
+    const pair = lengthAndYears(qs.filter((q) => q.start >= (found.parts.at(-1)?.end ?? 0)), true);
+    if (pair !== undefined) return [{ stated: pair[1], computed: times(w(pair[0]), found.perMetre), measures: `${pair[0].text} at ${found.words}` }];
+    // "200 m hold 150,000 years, so one metre holds 750 years": the years over the metres before it.
+    const [unit, years] = found.parts as [Quantity, Quantity];
+    const earlier = lengthAndYears(qs.filter((q) => q.end <= unit.start), false);
+    const per = earlier === undefined ? undefined : divide(w(earlier[1]), w(earlier[0]));
+    return per === undefined || earlier === undefined ? [] : [{ stated: years, computed: times(per, { value: unit.value, low: unit.value, high: unit.value }), measures: `${earlier[1].text} over ${earlier[0].text}, for ${unit.text}` }];
+  }
+  if (previous === undefined || gradients(text, qs).length > 0 || !DRAWS_ON.test(text)) return [];
+  const before = only(gradients(previous.text, previous.quantities));
+  const pair = lengthAndYears(qs, true);
+  if (before === undefined || pair === undefined) return [];
+  return [{ stated: pair[1], computed: times(w(pair[0]), before.perMetre), measures: `${pair[0].text} at ${before.words} in the sentence before`, basis: "the paragraph's" }];
+}
