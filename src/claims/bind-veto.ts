@@ -9,17 +9,20 @@
  */
 import type { Quantity } from '../types.js';
 import type { ReadRole } from './bind-role.js';
-import type { TermHits } from './bind-view.js';
+import { clauseBreaks, type TermHits } from './bind-view.js';
 
 /** What may stand between a level verb and its quantity: "to", "at", or nothing ("climbed as high as"). */
 const LEVEL_LINK = /^\s*(?:to|at)?\s*$/iu;
 
 /** The hits of `view` that may veto a value for `q`: all of them, less the verb that brings a level quantity to its level. */
-export function vetoView(sentence: string, view: TermHits, q: Pick<Quantity, 'start'>, role: ReadRole): TermHits {
-  if (role !== 'level') return view;
+export function vetoView(sentence: string, view: TermHits, q: Pick<Quantity, 'start' | 'end'>, role: ReadRole): TermHits {
+  const breaks = clauseBreaks(sentence);
+  // "CO2 is climbing by 0.2 ppm a year, many times faster than ...": a word in a later clause
+  // speaks of that clause, not of the number before it.
+  const later = (start: number): boolean => start >= q.end && breaks.some((b) => b >= q.end && b < start);
   const kept: TermHits = new Map();
   for (const [id, spans] of view) {
-    const left = spans.filter(([, end]) => end > q.start || !LEVEL_LINK.test(sentence.slice(end, q.start)));
+    const left = spans.filter(([start, end]) => !later(start) && (role !== 'level' || end > q.start || !LEVEL_LINK.test(sentence.slice(end, q.start))));
     if (left.length > 0) kept.set(id, left);
   }
   return kept;
