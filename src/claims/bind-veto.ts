@@ -8,7 +8,7 @@
  *                                              ^^^^ ── level verb: no veto for the glacial CO2 level
  */
 import type { Quantity } from '../types.js';
-import type { ReadRole } from './bind-role.js';
+import { isChangeVerb, type ReadRole } from './bind-role.js';
 import { clauseBreaks, type TermHits } from './bind-view.js';
 
 /** What may stand between a level verb and its quantity: "to", "at", or nothing ("climbed as high as"). */
@@ -22,7 +22,9 @@ export function vetoView(sentence: string, view: TermHits, q: Pick<Quantity, 'st
   const later = (start: number): boolean => start >= q.end && breaks.some((b) => b >= q.end && b < start);
   const kept: TermHits = new Map();
   for (const [id, spans] of view) {
-    const left = spans.filter(([start, end]) => !later(start) && (role !== 'level' || end > q.start || !LEVEL_LINK.test(sentence.slice(end, q.start))));
+    // Only a verb of change carries the number to its level: "the offset to 2,000 years" is still an offset.
+    const carries = ([start, end]: [number, number]): boolean => role === 'level' && end <= q.start && isChangeVerb(sentence.slice(start, end)) && LEVEL_LINK.test(sentence.slice(end, q.start));
+    const left = spans.filter((span) => !later(span[0]) && !carries(span));
     if (left.length > 0) kept.set(id, left);
   }
   return kept;

@@ -36,6 +36,10 @@ const ROWS: Row[] = [
   ['Carbon dioxide never got above 250 ppm in all that time.', [['250 ppm', 'concentration']], 'co2-highest-preindustrial-800kyr'],
   // CO2 in 2019 was higher than at any time in at least 2 million years (IPCC 2021, SPM A.2.1, doi:10.1017/9781009157896.001).
   ['Carbon dioxide is now higher than at any point in at least 20 million years.', [['20 million years', 'duration']], 'co2-2019-highest-in-2-myr'],
+  // A gap between two records is a lag, never how long the deglaciation took: CO2 and Antarctic
+  // temperature within a few centuries (Pedro et al. 2012, doi:10.5194/cp-8-1213-2012).
+  ['At the end of the last ice age the gap between Antarctic warming and the CO2 rise was some 2,000 years.', [['some 2,000 years', 'duration']], 'antarctic-co2-phasing-termination-1-consensus'],
+  ['Later work narrowed the Termination I offset to some 2,000 years.', [['some 2,000 years', 'duration']], '-'],
 ];
 
 describe('bindQuantities: everyday phrasings in the pack', () => {
