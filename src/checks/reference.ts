@@ -42,9 +42,15 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     }
     const distance = relativeDistance(q.low, q.high, r);
     verdicts.push(distance === 0 ? 'agrees' : 'conflicts');
-    const older = distance === 0 ? undefined : supersededMatch(r, q, packs);
+    // A superseded figure is right for its day. A figure that only aged (the 2019 level, when the
+    // value changes with time and carries an as-of date) stays a note when told as today's; a figure
+    // that later work corrected ("currently reaches back about 740,000 years") is an error when the
+    // draft gives it as today's.
+    const matched = distance === 0 ? undefined : supersededMatch(r, q, packs);
+    if (matched !== undefined && r.asOf === undefined) aboutToday ??= findTerms(sentence, packs).has(TODAY_TERM);
+    const older = matched !== undefined && (r.asOf !== undefined || aboutToday !== true) ? matched : undefined;
     // The right number in the wrong unit ("3,270 feet" for the 3,270 m core): a unit flag says so.
-    const slip = distance === 0 || older !== undefined ? undefined : unitSlip(r, q);
+    const slip = distance === 0 || matched !== undefined ? undefined : unitSlip(r, q);
     if (slip !== undefined) {
       flags.push({
         ruleId: 'unit.scale-slip',
@@ -61,7 +67,7 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     }
     // A global figure that is the size of a regional change ("the whole Earth was 9 °C colder": the
     // Antarctic warming) is the regional record told as global: the scope check's flag, not a value's.
-    const regional = distance === 0 || older !== undefined ? undefined : regionalMatch(r, q, packs);
+    const regional = distance === 0 || matched !== undefined ? undefined : regionalMatch(r, q, packs);
     if (regional !== undefined) {
       flags.push(regional);
       continue;
@@ -75,11 +81,11 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
       level,
       start: q.start,
       end: q.end,
-      reason: older === undefined ? reasonFor(r, q, reference.text, aboutToday, packs) : supersededReason(r, q, older, reference.text, packs),
+      reason: older !== undefined ? supersededReason(r, q, older, reference.text, packs) : matched !== undefined ? supersededAsCurrent(r, q, matched, reference.text, packs) : reasonFor(r, q, reference.text, aboutToday, packs),
       claimed: shownClaim(q),
       reference,
       correction: correctionFor(r, q),
-      sources: older === undefined ? r.sources : [...r.sources, ...older.sources.filter((s) => !r.sources.includes(s))],
+      sources: matched === undefined ? r.sources : [...r.sources, ...matched.sources.filter((s) => !r.sources.includes(s))],
     });
   }
   return { flags, verdicts };
@@ -123,6 +129,11 @@ function supersededReason(r: ReferenceValue, q: Quantity, older: ReferenceValue,
   const when = older.asOf === undefined ? 'an earlier figure' : `the figure of ${older.asOf.slice(0, 4)}`;
   const now = r.asOf === undefined ? '' : ` (as of ${r.asOf})`;
   return `The draft gives ${q.text} for the ${midSentence(r.measures, packs)}: ${when}, right when published and since superseded; the sources now give ${range}${now}`;
+}
+
+function supersededAsCurrent(r: ReferenceValue, q: Quantity, older: ReferenceValue, range: string, packs: LoadedPacks): string {
+  const when = older.asOf === undefined ? 'an earlier figure' : `the figure of ${older.asOf.slice(0, 4)}`;
+  return `The draft gives ${q.text} for the ${midSentence(r.measures, packs)} as today's figure: that is ${when}, since superseded; the sources now give ${range}${r.asOf === undefined ? '' : ` (as of ${r.asOf})`}.`;
 }
 
 function reasonFor(r: ReferenceValue, q: Quantity, range: string, aboutToday: boolean, packs: LoadedPacks): string {

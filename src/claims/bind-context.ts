@@ -15,6 +15,8 @@
  * lacks, never lift a veto; a group filled from there counts as far. Two values reachable this way
  * with the same score tie, and bind nothing.
  */
+import { createTopicMatcher, type TopicMatcher } from '../prose/topic-matcher.js';
+import { formsOf, subjectWordsOf } from '../propositions/lexicon.js';
 import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
 import type { Quantity } from '../types.js';
 import { canState, nearness } from './bind-match.js';
@@ -30,14 +32,54 @@ const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|th
  * before. A measure with an "of" phrase names its own subject ("the level of the sea").
  */
 const MEASURE_SUBJECT = /(?:^|[^\p{L}])the\s+(?:[\p{L}-]+\s+){0,2}?(?:average|mean|level|concentration|figure|value|reading|total|amount)(?![\p{L}])(?!\s+of(?![\p{L}]))/iu;
-/** A term right after a demonstrative ("in that record", "this core") is the back-reference itself, not a subject of its own. */
-const DEMONSTRATIVE = /(?:^|[^\p{L}])(?:that|this|these|those|the\s+same)\s+$/iu;
+/**
+ * A term right after a demonstrative ("in that record", "this core") is the back-reference itself, not
+ * a subject of its own; so is a term in a noun phrase a possessive opens ("Its deuterium and CO2
+ * series", "their trapped air"): the thing it belongs to is the subject before.
+ */
+const DEMONSTRATIVE = /(?:^|[^\p{L}])(?:(?:that|this|these|those|the\s+same)|(?:its|their)(?:\s+[\p{L}-]+){0,3})\s+$/iu;
 /** The baseline of a comparison: "colder than in pre-industrial times", "40 metres below today's". */
 const BASELINE = /(?:^|[^\p{L}])(?:than|below|above|beneath)(?:\s+[\p{L}-]+){0,2}\s*$/iu;
 /** What may stand between a qualifier and the subject it qualifies: "global sea level", "global-mean". */
 const QUALIFIES = /^[\s-]*$/u;
 
 const bindingTerms = new WeakMap<object, Set<string>>();
+const subjectMatchers = new WeakMap<object, TopicMatcher>();
+
+/** Lexicon classes whose words name what a number is about: a place, or a change rather than a level. */
+const OTHER_SUBJECT_CLASSES: [string, string[]][] = [
+  ['regions', []],
+  ['changes', ['up', 'down']],
+];
+/** A year in a term's words ("2023", "the 2010s", "1750") dates the sentence: a time frame of its own. */
+const YEAR = /(?<!\d)\d{4}(?:s|'s)?(?!\d)/u;
+
+/**
+ * Whether a term's words name a subject of their own: a core, a gas, a period (the lexicon's subject
+ * words), a region, a change, or a date. An attribute ("record", "the longest", "to date", "of the
+ * atmosphere", "ended abruptly") says what is measured or how, and speaks of the subject before as
+ * well as of any other.
+ */
+function namesSubject(words: string, packs: LoadedPacks): boolean {
+  let matcher = subjectMatchers.get(packs);
+  if (matcher === undefined) {
+    const lexicon = packs.lexicon;
+    const others = OTHER_SUBJECT_CLASSES.flatMap(([cls, keys]) =>
+      Object.entries(lexicon[cls] ?? {})
+        .filter(([key]) => keys.length === 0 || keys.includes(key))
+        .flatMap(([, phrases]) => phrases.flatMap((p) => (/\s/u.test(p.trim()) ? [p] : formsOf(p.toLowerCase())))),
+    );
+    matcher = createTopicMatcher([...subjectWordsOf(lexicon), ...others]);
+    subjectMatchers.set(packs, matcher);
+  }
+  return YEAR.test(words) || matcher.test(words);
+}
+
+/** The sentence before, and whether the quantity's own sentence states a stretch or point of time of its own. */
+export interface OwnFrame {
+  context: string;
+  ownTime: boolean;
+}
 
 /** True when `sentence` may take a subject from the sentence before (a back-reference or a bare measure subject); bindFromContext binds nothing otherwise. */
 export function mayReferBack(sentence: string): boolean {
@@ -55,15 +97,21 @@ export function bindFromContext(
   breaks: number[],
   vetoes: TermHits = view,
   contextSubject?: [number, number],
+  frame?: OwnFrame,
 ): string | 'ambiguous' | undefined {
   if (!mayReferBack(sentence)) return undefined;
-  const own = subjectTerms(sentence, vetoes, packs);
+  // "The ice goes back 800,000 years, and over that entire span CO2 stayed between 170 and 300 ppm":
+  // a sentence that states its own stretch of time takes no date ("in 2019") from the one before.
+  const dated = (id: string): boolean => frame !== undefined && (context.get(id) ?? []).some(([start, end]) => YEAR.test(frame.context.slice(start, end)));
+  const takesDate = (r: ReferenceValue): boolean => r.binding.all.some((g) => !g.some((id) => view.has(id)) && g.every((id) => !context.has(id) || dated(id)));
+  const own = subjectTerms(sentence, vetoes, packs, q.dimension);
   const serves = (r: ReferenceValue, id: string): boolean => r.binding.all.some((g) => g.includes(id));
   const candidates = packs.references
     .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && canState(r, q))
     .filter((r) => !r.binding.none.some((id) => vetoes.has(id)))
     .filter((r) => own.every(([id, spans]) => serves(r, id) || spans.every((span) => qualifiesServing(sentence, span, view, (other) => serves(r, other)))))
-    .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))));
+    .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))))
+    .filter((r) => frame?.ownTime !== true || !takesDate(r));
   // The more specific reading wins: a value that vetoes a word present in either sentence gives way
   // to one that needs it ("at that time" after "the Last Glacial Maximum": the LGM level, not the typical glacial one).
   const present = (id: string): boolean => view.has(id) || context.has(id);
@@ -84,8 +132,11 @@ function qualifiesServing(sentence: string, [, end]: [number, number], view: Ter
   return [...view].some(([id, spans]) => serves(id) && spans.some(([start]) => start >= end && QUALIFIES.test(sentence.slice(end, start))));
 }
 
-/** The terms a quantity sees that some value binds on (with their own spans), leaving out the baselines of comparisons. */
-function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks): [string, [number, number][]][] {
+/**
+ * The terms a quantity sees that some value binds on and that name a subject (with their own
+ * spans), leaving out the baselines of comparisons and the back-references themselves.
+ */
+function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks, dimension: Quantity['dimension']): [string, [number, number][]][] {
   let binding = bindingTerms.get(packs);
   if (binding === undefined) {
     binding = new Set(packs.references.flatMap((r) => r.binding.all.flat()));
@@ -95,10 +146,19 @@ function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks): [st
   // The words of a bare measure subject ("The global average", "the level") are the back-reference itself.
   const measure = MEASURE_SUBJECT.exec(sentence);
   const inMeasure = ([start, end]: [number, number]): boolean => measure !== null && start >= measure.index && end <= measure.index + measure[0].length;
-  const ownSubject = ([start, end]: [number, number]): boolean =>
-    !inMeasure([start, end]) && !BASELINE.test(sentence.slice(Math.max(0, start - 40), start)) && !DEMONSTRATIVE.test(sentence.slice(Math.max(0, start - 20), start));
+  // An attribute that names a measure this number could state ("a record of 800,000 years": the
+  // measure of a subject, a value bound by the subject and one more group, as in a measure family)
+  // is as much the number's own subject as a core or a gas; one that cannot ("to date", "of the
+  // atmosphere" beside a span of years, "ended abruptly") is not.
+  const namesMeasure = (id: string): boolean =>
+    packs.references.some((r) => r.binding.all.length <= 2 && r.dimensions.includes(dimension) && r.binding.all.some((g) => g.includes(id)));
+  const ownSubject = (id: string, [start, end]: [number, number]): boolean =>
+    !inMeasure([start, end]) &&
+    (namesMeasure(id) || namesSubject(sentence.slice(start, end), packs)) &&
+    !BASELINE.test(sentence.slice(Math.max(0, start - 40), start)) &&
+    !DEMONSTRATIVE.test(sentence.slice(Math.max(0, start - 20), start));
   return [...view]
-    .map(([id, spans]): [string, [number, number][]] => [id, used.has(id) ? spans.filter(ownSubject) : []])
+    .map(([id, spans]): [string, [number, number][]] => [id, used.has(id) ? spans.filter((span) => ownSubject(id, span)) : []])
     .filter(([, spans]) => spans.length > 0);
 }
 

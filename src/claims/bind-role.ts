@@ -23,6 +23,13 @@ export interface EndpointPair {
 
 const CHANGE_NOUNS = 'rise|rises|increase|increases|drop|drops|fall|falls|decline|decrease|swing|swings|amplitude|change|jump|step|gain|growth|difference';
 const CHANGE_VERBS = 'rose|rise|rises|risen|rising|fell|falls|fallen|falling|dropped|dropping|climbed|climbing|jumped|increased|decreased|declined|grew|gained|up';
+const CHANGE_VERB = new RegExp(String.raw`^(?:${CHANGE_VERBS}|sank|sunk|peaked|topped|bottomed)$`, 'iu');
+
+/** Whether a word is a verb of change ("fell", "climbed"), which may carry a number to the level it reaches. */
+export function isChangeVerb(word: string): boolean {
+  return CHANGE_VERB.test(word.trim());
+}
+
 /** Change words just before the quantity: "by", "a rise of", "the swing was", "rose", "fell", "up". */
 const CHANGE_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:by|(?:${CHANGE_NOUNS})\s+(?:of|was|is|were|came to|amounted to)|${CHANGE_VERBS})\s*$`, 'iu');
 /** Change words just after the quantity: "an 80 ppm rise", "90 ppm higher", "130 metres above the lake". */

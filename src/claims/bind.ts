@@ -172,7 +172,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE' && mayReferBack(sentence)) {
       contextHits ??= findTerms(context, packs);
       contextSubject ??= subjectSpan(context) ?? null;
-      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, contextSubject ?? undefined);
+      const ownTime = quantities.some((o, j) => j !== i && (o.dimension === 'age' || o.dimension === 'duration') && o.statedUnit !== 'CE');
+      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, contextSubject ?? undefined, { context, ownTime });
       if (found !== undefined) decided.set(i, found);
     }
   });

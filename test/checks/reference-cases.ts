@@ -27,6 +27,8 @@ export const CASES: Case[] = [
   // Petit et al. 1999
   ['vostok-glacial-cycles', ['Vostok holds four glacial cycles.', 'four', 'count', 4, 4], ['Vostok holds eight glacial cycles.', 'eight', 'count', 8, 8]],
   // Jouzel et al. 2007 (doi 10.1126/science.1141038); Lüthi et al. 2008 (doi 10.1038/nature06949)
+  // Lüthi et al. 2008 (doi 10.1038/nature06949): the lowest 200 m of Dome C hold about 150,000 years.
+  ['edc-bottom-200m-span', ['The lowest 200 metres of the EPICA Dome C core hold about 150,000 years.', 'about 150,000 years', Y, 141_000, 159_000], ['The bottom 200 metres of the Dome C core hold only 15,000 years.', '15,000 years', Y, 14_500, 15_500]],
   ['edc-record-span', ['The EPICA Dome C record reaches back about 800,000 years.', 'about 800,000 years', Y, 780_000, 820_000], ['The EPICA Dome C record reaches back 400,000 years.', '400,000 years', Y, 395_000, 405_000]],
   // Lüthi et al. 2008; EPICA project page
   ['edc-drilled-depth', ['At Dome C the drill stopped at 3,270 metres.', '3,270 metres', L, 3265, 3275], ['At Dome C the drill stopped at 4,500 metres.', '4,500 metres', L, 4450, 4550]],

@@ -48,6 +48,13 @@ describe('checkReferences', () => {
     // Dated to the year it was right, the same figure is no error at all.
     const dated = 'In 2004 the EPICA Dome C record reached back 740,000 years.';
     expect(check(dated, q(dated, '740,000 years', 'duration', 735e3, 745e3))).toMatchObject({ flags: [], verdicts: ['agrees'] });
+    // Given as today's figure ("currently"), the superseded figure is flagged like any other figure
+    // that close to the range (a warning), and the reason says whose figure it was.
+    const current = 'The EPICA Dome C record currently reaches back 740,000 years.';
+    const asToday = check(current, q(current, '740,000 years', 'duration', 735e3, 745e3)).flags[0];
+    expect(asToday).toMatchObject({ ruleId: 'value.edc-record-span', level: 'warning', correction: 'about 800,000 years' });
+    expect(asToday?.reason).toBe("The draft gives 740,000 years for the current time span of the EPICA Dome C climate (deuterium) and CO2 records as today's figure: that is the figure of 2004, since superseded; the sources now give 790,000–810,000 years.");
+    expect(asToday?.sources.map((x) => x.id)).toContain('epica-community-members-2004');
     // A figure far from both stays a warning or worse.
     const wrong = 'The EPICA Dome C record spans 500,000 years.';
     expect(check(wrong, q(wrong, '500,000 years', 'duration', 495e3, 505e3)).flags[0]?.level).toBe('error');
