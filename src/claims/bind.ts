@@ -74,8 +74,11 @@ export function findTerms(sentence: string, packs: LoadedPacks): TermHits {
   return new Map([...hits].map(([id, spans]) => [id, spans.map(([s, e]): [number, number] => [s, e])]));
 }
 
-/** Sentences whose terms are kept per packs (a paragraph's worth, and the clauses the binder cuts from them). */
-const FOUND_TERMS_KEPT = 64;
+/**
+ * Sentences whose terms are kept per packs: a paragraph's worth and the clauses the binder cuts from
+ * them, and beyond that the sentences a draft or a folder of drafts repeats (a few megabytes).
+ */
+const FOUND_TERMS_KEPT = 4096;
 const foundTerms = new WeakMap<LoadedPacks, Map<string, TermHits>>();
 
 function searchTerms(sentence: string, packs: LoadedPacks): TermHits {

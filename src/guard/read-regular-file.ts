@@ -81,7 +81,8 @@ export function readRegularFileSync(file: string, options: RegularFileOptions): 
     if (info.isDirectory()) throw new FirnlineError(options.code ?? 'file-unreadable', 'cannot read this file (it is a folder); check that it is a readable file', { file: options.shown });
     if (!info.isFile()) throw new FirnlineError('not-regular-file', `not a regular file (${kindOf(info)}); name a regular file`, { file: options.shown });
     if (info.size > maxBytes) throw tooLarge(options.shown, maxBytes);
-    const buffer = Buffer.alloc(Math.min(info.size, maxBytes) + 1);
+    // Not zero-filled: only the bytes read are returned (a docs folder is tens of megabytes).
+    const buffer = Buffer.allocUnsafe(Math.min(info.size, maxBytes) + 1);
     let length = 0;
     for (;;) {
       const bytesRead = readSync(fd, buffer, length, buffer.length - length, null);

@@ -97,11 +97,31 @@ function interval(g: Group, rule: string, def: UnitDef, hedge: HedgeMatch | unde
   return { value: v, low: hl, high: hh };
 }
 
+/** Texts whose quantities are kept, and the longest text kept (a sentence, not a whole draft). */
+const KEPT_TEXTS = 4096;
+const KEPT_LENGTH = 2000;
+const kept = new Map<string, readonly Quantity[]>();
+
 /**
  * Every quantity in one sentence, in order. `start`/`end` are UTF-16 indices into `text`, and
- * `text.slice(start, end)` is the quantity as written, with its hedge and unit.
+ * `text.slice(start, end)` is the quantity as written, with its hedge and unit. The reading depends
+ * on the text alone, so it is kept for the last few thousand texts (the engine, the binder's unit
+ * restorer and the checks of the next sentence read the same sentence, and drafts repeat sentences);
+ * each call gets its own copies.
  */
 export function parseQuantities(text: string): Quantity[] {
+  let found = kept.get(text);
+  if (found === undefined) {
+    found = readQuantities(text);
+    if (text.length <= KEPT_LENGTH) {
+      if (kept.size >= KEPT_TEXTS) kept.delete(kept.keys().next().value as string);
+      kept.set(text, found);
+    }
+  }
+  return found.map((q) => ({ ...q }));
+}
+
+function readQuantities(text: string): Quantity[] {
   const out: Quantity[] = [];
   for (const g of groupParts(text, partsOf(text, findAtoms(text)))) {
     const reading = readGroup(text, g, out[out.length - 1]);

@@ -62,19 +62,78 @@ export function readMarkdownBlocks(text: string): ProseBlock[] {
  * order, with offsets in the whole `text` and the heading carried from one part to the next. The
  * caller vouches that each part starts and ends where a top-level block does, that the parts left
  * out hold no heading, and that the draft defines no link references (speed/sparse-markdown.ts):
- * then each part's blocks are exactly those a parse of the whole draft gives there.
+ * then each part's blocks are exactly those a parse of the whole draft gives there. `plain` lists
+ * pieces of the parts, each starting where a top-level block does, that the caller vouches are
+ * plain: one fenced code block (no blocks) or one paragraph of plain lines, each
+ * followed only by empty lines; they are read without the parser.
  */
-export function readMarkdownParts(text: string, parts: readonly (readonly [number, number])[]): ProseBlock[][] {
+export function readMarkdownParts(text: string, parts: readonly (readonly [number, number])[], plain: readonly PlainPiece[] = []): ProseBlock[][] {
   const walk: Walk = { text, base: 0, heading: '', blocks: [], pendingMark: false, marking: false };
-  return parts.map(([from, to]) => {
+  const parse = (from: number, to: number): void => {
     // The parser drops a leading byte-order mark and counts its offsets from after it.
     const bom = from === 0 && text.charCodeAt(0) === 0xfeff ? 1 : 0;
     walk.base = from + bom;
+    visitBlocks(fromMarkdown(text.slice(from + bom, to), PARSE_OPTIONS), 'paragraph', walk);
+  };
+  return parts.map(([from, to]) => {
     walk.blocks = [];
     walk.pendingMark = false;
-    visitBlocks(fromMarkdown(text.slice(from + bom, to), PARSE_OPTIONS), 'paragraph', walk);
+    let at = from;
+    for (const piece of plain) {
+      if (piece.start < from || piece.end > to) continue;
+      if (at < piece.start) parse(at, piece.start);
+      if (piece.kind === 'paragraph') walk.blocks.push(plainParagraph(text, piece.start, piece.end, walk.heading));
+      at = piece.end;
+    }
+    if (at < to) parse(at, to);
     return walk.blocks;
   });
+}
+
+/** A piece of a draft read without the parser (`plainParagraphKind`). */
+export interface PlainPiece {
+  start: number;
+  end: number;
+  kind: 'paragraph' | 'code';
+}
+
+/**
+ * `paragraph` for a piece of Markdown that is one paragraph a parser reads character for character,
+ * but for code spans: lines that start with an ASCII letter and hold no character Markdown or its
+ * GFM extensions give a meaning to (`* _ ~ [ ] \ & < > | # @`, `://`, `www.`), no whitespace but
+ * single spaces inside a line (no tab, trailing space, hard break or other space character), no
+ * control character, and backticks only as pairs of single backticks on one line (code spans), then
+ * only empty lines. Its block is its text with each code span as one space, as the parser gives it.
+ * `code` for a piece the caller knows is one fenced code block (no prose). Undefined otherwise.
+ */
+export function plainParagraphKind(piece: string): 'paragraph' | undefined {
+  if (!PLAIN_LINES.test(piece) || PLAIN_BREAKERS.test(piece)) return undefined;
+  if (piece.includes('``') || piece.split('\n').some((line) => (line.match(/`/gu)?.length ?? 0) % 2 !== 0)) return undefined;
+  return 'paragraph';
+}
+
+const PLAIN_LINES = /^[A-Za-z][^\n]*(?:\n[A-Za-z][^\n]*)*\n*$/u;
+// eslint-disable-next-line no-control-regex -- a control character makes a piece not plain
+const PLAIN_BREAKERS = /[*_~[\]\\&<>|#@]|:\/\/|www\.|[^\S \n]|[\x00-\x09\x0b-\x1f\x7f]| (?:\n|$)/u;
+
+/** The block of a plain paragraph (`plainParagraphKind`) at `[start, end)` of `text`, as the parser's nodes give it. */
+function plainParagraph(text: string, start: number, end: number, heading: string): ProseBlock {
+  const stop = start + text.slice(start, end).replace(/\n+$/u, '').length;
+  const builder = startBlockText();
+  let at = start;
+  while (at < stop) {
+    const open = text.indexOf('`', at);
+    if (open < 0 || open >= stop) {
+      appendValue(builder, text.slice(at, stop), text, at, stop);
+      break;
+    }
+    if (open > at) appendValue(builder, text.slice(at, open), text, at, open);
+    // A code span (a pair of single backticks on its line) is one space, like any removed inline element.
+    const close = text.indexOf('`', open + 1);
+    appendGap(builder, open, close + 1);
+    at = close + 1;
+  }
+  return finishBlock(builder, 'paragraph', heading) as ProseBlock;
 }
 
 interface Walk {

@@ -23,7 +23,7 @@
  * markup are common; only their plain chunks are skipped, and the result is the same either way
  * (test/sparse compares the two on our drafts and on generated pages).
  */
-import { readMarkdownParts } from '../source/markdown.js';
+import { plainParagraphKind, readMarkdownParts, type PlainPiece } from '../source/markdown.js';
 import { checkMarkdownLimits } from '../source/markdown-limits.js';
 import { checkNestingDepth } from '../source/nesting-depth.js';
 import { splitSentences } from '../prose/index.js';
@@ -83,7 +83,14 @@ export function sparseMarkdownDraft(path: string, text: string, namesSubject: (t
     if (last !== undefined && last[1] === starts[i]) last[1] = ends[i] as number;
     else runs.push([starts[i] as number, ends[i] as number]);
   });
-  const parts = readMarkdownParts(text, runs);
+  // A chunk that is one fenced code block, or one plain paragraph, needs no parser (no block, or its
+  // text as its block); the first chunk may hold a byte-order mark or front matter and is always parsed.
+  const pieces = chunks.flatMap((c, i): PlainPiece[] => {
+    if (i === 0 || parse[i] !== true) return [];
+    const kind = fenceOnly(c) ? 'code' : plainParagraphKind(c);
+    return kind === undefined ? [] : [{ start: starts[i] as number, end: ends[i] as number, kind }];
+  });
+  const parts = readMarkdownParts(text, runs, pieces);
   const blocks: ProseBlock[] = parts.flat();
   const subjectBeside = parts.flatMap((run) => {
     const named = run.map((b) => namesSubject(b.text));
