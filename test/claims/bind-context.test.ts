@@ -5,17 +5,12 @@
 import { describe, expect, it } from 'vitest';
 import { bindQuantities } from '../../src/claims/bind.js';
 import { loadPacks } from '../../src/rulepack/index.js';
-import { quantitiesIn, type Written } from './quantity-at.js';
+import { boundAfter, quantitiesIn, type ContextRow, type Written } from './quantity-at.js';
 
 const packs = await loadPacks([]);
 
-/** Previous sentence, sentence, its quantities, and per quantity the reference id ('-' none, '?' ambiguous). */
-type Row = [context: string, sentence: string, written: Written[], expected: string[]];
-
-function bound(context: string, sentence: string, written: Written[]): string[] {
-  const { bindings, ambiguous } = bindQuantities(sentence, quantitiesIn(sentence, written), packs, context);
-  return written.map((_, i) => bindings.find((b) => b.quantityIndex === i)?.referenceId ?? (ambiguous.includes(i) ? '?' : '-'));
-}
+type Row = ContextRow;
+const bound = (context: string, sentence: string, written: Written[]): string[] => boundAfter(packs, context, sentence, written);
 
 const REACHED: Row[] = [
   ['The Harwick team spent three summers at the GRIP site.', 'They drilled down to 3,029 metres.', [['3,029 metres', 'length']], ['grip-depth-and-span']],
