@@ -23,7 +23,6 @@ import { createHash } from 'node:crypto';
 import { readFile, rm, writeFile, rename } from 'node:fs/promises';
 import { dirname, join, relative, sep } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { build, transform } from 'esbuild';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 const dist = join(root, 'dist');
@@ -56,6 +55,17 @@ const keepPaths = {
 };
 
 await rm(out, { recursive: true, force: true });
+// esbuild's binary comes as a package for each platform; where npm found none, the command line
+// runs from dist/ as it did before this step (slower to start, same results).
+let esbuild;
+try {
+  esbuild = await import('esbuild');
+  await esbuild.transform('', {});
+} catch (error) {
+  console.error(`build-bundle: esbuild cannot run here (${error instanceof Error ? error.message.split('\n')[0] : String(error)}); the command line will run from dist/`);
+  process.exit(0);
+}
+const { build, transform } = esbuild;
 const result = await build({
   absWorkingDir: root,
   // The second entry shares the bundle's modules (splitting): the tests read the linear-text
