@@ -24,7 +24,8 @@ export interface CompiledLexicon {
   phrases(cls: string, key: string): readonly string[];
 }
 
-interface Entry {
+/** One written form of a phrase, under its first word: the words after it, the phrase's class and key. */
+export interface Entry {
   rest: string[];
   cls: string;
   key: string;
@@ -55,7 +56,7 @@ export function formsOf(word: string): string[] {
  * Every written form of a phrase. Up to three content words inflect together ("rise and fall
  * together" → "rising and falling together"); in longer phrases the first and last words inflect.
  */
-function variantsOf(words: string[]): string[][] {
+export function variantsOf(words: string[]): string[][] {
   if (words.length === 0) return [];
   const content = words.filter((w) => !FIXED.has(w)).length;
   if (content <= 3) {
@@ -84,24 +85,7 @@ export function compileLexicon(packs: LoadedPacks): CompiledLexicon {
 
 /** Compiles a lexicon given as data (tests use small ones). */
 export function compile(lexicon: Lexicon): CompiledLexicon {
-  const index = new Map<string, Entry[]>();
-  const seen = new Set<string>();
-  for (const [cls, keys] of Object.entries(lexicon)) {
-    for (const [key, phrases] of Object.entries(keys)) {
-      for (const phrase of phrases) {
-        for (const words of variantsOf(phraseWords(phrase))) {
-          const id = `${cls}\u0000${key}\u0000${words.join(' ')}`;
-          if (seen.has(id)) continue;
-          seen.add(id);
-          const [head, ...rest] = words;
-          if (head === undefined) continue;
-          const list = index.get(head) ?? [];
-          list.push({ rest, cls, key });
-          index.set(head, list);
-        }
-      }
-    }
-  }
+  const index = lexiconIndex(lexicon);
   return {
     // "Earth's orbit", "Greenland's cores": a possessive matches the word it is made from.
     find: (words) => findHits(index, words.map((w) => w.replace(/'s$/u, ''))),
@@ -109,12 +93,70 @@ export function compile(lexicon: Lexicon): CompiledLexicon {
   };
 }
 
+const NO_ENTRIES: readonly Entry[] = [];
+
+/** One phrase of the lexicon, with its written forms once they are asked for. */
+interface Phrase {
+  cls: string;
+  key: string;
+  words: string[];
+  variants?: string[][];
+}
+
+/**
+ * The lexicon's index (every written form of every phrase, by its first word), made one first word
+ * at a time, when a sentence first holds that word: a short draft asks for a few dozen of the
+ * thousands of first words, and making every form of every phrase up front cost more than checking
+ * the draft. A phrase's forms all begin with a form of its first word (variantsOf), so the phrases
+ * are listed under those at the start, and each word's entries are those the whole index would
+ * hold, in the same order: phrases in lexicon order, forms in variantsOf's order, each once.
+ */
+export function lexiconIndex(lexicon: Lexicon): (head: string) => readonly Entry[] {
+  const candidates = new Map<string, Phrase[]>();
+  for (const [cls, keys] of Object.entries(lexicon)) {
+    for (const [key, phrases] of Object.entries(keys)) {
+      for (const phrase of phrases) {
+        const words = phraseWords(phrase);
+        const first = words[0];
+        if (first === undefined) continue;
+        const entry: Phrase = { cls, key, words };
+        for (const head of new Set([first, ...formsOf(first)])) {
+          const list = candidates.get(head);
+          if (list === undefined) candidates.set(head, [entry]);
+          else if (list.at(-1) !== entry) list.push(entry);
+        }
+      }
+    }
+  }
+  const index = new Map<string, Entry[]>();
+  return (head) => {
+    const known = index.get(head);
+    if (known !== undefined) return known;
+    const listed = candidates.get(head);
+    // Other words are not kept: an editor's session meets every word of its drafts.
+    if (listed === undefined) return NO_ENTRIES;
+    const entries: Entry[] = [];
+    const seen = new Set<string>();
+    for (const phrase of listed) {
+      for (const words of (phrase.variants ??= variantsOf(phrase.words))) {
+        if (words[0] !== head) continue;
+        const id = `${phrase.cls}\u0000${phrase.key}\u0000${words.join(' ')}`;
+        if (seen.has(id)) continue;
+        seen.add(id);
+        entries.push({ rest: words.slice(1), cls: phrase.cls, key: phrase.key });
+      }
+    }
+    index.set(head, entries);
+    return entries;
+  };
+}
+
 /** Every hit; at one start, one class and key keeps only its longest phrase. */
-function findHits(index: ReadonlyMap<string, Entry[]>, words: readonly string[]): LexHit[] {
+function findHits(index: (head: string) => readonly Entry[], words: readonly string[]): LexHit[] {
   const hits: LexHit[] = [];
   words.forEach((word, i) => {
     const best = new Map<string, LexHit>();
-    for (const entry of index.get(word) ?? []) {
+    for (const entry of index(word)) {
       if (!entry.rest.every((w, k) => words[i + 1 + k] === w)) continue;
       const last = i + entry.rest.length;
       const id = `${entry.cls}\u0000${entry.key}`;

@@ -38,8 +38,8 @@ export function topicPattern(words: readonly string[], flags: string): RegExp | 
   for (const word of unique) {
     let node = root;
     // A run of white space is one unit (`\s+`); every other code point is one unit.
-    for (const unit of word.match(/\s+|[^\s]/gu) ?? []) {
-      const key = /^\s/u.test(unit) ? ' ' : unit;
+    for (const [unit, space] of word.matchAll(UNIT)) {
+      const key = space === undefined ? unit : ' ';
       let next = node.get(key);
       if (next === undefined) {
         next = new Map();
@@ -54,15 +54,32 @@ export function topicPattern(words: readonly string[], flags: string): RegExp | 
 
 type Trie = Map<string, Trie>;
 const END = '';
+const UNIT = /(\s+)|[^\s]/gu;
 
+// Written with loops and a cache of unit sources: a thousand inflected phrases make some ten
+// thousand nodes, and this runs at the start of every run.
 function trieSource(node: Trie): string {
-  const branches = [...node.entries()].filter(([key]) => key !== END).map(([key, child]) => `${unitSource(key)}${trieSource(child)}`);
-  if (branches.length === 0) return '';
-  const body = branches.length === 1 ? branches[0] ?? '' : `(?:${branches.join('|')})`;
+  let first: string | undefined;
+  let branches: string[] | undefined;
+  for (const [key, child] of node) {
+    if (key === END) continue;
+    const branch = unitSource(key) + trieSource(child);
+    if (first === undefined) first = branch;
+    else (branches ??= [first]).push(branch);
+  }
+  if (first === undefined) return '';
+  const body = branches === undefined ? first : `(?:${branches.join('|')})`;
   if (!node.has(END)) return body;
-  return `${branches.length === 1 ? `(?:${body})` : body}?`;
+  return `${branches === undefined ? `(?:${body})` : body}?`;
 }
 
+const unitSources = new Map<string, string>();
+
 function unitSource(unit: string): string {
-  return unit === ' ' ? '\\s+' : unit.replace(/[.*+?^${}()|[\]\\/]/gu, '\\$&');
+  let source = unitSources.get(unit);
+  if (source === undefined) {
+    source = unit === ' ' ? '\\s+' : unit.replace(/[.*+?^${}()|[\]\\/]/gu, '\\$&');
+    unitSources.set(unit, source);
+  }
+  return source;
 }

@@ -14,10 +14,7 @@
  * under the `development` condition), once. The parse trees are the same with and without it
  * (test/source/micromark-linear-text.test.ts); `npm run bench` measures the growth.
  */
-import { existsSync } from 'node:fs';
-import { createRequire } from 'node:module';
-import { join, sep } from 'node:path';
-import { pathToFileURL } from 'node:url';
+import { initialTextModules } from './micromark-initial-text.js';
 
 /** One micromark event: `[enter | exit, token, context]`, reduced to what the merge touches. */
 type Event = [string, { type: string; end: unknown }, unknown];
@@ -73,18 +70,8 @@ function wrap(initial: Initial | undefined): void {
   initial.resolveAll = linear;
 }
 
-/** The micromark package folder, found from the entry point the resolver picks. */
-function packageFolder(): string {
-  const entry = createRequire(import.meta.url).resolve('micromark');
-  const marker = `${sep}micromark${sep}`;
-  return entry.slice(0, entry.lastIndexOf(marker) + marker.length);
-}
-
-const folder = packageFolder();
-for (const build of ['lib', join('dev', 'lib')]) {
-  const file = join(folder, build, 'initialize', 'text.js');
-  if (!existsSync(file)) continue;
-  const text = (await import(pathToFileURL(file).href)) as { text?: Initial; string?: Initial; resolver?: Initial };
+for (const module of initialTextModules) {
+  const text = module as { text?: Initial; string?: Initial; resolver?: Initial };
   wrap(text.text);
   wrap(text.string);
   wrap(text.resolver);
