@@ -144,6 +144,14 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
       if (q.start >= c.clause[0] && q.end <= c.clause[1]) views[i] = clauseView(sentence, views[i] as TermHits, c, (text) => findTerms(text, packs));
     });
   }
+  // "The bottom 200 metres of the Dome C core hold 15,000 years": the stretch names no measure of the
+  // core, so the core's words are the next number's.
+  const isSegment = (q: Quantity) => q.dimension === 'length' && SEGMENT.test(sentence.slice(Math.max(0, q.start - 24), q.start));
+  quantities.forEach((q, i) => {
+    const next = views[i + 1];
+    if (!isSegment(q) || next === undefined) return;
+    for (const [id, spans] of views[i] as TermHits) if (!next.has(id)) next.set(id, spans);
+  });
   const breaks = clauseBreaks(sentence);
   // Per quantity: the value it binds, AMBIGUOUS, or null when its list left it unbound.
   const decided = new Map<number, string | null>();
@@ -159,7 +167,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   quantities.forEach((q, i) => {
     if (decided.has(i)) return;
     // "the lowest 200 metres hold 150,000 years": a stretch of the core, not its depth.
-    if (q.dimension === 'length' && SEGMENT.test(sentence.slice(Math.max(0, q.start - 24), q.start))) return;
+    if (isSegment(q)) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const vetoes = vetoView(sentence, view, q, role);
