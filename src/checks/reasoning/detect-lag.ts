@@ -24,8 +24,8 @@ function detect({ index, read }: DetectInput): Cue[] {
   const kept = here.props.causes.some((c) => c.polarity === 'asserted' && (c.role === 'amplify' || c.role === 'feedback') && (c.agent === 'co2' || c.agent === undefined));
   if (kept) return [];
   const maxim = latecomerDenied(here.s);
-  if (maxim !== undefined && [here, read(index - 1), read(index - 2)].some((r) => r?.props.orders.some(isTemperatureFirst) ?? false)) return [maxim];
-  if (!ordered) return [];
+  const latecomer = maxim !== undefined && [here, read(index - 1), read(index - 2)].some((r) => r?.props.orders.some(isTemperatureFirst) ?? false) ? [maxim] : [];
+  if (!ordered) return latecomer;
   // "a consequence cannot also be a cause": an agent left unnamed in a sentence about CO2 is CO2.
   const aboutCo2 = here.s.of('entities', 'co2').length > 0;
   const denial = here.props.causes.find(
@@ -33,7 +33,7 @@ function detect({ index, read }: DetectInput): Cue[] {
   );
   if (denial !== undefined) return [{ start: denial.start, end: denial.end }];
   const follower = here.s.words.some((w) => w.text === 'whether') ? undefined : here.props.orders.find((o) => isTemperatureFirst(o) && o.dismissive);
-  return follower === undefined ? [] : [{ start: follower.start, end: follower.end }];
+  return follower === undefined ? latecomer : [{ start: follower.start, end: follower.end }];
 }
 
 const RELATIVE = new Set(['that', 'which', 'who']);
