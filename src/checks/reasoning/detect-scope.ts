@@ -50,7 +50,8 @@ function detectRegional(input: DetectInput): Cue[] {
   // record the whole sentence is read from.
   // "Going by Vostok, the planet was 9 °C colder": a record after a read-from phrase (`read-from`) in its
   // segment is where the whole sentence is read from, too.
-  const readFrom = findPhrases(input.sentence, words('read-from')).map((p) => s.words.find((w) => w.start === p.start));
+  // The tokens are read only when a record and the globe are both named (most sentences stop here).
+  const readFrom = records.length === 0 || s.of('regions', 'global').length === 0 ? [] : findPhrases(input.sentence, words('read-from')).map((p) => s.words.find((w) => w.start === p.start));
   // A region named outside that segment ("Going by Vostok, Antarctica was 9 °C colder; the globe...")
   // is what the record is read as.
   const readAfter = (r: { first: number }) => readFrom.some((w) => w !== undefined && w.segment === s.words[r.first]?.segment && w.start < (s.words[r.first]?.start ?? 0));
