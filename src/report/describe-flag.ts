@@ -1,16 +1,12 @@
 import type { Flag } from '../types.js';
+import { midSentence } from '../rulepack/describe-range.js';
 import { asSentence, formatClaimed, formatRange } from './format-value.js';
 
 /** The reference part of a flag in words: `790,000 to 810,000 yr for the time span of ... (as of 2007)`. */
 export function formatReference(reference: NonNullable<Flag['reference']>): string {
   const range = formatRange(reference.low, reference.high, reference.unit);
   const asOf = reference.asOf === undefined ? '' : ` (as of ${reference.asOf})`;
-  return `${range} for ${lowerFirst(reference.measures)}${asOf}`;
-}
-
-/** "Time span of..." reads "time span of..." mid-sentence; acronyms such as "CO2" or "EPICA" stay. */
-function lowerFirst(text: string): string {
-  return /^\p{Lu}\p{Ll}/u.test(text) ? `${text.charAt(0).toLowerCase()}${text.slice(1)}` : text;
+  return `${range} for ${midSentence(reference.measures)}${asOf}`;
 }
 
 /**

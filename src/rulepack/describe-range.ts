@@ -43,7 +43,7 @@ function properNames(packs: { terms: readonly Term[] }): Set<string> {
  */
 export function midSentence(text: string, packs?: { terms: readonly Term[] }): string {
   const [first = '', second = ''] = text.split(/\s+/u);
-  if (!/^\p{Lu}\p{Ll}/u.test(first) || /^\p{Lu}\p{Ll}/u.test(second)) return text;
+  if (!/^\p{Lu}(?:\p{Ll}|$)/u.test(first) || /^\p{Lu}\p{Ll}/u.test(second)) return text;
   if (packs !== undefined && properNames(packs).has(first)) return text;
   return `${text.charAt(0).toLowerCase()}${text.slice(1)}`;
 }

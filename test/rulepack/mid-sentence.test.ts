@@ -12,6 +12,7 @@ describe('a measure quoted mid-sentence', () => {
     ['Atmospheric CO2 at the Last Glacial Maximum', 'atmospheric CO2 at the Last Glacial Maximum'],
     ['Depth of the EPICA Dome C core', 'depth of the EPICA Dome C core'],
     ['CO2 growth rate', 'CO2 growth rate'],
+    ['A CO2 level restated in percent', 'a CO2 level restated in percent'],
     ['Mauna Loa annual mean CO2', 'Mauna Loa annual mean CO2'],
     ['East Antarctic LGM cooling', 'East Antarctic LGM cooling'],
     ['Antarctic warming across the last deglaciation', 'Antarctic warming across the last deglaciation'],
