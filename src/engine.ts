@@ -10,6 +10,7 @@ import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { isChecklistText } from './report/checklist-lines.js';
 import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
+import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
 import { entityWordsOf, subjectWordsOf } from './propositions/index.js';
 import { parseQuantities } from './quantities/index.js';
@@ -431,7 +432,10 @@ function sceneBefore(blocks: readonly ProseBlock[], index: number, packs: Loaded
   let finders = periodFinders.get(packs);
   if (finders === undefined) {
     const periods = Object.entries(packs.lexicon['periods'] ?? {}).filter(([key]) => key !== 'deglaciation');
-    finders = periods.map(([key, phrases]) => [key, new RegExp(`(?<![\\p{L}\\p{N}])(?:${phrases.map(escapeRegExp).join('|')})(?![\\p{L}\\p{N}])`, 'giu')]);
+    finders = periods.flatMap(([key, phrases]) => {
+      const pattern = topicPattern(phrases, 'giu');
+      return pattern === undefined ? [] : [[key, pattern] as [string, RegExp]];
+    });
     periodFinders.set(packs, finders);
   }
   const heading = blocks[index]?.heading;
@@ -444,10 +448,6 @@ function sceneBefore(blocks: readonly ProseBlock[], index: number, packs: Loaded
     if (best !== undefined) return best.key;
   }
   return undefined;
-}
-
-function escapeRegExp(text: string): string {
-  return text.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&');
 }
 
 const factMatchers = new WeakMap<LoadedPacks, TopicMatcher>();

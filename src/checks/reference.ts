@@ -92,7 +92,7 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
 }
 
 /** The scope check whose flag a regional figure told as global gets. */
-export const REGIONAL_AS_GLOBAL = 'scope.regional-record-as-global';
+const REGIONAL_AS_GLOBAL = 'scope.regional-record-as-global';
 
 /**
  * A regional value (`regional_version_of: r`) whose range holds the claim, flagged by the scope

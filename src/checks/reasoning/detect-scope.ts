@@ -49,8 +49,8 @@ function detectRegional(input: DetectInput): Cue[] {
   // "…the whole globe warmed by 10 °C, as Greenland's ice records": a closing "as" clause names the
   // record the whole sentence is read from.
   // "Going by Vostok, the planet was 9 °C colder": a record after a read-from phrase (`read-from`) in its
-  // segment is where the whole sentence is read from, too.
-  // The tokens are read only when a record and the globe are both named (most sentences stop here).
+  // segment is where the whole sentence is read from, too. The tokens (and compromise's roots) are
+  // read for it only when a record and the globe are both named: most sentences stop before.
   const readFrom = records.length === 0 || s.of('regions', 'global').length === 0 ? [] : findPhrases(input.sentence, words('read-from')).map((p) => s.words.find((w) => w.start === p.start));
   // A region named outside that segment ("Going by Vostok, Antarctica was 9 °C colder; the globe...")
   // is what the record is read as.
