@@ -34,6 +34,10 @@ for (const name of names) {
   for (const f of score.falses) {
     console.log(`  false ${f.line.file}:${f.line.line} ${f.flags.map((x) => x.ruleId).join(', ')} "${f.line.text}"`);
   }
+  for (const k of score.keyless) {
+    const said = k.flags.map((x) => `${x.ruleId}: ${x.correction ?? x.reference?.text ?? '(no correction)'}`).join(' | ');
+    console.log(`  keyless ${k.line.file}:${k.line.line} wants [${k.line.key.join(', ')}] got ${said}`);
+  }
 }
 
 const REASONING = ['logic', 'scope', 'direction'];

@@ -30,6 +30,8 @@ export interface SetScore {
   otherKind: number;
   misses: KeyedLine[];
   falses: { line: KeyedLine; flags: Flag[] }[];
+  /** Caught numeric errors whose correction lacks every key form, with the flags that caught them. */
+  keyless: { line: KeyedLine; flags: Flag[] }[];
   /** Keyed lines whose text is not on their line: the key needs fixing. */
   keyProblems: string[];
 }
@@ -53,6 +55,7 @@ export async function scoreSet(set: AnswerSet, packs?: LoadedPacks): Promise<Set
     otherKind: 0,
     misses: [],
     falses: [],
+    keyless: [],
     keyProblems: [],
   };
   for (const line of set.lines) {
@@ -83,6 +86,7 @@ export async function scoreSet(set: AnswerSet, packs?: LoadedPacks): Promise<Set
     if (line.key.length > 0) {
       score.correctionValue.of += 1;
       if (right.some((f) => carriesKey(f, line.key))) score.correctionValue.hit += 1;
+      else score.keyless.push({ line, flags: right });
     }
   }
   return score;
