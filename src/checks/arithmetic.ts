@@ -5,7 +5,7 @@
  * percentage that contradicts its two values. Tolerances come from the intervals (see
  * src/quantities/interval-rules.ts); correct arithmetic is never flagged.
  */
-import { correctionFigures, formatQuantity, hedgeRule, parseQuantities, rewriteQuantity } from '../quantities/index.js';
+import { correctionFigures, derivedFigures, formatQuantity, hedgeRule, parseQuantities, rewriteQuantity } from '../quantities/index.js';
 import type { FlagDraft, Quantity } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
 import { disjoint, levelFor } from './arithmetic-levels.js';
@@ -15,9 +15,10 @@ import { shownClaim } from './reference-format.js';
 /**
  * The replacement for a stated quantity: its own words with the right value. An approximation
  * hedge stays ("about 100 ppm"); a bound is dropped, since "more than 1.6 times" would misstate it.
+ * A sum shows the figures its inputs allow (derivedFigures); a conversion asks for its own.
  */
-export function correctionFor(q: Quantity, value: number): string {
-  const rewritten = rewriteQuantity(q, value);
+export function correctionFor(q: Quantity, value: number, figures = derivedFigures(q, value)): string {
+  const rewritten = rewriteQuantity(q, value, figures);
   if (q.hedge === undefined || hedgeRule(q.hedge)?.id === 'about') return rewritten;
   const lower = rewritten.toLowerCase();
   const hedge = q.hedge.toLowerCase();

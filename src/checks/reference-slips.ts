@@ -12,7 +12,7 @@
  * instead of °C is 5/9 of itself, close enough to many a wrong figure to excuse it as a slip; the
  * restatement rules catch °F slips where both units are written.
  */
-import { convert, formatQuantity } from '../quantities/index.js';
+import { convert, correctionFigures, formatQuantity, rewriteQuantity } from '../quantities/index.js';
 import type { ReferenceValue } from '../rulepack/types.js';
 import type { Dimension, Quantity } from '../types.js';
 
@@ -25,14 +25,18 @@ interface Slip {
   to?: string;
   /** A scale on the canonical interval (1000: thousands meant where years were written). */
   scale?: number;
+  /** With a scale: the unit that keeps the draft's number ("2.58 ka" reads "2.58 Ma"). */
+  swap?: Record<string, string>;
+  /** With a unit swap: the right figure is also given in the draft's own words ("(about 10,700 feet)"). */
+  alsoAsWritten?: boolean;
   what: string;
 }
 
 const SLIPS: readonly Slip[] = [
-  { dimensions: ['length'], from: ['ft'], to: 'm', what: 'feet written for metres (1 ft = 0.3048 m)' },
+  { dimensions: ['length'], from: ['ft'], to: 'm', alsoAsWritten: true, what: 'feet written for metres (1 ft = 0.3048 m)' },
   { dimensions: ['concentration', 'concentration-rate'], from: ['ppb'], to: 'ppm', what: 'parts per billion written for parts per million (1 ppm = 1,000 ppb)' },
-  { dimensions: ['age', 'duration'], from: ['yr', 'yr ago', 'yr BP', 'kyr', 'ka', 'century', 'millennium'], scale: 1000, what: 'a thousand-fold slip: thousands meant and not written, or thousands written for millions (SI: k = 10^3, M = 10^6)' },
-  { dimensions: ['age', 'duration'], from: ['kyr', 'ka', 'Myr', 'Ma'], scale: 1 / 1000, what: 'a thousand-fold slip: millions written for thousands, or thousands for units (SI: k = 10^3, M = 10^6)' },
+  { dimensions: ['age', 'duration'], from: ['yr', 'yr ago', 'yr BP', 'kyr', 'ka', 'century', 'millennium'], scale: 1000, swap: { ka: 'Ma', kyr: 'Myr' }, what: 'a thousand-fold slip: thousands meant and not written, or thousands written for millions (SI: k = 10^3, M = 10^6)' },
+  { dimensions: ['age', 'duration'], from: ['kyr', 'ka', 'Myr', 'Ma'], scale: 1 / 1000, swap: { Ma: 'ka', Myr: 'kyr' }, what: 'a thousand-fold slip: millions written for thousands, or thousands for units (SI: k = 10^3, M = 10^6)' },
 ];
 
 /** The slip that makes `q` agree with `r`, with the corrected wording, or undefined. */
@@ -48,11 +52,12 @@ export function unitSlip(r: Pick<ReferenceValue, 'low' | 'high' | 'unit'>, q: Qu
       const asWritten = (x: number) => convert(x, q.unit, q.statedUnit, q.dimension);
       const toOther = (x: number) => convert(asWritten(x), slip.to as string, q.unit, q.dimension);
       [low, high] = [toOther(q.low), toOther(q.high)].sort((a, b) => a - b) as [number, number];
-      shown = () => formatQuantity(toOther(q.value), q.unit, slip.to as string);
+      const meant = toOther(q.value);
+      shown = () => formatQuantity(meant, q.unit, slip.to as string) + (slip.alsoAsWritten === true ? ` (${rewriteQuantity(q, meant, correctionFigures(q, 2))})` : '');
     } else {
       const k = slip.scale ?? 1;
       [low, high] = [q.low * k, q.high * k];
-      shown = () => formatQuantity(q.value * k, q.unit, q.statedUnit);
+      shown = () => formatQuantity(q.value * k, q.unit, slip.swap?.[q.statedUnit] ?? q.statedUnit);
     }
     if (low <= r.high && r.low <= high) return { what: slip.what, correction: shown(), low, high };
   }

@@ -34,7 +34,7 @@ export function checkUnits(text: string, quantities: Quantity[], context: readon
         reason: single ? f.reason : `${q.text} should be ${right}. ${f.reason}`,
         claimed: shownClaim(q),
         reference: { id: rule.id, measures: rule.summary, text: right, low: f.computed.low, high: f.computed.high, unit: f.unit ?? q.unit },
-        correction: f.correction ?? correctionFor(q, f.computed.value),
+        correction: f.correction ?? correctionFor(q, f.computed.value, correctionFigures(q)),
         sources: f.sources,
       });
     }

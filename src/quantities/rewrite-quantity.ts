@@ -15,10 +15,22 @@ function writtenFigures(written: string): number {
   return digits.includes('.') ? bare.length : bare.replace(/0+$/, '').length;
 }
 
-/** The significant figures a correction of `q` keeps: as many as the draft wrote, and at least 3. */
-export function correctionFigures(q: Quantity): number {
+/** The significant figures a correction of `q` keeps: as many as the draft wrote, and at least `least`. */
+export function correctionFigures(q: Quantity, least = 3): number {
   const atom = findAtoms(q.text)[0];
-  return Math.max(3, atom === undefined ? 0 : writtenFigures(q.text.slice(atom.start, atom.end)));
+  return Math.max(least, atom === undefined ? 0 : writtenFigures(q.text.slice(atom.start, atom.end)));
+}
+
+/**
+ * The figures a value worked out from the draft's own numbers is shown with, in the draft's unit: a
+ * whole result exactly (12,900 − 11,700 = 1,200), any other to the figures the draft wrote and at
+ * least two, since its inputs are rounded too (76 ÷ 6,000 = 0.013, not 0.0127).
+ */
+export function derivedFigures(q: Quantity, value: number): number {
+  const stated = fromCanonical(value, q.statedUnit === '' ? q.unit : q.statedUnit, q.dimension);
+  const whole = Math.round(stated);
+  const exact = Math.abs(stated) >= 1 && Math.abs(stated - whole) <= 1e-9 * Math.abs(stated);
+  return exact ? Math.max(1, String(Math.abs(whole)).replace(/0+$/u, '').length) : correctionFigures(q, 2);
 }
 
 /**
@@ -33,7 +45,8 @@ export function rewriteQuantity(q: Quantity, value: number, significant?: number
   if (atom === undefined || atoms.length > 1 || atom.form === 'vague') return formatQuantity(value, q.unit, q.statedUnit, figures);
   const stated = fromCanonical(value, id, q.dimension);
   let written: string;
-  if (atom.form === 'multiplier') written = `${formatNumber(stated, 2)} times`;
+  // A ratio below one reads as a share ("roughly 45 percent of today's 420 ppm", not "0.45 times").
+  if (atom.form === 'multiplier') written = Math.abs(stated) < 1 ? `${formatNumber(stated * 100, 2)} percent` : `${formatNumber(stated, 2)} times`;
   else if (q.statedUnit === 'CE') {
     if (Math.round(stated) < 1) return formatQuantity(value, q.unit, q.statedUnit);
     written = String(Math.round(stated));

@@ -32,8 +32,8 @@ const WRONG: [string, string, string, string, string][] = [
   // A change as a share of where it started: a fraction after a change noun, or a percentage restating
   // a change. Common practice: (300 − 200) / 200 = a half; (250 − 200) / 250 = a fifth (a drop is
   // measured from the higher level); 60 / 240 = 25 percent.
-  ['share of a change', 'In the Dunholm model CO2 climbs from about 200 ppm to 300 ppm, a rise of roughly a third.', 'arith.ratio', 'roughly a third', 'roughly 0.5 times'],
-  ['share of a change', 'The lake level sat at 250 m, some 50 m above its glacial stand of 200 m: a fall of almost half.', 'arith.ratio', 'almost half', '0.2 times'],
+  ['share of a change', 'In the Dunholm model CO2 climbs from about 200 ppm to 300 ppm, a rise of roughly a third.', 'arith.ratio', 'roughly a third', 'roughly 50 percent'],
+  ['share of a change', 'The lake level sat at 250 m, some 50 m above its glacial stand of 200 m: a fall of almost half.', 'arith.ratio', 'almost half', '20 percent'],
   ['share of a change', 'In the Dunholm run CO2 rose from 240 ppm to 300 ppm, a gain of 60 ppm, or about 40 percent.', 'arith.ratio', 'about 40 percent', 'about 25 percent'],
   // A unit left off one side: bare ends beside a change in ppm, or a bare change beside ends in ppm;
   // a filler ("barely", "only") between the change word and the figure. Common practice: 300 − 220 = 80.

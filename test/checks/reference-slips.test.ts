@@ -18,12 +18,19 @@ const flagsOf = async (text: string) => (await checkText(text, { packs, format: 
 describe('a unit slip against a reference', () => {
   it('reads feet written for metres', () => {
     const [q] = parseQuantities('3,270 feet');
-    expect(unitSlip({ low: 3260, high: 3280, unit: 'm' }, q!)?.correction).toBe('3,270 m');
+    expect(unitSlip({ low: 3260, high: 3280, unit: 'm' }, q!)?.correction).toBe('3,270 m (10,700 feet)');
   });
 
   it('reads a thousand-fold slip of a date', () => {
     const [q] = parseQuantities('2.58 kyr ago');
-    expect(unitSlip({ low: 2_580_000, high: 2_580_000, unit: 'yr BP' }, q!)?.correction).toMatch(/2,580 ka/u);
+    expect(unitSlip({ low: 2_580_000, high: 2_580_000, unit: 'yr BP' }, q!)?.correction).toBe('2.58 Ma');
+  });
+
+  it('keeps the draft's number and swaps the prefix when millions were written for thousands', () => {
+    // The Younger Dryas began about 12,900 years ago (Rasmussen et al. 2006, JGR 111, D06102,
+    // doi 10.1029/2005JD006079, from memory): "12.9 Ma" meant 12.9 ka.
+    const [q] = parseQuantities('12.9 Ma');
+    expect(unitSlip({ low: 12_800, high: 12_900, unit: 'yr BP' }, q!)?.correction).toBe('12.9 ka');
   });
 
   it('finds no slip where no reading fits', () => {
@@ -33,7 +40,7 @@ describe('a unit slip against a reference', () => {
 
   it('flags the slip through the engine, with the figure in the right unit', async () => {
     const flags = await flagsOf('The EPICA Dome C ice core was drilled to a depth of 3,270 feet.');
-    expect(flags).toContainEqual(['unit.scale-slip', '3,270 m']);
+    expect(flags).toContainEqual(['unit.scale-slip', '3,270 m (10,700 feet)']);
     expect(flags.map(([id]) => id)).not.toContain('value.edc-drilled-depth');
   });
 
