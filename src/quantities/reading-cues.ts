@@ -22,6 +22,14 @@ export const TEMPERATURE_CUES: readonly Cue[] = [
 ];
 
 /**
+ * Words that put a size on something without saying what kind of figure it is: "which the isotopes
+ * put at about 9 °C", "estimated at 6 °C". The "at" in them is no reading cue; the figure is read
+ * by the words after it ("estimated at 6 °C colder") or, with none, as if no cue were there (a
+ * change, unless signed negative).
+ */
+export const ESTIMATE_WORDS: readonly string[] = ['put at', 'puts at', 'putting at', 'estimated at', 'estimates at', 'estimate at', 'reckoned at', 'placed at', 'places at', 'pegged at', 'pegs at', 'set at', 'sets at', 'judged at', 'reconstructed at', 'assessed at', 'calculated at', 'figured at', 'given as', 'quoted at', 'quoted as'];
+
+/**
  * A change named as the subject of the clause, then its value: "the temperature change in
  * Antarctica between glacial and interglacial was about 9 °C", "the warming across the
  * deglaciation amounted to 8 °C". The value is a change even after "was" or "is".
@@ -32,10 +40,21 @@ const CHANGE_SUBJECT = new RegExp(
   'iu',
 );
 
-/** True when the clause before a temperature names a change as its subject and the verb joins them. */
+const CHANGE_NOUN = new RegExp(String.raw`(?:^|[^\p{L}])(?:${CHANGE_SUBJECT_NOUNS.join('|')})(?![\p{L}])`, 'iu');
+const RELATIVE_START = /^[\s\u00A0]*(?:which|that)(?![\p{L}])/iu;
+
+/**
+ * True when the clause before a temperature names a change as its subject and the verb joins them,
+ * or is a relative clause on a change ("Antarctic warming, which the isotopes put at about 9 °C").
+ */
 export function namesChangeBefore(clause: string): boolean {
-  const own = clause.slice(Math.max(0, ...[',', ';', ':', '(', '.'].map((c) => clause.lastIndexOf(c) + 1)));
-  return CHANGE_SUBJECT.test(own);
+  const cut = (text: string) => Math.max(0, ...[',', ';', ':', '(', '.'].map((c) => text.lastIndexOf(c) + 1));
+  const at = cut(clause);
+  const own = clause.slice(at);
+  if (CHANGE_SUBJECT.test(own)) return true;
+  if (!RELATIVE_START.test(own) || at === 0) return false;
+  const head = clause.slice(0, at - 1);
+  return CHANGE_NOUN.test(head.slice(cut(head)));
 }
 
 /**
@@ -80,6 +99,8 @@ export function afterMatcher(words: readonly string[]): RegExp {
 const compiled = (cues: readonly Cue[]): { cue: Cue; re: RegExp }[] =>
   cues.map((cue) => ({ cue, re: cue.where === 'before' ? beforeMatcher(cue.words) : afterMatcher(cue.words) }));
 const TEMPERATURE = compiled(TEMPERATURE_CUES);
+const TEMPERATURE_AFTER = TEMPERATURE.filter(({ cue }) => cue.where === 'after');
+const ESTIMATE = beforeMatcher(ESTIMATE_WORDS);
 const DURATION = compiled(DURATION_CUES);
 const CALENDAR = beforeMatcher(CALENDAR_CUES);
 const LABEL = beforeMatcher(LABEL_CUES);
@@ -93,7 +114,7 @@ function firstCue(table: { cue: Cue; re: RegExp }[], before: string, after: stri
 export function readTemperature(before: string, after: string, sign: string, unitId: string, value: number, clause = before): Dimension {
   if (unitId === 'K' && Math.abs(value) < 100) return 'temperature-change';
   if (namesChangeBefore(clause)) return 'temperature-change';
-  const cue = firstCue(TEMPERATURE, before, after);
+  const cue = firstCue(ESTIMATE.test(before) ? TEMPERATURE_AFTER : TEMPERATURE, before, after);
   if (cue !== undefined) return cue.reading;
   if (sign === '+') return 'temperature-change';
   return sign === '-' ? 'temperature' : 'temperature-change';
