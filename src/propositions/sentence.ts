@@ -91,7 +91,9 @@ function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
   for (const h of hits) {
     const inLonger = hits.some((o) => o !== h && o.cls === 'entities' && o.first <= h.first && o.last >= h.last && o.last - o.first > h.last - h.first);
     if (h.cls === 'entities' && PARTICIPANTS.has(h.key) && !inLonger) {
-      const near = regions.find((r) => Math.abs(r.first - h.first) <= 3 && words[r.first]?.clause === words[h.first]?.clause);
+      // "at the other end of the globe, where Antarctic temperatures dropped": the nearest region.
+      const distance = (r: LexHit) => Math.min(Math.abs(r.first - h.first), Math.abs(r.last - h.first));
+      const near = regions.filter((r) => Math.abs(r.first - h.first) <= 3 && words[r.first]?.clause === words[h.first]?.clause).sort((a, b) => distance(a) - distance(b))[0];
       things.push({ kind: h.key, first: h.first, last: h.last, ...(h.key === 'temperature' && near !== undefined ? { region: near.key } : {}) });
     } else if (h.cls === 'changes' && (h.key === 'warm' || h.key === 'cool') && isNominal(words, h.first)) {
       // "the warming", "Antarctic cooling": a temperature change named as a thing.

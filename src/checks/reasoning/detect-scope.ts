@@ -88,7 +88,8 @@ function detectRegional(input: DetectInput): Cue[] {
     if (phrase === 'not' || phrase === 'only') return !/^(?:just|only|merely|simply)$/u.test(s.words[next]?.text ?? '') && previous !== 'not';
     return true;
   });
-  if (contrast.length > 0) return [];
+  // "the swing at Vostok understates the global change": the record is compared with the globe, not read as it.
+  if (contrast.length > 0 || here.props.comparisons.some((c) => c.attribute === 'size')) return [];
   // "...and the CO2 then warmed the planet": CO2 acting on the globe, not a record read as global.
   if (here.props.causes.some((c) => c.agent === 'co2' && c.polarity === 'asserted')) return [];
   // "global temperature": the temperature word just after the global one is part of the claim.
