@@ -16,6 +16,8 @@ import type { LexHit } from './lexicon.js';
 import { denialsBefore, type ReadSentence } from './sentence.js';
 import type { Change } from './types.js';
 
+const COORDINATORS = new Set(['and', 'but', 'so', 'or', 'yet', 'while']);
+const DETERMINERS = new Set(['the', 'its', 'their', 'this', 'that', 'a', 'an', 'our', 'total', 'overall']);
 const ORDINAL = /^(\d[\d,]*)(?:st|nd|rd|th)$/u;
 const NUMBER = /^\d[\d,]*(?:\.\d+)?$/u;
 
@@ -47,10 +49,16 @@ function incrementsOf(s: ReadSentence): { first: number; last: number }[] {
   const found: { first: number; last: number }[] = s.of('entities', 'marginal-forcing').map((h) => ({ first: h.first, last: h.last }));
   for (const inc of s.of('changes', 'increment')) {
     if (found.some((f) => f.first <= inc.first && inc.first <= f.last)) continue;
-    // "extra puff of carbon dioxide": one or two words, then "of", then the gas.
+    // "extra puff of carbon dioxide": one or two words naming one unit (no number, no plural: "an
+    // extra 100 ppm of CO2", "additional emissions of CO2" are amounts), then "of", then the gas,
+    // set against another unit ("than the one before").
     const of = s.words.findIndex((w, i) => i > inc.last && i <= inc.last + 3 && w.text === 'of');
+    const unit = s.words.slice(inc.last + 1, of < 0 ? inc.last + 1 : of);
+    if (unit.some((w) => /^\d|[^s]s$/u.test(w.text))) continue;
     const gas = of < 0 ? undefined : s.of('entities', 'co2').find((c) => c.first === of + 1 || (c.first === of + 2 && s.words[of + 1]?.text === 'the'));
-    if (gas !== undefined) found.push({ first: inc.first, last: gas.last });
+    const clause = s.words[inc.first]?.clause;
+    const against = s.words.some((w, i) => i > inc.last && w.clause === clause && w.text === 'than');
+    if (gas !== undefined && against) found.push({ first: inc.first, last: gas.last });
   }
   return found;
 }
@@ -68,8 +76,10 @@ const SIGN_OF = (h: LexHit): 1 | -1 | 0 => {
  */
 function directionAfter(s: ReadSentence, m: { first: number; last: number }): 1 | -1 | undefined {
   const at = s.words[m.first];
+  // "..., and the total keeps rising": a coordinated clause with a subject of its own ends the reach.
+  const stop = s.words.findIndex((w, i) => i > m.last && w.segment !== s.words[i - 1]?.segment && COORDINATORS.has(w.text) && DETERMINERS.has(s.words[i + 1]?.text ?? ''));
   const signs = (scope: 'segment' | 'clause') =>
-    new Set(s.hits.filter((h) => h.first > m.last && s.words[h.first]?.[scope] === at?.[scope]).map(SIGN_OF).filter((x) => x !== 0));
+    new Set(s.hits.filter((h) => h.first > m.last && (stop < 0 || h.first < stop) && s.words[h.first]?.[scope] === at?.[scope]).map(SIGN_OF).filter((x) => x !== 0));
   for (const scope of ['segment', 'clause'] as const) {
     const found = signs(scope);
     if (found.size === 1) return [...found][0] as 1 | -1;

@@ -31,6 +31,7 @@ const northCools = (directed: readonly Directed[]) => directed.some((d) => d.att
 export function echoedNorthernCold(s: ReadSentence, directed: readonly Directed[], previous: ReadSentence | undefined, before: readonly Directed[]): string | undefined {
   if (!directed.some((d) => d.attribute === 'temperature' && SOUTH.has(d.of) && d.dir === -1)) return undefined;
   if (!northCools(directed) && !northCools(before)) return undefined;
+  // ("near-glacial cold" is how a stadial is told: the word alone sets no glacial scene.)
   const glacial = (r: ReadSentence | undefined) => r !== undefined && (r.of('periods', 'lgm').length > 0 || r.of('entities', 'ice-age').length > 0);
   if (glacial(s) || glacial(previous)) return undefined;
   const tied = s.of('correlation').length > 0 || s.of('order', 'together').length > 0 || s.words.some((w) => SAMENESS.has(w.text));

@@ -57,6 +57,11 @@ describe('the effect of one more unit of CO2 (logarithmic forcing)', () => {
     ['The warming per ppm of CO2 shrinks as the concentration climbs.', 'clean'],
     // No warming named: a cost, not an effect.
     ['Each extra ppm of CO2 costs more to remove than the one before.', 'clean'],
+    // Amounts, not one more unit; and a total that rises, not the effect per unit.
+    ['Additional emissions of CO2 will warm the planet more.', 'clean'],
+    ['An additional dose of CO2 warms the planet more.', 'clean'],
+    ['Each extra ppm of CO2 still adds warming, and the total keeps rising.', 'clean'],
+    ['Each extra ppm of CO2 adds warming, and each one adds more than the last.', 'flag'],
   ]))('%s → %s', async (text, expected) => {
     const found = (await serious(text)).includes('direction.co2-forcing-logarithmic');
     expect(found).toBe(expected === 'flag');
