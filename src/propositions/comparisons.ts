@@ -6,7 +6,7 @@ import { inPhrase, kindOf, subjectOf, thingAfter, thingBefore } from './resolve.
 import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Comparison } from './types.js';
 
-const SIGN: Record<string, 1 | -1 | 0> = { 'age-up': 1, 'age-down': -1, 'age-same': 0, 'size-up': 1, 'size-down': -1, 'age-up-verb': 1, 'age-down-verb': -1, 'size-up-verb': 1, 'size-down-verb': -1 };
+const SIGN: Record<string, 1 | -1 | 0> = { 'age-up': 1, 'age-down': -1, 'age-same': 0, 'size-up': 1, 'size-down': -1, 'age-up-verb': 1, 'age-down-verb': -1, 'size-up-verb': 1, 'size-down-verb': -1, 'rate-up': 1, 'rate-down': -1 };
 const SWING = /^(?:swing|swings|swung|change|changes|changed|vary|varies|varied|range|amplitude|shift|shifts|shifted|moved|move|moves|fluctuat\w*|respond|responds|responded|react|reacts|reacted|temperature|temperatures)$/u;
 
 /** The comparisons one sentence states (a denied comparison states none). */
@@ -28,7 +28,7 @@ export function readComparisons(s: ReadSentence, previous?: ReadSentence): Compa
     const plain = s.things.find((t) => t.last < h.first && s.words[t.first]?.segment === segment && t.kind !== 'pronoun' && !inPhrase(s, t));
     const a = plain ?? subjectOf(s, h.first) ?? thingBefore(s, h.first, 'clause');
     if (a === undefined || b === undefined) continue;
-    const attribute = h.key.startsWith('age') ? 'age' : 'size';
+    const attribute = h.key.startsWith('age') ? 'age' : h.key.startsWith('rate') ? 'rate' : 'size';
     if (attribute === 'size') {
       const clause = s.words[h.first]?.clause;
       const words = s.words.filter((w) => w.clause === clause);

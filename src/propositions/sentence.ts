@@ -57,7 +57,7 @@ const COPULA_CONTRACTION = /^(that|this)'s$/u;
 const AUXILIARIES = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const PRONOUNS = new Set(['it', 'they', 'this', 'that', 'these', 'those', 'its', 'their']);
 /** Entities that take part in causes and orders. */
-const PARTICIPANTS = new Set(['co2', 'temperature', 'orbit', 'water', 'ice-age', 'trapped-air', 'ice', 'marginal-forcing']);
+const PARTICIPANTS = new Set(['co2', 'temperature', 'orbit', 'water', 'ice-age', 'trapped-air', 'ice', 'marginal-forcing', 'modern-rise', 'natural-rise']);
 
 /** Reads one sentence: words, segments, lexicon hits and things. */
 export function readSentence(text: string, lexicon: CompiledLexicon): ReadSentence {

@@ -17,6 +17,10 @@
  *   1728-1731, doi 10.1126/science.1078758.
  * - Polar swings exceed the global mean: Jouzel et al. 2007, Science 317, 793-796; Tierney et al.
  *   2020, Nature 584, 569-573.
+ * - The modern CO2 rise (about 2.4 ppm a year in the 2010s) is far faster than the deglacial rises
+ *   (about 0.013 ppm a year over Termination I, at most about 0.15 ppm a year in the fastest
+ *   century-scale jumps): Marcott et al. 2014, Nature 514, 616-619; NOAA GML growth rates
+ *   (Lan et al.), computed.
  * - Antarctic temperature led CO2 by a few centuries at most, while global temperature mostly
  *   followed CO2: Shakun et al. 2012, Nature 484, 49-54, doi 10.1038/nature10915; Parrenin et al.
  *   2013, Science 339, 1060-1063.
@@ -117,6 +121,20 @@ describe('solubility, delta-age and polar amplification in other words', () => {
     'As the seas cooled, they could hold more dissolved carbon dioxide.',
   ])('clean: %s', async (text) => {
     expect((await serious(text)).filter((r) => r.startsWith('direction.'))).toEqual([]);
+  });
+});
+
+describe('the pace of the modern CO2 rise against the natural ones', () => {
+  // Marcott et al. 2014; NOAA GML growth rates (computed).
+  it.each(cases([
+    ["What we're seeing today is a slower climb than the natural rises of the past.", 'flag'],
+    ['The natural rise at the end of the last ice age was faster than the modern rise.', 'flag'],
+    ['The modern rise is more gradual than the natural climb out of the last ice age.', 'flag'],
+    ["Today's rise is far faster than any natural rise in the ice-core record.", 'clean'],
+    ["The natural rise at the end of the last ice age was much slower than today's rise.", 'clean'],
+  ]))('%s → %s', async (text, expected) => {
+    const found = (await serious(text)).includes('direction.modern-co2-rise-faster-than-natural');
+    expect(found).toBe(expected === 'flag');
   });
 });
 
