@@ -71,9 +71,9 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
 
 function questionStance(s: ReadSentence, context: StanceContext, make: (k: StanceKind, flips?: boolean) => SentenceStance): SentenceStance {
   const first = s.words[0]?.text ?? '';
+  if (first === 'q' || isReported(s)) return make('asked');
   // "Did you know the poles swing less?": a teaser that states its content as a fact.
   if ((first === 'did' || first === 'do') && s.words[1]?.text === 'you' && s.words[2]?.text === 'know') return make('asserted');
-  if (first === 'q' || isReported(s)) return make('asked');
   const answeredNext = context.next !== undefined && ANSWER_OPENERS.has(context.next.words[0]?.text ?? '');
   // A segment opens a question with a wh-word or an auxiliary, after a joining word if any.
   const opens = (i: number) => {

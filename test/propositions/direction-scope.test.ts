@@ -116,6 +116,8 @@ describe('solubility, delta-age and polar amplification in other words', () => {
     'The ice has been sitting there longer than the air sealed in its bubbles.',
     'The global mean change understates the swing recorded at Dome C.',
     'Did you know the two poles swing more than the rest of the planet?',
+    // A teaser that reports someone else's view still asks.
+    'Did you know some people claim the poles swing less than the planet as a whole?',
     'The Antarctic swing overstates the global change by roughly a factor of two.',
     // "They could hold more CO2" holds gas, not a view: the sentence stays the writer's own, and right.
     'As the seas cooled, they could hold more dissolved carbon dioxide.',
