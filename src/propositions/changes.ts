@@ -7,6 +7,8 @@
  *   "Each extra ppm warms more than the last."     marginal-forcing +1
  */
 import type { LexHit } from './lexicon.js';
+import { readMarginal } from './marginal.js';
+import { echoedNorthernCold } from './seesaw.js';
 import { kindOf, thingAfter, thingBefore } from './resolve.js';
 import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Change, Directed, Relation } from './types.js';
@@ -29,7 +31,8 @@ export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed
   for (const h of s.of('changes')) {
     if (h.key === 'warm' || h.key === 'cool') {
       const thing = temperatureHolder(s, h);
-      const name = thing === undefined ? 'temperature' : nameOf(s, thing, previous);
+      // "Antarctica got hammered by that same cold": with no holder near, the clause's one region holds it.
+      const name = thing === undefined ? (clauseRegion(s, h) ?? 'temperature') : nameOf(s, thing, previous);
       // "Antarctica ..., cooling alongside Greenland": the place after a companion word shares the
       // change of the place before it, which holds it.
       const companion = thing !== undefined && thing.first > h.last && COMPANIONS.test(s.words.slice(h.last + 1, thing.first).map((w) => w.text).join(' '));
@@ -49,6 +52,8 @@ export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed
     }
   }
   for (const h of s.of('uptake')) {
+    // "pulled still more gas out of the air": a verb of taking is an uptake only with the air it takes from.
+    if (h.key === 'from-air' && !fromAir(s, h.last)) continue;
     const dir = uptakeDirection(s, h);
     if (dir !== undefined) push('co2', 'uptake', dir, h);
   }
@@ -84,6 +89,13 @@ function temperatureHolder(s: ReadSentence, h: LexHit): Thing | undefined {
   return adjacentBefore ? before : undefined;
 }
 
+/** The one region (not the globe) named before `h` in its clause, if exactly one is. */
+function clauseRegion(s: ReadSentence, h: LexHit): string | undefined {
+  const clause = s.words[h.first]?.clause;
+  const keys = new Set(s.of('regions').filter((r) => r.key !== 'global' && r.last < h.first && s.words[r.first]?.clause === clause).map((r) => r.key));
+  return keys.size === 1 ? [...keys][0] : undefined;
+}
+
 /** A thing's name for a fact: a region key for a regional temperature, else its kind. */
 function nameOf(s: ReadSentence, thing: Thing, previous?: ReadSentence): string {
   if (thing.region !== undefined) return thing.region;
@@ -93,15 +105,28 @@ function nameOf(s: ReadSentence, thing: Thing, previous?: ReadSentence): string 
   return s.of('regions').find((r) => s.words[r.first]?.clause === clause)?.key ?? 'temperature';
 }
 
+/** "out of the air", "from the atmosphere", "back in": where a verb of taking (`uptake.from-air`) takes from. */
+function fromAir(s: ReadSentence, last: number): boolean {
+  const after = s.words.slice(last + 1, last + 8).map((w) => w.text).join(' ');
+  return /\b(?:out of|from) the (?:air|atmosphere|sky)\b|\bback in\b/u.test(after);
+}
+
 /** +1 for taking CO2 in, -1 for letting it out; "less" turns it round. Undefined without CO2. */
 function uptakeDirection(s: ReadSentence, h: LexHit): 1 | -1 | undefined {
-  const noun = h.key === 'nouns';
+  const noun = h.key === 'nouns' || h.key === 'pressure';
   let base: 1 | -1 = h.key === 'out' ? -1 : 1;
   if (noun) {
-    const change = s.of('changes').find((c) => (c.key === 'up' || c.key === 'down') && Math.abs(c.first - h.last) <= 4);
+    // "the partial pressure of CO2 in the seawater fell": a pressure's change is its verb in the segment.
+    const segment = s.words[h.first]?.segment;
+    const change = s.of('changes').find((c) => (c.key === 'up' || c.key === 'down') && (Math.abs(c.first - h.last) <= 4 || (h.key === 'pressure' && c.first > h.last && s.words[c.first]?.segment === segment)));
     if (change === undefined) return undefined;
     base = change.key === 'up' ? 1 : -1;
+    // The gas's pressure in the water pushes it out: a higher pressure is less uptake.
+    if (h.key === 'pressure') base = (base * -1) as 1 | -1;
   } else {
+    // "the extra CO2 traps more heat": the verb's object is heat, so CO2 takes nothing up.
+    const object = s.things.find((t) => t.first > h.last && t.first - h.last <= 3);
+    if (object?.kind === 'temperature' && object.region === undefined) return undefined;
     // "less dissolved CO2": a participle before CO2 describes it, and states no uptake.
     const lead = s.words[h.first - 1]?.text ?? '';
     if (/ed$/u.test(s.words[h.last]?.text ?? '') && s.of('entities', 'co2').some((c) => c.first === h.last + 1) && /^(?:less|more|of|the|a|much|little|extra|some|no)$/u.test(lead)) return undefined;
@@ -148,11 +173,19 @@ export function readRelations(s: ReadSentence, directed: Directed[]): Relation[]
     // "It is not true that warmer seas absorb more CO2": one denial turns the whole relation round.
     // "gives up CO2 rather than absorbing more of it": the uptake set aside is denied.
     const setAside = /^(?:rather than|instead of)$/u.test(s.words.slice(Math.max(0, u.first - 2), u.first).map((w) => w.text).join(' '));
-    const denied = (t.negated || u.negated) !== setAside;
+    // "X, not the warming of the water, released the CO2": a "not" that sets a cause aside denies no direction.
+    const denied = ((t.negated && !setAsideCause(s, t, u)) || u.negated) !== setAside;
     const y = denied ? { ...u, dir: (-u.dir) as 1 | -1 } : u;
     relations.push({ kind: 'relation', x: { ...t, of: 'water' }, y, start: Math.min(t.start, u.start), end: Math.max(t.end, u.end) });
   }
   return relations;
+}
+
+/** ", not the warming of surface water alone, released": a segment opened by "not" before the verb's own. */
+function setAsideCause(s: ReadSentence, t: Directed, u: Directed): boolean {
+  const segment = s.words[t.first]?.segment;
+  const start = s.words.findIndex((w) => w.segment === segment);
+  return start > 0 && s.words[start]?.text === 'not' && s.words[u.first]?.segment !== segment;
 }
 
 /** "Even as the oceans warm, they absorb more CO2": a concession states no relation between the two. */
@@ -178,22 +211,16 @@ export function readChanges(s: ReadSentence, directed: Directed[], previous?: Re
   // `before`: the period the block before this one named, for a paragraph that names none up to
   // this sentence (a speaker's next turn, the next paragraph of a section).
   const named = [s, previous, ...earlier].some((r) => r !== undefined && r.of('periods').length > 0);
-  const period = periodIn(s) ?? periodIn(previous) ?? scene ?? (named ? undefined : before);
+  // "record a local glacial cooling": a sentence set in the glacial cycle leaves the scene's period.
+  const ownTime = s.of('periods', 'lgm').length + s.of('entities', 'ice-age').length > 0 || s.words.some((w) => w.text === 'glacial' || w.text === 'interglacial');
+  const period = periodIn(s) ?? (ownTime ? undefined : periodIn(previous) ?? scene ?? (named ? undefined : before));
+  // With no period named, a southern cooling that echoes the north's is set in a northern cold event.
+  const echo = period === undefined ? echoedNorthernCold(s, directed, previous, previous === undefined ? [] : readDirected(previous)) : undefined;
+  const during = (d: Directed) => period ?? (d.dir === -1 ? echo : undefined);
   const changes: Change[] = directed
     .filter((d) => d.attribute === 'temperature')
-    .map((d) => ({ kind: 'change', of: d.of, attribute: 'temperature', dir: (d.negated ? -d.dir : d.dir) as 1 | -1, start: d.start, end: d.end, ...(period === undefined ? {} : { during: period }) }));
-  for (const m of s.of('entities', 'marginal-forcing')) {
-    const clause = s.words[m.first]?.clause;
-    // "each extra ppm costs more to remove" is no claim about warming.
-    const warming = s.hits.some((h) => s.words[h.first]?.clause === clause && ((h.cls === 'changes' && (h.key === 'warm' || h.key === 'cool')) || (h.cls === 'causes' && (h.key === 'roles' || h.key === 'verbs'))));
-    if (!warming) continue;
-    const after = (h: LexHit) => h.first > m.last && s.words[h.first]?.clause === clause;
-    const up = s.hits.some((h) => after(h) && ((h.cls === 'changes' && (h.key === 'up' || h.key === 'accelerating')) || (h.cls === 'comparatives' && h.key === 'size-up')));
-    const down = s.hits.some((h) => after(h) && ((h.cls === 'changes' && h.key === 'down') || (h.cls === 'comparatives' && h.key === 'size-down')));
-    if (up === down) continue;
-    const flip = denialsBefore(s, m.first, 6) % 2 === 1 ? -1 : 1;
-    changes.push({ kind: 'change', of: 'marginal-forcing', attribute: 'amount', dir: ((up ? 1 : -1) * flip) as 1 | -1, start: s.words[m.first]?.start ?? 0, end: s.words.filter((w) => w.clause === clause).at(-1)?.end ?? 0 });
-  }
+    .map((d) => ({ kind: 'change', of: d.of, attribute: 'temperature', dir: (d.negated ? -d.dir : d.dir) as 1 | -1, start: d.start, end: d.end, ...(during(d) === undefined ? {} : { during: during(d) as string }) }));
+  changes.push(...readMarginal(s));
   // "the warming effect of CO2 grows exponentially": the effect per ppm said to speed up.
   const effect = s.of('causes', 'roles').find((r) => /effect|forcing|power/u.test(s.words[r.last]?.text ?? ''));
   const speeding = s.of('changes', 'accelerating')[0];

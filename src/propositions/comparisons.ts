@@ -6,7 +6,7 @@ import { inPhrase, kindOf, subjectOf, thingAfter, thingBefore } from './resolve.
 import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Comparison } from './types.js';
 
-const SIGN: Record<string, 1 | -1 | 0> = { 'age-up': 1, 'age-down': -1, 'age-same': 0, 'size-up': 1, 'size-down': -1, 'age-up-verb': 1, 'age-down-verb': -1 };
+const SIGN: Record<string, 1 | -1 | 0> = { 'age-up': 1, 'age-down': -1, 'age-same': 0, 'size-up': 1, 'size-down': -1, 'age-up-verb': 1, 'age-down-verb': -1, 'size-up-verb': 1, 'size-down-verb': -1, 'rate-up': 1, 'rate-down': -1 };
 const SWING = /^(?:swing|swings|swung|change|changes|changed|vary|varies|varied|range|amplitude|shift|shifts|shifted|moved|move|moves|fluctuat\w*|respond|responds|responded|react|reacts|reacted|temperature|temperatures)$/u;
 
 /** The comparisons one sentence states (a denied comparison states none). */
@@ -28,14 +28,16 @@ export function readComparisons(s: ReadSentence, previous?: ReadSentence): Compa
     const plain = s.things.find((t) => t.last < h.first && s.words[t.first]?.segment === segment && t.kind !== 'pronoun' && !inPhrase(s, t));
     const a = plain ?? subjectOf(s, h.first) ?? thingBefore(s, h.first, 'clause');
     if (a === undefined || b === undefined) continue;
-    const attribute = h.key.startsWith('age') ? 'age' : 'size';
+    const attribute = h.key.startsWith('age') ? 'age' : h.key.startsWith('rate') ? 'rate' : 'size';
     if (attribute === 'size') {
       const clause = s.words[h.first]?.clause;
       const words = s.words.filter((w) => w.clause === clause);
       const aboutTemperature = words.some((w) => SWING.test(w.text)) || s.of('changes').some((c) => (c.key === 'warm' || c.key === 'cool') && s.words[c.first]?.clause === clause);
       if (!aboutTemperature) continue;
     }
-    const name = (t: Thing) => t.region ?? kindOf(s, t, previous) ?? t.kind;
+    // "the temperature swing recorded at Vostok understates...": a place named after the subject, before the comparison, is its own.
+    const placed = (t: Thing) => (t === a && t.kind === 'temperature' ? s.of('regions').find((r) => r.key !== 'global' && r.first > t.last && r.last < h.first && s.words[r.first]?.segment === segment)?.key : undefined);
+    const name = (t: Thing) => t.region ?? placed(t) ?? kindOf(s, t, previous) ?? t.kind;
     out.push({ kind: 'comparison', a: name(a), b: name(b), attribute, sign, start: s.words[a.first]?.start ?? 0, end: s.words[b.last]?.end ?? 0 });
   }
   return out;

@@ -52,10 +52,12 @@ const CONTRAST = ['but', 'while', 'whereas', 'although', 'though', 'yet', 'howev
 const LINKS = new Set(['so', 'therefore', 'thus', 'hence', 'because', 'since', 'when', 'if', 'which', 'meaning', 'means', 'whereby', 'once', 'unless', 'until', 'consequently']);
 /** Words after which "that" opens a clause of its own ("shows that temperature drives CO2"). */
 const COMPLEMENT_TAKERS = /^(?:show|prove|mean|say|said|know|knew|think|thought|argue|claim|suggest|find|found|note|clear|plain|true|evident|obvious|likely|so|insist|assert|believe|tell|told|demonstrate|confirm|establish|reveal|indicate|impl(?:y|ies|ied)|conclude|maintain|contend|write|wrote|hear|heard|fact|idea|notion|view|belief|myth|argument|sure|certain|agree|recogni[sz]e|shown|proof|evidence|sign|means)\w*$/u;
+/** Pronouns whose "'s" is "is": "that's global temperature". */
+const COPULA_CONTRACTION = /^(that|this)'s$/u;
 const AUXILIARIES = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const PRONOUNS = new Set(['it', 'they', 'this', 'that', 'these', 'those', 'its', 'their']);
 /** Entities that take part in causes and orders. */
-const PARTICIPANTS = new Set(['co2', 'temperature', 'orbit', 'water', 'ice-age', 'trapped-air', 'ice', 'marginal-forcing']);
+const PARTICIPANTS = new Set(['co2', 'temperature', 'orbit', 'water', 'ice-age', 'trapped-air', 'ice', 'marginal-forcing', 'modern-rise', 'natural-rise']);
 
 /** Reads one sentence: words, segments, lexicon hits and things. */
 export function readSentence(text: string, lexicon: CompiledLexicon): ReadSentence {
@@ -70,11 +72,16 @@ export function readSentence(text: string, lexicon: CompiledLexicon): ReadSenten
       lastClause = token.clause;
       continue;
     }
-    const complement = token.text === 'that' && COMPLEMENT_TAKERS.test(words.at(-1)?.text ?? '');
-    if (token.clause !== lastClause || pendingBreak || complement || (LINKS.has(token.text) && words.length > 0)) segment += 1;
+    // "Greenland’s" reads as "greenland's"; "that's" as "that is" (the copula reads a record as something).
+    const text = token.text.replace(/’/gu, "'");
+    const copula = COPULA_CONTRACTION.exec(text);
+    const complement = text === 'that' && COMPLEMENT_TAKERS.test(words.at(-1)?.text ?? '');
+    if (token.clause !== lastClause || pendingBreak || complement || (LINKS.has(text) && words.length > 0)) segment += 1;
     pendingBreak = false;
     lastClause = token.clause;
-    words.push({ text: token.text, start: token.start, end: token.end, clause: token.clause, segment, quoted: token.quoted });
+    const word = { start: token.start, end: token.end, clause: token.clause, segment, quoted: token.quoted };
+    if (copula?.[1] === undefined) words.push({ ...word, text });
+    else words.push({ ...word, text: copula[1], end: token.start + copula[1].length }, { ...word, text: 'is', start: token.start + copula[1].length });
   }
   const hits = lexicon.find(words.map((w) => w.text));
   const of = (cls: string, key?: string) => hits.filter((h) => h.cls === cls && (key === undefined || h.key === key));
@@ -91,7 +98,9 @@ function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
   for (const h of hits) {
     const inLonger = hits.some((o) => o !== h && o.cls === 'entities' && o.first <= h.first && o.last >= h.last && o.last - o.first > h.last - h.first);
     if (h.cls === 'entities' && PARTICIPANTS.has(h.key) && !inLonger) {
-      const near = regions.find((r) => Math.abs(r.first - h.first) <= 3 && words[r.first]?.clause === words[h.first]?.clause);
+      // "at the other end of the globe, where Antarctic temperatures dropped": the nearest region.
+      const distance = (r: LexHit) => Math.min(Math.abs(r.first - h.first), Math.abs(r.last - h.first));
+      const near = regions.filter((r) => Math.abs(r.first - h.first) <= 3 && words[r.first]?.clause === words[h.first]?.clause).sort((a, b) => distance(a) - distance(b))[0];
       things.push({ kind: h.key, first: h.first, last: h.last, ...(h.key === 'temperature' && near !== undefined ? { region: near.key } : {}) });
     } else if (h.cls === 'changes' && (h.key === 'warm' || h.key === 'cool') && isNominal(words, h.first)) {
       // "the warming", "Antarctic cooling": a temperature change named as a thing.

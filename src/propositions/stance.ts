@@ -72,6 +72,8 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
 function questionStance(s: ReadSentence, context: StanceContext, make: (k: StanceKind, flips?: boolean) => SentenceStance): SentenceStance {
   const first = s.words[0]?.text ?? '';
   if (first === 'q' || isReported(s)) return make('asked');
+  // "Did you know the poles swing less?": a teaser that states its content as a fact.
+  if ((first === 'did' || first === 'do') && s.words[1]?.text === 'you' && s.words[2]?.text === 'know') return make('asserted');
   const answeredNext = context.next !== undefined && ANSWER_OPENERS.has(context.next.words[0]?.text ?? '');
   // A segment opens a question with a wh-word or an auxiliary, after a joining word if any.
   const opens = (i: number) => {
@@ -95,7 +97,8 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
 
 /** "Some claim that...", "Critics argue...", "You may have heard that...", "It is often said...". */
 function isReported(s: ReadSentence): boolean {
-  const verbs = s.of('stance', 'report-verbs').filter((v) => v.first <= 10);
+  // "they could hold more dissolved CO2": a verb that also takes up gas reports a view only before "that".
+  const verbs = s.of('stance', 'report-verbs').filter((v) => v.first <= 10 && !(s.inside(v.first, 'uptake') && s.words[v.last + 1]?.text !== 'that'));
   // "For readers who think in Fahrenheit, ...": a reporter inside a phrase is nobody's report.
   const reporters = s.of('stance', 'reporters').filter((r) => !/^(?:for|to|with|among|of|from)$/u.test(s.words[r.first - 1]?.text ?? ''));
   if (verbs.some((v) => reporters.some((r) => r.last < v.first && v.first - r.last <= 4))) return true;

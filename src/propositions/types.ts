@@ -73,7 +73,7 @@ export interface Comparison {
   kind: 'comparison';
   a: string;
   b: string;
-  attribute: 'age' | 'size';
+  attribute: 'age' | 'size' | 'rate';
   sign: 1 | -1 | 0;
   start: number;
   end: number;

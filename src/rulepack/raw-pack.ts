@@ -41,7 +41,7 @@ export interface RawDirectionFact {
   statement: string;
   wrong?: string[];
   relation?: OneOrMany<{ x: string; y: string; sign: 'same' | 'opposite' }>;
-  comparison?: OneOrMany<{ a: OneOrMany<string>; b: OneOrMany<string>; attribute: 'age' | 'size'; sign: 'higher' | 'lower' }>;
+  comparison?: OneOrMany<{ a: OneOrMany<string>; b: OneOrMany<string>; attribute: 'age' | 'size' | 'rate'; sign: 'higher' | 'lower' }>;
   order?: OneOrMany<{ first: string; then: string; regions?: OneOrMany<string>; during?: OneOrMany<string> }>;
   change?: OneOrMany<{ of: OneOrMany<string>; attribute?: 'temperature' | 'amount'; during?: OneOrMany<string>; sign: 'up' | 'down' }>;
   right?: string[];

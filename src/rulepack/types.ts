@@ -82,7 +82,7 @@ export interface ReferenceValue {
  */
 export type FactForm =
   | { kind: 'relation'; x: FactVariable; y: FactVariable; sign: 1 | -1 }
-  | { kind: 'comparison'; a: string[]; b: string[]; attribute: 'age' | 'size'; sign: 1 | -1 }
+  | { kind: 'comparison'; a: string[]; b: string[]; attribute: 'age' | 'size' | 'rate'; sign: 1 | -1 }
   | { kind: 'order'; first: string; then: string; regions: string[]; during: string[] }
   | { kind: 'change'; of: string[]; attribute: 'temperature' | 'amount'; during: string[]; sign: 1 | -1 };
 

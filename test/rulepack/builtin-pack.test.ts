@@ -35,14 +35,16 @@ describe('the built-in paleoclimate pack', () => {
   it('carries the three direction facts the issue names, and the others of the vetted list', () => {
     // Issue 4: CO2 solubility falls as water warms; trapped air is younger than the ice around it;
     // globally CO2 rose ahead of most of the deglacial warming (Shakun et al. 2012, doi 10.1038/nature10915).
-    // REFERENCE-VALUES.md "Direction facts" 6-8: logarithmic forcing (Myhre et al. 1998), polar
-    // amplification, the bipolar seesaw (Pedro et al. 2016).
+    // REFERENCE-VALUES.md "Direction facts" 6-9: logarithmic forcing (Myhre et al. 1998), polar
+    // amplification, the pace of the modern rise against the deglacial ones (Marcott et al. 2014),
+    // the bipolar seesaw (Pedro et al. 2016).
     expect(packs.directions.map((d) => d.id)).toEqual([
       'co2-solubility-falls-with-warming',
       'trapped-air-younger-than-ice',
       'global-co2-ahead-of-warming',
       'polar-swings-exceed-global',
       'co2-forcing-logarithmic',
+      'modern-co2-rise-faster-than-natural',
       'bipolar-seesaw-younger-dryas',
     ]);
     expect(packs.directions.find((d) => d.id === 'co2-forcing-logarithmic')?.sources.map((s) => s.doi)).toContain('10.1029/98GL01908');

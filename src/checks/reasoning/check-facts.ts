@@ -51,11 +51,21 @@ function contradiction(props: Propositions, form: FactForm): Span | undefined {
       });
     case 'order':
       return props.orders.find(
-        (o) => !o.together && o.first === form.then && o.then === form.first && (form.regions.length === 0 || (o.region !== undefined && form.regions.includes(o.region))),
+        (o) => !o.together && o.first === form.then && o.then === form.first && (form.regions.length === 0 || (o.region !== undefined && form.regions.includes(o.region))) && !isFeedbackAccount(props, o.then),
       );
     case 'change':
       return props.changes.find(
         (c) => form.of.includes(c.of) && c.attribute === form.attribute && c.dir !== form.sign && (form.during.length === 0 || (c.during !== undefined && form.during.includes(c.during))),
       );
   }
+}
+
+/**
+ * "Once the orbit had started the thaw, CO2 amplified it": the later thing acts on what came first,
+ * as an amplifier or after another agent's start. The sentence tells a feedback, not the order in
+ * which the two curves moved.
+ */
+function isFeedbackAccount(props: Propositions, later: string): boolean {
+  const acts = props.causes.filter((c) => c.agent === later && c.polarity === 'asserted');
+  return acts.some((c) => c.role === 'amplify') || (acts.length > 0 && props.causes.some((c) => c.role === 'start' && c.agent !== undefined && c.agent !== later && c.polarity === 'asserted'));
 }

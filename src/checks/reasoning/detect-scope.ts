@@ -29,6 +29,12 @@ const ISOTOPES = /^(?:deuterium|isotope|isotopes|δd|δ18o|d18o)$/u;
 const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degrees?|°c|°f|k|cooler|warmer|colder)$/u;
 const ANAPHORIC_READING = /^(?:this|that|these|it|they|the curve|the record|the graph|the column)\b.{0,20}\b(?:tells?|shows?|means?|suggests?|indicates?|gives?|reveals?)\b/u;
 
+/** Words that open an inference from what comes before ("..., so the whole world..."). */
+const INFERENCE = new Set(['so', 'therefore', 'thus', 'hence', 'meaning', 'consequently']);
+
+/** Words before "local" or "regional" that put the place away from it ("far from local influences"). */
+const AWAY_FROM = new Set(['far from', 'free of', 'free from', 'away from', 'immune to', 'shielded from', 'sheltered from']);
+
 function detectRegional(input: DetectInput): Cue[] {
   // The tokens (and with them compromise's roots) are read only once a record, the globe and a
   // temperature are all there: most sentences stop before, and compromise never sees them here.
@@ -68,11 +74,26 @@ function detectRegional(input: DetectInput): Cue[] {
       const [from, to] = r.first < g.first ? [r.last + 1, g.first] : [g.last + 1, r.first];
       return s.words.slice(from, to).some((w) => READING.test(w.text));
     });
+  // "..., and that's the cooling the whole planet went through", "so the whole world's temperature leapt 10
+  // degrees", "the entire globe warmed by those same ten degrees": a segment that names the globe and
+  // points back (a demonstrative copula, an inference, "same") to a record's figure before it.
+  const before = read(index - 1);
+  const carriedOver = (g: { first: number }) => {
+    const segment = s.words[g.first]?.segment ?? 0;
+    const all = s.words.filter((w) => w.segment === segment);
+    const own = /^(?:and|but|yet)$/u.test(all[0]?.text ?? '') ? all.slice(1) : all;
+    const opener = own[0]?.text ?? '';
+    const copula = (opener === 'that' || opener === 'this') && /^(?:is|was)$/u.test(own[1]?.text ?? '');
+    const same = own.some((w) => w.text === 'same');
+    const inference = INFERENCE.has(opener) && own.some((w) => /^\d/u.test(w.text) || TEMPERATURE_WORDS.test(w.text));
+    if (records.some((r) => (s.words[r.first]?.segment ?? 0) < segment)) return copula || same || inference;
+    return records.length === 0 && (copula || same) && recordIn(before);
+  };
   const global = s.of('regions', 'global').find(
-    (g) => anaphoric || attributed || (recordClauses.has(s.words[g.first]?.clause) && readAs(g)) || isotopes.some((w) => s.words[w.first]?.clause === s.words[g.first]?.clause) || (isotopes.length > 0 && readAs(g)),
+    (g) => anaphoric || attributed || carriedOver(g) || (recordClauses.has(s.words[g.first]?.clause) && readAs(g)) || isotopes.some((w) => s.words[w.first]?.clause === s.words[g.first]?.clause) || (isotopes.length > 0 && readAs(g)),
   );
   const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text));
-  if (!record || global === undefined || !temperature) return [];
+  if (global === undefined || !temperature || !(record || carriedOver(global))) return [];
   // "colder than today" compares two times, not the record with the globe: no contrast.
   const sentence = input.sentence;
   const times = findPhrases(sentence, words('time-comparison'));
@@ -86,9 +107,20 @@ function detectRegional(input: DetectInput): Cue[] {
     const previous = s.words.filter((w) => w.end <= c.start).at(-1)?.text;
     if (phrase === 'than') return next >= 0 && places.some((p) => p.first >= next && p.first - next <= 4);
     if (phrase === 'not' || phrase === 'only') return !/^(?:just|only|merely|simply)$/u.test(s.words[next]?.text ?? '') && previous !== 'not';
+    // "doubles as a history of...": serving as, no multiple.
+    if (s.words[next]?.text === 'as' && /^doubl/u.test(phrase)) return false;
+    // "far from local influences": a place said to be free of the local is no contrast with the globe.
+    const lead = s.words.filter((w) => w.end <= c.start).slice(-2).map((w) => w.text).join(' ');
+    if (AWAY_FROM.has(lead) || ((phrase === 'local' || phrase === 'regional') && /(?:^| )no$/u.test(lead))) return false;
+    // "..., which we will adopt as the benchmark": the future reaches only the segment it stands in.
+    if (phrase === 'will' || phrase === 'would') {
+      const at = s.words.find((w) => w.start >= c.start)?.segment;
+      return at === s.words[global.first]?.segment || records.some((r) => s.words[r.first]?.segment === at);
+    }
     return true;
   });
-  if (contrast.length > 0) return [];
+  // "the swing at Vostok understates the global change": the record is compared with the globe, not read as it.
+  if (contrast.length > 0 || here.props.comparisons.some((c) => c.attribute === 'size')) return [];
   // "...and the CO2 then warmed the planet": CO2 acting on the globe, not a record read as global.
   if (here.props.causes.some((c) => c.agent === 'co2' && c.polarity === 'asserted')) return [];
   // "global temperature": the temperature word just after the global one is part of the claim.
@@ -114,8 +146,50 @@ function detectLag({ index, read }: DetectInput): Cue[] {
   return [{ start, end: order.end }];
 }
 
+/**
+ * A regional order of events carried over to the globe: a global region in a segment that refers
+ * back to an order (cue words `carried-order`: "the same sequence", "that is the order"), or says
+ * the globe went first itself, beside a temperature-first order read without the globe (earlier in
+ * the sentence, or in the sentence before), while an ice core or a polar region is named nearby.
+ *
+ *   "Because Antarctic ice warms a few centuries ahead of CO2, the same sequence holds for the planet."
+ *                                                              ^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^ flagged
+ */
+function detectCarriedOrder({ index, read, sentence, words }: DetectInput): Cue[] {
+  const here = read(index);
+  if (here === undefined) return [];
+  const s = here.s;
+  const globals = s.of('regions', 'global');
+  if (globals.length === 0) return [];
+  const segmentOf = (offset: number) => s.words.find((w) => w.start >= offset)?.segment;
+  const globalSegments = new Set(globals.map((g) => s.words[g.first]?.segment));
+  // An order is the globe's only when the global word stands in its own segment.
+  const ordersOf = (r: typeof here | undefined) => (r?.props.orders ?? []).filter(isTemperatureFirst);
+  const localHere = ordersOf(here).filter((o) => !globalSegments.has(segmentOf(o.start)));
+  const localBefore = ordersOf(read(index - 1)).filter((o) => o.region !== 'global');
+  const recordNear = [here, read(index - 1), read(index - 2)].some(
+    (r) => r !== undefined && r.s.of('entities', 'ice-core').length + r.s.of('regions', 'antarctic').length + r.s.of('regions', 'greenland').length > 0,
+  );
+  if (!recordNear || localHere.length + localBefore.length === 0) return [];
+  const first = localHere[0]?.start ?? -1;
+  // "..., the study shows that the entire planet warmed first": the globe's own order after a local one.
+  const carried = ordersOf(here).find((o) => o.start > first && globalSegments.has(segmentOf(o.start)) && localHere.length > 0);
+  if (carried !== undefined) return [{ start: carried.start, end: carried.end }];
+  // "that's the order the whole planet went through", "the same sequence holds for the planet".
+  const refs = findPhrases(sentence, words('carried-order'));
+  // "For the planet the order was the reverse": an order set against the one before carries nothing over.
+  const turned = findPhrases(sentence, words('reversed'));
+  for (const g of globals) {
+    const clause = s.words[g.first]?.clause;
+    if (turned.some((t) => s.words.find((w) => w.start >= t.start)?.clause === clause)) continue;
+    const ref = refs.find((r) => segmentOf(r.start) === s.words[g.first]?.segment && r.start > first);
+    if (ref !== undefined) return [{ start: Math.min(ref.start, s.words[g.first]?.start ?? ref.start), end: Math.max(ref.end, s.words[g.last]?.end ?? ref.end) }];
+  }
+  return [];
+}
+
 /** `scope.regional-record-as-global` for the registry. */
 export const regionalRecordAsGlobal: DetectorEntry = { detect: detectRegional, keys: [] };
 
 /** `scope.antarctic-lag-as-global` for the registry. */
-export const antarcticLagAsGlobal: DetectorEntry = { detect: detectLag, keys: [] };
+export const antarcticLagAsGlobal: DetectorEntry = { detect: (input) => (detectLag(input).length > 0 ? detectLag(input) : detectCarriedOrder(input)), keys: [] };
