@@ -22,7 +22,9 @@ const START_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:${START_WORDS})(?:${S}+
 const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at|by)${S}*$`, 'iu');
 const CHANGE_NOUNS = ['rise', 'increase', 'drop', 'fall', 'decline', 'change', 'jump', 'gain', 'loss', 'swing', 'difference', 'warming', 'cooling', 'growth', 'decrease', 'reduction', 'climb', 'leap', 'surge', 'plunge', 'slide'];
 const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'sank', 'sunk', 'thinned', 'thickened', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
-const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
+/** Phrasal verbs of change ("went up 80 m") and the present forms of the change verbs ("rises 2 ppm"). */
+const PHRASAL_CHANGES = ['went up', 'gone up', 'goes up', 'go up', 'going up', 'went down', 'gone down', 'rises', 'rising', 'climbs', 'climbing', 'falls', 'falling', 'drops', 'dropping', 'grows', 'growing'];
+const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...PHRASAL_CHANGES, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
 const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down', 'added', 'extra']);
 const SPAN_OF_PAIR = before(['lasting', 'lasted', 'lasts', 'spanning', 'spanned', 'spans', 'span of', 'period of', 'interval of', 'stretch of', 'over', 'across', 'within', 'took', 'taking', 'during', 'for', 'or', 'that is', 'i.e.', 'i.e.,', '(', '—', 'lay', 'lie', 'passed', 'elapsed', 'went by']);
 const SPAN_OF_CHANGE = before(['lasting', 'spanning', 'span of', 'period of', 'over', 'across', 'within', 'in', 'took', 'taking', 'during', 'for', 'after', '(', 'over the', 'across the', 'within the', 'during the']);

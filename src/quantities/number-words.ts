@@ -41,6 +41,10 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
   let used = 0;
   let last: 'none' | 'small' | 'tens' | 'hundred' | 'scale' | 'half' | 'article' | 'and' = 'none';
   let any = false;
+  // "nineteen thousand and eleven thousand": a scale no smaller than one already used ends the
+  // number before its "and" (two numbers of a range), where "two thousand and five" goes on.
+  let lastScale = Infinity;
+  let beforeAnd: WordNumber | undefined;
   for (let i = 0; i < tokens.length; i++) {
     const w = tokens[i] as string;
     if (w in SMALL) {
@@ -69,6 +73,11 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
       last = 'hundred';
     } else if (w in SCALES) {
       if (last === 'none' || last === 'and') break;
+      if ((SCALES[w] as number) >= lastScale) {
+        if (beforeAnd !== undefined) return beforeAnd;
+        break;
+      }
+      lastScale = SCALES[w] as number;
       total += (current === 0 ? 1 : current) * (SCALES[w] as number);
       current = 0;
       last = 'scale';
@@ -77,6 +86,7 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
       const nextNext = tokens[i + 2];
       const joinsHalf = (next === 'a' || next === 'an') && nextNext === 'half';
       if (!(last === 'hundred' || last === 'scale' || (joinsHalf && (last === 'small' || last === 'tens')))) break;
+      beforeAnd = { used, value: total + current };
       last = 'and';
       continue;
     } else break;
