@@ -1,0 +1,124 @@
+import { describe, expect, it } from 'vitest';
+import { checkArithmetic } from '../../src/checks/arithmetic.js';
+import { parseQuantities } from '../../src/quantities/index.js';
+import { readNumberWords } from '../../src/quantities/number-words.js';
+import { hasTwoNumerals } from '../../src/quantities/two-numerals.js';
+
+/** Checks the last sentence with the ones before it as its paragraph. */
+const check = (...sentences: string[]) => {
+  const sentence = sentences[sentences.length - 1] as string;
+  return checkArithmetic(sentence, parseQuantities(sentence), sentences.slice(0, -1));
+};
+const flagged = (...sentences: string[]) => {
+  const sentence = sentences[sentences.length - 1] as string;
+  return check(...sentences).map((f) => [f.ruleId, sentence.slice(f.start, f.end), f.correction]);
+};
+
+// Levels stated earlier in the paragraph. The right values are the sentences' own numbers worked
+// by hand (common practice): 275 ÷ 185 − 1 = 48.6 %; 280 − 200 = 80; 9 − 3 = 6 °C; 419 − 280 = 139;
+// 40 − 25 = 15 m.
+describe('a change whose levels stand earlier in the paragraph', () => {
+  it.each([
+    // [sentences..., flagged text, correction]
+    [['In the Harrowgate exercise, CO2 goes from 185 ppm to 275 ppm across the thaw.', 'How much is that, and by what share?', 'Answer: it rose by 90 ppm, an increase of roughly 20 percent.'], 'roughly 20 percent', 'roughly 48.6 percent'],
+    [['Pupils read CO2 climbing from 200 ppm to 280 ppm over the termination.', 'So it went up by 60 ppm.'], '60 ppm', '80 ppm'],
+    [['The panel has the lake warming from 3 °C to 9 °C between the stadial and the Holocene.', 'That is a rise of 4 °C in summer water.'], '4 °C', '6 °C'],
+    [['The 2023 annual mean at the Corran Head inlet was 419 ppm.', 'Before industry the air held about 280 ppm, so the 2023 value is some 100 ppm higher.'], 'some 100 ppm', 'some 139 ppm'],
+    [['Our guide says the lake stood at 40 m above the old shore at the stadial.', 'Today it sits at 25 m, so it has dropped by 25 m.'], '25 m', '15 m'],
+  ] as [string[], string, string][])('%j: flags %s', (sentences, text, correction) => {
+    const found = flagged(...sentences);
+    expect(found).toHaveLength(1);
+    expect(found[0]?.[1]).toBe(text);
+    expect(found[0]?.[2]).toBe(correction);
+    expect(check(...sentences)[0]?.reason).toMatch(/^By the paragraph's own numbers/u);
+  });
+
+  it.each([
+    ['right sums', ['Pupils read CO2 climbing from 200 ppm to 280 ppm over the termination.', 'So it went up by 80 ppm, or 40 percent.']],
+    ['right difference', ['The 2023 annual mean at the Corran Head inlet was 419 ppm.', 'Before industry the air held about 280 ppm, so the 2023 value is some 140 ppm higher.']],
+    // The change is held against something it names itself, not against the earlier level.
+    ['held against a named level', ['The 2023 annual mean at the Corran Head inlet was 419 ppm.', 'Before industry the air held about 280 ppm, so CO2 is now 30 ppm higher than in 1990.']],
+    ['no reference back', ['Pupils read CO2 climbing from 200 ppm to 280 ppm over the termination.', 'Methane rose by 300 ppb in the same window.']],
+    ['two pairs in the earlier sentence', ['CO2 climbed from 190 to 240 ppm and then from 240 to 280 ppm.', 'So it went up by 50 ppm in each step.']],
+    ['another level in between', ['CO2 climbed from 200 ppm to 280 ppm over the termination.', 'By 1950 it stood at 310 ppm.', 'So it went up by 30 ppm in the industrial age.']],
+    ['other unit', ['CO2 climbed from 200 ppm to 280 ppm over the termination.', 'So methane rose by 350 ppb.']],
+    ['level here without a consequence word', ['The 2023 annual mean at the Corran Head inlet was 419 ppm.', 'Glacial air held 190 ppm and the rise of 90 ppm came later.']],
+  ] as [string, string[]][])('leaves alone: %s', (_why, sentences) => {
+    expect(check(...sentences)).toEqual([]);
+  });
+});
+
+// Worked sums whose result is given in words, as handouts write them. Sums by hand (common practice):
+// 265 − 190 = 75; 90 ÷ 6,000 = 0.015; 12 × 4 = 48.
+describe('a worked sum with its result in words', () => {
+  it.each([
+    ['The climb is 265 − 190, an increase of 85 ppm.', '85 ppm', '75 ppm'],
+    ['90 ÷ 6,000 gives roughly 0.15 ppm per year.', 'roughly 0.15 ppm per year', 'roughly 0.015 ppm per year'],
+    ['Twelve layers a year for four years: 12 × 4 makes 36 layers.', '36', '48'],
+    ['Taking 265 − 190 comes to 65 ppm.', '65 ppm', '75 ppm'],
+  ])('%s flags %s', (sentence, text, correction) => {
+    const found = flagged(sentence);
+    expect(found.map((f) => f[1])).toContain(text);
+    expect(found.find((f) => f[1] === text)?.[2]).toBe(correction);
+  });
+
+  it.each([
+    'The climb is 265 − 190, an increase of 75 ppm.',
+    '90 ÷ 6,000 gives about 0.015 ppm per year.',
+    '18.2 − 9 = 9 °C, to the nearest degree.',
+    'Between 280 and 180 there is a gap of 100 ppm.',
+  ])('leaves alone: %s', (sentence) => {
+    expect(check(sentence)).toEqual([]);
+  });
+});
+
+// A pace as an amount per interval, and a duration from a sentence's only two dates. Sums by hand
+// (common practice): 80 ppm / 8,000 yr = 0.1 ppm per decade; 120 m / 12,000 yr = 1 m per 100 yr;
+// 21,000 − 11,000 = 10,000 years; (421 − 411) / (2023 − 2019) = 2.5 ppm a year.
+describe('paces and spans the sentence states in other words', () => {
+  it.each([
+    ['CO2 rose by some 80 ppm over about 8,000 years, on average 2 ppm every decade.', 'rate', '2 ppm every decade'],
+    ['CO2 rose by some 80 ppm over about 8,000 years, roughly 1 ppm every ten years.', 'rate', 'roughly 1 ppm'],
+    ['The sea climbed about 120 metres between 20,000 and 8,000 years ago, so it rose a metre every 30 years.', 'rate', '30 years'],
+    ['At 21,000 years ago CO2 was near 190 ppm and by 11,000 years ago near 260 ppm, so it gained 70 ppm in about 3,000 years.', 'duration', 'about 3,000 years'],
+    ['The inlet reading went from 411 ppm in 2019 to 421 ppm in 2023, an average of 4 ppm a year.', 'rate', '4 ppm a year'],
+    ['The shoreline went up about 60 metres between eighteen thousand and twelve thousand years ago, a metre every 50 years.', 'rate', '50 years'],
+  ])('%s', (sentence, rule, text) => {
+    const found = flagged(sentence);
+    expect(found.map((f) => `${String(f[0])} ${String(f[1])}`)).toContain(`arith.${rule} ${text}`);
+  });
+
+  it.each([
+    'CO2 rose by some 80 ppm over about 8,000 years, on average 1 ppm every century.',
+    'CO2 rose by some 80 ppm over about 8,000 years, roughly 0.1 ppm every ten years.',
+    'The sea climbed about 120 metres between 20,000 and 8,000 years ago, so it rose a metre every 100 years.',
+    'At 21,000 years ago CO2 was near 190 ppm and by 11,000 years ago near 260 ppm, so it gained 70 ppm in about 10,000 years.',
+    'The inlet reading went from 411 ppm in 2019 to 421 ppm in 2023, an average of 2.5 ppm a year.',
+    // Samples every 50 years are a spacing, not a pace of change.
+    'The team sampled the 7,000 years from 18,000 to 11,000 years ago every 50 years.',
+  ])('leaves alone: %s', (sentence) => {
+    expect(check(sentence)).toEqual([]);
+  });
+});
+
+describe('numbers in words', () => {
+  // Two numbers of a range each keep their own scale (common practice: English number words).
+  it('ends a number before a second scale word no smaller than the first', () => {
+    expect(readNumberWords(['nineteen', 'thousand', 'and', 'eleven', 'thousand'])).toEqual({ used: 2, value: 19000 });
+    expect(readNumberWords(['two', 'million', 'and', 'one', 'thousand'])).toEqual({ used: 5, value: 2001000 });
+    expect(readNumberWords(['three', 'hundred', 'and', 'twelve'])).toEqual({ used: 4, value: 312 });
+  });
+
+  it('reads a range in words as two dates', () => {
+    const [range] = parseQuantities('It happened between nineteen thousand and eleven thousand years ago.');
+    expect(range?.low).toBe(11000);
+    expect(range?.high).toBe(19000);
+  });
+
+  it('counts numbers in digits or words', () => {
+    expect(hasTwoNumerals('It went up about 80 metres between nineteen thousand and eleven thousand years ago.')).toBe(true);
+    expect(hasTwoNumerals('Forty people came, and twelve stayed.')).toBe(true);
+    expect(hasTwoNumerals('It went up about 80 metres.')).toBe(false);
+    expect(hasTwoNumerals('A long and slow thaw, half of it in the dark.')).toBe(false);
+  });
+});
