@@ -6,7 +6,7 @@
  * "18.2 − 9 = 9" passes: 9.2 rounds to 9. Only a sum whose three numbers the quantity reader found on their own
  * is read; "3-4" and the like are ranges, not subtractions.
  */
-import { writtenInterval as w } from '../quantities/index.js';
+import { toCanonical, writtenInterval as w } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
 import { divide, minus, type Derived } from './arithmetic-derive.js';
 
@@ -35,6 +35,20 @@ const plus = (a: Derived, b: Derived): Derived => ({ value: a.value + b.value, l
 function times(a: Derived, b: Derived): Derived | undefined {
   if (a.low < 0 || b.low < 0) return undefined;
   return { value: a.value * b.value, low: a.low * b.low, high: a.high * b.high };
+}
+
+/** `d`, a number in `c`'s written unit, in `c`'s canonical unit. */
+function inUnitOf(d: Derived, c: Quantity): Derived {
+  const [low, high] = [toCanonical(d.low, c.statedUnit, c.dimension), toCanonical(d.high, c.statedUnit, c.dimension)].sort((x, y) => x - y) as [number, number];
+  return { value: toCanonical(d.value, c.statedUnit, c.dimension), low, high };
+}
+
+/**
+ * "5 + 32 = 41 °F of cooling": 32 added to give a Fahrenheit change is a unit slip, which the unit
+ * check reports (units-offset-sums.ts); its arithmetic is not judged twice.
+ */
+export function addsReadingOffset(op: string, a: Quantity, b: Quantity, c: Quantity): boolean {
+  return op.trim() === '+' && c.statedUnit === 'degF' && c.dimension === 'temperature-change' && (a.value === 32 || b.value === 32);
 }
 
 /** What the operator makes of the two numbers, or undefined when it cannot say. */
@@ -69,8 +83,11 @@ export function writtenSums(text: string, qs: Quantity[]): SumFinding[] {
     const op = OPERATOR.exec(text.slice(a.end, b.start))?.[1];
     if (op === undefined || !EQUALS.test(text.slice(b.end, c.start))) continue;
     if (a.hedge !== undefined || b.hedge !== undefined || !comparable(op, a, b, c)) continue;
-    const computed = apply(op, exact(a), exact(b));
-    if (computed === undefined) continue;
+    if (addsReadingOffset(op, a, b, c)) continue;
+    const sum = apply(op, exact(a), exact(b));
+    if (sum === undefined) continue;
+    // Bare operands give the result in the unit it is written in ("265 − 188 = 77 ppm", "9 × 1.8 = 16.2 °F").
+    const computed = a.dimension === 'number' && b.dimension === 'number' && c.statedUnit !== '' ? inUnitOf(sum, c) : sum;
     out.push({ stated: c, computed, measures: `${a.text} ${op.trim()} ${b.text}` });
   }
   return out;

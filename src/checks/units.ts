@@ -11,12 +11,37 @@ import { disjoint, levelFor } from './arithmetic-levels.js';
 import { shownClaim } from './reference-format.js';
 import { UNIT_RULES } from './units-rules.js';
 
+const SCALE_NAME = /(?:^|[^\p{L}])(fahrenheit|celsius|centigrade)(?![\p{L}])/giu;
+const BARE_DEGREES = /^[\s\u00A0]+degrees?(?![\p{L}])(?![\s\u00A0]*(?:°|c\b|f\b|celsius|fahrenheit|centigrade|kelvin|north|south|east|west|of[\s\u00A0]+(?:latitude|longitude|arc)))/iu;
+
+/**
+ * "In Fahrenheit terms, a 9-degree Celsius swing comes to about 41 degrees": a bare number of
+ * degrees in a sentence that names one scale in words, outside its other figures, is read in that
+ * scale (a writer names the scale once and leaves it off the figure). Two scales named, or none,
+ * leave it a bare number.
+ */
+function withNamedScale(text: string, qs: Quantity[]): Quantity[] {
+  const inFigure = (at: number): boolean => qs.some((q) => q.start <= at && at < q.end);
+  const named = new Set([...text.matchAll(SCALE_NAME)].filter((m) => !inFigure((m.index ?? 0) + m[0].length - 1)).map((m) => (m[1] as string).toLowerCase().replace('centigrade', 'celsius')));
+  if (named.size !== 1) return qs;
+  const [scale] = [...named] as [string];
+  return qs.map((q) => {
+    const degrees = q.dimension === 'number' ? BARE_DEGREES.exec(text.slice(q.end)) : null;
+    if (degrees === null) return q;
+    const end = q.end + degrees[0].length;
+    const [read] = parseQuantities(`${text.slice(q.start, end)} ${scale}`);
+    if (read === undefined || (read.dimension !== 'temperature' && read.dimension !== 'temperature-change')) return q;
+    return { ...read, start: q.start, end, text: text.slice(q.start, end) };
+  });
+}
+
 /**
  * Every unit slip in one sentence. `context` is the sentences before it in the same paragraph, in
  * order; the last one is read for a date or level that this sentence restates ("... at 11,700
  * b2k. That is 11,650 years BP."). Flags always fall on this sentence's own words.
  */
-export function checkUnits(text: string, quantities: Quantity[], context: readonly string[] = []): FlagDraft[] {
+export function checkUnits(text: string, parsed: Quantity[], context: readonly string[] = []): FlagDraft[] {
+  const quantities = withNamedScale(text, parsed);
   const last = context[context.length - 1];
   const previous = last === undefined ? undefined : { text: last, quantities: parseQuantities(last) };
   const flags: FlagDraft[] = [];
