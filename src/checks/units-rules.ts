@@ -130,7 +130,10 @@ export const UNIT_RULES: readonly UnitRule[] = [
   { id: 'unit.percent-ppm', summary: 'A CO2 level restated between ppm and percent converts at 1% = 10,000 ppm; a CO2 share in percent is a level someone has measured.',
     find: percentPpm },
   { id: 'unit.temperature-difference', summary: 'A temperature change restated in °F is 1.8 times the change in °C or K, with no 32 added; restated in K it is the same number as in °C, with no 273.15 added.',
-    find: (text, qs, previous) => [...restated(['temperature-change'], nist, temperatureChangeWhy, cuedAsChange)(text, qs, previous), ...offsetSumSlips(text, qs)] },
+    find: (text, qs, previous) => {
+      const pairs = restated(['temperature-change'], nist, temperatureChangeWhy, cuedAsChange)(text, qs, previous);
+      return [...pairs, ...offsetSumSlips(text, qs).filter((f) => !pairs.some((p) => p.stated.start === f.stated.start))];
+    } },
   { id: 'unit.temperature', summary: 'A temperature reading restated in °F is 1.8 × °C + 32.',
     find: restated(['temperature'], nist, () => 'A temperature reading converts as °F = 1.8 × °C + 32.') },
   { id: 'unit.age-era', summary: 'A date restated in another era converts through years before AD 1950 (BP); b2k counts from AD 2000; there is no year 0.',

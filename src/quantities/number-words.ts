@@ -11,7 +11,7 @@ const SMALL: Record<string, number> = {
   eighty: 80, ninety: 90,
 };
 const SCALES: Record<string, number> = { thousand: 1e3, million: 1e6, billion: 1e9 };
-const FILLERS = ['a', 'an', 'and', 'half', 'hundred', 'dozen'];
+const FILLERS = ['a', 'an', 'and', 'half', 'hundred', 'dozen', 'point'];
 
 /** Every word a number phrase may contain. */
 export const NUMBER_WORDS: readonly string[] = [...Object.keys(SMALL), ...Object.keys(SCALES), ...FILLERS];
@@ -27,6 +27,18 @@ export interface WordToken {
 export interface WordNumber {
   used: number;
   value: number;
+}
+
+/**
+ * "two-eighty", "one-ninety", "four-twenty": a digit word and a tens word joined by a hyphen, as
+ * people say a three-figure number aloud (280, 190, 420). The hyphen is kept in the token by the
+ * caller; "twenty-one" (tens first) is not this form.
+ */
+function spokenHundreds(w: string): number | undefined {
+  const parts = w.split('-');
+  if (parts.length !== 2) return undefined;
+  const [h, t] = parts.map((p) => SMALL[p]);
+  return h !== undefined && t !== undefined && h >= 1 && h <= 9 && t >= 20 && t % 10 === 0 ? h * 100 + t : undefined;
 }
 
 const isScale = (w: string | undefined): boolean => w !== undefined && (w in SCALES || w === 'hundred' || w === 'dozen');
@@ -47,7 +59,22 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
   let beforeAnd: WordNumber | undefined;
   for (let i = 0; i < tokens.length; i++) {
     const w = tokens[i] as string;
-    if (w in SMALL) {
+    const spoken = spokenHundreds(w);
+    if (spoken !== undefined) {
+      // "two-eighty": a spoken three-figure number stands alone.
+      if (last !== 'none') break;
+      current = spoken;
+      last = 'tens';
+    } else if (w === 'point') {
+      // "two point eight": digits after the point, one word each.
+      const digits: number[] = [];
+      for (let j = i + 1; j < tokens.length && (SMALL[tokens[j] as string] ?? 10) < 10; j++) digits.push(SMALL[tokens[j] as string] as number);
+      if (digits.length === 0 || !(last === 'small' || last === 'tens')) break;
+      current += Number(`0.${digits.join('')}`);
+      any = true;
+      used = i + 1 + digits.length;
+      break;
+    } else if (w in SMALL) {
       const n = SMALL[w] as number;
       const afterTens = last === 'tens' && n < 10 && n > 0;
       if (!(last === 'none' || last === 'hundred' || last === 'scale' || last === 'and' || afterTens)) break;

@@ -1,0 +1,79 @@
+import { describe, expect, it } from 'vitest';
+import { checkArithmetic } from '../../src/checks/arithmetic.js';
+import { checkUnits } from '../../src/checks/units.js';
+import { parseQuantities } from '../../src/quantities/index.js';
+
+const units = (sentence: string, before: string[] = []) =>
+  checkUnits(sentence, parseQuantities(sentence), before).map((f) => [f.ruleId, sentence.slice(f.start, f.end), f.correction]);
+const arithmetic = (sentence: string) => checkArithmetic(sentence, parseQuantities(sentence), []);
+
+// NIST SP 811 (Appendix B.8, temperature): a difference of 1 °C is a difference of 1.8 °F (= 9/5);
+// the 32 of the Fahrenheit scale belongs to readings only. 4 °C → 7.2 °F; 7 °C → 12.6 °F; 10 °C → 18 °F.
+describe('a written sum that adds 32 to a temperature change', () => {
+  it.each([
+    ['In Fahrenheit, that 4 °C of warming is 4 + 32 = 36 °F of warming.', '36 °F', '7.2 °F'],
+    ['Converted: 7 × 1.8 + 32 = 44.6 °F colder at the glacial peak.', '44.6 °F', '12.6 °F'],
+    ['Our answer for the swing: 10 + 32 gives 42 °F of warming.', '42 °F', '18 °F'],
+  ])('%s flags %s', (sentence, text, correction) => {
+    expect(units(sentence)).toEqual([['unit.temperature-difference', text, correction]]);
+    // The unit slip is the one explanation: the sum is not judged again as arithmetic.
+    expect(arithmetic(sentence).filter((f) => sentence.slice(f.start, f.end) === text)).toEqual([]);
+  });
+
+  it.each([
+    // A reading converts with the 32 (NIST SP 811): 20 °C is 68 °F.
+    'The lab at 20 °C reads 20 × 1.8 + 32 = 68 °F.',
+    'The change in Fahrenheit is 4 × 1.8 = 7.2 °F of warming.',
+    'Summer air at the camp was 5 °C, so 5 × 1.8 + 32 = 41 °F.',
+  ])('leaves alone: %s', (sentence) => {
+    expect(units(sentence)).toEqual([]);
+  });
+});
+
+// A bare "degrees" takes the one scale the sentence names in words (common practice: a writer names
+// the scale once). 7 °C of change is 12.6 °F (NIST SP 811, as above).
+describe('bare degrees read in the scale the sentence names', () => {
+  it.each([
+    ['For Fahrenheit readers, a 7-degree Celsius drop is about 45 degrees.', 'about 45 degrees'],
+    ['Put in Fahrenheit, the 10 °C swing amounts to 50 degrees.', '50 degrees'],
+  ])('%s flags %s', (sentence, text) => {
+    const found = units(sentence);
+    expect(found.map((f) => f[0])).toEqual(['unit.temperature-difference']);
+    expect(found[0]?.[1]).toBe(text);
+  });
+
+  it.each([
+    'For Fahrenheit readers, a 7-degree Celsius drop is about 12.6 degrees.',
+    // Two scales named: the bare figure is not given either.
+    'In Celsius or Fahrenheit, the drill site sits at 75 degrees of latitude and 3 km up.',
+    'The site is at 75 degrees south, and summer there is cold even in Fahrenheit terms.',
+  ])('leaves alone: %s', (sentence) => {
+    expect(units(sentence)).toEqual([]);
+  });
+});
+
+// Numbers spoken aloud (common practice in scripts and transcripts): "two-eighty" is 280,
+// "three point one" is 3.1, and "up to" after "from" closes a from-to pair. 275 − 185 = 90.
+describe('spoken numbers', () => {
+  it.each([
+    ['about two-eighty ppm', 280],
+    ['some four-twenty parts per million', 420],
+    ['about three point one kilometres', 3100],
+    ['nought', undefined],
+  ])('%s', (text, value) => {
+    expect(parseQuantities(`It was ${text} then.`)[0]?.value).toBe(value);
+  });
+
+  it('keeps "twenty-one" and "one of" as they were', () => {
+    expect(parseQuantities('It was twenty-one thousand years ago.')[0]?.value).toBe(21000);
+    expect(parseQuantities('One of the cores was drilled in 1998.').map((q) => q.text)).toEqual(['1998']);
+  });
+
+  it('reads a spoken from-to pair against a stated change', () => {
+    const sentence = 'So over the thaw it went from about one-eighty-five up to two-seventy-five, a jump of a hundred and thirty ppm.';
+    const flags = checkArithmetic(sentence, parseQuantities(sentence), []);
+    expect(flags.map((f) => [f.ruleId, f.correction])).toEqual([]);
+    const plain = 'So over the thaw it went from about one-eighty up to two-seventy, a jump of a hundred and thirty ppm.';
+    expect(checkArithmetic(plain, parseQuantities(plain), []).map((f) => [f.ruleId, f.correction])).toEqual([['arith.change', '90 ppm']]);
+  });
+});
