@@ -16,16 +16,16 @@ const TO = new RegExp(String.raw`^${S}*(?:(?:up|down)${S}+to|to|until|till|throu
 /** A phrase of time or place between the start of a from-to pair and its "to" (a date in it reads DATE). */
 const WHEN_TO = new RegExp(String.raw`^,?${S}+(?:in|by|at|around|circa|during|before|after|near)${S}+[^\d.;:!?()]{1,40}?${S}+(?:to|until|till)${S}+$`, 'iu');
 /** Words that open the start of a stretch of time or a change, and words that mark its end ("... clear by B"). */
-const START_WORDS = list(['began', 'begun', 'begins', 'started', 'starts', 'set in', 'opened', 'onset', 'beginning', 'starting']);
+const START_WORDS = list(['began', 'begun', 'begins', 'started', 'starts', 'set in', 'opened', 'onset', 'beginning', 'starting', 'kicks off', 'kicked off', 'got going', 'gets going', 'got under way', 'gets under way', 'commenced', 'commences']);
 /** A start word, perhaps with a short phrase after it (up to seven words): "began at", "began to withdraw from the moor". */
 const START_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:${START_WORDS})(?:${S}+[\p{L}'’-]+){0,7}${S}*$`, 'iu');
-const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at|by)${S}*$`, 'iu');
+const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|finishes|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at|by|wraps${S}+up|wrapped${S}+up|winds${S}+down|wound${S}+down|was${S}+over|is${S}+over|was${S}+complete|is${S}+complete|completed)${S}*$`, 'iu');
 const CHANGE_NOUNS = ['rise', 'increase', 'drop', 'fall', 'decline', 'change', 'jump', 'gain', 'loss', 'swing', 'difference', 'warming', 'cooling', 'growth', 'decrease', 'reduction', 'climb', 'leap', 'surge', 'plunge', 'slide'];
 const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'sank', 'sunk', 'thinned', 'thickened', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
 /** Phrasal verbs of change ("went up 80 m") and the present forms of the change verbs ("rises 2 ppm"). */
 const PHRASAL_CHANGES = ['went up', 'gone up', 'goes up', 'go up', 'going up', 'went down', 'gone down', 'rises', 'rising', 'climbs', 'climbing', 'falls', 'falling', 'drops', 'dropping', 'grows', 'growing'];
 const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...PHRASAL_CHANGES, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
-const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down', 'added', 'extra']);
+const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down', 'added', 'extra', 'above', 'below']);
 const SPAN_OF_PAIR = before(['lasting', 'lasted', 'lasts', 'spanning', 'spanned', 'spans', 'span of', 'period of', 'interval of', 'stretch of', 'over', 'across', 'within', 'took', 'taking', 'during', 'for', 'or', 'that is', 'i.e.', 'i.e.,', '(', '—', 'lay', 'lie', 'passed', 'elapsed', 'went by']);
 const SPAN_OF_CHANGE = before(['lasting', 'spanning', 'span of', 'period of', 'over', 'across', 'within', 'in', 'took', 'taking', 'during', 'for', 'after', '(', 'over the', 'across the', 'within the', 'during the']);
 /** Words that equate an amount with the rate it comes to ("80 ppm of CO2 would be 1.3 ppm per century"). */

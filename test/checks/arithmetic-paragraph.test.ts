@@ -24,7 +24,7 @@ describe('a change whose levels stand earlier in the paragraph', () => {
     [['Pupils read CO2 climbing from 200 ppm to 280 ppm over the termination.', 'So it went up by 60 ppm.'], '60 ppm', '80 ppm'],
     [['The panel has the lake warming from 3 °C to 9 °C between the stadial and the Holocene.', 'That is a rise of 4 °C in summer water.'], '4 °C', '6 °C'],
     [['The 2023 annual mean at the Corran Head inlet was 419 ppm.', 'Before industry the air held about 280 ppm, so the 2023 value is some 100 ppm higher.'], 'some 100 ppm', 'some 139 ppm'],
-    [['Our guide says the lake stood at 40 m above the old shore at the stadial.', 'Today it sits at 25 m, so it has dropped by 25 m.'], '25 m', '15 m'],
+    [['Our guide says the lake stood 40 m deep at the stadial.', 'Today it is 25 m deep, so it has dropped by 25 m.'], '25 m', '15 m'],
   ] as [string[], string, string][])('%j: flags %s', (sentences, text, correction) => {
     const found = flagged(...sentences);
     expect(found).toHaveLength(1);
@@ -120,5 +120,29 @@ describe('numbers in words', () => {
     expect(hasTwoNumerals('Forty people came, and twelve stayed.')).toBe(true);
     expect(hasTwoNumerals('It went up about 80 metres.')).toBe(false);
     expect(hasTwoNumerals('A long and slow thaw, half of it in the dark.')).toBe(false);
+  });
+});
+
+// Wordings of the same frames, sums by hand (common practice): 270 − 185 = 85; 143 ÷ 280 = 51 %;
+// 17,000 − 11,000 = 6,000 years.
+describe('more wordings of a change and a span', () => {
+  it.each([
+    [['In the Kelder cores the coldest layers hold about 185 ppm.'], 'By the time the thaw was over, the concentration had reached some 270 ppm, a rise of about 60 ppm.', 'arith.change', 'about 60 ppm'],
+    [['The 2024 figure at the Corran Head inlet was 423 ppm.'], 'That is 143 ppm above the 280 ppm of 1750, an increase of over 70 percent.', 'arith.ratio', 'over 70 percent'],
+    [[], 'The retreat gets under way about 17,000 years ago and wraps up by 11,000 years ago, so some 8,000 years of melting.', 'arith.duration', 'some 8,000 years'],
+    [[], 'The thaw kicked off 17,000 years ago and was over by 11,000 years ago, a span of 4,000 years.', 'arith.duration', '4,000 years'],
+  ] as [string[], string, string, string][])('%j %s', (before, sentence, rule, text) => {
+    const found = flagged(...before, sentence);
+    expect(found.map((f) => `${String(f[0])} ${String(f[1])}`)).toContain(`${rule} ${text}`);
+  });
+
+  it.each([
+    [['In the Kelder cores the coldest layers hold about 185 ppm.', 'By the time the thaw was over, the concentration had reached some 270 ppm, a rise of about 85 ppm.']],
+    [['The 2024 figure at the Corran Head inlet was 423 ppm.', 'That is 143 ppm above the 280 ppm of 1750, an increase of about 51 percent.']],
+    [['The retreat gets under way about 17,000 years ago and wraps up by 11,000 years ago, so some 6,000 years of melting.']],
+    // Sea level 120 m below today's is a level against today, not a change between two stated levels.
+    [['At the glacial peak the sea stood 120 m below today, and the ice was 3 km thick.']],
+  ] as [string[]][])('leaves alone: %j', (sentences) => {
+    expect(check(...sentences)).toEqual([]);
   });
 });

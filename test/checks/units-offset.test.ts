@@ -77,3 +77,27 @@ describe('spoken numbers', () => {
     expect(checkArithmetic(plain, parseQuantities(plain), []).map((f) => [f.ruleId, f.correction])).toEqual([['arith.change', '90 ppm']]);
   });
 });
+
+// A date restated in another era in the next sentence, after the era is named (Stuiver & Polach
+// 1977: BP counts from AD 1950; Walker et al. 2009: b2k counts from AD 2000, so b2k − 50 = BP).
+// 14,700 b2k = 14,650 BP; 8,200 b2k = 8,150 BP.
+describe('a date restated after the era it is written in', () => {
+  it.each([
+    [['The warming starts 14,700 years b2k (before AD 2000).'], 'On the BP scale it is 14,750 years.', '14,650 years'],
+    [['The cold event is dated to 8,200 years b2k.'], 'Counting from 1950 instead, in BP that is 8,250 years.', '8,150 years'],
+  ])('%j / %s', (before, sentence, correction) => {
+    const found = units(sentence, before);
+    expect(found.map((f) => f[0])).toEqual(['unit.age-era']);
+    expect(found[0]?.[2]).toBe(correction);
+  });
+
+  it.each([
+    [['The warming starts 14,700 years b2k (before AD 2000).'], 'On the BP scale it is 14,650 years.'],
+    // A length is not a date, whatever points back to it.
+    [['That core is only 3,270 feet long.'], "It's 3,270 metres, so closer to 10,700 feet."],
+    // No era named before the figure: a span, not a date.
+    [['The warming starts 14,700 years b2k.'], 'It is 3,000 years long.'],
+  ])('leaves alone: %j / %s', (before, sentence) => {
+    expect(units(sentence, before)).toEqual([]);
+  });
+});
