@@ -198,7 +198,9 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
     const fraction = after !== undefined && fractionOf(text, stated, after);
     const isPercent = stated.dimension === 'percent' && (isStatedChange(text, stated) || comparesToNext(text, stated));
     const multiple = timesTheMeasure(text, stated);
-    const isRatio = stated.dimension === 'ratio' && (isStatedRatio(text, stated) || comparesToNext(text, stated) || fraction || multiple);
+    // "more than half of a doubling": a ratio named as the yardstick of a fraction is no claim.
+    const yardstick = /(?:^|[^\p{L}])of[\s\u00A0]+(?:a|an|the|one)[\s\u00A0]*$/iu.test(text.slice(Math.max(0, stated.start - 12), stated.start));
+    const isRatio = stated.dimension === 'ratio' && !yardstick && (isStatedRatio(text, stated) || comparesToNext(text, stated) || fraction || multiple);
     if (!isPercent && !isRatio) return [];
     let pairRatio: Derived | undefined;
     let measures: string;

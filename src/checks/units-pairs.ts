@@ -47,6 +47,10 @@ const SCALE_JOINER = new RegExp(String.raw`^(?:${S}+(?:old|long))?${S}*(?:\(|\[|
 /** "are roughly 50 percent higher": a percentage that is a relative change, not the amount again. */
 const relativeChange = (text: string, q: Quantity): boolean => q.dimension === 'percent' && RELATIVE_AFTER.test(text.slice(q.end));
 
+/** "1 ppm is 0.0001 percent, so 280 ppm equals 0.028 percent": a figure that opens a new equation. */
+const EQUATION_AFTER = new RegExp(String.raw`^${S}+(?:is|equals|=|makes|gives|comes${S}+to)${S}+(?:(?:about|roughly|around|some|just)${S}+)?[\d.]`, 'iu');
+const startsAnEquation = (text: string, q: Quantity): boolean => EQUATION_AFTER.test(text.slice(q.end, q.end + 40));
+
 /** A quantity and its restatement in another unit; `loose` when words stand between them. */
 export interface Restatement {
   first: Quantity;
@@ -116,6 +120,8 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
       if (scaleOf(first) !== scaleOf(second) && SCALE_JOINER.test(gap)) out.push(ordered(first, second, false));
       continue;
     }
+    // "above 420 ppm, roughly 50 percent higher than ...": a relative change is not the amount again.
+    if (relativeChange(text, second) || startsAnEquation(text, second)) continue;
     if (JOINER.test(gap)) out.push(ordered(first, second, false));
     // "Today's 420 ppm is about 0.042 percent of the air": one amount, the copula, the same amount.
     else if (COPULA_GAP.test(gap) && closeDates(first, second) && !relativeChange(text, second)) out.push(ordered(first, second, true));

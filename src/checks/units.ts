@@ -59,7 +59,9 @@ function withNamedEra(text: string, qs: Quantity[], era: string): Quantity[] {
  * b2k. That is 11,650 years BP."). Flags always fall on this sentence's own words.
  */
 export function checkUnits(text: string, parsed: Quantity[], context: readonly string[] = []): FlagDraft[] {
-  const quantities = withNamedScale(text, parsed);
+  // "11,700 years before AD 2000": the reference year inside a date is no figure of its own here.
+  const outer = parsed.filter((q) => !parsed.some((o) => o !== q && o.start <= q.start && q.end <= o.end && o.end - o.start > q.end - q.start));
+  const quantities = withNamedScale(text, outer);
   const last = context[context.length - 1];
   const previous = last === undefined ? undefined : { text: last, quantities: parseQuantities(last) };
   const flags: FlagDraft[] = [];

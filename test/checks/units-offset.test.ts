@@ -101,3 +101,40 @@ describe('a date restated after the era it is written in', () => {
     expect(units(sentence, before)).toEqual([]);
   });
 });
+
+// Look-alikes of a restatement that must stay clean (NIST SP 811: 1% = 10,000 ppm; Walker et al.
+// 2009: b2k = BP + 50; a relative change in percent is not a share of the air).
+describe('figures beside each other that restate nothing', () => {
+  it.each([
+    // a relative change after a level
+    'In 2023 the inlet read over 419 ppm, some 50 percent higher than in 1750.',
+    'Glacial air held 185 ppm, about 34 percent lower than the 280 ppm of 1750.',
+    // a new equation after the comma
+    'One ppm is 0.0001 percent, so 410 ppm equals 0.041 percent.',
+    // the reference year inside a date
+    'The warm spell is put at 8,200 years before AD 2000, which is 8,150 BP.',
+  ])('%s', (sentence) => {
+    expect(units(sentence)).toEqual([]);
+  });
+
+  it('still reads the date inside a b2k phrase against its BP restatement', () => {
+    const sentence = 'The warm spell is put at 8,200 years before AD 2000, which is 8,250 BP.';
+    expect(units(sentence)).toEqual([['unit.age-era', '8,250 BP', '8,150 BP']]);
+  });
+});
+
+// "half of a doubling" names a doubling as the yardstick of a fraction (common practice: forcing
+// compared in doublings of CO2); it claims no doubling between the sentence's two levels.
+describe('a ratio named as a yardstick', () => {
+  it.each([
+    'Going from 280 to 400 ppm is already more than half of a doubling in forcing terms.',
+    'From 190 to 280 ppm the glacial rise was about a third of a tripling in those terms.',
+  ])('%s', (sentence) => {
+    expect(arithmetic(sentence)).toEqual([]);
+  });
+
+  it('still flags a doubling the sentence claims', () => {
+    const sentence = 'From 280 to 400 ppm, CO2 has doubled.';
+    expect(arithmetic(sentence).map((f) => f.ruleId)).toEqual(['arith.ratio']);
+  });
+});
