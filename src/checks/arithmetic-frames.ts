@@ -23,7 +23,7 @@ const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finishe
 const CHANGE_NOUNS = ['rise', 'increase', 'drop', 'fall', 'decline', 'change', 'jump', 'gain', 'loss', 'swing', 'difference', 'warming', 'cooling', 'growth', 'decrease', 'reduction', 'climb', 'leap', 'surge', 'plunge', 'slide'];
 const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'sank', 'sunk', 'thinned', 'thickened', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
 /** Phrasal verbs of change ("went up 80 m") and the present forms of the change verbs ("rises 2 ppm"). */
-const PHRASAL_CHANGES = ['went up', 'gone up', 'goes up', 'go up', 'going up', 'went down', 'gone down', 'rises', 'rising', 'climbs', 'climbing', 'falls', 'falling', 'drops', 'dropping', 'grows', 'growing'];
+const PHRASAL_CHANGES = ['went up', 'gone up', 'goes up', 'go up', 'going up', 'went down', 'gone down', 'rises', 'rising', 'climbs', 'climbing', 'falls', 'falling', 'drops', 'dropping', 'grows', 'growing', 'added', 'adds', 'adding'];
 const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...PHRASAL_CHANGES, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
 const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down', 'added', 'extra', 'above', 'below']);
 const SPAN_OF_PAIR = before(['lasting', 'lasted', 'lasts', 'spanning', 'spanned', 'spans', 'span of', 'period of', 'interval of', 'stretch of', 'over', 'across', 'within', 'took', 'taking', 'during', 'for', 'or', 'that is', 'i.e.', 'i.e.,', '(', '—', 'lay', 'lie', 'passed', 'elapsed', 'went by']);
@@ -70,6 +70,7 @@ export function findPairs(text: string, qs: Quantity[]): Pair[] {
     const a = qs[i] as Quantity;
     const to = toEnd(text, qs, i);
     if (to !== undefined && FROM.test(head(text, a))) pairs.push({ from: i, to });
+    else if (a.dimension === 'age' && datesFromTo(text, qs, i)) pairs.push({ from: i, to: i + 1 });
     else {
       const end = startEnd(text, qs, i) ?? datesBetween(text, qs, i) ?? endOfTwoDates(text, qs, i);
       if (end !== undefined) pairs.push({ from: i, to: end });
@@ -92,6 +93,23 @@ function toEnd(text: string, qs: Quantity[], i: number): number | undefined {
   if (middle !== undefined && middle.dimension !== 'age') return undefined;
   const between = middle === undefined ? text.slice(a.end, b.start) : `${text.slice(a.end, middle.start)}DATE${text.slice(middle.end, b.start)}`;
   return TO.test(between) || WHEN_TO.test(between) ? j : undefined;
+}
+
+/** "from the end of the last warm period, about 115,000 years ago, to its peak": "from" and a short noun phrase before a date. */
+const FROM_PHRASE = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[\p{L}'’-]+${S}+){1,7}?[\p{L}'’-]+,${S}*(?:(?:about|around|some|roughly|circa|c\.)${S}+)?$`, 'iu');
+/** ", to its peak some", ", to the start of the Holocene at": "to" and a short noun phrase before the second date. */
+const TO_PHRASE = new RegExp(String.raw`^,?${S}+(?:up${S}+)?to${S}+(?:[\p{L}'’-]+${S}+){0,6}$`, 'iu');
+
+/**
+ * True when dates A (index i) and the next date B are the ends of "from [a phrase], A, to [a
+ * phrase] B": each end named by its event, then its date.
+ */
+function datesFromTo(text: string, qs: Quantity[], i: number): boolean {
+  const a = qs[i] as Quantity;
+  const b = qs[i + 1];
+  if (b?.dimension !== 'age') return false;
+  const gap = text.slice(a.end, b.start);
+  return FROM_PHRASE.test(text.slice(Math.max(0, a.start - 80), a.start)) && TO_PHRASE.test(gap);
 }
 
 /** The index of B in "began A ... ended B" (the next quantity of A's dimension), or undefined. */
@@ -213,7 +231,7 @@ const APPOSED_CHANGE = new RegExp(
  * the number.
  */
 const CONSEQUENCE_CHANGE = new RegExp(
-  String.raw`^[^\d;.!?]{0,40}?[,;:—–]${S}*(?:and${S}+)?(?:so|which|thus|hence|that)${S}+(?:[^\d;.!?,]{0,30}?${S})?(?:${list(CHANGE_NOUNS)}|${list(CHANGE_VERBS)}|added|adds)(?:${S}+(?:of|by|was|is|came${S}+to|comes${S}+to|amounted${S}+to|to))?${S}*$`,
+  String.raw`^[^\d;.!?]{0,40}?[,;:—–]${S}*(?:and${S}+)?(?:so|which|thus|hence|that)${S}+(?:[^\d;.!?,]{0,30}?${S})?(?:${list(CHANGE_NOUNS)}|${list(CHANGE_VERBS)}|added|adds)(?:${S}+(?:of|by|was|is|came${S}+to|comes${S}+to|amounted${S}+to))?${S}*$`,
   'iu',
 );
 

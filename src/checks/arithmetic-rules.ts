@@ -9,7 +9,7 @@ import type { Dimension, Quantity } from '../types.js';
 import { changesAcross, type Previous } from './arithmetic-context.js';
 import { divide, facing, invert, minus, percentChange, rangeSpan, size, type Derived } from './arithmetic-derive.js';
 import { spanOfDates } from './arithmetic-spans.js';
-import { durationsAcross, paceRatiosAcross } from './arithmetic-across.js';
+import { durationsAcross, paceRatiosAcross, spansAcross } from './arithmetic-across.js';
 import { writtenSums } from './arithmetic-equations.js';
 import { perLength } from './arithmetic-per-length.js';
 import { changeShares } from './arithmetic-shares.js';
@@ -56,6 +56,9 @@ function changes(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
 /** Dimensions whose two levels name a change between them, and the dimension of that change. */
 const LEVELS: Partial<Record<Dimension, Dimension>> = { concentration: 'concentration', temperature: 'temperature-change', length: 'length' };
 
+/** A word that draws what follows from the level before it: ", so", ", which means", ", thus". */
+const DRAWN = /[,;:—–][\s\u00A0]*(?:and[\s\u00A0]+)?(?:so|thus|hence|which[\s\u00A0]+means|meaning)(?![\p{L}])/iu;
+
 /**
  * "it sat near 180 ppm in the cold phases and near 280 ppm in the warm ones, a swing of some 140
  * ppm": exactly two levels of one dimension, no from-to pair, and a change in apposition right
@@ -68,7 +71,9 @@ function apposedChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] 
     const levels = qs.filter((q, k) => q.dimension === level && !isStatedChange(text, q) && !(k > 0 && isConsequenceChange(text, qs[k - 1] as Quantity, q)));
     if (levels.length !== 2) return [];
     const [a, b] = levels as [Quantity, Quantity];
-    const stated = only(qs.filter((q) => q.dimension === changeDim && q !== a && q !== b && isApposedChange(text, b, q)));
+    // "... held 190 ppm, so the climb to 280 ppm added 130 ppm": a change drawn after both levels.
+    const drawn = (q: Quantity): boolean => q.start > b.end && DRAWN.test(text.slice(a.end, b.start)) && isStatedChange(text, q) && !/[;.!?]/u.test(text.slice(a.end, q.start));
+    const stated = only(qs.filter((q) => q.dimension === changeDim && q !== a && q !== b && (isApposedChange(text, b, q) || drawn(q))));
     if (stated === undefined || !(isStatedChange(text, stated) || isConsequenceChange(text, b, stated))) return [];
     return [{ stated, computed: facing(size(minus(w(b), w(a))), stated.value), measures: `the difference between ${a.text} and ${b.text}` }];
   });
@@ -271,7 +276,10 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     const found = [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)];
     return [...found, ...notYet(found, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
   } },
-  { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => [...durations(t, qs, p), ...durationsAcross(t, qs, prev)] },
+  { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => {
+    const found = [...durations(t, qs, p), ...durationsAcross(t, qs, prev)];
+    return [...found, ...notYet(found, spansAcross(t, qs, prev))];
+  } },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev) => [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)] },
   { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)];

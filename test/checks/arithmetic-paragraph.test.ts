@@ -146,3 +146,29 @@ describe('more wordings of a change and a span', () => {
     expect(check(...sentences)).toEqual([]);
   });
 });
+
+// Spans and changes drawn from dates and levels named by their events. Sums by hand (common
+// practice): 130,000 − 116,000 = 14,000; 14,700 − 12,900 = 1,800; 275 − 185 = 90.
+describe('ends named by their events, and spans drawn across two sentences', () => {
+  it.each([
+    [[], 'The interglacial ran from the end of the penultimate glacial, about 130,000 years ago, to the first ice growth some 116,000 years ago, a stretch of roughly 24,000 years.', 'arith.duration', 'roughly 24,000 years'],
+    [['Close to 14,700 years ago Greenland warmed abruptly into the Bølling.'], 'That mild spell gave way about 12,900 years ago, so it lasted some 2,800 years.', 'arith.duration', 'some 2,800 years'],
+    [['Around 14,700 years ago the Bølling warming began in Greenland.'], 'The warm phase ended by 12,900 years ago, which means it ran for about 800 years.', 'arith.duration', 'about 800 years'],
+    [[], 'Glacial air held roughly 185 ppm, so the climb to 275 ppm by the early Holocene added 120 ppm.', 'arith.change', '120 ppm'],
+  ] as [string[], string, string, string][])('%j %s', (before, sentence, rule, text) => {
+    const found = flagged(...before, sentence);
+    expect(found.map((f) => `${String(f[0])} ${String(f[1])}`)).toContain(`${rule} ${text}`);
+  });
+
+  it.each([
+    [['The interglacial ran from the end of the penultimate glacial, about 130,000 years ago, to the first ice growth some 116,000 years ago, a stretch of roughly 14,000 years.']],
+    [['Close to 14,700 years ago Greenland warmed abruptly into the Bølling.', 'That mild spell gave way about 12,900 years ago, so it lasted some 1,800 years.']],
+    // A span stated, not drawn from the dates: the sentence before may date something else.
+    [['The glacial maximum came about 21,000 years ago.', 'The Younger Dryas ended about 11,700 years ago and lasted some 1,200 years.']],
+    [['Glacial air held roughly 185 ppm, so the climb to 275 ppm by the early Holocene added 90 ppm.']],
+    // "climbed to" names the end level, not a change: no change is stated here.
+    [['Glacial air held roughly 185 ppm, so it climbed to 275 ppm by the early Holocene.']],
+  ] as [string[]][])('leaves alone: %j', (sentences) => {
+    expect(check(...sentences)).toEqual([]);
+  });
+});
