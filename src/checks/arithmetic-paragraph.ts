@@ -15,9 +15,9 @@
  */
 import { writtenInterval as w } from '../quantities/index.js';
 import type { Dimension, Quantity } from '../types.js';
-import { divide, facing, minus, percentChange, size, type Derived } from './arithmetic-derive.js';
+import { divide, facing, invert, minus, percentChange, size, type Derived } from './arithmetic-derive.js';
 import type { Previous } from './arithmetic-context.js';
-import { findPairs, isStatedChange, type Pair } from './arithmetic-frames.js';
+import { comparesToNext, findPairs, isStatedChange, type Pair } from './arithmetic-frames.js';
 
 /** A finding from the paragraph, with the basis named. */
 export interface ParagraphFinding {
@@ -32,7 +32,7 @@ const S = String.raw`[\s\u00A0]`;
 const CHANGE_OF: Partial<Record<Dimension, Dimension>> = { concentration: 'concentration', temperature: 'temperature-change', length: 'length' };
 /** An opening that carries the reader on, perhaps after a label ("Model answer:"): "It", "That", "So". */
 const OPENS_BY_REFERRING = new RegExp(
-  String.raw`^[^\p{L}\p{N}]*(?:\p{L}+(?:${S}+\p{L}+){0,2}${S}*:[^\p{L}\p{N}]*)?(?:that|this|so|thus|hence|therefore|it|which|in${S}+all|overall)(?![\p{L}])`,
+  String.raw`^[^\p{L}\p{N}]*(?:\d{1,3}(?:${S}*\/${S}*\d{1,3})?[/.)][^\p{L}\p{N}]*)?(?:\p{L}+(?:${S}+\p{L}+){0,2}${S}*:[^\p{L}\p{N}]*)?(?:that|this|so|thus|hence|therefore|it|which|in${S}+all|overall)(?![\p{L}])`,
   'iu',
 );
 /** A pronoun or a word of consequence before the change: the sentence speaks of what came before. */
@@ -102,4 +102,38 @@ function noLevelHere(text: string, qs: Quantity[], changes: Quantity[], before: 
     if (r !== undefined) findings.push({ stated: percent, computed: percentChange(r, percent.value), measures: `the percentage change from ${a.text} to ${b.text} in an earlier sentence`, basis });
   }
   return findings;
+}
+
+/**
+ * "Mauna Loa averaged about 426 ppm in 2025. That's more than 70% above the pre-industrial 280."
+ * A percentage or a multiple compared with the figure after it, in a sentence that opens by
+ * referring back and states no level of its own before it: its subject is the one level of the
+ * nearest earlier sentence naming one. A bare figure after it ("the pre-industrial 280") is read in
+ * that level's unit when it is of the same size (within a factor of ten), as the writer left it off.
+ */
+export function comparisonsInParagraph(text: string, qs: Quantity[], earlier: readonly Previous[]): ParagraphFinding[] {
+  if (earlier.length === 0 || !OPENS_BY_REFERRING.test(text)) return [];
+  // A thread's or list's number ("14/", "3.") is no figure of the sentence.
+  const figures = qs.filter((q) => !(/^[^\p{L}]*$/u.test(text.slice(0, q.start)) && /^[/.)]/u.test(text.slice(q.end))));
+  return figures.flatMap((stated, k) => {
+    const qs = figures;
+    if ((stated.dimension !== 'percent' && stated.dimension !== 'ratio') || !comparesToNext(text, stated)) return [];
+    const next = qs[k + 1];
+    if (next === undefined || qs.slice(0, k).some((q) => q.dimension === next.dimension || CHANGE_OF[q.dimension] !== undefined)) return [];
+    const dimension = next.dimension === 'number' ? undefined : next.dimension;
+    const level = (d: Dimension): Quantity | undefined => {
+      const before = nearestWithLevel(earlier, d);
+      return before === undefined || before.pairs.length > 0 ? undefined : only(before.levels);
+    };
+    const subject = dimension !== undefined ? (CHANGE_OF[dimension] === undefined ? undefined : level(dimension)) : only(Object.keys(CHANGE_OF).flatMap((d) => level(d as Dimension) ?? []));
+    if (subject === undefined) return [];
+    const base = w(next);
+    const ratioToBase = divide(w(subject), next.dimension === 'number' ? base : base);
+    if (ratioToBase === undefined || (next.dimension === 'number' && (ratioToBase.value > 10 || ratioToBase.value < 0.1))) return [];
+    if (next.dimension !== 'number' && next.statedUnit !== subject.statedUnit) return [];
+    const measures = `${subject.text} in an earlier sentence against ${next.text}`;
+    if (stated.dimension === 'percent') return [{ stated, computed: percentChange(ratioToBase, stated.value), measures: `the percentage difference of ${measures}`, basis }];
+    const r = (stated.value < 1) === (ratioToBase.value < 1) ? ratioToBase : invert(ratioToBase);
+    return [{ stated, computed: r, measures: `the ratio of ${measures}`, basis }];
+  });
 }

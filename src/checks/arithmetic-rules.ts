@@ -13,7 +13,7 @@ import { durationsAcross, paceRatiosAcross, spansAcross } from './arithmetic-acr
 import { writtenSums } from './arithmetic-equations.js';
 import { perLength } from './arithmetic-per-length.js';
 import { changeShares } from './arithmetic-shares.js';
-import { changesInParagraph } from './arithmetic-paragraph.js';
+import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragraph.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
@@ -284,7 +284,8 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)];
     const shares = [...found, ...notYet(found, changeShares(t, qs, p))];
-    return [...shares, ...notYet(shares, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
+    const paragraph = [...shares, ...notYet(shares, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
+    return [...paragraph, ...notYet(paragraph, comparisonsInParagraph(t, qs, earlier))];
   } },
 ];
 

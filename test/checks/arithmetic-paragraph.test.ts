@@ -172,3 +172,29 @@ describe('ends named by their events, and spans drawn across two sentences', () 
     expect(check(...sentences)).toEqual([]);
   });
 });
+
+// A comparison whose subject is the level of the sentence before. Sums by hand (common practice):
+// 426 ÷ 280 − 1 = 52 %; 426 ÷ 185 = 2.3 times.
+describe('a comparison whose subject stands in the sentence before', () => {
+  it.each([
+    [['The station averaged 426 ppm over 2025.'], "That's more than 70% above the pre-industrial 280.", 'more than 70%'],
+    [['The station averaged 426 ppm over 2025.'], '7/ That is about 30 percent higher than the 280 ppm of 1750.', 'about 30 percent'],
+    [['The station averaged 426 ppm over 2025.'], 'It is some four times higher than the glacial 185 ppm.', 'some four times'],
+  ] as [string[], string, string][])('%j %s', (before, sentence, text) => {
+    const found = flagged(...before, sentence);
+    expect(found.map((f) => `${String(f[0])} ${String(f[1])}`)).toContain(`arith.ratio ${text}`);
+  });
+
+  it.each([
+    [['The station averaged 426 ppm over 2025.', "That's about 52% above the pre-industrial 280."]],
+    [['The station averaged 426 ppm over 2025.', 'It is some 2.3 times higher than the glacial 185 ppm.']],
+    // Two levels before: which one is compared is not known.
+    [['The station averaged 426 ppm over 2025, up from 411 ppm in 2019.', "That's more than 70% above the pre-industrial 280."]],
+    // No reference back: the comparison is of something else.
+    [['The station averaged 426 ppm over 2025.', 'Methane is more than 150% above its pre-industrial 700 ppb.']],
+    // A bare figure of another size is not read in the level's unit.
+    [['The station averaged 426 ppm over 2025.', "That's more than 70% above the 1.5 of the old scale."]],
+  ] as [string[]][])('leaves alone: %j', (sentences) => {
+    expect(check(...sentences)).toEqual([]);
+  });
+});
