@@ -5,6 +5,7 @@ import { checkRanks } from './checks/rank/index.js';
 import { checkReasoning, judgeByStance, paragraphReader, type ParagraphContext } from './checks/reasoning/index.js';
 import { checkReferences } from './checks/reference.js';
 import { checkUnits } from './checks/units.js';
+import { hasTwoNumerals } from './quantities/two-numerals.js';
 import { FirnlineError } from './errors.js';
 import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
@@ -218,7 +219,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     // slips, which need two numbers in one sentence (sentences are pieces of their block): without
     // them it is not even split.
     const nextTo = beside[blockIndex] === true;
-    if (!TWO_NUMBERS.test(block.text) && !nextTo && !subjects.test(block.text)) return;
+    if (!TWO_NUMBERS.test(block.text) && !nextTo && !subjects.test(block.text) && !hasTwoNumerals(block.text)) return;
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
@@ -338,7 +339,7 @@ function examineSentence(
   if (!onTopic) {
     const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs) : undefined;
     if (carried !== undefined) return carried;
-    if (!TWO_NUMBERS.test(text)) return undefined;
+    if (!TWO_NUMBERS.test(text) && !hasTwoNumerals(text)) return undefined;
     const quantities = parseQuantities(text);
     const slips = [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
     if (slips.length === 0) return undefined;

@@ -11,7 +11,7 @@
  */
 import { writtenInterval as w } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
-import { divide, invert, type Derived } from './arithmetic-derive.js';
+import { divide, invert, minus, rangeSpan, size, type Derived } from './arithmetic-derive.js';
 import { findPairs, isPaceRatio, timesTheMeasure } from './arithmetic-frames.js';
 import type { Previous } from './arithmetic-context.js';
 import { spanOfDates } from './arithmetic-spans.js';
@@ -46,6 +46,30 @@ export function durationsAcross(text: string, qs: Quantity[], previous: Previous
   const earlier = only(spanOfDates(previous.quantities, findPairs(previous.text, previous.quantities)));
   if (earlier === undefined) return [];
   return [{ stated, computed: earlier.span, measures: `${earlier.measures} in the sentence before`, basis: "the paragraph's" }];
+}
+
+/** Words that end something just before its date: "ended around", "was over by", "gave way about". */
+const END_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|finished|closed|ceased|stopped|was${S}+over|gave${S}+way|until|till|by)(?:${S}+(?:at|in|around|about|some|roughly|near|c\.|circa))?${S}*$`, 'iu');
+/** A span drawn from the dates as their consequence: ", so it lasted", "which means it took", "meaning a spell of". */
+const DRAWN_SPAN = new RegExp(String.raw`^[^.;!?\d]{0,12}?[,;:—–]${S}*(?:and${S}+)?(?:so|thus|hence|which${S}+means|meaning)(?![\p{L}])[^.;!?\d]{0,40}$`, 'iu');
+
+/**
+ * "About 12,900 years ago the region plunged back into cold. The cold snap ended around 11,700 years
+ * ago, so it lasted some 2,200 years." The start date stands alone in the sentence before, the end
+ * date alone here after a word that ends something, and the span is drawn from them as their
+ * consequence ("so", "which means") right after the end date.
+ */
+export function spansAcross(text: string, qs: Quantity[], previous: Previous | undefined): AcrossFinding[] {
+  if (previous === undefined) return [];
+  const dates = qs.filter((q) => q.dimension === 'age');
+  const end = only(dates);
+  const start = only(previous.quantities.filter((q) => q.dimension === 'age'));
+  if (end === undefined || start === undefined || !END_BEFORE.test(text.slice(Math.max(0, end.start - 30), end.start))) return [];
+  if (rangeSpan(end) !== undefined || rangeSpan(start) !== undefined) return [];
+  const stated = only(qs.filter((q) => q.dimension === 'duration' && q.start > end.end));
+  if (stated === undefined || !DRAWN_SPAN.test(text.slice(end.end, stated.start)) || !SPAN_WORDS.test(text.slice(Math.max(0, stated.start - 40), stated.start))) return [];
+  const span = size(minus(w(start), w(end)));
+  return [{ stated, computed: span, measures: `the time from ${start.text} in the sentence before to ${end.text}`, basis: "the paragraph's" }];
 }
 
 /** "Today's 2.4 ppm a year is some 19 times faster": this rate over the one rate of the sentence before. */

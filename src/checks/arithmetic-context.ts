@@ -26,8 +26,11 @@ export interface AcrossFinding {
 
 /** Levels a draft follows from one sentence to the next, and the dimension of a change in them. */
 const CHANGE_OF: Partial<Record<Dimension, Dimension>> = { concentration: 'concentration', temperature: 'temperature-change', length: 'length' };
-/** Words that carry the reader on from the sentence before; "by the end of" and the like name a later time. */
-const BACK_REFERENCE = /(?:^|[^\p{L}])(?:it|by[\s\u00A0]+then|by[\s\u00A0]+the[\s\u00A0]+(?:start|end|eve|close|dawn|onset|beginning)[\s\u00A0]+of|from[\s\u00A0]+there|since[\s\u00A0]+then|later)(?![\p{L}])/iu;
+/**
+ * Words that carry the reader on from the sentence before; "by the end of" and the like name a
+ * later time; "the level", "the concentration" name again what the sentence before measured.
+ */
+const BACK_REFERENCE = /(?:^|[^\p{L}])(?:it|by[\s\u00A0]+then|by[\s\u00A0]+the[\s\u00A0]+(?:start|end|eve|close|dawn|onset|beginning|time)[\s\u00A0]+(?:of|when|that|the)|from[\s\u00A0]+there|since[\s\u00A0]+then|later|(?:the|that|this)[\s\u00A0]+(?:level|concentration|value|figure|reading|amount|mean|average))(?![\p{L}])/iu;
 /** "climbed to [280 ppm]", "reached [280 ppm]": the words that make a level the end of the change. */
 const END_CUE = /(?:^|[^\p{L}])(?:to|reached|reaching)[\s\u00A0]*$/iu;
 /**

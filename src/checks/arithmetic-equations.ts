@@ -1,23 +1,54 @@
 /**
  * Sums written out in the draft, as worked answers and explainers show them: "265 − 188 = 77",
- * "420 − 280 = 140 ppm", "9 × 1.8 = 16.2". The result after "=" must be what the two numbers
- * before it give. Each number is read as written (its last written place), so "18.2 − 9 = 9"
- * passes: 9.2 rounds to 9. Only a sum whose three numbers the quantity reader found on their own
+ * "420 − 280 = 140 ppm", "9 × 1.8 = 16.2", or with the result in words ("76 ÷ 6,000 gives 0.013";
+ * "280 − 180, an increase of 100 ppm"). The result must be what the two numbers before it give.
+ * The operands are exact and the result is read as written (its last written place), so
+ * "18.2 − 9 = 9" passes: 9.2 rounds to 9. Only a sum whose three numbers the quantity reader found on their own
  * is read; "3-4" and the like are ranges, not subtractions.
  */
-import { writtenInterval as w } from '../quantities/index.js';
+import { toCanonical, writtenInterval as w } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
 import { divide, minus, type Derived } from './arithmetic-derive.js';
 
 const S = String.raw`[\s\u00A0]`;
 /** The operator between the first two numbers of a written sum. */
 const OPERATOR = new RegExp(String.raw`^${S}*([−+×x*÷/]|${S}-${S})${S}*$`, 'u');
-const EQUALS = new RegExp(String.raw`^${S}*=${S}*$`, 'u');
+/**
+ * Between the second number and the result: "=", or the words a worked answer uses for it ("gives",
+ * "makes", "comes to", "equals", "is"), or an apposition naming the result (", an increase of",
+ * ", or", ", that is"): "280 − 180, an increase of 100 ppm"; "76 ÷ 6,000 gives about 0.013".
+ */
+const EQUALS = new RegExp(
+  String.raw`^${S}*(?:=|(?:,${S}*)?(?:gives|give|giving|makes|make|making|comes${S}+to|come${S}+to|equals|equal|is|are|or|that${S}+is|which${S}+is|i\.e\.,?)(?:${S}+(?:an?|the)${S}+[\p{L}-]+${S}+of)?|,${S}*(?:an?|the)${S}+[\p{L}-]+${S}+of)${S}*$`,
+  'iu',
+);
 
+/**
+ * An operand of a written sum is the number itself: the writer worked "280 − 180" as exactly 100.
+ * The result keeps the precision it was written to, which is the sum's only slack.
+ */
+const exact = (q: Quantity): Derived => {
+  const { value } = w(q);
+  return { value, low: value, high: value };
+};
 const plus = (a: Derived, b: Derived): Derived => ({ value: a.value + b.value, low: a.low + b.low, high: a.high + b.high });
 function times(a: Derived, b: Derived): Derived | undefined {
   if (a.low < 0 || b.low < 0) return undefined;
   return { value: a.value * b.value, low: a.low * b.low, high: a.high * b.high };
+}
+
+/** `d`, a number in `c`'s written unit, in `c`'s canonical unit. */
+function inUnitOf(d: Derived, c: Quantity): Derived {
+  const [low, high] = [toCanonical(d.low, c.statedUnit, c.dimension), toCanonical(d.high, c.statedUnit, c.dimension)].sort((x, y) => x - y) as [number, number];
+  return { value: toCanonical(d.value, c.statedUnit, c.dimension), low, high };
+}
+
+/**
+ * "5 + 32 = 41 °F of cooling": 32 added to give a Fahrenheit change is a unit slip, which the unit
+ * check reports (units-offset-sums.ts); its arithmetic is not judged twice.
+ */
+export function addsReadingOffset(op: string, a: Quantity, b: Quantity, c: Quantity): boolean {
+  return op.trim() === '+' && c.statedUnit === 'degF' && c.dimension === 'temperature-change' && (a.value === 32 || b.value === 32);
 }
 
 /** What the operator makes of the two numbers, or undefined when it cannot say. */
@@ -52,8 +83,11 @@ export function writtenSums(text: string, qs: Quantity[]): SumFinding[] {
     const op = OPERATOR.exec(text.slice(a.end, b.start))?.[1];
     if (op === undefined || !EQUALS.test(text.slice(b.end, c.start))) continue;
     if (a.hedge !== undefined || b.hedge !== undefined || !comparable(op, a, b, c)) continue;
-    const computed = apply(op, w(a), w(b));
-    if (computed === undefined) continue;
+    if (addsReadingOffset(op, a, b, c)) continue;
+    const sum = apply(op, exact(a), exact(b));
+    if (sum === undefined) continue;
+    // Bare operands give the result in the unit it is written in ("265 − 188 = 77 ppm", "9 × 1.8 = 16.2 °F").
+    const computed = a.dimension === 'number' && b.dimension === 'number' && c.statedUnit !== '' ? inUnitOf(sum, c) : sum;
     out.push({ stated: c, computed, measures: `${a.text} ${op.trim()} ${b.text}` });
   }
   return out;

@@ -16,14 +16,16 @@ const TO = new RegExp(String.raw`^${S}*(?:(?:up|down)${S}+to|to|until|till|throu
 /** A phrase of time or place between the start of a from-to pair and its "to" (a date in it reads DATE). */
 const WHEN_TO = new RegExp(String.raw`^,?${S}+(?:in|by|at|around|circa|during|before|after|near)${S}+[^\d.;:!?()]{1,40}?${S}+(?:to|until|till)${S}+$`, 'iu');
 /** Words that open the start of a stretch of time or a change, and words that mark its end ("... clear by B"). */
-const START_WORDS = list(['began', 'begun', 'begins', 'started', 'starts', 'set in', 'opened', 'onset', 'beginning', 'starting']);
+const START_WORDS = list(['began', 'begun', 'begins', 'started', 'starts', 'set in', 'opened', 'onset', 'beginning', 'starting', 'kicks off', 'kicked off', 'got going', 'gets going', 'got under way', 'gets under way', 'commenced', 'commences']);
 /** A start word, perhaps with a short phrase after it (up to seven words): "began at", "began to withdraw from the moor". */
 const START_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:${START_WORDS})(?:${S}+[\p{L}'’-]+){0,7}${S}*$`, 'iu');
-const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at|by)${S}*$`, 'iu');
+const END_CUE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|ending|finished|finishes|closed|ceased|stopped|terminated|lasted${S}+until|until|till|ended${S}+at|ending${S}+at|by|wraps${S}+up|wrapped${S}+up|winds${S}+down|wound${S}+down|was${S}+over|is${S}+over|was${S}+complete|is${S}+complete|completed)${S}*$`, 'iu');
 const CHANGE_NOUNS = ['rise', 'increase', 'drop', 'fall', 'decline', 'change', 'jump', 'gain', 'loss', 'swing', 'difference', 'warming', 'cooling', 'growth', 'decrease', 'reduction', 'climb', 'leap', 'surge', 'plunge', 'slide'];
 const CHANGE_VERBS = ['rose', 'risen', 'fell', 'fallen', 'sank', 'sunk', 'thinned', 'thickened', 'climbed', 'dropped', 'increased', 'decreased', 'declined', 'jumped', 'grew', 'warmed', 'cooled', 'gained', 'lost', 'changed'];
-const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
-const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down', 'added', 'extra']);
+/** Phrasal verbs of change ("went up 80 m") and the present forms of the change verbs ("rises 2 ppm"). */
+const PHRASAL_CHANGES = ['went up', 'gone up', 'goes up', 'go up', 'going up', 'went down', 'gone down', 'rises', 'rising', 'climbs', 'climbing', 'falls', 'falling', 'drops', 'dropping', 'grows', 'growing', 'added', 'adds', 'adding'];
+const CHANGE_BEFORE = before(['by', 'amounting to', 'a total of', 'net', ...CHANGE_VERBS, ...PHRASAL_CHANGES, ...CHANGE_NOUNS.map((n) => `${n} of`)]);
+const CHANGE_AFTER = after([...CHANGE_NOUNS, 'higher', 'lower', 'more', 'less', 'warmer', 'cooler', 'colder', 'up', 'down', 'added', 'extra', 'above', 'below']);
 const SPAN_OF_PAIR = before(['lasting', 'lasted', 'lasts', 'spanning', 'spanned', 'spans', 'span of', 'period of', 'interval of', 'stretch of', 'over', 'across', 'within', 'took', 'taking', 'during', 'for', 'or', 'that is', 'i.e.', 'i.e.,', '(', '—', 'lay', 'lie', 'passed', 'elapsed', 'went by']);
 const SPAN_OF_CHANGE = before(['lasting', 'spanning', 'span of', 'period of', 'over', 'across', 'within', 'in', 'took', 'taking', 'during', 'for', 'after', '(', 'over the', 'across the', 'within the', 'during the']);
 /** Words that equate an amount with the rate it comes to ("80 ppm of CO2 would be 1.3 ppm per century"). */
@@ -68,6 +70,7 @@ export function findPairs(text: string, qs: Quantity[]): Pair[] {
     const a = qs[i] as Quantity;
     const to = toEnd(text, qs, i);
     if (to !== undefined && FROM.test(head(text, a))) pairs.push({ from: i, to });
+    else if (a.dimension === 'age' && datesFromTo(text, qs, i)) pairs.push({ from: i, to: i + 1 });
     else {
       const end = startEnd(text, qs, i) ?? datesBetween(text, qs, i) ?? endOfTwoDates(text, qs, i);
       if (end !== undefined) pairs.push({ from: i, to: end });
@@ -90,6 +93,23 @@ function toEnd(text: string, qs: Quantity[], i: number): number | undefined {
   if (middle !== undefined && middle.dimension !== 'age') return undefined;
   const between = middle === undefined ? text.slice(a.end, b.start) : `${text.slice(a.end, middle.start)}DATE${text.slice(middle.end, b.start)}`;
   return TO.test(between) || WHEN_TO.test(between) ? j : undefined;
+}
+
+/** "from the end of the last warm period, about 115,000 years ago, to its peak": "from" and a short noun phrase before a date. */
+const FROM_PHRASE = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[\p{L}'’-]+${S}+){1,7}?[\p{L}'’-]+,${S}*(?:(?:about|around|some|roughly|circa|c\.)${S}+)?$`, 'iu');
+/** ", to its peak some", ", to the start of the Holocene at": "to" and a short noun phrase before the second date. */
+const TO_PHRASE = new RegExp(String.raw`^,?${S}+(?:up${S}+)?to${S}+(?:[\p{L}'’-]+${S}+){0,6}$`, 'iu');
+
+/**
+ * True when dates A (index i) and the next date B are the ends of "from [a phrase], A, to [a
+ * phrase] B": each end named by its event, then its date.
+ */
+function datesFromTo(text: string, qs: Quantity[], i: number): boolean {
+  const a = qs[i] as Quantity;
+  const b = qs[i + 1];
+  if (b?.dimension !== 'age') return false;
+  const gap = text.slice(a.end, b.start);
+  return FROM_PHRASE.test(text.slice(Math.max(0, a.start - 80), a.start)) && TO_PHRASE.test(gap);
 }
 
 /** The index of B in "began A ... ended B" (the next quantity of A's dimension), or undefined. */
@@ -211,7 +231,7 @@ const APPOSED_CHANGE = new RegExp(
  * the number.
  */
 const CONSEQUENCE_CHANGE = new RegExp(
-  String.raw`^[^\d;.!?]{0,40}?[,;:—–]${S}*(?:and${S}+)?(?:so|which|thus|hence|that)${S}+(?:[^\d;.!?,]{0,30}?${S})?(?:${list(CHANGE_NOUNS)}|${list(CHANGE_VERBS)}|added|adds)(?:${S}+(?:of|by|was|is|came${S}+to|comes${S}+to|amounted${S}+to|to))?${S}*$`,
+  String.raw`^[^\d;.!?]{0,40}?[,;:—–]${S}*(?:and${S}+)?(?:so|which|thus|hence|that)${S}+(?:[^\d;.!?,]{0,30}?${S})?(?:${list(CHANGE_NOUNS)}|${list(CHANGE_VERBS)}|added|adds)(?:${S}+(?:of|by|was|is|came${S}+to|comes${S}+to|amounted${S}+to))?${S}*$`,
   'iu',
 );
 

@@ -4,15 +4,16 @@
  * read as written, without their hedges (quantities/written-interval.ts): the writer did the sum
  * on the numbers they wrote. The stated result keeps its hedge.
  */
-import { writtenInterval as w } from '../quantities/index.js';
+import { parseQuantities, writtenInterval as w } from '../quantities/index.js';
 import type { Dimension, Quantity } from '../types.js';
 import { changesAcross, type Previous } from './arithmetic-context.js';
-import { divide, facing, invert, minus, percentChange, size, type Derived } from './arithmetic-derive.js';
+import { divide, facing, invert, minus, percentChange, rangeSpan, size, type Derived } from './arithmetic-derive.js';
 import { spanOfDates } from './arithmetic-spans.js';
-import { durationsAcross, paceRatiosAcross } from './arithmetic-across.js';
+import { durationsAcross, paceRatiosAcross, spansAcross } from './arithmetic-across.js';
 import { writtenSums } from './arithmetic-equations.js';
 import { perLength } from './arithmetic-per-length.js';
 import { changeShares } from './arithmetic-shares.js';
+import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragraph.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
@@ -29,8 +30,11 @@ export interface Finding {
 export interface ArithmeticRule {
   id: string;
   summary: string;
-  /** `previous` is the sentence before in the same paragraph, read only by rules that span two. */
-  derive: (text: string, qs: Quantity[], pairs: Pair[], previous?: Previous) => Finding[];
+  /**
+   * `previous` is the sentence before in the same paragraph, read only by rules that span two;
+   * `earlier` is every context sentence before, nearest first, read by rules that look further back.
+   */
+  derive: (text: string, qs: Quantity[], pairs: Pair[], previous?: Previous, earlier?: readonly Previous[]) => Finding[];
 }
 
 const DIFFERENCE: Partial<Record<Dimension, Dimension>> = {
@@ -52,6 +56,9 @@ function changes(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
 /** Dimensions whose two levels name a change between them, and the dimension of that change. */
 const LEVELS: Partial<Record<Dimension, Dimension>> = { concentration: 'concentration', temperature: 'temperature-change', length: 'length' };
 
+/** A word that draws what follows from the level before it: ", so", ", which means", ", thus". */
+const DRAWN = /[,;:—–][\s\u00A0]*(?:and[\s\u00A0]+)?(?:so|thus|hence|which[\s\u00A0]+means|meaning)(?![\p{L}])/iu;
+
 /**
  * "it sat near 180 ppm in the cold phases and near 280 ppm in the warm ones, a swing of some 140
  * ppm": exactly two levels of one dimension, no from-to pair, and a change in apposition right
@@ -64,7 +71,9 @@ function apposedChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] 
     const levels = qs.filter((q, k) => q.dimension === level && !isStatedChange(text, q) && !(k > 0 && isConsequenceChange(text, qs[k - 1] as Quantity, q)));
     if (levels.length !== 2) return [];
     const [a, b] = levels as [Quantity, Quantity];
-    const stated = only(qs.filter((q) => q.dimension === changeDim && q !== a && q !== b && isApposedChange(text, b, q)));
+    // "... held 190 ppm, so the climb to 280 ppm added 130 ppm": a change drawn after both levels.
+    const drawn = (q: Quantity): boolean => q.start > b.end && DRAWN.test(text.slice(a.end, b.start)) && isStatedChange(text, q) && !/[;.!?]/u.test(text.slice(a.end, q.start));
+    const stated = only(qs.filter((q) => q.dimension === changeDim && q !== a && q !== b && (isApposedChange(text, b, q) || drawn(q))));
     if (stated === undefined || !(isStatedChange(text, stated) || isConsequenceChange(text, b, stated))) return [];
     return [{ stated, computed: facing(size(minus(w(b), w(a))), stated.value), measures: `the difference between ${a.text} and ${b.text}` }];
   });
@@ -92,27 +101,98 @@ function pairChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
 }
 
 function durations(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
-  return spanOfDates(qs, pairs).flatMap(({ span, after, measures }) => {
+  const spans = spanOfDates(qs, pairs);
+  if (spans.length === 0) return changeBetweenDates(text, qs, pairs);
+  return spans.flatMap(({ span, after, measures }) => {
     const stated = only(qs.filter((q) => q.dimension === 'duration' && isSpanOfPair(text, q, after)));
     return stated === undefined ? [] : [{ stated, computed: span, measures }];
   });
+}
+
+/**
+ * The time between the only two dates of a sentence that pairs none: "about 190 ppm 21,000 years
+ * ago and about 265 ppm 11,000 years ago". Each date must be one date, not a range.
+ */
+function twoDates(qs: Quantity[]): { span: Derived; measures: string } | undefined {
+  const dates = qs.filter((q) => q.dimension === 'age');
+  if (dates.length !== 2 || dates.some((q) => rangeSpan(q) !== undefined)) return undefined;
+  const [a, b] = dates as [Quantity, Quantity];
+  return { span: size(minus(w(a), w(b))), measures: `the time from ${a.text} to ${b.text}` };
+}
+
+/**
+ * "At 21,000 years ago it was 190 ppm and by 11,000 years ago 265 ppm, so it climbed 75 ppm in
+ * about 4,000 years": the time a stated change took, after it, set against its two dates.
+ */
+function changeBetweenDates(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
+  const between = twoDates(qs);
+  if (between === undefined) return [];
+  const dates = qs.filter((q) => q.dimension === 'age');
+  const levelPaired = pairs.some((p) => qs[p.from]?.dimension !== 'age');
+  const change = only(qs.filter((q) => Object.values(RATE_OF).includes(q.dimension) && isStatedChange(text, q)));
+  const changed = change !== undefined && dates.every((d) => d.end <= change.start);
+  if (!changed && !levelPaired) return [];
+  const stated = only(qs.filter((q) => q.dimension === 'duration' && isSpanOfChange(text, q) && (change === undefined || q.start > change.end) && dates.every((d) => d.end <= q.start)));
+  return stated === undefined ? [] : [{ stated, computed: between.span, measures: between.measures }];
+}
+
+/** The change of `changeDim` a sentence states and the time it took, as the rate rules read them. */
+function changeAndSpan(text: string, qs: Quantity[], pairs: Pair[], changeDim: Dimension, except: readonly Quantity[] = []): { change: Derived; duration: Derived } | undefined {
+  const paired = new Set(pairs.flatMap((p) => [qs[p.from], qs[p.to]]));
+  const over = (q: Quantity): boolean => !paired.has(q) && qs.some((d) => changesOver(text, q, d));
+  const rate = qs.find((q) => RATE_OF[q.dimension] === changeDim);
+  const explicit = only(qs.filter((q) => !except.includes(q) && q.dimension === changeDim && (isStatedChange(text, q) || (rate !== undefined && comesToRate(text, q, rate)) || over(q))));
+  const pair = only(pairs.filter((p) => DIFFERENCE[qs[p.from]?.dimension ?? 'number'] === changeDim));
+  const pairEnds = pair === undefined ? undefined : ends(qs, pair);
+  const change = explicit !== undefined ? w(explicit) : pairEnds === undefined ? undefined : minus(w(pairEnds[1]), w(pairEnds[0]));
+  const spanOfChange = only(qs.filter((q) => !except.includes(q) && q.dimension === 'duration' && isSpanOfChange(text, q)));
+  const duration = spanOfChange !== undefined ? w(spanOfChange) : (only(spanOfDates(qs, pairs))?.span ?? twoDates(qs)?.span);
+  return change === undefined || duration === undefined ? undefined : { change, duration };
 }
 
 function rates(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return qs.flatMap((rate) => {
     const changeDim = RATE_OF[rate.dimension];
     if (changeDim === undefined) return [];
-    const paired = new Set(pairs.flatMap((p) => [qs[p.from], qs[p.to]]));
-    const over = (q: Quantity): boolean => !paired.has(q) && qs.some((d) => changesOver(text, q, d));
-    const explicit = only(qs.filter((q) => q.dimension === changeDim && (isStatedChange(text, q) || comesToRate(text, q, rate) || over(q))));
-    const pair = only(pairs.filter((p) => DIFFERENCE[qs[p.from]?.dimension ?? 'number'] === changeDim));
-    const pairEnds = pair === undefined ? undefined : ends(qs, pair);
-    const change = explicit !== undefined ? w(explicit) : pairEnds === undefined ? undefined : minus(w(pairEnds[1]), w(pairEnds[0]));
-    const spanOfChange = only(qs.filter((q) => q.dimension === 'duration' && isSpanOfChange(text, q)));
-    const duration = spanOfChange !== undefined ? w(spanOfChange) : only(spanOfDates(qs, pairs))?.span;
-    if (change === undefined || duration === undefined) return [];
-    const computed = divide(size(change), duration);
+    const found = changeAndSpan(text, qs, pairs, changeDim);
+    const computed = found === undefined ? undefined : divide(size(found.change), found.duration);
     return computed === undefined ? [] : [{ stated: rate, computed: facing(computed, rate.value), measures: 'the change divided by the time it took' }];
+  });
+}
+
+const S = String.raw`[\s\u00A0]`;
+const RATE_CHANGES: Dimension[] = ['concentration', 'temperature-change', 'length'];
+/** "every", "each", "in every": the word between an amount and the interval it comes in. */
+const EVERY = new RegExp(String.raw`^${S}+(?:(?:in|for)${S}+)?(?:every|each)${S}+$`, 'iu');
+/** "a metre every", "one ppm every": an amount of one unit, in words, before "every". */
+const ONE_UNIT_EVERY = new RegExp(String.raw`(?:^|[^\p{L}])(?:a|an|one)${S}+([\p{L}]+)${S}+(?:(?:in|for)${S}+)?(?:every|each)${S}+$`, 'iu');
+
+/**
+ * A pace written as an amount per interval: "an average of about 1 ppm every ten years", "a metre
+ * every 25 years". It is set against the sentence's change and the time it took: the amount
+ * against change ÷ time × interval, or, when the amount is one unit in words, the interval against
+ * time ÷ change × unit.
+ */
+function paces(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
+  return qs.flatMap((interval, k) => {
+    if (interval.dimension !== 'duration') return [];
+    const amount = k > 0 ? (qs[k - 1] as Quantity) : undefined;
+    if (amount !== undefined && RATE_CHANGES.includes(amount.dimension) && EVERY.test(text.slice(amount.end, interval.start)) && !isStatedChange(text, amount)) {
+      const found = changeAndSpan(text, qs, pairs, amount.dimension, [amount, interval]);
+      const per = found === undefined ? undefined : divide(size(found.change), found.duration);
+      if (per === undefined) return [];
+      const n = w(interval).value;
+      return [{ stated: amount, computed: facing({ value: per.value * n, low: per.low * n, high: per.high * n }, amount.value), measures: `the change divided by the time it took, for each ${interval.text}` }];
+    }
+    const unitWord = ONE_UNIT_EVERY.exec(text.slice(Math.max(0, interval.start - 40), interval.start))?.[1];
+    if (unitWord === undefined) return [];
+    const unit = parseQuantities(`1 ${unitWord}`)[0];
+    if (unit === undefined || !RATE_CHANGES.includes(unit.dimension) || qs.some((q) => q.end > interval.start - unitWord.length - 8 && q.end <= interval.start)) return [];
+    const found = changeAndSpan(text, qs, pairs, unit.dimension, [interval]);
+    const years = found === undefined ? undefined : divide(found.duration, size(found.change));
+    if (years === undefined) return [];
+    const u = unit.value;
+    return [{ stated: interval, computed: { value: years.value * u, low: years.low * u, high: years.high * u }, measures: `the time it took divided by the change, for each ${unitWord}` }];
   });
 }
 
@@ -123,7 +203,9 @@ function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
     const fraction = after !== undefined && fractionOf(text, stated, after);
     const isPercent = stated.dimension === 'percent' && (isStatedChange(text, stated) || comparesToNext(text, stated));
     const multiple = timesTheMeasure(text, stated);
-    const isRatio = stated.dimension === 'ratio' && (isStatedRatio(text, stated) || comparesToNext(text, stated) || fraction || multiple);
+    // "more than half of a doubling": a ratio named as the yardstick of a fraction is no claim.
+    const yardstick = /(?:^|[^\p{L}])of[\s\u00A0]+(?:a|an|the|one)[\s\u00A0]*$/iu.test(text.slice(Math.max(0, stated.start - 12), stated.start));
+    const isRatio = stated.dimension === 'ratio' && !yardstick && (isStatedRatio(text, stated) || comparesToNext(text, stated) || fraction || multiple);
     if (!isPercent && !isRatio) return [];
     let pairRatio: Derived | undefined;
     let measures: string;
@@ -185,14 +267,25 @@ function percentOfBase(text: string, qs: Quantity[], stated: Quantity): Finding[
   return [{ stated, computed, measures: `${change.text} as a percentage of ${base.text}` }];
 }
 
+/** The findings of `more` on numbers no finding of `found` has judged already. */
+const notYet = (found: Finding[], more: Finding[]): Finding[] => more.filter((f) => !found.some((g) => g.stated === f.stated));
+
 /** The arithmetic rule table. */
 export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
-  { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: (t, qs, p, prev) => [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)] },
-  { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => [...durations(t, qs, p), ...durationsAcross(t, qs, prev)] },
-  { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev) => [...rates(t, qs, p), ...perLength(t, qs, prev)] },
-  { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev) => {
+  { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: (t, qs, p, prev, earlier = []) => {
+    const found = [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)];
+    return [...found, ...notYet(found, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
+  } },
+  { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => {
+    const found = [...durations(t, qs, p), ...durationsAcross(t, qs, prev)];
+    return [...found, ...notYet(found, spansAcross(t, qs, prev))];
+  } },
+  { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev) => [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)] },
+  { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)];
-    return [...found, ...changeShares(t, qs, p).filter((f) => !found.some((g) => g.stated === f.stated))];
+    const shares = [...found, ...notYet(found, changeShares(t, qs, p))];
+    const paragraph = [...shares, ...notYet(shares, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
+    return [...paragraph, ...notYet(paragraph, comparisonsInParagraph(t, qs, earlier))];
   } },
 ];
 

@@ -38,10 +38,14 @@ const shown = (q: Quantity, d: Derived): string => formatQuantity(d.value, q.uni
 export function checkArithmetic(text: string, quantities: Quantity[], context: readonly string[] = []): FlagDraft[] {
   const last = context[context.length - 1];
   const previous = last === undefined ? undefined : { text: last, quantities: parseQuantities(last) };
+  const earlier = context
+    .slice(-3)
+    .reverse()
+    .map((t) => (t === last && previous !== undefined ? previous : { text: t, quantities: parseQuantities(t) }));
   const pairs = findPairs(text, quantities);
   const flags: FlagDraft[] = [];
   for (const rule of ARITHMETIC_RULES) {
-    for (const { stated, computed, measures, basis } of rule.derive(text, quantities, pairs, previous)) {
+    for (const { stated, computed, measures, basis } of rule.derive(text, quantities, pairs, previous, earlier)) {
       if (!disjoint(stated, computed)) continue;
       const right = shown(stated, computed);
       flags.push({

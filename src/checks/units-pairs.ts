@@ -29,6 +29,9 @@ const LOOSE_GAP = /^[^;:!?]{0,60}$/u;
 const RELATIVE_AFTER = new RegExp(String.raw`^${S}*(?:above|below|higher|lower|more|less|greater|smaller|up|down|increase|rise|drop|fall|over|under)(?![\p{L}])`, 'iu');
 /** A copula alone between two amounts in different units: "420 ppm is 0.042 percent". */
 const COPULA_GAP = new RegExp(String.raw`^,?${S}+(?:is|was|are|were|equals|makes${S}+up|made${S}+up)(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}+$`, 'iu');
+/** "in BP it is", "on the b2k scale that's": the era named, then a pointing word, just before the date. */
+const ERA_NAMED_BACK = new RegExp(String.raw`(?:^|[^\p{L}])(?:in|on)${S}+(?:the${S}+)?(?:bp|b2k)(?:${S}+(?:terms|scale|years))?,?${S}+(?:it|that|this)(?:${S}+(?:is|was|becomes|comes${S}+to)|['’]s)${S}*(?:(?:about|roughly|around|some)${S}+)?$`, 'iu');
+
 /** A sentence that opens by restating: "That is 11,650 years BP", "On the BP scale, that's ...". */
 const OPENING = /^[^;!?]{0,80}$/u;
 
@@ -43,6 +46,10 @@ const SCALE_JOINER = new RegExp(String.raw`^(?:${S}+(?:old|long))?${S}*(?:\(|\[|
 
 /** "are roughly 50 percent higher": a percentage that is a relative change, not the amount again. */
 const relativeChange = (text: string, q: Quantity): boolean => q.dimension === 'percent' && RELATIVE_AFTER.test(text.slice(q.end));
+
+/** "1 ppm is 0.0001 percent, so 280 ppm equals 0.028 percent": a figure that opens a new equation. */
+const EQUATION_AFTER = new RegExp(String.raw`^${S}+(?:is|equals|=|makes|gives|comes${S}+to)${S}+(?:(?:about|roughly|around|some|just)${S}+)?[\d.]`, 'iu');
+const startsAnEquation = (text: string, q: Quantity): boolean => EQUATION_AFTER.test(text.slice(q.end, q.end + 40));
 
 /** A quantity and its restatement in another unit; `loose` when words stand between them. */
 export interface Restatement {
@@ -113,6 +120,8 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
       if (scaleOf(first) !== scaleOf(second) && SCALE_JOINER.test(gap)) out.push(ordered(first, second, false));
       continue;
     }
+    // "above 420 ppm, roughly 50 percent higher than ...": a relative change is not the amount again.
+    if (relativeChange(text, second) || startsAnEquation(text, second)) continue;
     if (JOINER.test(gap)) out.push(ordered(first, second, false));
     // "Today's 420 ppm is about 0.042 percent of the air": one amount, the copula, the same amount.
     else if (COPULA_GAP.test(gap) && closeDates(first, second) && !relativeChange(text, second)) out.push(ordered(first, second, true));
@@ -144,17 +153,22 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
 function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentence, found: Restatement[]): Restatement | undefined {
   // The last amount of the sentence before that this one could restate ("430 ppm in 2025. That is
   // 430 parts per billion": the year is passed over).
-  const first = [...previous.quantities].reverse().find((p) => qs.some((q) => sameThing(p, q)));
+  // A reference year in brackets ("11,700 b2k (before AD 2000). In BP that is ...") is passed over
+  // for the date a slip could have moved: the last one close enough to a date of this sentence.
+  const partnerOf = (p: Quantity): Quantity | undefined => qs.find((q) => sameThing(p, q) && closeDates(p, q) && p.statedUnit !== q.statedUnit);
+  const first = [...previous.quantities].reverse().find((p) => partnerOf(p) !== undefined);
   if (first === undefined) return undefined;
-  const second = qs.find((q) => sameThing(first, q) && closeDates(first, q));
-  if (second === undefined || first.statedUnit === second.statedUnit || found.some((r) => r.second === second || r.first === second)) return undefined;
+  const second = partnerOf(first) as Quantity;
+  if (found.some((r) => r.second === second || r.first === second)) return undefined;
   // "fifty percent above where it stood in 1750": a relative change, not the amount again.
   if (second.dimension === 'percent' && RELATIVE_AFTER.test(text.slice(second.end))) return undefined;
   const head = text.slice(0, second.start);
   // "For readers who think in Fahrenheit, that makes it about 43 °F colder": a °F figure that
   // points back restates the last °C or K figure before it.
   const fahrenheitBack = second.statedUnit === 'degF' && (first.statedUnit === 'degC' || first.statedUnit === 'K') && /\b(?:fahrenheit|that|this|which)\b/iu.test(head) && !qs.some((q) => q.start < second.start && q.dimension === second.dimension);
-  if (!OPENING.test(head) || !(LOOSE_END.test(head) || fahrenheitBack)) return undefined;
+  // "BP counts from 1950, so in BP it is 11,750 years": a date after the era it is restated in.
+  const eraBack = second.dimension === 'age' && ERA_NAMED_BACK.test(head);
+  if (!OPENING.test(head) || !(LOOSE_END.test(head) || fahrenheitBack || eraBack)) return undefined;
   // Only a number in this sentence can be flagged here, so it must be the conversion.
   const pair = ordered(first, second, true);
   return pair.second === second ? pair : undefined;

@@ -10,6 +10,7 @@ import type { Derived } from './arithmetic-derive.js';
 import { B2K_CONVENTION, BP_CONVENTION, NIST_SP_811 } from './standard-sources.js';
 import { co2UnitSlips } from './units-co2-share.js';
 import { scaleSlips } from './units-scale.js';
+import { offsetSums } from './units-offset-sums.js';
 import { findRestatements, type PreviousSentence, type Restatement } from './units-pairs.js';
 
 /** A quantity whose unit use is in doubt, with the value it should have. */
@@ -110,6 +111,18 @@ function kelvinChangeWhy(a: Quantity, b: Quantity): string {
 }
 
 const nist = (): Source[] => [NIST_SP_811];
+
+/** "5 + 32 = 41 °F of cooling": a written sum that added 32 to a change. */
+function offsetSumSlips(text: string, qs: Quantity[]): UnitFinding[] {
+  // Only a result the words make a change ("of cooling", "colder", "that change"): a reading may add 32.
+  const cued = (first: Quantity, stated: Quantity): boolean => cuedAsChange(text, { first, second: stated, loose: true });
+  return offsetSums(text, qs).filter(({ stated, first }) => cued(first, stated)).map(({ stated, computed, first }) => ({
+    stated,
+    computed,
+    reason: `A change of ${first.text} °C is a change of ${formatQuantity(computed.value, 'K', 'degF')}: differences convert by 9/5 alone; the 32 belongs to readings.`,
+    sources: [NIST_SP_811],
+  }));
+}
 const eras = (a: Quantity, b: Quantity): Source[] => (a.statedUnit.includes('b2k') || b.statedUnit.includes('b2k') ? [BP_CONVENTION, B2K_CONVENTION] : [BP_CONVENTION]);
 
 /** The unit rule table. */
@@ -117,7 +130,10 @@ export const UNIT_RULES: readonly UnitRule[] = [
   { id: 'unit.percent-ppm', summary: 'A CO2 level restated between ppm and percent converts at 1% = 10,000 ppm; a CO2 share in percent is a level someone has measured.',
     find: percentPpm },
   { id: 'unit.temperature-difference', summary: 'A temperature change restated in °F is 1.8 times the change in °C or K, with no 32 added; restated in K it is the same number as in °C, with no 273.15 added.',
-    find: restated(['temperature-change'], nist, temperatureChangeWhy, cuedAsChange) },
+    find: (text, qs, previous) => {
+      const pairs = restated(['temperature-change'], nist, temperatureChangeWhy, cuedAsChange)(text, qs, previous);
+      return [...pairs, ...offsetSumSlips(text, qs).filter((f) => !pairs.some((p) => p.stated.start === f.stated.start))];
+    } },
   { id: 'unit.temperature', summary: 'A temperature reading restated in °F is 1.8 × °C + 32.',
     find: restated(['temperature'], nist, () => 'A temperature reading converts as °F = 1.8 × °C + 32.') },
   { id: 'unit.age-era', summary: 'A date restated in another era converts through years before AD 1950 (BP); b2k counts from AD 2000; there is no year 0.',

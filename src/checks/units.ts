@@ -11,12 +11,57 @@ import { disjoint, levelFor } from './arithmetic-levels.js';
 import { shownClaim } from './reference-format.js';
 import { UNIT_RULES } from './units-rules.js';
 
+const SCALE_NAME = /(?:^|[^\p{L}])(fahrenheit|celsius|centigrade)(?![\p{L}])/giu;
+const BARE_DEGREES = /^[\s\u00A0]+degrees?(?![\p{L}])(?![\s\u00A0]*(?:°|c\b|f\b|celsius|fahrenheit|centigrade|kelvin|north|south|east|west|of[\s\u00A0]+(?:latitude|longitude|arc)))/iu;
+
+/**
+ * "In Fahrenheit terms, a 9-degree Celsius swing comes to about 41 degrees": a bare number of
+ * degrees in a sentence that names one scale in words, outside its other figures, is read in that
+ * scale (a writer names the scale once and leaves it off the figure). Two scales named, or none,
+ * leave it a bare number.
+ */
+function withNamedScale(text: string, qs: Quantity[]): Quantity[] {
+  const inFigure = (at: number): boolean => qs.some((q) => q.start <= at && at < q.end);
+  const named = new Set([...text.matchAll(SCALE_NAME)].filter((m) => !inFigure((m.index ?? 0) + m[0].length - 1)).map((m) => (m[1] as string).toLowerCase().replace('centigrade', 'celsius')));
+  const eras = new Set([...text.matchAll(ERA_NAME)].filter((m) => !inFigure((m.index ?? 0) + m[0].length - 1)).map((m) => (m[1] as string).toLowerCase()));
+  const dated = eras.size === 1 ? withNamedEra(text, qs, [...eras][0] as string) : qs;
+  if (named.size !== 1) return dated;
+  const [scale] = [...named] as [string];
+  return dated.map((q) => {
+    const degrees = q.dimension === 'number' ? BARE_DEGREES.exec(text.slice(q.end)) : null;
+    if (degrees === null) return q;
+    const end = q.end + degrees[0].length;
+    const [read] = parseQuantities(`${text.slice(q.start, end)} ${scale}`);
+    if (read === undefined || (read.dimension !== 'temperature' && read.dimension !== 'temperature-change')) return q;
+    return { ...read, start: q.start, end, text: text.slice(q.start, end) };
+  });
+}
+
+const ERA_NAME = /(?:^|[^\p{L}])(bp|b2k)(?![\p{L}])/giu;
+/** "in BP it is", "on the b2k scale that's": the era named, then the figure it is read in. */
+const ERA_LEAD = /(?:^|[^\p{L}])(?:in|on|as)[\s\u00A0]+(?:the[\s\u00A0]+)?(?:bp|b2k)(?:[\s\u00A0]+(?:terms|scale|years))?[^\d.;:!?]{0,24}$/iu;
+
+/**
+ * "BP counts from 1950, so in BP it is 11,750 years": a span of plain years after the one era a
+ * sentence names ("in BP", "on the b2k scale") is a date in that era, as a restatement writes it.
+ */
+function withNamedEra(text: string, qs: Quantity[], era: string): Quantity[] {
+  return qs.map((q) => {
+    if (q.dimension !== 'duration' || q.statedUnit !== 'yr' || !ERA_LEAD.test(text.slice(Math.max(0, q.start - 48), q.start))) return q;
+    const [read] = parseQuantities(`${q.text} ${era.toUpperCase() === 'BP' ? 'BP' : 'b2k'}`);
+    return read === undefined || read.dimension !== 'age' ? q : { ...read, start: q.start, end: q.end, text: q.text };
+  });
+}
+
 /**
  * Every unit slip in one sentence. `context` is the sentences before it in the same paragraph, in
  * order; the last one is read for a date or level that this sentence restates ("... at 11,700
  * b2k. That is 11,650 years BP."). Flags always fall on this sentence's own words.
  */
-export function checkUnits(text: string, quantities: Quantity[], context: readonly string[] = []): FlagDraft[] {
+export function checkUnits(text: string, parsed: Quantity[], context: readonly string[] = []): FlagDraft[] {
+  // "11,700 years before AD 2000": the reference year inside a date is no figure of its own here.
+  const outer = parsed.filter((q) => !parsed.some((o) => o !== q && o.start <= q.start && q.end <= o.end && o.end - o.start > q.end - q.start));
+  const quantities = withNamedScale(text, outer);
   const last = context[context.length - 1];
   const previous = last === undefined ? undefined : { text: last, quantities: parseQuantities(last) };
   const flags: FlagDraft[] = [];

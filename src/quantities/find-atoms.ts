@@ -60,8 +60,24 @@ function digitAtom(m: RegExpExecArray): Atom {
   };
 }
 
+const DIGIT_WORDS = ['one', 'two', 'three', 'four', 'five', 'six', 'seven', 'eight', 'nine'];
+const TENS_WORDS = ['twenty', 'thirty', 'forty', 'fifty', 'sixty', 'seventy', 'eighty', 'ninety'];
+/** "two-eighty": a digit word, a hyphen and a tens word (read by readNumberWords as 280). */
+const spokenPair = (word: string): boolean => {
+  const [a, b] = word.split('-');
+  return DIGIT_WORDS.includes(a ?? '') && TENS_WORDS.includes(b ?? '');
+};
+
 function wordAtoms(m: RegExpExecArray): Atom[] {
-  const tokens = [...m[0].matchAll(/\p{L}+/gu)].map((t) => ({ word: t[0].toLowerCase(), start: m.index + t.index, end: m.index + t.index + t[0].length }));
+  // "two-eighty" stays one token (a spoken 280); other hyphens split ("twenty-one").
+  const tokens = [...m[0].matchAll(/\p{L}+(?:-\p{L}+)?/gu)]
+    .flatMap((t) => {
+      const at = m.index + t.index;
+      const word = t[0].toLowerCase();
+      if (!word.includes('-') || spokenPair(word)) return [{ word, start: at, end: at + t[0].length }];
+      const cut = word.indexOf('-');
+      return [{ word: word.slice(0, cut), start: at, end: at + cut }, { word: word.slice(cut + 1), start: at + cut + 1, end: at + t[0].length }];
+    });
   const atoms: Atom[] = [];
   for (let i = 0; i < tokens.length; ) {
     const read = readNumberWords(tokens.slice(i).map((t) => t.word));

@@ -5,6 +5,7 @@
  *  - "over", "under", "below", "above" before a length are places ("under 3,000 m of ice");
  *  - "over" before a duration after a change is "during" ("rose 80 ppm over 8,000 years").
  */
+import { NUMBER_WORDS } from './number-words.js';
 import type { Dimension } from '../types.js';
 import { hedgeRule, INTERVAL_RULES, type IntervalRule } from './interval-rules.js';
 
@@ -34,6 +35,13 @@ const CHANGE_BEFORE_OVER = /(?:\d|%|(?:^|[^\p{L}])(?:rose|risen|rise|rising|fell
  * The hedge that ends `text` just before `at` (the start of the number), or undefined.
  * `dimension` is the quantity's reading, used for the two exceptions above.
  */
+/** "from 190", "from about one-ninety", "from 190 ppm": the start of a from-to pair, just before "up to". */
+const NUMBER_WORD = `(?:${NUMBER_WORDS.filter((w) => !['a', 'an', 'and', 'half'].includes(w)).join('|')})`;
+const FROM_A_NUMBER = new RegExp(
+  String.raw`\bfrom\s+(?:about\s+|around\s+|roughly\s+|some\s+)?(?:[\d.,]+|${NUMBER_WORD}(?:[\s-]${NUMBER_WORD})*)(?:\s*[\p{L}%°]+)?\s*$`,
+  'iu',
+);
+
 export function hedgeBefore(text: string, at: number, dimension: Dimension): HedgeMatch | undefined {
   const head = text.slice(Math.max(0, at - 40), at);
   const m = BEFORE.exec(head);
@@ -43,7 +51,7 @@ export function hedgeBefore(text: string, at: number, dimension: Dimension): Hed
   if (PLACE_WORDS.test(word) && dimension === 'length') return undefined;
   if (/^over$/i.test(word) && dimension === 'duration' && CHANGE_BEFORE_OVER.test(text.slice(Math.max(0, start - 60), start))) return undefined;
   // "from 190 up to 280": after "from" and a number, "up to" is the other end, not a bound.
-  if (/^(?:up|down) to$/iu.test(word) && /\bfrom\s+(?:about\s+|around\s+|roughly\s+|some\s+)?[\d.,]+(?:\s*[\p{L}%°]+)?\s*$/iu.test(text.slice(Math.max(0, start - 40), start))) return undefined;
+  if (/^(?:up|down) to$/iu.test(word) && FROM_A_NUMBER.test(text.slice(Math.max(0, start - 40), start))) return undefined;
   const rule = hedgeRule(word);
   return rule === undefined ? undefined : { word, rule, start, end: start + word.length };
 }

@@ -11,7 +11,7 @@ const SMALL: Record<string, number> = {
   eighty: 80, ninety: 90,
 };
 const SCALES: Record<string, number> = { thousand: 1e3, million: 1e6, billion: 1e9 };
-const FILLERS = ['a', 'an', 'and', 'half', 'hundred', 'dozen'];
+const FILLERS = ['a', 'an', 'and', 'half', 'hundred', 'dozen', 'point'];
 
 /** Every word a number phrase may contain. */
 export const NUMBER_WORDS: readonly string[] = [...Object.keys(SMALL), ...Object.keys(SCALES), ...FILLERS];
@@ -29,6 +29,18 @@ export interface WordNumber {
   value: number;
 }
 
+/**
+ * "two-eighty", "one-ninety", "four-twenty": a digit word and a tens word joined by a hyphen, as
+ * people say a three-figure number aloud (280, 190, 420). The hyphen is kept in the token by the
+ * caller; "twenty-one" (tens first) is not this form.
+ */
+function spokenHundreds(w: string): number | undefined {
+  const parts = w.split('-');
+  if (parts.length !== 2) return undefined;
+  const [h, t] = parts.map((p) => SMALL[p]);
+  return h !== undefined && t !== undefined && h >= 1 && h <= 9 && t >= 20 && t % 10 === 0 ? h * 100 + t : undefined;
+}
+
 const isScale = (w: string | undefined): boolean => w !== undefined && (w in SCALES || w === 'hundred' || w === 'dozen');
 
 /**
@@ -41,9 +53,28 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
   let used = 0;
   let last: 'none' | 'small' | 'tens' | 'hundred' | 'scale' | 'half' | 'article' | 'and' = 'none';
   let any = false;
+  // "nineteen thousand and eleven thousand": a scale no smaller than one already used ends the
+  // number before its "and" (two numbers of a range), where "two thousand and five" goes on.
+  let lastScale = Infinity;
+  let beforeAnd: WordNumber | undefined;
   for (let i = 0; i < tokens.length; i++) {
     const w = tokens[i] as string;
-    if (w in SMALL) {
+    const spoken = spokenHundreds(w);
+    if (spoken !== undefined) {
+      // "two-eighty": a spoken three-figure number stands alone.
+      if (last !== 'none') break;
+      current = spoken;
+      last = 'tens';
+    } else if (w === 'point') {
+      // "two point eight": digits after the point, one word each.
+      const digits: number[] = [];
+      for (let j = i + 1; j < tokens.length && (SMALL[tokens[j] as string] ?? 10) < 10; j++) digits.push(SMALL[tokens[j] as string] as number);
+      if (digits.length === 0 || !(last === 'small' || last === 'tens')) break;
+      current += Number(`0.${digits.join('')}`);
+      any = true;
+      used = i + 1 + digits.length;
+      break;
+    } else if (w in SMALL) {
       const n = SMALL[w] as number;
       const afterTens = last === 'tens' && n < 10 && n > 0;
       if (!(last === 'none' || last === 'hundred' || last === 'scale' || last === 'and' || afterTens)) break;
@@ -69,6 +100,11 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
       last = 'hundred';
     } else if (w in SCALES) {
       if (last === 'none' || last === 'and') break;
+      if ((SCALES[w] as number) >= lastScale) {
+        if (beforeAnd !== undefined) return beforeAnd;
+        break;
+      }
+      lastScale = SCALES[w] as number;
       total += (current === 0 ? 1 : current) * (SCALES[w] as number);
       current = 0;
       last = 'scale';
@@ -77,6 +113,7 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
       const nextNext = tokens[i + 2];
       const joinsHalf = (next === 'a' || next === 'an') && nextNext === 'half';
       if (!(last === 'hundred' || last === 'scale' || (joinsHalf && (last === 'small' || last === 'tens')))) break;
+      beforeAnd = { used, value: total + current };
       last = 'and';
       continue;
     } else break;

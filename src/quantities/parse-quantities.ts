@@ -36,6 +36,8 @@ interface Reading {
 const first = (g: Group) => g.parts[0] as Group['parts'][number];
 const last = (g: Group) => g.parts[g.parts.length - 1] as Group['parts'][number];
 
+const SPOKEN_HUNDREDS = /^(?:one|two|three|four|five|six|seven|eight|nine)-(?:twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety)$/iu;
+
 /** Which unit definition applies, or undefined when the group is not a quantity (number words with no unit). */
 function readGroup(text: string, g: Group, previous: Quantity | undefined): Reading | undefined {
   const a = first(g).atom;
@@ -51,7 +53,8 @@ function readGroup(text: string, g: Group, previous: Quantity | undefined): Read
   const rule = g.kind === 'range' ? 'range' : g.kind === 'plus-minus' ? 'plus-minus' : a.rule;
   if (unit === undefined) {
     if (a.form === 'multiplier') return { def: RATIO, rule, prefixStart: g.prefixStart };
-    if (a.form !== 'digits') return undefined;
+    // Number words with no unit are no quantity, except a spoken three-figure number ("two-eighty").
+    if (a.form !== 'digits' && !(a.form === 'words' && SPOKEN_HUNDREDS.test(text.slice(a.start, a.end)))) return undefined;
     const years = g.parts.every((p) => p.atom.plainInteger && p.atom.value >= 1000 && p.atom.value <= 2100);
     const ad = AD_BEFORE.exec(rawBefore);
     if (ad !== null) return { def: CE, rule: g.kind === 'single' ? 'calendar-year' : rule, prefixStart: a.start - rawBefore.length + ad.index + ad[0].indexOf(ad.groups?.['ad'] ?? '') };
