@@ -68,8 +68,10 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
     done += 1;
     options.onProgress?.(done, tasks.length);
   };
+  // A run over files keeps no sentence's findings for a re-check (engine DraftOptions.reuseSentences).
   const draftOptions = (task: FileTask): DraftOptions => ({
     levels: options.levels,
+    reuseSentences: false,
     ...(options.topic === undefined ? {} : { topic: options.topic }),
     ...(task.projectPath === task.path ? {} : { projectPath: task.projectPath }),
   });
