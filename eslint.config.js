@@ -20,4 +20,10 @@ export default tseslint.config(
     files: ['bin/**/*.js', 'bench/**/*.js', 'scripts/**/*.js', 'test/**/*.mjs'],
     languageOptions: { globals: { process: 'readonly', console: 'readonly', URL: 'readonly', Buffer: 'readonly', performance: 'readonly', setTimeout: 'readonly' } },
   },
+  {
+    // The launcher is CommonJS (bin/package.json): it starts without Node's ES module loader.
+    files: ['bin/**/*.js'],
+    languageOptions: { sourceType: 'commonjs', globals: { require: 'readonly', __dirname: 'readonly' } },
+    rules: { '@typescript-eslint/no-require-imports': 'off' },
+  },
 );

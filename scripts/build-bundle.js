@@ -70,7 +70,8 @@ const result = await build({
   absWorkingDir: root,
   // The second entry shares the bundle's modules (splitting): the tests read the linear-text
   // wrapper's call count through it, to see that the bundled parse goes through the wrapper.
-  entryPoints: { cli: join(dist, 'cli', 'main.js'), 'micromark-linear-text': join(dist, 'source', 'micromark-linear-text.js') },
+  // The pool's worker (speed/pool-worker.js) is an entry too, so a worker starts from the bundle.
+  entryPoints: { cli: join(dist, 'cli', 'main.js'), 'micromark-linear-text': join(dist, 'source', 'micromark-linear-text.js'), 'pool-worker': join(dist, 'speed', 'pool-worker.js') },
   outdir: out,
   bundle: true,
   splitting: true,

@@ -96,7 +96,7 @@ export function bindFromContext(
   packs: LoadedPacks,
   breaks: number[],
   vetoes: TermHits = view,
-  contextSubject?: [number, number],
+  contextSubject?: [number, number] | (() => [number, number] | undefined),
   frame?: OwnFrame,
 ): string | 'ambiguous' | undefined {
   if (!mayReferBack(sentence)) return undefined;
@@ -116,8 +116,13 @@ export function bindFromContext(
   // to one that needs it ("at that time" after "the Last Glacial Maximum": the LGM level, not the typical glacial one).
   const present = (id: string): boolean => view.has(id) || context.has(id);
   const specific = candidates.filter((r) => !candidates.some((o) => o !== r && r.binding.none.some((id) => present(id) && o.binding.all.some((g) => g.includes(id)))));
+  // A lone candidate needs no score: the subject of the sentence before (compromise's reading of
+  // it, given as a function) is read only when two candidates are ranked by it.
+  if (specific.length < 2) return specific[0]?.id;
+  let subject: [number, number] | undefined | null = typeof contextSubject === 'function' ? null : contextSubject;
+  const subjectBefore = (): [number, number] | undefined => (subject === null ? (subject = (contextSubject as () => [number, number] | undefined)()) : subject);
   const scored = specific
-    .map((r) => ({ r, score: scoreWithContext(r, view, q, breaks, context, contextSubject) }))
+    .map((r) => ({ r, score: scoreWithContext(r, view, q, breaks, context, subjectBefore) }))
     .sort((a, b) => a.score - b.score);
   const [best, next] = scored;
   if (best === undefined) return undefined;
@@ -167,10 +172,12 @@ function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks, dime
  * and a `CLAUSE_PENALTY` more when none of its words stands in that sentence's subject: a pronoun
  * follows the subject of the sentence before, not any word of it.
  */
-function scoreWithContext(r: ReferenceValue, view: TermHits, q: Quantity, breaks: number[], context: TermHits, subject: [number, number] | undefined): number {
+function scoreWithContext(r: ReferenceValue, view: TermHits, q: Quantity, breaks: number[], context: TermHits, subjectBefore: () => [number, number] | undefined): number {
   const ownGroups = r.binding.all.filter((g) => g.some((id) => view.has(id)));
-  const inSubject = (g: string[]): boolean =>
-    subject !== undefined && g.some((id) => (context.get(id) ?? []).some(([start, end]) => start >= subject[0] && end <= subject[1]));
+  const inSubject = (g: string[]): boolean => {
+    const subject = subjectBefore();
+    return subject !== undefined && g.some((id) => (context.get(id) ?? []).some(([start, end]) => start >= subject[0] && end <= subject[1]));
+  };
   const fromContext = r.binding.all.filter((g) => !ownGroups.includes(g)).reduce((sum, g) => sum + CONTEXT_PENALTY + (inSubject(g) ? 0 : CLAUSE_PENALTY), 0);
   return nearness({ ...r, binding: { ...r.binding, all: ownGroups } }, view, q, breaks) + fromContext;
 }

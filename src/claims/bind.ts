@@ -164,6 +164,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   let contextHits: TermHits | undefined;
   let fromApposition: string | undefined;
   let contextSubject: [number, number] | null | undefined;
+  // compromise reads the sentence before for its subject only when bindFromContext ranks two values by it.
+  const subjectBefore = (text: string) => (): [number, number] | undefined => (contextSubject ??= subjectSpan(text) ?? null) ?? undefined;
   quantities.forEach((q, i) => {
     if (decided.has(i)) return;
     // "the lowest 200 metres hold 150,000 years": a stretch of the core, not its depth.
@@ -182,9 +184,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     // Only a sentence that may refer back reads the one before (and only then compromise finds its subject).
     else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE' && mayReferBack(sentence)) {
       contextHits ??= findTerms(context, packs);
-      contextSubject ??= subjectSpan(context) ?? null;
       const ownTime = quantities.some((o, j) => j !== i && (o.dimension === 'age' || o.dimension === 'duration') && o.statedUnit !== 'CE');
-      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, contextSubject ?? undefined, { context, ownTime });
+      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, subjectBefore(context), { context, ownTime });
       if (found !== undefined) decided.set(i, found);
     }
   });

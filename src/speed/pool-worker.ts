@@ -33,6 +33,7 @@ export default async function checkInWorker(task: PoolTask): Promise<FileOutcome
   return checkFileText({ path: task.path, text: task.text, format: task.format }, packs, {
     topic: loaded.topic,
     levels: task.levels,
+    reuseSentences: false,
     ...(task.projectPath === task.path ? {} : { projectPath: task.projectPath }),
   });
 }

@@ -5,7 +5,7 @@
  * this thread and `jobs - 1` pool workers side by side. Outcomes come back in the order of the input whatever ran them, so the report does
  * not depend on the pool, the cache or the number of cores.
  */
-import { existsSync } from 'node:fs';
+import { existsSync, statSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import type { Tinypool as TinypoolType } from 'tinypool';
@@ -51,14 +51,29 @@ export const POOL_MIN_FILES = 8;
  */
 export const POOL_MIN_BYTES = 1_000_000;
 
-/** The worker's module; absent when running from the TypeScript sources (tests), then no pool. */
-const WORKER_FILE = fileURLToPath(new URL('./pool-worker.js', import.meta.url));
+/**
+ * The worker's module: the bundled one (dist/bundle/pool-worker.js, scripts/build-bundle.js: the
+ * same modules in a few files, some half a second less for a worker to start on our machine) while
+ * it is not older than dist/'s, as the launcher chooses the command line's; absent when running
+ * from the TypeScript sources (tests), then no pool.
+ */
+function workerFile(): string {
+  const plain = fileURLToPath(new URL('./pool-worker.js', import.meta.url));
+  try {
+    const bundled = fileURLToPath(new URL('../bundle/pool-worker.js', import.meta.url));
+    if (statSync(bundled).mtimeMs >= statSync(plain).mtimeMs) return bundled;
+  } catch {
+    // No bundle (or no dist/): the plain module, if any.
+  }
+  return plain;
+}
 
 export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Promise<(FileOutcome | undefined)[]> {
   const outcomes: (FileOutcome | undefined)[] = new Array<FileOutcome | undefined>(tasks.length);
   const packsKey = options.cache === undefined ? '' : packsDigest(options.packs);
   const jobs = Math.max(1, Math.floor(options.jobs ?? availableParallelism()));
-  const poolable = jobs > 1 && existsSync(WORKER_FILE) && options.packs.packs.every((p) => existsSync(p.file));
+  const worker = jobs > 1 ? workerFile() : '';
+  const poolable = jobs > 1 && existsSync(worker) && options.packs.packs.every((p) => existsSync(p.file));
   let done = 0;
   // The source entries of outcomes that were copied (from a worker or the cache), one object each.
   const sources = new Map<string, Source>();
@@ -68,8 +83,10 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
     done += 1;
     options.onProgress?.(done, tasks.length);
   };
+  // A run over files keeps no sentence's findings for a re-check (engine DraftOptions.reuseSentences).
   const draftOptions = (task: FileTask): DraftOptions => ({
     levels: options.levels,
+    reuseSentences: false,
     ...(options.topic === undefined ? {} : { topic: options.topic }),
     ...(task.projectPath === task.path ? {} : { projectPath: task.projectPath }),
   });
@@ -143,7 +160,7 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
       waitingBytes += text.length;
       if (pool === undefined && poolable && enough()) {
         const { Tinypool } = await import('tinypool');
-        pool = new Tinypool({ filename: WORKER_FILE, minThreads: workers, maxThreads: workers, idleTimeout: 1000 });
+        pool = new Tinypool({ filename: worker, minThreads: workers, maxThreads: workers, idleTimeout: 1000 });
       }
       if (pool !== undefined) {
         pump();

@@ -80,6 +80,20 @@ describe('the bundled command line (dist/bundle/)', () => {
     expect(wrapped).toBeGreaterThan(0);
   });
 
+  it('holds the pool worker, which checks a draft as the worker of dist/ does', async () => {
+    // The pool starts its workers from dist/bundle/pool-worker.js while it is not older than dist/'s.
+    expect(statSync(join(bundle, 'pool-worker.js')).mtimeMs).toBeGreaterThanOrEqual(statSync(join(dist, 'speed', 'pool-worker.js')).mtimeMs);
+    expect(moduleGraph('speed/pool-worker.js').filter((file) => !(file in stamp().inputs))).toEqual([]);
+    type Worker = { default: (task: Record<string, unknown>) => Promise<unknown> };
+    const bundled = (await import(pathToFileURL(join(bundle, 'pool-worker.js')).href)) as Worker;
+    const plain = (await import(pathToFileURL(join(dist, 'speed', 'pool-worker.js')).href)) as Worker;
+    const path = 'examples/gallery-panels.md';
+    const task = { path, projectPath: path, format: 'markdown', text: readFileSync(join(root, path), 'utf8'), levels: {}, packFiles: [], builtin: true };
+    const a = await bundled.default(task);
+    expect((a as { claims: unknown[] }).claims.length).toBeGreaterThan(0);
+    expect(JSON.stringify(a)).toBe(JSON.stringify(await plain.default(task)));
+  });
+
   it('reports a user error the same way (one line, exit 2)', async () => {
     const bundled = (await import(pathToFileURL(join(bundle, 'cli.js')).href)) as { main: Main };
     const result = await run(bundled.main, ['check', 'no-such-draft.md']);
