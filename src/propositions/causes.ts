@@ -15,7 +15,7 @@ import type { Cause, Polarity } from './types.js';
 const DETERMINERS = new Set(['the', 'a', 'an', 'its', 'their', 'our', 'of', 'in', 'for', 'with', 'from', 'after', 'before', 'than']);
 const INFERENCE_VERBS = new Set(['mean', 'means', 'meant', 'show', 'shows', 'showed', 'prove', 'proves', 'proved', 'imply', 'implies', 'implied', 'follow', 'follows', 'suggest', 'suggests', 'tell', 'tells']);
 const OBJECT_LINKS = new Set(['of', 'in', 'on', 'for', 'behind', 'to']);
-const ROLE: Record<string, Cause['role']> = { verbs: 'cause', because: 'cause', 'because-only': 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
+const ROLE: Record<string, Cause['role']> = { follower: 'cause', verbs: 'cause', because: 'cause', 'because-only': 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
 
 /** The causes one sentence states or denies; `previous` resolves a pronoun that opens it. */
 export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
@@ -29,13 +29,17 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     .filter((h) => ![...entities, ...s.of('order')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first));
   const causes: Cause[] = [];
   for (const h of hits) {
-    if (h.key === 'reverse') continue;
+    if (h.key === 'reverse' || h.key === 'either-or') continue;
     const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify';
     // "the end of the ice age" is a noun; "it was CO2 doing the pushing" is still a verb.
     if (verbLike && DETERMINERS.has(s.words[h.first - 1]?.text ?? '') && s.words[h.first - 2]?.text !== 'doing') continue;
     // "global warming", "Antarctic cooling": a region word before it makes the -ing form a noun.
     if (verbLike && s.words[h.first]?.text.endsWith('ing') && regions.some((r) => r.last === h.first - 1)) continue;
     if (h.key === 'effects' && s.words[h.first - 1]?.text === 'in') continue;
+    if (h.key === 'without') {
+      causes.push(...withoutAt(s, h, causes, previous));
+      continue;
+    }
     causes.push(...causeAt(s, h, previous));
   }
   return causes;
@@ -50,6 +54,8 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   let polarity = polarityAt(s, h.first);
   // "the greenhouse effect of CO2 must be negligible": a role denied after the noun.
   if (noun && polarity !== 'open' && deniedAfter(s, h.last)) polarity = polarity === 'denied' ? 'asserted' : 'denied';
+  // "the hypothesis that CO2 contributed to the warming will be rejected": the proposal is denied.
+  if (polarity === 'asserted' && isRejectedProposal(s, h)) polarity = 'denied';
   const next = s.words[h.last + 1]?.text ?? '';
   // "by itself", "by themselves" say the agent acted alone: no passive.
   const reflexive = /^(?:itself|themselves|its|their)$/u.test(s.words[(next === 'by' ? h.last + 2 : h.last + 3)]?.text ?? '');
@@ -114,6 +120,11 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   const end = s.words[h.last]?.end ?? 0;
   // "It was CO2 that set the temperature": a cleft singles its focus out as the one agent.
   const exclusive = isExclusive(s, h, agentThing) || (cleft !== undefined && h.key !== 'amplify') || h.key === 'because-only';
+  // "CO2 rides in the back", "CO2 merely reading the dial": a follower's part denies its subject a
+  // cause; "CO2 is not just along for the ride" grants one.
+  if (h.key === 'follower' && polarity !== 'open') {
+    return [{ kind: 'cause', role: 'cause', polarity: polarity === 'asserted' ? 'denied' : 'asserted', exclusive: false, start, end, ...(agent === undefined ? {} : { agent }) }];
+  }
   const cause: Cause = {
     kind: 'cause', role: ROLE[h.key] ?? 'cause', polarity, exclusive, start, end,
     ...(agent === undefined ? {} : { agent }), ...(patient === undefined ? {} : { patient }),
@@ -125,11 +136,36 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   if (rival !== undefined && rivalKind !== undefined && rivalKind !== agent && polarity === 'asserted' && h.key !== 'effects') {
     out.push({ kind: 'cause', agent: rivalKind, role: cause.role, polarity: 'denied', exclusive: false, start, end, ...(patient === undefined ? {} : { patient }) });
   }
-  // "nothing but a consequence", "merely a response": the subject is denied any causal role.
-  if (h.key === 'effects' && polarity === 'asserted' && hasExclusiveBefore(s, h.first, 3) && patient !== undefined) {
+  // "nothing but a consequence", "merely a response", "CO2 just came along as a passenger": the
+  // subject is denied any causal role.
+  const restricted = hasExclusiveBefore(s, h.first, 3) || exclusiveAfterSubject(s, h.first, agentThing);
+  if (h.key === 'effects' && polarity === 'asserted' && restricted && patient !== undefined) {
     out.push({ kind: 'cause', agent: patient, role: 'cause', polarity: 'denied', exclusive: false, start, end });
   }
   return out;
+}
+
+/**
+ * "The orbit accounts for the ice ages, with no help needed from greenhouse gases": the thing after
+ * the phrase is denied a part in what the cause before it does. A denied phrase ("not without help
+ * from CO2") denies nothing.
+ */
+function withoutAt(s: ReadSentence, h: LexHit, before: readonly Cause[], previous?: ReadSentence): Cause[] {
+  if (polarityAt(s, h.first) !== 'asserted') return [];
+  const rival = s.things.find((t) => t.first > h.last && t.first - h.last <= 4 && t.kind !== 'pronoun');
+  const agent = kindOf(s, rival, previous);
+  if (agent === undefined) return [];
+  const main = before.filter((c) => c.polarity === 'asserted' && c.agent !== agent && c.end <= (s.words[h.first]?.start ?? 0)).at(-1);
+  const start = s.words[h.first]?.start ?? 0;
+  const end = s.words[rival?.last ?? h.last]?.end ?? 0;
+  return [{ kind: 'cause', agent, role: 'cause', polarity: 'denied', exclusive: false, start, end, ...(main?.patient === undefined ? {} : { patient: main.patient }) }];
+}
+
+/** A proposal ("the hypothesis that ...") holding word `h`, rejected after it in its clause. */
+function isRejectedProposal(s: ReadSentence, h: LexHit): boolean {
+  const clause = s.words[h.first]?.clause;
+  const proposal = s.of('stance', 'proposal').some((p) => s.words[p.last + 1]?.text === 'that' && p.last < h.first && h.first - p.last <= 10 && s.words[p.first]?.clause === clause);
+  return proposal && s.of('stance', 'rejection').some((r) => r.first > h.last && s.words[r.first]?.clause === clause && denialsBefore(s, r.first, 3) % 2 === 0);
 }
 
 /** Things that hold a record and act on nothing. */
@@ -233,6 +269,15 @@ function isCo2Effect(s: ReadSentence, h: LexHit): boolean {
   return /sensitivity|greenhouse|warming (?:effect|power)|heat-?trapping|trapping/u.test(phrase) || s.of('entities', 'co2').length > 0 || s.of('order').length > 0;
 }
 
+/** A restricting word between the subject and word `i`, in the subject's clause ("CO2 just came along ... as a passenger"). */
+function exclusiveAfterSubject(s: ReadSentence, i: number, subject: Thing | undefined): boolean {
+  if (subject === undefined || subject.kind === 'pronoun' || subject.last >= i || i - subject.last > 10) return false;
+  const clause = s.words[i]?.clause;
+  // "CO2 merely followed the temperature, a bystander": the restriction belongs to the order word between.
+  const restricted = (e: LexHit) => e.first > subject.last && e.last < i && s.words[e.first]?.clause === clause && !['not', 'no'].includes(s.words[e.first - 1]?.text ?? '');
+  return s.of('exclusive').some((e) => restricted(e) && !s.of('order').some((o) => o.first > e.last && o.last < i));
+}
+
 function hasExclusiveBefore(s: ReadSentence, i: number, window: number): boolean {
   return s.of('exclusive').some((e) => e.last < i && i - e.last <= window && s.words[e.first]?.segment === s.words[i]?.segment);
 }
@@ -253,6 +298,9 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
     const nearCue = Math.abs(e.last - h.first) <= 2 || (e.first > h.last && e.first - h.last <= 2);
     // "The change in sunshine, on its own, is what brought...": between the agent and the cue word.
     const between = agent !== undefined && e.first > agent.last && e.last < h.first;
+    // "the orbit ended the ice age, full stop, and ...": a restriction set off on its own after the cause.
+    const tail = e.first > h.last && s.words[e.first]?.clause === s.words[h.first]?.clause && s.words[e.first - 1]?.segment !== s.words[e.first]?.segment && s.words[e.last + 1]?.segment !== s.words[e.last]?.segment;
+    if (tail) return true;
     const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by itself|on its own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
     return nearAgent || ((nearCue || between) && strong);
   });

@@ -7,6 +7,7 @@
  *
  * A feedback, a loop or "both" in the sentence or its neighbours answers the framing, and passes.
  */
+import { polarityAt } from '../../propositions/causes.js';
 import type { Cause, LexHit, ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
@@ -24,6 +25,8 @@ function detect({ index, read }: DetectInput): Cue[] {
     return r !== undefined && (r.props.causes.some((c) => c.role === 'feedback' && c.polarity === 'asserted') || bothGranted);
   });
   if (loop) return [];
+  const frame = framedInWords(here.s, read(index - 1)?.s);
+  if (frame !== undefined) return [frame];
   const causes = here.props.causes.filter((c) => c.polarity !== 'open' && c.role !== 'start');
   const aboutCo2 = here.s.of('entities', 'co2').length > 0;
   // An unnamed agent denied beside an asserted "CO2 is an effect" is CO2 ("a consequence cannot be a cause").
@@ -65,6 +68,22 @@ function detect({ index, read }: DetectInput): Cue[] {
     if (reverse !== null && reverse.index >= asserted.end - 1) return [{ start: asserted.start, end: reverse.index + reverse[0].length }];
   }
   return [];
+}
+
+/**
+ * The either/or frame stated in words (lexicon `causes.either-or`: "which of the two", "the two
+ * roles exclude each other"), undenied, about a cause of CO2's: the sentence or the one before
+ * names a cause and CO2. "The two roles do not exclude each other" passes.
+ */
+function framedInWords(s: ReadSentence, previous: ReadSentence | undefined): Cue | undefined {
+  const frame = s.of('causes', 'either-or').find((h) => polarityAt(s, h.first) === 'asserted');
+  if (frame === undefined) return undefined;
+  const causal = (r: ReadSentence | undefined) => r !== undefined && r.of('causes').some((h) => h.key !== 'either-or');
+  const co2 = (r: ReadSentence | undefined) => r !== undefined && r.of('entities', 'co2').length > 0;
+  if (!(causal(s) || causal(previous)) || !(co2(s) || co2(previous))) return undefined;
+  const clause = s.words[frame.first]?.clause;
+  const end = s.words.filter((w) => w.clause === clause).at(-1)?.end ?? s.text.length;
+  return { start: s.words[frame.first]?.start ?? 0, end };
 }
 
 /** A question that sets the two directions against each other ("...or did temperature drive CO2?"), answered by picking one. */
