@@ -275,7 +275,8 @@ function exclusiveAfterSubject(s: ReadSentence, i: number, subject: Thing | unde
   const clause = s.words[i]?.clause;
   // "CO2 merely followed the temperature, a bystander": the restriction belongs to the order word between.
   const restricted = (e: LexHit) => e.first > subject.last && e.last < i && s.words[e.first]?.clause === clause && !['not', 'no'].includes(s.words[e.first - 1]?.text ?? '');
-  return s.of('exclusive').some((e) => restricted(e) && !s.of('order').some((o) => o.first > e.last && o.last < i));
+  const orderWithObject = (e: LexHit) => s.of('order').some((o) => o.first > e.last && o.last < i && s.things.some((t) => t.first > o.last && t.first - o.last <= 3 && t.first < i));
+  return s.of('exclusive').some((e) => restricted(e) && !orderWithObject(e));
 }
 
 function hasExclusiveBefore(s: ReadSentence, i: number, window: number): boolean {

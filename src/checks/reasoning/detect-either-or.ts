@@ -34,7 +34,10 @@ function detect({ index, read }: DetectInput): Cue[] {
   const direction = (c: Cause) => {
     if (isCo2OnWarming(c) || (aboutCo2 && c.agent === undefined && c.polarity === 'denied')) return 'co2';
     // "temperature drives CO2"; "the driver of the glacial cycles was temperature rather than CO2".
+    // "Temperature is the cause of the swings and the gas merely reads the gauge": temperature named the
+    // cause of what is left unnamed, set against CO2 denied one.
     if (isWarmingOnCo2(c) || (isWarmingSide(c.agent) && c.patient !== undefined && c.patient !== c.agent)) return 'temperature';
+    if (c.agent === 'temperature' && c.patient === undefined && c.polarity === 'asserted' && c.role === 'cause') return 'temperature';
     return undefined;
   };
   const answer = answersEitherOr(read(index - 1), here.s.text);

@@ -1,0 +1,111 @@
+/**
+ * Restricted roles, sufficiency and the either/or frame, in wordings of our own: a cause denied by
+ * casting CO2 as a mere follower, one cause said to suffice with the other shut out, a lag taken as
+ * grounds to strike CO2 off, and the choice between two roles stated in the abstract.
+ * The science:
+ * - The orbit paced and triggered the deglaciations; CO2 amplified and spread the warming, and
+ *   global temperature lagged CO2: Shakun et al. 2012, Nature 484, 49-54, doi 10.1038/nature10915.
+ * - Antarctic temperature and CO2 rose within a few centuries of each other, and CO2 acted as a
+ *   feedback: Parrenin et al. 2013, Science 339, 1060-1063, doi 10.1126/science.1226368.
+ * - CO2 acts as both a feedback and a forcing in the glacial cycles: IPCC AR6 WG1 (2021), chapter 5
+ *   and the paleoclimate box of chapter 7 (from memory).
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { checkText } from '../../src/engine.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+import type { LoadedPacks } from '../../src/rulepack/types.js';
+
+let packs: LoadedPacks;
+beforeAll(async () => {
+  packs = await loadPacks([]);
+});
+
+const serious = async (text: string) =>
+  (await checkText(text, { packs, format: 'markdown' })).flags.filter((f) => f.level !== 'note' && f.ruleId.startsWith('logic.')).map((f) => f.ruleId);
+
+describe('CO2 cast as a mere follower is denied a cause (Shakun et al. 2012: it amplified the warming)', () => {
+  // The follower's part denies CO2 a cause: beside temperature named the cause it is the either/or
+  // error; where the sentence also puts temperature first ("led", "second"), the lag check takes it.
+  it.each([
+    ['Over the glacial cycles temperature steered, and carbon dioxide simply rode in the back seat.', 'logic.either-or-causation'],
+    ['Warmth drives the carbon cycle, while CO2 plays second fiddle to it.', 'logic.lag-rules-out-cause'],
+    ['Temperature is the cause of the swings and the gas merely reads the gauge.', 'logic.either-or-causation'],
+    ['Antarctic warmth was the driver, and CO2 only tagged along as a follower.', 'logic.either-or-causation'],
+    ['The warming led the whole way, with carbon dioxide just going along for the ride as a bystander.', 'logic.lag-rules-out-cause'],
+  ])('%s', async (sentence, rule) => {
+    expect(await serious(sentence)).toContain(rule);
+  });
+
+  it('reads "only ever" on a verb of following as a dismissal, but not "only after" as a time', async () => {
+    // A restriction on the verb (Shakun et al. 2012: CO2 was no mere follower).
+    expect(await serious('In the Antarctic cores the temperature moves and the CO2 only ever trails it.')).toContain('logic.lag-rules-out-cause');
+    // Parrenin et al. 2013: CO2 rose after Antarctic warming began, and then amplified it.
+    expect(await serious('CO2 rose only after Antarctic temperature had begun to climb, and then it amplified the warming.')).toEqual([]);
+  });
+
+  it.each([
+    // Shakun et al. 2012: CO2 was no passenger; it amplified the warming.
+    ['CO2 was not just along for the ride: once released, it amplified the warming.'],
+    ['Carbon dioxide did not merely read the dial; it turned it, amplifying the warming the orbit began.'],
+  ])('keeps clean: %s', async (sentence) => {
+    expect(await serious(sentence)).toEqual([]);
+  });
+});
+
+describe('one cause said to suffice, the other shut out (Shakun et al. 2012: orbit and CO2 together)', () => {
+  it.each([
+    ['The tilt of the axis brought the last glaciation to an end, full stop.'],
+    ['Changes in sunlight ended the ice ages, end of story, and the rest is detail.'],
+    ['Summer sunshine in the far north was sufficient by itself to end the glaciation.'],
+    ['Shifts in the orbit explain the glacial cycles, with no help from carbon dioxide.'],
+    ['Orbital cycles drove the ice ages without any help from greenhouse gases.'],
+  ])('%s', async (sentence) => {
+    expect(await serious(sentence)).toContain('logic.single-cause');
+  });
+
+  it.each([
+    // The orbit as the trigger only, with CO2's part granted (Shakun et al. 2012).
+    ['The orbit started the deglaciation, full stop; CO2 then amplified it.'],
+    // The help denied is itself denied: CO2 was needed.
+    ['The orbit cannot explain the full swing without help from carbon dioxide.'],
+  ])('keeps clean: %s', async (sentence) => {
+    expect(await serious(sentence)).toEqual([]);
+  });
+});
+
+describe('a lag taken as grounds to strike CO2 off (Parrenin et al. 2013; Shakun et al. 2012)', () => {
+  it.each([
+    ['Since CO2 rose centuries after the warming began, it can be crossed off the list of suspects for what ended the glaciation.'],
+    ['If CO2 lags Antarctic warming in every core, the theory that CO2 contributed to the warming must be discarded.'],
+    ['Because carbon dioxide trails the temperature, the possibility that it drove the deglaciation is ruled out.'],
+  ])('%s', async (sentence) => {
+    expect(await serious(sentence)).toContain('logic.lag-rules-out-cause');
+  });
+
+  it.each([
+    // The denial is itself denied: CO2 stays a suspect.
+    ['Although CO2 rose after the warming in Antarctica, it cannot be crossed off the list of suspects for what ended the glaciation.'],
+    // The proposal stands: it has not been rejected.
+    ['CO2 trails Antarctic temperature a little, yet the hypothesis that CO2 amplified the deglacial warming has not been rejected by any core.'],
+  ])('keeps clean: %s', async (sentence) => {
+    expect(await serious(sentence)).toEqual([]);
+  });
+});
+
+describe('the either/or frame stated in the abstract (IPCC AR6: CO2 both feedback and forcing)', () => {
+  it.each([
+    ['The project will settle whether CO2 was a trigger or an amplifier, since the two roles are mutually exclusive.'],
+    ['Carbon dioxide either drove the warming or answered it; the two parts exclude one another.'],
+    ['The cores must tell us which one of the two was in control, carbon dioxide or the temperature.'],
+  ])('%s', async (sentence) => {
+    expect(await serious(sentence)).toContain('logic.either-or-causation');
+  });
+
+  it.each([
+    // The frame denied: a feedback runs both ways.
+    ['The two roles of CO2, trigger and amplifier, do not exclude each other.'],
+    ['Asking which of the two was in control misses the point: each drove the other.'],
+  ])('keeps clean: %s', async (sentence) => {
+    expect(await serious(sentence)).toEqual([]);
+  });
+});
