@@ -52,6 +52,10 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   const agentKind = (t: Thing | undefined) => kindOf(s, t, previous, RECORDS);
   const noun = h.key === 'nouns' || h.key === 'effects' || h.key === 'roles' || h.key === 'feedback';
   let polarity = polarityAt(s, h.first);
+  // "It does not let CO2 off the hook, because the ocean released carbon...": a reason set off by a
+  // comma explains the whole statement before it, denial included; the reason itself is asserted.
+  const reasonAfterComma = (h.key === 'because' || h.key === 'because-only') && /,\s*$/u.test(s.text.slice(0, s.words[h.first]?.start ?? 0));
+  if (reasonAfterComma && polarity === 'denied') polarity = 'asserted';
   // "the greenhouse effect of CO2 must be negligible": a role denied after the noun.
   if (noun && polarity !== 'open' && deniedAfter(s, h.last)) polarity = polarity === 'denied' ? 'asserted' : 'denied';
   // "the hypothesis that CO2 contributed to the warming will be rejected": the proposal is denied.
@@ -75,6 +79,10 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     // "The real driver of the glacial cycles was temperature": the agent follows the copula.
     agentThing = thingAfter(s, copulaAfter(s, h.last) as number, 4);
     patientThing = OBJECT_LINKS.has(next) ? thingAfter(s, h.last, 4) : undefined;
+  } else if (noun && h.key !== 'effects' && effectAsSubject(s, h.first)) {
+    // "a consequence cannot also be a cause": the subject is a role, not a thing; the agent is whatever
+    // the sentence casts in that role, left unnamed here.
+    agentThing = undefined;
   } else if (noun) {
     const asRole = ['as', 'be'].includes(s.words[h.first - 2]?.text ?? '') || s.words[h.first - 1]?.text === 'as';
     // "CO2 only the consequence": the subject stands just before; "CO2 ... was only a passenger": before
@@ -241,6 +249,9 @@ function pseudoCleftFocus(s: ReadSentence, h: LexHit): Thing | undefined {
   for (let k = what - 1; k >= Math.max(0, what - 5); k -= 1) {
     if (!COPULAS.has(s.words[k]?.text ?? '')) continue;
     const clause = s.words[k]?.clause;
+    // "The physics of absorption, plus the order of events, is what makes the case": a focus of two.
+    const subject = s.words.slice(0, k).filter((w) => w.clause === clause).map((w) => w.text);
+    if (subject.some((w, j) => COORDINATORS.has(w) || (['along', 'together', 'combined'].includes(w) && subject[j + 1] === 'with') || (w === 'as' && subject[j + 1] === 'well'))) return undefined;
     const own = s.things.filter((t) => t.last < k && t.kind !== 'pronoun');
     return own.find((t) => s.words[t.first]?.clause === clause) ?? own.at(-1);
   }
@@ -252,6 +263,17 @@ function pseudoCleftFocus(s: ReadSentence, h: LexHit): Thing | undefined {
   }
   return undefined;
 }
+
+/** Words that may stand between a subject and its predicate noun ("cannot also be a"). */
+const PREDICATE_LINK = new Set(['can', 'cannot', 'could', 'not', 'never', 'also', 'at', 'the', 'same', 'time', 'be', 'is', 'was', 'are', 'were', 'a', 'an', 'ever', 'simultaneously', 'must', 'might', 'may', 'then', 'still']);
+
+/** An effect noun is the subject of the predicate noun at `i` ("a consequence cannot also be a cause"). */
+function effectAsSubject(s: ReadSentence, i: number): boolean {
+  return s.of('causes', 'effects').some((e) => e.last < i && i - e.last <= 7 && s.words.slice(e.last + 1, i).every((w) => PREDICATE_LINK.has(w.text)) && s.words.slice(e.last + 1, i).some((w) => COPULAS.has(w.text)));
+}
+
+/** Words that join two subjects into one ("the physics, plus the timing, is what..."). */
+const COORDINATORS = new Set(['plus', 'and']);
 
 /** Denied when an odd number of denials precede; open under a denied inference or "whether". */
 export function polarityAt(s: ReadSentence, i: number): Polarity {

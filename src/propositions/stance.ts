@@ -64,7 +64,7 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
   if (s.question) return questionStance(s, context, make);
   if (isReported(s)) return make('reported');
   if (s.of('stance', 'myth').length > 0) return make('myth');
-  if (s.of('stance', 'superseded').length > 0) return make('superseded');
+  if (s.of('stance', 'superseded').length > 0 || isFormerOwnView(s)) return make('superseded');
   if (isHypothetical(s)) return make('hypothetical');
   return make('asserted');
 }
@@ -114,6 +114,14 @@ function isReported(s: ReadSentence): boolean {
   if (attributed) return true;
   const text = s.words.slice(0, 8).map((w) => w.text).join(' ');
   return /\b(?:it is|it's|is) (?:often|sometimes|commonly|frequently|widely) (?:said|claimed|argued|heard|repeated|asserted)\b|\baccording to (?:some|critics|sceptics|skeptics)\b/u.test(text);
+}
+
+/**
+ * "The lag argument, as I used to make it, went like this: ...", "We once argued that...": the
+ * writer's own former view, told as past ("used to" or "once" after "I" or "we").
+ */
+function isFormerOwnView(s: ReadSentence): boolean {
+  return s.words.some((w, i) => (w.text === 'i' || w.text === 'we') && ((s.words[i + 1]?.text === 'used' && s.words[i + 2]?.text === 'to') || (s.words[i + 1]?.text === 'once' && s.of('stance', 'report-verbs').some((v) => v.first === i + 2))));
 }
 
 function isHypothetical(s: ReadSentence): boolean {

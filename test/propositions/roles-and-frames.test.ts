@@ -109,3 +109,42 @@ describe('the either/or frame stated in the abstract (IPCC AR6: CO2 both feedbac
     expect(await serious(sentence)).toEqual([]);
   });
 });
+
+describe('maxims that deny the latecomer a cause (Parrenin et al. 2013: CO2 came late in Antarctica and amplified)', () => {
+  it.each([
+    // The latecomer named is CO2 itself: no earlier sentence needs to put temperature first.
+    ['A gas that shows up after the warming has begun cannot be what set it going.'],
+    ['Carbon dioxide that arrives late to the thaw can not have been the one who lit it.'],
+    // An effect noun as the subject: the role, not a thing, is denied the cause.
+    ['The lag of a few centuries makes CO2 a result of the warming, and a result can never be its driver.'],
+    ['CO2 trailed the warming by centuries, so it was a response, and a response can never be a driver.'],
+  ])('%s', async (sentence) => {
+    expect(await serious(sentence)).toContain('logic.lag-rules-out-cause');
+  });
+
+  it.each([
+    // Only the start is denied to the latecomer, which is right (Shakun et al. 2012).
+    ['A gas that shows up after the warming has begun cannot be what started it, though it can amplify it.'],
+  ])('keeps clean: %s', async (sentence) => {
+    expect(await serious(sentence)).toEqual([]);
+  });
+});
+
+describe('readings that keep answers and old views clean (common practice of debunking pieces)', () => {
+  it.each([
+    // The writer's own former view, told as past (Parrenin et al. 2013 is the answer it goes on to give).
+    ['The argument, as we used to put it, ran like this: CO2 rose after the warming in Antarctica, so CO2 cannot have caused the warming.'],
+    ['I once argued that CO2 came after the warming and so could not have caused it.'],
+    // A focus of two things is no single cause (correlation and physics together make the case).
+    ['The match is close, but on its own it proves nothing; the absorption of infrared by CO2, plus the timing in global records, is what makes the case.'],
+    // A reason set off by a comma explains the whole denial before it (Shakun et al. 2012).
+    ['The Antarctic lag does not clear CO2, because once the deep ocean started releasing carbon, CO2 amplified the warming.'],
+  ])('keeps clean: %s', async (sentence) => {
+    expect(await serious(sentence)).toEqual([]);
+  });
+
+  it('still flags the same lag argument held as the writer\'s own', async () => {
+    // Parrenin et al. 2013: the lag does not rule CO2 out.
+    expect(await serious('The argument runs like this: CO2 rose after the warming in Antarctica, so CO2 cannot have caused the warming.')).toContain('logic.lag-rules-out-cause');
+  });
+});
