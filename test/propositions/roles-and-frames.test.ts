@@ -148,3 +148,15 @@ describe('readings that keep answers and old views clean (common practice of deb
     expect(await serious('The argument runs like this: CO2 rose after the warming in Antarctica, so CO2 cannot have caused the warming.')).toContain('logic.lag-rules-out-cause');
   });
 });
+
+describe('a sentence that picks one side of the choice is the draft\'s pick (IPCC AR6: both directions hold)', () => {
+  it('flags the pick even when the next sentence grants both', async () => {
+    const text = 'Either warmth drives carbon dioxide or carbon dioxide drives warmth, and the ice settles it in favour of the first. Yet both happen in the cores.';
+    expect(await serious(text)).toContain('logic.either-or-causation');
+  });
+
+  it('keeps clean a choice answered with both in the next sentence', async () => {
+    const text = 'Does warmth drive carbon dioxide, or does carbon dioxide drive warmth? Both: each pushed the other through the deglaciation.';
+    expect(await serious(text)).toEqual([]);
+  });
+});
