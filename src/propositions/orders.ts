@@ -26,8 +26,10 @@ export function readOrders(s: ReadSentence, previous?: ReadSentence): Order[] {
   // Only a sentence that reads that record ("It shows...", "This means...") takes it from there.
   const readsBack = ['it', 'this', 'that', 'these', 'those', 'they', 'here'].includes(s.words[0]?.text ?? '');
   const recordNamed = names(s) || (readsBack && names(previous));
+  // "said Professor X, who led the study": a speaker's part in the work orders no events.
+  const speakers = s.of('stance', 'insider');
   for (const h of s.of('order')) {
-    if (denialsBefore(s, h.first, 4) % 2 === 1) continue;
+    if (denialsBefore(s, h.first, 4) % 2 === 1 || speakers.some((p) => p.first <= h.first && h.last <= p.last)) continue;
     const order = orderAt(s, h, previous);
     if (order === undefined) continue;
     const clause = s.words[h.first]?.clause;

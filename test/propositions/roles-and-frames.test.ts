@@ -160,3 +160,32 @@ describe('a sentence that picks one side of the choice is the draft\'s pick (IPC
     expect(await serious(text)).toEqual([]);
   });
 });
+
+describe('whose voice a quotation or a block quote is (common practice of press offices and museum panels)', () => {
+  // The claim is the correlation-as-proof error (Shakun et al. 2012: the case rests on physics and
+  // on the order of events in global records, not on the match alone).
+  const claim = 'The two curves rise and fall together, which proves that CO2 controls the climate.';
+
+  it.each([
+    [`"${claim}" said Dr Ana Ruiz, lead author of the study.`],
+    [`"${claim}" added the project's principal investigator, Dr Ana Ruiz.`],
+    [`"${claim}" said Professor Ruiz, who led the research.`],
+  ])('a quotation given to the work\'s own people is the draft\'s claim: %s', async (text) => {
+    expect(await serious(text)).toContain('logic.correlation-as-proof');
+  });
+
+  it('a quotation given to someone the draft answers stays a quotation', async () => {
+    expect(await serious(`"${claim}" said a caller to the station.`)).toEqual([]);
+  });
+
+  it('a block quote that opens with a label of its own is a panel in the writer\'s voice', async () => {
+    expect(await serious(`> **Did you know?**\n> ${claim}\n`)).toContain('logic.correlation-as-proof');
+    expect(await serious(`> **Had you noticed?**\n> ${claim}\n`)).toContain('logic.correlation-as-proof');
+  });
+
+  it('a block quote under a myth label or a report stays a quotation', async () => {
+    expect(await serious(`> **Myth:**\n> ${claim}\n`)).toEqual([]);
+    expect(await serious(`> **What critics say:**\n> ${claim}\n`)).toEqual([]);
+    expect(await serious(`> ${claim}\n`)).toEqual([]);
+  });
+});
