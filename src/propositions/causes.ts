@@ -42,7 +42,35 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     }
     causes.push(...causeAt(s, h, previous));
   }
-  return causes;
+  return [...causes, ...identityCauses(s)];
+}
+
+/** Agents an event can be said to be "all" of. */
+const WHOLE_AGENTS = new Set(['co2', 'orbit', 'water']);
+
+/**
+ * "Termination I was 100% ocean carbon", "the last deglaciation was all the orbit": an ice age or a
+ * deglaciation said to be wholly one thing names that thing its one cause.
+ */
+function identityCauses(s: ReadSentence): Cause[] {
+  const out: Cause[] = [];
+  s.words.forEach((w, k) => {
+    if (!COPULAS.has(w.text)) return;
+    const subject = s.things.find((t) => t.kind === 'ice-age' && t.last < k && k - t.last <= 2 && s.words[t.first]?.clause === w.clause);
+    if (subject === undefined) return;
+    const next = s.words[k + 1];
+    const percent = next !== undefined && /^100$/u.test(next.text) && /^\s*(?:%|percent|per cent)/u.test(s.text.slice(next.end));
+    const whole = s.of('exclusive').find((e) => e.first === k + 1) ?? (next?.text === 'all' || percent ? { first: k + 1, last: k + 1 } : undefined);
+    if (whole === undefined) return;
+    const things = s.things.filter((t) => t.first > whole.last && t.first - whole.last <= 4 && s.words[t.first]?.segment === s.words[whole.last + 1]?.segment);
+    // "ocean carbon": the head of the noun phrase is its last thing.
+    const head = things.filter((t, j) => j === 0 || t.first === (things[j - 1] as Thing).last + 1).at(-1);
+    if (head === undefined || !WHOLE_AGENTS.has(head.kind)) return;
+    const polarity = polarityAt(s, k);
+    if (polarity === 'open') return;
+    out.push({ kind: 'cause', agent: head.kind, patient: 'ice-age', role: 'cause', polarity, exclusive: true, start: s.words[subject.first]?.start ?? 0, end: s.words[head.last]?.end ?? 0 });
+  });
+  return out;
 }
 
 function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {

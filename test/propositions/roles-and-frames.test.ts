@@ -189,3 +189,21 @@ describe('whose voice a quotation or a block quote is (common practice of press 
     expect(await serious(`> ${claim}\n`)).toEqual([]);
   });
 });
+
+describe('an ice age said to be wholly one thing (Shakun et al. 2012: orbit and CO2 together)', () => {
+  it.each([
+    ['The last deglaciation was 100% the orbit, and greenhouse gases had zero to do with it.'],
+    ['That glacial termination was all deep-ocean carbon dioxide.'],
+    ['The ice age was entirely the orbit.'],
+  ])('%s', async (sentence) => {
+    expect(await serious(sentence)).toContain('logic.single-cause');
+  });
+
+  it.each([
+    // A share, not the whole (Shakun et al. 2012 give CO2 a large part of the global warming).
+    ['The last deglaciation was not all the orbit: CO2 amplified the warming it started.'],
+    ['The glacial termination was 100 metres of sea-level rise in a few thousand years.'],
+  ])('keeps clean: %s', async (sentence) => {
+    expect(await serious(sentence)).toEqual([]);
+  });
+});
