@@ -207,3 +207,13 @@ describe('an ice age said to be wholly one thing (Shakun et al. 2012: orbit and 
     expect(await serious(sentence)).toEqual([]);
   });
 });
+
+describe('sufficiency in itself, with the other factor in a clause of its own (Shakun et al. 2012)', () => {
+  it('flags the orbit called sufficient in itself beside CO2 denied a part', async () => {
+    expect(await serious('Orbital changes were sufficient in themselves, and carbon dioxide played no part in the melt.')).toContain('logic.single-cause');
+  });
+
+  it('keeps clean the orbit sufficient to start the melt, with CO2 amplifying it', async () => {
+    expect(await serious('The brighter northern summers were sufficient to start the melt, and carbon dioxide then amplified it.')).toEqual([]);
+  });
+});
