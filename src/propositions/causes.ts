@@ -15,7 +15,7 @@ import type { Cause, Polarity } from './types.js';
 const DETERMINERS = new Set(['the', 'a', 'an', 'its', 'their', 'our', 'of', 'in', 'for', 'with', 'from', 'after', 'before', 'than']);
 const INFERENCE_VERBS = new Set(['mean', 'means', 'meant', 'show', 'shows', 'showed', 'prove', 'proves', 'proved', 'imply', 'implies', 'implied', 'follow', 'follows', 'suggest', 'suggests', 'tell', 'tells']);
 const OBJECT_LINKS = new Set(['of', 'in', 'on', 'for', 'behind', 'to']);
-const ROLE: Record<string, Cause['role']> = { verbs: 'cause', because: 'cause', 'because-only': 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
+const ROLE: Record<string, Cause['role']> = { follower: 'cause', verbs: 'cause', because: 'cause', 'because-only': 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
 
 /** The causes one sentence states or denies; `previous` resolves a pronoun that opens it. */
 export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
@@ -29,16 +29,48 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     .filter((h) => ![...entities, ...s.of('order')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first));
   const causes: Cause[] = [];
   for (const h of hits) {
-    if (h.key === 'reverse') continue;
+    if (h.key === 'reverse' || h.key === 'either-or') continue;
     const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify';
     // "the end of the ice age" is a noun; "it was CO2 doing the pushing" is still a verb.
     if (verbLike && DETERMINERS.has(s.words[h.first - 1]?.text ?? '') && s.words[h.first - 2]?.text !== 'doing') continue;
     // "global warming", "Antarctic cooling": a region word before it makes the -ing form a noun.
     if (verbLike && s.words[h.first]?.text.endsWith('ing') && regions.some((r) => r.last === h.first - 1)) continue;
     if (h.key === 'effects' && s.words[h.first - 1]?.text === 'in') continue;
+    if (h.key === 'without') {
+      causes.push(...withoutAt(s, h, causes, previous));
+      continue;
+    }
     causes.push(...causeAt(s, h, previous));
   }
-  return causes;
+  return [...causes, ...identityCauses(s)];
+}
+
+/** Agents an event can be said to be "all" of. */
+const WHOLE_AGENTS = new Set(['co2', 'orbit', 'water']);
+
+/**
+ * "Termination I was 100% ocean carbon", "the last deglaciation was all the orbit": an ice age or a
+ * deglaciation said to be wholly one thing names that thing its one cause.
+ */
+function identityCauses(s: ReadSentence): Cause[] {
+  const out: Cause[] = [];
+  s.words.forEach((w, k) => {
+    if (!COPULAS.has(w.text)) return;
+    const subject = s.things.find((t) => t.kind === 'ice-age' && t.last < k && k - t.last <= 2 && s.words[t.first]?.clause === w.clause);
+    if (subject === undefined) return;
+    const next = s.words[k + 1];
+    const percent = next !== undefined && /^100$/u.test(next.text) && /^\s*(?:%|percent|per cent)/u.test(s.text.slice(next.end));
+    const whole = s.of('exclusive').find((e) => e.first === k + 1) ?? (next?.text === 'all' || percent ? { first: k + 1, last: k + 1 } : undefined);
+    if (whole === undefined) return;
+    const things = s.things.filter((t) => t.first > whole.last && t.first - whole.last <= 4 && s.words[t.first]?.segment === s.words[whole.last + 1]?.segment);
+    // "ocean carbon": the head of the noun phrase is its last thing.
+    const head = things.filter((t, j) => j === 0 || t.first === (things[j - 1] as Thing).last + 1).at(-1);
+    if (head === undefined || !WHOLE_AGENTS.has(head.kind)) return;
+    const polarity = polarityAt(s, k);
+    if (polarity === 'open') return;
+    out.push({ kind: 'cause', agent: head.kind, patient: 'ice-age', role: 'cause', polarity, exclusive: true, start: s.words[subject.first]?.start ?? 0, end: s.words[head.last]?.end ?? 0 });
+  });
+  return out;
 }
 
 function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
@@ -48,8 +80,14 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   const agentKind = (t: Thing | undefined) => kindOf(s, t, previous, RECORDS);
   const noun = h.key === 'nouns' || h.key === 'effects' || h.key === 'roles' || h.key === 'feedback';
   let polarity = polarityAt(s, h.first);
+  // "It does not let CO2 off the hook, because the ocean released carbon...": a reason set off by a
+  // comma explains the whole statement before it, denial included; the reason itself is asserted.
+  const reasonAfterComma = (h.key === 'because' || h.key === 'because-only') && /,\s*$/u.test(s.text.slice(0, s.words[h.first]?.start ?? 0));
+  if (reasonAfterComma && polarity === 'denied') polarity = 'asserted';
   // "the greenhouse effect of CO2 must be negligible": a role denied after the noun.
   if (noun && polarity !== 'open' && deniedAfter(s, h.last)) polarity = polarity === 'denied' ? 'asserted' : 'denied';
+  // "the hypothesis that CO2 contributed to the warming will be rejected": the proposal is denied.
+  if (polarity === 'asserted' && isRejectedProposal(s, h)) polarity = 'denied';
   const next = s.words[h.last + 1]?.text ?? '';
   // "by itself", "by themselves" say the agent acted alone: no passive.
   const reflexive = /^(?:itself|themselves|its|their)$/u.test(s.words[(next === 'by' ? h.last + 2 : h.last + 3)]?.text ?? '');
@@ -69,6 +107,10 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     // "The real driver of the glacial cycles was temperature": the agent follows the copula.
     agentThing = thingAfter(s, copulaAfter(s, h.last) as number, 4);
     patientThing = OBJECT_LINKS.has(next) ? thingAfter(s, h.last, 4) : undefined;
+  } else if (noun && h.key !== 'effects' && effectAsSubject(s, h.first)) {
+    // "a consequence cannot also be a cause": the subject is a role, not a thing; the agent is whatever
+    // the sentence casts in that role, left unnamed here.
+    agentThing = undefined;
   } else if (noun) {
     const asRole = ['as', 'be'].includes(s.words[h.first - 2]?.text ?? '') || s.words[h.first - 1]?.text === 'as';
     // "CO2 only the consequence": the subject stands just before; "CO2 ... was only a passenger": before
@@ -114,6 +156,11 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   const end = s.words[h.last]?.end ?? 0;
   // "It was CO2 that set the temperature": a cleft singles its focus out as the one agent.
   const exclusive = isExclusive(s, h, agentThing) || (cleft !== undefined && h.key !== 'amplify') || h.key === 'because-only';
+  // "CO2 rides in the back", "CO2 merely reading the dial": a follower's part denies its subject a
+  // cause; "CO2 is not just along for the ride" grants one.
+  if (h.key === 'follower' && polarity !== 'open') {
+    return [{ kind: 'cause', role: 'cause', polarity: polarity === 'asserted' ? 'denied' : 'asserted', exclusive: false, start, end, ...(agent === undefined ? {} : { agent }) }];
+  }
   const cause: Cause = {
     kind: 'cause', role: ROLE[h.key] ?? 'cause', polarity, exclusive, start, end,
     ...(agent === undefined ? {} : { agent }), ...(patient === undefined ? {} : { patient }),
@@ -125,11 +172,36 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   if (rival !== undefined && rivalKind !== undefined && rivalKind !== agent && polarity === 'asserted' && h.key !== 'effects') {
     out.push({ kind: 'cause', agent: rivalKind, role: cause.role, polarity: 'denied', exclusive: false, start, end, ...(patient === undefined ? {} : { patient }) });
   }
-  // "nothing but a consequence", "merely a response": the subject is denied any causal role.
-  if (h.key === 'effects' && polarity === 'asserted' && hasExclusiveBefore(s, h.first, 3) && patient !== undefined) {
+  // "nothing but a consequence", "merely a response", "CO2 just came along as a passenger": the
+  // subject is denied any causal role.
+  const restricted = hasExclusiveBefore(s, h.first, 3) || exclusiveAfterSubject(s, h.first, agentThing);
+  if (h.key === 'effects' && polarity === 'asserted' && restricted && patient !== undefined) {
     out.push({ kind: 'cause', agent: patient, role: 'cause', polarity: 'denied', exclusive: false, start, end });
   }
   return out;
+}
+
+/**
+ * "The orbit accounts for the ice ages, with no help needed from greenhouse gases": the thing after
+ * the phrase is denied a part in what the cause before it does. A denied phrase ("not without help
+ * from CO2") denies nothing.
+ */
+function withoutAt(s: ReadSentence, h: LexHit, before: readonly Cause[], previous?: ReadSentence): Cause[] {
+  if (polarityAt(s, h.first) !== 'asserted') return [];
+  const rival = s.things.find((t) => t.first > h.last && t.first - h.last <= 4 && t.kind !== 'pronoun');
+  const agent = kindOf(s, rival, previous);
+  if (agent === undefined) return [];
+  const main = before.filter((c) => c.polarity === 'asserted' && c.agent !== agent && c.end <= (s.words[h.first]?.start ?? 0)).at(-1);
+  const start = s.words[h.first]?.start ?? 0;
+  const end = s.words[rival?.last ?? h.last]?.end ?? 0;
+  return [{ kind: 'cause', agent, role: 'cause', polarity: 'denied', exclusive: false, start, end, ...(main?.patient === undefined ? {} : { patient: main.patient }) }];
+}
+
+/** A proposal ("the hypothesis that ...") holding word `h`, rejected after it in its clause. */
+function isRejectedProposal(s: ReadSentence, h: LexHit): boolean {
+  const clause = s.words[h.first]?.clause;
+  const proposal = s.of('stance', 'proposal').some((p) => s.words[p.last + 1]?.text === 'that' && p.last < h.first && h.first - p.last <= 10 && s.words[p.first]?.clause === clause);
+  return proposal && s.of('stance', 'rejection').some((r) => r.first > h.last && s.words[r.first]?.clause === clause && denialsBefore(s, r.first, 3) % 2 === 0);
 }
 
 /** Things that hold a record and act on nothing. */
@@ -205,6 +277,9 @@ function pseudoCleftFocus(s: ReadSentence, h: LexHit): Thing | undefined {
   for (let k = what - 1; k >= Math.max(0, what - 5); k -= 1) {
     if (!COPULAS.has(s.words[k]?.text ?? '')) continue;
     const clause = s.words[k]?.clause;
+    // "The physics of absorption, plus the order of events, is what makes the case": a focus of two.
+    const subject = s.words.slice(0, k).filter((w) => w.clause === clause).map((w) => w.text);
+    if (subject.some((w, j) => COORDINATORS.has(w) || (['along', 'together', 'combined'].includes(w) && subject[j + 1] === 'with') || (w === 'as' && subject[j + 1] === 'well'))) return undefined;
     const own = s.things.filter((t) => t.last < k && t.kind !== 'pronoun');
     return own.find((t) => s.words[t.first]?.clause === clause) ?? own.at(-1);
   }
@@ -216,6 +291,17 @@ function pseudoCleftFocus(s: ReadSentence, h: LexHit): Thing | undefined {
   }
   return undefined;
 }
+
+/** Words that may stand between a subject and its predicate noun ("cannot also be a"). */
+const PREDICATE_LINK = new Set(['can', 'cannot', 'could', 'not', 'never', 'also', 'at', 'the', 'same', 'time', 'be', 'is', 'was', 'are', 'were', 'a', 'an', 'ever', 'simultaneously', 'must', 'might', 'may', 'then', 'still']);
+
+/** An effect noun is the subject of the predicate noun at `i` ("a consequence cannot also be a cause"). */
+function effectAsSubject(s: ReadSentence, i: number): boolean {
+  return s.of('causes', 'effects').some((e) => e.last < i && i - e.last <= 7 && s.words.slice(e.last + 1, i).every((w) => PREDICATE_LINK.has(w.text)) && s.words.slice(e.last + 1, i).some((w) => COPULAS.has(w.text)));
+}
+
+/** Words that join two subjects into one ("the physics, plus the timing, is what..."). */
+const COORDINATORS = new Set(['plus', 'and']);
 
 /** Denied when an odd number of denials precede; open under a denied inference or "whether". */
 export function polarityAt(s: ReadSentence, i: number): Polarity {
@@ -231,6 +317,16 @@ export function polarityAt(s: ReadSentence, i: number): Polarity {
 function isCo2Effect(s: ReadSentence, h: LexHit): boolean {
   const phrase = s.words.slice(h.first, h.last + 1).map((w) => w.text).join(' ');
   return /sensitivity|greenhouse|warming (?:effect|power)|heat-?trapping|trapping/u.test(phrase) || s.of('entities', 'co2').length > 0 || s.of('order').length > 0;
+}
+
+/** A restricting word between the subject and word `i`, in the subject's clause ("CO2 just came along ... as a passenger"). */
+function exclusiveAfterSubject(s: ReadSentence, i: number, subject: Thing | undefined): boolean {
+  if (subject === undefined || subject.kind === 'pronoun' || subject.last >= i || i - subject.last > 10) return false;
+  const clause = s.words[i]?.clause;
+  // "CO2 merely followed the temperature, a bystander": the restriction belongs to the order word between.
+  const restricted = (e: LexHit) => e.first > subject.last && e.last < i && s.words[e.first]?.clause === clause && !['not', 'no'].includes(s.words[e.first - 1]?.text ?? '');
+  const orderWithObject = (e: LexHit) => s.of('order').some((o) => o.first > e.last && o.last < i && s.things.some((t) => t.first > o.last && t.first - o.last <= 3 && t.first < i));
+  return s.of('exclusive').some((e) => restricted(e) && !orderWithObject(e));
 }
 
 function hasExclusiveBefore(s: ReadSentence, i: number, window: number): boolean {
@@ -253,7 +349,10 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
     const nearCue = Math.abs(e.last - h.first) <= 2 || (e.first > h.last && e.first - h.last <= 2);
     // "The change in sunshine, on its own, is what brought...": between the agent and the cue word.
     const between = agent !== undefined && e.first > agent.last && e.last < h.first;
-    const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by itself|on its own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
+    // "the orbit ended the ice age, full stop, and ...": a restriction set off on its own after the cause.
+    const tail = e.first > h.last && s.words[e.first]?.clause === s.words[h.first]?.clause && s.words[e.first - 1]?.segment !== s.words[e.first]?.segment && s.words[e.last + 1]?.segment !== s.words[e.last]?.segment;
+    if (tail) return true;
+    const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by itself|in itself|in themselves|on its own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
     return nearAgent || ((nearCue || between) && strong);
   });
 }

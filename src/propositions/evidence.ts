@@ -12,7 +12,7 @@ export function readEvidence(s: ReadSentence, causes: readonly Cause[]): Evidenc
   const out: Evidence[] = [];
   for (const c of s.of('correlation')) {
     if (denialsBefore(s, c.first, 4) % 2 === 1) continue;
-    const proof = s.of('proof').find((p) => p.first > c.last && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first));
+    const proof = s.of('proof').find((p) => p.first > c.last && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first) && !deniedObject(s, p.last));
     if (proof === undefined) continue;
     const proofEnd = s.words[proof.last]?.end ?? 0;
     const cause = causes.find((k) => k.end > proofEnd && k.polarity !== 'open' && k.role !== 'feedback');
@@ -27,6 +27,12 @@ export function readEvidence(s: ReadSentence, causes: readonly Cause[]): Evidenc
 
 /** What a proof word may settle instead of a stated cause: "settles the question", "the matter". */
 const QUESTION = /^(?:question|matter|debate|argument|issue|case)$/u;
+
+/** "proves nothing", "proves no such thing": the proof word's object denies it. */
+function deniedObject(s: ReadSentence, i: number): boolean {
+  const next = s.words[i + 1]?.text ?? '';
+  return ['nothing', 'no', 'none', 'neither', 'little'].includes(next) && s.words[i + 1]?.segment === s.words[i]?.segment;
+}
 
 /** "hardly proves", "need not prove", "may suggest": no claim of proof. */
 function hedged(s: ReadSentence, i: number): boolean {

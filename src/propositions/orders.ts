@@ -26,8 +26,10 @@ export function readOrders(s: ReadSentence, previous?: ReadSentence): Order[] {
   // Only a sentence that reads that record ("It shows...", "This means...") takes it from there.
   const readsBack = ['it', 'this', 'that', 'these', 'those', 'they', 'here'].includes(s.words[0]?.text ?? '');
   const recordNamed = names(s) || (readsBack && names(previous));
+  // "said Professor X, who led the study": a speaker's part in the work orders no events.
+  const speakers = s.of('stance', 'insider');
   for (const h of s.of('order')) {
-    if (denialsBefore(s, h.first, 4) % 2 === 1) continue;
+    if (denialsBefore(s, h.first, 4) % 2 === 1 || speakers.some((p) => p.first <= h.first && h.last <= p.last)) continue;
     const order = orderAt(s, h, previous);
     if (order === undefined) continue;
     const clause = s.words[h.first]?.clause;
@@ -37,7 +39,7 @@ export function readOrders(s: ReadSentence, previous?: ReadSentence): Order[] {
     // "the lag" is by convention the Antarctic lag: a region elsewhere in the sentence is not its own.
     const region = order.implicit ? undefined : (order.region ?? s.of('regions').find((r) => s.words[r.first]?.clause === clause)?.key ?? sentenceRegion);
     // "CO2 merely followed the temperature": the follower cast as nothing more.
-    const dismissive = s.words.slice(Math.max(0, h.first - 2), h.first).some((w) => /^(?:merely|simply|just)$/u.test(w.text));
+    const dismissive = isDismissed(s, h.first);
     orders.push({ ...order, recordNamed, dismissive, amount: inClause.some((w) => DURATIONS.test(w)), ...(region === undefined ? {} : { region }) });
   }
   return orders;
@@ -87,4 +89,18 @@ function withRelation(key: string, a: string, b: string, s: ReadSentence, region
   const [first, then] = key === 'after' ? [b, a] : [a, b];
   const region = regionThing?.region;
   return { kind: 'order' as const, first, then, together: key === 'together', implicit: false, ...span, ...(region === undefined ? {} : { region }) };
+}
+
+/**
+ * "CO2 merely followed", "the CO2 only ever follows": a restricting word just before the order
+ * word casts the later thing as nothing more. "only" restricts the verb only when it stands right
+ * after the subject or before "ever"; "CO2 rose only after the warming" restricts a time.
+ */
+function isDismissed(s: ReadSentence, i: number): boolean {
+  const before = s.words.slice(Math.max(0, i - 2), i);
+  if (before.some((w) => /^(?:merely|simply|just)$/u.test(w.text))) return s.words[i - 3]?.text !== 'not' && before[0]?.text !== 'not';
+  const only = before.findIndex((w) => w.text === 'only');
+  if (only < 0) return false;
+  const at = i - before.length + only;
+  return s.words[at + 1]?.text === 'ever' || s.things.some((t) => t.last === at - 1 && t.kind !== 'pronoun');
 }

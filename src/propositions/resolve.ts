@@ -45,7 +45,14 @@ export function thingAfter(s: ReadSentence, i: number, window = 8): Thing | unde
   const clause = s.words[i]?.clause;
   const segment = s.words[i]?.segment;
   // A pronoun past a comma or a linking word ("..., and they are right") starts a clause of its own.
-  return s.things.find((t) => t.first > i && t.first - i <= window && s.words[t.first]?.clause === clause && (t.kind !== 'pronoun' || s.words[t.first]?.segment === segment));
+  // "the sunshine was sufficient in itself, and carbon dioxide simply kept time": ", and" with a new
+  // subject starts a clause of its own, too.
+  const ownClause = (t: Thing) => {
+    const seg = s.words[t.first]?.segment;
+    const opener = s.words.find((w) => w.segment === seg);
+    return seg !== segment && opener !== undefined && ['and', 'but', 'yet'].includes(opener.text) && s.words.indexOf(opener) >= t.first - 3;
+  };
+  return s.things.find((t) => t.first > i && t.first - i <= window && s.words[t.first]?.clause === clause && (t.kind !== 'pronoun' || s.words[t.first]?.segment === segment) && !(t.kind !== 'pronoun' && ownClause(t)));
 }
 
 /**

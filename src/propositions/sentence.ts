@@ -126,7 +126,7 @@ function isNominal(words: readonly Word[], i: number): boolean {
 }
 
 /** Words that deny what follows within their segment. */
-export const NEGATIONS = new Set(['not', 'no', 'never', 'nothing', 'none', 'neither', 'nor', 'without', 'hardly', 'barely', 'nobody', 'nowhere']);
+export const NEGATIONS = new Set(['not', 'no', 'zero', 'never', 'nothing', 'none', 'neither', 'nor', 'without', 'hardly', 'barely', 'nobody', 'nowhere']);
 /** Words that deny an effect by saying it fell short ("unable to end", "insufficient to explain"). */
 const LIMITS = new Set(['unable', 'insufficient', 'failed', 'fails', 'fail', 'negligible', 'irrelevant', 'unimportant', 'insignificant', 'immaterial']);
 /** Verbs that deny their object ("rules out CO2 as a driver"). */
@@ -142,10 +142,16 @@ const WITH_OFF = new Set(['strike', 'strikes', 'struck', 'cross', 'crosses', 'cr
 export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
   let count = 0;
   const clause = s.words[i]?.clause;
-  for (let k = i - 1; k >= 0 && k >= i - window; k -= 1) {
+  // "struck off the list of suspects for what melted...": a phrasal denial reaches past its own object.
+  // A phrasal denial counted past the window brings the words that govern it ("cannot be struck off").
+  let reach = i - window;
+  for (let k = i - 1; k >= 0 && k >= i - window - 7; k -= 1) {
     const w = s.words[k] as Word;
     // "cannot, by definition, have caused": a denial reaches across a parenthetical comma, not past "so" or "because".
     if (w.clause !== clause || LINKS.has(s.words[k + 1]?.text ?? '') && k + 1 < i) break;
+    const phrasal = DENIALS.has(w.text) && ['off', 'out'].includes(s.words[k + 1]?.text ?? '');
+    if (k < reach && !(phrasal && k >= i - window - 4)) continue;
+    if (phrasal) reach = Math.min(reach, k - 3);
     if (k === s.questionNot) continue;
     const after = s.words[k + 1]?.text ?? '';
     // "Orbital changes, not CO2, caused it": a "not" that sets one thing against another denies no verb.

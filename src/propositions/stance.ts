@@ -37,6 +37,8 @@ export interface StanceContext {
   marked?: boolean;
   /** The next sentence of the paragraph, read (it can answer a question or endorse a report). */
   next?: ReadSentence;
+  /** The paragraph's first sentence, read, when it is not this one (a block quote's label). */
+  first?: ReadSentence;
 }
 
 /** Words that join a question to the statement before it ("..., so how can you trust it?"). */
@@ -56,15 +58,15 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
   const endorsed = s.of('stance', 'endorse').length > 0 || (context.next?.of('stance', 'endorse').some((h) => h.first <= 4) ?? false);
   const make = (kind: StanceKind, flips = false): SentenceStance => ({ kind, endorsed: kind !== 'asserted' && endorsed, flips });
   if (context.marked === true) return make('marked');
-  if (context.blockKind === 'blockquote') return make('quoted');
+  if (context.blockKind === 'blockquote' && !isCallout(context.first)) return make('quoted');
   if (FACT_LABEL.test(s.text)) return make('asserted');
   if (LABEL.test(s.text) || isMythHeading(context.heading) || (context.blockKind === 'heading' && s.of('stance', 'myth').length > 0)) return make('myth');
   const quotedWords = s.words.filter((w) => w.quoted).length;
-  if (s.words.length > 0 && quotedWords / s.words.length >= 0.6) return make('quoted');
+  if (s.words.length > 0 && quotedWords / s.words.length >= 0.6) return make(insiderSpeaks(s) ? 'asserted' : 'quoted');
   if (s.question) return questionStance(s, context, make);
   if (isReported(s)) return make('reported');
   if (s.of('stance', 'myth').length > 0) return make('myth');
-  if (s.of('stance', 'superseded').length > 0) return make('superseded');
+  if (s.of('stance', 'superseded').length > 0 || isFormerOwnView(s)) return make('superseded');
   if (isHypothetical(s)) return make('hypothetical');
   return make('asserted');
 }
@@ -95,6 +97,24 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   return { ...make('asked'), ...premise };
 }
 
+/**
+ * "...," said Professor X, who led the study: a quotation given to one of the people whose work the
+ * draft presents (lexicon `stance.insider`, outside the quotation marks) is the draft's own voice,
+ * as a press release quotes its own scientists.
+ */
+function insiderSpeaks(s: ReadSentence): boolean {
+  return s.of('stance', 'insider').some((h) => s.words.slice(h.first, h.last + 1).every((w) => !w.quoted));
+}
+
+/**
+ * A block quote that opens with a short label of its own ("Did you know?", "Had you noticed?") is a panel
+ * in the writer's voice, not a quotation; a myth label or a report ("What critics say:") is not one.
+ */
+function isCallout(first: ReadSentence | undefined): boolean {
+  if (first === undefined || first.words.length === 0 || first.words.length > 5 || !/[?:]\s*[*_]*\s*$/u.test(first.text)) return false;
+  return !LABEL.test(first.text) && first.of('stance', 'myth').length === 0 && first.of('stance', 'report-verbs').length === 0 && first.words.every((w) => !w.quoted);
+}
+
 /** "Some claim that...", "Critics argue...", "You may have heard that...", "It is often said...". */
 function isReported(s: ReadSentence): boolean {
   // "they could hold more dissolved CO2": a verb that also takes up gas reports a view only before "that".
@@ -117,6 +137,14 @@ function isReported(s: ReadSentence): boolean {
   if (attributed) return true;
   const text = s.words.slice(0, 8).map((w) => w.text).join(' ');
   return /\b(?:it is|it's|is) (?:often|sometimes|commonly|frequently|widely) (?:said|claimed|argued|heard|repeated|asserted)\b|\baccording to (?:some|critics|sceptics|skeptics)\b/u.test(text);
+}
+
+/**
+ * "The lag argument, as I used to make it, went like this: ...", "We once argued that...": the
+ * writer's own former view, told as past ("used to" or "once" after "I" or "we").
+ */
+function isFormerOwnView(s: ReadSentence): boolean {
+  return s.words.some((w, i) => (w.text === 'i' || w.text === 'we') && ((s.words[i + 1]?.text === 'used' && s.words[i + 2]?.text === 'to') || (s.words[i + 1]?.text === 'once' && s.of('stance', 'report-verbs').some((v) => v.first === i + 2))));
 }
 
 function isHypothetical(s: ReadSentence): boolean {

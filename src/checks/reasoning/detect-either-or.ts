@@ -7,6 +7,7 @@
  *
  * A feedback, a loop or "both" in the sentence or its neighbours answers the framing, and passes.
  */
+import { polarityAt } from '../../propositions/causes.js';
 import type { Cause, LexHit, ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
@@ -16,14 +17,14 @@ const REVERSE = /\b(?:not|never|rather than|instead of)\s+(?:\w+\s+){0,2}(?:the 
 function detect({ index, read }: DetectInput): Cue[] {
   const here = read(index);
   if (here === undefined) return [];
-  const loop = [index - 1, index, index + 1].some((i) => {
+  const loopAt = (i: number) => {
     const r = read(i);
     // "it cannot be both" denies the loop; "both" alone grants it.
     const both = r?.s.words.findIndex((w) => w.text === 'both') ?? -1;
     const bothGranted = r !== undefined && both >= 0 && !r.s.words.slice(Math.max(0, both - 3), both).some((w) => ['not', 'never', 'no'].includes(w.text));
     return r !== undefined && (r.props.causes.some((c) => c.role === 'feedback' && c.polarity === 'asserted') || bothGranted);
-  });
-  if (loop) return [];
+  };
+  if (loopAt(index)) return [];
   const causes = here.props.causes.filter((c) => c.polarity !== 'open' && c.role !== 'start');
   const aboutCo2 = here.s.of('entities', 'co2').length > 0;
   // An unnamed agent denied beside an asserted "CO2 is an effect" is CO2 ("a consequence cannot be a cause").
@@ -31,27 +32,30 @@ function detect({ index, read }: DetectInput): Cue[] {
   const direction = (c: Cause) => {
     if (isCo2OnWarming(c) || (aboutCo2 && c.agent === undefined && c.polarity === 'denied')) return 'co2';
     // "temperature drives CO2"; "the driver of the glacial cycles was temperature rather than CO2".
+    // "Temperature is the cause of the swings and the gas merely reads the gauge": temperature named the
+    // cause of what is left unnamed, set against CO2 denied one.
     if (isWarmingOnCo2(c) || (isWarmingSide(c.agent) && c.patient !== undefined && c.patient !== c.agent)) return 'temperature';
+    if (c.agent === 'temperature' && c.patient === undefined && c.polarity === 'asserted' && c.role === 'cause') return 'temperature';
     return undefined;
   };
+  // "Either CO2 drives the climate or the climate drives CO2, and the cores settle it in favour of the
+  // second": a sentence that picks one side is the draft's pick, whatever a neighbour grants.
+  const picked = pickedSide(here.s, here.props.causes, direction);
+  if (picked !== undefined) return [picked];
+  if (loopAt(index - 1) || loopAt(index + 1)) return [];
+  const frame = framedInWords(here.s, read(index - 1)?.s);
+  if (frame !== undefined) return [frame];
   const answer = answersEitherOr(read(index - 1), here.s.text);
   if (answer) return [{ start: 0, end: here.s.text.length }];
-  // "Ask whether CO2 pushes temperature or temperature pushes CO2, and the ice answers: temperature";
   // "it was warming that moved CO2, not CO2 that moved temperature": both directions set against
-  // each other in one sentence, then one picked.
+  // each other in one sentence, one set aside.
   const all = here.props.causes.filter((c) => c.role !== 'start' && direction(c) !== undefined);
   for (const first of all) {
     const second = all.find((c) => c.start > first.start && direction(c) !== direction(first));
     if (second === undefined) continue;
-    const between = here.s.text.slice(first.end, second.start + 12);
-    const choice = /\bor\b/u.test(between);
     // "..., not CO2 that moved temperature": the second direction itself is what "not" sets aside.
     const against = /(?:^|[,;]\s*|\s)(?:not|rather than|instead of)\s+(?:the\s+)?$/u.test(here.s.text.slice(first.end, second.start));
     if (against && first.polarity === 'asserted') return [{ start: first.start, end: second.end }];
-    // The answer starts past the second direction's own object ("...or temperature pushes CO2, and ...").
-    const after = here.s.text.slice(second.end);
-    const boundary = /[,;:—–]|\s(?:and|but|so)\s/u.exec(after);
-    if (choice && boundary !== null && picksOne(here.s, second.end + boundary.index)) return [{ start: first.start, end: here.s.text.length }];
   }
   for (const asserted of causes.filter((c) => c.polarity === 'asserted' && direction(c) !== undefined)) {
     const denied = causes.find((c) => c.polarity === 'denied' && direction(c) !== undefined && direction(c) !== direction(asserted));
@@ -67,6 +71,22 @@ function detect({ index, read }: DetectInput): Cue[] {
   return [];
 }
 
+/**
+ * The either/or frame stated in words (lexicon `causes.either-or`: "which of the two", "the two
+ * roles exclude each other"), undenied, about a cause of CO2's: the sentence or the one before
+ * names a cause and CO2. "The two roles do not exclude each other" passes.
+ */
+function framedInWords(s: ReadSentence, previous: ReadSentence | undefined): Cue | undefined {
+  const frame = s.of('causes', 'either-or').find((h) => polarityAt(s, h.first) === 'asserted');
+  if (frame === undefined) return undefined;
+  const causal = (r: ReadSentence | undefined) => r !== undefined && r.of('causes').some((h) => h.key !== 'either-or');
+  const co2 = (r: ReadSentence | undefined) => r !== undefined && r.of('entities', 'co2').length > 0;
+  if (!(causal(s) || causal(previous)) || !(co2(s) || co2(previous))) return undefined;
+  const clause = s.words[frame.first]?.clause;
+  const end = s.words.filter((w) => w.clause === clause).at(-1)?.end ?? s.text.length;
+  return { start: s.words[frame.first]?.start ?? 0, end };
+}
+
 /** A question that sets the two directions against each other ("...or did temperature drive CO2?"), answered by picking one. */
 function answersEitherOr(question: ReturnType<DetectInput['read']>, text: string): boolean {
   if (question === undefined || !question.s.question || !question.s.words.some((w) => w.text === 'or')) return false;
@@ -75,6 +95,22 @@ function answersEitherOr(question: ReturnType<DetectInput['read']>, text: string
   // "The cores give a clear answer: temperature." picks one side, as "the latter" does.
   const short = text.split(/\s+/u).length <= 12 && /\b(?:temperature|warming|co2|co₂|carbon dioxide)\b/iu.test(text) && !/\b(?:both|each|feedback|loop|and)\b/iu.test(text);
   return short || /\b(?:the (?:first|second|former|latter)|the one|only one)\b/iu.test(text);
+}
+
+/**
+ * Both directions set up as a choice in one sentence, then one picked: "Ask whether CO2 pushes
+ * temperature or temperature pushes CO2, and the ice answers: temperature".
+ */
+function pickedSide(s: ReadSentence, causes: readonly Cause[], side: (c: Cause) => string | undefined): Cue | undefined {
+  const all = causes.filter((c) => c.role !== 'start' && side(c) !== undefined);
+  for (const first of all) {
+    const second = all.find((c) => c.start > first.start && side(c) !== side(first));
+    if (second === undefined || !/\bor\b/u.test(s.text.slice(first.end, second.start + 12))) continue;
+    // The answer starts past the second direction's own object ("...or temperature pushes CO2, and ...").
+    const boundary = /[,;:—–]|\s(?:and|but|so)\s/u.exec(s.text.slice(second.end));
+    if (boundary !== null && picksOne(s, second.end + boundary.index)) return { start: first.start, end: s.text.length };
+  }
+  return undefined;
 }
 
 /**

@@ -24,7 +24,9 @@ function detect({ index, read }: DetectInput): Cue[] {
   const kept = here.props.causes.some((c) => c.polarity === 'asserted' && (c.role === 'amplify' || c.role === 'feedback') && (c.agent === 'co2' || c.agent === undefined));
   if (kept) return [];
   const maxim = latecomerDenied(here.s);
-  const latecomer = maxim !== undefined && [here, read(index - 1), read(index - 2)].some((r) => r?.props.orders.some(isTemperatureFirst) ?? false) ? [maxim] : [];
+  // "A gas that turns up late can't be the one who lit it": the latecomer named is CO2 itself.
+  const context = maxim !== undefined && (maxim.co2 || [here, read(index - 1), read(index - 2)].some((r) => r?.props.orders.some(isTemperatureFirst) ?? false));
+  const latecomer = maxim !== undefined && context ? [{ start: maxim.start, end: maxim.end }] : [];
   if (!ordered) return latecomer;
   // "a consequence cannot also be a cause": an agent left unnamed in a sentence about CO2 is CO2.
   const aboutCo2 = here.s.of('entities', 'co2').length > 0;
@@ -42,9 +44,9 @@ const DENYING_MODAL = new Set(['cannot', "can't", 'couldn’t', "couldn't", 'can
 /**
  * A generic latecomer denied any part: a subject whose relative clause says it came late ("a gas
  * that turns up late", "something that arrives after the fact"), then "cannot be"/"can't have".
- * Returns the denial's span.
+ * Returns the denial's span, and whether the latecomer is CO2 itself ("a gas that turns up late").
  */
-function latecomerDenied(s: ReadSentence): Cue | undefined {
+function latecomerDenied(s: ReadSentence): (Cue & { co2: boolean }) | undefined {
   const words = s.words.map((w) => w.text);
   const denying = (i: number) => DENYING_MODAL.has(words[i] ?? '') || (['can', 'could'].includes(words[i] ?? '') && words[i + 1] === 'not');
   const modal = words.findIndex((_, i) => denying(i));
@@ -54,7 +56,8 @@ function latecomerDenied(s: ReadSentence): Cue | undefined {
   const late = s.of('order', 'after').some((h) => h.first > rel && h.first < modal) || words.slice(rel, modal).includes('late');
   const verb = words.slice(modal + 1, modal + 4).find((w) => ['be', 'have', 'been'].includes(w));
   if (!late || verb === undefined) return undefined;
-  return { start: s.words[modal]?.start ?? 0, end: s.words.at(-1)?.end ?? 0 };
+  const co2 = s.things.some((t) => t.kind === 'co2' && t.last === rel - 1);
+  return { start: s.words[modal]?.start ?? 0, end: s.words.at(-1)?.end ?? 0, co2 };
 }
 
 /** "played no part in starting it": a denial about the start only. */

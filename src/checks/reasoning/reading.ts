@@ -52,7 +52,8 @@ export function paragraphReader(paragraph: readonly string[], packs: LoadedPacks
     const s = sentenceAt(i);
     if (s === undefined) return undefined;
     const next = sentenceAt(i + 1);
-    const stance = stanceOf(s, { ...context, ...(next === undefined ? {} : { next }) });
+    const first = i > 0 ? sentenceAt(0) : undefined;
+    const stance = stanceOf(s, { ...context, ...(next === undefined ? {} : { next }), ...(first === undefined ? {} : { first }) });
     // The two sentences before the previous one, nearest first: the scene a paragraph has set.
     const earlier = [sentenceAt(i - 2), sentenceAt(i - 3)].filter((e): e is ReadSentence => e !== undefined);
     // The block before sets the scene only for the first sentences, all of which `earlier` sees.
