@@ -20,7 +20,7 @@ const flagged = (...sentences: string[]) => {
 describe('a change whose levels stand earlier in the paragraph', () => {
   it.each([
     // [sentences..., flagged text, correction]
-    [['In the Harrowgate exercise, CO2 goes from 185 ppm to 275 ppm across the thaw.', 'How much is that, and by what share?', 'Answer: it rose by 90 ppm, an increase of roughly 20 percent.'], 'roughly 20 percent', 'roughly 48.6 percent'],
+    [['In the Harrowgate exercise, CO2 goes from 185 ppm to 275 ppm across the thaw.', 'How much is that, and by what share?', 'Answer: it rose by 90 ppm, an increase of roughly 20 percent.'], 'roughly 20 percent', 'roughly 49 percent'],
     [['Pupils read CO2 climbing from 200 ppm to 280 ppm over the termination.', 'So it went up by 60 ppm.'], '60 ppm', '80 ppm'],
     [['The panel has the lake warming from 3 °C to 9 °C between the stadial and the Holocene.', 'That is a rise of 4 °C in summer water.'], '4 °C', '6 °C'],
     [['The 2023 annual mean at the Corran Head inlet was 419 ppm.', 'Before industry the air held about 280 ppm, so the 2023 value is some 100 ppm higher.'], 'some 100 ppm', 'some 139 ppm'],

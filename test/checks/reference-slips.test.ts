@@ -26,7 +26,7 @@ describe('a unit slip against a reference', () => {
     expect(unitSlip({ low: 2_580_000, high: 2_580_000, unit: 'yr BP' }, q!)?.correction).toBe('2.58 Ma');
   });
 
-  it('keeps the draft's number and swaps the prefix when millions were written for thousands', () => {
+  it('keeps the number of the draft and swaps the prefix when millions were written for thousands', () => {
     // The Younger Dryas began about 12,900 years ago (Rasmussen et al. 2006, JGR 111, D06102,
     // doi 10.1029/2005JD006079, from memory): "12.9 Ma" meant 12.9 ka.
     const [q] = parseQuantities('12.9 Ma');
