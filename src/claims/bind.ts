@@ -17,6 +17,7 @@ import { bindApposition } from './bind-apposition.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
 import { withoutOthers } from './bind-others.js';
+import { addEarlierTime, framesYield } from './bind-time.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
@@ -152,6 +153,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (!isSegment(q) || next === undefined) return;
     for (const [id, spans] of views[i] as TermHits) if (!next.has(id)) next.set(id, spans);
   });
+  // "Before about a million years ago, the cycles came every 41,000 years": a clause set at an earlier time.
+  addEarlierTime(sentence, quantities, views, hits, packs);
   const breaks = clauseBreaks(sentence);
   // Per quantity: the value it binds, AMBIGUOUS, or null when its list left it unbound.
   const decided = new Map<number, string | null>();
@@ -194,5 +197,6 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (found === AMBIGUOUS) ambiguous.push(quantityIndex);
     else if (found !== null) bindings.push({ quantityIndex, referenceId: found });
   });
-  return { bindings, ambiguous };
+  // "Over the past 800,000 years, the cycles came every 100,000 years": the frame sets the scene.
+  return { bindings: framesYield(sentence, quantities, bindings), ambiguous };
 }
