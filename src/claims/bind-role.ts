@@ -21,7 +21,9 @@ export interface EndpointPair {
   join: number;
 }
 
-const CHANGE_NOUNS = 'rise|rises|increase|increases|drop|drops|fall|falls|decline|decrease|swing|swings|amplitude|change|jump|step|gain|growth|difference';
+export const CHANGE_NOUNS = 'rise|rises|increase|increases|drop|drops|fall|falls|decline|decrease|swing|swings|amplitude|change|jump|step|gain|growth|difference';
+/** A noun of change anywhere in a phrase: "the deglacial rise", "its increase". */
+export const CHANGE_NOUN = new RegExp(String.raw`(?:^|[^\p{L}])(?:${CHANGE_NOUNS})(?![\p{L}])`, 'iu');
 const CHANGE_VERBS = 'rose|rise|rises|risen|rising|fell|falls|fallen|falling|dropped|dropping|climbed|climbing|jumped|increased|decreased|declined|grew|gained|gaining|gains|added|adding|adds|up';
 const CHANGE_VERB = new RegExp(String.raw`^(?:${CHANGE_VERBS}|sank|sunk|peaked|topped|bottomed)$`, 'iu');
 

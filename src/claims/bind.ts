@@ -17,6 +17,7 @@ import { bindApposition } from './bind-apposition.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
 import { withoutOthers } from './bind-others.js';
+import { partsOfWholes, wholesApart, withoutWholes } from './bind-part.js';
 import { addEarlierTime, framesYield } from './bind-time.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
@@ -153,6 +154,9 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (!isSegment(q) || next === undefined) return;
     for (const [id, spans] of views[i] as TermHits) if (!next.has(id)) next.set(id, spans);
   });
+  // "about 20 ppm of the deglacial rise": the whole's words are not the part's.
+  const parts = partsOfWholes(sentence, quantities);
+  withoutWholes(parts, views);
   // "Before about a million years ago, the cycles came every 41,000 years": a clause set at an earlier time.
   addEarlierTime(sentence, quantities, views, hits, packs);
   const breaks = clauseBreaks(sentence);
@@ -198,5 +202,5 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     else if (found !== null) bindings.push({ quantityIndex, referenceId: found });
   });
   // "Over the past 800,000 years, the cycles came every 100,000 years": the frame sets the scene.
-  return { bindings: framesYield(sentence, quantities, bindings), ambiguous };
+  return { bindings: wholesApart(parts, framesYield(sentence, quantities, bindings)), ambiguous };
 }
