@@ -31,6 +31,8 @@ export type { TermHits } from './bind-view.js';
 const AMBIGUOUS = 'ambiguous';
 /** Words that make a length a stretch of the ice ("the lowest 200 metres", "its top 50 m"). */
 const SEGMENT = /\b(?:the|its|their|a|an)\s+(?:very\s+)?(?:lowest|bottom|bottommost|deepest|top|topmost|upper|uppermost|lower|last|final|first)\s+(?:(?:few|some|roughly|about|around)\s+)?$/iu;
+/** A single unit, the base of a rate stated beside it ("one metre ... stores 750 years", "each metre holds"). */
+const ONE_UNIT = /^(?:one|a|an|each|every|per|a\s+single)\s+\p{L}+$/iu;
 const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 
 /**
@@ -175,6 +177,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (decided.has(i)) return;
     // "the lowest 200 metres hold 150,000 years": a stretch of the core, not its depth.
     if (isSegment(q)) return;
+    // "one metre near the bottom stores some 750 years": one unit of a rate, not a measure of anything.
+    if (ONE_UNIT.test(q.text)) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const vetoes = vetoView(sentence, view, q, role);
