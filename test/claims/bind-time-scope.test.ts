@@ -100,3 +100,16 @@ describe('a subject the sentence denies', () => {
     expect(at('The end of the last ice age came about 30,000 years ago, not later.', 'about 30,000 years ago')).toBe('termination-1-end');
   });
 });
+
+describe('a ceiling told with a participle', () => {
+  // The highest natural CO2 of the last 800,000 years is about 300 ppm (Lüthi et al. 2008, doi:10.1038/nature06949).
+  it('reads the ceiling, not the 1750 level', () => {
+    expect(at('Before industry, natural carbon dioxide swung widely, never topping 330 ppm.', '330 ppm')).toBe('co2-highest-preindustrial-800kyr');
+    expect(at('Ice-core CO2 moved with the cycles, never exceeding about 300 ppm.', 'about 300 ppm')).toBe('co2-highest-preindustrial-800kyr');
+  });
+
+  it('still reads the 1750 level', () => {
+    // Pre-industrial CO2 about 278 ppm in 1750 (IPCC AR6 WGI, ch. 2, doi:10.1017/9781009157896.004).
+    expect(at('Before industry, carbon dioxide stood near 300 ppm.', '300 ppm')).toBe('co2-preindustrial-1750');
+  });
+});
