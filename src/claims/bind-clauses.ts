@@ -38,6 +38,16 @@ interface Token {
 export function sharedSubjects(sentence: string, quantities: Quantity[]): SharedSubject[] {
   const gate = GATE.exec(sentence);
   if (gate === null || !quantities.some((q) => q.start > gate.index)) return [];
+  // "There's a newer one too: the team reached bedrock at 2,800 m and say ...": past a colon or a
+  // semicolon before the coordinator, the clause has its own subject.
+  const last = (quantities.at(-1) as Quantity).start;
+  const cut = Math.max(sentence.lastIndexOf(':', last), sentence.lastIndexOf(';', last)) + 1;
+  const join = cut > 0 ? GATE.exec(sentence.slice(cut, last)) : null;
+  if (join !== null && /\p{L}/u.test(sentence.slice(cut, cut + join.index))) {
+    const shift = (span: [number, number]): [number, number] => [span[0] + cut, span[1] + cut];
+    const tail = quantities.filter((q) => q.start >= cut).map((q) => ({ ...q, start: q.start - cut, end: q.end - cut }));
+    return sharedSubjects(sentence.slice(cut), tail).map((c) => ({ subject: shift(c.subject), before: shift(c.before), clause: shift(c.clause) }));
+  }
   const tokens = tokensOf(sentence);
   const found = subjectOf(sentence, tokens);
   if (found === undefined) return [];

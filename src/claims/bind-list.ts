@@ -7,7 +7,8 @@
  *
  * With as many subjects as numbers, ordered by where each subject's own words stand, the n-th number
  * binds the n-th subject; with a different count, or subjects that cannot be told apart, no number
- * of the list binds (each goes to the checklist as ambiguous). A subject whose own words all stand
+ * of the list binds (each goes to the checklist as ambiguous). One subject with figures that cannot
+ * all be one value ("the tilt ... rhythms near 100,000, 41,000 and 23,000 years") binds none either. A subject whose own words all stand
  * before an earlier number of the sentence belongs to that number's clause, not to the list.
  */
 import type { ReferenceValue } from '../rulepack/types.js';
@@ -51,12 +52,15 @@ export function bindList(
   if (dimension === undefined || dimensions.size > 1) return undefined;
   const view = mergeViews(list.map((i) => views[i] ?? new Map()));
   const subjects = references.filter((r) => r.dimensions.includes(dimension) && satisfies(r, view) && items.some((it) => roleFits(r.binding.role, it.role)));
-  if (subjects.length <= 1) return undefined;
+  if (subjects.length === 0) return undefined;
+  // "rhythms near 100,000, 41,000 and 23,000 years" with one subject named: several figures that
+  // cannot all be one value are the list of things the sentence goes on to name, not that value.
+  const measured = items.filter((it) => it.q.dimension !== 'number');
+  if (subjects.length === 1) return measured.length >= 2 && pairwiseApart(measured.map((it) => it.q)) ? { bindings: [], ambiguous: measured.map((it) => it.i) } : undefined;
   const previous = quantities[(list[0] as number) - 1];
   const ordered = orderByOwnWords(subjects, view, previous === undefined ? 0 : previous.end);
   if (ordered !== undefined && ordered.length <= 1) return undefined;
-  const measured = items.filter((it) => it.q.dimension !== 'number').map((it) => it.i);
-  if (ordered === undefined || ordered.length !== items.length) return { bindings: [], ambiguous: measured };
+  if (ordered === undefined || ordered.length !== items.length) return { bindings: [], ambiguous: measured.map((it) => it.i) };
   const bindings: Binding[] = [];
   items.forEach((it, n) => {
     const r = ordered[n] as ReferenceValue;
@@ -80,6 +84,11 @@ function orderByOwnWords(subjects: ReferenceValue[], view: TermHits, after: numb
   const listed = placed.filter((p) => p.inClause || !Number.isFinite(p.at));
   if (listed.some((p) => !Number.isFinite(p.at)) || new Set(listed.map((p) => p.at)).size !== listed.length) return undefined;
   return listed.sort((a, b) => a.at - b.at).map((p) => p.r);
+}
+
+/** No two intervals meet: the figures are of different things (the ratio of neighbours is well over the hedges). */
+function pairwiseApart(qs: Quantity[]): boolean {
+  return qs.every((a, i) => qs.every((b, j) => j <= i || a.high < b.low || b.high < a.low));
 }
 
 function mergeViews(views: TermHits[]): TermHits {

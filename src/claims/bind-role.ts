@@ -21,8 +21,10 @@ export interface EndpointPair {
   join: number;
 }
 
-const CHANGE_NOUNS = 'rise|rises|increase|increases|drop|drops|fall|falls|decline|decrease|swing|swings|amplitude|change|jump|step|gain|growth|difference';
-const CHANGE_VERBS = 'rose|rise|rises|risen|rising|fell|falls|fallen|falling|dropped|dropping|climbed|climbing|jumped|increased|decreased|declined|grew|gained|up';
+export const CHANGE_NOUNS = 'rise|rises|increase|increases|drop|drops|fall|falls|decline|decrease|swing|swings|amplitude|change|jump|step|gain|growth|difference';
+/** A noun of change anywhere in a phrase: "the deglacial rise", "its increase". */
+export const CHANGE_NOUN = new RegExp(String.raw`(?:^|[^\p{L}])(?:${CHANGE_NOUNS})(?![\p{L}])`, 'iu');
+const CHANGE_VERBS = 'rose|rise|rises|risen|rising|fell|falls|fallen|falling|dropped|dropping|climbed|climbing|jumped|increased|decreased|declined|grew|gained|gaining|gains|added|adding|adds|up';
 const CHANGE_VERB = new RegExp(String.raw`^(?:${CHANGE_VERBS}|sank|sunk|peaked|topped|bottomed)$`, 'iu');
 
 /** Whether a word is a verb of change ("fell", "climbed"), which may carry a number to the level it reaches. */
@@ -34,6 +36,8 @@ export function isChangeVerb(word: string): boolean {
 const CHANGE_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:by|(?:${CHANGE_NOUNS})\s+(?:of|was|is|were|came to|amounted to)|${CHANGE_VERBS})\s*$`, 'iu');
 /** Change words just after the quantity: "an 80 ppm rise", "90 ppm higher", "130 metres above the lake". */
 const CHANGE_AFTER = /^[\s-]*(?:rise|increase|drop|fall|decline|swing|jump|step|gain|higher|lower|more|less|greater|smaller|above|below|beneath|short of|deeper|shallower)(?![\p{L}])/iu;
+/** An amount per stretch of time is a change, however it is worded: "2 ppm of CO2 every year", "0.5 ppm a year". */
+const PER_TIME_AFTER = /^\s*(?:of\s+[\p{L}\p{N}₂]+\s+)?(?:every|each|a|per|an)\s+(?:single\s+)?(?:year|decade|century|millennium)(?![\p{L}])/iu;
 /** A place measured from a datum is a level: "3,623 metres below the surface", "2,800 m above sea level". */
 const DATUM_AFTER = /^\s*(?:below|beneath|under|above)\s+(?:the\s+)?(?:ice\s+|snow\s+)?(?:surface|sea\s+level)(?![\p{L}])/iu;
 /** Level words just before the quantity: "fell to", "stood at", "reached", "from". */
@@ -75,7 +79,7 @@ export function quantityRoles(sentence: string, quantities: Quantity[]): ReadRol
     if (CHANGE_BEFORE.test(before)) return EITHER_HEDGE.test(q.text) ? 'unknown' : 'change';
     const after = sentence.slice(q.end, q.end + 30);
     if (endpoints.has(i) || LEVEL_BEFORE.test(before) || DATUM_AFTER.test(after)) return 'level';
-    if (CHANGE_AFTER.test(after)) return 'change';
+    if (CHANGE_AFTER.test(after) || PER_TIME_AFTER.test(after)) return 'change';
     return 'unknown';
   });
 }

@@ -72,7 +72,7 @@ function ownerGroups(sentence: string, quantities: Quantity[], lists: number[][]
   const owns = (i: number): boolean => {
     const q = quantities[i] as Quantity;
     if (q.dimension === 'number' || q.statedUnit === 'CE') return false;
-    return !(i === 0 && (q.dimension === 'duration' || q.dimension === 'age') && OPENING_TIME.test(sentence.slice(0, q.start)));
+    return !opensAsTimeFrame(sentence, quantities, i);
   };
   const groups: number[][] = [];
   quantities.forEach((q, i) => {
@@ -88,6 +88,12 @@ function ownerGroups(sentence: string, quantities: Quantity[], lists: number[][]
     else groups.push([i]);
   });
   return groups;
+}
+
+/** Whether quantity `i` is a time phrase that opens the sentence: "Over the last 800,000 years, ...". */
+export function opensAsTimeFrame(sentence: string, quantities: Quantity[], i: number): boolean {
+  const q = quantities[i];
+  return i === 0 && q !== undefined && (q.dimension === 'duration' || q.dimension === 'age') && OPENING_TIME.test(sentence.slice(0, q.start));
 }
 
 /** The owner quantities nearest a term span that stands after the first owner (all of them on a tie). */

@@ -17,6 +17,8 @@ import { bindApposition } from './bind-apposition.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
 import { withoutOthers } from './bind-others.js';
+import { partsOfWholes, wholesApart, withoutWholes } from './bind-part.js';
+import { addEarlierTime, framesYield } from './bind-time.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
@@ -29,6 +31,8 @@ export type { TermHits } from './bind-view.js';
 const AMBIGUOUS = 'ambiguous';
 /** Words that make a length a stretch of the ice ("the lowest 200 metres", "its top 50 m"). */
 const SEGMENT = /\b(?:the|its|their|a|an)\s+(?:very\s+)?(?:lowest|bottom|bottommost|deepest|top|topmost|upper|uppermost|lower|last|final|first)\s+(?:(?:few|some|roughly|about|around)\s+)?$/iu;
+/** A single unit, the base of a rate stated beside it ("one metre ... stores 750 years", "each metre holds"). */
+const ONE_UNIT = /^(?:one|a|an|each|every|per|a\s+single)\s+\p{L}+$/iu;
 const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 
 /**
@@ -152,6 +156,11 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (!isSegment(q) || next === undefined) return;
     for (const [id, spans] of views[i] as TermHits) if (!next.has(id)) next.set(id, spans);
   });
+  // "about 20 ppm of the deglacial rise": the whole's words are not the part's.
+  const parts = partsOfWholes(sentence, quantities);
+  withoutWholes(parts, views);
+  // "Before about a million years ago, the cycles came every 41,000 years": a clause set at an earlier time.
+  addEarlierTime(sentence, quantities, views, hits, packs);
   const breaks = clauseBreaks(sentence);
   // Per quantity: the value it binds, AMBIGUOUS, or null when its list left it unbound.
   const decided = new Map<number, string | null>();
@@ -170,6 +179,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (decided.has(i)) return;
     // "the lowest 200 metres hold 150,000 years": a stretch of the core, not its depth.
     if (isSegment(q)) return;
+    // "one metre near the bottom stores some 750 years": one unit of a rate, not a measure of anything.
+    if (ONE_UNIT.test(q.text)) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const vetoes = vetoView(sentence, view, q, role);
@@ -195,5 +206,6 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (found === AMBIGUOUS) ambiguous.push(quantityIndex);
     else if (found !== null) bindings.push({ quantityIndex, referenceId: found });
   });
-  return { bindings, ambiguous };
+  // "Over the past 800,000 years, the cycles came every 100,000 years": the frame sets the scene.
+  return { bindings: wholesApart(parts, framesYield(sentence, quantities, bindings)), ambiguous };
 }

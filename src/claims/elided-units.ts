@@ -10,6 +10,7 @@
  * written after the last number), or, when it closes a clause joined by "and", "but", "while",
  * "whereas" or a comma to the clause before, the unit of the nearest measured quantity before it.
  * The number is then read again with that unit, so its interval follows the same interval table.
+ * A bare year ("et al. 2021", "in Jan 2025") takes no unit.
  */
 import { parseQuantities } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
@@ -50,10 +51,17 @@ export function restoreElidedUnits(sentence: string, quantities: Quantity[]): Qu
   return restored.sort((a, b) => a.start - b.start);
 }
 
+/**
+ * Four digits with no thousands separator, 1500 to 2100: a year ("Seltzer et al. 2021", "in Jan 2025"),
+ * which dates a statement and takes no unit from a neighbour (common practice: years are written
+ * without a separator, amounts of four digits and more with one).
+ */
+const YEAR_LIKE = /^(?:1[5-9]\d\d|20\d\d|2100)$/u;
+
 function bareNumbers(sentence: string, quantities: Quantity[]): Bare[] {
   const found: Bare[] = [];
   quantities.forEach((q, index) => {
-    if (q.dimension === 'number') found.push({ text: q.text, start: q.start, end: q.end, index });
+    if (q.dimension === 'number' && !YEAR_LIKE.test(q.text.trim())) found.push({ text: q.text, start: q.start, end: q.end, index });
   });
   for (const m of sentence.matchAll(WORD_NUMBER)) {
     const [start, end] = [m.index, m.index + m[0].length];

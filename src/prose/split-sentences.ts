@@ -49,8 +49,9 @@ function endsSentence(text: string, dotAt: number, marks: string, space: string,
   if (next >= text.length) return true;
   if (marks !== '.') return /^[\p{Lu}\p{N}"'“‘([*]/u.test(text.slice(next, next + 1));
   const word = /([\p{L}.]+)$/u.exec(text.slice(Math.max(0, dotAt - 12), dotAt))?.[1]?.toLowerCase() ?? '';
-  // "about 9 °C." and "by 5 K." end with a unit symbol, not with "c." (circa) or an initial.
-  if (/(?:°|\d\s?)\p{L}$/u.test(text.slice(Math.max(0, dotAt - 3), dotAt))) return /^[\p{Lu}\p{N}"'“‘([]/u.test(text.slice(next, next + 1));
+  // "about 9 °C.", "by 5 K." and "about 420 kyr." end with a unit symbol, not with "c." (circa), an
+  // initial or an abbreviation: a unit symbol after a number takes no full stop of its own (NIST SP 811, 7.2).
+  if (/(?:°|\d\s?)\p{L}{1,4}$/u.test(text.slice(Math.max(0, dotAt - 6), dotAt))) return /^[\p{Lu}\p{N}"'“‘([]/u.test(text.slice(next, next + 1));
   if (ABBREVIATIONS.has(word)) return false;
   if (/^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1))) return false; // an initial: "J. R. Petit"
   return /^[\p{Lu}\p{N}"'“‘([]/u.test(text.slice(next, next + 1));

@@ -46,6 +46,8 @@ export const CASES: Case[] = [
   ['oldest-continuous-ice-core-record', ['The oldest continuous ice-core record so far covers about 800,000 years.', 'about 800,000 years', Y, 780_000, 820_000], ['The oldest continuous ice-core record covers 3 million years.', '3 million years', Y, 2_500_000, 3_500_000]],
   // Beyond EPICA - Oldest Ice consortium 2025 (verified page)
   ['beyond-epica-drilled-depth', ['Beyond EPICA hit bedrock at about 2,800 metres.', 'about 2,800 metres', L, 2750, 2850], ['Beyond EPICA hit bedrock at 3,900 metres.', '3,900 metres', L, 3850, 3950]],
+  // IPEV press release on Beyond EPICA, 24 March 2025 (read): ice at least 1.2 million years old, preliminary
+  ['beyond-epica-ice-age', ['The Beyond EPICA ice is at least 1.2 million years old.', 'at least 1.2 million years', Y, 1_200_000, 2_400_000], ['The Beyond EPICA ice is about 300,000 years old.', 'about 300,000 years', Y, 250_000, 350_000]],
   // Yan et al. 2019 (doi 10.1038/s41586-019-1692-3)
   ['allan-hills-oldest-ice', ['Ice from the Allan Hills is up to 2.7 million years old.', '2.7 million years', A, 2_650_000, 2_750_000], ['Ice from the Allan Hills is 10 million years old.', '10 million years', A, 9_500_000, 10_500_000]],
   // Caillon et al. 2003 (doi 10.1126/science.1078758)

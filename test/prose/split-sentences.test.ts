@@ -42,4 +42,13 @@ describe('splitSentences', () => {
       }),
     );
   });
+  // A unit symbol after a number takes no full stop of its own (NIST SP 811, 7.2): a full stop after
+  // "420 kyr" or "3,270 m" ends the sentence, while "c." (circa) and "et al." still do not.
+  it('ends a sentence at a full stop after a unit symbol that follows a number', () => {
+    const texts = (text: string) => splitSentences(text, 0).map((s) => s.text);
+    expect(texts('Dome Fuji reaches back about 720 kyr. In 2025 a new core reached bedrock.')).toEqual(['Dome Fuji reaches back about 720 kyr.', 'In 2025 a new core reached bedrock.']);
+    expect(texts('The drill stopped at 3,270 m. Below it lies older ice.')).toEqual(['The drill stopped at 3,270 m.', 'Below it lies older ice.']);
+    expect(texts('The span is 800 ka. EPICA drilled it.')).toEqual(['The span is 800 ka.', 'EPICA drilled it.']);
+    expect(texts('It dates from c. 800 years ago. Jouzel et al. Science showed it.')).toEqual(['It dates from c. 800 years ago.', 'Jouzel et al. Science showed it.']);
+  });
 });

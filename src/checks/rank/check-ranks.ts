@@ -50,6 +50,9 @@ export function checkRanks(sentence: string, packs: LoadedPacks): FlagDraft[] {
   return flags;
 }
 
+/** A superlative that picks out a part of one thing: "the deepest ice at Dome C", "its oldest layers". */
+const PART_OF_ONE = /^\s+(?:ice(?![\s-]+cores?(?![\p{L}]))|layers?|sections?|parts?|samples?|metres|meters|stretch|bits?|portion)(?![\p{L}])/iu;
+
 function superlativeFlag(sentence: string, word: FoundRankWord, named: Named[], hits: Map<string, [number, number][]>, families: MeasureFamily[], packs: LoadedPacks): FlagDraft | undefined {
   const clauseStart = lastClauseEnd(sentence.slice(0, word.start));
   const before = named.filter((n) => n.end <= word.start && n.start >= clauseStart).at(-1);
@@ -65,6 +68,8 @@ function superlativeFlag(sentence: string, word: FoundRankWord, named: Named[], 
     subject = after;
     phraseEnd = after.start;
   } else return undefined;
+  // "the deepest ice at Dome C", "the deepest layers": a place within one core, not a rank among cores.
+  if (PART_OF_ONE.test(sentence.slice(word.end))) return undefined;
   // "the longest Greenland record", "the deepest core in Japan": a rank within a group the values do not mark.
   const phrase = sentence.slice(word.end, phraseEnd);
   if (/(?<![\p{L}])\p{Lu}/u.test(phrase.replace(/[\p{L}\p{N}-]+/gu, (w, at: number) => (named.some((n) => n.start <= word.end + at && word.end + at < n.end) ? 'x' : w)))) return undefined;
