@@ -168,9 +168,14 @@ export function isSpanOfPair(text: string, q: Quantity, pairEnd: number): boolea
   return SPAN_OF_PAIR.test(head(text, q)) || PAIR_GAP.test(gap);
 }
 
-/** True when duration `q` states how long a change took ("in 8,000 years", "over a century"). */
+/** A demonstrative or article between a span word and its figure: "over those 8,000 years". */
+const SPAN_DETERMINER = /(?<=[\s\u00A0])(?:the|those|these|that|this|its|their|some|another|a|an)[\s\u00A0]+$/iu;
+
+/** True when duration `q` states how long a change took ("in 8,000 years", "over those 8,000 years"). */
 export function isSpanOfChange(text: string, q: Quantity): boolean {
-  return !NOT_A_SPAN.test(head(text, q)) && SPAN_OF_CHANGE.test(head(text, q));
+  const before = head(text, q);
+  if (NOT_A_SPAN.test(before)) return false;
+  return SPAN_OF_CHANGE.test(before) || SPAN_OF_CHANGE.test(before.replace(SPAN_DETERMINER, ''));
 }
 
 /** True when ratio `q` compares two values ("doubled", "three times higher", "2.5-fold rise"). */

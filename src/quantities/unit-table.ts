@@ -36,8 +36,8 @@ const AGO = words('(?:ago|before present)');
 const DEG_C = [symbol('° C'), 'ºC', '℃', words('degrees? (?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C')];
 const DEG_F = [symbol('° F'), 'ºF', '℉', words('degrees? fahrenheit'), symbol('degrees? F')];
 const KELVIN = ['K', words('kelvins?')];
-const PPM = ['ppmv?', words('parts per million(?: by volume)?')];
-const PPB = ['ppbv?', words('parts per billion(?: by volume)?')];
+const PPM = ['ppmv?', words('parts? per million(?: by volume)?')];
+const PPB = ['ppbv?', words('parts? per billion(?: by volume)?')];
 
 const BASE_UNITS: UnitDef[] = [
   u('yr', 'duration', 1, 'years', [YEAR_WORD, ANNUM]),
