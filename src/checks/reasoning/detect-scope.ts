@@ -155,7 +155,10 @@ function detectLag({ index, read }: DetectInput): Cue[] {
  *   "Because Antarctic ice warms a few centuries ahead of CO2, the same sequence holds for the planet."
  *                                                              ^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^^ flagged
  */
-function detectCarriedOrder({ index, read, sentence, words }: DetectInput): Cue[] {
+function detectCarriedOrder(input: DetectInput): Cue[] {
+  // The sentence's tokens (compromise roots) are read only past the cheap guards: this detector has
+  // no prefilter keys, so it sees every sentence.
+  const { index, read, words } = input;
   const here = read(index);
   if (here === undefined) return [];
   const s = here.s;
@@ -176,6 +179,7 @@ function detectCarriedOrder({ index, read, sentence, words }: DetectInput): Cue[
   const carried = ordersOf(here).find((o) => o.start > first && globalSegments.has(segmentOf(o.start)) && localHere.length > 0);
   if (carried !== undefined) return [{ start: carried.start, end: carried.end }];
   // "that's the order the whole planet went through", "the same sequence holds for the planet".
+  const sentence = input.sentence;
   const refs = findPhrases(sentence, words('carried-order'));
   // "For the planet the order was the reverse": an order set against the one before carries nothing over.
   const turned = findPhrases(sentence, words('reversed'));
@@ -192,4 +196,10 @@ function detectCarriedOrder({ index, read, sentence, words }: DetectInput): Cue[
 export const regionalRecordAsGlobal: DetectorEntry = { detect: detectRegional, keys: [] };
 
 /** `scope.antarctic-lag-as-global` for the registry. */
-export const antarcticLagAsGlobal: DetectorEntry = { detect: (input) => (detectLag(input).length > 0 ? detectLag(input) : detectCarriedOrder(input)), keys: [] };
+export const antarcticLagAsGlobal: DetectorEntry = {
+  detect: (input) => {
+    const lag = detectLag(input);
+    return lag.length > 0 ? lag : detectCarriedOrder(input);
+  },
+  keys: [],
+};
