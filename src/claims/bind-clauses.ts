@@ -48,6 +48,7 @@ export function sharedSubjects(sentence: string, quantities: Quantity[]): Shared
     const tail = quantities.filter((q) => q.start >= cut).map((q) => ({ ...q, start: q.start - cut, end: q.end - cut }));
     return sharedSubjects(sentence.slice(cut), tail).map((c) => ({ subject: shift(c.subject), before: shift(c.before), clause: shift(c.clause) }));
   }
+  if (!mayJoinPredicates(sentence)) return [];
   const tokens = tokensOf(sentence);
   const found = subjectOf(sentence, tokens);
   if (found === undefined) return [];
@@ -115,6 +116,23 @@ function subjectOf(sentence: string, tokens: Token[]): { first: number; subjectS
 
 function isVerb(t: Token | undefined): boolean {
   return t !== undefined && VERB_TAGS.some((tag) => t.tags.includes(tag));
+}
+
+/** Words that compromise never tags as a verb: after "and" or "but" they start no predicate. */
+const NEVER_VERB = new Set(['the', 'a', 'an', 'its', 'their', 'this', 'these', 'those', 'his', 'her', 'our', 'my', 'your']);
+const JOIN_NEXT = /(?<![\p{L}])(?:and|but)[\s\p{P}]+([\p{L}\p{N}]+)/giu;
+
+/**
+ * False when every "and" or "but" is followed by a figure or a determiner ("between 180 and 280
+ * ppm", "and the ice"): no coordinated predicate can start there, so compromise need not read the
+ * sentence for one. Most sentences with a range stop here.
+ */
+function mayJoinPredicates(sentence: string): boolean {
+  for (const m of sentence.matchAll(JOIN_NEXT)) {
+    const next = (m[1] ?? '').toLowerCase();
+    if (!/^\p{N}/u.test(next) && !NEVER_VERB.has(next)) return true;
+  }
+  return false;
 }
 
 function tokensOf(sentence: string): Token[] {
