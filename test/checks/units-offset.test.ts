@@ -52,7 +52,7 @@ describe('bare degrees read in the scale the sentence names', () => {
   });
 });
 
-// Numbers spoken aloud (common practice in scripts and transcripts): "two-eighty" is 280,
+// Numbers spoken aloud (common practice in scripts and spoken pieces): "two-eighty" is 280,
 // "three point one" is 3.1, and "up to" after "from" closes a from-to pair. 275 − 185 = 90.
 describe('spoken numbers', () => {
   it.each([
