@@ -132,7 +132,9 @@ function readQuantities(text: string): Quantity[] {
     const { def } = reading;
     const a = first(g).atom;
     const numberStart = Math.min(a.start, reading.prefixStart ?? a.start);
-    const ownEnd = g.role === 'from' && !first(g).ownUnit ? a.end : (last(g).unit?.end ?? last(g).atom.end);
+    // A unit borrowed from a partner written before the number ("from −30 °C–8") ends before it:
+    // the quantity then ends with its own number.
+    const ownEnd = g.role === 'from' && !first(g).ownUnit ? a.end : Math.max(last(g).unit?.end ?? 0, last(g).atom.end);
     const hedge =
       hedgeBefore(text, numberStart, def.dimension) ??
       (numberStart < a.start ? hedgeBefore(text, a.start, def.dimension) : undefined) ??

@@ -88,4 +88,13 @@ describe('regressions found by the property tests', () => {
   it('does not read "8e51750" as 8 × 10^51750 (Infinity)', () => {
     for (const q of parseQuantities('8e51750')) expect(Number.isFinite(q.low) && Number.isFinite(q.high)).toBe(true);
   });
+
+  it('ends a number that borrows the unit written before it with the number itself ("from −30 °C–8", seed 725866795)', () => {
+    const text = 'from −30 °C–8e5';
+    for (const q of parseQuantities(text)) {
+      expect(q.start).toBeLessThan(q.end);
+      expect(text.slice(q.start, q.end)).toBe(q.text);
+    }
+    expect(parseQuantities(text).map((q) => q.text)).toEqual(['−30 °C', '8e5']);
+  });
 });
