@@ -30,7 +30,10 @@ for (const name of names) {
   console.log(summarizeScore(score));
   for (const problem of score.keyProblems) console.log(`  key: ${problem}`);
   if (!details || blind) continue;
-  for (const m of score.misses) console.log(`  missed ${m.kind} ${m.file}:${m.line} "${m.text}"`);
+  for (const m of score.misses) {
+    const as = score.missedAs.get(m);
+    console.log(`  missed ${m.kind} ${m.file}:${m.line} "${m.text}"${as === undefined ? '' : ` (flagged only as ${as.join(', ')})`}`);
+  }
   for (const f of score.falses) {
     console.log(`  false ${f.line.file}:${f.line.line} ${f.flags.map((x) => x.ruleId).join(', ')} "${f.line.text}"`);
   }

@@ -29,6 +29,8 @@ export interface SetScore {
   /** Errors caught only by a flag of another rule group (not counted in recall). */
   otherKind: number;
   misses: KeyedLine[];
+  /** For a missed error that a flag of another rule group covers: those flags' rule ids. */
+  missedAs: Map<KeyedLine, string[]>;
   falses: { line: KeyedLine; flags: Flag[] }[];
   /** Caught numeric errors whose correction lacks every key form, with the flags that caught them. */
   keyless: { line: KeyedLine; flags: Flag[] }[];
@@ -54,6 +56,7 @@ export async function scoreSet(set: AnswerSet, packs?: LoadedPacks): Promise<Set
     correctionValue: { hit: 0, of: 0 },
     otherKind: 0,
     misses: [],
+    missedAs: new Map(),
     falses: [],
     keyless: [],
     keyProblems: [],
@@ -77,7 +80,10 @@ export async function scoreSet(set: AnswerSet, packs?: LoadedPacks): Promise<Set
     byKind[kind].of += 1;
     const right = covering.filter((f) => f.ruleId.startsWith(`${kind}.`));
     if (right.length === 0) {
-      if (covering.length > 0) score.otherKind += 1;
+      if (covering.length > 0) {
+        score.otherKind += 1;
+        score.missedAs.set(line, [...new Set(covering.map((f) => f.ruleId))]);
+      }
       score.misses.push(line);
       continue;
     }
