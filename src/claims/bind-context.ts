@@ -81,10 +81,17 @@ export interface OwnFrame {
   ownTime: boolean;
 }
 
-/** True when `sentence` may take a subject from the sentence before (a back-reference or a bare measure subject); bindFromContext binds nothing otherwise. */
-export function mayReferBack(sentence: string): boolean {
-  return REFERS_BACK.test(sentence) || MEASURE_SUBJECT.test(sentence);
+/**
+ * True when `sentence` may take a subject from the sentence before (a back-reference, a bare measure
+ * subject, or an answer to a question: "Sea level at the LGM? About 120 m lower than today.");
+ * bindFromContext binds nothing otherwise.
+ */
+export function mayReferBack(sentence: string, before?: string): boolean {
+  return REFERS_BACK.test(sentence) || MEASURE_SUBJECT.test(sentence) || (before !== undefined && ASKS.test(before));
 }
+
+/** A sentence that asks: the next one answers it, and its subject is the question's. */
+const ASKS = /\?[\s"'”’)\]]*$/u;
 
 /** The reference value the previous sentence's terms let the quantity bind, `ambiguous`, or undefined. */
 export function bindFromContext(
@@ -99,7 +106,7 @@ export function bindFromContext(
   contextSubject?: [number, number] | (() => [number, number] | undefined),
   frame?: OwnFrame,
 ): string | 'ambiguous' | undefined {
-  if (!mayReferBack(sentence)) return undefined;
+  if (!mayReferBack(sentence, frame?.context)) return undefined;
   // "The ice goes back 800,000 years, and over that entire span CO2 stayed between 170 and 300 ppm":
   // a sentence that states its own stretch of time takes no date ("in 2019") from the one before.
   const dated = (id: string): boolean => frame !== undefined && (context.get(id) ?? []).some(([start, end]) => YEAR.test(frame.context.slice(start, end)));
@@ -130,11 +137,13 @@ export function bindFromContext(
 }
 
 /**
- * Whether a term stands directly before a term that serves the value, qualifying it: in "global sea
- * level" the word "global" names no subject of its own, so it does not stop a sea-level value.
+ * Whether a term stands directly before a term that serves the value, qualifying it, or inside one:
+ * in "global sea level" the word "global" names no subject of its own, so it does not stop a
+ * sea-level value.
  */
-function qualifiesServing(sentence: string, [, end]: [number, number], view: TermHits, serves: (id: string) => boolean): boolean {
-  return [...view].some(([id, spans]) => serves(id) && spans.some(([start]) => start >= end && QUALIFIES.test(sentence.slice(end, start))));
+function qualifiesServing(sentence: string, [from, end]: [number, number], view: TermHits, serves: (id: string) => boolean): boolean {
+  // "40 m lower than today": a change word inside a term that serves ("lower than today") is part of it.
+  return [...view].some(([id, spans]) => serves(id) && spans.some(([start, stop]) => (start >= end && QUALIFIES.test(sentence.slice(end, start))) || (start <= from && stop >= end)));
 }
 
 /**

@@ -49,7 +49,7 @@ export const FRAME_WORDS: FrameWords = {
     'it follows', 'shows that', 'demonstrates',
   ],
   eitherOr: [
-    'either ... or', 'or the other way round', 'not the other way round', 'not the other way around',
+    'either ... or', 'or the other way round', 'not the other way round', 'not the other way around', 'not the other way about',
     'never the other way around', 'not vice versa', 'vice versa', 'rather than', 'pick one', 'chicken and egg',
     'one or the other',
   ],

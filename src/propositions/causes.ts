@@ -256,7 +256,8 @@ function cleftFocus(s: ReadSentence, agent: Thing | undefined): Thing | undefine
   if (!COPULAS.has(s.words[k]?.text ?? '')) return undefined;
   k += 1;
   while (/^(?:always|really|just|only|actually|all|ever|in|fact|clearly|simply)$/u.test(s.words[k]?.text ?? '')) k += 1;
-  const focus = s.things.find((t) => t.first >= k && t.first <= k + 1 && t.kind !== 'pronoun');
+  // "It was the Earth's orbit that...": the focus may stand past a determiner and an owner.
+  const focus = s.things.find((t) => t.first >= k && t.first <= k + 2 && t.kind !== 'pronoun');
   if (focus === undefined) return undefined;
   // "It was the orbit, and nothing else, that warmed...": the relative word may follow an aside.
   const rest = s.words.slice(focus.last + 1, focus.last + 9).map((w) => w.text);

@@ -106,7 +106,7 @@ function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
       // "the warming", "Antarctic cooling": a temperature change named as a thing.
       const near = regions.find((r) => r.last === h.first - 1 || r.first === h.last + 2);
       things.push({ kind: 'temperature', first: h.first, last: h.last, ...(near === undefined ? {} : { region: near.key }) });
-    } else if (h.cls === 'regions' && !hits.some((o) => o.cls === 'entities' && o.key === 'temperature' && Math.abs(o.first - h.first) <= 3)) {
+    } else if (h.cls === 'regions' && !hits.some((o) => o.cls === 'entities' && o.key === 'temperature' && Math.abs(o.first - h.first) <= 3) && !ownsNext(words, hits, h)) {
       things.push({ kind: 'temperature', region: h.key, first: h.first, last: h.last });
     }
   }
@@ -116,6 +116,21 @@ function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
     }
   });
   return things.sort((a, b) => a.first - b.first || b.last - a.last).filter((t, k, all) => k === 0 || t.first > (all[k - 1] as Thing).last);
+}
+
+/**
+ * "the Earth's orbit", "the planet's oceans", "the tilt of the Earth": a region that owns an entity
+ * (in the possessive just before it, or after "of" just after it) is no temperature of its own.
+ */
+function ownsNext(words: readonly Word[], hits: readonly LexHit[], region: LexHit): boolean {
+  const last = words[region.last]?.text ?? '';
+  // "the tilt of the Earth": a region after "of" that follows an entity owns nothing; the entity is its.
+  const before = words[region.first - 1]?.text;
+  if (before === 'of' && hits.some((o) => o.cls === 'entities' && o.key !== 'temperature' && o.last === region.first - 2)) return true;
+  const possessive = /['’]s$/u.test(last) || /^['’]s$/u.test(words[region.last + 1]?.text ?? '');
+  if (!possessive) return false;
+  const from = region.last + (/^['’]s$/u.test(words[region.last + 1]?.text ?? '') ? 2 : 1);
+  return hits.some((o) => o.cls === 'entities' && o.key !== 'temperature' && o.first >= from && o.first <= from + 1);
 }
 
 /** "the warming", "warming of the ocean", "Antarctic cooling": a change word used as a noun. */
@@ -157,7 +172,9 @@ export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
     // "Orbital changes, not CO2, caused it": a "not" that sets one thing against another denies no verb.
     const contrast = w.text === 'not' && s.things.some((t) => (t.first === k + 1 || t.first === k + 2) && s.words[t.last + 1]?.segment !== s.words[t.last]?.segment && t.last < i);
     if (contrast) continue;
-    if (NEGATIONS.has(w.text) && after !== 'only' && !(w.text === 'no' && after === 'doubt') && !(w.text === 'nothing' && (after === 'else' || after === 'but'))) count += 1;
+    // "nothing else", "nothing more", "no other": a negation inside a restricting phrase restricts, it denies nothing.
+    const restricting = s.inside(k, 'exclusive') || (w.text === 'nothing' && (after === 'else' || after === 'but'));
+    if (NEGATIONS.has(w.text) && after !== 'only' && !(w.text === 'no' && after === 'doubt') && !restricting) count += 1;
     else if (LIMITS.has(w.text) || (w.text === 'too' && /^(?:weak|small|feeble|little|slow|short|modest)$/u.test(after))) count += 1;
     else if (DENIALS.has(w.text) && (w.text.startsWith('rul') ? after === 'out' : WITH_OFF.has(w.text) ? after === 'off' : true)) count += 1;
     // "so much for CO2 causing the warming": a dismissal.

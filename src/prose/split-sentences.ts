@@ -47,14 +47,23 @@ function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, fr
 
 function endsSentence(text: string, dotAt: number, marks: string, space: string, next: number): boolean {
   if (next >= text.length) return true;
-  if (marks !== '.') return /^[\p{Lu}\p{N}"'“‘([*]/u.test(text.slice(next, next + 1));
+  if (marks !== '.') return startsSentence(text.slice(next, next + 1));
   const word = /([\p{L}.]+)$/u.exec(text.slice(Math.max(0, dotAt - 12), dotAt))?.[1]?.toLowerCase() ?? '';
   // "about 9 °C.", "by 5 K." and "about 420 kyr." end with a unit symbol, not with "c." (circa), an
   // initial or an abbreviation: a unit symbol after a number takes no full stop of its own (NIST SP 811, 7.2).
-  if (/(?:°|\d\s?)\p{L}{1,4}$/u.test(text.slice(Math.max(0, dotAt - 6), dotAt))) return /^[\p{Lu}\p{N}"'“‘([]/u.test(text.slice(next, next + 1));
+  if (/(?:°|\d\s?)\p{L}{1,4}$/u.test(text.slice(Math.max(0, dotAt - 6), dotAt))) return startsSentence(text.slice(next, next + 1));
   if (ABBREVIATIONS.has(word)) return false;
   if (/^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1))) return false; // an initial: "J. R. Petit"
-  return /^[\p{Lu}\p{N}"'“‘([]/u.test(text.slice(next, next + 1));
+  return startsSentence(text.slice(next, next + 1));
+}
+
+/**
+ * After a full stop, what may open a new sentence: anything but a lower-case letter or a mark that
+ * continues one (a comma, a semicolon). Replies, handles, arrows and bullets in threads ("↳ @ana: ...",
+ * "• ...", "— ...") open sentences as capitals do.
+ */
+function startsSentence(next: string): boolean {
+  return next !== '' && !/^[\p{Ll},;:.)\]}]/u.test(next);
 }
 
 function push(into: Sentence[], text: string, blockIndex: number, start: number, end: number): void {

@@ -12,7 +12,7 @@ import type { Cause, LexHit, ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
 
-const REVERSE = /\b(?:not|never|rather than|instead of)\s+(?:\w+\s+){0,2}(?:the other way (?:round|around)|vice versa|the reverse|the opposite way)\b|\b(?:one-way|one way street|only one way)\b/iu;
+const REVERSE = /\b(?:not|never|rather than|instead of)\s+(?:\w+\s+){0,2}(?:the other way (?:round|around|about)|vice versa|the reverse|the opposite way)\b|\b(?:one-way|one way street|only one way)\b/iu;
 
 function detect({ index, read }: DetectInput): Cue[] {
   const here = read(index);

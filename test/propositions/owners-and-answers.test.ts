@@ -1,0 +1,112 @@
+/**
+ * Sentence structure that hid claims, restated in sentences of our own:
+ * - a region that owns an entity ("the Earth's orbit", "the tilt of the Earth") is no temperature
+ *   acting on its own, so the orbit stays the agent of a single-cause claim;
+ * - a cleft may focus a possessed noun ("It was the planet's tilt that...");
+ * - a negation inside a restricting phrase ("and nothing more") restricts, it denies nothing;
+ * - "not the other way about" is the same reversal as "not the other way round";
+ * - in threads, a reply that opens with an arrow, a handle or a bullet after a full stop is a new
+ *   sentence, so its "bigger than" does not set the first poster's claim against the globe;
+ * - an elliptic answer takes its subject from the question before it.
+ * The science:
+ * - Orbital forcing paced the deglaciation, CO2 amplified it and global temperature lagged CO2:
+ *   Shakun et al. 2012, Nature 484, 49-54, doi 10.1038/nature10915. A claim that the orbit alone
+ *   ended an ice age is the single-cause error.
+ * - Antarctic temperature swings exceed the global mean (polar amplification): Jouzel et al. 2007,
+ *   Science 317, 793-796; global LGM cooling about 6 °C: Tierney et al. 2020, Nature 584, 569-573.
+ * - Global mean sea level at the LGM about 120-135 m below present: Lambeck et al. 2014, PNAS 111,
+ *   15296-15303, doi 10.1073/pnas.1411762111.
+ * - EPICA Dome C's record spans about 800,000 years: EPICA community members 2004, Nature 429,
+ *   623-628; Lüthi et al. 2008, Nature 453, 379-382.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { checkText } from '../../src/engine.js';
+import { splitSentences } from '../../src/prose/index.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+import type { LoadedPacks } from '../../src/rulepack/types.js';
+
+let packs: LoadedPacks;
+beforeAll(async () => {
+  packs = await loadPacks([]);
+});
+
+const TOPIC = 'The Antarctic ice cores hold the CO2 record.\n\n';
+const serious = async (text: string) =>
+  (await checkText(TOPIC + text, { packs, format: 'markdown' })).flags.filter((f) => f.level !== 'note').map((f) => f.ruleId);
+
+describe('a region that owns an entity', () => {
+  it.each([
+    "It was the Earth's orbit, and the orbit alone, that pulled the planet out of the last glaciation.",
+    "The planet's wobbling orbit by itself brought the last ice age to an end.",
+    'The tilt of the Earth alone finished off the last glacial period.',
+    "It was the planet's tilt and nothing more that ended the glacial.",
+  ])('keeps the orbit as the one agent: %s', async (text) => {
+    expect(await serious(text)).toContain('logic.single-cause');
+  });
+
+  it.each([
+    // The orbit set the pace, CO2 amplified: two causes, no single one.
+    "The Earth's orbit set the timing of the last deglaciation, and carbon dioxide amplified the warming it began.",
+    "Changes in the Earth's orbit started the melt; on their own they could not have finished it.",
+  ])('passes a shared cause: %s', async (text) => {
+    expect(await serious(text)).not.toContain('logic.single-cause');
+  });
+
+  it("the Earth's temperature is still a temperature", async () => {
+    expect(await serious("Worldwide, the Earth's temperature climbed first and carbon dioxide trailed behind it.")).toContain('direction.global-co2-ahead-of-warming');
+  });
+});
+
+describe('the other way about', () => {
+  it.each([
+    'The cores prove that warming drives carbon dioxide and not the other way about.',
+    'Temperature pushes CO2, never the other way about.',
+  ])('%s', async (text) => {
+    expect(await serious(text)).toContain('logic.either-or-causation');
+  });
+
+  it('passes both ways', async () => {
+    expect(await serious('Warming drives carbon dioxide and the other way about as well: each amplifies the other.')).not.toContain('logic.either-or-causation');
+  });
+});
+
+describe('sentences in threads', () => {
+  const texts = (text: string) => splitSentences(text, 0).map((s) => s.text);
+  it.each([
+    ['The core is 3 km long. ↳ @mira: It is more.', ['The core is 3 km long.', '↳ @mira: It is more.']],
+    ['Nice post. @tomas_k agreed.', ['Nice post.', '@tomas_k agreed.']],
+    ['First point. • Second point.', ['First point.', '• Second point.']],
+    ['It fell to 185 ppm. ~40 years later it was measured again.', ['It fell to 185 ppm.', '~40 years later it was measured again.']],
+    // A lower-case word or a comma after a full stop still continues the sentence (common practice).
+    ['Drilled c. 1990, the core reached bedrock.', ['Drilled c. 1990, the core reached bedrock.']],
+    ['See the figure (fig. 2) for the record.', ['See the figure (fig. 2) for the record.']],
+  ])('%j', (input, expected) => {
+    expect(texts(input)).toEqual(expected);
+  });
+
+  it("a reply's comparison does not hide the first poster's claim", async () => {
+    const thread = [
+      '@harbour_owl · 3 days ago',
+      'The Antarctic curve on that chart simply is the temperature of the whole planet. ↳ @ice_ana: The Antarctic swing is larger than the global one.',
+    ].join('\n');
+    expect(await serious(thread)).toContain('scope.regional-record-as-global');
+  });
+});
+
+describe('an answer takes the subject of its question', () => {
+  it.each([
+    ['Sea level at the height of the last ice age? About 40 m lower than today.', 'value.lgm-sea-level-lowstand'],
+    ['How far back does the EPICA Dome C record go? Roughly 420,000 years.', 'value.edc-record-span'],
+  ])('%s', async (text, ruleId) => {
+    expect(await serious(text)).toContain(ruleId);
+  });
+
+  it.each([
+    'Sea level at the height of the last ice age? About 125 m lower than today.',
+    'How far back does the EPICA Dome C record go? Roughly 800,000 years.',
+    // The question names no subject a value binds on: the answer stays unbound.
+    'Why does any of this matter? About 40 m of coastline is at stake in our harbour plan.',
+  ])('passes: %s', async (text) => {
+    expect((await serious(text)).filter((id) => id.startsWith('value.'))).toEqual([]);
+  });
+});
