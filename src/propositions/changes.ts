@@ -40,6 +40,11 @@ export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed
       const before = companion ? s.things.filter((t) => t.last < h.first).at(-1) : undefined;
       if (before !== undefined && before.kind !== 'pronoun') push(nameOf(s, before, previous), 'temperature', h.key === 'warm' ? 1 : -1, h, before);
       push(name, 'temperature', h.key === 'warm' ? 1 : -1, h, thing);
+      // "Antarctica and Greenland cooled", "both poles got colder": a change said of two places is said of each.
+      for (const other of coordinatedWith(s, thing)) push(nameOf(s, other, previous), 'temperature', h.key === 'warm' ? 1 : -1, h, other);
+      if (name === 'polar' && thing !== undefined && bothPoles(s, thing)) {
+        for (const pole of ['antarctic', 'greenland']) push(pole, 'temperature', h.key === 'warm' ? 1 : -1, h, thing);
+      }
     } else if (h.key === 'up' || h.key === 'down') {
       // "holds less", "takes in more": a size word on an uptake verb is the uptake's, not a change of its own.
       if (s.of('uptake').some((u) => u.key !== 'nouns' && (u.last === h.first - 1 || (u.last === h.first - 2 && /^(?:a|much|far|even|still|no)$/u.test(s.words[h.first - 1]?.text ?? ''))))) continue;
@@ -87,6 +92,31 @@ function temperatureHolder(s: ReadSentence, h: LexHit): Thing | undefined {
   const after = following !== undefined && (s.words[following.first]?.segment === s.words[h.last]?.segment || !ownClause(following)) ? following : undefined;
   if (after !== undefined && (!adjacentBefore || h.first - (before?.last ?? 0) > 1) && after.kind !== 'pronoun') return after;
   return adjacentBefore ? before : undefined;
+}
+
+/** Words that join two places into one subject: "Antarctica and Greenland", "the Arctic as well as the Antarctic". */
+const JOINERS = new Set(['and', 'as well as', 'together with', '&', 'plus']);
+
+/** The regional temperatures joined to `thing` before it ("Antarctica and Greenland cooled": Antarctica). */
+function coordinatedWith(s: ReadSentence, thing: Thing | undefined): Thing[] {
+  const out: Thing[] = [];
+  let at = thing;
+  while (at !== undefined && at.region !== undefined) {
+    const first = at.first;
+    const prior = s.things.filter((t) => t.last < first).at(-1);
+    if (prior === undefined || prior.region === undefined || prior.region === 'global') break;
+    const between = s.words.slice(prior.last + 1, first).map((w) => w.text).join(' ');
+    if (!JOINERS.has(between) || s.words[prior.first]?.clause !== s.words[first]?.clause) break;
+    out.push(prior);
+    at = prior;
+  }
+  return out;
+}
+
+/** "both poles", "the two poles", "the North and South Poles": the polar word names each pole. */
+function bothPoles(s: ReadSentence, thing: Thing): boolean {
+  const words = s.words.slice(Math.max(0, thing.first - 1), thing.last + 1).map((w) => w.text);
+  return words.includes('both') || words.includes('two') || (words.includes('north') && words.includes('south'));
 }
 
 /** The one region (not the globe) named before `h` in its clause, if exactly one is. */

@@ -15,6 +15,8 @@ export interface LexHit {
   key: string;
   first: number;
   last: number;
+  /** The lexicon's phrase as written (its base form), whatever inflection the draft used. */
+  base?: string;
 }
 
 /** A compiled lexicon: `find` returns every phrase hit in a list of lower-case words. */
@@ -29,6 +31,8 @@ export interface Entry {
   rest: string[];
   cls: string;
   key: string;
+  /** The phrase as the lexicon writes it. */
+  base: string;
 }
 
 /** Grammar words that keep their form inside a phrase ("take up" inflects "take", not "up"). */
@@ -143,7 +147,7 @@ export function lexiconIndex(lexicon: Lexicon): (head: string) => readonly Entry
         const id = `${phrase.cls}\u0000${phrase.key}\u0000${words.join(' ')}`;
         if (seen.has(id)) continue;
         seen.add(id);
-        entries.push({ rest: words.slice(1), cls: phrase.cls, key: phrase.key });
+        entries.push({ rest: words.slice(1), cls: phrase.cls, key: phrase.key, base: phrase.words.join(' ') });
       }
     }
     index.set(head, entries);
@@ -161,7 +165,7 @@ function findHits(index: (head: string) => readonly Entry[], words: readonly str
       const last = i + entry.rest.length;
       const id = `${entry.cls}\u0000${entry.key}`;
       const known = best.get(id);
-      if (known === undefined || last > known.last) best.set(id, { cls: entry.cls, key: entry.key, first: i, last });
+      if (known === undefined || last > known.last) best.set(id, { cls: entry.cls, key: entry.key, first: i, last, base: entry.base });
     }
     hits.push(...best.values());
   });

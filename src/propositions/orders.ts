@@ -46,7 +46,8 @@ export function readOrders(s: ReadSentence, previous?: ReadSentence): Order[] {
 }
 
 function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Order, 'recordNamed' | 'amount' | 'dismissive'> | undefined {
-  const phrase = s.words.slice(h.first, h.last + 1).map((w) => w.text).join(' ');
+  // The lexicon's own form of the phrase: "tags along" is "tag along", "trailed" is "trail".
+  const phrase = h.base ?? s.words.slice(h.first, h.last + 1).map((w) => w.text).join(' ');
   const kind = (t: Thing | undefined) => kindOf(s, t, previous);
   const span = { start: s.words[h.first]?.start ?? 0, end: s.words[h.last]?.end ?? 0 };
   const isNoun = /^(?:lag|lags|delay|delays)$/u.test(phrase) && NOUN_BEFORE.has(s.words[h.first - 1]?.text ?? '');

@@ -9,6 +9,7 @@
  *   "Doesn't the lag prove CO2 is not a cause? No: ..."      asked (the next sentence answers)
  */
 import type { BlockKind } from '../types.js';
+import type { LexHit } from './lexicon.js';
 import type { ReadSentence } from './sentence.js';
 
 export const STANCES = ['asserted', 'rhetorical', 'reported', 'quoted', 'myth', 'asked', 'hypothetical', 'superseded', 'marked'] as const;
@@ -118,7 +119,11 @@ function isCallout(first: ReadSentence | undefined): boolean {
 /** "Some claim that...", "Critics argue...", "You may have heard that...", "It is often said...". */
 function isReported(s: ReadSentence): boolean {
   // "they could hold more dissolved CO2": a verb that also takes up gas reports a view only before "that".
-  const verbs = s.of('stance', 'report-verbs').filter((v) => v.first <= 10 && !(s.inside(v.first, 'uptake') && s.words[v.last + 1]?.text !== 'that'));
+  // "you will have read that...": a verb of taking in (read) reports only what it introduces ("you can
+  // read the answer in the cores" is the writer's own pointer; "the highest reading" is a measurement).
+  const introduces = (v: LexHit) =>
+    v.base !== 'read' || (!/^readings?$/u.test(s.words[v.first]?.text ?? '') && s.words.slice(v.last + 1, v.last + 4).some((w) => w.text === 'that' || w.quoted === true));
+  const verbs = s.of('stance', 'report-verbs').filter((v) => v.first <= 10 && !(s.inside(v.first, 'uptake') && s.words[v.last + 1]?.text !== 'that') && introduces(v));
   // "For readers who think in Fahrenheit, ...": a reporter inside a phrase is nobody's report.
   const reporters = s.of('stance', 'reporters').filter((r) => !/^(?:for|to|with|among|of|from)$/u.test(s.words[r.first - 1]?.text ?? ''));
   if (verbs.some((v) => reporters.some((r) => r.last < v.first && v.first - r.last <= 4))) return true;
@@ -131,7 +136,9 @@ function isReported(s: ReadSentence): boolean {
     const between = s.words.slice(v.last + 1, v.last + 2 + Math.max(0, opens));
     const subject = s.words.slice(Math.max(0, v.first - 3), v.first).map((w) => w.text);
     const gap = s.text.slice(s.words[v.last]?.end ?? 0, between.at(-1)?.start ?? 0);
-    const told = between.slice(0, -1).every((w) => !SELF.has(w.text)) && !/[,;:()]/u.test(gap);
+    // "My uncle keeps telling me that...": someone of the writer's own circle is an outside source.
+    const circle = subject.some((w) => /^(?:my|your|his|her|their)$/u.test(w));
+    const told = (circle || between.slice(0, -1).every((w) => !SELF.has(w.text))) && !/[,;:()]/u.test(gap);
     return opens >= 0 && told && v.first > 0 && !subject.some((w) => AUTHORITIES.has(w));
   });
   if (attributed) return true;

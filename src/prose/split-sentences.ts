@@ -32,6 +32,24 @@ export function splitSentences(text: string, blockIndex: number): Sentence[] {
 const BLANK_LINE = /\n[ \t]*\n/gu;
 
 function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, from: number, to: number): void {
+  // A line that opens with a speaker, a time stamp, a handle or a bullet is an utterance of its own,
+  // full stop or not: chat logs, scripts and thread dumps put one on each line.
+  let lineFrom = from;
+  for (const line of whole.slice(from, to).matchAll(UTTERANCE_LINE)) {
+    const at = from + line.index + 1;
+    splitLines(sentences, whole, blockIndex, lineFrom, at);
+    lineFrom = at;
+  }
+  splitLines(sentences, whole, blockIndex, lineFrom, to);
+}
+
+/**
+ * A new line that opens an utterance: "[18:58] ", "AMARA: ", "@ana ", "↳ ", "• ", "- ", "3/ ".
+ * A speaker label is one to three capitalised words, or one word in capitals, before a colon.
+ */
+const UTTERANCE_LINE = /\n(?=[ \t]*(?:\[[^\]\n]{1,24}\]|[@↳•▶►]|[-*+>][ \t]|\d{1,3}\/[ \t]|\p{Lu}[\p{L}'’.-]*(?:[ \t]\p{Lu}[\p{L}'’.-]*){0,2}:[ \t]))/gu;
+
+function splitLines(sentences: Sentence[], whole: string, blockIndex: number, from: number, to: number): void {
   const text = whole.slice(0, to);
   let start = skipSpace(text, from);
   BOUNDARY.lastIndex = from;

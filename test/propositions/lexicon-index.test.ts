@@ -20,7 +20,7 @@ function wholeIndex(lexicon: Lexicon): Map<string, Entry[]> {
           seen.add(id);
           const [head, ...rest] = words;
           if (head === undefined) continue;
-          index.set(head, [...(index.get(head) ?? []), { rest, cls, key }]);
+          index.set(head, [...(index.get(head) ?? []), { rest, cls, key, base: phraseWords(phrase).join(' ') }]);
         }
       }
     }

@@ -110,3 +110,64 @@ describe('an answer takes the subject of its question', () => {
     expect((await serious(text)).filter((id) => id.startsWith('value.'))).toEqual([]);
   });
 });
+
+describe('one utterance a line', () => {
+  const texts = (text: string) => splitSentences(text, 0).map((s) => s.text);
+  it.each([
+    ['[09:12] Rosa: the core is long\n[09:13] Idris: how long', ['[09:12] Rosa: the core is long', '[09:13] Idris: how long']],
+    ['NADIA: Welcome back\nTOBIAS: Thanks for having me', ['NADIA: Welcome back', 'TOBIAS: Thanks for having me']],
+    ['Opening line\n- first point\n+ second point\n4/ fourth post', ['Opening line', '- first point', '+ second point', '4/ fourth post']],
+    // A hard-wrapped sentence stays whole, capitals or not (common practice).
+    ['The record from the\nAntarctic Cold Reversal is short.', ['The record from the\nAntarctic Cold Reversal is short.']],
+  ])('%j', (input, expected) => {
+    expect(texts(input)).toEqual(expected);
+  });
+});
+
+// Antarctica warmed while Greenland cooled in the Younger Dryas (bipolar seesaw): Pedro et al.
+// 2016, Nature Geoscience 9, 51-55 (from memory); WAIS Divide Project Members 2013, Nature 500,
+// 440-444 (from memory).
+describe('a change said of two places', () => {
+  it.each([
+    'During the Younger Dryas, Antarctica and Greenland cooled in unison.',
+    'Through the Younger Dryas both poles turned colder at once.',
+    'In the Younger Dryas the Arctic as well as the Antarctic grew colder.',
+  ])('is said of each: %s', async (text) => {
+    expect(await serious(text)).toContain('direction.bipolar-seesaw-younger-dryas');
+  });
+
+  it.each([
+    'During the Younger Dryas, Greenland and Europe cooled sharply while Antarctica warmed.',
+    'At the Last Glacial Maximum both poles were far colder than today.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).not.toContain('direction.bipolar-seesaw-younger-dryas');
+  });
+});
+
+// CO2 amplified and spread the deglacial warming (Shakun et al. 2012, above): casting it as a mere
+// follower denies it that part, in any inflection of the lexicon's follower phrases.
+describe('a mere follower, in any inflection', () => {
+  it.each([
+    'The warming came first, and carbon dioxide merely tagged along.',
+    'Temperature sets off and the gas simply tags along behind.',
+  ])('%s', async (text) => {
+    expect(await serious(text)).toContain('logic.lag-rules-out-cause');
+  });
+});
+
+describe('reports from readers and relatives', () => {
+  const levels = async (text: string) => (await checkText(TOPIC + text, { packs, format: 'markdown' })).flags.filter((f) => f.ruleId === 'logic.lag-rules-out-cause').map((f) => f.level);
+  it.each([
+    'Many of you will have read that CO2 trails temperature, so it cannot be the cause.',
+    'My neighbour keeps telling me that CO2 trails temperature, so it cannot be the cause.',
+  ])('is a report, not the draft own claim: %s', async (text) => {
+    expect(await levels(text)).toEqual(['note']);
+  });
+
+  it.each([
+    'You can read it straight off the cores: CO2 trails temperature, so it cannot be the cause.',
+    'The highest reading in the record trails temperature, so CO2 cannot be the cause.',
+  ])('stays the draft own claim: %s', async (text) => {
+    expect(await levels(text)).toContain('warning');
+  });
+});
