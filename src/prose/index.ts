@@ -1,2 +1,2 @@
-export { splitSentences } from './split-sentences.js';
+export { opensUtterance, splitSentences } from './split-sentences.js';
 export { createTopicMatcher, type TopicMatcher } from './topic-matcher.js';

@@ -47,7 +47,21 @@ function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, fr
  * A new line that opens an utterance: "[18:58] ", "AMARA: ", "@ana ", "↳ ", "• ", "- ", "3/ ".
  * A speaker label is one to three capitalised words, or one word in capitals, before a colon.
  */
-const UTTERANCE_LINE = /\n(?=[ \t]*(?:\[[^\]\n]{1,24}\]|[@↳•▶►]|[-*+>][ \t]|\d{1,3}\/[ \t]|\p{Lu}[\p{L}'’.-]*(?:[ \t]\p{Lu}[\p{L}'’.-]*){0,2}:[ \t]))/gu;
+const OPENER = String.raw`[ \t]*(?:\[[^\]\n]{1,24}\]|[@↳•▶►]|[-*+>][ \t]|\d{1,3}\/[ \t]|\p{Lu}[\p{L}'’.-]*(?:[ \t]\p{Lu}[\p{L}'’.-]*){0,2}:[ \t])`;
+const UTTERANCE_LINE = new RegExp(String.raw`\n(?=${OPENER})`, 'gu');
+const OPENS_UTTERANCE = new RegExp(String.raw`^${OPENER.replace('[@↳•▶►]', '[@↳▶►]')}`, 'u');
+
+/**
+ * True when a sentence opens an utterance of its own in a thread or a script ("↳ @ana: ...",
+ * "[09:12] Rosa: ...", "TOBIAS: ..."): another voice, whose words neither answer nor endorse the
+ * sentence before on its speaker's behalf.
+ */
+export function opensUtterance(sentence: string): boolean {
+  return OPENS_UTTERANCE.test(sentence) && !/^\s*[-*+>]/u.test(sentence) && !LAYOUT_LABEL.test(sentence);
+}
+
+/** Labels of a question-and-answer or myth-and-fact layout: the same writer answering, not another voice. */
+const LAYOUT_LABEL = /^\s*(?:q|a|question|answer|myth|fact|claim|reality|truth|verdict|note|the myth|the fact|the claim|the truth|the answer|the science|the evidence)\s*:/iu;
 
 function splitLines(sentences: Sentence[], whole: string, blockIndex: number, from: number, to: number): void {
   const text = whole.slice(0, to);

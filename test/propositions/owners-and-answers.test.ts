@@ -21,7 +21,7 @@
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { checkText } from '../../src/engine.js';
-import { splitSentences } from '../../src/prose/index.js';
+import { opensUtterance, splitSentences } from '../../src/prose/index.js';
 import { loadPacks } from '../../src/rulepack/index.js';
 import type { LoadedPacks } from '../../src/rulepack/types.js';
 
@@ -169,5 +169,29 @@ describe('reports from readers and relatives', () => {
     'The highest reading in the record trails temperature, so CO2 cannot be the cause.',
   ])('stays the draft own claim: %s', async (text) => {
     expect(await levels(text)).toContain('warning');
+  });
+});
+
+// CO2 and temperature drove each other through the deglaciation (feedback): Shakun et al. 2012,
+// above. A reply in a thread is another voice: it answers the post for its readers, not on the
+// poster's behalf, so the post's either/or framing keeps its flag.
+describe('another voice in a thread', () => {
+  it('a reply that names the feedback does not clear the post above it', async () => {
+    const thread = ['@moor_walker · 5 h', 'CO2 is an effect of the warming, not a cause of it.', '    ↳ @tidewatch · 4 h: It works both ways: each one drove the other as a feedback.'].join('\n');
+    expect(await serious(thread)).toContain('logic.either-or-causation');
+  });
+
+  it('the same writer naming the feedback in the next sentence answers it (a thread reply does not)', async () => {
+    expect(await serious('CO2 is an effect of the warming, not a cause of it. It works both ways: each one drove the other as a feedback.')).not.toContain('logic.either-or-causation');
+  });
+
+  it.each([
+    ['↳ @tidewatch · 4 h: It works both ways.', true],
+    ['[10:02] Rosa: agreed', true],
+    ['Fact: it works both ways.', false],
+    ['Q: which came first?', false],
+    ['The core is long.', false],
+  ])('%s opens an utterance: %s', (text, expected) => {
+    expect(opensUtterance(text as string)).toBe(expected);
   });
 });

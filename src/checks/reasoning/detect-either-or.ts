@@ -9,6 +9,7 @@
  */
 import { polarityAt } from '../../propositions/causes.js';
 import type { Cause, LexHit, ReadSentence } from '../../propositions/index.js';
+import { opensUtterance } from '../../prose/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
 
@@ -42,7 +43,9 @@ function detect({ index, read }: DetectInput): Cue[] {
   // second": a sentence that picks one side is the draft's pick, whatever a neighbour grants.
   const picked = pickedSide(here.s, here.props.causes, direction);
   if (picked !== undefined) return [picked];
-  if (loopAt(index - 1) || loopAt(index + 1)) return [];
+  // A neighbour answers only in the same voice: in a thread, the next reply is someone else's.
+  const sameVoice = (i: number) => !opensUtterance((i > index ? read(i) : here)?.s.text ?? '');
+  if ((sameVoice(index - 1) && loopAt(index - 1)) || (sameVoice(index + 1) && loopAt(index + 1))) return [];
   const frame = framedInWords(here.s, read(index - 1)?.s);
   if (frame !== undefined) return [frame];
   const answer = answersEitherOr(read(index - 1), here.s.text);
