@@ -29,13 +29,17 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     .filter((h) => ![...entities, ...s.of('order')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first));
   const causes: Cause[] = [];
   for (const h of hits) {
-    if (h.key === 'reverse' || h.key === 'either-or') continue;
+    // `passive` only qualifies an `effects` word at the same place; it states nothing of its own.
+    if (h.key === 'reverse' || h.key === 'either-or' || h.key === 'passive') continue;
     const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify';
     // "the end of the ice age" is a noun; "it was CO2 doing the pushing" is still a verb.
     if (verbLike && DETERMINERS.has(s.words[h.first - 1]?.text ?? '') && s.words[h.first - 2]?.text !== 'doing') continue;
     // "global warming", "Antarctic cooling": a region word before it makes the -ing form a noun.
     if (verbLike && s.words[h.first]?.text.endsWith('ing') && regions.some((r) => r.last === h.first - 1)) continue;
     if (h.key === 'effects' && s.words[h.first - 1]?.text === 'in') continue;
+    // "does not make CO2 a bystander", "turns it into a mere follower": a casting verb puts its object
+    // in the part the noun after it names; the verb itself causes nothing.
+    if (h.key === 'verbs' && CASTING.has(s.words[h.first]?.text ?? '') && s.of('causes').some((o) => ['effects', 'roles', 'nouns'].includes(o.key) && o.first > h.last && o.first - h.last <= 4)) continue;
     if (h.key === 'without') {
       causes.push(...withoutAt(s, h, causes, previous));
       continue;
@@ -134,6 +138,8 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     agentThing = subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first) ?? thingBefore(s, h.first, 'clause');
     patientThing = thingAfter(s, h.last);
   }
+  // "The lag makes CO2 a mere passenger": the part is its object's, not the subject's.
+  if (h.key === 'effects') agentThing = madeInto(s, h) ?? agentThing;
   const cleft = cleftFocus(s, agentThing) ?? pseudoCleftFocus(s, h);
   if (cleft !== undefined) agentThing = cleft;
   let patient = kind(patientThing);
@@ -145,6 +151,14 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   // "never a driver of it": a pronoun object is not its own subject; it is the other thing named.
   if (patientThing?.kind === 'pronoun' && patient === agent) {
     patient = s.things.filter((t) => t.last < patientThing.first && t.kind !== 'pronoun' && t.kind !== agent).at(-1)?.kind ?? patient;
+  }
+  // "CO2 is not a bystander", "a lag does not make CO2 a passenger": a passive part denied grants the
+  // subject a part of its own; it denies nothing of what acts on the subject.
+  if (h.key === 'effects' && polarity === 'denied' && s.of('causes', 'passive').some((p) => p.first === h.first)) {
+    const holder = madeInto(s, h) ?? agentThing;
+    const subject = kind(holder);
+    if (subject === undefined) return [];
+    return [{ kind: 'cause', role: 'cause', polarity: 'asserted', exclusive: false, start: s.words[h.first]?.start ?? 0, end: s.words[h.last]?.end ?? 0, agent: subject }];
   }
   if (h.key === 'effects') {
     // "CO2 was an effect of the warming": the warming acts on CO2.
@@ -174,7 +188,8 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   }
   // "nothing but a consequence", "merely a response", "CO2 just came along as a passenger": the
   // subject is denied any causal role.
-  const restricted = hasExclusiveBefore(s, h.first, 3) || exclusiveAfterSubject(s, h.first, agentThing);
+  // "a mere passenger": the adjective restricts the part as "merely" does.
+  const restricted = hasExclusiveBefore(s, h.first, 3) || exclusiveAfterSubject(s, h.first, agentThing) || s.words[h.first - 1]?.text === 'mere';
   if (h.key === 'effects' && polarity === 'asserted' && restricted && patient !== undefined) {
     out.push({ kind: 'cause', agent: patient, role: 'cause', polarity: 'denied', exclusive: false, start, end });
   }
@@ -245,6 +260,18 @@ function copulaSubject(s: ReadSentence, i: number): Thing | undefined {
   for (let k = i - 1; k >= Math.max(0, i - 8); k -= 1) {
     if (s.words[k]?.clause !== s.words[i]?.clause) return undefined;
     if (COPULAS.has(s.words[k]?.text ?? '')) return s.things.filter((t) => t.last < k && s.words[t.first]?.clause === s.words[i]?.clause).at(-1);
+  }
+  return undefined;
+}
+
+/** Verbs that cast their object in a part ("makes CO2 a passenger", "turns it into a bystander"). */
+const CASTING = new Set(['make', 'makes', 'made', 'making', 'render', 'renders', 'rendered', 'turn', 'turns', 'turned', 'reduce', 'reduces', 'reduced']);
+
+/** "does not make CO2 a bystander": the object the casting verb before the part noun names. */
+function madeInto(s: ReadSentence, h: LexHit): Thing | undefined {
+  for (let k = h.first - 1; k >= Math.max(0, h.first - 6); k -= 1) {
+    if (!CASTING.has(s.words[k]?.text ?? '')) continue;
+    return s.things.find((t) => t.first > k && t.last < h.first && t.kind !== 'pronoun') ?? s.things.find((t) => t.first > k && t.last < h.first);
   }
   return undefined;
 }

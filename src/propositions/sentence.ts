@@ -142,6 +142,19 @@ function isNominal(words: readonly Word[], i: number): boolean {
 
 /** Words that deny what follows within their segment. */
 export const NEGATIONS = new Set(['not', 'no', 'zero', 'never', 'nothing', 'none', 'neither', 'nor', 'without', 'hardly', 'barely', 'nobody', 'nowhere']);
+/** Words that open a correction after a negation: "not a cause, only a bystander". */
+const CORRECTIVES = new Set(['only', 'just', 'merely', 'simply', 'but', 'rather', 'instead', 'purely']);
+
+/** True when a correction opens between the negation at `k` and word `i`, after a comma or "but". */
+function corrected(s: ReadSentence, k: number, i: number): boolean {
+  for (let j = k + 2; j <= i; j += 1) {
+    const w = s.words[j]?.text ?? '';
+    if (!CORRECTIVES.has(w)) continue;
+    if (w === 'but' || s.words[j]?.segment !== s.words[j - 1]?.segment) return true;
+  }
+  return false;
+}
+
 /** Words that deny an effect by saying it fell short ("unable to end", "insufficient to explain"). */
 const LIMITS = new Set(['unable', 'insufficient', 'failed', 'fails', 'fail', 'negligible', 'irrelevant', 'unimportant', 'insignificant', 'immaterial']);
 /** Verbs that deny their object ("rules out CO2 as a driver"). */
@@ -172,6 +185,9 @@ export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
     // "Orbital changes, not CO2, caused it": a "not" that sets one thing against another denies no verb.
     const contrast = w.text === 'not' && s.things.some((t) => (t.first === k + 1 || t.first === k + 2) && s.words[t.last + 1]?.segment !== s.words[t.last]?.segment && t.last < i);
     if (contrast) continue;
+    // "not a cause, only a bystander", "not the driver but a passenger": a correction after a break
+    // states what is, and the negation before it does not reach it.
+    if (NEGATIONS.has(w.text) && corrected(s, k, i)) continue;
     // "nothing else", "nothing more", "no other": a negation inside a restricting phrase restricts, it denies nothing.
     const restricting = s.inside(k, 'exclusive') || (w.text === 'nothing' && (after === 'else' || after === 'but'));
     if (NEGATIONS.has(w.text) && after !== 'only' && !(w.text === 'no' && after === 'doubt') && !restricting) count += 1;

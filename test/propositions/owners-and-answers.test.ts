@@ -195,3 +195,26 @@ describe('another voice in a thread', () => {
     expect(opensUtterance(text as string)).toBe(expected);
   });
 });
+
+// CO2 amplified the deglacial warming (Shakun et al. 2012, above): to deny it a passive part is a
+// correct statement; to cast it as a mere passenger after the lag is the lag error.
+describe('passive parts', () => {
+  it.each([
+    'But a lag in the Antarctic does not make carbon dioxide a bystander: once it rose it amplified the warming.',
+    'CO2 is no mere passenger; it amplified the warming the orbit began.',
+    'The short delay does not turn CO2 into a follower, since its heat-trapping effect acts whenever it rises.',
+  ])('denied, it grants the part: %s', async (text) => {
+    expect((await serious(text)).filter((id) => id.startsWith('logic.'))).toEqual([]);
+  });
+
+  it.each([
+    'The lag makes carbon dioxide a mere passenger.',
+    'Because CO2 trailed the warming, that makes it a mere passenger in the story.',
+  ])('cast after the lag, it is the lag error: %s', async (text) => {
+    expect(await serious(text)).toContain('logic.lag-rules-out-cause');
+  });
+
+  it('a correction after a negation is asserted: "not a cause, only a bystander"', async () => {
+    expect(await serious('Warming came first, so CO2 was not a cause, only a bystander.')).toContain('logic.lag-rules-out-cause');
+  });
+});

@@ -82,7 +82,7 @@ function detect({ index, read }: DetectInput): Cue[] {
 function framedInWords(s: ReadSentence, previous: ReadSentence | undefined): Cue | undefined {
   const frame = s.of('causes', 'either-or').find((h) => polarityAt(s, h.first) === 'asserted');
   if (frame === undefined) return undefined;
-  const causal = (r: ReadSentence | undefined) => r !== undefined && r.of('causes').some((h) => h.key !== 'either-or');
+  const causal = (r: ReadSentence | undefined) => r !== undefined && r.of('causes').some((h) => h.key !== 'either-or' && h.key !== 'passive');
   const co2 = (r: ReadSentence | undefined) => r !== undefined && r.of('entities', 'co2').length > 0;
   if (!(causal(s) || causal(previous)) || !(co2(s) || co2(previous))) return undefined;
   const clause = s.words[frame.first]?.clause;
