@@ -47,6 +47,9 @@ const WRONG: [sentence: string, ruleId: string, span: string, correctionHas: str
   ['Vostok reaches further back than EPICA Dome C.', 'value.rank.record-span', 'further back than', ['420,000', '800,000']],
   ['EPICA Dome C is deeper than Vostok.', 'value.rank.drilled-depth', 'deeper than', ['shallower than', '3,623']],
   ['The deepest of these cores is EPICA Dome C.', 'value.rank.drilled-depth', 'EPICA Dome C', ['Vostok', '3,623']],
+  // A tie past a description of the place ("the Russian station at"), and an equals sign in notes.
+  ['The longest continuous ice-core record yet published comes from the Russian base at Vostok.', 'value.rank.record-span', 'Vostok', ['EPICA Dome C', '800,000']],
+  ['quiz answer: longest ice core record = Vostok', 'value.rank.record-span', 'Vostok', ['EPICA Dome C', '800,000']],
 ];
 
 const RIGHT: string[] = [
@@ -63,6 +66,8 @@ const RIGHT: string[] = [
   'Vostok is not the longest ice-core record.',
   'Vostok holds the longest record from a Russian station.',
   'The deepest of the Antarctic cores is EPICA Dome C.',
+  'The longest ice-core record comes from the European project at Dome C.',
+  'The longest Greenland ice-core record comes from the Danish site at NGRIP.',
   // "Longer" with no measure word could be the core's length or its record: no reading is clear.
   'Vostok is longer than Dome Fuji.',
 ];

@@ -22,7 +22,9 @@ const NOT_NOW = /(?<![\p{L}])(?:not|no\s+longer|never|until|once|formerly|previo
 /** What ties an entity before a superlative to it: a verb, then "the" (and at most two words). */
 const TIES_BEFORE = /(?<![\p{L}])(?:is|was|has|had|holds?|held|gives?|gave|provides?|provided|yields?|yielded|offers?|contains?|boasts?|remains?|remained|keeps?|produced)(?![\p{L}])[^;:.!?]*\bthe(?:\s+[\p{L}'’-]+){0,2}\s*$/iu;
 /** What ties a superlative to an entity after it. */
-const TIES_AFTER = /^[^;:.!?]*?(?:(?<![\p{L}])(?:is|was|comes\s+from|came\s+from|belongs\s+to|belonged\s+to|from|at)|,)\s+(?:the\s+)?$/iu;
+const TIES_AFTER = /^[^;:.!?]*?(?:(?<![\p{L}])(?:is|was|comes\s+from|came\s+from|belongs\s+to|belonged\s+to|from|at)|,|=)\s+(?:the\s+)?$/iu;
+/** The first tie word after a superlative: the superlative's own noun phrase ends there. */
+const FIRST_TIE = /(?<![\p{L}])(?:is|was|comes|came|belongs|belonged|from|at)(?![\p{L}])|[,=]/iu;
 const CLAUSE_END = /[;:.!?]|(?<![\p{L}])(?:but|while|whereas|although)(?![\p{L}])/iu;
 
 interface Named {
@@ -66,7 +68,10 @@ function superlativeFlag(sentence: string, word: FoundRankWord, named: Named[], 
     phraseEnd = word.end + (stop === null ? rest.length : stop.index);
   } else if (after !== undefined && TIES_AFTER.test(sentence.slice(word.end, after.start))) {
     subject = after;
-    phraseEnd = after.start;
+    // "the longest record ... comes from the Russian station at Vostok": only the words before the tie
+    // name the group the superlative ranks in.
+    const tie = FIRST_TIE.exec(sentence.slice(word.end, after.start));
+    phraseEnd = tie === null ? after.start : word.end + tie.index;
   } else return undefined;
   // "the deepest ice at Dome C", "the deepest layers": a place within one core, not a rank among cores.
   if (PART_OF_ONE.test(sentence.slice(word.end))) return undefined;
