@@ -109,12 +109,17 @@ function ordered(a: Quantity, b: Quantity, loose: boolean): Restatement {
 }
 
 /** Every adjacent pair of one thing in different stated units, joined as a restatement. */
+/** A plural of a round number with no count ("thousands of years", "hundreds of metres"). */
+const VAGUE = /^(?:many\s+|several\s+|some\s+|tens\s+of\s+|hundreds\s+of\s+)?(?:dozens|hundreds|thousands|millions|billions)(?![\p{L}])/iu;
+
 export function findRestatements(text: string, qs: Quantity[], previous?: PreviousSentence): Restatement[] {
   const out: Restatement[] = [];
   for (let i = 0; i + 1 < qs.length; i++) {
     const first = qs[i] as Quantity;
     const second = qs[i + 1] as Quantity;
     if (!sameThing(first, second)) continue;
+    // "ka, thousands of years before present, so 21 ka means...": a vague plural names no amount to restate.
+    if (VAGUE.test(first.text) || VAGUE.test(second.text)) continue;
     const gap = text.slice(first.end, second.start);
     if (first.statedUnit === second.statedUnit) {
       if (scaleOf(first) !== scaleOf(second) && SCALE_JOINER.test(gap)) out.push(ordered(first, second, false));

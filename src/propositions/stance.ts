@@ -134,7 +134,8 @@ function isReported(s: ReadSentence): boolean {
     const opens = s.words.slice(v.last + 1, v.last + 5).findIndex((w) => w.text === 'that' || w.quoted === true);
     // "tells us that" is the record speaking to the writer, not someone else's claim.
     const between = s.words.slice(v.last + 1, v.last + 2 + Math.max(0, opens));
-    const subject = s.words.slice(Math.max(0, v.first - 3), v.first).map((w) => w.text);
+    // "I've read that...": a contraction keeps its subject ("i've" is "i").
+    const subject = s.words.slice(Math.max(0, v.first - 3), v.first).map((w) => w.text.replace(/['’](?:ve|d|m|ll|re)$/u, ''));
     const gap = s.text.slice(s.words[v.last]?.end ?? 0, between.at(-1)?.start ?? 0);
     // "My uncle keeps telling me that...": someone of the writer's own circle is an outside source.
     const circle = subject.some((w) => /^(?:my|your|his|her|their)$/u.test(w));

@@ -218,3 +218,27 @@ describe('passive parts', () => {
     expect(await serious('Warming came first, so CO2 was not a cause, only a bystander.')).toContain('logic.lag-rules-out-cause');
   });
 });
+
+// The CO2 rise of the last deglaciation took several thousand years (Monnin et al. 2001, Science
+// 291, 112-114); Antarctic temperature and CO2 rose within a few centuries of each other (Parrenin
+// et al. 2013, Science 339, 1060-1063): a separation between two curves is no duration of a rise.
+describe('a separation is no duration', () => {
+  it.each([
+    'In the Talby record, CO2 and Antarctic temperature begin to climb within about two centuries of each other at the start of the deglaciation.',
+    'At the start of the deglaciation the two curves turn upward some 200 years apart.',
+  ])('%s', async (text) => {
+    expect((await serious(text)).filter((id) => id.startsWith('value.'))).toEqual([]);
+  });
+
+  it('a duration of the rise is still read', async () => {
+    expect(await serious('The CO2 rise at the start of the deglaciation took about 2,000 years.')).toContain('value.co2-deglacial-rise-duration');
+  });
+});
+
+// 1 ka = 1,000 years before present (common practice; BP counts from AD 1950: Stuiver & Polach
+// 1977, Radiocarbon 19, 355-363, from memory).
+describe('a vague plural restates nothing', () => {
+  it('"ka, thousands of years before present" is a definition, not a slip', async () => {
+    expect((await serious('Dates on these panels use ka, thousands of years before present, so 21 ka means 21,000 years ago.')).filter((id) => id.startsWith('unit.'))).toEqual([]);
+  });
+});
