@@ -52,7 +52,17 @@ export function thingAfter(s: ReadSentence, i: number, window = 8): Thing | unde
     const opener = s.words.find((w) => w.segment === seg);
     return seg !== segment && opener !== undefined && ['and', 'but', 'yet'].includes(opener.text) && s.words.indexOf(opener) >= t.first - 3;
   };
-  return s.things.find((t) => t.first > i && t.first - i <= window && s.words[t.first]?.clause === clause && (t.kind !== 'pronoun' || s.words[t.first]?.segment === segment) && !(t.kind !== 'pronoun' && ownClause(t)));
+  // "CO2 drives, and temperature never pushes CO2": the clause the new subject opens holds the rest,
+  // so nothing past that subject is this word's object either.
+  for (const t of s.things) {
+    if (t.first <= i || t.first - i > window || s.words[t.first]?.clause !== clause) continue;
+    if (t.kind === 'pronoun') {
+      if (s.words[t.first]?.segment === segment) return t;
+      continue;
+    }
+    return ownClause(t) ? undefined : t;
+  }
+  return undefined;
 }
 
 /**

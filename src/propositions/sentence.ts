@@ -106,7 +106,7 @@ function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
       // "the warming", "Antarctic cooling": a temperature change named as a thing.
       const near = regions.find((r) => r.last === h.first - 1 || r.first === h.last + 2);
       things.push({ kind: 'temperature', first: h.first, last: h.last, ...(near === undefined ? {} : { region: near.key }) });
-    } else if (h.cls === 'regions' && !hits.some((o) => o.cls === 'entities' && o.key === 'temperature' && Math.abs(o.first - h.first) <= 3) && !ownsNext(words, hits, h)) {
+    } else if (h.cls === 'regions' && !hits.some((o) => o.cls === 'entities' && o.key === 'temperature' && Math.abs(o.first - h.first) <= 3) && !ownsNext(words, hits, h) && !insideRegion(hits, h)) {
       things.push({ kind: 'temperature', region: h.key, first: h.first, last: h.last });
     }
   }
@@ -116,6 +116,16 @@ function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
     }
   });
   return things.sort((a, b) => a.first - b.first || b.last - a.last).filter((t, k, all) => k === 0 || t.first > (all[k - 1] as Thing).last);
+}
+
+/** True when region hit `h` of `s` only owns the entity beside it ("Earth's orbit", "the tilt of the Earth"). */
+export function regionOwnsEntity(s: ReadSentence, h: LexHit): boolean {
+  return ownsNext(s.words, s.hits, h);
+}
+
+/** "Earth" inside "the Earth": a region hit within a longer one is that one. */
+function insideRegion(hits: readonly LexHit[], h: LexHit): boolean {
+  return hits.some((o) => o !== h && o.cls === 'regions' && o.first <= h.first && o.last >= h.last && o.last - o.first > h.last - h.first);
 }
 
 /**

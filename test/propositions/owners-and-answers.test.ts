@@ -242,3 +242,23 @@ describe('a vague plural restates nothing', () => {
     expect((await serious('Dates on these panels use ka, thousands of years before present, so 21 ka means 21,000 years ago.')).filter((id) => id.startsWith('unit.'))).toEqual([]);
   });
 });
+
+// Orbital pacing with CO2 as amplifier (Shakun et al. 2012, above); Antarctic swings exceed the
+// global mean (Jouzel et al. 2007, above).
+describe('objects stay in their clause; Earth is the globe', () => {
+  it.each([
+    ['CO2 drives, and warming never pushes the CO2 at all.', 'logic.either-or-causation'],
+    ['The gas rose afterwards, which shows it was not doing any of the warming.', 'logic.lag-rules-out-cause'],
+    ['Carbon dioxide lagged, so it can hardly have been what did the warming.', 'logic.lag-rules-out-cause'],
+    ["The Vostok temperature curve is, in effect, Earth's thermometer.", 'scope.regional-record-as-global'],
+  ])('%s', async (text, ruleId) => {
+    expect(await serious(text)).toContain(ruleId);
+  });
+
+  it.each([
+    'The orbit started the melt, and CO2 amplified it and spread it around the globe.',
+    "Earth's orbit paced the ice ages, and CO2 amplified the swings.",
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+});

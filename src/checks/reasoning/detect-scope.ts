@@ -20,6 +20,7 @@
  *   CO2 after, the temperature's region global, and a lag figure or an Antarctic record named.
  */
 import { findPhrases } from '../../claims/frames-match.js';
+import { regionOwnsEntity } from '../../propositions/sentence.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isTemperatureFirst } from './queries.js';
 
@@ -89,7 +90,8 @@ function detectRegional(input: DetectInput): Cue[] {
     if (records.some((r) => (s.words[r.first]?.segment ?? 0) < segment)) return copula || same || inference;
     return records.length === 0 && (copula || same) && recordIn(before);
   };
-  const global = s.of('regions', 'global').find(
+  // "Earth's changing orbit": a globe that owns an entity is no temperature of the globe.
+  const global = s.of('regions', 'global').filter((g) => !regionOwnsEntity(s, g)).find(
     (g) => anaphoric || attributed || carriedOver(g) || (recordClauses.has(s.words[g.first]?.clause) && readAs(g)) || isotopes.some((w) => s.words[w.first]?.clause === s.words[g.first]?.clause) || (isotopes.length > 0 && readAs(g)),
   );
   const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text));
