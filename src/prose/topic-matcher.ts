@@ -10,8 +10,12 @@ export interface TopicMatcher {
   test(text: string): boolean;
 }
 
-/** Characters a matcher walks before it compiles its expression (the walk costs ~25 ms a megabyte more; the expression 50 to 90 ms once). */
-const WALK_LIMIT = 2_000_000;
+/**
+ * Characters a matcher walks before it compiles its expression: the walk costs some 20 ms a
+ * megabyte more than the compiled expression, which costs 50 to 90 ms once, so half a megabyte of
+ * walking adds about 10 ms to a long run and a short `check` never compiles.
+ */
+const WALK_LIMIT = 500_000;
 
 /** Matchers made in this run, by word list: the engine and the reasoning stage ask for the packs' one list. */
 const made = new WeakMap<readonly string[], TopicMatcher>();
@@ -29,7 +33,7 @@ export function createTopicMatcher(words: readonly string[]): TopicMatcher {
   let matcher: TopicMatcher = { test: () => false };
   if (unique.length > 0) {
     // Both answer alike; the walk costs nothing to make and the expression runs some five times
-    // faster per byte once compiled, so the expression takes over after a few megabytes of text
+    // faster per byte once compiled, so the expression takes over after half a megabyte of text
     // (a folder's raw files), and a short `check` never compiles it.
     const trie = new PhraseTrie(unique);
     let pattern: RegExp | undefined;
