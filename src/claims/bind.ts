@@ -11,6 +11,7 @@
  *   "Vostok reaches back 420,000 years and EPICA Dome C 800,000 years"
  *    ^^^^^^ ─────────── 420,000 ──┘      ^^^^^^^^^^^^ ─── 800,000 (each binds its nearest core)
  */
+import { PhraseTrie } from '../prose/phrase-trie.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
@@ -36,10 +37,10 @@ const ONE_UNIT = /^(?:one|a|an|each|every|per|a\s+single)\s+\p{L}+$/iu;
 const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 
 /**
- * One term's regular expression, and for each of its phrases one piece of plain ASCII in lower case
- * (the longest): a sentence whose lower-case form contains none of them cannot match, and the
- * expression is not run (a few hundred terms were tried on every sentence, and each expression's
- * first run compiles it, about a millisecond with its Unicode classes). Under the `iu` flags an
+ * One term's search (termSearch: what its regular expression, termRegex, matches), and for each of
+ * its phrases one piece of plain ASCII in lower case (the longest): a sentence whose lower-case form
+ * contains none of them cannot match, and the search is not run (a few hundred terms were tried on
+ * every sentence). Under the `iu` flags an
  * ASCII letter or digit matches itself in either case and, of all other characters, only the kelvin
  * sign (which `toLowerCase` turns into "k") and the long s (turned into "s" here); so the test never
  * skips a sentence the expression would match. A phrase with no ASCII piece makes its term always run.
@@ -47,7 +48,7 @@ const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 interface CompiledTerm {
   words: string[];
   /** Made on first use. */
-  regex?: RegExp;
+  search?: (sentence: string) => [number, number][];
   keyWords: string[] | undefined;
 }
 
@@ -96,7 +97,7 @@ function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
   for (const [id, term] of terms) {
     const { keyWords } = term;
     if (keyWords !== undefined && !keyWords.some((w) => lower.includes(w))) continue;
-    const spans = [...sentence.matchAll((term.regex ??= termRegex(term.words)))].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
+    const spans = (term.search ??= termSearch(term.words))(sentence);
     if (spans.length === 0) continue;
     const as = extendedTerm(id, packs);
     hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
@@ -118,7 +119,36 @@ export function extendedTerm(id: string, packs: LoadedPacks): string {
   return packs.term(base) === undefined ? id : base;
 }
 
-function termRegex(words: string[]): RegExp {
+/**
+ * A term's phrases, longest first, found case-insensitively on word boundaries: the spans of
+ * `termRegex(words)`, found by walking the phrases' trie (prose/phrase-trie.ts), which needs no
+ * compilation (each term's expression cost V8 about a millisecond on its first use, some 70 ms of a
+ * short `check`). A list with an empty phrase keeps the expression.
+ */
+function termSearch(words: string[]): (sentence: string) => [number, number][] {
+  const sorted = [...words].sort((a, b) => b.length - a.length);
+  if (sorted.some((w) => w.length === 0)) {
+    const regex = termRegex(words);
+    return (sentence) => [...sentence.matchAll(regex)].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
+  }
+  // The walk costs nothing to make; a compiled expression runs a few times faster, so it takes over
+  // once the term has searched some tens of kilobytes (a long draft or a folder; both find the same).
+  const trie = new PhraseTrie(sorted);
+  let regex: RegExp | undefined;
+  let walked = 0;
+  return (sentence) => {
+    if (regex !== undefined) return [...sentence.matchAll(regex)].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
+    walked += sentence.length;
+    if (walked > TERM_WALK_LIMIT) regex = termRegex(words);
+    return trie.spans(sentence);
+  };
+}
+
+/** Characters a term's trie walks before its expression is compiled. */
+const TERM_WALK_LIMIT = 50_000;
+
+/** The expression whose matches a term's search finds (the group is the character before a phrase). */
+export function termRegex(words: string[]): RegExp {
   const escaped = [...words].sort((a, b) => b.length - a.length).map((w) => w.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&').replace(/\s+/gu, '\\s+'));
   return new RegExp(`(^|[^\\p{L}\\p{N}])(?:${escaped.join('|')})(?![\\p{L}\\p{N}])`, 'giu');
 }
