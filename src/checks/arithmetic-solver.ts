@@ -74,15 +74,18 @@ const PER_TIME_AFTER = new RegExp(String.raw`^[^.;:!?,]{0,12}?(?:^|[^\p{L}])(?:(
 const NOT_A_SPAN = new RegExp(String.raw`(?:^|[^\p{L}])(?:past|last|previous|next|every|each|per|ago|old|back)${S}*$`, 'iu');
 
 /**
- * A change named as the subject of a copula ("the rise was about 80 ppm", "the warming came to 6 °C")
- * or added on top of what came before ("another 184 ppm", "a further 2 °C"): changes the frames'
- * cue words (isStatedChange) do not read.
+ * A change named as the subject of a copula ("the rise was about 80 ppm", "the warming came to 6 °C"),
+ * added on top of what came before ("another 184 ppm", "a further 2 °C") or an amount of a change
+ * named after it ("60 m of sea-level rise"): changes the frames' cue words (isStatedChange) do not read.
  */
 const CHANGE_SUBJECT = new RegExp(
   String.raw`(?:(?:^|[^\p{L}])(?:rise|increase|drop|fall|decline|change|jump|gain|loss|swing|difference|warming|cooling|growth|decrease|reduction|climb|surge|plunge)${S}+(?:was|is|were|came${S}+to|comes${S}+to|amounted${S}+to|amounts${S}+to|totalled|totaled)|(?:^|[^\p{L}])(?:another|a${S}+further|an${S}+extra|an${S}+additional))${S}*$`,
   'iu',
 );
-const isChange = (text: string, q: Quantity): boolean => isStatedChange(text, q) || CHANGE_SUBJECT.test(text.slice(Math.max(0, q.start - 40), q.start));
+/** "60 m of sea-level rise", "5 °C of warming", "80 ppm of CO2 gain": an amount of a change named after it. */
+const OF_CHANGE_AFTER = new RegExp(String.raw`^${S}+of${S}+(?:[\p{L}\d-]+${S}+){0,2}(?:rise|increase|drop|fall|decline|change|jump|gain|loss|warming|cooling|growth|decrease|climb)(?![\p{L}])`, 'iu');
+const isChange = (text: string, q: Quantity): boolean =>
+  isStatedChange(text, q) || CHANGE_SUBJECT.test(text.slice(Math.max(0, q.start - 40), q.start)) || OF_CHANGE_AFTER.test(text.slice(q.end, q.end + 48));
 
 const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
 

@@ -7,7 +7,7 @@
  * other check does, and flags still fall only on the block's own words.
  *
  * A block before counts only when it stands right before (nothing but spaces and markup between
- * them: no heading, no code, no text left out) and names a subject of the packs or holds two
+ * them: no heading, no code, no text left out; for a table's cell, a cell of the same row) and names a subject of the packs or holds two
  * numbers in one sentence. Both make sure a draft read in parts (speed/sparse-markdown.ts) has that
  * block too, so a lead-in is the same whichever way the draft was read.
  */
@@ -32,9 +32,15 @@ export function leadInOf(text: string, blocks: readonly ProseBlock[], index: num
   for (let i = index - 1; i >= 0 && here !== undefined && out.length < LEAD_IN_SENTENCES; i -= 1) {
     const block = blocks[i] as ProseBlock;
     if (NOT_PROSE.has(block.kind) || NOT_PROSE.has(here.kind) || block.heading !== here.heading) break;
-    const end = (block.offsets[block.offsets.length - 1] ?? 0) + 1;
-    const start = here.offsets[0] ?? 0;
-    if (end > start || !FOLLOWS_ON.test(text.slice(end, start))) break;
+    // A table's cell reads on from the cells of its own row only (they open with the same row
+    // header, source/markdown-published.ts); other rows are other records.
+    if (here.kind === 'table-cell' || block.kind === 'table-cell') {
+      if (here.kind !== block.kind || here.offsets[0] !== block.offsets[0]) break;
+    } else {
+      const end = (block.offsets[block.offsets.length - 1] ?? 0) + 1;
+      const start = here.offsets[0] ?? 0;
+      if (end > start || !FOLLOWS_ON.test(text.slice(end, start))) break;
+    }
     const sentences = splitSentences(block.text, i).map((s) => s.text);
     if (!namesSubject(block.text) && !sentences.some((s) => TWO_NUMBERS.test(s))) break;
     out.unshift(...sentences.slice(-(LEAD_IN_SENTENCES - out.length)));

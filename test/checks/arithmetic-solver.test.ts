@@ -23,6 +23,8 @@ describe('a rate drawn from a change and a duration earlier in the paragraph', (
     [['Across roughly 9,000 years the shoreline rose about 90 m.', 'Divide one by the other and you get an average of 10 cm per year.'], '10 cm per year', '1 cm per year'],
     [['The gauge logged a rise of 70 ppm, spread across 7,000 years.', 'So the mean pace was near 0.1 ppm a year.'], '0.1 ppm a year', '0.01 ppm a year'],
     [['Between 16,000 and 10,000 years ago CO2 gained 120 ppm in the Orrin record.', 'That is some 0.2 ppm per year.'], 'some 0.2 ppm per year', 'some 0.02 ppm per year'],
+    // An amount of a change named after it: 45 m ÷ 9,000 yr = 0.5 cm per year.
+    [['The Orrin cores show 45 m of sea-level rise over 9,000 years.', 'That is an average of 2 cm per year.'], '2 cm per year', '0.5 cm per year'],
   ] as [string[], string, string][])('%j: flags %s', (sentences, text, correction) => {
     expect(flagged(...sentences)).toEqual([['arith.rate', text, correction]]);
   });

@@ -24,6 +24,21 @@ describe('arithmetic on figures given one block up (the lead-in)', () => {
     expect(await arithmetic(text)).toEqual([['arith.ratio', '30%', '49%']]);
   });
 
+  it("reads a table's cell on from the cells of its own row, never from the row above", async () => {
+    // 60 m ÷ 6,000 yr = 1 cm per year; 20 m ÷ 4,000 yr = 0.5 cm per year (common practice). The
+    // Holocene row's 1 cm per year would be wrong by the row above; it is read on its own row only.
+    const table = [
+      'Sea level after the Last Glacial Maximum, by stage:',
+      '',
+      '| Stage | Change | Mean pace |',
+      '|---|---|---|',
+      '| Early thaw, 17,000–11,000 years ago | about 60 m of sea-level rise in 6,000 years | an average of 10 cm per year |',
+      '| Late thaw, 11,000–7,000 years ago | about 20 m of sea-level rise in 4,000 years | an average of 0.5 cm per year |',
+      '| Holocene, since 7,000 years ago | a few metres | an average of 1 cm per year |',
+    ].join('\n');
+    expect(await arithmetic(table)).toEqual([['arith.rate', '10 cm per year', '1 cm per year']]);
+  });
+
   it('leaves right sums alone', async () => {
     const thread = ['3/ The Skelda core shows CO2 gaining about 75 ppm over some 5,000 years.', '', "4/ Do the sum and that's roughly 0.015 ppm a year."].join('\n');
     expect(await arithmetic(thread)).toEqual([]);
