@@ -37,11 +37,12 @@ const SPAN_FILLERS = ['only', 'just', 'barely', 'merely', 'a mere', 'a good', 'a
 /**
  * Between the end date and a duration that restates the span: a comma, colon, semicolon, bracket,
  * dash or spaced hyphen, then perhaps up to two lead words ("so that's"), a short noun phrase ending
- * in "of" ("a cold spell of") and a filler ("only"). An adjectival figure may take its article
- * alone: ", a 3,000-year thaw" (see isSpanOfPair).
+ * in "of" ("a cold spell of") or an article and one adjective ("a leisurely", "a brisk"), and a
+ * filler ("only"). An adjectival figure may take its article alone: ", a 3,000-year thaw" (see
+ * isSpanOfPair).
  */
 const PAIR_GAP = new RegExp(
-  String.raw`^${S}*(?:[,:;(—–]|${S}-)${S}*(?:(?:${list(SPAN_LEADS)})(?![\p{L}])[,\s\u00A0]+){0,2}(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+)?(?:(?:${list(SPAN_FILLERS)})${S}+)?$`,
+  String.raw`^${S}*(?:[,:;(—–]|${S}-)${S}*(?:(?:${list(SPAN_LEADS)})(?![\p{L}])[,\s\u00A0]+){0,2}(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+|(?:a|an)${S}+(?!(?:further|additional|extra|past|last|next|previous|later|earlier)(?![\p{L}]))\p{L}+(?:ly)?${S}+)?(?:(?:${list(SPAN_FILLERS)})${S}+)?$`,
   'iu',
 );
 const NOT_A_SPAN = before(['past', 'last', 'previous', 'preceding', 'next', 'every', 'each', 'per']);

@@ -71,12 +71,15 @@ const PPM_WORDS = /(?:ppmv?|parts[\s\u00A0]+per[\s\u00A0]+million)(?![\p{L}])/iu
 
 /**
  * True when a sentence that names no gas speaks of CO2 by context: it states a share of the air,
- * and the sentence before gives a level in ppm and names no other gas ("... the annual increase
- * was under one ppm. Expressed as a share of the air, today's level is about 0.42 percent.").
+ * and the nearest sentence before that gives a level in ppm or names a gas (up to three back) gives
+ * a level in ppm and names no other gas ("... the annual increase was under one ppm. Expressed as a
+ * share of the air, today's level is about 0.42 percent."; "... never above three hundred parts
+ * per million. - And before industry? - Two-eighty, and that's about 2.8 percent of the air.").
  */
-function co2FromContext(text: string, previous: string | undefined): boolean {
-  if (previous === undefined || [...text.matchAll(GAS)].length > 0 || !SHARE_OF_AIR.test(text)) return false;
-  return PPM_WORDS.test(previous) && !OTHER_GAS.test(previous);
+function co2FromContext(text: string, earlier: readonly string[]): boolean {
+  if ([...text.matchAll(GAS)].length > 0 || !SHARE_OF_AIR.test(text)) return false;
+  const nearest = [...earlier].reverse().find((s) => PPM_WORDS.test(s) || [...s.matchAll(GAS)].length > 0);
+  return nearest !== undefined && PPM_WORDS.test(nearest) && !OTHER_GAS.test(nearest);
 }
 
 /** True when percentage `q` states CO2's share of the air. */
@@ -136,8 +139,8 @@ function percentSlip(q: Quantity, iceAge = false): UnitFinding | undefined {
 }
 
 /** CO2 levels in the wrong unit, except the quantities in `restated` (the restatement check has them). */
-export function co2UnitSlips(text: string, qs: Quantity[], restated: ReadonlySet<Quantity>, previous?: string): UnitFinding[] {
-  const byContext = co2FromContext(text, previous);
+export function co2UnitSlips(text: string, qs: Quantity[], restated: ReadonlySet<Quantity>, earlier: readonly string[] = []): UnitFinding[] {
+  const byContext = co2FromContext(text, earlier);
   if (!CO2.test(text) && !byContext) return [];
   const deepTime = DEEP_TIME.test(text) || qs.some((q) => q.dimension === 'age' && q.low >= QUATERNARY_BASE_YR);
   const iceAge = ICE_AGE_TIME.test(text) && !PRESENT_TIME.test(text);

@@ -77,6 +77,8 @@ export interface Restatement {
 export interface PreviousSentence {
   text: string;
   quantities: Quantity[];
+  /** The paragraph's earlier sentences up to this one, in order (the last is `text`). */
+  earlier?: readonly string[];
 }
 
 const sameThing = (a: Quantity, b: Quantity): boolean =>

@@ -67,7 +67,7 @@ function restated(dimensions: Dimension[], sources: (a: Quantity, b: Quantity) =
 function percentPpm(text: string, qs: Quantity[], previous?: PreviousSentence): UnitFinding[] {
   const pairs = restatementsOf(['concentration', 'percent'], text, qs, previous);
   const found = restated(['concentration', 'percent'], nist, () => '1% of the air is 10,000 ppm.')(text, qs, previous);
-  return [...found, ...co2UnitSlips(text, qs, new Set(pairs.flatMap((p) => [p.first, p.second])), previous?.text)];
+  return [...found, ...co2UnitSlips(text, qs, new Set(pairs.flatMap((p) => [p.first, p.second])), previous?.earlier ?? (previous === undefined ? [] : [previous.text]))];
 }
 
 const CHANGE_CUES = TEMPERATURE_CUES.filter((c) => c.reading === 'temperature-change');

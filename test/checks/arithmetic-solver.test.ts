@@ -109,3 +109,23 @@ describe('a from-to pair written with an arrow', () => {
     expect(flagged('CO2 went ~190 → 280 ppm over 9,000 years, about 0.01 ppm per year.')).toEqual([]);
   });
 });
+
+// A span in apposition after its dates, with an article and one adjective before it. Sums by hand
+// (common practice): 14,700 − 12,900 = 1,800; 19,000 − 11,000 = 8,000; 12,900 − 11,700 = 1,200.
+describe('a span after its dates with an adjective ("a leisurely ten thousand years")', () => {
+  it.each([
+    ['The warm spell ran from 14,700 to 12,900 years ago, a brisk 800 years in all.', '800 years', '1,800 years'],
+    ['Sea level climbed from 19,000 to 11,000 years ago, a mere 5,000 years by our count.', '5,000 years', '8,000 years'],
+    ['The Brenner stadial lasted from 12,900 until 11,700 years ago, a bitter 2,200 years.', '2,200 years', '1,200 years'],
+  ])('%s flags %s', (sentence, text, correction) => {
+    expect(flagged(sentence)).toEqual([['arith.duration', text, correction]]);
+  });
+
+  it.each([
+    'The warm spell ran from 14,700 to 12,900 years ago, a brisk 1,800 years in all.',
+    // "a further 600 years" is another span, after the first.
+    'The cold snap ran from 12,900 to 11,700 years ago, a further 600 years later the ice was gone.',
+  ])('leaves alone: %s', (sentence) => {
+    expect(check(sentence)).toEqual([]);
+  });
+});

@@ -49,3 +49,19 @@ describe('a CO2 share written as molecules in every thousand or million', () => 
     expect(flagged(sentence)).toEqual([]);
   });
 });
+
+// A share of the air in a sentence that names no gas is CO2's when the nearest earlier sentence of
+// the paragraph that gives a level or names a gas gives a level in ppm and names no other gas.
+// 2.6% = 26,000 ppm; 0.026% = 260 ppm (NIST SP 811: percent 10^-2, ppm 10^-6).
+describe('a share of the air whose gas the paragraph gives', () => {
+  const check = (...sentences: string[]) => {
+    const sentence = sentences[sentences.length - 1] as string;
+    return checkUnits(sentence, parseQuantities(sentence), sentences.slice(0, -1)).map((f) => [f.ruleId, sentence.slice(f.start, f.end), f.correction]);
+  };
+  it('reads past a line with no level', () => {
+    expect(check('The Orrin core never went above 290 parts per million.', 'And before the mills?', 'Two-sixty, and that is about 2.6 percent of the air.')).toEqual([['unit.percent-ppm', 'about 2.6 percent', 'about 0.026 percent']]);
+  });
+  it('leaves alone a share after a sentence about another gas', () => {
+    expect(check('The Orrin core never went above 290 parts per million.', 'Methane peaked near 700 parts per billion in the same core.', 'At its peak it made up about 2.6 percent of the air.')).toEqual([]);
+  });
+});
