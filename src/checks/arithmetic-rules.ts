@@ -278,7 +278,7 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)];
     const paragraph = [...found, ...notYet(found, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
-    return [...paragraph, ...notYet(paragraph, changesFromLevels(t, qs, p, earlier))];
+    return [...paragraph, ...notYet(paragraph, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
   } },
   { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => {
     const found = [...durations(t, qs, p), ...durationsAcross(t, qs, prev)];
@@ -293,7 +293,8 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     const shares = [...found, ...notYet(found, changeShares(t, qs, p))];
     const paragraph = [...shares, ...notYet(shares, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
     const compared = [...paragraph, ...notYet(paragraph, comparisonsInParagraph(t, qs, earlier))];
-    return [...compared, ...notYet(compared, paceRatiosInParagraph(t, qs, earlier))];
+    const paces = [...compared, ...notYet(compared, paceRatiosInParagraph(t, qs, earlier))];
+    return [...paces, ...notYet(paces, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
   } },
 ];
 

@@ -63,7 +63,7 @@ const basis = "the paragraph's";
  * arithmetic"). Matched anywhere before the figure in its sentence.
  */
 const DRAWN = new RegExp(
-  String.raw`(?:^|[^\p{L}])(?:so|thus|hence|therefore|that${S}+means|which${S}+means|meaning|that's|that’s|that${S}+is|which${S}+is|i\.e\.|works?${S}+out|worked${S}+out|comes?${S}+to|came${S}+to|equals|averag(?:e|es|ed|ing)|on${S}+average|divid(?:e|ed|ing)|division|arithmetic|math|maths|sum|in${S}+all|all${S}+told)(?![\p{L}])`,
+  String.raw`(?:^|[^\p{L}])(?:so|thus|hence|therefore|that${S}+means|which${S}+means|meaning|that's|that’s|that${S}+is|which${S}+is|i\.e\.|works?${S}+out|worked${S}+out|comes?${S}+to|came${S}+to|equals|averag(?:e|es|ed|ing)|on${S}+average|divid(?:e|ed|ing)|division|arithmetic|math|maths|sum|in${S}+all|all${S}+told|in${S}+other${S}+words|put${S}+another${S}+way|or${S}+about|or${S}+roughly)(?![\p{L}])`,
   'iu',
 );
 /** Words that give a figure a time of its own: it is about another period than the figures before. */
@@ -79,7 +79,7 @@ const NOT_A_SPAN = new RegExp(String.raw`(?:^|[^\p{L}])(?:past|last|previous|nex
  * named after it ("60 m of sea-level rise"): changes the frames' cue words (isStatedChange) do not read.
  */
 const CHANGE_SUBJECT = new RegExp(
-  String.raw`(?:(?:^|[^\p{L}])(?:rise|increase|drop|fall|decline|change|jump|gain|loss|swing|difference|warming|cooling|growth|decrease|reduction|climb|surge|plunge)${S}+(?:was|is|were|came${S}+to|comes${S}+to|amounted${S}+to|amounts${S}+to|totalled|totaled)|(?:^|[^\p{L}])(?:another|a${S}+further|an${S}+extra|an${S}+additional))${S}*$`,
+  String.raw`(?:(?:^|[^\p{L}])(?:rise|increase|drop|fall|decline|change|jump|gain|loss|swing|difference|warming|cooling|growth|decrease|reduction|climb|surge|plunge)(?:${S}+(?:in|of|across|during|over|at)${S}+[^,;:.!?\d]{1,40}?)?${S}+(?:was|is|were|came${S}+to|comes${S}+to|amounted${S}+to|amounts${S}+to|totalled|totaled)|(?:^|[^\p{L}])(?:another|a${S}+further|an${S}+extra|an${S}+additional))${S}*$`,
   'iu',
 );
 /** "60 m of sea-level rise", "5 °C of warming", "80 ppm of CO2 gain": an amount of a change named after it. */
@@ -169,44 +169,79 @@ function levelsIn(s: Read, dimension: Dimension, unit: string, like: number): Qu
 }
 
 /**
- * A change drawn from levels given before: "During warm interglacials it rose to about 280 ppm.
- * That means CO2 went up by roughly 150 ppm each time." With a level of its own ("on top of the
- * pre-industrial 280 we've piled another 184 ppm") the change is from that level to a level before;
- * without, between two levels of the nearest sentences. A change that is not the same size as
- * any of them (within a factor of three) is taken to be about something else.
+ * A change, or a percentage change, drawn from levels given before: "During warm interglacials it
+ * rose to about 280 ppm. That means CO2 went up by roughly 150 ppm each time."; "Before industry the
+ * air held about 280 ppm. Today's 420 ppm is therefore roughly 30% higher." With a level of its own
+ * ("on top of the pre-industrial 280 we've piled another 184 ppm") the change is from a level before
+ * to that level; without, between two levels of the nearest sentences. A result that is not the
+ * same size as any of them (within a factor of three) is taken to be about something else. A time
+ * named before the sentence's own level is that level's ("By 2020 it held 412 ppm, an increase of
+ * about 30 percent"); one elsewhere makes the result another period's.
  */
 export function changesFromLevels(text: string, qs: Quantity[], pairs: Pair[], earlier: readonly Previous[]): SolverFinding[] {
   if (pairs.length > 0 || earlier.length === 0) return [];
   return Object.entries(LEVEL_OF).flatMap(([level, changeDim]) => {
     const dimension = level as Dimension;
-    const stated = only(qs.filter((q) => q.dimension === changeDim && isChange(text, q)));
-    if (stated === undefined || !DRAWN.test(text.slice(0, stated.start)) || OWN_TIME.test(text) || PER_TIME_AFTER.test(text.slice(stated.end))) return [];
-    if (qs.some((q) => q.dimension === 'age' || q.dimension === 'duration' || RATE_OF[q.dimension] !== undefined)) return [];
+    const percent = only(qs.filter((q) => q.dimension === 'percent' && (isChange(text, q) || COMPARED_ALONE.test(text.slice(q.end)))));
+    const change = only(qs.filter((q) => q.dimension === changeDim && isChange(text, q)));
+    const stated = change ?? percent;
+    if (stated === undefined || (change !== undefined && percent !== undefined)) return [];
+    const isPercent = stated === percent;
+    if (PER_TIME_AFTER.test(text.slice(stated.end))) return [];
+    if (qs.some((q) => q.dimension === 'duration' || RATE_OF[q.dimension] !== undefined || (q.dimension === 'age' && q.start > stated.start))) return [];
     const here: Read = { text, qs: qs.filter((q) => q !== stated), pairs, distance: 0 };
-    const own = levelsIn(here, dimension, stated.statedUnit, stated.value).filter((q) => q.start < stated.start);
-    if (own.length > 1) return [];
+    const just = here.qs.filter((q) => q.end <= stated.start).at(-1);
+    const apposed = just !== undefined && (just.dimension === dimension || just.dimension === 'number') && APPOSED_CHANGE.test(text.slice(just.end, stated.start));
+    if (!DRAWN.test(text.slice(0, stated.start)) && !apposed) return [];
     const reads = readAll(text, qs, pairs, earlier).slice(1);
-    const withLevels = reads.map((s) => ({ s, levels: levelsIn(s, dimension, stated.statedUnit, stated.value).filter((q) => q.dimension === dimension) })).filter((x) => x.levels.length > 0).slice(0, own.length === 1 ? 1 : 2);
-    // A sentence that names a time of its own for its levels ("in 2024") is as good as any: the change is between levels.
+    const firstLevel = reads.flatMap((r) => r.qs.filter((q) => q.dimension === dimension && !isChange(r.text, q)))[0];
+    const unit = isPercent ? (here.qs.find((q) => q.dimension === dimension)?.statedUnit ?? firstLevel?.statedUnit) : stated.statedUnit;
+    const like = isPercent ? (here.qs.find((q) => q.dimension === dimension)?.value ?? firstLevel?.value ?? 0) : stated.value;
+    if (unit === undefined) return [];
+    const own = levelsIn(here, dimension, unit, like).filter((q) => q.start < stated.start);
+    if (own.length > 1 || qs.some((q) => q.start > stated.start && (q.dimension === dimension || (q.dimension === 'number' && q !== stated)))) return [];
+    // A time of its own, outside the words that give the sentence's own level, is another period's.
+    const timeFrom = own.length === 1 ? (own[0] as Quantity).end : 0;
+    if (OWN_TIME.test(text.slice(timeFrom)) || (own.length === 0 && qs.some((q) => q.dimension === 'age'))) return [];
+    const withLevels = reads.map((r) => ({ r, levels: levelsIn(r, dimension, unit, like).filter((q) => q.dimension === dimension) })).filter((x) => x.levels.length > 0).slice(0, own.length === 1 ? 1 : 2);
     const candidates: Candidate[] = [];
     const add = (a: Quantity, b: Quantity, distance: number, where: string): void => {
       if (a.value === b.value) return;
-      candidates.push({ value: size(minus(w(b), w(a))), measures: `the difference between ${a.text} and ${b.text}${where}`, distance });
+      if (!isPercent) {
+        candidates.push({ value: size(minus(w(b), w(a))), measures: `the difference between ${a.text} and ${b.text}${where}`, distance });
+        return;
+      }
+      // From the earlier level to this sentence's; without one, from the lower level for a rise
+      // and from the higher for a drop.
+      const down = DOWNWARD.test(text.slice(0, stated.start)) || DOWNWARD.test(text.slice(stated.end, stated.end + 12));
+      const [x, y] = own.length === 1 || (a.value < b.value) !== down ? [a, b] : [b, a];
+      const r = divide(w(y), w(x));
+      if (r !== undefined) candidates.push({ value: size(percentOf(r)), measures: `the percentage change from ${x.text} to ${y.text}${where}`, distance });
     };
     if (own.length === 1) {
-      for (const { s, levels } of withLevels) for (const l of levels) add(l, own[0] as Quantity, s.distance, ' in an earlier sentence');
+      for (const { r, levels } of withLevels) for (const l of levels) add(l, own[0] as Quantity, r.distance, ' in an earlier sentence');
     } else {
-      const all = withLevels.flatMap(({ s, levels }) => levels.map((l) => ({ l, d: s.distance })));
+      const all = withLevels.flatMap(({ r, levels }) => levels.map((l) => ({ l, d: r.distance })));
       all.forEach((x, i) => all.slice(i + 1).forEach((y) => add(y.l, x.l, x.d + y.d, ' in earlier sentences')));
     }
     candidates.sort((a, b) => a.distance - b.distance);
     const found = verdict(stated, candidates, (c) => facing(c, stated.value));
     if (found === undefined) return [];
-    const r = Math.abs(stated.value) / found.value.value;
-    if (!(r > 1 / 3 && r < 3)) return [];
+    const ratio = Math.abs(stated.value) / found.value.value;
+    if (!(ratio > 1 / 3 && ratio < 3)) return [];
     return [{ stated, computed: facing(found.value, stated.value), measures: found.measures, basis }];
   });
 }
+
+/** Words of a change downward; any other change is read as a rise. */
+const DOWNWARD = /(?:^|[^\p{L}])(?:drop|dropped|fall|fell|fallen|decline|declined|decrease|decreased|loss|lost|reduction|cut|plunge|plunged|sank|lower|below|less|down|cooling|cooled)(?![\p{L}])/iu;
+/** A change named in apposition right after the sentence's own level: ", an increase of", " (a rise of". */
+const APPOSED_CHANGE = new RegExp(String.raw`^${S}*[,(—–]${S}*(?:(?:a|an)${S}+(?:[\p{L}-]+${S}+)?(?:rise|increase|jump|gain|climb|growth|drop|fall|decline|decrease|loss)${S}+of|up|down)${S}*$`, 'iu');
+
+/** "roughly 30% higher." with nothing it is compared with after it: the comparison is with what came before. */
+const COMPARED_ALONE = new RegExp(String.raw`^${S}*(?:higher|lower|more|less|greater|larger|smaller|up|down)${S}*(?:[.;!?]|$)`, 'iu');
+/** r as a percentage change (r − 1) × 100. */
+const percentOf = (r: Derived): Derived => ({ value: (r.value - 1) * 100, low: (r.low - 1) * 100, high: (r.high - 1) * 100 });
 
 /** The rates a sentence gives: stated, or a change over the time it took. A rate of a time that reaches the present is left out. */
 function ratesOf(s: Read, dimension: Dimension): Candidate[] {
@@ -227,8 +262,20 @@ export function paceRatiosInParagraph(text: string, qs: Quantity[], earlier: rea
   const stated = only(qs.filter((q) => isPaceRatio(text, q) || timesTheMeasure(text, q)));
   if (stated === undefined) return [];
   const now = only(qs.filter((q) => RATE_OF[q.dimension] !== undefined));
-  if (now === undefined || now.start > stated.start) return [];
   const reads = readAll(text, qs, [], earlier).slice(1);
+  // "... rising by about 2.5 ppm per year, while in the deglaciation it rose by about 0.01 ppm per
+  // year. That is some 25 times faster.": no pace here, both in the nearest sentence that gives one.
+  if (now === undefined && qs.length === 1 && isPaceRatio(text, stated) && DRAWN.test(text.slice(0, stated.start))) {
+    const near = reads.find((r) => r.qs.some((q) => RATE_OF[q.dimension] !== undefined));
+    const two = near?.qs.filter((q) => RATE_OF[q.dimension] !== undefined) ?? [];
+    const [a, b] = two as [Quantity, Quantity];
+    if (two.length !== 2 || a.dimension !== b.dimension) return [];
+    const r = divide(w(a), w(b));
+    if (r === undefined) return [];
+    const found = verdict(stated, [{ value: (stated.value < 1) === (r.value < 1) ? r : invert(r), measures: `the ratio of ${a.text} to ${b.text} in the sentence before`, distance: 1 }]);
+    return found === undefined ? [] : [{ stated, computed: found.value, measures: found.measures, basis }];
+  }
+  if (now === undefined || now.start > stated.start) return [];
   const candidates = reads.flatMap((s) => ratesOf(s, now.dimension)).flatMap((then): Candidate[] => {
     const r = divide(w(now), then.value);
     return r === undefined ? [] : [{ value: (stated.value < 1) === (r.value < 1) ? r : invert(r), measures: `the ratio of ${now.text} to ${then.measures} in an earlier sentence`, distance: then.distance }];

@@ -129,3 +129,39 @@ describe('a span after its dates with an adjective ("a leisurely ten thousand ye
     expect(check(sentence)).toEqual([]);
   });
 });
+
+// A percentage change drawn from levels given before. Sums by hand (common practice): 412 ÷ 280 − 1
+// = 47 %; 415 ÷ 290 − 1 = 43 %; 290 ÷ 415 − 1 = −30 %; 330 ÷ 300 − 1 = 10 %.
+describe('a percentage change drawn from levels earlier in the paragraph', () => {
+  it.each([
+    [['In 1750 the Orrin flasks held 280 ppm.', 'By 2021 they held 412 ppm, an increase of about 30 percent.'], 'about 30 percent', 'about 47 percent'],
+    [['Before industry the Brenner air held about 290 ppm.', 'Today’s 415 ppm is therefore roughly 60% higher.'], 'roughly 60%', 'roughly 43%'],
+    [['The glacial lake level was 300 m.', 'At the thaw’s end it was 330 m.', 'That is a rise of some 30 percent.'], 'some 30 percent', 'some 10 percent'],
+    [['Before industry the Brenner air held about 290 ppm.', 'Last year it held 415 ppm.', 'So going back would mean a drop of some 43 percent.'], 'some 43 percent', 'some 30 percent'],
+  ] as [string[], string, string][])('%j: flags %s', (sentences, text, correction) => {
+    expect(flagged(...sentences)).toEqual([['arith.ratio', text, correction]]);
+  });
+
+  it.each([
+    ['right percentage', ['In 1750 the Orrin flasks held 280 ppm.', 'By 2021 they held 412 ppm, an increase of about 47 percent.']],
+    ['right drop', ['Before industry the Brenner air held about 290 ppm.', 'Last year it held 415 ppm.', 'So going back would mean a drop of some 30 percent.']],
+    ['held against a base named after it', ['Before industry the Brenner air held about 290 ppm.', 'Today’s 415 ppm is roughly 10% higher than the 1990 level of 377 ppm.']],
+    ['a yearly percentage', ['In 1750 the Orrin flasks held 280 ppm.', 'So it now rises by about 0.6 percent a year.']],
+  ] as [string, string[]][])('leaves alone: %s', (_why, sentences) => {
+    expect(check(...sentences).filter((f) => f.ruleId === 'arith.ratio')).toEqual([]);
+  });
+});
+
+// Both paces in the sentence before, the multiple here: 2.5 ÷ 0.01 = 250; 0.3 ÷ 0.002 = 150 (common practice).
+describe('a multiple of two paces given in the sentence before', () => {
+  it.each([
+    [['Today CO2 climbs about 2.5 ppm per year, while in the thaw it gained about 0.01 ppm per year.', 'That is some 25 times faster.'], 'some 25 times', 'some 250 times'],
+    [['The Orrin delta now grows 0.3 m per year; in the stadial it grew 0.002 m per year.', 'So it is now about 15 times faster.'], 'about 15 times', 'about 150 times'],
+  ] as [string[], string, string][])('%j: flags %s', (sentences, text, correction) => {
+    expect(flagged(...sentences)).toEqual([['arith.ratio', text, correction]]);
+  });
+
+  it('leaves a right multiple alone', () => {
+    expect(check('Today CO2 climbs about 2.5 ppm per year, while in the thaw it gained about 0.01 ppm per year.', 'That is some 250 times faster.')).toEqual([]);
+  });
+});
