@@ -191,7 +191,10 @@ export function changesFromLevels(text: string, qs: Quantity[], pairs: Pair[], e
     if (qs.some((q) => q.dimension === 'duration' || RATE_OF[q.dimension] !== undefined || (q.dimension === 'age' && q.start > stated.start))) return [];
     const here: Read = { text, qs: qs.filter((q) => q !== stated), pairs, distance: 0 };
     const just = here.qs.filter((q) => q.end <= stated.start).at(-1);
-    const apposed = just !== undefined && (just.dimension === dimension || just.dimension === 'number') && APPOSED_CHANGE.test(text.slice(just.end, stated.start));
+    // "By 2021 they held 412 ppm, an increase of about 30 percent": a percentage in apposition to a
+    // level this sentence dates is its change from the level before. (A change in ppm so placed
+    // needs a word that refers back: arithmetic-context.ts.)
+    const apposed = isPercent && just !== undefined && (just.dimension === dimension || just.dimension === 'number') && APPOSED_CHANGE.test(text.slice(just.end, stated.start)) && OWN_TIME.test(text.slice(0, just.start));
     if (!DRAWN.test(text.slice(0, stated.start)) && !apposed) return [];
     const reads = readAll(text, qs, pairs, earlier).slice(1);
     const firstLevel = reads.flatMap((r) => r.qs.filter((q) => q.dimension === dimension && !isChange(r.text, q)))[0];
