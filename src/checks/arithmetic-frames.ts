@@ -77,7 +77,7 @@ export function findPairs(text: string, qs: Quantity[]): Pair[] {
     const b = qs[i + 1] as Quantity;
     if (to !== undefined && FROM.test(head(text, a))) pairs.push({ from: i, to });
     // "~190 → 280 ppm": an arrow is "from ... to" in one sign; the unit may be written once, at the end.
-    else if (ARROW.test(text.slice(a.end, b.start)) && (a.dimension === b.dimension || (a.dimension === 'number' && b.dimension !== 'number'))) pairs.push({ from: i, to: i + 1 });
+    else if (ARROW.test(text.slice(a.end, b.start)) && b.dimension !== 'number' && b.dimension !== 'ratio' && b.dimension !== 'percent' && (a.dimension === b.dimension || a.dimension === 'number')) pairs.push({ from: i, to: i + 1 });
     else if (a.dimension === 'age' && datesFromTo(text, qs, i)) pairs.push({ from: i, to: i + 1 });
     else {
       const end = startEnd(text, qs, i) ?? datesBetween(text, qs, i) ?? endOfTwoDates(text, qs, i);

@@ -88,6 +88,8 @@ function apposedChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] 
  */
 function sameChangeUnit(q: Quantity, a: Quantity, b: Quantity): boolean {
   const asWritten = (x: Quantity): boolean => x.statedUnit !== '' && x.unit === x.statedUnit.replace(/^degC$/u, 'K');
+  // A ratio or a percentage is a relative change, never the difference itself ("2,490 → 1,910, about a quarter less").
+  if (q.dimension === 'ratio' || q.dimension === 'percent') return false;
   if (a.dimension === 'number' && b.dimension === 'number') return q.dimension !== 'number' && q.dimension !== 'age' && q.dimension !== 'duration' && asWritten(q);
   return q.dimension === DIFFERENCE[a.dimension] || (q.dimension === 'number' && a.dimension !== 'age' && a.dimension !== 'duration' && asWritten(b));
 }

@@ -107,6 +107,8 @@ describe('a from-to pair written with an arrow', () => {
   it('reads the pair, with the unit written once', () => {
     expect(flagged('CO2 went ~190 → 280 ppm over 9,000 years, about 0.1 ppm per year.')).toEqual([['arith.rate', 'about 0.1 ppm per year', 'about 0.01 ppm per year']]);
     expect(flagged('CO2 went ~190 → 280 ppm over 9,000 years, about 0.01 ppm per year.')).toEqual([]);
+    // Figures with no unit, and a fraction that is a relative change, not the difference itself.
+    expect(flagged('The build took 2,400 → 1,800 ms of CPU, about a quarter less.')).toEqual([]);
   });
 });
 
