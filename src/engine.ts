@@ -13,6 +13,7 @@ import { isChecklistText } from './report/checklist-lines.js';
 import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
+import { leadInOf } from './prose/lead-in.js';
 import { entityWordsOf, subjectWordsOf } from './propositions/index.js';
 import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
@@ -63,6 +64,11 @@ export interface DraftOptions {
    * when `blocks` are some of a larger draft's (the editor re-checks only changed blocks).
    */
   subjectBeside?: readonly boolean[];
+  /**
+   * Per block, its lead-in (prose/lead-in.ts: the sentences of the blocks just before it that the
+   * arithmetic and unit checks read on from); given with `subjectBeside` for some of a draft's blocks.
+   */
+  leadIns?: readonly (readonly string[])[];
   /**
    * Keep each sentence's findings for a later check of the same paragraph window (the editor's
    * re-check after an edit; speed/sentence-cache.ts). Default true; a run over files
@@ -234,6 +240,8 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const scene = sceneBefore(draft.blocks, blockIndex, packs);
     const opening: ParagraphContext = scene === undefined ? context : { ...context, scene };
     const windowOf = paragraphWindows(paragraph);
+    let leadIn: readonly string[] | undefined;
+    const leadInHere = (): readonly string[] => (leadIn ??= options.leadIns?.[blockIndex] ?? leadInOf(draft.text, draft.blocks, blockIndex, (t) => subjects.test(t)));
     const named = subjectsNamed(paragraph, subjects);
     sentences.forEach((sentence, index) => {
       const { window, at } = windowOf(index);
@@ -244,7 +252,9 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text)));
       const here = at === index ? opening : context;
       const previousOnTopic = (): boolean => inWindow && topic.test(window[at - 1] ?? '');
-      const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic, here, previousOnTopic) : examineCached(window, at, packs, onTopic, here, previousOnTopic);
+      // The first sentences of a block read on from the blocks just before it (its lead-in).
+      const lead = at === index && index < CONTEXT_SENTENCES && (DIGIT.test(sentence.text) || hasTwoNumerals(sentence.text)) ? leadInHere() : [];
+      const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic, here, previousOnTopic, lead) : examineCached(window, at, packs, onTopic, here, previousOnTopic, lead);
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -306,10 +316,11 @@ function examineCached(
   onTopic: boolean,
   context: ParagraphContext,
   previousOnTopic: () => boolean,
+  leadIn: readonly string[],
 ): SentenceFindings | undefined {
   const previous = previousOnTopic();
-  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.scene ?? ''], () =>
-    examineSentence(paragraph, index, packs, onTopic, context, () => previous),
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.scene ?? '', leadIn], () =>
+    examineSentence(paragraph, index, packs, onTopic, context, () => previous, leadIn),
   );
 }
 
@@ -340,13 +351,15 @@ function examineSentence(
   onTopic: boolean,
   context: ParagraphContext,
   previousOnTopic: () => boolean,
+  leadIn: readonly string[] = [],
 ): SentenceFindings | undefined {
   const text = paragraph[index] ?? '';
   // Only the last few sentences are context (the checks read the one before): copying every
-  // earlier sentence would make a long paragraph quadratic.
-  const before = paragraph.slice(Math.max(0, index - CONTEXT_SENTENCES), index);
+  // earlier sentence would make a long paragraph quadratic. A block's first sentences read on
+  // from its lead-in.
+  const before = [...leadIn, ...paragraph.slice(Math.max(0, index - CONTEXT_SENTENCES), index)].slice(-CONTEXT_SENTENCES);
   if (!onTopic) {
-    const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs) : undefined;
+    const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs, before) : undefined;
     if (carried !== undefined) return carried;
     if (!TWO_NUMBERS.test(text) && !hasTwoNumerals(text)) return undefined;
     const quantities = parseQuantities(text);
@@ -397,14 +410,13 @@ function subjectsNamed(paragraph: string[], subjects: TopicMatcher): SubjectsNam
  * Dome C core was drilled by ten nations. It reaches down 3,270 metres."): a claim when that number
  * binds, checked like any other; undefined otherwise.
  */
-function carriedSubject(paragraph: string[], index: number, packs: LoadedPacks): SentenceFindings | undefined {
+function carriedSubject(paragraph: string[], index: number, packs: LoadedPacks, before: readonly string[]): SentenceFindings | undefined {
   const text = paragraph[index] ?? '';
   const quantities = restoreElidedUnits(text, parseQuantities(text));
   const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
   if (bindings.length === 0) return undefined;
-  const context = paragraph.slice(0, index);
   const reference = checkReferences(text, quantities, bindings, packs);
-  const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, context), ...checkUnits(text, quantities, context)]);
+  const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)]);
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
 

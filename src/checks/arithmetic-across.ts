@@ -15,6 +15,8 @@ import { divide, invert, minus, rangeSpan, size, type Derived } from './arithmet
 import { findPairs, isPaceRatio, timesTheMeasure } from './arithmetic-frames.js';
 import type { Previous } from './arithmetic-context.js';
 import { spanOfDates } from './arithmetic-spans.js';
+import { disjoint } from './arithmetic-levels.js';
+import { rateReadings } from './arithmetic-solver.js';
 
 /** A finding from two sentences, with the basis named. */
 export interface AcrossFinding {
@@ -83,5 +85,12 @@ export function paceRatiosAcross(text: string, qs: Quantity[], previous: Previou
   const r = divide(w(now), w(then));
   if (r === undefined) return [];
   const faced = (stated.value < 1) === (r.value < 1) ? r : invert(r);
+  // The rate before may be a slip of its own sentence ("90 ppm over 7,000 yrs, so about 0.13 ppm
+  // per year"): a multiple that fits the rate its figures give is no slip of this sentence.
+  const fits = rateReadings(previous.text, previous.quantities, now.dimension).some((then) => {
+    const x = divide(w(now), then);
+    return x !== undefined && !disjoint(stated, (stated.value < 1) === (x.value < 1) ? x : invert(x));
+  });
+  if (fits) return [];
   return [{ stated, computed: faced, measures: `the ratio of ${now.text} to ${then.text} in the sentence before`, basis: "the paragraph's" }];
 }

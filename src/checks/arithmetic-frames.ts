@@ -37,18 +37,22 @@ const SPAN_FILLERS = ['only', 'just', 'barely', 'merely', 'a mere', 'a good', 'a
 /**
  * Between the end date and a duration that restates the span: a comma, colon, semicolon, bracket,
  * dash or spaced hyphen, then perhaps up to two lead words ("so that's"), a short noun phrase ending
- * in "of" ("a cold spell of") and a filler ("only"). An adjectival figure may take its article
- * alone: ", a 3,000-year thaw" (see isSpanOfPair).
+ * in "of" ("a cold spell of") or an article and one adjective ("a leisurely", "a brisk"), and a
+ * filler ("only"). An adjectival figure may take its article alone: ", a 3,000-year thaw" (see
+ * isSpanOfPair).
  */
 const PAIR_GAP = new RegExp(
-  String.raw`^${S}*(?:[,:;(—–]|${S}-)${S}*(?:(?:${list(SPAN_LEADS)})(?![\p{L}])[,\s\u00A0]+){0,2}(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+)?(?:(?:${list(SPAN_FILLERS)})${S}+)?$`,
+  String.raw`^${S}*(?:[,:;(—–]|${S}-)${S}*(?:(?:${list(SPAN_LEADS)})(?![\p{L}])[,\s\u00A0]+){0,2}(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+|(?:a|an)${S}+(?!(?:further|additional|extra|past|last|next|previous|later|earlier)(?![\p{L}]))\p{L}+(?:ly)?${S}+)?(?:(?:${list(SPAN_FILLERS)})${S}+)?$`,
   'iu',
 );
 const NOT_A_SPAN = before(['past', 'last', 'previous', 'preceding', 'next', 'every', 'each', 'per']);
 const RATIO_AFTER = after([...CHANGE_NOUNS, 'faster', 'slower', 'quicker', 'higher', 'larger', 'greater', 'more', 'lower', 'less', 'smaller', 'above', 'below', 'as high', 'as large', 'as much', 'as great', 'as long']);
 const RATIO_VERB = /^(?:doubled|tripled|quadrupled|halved|doubling|tripling|halving|doubles|triples|quadruples|halves|[\p{N}.]+[-\s]?fold|\p{L}+[-\s]?fold)$/iu;
-/** "higher than", "more CO2 than", "above": a comparison, with up to three words before "than". */
-const COMPARATIVE_AFTER = new RegExp(String.raw`^[\s\u00A0-]*(?:(?:higher|more|greater|larger|lower|less|smaller|faster|slower|quicker)(?:${S}+[^\s.;,]+){0,3}${S}+than|above|below)(?![\p{L}])`, 'iu');
+/**
+ * "higher than", "more CO2 than", "above": a comparison, with up to three words before "than"; a
+ * change noun held against its base ("a 34% increase on the 280 ppm of 1750", "a rise over").
+ */
+const COMPARATIVE_AFTER = new RegExp(String.raw`^[\s\u00A0-]*(?:(?:higher|more|greater|larger|lower|less|smaller|faster|slower|quicker)(?:${S}+[^\s.;,]+){0,3}${S}+than|above|below|(?:increase|rise|gain|jump|climb|drop|fall|decrease|decline)${S}+(?:on|over))(?![\p{L}])`, 'iu');
 
 /** A from-to pair: indices of the two ends in the quantity list. */
 export interface Pair {
@@ -56,6 +60,7 @@ export interface Pair {
   to: number;
 }
 
+const ARROW = new RegExp(String.raw`^${S}*(?:→|⟶|->|–>|-->)${S}*$`, 'u');
 const head = (text: string, q: Quantity): string => text.slice(Math.max(0, q.start - 40), q.start);
 const tail = (text: string, q: Quantity): string => text.slice(q.end, q.end + 32);
 
@@ -69,7 +74,10 @@ export function findPairs(text: string, qs: Quantity[]): Pair[] {
   for (let i = 0; i + 1 < qs.length; i++) {
     const a = qs[i] as Quantity;
     const to = toEnd(text, qs, i);
+    const b = qs[i + 1] as Quantity;
     if (to !== undefined && FROM.test(head(text, a))) pairs.push({ from: i, to });
+    // "~190 → 280 ppm": an arrow is "from ... to" in one sign; the unit may be written once, at the end.
+    else if (ARROW.test(text.slice(a.end, b.start)) && b.dimension !== 'number' && b.dimension !== 'ratio' && b.dimension !== 'percent' && (a.dimension === b.dimension || a.dimension === 'number')) pairs.push({ from: i, to: i + 1 });
     else if (a.dimension === 'age' && datesFromTo(text, qs, i)) pairs.push({ from: i, to: i + 1 });
     else {
       const end = startEnd(text, qs, i) ?? datesBetween(text, qs, i) ?? endOfTwoDates(text, qs, i);

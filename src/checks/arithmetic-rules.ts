@@ -14,6 +14,7 @@ import { writtenSums } from './arithmetic-equations.js';
 import { perLength } from './arithmetic-per-length.js';
 import { changeShares } from './arithmetic-shares.js';
 import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragraph.js';
+import { changesFromLevels, paceRatiosInParagraph, ratesInParagraph } from './arithmetic-solver.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
@@ -87,6 +88,8 @@ function apposedChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] 
  */
 function sameChangeUnit(q: Quantity, a: Quantity, b: Quantity): boolean {
   const asWritten = (x: Quantity): boolean => x.statedUnit !== '' && x.unit === x.statedUnit.replace(/^degC$/u, 'K');
+  // A ratio or a percentage is a relative change, never the difference itself ("2,490 → 1,910, about a quarter less").
+  if (q.dimension === 'ratio' || q.dimension === 'percent') return false;
   if (a.dimension === 'number' && b.dimension === 'number') return q.dimension !== 'number' && q.dimension !== 'age' && q.dimension !== 'duration' && asWritten(q);
   return q.dimension === DIFFERENCE[a.dimension] || (q.dimension === 'number' && a.dimension !== 'age' && a.dimension !== 'duration' && asWritten(b));
 }
@@ -142,7 +145,9 @@ function changeAndSpan(text: string, qs: Quantity[], pairs: Pair[], changeDim: D
   const over = (q: Quantity): boolean => !paired.has(q) && qs.some((d) => changesOver(text, q, d));
   const rate = qs.find((q) => RATE_OF[q.dimension] === changeDim);
   const explicit = only(qs.filter((q) => !except.includes(q) && q.dimension === changeDim && (isStatedChange(text, q) || (rate !== undefined && comesToRate(text, q, rate)) || over(q))));
-  const pair = only(pairs.filter((p) => DIFFERENCE[qs[p.from]?.dimension ?? 'number'] === changeDim));
+  // "~190 → 280 ppm": a pair whose unit is written at its end only takes the end's dimension.
+  const pairDim = (p: Pair): Dimension => (qs[p.from]?.dimension === 'number' ? qs[p.to]?.dimension : qs[p.from]?.dimension) ?? 'number';
+  const pair = only(pairs.filter((p) => DIFFERENCE[pairDim(p)] === changeDim));
   const pairEnds = pair === undefined ? undefined : ends(qs, pair);
   const change = explicit !== undefined ? w(explicit) : pairEnds === undefined ? undefined : minus(w(pairEnds[1]), w(pairEnds[0]));
   const spanOfChange = only(qs.filter((q) => !except.includes(q) && q.dimension === 'duration' && isSpanOfChange(text, q)));
@@ -274,18 +279,24 @@ const notYet = (found: Finding[], more: Finding[]): Finding[] => more.filter((f)
 export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)];
-    return [...found, ...notYet(found, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
+    const paragraph = [...found, ...notYet(found, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
+    return [...paragraph, ...notYet(paragraph, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
   } },
   { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => {
     const found = [...durations(t, qs, p), ...durationsAcross(t, qs, prev)];
     return [...found, ...notYet(found, spansAcross(t, qs, prev))];
   } },
-  { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev) => [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)] },
+  { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev, earlier = []) => {
+    const found = [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)];
+    return [...found, ...notYet(found, ratesInParagraph(t, qs, p, earlier))];
+  } },
   { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)];
     const shares = [...found, ...notYet(found, changeShares(t, qs, p))];
     const paragraph = [...shares, ...notYet(shares, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
-    return [...paragraph, ...notYet(paragraph, comparisonsInParagraph(t, qs, earlier))];
+    const compared = [...paragraph, ...notYet(paragraph, comparisonsInParagraph(t, qs, earlier))];
+    const paces = [...compared, ...notYet(compared, paceRatiosInParagraph(t, qs, earlier))];
+    return [...paces, ...notYet(paces, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
   } },
 ];
 

@@ -21,6 +21,16 @@ import type { UnitFinding } from './units-rules.js';
  */
 export const PLAUSIBLE_CO2_PPM = { low: 150, high: 2000 } as const;
 
+/**
+ * The CO2 levels of the ice-core era before industry, in ppm: the 800,000-year record's range
+ * (172-300 ppm, Lüthi et al. 2008). A share the draft places in a glacial, an interglacial or the
+ * pre-industrial air must read inside it.
+ */
+export const ICE_CORE_CO2_PPM = { low: 172, high: 300 } as const;
+/** Words that place a level in the ice-core era before industry; a time of today's air does not. */
+const ICE_AGE_TIME = /(?:^|[^\p{L}])(?:glacials?|interglacials?|glacial[\s\u00A0-]+maximum|LGM|ice[\s\u00A0-]+ages?|pre-?industrial|deglaciation|stadials?|interstadials?)(?![\p{L}])/iu;
+const PRESENT_TIME = /(?:^|[^\p{L}])(?:today|today's|today’s|now|nowadays|modern|present|current|currently|(?:19[5-9]|20[0-9])\d)(?![\p{L}\p{N}])/iu;
+
 const PPM_PER_PERCENT = 1e4;
 /**
  * Deep time, before the ice ages began (2.58 million years ago, the base of the Quaternary): CO2
@@ -44,7 +54,7 @@ const OF_SOMETHING_ELSE = new RegExp(String.raw`^${S}*of(?!${S}+${AIR})(?![\p{L}
 const CHANGE_SUBJECT = /(?:^|[^\p{L}])(?:rise|increase|growth|gain|jump|climb|drop|fall|decline|decrease|change|loss|reduction)[\s\u00A0]+(?:in|of)[\s\u00A0]+(?:[\p{L}-]+[\s\u00A0]+){0,2}(?:CO2|CO₂|carbon[\s\u00A0]+dioxide)(?![\p{L}\d])[^;:.!?]*$/iu;
 const RATE_AFTER = new RegExp(String.raw`^${S}*(?:(?:per|a|an|each|every)${S}+(?:year|decade|century|annum|millennium)|annually|yearly)`, 'iu');
 const LEVEL_BEFORE = new RegExp(
-  String.raw`(?:^|[^\p{L}])(?:at|of|reached|reaching|was|were|is|are|stood${S}+at|to|hit|peaked${S}+at|near|around|about|from|between|and|made${S}+up|makes${S}+up|make${S}+up|only|just|holds|held|forms|comprises|constitutes|amounts${S}+to|accounts${S}+for)${S}*$`,
+  String.raw`(?:^|[^\p{L}])(?:at|of|reached|reaching|was|were|is|are|stood${S}+at|to|hit|peaked${S}+at|near|around|about|from|between|and|made${S}+up|makes${S}+up|make${S}+up|only|just|holds|held|hold|carries|carried|carry|contains|contained|contain|forms|comprises|constitutes|amounts${S}+to|accounts${S}+for)${S}*$`,
   'iu',
 );
 
@@ -61,12 +71,15 @@ const PPM_WORDS = /(?:ppmv?|parts[\s\u00A0]+per[\s\u00A0]+million)(?![\p{L}])/iu
 
 /**
  * True when a sentence that names no gas speaks of CO2 by context: it states a share of the air,
- * and the sentence before gives a level in ppm and names no other gas ("... the annual increase
- * was under one ppm. Expressed as a share of the air, today's level is about 0.42 percent.").
+ * and the nearest sentence before that gives a level in ppm or names a gas (up to three back) gives
+ * a level in ppm and names no other gas ("... the annual increase was under one ppm. Expressed as a
+ * share of the air, today's level is about 0.42 percent."; "... never above three hundred parts
+ * per million. - And before industry? - Two-eighty, and that's about 2.8 percent of the air.").
  */
-function co2FromContext(text: string, previous: string | undefined): boolean {
-  if (previous === undefined || [...text.matchAll(GAS)].length > 0 || !SHARE_OF_AIR.test(text)) return false;
-  return PPM_WORDS.test(previous) && !OTHER_GAS.test(previous);
+function co2FromContext(text: string, earlier: readonly string[]): boolean {
+  if ([...text.matchAll(GAS)].length > 0 || !SHARE_OF_AIR.test(text)) return false;
+  const nearest = [...earlier].reverse().find((s) => PPM_WORDS.test(s) || [...s.matchAll(GAS)].length > 0);
+  return nearest !== undefined && PPM_WORDS.test(nearest) && !OTHER_GAS.test(nearest);
 }
 
 /** True when percentage `q` states CO2's share of the air. */
@@ -86,8 +99,29 @@ function nearestPlausible(ppm: number): number {
   return [-1, 1, -2, 2, -3, 3, -4, 4].find((k) => inRange(ppm * 10 ** k)) ?? 0;
 }
 
-function percentSlip(q: Quantity): UnitFinding | undefined {
+/** The power of ten, nearest first, that brings `ppm` into the ice-core range (0 when none does). */
+function nearestIceCore(ppm: number): number {
+  return [-1, 1, -2, 2, -3, 3, -4, 4].find((k) => ppm * 10 ** k >= ICE_CORE_CO2_PPM.low && ppm * 10 ** k <= ICE_CORE_CO2_PPM.high) ?? 0;
+}
+
+/**
+ * "At the glacial maximum the air held about 0.19 percent CO2": 1,900 ppm is a level some
+ * scenario could reach, but never one of the ice-core era, where this sentence places it; 0.019
+ * percent (190 ppm) is. A share placed in that era is held to its range.
+ */
+function iceAgeSlip(q: Quantity, ppm: number): UnitFinding | undefined {
+  if (ppm >= ICE_CORE_CO2_PPM.low && ppm <= ICE_CORE_CO2_PPM.high) return undefined;
+  const k = nearestIceCore(ppm);
+  if (k === 0) return undefined;
+  const value = q.value * 10 ** k;
+  const correction = rewriteQuantity(q, value);
+  return { stated: q, computed: { value, low: q.low * 10 ** k, high: q.high * 10 ** k }, level: 'error', sources: [NIST_SP_811, LUTHI_2008], correction,
+    reason: `${q.text} of the air would be ${formatNumber(ppm)} ppm of CO2 (1% = 10,000 ppm), outside the ${ICE_CORE_CO2_PPM.low}-${ICE_CORE_CO2_PPM.high} ppm of 800,000 years of ice cores, where the sentence places it; ${correction} is ${formatNumber(value * PPM_PER_PERCENT)} ppm.` };
+}
+
+function percentSlip(q: Quantity, iceAge = false): UnitFinding | undefined {
   const ppm = q.value * PPM_PER_PERCENT;
+  if (iceAge && ppm < PLAUSIBLE_CO2_PPM.high * 10) return iceAgeSlip(q, ppm);
   if (ppm >= PLAUSIBLE_CO2_PPM.low && ppm <= PLAUSIBLE_CO2_PPM.high) return undefined;
   const sources = [NIST_SP_811, LUTHI_2008, NOAA_2024];
   const range = `${PLAUSIBLE_CO2_PPM.low}-${formatNumber(PLAUSIBLE_CO2_PPM.high)} ppm`;
@@ -105,14 +139,16 @@ function percentSlip(q: Quantity): UnitFinding | undefined {
 }
 
 /** CO2 levels in the wrong unit, except the quantities in `restated` (the restatement check has them). */
-export function co2UnitSlips(text: string, qs: Quantity[], restated: ReadonlySet<Quantity>, previous?: string): UnitFinding[] {
-  const byContext = co2FromContext(text, previous);
+export function co2UnitSlips(text: string, qs: Quantity[], restated: ReadonlySet<Quantity>, earlier: readonly string[] = []): UnitFinding[] {
+  const byContext = co2FromContext(text, earlier);
   if (!CO2.test(text) && !byContext) return [];
   const deepTime = DEEP_TIME.test(text) || qs.some((q) => q.dimension === 'age' && q.low >= QUATERNARY_BASE_YR);
-  return qs.flatMap((q): UnitFinding[] => {
-    if (restated.has(q)) return [];
+  const iceAge = ICE_AGE_TIME.test(text) && !PRESENT_TIME.test(text);
+  const counted = countedShares(text, qs, restated, deepTime);
+  return [...counted, ...qs.flatMap((q): UnitFinding[] => {
+    if (restated.has(q) || counted.some((c) => c.stated === q)) return [];
     if (q.dimension === 'percent') {
-      const slip = isCo2Share(text, q, byContext) && !deepTime ? percentSlip(q) : undefined;
+      const slip = isCo2Share(text, q, byContext) && !deepTime ? percentSlip(q, iceAge) : undefined;
       return slip === undefined ? [] : [slip];
     }
     const before = text.slice(Math.max(0, q.start - 24), q.start);
@@ -122,5 +158,42 @@ export function co2UnitSlips(text: string, qs: Quantity[], restated: ReadonlySet
         correction: q.text.replace(/[\s\u00A0]*(?:ppmv?|parts per million)$/iu, '%') }];
     }
     return [];
-  });
+  })];
+}
+
+/** Scale words a share of molecules is counted in: "every thousand molecules", "each million". */
+const SCALE: Record<string, number> = { hundred: 1e2, thousand: 1e3, million: 1e6, billion: 1e9 };
+const UNIT_NOUN = String.raw`(?:molecules?|parts?|particles?)`;
+/** "in every thousand molecules of air", "out of each million", "per ten thousand": the whole a count is taken of. */
+const WHOLE = new RegExp(String.raw`(?:^|[^\p{L}])(?:in|out${S}+of|per|for|of)?${S}*(?:every|each)${S}+(?:(?:a|one|ten|a${S}+hundred)${S}+)?(hundred|thousand|million|billion)${S}+(?:${UNIT_NOUN}${S}+)?(?:of${S}+${AIR})?`, 'giu');
+/** "4.2 molecules of CO2", "about 4 parts carbon dioxide": a count of CO2 in that whole. */
+const CO2_COUNT_AFTER = new RegExp(String.raw`^${S}+${UNIT_NOUN}${S}+(?:of${S}+)?(?:CO2|CO₂|carbon${S}+dioxide)(?![\p{L}\d])`, 'iu');
+
+/**
+ * A CO2 share written as a count in a whole: "every thousand molecules of air held about 4.2
+ * molecules of CO2" (4,200 ppm: 0.42 per thousand is today's air), "3 molecules of carbon dioxide
+ * in each ten thousand" (300 ppm). The share N ÷ M is held to the plausible range (or the ice-core
+ * range, where the sentence places it in that era), and the power of ten that fixes it is offered.
+ */
+function countedShares(text: string, qs: Quantity[], restated: ReadonlySet<Quantity>, deepTime: boolean): UnitFinding[] {
+  if (deepTime) return [];
+  const wholes = [...text.matchAll(WHOLE)];
+  if (wholes.length !== 1) return [];
+  const whole = wholes[0] as RegExpMatchArray;
+  const words = whole[0].toLowerCase();
+  const per = (SCALE[(whole[1] as string).toLowerCase()] ?? 0) * (/(?:^|[^\p{L}])ten[\s\u00A0]/u.test(words) ? 10 : /hundred[\s\u00A0]+(?:thousand|million)/u.test(words) ? 100 : 1);
+  const counts = qs.filter((q) => !restated.has(q) && (q.dimension === 'number' || q.dimension === 'count') && CO2_COUNT_AFTER.test(text.slice(q.end)) && (q.end <= (whole.index ?? 0) || q.start >= (whole.index ?? 0) + whole[0].length));
+  const q = counts.length === 1 ? counts[0] : undefined;
+  if (q === undefined || per === 0) return [];
+  const ppm = (q.value / per) * 1e6;
+  const iceAge = ICE_AGE_TIME.test(text) && !PRESENT_TIME.test(text);
+  const range = iceAge ? ICE_CORE_CO2_PPM : PLAUSIBLE_CO2_PPM;
+  if (ppm >= range.low && ppm <= range.high) return [];
+  const k = [-1, 1, -2, 2, -3, 3].find((n) => ppm * 10 ** n >= range.low && ppm * 10 ** n <= range.high);
+  if (k === undefined) return [];
+  const value = q.value * 10 ** k;
+  const correction = rewriteQuantity(q, value);
+  const scale = (x: number): number => (x / per) * 1e6;
+  return [{ stated: q, computed: { value, low: q.low * 10 ** k, high: q.high * 10 ** k }, unit: q.unit, level: 'error', sources: [NIST_SP_811, LUTHI_2008, NOAA_2024], correction,
+    reason: `${q.text} in every ${formatNumber(per)} molecules of air is ${formatNumber(ppm)} ppm of CO2 (1 ppm is one molecule in a million), outside every level ${iceAge ? 'of 800,000 years of ice cores' : 'measured or projected'} (${range.low}-${formatNumber(range.high)} ppm); ${correction} is ${formatNumber(scale(value))} ppm.` }];
 }

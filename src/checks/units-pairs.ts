@@ -21,19 +21,34 @@ const JOINER = new RegExp(
   'iu',
 );
 /** Words that end a loose gap and announce the same amount again ("which readers would call"). */
-const LEAD = String.raw`(?:(?:or|i\.e\.,?|that is,?|that's|that’s|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|(?:would|might|will|can|could)${S}+call|call${S}+it|=|\(|—)(?:${S}*(?:a|an)${S}+(?:${CHANGE_SUBJECT_NOUNS.join('|')})${S}+of)?|${RESTATING_VERB_PATTERN})`;
+/**
+ * "which in physicist units is", "that, in feet, comes to": a pointing word, a frame naming the other
+ * unit or scale ("in X units", "in X terms", "in X"), then a copula or a restating verb.
+ */
+const FRAMED = String.raw`(?:which|that|this)${S}*,?${S}+in${S}+(?:[\p{L}-]+${S}+){0,2}?(?:[\p{L}-]+)${S}*,?${S}+(?:is|was|comes${S}+to|works${S}+out${S}+(?:to|at)|becomes|reads)`;
+const LEAD = String.raw`(?:(?:or|i\.e\.,?|that is,?|that's|that’s|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|(?:would|might|will|can|could)${S}+call|call${S}+it|=|\(|—|${FRAMED})(?:${S}*(?:a|an)${S}+(?:${CHANGE_SUBJECT_NOUNS.join('|')})${S}+of)?|${RESTATING_VERB_PATTERN})`;
 const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}(?:${S}+(?:still|just|only|merely|roughly|about|around|some)){0,2}${S}*$`, 'iu');
 /** A loose gap: short, with no clause break that would end the thought (no other quantity: they are adjacent). */
-const LOOSE_GAP = /^[^;:!?]{0,60}$/u;
+const LOOSE_GAP = /^[^;:!?]{0,80}$/u;
 /** Words after a percentage that make it a relative change ("50 percent above", "30 percent higher"). */
 const RELATIVE_AFTER = new RegExp(String.raw`^${S}*(?:above|below|higher|lower|more|less|greater|smaller|up|down|increase|rise|drop|fall|over|under)(?![\p{L}])`, 'iu');
+/**
+ * One comparison written twice, in two units: "about 130 metres lower than now, roughly 430 feet
+ * below today's shore"; "6 °C colder than today, some 11 °F colder". The gap is a comparative (with
+ * what it compares with) and a comma; a comparative follows the second figure too.
+ */
+const COMPARATIVE = String.raw`(?:lower|higher|below|above|deeper|shallower|colder|warmer|cooler|hotter|longer|shorter|older|younger|thicker|thinner|taller|more|less)`;
+const PARALLEL_GAP = new RegExp(String.raw`^${S}+${COMPARATIVE}(?:${S}+than${S}+(?:[\p{L}'’-]+${S}*){1,4})?${S}*,${S}*(?:or${S}+)?$`, 'iu');
+const PARALLEL_AFTER = new RegExp(String.raw`^${S}+${COMPARATIVE}(?![\p{L}])`, 'iu');
+const parallelComparison = (text: string, gap: string, second: Quantity): boolean => PARALLEL_GAP.test(gap) && PARALLEL_AFTER.test(text.slice(second.end)) && second.dimension !== 'percent';
+
 /** A copula alone between two amounts in different units: "420 ppm is 0.042 percent". */
 const COPULA_GAP = new RegExp(String.raw`^,?${S}+(?:is|was|are|were|equals|makes${S}+up|made${S}+up)(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}+$`, 'iu');
 /** "in BP it is", "on the b2k scale that's": the era named, then a pointing word, just before the date. */
 const ERA_NAMED_BACK = new RegExp(String.raw`(?:^|[^\p{L}])(?:in|on)${S}+(?:the${S}+)?(?:bp|b2k)(?:${S}+(?:terms|scale|years))?,?${S}+(?:it|that|this)(?:${S}+(?:is|was|becomes|comes${S}+to)|['’]s)${S}*(?:(?:about|roughly|around|some)${S}+)?$`, 'iu');
 
 /** A sentence that opens by restating: "That is 11,650 years BP", "On the BP scale, that's ...". */
-const OPENING = /^[^;!?]{0,80}$/u;
+const OPENING = /^[^;!?]{0,100}$/u;
 
 /**
  * The scale word of a quantity ("0.8 billion years" → billion), or "" for plain digits. A unit
@@ -62,6 +77,8 @@ export interface Restatement {
 export interface PreviousSentence {
   text: string;
   quantities: Quantity[];
+  /** The paragraph's earlier sentences up to this one, in order (the last is `text`). */
+  earlier?: readonly string[];
 }
 
 const sameThing = (a: Quantity, b: Quantity): boolean =>
@@ -92,6 +109,12 @@ function restatesModifier(text: string, first: Quantity, gap: string, second: Qu
 }
 
 /** A short gap in one clause ending in a copula or a restatement word: "global warm-up is", ", or". */
+/** A change noun pointed at before a figure: "that six-degree drop works out to", "this warming is". */
+const CHANGE_NOUN_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:that|this|the|which)${S}+(?:[\p{L}\d-]+${S}+){0,2}(?:${CHANGE_SUBJECT_NOUNS.join('|')})(?![\p{L}])[^.;:!?\d]{0,40}$`, 'iu');
+
+/** True when the words just before a figure point at a change: "that six-degree drop works out to". */
+export const pointsAtChange = (head: string): boolean => CHANGE_NOUN_BEFORE.test(head);
+
 const READING_AS_CHANGE_GAP = new RegExp(String.raw`^[^;:.!?\d]{0,40}?(?:(?:^|[^\p{L}])(?:is|was|are|were|equals|or|that is|which is|that's|that’s)|${RESTATING_VERB_PATTERN})(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}*$`, 'iu');
 
 /** Words that open another clause, whose reading is its own: "... colder, and a summer day was 38 °F". */
@@ -132,6 +155,7 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
     else if (COPULA_GAP.test(gap) && closeDates(first, second) && !relativeChange(text, second)) out.push(ordered(first, second, true));
     else if (LOOSE_GAP.test(gap) && LOOSE_END.test(gap) && closeDates(first, second)) out.push(ordered(first, second, true));
     else if (restatesModifier(text, first, gap, second) && closeDates(first, second)) out.push(ordered(first, second, true));
+    else if (parallelComparison(text, gap, second) && closeDates(first, second)) out.push(ordered(first, second, true));
   }
   // A °F figure in this writing is a conversion: "in Fahrenheit that difference is about 43 °F",
   // "a 6 °C warm-up is about 38 °F". It restates the nearest °C or K figure before it.
@@ -160,17 +184,21 @@ function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentenc
   // 430 parts per billion": the year is passed over).
   // A reference year in brackets ("11,700 b2k (before AD 2000). In BP that is ...") is passed over
   // for the date a slip could have moved: the last one close enough to a date of this sentence.
-  const partnerOf = (p: Quantity): Quantity | undefined => qs.find((q) => sameThing(p, q) && closeDates(p, q) && p.statedUnit !== q.statedUnit);
+  // "that six-degree drop works out to about 43 °F": a °F reading after a change noun that points
+  // back is the change restated.
+  const changeBack = (q: Quantity): Quantity => (q.statedUnit === 'degF' && q.dimension === 'temperature' && CHANGE_NOUN_BEFORE.test(text.slice(0, q.start)) ? asChange(q) : q);
+  const partnerOf = (p: Quantity): Quantity | undefined => qs.map(changeBack).find((q) => sameThing(p, q) && closeDates(p, q) && p.statedUnit !== q.statedUnit);
   const first = [...previous.quantities].reverse().find((p) => partnerOf(p) !== undefined);
   if (first === undefined) return undefined;
   const second = partnerOf(first) as Quantity;
+  const original = qs.find((q) => q.start === second.start) ?? second;
   if (found.some((r) => r.second === second || r.first === second)) return undefined;
   // "fifty percent above where it stood in 1750": a relative change, not the amount again.
   if (second.dimension === 'percent' && RELATIVE_AFTER.test(text.slice(second.end))) return undefined;
   const head = text.slice(0, second.start);
   // "For readers who think in Fahrenheit, that makes it about 43 °F colder": a °F figure that
   // points back restates the last °C or K figure before it.
-  const fahrenheitBack = second.statedUnit === 'degF' && (first.statedUnit === 'degC' || first.statedUnit === 'K') && /\b(?:fahrenheit|that|this|which)\b/iu.test(head) && !qs.some((q) => q.start < second.start && q.dimension === second.dimension);
+  const fahrenheitBack = second.statedUnit === 'degF' && (first.statedUnit === 'degC' || first.statedUnit === 'K') && /\b(?:fahrenheit|that|this|which)\b/iu.test(head) && !qs.some((q) => q.start < second.start && q !== original && q.dimension === second.dimension);
   // "BP counts from 1950, so in BP it is 11,750 years": a date after the era it is restated in.
   const eraBack = second.dimension === 'age' && ERA_NAMED_BACK.test(head);
   if (!OPENING.test(head) || !(LOOSE_END.test(head) || fahrenheitBack || eraBack)) return undefined;

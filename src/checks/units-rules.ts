@@ -11,7 +11,7 @@ import { B2K_CONVENTION, BP_CONVENTION, NIST_SP_811 } from './standard-sources.j
 import { co2UnitSlips } from './units-co2-share.js';
 import { scaleSlips } from './units-scale.js';
 import { offsetSums } from './units-offset-sums.js';
-import { findRestatements, type PreviousSentence, type Restatement } from './units-pairs.js';
+import { findRestatements, pointsAtChange, type PreviousSentence, type Restatement } from './units-pairs.js';
 
 /** A quantity whose unit use is in doubt, with the value it should have. */
 export interface UnitFinding {
@@ -67,7 +67,7 @@ function restated(dimensions: Dimension[], sources: (a: Quantity, b: Quantity) =
 function percentPpm(text: string, qs: Quantity[], previous?: PreviousSentence): UnitFinding[] {
   const pairs = restatementsOf(['concentration', 'percent'], text, qs, previous);
   const found = restated(['concentration', 'percent'], nist, () => '1% of the air is 10,000 ppm.')(text, qs, previous);
-  return [...found, ...co2UnitSlips(text, qs, new Set(pairs.flatMap((p) => [p.first, p.second])), previous?.text)];
+  return [...found, ...co2UnitSlips(text, qs, new Set(pairs.flatMap((p) => [p.first, p.second])), previous?.earlier ?? (previous === undefined ? [] : [previous.text]))];
 }
 
 const CHANGE_CUES = TEMPERATURE_CUES.filter((c) => c.reading === 'temperature-change');
@@ -85,7 +85,9 @@ function cuedAsChange(text: string, { first, second }: Restatement): boolean {
   const before = text.slice(Math.max(0, a.start - 48), a.start);
   const afters = [a, b].map((q) => text.slice(q.end, q.end + 48).replace(/^[\s\u00A0]*[)\],]/u, ''));
   const clause = text.slice(Math.max(0, a.start - 160), a.start);
-  return /^[+]/u.test(a.text) || CHANGE_BEFORE.some((re) => re.test(before)) || namesChangeBefore(clause) || afters.some((t) => CHANGE_AFTER.some((re) => re.test(t)));
+  // The restated figure's own clause may name the change ("that six-degree drop works out to about 43 °F").
+  const own = text.slice(Math.max(0, second.start - 160), second.start);
+  return /^[+]/u.test(a.text) || CHANGE_BEFORE.some((re) => re.test(before)) || namesChangeBefore(clause) || pointsAtChange(own) || afters.some((t) => CHANGE_AFTER.some((re) => re.test(t)));
 }
 
 /** Says what a °F figure that added 32 to a change did, when that is what happened. */

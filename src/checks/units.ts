@@ -63,7 +63,7 @@ export function checkUnits(text: string, parsed: Quantity[], context: readonly s
   const outer = parsed.filter((q) => !parsed.some((o) => o !== q && o.start <= q.start && q.end <= o.end && o.end - o.start > q.end - q.start));
   const quantities = withNamedScale(text, outer);
   const last = context[context.length - 1];
-  const previous = last === undefined ? undefined : { text: last, quantities: parseQuantities(last) };
+  const previous = last === undefined ? undefined : { text: last, quantities: parseQuantities(last), earlier: context.slice(-3) };
   const flags: FlagDraft[] = [];
   for (const rule of UNIT_RULES) {
     for (const f of rule.find(text, quantities, previous)) {

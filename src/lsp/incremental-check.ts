@@ -1,7 +1,8 @@
 /**
  * Re-checks an edited document block by block. Every check of the engine stays inside one prose
  * block (sentences never cross blocks; the context a check reads is the block's earlier
- * sentences), except one bit: whether a block beside it names a subject (engine.subjectBeside).
+ * sentences), except one bit: whether a block beside it names a subject (engine.subjectBeside),
+ * and the lead-in the arithmetic and unit checks read on from (prose/lead-in.ts).
  * So a block whose source, prose text, offsets, heading and that bit are unchanged has the same
  * claims as before, only perhaps further down the file. Those are moved to their new place; only
  * new or changed blocks go through the engine. Claim ids, which count repeated sentences across
@@ -11,6 +12,7 @@
 import { checkDraft, namesSubject, subjectBeside } from '../engine.js';
 import { claimIdOf, foldClaimText } from '../review/claim-id.js';
 import { CHECKLIST_MARKER } from '../report/checklist-markdown.js';
+import { leadInOf } from '../prose/lead-in.js';
 import { createLineIndex, draftFromText, type LineIndex } from '../source/index.js';
 import type { Claim, Draft, Flag, ProseBlock, Span } from '../types.js';
 import { joinSignoffs, type CheckSetup, type DocumentCheck } from './check-document.js';
@@ -49,14 +51,16 @@ export function createDocumentChecker(setup: CheckSetup): DocumentChecker {
       const positions = createPositionMap(text);
       const lines = createLineIndex(text);
       const beside = subjectBeside(draft.blocks, setup.packs);
-      const keys = draft.blocks.map((block, i) => blockKey(text, block, beside[i] === true));
+      const leadIns = draft.blocks.map((_b, i) => leadInOf(text, draft.blocks, i, (t) => namesSubject(t, setup.packs)));
+      const keys = draft.blocks.map((block, i) => blockKey(text, block, beside[i] === true, leadIns[i] ?? []));
       // A block that appears twice uses one cached entry per appearance.
       const queues = new Map([...cache].map(([key, entries]) => [key, [...entries]]));
       const reused = keys.map((key) => queues.get(key)?.shift());
       const changedAt = draft.blocks.flatMap((_b, i) => (reused[i] === undefined ? [i] : []));
       const changed = changedAt.map((i) => draft.blocks[i] as ProseBlock);
       const subjectNextTo = changedAt.map((i) => beside[i] === true);
-      const fresh = changed.length === 0 ? [] : checkDraft({ ...draft, blocks: changed }, setup.packs, { topic: setup.topic, levels: setup.levels, projectPath, subjectBeside: subjectNextTo }).claims;
+      const leadInsOf = changedAt.map((i) => leadIns[i] ?? []);
+      const fresh = changed.length === 0 ? [] : checkDraft({ ...draft, blocks: changed }, setup.packs, { topic: setup.topic, levels: setup.levels, projectPath, subjectBeside: subjectNextTo, leadIns: leadInsOf }).claims;
       const freshByBlock = groupByBlock(fresh, changed, positions);
 
       const next = new Map<string, CachedClaim[][]>();
@@ -75,12 +79,12 @@ export function createDocumentChecker(setup: CheckSetup): DocumentChecker {
   };
 }
 
-/** What makes a block's claims the same: its source text, prose text, offset pattern, kind, heading and a subject beside it. */
-function blockKey(text: string, block: ProseBlock, subjectBeside: boolean): string {
+/** What makes a block's claims the same: its source text, prose text, offset pattern, kind, heading, a subject beside it and its lead-in. */
+function blockKey(text: string, block: ProseBlock, subjectBeside: boolean, leadIn: readonly string[]): string {
   const start = block.offsets[0] ?? 0;
   const end = block.offsets[block.offsets.length - 1] ?? start;
   const shape = block.offsets.map((o) => o - start).join(',');
-  return [block.kind, block.heading, text.slice(start, end), block.text, shape, subjectBeside].join('\u0000');
+  return [block.kind, block.heading, text.slice(start, end), block.text, shape, subjectBeside, ...leadIn].join('\u0000');
 }
 
 /** The claims of `fresh` grouped by the block (of `blocks`) their sentence starts in. */

@@ -1,0 +1,293 @@
+/**
+ * The paragraph's equations: a result a sentence draws from figures given anywhere in the last few
+ * sentences of its paragraph (or its block's lead-in, prose/lead-in.ts), in any word order.
+ *
+ * Every figure of those sentences is given a role: a level, a change (stated as one, a from-to pair
+ * of levels, or an amount over a time: "80 ppm over 7,000 years"), a duration (stated, or the span
+ * of a pair or range of dates) or a rate. The simple relations among them are then enumerated:
+ *  - a rate is a change ÷ a duration ("... 80 ppm, spread over roughly 6,500 years. Do the division
+ *    and that's around 0.12 ppm per year");
+ *  - a change is the difference of two levels ("... at about 180 ppm ... to about 280 ppm. That
+ *    means CO2 went up by roughly 150 ppm");
+ *  - a multiple of a pace is one rate ÷ another, stated or derived ("Today's rate, over two ppm a
+ *    year, is about twenty times the average pace of that ancient rise").
+ * A stated result is flagged only when it matches NONE of the values the relations give (so a
+ * writer who meant any reading of their figures is left alone), when the sentence marks it as drawn
+ * from what came before ("so", "that's", "works out to", "on average", "do the division"...), and
+ * when it carries no time of its own ("today", "in 2024", "a year") that would make it another
+ * quantity. The correction is the value from the nearest figures.
+ */
+import { writtenInterval as w } from '../quantities/index.js';
+import type { Dimension, Quantity } from '../types.js';
+import type { Previous } from './arithmetic-context.js';
+import { disjoint } from './arithmetic-levels.js';
+import { divide, facing, invert, minus, rangeSpan, size, type Derived } from './arithmetic-derive.js';
+import { changesOver, findPairs, isPaceRatio, isStatedChange, timesTheMeasure, type Pair } from './arithmetic-frames.js';
+import { spanOfDates } from './arithmetic-spans.js';
+
+/** A finding from the paragraph's equations, with the basis named. */
+export interface SolverFinding {
+  stated: Quantity;
+  computed: Derived;
+  measures: string;
+  /** Whose numbers: the paragraph's, or (left out) the sentence's own. */
+  basis?: string;
+}
+
+/** One sentence as the solver reads it: its text, figures and from-to pairs; `distance` 0 is the sentence checked. */
+interface Read {
+  text: string;
+  qs: Quantity[];
+  pairs: Pair[];
+  distance: number;
+}
+
+/** A value one relation gives, with its words and how far back its inputs stand. */
+interface Candidate {
+  value: Derived;
+  measures: string;
+  distance: number;
+}
+
+const S = String.raw`[\s\u00A0]`;
+const RATE_OF: Partial<Record<Dimension, Dimension>> = { 'concentration-rate': 'concentration', 'temperature-rate': 'temperature-change', 'length-rate': 'length' };
+const LEVEL_OF: Partial<Record<Dimension, Dimension>> = { concentration: 'concentration', temperature: 'temperature-change', length: 'length' };
+/** How many earlier sentences the equations reach back. */
+const LOOK_BACK = 3;
+const basis = "the paragraph's";
+
+/**
+ * Words that present a figure as worked out from what came before: a consequence ("so", "thus",
+ * "which means"), an equation ("that's", "works out to", "comes to", "equals"), a mean ("on
+ * average", "an average of", "averaged over") or the sum itself ("do the division", "by my
+ * arithmetic"). Matched anywhere before the figure in its sentence.
+ */
+const DRAWN = new RegExp(
+  String.raw`(?:^|[^\p{L}])(?:so|thus|hence|therefore|that${S}+means|which${S}+means|meaning|that's|that’s|that${S}+is|which${S}+is|i\.e\.|works?${S}+out|worked${S}+out|comes?${S}+to|came${S}+to|equals|averag(?:e|es|ed|ing)|on${S}+average|divid(?:e|ed|ing)|division|arithmetic|math|maths|sum|in${S}+all|all${S}+told|in${S}+other${S}+words|put${S}+another${S}+way|or${S}+about|or${S}+roughly)(?![\p{L}])`,
+  'iu',
+);
+/** Words that give a figure a time of its own: it is about another period than the figures before. */
+const OWN_TIME = new RegExp(String.raw`(?:^|[^\p{L}])(?:today|today's|today’s|now|nowadays|currently|current|modern|present|recent|recently|lately|this${S}+(?:year|decade|century)|last${S}+(?:year|decade|century)|(?:1[5-9]|20)\d\d(?:s|['’]s)?)(?![\p{L}\p{N}])`, 'iu');
+/** After a change: a time it recurs in ("a year", "per decade", "each century", "annually"), or a start it is counted from ("since"). */
+const PER_TIME_AFTER = new RegExp(String.raw`^[^.;:!?,]{0,12}?(?:^|[^\p{L}])(?:(?:a|an|per|each|every|in${S}+a|in${S}+one)${S}+(?:year|decade|century|month|day|millennium)|annually|yearly|since|than)(?![\p{L}])`, 'iu');
+/** Words that make a duration no span of a change: "the past 800,000 years", "every 100,000 years". */
+const NOT_A_SPAN = new RegExp(String.raw`(?:^|[^\p{L}])(?:past|last|previous|next|every|each|per|ago|old|back)${S}*$`, 'iu');
+
+/**
+ * A change named as the subject of a copula ("the rise was about 80 ppm", "the warming came to 6 °C"),
+ * added on top of what came before ("another 184 ppm", "a further 2 °C") or an amount of a change
+ * named after it ("60 m of sea-level rise"): changes the frames' cue words (isStatedChange) do not read.
+ */
+const CHANGE_SUBJECT = new RegExp(
+  String.raw`(?:(?:^|[^\p{L}])(?:rise|increase|drop|fall|decline|change|jump|gain|loss|swing|difference|warming|cooling|growth|decrease|reduction|climb|surge|plunge)(?:${S}+(?:in|of|across|during|over|at)${S}+[^,;:.!?\d]{1,40}?)?${S}+(?:was|is|were|came${S}+to|comes${S}+to|amounted${S}+to|amounts${S}+to|totalled|totaled)|(?:^|[^\p{L}])(?:another|a${S}+further|an${S}+extra|an${S}+additional))${S}*$`,
+  'iu',
+);
+/** "60 m of sea-level rise", "5 °C of warming", "80 ppm of CO2 gain": an amount of a change named after it. */
+const OF_CHANGE_AFTER = new RegExp(String.raw`^${S}+of${S}+(?:[\p{L}\d-]+${S}+){0,2}(?:rise|increase|drop|fall|decline|change|jump|gain|loss|warming|cooling|growth|decrease|climb)(?![\p{L}])`, 'iu');
+const isChange = (text: string, q: Quantity): boolean =>
+  isStatedChange(text, q) || CHANGE_SUBJECT.test(text.slice(Math.max(0, q.start - 40), q.start)) || OF_CHANGE_AFTER.test(text.slice(q.end, q.end + 48));
+
+const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
+
+function readAll(text: string, qs: Quantity[], pairs: Pair[], earlier: readonly Previous[]): Read[] {
+  return [{ text, qs, pairs, distance: 0 }, ...earlier.slice(0, LOOK_BACK).map((p, i) => ({ text: p.text, qs: p.quantities, pairs: findPairs(p.text, p.quantities), distance: i + 1 }))];
+}
+
+/** The changes of `dimension` a sentence states: stated changes, amounts over a time, from-to pairs of levels. */
+function changesIn(s: Read, dimension: Dimension, except: readonly Quantity[]): { value: Derived; text: string }[] {
+  const paired = new Set(s.pairs.flatMap((p) => [s.qs[p.from], s.qs[p.to]]));
+  const stated = s.qs.filter((q) => !except.includes(q) && !paired.has(q) && q.dimension === dimension && (isChange(s.text, q) || s.qs.some((d) => changesOver(s.text, q, d))));
+  // A pair's unit may be written at its end only ("~190 → 280 ppm").
+  const fromPairs = s.pairs.filter((p) => LEVEL_OF[s.qs[p.to]?.dimension ?? 'number'] === dimension && [s.qs[p.to]?.dimension, 'number'].includes(s.qs[p.from]?.dimension)).map((p) => {
+    const [a, b] = [s.qs[p.from] as Quantity, s.qs[p.to] as Quantity];
+    return { value: size(minus(w(b), w(a))), text: `from ${a.text} to ${b.text}` };
+  });
+  return [...stated.map((q) => ({ value: size(w(q)), text: q.text })), ...fromPairs];
+}
+
+/** The spans of time a sentence states: durations that are no age or interval, and the spans of its dates. */
+function durationsIn(s: Read, except: readonly Quantity[]): { value: Derived; text: string }[] {
+  const stated = s.qs.filter((q) => !except.includes(q) && q.dimension === 'duration' && !NOT_A_SPAN.test(s.text.slice(Math.max(0, q.start - 12), q.start)) && !/^[\s\u00A0]*(?:ago|old|back|before)(?![\p{L}])/iu.test(s.text.slice(q.end)));
+  const dated = spanOfDates(s.qs, s.pairs).map((d) => ({ value: d.span, text: d.measures.replace(/^the time /u, '') }));
+  const ages = s.qs.filter((q) => q.dimension === 'age');
+  const two = dated.length === 0 && ages.length === 2 && ages.every((q) => rangeSpan(q) === undefined) ? [{ value: size(minus(w(ages[0] as Quantity), w(ages[1] as Quantity))), text: `${(ages[0] as Quantity).text} to ${(ages[1] as Quantity).text}` }] : [];
+  return [...stated.map((q) => ({ value: w(q), text: q.text })), ...dated, ...two];
+}
+
+/** Every change ÷ duration among the sentences, a change and its duration from one sentence or from this one and one before. */
+function rateCandidates(reads: Read[], changeDim: Dimension, except: readonly Quantity[]): Candidate[] {
+  const out: Candidate[] = [];
+  for (const a of reads) {
+    for (const c of changesIn(a, changeDim, except)) {
+      for (const b of reads) {
+        // From one sentence, from this one and one before, or from two sentences next to each other.
+        if (a !== b && a.distance !== 0 && b.distance !== 0 && Math.abs(a.distance - b.distance) > 1) continue;
+        for (const d of durationsIn(b, except)) {
+          const r = divide(c.value, d.value);
+          if (r !== undefined) out.push({ value: r, measures: `${c.text} divided by ${d.text}`, distance: a.distance + b.distance });
+        }
+      }
+    }
+  }
+  return out.sort((x, y) => x.distance - y.distance);
+}
+
+/** The candidate to show: the nearest; undefined when none, or when any agrees with `stated`. */
+function verdict(stated: Quantity, candidates: Candidate[], like: (c: Derived) => Derived = (c) => c): Candidate | undefined {
+  if (candidates.length === 0 || candidates.some((c) => !disjoint(stated, like(c.value)))) return undefined;
+  return candidates[0];
+}
+
+/**
+ * A rate drawn from a change and a duration stated anywhere in the last few sentences: "The last
+ * deglacial rise was about 80 ppm, spread over roughly 6,500 years. Do the division and that's
+ * around 0.12 ppm per year."
+ */
+export function ratesInParagraph(text: string, qs: Quantity[], pairs: Pair[], earlier: readonly Previous[]): SolverFinding[] {
+  return qs.flatMap((rate) => {
+    const changeDim = RATE_OF[rate.dimension];
+    if (changeDim === undefined || qs.some((q) => q !== rate && q.dimension === rate.dimension)) return [];
+    const head = text.slice(0, rate.start);
+    // A single date of its own ("the 2010s averaged 2.4 ppm/yr") makes it another period's rate.
+    const dates = qs.filter((q) => q.dimension === 'age');
+    const ownDate = dates.length === 1 && rangeSpan(dates[0] as Quantity) === undefined;
+    if (!DRAWN.test(head) || OWN_TIME.test(head) || ownDate) return [];
+    const reads = readAll(text, qs, pairs, earlier);
+    const found = verdict(rate, rateCandidates(reads, changeDim, [rate]));
+    return found === undefined ? [] : [{ stated: rate, computed: facing(found.value, rate.value), measures: `the change divided by the time it took (${found.measures})`, ...(found.distance === 0 ? {} : { basis }) }];
+  });
+}
+
+/** Levels of `dimension` in a sentence in the unit `unit` as written; a bare figure of the same size counts too. */
+function levelsIn(s: Read, dimension: Dimension, unit: string, like: number): Quantity[] {
+  return s.qs.filter((q) => {
+    if (isChange(s.text, q)) return false;
+    if (q.dimension === dimension) return q.statedUnit === unit;
+    // "the pre-industrial 280": the writer left off the unit of a level of the same size.
+    return q.dimension === 'number' && like > 0 && q.value / like < 10 && like / q.value < 10 && !/^[^\p{L}]*$/u.test(s.text.slice(0, q.start));
+  });
+}
+
+/**
+ * A change, or a percentage change, drawn from levels given before: "During warm interglacials it
+ * rose to about 280 ppm. That means CO2 went up by roughly 150 ppm each time."; "Before industry the
+ * air held about 280 ppm. Today's 420 ppm is therefore roughly 30% higher." With a level of its own
+ * ("on top of the pre-industrial 280 we've piled another 184 ppm") the change is from a level before
+ * to that level; without, between two levels of the nearest sentences. A result that is not the
+ * same size as any of them (within a factor of three) is taken to be about something else. A time
+ * named before the sentence's own level is that level's ("By 2020 it held 412 ppm, an increase of
+ * about 30 percent"); one elsewhere makes the result another period's.
+ */
+export function changesFromLevels(text: string, qs: Quantity[], pairs: Pair[], earlier: readonly Previous[]): SolverFinding[] {
+  if (pairs.length > 0 || earlier.length === 0) return [];
+  return Object.entries(LEVEL_OF).flatMap(([level, changeDim]) => {
+    const dimension = level as Dimension;
+    const percent = only(qs.filter((q) => q.dimension === 'percent' && (isChange(text, q) || COMPARED_ALONE.test(text.slice(q.end)))));
+    const change = only(qs.filter((q) => q.dimension === changeDim && isChange(text, q)));
+    const stated = change ?? percent;
+    if (stated === undefined || (change !== undefined && percent !== undefined)) return [];
+    const isPercent = stated === percent;
+    if (PER_TIME_AFTER.test(text.slice(stated.end))) return [];
+    if (qs.some((q) => q.dimension === 'duration' || RATE_OF[q.dimension] !== undefined || (q.dimension === 'age' && q.start > stated.start))) return [];
+    const here: Read = { text, qs: qs.filter((q) => q !== stated), pairs, distance: 0 };
+    const just = here.qs.filter((q) => q.end <= stated.start).at(-1);
+    // "By 2021 they held 412 ppm, an increase of about 30 percent": a percentage in apposition to a
+    // level this sentence dates is its change from the level before. (A change in ppm so placed
+    // needs a word that refers back: arithmetic-context.ts.)
+    const apposed = isPercent && just !== undefined && (just.dimension === dimension || just.dimension === 'number') && APPOSED_CHANGE.test(text.slice(just.end, stated.start)) && OWN_TIME.test(text.slice(0, just.start));
+    if (!DRAWN.test(text.slice(0, stated.start)) && !apposed) return [];
+    const reads = readAll(text, qs, pairs, earlier).slice(1);
+    const firstLevel = reads.flatMap((r) => r.qs.filter((q) => q.dimension === dimension && !isChange(r.text, q)))[0];
+    const unit = isPercent ? (here.qs.find((q) => q.dimension === dimension)?.statedUnit ?? firstLevel?.statedUnit) : stated.statedUnit;
+    const like = isPercent ? (here.qs.find((q) => q.dimension === dimension)?.value ?? firstLevel?.value ?? 0) : stated.value;
+    if (unit === undefined) return [];
+    const own = levelsIn(here, dimension, unit, like).filter((q) => q.start < stated.start);
+    if (own.length > 1 || qs.some((q) => q.start > stated.start && (q.dimension === dimension || (q.dimension === 'number' && q !== stated)))) return [];
+    // A time of its own, outside the words that give the sentence's own level, is another period's.
+    const timeFrom = own.length === 1 ? (own[0] as Quantity).end : 0;
+    if (OWN_TIME.test(text.slice(timeFrom)) || (own.length === 0 && qs.some((q) => q.dimension === 'age'))) return [];
+    const withLevels = reads.map((r) => ({ r, levels: levelsIn(r, dimension, unit, like).filter((q) => q.dimension === dimension) })).filter((x) => x.levels.length > 0).slice(0, own.length === 1 ? 1 : 2);
+    const candidates: Candidate[] = [];
+    const add = (a: Quantity, b: Quantity, distance: number, where: string): void => {
+      if (a.value === b.value) return;
+      if (!isPercent) {
+        candidates.push({ value: size(minus(w(b), w(a))), measures: `the difference between ${a.text} and ${b.text}${where}`, distance });
+        return;
+      }
+      // From the earlier level to this sentence's; without one, from the lower level for a rise
+      // and from the higher for a drop.
+      const down = DOWNWARD.test(text.slice(0, stated.start)) || DOWNWARD.test(text.slice(stated.end, stated.end + 12));
+      const [x, y] = own.length === 1 || (a.value < b.value) !== down ? [a, b] : [b, a];
+      const r = divide(w(y), w(x));
+      if (r !== undefined) candidates.push({ value: size(percentOf(r)), measures: `the percentage change from ${x.text} to ${y.text}${where}`, distance });
+    };
+    if (own.length === 1) {
+      for (const { r, levels } of withLevels) for (const l of levels) add(l, own[0] as Quantity, r.distance, ' in an earlier sentence');
+    } else {
+      const all = withLevels.flatMap(({ r, levels }) => levels.map((l) => ({ l, d: r.distance })));
+      all.forEach((x, i) => all.slice(i + 1).forEach((y) => add(y.l, x.l, x.d + y.d, ' in earlier sentences')));
+    }
+    candidates.sort((a, b) => a.distance - b.distance);
+    const found = verdict(stated, candidates, (c) => facing(c, stated.value));
+    if (found === undefined) return [];
+    const ratio = Math.abs(stated.value) / found.value.value;
+    if (!(ratio > 1 / 3 && ratio < 3)) return [];
+    return [{ stated, computed: facing(found.value, stated.value), measures: found.measures, basis }];
+  });
+}
+
+/** Words of a change downward; any other change is read as a rise. */
+const DOWNWARD = /(?:^|[^\p{L}])(?:drop|dropped|fall|fell|fallen|decline|declined|decrease|decreased|loss|lost|reduction|cut|plunge|plunged|sank|lower|below|less|down|cooling|cooled)(?![\p{L}])/iu;
+/** A change named in apposition right after the sentence's own level: ", an increase of", " (a rise of". */
+const APPOSED_CHANGE = new RegExp(String.raw`^${S}*[,(—–]${S}*(?:(?:a|an)${S}+(?:[\p{L}-]+${S}+)?(?:rise|increase|jump|gain|climb|growth|drop|fall|decline|decrease|loss)${S}+of|up|down)${S}*$`, 'iu');
+
+/** "roughly 30% higher." with nothing it is compared with after it: the comparison is with what came before. */
+const COMPARED_ALONE = new RegExp(String.raw`^${S}*(?:higher|lower|more|less|greater|larger|smaller|up|down)${S}*(?:[.;!?]|$)`, 'iu');
+/** r as a percentage change (r − 1) × 100. */
+const percentOf = (r: Derived): Derived => ({ value: (r.value - 1) * 100, low: (r.low - 1) * 100, high: (r.high - 1) * 100 });
+
+/** The rates a sentence gives: stated, or a change over the time it took. A rate of a time that reaches the present is left out. */
+function ratesOf(s: Read, dimension: Dimension): Candidate[] {
+  const stated = s.qs.filter((q) => q.dimension === dimension).map((q) => ({ value: w(q), measures: q.text, distance: s.distance }));
+  const changeDim = RATE_OF[dimension];
+  if (changeDim === undefined || OWN_TIME.test(s.text) || s.qs.some((q) => q.dimension === 'age' && q.high < 0)) return stated;
+  // A stated rate whose own sentence gives another ("90 ppm over 7,000 yrs, so about 0.13 ppm per
+  // year") may be a slip of its own: either reading is one the writer may have compared with.
+  return [...stated, ...rateCandidates([{ ...s, distance: 0 }], changeDim, []).map((c) => ({ ...c, distance: s.distance }))];
+}
+
+/**
+ * A multiple of a pace: "Today's rate, over two ppm a year, is about twenty times the average pace
+ * of that ancient rise." This sentence's one rate over each rate the sentences before give, stated
+ * or worked out from a change and the time it took.
+ */
+export function paceRatiosInParagraph(text: string, qs: Quantity[], earlier: readonly Previous[]): SolverFinding[] {
+  const stated = only(qs.filter((q) => isPaceRatio(text, q) || timesTheMeasure(text, q)));
+  if (stated === undefined) return [];
+  const now = only(qs.filter((q) => RATE_OF[q.dimension] !== undefined));
+  const reads = readAll(text, qs, [], earlier).slice(1);
+  // "... rising by about 2.5 ppm per year, while in the deglaciation it rose by about 0.01 ppm per
+  // year. That is some 25 times faster.": no pace here, both in the nearest sentence that gives one.
+  if (now === undefined && qs.length === 1 && isPaceRatio(text, stated) && DRAWN.test(text.slice(0, stated.start))) {
+    const near = reads.find((r) => r.qs.some((q) => RATE_OF[q.dimension] !== undefined));
+    const two = near?.qs.filter((q) => RATE_OF[q.dimension] !== undefined) ?? [];
+    const [a, b] = two as [Quantity, Quantity];
+    if (two.length !== 2 || a.dimension !== b.dimension) return [];
+    const r = divide(w(a), w(b));
+    if (r === undefined) return [];
+    const found = verdict(stated, [{ value: (stated.value < 1) === (r.value < 1) ? r : invert(r), measures: `the ratio of ${a.text} to ${b.text} in the sentence before`, distance: 1 }]);
+    return found === undefined ? [] : [{ stated, computed: found.value, measures: found.measures, basis }];
+  }
+  if (now === undefined || now.start > stated.start) return [];
+  const candidates = reads.flatMap((s) => ratesOf(s, now.dimension)).flatMap((then): Candidate[] => {
+    const r = divide(w(now), then.value);
+    return r === undefined ? [] : [{ value: (stated.value < 1) === (r.value < 1) ? r : invert(r), measures: `the ratio of ${now.text} to ${then.measures} in an earlier sentence`, distance: then.distance }];
+  });
+  const found = verdict(stated, candidates);
+  return found === undefined ? [] : [{ stated, computed: found.value, measures: found.measures, basis }];
+}
+
+/** The rates of a sentence, stated or derived, for rules that compare a pace with one before. */
+export function rateReadings(text: string, quantities: Quantity[], dimension: Dimension): Derived[] {
+  return ratesOf({ text, qs: quantities, pairs: findPairs(text, quantities), distance: 1 }, dimension).map((c) => c.value);
+}

@@ -1,0 +1,50 @@
+/**
+ * The lead-in of a block: the last sentences of the blocks just before it that a writer reads on
+ * from. A thread's post ("14/ That's a 34% increase on the pre-industrial 280 ppm."), a list item
+ * ("- That means CO2 went up by roughly 150 ppm."), a table's cell ("Note: an average of 10 cm per
+ * year") or a short paragraph often does its arithmetic on figures given one block up. The
+ * arithmetic and unit checks read these sentences as they read the paragraph's earlier ones; no
+ * other check does, and flags still fall only on the block's own words.
+ *
+ * A block before counts only when it stands right before (nothing but spaces and markup between
+ * them: no heading, no code, no text left out; for a table's cell, a cell of the same row) and names a subject of the packs or holds two
+ * numbers in one sentence. Both make sure a draft read in parts (speed/sparse-markdown.ts) has that
+ * block too, so a lead-in is the same whichever way the draft was read.
+ */
+import type { ProseBlock } from '../types.js';
+import { splitSentences } from './split-sentences.js';
+
+/** How many sentences a lead-in holds at most: as many as the checks read of their own paragraph. */
+export const LEAD_IN_SENTENCES = 4;
+const TWO_NUMBERS = /\d[^\d]+\d/u;
+/** Between two blocks that follow on: spaces, line breaks and markup, no letter or digit. */
+const FOLLOWS_ON = /^[^\p{L}\p{N}]*$/u;
+/** Blocks that are no running prose. */
+const NOT_PROSE = new Set(['heading', 'front-matter', 'image-text']);
+
+/**
+ * The lead-in of `blocks[index]` in `text` (the draft's original text): up to LEAD_IN_SENTENCES
+ * sentences, in order. `namesSubject` is the engine's subject matcher.
+ */
+export function leadInOf(text: string, blocks: readonly ProseBlock[], index: number, namesSubject: (t: string) => boolean): string[] {
+  const out: string[] = [];
+  let here = blocks[index];
+  for (let i = index - 1; i >= 0 && here !== undefined && out.length < LEAD_IN_SENTENCES; i -= 1) {
+    const block = blocks[i] as ProseBlock;
+    if (NOT_PROSE.has(block.kind) || NOT_PROSE.has(here.kind) || block.heading !== here.heading) break;
+    // A table's cell reads on from the cells of its own row only (they open with the same row
+    // header, source/markdown-published.ts); other rows are other records.
+    if (here.kind === 'table-cell' || block.kind === 'table-cell') {
+      if (here.kind !== block.kind || here.offsets[0] !== block.offsets[0]) break;
+    } else {
+      const end = (block.offsets[block.offsets.length - 1] ?? 0) + 1;
+      const start = here.offsets[0] ?? 0;
+      if (end > start || !FOLLOWS_ON.test(text.slice(end, start))) break;
+    }
+    const sentences = splitSentences(block.text, i).map((s) => s.text);
+    if (!namesSubject(block.text) && !sentences.some((s) => TWO_NUMBERS.test(s))) break;
+    out.unshift(...sentences.slice(-(LEAD_IN_SENTENCES - out.length)));
+    here = block;
+  }
+  return out;
+}
