@@ -16,8 +16,12 @@ import { CANONICAL_UNIT } from '../quantities/unit-table.js';
 import type { Quantity } from '../types.js';
 
 const S = String.raw`[\s\u00A0]`;
+/** What the first amount is of, before a joiner: "190 ppm of carbon dioxide, ...", "120 metres of sea-level fall is ...". */
+const OF_WHAT = String.raw`(?:${S}+of${S}+(?:the${S}+)?[\p{L}₂-]+(?:${S}+[\p{L}₂-]+){0,2})?`;
+/** A hedge before the second amount: "..., barely 0.19 percent". */
+const HEDGE_TAIL = String.raw`(?:(?:barely|just|only|roughly|about|around|some|nearly|almost|approximately)${S}+)?`;
 const JOINER = new RegExp(
-  String.raw`^${S}*(?:\(|\[|,?${S}*or${S}+|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|=${S}*|\/${S}*|,?${S}*equivalent to${S}+|,?${S}*which is${S}+|,?${S}*(?:aka|a\.k\.a\.)${S}+|,${S}*so${S}+|,${S}*|—${S}*)$`,
+  String.raw`^${OF_WHAT}${S}*(?:\(|\[|,?${S}*or${S}+|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|=${S}*|\/${S}*|,?${S}*equivalent to${S}+|,?${S}*which is${S}+|,?${S}*(?:aka|a\.k\.a\.)${S}+|,${S}*so${S}+|,${S}*|—${S}*)${HEDGE_TAIL}$`,
   'iu',
 );
 /** Words that end a loose gap and announce the same amount again ("which readers would call"). */
@@ -27,7 +31,7 @@ const JOINER = new RegExp(
  */
 const FRAMED = String.raw`(?:which|that|this)${S}*,?${S}+in${S}+(?:[\p{L}-]+${S}+){0,2}?(?:[\p{L}-]+)${S}*,?${S}+(?:is|was|comes${S}+to|works${S}+out${S}+(?:to|at)|becomes|reads)`;
 const LEAD = String.raw`(?:(?:or|i\.e\.,?|that is,?|that's|that’s|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|(?:would|might|will|can|could)${S}+call|call${S}+it|=|\(|—|${FRAMED})(?:${S}*(?:a|an)${S}+(?:${CHANGE_SUBJECT_NOUNS.join('|')})${S}+of)?|${RESTATING_VERB_PATTERN})`;
-const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}(?:${S}+(?:still|just|only|merely|roughly|about|around|some)){0,2}${S}*$`, 'iu');
+const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}(?:${S}+(?:still|just|only|merely|roughly|about|around|some|barely|nearly|almost|approximately)){0,2}${S}*$`, 'iu');
 /** A loose gap: short, with no clause break that would end the thought (no other quantity: they are adjacent). */
 const LOOSE_GAP = /^[^;:!?]{0,80}$/u;
 /** Words after a percentage that make it a relative change ("50 percent above", "30 percent higher"). */
@@ -43,7 +47,7 @@ const PARALLEL_AFTER = new RegExp(String.raw`^${S}+${COMPARATIVE}(?![\p{L}])`, '
 const parallelComparison = (text: string, gap: string, second: Quantity): boolean => PARALLEL_GAP.test(gap) && PARALLEL_AFTER.test(text.slice(second.end)) && second.dimension !== 'percent';
 
 /** A copula alone between two amounts in different units: "420 ppm is 0.042 percent". */
-const COPULA_GAP = new RegExp(String.raw`^,?${S}+(?:is|was|are|were|equals|makes${S}+up|made${S}+up)(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}+$`, 'iu');
+const COPULA_GAP = new RegExp(String.raw`^${OF_WHAT},?${S}+(?:is|was|are|were|equals|makes${S}+up|made${S}+up)(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}+$`, 'iu');
 /** "in BP it is", "on the b2k scale that's": the era named, then a pointing word, just before the date. */
 const ERA_NAMED_BACK = new RegExp(String.raw`(?:^|[^\p{L}])(?:in|on)${S}+(?:the${S}+)?(?:bp|b2k)(?:${S}+(?:terms|scale|years))?,?${S}+(?:it|that|this)(?:${S}+(?:is|was|becomes|comes${S}+to)|['’]s)${S}*(?:(?:about|roughly|around|some)${S}+)?$`, 'iu');
 

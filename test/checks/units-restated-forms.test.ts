@@ -67,3 +67,28 @@ describe('a Fahrenheit figure that points back at a change ("that six-degree dro
     expect(flagged(...sentences)).toEqual([]);
   });
 });
+
+// 1% of the air = 10,000 ppm (by definition of the units, common practice); 1 ft = 0.3048 m (NIST
+// SP 811, 2008).
+describe('a restatement after what the first amount is of, or behind a hedge', () => {
+  it.each([
+    ['The bubbles trapped about 185 ppm of carbon dioxide, barely 0.185 percent of the air.', '0.185 percent', '0.0185 percent'],
+    ['Some 125 metres of sea-level fall is roughly 1,250 feet.', 'roughly 1,250 feet', '410 feet'],
+  ])('%s flags %s', (sentence, text, correction) => {
+    const found = flagged(sentence);
+    expect(found.map(([, t]) => t)).toEqual([text]);
+    expect(String(found[0]?.[2])).toContain(correction.split(' ')[0] as string);
+  });
+
+  it('across sentences, behind a hedge: "That is barely 0.185 percent of the air."', () => {
+    expect(flagged('The bubbles trapped about 185 ppm of carbon dioxide.', 'That is barely 0.185 percent of the air.').map(([id]) => id)).toEqual(['unit.percent-ppm']);
+  });
+
+  it.each([
+    'The bubbles trapped about 185 ppm of carbon dioxide, barely 0.0185 percent of the air.',
+    'Some 125 metres of sea-level fall is roughly 410 feet.',
+    'The glacial air held 185 ppm of carbon dioxide, 0.35 ppm of methane.',
+  ])('leaves alone: %s', (sentence) => {
+    expect(flagged(sentence)).toEqual([]);
+  });
+});
