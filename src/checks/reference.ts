@@ -5,6 +5,8 @@
  * correction, the citations, and the as-of date of values that change with time.
  */
 import { findTerms } from '../claims/bind.js';
+import { createTopicMatcher, type TopicMatcher } from '../prose/topic-matcher.js';
+import { entityWordsOf } from '../propositions/lexicon.js';
 import { midSentence } from '../rulepack/describe-range.js';
 import { levelAt } from '../rulepack/resolve-reference.js';
 import { NIST_SP_811 } from './standard-sources.js';
@@ -68,7 +70,10 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     // A global figure that is the size of a regional change ("the whole Earth was 9 °C colder": the
     // Antarctic warming) is the regional record told as global: the scope check's flag, not a value's.
     const regional = distance === 0 || matched !== undefined ? undefined : regionalMatch(r, q, packs);
-    if (regional !== undefined) {
+    // Only a sentence that names a regional record presents that record as global; one that names
+    // none ("At the LGM the planet was some 12 °C colder") states a wrong global value, whose reason
+    // says whose size it is.
+    if (regional !== undefined && namesRegionalRecord(sentence, packs)) {
       flags.push(regional);
       continue;
     }
@@ -81,15 +86,31 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
       level,
       start: q.start,
       end: q.end,
-      reason: older !== undefined ? supersededReason(r, q, older, reference.text, packs) : matched !== undefined ? supersededAsCurrent(r, q, matched, reference.text, packs) : reasonFor(r, q, reference.text, aboutToday, packs),
+      reason: older !== undefined ? supersededReason(r, q, older, reference.text, packs) : matched !== undefined ? supersededAsCurrent(r, q, matched, reference.text, packs) : regional !== undefined ? regional.reason : reasonFor(r, q, reference.text, aboutToday, packs),
       claimed: shownClaim(q),
       reference,
       correction: correctionFor(r, q),
-      sources: matched === undefined ? r.sources : [...r.sources, ...matched.sources.filter((s) => !r.sources.includes(s))],
+      sources: regional !== undefined ? regional.sources : matched === undefined ? r.sources : [...r.sources, ...matched.sources.filter((s) => !r.sources.includes(s))],
     });
   }
   return { flags, verdicts };
 }
+
+const recordMatchers = new WeakMap<LoadedPacks, TopicMatcher>();
+
+/** Whether the sentence names a regional record: an ice core, or the Antarctic, Greenland or the poles. */
+function namesRegionalRecord(sentence: string, packs: LoadedPacks): boolean {
+  let matcher = recordMatchers.get(packs);
+  if (matcher === undefined) {
+    const regions = packs.lexicon['regions'] ?? {};
+    matcher = createTopicMatcher([...entityWordsOf(packs.lexicon, ['ice-core']), ...['antarctic', 'greenland', 'polar'].flatMap((k) => regions[k] ?? [])]);
+    recordMatchers.set(packs, matcher);
+  }
+  return matcher.test(sentence) || READS_BACK.test(sentence);
+}
+
+/** "This tells us that...", "CURATOR: Those layers show...": a sentence that reads the record named before. */
+const READS_BACK = /^\W*(?:\p{Lu}[\p{L}'’.-]*:\s*)?(?:this|that|these|those|it|they)(?:\s+[\p{L}-]+){0,2}\s+(?:tells?|told|shows?|showed|means?|meant|suggests?|indicates?|reveals?|says?|said)(?![\p{L}])/iu;
 
 /** The scope check whose flag a regional figure told as global gets. */
 const REGIONAL_AS_GLOBAL = 'scope.regional-record-as-global';

@@ -22,10 +22,10 @@ async function rules(sentence: string): Promise<string[]> {
 
 describe('a regional figure told as global', () => {
   it.each([
-    // The Antarctic isotope warming (8-11 °C) given for the whole Earth.
-    'The whole Earth was about 9 °C colder during the last ice age.',
-    // The Greenland LGM cooling (about 15-25 °C) given for the planet.
-    'At the glacial maximum the Earth as a whole was more than 20 degrees Celsius colder.',
+    // The Antarctic isotope warming (8-11 °C) given for the whole Earth, read from the record before.
+    'This record tells us the whole Earth was about 9 °C colder during the last ice age.',
+    // The Greenland LGM cooling (about 15-25 °C) given for the planet, with the record named.
+    'At the glacial maximum, the Greenland cores show, the Earth as a whole was more than 20 degrees Celsius colder.',
     // A read-from phrase names the record the global figure comes from.
     'Going by Vostok, the planet as a whole was about nine degrees colder during the last glacial maximum.',
     'According to the Dome C ice core, the world warmed by ten degrees at the end of the last ice age.',
@@ -34,11 +34,25 @@ describe('a regional figure told as global', () => {
   });
 
   it('carries the global value as the correction, and both sources', async () => {
-    const result = await checkText(`${SCENE}The whole Earth was about 9 °C colder during the last ice age.`);
+    const result = await checkText(`${SCENE}This record tells us the whole Earth was about 9 °C colder during the last ice age.`);
     const flag = result.flags.find((f) => f.ruleId === 'scope.regional-record-as-global');
     expect(flag?.correction).toMatch(/6 °C/u);
     expect(flag?.reason).toMatch(/Antarctic/u);
     expect(flag?.sources.map((s) => s.id)).toEqual(expect.arrayContaining(['tierney-2020', 'jouzel-2007']));
+  });
+
+  // A sentence that names no regional record states a wrong global value: the value check's flag,
+  // whose reason still says whose size the figure is, with the same correction and sources.
+  it.each([
+    'The whole Earth was about 9 °C colder during the last ice age.',
+    'At the glacial maximum the Earth as a whole was more than 20 degrees Celsius colder.',
+  ])('a wrong global value when no record is named: %j', async (sentence) => {
+    const result = await checkText(SCENE + sentence);
+    const flag = result.flags.find((f) => f.span.start.offset >= SCENE.length && f.ruleId === 'value.gmst-lgm-to-preindustrial-warming');
+    expect(flag?.correction).toMatch(/6 °C/u);
+    expect(flag?.reason).toMatch(/Antarctic|Greenland/u);
+    expect(flag?.sources.map((s) => s.id)).toEqual(expect.arrayContaining(['tierney-2020']));
+    expect(await rules(sentence)).not.toContain('scope.regional-record-as-global');
   });
 
   it.each([
