@@ -5,6 +5,7 @@
  * correction, the citations, and the as-of date of values that change with time.
  */
 import { findTerms } from '../claims/bind.js';
+import { boundInterval, boundReadings } from '../claims/bind-bound.js';
 import { midSentence } from '../rulepack/describe-range.js';
 import { levelAt } from '../rulepack/resolve-reference.js';
 import { NIST_SP_811 } from './standard-sources.js';
@@ -33,8 +34,11 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
   const flags: FlagDraft[] = [];
   const verdicts: Verdict[] = [];
   let aboutToday: boolean | undefined;
+  // "never got above 250 ppm": a number stated as a bound is the extreme itself (claims/bind-bound.ts).
+  const bounds = bindings.length === 0 ? [] : boundReadings(sentence, quantities, packs, findTerms(sentence, packs));
   for (const binding of bindings) {
-    const q = quantities[binding.quantityIndex];
+    const stated = quantities[binding.quantityIndex];
+    const q = stated === undefined || bounds[binding.quantityIndex] === undefined ? stated : { ...stated, ...boundInterval(stated) };
     const r = packs.reference(binding.referenceId);
     if (q === undefined || r === undefined) {
       verdicts.push('no reference');

@@ -14,6 +14,7 @@
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
+import { BOUND_TERMS, boundReadings, clauseStarts } from './bind-bound.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
 import { withoutOthers } from './bind-others.js';
@@ -124,6 +125,21 @@ function termRegex(words: string[]): RegExp {
 }
 
 /**
+ * `vetoes` less the words of earlier clauses, for a number stated as a bound whose words begin at
+ * `from`: "Present-day levels are far above anything in the ice, where natural CO2 never exceeded
+ * about 300 ppm" (the ceiling is the ice's, not today's).
+ */
+function withoutEarlierClauses(vetoes: TermHits, from: number | undefined, starts: number[]): TermHits {
+  if (from === undefined) return vetoes;
+  const kept: TermHits = new Map();
+  for (const [id, spans] of vetoes) {
+    const left = spans.filter(([, end]) => end > from || !starts.some((b) => b >= end && b <= from));
+    if (left.length > 0) kept.set(id, left);
+  }
+  return kept;
+}
+
+/**
  * Binds `quantities` (parsed from `sentence`) to reference values of `packs`. `context` is the
  * previous sentence of the same paragraph, if any: its terms may name the subject of a quantity
  * that has no candidate in its own sentence.
@@ -141,6 +157,22 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
       const view = views[i] as TermHits;
       if (!view.has(term.id)) view.set(term.id, [[q.start, q.end]]);
     }
+  });
+  // "CO2 never climbed above 300 ppm": a bound's words are its number's alone, and name the extreme.
+  const bounds = boundReadings(sentence, quantities, packs, hits);
+  bounds.forEach((b, j) => {
+    if (b === undefined) return;
+    const [s, e] = b.span;
+    views.forEach((view, i) => {
+      if (i === j) return;
+      for (const [id, spans] of view) {
+        const left = spans.filter(([start, end]) => end <= s || start >= e);
+        if (left.length === 0) view.delete(id);
+        else view.set(id, left);
+      }
+    });
+    const own = views[j] as TermHits;
+    own.set(BOUND_TERMS[b.kind], [...(own.get(BOUND_TERMS[b.kind]) ?? []), b.span]);
   });
   // "… began to fade 18,000 years ago and was over by 3,000 years ago": a predicate sharing the subject speaks for itself.
   for (const c of sharedSubjects(sentence, quantities)) {
@@ -183,11 +215,17 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (ONE_UNIT.test(q.text)) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
-    const vetoes = vetoView(sentence, view, q, role);
-    const scored = packs.references
+    const bound = bounds[i];
+    const vetoes = withoutEarlierClauses(vetoView(sentence, view, q, role), bound?.span[0], clauseStarts(sentence));
+    let scored = packs.references
       .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view, vetoes) && canState(r, q))
       .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
       .sort((a, b) => a.score - b.score);
+    // A ceiling binds the highest level when some value reads it, not the level of today or of a period.
+    if (bound !== undefined) {
+      const extreme = scored.filter(({ r }) => r.binding.all.some((g) => g.includes(BOUND_TERMS[bound.kind])));
+      if (extreme.length > 0) scored = extreme;
+    }
     const [best, next] = scored;
     if (best !== undefined) decided.set(i, next !== undefined && next.score === best.score ? AMBIGUOUS : best.r.id);
     else if ((fromApposition = bindApposition(sentence, q, role, view, hits, packs)) !== undefined) decided.set(i, fromApposition);
