@@ -15,6 +15,7 @@ import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
 import { BOUND_TERMS, boundReadings, clauseStarts } from './bind-bound.js';
+import { withStateEvents } from './bind-events.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
 import { withoutOthers } from './bind-others.js';
@@ -102,7 +103,8 @@ function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
     const as = extendedTerm(id, packs);
     hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
   }
-  return hits;
+  // "the ice sheets were at their greatest extent": a thing's state names an event.
+  return withStateEvents(sentence, hits, packs);
 }
 
 function keyWordsOf(words: string[]): string[] | undefined {
