@@ -6,6 +6,7 @@
  */
 import { findTerms } from '../claims/bind.js';
 import { boundInterval, boundReadings } from '../claims/bind-bound.js';
+import { isOneYearMeasurement, oneYearInterval } from './reference-dated.js';
 import { midSentence } from '../rulepack/describe-range.js';
 import { levelAt } from '../rulepack/resolve-reference.js';
 import { NIST_SP_811 } from './standard-sources.js';
@@ -38,8 +39,10 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
   const bounds = bindings.length === 0 ? [] : boundReadings(sentence, quantities, packs, findTerms(sentence, packs));
   for (const binding of bindings) {
     const stated = quantities[binding.quantityIndex];
-    const q = stated === undefined || bounds[binding.quantityIndex] === undefined ? stated : { ...stated, ...boundInterval(stated) };
     const r = packs.reference(binding.referenceId);
+    // "In 2023 the global average was around 410 ppm": one year's measurement leaves little slack.
+    const dated = stated === undefined || r === undefined || !isOneYearMeasurement(r, packs) ? stated : { ...stated, ...oneYearInterval(stated) };
+    const q = dated === undefined || bounds[binding.quantityIndex] === undefined ? dated : { ...dated, ...boundInterval(dated) };
     if (q === undefined || r === undefined) {
       verdicts.push('no reference');
       continue;
