@@ -127,6 +127,20 @@ function termRegex(words: string[]): RegExp {
 }
 
 /**
+ * `vetoes` less the words of the quantity's own unit: "300 CO2 molecules in every million molecules
+ * of air" names the air as its unit, not as a share of the atmosphere told in percent.
+ */
+function withoutOwnUnitWords(vetoes: TermHits, q: Quantity): TermHits {
+  if (q.statedUnit === 'CE' || q.dimension !== 'concentration') return vetoes;
+  const kept: TermHits = new Map();
+  for (const [id, spans] of vetoes) {
+    const left = spans.filter(([start, end]) => !(start > q.start && end <= q.end));
+    if (left.length > 0) kept.set(id, left);
+  }
+  return kept;
+}
+
+/**
  * `vetoes` less the words of earlier clauses, for a number stated as a bound whose words begin at
  * `from`: "Present-day levels are far above anything in the ice, where natural CO2 never exceeded
  * about 300 ppm" (the ceiling is the ice's, not today's).
@@ -218,7 +232,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const bound = bounds[i];
-    const vetoes = withoutEarlierClauses(vetoView(sentence, view, q, role), bound?.span[0], clauseStarts(sentence));
+    const vetoes = withoutOwnUnitWords(withoutEarlierClauses(vetoView(sentence, view, q, role), bound?.span[0], clauseStarts(sentence)), q);
     let scored = packs.references
       .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view, vetoes) && canState(r, q))
       .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
