@@ -64,6 +64,9 @@ const BASE_UNITS: UnitDef[] = [
     words('(?:years?|yrs?) before present'),
   ]),
   u('yr ago', 'age', 1, 'years ago', [words('(?:years?|yrs?) ago')]),
+  // "fifty millennia ago", "twelve centuries ago": an age counted in longer units.
+  u('millennia ago', 'age', 1e3, 'millennia ago', [words('(?:millennium|millennia|millenniums) ago')]),
+  u('centuries ago', 'age', 100, 'centuries ago', [words('(?:century|centuries) ago')]),
   u('ka', 'age', 1e3, 'ka', [String.raw`(?:[cC]al[\s\u00A0]+)?(?:ka|kyrs?|ky)[\s\u00A0]+(?:${BP}|${AGO})`, 'ka']),
   u('Ma', 'age', 1e6, 'Ma', [String.raw`(?:Ma|Myrs?|My)[\s\u00A0]+(?:${BP}|${AGO})`, 'Ma']),
   u('yr b2k', 'age', 1, 'years b2k', [
