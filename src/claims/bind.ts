@@ -126,6 +126,31 @@ function termRegex(words: string[]): RegExp {
   return new RegExp(`(^|[^\\p{L}\\p{N}])(?:${escaped.join('|')})(?![\\p{L}\\p{N}])`, 'giu');
 }
 
+/** A quantity in a relative clause after a comma: "..., which started roughly 30,000 years ago". */
+const RELATIVE_BEFORE = /,\s*which\s+[^,;:.!?()]*$/u;
+
+/**
+ * `vetoes` less the words before the antecedent of a relative clause the quantity stands in: in
+ * "how Antarctic temperature and CO2 moved during the last deglaciation, which started roughly
+ * 30,000 years ago" the clause speaks of the deglaciation alone, so "CO2" vetoes nothing for it.
+ * The antecedent is a term that ends right before the comma.
+ */
+function withoutBeforeAntecedent(sentence: string, vetoes: TermHits, q: Quantity, hits: TermHits): TermHits {
+  const m = RELATIVE_BEFORE.exec(sentence.slice(0, q.start));
+  if (m === null) return vetoes;
+  const comma = m.index;
+  let antecedent: number | undefined;
+  for (const spans of hits.values()) for (const [start, end] of spans) if (end <= comma && /^\s*$/u.test(sentence.slice(end, comma))) antecedent = Math.min(antecedent ?? start, start);
+  if (antecedent === undefined) return vetoes;
+  const from = antecedent;
+  const kept: TermHits = new Map();
+  for (const [id, spans] of vetoes) {
+    const left = spans.filter(([, end]) => end > from);
+    if (left.length > 0) kept.set(id, left);
+  }
+  return kept;
+}
+
 /**
  * `vetoes` less the words of the quantity's own unit: "300 CO2 molecules in every million molecules
  * of air" names the air as its unit, not as a share of the atmosphere told in percent.
@@ -232,7 +257,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const bound = bounds[i];
-    const vetoes = withoutOwnUnitWords(withoutEarlierClauses(vetoView(sentence, view, q, role), bound?.span[0], clauseStarts(sentence)), q);
+    const vetoes = withoutBeforeAntecedent(sentence, withoutOwnUnitWords(withoutEarlierClauses(vetoView(sentence, view, q, role), bound?.span[0], clauseStarts(sentence)), q), q, hits);
     let scored = packs.references
       .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view, vetoes) && canState(r, q))
       .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
