@@ -35,13 +35,9 @@ export function readPerMillion(text: string, quantities: Quantity[]): Quantity[]
     const base = (after ?? before)?.[1]?.toLowerCase();
     const factor = base === undefined ? undefined : BASES[base];
     if (factor === undefined) return q;
-    let end = q.end;
-    if (after !== null) end = q.end + after[0].length;
-    else {
-      const gas = OF_GAS.exec(text.slice(q.end));
-      if (gas === null) return q;
-      end = q.end + gas[0].length;
-    }
+    const gas = after === null ? OF_GAS.exec(text.slice(q.end)) : null;
+    if (after === null && gas === null) return q;
+    const end = q.end + (after ?? gas)![0].length;
     return {
       ...q,
       text: text.slice(q.start, end),
