@@ -96,7 +96,9 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
       else break;
       last = 'half';
     } else if (w === 'hundred' || w === 'dozen') {
-      if (last === 'none' || last === 'hundred' || last === 'and') break;
+      // "every hundred thousand years": a bare "hundred" before a scale is one hundred.
+      const bareHundred = last === 'none' && w === 'hundred' && isScale(tokens[i + 1]);
+      if ((last === 'none' && !bareHundred) || last === 'hundred' || last === 'and') break;
       // "nineteen hundred and twenty-one hundred": hundreds after hundreds start a number of their own.
       if (beforeAnd !== undefined && hundredsBeforeAnd >= 100) return beforeAnd;
       current = (current === 0 ? 1 : current) * (w === 'hundred' ? 100 : 12);
