@@ -5,8 +5,10 @@
  * correction, the citations, and the as-of date of values that change with time.
  */
 import { findTerms } from '../claims/bind.js';
+import { boundInterval, boundReadings } from '../claims/bind-bound.js';
 import { createTopicMatcher, type TopicMatcher } from '../prose/topic-matcher.js';
 import { entityWordsOf } from '../propositions/lexicon.js';
+import { isOneYearMeasurement, oneYearInterval } from './reference-dated.js';
 import { midSentence } from '../rulepack/describe-range.js';
 import { levelAt } from '../rulepack/resolve-reference.js';
 import { NIST_SP_811 } from './standard-sources.js';
@@ -35,9 +37,14 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
   const flags: FlagDraft[] = [];
   const verdicts: Verdict[] = [];
   let aboutToday: boolean | undefined;
+  // "never got above 250 ppm": a number stated as a bound is the extreme itself (claims/bind-bound.ts).
+  const bounds = bindings.length === 0 ? [] : boundReadings(sentence, quantities, packs, findTerms(sentence, packs));
   for (const binding of bindings) {
-    const q = quantities[binding.quantityIndex];
+    const stated = quantities[binding.quantityIndex];
     const r = packs.reference(binding.referenceId);
+    // "In 2023 the global average was around 410 ppm": one year's measurement leaves little slack.
+    const dated = stated === undefined || r === undefined || !isOneYearMeasurement(r, packs) ? stated : { ...stated, ...oneYearInterval(stated) };
+    const q = dated === undefined || bounds[binding.quantityIndex] === undefined ? dated : { ...dated, ...boundInterval(dated) };
     if (q === undefined || r === undefined) {
       verdicts.push('no reference');
       continue;

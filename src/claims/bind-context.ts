@@ -25,13 +25,13 @@ import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 
 /** What a group filled from the previous sentence adds to a value's distance. */
 export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
-const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|(?:at|by|during|in)\s+that\s+(?:time|point|stage|period)|(?:in|at|from|of|during|for|within|across|over|on)\s+(?:that|the\s+same)\s+\p{L}+|at\s+the\s+time(?!\s+of(?![\p{L}]))|(?:by|back)\s+then)(?![\p{L}])/iu;
+const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|(?:at|by|during|in)\s+that\s+(?:time|point|stage|period)|(?:in|at|from|of|during|for|within|across|over|on)\s+(?:that|the\s+same)\s+\p{L}+|at\s+the\s+time(?!\s+of(?![\p{L}]))|(?:by|back)\s+then|the\s+(?:same\s+)?(?:greenhouse\s+)?gas)(?![\p{L}])/iu;
 /**
  * A sentence whose subject is a bare measure ("The global average for 2019 was …", "Before the
  * Industrial Revolution the level was …") names no subject of its own: the measure is of the subject
  * before. A measure with an "of" phrase names its own subject ("the level of the sea").
  */
-const MEASURE_SUBJECT = /(?:^|[^\p{L}])the\s+(?:[\p{L}-]+\s+){0,2}?(?:average|mean|level|concentration|figure|value|reading|total|amount)(?![\p{L}])(?!\s+of(?![\p{L}]))/iu;
+const MEASURE_SUBJECT = /(?:^|[^\p{L}])the\s+(?:[\p{L}-]+\s+){0,2}?(?:average|mean|level|concentration|figure|value|reading|total|amount|lag|lead|gap|delay|offset)(?![\p{L}])(?!\s+of(?![\p{L}]))/iu;
 /**
  * A term right after a demonstrative ("in that record", "this core") is the back-reference itself, not
  * a subject of its own; so is a term in a noun phrase a possessive opens ("Its deuterium and CO2
@@ -116,7 +116,7 @@ export function bindFromContext(
   const candidates = packs.references
     .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && canState(r, q))
     .filter((r) => !r.binding.none.some((id) => vetoes.has(id)))
-    .filter((r) => own.every(([id, spans]) => serves(r, id) || spans.every((span) => qualifiesServing(sentence, span, view, (other) => serves(r, other)))))
+    .filter((r) => own.every(([id, spans]) => serves(r, id) || spans.every((span) => qualifiesServing(sentence, span, view, (other) => serves(r, other)) || withinServing(span, view, (other) => serves(r, other)))))
     .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))))
     .filter((r) => frame?.ownTime !== true || !takesDate(r));
   // The more specific reading wins: a value that vetoes a word present in either sentence gives way
@@ -144,6 +144,14 @@ export function bindFromContext(
 function qualifiesServing(sentence: string, [from, end]: [number, number], view: TermHits, serves: (id: string) => boolean): boolean {
   // "40 m lower than today": a change word inside a term that serves ("lower than today") is part of it.
   return [...view].some(([id, spans]) => serves(id) && spans.some(([start, stop]) => (start >= end && QUALIFIES.test(sentence.slice(end, start))) || (start <= from && stop >= end)));
+}
+
+/**
+ * Whether a term is a word of a longer term that serves the value: "ice age" in "the end of the last
+ * ice age" (the deglaciation) names no subject of its own.
+ */
+function withinServing([start, end]: [number, number], view: TermHits, serves: (id: string) => boolean): boolean {
+  return [...view].some(([id, spans]) => serves(id) && spans.some(([s, e]) => s <= start && e >= end && e - s > end - start));
 }
 
 /**

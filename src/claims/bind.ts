@@ -15,6 +15,8 @@ import { PhraseTrie } from '../prose/phrase-trie.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
+import { BOUND_TERMS, boundReadings, clauseStarts } from './bind-bound.js';
+import { withStateEvents } from './bind-events.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
 import { withoutOthers } from './bind-others.js';
@@ -102,7 +104,8 @@ function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
     const as = extendedTerm(id, packs);
     hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
   }
-  return hits;
+  // "the ice sheets were at their greatest extent": a thing's state names an event.
+  return withStateEvents(sentence, hits, packs);
 }
 
 function keyWordsOf(words: string[]): string[] | undefined {
@@ -153,6 +156,62 @@ export function termRegex(words: string[]): RegExp {
   return new RegExp(`(^|[^\\p{L}\\p{N}])(?:${escaped.join('|')})(?![\\p{L}\\p{N}])`, 'giu');
 }
 
+/** A quantity in a relative clause after a comma: "..., which started roughly 30,000 years ago". */
+const RELATIVE_BEFORE = /,\s*which\s+[^,;:.!?()]*$/u;
+
+/**
+ * `vetoes` less the words before the antecedent of a relative clause the quantity stands in: in
+ * "how Antarctic temperature and CO2 moved during the last deglaciation, which started roughly
+ * 30,000 years ago" the clause speaks of the deglaciation alone, so "CO2" vetoes nothing for it.
+ * The antecedent is a term that ends right before the comma; only a date is read so.
+ */
+function withoutBeforeAntecedent(sentence: string, vetoes: TermHits, q: Quantity, hits: TermHits): TermHits {
+  // Only a date: the clause dates its antecedent event ("the deepest core, which reached 3,620 metres" keeps its words).
+  if (q.dimension !== 'age') return vetoes;
+  const m = RELATIVE_BEFORE.exec(sentence.slice(0, q.start));
+  if (m === null) return vetoes;
+  const comma = m.index;
+  let antecedent: number | undefined;
+  for (const spans of hits.values()) for (const [start, end] of spans) if (end <= comma && /^\s*$/u.test(sentence.slice(end, comma))) antecedent = Math.min(antecedent ?? start, start);
+  if (antecedent === undefined) return vetoes;
+  const from = antecedent;
+  const kept: TermHits = new Map();
+  for (const [id, spans] of vetoes) {
+    const left = spans.filter(([, end]) => end > from);
+    if (left.length > 0) kept.set(id, left);
+  }
+  return kept;
+}
+
+/**
+ * `vetoes` less the words of the quantity's own unit: "300 CO2 molecules in every million molecules
+ * of air" names the air as its unit, not as a share of the atmosphere told in percent.
+ */
+function withoutOwnUnitWords(vetoes: TermHits, q: Quantity): TermHits {
+  if (q.statedUnit === 'CE' || q.dimension !== 'concentration') return vetoes;
+  const kept: TermHits = new Map();
+  for (const [id, spans] of vetoes) {
+    const left = spans.filter(([start, end]) => !(start > q.start && end <= q.end));
+    if (left.length > 0) kept.set(id, left);
+  }
+  return kept;
+}
+
+/**
+ * `vetoes` less the words of earlier clauses, for a number stated as a bound whose words begin at
+ * `from`: "Present-day levels are far above anything in the ice, where natural CO2 never exceeded
+ * about 300 ppm" (the ceiling is the ice's, not today's).
+ */
+function withoutEarlierClauses(vetoes: TermHits, from: number | undefined, starts: number[]): TermHits {
+  if (from === undefined) return vetoes;
+  const kept: TermHits = new Map();
+  for (const [id, spans] of vetoes) {
+    const left = spans.filter(([, end]) => end > from || !starts.some((b) => b >= end && b <= from));
+    if (left.length > 0) kept.set(id, left);
+  }
+  return kept;
+}
+
 /**
  * Binds `quantities` (parsed from `sentence`) to reference values of `packs`. `context` is the
  * previous sentence of the same paragraph, if any: its terms may name the subject of a quantity
@@ -171,6 +230,22 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
       const view = views[i] as TermHits;
       if (!view.has(term.id)) view.set(term.id, [[q.start, q.end]]);
     }
+  });
+  // "CO2 never climbed above 300 ppm": a bound's words are its number's alone, and name the extreme.
+  const bounds = boundReadings(sentence, quantities, packs, hits);
+  bounds.forEach((b, j) => {
+    if (b === undefined) return;
+    const [s, e] = b.span;
+    views.forEach((view, i) => {
+      if (i === j) return;
+      for (const [id, spans] of view) {
+        const left = spans.filter(([start, end]) => end <= s || start >= e);
+        if (left.length === 0) view.delete(id);
+        else view.set(id, left);
+      }
+    });
+    const own = views[j] as TermHits;
+    own.set(BOUND_TERMS[b.kind], [...(own.get(BOUND_TERMS[b.kind]) ?? []), b.span]);
   });
   // "… began to fade 18,000 years ago and was over by 3,000 years ago": a predicate sharing the subject speaks for itself.
   for (const c of sharedSubjects(sentence, quantities)) {
@@ -213,11 +288,17 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (ONE_UNIT.test(q.text)) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
-    const vetoes = vetoView(sentence, view, q, role);
-    const scored = packs.references
+    const bound = bounds[i];
+    const vetoes = withoutBeforeAntecedent(sentence, withoutOwnUnitWords(withoutEarlierClauses(vetoView(sentence, view, q, role), bound?.span[0], clauseStarts(sentence)), q), q, hits);
+    let scored = packs.references
       .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view, vetoes) && canState(r, q))
       .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
       .sort((a, b) => a.score - b.score);
+    // A ceiling binds the highest level when some value reads it, not the level of today or of a period.
+    if (bound !== undefined) {
+      const extreme = scored.filter(({ r }) => r.binding.all.some((g) => g.includes(BOUND_TERMS[bound.kind])));
+      if (extreme.length > 0) scored = extreme;
+    }
     const [best, next] = scored;
     if (best !== undefined) decided.set(i, next !== undefined && next.score === best.score ? AMBIGUOUS : best.r.id);
     else if ((fromApposition = bindApposition(sentence, q, role, view, hits, packs)) !== undefined) decided.set(i, fromApposition);

@@ -57,6 +57,7 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
   // number before its "and" (two numbers of a range), where "two thousand and five" goes on.
   let lastScale = Infinity;
   let beforeAnd: WordNumber | undefined;
+  let hundredsBeforeAnd = 0;
   for (let i = 0; i < tokens.length; i++) {
     const w = tokens[i] as string;
     const spoken = spokenHundreds(w);
@@ -95,12 +96,18 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
       else break;
       last = 'half';
     } else if (w === 'hundred' || w === 'dozen') {
-      if (last === 'none' || last === 'hundred' || last === 'and') break;
+      // "every hundred thousand years": a bare "hundred" before a scale is one hundred.
+      const bareHundred = last === 'none' && w === 'hundred' && isScale(tokens[i + 1]);
+      if ((last === 'none' && !bareHundred) || last === 'hundred' || last === 'and') break;
+      // "nineteen hundred and twenty-one hundred": hundreds after hundreds start a number of their own.
+      if (beforeAnd !== undefined && hundredsBeforeAnd >= 100) return beforeAnd;
       current = (current === 0 ? 1 : current) * (w === 'hundred' ? 100 : 12);
       last = 'hundred';
     } else if (w in SCALES) {
       if (last === 'none' || last === 'and') break;
-      if ((SCALES[w] as number) >= lastScale) {
+      // "fifteen hundred and two thousand": a count of hundreds already as large as the scale is a
+      // number of its own, where "a hundred and twenty thousand" is one.
+      if ((SCALES[w] as number) >= lastScale || (beforeAnd !== undefined && hundredsBeforeAnd >= (SCALES[w] as number))) {
         if (beforeAnd !== undefined) return beforeAnd;
         break;
       }
@@ -114,6 +121,7 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
       const joinsHalf = (next === 'a' || next === 'an') && nextNext === 'half';
       if (!(last === 'hundred' || last === 'scale' || (joinsHalf && (last === 'small' || last === 'tens')))) break;
       beforeAnd = { used, value: total + current };
+      hundredsBeforeAnd = current;
       last = 'and';
       continue;
     } else break;

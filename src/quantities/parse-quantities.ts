@@ -13,6 +13,7 @@ import { groupParts, partsOf, type Group } from './group-atoms.js';
 import { applyRule, intervalRule } from './interval-rules.js';
 import { isCalendarCue, readKiloAnnum, readTemperature, RESTATING_VERB_PATTERN } from './reading-cues.js';
 import { CANONICAL_UNIT, UNIT_TABLE, type UnitDef } from './unit-table.js';
+import { readPerMillion } from './per-million.js';
 
 const S = String.raw`[\s\u00A0]`;
 const AD_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?<ad>AD|A\.D\.)${S}*$`, 'u');
@@ -115,7 +116,8 @@ const kept = new Map<string, readonly Quantity[]>();
 export function parseQuantities(text: string): Quantity[] {
   let found = kept.get(text);
   if (found === undefined) {
-    found = readQuantities(text);
+    // "300 CO2 molecules in every million molecules of air": a share of the air in ppm.
+    found = readPerMillion(text, readQuantities(text));
     if (text.length <= KEPT_LENGTH) {
       if (kept.size >= KEPT_TEXTS) kept.delete(kept.keys().next().value as string);
       kept.set(text, found);

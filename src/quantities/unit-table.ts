@@ -33,7 +33,18 @@ const u = (id: string, dimension: Dimension, factor: number, display: string, fo
 
 const BP = String.raw`(?:BP|B\.P\.)`;
 const AGO = words('(?:ago|before present)');
-const DEG_C = [symbol('° C'), 'ºC', '℃', words('degrees? (?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C')];
+/**
+ * A bare "degrees" is a temperature (read as Celsius, the science writer's default: common practice)
+ * only in a clause about temperature: a comparative or a warming word right after it ("one degree
+ * colder", "six degrees of warming") or a temperature word shortly before ("the temperature rose by
+ * twenty-five degrees"), and never near an angle ("the tilt varies by about 2.4 degrees", "75 degrees south").
+ */
+const LETTERS = String.raw`\p{L}*`;
+const ANGLE_CUE = `(?:${['tilt', 'obliquit', 'axi', 'latitude', 'longitude', 'angle', 'inclin', 'rotat', 'compass', 'arc'].map((w) => words(w) + LETTERS).join('|')})`;
+const TEMPERATURE_CUE = `(?:${['temperature', 'thermometer', 'warm', 'cool', 'cold', 'heat', 'hotter', 'chill'].map((w) => words(w) + LETTERS).join('|')})`;
+const TEMPERATURE_AFTER = words('(?:colder|warmer|cooler|hotter|chillier|of (?:warming|cooling|cold|warmth))');
+const BARE_DEGREES = String.raw`(?<!(?<![\p{L}])${ANGLE_CUE}(?![\p{L}])[^.;:!?]{0,80})${words('degrees?')}(?![\s\u00A0]+(?:[nN]orth|[sS]outh|[eE]ast|[wW]est|[NSEW](?![\p{L}])))(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])[^.;:!?]{0,60}[\p{N}\p{L}][\s\u00A0-]*${words('degrees?')})|(?=[\s\u00A0]+${TEMPERATURE_AFTER}(?![\p{L}])))`;
+const DEG_C = [symbol('° C'), 'ºC', '℃', words('degrees? (?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C'), BARE_DEGREES];
 const DEG_F = [symbol('° F'), 'ºF', '℉', words('degrees? fahrenheit'), symbol('degrees? F')];
 const KELVIN = ['K', words('kelvins?')];
 const PPM = ['ppmv?', words('parts? per million(?: by volume)?')];
@@ -53,6 +64,9 @@ const BASE_UNITS: UnitDef[] = [
     words('(?:years?|yrs?) before present'),
   ]),
   u('yr ago', 'age', 1, 'years ago', [words('(?:years?|yrs?) ago')]),
+  // "fifty millennia ago", "twelve centuries ago": an age counted in longer units.
+  u('millennia ago', 'age', 1e3, 'millennia ago', [words('(?:millennium|millennia|millenniums) ago')]),
+  u('centuries ago', 'age', 100, 'centuries ago', [words('(?:century|centuries) ago')]),
   u('ka', 'age', 1e3, 'ka', [String.raw`(?:[cC]al[\s\u00A0]+)?(?:ka|kyrs?|ky)[\s\u00A0]+(?:${BP}|${AGO})`, 'ka']),
   u('Ma', 'age', 1e6, 'Ma', [String.raw`(?:Ma|Myrs?|My)[\s\u00A0]+(?:${BP}|${AGO})`, 'Ma']),
   u('yr b2k', 'age', 1, 'years b2k', [

@@ -1,0 +1,60 @@
+/**
+ * An event named by the state of a thing (src/claims/bind-events.ts, pack lexicon class `states`):
+ * ice sheets at their greatest extent are the Last Glacial Maximum, ice sheets beginning their
+ * retreat the start of the deglaciation. Sentences of our own, read by the real parser and binder.
+ *
+ * Values: ice sheets at their maximum about 26,500-19,000 years ago (Clark, P. U. et al. (2009),
+ * The Last Glacial Maximum, Science 325, 710-714, doi:10.1126/science.1172873); the deglaciation
+ * began about 18,000-19,000 years ago (Chowdhry Beeman, J. et al. (2019), Clim. Past 15, 913-926,
+ * doi:10.5194/cp-15-913-2019; Clark et al. 2009).
+ */
+import { describe, expect, it } from 'vitest';
+import { bindQuantities } from '../../src/claims/bind.js';
+import { checkReferences } from '../../src/checks/reference.js';
+import { parseQuantities } from '../../src/quantities/index.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+
+const packs = await loadPacks([]);
+
+function judge(sentence: string): { value: string; verdict: string } {
+  const quantities = parseQuantities(sentence);
+  const { bindings } = bindQuantities(sentence, quantities, packs);
+  const { verdicts } = checkReferences(sentence, quantities, bindings, packs);
+  return { value: bindings[0]?.referenceId ?? '-', verdict: verdicts[0] ?? '-' };
+}
+
+describe('ice sheets at their greatest are the ice-sheet maximum of the last glacial', () => {
+  it.each([
+    ['North American ice sheets stood at their largest extent about 70,000 years ago.', 'conflicts'],
+    ['The Scandinavian ice sheet grew to its maximum size some 40,000 years ago.', 'conflicts'],
+    ['Ice sheets across the north were at their biggest roughly 21,000 years ago.', 'agrees'],
+    ['The ice sheets reached their farthest extent around 22,000 years ago.', 'agrees'],
+  ])('%s', (sentence, verdict) => {
+    expect(judge(sentence)).toEqual({ value: 'lgm-ice-sheet-maximum', verdict });
+  });
+});
+
+describe('ice sheets beginning their retreat are the start of the deglaciation', () => {
+  it.each([
+    ['The northern ice sheets started to recede about 6,000 years ago.', 'conflicts'],
+    ['The great ice sheets began pulling back in earnest some 40,000 years ago.', 'conflicts'],
+    ['The ice sheets began to retreat roughly 19,000 years ago.', 'agrees'],
+  ])('%s', (sentence, verdict) => {
+    expect(judge(sentence)).toEqual({ value: 'termination-1-start', verdict });
+  });
+});
+
+describe('other words about ice sheets name no event', () => {
+  it.each([
+    // Today's ice sheets and their size (common practice): no glacial event.
+    ['Greenland\'s ice sheet holds about 7 metres of sea-level equivalent.'],
+    // The state after a clause boundary is not the ice sheets' own.
+    ['The ice sheets were thick, and the valley reached its greatest extent of farmland some 5,000 years ago.'],
+    // A state too far from the thing.
+    ['The ice sheets that once covered the plain left behind moraines, lakes and kettles that reached their greatest size about 9,000 years ago.'],
+  ])('%s', (sentence) => {
+    const value = judge(sentence).value;
+    expect(value).not.toBe('lgm-ice-sheet-maximum');
+    expect(value).not.toBe('termination-1-start');
+  });
+});
