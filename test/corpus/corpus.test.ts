@@ -32,10 +32,10 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-k-1': { recall: 0.68, falseFlags: 0.08 },
   'tuning-k-2': { recall: 0.68, falseFlags: 0.06 },
   // tuning-l-1..2 were written fresh at the start of December 2026's seventh round and first read
-  // on the engine as it stood (70.0% caught, 6.6% false flags; 57.8% caught, 3.2% false flags):
-  // they show what the engine does on phrasing new to it, and are tuned on from then on.
-  'tuning-l-1': { recall: 0.66, falseFlags: 0.08 },
-  'tuning-l-2': { recall: 0.55, falseFlags: 0.06 },
+  // on the engine as it stood (70.0% caught, 6.6% false flags; 57.8% caught, 3.2% false flags);
+  // tuned on from then on (85.0% and 68.9% caught, 1.6% false flags each at the round's end).
+  'tuning-l-1': { recall: 0.8, falseFlags: 0.06 },
+  'tuning-l-2': { recall: 0.65, falseFlags: 0.06 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -66,9 +66,9 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 85% of the seeded errors over all the sets to tune on (85.9% measured over 22 sets)', () => {
+  it('catches at least 89% of the seeded errors over all the sets to tune on (91.3% measured over 22 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
-    expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.85);
+    expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.89);
   });
 
   it('gives the reference number in at least 90% of the corrections of caught numeric errors (92.7% measured)', () => {
