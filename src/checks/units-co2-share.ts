@@ -169,6 +169,15 @@ const WHOLE = new RegExp(String.raw`(?:^|[^\p{L}])(?:in|out${S}+of|per|for|of)?$
 /** "4.2 molecules of CO2", "about 4 parts carbon dioxide": a count of CO2 in that whole. */
 const CO2_COUNT_AFTER = new RegExp(String.raw`^${S}+${UNIT_NOUN}${S}+(?:of${S}+)?(?:CO2|CO₂|carbon${S}+dioxide)(?![\p{L}\d])`, 'iu');
 
+/** A concentration the quantity reader made from a count: "about 42 molecules of CO2". */
+const COUNTED = new RegExp(String.raw`\d${S}*${UNIT_NOUN}${S}+(?:of${S}+)?(?:CO2|CO₂|carbon${S}+dioxide)`, 'iu');
+
+/** The number of a counted concentration, as written ("about 42" of "about 42 molecules of CO2"). */
+function countOf(q: Quantity): Quantity {
+  const number = /^.*?\d[\d,.]*/u.exec(q.text)?.[0] ?? q.text;
+  return { ...q, text: number, end: q.start + number.length };
+}
+
 /**
  * A CO2 share written as a count in a whole: "every thousand molecules of air held about 4.2
  * molecules of CO2" (4,200 ppm: 0.42 per thousand is today's air), "3 molecules of carbon dioxide
@@ -183,7 +192,11 @@ function countedShares(text: string, qs: Quantity[], restated: ReadonlySet<Quant
   const words = whole[0].toLowerCase();
   const per = (SCALE[(whole[1] as string).toLowerCase()] ?? 0) * (/(?:^|[^\p{L}])ten[\s\u00A0]/u.test(words) ? 10 : /hundred[\s\u00A0]+(?:thousand|million)/u.test(words) ? 100 : 1);
   const counts = qs.filter((q) => !restated.has(q) && (q.dimension === 'number' || q.dimension === 'count') && CO2_COUNT_AFTER.test(text.slice(q.end)) && (q.end <= (whole.index ?? 0) || q.start >= (whole.index ?? 0) + whole[0].length));
-  const q = counts.length === 1 ? counts[0] : undefined;
+  // The quantity reader already turns a count in every million into ppm ("about 42 molecules of CO2",
+  // quantities/per-million.ts): its number, as written, is the count.
+  const parsed = counts.length > 0 ? [] : qs.filter((q) => !restated.has(q) && q.dimension === 'concentration' && COUNTED.test(q.text)).map(countOf);
+  const found = counts.length > 0 ? counts : parsed;
+  const q = found.length === 1 ? found[0] : undefined;
   if (q === undefined || per === 0) return [];
   const ppm = (q.value / per) * 1e6;
   const iceAge = ICE_AGE_TIME.test(text) && !PRESENT_TIME.test(text);

@@ -368,7 +368,10 @@ const PARTIAL = /^(?:part|partly|partially|some|half|a|fraction|portion|share|co
 function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): boolean {
   // "Ocean warming alone explains only part of the rise": what the agent did is said to be partial.
   const clause = s.words[h.first]?.clause;
-  const partial = s.words.some((w, i) => w.clause === clause && /^(?:only|just|merely)$/u.test(w.text) && PARTIAL.test(s.words[i + 1]?.text ?? ''));
+  const partial =
+    s.words.some((w, i) => w.clause === clause && /^(?:only|just|merely)$/u.test(w.text) && PARTIAL.test(s.words[i + 1]?.text ?? '')) ||
+    // "Ocean warming alone accounts for perhaps 20 to 30 ppm of the 80 to 100 ppm rise": a share of a whole.
+    s.words.some((w, i) => i > h.last && w.clause === clause && w.text === 'of' && s.words.slice(h.last + 1, i).some((x) => /^\d/u.test(x.text)) && s.words.slice(i + 1, i + 5).some((x) => /^\d/u.test(x.text)));
   if (partial) return false;
   return s.of('exclusive').some((e) => {
     if (s.words[e.first]?.segment !== s.words[h.first]?.segment && s.words[e.first]?.clause !== s.words[h.first]?.clause) return false;

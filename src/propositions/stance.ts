@@ -51,8 +51,8 @@ const AUTHORITIES = new Set(['we', 'i', 'scientists', 'researchers', 'study', 's
 /** Whom a record or the writer tells ("tells us that"): no outside source. */
 const SELF = new Set(['us', 'me', 'you', 'is', 'was', 'are']);
 const ANSWER_OPENERS = new Set(['no', 'not', 'nope', 'actually', 'yes', 'well', 'short', 'a', 'answer', 'in', 'it', 'they', 'that', 'this', 'quite', 'hardly', 'far', 'nothing', 'partly', 'only', 'both', 'neither', 'sort', 'kind']);
-const LABEL = /^\s*(?:[*_#>\s]*)(myth|misconception|claim|the claim|fiction|false|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|you might hear|you'll hear|the myth|the misconception|misunderstanding|mistake|rumou?r)\b[^:]{0,12}:/iu;
-const FACT_LABEL = /^\s*(?:[*_#>\s]*)(fact|reality|the facts?|the science|the evidence|truth|answer|a)\b[^:]{0,12}:/iu;
+const LABEL = /^\s*(?:[*_#>\s]*)(myth|misconception|claim|the claim|fiction|false|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|you might hear|you'll hear|the myth|the misconception|misunderstanding|mistake|rumou?r)\b(?:[^:.]{0,12}:|[*_]*\.)/iu;
+const FACT_LABEL = /^\s*(?:[*_#>\s]*)(fact|reality|the facts?|the science|the evidence|truth|answer|a)\b(?:[^:.]{0,12}:|[*_]*\.(?=[*_\s]))/iu;
 
 /** The stance of `s` in its context. */
 export function stanceOf(s: ReadSentence, context: StanceContext = {}): SentenceStance {
@@ -127,6 +127,14 @@ function isReported(s: ReadSentence): boolean {
   // "For readers who think in Fahrenheit, ...": a reporter inside a phrase is nobody's report.
   const reporters = s.of('stance', 'reporters').filter((r) => !/^(?:for|to|with|among|of|from)$/u.test(s.words[r.first - 1]?.text ?? ''));
   if (verbs.some((v) => reporters.some((r) => r.last < v.first && v.first - r.last <= 4))) return true;
+  // "My neighbour insists...", "Her uncle keeps saying...": someone of a person's circle, named as the
+  // verb's subject, is an outside source with or without "that".
+  const circle = (v: LexHit) => s.words.slice(Math.max(0, v.first - 4), v.first).some((w, k, all) => /^(?:my|your|his|her|their)$/u.test(w.text) && k < all.length - 1);
+  if (verbs.some((v) => v.first <= 6 && circle(v))) return true;
+  // "Mr Pell's central claim is that...", "the letter's argument is that...": a report told as a noun
+  // that someone owns, then "is that".
+  const owned = verbs.some((v) => s.words[v.last + 1]?.text === 'is' && s.words[v.last + 2]?.text === 'that' && s.words.slice(Math.max(0, v.first - 3), v.first).some((w) => /['’]s$/u.test(w.text) || /^(?:his|her|their|the)$/u.test(w.text)));
+  if (owned) return true;
   // "Mr Pratley writes that...", "The op-ed insists the lag...": a report with a named outside source.
   // "The column told readers that...", "A correspondent wrote last month that...": up to three words
   // (whom it was told, when) may stand between the verb and its "that" or quotation.

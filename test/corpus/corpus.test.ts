@@ -36,6 +36,17 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   // tuned on from then on (85.0% and 68.9% caught, 1.6% false flags each at the round's end).
   'tuning-l-1': { recall: 0.8, falseFlags: 0.06 },
   'tuning-l-2': { recall: 0.65, falseFlags: 0.06 },
+  // tuning-m-1..4 were the blind hold-out holdout-g, tuning-n-1..4 the blind hold-out holdout-h,
+  // both spent in December 2026's seventh round (read on its first and last code); floors a few
+  // points under their figures at the round's end, the day they became sets to tune on.
+  'tuning-m-1': { recall: 0.7, falseFlags: 0.04 },
+  'tuning-m-2': { recall: 0.7, falseFlags: 0.14 },
+  'tuning-m-3': { recall: 0.69, falseFlags: 0.08 },
+  'tuning-m-4': { recall: 0.48, falseFlags: 0.08 },
+  'tuning-n-1': { recall: 0.74, falseFlags: 0.08 },
+  'tuning-n-2': { recall: 0.75, falseFlags: 0.1 },
+  'tuning-n-3': { recall: 0.64, falseFlags: 0.05 },
+  'tuning-n-4': { recall: 0.6, falseFlags: 0.05 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -66,12 +77,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 89% of the seeded errors over all the sets to tune on (91.3% measured over 22 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (85.1% measured over 30 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
-    expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.89);
+    expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (92.7% measured)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (91.5% measured over 30 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });

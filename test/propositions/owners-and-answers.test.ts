@@ -262,3 +262,24 @@ describe('objects stay in their clause; Earth is the globe', () => {
     expect(await serious(text)).toEqual([]);
   });
 });
+
+// The lag argument reported, not made (Shakun et al. 2012, above); ocean warming explains only part
+// of the glacial-interglacial CO2 rise (Sigman & Boyle 2000, Nature 407, 859-869, from memory).
+describe('reports by name and shares of a whole', () => {
+  const levels = async (text: string, ruleId: string) => (await checkText(TOPIC + text, { packs, format: 'markdown' })).flags.filter((f) => f.ruleId === ruleId).map((f) => f.level);
+  it.each([
+    "Dr Hale's main claim is that CO2 always rose some 800 years after the warming, so it cannot be the cause.",
+    'My brother-in-law insists the cores show the warming first, so CO2 cannot be the cause.',
+  ])('a report: %s', async (text) => {
+    expect(await levels(text, 'logic.lag-rules-out-cause')).toEqual(['note']);
+  });
+
+  it('the writer naming a record still asserts: "My data show the warming first, so CO2 cannot be the cause."', async () => {
+    expect(await levels('My data show the warming first, so CO2 cannot be the cause.', 'logic.lag-rules-out-cause')).toEqual(['warning']);
+  });
+
+  it('"alone accounts for 20 to 30 ppm of the 80 to 100 ppm rise" is a share, not a single cause', async () => {
+    expect(await serious('Warmer seas alone account for perhaps 20 to 30 ppm of the 80 to 100 ppm glacial-to-interglacial rise.')).not.toContain('logic.single-cause');
+    expect(await serious('Warmer seas alone account for the whole glacial-to-interglacial CO2 rise.')).toContain('logic.single-cause');
+  });
+});
