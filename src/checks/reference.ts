@@ -9,6 +9,7 @@ import { boundInterval, boundReadings } from '../claims/bind-bound.js';
 import { createTopicMatcher, type TopicMatcher } from '../prose/topic-matcher.js';
 import { entityWordsOf } from '../propositions/lexicon.js';
 import { isOneYearMeasurement, oneYearInterval } from './reference-dated.js';
+import { readsBack } from './reads-back.js';
 import { midSentence } from '../rulepack/describe-range.js';
 import { levelAt } from '../rulepack/resolve-reference.js';
 import { NIST_SP_811 } from './standard-sources.js';
@@ -113,11 +114,8 @@ function namesRegionalRecord(sentence: string, packs: LoadedPacks): boolean {
     matcher = createTopicMatcher([...entityWordsOf(packs.lexicon, ['ice-core']), ...['antarctic', 'greenland', 'polar'].flatMap((k) => regions[k] ?? [])]);
     recordMatchers.set(packs, matcher);
   }
-  return matcher.test(sentence) || READS_BACK.test(sentence);
+  return matcher.test(sentence) || readsBack(sentence);
 }
-
-/** "This tells us that...", "CURATOR: Those layers show...": a sentence that reads the record named before. */
-const READS_BACK = /^\W*(?:\p{Lu}[\p{L}'’.-]*:\s*)?(?:this|that|these|those|it|they)(?:\s+[\p{L}-]+){0,2}\s+(?:tells?|told|shows?|showed|means?|meant|suggests?|indicates?|reveals?|says?|said)(?![\p{L}])/iu;
 
 /** The scope check whose flag a regional figure told as global gets. */
 const REGIONAL_AS_GLOBAL = 'scope.regional-record-as-global';

@@ -20,6 +20,7 @@
  *   CO2 after, the temperature's region global, and a lag figure or an Antarctic record named.
  */
 import { findPhrases } from '../../claims/frames-match.js';
+import { readsBack } from '../reads-back.js';
 import { regionOwnsEntity } from '../../propositions/sentence.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isTemperatureFirst } from './queries.js';
@@ -28,7 +29,6 @@ import { isTemperatureFirst } from './queries.js';
 const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|recorded|indicates?|measures?|measure|gives?|gave|means?|suggests?|proves?|is|are|was|were|says?|said|thermometers?|stands?|represents?|reflects?|equals?|reads?|written|preserved|captured|logged|registered|history|doubles)$/u;
 const ISOTOPES = /^(?:deuterium|isotope|isotopes|δd|δ18o|d18o)$/u;
 const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degrees?|°c|°f|k|cooler|warmer|colder)$/u;
-const ANAPHORIC_READING = /^(?:this|that|these|it|they|the curve|the record|the graph|the column)\b.{0,20}\b(?:tells?|shows?|means?|suggests?|indicates?|gives?|reveals?)\b/u;
 
 /** Words that open an inference from what comes before ("..., so the whole world..."). */
 const INFERENCE = new Set(['so', 'therefore', 'thus', 'hence', 'meaning', 'consequently']);
@@ -46,7 +46,7 @@ function detectRegional(input: DetectInput): Cue[] {
   const recordIn = (r: typeof here | undefined) =>
     r !== undefined && (r.s.of('entities', 'ice-core').length + r.s.of('regions', 'antarctic').length + r.s.of('regions', 'greenland').length > 0 || r.s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text)));
   // "This tells us that the whole Earth was 9 °C colder": the record read may be named one sentence back.
-  const record = recordIn(here) || (ANAPHORIC_READING.test(s.words.map((w) => w.text).join(' ')) && recordIn(read(index - 1)));
+  const record = recordIn(here) || (readsBack(s.text) && recordIn(read(index - 1)));
   // A record in one clause and the globe in the next ("At Dome C, ...: for the planet as a whole, ...")
   // set the two side by side; only a record and the globe in one clause equate them.
   const recordClauses = new Set([...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].map((h) => s.words[h.first]?.clause));
