@@ -1,18 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { checkArithmetic } from '../../src/checks/arithmetic.js';
 import { parseQuantities } from '../../src/quantities/index.js';
+import { check, flagged } from './arithmetic-at.js';
 import { readNumberWords } from '../../src/quantities/number-words.js';
 import { hasTwoNumerals } from '../../src/quantities/two-numerals.js';
 
-/** Checks the last sentence with the ones before it as its paragraph. */
-const check = (...sentences: string[]) => {
-  const sentence = sentences[sentences.length - 1] as string;
-  return checkArithmetic(sentence, parseQuantities(sentence), sentences.slice(0, -1));
-};
-const flagged = (...sentences: string[]) => {
-  const sentence = sentences[sentences.length - 1] as string;
-  return check(...sentences).map((f) => [f.ruleId, sentence.slice(f.start, f.end), f.correction]);
-};
 
 // Levels stated earlier in the paragraph. The right values are the sentences' own numbers worked
 // by hand (common practice): 275 ÷ 185 − 1 = 48.6 %; 280 − 200 = 80; 9 − 3 = 6 °C; 419 − 280 = 139;

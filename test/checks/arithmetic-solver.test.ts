@@ -1,16 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { checkArithmetic } from '../../src/checks/arithmetic.js';
-import { parseQuantities } from '../../src/quantities/index.js';
+import { check, flagged } from './arithmetic-at.js';
 
-/** Checks the last sentence with the ones before it as its paragraph. */
-const check = (...sentences: string[]) => {
-  const sentence = sentences[sentences.length - 1] as string;
-  return checkArithmetic(sentence, parseQuantities(sentence), sentences.slice(0, -1));
-};
-const flagged = (...sentences: string[]) => {
-  const sentence = sentences[sentences.length - 1] as string;
-  return check(...sentences).map((f) => [f.ruleId, sentence.slice(f.start, f.end), f.correction]);
-};
 
 // A rate worked out from a change and a duration given anywhere in the sentences before, in any
 // order. Sums by hand (common practice): 60 ppm ÷ 5,000 yr = 0.012 ppm/yr; 4 °C ÷ 8,000 yr =
