@@ -9,19 +9,8 @@
  * doi:10.5194/cp-15-913-2019; Clark et al. 2009).
  */
 import { describe, expect, it } from 'vitest';
-import { bindQuantities } from '../../src/claims/bind.js';
-import { checkReferences } from '../../src/checks/reference.js';
-import { parseQuantities } from '../../src/quantities/index.js';
-import { loadPacks } from '../../src/rulepack/index.js';
+import { judge } from './judge-at.js';
 
-const packs = await loadPacks([]);
-
-function judge(sentence: string): { value: string; verdict: string } {
-  const quantities = parseQuantities(sentence);
-  const { bindings } = bindQuantities(sentence, quantities, packs);
-  const { verdicts } = checkReferences(sentence, quantities, bindings, packs);
-  return { value: bindings[0]?.referenceId ?? '-', verdict: verdicts[0] ?? '-' };
-}
 
 describe('ice sheets at their greatest are the ice-sheet maximum of the last glacial', () => {
   it.each([
