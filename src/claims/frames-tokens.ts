@@ -31,7 +31,14 @@ export interface SentenceTokens {
 // Words keep inner apostrophes ("Earth's") and the subscript in "CO₂"; hyphens separate words.
 const PIECE = /[\p{L}\p{N}₂]+(?:['’][\p{L}]+)*|[^\s\p{L}\p{N}-]/gu;
 const CONTRACTION = /^(.+?)(n['’]t)$/u;
-const CONTRACTION_BASE: Record<string, string> = { ca: 'can', wo: 'will', sha: 'shall' };
+const CONTRACTION_BASE: Record<string, string> = { ca: 'can', wo: 'will', sha: 'shall', ai: 'is' };
+/**
+ * Negative contractions written without the apostrophe, as informal posts do ("cant", "doesnt"):
+ * English's closed class of auxiliaries with "nt". "cant" and "wont" are also nouns ("as was his
+ * wont"), so those two count only before another word.
+ */
+const BARE_CONTRACTION = /^(ca|could|would|should|must|do|does|did|is|are|was|were|has|have|had|wo|ai)(nt)$/u;
+const BARE_AMBIGUOUS = new Set(['cant', 'wont']);
 const CLAUSE_PUNCT = new Set([';', ':', '(', ')', '—', '–']);
 const OPENERS = new Set(['“', '‘']);
 const CLOSERS = new Set(['”', '’']);
@@ -68,7 +75,8 @@ export function tokenizeSentence(text: string, clauseBreaks: readonly string[], 
     }
     const lower = raw.toLowerCase();
     if (breaks.has(lower) && !(lower === 'but' && EXCEPT_WORDS.has(tokens.filter((t) => t.isWord).at(-1)?.text ?? ''))) clause += 1;
-    const contraction = CONTRACTION.exec(lower);
+    const bare = BARE_CONTRACTION.exec(lower);
+    const contraction = CONTRACTION.exec(lower) ?? (bare !== null && (!BARE_AMBIGUOUS.has(lower) || /^\s+\p{L}/u.test(text.slice(start + raw.length))) ? bare : null);
     if (contraction !== null && contraction[1] !== undefined && contraction[2] !== undefined) {
       const base = CONTRACTION_BASE[contraction[1]] ?? contraction[1];
       const cut = start + contraction[1].length;

@@ -11,10 +11,12 @@ import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Order } from './types.js';
 
 /** Order words that name no second thing: the other one is understood ("CO2 came second"). */
-const ABSOLUTE = /^(?:first|came first|went first|start first|rise first|move first|earlier|beforehand|ahead|second|come second|later|afterwards|only later|delay|delayed|trailing|laggard|head start|catch up|tag along|in its wake)$/u;
+const ABSOLUTE = /^(?:first|came first|went first|start first|rise first|move first|earlier|beforehand|ahead|second|come second|later|late|latecomer|afterwards|only later|delay|delayed|trailing|laggard|head start|catch up|tag along|in its wake)$/u;
 const NOUN_BEFORE = new Set(['the', 'a', 'an', 'this', 'that', 'its', 'co2', 'co₂', 'famous', 'observed', 'supposed', 'long', 'short', 'same', 'such', 'any', 'no']);
 const DURATIONS = /^(?:years?|centur(?:y|ies)|millenni(?:um|a)|decades?|kyr|hundreds?|thousands?)$/u;
 /** Order words that are verbs: with no object they still set their subject against the other thing. */
+/** Function words that may follow "late" used as an order ("late in the thaw", "late to the party", "late, so"). */
+const AFTER_LATE = new Set(['in', 'to', 'into', 'on', 'at', 'for', 'by', 'and', 'or', 'but', 'so', 'then', 'relative', 'compared', 'with', 'after', 'behind', 'again', 'every', 'each', 'each time', 'every time', 'too', 'anyway', 'as']);
 const ORDER_VERB = /^(?:lag|lags|lagged|lagging|follow|follows|followed|following|trail|trails|trailed|trailing|lead|leads|led|leading|precede[sd]?|preceding|lag behind|lagged behind)$/u;
 const COUNTERPART: Record<string, string> = { co2: 'temperature', temperature: 'co2' };
 
@@ -56,6 +58,8 @@ function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Orde
   if (isNoun && after !== 'behind' && !ofThing) {
     return { kind: 'order', first: 'temperature', then: 'co2', together: false, implicit: true, ...span };
   }
+  // "the late Pleistocene", "the late 1990s": "late" before its noun names a time, no order.
+  if (phrase === 'late' && s.words[h.last + 1]?.segment === s.words[h.last]?.segment && !AFTER_LATE.has(after ?? '')) return undefined;
   let a: Thing | undefined = subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? thingBefore(s, h.first, 'clause');
   let b: Thing | undefined;
   if (ABSOLUTE.test(phrase)) {

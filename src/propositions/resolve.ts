@@ -37,7 +37,17 @@ export function thingBefore(s: ReadSentence, i: number, scope: 'segment' | 'clau
 export function subjectOf(s: ReadSentence, i: number): Thing | undefined {
   const at = s.words[i];
   if (at === undefined) return undefined;
-  return s.things.find((t) => t.last < i && s.words[t.first]?.segment === at.segment);
+  const before = s.things.filter((t) => t.last < i && s.words[t.first]?.segment === at.segment);
+  // "In the Dome C record CO2 rose...": a thing inside an opening prepositional phrase is no subject
+  // when a plain one follows it.
+  return before.find((t) => !inPrepositionalPhrase(s, t)) ?? before[0];
+}
+
+/** The thing is the object of a preposition ("in the Dome C record", "after the warming"). */
+function inPrepositionalPhrase(s: ReadSentence, t: Thing): boolean {
+  const lead = s.words[t.first - 1]?.text ?? '';
+  const lead2 = s.words[t.first - 2]?.text ?? '';
+  return PREPOSITIONS.has(lead) || (['the', 'a', 'an', 'this', 'that', 'its', 'their'].includes(lead) && PREPOSITIONS.has(lead2));
 }
 
 /** The nearest thing after word `i` in the same clause, within `window` words. */
@@ -78,7 +88,7 @@ export function clauseSubject(s: ReadSentence, i: number): Thing | undefined {
 }
 
 /** Words a subject search steps over on its way back from a verb. */
-const SKIP = /^(?:the|a|an|only|merely|just|simply|also|then|alone|itself|themselves|solely|really|actually|clearly|probably|certainly|surely|had|has|have|was|were|is|are|be|been|did|does|do|can|could|will|would|may|might|must|should|not|never|first|turn|always|ever|indeed|largely|mostly|partly|mainly|chiefly|directly|helped|help|helps|to|all|nothing|else|in|itself|once|later|again|still|further|now|eventually|ultimately|finally)$/u;
+const SKIP = /^(?:the|a|an|only|merely|just|simply|also|then|alone|itself|themselves|solely|really|actually|clearly|probably|certainly|surely|had|has|have|was|were|is|are|be|been|did|does|do|can|could|will|would|may|might|must|should|not|never|first|turn|always|ever|indeed|largely|mostly|partly|mainly|chiefly|directly|helped|help|helps|to|all|nothing|else|in|itself|once|later|again|still|further|now|eventually|ultimately|finally|too|far|very)$/u;
 export const PREPOSITIONS = new Set(['of', 'in', 'after', 'before', 'behind', 'from', 'with', 'than', 'like', 'by', 'on', 'at', 'to', 'into', 'over', 'during', 'about', 'for']);
 const AUX_AFTER = /^(?:had|has|have|was|were|is|are|did|does|do|can|could|will|would|may|might|must|should|alone|only|itself|then|also)$/u;
 

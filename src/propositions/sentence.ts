@@ -167,6 +167,20 @@ function corrected(s: ReadSentence, k: number, i: number): boolean {
 
 /** Words that deny an effect by saying it fell short ("unable to end", "insufficient to explain"). */
 const LIMITS = new Set(['unable', 'insufficient', 'failed', 'fails', 'fail', 'negligible', 'irrelevant', 'unimportant', 'insignificant', 'immaterial']);
+/**
+ * "too late to have caused it", "too weak to matter", "far too small to explain": "too", a word or
+ * two, then "to" before word `i` states that the verb after it did not happen, whatever the adjective.
+ */
+function tooToVerb(s: ReadSentence, k: number, i: number): boolean {
+  if (s.words[k]?.text !== 'too') return false;
+  const segment = s.words[k]?.segment;
+  for (let j = k + 2; j <= Math.min(k + 3, i - 1); j += 1) {
+    if (s.words[j]?.segment !== segment) return false;
+    if (s.words[j]?.text === 'to') return true;
+  }
+  return false;
+}
+
 /** Verbs that deny their object ("rules out CO2 as a driver"). */
 export const DENIALS = new Set(['rule', 'rules', 'ruled', 'ruling', 'exclude', 'excludes', 'excluded', 'deny', 'denies', 'denied', 'disprove', 'disproves', 'disproved', 'refute', 'refutes', 'refuted', 'dismiss', 'dismisses', 'dismissed', 'exonerate', 'exonerates', 'exonerated', 'acquit', 'acquits', 'acquitted', 'eliminate', 'eliminates', 'eliminated', 'eliminating', 'discount', 'discounts', 'discounted', 'strike', 'strikes', 'struck', 'cross', 'crosses', 'crossed']);
 /** Denials that need the particle after them ("struck off the list", "crossed off"). */
@@ -201,7 +215,7 @@ export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
     // "nothing else", "nothing more", "no other": a negation inside a restricting phrase restricts, it denies nothing.
     const restricting = s.inside(k, 'exclusive') || (w.text === 'nothing' && (after === 'else' || after === 'but'));
     if (NEGATIONS.has(w.text) && after !== 'only' && !(w.text === 'no' && after === 'doubt') && !restricting) count += 1;
-    else if (LIMITS.has(w.text) || (w.text === 'too' && /^(?:weak|small|feeble|little|slow|short|modest)$/u.test(after))) count += 1;
+    else if (LIMITS.has(w.text) || tooToVerb(s, k, i)) count += 1;
     else if (DENIALS.has(w.text) && (w.text.startsWith('rul') ? after === 'out' : WITH_OFF.has(w.text) ? after === 'off' : true)) count += 1;
     // "so much for CO2 causing the warming": a dismissal.
     else if (w.text === 'much' && s.words[k - 1]?.text === 'so' && after === 'for') count += 1;

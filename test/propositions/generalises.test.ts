@@ -287,3 +287,36 @@ describe('the lag put as a maxim about latecomers', () => {
     expect(await serious(`${text}\n`)).not.toContain('logic.lag-rules-out-cause');
   });
 });
+
+describe('the lag argument as informal posts write it', () => {
+  // A lag of CO2 behind Antarctic temperature does not rule CO2 out as a cause; it amplified the
+  // warming: Shakun et al. 2012, Nature 484, 49-54, doi 10.1038/nature10915; Parrenin et al. 2013,
+  // Science 339, 1060-1063, doi 10.1126/science.1226368.
+  it.each([
+    // Negative contractions with no apostrophe (common practice in posts and chats).
+    'The cores have CO2 going up after the heat, so CO2 cant be the cause of the heat.',
+    'Carbon dioxide trails the temperature in the Vostok ice, so it doesnt cause the warming at all.',
+    'CO2 lagged the warming by centuries, which means it couldnt have caused any of it.',
+    // "late" with no object: later than the warming the sentence is about.
+    'The gas always arrives late, so it cannot be responsible for the thaw.',
+    'CO2 turned up late in the ice-core record and therefore played no part in warming the planet.',
+    // "too ADJ to VERB": the verb did not happen, whatever the adjective.
+    'Carbon dioxide climbed far too late to have warmed anything at the end of the ice age.',
+    'In the Dome C record CO2 rose too late to be a cause of the warming.',
+  ])('flags %j', async (text) => {
+    expect(await serious(`${text}\n`)).toContain('logic.lag-rules-out-cause');
+  });
+
+  it.each([
+    // "late" before its noun names a time.
+    'In the late Pleistocene, CO2 and Antarctic temperature rose and fell together, each amplifying the other.',
+    // Arrived late and still amplified: the right reading.
+    'CO2 arrived late in the thaw and then amplified the warming the orbit had begun.',
+    // "too" as "also", with a comma after it.
+    'Antarctic temperature rose, and CO2 rose too, to about 280 ppm, adding to the warming.',
+    // "cant" and "wont" as nouns are no negation.
+    'As is her wont, the curator ends the tour at the Vostok core, where CO2 drove part of the warming.',
+  ])('passes %j', async (text) => {
+    expect(await serious(`${text}\n`)).not.toContain('logic.lag-rules-out-cause');
+  });
+});
