@@ -1,3 +1,4 @@
+import { topicalThroughout } from './prose/topical-throughout.js';
 import { bindQuantities } from './claims/bind.js';
 import { restoreElidedUnits } from './claims/elided-units.js';
 import { checkArithmetic } from './checks/arithmetic.js';
@@ -175,8 +176,10 @@ export function checkFileText(raw: Pick<Draft, 'path' | 'text' | 'format'> | Dra
     // A Markdown draft is parsed only around its subjects and its sentences with two numbers
     // (speed/sparse-markdown.ts): the same claims as a parse of the whole.
     const sparse = 'blocks' in raw || format !== 'markdown' ? undefined : sparseMarkdownDraft(path, text, (t) => namesSubject(t, packs));
-    draft = 'blocks' in raw ? raw : sparse?.draft ?? draftFromText(path, text, format === 'docx' ? 'text' : format);
-    beside = sparse?.subjectBeside;
+    // A draft about the subject throughout is read whole: every block may take its subject from it.
+    const part = sparse?.throughout === true ? undefined : sparse;
+    draft = 'blocks' in raw ? raw : part?.draft ?? draftFromText(path, text, format === 'docx' ? 'text' : format);
+    beside = part?.subjectBeside;
   } catch (error) {
     if (error instanceof FirnlineError) return { claims: [], flags: [], unchecked: uncheckedOf(error) };
     throw error;
@@ -226,7 +229,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
   const claims: Claim[] = [];
   const seen = new Map<string, number>();
   const subjects = subjectMatcherOf(packs);
-  const beside = options.subjectBeside ?? subjectBeside(draft.blocks, packs);
+  const beside = options.subjectBeside ?? subjectNearby(draft.blocks, packs);
   draft.blocks.forEach((block, blockIndex) => {
     // A block with no subject in it or beside it holds at most the draft's own arithmetic and unit
     // slips, which need two numbers in one sentence (sentences are pieces of their block): without
@@ -301,6 +304,17 @@ export function subjectBeside(blocks: readonly ProseBlock[], packs: LoadedPacks)
   const subjects = subjectMatcherOf(packs);
   const named = blocks.map((b) => subjects.test(b.text));
   return named.map((_hit, i) => named[i - 1] === true || named[i + 1] === true);
+}
+
+/**
+ * Per block, whether it may take its subject from the draft: from a block beside it
+ * (`subjectBeside`), or from anywhere when the draft names its subject throughout
+ * (prose/topical-throughout.ts: a thread whose reply names only a region and a temperature).
+ */
+export function subjectNearby(blocks: readonly ProseBlock[], packs: LoadedPacks): boolean[] {
+  const subjects = subjectMatcherOf(packs);
+  if (topicalThroughout(blocks.map((b) => subjects.test(b.text)))) return blocks.map(() => true);
+  return subjectBeside(blocks, packs);
 }
 
 /**

@@ -1,7 +1,7 @@
 /**
  * Re-checks an edited document block by block. Every check of the engine stays inside one prose
  * block (sentences never cross blocks; the context a check reads is the block's earlier
- * sentences), except one bit: whether a block beside it names a subject (engine.subjectBeside),
+ * sentences), except one bit: whether a block beside it, or the draft throughout, names a subject (engine.subjectNearby),
  * and the lead-in the arithmetic and unit checks read on from (prose/lead-in.ts).
  * So a block whose source, prose text, offsets, heading and that bit are unchanged has the same
  * claims as before, only perhaps further down the file. Those are moved to their new place; only
@@ -9,7 +9,7 @@
  * the whole draft, are then numbered again in document order, exactly as `checkDraft` numbers
  * them, so the result equals a full check (the tests compare the two).
  */
-import { checkDraft, namesSubject, subjectBeside } from '../engine.js';
+import { checkDraft, namesSubject, subjectNearby } from '../engine.js';
 import { claimIdOf, foldClaimText } from '../review/claim-id.js';
 import { CHECKLIST_MARKER } from '../report/checklist-markdown.js';
 import { leadInOf } from '../prose/lead-in.js';
@@ -50,7 +50,7 @@ export function createDocumentChecker(setup: CheckSetup): DocumentChecker {
       cachePath = projectPath;
       const positions = createPositionMap(text);
       const lines = createLineIndex(text);
-      const beside = subjectBeside(draft.blocks, setup.packs);
+      const beside = subjectNearby(draft.blocks, setup.packs);
       const leadIns = draft.blocks.map((_b, i) => leadInOf(text, draft.blocks, i, (t) => namesSubject(t, setup.packs)));
       const keys = draft.blocks.map((block, i) => blockKey(text, block, beside[i] === true, leadIns[i] ?? []));
       // A block that appears twice uses one cached entry per appearance.

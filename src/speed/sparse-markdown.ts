@@ -27,12 +27,15 @@ import { plainParagraphKind, readMarkdownParts, type PlainPiece } from '../sourc
 import { checkMarkdownLimits } from '../source/markdown-limits.js';
 import { checkNestingDepth } from '../source/nesting-depth.js';
 import { splitSentences } from '../prose/index.js';
+import { topicalThroughout } from '../prose/topical-throughout.js';
 import type { Draft, ProseBlock } from '../types.js';
 
 /** A draft read in parts, and per block whether a block beside it (in the whole draft) names a subject. */
 export interface SparseDraft {
   draft: Draft;
   subjectBeside: boolean[];
+  /** The draft names its subject throughout (prose/topical-throughout.ts): every block must be read. */
+  throughout: boolean;
 }
 
 const TWO_NUMBERS = /\d[^\d]+\d/u;
@@ -96,7 +99,7 @@ export function sparseMarkdownDraft(path: string, text: string, namesSubject: (t
     const named = run.map((b) => namesSubject(b.text));
     return named.map((_n, i) => named[i - 1] === true || named[i + 1] === true);
   });
-  return { draft: { path, text, format: 'markdown', blocks }, subjectBeside };
+  return { draft: { path, text, format: 'markdown', blocks }, subjectBeside, throughout: topicalThroughout(hit) };
 }
 
 /**

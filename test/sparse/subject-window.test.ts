@@ -50,6 +50,24 @@ describe('generic topic words need a subject nearby', () => {
     expect(await claimsOf(`1/ CO2 in Antarctic ice cores tracks temperature.\n\n${FAR}${post}\n`)).toEqual([]);
   });
 
+  it('reads every post of a thread that names the subject throughout, and a docs page post by post', async () => {
+    // Antarctic ice-core temperature fell about 8-10 °C at the Last Glacial Maximum, about twice the
+    // global mean cooling of about 6 °C (Jouzel et al. 2007, Science 317, 793-796; Tierney et al.
+    // 2020, Nature 584, 569-573): an Antarctic figure read as the planet's is a scope error.
+    const reply = 'Someone upthread said the Antarctic ice shows it was ten degrees colder, so the whole planet was ten degrees colder.';
+    const posts = [
+      'The Vostok ice core goes back about 420,000 years.',
+      'EPICA Dome C reaches about 800,000 years.',
+      'Ice-age CO2 sat near 180 ppm at the coldest points.',
+      'Great thread, thanks all.',
+    ];
+    const thread = await claimsOf(`${posts.join('\n\n')}\n\nNice to see this.\n\n${reply}\n`);
+    expect(thread.find((c) => c.text === reply)?.rules).toContain('scope.regional-record-as-global');
+    // One mention of a subject in a long page is no thread about it: the far block stays unread.
+    const docs = await claimsOf(`${SUBJECT}\n\n${FAR}${FAR}${reply}\n`);
+    expect(docs.map((c) => c.text)).not.toContain(reply);
+  });
+
   it("still flags a sentence's own arithmetic slip far from any subject", async () => {
     // 12,900 − 11,700 = 1,200 years (common practice: subtraction).
     const claims = await claimsOf(`The Younger Dryas was a cold return in the last deglaciation.\n\n${FAR}It ran from about 12,900 to 11,700 years ago: a cold spell of some 2,000 years.\n`);
