@@ -383,7 +383,7 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
     // "the orbit ended the ice age, full stop, and ...": a restriction set off on its own after the cause.
     const tail = e.first > h.last && s.words[e.first]?.clause === s.words[h.first]?.clause && s.words[e.first - 1]?.segment !== s.words[e.first]?.segment && s.words[e.last + 1]?.segment !== s.words[e.last]?.segment;
     if (tail) return true;
-    const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by itself|in itself|in themselves|on its own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
+    const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by (?:itself|themselves)|in (?:itself|themselves)|on (?:its|their) own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
     return nearAgent || ((nearCue || between) && strong);
   });
 }

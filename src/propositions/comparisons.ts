@@ -22,11 +22,14 @@ export function readComparisons(s: ReadSentence, previous?: ReadSentence): Compa
     const verb = h.key.endsWith('-verb');
     const link = verb ? h.last : s.words.findIndex((w, i) => i > h.last - (sign === 0 ? 2 : 0) && i <= h.last + 4 && (w.text === 'than' || w.text === 'as'));
     if (link < 0) continue;
-    const b = thingAfter(s, link, 6);
+    const b = pastThoseOf(s, thingAfter(s, link, 6));
     // The subject, not a thing in a phrase before it ("Over the ice ages the poles swung…").
     const segment = s.words[h.first]?.segment;
     const plain = s.things.find((t) => t.last < h.first && s.words[t.first]?.segment === segment && t.kind !== 'pronoun' && !inPhrase(s, t));
-    const a = plain ?? subjectOf(s, h.first) ?? thingBefore(s, h.first, 'clause');
+    // "Polar regions, buffered by their ice, change less...": past an interrupting phrase, the
+    // subject is the clause's first plain thing, not the nearest one.
+    const clauseSubject = s.things.find((t) => t.last < h.first && s.words[t.first]?.clause === s.words[h.first]?.clause && t.kind !== 'pronoun' && !inPhrase(s, t));
+    const a = plain ?? subjectOf(s, h.first) ?? clauseSubject ?? thingBefore(s, h.first, 'clause');
     if (a === undefined || b === undefined) continue;
     const attribute = h.key.startsWith('age') ? 'age' : h.key.startsWith('rate') ? 'rate' : 'size';
     if (attribute === 'size') {
@@ -41,4 +44,10 @@ export function readComparisons(s: ReadSentence, previous?: ReadSentence): Compa
     out.push({ kind: 'comparison', a: name(a), b: name(b), attribute, sign, start: s.words[a.first]?.start ?? 0, end: s.words[b.last]?.end ?? 0 });
   }
   return out;
+}
+
+/** "than those of the global mean", "than that of Greenland": the thing after "of" is the one compared. */
+function pastThoseOf(s: ReadSentence, b: Thing | undefined): Thing | undefined {
+  if (b === undefined || b.kind !== 'pronoun' || !['that', 'those'].includes(s.words[b.first]?.text ?? '') || s.words[b.last + 1]?.text !== 'of') return b;
+  return thingAfter(s, b.last + 1, 4) ?? b;
 }

@@ -57,10 +57,28 @@ export function formsOf(word: string): string[] {
 }
 
 /**
- * Every written form of a phrase. Up to three content words inflect together ("rise and fall
+ * Every written form of a phrase ("all the work" is also "all of the work"). Up to three content words inflect together ("rise and fall
  * together" → "rising and falling together"); in longer phrases the first and last words inflect.
  */
 export function variantsOf(words: string[]): string[][] {
+  const other = ofTurned(words);
+  return other === undefined ? formsOfWords(words) : [...formsOfWords(words), ...formsOfWords(other)];
+}
+
+/** Quantifiers that take "the" with or without "of" ("all the work", "all of the work"). */
+const OPTIONAL_OF = new Set(['all', 'both', 'half']);
+
+/** The phrase with "of" put in after "all"/"both"/"half" before "the", or taken out; undefined when it has neither. */
+function ofTurned(words: string[]): string[] | undefined {
+  for (let i = 0; i + 1 < words.length; i += 1) {
+    if (!OPTIONAL_OF.has(words[i] as string)) continue;
+    if (words[i + 1] === 'the') return [...words.slice(0, i + 1), 'of', ...words.slice(i + 1)];
+    if (words[i + 1] === 'of' && words[i + 2] === 'the') return [...words.slice(0, i + 1), ...words.slice(i + 2)];
+  }
+  return undefined;
+}
+
+function formsOfWords(words: string[]): string[][] {
   if (words.length === 0) return [];
   const content = words.filter((w) => !FIXED.has(w)).length;
   if (content <= 3) {

@@ -320,3 +320,30 @@ describe('the lag argument as informal posts write it', () => {
     expect(await serious(`${text}\n`)).not.toContain('logic.lag-rules-out-cause');
   });
 });
+
+describe('comparisons and causes past interrupting phrases and loose forms', () => {
+  // Polar temperature swings exceed the global mean's (polar amplification): Jouzel et al. 2007,
+  // Science 317, 793-796; Tierney et al. 2020, Nature 584, 569-573. The orbit paced the ice ages and
+  // CO2 amplified the change: Shakun et al. 2012, Nature 484, 49-54, doi 10.1038/nature10915.
+  it.each([
+    // The subject past a phrase set off by commas.
+    ['Over the ice ages, polar regions, shielded by their ice caps, varied less than the world as a whole.', 'direction.polar-swings-exceed-global'],
+    ['Greenland, for all its glaciers, swung less than the global mean between glacial and interglacial times.', 'direction.polar-swings-exceed-global'],
+    // "those of X", "that of X": the thing after "of" is what is compared.
+    ['In the glacial cycles, the swings at the poles were milder than those of the global average.', 'direction.polar-swings-exceed-global'],
+    ["Across the ice ages, Antarctica's temperature changes were smaller than that of the planet as a whole.", 'direction.polar-swings-exceed-global'],
+    // "all of the" is "all the".
+    ['The tilt of the orbit did all of the work by itself.', 'logic.single-cause'],
+    ['Orbital changes did all of the work on their own at the end of the last ice age.', 'logic.single-cause'],
+  ])('flags %j', async (text, rule) => {
+    expect(await serious(`${text}\n`)).toContain(rule);
+  });
+
+  it.each([
+    ['Over the ice ages, polar regions, shielded by their ice caps, varied more than the world as a whole.', 'direction.polar-swings-exceed-global'],
+    ['In the glacial cycles, the swings at the poles were larger than those of the global average.', 'direction.polar-swings-exceed-global'],
+    ['The orbit did some of the work, and CO2 did much of the rest.', 'logic.single-cause'],
+  ])('passes %j', async (text, rule) => {
+    expect(await serious(`${text}\n`)).not.toContain(rule);
+  });
+});
