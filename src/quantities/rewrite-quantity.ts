@@ -66,9 +66,13 @@ const SCALE_WORDS: [string, number][] = [
 
 /**
  * A number in the draft's scale word, or a smaller one when the value would fall below 1 in it:
- * 800,000 with "billion" reads "0.8 million", not "0.0008 billion"; plain digits below a thousand.
+ * 800,000 with "billion" reads "0.8 million", not "0.0008 billion"; plain digits below a thousand,
+ * and for "thousand" itself ("three thousand years" → "1,700 years").
  */
 function scaledNumber(stated: number, scale: number, word: string, figures: number): string {
+  // "three thousand years" corrected to 1,700 reads "1,700 years", not "1.7 thousand years": below a
+  // million, digits with separators say it plainly (common practice in copy-editing).
+  if (word === 'thousand' && Math.abs(stated) < 1e6) return formatNumber(stated, figures);
   if (Math.abs(stated) >= scale || word === '') return `${formatNumber(stated / scale, figures)} ${word}`.trimEnd();
   const [smaller, size] = SCALE_WORDS.find(([, size]) => Math.abs(stated) >= size) ?? ['', 1];
   return size === 1 ? formatNumber(stated, figures) : `${formatNumber(stated / size, figures)} ${smaller}`;

@@ -36,7 +36,7 @@ const WRONG: [string, string[], string, string][] = [
   // A hedged range of dates in the sentence before: 18,000 − 11,500 = 6,500.
   ['arith.duration', ['The moraine record spans between about 18,000 and 11,500 years ago.', 'That works out to a retreat spread over some 9,000 years.'], 'some 9,000 years', 'some 6,500 years'],
   // "so call it" before the span of a began-ended pair: 16,000 − 11,000 = 5,000.
-  ['arith.duration', ['The thaw in the Harrow valley started about 16,000 years ago and was over by 11,000 years ago, so call it three thousand years of melting.'], 'three thousand years', '5 thousand years'],
+  ['arith.duration', ['The thaw in the Harrow valley started about 16,000 years ago and was over by 11,000 years ago, so call it three thousand years of melting.'], 'three thousand years', '5,000 years'],
 ];
 
 // Right arithmetic in the same phrasings, and sentences that only look like them: never flagged.
