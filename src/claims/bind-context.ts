@@ -25,7 +25,7 @@ import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 
 /** What a group filled from the previous sentence adds to a value's distance. */
 export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
-const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|(?:at|by|during|in)\s+that\s+(?:time|point|stage|period)|(?:in|at|from|of|during|for|within|across|over|on)\s+(?:that|the\s+same)\s+\p{L}+|at\s+the\s+time(?!\s+of(?![\p{L}]))|(?:by|back)\s+then|the\s+(?:same\s+)?(?:greenhouse\s+)?gas)(?![\p{L}])/iu;
+const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|we|we're|we’re|we've|we’ve|(?:at|by|during|in)\s+that\s+(?:time|point|stage|period)|(?:in|at|from|of|during|for|within|across|over|on)\s+(?:that|the\s+same)\s+\p{L}+|at\s+the\s+time(?!\s+of(?![\p{L}]))|(?:by|back)\s+then|the\s+(?:same\s+)?(?:greenhouse\s+)?gas)(?![\p{L}])/iu;
 /**
  * A sentence whose subject is a bare measure ("The global average for 2019 was …", "Before the
  * Industrial Revolution the level was …") names no subject of its own: the measure is of the subject

@@ -1,0 +1,31 @@
+/**
+ * "we're at", "we've passed": a speaker's own present takes its subject from the sentence before
+ * (src/claims/bind-context.ts), as talks, call-in shows and threads say it. Sentences are our own.
+ * Global mean CO2 about 424 ppm in 2024 (Lan et al., NOAA GML global annual means); the highest
+ * natural level of the 800,000-year ice-core record about 300 ppm (Lüthi et al. 2008, Nature 453,
+ * 379-382).
+ */
+import { describe, expect, it } from 'vitest';
+import { checkText } from '../../src/engine.js';
+
+const rules = async (text: string) => (await checkText(`${text}\n`, { format: 'markdown' })).flags.map((f) => f.ruleId);
+
+describe('a speaker\'s own present takes the subject before', () => {
+  it.each([
+    // ppb for ppm: a scale slip once the figure is CO2's.
+    ["CO2 in the ice never went above about 300 parts per million. Right now we're at about 424 parts per billion.", 'unit.scale-slip'],
+    // A present level far off the measured one.
+    ["Carbon dioxide in the ice never went above about 300 ppm. These days we're at about 524 ppm.", 'value.co2-present-day'],
+    ["Carbon dioxide in the ice never went above about 300 ppm. Today we've reached 610 ppm.", 'value.co2-present-day'],
+  ])('flags %j', async (text, rule) => {
+    expect(await rules(text)).toContain(rule);
+  });
+
+  it.each([
+    "CO2 in the ice never went above about 300 parts per million. Right now we're at about 424 ppm.",
+    // A number of the speaker's own, in another dimension, binds to nothing.
+    'CO2 in the ice never went above about 300 ppm. We have run this podcast for 14 years.',
+  ])('passes %j', async (text) => {
+    expect(await rules(text)).toEqual([]);
+  });
+});
