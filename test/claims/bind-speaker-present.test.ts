@@ -29,3 +29,20 @@ describe('a speaker\'s own present takes the subject before', () => {
     expect(await rules(text)).toEqual([]);
   });
 });
+
+describe("the writer's present in other words", () => {
+  // The present CO2 level, about 424 ppm in 2024 (Lan et al., NOAA GML): "this spring", "at the
+  // moment", "last month" date a level to now, as "today" does.
+  it.each([
+    'Last month the CO2 level at the observatory hit 610 ppm.',
+    'This spring carbon dioxide reached 610 ppm.',
+    'As of this writing, CO2 stands at 610 ppm.',
+    'At the moment CO2 sits at about 610 ppm.',
+  ])('flags %j', async (text) => {
+    expect(await rules(text)).toContain('value.co2-present-day');
+  });
+
+  it.each(['At present CO2 sits at about 424 ppm.', 'This summer carbon dioxide averaged about 426 ppm.'])('passes %j', async (text) => {
+    expect(await rules(text)).toEqual([]);
+  });
+});
