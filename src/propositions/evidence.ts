@@ -25,6 +25,23 @@ export function readEvidence(s: ReadSentence, causes: readonly Cause[]): Evidenc
   return out;
 }
 
+/**
+ * "That's proof CO2 controls temperature.", "This proves the gas sets the climate.": a sentence that
+ * opens by pointing back ("that", "this", "which", "it") and offers proof of a cause; its evidence is
+ * the sentence before. Returns the span from the pointer to the cause, or undefined.
+ */
+export function proofOfWhatCameBefore(s: ReadSentence, causes: readonly Cause[]): { start: number; end: number } | undefined {
+  const pointer = s.words.findIndex((w, i) => i <= 1 && POINTERS.has(w.text));
+  if (pointer < 0) return undefined;
+  const proof = s.of('proof').find((p) => p.first > pointer && p.first <= pointer + 4 && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first) && !deniedObject(s, p.last));
+  if (proof === undefined) return undefined;
+  const proofEnd = s.words[proof.last]?.end ?? 0;
+  const cause = causes.find((k) => k.end > proofEnd && k.polarity === 'asserted' && k.role !== 'feedback');
+  return cause === undefined ? undefined : { start: s.words[pointer]?.start ?? 0, end: cause.end };
+}
+
+const POINTERS = new Set(['that', 'this', 'which', 'it', 'that’s', "that's"]);
+
 /** What a proof word may settle instead of a stated cause: "settles the question", "the matter". */
 const QUESTION = /^(?:question|matter|debate|argument|issue|case)$/u;
 

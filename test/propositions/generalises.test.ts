@@ -347,3 +347,25 @@ describe('comparisons and causes past interrupting phrases and loose forms', () 
     expect(await serious(`${text}\n`)).not.toContain(rule);
   });
 });
+
+describe('proof that points back to a correlation stated just before', () => {
+  // Co-variation of CO2 and Antarctic temperature in the cores does not by itself show which drives
+  // which; each amplified the other (Shakun et al. 2012, Nature 484, 49-54; Parrenin et al. 2013,
+  // Science 339, 1060-1063).
+  it.each([
+    'The gas and the temperature move in lockstep in the Dome C ice. That is proof carbon dioxide runs the climate.',
+    'In the Vostok record the two curves rise and fall together. This proves that carbon dioxide sets the temperature.',
+    'CO2 and Antarctic temperature track each other for 800,000 years. Which is conclusive evidence that CO2 controls the ice ages.',
+  ])('flags %j', async (text) => {
+    expect(await serious(`${text}\n`)).toContain('logic.correlation-as-proof');
+  });
+
+  it.each([
+    // The proof denied, or no cause offered, or a feedback stated.
+    'The gas and the temperature move in lockstep in the Dome C ice. That does not prove carbon dioxide runs the climate.',
+    'In the Vostok record the two curves rise and fall together. This is what we expect when each amplifies the other.',
+    'In the Vostok record the two curves rise and fall together. It shows the orbit paced the cycles.',
+  ])('passes %j', async (text) => {
+    expect(await serious(`${text}\n`)).not.toContain('logic.correlation-as-proof');
+  });
+});

@@ -4,14 +4,31 @@
  *   "The close match between the two curves proves that CO2 controls the climate."
  *    evidence: correlation → proof (undenied) → cause  ^ flagged from the correlation to the cause
  *
+ * A sentence that points back ("That's proof CO2 controls temperature.") takes its correlation from
+ * the sentence before, in the same voice.
+ *
  * "The match alone does not prove it" and "the curves move together, as expected when each
  * amplifies the other" pass: the proof is denied, or there is none.
  */
+import { proofOfWhatCameBefore } from '../../propositions/evidence.js';
+import { denialsBefore } from '../../propositions/sentence.js';
+import { opensUtterance } from '../../prose/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 
 function detect({ index, read }: DetectInput): Cue[] {
-  const evidence = read(index)?.props.evidence[0];
-  return evidence === undefined ? [] : [{ start: evidence.start, end: evidence.end }];
+  const here = read(index);
+  const evidence = here?.props.evidence[0];
+  if (evidence !== undefined) return [{ start: evidence.start, end: evidence.end }];
+  // "CO2 and temperature line up in the cores. That's proof CO2 controls temperature.": the proof
+  // points back to a correlation the same voice stated just before.
+  if (here === undefined || opensUtterance(here.s.text)) return [];
+  const before = read(index - 1);
+  const correlated = before !== undefined && before.s.of('correlation').some((c) => denialsBefore(before.s, c.first, 4) % 2 === 0);
+  if (!correlated) return [];
+  // The cause offered is CO2's, or the correlation was CO2's.
+  const causes = before.s.of('entities', 'co2').length > 0 ? here.props.causes : here.props.causes.filter((c) => c.agent === 'co2');
+  const proof = proofOfWhatCameBefore(here.s, causes);
+  return proof === undefined ? [] : [proof];
 }
 
 /** The detector entry for the registry. */
