@@ -29,7 +29,7 @@ const SEP = String.raw`[,\u2009\u202F\u00A0 ]`;
 const NUM = String.raw`\d{1,3}(?:${SEP}\d{3}(?!\d))+(?:\.\d+)?|\d+(?:\.\d+)?|\.\d+`;
 const SUP = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 const EXP = String.raw`[eE](?<e1>[-−+]?\d{1,3})(?![\p{L}\p{N}])|[\s\u00A0]*[×xX*·][\s\u00A0]*10(?:[\s\u00A0]*\^[\s\u00A0]*(?<e2>[-−+]?\d{1,3})(?!\d)|(?<e3>[⁻⁺]?[${SUP}]{1,3})(?![${SUP}]))`;
-const SCALE = String.raw`[\s\u00A0]+(?<scale>hundred|thousand|million|billion)(?![\p{L}])`;
+const SCALE = String.raw`[\s\u00A0]+(?<scale>hundred|thousand|million|billion)(?![\p{L}])|(?<kilo>k)(?![\p{L}\p{N}])`;
 const DIGITS = new RegExp(
   String.raw`(?<sign>(?<![\p{L}\p{N}.])[-−+])?(?<![\p{L}\p{N}_.])(?<num>${NUM})(?:${EXP})?(?:${SCALE})?`,
   'giu',
@@ -45,13 +45,18 @@ const VAGUE = new RegExp(
 const SCALES: Record<string, number> = { hundred: 1e2, thousand: 1e3, million: 1e6, billion: 1e9, tens: 10, hundreds: 1e2, thousands: 1e3, millions: 1e6, dozens: 12 };
 const SUPERSCRIPT: Record<string, string> = { '⁻': '-', '⁺': '+', ...Object.fromEntries([...SUP].map((c, i) => [c, String(i)])) };
 
-function digitAtom(m: RegExpExecArray): Atom {
+function digitAtom(match: RegExpExecArray): Atom {
+  let m = match;
   const g = m.groups ?? {};
   const sign = g['sign'] === undefined ? '' : g['sign'] === '+' ? '+' : '-';
   const digits = (g['num'] ?? '').replace(/[^\d.]/g, '');
   const expText = g['e1'] ?? g['e2'] ?? [...(g['e3'] ?? '')].map((c) => SUPERSCRIPT[c] ?? '').join('');
   const exponent = expText === '' ? 0 : Number(expText.replace('−', '-'));
-  const scale = g['scale'] === undefined ? 1 : (SCALES[g['scale'].toLowerCase()] ?? 1);
+  // "50k years", "~18k": a "k" right after the digits is a thousand, as posts write it; a capital "K"
+  // is a thousand only before a word for years (otherwise it may be kelvin).
+  const kilo = g['kilo'] === 'k' || (g['kilo'] === 'K' && /^[\s\u00A0]+(?:years?|yrs?|yr)(?![\p{L}])/iu.test(m.input.slice(m.index + m[0].length)));
+  if (g['kilo'] !== undefined && !kilo) m = Object.assign([m[0].slice(0, -1)], { index: m.index, input: m.input, groups: { ...g, kilo: undefined } }) as unknown as RegExpExecArray;
+  const scale = kilo ? 1e3 : g['scale'] === undefined ? 1 : (SCALES[g['scale'].toLowerCase()] ?? 1);
   const magnitude = Number(digits) * 10 ** exponent * scale;
   const plainInteger = /^\d{3,4}$/.test(g['num'] ?? '') && expText === '' && scale === 1 && sign === '';
   return {

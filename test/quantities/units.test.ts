@@ -81,3 +81,18 @@ describe('formatQuantity writes a canonical value in the draft unit', () => {
     expect(formatQuantity(value, unit, stated)).toBe(want);
   });
 });
+
+describe('a "k" after the digits', () => {
+  // Informal posts write thousands as "k" (common practice); a capital K after digits is kelvin unless
+  // a word for years follows (SI: K is the kelvin, NIST SP 811, 4.2).
+  it.each([
+    ['about 50k years ago', 50000, 'age'],
+    ['about 800k years', 800000, 'duration'],
+    ['some 20K years ago', 20000, 'age'],
+    ['a 5K rise', 5, 'temperature-change'],
+  ] as const)('%s', (text, value, dimension) => {
+    const q = parseQuantities(text)[0];
+    expect(q?.value).toBe(value);
+    expect(q?.dimension).toBe(dimension);
+  });
+});
