@@ -77,6 +77,9 @@ function splitLines(sentences: Sentence[], whole: string, blockIndex: number, fr
   push(sentences, text, blockIndex, start, text.length);
 }
 
+/** Words that open a sentence and are no surname: after "Dome C." they start the next sentence. */
+const OPENERS_AFTER_LETTER = /^(?:The|This|That|These|Those|It|Its|It's|In|On|At|A|An|But|And|So|We|They|There|Our|Their|Here|What|When|Then|Today|Now|If|As|For|By)(?![\p{L}'’])/u;
+
 function endsSentence(text: string, dotAt: number, marks: string, space: string, next: number): boolean {
   if (next >= text.length) return true;
   if (marks !== '.') return startsSentence(text.slice(next, next + 1));
@@ -84,8 +87,12 @@ function endsSentence(text: string, dotAt: number, marks: string, space: string,
   // "about 9 °C.", "by 5 K." and "about 420 kyr." end with a unit symbol, not with "c." (circa), an
   // initial or an abbreviation: a unit symbol after a number takes no full stop of its own (NIST SP 811, 7.2).
   if (/(?:°|\d\s?)\p{L}{1,4}$/u.test(text.slice(Math.max(0, dotAt - 6), dotAt))) return startsSentence(text.slice(next, next + 1));
-  if (ABBREVIATIONS.has(word)) return false;
-  if (/^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1))) return false; // an initial: "J. R. Petit"
+  // "c." (circa) is lower case; a capital letter is an initial or a site's letter ("Dome C.").
+  if (ABBREVIATIONS.has(word) && !/^\p{L}$/u.test(word)) return false;
+  if (ABBREVIATIONS.has(word) && !/\p{Lu}/u.test(text.charAt(dotAt - 1))) return false;
+  // An initial ("J. R. Petit"), unless a word that opens sentences, not a name, follows it: "Dome C. The
+  // older ice..." ends a sentence with a site's letter.
+  if (/^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1))) return OPENERS_AFTER_LETTER.test(text.slice(next, next + 12));
   return startsSentence(text.slice(next, next + 1));
 }
 

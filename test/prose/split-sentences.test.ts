@@ -51,4 +51,13 @@ describe('splitSentences', () => {
     expect(texts('The span is 800 ka. EPICA drilled it.')).toEqual(['The span is 800 ka.', 'EPICA drilled it.']);
     expect(texts('It dates from c. 800 years ago. Jouzel et al. Science showed it.')).toEqual(['It dates from c. 800 years ago.', 'Jouzel et al. Science showed it.']);
   });
+  // A site named by a capital letter ("Dome C") may end a sentence; an initial before a surname does
+  // not (common practice in sentence splitting).
+  it('ends a sentence after a site letter when a sentence opener follows, not after an initial', () => {
+    const texts = (text: string) => splitSentences(text, 0).map((s) => s.text);
+    expect(texts('The record is longest at Dome C. The older ice is patchy.')).toEqual(['The record is longest at Dome C.', 'The older ice is patchy.']);
+    expect(texts('They drilled at Dome C. It reached bedrock in 2004.')).toEqual(['They drilled at Dome C.', 'It reached bedrock in 2004.']);
+    expect(texts('As J. R. Petit showed, Vostok holds four cycles.')).toEqual(['As J. R. Petit showed, Vostok holds four cycles.']);
+    expect(texts('It dates from c. 800 years ago.')).toEqual(['It dates from c. 800 years ago.']);
+  });
 });
