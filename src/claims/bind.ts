@@ -247,6 +247,23 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     const own = views[j] as TermHits;
     own.set(BOUND_TERMS[b.kind], [...(own.get(BOUND_TERMS[b.kind]) ?? []), b.span]);
   });
+  // "~100,000 years (orbit shape), 41,000 (tilt) and 23,000 (precession)": a parenthesis right after a
+  // number labels that number; its words are no other number's.
+  quantities.forEach((q, j) => {
+    const label = /^[\s\u00A0]*\(([^()]*)\)/u.exec(sentence.slice(q.end));
+    if (label === null) return;
+    const [s0, e0] = [q.end + label.index, q.end + label[0].length];
+    // "about 800,000 years (four glacial cycles)": a parenthesis holding a number of its own is no label.
+    if (quantities.some((o) => o.start >= s0 && o.end <= e0)) return;
+    views.forEach((view, i) => {
+      if (i === j) return;
+      for (const [id, spans] of view) {
+        const left = spans.filter(([start, end]) => end <= s0 || start >= e0);
+        if (left.length === 0) view.delete(id);
+        else view.set(id, left);
+      }
+    });
+  });
   // "… began to fade 18,000 years ago and was over by 3,000 years ago": a predicate sharing the subject speaks for itself.
   for (const c of sharedSubjects(sentence, quantities)) {
     quantities.forEach((q, i) => {

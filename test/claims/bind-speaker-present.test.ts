@@ -46,3 +46,12 @@ describe("the writer's present in other words", () => {
     expect(await rules(text)).toEqual([]);
   });
 });
+
+describe('a parenthesis right after a number labels that number', () => {
+  // Orbital periods: obliquity about 41,000 years, precession about 19,000-23,000 years, eccentricity
+  // about 100,000 and 400,000 years (Berger 1988, Reviews of Geophysics 26, 624-657; from memory).
+  it('binds each number to its own label, not to the next one', async () => {
+    expect(await rules('Ice-age rhythms follow the orbit: about 100,000 years (orbit shape), 41,000 (tilt) and about 23,000 (precession).')).toEqual([]);
+    expect(await rules('Ice-age rhythms follow the orbit: 23,000 years (tilt) and about 41,000 (precession).')).toContain('value.milankovitch-obliquity-period');
+  });
+});
