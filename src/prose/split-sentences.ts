@@ -1,4 +1,5 @@
 import type { Sentence } from '../types.js';
+import { isByline } from './byline.js';
 
 /** Abbreviations whose full stop does not end a sentence (lower-case, without the final dot). */
 const ABBREVIATIONS = new Set([
@@ -34,14 +35,23 @@ const BLANK_LINE = /\n[ \t]*\n/gu;
 function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, from: number, to: number): void {
   // A line that opens with a speaker, a time stamp, a handle or a bullet is an utterance of its own,
   // full stop or not: chat logs, scripts and thread dumps put one on each line.
+  // A post's byline ("BigSkyBarb · 5h") is a line of its own: the post starts on the next line.
+  const cuts = new Set<number>();
+  for (const line of whole.slice(from, to).matchAll(UTTERANCE_LINE)) cuts.add(from + line.index + 1);
+  for (const line of whole.slice(from, to).matchAll(LINE)) {
+    const end = from + line.index + line[0].length;
+    if (end < to && isByline(line[0])) cuts.add(end + 1);
+  }
   let lineFrom = from;
-  for (const line of whole.slice(from, to).matchAll(UTTERANCE_LINE)) {
-    const at = from + line.index + 1;
+  for (const at of [...cuts].sort((a, b) => a - b)) {
     splitLines(sentences, whole, blockIndex, lineFrom, at);
     lineFrom = at;
   }
   splitLines(sentences, whole, blockIndex, lineFrom, to);
 }
+
+/** One line of a chunk (without its line break). */
+const LINE = /[^\n]+/gu;
 
 /**
  * A new line that opens an utterance: "[18:58] ", "AMARA: ", "@ana ", "↳ ", "• ", "- ", "3/ ".
