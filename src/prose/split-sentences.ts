@@ -8,6 +8,12 @@ const ABBREVIATIONS = new Set([
   'sep', 'sept', 'oct', 'nov', 'dec', 'yr', 'yrs', 'kyr', 'approx', 'est', 'resp', 'incl',
 ]);
 
+/**
+ * Words that open a sentence and are never a surname after an initial: articles, pronouns,
+ * conjunctions and the commonest sentence adverbs (a closed class; common practice of English).
+ */
+const OPENS_NOT_NAME = /^(?:the|a|an|it|its|it's|this|that|these|those|there|they|we|i|you|he|she|but|and|so|yet|or|if|in|on|at|for|from|to|with|as|its|not|no)(?![\p{L}'’])/iu;
+
 /** Sentence-final punctuation, then closing quotes or brackets, then white space. */
 const BOUNDARY = /([.!?…]+)(["'”’)\]]*)(\s+)/gu;
 
@@ -41,6 +47,9 @@ function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, fr
   for (const line of whole.slice(from, to).matchAll(LINE)) {
     const end = from + line.index + line[0].length;
     if (end < to && isByline(line[0])) cuts.add(end + 1);
+    // "↳ @ana · 2 days ago · ♥ 14: Nope, ...": a byline that leads its post on the same line.
+    const colon = line[0].indexOf(': ');
+    if (colon > 0 && isByline(line[0].slice(0, colon))) cuts.add(from + line.index + colon + 2);
   }
   let lineFrom = from;
   for (const at of [...cuts].sort((a, b) => a - b)) {
@@ -94,8 +103,10 @@ function endsSentence(text: string, dotAt: number, marks: string, space: string,
   // "about 9 °C.", "by 5 K." and "about 420 kyr." end with a unit symbol, not with "c." (circa), an
   // initial or an abbreviation: a unit symbol after a number takes no full stop of its own (NIST SP 811, 7.2).
   if (/(?:°|\d\s?)\p{L}{1,4}$/u.test(text.slice(Math.max(0, dotAt - 6), dotAt))) return startsSentence(text.slice(next, next + 1));
-  if (ABBREVIATIONS.has(word)) return false;
-  if (/^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1))) return false; // an initial: "J. R. Petit"
+  const capital = /^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1));
+  if (ABBREVIATIONS.has(word) && !capital) return false;
+  // An initial ("J. R. Petit"), unless a word that opens sentences and names nobody follows: "Dome C. The ice...".
+  if (capital) return OPENS_NOT_NAME.test(text.slice(next, next + 12));
   return startsSentence(text.slice(next, next + 1));
 }
 

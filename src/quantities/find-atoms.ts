@@ -30,8 +30,16 @@ const NUM = String.raw`\d{1,3}(?:${SEP}\d{3}(?!\d))+(?:\.\d+)?|\d+(?:\.\d+)?|\.\
 const SUP = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 const EXP = String.raw`[eE](?<e1>[-−+]?\d{1,3})(?![\p{L}\p{N}])|[\s\u00A0]*[×xX*·][\s\u00A0]*10(?:[\s\u00A0]*\^[\s\u00A0]*(?<e2>[-−+]?\d{1,3})(?!\d)|(?<e3>[⁻⁺]?[${SUP}]{1,3})(?![${SUP}]))`;
 const SCALE = String.raw`[\s\u00A0]+(?<scale>hundred|thousand|million|billion)(?![\p{L}])`;
+/**
+ * A scale letter written onto the digits, as people write figures in posts and notes: "45k" (a
+ * thousand), "1.2M years" (a million). A capital K or M counts only before years: "5K" alone is
+ * kelvin and "3 M" molar (NIST SP 811 symbols); "420kyr" and "2.6 Ma" are units, not scale letters.
+ */
+const LETTER_SCALE = String.raw`(?<letter>k|m(?=[\s\u00A0]*(?:years?|yrs?)(?![\p{L}])))(?![\p{L}\p{N}])`;
+/** The case the pattern (case-blind) cannot tell: a lower-case k, or a capital K or M before years. */
+const LETTER_OK = /^(?:k|[KMm][\s\u00A0]*(?:years?|yrs?)(?![\p{L}]))/u;
 const DIGITS = new RegExp(
-  String.raw`(?<sign>(?<![\p{L}\p{N}.])[-−+])?(?<![\p{L}\p{N}_.])(?<num>${NUM})(?:${EXP})?(?:${SCALE})?`,
+  String.raw`(?<sign>(?<![\p{L}\p{N}.])[-−+])?(?<![\p{L}\p{N}_.])(?<num>${NUM})(?:${EXP})?(?:${SCALE}|${LETTER_SCALE})?`,
   'giu',
 );
 const WORD_PHRASE = new RegExp(
@@ -43,6 +51,7 @@ const VAGUE = new RegExp(
   'giu',
 );
 const SCALES: Record<string, number> = { hundred: 1e2, thousand: 1e3, million: 1e6, billion: 1e9, tens: 10, hundreds: 1e2, thousands: 1e3, millions: 1e6, dozens: 12 };
+const LETTERS: Record<string, number> = { k: 1e3, m: 1e6 };
 const SUPERSCRIPT: Record<string, string> = { '⁻': '-', '⁺': '+', ...Object.fromEntries([...SUP].map((c, i) => [c, String(i)])) };
 
 function digitAtom(m: RegExpExecArray): Atom {
@@ -51,11 +60,14 @@ function digitAtom(m: RegExpExecArray): Atom {
   const digits = (g['num'] ?? '').replace(/[^\d.]/g, '');
   const expText = g['e1'] ?? g['e2'] ?? [...(g['e3'] ?? '')].map((c) => SUPERSCRIPT[c] ?? '').join('');
   const exponent = expText === '' ? 0 : Number(expText.replace('−', '-'));
-  const scale = g['scale'] === undefined ? 1 : (SCALES[g['scale'].toLowerCase()] ?? 1);
+  // "5K" is kelvin, not a thousand: a scale letter the case-blind pattern took wrongly is left to the units.
+  const letter = g['letter'] !== undefined && LETTER_OK.test(m.input.slice(m.index + m[0].length - 1)) ? g['letter'] : undefined;
+  const end = m.index + m[0].length - (g['letter'] !== undefined && letter === undefined ? 1 : 0);
+  const scale = g['scale'] !== undefined ? (SCALES[g['scale'].toLowerCase()] ?? 1) : letter !== undefined ? (LETTERS[letter.toLowerCase()] ?? 1) : 1;
   const magnitude = Number(digits) * 10 ** exponent * scale;
   const plainInteger = /^\d{3,4}$/.test(g['num'] ?? '') && expText === '' && scale === 1 && sign === '';
   return {
-    start: m.index, end: m.index + m[0].length, value: sign === '-' ? -magnitude : magnitude,
+    start: m.index, end, value: sign === '-' ? -magnitude : magnitude,
     half: halfPlace(digits) * 10 ** exponent * scale, scale, form: 'digits', rule: 'precision', plainInteger, sign,
   };
 }

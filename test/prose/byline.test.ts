@@ -65,3 +65,20 @@ describe('a block quote that opens with a byline is a reply, not a quotation', (
     expect(await levelOf(`> Honestly ${wrong}`)).toBe('note');
   });
 });
+
+describe('splitSentences: a byline that leads its post on one line, and a site letter before a full stop', () => {
+  it.each([
+    ['↳ @nightjar · 5 hours ago · ♥ 31: Glacial CO2 was near 185 ppm.', ['↳ @nightjar · 5 hours ago · ♥ 31:', 'Glacial CO2 was near 185 ppm.']],
+    ['Tamsin R. · 07:45: The thaw took ages.', ['Tamsin R. · 07:45:', 'The thaw took ages.']],
+    // Site names that end in a capital letter ("Dome C", "Site A") end a sentence before a word that names nobody.
+    ['It goes deeper than Dome C. The ice there is older.', ['It goes deeper than Dome C.', 'The ice there is older.']],
+    ['We cored Site B. It held 40,000 years.', ['We cored Site B.', 'It held 40,000 years.']],
+  ])('%s', (text, expected) => expect(splitSentences(text, 0).map((s) => s.text)).toEqual(expected));
+
+  it.each([
+    // An initial before a surname, and a speaker label, stay as they were (common practice).
+    ['The work of J. R. Petit set the record.'],
+    ['ROSA: I asked C. Lorius about it.'],
+    ['C. 1750 the air held 280 ppm.'],
+  ])('keeps %s whole', (text) => expect(splitSentences(text, 0).map((s) => s.text)).toEqual([text]));
+});
