@@ -47,7 +47,7 @@ const WORD_PHRASE = new RegExp(
   'giu',
 );
 const VAGUE = new RegExp(
-  String.raw`(?<![\p{L}])(?:(?<plural>tens|hundreds|thousands|millions|dozens)[\s\u00A0]+of(?:[\s\u00A0]+(?<inner>thousands|millions)[\s\u00A0]+of)?|(?<few>a[\s\u00A0]+few|several)(?:[\s\u00A0]+(?<fewScale>hundred|thousand|million))?)(?=[\s\u00A0])`,
+  String.raw`(?<![\p{L}])(?:(?<plural>tens|hundreds|thousands|millions|dozens)[\s\u00A0]+of(?:[\s\u00A0]+(?<inner>thousands|millions)[\s\u00A0]+of)?|(?<few>a[\s\u00A0]+few|several|a[\s\u00A0]+couple(?:[\s\u00A0]+of)?)(?:[\s\u00A0]+(?<fewScale>hundred|thousand|million))?)(?=[\s\u00A0])`,
   'giu',
 );
 const SCALES: Record<string, number> = { hundred: 1e2, thousand: 1e3, million: 1e6, billion: 1e9, tens: 10, hundreds: 1e2, thousands: 1e3, millions: 1e6, dozens: 12 };
@@ -109,7 +109,7 @@ function vagueAtom(m: RegExpExecArray): Atom {
   const outer = g['plural'] ?? g['fewScale'];
   const s = (outer === undefined ? 1 : (SCALES[outer.toLowerCase()] ?? 1)) * (g['inner'] === undefined ? 1 : (SCALES[g['inner'].toLowerCase()] ?? 1));
   const few = g['few']?.toLowerCase().replace(/\s+/g, ' ');
-  const rule = g['plural'] !== undefined ? 'plural-magnitude' : few === 'several' ? 'several' : 'a-few';
+  const rule = g['plural'] !== undefined ? 'plural-magnitude' : few === 'several' ? 'several' : few?.startsWith('a couple') === true ? 'a-couple' : 'a-few';
   return { start: m.index, end: m.index + m[0].length, value: s, half: 0, scale: s, form: 'vague', rule, plainInteger: false, sign: '' };
 }
 
