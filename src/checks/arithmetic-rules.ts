@@ -284,7 +284,7 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   } },
   { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => {
     const found = [...durations(t, qs, p), ...durationsAcross(t, qs, prev)];
-    return [...found, ...notYet(found, spansAcross(t, qs, prev))];
+    return [...found, ...notYet(found, spansAcross(t, qs, prev))].filter((f) => !isBoundOrVague(t, f.stated));
   } },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)];
@@ -301,3 +301,12 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
 ];
 
 export { findPairs };
+
+/**
+ * "jumps of 10 to 15 ppm within a couple of centuries": a time after "within", or told in vague
+ * words ("a few", "a couple of", "several"), bounds how long something took; it is never the span
+ * between two stated dates (common practice of English).
+ */
+function isBoundOrVague(text: string, q: Pick<Quantity, 'start' | 'text'>): boolean {
+  return /(?:^|[^\p{L}])within[\s\u00A0]+$/iu.test(text.slice(Math.max(0, q.start - 12), q.start)) || /^(?:a[\s\u00A0]+(?:few|couple)|several)(?![\p{L}])/iu.test(q.text);
+}

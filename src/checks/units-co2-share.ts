@@ -43,7 +43,11 @@ const S = String.raw`[\s\u00A0]`;
 const CO2 = /(?:CO2|CO₂|carbon dioxide)/iu;
 const GAS = /(?<co2>CO2|CO₂|carbon[\s\u00A0]+dioxide)|methane|CH4|CH₄|nitrous[\s\u00A0]+oxide|N2O|N₂O|nitrogen|oxygen|argon|water[\s\u00A0]+vapou?r|ozone|neon|helium|hydrogen/giu;
 const OTHER_GAS = /(?:methane|CH4|CH₄|nitrous|N2O|N₂O)/iu;
-const AIR = String.raw`(?:the${S}+|today's${S}+|today’s${S}+|Earth's${S}+|Earth’s${S}+|dry${S}+)?(?:air|atmosphere)`;
+/**
+ * The air, named as such or as what people breathe: "of the air", "of the atmosphere", "of every
+ * breath", "of everything you breathe in", "of what we breathe" (common practice of plain speech).
+ */
+const AIR = String.raw`(?:(?:the${S}+|today's${S}+|today’s${S}+|Earth's${S}+|Earth’s${S}+|dry${S}+)?(?:air|atmosphere)|(?:every|each|a|your|our)${S}+breath|(?:everything|all|what|whatever)${S}+(?:that${S}+)?(?:you|we|people|they|i)${S}+breathe(?:${S}+in)?)`;
 const SHARE_AFTER = new RegExp(String.raw`^${S}*(?:of${S}+${AIR}|by${S}+volume)`, 'iu');
 const GAS_AFTER = new RegExp(String.raw`^${S}*(?:of${S}+)?(?:CO2|CO₂|carbon${S}+dioxide)(?![\p{L}\d])`, 'iu');
 const OF_SOMETHING_ELSE = new RegExp(String.raw`^${S}*of(?!${S}+${AIR})(?![\p{L}])`, 'iu');
@@ -72,14 +76,18 @@ const PPM_WORDS = /(?:ppmv?|parts[\s\u00A0]+per[\s\u00A0]+million)(?![\p{L}])/iu
 /**
  * True when a sentence that names no gas speaks of CO2 by context: it states a share of the air,
  * and the nearest sentence before that gives a level in ppm or names a gas (up to three back) gives
- * a level in ppm and names no other gas ("... the annual increase was under one ppm. Expressed as a
+ * a level in ppm or names CO2 alone, and names no other gas ("... the annual increase was under one ppm. Expressed as a
  * share of the air, today's level is about 0.42 percent."; "... never above three hundred parts
  * per million. - And before industry? - Two-eighty, and that's about 2.8 percent of the air.").
  */
 function co2FromContext(text: string, earlier: readonly string[]): boolean {
   if ([...text.matchAll(GAS)].length > 0 || !SHARE_OF_AIR.test(text)) return false;
   const nearest = [...earlier].reverse().find((s) => PPM_WORDS.test(s) || [...s.matchAll(GAS)].length > 0);
-  return nearest !== undefined && PPM_WORDS.test(nearest) && !OTHER_GAS.test(nearest);
+  if (nearest === undefined || OTHER_GAS.test(nearest)) return false;
+  // "CO2 tags along after. It's a trace gas anyway, like 0.4% of the air.": the gas the sentence
+  // before names is what a share of the air with no gas of its own speaks of.
+  const gases = [...nearest.matchAll(GAS)];
+  return PPM_WORDS.test(nearest) || (gases.length > 0 && gases.every((g) => g.groups?.['co2'] !== undefined));
 }
 
 /** True when percentage `q` states CO2's share of the air. */

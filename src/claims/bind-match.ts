@@ -7,12 +7,13 @@ import type { Quantity } from '../types.js';
 import { distance, type TermHits } from './bind-view.js';
 
 /**
- * Vague words that give an order of magnitude rather than a figure: "a few centuries", "several
+ * Vague words that give an order of magnitude rather than a figure: "a few centuries", "a couple of
+ * centuries", "several
  * thousand years", "tens of thousands of years". Such a phrase often times something other than the
  * value its subject words name ("rising within a few centuries of each other" is a lag, not the
  * length of the rise), so it speaks of a value only when it could state that value's range.
  */
-const VAGUE = /(?:^|[^\p{L}])(?:a\s+few|several|(?:tens|hundreds|thousands|millions|dozens)\s+of)(?![\p{L}])/iu;
+const VAGUE = /(?:^|[^\p{L}])(?:a\s+few|several|(?:tens|hundreds|thousands|millions|dozens)\s+of|a\s+couple(?:\s+of)?(?=\s+(?:centur|millenni|decade|years?|thousand|hundred)))(?![\p{L}])/iu;
 
 /**
  * Whether `q` could state the value: any figure can; a vague phrase, or a calendar year ("in 1998",

@@ -12,6 +12,7 @@
  *    ^^^^^^ ─────────── 420,000 ──┘      ^^^^^^^^^^^^ ─── 800,000 (each binds its nearest core)
  */
 import { PhraseTrie } from '../prose/phrase-trie.js';
+import { termVariants } from './term-variants.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
@@ -91,7 +92,12 @@ const foundTerms = new WeakMap<LoadedPacks, Map<string, TermHits>>();
 function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
   let terms = compiled.get(packs);
   if (terms === undefined) {
-    terms = new Map(packs.terms.map((t): [string, CompiledTerm] => [t.id, { words: t.words, keyWords: keyWordsOf(t.words) }]));
+    terms = new Map(
+      packs.terms.map((t): [string, CompiledTerm] => {
+        const words = termVariants(t.words);
+        return [t.id, { words, keyWords: keyWordsOf(words) }];
+      }),
+    );
     compiled.set(packs, terms);
   }
   const lower = foldedLower(sentence);

@@ -18,8 +18,11 @@ import type { Quantity } from '../types.js';
 const SMALL_WORDS = 'one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|sixteen|seventeen|eighteen|nineteen|twenty';
 const WORD_NUMBER = new RegExp(String.raw`(?<![\p{L}\p{N}-])(?:${SMALL_WORDS})(?![\p{L}\p{N}-])`, 'giu');
 /** The last number in a quantity's text: what comes after it is the unit ("four| cycles", "800,000| years ago"). */
-const LAST_NUMBER = new RegExp(String.raw`(?:\d(?:[\d,.]*\d)?|(?<![\p{L}])(?:${SMALL_WORDS})(?![\p{L}]))(?!.*(?:\d|(?<![\p{L}])(?:${SMALL_WORDS})(?![\p{L}])))`, 'iu');
-const LIST_JOIN = /^\s*(?:,\s*(?:and\s+|or\s+)?|and\s+|or\s+)$/iu;
+const LAST_NUMBER = new RegExp(String.raw`(?:\d(?:[\d,.]*\d)?(?:[kKmM](?![\p{L}]))?|(?<![\p{L}])(?:${SMALL_WORDS})(?![\p{L}]))(?!.*(?:\d|(?<![\p{L}])(?:${SMALL_WORDS})(?![\p{L}])))`, 'iu');
+const LIST_JOIN = /^\s*(?:\([^()]{1,40}\)\s*)?(?:,\s*(?:and\s+|or\s+)?|and\s+|or\s+)$/iu;
+/** A list whose members each carry a label in brackets: "~100k yrs (orbit shape), 41k (tilt) and 23k (precession)". */
+const LABELLED_JOIN = /^\s*\([^()]{1,40}\)\s*(?:,\s*(?:and\s+|or\s+)?|and\s+|or\s+)$/iu;
+const LABEL_AFTER = /^\s*\([^()]{1,40}\)/u;
 const CLAUSE_JOIN = /(?:^|[^\p{L}])(?:and|but|while|whereas)(?![\p{L}])|,/iu;
 /** What may follow the last number of a gapped clause: the end of the clause. */
 const CLAUSE_CLOSE = /^\s*(?:[.;,:!?)]|$|(?:and|but|while|whereas|respectively)(?![\p{L}]))/iu;
@@ -43,7 +46,7 @@ export function restoreElidedUnits(sentence: string, quantities: Quantity[]): Qu
   if (measured.length === 0) return quantities;
   const restored: Quantity[] = quantities.filter((q) => !bare.some((b) => b.index !== undefined && quantities[b.index] === q));
   for (const b of bare) {
-    const model = listPartner(sentence, b, bare, measured) ?? gapPartner(sentence, b, quantities, measured);
+    const model = listPartner(sentence, b, bare, measured) ?? labelledPartner(sentence, b, bare, measured) ?? gapPartner(sentence, b, quantities, measured);
     const read = model === undefined ? undefined : readWithUnit(b, model);
     if (read !== undefined) restored.push(read);
     else if (b.index !== undefined) restored.push(quantities[b.index] as Quantity);
@@ -80,6 +83,24 @@ function listPartner(sentence: string, b: Bare, bare: Bare[], measured: Quantity
     if (next === undefined || !LIST_JOIN.test(sentence.slice(at.end, next.start))) return undefined;
     if (next === nextMeasured) return nextMeasured;
     at = next as Bare;
+  }
+}
+
+/**
+ * A list whose members each carry a label in brackets, the unit written once on the first:
+ * "obliquity and precession, 41,000 yrs (tilt), 23,000 (wobble) and 19,000 (wobble again)". A
+ * bare member with its own label takes the unit of the measured member that opens the list.
+ */
+function labelledPartner(sentence: string, b: Bare, bare: Bare[], measured: Quantity[]): Quantity | undefined {
+  if (!LABEL_AFTER.test(sentence.slice(b.end))) return undefined;
+  let at: { start: number; end: number } = b;
+  for (;;) {
+    const prevMeasured = measured.filter((q) => q.end <= at.start).at(-1);
+    const prevBare = bare.filter((x) => x.end <= at.start).at(-1);
+    const prev = prevBare !== undefined && (prevMeasured === undefined || prevBare.start > prevMeasured.start) ? prevBare : prevMeasured;
+    if (prev === undefined || !LABELLED_JOIN.test(sentence.slice(prev.end, at.start))) return undefined;
+    if (prev === prevMeasured) return prevMeasured;
+    at = prev;
   }
 }
 

@@ -6,6 +6,7 @@
  *   lexicon.causes.verbs: [drive]  →  "drive", "drives", "drove", "driven", "driving"
  *   lexicon.uptake.in: [take up]   →  "took up", "takes up", "taking up", "taken up"
  */
+import { termVariants } from '../claims/term-variants.js';
 import { inflect } from './inflect.js';
 import type { Lexicon, LoadedPacks } from '../rulepack/types.js';
 
@@ -210,5 +211,6 @@ export function entityWordsOf(lexicon: Lexicon, keys: readonly string[]): string
 }
 
 function formsOfPhrases(phrases: readonly string[]): string[] {
-  return [...new Set(phrases.flatMap((p) => variantsOf(phraseWords(p)).map((w) => w.join(' '))))];
+  // "that glacial max": a clipped word names the subject as the whole word does (claims/term-variants.ts).
+  return [...new Set(termVariants(phrases).flatMap((p) => variantsOf(phraseWords(p)).map((w) => w.join(' '))))];
 }

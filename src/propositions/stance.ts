@@ -8,6 +8,7 @@
  *   "If CO2 trails temperature, how could it be the cause?"  rhetorical (asserts: it is not)
  *   "Doesn't the lag prove CO2 is not a cause? No: ..."      asked (the next sentence answers)
  */
+import { isByline } from '../prose/byline.js';
 import type { BlockKind } from '../types.js';
 import type { LexHit } from './lexicon.js';
 import type { ReadSentence } from './sentence.js';
@@ -59,7 +60,8 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
   const endorsed = s.of('stance', 'endorse').length > 0 || (context.next?.of('stance', 'endorse').some((h) => h.first <= 4) ?? false);
   const make = (kind: StanceKind, flips = false): SentenceStance => ({ kind, endorsed: kind !== 'asserted' && endorsed, flips });
   if (context.marked === true) return make('marked');
-  if (context.blockKind === 'blockquote' && !isCallout(context.first)) return make('quoted');
+  // A block quote that opens with a byline ("BigSkyBarb · 5h") is a reply in a thread, in its writer's voice.
+  if (context.blockKind === 'blockquote' && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
   if (FACT_LABEL.test(s.text)) return make('asserted');
   if (LABEL.test(s.text) || isMythHeading(context.heading) || (context.blockKind === 'heading' && s.of('stance', 'myth').length > 0)) return make('myth');
   const quotedWords = s.words.filter((w) => w.quoted).length;

@@ -1,4 +1,5 @@
 import type { Sentence } from '../types.js';
+import { isByline } from './byline.js';
 
 /** Abbreviations whose full stop does not end a sentence (lower-case, without the final dot). */
 const ABBREVIATIONS = new Set([
@@ -6,6 +7,12 @@ const ABBREVIATIONS = new Set([
   'no', 'vol', 'pp', 'p', 'ed', 'eds', 'etc', 'vs', 'jan', 'feb', 'mar', 'apr', 'jun', 'jul', 'aug',
   'sep', 'sept', 'oct', 'nov', 'dec', 'yr', 'yrs', 'kyr', 'approx', 'est', 'resp', 'incl',
 ]);
+
+/**
+ * Words that open a sentence and are never a surname after an initial: articles, pronouns,
+ * conjunctions and the commonest sentence adverbs (a closed class; common practice of English).
+ */
+const OPENS_NOT_NAME = /^(?:the|a|an|it|its|it's|this|that|these|those|there|they|we|i|you|he|she|but|and|so|yet|or|if|in|on|at|for|from|to|with|as|its|not|no)(?![\p{L}'’])/iu;
 
 /** Sentence-final punctuation, then closing quotes or brackets, then white space. */
 const BOUNDARY = /([.!?…]+)(["'”’)\]]*)(\s+)/gu;
@@ -34,14 +41,26 @@ const BLANK_LINE = /\n[ \t]*\n/gu;
 function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, from: number, to: number): void {
   // A line that opens with a speaker, a time stamp, a handle or a bullet is an utterance of its own,
   // full stop or not: chat logs, scripts and thread dumps put one on each line.
+  // A post's byline ("BigSkyBarb · 5h") is a line of its own: the post starts on the next line.
+  const cuts = new Set<number>();
+  for (const line of whole.slice(from, to).matchAll(UTTERANCE_LINE)) cuts.add(from + line.index + 1);
+  for (const line of whole.slice(from, to).matchAll(LINE)) {
+    const end = from + line.index + line[0].length;
+    if (end < to && isByline(line[0])) cuts.add(end + 1);
+    // "↳ @ana · 2 days ago · ♥ 14: Nope, ...": a byline that leads its post on the same line.
+    const colon = line[0].indexOf(': ');
+    if (colon > 0 && isByline(line[0].slice(0, colon))) cuts.add(from + line.index + colon + 2);
+  }
   let lineFrom = from;
-  for (const line of whole.slice(from, to).matchAll(UTTERANCE_LINE)) {
-    const at = from + line.index + 1;
+  for (const at of [...cuts].sort((a, b) => a - b)) {
     splitLines(sentences, whole, blockIndex, lineFrom, at);
     lineFrom = at;
   }
   splitLines(sentences, whole, blockIndex, lineFrom, to);
 }
+
+/** One line of a chunk (without its line break). */
+const LINE = /[^\n]+/gu;
 
 /**
  * A new line that opens an utterance: "[18:58] ", "AMARA: ", "@ana ", "↳ ", "• ", "- ", "3/ ".
@@ -77,9 +96,6 @@ function splitLines(sentences: Sentence[], whole: string, blockIndex: number, fr
   push(sentences, text, blockIndex, start, text.length);
 }
 
-/** Words that open a sentence and are no surname: after "Dome C." they start the next sentence. */
-const OPENERS_AFTER_LETTER = /^(?:The|This|That|These|Those|It|Its|It's|In|On|At|A|An|But|And|So|We|They|There|Our|Their|Here|What|When|Then|Today|Now|If|As|For|By)(?![\p{L}'’])/u;
-
 function endsSentence(text: string, dotAt: number, marks: string, space: string, next: number): boolean {
   if (next >= text.length) return true;
   if (marks !== '.') return startsSentence(text.slice(next, next + 1));
@@ -87,12 +103,10 @@ function endsSentence(text: string, dotAt: number, marks: string, space: string,
   // "about 9 °C.", "by 5 K." and "about 420 kyr." end with a unit symbol, not with "c." (circa), an
   // initial or an abbreviation: a unit symbol after a number takes no full stop of its own (NIST SP 811, 7.2).
   if (/(?:°|\d\s?)\p{L}{1,4}$/u.test(text.slice(Math.max(0, dotAt - 6), dotAt))) return startsSentence(text.slice(next, next + 1));
-  // "c." (circa) is lower case; a capital letter is an initial or a site's letter ("Dome C.").
-  if (ABBREVIATIONS.has(word) && !/^\p{L}$/u.test(word)) return false;
-  if (ABBREVIATIONS.has(word) && !/\p{Lu}/u.test(text.charAt(dotAt - 1))) return false;
-  // An initial ("J. R. Petit"), unless a word that opens sentences, not a name, follows it: "Dome C. The
-  // older ice..." ends a sentence with a site's letter.
-  if (/^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1))) return OPENERS_AFTER_LETTER.test(text.slice(next, next + 12));
+  const capital = /^\p{L}$/u.test(word) && /\p{Lu}/u.test(text.charAt(dotAt - 1));
+  if (ABBREVIATIONS.has(word) && !capital) return false;
+  // An initial ("J. R. Petit"), unless a word that opens sentences and names nobody follows: "Dome C. The ice...".
+  if (capital) return OPENS_NOT_NAME.test(text.slice(next, next + 12));
   return startsSentence(text.slice(next, next + 1));
 }
 

@@ -29,9 +29,17 @@ const SEP = String.raw`[,\u2009\u202F\u00A0 ]`;
 const NUM = String.raw`\d{1,3}(?:${SEP}\d{3}(?!\d))+(?:\.\d+)?|\d+(?:\.\d+)?|\.\d+`;
 const SUP = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 const EXP = String.raw`[eE](?<e1>[-−+]?\d{1,3})(?![\p{L}\p{N}])|[\s\u00A0]*[×xX*·][\s\u00A0]*10(?:[\s\u00A0]*\^[\s\u00A0]*(?<e2>[-−+]?\d{1,3})(?!\d)|(?<e3>[⁻⁺]?[${SUP}]{1,3})(?![${SUP}]))`;
-const SCALE = String.raw`[\s\u00A0]+(?<scale>hundred|thousand|million|billion)(?![\p{L}])|(?<kilo>k)(?![\p{L}\p{N}])`;
+const SCALE = String.raw`[\s\u00A0]+(?<scale>hundred|thousand|million|billion)(?![\p{L}])`;
+/**
+ * A scale letter written onto the digits, as people write figures in posts and notes: "45k" (a
+ * thousand), "1.2M years" (a million). A capital K or M counts only before years: "5K" alone is
+ * kelvin and "3 M" molar (NIST SP 811 symbols); "420kyr" and "2.6 Ma" are units, not scale letters.
+ */
+const LETTER_SCALE = String.raw`(?<letter>k|m(?=[\s\u00A0]*(?:years?|yrs?)(?![\p{L}])))(?![\p{L}\p{N}])`;
+/** The case the pattern (case-blind) cannot tell: a lower-case k, or a capital K or M before years. */
+const LETTER_OK = /^(?:k|[KMm][\s\u00A0]*(?:years?|yrs?)(?![\p{L}]))/u;
 const DIGITS = new RegExp(
-  String.raw`(?<sign>(?<![\p{L}\p{N}.])[-−+])?(?<![\p{L}\p{N}_.])(?<num>${NUM})(?:${EXP})?(?:${SCALE})?`,
+  String.raw`(?<sign>(?<![\p{L}\p{N}.])[-−+])?(?<![\p{L}\p{N}_.])(?<num>${NUM})(?:${EXP})?(?:${SCALE}|${LETTER_SCALE})?`,
   'giu',
 );
 const WORD_PHRASE = new RegExp(
@@ -39,28 +47,27 @@ const WORD_PHRASE = new RegExp(
   'giu',
 );
 const VAGUE = new RegExp(
-  String.raw`(?<![\p{L}])(?:(?<plural>tens|hundreds|thousands|millions|dozens)[\s\u00A0]+of(?:[\s\u00A0]+(?<inner>thousands|millions)[\s\u00A0]+of)?|(?<few>a[\s\u00A0]+few|several)(?:[\s\u00A0]+(?<fewScale>hundred|thousand|million))?)(?=[\s\u00A0])`,
+  String.raw`(?<![\p{L}])(?:(?<plural>tens|hundreds|thousands|millions|dozens)[\s\u00A0]+of(?:[\s\u00A0]+(?<inner>thousands|millions)[\s\u00A0]+of)?|(?<few>a[\s\u00A0]+few|several|a[\s\u00A0]+couple(?:[\s\u00A0]+of)?)(?:[\s\u00A0]+(?<fewScale>hundred|thousand|million))?)(?=[\s\u00A0])`,
   'giu',
 );
 const SCALES: Record<string, number> = { hundred: 1e2, thousand: 1e3, million: 1e6, billion: 1e9, tens: 10, hundreds: 1e2, thousands: 1e3, millions: 1e6, dozens: 12 };
+const LETTERS: Record<string, number> = { k: 1e3, m: 1e6 };
 const SUPERSCRIPT: Record<string, string> = { '⁻': '-', '⁺': '+', ...Object.fromEntries([...SUP].map((c, i) => [c, String(i)])) };
 
-function digitAtom(match: RegExpExecArray): Atom {
-  let m = match;
+function digitAtom(m: RegExpExecArray): Atom {
   const g = m.groups ?? {};
   const sign = g['sign'] === undefined ? '' : g['sign'] === '+' ? '+' : '-';
   const digits = (g['num'] ?? '').replace(/[^\d.]/g, '');
   const expText = g['e1'] ?? g['e2'] ?? [...(g['e3'] ?? '')].map((c) => SUPERSCRIPT[c] ?? '').join('');
   const exponent = expText === '' ? 0 : Number(expText.replace('−', '-'));
-  // "50k years", "~18k": a "k" right after the digits is a thousand, as posts write it; a capital "K"
-  // is a thousand only before a word for years (otherwise it may be kelvin).
-  const kilo = g['kilo'] === 'k' || (g['kilo'] === 'K' && /^[\s\u00A0]+(?:years?|yrs?|yr)(?![\p{L}])/iu.test(m.input.slice(m.index + m[0].length)));
-  if (g['kilo'] !== undefined && !kilo) m = Object.assign([m[0].slice(0, -1)], { index: m.index, input: m.input, groups: { ...g, kilo: undefined } }) as unknown as RegExpExecArray;
-  const scale = kilo ? 1e3 : g['scale'] === undefined ? 1 : (SCALES[g['scale'].toLowerCase()] ?? 1);
+  // "5K" is kelvin, not a thousand: a scale letter the case-blind pattern took wrongly is left to the units.
+  const letter = g['letter'] !== undefined && LETTER_OK.test(m.input.slice(m.index + m[0].length - 1)) ? g['letter'] : undefined;
+  const end = m.index + m[0].length - (g['letter'] !== undefined && letter === undefined ? 1 : 0);
+  const scale = g['scale'] !== undefined ? (SCALES[g['scale'].toLowerCase()] ?? 1) : letter !== undefined ? (LETTERS[letter.toLowerCase()] ?? 1) : 1;
   const magnitude = Number(digits) * 10 ** exponent * scale;
   const plainInteger = /^\d{3,4}$/.test(g['num'] ?? '') && expText === '' && scale === 1 && sign === '';
   return {
-    start: m.index, end: m.index + m[0].length, value: sign === '-' ? -magnitude : magnitude,
+    start: m.index, end, value: sign === '-' ? -magnitude : magnitude,
     half: halfPlace(digits) * 10 ** exponent * scale, scale, form: 'digits', rule: 'precision', plainInteger, sign,
   };
 }
@@ -102,7 +109,7 @@ function vagueAtom(m: RegExpExecArray): Atom {
   const outer = g['plural'] ?? g['fewScale'];
   const s = (outer === undefined ? 1 : (SCALES[outer.toLowerCase()] ?? 1)) * (g['inner'] === undefined ? 1 : (SCALES[g['inner'].toLowerCase()] ?? 1));
   const few = g['few']?.toLowerCase().replace(/\s+/g, ' ');
-  const rule = g['plural'] !== undefined ? 'plural-magnitude' : few === 'several' ? 'several' : 'a-few';
+  const rule = g['plural'] !== undefined ? 'plural-magnitude' : few === 'several' ? 'several' : few?.startsWith('a couple') === true ? 'a-couple' : 'a-few';
   return { start: m.index, end: m.index + m[0].length, value: s, half: 0, scale: s, form: 'vague', rule, plainInteger: false, sign: '' };
 }
 

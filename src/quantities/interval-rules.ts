@@ -44,6 +44,8 @@ export const INTERVAL_RULES: readonly IntervalRule[] = [
     why: 'A plural of a magnitude means at least two of it and fewer than ten: thousands of years = 2,000–10,000 years; the value is the middle.' },
   { id: 'a-few', kind: 'stated', words: ['a few'], low: { s: 2 }, high: { s: 5 },
     why: '"A few centuries" = 2 to 5 centuries; the value is the middle.' },
+  { id: 'a-couple', kind: 'stated', words: ['a couple', 'a couple of'], low: { s: 2 }, high: { s: 3 },
+    why: '"A couple of degrees", "a couple thousand years" = 2 to 3 of them, as people say it; the value is the middle.' },
   { id: 'several', kind: 'stated', words: ['several'], low: { s: 3 }, high: { s: 7 },
     why: '"Several millennia" = 3 to 7 millennia; the value is the middle.' },
   { id: 'about', kind: 'hedge', words: ['about', 'around', 'roughly', 'some', 'approximately', 'approx.', '~', '∼', '≈', 'c.', 'ca.', 'circa', 'close to', 'an estimated', 'or so'], low: { L: 1, absV: -0.025 }, high: { H: 1, absV: 0.025 },

@@ -16,7 +16,7 @@ export interface Cue {
 
 /** Temperature cues, tried in order; the first that matches decides. */
 export const TEMPERATURE_CUES: readonly Cue[] = [
-  { reading: 'temperature-change', where: 'after', words: ['warmer', 'cooler', 'colder', 'hotter', 'higher', 'lower', 'rise', 'increase', 'drop', 'fall', 'decline', 'change', 'shift', 'difference', 'swing', 'warming', 'cooling', 'anomaly', 'above', 'below', 'more', 'less', 'of warming', 'of cooling', 'amplitude', 'warm-up', 'warmup', 'cool-down', 'jump', 'leap'] },
+  { reading: 'temperature-change', where: 'after', words: ['warmer', 'cooler', 'colder', 'hotter', 'higher', 'lower', 'rise', 'increase', 'drop', 'fall', 'decline', 'change', 'shift', 'difference', 'swing', 'warming', 'cooling', 'anomaly', 'above', 'below', 'more', 'less', 'of warming', 'of cooling', 'amplitude', 'warm-up', 'warmup', 'cool-down', 'jump', 'leap', 'per doubling', 'for a doubling', 'for each doubling', 'for every doubling', 'for such a doubling', 'of eventual warming', 'of equilibrium warming', 'of long-term warming'] },
   { reading: 'temperature-change', where: 'before', words: ['by', 'warmed', 'cooled', 'rose', 'fell', 'dropped', 'climbed', 'increased', 'decreased', 'changed', 'rise of', 'drop of', 'fall of', 'change of', 'increase of', 'decrease of', 'swing of', 'difference of', 'warming of', 'cooling of', 'anomaly of', 'amplitude of', 'shift of', 'jump of', 'leap of', 'climb of', 'plunge of', 'warm-up of', 'a', 'an'] },
   { reading: 'temperature', where: 'before', words: ['was', 'were', 'is', 'are', 'at', 'reach', 'reaches', 'reached', 'hit', 'hits', 'averaged', 'averages', 'stood at', 'of', 'to', 'from', 'between', 'minus', 'reads', 'read', 'registered', 'recorded'] },
 ];

@@ -41,9 +41,11 @@ const AGO = words('(?:ago|before present)');
  */
 const LETTERS = String.raw`\p{L}*`;
 const ANGLE_CUE = `(?:${['tilt', 'obliquit', 'axi', 'latitude', 'longitude', 'angle', 'inclin', 'rotat', 'compass', 'arc'].map((w) => words(w) + LETTERS).join('|')})`;
-const TEMPERATURE_CUE = `(?:${['temperature', 'thermometer', 'warm', 'cool', 'cold', 'heat', 'hotter', 'chill'].map((w) => words(w) + LETTERS).join('|')})`;
-const TEMPERATURE_AFTER = words('(?:colder|warmer|cooler|hotter|chillier|of (?:warming|cooling|cold|warmth))');
-const BARE_DEGREES = String.raw`(?<!(?<![\p{L}])${ANGLE_CUE}(?![\p{L}])[^.;:!?]{0,80})${words('degrees?')}(?![\s\u00A0]+(?:[nN]orth|[sS]outh|[eE]ast|[wW]est|[NSEW](?![\p{L}])))(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])[^.;:!?]{0,60}[\p{N}\p{L}][\s\u00A0-]*${words('degrees?')})|(?=[\s\u00A0]+${TEMPERATURE_AFTER}(?![\p{L}])))`;
+// Climate sensitivity is warming per doubling of CO2 (IPCC AR6 WGI, ch. 7): "sensitivity" and
+// "doubling" before, "per doubling" or "of eventual warming" after, make bare degrees a temperature.
+const TEMPERATURE_CUE = `(?:${['temperature', 'thermometer', 'warm', 'cool', 'cold', 'heat', 'hotter', 'chill', 'sensitivit', 'doubl'].map((w) => words(w) + LETTERS).join('|')})`;
+const TEMPERATURE_AFTER = words('(?:colder|warmer|cooler|hotter|chillier|of (?:warming|cooling|cold|warmth)|of (?:eventual|further|extra|additional|equilibrium|long-term) warming|(?:per|for (?:a|each|every|one|such a)) doubling)');
+const BARE_DEGREES = String.raw`(?<!(?<![\p{L}])${ANGLE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,80})${words('degrees?')}(?![\s\u00A0]+(?:[nN]orth|[sS]outh|[eE]ast|[wW]est|[NSEW](?![\p{L}])))(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,60}[\p{N}\p{L}][\s\u00A0-]*${words('degrees?')})|(?=[\s\u00A0]+${TEMPERATURE_AFTER}(?![\p{L}])))`;
 const DEG_C = [symbol('° C'), 'ºC', '℃', words('degrees? (?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C'), BARE_DEGREES];
 const DEG_F = [symbol('° F'), 'ºF', '℉', words('degrees? fahrenheit'), symbol('degrees? F')];
 const KELVIN = ['K', words('kelvins?')];

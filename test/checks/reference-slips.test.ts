@@ -50,3 +50,23 @@ describe('a unit slip against a reference', () => {
     expect(flags.map(([id]) => id)).not.toContain('unit.scale-slip');
   });
 });
+
+describe('metres written for feet', () => {
+  // Sea level at the Last Glacial Maximum about 120-130 m lower than today (Clark et al. 2009,
+  // Science 325, 710-714, doi 10.1126/science.1172873); 1 ft = 0.3048 m (NIST SP 811).
+  it.each([
+    'At the peak of the last ice age the seas stood 400 metres lower.',
+    'Sea level at the Last Glacial Maximum was about 410 m below today.',
+    'At the last glacial maximum sea level fell by roughly 420 metres.',
+  ])('%s is a unit slip', async (text) => {
+    expect((await flagsOf(text)).map(([id]) => id)).toEqual(['unit.scale-slip']);
+  });
+
+  it('a wrong figure that no unit explains stays a value flag', async () => {
+    expect((await flagsOf('At the Last Glacial Maximum sea level was about 60 metres lower.')).map(([id]) => id)).toEqual(['value.lgm-sea-level-lowstand']);
+  });
+
+  it('the right figure in metres is clean', async () => {
+    expect(await flagsOf('At the Last Glacial Maximum sea level was about 125 metres lower.')).toEqual([]);
+  });
+});

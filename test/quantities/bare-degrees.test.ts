@@ -54,3 +54,35 @@ describe('a global cooling in bare degrees is checked like one in °C', () => {
     expect(verdictOf('At the height of the last ice age the world was about six degrees colder than today.')).toEqual(['agrees']);
   });
 });
+
+describe('bare degrees of warming per doubling of CO2 (climate sensitivity)', () => {
+  // Equilibrium climate sensitivity: best estimate 3 °C, very likely 2-5 °C (IPCC AR6 WGI SPM A.4.4,
+  // doi:10.1017/9781009157896.001); bare degrees in science writing are Celsius (common practice).
+  it.each([
+    ['Her figure is 2.5 degrees per doubling.', '2.5 degrees'],
+    ['Models give about 4 degrees for each doubling of carbon dioxide.', 'about 4 degrees'],
+    ['The sensitivity works out to roughly 3.2 degrees.', 'roughly 3.2 degrees'],
+    ['A doubling of CO2 would bring some 2.8 degrees.', 'some 2.8 degrees'],
+    ['That is 1.2 degrees of eventual warming for a doubling.', '1.2 degrees'],
+  ])('%s', (sentence, text) => {
+    const [q] = parseQuantities(sentence).filter((x) => x.text.includes('degree'));
+    expect(q).toMatchObject({ text, statedUnit: 'degC' });
+  });
+
+  it('reads per doubling as a change, so the sensitivity binds and is checked', () => {
+    const sentence = 'The IPCC best estimate is about 1.5 degrees per doubling of CO2.';
+    const quantities = parseQuantities(sentence);
+    const { bindings } = bindQuantities(sentence, quantities, packs);
+    const { verdicts } = checkReferences(sentence, quantities, bindings, packs);
+    expect(bindings[0]?.referenceId).toBe('ecs-ar6-very-likely');
+    expect(verdicts[0]).toBe('conflicts');
+  });
+
+  it.each([
+    // Angles keep their degrees: obliquity varies between about 22.1 and 24.5 degrees (Berger 1978, doi:10.1175/1520-0469(1978)035<2362:LTVODI>2.0.CO;2).
+    'Doubling back, the tilt swings by 2.4 degrees.',
+    'The axis doubles back through 23.5 degrees.',
+  ])('%s stays an angle', (sentence) => {
+    expect(parseQuantities(sentence).filter((q) => q.statedUnit === 'degC')).toEqual([]);
+  });
+});

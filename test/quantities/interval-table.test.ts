@@ -35,6 +35,8 @@ describe('the interval table', () => {
     ['multiplier-word', 'Dust rose threefold.', 'threefold', 2.85, 3.15],
     ['plural-magnitude', 'It took thousands of years.', 'thousands of years', 2000, 10000],
     ['a-few', 'It took a few centuries.', 'a few centuries', 200, 500],
+    ['a-couple', 'It took a couple of millennia.', 'a couple of millennia', 2000, 3000],
+    ['a-couple', 'Summers ran a couple degrees warmer.', 'a couple degrees', 2, 3],
     ['several', 'It took several millennia.', 'several millennia', 3000, 7000],
     ['about', 'It spans about 420,000 years.', 'about 420,000 years', 404500, 435500], // 420,000 ± (5,000 + 2.5% of 420,000)
     ['nearly', 'It spans nearly 100,000 years.', 'nearly 100,000 years', 90000, 100000],
