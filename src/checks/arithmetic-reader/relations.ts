@@ -78,7 +78,10 @@ function isOtherQuantity(f: Figure): boolean {
  */
 function isTied(f: Figure, text: string, lastInput: number): boolean {
   const words = between(text, Math.max(0, lastInput), f.q.start);
-  if (words.some((w) => CONTRAST.includes(w.text)) || /;/u.test(text.slice(Math.max(0, lastInput), f.q.start))) return false;
+  if (words.some((w) => CONTRAST.includes(w.text))) return false;
+  // A semicolon closes the clause of the figures, except for what is left of them ("...; the remaining 50").
+  if (/;/u.test(text.slice(Math.max(0, lastInput), f.q.start)) && !f.remainder) return false;
+  if (f.remainder) return true;
   if (holdsPhrase(words, WORDS.links)) return true;
   // Inputs only in the sentences before: the sentence must say it draws on them.
   if (lastInput < 0) return false;
@@ -135,16 +138,23 @@ function checkChange(figures: Figure[], text: string, f: Figure): ReaderFinding[
   if (isOtherQuantity(f)) return [];
   const sameFamily = (g: Figure): boolean => g.role === 'level' && g.family === f.family && (g.q.statedUnit === f.q.statedUnit || g.q.statedUnit === '' || f.q.statedUnit === '');
   const than = f.after.some((w) => w.text === 'than') ? figures.find((g) => g.sentence === 0 && g.order > f.order && sameFamily(g)) : undefined;
-  const found = usable(figures, f, text, sameFamily);
+  const found = usable(figures, f, text, sameFamily) ?? (f.remainder ? usable(figures, f, text, (g) => (g.role === 'change' || g.role === 'level') && g.family === f.family) : undefined);
   if (found === undefined && than === undefined) return [];
   let pairs: [Figure, Figure][];
   if (than !== undefined) {
     const subjects = inputsBefore(figures, f, sameFamily).slice(-2);
     if (subjects.length === 0) return [];
     pairs = subjects.map((s) => [s, than]);
-  } else pairs = pairsOf((found as { inputs: Figure[] }).inputs);
+  } else pairs = pairsOf((found as { inputs: Figure[] }).inputs.filter((g) => g.role === 'level'));
   // Two levels in different units ("6 °C is roughly 11 °F") restate one amount; they make no change.
   const sameUnit = ([a, b]: [Figure, Figure]): boolean => a.q.statedUnit === b.q.statedUnit || a.q.statedUnit === '' || b.q.statedUnit === '';
+  // "Of the 95 ppm gained, 25 came from warming and the rest, some 90 ppm, ...": what is left of a stated whole.
+  if (f.remainder) {
+    // The whole is the largest figure of the family before it; every smaller one may be the part taken.
+    const amounts = inputsBefore(figures, f, (g) => (g.role === 'change' || g.role === 'level') && g.family === f.family && g.sentence <= 1 && !g.remainder).slice(-3);
+    const whole = [...amounts].sort((a, b) => b.q.value - a.q.value)[0];
+    for (const part of amounts.filter((p) => whole !== undefined && p !== whole && p.q.value < whole.q.value)) pairs.push([part, whole as Figure]);
+  }
   const candidates = pairs.filter(([a, b]) => a.q.value !== b.q.value && sameUnit([a, b])).map(([a, b]): Candidate => ({ value: size(minus(w(b.q), w(a.q))), measures: `the difference between ${a.q.text} and ${b.q.text}`, near: Math.max(a.order, b.order), far: Math.min(a.order, b.order) }));
   const nearest = verdict(f.q, candidates, (d) => facing(d, f.q.value));
   if (nearest === undefined) return [];

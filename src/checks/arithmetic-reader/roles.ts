@@ -23,6 +23,8 @@ export interface Figure {
   sentence: number;
   /** Reading order across the sentences. */
   order: number;
+  /** True when a remainder word names it as what is left of a whole ("the remaining 50"). */
+  remainder: boolean;
   /** The words just before it (back to the figure before or the clause's start) and just after it. */
   before: Word[];
   after: Word[];
@@ -100,7 +102,7 @@ export function readSentence(text: string, qs: readonly Quantity[], sentence: nu
   const figures = qs.map((q, i): Figure => {
     const before = wordsBefore(text, q, qs[i - 1]);
     const after = wordsAfter(text, q, qs[i + 1]);
-    const f: Figure = { q, role: 'other', family: '', sign: 0, sentence, order: base + q.start, before, after };
+    const f: Figure = { q, role: 'other', family: '', sign: 0, sentence, order: base + q.start, before, after, remainder: WORDS.remainder.has(lastMeaningful(before)?.text ?? '') };
     const d = q.dimension;
     if (inWrittenSum(text, q)) return f;
     if (d === 'age') return { ...f, role: 'date', family: 'age' };

@@ -26,7 +26,7 @@ const COMPARATIVES: Record<string, number> = {
 /** Particles before a figure that state it as a change ("up 124 ppm", "down 6 °C", "net 40 ppm"). */
 const CHANGE_PARTICLES: Record<string, number> = { up: 1, down: -1, net: 0 };
 /** Words that name what is left of a whole once a part is taken ("the remaining 50", "the rest, 40 ppm"). */
-const REMAINDER = ['remaining', 'remainder', 'rest', 'other', 'left', 'leftover', 'balance'];
+const REMAINDER = ['remaining', 'remainder', 'rest', 'left', 'leftover', 'balance'];
 /**
  * Words that present a figure as drawn from the figures before it: a consequence, a restatement,
  * an equation, a total.
@@ -53,8 +53,11 @@ const YARDSTICK = ['per', 'each', 'every', 'a', 'an', 'one'];
 const BASE_AFTER = ['over', 'from', 'on', 'compared', 'relative', 'against'];
 /** Words that set what follows after what came before ("after which came 600 years"): a new stretch, not a restatement. */
 const SEQUENCE = ['after', 'afterwards', 'then', 'which', 'followed', 'until', 'till', 'when', 'before', 'whereupon', 'next'];
-/** Words that refer back to what the sentence before said ("above that", "by then", "it"). */
-const BACK_REFERENCES = ['that', 'this', 'those', 'these', 'then', 'it', 'its', 'there', 'such'];
+/**
+ * Words that refer back to what the sentence before said ("above that", "by then"). A pronoun for
+ * the subject ("it", "its") is not enough: it carries the thing over, not the figure.
+ */
+const BACK_REFERENCES = ['that', 'this', 'those', 'these', 'then', 'such'];
 /** Units of time a change may recur in ("2 ppm a year"). */
 const TIME_UNITS = ['year', 'decade', 'century', 'millennium', 'month', 'day', 'week', 'yr', 'annum'];
 /** Words after a change that tie it to a recurring time or a start of its own ("2 ppm a year", "140 ppm since 1750"). */
