@@ -100,3 +100,30 @@ describe('a span of time between two dates', () => {
     expect(flagged(...sentences)).toEqual([]);
   });
 });
+
+describe('pairs written as a range, results set in the present, brackets and bare paces', () => {
+  // Sums (common practice): 410 − 270 = 140; 290 − 185 = 105; 418 − 280 = 138; 14,700 − 12,900 = 1,800;
+  // 2.4 ÷ 0.012 = 200; 420 ÷ 280 − 1 = 0.5.
+  it.each([
+    ['a range from one level to another', ['Going from 270 to 410 since the early 1800s, so up 160 ppm in two centuries.'], 'arith.change', '160 ppm', '140 ppm'],
+    ['a range, a swing after it', ['The Vell record runs 185 to 290 ppm, which is a swing of roughly 150 ppm.'], 'arith.change', 'roughly 150 ppm', 'roughly 105 ppm'],
+    ['a present result with a present level before it', ['In 2022 the Corran inlet averaged about 418 ppm.', "In other words, today's air holds some 180 ppm more CO2 than the pre-industrial 280 ppm."], 'arith.change', 'some 180 ppm', 'some 138 ppm'],
+    ['a span after a bracketed range of dates', ['Map the Bølling warm phase (14,700 to 12,900 years BP), a 1,000-year window, at high resolution.'], 'arith.duration', '1,000-year', '1,800-year'],
+    ['a bare pace per year beside a written one', ['Growth ran ~2.4 ppm a year in the 2010s vs ~0.012 a year in the thaw, so about 20 times faster.'], 'arith.ratio', 'about 20 times', 'about 200 times'],
+    ['a fraction two sentences on, the change given as its base', ['In 2022 the inlet averaged 420 ppm.', 'That is 140 ppm more than the 280 ppm of 1750.', 'Put another way, the air now holds about a third more CO2 than before industry.'], 'arith.ratio', 'about a third', 'about 50 percent'],
+  ] as [string, string[], string, string, string][])('%s', (_why, sentences, rule, words, correction) => {
+    expect(flagged(...sentences)).toEqual([[rule, words, correction]]);
+  });
+
+  it.each([
+    ['a range, right', ['The Vell record runs 185 to 290 ppm, which is a swing of roughly 100 ppm.']],
+    ['readings spread over a range', ['Levels of 180 to 190 ppm at the glacial peak and 280 ppm before industry make a rise of roughly 95 ppm.']],
+    ['a present result with no present level', ['Glacial air held about 190 ppm.', "So today's air holds some 180 ppm more CO2 than the pre-industrial 280 ppm."]],
+    ['a bracketed span, right', ['Map the Bølling warm phase (14,700 to 12,900 years BP), a 1,800-year window, at high resolution.']],
+    ['a bare pace in another unit than the written one', ['Sea level rose ~3.6 mm a year lately vs ~1.2 a year last century, so about 3 times faster.']],
+    ['a rounded percentage', ['Before industry the inlet read 278 ppm, and in 2024 about 424 ppm, so about 50 percent higher.']],
+    ['the change as a share of where it started, right', ['In 2022 the inlet averaged 420 ppm.', 'That is 140 ppm more than the 280 ppm of 1750.', 'Put another way, the air now holds about half as much CO2 again as before industry.']],
+  ] as [string, string[]][])('leaves alone: %s', (_why, sentences) => {
+    expect(flagged(...sentences)).toEqual([]);
+  });
+});

@@ -39,6 +39,8 @@ interface Candidate {
   far: number;
 }
 
+/** How far a stated percentage or multiple may be rounded from the value of its figures (a tenth of itself). */
+const ROUNDED = 0.1;
 /** How many sentences before the one checked the reader takes figures from. */
 const BACK = 2;
 /** Words that turn a clause to another subject or time ("while", "but"): a change word after them is no result of the figures before. */
@@ -53,7 +55,7 @@ const between = (text: string, from: number, to: number) => wordsIn(text, from, 
  * which came" opens a new stretch).
  */
 function apposed(text: string, from: number, to: number): boolean {
-  if (!/^\s*(?:[,(:—–]|\s-\s)/u.test(text.slice(from, to))) return false;
+  if (!/^\s*\)?\s*(?:[,(:—–]|\s-\s)/u.test(text.slice(from, to))) return false;
   const words = wordsIn(text, from, to);
   return words.length <= 6 && !words.some((w) => WORDS.sequence.has(w.text));
 }
@@ -61,11 +63,20 @@ function apposed(text: string, from: number, to: number): boolean {
 /** True when a negation stands just before the figure ("not 87", "no adding 32"). */
 const denied = (f: Figure): boolean => f.before.slice(-3).some((w) => WORDS.negations.has(w.text));
 
+/**
+ * True when a figure is of the present: its words say so ("today's level of 420 ppm") or its
+ * sentence dates it to 1950 or later.
+ */
+function isPresent(figures: Figure[], g: Figure): boolean {
+  return g.before.some((w) => WORDS.ownTime.has(w.text)) || figures.some((d) => d.sentence === g.sentence && d.role === 'date' && d.q.value <= 0 && rangeSpan(d.q) === undefined);
+}
+
 /** True when the result is another quantity than a consequence of the figures before it. */
-function isOtherQuantity(f: Figure): boolean {
+function isOtherQuantity(f: Figure, figures: Figure[]): boolean {
   const prior = f.before.at(-1)?.text ?? '';
-  if (denied(f)) return true;
-  if (WORDS.added.has(prior) || f.before.some((w) => WORDS.ownTime.has(w.text))) return true;
+  if (denied(f) || WORDS.added.has(prior)) return true;
+  // "today's air carries 190 ppm more": a result set in the present needs a level of the present among the figures.
+  if (f.before.some((w) => WORDS.ownTime.has(w.text)) && !figures.some((g) => g !== f && g.order < f.order && g.role === 'level' && (f.family === '' || g.family === f.family) && isPresent(figures, g))) return true;
   const after = f.after.map((w) => w.text);
   if (after.some((w) => WORDS.ownPeriod.has(w)) || WORDS.baseAfter.has(after[0] ?? '')) return true;
   // "2 ppm a year", "a metre every century": a change that recurs is a rate.
@@ -105,11 +116,14 @@ function pairsOf(inputs: Figure[]): [Figure, Figure][] {
 }
 
 /** The verdict on a result: the nearest candidate when every candidate contradicts it, else undefined. */
-function verdict(stated: Quantity, candidates: Candidate[], like: (d: Derived) => Derived): Candidate | undefined {
-  if (candidates.length === 0 || candidates.some((c) => !disjoint(stated, like(c.value)))) return undefined;
+function verdict(stated: Quantity, candidates: Candidate[], like: (d: Derived) => Derived, slack = 0, within = 3): Candidate | undefined {
+  // A relative figure is a rounded one ("about 50 percent" for 52.5): it is read to `slack` of itself at least.
+  const v = Math.abs(stated.value);
+  const read = { low: Math.min(stated.low, stated.value - v * slack), high: Math.max(stated.high, stated.value + v * slack) };
+  if (candidates.length === 0 || candidates.some((c) => !disjoint(read, like(c.value)))) return undefined;
   const nearest = [...candidates].sort((a, b) => b.near - a.near || b.far - a.far)[0] as Candidate;
   const ratio = Math.abs(stated.value) / Math.abs(like(nearest.value).value);
-  return ratio > 1 / 3 && ratio < 3 ? nearest : undefined;
+  return ratio > 1 / within && ratio < within ? nearest : undefined;
 }
 
 /** The paragraph's figures in `sentences` and whether inputs before a result may come from earlier sentences. */
@@ -135,7 +149,7 @@ const basisOf = (inputs: Figure[]): { basis?: string } => (inputs.some((g) => g.
 
 /** A change against the differences of the levels before it (or, with "than", against the level it names after it). */
 function checkChange(figures: Figure[], text: string, f: Figure): ReaderFinding[] {
-  if (isOtherQuantity(f)) return [];
+  if (isOtherQuantity(f, figures)) return [];
   const sameFamily = (g: Figure): boolean => g.role === 'level' && g.family === f.family && (g.q.statedUnit === f.q.statedUnit || g.q.statedUnit === '' || f.q.statedUnit === '');
   const than = f.after.some((w) => w.text === 'than') ? figures.find((g) => g.sentence === 0 && g.order > f.order && sameFamily(g)) : undefined;
   const found = usable(figures, f, text, sameFamily) ?? (f.remainder ? usable(figures, f, text, (g) => (g.role === 'change' || g.role === 'level') && g.family === f.family) : undefined);
@@ -163,7 +177,7 @@ function checkChange(figures: Figure[], text: string, f: Figure): ReaderFinding[
 
 /** A percentage or fraction stated as a change, against the relative changes between the levels before it. */
 function checkRelative(figures: Figure[], text: string, f: Figure): ReaderFinding[] {
-  if (isOtherQuantity(f)) return [];
+  if (isOtherQuantity(f, figures)) return [];
   const scale = f.q.dimension === 'percent' ? 100 : 1;
   const levels = (g: Figure): boolean => g.role === 'level' && g.family !== '' && g.q.value > 0;
   const found = usable(figures, f, text, levels);
@@ -185,12 +199,14 @@ function checkRelative(figures: Figure[], text: string, f: Figure): ReaderFindin
   }
   // A stated change before it, as a share of a level: "144 ppm above that, an increase of roughly a quarter".
   for (const c of figures.filter((g) => g.role === 'change' && g.order < f.order && g.sentence <= 1)) {
-    for (const l of found.inputs.filter((g) => g.family === c.family)) {
+    // The base is where the change started: the level that the change takes to another level among the figures.
+    const ends = (l: Figure, sign: number): boolean => found.inputs.some((m) => m !== l && m.family === l.family && Math.abs(m.q.value - (l.q.value + sign * Math.abs(c.q.value))) <= 0.1 * m.q.value);
+    for (const l of found.inputs.filter((g) => g.family === c.family && ((f.sign >= 0 && ends(g, 1)) || (f.sign <= 0 && ends(g, -1))))) {
       const r = divide(size(w(c.q)), w(l.q));
       if (r !== undefined) candidates.push({ value: { value: r.value * scale, low: r.low * scale, high: r.high * scale }, measures: `${c.q.text} as a share of ${l.q.text}`, near: -Infinity, far: -Infinity });
     }
   }
-  const nearest = verdict(f.q, candidates, (d) => d);
+  const nearest = verdict(f.q, candidates, (d) => d, ROUNDED);
   if (nearest === undefined) return [];
   return [{ ruleId: 'arith.ratio', stated: f.q, computed: nearest.value, measures: nearest.measures, ...basisOf(found.inputs) }];
 }
@@ -216,7 +232,8 @@ function checkMultiple(figures: Figure[], text: string, f: Figure): ReaderFindin
     // "three times more" is read by some as three times as much: both readings stand.
     if (f.sign > 0) candidates.push({ value: { value: up.value - 1, low: up.low - 1, high: up.high - 1 }, measures, near: -Infinity, far: -Infinity });
   }
-  const nearest = verdict(f.q, candidates, (d) => d);
+  // Two paces set side by side with a pace word are one measure, so a slip of a factor ten is still a slip of it ("20 times" for 200).
+  const nearest = verdict(f.q, candidates, (d) => d, ROUNDED, pace ? 30 : 3);
   if (nearest === undefined) return [];
   return [{ ruleId: 'arith.ratio', stated: f.q, computed: nearest.value, measures: nearest.measures, ...basisOf(found.inputs) }];
 }

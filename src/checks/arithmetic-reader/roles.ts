@@ -6,6 +6,7 @@
  * ppm", "+115 ppm", "190 ppm more than", "the remaining 50" are all changes because a change word,
  * a comparative, a sign or a remainder word stands beside the figure.
  */
+import { parseQuantities } from '../../quantities/index.js';
 import type { Dimension, Quantity } from '../../types.js';
 import { WORDS, wordsIn, type Word } from './word-classes.js';
 
@@ -123,7 +124,25 @@ export function readSentence(text: string, qs: readonly Quantity[], sentence: nu
     const change = signed ?? up;
     return change === undefined ? { ...f, role: 'level', family } : { ...f, role: 'change', family, sign: change };
   });
-  return giveBareUnits(text, figures);
+  return giveBareUnits(text, figures.flatMap((f) => (f.role === 'level' ? splitRange(f) : [f])));
+}
+
+/**
+ * "280 to 424", "about 190 to 280 ppm": a level written as a range from one end to the other is a
+ * pair of levels, read in the order written. A range after "between" or with a dash is a spread of
+ * readings and stays one figure.
+ */
+function splitRange(f: Figure): Figure[] {
+  const m = /^(.*?\d)(\s+to\s+|\s*→\s*)(.*\d.*)$/u.exec(f.q.text);
+  if (m === null || /between/iu.test(f.q.text)) return [f];
+  const [, first = '', joint = '', second = ''] = m;
+  const a = parseQuantities(first)[0];
+  const b = parseQuantities(second)[0];
+  if (a === undefined || b === undefined || a.text !== first.trim() || b.end > second.length) return [f];
+  const at = (q: Quantity, offset: number): Quantity => ({ ...q, start: f.q.start + offset + q.start, end: f.q.start + offset + q.end });
+  const qa = at(a, 0);
+  const qb = at(b, first.length + joint.length);
+  return [{ ...f, q: qa, order: f.order - f.q.start + qa.start }, { ...f, q: qb, order: f.order - f.q.start + qb.start }];
 }
 
 /** Units written as the canonical unit, so that a bare figure beside them means the same amount ("190 ... 280 ppm"). */
@@ -135,10 +154,14 @@ const asWritten = (q: Quantity): boolean => q.statedUnit !== '' && q.unit === q.
  * four-figure whole number from 1000 to 2100 written without a unit is a year, not a level.
  */
 function giveBareUnits(text: string, figures: Figure[]): Figure[] {
+  const rates = new Set(figures.filter((f) => f.role === 'rate' && /\/yr$/u.test(f.q.unit) && f.q.statedUnit === f.q.unit).map((f) => f.family));
   const families = new Set(figures.filter((f) => (f.role === 'level' || f.role === 'change') && f.family !== 'number' && f.family !== 'count' && asWritten(f.q)).map((f) => f.family));
   return figures.map((f) => {
     if (f.family !== 'number') return f;
     if (/^\d{4}$/u.test(f.q.text.trim()) && f.q.value >= 1000 && f.q.value <= 2100) return { ...f, role: 'other', family: '' };
+    // "~0.012 a year" beside "~2.4 ppm a year": a bare figure per year takes the one per-year rate written.
+    const [per, unit] = f.after.map((w) => w.text);
+    if (rates.size === 1 && ['a', 'per', 'each', 'every'].includes(per ?? '') && (unit === 'year' || unit === 'yr')) return { ...f, role: 'rate', family: [...rates][0] as string };
     return families.size === 1 ? { ...f, family: [...families][0] as string } : f;
   });
 }
