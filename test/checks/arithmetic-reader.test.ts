@@ -127,3 +127,21 @@ describe('pairs written as a range, results set in the present, brackets and bar
     expect(flagged(...sentences)).toEqual([]);
   });
 });
+
+describe('a multiple of paces worked out from amounts and the times they took', () => {
+  // Sums (common practice): (140 ÷ 200) ÷ (100 ÷ 7,000) = 49; (45 ÷ 90) ÷ (30 ÷ 600) = 10; (6 ÷ 300) ÷ (4 ÷ 5,000) = 25.
+  it.each([
+    ['versus, times faster', ['So 100 ppm over 7,000 years versus 140 ppm over about 200 years means we are only about 10 times faster than nature managed.'], 'about 10 times', 'about 49 times'],
+    ['but, so times faster', ['The Halm glacier lost 30 m over 600 years, but 45 m in 90 years, so it is now retreating about 3 times faster.'], 'about 3 times', 'about 10 times'],
+    ['against, which is', ['Warming of 4 °C across 5,000 years against 6 °C within 300 years, which is about 60 times the pace.'], 'about 60 times', 'about 25 times'],
+  ] as [string, string[], string, string][])('%s', (_why, sentences, words, correction) => {
+    expect(flagged(...sentences)).toEqual([['arith.ratio', words, correction]]);
+  });
+
+  it.each([
+    ['right', ['The Halm glacier lost 30 m over 600 years, but 45 m in 90 years, so it is now retreating about 10 times faster.']],
+    ['a time counted back from now ("the last 90 years") is left to the rate rules', ['The Halm glacier lost 30 m over 600 years, but 45 m in the last 90 years, so it is now retreating about 3 times faster.']],
+  ] as [string, string[]][])('leaves alone: %s', (_why, sentences) => {
+    expect(flagged(...sentences)).toEqual([]);
+  });
+});

@@ -222,10 +222,12 @@ function checkMultiple(figures: Figure[], text: string, f: Figure): ReaderFindin
   for (const [a, b] of pairsOf(found.inputs)) {
     if (a.role !== b.role || a.family !== b.family || (pace && a.role !== 'rate')) continue;
     if (a.q.statedUnit !== b.q.statedUnit && a.q.statedUnit !== '' && b.q.statedUnit !== '' && a.role === 'level') continue;
-    const r = divide(w(a.q), w(b.q));
+    // A pace worked out from an amount and its time ("100 ppm over 7,000 years") counts as a rate.
+    const r = divide(a.pace?.value ?? w(a.q), b.pace?.value ?? w(b.q));
     if (r === undefined) continue;
     const up = r.value >= 1 ? r : invert(r);
-    const measures = `the ratio of ${(r.value >= 1 ? a : b).q.text} to ${(r.value >= 1 ? b : a).q.text}`;
+    const named = (g: Figure): string => g.pace?.text ?? g.q.text;
+    const measures = `the ratio of ${named(r.value >= 1 ? a : b)} to ${named(r.value >= 1 ? b : a)}`;
     const near = Math.max(a.order, b.order);
     const far = Math.min(a.order, b.order);
     candidates.push({ value: up, measures, near, far });

@@ -6,7 +6,8 @@
  * ppm", "+115 ppm", "190 ppm more than", "the remaining 50" are all changes because a change word,
  * a comparative, a sign or a remainder word stands beside the figure.
  */
-import { parseQuantities } from '../../quantities/index.js';
+import { parseQuantities, writtenInterval as w } from '../../quantities/index.js';
+import { divide, size, type Derived } from '../arithmetic-derive.js';
 import type { Dimension, Quantity } from '../../types.js';
 import { WORDS, wordsIn, type Word } from './word-classes.js';
 
@@ -24,6 +25,8 @@ export interface Figure {
   sentence: number;
   /** Reading order across the sentences. */
   order: number;
+  /** For an amount over the time it took ("100 ppm over 7,000 years"), the pace it gives and its words. */
+  pace?: { value: Derived; text: string };
   /** True when a remainder word names it as what is left of a whole ("the remaining 50"). */
   remainder: boolean;
   /** The words just before it (back to the figure before or the clause's start) and just after it. */
@@ -124,7 +127,25 @@ export function readSentence(text: string, qs: readonly Quantity[], sentence: nu
     const change = signed ?? up;
     return change === undefined ? { ...f, role: 'level', family } : { ...f, role: 'change', family, sign: change };
   });
-  return giveBareUnits(text, figures.flatMap((f) => (f.role === 'level' ? splitRange(f) : [f])));
+  return withPaces(text, giveBareUnits(text, figures.flatMap((f) => (f.role === 'level' ? splitRange(f) : [f]))));
+}
+
+const PACE_OF: Record<string, Dimension> = { concentration: 'concentration-rate', temperature: 'temperature-rate', length: 'length-rate' };
+
+/**
+ * "100 ppm over 7,000 years", "140 ppm in about 200 years": an amount followed at once by the time
+ * it took also gives a pace, read as one more figure (a rate) where the time stands.
+ */
+function withPaces(text: string, figures: Figure[]): Figure[] {
+  const paces = figures.flatMap((g, i): Figure[] => {
+    const d = figures[i + 1];
+    const family = PACE_OF[g.family];
+    if (d?.role !== 'duration' || family === undefined || (g.role !== 'change' && g.role !== 'level')) return [];
+    if (!/^\s+(?:over|in|across|within)\s+(?:(?:the|those|these|some)\s+)?$/iu.test(text.slice(g.q.end, d.q.start))) return [];
+    const value = divide(size(w(g.q)), w(d.q));
+    return value === undefined ? [] : [{ ...g, role: 'rate', family, order: d.order, pace: { value, text: `${g.q.text} over ${d.q.text}` } }];
+  });
+  return [...figures, ...paces].sort((a, b) => a.order - b.order);
 }
 
 /**
