@@ -145,3 +145,22 @@ describe('a multiple of paces worked out from amounts and the times they took', 
     expect(flagged(...sentences)).toEqual([]);
   });
 });
+
+describe('a change restated in another unit after "or"', () => {
+  // Sums (common practice): 410 − 280 = 130; 212 − 180 = 32; 5.1 − 3.9 = 1.2.
+  it.each([
+    ['a percentage since a time, or an amount', ['Before industry the Tarn inlet read about 280 ppm.', 'By 2020 it had reached about 410 ppm, a rise of 46 percent since then, or roughly 90 ppm.'], 'roughly 90 ppm', 'roughly 130 ppm'],
+    ['a drop as a percentage, or in metres', ['The lake fell from 212 m to 180 m, a drop of 15 percent, or about 20 m.'], 'about 20 m', 'about 32 m'],
+    ['that is', ['The Marrow Sound gauge went from 3.9 m to 5.1 m, a gain of roughly 30 percent, that is 2.1 m.'], '2.1 m', '1.2 m'],
+  ] as [string, string[], string, string][])('%s', (_why, sentences, words, correction) => {
+    expect(flagged(...sentences)).toEqual([['arith.change', words, correction]]);
+  });
+
+  it.each([
+    ['right', ['The lake fell from 212 m to 180 m, a drop of 15 percent, or about 32 m.']],
+    ['right, across sentences', ['Before industry the Tarn inlet read about 280 ppm.', 'By 2020 it had reached about 410 ppm, a rise of 46 percent since then, or roughly 130 ppm.']],
+    ['an alternative level, not a restated change', ['Glacial CO2 sat near 190 ppm, or 185 ppm in the Dome Fuji series.']],
+  ] as [string, string[]][])('leaves alone: %s', (_why, sentences) => {
+    expect(flagged(...sentences)).toEqual([]);
+  });
+});

@@ -127,7 +127,20 @@ export function readSentence(text: string, qs: readonly Quantity[], sentence: nu
     const change = signed ?? up;
     return change === undefined ? { ...f, role: 'level', family } : { ...f, role: 'change', family, sign: change };
   });
-  return withPaces(text, giveBareUnits(text, figures.flatMap((f) => (f.role === 'level' ? splitRange(f) : [f]))));
+  return withPaces(text, restatements(text, giveBareUnits(text, figures.flatMap((f) => (f.role === 'level' ? splitRange(f) : [f])))));
+}
+
+/**
+ * "a rise of 47 percent, or roughly 70 ppm": a figure after ", or" restates the change before it,
+ * so it is a change too, in its own unit.
+ */
+function restatements(text: string, figures: Figure[]): Figure[] {
+  return figures.map((f, i) => {
+    // A date of the change may stand between: "a rise of 47 percent since 1750, or roughly 130 ppm".
+    const prev = figures.slice(0, i).reverse().find((g) => g.role !== 'date');
+    if (f.role !== 'level' || prev === undefined || (prev.role !== 'change' && prev.role !== 'relative')) return f;
+    return /^\s*(?:(?:since|from|in|by|over)\s+[^,;.]{0,30})?,?\s*(?:or|i\.e\.,?|that is,?)\s*$/iu.test(text.slice(prev.q.end, f.q.start)) ? { ...f, role: 'change', sign: prev.sign } : f;
+  });
 }
 
 const PACE_OF: Record<string, Dimension> = { concentration: 'concentration-rate', temperature: 'temperature-rate', length: 'length-rate' };
