@@ -16,6 +16,7 @@ import { changeShares } from './arithmetic-shares.js';
 import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragraph.js';
 import { changesFromLevels, paceRatiosInParagraph, ratesInParagraph } from './arithmetic-solver.js';
 import { readArithmetic } from './arithmetic-reader/relations.js';
+import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
@@ -98,7 +99,9 @@ function sameChangeUnit(q: Quantity, a: Quantity, b: Quantity): boolean {
 function pairChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return pairs.flatMap((p) => {
     const [a, b] = ends(qs, p);
-    const stated = only(others(qs, p).filter((q) => sameChangeUnit(q, a, b) && isStatedChange(text, q)));
+    // "from 190 to 280 ppm, with the sharpest jump of 40 ppm": a part of the change is no restatement of it.
+    const part = (q: Quantity): boolean => q.start > b.end && holdsPhrase(wordsIn(text, b.end, q.start), WORDS.part);
+    const stated = only(others(qs, p).filter((q) => sameChangeUnit(q, a, b) && isStatedChange(text, q) && !part(q)));
     if (stated === undefined) return [];
     return [{ stated, computed: facing(minus(w(b), w(a)), stated.value), measures: `the change ${words(a, b)}` }];
   });

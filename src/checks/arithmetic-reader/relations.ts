@@ -89,7 +89,7 @@ function isOtherQuantity(f: Figure, figures: Figure[]): boolean {
  */
 function isTied(f: Figure, text: string, lastInput: number): boolean {
   const words = between(text, Math.max(0, lastInput), f.q.start);
-  if (words.some((w) => CONTRAST.includes(w.text))) return false;
+  if (words.some((w) => CONTRAST.includes(w.text)) || holdsPhrase(words, WORDS.part)) return false;
   // A semicolon closes the clause of the figures, except for what is left of them ("...; the remaining 50").
   if (/;/u.test(text.slice(Math.max(0, lastInput), f.q.start)) && !f.remainder) return false;
   if (f.remainder) return true;
@@ -133,7 +133,8 @@ function usable(figures: Figure[], f: Figure, text: string, accept: (g: Figure) 
   // Two inputs of its own sentence are enough; otherwise the sentence must refer back.
   const inputs = own.length >= 2 ? own : all;
   if (inputs.length < 2) return undefined;
-  const lastInput = own.at(-1)?.q.end ?? -1;
+  const last = own.at(-1);
+  const lastInput = last === undefined ? -1 : (last.pace?.end ?? last.q.end);
   if (!isTied(f, text, lastInput)) return undefined;
   // An input from a sentence before: this one must refer back to it ("above that", "by then", "so").
   if (inputs.some((g) => g.sentence > 0)) {

@@ -26,7 +26,7 @@ export interface Figure {
   /** Reading order across the sentences. */
   order: number;
   /** For an amount over the time it took ("100 ppm over 7,000 years"), the pace it gives and its words. */
-  pace?: { value: Derived; text: string };
+  pace?: { value: Derived; text: string; end: number };
   /** True when a remainder word names it as what is left of a whole ("the remaining 50"). */
   remainder: boolean;
   /** The words just before it (back to the figure before or the clause's start) and just after it. */
@@ -156,7 +156,7 @@ function withPaces(text: string, figures: Figure[]): Figure[] {
     if (d?.role !== 'duration' || family === undefined || (g.role !== 'change' && g.role !== 'level')) return [];
     if (!/^\s+(?:over|in|across|within)\s+(?:(?:the|those|these|some)\s+)?$/iu.test(text.slice(g.q.end, d.q.start))) return [];
     const value = divide(size(w(g.q)), w(d.q));
-    return value === undefined ? [] : [{ ...g, role: 'rate', family, order: d.order, pace: { value, text: `${g.q.text} over ${d.q.text}` } }];
+    return value === undefined ? [] : [{ ...g, role: 'rate', family, order: d.order, pace: { value, text: `${g.q.text} over ${d.q.text}`, end: d.q.end } }];
   });
   return [...figures, ...paces].sort((a, b) => a.order - b.order);
 }

@@ -58,6 +58,11 @@ const SEQUENCE = ['after', 'afterwards', 'then', 'which', 'followed', 'until', '
  * the subject ("it", "its") is not enough: it carries the thing over, not the figure.
  */
 const BACK_REFERENCES = ['that', 'this', 'those', 'these', 'then', 'such'];
+/**
+ * Words that make a result one part of the change before it ("with the sharpest jump of 40 ppm",
+ * "including a rise of", "the first 1,500 years"): a part is no restatement of the whole.
+ */
+const PART = ['with', 'including', 'includes', 'included', 'among', 'within', 'of which', 'largest', 'biggest', 'sharpest', 'steepest', 'fastest', 'greatest', 'smallest', 'first', 'final', 'single', 'individual', 'each', 'every', 'part', 'portion', 'share', 'half'];
 /** Units of time a change may recur in ("2 ppm a year"). */
 const TIME_UNITS = ['year', 'decade', 'century', 'millennium', 'month', 'day', 'week', 'yr', 'annum'];
 /** Words after a change that tie it to a recurring time or a start of its own ("2 ppm a year", "140 ppm since 1750"). */
@@ -85,6 +90,7 @@ export const WORDS = {
   timeUnits: formsOf(TIME_UNITS),
   ownPeriod: new Set(OWN_PERIOD),
   negations: new Set(NEGATIONS),
+  part: PART,
   baseAfter: new Set(BASE_AFTER),
   sequence: new Set(SEQUENCE),
   backReferences: BACK_REFERENCES,
