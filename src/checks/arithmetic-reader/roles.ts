@@ -67,7 +67,8 @@ function changeBefore(before: Word[]): number | undefined {
   const verb = WORDS.changeVerbs.get(word.text);
   if (verb !== undefined && last !== 'of') return verb;
   const particle = WORDS.particles.get(word.text);
-  if (particle !== undefined && word === before.at(-1)) return particle;
+  // "up 124 ppm", but not "has taken up a quarter": a particle of a phrasal verb is no change.
+  if (particle !== undefined && word === before.at(-1) && !WORDS.phrasalHeads.has(before.at(-2)?.text ?? '')) return particle;
   // "a jump of about", "an increase of roughly".
   if (last === 'of') {
     const noun = WORDS.changeNouns.get(word.text);
@@ -117,7 +118,8 @@ export function readSentence(text: string, qs: readonly Quantity[], sentence: nu
     }
     if (RATES.includes(d)) return { ...f, role: 'rate', family: d };
     const up = changeBefore(before) ?? changeAfter(after);
-    if (d === 'percent' || (d === 'ratio' && q.value < 1)) return up === undefined ? f : { ...f, role: 'relative', sign: up };
+    // "a quarter of our emissions", "20 percent of the rise": a share of something named after it, not a change.
+    if (d === 'percent' || (d === 'ratio' && q.value < 1)) return up === undefined || after[0]?.text === 'of' ? f : { ...f, role: 'relative', sign: up };
     // "per doubling", "each doubling", "a doubling": the multiple is a measure's unit, not a claim.
     if (d === 'ratio') return WORDS.yardstick.has(before.at(-1)?.text ?? '') ? f : { ...f, role: 'multiple', sign: up ?? 0 };
     const family = LEVEL_FAMILY[d];

@@ -25,6 +25,8 @@ const COMPARATIVES: Record<string, number> = {
 };
 /** Particles before a figure that state it as a change ("up 124 ppm", "down 6 °C", "net 40 ppm"). */
 const CHANGE_PARTICLES: Record<string, number> = { up: 1, down: -1, net: 0 };
+/** Verbs whose "up" or "down" makes a phrasal verb of taking or making ("taken up", "sums up"), not a change of the figure after it. */
+const PHRASAL_HEADS = ['take', 'make', 'use', 'eat', 'build', 'pick', 'soak', 'mop', 'give', 'set', 'put', 'sum', 'end', 'show', 'turn', 'open', 'break', 'shut', 'back', 'line', 'draw', 'lock', 'tie', 'write', 'wind', 'slow', 'cut', 'tone', 'water', 'play'];
 /** Words that name what is left of a whole once a part is taken ("the remaining 50", "the rest, 40 ppm"). */
 const REMAINDER = ['remaining', 'remainder', 'rest', 'left', 'leftover', 'balance'];
 /**
@@ -83,6 +85,7 @@ export const WORDS = {
   comparatives: new Map(Object.entries(COMPARATIVES)),
   particles: new Map(Object.entries(CHANGE_PARTICLES)),
   remainder: new Set(REMAINDER),
+  phrasalHeads: formsOf(PHRASAL_HEADS),
   links: LINKS,
   later: new Set(LATER),
   added: new Set(ADDED),
