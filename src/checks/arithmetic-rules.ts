@@ -15,6 +15,8 @@ import { perLength } from './arithmetic-per-length.js';
 import { changeShares } from './arithmetic-shares.js';
 import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragraph.js';
 import { changesFromLevels, paceRatiosInParagraph, ratesInParagraph } from './arithmetic-solver.js';
+import { readArithmetic } from './arithmetic-reader/relations.js';
+import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
@@ -97,7 +99,9 @@ function sameChangeUnit(q: Quantity, a: Quantity, b: Quantity): boolean {
 function pairChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return pairs.flatMap((p) => {
     const [a, b] = ends(qs, p);
-    const stated = only(others(qs, p).filter((q) => sameChangeUnit(q, a, b) && isStatedChange(text, q)));
+    // "from 190 to 280 ppm, with the sharpest jump of 40 ppm": a part of the change is no restatement of it.
+    const part = (q: Quantity): boolean => q.start > b.end && holdsPhrase(wordsIn(text, b.end, q.start), WORDS.part);
+    const stated = only(others(qs, p).filter((q) => sameChangeUnit(q, a, b) && isStatedChange(text, q) && !part(q)));
     if (stated === undefined) return [];
     return [{ stated, computed: facing(minus(w(b), w(a)), stated.value), measures: `the change ${words(a, b)}` }];
   });
@@ -275,16 +279,21 @@ function percentOfBase(text: string, qs: Quantity[], stated: Quantity): Finding[
 /** The findings of `more` on numbers no finding of `found` has judged already. */
 const notYet = (found: Finding[], more: Finding[]): Finding[] => more.filter((f) => !found.some((g) => g.stated === f.stated));
 
+/** The broad reader's findings under one rule id (arithmetic-reader/): results read from every figure's role. */
+const read = (id: string, t: string, qs: Quantity[], earlier: readonly Previous[] = []): Finding[] => readArithmetic(t, qs, earlier).filter((f) => f.ruleId === id);
+
 /** The arithmetic rule table. */
 export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   { id: 'arith.change', summary: 'A stated change equals the difference between the stated start and end values.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)];
     const paragraph = [...found, ...notYet(found, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
-    return [...paragraph, ...notYet(paragraph, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
+    const levels = [...paragraph, ...notYet(paragraph, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
+    return [...levels, ...notYet(levels, read('arith.change', t, qs, earlier))];
   } },
-  { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev) => {
+  { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...durations(t, qs, p), ...durationsAcross(t, qs, prev)];
-    return [...found, ...notYet(found, spansAcross(t, qs, prev))].filter((f) => !isBoundOrVague(t, f.stated));
+    const across = [...found, ...notYet(found, spansAcross(t, qs, prev))];
+    return [...across, ...notYet(across, read('arith.duration', t, qs, earlier))].filter((f) => !isBoundOrVague(t, f.stated));
   } },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)];
@@ -296,7 +305,8 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     const paragraph = [...shares, ...notYet(shares, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
     const compared = [...paragraph, ...notYet(paragraph, comparisonsInParagraph(t, qs, earlier))];
     const paces = [...compared, ...notYet(compared, paceRatiosInParagraph(t, qs, earlier))];
-    return [...paces, ...notYet(paces, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
+    const levels = [...paces, ...notYet(paces, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
+    return [...levels, ...notYet(levels, read('arith.ratio', t, qs, earlier))];
   } },
 ];
 

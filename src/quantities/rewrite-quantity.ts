@@ -51,7 +51,8 @@ export function rewriteQuantity(q: Quantity, value: number, significant?: number
     if (Math.round(stated) < 1) return formatQuantity(value, q.unit, q.statedUnit);
     written = String(Math.round(stated));
   } else if (atom.scale > 1) {
-    written = scaledNumber(stated, atom.scale, /\p{L}+$/u.exec(q.text.slice(atom.start, atom.end))?.[0] ?? '', figures);
+    const atomText = q.text.slice(atom.start, atom.end);
+    written = scaledNumber(stated, atom.scale, /\p{L}+$/u.exec(atomText)?.[0] ?? '', figures, /\d[.,]\d/u.test(atomText));
   } else written = formatNumber(stated, figures, q.statedUnit !== 'BCE' || Math.abs(stated) >= 10000);
   if (q.text.slice(atom.start, atom.end).startsWith('−')) written = written.replace(/^-/, '−');
   return q.text.slice(0, atom.start) + written + q.text.slice(atom.end);
@@ -67,12 +68,13 @@ const SCALE_WORDS: [string, number][] = [
 /**
  * A number in the draft's scale word, or a smaller one when the value would fall below 1 in it:
  * 800,000 with "billion" reads "0.8 million", not "0.0008 billion"; plain digits below a thousand,
- * and for "thousand" itself ("three thousand years" → "1,700 years").
+ * and for "thousand" itself ("three thousand years" → "1,700 years"), unless the draft wrote a decimal.
  */
-function scaledNumber(stated: number, scale: number, word: string, figures: number): string {
+function scaledNumber(stated: number, scale: number, word: string, figures: number, decimals = false): string {
   // "three thousand years" corrected to 1,700 reads "1,700 years", not "1.7 thousand years": below a
-  // million, digits with separators say it plainly (common practice in copy-editing).
-  if (word === 'thousand' && Math.abs(stated) < 1e6) return formatNumber(stated, figures);
+  // million, digits with separators say it plainly (common practice in copy-editing), unless the draft
+  // itself wrote a decimal ("2.5 thousand years").
+  if (!decimals && word.toLowerCase() === 'thousand' && Math.abs(stated) < 1e6) return formatNumber(stated, figures);
   if (Math.abs(stated) >= scale || word === '') return `${formatNumber(stated / scale, figures)} ${word}`.trimEnd();
   const [smaller, size] = SCALE_WORDS.find(([, size]) => Math.abs(stated) >= size) ?? ['', 1];
   return size === 1 ? formatNumber(stated, figures) : `${formatNumber(stated / size, figures)} ${smaller}`;

@@ -11,6 +11,11 @@ describe('rewriteQuantity', () => {
     ['It spans 2.6 million years.', 2_580_000, '2.58 million years'],
     ['It spans 1.2 million years.', 800_000, '800 thousand years'],
     ['It spans 5 thousand years.', 900, '900 years'],
+    // A number of thousands reads as digits unless the draft wrote a decimal itself (common practice in editing).
+    ['The cold spell lasted two thousand years.', 1_200, '1,200 years'],
+    ['It was a four-thousand-year thaw.', 6_500, '6,500-year'],
+    ['It spans 2.5 thousand years.', 6_500, '6.5 thousand years'],
+    ['It spans nine thousand years.', 6_000, '6,000 years'],
   ])('%s with %d years → %s', (sentence, value, expected) => {
     const [q] = parseQuantities(sentence);
     expect(q).toBeDefined();

@@ -1,0 +1,213 @@
+/**
+ * Every figure of a sentence (and of the sentences before it in its paragraph) with its role: a
+ * level, a change, a relative change (a percentage or fraction of where it started), a multiple, a
+ * rate, a span of time or a date. The role comes from the figure's dimension and the word classes
+ * next to it (word-classes.ts), never from a frame of fixed words: "a jump of about 115", "up 124
+ * ppm", "+115 ppm", "190 ppm more than", "the remaining 50" are all changes because a change word,
+ * a comparative, a sign or a remainder word stands beside the figure.
+ */
+import { parseQuantities, writtenInterval as w } from '../../quantities/index.js';
+import { divide, size, type Derived } from '../arithmetic-derive.js';
+import type { Dimension, Quantity } from '../../types.js';
+import { WORDS, wordsIn, type Word } from './word-classes.js';
+
+export type Role = 'level' | 'change' | 'relative' | 'multiple' | 'rate' | 'duration' | 'date' | 'other';
+
+/** One figure as the reader sees it. */
+export interface Figure {
+  q: Quantity;
+  role: Role;
+  /** What it can be set against: levels and changes of one family share a unit ('concentration', 'temperature', 'length', 'number'...). */
+  family: string;
+  /** The direction its words give it: +1 up, -1 down, 0 none. */
+  sign: number;
+  /** 0 for the sentence checked, 1 for the one before, and so on. */
+  sentence: number;
+  /** Reading order across the sentences. */
+  order: number;
+  /** For an amount over the time it took ("100 ppm over 7,000 years"), the pace it gives and its words. */
+  pace?: { value: Derived; text: string; end: number };
+  /** True when a remainder word names it as what is left of a whole ("the remaining 50"). */
+  remainder: boolean;
+  /** The words just before it (back to the figure before or the clause's start) and just after it. */
+  before: Word[];
+  after: Word[];
+}
+
+const LEVEL_FAMILY: Partial<Record<Dimension, string>> = { concentration: 'concentration', temperature: 'temperature', 'temperature-change': 'temperature', length: 'length', count: 'count', number: 'number' };
+const RATES: Dimension[] = ['concentration-rate', 'temperature-rate', 'length-rate'];
+/** Words that may stand between a change word and its figure without changing what it is. */
+const FILLERS = new Set(['only', 'just', 'barely', 'merely', 'mere', 'a', 'an', 'the', 'by', 'of', 'some', 'another', 'good', 'full', 'whole', 'measly', 'extra']);
+
+/** The first words after the figure, up to the next figure or the end of its clause. */
+function wordsAfter(text: string, q: Quantity, next: Quantity | undefined): Word[] {
+  const stop = Math.min(next?.start ?? text.length, q.end + 40);
+  const clause = text.slice(q.end, stop).search(/[.;!?]\s|[.;!?]$/u);
+  return wordsIn(text, q.end, clause < 0 ? stop : q.end + clause).slice(0, 4);
+}
+
+/** The words before the figure, back to the figure before it or the start of its clause. */
+function wordsBefore(text: string, q: Quantity, prev: Quantity | undefined): Word[] {
+  const from = Math.max(prev?.end ?? 0, q.start - 60);
+  const head = text.slice(from, q.start);
+  const cut = Math.max(head.lastIndexOf('. '), head.lastIndexOf('; '), head.lastIndexOf('? '), head.lastIndexOf('! '));
+  return wordsIn(text, cut < 0 ? from : from + cut + 2, q.start);
+}
+
+/** The last word before the figure that is no filler ("rose by only" → rose). */
+const lastMeaningful = (before: Word[]): Word | undefined => [...before].reverse().find((w) => !FILLERS.has(w.text));
+
+/** The sign of a change word right before the figure (a verb, a particle, "a rise of"), or undefined. */
+function changeBefore(before: Word[]): number | undefined {
+  const last = before.at(-1)?.text;
+  const word = lastMeaningful(before);
+  if (word === undefined) return undefined;
+  // "up to 280" is a bound or an end, not a change.
+  if (last === 'to') return undefined;
+  const verb = WORDS.changeVerbs.get(word.text);
+  if (verb !== undefined && last !== 'of') return verb;
+  const particle = WORDS.particles.get(word.text);
+  // "up 124 ppm", but not "has taken up a quarter": a particle of a phrasal verb is no change.
+  if (particle !== undefined && word === before.at(-1) && !WORDS.phrasalHeads.has(before.at(-2)?.text ?? '')) return particle;
+  // "a jump of about", "an increase of roughly".
+  if (last === 'of') {
+    const noun = WORDS.changeNouns.get(word.text);
+    if (noun !== undefined) return noun;
+  }
+  if (WORDS.remainder.has(word.text)) return 0;
+  return undefined;
+}
+
+/** The sign of a comparative or change noun right after the figure ("140 ppm more", "a 40 percent increase", "80 ppm of warming"). */
+function changeAfter(after: Word[]): number | undefined {
+  const [a, b, c] = after;
+  if (a === undefined) return undefined;
+  const comparative = WORDS.comparatives.get(a.text);
+  // "80 ppm over 7,000 years" is an amount over a time, not a comparison.
+  if (comparative !== undefined && !(a.text === 'over' || a.text === 'under') && !(a.text === 'up' && b?.text === 'to')) return comparative;
+  // "140 ppm more CO2 than", "190 ppm more carbon dioxide": a noun may stand between.
+  const noun = WORDS.changeNouns.get(a.text) ?? (a.text === 'of' ? (WORDS.changeNouns.get(b?.text ?? '') ?? WORDS.changeNouns.get(c?.text ?? '')) : undefined);
+  return noun;
+}
+
+/** True when the figure stands in a bracket of a list marker, a clock time or a heading number: no quantity of the sentence's claim. */
+function isLabel(text: string, q: Quantity): boolean {
+  return /[[:]\s*$/u.test(text.slice(Math.max(0, q.start - 2), q.start)) || /^:\d/u.test(text.slice(q.end, q.end + 2));
+}
+
+/** True when an operator of a written sum stands beside the figure ("280 − 190 = 90"): the sum is arithmetic-equations.ts's. */
+function inWrittenSum(text: string, q: Quantity): boolean {
+  const body = q.text.replace(/^[+−-]\s*/u, '');
+  const at = q.start + q.text.length - body.length;
+  return /[−+×÷=≈*/-]\s*$/u.test(text.slice(Math.max(0, at - 3), at)) && /\d\s*[−+×÷=≈*/-]\s*$/u.test(text.slice(Math.max(0, at - 12), at)) || /^\s*[−+×÷=≈*/]\s*\d/u.test(text.slice(q.end, q.end + 6)) || /[=≈]\s*$/u.test(text.slice(Math.max(0, at - 3), at));
+}
+
+/** The roles of one sentence's figures. */
+export function readSentence(text: string, qs: readonly Quantity[], sentence: number, base: number): Figure[] {
+  const figures = qs.map((q, i): Figure => {
+    const before = wordsBefore(text, q, qs[i - 1]);
+    const after = wordsAfter(text, q, qs[i + 1]);
+    const f: Figure = { q, role: 'other', family: '', sign: 0, sentence, order: base + q.start, before, after, remainder: WORDS.remainder.has(lastMeaningful(before)?.text ?? '') };
+    const d = q.dimension;
+    if (inWrittenSum(text, q)) return f;
+    if (d === 'age') return { ...f, role: 'date', family: 'age' };
+    if (d === 'duration') {
+      const lastWord = before.at(-1)?.text ?? '';
+      if (WORDS.notASpan.has(lastWord) || WORDS.notASpan.has(after[0]?.text ?? '')) return f;
+      return { ...f, role: 'duration', family: 'duration' };
+    }
+    if (RATES.includes(d)) return { ...f, role: 'rate', family: d };
+    const up = changeBefore(before) ?? changeAfter(after);
+    // "a quarter of our emissions", "20 percent of the rise": a share of something named after it, not a change.
+    if (d === 'percent' || (d === 'ratio' && q.value < 1)) return up === undefined || after[0]?.text === 'of' ? f : { ...f, role: 'relative', sign: up };
+    // "per doubling", "each doubling", "a doubling": the multiple is a measure's unit, not a claim.
+    if (d === 'ratio') return WORDS.yardstick.has(before.at(-1)?.text ?? '') ? f : { ...f, role: 'multiple', sign: up ?? 0 };
+    const family = LEVEL_FAMILY[d];
+    if (family === undefined || isLabel(text, q) || WORDS.bearings.has(after[0]?.text ?? '')) return f;
+    // "+115 ppm" is a change; "−25 °C" is a temperature below zero, a change only in other families.
+    const signed = /^\+\s*\d/u.test(q.text) ? 1 : /^[−-]\s*\d/u.test(q.text) && family !== 'temperature' ? -1 : undefined;
+    const change = signed ?? up;
+    return change === undefined ? { ...f, role: 'level', family } : { ...f, role: 'change', family, sign: change };
+  });
+  return withPaces(text, restatements(text, giveBareUnits(text, figures.flatMap((f) => (f.role === 'level' ? splitRange(f) : [f])))));
+}
+
+/**
+ * "a rise of 47 percent, or roughly 70 ppm": a figure after ", or" restates the change before it,
+ * so it is a change too, in its own unit.
+ */
+function restatements(text: string, figures: Figure[]): Figure[] {
+  return figures.map((f, i) => {
+    // A date of the change may stand between: "a rise of 47 percent since 1750, or roughly 130 ppm".
+    const prev = figures.slice(0, i).reverse().find((g) => g.role !== 'date');
+    if (f.role !== 'level' || prev === undefined || (prev.role !== 'change' && prev.role !== 'relative')) return f;
+    return /^\s*(?:(?:since|from|in|by|over)\s+[^,;.]{0,30})?,?\s*(?:or|i\.e\.,?|that is,?)\s*$/iu.test(text.slice(prev.q.end, f.q.start)) ? { ...f, role: 'change', sign: prev.sign } : f;
+  });
+}
+
+const PACE_OF: Record<string, Dimension> = { concentration: 'concentration-rate', temperature: 'temperature-rate', length: 'length-rate' };
+
+/**
+ * "100 ppm over 7,000 years", "140 ppm in about 200 years": an amount followed at once by the time
+ * it took also gives a pace, read as one more figure (a rate) where the time stands.
+ */
+function withPaces(text: string, figures: Figure[]): Figure[] {
+  const paces = figures.flatMap((g, i): Figure[] => {
+    const d = figures[i + 1];
+    const family = PACE_OF[g.family];
+    if (d?.role !== 'duration' || family === undefined || (g.role !== 'change' && g.role !== 'level')) return [];
+    if (!/^\s+(?:over|in|across|within)\s+(?:(?:the|those|these|some)\s+)?$/iu.test(text.slice(g.q.end, d.q.start))) return [];
+    const value = divide(size(w(g.q)), w(d.q));
+    return value === undefined ? [] : [{ ...g, role: 'rate', family, order: d.order, pace: { value, text: `${g.q.text} over ${d.q.text}`, end: d.q.end } }];
+  });
+  return [...figures, ...paces].sort((a, b) => a.order - b.order);
+}
+
+/**
+ * "280 to 424", "about 190 to 280 ppm": a level written as a range from one end to the other is a
+ * pair of levels, read in the order written. A range after "between" or with a dash is a spread of
+ * readings and stays one figure.
+ */
+function splitRange(f: Figure): Figure[] {
+  const m = /^(.*?\d)(\s+to\s+|\s*→\s*)(.*\d.*)$/u.exec(f.q.text);
+  if (m === null || /between/iu.test(f.q.text)) return [f];
+  const [, first = '', joint = '', second = ''] = m;
+  const a = parseQuantities(first)[0];
+  const b = parseQuantities(second)[0];
+  if (a === undefined || b === undefined || a.text !== first.trim() || b.end > second.length) return [f];
+  const at = (q: Quantity, offset: number): Quantity => ({ ...q, start: f.q.start + offset + q.start, end: f.q.start + offset + q.end });
+  const qa = at(a, 0);
+  const qb = at(b, first.length + joint.length);
+  return [{ ...f, q: qa, order: f.order - f.q.start + qa.start }, { ...f, q: qb, order: f.order - f.q.start + qb.start }];
+}
+
+/** Units written as the canonical unit, so that a bare figure beside them means the same amount ("190 ... 280 ppm"). */
+const asWritten = (q: Quantity): boolean => q.statedUnit !== '' && q.unit === q.statedUnit.replace(/^degC$/u, 'K');
+
+/**
+ * A bare figure takes the family of the sentence's figures with a unit when there is exactly one
+ * such family written in its canonical unit ("from 190 at the bottom to about 265 ppm"). A
+ * four-figure whole number from 1000 to 2100 written without a unit is a year, not a level.
+ */
+function giveBareUnits(text: string, figures: Figure[]): Figure[] {
+  const rates = new Set(figures.filter((f) => f.role === 'rate' && /\/yr$/u.test(f.q.unit) && f.q.statedUnit === f.q.unit).map((f) => f.family));
+  const families = new Set(figures.filter((f) => (f.role === 'level' || f.role === 'change') && f.family !== 'number' && f.family !== 'count' && asWritten(f.q)).map((f) => f.family));
+  return figures.map((f) => {
+    if (f.family !== 'number') return f;
+    if (/^\d{4}$/u.test(f.q.text.trim()) && f.q.value >= 1000 && f.q.value <= 2100) return { ...f, role: 'other', family: '' };
+    // "~0.012 a year" beside "~2.4 ppm a year": a bare figure per year takes the one per-year rate written.
+    const [per, unit] = f.after.map((w) => w.text);
+    if (rates.size === 1 && ['a', 'per', 'each', 'every'].includes(per ?? '') && (unit === 'year' || unit === 'yr')) return { ...f, role: 'rate', family: [...rates][0] as string };
+    return families.size === 1 ? { ...f, family: [...families][0] as string } : f;
+  });
+}
+
+/** The figures of the sentence checked and of up to `back` sentences before it, oldest first. */
+export function readParagraph(text: string, qs: readonly Quantity[], earlier: readonly { text: string; quantities: Quantity[] }[], back: number): { figures: Figure[]; texts: string[] } {
+  // The figures before run back without a break: a sentence with none ends them.
+  const gap = earlier.slice(0, back).findIndex((p) => p.quantities.length === 0);
+  const before = earlier.slice(0, gap < 0 ? back : gap);
+  const texts = [text, ...before.map((p) => p.text)];
+  const figures = [...before.map((p, i) => readSentence(p.text, p.quantities, i + 1, -(i + 1) * 1e6)).reverse().flat(), ...readSentence(text, qs, 0, 0)];
+  return { figures, texts };
+}
