@@ -23,6 +23,7 @@ import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import type { Quantity } from '../types.js';
 import { applyRule, hedgeRule, intervalRule } from '../quantities/interval-rules.js';
 import { writtenInterval } from '../quantities/written-interval.js';
+import { PhraseTrie } from '../prose/phrase-trie.js';
 
 /** The pack terms a ceiling and a floor stand for. */
 export const BOUND_TERMS = { ceiling: 'highest', floor: 'lowest' } as const;
@@ -51,18 +52,30 @@ export function clauseStarts(sentence: string): number[] {
 }
 
 interface CompiledBounds {
-  plain: { kind: BoundKind; regex: RegExp }[];
-  negated: { kind: BoundKind; regex: RegExp }[];
+  plain: { kind: BoundKind; words: PhraseTrie }[];
+  negated: { kind: BoundKind; words: PhraseTrie }[];
 }
 
 const compiledBounds = new WeakMap<LoadedPacks, CompiledBounds>();
 
-function phrasesRegex(phrases: readonly string[]): RegExp | undefined {
-  const forms = new Set<string>();
-  for (const phrase of phrases) for (const words of variantsOf(phraseWords(phrase))) forms.add(words.map((w) => w.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&')).join('[\\s-]+'));
+/**
+ * The written forms of `phrases` as a trie searched in code (prose/phrase-trie.ts), with exactly
+ * the matches of `/(?<![\p{L}\p{N}])(?:form|form...)(?![\p{L}\p{N}])/giu`, each form its words
+ * joined by `[\s-]+`, the longer forms first. Those four expressions (hundreds of forms each, under
+ * `iu`) cost V8 some 250 ms of a 2 KB `check` to compile and run; the walk needs no compilation.
+ */
+export function phrasesTrie(phrases: readonly string[]): PhraseTrie | undefined {
+  // The form as the expression wrote it (its length orders the alternation), and as the trie takes it.
+  const forms = new Map<string, string>();
+  for (const phrase of phrases) {
+    for (const words of variantsOf(phraseWords(phrase))) {
+      const source = words.map((w) => w.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&')).join('[\\s-]+');
+      if (!forms.has(source)) forms.set(source, words.join(' '));
+    }
+  }
   if (forms.size === 0) return undefined;
-  const sorted = [...forms].sort((a, b) => b.length - a.length);
-  return new RegExp(`(?<![\\p{L}\\p{N}])(?:${sorted.join('|')})(?![\\p{L}\\p{N}])`, 'giu');
+  const sorted = [...forms].sort((a, b) => b[0].length - a[0].length).map(([, form]) => form);
+  return new PhraseTrie(sorted, { hyphens: true });
 }
 
 function boundsOf(packs: LoadedPacks): CompiledBounds {
@@ -70,8 +83,8 @@ function boundsOf(packs: LoadedPacks): CompiledBounds {
   if (found !== undefined) return found;
   const bounds = packs.lexicon['bounds'] ?? {};
   const entry = (kind: BoundKind, key: string) => {
-    const regex = phrasesRegex(bounds[key] ?? []);
-    return regex === undefined || packs.term(BOUND_TERMS[kind]) === undefined ? [] : [{ kind, regex }];
+    const words = phrasesTrie(bounds[key] ?? []);
+    return words === undefined || packs.term(BOUND_TERMS[kind]) === undefined ? [] : [{ kind, words }];
   };
   found = {
     plain: [...entry('ceiling', 'ceiling'), ...entry('floor', 'floor')],
@@ -106,17 +119,17 @@ export function boundReadings(sentence: string, quantities: readonly Quantity[],
     const from = Math.max(previous, ...ends.filter((e) => e <= q.start));
     const window = sentence.slice(from, number);
     let best: BoundReading | undefined;
-    const consider = (kind: BoundKind, regex: RegExp, needsNegation: boolean): void => {
-      for (const m of window.matchAll(regex)) {
-        const start = from + m.index;
-        const end = start + m[0].length;
+    const consider = (kind: BoundKind, words: PhraseTrie, needsNegation: boolean): void => {
+      for (const [at, to] of words.occurrences(window)) {
+        const start = from + at;
+        const end = from + to;
         if (!FILLER.test(sentence.slice(end, number)) || inName(start, end)) continue;
         if (needsNegation && !NEGATION.test(sentence.slice(from, start))) continue;
         if (best === undefined || end > best.span[1]) best = { kind, span: [start, end] };
       }
     };
-    for (const { kind, regex } of plain) consider(kind, regex, false);
-    for (const { kind, regex } of negated) consider(kind, regex, true);
+    for (const { kind, words } of plain) consider(kind, words, false);
+    for (const { kind, words } of negated) consider(kind, words, true);
     return best;
   });
 }
