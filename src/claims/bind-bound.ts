@@ -19,11 +19,11 @@
  */
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { TermHits } from './bind-view.js';
-import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import type { Quantity } from '../types.js';
 import { applyRule, hedgeRule, intervalRule } from '../quantities/interval-rules.js';
 import { writtenInterval } from '../quantities/written-interval.js';
-import { PhraseTrie } from '../prose/phrase-trie.js';
+import type { PhraseTrie } from '../prose/phrase-trie.js';
+import { phrasesTrie } from './forms-trie.js';
 
 /** The pack terms a ceiling and a floor stand for. */
 export const BOUND_TERMS = { ceiling: 'highest', floor: 'lowest' } as const;
@@ -57,26 +57,6 @@ interface CompiledBounds {
 }
 
 const compiledBounds = new WeakMap<LoadedPacks, CompiledBounds>();
-
-/**
- * The written forms of `phrases` as a trie searched in code (prose/phrase-trie.ts), with exactly
- * the matches of `/(?<![\p{L}\p{N}])(?:form|form...)(?![\p{L}\p{N}])/giu`, each form its words
- * joined by `[\s-]+`, the longer forms first. Those four expressions (hundreds of forms each, under
- * `iu`) cost V8 some 250 ms of a 2 KB `check` to compile and run; the walk needs no compilation.
- */
-export function phrasesTrie(phrases: readonly string[]): PhraseTrie | undefined {
-  // The form as the expression wrote it (its length orders the alternation), and as the trie takes it.
-  const forms = new Map<string, string>();
-  for (const phrase of phrases) {
-    for (const words of variantsOf(phraseWords(phrase))) {
-      const source = words.map((w) => w.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&')).join('[\\s-]+');
-      if (!forms.has(source)) forms.set(source, words.join(' '));
-    }
-  }
-  if (forms.size === 0) return undefined;
-  const sorted = [...forms].sort((a, b) => b[0].length - a[0].length).map(([, form]) => form);
-  return new PhraseTrie(sorted, { hyphens: true });
-}
 
 function boundsOf(packs: LoadedPacks): CompiledBounds {
   let found = compiledBounds.get(packs);

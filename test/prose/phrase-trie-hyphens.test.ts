@@ -1,12 +1,13 @@
-// The bound words (claims/bind-bound.ts: "peaked at", "never rose above", "as low as") are searched by
-// walking their trie (src/prose/phrase-trie.ts, `hyphens`) instead of four large expressions; the
+// The bound words (claims/bind-bound.ts: "peaked at", "never rose above", "as low as") and the state
+// words (claims/bind-events.ts: "at their greatest extent") are searched by walking their trie
+// (src/claims/forms-trie.ts, src/prose/phrase-trie.ts `hyphens`) instead of large expressions; the
 // walk must find exactly what `text.matchAll` of those expressions found (ECMAScript RegExp
 // semantics under the `giu` flags: simple case folding, `\p{L}`/`\p{N}` look-arounds, a `[\s-]+` run
 // between words, the first alternative that matches winning; ECMA-262 §22.2). Differential test:
 // the expression is the reference.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { phrasesTrie } from '../../src/claims/bind-bound.js';
+import { phrasesTrie } from '../../src/claims/forms-trie.js';
 import { phraseWords, variantsOf } from '../../src/propositions/lexicon.js';
 import type { PhraseTrie } from '../../src/prose/phrase-trie.js';
 import { loadPacks } from '../../src/rulepack/index.js';
@@ -49,6 +50,10 @@ function differential(phrases: readonly string[], runs: number): void {
 describe('PhraseTrie with hyphens: the bound words are found as their expression found them', () => {
   it.each(Object.keys(packs.lexicon['bounds'] ?? {}))("on the built-in pack's %s words", (key) => {
     differential(packs.lexicon['bounds']?.[key] ?? [], 600);
+  });
+
+  it.each(Object.keys(packs.lexicon['states'] ?? {}))("on the built-in pack's state words %s", (key) => {
+    differential(packs.lexicon['states']?.[key] ?? [], 400);
   });
 
   it('on a small list where one phrase is a prefix of another', () => {
