@@ -19,10 +19,11 @@
  */
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { TermHits } from './bind-view.js';
-import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import type { Quantity } from '../types.js';
 import { applyRule, hedgeRule, intervalRule } from '../quantities/interval-rules.js';
 import { writtenInterval } from '../quantities/written-interval.js';
+import type { PhraseTrie } from '../prose/phrase-trie.js';
+import { phrasesTrie } from './forms-trie.js';
 
 /** The pack terms a ceiling and a floor stand for. */
 export const BOUND_TERMS = { ceiling: 'highest', floor: 'lowest' } as const;
@@ -51,27 +52,19 @@ export function clauseStarts(sentence: string): number[] {
 }
 
 interface CompiledBounds {
-  plain: { kind: BoundKind; regex: RegExp }[];
-  negated: { kind: BoundKind; regex: RegExp }[];
+  plain: { kind: BoundKind; words: PhraseTrie }[];
+  negated: { kind: BoundKind; words: PhraseTrie }[];
 }
 
 const compiledBounds = new WeakMap<LoadedPacks, CompiledBounds>();
-
-function phrasesRegex(phrases: readonly string[]): RegExp | undefined {
-  const forms = new Set<string>();
-  for (const phrase of phrases) for (const words of variantsOf(phraseWords(phrase))) forms.add(words.map((w) => w.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&')).join('[\\s-]+'));
-  if (forms.size === 0) return undefined;
-  const sorted = [...forms].sort((a, b) => b.length - a.length);
-  return new RegExp(`(?<![\\p{L}\\p{N}])(?:${sorted.join('|')})(?![\\p{L}\\p{N}])`, 'giu');
-}
 
 function boundsOf(packs: LoadedPacks): CompiledBounds {
   let found = compiledBounds.get(packs);
   if (found !== undefined) return found;
   const bounds = packs.lexicon['bounds'] ?? {};
   const entry = (kind: BoundKind, key: string) => {
-    const regex = phrasesRegex(bounds[key] ?? []);
-    return regex === undefined || packs.term(BOUND_TERMS[kind]) === undefined ? [] : [{ kind, regex }];
+    const words = phrasesTrie(bounds[key] ?? []);
+    return words === undefined || packs.term(BOUND_TERMS[kind]) === undefined ? [] : [{ kind, words }];
   };
   found = {
     plain: [...entry('ceiling', 'ceiling'), ...entry('floor', 'floor')],
@@ -106,17 +99,17 @@ export function boundReadings(sentence: string, quantities: readonly Quantity[],
     const from = Math.max(previous, ...ends.filter((e) => e <= q.start));
     const window = sentence.slice(from, number);
     let best: BoundReading | undefined;
-    const consider = (kind: BoundKind, regex: RegExp, needsNegation: boolean): void => {
-      for (const m of window.matchAll(regex)) {
-        const start = from + m.index;
-        const end = start + m[0].length;
+    const consider = (kind: BoundKind, words: PhraseTrie, needsNegation: boolean): void => {
+      for (const [at, to] of words.occurrences(window)) {
+        const start = from + at;
+        const end = from + to;
         if (!FILLER.test(sentence.slice(end, number)) || inName(start, end)) continue;
         if (needsNegation && !NEGATION.test(sentence.slice(from, start))) continue;
         if (best === undefined || end > best.span[1]) best = { kind, span: [start, end] };
       }
     };
-    for (const { kind, regex } of plain) consider(kind, regex, false);
-    for (const { kind, regex } of negated) consider(kind, regex, true);
+    for (const { kind, words } of plain) consider(kind, words, false);
+    for (const { kind, words } of negated) consider(kind, words, true);
     return best;
   });
 }

@@ -8,9 +8,10 @@
  *   "The ice sheets of the north reached their greatest size some 45,000 years ago"
  *        ^^^^^^^^^^ ─────────────────────── ^^^^^^^^^^^^^ → lgm (with ice-sheets: the ice-sheet maximum)
  */
-import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import type { LoadedPacks } from '../rulepack/types.js';
+import type { PhraseTrie } from '../prose/phrase-trie.js';
 import type { TermHits } from './bind-view.js';
+import { phrasesTrie } from './forms-trie.js';
 
 /** What may stand between the thing and its state: a few words, no clause boundary. */
 const BETWEEN = /^[^.;:!?,()–—]*$/u;
@@ -20,7 +21,7 @@ const MAX_WORDS = 7;
 interface StateRule {
   thing: string;
   event: string;
-  regex: RegExp;
+  words: PhraseTrie;
 }
 
 const compiledStates = new WeakMap<LoadedPacks, StateRule[]>();
@@ -32,11 +33,9 @@ function statesOf(packs: LoadedPacks): StateRule[] {
   for (const [key, phrases] of Object.entries(packs.lexicon['states'] ?? {})) {
     const [thing, event] = key.split(':');
     if (thing === undefined || event === undefined || packs.term(thing) === undefined || packs.term(event) === undefined) continue;
-    const forms = new Set<string>();
-    for (const phrase of phrases) for (const words of variantsOf(phraseWords(phrase))) forms.add(words.map((w) => w.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&')).join('[\\s-]+'));
-    if (forms.size === 0) continue;
-    const sorted = [...forms].sort((a, b) => b.length - a.length);
-    rules.push({ thing, event, regex: new RegExp(`(?<![\\p{L}\\p{N}])(?:${sorted.join('|')})(?![\\p{L}\\p{N}])`, 'giu') });
+    const words = phrasesTrie(phrases);
+    if (words === undefined) continue;
+    rules.push({ thing, event, words });
   }
   compiledStates.set(packs, rules);
   return rules;
@@ -46,18 +45,18 @@ function statesOf(packs: LoadedPacks): StateRule[] {
 export function withStateEvents(sentence: string, hits: TermHits, packs: LoadedPacks): TermHits {
   const rules = statesOf(packs);
   let out: TermHits | undefined;
-  for (const { thing, event, regex } of rules) {
+  for (const { thing, event, words } of rules) {
     const things = hits.get(thing);
     if (things === undefined) continue;
     for (const [start, end] of things) {
       const rest = sentence.slice(end);
-      for (const m of rest.matchAll(regex)) {
-        const between = rest.slice(0, m.index);
-        if (!BETWEEN.test(between) || between.trim().split(/\s+/u).filter(Boolean).length > MAX_WORDS) break;
-        out ??= new Map(hits);
-        out.set(event, [...(out.get(event) ?? []), [start, end + m.index + m[0].length] as [number, number]].sort((a, b) => a[0] - b[0]));
-        break;
-      }
+      // The first occurrence only, as before: a later one is too far or across a clause boundary.
+      const first = words.occurrences(rest)[0];
+      if (first === undefined) continue;
+      const between = rest.slice(0, first[0]);
+      if (!BETWEEN.test(between) || between.trim().split(/\s+/u).filter(Boolean).length > MAX_WORDS) continue;
+      out ??= new Map(hits);
+      out.set(event, [...(out.get(event) ?? []), [start, end + first[1]] as [number, number]].sort((a, b) => a[0] - b[0]));
     }
   }
   return out ?? hits;

@@ -110,9 +110,16 @@ export class PhraseTrie {
   private readonly equal = new Map<number, readonly number[]>();
   private readonly starts = new Map<number, boolean>();
   private readonly asciiStart = new Uint8Array(128);
+  /** Whether a hyphen, too, belongs to the run that a phrase's white space matches. */
+  private readonly hyphens: boolean;
 
-  /** `phrases` in order of preference (the first that matches at a place wins, as in an alternation); none may be empty. */
-  constructor(phrases: readonly string[]) {
+  /**
+   * `phrases` in order of preference (the first that matches at a place wins, as in an alternation); none may be empty.
+   * With `hyphens`, a phrase's white space matches a run of white space and hyphens (`[\s-]+`), so no
+   * phrase may have a hyphen or white space just after its white space.
+   */
+  constructor(phrases: readonly string[], options: { hyphens?: boolean } = {}) {
+    this.hyphens = options.hyphens === true;
     const units = new Set<number>();
     phrases.forEach((phrase, index) => {
       let node = this.root;
@@ -137,6 +144,10 @@ export class PhraseTrie {
     });
     this.units = [...units];
     for (let c = 0; c < 128; c += 1) this.asciiStart[c] = this.canStart(c) ? 1 : 0;
+  }
+
+  private isJoiner(c: number): boolean {
+    return isSpaceCode(c) || (this.hyphens && c === 0x2d);
   }
 
   /** The units of this trie that text code point `c` equals under the `iu` flags. */
@@ -169,9 +180,9 @@ export class PhraseTrie {
     }
     if (at >= text.length) return best;
     const c = codeAt(text, at);
-    if (node.space !== undefined && isSpaceCode(c)) {
+    if (node.space !== undefined && this.isJoiner(c)) {
       let after = at + 1;
-      while (after < text.length && isSpaceCode(text.charCodeAt(after))) after += 1;
+      while (after < text.length && this.isJoiner(text.charCodeAt(after))) after += 1;
       best = this.walk(text, node.space, after, any, best);
       if (any && best !== undefined) return best;
     }
@@ -241,6 +252,34 @@ export class PhraseTrie {
         }
       }
       s += size;
+    }
+    return found;
+  }
+
+  /**
+   * Every occurrence as [start, end], as `text.matchAll` of
+   * `/(?<![\p{L}\p{N}])(?:…)(?![\p{L}\p{N}])/giu` finds them, the phrases in list order: the
+   * character before a phrase is only looked at, so the next search starts at the end of a match.
+   */
+  occurrences(text: string): [number, number][] {
+    const found: [number, number][] = [];
+    const n = text.length;
+    for (let s = 0; s < n; ) {
+      const unit = text.charCodeAt(s);
+      if (unit < 128 && this.asciiStart[unit] === 0) {
+        s += 1;
+        continue;
+      }
+      const c = codeAt(text, s);
+      if ((c < 128 || this.canStart(c)) && !isWordCode(codeBefore(text, s))) {
+        const best = this.walk(text, this.root, s, false, undefined);
+        if (best !== undefined) {
+          found.push([s, best.end]);
+          s = best.end;
+          continue;
+        }
+      }
+      s += c > 0xffff ? 2 : 1;
     }
     return found;
   }
