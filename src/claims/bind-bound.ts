@@ -10,7 +10,8 @@
  *
  * The words are the pack's lexicon class `bounds` (every inflection derived): `ceiling` and `floor`
  * state a bound by themselves ("peaked at", "as low as"); `ceiling-verb` and `floor-verb` only after
- * a negation ("never exceeded", "did not fall below"). Between the words and the number only a few
+ * a negation ("never exceeded", "did not fall below", "no reading above"), and a word of `degree` may
+ * stand inside such a verb's phrase ("never went much past", "did not dip far below"). Between the words and the number only a few
  * filler words may stand ("of about", "was roughly", "at"; not "to": in "from 172 ppm at its
  * lowest to 300 ppm" the bound is the first number's), and none of them may be a word of another
  * term's name ("the Last Glacial Maximum was 190 ppm"). A bound speaks of the number it
@@ -41,8 +42,8 @@ export interface BoundReading {
 const LEVELS = new Set<Quantity['dimension']>(['concentration', 'temperature', 'temperature-change', 'length', 'concentration-rate', 'temperature-rate', 'length-rate', 'number']);
 /** What may stand between the bound words and the number: "of about", "was roughly", "at", "near". */
 const FILLER = /^(?:[\s,]*(?:about|around|roughly|some|approximately|approx\.|nearly|near|close\s+to|just|only|barely|of|at|on|was|were|is|are|be|been|being|stood|sat|reached|hit|level|mark|value|a|an|the|its|their|~|∼|≈|c\.|ca\.))*[\s]*$/iu;
-/** A negation shortly before a `-verb` word: "never got above", "did not rise above", "at no point went above". */
-const NEGATION = /(?:^|[^\p{L}])(?:never|not|no|nothing|none|without|n't|n’t)(?:\s+[\p{L}'’-]+){0,2}\s*$/iu;
+/** A negation shortly before a `-verb` word: "never got above", "did not rise above", "no CO2 reading above". */
+const NEGATION = /(?:^|[^\p{L}])(?:never|not|no|nothing|none|without|n't|n’t)(?:\s+[\p{L}\p{N}'’-]+){0,2}\s*$/iu;
 /** Where a clause ends: a bound's words and its number stand in one clause. */
 const CLAUSE_END = /[;:()–—]|,\s*(?:and|but|while|whereas|although|though|where|which|when)\b/giu;
 
@@ -63,7 +64,8 @@ function boundsOf(packs: LoadedPacks): CompiledBounds {
   if (found !== undefined) return found;
   const bounds = packs.lexicon['bounds'] ?? {};
   const entry = (kind: BoundKind, key: string) => {
-    const words = phrasesTrie(bounds[key] ?? []);
+    // A negated verb and its particle may hold a word of degree: "never got much above".
+    const words = phrasesTrie(bounds[key] ?? [], key.endsWith('-verb') ? (bounds['degree'] ?? []) : []);
     return words === undefined || packs.term(BOUND_TERMS[kind]) === undefined ? [] : [{ kind, words }];
   };
   found = {

@@ -21,7 +21,8 @@ export type TermHits = Map<string, [number, number][]>;
 
 /** Characters added to a distance for each clause boundary between a term and the quantity. */
 export const CLAUSE_PENALTY = 1000;
-const CLAUSE_BREAK = /[;:,()–—]|\b(?:and|but|while|whereas|although|though|versus|vs\.?|compared with)\b/giu;
+/** A comma between digits ("800,000") groups a number's digits and ends no clause. */
+const CLAUSE_BREAK = /[;:()–—]|,(?!\d)|\b(?:and|but|while|whereas|although|though|versus|vs\.?|compared with)\b/giu;
 const RESTATEMENT = /^\s*(?:[([]|,?\s*(?:or|that is|i\.e\.),?)\s*$/iu;
 /** What may stand before a time phrase that opens a sentence: "Over the last", "For", "During the past". */
 const OPENING_TIME = /^\s*(?:(?:over|for|during|in|across|through|throughout|since|until|within)\s+)?(?:the\s+)?(?:(?:last|past|first|next)\s+)?$/iu;
@@ -72,7 +73,7 @@ function ownerGroups(sentence: string, quantities: Quantity[], lists: number[][]
   const owns = (i: number): boolean => {
     const q = quantities[i] as Quantity;
     if (q.dimension === 'number' || q.statedUnit === 'CE') return false;
-    return !opensAsTimeFrame(sentence, quantities, i);
+    return !opensAsTimeFrame(sentence, quantities, i) && !spanOfScope(sentence, q);
   };
   const groups: number[][] = [];
   quantities.forEach((q, i) => {
@@ -88,6 +89,19 @@ function ownerGroups(sentence: string, quantities: Quantity[], lists: number[][]
     else groups.push([i]);
   });
   return groups;
+}
+
+/** A preposition and determiners before an attributive span: "anywhere in the", "across the whole", "from its". */
+const SCOPE_BEFORE = /(?:^|[^\p{L}])(?:in|across|through|throughout|over|within|during|along)\s+(?:(?:the|this|that|these|those|its|their|our|a|an|whole|entire|full|complete|long|full-length)\s+)*$/iu;
+
+/**
+ * Whether `q` is a span told as an adjective inside a prepositional phrase, "anywhere in the
+ * 800,000-year ice record", "across the whole 420,000-year archive" (not "40,000 years of the 800,000-year record", a part of a whole): it sets the scope of what the
+ * sentence says, as an opening time frame does, and claims none of the sentence's words.
+ */
+export function spanOfScope(sentence: string, q: Quantity): boolean {
+  if (q.dimension !== 'duration' || !/-\s*(?:years?|yrs?|millennia|millennium|centur(?:y|ies)|kyr|ka)$/iu.test(q.text)) return false;
+  return SCOPE_BEFORE.test(sentence.slice(Math.max(0, q.start - 40), q.start).replace(/(?:about|roughly|some|around|~)\s*$/iu, ''));
 }
 
 /** Whether quantity `i` is a time phrase that opens the sentence: "Over the last 800,000 years, ...". */

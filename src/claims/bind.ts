@@ -26,6 +26,8 @@ import { addEarlierTime, framesYield } from './bind-time.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
+import { addSpanEdges } from './bind-edges.js';
+import { withoutOtherSide } from './bind-turn.js';
 import { vetoView } from './bind-veto.js';
 import { clauseBreaks, termViews, type TermHits } from './bind-view.js';
 
@@ -229,6 +231,10 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   const lists = parallelLists(sentence, quantities, pairs);
   const hits = withoutOthers(sentence, findTerms(sentence, packs));
   const views = termViews(sentence, quantities, hits, pairs, lists);
+  // "lasted from about 12,900 to 11,700 years ago": the head of a span of dates is a start, its tail an end.
+  addSpanEdges(sentence, quantities, pairs, views, packs);
+  // "..., while the global mean for 2024 was about 424 ppm": words before a turn to a new subject are the other side's.
+  withoutOtherSide(sentence, quantities, views);
   // "at the warm peaks it topped out near 350 ppm": the unit names the gas.
   quantities.forEach((q, i) => {
     for (const term of packs.terms) {

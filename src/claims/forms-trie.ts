@@ -12,13 +12,19 @@ import { PhraseTrie } from '../prose/phrase-trie.js';
  * words' two; hundreds of forms each, under `iu`) cost V8 some 250 ms of a 2 KB `check` to compile
  * and run; the walk needs no compilation.
  */
-export function phrasesTrie(phrases: readonly string[]): PhraseTrie | undefined {
+export function phrasesTrie(phrases: readonly string[], degree: readonly string[] = []): PhraseTrie | undefined {
   // The form as the expression wrote it (its length orders the alternation), and as the trie takes it.
   const forms = new Map<string, string>();
+  const add = (words: string[]) => {
+    const source = words.map((w) => w.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&')).join('[\\s-]+');
+    if (!forms.has(source)) forms.set(source, words.join(' '));
+  };
+  // `degree` words may stand between two words of a phrase ("never went much past", "did not rise far above").
+  const degrees = degree.map((d) => phraseWords(d));
   for (const phrase of phrases) {
     for (const words of variantsOf(phraseWords(phrase))) {
-      const source = words.map((w) => w.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&')).join('[\\s-]+');
-      if (!forms.has(source)) forms.set(source, words.join(' '));
+      add(words);
+      for (let k = 1; k < words.length; k += 1) for (const d of degrees) add([...words.slice(0, k), ...d, ...words.slice(k)]);
     }
   }
   if (forms.size === 0) return undefined;

@@ -41,6 +41,8 @@ export interface StanceContext {
   next?: ReadSentence;
   /** The paragraph's first sentence, read, when it is not this one (a block quote's label). */
   first?: ReadSentence;
+  /** The sentence just before in the paragraph: a label standing as a sentence of its own ("Myth."). */
+  previous?: ReadSentence;
 }
 
 /** Words that join a question to the statement before it ("..., so how can you trust it?"). */
@@ -62,8 +64,10 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
   if (context.marked === true) return make('marked');
   // A block quote that opens with a byline ("BigSkyBarb · 5h") is a reply in a thread, in its writer's voice.
   if (context.blockKind === 'blockquote' && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
-  if (FACT_LABEL.test(s.text)) return make('asserted');
-  if (LABEL.test(s.text) || isMythHeading(context.heading) || (context.blockKind === 'heading' && s.of('stance', 'myth').length > 0)) return make('myth');
+  // "**Myth.** CO2 lags, so ...": a label that ends with a full stop is a sentence of its own, and labels the one after it.
+  const label = bareLabel(context.previous);
+  if (FACT_LABEL.test(s.text) || label === 'fact') return make('asserted');
+  if (LABEL.test(s.text) || label === 'myth' || isMythHeading(context.heading) || (context.blockKind === 'heading' && s.of('stance', 'myth').length > 0)) return make('myth');
   const quotedWords = s.words.filter((w) => w.quoted).length;
   if (s.words.length > 0 && quotedWords / s.words.length >= 0.6) return make(insiderSpeaks(s) ? 'asserted' : 'quoted');
   if (s.question) return questionStance(s, context, make);
@@ -72,6 +76,15 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
   if (s.of('stance', 'superseded').length > 0 || isFormerOwnView(s)) return make('superseded');
   if (isHypothetical(s)) return make('hypothetical');
   return make('asserted');
+}
+
+/** Whether `s` is a label and nothing more ("Myth.", "Fact.", "The claim."): which one. */
+function bareLabel(s: ReadSentence | undefined): 'myth' | 'fact' | undefined {
+  if (s === undefined || s.words.length === 0 || s.words.length > 3) return undefined;
+  const text = `${s.text.trimEnd()} `;
+  if (FACT_LABEL.test(text)) return 'fact';
+  if (LABEL.test(text)) return 'myth';
+  return undefined;
 }
 
 function questionStance(s: ReadSentence, context: StanceContext, make: (k: StanceKind, flips?: boolean) => SentenceStance): SentenceStance {

@@ -53,7 +53,8 @@ export function paragraphReader(paragraph: readonly string[], packs: LoadedPacks
     if (s === undefined) return undefined;
     const next = sentenceAt(i + 1);
     const first = i > 0 ? sentenceAt(0) : undefined;
-    const stance = stanceOf(s, { ...context, ...(next === undefined ? {} : { next }), ...(first === undefined ? {} : { first }) });
+    const previous = i > 0 ? sentenceAt(i - 1) : undefined;
+    const stance = stanceOf(s, { ...context, ...(next === undefined ? {} : { next }), ...(first === undefined ? {} : { first }), ...(previous === undefined ? {} : { previous }) });
     // The two sentences before the previous one, nearest first: the scene a paragraph has set.
     const earlier = [sentenceAt(i - 2), sentenceAt(i - 3)].filter((e): e is ReadSentence => e !== undefined);
     // The block before sets the scene only for the first sentences, all of which `earlier` sees.
