@@ -47,6 +47,17 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-n-2': { recall: 0.75, falseFlags: 0.1 },
   'tuning-n-3': { recall: 0.64, falseFlags: 0.05 },
   'tuning-n-4': { recall: 0.6, falseFlags: 0.05 },
+  // tuning-o-1..2 were written fresh at the start of December 2026's eighth round by two new writers
+  // and measured, totals only, to judge each branch before it was merged (30/38 and 23/37 caught at
+  // the start, 30/38 with 7/64 false flags and 25/37 with 5/66 at the end). tuning-p-1..4 were the
+  // blind hold-out holdout-i, spent that round (read on its first and last code: 104/123 and 26/46
+  // caught at the end).
+  'tuning-o-1': { recall: 0.74, falseFlags: 0.13 },
+  'tuning-o-2': { recall: 0.62, falseFlags: 0.1 },
+  'tuning-p-1': { recall: 0.8, falseFlags: 0.05 },
+  'tuning-p-2': { recall: 0.73, falseFlags: 0.06 },
+  'tuning-p-3': { recall: 0.85, falseFlags: 0.05 },
+  'tuning-p-4': { recall: 0.5, falseFlags: 0.06 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -77,12 +88,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (85.1% measured over 30 sets)', () => {
+  it('catches at least 84% of the seeded errors over all the sets to tune on (86.7% measured over 36 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
-    expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
+    expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.84);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (91.5% measured over 30 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.4% measured over 36 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
