@@ -10,25 +10,7 @@
  * doi:10.1038/nature06949.
  */
 import { describe, expect, it } from 'vitest';
-import { bindQuantities, findTerms } from '../../src/claims/bind.js';
-import { boundReadings } from '../../src/claims/bind-bound.js';
-import { checkReferences } from '../../src/checks/reference.js';
-import { parseQuantities } from '../../src/quantities/index.js';
-import { loadPacks } from '../../src/rulepack/index.js';
-
-const packs = await loadPacks([]);
-
-/** The bound, value and verdict of the quantity written `text`. */
-function judge(sentence: string, text: string) {
-  const quantities = parseQuantities(sentence);
-  const at = sentence.indexOf(text);
-  const index = quantities.findIndex((q) => q.start <= at + text.length - 1 && q.end > at);
-  const { bindings } = bindQuantities(sentence, quantities, packs);
-  const mine = bindings.filter((b) => b.quantityIndex === index);
-  const { verdicts } = checkReferences(sentence, quantities, mine, packs);
-  const bound = boundReadings(sentence, quantities, packs, findTerms(sentence, packs))[index]?.kind ?? '-';
-  return { bound, value: mine[0]?.referenceId ?? '-', verdict: verdicts[0] ?? '-' };
-}
+import { boundAt } from './judge-at.js';
 
 const HIGHEST = 'co2-highest-preindustrial-800kyr';
 const LOWEST = 'co2-lowest-800kyr';
@@ -43,7 +25,7 @@ describe('a word of degree inside a negated verb of passing keeps the ceiling', 
     ['Through every warm interval of the ice record, carbon dioxide never climbed much above 240 ppm.', '240 ppm', 'conflicts'],
     ['Natural CO2 in the old air never went significantly past 250 ppm.', '250 ppm', 'conflicts'],
   ])('%s', (sentence, text, verdict) => {
-    expect(judge(sentence, text)).toEqual({ bound: 'ceiling', value: HIGHEST, verdict });
+    expect(boundAt(sentence, text)).toEqual({ bound: 'ceiling', value: HIGHEST, verdict });
   });
 });
 
@@ -56,7 +38,7 @@ describe('a bare preposition after a negation states a ceiling or a floor', () =
     ['In the glacial ice, CO2 did not dip far below 240 ppm.', '240 ppm', 'floor', LOWEST, 'conflicts'],
     ['Even in the coldest glacials, carbon dioxide did not sink much below about 172 ppm.', 'about 172 ppm', 'floor', LOWEST, 'agrees'],
   ])('%s', (sentence, text, bound, value, verdict) => {
-    expect(judge(sentence, text)).toEqual({ bound, value, verdict });
+    expect(boundAt(sentence, text)).toEqual({ bound, value, verdict });
   });
 });
 
@@ -65,6 +47,6 @@ describe('without a negation the preposition is no bound (common practice)', () 
     ['Carbon dioxide in the air is now well above 400 ppm.', '400 ppm'],
     ['By 2024 CO2 stood above 420 ppm at most stations.', '420 ppm'],
   ])('%s', (sentence, text) => {
-    expect(judge(sentence, text).bound).toBe('-');
+    expect(boundAt(sentence, text).bound).toBe('-');
   });
 });

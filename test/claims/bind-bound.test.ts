@@ -9,25 +9,7 @@
  * Nature 453, 379-382, doi:10.1038/nature06949.
  */
 import { describe, expect, it } from 'vitest';
-import { bindQuantities, findTerms } from '../../src/claims/bind.js';
-import { boundReadings } from '../../src/claims/bind-bound.js';
-import { checkReferences } from '../../src/checks/reference.js';
-import { parseQuantities } from '../../src/quantities/index.js';
-import { loadPacks } from '../../src/rulepack/index.js';
-
-const packs = await loadPacks([]);
-
-/** The value the quantity written `text` binds, its verdict, and the bound it is read as. */
-function judge(sentence: string, text: string) {
-  const quantities = parseQuantities(sentence);
-  const at = sentence.indexOf(text);
-  const index = quantities.findIndex((q) => q.start <= at + text.length - 1 && q.end > at);
-  const { bindings } = bindQuantities(sentence, quantities, packs);
-  const mine = bindings.filter((b) => b.quantityIndex === index);
-  const { verdicts } = checkReferences(sentence, quantities, mine, packs);
-  const bound = boundReadings(sentence, quantities, packs, findTerms(sentence, packs))[index]?.kind ?? '-';
-  return { bound, value: mine[0]?.referenceId ?? '-', verdict: verdicts[0] ?? '-' };
-}
+import { boundAt } from './judge-at.js';
 
 const HIGHEST = 'co2-highest-preindustrial-800kyr';
 const LOWEST = 'co2-lowest-800kyr';
@@ -49,7 +31,7 @@ describe('a ceiling binds the highest natural CO2 level and is read as the numbe
     ['In the ice-core record, carbon dioxide had a natural upper limit of roughly 290 ppm.', 'roughly 290 ppm', 'agrees'],
     ['Pre-industrial CO2 topped out at about 300 ppm in the warmest interglacials.', 'about 300 ppm', 'agrees'],
   ])('%s', (sentence, text, verdict) => {
-    expect(judge(sentence, text)).toEqual({ bound: 'ceiling', value: HIGHEST, verdict });
+    expect(boundAt(sentence, text)).toEqual({ bound: 'ceiling', value: HIGHEST, verdict });
   });
 });
 
@@ -60,16 +42,16 @@ describe('a floor binds the lowest CO2 level', () => {
     ['Carbon dioxide bottomed out at about 175 ppm some 670,000 years ago.', 'about 175 ppm', 'agrees'],
     ['CO2 in the ice sank as low as 172 ppm.', '172 ppm', 'agrees'],
   ])('%s', (sentence, text, verdict) => {
-    expect(judge(sentence, text)).toEqual({ bound: 'floor', value: LOWEST, verdict });
+    expect(boundAt(sentence, text)).toEqual({ bound: 'floor', value: LOWEST, verdict });
   });
 });
 
 describe('numbers that are no bound stay as they were', () => {
   it('a bound words the first number of a pair, not the second (common practice)', () => {
     const sentence = 'CO2 never went higher than about 300 ppm, and in the coldest spells it sank to about 185 ppm.';
-    expect(judge(sentence, 'about 300 ppm')).toEqual({ bound: 'ceiling', value: HIGHEST, verdict: 'agrees' });
-    expect(judge(sentence, 'about 185 ppm').bound).toBe('-');
-    expect(judge(sentence, 'about 185 ppm').value).not.toBe(HIGHEST);
+    expect(boundAt(sentence, 'about 300 ppm')).toEqual({ bound: 'ceiling', value: HIGHEST, verdict: 'agrees' });
+    expect(boundAt(sentence, 'about 185 ppm').bound).toBe('-');
+    expect(boundAt(sentence, 'about 185 ppm').value).not.toBe(HIGHEST);
   });
 
   it.each([
@@ -82,19 +64,19 @@ describe('numbers that are no bound stay as they were', () => {
     // An age or a span has no extreme to bind (common practice).
     ['The ice sheets never grew larger than they were about 21,000 years ago.', 'about 21,000 years ago'],
   ])('%s', (sentence, text) => {
-    expect(judge(sentence, text).bound).toBe('-');
+    expect(boundAt(sentence, text).bound).toBe('-');
   });
 
   it('a seasonal peak is no ceiling of the record: Mauna Loa May 2020 monthly mean 417.1 ppm (NOAA GML co2_mm_mlo.txt)', () => {
-    expect(judge('At Mauna Loa, CO2 peaked at 417.1 ppm in May 2020.', '417.1 ppm')).toEqual({ bound: '-', value: 'co2-mlo-may-2020', verdict: 'agrees' });
+    expect(boundAt('At Mauna Loa, CO2 peaked at 417.1 ppm in May 2020.', '417.1 ppm')).toEqual({ bound: '-', value: 'co2-mlo-may-2020', verdict: 'agrees' });
   });
 
   it('the Last Glacial Maximum level still binds the LGM value and agrees', () => {
-    expect(judge('Carbon dioxide at the Last Glacial Maximum was about 190 ppm.', 'about 190 ppm')).toEqual({ bound: '-', value: 'co2-lgm', verdict: 'agrees' });
+    expect(boundAt('Carbon dioxide at the Last Glacial Maximum was about 190 ppm.', 'about 190 ppm')).toEqual({ bound: '-', value: 'co2-lgm', verdict: 'agrees' });
   });
 
   it('a ceiling in one clause does not reach a present-day figure stated before it (common practice)', () => {
     const sentence = 'Present-day air holds far more CO2 than any ice-core sample, where natural CO2 never went above about 300 ppm.';
-    expect(judge(sentence, 'about 300 ppm')).toEqual({ bound: 'ceiling', value: HIGHEST, verdict: 'agrees' });
+    expect(boundAt(sentence, 'about 300 ppm')).toEqual({ bound: 'ceiling', value: HIGHEST, verdict: 'agrees' });
   });
 });

@@ -11,23 +11,7 @@
  * (Clark, P. U. et al. 2012, PNAS 109, E1134; Walker et al. 2009).
  */
 import { describe, expect, it } from 'vitest';
-import { bindQuantities } from '../../src/claims/bind.js';
-import { checkReferences } from '../../src/checks/reference.js';
-import { parseQuantities } from '../../src/quantities/index.js';
-import { loadPacks } from '../../src/rulepack/index.js';
-
-const packs = await loadPacks([]);
-
-/** The value the quantity written `text` binds, and its verdict; `before` is the sentence before. */
-function judge(sentence: string, text: string, before?: string) {
-  const quantities = parseQuantities(sentence);
-  const at = sentence.indexOf(text);
-  const index = quantities.findIndex((q) => q.start <= at + text.length - 1 && q.end > at);
-  const { bindings } = bindQuantities(sentence, quantities, packs, before);
-  const mine = bindings.filter((b) => b.quantityIndex === index);
-  const { verdicts } = checkReferences(sentence, quantities, mine, packs);
-  return { value: mine[0]?.referenceId ?? '-', verdict: verdicts[0] ?? '-' };
-}
+import { judgeAt } from './judge-at.js';
 
 describe('the head of a span of dates is a start, its tail an end', () => {
   it.each([
@@ -41,7 +25,7 @@ describe('the head of a span of dates is a start, its tail an end', () => {
     // Clark et al. 2012.
     ['The last deglaciation stretched from about 18,000 to about 8,000 years ago.', 'about 8,000 years ago', 'termination-1-end', 'conflicts'],
   ])('%s (%s)', (sentence, text, value, verdict) => {
-    expect(judge(sentence, text)).toEqual({ value, verdict });
+    expect(judgeAt(sentence, text)).toEqual({ value, verdict });
   });
 });
 
@@ -53,7 +37,7 @@ describe('an end named in the question before does not reach the head of the spa
     // Clark et al. 2012: 18,000 is when the deglaciation began.
     ['How long did the last ice age take to end?', 'The deglaciation took about 6,500 years, from about 18,000 to about 11,500 years ago.', 'about 18,000'],
   ])('%s / %s', (before, sentence, text) => {
-    const { value } = judge(sentence, text, before);
+    const { value } = judgeAt(sentence, text, before);
     expect(value.endsWith('-end')).toBe(false);
   });
 });
@@ -66,6 +50,6 @@ describe('"starting", "beginning" and "ending" name the edge of the date they in
     ['The Younger Dryas, ending about 11,700 years ago, was the last cold snap of the glacial.', 'about 11,700 years ago', 'younger-dryas-end', 'agrees'],
     ['The Younger Dryas, ending about 10,000 years ago, was the last cold snap of the glacial.', 'about 10,000 years ago', 'younger-dryas-end', 'conflicts'],
   ])('%s', (sentence, text, value, verdict) => {
-    expect(judge(sentence, text)).toEqual({ value, verdict });
+    expect(judgeAt(sentence, text)).toEqual({ value, verdict });
   });
 });

@@ -16,23 +16,7 @@
  * years (Clark, P. U. et al. 2012, PNAS 109, E1134).
  */
 import { describe, expect, it } from 'vitest';
-import { bindQuantities } from '../../src/claims/bind.js';
-import { checkReferences } from '../../src/checks/reference.js';
-import { parseQuantities } from '../../src/quantities/index.js';
-import { loadPacks } from '../../src/rulepack/index.js';
-
-const packs = await loadPacks([]);
-
-/** The value the quantity written `text` binds and its verdict; `before` is the sentence before. */
-function judge(sentence: string, text: string, before?: string) {
-  const quantities = parseQuantities(sentence);
-  const at = sentence.indexOf(text);
-  const index = quantities.findIndex((q) => q.start <= at + text.length - 1 && q.end > at);
-  const { bindings } = bindQuantities(sentence, quantities, packs, before);
-  const mine = bindings.filter((b) => b.quantityIndex === index);
-  const { verdicts } = checkReferences(sentence, quantities, mine, packs);
-  return { value: mine[0]?.referenceId ?? '-', verdict: verdicts[0] ?? '-' };
-}
+import { judgeAt } from './judge-at.js';
 
 describe("a number's digit-group comma ends no clause", () => {
   it.each([
@@ -42,7 +26,7 @@ describe("a number's digit-group comma ends no clause", () => {
     // The error that must still be caught.
     ["The highest CO2 anywhere in the 800,000-year ice record was roughly 360 ppm, so today's air is far outside it.", 'roughly 360 ppm', 'co2-highest-preindustrial-800kyr', 'conflicts'],
   ])('%s', (sentence, text, value, verdict) => {
-    expect(judge(sentence, text)).toEqual({ value, verdict });
+    expect(judgeAt(sentence, text)).toEqual({ value, verdict });
   });
 });
 
@@ -52,7 +36,7 @@ describe('a span inside a prepositional phrase sets the scope and takes no words
     ['The whole deglaciation took about 7,000 years.', "Nothing in the 800,000-year record comes close to the level of today's air.", '800,000-year'],
     ['Across the last deglaciation the thaw took some seven thousand years.', 'No level within the entire 800,000-year archive matches what we breathe now.', '800,000-year'],
   ])('%s / %s', (before, sentence, text) => {
-    expect(judge(sentence, text, before).value).not.toBe('termination-1-duration');
+    expect(judgeAt(sentence, text, before).value).not.toBe('termination-1-duration');
   });
 
   it.each([
@@ -61,6 +45,6 @@ describe('a span inside a prepositional phrase sets the scope and takes no words
     ['Scientists found, in the 420,000-year EPICA Dome C record, eight glacial cycles.', '420,000-year', 'edc-record-span', 'conflicts'],
     ['The lowest value across the 800,000-year Dome C archive is about 172 ppm.', '800,000-year', 'edc-record-span', 'agrees'],
   ])('%s', (sentence, text, value, verdict) => {
-    expect(judge(sentence, text)).toEqual({ value, verdict });
+    expect(judgeAt(sentence, text)).toEqual({ value, verdict });
   });
 });

@@ -10,22 +10,7 @@
  * 2025 release) and Mauna Loa's May 2024 monthly mean about 426.9 ppm (NOAA GML / Scripps).
  */
 import { describe, expect, it } from 'vitest';
-import { bindQuantities } from '../../src/claims/bind.js';
-import { checkReferences } from '../../src/checks/reference.js';
-import { parseQuantities } from '../../src/quantities/index.js';
-import { loadPacks } from '../../src/rulepack/index.js';
-
-const packs = await loadPacks([]);
-
-function judge(sentence: string, text: string) {
-  const quantities = parseQuantities(sentence);
-  const at = sentence.indexOf(text);
-  const index = quantities.findIndex((q) => q.start <= at + text.length - 1 && q.end > at);
-  const { bindings } = bindQuantities(sentence, quantities, packs);
-  const mine = bindings.filter((b) => b.quantityIndex === index);
-  const { verdicts } = checkReferences(sentence, quantities, mine, packs);
-  return { value: mine[0]?.referenceId ?? '-', verdict: verdicts[0] ?? '-' };
-}
+import { judgeAt } from './judge-at.js';
 
 describe('the clause after a turn to a new subject is that subject\'s', () => {
   it.each([
@@ -38,11 +23,11 @@ describe('the clause after a turn to a new subject is that subject\'s', () => {
     ['The Dome C core holds about 800,000 years of climate, whereas the Vostok record holds about 250,000 years.', 'about 250,000 years', 'vostok-record-span', 'conflicts'],
     ['At Mauna Loa the May 2025 monthly mean topped 430 ppm, while the global mean for 2024 was close to 395 ppm.', 'close to 395 ppm', 'co2-global-2024', 'conflicts'],
   ])('%s', (sentence, text, value, verdict) => {
-    expect(judge(sentence, text)).toEqual({ value, verdict });
+    expect(judgeAt(sentence, text)).toEqual({ value, verdict });
   });
 
   it('a turn with no subject of its own keeps the subject before (common practice)', () => {
     // Jouzel et al. 2007: "it" is still Dome C.
-    expect(judge('The Dome C record is long, while it reaches back about 800,000 years.', 'about 800,000 years')).toEqual({ value: 'edc-record-span', verdict: 'agrees' });
+    expect(judgeAt('The Dome C record is long, while it reaches back about 800,000 years.', 'about 800,000 years')).toEqual({ value: 'edc-record-span', verdict: 'agrees' });
   });
 });
