@@ -1,6 +1,7 @@
 import { topicalThroughout } from './prose/topical-throughout.js';
 import { bindQuantities } from './claims/bind.js';
 import { restoreElidedUnits } from './claims/elided-units.js';
+import { restoreTermUnits } from './claims/term-units.js';
 import { checkArithmetic } from './checks/arithmetic.js';
 import { checkRanks } from './checks/rank/index.js';
 import { checkReasoning, judgeByStance, paragraphReader, type ParagraphContext } from './checks/reasoning/index.js';
@@ -384,8 +385,9 @@ function examineSentence(
     const drafts = reading === undefined ? slips : judgeByStance(slips, reading.stance);
     return { quantities, bindings: [], verdicts: [], drafts };
   }
-  // "four cycles and EPICA Dome C eight": a number whose unit a neighbour states takes that unit.
-  const quantities = restoreElidedUnits(text, parseQuantities(text));
+  // "four cycles and EPICA Dome C eight": a number whose unit a neighbour states takes that unit;
+  // "CO2 was around 350": a bare number after a term the pack gives one unit takes that unit.
+  const quantities = restoreTermUnits(text, restoreElidedUnits(text, parseQuantities(text)), packs);
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
   const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
   const reference = checkReferences(text, quantities, bindings, packs);
