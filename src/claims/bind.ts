@@ -191,6 +191,18 @@ function withoutBeforeAntecedent(sentence: string, vetoes: TermHits, q: Quantity
   return kept;
 }
 
+/** The words inside `span` belong to quantity `j` alone: every other quantity's view loses them. */
+function ownWords(views: TermHits[], j: number, [s, e]: [number, number]): void {
+  views.forEach((view, i) => {
+    if (i === j) return;
+    for (const [id, spans] of view) {
+      const left = spans.filter(([start, end]) => end <= s || start >= e);
+      if (left.length === 0) view.delete(id);
+      else view.set(id, left);
+    }
+  });
+}
+
 /**
  * `vetoes` less the words of the quantity's own unit: "300 CO2 molecules in every million molecules
  * of air" names the air as its unit, not as a share of the atmosphere told in percent.
@@ -247,15 +259,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   const bounds = boundReadings(sentence, quantities, packs, hits);
   bounds.forEach((b, j) => {
     if (b === undefined) return;
-    const [s, e] = b.span;
-    views.forEach((view, i) => {
-      if (i === j) return;
-      for (const [id, spans] of view) {
-        const left = spans.filter(([start, end]) => end <= s || start >= e);
-        if (left.length === 0) view.delete(id);
-        else view.set(id, left);
-      }
-    });
+    ownWords(views, j, b.span);
     const own = views[j] as TermHits;
     own.set(BOUND_TERMS[b.kind], [...(own.get(BOUND_TERMS[b.kind]) ?? []), b.span]);
   });
@@ -267,14 +271,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     const [s0, e0] = [q.end + label.index, q.end + label[0].length];
     // "about 800,000 years (four glacial cycles)": a parenthesis holding a number of its own is no label.
     if (quantities.some((o) => o.start >= s0 && o.end <= e0)) return;
-    views.forEach((view, i) => {
-      if (i === j) return;
-      for (const [id, spans] of view) {
-        const left = spans.filter(([start, end]) => end <= s0 || start >= e0);
-        if (left.length === 0) view.delete(id);
-        else view.set(id, left);
-      }
-    });
+    ownWords(views, j, [s0, e0]);
   });
   // "… began to fade 18,000 years ago and was over by 3,000 years ago": a predicate sharing the subject speaks for itself.
   for (const c of sharedSubjects(sentence, quantities)) {

@@ -59,7 +59,7 @@ export function restoreElidedUnits(sentence: string, quantities: Quantity[]): Qu
  * which dates a statement and takes no unit from a neighbour (common practice: years are written
  * without a separator, amounts of four digits and more with one).
  */
-const YEAR_LIKE = /^(?:1[5-9]\d\d|20\d\d|2100)$/u;
+export const YEAR_LIKE = /^(?:1[5-9]\d\d|20\d\d|2100)$/u;
 
 function bareNumbers(sentence: string, quantities: Quantity[]): Bare[] {
   const found: Bare[] = [];

@@ -8,9 +8,8 @@ import { parseQuantities } from '../quantities/index.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Quantity } from '../types.js';
 import { findTerms } from './bind.js';
+import { YEAR_LIKE } from './elided-units.js';
 
-/** Four digits 1500 to 2100 with no separator: a year (as elided-units.ts reads it). */
-const YEAR_LIKE = /^(?:1[5-9]\d\d|20\d\d|2100)$/u;
 /** What may follow a bare level: the end of its clause, or a word that opens another part of it. */
 const CLOSE_AFTER = /^\s*(?:$|[.,;:!?)—–-]|(?:and|or|but|in|at|by|back|then|before|after|during|when|while|so|which|to|for|on|until|today|now|tops|or so|max|at most)(?![\p{L}]))/iu;
 

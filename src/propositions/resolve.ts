@@ -40,14 +40,7 @@ export function subjectOf(s: ReadSentence, i: number): Thing | undefined {
   const before = s.things.filter((t) => t.last < i && s.words[t.first]?.segment === at.segment);
   // "In the Dome C record CO2 rose...": a thing inside an opening prepositional phrase is no subject
   // when a plain one follows it.
-  return before.find((t) => !inPrepositionalPhrase(s, t)) ?? before[0];
-}
-
-/** The thing is the object of a preposition ("in the Dome C record", "after the warming"). */
-function inPrepositionalPhrase(s: ReadSentence, t: Thing): boolean {
-  const lead = s.words[t.first - 1]?.text ?? '';
-  const lead2 = s.words[t.first - 2]?.text ?? '';
-  return PREPOSITIONS.has(lead) || (['the', 'a', 'an', 'this', 'that', 'its', 'their'].includes(lead) && PREPOSITIONS.has(lead2));
+  return before.find((t) => !inPhrase(s, t)) ?? before[0];
 }
 
 /** The nearest thing after word `i` in the same clause, within `window` words. */
@@ -132,5 +125,5 @@ export function appositionSubject(s: ReadSentence, i: number): Thing | undefined
 export function inPhrase(s: ReadSentence, t: Thing): boolean {
   const lead = s.words[t.first - 1]?.text ?? '';
   const lead2 = s.words[t.first - 2]?.text ?? '';
-  return PREPOSITIONS.has(lead) || (['the', 'a', 'an', 'every', 'each', 'this', 'that'].includes(lead) && PREPOSITIONS.has(lead2));
+  return PREPOSITIONS.has(lead) || (['the', 'a', 'an', 'every', 'each', 'this', 'that', 'its', 'their'].includes(lead) && PREPOSITIONS.has(lead2));
 }
