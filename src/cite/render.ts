@@ -24,7 +24,7 @@ function citationJs(): typeof CitationJs {
   require('@citation-js/plugin-csl');
   require('@citation-js/plugin-bibtex');
   const csl = core.plugins.config.get('@csl');
-  for (const [name, xml] of Object.values(STYLES)) csl.styles.add(name, xml);
+  for (const [name, xml] of Object.values(STYLES)) csl.templates.add(name, xml);
   loaded = core;
   return core;
 }

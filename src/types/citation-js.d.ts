@@ -7,7 +7,7 @@ declare module '@citation-js/core' {
     format(format: 'data', options?: { format: 'object' }): unknown[];
   }
   export const plugins: {
-    config: { get(name: '@csl'): { styles: { add(name: string, style: string): void; has(name: string): boolean } } };
+    config: { get(name: '@csl'): { templates: { add(name: string, style: string): void; has(name: string): boolean } } };
   };
 }
 declare module '@citation-js/plugin-csl';
