@@ -103,20 +103,42 @@ const HEADER_UNIT = /^(.*?)\s*\(([^()]+)\)\s*$/u;
  * The blocks of a GFM table: header cells and first-column cells as they are, and each other cell
  * read with its row header and column header. `cells[r][c]` holds the plain cell blocks already
  * read (undefined for an empty cell).
+ *
+ * A first column of whole sentences holds no row headers: it is a column of statements like any
+ * other (the "what is often said | what the record shows" table of a myth-busting page), so each
+ * of its cells is read with its column header, which gives it the stance its header states, and
+ * no other cell takes it as a label.
  */
 export function tableBlocks(cells: (ProseBlock | undefined)[][]): ProseBlock[] {
   const [header = [], ...rows] = cells;
   const blocks: ProseBlock[] = header.filter((b): b is ProseBlock => b !== undefined);
   const wide = header.length > 1;
+  const labelled = wide && !firstColumnOfSentences(rows);
   for (const row of rows) {
-    const rowHeader = wide ? row[0] : undefined;
+    const rowHeader = labelled ? row[0] : undefined;
     if (rowHeader !== undefined) blocks.push(rowHeader);
     row.forEach((cell, c) => {
-      if (cell === undefined || (wide && c === 0)) return;
+      if (cell === undefined || (labelled && c === 0)) return;
       blocks.push(readWithHeaders(cell, rowHeader, header[c]));
     });
   }
   return blocks;
+}
+
+/** A sentence ends with its full stop, question or exclamation mark, inside a closing quote or not. */
+const SENTENCE_END = /[.!?]["'\u201d\u2019)]*$/u;
+
+/** True when most filled first-column cells of the body rows are whole sentences, not labels. */
+function firstColumnOfSentences(rows: (ProseBlock | undefined)[][]): boolean {
+  let filled = 0;
+  let sentences = 0;
+  for (const row of rows) {
+    const text = row[0]?.text.trim();
+    if (text === undefined || text === '') continue;
+    filled += 1;
+    if (SENTENCE_END.test(text) && text.split(/\s+/u).length >= 4) sentences += 1;
+  }
+  return filled > 0 && sentences * 2 > filled;
 }
 
 function readWithHeaders(cell: ProseBlock, rowHeader: ProseBlock | undefined, columnHeader: ProseBlock | undefined): ProseBlock {

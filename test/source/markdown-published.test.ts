@@ -81,3 +81,38 @@ describe('published text outside paragraphs (issue 15)', () => {
     expect(result.claims.map((c) => c.text)).toContain('EPICA Dome C, Span: 420,000 years');
   });
 });
+
+// A myth-busting page's two-column table of invented demo wording: what is often said, what the
+// record shows. The left column's statements are wrong on purpose and stated as someone else's; the
+// right column is correct: Vostok spans ~420,000 years and four glacial cycles (Petit et al. 1999,
+// Nature 399, 429-436); EPICA Dome C ~800,000 years (Jouzel et al. 2007, Science 317, 793-796);
+// glacial cycles roughly every 100,000 years over the last 800,000 (Lisiecki & Raymo 2005,
+// Paleoceanography 20, PA1003).
+describe('a table whose first column holds statements, not labels', () => {
+  const TABLE = [
+    '| What the leaflet said | What the cores show |', //                                         1
+    '| --- | --- |', //                                                                             2
+    '| "Vostok holds two million years of ice." | Vostok reaches back about 420,000 years, four glacial cycles. |', // 3
+    '| "Ice ages return every 10,000 years or so." | Over the last 800,000 years they came roughly every 100,000 years. |', // 4
+    '| "Dome C covers only 100,000 years." | EPICA Dome C spans some 800,000 years. |', //     5
+  ].join('\n');
+
+  it('reads every cell with its column header and no cell with a statement as its row label', () => {
+    const texts = draftFromText('myths.md', TABLE, 'markdown').blocks.map((b) => b.text);
+    expect(texts).toContain('What the leaflet said: "Vostok holds two million years of ice."');
+    expect(texts).toContain('What the cores show: Vostok reaches back about 420,000 years, four glacial cycles.');
+    expect(texts.some((t) => t.includes('ice.", '))).toBe(false);
+  });
+
+  it('leaves the correct column unflagged and the quoted statements as notes only', async () => {
+    const result = await checkText(TABLE, { path: 'myths.md' });
+    expect(result.flags.filter((f) => f.level === 'error' || f.level === 'warning').map((f) => [f.ruleId, f.span.start.line])).toEqual([]);
+    expect(result.flags.filter((f) => f.level === 'note').length).toBeGreaterThanOrEqual(2);
+  });
+
+  it('still reads a table of labels with its row headers (common practice: a first column of names)', () => {
+    const texts = draftFromText('t.md', '| Core | Span |\n| --- | --- |\n| Vostok | 420,000 years |\n| EPICA Dome C | 800,000 years |', 'markdown').blocks.map((b) => b.text);
+    expect(texts).toContain('Vostok, Span: 420,000 years');
+    expect(texts).toContain('EPICA Dome C, Span: 800,000 years');
+  });
+});
