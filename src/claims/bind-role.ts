@@ -42,6 +42,18 @@ const PER_TIME_AFTER = /^\s*(?:of\s+[\p{L}\p{N}₂]+\s+)?(?:every|each|a|per|an)
 const DATUM_AFTER = /^\s*(?:below|beneath|under|above)\s+(?:the\s+)?(?:ice\s+|snow\s+)?(?:surface|sea\s+level)(?![\p{L}])/iu;
 /** Level words just before the quantity: "fell to", "stood at", "reached", "from". */
 const LEVEL_BEFORE = /(?:^|[^\p{L}])(?:from|to|at|between|reached|reaching|hovered around)\s*$/iu;
+/** A loose word of place on the scale between a word of staying and its number: "sat around 190", "a low near 185". */
+const NEAR = String.raw`(?:\s+(?:at|around|near|about|of|close\s+to|roughly|just\s+under|just\s+over|as\s+low\s+as|as\s+high\s+as))?`;
+/**
+ * A verb of staying at a value ("sat around 190 ppm", "remained near 280 ppm", "hovered at") or a
+ * noun of an extreme of the scale ("a glacial low near 185 ppm", "a peak of 300 ppm", "a baseline
+ * of 280 ppm") just before the quantity: a level, unless words of change follow the number ("sits
+ * 144 ppm above that level" is a difference).
+ */
+const STAY_BEFORE = new RegExp(
+  String.raw`(?:^|[^\p{L}])(?:sat|sits|sitting|stood|stands|stayed|stays|remained|remains|hovered|hovers|hovering|settled|idled|bottomed\s+out|levelled\s+off|leveled\s+off|low|lows|high|highs|peak|peaks|minimum|minima|maximum|maxima|baseline|floor|ceiling)${NEAR}\s*$`,
+  'iu',
+);
 /** A bound read as a place on the scale: "never rose above 300 ppm", "fell below 200 ppm", "climbed as high as 350 ppm". */
 const LEVEL_HEDGE = /^(?:above|below|beyond|past|under|as\s+(?:high|low)\s+as)(?![\p{L}])/iu;
 /** "over" after a change verb may be either: "rose over 80 ppm" (a change) or "never rose over 300 ppm" (a level). */
@@ -80,6 +92,7 @@ export function quantityRoles(sentence: string, quantities: Quantity[]): ReadRol
     const after = sentence.slice(q.end, q.end + 30);
     if (endpoints.has(i) || LEVEL_BEFORE.test(before) || DATUM_AFTER.test(after)) return 'level';
     if (CHANGE_AFTER.test(after) || PER_TIME_AFTER.test(after)) return 'change';
+    if (STAY_BEFORE.test(before)) return 'level';
     return 'unknown';
   });
 }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { endpointPairs, quantityRoles, roleFits, type ReadRole } from '../../src/claims/bind-role.js';
+import { checkText } from '../../src/engine.js';
 import { quantitiesIn, type Written } from './quantity-at.js';
 
 const C = 'concentration';
@@ -22,6 +23,16 @@ const ROLES: [sentence: string, written: Written[], roles: ReadRole[]][] = [
   ['The natural peaks never rose above 300 ppm.', [['above 300 ppm', C]], ['level']],
   ['CO2 stood at 280 ppm in 1750.', [['280 ppm', C], ['1750', 'age', 'CE']], ['level', 'unknown']],
   ['The Harbour Museum core holds about 280 ppm air samples.', [['about 280 ppm', C]], ['unknown']],
+  // A verb of staying at a value, or a noun of an extreme of the scale, before the number: a level
+  // (the glacial low of about 180-190 ppm is a level, Lüthi et al. 2008, Nature 453, 379-382).
+  ['In the cold phases CO2 sat around 190 ppm.', [['around 190 ppm', C]], ['level']],
+  ['Through the long glacials the gas hovered near 200 ppm.', [['200 ppm', C]], ['level']],
+  ['Carbon dioxide remained about 280 ppm for millennia.', [['about 280 ppm', C]], ['level']],
+  ['The Orra bubbles climbed out of a glacial low near 185 ppm.', [['185 ppm', C]], ['level']],
+  ['Each interglacial reached a peak of 290 ppm or so.', [['290 ppm', C]], ['level']],
+  // Words of change after the number still make it a difference: "sits 140 ppm above".
+  ['Today the level sits 140 ppm above that interglacial peak.', [['140 ppm', C]], ['change']],
+  ['The new high is 60 ppm higher than any before.', [['60 ppm', C]], ['change']],
 ];
 
 describe('quantityRoles', () => {
@@ -56,5 +67,24 @@ describe('roleFits', () => {
     ['change', 'change', true],
   ] as const)('a value accepting %s takes a number read as %s: %s', (accepted, read, fits) => {
     expect(roleFits(accepted, read)).toBe(fits);
+  });
+});
+
+describe('a level beside a change in one sentence (built-in pack)', () => {
+  // The CO2 rise across a glacial termination is 80-100 ppm (Fischer et al. 1999, Science 283,
+  // 1712-1714); its starting level is the glacial low of about 180-190 ppm (Lüthi et al. 2008,
+  // Nature 453, 379-382). A starting level is not the size of the rise.
+  it.each([
+    'Across each termination CO2 climbed out of a glacial low near 185 ppm, a rise of about 90 ppm.',
+    'In the cold phases of every cycle CO2 sat around 190 ppm, and the glacial swing was about 90 ppm.',
+    'Glacial CO2 hovered at about 185 ppm before each termination added some 90 ppm.',
+  ])('%s', async (sentence) => {
+    const result = await checkText(`The Antarctic ice cores hold the CO2 record.\n\n${sentence}`, { path: 'panel.md' });
+    expect(result.flags.map((f) => f.ruleId)).toEqual([]);
+  });
+
+  it('still flags a rise of the wrong size after the level', async () => {
+    const result = await checkText('The Antarctic ice cores hold the CO2 record.\n\nAcross each glacial cycle CO2 climbed out of a glacial low near 185 ppm, a rise of about 190 ppm.', { path: 'panel.md' });
+    expect(result.flags.map((f) => [f.ruleId, f.excerpt])).toEqual([['value.co2-glacial-interglacial-amplitude', 'about 190 ppm']]);
   });
 });
