@@ -23,8 +23,7 @@ import type { TermHits } from './bind-view.js';
 import type { Quantity } from '../types.js';
 import { applyRule, hedgeRule, intervalRule } from '../quantities/interval-rules.js';
 import { writtenInterval } from '../quantities/written-interval.js';
-import type { PhraseTrie } from '../prose/phrase-trie.js';
-import { phrasesTrie } from './forms-trie.js';
+import { type FormsTrie, phrasesTrie } from './forms-trie.js';
 
 /** The pack terms a ceiling and a floor stand for. */
 export const BOUND_TERMS = { ceiling: 'highest', floor: 'lowest' } as const;
@@ -53,8 +52,8 @@ export function clauseStarts(sentence: string): number[] {
 }
 
 interface CompiledBounds {
-  plain: { kind: BoundKind; words: PhraseTrie }[];
-  negated: { kind: BoundKind; words: PhraseTrie }[];
+  plain: { kind: BoundKind; words: FormsTrie }[];
+  negated: { kind: BoundKind; words: FormsTrie }[];
 }
 
 const compiledBounds = new WeakMap<LoadedPacks, CompiledBounds>();
@@ -101,7 +100,7 @@ export function boundReadings(sentence: string, quantities: readonly Quantity[],
     const from = Math.max(previous, ...ends.filter((e) => e <= q.start));
     const window = sentence.slice(from, number);
     let best: BoundReading | undefined;
-    const consider = (kind: BoundKind, words: PhraseTrie, needsNegation: boolean): void => {
+    const consider = (kind: BoundKind, words: FormsTrie, needsNegation: boolean): void => {
       for (const [at, to] of words.occurrences(window)) {
         const start = from + at;
         const end = from + to;

@@ -9,9 +9,8 @@
  *        ^^^^^^^^^^ ─────────────────────── ^^^^^^^^^^^^^ → lgm (with ice-sheets: the ice-sheet maximum)
  */
 import type { LoadedPacks } from '../rulepack/types.js';
-import type { PhraseTrie } from '../prose/phrase-trie.js';
 import type { TermHits } from './bind-view.js';
-import { phrasesTrie } from './forms-trie.js';
+import { type FormsTrie, phrasesTrie } from './forms-trie.js';
 
 /** What may stand between the thing and its state: a few words, no clause boundary. */
 const BETWEEN = /^[^.;:!?,()–—]*$/u;
@@ -21,7 +20,7 @@ const MAX_WORDS = 7;
 interface StateRule {
   thing: string;
   event: string;
-  words: PhraseTrie;
+  words: FormsTrie;
 }
 
 const compiledStates = new WeakMap<LoadedPacks, StateRule[]>();

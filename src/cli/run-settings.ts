@@ -32,11 +32,13 @@ export interface RunSettings {
 /** Finds and loads the settings (or `--config`), then every pack they and `--pack` name. */
 export async function loadRunSettings(cwd: string, config: string | undefined, extraPacks: string[]): Promise<RunSettings> {
   const settingsFile = config === undefined ? findSettingsFile(cwd) : resolve(cwd, config);
+  // Without a settings file the project root is the git work tree's: git runs while the packs load.
+  const gitRoot = settingsFile === undefined ? gitTopLevel(cwd) : undefined;
   const settings = settingsFile === undefined ? undefined : await loadSettings(settingsFile);
   const packFiles = [...(settings?.packs ?? []), ...extraPacks.map((p) => resolve(cwd, p))];
   const packs = await loadPacks(packFiles);
   if (settings !== undefined) checkLevelIds(settings, packs, cwd);
-  const projectRoot = settingsFile === undefined ? ((await gitTopLevel(cwd)) ?? cwd) : dirname(settingsFile);
+  const projectRoot = gitRoot === undefined ? dirname(settingsFile as string) : ((await gitRoot) ?? cwd);
   return {
     settingsFile,
     packs,

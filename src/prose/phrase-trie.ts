@@ -77,6 +77,32 @@ function sameUnit(c: number, u: number): boolean {
   return known;
 }
 
+const foldCache = new Map<number, number>();
+
+/**
+ * The lower-case ASCII letter or the digit that code point `c` equals under the `iu` flags, or -1
+ * for none: an ASCII letter's other case, and the few code points case folding sends to an ASCII
+ * letter (the Kelvin sign, the long s), asked of the same one-character expressions as the walk.
+ */
+export function asciiFoldOf(c: number): number {
+  if (c < 128) {
+    if (c >= 65 && c <= 90) return c + 32;
+    return (c >= 97 && c <= 122) || (c >= 48 && c <= 57) ? c : -1;
+  }
+  let known = foldCache.get(c);
+  if (known === undefined) {
+    known = -1;
+    for (let u = 97; u <= 122; u += 1) {
+      if (sameUnit(c, u)) {
+        known = u;
+        break;
+      }
+    }
+    foldCache.set(c, known);
+  }
+  return known;
+}
+
 function escapeUnit(unit: string): string {
   return unit.replace(/[.*+?^${}()|[\]\\/]/gu, '\\$&');
 }
