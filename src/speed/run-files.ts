@@ -53,10 +53,10 @@ export const POOL_MIN_BYTES = 1_000_000;
 
 /**
  * The young generation of each pool worker's heap, in MiB. A worker's garbage is the per-sentence
- * readings, which die before the next sentence; V8's default young generation (three semi-spaces of
- * up to 16 MiB on 64-bit) is sized for throughput and kept its full size resident in each worker.
- * With 12 MiB, 1 MB of the bench's topical prose in this thread and one worker peaked at 350 instead
- * of 394 MiB, its CPU time the same (44.4 against 46.1 s, load average 11, one run each) and its
+ * readings, which die before the next sentence; V8's default young generation (semi-spaces of up to
+ * 16 MiB each on 64-bit) is sized for throughput and kept its full size resident in each worker.
+ * With 12 MiB, 1 MB of the bench's topical prose in this thread and one worker peaked at 342 instead
+ * of 385 MiB, its CPU time the same (44.4 against 46.1 s, load average 11, one run each) and its
  * report byte-identical. The main thread's young generation is set when Node starts and cannot be
  * changed from here.
  */
