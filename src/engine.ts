@@ -177,10 +177,10 @@ export function checkFileText(raw: Pick<Draft, 'path' | 'text' | 'format'> | Dra
     // A Markdown draft is parsed only around its subjects and its sentences with two numbers
     // (speed/sparse-markdown.ts): the same claims as a parse of the whole.
     const sparse = 'blocks' in raw || format !== 'markdown' ? undefined : sparseMarkdownDraft(path, text, (t) => namesSubject(t, packs));
-    // A draft about the subject throughout is read whole: every block may take its subject from it.
-    const part = sparse?.throughout === true ? undefined : sparse;
-    draft = 'blocks' in raw ? raw : part?.draft ?? draftFromText(path, text, format === 'docx' ? 'text' : format);
-    beside = part?.subjectBeside;
+    draft = 'blocks' in raw ? raw : sparse?.draft ?? draftFromText(path, text, format === 'docx' ? 'text' : format);
+    // A draft about the subject throughout is read whole (its blocks are a whole parse's): every block
+    // may take its subject from it, as subjectNearby decides.
+    beside = sparse?.throughout === true ? undefined : sparse?.subjectBeside;
   } catch (error) {
     if (error instanceof FirnlineError) return { claims: [], flags: [], unchecked: uncheckedOf(error) };
     throw error;

@@ -50,7 +50,7 @@ const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
  * sign (which `toLowerCase` turns into "k") and the long s (turned into "s" here); so the test never
  * skips a sentence the expression would match. A phrase with no ASCII piece makes its term always run.
  */
-interface CompiledTerm {
+export interface CompiledTerm {
   words: string[];
   /** Made on first use. */
   search?: (sentence: string) => [number, number][];
@@ -92,6 +92,59 @@ const FOUND_TERMS_KEPT = 4096;
 const foundTerms = new WeakMap<LoadedPacks, Map<string, TermHits>>();
 
 function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
+  const terms = compiledTerms(packs);
+  const present = keyWordsIn(foldedLower(sentence), terms);
+  const hits: TermHits = new Map();
+  for (const [id, term] of terms) {
+    const { keyWords } = term;
+    if (keyWords !== undefined && !keyWords.some((w) => present.has(w))) continue;
+    const spans = (term.search ??= termSearch(term.words))(sentence);
+    if (spans.length === 0) continue;
+    const as = extendedTerm(id, packs);
+    hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
+  }
+  // "the ice sheets were at their greatest extent": a thing's state names an event.
+  return withStateEvents(sentence, hits, packs);
+}
+
+/** The terms' key words by their first three code units (a shorter key under itself), made once per term map. */
+const keyIndexes = new WeakMap<Map<string, CompiledTerm>, Map<number, string[]>>();
+
+/** One number for the first `n` (1 to 3) code units of `text` from `at`: the length, then each unit, 16 bits each. */
+function headKey(text: string, at: number, n: number): number {
+  let key = n - 1;
+  for (let k = 0; k < 3; k += 1) key = key * 65536 + (k < n ? text.charCodeAt(at + k) : 0);
+  return key;
+}
+
+/**
+ * The key words of `terms` that `lower` contains, found in one pass over it: at each position, the
+ * keys whose first one, two or three code units stand there are tried there. The same set as
+ * `lower.includes(key)` for every key, which took several hundred substring searches per sentence.
+ */
+export function keyWordsIn(lower: string, terms: Map<string, CompiledTerm>): Set<string> {
+  let index = keyIndexes.get(terms);
+  if (index === undefined) {
+    index = new Map();
+    for (const key of new Set([...terms.values()].flatMap((t) => t.keyWords ?? []))) {
+      const head = headKey(key, 0, Math.min(3, key.length));
+      index.set(head, [...(index.get(head) ?? []), key]);
+    }
+    keyIndexes.set(terms, index);
+  }
+  const present = new Set<string>();
+  for (let i = 0; i < lower.length; i += 1) {
+    for (let n = 1; n <= 3 && i + n <= lower.length; n += 1) {
+      const keys = index.get(headKey(lower, i, n));
+      if (keys === undefined) continue;
+      for (const key of keys) if (!present.has(key) && lower.startsWith(key, i)) present.add(key);
+    }
+  }
+  return present;
+}
+
+/** The compiled terms of `packs` (each with its key words), made once per packs. */
+export function compiledTerms(packs: LoadedPacks): Map<string, CompiledTerm> {
   let terms = compiled.get(packs);
   if (terms === undefined) {
     terms = new Map(
@@ -102,18 +155,7 @@ function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
     );
     compiled.set(packs, terms);
   }
-  const lower = foldedLower(sentence);
-  const hits: TermHits = new Map();
-  for (const [id, term] of terms) {
-    const { keyWords } = term;
-    if (keyWords !== undefined && !keyWords.some((w) => lower.includes(w))) continue;
-    const spans = (term.search ??= termSearch(term.words))(sentence);
-    if (spans.length === 0) continue;
-    const as = extendedTerm(id, packs);
-    hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
-  }
-  // "the ice sheets were at their greatest extent": a thing's state names an event.
-  return withStateEvents(sentence, hits, packs);
+  return terms;
 }
 
 function keyWordsOf(words: string[]): string[] | undefined {

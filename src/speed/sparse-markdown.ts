@@ -34,7 +34,10 @@ import type { Draft, ProseBlock } from '../types.js';
 export interface SparseDraft {
   draft: Draft;
   subjectBeside: boolean[];
-  /** The draft names its subject throughout (prose/topical-throughout.ts): every block must be read. */
+  /**
+   * The draft names its subject throughout (prose/topical-throughout.ts): every block is read, and
+   * `draft` holds a whole parse's blocks (each block may take its subject from the draft).
+   */
   throughout: boolean;
 }
 
@@ -66,8 +69,12 @@ export function sparseMarkdownDraft(path: string, text: string, namesSubject: (t
   // A chunk with markup may name a subject its raw text hides ("C**O2**"): it counts as naming one.
   const plain = chunks.map((c) => plainText(c));
   const hit = chunks.map((c, i) => !fenceOnly(c) && (plain[i] === undefined || namesSubject(plain[i])));
+  // A draft about its subject throughout is read whole (every block may take its subject from it),
+  // but still in chunks: its plain paragraphs and fenced code skip the parser as below, and the blocks
+  // are a whole parse's.
+  const throughout = topicalThroughout(hit);
   // Headings are always read: every block after one carries it.
-  const parse = chunks.map((c, i) => i === 0 || HEADING.test(c) || hit[i] === true || plain[i] === undefined || splitSentences(plain[i], 0).some((s) => TWO_NUMBERS.test(s.text)));
+  const parse = chunks.map((c, i) => throughout || i === 0 || HEADING.test(c) || hit[i] === true || plain[i] === undefined || splitSentences(plain[i], 0).some((s) => TWO_NUMBERS.test(s.text)));
   hit.forEach((h, i) => {
     if (!h) return;
     for (let j = i + 1; j < chunks.length; j += 1) {
@@ -99,7 +106,7 @@ export function sparseMarkdownDraft(path: string, text: string, namesSubject: (t
     const named = run.map((b) => namesSubject(b.text));
     return named.map((_n, i) => named[i - 1] === true || named[i + 1] === true);
   });
-  return { draft: { path, text, format: 'markdown', blocks }, subjectBeside, throughout: topicalThroughout(hit) };
+  return { draft: { path, text, format: 'markdown', blocks }, subjectBeside, throughout };
 }
 
 /**
