@@ -1,0 +1,103 @@
+/**
+ * Numbers read through sentence structure (session 9): the words that complete an air-fraction unit,
+ * verbs of composition, a share in percent written as ppm, and differences of spans of time (in the
+ * arithmetic reader, and as no span of either subject in the binder). Every sentence is our own;
+ * each wrong one has a right twin in the same wording that must stay clean.
+ */
+import { describe, expect, it } from 'vitest';
+import { checkText } from '../../src/engine.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+
+const packs = await loadPacks([]);
+
+/** The rule ids and corrections of every flag on the draft's last paragraph's lines. */
+async function flagsOf(text: string, format: 'markdown' | 'text' = 'text'): Promise<{ rule: string; correction: string }[]> {
+  const result = await checkText(text, { path: format === 'markdown' ? 'draft.md' : 'draft.txt', packs });
+  const last = text.split('\n').length;
+  return result.flags.filter((f) => f.span.start.line === last).map((f) => ({ rule: f.ruleId, correction: f.correction ?? '' }));
+}
+
+describe('an air-fraction unit and the words that complete it', () => {
+  // CO2 levels: about 278 ppm in 1750 (Gulev et al. 2021, IPCC AR6 WG1 ch. 2), 423.9 ppm as the 2024
+  // global mean (WMO Greenhouse Gas Bulletin 2025). "of the air" after ppm says what ppm already
+  // means (a part of the air by volume: common practice), so it makes the figure no percentage.
+  const WRONG: [string, string][] = [
+    ['These days carbon dioxide is roughly 520 parts per million of the air.', 'value.co2-present-day'],
+    ['Carbon dioxide today amounts to 510 ppm of the atmosphere, the monitoring network reports.', 'value.co2-present-day'],
+    // "made up" tells what the air was made of; it is no rise.
+    ['In the air of the pre-industrial world, CO2 made up about 350 ppm.', 'value.co2-preindustrial-1750'],
+    ['Before the factories, carbon dioxide took up some 340 ppm of the air.', 'value.co2-preindustrial-1750'],
+    // A level in ppb where ppm is meant: read through "makes up" (1 ppm = 1,000 ppb, NIST SP 811 for SI prefixes).
+    ['Before industry, carbon dioxide made up about 280 parts per billion.', 'unit.scale-slip'],
+  ];
+  const RIGHT = [
+    'These days carbon dioxide is roughly 424 parts per million of the air.',
+    'Carbon dioxide today amounts to 424 ppm of the atmosphere, the monitoring network reports.',
+    'In the air of the pre-industrial world, CO2 made up about 280 ppm.',
+    'Before the factories, carbon dioxide took up some 280 ppm of the air.',
+    // A rise stays a rise: "went up" is no verb of composition (NOAA GML: about 2.4 ppm a year in the 2010s).
+    'Through the 2010s CO2 went up about 2.4 ppm every year.',
+    // Methane is measured in ppb (about 700 ppb before industry, IPCC AR6 WG1 ch. 2): no slip.
+    'Before industry, methane made up about 700 parts per billion of the air.',
+  ];
+  it.each(WRONG)('flags %s', async (sentence, rule) => {
+    expect((await flagsOf(sentence)).map((f) => f.rule)).toContain(rule);
+  });
+  it.each(RIGHT)('leaves clean: %s', async (sentence) => {
+    expect(await flagsOf(sentence)).toEqual([]);
+  });
+});
+
+describe('a share in percent written as parts per million', () => {
+  // 1% = 10,000 ppm (common practice; NIST SP 811 for the prefixes): about 0.04 percent of the air is
+  // about 420 ppm of CO2 today (WMO 2025), so "0.04 ppm" is the percentage with the wrong unit.
+  const WRONG = [
+    'Carbon dioxide today makes up barely 0.04 parts per million of the air.',
+    'These days CO2 is a mere 0.042 ppm of the atmosphere.',
+    'Right now carbon dioxide forms only about 0.043 ppm of the air we breathe.',
+  ];
+  it.each(WRONG)('flags %s as a unit slip that names the percentage', async (sentence) => {
+    const flags = await flagsOf(sentence);
+    expect(flags.map((f) => f.rule)).toContain('unit.scale-slip');
+    expect(flags.find((f) => f.rule === 'unit.scale-slip')?.correction).toMatch(/^0\.04\d?%$/u);
+  });
+  it.each([
+    'Carbon dioxide today makes up barely 0.04 percent of the air.',
+    'These days CO2 is a mere 0.042 percent of the atmosphere.',
+    // A growth of under 1 ppm is a rate in ppm, not a slip (NOAA GML: about 0.7-0.9 ppm a year in the 1960s).
+    'In the early 1960s CO2 grew by about 0.8 ppm a year.',
+  ])('leaves clean: %s', async (sentence) => {
+    expect((await flagsOf(sentence)).map((f) => f.rule)).not.toContain('unit.scale-slip');
+  });
+});
+
+describe('a difference of spans of time in the arithmetic reader', () => {
+  // Record spans: EPICA Dome C about 800,000 years (Jouzel et al. 2007), Vostok about 420,000 years
+  // (Petit et al. 1999); their difference is 380,000 years and their ratio about 1.9 (common practice).
+  const WRONG: [string, string, string][] = [
+    ['Dome C spans about 800,000 years and Vostok about 420,000, so the European core adds some 280,000 years.', 'arith.change', '380,000'],
+    ['Vostok holds about 420,000 years and Dome C about 800,000, which makes Dome C roughly 480,000 years longer.', 'arith.change', '380,000'],
+    // Ages of a layer told as how old it is: 24,000 - 20,500 = 3,500 years.
+    ['The ice of that layer is 24,000 years old and the gas in it 20,500, so the gas is 5,000 years younger.', 'arith.change', '3,500'],
+    ['Dome C spans about 800,000 years and Vostok about 420,000, so the European core is about three times as long.', 'arith.ratio', '1.9'],
+  ];
+  const RIGHT = [
+    'Dome C spans about 800,000 years and Vostok about 420,000, so the European core adds some 380,000 years.',
+    'Vostok holds about 420,000 years and Dome C about 800,000, which makes Dome C roughly 380,000 years longer.',
+    'The ice of that layer is 24,000 years old and the gas in it 20,500, so the gas is 3,500 years younger.',
+    'Dome C spans about 800,000 years and Vostok about 420,000, so the European core is about twice as long.',
+    // A span with no pair of spans before it is no result of theirs (Jouzel et al. 2007).
+    'Dome C spans about 800,000 years, some 40,000 years longer than first published.',
+    // A verb after a list of periods is no change of the last one (orbital periods near 100,000,
+    // 41,000 and 23,000 years: Hays et al. 1976).
+    'The orbital rhythms of roughly 100,000, 41,000 and 23,000 years change where the sunshine falls.',
+  ];
+  it.each(WRONG)('flags %s', async (text, rule, right) => {
+    const flags = await flagsOf(text);
+    expect(flags.map((f) => f.rule)).toContain(rule);
+    expect(flags.find((f) => f.rule === rule)?.correction).toContain(right);
+  });
+  it.each(RIGHT)('leaves clean: %s', async (text) => {
+    expect(await flagsOf(text)).toEqual([]);
+  });
+});
