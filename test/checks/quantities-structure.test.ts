@@ -101,3 +101,59 @@ describe('a difference of spans of time in the arithmetic reader', () => {
     expect(await flagsOf(text)).toEqual([]);
   });
 });
+
+describe('a span named as such is no difference', () => {
+  // The Younger Dryas lasted about 1,200 years, from about 12,900 to 11,700 years ago (Rasmussen et
+  // al. 2006); "a span of" names the span itself, which the span-of-dates check reads.
+  it('flags a span of dates worked out wrong', async () => {
+    const flags = await flagsOf('The Younger Dryas ran from about 12,900 to 11,700 years ago, a span of 2,200 years.');
+    expect(flags.map((f) => f.rule)).toContain('arith.duration');
+  });
+  it('leaves a right span clean', async () => {
+    expect(await flagsOf('The Younger Dryas ran from about 12,900 to 11,700 years ago, a span of 1,200 years.')).toEqual([]);
+  });
+});
+
+describe('a temperature change named by a noun of cooling or warming', () => {
+  // A change of 1 °C is a change of 1.8 °F, with no 32 added (NIST SP 811, 2008, B.9): 22 °C of
+  // change is 39.6 °F, 10 °C is 18 °F, 6 °C is 10.8 °F. "chill of", "cool-down of" make the
+  // figure a change, and the °F figure restating it follows.
+  const WRONG = [
+    'At the Last Glacial Maximum the Greenland chill of about 22 °C equals roughly 72 °F.',
+    'At the Last Glacial Maximum, a cool-down of 6 °C works out at about 43 °F.',
+    'The glacial chill of about 10 °C at Dome C comes to roughly 50 °F.',
+  ];
+  const RIGHT = [
+    'At the Last Glacial Maximum the Greenland chill of about 22 °C equals roughly 40 °F.',
+    'At the Last Glacial Maximum, a cool-down of 6 °C works out at about 11 °F.',
+    'The glacial chill of about 10 °C at Dome C comes to roughly 18 °F.',
+  ];
+  it.each(WRONG)('flags %s', async (text) => {
+    expect((await flagsOf(text)).map((f) => f.rule)).toContain('unit.temperature-difference');
+  });
+  it.each(RIGHT)('leaves clean: %s', async (text) => {
+    expect((await flagsOf(text)).map((f) => f.rule)).not.toContain('unit.temperature-difference');
+  });
+});
+
+describe('a lag told with any form of trail, lag or follow, at the close of the last ice age', () => {
+  // The Antarctic temperature-CO2 offset at the last deglaciation: a few centuries at most (Pedro et
+  // al. 2012; Parrenin et al. 2013; Chowdhry Beeman et al. 2019). "close", "conclusion", "tail end"
+  // of a span name its end as "end of" does (common practice of English).
+  const WRONG = [
+    'At the close of the last ice age, the Antarctic cores show carbon dioxide trailing the warming by about three thousand years.',
+    'Toward the conclusion of the last ice age, Antarctic ice shows CO2 lagging temperature by some 4,000 years.',
+    'At the tail end of the last ice age, Antarctic records have CO2 following the temperature rise by roughly 2,500 years.',
+  ];
+  const RIGHT = [
+    'At the close of the last ice age, the Antarctic cores show carbon dioxide trailing the warming by about 300 years.',
+    'Toward the conclusion of the last ice age, Antarctic ice shows CO2 lagging temperature by some 400 years.',
+    'At the tail end of the last ice age, Antarctic records have CO2 following the temperature rise by roughly 200 years.',
+  ];
+  it.each(WRONG)('flags %s', async (text) => {
+    expect((await flagsOf(text)).map((f) => f.rule)).toContain('value.antarctic-co2-phasing-termination-1-consensus');
+  });
+  it.each(RIGHT)('leaves clean: %s', async (text) => {
+    expect(await flagsOf(text)).toEqual([]);
+  });
+});
