@@ -39,6 +39,8 @@ const AMBIGUOUS = 'ambiguous';
 const SEGMENT = /\b(?:the|its|their|a|an)\s+(?:very\s+)?(?:lowest|bottom|bottommost|deepest|top|topmost|upper|uppermost|lower|last|final|first)\s+(?:(?:few|some|roughly|about|around)\s+)?$/iu;
 /** A single unit, the base of a rate stated beside it ("one metre ... stores 750 years", "each metre holds"). */
 const ONE_UNIT = /^(?:one|a|an|each|every|per|a\s+single)\s+\p{L}+$/iu;
+/** One unit length named just before a figure, in its clause: "each metre there holds", "one metre near the bottom stores". */
+const PER_UNIT_BEFORE = /(?:^|[^\p{L}])(?:each|every|one|a\s+single|a)\s+(?:metre|meter|m)(?![\p{L}])[^\d,;:.!?()]{0,36}$/iu;
 const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 
 /**
@@ -333,6 +335,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (isSegment(q)) return;
     // "one metre near the bottom stores some 750 years": one unit of a rate, not a measure of anything.
     if (ONE_UNIT.test(q.text)) return;
+    // "each metre there holds about 750 years": the years of one unit length are that rate, no span of the core.
+    if (q.dimension === 'duration' && PER_UNIT_BEFORE.test(sentence.slice(Math.max(0, q.start - 60), q.start))) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const bound = bounds[i];

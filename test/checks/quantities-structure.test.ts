@@ -157,3 +157,31 @@ describe('a lag told with any form of trail, lag or follow, at the close of the 
     expect(await flagsOf(text)).toEqual([]);
   });
 });
+
+describe('years per metre with "each metre", and drawn from the sentence before', () => {
+  // The lowest 200 m of EPICA Dome C hold about 150,000 years (Lüthi et al. 2008; Jouzel et al.
+  // 2007 for the core's 3,270 m and 800,000 years): about 750 years per metre (common practice:
+  // years over metres). "each", "every" and "a single" metre name one metre as "one metre" does.
+  const WRONG = [
+    'With 150,000 years packed into the lowest 200 metres of the Dome C core, each metre there holds about 75 years.',
+    'The bottom 200 metres of the Dome C core cover some 150,000 years, so every metre covers roughly 7,500 years.',
+    'The lowest 200 metres of the Dome C core hold about 150,000 years, so a single metre stores some 75 years.',
+    'The lowest 200 metres of the Dome C core hold about 150,000 years. That works out to about 75 years per metre of ice.',
+  ];
+  const RIGHT = [
+    'With 150,000 years packed into the lowest 200 metres of the Dome C core, each metre there holds about 750 years.',
+    'The bottom 200 metres of the Dome C core cover some 150,000 years, so every metre covers roughly 750 years.',
+    'The lowest 200 metres of the Dome C core hold about 150,000 years. That works out to about 750 years per metre of ice.',
+    // Another place in the ice: near the surface a metre of firn holds a few years (common practice).
+    'The lowest 200 metres of the Dome C core hold about 150,000 years; near the surface a metre holds only about 10 years.',
+    'The lowest 200 metres of the Dome C core hold about 150,000 years, while near the top a metre holds only about 10 years.',
+  ];
+  it.each(WRONG)('flags %s', async (text) => {
+    const flags = await flagsOf(text);
+    expect(flags.map((f) => f.rule)).toContain('arith.rate');
+    expect(flags.find((f) => f.rule === 'arith.rate')?.correction).toContain('750');
+  });
+  it.each(RIGHT)('leaves clean: %s', async (text) => {
+    expect(await flagsOf(text)).toEqual([]);
+  });
+});
