@@ -185,3 +185,50 @@ describe('years per metre with "each metre", and drawn from the sentence before'
     expect(await flagsOf(text)).toEqual([]);
   });
 });
+
+describe('a sentence that opens by naming a system of units restates the figure before', () => {
+  // 1 ft = 0.3048 m (NIST SP 811, 2008): Vostok's 3,623 m (Petit et al. 1999) is about 11,900 feet;
+  // 120 m (the glacial sea-level fall, Lambeck et al. 2014) is about 394 feet.
+  const WRONG = [
+    'The Vostok core was drilled to a depth of 3,623 metres. In imperial units the core runs to about 1,200 feet.',
+    'The Vostok core was drilled to a depth of 3,623 metres. Converted to feet, the core is some 1,190 feet long.',
+    'At the Last Glacial Maximum sea level stood about 120 metres lower than today. In feet, the sea stood about 120 feet lower.',
+  ];
+  const RIGHT = [
+    'The Vostok core was drilled to a depth of 3,623 metres. In imperial units the core runs to about 11,900 feet.',
+    'The Vostok core was drilled to a depth of 3,623 metres. Converted to feet, the core is some 11,890 feet long.',
+    'At the Last Glacial Maximum sea level stood about 120 metres lower than today. In feet, the sea stood about 390 feet lower.',
+    // Another thing measured in the other system: nothing of the sentence before is restated (common practice).
+    'The Vostok core was drilled to a depth of 3,623 metres. In imperial units the ice sheet above the lake is some 12,500 feet thick.',
+  ];
+  it.each(WRONG)('flags %s', async (text) => {
+    expect((await flagsOf(text)).map((f) => f.rule)).toContain('unit.length');
+  });
+  it.each(RIGHT)('leaves clean: %s', async (text) => {
+    expect((await flagsOf(text)).map((f) => f.rule)).not.toContain('unit.length');
+  });
+});
+
+describe('a ceiling under a fronted negation with inversion', () => {
+  // The highest natural CO2 of the last 800,000 years is about 300 ppm (Lüthi et al. 2008); a
+  // negation fronted with its auxiliary inverted ("Not once ... did CO2 rise above") states the
+  // ceiling as "never rose above" does (common practice of English grammar: negative inversion).
+  const WRONG = [
+    'Not once in those eight hundred thousand years did natural CO2 rise above 250 ppm.',
+    'At no time in the last 800,000 years was natural CO2 higher than 250 ppm.',
+    'Nor did the ice-core CO2 ever climb above 250 ppm before the factories.',
+  ];
+  const RIGHT = [
+    'Not once in those eight hundred thousand years did natural CO2 rise above 300 ppm.',
+    'At no time in the last 800,000 years was natural CO2 higher than 300 ppm.',
+    // The negation speaks of the main verb, not of the level in its complement (WMO 2025: about 424 ppm in 2024).
+    'Nor do I dispute that today\'s level, well above 400 parts per million, is higher than anything in the cores.',
+    'No one doubts that CO2 rose above 400 ppm at Mauna Loa in 2015.',
+  ];
+  it.each(WRONG)('flags %s', async (text) => {
+    expect((await flagsOf(text)).map((f) => f.rule)).toContain('value.co2-highest-preindustrial-800kyr');
+  });
+  it.each(RIGHT)('leaves clean: %s', async (text) => {
+    expect(await flagsOf(text)).toEqual([]);
+  });
+});
