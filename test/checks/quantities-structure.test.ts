@@ -232,3 +232,31 @@ describe('a ceiling under a fronted negation with inversion', () => {
     expect(await flagsOf(text)).toEqual([]);
   });
 });
+
+describe('words of the pack for the globe, the seas and ice sheets at their peak', () => {
+  // Global mean cooling at the Last Glacial Maximum about 6 °C (4-7 °C; Tierney et al. 2020,
+  // Osman et al. 2021); global ice volume greatest about 26,500-19,000 years ago (Clark et al.
+  // 2009); sea level about 120-135 m lower (Lambeck et al. 2014).
+  const WRONG: [string, string][] = [
+    ['At the Last Glacial Maximum the globe was on average just 1 °C colder than before industry.', 'value.gmst-lgm-to-preindustrial-warming'],
+    ['The northern ice sheets peaked about 50,000 years ago.', 'value.lgm-ice-sheet-maximum'],
+    ['The great ice sheets topped out some 70,000 years ago.', 'value.lgm-ice-sheet-maximum'],
+    ['At the glacial maximum, oceans stood roughly 300 metres below their present level.', 'value.lgm-sea-level-lowstand'],
+    ['At the glacial maximum the seas fell by no more than 30 metres.', 'value.lgm-sea-level-lowstand'],
+  ];
+  const RIGHT = [
+    'At the Last Glacial Maximum the globe was on average about 6 °C colder than before industry.',
+    'The northern ice sheets peaked about 21,000 years ago.',
+    'The great ice sheets topped out some 22,000 years ago.',
+    'At the glacial maximum, oceans stood roughly 125 metres below their present level.',
+    'At the glacial maximum the seas fell by some 120 metres.',
+    // A gas at its peak is no ice sheet at its peak (common practice).
+    'Carbon dioxide peaked about 128,000 years ago, in the last interglacial.',
+  ];
+  it.each(WRONG)('flags %s', async (text, rule) => {
+    expect((await flagsOf(text)).map((f) => f.rule)).toContain(rule);
+  });
+  it.each(RIGHT)('leaves clean: %s', async (text) => {
+    expect(await flagsOf(text)).toEqual([]);
+  });
+});
