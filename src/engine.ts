@@ -376,9 +376,12 @@ function examineSentence(
   if (!onTopic) {
     const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs, before) : undefined;
     if (carried !== undefined) return carried;
-    if (!TWO_NUMBERS.test(text) && !hasTwoNumerals(text)) return undefined;
+    // One number reads on from the sentences before only in the unit checks: "2. Its record covers
+    // about 800 million years" after an item naming the core is a thousand-for-million slip.
+    const single = !TWO_NUMBERS.test(text) && !hasTwoNumerals(text);
+    if (single && (before.length === 0 || !DIGIT.test(text))) return undefined;
     const quantities = parseQuantities(text);
-    const slips = [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
+    const slips = single ? checkUnits(text, quantities, before) : [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
     if (slips.length === 0) return undefined;
     // A slip in a quotation or a marked passage is the quoted writer's, not the draft's.
     const reading = paragraphReader(paragraph, packs, context)(index);

@@ -36,13 +36,34 @@ const HOLDS_GAP = /^[^\d;:.!?()]{1,48}$/u;
 /** Words that draw a figure from the sentence before ("therefore", "so", "at that rate"). */
 const DRAWS_ON = new RegExp(String.raw`(?:^|[^\p{L}])(?:therefore|so|thus|hence|at${S}+that${S}+rate|which${S}+means|that${S}+means|by${S}+the${S}+same${S}+token)(?![\p{L}])`, 'iu');
 const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
+/** A stated gradient that restates the sentence before: "That works out to", "That is", "So", "which means". */
+const REFERS_BACK = new RegExp(String.raw`^[^\d]{0,24}?(?:^|[^\p{L}])(?:that|this|which|so|therefore|thus|hence|in${S}+other${S}+words)(?![\p{L}])`, 'iu');
 
 function times(a: Derived, b: Derived): Derived {
   return { value: a.value * b.value, low: a.low * b.low, high: a.high * b.high };
 }
 
+/**
+ * One metre named by a distributive word instead of a numeral: "each metre", "every metre", "a
+ * single metre" (common practice of English: each, every and a/an pick out one unit). Read as the
+ * length 1 m, so "each metre there holds about 75 years" is a gradient as "one metre holds" is.
+ */
+const ONE_METRE = new RegExp(String.raw`(?:^|[^\p{L}])((?:each|every|a${S}+single|any${S}+one|a)${S}+(?:metre|meter)(?![\p{L}]))`, 'giu');
+function withUnitMetres(text: string, qs: Quantity[]): Quantity[] {
+  const extra: Quantity[] = [];
+  for (const m of text.matchAll(ONE_METRE)) {
+    const word = m[1] as string;
+    const start = (m.index ?? 0) + m[0].length - word.length;
+    const end = start + word.length;
+    if (qs.some((q) => q.start < end && start < q.end)) continue;
+    extra.push({ text: word, start, end, value: 1, low: 1, high: 1, dimension: 'length', unit: 'm', statedUnit: 'm' });
+  }
+  return extra.length === 0 ? qs : [...qs, ...extra].sort((a, b) => a.start - b.start);
+}
+
 /** Every gradient a sentence states: "75 years per metre", or "one metre ... holds 750 years". */
-function gradients(text: string, qs: Quantity[]): Gradient[] {
+function gradients(text: string, all: Quantity[]): Gradient[] {
+  const qs = withUnitMetres(text, all);
   const stated = qs.filter((q) => q.dimension === 'duration-per-length').map((q) => ({ perMetre: w(q), words: q.text, parts: [q] }));
   const units = qs.flatMap((q, i) => {
     const next = qs[i + 1];
@@ -67,7 +88,8 @@ function lengthAndYears(qs: Quantity[], lengthFirst: boolean): [Quantity, Quanti
 }
 
 /** Every contradiction between a gradient and the years and metres beside it. */
-export function perLength(text: string, qs: Quantity[], previous?: Previous): PerLengthFinding[] {
+export function perLength(text: string, parsed: Quantity[], previous?: Previous): PerLengthFinding[] {
+  const qs = withUnitMetres(text, parsed);
   const found = only(gradients(text, qs));
   if (found !== undefined) {
     const [stated] = found.parts;
@@ -75,7 +97,12 @@ export function perLength(text: string, qs: Quantity[], previous?: Previous): Pe
       // "200 m ... 150,000 years ..., or roughly 75 years per metre": the years over the metres before it.
       const pair = lengthAndYears(qs.filter((q) => q.end <= stated.start), false);
       const computed = pair === undefined ? undefined : divide(w(pair[1]), w(pair[0]));
-      return pair === undefined || computed === undefined ? [] : [{ stated, computed, measures: `${pair[1].text} over ${pair[0].text}` }];
+      if (pair !== undefined && computed !== undefined) return [{ stated, computed, measures: `${pair[1].text} over ${pair[0].text}` }];
+      // "The lowest 200 m hold 150,000 years. That works out to about 75 years per metre.": the
+      // sentence before gives the years and the metres, when this one draws on it and has no figure of its own before.
+      const back = previous === undefined || qs.some((q) => q.end <= stated.start) || !REFERS_BACK.test(text.slice(0, stated.start)) ? undefined : lengthAndYears(previous.quantities, false);
+      const fromBefore = back === undefined ? undefined : divide(w(back[1]), w(back[0]));
+      return back === undefined || fromBefore === undefined ? [] : [{ stated, computed: fromBefore, measures: `${back[1].text} over ${back[0].text} in the sentence before`, basis: "the paragraph's" }];
     }
     // "one metre holds 750 years, so 200 m hold 15,000 years": the metres times the gradient.
     const pair = lengthAndYears(qs.filter((q) => q.start >= (found.parts.at(-1)?.end ?? 0)), true);
@@ -83,6 +110,11 @@ export function perLength(text: string, qs: Quantity[], previous?: Previous): Pe
     // "200 m hold 150,000 years, so one metre holds 750 years": the years over the metres before it.
     const [unit, years] = found.parts as [Quantity, Quantity];
     const earlier = lengthAndYears(qs.filter((q) => q.end <= unit.start), false);
+    // "...; near the surface a metre holds only 10 years": another clause, or a metre with no word
+    // that draws it from the figures before ("so", "therefore"), is another place in the ice.
+    // "each" and "every" metre distribute over the length just named.
+    const gap = earlier === undefined ? '' : text.slice(Math.max(earlier[0].end, earlier[1].end), unit.start);
+    if (/;/u.test(gap) || (!/^(?:each|every)(?![\p{L}])/iu.test(unit.text) && !/^\d/u.test(unit.text) && !/^one(?![\p{L}])/iu.test(unit.text) && !DRAWS_ON.test(gap))) return [];
     const per = earlier === undefined ? undefined : divide(w(earlier[1]), w(earlier[0]));
     return per === undefined || earlier === undefined ? [] : [{ stated: years, computed: times(per, { value: unit.value, low: unit.value, high: unit.value }), measures: `${earlier[1].text} over ${earlier[0].text}, for ${unit.text}` }];
   }

@@ -7,7 +7,7 @@
  *
  * The readings tried, each a unit swap inside one dimension (factors from NIST SP 811: 1 ft =
  * 0.3048 m; SI prefixes k = 10^3, M = 10^6; ppm and ppb are 10^-6 and 10^-9 of the air by volume):
- * feet for metres and metres for feet, ppb for ppm, and a thousand-fold slip of a time in either direction (years for
+ * feet for metres and metres for feet, ppb for ppm, ppm for percent, and a thousand-fold slip of a time in either direction (years for
  * thousands of years, thousands for millions). Temperatures are left out: a change read in °F
  * instead of °C is 5/9 of itself, close enough to many a wrong figure to excuse it as a slip; the
  * restatement rules catch °F slips where both units are written.
@@ -37,6 +37,8 @@ const SLIPS: readonly Slip[] = [
   // "the seas were 400 metres lower" (400 feet meant): the American reader's feet, written as metres.
   { dimensions: ['length'], from: ['m'], to: 'ft', alsoAsWritten: true, what: 'metres written for feet (1 ft = 0.3048 m)' },
   { dimensions: ['concentration', 'concentration-rate'], from: ['ppb'], to: 'ppm', what: 'parts per billion written for parts per million (1 ppm = 1,000 ppb)' },
+  // "CO2 is barely 0.04 parts per million of the air" (0.04 percent meant): a share in percent, written in ppm.
+  { dimensions: ['concentration'], from: ['ppm'], to: '%', what: 'parts per million written for percent (1% = 10,000 ppm)' },
   { dimensions: ['age', 'duration'], from: ['yr', 'yr ago', 'yr BP', 'kyr', 'ka', 'century', 'millennium'], scale: 1000, swap: { ka: 'Ma', kyr: 'Myr' }, what: 'a thousand-fold slip: thousands meant and not written, or thousands written for millions (SI: k = 10^3, M = 10^6)' },
   { dimensions: ['age', 'duration'], from: ['kyr', 'ka', 'Myr', 'Ma'], scale: 1 / 1000, swap: { Ma: 'ka', Myr: 'kyr' }, what: 'a thousand-fold slip: millions written for thousands, or thousands for units (SI: k = 10^3, M = 10^6)' },
 ];

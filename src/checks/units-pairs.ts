@@ -51,6 +51,28 @@ const COPULA_GAP = new RegExp(String.raw`^${OF_WHAT},?${S}+(?:is|was|are|were|eq
 /** "in BP it is", "on the b2k scale that's": the era named, then a pointing word, just before the date. */
 const ERA_NAMED_BACK = new RegExp(String.raw`(?:^|[^\p{L}])(?:in|on)${S}+(?:the${S}+)?(?:bp|b2k)(?:${S}+(?:terms|scale|years))?,?${S}+(?:it|that|this)(?:${S}+(?:is|was|becomes|comes${S}+to)|['’]s)${S}*(?:(?:about|roughly|around|some)${S}+)?$`, 'iu');
 
+/**
+ * A sentence that opens by naming a system of units or a unit to read in: "In imperial units",
+ * "In US customary terms", "In feet", "In Fahrenheit", "Converted to feet" (common practice of
+ * writing a conversion; NIST SP 811 names the US customary and SI systems).
+ */
+const SYSTEM_FRAME = new RegExp(String.raw`^[^\p{L}]*(?:in|into|converted${S}+(?:in)?to|expressed${S}+in|measured${S}+in)${S}+(?:(?:imperial|metric|us|u\.s\.|american|british|customary|si|english|everyday|old${S}+money)(?:${S}+customary)?${S}+(?:units|terms|measures|measurements)|feet|foot|miles|metres|meters|kilometres|kilometers|fahrenheit|celsius|percent|per${S}+cent|parts${S}+per${S}+million|ppm)(?![\p{L}])`, 'iu');
+/** Words too common to tie a sentence to the one before. */
+const COMMON = new Set(['that', 'this', 'with', 'from', 'into', 'have', 'were', 'which', 'there', 'their', 'about', 'units', 'terms', 'imperial', 'metric', 'feet', 'runs', 'comes']);
+/**
+ * True when `head` (the words before the figure) opens with a frame naming a system of units and
+ * speaks of what the sentence before spoke of: a pointing word ("that", "it") or a word of four
+ * letters or more that the sentence before holds too ("In imperial units the core runs to ...").
+ */
+function namesSystemBack(head: string, before: string): boolean {
+  const frame = SYSTEM_FRAME.exec(head);
+  if (frame === null) return false;
+  const rest = head.slice(frame[0].length);
+  if (/(?:^|[^\p{L}])(?:that|this|it|its|which)(?![\p{L}])/iu.test(rest)) return true;
+  const earlier = new Set((before.toLowerCase().match(/\p{L}{4,}/gu) ?? []).filter((w) => !COMMON.has(w)));
+  return (rest.toLowerCase().match(/\p{L}{4,}/gu) ?? []).some((w) => !COMMON.has(w) && earlier.has(w));
+}
+
 /** A sentence that opens by restating: "That is 11,650 years BP", "On the BP scale, that's ...". */
 const OPENING = /^[^;!?]{0,100}$/u;
 
@@ -205,7 +227,8 @@ function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentenc
   const fahrenheitBack = second.statedUnit === 'degF' && (first.statedUnit === 'degC' || first.statedUnit === 'K') && /\b(?:fahrenheit|that|this|which)\b/iu.test(head) && !qs.some((q) => q.start < second.start && q !== original && q.dimension === second.dimension);
   // "BP counts from 1950, so in BP it is 11,750 years": a date after the era it is restated in.
   const eraBack = second.dimension === 'age' && ERA_NAMED_BACK.test(head);
-  if (!OPENING.test(head) || !(LOOSE_END.test(head) || fahrenheitBack || eraBack)) return undefined;
+  const systemBack = namesSystemBack(head, previous.text) && !qs.some((q) => q !== original && q.dimension === second.dimension);
+  if (!OPENING.test(head) || !(LOOSE_END.test(head) || fahrenheitBack || eraBack || systemBack)) return undefined;
   // Only a number in this sentence can be flagged here, so it must be the conversion.
   const pair = ordered(first, second, true);
   return pair.second === second ? pair : undefined;

@@ -8,7 +8,7 @@
  * another record (a lake, rock, sediment, the ice sheet's birth) keep the rule quiet.
  */
 import type { Quantity, Source } from '../types.js';
-import { CLARK_2009, HAYS_1976, NIST_SP_811, YAN_2019 } from './standard-sources.js';
+import { CLARK_2009, HAYS_1976, LUTHI_2008, NIST_SP_811, YAN_2019 } from './standard-sources.js';
 import type { UnitFinding } from './units-rules.js';
 
 /** A kind of subject with the oldest age or longest span it can have, in years. */
@@ -41,10 +41,22 @@ export const TIMESCALE_SUBJECTS: readonly TimescaleSubject[] = [
   },
   {
     what: 'an ice core',
-    names: ['ice core', 'ice cores', 'ice-core', 'Vostok core', 'Vostok record', 'Vostok ice', 'EPICA', 'Dome C', 'Dome Fuji', 'Dome A', 'GRIP', 'GISP2', 'NGRIP', 'NEEM', 'Law Dome', 'WAIS Divide', 'Talos Dome', 'Siple Dome', 'oldest ice', 'the core'],
-    unless: [...DEEP_TIME, 'lake', 'ice sheet', 'ice sheets', 'ice cap', 'formed', 'began to form', 'first formed', 'glaciation of Antarctica'],
+    // A core named by its head noun alone ("Antarctic cores tell us", "the real core", "those cores")
+    // is an ice core in this writing; a sediment core, a rock core or the Earth's core is kept out below.
+    names: ['ice core', 'ice cores', 'ice-core', 'Vostok core', 'Vostok record', 'Vostok ice', 'EPICA', 'Dome C', 'Dome Fuji', 'Dome A', 'GRIP', 'GISP2', 'NGRIP', 'NEEM', 'Law Dome', 'WAIS Divide', 'Talos Dome', 'Siple Dome', 'oldest ice', 'core', 'cores'],
+    unless: [...DEEP_TIME, 'lake', 'ice sheet', 'ice sheets', 'ice cap', 'formed', 'began to form', 'first formed', 'glaciation of Antarctica', "Earth's core", 'Earth’s core', 'inner core', 'outer core', 'core of the Earth', 'planet', 'planets', 'star', 'stars'],
     ceiling: 1e7,
     sources: [YAN_2019, NIST_SP_811],
+  },
+  {
+    // A numbered glacial termination ("Termination V, about 430 ka"): the ends of the glacial
+    // periods of the ice-core record, Termination I about 18-11 ka to Termination IX about 800 ka
+    // (Lüthi et al. 2008); none of the Pleistocene's numbered terminations is two million years old.
+    what: 'a glacial termination',
+    names: ['I', 'II', 'III', 'IV', 'V', 'VI', 'VII', 'VIII', 'IX', 'X', 'XI', 'XII'].flatMap((n) => [`Termination ${n}`, `Terminations ${n}`, `T-${n}`]),
+    unless: DEEP_TIME,
+    ceiling: 2e6,
+    sources: [LUTHI_2008, NIST_SP_811],
   },
   {
     // The orbital cycles that pace the ice ages last about 19,000 to 100,000 years (Hays et al. 1976),

@@ -43,6 +43,24 @@ const LEVELS = new Set<Quantity['dimension']>(['concentration', 'temperature', '
 const FILLER = /^(?:[\s,]*(?:about|around|roughly|some|approximately|approx\.|nearly|near|close\s+to|just|only|barely|of|at|on|was|were|is|are|be|been|being|stood|sat|reached|hit|level|mark|value|a|an|the|its|their|~|∼|≈|c\.|ca\.))*[\s]*$/iu;
 /** A negation shortly before a `-verb` word: "never got above", "did not rise above", "no CO2 reading above". */
 const NEGATION = /(?:^|[^\p{L}])(?:never|not|no|nothing|none|without|n't|n’t)(?:\s+[\p{L}\p{N}'’-]+){0,2}\s*$/iu;
+/**
+ * A negation fronted at the head of the clause, with the subject and its auxiliary inverted: "Not
+ * once in 800,000 years did CO2 rise above", "At no point was it higher than", "Never before had
+ * the air held more than" (common practice of English grammar: negative inversion). It covers the
+ * verb of its clause however far it stands.
+ */
+const FRONTED_NEGATION = /^[\s"'“‘(]*(?:never|not\s+once|not\s+(?:one|a|any)\s+[\p{L}-]+|at\s+no\s+[\p{L}-]+|in\s+no\s+[\p{L}-]+|on\s+no\s+[\p{L}-]+|nowhere|nor|no\s+[\p{L}-]+)(?![\p{L}])[^;:]*?(?:^|[^\p{L}])(?:did|do|does|was|were|is|are|has|have|had|could|would|can|will)(?![\p{L}])/iu;
+
+/**
+ * True when `head` (the clause up to the bound's words) opens with a fronted negation whose
+ * inverted verb is the bound's own: no "that" and no comma stand between the auxiliary and the
+ * bound's words ("Nor do I dispute that today's level, well above 400 ppm, ..." negates "dispute").
+ */
+function frontedNegation(head: string): boolean {
+  const m = FRONTED_NEGATION.exec(head);
+  return m !== null && !/,|(?:^|[^\p{L}])that(?![\p{L}])/iu.test(head.slice(m.index + m[0].length));
+}
+
 /** Where a clause ends: a bound's words and its number stand in one clause. */
 const CLAUSE_END = /[;:()–—]|,\s*(?:and|but|while|whereas|although|though|where|which|when)\b/giu;
 
@@ -97,7 +115,8 @@ export function boundReadings(sentence: string, quantities: readonly Quantity[],
     if (!LEVELS.has(q.dimension)) return undefined;
     const number = numberStart(q);
     const previous = i > 0 ? (quantities[i - 1] as Quantity).end : 0;
-    const from = Math.max(previous, ...ends.filter((e) => e <= q.start));
+    const clause = Math.max(0, ...ends.filter((e) => e <= q.start));
+    const from = Math.max(previous, clause);
     const window = sentence.slice(from, number);
     let best: BoundReading | undefined;
     const consider = (kind: BoundKind, words: FormsTrie, needsNegation: boolean): void => {
@@ -105,7 +124,7 @@ export function boundReadings(sentence: string, quantities: readonly Quantity[],
         const start = from + at;
         const end = from + to;
         if (!FILLER.test(sentence.slice(end, number)) || inName(start, end)) continue;
-        if (needsNegation && !NEGATION.test(sentence.slice(from, start))) continue;
+        if (needsNegation && !NEGATION.test(sentence.slice(from, start)) && !frontedNegation(sentence.slice(clause, start))) continue;
         if (best === undefined || end > best.span[1]) best = { kind, span: [start, end] };
       }
     };

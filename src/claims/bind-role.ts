@@ -24,7 +24,12 @@ export interface EndpointPair {
 export const CHANGE_NOUNS = 'rise|rises|increase|increases|drop|drops|fall|falls|decline|decrease|swing|swings|amplitude|change|jump|step|gain|growth|difference';
 /** A noun of change anywhere in a phrase: "the deglacial rise", "its increase". */
 export const CHANGE_NOUN = new RegExp(String.raw`(?:^|[^\p{L}])(?:${CHANGE_NOUNS})(?![\p{L}])`, 'iu');
-const CHANGE_VERBS = 'rose|rise|rises|risen|rising|fell|falls|fallen|falling|dropped|dropping|climbed|climbing|jumped|increased|decreased|declined|grew|gained|gaining|gains|added|adding|adds|up';
+/**
+ * Verbs whose "up" tells what a whole is made of, not a change: "CO2 made up about 280 ppm of the
+ * air", "takes up 0.04 percent" (common practice: English phrasal verbs of composition).
+ */
+const COMPOSITION_VERBS = ['make', 'makes', 'made', 'making', 'take', 'takes', 'took', 'taken', 'taking'];
+const CHANGE_VERBS = `rose|rise|rises|risen|rising|fell|falls|fallen|falling|dropped|dropping|climbed|climbing|jumped|increased|decreased|declined|grew|gained|gaining|gains|added|adding|adds|(?<!(?:^|[^\\p{L}])(?:${COMPOSITION_VERBS.join('|')})\\s+)up`;
 const CHANGE_VERB = new RegExp(String.raw`^(?:${CHANGE_VERBS}|sank|sunk|peaked|topped|bottomed)$`, 'iu');
 
 /** Whether a word is a verb of change ("fell", "climbed"), which may carry a number to the level it reaches. */

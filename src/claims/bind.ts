@@ -39,6 +39,8 @@ const AMBIGUOUS = 'ambiguous';
 const SEGMENT = /\b(?:the|its|their|a|an)\s+(?:very\s+)?(?:lowest|bottom|bottommost|deepest|top|topmost|upper|uppermost|lower|last|final|first)\s+(?:(?:few|some|roughly|about|around)\s+)?$/iu;
 /** A single unit, the base of a rate stated beside it ("one metre ... stores 750 years", "each metre holds"). */
 const ONE_UNIT = /^(?:one|a|an|each|every|per|a\s+single)\s+\p{L}+$/iu;
+/** One unit length named just before a figure, in its clause: "each metre there holds", "one metre near the bottom stores". */
+const PER_UNIT_BEFORE = /(?:^|[^\p{L}])(?:each|every|one|a\s+single|a)\s+(?:metre|meter|m)(?![\p{L}])[^\d,;:.!?()]{0,36}$/iu;
 const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 
 /**
@@ -206,6 +208,24 @@ export function termRegex(words: string[]): RegExp {
   return new RegExp(`(^|[^\\p{L}\\p{N}])(?:${escaped.join('|')})(?![\\p{L}\\p{N}])`, 'giu');
 }
 
+/** A comparative of size right after a figure: "380,000 years longer", "350 m deeper". */
+const COMPARED_AFTER = /^[\s\u00A0]*(?:longer|shorter|more|less|deeper|shallower|bigger|smaller|greater|larger)(?![\p{L}])/iu;
+/** A comparative of age right after a figure: "4,000 years younger" (a delta-age when said of the air alone). */
+const AGED_AFTER = /^[\s\u00A0]*(?:older|younger)(?![\p{L}])/iu;
+
+/**
+ * True when quantity `i` is stated as a difference: a comparative of size follows it ("380,000 years
+ * longer than"), or a comparative of age or a change word ("adds") with two figures of its
+ * dimension before it in the sentence, whose difference it states.
+ */
+function isDifference(sentence: string, quantities: Quantity[], i: number, role: string): boolean {
+  const q = quantities[i] as Quantity;
+  const after = sentence.slice(q.end, q.end + 24);
+  if (COMPARED_AFTER.test(after)) return true;
+  if (!AGED_AFTER.test(after) && role !== 'change') return false;
+  return quantities.slice(0, i).filter((o) => o.dimension === q.dimension).length >= 2;
+}
+
 /** A quantity in a relative clause after a comma: "..., which started roughly 30,000 years ago". */
 const RELATIVE_BEFORE = /,\s*which\s+[^,;:.!?()]*$/u;
 
@@ -247,13 +267,16 @@ function ownWords(views: TermHits[], j: number, [s, e]: [number, number]): void 
 
 /**
  * `vetoes` less the words of the quantity's own unit: "300 CO2 molecules in every million molecules
- * of air" names the air as its unit, not as a share of the atmosphere told in percent.
+ * of air" names the air as its unit, not as a share of the atmosphere told in percent. A mixing
+ * ratio is a share of the air whatever its unit, so words that say so right after it ("420 ppm of
+ * the air", "280 parts per billion of the atmosphere") complete the unit: they make the figure no
+ * percentage (common practice: ppm and ppb are parts of the air by volume, WMO GAW reports).
  */
-function withoutOwnUnitWords(vetoes: TermHits, q: Quantity): TermHits {
-  if (q.statedUnit === 'CE' || q.dimension !== 'concentration') return vetoes;
+function withoutOwnUnitWords(vetoes: TermHits, q: Quantity, sentence: string): TermHits {
+  if (q.statedUnit === 'CE' || q.dimension !== 'concentration' || q.statedUnit === '%') return vetoes;
   const kept: TermHits = new Map();
   for (const [id, spans] of vetoes) {
-    const left = spans.filter(([start, end]) => !(start > q.start && end <= q.end));
+    const left = spans.filter(([start, end]) => !(start > q.start && end <= q.end) && !(start >= q.end && /^[\s\u00A0]*$/u.test(sentence.slice(q.end, start))));
     if (left.length > 0) kept.set(id, left);
   }
   return kept;
@@ -354,12 +377,17 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     if (isSegment(q)) return;
     // "one metre near the bottom stores some 750 years": one unit of a rate, not a measure of anything.
     if (ONE_UNIT.test(q.text)) return;
+    // "each metre there holds about 750 years": the years of one unit length are that rate, no span of the core.
+    if (q.dimension === 'duration' && PER_UNIT_BEFORE.test(sentence.slice(Math.max(0, q.start - 60), q.start))) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const bound = bounds[i];
-    const vetoes = withoutBeforeAntecedent(sentence, withoutOwnUnitWords(withoutEarlierClauses(vetoView(sentence, view, q, role), bound?.span[0], clauseStarts(sentence)), q), q, hits);
+    const vetoes = withoutBeforeAntecedent(sentence, withoutOwnUnitWords(withoutEarlierClauses(vetoView(sentence, view, q, role), bound?.span[0], clauseStarts(sentence)), q, sentence), q, hits);
+    // "Dome C spans 800,000 years and Vostok 420,000, so Dome C is 380,000 years longer": a difference
+    // measures neither subject's span or level; only a value that states a change may bind it.
+    const difference = isDifference(sentence, quantities, i, role);
     let scored = packs.references
-      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && satisfies(r, view, vetoes) && canState(r, q))
+      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && (!difference || r.binding.role === 'change') && satisfies(r, view, vetoes) && canState(r, q))
       .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
       .sort((a, b) => a.score - b.score);
     // A ceiling binds the highest level when some value reads it, not the level of today or of a period.

@@ -22,6 +22,12 @@ const CLIPPINGS: Record<string, string> = {
   approximately: 'approx',
 };
 
+/**
+ * Nouns that name the end of a span the way "end" does, in a phrase "the end of X" (a closed class;
+ * common practice of English): "the close of the last ice age", "the tail end of the glacial".
+ */
+const END_NOUNS = ['close', 'closing', 'tail end', 'conclusion', 'finish'];
+
 /** `words` and their derived variants, each phrase once, the originals first. */
 export function termVariants(words: readonly string[]): string[] {
   const out = new Set(words);
@@ -30,6 +36,9 @@ export function termVariants(words: readonly string[]): string[] {
     if (parts.length >= 2 && parts.length <= 3 && parts.every((p) => /^\p{L}+$/u.test(p))) out.add(parts.join('-'));
     const clipped = parts.map((p) => CLIPPINGS[p.toLowerCase()] ?? p);
     if (clipped.some((p, i) => p !== parts[i])) out.add(clipped.join(' '));
+    // "end of the last ice age" → "close of the last ice age", "conclusion of the last ice age".
+    const end = parts.findIndex((p, i) => p.toLowerCase() === 'end' && parts[i + 1]?.toLowerCase() === 'of');
+    if (end >= 0 && parts.length >= 3) for (const noun of END_NOUNS) out.add([...parts.slice(0, end), noun, ...parts.slice(end + 1)].join(' '));
   }
   return [...out];
 }

@@ -17,8 +17,11 @@ import { splitSentences } from './split-sentences.js';
 /** How many sentences a lead-in holds at most: as many as the checks read of their own paragraph. */
 export const LEAD_IN_SENTENCES = 4;
 const TWO_NUMBERS = /\d[^\d]+\d/u;
-/** Between two blocks that follow on: spaces, line breaks and markup, no letter or digit. */
-const FOLLOWS_ON = /^[^\p{L}\p{N}]*$/u;
+/**
+ * Between two blocks that follow on: spaces, line breaks and markup, no letter or digit but the
+ * label of an ordered list's next item ("\n2. ", "\n10) ": CommonMark's ordered list markers).
+ */
+const FOLLOWS_ON = /^(?:[^\p{L}\p{N}]*\n)?[ \t]*(?:\d{1,9}[.)](?=[ \t]))?[^\p{L}\p{N}]*$/u;
 /** Blocks that are no running prose. */
 const NOT_PROSE = new Set(['heading', 'front-matter', 'image-text']);
 

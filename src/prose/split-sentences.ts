@@ -122,8 +122,14 @@ function startsSentence(next: string): boolean {
 function push(into: Sentence[], text: string, blockIndex: number, start: number, end: number): void {
   let stop = end;
   while (stop > start && /\s/u.test(text.charAt(stop - 1))) stop -= 1;
+  // "1. The EPICA core ...\n2. Its record covers ...": the number that opens a line of an ordered
+  // list is the item's label, not a sentence; left out, the item reads on from the item before.
+  if (LIST_LABEL.test(text.slice(start, stop)) && /(?:^|\n)[ \t]*$/u.test(text.slice(0, start))) return;
   if (stop > start) into.push({ text: text.slice(start, stop), blockIndex, start, end: stop });
 }
+
+/** The label of an ordered list's item, as CommonMark writes it (one to three digits, then "." or ")"). */
+const LIST_LABEL = /^\d{1,3}[.)]$/u;
 
 function skipSpace(text: string, from: number): number {
   let at = from;

@@ -20,7 +20,12 @@ describe('termVariants', () => {
     expect(termVariants(['glacial maximum', 'LGM'])).toEqual(['glacial maximum', 'LGM', 'glacial-maximum', 'glacial max']);
   });
   it('leaves a long phrase and a phrase with digits as they are', () => {
-    expect(termVariants(['end of the last ice age', 'Termination I', 'Marine Isotope Stage 5e'])).toEqual(['end of the last ice age', 'Termination I', 'Marine Isotope Stage 5e', 'Termination-I']);
+    expect(termVariants(['Termination I', 'Marine Isotope Stage 5e'])).toEqual(['Termination I', 'Marine Isotope Stage 5e', 'Termination-I']);
+  });
+  // Nouns that name an end as "end" does (common practice of English): "the close of the last ice age".
+  it('gives "end of X" the other nouns of an end, and nothing else', () => {
+    expect(termVariants(['end of the last ice age'])).toEqual(['end of the last ice age', 'close of the last ice age', 'closing of the last ice age', 'tail end of the last ice age', 'conclusion of the last ice age', 'finish of the last ice age']);
+    expect(termVariants(['the end'])).toEqual(['the end', 'the-end']);
   });
 });
 

@@ -151,7 +151,9 @@ const basisOf = (inputs: Figure[]): { basis?: string } => (inputs.some((g) => g.
 /** A change against the differences of the levels before it (or, with "than", against the level it names after it). */
 function checkChange(figures: Figure[], text: string, f: Figure): ReaderFinding[] {
   if (isOtherQuantity(f, figures)) return [];
-  const sameFamily = (g: Figure): boolean => g.role === 'level' && g.family === f.family && (g.q.statedUnit === f.q.statedUnit || g.q.statedUnit === '' || f.q.statedUnit === '');
+  // A difference of times ("adds 280,000 years") is set against the spans and ages before it ("covers 800,000 years").
+  const asLevel = (g: Figure): boolean => g.role === 'level' || (f.family === 'duration' && g.role === 'duration');
+  const sameFamily = (g: Figure): boolean => asLevel(g) && g.family === f.family && (g.q.statedUnit === f.q.statedUnit || g.q.statedUnit === '' || f.q.statedUnit === '');
   const than = f.after.some((w) => w.text === 'than') ? figures.find((g) => g.sentence === 0 && g.order > f.order && sameFamily(g)) : undefined;
   const found = usable(figures, f, text, sameFamily) ?? (f.remainder ? usable(figures, f, text, (g) => (g.role === 'change' || g.role === 'level') && g.family === f.family) : undefined);
   if (found === undefined && than === undefined) return [];
@@ -160,7 +162,7 @@ function checkChange(figures: Figure[], text: string, f: Figure): ReaderFinding[
     const subjects = inputsBefore(figures, f, sameFamily).slice(-2);
     if (subjects.length === 0) return [];
     pairs = subjects.map((s) => [s, than]);
-  } else pairs = pairsOf((found as { inputs: Figure[] }).inputs.filter((g) => g.role === 'level'));
+  } else pairs = pairsOf((found as { inputs: Figure[] }).inputs.filter(asLevel));
   // Two levels in different units ("6 °C is roughly 11 °F") restate one amount; they make no change.
   const sameUnit = ([a, b]: [Figure, Figure]): boolean => a.q.statedUnit === b.q.statedUnit || a.q.statedUnit === '' || b.q.statedUnit === '';
   // "Of the 95 ppm gained, 25 came from warming and the rest, some 90 ppm, ...": what is left of a stated whole.
@@ -215,7 +217,8 @@ function checkRelative(figures: Figure[], text: string, f: Figure): ReaderFindin
 /** A multiple ("20 times faster", "two and a half times the 1750 figure") against the ratios of two rates or two levels. */
 function checkMultiple(figures: Figure[], text: string, f: Figure): ReaderFinding[] {
   if (f.q.value <= 1 || denied(f)) return [];
-  const compared = (g: Figure): boolean => (g.role === 'rate' || g.role === 'level') && g.q.value > 0;
+  // Spans of time compare as levels do: "800,000 against 420,000 years, so about twice as long".
+  const compared = (g: Figure): boolean => (g.role === 'rate' || g.role === 'level' || g.role === 'duration') && g.q.value > 0;
   const found = usable(figures, f, text, compared);
   if (found === undefined) return [];
   const pace = f.after.some((w) => WORDS.pace.has(w.text));

@@ -113,6 +113,16 @@ export function readSentence(text: string, qs: readonly Quantity[], sentence: nu
     if (d === 'age') return { ...f, role: 'date', family: 'age' };
     if (d === 'duration') {
       const lastWord = before.at(-1)?.text ?? '';
+      // "the newer core adds roughly 280,000 years", "the gas is 6,000 years younger": a span of time
+      // with a change word or a comparative of its own is a difference between two spans or ages.
+      // Only a comparative names the difference after the figure: "23,000 years, change how sunlight
+      // lands" is a verb of the clause, not a change noun of the span.
+      // Before it, only a verb of change does: "a span of 2,200 years" is the span itself.
+      const verb = before.at(-1)?.text === 'of' ? undefined : WORDS.changeVerbs.get(lastMeaningful(before)?.text ?? '');
+      const grows = verb ?? (WORDS.timeComparatives.has(after[0]?.text ?? '') ? WORDS.comparatives.get(after[0]?.text ?? '') : undefined);
+      if (grows !== undefined && !WORDS.notASpan.has(lastWord)) return { ...f, role: 'change', family: 'duration', sign: grows };
+      // "if the ice is 25,000 years old": an age told as how old a thing is, a level of time.
+      if (after[0]?.text === 'old') return { ...f, role: 'level', family: 'duration' };
       if (WORDS.notASpan.has(lastWord) || WORDS.notASpan.has(after[0]?.text ?? '')) return f;
       return { ...f, role: 'duration', family: 'duration' };
     }

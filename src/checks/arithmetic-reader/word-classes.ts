@@ -20,9 +20,11 @@ const CHANGE_NOUNS: Record<string, number> = {
 };
 /** Words after a figure that set it against another of its kind ("140 ppm more", "20 times faster"). */
 const COMPARATIVES: Record<string, number> = {
-  more: 1, higher: 1, greater: 1, larger: 1, bigger: 1, above: 1, up: 1, extra: 1, warmer: 1, deeper: 1, longer: 1, faster: 1, quicker: 1, over: 1,
-  less: -1, fewer: -1, lower: -1, smaller: -1, below: -1, down: -1, colder: -1, cooler: -1, shallower: -1, shorter: -1, slower: -1, under: -1,
+  more: 1, higher: 1, greater: 1, larger: 1, bigger: 1, above: 1, up: 1, extra: 1, warmer: 1, deeper: 1, longer: 1, faster: 1, quicker: 1, over: 1, older: 1,
+  less: -1, fewer: -1, lower: -1, smaller: -1, below: -1, down: -1, colder: -1, cooler: -1, shallower: -1, shorter: -1, slower: -1, under: -1, younger: -1,
 };
+/** The comparatives that set one span of time against another ("380,000 years longer", "4,000 years younger"). */
+const TIME_COMPARATIVES = ['longer', 'shorter', 'older', 'younger', 'more', 'less'];
 /** Particles before a figure that state it as a change ("up 124 ppm", "down 6 °C", "net 40 ppm"). */
 const CHANGE_PARTICLES: Record<string, number> = { up: 1, down: -1, net: 0 };
 /** Verbs whose "up" or "down" makes a phrasal verb of taking or making ("taken up", "sums up"), not a change of the figure after it. */
@@ -83,6 +85,7 @@ export const WORDS = {
   changeVerbs: signedForms(CHANGE_VERBS),
   changeNouns: signedForms(CHANGE_NOUNS),
   comparatives: new Map(Object.entries(COMPARATIVES)),
+  timeComparatives: new Set(TIME_COMPARATIVES),
   particles: new Map(Object.entries(CHANGE_PARTICLES)),
   remainder: new Set(REMAINDER),
   phrasalHeads: formsOf(PHRASAL_HEADS),
