@@ -65,13 +65,24 @@ function detect({ index, read }: DetectInput): Cue[] {
     if (denied !== undefined) return [{ start: Math.min(asserted.start, denied.start), end: Math.max(asserted.end, denied.end) }];
     // "Either CO2 drives temperature or temperature drives CO2": two directions set up as a choice.
     const choice = causes.find((c) => c.polarity === 'asserted' && direction(c) !== undefined && direction(c) !== direction(asserted));
-    if (choice !== undefined && here.s.words.some((w) => w.text === 'or' || w.text === 'either') && !here.s.question) {
+    if (choice !== undefined && joinedByOr(here.s, asserted, choice) && !here.s.question) {
       return [{ start: Math.min(asserted.start, choice.start), end: Math.max(asserted.end, choice.end) }];
     }
     const reverse = REVERSE.exec(here.s.text);
     if (reverse !== null && reverse.index >= asserted.end - 1) return [{ start: asserted.start, end: reverse.index + reverse[0].length }];
   }
   return [];
+}
+
+/**
+ * Two directions set up as a choice: an "or" stands between them, inside the stretch the two causes
+ * cover ("Either the ocean warmed and released CO2, or CO2 warmed the ocean"). An "or" elsewhere in
+ * the sentence ("..., so it's not one or the other") joins no choice of theirs.
+ */
+function joinedByOr(s: ReadSentence, a: Cause, b: Cause): boolean {
+  const from = Math.min(a.start, b.start);
+  const to = Math.max(a.end, b.end);
+  return s.words.some((w) => w.text === 'or' && w.start > from && w.end < to);
 }
 
 /**
