@@ -138,7 +138,7 @@ function detectRegional(input: DetectInput): Cue[] {
  */
 function detectLag({ index, read }: DetectInput): Cue[] {
   const here = read(index);
-  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && (o.amount || o.recordNamed));
+  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && o.recordNamed);
   if (here === undefined || order === undefined) return [];
   // "about 800 years before": the lag figure just before the order word is part of the claim.
   const at = here.s.words.findIndex((w) => w.start === order.start);
