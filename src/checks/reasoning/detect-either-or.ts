@@ -15,7 +15,7 @@ import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
 
 const REVERSE = /\b(?:not|never|rather than|instead of)\s+(?:\w+\s+){0,2}(?:the other way (?:round|around|about)|vice versa|the reverse|the opposite way)\b|\b(?:one-way|one way street|only one way)\b/iu;
 
-function detect({ index, read }: DetectInput): Cue[] {
+function detect({ index, own, read }: DetectInput): Cue[] {
   const here = read(index);
   if (here === undefined) return [];
   const loopAt = (i: number) => {
@@ -44,7 +44,8 @@ function detect({ index, read }: DetectInput): Cue[] {
   const picked = pickedSide(here.s, here.props.causes, direction);
   if (picked !== undefined) return [picked];
   // A neighbour answers only in the same voice: in a thread, the next reply is someone else's.
-  const sameVoice = (i: number) => !opensUtterance((i > index ? read(i) : here)?.s.text ?? '');
+  // A list item or a post before this block (its lead-in) is a claim of its own, and answers nothing here.
+  const sameVoice = (i: number) => i >= own && !opensUtterance((i > index ? read(i) : here)?.s.text ?? '');
   if ((sameVoice(index - 1) && loopAt(index - 1)) || (sameVoice(index + 1) && loopAt(index + 1))) return [];
   const frame = framedInWords(here.s, read(index - 1)?.s);
   if (frame !== undefined) return [frame];
