@@ -28,7 +28,8 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     .filter((h, _, all) => !all.some((o) => o !== h && o.first <= h.first && o.last >= h.last && o.last - o.first > h.last - h.first))
     // "orbital forcing" names the orbit: its "forcing" is no cause word of its own, and "within a few
     // centuries of each other" is a timing, not a feedback.
-    .filter((h) => ![...entities, ...s.of('order')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first));
+    // "end of story", "full stop": a restriction's own words cause nothing.
+    .filter((h) => ![...entities, ...s.of('order'), ...s.of('exclusive')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first));
   const causes: Cause[] = [];
   for (const h of hits) {
     // `passive` only qualifies an `effects` word at the same place; it states nothing of its own.

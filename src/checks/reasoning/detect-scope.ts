@@ -33,6 +33,11 @@ const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degre
 /** Words that open an inference from what comes before ("..., so the whole world..."). */
 const INFERENCE = new Set(['so', 'therefore', 'thus', 'hence', 'meaning', 'consequently']);
 
+/** An elliptic clause that repeats the predicate before it for a new subject: "so did", "as did", "did too". */
+const ELLIPSIS_OPENERS = new Set(['so', 'as', 'nor', 'neither']);
+const ELLIPSIS_AUX = new Set(['did', 'does', 'do', 'was', 'were', 'is', 'are', 'had', 'has', 'have']);
+const ELLIPSIS_CLOSERS = new Set(['too', 'also', 'likewise']);
+
 /** Words before "local" or "regional" that put the place away from it ("far from local influences"). */
 const AWAY_FROM = new Set(['far from', 'free of', 'free from', 'away from', 'immune to', 'shielded from', 'sheltered from']);
 
@@ -87,7 +92,10 @@ function detectRegional(input: DetectInput): Cue[] {
     const copula = (opener === 'that' || opener === 'this') && /^(?:is|was)$/u.test(own[1]?.text ?? '');
     const same = own.some((w) => w.text === 'same');
     const inference = INFERENCE.has(opener) && own.some((w) => /^\d/u.test(w.text) || TEMPERATURE_WORDS.test(w.text));
-    if (records.some((r) => (s.words[r.first]?.segment ?? 0) < segment)) return copula || same || inference;
+    // "..., so did the planet", "as did the whole Earth", "and the globe did too": an elliptic clause
+    // whose subject is the globe repeats the record's own change for it.
+    const elliptic = (ELLIPSIS_OPENERS.has(opener) && ELLIPSIS_AUX.has(own[1]?.text ?? '')) || (ELLIPSIS_AUX.has(own.at(-2)?.text ?? '') && ELLIPSIS_CLOSERS.has(own.at(-1)?.text ?? ''));
+    if (records.some((r) => (s.words[r.first]?.segment ?? 0) < segment)) return copula || same || inference || elliptic;
     return records.length === 0 && (copula || same) && recordIn(before);
   };
   // "Earth's changing orbit": a globe that owns an entity is no temperature of the globe.
