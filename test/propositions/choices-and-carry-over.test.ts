@@ -1,0 +1,157 @@
+/**
+ * Sentence structure read across wordings (session 9), each class in sentences of our own, with
+ * clean counter-examples:
+ * - an either/or choice is set up by an "or" between its two directions; an "or" elsewhere ("so it is
+ *   not one or the other") joins no choice;
+ * - a part noun (effect, driver, role) is a noun only as written or plural: "the resulting warming"
+ *   names no effect; an -ing change after an article and a modifier is a noun;
+ * - a casting verb with a predicate noun after its object ("makes the cores a confession") acts on nothing;
+ * - only the orbit may alone *start* a deglaciation;
+ * - a global order with a lag figure and no record is the direction fact; with a record named it is
+ *   the Antarctic lag read as global;
+ * - a list item or post reads on from the block just before it (its lead-in);
+ * - an elliptic clause ("so did the planet") and manner anaphora ("that's how it went worldwide")
+ *   carry a regional record's change or order over to the globe.
+ * The science:
+ * - Orbital forcing paced the glacial cycles and started each deglaciation; CO2 amplified the warming
+ *   and spread it; global temperature lagged CO2 in the last deglaciation: Shakun et al. 2012,
+ *   Nature 484, 49-54, doi 10.1038/nature10915; Hays, Imbrie and Shackleton 1976, Science 194,
+ *   1121-1132.
+ * - Antarctic temperature and CO2 changed within a few centuries of each other: Parrenin et al. 2013,
+ *   Science 339, 1060-1063 (from memory); Pedro et al. 2012, Climate of the Past 8, 1213-1221.
+ * - Antarctic swings exceed the global mean (polar amplification), so an Antarctic change is not the
+ *   planet's: Masson-Delmotte et al. 2013, IPCC AR5 WG1 chapter 5; Tierney et al. 2020, Nature 584,
+ *   569-573 (global LGM cooling about 6 °C).
+ * - A correlation of two curves is not by itself proof of a cause (common practice).
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { checkText } from '../../src/engine.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+import type { LoadedPacks } from '../../src/rulepack/types.js';
+
+let packs: LoadedPacks;
+beforeAll(async () => {
+  packs = await loadPacks([]);
+});
+
+const TOPIC = 'The Antarctic ice cores hold the CO2 record.\n\n';
+const serious = async (text: string) =>
+  (await checkText(TOPIC + text, { packs, format: 'markdown' })).flags.filter((f) => f.level !== 'note').map((f) => f.ruleId);
+
+describe('an either/or choice is joined by its own "or"', () => {
+  it('still flags a choice set up between the two directions', async () => {
+    expect(await serious('Either CO2 warmed the planet or the warming released CO2, and the cores tell us which.')).toContain('logic.either-or-causation');
+  });
+
+  it.each([
+    'Shifts in the orbit set the rhythm, but CO2 and the spreading ice sheets amplify each swing and carry it worldwide, so it is not one or the other.',
+    'The orbit starts each thaw and the released CO2 reinforces it around the globe; it was never one or the other.',
+    'Sunlight changes pace the cycles, yet CO2 and the ice amplify them and spread them to every latitude, so it is not a case of one or the other.',
+  ])('passes roles given to each factor: %s', async (text) => {
+    expect(await serious(text)).not.toContain('logic.either-or-causation');
+  });
+});
+
+describe('a part noun is no verb form, and "the resulting warming" is a noun', () => {
+  it.each([
+    'Small orbital shifts set the timing, and CO2 then amplified the resulting warming or cooling across the planet.',
+    'The orbit paced the cycles; CO2 strengthened the ensuing warming or cooling and carried it worldwide.',
+    'Orbital changes set things off, and the extra CO2 deepened the initial cooling or warming.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+});
+
+describe('a casting verb with a predicate noun acts on nothing', () => {
+  it.each([
+    'None of this makes the ice cores a signed confession: the close fit of CO2 and temperature is a correlation, and physics turns it into a cause.',
+    'Nothing here turns the cores into a courtroom; the match of CO2 and temperature is a correlation, and the physics of absorption makes it a cause.',
+    'The timing does not make the archive a witness statement: the fit of CO2 and temperature is a correlation, and radiative physics turns it into a cause.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+});
+
+describe('only the orbit may alone start a deglaciation', () => {
+  it.each([
+    'Carbon dioxide by itself set off the end of every glacial period.',
+    'Rising CO2 alone kicked off each deglaciation.',
+    "The ocean's CO2, on its own, triggered the end of the last ice age.",
+  ])('flags: %s', async (text) => {
+    expect(await serious(text)).toContain('logic.single-cause');
+  });
+
+  it('passes the orbit alone as the trigger', async () => {
+    expect(await serious('The orbit alone triggered the start of each deglaciation; CO2 then amplified the warming.')).toEqual([]);
+  });
+});
+
+describe('a global order: the direction fact without a record, the lag read as global with one', () => {
+  it.each([
+    'Across the whole globe, temperature climbed several centuries ahead of carbon dioxide.',
+    'Averaged over the planet, warming began a few hundred years before CO2 rose.',
+    'The world as a whole warmed about 600 years before the CO2 went up.',
+  ])('direction: %s', async (text) => {
+    const ids = await serious(text);
+    expect(ids).toContain('direction.global-co2-ahead-of-warming');
+    expect(ids).not.toContain('scope.antarctic-lag-as-global');
+  });
+
+  it('scope when the record is named', async () => {
+    expect(await serious('The Vostok core shows that worldwide, temperature rose 800 years before CO2.')).toContain('scope.antarctic-lag-as-global');
+  });
+});
+
+describe('a block reads on from the block just before it', () => {
+  it.each([
+    '- The EPICA Dome C core shows Antarctic temperature rising a few centuries before CO2.\n- This shows that the whole planet warmed first.',
+    '- In the Vostok ice, the local warming began before the CO2 rise.\n\n- That tells us the entire Earth warmed first and CO2 followed.',
+    'The Dome Fuji record has Antarctic temperature rising first.\n\nThis means the globe as a whole heated up before CO2 did.',
+  ])('takes the record from the item before: %j', async (text) => {
+    expect(await serious(text)).toContain('scope.antarctic-lag-as-global');
+  });
+
+  it('passes a correct global order after a regional one', async () => {
+    expect(await serious('- The Dome C core shows Antarctic temperature rising a few centuries before CO2.\n- Averaged over the globe, though, CO2 rose first and temperature followed.')).toEqual([]);
+  });
+
+  it("a loop granted in the item before does not answer this item's either/or", async () => {
+    const text = '- Temperature and CO2 each drive the other in a feedback loop.\n- The cores settle it: temperature drives CO2, and CO2 does not drive temperature.';
+    expect(await serious(text)).toContain('logic.either-or-causation');
+  });
+});
+
+describe("an elliptic clause repeats a record's change for the globe", () => {
+  it.each([
+    'When Vostok cooled by eight degrees, so did the planet.',
+    'The Dome C site warmed ten degrees as the ice age ended, as did the whole Earth.',
+    "Greenland's ice core records a 15-degree warming, and the globe did too.",
+  ])('flags: %s', async (text) => {
+    expect(await serious(text)).toContain('scope.regional-record-as-global');
+  });
+
+  it.each([
+    'When Vostok cooled by eight degrees, the planet as a whole cooled by about five.',
+    'When Dome C warmed by ten degrees, so did the Southern Ocean.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).not.toContain('scope.regional-record-as-global');
+  });
+});
+
+describe('manner anaphora carries a regional order over to the globe', () => {
+  it.each([
+    "The Antarctic cores put temperature first and CO2 second, and that's how it went around the whole world.",
+    'In the Vostok record warming leads CO2 by centuries; the planet as a whole went the same way.',
+    'Antarctic ice shows the warmth arriving before the CO2, and this is how it happened across the globe.',
+  ])('flags: %s', async (text) => {
+    expect(await serious(text)).toContain('scope.antarctic-lag-as-global');
+  });
+
+  it.each([
+    'The Antarctic cores put temperature first, but across the globe it went the other way.',
+    // "end of story" restricts; its "end" ends nothing, and "says" is no role.
+    'The Dome C core says warming first, CO2 later, end of story.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+});
