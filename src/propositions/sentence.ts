@@ -45,6 +45,24 @@ export interface ReadSentence {
   question: boolean;
   /** The `not` of a negative question ("Isn't it...?", "Doesn't that...?"): part of the form, no denial. */
   questionNot: number;
+  /**
+   * The first word of the sentence's own wording, past an utterance label ("[02:20]", "NARRATOR:",
+   * "Thu 2/", "4/") and a joining "and" or "but": where "This shows...", "So..." or "The more..." opens.
+   */
+  opening: number;
+}
+
+/** An utterance label before a sentence's own words: a time stamp, a speaker, a post number. */
+const UTTERANCE_LABEL = /^\s*(?:[-*+•>↳]\s+)?(?:\[[^\]\n]{1,24}\]\s*)?(?:(?:\p{L}{2,9}\.?\s+)?\d{1,3}\/\s+)?(?:\p{Lu}[\p{L}'’.-]*(?:\s\p{Lu}[\p{L}'’.-]*){0,2}:\s+)?/u;
+/** Words that join a sentence to the one before without being part of its own opening. */
+const JOINING = new Set(['and', 'but', 'yet', 'now', 'well', 'ok', 'okay']);
+
+function openingOf(text: string, words: readonly Word[]): number {
+  const label = UTTERANCE_LABEL.exec(text)?.[0].length ?? 0;
+  let i = words.findIndex((w) => w.start >= label);
+  if (i < 0) return 0;
+  while (JOINING.has(words[i]?.text ?? '') && i + 1 < words.length) i += 1;
+  return i;
 }
 
 const CONTRAST = ['but', 'while', 'whereas', 'although', 'though', 'yet', 'however'];
@@ -88,7 +106,7 @@ export function readSentence(text: string, lexicon: CompiledLexicon): ReadSenten
   const inside = (i: number, cls: string, key?: string) => of(cls, key).some((h) => h.first <= i && i <= h.last);
   const question = /\?\s*["”’)]*\s*$/u.test(text);
   const questionNot = question && AUXILIARIES.has(words[0]?.text ?? '') && words[1]?.text === 'not' ? 1 : -1;
-  return { text, words, hits, of, inside, things: thingsOf(words, hits), question, questionNot };
+  return { text, words, hits, of, inside, things: thingsOf(words, hits), question, questionNot, opening: openingOf(text, words) };
 }
 
 /** Entities, regions (as the temperature of that region) and pronouns, left to right. */
