@@ -155,3 +155,58 @@ describe('manner anaphora carries a regional order over to the globe', () => {
     expect(await serious(text)).toEqual([]);
   });
 });
+
+// CO2 forcing grows with the logarithm of the concentration, so each added ppm warms a little less
+// than the one before: Myhre et al. 1998, Geophysical Research Letters 25, 2715-2718; Forster et al.
+// 2021, IPCC AR6 WG1 chapter 7.
+describe('a correlative comparison ("the more X, the Y-er Z")', () => {
+  it.each([
+    'The greater the concentration of CO2, the stronger the push from every additional ppm.',
+    'The higher the CO2 level, the more warming each added ppm brings.',
+    'The more carbon dioxide piles up, the larger the effect of each extra ppm.',
+  ])('flags the effect per unit growing: %s', async (text) => {
+    expect(await serious(text)).toContain('direction.co2-forcing-logarithmic');
+  });
+
+  it.each([
+    'The more carbon dioxide already in the air, the less each extra ppm warms.',
+    'The higher the CO2 level, the smaller the warming from each added ppm.',
+    // No unit of CO2 in the second half: an amount, not the effect per unit.
+    'The more CO2 the ocean released, the warmer the planet became.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+});
+
+// The air in an ice core is younger than the ice around it (it is sealed at the base of the firn):
+// Schwander and Stauffer 1984, Nature 311, 45-47 (from memory); Parrenin et al. 2013, Science 339.
+describe('a dating verb with a degree before its order word compares ages', () => {
+  it.each([
+    'The trapped gas dates from centuries before the ice that holds it.',
+    'The air in each bubble dates from well before the surrounding ice.',
+    'The bubbles date back to long before the snow layer around them.',
+  ])('flags the air as older: %s', async (text) => {
+    expect(await serious(text)).toContain('direction.trapped-air-younger-than-ice');
+  });
+
+  it.each([
+    'The trapped air dates from a few centuries after the ice around it.',
+    'The air in the bubbles dates from well after the snow that encloses it.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+});
+
+describe("a sentence's own opening is past its utterance label", () => {
+  it.each([
+    'NARRATOR: The Vostok record puts Antarctic warming first.\nNARRATOR: And this shows that the entire globe warmed before CO2.',
+    'Thu 2/ The Dome C ice shows temperature leading CO2 by centuries.\n\nThu 3/ This means the whole world warmed first.',
+    '[02:10] In the Dome F core the warming starts ahead of CO2.\n[02:20] And that tells us that across the whole planet the warming came first.',
+  ])('reads back to the record: %j', async (text) => {
+    expect(await serious(text)).toContain('scope.antarctic-lag-as-global');
+  });
+
+  it('passes a regional order read back', async () => {
+    expect(await serious('[02:10] In the Dome F core the warming starts ahead of CO2.\n[02:20] And that tells us that in Antarctica the warming came first.')).toEqual([]);
+  });
+});
