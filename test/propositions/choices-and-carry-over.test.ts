@@ -210,3 +210,24 @@ describe("a sentence's own opening is past its utterance label", () => {
     expect(await serious('[02:10] In the Dome F core the warming starts ahead of CO2.\n[02:20] And that tells us that in Antarctica the warming came first.')).toEqual([]);
   });
 });
+
+// A lag of CO2 behind Antarctic temperature does not show that CO2 had no warming effect: Shakun
+// et al. 2012, Nature 484, 49-54; Parrenin et al. 2013, Science 339, 1060-1063 (from memory).
+describe('a question from one voice answered by another', () => {
+  it.each([
+    '@kay: So how could CO2 be the cause if it came 800 years later?\n↳ @lin: Easily, it amplified what the orbit started.',
+    '[18:20] Mo: how could CO2 warm anything if it came second?\n[18:21] Jess: Because it amplified what the orbit began.',
+    'TARA: Why would CO2 matter when it trails the warming by centuries?\nODD: Because it amplifies that warming.',
+  ])('is asked, not asserted: %j', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+
+  it.each([
+    // The same speaker goes on: the question stays rhetorical.
+    '[18:20] Mo: how could CO2 warm anything if it came second?\n[18:22] Mo: exactly, it can not.',
+    // A numbered thread is one writer's.
+    '11/ So if CO2 only rose after the warming, how could it have caused any of it?\n12/ The orbit did the whole job.',
+  ])('stays the writer’s own: %j', async (text) => {
+    expect(await serious(text)).toContain('logic.lag-rules-out-cause');
+  });
+});
