@@ -192,6 +192,14 @@ function isReported(s: ReadSentence): boolean {
  * writer's own former view, told as past ("used to" or "once" after "I" or "we").
  */
 function isFormerOwnView(s: ReadSentence): boolean {
+  // "For a long time we said...", "Until recently, textbooks gave...": a report verb in the simple
+  // past, a few words after a time now past (lexicon `stance.former-time`).
+  const past = (v: LexHit) => {
+    const w = s.words[v.first]?.text ?? '';
+    return w !== v.base && !w.endsWith('ing') && !/s$/u.test(w) && !['have', 'has', "'ve"].includes(s.words[v.first - 1]?.text ?? '');
+  };
+  const former = s.of('stance', 'former-time').some((t) => s.of('stance', 'report-verbs').some((v) => v.first > t.last && v.first - t.last <= 5 && past(v)));
+  if (former) return true;
   return s.words.some((w, i) => (w.text === 'i' || w.text === 'we') && ((s.words[i + 1]?.text === 'used' && s.words[i + 2]?.text === 'to') || (s.words[i + 1]?.text === 'once' && s.of('stance', 'report-verbs').some((v) => v.first === i + 2))));
 }
 

@@ -231,3 +231,26 @@ describe('a question from one voice answered by another', () => {
     expect(await serious(text)).toContain('logic.lag-rules-out-cause');
   });
 });
+
+// Warmer water holds less dissolved CO2 (solubility falls with temperature): Weiss 1974, Marine
+// Chemistry 2, 203-215. The air in a core is younger than its ice: Schwander and Stauffer 1984 (from
+// memory). East Antarctic LGM cooling about 4-7 °C by the newer estimates: Buizert et al. 2021,
+// Science 372, 1097-1101 (from memory).
+describe('a view set in a time now past is an earlier view', () => {
+  it.each([
+    'At one time researchers believed that warm water holds more CO2.',
+    'Until recently, many of us thought that warmer seas hold more dissolved CO2.',
+    'For decades textbooks claimed that the air in the bubbles is older than the ice around it.',
+  ])('becomes a note: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+
+  it.each([
+    // A perfect ("we have known") is still held; a time with no report verb is no view at all.
+    'For years we have known that warm water holds less CO2 than cold water, and warmer seas hold more CO2 too.',
+    'For a long time now, warm water has held more CO2 than cold water.',
+    'At first, the warmer ocean took up more CO2.',
+  ])('stays the writer’s own: %s', async (text) => {
+    expect(await serious(text)).toContain('direction.co2-solubility-falls-with-warming');
+  });
+});
