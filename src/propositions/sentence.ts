@@ -84,12 +84,27 @@ export function readSentence(text: string, lexicon: CompiledLexicon): ReadSenten
   let segment = 0;
   let lastClause = 0;
   let pendingBreak = false;
-  for (const token of tokens) {
+  let joinDigits = false;
+  for (const [k, token] of tokens.entries()) {
     if (!token.isWord) {
+      // "1,120 ppm": a thousands separator joins the digits on either side; it breaks no segment.
+      const prev = words.at(-1);
+      const following = tokens[k + 1];
+      if (token.text === ',' && prev !== undefined && prev.end === token.start && /^\d[\d,]*$/u.test(prev.text) && following?.isWord === true && following.start === token.end && /^\d{3}(?!\d)/u.test(following.text)) {
+        joinDigits = true;
+        continue;
+      }
       if (token.text === ',' || token.clause !== lastClause) pendingBreak = true;
       lastClause = token.clause;
       continue;
     }
+    const last = words.at(-1);
+    if (joinDigits && last !== undefined) {
+      joinDigits = false;
+      words[words.length - 1] = { ...last, text: `${last.text},${token.text}`, end: token.end };
+      continue;
+    }
+    joinDigits = false;
     // "Greenland’s" reads as "greenland's"; "that's" as "that is" (the copula reads a record as something).
     const text = token.text.replace(/’/gu, "'");
     const copula = COPULA_CONTRACTION.exec(text);

@@ -254,3 +254,22 @@ describe('a view set in a time now past is an earlier view', () => {
     expect(await serious(text)).toContain('direction.co2-solubility-falls-with-warming');
   });
 });
+
+// About the same forcing for each doubling of CO2, so a step at a higher level adds no more than
+// the same step lower down: Myhre et al. 1998, Geophysical Research Letters 25, 2715-2718.
+describe('a thousands separator joins its digits', () => {
+  it.each([
+    'Raising CO2 from 1,000 to 2,000 ppm would add much more forcing than raising it from 250 to 500 ppm.',
+    'Going from 560 to 1,120 ppm traps far more heat than going from 280 to 560 ppm did.',
+    'The step from 1,200 to 1,300 ppm warms more than the step from 300 to 400 ppm.',
+  ])('reads the levels whole: %s', async (text) => {
+    expect(await serious(text)).toContain('direction.co2-forcing-logarithmic');
+  });
+
+  it.each([
+    'The step from 1,200 to 1,300 ppm warms less than the step from 300 to 400 ppm.',
+    'Our museum welcomed 1,250 visitors, and CO2 in the cores rose from 190 to 280 ppm.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+});
