@@ -8,7 +8,7 @@
  */
 import { phraseWords, type LexHit } from './lexicon.js';
 import { appositionSubject, clauseSubject, kindOf, PREPOSITIONS, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
-import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
+import { denialsBefore, NEGATIONS, type ReadSentence, type Thing } from './sentence.js';
 import type { Cause, Polarity } from './types.js';
 
 /** Words that make the next word a noun ("the end", "of warming"): no verb follows them. */
@@ -382,8 +382,15 @@ export function polarityAt(s: ReadSentence, i: number): Polarity {
     if (w === 'whether' && s.words[k]?.segment === seg) return 'open';
     if (INFERENCE_VERBS.has(w) && denialsBefore(s, k, 3) % 2 === 1) return 'open';
   }
-  return denialsBefore(s, i) % 2 === 1 ? 'denied' : 'asserted';
+  const polarity = denialsBefore(s, i) % 2 === 1 ? 'denied' : 'asserted';
+  // "a lag would be no evidence that CO2 cannot warm the climate": a denial inside what a denied
+  // ground ("no evidence that", "no reason to think") introduces is left open, not asserted.
+  if (polarity === 'denied' && s.words.some((w, k) => k < i && GROUNDS.has(w.text) && denialsBefore(s, k, 3) % 2 === 1 && s.words.slice(k + 1, i).some((x) => NEGATIONS.has(x.text)))) return 'open';
+  return polarity;
 }
+
+/** Nouns that give grounds for a claim ("evidence that", "reason to think"). */
+const GROUNDS = new Set(['evidence', 'proof', 'sign', 'indication', 'reason', 'grounds', 'basis', 'case']);
 
 function isCo2Effect(s: ReadSentence, h: LexHit): boolean {
   const phrase = s.words.slice(h.first, h.last + 1).map((w) => w.text).join(' ');

@@ -273,3 +273,22 @@ describe('a thousands separator joins its digits', () => {
     expect(await serious(text)).toEqual([]);
   });
 });
+
+// A lag of CO2 behind Antarctic temperature does not show that CO2 had no warming effect: Shakun
+// et al. 2012, Nature 484, 49-54; Pedro et al. 2012, Climate of the Past 8, 1213-1221.
+describe('a denial inside a denied ground ("no evidence that ... cannot") is left open', () => {
+  it.each([
+    'A lag of a few centuries is no proof that CO2 could not have amplified the warming.',
+    'A lag in Antarctica gives no reason to think that CO2 did not warm the planet.',
+    'Trailing the warming by a few centuries is no sign that CO2 never added any warmth.',
+  ])('passes: %s', async (text) => {
+    expect(await serious(text)).toEqual([]);
+  });
+
+  it.each([
+    'CO2 lagged temperature, so there is no evidence it can have caused any warming.',
+    'The lag is proof that CO2 cannot have caused the warming.',
+  ])('still flags: %s', async (text) => {
+    expect(await serious(text)).toContain('logic.lag-rules-out-cause');
+  });
+});
