@@ -7,8 +7,8 @@
  *   names no effect; an -ing change after an article and a modifier is a noun;
  * - a casting verb with a predicate noun after its object ("makes the cores a confession") acts on nothing;
  * - only the orbit may alone *start* a deglaciation;
- * - a global order with a lag figure and no record is the direction fact; with a record named it is
- *   the Antarctic lag read as global;
+ * - a global order with no record and no counted lag figure is the direction fact; with a record or
+ *   a figure in years named it is the Antarctic lag read as global;
  * - a list item or post reads on from the block just before it (its lead-in);
  * - an elliptic clause ("so did the planet") and manner anaphora ("that's how it went worldwide")
  *   carry a regional record's change or order over to the globe.
@@ -90,15 +90,20 @@ describe('a global order: the direction fact without a record, the lag read as g
   it.each([
     'Across the whole globe, temperature climbed several centuries ahead of carbon dioxide.',
     'Averaged over the planet, warming began a few hundred years before CO2 rose.',
-    'The world as a whole warmed about 600 years before the CO2 went up.',
+    'The world as a whole warmed some centuries before the CO2 went up.',
   ])('direction: %s', async (text) => {
     const ids = await serious(text);
     expect(ids).toContain('direction.global-co2-ahead-of-warming');
     expect(ids).not.toContain('scope.antarctic-lag-as-global');
   });
 
-  it('scope when the record is named', async () => {
-    expect(await serious('The Vostok core shows that worldwide, temperature rose 800 years before CO2.')).toContain('scope.antarctic-lag-as-global');
+  it.each([
+    'The Vostok core shows that worldwide, temperature rose centuries before CO2.',
+    // The lag's own figure, a number of years as the Antarctic studies give it (Caillon et al. 2003, Science 299).
+    'Over the whole planet the warming ran some 700 years ahead of the carbon dioxide.',
+    'Earth as a whole heated up six hundred years before CO2 climbed.',
+  ])('scope when the record or the lag figure is named: %s', async (text) => {
+    expect(await serious(text)).toContain('scope.antarctic-lag-as-global');
   });
 });
 

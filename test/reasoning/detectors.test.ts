@@ -32,7 +32,7 @@ const CASES: [string[], number, Expected[]][] = [
   [['Temperature and CO2 rose together, and that fits the picture of a feedback, although the match alone does not prove it.'], 0, []],
   [['The Vostok ice core shows that global temperature swung by about 10 °C between ice ages and warm periods.'], 0, [['scope.regional-record-as-global', 'warning', 31, 49, 'global temperature']]],
   [['The Vostok record shows Antarctic temperature, which changed roughly twice as much as the global average.'], 0, []],
-  [['Globally, temperature rose about 800 years before CO2 at the end of the last ice age.'], 0, [['direction.global-co2-ahead-of-warming', 'warning', 43, 49, 'before']]],
+  [['Globally, temperature rose about 800 years before CO2 at the end of the last ice age.'], 0, [['scope.antarctic-lag-as-global', 'warning', 33, 49, '800 years before']]],
   [['Antarctic temperature may have led CO2 by a few hundred years at the very start of the deglaciation, but global temperature followed CO2.'], 0, []],
   [['The deglacial warming was caused entirely by the Milankovitch cycles.'], 0, [['logic.single-cause', 'warning', 26, 32, 'caused']]],
   [['Orbital changes alone were too weak to end the ice age; the CO2 feedback and shrinking ice sheets did much of the work.'], 0, []],

@@ -25,7 +25,7 @@ beforeAll(async () => {
 const LAG = 'logic.lag-rules-out-cause';
 const SINGLE = 'logic.single-cause';
 const REGIONAL = 'scope.regional-record-as-global';
-const GLOBAL_ORDER = 'direction.global-co2-ahead-of-warming';
+const ANT_LAG = 'scope.antarctic-lag-as-global';
 const SOLUBILITY = 'direction.co2-solubility-falls-with-warming';
 
 // [sentence, expected flags as [rule id, start, end, flagged words]]
@@ -35,8 +35,7 @@ const FLAGGED: [string, [string, number, number, string][]][] = [
   ["The warming that ended the last ice age had one cause: the extra summer sunlight that Earth's changing orbit sent to the far north.", [[SINGLE, 40, 53, 'had one cause']]],
   ['The great northern ice sheets melted for one reason only: rising carbon dioxide.', [[SINGLE, 37, 56, 'for one reason only']]],
   ['Whatever the Dome C thermometer says happened in Antarctica is what happened to the planet as a whole.', [[REGIONAL, 84, 90, 'planet']]],
-  // A global order with a lag figure and no record named is the direction fact, as the blind writers key it.
-  ['Around the globe, temperatures started climbing about 800 years before carbon dioxide did.', [[GLOBAL_ORDER, 64, 70, 'before']]],
+  ['Around the globe, temperatures started climbing about 800 years before carbon dioxide did.', [[ANT_LAG, 54, 70, '800 years before']]],
   ['As the seas warm they absorb more CO₂, which is why ocean acidification is speeding up.', [[SOLUBILITY, 7, 33, 'seas warm they absorb more']]],
   ['As the oceans cooled going into each ice age, they released carbon dioxide into the air.', [[SOLUBILITY, 7, 59, 'oceans cooled going into each ice age, they released']]],
   ['The oceans release CO2 as they cool.', [[SOLUBILITY, 11, 35, 'release CO2 as they cool']]],

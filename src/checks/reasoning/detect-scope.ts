@@ -22,6 +22,7 @@
 import { findPhrases } from '../../claims/frames-match.js';
 import { readsBack } from '../reads-back.js';
 import { regionOwnsEntity } from '../../propositions/sentence.js';
+import type { ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isTemperatureFirst } from './queries.js';
 
@@ -146,7 +147,10 @@ function detectRegional(input: DetectInput): Cue[] {
  */
 function detectLag({ index, read }: DetectInput): Cue[] {
   const here = read(index);
-  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && o.recordNamed);
+  // The lag read as global: a record named, or the lag's own figure ("about 800 years", "600 to 800
+  // years": a number of years, as the Antarctic studies give it). A global order with no record and
+  // no figure ("several centuries before") is the direction fact global-co2-ahead-of-warming.
+  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && (o.recordNamed || (here !== undefined && countedSpan(here.s, o.start))));
   if (here === undefined || order === undefined) return [];
   // "about 800 years before": the lag figure just before the order word is part of the claim.
   const at = here.s.words.findIndex((w) => w.start === order.start);
@@ -154,6 +158,15 @@ function detectLag({ index, read }: DetectInput): Cue[] {
   const figure = lead.findIndex((w) => /^(?:\d[\d,.]*|years?|centur(?:y|ies)|millenni(?:um|a)|decades?|few|several|hundreds?)$/u.test(w.text));
   const start = figure < 0 ? order.start : (lead[figure]?.start ?? order.start);
   return [{ start, end: order.end }];
+}
+
+const SPAN_UNITS = /^(?:years?|centur(?:y|ies)|millenni(?:um|a)|decades?|kyr)$/u;
+const COUNTS = /^(?:\d[\d,.]*|one|two|three|four|five|six|seven|eight|nine|ten)$/u;
+
+/** A span counted in numbers ("about 800 years", "600 to 800 years") in the clause of the order at `offset`. */
+function countedSpan(s: ReadSentence, offset: number): boolean {
+  const clause = s.words.find((w) => w.start >= offset)?.clause;
+  return s.words.some((w, j) => w.clause === clause && SPAN_UNITS.test(w.text) && [s.words[j - 1], s.words[j - 2]].some((x) => x !== undefined && COUNTS.test(x.text)));
 }
 
 /**
