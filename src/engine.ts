@@ -254,7 +254,8 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       // beside its block, names a subject.
       const inWindow = nextTo || named(index - at, window.length);
       const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text)));
-      const here = at === index ? opening : context;
+      // A block's first sentence reads on from the blocks just before it in the reasoning checks too.
+      const here = at === index ? (index === 0 ? withLeadIn(opening, leadInHere()) : opening) : context;
       const previousOnTopic = (): boolean => inWindow && topic.test(window[at - 1] ?? '');
       // The first sentences of a block read on from the blocks just before it (its lead-in).
       const lead = at === index && index < CONTEXT_SENTENCES && (DIGIT.test(sentence.text) || hasTwoNumerals(sentence.text)) ? leadInHere() : [];
@@ -334,7 +335,7 @@ function examineCached(
   leadIn: readonly string[],
 ): SentenceFindings | undefined {
   const previous = previousOnTopic();
-  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.scene ?? '', leadIn], () =>
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.scene ?? '', leadIn, context.leadIn ?? []], () =>
     examineSentence(paragraph, index, packs, onTopic, context, () => previous, leadIn),
   );
 }
@@ -345,6 +346,16 @@ interface SentenceFindings {
   bindings: Binding[];
   verdicts: Verdict[];
   drafts: FlagDraft[];
+}
+
+/** `context` with the lead-in the reasoning checks read a block's first sentence with, when there is one. */
+function withLeadIn(context: ParagraphContext, leadIn: readonly string[]): ParagraphContext {
+  return leadIn.length === 0 ? context : { ...context, leadIn };
+}
+
+/** `context` without a lead-in: the block's own sentences, as the stance of its numbers is read. */
+function ownBlock({ leadIn: _leadIn, ...context }: ParagraphContext): ParagraphContext {
+  return context;
 }
 
 /** How many earlier sentences of a paragraph the arithmetic and unit checks see. */
@@ -384,7 +395,7 @@ function examineSentence(
     const slips = single ? checkUnits(text, quantities, before) : [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
     if (slips.length === 0) return undefined;
     // A slip in a quotation or a marked passage is the quoted writer's, not the draft's.
-    const reading = paragraphReader(paragraph, packs, context)(index);
+    const reading = paragraphReader(paragraph, packs, ownBlock(context))(index);
     const drafts = reading === undefined ? slips : judgeByStance(slips, reading.stance);
     return { quantities, bindings: [], verdicts: [], drafts };
   }
@@ -394,7 +405,7 @@ function examineSentence(
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
   const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
   const reference = checkReferences(text, quantities, bindings, packs);
-  const reading = paragraphReader(paragraph, packs, context)(index);
+  const reading = paragraphReader(paragraph, packs, ownBlock(context))(index);
   const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before), ...checkRanks(text, packs)]);
   const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(paragraph, index, packs, context)];
   const p = reading?.props;

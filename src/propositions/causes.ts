@@ -6,13 +6,15 @@
  *    "The lag rules out carbon dioxide as a driver."                 agent co2, denied
  *    "Orbital changes alone ended the ice ages."                     agent orbit, exclusive
  */
-import type { LexHit } from './lexicon.js';
+import { phraseWords, type LexHit } from './lexicon.js';
 import { appositionSubject, clauseSubject, kindOf, PREPOSITIONS, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
-import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
+import { denialsBefore, NEGATIONS, type ReadSentence, type Thing } from './sentence.js';
 import type { Cause, Polarity } from './types.js';
 
 /** Words that make the next word a noun ("the end", "of warming"): no verb follows them. */
 const DETERMINERS = new Set(['the', 'a', 'an', 'its', 'their', 'our', 'of', 'in', 'for', 'with', 'from', 'after', 'before', 'than']);
+/** Articles and owners that open a noun phrase ("the resulting warming"). */
+const ARTICLES = new Set(['the', 'a', 'an', 'its', 'their', 'our', 'this', 'that']);
 const INFERENCE_VERBS = new Set(['mean', 'means', 'meant', 'show', 'shows', 'showed', 'prove', 'proves', 'proved', 'imply', 'implies', 'implied', 'follow', 'follows', 'suggest', 'suggests', 'tell', 'tells']);
 const OBJECT_LINKS = new Set(['of', 'in', 'on', 'for', 'behind', 'to']);
 const ROLE: Record<string, Cause['role']> = { follower: 'cause', verbs: 'cause', because: 'cause', 'because-only': 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
@@ -26,20 +28,30 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     .filter((h, _, all) => !all.some((o) => o !== h && o.first <= h.first && o.last >= h.last && o.last - o.first > h.last - h.first))
     // "orbital forcing" names the orbit: its "forcing" is no cause word of its own, and "within a few
     // centuries of each other" is a timing, not a feedback.
-    .filter((h) => ![...entities, ...s.of('order')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first));
+    // "end of story", "full stop": a restriction's own words cause nothing.
+    .filter((h) => ![...entities, ...s.of('order')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first))
+    .filter((h) => !s.of('exclusive').some((e) => e.first <= h.first && e.last >= h.last && e.last - e.first > h.last - h.first));
   const causes: Cause[] = [];
   for (const h of hits) {
     // `passive` only qualifies an `effects` word at the same place; it states nothing of its own.
     if (h.key === 'reverse' || h.key === 'either-or' || h.key === 'passive') continue;
+    // "the resulting warming", "a forced response": a part noun's verb forms are no noun.
+    if (NOUN_KEYS.has(h.key) && !asNoun(s, h)) continue;
     const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify';
     // "the end of the ice age" is a noun; "it was CO2 doing the pushing" is still a verb.
     if (verbLike && DETERMINERS.has(s.words[h.first - 1]?.text ?? '') && s.words[h.first - 2]?.text !== 'doing') continue;
+    // "the resulting warming", "its initial cooling": an -ing form after an article and one modifier
+    // (no thing of the lexicon) is a noun too.
+    if (verbLike && s.words[h.first]?.text.endsWith('ing') && ARTICLES.has(s.words[h.first - 2]?.text ?? '') && !s.things.some((t) => t.first <= h.first - 1 && h.first - 1 <= t.last)) continue;
     // "global warming", "Antarctic cooling": a region word before it makes the -ing form a noun.
     if (verbLike && s.words[h.first]?.text.endsWith('ing') && regions.some((r) => r.last === h.first - 1)) continue;
     if (h.key === 'effects' && s.words[h.first - 1]?.text === 'in') continue;
     // "does not make CO2 a bystander", "turns it into a mere follower": a casting verb puts its object
     // in the part the noun after it names; the verb itself causes nothing.
     if (h.key === 'verbs' && CASTING.has(s.words[h.first]?.text ?? '') && s.of('causes').some((o) => ['effects', 'roles', 'nouns'].includes(o.key) && o.first > h.last && o.first - h.last <= 4)) continue;
+    // "makes the cores a courtroom confession", "turned the debate into a shouting match": a casting verb
+    // whose object is followed by a predicate noun (an article past the object) casts; it acts on nothing.
+    if (h.key === 'verbs' && CASTING.has(s.words[h.first]?.text ?? '') && castsIntoNoun(s, h.last)) continue;
     if (h.key === 'without') {
       causes.push(...withoutAt(s, h, causes, previous));
       continue;
@@ -47,6 +59,21 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     causes.push(...causeAt(s, h, previous));
   }
   return [...causes, ...identityCauses(s)];
+}
+
+/** Keys whose phrases are nouns: they match as written or in the plural, never as a verb form. */
+const NOUN_KEYS = new Set(['effects', 'nouns', 'roles']);
+
+/** True when the words of noun hit `h` are its phrase as written or its plural ("effect", "effects"; not "effected"). */
+function asNoun(s: ReadSentence, h: LexHit): boolean {
+  if (h.base === undefined) return true;
+  const base = phraseWords(h.base);
+  const words = s.words.slice(h.first, h.last + 1).map((w) => w.text);
+  if (base.length !== words.length) return true;
+  return words.every((w, k) => {
+    const b = base[k] ?? '';
+    return w === b || w === `${b}s` || w === `${b}es` || (b.endsWith('y') && w === `${b.slice(0, -1)}ies`);
+  });
 }
 
 /** Agents an event can be said to be "all" of. */
@@ -267,6 +294,23 @@ function copulaSubject(s: ReadSentence, i: number): Thing | undefined {
 /** Verbs that cast their object in a part ("makes CO2 a passenger", "turns it into a bystander"). */
 const CASTING = new Set(['make', 'makes', 'made', 'making', 'render', 'renders', 'rendered', 'turn', 'turns', 'turned', 'reduce', 'reduces', 'reduced']);
 
+/**
+ * A predicate noun after the object of a casting verb at `verb`: "makes [the cores] a confession",
+ * "turned [it] into a match". The noun phrase states no change ("made the planet a warmer place" is
+ * a cause, as its comparative shows).
+ */
+function castsIntoNoun(s: ReadSentence, verb: number): boolean {
+  const segment = s.words[verb]?.segment;
+  for (let k = verb + 2; k <= verb + 5; k += 1) {
+    const w = s.words[k];
+    if (w === undefined || w.segment !== segment) return false;
+    if (w.text !== 'a' && w.text !== 'an') continue;
+    const states = (cls: string) => s.of(cls).some((o) => o.first > k && o.first <= k + 3);
+    return !states('changes') && !states('comparatives');
+  }
+  return false;
+}
+
 /** "does not make CO2 a bystander": the object the casting verb before the part noun names. */
 function madeInto(s: ReadSentence, h: LexHit): Thing | undefined {
   for (let k = h.first - 1; k >= Math.max(0, h.first - 6); k -= 1) {
@@ -339,8 +383,15 @@ export function polarityAt(s: ReadSentence, i: number): Polarity {
     if (w === 'whether' && s.words[k]?.segment === seg) return 'open';
     if (INFERENCE_VERBS.has(w) && denialsBefore(s, k, 3) % 2 === 1) return 'open';
   }
-  return denialsBefore(s, i) % 2 === 1 ? 'denied' : 'asserted';
+  const polarity = denialsBefore(s, i) % 2 === 1 ? 'denied' : 'asserted';
+  // "a lag would be no evidence that CO2 cannot warm the climate": a denial inside what a denied
+  // ground ("no evidence that", "no reason to think") introduces is left open, not asserted.
+  if (polarity === 'denied' && s.words.some((w, k) => k < i && GROUNDS.has(w.text) && denialsBefore(s, k, 3) % 2 === 1 && s.words.slice(k + 1, i).some((x) => NEGATIONS.has(x.text)))) return 'open';
+  return polarity;
 }
+
+/** Nouns that give grounds for a claim ("evidence that", "reason to think"). */
+const GROUNDS = new Set(['evidence', 'proof', 'sign', 'indication', 'reason', 'grounds', 'basis', 'case']);
 
 function isCo2Effect(s: ReadSentence, h: LexHit): boolean {
   const phrase = s.words.slice(h.first, h.last + 1).map((w) => w.text).join(' ');

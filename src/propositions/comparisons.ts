@@ -43,6 +43,38 @@ export function readComparisons(s: ReadSentence, previous?: ReadSentence): Compa
     const name = (t: Thing) => t.region ?? placed(t) ?? kindOf(s, t, previous) ?? t.kind;
     out.push({ kind: 'comparison', a: name(a), b: name(b), attribute, sign, start: s.words[a.first]?.start ?? 0, end: s.words[b.last]?.end ?? 0 });
   }
+  return [...out, ...datedAges(s, previous)];
+}
+
+/** Verbs that place a thing in time ("the air dates from before the snow"). */
+const DATING = new Set(['date', 'dates', 'dated', 'dating']);
+/** Words that may stand between "dates from" and its "before"/"after": a degree or a span. */
+const DEGREE = new Set(['well', 'long', 'far', 'much', 'just', 'shortly', 'slightly', 'somewhat', 'centuries', 'millennia', 'decades', 'years', 'way']);
+
+/**
+ * "The air dates from well before the snow that entombs it": a dating verb, "from" (or "to", "back
+ * to"), a degree word or two, then an order word, compares the ages of its subject and the thing
+ * after: before is older, after younger. The lexicon's own "date from before" covers the bare form.
+ */
+function datedAges(s: ReadSentence, previous?: ReadSentence): Comparison[] {
+  const out: Comparison[] = [];
+  s.words.forEach((w, i) => {
+    if (!DATING.has(w.text)) return;
+    let k = i + 1;
+    if (s.words[k]?.text === 'back') k += 1;
+    if (!['from', 'to'].includes(s.words[k]?.text ?? '')) return;
+    k += 1;
+    const start = k;
+    while (k < start + 2 && DEGREE.has(s.words[k]?.text ?? '')) k += 1;
+    if (k === start) return;
+    const order = s.of('order').find((h) => h.first === k && (h.key === 'before' || h.key === 'after'));
+    if (order === undefined || denialsBefore(s, i, 4) % 2 === 1) return;
+    const a = subjectOf(s, i) ?? thingBefore(s, i, 'clause');
+    const b = thingAfter(s, order.last, 6);
+    if (a === undefined || b === undefined) return;
+    const name = (t: Thing) => kindOf(s, t, previous) ?? t.kind;
+    out.push({ kind: 'comparison', a: name(a), b: name(b), attribute: 'age', sign: order.key === 'before' ? 1 : -1, start: s.words[a.first]?.start ?? 0, end: s.words[b.last]?.end ?? 0 });
+  });
   return out;
 }
 

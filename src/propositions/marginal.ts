@@ -36,7 +36,32 @@ export function readMarginal(s: ReadSentence): Change[] {
   }
   const ranked = rankedIncrements(s);
   if (ranked !== undefined) changes.push(ranked);
+  const correlated = correlative(s);
+  if (correlated !== undefined && changes.length === 0) changes.push(correlated);
   return changes;
+}
+
+/**
+ * A correlative comparison ("the more X, the Y-er Z"): two halves, each opened by "the" and a
+ * comparative, the second at the start of a later segment. When the first half is about the amount
+ * of CO2 and the second holds one more unit, the effect per unit moves as the two signs multiply:
+ *
+ *   "The more CO2 there is, the bigger the kick from each extra ppm."          +1
+ *   "The higher the CO2 level, the less each added ppm warms."                 -1
+ */
+function correlative(s: ReadSentence): Change | undefined {
+  const opens = (i: number) => s.words[i]?.text === 'the' && (i === s.opening || s.words[i - 1]?.segment !== s.words[i]?.segment);
+  const signAt = (i: number) => s.hits.filter((h) => h.first === i).map(SIGN_OF).find((x) => x !== 0);
+  const halves = s.words.flatMap((_, i) => (opens(i) && signAt(i + 1) !== undefined ? [{ at: i, sign: signAt(i + 1) as 1 | -1 }] : []));
+  const [first, second] = halves;
+  if (first === undefined || second === undefined) return undefined;
+  const segment = (i: number) => s.words[i]?.segment ?? -1;
+  const inFirst = (i: number) => i > first.at && segment(i) === segment(first.at);
+  if (!s.of('entities', 'co2').some((h) => inFirst(h.first)) && !s.of('entities', 'co2-unit').some((h) => inFirst(h.first))) return undefined;
+  const unit = incrementsOf(s).find((m) => m.first > second.at && s.words[m.first]?.clause === s.words[second.at]?.clause);
+  if (unit === undefined) return undefined;
+  const last = s.words.reduce((end, w, i) => (w.clause === s.words[second.at]?.clause ? i : end), unit.last);
+  return change(s, (first.sign * second.sign) as 1 | -1, first.at, last);
 }
 
 /** Effect words: warming, a cause, a role or a strength ("punch"), an effect noun. */

@@ -26,7 +26,7 @@ export function readOrders(s: ReadSentence, previous?: ReadSentence): Order[] {
   const names = (r: ReadSentence | undefined) => r !== undefined && (r.of('entities', 'ice-core').length > 0 || r.of('regions', 'antarctic').length > 0);
   // "The Vostok core ... It shows the planet warmed first": the record may be named one sentence back.
   // Only a sentence that reads that record ("It shows...", "This means...") takes it from there.
-  const readsBack = ['it', 'this', 'that', 'these', 'those', 'they', 'here'].includes(s.words[0]?.text ?? '');
+  const readsBack = ['it', 'this', 'that', 'these', 'those', 'they', 'here'].includes(s.words[s.opening]?.text ?? '');
   const recordNamed = names(s) || (readsBack && names(previous));
   // "said Professor X, who led the study": a speaker's part in the work orders no events.
   const speakers = s.of('stance', 'insider');

@@ -45,6 +45,24 @@ export interface ReadSentence {
   question: boolean;
   /** The `not` of a negative question ("Isn't it...?", "Doesn't that...?"): part of the form, no denial. */
   questionNot: number;
+  /**
+   * The first word of the sentence's own wording, past an utterance label ("[02:20]", "NARRATOR:",
+   * "Thu 2/", "4/") and a joining "and" or "but": where "This shows...", "So..." or "The more..." opens.
+   */
+  opening: number;
+}
+
+/** An utterance label before a sentence's own words: a time stamp, a speaker, a post number. */
+const UTTERANCE_LABEL = /^\s*(?:[-*+•>↳]\s+)?(?:\[[^\]\n]{1,24}\]\s*)?(?:(?:\p{L}{2,9}\.?\s+)?\d{1,3}\/\s+)?(?:\p{Lu}[\p{L}'’.-]*(?:\s\p{Lu}[\p{L}'’.-]*){0,2}:\s+)?/u;
+/** Words that join a sentence to the one before without being part of its own opening. */
+const JOINING = new Set(['and', 'but', 'yet', 'now', 'well', 'ok', 'okay']);
+
+function openingOf(text: string, words: readonly Word[]): number {
+  const label = UTTERANCE_LABEL.exec(text)?.[0].length ?? 0;
+  let i = words.findIndex((w) => w.start >= label);
+  if (i < 0) return 0;
+  while (JOINING.has(words[i]?.text ?? '') && i + 1 < words.length) i += 1;
+  return i;
 }
 
 const CONTRAST = ['but', 'while', 'whereas', 'although', 'though', 'yet', 'however'];
@@ -66,12 +84,27 @@ export function readSentence(text: string, lexicon: CompiledLexicon): ReadSenten
   let segment = 0;
   let lastClause = 0;
   let pendingBreak = false;
-  for (const token of tokens) {
+  let joinDigits = false;
+  for (const [k, token] of tokens.entries()) {
     if (!token.isWord) {
+      // "1,120 ppm": a thousands separator joins the digits on either side; it breaks no segment.
+      const prev = words.at(-1);
+      const following = tokens[k + 1];
+      if (token.text === ',' && prev !== undefined && prev.end === token.start && /^\d[\d,]*$/u.test(prev.text) && following?.isWord === true && following.start === token.end && /^\d{3}(?!\d)/u.test(following.text)) {
+        joinDigits = true;
+        continue;
+      }
       if (token.text === ',' || token.clause !== lastClause) pendingBreak = true;
       lastClause = token.clause;
       continue;
     }
+    const last = words.at(-1);
+    if (joinDigits && last !== undefined) {
+      joinDigits = false;
+      words[words.length - 1] = { ...last, text: `${last.text},${token.text}`, end: token.end };
+      continue;
+    }
+    joinDigits = false;
     // "Greenland’s" reads as "greenland's"; "that's" as "that is" (the copula reads a record as something).
     const text = token.text.replace(/’/gu, "'");
     const copula = COPULA_CONTRACTION.exec(text);
@@ -88,7 +121,7 @@ export function readSentence(text: string, lexicon: CompiledLexicon): ReadSenten
   const inside = (i: number, cls: string, key?: string) => of(cls, key).some((h) => h.first <= i && i <= h.last);
   const question = /\?\s*["”’)]*\s*$/u.test(text);
   const questionNot = question && AUXILIARIES.has(words[0]?.text ?? '') && words[1]?.text === 'not' ? 1 : -1;
-  return { text, words, hits, of, inside, things: thingsOf(words, hits), question, questionNot };
+  return { text, words, hits, of, inside, things: thingsOf(words, hits), question, questionNot, opening: openingOf(text, words) };
 }
 
 /** Entities, regions (as the temperature of that region) and pronouns, left to right. */

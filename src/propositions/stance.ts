@@ -92,7 +92,10 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   if (first === 'q' || isReported(s)) return make('asked');
   // "Did you know the poles swing less?": a teaser that states its content as a fact.
   if ((first === 'did' || first === 'do') && s.words[1]?.text === 'you' && s.words[2]?.text === 'know') return make('asserted');
-  const answeredNext = context.next !== undefined && ANSWER_OPENERS.has(context.next.words[0]?.text ?? '');
+  const next = context.next;
+  // "[18:21] Jess: no, ...", "↳ @lin: Easily, ...": the answer opens past its speaker's label, and
+  // another speaker taking the floor right after a question answers it.
+  const answeredNext = next !== undefined && (ANSWER_OPENERS.has(next.words[0]?.text ?? '') || ANSWER_OPENERS.has(next.words[next.opening]?.text ?? '') || anotherVoice(s.text, next.text));
   // A segment opens a question with a wh-word or an auxiliary, after a joining word if any.
   const opens = (i: number) => {
     const at = JOINS.has(s.words[i]?.text ?? '') ? i + 1 : i;
@@ -111,6 +114,20 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   const premise = start > 2 && !WH.has(first) && !AUX.has(first) ? { questionFrom: s.words[start]?.start ?? 0 } : {};
   if ((how || negative) && !answeredNext) return { ...make('rhetorical', how), ...premise };
   return { ...make('asked'), ...premise };
+}
+
+/** A speaker's label that opens an utterance: "MO:", "[18:21] Jess:", "@lin", "↳ @lin:", "GWEN (front row):". */
+const SPEAKER = /^\s*(?:[-*+>↳]\s+)?(?:\[[^\]\n]{1,24}\]\s*)?(?:(@[\p{L}\p{N}_.-]+)|(\p{Lu}[\p{L}'’.-]*(?:\s\p{Lu}[\p{L}'’.-]*){0,2})\s*(?:\([^)\n]{1,30}\))?:\s)/u;
+
+function speakerOf(text: string): string | undefined {
+  const m = SPEAKER.exec(text);
+  return (m?.[1] ?? m?.[2])?.toLowerCase();
+}
+
+/** The next sentence opens with a speaker's label, and not this sentence's speaker. */
+function anotherVoice(text: string, next: string): boolean {
+  const them = speakerOf(next);
+  return them !== undefined && them !== speakerOf(text);
 }
 
 /**
@@ -175,6 +192,14 @@ function isReported(s: ReadSentence): boolean {
  * writer's own former view, told as past ("used to" or "once" after "I" or "we").
  */
 function isFormerOwnView(s: ReadSentence): boolean {
+  // "For a long time we said...", "Until recently, textbooks gave...": a report verb in the simple
+  // past, a few words after a time now past (lexicon `stance.former-time`).
+  const past = (v: LexHit) => {
+    const w = s.words[v.first]?.text ?? '';
+    return w !== v.base && !w.endsWith('ing') && !/s$/u.test(w) && !['have', 'has', "'ve"].includes(s.words[v.first - 1]?.text ?? '');
+  };
+  const former = s.of('stance', 'former-time').some((t) => s.of('stance', 'report-verbs').some((v) => v.first > t.last && v.first - t.last <= 5 && past(v)));
+  if (former) return true;
   return s.words.some((w, i) => (w.text === 'i' || w.text === 'we') && ((s.words[i + 1]?.text === 'used' && s.words[i + 2]?.text === 'to') || (s.words[i + 1]?.text === 'once' && s.of('stance', 'report-verbs').some((v) => v.first === i + 2))));
 }
 

@@ -78,10 +78,11 @@ const errors: Row[] = [
   ['science desk', 'One ice core from Dome Fuji gives us the global temperature for the past 720,000 years.', [REGIONAL]],
   ['audio guide', 'The deuterium line in this display is the global temperature record, read from Antarctic ice.', [REGIONAL]],
 
+  // A global order with no record and no figure ("centuries") is the direction fact (the blind writers key it so).
   ['science desk', 'Globally, temperature rose about 800 years before CO2 at the end of the last ice age.', [ANT_LAG]],
   ['science desk', 'Worldwide, the warming led carbon dioxide by 600 to 800 years.', [ANT_LAG]],
   ['newsletter', 'Ice cores show that CO2 lagged global temperature by about 800 years during each deglaciation.', [ANT_LAG]],
-  ['audio guide', 'The planet warmed centuries before carbon dioxide began to rise.', [ANT_LAG]],
+  ['audio guide', 'The planet warmed centuries before carbon dioxide began to rise.', [GLOBAL_ORDER]],
   ['science desk', 'Global temperatures started climbing roughly 1,000 years ahead of the CO2 rise.', [ANT_LAG]],
   ['science desk', 'Since Vostok shows Antarctica warming first, the whole Earth must have warmed before CO2 rose.', [ANT_LAG]],
 

@@ -43,7 +43,7 @@ const CASES: [string[], number, Expected[]][] = [
   [['The ice around each bubble is younger than the air trapped inside it.'], 0, [['direction.trapped-air-younger-than-ice', 'warning', 4, 50, 'ice around each bubble is younger than the air']]],
   [['The air in the bubbles is younger than the surrounding ice.'], 0, []],
   // Reported: unanswered stays (as a warning); answered in the paragraph passes.
-  [['Critics say temperature drives CO2, not the other way round.'], 0, [['logic.either-or-causation', 'note', 8, 59, 'say temperature drives CO2, not the other way round']]],
+  [['Critics say temperature drives CO2, not the other way round.'], 0, [['logic.either-or-causation', 'note', 12, 59, 'temperature drives CO2, not the other way round']]],
   [["'Temperature drives CO2, not the other way round,' one reader wrote to us.", 'In fact both are true at once.'], 0, []],
   [['Some people argue that the lag proves CO2 is unimportant, but a lag is exactly what a feedback produces.'], 0, []],
 ];

@@ -15,7 +15,7 @@ import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
 
 const REVERSE = /\b(?:not|never|rather than|instead of)\s+(?:\w+\s+){0,2}(?:the other way (?:round|around|about)|vice versa|the reverse|the opposite way)\b|\b(?:one-way|one way street|only one way)\b/iu;
 
-function detect({ index, read }: DetectInput): Cue[] {
+function detect({ index, own, read }: DetectInput): Cue[] {
   const here = read(index);
   if (here === undefined) return [];
   const loopAt = (i: number) => {
@@ -44,7 +44,8 @@ function detect({ index, read }: DetectInput): Cue[] {
   const picked = pickedSide(here.s, here.props.causes, direction);
   if (picked !== undefined) return [picked];
   // A neighbour answers only in the same voice: in a thread, the next reply is someone else's.
-  const sameVoice = (i: number) => !opensUtterance((i > index ? read(i) : here)?.s.text ?? '');
+  // A list item or a post before this block (its lead-in) is a claim of its own, and answers nothing here.
+  const sameVoice = (i: number) => i >= own && !opensUtterance((i > index ? read(i) : here)?.s.text ?? '');
   if ((sameVoice(index - 1) && loopAt(index - 1)) || (sameVoice(index + 1) && loopAt(index + 1))) return [];
   const frame = framedInWords(here.s, read(index - 1)?.s);
   if (frame !== undefined) return [frame];
@@ -65,13 +66,24 @@ function detect({ index, read }: DetectInput): Cue[] {
     if (denied !== undefined) return [{ start: Math.min(asserted.start, denied.start), end: Math.max(asserted.end, denied.end) }];
     // "Either CO2 drives temperature or temperature drives CO2": two directions set up as a choice.
     const choice = causes.find((c) => c.polarity === 'asserted' && direction(c) !== undefined && direction(c) !== direction(asserted));
-    if (choice !== undefined && here.s.words.some((w) => w.text === 'or' || w.text === 'either') && !here.s.question) {
+    if (choice !== undefined && joinedByOr(here.s, asserted, choice) && !here.s.question) {
       return [{ start: Math.min(asserted.start, choice.start), end: Math.max(asserted.end, choice.end) }];
     }
     const reverse = REVERSE.exec(here.s.text);
     if (reverse !== null && reverse.index >= asserted.end - 1) return [{ start: asserted.start, end: reverse.index + reverse[0].length }];
   }
   return [];
+}
+
+/**
+ * Two directions set up as a choice: an "or" stands between them, inside the stretch the two causes
+ * cover ("Either the ocean warmed and released CO2, or CO2 warmed the ocean"). An "or" elsewhere in
+ * the sentence ("..., so it's not one or the other") joins no choice of theirs.
+ */
+function joinedByOr(s: ReadSentence, a: Cause, b: Cause): boolean {
+  const from = Math.min(a.start, b.start);
+  const to = Math.max(a.end, b.end);
+  return s.words.some((w) => w.text === 'or' && w.start > from && w.end < to);
 }
 
 /**

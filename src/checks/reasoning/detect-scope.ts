@@ -22,6 +22,7 @@
 import { findPhrases } from '../../claims/frames-match.js';
 import { readsBack } from '../reads-back.js';
 import { regionOwnsEntity } from '../../propositions/sentence.js';
+import type { ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isTemperatureFirst } from './queries.js';
 
@@ -32,6 +33,11 @@ const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degre
 
 /** Words that open an inference from what comes before ("..., so the whole world..."). */
 const INFERENCE = new Set(['so', 'therefore', 'thus', 'hence', 'meaning', 'consequently']);
+
+/** An elliptic clause that repeats the predicate before it for a new subject: "so did", "as did", "did too". */
+const ELLIPSIS_OPENERS = new Set(['so', 'as', 'nor', 'neither']);
+const ELLIPSIS_AUX = new Set(['did', 'does', 'do', 'was', 'were', 'is', 'are', 'had', 'has', 'have']);
+const ELLIPSIS_CLOSERS = new Set(['too', 'also', 'likewise']);
 
 /** Words before "local" or "regional" that put the place away from it ("far from local influences"). */
 const AWAY_FROM = new Set(['far from', 'free of', 'free from', 'away from', 'immune to', 'shielded from', 'sheltered from']);
@@ -87,7 +93,10 @@ function detectRegional(input: DetectInput): Cue[] {
     const copula = (opener === 'that' || opener === 'this') && /^(?:is|was)$/u.test(own[1]?.text ?? '');
     const same = own.some((w) => w.text === 'same');
     const inference = INFERENCE.has(opener) && own.some((w) => /^\d/u.test(w.text) || TEMPERATURE_WORDS.test(w.text));
-    if (records.some((r) => (s.words[r.first]?.segment ?? 0) < segment)) return copula || same || inference;
+    // "..., so did the planet", "as did the whole Earth", "and the globe did too": an elliptic clause
+    // whose subject is the globe repeats the record's own change for it.
+    const elliptic = (ELLIPSIS_OPENERS.has(opener) && ELLIPSIS_AUX.has(own[1]?.text ?? '')) || (ELLIPSIS_AUX.has(own.at(-2)?.text ?? '') && ELLIPSIS_CLOSERS.has(own.at(-1)?.text ?? ''));
+    if (records.some((r) => (s.words[r.first]?.segment ?? 0) < segment)) return copula || same || inference || elliptic;
     return records.length === 0 && (copula || same) && recordIn(before);
   };
   // "Earth's changing orbit": a globe that owns an entity is no temperature of the globe.
@@ -138,7 +147,10 @@ function detectRegional(input: DetectInput): Cue[] {
  */
 function detectLag({ index, read }: DetectInput): Cue[] {
   const here = read(index);
-  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && (o.amount || o.recordNamed));
+  // The lag read as global: a record named, or the lag's own figure ("about 800 years", "600 to 800
+  // years": a number of years, as the Antarctic studies give it). A global order with no record and
+  // no figure ("several centuries before") is the direction fact global-co2-ahead-of-warming.
+  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && (o.recordNamed || (here !== undefined && countedSpan(here.s, o.start))));
   if (here === undefined || order === undefined) return [];
   // "about 800 years before": the lag figure just before the order word is part of the claim.
   const at = here.s.words.findIndex((w) => w.start === order.start);
@@ -146,6 +158,15 @@ function detectLag({ index, read }: DetectInput): Cue[] {
   const figure = lead.findIndex((w) => /^(?:\d[\d,.]*|years?|centur(?:y|ies)|millenni(?:um|a)|decades?|few|several|hundreds?)$/u.test(w.text));
   const start = figure < 0 ? order.start : (lead[figure]?.start ?? order.start);
   return [{ start, end: order.end }];
+}
+
+const SPAN_UNITS = /^(?:years?|centur(?:y|ies)|millenni(?:um|a)|decades?|kyr)$/u;
+const COUNTS = /^(?:\d[\d,.]*|one|two|three|four|five|six|seven|eight|nine|ten)$/u;
+
+/** A span counted in numbers ("about 800 years", "600 to 800 years") in the clause of the order at `offset`. */
+function countedSpan(s: ReadSentence, offset: number): boolean {
+  const clause = s.words.find((w) => w.start >= offset)?.clause;
+  return s.words.some((w, j) => w.clause === clause && SPAN_UNITS.test(w.text) && [s.words[j - 1], s.words[j - 2]].some((x) => x !== undefined && COUNTS.test(x.text)));
 }
 
 /**

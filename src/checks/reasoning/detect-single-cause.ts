@@ -22,7 +22,8 @@ function detect({ index, read }: DetectInput): Cue[] {
   // One agent singled out as the cause of the ice ages or of a warming: the orbit, CO2, or another
   // factor of the climate system ("for one reason only: the ocean currents switched back on").
   const single = here.props.causes.find(
-    (c) => c.polarity === 'asserted' && c.exclusive && c.role !== 'start' && c.role !== 'amplify' && SINGLE_AGENTS.has(c.agent ?? '') && c.patient !== 'co2',
+    // The orbit alone *starting* the warming is what the sources say; any other agent alone starting it is not.
+    (c) => c.polarity === 'asserted' && c.exclusive && !(c.role === 'start' && c.agent === 'orbit') && c.role !== 'amplify' && SINGLE_AGENTS.has(c.agent ?? '') && c.patient !== 'co2',
   );
   // "It was CO2 that pulled the planet out, after the orbit set things in motion": the other factor keeps a role.
   const other = single === undefined ? undefined : here.props.causes.find((c) => c.polarity === 'asserted' && c !== single && FACTORS.has(c.agent ?? '') && c.agent !== single.agent);

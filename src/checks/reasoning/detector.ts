@@ -15,6 +15,8 @@ export interface DetectInput {
   words: Slots;
   paragraph: readonly string[];
   index: number;
+  /** The first sentence of the block itself: those before it are its lead-in (the blocks just before). */
+  own: number;
   /** The propositions and stance of sentence `i` of the paragraph. */
   read: Reader;
 }

@@ -32,7 +32,11 @@ export { judgeByStance } from './stance-flags.js';
  * flag-precedence.ts. A flag on a claim the draft does not hold as its own (reported, quoted,
  * labelled a myth, asked...) becomes a note that says so.
  */
-export function checkReasoning(paragraph: string[], index: number, packs: LoadedPacks, context: ParagraphContext = {}): FlagDraft[] {
+export function checkReasoning(own: string[], at: number, packs: LoadedPacks, context: ParagraphContext = {}): FlagDraft[] {
+  // A lead-in stands before the paragraph: the sentence before a block's first is its last one.
+  const lead = context.leadIn ?? [];
+  const paragraph = lead.length === 0 ? own : [...lead, ...own];
+  const index = at + lead.length;
   const text = paragraph[index];
   if (text === undefined) return [];
   const compiled = compilePacks(packs);
@@ -54,7 +58,7 @@ export function checkReasoning(paragraph: string[], index: number, packs: Loaded
   const found: { flag: FlagDraft }[] = [];
   for (const { check, entry, words, prefilter } of compiled.checks) {
     if (!prefilter.every((re) => re.test(text))) continue;
-    const input = { get sentence() { return sentence(); }, words, paragraph, index, read };
+    const input = { get sentence() { return sentence(); }, words, paragraph, index, own: lead.length, read };
     for (const cue of entry.detect(input)) {
       found.push({ flag: { ruleId: check.id, level: check.level, ...cue, reason: check.reason, suggestion: check.suggestion, sources: check.sources } });
     }

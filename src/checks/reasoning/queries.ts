@@ -31,7 +31,7 @@ const INFERENCE_OPENERS = /^(?:so|therefore|thus|hence|consequently|clearly|obvi
 
 /** The sentence draws a conclusion from the one before ("So...", "That means...", "This shows..."). */
 export function opensWithInference(s: ReadSentence): boolean {
-  const head = s.words.slice(0, 3).map((w) => w.text).join(' ');
+  const head = s.words.slice(s.opening, s.opening + 3).map((w) => w.text).join(' ');
   return INFERENCE_OPENERS.test(head) && /^(?:so|therefore|thus|hence|consequently|clearly|obviously)\b|^(?:that|this|which|it) (?:means|shows|proves|tells|implies|rules)/u.test(head);
 }
 

@@ -22,6 +22,12 @@ export interface ParagraphContext {
   marked?: boolean;
   /** The period (lexicon `periods` key) the block before named, under the same heading. */
   scene?: string;
+  /**
+   * The sentences a block's first sentence reads on from (prose/lead-in.ts): a list item or a post
+   * that leans on the one before ("- This shows the planet warmed first."). They stand before the
+   * paragraph as context only; no flag falls on them.
+   */
+  leadIn?: readonly string[];
 }
 
 /** Reads sentence `i` of a paragraph (undefined past its ends). */
@@ -52,7 +58,9 @@ export function paragraphReader(paragraph: readonly string[], packs: LoadedPacks
     const s = sentenceAt(i);
     if (s === undefined) return undefined;
     const next = sentenceAt(i + 1);
-    const first = i > 0 ? sentenceAt(0) : undefined;
+    // The block's own first sentence (a block quote's label), not a lead-in's.
+    const own = context.leadIn?.length ?? 0;
+    const first = i > own ? sentenceAt(own) : undefined;
     const previous = i > 0 ? sentenceAt(i - 1) : undefined;
     const stance = stanceOf(s, { ...context, ...(next === undefined ? {} : { next }), ...(first === undefined ? {} : { first }), ...(previous === undefined ? {} : { previous }) });
     // The two sentences before the previous one, nearest first: the scene a paragraph has set.
