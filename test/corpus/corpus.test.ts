@@ -58,6 +58,20 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-p-2': { recall: 0.73, falseFlags: 0.06 },
   'tuning-p-3': { recall: 0.85, falseFlags: 0.05 },
   'tuning-p-4': { recall: 0.5, falseFlags: 0.06 },
+  // tuning-q-1..4 were the blind hold-out holdout-j, spent in December 2026's ninth round (read on its
+  // first and last code: 98/124 and 28/39 caught at the start, 97/124 and 29/39 at the end).
+  // tuning-r-1..2 were written fresh at that round's start and read, totals only, to judge each branch
+  // before merging (36/42 and 32/41 caught at the start and at the end). tuning-s-1..2 are two
+  // paraphrase grids (many wordings of the same claims) by two new writers: the engineers read s-1,
+  // nobody changing the engine read s-2 (s-1: 77 -> 92/112 caught; s-2: 83 -> 84/117).
+  'tuning-q-1': { recall: 0.74, falseFlags: 0.09 },
+  'tuning-q-2': { recall: 0.85, falseFlags: 0.06 },
+  'tuning-q-3': { recall: 0.64, falseFlags: 0.08 },
+  'tuning-q-4': { recall: 0.7, falseFlags: 0.05 },
+  'tuning-r-1': { recall: 0.8, falseFlags: 0.03 },
+  'tuning-r-2': { recall: 0.74, falseFlags: 0.1 },
+  'tuning-s-1': { recall: 0.78, falseFlags: 0.04 },
+  'tuning-s-2': { recall: 0.68, falseFlags: 0.04 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -88,12 +102,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 84% of the seeded errors over all the sets to tune on (86.7% measured over 36 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (85.3% measured over 44 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
-    expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.84);
+    expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.4% measured over 36 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.7% measured over 44 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
