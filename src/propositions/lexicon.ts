@@ -221,5 +221,7 @@ export function entityWordsOf(lexicon: Lexicon, keys: readonly string[]): string
 
 function formsOfPhrases(phrases: readonly string[]): string[] {
   // "that glacial max": a clipped word names the subject as the whole word does (claims/term-variants.ts).
-  return [...new Set(termVariants(phrases).flatMap((p) => variantsOf(phraseWords(p)).map((w) => w.join(' '))))];
+  // A form of two or three words is also written as a compound ("the ice-age globe"): the words of a
+  // phrase are cut at hyphens, so the hyphenated form is added back here.
+  return [...new Set(termVariants(phrases).flatMap((p) => variantsOf(phraseWords(p)).flatMap((w) => (w.length >= 2 && w.length <= 3 && w.every((x) => /^\p{L}+$/u.test(x)) ? [w.join(' '), w.join('-')] : [w.join(' ')]))))];
 }
