@@ -8,7 +8,7 @@
  */
 import { phraseWords, type LexHit } from './lexicon.js';
 import { appositionSubject, clauseSubject, kindOf, PREPOSITIONS, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
-import { denialsBefore, NEGATIONS, type ReadSentence, type Thing } from './sentence.js';
+import { denialsBefore, NEGATIONS, PARTICIPANTS, type ReadSentence, type Thing } from './sentence.js';
 import type { Cause, Polarity } from './types.js';
 
 /** Words that make the next word a noun ("the end", "of warming"): no verb follows them. */
@@ -21,7 +21,9 @@ const ROLE: Record<string, Cause['role']> = { follower: 'cause', verbs: 'cause',
 
 /** The causes one sentence states or denies; `previous` resolves a pronoun that opens it. */
 export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
-  const entities = s.of('entities');
+  // Only a participant's name hides the cause words inside it ("orbital forcing"): "climate
+  // sensitivity" names a measure and is still a part CO2 plays ("reveal nothing about climate sensitivity").
+  const entities = s.of('entities').filter((e) => PARTICIPANTS.has(e.key));
   const regions = s.of('regions');
   const hits = s
     .of('causes')

@@ -75,7 +75,11 @@ const COPULA_CONTRACTION = /^(that|this)'s$/u;
 const AUXILIARIES = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const PRONOUNS = new Set(['it', 'they', 'this', 'that', 'these', 'those', 'its', 'their']);
 /** Entities that take part in causes and orders. */
-const PARTICIPANTS = new Set(['co2', 'temperature', 'orbit', 'water', 'ice-age', 'trapped-air', 'ice', 'marginal-forcing', 'modern-rise', 'natural-rise']);
+/**
+ * The entities that take part in what a sentence asserts. The others (an ice core, a station, a unit,
+ * climate sensitivity, the glacial sea level) name what a number measures and put a draft on topic.
+ */
+export const PARTICIPANTS: ReadonlySet<string> = new Set(['co2', 'temperature', 'orbit', 'water', 'ice-age', 'trapped-air', 'ice', 'marginal-forcing', 'modern-rise', 'natural-rise']);
 
 /** Reads one sentence: words, segments, lexicon hits and things. */
 export function readSentence(text: string, lexicon: CompiledLexicon): ReadSentence {
