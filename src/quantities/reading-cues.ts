@@ -40,18 +40,31 @@ const CHANGE_SUBJECT = new RegExp(
   'iu',
 );
 
+/**
+ * A change named as the object of an estimating verb, its value after "at": "Tierney and colleagues
+ * put the global cooling at the Last Glacial Maximum at about 6 °C". The verbs are those of
+ * ESTIMATE_WORDS without their "at"; at most two words (an article, an adjective) stand
+ * between the verb and the change noun.
+ */
+const ESTIMATE_VERBS = [...new Set(ESTIMATE_WORDS.filter((w) => w.endsWith(' at')).map((w) => w.slice(0, -3)).filter((w) => !w.includes(' ')))];
+const ESTIMATED_CHANGE = new RegExp(
+  String.raw`(?:^|[^\p{L}])(?:${ESTIMATE_VERBS.join('|')})[\s\u00A0]+(?:[\p{L}'’-]+[\s\u00A0]+){0,2}?(?:${CHANGE_SUBJECT_NOUNS.join('|')})(?:[\s\u00A0]+(?:in|of|between|across|from|during|over|at)[\s\u00A0][^,;:()]{0,80}?)?[\s\u00A0]+at[\s\u00A0]*$`,
+  'iu',
+);
+
 const CHANGE_NOUN = new RegExp(String.raw`(?:^|[^\p{L}])(?:${CHANGE_SUBJECT_NOUNS.join('|')})(?![\p{L}])`, 'iu');
 const RELATIVE_START = /^[\s\u00A0]*(?:which|that)(?![\p{L}])/iu;
 
 /**
  * True when the clause before a temperature names a change as its subject and the verb joins them,
- * or is a relative clause on a change ("Antarctic warming, which the isotopes put at about 9 °C").
+ * as the object of an estimating verb ("put the cooling at 6 °C"), or is a relative clause on a
+ * change ("Antarctic warming, which the isotopes put at about 9 °C").
  */
 export function namesChangeBefore(clause: string): boolean {
   const cut = (text: string) => Math.max(0, ...[',', ';', ':', '(', '.'].map((c) => text.lastIndexOf(c) + 1));
   const at = cut(clause);
   const own = clause.slice(at);
-  if (CHANGE_SUBJECT.test(own)) return true;
+  if (CHANGE_SUBJECT.test(own) || ESTIMATED_CHANGE.test(own)) return true;
   if (!RELATIVE_START.test(own) || at === 0) return false;
   const head = clause.slice(0, at - 1);
   return CHANGE_NOUN.test(head.slice(cut(head)));

@@ -21,6 +21,26 @@ describe('a figure that something is "put at" or "estimated at"', () => {
   });
 });
 
+// Global LGM cooling about 6 °C (5 to 7 °C): IPCC AR6 WG1 ch. 7, doi 10.1017/9781009157896.009;
+// about 6.1 °C: Tierney et al. 2020, Nature 584, doi 10.1038/s41586-020-2617-x.
+describe('a change that an estimating verb puts "at" a figure, with words between', () => {
+  it.each([
+    ['The IPCC puts global cooling at the Last Glacial Maximum at about 6 °C.', 'about 6 °C'],
+    ['Tierney and colleagues put the global cooling at about 6.1 °C.', 'about 6.1 °C'],
+    ['One team estimated the Antarctic warming across the deglaciation at 9 °C.', '9 °C'],
+    ['The survey placed the tropical cooling during the ice age at roughly 3 °C.', 'roughly 3 °C'],
+  ])('%s', (text, figure) => {
+    expect(readings(text)).toEqual([[figure, 'temperature-change']]);
+  });
+
+  it.each([
+    ['The lab put the warming chamber at 20 °C.', '20 °C'],
+    ['They put the samples at −25 °C after the cooling ended.', '−25 °C'],
+  ])('leaves a reading alone: %s', (text, figure) => {
+    expect(readings(text)).toEqual([[figure, 'temperature']]);
+  });
+});
+
 describe('a relative clause on a change noun', () => {
   it('reads its figure as a change, and a °F figure with 32 added to it is flagged with the 1.8 factor', () => {
     const text = 'Greenland warming at the close of the cold spell, which the isotopes put at about 10 °C (roughly 42 °F), was abrupt.';

@@ -258,6 +258,7 @@ export const REACH: ReachCase[] = [
   // Tierney et al. 2020, Nature 584, doi 10.1038/s41586-020-2617-x
   ['gmst-lgm-cooling-tierney2020', [
     right('Tierney and colleagues found the globe about 6.1 °C cooler at the Last Glacial Maximum.'),
+    right('Tierney and colleagues put the global cooling of the last ice age at about 6.1 °C.'),
     wrong('Tierney and colleagues found that global temperature was 2 °C cooler at the LGM.', '6.1'),
   ]],
   // Annan et al. 2022, Climate of the Past 18, doi 10.5194/cp-18-1883-2022
@@ -571,6 +572,7 @@ export const REACH: ReachCase[] = [
   ['gmst-lgm-cooling-ar6', [
     right('The IPCC finds the globe was about 6 °C colder at the Last Glacial Maximum.'),
     wrong('The IPCC finds the globe was about 15 °C colder at the Last Glacial Maximum.', '6'),
+    wrong('The IPCC puts global cooling at the Last Glacial Maximum at about 15 °C.', '6'),
   ]],
   // Annan & Hargreaves 2013, Climate of the Past 9, doi 10.5194/cp-9-367-2013
   ['gmst-lgm-cooling-annan2013', [
@@ -580,6 +582,7 @@ export const REACH: ReachCase[] = [
   // Osman et al. 2021, Nature 599, doi 10.1038/s41586-021-03984-4
   ['gmst-lgm-cooling-osman2021', [
     right('Osman and colleagues found the globe about 7 °C colder at the Last Glacial Maximum.'),
+    right('Osman and colleagues put global cooling at the Last Glacial Maximum at about 7 °C.'),
     wrong('Osman and colleagues found the globe only 2 °C cooler during the last ice age.', '7'),
   ]],
   // Seltzer et al. 2021, Nature 593, doi 10.1038/s41586-021-03467-6
