@@ -22,9 +22,10 @@ const SMALL_WORDS = Object.keys(SMALL).join('|');
 
 const VERB = /(?<![\p{L}])(?:twice|thrice|double[sd]?|doubling|triple[sd]?|tripling|quadruple[sd]?|quadrupling|halved|halves|halving|halve)(?![\p{L}])/giu;
 const FOLD = new RegExp(String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS}))[-\s]?fold(?![\p{L}])`, 'giu');
-// "20 times", "twenty-odd times", "20x faster", "20× the pace" ("-odd" and "x" read as the number written).
+// "20 times", "1,000 times", "twenty-odd times", "20x faster", "20× the pace" ("-odd" and "x" read as
+// the number written; a comma groups thousands).
 const TIMES = new RegExp(
-  String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS})(?:-odd)?)(?:[\s\u00A0]+times|[\s\u00A0]?[x×])(?=[\s\u00A0]+(?:as|more|higher|greater|larger|bigger|lower|smaller|less|faster|slower|longer|shorter|that|the|what|its|their|above|below|over)(?![\p{L}]))`,
+  String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS})(?:-odd)?)(?:[\s\u00A0]+times|[\s\u00A0]?[x×])(?=[\s\u00A0]+(?:as|more|higher|greater|larger|bigger|lower|smaller|less|faster|slower|longer|shorter|that|the|what|its|their|above|below|over)(?![\p{L}]))`,
   'giu',
 );
 const FRACTION = /(?<![\p{L}])(?:(?<count>a|one|two|three|four)[\s\u00A0-]+(?<part>half|third|quarter|fifth|tenth|thirds|quarters|fifths|tenths)|(?<half>half))(?![\p{L}])/giu;
@@ -38,7 +39,7 @@ function atom(start: number, end: number, value: number, half: number, rule: str
 }
 
 function numberAtom(m: RegExpExecArray): Atom {
-  const d = m.groups?.['d'];
+  const d = m.groups?.['d']?.replace(/,/gu, '');
   const end = m.index + m[0].length;
   if (d !== undefined) return atom(m.index, end, Number(d), halfPlace(d), 'precision');
   // "twenty-odd": twenty and some more, below thirty (read by the precision row as 25 ± 5).

@@ -170,6 +170,7 @@ export const LABELLED_SET: LabelledSentence[] = [
   s('The rise was three times faster than before.', r('three times', 2.85, 3.15)),
   s('The swing was 2.5-fold larger in Antarctica.', r('2.5-fold', 2.45, 2.55)),
   s("Today's rate is roughly 100 times the deglacial one.", r('roughly 100 times', 92.5, 107.5)),
+  s('Some posts claim CO2 now climbs 1,000 times faster than at any time before.', r('1,000 times', 950, 1050)),
   s('CO2 is up about 50 percent since 1750.', pc('about 50 percent', 48.25, 51.75), age('1750', 199.5, 200.5)),
   s('Half of that rise came after 1980.', r('Half', 0.475, 0.525), age('1980', -30.5, -29.5)),
   s('The ice lost a third of its volume.', r('a third', 0.95 / 3, 1.05 / 3)),

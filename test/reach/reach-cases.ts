@@ -557,6 +557,7 @@ export const REACH: ReachCase[] = [
   ['co2-modern-vs-abrupt-step-ratio', [
     right('CO2 is rising about 30 times faster than during the most abrupt deglacial jumps.'),
     wrong('CO2 is rising about 500 times faster than during the abrupt deglacial steps.', ['15', '70']),
+    wrong('By one estimate, CO2 is rising about 1,000 times faster than during the abrupt deglacial steps.', ['15', '70']),
   ]],
   // Lüthi et al. 2008, Nature 453, doi 10.1038/nature06949; Siegenthaler et al. 2005, Science 310, doi 10.1126/science.1120130
   ['co2-800kyr-range', [
