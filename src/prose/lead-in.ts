@@ -51,3 +51,14 @@ export function leadInOf(text: string, blocks: readonly ProseBlock[], index: num
   }
   return out;
 }
+
+/**
+ * The sentence that introduces a block: the last sentence of its lead-in when it ends with a colon
+ * ("What the core gives us:" before "- a record that reaches back 420,000 years"). A block's first
+ * sentence reads on from it as from the sentence before it in its own paragraph: the binder takes
+ * the subject it lacks from there. Undefined when the lead-in ends otherwise.
+ */
+export function introOf(leadIn: readonly string[]): string | undefined {
+  const last = leadIn.at(-1);
+  return last !== undefined && /:\s*$/u.test(last) ? last : undefined;
+}
