@@ -20,7 +20,7 @@ import { BOUND_TERMS, boundReadings, clauseStarts } from './bind-bound.js';
 import { withStateEvents } from './bind-events.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
-import { withoutOthers } from './bind-others.js';
+import { comparedInRelativeClauses, withoutOthers } from './bind-others.js';
 import { partsOfWholes, wholesApart, withoutWholes } from './bind-part.js';
 import { addEarlierTime, framesYield } from './bind-time.js';
 import { bindList, parallelLists } from './bind-list.js';
@@ -327,12 +327,18 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   const pairs = endpointPairs(sentence, quantities);
   const roles = quantityRoles(sentence, quantities);
   const lists = parallelLists(sentence, quantities, pairs);
-  const hits = withoutOthers(sentence, findTerms(sentence, packs));
+  const allHits = findTerms(sentence, packs);
+  const hits = withoutOthers(sentence, allHits);
   const views = termViews(sentence, quantities, hits, pairs, lists);
+  // "Unlike the EPICA Dome C core, which goes back 800,000 years, ...": the clause speaks of the compared subject.
+  for (const [i, add] of comparedInRelativeClauses(sentence, allHits, hits, quantities)) {
+    const view = views[i] as TermHits;
+    for (const [id, spans] of add) view.set(id, [...(view.get(id) ?? []), ...spans]);
+  }
   // "lasted from about 12,900 to 11,700 years ago": the head of a span of dates is a start, its tail an end.
   addSpanEdges(sentence, quantities, pairs, views, packs);
   // "..., while the global mean for 2024 was about 424 ppm": words before a turn to a new subject are the other side's.
-  withoutOtherSide(sentence, quantities, views);
+  withoutOtherSide(sentence, quantities, views, packs, hits);
   // "at the warm peaks it topped out near 350 ppm": the unit names the gas.
   quantities.forEach((q, i) => {
     for (const term of packs.terms) {

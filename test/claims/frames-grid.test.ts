@@ -306,6 +306,8 @@ interface Pair {
   b: string;
   /** The two state one measure, so "X, against Y for Z" compares them. */
   comparable: boolean;
+  /** The two have subjects of their own (not one subject's start and end). */
+  distinct: boolean;
   gapped?: (x: string, y: string) => string;
   respectively?: (x: string, y: string) => string;
   /** A lead-in sentence and a list with one item per subject. */
@@ -314,36 +316,36 @@ interface Pair {
 
 const PAIRS: Pair[] = [
   {
-    a: 'vostok-span', b: 'edc-span', comparable: true,
+    a: 'vostok-span', b: 'edc-span', comparable: true, distinct: true,
     gapped: (x, y) => `Vostok covers ${x} and EPICA Dome C ${y}.`,
     respectively: (x, y) => `The Vostok and EPICA Dome C records reach back ${x} and ${y} respectively.`,
     list: (x, y) => `How far back the two cores reach:\n\n- Vostok: ${x}\n- EPICA Dome C: ${y}`,
   },
   {
-    a: 'vostok-depth', b: 'edc-depth', comparable: true,
+    a: 'vostok-depth', b: 'edc-depth', comparable: true, distinct: true,
     gapped: (x, y) => `The drill reached ${x} at Vostok and ${y} at EPICA Dome C.`,
     respectively: (x, y) => `The Vostok and EPICA Dome C boreholes were drilled down to ${x} and ${y}, respectively.`,
     list: (x, y) => `How deep the two boreholes were drilled:\n\n- Vostok, ${x};\n- EPICA Dome C, ${y}.`,
   },
   {
-    a: 'co2-glacial', b: 'co2-interglacial', comparable: true,
+    a: 'co2-glacial', b: 'co2-interglacial', comparable: true, distinct: true,
     gapped: (x, y) => `Carbon dioxide sat at ${x} in the glacial periods and at ${y} in the interglacials.`,
     respectively: (x, y) => `In glacials and interglacials carbon dioxide stood at ${x} and ${y} respectively.`,
     list: (x, y) => `Carbon dioxide over the ice-age cycle:\n\n- in the glacial periods, ${x}\n- in the interglacials, ${y}`,
   },
   {
-    a: 'deglaciation-start', b: 'deglaciation-end', comparable: false,
+    a: 'deglaciation-start', b: 'deglaciation-end', comparable: false, distinct: false,
     gapped: (x, y) => `The last deglaciation began ${x} and ended ${y}.`,
     respectively: (x, y) => `The last deglaciation began and ended ${x} and ${y} respectively.`,
     list: (x, y) => `The last deglaciation:\n\n- it began ${x};\n- it ended ${y}.`,
   },
   {
-    a: 'obliquity', b: 'eccentricity', comparable: true,
+    a: 'obliquity', b: 'eccentricity', comparable: true, distinct: true,
     gapped: (x, y) => `Obliquity completes a cycle in ${x} and eccentricity in ${y}.`,
     respectively: (x, y) => `Obliquity and eccentricity have periods of ${x} and ${y}, respectively.`,
     list: (x, y) => `The orbital periods:\n\n1. obliquity, ${x}\n2. eccentricity, ${y}`,
   },
-  { a: 'deglaciation-length', b: 'antarctic-lag', comparable: false },
+  { a: 'deglaciation-length', b: 'antarctic-lag', comparable: false, distinct: true },
 ];
 
 const PAIRED: Record<string, (a: Claim, b: Claim, x: string, y: string, p: Pair) => string | undefined> = {
@@ -352,6 +354,11 @@ const PAIRED: Record<string, (a: Claim, b: Claim, x: string, y: string, p: Pair)
   'coordinated clauses': (a, b, x, y) => `${cap(a.subject)} ${a.verb(x)}, and ${b.subject} ${b.verb(y)}.`,
   comparison: (a, b, x, y, p) => (p.comparable ? `${cap(a.subject)} ${a.verb(x)}, against ${y} for ${b.name}.` : undefined),
   'list of subjects': (_a, _b, x, y, p) => p.list?.(x, y),
+  'turn (while)': (a, b, x, y, p) => (p.distinct ? `${cap(a.subject)} ${a.verb(x)}, while ${b.subject} ${b.verb(y)}.` : undefined),
+  'other in a relative clause': (a, b, x, y, p) => (p.distinct ? `Unlike ${b.subject}, which ${b.verb(y)}, ${a.subject} ${a.verb(x)}.` : undefined),
+  'other in brackets': (a, b, x, y, p) => (p.comparable ? `${cap(a.subject)} ${a.verb(x)} (${b.name}: ${y}).` : undefined),
+  'gap after a semicolon': (a, b, x, y, p) => (p.comparable ? `${cap(a.subject)} ${a.verb(x)}; ${b.name}, ${y}.` : undefined),
+  'two sentences, by contrast': (a, b, x, y, p) => (p.distinct ? `${cap(b.subject)} ${b.verb(y)}. ${cap(a.subject)}, by contrast, ${a.verb(x)}.` : undefined),
 };
 
 const slot = (i: number): string => `⟦${i}⟧`;
@@ -378,14 +385,16 @@ function cases(): Case[] {
 /** The draft's text and where each number stands in it. */
 function fill(c: Case): { text: string; at: [number, number][] } {
   let text = c.template;
-  const at: [number, number][] = [];
-  for (let i = 0; i < c.claims.length; i += 1) {
+  const at: [number, number][] = c.claims.map(() => [0, 0]);
+  // Slots are filled in the order they stand, so a number filled later never moves one filled before.
+  const order = c.claims.map((_, i) => i).sort((a, b) => c.template.indexOf(slot(a)) - c.template.indexOf(slot(b)));
+  for (const i of order) {
     const cl = c.claims[i]!;
     const written = c.wrong[i] ? cl.wrong : cl.right;
     const n = written[c.words ? 1 : 0];
     const start = text.indexOf(slot(i));
     text = text.slice(0, start) + n + text.slice(start + slot(i).length);
-    at.push([start, start + n.length]);
+    at[i] = [start, start + n.length];
   }
   // A sentence that opens with a number in words still opens with a capital.
   return { text: text.charAt(0).toUpperCase() + text.slice(1), at };
@@ -428,6 +437,7 @@ const FLOORS: Record<string, number> = {
   active: 0, passive: 0, fronted: 0, apposition: 0, parenthesis: 0, relative: 0, 'lead-in list': 0,
   'carried subject': 0, question: 0, cleft: 0, 'in words': 0,
   'two subjects': 0, respectively: 0, 'coordinated clauses': 0, comparison: 0, 'list of subjects': 0,
+  'turn (while)': 0, 'other in a relative clause': 0, 'other in brackets': 0, 'gap after a semicolon': 0, 'two sentences, by contrast': 0,
 };
 
 describe('the frames grid: numbers attach through sentence structure', () => {
