@@ -35,9 +35,10 @@ const CLAUSE_END = /[;:!?()]|[.,](?!\d)/u;
  * A relative clause on a subject held up for comparison speaks of that subject: in "Unlike the EPICA
  * Dome C core, which goes back about 800,000 years, the Vostok core ..." the number in the clause is
  * Dome C's. `all` are the sentence's terms, `kept` the ones withoutOthers left; each quantity inside
- * such a clause gets back the compared terms (returned per quantity index, to add to its view).
+ * such a clause gets back the compared terms (returned per quantity index, to add to its view), and
+ * the clause's words leave the `views` of the quantities outside it.
  */
-export function comparedInRelativeClauses(sentence: string, all: TermHits, kept: TermHits, quantities: readonly Pick<Quantity, 'start' | 'end'>[]): Map<number, TermHits> {
+export function comparedInRelativeClauses(sentence: string, all: TermHits, kept: TermHits, quantities: readonly Pick<Quantity, 'start' | 'end'>[], views: TermHits[]): Map<number, TermHits> {
   const out = new Map<number, TermHits>();
   if (all === kept) return out;
   for (const m of sentence.matchAll(RELATIVE_OPEN)) {
@@ -52,11 +53,22 @@ export function comparedInRelativeClauses(sentence: string, all: TermHits, kept:
     const rest = sentence.slice(comma + m[0].length);
     const stop = CLAUSE_END.exec(rest);
     const end = comma + m[0].length + (stop === null ? rest.length : stop.index);
-    quantities.forEach((q, i) => {
-      if (q.start < comma || q.end > end) return;
+    const inside = quantities.map((q) => q.start >= comma && q.end <= end);
+    if (!inside.some(Boolean)) continue;
+    quantities.forEach((_, i) => {
+      if (!inside[i]) return;
       const add = out.get(i) ?? new Map<string, [number, number][]>();
       for (const [id, span] of phrase) add.set(id, [...(add.get(id) ?? []), span]);
       out.set(i, add);
+    });
+    // Its words are the compared subject's: they neither name nor veto what a number outside it measures.
+    views.forEach((view, i) => {
+      if (inside[i]) return;
+      for (const [id, spans] of view) {
+        const left = spans.filter(([start, stop]) => stop <= comma || start >= end);
+        if (left.length > 0) view.set(id, left);
+        else view.delete(id);
+      }
     });
   }
   return out;

@@ -331,7 +331,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   const hits = withoutOthers(sentence, allHits);
   const views = termViews(sentence, quantities, hits, pairs, lists);
   // "Unlike the EPICA Dome C core, which goes back 800,000 years, ...": the clause speaks of the compared subject.
-  for (const [i, add] of comparedInRelativeClauses(sentence, allHits, hits, quantities)) {
+  for (const [i, add] of comparedInRelativeClauses(sentence, allHits, hits, quantities, views)) {
     const view = views[i] as TermHits;
     for (const [id, spans] of add) view.set(id, [...(view.get(id) ?? []), ...spans]);
   }

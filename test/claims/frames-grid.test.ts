@@ -432,12 +432,19 @@ async function runGrid(): Promise<Map<string, Tally>> {
   return tallies;
 }
 
-/** Floors per frame (hits of the numbers read), at what the binder reaches. */
+/**
+ * Floors per frame (hits of the numbers read), at what the binder reaches. Before this round's
+ * structure rules the grid read 13/26 in the lead-in list, 25/26 in parentheses, 36/40 with
+ * "respectively", 30/40 in the list of subjects and 28/40 with the other subject in a relative
+ * clause, and bound 4 numbers of the brackets and semicolon frames to the other subject. Left: a
+ * subject carried by "then" ("The world then was ...") and a second list item with no subject of its
+ * own ("- it ended ..."), which is not read at all (its block names no subject and is not beside one).
+ */
 const FLOORS: Record<string, number> = {
-  active: 0, passive: 0, fronted: 0, apposition: 0, parenthesis: 0, relative: 0, 'lead-in list': 0,
-  'carried subject': 0, question: 0, cleft: 0, 'in words': 0,
-  'two subjects': 0, respectively: 0, 'coordinated clauses': 0, comparison: 0, 'list of subjects': 0,
-  'turn (while)': 0, 'other in a relative clause': 0, 'other in brackets': 0, 'gap after a semicolon': 0, 'two sentences, by contrast': 0,
+  active: 1, passive: 1, fronted: 1, apposition: 1, parenthesis: 1, relative: 1, 'lead-in list': 1,
+  'carried subject': 25 / 26, question: 1, cleft: 1, 'in words': 1,
+  'two subjects': 1, respectively: 1, 'coordinated clauses': 1, comparison: 1, 'list of subjects': 38 / 40,
+  'turn (while)': 1, 'other in a relative clause': 1, 'other in brackets': 1, 'gap after a semicolon': 1, 'two sentences, by contrast': 1,
 };
 
 describe('the frames grid: numbers attach through sentence structure', () => {
