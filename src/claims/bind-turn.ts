@@ -29,15 +29,17 @@ const HEAD = /^(?:(?:the|a|an|its|their|this|that|these|those|at|in)\s+)*$/iu;
  * names an alternate of a subject before it, and only those alternates go: two terms are alternates
  * when the pack's values pair each with the same other group (Vostok and EPICA Dome C with [record],
  * glacial and interglacial with [co2]), as in a measure family. A bracket's turn ends where it closes.
+ * Returns, per quantity after such a gapped turn, where the turn stands.
  */
-export function withoutOtherSide(sentence: string, quantities: readonly Quantity[], views: TermHits[], packs: LoadedPacks, hits: TermHits): void {
+export function withoutOtherSide(sentence: string, quantities: readonly Quantity[], views: TermHits[], packs: LoadedPacks, hits: TermHits): Map<number, number> {
+  const gaps = new Map<number, number>();
   const turns = [...sentence.matchAll(CONTRAST_TURN)].map((m) => {
     const head = m.index + m[0].length;
     const bracket = m[0].startsWith('(');
     const close = bracket ? sentence.indexOf(')', head) : -1;
     return { at: m.index, head, gapped: !/while|whereas/iu.test(m[0]), close: bracket ? (close < 0 ? sentence.length : close) : Infinity };
   });
-  if (turns.length === 0) return;
+  if (turns.length === 0) return gaps;
   const alternates = alternatesOf(packs);
   quantities.forEach((q, i) => {
     const view = views[i];
@@ -58,6 +60,7 @@ export function withoutOtherSide(sentence: string, quantities: readonly Quantity
       else view.delete(id);
     }
     if (!turn.gapped) return;
+    gaps.set(i, turn.at);
     // The clause a semicolon or a bracket opens owns its words: they are no number's before the turn,
     // however near it stands ("about 190 ppm; interglacial ...").
     for (const [id, spans] of clause(turn)) {
@@ -71,6 +74,7 @@ export function withoutOtherSide(sentence: string, quantities: readonly Quantity
       });
     }
   });
+  return gaps;
 }
 
 const alternatesCache = new WeakMap<object, Map<string, Set<string>>>();

@@ -338,7 +338,16 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   // "lasted from about 12,900 to 11,700 years ago": the head of a span of dates is a start, its tail an end.
   addSpanEdges(sentence, quantities, pairs, views, packs);
   // "..., while the global mean for 2024 was about 424 ppm": words before a turn to a new subject are the other side's.
-  withoutOtherSide(sentence, quantities, views, packs, hits);
+  const gaps = withoutOtherSide(sentence, quantities, views, packs, hits);
+  // "CO2 fell to about 190 ppm; in the interglacials, about 280 ppm": a gap with no change word of its
+  // own repeats the verb before it, and states what its counterpart states: a level stays a level.
+  for (const [i, at] of gaps) {
+    const counterpart = quantities.findLastIndex((o) => o.end <= at);
+    const view = views[i] as TermHits;
+    if (counterpart < 0 || roles[counterpart] !== 'level' || (view.get('change') ?? []).some(([start]) => start >= at)) continue;
+    roles[i] = 'level';
+    view.delete('change');
+  }
   // "at the warm peaks it topped out near 350 ppm": the unit names the gas.
   quantities.forEach((q, i) => {
     for (const term of packs.terms) {

@@ -32,6 +32,11 @@ describe('coordinated verbs with one object are one predicate, read respectively
     // Look-alike: two predicates, each with its own object, still speak for themselves.
     ['The last deglaciation began about 18,000 years ago and ended about 11,500 years ago.', 'about 11,500 years ago', 'termination-1-end', 'agrees'],
   ])('%s [%s]', (sentence, text, value, verdict) => expect(judgeAt(sentence, text)).toEqual({ value, verdict }));
+
+  it('with the unit written once, after the last number (the whole engine)', async () => {
+    const { flags } = await checkText('The last deglaciation started and finished about 25,000 and 11,500 years ago, respectively.', { packs, path: 'list.md' });
+    expect(flags.map((f) => [f.ruleId, f.excerpt, f.correction])).toEqual([['value.termination-1-start', 'about 25,000', 'about 18,000 years ago']]);
+  });
 });
 
 describe('a number alone in brackets after a noun phrase is that phrase\'s', () => {
@@ -46,6 +51,9 @@ describe('a number alone in brackets after a noun phrase is that phrase\'s', () 
 describe('a gap after a semicolon or in a bracket names an alternate subject', () => {
   it.each<Row>([
     ['In the glacial periods carbon dioxide stood at about 190 ppm; in the interglacials, about 200 ppm.', 'about 200 ppm', 'co2-interglacial-maximum-typical', 'conflicts'],
+    // The gap repeats "fell to": a level, as its counterpart is, not the glacial-interglacial swing.
+    ['In the glacial periods carbon dioxide fell to about 190 ppm; in the interglacials, about 280 ppm.', 'about 280 ppm', 'co2-interglacial-maximum-typical', 'agrees'],
+    ['In the glacial periods carbon dioxide fell to about 190 ppm; in the interglacials, about 200 ppm.', 'about 200 ppm', 'co2-interglacial-maximum-typical', 'conflicts'],
     ['Glacial CO2 hovered near 185 ppm (interglacial CO2: near 285 ppm).', 'near 285 ppm', 'co2-interglacial-maximum-typical', 'agrees'],
     ['Glacial CO2 hovered near 185 ppm (interglacial CO2: near 285 ppm).', 'near 185 ppm', 'co2-glacial-minimum-typical', 'agrees'],
     ['Vostok covers about 420,000 years; EPICA Dome C, about 600,000 years.', 'about 600,000 years', 'edc-record-span', 'conflicts'],
