@@ -15,7 +15,7 @@ import { isChecklistText } from './report/checklist-lines.js';
 import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
-import { leadInOf } from './prose/lead-in.js';
+import { introOf, leadInOf } from './prose/lead-in.js';
 import { entityWordsOf, subjectWordsOf } from './propositions/index.js';
 import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
@@ -256,9 +256,11 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text)));
       // A block's first sentence reads on from the blocks just before it in the reasoning checks too.
       const here = at === index ? (index === 0 ? withLeadIn(opening, leadInHere()) : opening) : context;
-      const previousOnTopic = (): boolean => inWindow && topic.test(window[at - 1] ?? '');
       // The first sentences of a block read on from the blocks just before it (its lead-in).
       const lead = at === index && index < CONTEXT_SENTENCES && (DIGIT.test(sentence.text) || hasTwoNumerals(sentence.text)) ? leadInHere() : [];
+      // A block's first sentence reads on from a sentence that introduces it with a colon as from
+      // the sentence before it in its own paragraph (a list after its lead-in sentence).
+      const previousOnTopic = (): boolean => inWindow && topic.test(window[at - 1] ?? (index === 0 ? introOf(lead, block.kind === 'list-item') : undefined) ?? '');
       const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic, here, previousOnTopic, lead) : examineCached(window, at, packs, onTopic, here, previousOnTopic, lead);
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
@@ -385,7 +387,7 @@ function examineSentence(
   // from its lead-in.
   const before = [...leadIn, ...paragraph.slice(Math.max(0, index - CONTEXT_SENTENCES), index)].slice(-CONTEXT_SENTENCES);
   if (!onTopic) {
-    const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs, before) : undefined;
+    const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs, before, sentenceBefore(paragraph, index, leadIn, context.blockKind)) : undefined;
     if (carried !== undefined) return carried;
     // One number reads on from the sentences before only in the unit checks: "2. Its record covers
     // about 800 million years" after an item naming the core is a thousand-for-million slip.
@@ -403,7 +405,7 @@ function examineSentence(
   // "CO2 was around 350": a bare number after a term the pack gives one unit takes that unit.
   const quantities = restoreTermUnits(text, restoreElidedUnits(text, parseQuantities(text)), packs);
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
-  const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
+  const { bindings } = bindQuantities(text, quantities, packs, sentenceBefore(paragraph, index, leadIn, context.blockKind));
   const reference = checkReferences(text, quantities, bindings, packs);
   const reading = paragraphReader(paragraph, packs, ownBlock(context))(index);
   const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before), ...checkRanks(text, packs)]);
@@ -413,12 +415,20 @@ function examineSentence(
   const asserts = p !== undefined && p.causes.length + p.orders.length + p.relations.length + p.comparisons.length + p.evidence.length > 0;
   // A number is a claim when its sentence (or the one before: "It reaches down 3,270 m.") names a subject.
   const subjects = subjectMatcherOf(packs);
-  const measured = quantities.some((q) => q.dimension !== 'number') && (subjects.test(text) || subjects.test(paragraph[index - 1] ?? ''));
+  const measured = quantities.some((q) => q.dimension !== 'number') && (subjects.test(text) || subjects.test(sentenceBefore(paragraph, index, leadIn, context.blockKind) ?? ''));
   if (!measured && bindings.length === 0 && drafts.length === 0 && !asserts) return undefined;
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
 
 const DIGIT = /\d/u;
+
+/**
+ * The sentence a sentence reads on from: the one before it in its paragraph, or for a block's first
+ * sentence the lead-in sentence that introduces the block with a colon (prose/lead-in.ts introOf).
+ */
+function sentenceBefore(paragraph: readonly string[], index: number, leadIn: readonly string[], blockKind?: string): string | undefined {
+  return index > 0 ? paragraph[index - 1] : introOf(leadIn, blockKind === 'list-item');
+}
 
 /** Which sentences of a paragraph name a subject, and whether a window of it (from, length) names one. */
 interface SubjectsNamed {
@@ -440,10 +450,10 @@ function subjectsNamed(paragraph: string[], subjects: TopicMatcher): SubjectsNam
  * Dome C core was drilled by ten nations. It reaches down 3,270 metres."): a claim when that number
  * binds, checked like any other; undefined otherwise.
  */
-function carriedSubject(paragraph: string[], index: number, packs: LoadedPacks, before: readonly string[]): SentenceFindings | undefined {
+function carriedSubject(paragraph: string[], index: number, packs: LoadedPacks, before: readonly string[], previous: string | undefined): SentenceFindings | undefined {
   const text = paragraph[index] ?? '';
   const quantities = restoreElidedUnits(text, parseQuantities(text));
-  const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
+  const { bindings } = bindQuantities(text, quantities, packs, previous);
   if (bindings.length === 0) return undefined;
   const reference = checkReferences(text, quantities, bindings, packs);
   const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)]);

@@ -60,7 +60,10 @@ export function sharedSubjects(sentence: string, quantities: Quantity[]): Shared
     // "The tilt swings over 41,000 years, and the shape of the orbit stretches and rounds on a cycle
     // of 100,000 years": past a join that opens a clause with its own subject, a later predicate
     // shares that subject, not the sentence's.
-    .filter(({ k }) => !tokens.some((o, m) => m > first && m < k && COORDINATOR.test(o.text) && !isVerb(tokens[m + 1]) && /^(?:the|a|an|its|their|this|that|these|those|[A-Z]\p{L}*)$/u.test(tokens[m + 1]?.text ?? '')));
+    .filter(({ k }) => !tokens.some((o, m) => m > first && m < k && COORDINATOR.test(o.text) && !isVerb(tokens[m + 1]) && /^(?:the|a|an|its|their|this|that|these|those|[A-Z]\p{L}*)$/u.test(tokens[m + 1]?.text ?? '')))
+    // "The deglaciation began and ended 18,000 and 11,500 years ago respectively": verbs joined with
+    // nothing of their own between them share what follows; that is one predicate, not two.
+    .filter(({ k }) => tokens.slice(first, k).some((o) => !isVerb(o) && !o.tags.includes('Adverb') && !COORDINATOR.test(o.text)));
   return joins
     .map(({ t, k }, n): SharedSubject => {
       const start = (tokens[k + 1] as Token).start;

@@ -83,15 +83,22 @@ export interface OwnFrame {
 
 /**
  * True when `sentence` may take a subject from the sentence before (a back-reference, a bare measure
- * subject, or an answer to a question: "Sea level at the LGM? About 120 m lower than today.");
+ * subject, an answer to a question: "Sea level at the LGM? About 120 m lower than today.", or what a
+ * sentence ending in a colon introduces: "How deep the two boreholes go:" before "- Vostok, 3,623 m");
  * bindFromContext binds nothing otherwise.
  */
 export function mayReferBack(sentence: string, before?: string): boolean {
-  return REFERS_BACK.test(sentence) || MEASURE_SUBJECT.test(sentence) || (before !== undefined && ASKS.test(before));
+  return REFERS_BACK.test(sentence) || MEASURE_SUBJECT.test(sentence) || (before !== undefined && (ASKS.test(before) || INTRODUCES.test(before)));
 }
 
 /** A sentence that asks: the next one answers it, and its subject is the question's. */
 const ASKS = /\?[\s"'”’)\]]*$/u;
+/**
+ * A sentence that ends in a colon introduces what follows (a list, its items): each item is elliptic,
+ * the measure or the subject the lead-in names is its own. The sentence splitter ends no sentence at a
+ * colon inside a paragraph, so this is a lead-in before another block.
+ */
+const INTRODUCES = /:[\s"'”’)\]*_]*$/u;
 
 /** The reference value the previous sentence's terms let the quantity bind, `ambiguous`, or undefined. */
 export function bindFromContext(

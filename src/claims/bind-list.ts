@@ -51,7 +51,9 @@ export function bindList(
   const [dimension] = dimensions;
   if (dimension === undefined || dimensions.size > 1) return undefined;
   const view = mergeViews(list.map((i) => views[i] ?? new Map()));
-  const subjects = references.filter((r) => r.dimensions.includes(dimension) && satisfies(r, view) && items.some((it) => roleFits(r.binding.role, it.role)));
+  const fits = (r: ReferenceValue): boolean => r.dimensions.includes(dimension) && items.some((it) => roleFits(r.binding.role, it.role));
+  const strict = references.filter((r) => fits(r) && satisfies(r, view));
+  const subjects = strict.length >= items.length ? strict : withContrasts(references.filter(fits), view, items.length) ?? strict;
   if (subjects.length === 0) return undefined;
   // "rhythms near 100,000, 41,000 and 23,000 years" with one subject named: several figures that
   // cannot all be one value are the list of things the sentence goes on to name, not that value.
@@ -84,6 +86,23 @@ function orderByOwnWords(subjects: ReferenceValue[], view: TermHits, after: numb
   const listed = placed.filter((p) => p.inClause || !Number.isFinite(p.at));
   if (listed.some((p) => !Number.isFinite(p.at)) || new Set(listed.map((p) => p.at)).size !== listed.length) return undefined;
   return listed.sort((a, b) => a.at - b.at).map((p) => p.r);
+}
+
+/**
+ * The subjects of a list whose members are each other's contrast: "began and ended 18,000 and 11,500
+ * years ago respectively" names the start, which vetoes "ended", and the end, which vetoes "began".
+ * In a parallel list each member's words are its own, so a veto word that another member needs (and
+ * that member vetoes a word of the first) no longer stops it. Undefined unless exactly `count` such
+ * subjects are found.
+ */
+function withContrasts(references: ReferenceValue[], view: TermHits, count: number): ReferenceValue[] | undefined {
+  const named = references.filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id))));
+  const uses = (r: ReferenceValue, id: string): boolean => r.binding.all.some((g) => g.includes(id));
+  const contrasts = (r: ReferenceValue, o: ReferenceValue): boolean => r.binding.none.some((id) => uses(o, id)) && o.binding.none.some((id) => uses(r, id));
+  const found = named.filter((r) =>
+    r.binding.none.filter((id) => view.has(id)).every((id) => named.some((o) => o !== r && uses(o, id) && contrasts(r, o))),
+  );
+  return found.length === count && found.some((r) => r.binding.none.some((id) => view.has(id))) ? found : undefined;
 }
 
 /** No two intervals meet: the figures are of different things (the ratio of neighbours is well over the hedges). */

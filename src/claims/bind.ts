@@ -20,7 +20,7 @@ import { BOUND_TERMS, boundReadings, clauseStarts } from './bind-bound.js';
 import { withStateEvents } from './bind-events.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
-import { withoutOthers } from './bind-others.js';
+import { comparedInRelativeClauses, withoutOthers } from './bind-others.js';
 import { partsOfWholes, wholesApart, withoutWholes } from './bind-part.js';
 import { addEarlierTime, framesYield } from './bind-time.js';
 import { bindList, parallelLists } from './bind-list.js';
@@ -253,6 +253,27 @@ function withoutBeforeAntecedent(sentence: string, vetoes: TermHits, q: Quantity
   return kept;
 }
 
+/** A bracket that opens right after a word and holds only a quantity: "the end of the deglaciation (about 11,500 years ago)". */
+const OPENS_AFTER_WORD = /\p{L}[\s\u00A0]*\([\s\u00A0]*$/u;
+const CLOSES = /^[\s\u00A0]*\)/u;
+
+/** Where the bracket opens when `q` stands alone in brackets right after a word, else undefined. */
+function bracketedAfterPhrase(sentence: string, q: Quantity): number | undefined {
+  const head = sentence.slice(Math.max(0, q.start - 40), q.start);
+  if (!OPENS_AFTER_WORD.test(head) || !CLOSES.test(sentence.slice(q.end))) return undefined;
+  return sentence.lastIndexOf('(', q.start);
+}
+
+/** The hits that end before offset `at`. */
+function before(hits: TermHits, at: number): TermHits {
+  const kept: TermHits = new Map();
+  for (const [id, spans] of hits) {
+    const left = spans.filter(([, end]) => end <= at);
+    if (left.length > 0) kept.set(id, left);
+  }
+  return kept;
+}
+
 /** The words inside `span` belong to quantity `j` alone: every other quantity's view loses them. */
 function ownWords(views: TermHits[], j: number, [s, e]: [number, number]): void {
   views.forEach((view, i) => {
@@ -306,12 +327,27 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   const pairs = endpointPairs(sentence, quantities);
   const roles = quantityRoles(sentence, quantities);
   const lists = parallelLists(sentence, quantities, pairs);
-  const hits = withoutOthers(sentence, findTerms(sentence, packs));
+  const allHits = findTerms(sentence, packs);
+  const hits = withoutOthers(sentence, allHits);
   const views = termViews(sentence, quantities, hits, pairs, lists);
+  // "Unlike the EPICA Dome C core, which goes back 800,000 years, ...": the clause speaks of the compared subject.
+  for (const [i, add] of comparedInRelativeClauses(sentence, allHits, hits, quantities, views)) {
+    const view = views[i] as TermHits;
+    for (const [id, spans] of add) view.set(id, [...(view.get(id) ?? []), ...spans]);
+  }
   // "lasted from about 12,900 to 11,700 years ago": the head of a span of dates is a start, its tail an end.
   addSpanEdges(sentence, quantities, pairs, views, packs);
   // "..., while the global mean for 2024 was about 424 ppm": words before a turn to a new subject are the other side's.
-  withoutOtherSide(sentence, quantities, views);
+  const gaps = withoutOtherSide(sentence, quantities, views, packs, hits);
+  // "CO2 fell to about 190 ppm; in the interglacials, about 280 ppm": a gap with no change word of its
+  // own repeats the verb before it, and states what its counterpart states: a level stays a level.
+  for (const [i, at] of gaps) {
+    const counterpart = quantities.findLastIndex((o) => o.end <= at);
+    const view = views[i] as TermHits;
+    if (counterpart < 0 || roles[counterpart] !== 'level' || (view.get('change') ?? []).some(([start]) => start >= at)) continue;
+    roles[i] = 'level';
+    view.delete('change');
+  }
   // "at the warm peaks it topped out near 350 ppm": the unit names the gas.
   quantities.forEach((q, i) => {
     for (const term of packs.terms) {
@@ -386,10 +422,16 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     // "Dome C spans 800,000 years and Vostok 420,000, so Dome C is 380,000 years longer": a difference
     // measures neither subject's span or level; only a value that states a change may bind it.
     const difference = isDifference(sentence, quantities, i, role);
-    let scored = packs.references
-      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && (!difference || r.binding.role === 'change') && satisfies(r, view, vetoes) && canState(r, q))
-      .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
-      .sort((a, b) => a.score - b.score);
+    const scoreIn = (seen: TermHits, vetoed: TermHits) =>
+      packs.references
+        .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && (!difference || r.binding.role === 'change') && satisfies(r, seen, vetoed) && canState(r, q))
+        .map((r) => ({ r, score: nearness(r, seen, q, breaks) }))
+        .sort((a, b) => a.score - b.score);
+    // "The end of the last deglaciation (about 5,000 years ago) opened the Holocene": a number alone in
+    // brackets after a noun phrase is that phrase's; the words before the bracket decide first.
+    const phrase = bracketedAfterPhrase(sentence, q);
+    const inPhrase = phrase === undefined ? [] : scoreIn(before(view, phrase), before(vetoes, phrase));
+    let scored = inPhrase.length > 0 ? inPhrase : scoreIn(view, vetoes);
     // A ceiling binds the highest level when some value reads it, not the level of today or of a period.
     if (bound !== undefined) {
       const extreme = scored.filter(({ r }) => r.binding.all.some((g) => g.includes(BOUND_TERMS[bound.kind])));

@@ -51,3 +51,22 @@ export function leadInOf(text: string, blocks: readonly ProseBlock[], index: num
   }
   return out;
 }
+
+/**
+ * The sentence that introduces a block: the last sentence of its lead-in when it ends with a colon
+ * ("What the core gives us:" before "- a record that reaches back 420,000 years"); for a list item,
+ * the nearest such sentence of its lead-in, past the items before it ("How far back the cores reach:",
+ * "- Vostok: 420,000 years", then "- EPICA Dome C: 800,000 years"). A block's first sentence reads on
+ * from it as from the sentence before it in its own paragraph: the binder takes the subject or the
+ * measure it lacks from there. Undefined when there is none.
+ */
+export function introOf(leadIn: readonly string[], listItem = false): string | undefined {
+  for (let i = leadIn.length - 1; i >= 0; i -= 1) {
+    const sentence = leadIn[i] as string;
+    if (INTRODUCES.test(sentence)) return sentence;
+    if (!listItem) return undefined;
+  }
+  return undefined;
+}
+
+const INTRODUCES = /:\s*$/u;
