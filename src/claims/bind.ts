@@ -13,6 +13,7 @@
  */
 import { PhraseTrie } from '../prose/phrase-trie.js';
 import { termVariants } from './term-variants.js';
+import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
@@ -151,13 +152,27 @@ export function compiledTerms(packs: LoadedPacks): Map<string, CompiledTerm> {
   if (terms === undefined) {
     terms = new Map(
       packs.terms.map((t): [string, CompiledTerm] => {
-        const words = termVariants(t.words);
+        const words = inflectedTerm(termVariants(t.words));
         return [t.id, { words, keyWords: keyWordsOf(words) }];
       }),
     );
     compiled.set(packs, terms);
   }
   return terms;
+}
+
+/**
+ * A term's phrases with every inflection of their words derived, as the lexicon's are
+ * (propositions/inflect.ts): a pack lists "rise" and the draft may say "rising" or "rose". Only
+ * phrases of plain letters inflect; symbols, numbers and forms the pack wrote out stay as written.
+ */
+function inflectedTerm(words: readonly string[]): string[] {
+  const out = new Set(words);
+  for (const phrase of words) {
+    if (!/^[A-Za-z]+(?: [A-Za-z]+){0,2}$/u.test(phrase)) continue;
+    for (const form of variantsOf(phraseWords(phrase))) out.add(form.join(' '));
+  }
+  return [...out];
 }
 
 function keyWordsOf(words: string[]): string[] | undefined {
