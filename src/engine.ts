@@ -1,5 +1,5 @@
 import { topicalThroughout } from './prose/topical-throughout.js';
-import { bindQuantities } from './claims/bind.js';
+import { bindQuantities, findTerms } from './claims/bind.js';
 import { restoreElidedUnits } from './claims/elided-units.js';
 import { restoreTermUnits } from './claims/term-units.js';
 import { checkArithmetic } from './checks/arithmetic.js';
@@ -384,8 +384,16 @@ function examineSentence(
   // earlier sentence would make a long paragraph quadratic. A block's first sentences read on
   // from its lead-in.
   const before = [...leadIn, ...paragraph.slice(Math.max(0, index - CONTEXT_SENTENCES), index)].slice(-CONTEXT_SENTENCES);
+  // The sentence a number may take its subject from: the one before it, or for a block's first
+  // sentence the last of its lead-in (a list item after the item before, a post after the post
+  // before) or else its section's heading ("### What was the Younger Dryas?" / "It lasted ...").
+  const previous = index > 0 ? paragraph[index - 1] : (leadIn.at(-1) ?? headingSubjects(context.heading, packs));
   if (!onTopic) {
-    const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs, before) : undefined;
+    // A block's first sentence with no word of the subject carries one from its section's heading
+    // (never from a block before it: "I've been doing these threads for 3 years" after a post on
+    // the deglaciation is no claim about it).
+    const carries = index > 0 ? previousOnTopic() : leadIn.length === 0 && previous !== undefined;
+    const carried = DIGIT.test(text) && carries ? carriedSubject(text, previous, packs, before) : undefined;
     if (carried !== undefined) return carried;
     // One number reads on from the sentences before only in the unit checks: "2. Its record covers
     // about 800 million years" after an item naming the core is a thousand-for-million slip.
@@ -403,7 +411,7 @@ function examineSentence(
   // "CO2 was around 350": a bare number after a term the pack gives one unit takes that unit.
   const quantities = restoreTermUnits(text, restoreElidedUnits(text, parseQuantities(text)), packs);
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
-  const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
+  const { bindings } = bindQuantities(text, quantities, packs, previous);
   const reference = checkReferences(text, quantities, bindings, packs);
   const reading = paragraphReader(paragraph, packs, ownBlock(context))(index);
   const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before), ...checkRanks(text, packs)]);
@@ -413,12 +421,28 @@ function examineSentence(
   const asserts = p !== undefined && p.causes.length + p.orders.length + p.relations.length + p.comparisons.length + p.evidence.length > 0;
   // A number is a claim when its sentence (or the one before: "It reaches down 3,270 m.") names a subject.
   const subjects = subjectMatcherOf(packs);
-  const measured = quantities.some((q) => q.dimension !== 'number') && (subjects.test(text) || subjects.test(paragraph[index - 1] ?? ''));
+  const measured = quantities.some((q) => q.dimension !== 'number') && (subjects.test(text) || subjects.test(previous ?? ''));
   if (!measured && bindings.length === 0 && drafts.length === 0 && !asserts) return undefined;
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
 
 const DIGIT = /\d/u;
+
+/**
+ * The subjects a section heading names ("### What was the Younger Dryas?" → "Younger Dryas"), as
+ * the sentence a block's first number may take its subject from. Only the subject words: a heading
+ * that states something ("Myth 2: CO2 was as high then as now") lends its subject, never its claim.
+ */
+function headingSubjects(heading: string | undefined, packs: LoadedPacks): string | undefined {
+  if (heading === undefined || heading === '') return undefined;
+  const subjects = subjectMatcherOf(packs);
+  const named = [...findTerms(heading, packs).values()]
+    .flat()
+    .sort((a, b) => a[0] - b[0])
+    .map(([start, end]) => heading.slice(start, end))
+    .filter((words) => subjects.test(words));
+  return named.length === 0 ? undefined : [...new Set(named)].join(', ');
+}
 
 /** Which sentences of a paragraph name a subject, and whether a window of it (from, length) names one. */
 interface SubjectsNamed {
@@ -440,10 +464,9 @@ function subjectsNamed(paragraph: string[], subjects: TopicMatcher): SubjectsNam
  * Dome C core was drilled by ten nations. It reaches down 3,270 metres."): a claim when that number
  * binds, checked like any other; undefined otherwise.
  */
-function carriedSubject(paragraph: string[], index: number, packs: LoadedPacks, before: readonly string[]): SentenceFindings | undefined {
-  const text = paragraph[index] ?? '';
+function carriedSubject(text: string, previous: string | undefined, packs: LoadedPacks, before: readonly string[]): SentenceFindings | undefined {
   const quantities = restoreElidedUnits(text, parseQuantities(text));
-  const { bindings } = bindQuantities(text, quantities, packs, paragraph[index - 1]);
+  const { bindings } = bindQuantities(text, quantities, packs, previous);
   if (bindings.length === 0) return undefined;
   const reference = checkReferences(text, quantities, bindings, packs);
   const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)]);

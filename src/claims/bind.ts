@@ -415,7 +415,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     else if ((fromApposition = bindApposition(sentence, q, role, view, hits, packs)) !== undefined) decided.set(i, fromApposition);
     // A calendar year ("before the year 2000") dates the sentence; it takes no subject from the one before.
     // Only a sentence that may refer back reads the one before (and only then compromise finds its subject).
-    else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE' && mayReferBack(sentence, context)) {
+    // A part of a whole ("80 metres of that rise") is no value of the whole, here or one sentence back.
+    else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE' && !parts.some((p) => p.index === i) && mayReferBack(sentence, context)) {
       contextHits ??= findTerms(context, packs);
       const ownTime = quantities.some((o, j) => j !== i && (o.dimension === 'age' || o.dimension === 'duration') && o.statedUnit !== 'CE');
       const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, subjectBefore(context), { context, ownTime });

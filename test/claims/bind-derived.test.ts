@@ -67,3 +67,33 @@ describe("Earth's orbit named as the pacemaker", () => {
     expect(await flagged("Ice ages came and went, keeping time with slow changes in Earth's orbit, with rhythms near 100,000, 41,000 and 23,000 years.")).toEqual([]);
   });
 });
+
+describe('a block reads on from the block before it and from its heading', () => {
+  // Vostok's record spans about 420,000 years (Petit et al. 1999, Nature 399, 429-436, DOI 10.1038/20859).
+  it('gives a list item the subject of the item before', async () => {
+    expect(await flagged('- The Vostok core in East Antarctica was drilled to 3,623 m.\n- Its climate record covers about the last 800,000 years.')).toContain('value.vostok-record-span');
+    expect(await flagged('- The Vostok core in East Antarctica was drilled to 3,623 m.\n- Its climate record covers about the last 420,000 years.')).toEqual([]);
+  });
+  // The Younger Dryas: about 12,900 to 11,700 years ago, some 1,200 years (Rasmussen et al. 2006,
+  // J. Geophys. Res. 111, D06102, DOI 10.1029/2005JD006079).
+  it("gives a section's first sentence the subject its heading names", async () => {
+    expect(await flagged('### What was the Younger Dryas?\n\nA cold snap centred on the North Atlantic, it lasted about 3,000 years.')).toContain('value.younger-dryas-duration');
+    expect(await flagged('### What was the Younger Dryas?\n\nA cold snap centred on the North Atlantic, it lasted about 1,200 years.')).toEqual([]);
+  });
+  it('takes only the subject from a heading that states a myth, never its claim', async () => {
+    // The heading's "now" would make the range a present-day level.
+    expect(await flagged('## Myth: CO2 was as high in the past as it is now\n\nAcross those 800 millennia, carbon dioxide wandered between about 172 and 300 ppm.')).not.toContain('value.co2-present-day');
+  });
+  it('never carries a subject from a post before into a sentence that names none', async () => {
+    expect(await flagged('**1/9** ok, a thread on the last deglaciation.\n\n**2/9** housekeeping: I have been doing these threads for 3 years.')).toEqual([]);
+  });
+  // EPICA Dome C holds the longest continuous record, about 800,000 years (Jouzel et al. 2007, Science
+  // 317, 793-796, DOI 10.1126/science.1141038); Vostok's about 420,000 (Petit et al. 1999).
+  it('takes an attribute from the sentence before together with what that sentence rules out', async () => {
+    expect(await flagged('The longest continuous ice-core record comes from Dome C and reaches about 800,000 years. Vostok got us to 420,000 years back in 1999.')).toEqual([]);
+  });
+  // Sea level at the LGM: about 120-130 m below today (Lambeck et al. 2014, PNAS 111, 15296, DOI 10.1073/pnas.1411762111).
+  it('never gives a part of a change the value of the whole one sentence back', async () => {
+    expect(await flagged('- At the glacial maximum, the oceans stood about 120 metres below their present level.\n- About 80 metres of that rise came between 19,000 and 11,000 years ago.')).toEqual([]);
+  });
+});
