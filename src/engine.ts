@@ -479,7 +479,11 @@ function carriedSubject(text: string, previous: string | undefined, packs: Loade
  * "a rise of 50 ppm" between two stated levels is a subtraction error, before either is a value
  * out of range). The arithmetic or unit flag carries the corrected number.
  */
-function preferSpecific(drafts: FlagDraft[]): FlagDraft[] {
+function preferSpecific(all: FlagDraft[]): FlagDraft[] {
+  // A CO2 figure in ppb that binds a value gets the reference check's unit slip, with the value's
+  // sources; the unit table's ppb rule speaks only for a figure that binds none.
+  const scaled = all.filter((d) => d.ruleId === 'unit.scale-slip');
+  const drafts = scaled.length === 0 ? all : all.filter((d) => d.ruleId !== 'unit.ppb-ppm' || !scaled.some((s) => s.start < d.end && d.start < s.end));
   const specific = drafts.filter((d) => d.ruleId.startsWith('arith.') || d.ruleId.startsWith('unit.'));
   if (specific.length === 0) return drafts;
   return drafts.filter((d) => !d.ruleId.startsWith('value.') || !specific.some((s) => s.start < d.end && d.start < s.end));
