@@ -1,5 +1,5 @@
 import { topicalThroughout } from './prose/topical-throughout.js';
-import { bindQuantities } from './claims/bind.js';
+import { bindQuantities, findTerms } from './claims/bind.js';
 import { restoreElidedUnits } from './claims/elided-units.js';
 import { restoreTermUnits } from './claims/term-units.js';
 import { checkArithmetic } from './checks/arithmetic.js';
@@ -386,8 +386,15 @@ function examineSentence(
   // earlier sentence would make a long paragraph quadratic. A block's first sentences read on
   // from its lead-in.
   const before = [...leadIn, ...paragraph.slice(Math.max(0, index - CONTEXT_SENTENCES), index)].slice(-CONTEXT_SENTENCES);
+  // The sentence a number may take its subject from ("### What was the Younger Dryas?" / "It lasted ...").
+  const previous = sentenceBefore(paragraph, index, leadIn, context, packs);
   if (!onTopic) {
-    const carried = DIGIT.test(text) && previousOnTopic() ? carriedSubject(paragraph, index, packs, before, sentenceBefore(paragraph, index, leadIn, context.blockKind)) : undefined;
+    // A block's first sentence with no word of the subject carries one from the sentence that
+    // introduces it or from its section's heading (never from a block before it that does not
+    // introduce it: "I've been doing these threads for 3 years" after a post on the deglaciation is
+    // no claim about it).
+    const carries = previousOnTopic() || (index === 0 && leadIn.length === 0 && previous !== undefined);
+    const carried = DIGIT.test(text) && carries ? carriedSubject(text, previous, packs, before) : undefined;
     if (carried !== undefined) return carried;
     // One number reads on from the sentences before only in the unit checks: "2. Its record covers
     // about 800 million years" after an item naming the core is a thousand-for-million slip.
@@ -405,7 +412,7 @@ function examineSentence(
   // "CO2 was around 350": a bare number after a term the pack gives one unit takes that unit.
   const quantities = restoreTermUnits(text, restoreElidedUnits(text, parseQuantities(text)), packs);
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
-  const { bindings } = bindQuantities(text, quantities, packs, sentenceBefore(paragraph, index, leadIn, context.blockKind));
+  const { bindings } = bindQuantities(text, quantities, packs, previous);
   const reference = checkReferences(text, quantities, bindings, packs);
   const reading = paragraphReader(paragraph, packs, ownBlock(context))(index);
   const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before), ...checkRanks(text, packs)]);
@@ -415,7 +422,7 @@ function examineSentence(
   const asserts = p !== undefined && p.causes.length + p.orders.length + p.relations.length + p.comparisons.length + p.evidence.length > 0;
   // A number is a claim when its sentence (or the one before: "It reaches down 3,270 m.") names a subject.
   const subjects = subjectMatcherOf(packs);
-  const measured = quantities.some((q) => q.dimension !== 'number') && (subjects.test(text) || subjects.test(sentenceBefore(paragraph, index, leadIn, context.blockKind) ?? ''));
+  const measured = quantities.some((q) => q.dimension !== 'number') && (subjects.test(text) || subjects.test(previous ?? ''));
   if (!measured && bindings.length === 0 && drafts.length === 0 && !asserts) return undefined;
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
@@ -423,11 +430,29 @@ function examineSentence(
 const DIGIT = /\d/u;
 
 /**
- * The sentence a sentence reads on from: the one before it in its paragraph, or for a block's first
- * sentence the lead-in sentence that introduces the block with a colon (prose/lead-in.ts introOf).
+ * The sentence a sentence reads on from: the one before it in its paragraph; for a block's first
+ * sentence, the lead-in sentence that introduces the block with a colon (prose/lead-in.ts introOf),
+ * else the last sentence of its lead-in (a list item after the item before, a post after the post
+ * before), else the subjects its section heading names.
  */
-function sentenceBefore(paragraph: readonly string[], index: number, leadIn: readonly string[], blockKind?: string): string | undefined {
-  return index > 0 ? paragraph[index - 1] : introOf(leadIn, blockKind === 'list-item');
+function sentenceBefore(paragraph: readonly string[], index: number, leadIn: readonly string[], context: ParagraphContext, packs: LoadedPacks): string | undefined {
+  return index > 0 ? paragraph[index - 1] : (introOf(leadIn, context.blockKind === 'list-item') ?? leadIn.at(-1) ?? headingSubjects(context.heading, packs));
+}
+
+/**
+ * The subjects a section heading names ("### What was the Younger Dryas?" → "Younger Dryas"), as
+ * the sentence a block's first number may take its subject from. Only the subject words: a heading
+ * that states something ("Myth 2: CO2 was as high then as now") lends its subject, never its claim.
+ */
+function headingSubjects(heading: string | undefined, packs: LoadedPacks): string | undefined {
+  if (heading === undefined || heading === '') return undefined;
+  const subjects = subjectMatcherOf(packs);
+  const named = [...findTerms(heading, packs).values()]
+    .flat()
+    .sort((a, b) => a[0] - b[0])
+    .map(([start, end]) => heading.slice(start, end))
+    .filter((words) => subjects.test(words));
+  return named.length === 0 ? undefined : [...new Set(named)].join(', ');
 }
 
 /** Which sentences of a paragraph name a subject, and whether a window of it (from, length) names one. */
@@ -450,8 +475,7 @@ function subjectsNamed(paragraph: string[], subjects: TopicMatcher): SubjectsNam
  * Dome C core was drilled by ten nations. It reaches down 3,270 metres."): a claim when that number
  * binds, checked like any other; undefined otherwise.
  */
-function carriedSubject(paragraph: string[], index: number, packs: LoadedPacks, before: readonly string[], previous: string | undefined): SentenceFindings | undefined {
-  const text = paragraph[index] ?? '';
+function carriedSubject(text: string, previous: string | undefined, packs: LoadedPacks, before: readonly string[]): SentenceFindings | undefined {
   const quantities = restoreElidedUnits(text, parseQuantities(text));
   const { bindings } = bindQuantities(text, quantities, packs, previous);
   if (bindings.length === 0) return undefined;
@@ -466,7 +490,11 @@ function carriedSubject(paragraph: string[], index: number, packs: LoadedPacks, 
  * "a rise of 50 ppm" between two stated levels is a subtraction error, before either is a value
  * out of range). The arithmetic or unit flag carries the corrected number.
  */
-function preferSpecific(drafts: FlagDraft[]): FlagDraft[] {
+function preferSpecific(all: FlagDraft[]): FlagDraft[] {
+  // A CO2 figure in ppb that binds a value gets the reference check's unit slip, with the value's
+  // sources; the unit table's ppb rule speaks only for a figure that binds none.
+  const scaled = all.filter((d) => d.ruleId === 'unit.scale-slip');
+  const drafts = scaled.length === 0 ? all : all.filter((d) => d.ruleId !== 'unit.ppb-ppm' || !scaled.some((s) => s.start < d.end && d.start < s.end));
   const specific = drafts.filter((d) => d.ruleId.startsWith('arith.') || d.ruleId.startsWith('unit.'));
   if (specific.length === 0) return drafts;
   return drafts.filter((d) => !d.ruleId.startsWith('value.') || !specific.some((s) => s.start < d.end && d.start < s.end));

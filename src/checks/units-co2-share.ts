@@ -218,3 +218,32 @@ function countedShares(text: string, qs: Quantity[], restated: ReadonlySet<Quant
   return [{ stated: q, computed: { value, low: q.low * 10 ** k, high: q.high * 10 ** k }, unit: q.unit, level: 'error', sources: [NIST_SP_811, LUTHI_2008, NOAA_2024], correction,
     reason: `${q.text} in every ${formatNumber(per)} molecules of air is ${formatNumber(ppm)} ppm of CO2 (1 ppm is one molecule in a million), outside every level ${iceAge ? 'of 800,000 years of ice cores' : 'measured or projected'} (${range.low}-${formatNumber(range.high)} ppm); ${correction} is ${formatNumber(scale(value))} ppm.` }];
 }
+
+/** A figure's unit written as parts per billion, in any of its forms. */
+const PPB_WORDS = /ppbv?|parts?[\s\u00A0]+per[\s\u00A0]+billion/iu;
+/** The gas an earlier sentence names last is CO2 (and none names another gas): a figure with no gas of its own is CO2's. */
+function co2Before(earlier: readonly string[]): boolean {
+  const nearest = [...earlier].reverse().find((s) => [...s.matchAll(GAS)].length > 0);
+  return nearest !== undefined && !OTHER_GAS.test(nearest) && [...nearest.matchAll(GAS)].every((g) => g.groups?.['co2'] !== undefined);
+}
+
+/**
+ * A CO2 level or change written in parts per billion where parts per million were meant: "today's
+ * level is about 420 ppb", "a decade adds some 24 ppb". CO2 is a few hundred ppm (NOAA); methane and
+ * nitrous oxide are the gases given in ppb, so a sentence naming one of them is left alone. A level
+ * is read so only when its number is a plausible CO2 level in ppm, a change when its number is a
+ * plausible change in ppm; the correction keeps the number and writes ppm.
+ */
+export function co2PpbSlips(text: string, qs: Quantity[], earlier: readonly string[] = []): UnitFinding[] {
+  if (OTHER_GAS.test(text) || (!CO2.test(text) && !co2Before(earlier))) return [];
+  return qs.flatMap((q): UnitFinding[] => {
+    if (!q.statedUnit.startsWith('ppb') || (q.dimension !== 'concentration' && q.dimension !== 'concentration-rate')) return [];
+    const written = q.value * 1e3;
+    const change = q.dimension === 'concentration-rate' || isStatedChange(text, q);
+    const fits = change ? written >= 0.5 && written <= 200 : written >= PLAUSIBLE_CO2_PPM.low && written <= PLAUSIBLE_CO2_PPM.high;
+    if (!fits) return [];
+    const correction = q.text.replace(PPB_WORDS, (unit) => (/^p/iu.test(unit) && !/\s/u.test(unit) ? 'ppm' : 'parts per million'));
+    return [{ stated: q, computed: { value: written, low: q.low * 1e3, high: q.high * 1e3 }, unit: q.unit, level: 'error', sources: [NIST_SP_811, NOAA_2024], correction,
+      reason: `${q.text} of CO2 is ${formatNumber(q.value)} ppm, a thousand times below any level or change of CO2 measured (about 420 ppm in the air today); CO2 is given in parts per million: ${correction}.` }];
+  });
+}

@@ -8,7 +8,7 @@ import { convert, formatQuantity, namesChangeBefore, TEMPERATURE_CUES } from '..
 import type { Dimension, Level, Quantity, Source } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
 import { B2K_CONVENTION, BP_CONVENTION, NIST_SP_811 } from './standard-sources.js';
-import { co2UnitSlips } from './units-co2-share.js';
+import { co2PpbSlips, co2UnitSlips } from './units-co2-share.js';
 import { scaleSlips } from './units-scale.js';
 import { offsetSums } from './units-offset-sums.js';
 import { findRestatements, pointsAtChange, type PreviousSentence, type Restatement } from './units-pairs.js';
@@ -131,6 +131,12 @@ const eras = (a: Quantity, b: Quantity): Source[] => (a.statedUnit.includes('b2k
 export const UNIT_RULES: readonly UnitRule[] = [
   { id: 'unit.percent-ppm', summary: 'A CO2 level restated between ppm and percent converts at 1% = 10,000 ppm; a CO2 share in percent is a level someone has measured.',
     find: percentPpm },
+  { id: 'unit.ppb-ppm', summary: 'CO2 is given in parts per million (ppm); a CO2 level or change written in parts per billion (ppb) is a thousand times smaller.',
+    // A figure that restates another ("430 ppm ... That is 430 ppb") is the restatement check's (unit.percent-ppm).
+    find: (text, qs, previous) => {
+      const restating = new Set(restatementsOf(['concentration', 'percent'], text, qs, previous).flatMap((p) => [p.first, p.second]));
+      return co2PpbSlips(text, qs.filter((q) => !restating.has(q)), previous?.earlier ?? (previous === undefined ? [] : [previous.text]));
+    } },
   { id: 'unit.temperature-difference', summary: 'A temperature change restated in °F is 1.8 times the change in °C or K, with no 32 added; restated in K it is the same number as in °C, with no 273.15 added.',
     find: (text, qs, previous) => {
       const pairs = restated(['temperature-change'], nist, temperatureChangeWhy, cuedAsChange)(text, qs, previous);

@@ -12,7 +12,7 @@
  * other subject: every term it can see that some value binds on must serve the value, unless it is
  * the baseline of a comparison ("colder than in pre-industrial times", "below today's") or qualifies
  * a term that serves ("global sea level"). The previous sentence may fill the groups the quantity's own sentence
- * lacks, never lift a veto; a group filled from there counts as far. Two values reachable this way
+ * lacks, never lift a veto, and brings its own vetoes; a group filled from there counts as far. Two values reachable this way
  * with the same score tie, and bind nothing.
  */
 import { createTopicMatcher, type TopicMatcher } from '../prose/topic-matcher.js';
@@ -120,11 +120,19 @@ export function bindFromContext(
   const takesDate = (r: ReferenceValue): boolean => r.binding.all.some((g) => !g.some((id) => view.has(id)) && g.every((id) => !context.has(id) || dated(id)));
   const own = subjectTerms(sentence, vetoes, packs, q.dimension);
   const serves = (r: ReferenceValue, id: string): boolean => r.binding.all.some((g) => g.includes(id));
+  const contextText = frame?.context ?? '';
+  const attribute = (id: string): boolean => (context.get(id) ?? []).some(([start, end]) => !namesSubject(contextText.slice(start, end), packs));
+  const borrowsAttribute = (r: ReferenceValue): boolean => r.binding.all.some((g) => !g.some((id) => view.has(id)) && g.some((id) => attribute(id)));
   const candidates = packs.references
     .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && canState(r, q))
     .filter((r) => !r.binding.none.some((id) => vetoes.has(id)))
     .filter((r) => own.every(([id, spans]) => serves(r, id) || spans.every((span) => qualifiesServing(sentence, span, view, (other) => serves(r, other)) || withinServing(span, view, (other) => serves(r, other)))))
     .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))))
+    // What a value takes from the sentence before besides a subject (an attribute such as "the
+    // longest") comes with that sentence's vetoes: "The longest record comes from Dome C. Vostok got
+    // us to 420 kyr." takes "longest" with "Dome C", which rules out a longest record told of Vostok.
+    // A subject taken up by a pronoun ("CO2 ... It lagged by ...") brings only itself.
+    .filter((r) => !borrowsAttribute(r) || !r.binding.none.some((id) => context.has(id)))
     .filter((r) => frame?.ownTime !== true || !takesDate(r));
   // The more specific reading wins: a value that vetoes a word present in either sentence gives way
   // to one that needs it ("at that time" after "the Last Glacial Maximum": the LGM level, not the typical glacial one).

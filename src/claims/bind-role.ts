@@ -60,6 +60,9 @@ const STAY_BEFORE = new RegExp(
   'iu',
 );
 /** A bound read as a place on the scale: "never rose above 300 ppm", "fell below 200 ppm", "climbed as high as 350 ppm". */
+/** A quantity told as the span between two figures: "between 180 and 300 ppm", "from 190 to 280 ppm". */
+const SPAN_OPEN = /^(?:between|from)\s/iu;
+const BY_BEFORE = /(?:^|[^\p{L}])by\s*$/iu;
 const LEVEL_HEDGE = /^(?:above|below|beyond|past|under|as\s+(?:high|low)\s+as)(?![\p{L}])/iu;
 /** "over" after a change verb may be either: "rose over 80 ppm" (a change) or "never rose over 300 ppm" (a level). */
 const EITHER_HEDGE = /^over(?![\p{L}])/iu;
@@ -93,6 +96,9 @@ export function quantityRoles(sentence: string, quantities: Quantity[]): ReadRol
   return quantities.map((q, i) => {
     const before = sentence.slice(Math.max(0, q.start - 40), q.start);
     if (LEVEL_HEDGE.test(q.text)) return 'level';
+    // "swung between 180 and 300 ppm", "went from 190 to 280 ppm": the span a quantity moved over
+    // names its levels, whatever verb stands before; only "by between 80 and 100 ppm" sizes a change.
+    if (SPAN_OPEN.test(q.text) && !BY_BEFORE.test(before)) return 'level';
     if (CHANGE_BEFORE.test(before)) return EITHER_HEDGE.test(q.text) ? 'unknown' : 'change';
     const after = sentence.slice(q.end, q.end + 30);
     if (endpoints.has(i) || LEVEL_BEFORE.test(before) || DATUM_AFTER.test(after)) return 'level';

@@ -13,6 +13,7 @@
  */
 import { PhraseTrie } from '../prose/phrase-trie.js';
 import { termVariants } from './term-variants.js';
+import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
@@ -151,13 +152,27 @@ export function compiledTerms(packs: LoadedPacks): Map<string, CompiledTerm> {
   if (terms === undefined) {
     terms = new Map(
       packs.terms.map((t): [string, CompiledTerm] => {
-        const words = termVariants(t.words);
+        const words = inflectedTerm(termVariants(t.words));
         return [t.id, { words, keyWords: keyWordsOf(words) }];
       }),
     );
     compiled.set(packs, terms);
   }
   return terms;
+}
+
+/**
+ * A term's phrases with every inflection of their words derived, as the lexicon's are
+ * (propositions/inflect.ts): a pack lists "rise" and the draft may say "rising" or "rose". Only
+ * phrases of plain letters inflect; symbols, numbers and forms the pack wrote out stay as written.
+ */
+function inflectedTerm(words: readonly string[]): string[] {
+  const out = new Set(words);
+  for (const phrase of words) {
+    if (!/^[A-Za-z]+(?: [A-Za-z]+){0,2}$/u.test(phrase)) continue;
+    for (const form of variantsOf(phraseWords(phrase))) out.add(form.join(' '));
+  }
+  return [...out];
 }
 
 function keyWordsOf(words: string[]): string[] | undefined {
@@ -442,7 +457,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     else if ((fromApposition = bindApposition(sentence, q, role, view, hits, packs)) !== undefined) decided.set(i, fromApposition);
     // A calendar year ("before the year 2000") dates the sentence; it takes no subject from the one before.
     // Only a sentence that may refer back reads the one before (and only then compromise finds its subject).
-    else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE' && mayReferBack(sentence, context)) {
+    // A part of a whole ("80 metres of that rise") is no value of the whole, here or one sentence back.
+    else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE' && !parts.some((p) => p.index === i) && mayReferBack(sentence, context)) {
       contextHits ??= findTerms(context, packs);
       const ownTime = quantities.some((o, j) => j !== i && (o.dimension === 'age' || o.dimension === 'duration') && o.statedUnit !== 'CE');
       const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, subjectBefore(context), { context, ownTime });

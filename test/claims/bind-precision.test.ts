@@ -25,8 +25,9 @@ function bound(sentence: string, written: Written[]): string[] {
 const ROLES: Row[] = [
   // Endpoints of a rise are levels: they never bind the size of the rise.
   ['Across the deglaciation at the Orra field site, CO2 rose by about 75 ppm, from about 190 ppm to about 265 ppm.', [['about 75 ppm', C], ['about 190 ppm', C], ['about 265 ppm', C]], ['co2-deglacial-rise-magnitude', '-', '-']],
-  // The size of a swing is a change: it never binds the interglacial level.
-  ['In the warm interglacials CO2 sat near 280 ppm, rising by 80 to 100 ppm from each cold phase.', [['280 ppm', C], ['80 to 100 ppm', C]], ['co2-interglacial-maximum-typical', '-']],
+  // The size of a swing is a change: it never binds the interglacial level, and with "rising" (an
+  // inflection the binder derives from the pack's "rise") it binds the glacial-interglacial swing.
+  ['In the warm interglacials CO2 sat near 280 ppm, rising by 80 to 100 ppm from each cold phase.', [['280 ppm', C], ['80 to 100 ppm', C]], ['co2-interglacial-maximum-typical', 'co2-glacial-interglacial-amplitude']],
   // A height above the bedrock is a difference, not the drilled depth.
   ['The Vostok drill reached 3,623 metres, roughly 130 metres above the lake.', [['3,623 metres', L], ['roughly 130 metres', L]], ['vostok-drilled-depth', '-']],
   // A modern annual rise is not an abrupt deglacial step.
