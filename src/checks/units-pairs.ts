@@ -86,7 +86,23 @@ const scaleOf = (q: Quantity): string => /(?:thousand|million|billion|trillion)/
 const SCALE_JOINER = new RegExp(String.raw`^(?:${S}+(?:old|long))?${S}*(?:\(|\[|,?${S}*or${S}+|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|=${S}*)$`, 'iu');
 
 /** "are roughly 50 percent higher": a percentage that is a relative change, not the amount again. */
-const relativeChange = (text: string, q: Quantity): boolean => q.dimension === 'percent' && RELATIVE_AFTER.test(text.slice(q.end));
+const relativeChange = (text: string, q: Quantity): boolean => q.dimension === 'percent' && (RELATIVE_AFTER.test(text.slice(q.end)) || shareOfAnother(text, q));
+
+/** The words after "of" that name a percentage's whole ("of the starting value", "of the air"). */
+const SHARE_OF = new RegExp(String.raw`^${S}*of${S}+((?:[\p{L}'’-]+${S}*){1,5})`, 'iu');
+/** Wholes that make a percentage a share of the air: the amount in ppm again (common practice: 1% of the air = 10,000 ppm). */
+const AIR_WORDS = /^(?:air|atmosphere|atmospheric|gas|gases|volume)$/u;
+
+/**
+ * "90 ppm, which is about 47 percent of the starting value": a percentage of a named whole that is
+ * not the air is a share of another figure, not the amount again in percent.
+ */
+function shareOfAnother(text: string, q: Quantity): boolean {
+  const m = SHARE_OF.exec(text.slice(q.end));
+  if (m === null) return false;
+  const words = (m[1] ?? '').toLowerCase().split(/[\s\u00A0]+/u).filter((w) => w !== '');
+  return !words.some((w) => AIR_WORDS.test(w.replace(/['’]s$/u, '')));
+}
 
 /** "1 ppm is 0.0001 percent, so 280 ppm equals 0.028 percent": a figure that opens a new equation. */
 const EQUATION_AFTER = new RegExp(String.raw`^${S}+(?:is|equals|=|makes|gives|comes${S}+to)${S}+(?:(?:about|roughly|around|some|just)${S}+)?[\d.]`, 'iu');

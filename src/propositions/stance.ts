@@ -28,6 +28,12 @@ export interface SentenceStance {
    * writer's own claim.
    */
   questionFrom?: number;
+  /**
+   * For a view made earlier by the sentence after it ("Studies in 2001 put the lag at 800 years.
+   * Later work ..."): where the view ends. Words after it (an apposition of the writer's own: ", a
+   * deglaciation that ended ...") stay the draft's claim.
+   */
+  viewEnd?: number;
 }
 
 /** What around a sentence bears on its stance. */
@@ -74,6 +80,8 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
   if (isReported(s)) return make('reported');
   if (s.of('stance', 'myth').length > 0) return make('myth');
   if (s.of('stance', 'superseded').length > 0 || isFormerOwnView(s)) return make('superseded');
+  const viewEnd = outdatedViewEnd(s, context.next);
+  if (viewEnd !== undefined) return { ...make('superseded'), viewEnd };
   if (isHypothetical(s)) return make('hypothetical');
   return make('asserted');
 }
@@ -201,6 +209,37 @@ function isFormerOwnView(s: ReadSentence): boolean {
   const former = s.of('stance', 'former-time').some((t) => s.of('stance', 'report-verbs').some((v) => v.first > t.last && v.first - t.last <= 5 && past(v)));
   if (former) return true;
   return s.words.some((w, i) => (w.text === 'i' || w.text === 'we') && ((s.words[i + 1]?.text === 'used' && s.words[i + 2]?.text === 'to') || (s.words[i + 1]?.text === 'once' && s.of('stance', 'report-verbs').some((v) => v.first === i + 2))));
+}
+
+/** Words that open a clause about the source before them ("studies ..., which put the lag at ..."). */
+const RELATIVES = new Set(['which', 'who', 'whose', 'that']);
+
+/**
+ * "Studies published around 2001 reported a lag of about 800 years. Later work with sharper dating
+ * has shrunk it.": a view told as coming from studies (lexicon `stance.view-sources`) is an earlier
+ * one when a newer view (`stance.newer`) opens the next sentence of the paragraph (within its first
+ * eight words) or a later segment of the same sentence ("...; studies since 2012 find ..."), and
+ * does not agree with it (`stance.confirming`: "Later work confirms this" keeps the view the draft's).
+ * Returns where the view ends: the source's segment and the segments before it, with a relative
+ * clause that opens right after ("..., which put CO2 800 years behind"); undefined when no newer view
+ * makes it earlier.
+ */
+function outdatedViewEnd(s: ReadSentence, next: ReadSentence | undefined): number | undefined {
+  const sources = s.of('stance', 'view-sources');
+  if (sources.length === 0) return undefined;
+  const segmentOf = (h: { first: number }) => s.words[h.first]?.segment ?? 0;
+  const firstSource = Math.min(...sources.map(segmentOf));
+  const later = s.of('stance', 'newer').filter((h) => segmentOf(h) > firstSource);
+  const agrees = (r: ReadSentence, segment?: number) => r.of('stance', 'confirming').some((c) => segment === undefined || (r.words[c.first]?.segment ?? 0) === segment);
+  const outdated = later.length > 0
+    ? !later.some((h) => agrees(s, segmentOf(h)))
+    : next !== undefined && next.of('stance', 'newer').some((h) => h.first < 8) && !agrees(next);
+  if (!outdated) return undefined;
+  let last = firstSource;
+  const opener = s.words.find((w) => w.segment === last + 1);
+  if (opener !== undefined && RELATIVES.has(opener.text)) last += 1;
+  const end = s.words.filter((w) => w.segment <= last).at(-1)?.end;
+  return end ?? s.text.length;
 }
 
 function isHypothetical(s: ReadSentence): boolean {

@@ -1,7 +1,10 @@
 /**
  * Joins numbers that belong together and shares units between them:
  *  - ranges, one quantity: "7,000 to 8,000 years", "180–190 ppm", "7-8 thousand", "between 180 and 190";
- *  - "±": "5 ± 1 °C" is one quantity with a stated uncertainty;
+ *  - "±": "5 ± 1 °C" is one quantity with a stated uncertainty, and so is "90 ppm, give or take 10";
+ *  - two neighbouring counts joined by "or", the unit written once after the second: "six or seven
+ *    thousand years", "2 or 3 °C" is one quantity, a range (a writer who means two readings of one
+ *    figure writes a unit after each: "6,000 years, or 6 kyr");
  *  - from-to pairs, two quantities (the ends of a change): "rose from [180] to [280 ppm]".
  * A number with no unit of its own takes its partner's unit and scale ("7-8 thousand years").
  */
@@ -29,6 +32,10 @@ export interface Group {
 
 const S = String.raw`[\s\u00A0]`;
 const PLUS_MINUS = new RegExp(String.raw`^${S}*(?:±|\+\/-|\+\/−)${S}*$`, 'u');
+/** "90 ppm, give or take 10", "278 ppm plus or minus about 3": the uncertainty stated in words. */
+const PLUS_MINUS_WORDS = new RegExp(String.raw`^${S}*,?${S}*(?:give${S}+or${S}+take|plus${S}+or${S}+minus)${S}+(?:(?:about|around|roughly|some|perhaps|maybe)${S}+)?$`, 'iu');
+/** "six or seven thousand years": " or " alone between the two numbers (no comma, no hedge). */
+const OR_JOIN = new RegExp(String.raw`^${S}+or${S}+$`, 'iu');
 const RANGE_JOIN = new RegExp(String.raw`^(?:${S}*(?:to|through|until|till)${S}+|-|${S}*[–—]${S}*)$`, 'iu');
 const AND_JOIN = new RegExp(String.raw`^${S}+and${S}+$`, 'iu');
 const BETWEEN = new RegExp(String.raw`(?:^|[^\p{L}])(?<word>between)${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
@@ -49,6 +56,15 @@ const TIME_DIMENSIONS = new Set(['age', 'duration']);
 function yearBeforeOtherUnit(text: string, p: Part, q: Part): boolean {
   if (p.unit !== undefined || q.unit === undefined || !p.atom.plainInteger || p.atom.value < 1000 || p.atom.value > 2100) return false;
   return isCalendarCue(text.slice(Math.max(0, p.atom.start - 16), p.atom.start)) && !q.unit.defs.some((d) => TIME_DIMENSIONS.has(d.dimension));
+}
+/**
+ * "six or seven thousand years", "2 or 3 °C": a bare count, " or ", and a larger count no more than
+ * twice it that carries the unit: the writer gives a span of two neighbouring values (common practice).
+ */
+function orRange(joiner: string, p: Part, q: Part): boolean {
+  if (!OR_JOIN.test(joiner) || p.unit !== undefined || q.unit === undefined || p.atom.form !== q.atom.form) return false;
+  const low = shareScale(p.atom, q.atom).value;
+  return low > 0 && q.atom.value > low && q.atom.value <= 2 * low;
 }
 const sameUnit = (a: UnitMatch | undefined, b: UnitMatch | undefined): boolean =>
   a === undefined || b === undefined || a.defs[0]?.id === b.defs[0]?.id;
@@ -86,12 +102,12 @@ export function groupParts(text: string, parts: Part[]): Group[] {
     const between = AND_JOIN.test(joiner) ? BETWEEN.exec(before) : null;
     const shared: Part = { atom: shareScale(p.atom, q.atom), unit: p.unit ?? q.unit, ownUnit: p.ownUnit };
     const second: Part = { ...q, unit: q.unit ?? p.unit };
-    if (PLUS_MINUS.test(joiner)) {
+    if (PLUS_MINUS.test(joiner) || PLUS_MINUS_WORDS.test(joiner)) {
       groups.push({ kind: 'plus-minus', parts: [shared, second], role: 'alone', prefixStart: undefined });
     } else if ((RANGE_JOIN.test(joiner) || TO_HEDGED.test(joiner) || TO_DIRECTED.test(joiner)) && FROM.test(before) && !RANGE_VERB.test(before)) {
       groups.push({ kind: 'single', parts: [shared], role: 'from', prefixStart: undefined });
       groups.push({ kind: 'single', parts: [second], role: 'to', prefixStart: undefined });
-    } else if (RANGE_JOIN.test(joiner) || between !== null) {
+    } else if (RANGE_JOIN.test(joiner) || between !== null || orRange(joiner, p, q)) {
       const prefixStart = between === null ? undefined : p.atom.start - before.length + between.index + between[0].indexOf(between.groups?.['word'] ?? '');
       groups.push({ kind: 'range', parts: [shared, second], role: 'alone', prefixStart });
     } else {

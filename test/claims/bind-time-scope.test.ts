@@ -71,7 +71,9 @@ describe('a list of figures with one subject named', () => {
 
   it('still binds a list of one subject stated twice with figures that meet', () => {
     // Obliquity about 41,000 years (Berger 1978, doi:10.1175/1520-0469(1978)035<2362:LTVODI>2.0.CO;2).
-    expect(at('The tilt cycle lasts 41,000 or 42,000 years.', '41,000')).toBe('milankovitch-obliquity-period');
+    expect(at('The tilt cycle lasts 41,000 years or 42,000 years.', '41,000 years')).toBe('milankovitch-obliquity-period');
+    // Two neighbouring counts joined by "or", the unit written once, are one range (session 10): it binds as one figure.
+    expect(at('The tilt cycle lasts 41,000 or 42,000 years.', '41,000 or 42,000 years')).toBe('milankovitch-obliquity-period');
   });
 });
 

@@ -11,7 +11,11 @@
  *   "combined"...) sets them apart; a "than" inside a comparison of two times (`time-comparison`:
  *   "colder than today") is no contrast. A sentence that reads "this/it shows..." takes its record
  *   from the sentence before. CO2 from Antarctic ice is a global signal: a sentence without a
- *   temperature passes, and so does one where CO2 acts ("the CO2 then warmed the planet").
+ *   temperature passes, and so does one where CO2 acts ("the CO2 then warmed the planet"). A record
+ *   scaled to the globe passes too: a multiple just before the global words ("1.5-2x the global
+ *   mean"), a figure of the globe's own unlike the record's ("swings of ten degrees correspond to a
+ *   global change of about six"), or the globe given its own order with CO2 first ("global
+ *   temperature trailed CO2").
  *
  *   `scope.antarctic-lag-as-global`
  *   "Globally, temperature rose about 800 years before CO2."
@@ -24,7 +28,9 @@ import { readsBack } from '../reads-back.js';
 import { regionOwnsEntity } from '../../propositions/sentence.js';
 import type { ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
-import { isTemperatureFirst } from './queries.js';
+import { isTemperatureFirst, isWarmingSide } from './queries.js';
+import { parseQuantities } from '../../quantities/index.js';
+import { readNumberWords } from '../../quantities/number-words.js';
 
 /** Verbs and nouns that read a record as something: "shows", "tells us", "is a measure of". */
 const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|recorded|indicates?|measures?|measure|gives?|gave|means?|suggests?|proves?|is|are|was|were|says?|said|thermometers?|stands?|represents?|reflects?|equals?|reads?|written|preserved|captured|logged|registered|history|doubles)$/u;
@@ -132,12 +138,62 @@ function detectRegional(input: DetectInput): Cue[] {
   });
   // "the swing at Vostok understates the global change": the record is compared with the globe, not read as it.
   if (contrast.length > 0 || here.props.comparisons.some((c) => c.attribute === 'size')) return [];
+  // "Antarctica swings 1.5-2x the global mean", "Antarctic swings of eight to ten degrees correspond to
+  // a global change of five or six": a multiple of the globe's figure, or a figure of the globe's own
+  // unlike the record's, scales the record to the globe; it does not read the record as the globe.
+  if (scaledToGlobe(s, sentence.text, global)) return [];
+  // "the lag is an Antarctic thing and global temperature actually trailed CO2": the globe given the
+  // order of its own, CO2 first, sets it against the record; nothing of the record is read as global.
+  if (here.props.orders.some((o) => o.region === 'global' && !o.together && o.first === 'co2' && isWarmingSide(o.then))) return [];
   // "...and the CO2 then warmed the planet": CO2 acting on the globe, not a record read as global.
   if (here.props.causes.some((c) => c.agent === 'co2' && c.polarity === 'asserted')) return [];
   // "global temperature": the temperature word just after the global one is part of the claim.
   const next = s.words.slice(global.last + 1, global.last + 4).findIndex((w) => /^(?:temperatures?|climate|average|mean|warming|cooling)$/u.test(w.text));
   const last = next < 0 ? global.last : global.last + 1 + next;
   return [{ start: s.words[global.first]?.start ?? 0, end: s.words[last]?.end ?? 0 }];
+}
+
+/** The figures of words `from` to `to` (exclusive) of `s`: digits and numbers in words, each as its value. */
+function figuresIn(s: ReadSentence, from: number, to: number): number[] {
+  const out: number[] = [];
+  for (let i = Math.max(0, from); i < Math.min(to, s.words.length); i++) {
+    const text = s.words[i]?.text ?? '';
+    const digits = /^\d[\d,]*(?:\.\d+)?/u.exec(text);
+    if (digits !== null) {
+      out.push(Number(digits[0].replace(/,/gu, '')));
+      continue;
+    }
+    const read = readNumberWords(s.words.slice(i, to).map((w) => w.text));
+    // "from it one may fairly say": a lone "one" is a pronoun as often as a figure, and counts as none.
+    if (read !== undefined && read.used > 0 && !(read.used === 1 && text === 'one')) {
+      out.push(read.value);
+      i += read.used - 1;
+    }
+  }
+  return out;
+}
+
+/**
+ * The record is scaled to the globe, not read as it: a multiple stands just before the global words
+ * ("1.5-2x the global mean", "about twice as much as the global mean"), or the globe carries a
+ * figure of its own in the words after it, none of whose values the record's figures (between the
+ * last record named before the globe and the globe) share ("swings of eight to ten degrees
+ * correspond to a global change of roughly five or six"). "Vostok swung 9 °C, and so did global
+ * temperature, by 9 °C" shares its figure and is still read as the globe.
+ */
+function scaledToGlobe(s: ReadSentence, text: string, global: { first: number; last: number }): boolean {
+  const at = s.words[global.first]?.start ?? 0;
+  const multiple = parseQuantities(text).some((q) => q.dimension === 'ratio' && q.end <= at && s.words.filter((w) => w.start >= q.end && w.end <= at).length <= 4);
+  if (multiple) return true;
+  const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].filter((r) => r.last < global.first);
+  if (records.length === 0) return false;
+  const fromRecord = Math.max(...records.map((r) => r.last + 1));
+  const own = figuresIn(s, fromRecord, global.first);
+  const clause = s.words[global.first]?.clause;
+  let end = global.last + 1;
+  while (end < s.words.length && end <= global.last + 8 && s.words[end]?.clause === clause) end++;
+  const theirs = figuresIn(s, global.last + 1, end);
+  return own.length > 0 && theirs.length > 0 && own.every((v) => !theirs.includes(v));
 }
 
 /**

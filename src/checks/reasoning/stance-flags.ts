@@ -23,7 +23,8 @@ const WORDS: Record<StanceKind, string> = {
 export function judgeByStance(flags: readonly FlagDraft[], stance: SentenceStance): FlagDraft[] {
   if (isOwnClaim(stance)) return [...flags];
   const said = WORDS[stance.kind];
-  // The statement before a question ("The air is older than the ice, so how can you trust it?") is the draft's own.
-  const premise = (f: FlagDraft) => stance.questionFrom !== undefined && f.end <= stance.questionFrom;
+  // The statement before a question ("The air is older than the ice, so how can you trust it?") is the
+  // draft's own, and so is what follows an earlier view (", a deglaciation that ended ...").
+  const premise = (f: FlagDraft) => (stance.questionFrom !== undefined && f.end <= stance.questionFrom) || (stance.viewEnd !== undefined && f.start >= stance.viewEnd);
   return flags.map((f) => premise(f) ? f : ({ ...f, level: 'note', reason: `${said}, so it is not flagged as the draft's own claim; check that the draft answers it. ${f.reason}` }));
 }
