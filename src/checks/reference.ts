@@ -18,6 +18,7 @@ import type { Binding, FlagDraft, Quantity, Verdict } from '../types.js';
 import { correctionFor, shownClaim, shownReference } from './reference-format.js';
 import { factorOff, levelWithDistance } from './distance-level.js';
 import { unitSlip } from './reference-slips.js';
+import { checkEnds } from './reference-ends.js';
 
 /** The pack term whose words mark a claim about the present ("today", "now"...). */
 export const TODAY_TERM = 'today';
@@ -48,6 +49,13 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     const q = dated === undefined || bounds[binding.quantityIndex] === undefined ? dated : { ...dated, ...boundInterval(dated) };
     if (q === undefined || r === undefined) {
       verdicts.push('no reference');
+      continue;
+    }
+    // "CO2 moved between 180 and 380 ppm over the ice ages": a range told for a span, end by end.
+    const byEnds = checkEnds(r, q, packs);
+    if (byEnds !== undefined) {
+      verdicts.push(byEnds.agrees ? 'agrees' : 'conflicts');
+      if (byEnds.flag !== undefined) flags.push(byEnds.flag);
       continue;
     }
     const distance = relativeDistance(q.low, q.high, r);

@@ -27,6 +27,7 @@ import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
 import { addSpanEdges } from './bind-edges.js';
+import { spanOrEnds } from './bind-span.js';
 import { withoutOtherSide } from './bind-turn.js';
 import { vetoView } from './bind-veto.js';
 import { clauseBreaks, termViews, type TermHits } from './bind-view.js';
@@ -387,7 +388,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     // measures neither subject's span or level; only a value that states a change may bind it.
     const difference = isDifference(sentence, quantities, i, role);
     let scored = packs.references
-      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && (!difference || r.binding.role === 'change') && satisfies(r, view, vetoes) && canState(r, q))
+      .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role, q) && (!difference || r.binding.role === 'change') && satisfies(r, view, vetoes) && canState(r, q))
       .map((r) => ({ r, score: nearness(r, view, q, breaks) }))
       .sort((a, b) => a.score - b.score);
     // A ceiling binds the highest level when some value reads it, not the level of today or of a period.
@@ -395,6 +396,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
       const extreme = scored.filter(({ r }) => r.binding.all.some((g) => g.includes(BOUND_TERMS[bound.kind])));
       if (extreme.length > 0) scored = extreme;
     }
+    // "Over the ice ages CO2 stayed between 180 and 380 ppm": a range that reaches both ends is the span.
+    scored = spanOrEnds(scored, q, packs);
     const [best, next] = scored;
     if (best !== undefined) decided.set(i, next !== undefined && next.score === best.score ? AMBIGUOUS : best.r.id);
     else if ((fromApposition = bindApposition(sentence, q, role, view, hits, packs)) !== undefined) decided.set(i, fromApposition);
