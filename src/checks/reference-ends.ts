@@ -12,11 +12,11 @@
 import { hullOf } from '../claims/bind-span.js';
 import { formatAmount } from '../format/value.js';
 import { fromCanonical } from '../rulepack/units.js';
-import { rangeEnds } from '../quantities/range-ends.js';
+import { rangeEnds, type RangeEnds } from '../quantities/range-ends.js';
 import { formatRange, midSentence } from '../rulepack/describe-range.js';
 import { levelAt } from '../rulepack/resolve-reference.js';
 import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
-import { LEVELS, type FlagDraft, type Level, type Quantity, type Source } from '../types.js';
+import { LEVELS, type FlagDraft, type Level, type Quantity } from '../types.js';
 import { factorOff, levelWithDistance } from './distance-level.js';
 import { correctionFor, displayUnit, shownClaim, shownReference } from './reference-format.js';
 
@@ -39,16 +39,17 @@ function distanceFrom([low, high]: [number, number], [a, b]: [number, number]): 
  * The end-by-end verdict of `q` against the span `r`, or undefined when the check does not apply
  * (the value is no span, the quantity states one figure, or an end's values are not loaded).
  */
-export function checkEnds(r: ReferenceValue, q: Quantity, packs: LoadedPacks): EndsVerdict | undefined {
+export function checkEnds(r: ReferenceValue, q: Quantity, packs: LoadedPacks, side?: 'low' | 'high'): EndsVerdict | undefined {
   if (r.ends === undefined) return undefined;
-  const ends = rangeEnds(q);
+  // One end of "from 120 to 300 ppm" written as two figures is that end alone.
+  const ends: Partial<RangeEnds> | undefined = side === undefined ? rangeEnds(q) : { [side]: [q.low, q.high] };
   const lowHull = hullOf(r.ends.low, packs);
   const highHull = hullOf(r.ends.high, packs);
   if (ends === undefined || lowHull === undefined || highHull === undefined) return undefined;
   const sides = [
     { side: 'low', claimed: ends.low, hull: lowHull, ids: r.ends.low },
     { side: 'high', claimed: ends.high, hull: highHull, ids: r.ends.high },
-  ].map((s) => ({ ...s, distance: distanceFrom(s.claimed, s.hull), factor: factorOff(s.claimed[0], s.claimed[1], { low: s.hull[0], high: s.hull[1] }) }));
+  ].flatMap((s) => (s.claimed === undefined ? [] : [{ ...s, claimed: s.claimed, distance: distanceFrom(s.claimed, s.hull), factor: factorOff(s.claimed[0], s.claimed[1], { low: s.hull[0], high: s.hull[1] }) }]));
   const off = sides.filter((s) => s.distance > 0);
   if (off.length === 0) return { agrees: true };
   const level = off
@@ -56,12 +57,8 @@ export function checkEnds(r: ReferenceValue, q: Quantity, packs: LoadedPacks): E
     .reduce((worst, l) => (l === undefined ? worst : worst === undefined || rank(l) > rank(worst) ? l : worst), undefined as Level | undefined);
   if (level === undefined) return { agrees: false };
   const unit = displayUnit(q);
-  const endWords = sides.map((s) => `${formatRange(s.hull[0], s.hull[1], unit)} at the ${s.side} end (the ${midSentence(endName(s.ids, packs), packs)})`);
+  const endWords = [{ side: 'low', hull: lowHull, ids: r.ends.low }, { side: 'high', hull: highHull, ids: r.ends.high }].map((s) => `${formatRange(s.hull[0], s.hull[1], unit)} at the ${s.side} end (the ${midSentence(endName(s.ids, packs), packs)})`);
   const offWords = off.map((s) => `its ${s.side} end, ${formatAmount(fromCanonical((s.claimed[0] + s.claimed[1]) / 2, unit), unit)}, lies outside ${formatRange(s.hull[0], s.hull[1], unit)}`);
-  const sources: Source[] = [...r.sources];
-  for (const id of [...r.ends.low, ...r.ends.high]) {
-    for (const s of packs.reference(id)?.sources ?? []) if (!sources.some((o) => o.id === s.id)) sources.push(s);
-  }
   return {
     agrees: false,
     flag: {
@@ -69,11 +66,12 @@ export function checkEnds(r: ReferenceValue, q: Quantity, packs: LoadedPacks): E
       level,
       start: q.start,
       end: q.end,
-      reason: `The draft gives ${q.text} for the ${midSentence(r.measures, packs)}, a span checked end by end: ${offWords.join(', and ')}. The sources give ${endWords.join(' and ')}.`,
+      reason: `The draft gives ${q.text} ${side === undefined ? 'for' : `as the ${side} end of`} the ${midSentence(r.measures, packs)}, a span checked end by end: ${offWords.join(', and ')}. The sources give ${endWords.join(' and ')}.`,
       claimed: shownClaim(q),
       reference: shownReference(r, q),
       correction: correctionFor(r, q),
-      sources,
+      // The span cites what its ends rest on (the pack keeps them together), like every value flag.
+      sources: r.sources,
     },
   };
 }

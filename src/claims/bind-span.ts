@@ -30,20 +30,39 @@ export function reachesBothEnds(span: ReferenceValue, ends: RangeEnds, packs: Pi
 }
 
 /**
- * The candidates of a range quantity with a span and its ends sorted out: where a span value and
- * one of its own ends both qualify, the span stays when the range reaches both its ends, and the
- * end values stay otherwise. Anything else is left as it is.
+ * A range something went to is a level reached, not a span: "sank to around 180–190 ppm", "fell to
+ * between 180 and 200 ppm", "rose to 280–300 ppm" (common practice: "to" names where a change ends).
  */
-export function spanOrEnds<T extends { r: ReferenceValue }>(scored: T[], q: Quantity, packs: Pick<LoadedPacks, 'reference'>): T[] {
+const REACHED = /(?:^|[^\p{L}])to\s+(?:(?:between|around|about|roughly|some|near|approximately|~)\s+)*$/iu;
+
+/**
+ * Whether a range stays by one end of a span: it does not reach both ends, and it meets the values
+ * of one of them ("between 180 and 220 ppm" by the glacial minimum). A range near neither end
+ * ("between 180 and 300 parts per billion") is a span told wrong, not an end's level.
+ */
+export function staysByOneEnd(span: ReferenceValue, ends: RangeEnds, packs: Pick<LoadedPacks, 'reference'>): boolean {
+  if (reachesBothEnds(span, ends, packs)) return false;
+  const [low, high] = [ends.low[0], ends.high[1]];
+  const meets = (hull: [number, number] | undefined) => hull !== undefined && low <= hull[1] && hull[0] <= high;
+  return meets(hullOf(span.ends?.low ?? [], packs)) || meets(hullOf(span.ends?.high ?? [], packs));
+}
+
+/**
+ * The candidates of a range quantity with a span and its ends sorted out: a range reached ("fell to
+ * 180–190 ppm") binds no span; where a span value and one of its own ends both qualify, the end
+ * values stay when the range stays by one end, and the span otherwise. Anything else is left as it is.
+ */
+export function spanOrEnds<T extends { r: ReferenceValue }>(scored: T[], q: Quantity, packs: Pick<LoadedPacks, 'reference'>, sentence: string): T[] {
   const spans = scored.filter(({ r }) => r.ends !== undefined);
   if (spans.length === 0) return scored;
   const ends = rangeEnds(q);
   if (ends === undefined) return scored;
+  if (REACHED.test(sentence.slice(Math.max(0, q.start - 40), q.start))) return scored.filter(({ r }) => r.ends === undefined);
   let kept = scored;
   for (const { r: span } of spans) {
     const endIds = new Set([...(span.ends?.low ?? []), ...(span.ends?.high ?? [])]);
     if (!kept.some(({ r }) => endIds.has(r.id))) continue;
-    kept = reachesBothEnds(span, ends, packs) ? kept.filter(({ r }) => !endIds.has(r.id)) : kept.filter(({ r }) => r !== span);
+    kept = staysByOneEnd(span, ends, packs) ? kept.filter(({ r }) => r !== span) : kept.filter(({ r }) => !endIds.has(r.id));
   }
   return kept;
 }

@@ -397,7 +397,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
       if (extreme.length > 0) scored = extreme;
     }
     // "Over the ice ages CO2 stayed between 180 and 380 ppm": a range that reaches both ends is the span.
-    scored = spanOrEnds(scored, q, packs);
+    scored = spanOrEnds(scored, q, packs, sentence);
     const [best, next] = scored;
     if (best !== undefined) decided.set(i, next !== undefined && next.score === best.score ? AMBIGUOUS : best.r.id);
     else if ((fromApposition = bindApposition(sentence, q, role, view, hits, packs)) !== undefined) decided.set(i, fromApposition);

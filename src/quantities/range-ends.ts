@@ -9,7 +9,7 @@
  */
 import type { Quantity } from '../types.js';
 import { toCanonical } from './convert.js';
-import { findAtoms } from './find-atoms.js';
+import { findAtoms, type Atom } from './find-atoms.js';
 import { writtenInterval } from './written-interval.js';
 
 /** The low and high end of a stated range, each [low, high] in the canonical unit. */
@@ -33,34 +33,34 @@ export function statesRange(q: Pick<Quantity, 'text'>): boolean {
 /** The ends of a stated range, or undefined when `q` is one figure. */
 export function rangeEnds(q: Quantity): RangeEnds | undefined {
   if (!statesRange(q)) return undefined;
-  const atoms = findAtoms(q.text);
+  const [a, b] = findAtoms(q.text) as [Atom, Atom];
   const unit = q.statedUnit === '' ? q.unit : q.statedUnit;
-  const half = (value: number, h: number): number => {
+  const canonical = (value: number): number | undefined => {
     try {
-      return Math.abs(toCanonical(value + h, unit, q.dimension) - toCanonical(value, unit, q.dimension));
+      return toCanonical(value, unit, q.dimension);
     } catch {
-      return 0;
+      return undefined;
     }
   };
-  const [a, b] = atoms as [(typeof atoms)[0], (typeof atoms)[0]];
-  const halves = [half(a.value, a.half), half(b.value, b.half)];
-  // Canonical units may run the other way (a calendar year against years before 1950): order by value.
-  const written = writtenInterval(q);
-  const aCanonical = Math.abs(written.low - safeCanonical(a.value, unit, q)) <= Math.abs(written.high - safeCanonical(a.value, unit, q));
-  const [lowHalf, highHalf] = (aCanonical ? halves : [...halves].reverse()) as [number, number];
-  // The hedge widened the whole range; each end keeps its share of it.
-  const slackLow = Math.max(0, written.low - q.low);
-  const slackHigh = Math.max(0, q.high - written.high);
-  return {
-    low: [written.low - lowHalf - slackLow, written.low + lowHalf + slackLow],
-    high: [written.high - highHalf - slackHigh, written.high + highHalf + slackHigh],
-  };
-}
-
-function safeCanonical(value: number, unit: string, q: Quantity): number {
-  try {
-    return toCanonical(value, unit, q.dimension);
-  } catch {
-    return value;
+  // Each end as written, with half a unit in its last place; canonical units may run the other way
+  // (a calendar year against years before 1950), so the ends are ordered after conversion.
+  const ends = [a, b].map((atom) => {
+    const at = canonical(atom.value);
+    const off = canonical(atom.value + atom.half);
+    return at === undefined || off === undefined ? undefined : { at, half: Math.abs(off - at) };
+  });
+  const [first, second] = ends;
+  let [low, high] = first === undefined || second === undefined ? [undefined, undefined] : first.at <= second.at ? [first, second] : [second, first];
+  // A scale word written once ("7-8 thousand years") is not on the first figure: read the ends from the interval.
+  if (low === undefined || high === undefined || low.at < q.low - 1e-9 || high.at > q.high + 1e-9) {
+    const written = writtenInterval(q);
+    [low, high] = [{ at: written.low, half: 0 }, { at: written.high, half: 0 }];
   }
+  // The hedge widened the whole range; each end keeps its share of it.
+  const slackLow = Math.max(0, low.at - q.low);
+  const slackHigh = Math.max(0, q.high - high.at);
+  return {
+    low: [low.at - low.half - slackLow, low.at + low.half + slackLow],
+    high: [high.at - high.half - slackHigh, high.at + high.half + slackHigh],
+  };
 }
