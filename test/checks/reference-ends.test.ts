@@ -55,7 +55,7 @@ describe('a range told for the span of the glacial cycles is checked end by end'
 
   it('one end of a span written as two figures is checked against that end', async () => {
     const flags = await flagsOf('Over the past 800,000 years, CO2 levels swung from 120 to 300 ppm.');
-    expect(flags.map((f) => [f.ruleId, f.claimed.text])).toEqual([['value.co2-800kyr-range', '120']]);
+    expect(flags.map((f) => [f.ruleId, f.claimed?.text])).toEqual([['value.co2-800kyr-range', '120']]);
     expect(flags[0]?.reason).toContain('as the low end of');
   });
 
