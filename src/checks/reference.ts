@@ -18,6 +18,9 @@ import type { Binding, FlagDraft, Quantity, Verdict } from '../types.js';
 import { correctionFor, shownClaim, shownReference } from './reference-format.js';
 import { factorOff, levelWithDistance } from './distance-level.js';
 import { unitSlip } from './reference-slips.js';
+import { checkEnds } from './reference-ends.js';
+import { endpointPairs } from '../claims/bind-role.js';
+import { statesRange } from '../quantities/range-ends.js';
 
 /** The pack term whose words mark a claim about the present ("today", "now"...). */
 export const TODAY_TERM = 'today';
@@ -48,6 +51,14 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     const q = dated === undefined || bounds[binding.quantityIndex] === undefined ? dated : { ...dated, ...boundInterval(dated) };
     if (q === undefined || r === undefined) {
       verdicts.push('no reference');
+      continue;
+    }
+    // "CO2 moved between 180 and 380 ppm over the ice ages": a range told for a span, end by end.
+    // The right figures in the wrong unit ("180 and 300 parts per billion") are a unit slip, read below.
+    const byEnds = r.ends === undefined ? undefined : checkEnds(r, q, packs, pairedEnd(sentence, quantities, bindings, binding));
+    if (byEnds !== undefined && (byEnds.agrees || unitSlip(r, q) === undefined)) {
+      verdicts.push(byEnds.agrees ? 'agrees' : 'conflicts');
+      if (byEnds.flag !== undefined) flags.push(byEnds.flag);
       continue;
     }
     const distance = relativeDistance(q.low, q.high, r);
@@ -102,6 +113,23 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     });
   }
   return { flags, verdicts };
+}
+
+/**
+ * Which end of a span a figure is when the draft writes the span as two figures ("swung from 120 to
+ * 300 ppm") and both bind the same value: the smaller is the low end. Undefined for a range written
+ * as one quantity ("between 120 and 300 ppm") and for a figure alone.
+ */
+function pairedEnd(sentence: string, quantities: Quantity[], bindings: Binding[], binding: Binding): 'low' | 'high' | undefined {
+  const q = quantities[binding.quantityIndex];
+  if (q === undefined || statesRange(q)) return undefined;
+  for (const pair of endpointPairs(sentence, quantities)) {
+    const other = pair.first === binding.quantityIndex ? pair.second : pair.second === binding.quantityIndex ? pair.first : undefined;
+    const o = other === undefined ? undefined : quantities[other];
+    if (o === undefined || !bindings.some((b) => b.quantityIndex === other && b.referenceId === binding.referenceId)) continue;
+    return q.value <= o.value ? 'low' : 'high';
+  }
+  return undefined;
 }
 
 const recordMatchers = new WeakMap<LoadedPacks, TopicMatcher>();

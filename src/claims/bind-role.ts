@@ -7,7 +7,8 @@
  *   "CO2 rose by roughly 80 ppm, from about 190 ppm to about 270 ppm"
  *                 └ change ┘        └ level ┘      └ level ┘
  */
-import type { QuantityRole } from '../rulepack/types.js';
+import type { QuantityRole, ValueRole } from '../rulepack/types.js';
+import { statesRange } from '../quantities/range-ends.js';
 import type { Quantity } from '../types.js';
 
 /** What the words around a quantity say it is; `unknown` binds to values of either role. */
@@ -108,7 +109,11 @@ export function quantityRoles(sentence: string, quantities: Quantity[]): ReadRol
   });
 }
 
-/** Whether a value that accepts `accepted` (undefined: any) may bind a quantity read as `read`. */
-export function roleFits(accepted: QuantityRole | undefined, read: ReadRole): boolean {
+/**
+ * Whether a value that accepts `accepted` (undefined: any) may bind a quantity read as `read`. A
+ * `range` value binds only a quantity `q` that states both ends of a range, and a change never.
+ */
+export function roleFits(accepted: ValueRole | undefined, read: ReadRole, q?: Pick<Quantity, 'text'>): boolean {
+  if (accepted === 'range') return read !== 'change' && q !== undefined && statesRange(q);
   return accepted === undefined || read === 'unknown' || accepted === read;
 }

@@ -28,6 +28,7 @@ import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
 import { addSpanEdges } from './bind-edges.js';
+import { spanOrEnds } from './bind-span.js';
 import { withoutOtherSide } from './bind-turn.js';
 import { vetoView } from './bind-veto.js';
 import { clauseBreaks, termViews, type TermHits } from './bind-view.js';
@@ -439,7 +440,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     const difference = isDifference(sentence, quantities, i, role);
     const scoreIn = (seen: TermHits, vetoed: TermHits) =>
       packs.references
-        .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && (!difference || r.binding.role === 'change') && satisfies(r, seen, vetoed) && canState(r, q))
+        .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role, q) && (!difference || r.binding.role === 'change') && satisfies(r, seen, vetoed) && canState(r, q))
         .map((r) => ({ r, score: nearness(r, seen, q, breaks) }))
         .sort((a, b) => a.score - b.score);
     // "The end of the last deglaciation (about 5,000 years ago) opened the Holocene": a number alone in
@@ -452,6 +453,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
       const extreme = scored.filter(({ r }) => r.binding.all.some((g) => g.includes(BOUND_TERMS[bound.kind])));
       if (extreme.length > 0) scored = extreme;
     }
+    // "Over the ice ages CO2 stayed between 180 and 380 ppm": a range that reaches both ends is the span.
+    scored = spanOrEnds(scored, q, packs, sentence);
     const [best, next] = scored;
     if (best !== undefined) decided.set(i, next !== undefined && next.score === best.score ? AMBIGUOUS : best.r.id);
     else if ((fromApposition = bindApposition(sentence, q, role, view, hits, packs)) !== undefined) decided.set(i, fromApposition);

@@ -14,10 +14,11 @@ const BY_PREFIX: [string, Describe][] = [
     if (r === undefined) return undefined;
     const dated = r.asOf === undefined ? '' : ` (as of ${r.asOf})`;
     const notes = r.notes === undefined ? '' : ` ${r.notes}`;
+    const ends = r.ends === undefined ? '' : ` A range told for it is checked end by end: its low end against ${r.ends.low.join(', ')}, its high end against ${r.ends.high.join(', ')}.`;
     return {
       id: `value.${r.id}`,
       summary: `Checks the ${midSentence(r.measures, packs)} against the sourced range.`,
-      description: `Accepted range: ${describeRange(r)}${dated}. A correction reads "${r.wording}".${notes}`,
+      description: `Accepted range: ${describeRange(r)}${dated}. A correction reads "${r.wording}".${ends}${notes}`,
       defaultLevel: 'warning',
       sources: r.sources,
     };

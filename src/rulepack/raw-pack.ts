@@ -24,13 +24,14 @@ export interface RawReferenceValue {
   central?: number;
   unit: string;
   also_as?: Dimension[];
-  binds_when: { all: string[][]; none?: string[]; role?: 'level' | 'change' | 'any' };
+  binds_when: { all: string[][]; none?: string[]; role?: 'level' | 'change' | 'range' | 'any' };
   correction: string;
   levels?: Partial<Record<Level, number>>;
   as_of?: string;
   review_by?: string;
   superseded_by?: string;
   regional_version_of?: string;
+  ends?: { low: string | string[]; high: string | string[] };
   sources: string[];
   notes?: string;
 }

@@ -10,7 +10,8 @@ import type { RawPack } from './raw-pack.js';
 import { resolveReference } from './resolve-reference.js';
 import { resolveSource } from './resolve-source.js';
 import type { DirectionFact, FactForm, Lexicon, PatternRule, ReasoningCheck, RulePack, Term } from './types.js';
-import type { OneOrMany, RawDirectionFact } from './raw-pack.js';
+import type { OneOrMany, RawDirectionFact, RawReferenceValue } from './raw-pack.js';
+import { unitDef } from './units.js';
 import type { YamlFile } from './yaml-file.js';
 import { regexProblem } from './regex-problem.js';
 
@@ -68,6 +69,7 @@ export function resolvePack(yaml: YamlFile, file: string, known: KnownIds): Rule
     if (global !== undefined && !valueIds.has(global) && !known.defined.has(`reference_values:${global}`)) {
       errors.push(yaml.errorAt('pack-unknown-value', ['reference_values', i, 'regional_version_of'], `unknown reference value id \`${global}\`; regional_version_of names the global value this one is the regional size of`));
     }
+    checkEnds(scope, r, i, valueIds, known, raw.reference_values ?? []);
   });
   const directions: DirectionFact[] = (raw.direction_facts ?? []).map((d, i) => {
     const path = ['direction_facts', i];
@@ -158,4 +160,28 @@ function lexiconOf(raw: { lexicon?: Record<string, string[] | Record<string, str
   const out: Lexicon = {};
   for (const [cls, value] of Object.entries(raw.lexicon ?? {})) out[cls] = Array.isArray(value) ? { all: value } : { ...value };
   return out;
+}
+
+/**
+ * The `ends` of a span value name values that exist (in this pack or an earlier one); an end of
+ * this pack states the span's unit dimension, and is no span itself.
+ */
+function checkEnds(scope: PackScope, r: RawReferenceValue, i: number, valueIds: ReadonlySet<string>, known: KnownIds, values: readonly RawReferenceValue[]): void {
+  if (r.ends === undefined) return;
+  for (const side of ['low', 'high'] as const) {
+    [r.ends[side]].flat().forEach((id, k) => {
+      const path = ['reference_values', i, 'ends', side, ...(Array.isArray(r.ends?.[side]) ? [k] : [])];
+      if (!valueIds.has(id) && !known.defined.has(`reference_values:${id}`)) {
+        scope.errors.push(scope.yaml.errorAt('pack-unknown-value', path, `unknown reference value id \`${id}\`; ends names the values at the ${side} end of this span`));
+        return;
+      }
+      const end = values.find((v) => v.id === id);
+      if (end === undefined) return;
+      if (end.ends !== undefined || id === r.id) {
+        scope.errors.push(scope.yaml.errorAt('pack-schema', path, `\`${id}\` is a span itself; an end of a span is a value with no \`ends\``));
+      } else if (unitDef(end.unit)?.dimension !== unitDef(r.unit)?.dimension) {
+        scope.errors.push(scope.yaml.errorAt('pack-schema', path, `\`${id}\` is stated in ${end.unit} and this span in ${r.unit}; an end must measure the same dimension`));
+      }
+    });
+  }
 }

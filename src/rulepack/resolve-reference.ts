@@ -56,6 +56,7 @@ export function resolveReference(scope: PackScope, raw: RawReferenceValue, path:
     ...(raw.review_by === undefined ? {} : { reviewBy: raw.review_by }),
     ...(raw.superseded_by === undefined ? {} : { supersededBy: raw.superseded_by }),
     ...(raw.regional_version_of === undefined ? {} : { regionalVersionOf: raw.regional_version_of }),
+    ...(raw.ends === undefined ? {} : { ends: { low: [raw.ends.low].flat(), high: [raw.ends.high].flat() } }),
     ...(raw.notes === undefined ? {} : { notes: raw.notes }),
   };
 }

@@ -23,6 +23,12 @@ export interface Term {
  */
 export type QuantityRole = 'level' | 'change';
 
+/**
+ * The part a number must play for a value to bind it: a role of one number, or `range`, a number
+ * that states both ends of a range ("between 180 and 300 ppm", "180–300 ppm").
+ */
+export type ValueRole = QuantityRole | 'range';
+
 /** Which sentences a reference value speaks about, in term ids. */
 export interface TermBinding {
   /** Every group must be satisfied; a group is satisfied when any one of its term ids appears. */
@@ -30,7 +36,7 @@ export interface TermBinding {
   /** Term ids that veto the binding when any of them appears. */
   none: string[];
   /** The only role of number the value binds (absent: any role). */
-  role?: QuantityRole;
+  role?: ValueRole;
 }
 
 /**
@@ -68,6 +74,13 @@ export interface ReferenceValue {
   supersededBy?: string;
   /** The id of the global value this one is a regional size of (Antarctic warming beside the global mean). */
   regionalVersionOf?: string;
+  /**
+   * The value is the span of a record, and these values are its ends (value ids: the glacial
+   * minimum and the lowest level for the low end, the interglacial maximum and the highest for the
+   * high end). A claim stating a range for it is checked end by end: each end against the hull of
+   * its values (src/checks/reference-ends.ts).
+   */
+  ends?: { low: string[]; high: string[] };
   levels: LevelSteps;
   sources: Source[];
   notes?: string;

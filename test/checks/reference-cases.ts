@@ -235,6 +235,11 @@ export const CASES: Case[] = [
   ['co2-modern-vs-abrupt-step-ratio', ['CO2 now climbs about 30 times faster than during the abrupt deglacial jumps.', 'about 30 times', 'ratio', 26.5, 33.5], ['CO2 now climbs 500 times faster than during the abrupt deglacial jumps.', '500 times', 'ratio', 495, 505]],
   // Lüthi et al. 2008, Nature 453, doi:10.1038/nature06949; Siegenthaler et al. 2005, Science 310, doi:10.1126/science.1120130
   ['co2-800kyr-range', ['Over 800,000 years, CO2 in the ice varied between about 180 and 300 ppm.', 'between about 180 and 300 ppm', C, 156, 324], ['Over 800,000 years, CO2 in the ice varied between 350 and 450 ppm.', 'between 350 and 450 ppm', C, 350, 450]],
+  // Lüthi et al. 2008, Nature 453, 379-382, doi:10.1038/nature06949 (172-300 ppm over 800,000 years);
+  // Siegenthaler et al. 2005, Science 310, 1313-1317, doi:10.1126/science.1120130 (glacial minima near
+  // 180 ppm, interglacial maxima 280-300 ppm after 430 ka): the span is checked end by end, so a high
+  // end of 380 ppm is off though the range overlaps 172-300 ppm.
+  ['co2-glacial-interglacial-range', ['Over the glacial cycles, CO2 in the ice stayed between about 180 and 290 ppm.', 'between about 180 and 290 ppm', C, 174.125, 295.875], ['Over the glacial cycles, CO2 in the ice stayed between 180 and 380 ppm.', 'between 180 and 380 ppm', C, 180, 380]],
   // IPCC 2021, IPCC AR6 WGI, doi:10.1017/9781009157896.001; Lüthi et al. 2008, Nature 453, doi:10.1038/nature06949; Yan et al. 2019, Nature 574, doi:10.1038/s41586-019-1692-3
   ['co2-2019-highest-in-2-myr', ['CO2 is now higher than at any time in at least 2 million years.', 'at least 2 million years', Y, 2_000_000, 4_000_000], ['CO2 is now higher than at any time in 50 million years.', '50 million years', Y, 49_500_000, 50_500_000]],
   // Gulev et al. 2021, IPCC AR6 WGI chap. 2, doi:10.1017/9781009157896.004 (from memory); Forster et al. 2021, IPCC AR6 WGI chap. 7, doi:10.1017/9781009157896.009

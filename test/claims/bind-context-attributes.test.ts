@@ -36,7 +36,8 @@ const KEPT_APART: Row[] = [
   ['The Younger Dryas set in about 12,900 years ago.', 'These cores hold a record of 800,000 years.', [['800,000 years', 'duration']], ['-']],
   // The sentence states its own stretch of time: the year one sentence back does not date its CO2
   // range (IPCC AR6 SPM A.2.1 gives the 2019 level; Lüthi et al. 2008 the 172-300 ppm range).
-  ['In 2019 carbon dioxide averaged about 410 ppm across the globe.', 'The ice reaches back 800,000 years, and over that whole stretch CO2 stayed between about 180 and 300 ppm.', [['800,000 years', 'duration'], ['between about 180 and 300 ppm', 'concentration']], ['-', '-']],
+  // The range, told for the span of the record ("reaches back"), binds that span of levels, checked end by end.
+  ['In 2019 carbon dioxide averaged about 410 ppm across the globe.', 'The ice reaches back 800,000 years, and over that whole stretch CO2 stayed between about 180 and 300 ppm.', [['800,000 years', 'duration'], ['between about 180 and 300 ppm', 'concentration']], ['-', 'co2-glacial-interglacial-range']],
   // A region named in the sentence is a subject of its own, however the sentence refers back: the
   // number stays with Greenland (about 20-23 K colder at the LGM, Dahl-Jensen et al. 1998,
   // doi:10.1126/science.282.5387.268), not East Antarctica (4-7 K, Buizert et al. 2021, doi:10.1126/science.abd2897).

@@ -67,6 +67,6 @@ describe('binds_when.role', () => {
       () => [],
       (error: unknown) => (error instanceof FirnlineErrors ? error.errors.map((e) => e.toLine()) : [String(error)]),
     );
-    expect(lines).toEqual([`${file}:19:13: \`role\` must be one of: level, change, any`]);
+    expect(lines).toEqual([`${file}:19:13: \`role\` must be one of: level, change, range, any`]);
   });
 });

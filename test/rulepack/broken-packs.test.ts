@@ -40,6 +40,13 @@ const CASES: [string, string[], string[]][] = [
   ['interval with low > high', ['low-above-high.yaml'], [
     `${dir}/low-above-high.yaml:15:10: low (120) is greater than high (50); swap them`,
   ]],
+  // `ends` of a span: an unknown value, an end in another dimension, a span given as an end.
+  ['ends of a span', ['span-ends-broken.yaml'], [
+    `${dir}/span-ends-broken.yaml:29:19: unknown reference value id \`no-such-value\`; ends names the values at the low end of this span`,
+    `${dir}/span-ends-broken.yaml:29:41: \`broken-depth\` is stated in m and this span in ppm; an end must measure the same dimension`,
+    `${dir}/span-ends-broken.yaml:38:18: \`broken-range\` is a span itself; an end of a span is a value with no \`ends\``,
+    `${dir}/span-ends-broken.yaml:38:39: \`broken-range-2\` is a span itself; an end of a span is a value with no \`ends\``,
+  ]],
   ['invalid regular expression', ['invalid-regex.yaml'], [
     `${dir}/invalid-regex.yaml:8:12: invalid regular expression: /\\bppmv(\\b/iu: Unterminated group`,
   ]],
@@ -52,6 +59,14 @@ describe('a broken pack stops the run with file:line:column for each mistake', (
 
   it('loads nothing from a half-broken set: a good pack beside a broken one still fails', async () => {
     await expect(loadPacks([`${dir}/good-house.yaml`, `${dir}/low-above-high.yaml`], { builtin: false })).rejects.toBeInstanceOf(FirnlineErrors);
+  });
+
+  it('loads a span whose ends are a value of its own and built-in values, one id or a list', async () => {
+    const packs = await loadPacks([`${dir}/span-ends.yaml`]);
+    expect(packs.reference('gallery-range')).toMatchObject({
+      binding: { all: [['gallery-span']], none: [], role: 'range' },
+      ends: { low: ['gallery-low'], high: ['co2-interglacial-maximum-typical', 'co2-highest-preindustrial-800kyr'] },
+    });
   });
 
   it('loads a correct team pack beside the built-in one, citing its own sources', async () => {
