@@ -151,9 +151,14 @@ export function keyWordsIn(lower: string, terms: Map<string, CompiledTerm>): Set
 export function compiledTerms(packs: LoadedPacks): Map<string, CompiledTerm> {
   let terms = compiled.get(packs);
   if (terms === undefined) {
+    // A form some term writes out is that term's: "swung" written under the ranging verbs is no
+    // derived form of the change noun "swing".
+    const written = new Map<string, Set<string>>();
+    for (const t of packs.terms) for (const w of t.words) (written.get(w.toLowerCase()) ?? written.set(w.toLowerCase(), new Set()).get(w.toLowerCase())!).add(extendedTerm(t.id, packs));
     terms = new Map(
       packs.terms.map((t): [string, CompiledTerm] => {
-        const words = inflectedTerm(termVariants(t.words));
+        const own = extendedTerm(t.id, packs);
+        const words = inflectedTerm(termVariants(t.words), (form) => [...(written.get(form) ?? [])].some((id) => id !== own));
         return [t.id, { words, keyWords: keyWordsOf(words) }];
       }),
     );
@@ -165,13 +170,17 @@ export function compiledTerms(packs: LoadedPacks): Map<string, CompiledTerm> {
 /**
  * A term's phrases with every inflection of their words derived, as the lexicon's are
  * (propositions/inflect.ts): a pack lists "rise" and the draft may say "rising" or "rose". Only
- * phrases of plain letters inflect; symbols, numbers and forms the pack wrote out stay as written.
+ * phrases of plain letters inflect; symbols, numbers and forms the pack wrote out stay as written,
+ * and a form another term writes out (`othersWrite`) stays that term's alone.
  */
-function inflectedTerm(words: readonly string[]): string[] {
+function inflectedTerm(words: readonly string[], othersWrite: (form: string) => boolean): string[] {
   const out = new Set(words);
   for (const phrase of words) {
     if (!/^[A-Za-z]+(?: [A-Za-z]+){0,2}$/u.test(phrase)) continue;
-    for (const form of variantsOf(phraseWords(phrase))) out.add(form.join(' '));
+    for (const form of variantsOf(phraseWords(phrase))) {
+      const text = form.join(' ');
+      if (!out.has(text) && !othersWrite(text)) out.add(text);
+    }
   }
   return [...out];
 }

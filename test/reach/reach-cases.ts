@@ -564,6 +564,11 @@ export const REACH: ReachCase[] = [
     right('Over the past 800,000 years CO2 ranged between about 172 and 300 ppm.'),
     wrong('Over the past 800,000 years, CO2 ranged between 350 and 600 ppm.', ['172', '300']),
   ]],
+  // Lüthi et al. 2008, Nature 453, doi 10.1038/nature06949; Siegenthaler et al. 2005, Science 310, doi 10.1126/science.1120130
+  ['co2-glacial-interglacial-range', [
+    right('Through the ice ages, the Vostok record shows CO2 between about 180 and 300 ppm.'),
+    wrong('Through the ice ages, the Vostok record shows CO2 between about 100 and 600 ppm.', ['172', '300']),
+  ]],
   // IPCC 2021, Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, doi 10.1017/9781009157896.001; Lüthi et al. 2008, Nature 453, doi 10.1038/nature06949; Yan et al. 2019, Nature 574, doi 10.1038/s41586-019-1692-3
   ['co2-2019-highest-in-2-myr', [
     right('CO2 is now higher than at any time in at least 2 million years.'),
