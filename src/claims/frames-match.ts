@@ -57,7 +57,6 @@ const MORE_IRREGULAR: Readonly<Record<string, readonly string[]>> = {
   steal: ['stole', 'stolen'], strive: ['strove', 'striven'], sneak: ['snuck'], speed: ['sped'], bleed: ['bled'], creep: ['crept'],
   cling: ['clung'], wring: ['wrung'], dive: ['dove'], behold: ['beheld'], uphold: ['upheld'], seek: ['sought'],
 };
-const HYPHENS = /^[-\u2010\u2011]/u;
 
 /**
  * True when a word written `text` (as the tokenizer writes it) may match the cue word `test` once
@@ -91,17 +90,29 @@ export function mayMatchWord(test: string, text: string): boolean {
  */
 export function mayMatchPhrase(sentence: SentenceTokens, phrase: Phrase): boolean {
   if (phrase.groups.length === 0) return false;
+  const texts = wordTexts(sentence);
+  return phrase.groups.every((group) => group.every((test) => texts.some((text) => mayMatchWord(test, text))));
+}
+
+const HYPHENS = new Set(['-', '\u2010', '\u2011']);
+const textsOf = new WeakMap<SentenceTokens, string[]>();
+
+/** The words of a sentence, and each word joined with the words after it across hyphens. */
+function wordTexts(sentence: SentenceTokens): string[] {
+  const known = textsOf.get(sentence);
+  if (known !== undefined) return known;
   const texts: string[] = [];
   const words = sentence.words.map((w) => sentence.tokens[w] as Token);
   words.forEach((t, i) => {
     texts.push(t.text);
     let joined = t.text;
-    for (let j = i; j + 1 < words.length && HYPHENS.test(sentence.text.slice((words[j] as Token).end)); j += 1) {
+    for (let j = i; j + 1 < words.length && HYPHENS.has(sentence.text.charAt((words[j] as Token).end)); j += 1) {
       joined += (words[j + 1] as Token).text;
       texts.push(joined);
     }
   });
-  return phrase.groups.every((group) => group.every((test) => texts.some((text) => mayMatchWord(test, text))));
+  textsOf.set(sentence, texts);
+  return texts;
 }
 
 function groupAt(sentence: SentenceTokens, group: string[], at: number): boolean {
