@@ -65,11 +65,11 @@ const MORE_IRREGULAR: Readonly<Record<string, readonly string[]>> = {
  * word by its tag (plural, past, gerund, present, comparative, superlative, adverb, possessive,
  * copula), with suffix rules that keep the word's first letters, and tables of irregular forms.
  * So a word may match when it is the cue word, when it starts with the cue word's first three
- * letters (all but the last of a shorter word: "aging" for "age"), when it is one of the cue word's
- * irregular forms (propositions/inflect.ts and `MORE_IRREGULAR`: "went" for "go", "feet" for
- * "foot"), when the cue word is the copula ("is", "be": any form of it, "'s" too), and whenever the
- * word holds an apostrophe (compromise splits "it's" and "we've" and gives the word the root of a
- * part). A word ending in `*` matches the text alone, as `wordMatches` does.
+ * letters (all but the last of a word of three or fewer: "aging" for "age"), when it is one of
+ * the cue word's irregular forms (propositions/inflect.ts and `MORE_IRREGULAR`: "went" for "go",
+ * "feet" for "foot"), when the cue word is the copula ("is", "be": any form of it, "'s" too),
+ * and whenever the word holds an apostrophe (compromise splits "it's" and "we've" and gives the
+ * word the root of a part). A word ending in `*` matches the text alone, as `wordMatches` does.
  * test/claims/cue-presence.test.ts tries every word form of compromise's lexicon under each root
  * rule against the built-in pack's cue words, and the roots compromise gives in context on the
  * sentences of our prose.
