@@ -97,7 +97,7 @@ describe('a cue word in some inflection, on the words alone', () => {
     expect(sentences.length).toBeGreaterThan(1000);
     expect(rooted).toBeGreaterThan(500);
     expect(missed).toEqual([]);
-  }, 120_000);
+  }, 300_000);
 
   it('finds irregular and shortened forms, and tells a missing word', () => {
     const phrase = (source: string) => compilePhrases([source])[0] as ReturnType<typeof compilePhrases>[number];

@@ -37,12 +37,12 @@ describe('compromise/two for the sentence readings', () => {
     expect((require('compromise/two') as Nlp).version).toBe(compromise().version);
   });
 
-  // Every other sentence, to keep the test within half a minute on our shared machine; all of them
+  // Every fifth sentence, to keep the test within some 20 s on our shared machine; all of them
   // (14,910 with 256 KB of the bench's prose) were compared once when the switch was made.
   it('reads the sentences of our prose as the full build does', () => {
-    const sentences = corpusSentences().filter((_s, i) => i % 2 === 0);
-    expect(sentences.length).toBeGreaterThan(2500);
+    const sentences = corpusSentences(8).filter((_s, i) => i % 5 === 0);
+    expect(sentences.length).toBeGreaterThan(1000);
     const differ = sentences.filter((text) => JSON.stringify(termsOf(text)) !== JSON.stringify(fullReading(text)));
     expect(differ).toEqual([]);
-  }, 120_000);
+  }, 300_000);
 });
