@@ -105,14 +105,13 @@ function detectRegional(input: DetectInput): Cue[] {
   );
   const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text));
   if (global === undefined || !temperature || !(record || carriedOver(global))) return [];
-  // "colder than today" compares two times, not the record with the globe: no contrast. The tokens
-  // (compromise's roots) are read only when a contrast phrase may be there at all.
-  const sentence = input.mayHold('contrast') ? input.sentence : undefined;
-  const times = sentence === undefined ? [] : findPhrases(sentence, words('time-comparison'));
+  // "colder than today" compares two times, not the record with the globe: no contrast.
+  const sentence = input.sentence;
+  const times = findPhrases(sentence, words('time-comparison'));
   // "than" compares only when a place or a record follows it ("larger than the global mean"); "than it
   // is today", "than before industrialisation" compare two times. "not just Greenland's" widens.
   const places = [...s.of('regions'), ...s.of('entities', 'ice-core'), ...s.of('entities', 'temperature')];
-  const contrast = sentence === undefined ? [] : findPhrases(sentence, words('contrast')).filter((c) => {
+  const contrast = findPhrases(sentence, words('contrast')).filter((c) => {
     if (times.some((t) => t.first <= c.first && t.last >= c.last)) return false;
     const phrase = sentence.text.slice(c.start, c.end).toLowerCase();
     const next = s.words.findIndex((w) => w.start >= c.end);
