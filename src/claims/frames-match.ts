@@ -4,6 +4,7 @@
  * ("either ... or"). A word matches a token's text or its compromise root, so "cause" also finds
  * "caused" and "causes".
  */
+import { IRREGULAR } from '../propositions/inflect.js';
 import type { SentenceTokens, Token } from './frames-tokens.js';
 
 /** A compiled phrase: groups of word tests, with a gap allowed between groups. */
@@ -39,6 +40,79 @@ export function compilePhrases(list: readonly string[]): Phrase[] {
 function wordMatches(test: string, token: Token): boolean {
   if (test.endsWith('*')) return token.text.startsWith(test.slice(0, -1));
   return token.text === test || token.root === test;
+}
+
+/**
+ * Irregular forms that compromise reads back to a root and that the lexicon's verb table
+ * (propositions/inflect.ts `IRREGULAR`) does not list: noun plurals, compared adjectives and a few
+ * more verbs (English grammar, common practice). Root → forms.
+ */
+const MORE_IRREGULAR: Readonly<Record<string, readonly string[]>> = {
+  foot: ['feet'], tooth: ['teeth'], goose: ['geese'], man: ['men'], woman: ['women'], child: ['children'], person: ['people'],
+  mouse: ['mice'], ox: ['oxen'], die: ['dice'], good: ['better', 'best'], well: ['better', 'best'], bad: ['worse', 'worst'],
+  far: ['further', 'furthest', 'farther', 'farthest'], little: ['less', 'least'], many: ['more', 'most'], much: ['more', 'most'],
+  sit: ['sat'], meet: ['met'], bind: ['bound'], blow: ['blew', 'blown'], fly: ['flew', 'flown'], eat: ['ate', 'eaten'],
+  buy: ['bought'], choose: ['chose', 'chosen'], arise: ['arose', 'arisen'], dig: ['dug'], fling: ['flung'], kneel: ['knelt'],
+  sing: ['sang', 'sung'], ring: ['rang', 'rung'], spring: ['sprang', 'sprung'], sting: ['stung'], stink: ['stank', 'stunk'],
+  steal: ['stole', 'stolen'], strive: ['strove', 'striven'], sneak: ['snuck'], speed: ['sped'], bleed: ['bled'], creep: ['crept'],
+  cling: ['clung'], wring: ['wrung'], dive: ['dove'], behold: ['beheld'], uphold: ['upheld'], seek: ['sought'],
+};
+
+/**
+ * True when a word written `text` (as the tokenizer writes it) may match the cue word `test` once
+ * compromise's root of it is read, so that a sentence without such a word for some word of a
+ * phrase cannot hold the phrase, whatever compromise says. compromise takes a word's root from the
+ * word by its tag (plural, past, gerund, present, comparative, superlative, adverb, possessive,
+ * copula), with suffix rules that keep the word's first letters, and tables of irregular forms.
+ * So a word may match when it is the cue word, when it starts with the cue word's first three
+ * letters (all but the last of a word of three or fewer: "aging" for "age"), when it is one of
+ * the cue word's irregular forms (propositions/inflect.ts and `MORE_IRREGULAR`: "went" for "go",
+ * "feet" for "foot"), when the cue word is the copula ("is", "be": any form of it, "'s" too),
+ * and whenever the word holds an apostrophe (compromise splits "it's" and "we've" and gives the
+ * word the root of a part). A word ending in `*` matches the text alone, as `wordMatches` does.
+ * test/claims/cue-presence.test.ts tries every word form of compromise's lexicon under each root
+ * rule against the built-in pack's cue words, and the roots compromise gives in context on the
+ * sentences of our prose.
+ */
+export function mayMatchWord(test: string, text: string): boolean {
+  if (test.endsWith('*')) return text.startsWith(test.slice(0, -1));
+  if (text === test || test === 'is' || test === 'be' || text.includes("'") || text.includes('’')) return true;
+  if (text.startsWith(test.slice(0, Math.max(1, Math.min(3, test.length - 1))))) return true;
+  return (IRREGULAR[test]?.includes(text) ?? false) || (MORE_IRREGULAR[test]?.includes(text) ?? false);
+}
+
+/**
+ * False when some word of `phrase` has no word of the sentence that may match it (`mayMatchWord`):
+ * then `findPhrases` finds no hit of it, with compromise's roots or without. `sentence` needs no
+ * roots (tokenizeSentence with `null`). compromise reads a word with a prefix before a hyphen as one
+ * term ("re-read"), and its root ("reread") goes to the first word: such a word is tried joined
+ * with the words after it, up to the last hyphen.
+ */
+export function mayMatchPhrase(sentence: SentenceTokens, phrase: Phrase): boolean {
+  if (phrase.groups.length === 0) return false;
+  const texts = wordTexts(sentence);
+  return phrase.groups.every((group) => group.every((test) => texts.some((text) => mayMatchWord(test, text))));
+}
+
+const HYPHENS = new Set(['-', '\u2010', '\u2011']);
+const textsOf = new WeakMap<SentenceTokens, string[]>();
+
+/** The words of a sentence, and each word joined with the words after it across hyphens. */
+function wordTexts(sentence: SentenceTokens): string[] {
+  const known = textsOf.get(sentence);
+  if (known !== undefined) return known;
+  const texts: string[] = [];
+  const words = sentence.words.map((w) => sentence.tokens[w] as Token);
+  words.forEach((t, i) => {
+    texts.push(t.text);
+    let joined = t.text;
+    for (let j = i; j + 1 < words.length && HYPHENS.has(sentence.text.charAt((words[j] as Token).end)); j += 1) {
+      joined += (words[j + 1] as Token).text;
+      texts.push(joined);
+    }
+  });
+  textsOf.set(sentence, texts);
+  return texts;
 }
 
 function groupAt(sentence: SentenceTokens, group: string[], at: number): boolean {

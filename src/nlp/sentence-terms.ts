@@ -10,7 +10,7 @@
  *   termsOf('CO2 lagged the warming.')
  *   → [{ text: 'CO2', start: 0, length: 3, root: 'co2', tags: ['Noun', ...] }, { text: 'lagged', root: 'lag', ... }, ...]
  */
-import { compromise } from './compromise.js';
+import { compromiseTagger, countParse } from './compromise.js';
 
 /** One term as compromise reads it; `start` and `length` are UTF-16 offsets into the sentence. */
 export interface SentenceTerm {
@@ -42,27 +42,11 @@ export function termsOf(text: string): readonly SentenceTerm[] {
   return terms;
 }
 
-/**
- * compromise's parse without its last hook, the chunker ('chunks'), which only sets each term's
- * `chunk` (noun, verb, adjective or pivot phrase: compromise 14's src/3-three/chunker writes no tag,
- * root, text or offset) and which nothing here reads; it took about a third of each parse. The
- * hooks are the library's own list, put back before anything else can parse (the parse is
- * synchronous), so a pattern rule's document (checks/reasoning) keeps its chunks.
- */
-function parseWithoutChunks(text: string): ReturnType<ReturnType<typeof compromise>> {
-  const nlp = compromise();
-  const world = nlp.world() as { hooks: string[] };
-  const hooks = world.hooks;
-  world.hooks = hooks.filter((hook) => hook !== 'chunks');
-  try {
-    return nlp(text);
-  } finally {
-    world.hooks = hooks;
-  }
-}
-
 function readTerms(text: string): readonly SentenceTerm[] {
-  const doc = parseWithoutChunks(text);
+  // The tagger build has no chunker, whose chunks (noun, verb... phrases) nothing here reads: the
+  // full build's last hook, it took about a third of each parse there.
+  countParse();
+  const doc = compromiseTagger()(text);
   doc.compute('root');
   // The offsets `doc.json({ offset: true, terms: { offset: true } })` reports, without the json:
   // that call copied every term and rendered each sentence's text, normal and offset besides, about

@@ -8,7 +8,7 @@
  */
 
 /** Irregular verbs: infinitive → past and participle forms. */
-const IRREGULAR: Record<string, string[]> = {
+export const IRREGULAR: Readonly<Record<string, readonly string[]>> = {
   be: ['is', 'are', 'was', 'were', 'been', 'being'], have: ['has', 'had', 'having'], do: ['does', 'did', 'done', 'doing'],
   take: ['took', 'taken'], hold: ['held'], give: ['gave', 'given'], lead: ['led'], rise: ['rose', 'risen'], fall: ['fell', 'fallen'],
   drive: ['drove', 'driven'], grow: ['grew', 'grown'], go: ['went', 'gone', 'goes'], come: ['came'], show: ['shown'], keep: ['kept'],

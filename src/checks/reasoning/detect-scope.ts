@@ -70,7 +70,7 @@ function detectRegional(input: DetectInput): Cue[] {
   // "Going by Vostok, the planet was 9 °C colder": a record after a read-from phrase (`read-from`) in its
   // segment is where the whole sentence is read from, too. The tokens (and compromise's roots) are
   // read for it only when a record and the globe are both named: most sentences stop before.
-  const readFrom = records.length === 0 || s.of('regions', 'global').length === 0 ? [] : findPhrases(input.sentence, words('read-from')).map((p) => s.words.find((w) => w.start === p.start));
+  const readFrom = records.length === 0 || s.of('regions', 'global').length === 0 || !input.mayHold('read-from') ? [] : findPhrases(input.sentence, words('read-from')).map((p) => s.words.find((w) => w.start === p.start));
   // A region named outside that segment ("Going by Vostok, Antarctica was 9 °C colder; the globe...")
   // is what the record is read as.
   const readAfter = (r: { first: number }) => readFrom.some((w) => w !== undefined && w.segment === s.words[r.first]?.segment && w.start < (s.words[r.first]?.start ?? 0));
@@ -258,6 +258,8 @@ function detectCarriedOrder(input: DetectInput): Cue[] {
   const carried = ordersOf(here).find((o) => o.start > first && globalSegments.has(segmentOf(o.start)) && localHere.length > 0);
   if (carried !== undefined) return [{ start: carried.start, end: carried.end }];
   // "that's the order the whole planet went through", "the same sequence holds for the planet".
+  // No phrase of `carried-order` possible, no flag: the tokens (compromise's roots) are not read.
+  if (!input.mayHold('carried-order')) return [];
   const sentence = input.sentence;
   const refs = findPhrases(sentence, words('carried-order'));
   // "For the planet the order was the reverse": an order set against the one before carries nothing over.

@@ -19,6 +19,12 @@ export interface DetectInput {
   own: number;
   /** The propositions and stance of sentence `i` of the paragraph. */
   read: Reader;
+  /**
+   * False when no phrase of the cue list `name` can be in the sentence, whatever compromise's roots
+   * (claims/frames-match.ts `mayMatchPhrase`, on the words alone): `findPhrases` of that list on
+   * `sentence` is then empty, and the detector need not ask for `sentence` for it.
+   */
+  mayHold: (name: string) => boolean;
 }
 
 /** A stretch of the sentence to flag (UTF-16 offsets). */

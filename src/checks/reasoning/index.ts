@@ -2,8 +2,9 @@
  * The reasoning stage: argument errors about CO2 and temperature, found with sentence frames and
  * the cue words, direction facts and pattern rules of the loaded packs.
  */
-import { compromise } from '../../nlp/compromise.js';
+import { compromise, countParse } from '../../nlp/compromise.js';
 import { tokenizeSentence, type CompromiseView, type SentenceTokens } from '../../claims/frames-tokens.js';
+import { mayMatchPhrase } from '../../claims/frames-match.js';
 import { FRAME_WORDS } from '../../claims/frames-words.js';
 import type { LoadedPacks } from '../../rulepack/types.js';
 import type { FlagDraft } from '../../types.js';
@@ -44,11 +45,15 @@ export function checkReasoning(own: string[], at: number, packs: LoadedPacks, co
   const reading = read(index);
   let tokens: SentenceTokens | undefined;
   const sentence = () => (tokens ??= tokenizeSentence(text, FRAME_WORDS.clauseBreaks));
+  // The words alone, without compromise's roots: enough to tell that a key list cannot match.
+  let plain: SentenceTokens | undefined;
+  const plainWords = () => (plain ??= tokenizeSentence(text, [], null));
   // Pattern rules match on a compromise document of their own, made only when a pack has one, with
   // its roots computed so that a root pattern ("{be}") matches whichever detectors ran before.
   let doc: CompromiseView | undefined;
   const parsed = () => {
     if (doc === undefined) {
+      countParse();
       doc = compromise()(text);
       doc.compute('root');
     }
@@ -58,7 +63,12 @@ export function checkReasoning(own: string[], at: number, packs: LoadedPacks, co
   const found: { flag: FlagDraft }[] = [];
   for (const { check, entry, words, prefilter } of compiled.checks) {
     if (!prefilter.every((re) => re.test(text))) continue;
-    const input = { get sentence() { return sentence(); }, words, paragraph, index, own: lead.length, read };
+    // Every key list must match for the detector to fire: compromise reads the sentence only when
+    // each list has a phrase all of whose words may be there in some inflection ("show" alone is
+    // no "show exactly").
+    const mayHold = (name: string) => words(name).some((phrase) => mayMatchPhrase(plainWords(), phrase));
+    if (!entry.keys.every(mayHold)) continue;
+    const input = { get sentence() { return sentence(); }, words, paragraph, index, own: lead.length, read, mayHold };
     for (const cue of entry.detect(input)) {
       found.push({ flag: { ruleId: check.id, level: check.level, ...cue, reason: check.reason, suggestion: check.suggestion, sources: check.sources } });
     }
