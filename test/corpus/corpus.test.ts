@@ -72,6 +72,17 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-r-2': { recall: 0.74, falseFlags: 0.1 },
   'tuning-s-1': { recall: 0.78, falseFlags: 0.04 },
   'tuning-s-2': { recall: 0.68, falseFlags: 0.04 },
+  // tuning-t-1..4 were the blind hold-out holdout-k, spent in December 2026's tenth round (read on its
+  // first and last code: 87/123 and 35/41 caught at the start, 88/123 and 35/41 at the end, with
+  // 10/194 and 2/65 false flags). tuning-u-1..2 were written fresh at that round's start and read,
+  // totals only, to judge each branch before merging (35/53 and 30/41 caught at the start, 37/53 and
+  // 30/41 at the end, false flags 5/93 and 3/82 throughout).
+  'tuning-t-1': { recall: 0.66, falseFlags: 0.06 },
+  'tuning-t-2': { recall: 0.69, falseFlags: 0.09 },
+  'tuning-t-3': { recall: 0.65, falseFlags: 0.09 },
+  'tuning-t-4': { recall: 0.8, falseFlags: 0.06 },
+  'tuning-u-1': { recall: 0.65, falseFlags: 0.08 },
+  'tuning-u-2': { recall: 0.68, falseFlags: 0.06 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -102,12 +113,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (85.3% measured over 44 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (84.4% measured over 50 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.7% measured over 44 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.6% measured over 50 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
