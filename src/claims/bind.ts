@@ -153,12 +153,20 @@ export function compiledTerms(packs: LoadedPacks): Map<string, CompiledTerm> {
   if (terms === undefined) {
     // A form some term writes out is that term's: "swung" written under the ranging verbs is no
     // derived form of the change noun "swing".
-    const written = new Map<string, Set<string>>();
-    for (const t of packs.terms) for (const w of t.words) (written.get(w.toLowerCase()) ?? written.set(w.toLowerCase(), new Set()).get(w.toLowerCase())!).add(extendedTerm(t.id, packs));
+    const writers = new Map<string, Set<string>>();
+    for (const t of packs.terms) {
+      for (const w of t.words) {
+        const form = w.toLowerCase();
+        const ids = writers.get(form) ?? new Set<string>();
+        ids.add(extendedTerm(t.id, packs));
+        writers.set(form, ids);
+      }
+    }
     terms = new Map(
       packs.terms.map((t): [string, CompiledTerm] => {
         const own = extendedTerm(t.id, packs);
-        const words = inflectedTerm(termVariants(t.words), (form) => [...(written.get(form) ?? [])].some((id) => id !== own));
+        const othersWrite = (form: string): boolean => [...(writers.get(form) ?? [])].some((id) => id !== own);
+        const words = inflectedTerm(termVariants(t.words), othersWrite);
         return [t.id, { words, keyWords: keyWordsOf(words) }];
       }),
     );
