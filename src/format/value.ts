@@ -46,7 +46,8 @@ export function unitWord(unit: string): string {
 function calendarYear(value: number, unit: string): string {
   const ce = unit === 'CE' ? value : 1 - value;
   const [year, era] = ce >= 1 ? [ce, 'CE'] : [1 - ce, 'BCE'];
-  const shown = Number(year.toPrecision(6));
+  // A calendar year is a whole year: the ends of a hedged date ("around 9,000 BC") are shown so.
+  const shown = Math.round(year);
   return `${shown >= 10_000 ? formatNumber(shown) : String(shown)} ${era}`;
 }
 

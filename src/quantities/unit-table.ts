@@ -76,7 +76,8 @@ const BASE_UNITS: UnitDef[] = [
     words('(?:years?|yrs?) before (?:ad )?2000'),
   ], -50),
   u('ka b2k', 'age', 1e3, 'ka b2k', [String.raw`(?:ka|kyrs?)[\s\u00A0]+b2k`], -50),
-  u('BCE', 'age', 1, 'BCE', ['BCE', 'BC', String.raw`B\.C\.E\.`, String.raw`B\.C\.`], 1949),
+  // "11,700 years BCE", "9700 yrs BC": a year word before the era is still a date.
+  u('BCE', 'age', 1, 'BCE', [String.raw`(?:${YEAR_WORD}[\s\u00A0]+)?(?:BCE|BC|B\.C\.E\.|B\.C\.)`], 1949),
   u('CE', 'age', -1, 'CE', ['CE', 'AD', String.raw`C\.E\.`, String.raw`A\.D\.`], 1950),
   u('ppm', 'concentration', 1, 'ppm', PPM),
   u('ppb', 'concentration', 1e-3, 'ppb', PPB),

@@ -70,3 +70,34 @@ describe('metres written for feet', () => {
     expect(await flagsOf('At the Last Glacial Maximum sea level was about 125 metres lower.')).toEqual([]);
   });
 });
+
+describe('BCE written for years before present', () => {
+  // The base of the Holocene: 11,700 years before AD 2000 in the NGRIP ice core (Walker et al. 2009,
+  // Journal of Quaternary Science 24, 3-17, doi 10.1002/jqs.1227), i.e. about 9,700 BCE; Y BCE =
+  // (1949 + Y) years BP (Stuiver & Polach 1977 for BP; no year 0: common practice).
+  it.each([
+    'The Holocene began around 11,700 BC.',
+    'Our present warm period, the Holocene, started about 11,700 BCE.',
+    'The Holocene began 11,700 years BCE, when the ice sheets were in retreat.',
+    'By 11,700 B.C. the Holocene had begun.',
+  ])('%s', async (text) => {
+    const flags = await flagsOf(text);
+    expect(flags.map(([id]) => id)).toContain('unit.scale-slip');
+    expect(flags.find(([id]) => id === 'unit.scale-slip')?.[1]).toMatch(/^11,700 years ago \((?:about |around )?975\d (?:years )?B\.?C/u);
+    expect(flags.map(([id]) => id)).not.toContain('value.holocene-start');
+  });
+
+  it('reads a year word before the era as a date, not a duration', () => {
+    const [q] = parseQuantities('11,700 years BCE');
+    expect([q?.dimension, q?.statedUnit, q?.value]).toEqual(['age', 'BCE', 11_700 + 1949]);
+  });
+
+  it.each([
+    // Look-alikes: the right era, and a date told in years ago that is simply wrong.
+    ['The Holocene began around 9,700 BCE.', []],
+    ['The Holocene began about 11,700 years ago.', []],
+    ['The Holocene began around 9,000 years ago.', ['value.holocene-start']],
+  ])('%s', async (text, ids) => {
+    expect((await flagsOf(text)).map(([id]) => id)).toEqual(ids);
+  });
+});

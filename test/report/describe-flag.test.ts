@@ -32,6 +32,8 @@ describe('numbers and ranges in words', () => {
     [1998, 2000, 'CE', '1998–2000 CE'],
     [-49, 10, 'CE', '50 BCE – 10 CE'],
     [10_000, 10_000, 'BCE', '10,000 BCE'],
+    // A hedged calendar year keeps whole years at its ends ("around 9,000 BC" read as 9,000 ± 3.6%).
+    [8676.27, 9323.73, 'BCE', '9324–8676 BCE'],
   ];
   it.each(ranges)('formatRange(%s, %s, %s) is "%s"', (low, high, unit, words) =>
     expect(formatRange(low, high, unit)).toBe(words),
