@@ -19,6 +19,7 @@ import { correctionFor, shownClaim, shownReference } from './reference-format.js
 import { factorOff, levelWithDistance } from './distance-level.js';
 import { unitSlip } from './reference-slips.js';
 import { checkEnds } from './reference-ends.js';
+import { isDeniedFigure } from './denied-figure.js';
 import { endpointPairs } from '../claims/bind-role.js';
 import { statesRange } from '../quantities/range-ends.js';
 
@@ -49,7 +50,8 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     // "In 2023 the global average was around 410 ppm": one year's measurement leaves little slack.
     const dated = stated === undefined || r === undefined || !isOneYearMeasurement(r, packs) ? stated : { ...stated, ...oneYearInterval(stated) };
     const q = dated === undefined || bounds[binding.quantityIndex] === undefined ? dated : { ...dated, ...boundInterval(dated) };
-    if (q === undefined || r === undefined) {
+    // "not 420,000 years long but 800,000": the draft denies the figure; it claims the other one.
+    if (q === undefined || r === undefined || isDeniedFigure(sentence, q)) {
       verdicts.push('no reference');
       continue;
     }
