@@ -56,9 +56,15 @@ const JOINS = new Set(['so', 'and', 'but', 'then', 'or', 'yet']);
 const AUX = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const WH = new Set(['how', 'why']);
 /** Subjects whose report the writer relies on rather than answers. */
-const AUTHORITIES = new Set(['we', 'i', 'scientists', 'researchers', 'study', 'studies', 'data', 'evidence', 'cores', 'core', 'record', 'records', 'team', 'authors', 'our', 'measurements', 'this', 'that', 'it', 'which', 'analysis', 'results', 'paper', 'ipcc', 'report', 'lag', 'physics']);
+const AUTHORITIES = new Set(['we', 'i', 'scientists', 'researchers', 'study', 'studies', 'data', 'evidence', 'cores', 'core', 'record', 'records', 'team', 'authors', 'our', 'measurements', 'this', 'that', 'it', 'which', 'analysis', 'results', 'paper', 'ipcc', 'report', 'assessment', 'lag', 'physics']);
 /** Whom a record or the writer tells ("tells us that"): no outside source. */
 const SELF = new Set(['us', 'me', 'you', 'is', 'was', 'are']);
+/**
+ * What a sentence says of a quotation it opens with: '"CO2 lagged, so it can't have warmed anything"
+ * is the oldest one in the book'. The quotation is named, not asserted (English's copulas and verbs
+ * of seeming, common practice of grammar).
+ */
+const SAID_OF = new Set(['is', 'was', 'remains', 'sounds', 'seems', 'has', 'gets', 'keeps', 'makes', 'became', 'becomes']);
 const ANSWER_OPENERS = new Set(['no', 'not', 'nope', 'actually', 'yes', 'well', 'short', 'a', 'answer', 'in', 'it', 'they', 'that', 'this', 'quite', 'hardly', 'far', 'nothing', 'partly', 'only', 'both', 'neither', 'sort', 'kind']);
 const LABEL = /^\s*(?:[*_#>\s]*)(myth|misconception|claim|the claim|fiction|false|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|you might hear|you'll hear|the myth|the misconception|misunderstanding|mistake|rumou?r)\b(?:[^:.]{0,12}:|[*_]*\.)/iu;
 const FACT_LABEL = /^\s*(?:[*_#>\s]*)(fact|reality|the facts?|the science|the evidence|truth|answer|a)\b(?:[^:.]{0,12}:|[*_]*\.(?=[*_\s]))/iu;
@@ -76,6 +82,7 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
   if (LABEL.test(s.text) || label === 'myth' || isMythHeading(context.heading) || (context.blockKind === 'heading' && s.of('stance', 'myth').length > 0)) return make('myth');
   const quotedWords = s.words.filter((w) => w.quoted).length;
   if (s.words.length > 0 && quotedWords / s.words.length >= 0.6) return make(insiderSpeaks(s) ? 'asserted' : 'quoted');
+  if (opensWithNamedQuotation(s)) return make('quoted');
   if (s.question) return questionStance(s, context, make);
   if (isReported(s)) return make('reported');
   if (s.of('stance', 'myth').length > 0) return make('myth');
@@ -84,6 +91,12 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
   if (viewEnd !== undefined) return { ...make('superseded'), viewEnd };
   if (isHypothetical(s)) return make('hypothetical');
   return make('asserted');
+}
+
+/** A sentence that opens with a quotation of three words or more and then says something of it ("... is a myth"). */
+function opensWithNamedQuotation(s: ReadSentence): boolean {
+  const run = s.words.findIndex((w) => w.quoted !== true);
+  return run >= 3 && SAID_OF.has(s.words[run]?.text ?? '');
 }
 
 /** Whether `s` is a label and nothing more ("Myth.", "Fact.", "The claim."): which one. */
@@ -183,7 +196,8 @@ function isReported(s: ReadSentence): boolean {
     // "tells us that" is the record speaking to the writer, not someone else's claim.
     const between = s.words.slice(v.last + 1, v.last + 2 + Math.max(0, opens));
     // "I've read that...": a contraction keeps its subject ("i've" is "i").
-    const subject = s.words.slice(Math.max(0, v.first - 3), v.first).map((w) => w.text.replace(/['’](?:ve|d|m|ll|re)$/u, ''));
+    // "The IPCC's assessment concluded that...": a possessive names its owner ("ipcc's" is "ipcc").
+    const subject = s.words.slice(Math.max(0, v.first - 3), v.first).map((w) => w.text.replace(/['’](?:ve|d|m|ll|re|s)$/u, ''));
     const gap = s.text.slice(s.words[v.last]?.end ?? 0, between.at(-1)?.start ?? 0);
     // "My uncle keeps telling me that...": someone of the writer's own circle is an outside source.
     const circle = subject.some((w) => /^(?:my|your|his|her|their)$/u.test(w));
