@@ -82,7 +82,8 @@ describe('a pronoun or a short adverb inside a phrasal-verb term', () => {
 describe('end to end: the value a gapped term names', () => {
   // The longest peer-reviewed ice-core record: about 800,000 years, EPICA Dome C (Lüthi et al. 2008,
   // Nature 453, 379-382, DOI 10.1038/nature06949); the oldest continuous ice reached at Little Dome C
-  // is at least 1.2 million years old (Beyond EPICA announcement, French Polar Institute, 24 March 2025).
+  // is at least 1.2 million years old (French Polar Institute, "Beyond EPICA: ice cores on their way to
+  // Europe", press release, 24 March 2025; pack source beyond-epica-oldest-2025).
   it('flags the oldest record told with a modifier inside, and leaves the published figure alone', async () => {
     expect(await flagged('The longest peer-reviewed ice-core record now stands at 740,000 years.')).toContain('value.oldest-continuous-ice-core-record');
     expect(await flagged('The oldest continuously dated ice-core record covers 600,000 years.')).toContain('value.oldest-continuous-ice-core-record');
