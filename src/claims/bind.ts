@@ -13,6 +13,7 @@
  */
 import { PhraseTrie } from '../prose/phrase-trie.js';
 import { termVariants } from './term-variants.js';
+import { GappedTerms } from './term-gaps.js';
 import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
@@ -107,8 +108,38 @@ function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
     const as = extendedTerm(id, packs);
     hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
   }
+  // "the longest peer-reviewed ice-core record", "takes us back": a phrase with words put inside it.
+  const gapped = gappedTermsOf(packs, terms).search(sentence, [...hits.values()].flat());
+  for (const [as, spans] of gapped) hits.set(as, withGapped(hits.get(as) ?? [], spans));
   // "the ice sheets were at their greatest extent": a thing's state names an event.
   return withStateEvents(sentence, hits, packs);
+}
+
+const gappedIndexes = new WeakMap<LoadedPacks, GappedTerms>();
+
+/** The term phrases that may take words inside (term-gaps.ts), made once per packs from the compiled terms' forms. */
+function gappedTermsOf(packs: LoadedPacks, terms: Map<string, CompiledTerm>): GappedTerms {
+  let gapped = gappedIndexes.get(packs);
+  if (gapped === undefined) {
+    const written = new Map(packs.terms.map((t) => [t.id, t.words]));
+    gapped = new GappedTerms([...terms].map(([id, t]) => ({ term: extendedTerm(id, packs), forms: t.words, written: written.get(id) ?? [] })), packs);
+    gappedIndexes.set(packs, gapped);
+  }
+  return gapped;
+}
+
+/**
+ * A term's exact spans with its gapped ones: a gapped match takes the place of the exact matches
+ * inside it (the longer match wins, as the search's alternation prefers the longer phrase) and
+ * gives way to an exact match it only overlaps.
+ */
+function withGapped(exact: [number, number][], gapped: [number, number][]): [number, number][] {
+  let out = exact;
+  for (const [s, e] of gapped) {
+    if (out.some(([a, b]) => a < e && b > s && (a < s || b > e))) continue;
+    out = [...out.filter(([a, b]) => !(a >= s && b <= e)), [s, e]];
+  }
+  return out.sort((a, b) => a[0] - b[0]);
 }
 
 /** The terms' key words by their first three code units (a shorter key under itself), made once per term map. */
