@@ -91,21 +91,24 @@ function atScale(r: ReferenceValue, q: Pick<Quantity, 'low' | 'high'>): boolean 
 /**
  * The value `q` states by its unit beside a subject with no word for the attribute, or undefined.
  * `view` is the quantity's words, `vetoes` the words that may veto a value for it, `difference` true
- * when it states a difference (only a change value may take it).
+ * when it states a difference (only a change value may take it), `breaks` the sentence's clause breaks.
  */
-export function bindImplied(sentence: string, q: Quantity, role: ReadRole, view: TermHits, vetoes: TermHits, packs: LoadedPacks, difference: boolean): string | undefined {
+export function bindImplied(sentence: string, q: Quantity, role: ReadRole, view: TermHits, vetoes: TermHits, packs: LoadedPacks, difference: boolean, breaks: number[]): string | undefined {
   // A calendar year dates the sentence, and a date beside a core or a period says when something
   // happened there ("About 12,900 years ago, just as the thaw ..."): neither measures the subject.
   if (q.statedUnit === 'CE' || q.dimension === 'age') return undefined;
   const { subjects, attributes, others } = dataOf(packs);
   const named = [...view.keys()];
   if (!named.some((id) => subjects.has(id))) return undefined;
+  // A word before the number, or after it in its clause: past a clause break after the number, a
+  // word speaks of that clause ("Vostok comes second at 720,000 years, with Dome Fuji behind").
+  const beside = ([start]: [number, number]): boolean => start < q.start || !breaks.some((b) => b >= q.end && b < start);
   const pool = packs.references.filter((r) => {
     if (r.dimension !== q.dimension || r.binding.implied === false || r.binding.all.length < 2) return false;
     if (!roleFits(r.binding.role, role, q) || (difference && r.binding.role !== 'change')) return false;
     const missing = missingGroups(r, view);
     if (missing.length !== 1 || (missing[0] as string[]).some((id) => subjects.has(id))) return false;
-    return r.binding.all.some((g) => g.some((id) => view.has(id) && subjects.has(id)));
+    return r.binding.all.some((g) => g.some((id) => subjects.has(id) && (view.get(id) ?? []).some(beside)));
   });
   // A value whose missing words another value vetoes is the marked reading: it gives way.
   const unmarked = pool.filter((r) => !pool.some((o) => o !== r && (missingGroups(r, view)[0] as string[]).every((id) => o.binding.none.includes(id))));
@@ -119,10 +122,11 @@ export function bindImplied(sentence: string, q: Quantity, role: ReadRole, view:
   // the mild Holocene" names a period after it, not the subject of "three thousand years".
   if (!named.some((id) => subjects.has(id) && own.has(id) && (view.get(id) ?? []).some(([, end]) => end <= q.start))) return undefined;
   // "Vostok lies 560 km from Dome C": another subject is named beside the number.
-  if (named.some((id) => subjects.has(id) && !own.has(id))) return undefined;
-  // "EPICA Dome C's ice is 3,200 m thick": the view names another attribute of the dimension.
+  if (named.some((id) => subjects.has(id) && !own.has(id) && (view.get(id) ?? []).some(beside))) return undefined;
+  // "EPICA Dome C's ice is 3,200 m thick": the view names another attribute of the dimension (a word
+  // past a clause break after the number speaks of that clause).
   const attributesOfDimension = attributes.get(q.dimension) ?? new Set<string>();
-  if (named.some((id) => attributesOfDimension.has(id) && !own.has(id))) return undefined;
+  if (named.some((id) => attributesOfDimension.has(id) && !own.has(id) && (view.get(id) ?? []).some(beside))) return undefined;
   // "Dome C sits 3,233 m above sea level": the sentence names a measure no value holds.
   const other = others.get(q.dimension);
   if (other !== undefined && other.occurrences(sentence).length > 0) return undefined;

@@ -489,7 +489,7 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     // "EPICA Dome C reached 3,623 metres": the subject is named and the unit says what is measured;
     // not after a stretch of it ("the lowest 200 m of Dome C hold 150,000 years": the stretch's years).
     if (best === undefined && !decided.has(i) && !quantities.slice(0, i).some(isStretch)) {
-      const implied = bindImplied(sentence, q, role, view, vetoes, packs, difference);
+      const implied = bindImplied(sentence, q, role, view, vetoes, packs, difference, breaks);
       if (implied !== undefined) decided.set(i, implied);
     }
   });

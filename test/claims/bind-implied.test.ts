@@ -50,8 +50,11 @@ const IMPLIED: [sentence: string, expected: string[]][] = [
   ['GRIP offers about 250,000 years.', ['grip-record-span']],
   // The delta-age needs "delta-age", which the record span vetoes: it is the marked reading and yields.
   ['EPICA Dome C alone gives about 400,000 years.', ['edc-record-span']],
+  // Another core named past a clause break after the number speaks of that clause.
+  ['Dome Fuji comes in at about 420,000 years, with Vostok a little way behind.', ['dome-fuji-record-span']],
   // A period and a span of years: how long it has lasted.
   ['The Holocene: roughly 9,000 years so far, give or take.', ['holocene-duration']],
+  ['People have farmed through the Holocene for roughly 30,000 years.', ['holocene-duration']],
 ];
 
 const UNBOUND: [sentence: string, expected: string[]][] = [
@@ -65,6 +68,7 @@ const UNBOUND: [sentence: string, expected: string[]][] = [
   ['Vostok lies 560 km from Dome C.', ['-']],
   ['Vostok and Dome C are about 560 km apart.', ['-']],
   ['EPICA Dome C and Vostok both reach about 3,000 m.', ['-']],
+  ['Dome Fuji trails Vostok by about 300,000 years.', ['-']],
   // Another attribute of the dimension that a value of the pack needs ("thick": the ice thickness).
   ["EPICA Dome C's ice is 3,200 m thick.", ['-']],
   // Off the value's scale by more than ten times: the years of a drilling, not of the record.
