@@ -9,13 +9,14 @@
  * Read from the pack alone. A term names a subject when the first phrase the pack gives it holds a
  * subject word of the lexicon (a core, the gas, a period, the orbit: `lexicon.subjects` and
  * `lexicon.periods`); a value's group with no such term is an attribute group ("depth", "record").
- * A quantity with no value in its own words may bind a value whose groups its view fills all but one
- * attribute group, when a subject term of the view fills another, and when among ALL the pack's
- * values so filled, exactly one accepts the quantity's dimension (the value's own, not one it may
- * also be stated in: a date beside a core or a period says when something happened there) and its
- * role. A value that needs a word another such value vetoes is the marked reading and gives way, as
- * in an apposition (the record span vetoes "delta-age", so the delta-age yields). Two or more left:
- * nothing binds, as before.
+ * A quantity with no value in its own words may bind a value of two groups, a subject and an
+ * attribute, whose subject its view names before the number and whose attribute it lacks, when among
+ * ALL the pack's values whose groups the view fills but for one attribute group, exactly one accepts
+ * the quantity's dimension (the value's own, not one it may also be stated in: a date beside a core
+ * or a period says when something happened there) and its role. A value that needs a word another
+ * such value vetoes is the marked reading and gives way, as in an apposition (the record span vetoes
+ * "delta-age", so the delta-age yields). Two or more left: nothing binds, as before. A word past a
+ * clause break after the number speaks of that clause, and counts for none of this.
  *
  * Never when the sentence names another measure of the figure's dimension: a word of the lexicon's
  * `other-measures` for that dimension ("above sea level", "km from", "took"; every inflection), or

@@ -116,7 +116,7 @@ describe('an attribute implied by the subject and the unit', () => {
 const dir = mkdtempSync(join(tmpdir(), 'firnline-implied-'));
 
 /** A team pack (an invented museum's meltwater tank) whose one value has the given `implied` line. */
-function tankPack(name: string, implied: string): string {
+function tankPack(name: string, implied: string, lexicon: string[] = []): string {
   const file = join(dir, `${name}.yaml`);
   writeFileSync(
     file,
@@ -149,6 +149,7 @@ function tankPack(name: string, implied: string): string {
       '  subjects: [tank]',
       '  entities:',
       '    tank: [demo tank]',
+      ...lexicon,
       '',
     ].join('\n'),
   );
@@ -179,5 +180,20 @@ describe('binds_when.implied', () => {
     );
     expect(lines).toHaveLength(1);
     expect(lines[0]).toMatch(new RegExp(`^${file.replace(/[.*+?^${}()|[\]\\]/gu, '\\$&')}:22:\\d+: .*implied`, 'u'));
+  });
+
+  it('rejects an `other-measures` key that is no dimension with file:line:column', async () => {
+    const file = tankPack('misspelt', '# implied left to the default', ['  other-measures:', '    lenght: [elevation]']);
+    const lines = await loadPacks([file], { builtin: false }).then(
+      () => [],
+      (error: unknown) => (error instanceof FirnlineErrors ? error.errors.map((e) => e.toLine()) : [String(error)]),
+    );
+    expect(lines).toEqual([`${file}:30:5: \`other-measures\` must be one of: duration, age, concentration, temperature-change, temperature, length, concentration-rate, temperature-rate, length-rate, duration-per-length, count, ratio, percent, number`]);
+  });
+
+  it("an `other-measures` word of the figure's dimension stops the implied reading", async () => {
+    const team = await loadPacks([tankPack('other', '# implied left to the default', ['  other-measures:', '    concentration: [outside air]'])], { builtin: false });
+    expect(bound('The demo tank got to 520 ppm.', team)).toEqual(['tank-peak']);
+    expect(bound('The demo tank got to 520 ppm in the outside air.', team)).toEqual(['-']);
   });
 });
