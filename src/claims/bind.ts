@@ -18,6 +18,7 @@ import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
+import { bindImplied } from './bind-implied.js';
 import { BOUND_TERMS, boundReadings, clauseStarts } from './bind-bound.js';
 import { withStateEvents } from './bind-events.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
@@ -446,7 +447,8 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   }
   // "The bottom 200 metres of the Dome C core hold 15,000 years": the stretch names no measure of the
   // core, so the core's words are the next number's.
-  const isSegment = (q: Quantity) => q.dimension === 'length' && SEGMENT.test(sentence.slice(Math.max(0, q.start - 24), q.start));
+  const isStretch = (q: Quantity) => SEGMENT.test(sentence.slice(Math.max(0, q.start - 24), q.start));
+  const isSegment = (q: Quantity) => q.dimension === 'length' && isStretch(q);
   quantities.forEach((q, i) => {
     const next = views[i + 1];
     if (!isSegment(q) || next === undefined) return;
@@ -514,6 +516,12 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
       const ownTime = quantities.some((o, j) => j !== i && (o.dimension === 'age' || o.dimension === 'duration') && o.statedUnit !== 'CE');
       const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, subjectBefore(context), { context, ownTime });
       if (found !== undefined) decided.set(i, found);
+    }
+    // "EPICA Dome C reached 3,623 metres": the subject is named and the unit says what is measured;
+    // not after a stretch of it ("the lowest 200 m of Dome C hold 150,000 years": the stretch's years).
+    if (best === undefined && !decided.has(i) && !quantities.slice(0, i).some(isStretch)) {
+      const implied = bindImplied(sentence, q, role, view, vetoes, packs, difference, breaks);
+      if (implied !== undefined) decided.set(i, implied);
     }
   });
   const bindings: Binding[] = [];

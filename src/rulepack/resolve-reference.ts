@@ -47,6 +47,7 @@ export function resolveReference(scope: PackScope, raw: RawReferenceValue, path:
       all: raw.binds_when.all,
       none: raw.binds_when.none ?? [],
       ...(raw.binds_when.role === undefined || raw.binds_when.role === 'any' ? {} : { role: raw.binds_when.role }),
+      ...(raw.binds_when.implied === false ? { implied: false as const } : {}),
     },
     wording: raw.correction,
     levels: raw.levels ?? DEFAULT_LEVELS,

@@ -37,6 +37,11 @@ export interface TermBinding {
   none: string[];
   /** The only role of number the value binds (absent: any role). */
   role?: ValueRole;
+  /**
+   * False when the value must be named in words: a figure beside its subject alone, whose unit
+   * would imply what it measures, never binds it (claims/bind-implied.ts). Absent: it may.
+   */
+  implied?: false;
 }
 
 /**
