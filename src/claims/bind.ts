@@ -13,6 +13,7 @@
  */
 import { PhraseTrie } from '../prose/phrase-trie.js';
 import { termVariants } from './term-variants.js';
+import { withDescribedTimes } from './bind-descriptions.js';
 import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
@@ -107,8 +108,9 @@ function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
     const as = extendedTerm(id, packs);
     hits.set(as, [...(hits.get(as) ?? []), ...spans].sort((a, b) => a[0] - b[0]));
   }
-  // "the ice sheets were at their greatest extent": a thing's state names an event.
-  return withStateEvents(sentence, hits, packs);
+  // "the ice sheets were at their greatest extent": a thing's state names an event; "the close of the
+  // most recent glaciation": a description names a period.
+  return withDescribedTimes(sentence, withStateEvents(sentence, hits, packs), packs);
 }
 
 /** The terms' key words by their first three code units (a shorter key under itself), made once per term map. */
