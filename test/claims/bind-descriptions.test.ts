@@ -85,6 +85,21 @@ describe('the time before industry, told by what began it, is pre-industrial (Gu
   });
 });
 
+describe('a level reached or a ceiling in the sentences descriptions stand in', () => {
+  it.each([
+    // "fell to a meagre 120 ppm": an article and one word of description between "to" and the level
+    // keep it a level reached, not a change (CO2 at the LGM, Forster et al. 2021; Monnin et al. 2001).
+    ['In the depths of the last ice age, carbon dioxide fell to a meagre 120 ppm.', 'co2-lgm', 'conflicts'],
+    ['CO2 fell to a mere 190 ppm at the peak of the last ice age.', 'co2-lgm', 'agrees'],
+    // "never cracked" is a ceiling (lexicon bounds.ceiling-verb): the highest natural level, about
+    // 300 ppm (Lüthi et al. 2008), not the 1750 level the "until ..." clause names.
+    ['Across those 800,000 years CO2 never cracked 380 ppm until we started burning coal.', 'co2-highest-preindustrial-800kyr', 'conflicts'],
+    ['Across those 800,000 years CO2 never cracked ~300 ppm, not once, until we started burning coal.', 'co2-highest-preindustrial-800kyr', 'agrees'],
+  ])('%s', (sentence, value, verdict) => {
+    expect(judge(sentence)).toEqual({ value, verdict });
+  });
+});
+
 describe('look-alikes name no period (common practice of English)', () => {
   it.each([
     ['At the end of the record, CO2 was 350 ppm.'],
