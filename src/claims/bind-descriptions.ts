@@ -35,17 +35,64 @@ type Piece = { forms: Map<string, string[][]> } | { ref: Item };
 interface Description {
   items: Item[];
   terms: string[];
+  /** The words a description may begin with (made on first use): only these places are tried. */
+  firsts?: Set<string>;
 }
 
 interface Grammar {
   parts: Map<string, string[]>;
   descriptions: Description[];
+  /**
+   * For each word, the parts a description needs that may begin with it, as [description, need]
+   * (made on first use): a sentence with no word for one of a description's needed parts holds none.
+   */
+  needs?: { byWord: Map<string, [number, number][]>; counts: number[] };
   /** The pieces of each part's phrases, per number, made on first use. */
   pieces: Map<string, Piece[][]>;
 }
 
 const REF = /^<([a-z][a-z0-9-]*)>$/u;
 const ITEM = /^([a-z][a-z0-9-]*)(?::(one|many))?(\?)?$/u;
+
+/** The words a part's phrases may begin with, in one number. */
+function firstWordsOfPart(grammar: Grammar, part: string, number: Number, depth = 0): Set<string> {
+  const out = new Set<string>();
+  if (depth > 4) return out;
+  for (const pieces of piecesOf(grammar, part, number)) {
+    const head = pieces[0];
+    if (head === undefined) continue;
+    if ('ref' in head) for (const w of firstWordsOfPart(grammar, head.ref.part, head.ref.number, depth + 1)) out.add(w);
+    else for (const w of head.forms.keys()) out.add(w);
+  }
+  return out;
+}
+
+/** The words a sequence of items may begin with: those of its leading optional items and of the first one it needs. */
+function firstWordsOf(grammar: Grammar, items: readonly Item[]): Set<string> {
+  const out = new Set<string>();
+  for (const item of items) {
+    for (const w of firstWordsOfPart(grammar, item.part, item.number)) out.add(w);
+    if (!item.optional) break;
+  }
+  return out;
+}
+
+/** Which needed part of which description each word may begin. */
+function needsOf(grammar: Grammar): { byWord: Map<string, [number, number][]>; counts: number[] } {
+  const byWord = new Map<string, [number, number][]>();
+  const counts = grammar.descriptions.map((d, di) => {
+    const needed = d.items.filter((item) => !item.optional);
+    needed.forEach((item, ni) => {
+      for (const w of firstWordsOfPart(grammar, item.part, item.number)) {
+        const list = byWord.get(w);
+        if (list === undefined) byWord.set(w, [[di, ni]]);
+        else list.push([di, ni]);
+      }
+    });
+    return needed.length;
+  });
+  return { byWord, counts };
+}
 
 /** Parses one place of a description key ("glacial:one", "the?"). */
 function itemOf(text: string): Item | undefined {
@@ -219,11 +266,19 @@ export function describedTimes(sentence: string, lexicon: Lexicon): FoundDescrip
   const grammar = grammarOf(lexicon);
   if (grammar === undefined) return [];
   const tokens = tokensOf(sentence);
+  // Most sentences hold a word for every needed part of none of the descriptions: they are not read at all.
+  const needs = (grammar.needs ??= needsOf(grammar));
+  const met = grammar.descriptions.map(() => new Set<number>());
+  for (const word of new Set(tokens.map((t) => t.word))) for (const [d, n] of needs.byWord.get(word) ?? []) (met[d] as Set<number>).add(n);
+  const possible = grammar.descriptions.filter((_, d) => (met[d] as Set<number>).size === needs.counts[d]);
+  if (possible.length === 0) return [];
   const reader = new Reader(grammar, sentence, tokens);
   const found: FoundDescription[] = [];
   for (let i = 0; i < tokens.length; i += 1) {
     let best: { last: number; terms: string[] } | undefined;
-    for (const d of grammar.descriptions) {
+    const word = (tokens[i] as Token).word;
+    for (const d of possible) {
+      if (!(d.firsts ??= firstWordsOf(grammar, d.items)).has(word)) continue;
       const ends = reader.sequence(d.items, i, 0);
       const last = Math.max(...ends);
       if (ends.length > 0 && (best === undefined || last > best.last)) best = { last, terms: d.terms };
