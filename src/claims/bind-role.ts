@@ -46,8 +46,8 @@ const CHANGE_AFTER = /^[\s-]*(?:rise|increase|drop|fall|decline|swing|jump|step|
 const PER_TIME_AFTER = /^\s*(?:of\s+[\p{L}\p{N}₂]+\s+)?(?:every|each|a|per|an)\s+(?:single\s+)?(?:year|decade|century|millennium)(?![\p{L}])/iu;
 /** A place measured from a datum is a level: "3,623 metres below the surface", "2,800 m above sea level". */
 const DATUM_AFTER = /^\s*(?:below|beneath|under|above)\s+(?:the\s+)?(?:ice\s+|snow\s+)?(?:surface|sea\s+level)(?![\p{L}])/iu;
-/** Level words just before the quantity: "fell to", "stood at", "reached", "from". */
-const LEVEL_BEFORE = /(?:^|[^\p{L}])(?:from|to|at|between|reached|reaching|hovered around)\s*$/iu;
+/** Level words just before the quantity: "fell to", "stood at", "reached", "from"; "fell to a meagre" (an article and one word of description). */
+const LEVEL_BEFORE = /(?:^|[^\p{L}])(?:from|to|to\s+(?:a|an)\s+\p{L}+|at|between|reached|reaching|hovered around)\s*$/iu;
 /** A loose word of place on the scale between a word of staying and its number: "sat around 190", "a low near 185". */
 const NEAR = String.raw`(?:\s+(?:at|around|near|about|of|close\s+to|roughly|just\s+under|just\s+over|as\s+low\s+as|as\s+high\s+as))?`;
 /**

@@ -11,8 +11,11 @@ import type { Quantity } from '../types.js';
 import { isChangeVerb, type ReadRole } from './bind-role.js';
 import { clauseBreaks, type TermHits } from './bind-view.js';
 
-/** What may stand between a level verb and its quantity: "to", "at", or nothing ("climbed as high as"). */
-const LEVEL_LINK = /^\s*(?:to|at)?\s*$/iu;
+/**
+ * What may stand between a level verb and its quantity: "to", "at", or nothing ("climbed as high as");
+ * "to" may take an article and one word of description ("fell to a meagre 120 ppm").
+ */
+const LEVEL_LINK = /^\s*(?:to(?:\s+(?:a|an)\s+\p{L}+)?|at)?\s*$/iu;
 
 /** The hits of `view` that may veto a value for `q`: all of them, less the verb that brings a level quantity to its level. */
 export function vetoView(sentence: string, view: TermHits, q: Pick<Quantity, 'start' | 'end'>, role: ReadRole): TermHits {

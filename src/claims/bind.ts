@@ -14,6 +14,7 @@
 import { PhraseTrie } from '../prose/phrase-trie.js';
 import { termVariants } from './term-variants.js';
 import { GappedTerms } from './term-gaps.js';
+import { withDescribedTimes } from './bind-descriptions.js';
 import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
@@ -112,8 +113,9 @@ function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
   // "the longest peer-reviewed ice-core record", "takes us back": a phrase with words put inside it.
   const gapped = gappedTermsOf(packs, terms).search(sentence, [...hits.values()].flat());
   for (const [as, spans] of gapped) hits.set(as, withGapped(hits.get(as) ?? [], spans));
-  // "the ice sheets were at their greatest extent": a thing's state names an event.
-  return withStateEvents(sentence, hits, packs);
+  // "the ice sheets were at their greatest extent": a thing's state names an event; "the close of the
+  // most recent glaciation": a description names a period.
+  return withDescribedTimes(sentence, withStateEvents(sentence, hits, packs), packs);
 }
 
 const gappedIndexes = new WeakMap<LoadedPacks, GappedTerms>();

@@ -36,7 +36,8 @@ export function inflect(word: string): string[] {
   return [...forms];
 }
 
-function plural(w: string): string {
+/** A noun's plural: age → ages, glaciation → glaciations, depth → depths. */
+export function plural(w: string): string {
   if (/(?:s|x|z|ch|sh)$/u.test(w)) return `${w}es`;
   if (/[^aeiou]y$/u.test(w)) return `${w.slice(0, -1)}ies`;
   return `${w}s`;
