@@ -14,7 +14,7 @@
  * ("the level was ...") refer back too, to the sentence before as a whole (bind-context.ts).
  */
 import type { LoadedPacks, Lexicon } from '../rulepack/types.js';
-import { compile, formsOf, phraseWords, type CompiledLexicon } from '../propositions/lexicon.js';
+import { compile, phraseWords, type CompiledLexicon } from '../propositions/lexicon.js';
 import { findTerms } from './bind.js';
 
 /** A word of a sentence: lower-case (’ as '), with its offsets. */
@@ -84,8 +84,8 @@ function vocabularyOf(packs: LoadedPacks): Vocabulary {
     modifiers: new Set(words('modifiers')),
     restrictors: new Set(words('restrictors')),
     time: words('time').map(phraseWords),
-    // A measure is a noun: its singular and plural ("the level", "the levels"), not its verb forms ("averaged").
-    measures: new Set(words('measures').flatMap((w) => formsOf(w).filter((f) => f === w || f === `${w}s` || f === `${w}es`))),
+    // A measure as written: "the figures" and "the levels" are many, the measure of no one subject before.
+    measures: new Set(words('measures')),
     nouns: compile(Object.fromEntries(Object.entries(kinds).map(([kind, nouns]) => [kind, { noun: nouns }]))),
     members: compile(members),
     memberTerms,
