@@ -6,7 +6,8 @@
  *        ^^^^ ──────────────────────────────────────────────────── 2,000 metres (GRIP depth)
  *
  * Only a quantity with no candidate in its own sentence looks back; only when its sentence refers
- * back with a pronoun ("they", "it", "its"...) or a time phrase ("at that time", "by then"), as a
+ * back (back-reference.ts, from the pack lexicon's `back-references` and `kinds`: a pronoun, a time
+ * phrase such as "at that time", a description of a kind such as "that core"), as a
  * sentence that takes its subject from the one before does (a sentence that names its own subject,
  * "The EPICA Dome C core, 560 km away, ...", does not look back); and only when its own words name no
  * other subject: every term it can see that some value binds on must serve the value, unless it is
