@@ -36,6 +36,8 @@ const CORES: Row[] = [
   // A year in the sentence is the time frame of the drilling, not a subject of its own.
   ['Dr Quist began with the EPICA Dome C core.\n\nThe core was drilled through the early 2000s until it reached 3,623 metres.', '3,623 metres', 'edc-drilled-depth', true],
   ['Dr Quist began with the EPICA Dome C core.\n\nIn the 2000s the core was drilled to 3,265 metres.', '3,265 metres', 'edc-drilled-depth', false],
+  // Decades in the sentence frame the drilling; they keep no subject of their own.
+  ['Dome C drilling ended in 2004.\nThe drilling through the 1990s and 2000s reached 3,270 metres.', '3,270 metres', 'edc-drilled-depth', false],
   // Two sentences back: the sentence before names no core.
   ['Work at Dome C began in 1996.\nThe crews camped on the plateau for eight summers.\nThe core was finally drilled to 3,623 metres.', '3,623 metres', 'edc-drilled-depth', true],
   // The section heading names the core.
@@ -52,6 +54,8 @@ const PERIODS: Row[] = [
   ['Then came the Younger Dryas.\nThat cold snap began around 12,900 years ago and held on for roughly three thousand years.', 'around 12,900 years ago', 'younger-dryas-start', false],
   ['The Younger Dryas is a favourite of museum guides.\nThe cold spell ended about 11,700 years ago.', 'about 11,700 years ago', 'younger-dryas-end', false],
   ['Greenland ice shows the Younger Dryas clearly.\nThis episode lasted about 4,000 years.', 'about 4,000 years', 'younger-dryas-duration', true],
+  // A time phrase takes up the latest period.
+  ['Europe froze again during the Younger Dryas.\nBack then, the cold lasted some 1,200 years.', 'some 1,200 years', 'younger-dryas-duration', false],
   // The description skips a subject of another kind (a core) to the latest period.
   ['The Younger Dryas interrupted the warming.\nThe GRIP core from Greenland shows it in fine detail.\nThe event ended about 11,700 years ago.', 'about 11,700 years ago', 'younger-dryas-end', false],
 ];
@@ -66,6 +70,11 @@ const LOOK_ALIKES: Row[] = [
   // "that" opening a clause is no demonstrative, and a plural "the cold spells" names periods in general.
   ['The Vostok core is the one in the textbooks.\nGuides explain that cores often break below 3,000 metres.', '3,000 metres', '-', false],
   ['The Vostok record is on the wall.\nIts CO2 sat near 185 ppm in the cold spells and near 285 ppm in the warm ones.', '285 ppm', '-', false],
+  // "The gas" after methane is methane: no CO2 value (the gas kind holds the term other-gas).
+  ['Methane doubled over the deglaciation.\nThe gas rose by about 350 ppb.', 'about 350 ppb', '-', false],
+  // A year in a sentence about a level of its time keeps it from a pre-industrial value before it
+  // (the pre-industrial share, about 0.028 percent: IPCC AR6 WGI, Gulev et al. 2021, as the pack cites it).
+  ['Before industrialisation CO2 made up about 0.028 percent of the air.\nIn 2023 the global average stood at about 0.042 percent.', 'about 0.042 percent', '-', false],
   // A subject of another kind does not answer a description: no period was named before "the event".
   ['The GRIP core was drilled at Summit.\nThe event ended about 11,700 years ago.', 'about 11,700 years ago', '-', false],
 ];
