@@ -412,7 +412,8 @@ function examineSentence(
   // "CO2 was around 350": a bare number after a term the pack gives one unit takes that unit.
   const quantities = restoreTermUnits(text, restoreElidedUnits(text, parseQuantities(text)), packs);
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
-  const { bindings } = bindQuantities(text, quantities, packs, previous);
+  // The texts a description of a kind ("that core", "the cold snap") may take its subject from, oldest first.
+  const { bindings } = bindQuantities(text, quantities, packs, previous, historyOf(before, previous, context, packs));
   const reference = checkReferences(text, quantities, bindings, packs);
   const reading = paragraphReader(paragraph, packs, ownBlock(context))(index);
   const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before), ...checkRanks(text, packs)]);
@@ -437,6 +438,17 @@ const DIGIT = /\d/u;
  */
 function sentenceBefore(paragraph: readonly string[], index: number, leadIn: readonly string[], context: ParagraphContext, packs: LoadedPacks): string | undefined {
   return index > 0 ? paragraph[index - 1] : (introOf(leadIn, context.blockKind === 'list-item') ?? leadIn.at(-1) ?? headingSubjects(context.heading, packs));
+}
+
+/**
+ * What a sentence's back-references may reach, oldest first: its section heading's subjects, the
+ * block's lead-in (the item or post before, the sentence introducing it) and the sentences before it
+ * in its block, ending with the sentence it reads on from.
+ */
+function historyOf(before: readonly string[], previous: string | undefined, context: ParagraphContext, packs: LoadedPacks): string[] {
+  const heading = headingSubjects(context.heading, packs);
+  const texts = [...(heading === undefined ? [] : [heading]), ...before];
+  return previous === undefined || texts.at(-1) === previous ? texts : [...texts, previous];
 }
 
 /**

@@ -6,7 +6,8 @@
  *        ^^^^ ──────────────────────────────────────────────────── 2,000 metres (GRIP depth)
  *
  * Only a quantity with no candidate in its own sentence looks back; only when its sentence refers
- * back with a pronoun ("they", "it", "its"...) or a time phrase ("at that time", "by then"), as a
+ * back (back-reference.ts, from the pack lexicon's `back-references` and `kinds`: a pronoun, a time
+ * phrase such as "at that time", a description of a kind such as "that core"), as a
  * sentence that takes its subject from the one before does (a sentence that names its own subject,
  * "The EPICA Dome C core, 560 km away, ...", does not look back); and only when its own words name no
  * other subject: every term it can see that some value binds on must serve the value, unless it is
@@ -16,6 +17,7 @@
  * with the same score tie, and bind nothing.
  */
 import { createTopicMatcher, type TopicMatcher } from '../prose/topic-matcher.js';
+import { afterDemonstrative, measureSubject, refersBack, termsOfKind } from './back-reference.js';
 import { formsOf, subjectWordsOf } from '../propositions/lexicon.js';
 import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
 import type { Quantity } from '../types.js';
@@ -25,19 +27,6 @@ import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 
 /** What a group filled from the previous sentence adds to a value's distance. */
 export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
-const REFERS_BACK = /(?:^|[^\p{L}])(?:it|its|it's|it’s|they|their|them|this|these|those|there|he|she|his|her|we|we're|we’re|we've|we’ve|(?:at|by|during|in)\s+that\s+(?:time|point|stage|period)|(?:in|at|from|of|during|for|within|across|over|on)\s+(?:that|the\s+same)\s+\p{L}+|at\s+the\s+time(?!\s+of(?![\p{L}]))|(?:by|back)\s+then|the\s+(?:same\s+)?(?:greenhouse\s+)?gas)(?![\p{L}])/iu;
-/**
- * A sentence whose subject is a bare measure ("The global average for 2019 was …", "Before the
- * Industrial Revolution the level was …") names no subject of its own: the measure is of the subject
- * before. A measure with an "of" phrase names its own subject ("the level of the sea").
- */
-const MEASURE_SUBJECT = /(?:^|[^\p{L}])the\s+(?:[\p{L}-]+\s+){0,2}?(?:average|mean|level|concentration|figure|value|reading|total|amount|lag|lead|gap|delay|offset)(?![\p{L}])(?!\s+of(?![\p{L}]))/iu;
-/**
- * A term right after a demonstrative ("in that record", "this core") is the back-reference itself, not
- * a subject of its own; so is a term in a noun phrase a possessive opens ("Its deuterium and CO2
- * series", "their trapped air"): the thing it belongs to is the subject before.
- */
-const DEMONSTRATIVE = /(?:^|[^\p{L}])(?:(?:that|this|these|those|the\s+same)|(?:its|their)(?:\s+[\p{L}-]+){0,3})\s+$/iu;
 /** The baseline of a comparison: "colder than in pre-industrial times", "40 metres below today's". */
 const BASELINE = /(?:^|[^\p{L}])(?:than|below|above|beneath)(?:\s+[\p{L}-]+){0,2}\s*$/iu;
 /** What may stand between a qualifier and the subject it qualifies: "global sea level", "global-mean". */
@@ -75,6 +64,37 @@ function namesSubject(words: string, packs: LoadedPacks): boolean {
   return YEAR.test(words) || matcher.test(words);
 }
 
+const timeTerms = new WeakMap<object, { dates: Set<string>; times: Set<string> }>();
+
+/** The pack's date terms (every word a year or a decade: "2019", "2000s") and time terms (`kind-members.time`, and every term with a year in a word). */
+function timeTermsOf(packs: LoadedPacks): { dates: Set<string>; times: Set<string> } {
+  let known = timeTerms.get(packs);
+  if (known === undefined) {
+    const dates = new Set(packs.terms.filter((t) => t.words.length > 0 && t.words.every((w) => DATE.test(w.trim()))).map((t) => t.id));
+    const times = new Set([...termsOfKind(packs, 'time'), ...packs.terms.filter((t) => t.words.some((w) => YEAR.test(w))).map((t) => t.id)]);
+    known = { dates, times };
+    timeTerms.set(packs, known);
+  }
+  return known;
+}
+
+/** Whether a term is a date: every word of it a year or a decade. */
+function isDate(id: string, packs: LoadedPacks): boolean {
+  return timeTermsOf(packs).dates.has(id);
+}
+
+/** A year or a decade written alone. */
+const DATE = /^\d{4}(?:s|'s)?$/u;
+
+/**
+ * Whether a value is dated: one of its groups is made of time terms only (the level of 2019, of
+ * today, of pre-industrial times, of the LGM). A date in its sentence then speaks of the value's time.
+ */
+function isDated(r: ReferenceValue, packs: LoadedPacks): boolean {
+  const { times } = timeTermsOf(packs);
+  return r.binding.all.some((g) => g.length > 0 && g.every((id) => times.has(id)));
+}
+
 /** The sentence before, and whether the quantity's own sentence states a stretch or point of time of its own. */
 export interface OwnFrame {
   context: string;
@@ -87,8 +107,8 @@ export interface OwnFrame {
  * sentence ending in a colon introduces: "How deep the two boreholes go:" before "- Vostok, 3,623 m");
  * bindFromContext binds nothing otherwise.
  */
-export function mayReferBack(sentence: string, before?: string): boolean {
-  return REFERS_BACK.test(sentence) || MEASURE_SUBJECT.test(sentence) || (before !== undefined && (ASKS.test(before) || INTRODUCES.test(before)));
+export function mayReferBack(sentence: string, packs: LoadedPacks, before?: string): boolean {
+  return refersBack(sentence, packs) || (before !== undefined && (ASKS.test(before) || INTRODUCES.test(before)));
 }
 
 /** A sentence that asks: the next one answers it, and its subject is the question's. */
@@ -113,7 +133,7 @@ export function bindFromContext(
   contextSubject?: [number, number] | (() => [number, number] | undefined),
   frame?: OwnFrame,
 ): string | 'ambiguous' | undefined {
-  if (!mayReferBack(sentence, frame?.context)) return undefined;
+  if (!mayReferBack(sentence, packs, frame?.context)) return undefined;
   // "The ice goes back 800,000 years, and over that entire span CO2 stayed between 170 and 300 ppm":
   // a sentence that states its own stretch of time takes no date ("in 2019") from the one before.
   const dated = (id: string): boolean => frame !== undefined && (context.get(id) ?? []).some(([start, end]) => YEAR.test(frame.context.slice(start, end)));
@@ -126,7 +146,9 @@ export function bindFromContext(
   const candidates = packs.references
     .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && canState(r, q))
     .filter((r) => !r.binding.none.some((id) => vetoes.has(id)))
-    .filter((r) => own.every(([id, spans]) => serves(r, id) || spans.every((span) => qualifiesServing(sentence, span, view, (other) => serves(r, other)) || withinServing(span, view, (other) => serves(r, other)))))
+    // "The core was drilled through the early 2000s until it reached 3,623 metres": a date is the
+    // time frame of what the sentence tells, not a subject of its own, unless the value is itself dated.
+    .filter((r) => own.every(([id, spans]) => serves(r, id) || (isDate(id, packs) && !isDated(r, packs)) || spans.every((span) => qualifiesServing(sentence, span, view, (other) => serves(r, other)) || withinServing(span, view, (other) => serves(r, other)))))
     .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))))
     // What a value takes from the sentence before besides a subject (an attribute such as "the
     // longest") comes with that sentence's vetoes: "The longest record comes from Dome C. Vostok got
@@ -181,8 +203,8 @@ function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks, dime
   }
   const used = binding;
   // The words of a bare measure subject ("The global average", "the level") are the back-reference itself.
-  const measure = MEASURE_SUBJECT.exec(sentence);
-  const inMeasure = ([start, end]: [number, number]): boolean => measure !== null && start >= measure.index && end <= measure.index + measure[0].length;
+  const measure = measureSubject(sentence, packs);
+  const inMeasure = ([start, end]: [number, number]): boolean => measure !== undefined && start >= measure[0] && end <= measure[1];
   // An attribute that names a measure this number could state ("a record of 800,000 years": the
   // measure of a subject, a value bound by the subject and one more group, as in a measure family)
   // is as much the number's own subject as a core or a gas; one that cannot ("to date", "of the
@@ -193,7 +215,7 @@ function subjectTerms(sentence: string, view: TermHits, packs: LoadedPacks, dime
     !inMeasure([start, end]) &&
     (namesMeasure(id) || namesSubject(sentence.slice(start, end), packs)) &&
     !BASELINE.test(sentence.slice(Math.max(0, start - 40), start)) &&
-    !DEMONSTRATIVE.test(sentence.slice(Math.max(0, start - 20), start));
+    !afterDemonstrative(sentence, start, packs);
   return [...view]
     .map(([id, spans]): [string, [number, number][]] => [id, used.has(id) ? spans.filter((span) => ownSubject(id, span)) : []])
     .filter(([, spans]) => spans.length > 0);

@@ -23,6 +23,7 @@ import { bindImplied } from './bind-implied.js';
 import { BOUND_TERMS, boundReadings, clauseStarts } from './bind-bound.js';
 import { withStateEvents } from './bind-events.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
+import { resolveBackReferences, type Resolution } from './back-reference.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
 import { comparedInRelativeClauses, withoutOthers } from './bind-others.js';
 import { partsOfWholes, wholesApart, withoutWholes } from './bind-part.js';
@@ -390,7 +391,13 @@ function withoutEarlierClauses(vetoes: TermHits, from: number | undefined, start
  * previous sentence of the same paragraph, if any: its terms may name the subject of a quantity
  * that has no candidate in its own sentence.
  */
-export function bindQuantities(sentence: string, quantities: Quantity[], packs: LoadedPacks, context?: string): { bindings: Binding[]; ambiguous: number[] } {
+export function bindQuantities(
+  sentence: string,
+  quantities: Quantity[],
+  packs: LoadedPacks,
+  context?: string,
+  history: readonly string[] = context === undefined ? [] : [context],
+): { bindings: Binding[]; ambiguous: number[] } {
   const pairs = endpointPairs(sentence, quantities);
   const roles = quantityRoles(sentence, quantities);
   const lists = parallelLists(sentence, quantities, pairs);
@@ -472,9 +479,15 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
   }
   let contextHits: TermHits | undefined;
   let fromApposition: string | undefined;
-  let contextSubject: [number, number] | null | undefined;
+  const contextSubjects = new Map<string, [number, number] | null>();
   // compromise reads the sentence before for its subject only when bindFromContext ranks two values by it.
-  const subjectBefore = (text: string) => (): [number, number] | undefined => (contextSubject ??= subjectSpan(text) ?? null) ?? undefined;
+  const subjectBefore = (text: string) => (): [number, number] | undefined => {
+    if (!contextSubjects.has(text)) contextSubjects.set(text, subjectSpan(text) ?? null);
+    return contextSubjects.get(text) ?? undefined;
+  };
+  // "That core was drilled to 3,623 m": what the sentence's descriptions of a kind take up (back-reference.ts).
+  let resolution: Resolution | undefined;
+  const resolved = (): Resolution => (resolution ??= resolveBackReferences(sentence, history, packs));
   quantities.forEach((q, i) => {
     if (decided.has(i)) return;
     // "the lowest 200 metres hold 150,000 years": a stretch of the core, not its depth.
@@ -513,11 +526,23 @@ export function bindQuantities(sentence: string, quantities: Quantity[], packs: 
     // A calendar year ("before the year 2000") dates the sentence; it takes no subject from the one before.
     // Only a sentence that may refer back reads the one before (and only then compromise finds its subject).
     // A part of a whole ("80 metres of that rise") is no value of the whole, here or one sentence back.
-    else if (context !== undefined && context.trim() !== '' && q.statedUnit !== 'CE' && !parts.some((p) => p.index === i) && mayReferBack(sentence, context)) {
-      contextHits ??= findTerms(context, packs);
+    else if (q.statedUnit !== 'CE' && !parts.some((p) => p.index === i)) {
       const ownTime = quantities.some((o, j) => j !== i && (o.dimension === 'age' || o.dimension === 'duration') && o.statedUnit !== 'CE');
-      const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, subjectBefore(context), { context, ownTime });
-      if (found !== undefined) decided.set(i, found);
+      const taken = resolved();
+      // Two subjects of the kind named together ("Vostok and Dome C ... The core ..."): no reading.
+      if (taken.state === 'ambiguous') return;
+      // A subject named further back than the sentence before (or in this sentence's earlier clause)
+      // lends its own words; one named in the sentence before lends that sentence, as a pronoun does.
+      const far = taken.state === 'found' ? taken.referents.filter((r) => history[r.source] !== context) : [];
+      if (far.length > 0) {
+        const text = far.map((r) => r.text).join(', ');
+        const found = bindFromContext(sentence, q, role, view, findTerms(text, packs), packs, breaks, vetoes, subjectBefore(text), { context: text, ownTime });
+        if (found !== undefined) decided.set(i, found);
+      } else if (context !== undefined && context.trim() !== '' && mayReferBack(sentence, packs, context)) {
+        contextHits ??= findTerms(context, packs);
+        const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, subjectBefore(context), { context, ownTime });
+        if (found !== undefined) decided.set(i, found);
+      }
     }
     // "EPICA Dome C reached 3,623 metres": the subject is named and the unit says what is measured;
     // not after a stretch of it ("the lowest 200 m of Dome C hold 150,000 years": the stretch's years).
