@@ -447,8 +447,12 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
     if (s.words[e.first]?.segment !== s.words[h.first]?.segment && s.words[e.first]?.clause !== s.words[h.first]?.clause) return false;
     if (['not', 'no'].includes(s.words[e.first - 1]?.text ?? '')) return false;
     // "switched off by the orbit and by nothing else": a restriction joined to the agent by linking words only.
-    const joined = agent !== undefined && e.first > agent.last && s.words.slice(agent.last + 1, e.first).every((w) => JOINERS.has(w.text));
+    // "Nothing but the Earth's orbit": only the agent's own noun phrase stands between.
+    const joined = agent !== undefined && ((e.first > agent.last && linksOnly(s, agent.last, e.first)) || (e.last < agent.first && linksOnly(s, e.last, agent.first)));
     const nearAgent = agent !== undefined && (Math.abs(e.first - agent.last) <= 2 || Math.abs(e.last - agent.first) <= 2 || joined);
+    // "melted those ice sheets all by itself": a reflexive focus that closes the clause after the cause.
+    const closing = e.first > h.last && s.words[e.first]?.clause === s.words[h.first]?.clause && s.words[e.last + 1]?.segment !== s.words[e.last]?.segment && /by (?:itself|themselves)|on (?:its|their) own|alone|single-handedly/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
+    if (closing) return true;
     const nearCue = Math.abs(e.last - h.first) <= 2 || (e.first > h.last && e.first - h.last <= 2);
     // "The change in sunshine, on its own, is what brought...": between the agent and the cue word.
     const between = agent !== undefined && e.first > agent.last && e.last < h.first;
@@ -535,4 +539,21 @@ export function isMention(s: ReadSentence, i: number): boolean {
   // A sentence that is all quotation is read by its stance (quoted), not here.
   if (k === 0) return false;
   return NAMING.has(s.words[k - 1]?.text ?? '');
+}
+
+/**
+ * Only linking words, articles and owners, "of", and the words of named things stand strictly
+ * between words `from` and `to`: "the wobbles of Earth's orbit and by nothing else", "nothing but
+ * the Earth's orbit".
+ */
+function linksOnly(s: ReadSentence, from: number, to: number): boolean {
+  if (to - from > 7) return false;
+  const named = (k: number) => s.things.some((t) => t.first <= k && k <= t.last) || s.of('regions').some((r) => r.first <= k && k <= r.last);
+  // "the tilt of the Earth's axis": the words of an "of" phrase belong to the agent's noun phrase.
+  let ofPhrase = false;
+  return s.words.slice(from + 1, to).every((w, j) => {
+    if (w.text === 'of') ofPhrase = true;
+    else if (JOINERS.has(w.text)) ofPhrase = false;
+    return JOINERS.has(w.text) || ARTICLES.has(w.text) || w.text === 'of' || ofPhrase || named(from + 1 + j);
+  });
 }

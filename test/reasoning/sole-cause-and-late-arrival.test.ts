@@ -41,6 +41,10 @@ const SOLE_CAUSE: string[] = [
   'Carbon dioxide on its own pulled the world out of the last glaciation.',
   'Nothing but carbon dioxide carried the Earth into and out of each glaciation.',
   'The ice ages were switched off by the orbit and by nothing else.',
+  'Each glaciation was brought to an end by the tilt of the Earth\'s axis and by nothing else.',
+  'Nothing but the Earth\'s orbit was needed to finish off the last glaciation.',
+  'Stronger northern sunshine melted the great ice sheets all by itself.',
+  'Carbon dioxide pulled the planet out of the ice age on its own, with the orbit a bystander.',
   // a share word or a predicate noun restricted
   'The orbit was the single cause of the ice ages.',
   'Carbon dioxide was the sole driver of the glacial cycles.',
@@ -68,6 +72,7 @@ const SOLE_CAUSE_CLEAN: string[] = [
   'The orbit alone could not have done it.',
   'The orbit alone could not have pulled the planet out of the ice age.',
   'The orbital push by itself was too weak to end the ice age.',
+  'Stronger northern sunshine could not have melted the great ice sheets by itself.',
   'The orbit alone was not enough to end the ice age.',
   // the orbit started the deglaciation and CO2 amplified it (Hays et al. 1976; Shakun et al. 2012)
   'The orbit started the deglaciation and CO2 amplified it.',
