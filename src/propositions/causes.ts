@@ -17,7 +17,7 @@ const DETERMINERS = new Set(['the', 'a', 'an', 'its', 'their', 'our', 'of', 'in'
 const ARTICLES = new Set(['the', 'a', 'an', 'its', 'their', 'our', 'this', 'that']);
 const INFERENCE_VERBS = new Set(['mean', 'means', 'meant', 'show', 'shows', 'showed', 'prove', 'proves', 'proved', 'imply', 'implies', 'implied', 'follow', 'follows', 'suggest', 'suggests', 'tell', 'tells']);
 const OBJECT_LINKS = new Set(['of', 'in', 'on', 'for', 'behind', 'to']);
-const ROLE: Record<string, Cause['role']> = { follower: 'cause', verbs: 'cause', because: 'cause', 'because-only': 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
+const ROLE: Record<string, Cause['role']> = { follower: 'cause', verbs: 'cause', sufficient: 'cause', 'sufficient-verbs': 'cause', passage: 'cause', because: 'cause', 'because-only': 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
 
 /** The causes one sentence states or denies; `previous` resolves a pronoun that opens it. */
 export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
@@ -39,7 +39,7 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     if (h.key === 'reverse' || h.key === 'either-or' || h.key === 'passive') continue;
     // "the resulting warming", "a forced response": a part noun's verb forms are no noun.
     if (NOUN_KEYS.has(h.key) && !asNoun(s, h)) continue;
-    const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify';
+    const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify' || h.key === 'sufficient-verbs';
     // "the end of the ice age" is a noun; "it was CO2 doing the pushing" is still a verb.
     if (verbLike && DETERMINERS.has(s.words[h.first - 1]?.text ?? '') && s.words[h.first - 2]?.text !== 'doing') continue;
     // "the resulting warming", "its initial cooling": an -ing form after an article and one modifier
@@ -54,6 +54,10 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     // "makes the cores a courtroom confession", "turned the debate into a shouting match": a casting verb
     // whose object is followed by a predicate noun (an article past the object) casts; it acts on nothing.
     if (h.key === 'verbs' && CASTING.has(s.words[h.first]?.text ?? '') && castsIntoNoun(s, h.last)) continue;
+    // "CO2 rose enough to warm...": a degree, no sufficiency; "the orbit was enough to end...": one.
+    if (h.key === 'sufficient' && !isSufficiency(s, h)) continue;
+    // "out of", "into": a passage caused only when an ice age follows ("hauled the planet out of the last glaciation").
+    if (h.key === 'passage' && passageTarget(s, h) === undefined) continue;
     if (h.key === 'without') {
       causes.push(...withoutAt(s, h, causes, previous));
       continue;
@@ -121,6 +125,8 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   if (noun && polarity !== 'open' && deniedAfter(s, h.last)) polarity = polarity === 'denied' ? 'asserted' : 'denied';
   // "the hypothesis that CO2 contributed to the warming will be rejected": the proposal is denied.
   if (polarity === 'asserted' && isRejectedProposal(s, h)) polarity = 'denied';
+  // "did none of the warming": a denial inside the verb phrase itself.
+  if (polarity !== 'open' && (h.key === 'verbs' || h.key === 'sufficient-verbs') && s.words.slice(h.first + 1, h.last + 1).some((w) => NEGATIONS.has(w.text))) polarity = polarity === 'denied' ? 'asserted' : 'denied';
   const next = s.words[h.last + 1]?.text ?? '';
   // "by itself", "by themselves" say the agent acted alone: no passive.
   const reflexive = /^(?:itself|themselves|its|their)$/u.test(s.words[(next === 'by' ? h.last + 2 : h.last + 3)]?.text ?? '');
@@ -159,13 +165,19 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     if (h.key === 'roles' && next === 'of') agentThing = linked ?? agentThing;
     else patientThing = linked;
     agentThing ??= thingAfter(s, h.last, 3) ?? named;
+  } else if (h.key === 'passage') {
+    // "CO2 alone flipped the planet in and out of ice ages": the clause's subject moves it; the ice age is the patient.
+    // The thing just before is the object moved ("the planet"), so the subject opens the clause.
+    agentThing = clauseSubject(s, h.first) ?? subjectBefore(s, h.first);
+    patientThing = passageTarget(s, h);
   } else if (s.words[h.first]?.text === 'out' && s.words[h.first + 1]?.text === 'of') {
     // "The orbit hauled the planet out of the ice age": the thing just before is the object moved.
     agentThing = clauseSubject(s, h.first) ?? subjectBefore(s, h.first);
     patientThing = thingAfter(s, h.last);
   } else {
     agentThing = subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first) ?? thingBefore(s, h.first, 'clause');
-    patientThing = thingAfter(s, h.last);
+    // "it's the sun doing it, not CO2": a phrase that holds its own object ("do it") takes no other.
+    patientThing = s.words[h.last]?.text === 'it' && h.last > h.first ? undefined : thingAfter(s, h.last);
   }
   // "The lag makes CO2 a mere passenger": the part is its object's, not the subject's.
   if (h.key === 'effects') agentThing = madeInto(s, h) ?? agentThing;
@@ -198,7 +210,12 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   const start = Math.min(s.words[h.first]?.start ?? 0, agentThing !== undefined && agentThing.first < h.first ? (s.words[agentThing.first]?.start ?? 0) : Infinity);
   const end = s.words[h.last]?.end ?? 0;
   // "It was CO2 that set the temperature": a cleft singles its focus out as the one agent.
-  const exclusive = isExclusive(s, h, agentThing) || (cleft !== undefined && h.key !== 'amplify') || h.key === 'because-only';
+  // "The orbit was enough to end the ice age", "CO2 alone sufficed": sufficiency makes its subject the one cause.
+  // Only the ice ages' own making or ending: "four molecules in a thousand is enough to shift the
+  // energy balance" says the gas is potent, not that it acted alone.
+  // "the sun did it all": a verb of doing everything with no object named is said of the whole event.
+  const sufficed = (SUFFICIENT_KEYS.has(h.key) || sufficientBefore(s, h, agentThing)) && (patient === 'ice-age' || (h.key === 'sufficient-verbs' && patient === undefined));
+  const exclusive = isExclusive(s, h, agentThing) || (cleft !== undefined && h.key !== 'amplify') || h.key === 'because-only' || sufficed;
   // "CO2 rides in the back", "CO2 merely reading the dial": a follower's part denies its subject a
   // cause; "CO2 is not just along for the ride" grants one.
   if (h.key === 'follower' && polarity !== 'open') {
@@ -425,11 +442,17 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
     s.words.some((w, i) => w.clause === clause && /^(?:only|just|merely)$/u.test(w.text) && PARTIAL.test(s.words[i + 1]?.text ?? '')) ||
     // "Ocean warming alone accounts for perhaps 20 to 30 ppm of the 80 to 100 ppm rise": a share of a whole.
     s.words.some((w, i) => i > h.last && w.clause === clause && w.text === 'of' && s.words.slice(h.last + 1, i).some((x) => /^\d/u.test(x.text)) && s.words.slice(i + 1, i + 5).some((x) => /^\d/u.test(x.text)));
-  if (partial) return false;
+  if (partial || shareAfter(s, h)) return false;
   return s.of('exclusive').some((e) => {
     if (s.words[e.first]?.segment !== s.words[h.first]?.segment && s.words[e.first]?.clause !== s.words[h.first]?.clause) return false;
     if (['not', 'no'].includes(s.words[e.first - 1]?.text ?? '')) return false;
-    const nearAgent = agent !== undefined && (Math.abs(e.first - agent.last) <= 2 || Math.abs(e.last - agent.first) <= 2);
+    // "switched off by the orbit and by nothing else": a restriction joined to the agent by linking words only.
+    // "Nothing but the Earth's orbit": only the agent's own noun phrase stands between.
+    const joined = agent !== undefined && ((e.first > agent.last && linksOnly(s, agent.last, e.first)) || (e.last < agent.first && linksOnly(s, e.last, agent.first)));
+    const nearAgent = agent !== undefined && (Math.abs(e.first - agent.last) <= 2 || Math.abs(e.last - agent.first) <= 2 || joined);
+    // "melted those ice sheets all by itself": a reflexive focus that closes the clause after the cause.
+    const closing = e.first > h.last && s.words[e.first]?.clause === s.words[h.first]?.clause && s.words[e.last + 1]?.segment !== s.words[e.last]?.segment && /by (?:itself|themselves)|on (?:its|their) own|alone|single-handedly/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
+    if (closing) return true;
     const nearCue = Math.abs(e.last - h.first) <= 2 || (e.first > h.last && e.first - h.last <= 2);
     // "The change in sunshine, on its own, is what brought...": between the agent and the cue word.
     const between = agent !== undefined && e.first > agent.last && e.last < h.first;
@@ -438,5 +461,99 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
     if (tail) return true;
     const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by (?:itself|themselves)|in (?:itself|themselves)|on (?:its|their) own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
     return nearAgent || ((nearCue || between) && strong);
+  });
+}
+
+/** Keys whose phrases say their subject sufficed on its own. */
+const SUFFICIENT_KEYS = new Set(['sufficient', 'sufficient-verbs']);
+/** Verbs that link a subject to a predicate as the copula does ("proved enough", "seemed sufficient"). */
+const LINKING = new Set([...COPULAS, 'prove', 'proves', 'proved', 'proven', 'seem', 'seems', 'seemed', 'become', 'becomes', 'became', 'remain', 'remains', 'remained']);
+
+/**
+ * A sufficiency predicate: its word stands after a copula or a linking verb in its clause, past
+ * adverbs and asides ("was, by itself, sufficient", "was more than enough", "would have been enough").
+ * "CO2 rose enough to warm..." has no copula and is a degree.
+ */
+function isSufficiency(s: ReadSentence, h: LexHit): boolean {
+  const clause = s.words[h.first]?.clause;
+  for (let k = h.first - 1; k >= Math.max(0, h.first - 6); k -= 1) {
+    const w = s.words[k];
+    if (w === undefined || w.clause !== clause) return false;
+    if (LINKING.has(w.text)) return true;
+    // "it is buried deep enough to seal": a participle between makes "enough" a degree of that verb.
+    if (/(?:ed|en)$/u.test(w.text) && w.text.length > 4) return false;
+    // A thing between the copula and the predicate is its subject ("was the orbit enough?" aside): stop at it.
+    if (s.things.some((t) => t.last === k)) return false;
+  }
+  return false;
+}
+
+/** A sufficiency predicate between the agent and cause word `h` ("the orbit was enough to end..."), in its clause. */
+function sufficientBefore(s: ReadSentence, h: LexHit, agent: Thing | undefined): boolean {
+  const clause = s.words[h.first]?.clause;
+  return s.of('causes', 'sufficient').some((e) => e.last < h.first && h.first - e.last <= 3 && s.words[e.first]?.clause === clause && (agent === undefined || agent.last < e.first) && isSufficiency(s, e));
+}
+
+/** The ice age a passage word leads into or out of, within four words in its segment ("out of the last glaciation"). */
+function passageTarget(s: ReadSentence, h: LexHit): Thing | undefined {
+  const segment = s.words[h.first]?.segment;
+  return s.things.find((t) => t.kind === 'ice-age' && t.first > h.last && t.first - h.last <= 4 && s.words[t.first]?.segment === segment);
+}
+
+/** Words that name a part of a whole before "of" ("a third of", "half of", "some of"); "all" and "the whole" are no part. */
+const SHARES = new Set(['half', 'third', 'thirds', 'quarter', 'quarters', 'fifth', 'fifths', 'tenth', 'fraction', 'part', 'portion', 'share', 'some', 'much', 'most', 'bit', 'chunk', 'percent', 'cent', '%']);
+
+/**
+ * "CO2 alone explains about a third of the glacial cooling", "the orbit by itself accounts for 40
+ * percent of it": what the agent is said to do is a share of the effect, so "alone" measures its
+ * part, and says nothing of its being the one cause. "100 percent of" is the whole.
+ */
+function shareAfter(s: ReadSentence, h: LexHit): boolean {
+  const clause = s.words[h.first]?.clause;
+  for (let k = h.last + 1; k <= h.last + 6; k += 1) {
+    const w = s.words[k];
+    if (w === undefined || w.clause !== clause) return false;
+    if (s.words[k + 1]?.text !== 'of') continue;
+    const whole = s.words.slice(h.last + 1, k + 1).some((x) => x.text === '100' || x.text === 'all' || x.text === 'whole');
+    if (whole) return false;
+    const percent = /^\s*%/u.test(s.text.slice(w.end));
+    if (SHARES.has(w.text) || percent || /^\d/u.test(w.text)) return true;
+  }
+  return false;
+}
+
+/** Words that join a restriction to the agent before it ("the orbit, and by nothing else"). */
+const JOINERS = new Set(['and', 'or', 'by', 'from', 'through', 'via', 'with']);
+
+/** Words that make a quotation after them a name ("the 'CO2 did it all' line", "that 'orbit alone' story"). */
+const NAMING = new Set(['the', 'a', 'an', 'this', 'that', 'these', 'those', 'your', 'his', 'her', 'their', 'our', 'my', 'old', 'usual', 'familiar']);
+
+/**
+ * Word `i` stands in a quotation inside the sentence that an article or owner names as a thing:
+ * "the 'CO2 did it all' line comes up every time" mentions the claim and does not make it.
+ */
+export function isMention(s: ReadSentence, i: number): boolean {
+  if (s.words[i]?.quoted !== true) return false;
+  let k = i;
+  while (k > 0 && s.words[k - 1]?.quoted === true) k -= 1;
+  // A sentence that is all quotation is read by its stance (quoted), not here.
+  if (k === 0) return false;
+  return NAMING.has(s.words[k - 1]?.text ?? '');
+}
+
+/**
+ * Only linking words, articles and owners, "of", and the words of named things stand strictly
+ * between words `from` and `to`: "the wobbles of Earth's orbit and by nothing else", "nothing but
+ * the Earth's orbit".
+ */
+function linksOnly(s: ReadSentence, from: number, to: number): boolean {
+  if (to - from > 7) return false;
+  const named = (k: number) => s.things.some((t) => t.first <= k && k <= t.last) || s.of('regions').some((r) => r.first <= k && k <= r.last);
+  // "the tilt of the Earth's axis": the words of an "of" phrase belong to the agent's noun phrase.
+  let ofPhrase = false;
+  return s.words.slice(from + 1, to).every((w, j) => {
+    if (w.text === 'of') ofPhrase = true;
+    else if (JOINERS.has(w.text)) ofPhrase = false;
+    return JOINERS.has(w.text) || ARTICLES.has(w.text) || w.text === 'of' || ofPhrase || named(from + 1 + j);
   });
 }

@@ -8,6 +8,8 @@
  * Saying the orbit alone *started* the warming is right and passes; so does the modern rise,
  * which has one main cause (our emissions).
  */
+import { isMention } from '../../propositions/causes.js';
+import type { Cause } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isAboutModernRise } from './queries.js';
 
@@ -21,9 +23,11 @@ function detect({ index, read }: DetectInput): Cue[] {
   if (here === undefined || isAboutModernRise(here.s)) return [];
   // One agent singled out as the cause of the ice ages or of a warming: the orbit, CO2, or another
   // factor of the climate system ("for one reason only: the ocean currents switched back on").
+  // "the 'CO2 did it all' line": a claim named as a thing in quotation marks is mentioned, not made.
+  const mentioned = (c: Cause) => isMention(here.s, here.s.words.findIndex((w) => w.start >= c.start));
   const single = here.props.causes.find(
     // The orbit alone *starting* the warming is what the sources say; any other agent alone starting it is not.
-    (c) => c.polarity === 'asserted' && c.exclusive && !(c.role === 'start' && c.agent === 'orbit') && c.role !== 'amplify' && SINGLE_AGENTS.has(c.agent ?? '') && c.patient !== 'co2',
+    (c) => c.polarity === 'asserted' && !mentioned(c) && c.exclusive && !(c.role === 'start' && c.agent === 'orbit') && c.role !== 'amplify' && SINGLE_AGENTS.has(c.agent ?? '') && c.patient !== 'co2',
   );
   // "It was CO2 that pulled the planet out, after the orbit set things in motion": the other factor keeps a role.
   const other = single === undefined ? undefined : here.props.causes.find((c) => c.polarity === 'asserted' && c !== single && FACTORS.has(c.agent ?? '') && c.agent !== single.agent);
