@@ -254,21 +254,13 @@ function termSearch(words: string[]): (sentence: string) => [number, number][] {
     const regex = termRegex(words);
     return (sentence) => [...sentence.matchAll(regex)].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
   }
-  // The walk costs nothing to make; a compiled expression runs a few times faster, so it takes over
-  // once the term has searched some tens of kilobytes (a long draft or a folder; both find the same).
+  // The walk only, however much it has searched. The term's expression used to take over after
+  // 50 KB, but the expressions over the derived inflections kept their compiled code for the rest
+  // of the run: with the walk alone the peak of 1 MB of topical prose in one thread fell from 266
+  // to 240 MiB and the run was no slower (docs/speed.md, Session 11). Both find the same spans.
   const trie = new PhraseTrie(sorted);
-  let regex: RegExp | undefined;
-  let walked = 0;
-  return (sentence) => {
-    if (regex !== undefined) return [...sentence.matchAll(regex)].map((m): [number, number] => [m.index + (m[1] ?? '').length, m.index + m[0].length]);
-    walked += sentence.length;
-    if (walked > TERM_WALK_LIMIT) regex = termRegex(words);
-    return trie.spans(sentence);
-  };
+  return (sentence) => trie.spans(sentence);
 }
-
-/** Characters a term's trie walks before its expression is compiled. */
-const TERM_WALK_LIMIT = 50_000;
 
 /** The expression whose matches a term's search finds (the group is the character before a phrase). */
 export function termRegex(words: string[]): RegExp {
