@@ -258,7 +258,10 @@ export const answerKey: readonly DraftKey[] = [
       {
         file: DRAFTS + 'deep-time-dispatch-ep14.md',
         line: 35,
-        kind: 'value',
+        // Keyed 'value' when written; reclassified as 'unit' in December 2026: the slip its own note
+        // explains is the era (11,700 b2k, said just before, written as BCE), which the later
+        // writers' brief files under unit slips ("BP/b2k/BCE mixed up"), and Firnline now names it so.
+        kind: 'unit',
         text: 'around 11,700 BCE',
         why: '11,700 BCE = 13,650 yr BP; the end of the Younger Dryas / Holocene base is 11,500-11,700 yr BP, about 9700 BCE (younger-dryas-end, holocene-start 11,700 b2k; Walker et al. 2009, J. Quaternary Sci. 24, 3-17, doi 10.1002/jqs.1227)',
       },
