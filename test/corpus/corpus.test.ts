@@ -83,6 +83,17 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-t-4': { recall: 0.8, falseFlags: 0.06 },
   'tuning-u-1': { recall: 0.65, falseFlags: 0.08 },
   'tuning-u-2': { recall: 0.68, falseFlags: 0.06 },
+  // tuning-v-1..4 were the blind hold-out holdout-l, spent in December 2026's eleventh round (read on its
+  // first and last code: 84/125 and 27/42 caught at the start, 86/125 and 29/42 at the end, with 8/236
+  // and 6/84 false flags both times). tuning-w-1..2 were written fresh at that round's start and read,
+  // totals only, to judge each branch before merging (29/40 and 22/40 caught at the start, 31/40 and
+  // 24/40 at the end, false flags 4/65 and 2/70 throughout).
+  'tuning-v-1': { recall: 0.83, falseFlags: 0.06 },
+  'tuning-v-2': { recall: 0.6, falseFlags: 0.08 },
+  'tuning-v-3': { recall: 0.5, falseFlags: 0.04 },
+  'tuning-v-4': { recall: 0.64, falseFlags: 0.1 },
+  'tuning-w-1': { recall: 0.72, falseFlags: 0.08 },
+  'tuning-w-2': { recall: 0.55, falseFlags: 0.05 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -113,12 +124,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (84.4% measured over 50 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (84.1% measured over 56 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.6% measured over 50 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (94.1% measured over 56 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
