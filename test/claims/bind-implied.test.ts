@@ -25,6 +25,7 @@ import { checkText } from '../../src/index.js';
 import { parseQuantities } from '../../src/quantities/index.js';
 import { loadPacks } from '../../src/rulepack/index.js';
 import type { LoadedPacks } from '../../src/rulepack/types.js';
+import { TARN_PACK_HEAD } from './fixtures/tarn-pack.js';
 
 const packs = await loadPacks([]);
 
@@ -121,17 +122,7 @@ function tankPack(name: string, implied: string, lexicon: string[] = []): string
   writeFileSync(
     file,
     [
-      'pack: tarn-house',
-      'version: 1.0.0',
-      'as_of: 2025-01-15',
-      'sources:',
-      '  - id: tarn-notes',
-      '    cite: Tarn Valley Museum (2024). Exhibit notes.',
-      '    url: https://example.org/tarn',
-      '    how: read in the source',
-      'terms:',
-      '  - id: tank',
-      '    words: [demo tank]',
+      ...TARN_PACK_HEAD,
       '  - id: peak',
       '    words: [peak]',
       'reference_values:',

@@ -10,6 +10,7 @@ import { bindQuantities } from '../../src/claims/bind.js';
 import { FirnlineErrors } from '../../src/errors.js';
 import { loadPacks } from '../../src/rulepack/index.js';
 import { quantitiesIn } from './quantity-at.js';
+import { TARN_PACK_HEAD } from './fixtures/tarn-pack.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'firnline-role-'));
 
@@ -19,17 +20,7 @@ function pack(name: string, role: string): string {
   writeFileSync(
     file,
     [
-      'pack: tarn-house',
-      'version: 1.0.0',
-      'as_of: 2025-01-15',
-      'sources:',
-      '  - id: tarn-notes',
-      '    cite: Tarn Valley Museum (2024). Exhibit notes.',
-      '    url: https://example.org/tarn',
-      '    how: read in the source',
-      'terms:',
-      '  - id: tank',
-      '    words: [demo tank]',
+      ...TARN_PACK_HEAD,
       'reference_values:',
       '  - id: tank-rise',
       '    measures: Rise of CO2 in the demo tank during one show',
