@@ -16,20 +16,12 @@
 import type { LoadedPacks, Lexicon } from '../rulepack/types.js';
 import { compile, phraseWords, type CompiledLexicon } from '../propositions/lexicon.js';
 import { findTerms } from './bind.js';
+import { lexiconWords, type LexiconWord } from '../prose/lexicon-words.js';
 
 /** A word of a sentence: lower-case (’ as '), with its offsets. */
-interface Word {
-  text: string;
-  start: number;
-  end: number;
-}
-
+type Word = LexiconWord;
 /** Words as the lexicon cuts them (hyphens separate words). */
-const WORD = /[\p{L}\p{N}₂]+(?:['’][\p{L}]+)*/gu;
-
-function wordsOf(text: string): Word[] {
-  return [...text.matchAll(WORD)].map((m) => ({ text: m[0].toLowerCase().replace(/’/gu, "'"), start: m.index, end: m.index + m[0].length }));
-}
+const wordsOf = lexiconWords;
 
 /** The back-reference words of a pack, compiled once per packs. */
 interface Vocabulary {

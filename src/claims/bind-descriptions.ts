@@ -19,6 +19,7 @@ import { phraseWords, variantsOf } from '../propositions/lexicon.js';
 import { plural } from '../propositions/inflect.js';
 import type { Lexicon, LoadedPacks } from '../rulepack/types.js';
 import type { TermHits } from './bind-view.js';
+import { lexiconWords } from '../prose/lexicon-words.js';
 
 type Number = 'any' | 'one' | 'many';
 
@@ -171,10 +172,9 @@ interface Token {
   end: number;
 }
 
-const WORD = /[\p{L}\p{N}₂]+(?:['’][\p{L}]+)*/gu;
-
+/** The sentence's words as the lexicon cuts them, a possessive read as its word ("Earth's" is "earth"). */
 function tokensOf(sentence: string): Token[] {
-  return [...sentence.matchAll(WORD)].map((m) => ({ word: m[0].toLowerCase().replace(/’/gu, "'").replace(/'s$/u, ''), start: m.index, end: m.index + m[0].length }));
+  return lexiconWords(sentence).map((w) => ({ word: w.text.replace(/'s$/u, ''), start: w.start, end: w.end }));
 }
 
 const ARTICLES = new Set(['the', 'a', 'an']);
