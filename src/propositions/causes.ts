@@ -16,7 +16,8 @@ const DETERMINERS = new Set(['the', 'a', 'an', 'its', 'their', 'our', 'of', 'in'
 /** Articles and owners that open a noun phrase ("the resulting warming"). */
 const ARTICLES = new Set(['the', 'a', 'an', 'its', 'their', 'our', 'this', 'that']);
 const INFERENCE_VERBS = new Set(['mean', 'means', 'meant', 'show', 'shows', 'showed', 'prove', 'proves', 'proved', 'imply', 'implies', 'implied', 'follow', 'follows', 'suggest', 'suggests', 'tell', 'tells']);
-const OBJECT_LINKS = new Set(['of', 'in', 'on', 'for', 'behind', 'to']);
+// "no say over temperature", "control over the climate": "over" links a part to what it acts on.
+const OBJECT_LINKS = new Set(['of', 'in', 'on', 'for', 'behind', 'to', 'over']);
 const ROLE: Record<string, Cause['role']> = { follower: 'cause', verbs: 'cause', sufficient: 'cause', 'sufficient-verbs': 'cause', passage: 'cause', because: 'cause', 'because-only': 'cause', nouns: 'cause', roles: 'cause', effects: 'cause', start: 'start', amplify: 'amplify', feedback: 'feedback' };
 
 /** The causes one sentence states or denies; `previous` resolves a pronoun that opens it. */
@@ -34,9 +35,10 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     .filter((h) => ![...entities, ...s.of('order')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first))
     .filter((h) => !s.of('exclusive').some((e) => e.first <= h.first && e.last >= h.last && e.last - e.first > h.last - h.first));
   const causes: Cause[] = [];
-  for (const h of hits) {
-    // `passive` only qualifies an `effects` word at the same place; it states nothing of its own.
-    if (h.key === 'reverse' || h.key === 'either-or' || h.key === 'passive') continue;
+  for (const h of [...hits, ...doingHits(s)].sort((a, b) => a.first - b.first)) {
+    // `passive` only qualifies an `effects` word at the same place; it states nothing of its own;
+    // `deeds` are read with their "do" (doingHits).
+    if (h.key === 'reverse' || h.key === 'either-or' || h.key === 'passive' || h.key === 'deeds') continue;
     // "the resulting warming", "a forced response": a part noun's verb forms are no noun.
     if (NOUN_KEYS.has(h.key) && !asNoun(s, h)) continue;
     const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify' || h.key === 'sufficient-verbs';
@@ -65,6 +67,47 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     causes.push(...causeAt(s, h, previous));
   }
   return [...causes, ...identityCauses(s)];
+}
+
+/** The forms of "do", the verb whose object names a part in a cause ("did the work", "does nothing"). */
+const DO_FORMS = new Set(['do', 'does', 'did', 'done', 'doing']);
+/** Words that may open the object of "do" before its deed ("the rest of the", "none of the", "any of its"). */
+const DEED_LEAD = new Set(['the', 'a', 'an', 'its', 'their', 'of', 'any', 'none', 'all', 'most', 'much', 'some', 'more', 'rest', 'bulk', 'lot', 'whole', 'real', 'actual', 'hard', 'heavy', 'main', 'early', 'later', 'final', 'initial', 'share', 'part', 'half', 'little', 'plenty', 'lots']);
+/** Objects of "do" that deny their subject any part: "CO2 itself does nothing". */
+const NOTHING = new Set(['nothing', 'anything']);
+
+/**
+ * "did the rest of the work of ending the ice age", "wasn't doing any of the heating", "CO2 itself
+ * does nothing": a form of "do" whose object, past determiners and quantifiers, is a deed of the
+ * lexicon (`causes.deeds`) or a change told as a noun, read as a causal verb phrase from "do" to
+ * the deed. A "do" inside a lexicon phrase already ("do the trick") adds nothing. A negation inside
+ * the phrase ("none of", "nothing") denies it, as in "did none of the warming".
+ */
+function doingHits(s: ReadSentence): LexHit[] {
+  const out: LexHit[] = [];
+  const deeds = [...s.of('causes', 'deeds'), ...s.of('changes', 'warm'), ...s.of('changes', 'cool')];
+  s.words.forEach((w, k) => {
+    if (!DO_FORMS.has(w.text) || s.of('causes').some((h) => h.key !== 'deeds' && h.first <= k && k <= h.last)) return;
+    const segment = w.segment;
+    if (NOTHING.has(s.words[k + 1]?.text ?? '') && s.words[k + 1]?.segment === segment) {
+      // "does nothing", "does nothing at all"; "did nothing to slow the thaw" says what it failed to do, and is read there.
+      const next = s.words[k + 2];
+      const closes = next === undefined || next.segment !== segment || (next.text === 'at' && s.words[k + 3]?.text === 'all');
+      if (closes) out.push({ cls: 'causes', key: 'verbs', first: k, last: k + 1 });
+      return;
+    }
+    for (let j = k + 1; j <= k + 7; j += 1) {
+      const at = s.words[j];
+      if (at === undefined || at.segment !== segment) return;
+      const deed = deeds.find((d) => d.first === j);
+      if (deed !== undefined) {
+        out.push({ cls: 'causes', key: 'verbs', first: k, last: deed.last });
+        return;
+      }
+      if (!DEED_LEAD.has(at.text)) return;
+    }
+  });
+  return out;
 }
 
 /** Keys whose phrases are nouns: they match as written or in the plural, never as a verb form. */
@@ -175,7 +218,11 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     agentThing = clauseSubject(s, h.first) ?? subjectBefore(s, h.first);
     patientThing = thingAfter(s, h.last);
   } else {
-    agentThing = subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first) ?? thingBefore(s, h.first, 'clause');
+    // "rising summer sunshine in the north was, by itself, sufficient to end it": a sufficiency
+    // predicate's subject is its copula's, past the asides between them.
+    const copula = h.key === 'sufficient' ? linkingVerbOf(s, h) : undefined;
+    const predicated = copula === undefined ? undefined : (subjectOf(s, copula) ?? subjectBefore(s, copula));
+    agentThing = predicated ?? subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first) ?? thingBefore(s, h.first, 'clause');
     // "it's the sun doing it, not CO2": a phrase that holds its own object ("do it") takes no other.
     patientThing = s.words[h.last]?.text === 'it' && h.last > h.first ? undefined : thingAfter(s, h.last);
   }
@@ -186,6 +233,11 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   let patient = kind(patientThing);
   // "it cannot have been a driver of that warmth": the pronoun is not the thing it acts on.
   let agent = patientThing !== undefined && patientThing.kind !== 'pronoun' ? kindOf(s, agentThing, previous, new Set([...RECORDS, patientThing.kind])) : agentKind(agentThing);
+  // "Was CO2 a driver, or merely a passenger? The evidence points to passenger.": an effect noun
+  // with no subject of its own answers the question before, and is said of that question's subject.
+  if (agent === undefined && agentThing === undefined && h.key === 'effects' && previous?.question === true) {
+    agent = previous.things.find((t) => t.kind !== 'pronoun' && !RECORDS.has(t.kind))?.kind;
+  }
   // "dragged us out of the last ice age": a cause phrase that holds its own object names the patient.
   const inside = s.of('entities').find((e) => e.first >= h.first && e.last <= h.last && (h.key === 'verbs' || h.key === 'start'));
   if (inside !== undefined && inside.key !== agent) patient = inside.key;
@@ -235,7 +287,8 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   // "nothing but a consequence", "merely a response", "CO2 just came along as a passenger": the
   // subject is denied any causal role.
   // "a mere passenger": the adjective restricts the part as "merely" does.
-  const restricted = hasExclusiveBefore(s, h.first, 3) || exclusiveAfterSubject(s, h.first, agentThing) || s.words[h.first - 1]?.text === 'mere';
+  // "rather than a mere effect", "not just an effect": the restriction itself is set aside, and the part stays open.
+  const restricted = !restrictionSetAside(s, h.first) && (hasExclusiveBefore(s, h.first, 3) || exclusiveAfterSubject(s, h.first, agentThing) || s.words[h.first - 1]?.text === 'mere' || restrictionAfter(s, h));
   if (h.key === 'effects' && polarity === 'asserted' && restricted && patient !== undefined) {
     out.push({ kind: 'cause', agent: patient, role: 'cause', polarity: 'denied', exclusive: false, start, end });
   }
@@ -285,7 +338,10 @@ function copulaAfter(s: ReadSentence, i: number): number | undefined {
 
 /** "must be negligible", "is irrelevant": a role denied by what is said of it. */
 function deniedAfter(s: ReadSentence, i: number): boolean {
-  const after = s.words.slice(i + 1, i + 11).filter((w) => w.clause === s.words[i]?.clause);
+  const clause = s.words[i]?.clause;
+  // "a consequence and nothing more", "a by-product, nothing else": a restriction's "nothing" restricts the part, it denies none.
+  const restriction = (k: number) => s.of('exclusive').some((e) => e.first <= k && k <= e.last);
+  const after = s.words.slice(i + 1, i + 11).filter((w, j) => w.clause === clause && !restriction(i + 1 + j));
   if (after.some((w) => /^(?:negligible|irrelevant|unimportant|insignificant|immaterial|trivial|tiny|nil|zero|minimal|undetectable|imperceptible|nonexistent|non-existent|absent|faint|nothing|none)$/u.test(w.text))) return true;
   // "too faint to find", "too weak to matter": a degree that rules the role out.
   return after.some((w, k) => w.text === 'too' && after[k + 2]?.text === 'to');
@@ -371,7 +427,11 @@ function pseudoCleftFocus(s: ReadSentence, h: LexHit): Thing | undefined {
     // "The physics of absorption, plus the order of events, is what makes the case": a focus of two.
     const subject = s.words.slice(0, k).filter((w) => w.clause === clause).map((w) => w.text);
     if (subject.some((w, j) => COORDINATORS.has(w) || (['along', 'together', 'combined'].includes(w) && subject[j + 1] === 'with') || (w === 'as' && subject[j + 1] === 'well'))) return undefined;
+    // "since the warming came first, the gas cannot have been what ended it": the copula's own
+    // subject, past its auxiliaries and negation, is the focus, not a thing of the clause before it.
     const own = s.things.filter((t) => t.last < k && t.kind !== 'pronoun');
+    const near = subjectBefore(s, k);
+    if (near !== undefined) return near;
     return own.find((t) => s.words[t.first]?.clause === clause) ?? own.at(-1);
   }
   for (let k = h.last + 1; k < s.words.length; k += 1) {
@@ -427,6 +487,37 @@ function exclusiveAfterSubject(s: ReadSentence, i: number, subject: Thing | unde
   return s.of('exclusive').some((e) => restricted(e) && !orderWithObject(e));
 }
 
+/**
+ * "a consequence and nothing more", "a by-product of the warming, nothing more", "an effect, full
+ * stop": a restriction that closes the noun's clause after it restricts the part the noun names,
+ * as "merely" before it does. Only words of the noun's own "of" phrase may stand between.
+ */
+function restrictionAfter(s: ReadSentence, h: LexHit): boolean {
+  const clause = s.words[h.first]?.clause;
+  return s.of('exclusive').some((e) => {
+    if (e.first <= h.last || e.first - h.last > 8 || s.words[e.first]?.clause !== clause) return false;
+    // The restriction ends its clause: nothing of its own clause follows ("nothing more was added" is no restriction of the noun).
+    const next = s.words[e.last + 1];
+    if (next !== undefined && next.segment === s.words[e.last]?.segment && next.clause === clause) return false;
+    const between = s.words.slice(h.last + 1, e.first);
+    return between.every((w, j) => ['of', 'and', 'the', 'a', 'an', 'its', 'it', 'that', 'this'].includes(w.text) || s.things.some((t) => t.first <= h.last + 1 + j && h.last + 1 + j <= t.last));
+  });
+}
+
+/** A contrast just before a restricted part noun: "rather than just", "instead of a mere", "not merely". */
+function restrictionSetAside(s: ReadSentence, i: number): boolean {
+  for (let k = i - 1; k >= Math.max(0, i - 4); k -= 1) {
+    const w = s.words[k]?.text ?? '';
+    const before = s.words[k - 1]?.text ?? '';
+    if (w === 'not' || (w === 'than' && before === 'rather') || (w === 'of' && before === 'instead')) return s.words.slice(k + 1, i).some((x) => RESTRICTORS.has(x.text));
+    if (!RESTRICTORS.has(w) && !['a', 'an', 'the'].includes(w)) return false;
+  }
+  return false;
+}
+
+/** Words that restrict a part to nothing more ("just an effect", "a mere passenger"). */
+const RESTRICTORS = new Set(['just', 'merely', 'mere', 'only', 'simply', 'purely']);
+
 function hasExclusiveBefore(s: ReadSentence, i: number, window: number): boolean {
   return s.of('exclusive').some((e) => e.last < i && i - e.last <= window && s.words[e.first]?.segment === s.words[i]?.segment);
 }
@@ -475,17 +566,22 @@ const LINKING = new Set([...COPULAS, 'prove', 'proves', 'proved', 'proven', 'see
  * "CO2 rose enough to warm..." has no copula and is a degree.
  */
 function isSufficiency(s: ReadSentence, h: LexHit): boolean {
+  return linkingVerbOf(s, h) !== undefined;
+}
+
+/** The copula or linking verb a sufficiency predicate stands after, in its clause; undefined when it is a degree. */
+function linkingVerbOf(s: ReadSentence, h: LexHit): number | undefined {
   const clause = s.words[h.first]?.clause;
   for (let k = h.first - 1; k >= Math.max(0, h.first - 6); k -= 1) {
     const w = s.words[k];
-    if (w === undefined || w.clause !== clause) return false;
-    if (LINKING.has(w.text)) return true;
+    if (w === undefined || w.clause !== clause) return undefined;
+    if (LINKING.has(w.text)) return k;
     // "it is buried deep enough to seal": a participle between makes "enough" a degree of that verb.
-    if (/(?:ed|en)$/u.test(w.text) && w.text.length > 4) return false;
+    if (/(?:ed|en)$/u.test(w.text) && w.text.length > 4) return undefined;
     // A thing between the copula and the predicate is its subject ("was the orbit enough?" aside): stop at it.
-    if (s.things.some((t) => t.last === k)) return false;
+    if (s.things.some((t) => t.last === k)) return undefined;
   }
-  return false;
+  return undefined;
 }
 
 /** A sufficiency predicate between the agent and cause word `h` ("the orbit was enough to end..."), in its clause. */

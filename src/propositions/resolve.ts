@@ -10,7 +10,10 @@ export function kindOf(s: ReadSentence, thing: Thing | undefined, previous?: Rea
   if (thing.kind !== 'pronoun') return thing.kind;
   const segment = s.words[thing.first]?.segment ?? 0;
   // Kinds the pronoun cannot stand for here are passed over when the segment names another thing.
-  const able = (t: Thing) => passOver === undefined || !passOver.has(t.kind) || !s.things.some((o) => o.kind !== 'pronoun' && !passOver.has(o.kind) && o.first < thing.first);
+  // "Is CO2 a cause or an effect? In the ice, it is clearly an effect.": the sentence before may name the other thing.
+  const other = (o: Thing) => o.kind !== 'pronoun' && passOver !== undefined && !passOver.has(o.kind);
+  const elsewhere = s.things.some((o) => other(o) && o.first < thing.first) || (previous?.things.some(other) ?? false);
+  const able = (t: Thing) => passOver === undefined || !passOver.has(t.kind) || !elsewhere;
   for (let seg = segment; seg >= 0; seg -= 1) {
     // The subject, not a thing in a phrase before it ("At the start of the deglaciation CO2 ...").
     const candidates = s.things.filter((t) => t.kind !== 'pronoun' && t.first < thing.first && s.words[t.first]?.segment === seg && able(t));
@@ -57,8 +60,12 @@ export function thingAfter(s: ReadSentence, i: number, window = 8): Thing | unde
   };
   // "CO2 drives, and temperature never pushes CO2": the clause the new subject opens holds the rest,
   // so nothing past that subject is this word's object either.
+  // "explains the whole thing and CO2 is just along for the ride": a thing after "and" with an
+  // auxiliary or copula after it is the subject of a clause of its own.
+  const opensClause = (t: Thing) => JOINING_WORDS.has(s.words[t.first - 1]?.text ?? '') && AUXILIARY_VERBS.has(s.words[t.last + 1]?.text ?? '');
   for (const t of s.things) {
     if (t.first <= i || t.first - i > window || s.words[t.first]?.clause !== clause) continue;
+    if (opensClause(t)) return undefined;
     if (t.kind === 'pronoun') {
       if (s.words[t.first]?.segment === segment) return t;
       continue;
@@ -80,6 +87,9 @@ export function clauseSubject(s: ReadSentence, i: number): Thing | undefined {
   return before.find((t) => t.kind !== 'pronoun') ?? opener;
 }
 
+const JOINING_WORDS = new Set(['and', 'but', 'while', 'whereas', 'yet']);
+const AUXILIARY_VERBS = new Set(['is', 'was', 'are', 'were', 'has', 'had', 'have', 'does', 'did', 'do', 'can', 'could', 'will', 'would', 'may', 'might', 'must', 'should']);
+
 /** Words a subject search steps over on its way back from a verb. */
 const SKIP = /^(?:the|a|an|only|merely|just|simply|also|then|alone|itself|themselves|solely|really|actually|clearly|probably|certainly|surely|had|has|have|was|were|is|are|be|been|did|does|do|can|could|will|would|may|might|must|should|not|never|first|turn|always|ever|indeed|largely|mostly|partly|mainly|chiefly|directly|helped|help|helps|to|all|nothing|else|in|itself|once|later|again|still|further|now|eventually|ultimately|finally|too|far|very)$/u;
 export const PREPOSITIONS = new Set(['of', 'in', 'after', 'before', 'behind', 'from', 'with', 'than', 'like', 'by', 'on', 'at', 'to', 'into', 'over', 'during', 'about', 'for']);
@@ -94,7 +104,9 @@ export function subjectBefore(s: ReadSentence, i: number): Thing | undefined {
   const segment = s.words[i]?.segment;
   // "temperature started climbing before CO2": verbs of change and of starting stand between.
   const changeVerbs = [...s.of('changes'), ...s.of('causes', 'start')];
-  const stepOver = (k: number): boolean => SKIP.test(s.words[k]?.text ?? '') || changeVerbs.some((h) => h.first <= k && k <= h.last && !s.things.some((t) => t.first <= k && k <= t.last));
+  // "CO2 obviously wasn't doing any of the warming": an adverb in -ly stands between as "clearly" does.
+  const adverb = (k: number): boolean => /^\p{L}{3,}ly$/u.test(s.words[k]?.text ?? '') && !s.things.some((t) => t.first <= k && k <= t.last);
+  const stepOver = (k: number): boolean => SKIP.test(s.words[k]?.text ?? '') || adverb(k) || changeVerbs.some((h) => h.first <= k && k <= h.last && !s.things.some((t) => t.first <= k && k <= t.last));
   for (let k = i - 1; k >= 0 && s.words[k]?.segment === segment; k -= 1) {
     const thing = s.things.find((t) => t.last === k);
     if (thing !== undefined) {

@@ -120,7 +120,8 @@ export function readSentence(text: string, lexicon: CompiledLexicon): ReadSenten
     if (copula?.[1] === undefined) words.push({ ...word, text });
     else words.push({ ...word, text: copula[1], end: token.start + copula[1].length }, { ...word, text: 'is', start: token.start + copula[1].length });
   }
-  const hits = lexicon.find(words.map((w) => w.text));
+  // "how on earth could it...": a place after a question word is an intensifier, no region.
+  const hits = lexicon.find(words.map((w) => w.text)).filter((h) => h.cls !== 'regions' || !afterQuestionWord(words, h));
   const of = (cls: string, key?: string) => hits.filter((h) => h.cls === cls && (key === undefined || h.key === key));
   const inside = (i: number, cls: string, key?: string) => of(cls, key).some((h) => h.first <= i && i <= h.last);
   const question = /\?\s*["”’)]*\s*$/u.test(text);
@@ -153,6 +154,14 @@ function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
     }
   });
   return things.sort((a, b) => a.first - b.first || b.last - a.last).filter((t, k, all) => k === 0 || t.first > (all[k - 1] as Thing).last);
+}
+
+const QUESTION_WORDS = new Set(['how', 'what', 'why', 'who', 'where', 'when', 'which', 'whatever', 'however']);
+
+/** "how on earth", "why in the world": a place after a question word is an intensifier, no region. */
+function afterQuestionWord(words: readonly Word[], h: LexHit): boolean {
+  const k = ['on', 'in'].includes(words[h.first - 1]?.text ?? '') ? h.first - 1 : words[h.first - 1]?.text === 'the' && words[h.first - 2]?.text === 'in' ? h.first - 2 : -1;
+  return k > 0 && QUESTION_WORDS.has(words[k - 1]?.text ?? '');
 }
 
 /** True when region hit `h` of `s` only owns the entity beside it ("Earth's orbit", "the tilt of the Earth"). */
@@ -218,6 +227,40 @@ function tooToVerb(s: ReadSentence, k: number, i: number): boolean {
   return false;
 }
 
+/** Words that may stand between a contrast and the word it sets aside ("rather than a real cause"); "rather than just an effect" sets aside only the "just". */
+const ASIDE_FILLERS = new Set(['a', 'an', 'the', 'any', 'its', 'their', 'real', 'true', 'main', 'primary', 'direct']);
+
+/**
+ * "rather than" or "instead of" at word `k` (its last word) sets aside word `i`: only articles and
+ * restricting words stand between, no thing.
+ */
+function setAside(s: ReadSentence, k: number, i: number): boolean {
+  const w = s.words[k]?.text;
+  const pair = (w === 'than' && s.words[k - 1]?.text === 'rather') || (w === 'of' && s.words[k - 1]?.text === 'instead');
+  if (!pair || i - k > 4) return false;
+  for (let j = k + 1; j < i; j += 1) {
+    if (!ASIDE_FILLERS.has(s.words[j]?.text ?? '') || s.things.some((t) => t.first <= j && j <= t.last)) return false;
+  }
+  // Only a part in a cause is set aside so: "releases CO2 rather than absorbing it" states one uptake, read by the relation reader.
+  return !s.things.some((t) => t.first <= i && i <= t.last) && s.inside(i, 'causes');
+}
+
+/**
+ * "turned up too late to the party to have done any of the heating": "too" and its adjective, with a
+ * phrase of their own between them and the infinitive of word `i`, deny the infinitive as "too late to
+ * have done" does, from farther than the denial window reaches (within the segment, at most ten words back).
+ */
+function farTooTo(s: ReadSentence, i: number, window: number): boolean {
+  const inf = s.words[i - 1]?.text === 'to' ? i - 1 : s.words[i - 1]?.text === 'have' && s.words[i - 2]?.text === 'to' ? i - 2 : -1;
+  if (inf < 0) return false;
+  const segment = s.words[i]?.segment;
+  for (let k = i - window - 1; k >= Math.max(0, i - 10); k -= 1) {
+    if (s.words[k]?.segment !== segment) return false;
+    if (s.words[k]?.text === 'too' && s.words[k + 2]?.text === 'to') return true;
+  }
+  return false;
+}
+
 /** Verbs that deny their object ("rules out CO2 as a driver"). */
 export const DENIALS = new Set(['rule', 'rules', 'ruled', 'ruling', 'exclude', 'excludes', 'excluded', 'deny', 'denies', 'denied', 'disprove', 'disproves', 'disproved', 'refute', 'refutes', 'refuted', 'dismiss', 'dismisses', 'dismissed', 'exonerate', 'exonerates', 'exonerated', 'acquit', 'acquits', 'acquitted', 'eliminate', 'eliminates', 'eliminated', 'eliminating', 'discount', 'discounts', 'discounted', 'strike', 'strikes', 'struck', 'cross', 'crosses', 'crossed']);
 /** Denials that need the particle after them ("struck off the list", "crossed off"). */
@@ -229,7 +272,7 @@ const WITH_OFF = new Set(['strike', 'strikes', 'struck', 'cross', 'crosses', 'cr
  * "ruled out" counts through its verb; "not only" is no denial.
  */
 export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
-  let count = 0;
+  let count = farTooTo(s, i, window) ? 1 : 0;
   const clause = s.words[i]?.clause;
   // "struck off the list of suspects for what melted...": a phrasal denial reaches past its own object.
   // A phrasal denial counted past the window brings the words that govern it ("cannot be struck off").
@@ -256,6 +299,10 @@ export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
     else if (DENIALS.has(w.text) && (w.text.startsWith('rul') ? after === 'out' : WITH_OFF.has(w.text) ? after === 'off' : true)) count += 1;
     // "so much for CO2 causing the warming": a dismissal.
     else if (w.text === 'much' && s.words[k - 1]?.text === 'so' && after === 'for') count += 1;
+    // "an effect of the warming rather than a cause of it", "instead of driving it": the contrast
+    // denies the word it stands just before (a thing between is what it sets aside: "temperature
+    // rather than CO2 drove it").
+    else if (setAside(s, k, i)) count += 1;
   }
   return count;
 }

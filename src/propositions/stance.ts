@@ -124,7 +124,7 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   };
   const how = s.words.some((w, i) => {
     const at = opens(i);
-    return at >= 0 && WH.has(s.words[at]?.text ?? '') && AUX.has(s.words[at + 1]?.text ?? '');
+    return at >= 0 && WH.has(s.words[at]?.text ?? '') && AUX.has(s.words[pastIntensifier(s, at + 1)]?.text ?? '');
   });
   const negative = AUX.has(first) && s.words[1]?.text === 'not';
   // "X, so how can you trust it?": a question after a statement leaves the statement asserted.
@@ -135,6 +135,15 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   const premise = start > 2 && !WH.has(first) && !AUX.has(first) ? { questionFrom: s.words[start]?.start ?? 0 } : {};
   if ((how || negative) && !answeredNext) return { ...make('rhetorical', how), ...premise };
   return { ...make('asked'), ...premise };
+}
+
+/** "how on earth could...", "why in the world would...", "how ever can...": the word past an intensifier after a question word. */
+function pastIntensifier(s: ReadSentence, i: number): number {
+  const at = (k: number) => s.words[k]?.text ?? '';
+  if (at(i) === 'on' && at(i + 1) === 'earth') return i + 2;
+  if (at(i) === 'in' && at(i + 1) === 'the' && at(i + 2) === 'world') return i + 3;
+  if (at(i) === 'ever') return i + 1;
+  return i;
 }
 
 /** A speaker's label that opens an utterance: "MO:", "[18:21] Jess:", "@lin", "↳ @lin:", "GWEN (front row):". */

@@ -49,7 +49,9 @@ function detect({ index, own, read }: DetectInput): Cue[] {
   if ((sameVoice(index - 1) && loopAt(index - 1)) || (sameVoice(index + 1) && loopAt(index + 1))) return [];
   const frame = framedInWords(here.s, read(index - 1)?.s);
   if (frame !== undefined) return [frame];
-  const answer = answersEitherOr(read(index - 1), here.s.text);
+  // The answer's own propositions take one side only: "The evidence points to passenger."
+  const asserted = new Set(here.props.causes.filter((c) => c.polarity === 'asserted' && c.role !== 'start').map(direction).filter((d) => d !== undefined));
+  const answer = answersEitherOr(read(index - 1), here.s.text, asserted.size === 1);
   if (answer) return [{ start: 0, end: here.s.text.length }];
   // "it was warming that moved CO2, not CO2 that moved temperature": both directions set against
   // each other in one sentence, one set aside.
@@ -102,11 +104,16 @@ function framedInWords(s: ReadSentence, previous: ReadSentence | undefined): Cue
   return { start: s.words[frame.first]?.start ?? 0, end };
 }
 
-/** A question that sets the two directions against each other ("...or did temperature drive CO2?"), answered by picking one. */
-function answersEitherOr(question: ReturnType<DetectInput['read']>, text: string): boolean {
+/**
+ * A question that sets the two directions against each other ("...or did temperature drive CO2?"),
+ * answered by picking one: in words ("the latter") or by asserting causes of one direction only
+ * (`oneSide`: "In the ice, it is clearly an effect.").
+ */
+function answersEitherOr(question: ReturnType<DetectInput['read']>, text: string, oneSide: boolean): boolean {
   if (question === undefined || !question.s.question || !question.s.words.some((w) => w.text === 'or')) return false;
   const both = question.props.causes.some(isCo2OnWarming) && question.props.causes.some(isWarmingOnCo2);
   if (!both) return false;
+  if (oneSide) return true;
   // "The cores give a clear answer: temperature." picks one side, as "the latter" does.
   const short = text.split(/\s+/u).length <= 12 && /\b(?:temperature|warming|co2|co₂|carbon dioxide)\b/iu.test(text) && !/\b(?:both|each|feedback|loop|and)\b/iu.test(text);
   return short || /\b(?:the (?:first|second|former|latter)|the one|only one)\b/iu.test(text);

@@ -12,12 +12,17 @@
  */
 import type { ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
+import { isBareFragment } from './reading.js';
 import { isCo2OnWarming, isTemperatureFirst, opensWithInference } from './queries.js';
 
 function detect({ index, read }: DetectInput): Cue[] {
   const here = read(index);
   if (here === undefined) return [];
-  const before = index > 0 && opensWithInference(here.s) ? read(index - 1) : undefined;
+  // "CO2 goes up after temperature. Always has. So it can't be the driver.": the premise may stand
+  // past a fragment that names nothing.
+  const previous = read(index - 1);
+  const premise = previous !== undefined && index > 1 && isBareFragment(previous.s) ? read(index - 2) : previous;
+  const before = index > 0 && opensWithInference(here.s) ? premise : undefined;
   const ordered = here.props.orders.some(isTemperatureFirst) || (before?.props.orders.some(isTemperatureFirst) ?? false);
   // "Something that turns up after the fire has started cannot be what lit it.": the lag put as a
   // maxim about latecomers, after a sentence that puts temperature first.

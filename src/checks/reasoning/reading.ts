@@ -67,10 +67,29 @@ export function paragraphReader(paragraph: readonly string[], packs: LoadedPacks
     const earlier = [sentenceAt(i - 2), sentenceAt(i - 3)].filter((e): e is ReadSentence => e !== undefined);
     // The block before sets the scene only for the first sentences, all of which `earlier` sees.
     const scene = i <= 3 ? context.scene : undefined;
-    const reading = { s, stance, props: readPropositions(s, sentenceAt(i - 1), stance, earlier, scene) };
+    const reading = { s, stance, props: readPropositions(s, antecedentSentence(sentenceAt, i), stance, earlier, scene) };
     readings.set(i, reading);
     return reading;
   };
   cache.set(paragraph, { packs, read });
   return read;
+}
+
+/** Words of a fragment that names nothing and may stand between a sentence and what it refers back to. */
+const FRAGMENT_WORDS = 6;
+
+/**
+ * The sentence a pronoun or a conclusion of sentence `i` reads back to: the one before, or the one
+ * before that when the one between is a short fragment that names nothing ("Q12: was CO2 a cause? A:
+ * False. It was an effect, not a cause."; "CO2 went up after temperature. Always has. So ...").
+ */
+export function antecedentSentence(sentenceAt: (i: number) => ReadSentence | undefined, i: number): ReadSentence | undefined {
+  const previous = i > 0 ? sentenceAt(i - 1) : undefined;
+  if (previous === undefined || i < 2 || !isBareFragment(previous)) return previous;
+  return sentenceAt(i - 2) ?? previous;
+}
+
+/** A short sentence that names no thing: "False.", "Always has.", "Exactly." */
+export function isBareFragment(s: ReadSentence): boolean {
+  return s.words.length > 0 && s.words.length <= FRAGMENT_WORDS && s.things.length === 0 && s.hits.every((h) => h.cls !== 'entities' && h.cls !== 'regions' && h.cls !== 'order');
 }
