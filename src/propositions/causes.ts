@@ -500,9 +500,13 @@ function restrictionAfter(s: ReadSentence, h: LexHit): boolean {
     const next = s.words[e.last + 1];
     if (next !== undefined && next.segment === s.words[e.last]?.segment && next.clause === clause) return false;
     const between = s.words.slice(h.last + 1, e.first);
-    return between.every((w, j) => ['of', 'and', 'the', 'a', 'an', 'its', 'it', 'that', 'this'].includes(w.text) || s.things.some((t) => t.first <= h.last + 1 + j && h.last + 1 + j <= t.last));
+    // "a consequence of the deglacial warming and nothing else": the noun's own "of" phrase, with no verb of its own.
+    if (between[0]?.text === 'of') return between.length <= 7 && between.every((w) => !AUXILIARY.has(w.text));
+    return between.every((w) => ['and', 'the', 'a', 'an'].includes(w.text));
   });
 }
+
+const AUXILIARY = new Set(['is', 'was', 'are', 'were', 'be', 'been', 'has', 'had', 'have', 'does', 'did', 'do', 'can', 'could', 'will', 'would', 'may', 'might', 'must', 'should']);
 
 /** A contrast just before a restricted part noun: "rather than just", "instead of a mere", "not merely". */
 function restrictionSetAside(s: ReadSentence, i: number): boolean {

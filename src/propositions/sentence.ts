@@ -148,8 +148,10 @@ function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
       things.push({ kind: 'temperature', region: h.key, first: h.first, last: h.last });
     }
   }
+  // "The orbit wobbles; that is the whole story": a "that" opening its segment before a copula stands for what came before.
+  const demonstrative = (i: number) => i === 0 || (words[i - 1]?.segment !== words[i]?.segment && ['is', 'was'].includes(words[i + 1]?.text ?? ''));
   words.forEach((w, i) => {
-    if (PRONOUNS.has(w.text) && !(w.text === 'that' && i > 0) && !things.some((t) => t.first <= i && i <= t.last)) {
+    if (PRONOUNS.has(w.text) && !(w.text === 'that' && !demonstrative(i)) && !things.some((t) => t.first <= i && i <= t.last)) {
       things.push({ kind: 'pronoun', first: i, last: i });
     }
   });
@@ -246,9 +248,10 @@ function setAside(s: ReadSentence, k: number, i: number): boolean {
 }
 
 /**
- * "turned up too late to the party to have done any of the heating": "too" and its adjective, with a
- * phrase of their own between them and the infinitive of word `i`, deny the infinitive as "too late to
- * have done" does, from farther than the denial window reaches (within the segment, at most ten words back).
+ * "turned up too late to the party to have done any of the heating", "too late in the thaw to have
+ * done": "too" and its adjective, with a phrase of their own between them and the infinitive of word
+ * `i`, deny the infinitive as "too late to have done" does, from farther than the denial window
+ * reaches (within the segment, at most ten words back).
  */
 function farTooTo(s: ReadSentence, i: number, window: number): boolean {
   const inf = s.words[i - 1]?.text === 'to' ? i - 1 : s.words[i - 1]?.text === 'have' && s.words[i - 2]?.text === 'to' ? i - 2 : -1;
@@ -256,7 +259,7 @@ function farTooTo(s: ReadSentence, i: number, window: number): boolean {
   const segment = s.words[i]?.segment;
   for (let k = i - window - 1; k >= Math.max(0, i - 10); k -= 1) {
     if (s.words[k]?.segment !== segment) return false;
-    if (s.words[k]?.text === 'too' && s.words[k + 2]?.text === 'to') return true;
+    if (s.words[k]?.text === 'too' && k + 1 < inf) return true;
   }
   return false;
 }
