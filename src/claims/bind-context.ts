@@ -29,6 +29,8 @@ import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
 /** The baseline of a comparison: "colder than in pre-industrial times", "40 metres below today's". */
 const BASELINE = /(?:^|[^\p{L}])(?:than|below|above|beneath)(?:\s+[\p{L}-]+){0,2}\s*$/iu;
+/** "than a very long human life of": a comparison's baseline, a noun phrase of its own, right before a figure. */
+const IN_BASELINE_PHRASE = /(?:^|[^\p{L}])than\s+(?:an?|the|one|some|any|your|our|their|his|her|its)\s+[^.;:!?]{0,40}?\bof\s*$/iu;
 /** What may stand between a qualifier and the subject it qualifies: "global sea level", "global-mean". */
 const QUALIFIES = /^[\s-]*$/u;
 
@@ -134,6 +136,9 @@ export function bindFromContext(
   frame?: OwnFrame,
 ): string | 'ambiguous' | undefined {
   if (!mayReferBack(sentence, packs, frame?.context)) return undefined;
+  // "That's 800,000 years, about 8,000 times longer than a human life of 100 years": a figure in the
+  // noun phrase a comparison holds up as its baseline measures that phrase's own head, not the subject before.
+  if (IN_BASELINE_PHRASE.test(sentence.slice(Math.max(0, q.start - 60), q.start))) return undefined;
   // "The ice goes back 800,000 years, and over that entire span CO2 stayed between 170 and 300 ppm":
   // a sentence that states its own stretch of time takes no date ("in 2019") from the one before.
   const dated = (id: string): boolean => frame !== undefined && (context.get(id) ?? []).some(([start, end]) => YEAR.test(frame.context.slice(start, end)));

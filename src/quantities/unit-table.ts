@@ -32,6 +32,14 @@ const u = (id: string, dimension: Dimension, factor: number, display: string, fo
 });
 
 const BP = String.raw`(?:BP|B\.P\.)`;
+/**
+ * The words that count an age back from now: "ago", and as people also write it, "back" ("fifty
+ * thousand years back"; not "back then", "back in", which date a time and speak of no span),
+ * "before present", "before now", "before today", "in the past" (common practice); for years,
+ * millennia and centuries. After kyr or Ma only "ago" and "before present" make an age ("reaches
+ * 420 kyr back" stays the span it was read as).
+ */
+const AGO_WORDS = '(?:ago|back(?! (?:then|in(?! (?:time|the past)\\b)|when|to|from|at|during|before|after|and|or|of|by|up|down|out|over)\\b)|before (?:present|now|today)|in the past)';
 const AGO = words('(?:ago|before present)');
 /**
  * A bare "degrees" is a temperature (read as Celsius, the science writer's default: common practice)
@@ -65,10 +73,10 @@ const BASE_UNITS: UnitDef[] = [
     String.raw`(?:[cC]al(?:ibrated)?\.?[\s\u00A0]+)?(?:${YEAR_WORD}[\s\u00A0]+)?${BP}`,
     words('(?:years?|yrs?) before present'),
   ]),
-  u('yr ago', 'age', 1, 'years ago', [words('(?:years?|yrs?) ago')]),
+  u('yr ago', 'age', 1, 'years ago', [words(`(?:years?|yrs?) ${AGO_WORDS}`)]),
   // "fifty millennia ago", "twelve centuries ago": an age counted in longer units.
-  u('millennia ago', 'age', 1e3, 'millennia ago', [words('(?:millennium|millennia|millenniums) ago')]),
-  u('centuries ago', 'age', 100, 'centuries ago', [words('(?:century|centuries) ago')]),
+  u('millennia ago', 'age', 1e3, 'millennia ago', [words(`(?:millennium|millennia|millenniums) ${AGO_WORDS}`)]),
+  u('centuries ago', 'age', 100, 'centuries ago', [words(`(?:century|centuries) ${AGO_WORDS}`)]),
   u('ka', 'age', 1e3, 'ka', [String.raw`(?:[cC]al[\s\u00A0]+)?(?:ka|kyrs?|ky)[\s\u00A0]+(?:${BP}|${AGO})`, 'ka']),
   u('Ma', 'age', 1e6, 'Ma', [String.raw`(?:Ma|Myrs?|My)[\s\u00A0]+(?:${BP}|${AGO})`, 'Ma']),
   u('yr b2k', 'age', 1, 'years b2k', [
