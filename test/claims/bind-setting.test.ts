@@ -110,3 +110,16 @@ describe('a default setting declared by a value', () => {
     expect(await readingOf('The last glacial period set in slowly. In Antarctica, CO2 lagged temperature by about 5,000 years.', '5,000 years')).toEqual({ value: '-', flagged: false });
   });
 });
+
+// The Younger Dryas lasted about 1,100-1,300 years (Rasmussen et al. 2006, JGR 111:D06102; Rasmussen
+// et al. 2014, QSR 106:14-28, as the pack's younger-dryas-duration cites them). "Relapse" is a noun of
+// the kind `period` (lexicon `kinds`): "that relapse" takes up the latest period named before it.
+describe('a relapse is a period', () => {
+  it('takes up the period named before it', async () => {
+    expect(await readingOf('The Younger Dryas brought the cold back to Europe. That relapse lasted about 3,000 years.', '3,000 years')).toEqual({ value: 'younger-dryas-duration', flagged: true });
+    expect(await readingOf('The Younger Dryas brought the cold back to Europe. That cold relapse lasted about 1,200 years.', '1,200 years')).toEqual({ value: 'younger-dryas-duration', flagged: false });
+  });
+  it('takes up no period when none is named', async () => {
+    expect(await readingOf('The ice cores tell the story of the air. That relapse lasted about 3,000 years.', '3,000 years')).toEqual({ value: '-', flagged: false });
+  });
+});
