@@ -144,7 +144,6 @@ export function bindFromContext(
   const dated = (id: string): boolean => frame !== undefined && (context.get(id) ?? []).some(([start, end]) => YEAR.test(frame.context.slice(start, end)));
   const takesDate = (r: ReferenceValue): boolean => r.binding.all.some((g) => !g.some((id) => view.has(id)) && g.every((id) => !context.has(id) || dated(id)));
   const own = subjectTerms(sentence, vetoes, packs, q.dimension);
-  const serves = (r: ReferenceValue, id: string): boolean => r.binding.all.some((g) => g.includes(id));
   const contextText = frame?.context ?? '';
   const attribute = (id: string): boolean => (context.get(id) ?? []).some(([start, end]) => !namesSubject(contextText.slice(start, end), packs));
   const borrowsAttribute = (r: ReferenceValue): boolean => r.binding.all.some((g) => !g.some((id) => view.has(id)) && g.some((id) => attribute(id)));
@@ -153,7 +152,7 @@ export function bindFromContext(
     .filter((r) => !r.binding.none.some((id) => vetoes.has(id)))
     // "The core was drilled through the early 2000s until it reached 3,623 metres": a date is the
     // time frame of what the sentence tells, not a subject of its own, unless the value is itself dated.
-    .filter((r) => own.every(([id, spans]) => serves(r, id) || (isDate(id, packs) && !isDated(r, packs)) || spans.every((span) => qualifiesServing(sentence, span, view, (other) => serves(r, other)) || withinServing(span, view, (other) => serves(r, other)))))
+    .filter((r) => ownSubjectsServe(sentence, r, view, own, packs))
     .filter((r) => r.binding.all.every((g) => g.some((id) => view.has(id) || context.has(id))))
     // What a value takes from the sentence before besides a subject (an attribute such as "the
     // longest") comes with that sentence's vetoes: "The longest record comes from Dome C. Vostok got
@@ -176,6 +175,21 @@ export function bindFromContext(
   const [best, next] = scored;
   if (best === undefined) return undefined;
   return next !== undefined && next.score === best.score ? 'ambiguous' : best.r.id;
+}
+
+/**
+ * Whether every subject the sentence names of its own (`own`, from `ownSubjects`) serves the value:
+ * one of its groups holds it, it is a date and the value is of no time, or it qualifies a term that
+ * serves or is a word of one. A sentence that names another subject keeps its own.
+ */
+export function ownSubjectsServe(sentence: string, r: ReferenceValue, view: TermHits, own: [string, [number, number][]][], packs: LoadedPacks): boolean {
+  const serves = (id: string): boolean => r.binding.all.some((g) => g.includes(id));
+  return own.every(([id, spans]) => serves(id) || (isDate(id, packs) && !isDated(r, packs)) || spans.every((span) => qualifiesServing(sentence, span, view, serves) || withinServing(span, view, serves)));
+}
+
+/** The terms of its own sentence that name a subject a quantity could be about (see subjectTerms). */
+export function ownSubjects(sentence: string, vetoes: TermHits, packs: LoadedPacks, dimension: Quantity['dimension']): [string, [number, number][]][] {
+  return subjectTerms(sentence, vetoes, packs, dimension);
 }
 
 /**

@@ -25,6 +25,7 @@ import { withStateEvents } from './bind-events.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { resolveBackReferences, type Resolution } from './back-reference.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
+import { bindFromSetting } from './bind-setting.js';
 import { comparedInRelativeClauses, withoutOthers } from './bind-others.js';
 import { partsOfWholes, wholesApart, withoutWholes } from './bind-part.js';
 import { addEarlierTime, framesYield } from './bind-time.js';
@@ -535,6 +536,15 @@ export function bindQuantities(
         const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, subjectBefore(context), { context, ownTime });
         if (found !== undefined) decided.set(i, found);
       }
+    }
+    // "At the end of the last ice age, Antarctica warmed first. In the Antarctic cores CO2 trails
+    // temperature by some 6,000 years": a period or region the passage set fills the value's setting.
+    if (best === undefined && !decided.has(i) && q.statedUnit !== 'CE' && !parts.some((p) => p.index === i) && history.length > 0) {
+      const ownTime = quantities.some((o, j) => j !== i && (o.dimension === 'age' || o.dimension === 'duration') && o.statedUnit !== 'CE');
+      const others = quantities.filter((_, j) => j !== i);
+      const referredTo = context !== undefined && mayReferBack(sentence, packs, context) ? context : undefined;
+      const set = bindFromSetting(sentence, q, role, view, vetoes, packs, breaks, { hits, history, ownTime, others, ...(referredTo === undefined ? {} : { referredTo }) });
+      if (set !== undefined) decided.set(i, set);
     }
     // "EPICA Dome C reached 3,623 metres": the subject is named and the unit says what is measured;
     // not after a stretch of it ("the lowest 200 m of Dome C hold 150,000 years": the stretch's years).

@@ -24,7 +24,7 @@ export interface RawReferenceValue {
   central?: number;
   unit: string;
   also_as?: Dimension[];
-  binds_when: { all: string[][]; none?: string[]; role?: 'level' | 'change' | 'range' | 'any'; implied?: boolean };
+  binds_when: { all: string[][]; none?: string[]; role?: 'level' | 'change' | 'range' | 'any'; implied?: boolean; default_setting?: string[] };
   correction: string;
   levels?: Partial<Record<Level, number>>;
   as_of?: string;

@@ -29,6 +29,7 @@ export function resolveReference(scope: PackScope, raw: RawReferenceValue, path:
   }
   raw.binds_when.all.forEach((group, g) => group.forEach((id, i) => checkTerm(scope, id, at('binds_when', 'all', g, i))));
   (raw.binds_when.none ?? []).forEach((id, i) => checkTerm(scope, id, at('binds_when', 'none', i)));
+  (raw.binds_when.default_setting ?? []).forEach((id, i) => checkTerm(scope, id, at('binds_when', 'default_setting', i)));
   const sources = scope.sourcesAt(raw.sources, at('sources'));
   if (def === undefined || scope.errors.length > before) return undefined;
 
@@ -48,6 +49,7 @@ export function resolveReference(scope: PackScope, raw: RawReferenceValue, path:
       none: raw.binds_when.none ?? [],
       ...(raw.binds_when.role === undefined || raw.binds_when.role === 'any' ? {} : { role: raw.binds_when.role }),
       ...(raw.binds_when.implied === false ? { implied: false as const } : {}),
+      ...(raw.binds_when.default_setting === undefined ? {} : { defaultSetting: raw.binds_when.default_setting }),
     },
     wording: raw.correction,
     levels: raw.levels ?? DEFAULT_LEVELS,

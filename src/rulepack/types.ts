@@ -42,6 +42,11 @@ export interface TermBinding {
    * would imply what it measures, never binds it (claims/bind-implied.ts). Absent: it may.
    */
   implied?: false;
+  /**
+   * Terms a setting group of the value (a period, a region: the lexicon's `settings`) is filled with
+   * when neither the number's sentence nor its passage names a setting of that kind (claims/bind-setting.ts).
+   */
+  defaultSetting?: string[];
 }
 
 /**
