@@ -14,7 +14,7 @@ import { writtenSums } from './arithmetic-equations.js';
 import { perLength } from './arithmetic-per-length.js';
 import { changeShares } from './arithmetic-shares.js';
 import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragraph.js';
-import { changesFromLevels, paceRatiosInParagraph, ratesInParagraph } from './arithmetic-solver.js';
+import { amountsAtPace, changesFromLevels, paceRatiosInParagraph, ratesInParagraph } from './arithmetic-solver.js';
 import { readArithmetic } from './arithmetic-reader/relations.js';
 import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
@@ -288,12 +288,14 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     const found = [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)];
     const paragraph = [...found, ...notYet(found, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
     const levels = [...paragraph, ...notYet(paragraph, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
-    return [...levels, ...notYet(levels, read('arith.change', t, qs, earlier))];
+    const read_ = [...levels, ...notYet(levels, read('arith.change', t, qs, earlier))];
+    return [...read_, ...notYet(read_, amountsAtPace(t, qs, earlier).filter((f) => f.stated.dimension !== 'duration'))];
   } },
   { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...durations(t, qs, p), ...durationsAcross(t, qs, prev)];
     const across = [...found, ...notYet(found, spansAcross(t, qs, prev))];
-    return [...across, ...notYet(across, read('arith.duration', t, qs, earlier))].filter((f) => !isBoundOrVague(t, f.stated));
+    const read_ = [...across, ...notYet(across, read('arith.duration', t, qs, earlier))];
+    return [...read_, ...notYet(read_, amountsAtPace(t, qs, earlier).filter((f) => f.stated.dimension === 'duration'))].filter((f) => !isBoundOrVague(t, f.stated));
   } },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)];

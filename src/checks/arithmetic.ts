@@ -87,5 +87,8 @@ export function checkArithmetic(text: string, quantities: Quantity[], context: r
       });
     }
   }
-  return flags.sort((a, b) => a.start - b.start);
+  // One figure, one flag: a result two rules read ("12,900 take away 11,700 leaves a cold spell of
+  // about 2,200 years" is a written sum and a span of dates) is flagged by the first.
+  const once = flags.filter((f, i) => !flags.slice(0, i).some((g) => g.start === f.start && g.end === f.end));
+  return once.sort((a, b) => a.start - b.start);
 }
