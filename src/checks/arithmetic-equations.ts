@@ -10,8 +10,11 @@ import { toCanonical, writtenInterval as w } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
 import { divide, minus, type Derived } from './arithmetic-derive.js';
 import { WORDS } from './arithmetic-reader/word-classes.js';
+import { disjoint } from './arithmetic-levels.js';
 
 const S = String.raw`[\s\u00A0]`;
+/** Scales a result may carry that its operands leave off ("6.5 thousand", "105k", "2 million"). */
+const SCALES = [1e3, 1e6, 1e9];
 const escape = (x: string): string => x.replace(/[.*+?^${}()|[\]\\/]/gu, '\\$&').replace(/ /gu, `${S}+`);
 const longestFirst = (xs: Iterable<string>): string[] => [...xs].sort((a, b) => b.length - a.length);
 /** The operator between the first two numbers of a written sum, in symbols or words (WORDS.operators). */
@@ -91,6 +94,9 @@ export function writtenSums(text: string, qs: Quantity[]): SumFinding[] {
     if (sum === undefined) continue;
     // Bare operands give the result in the unit it is written in ("265 − 188 = 77 ppm", "9 × 1.8 = 16.2 °F").
     const computed = a.dimension === 'number' && b.dimension === 'number' && c.statedUnit !== '' ? inUnitOf(sum, c) : sum;
+    // "18 minus 11.5 is 6.5 thousand", "420 divided by 4 is 105k": a sum done in thousands (or
+    // millions) whose result carries the scale its operands left off.
+    if (SCALES.some((k) => !disjoint(c, { value: computed.value * k, low: computed.low * k, high: computed.high * k }))) continue;
     out.push({ stated: c, computed, measures: `${a.text} ${op} ${b.text}` });
   }
   return out;

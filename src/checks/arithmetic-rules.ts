@@ -299,7 +299,11 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   } },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)];
-    return [...found, ...notYet(found, ratesInParagraph(t, qs, p, earlier))];
+    const all = [...found, ...notYet(found, ratesInParagraph(t, qs, p, earlier))];
+    // "At 2.4 ppm a year, adding 100 ppm takes about 4 years": a time worked from the pace makes the
+    // pace its premise, not a result of the amount and the time.
+    const premise = amountsAtPace(t, qs, earlier).some((f) => f.stated.dimension === 'duration');
+    return premise ? all.filter((f) => !RATE_OF[f.stated.dimension]) : all;
   } },
   { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)];

@@ -6,6 +6,7 @@
  * src/quantities/interval-rules.ts); correct arithmetic is never flagged.
  */
 import { hasNumeral } from '../quantities/two-numerals.js';
+import { WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 import { correctionFigures, derivedFigures, formatQuantity, hedgeRule, parseQuantities, rewriteQuantity } from '../quantities/index.js';
 import type { FlagDraft, Quantity } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
@@ -36,9 +37,15 @@ export function correctionFor(q: Quantity, value: number, figures = derivedFigur
  */
 function askedBefore(context: readonly string[]): readonly string[] | undefined {
   const last = context.at(-1);
-  if (last === undefined || !/\?[\s"'”’)*_]*$/u.test(last) || hasNumeral(last)) return undefined;
+  if (last === undefined || !/\?[\s"'”’)*_]*$/u.test(last) || hasNumeral(last) || !asksForFigure(last)) return undefined;
   const rest = context.slice(0, -1);
   return rest.length > 0 && rest.some((s) => hasNumeral(s)) ? rest : undefined;
+}
+
+/** True when a question asks for a figure: "how long", "by how much", "what was the average rate?" (word-classes.ts). */
+function asksForFigure(question: string): boolean {
+  const words = wordsIn(question, 0, question.length);
+  return words.some((x, i) => (x.text === 'how' && WORDS.askedMeasures.has(words[i + 1]?.text ?? '')) || WORDS.askedNouns.has(x.text));
 }
 
 /** Words an answer is read with: it states the result the question asked for. */

@@ -96,6 +96,14 @@ const EQUALS = [
   'works out at', 'works out to', 'worked out at', 'worked out to', 'comes out at', 'came out at', 'comes out to', 'is about', 'gets you', 'get you',
 ];
 
+/**
+ * Questions that ask for a result of figures: "how" with the measure asked for ("how long", "by how
+ * much", "how many times"), or a measure noun ("what was the average rate?", "what is the
+ * difference?"). "How did it happen?" and "What are the cycles?" ask for no figure.
+ */
+const ASKED_MEASURES = ['long', 'much', 'many', 'far', 'fast', 'quickly', 'slowly', 'big', 'large', 'high', 'low', 'deep', 'old', 'often', 'steep', 'great', 'wide'];
+const ASKED_NOUNS = ['rate', 'pace', 'speed', 'difference', 'change', 'rise', 'increase', 'drop', 'fall', 'span', 'duration', 'length', 'ratio', 'total', 'sum', 'average', 'mean', 'percentage', 'percent', 'share', 'fraction', 'multiple', 'factor', 'gap'];
+
 /** A set of every form of the words (verb forms and plurals). */
 const formsOf = (words: readonly string[]): Set<string> => new Set(words.flatMap((w) => (w.includes(' ') ? [w] : inflect(w))));
 /** A map of every form to the base word's sign. */
@@ -124,6 +132,8 @@ export const WORDS = {
   yardstick: new Set(YARDSTICK),
   ownTime: new Set(OWN_TIME),
   pace: new Set(PACE_WORDS),
+  askedMeasures: new Set(ASKED_MEASURES),
+  askedNouns: formsOf(ASKED_NOUNS),
   operators: new Map(Object.entries(OPERATORS)),
   equals: EQUALS,
 };

@@ -1,0 +1,98 @@
+import { describe, expect, it } from 'vitest';
+import { checkText } from '../../src/engine.js';
+import { check, flagged } from './arithmetic-at.js';
+
+// Worked sums whose result stands in a sentence of its own, with no word of the subject: the answer
+// under a question, a written operation in words or signs, an amount or a time worked from a pace.
+// Every sum is done by hand (common practice of arithmetic); the sentences are our own inventions.
+
+// The answer under a question that asks for a figure reads on from the figures before the question.
+// 14,600 − 12,400 = 2,200; 24,000 − 17,500 = 6,500; 410 − 290 = 120.
+describe('an answer under a question', () => {
+  it.each([
+    [['The Marrow cold phase ran from about 14,600 to 12,400 years ago.', 'How long did it last?', 'About 3,200 years.'], 'About 3,200 years', 'About 2,200 years'],
+    [['The Brill advance held from 24,000 to 17,500 years ago.', 'How long was that?', 'That is a stretch of 8,500 years.'], '8,500 years', '6,500 years'],
+    [['The Kell record goes from 290 ppm to 410 ppm.', 'By how much did the level change?', 'It rose by some 160 ppm.'], 'some 160 ppm', 'some 120 ppm'],
+  ] as [string[], string, string][])('%j: flags %s', (sentences, text, correction) => {
+    expect(flagged(...sentences)).toEqual([[expect.stringMatching(/^arith\./u), text, correction]]);
+  });
+
+  it.each([
+    ['right answer', ['The Marrow cold phase ran from about 14,600 to 12,400 years ago.', 'How long did it last?', 'About 2,200 years.']],
+    ['right answer, rounded', ['The Marrow cold phase ran from about 14,600 to 12,400 years ago.', 'How long did it last?', 'Roughly two thousand years.']],
+    ['a question that asks for no figure', ['The Marrow cold phase ran from about 14,600 to 12,400 years ago.', 'What are the orbital cycles?', 'Tilt varies over about 41,000 years.']],
+    ['a question with figures of its own', ['The Marrow cold phase ran from about 14,600 to 12,400 years ago.', 'Did it last 2,000 years?', 'Nearer 9,000 years, say some.']],
+  ] as [string, string[]][])('leaves alone: %s', (_why, sentences) => {
+    expect(check(...sentences)).toEqual([]);
+  });
+});
+
+// Operations written in words and signs. 13,400 − 12,100 = 1,300; 90 ÷ 6,000 = 0.015;
+// 4.1 × 0.5 = 2.05; 350 + 25 = 375.
+describe('a written sum in words or signs', () => {
+  it.each([
+    ['13,400 take away 12,100 leaves a cold spell of about 2,300 years.', 'about 2,300 years', 'about 1,300 years'],
+    ['13,400 minus 12,100 comes to 1,700.', '1,700', '1,300'],
+    ['90 ÷ 6,000 ≈ 0.15 ppm per year.', '≈ 0.15 ppm per year', '≈ 0.015 ppm per year'],
+    ['90 divided by 6,000 works out at about 0.15 ppm a year.', 'about 0.15 ppm a year', 'about 0.015 ppm a year'],
+    ['4.1 times 0.5 gives 3.05.', '3.05', '2.05'],
+    ['350 plus 25 makes 395 ppm.', '395 ppm', '375 ppm'],
+  ] as [string, string, string][])('%s: flags %s', (sentence, text, correction) => {
+    expect(flagged(sentence)).toEqual([['arith.change', text, correction]]);
+  });
+
+  it.each([
+    ['13,400 take away 12,100 leaves a cold spell of about 1,300 years.'],
+    ['90 ÷ 6,000 ≈ 0.015 ppm per year.'],
+    ['90 divided by 6,000 works out at about 0.015 ppm a year.'],
+    ['4.1 times 0.5 gives 2.05.'],
+    // A function of a number is no operand: 4.1 × ln(1.5) ≈ 1.7 is read as no sum.
+    ['4.1 × ln(300/200) ≈ 1.7.'],
+    // A sum done in thousands whose result carries the scale: 17 − 12.5 = 4.5 (thousand); 360 ÷ 4 = 90 (k).
+    ['17 minus 12.5 is 4.5 thousand, give or take.'],
+    ['360 divided by 4 is 90k each.'],
+    // Not a sum: a pace told over a time ("90 ppm over 6,000 years").
+    ['The Kell record gained 90 ppm over 6,000 years, which is 0.015 ppm a year.'],
+  ])('leaves alone: %s', (sentence) => {
+    expect(check(sentence)).toEqual([]);
+  });
+});
+
+// rate × time = amount; amount ÷ rate = time. 1.8 × 10 = 18 ppm; 150 ÷ 2.5 = 60 years;
+// 60 ÷ 2 = 30 years.
+describe('an amount or a time worked from a pace', () => {
+  it.each([
+    [['Across the 2000s the level climbed 1.8 ppm a year.', 'Over those ten years that adds up to roughly 30 ppm.'], 'roughly 30 ppm', 'roughly 18 ppm'],
+    [['At 2.5 ppm a year, adding 150 ppm takes about 6 years.'], 'about 6 years', 'about 60 years'],
+    [['We now add about 2 ppm a year, so we would repeat the 60 ppm rise of the thaw in some 3 years.'], 'some 3 years', 'some 30 years'],
+  ] as [string[], string, string][])('%j: flags %s', (sentences, text, correction) => {
+    expect(flagged(...sentences)).toEqual([[expect.stringMatching(/^arith\./u), text, correction]]);
+  });
+
+  it.each([
+    ['right amount', ['Across the 2000s the level climbed 1.8 ppm a year.', 'Over those ten years that adds up to roughly 18 ppm.']],
+    ['right time, rounded', ['At 2.5 ppm a year, adding 150 ppm takes about 60 years.']],
+    ['a level, not an amount', ['The level grew by 2 ppm a year over the 1990s, so after ten years it stood at 370 ppm.']],
+    ['a time of another change', ['The level grows 2.4 ppm a year now, while the thaw added 80 ppm and took some 7,000 years.']],
+  ] as [string, string[]][])('leaves alone: %s', (_why, sentences) => {
+    expect(check(...sentences).filter((f) => f.ruleId === 'arith.change' || f.ruleId === 'arith.duration')).toEqual([]);
+  });
+});
+
+// Through the engine: a sentence with one figure and no word of the subject, in a draft on topic,
+// reaches the arithmetic checks when the sentences before it hold figures.
+describe('which sentences reach the arithmetic checks', () => {
+  const draft = (...lines: string[]) => ['CO2 in Antarctic ice cores tracks the glacial cycles.', '', ...lines].join('\n');
+  it('a one-figure answer under its question', async () => {
+    const result = await checkText(draft('The Marrow cold phase ran from about 14,600 to 12,400 years ago. How long did it last?', 'About 3,200 years.'), { path: 'q.md' });
+    expect(result.flags.map((f) => [f.ruleId, f.span.start.line, f.correction])).toEqual([['arith.duration', 4, 'About 2,200 years']]);
+  });
+  it('the right answer stays clean', async () => {
+    const result = await checkText(draft('The Marrow cold phase ran from about 14,600 to 12,400 years ago. How long did it last?', 'About 2,200 years.'), { path: 'q.md' });
+    expect(result.flags).toEqual([]);
+  });
+  it('a one-figure sentence with no figures before it gets no arithmetic', async () => {
+    const result = await checkText(draft('Nobody knew how long it would last.', 'About 3,200 years, we guessed.'), { path: 'q.md' });
+    expect(result.flags).toEqual([]);
+  });
+});
