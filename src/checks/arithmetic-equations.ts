@@ -96,7 +96,7 @@ export function writtenSums(text: string, qs: Quantity[]): SumFinding[] {
     const computed = a.dimension === 'number' && b.dimension === 'number' && c.statedUnit !== '' ? inUnitOf(sum, c) : sum;
     // "18 minus 11.5 is 6.5 thousand", "420 divided by 4 is 105k": a sum done in thousands (or
     // millions) whose result carries the scale its operands left off.
-    if (SCALES.some((k) => !disjoint(c, { value: computed.value * k, low: computed.low * k, high: computed.high * k }))) continue;
+    if (SCALES.some((k) => !disjoint(c, { low: computed.low * k, high: computed.high * k }))) continue;
     out.push({ stated: c, computed, measures: `${a.text} ${op} ${b.text}` });
   }
   return out;
