@@ -14,7 +14,7 @@ import { writtenSums } from './arithmetic-equations.js';
 import { perLength } from './arithmetic-per-length.js';
 import { changeShares } from './arithmetic-shares.js';
 import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragraph.js';
-import { amountsAtPace, changesFromLevels, paceRatiosInParagraph, ratesInParagraph } from './arithmetic-solver.js';
+import { amountsAtPace, changesFromLevels, paceRatiosInParagraph, paceRatiosInSentence, ratesInParagraph } from './arithmetic-solver.js';
 import { readArithmetic } from './arithmetic-reader/relations.js';
 import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
@@ -312,7 +312,8 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     const compared = [...paragraph, ...notYet(paragraph, comparisonsInParagraph(t, qs, earlier))];
     const paces = [...compared, ...notYet(compared, paceRatiosInParagraph(t, qs, earlier))];
     const levels = [...paces, ...notYet(paces, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
-    return [...levels, ...notYet(levels, read('arith.ratio', t, qs, earlier))];
+    const reader = [...levels, ...notYet(levels, read('arith.ratio', t, qs, earlier))];
+    return [...reader, ...notYet(reader, paceRatiosInSentence(t, qs))];
   } },
 ];
 

@@ -17,7 +17,7 @@
  * when it carries no time of its own ("today", "in 2024", "a year") that would make it another
  * quantity. The correction is the value from the nearest figures.
  */
-import { writtenInterval as w } from '../quantities/index.js';
+import { toCanonical, writtenInterval as w } from '../quantities/index.js';
 import type { Dimension, Quantity } from '../types.js';
 import type { Previous } from './arithmetic-context.js';
 import { disjoint } from './arithmetic-levels.js';
@@ -353,4 +353,36 @@ export function amountsAtPace(text: string, qs: Quantity[], earlier: readonly Pr
     }
   }
   return out;
+}
+
+/**
+ * A multiple of a pace drawn from the two paces just before it in its sentence: "2.4 ppm a year now
+ * versus about 0.012 back then, so roughly twenty times faster" (200); "2.4 a yr now vs 0.013 then
+ * = about 20x faster" (185). A bare figure beside a pace is a pace in its unit (the writer wrote
+ * the unit once); two bare figures are paces in one unit. The multiple must be drawn from them: a
+ * link word ("so", "=", "means", "that is") stands between the second pace and it.
+ */
+export function paceRatiosInSentence(text: string, qs: Quantity[]): SolverFinding[] {
+  const stated = only(qs.filter((q) => isPaceRatio(text, q)));
+  if (stated === undefined) return [];
+  const before = qs.filter((q) => q.end <= stated.start);
+  if (before.length !== 2 || qs.some((q) => q !== stated && q.start >= stated.end && (RATE_OF[q.dimension] !== undefined || q.dimension === 'number'))) return [];
+  const [a, b] = before as [Quantity, Quantity];
+  const rates = before.filter((q) => RATE_OF[q.dimension] !== undefined);
+  if (!before.every((q) => RATE_OF[q.dimension] !== undefined || q.dimension === 'number')) return [];
+  if (rates.length === 2 && a.dimension !== b.dimension) return [];
+  const signed = /[=≈→]/u.test(text.slice(b.end, stated.start)) || stated.hedge === '≈' || stated.hedge === '~';
+  if (!signed && !linkedBetween(text, b.end, stated.start)) return [];
+  // In one unit: each pace in its canonical unit, a bare figure in the unit of the pace beside it.
+  const unit = rates[0];
+  const inUnit = (q: Quantity): Derived => {
+    const d = w(q);
+    if (q.dimension !== 'number' || unit === undefined) return d;
+    const c = (x: number): number => toCanonical(x, unit.statedUnit, unit.dimension);
+    return { value: c(d.value), low: c(d.low), high: c(d.high) };
+  };
+  const r = divide(inUnit(a), inUnit(b));
+  if (r === undefined) return [];
+  const faced = (stated.value < 1) === (r.value < 1) ? r : invert(r);
+  return [{ stated, computed: faced, measures: `the ratio of ${a.text} to ${b.text}` }];
 }

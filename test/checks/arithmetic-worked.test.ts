@@ -79,6 +79,27 @@ describe('an amount or a time worked from a pace', () => {
   });
 });
 
+// A multiple of a pace drawn from two paces before it in its sentence. 1.8 ÷ 0.02 = 90;
+// 3 ppm a year ÷ 2 ppm a century (0.02 ppm a year) = 150; 1.5 ÷ 0.015 = 100.
+describe('a multiple of two paces in one sentence', () => {
+  it.each([
+    ['It is 1.8 ppm a year in the Kell record now against about 0.02 back then, so roughly nine times faster.', 'roughly nine times', 'roughly 90 times'],
+    ['So three ppm a year against two ppm a century means the new climb is about fifteen times faster.', 'about fifteen times', 'about 150 times'],
+    ['1.5 a yr now vs 0.015 then = about 10x faster.', 'about 10x', 'about 100x'],
+  ] as [string, string, string][])('%s: flags %s', (sentence, text, correction) => {
+    expect(flagged(sentence)).toEqual([['arith.ratio', text, correction]]);
+  });
+
+  it.each([
+    ['It is 1.8 ppm a year in the Kell record now against about 0.02 back then, so roughly ninety times faster.'],
+    ['So three ppm a year against two ppm a century means the new climb is about a hundred and fifty times faster.'],
+    // Not drawn from the two paces: no link word between them and the multiple.
+    ['It is 1.8 ppm a year now against 0.02 then; methane rose four times faster.'],
+  ])('leaves alone: %s', (sentence) => {
+    expect(check(sentence).filter((f) => f.ruleId === 'arith.ratio')).toEqual([]);
+  });
+});
+
 // Through the engine: a sentence with one figure and no word of the subject, in a draft on topic,
 // reaches the arithmetic checks when the sentences before it hold figures.
 describe('which sentences reach the arithmetic checks', () => {
