@@ -16,6 +16,7 @@ import { changeShares } from './arithmetic-shares.js';
 import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragraph.js';
 import { amountsAtPace, changesFromLevels, paceRatiosInParagraph, paceRatiosInSentence, ratesInParagraph } from './arithmetic-solver.js';
 import { readArithmetic } from './arithmetic-reader/relations.js';
+import { seriesSpacings } from './arithmetic-counts.js';
 import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
@@ -295,7 +296,8 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     const found = [...durations(t, qs, p), ...durationsAcross(t, qs, prev)];
     const across = [...found, ...notYet(found, spansAcross(t, qs, prev))];
     const read_ = [...across, ...notYet(across, read('arith.duration', t, qs, earlier))];
-    return [...read_, ...notYet(read_, amountsAtPace(t, qs, earlier).filter((f) => f.stated.dimension === 'duration'))].filter((f) => !isBoundOrVague(t, f.stated));
+    const paced = [...read_, ...notYet(read_, amountsAtPace(t, qs, earlier).filter((f) => f.stated.dimension === 'duration'))];
+    return [...paced, ...notYet(paced, seriesSpacings(t, qs, p).filter((f) => f.stated.dimension === 'duration'))].filter((f) => !isBoundOrVague(t, f.stated));
   } },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)];
@@ -313,7 +315,8 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     const paces = [...compared, ...notYet(compared, paceRatiosInParagraph(t, qs, earlier))];
     const levels = [...paces, ...notYet(paces, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
     const reader = [...levels, ...notYet(levels, read('arith.ratio', t, qs, earlier))];
-    return [...reader, ...notYet(reader, paceRatiosInSentence(t, qs))];
+    const paced = [...reader, ...notYet(reader, paceRatiosInSentence(t, qs))];
+    return [...paced, ...notYet(paced, seriesSpacings(t, qs, p).filter((f) => f.stated.dimension !== 'duration'))];
   } },
 ];
 

@@ -100,6 +100,29 @@ describe('a multiple of two paces in one sentence', () => {
   });
 });
 
+// A series of equal steps: span = count × spacing. 600,000 ÷ 6 = 100,000; 500k ÷ 100k = 5;
+// (16,000 − 12,000) ÷ 40 = 100; 300,000 ÷ 3 = 100,000 (100k).
+describe('a count or a spacing of a series worked from its span', () => {
+  it.each([
+    ['Six cycles in 600,000 years works out to one cycle every 20,000 years.', '20,000 years', '100,000 years'],
+    ['500k yrs of ice ÷ ~100k-yr cycles = about 9 cycles in the Orrin core.', 'about 9 cycles', 'about 5 cycles'],
+    ['The survey covers 16,000 to 12,000 years BP at a 40-year spacing, about 50 samples in all.', 'about 50', 'about 100'],
+    ['The Kell core holds 3 cycles in 300,000 years, so each one is about 150k long.', 'about 150k', expect.stringMatching(/^about 100/u)],
+  ] as [string, string, unknown][])('%s: flags %s', (sentence, text, correction) => {
+    expect(flagged(sentence)).toEqual([[expect.stringMatching(/^arith\./u), text, correction]]);
+  });
+
+  it.each([
+    ['Six cycles in 600,000 years works out to one cycle every 100,000 years.'],
+    ['The Kell core holds 3 cycles in 300,000 years, each about 100,000 years long.'],
+    ['The survey covers 16,000 to 12,000 years BP sampled every 40 years, which gives about 100 samples.'],
+    // The count and the spacing are not drawn from each other: no link between them.
+    ['Over 600,000 years the core shows six cycles and the 41,000-year cycle before them.'],
+  ])('leaves alone: %s', (sentence) => {
+    expect(check(sentence)).toEqual([]);
+  });
+});
+
 // Through the engine: a sentence with one figure and no word of the subject, in a draft on topic,
 // reaches the arithmetic checks when the sentences before it hold figures.
 describe('which sentences reach the arithmetic checks', () => {

@@ -104,6 +104,15 @@ const EQUALS = [
 const ASKED_MEASURES = ['long', 'much', 'many', 'far', 'fast', 'quickly', 'slowly', 'big', 'large', 'high', 'low', 'deep', 'old', 'often', 'steep', 'great', 'wide'];
 const ASKED_NOUNS = ['rate', 'pace', 'speed', 'difference', 'change', 'rise', 'increase', 'drop', 'fall', 'span', 'duration', 'length', 'ratio', 'total', 'sum', 'average', 'mean', 'percentage', 'percent', 'share', 'fraction', 'multiple', 'factor', 'gap'];
 
+/** Words just before a span of time that make it the spacing of a series ("every 10,000 years", "each 50 years"). */
+const SPACING_BEFORE = ['every', 'each', 'per', 'apiece'];
+/** Nouns a span of time is the spacing of when written onto them ("a 50-year spacing", "100k-yr cycles"). */
+const SPACING_NOUNS = ['spacing', 'interval', 'step', 'resolution', 'cycle', 'beat', 'rhythm', 'period', 'gap'];
+/** Words after a figure that make it the length of each member of a series ("each one's about 150k long"). */
+const EACH_LONG = ['long', 'apart', 'each', 'apiece'];
+/** Words just before a span of time that make it the whole a series fills ("8 cycles in 800,000 years"). */
+const SPAN_BEFORE = ['in', 'over', 'across', 'spanning', 'covering', 'within', 'of', 'through'];
+
 /** A set of every form of the words (verb forms and plurals). */
 const formsOf = (words: readonly string[]): Set<string> => new Set(words.flatMap((w) => (w.includes(' ') ? [w] : inflect(w))));
 /** A map of every form to the base word's sign. */
@@ -134,6 +143,10 @@ export const WORDS = {
   pace: new Set(PACE_WORDS),
   askedMeasures: new Set(ASKED_MEASURES),
   askedNouns: formsOf(ASKED_NOUNS),
+  spacingBefore: new Set(SPACING_BEFORE),
+  spacingNouns: formsOf(SPACING_NOUNS),
+  eachLong: new Set(EACH_LONG),
+  spanBefore: new Set(SPAN_BEFORE),
   operators: new Map(Object.entries(OPERATORS)),
   equals: EQUALS,
 };
