@@ -7,7 +7,7 @@ import { checkRanks } from './checks/rank/index.js';
 import { checkReasoning, judgeByStance, paragraphReader, type ParagraphContext } from './checks/reasoning/index.js';
 import { checkReferences } from './checks/reference.js';
 import { checkUnits } from './checks/units.js';
-import { hasTwoNumerals } from './quantities/two-numerals.js';
+import { hasNumeral, hasTwoNumerals } from './quantities/two-numerals.js';
 import { FirnlineError } from './errors.js';
 import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
@@ -398,10 +398,15 @@ function examineSentence(
     if (carried !== undefined) return carried;
     // One number reads on from the sentences before only in the unit checks: "2. Its record covers
     // about 800 million years" after an item naming the core is a thousand-for-million slip.
+    // One figure may also be the result of a worked sum whose inputs stand in the sentences before
+    // ("... from about 18,000 to 11,500 years ago. That is a period of 9,500 years."; "About 1,800
+    // years." under its question): it reaches the arithmetic checks when they hold figures, and
+    // those checks flag only a figure drawn from them (arithmetic-solver.ts, arithmetic-reader/).
     const single = !TWO_NUMBERS.test(text) && !hasTwoNumerals(text);
     if (single && (before.length === 0 || !DIGIT.test(text))) return undefined;
     const quantities = parseQuantities(text);
-    const slips = single ? checkUnits(text, quantities, before) : [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)];
+    const worked = !single || before.some((s) => hasNumeral(s));
+    const slips = worked ? [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)] : checkUnits(text, quantities, before);
     if (slips.length === 0) return undefined;
     // A slip in a quotation or a marked passage is the quoted writer's, not the draft's.
     const reading = paragraphReader(paragraph, packs, ownBlock(context))(index);

@@ -9,19 +9,24 @@
 import { toCanonical, writtenInterval as w } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
 import { divide, minus, type Derived } from './arithmetic-derive.js';
+import { WORDS } from './arithmetic-reader/word-classes.js';
+import { disjoint } from './arithmetic-levels.js';
 
 const S = String.raw`[\s\u00A0]`;
-/** The operator between the first two numbers of a written sum. */
-const OPERATOR = new RegExp(String.raw`^${S}*([−+×x*÷/]|${S}-${S})${S}*$`, 'u');
+/** Scales a result may carry that its operands leave off ("6.5 thousand", "105k", "2 million"). */
+const SCALES = [1e3, 1e6, 1e9];
+const escape = (x: string): string => x.replace(/[.*+?^${}()|[\]\\/]/gu, '\\$&').replace(/ /gu, `${S}+`);
+const longestFirst = (xs: Iterable<string>): string[] => [...xs].sort((a, b) => b.length - a.length);
+/** The operator between the first two numbers of a written sum, in symbols or words (WORDS.operators). */
+const OPERATOR = new RegExp(String.raw`^${S}*(${longestFirst(WORDS.operators.keys()).map(escape).join('|')})${S}*$`, 'iu');
 /**
- * Between the second number and the result: "=", or the words a worked answer uses for it ("gives",
- * "makes", "comes to", "equals", "is"), or an apposition naming the result (", an increase of",
- * ", or", ", that is"): "280 − 180, an increase of 100 ppm"; "76 ÷ 6,000 gives about 0.013".
+ * Between the second number and the result: a word or sign of the result (WORDS.equals: "=", "≈",
+ * "gives", "leaves", "works out at"), perhaps after a comma, perhaps followed by a name of the
+ * result in a few words ("leaves a cold spell of", "gives an increase of"); or an apposition naming
+ * the result alone (", an increase of"): "280 − 180, an increase of 100 ppm".
  */
-const EQUALS = new RegExp(
-  String.raw`^${S}*(?:=|(?:,${S}*)?(?:gives|give|giving|makes|make|making|comes${S}+to|come${S}+to|equals|equal|is|are|or|that${S}+is|which${S}+is|i\.e\.,?)(?:${S}+(?:an?|the)${S}+[\p{L}-]+${S}+of)?|,${S}*(?:an?|the)${S}+[\p{L}-]+${S}+of)${S}*$`,
-  'iu',
-);
+const NAMED = String.raw`(?:an?|the)${S}+(?:[\p{L}-]+${S}+){1,3}of`;
+const EQUALS = new RegExp(String.raw`^${S}*(?:,${S}*)?(?:(?:${longestFirst(WORDS.equals).map(escape).join('|')})(?:${S}+${NAMED})?|${NAMED})${S}*$`, 'iu');
 
 /**
  * An operand of a written sum is the number itself: the writer worked "280 − 180" as exactly 100.
@@ -48,20 +53,17 @@ function inUnitOf(d: Derived, c: Quantity): Derived {
  * check reports (units-offset-sums.ts); its arithmetic is not judged twice.
  */
 export function addsReadingOffset(op: string, a: Quantity, b: Quantity, c: Quantity): boolean {
-  return op.trim() === '+' && c.statedUnit === 'degF' && c.dimension === 'temperature-change' && (a.value === 32 || b.value === 32);
+  return op === '+' && c.statedUnit === 'degF' && c.dimension === 'temperature-change' && (a.value === 32 || b.value === 32);
 }
 
 /** What the operator makes of the two numbers, or undefined when it cannot say. */
 function apply(op: string, a: Derived, b: Derived): Derived | undefined {
-  switch (op.trim()) {
+  switch (op) {
     case '−':
-    case '-':
       return minus(a, b);
     case '+':
       return plus(a, b);
     case '×':
-    case 'x':
-    case '*':
       return times(a, b);
     default:
       return divide(a, b);
@@ -80,15 +82,22 @@ export function writtenSums(text: string, qs: Quantity[]): SumFinding[] {
   const out: SumFinding[] = [];
   for (let i = 0; i + 2 < qs.length; i++) {
     const [a, b, c] = [qs[i], qs[i + 1], qs[i + 2]] as [Quantity, Quantity, Quantity];
-    const op = OPERATOR.exec(text.slice(a.end, b.start))?.[1];
-    if (op === undefined || !EQUALS.test(text.slice(b.end, c.start))) continue;
+    const written = OPERATOR.exec(text.slice(a.end, b.start))?.[1];
+    const op = written === undefined ? undefined : WORDS.operators.get(written.toLowerCase().replace(/[\s\u00A0]+/gu, ' '));
+    // "≈ 0.11 ppm per year": a sign of the result read as the result's hedge stands for "=".
+    const between = text.slice(b.end, c.start);
+    const signed = /^[\s\u00A0]*$/u.test(between) && c.hedge !== undefined && WORDS.equals.includes(c.hedge.trim());
+    if (op === undefined || !(EQUALS.test(between) || signed)) continue;
     if (a.hedge !== undefined || b.hedge !== undefined || !comparable(op, a, b, c)) continue;
     if (addsReadingOffset(op, a, b, c)) continue;
     const sum = apply(op, exact(a), exact(b));
     if (sum === undefined) continue;
     // Bare operands give the result in the unit it is written in ("265 − 188 = 77 ppm", "9 × 1.8 = 16.2 °F").
     const computed = a.dimension === 'number' && b.dimension === 'number' && c.statedUnit !== '' ? inUnitOf(sum, c) : sum;
-    out.push({ stated: c, computed, measures: `${a.text} ${op.trim()} ${b.text}` });
+    // "18 minus 11.5 is 6.5 thousand", "420 divided by 4 is 105k": a sum done in thousands (or
+    // millions) whose result carries the scale its operands left off.
+    if (SCALES.some((k) => !disjoint(c, { low: computed.low * k, high: computed.high * k }))) continue;
+    out.push({ stated: c, computed, measures: `${a.text} ${op} ${b.text}` });
   }
   return out;
 }
@@ -101,7 +110,7 @@ export function writtenSums(text: string, qs: Quantity[]): SumFinding[] {
  */
 function comparable(op: string, a: Quantity, b: Quantity, c: Quantity): boolean {
   if (a.dimension === 'number' && b.dimension === 'number') return true;
-  const additive = op.trim() === '−' || op.trim() === '-' || op === '+';
+  const additive = op === '−' || op === '+';
   const same = (q: Quantity): boolean => q.dimension === a.dimension || (a.dimension === 'temperature' && q.dimension === 'temperature-change');
   return additive && a.dimension !== 'age' && same(b) && same(c);
 }

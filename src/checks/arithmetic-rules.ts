@@ -14,8 +14,9 @@ import { writtenSums } from './arithmetic-equations.js';
 import { perLength } from './arithmetic-per-length.js';
 import { changeShares } from './arithmetic-shares.js';
 import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragraph.js';
-import { changesFromLevels, paceRatiosInParagraph, ratesInParagraph } from './arithmetic-solver.js';
+import { amountsAtPace, changesFromLevels, paceRatiosInParagraph, paceRatiosInSentence, ratesInParagraph } from './arithmetic-solver.js';
 import { readArithmetic } from './arithmetic-reader/relations.js';
+import { seriesSpacings } from './arithmetic-counts.js';
 import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
@@ -288,16 +289,23 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     const found = [...changes(t, qs, p), ...changesAcross(t, qs, p, prev)];
     const paragraph = [...found, ...notYet(found, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
     const levels = [...paragraph, ...notYet(paragraph, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
-    return [...levels, ...notYet(levels, read('arith.change', t, qs, earlier))];
+    const read_ = [...levels, ...notYet(levels, read('arith.change', t, qs, earlier))];
+    return [...read_, ...notYet(read_, amountsAtPace(t, qs, earlier).filter((f) => f.stated.dimension !== 'duration'))];
   } },
   { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...durations(t, qs, p), ...durationsAcross(t, qs, prev)];
     const across = [...found, ...notYet(found, spansAcross(t, qs, prev))];
-    return [...across, ...notYet(across, read('arith.duration', t, qs, earlier))].filter((f) => !isBoundOrVague(t, f.stated));
+    const read_ = [...across, ...notYet(across, read('arith.duration', t, qs, earlier))];
+    const paced = [...read_, ...notYet(read_, amountsAtPace(t, qs, earlier).filter((f) => f.stated.dimension === 'duration'))];
+    return [...paced, ...notYet(paced, seriesSpacings(t, qs, p).filter((f) => f.stated.dimension === 'duration'))].filter((f) => !isBoundOrVague(t, f.stated));
   } },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)];
-    return [...found, ...notYet(found, ratesInParagraph(t, qs, p, earlier))];
+    const all = [...found, ...notYet(found, ratesInParagraph(t, qs, p, earlier))];
+    // "At 2.4 ppm a year, adding 100 ppm takes about 4 years": a time worked from the pace makes the
+    // pace its premise, not a result of the amount and the time.
+    const premise = amountsAtPace(t, qs, earlier).some((f) => f.stated.dimension === 'duration');
+    return premise ? all.filter((f) => !RATE_OF[f.stated.dimension]) : all;
   } },
   { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)];
@@ -306,7 +314,9 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     const compared = [...paragraph, ...notYet(paragraph, comparisonsInParagraph(t, qs, earlier))];
     const paces = [...compared, ...notYet(compared, paceRatiosInParagraph(t, qs, earlier))];
     const levels = [...paces, ...notYet(paces, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension === 'percent'))];
-    return [...levels, ...notYet(levels, read('arith.ratio', t, qs, earlier))];
+    const reader = [...levels, ...notYet(levels, read('arith.ratio', t, qs, earlier))];
+    const paced = [...reader, ...notYet(reader, paceRatiosInSentence(t, qs))];
+    return [...paced, ...notYet(paced, seriesSpacings(t, qs, p).filter((f) => f.stated.dimension !== 'duration'))];
   } },
 ];
 

@@ -17,13 +17,14 @@
  * when it carries no time of its own ("today", "in 2024", "a year") that would make it another
  * quantity. The correction is the value from the nearest figures.
  */
-import { writtenInterval as w } from '../quantities/index.js';
+import { toCanonical, writtenInterval as w } from '../quantities/index.js';
 import type { Dimension, Quantity } from '../types.js';
 import type { Previous } from './arithmetic-context.js';
 import { disjoint } from './arithmetic-levels.js';
 import { divide, facing, invert, minus, rangeSpan, size, type Derived } from './arithmetic-derive.js';
 import { changesOver, findPairs, isPaceRatio, isStatedChange, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 import { spanOfDates } from './arithmetic-spans.js';
+import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 
 /** A finding from the paragraph's equations, with the basis named. */
 export interface SolverFinding {
@@ -290,4 +291,98 @@ export function paceRatiosInParagraph(text: string, qs: Quantity[], earlier: rea
 /** The rates of a sentence, stated or derived, for rules that compare a pace with one before. */
 export function rateReadings(text: string, quantities: Quantity[], dimension: Dimension): Derived[] {
   return ratesOf({ text, qs: quantities, pairs: findPairs(text, quantities), distance: 1 }, dimension).map((c) => c.value);
+}
+
+/** a × b of two positive intervals. */
+function product(a: Derived, b: Derived): Derived | undefined {
+  if (a.low < 0 || b.low < 0) return undefined;
+  return { value: a.value * b.value, low: a.low * b.low, high: a.high * b.high };
+}
+
+/** A word of this sentence, between two offsets, that presents what follows as worked out (word-classes.ts LINKS). */
+const linkedBetween = (text: string, from: number, to: number): boolean => holdsPhrase(wordsIn(text, from, to), WORDS.links);
+/** "At 2.4 ppm a year, ...": a rate given as the condition the rest of the sentence works from. */
+const isConditionRate = (text: string, rate: Quantity): boolean => wordsIn(text, Math.max(0, rate.start - 12), rate.start).at(-1)?.text === 'at';
+
+/**
+ * The other two relations among a change, the time it took and its pace (rate × duration =
+ * change; change ÷ rate = duration), as worked sums state them:
+ *  - an amount drawn from a pace over a time: "Growth ran at 2.4 ppm a year. Over the ten years of
+ *    that decade, that adds up to roughly 40 ppm." (24 ppm);
+ *  - a time drawn from an amount at a pace: "At 2.4 ppm a year, adding 100 ppm takes about 4
+ *    years." (about 42 years); "Today we add 2.4 ppm a year, so we'd match the whole 80-ppm rise in
+ *    about 3 years." (33 years).
+ * The pace is the one rate of this sentence or (for an amount) of the sentence before; the result
+ * comes after its inputs, and a link word ("so", "that adds up to", "comes to") stands between the
+ * pace and the result, or the pace is a condition ("At 2.4 ppm a year, ...").
+ */
+export function amountsAtPace(text: string, qs: Quantity[], earlier: readonly Previous[]): SolverFinding[] {
+  const rates = qs.filter((q) => RATE_OF[q.dimension] !== undefined);
+  if (rates.length > 1) return [];
+  const here = rates[0];
+  const out: SolverFinding[] = [];
+  // An amount: one stated amount after one span of time, the pace here or in the sentence before.
+  const pace = here ?? only((earlier[0]?.quantities ?? []).filter((q) => RATE_OF[q.dimension] !== undefined));
+  const changeDim = pace === undefined ? undefined : RATE_OF[pace.dimension];
+  if (pace !== undefined && changeDim !== undefined) {
+    const spans = qs.filter((q) => q.dimension === 'duration' && !NOT_A_SPAN.test(text.slice(Math.max(0, q.start - 12), q.start)));
+    const amounts = qs.filter((q) => q.dimension === changeDim);
+    const span = only(spans);
+    const amount = only(amounts);
+    if (span !== undefined && amount !== undefined && span.end <= amount.start && (here === undefined || here.end <= span.start)) {
+      const from = here === undefined ? 0 : here.end;
+      const linked = linkedBetween(text, from, amount.start) || (here !== undefined && isConditionRate(text, here));
+      // The amount is a change or a total ("adds up to", "in all"), never a level the pace reached.
+      const changed = wordsIn(text, span.end, amount.start).some((x) => WORDS.changeVerbs.has(x.text) || WORDS.changeNouns.has(x.text)) || isChange(text, amount);
+      const total = product(w(pace), w(span));
+      if (linked && changed && total !== undefined && !PER_TIME_AFTER.test(text.slice(amount.end))) {
+        out.push({ stated: amount, computed: facing(total, amount.value), measures: `${pace.text} over ${span.text}`, ...(here === undefined ? { basis } : {}) });
+      }
+    }
+  }
+  // A time: one amount and one pace of this sentence before one stated span of time.
+  const rate = here;
+  const amountDim = rate === undefined ? undefined : RATE_OF[rate.dimension];
+  if (rate !== undefined && amountDim !== undefined) {
+    const amount = only(qs.filter((q) => q.dimension === amountDim));
+    const span = only(qs.filter((q) => q.dimension === 'duration'));
+    if (amount !== undefined && span !== undefined && amount.end <= span.start && rate.end <= span.start && !NOT_A_SPAN.test(text.slice(Math.max(0, span.start - 12), span.start))) {
+      const linked = linkedBetween(text, rate.end, span.start) || isConditionRate(text, rate);
+      const time = divide(size(w(amount)), w(rate));
+      if (linked && time !== undefined) out.push({ stated: span, computed: time, measures: `${amount.text} at ${rate.text}` });
+    }
+  }
+  return out;
+}
+
+/**
+ * A multiple of a pace drawn from the two paces just before it in its sentence: "2.4 ppm a year now
+ * versus about 0.012 back then, so roughly twenty times faster" (200); "2.4 a yr now vs 0.013 then
+ * = about 20x faster" (185). A bare figure beside a pace is a pace in its unit (the writer wrote
+ * the unit once); two bare figures are paces in one unit. The multiple must be drawn from them: a
+ * link word ("so", "=", "means", "that is") stands between the second pace and it.
+ */
+export function paceRatiosInSentence(text: string, qs: Quantity[]): SolverFinding[] {
+  const stated = only(qs.filter((q) => isPaceRatio(text, q)));
+  if (stated === undefined) return [];
+  const before = qs.filter((q) => q.end <= stated.start);
+  if (before.length !== 2 || qs.some((q) => q !== stated && q.start >= stated.end && (RATE_OF[q.dimension] !== undefined || q.dimension === 'number'))) return [];
+  const [a, b] = before as [Quantity, Quantity];
+  const rates = before.filter((q) => RATE_OF[q.dimension] !== undefined);
+  if (!before.every((q) => RATE_OF[q.dimension] !== undefined || q.dimension === 'number')) return [];
+  if (rates.length === 2 && a.dimension !== b.dimension) return [];
+  const signed = /[=≈→]/u.test(text.slice(b.end, stated.start)) || stated.hedge === '≈' || stated.hedge === '~';
+  if (!signed && !linkedBetween(text, b.end, stated.start)) return [];
+  // In one unit: each pace in its canonical unit, a bare figure in the unit of the pace beside it.
+  const unit = rates[0];
+  const inUnit = (q: Quantity): Derived => {
+    const d = w(q);
+    if (q.dimension !== 'number' || unit === undefined) return d;
+    const c = (x: number): number => toCanonical(x, unit.statedUnit, unit.dimension);
+    return { value: c(d.value), low: c(d.low), high: c(d.high) };
+  };
+  const r = divide(inUnit(a), inUnit(b));
+  if (r === undefined) return [];
+  const faced = (stated.value < 1) === (r.value < 1) ? r : invert(r);
+  return [{ stated, computed: faced, measures: `the ratio of ${a.text} to ${b.text}` }];
 }

@@ -5,6 +5,8 @@
  * percentage that contradicts its two values. Tolerances come from the intervals (see
  * src/quantities/interval-rules.ts); correct arithmetic is never flagged.
  */
+import { hasNumeral } from '../quantities/two-numerals.js';
+import { WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 import { correctionFigures, derivedFigures, formatQuantity, hedgeRule, parseQuantities, rewriteQuantity } from '../quantities/index.js';
 import type { FlagDraft, Quantity } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
@@ -27,6 +29,35 @@ export function correctionFor(q: Quantity, value: number, figures = derivedFigur
   return at > 0 ? rewritten.slice(0, at).replace(/[\s,]+$/u, '') : rewritten;
 }
 
+/**
+ * The sentences an answer reads on from when the sentence just before it is a question with no
+ * figure of its own ("... ran from about 12,900 to 11,700 years ago. How long did it last? About
+ * 1,800 years."): the question asks for a result of the figures before it, so the answer is drawn
+ * from them as a "so" sentence is. Undefined when the sentence before is no such question.
+ */
+function askedBefore(context: readonly string[]): readonly string[] | undefined {
+  const last = context.at(-1);
+  if (last === undefined || !/\?[\s"'”’)*_]*$/u.test(last) || hasNumeral(last) || !asksForFigure(last)) return undefined;
+  const rest = context.slice(0, -1);
+  return rest.length > 0 && rest.some((s) => hasNumeral(s)) ? rest : undefined;
+}
+
+/** True when a question asks for a figure: "how long", "by how much", "what was the average rate?" (word-classes.ts). */
+function asksForFigure(question: string): boolean {
+  const words = wordsIn(question, 0, question.length);
+  return words.some((x, i) => (x.text === 'how' && WORDS.askedMeasures.has(words[i + 1]?.text ?? '')) || WORDS.askedNouns.has(x.text));
+}
+
+/** Words an answer is read with: it states the result the question asked for. */
+const ANSWERED = 'So, ';
+
+/** The flags of an answer, checked as the sentence "So, <answer>" after the figures the question asks about. */
+function answerTo(text: string, quantities: Quantity[], context: readonly string[]): FlagDraft[] {
+  const shift = ANSWERED.length;
+  const moved = quantities.map((q) => ({ ...q, start: q.start + shift, end: q.end + shift }));
+  return checkArithmetic(ANSWERED + text, moved, context).map((f) => ({ ...f, start: f.start - shift, end: f.end - shift }));
+}
+
 const shown = (q: Quantity, d: Derived): string => formatQuantity(d.value, q.unit, q.statedUnit, correctionFigures(q));
 
 /**
@@ -36,6 +67,8 @@ const shown = (q: Quantity, d: Derived): string => formatQuantity(d.value, q.uni
  * ppm, a rise of 110 ppm."). Flags always fall on this sentence's own words.
  */
 export function checkArithmetic(text: string, quantities: Quantity[], context: readonly string[] = []): FlagDraft[] {
+  const asked = askedBefore(context);
+  if (asked !== undefined) return answerTo(text, quantities, asked);
   const last = context[context.length - 1];
   const previous = last === undefined ? undefined : { text: last, quantities: parseQuantities(last) };
   const earlier = context
@@ -61,5 +94,8 @@ export function checkArithmetic(text: string, quantities: Quantity[], context: r
       });
     }
   }
-  return flags.sort((a, b) => a.start - b.start);
+  // One figure, one flag: a result two rules read ("12,900 take away 11,700 leaves a cold spell of
+  // about 2,200 years" is a written sum and a span of dates) is flagged by the first.
+  const once = flags.filter((f, i) => !flags.slice(0, i).some((g) => g.start === f.start && g.end === f.end));
+  return once.sort((a, b) => a.start - b.start);
 }

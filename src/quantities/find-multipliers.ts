@@ -6,9 +6,18 @@
 import type { Atom } from './find-atoms.js';
 import { halfPlace } from './precision.js';
 
-const SMALL: Record<string, number> = {
-  two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, twenty: 20, thirty: 30, forty: 40, fifty: 50,
-  hundred: 100, thousand: 1000,
+/** Cardinals in words a multiplier is written with: units and teens, tens, and a ten joined to a unit ("twenty-five"). */
+const UNITS: Record<string, number> = {
+  two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, eleven: 11, twelve: 12, thirteen: 13, fourteen: 14, fifteen: 15,
+  sixteen: 16, seventeen: 17, eighteen: 18, nineteen: 19, hundred: 100, thousand: 1000,
+};
+const TENS: Record<string, number> = { twenty: 20, thirty: 30, forty: 40, fifty: 50, sixty: 60, seventy: 70, eighty: 80, ninety: 90 };
+const ONES = ['one', 'two', 'three', 'four', 'five', 'six', 'seven', 'eight', 'nine'];
+const SMALL: Record<string, number> = { ...UNITS, ...TENS };
+/** The value of a multiplier written in words: "twenty-five" is 25, "forty" 40. */
+const wordValue = (word: string): number => {
+  const [ten, one] = word.toLowerCase().split(/[-\s\u00A0]+/u);
+  return (SMALL[ten ?? ''] ?? Number.NaN) + (one === undefined ? 0 : ONES.indexOf(one) + 1);
 };
 const VERBS: [RegExp, number][] = [
   [/^(?:twice|double[sd]?|doubling)$/i, 2],
@@ -18,7 +27,7 @@ const VERBS: [RegExp, number][] = [
 ];
 const FRACTIONS: Record<string, number> = { half: 1 / 2, third: 1 / 3, quarter: 1 / 4, fifth: 1 / 5, tenth: 1 / 10, thirds: 1 / 3, quarters: 1 / 4, fifths: 1 / 5, tenths: 1 / 10 };
 const COUNTS: Record<string, number> = { a: 1, one: 1, two: 2, three: 3, four: 4 };
-const SMALL_WORDS = Object.keys(SMALL).join('|');
+const SMALL_WORDS = `(?:${Object.keys(TENS).join('|')})[-\\s\\u00A0](?:${ONES.join('|')})|${Object.keys(SMALL).join('|')}`;
 
 const VERB = /(?<![\p{L}])(?:twice|thrice|double[sd]?|doubling|triple[sd]?|tripling|quadruple[sd]?|quadrupling|halved|halves|halving|halve)(?![\p{L}])/giu;
 const FOLD = new RegExp(String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS}))[-\s]?fold(?![\p{L}])`, 'giu');
@@ -43,9 +52,9 @@ function numberAtom(m: RegExpExecArray): Atom {
   const end = m.index + m[0].length;
   if (d !== undefined) return atom(m.index, end, Number(d), halfPlace(d), 'precision');
   // "twenty-odd": twenty and some more, below thirty (read by the precision row as 25 ± 5).
-  const word = SMALL[(m.groups?.['w'] ?? '').toLowerCase()] ?? Number.NaN;
+  const word = wordValue(m.groups?.['w'] ?? '');
   if (/-odd/iu.test(m[0])) return atom(m.index, end, word * 1.25, word / 4, 'precision');
-  return atom(m.index, end, SMALL[(m.groups?.['w'] ?? '').toLowerCase()] ?? Number.NaN, 0, 'multiplier-word');
+  return atom(m.index, end, word, 0, 'multiplier-word');
 }
 
 function fractionAtom(text: string, m: RegExpExecArray): Atom | undefined {

@@ -16,3 +16,9 @@ export function hasTwoNumerals(text: string): boolean {
   while (NUMERAL.exec(text) !== null) if (++seen >= 2) return true;
   return false;
 }
+
+/** True when `text` holds a number, in digits or as a number word ("about 1,800 years", "call it nine"). */
+export function hasNumeral(text: string): boolean {
+  NUMERAL.lastIndex = 0;
+  return NUMERAL.exec(text) !== null;
+}

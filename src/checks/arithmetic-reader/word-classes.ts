@@ -39,6 +39,7 @@ const LINKS = [
   'so', 'thus', 'hence', 'therefore', 'meaning', 'means', 'meant', 'i.e', 'ie', 'or', 'giving', 'gives', 'gave', 'making', 'makes', 'made',
   'leaving', 'leaves', 'left', 'equals', 'equalling', 'equaling', 'that is', "that's", 'that’s', 'which is', 'which was', "which's", 'this is', "it's", 'it’s',
   'comes to', 'came to', 'come to', 'works out', 'worked out', 'amounts to', 'amounted to', 'all told', 'in all', 'in total', 'total', 'totalling', 'totaling',
+  'adds up to', 'add up to', 'added up to', 'comes out at', 'came out at', 'come out at', 'works out at', 'worked out at',
   'call it', 'in other words', 'put another way', 'put differently', 'that makes', 'which makes', 'net', 'altogether', 'overall',
 ];
 /** Words after a span of time that place it between the date before and the date of its clause ("some 4,500 years later"). */
@@ -76,6 +77,42 @@ const OWN_TIME = ['today', "today's", 'today’s', 'now', 'nowadays', 'currently
 /** Words that give the multiple's measure a pace ("times faster", "as fast"). */
 const PACE_WORDS = ['faster', 'slower', 'quicker', 'quickly', 'rapidly', 'fast', 'pace', 'rate', 'speed', 'tempo'];
 
+/**
+ * The operators of a sum written out between two numbers, in symbols and in words ("12,900 take
+ * away 11,700", "80 divided by 7,000", "5.35 times 0.69"): each maps to its symbol.
+ */
+const OPERATORS: Record<string, string> = {
+  '−': '−', '-': '−', '–': '−', '+': '+', '×': '×', x: '×', '*': '×', '÷': '÷', '/': '÷',
+  minus: '−', 'take away': '−', 'takeaway': '−', less: '−', 'subtract': '−', plus: '+', 'added to': '+', times: '×', 'multiplied by': '×', 'divided by': '÷', 'over': '÷',
+};
+/**
+ * Words between a written sum's second number and its result that state the result ("=", "≈",
+ * "gives", "leaves", "works out at"); one may be followed by a name of the result ("leaves a cold
+ * spell of", "gives an increase of").
+ */
+const EQUALS = [
+  '=', '≈', '≃', '≅', '~', '→', 'gives', 'give', 'giving', 'gave', 'makes', 'make', 'making', 'made', 'comes to', 'come to', 'came to', 'equals', 'equal', 'equalling', 'equaling',
+  'is', 'are', 'was', 'or', 'that is', 'which is', "that's", 'that’s', 'i.e.', 'i.e.,', 'leaves', 'leave', 'leaving', 'left',
+  'works out at', 'works out to', 'worked out at', 'worked out to', 'comes out at', 'came out at', 'comes out to', 'is about', 'gets you', 'get you',
+];
+
+/**
+ * Questions that ask for a result of figures: "how" with the measure asked for ("how long", "by how
+ * much", "how many times"), or a measure noun ("what was the average rate?", "what is the
+ * difference?"). "How did it happen?" and "What are the cycles?" ask for no figure.
+ */
+const ASKED_MEASURES = ['long', 'much', 'many', 'far', 'fast', 'quickly', 'slowly', 'big', 'large', 'high', 'low', 'deep', 'old', 'often', 'steep', 'great', 'wide'];
+const ASKED_NOUNS = ['rate', 'pace', 'speed', 'difference', 'change', 'rise', 'increase', 'drop', 'fall', 'span', 'duration', 'length', 'ratio', 'total', 'sum', 'average', 'mean', 'percentage', 'percent', 'share', 'fraction', 'multiple', 'factor', 'gap'];
+
+/** Words just before a span of time that make it the spacing of a series ("every 10,000 years", "each 50 years"). */
+const SPACING_BEFORE = ['every', 'each', 'per', 'apiece'];
+/** Nouns a span of time is the spacing of when written onto them ("a 50-year spacing", "100k-yr cycles"). */
+const SPACING_NOUNS = ['spacing', 'interval', 'step', 'resolution', 'cycle', 'beat', 'rhythm', 'period', 'gap'];
+/** Words after a figure that make it the length of each member of a series ("each one's about 150k long"). */
+const EACH_LONG = ['long', 'apart', 'each', 'apiece'];
+/** Words just before a span of time that make it the whole a series fills ("8 cycles in 800,000 years"). */
+const SPAN_BEFORE = ['in', 'over', 'across', 'spanning', 'covering', 'within', 'of', 'through'];
+
 /** A set of every form of the words (verb forms and plurals). */
 const formsOf = (words: readonly string[]): Set<string> => new Set(words.flatMap((w) => (w.includes(' ') ? [w] : inflect(w))));
 /** A map of every form to the base word's sign. */
@@ -104,6 +141,14 @@ export const WORDS = {
   yardstick: new Set(YARDSTICK),
   ownTime: new Set(OWN_TIME),
   pace: new Set(PACE_WORDS),
+  askedMeasures: new Set(ASKED_MEASURES),
+  askedNouns: formsOf(ASKED_NOUNS),
+  spacingBefore: new Set(SPACING_BEFORE),
+  spacingNouns: formsOf(SPACING_NOUNS),
+  eachLong: new Set(EACH_LONG),
+  spanBefore: new Set(SPAN_BEFORE),
+  operators: new Map(Object.entries(OPERATORS)),
+  equals: EQUALS,
 };
 
 /** A word of the text with where it stands. */

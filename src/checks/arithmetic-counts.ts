@@ -1,0 +1,84 @@
+/**
+ * A series of equal steps: how many fit a span, and how long each is (span = count × spacing).
+ * "Eight glacial cycles in 800,000 years works out to one cycle every 10,000 years" (100,000);
+ * "800k yrs of record ÷ ~100k-yr cycles = about 4 cycles" (8); "the window from 18,000 to 11,000
+ * years BP at a 50-year spacing, about 70 samples" (140); "4 cycles in 420,000 years, so each one's
+ * about 150k long" (105k).
+ *
+ * One sentence holds the three: the span (a duration after "in", "over", "across"..., or the span
+ * of a pair of dates), the count (a count of things, or a bare figure before a plural noun) and the
+ * spacing (a duration after "every", "each", "per", or written onto "spacing", "interval", "cycles";
+ * as a result, also a bare figure followed by "long" or "apart"). The result is the last of them,
+ * drawn from the two before by a link word, a sign ("=", "≈") or a comma. Words are data
+ * (word-classes.ts: spacingBefore, spacingNouns, eachLong, spanBefore).
+ */
+import { toCanonical, writtenInterval as w } from '../quantities/index.js';
+import type { Quantity } from '../types.js';
+import { divide, type Derived } from './arithmetic-derive.js';
+import type { Pair } from './arithmetic-frames.js';
+import { spanOfDates } from './arithmetic-spans.js';
+import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
+
+/** A finding of a series: the stated figure and the value its span and other member give. */
+export interface SeriesFinding {
+  stated: Quantity;
+  computed: Derived;
+  measures: string;
+}
+
+const wordBefore = (text: string, q: Quantity): string => wordsIn(text, Math.max(0, q.start - 16), q.start).at(-1)?.text ?? '';
+const wordsAfter = (text: string, q: Quantity, n: number): string[] => wordsIn(text, q.end, Math.min(text.length, q.end + 24)).slice(0, n).map((x) => x.text);
+const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
+
+/** "every 10,000 years", "a 50-year spacing", "~100k-yr cycles". */
+function isSpacing(text: string, q: Quantity): boolean {
+  if (q.dimension !== 'duration') return false;
+  if (WORDS.spacingBefore.has(wordBefore(text, q))) return true;
+  return /^-?[\p{L}]*$/u.test(q.text.split(/[\s\u00A0-]/u).at(-1) ?? '') && /-/u.test(q.text) && WORDS.spacingNouns.has(wordsAfter(text, q, 1)[0] ?? '');
+}
+
+/** "8 cycles", "about 70 samples": a count of things. */
+const isCount = (text: string, q: Quantity): boolean =>
+  q.dimension === 'count' || (q.dimension === 'number' && /s$/u.test(wordsAfter(text, q, 1)[0] ?? '') && !WORDS.timeUnits.has(wordsAfter(text, q, 1)[0] ?? ''));
+
+/** True when the text between the inputs and the result draws it from them. */
+function drawn(text: string, from: number, to: number): boolean {
+  const between = text.slice(from, to);
+  return /[=≈,]/u.test(between) || holdsPhrase(wordsIn(text, from, to), WORDS.links);
+}
+
+export function seriesSpacings(text: string, qs: Quantity[], pairs: Pair[]): SeriesFinding[] {
+  const dated = only(spanOfDates(qs, pairs));
+  // "8 cycles in 800,000 years"; "800k yrs of record ÷ ...": a span the series fills.
+  const spans = qs.filter((q) => q.dimension === 'duration' && !isSpacing(text, q) && (WORDS.spanBefore.has(wordBefore(text, q)) || wordsAfter(text, q, 1)[0] === 'of'));
+  const spacings = qs.filter((q) => isSpacing(text, q));
+  const counts = qs.filter((q) => isCount(text, q));
+  const span: { value: Derived; text: string; end: number } | undefined =
+    spans.length === 1 && dated === undefined ? { value: w(spans[0] as Quantity), text: (spans[0] as Quantity).text, end: (spans[0] as Quantity).end } : spans.length === 0 && dated !== undefined ? { value: dated.span, text: dated.measures.replace(/^the time /u, ''), end: Math.max(...qs.filter((q) => q.dimension === 'age').map((q) => q.end)) } : undefined;
+  if (span === undefined || counts.length > 1 || spacings.length > 1) return [];
+  const count = counts[0];
+  const spacing = spacings[0];
+  // The result: the last of the three, after both inputs.
+  if (count !== undefined && spacing !== undefined) {
+    const [input, result] = count.start < spacing.start ? [count, spacing] : [spacing, count];
+    const from = Math.max(input.end, span.end);
+    if (result.start < from || !drawn(text, from, result.start)) return [];
+    const other = result === count ? divide(span.value, w(spacing)) : divide(span.value, exact(count));
+    if (other === undefined) return [];
+    return [{ stated: result, computed: other, measures: result === count ? `${span.text} divided by ${spacing.text}` : `${span.text} divided by ${count.text}` }];
+  }
+  // "4 cycles in 420,000 years, so each one's about 150k long": a bare length of each member.
+  if (count !== undefined && spacing === undefined) {
+    const each = only(qs.filter((q) => q.dimension === 'number' && q !== count && q.start > Math.max(count.end, span.end) && WORDS.eachLong.has(wordsAfter(text, q, 1)[0] ?? '')));
+    if (each === undefined || !drawn(text, Math.max(count.end, span.end), each.start)) return [];
+    const length = divide(span.value, exact(count));
+    if (length === undefined) return [];
+    // The bare figure is in years, as the span is.
+    const c = (x: number): number => toCanonical(x, 'yr', 'duration');
+    return [{ stated: { ...each, dimension: 'duration', unit: 'yr', statedUnit: 'yr', value: c(each.value), low: c(each.low), high: c(each.high) }, computed: length, measures: `${span.text} divided by ${count.text}` }];
+  }
+  return [];
+}
+
+/** A count is exact: eight cycles are eight. */
+const exact = (q: Quantity): Derived => ({ value: q.value, low: q.value, high: q.value });
