@@ -3,7 +3,7 @@
 // every stored phrase's forms are derived again here by the source code and compared, and a file
 // made by other code, of another format or damaged is never used. The stored-file tests run after
 // `npm run build` (as `npm test` does).
-import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
