@@ -3,7 +3,9 @@
 // otherwise compute on every run, each piece with the digests of what it was made from so that a
 // run uses it only while those still match (src/rulepack/compiled-pack.ts, validator-code.ts):
 //   - <name>.validate.cjs: the JSON Schema validators of schemas/ (rule pack, settings, ledger) as standalone code;
-//   - builtin-pack.json: rules/paleoclimate.yaml loaded (validated, resolved, citations rendered).
+//   - builtin-pack.json: rules/paleoclimate.yaml loaded (validated, resolved, citations rendered);
+//   - word-forms.json: the written forms of the built-in pack's terms and subject phrases
+//     (src/propositions/word-forms.ts), made after the pack is compiled.
 import { mkdir, readFile, writeFile, rename, rm } from 'node:fs/promises';
 import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -12,6 +14,8 @@ const root = fileURLToPath(new URL('..', import.meta.url));
 const dist = join(root, 'dist');
 const out = join(dist, 'generated');
 await mkdir(out, { recursive: true });
+// Made again below from what this build derives, never read by it.
+await rm(join(out, 'word-forms.json'), { force: true });
 
 /** Writes through a temporary file, so a reader never sees half a file. */
 async function writeWhole(file, text) {
@@ -59,3 +63,18 @@ try {
   console.log(`build-generated: the built-in pack was not compiled, it has mistakes:\n${error.errors.map((e) => e.toLine()).join('\n')}`);
 }
 if (pack !== undefined) await writeWhole(join(out, 'builtin-pack.json'), compiledPackText(pack, inputs));
+
+// The forms every check of a draft on topic derives from the built-in pack: its terms' inflections
+// and its subject words (the old file was removed at the start, so they are derived here, not read).
+if (pack !== undefined) {
+  const { loadPacks } = await import('../dist/rulepack/index.js');
+  const { compiledTerms } = await import('../dist/claims/bind.js');
+  const { subjectWordsOf, variantsMade } = await import('../dist/propositions/lexicon.js');
+  const { wordFormsCode, wordFormsText } = await import('../dist/propositions/word-forms.js');
+  const packs = await loadPacks([]);
+  compiledTerms(packs);
+  subjectWordsOf(packs.lexicon);
+  const code = wordFormsCode(new URL('../dist/propositions/lexicon.js', import.meta.url));
+  if (code === undefined) throw new Error('build-generated: cannot read the modules that derive word forms');
+  await writeWhole(join(out, 'word-forms.json'), wordFormsText(variantsMade(), code));
+}

@@ -8,6 +8,7 @@
  */
 import { termVariants } from '../claims/term-variants.js';
 import { inflect } from './inflect.js';
+import { readWordForms } from './word-forms.js';
 import type { Lexicon, LoadedPacks } from '../rulepack/types.js';
 
 /** One lexicon phrase found in a sentence: its class and key, and the word indices it covers. */
@@ -62,8 +63,33 @@ export function formsOf(word: string): string[] {
  * together" → "rising and falling together"); in longer phrases the first and last words inflect.
  */
 export function variantsOf(words: string[]): string[][] {
+  // Made once per phrase and process, shared by every caller (frozen: none may change them); the
+  // built-in pack's terms and subject phrases come made from the build (word-forms.ts).
+  if (words.some((w) => w.includes(' '))) return derivedVariants(words);
+  const key = words.join(' ');
+  variants ??= readWordForms(new URL('../generated/word-forms.json', import.meta.url), import.meta.url) ?? new Map();
+  let forms = variants.get(key);
+  if (forms === undefined) {
+    forms = derivedVariants(words);
+    variants.set(key, forms);
+  }
+  return forms;
+}
+
+/** The phrases whose forms this process made or read (scripts/build-generated.js stores them). */
+export function variantsMade(): ReadonlyMap<string, string[][]> {
+  return variants ?? new Map();
+}
+
+/** A phrase's forms, each a list of words: by the phrase's words joined by spaces. */
+let variants: Map<string, string[][]> | undefined;
+
+/** variantsOf's answer, made from the rules of inflection (frozen, as it is shared). */
+export function derivedVariants(words: string[]): string[][] {
   const other = ofTurned(words);
-  return other === undefined ? formsOfWords(words) : [...formsOfWords(words), ...formsOfWords(other)];
+  const forms = other === undefined ? formsOfWords(words) : [...formsOfWords(words), ...formsOfWords(other)];
+  for (const form of forms) Object.freeze(form);
+  return Object.freeze(forms) as string[][];
 }
 
 /** Quantifiers that take "the" with or without "of" ("all the work", "all of the work"). */
