@@ -16,7 +16,7 @@
  * era read for "ago" (BCE, whose offset is in the table) and a difference written with the offset of
  * an absolute temperature (the table's offsets of K and °F).
  */
-import { convert, correctionFigures, findUnit, formatQuantity, rewriteQuantity } from '../quantities/index.js';
+import { convert, correctionFigures, findUnit, formatQuantity, rewriteQuantity, writtenInterval } from '../quantities/index.js';
 import type { ReferenceValue } from '../rulepack/types.js';
 import type { Dimension, Quantity } from '../types.js';
 import { relativeDistance } from './reference-distance.js';
@@ -54,7 +54,8 @@ const SCALE_WORDS: readonly [string, number][] = [
 /**
  * Below this ratio two units are near enough that a wrong figure often fits the other reading by
  * chance (°F and °C differences: 1.8; miles and kilometres: 1.6); such a slip is read only when the
- * other reading lands inside the reference and the figure as written is well outside it.
+ * other reading lands in the middle of the reference (nearFits) and the figure as written is well
+ * outside it.
  */
 const NEAR_RATIO = 2.5;
 /** How far outside its reference a figure must be (relativeDistance) for a near-unit slip. */
@@ -75,6 +76,8 @@ interface Reading {
   value: number;
   /** The factor between the two readings (≥ 1), for the near-unit guard. */
   ratio: number;
+  /** A unit swap's reading of one canonical figure. */
+  read?: (x: number) => number;
   what: string;
   shown: (value: number) => string;
 }
@@ -84,14 +87,24 @@ export function unitSlip(r: Pick<ReferenceValue, 'low' | 'high' | 'unit'>, q: Qu
   if (q.statedUnit === 'CE' || q.unit === '') return undefined;
   for (const reading of readingsOf(q)) {
     if (!(reading.low <= r.high && r.low <= reading.high)) continue;
-    if (reading.ratio < NEAR_RATIO) {
-      const middle = (r.low + r.high) / 2;
-      const inside = (r.low <= reading.value && reading.value <= r.high) || (reading.low <= middle && middle <= reading.high);
-      if (!inside || relativeDistance(q.low, q.high, r) < NEAR_MIN_DISTANCE) continue;
-    }
+    if (reading.ratio < NEAR_RATIO && !(nearFits(q, reading, r) && relativeDistance(q.low, q.high, r) >= NEAR_MIN_DISTANCE)) continue;
     return { what: reading.what, correction: reading.shown(reading.value), low: reading.low, high: reading.high };
   }
   return undefined;
+}
+
+/**
+ * A near unit's reading fits only when the number as written (its last digit, without its hedge)
+ * lands in the middle half of the reference, or on a reference given as one figure: "about 40 °C" of
+ * Greenland cooling read as 40 °F (22 °C) in 15-25 °C, but not "12 °C" of global cooling read as
+ * 12 °F (6.7 °C) against 3.6-7 °C, nor "1.8 km" read as 1.8 miles (2.82-2.98 km) for a 2.8 km depth.
+ */
+function nearFits(q: Quantity, reading: Reading, r: Pick<ReferenceValue, 'low' | 'high'>): boolean {
+  if (reading.read === undefined) return false;
+  const w = writtenInterval(q);
+  const [low, high] = [reading.read(w.low), reading.read(w.high)].sort((a, b) => a - b) as [number, number];
+  const [middle, quarter] = [(r.low + r.high) / 2, (r.high - r.low) / 4];
+  return low <= middle + quarter && middle - quarter <= high;
 }
 
 /** Every other reading of `q`'s number, in the order tried. */
@@ -131,7 +144,7 @@ function swapReadings(q: Quantity): Reading[] {
     const shown = time
       ? (value: number) => (ownWords ? `${formatQuantity(value, q.unit, q.statedUnit)} (${formatQuantity(value, q.unit, to)}, not ${q.text})` : formatQuantity(value, q.unit, to))
       : (value: number) => `${formatQuantity(value, q.unit, to)} (${rewriteQuantity(q, value, correctionFigures(q, 2))})`;
-    return [{ low, high, value: read(q.value), ratio, what: `${other.display} meant where ${from.display} was written (${factorWords(from.display, other.display, ratio, from.factor < other.factor)})`, shown }];
+    return [{ low, high, value: read(q.value), ratio, read, what: `${other.display} meant where ${from.display} was written (${factorWords(from.display, other.display, ratio, from.factor < other.factor)})`, shown }];
   });
 }
 

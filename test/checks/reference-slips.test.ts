@@ -178,3 +178,31 @@ describe('unit slips of every dimension, through the engine', () => {
     expect((await flagsOf(text)).map(([id]) => id)).toEqual(ids);
   });
 });
+
+describe('near units (°F and °C differences, miles and kilometres) need a reading in the middle of the reference', () => {
+  // Equilibrium climate sensitivity 2.5-4 K likely, 2-5 K very likely (IPCC AR6 WGI ch. 7, Forster et
+  // al. 2021); global LGM cooling some 5-7 K (IPCC AR6 WGI ch. 2; Tierney et al. 2020, Nature 584,
+  // 569-573); Beyond EPICA reached bedrock at about 2.8 km (IPEV 2025, from memory).
+  it.each([
+    ['Equilibrium climate sensitivity is something like 8 to 10 degrees of warming per doubling.', 'value.'],
+    ['At the Last Glacial Maximum the world was some 12 °C colder on average than before industry.', 'value.'],
+    ['Beyond EPICA at Little Dome C reached bedrock in January 2025 at about 1.8 km down.', 'value.'],
+  ])('%s stays a value flag', async (text, prefix) => {
+    const ids = (await flagsOf(text)).map(([id]) => id);
+    expect(ids).not.toContain('unit.scale-slip');
+    expect(ids.some((id) => id?.startsWith(prefix))).toBe(true);
+  });
+
+  it("reads a figure that is a regional record's own size as that record told as global, not as a slip", async () => {
+    // 10 °F of cooling would be 5.6 K (NIST SP 811, B.9), inside the global range; but 10 °C is the
+    // Antarctic deglacial warming (8-11 °C, Jouzel et al. 2007, Science 317, 793-796), which the
+    // pack names as the regional version of the global value: that explanation comes first.
+    const ids = (await flagsOf('At the Last Glacial Maximum the planet saw a global cooling of 10 degrees Celsius.')).map(([id]) => id);
+    expect(ids).toEqual(['value.gmst-lgm-to-preindustrial-warming']);
+  });
+
+  it('reads a Fahrenheit difference written as Celsius where no regional record has that size', async () => {
+    // Central Greenland 15-25 K colder at the LGM (Dahl-Jensen et al. 1998); 36 °F is 20 K.
+    expect((await flagsOf('At the Last Glacial Maximum central Greenland cooled by 36 degrees Celsius.')).map(([id]) => id)).toEqual(['unit.scale-slip']);
+  });
+});
