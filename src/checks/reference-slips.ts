@@ -168,7 +168,7 @@ function scaleWordReadings(q: Quantity): Reading[] {
     if (meant === undefined) return [];
     const k = meant[1] / written[1];
     const [low, high] = [q.low * k, q.high * k].sort((a, b) => a - b) as [number, number];
-    return [{ low, high, value: q.value * k, ratio: Math.max(k, 1 / k), what: `"${meant[0]}" meant where "${written[0]}" was written`, shown: (value: number) => `${formatQuantity(value, q.unit, q.statedUnit)} (${meant[0]}, not ${written[0]})` }];
+    return [{ low, high, value: q.value * k, ratio: Math.max(k, 1 / k), what: `"${meant[0]}" meant where "${written[0]}" was written`, shown: () => `${withWord(q.text, written[0], meant[0])} (${meant[0]}, not ${written[0]})` }];
   });
 }
 
@@ -221,4 +221,14 @@ function offsetReadings(q: Quantity): Reading[] {
 function placesKept(q: Quantity, value: number): number {
   const decimals = q.text.split('.')[1]?.match(/^\d+/u)?.[0].length ?? 0;
   return Math.max(1, Math.floor(Math.log10(Math.max(Math.abs(value), 1))) + 1 + decimals);
+}
+
+/** `text` with the whole word `word` (any case) put as `other`: "between 26.5 and 19 million years" → "... thousand years". */
+function withWord(text: string, word: string, other: string): string {
+  const lower = text.toLowerCase();
+  const isLetter = (c: string | undefined) => c !== undefined && /\p{L}/u.test(c);
+  for (let at = lower.indexOf(word); at >= 0; at = lower.indexOf(word, at + 1)) {
+    if (!isLetter(text[at - 1]) && !isLetter(text[at + word.length])) return text.slice(0, at) + other + text.slice(at + word.length);
+  }
+  return text;
 }

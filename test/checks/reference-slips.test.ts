@@ -156,8 +156,9 @@ describe('unit slips of every dimension, through the engine', () => {
     ['Greenland at the Last Glacial Maximum: a cooling of 40 degrees Celsius at the summit.', /^40 °F \(22 degrees Celsius\)$/u],
     ['At the Last Glacial Maximum the Greenland summit saw a drop of 295 K.', /^22 K \(295 K is an absolute temperature, 22 °C, not a difference\)$/u],
     ['Before industry, CO2 stood at 280 parts per billion.', /^280 ppm \(280,000 parts per billion\)$/u],
-    ['The Pleistocene began 2.58 thousand years ago.', /^2,580,000 years ago \(million, not thousand\)$/u],
-    ['The EPICA Dome C core holds a record of 800 million years.', /^800,000 years \(thousand, not million\)$/u],
+    ['The Pleistocene began 2.58 thousand years ago.', /^2\.58 million years ago \(million, not thousand\)$/u],
+    ['The ice sheets held their greatest extent between 26.5 and 19 million years ago.', /^between 26\.5 and 19 thousand years ago \(thousand, not million\)$/u],
+    ['The EPICA Dome C core holds a record of 800 million years.', /^800 thousand years \(thousand, not million\)$/u],
     ['In the 2010s CO2 grew by about 2.4 ppm per decade.', /^2\.4 ppm per year \(about 24 ppm per decade\)$/u],
   ])('%s', async (text, correction) => {
     const flags = await flagsOf(text);
