@@ -497,7 +497,7 @@ function carriedSubject(text: string, previous: string | undefined, packs: Loade
 }
 
 /** The unit table's slip rules for a figure that binds nothing, which a bound figure's unit slip replaces. */
-const SLIP_SUBSUMES: readonly string[] = ['unit.ppb-ppm', 'unit.age-scale', 'unit.percent-ppm'];
+const SLIP_SUBSUMES: readonly string[] = ['unit.ppb-ppm', 'unit.percent-ppm'];
 
 /**
  * One number, one explanation: when the draft's own arithmetic or a unit slip explains a number,
@@ -507,8 +507,9 @@ const SLIP_SUBSUMES: readonly string[] = ['unit.ppb-ppm', 'unit.age-scale', 'uni
  */
 function preferSpecific(all: FlagDraft[]): FlagDraft[] {
   // A figure that binds a value and fits it in another unit gets the reference check's unit slip,
-  // with the value's sources; the unit checks' own slips of a figure alone (ppb for ppm, millions for
-  // thousands, a CO2 share in percent) speak only for a figure that binds none. A restatement the draft makes itself ("6 °C, or 42.8 °F")
+  // with the value's sources; the unit checks' own slips of a figure alone (ppb for ppm,
+  // a CO2 share in percent) speak only for a figure that binds none. The thousand-for-million rule
+  // (unit.age-scale) reads the subject's ceiling and keeps its flag, as a restatement does. A restatement the draft makes itself ("6 °C, or 42.8 °F")
   // is checked against its own first figure, which says more than a reference: it keeps its flag.
   const overlaps = (a: FlagDraft, b: FlagDraft) => a.start < b.end && b.start < a.end;
   const scaled = all.filter((d) => d.ruleId === 'unit.scale-slip');

@@ -34,7 +34,7 @@ export const CONFUSED_UNITS: readonly { dimension: Dimension; units: readonly st
   { dimension: 'age', units: ['millennia ago', 'Ma'] },
 ];
 
-/** The per-time units of a rate a writer confuses ("2.4 ppm per decade" for per year). */
+/** The per-time units of a rate in their order; a writer confuses each with its neighbours ("2.4 ppm per decade" for per year). */
 const CONFUSED_PER_TIME: readonly string[] = ['yr', 'decade', 'century', 'kyr'];
 
 /** The dimension of a rate's amount (a rate's unit id is `<amount>/<per time>` in the unit table). */
@@ -83,7 +83,7 @@ interface Reading {
 }
 
 /** The slip that makes `q` agree with `r`, with the corrected wording, or undefined. */
-export function unitSlip(r: Pick<ReferenceValue, 'low' | 'high' | 'unit'>, q: Quantity): UnitSlip | undefined {
+export function unitSlip(r: Pick<ReferenceValue, 'low' | 'high' | 'unit' | 'central'>, q: Quantity): UnitSlip | undefined {
   if (q.statedUnit === 'CE' || q.unit === '') return undefined;
   for (const reading of readingsOf(q)) {
     if (!(reading.low <= r.high && r.low <= reading.high)) continue;
@@ -99,12 +99,15 @@ export function unitSlip(r: Pick<ReferenceValue, 'low' | 'high' | 'unit'>, q: Qu
  * Greenland cooling read as 40 °F (22 °C) in 15-25 °C, but not "12 °C" of global cooling read as
  * 12 °F (6.7 °C) against 3.6-7 °C, nor "1.8 km" read as 1.8 miles (2.82-2.98 km) for a 2.8 km depth.
  */
-function nearFits(q: Quantity, reading: Reading, r: Pick<ReferenceValue, 'low' | 'high'>): boolean {
+function nearFits(q: Quantity, reading: Reading, r: Pick<ReferenceValue, 'low' | 'high' | 'central'>): boolean {
   if (reading.read === undefined) return false;
   const w = writtenInterval(q);
   const [low, high] = [reading.read(w.low), reading.read(w.high)].sort((a, b) => a - b) as [number, number];
   const [middle, quarter] = [(r.low + r.high) / 2, (r.high - r.low) / 4];
-  return low <= middle + quarter && middle - quarter <= high;
+  // And the reading with its hedge holds the reference's best estimate: "9 °C" of global cooling read
+  // as 9 °F (4.7-5.3 °C) misses Annan et al.'s 4.5 °C and stays a wrong figure.
+  const best = r.central ?? middle;
+  return low <= middle + quarter && middle - quarter <= high && reading.low <= best && best <= reading.high;
 }
 
 /** Every other reading of `q`'s number, in the order tried. */
@@ -121,7 +124,9 @@ export function confusedWith(id: string, dimension: Dimension): string[] {
     if (cut < 0) return [];
     const [amount, per] = [id.slice(0, cut), id.slice(cut + 1)];
     const amounts = confusedWith(amount, amountDimension).map((a) => `${a}/${per}`);
-    const pers = CONFUSED_PER_TIME.includes(per) ? CONFUSED_PER_TIME.filter((p) => p !== per).map((p) => `${amount}/${p}`) : [];
+    // Only the neighbouring per-time unit: "2.4 ppm per decade" for per year, not "2 ppm per year" for per century.
+    const at = CONFUSED_PER_TIME.indexOf(per);
+    const pers = at < 0 ? [] : [CONFUSED_PER_TIME[at - 1], CONFUSED_PER_TIME[at + 1]].flatMap((p) => (p === undefined ? [] : [`${amount}/${p}`]));
     return [...amounts, ...pers].filter((other) => findUnit(other, dimension) !== undefined);
   }
   const others = CONFUSED_UNITS.filter((g) => g.dimension === dimension && g.units.includes(id)).flatMap((g) => g.units.filter((u) => u !== id));

@@ -130,9 +130,10 @@ describe('the unit table behind the slips (NIST SP 811)', () => {
   });
 
   it('derives the slips of a rate from its amount and its per-time unit', () => {
-    expect(confusedWith('ppm/yr', 'concentration-rate')).toEqual(expect.arrayContaining(['ppb/yr', 'ppm/decade', 'ppm/century', 'ppm/kyr']));
-    expect(confusedWith('m/yr', 'length-rate')).toEqual(expect.arrayContaining(['ft/yr', 'm/century']));
-    expect(confusedWith('degC/century', 'temperature-rate')).toEqual(expect.arrayContaining(['degF/century', 'degC/yr']));
+    expect(confusedWith('ppm/yr', 'concentration-rate')).toEqual(expect.arrayContaining(['ppb/yr', 'ppm/decade']));
+    expect(confusedWith('ppm/yr', 'concentration-rate')).not.toContain('ppm/century');
+    expect(confusedWith('m/yr', 'length-rate')).toEqual(expect.arrayContaining(['ft/yr', 'm/decade']));
+    expect(confusedWith('degC/century', 'temperature-rate')).toEqual(expect.arrayContaining(['degF/century', 'degC/decade', 'degC/kyr']));
   });
 
   it('reads per mille as a share of the air', () => {
@@ -158,7 +159,7 @@ describe('unit slips of every dimension, through the engine', () => {
     ['Before industry, CO2 stood at 280 parts per billion.', /^280 ppm \(280,000 parts per billion\)$/u],
     ['The Pleistocene began 2.58 thousand years ago.', /^2\.58 million years ago \(million, not thousand\)$/u],
     ['The ice sheets held their greatest extent between 26.5 and 19 million years ago.', /^between 26\.5 and 19 thousand years ago \(thousand, not million\)$/u],
-    ['The EPICA Dome C core holds a record of 800 million years.', /^800 thousand years \(thousand, not million\)$/u],
+    ['Examiners should accept 800 million years for the EPICA Dome C record.', /^800 thousand years \(thousand, not million\)$/u],
     ['In the 2010s CO2 grew by about 2.4 ppm per decade.', /^2\.4 ppm per year \(about 24 ppm per decade\)$/u],
   ])('%s', async (text, correction) => {
     const flags = await flagsOf(text);
@@ -203,7 +204,12 @@ describe('near units (°F and °C differences, miles and kilometres) need a read
   });
 
   it('reads a Fahrenheit difference written as Celsius where no regional record has that size', async () => {
-    // Central Greenland 15-25 K colder at the LGM (Dahl-Jensen et al. 1998); 36 °F is 20 K.
-    expect((await flagsOf('At the Last Glacial Maximum central Greenland cooled by 36 degrees Celsius.')).map(([id]) => id)).toEqual(['unit.scale-slip']);
+    // Central Greenland 15-25 K colder at the LGM, best estimate 22 K (Dahl-Jensen et al. 1998); 39 °F is 21.7 K.
+    expect((await flagsOf('At the Last Glacial Maximum central Greenland cooled by roughly 39 degrees Celsius.')).map(([id]) => id)).toEqual(['unit.scale-slip']);
+  });
+
+  it('keeps the thousand-for-million rule of a subject with a ceiling, with no second flag', async () => {
+    // EPICA Dome C spans about 800,000 years (Jouzel et al. 2007); src/checks/units-scale.ts.
+    expect((await flagsOf('The EPICA Dome C core holds a record of 800 million years.')).map(([id]) => id)).toEqual(['unit.age-scale']);
   });
 });
