@@ -501,6 +501,9 @@ function carriedSubject(text: string, previous: string | undefined, packs: Loade
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
 
+/** The unit table's slip rules for a figure that binds nothing, which a bound figure's unit slip replaces. */
+const SLIP_SUBSUMES: readonly string[] = ['unit.ppb-ppm', 'unit.percent-ppm'];
+
 /**
  * One number, one explanation: when the draft's own arithmetic or a unit slip explains a number,
  * a reference-value flag on the same words is dropped ("0.4 percent" is a ppm/percent slip, and
@@ -508,10 +511,17 @@ function carriedSubject(text: string, previous: string | undefined, packs: Loade
  * out of range). The arithmetic or unit flag carries the corrected number.
  */
 function preferSpecific(all: FlagDraft[]): FlagDraft[] {
-  // A CO2 figure in ppb that binds a value gets the reference check's unit slip, with the value's
-  // sources; the unit table's ppb rule speaks only for a figure that binds none.
+  // A figure that binds a value and fits it in another unit gets the reference check's unit slip,
+  // with the value's sources; the unit checks' own slips of a figure alone (ppb for ppm,
+  // a CO2 share in percent) speak only for a figure that binds none. The thousand-for-million rule
+  // (unit.age-scale) reads the subject's ceiling and keeps its flag, as a restatement does. A restatement the draft makes itself ("6 °C, or 42.8 °F")
+  // is checked against its own first figure, which says more than a reference: it keeps its flag.
+  const overlaps = (a: FlagDraft, b: FlagDraft) => a.start < b.end && b.start < a.end;
   const scaled = all.filter((d) => d.ruleId === 'unit.scale-slip');
-  const drafts = scaled.length === 0 ? all : all.filter((d) => d.ruleId !== 'unit.ppb-ppm' || !scaled.some((s) => s.start < d.end && d.start < s.end));
+  const restated = all.filter((d) => d.ruleId.startsWith('unit.') && d.ruleId !== 'unit.scale-slip' && !SLIP_SUBSUMES.includes(d.ruleId));
+  const drafts = scaled.length === 0
+    ? all
+    : all.filter((d) => (SLIP_SUBSUMES.includes(d.ruleId) ? !scaled.some((s) => overlaps(s, d)) : d.ruleId !== 'unit.scale-slip' || !restated.some((s) => overlaps(s, d))));
   const specific = drafts.filter((d) => d.ruleId.startsWith('arith.') || d.ruleId.startsWith('unit.'));
   if (specific.length === 0) return drafts;
   return drafts.filter((d) => !d.ruleId.startsWith('value.') || !specific.some((s) => s.start < d.end && d.start < s.end));

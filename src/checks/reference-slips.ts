@@ -2,74 +2,238 @@
  * A conflicting figure that matches its reference once its unit or scale is read as another: the
  * number is right and the unit word is wrong. "Drilling ended at 3,270 feet" (metres meant), "we are
  * at 424 parts per billion" (ppm meant), "the ice reaches back 800 years" (800,000 meant), "the
- * Pleistocene began 2.58 kyr ago" (million meant). Such a claim gets a unit flag that names the slip
- * instead of a value flag that only says the number is out of range.
+ * Pleistocene began 2.58 thousand years ago" (million meant), "a cooling of 10 °C" (10 °F meant), "a
+ * drop of 295 K" (a change of 22 K with 273.15 added). Such a claim gets a unit flag that names the
+ * slip instead of a value flag that only says the number is out of range.
  *
- * The readings tried, each a unit swap inside one dimension (factors from NIST SP 811: 1 ft =
- * 0.3048 m; SI prefixes k = 10^3, M = 10^6; ppm and ppb are 10^-6 and 10^-9 of the air by volume):
- * feet for metres and metres for feet, ppb for ppm, ppm for percent, BCE for years before present, and a thousand-fold slip of a time in either direction (years for
- * thousands of years, thousands for millions). Temperatures are left out: a change read in °F
- * instead of °C is 5/9 of itself, close enough to many a wrong figure to excuse it as a slip; the
- * restatement rules catch °F slips where both units are written.
+ * The readings are data, not rules per wording: CONFUSED_UNITS lists, per dimension, the units a
+ * writer mixes up; every reading converts through the unit table (unit-table.ts, factors from NIST SP
+ * 811, 2008, Appendix B.8 and B.9: 1 ft = 0.3048 m, 1 mile = 1609.344 m, a difference of 1 °F = 5/9 K,
+ * T/K = t/°C + 273.15; SI prefixes k = 10^3, M = 10^6, G = 10^9; 1% = 10^-2, 1 ppm = 10^-6 and 1 ppb =
+ * 10^-9 of the air by volume). A rate's slips are derived: its amount's units and its per-time units
+ * (per year, decade, century, thousand years) are each confused as the units of their own dimension.
+ * Three more readings come from the table too: a scale word read as its neighbour (SCALE_WORDS), an
+ * era read for "ago" (BCE, whose offset is in the table) and a difference written with the offset of
+ * an absolute temperature (the table's offsets of K and °F).
  */
-import { convert, correctionFigures, formatQuantity, rewriteQuantity } from '../quantities/index.js';
+import { convert, correctionFigures, findUnit, formatQuantity, rewriteQuantity, writtenInterval } from '../quantities/index.js';
 import type { ReferenceValue } from '../rulepack/types.js';
 import type { Dimension, Quantity } from '../types.js';
+import { relativeDistance } from './reference-distance.js';
 
-/** One reading: the stated number in another unit, or scaled. */
-interface Slip {
-  dimensions: Dimension[];
-  /** Applies when the quantity was stated in this unit. */
-  from: string[];
-  /** The unit the number was meant in (undefined: the same unit, scaled). */
-  to?: string;
-  /** A scale on the canonical interval (1000: thousands meant where years were written). */
-  scale?: number;
-  /** With a scale: the unit that keeps the draft's number ("2.58 ka" reads "2.58 Ma"). */
-  swap?: Record<string, string>;
-  /** With a unit swap: the right figure is also given in the draft's own words ("(about 10,700 feet)"). */
-  alsoAsWritten?: boolean;
-  /** Significant figures of that restatement, when the draft's own are too few (an era's offset is exact). */
-  asWrittenFigures?: number;
-  what: string;
-}
-
-const SLIPS: readonly Slip[] = [
-  { dimensions: ['length'], from: ['ft'], to: 'm', alsoAsWritten: true, what: 'feet written for metres (1 ft = 0.3048 m)' },
-  // "the seas were 400 metres lower" (400 feet meant): the American reader's feet, written as metres.
-  { dimensions: ['length'], from: ['m'], to: 'ft', alsoAsWritten: true, what: 'metres written for feet (1 ft = 0.3048 m)' },
-  { dimensions: ['concentration', 'concentration-rate'], from: ['ppb'], to: 'ppm', what: 'parts per billion written for parts per million (1 ppm = 1,000 ppb)' },
-  // "CO2 is barely 0.04 parts per million of the air" (0.04 percent meant): a share in percent, written in ppm.
-  { dimensions: ['concentration'], from: ['ppm'], to: '%', what: 'parts per million written for percent (1% = 10,000 ppm)' },
-  // "the Holocene began around 11,700 BC" (11,700 years ago meant): the era written for "ago".
-  // Y BCE = (1949 + Y) BP (unit-table.ts). Not the other way round: a date "years ago" some two
-  // thousand years off ("over by about 9,000 years ago") is far more often a wrong figure.
-  { dimensions: ['age'], from: ['BCE'], to: 'yr ago', alsoAsWritten: true, asWrittenFigures: 4, what: 'BCE written for years before present (Y BCE is 1,949 + Y years BP)' },
-  { dimensions: ['age', 'duration'], from: ['yr', 'yr ago', 'yr BP', 'kyr', 'ka', 'century', 'millennium'], scale: 1000, swap: { ka: 'Ma', kyr: 'Myr' }, what: 'a thousand-fold slip: thousands meant and not written, or thousands written for millions (SI: k = 10^3, M = 10^6)' },
-  { dimensions: ['age', 'duration'], from: ['kyr', 'ka', 'Myr', 'Ma'], scale: 1 / 1000, swap: { Ma: 'ka', Myr: 'kyr' }, what: 'a thousand-fold slip: millions written for thousands, or thousands for units (SI: k = 10^3, M = 10^6)' },
+/** The units a writer confuses within one dimension, as unit-table ids. */
+export const CONFUSED_UNITS: readonly { dimension: Dimension; units: readonly string[] }[] = [
+  { dimension: 'length', units: ['m', 'ft', 'km', 'mi'] },
+  { dimension: 'temperature-change', units: ['K', 'degC', 'degF'] },
+  { dimension: 'concentration', units: ['%', 'permille', 'ppm', 'ppb'] },
+  // Years, thousands and millions of years: the thousand-fold ladder of a time.
+  { dimension: 'duration', units: ['yr', 'kyr', 'Myr'] },
+  { dimension: 'duration', units: ['ka', 'Ma'] },
+  { dimension: 'age', units: ['yr ago', 'ka', 'Ma'] },
+  { dimension: 'age', units: ['yr BP', 'ka', 'Ma'] },
+  { dimension: 'age', units: ['millennia ago', 'Ma'] },
 ];
 
+/** The per-time units of a rate in their order; a writer confuses each with its neighbours ("2.4 ppm per decade" for per year). */
+const CONFUSED_PER_TIME: readonly string[] = ['yr', 'decade', 'century', 'kyr'];
+
+/** The dimension of a rate's amount (a rate's unit id is `<amount>/<per time>` in the unit table). */
+const AMOUNT_OF_RATE: Partial<Record<Dimension, Dimension>> = {
+  'concentration-rate': 'concentration',
+  'temperature-rate': 'temperature-change',
+  'length-rate': 'length',
+};
+
+/** Scale words in their order: each one is confused with its neighbours ("2.58 thousand" for million). */
+const SCALE_WORDS: readonly [string, number][] = [
+  ['thousand', 1e3],
+  ['million', 1e6],
+  ['billion', 1e9],
+];
+
+/**
+ * Below this ratio two units are near enough that a wrong figure often fits the other reading by
+ * chance (°F and °C differences: 1.8; miles and kilometres: 1.6); such a slip is read only when the
+ * other reading lands in the middle of the reference (nearFits) and the figure as written is well
+ * outside it.
+ */
+const NEAR_RATIO = 2.5;
+/** How far outside its reference a figure must be (relativeDistance) for a near-unit slip. */
+const NEAR_MIN_DISTANCE = 0.3;
+
+/** What a slip found says and the reading that fits. */
+export interface UnitSlip {
+  what: string;
+  correction: string;
+  low: number;
+  high: number;
+}
+
+interface Reading {
+  /** The canonical interval and value when the number is read the other way. */
+  low: number;
+  high: number;
+  value: number;
+  /** The factor between the two readings (≥ 1), for the near-unit guard. */
+  ratio: number;
+  /** A unit swap's reading of one canonical figure. */
+  read?: (x: number) => number;
+  what: string;
+  shown: (value: number) => string;
+}
+
 /** The slip that makes `q` agree with `r`, with the corrected wording, or undefined. */
-export function unitSlip(r: Pick<ReferenceValue, 'low' | 'high' | 'unit'>, q: Quantity): { what: string; correction: string; low: number; high: number } | undefined {
+export function unitSlip(r: Pick<ReferenceValue, 'low' | 'high' | 'unit' | 'central'>, q: Quantity): UnitSlip | undefined {
   if (q.statedUnit === 'CE' || q.unit === '') return undefined;
-  for (const slip of SLIPS) {
-    if (!slip.dimensions.includes(q.dimension) || !slip.from.includes(q.statedUnit)) continue;
-    let low: number;
-    let high: number;
-    let shown: () => string;
-    if (slip.to !== undefined) {
-      // The number as written, read in the other unit, then taken to the canonical unit.
-      const asWritten = (x: number) => convert(x, q.unit, q.statedUnit, q.dimension);
-      const toOther = (x: number) => convert(asWritten(x), slip.to as string, q.unit, q.dimension);
-      [low, high] = [toOther(q.low), toOther(q.high)].sort((a, b) => a - b) as [number, number];
-      const meant = toOther(q.value);
-      shown = () => formatQuantity(meant, q.unit, slip.to as string) + (slip.alsoAsWritten === true ? ` (${rewriteQuantity(q, meant, correctionFigures(q, slip.asWrittenFigures ?? 2))})` : '');
-    } else {
-      const k = slip.scale ?? 1;
-      [low, high] = [q.low * k, q.high * k];
-      shown = () => formatQuantity(q.value * k, q.unit, slip.swap?.[q.statedUnit] ?? q.statedUnit);
-    }
-    if (low <= r.high && r.low <= high) return { what: slip.what, correction: shown(), low, high };
+  for (const reading of readingsOf(q)) {
+    if (!(reading.low <= r.high && r.low <= reading.high)) continue;
+    if (reading.ratio < NEAR_RATIO && !(nearFits(q, reading, r) && relativeDistance(q.low, q.high, r) >= NEAR_MIN_DISTANCE)) continue;
+    return { what: reading.what, correction: reading.shown(reading.value), low: reading.low, high: reading.high };
   }
   return undefined;
+}
+
+/**
+ * A near unit's reading fits only when the number as written (its last digit, without its hedge)
+ * lands in the middle half of the reference, or on a reference given as one figure: "about 40 °C" of
+ * Greenland cooling read as 40 °F (22 °C) in 15-25 °C, but not "12 °C" of global cooling read as
+ * 12 °F (6.7 °C) against 3.6-7 °C, nor "1.8 km" read as 1.8 miles (2.82-2.98 km) for a 2.8 km depth.
+ */
+function nearFits(q: Quantity, reading: Reading, r: Pick<ReferenceValue, 'low' | 'high' | 'central'>): boolean {
+  if (reading.read === undefined) return false;
+  const w = writtenInterval(q);
+  const [low, high] = [reading.read(w.low), reading.read(w.high)].sort((a, b) => a - b) as [number, number];
+  const [middle, quarter] = [(r.low + r.high) / 2, (r.high - r.low) / 4];
+  // And the reading with its hedge holds the reference's best estimate: "9 °C" of global cooling read
+  // as 9 °F (4.7-5.3 °C) misses Annan et al.'s 4.5 °C and stays a wrong figure.
+  const best = r.central ?? middle;
+  return low <= middle + quarter && middle - quarter <= high && reading.low <= best && best <= reading.high;
+}
+
+/** Every other reading of `q`'s number, in the order tried. */
+function readingsOf(q: Quantity): Reading[] {
+  // A scale word written ("2.58 thousand years") is the slip before the unit it scales.
+  return [...scaleWordReadings(q), ...swapReadings(q), ...eraReadings(q), ...offsetReadings(q)];
+}
+
+/** The unit ids `id` is confused with in `dimension`, a rate's derived from its amount and its per-time unit. */
+export function confusedWith(id: string, dimension: Dimension): string[] {
+  const amountDimension = AMOUNT_OF_RATE[dimension];
+  if (amountDimension !== undefined) {
+    const cut = id.lastIndexOf('/');
+    if (cut < 0) return [];
+    const [amount, per] = [id.slice(0, cut), id.slice(cut + 1)];
+    const amounts = confusedWith(amount, amountDimension).map((a) => `${a}/${per}`);
+    // Only the neighbouring per-time unit: "2.4 ppm per decade" for per year, not "2 ppm per year" for per century.
+    const at = CONFUSED_PER_TIME.indexOf(per);
+    const pers = at < 0 ? [] : [CONFUSED_PER_TIME[at - 1], CONFUSED_PER_TIME[at + 1]].flatMap((p) => (p === undefined ? [] : [`${amount}/${p}`]));
+    return [...amounts, ...pers].filter((other) => findUnit(other, dimension) !== undefined);
+  }
+  const others = CONFUSED_UNITS.filter((g) => g.dimension === dimension && g.units.includes(id)).flatMap((g) => g.units.filter((u) => u !== id));
+  return [...new Set(others)].filter((other) => findUnit(other, dimension) !== undefined);
+}
+
+/** The number read in each confused unit: "3,270 feet" as 3,270 m, "10 °C" of cooling as 10 °F. */
+function swapReadings(q: Quantity): Reading[] {
+  const from = findUnit(q.statedUnit, q.dimension);
+  if (from === undefined) return [];
+  return confusedWith(q.statedUnit, q.dimension).flatMap((to) => {
+    const other = findUnit(to, q.dimension);
+    if (other === undefined || other.factor === from.factor) return [];
+    const read = (x: number) => convert(convert(x, q.unit, q.statedUnit, q.dimension), to, q.unit, q.dimension);
+    const [low, high] = [read(q.low), read(q.high)].sort((a, b) => a - b) as [number, number];
+    const ratio = Math.max(other.factor / from.factor, from.factor / other.factor);
+    // A time's thousand-fold slip keeps the draft's own words ("800 years" → "800,000 years").
+    const time = q.dimension === 'age' || q.dimension === 'duration';
+    const ownWords = q.statedUnit === 'yr' || q.statedUnit.startsWith('yr ');
+    const shown = time
+      ? (value: number) => (ownWords ? `${formatQuantity(value, q.unit, q.statedUnit)} (${formatQuantity(value, q.unit, to)}, not ${q.text})` : formatQuantity(value, q.unit, to))
+      : (value: number) => `${formatQuantity(value, q.unit, to)} (${rewriteQuantity(q, value, correctionFigures(q, 2))})`;
+    return [{ low, high, value: read(q.value), ratio, read, what: `${other.display} meant where ${from.display} was written (${factorWords(from.display, other.display, ratio, from.factor < other.factor)})`, shown }];
+  });
+}
+
+/** "1 mile = 1.61 km": how many of the smaller unit make the larger, for the reason. */
+function factorWords(written: string, meant: string, ratio: number, writtenSmaller: boolean): string {
+  const [small, large] = writtenSmaller ? [written, meant] : [meant, written];
+  return `1 ${large} = ${formatRatio(ratio)} ${small}`;
+}
+
+function formatRatio(ratio: number): string {
+  return ratio >= 100 ? ratio.toLocaleString('en-GB', { maximumFractionDigits: 0 }) : String(Number(ratio.toPrecision(4)));
+}
+
+/** A scale word read as its neighbour: "2.58 thousand years ago" as 2.58 million, "1.2 billion years" as million. */
+function scaleWordReadings(q: Quantity): Reading[] {
+  const words = q.text.toLowerCase().split(/[^\p{L}]+/u);
+  const at = SCALE_WORDS.findIndex(([w]) => words.includes(w));
+  const written = SCALE_WORDS[at];
+  if (written === undefined) return [];
+  return [SCALE_WORDS[at - 1], SCALE_WORDS[at + 1]].flatMap((meant) => {
+    if (meant === undefined) return [];
+    const k = meant[1] / written[1];
+    const [low, high] = [q.low * k, q.high * k].sort((a, b) => a - b) as [number, number];
+    return [{ low, high, value: q.value * k, ratio: Math.max(k, 1 / k), what: `"${meant[0]}" meant where "${written[0]}" was written`, shown: () => `${withWord(q.text, written[0], meant[0])} (${meant[0]}, not ${written[0]})` }];
+  });
+}
+
+/**
+ * "The Holocene began around 11,700 BC" (11,700 years ago meant): the era written for "ago", with the
+ * era's offset from the unit table (Y BCE = (1949 + Y) BP). Not the other way round: a date "years
+ * ago" some two thousand years off ("over by about 9,000 years ago") is far more often a wrong figure.
+ */
+function eraReadings(q: Quantity): Reading[] {
+  if (q.dimension !== 'age' || q.statedUnit !== 'BCE') return [];
+  const read = (x: number) => convert(convert(x, q.unit, 'BCE', 'age'), 'yr ago', q.unit, 'age');
+  return [
+    {
+      low: read(q.low),
+      high: read(q.high),
+      value: read(q.value),
+      ratio: Infinity,
+      what: 'BCE written for years before present (Y BCE is 1,949 + Y years BP)',
+      shown: (value: number) => `${formatQuantity(value, q.unit, 'yr ago')} (${rewriteQuantity(q, value, correctionFigures(q, 4))})`,
+    },
+  ];
+}
+
+/**
+ * A difference written with the offset of an absolute temperature: "a drop of 295 K" (22 °C + 273.15),
+ * "a cooling of 42.8 °F" (6 °C × 1.8 + 32). The number is read as an absolute temperature in its own
+ * unit and taken in °C, which is the change meant; the offsets are the unit table's.
+ */
+function offsetReadings(q: Quantity): Reading[] {
+  if (q.dimension !== 'temperature-change') return [];
+  const absolute = findUnit(q.statedUnit, 'temperature');
+  if (absolute === undefined || absolute.offset === 0) return [];
+  const read = (x: number) => convert(convert(x, q.unit, q.statedUnit, q.dimension), q.statedUnit, 'degC', 'temperature');
+  return [
+    {
+      low: read(q.low),
+      high: read(q.high),
+      value: read(q.value),
+      ratio: Infinity,
+      what: `an absolute temperature in ${absolute.display} written for a difference (a difference of 1 °C is 1 K; only an absolute temperature adds 273.15 K or 32 °F)`,
+      shown: (value: number) => {
+        const figures = placesKept(q, value);
+        return `${rewriteQuantity(q, value, figures)} (${q.text} is an absolute temperature, ${formatQuantity(value, 'degC', 'degC', figures)}, not a difference)`;
+      },
+    },
+  ];
+}
+
+/** Significant figures that keep the decimal places the draft wrote: taking off an offset keeps them ("295 K" less 273.15 is 22 K). */
+function placesKept(q: Quantity, value: number): number {
+  const decimals = q.text.split('.')[1]?.match(/^\d+/u)?.[0].length ?? 0;
+  return Math.max(1, Math.floor(Math.log10(Math.max(Math.abs(value), 1))) + 1 + decimals);
+}
+
+/** `text` with the whole word `word` (any case) put as `other`: "between 26.5 and 19 million years" → "... thousand years". */
+function withWord(text: string, word: string, other: string): string {
+  const lower = text.toLowerCase();
+  const isLetter = (c: string | undefined) => c !== undefined && /\p{L}/u.test(c);
+  for (let at = lower.indexOf(word); at >= 0; at = lower.indexOf(word, at + 1)) {
+    if (!isLetter(text[at - 1]) && !isLetter(text[at + word.length])) return text.slice(0, at) + other + text.slice(at + word.length);
+  }
+  return text;
 }

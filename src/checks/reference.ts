@@ -18,6 +18,9 @@ import type { Binding, FlagDraft, Quantity, Verdict } from '../types.js';
 import { correctionFor, shownClaim, shownReference } from './reference-format.js';
 import { factorOff, levelWithDistance } from './distance-level.js';
 import { unitSlip } from './reference-slips.js';
+import { relativeDistance } from './reference-distance.js';
+
+export { relativeDistance };
 import { checkEnds } from './reference-ends.js';
 import { isDeniedFigure } from './denied-figure.js';
 import { endpointPairs } from '../claims/bind-role.js';
@@ -25,17 +28,6 @@ import { statesRange } from '../quantities/range-ends.js';
 
 /** The pack term whose words mark a claim about the present ("today", "now"...). */
 export const TODAY_TERM = 'today';
-
-/**
- * How far a claim lies outside a reference range, relative to the range's magnitude:
- * 0 when they overlap; `gap / max(|low|, |high|, high - low)` otherwise.
- */
-export function relativeDistance(low: number, high: number, r: Pick<ReferenceValue, 'low' | 'high'>): number {
-  const gap = Math.max(r.low - high, low - r.high, 0);
-  if (gap === 0) return 0;
-  const scale = Math.max(Math.abs(r.low), Math.abs(r.high), r.high - r.low);
-  return scale === 0 ? Infinity : gap / scale;
-}
 
 /** Checks each binding; returns the flags of conflicting claims and a verdict per binding. */
 export function checkReferences(sentence: string, quantities: Quantity[], bindings: Binding[], packs: LoadedPacks): { flags: FlagDraft[]; verdicts: Verdict[] } {
@@ -72,8 +64,12 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     const matched = distance === 0 ? undefined : supersededMatch(r, q, packs);
     if (matched !== undefined && r.asOf === undefined) aboutToday ??= findTerms(sentence, packs).has(TODAY_TERM);
     const older = matched !== undefined && (r.asOf !== undefined || aboutToday !== true) ? matched : undefined;
+    // A global figure that is the size of a regional change ("the whole Earth was 9 °C colder": the
+    // Antarctic warming) is the regional record told as global: the scope check's flag, not a value's.
+    const regional = distance === 0 || matched !== undefined ? undefined : regionalMatch(r, q, packs);
     // The right number in the wrong unit ("3,270 feet" for the 3,270 m core): a unit flag says so.
-    const slip = distance === 0 || matched !== undefined ? undefined : unitSlip(r, q);
+    // A figure that is another record's own value as written (a regional change) is no unit slip.
+    const slip = distance === 0 || matched !== undefined || regional !== undefined ? undefined : unitSlip(r, q);
     if (slip !== undefined) {
       flags.push({
         ruleId: 'unit.scale-slip',
@@ -88,9 +84,6 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
       });
       continue;
     }
-    // A global figure that is the size of a regional change ("the whole Earth was 9 °C colder": the
-    // Antarctic warming) is the regional record told as global: the scope check's flag, not a value's.
-    const regional = distance === 0 || matched !== undefined ? undefined : regionalMatch(r, q, packs);
     // Only a sentence that names a regional record presents that record as global; one that names
     // none ("At the LGM the planet was some 12 °C colder") states a wrong global value, whose reason
     // says whose size it is.

@@ -91,6 +91,8 @@ const BASE_UNITS: UnitDef[] = [
   u('ppb', 'concentration', 1e-3, 'ppb', PPB),
   // A percentage of the air, for the ppm ↔ % check only: the parser reads "%" as a percent.
   u('%', 'concentration', 1e4, '%', []),
+  // Per mille (‰): a thousandth of the air by volume, 1‰ = 1,000 ppm (SI: 10^-3).
+  u('permille', 'concentration', 1e3, '‰', ['‰', words('per (?:mille|mil)')]),
   u('%', 'percent', 1, '%', ['%', words('per(?: |)cent')]),
   u('degC', 'temperature', 1, '°C', DEG_C),
   u('degF', 'temperature', 5 / 9, '°F', DEG_F, -32 * (5 / 9)),
