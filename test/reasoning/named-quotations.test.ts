@@ -49,7 +49,7 @@ describe('a claim set out to be judged', () => {
   });
 
   it('a question between two alternatives that the sentence answers stays the either/or error', async () => {
-    const text = 'My students always ask whether CO2 drives temperature or temperature drives CO2, and the cores answer it: temperature drives CO2, never the reverse.';
+    const text = 'Visitors to the gallery wonder whether CO2 drives temperature or temperature drives CO2, and the cores answer it: temperature drives CO2, never the reverse.';
     expect(await levels(text, 'logic.either-or-causation')).toEqual(['warning']);
   });
 
