@@ -151,7 +151,7 @@ function isTrueOrFalseItem(text: string): boolean {
 }
 
 /** The true-or-false mark standing as a sentence of its own after the statement it asks about. */
-const TRUE_OR_FALSE_ALONE = /^[\s(\[]*(?:T\s*\/\s*F|true\s*(?:\/|or)\s*false)\s*[)\]?.!]*\s*$/iu;
+const TRUE_OR_FALSE_ALONE = /^[\s([]*(?:T\s*\/\s*F|true\s*(?:\/|or)\s*false)\s*[)\]?.!]*\s*$/iu;
 
 /**
  * "One reader asked whether the lag means CO2 cannot warm anything": a verb of reporting or asking
