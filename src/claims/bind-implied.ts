@@ -98,6 +98,9 @@ export function bindImplied(sentence: string, q: Quantity, role: ReadRole, view:
   // A calendar year dates the sentence, and a date beside a core or a period says when something
   // happened there ("About 12,900 years ago, just as the thaw ..."): neither measures the subject.
   if (q.statedUnit === 'CE' || q.dimension === 'age') return undefined;
+  // A multiple ("ten times", "a factor of ten") has no unit that says what it multiplies: a pace, a
+  // level, a slip in a figure. Only words that name the measure ("faster") bind it.
+  if (q.dimension === 'ratio') return undefined;
   const { subjects, attributes, others } = dataOf(packs);
   const named = [...view.keys()];
   if (!named.some((id) => subjects.has(id))) return undefined;

@@ -46,18 +46,22 @@ const CHANGE_AFTER = /^[\s-]*(?:rise|increase|drop|fall|decline|swing|jump|step|
 const PER_TIME_AFTER = /^\s*(?:of\s+[\p{L}\p{N}₂]+\s+)?(?:every|each|a|per|an)\s+(?:single\s+)?(?:year|decade|century|millennium)(?![\p{L}])/iu;
 /** A place measured from a datum is a level: "3,623 metres below the surface", "2,800 m above sea level". */
 const DATUM_AFTER = /^\s*(?:below|beneath|under|above)\s+(?:the\s+)?(?:ice\s+|snow\s+)?(?:surface|sea\s+level)(?![\p{L}])/iu;
-/** Level words just before the quantity: "fell to", "stood at", "reached", "from"; "fell to a meagre" (an article and one word of description). */
-const LEVEL_BEFORE = /(?:^|[^\p{L}])(?:from|to|to\s+(?:a|an)\s+\p{L}+|at|between|reached|reaching|hovered around)\s*$/iu;
-/** A loose word of place on the scale between a word of staying and its number: "sat around 190", "a low near 185". */
-const NEAR = String.raw`(?:\s+(?:at|around|near|about|of|close\s+to|roughly|just\s+under|just\s+over|as\s+low\s+as|as\s+high\s+as))?`;
 /**
- * A verb of staying at a value ("sat around 190 ppm", "remained near 280 ppm", "hovered at") or a
+ * Level words just before the quantity: "fell to", "stood at", "reached", "from"; "fell to a meagre"
+ * (an article and one word of description); "fell as far as" (how far a fall went: where it ended).
+ */
+const LEVEL_BEFORE = /(?:^|[^\p{L}])(?:from|to|to\s+(?:a|an)\s+\p{L}+|at|between|reached|reaching|hovered around|(?<!by\s+)as\s+far\s+as)\s*$/iu;
+/** A loose word of place on the scale between a word of staying and its number: "sat around 190", "a low near 185". */
+const NEAR = String.raw`(?:\s+(?:at|around|near|about|of|close\s+to|roughly|just\s+under|just\s+over|as\s+low\s+as|as\s+high\s+as|somewhere(?:\s+(?:around|near))?))?`;
+/**
+ * A verb of staying at a value ("sat around 190 ppm", "remained near 280 ppm", "hovered at"), of
+ * reaching an extreme ("peaked somewhere around 300 ppm", "topped out near 290 ppm") or a
  * noun of an extreme of the scale ("a glacial low near 185 ppm", "a peak of 300 ppm", "a baseline
  * of 280 ppm") just before the quantity: a level, unless words of change follow the number ("sits
  * 144 ppm above that level" is a difference).
  */
 const STAY_BEFORE = new RegExp(
-  String.raw`(?:^|[^\p{L}])(?:sat|sits|sitting|stood|stands|stayed|stays|remained|remains|hovered|hovers|hovering|settled|idled|bottomed\s+out|levelled\s+off|leveled\s+off|low|lows|high|highs|peak|peaks|minimum|minima|maximum|maxima|baseline|floor|ceiling)${NEAR}\s*$`,
+  String.raw`(?:^|[^\p{L}])(?:sat|sits|sitting|stood|stands|stayed|stays|remained|remains|hovered|hovers|hovering|settled|idled|bottomed\s+out|levelled\s+off|leveled\s+off|peaked|peaking|topped\s+out|topping\s+out|maxed\s+out|low|lows|high|highs|peak|peaks|minimum|minima|maximum|maxima|baseline|floor|ceiling)${NEAR}\s*$`,
   'iu',
 );
 /** A bound read as a place on the scale: "never rose above 300 ppm", "fell below 200 ppm", "climbed as high as 350 ppm". */

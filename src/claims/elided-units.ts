@@ -61,6 +61,13 @@ export function restoreElidedUnits(sentence: string, quantities: Quantity[]): Qu
  */
 export const YEAR_LIKE = /^(?:1[5-9]\d\d|20\d\d|2100)$/u;
 
+/**
+ * "a regional value rather than a global one", "the older one", "this one": "one" after a determiner,
+ * with at most one word between, stands for a noun named before (the pronoun "one" of English
+ * grammar, common practice) and counts nothing.
+ */
+const PRONOUN_ONE_BEFORE = /(?:^|[^\p{L}])(?:a|an|the|this|that|each|every|another|any|which|no)(?:\s+[\p{L}'’-]+)?\s+$/iu;
+
 function bareNumbers(sentence: string, quantities: Quantity[]): Bare[] {
   const found: Bare[] = [];
   quantities.forEach((q, index) => {
@@ -68,6 +75,7 @@ function bareNumbers(sentence: string, quantities: Quantity[]): Bare[] {
   });
   for (const m of sentence.matchAll(WORD_NUMBER)) {
     const [start, end] = [m.index, m.index + m[0].length];
+    if (m[0].toLowerCase() === 'one' && PRONOUN_ONE_BEFORE.test(sentence.slice(Math.max(0, start - 40), start))) continue;
     if (!quantities.some((q) => start < q.end && q.start < end)) found.push({ text: m[0], start, end });
   }
   return found.sort((a, b) => a.start - b.start);

@@ -34,6 +34,13 @@ export interface SentenceStance {
    * deglaciation that ended ...") stay the draft's claim.
    */
   viewEnd?: number;
+  /**
+   * The quotations the sentence names rather than says, as spans of its text: 'His "CO2 follows"
+   * line ...', '"CO2 lags, so it can't be the cause" is the oldest one in the book', 'The line I
+   * hear most is "..."'. A flag on words inside one is the quoted speaker's, whatever the stance of
+   * the rest of the sentence.
+   */
+  named?: { start: number; end: number }[];
 }
 
 /** What around a sentence bears on its stance. */
@@ -65,12 +72,22 @@ const SELF = new Set(['us', 'me', 'you', 'is', 'was', 'are']);
  * of seeming, common practice of grammar).
  */
 const SAID_OF = new Set(['is', 'was', 'remains', 'sounds', 'seems', 'has', 'gets', 'keeps', 'makes', 'became', 'becomes']);
+/** Verbs of quotative inversion: '"CO2 lagged, so it can't be the driver," runs the line' (goes, went, ran). */
+const QUOTATIVE = new Set(['runs', 'ran', 'goes', 'went']);
+/** Copulas before a quotation that a noun before them names ("The line I hear most is "...""). */
+const COPULAS = new Set(['is', 'was', 'are', 'were']);
 const ANSWER_OPENERS = new Set(['no', 'not', 'nope', 'actually', 'yes', 'well', 'short', 'a', 'answer', 'in', 'it', 'they', 'that', 'this', 'quite', 'hardly', 'far', 'nothing', 'partly', 'only', 'both', 'neither', 'sort', 'kind']);
 const LABEL = /^\s*(?:[*_#>\s]*)(myth|misconception|claim|the claim|fiction|false|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|you might hear|you'll hear|the myth|the misconception|misunderstanding|mistake|rumou?r)\b(?:[^:.]{0,12}:|[*_]*\.)/iu;
 const FACT_LABEL = /^\s*(?:[*_#>\s]*)(fact|reality|the facts?|the science|the evidence|truth|answer|a)\b(?:[^:.]{0,12}:|[*_]*\.(?=[*_\s]))/iu;
 
 /** The stance of `s` in its context. */
 export function stanceOf(s: ReadSentence, context: StanceContext = {}): SentenceStance {
+  const named = namedQuotations(s);
+  const stance = sentenceStance(s, context);
+  return named.length === 0 ? stance : { ...stance, named };
+}
+
+function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance {
   const endorsed = s.of('stance', 'endorse').length > 0 || (context.next?.of('stance', 'endorse').some((h) => h.first <= 4) ?? false);
   const make = (kind: StanceKind, flips = false): SentenceStance => ({ kind, endorsed: kind !== 'asserted' && endorsed, flips });
   if (context.marked === true) return make('marked');
@@ -84,6 +101,7 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
   if (s.words.length > 0 && quotedWords / s.words.length >= 0.6) return make(insiderSpeaks(s) ? 'asserted' : 'quoted');
   if (opensWithNamedQuotation(s)) return make('quoted');
   if (s.question) return questionStance(s, context, make);
+  if (isTrueOrFalseItem(s.text) || (context.next !== undefined && TRUE_OR_FALSE_ALONE.test(context.next.text)) || asksWhether(s)) return make('asked');
   if (isReported(s)) return make('reported');
   if (s.of('stance', 'myth').length > 0) return make('myth');
   if (s.of('stance', 'superseded').length > 0 || isFormerOwnView(s)) return make('superseded');
@@ -93,10 +111,61 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
   return make('asserted');
 }
 
+/**
+ * The quotations of two words or more that `s` names instead of saying them: one followed by a word
+ * that names a saying (lexicon `stance.quotation-names`: "line", "slogan", "argument"), by a copula
+ * or verb of seeming ("is the oldest one in the book", "gets said a lot") or by a verb of quotative
+ * inversion ("runs a line"); or one that a saying's name before it introduces across a copula or a
+ * colon ("The line I hear most is "..."", "the usual refrain: "..."").
+ */
+function namedQuotations(s: ReadSentence): { start: number; end: number }[] {
+  const names = s.of('stance', 'quotation-names');
+  const spans: { start: number; end: number }[] = [];
+  for (let i = 0; i < s.words.length; ) {
+    if (s.words[i]?.quoted !== true) { i++; continue; }
+    let j = i;
+    while (s.words[j + 1]?.quoted === true) j++;
+    const after = s.words[j + 1];
+    const before = s.words[i - 1];
+    const namedAfter = after !== undefined && (SAID_OF.has(after.text) || QUOTATIVE.has(after.text) || names.some((h) => h.first === j + 1));
+    const gap = before === undefined ? '' : s.text.slice(before.end, s.words[i]?.start ?? before.end);
+    const introduced = before !== undefined && (COPULAS.has(before.text) || gap.includes(':')) && names.some((h) => h.last < i);
+    if (j > i && (namedAfter || introduced)) spans.push({ start: s.words[i]?.start ?? 0, end: s.words[j]?.end ?? 0 });
+    i = j + 1;
+  }
+  return spans;
+}
+
 /** A sentence that opens with a quotation of three words or more and then says something of it ("... is a myth"). */
 function opensWithNamedQuotation(s: ReadSentence): boolean {
   const run = s.words.findIndex((w) => w.quoted !== true);
   return run >= 3 && SAID_OF.has(s.words[run]?.text ?? '');
+}
+
+/**
+ * "b) Warm water holds more CO2 than cold water. T / F": a statement set for the reader to judge, as
+ * quizzes and worksheets print it (common practice), asserts nothing.
+ */
+function isTrueOrFalseItem(text: string): boolean {
+  return /(?:^|[\s(])(?:T\s*\/\s*F|true\s*(?:\/|or)\s*false)\s*[)?.!]*\s*$/iu.test(text);
+}
+
+/** The true-or-false mark standing as a sentence of its own after the statement it asks about. */
+const TRUE_OR_FALSE_ALONE = /^[\s([]*(?:T\s*\/\s*F|true\s*(?:\/|or)\s*false)\s*[)\]?.!]*\s*$/iu;
+
+/**
+ * "One reader asked whether the lag means CO2 cannot warm anything": a verb of reporting or asking
+ * followed by "whether" (an indirect yes-no question in English grammar, common practice) asks
+ * what follows it and asserts nothing of it. Not a question between two alternatives ("whether A
+ * or B"), which the sentence may go on to answer.
+ */
+function asksWhether(s: ReadSentence): boolean {
+  return s.of('stance', 'report-verbs').some((v) => {
+    const at = s.words.findIndex((w, i) => i > v.last && i <= v.last + 3 && w.text === 'whether');
+    // "asks whether CO2 drives temperature or temperature drives CO2, and the cores settle it: ...":
+    // a question between two answers is the either/or frame, which the sentence goes on to answer.
+    return at >= 0 && !s.words.slice(at + 1).some((w) => w.text === 'or');
+  });
 }
 
 /** Whether `s` is a label and nothing more ("Myth.", "Fact.", "The claim."): which one. */
@@ -111,6 +180,10 @@ function bareLabel(s: ReadSentence | undefined): 'myth' | 'fact' | undefined {
 function questionStance(s: ReadSentence, context: StanceContext, make: (k: StanceKind, flips?: boolean) => SentenceStance): SentenceStance {
   const first = s.words[0]?.text ?? '';
   if (first === 'q' || isReported(s)) return make('asked');
+  // "the question she hears at every talk: if CO2 rose after ..., how can it be a cause?": a question
+  // that a saying's name before a colon introduces is someone's question, set out to be answered.
+  const colon = s.text.indexOf(':');
+  if (colon > 0 && s.of('stance', 'quotation-names').some((h) => (s.words[h.last]?.end ?? Infinity) <= colon)) return make('asked');
   // "Did you know the poles swing less?": a teaser that states its content as a fact.
   if ((first === 'did' || first === 'do') && s.words[1]?.text === 'you' && s.words[2]?.text === 'know') return make('asserted');
   const next = context.next;
@@ -191,7 +264,8 @@ function isReported(s: ReadSentence): boolean {
   if (verbs.some((v) => reporters.some((r) => r.last < v.first && v.first - r.last <= 4))) return true;
   // "My neighbour insists...", "Her uncle keeps saying...": someone of a person's circle, named as the
   // verb's subject, is an outside source with or without "that".
-  const circle = (v: LexHit) => s.words.slice(Math.max(0, v.first - 4), v.first).some((w, k, all) => /^(?:my|your|his|her|their)$/u.test(w.text) && k < all.length - 1);
+  // The subject may be a compound noun and a name ("My brother-in-law Clive insists"): six words back.
+  const circle = (v: LexHit) => s.words.slice(Math.max(0, v.first - 6), v.first).some((w, k, all) => /^(?:my|your|his|her|their)$/u.test(w.text) && k < all.length - 1);
   if (verbs.some((v) => v.first <= 6 && circle(v))) return true;
   // "Mr Pell's central claim is that...", "the letter's argument is that...": a report told as a noun
   // that someone owns, then "is that".

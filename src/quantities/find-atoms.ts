@@ -113,6 +113,31 @@ function vagueAtom(m: RegExpExecArray): Atom {
   return { start: m.index, end: m.index + m[0].length, value: s, half: 0, scale: s, form: 'vague', rule, plainInteger: false, sign: '' };
 }
 
+/**
+ * A clock reading or a place in a recording: hours or minutes, a colon, two digits of minutes or
+ * seconds ("at 6:30", "[21:17]", "1:02:45"), as ISO 8601 writes a time of day (hh:mm[:ss]). Its
+ * digits count no amount of anything the sentence measures.
+ */
+const CLOCK = /(?<![\p{L}\p{N}.,:])\d{1,2}(?::[0-5]\d){1,2}(?![\p{N}]|[.,:]\d)/gu;
+/**
+ * The counter that opens a post of a thread ("12/ At 2.4 ppm a year", "5/12 Now it's ~424 ppm"):
+ * a number and a slash, or a number out of a total, at the very start of the sentence and followed
+ * by a space, as people number the posts of a thread in public (common practice). "1/2 of the
+ * warming" is a fraction: a counter out of a total stands before a word that is not "of".
+ */
+const THREAD_COUNTER = /^[\s>*_-]*(?<n>\d{1,3})\/(?:(?<total>\d{1,3})(?=[\s\u00A0]+(?!of(?![\p{L}]))\S)|(?=[\s\u00A0]))/u;
+
+/** The spans of `text` whose digits are labels, not numbers: clock readings and a thread's post counter. */
+function labelSpans(text: string): { start: number; end: number }[] {
+  const spans = [...text.matchAll(CLOCK)].map((m) => ({ start: m.index, end: m.index + m[0].length }));
+  const counter = THREAD_COUNTER.exec(text);
+  if (counter !== null) {
+    const total = counter.groups?.['total'];
+    if (total === undefined || Number(counter.groups?.['n']) <= Number(total)) spans.push({ start: counter.index, end: counter.index + counter[0].length });
+  }
+  return spans;
+}
+
 /** Every number in `text`, in order, without overlaps. */
 export function findAtoms(text: string): Atom[] {
   const found: Atom[] = [
@@ -122,7 +147,10 @@ export function findAtoms(text: string): Atom[] {
     ...[...text.matchAll(WORD_PHRASE)].flatMap(wordAtoms),
   ];
   // An exponent such as 8e300 written by mistake must not become Infinity in an interval.
-  const finite = found.filter((a) => Number.isFinite(a.value) && Number.isFinite(a.half) && Math.abs(a.value) < 1e15);
+  const labels = labelSpans(text);
+  const finite = found.filter(
+    (a) => Number.isFinite(a.value) && Number.isFinite(a.half) && Math.abs(a.value) < 1e15 && !labels.some((l) => a.start >= l.start && a.end <= l.end),
+  );
   finite.sort((a, b) => a.start - b.start || b.end - a.end);
   const kept: Atom[] = [];
   for (const atom of finite) {

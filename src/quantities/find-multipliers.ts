@@ -37,6 +37,11 @@ const TIMES = new RegExp(
   String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS})(?:-odd)?)(?:[\s\u00A0]+times|[\s\u00A0]?[x×])(?=[\s\u00A0]+(?:as|more|higher|greater|larger|bigger|lower|smaller|less|faster|slower|longer|shorter|that|the|what|its|their|above|below|over)(?![\p{L}]))`,
   'giu',
 );
+/**
+ * "a factor of ten", "by a factor of 2.5": a multiple named by its noun (common practice of
+ * English), read as a ratio, so the number is no amount of the unit stated beside it.
+ */
+const FACTOR = new RegExp(String.raw`(?<![\p{L}])factor[\s\u00A0]+of[\s\u00A0]+(?:(?<d>\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?)(?![\d,.]*\d)|(?<w>${SMALL_WORDS})(?![\p{L}]))`, 'giu');
 const FRACTION = /(?<![\p{L}])(?:(?<count>a|one|two|three|four)[\s\u00A0-]+(?<part>half|third|quarter|fifth|tenth|thirds|quarters|fifths|tenths)|(?<half>half))(?![\p{L}])/giu;
 /** A fraction counts only in a ratio frame: "by a third", "about half", "half as much", "a third of". */
 const FRACTION_BEFORE = /(?:^|[^\p{L}])(?:by|to|in|about|nearly|almost|roughly|only|some|around|over|than|just|cut|fell|rose|lost|gained|barely|more|less)[\s\u00A0]+$/iu;
@@ -76,6 +81,7 @@ export function findMultipliers(text: string): Atom[] {
   }
   for (const m of text.matchAll(FOLD)) out.push(numberAtom(m));
   for (const m of text.matchAll(TIMES)) out.push(numberAtom(m));
+  for (const m of text.matchAll(FACTOR)) out.push(numberAtom(m));
   for (const m of text.matchAll(FRACTION)) {
     const a = fractionAtom(text, m);
     if (a !== undefined) out.push(a);

@@ -30,6 +30,13 @@ const ROLES: [sentence: string, written: Written[], roles: ReadRole[]][] = [
   ['Carbon dioxide remained about 280 ppm for millennia.', [['about 280 ppm', C]], ['level']],
   ['The Orra bubbles climbed out of a glacial low near 185 ppm.', [['185 ppm', C]], ['level']],
   ['Each interglacial reached a peak of 290 ppm or so.', [['290 ppm', C]], ['level']],
+  // How far a fall went, and a verb of reaching an extreme, name where it ended: a level (glacial
+  // lows near 172-200 ppm and interglacial peaks near 280-300 ppm, Lüthi et al. 2008, Nature 453,
+  // doi:10.1038/nature06949), unless "by" makes it the size of the fall.
+  ['In the harshest glacials the gas fell as far as roughly 175 ppm.', [['roughly 175 ppm', C]], ['level']],
+  ['Each warm spell peaked somewhere around 290 ppm.', [['around 290 ppm', C]], ['level']],
+  ['The Orra record topped out near 295 ppm.', [['295 ppm', C]], ['level']],
+  ['Across the thaw the gas rose by as much as 95 ppm.', [['as much as 95 ppm', C]], ['change']],
   // Words of change after the number still make it a difference: "sits 140 ppm above".
   ['Today the level sits 140 ppm above that interglacial peak.', [['140 ppm', C]], ['change']],
   ['The new high is 60 ppm higher than any before.', [['60 ppm', C]], ['change']],
@@ -38,6 +45,17 @@ const ROLES: [sentence: string, written: Written[], roles: ReadRole[]][] = [
 describe('quantityRoles', () => {
   it.each(ROLES)('%s', (sentence, written, roles) => {
     expect(quantityRoles(sentence, quantitiesIn(sentence, written))).toEqual(roles);
+  });
+});
+
+describe('a level reached told with "as far as" or "peaked" binds no size of a rise (built-in pack)', () => {
+  // The glacial-interglacial CO2 rise is 80-100 ppm; the lowest glacial CO2 about 172 ppm (Lüthi et
+  // al. 2008, Nature 453, doi:10.1038/nature06949).
+  const serious = async (text: string) => (await checkText(text)).flags.filter((f) => f.level !== 'note').map((f) => [f.ruleId, f.excerpt]);
+  it('a right level is clean; a wrong level and a wrong rise are still flagged', async () => {
+    expect(await serious('In the glacial lows of each cycle, CO2 fell as far as about 180 ppm.')).toEqual([]);
+    expect(await serious('In the glacial lows CO2 sank as far as about 240 ppm.')).toEqual([['value.co2-glacial-minimum-typical', 'about 240 ppm']]);
+    expect(await serious('Across each glacial cycle, CO2 rose by about 150 ppm.')).toEqual([['value.co2-glacial-interglacial-amplitude', 'about 150 ppm']]);
   });
 });
 

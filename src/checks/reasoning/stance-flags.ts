@@ -21,10 +21,18 @@ const WORDS: Record<StanceKind, string> = {
 
 /** The flags as they stand under the sentence's stance. */
 export function judgeByStance(flags: readonly FlagDraft[], stance: SentenceStance): FlagDraft[] {
-  if (isOwnClaim(stance)) return [...flags];
+  // A flag on words inside a quotation the sentence names ('His "CO2 follows" line ...') is the
+  // quoted speaker's claim, whatever the sentence holds around it.
+  const named = stance.named ?? [];
+  const inNamed = (f: FlagDraft) => !stance.endorsed && named.some((q) => f.start >= q.start && f.end <= q.end + 1);
+  if (isOwnClaim(stance)) return flags.map((f) => (inNamed(f) ? asNote(f, WORDS.quoted) : f));
   const said = WORDS[stance.kind];
   // The statement before a question ("The air is older than the ice, so how can you trust it?") is the
   // draft's own, and so is what follows an earlier view (", a deglaciation that ended ...").
   const premise = (f: FlagDraft) => (stance.questionFrom !== undefined && f.end <= stance.questionFrom) || (stance.viewEnd !== undefined && f.start >= stance.viewEnd);
-  return flags.map((f) => premise(f) ? f : ({ ...f, level: 'note', reason: `${said}, so it is not flagged as the draft's own claim; check that the draft answers it. ${f.reason}` }));
+  return flags.map((f) => (premise(f) && !inNamed(f) ? f : asNote(f, inNamed(f) ? WORDS.quoted : said)));
+}
+
+function asNote(f: FlagDraft, said: string): FlagDraft {
+  return { ...f, level: 'note', reason: `${said}, so it is not flagged as the draft's own claim; check that the draft answers it. ${f.reason}` };
 }
