@@ -522,9 +522,14 @@ function preferSpecific(all: FlagDraft[]): FlagDraft[] {
   const drafts = scaled.length === 0
     ? all
     : all.filter((d) => (SLIP_SUBSUMES.includes(d.ruleId) ? !scaled.some((s) => overlaps(s, d)) : d.ruleId !== 'unit.scale-slip' || !restated.some((s) => overlaps(s, d))));
-  const specific = drafts.filter((d) => d.ruleId.startsWith('arith.') || d.ruleId.startsWith('unit.'));
-  if (specific.length === 0) return drafts;
-  return drafts.filter((d) => !d.ruleId.startsWith('value.') || !specific.some((s) => s.start < d.end && d.start < s.end));
+  // A figure that the draft's own numbers explain ("76 ppm over 6,000 years, roughly 1 ppm per
+  // decade") is an arithmetic slip before it is a unit slip: a reference read in another unit gives
+  // way to the sum the sentence itself makes, whose correction the editor can check on the page.
+  const arithmetic = drafts.filter((d) => d.ruleId.startsWith('arith.'));
+  const own = arithmetic.length === 0 ? drafts : drafts.filter((d) => d.ruleId !== 'unit.scale-slip' || !arithmetic.some((a) => overlaps(a, d)));
+  const specific = own.filter((d) => d.ruleId.startsWith('arith.') || d.ruleId.startsWith('unit.'));
+  if (specific.length === 0) return own;
+  return own.filter((d) => !d.ruleId.startsWith('value.') || !specific.some((s) => s.start < d.end && d.start < s.end));
 }
 
 const subjectMatchers = new WeakMap<LoadedPacks, TopicMatcher>();
