@@ -94,6 +94,17 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-v-4': { recall: 0.64, falseFlags: 0.1 },
   'tuning-w-1': { recall: 0.72, falseFlags: 0.08 },
   'tuning-w-2': { recall: 0.55, falseFlags: 0.05 },
+  // tuning-x-1..4 were the blind hold-out holdout-m, spent in December 2026's twelfth round (read on its
+  // first and last code: 90/124 and 31/43 caught at the start, 95/124 and 31/43 at the end, with 5/213
+  // then 7/213 and 3/70 false flags). tuning-y-1..2 were written fresh at that round's start and read,
+  // totals only, to judge each branch before merging (25/43 and 23/41 caught at the start, 26/43 and
+  // 23/41 at the end, false flags 1/77 and 3/71 throughout).
+  'tuning-x-1': { recall: 0.66, falseFlags: 0.06 },
+  'tuning-x-2': { recall: 0.75, falseFlags: 0.1 },
+  'tuning-x-3': { recall: 0.75, falseFlags: 0.04 },
+  'tuning-x-4': { recall: 0.67, falseFlags: 0.08 },
+  'tuning-y-1': { recall: 0.55, falseFlags: 0.04 },
+  'tuning-y-2': { recall: 0.5, falseFlags: 0.07 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -124,12 +135,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (84.1% measured over 56 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (84.2% measured over 62 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (94.1% measured over 56 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.9% measured over 62 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
