@@ -6,25 +6,12 @@
  */
 import { describe, expect, it } from 'vitest';
 import { descriptionsIn, resolveBackReferences, subjectsOfKind } from '../../src/claims/back-reference.js';
-import { checkText } from '../../src/engine.js';
 import { loadPacks } from '../../src/rulepack/index.js';
+import { readingOf as readingWith, type Row } from './fixtures/reading-of.js';
 
 const packs = await loadPacks([]);
 
-/** The value the number written `number` binds in `draft` ('-' for none), and whether a value flag marks it. */
-async function readingOf(draft: string, number: string): Promise<{ value: string; flagged: boolean }> {
-  const result = await checkText(draft, { packs });
-  for (const claim of result.claims) {
-    const index = claim.quantities.findIndex((q) => q.text.includes(number) || number.includes(q.text));
-    if (index < 0 || !claim.text.includes(number)) continue;
-    const value = claim.bindings.find((b) => b.quantityIndex === index)?.referenceId ?? '-';
-    const flagged = claim.flags.some((f) => f.ruleId === `value.${value}`);
-    return { value, flagged };
-  }
-  return { value: '-', flagged: false };
-}
-
-type Row = [draft: string, number: string, value: string, flagged: boolean];
+const readingOf = (draft: string, number: string) => readingWith(packs, draft, number);
 
 // EPICA Dome C was drilled to 3,260-3,270 m (Lüthi et al. 2008, Nature 453:379-382; Bouchet et al.
 // 2023, Climate of the Past 19:2257-2286, as the pack's edc-drilled-depth cites them); Vostok to 3,623 m

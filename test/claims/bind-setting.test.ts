@@ -5,26 +5,13 @@
  * heading are the engine's own). Each factual check names the pack's source beside it.
  */
 import { describe, expect, it } from 'vitest';
-import { checkText } from '../../src/engine.js';
 import { loadPacks } from '../../src/rulepack/index.js';
+import { readingOf as readingWith, type Row } from './fixtures/reading-of.js';
 import { settingKindsOf } from '../../src/claims/bind-setting.js';
 
 const packs = await loadPacks([]);
 
-/** The value the number written `number` binds in `draft` ('-' for none), and whether a value flag marks it. */
-async function readingOf(draft: string, number: string): Promise<{ value: string; flagged: boolean }> {
-  const result = await checkText(draft, { packs });
-  for (const claim of result.claims) {
-    const index = claim.quantities.findIndex((q) => q.text.includes(number) || number.includes(q.text));
-    if (index < 0 || !claim.text.includes(number)) continue;
-    const value = claim.bindings.find((b) => b.quantityIndex === index)?.referenceId ?? '-';
-    const flagged = claim.flags.some((f) => f.ruleId === `value.${value}`);
-    return { value, flagged };
-  }
-  return { value: '-', flagged: false };
-}
-
-type Row = [draft: string, number: string, value: string, flagged: boolean];
+const readingOf = (draft: string, number: string) => readingWith(packs, draft, number);
 
 const LAG = 'antarctic-co2-phasing-termination-1-consensus';
 
