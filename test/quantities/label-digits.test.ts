@@ -1,6 +1,6 @@
 /**
  * Digits and number words that count nothing the sentence measures, as people write in public: a
- * clock reading or a place in a video ("at 6:30", "[21:17]"; ISO 8601 hh:mm[:ss]), the counter that
+ * clock reading or a place in a recording ("at 6:30", "[21:17]"; ISO 8601 hh:mm[:ss]), the counter that
  * opens a post of a thread ("12/", "5/12"; common practice of threads), a multiple named by its
  * noun ("a factor of ten"; common practice of English) and the pronoun "one" after a determiner
  * ("a global one"; common practice of English grammar). Each is checked both ways: the correct
@@ -17,7 +17,7 @@ const serious = async (text: string) => (await checkText(text)).flags.filter((f)
 
 describe('parseQuantities: labels are no quantities', () => {
   it.each([
-    ['she shows the low point at 6:30 in the video', []],
+    ['she shows the low point at 6:30 in the recording', []],
     ['[21:05] Marta: the bubbles held 185 ppm', [['185 ppm', 'concentration']]],
     ['around 1:02:45 he reads out 190 ppm', [['190 ppm', 'concentration']]],
     ['12/ Since then the air has gained 140 ppm', [['140 ppm', 'concentration']]],
@@ -55,7 +55,7 @@ describe('restoreElidedUnits: the pronoun "one" takes no unit', () => {
 
 describe('the whole engine: a label beside a claim', () => {
   // Lowest CO2 in the 800-kyr record about 172 ppm (Lüthi et al. 2008, Nature 453, doi:10.1038/nature06949).
-  it('a video time after the lowest CO2 figure flags nothing; a wrong figure still is', async () => {
+  it('a recording time after the lowest CO2 figure flags nothing; a wrong figure still is', async () => {
     expect(await serious('The lowest CO2 in the whole EPICA Dome C record was about 172 ppm, she shows it at 4:15.')).toEqual([]);
     expect((await serious('The lowest CO2 in the whole EPICA Dome C record was about 120 ppm, she shows it at 4:15.')).length).toBeGreaterThan(0);
   });
