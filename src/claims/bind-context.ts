@@ -17,6 +17,7 @@
  * with the same score tie, and bind nothing.
  */
 import { createTopicMatcher, type TopicMatcher } from '../prose/topic-matcher.js';
+import { lexiconWords, type LexiconWord } from '../prose/lexicon-words.js';
 import { afterDemonstrative, measureSubject, refersBack, termsOfKind } from './back-reference.js';
 import { formsOf, subjectWordsOf } from '../propositions/lexicon.js';
 import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
@@ -29,8 +30,26 @@ import { CLAUSE_PENALTY, type TermHits } from './bind-view.js';
 export const CONTEXT_PENALTY = 3 * CLAUSE_PENALTY;
 /** The baseline of a comparison: "colder than in pre-industrial times", "40 metres below today's". */
 const BASELINE = /(?:^|[^\p{L}])(?:than|below|above|beneath)(?:\s+[\p{L}-]+){0,2}\s*$/iu;
-/** "than a very long human life of": a comparison's baseline, a noun phrase of its own, right before a figure. */
-const IN_BASELINE_PHRASE = /(?:^|[^\p{L}])than\s+(?:an?|the|one|some|any|your|our|their|his|her|its)\s+[^.;:!?]{0,40}?\bof\s*$/iu;
+/** How many words a comparison's baseline noun phrase may hold between "than" and its "of". */
+const BASELINE_WORDS = 6;
+
+/**
+ * Whether the figure at `start` closes the noun phrase a comparison holds up as its baseline: "than",
+ * a noun phrase of words (no figure), "of", then the figure ("longer than a very long human life of
+ * 100 years"). Cut into the lexicon's words, so no list of determiners is needed.
+ */
+function inBaselinePhrase(sentence: string, start: number): boolean {
+  const before = lexiconWords(sentence.slice(0, start));
+  const last = before.at(-1);
+  if (last?.text !== 'of' || /\S/u.test(sentence.slice(last.end, start))) return false;
+  for (let i = before.length - 2, n = 0; i >= 0 && n <= BASELINE_WORDS; i -= 1, n += 1) {
+    const word = before[i] as LexiconWord;
+    if (/[.;:!?]/u.test(sentence.slice(word.end, (before[i + 1] as LexiconWord).start))) return false;
+    if (word.text === 'than') return n > 0;
+    if (/^\p{N}/u.test(word.text)) return false;
+  }
+  return false;
+}
 /** What may stand between a qualifier and the subject it qualifies: "global sea level", "global-mean". */
 const QUALIFIES = /^[\s-]*$/u;
 
@@ -138,7 +157,7 @@ export function bindFromContext(
   if (!mayReferBack(sentence, packs, frame?.context)) return undefined;
   // "That's 800,000 years, about 8,000 times longer than a human life of 100 years": a figure in the
   // noun phrase a comparison holds up as its baseline measures that phrase's own head, not the subject before.
-  if (IN_BASELINE_PHRASE.test(sentence.slice(Math.max(0, q.start - 60), q.start))) return undefined;
+  if (inBaselinePhrase(sentence, q.start)) return undefined;
   // "The ice goes back 800,000 years, and over that entire span CO2 stayed between 170 and 300 ppm":
   // a sentence that states its own stretch of time takes no date ("in 2019") from the one before.
   const dated = (id: string): boolean => frame !== undefined && (context.get(id) ?? []).some(([start, end]) => YEAR.test(frame.context.slice(start, end)));
