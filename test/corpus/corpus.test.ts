@@ -105,6 +105,12 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-x-4': { recall: 0.67, falseFlags: 0.08 },
   'tuning-y-1': { recall: 0.55, falseFlags: 0.04 },
   'tuning-y-2': { recall: 0.5, falseFlags: 0.07 },
+  // tuning-z-1..4 were the blind hold-out holdout-n, spent at the start of December 2026's thirteenth
+  // round (read once, on that round's first code: 80/126 and 30/41 caught, false flags 3/230 and 3/80).
+  'tuning-z-1': { recall: 0.65, falseFlags: 0.04 },
+  'tuning-z-2': { recall: 0.56, falseFlags: 0.05 },
+  'tuning-z-3': { recall: 0.57, falseFlags: 0.06 },
+  'tuning-z-4': { recall: 0.68, falseFlags: 0.08 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
