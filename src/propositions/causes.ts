@@ -188,7 +188,7 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   } else if (noun && copulaAfter(s, h.last) !== undefined) {
     // "The real driver of the glacial cycles was temperature": the agent follows the copula.
     agentThing = thingAfter(s, copulaAfter(s, h.last) as number, 4);
-    patientThing = OBJECT_LINKS.has(next) ? thingAfter(s, h.last, 4) : undefined;
+    patientThing = OBJECT_LINKS.has(next) ? thingAfter(s, h.last, 4) : relativeSubject(s, h.last);
   } else if (noun && h.key !== 'effects' && effectAsSubject(s, h.first)) {
     // "a consequence cannot also be a cause": the subject is a role, not a thing; the agent is whatever
     // the sentence casts in that role, left unnamed here.
@@ -198,9 +198,12 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     // "CO2 only the consequence": the subject stands just before; "CO2 ... was only a passenger": before
     // the copula, past any relative clause; "CO2 was an effect of the warming, not a cause": an
     // elliptic segment takes the clause's subject.
+    // "CO2 was a response to the warming rather than a driver of it": a part noun joined to an
+    // earlier one by a contrast or a coordinator shares that noun's subject, however long its phrase.
+    const partner = coordinatedPart(s, h);
     agentThing = asRole
       ? thingBefore(s, h.first, 'clause')
-      : (subjectBefore(s, h.first) ?? copulaSubject(s, h.first) ?? subjectOf(s, h.first) ?? appositionSubject(s, h.first) ?? clauseSubject(s, h.first));
+      : (subjectBefore(s, h.first) ?? copulaSubject(s, h.first) ?? (partner === undefined ? undefined : (subjectBefore(s, partner.first) ?? copulaSubject(s, partner.first))) ?? subjectOf(s, h.first) ?? appositionSubject(s, h.first) ?? clauseSubject(s, h.first));
     const linked = OBJECT_LINKS.has(next) ? thingAfter(s, h.last, 4) : undefined;
     // "Only one cause ended the ice age: carbon dioxide": the agent named after a colon or dash.
     const named = s.things.find((t) => t.first > h.last && t.first - h.last <= 10 && t.kind !== 'pronoun' && s.words[t.first]?.clause !== s.words[h.first]?.clause);
@@ -325,15 +328,34 @@ const COPULAS = new Set(['is', 'was', 'are', 'were', 'be', 'been', 'being']);
 /** The copula within six words after a predicate noun, in its clause ("the driver ... was"). */
 function copulaAfter(s: ReadSentence, i: number): number | undefined {
   let inPhrase = false;
+  const relative = relativeSubject(s, i);
   for (let k = i + 1; k <= i + 7; k += 1) {
     const w = s.words[k];
     if (w === undefined || w.clause !== s.words[i]?.clause) return undefined;
     if (COPULAS.has(w.text) && s.things.some((t) => t.first > k && t.first <= k + 4)) return k;
     if (PREPOSITIONS.has(w.text)) inPhrase = true;
-    // A thing outside an "of ..." phrase is the subject: "the cause ... CO2 was" is no predicate noun.
-    if (s.things.some((t) => t.first === k) && !inPhrase) return undefined;
+    // A thing outside an "of ..." phrase is the subject: "the cause ... CO2 was" is no predicate noun,
+    // unless it opens a relative clause on the noun ("the reason ice ages end is ...").
+    if (s.things.some((t) => t.first === k) && !inPhrase && relative?.first !== k) return undefined;
   }
   return undefined;
+}
+
+/**
+ * The subject of a relative clause on the cause noun at word `i`, told with "why" or "that" or
+ * with nothing ("the one and only reason ice ages end is the orbit", "the reason why the glaciers
+ * retreated was CO2"): a thing right after the noun (past the relative word and a determiner) with a
+ * word other than a copula or an auxiliary after it, so its clause has a verb of its own. That thing
+ * is what the cause acts on.
+ */
+function relativeSubject(s: ReadSentence, i: number): Thing | undefined {
+  let k = i + 1;
+  if (['why', 'that'].includes(s.words[k]?.text ?? '')) k += 1;
+  while (ARTICLES.has(s.words[k]?.text ?? '')) k += 1;
+  const thing = s.things.find((t) => t.first === k && t.kind !== 'pronoun');
+  const after = s.words[(thing?.last ?? -2) + 1];
+  if (thing === undefined || after === undefined || after.clause !== s.words[i]?.clause || COPULAS.has(after.text) || AUXILIARY.has(after.text)) return undefined;
+  return thing;
 }
 
 /** "must be negligible", "is irrelevant": a role denied by what is said of it. */
@@ -449,6 +471,27 @@ const PREDICATE_LINK = new Set(['can', 'cannot', 'could', 'not', 'never', 'also'
 /** An effect noun is the subject of the predicate noun at `i` ("a consequence cannot also be a cause"). */
 function effectAsSubject(s: ReadSentence, i: number): boolean {
   return s.of('causes', 'effects').some((e) => e.last < i && i - e.last <= 7 && s.words.slice(e.last + 1, i).every((w) => PREDICATE_LINK.has(w.text)) && s.words.slice(e.last + 1, i).some((w) => COPULAS.has(w.text)));
+}
+
+/** Words that join a part noun to the one before it: "rather than", "instead of", "not", "and", "or", "nor". */
+const PART_JOINS = new Set(['not', 'and', 'or', 'nor', 'than', 'of', 'but']);
+
+/**
+ * The part noun that the part noun of `h` is coordinated with, in its clause: "a response to the
+ * warming rather than a driver of it", "an effect of the warming and not a cause", "a by-product,
+ * never a cause". Only determiners and restrictors may stand between the joining word and `h`, and
+ * the joining word "than" counts only after "rather", "of" only after "instead".
+ */
+function coordinatedPart(s: ReadSentence, h: LexHit): LexHit | undefined {
+  let k = h.first - 1;
+  while (k >= 0 && (ARTICLES.has(s.words[k]?.text ?? '') || RESTRICTORS.has(s.words[k]?.text ?? ''))) k -= 1;
+  const join = s.words[k]?.text ?? '';
+  if (!PART_JOINS.has(join)) return undefined;
+  if (join === 'than' && s.words[k - 1]?.text !== 'rather') return undefined;
+  if (join === 'of' && s.words[k - 1]?.text !== 'instead') return undefined;
+  const clause = s.words[h.first]?.clause;
+  const parts = [...s.of('causes', 'effects'), ...s.of('causes', 'nouns')];
+  return parts.filter((e) => e.last < k && s.words[e.first]?.clause === clause).sort((a, b) => b.last - a.last)[0];
 }
 
 /** Words that join two subjects into one ("the physics, plus the timing, is what..."). */

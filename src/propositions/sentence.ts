@@ -74,6 +74,8 @@ const COMPLEMENT_TAKERS = /^(?:show|prove|mean|say|said|know|knew|think|thought|
 const COPULA_CONTRACTION = /^(that|this)'s$/u;
 const AUXILIARIES = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const PRONOUNS = new Set(['it', 'they', 'this', 'that', 'these', 'those', 'its', 'their']);
+/** Pronouns that are a determiner when a thing follows them ("this wobble", "those glaciations"). */
+const DEMONSTRATIVES = new Set(['this', 'that', 'these', 'those']);
 /** Entities that take part in causes and orders. */
 /**
  * The entities that take part in what a sentence asserts. The others (an ice core, a station, a unit,
@@ -150,8 +152,10 @@ function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
   }
   // "The orbit wobbles; that is the whole story": a "that" opening its segment before a copula stands for what came before.
   const demonstrative = (i: number) => i === 0 || (words[i - 1]?.segment !== words[i]?.segment && ['is', 'was'].includes(words[i + 1]?.text ?? ''));
+  // "this wobble of the orbit", "those ice ages": a demonstrative just before a thing is its determiner, no pronoun.
+  const determiner = (w: Word, i: number) => DEMONSTRATIVES.has(w.text) && things.some((t) => t.first === i + 1);
   words.forEach((w, i) => {
-    if (PRONOUNS.has(w.text) && !(w.text === 'that' && !demonstrative(i)) && !things.some((t) => t.first <= i && i <= t.last)) {
+    if (PRONOUNS.has(w.text) && !(w.text === 'that' && !demonstrative(i)) && !determiner(w, i) && !things.some((t) => t.first <= i && i <= t.last)) {
       things.push({ kind: 'pronoun', first: i, last: i });
     }
   });
