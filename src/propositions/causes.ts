@@ -64,6 +64,10 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
       causes.push(...withoutAt(s, h, causes, previous));
       continue;
     }
+    if (h.key === 'source-verbs') {
+      causes.push(...sourceAt(s, h, previous));
+      continue;
+    }
     causes.push(...causeAt(s, h, previous));
   }
   return [...causes, ...identityCauses(s)];
@@ -296,6 +300,43 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     out.push({ kind: 'cause', agent: patient, role: 'cause', polarity: 'denied', exclusive: false, start, end });
   }
   return out;
+}
+
+/** Words that may stand between a verb of coming from and its "from" ("came largely from", "stems entirely from"). */
+function fromAfter(s: ReadSentence, h: LexHit): number | undefined {
+  for (let k = h.last + 1; k <= h.last + 3; k += 1) {
+    const w = s.words[k];
+    if (w === undefined || w.clause !== s.words[h.first]?.clause) return undefined;
+    if (w.text === 'from') return k;
+    const restrictor = s.of('exclusive').some((e) => e.first <= k && k <= e.last);
+    if (!restrictor && !/^\p{L}{3,}ly$/u.test(w.text)) return undefined;
+  }
+  return undefined;
+}
+
+/**
+ * "The whole rise came entirely from the oceans warming up", "the extra CO2 stemmed from the deep
+ * sea": a verb of coming from (lexicon `causes.source-verbs`) makes the thing after its "from" the
+ * cause of its subject, as "caused by" does; a restriction between ("entirely", "solely") makes it
+ * the one cause. With no "from", the verb says nothing of a cause ("spring came early").
+ */
+function sourceAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
+  const from = fromAfter(s, h);
+  if (from === undefined) return [];
+  let agentThing = thingAfter(s, from, 4);
+  // "warming seawater": a change told as a modifier before a thing leaves that thing the head.
+  const modifier = (t: Thing) => s.of('changes').some((c) => c.first <= t.first && t.last <= c.last);
+  const headAfter = (t: Thing) => s.things.find((o) => o.first === t.last + 1 && o.kind !== 'pronoun');
+  while (agentThing !== undefined && modifier(agentThing) && headAfter(agentThing) !== undefined) agentThing = headAfter(agentThing);
+  const agent = kindOf(s, agentThing, previous);
+  if (agent === undefined) return [];
+  const patientThing = subjectBefore(s, h.first) ?? subjectOf(s, h.first);
+  const patient = kindOf(s, patientThing, previous);
+  const polarity = polarityAt(s, h.first);
+  // "came only from", "stems entirely from": a restriction between the verb and its "from" restricts the source.
+  const restricted = s.of('exclusive').some((e) => e.first > h.last && e.last < from && !['not', 'no'].includes(s.words[e.first - 1]?.text ?? ''));
+  const exclusive = restricted || isExclusive(s, h, agentThing);
+  return [{ kind: 'cause', role: 'cause', polarity, exclusive, start: s.words[h.first]?.start ?? 0, end: s.words[agentThing?.last ?? from]?.end ?? 0, agent, ...(patient === undefined || patient === agent ? {} : { patient }) }];
 }
 
 /**
@@ -660,7 +701,8 @@ function shareAfter(s: ReadSentence, h: LexHit): boolean {
     const whole = s.words.slice(h.last + 1, k + 1).some((x) => x.text === '100' || x.text === 'all' || x.text === 'whole');
     if (whole) return false;
     const percent = /^\s*%/u.test(s.text.slice(w.end));
-    if (SHARES.has(w.text) || percent || /^\d/u.test(w.text)) return true;
+    // "accounts for 20 to 30 ppm of the rise": a figure with its unit before "of" is a share too.
+    if (SHARES.has(w.text) || percent || /^\d/u.test(w.text) || /^\d/u.test(s.words[k - 1]?.text ?? '')) return true;
   }
   return false;
 }

@@ -7,6 +7,10 @@
  * - a cause noun with a relative clause before its copula ("the one and only reason ice ages end is
  *   the orbit") is a predicate noun whose agent follows the copula and whose patient is the clause's
  *   subject; a demonstrative before a thing ("this wobble") is its determiner, not a pronoun;
+ * - a verb of coming from (lexicon `causes.source-verbs`: "came entirely from the oceans warming up")
+ *   names the thing after its "from" as the cause of its subject; the ocean's warming said to be the
+ *   one source of the glacial-interglacial CO2 rise is a single cause, while the ocean named as the
+ *   reservoir the CO2 came from, or a share of the rise, is not;
  * - a record named after a read-from phrase (lexicon cue words `read-from`: "straight out of",
  *   "taken from") is where a global temperature is read from.
  * The science:
@@ -14,6 +18,9 @@
  *   over the last deglaciation: Shakun et al. 2012, Nature 484, 49-54, doi 10.1038/nature10915.
  * - CO2 is a feedback on the orbitally paced glacial cycles and a forcing of them: IPCC AR6 WG1
  *   chapters 5 and 7 (from memory).
+ * - Warming seawater's lower solubility explains only part (a few tens of ppm) of the 80-100 ppm
+ *   glacial-interglacial CO2 rise; ocean circulation, marine life and carbonate chemistry the rest:
+ *   Sigman and Boyle 2000, Nature 407, 859-869, doi 10.1038/35038000; IPCC AR6 WG1 chapter 5 (from memory).
  * - Antarctic temperature from the EPICA Dome C deuterium record is regional, its glacial change
  *   roughly twice the global one: Jouzel et al. 2007, Science 317, 793-796, doi 10.1126/science.1141038.
  */
@@ -67,6 +74,25 @@ describe('a cause noun with a relative clause before its copula', () => {
     'The reason the last ice age ended is still debated by climate scientists.',
   ])('stays clean: %s', async (text) => {
     expect((await serious(text)).filter((r) => r === 'logic.single-cause')).toEqual([]);
+  });
+});
+
+describe('a verb of coming from', () => {
+  it.each([
+    'The glacial-to-interglacial rise of 80 to 100 ppm came entirely from the oceans warming up.',
+    'The whole 90 ppm rise at each termination stemmed solely from warming seawater giving up its gas.',
+    'Each 90 ppm climb out of a glacial came only from the seas warming and releasing gas.',
+  ])('%s → logic.single-cause', async (text) => {
+    expect(await serious(text)).toContain('logic.single-cause');
+  });
+
+  it.each([
+    'The extra carbon dioxide at the end of the ice age came entirely from the deep ocean.',
+    'Part of the rise came from the oceans warming up; the rest came from changes in Southern Ocean circulation.',
+    'Warming of the water alone can only account for something like 20 to 30 ppm of the rise.',
+    'Spring came early to the coring camp, and the drill crew arrived from the coast.',
+  ])('stays clean: %s', async (text) => {
+    expect((await serious(text)).filter((r) => r.startsWith('logic.'))).toEqual([]);
   });
 });
 

@@ -9,7 +9,7 @@
  * which has one main cause (our emissions).
  */
 import { isMention } from '../../propositions/causes.js';
-import type { Cause } from '../../propositions/index.js';
+import type { Cause, ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isAboutModernRise } from './queries.js';
 
@@ -17,6 +17,20 @@ import { isAboutModernRise } from './queries.js';
 const FACTORS = new Set(['orbit', 'co2']);
 /** Agents that may be singled out as the one cause: the two factors, and the ocean. */
 const SINGLE_AGENTS = new Set(['orbit', 'co2', 'water']);
+
+/**
+ * The ocean's warming named as the cause: a water of the lexicon with a warming word beside it
+ * ("the oceans warming up", "warmer seas") in the cause's span or just after it. Warming seawater
+ * releases only part of the glacial-interglacial CO2 rise (about a third by solubility; the rest from
+ * Southern Ocean circulation, marine life and carbonate chemistry: IPCC AR6 WG1 chapter 5, from
+ * memory; Sigman and Boyle 2000, Nature 407, 859-869), so it is no one cause of that rise, while
+ * "the extra CO2 came only from the ocean" names the reservoir and passes.
+ */
+function warmingOcean(s: ReadSentence, c: Cause): boolean {
+  if (c.agent !== 'water') return false;
+  const waters = s.of('entities', 'water').filter((w) => (s.words[w.first]?.start ?? 0) >= c.start && (s.words[w.last]?.end ?? 0) <= c.end);
+  return waters.some((w) => s.of('changes', 'warm').some((h) => h.first >= w.first - 2 && h.last <= w.last + 2));
+}
 
 function detect({ index, read }: DetectInput): Cue[] {
   const here = read(index);
@@ -27,7 +41,7 @@ function detect({ index, read }: DetectInput): Cue[] {
   const mentioned = (c: Cause) => isMention(here.s, here.s.words.findIndex((w) => w.start >= c.start));
   const single = here.props.causes.find(
     // The orbit alone *starting* the warming is what the sources say; any other agent alone starting it is not.
-    (c) => c.polarity === 'asserted' && !mentioned(c) && c.exclusive && !(c.role === 'start' && c.agent === 'orbit') && c.role !== 'amplify' && SINGLE_AGENTS.has(c.agent ?? '') && c.patient !== 'co2',
+    (c) => c.polarity === 'asserted' && !mentioned(c) && c.exclusive && !(c.role === 'start' && c.agent === 'orbit') && c.role !== 'amplify' && SINGLE_AGENTS.has(c.agent ?? '') && (c.patient !== 'co2' || warmingOcean(here.s, c)),
   );
   // "It was CO2 that pulled the planet out, after the orbit set things in motion": the other factor keeps a role.
   const other = single === undefined ? undefined : here.props.causes.find((c) => c.polarity === 'asserted' && c !== single && FACTORS.has(c.agent ?? '') && c.agent !== single.agent);
