@@ -11,6 +11,8 @@
  *   names the thing after its "from" as the cause of its subject; the ocean's warming said to be the
  *   one source of the glacial-interglacial CO2 rise is a single cause, while the ocean named as the
  *   reservoir the CO2 came from, or a share of the rise, is not;
+ * - "..., and nothing more was needed" after a cause closes it as the one cause it took (lexicon
+ *   `exclusive`);
  * - a record named after a read-from phrase (lexicon cue words `read-from`: "straight out of",
  *   "taken from") is where a global temperature is read from.
  * The science:
@@ -91,6 +93,23 @@ describe('a verb of coming from', () => {
     'Part of the rise came from the oceans warming up; the rest came from changes in Southern Ocean circulation.',
     'Warming of the water alone can only account for something like 20 to 30 ppm of the rise.',
     'Spring came early to the coring camp, and the drill crew arrived from the coast.',
+  ])('stays clean: %s', async (text) => {
+    expect((await serious(text)).filter((r) => r.startsWith('logic.'))).toEqual([]);
+  });
+});
+
+describe('a cause closed by "and nothing more was needed"', () => {
+  it.each([
+    'The ice age ended because the Earth\'s orbit changed, and nothing more was needed.',
+    'The glaciation ended because the orbit shifted, and nothing else was required.',
+    'Stronger summer sunshine in the north ended the last glacial, and nothing else was needed.',
+  ])('%s → logic.single-cause', async (text) => {
+    expect(await serious(text)).toContain('logic.single-cause');
+  });
+
+  it.each([
+    'The orbit started the warming, and nothing more was needed to set it off.',
+    'The orbit started the thaw and CO2 amplified it, and nothing more was needed to explain the curves.',
   ])('stays clean: %s', async (text) => {
     expect((await serious(text)).filter((r) => r.startsWith('logic.'))).toEqual([]);
   });
