@@ -57,8 +57,9 @@ const OF_SOMETHING_ELSE = new RegExp(String.raw`^${S}*of(?!${S}+${AIR})(?![\p{L}
  */
 const CHANGE_SUBJECT = /(?:^|[^\p{L}])(?:rise|increase|growth|gain|jump|climb|drop|fall|decline|decrease|change|loss|reduction)[\s\u00A0]+(?:in|of)[\s\u00A0]+(?:[\p{L}-]+[\s\u00A0]+){0,2}(?:CO2|CO₂|carbon[\s\u00A0]+dioxide)(?![\p{L}\d])[^;:.!?]*$/iu;
 const RATE_AFTER = new RegExp(String.raw`^${S}*(?:(?:per|a|an|each|every)${S}+(?:year|decade|century|annum|millennium)|annually|yearly)`, 'iu');
+/** The words before a share that state a level, with a time adverb after the verb ("which is now about 0.42 percent carbon dioxide"). */
 const LEVEL_BEFORE = new RegExp(
-  String.raw`(?:^|[^\p{L}])(?:at|of|reached|reaching|was|were|is|are|stood${S}+at|to|hit|peaked${S}+at|near|around|about|from|between|and|made${S}+up|makes${S}+up|make${S}+up|only|just|holds|held|hold|carries|carried|carry|contains|contained|contain|forms|comprises|constitutes|amounts${S}+to|accounts${S}+for)${S}*$`,
+  String.raw`(?:^|[^\p{L}])(?:at|of|reached|reaching|was|were|is|are|stood${S}+at|to|hit|peaked${S}+at|near|around|about|from|between|and|made${S}+up|makes${S}+up|make${S}+up|only|just|holds|held|hold|carries|carried|carry|contains|contained|contain|forms|comprises|constitutes|amounts${S}+to|accounts${S}+for)(?:${S}+(?:now|today|currently|presently|still|already|nowadays))?${S}*$`,
   'iu',
 );
 
