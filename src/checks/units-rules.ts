@@ -4,7 +4,7 @@
  * wrong unit are also caught on their own (units-co2-share.ts).
  */
 import { afterMatcher, beforeMatcher } from '../quantities/reading-cues.js';
-import { convert, formatQuantity, namesChangeBefore, TEMPERATURE_CUES } from '../quantities/index.js';
+import { convert, correctionFigures, formatQuantity, namesChangeBefore, TEMPERATURE_CUES } from '../quantities/index.js';
 import { fromCanonical } from '../quantities/convert.js';
 import type { Dimension, Level, Quantity, Source } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
@@ -73,9 +73,12 @@ const asIntervals: Held = (first, second) => ({ computed: second.dimension === f
 const asWrittenDate: Held = (first, second) => {
   const sameDigits = first.statedUnit !== second.statedUnit && writtenValue(first) === writtenValue(second);
   const computed = asWritten(first);
-  // "11,700 BP" shown for 11,650 would repeat the slip: keep the figures down to the decade (the
-  // b2k offset is 50 years; "18,000 BP = 18,000 BCE" is put right as 16,050 BCE, not 16,051).
-  return sameDigits ? { computed, stated: asWritten(second), figures: toDecade(fromCanonical(computed.value, second.statedUnit, 'age'), second) } : { computed, stated: heldAs(second) };
+  if (!sameDigits) return { computed, stated: heldAs(second) };
+  // "11,700 BP" shown for 11,650 would repeat the slip: when the stated figure's own precision rounds
+  // the answer back to it, keep the figures down to the decade (the b2k offset is 50 years).
+  const meant = fromCanonical(computed.value, second.statedUnit, 'age');
+  const repeats = Number(meant.toPrecision(correctionFigures(second))) === writtenValue(second);
+  return { computed, stated: asWritten(second), ...(repeats ? { figures: toDecade(meant, second) } : {}) };
 };
 
 /** The significant figures that write `x` (in `q`'s stated unit) to the nearest ten years. */
