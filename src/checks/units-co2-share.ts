@@ -181,10 +181,15 @@ const CO2_COUNT_AFTER = new RegExp(String.raw`^${S}+${UNIT_NOUN}${S}+(?:of${S}+)
 /** A concentration the quantity reader made from a count: "about 42 molecules of CO2". */
 const COUNTED = new RegExp(String.raw`\d${S}*${UNIT_NOUN}${S}+(?:of${S}+)?(?:CO2|CO₂|carbon${S}+dioxide)`, 'iu');
 
-/** The number of a counted concentration, as written ("about 42" of "about 42 molecules of CO2"). */
-function countOf(q: Quantity): Quantity {
+/**
+ * The number of a counted concentration, as written ("about 4.2" of "about 4.2 molecules of CO2"),
+ * holding the count: the quantity reader has already made it ppm (4,200 ppm for 4.2 in every
+ * thousand), so the count is that share taken back to the whole.
+ */
+function countOf(q: Quantity, per: number): Quantity {
   const number = /^.*?\d[\d,.]*/u.exec(q.text)?.[0] ?? q.text;
-  return { ...q, text: number, end: q.start + number.length };
+  const k = per / 1e6;
+  return { ...q, text: number, end: q.start + number.length, value: q.value * k, low: q.low * k, high: q.high * k, dimension: 'number', unit: 'number', statedUnit: '' };
 }
 
 /**
@@ -203,7 +208,7 @@ function countedShares(text: string, qs: Quantity[], restated: ReadonlySet<Quant
   const counts = qs.filter((q) => !restated.has(q) && (q.dimension === 'number' || q.dimension === 'count') && CO2_COUNT_AFTER.test(text.slice(q.end)) && (q.end <= (whole.index ?? 0) || q.start >= (whole.index ?? 0) + whole[0].length));
   // The quantity reader already turns a count in every million into ppm ("about 42 molecules of CO2",
   // quantities/per-million.ts): its number, as written, is the count.
-  const parsed = counts.length > 0 ? [] : qs.filter((q) => !restated.has(q) && q.dimension === 'concentration' && COUNTED.test(q.text)).map(countOf);
+  const parsed = counts.length > 0 ? [] : qs.filter((q) => !restated.has(q) && q.dimension === 'concentration' && COUNTED.test(q.text)).map((q) => countOf(q, per));
   const found = counts.length > 0 ? counts : parsed;
   const q = found.length === 1 ? found[0] : undefined;
   if (q === undefined || per === 0) return [];

@@ -149,3 +149,24 @@ describe('a period named in the sentence before fills a group that mixes periods
     expect(await idsOf(text)).toEqual(ids);
   });
 });
+
+describe('a CO2 share counted in molecules of a whole', () => {
+  // 1 ppm is one molecule in a million (a mole fraction: NOAA GML gives ppm as micromol per mol of
+  // dry air); today's air holds about 420 ppm (the pack's co2-global values, NOAA GML), 0.42 in every
+  // thousand molecules; before industry about 280 ppm, 2.8 in every ten thousand.
+  it.each([
+    ['In 2024 every thousand molecules of air held about 4.2 molecules of CO2.', 'about 0.42'],
+    ['Today every million molecules of air hold about 42 molecules of CO2.', 'about 420'],
+    ['Before industry, every ten thousand molecules of air held about 28 molecules of carbon dioxide.', 'about 2.8'],
+  ])('%s', async (text, correction) => {
+    expect(await flagsOf(text)).toContainEqual(['unit.percent-ppm', correction]);
+  });
+
+  it.each([
+    'In 2024 every thousand molecules of air held about 0.42 molecules of CO2.',
+    'Today every million molecules of air hold about 420 molecules of CO2.',
+    'Before industry, every ten thousand molecules of air held about 2.8 molecules of carbon dioxide.',
+  ])('%s is right and stays clean', async (text) => {
+    expect(await flagsOf(text)).toEqual([]);
+  });
+});
