@@ -12,6 +12,7 @@ import { B2K_CONVENTION, BP_CONVENTION, NIST_SP_811 } from './standard-sources.j
 import { co2PpbSlips, co2UnitSlips } from './units-co2-share.js';
 import { scaleSlips } from './units-scale.js';
 import { offsetSums } from './units-offset-sums.js';
+import { eraDefinitionSlips } from './units-era-definition.js';
 import { findRestatements, pointsAtChange, type PreviousSentence, type Restatement } from './units-pairs.js';
 
 /** A quantity whose unit use is in doubt, with the value it should have. */
@@ -190,6 +191,8 @@ export const UNIT_RULES: readonly UnitRule[] = [
     find: restated(['temperature'], nist, () => 'A temperature reading converts as °F = 1.8 × °C + 32.') },
   { id: 'unit.age-era', summary: 'A date restated in another era converts through years before AD 1950 (BP); b2k counts from AD 2000; there is no year 0.',
     find: restated(['age'], eras, () => 'BP counts years before AD 1950 and b2k before AD 2000; Y BCE is 1949 + Y years before 1950 (there is no year 0).', () => true, asWrittenDate) },
+  { id: 'unit.era-reference-year', summary: 'BP counts years before AD 1950 and b2k years before AD 2000: an age scale defined with the other year shifts every date by 50 years.',
+    find: (text, qs) => eraDefinitionSlips(text, qs) },
   { id: 'unit.length', summary: 'A length restated in feet or miles converts at 1 ft = 0.3048 m and 1 mile = 1609.344 m.',
     find: restated(['length'], nist, () => '1 ft = 0.3048 m and 1 mile = 1609.344 m exactly.') },
   { id: 'unit.age-scale', summary: 'A date or span of the last glacial cycle or of an ice core written in millions of years where thousands were meant (Ma for ka, million for thousand).',

@@ -170,3 +170,25 @@ describe('a CO2 share counted in molecules of a whole', () => {
     expect(await flagsOf(text)).toEqual([]);
   });
 });
+
+describe('an age scale defined with the other scale’s year', () => {
+  // BP: years before AD 1950 (Stuiver & Polach 1977); b2k: years before AD 2000 (Walker et al. 2009).
+  it.each([
+    ['Greenland ice-core ages are given on GICC05 in years BP (before AD 2000) and converted for comparison.', 'AD 1950'],
+    ['The Holocene formally began 11,700 years BP, where "present" means the year 2000.', '1950'],
+    ['NGRIP ice-core ages are in b2k, counted back from 1950.', '2000'],
+    ['In the Vostok ice core, ages are given as years BP, counting back from 2000.', '1950'],
+  ])('%s', async (text, correction) => {
+    expect(await flagsOf(text)).toContainEqual(['unit.era-reference-year', correction]);
+  });
+
+  it.each([
+    'Greenland ice-core ages are given on GICC05 in years b2k (before AD 2000) and converted for comparison.',
+    'The Holocene formally began 11,650 years BP, where "present" means the year 1950.',
+    'NGRIP ice-core ages are in b2k, counted back from AD 2000.',
+    // A year that is no scale's zero: an event after the scale is named.
+    'Ice-core ages are in years BP, and since 2000 the Greenland cores have used b2k.',
+  ])('%s stays clean', async (text) => {
+    expect((await flagsOf(text)).map(([id]) => id)).not.toContain('unit.era-reference-year');
+  });
+});
