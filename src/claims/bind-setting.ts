@@ -115,19 +115,6 @@ function settingOf(group: readonly string[], kinds: SettingKinds): string | unde
   return undefined;
 }
 
-/**
- * The kind a missing group may be filled from: a setting group, or a group that mixes the settings
- * of one kind with words of another sort ("[lgm, glacial, below-present]": a period, or a phrase
- * that places the figure against today); only its setting terms can be filled from the passage
- * ("The Last Glacial Maximum came 21,000 years ago. Sea level was 130 metres lower then.").
- */
-function fillableKind(group: readonly string[], kinds: SettingKinds): string | undefined {
-  const strict = settingOf(group, kinds);
-  if (strict !== undefined) return strict;
-  const of = [...kinds].filter(([, members]) => group.some((id) => members.has(id)));
-  return of.length === 1 ? of[0]?.[0] : undefined;
-}
-
 /** The passage's current setting of one kind: the setting terms of the latest text that names one, and all its terms. */
 interface Setting {
   terms: Set<string>;
@@ -236,7 +223,7 @@ export function bindFromSetting(
     const missing = r.binding.all.filter((g) => !g.some((id) => view.has(id)));
     if (missing.length === 0 || missing.length === r.binding.all.length) continue;
     // Every missing group a setting group, and at least one group of the value's own not a setting: its measure or subject.
-    const missingKinds = missing.map((g) => fillableKind(g, kinds));
+    const missingKinds = missing.map((g) => settingOf(g, kinds));
     if (missingKinds.some((k) => k === undefined)) continue;
     if (!r.binding.all.some((g) => !missing.includes(g) && settingOf(g, kinds) === undefined)) continue;
     const from: TermHits[] = [];

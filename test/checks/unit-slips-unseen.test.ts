@@ -134,22 +134,6 @@ describe('a CO2 share in percent a factor of ten off, after "is now"', () => {
   });
 });
 
-describe('a period named in the sentence before fills a group that mixes periods with other words', () => {
-  // lgm-sea-level-lowstand binds with [sea-level] and [lgm, glacial, below-present]: the period named
-  // before fills the second group.
-  it('reads feet written for metres', async () => {
-    expect(await flagsOf('The Last Glacial Maximum came about 21,000 years ago. Sea level was 130 feet lower then.')).toContainEqual(['unit.scale-slip', '130 m (430 feet)']);
-  });
-
-  it.each([
-    ['The Last Glacial Maximum came about 21,000 years ago. Sea level stood some 400 metres lower then.', ['unit.scale-slip']],
-    ['The Last Glacial Maximum came about 21,000 years ago. Sea level was about 60 metres lower then.', ['value.lgm-sea-level-lowstand']],
-    ['The Last Glacial Maximum came about 21,000 years ago. Sea level was 130 metres lower then.', []],
-  ])('%s', async (text, ids) => {
-    expect(await idsOf(text)).toEqual(ids);
-  });
-});
-
 describe('a CO2 share counted in molecules of a whole', () => {
   // 1 ppm is one molecule in a million (a mole fraction: NOAA GML gives ppm as micromol per mol of
   // dry air); today's air holds about 420 ppm (the pack's co2-global values, NOAA GML), 0.42 in every
