@@ -61,6 +61,24 @@ const NEAR_RATIO = 2.5;
 /** How far outside its reference a figure must be (relativeDistance) for a near-unit slip. */
 const NEAR_MIN_DISTANCE = 0.3;
 
+/**
+ * How far outside its reference a figure on the reference's best estimate must be: when the number as
+ * written (without its hedge) read in the other unit holds the best estimate itself, and is a precise
+ * figure (its reading no wider than half the reference range), a chance fit is unlikely, and a figure
+ * a little outside the range is enough: "around 18 °C" of Greenland warming is 18 °F, 9.7-10.3 °C,
+ * on the central 10 °C of 6-14 °C. "About two kilometres" of a 3,623 m core read as miles (2.4-4.0 km)
+ * holds the figure only because "two" is coarse, and stays a wrong value.
+ */
+const NEAR_MIN_DISTANCE_ON_BEST = 0.1;
+
+function nearMinDistance(q: Quantity, reading: Reading, r: Pick<ReferenceValue, 'central' | 'low' | 'high'>): number {
+  if (r.central === undefined || reading.read === undefined) return NEAR_MIN_DISTANCE;
+  const w = writtenInterval(q);
+  const [low, high] = [reading.read(w.low), reading.read(w.high)].sort((a, b) => a - b) as [number, number];
+  const precise = high - low <= (r.high - r.low) / 2;
+  return precise && low <= r.central && r.central <= high ? NEAR_MIN_DISTANCE_ON_BEST : NEAR_MIN_DISTANCE;
+}
+
 /** What a slip found says and the reading that fits. */
 export interface UnitSlip {
   what: string;
@@ -87,7 +105,7 @@ export function unitSlip(r: Pick<ReferenceValue, 'low' | 'high' | 'unit' | 'cent
   if (q.statedUnit === 'CE' || q.unit === '') return undefined;
   for (const reading of readingsOf(q)) {
     if (!(reading.low <= r.high && r.low <= reading.high)) continue;
-    if (reading.ratio < NEAR_RATIO && !(nearFits(q, reading, r) && relativeDistance(q.low, q.high, r) >= NEAR_MIN_DISTANCE)) continue;
+    if (reading.ratio < NEAR_RATIO && !(nearFits(q, reading, r) && relativeDistance(q.low, q.high, r) >= nearMinDistance(q, reading, r))) continue;
     return { what: reading.what, correction: reading.shown(reading.value), low: reading.low, high: reading.high };
   }
   return undefined;

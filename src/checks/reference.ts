@@ -67,9 +67,12 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     // A global figure that is the size of a regional change ("the whole Earth was 9 °C colder": the
     // Antarctic warming) is the regional record told as global: the scope check's flag, not a value's.
     const regional = distance === 0 || matched !== undefined ? undefined : regionalMatch(r, q, packs);
+    const namesRegion = regional !== undefined && namesRegionalRecord(sentence, packs);
     // The right number in the wrong unit ("3,270 feet" for the 3,270 m core): a unit flag says so.
-    // A figure that is another record's own value as written (a regional change) is no unit slip.
-    const slip = distance === 0 || matched !== undefined || regional !== undefined ? undefined : unitSlip(r, q);
+    // A figure that is a regional record's own value as written is no unit slip when the sentence
+    // names that record; when it names none ("the world as a whole was about 11 °C colder"), the
+    // regional size is a coincidence and a reading in the confusable unit (11 °F, 6.1 °C) explains it.
+    const slip = distance === 0 || matched !== undefined || namesRegion ? undefined : unitSlip(r, q);
     if (slip !== undefined) {
       flags.push({
         ruleId: 'unit.scale-slip',
@@ -87,7 +90,7 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     // Only a sentence that names a regional record presents that record as global; one that names
     // none ("At the LGM the planet was some 12 °C colder") states a wrong global value, whose reason
     // says whose size it is.
-    if (regional !== undefined && namesRegionalRecord(sentence, packs)) {
+    if (regional !== undefined && namesRegion) {
       flags.push(regional);
       continue;
     }

@@ -57,8 +57,9 @@ const OF_SOMETHING_ELSE = new RegExp(String.raw`^${S}*of(?!${S}+${AIR})(?![\p{L}
  */
 const CHANGE_SUBJECT = /(?:^|[^\p{L}])(?:rise|increase|growth|gain|jump|climb|drop|fall|decline|decrease|change|loss|reduction)[\s\u00A0]+(?:in|of)[\s\u00A0]+(?:[\p{L}-]+[\s\u00A0]+){0,2}(?:CO2|CO₂|carbon[\s\u00A0]+dioxide)(?![\p{L}\d])[^;:.!?]*$/iu;
 const RATE_AFTER = new RegExp(String.raw`^${S}*(?:(?:per|a|an|each|every)${S}+(?:year|decade|century|annum|millennium)|annually|yearly)`, 'iu');
+/** The words before a share that state a level, with a time adverb after the verb ("which is now about 0.42 percent carbon dioxide"). */
 const LEVEL_BEFORE = new RegExp(
-  String.raw`(?:^|[^\p{L}])(?:at|of|reached|reaching|was|were|is|are|stood${S}+at|to|hit|peaked${S}+at|near|around|about|from|between|and|made${S}+up|makes${S}+up|make${S}+up|only|just|holds|held|hold|carries|carried|carry|contains|contained|contain|forms|comprises|constitutes|amounts${S}+to|accounts${S}+for)${S}*$`,
+  String.raw`(?:^|[^\p{L}])(?:at|of|reached|reaching|was|were|is|are|stood${S}+at|to|hit|peaked${S}+at|near|around|about|from|between|and|made${S}+up|makes${S}+up|make${S}+up|only|just|holds|held|hold|carries|carried|carry|contains|contained|contain|forms|comprises|constitutes|amounts${S}+to|accounts${S}+for)(?:${S}+(?:now|today|currently|presently|still|already|nowadays))?${S}*$`,
   'iu',
 );
 
@@ -180,10 +181,15 @@ const CO2_COUNT_AFTER = new RegExp(String.raw`^${S}+${UNIT_NOUN}${S}+(?:of${S}+)
 /** A concentration the quantity reader made from a count: "about 42 molecules of CO2". */
 const COUNTED = new RegExp(String.raw`\d${S}*${UNIT_NOUN}${S}+(?:of${S}+)?(?:CO2|CO₂|carbon${S}+dioxide)`, 'iu');
 
-/** The number of a counted concentration, as written ("about 42" of "about 42 molecules of CO2"). */
-function countOf(q: Quantity): Quantity {
+/**
+ * The number of a counted concentration, as written ("about 4.2" of "about 4.2 molecules of CO2"),
+ * holding the count: the quantity reader has already made it ppm (4,200 ppm for 4.2 in every
+ * thousand), so the count is that share taken back to the whole.
+ */
+function countOf(q: Quantity, per: number): Quantity {
   const number = /^.*?\d[\d,.]*/u.exec(q.text)?.[0] ?? q.text;
-  return { ...q, text: number, end: q.start + number.length };
+  const k = per / 1e6;
+  return { ...q, text: number, end: q.start + number.length, value: q.value * k, low: q.low * k, high: q.high * k, dimension: 'number', unit: 'number', statedUnit: '' };
 }
 
 /**
@@ -202,7 +208,7 @@ function countedShares(text: string, qs: Quantity[], restated: ReadonlySet<Quant
   const counts = qs.filter((q) => !restated.has(q) && (q.dimension === 'number' || q.dimension === 'count') && CO2_COUNT_AFTER.test(text.slice(q.end)) && (q.end <= (whole.index ?? 0) || q.start >= (whole.index ?? 0) + whole[0].length));
   // The quantity reader already turns a count in every million into ppm ("about 42 molecules of CO2",
   // quantities/per-million.ts): its number, as written, is the count.
-  const parsed = counts.length > 0 ? [] : qs.filter((q) => !restated.has(q) && q.dimension === 'concentration' && COUNTED.test(q.text)).map(countOf);
+  const parsed = counts.length > 0 ? [] : qs.filter((q) => !restated.has(q) && q.dimension === 'concentration' && COUNTED.test(q.text)).map((q) => countOf(q, per));
   const found = counts.length > 0 ? counts : parsed;
   const q = found.length === 1 ? found[0] : undefined;
   if (q === undefined || per === 0) return [];

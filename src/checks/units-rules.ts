@@ -4,13 +4,15 @@
  * wrong unit are also caught on their own (units-co2-share.ts).
  */
 import { afterMatcher, beforeMatcher } from '../quantities/reading-cues.js';
-import { convert, formatQuantity, namesChangeBefore, TEMPERATURE_CUES } from '../quantities/index.js';
+import { convert, correctionFigures, formatQuantity, namesChangeBefore, TEMPERATURE_CUES } from '../quantities/index.js';
+import { fromCanonical } from '../quantities/convert.js';
 import type { Dimension, Level, Quantity, Source } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
 import { B2K_CONVENTION, BP_CONVENTION, NIST_SP_811 } from './standard-sources.js';
 import { co2PpbSlips, co2UnitSlips } from './units-co2-share.js';
 import { scaleSlips } from './units-scale.js';
 import { offsetSums } from './units-offset-sums.js';
+import { eraDefinitionSlips } from './units-era-definition.js';
 import { findRestatements, pointsAtChange, type PreviousSentence, type Restatement } from './units-pairs.js';
 
 /** A quantity whose unit use is in doubt, with the value it should have. */
@@ -21,6 +23,8 @@ export interface UnitFinding {
   reason: string;
   /** The replacement text, when it is not simply the stated words with a new number. */
   correction?: string;
+  /** Significant figures of the correction, when the stated figure's own would round the answer back to it. */
+  figures?: number;
   /** A fixed level for single-quantity slips; restatements take theirs from the level table. */
   level?: Level;
   /** The unit of `computed` when it is not the stated quantity's (a slip read in another unit). */
@@ -55,11 +59,52 @@ const restatementsOf = (dimensions: Dimension[], text: string, qs: Quantity[], p
 
 type Keep = (text: string, r: Restatement) => boolean;
 
-function restated(dimensions: Dimension[], sources: (a: Quantity, b: Quantity) => Source[], why: (a: Quantity, b: Quantity) => string, keep: Keep = () => true) {
+/** How the first figure of a restatement is held: as its interval, or (a date moved between eras) as written. */
+type Held = (first: Quantity, second: Quantity) => { computed: Derived; stated: Derived; figures?: number };
+
+const asIntervals: Held = (first, second) => ({ computed: second.dimension === first.dimension ? heldAs(first) : percentOf(first), stated: heldAs(second) });
+
+/**
+ * A date restated in another era is the same date moved by the eras' offset, an exact number of
+ * years (BP = b2k − 50; Y BCE = 1949 + Y BP): the restatement converts the first date as written,
+ * whatever its rounding ("12,000 b2k is the same as 12,050 BP": 11,950 BP, not 12,050), and only
+ * the restated date keeps its own rounding. The same digits in two eras that differ by an offset
+ * ("11,700 b2k, in other words 11,700 BP") put the offset at zero: both are read as written.
+ */
+const asWrittenDate: Held = (first, second) => {
+  const sameDigits = first.statedUnit !== second.statedUnit && writtenValue(first) === writtenValue(second);
+  const computed = asWritten(first);
+  if (!sameDigits) return { computed, stated: heldAs(second) };
+  // "11,700 BP" shown for 11,650 would repeat the slip: when the stated figure's own precision rounds
+  // the answer back to it, keep the figures down to the decade (the b2k offset is 50 years).
+  const meant = fromCanonical(computed.value, second.statedUnit, 'age');
+  const repeats = Number(meant.toPrecision(correctionFigures(second))) === writtenValue(second);
+  return { computed, stated: asWritten(second), ...(repeats ? { figures: toDecade(meant, second) } : {}) };
+};
+
+/** The significant figures that write `x` (in `q`'s stated unit) to the nearest ten years. */
+function toDecade(x: number, q: Quantity): number {
+  const years = Math.abs(convert(1, q.statedUnit, 'yr BP', 'age') - convert(0, q.statedUnit, 'yr BP', 'age'));
+  return figuresOf(Math.round((x * years) / 10) * 10 / years);
+}
+
+/** The fewest significant figures that write `x` exactly: 11,650 → 4, 11.65 → 4. */
+function figuresOf(x: number): number {
+  for (let n = 1; n < 15; n++) if (Math.abs(Number(x.toPrecision(n)) - x) <= 1e-9 * Math.max(1, Math.abs(x))) return n;
+  return 15;
+}
+
+/** A date as written, with only the slack of "years ago" counted from a year later than 1950. */
+const asWritten = (q: Quantity): Derived => ({ value: q.value, low: q.value - (q.statedUnit === 'yr ago' ? YEARS_SINCE_1950 : 0), high: q.value });
+
+/** The number as the draft wrote it, in its own stated unit: "11,700 b2k" → 11,700. */
+const writtenValue = (q: Quantity): number => Math.round(fromCanonical(q.value, q.statedUnit, q.dimension) * 1e6) / 1e6;
+
+function restated(dimensions: Dimension[], sources: (a: Quantity, b: Quantity) => Source[], why: (a: Quantity, b: Quantity) => string, keep: Keep = () => true, held: Held = asIntervals) {
   return (text: string, qs: Quantity[], previous?: PreviousSentence): UnitFinding[] =>
     restatementsOf(dimensions, text, qs, previous).filter((r) => keep(text, r)).map(({ first, second }) => {
-      const computed = second.dimension === first.dimension ? heldAs(first) : percentOf(first);
-      return { stated: { ...second, ...heldAs(second) }, computed, reason: why(first, second), sources: sources(first, second) };
+      const { computed, stated, figures } = held(first, second);
+      return { stated: { ...second, ...stated }, computed, reason: why(first, second), sources: sources(first, second), ...(figures === undefined ? {} : { figures }) };
     });
 }
 
@@ -145,7 +190,9 @@ export const UNIT_RULES: readonly UnitRule[] = [
   { id: 'unit.temperature', summary: 'A temperature reading restated in °F is 1.8 × °C + 32.',
     find: restated(['temperature'], nist, () => 'A temperature reading converts as °F = 1.8 × °C + 32.') },
   { id: 'unit.age-era', summary: 'A date restated in another era converts through years before AD 1950 (BP); b2k counts from AD 2000; there is no year 0.',
-    find: restated(['age'], eras, () => 'BP counts years before AD 1950 and b2k before AD 2000; Y BCE is 1949 + Y years before 1950 (there is no year 0).') },
+    find: restated(['age'], eras, () => 'BP counts years before AD 1950 and b2k before AD 2000; Y BCE is 1949 + Y years before 1950 (there is no year 0).', () => true, asWrittenDate) },
+  { id: 'unit.era-reference-year', summary: 'BP counts years before AD 1950 and b2k years before AD 2000: an age scale defined with the other year shifts every date by 50 years.',
+    find: (text, qs) => eraDefinitionSlips(text, qs) },
   { id: 'unit.length', summary: 'A length restated in feet or miles converts at 1 ft = 0.3048 m and 1 mile = 1609.344 m.',
     find: restated(['length'], nist, () => '1 ft = 0.3048 m and 1 mile = 1609.344 m exactly.') },
   { id: 'unit.age-scale', summary: 'A date or span of the last glacial cycle or of an ice core written in millions of years where thousands were meant (Ma for ka, million for thousand).',

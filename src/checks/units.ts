@@ -70,7 +70,8 @@ export function checkUnits(text: string, parsed: Quantity[], context: readonly s
       const single = f.level !== undefined;
       if (!single && !disjoint(f.stated, f.computed)) continue;
       const q: Quantity = f.stated;
-      const right = single ? (f.correction ?? q.text) : formatQuantity(f.computed.value, q.unit, q.statedUnit, correctionFigures(q));
+      const figures = f.figures ?? correctionFigures(q);
+      const right = single ? (f.correction ?? q.text) : formatQuantity(f.computed.value, q.unit, q.statedUnit, figures);
       flags.push({
         ruleId: rule.id,
         level: f.level ?? levelFor(q, f.computed),
@@ -79,7 +80,7 @@ export function checkUnits(text: string, parsed: Quantity[], context: readonly s
         reason: single ? f.reason : `${q.text} should be ${right}. ${f.reason}`,
         claimed: shownClaim(q),
         reference: { id: rule.id, measures: rule.summary, text: right, low: f.computed.low, high: f.computed.high, unit: f.unit ?? q.unit },
-        correction: f.correction ?? correctionFor(q, f.computed.value, correctionFigures(q)),
+        correction: f.correction ?? correctionFor(q, f.computed.value, figures),
         sources: f.sources,
       });
     }

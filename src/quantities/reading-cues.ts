@@ -74,7 +74,7 @@ export function namesChangeBefore(clause: string): boolean {
  * Words that say the next amount is the one before in other words, when a verb does it: "which
  * works out at", "equals", "corresponds to". A change noun may follow: "equals a warming of".
  */
-export const RESTATING_VERBS: readonly string[] = ['write as', 'written as', 'expressed as', 'works out at', 'works out to', 'work out at', 'work out to', 'comes to', 'come to', 'amounts to', 'amount to', 'corresponds to', 'correspond to', 'equals', 'equal to', 'is equal to', 'is the same as', 'the same as', 'translates to', 'translates into'];
+export const RESTATING_VERBS: readonly string[] = ['write as', 'written as', 'expressed as', 'works out at', 'works out to', 'work out at', 'work out to', 'comes to', 'come to', 'amounts to', 'amount to', 'corresponds to', 'correspond to', 'equals', 'equal to', 'is equal to', 'is the same as', 'the same as', 'translates to', 'translates into', 'becomes', 'which makes it', 'that makes it', 'making it'];
 /** The restating verbs as one pattern, with an optional "a warming of" after them. */
 export const RESTATING_VERB_PATTERN = String.raw`(?:${[...RESTATING_VERBS].sort((a, b) => b.length - a.length).map((w) => w.replace(/ /g, String.raw`[\s\u00A0]+`)).join('|')})(?:[\s\u00A0]+(?:a|an)[\s\u00A0]+(?:${CHANGE_SUBJECT_NOUNS.join('|')}|reading|temperature|date|level|depth)[\s\u00A0]+of)?`;
 

@@ -54,8 +54,13 @@ const ANGLE_CUE = `(?:${['tilt', 'obliquit', 'axi', 'latitude', 'longitude', 'an
 const TEMPERATURE_CUE = `(?:${['temperature', 'thermometer', 'warm', 'cool', 'cold', 'heat', 'hotter', 'chill', 'sensitivit', 'doubl'].map((w) => words(w) + LETTERS).join('|')})`;
 const TEMPERATURE_AFTER = words('(?:colder|warmer|cooler|hotter|chillier|of (?:warming|cooling|cold|warmth)|of (?:eventual|further|extra|additional|equilibrium|long-term) warming|(?:per|for (?:a|each|every|one|such a)) doubling)');
 const BARE_DEGREES = String.raw`(?<!(?<![\p{L}])${ANGLE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,80})${words('degrees?')}(?![\s\u00A0]+(?:[nN]orth|[sS]outh|[eE]ast|[wW]est|[NSEW](?![\p{L}])))(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,60}[\p{N}\p{L}][\s\u00A0-]*${words('degrees?')})|(?=[\s\u00A0]+${TEMPERATURE_AFTER}(?![\p{L}])))`;
-const DEG_C = [symbol('° C'), 'ºC', '℃', words('degrees? (?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C'), BARE_DEGREES];
-const DEG_F = [symbol('° F'), 'ºF', '℉', words('degrees? fahrenheit'), symbol('degrees? F')];
+/**
+ * The scale's name alone after a number is its degree too, as people write it ("about 43 Fahrenheit",
+ * "minus 40 Celsius"), and a bare capital F after a number is a Fahrenheit figure ("9 F for the folks
+ * back home"; common practice in US writing). A bare capital C is not read: "14C" is radiocarbon.
+ */
+const DEG_C = [symbol('° C'), 'ºC', '℃', words('(?:degrees? )?(?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C'), BARE_DEGREES];
+const DEG_F = [symbol('° F'), 'ºF', '℉', words('(?:degrees? )?fahrenheit'), symbol('degrees? F'), 'F'];
 const KELVIN = ['K', words('kelvins?')];
 const PPM = ['ppmv?', words('parts? per million(?: by volume)?')];
 const PPB = ['ppbv?', words('parts? per billion(?: by volume)?')];
@@ -72,6 +77,8 @@ const BASE_UNITS: UnitDef[] = [
   u('yr BP', 'age', 1, 'years BP', [
     String.raw`(?:[cC]al(?:ibrated)?\.?[\s\u00A0]+)?(?:${YEAR_WORD}[\s\u00A0]+)?${BP}`,
     words('(?:years?|yrs?) before present'),
+    // "11,750 years before 1950": the BP convention's reference year written out (Stuiver & Polach 1977).
+    words('(?:years?|yrs?) before (?:ad )?1950'),
   ]),
   u('yr ago', 'age', 1, 'years ago', [words(`(?:years?|yrs?) ${AGO_WORDS}`)]),
   // "fifty millennia ago", "twelve centuries ago": an age counted in longer units.

@@ -10,7 +10,7 @@ import type { LoadedPacks } from './types.js';
 /** Rule ids that live in code (src/checks/arithmetic*.ts, units*.ts, reference-slips.ts). A test keeps this list complete. */
 export const CODE_RULE_IDS: readonly string[] = [
   'arith.change', 'arith.duration', 'arith.rate', 'arith.ratio',
-  'unit.age-era', 'unit.age-scale', 'unit.duration', 'unit.length', 'unit.percent-ppm', 'unit.ppb-ppm', 'unit.scale-slip', 'unit.temperature', 'unit.temperature-difference',
+  'unit.age-era', 'unit.age-scale', 'unit.duration', 'unit.era-reference-year', 'unit.length', 'unit.percent-ppm', 'unit.ppb-ppm', 'unit.scale-slip', 'unit.temperature', 'unit.temperature-difference',
 ];
 
 /** Every known rule id, sorted. */
