@@ -11,7 +11,9 @@
  * team's pattern rules match on the full build (`compromise`), whose match syntax reads chunks too.
  */
 import { createRequire } from 'node:module';
+import { fileURLToPath } from 'node:url';
 import type nlpType from 'compromise';
+import { loadStoredTagger } from './stored-tagger.js';
 
 let full: typeof nlpType | undefined;
 let tagger: typeof nlpType | undefined;
@@ -22,9 +24,19 @@ export function compromise(): typeof nlpType {
   return (full ??= createRequire(import.meta.url)('compromise') as typeof nlpType);
 }
 
-/** compromise's tagger build (`compromise/two`): the sentence readings' parse. */
+/**
+ * compromise's tagger build (`compromise/two`): the sentence readings' parse. From the build's
+ * stored tagger (dist/generated/compromise-tagger.cjs, nlp/stored-tagger.ts: the same sources with
+ * the model made at build time) while it was made from the compromise installed here.
+ */
 export function compromiseTagger(): typeof nlpType {
-  return (tagger ??= createRequire(import.meta.url)('compromise/two') as typeof nlpType);
+  return (tagger ??= taggerBuild());
+}
+
+function taggerBuild(): typeof nlpType {
+  const require = createRequire(import.meta.url);
+  const stored = loadStoredTagger(require, fileURLToPath(new URL('../generated/compromise-tagger.cjs', import.meta.url)));
+  return stored ?? (require('compromise/two') as typeof nlpType);
 }
 
 /** Counts one parse; every caller that makes a compromise document calls it (see `nlpUse`). */

@@ -11,6 +11,7 @@
  *   → [{ text: 'CO2', start: 0, length: 3, root: 'co2', tags: ['Noun', ...] }, { text: 'lagged', root: 'lag', ... }, ...]
  */
 import { compromiseTagger, countParse } from './compromise.js';
+import { tagTerms } from './stored-tagger.js';
 
 /** One term as compromise reads it; `start` and `length` are UTF-16 offsets into the sentence. */
 export interface SentenceTerm {
@@ -46,27 +47,5 @@ function readTerms(text: string): readonly SentenceTerm[] {
   // The tagger build has no chunker, whose chunks (noun, verb... phrases) nothing here reads: the
   // full build's last hook, it took about a third of each parse there.
   countParse();
-  const doc = compromiseTagger()(text);
-  doc.compute('root');
-  // The offsets `doc.json({ offset: true, terms: { offset: true } })` reports, without the json:
-  // that call copied every term and rendered each sentence's text, normal and offset besides, about
-  // a quarter of compromise's time per sentence here. Its terms are the document's own terms
-  // (text, tags as an array, root, offset), read here directly.
-  doc.compute('offset');
-  const terms: SentenceTerm[] = [];
-  for (const sentence of (doc as unknown as { docs: CompromiseTerm[][] }).docs) {
-    for (const t of sentence) {
-      if (t.offset === undefined) continue;
-      terms.push({ text: t.text, tags: Object.freeze([...(t.tags ?? [])]), ...(typeof t.root === 'string' ? { root: t.root } : {}), start: t.offset.start, length: t.offset.length });
-    }
-  }
-  return Object.freeze(terms);
-}
-
-/** A term of a compromise document, as `doc.docs` holds it once its offsets are computed. */
-interface CompromiseTerm {
-  text: string;
-  tags?: Set<string>;
-  root?: unknown;
-  offset?: { start: number; length: number };
+  return Object.freeze(tagTerms(compromiseTagger(), text));
 }
