@@ -43,10 +43,10 @@ const TIMES = new RegExp(
  */
 const FACTOR = new RegExp(String.raw`(?<![\p{L}])factor[\s\u00A0]+of[\s\u00A0]+(?:(?<d>\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?)(?![\d,.]*\d)|(?<w>${SMALL_WORDS})(?![\p{L}]))`, 'giu');
 /**
- * "a ratio of roughly 18 to 1", "185:1", "a 20-to-1 ratio": a multiple written as a ratio to one
- * (common practice of English). The words "to 1" are read as a ratio only after the noun "ratio"
- * or before it, so a range ("from 10 to 1 ppm") stays a range; the colon form needs no noun, but a
- * clock time ("10:15") has more digits after the colon.
+ * "a ratio of roughly 18 to 1", "a ratio of 185:1", "a 20-to-1 ratio": a multiple written as a ratio
+ * to one (common practice of English), read so only next to the noun "ratio", so a range ("from 10
+ * to 1 ppm") stays a range and a bare "3:1" stays two numbers; a clock time ("10:15") has more
+ * digits after the colon.
  */
 const TO_ONE = new RegExp(String.raw`(?<![\p{L}\p{N}.,:])(?<d>\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?)(?:[\s\u00A0]*:[\s\u00A0]*|[\s\u00A0-]+to[\s\u00A0-]+)1(?![\d.,:]\d|\d)`, 'giu');
 const RATIO_NOUN_BEFORE = /(?:^|[^\p{L}])ratios?(?:[\s\u00A0]+(?:is|was|of|at|near|about|around|roughly|some|nearly|almost|approximately|close[\s\u00A0]+to|more[\s\u00A0]+than|over|under))*[\s\u00A0]*$/iu;
@@ -54,10 +54,9 @@ const RATIO_NOUN_AFTER = /^[\s\u00A0-]+ratios?(?![\p{L}])/iu;
 
 function toOneAtom(text: string, m: RegExpExecArray): Atom | undefined {
   const end = m.index + m[0].length;
-  const colon = m[0].includes(':');
   // A unit sign after "1" makes it the end of a range ("10 to 1 %").
   if (/^[\s\u00A0]*(?:%|‰|°)/u.test(text.slice(end, end + 3))) return undefined;
-  if (!colon && !RATIO_NOUN_BEFORE.test(text.slice(Math.max(0, m.index - 60), m.index)) && !RATIO_NOUN_AFTER.test(text.slice(end))) return undefined;
+  if (!RATIO_NOUN_BEFORE.test(text.slice(Math.max(0, m.index - 60), m.index)) && !RATIO_NOUN_AFTER.test(text.slice(end))) return undefined;
   const d = m.groups?.['d']?.replace(/,/gu, '') ?? '';
   return atom(m.index, end, Number(d), halfPlace(d), 'precision');
 }
