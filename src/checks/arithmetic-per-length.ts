@@ -14,6 +14,8 @@ import { writtenInterval as w } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
 import { divide, type Derived } from './arithmetic-derive.js';
 import type { Previous } from './arithmetic-context.js';
+import { isVagueTime } from './arithmetic-vague.js';
+import { reachBack } from './arithmetic-reader/roles.js';
 
 /** A finding on a stated number, with what the computed value is in words. */
 export interface PerLengthFinding {
@@ -67,7 +69,8 @@ function gradients(text: string, all: Quantity[]): Gradient[] {
   const stated = qs.filter((q) => q.dimension === 'duration-per-length').map((q) => ({ perMetre: w(q), words: q.text, parts: [q] }));
   const units = qs.flatMap((q, i) => {
     const next = qs[i + 1];
-    if (q.dimension !== 'length' || q.value !== 1 || next === undefined || next.dimension !== 'duration') return [];
+    // "a metre of ice covers only a few decades": a vague time is no gradient to reckon with.
+    if (q.dimension !== 'length' || q.value !== 1 || next === undefined || next.dimension !== 'duration' || isVagueTime(next.text)) return [];
     if (!HOLDS_GAP.test(text.slice(q.end, next.start))) return [];
     const per = w(next);
     // The unit length is a definition ("one metre"), exact; only the years carry the writer's precision.
@@ -88,8 +91,10 @@ function lengthAndYears(qs: Quantity[], lengthFirst: boolean): [Quantity, Quanti
 }
 
 /** Every contradiction between a gradient and the years and metres beside it. */
-export function perLength(text: string, parsed: Quantity[], previous?: Previous): PerLengthFinding[] {
+export function perLength(text: string, parsed: Quantity[], last?: Previous, earlier: readonly Previous[] = []): PerLengthFinding[] {
   const qs = withUnitMetres(text, parsed);
+  // The sentence before with figures, past one short line with none ("frostfern_amy - 4 Jun").
+  const previous = earlier.length === 0 ? last : reachBack(earlier, 1).find((p) => p.quantities.length > 0);
   const found = only(gradients(text, qs));
   if (found !== undefined) {
     const [stated] = found.parts;

@@ -300,7 +300,7 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     return [...paced, ...notYet(paced, seriesSpacings(t, qs, p).filter((f) => f.stated.dimension === 'duration'))].filter((f) => !isBoundOrVague(t, f.stated));
   } },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev, earlier = []) => {
-    const found = [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev)];
+    const found = [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev, earlier)];
     const all = [...found, ...notYet(found, ratesInParagraph(t, qs, p, earlier))];
     // "At 2.4 ppm a year, adding 100 ppm takes about 4 years": a time worked from the pace makes the
     // pace its premise, not a result of the amount and the time.

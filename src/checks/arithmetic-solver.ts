@@ -25,6 +25,7 @@ import { divide, facing, invert, minus, rangeSpan, size, type Derived } from './
 import { changesOver, findPairs, isPaceRatio, isStatedChange, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 import { spanOfDates } from './arithmetic-spans.js';
 import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
+import { isVagueTime } from './arithmetic-vague.js';
 
 /** A finding from the paragraph's equations, with the basis named. */
 export interface SolverFinding {
@@ -107,8 +108,10 @@ function changesIn(s: Read, dimension: Dimension, except: readonly Quantity[]): 
 }
 
 /** The spans of time a sentence states: durations that are no age or interval, and the spans of its dates. */
+
 function durationsIn(s: Read, except: readonly Quantity[]): { value: Derived; text: string }[] {
-  const stated = s.qs.filter((q) => !except.includes(q) && q.dimension === 'duration' && !NOT_A_SPAN.test(s.text.slice(Math.max(0, q.start - 12), q.start)) && !/^[\s\u00A0]*(?:ago|old|back|before)(?![\p{L}])/iu.test(s.text.slice(q.end)));
+  // "several centuries", "a few thousand years": a time told vaguely is no operand of a sum (common practice).
+  const stated = s.qs.filter((q) => !except.includes(q) && q.dimension === 'duration' && !isVagueTime(q.text) && !NOT_A_SPAN.test(s.text.slice(Math.max(0, q.start - 12), q.start)) && !/^[\s\u00A0]*(?:ago|old|back|before)(?![\p{L}])/iu.test(s.text.slice(q.end)));
   const dated = spanOfDates(s.qs, s.pairs).map((d) => ({ value: d.span, text: d.measures.replace(/^the time /u, '') }));
   const ages = s.qs.filter((q) => q.dimension === 'age');
   const two = dated.length === 0 && ages.length === 2 && ages.every((q) => rangeSpan(q) === undefined) ? [{ value: size(minus(w(ages[0] as Quantity), w(ages[1] as Quantity))), text: `${(ages[0] as Quantity).text} to ${(ages[1] as Quantity).text}` }] : [];
@@ -120,9 +123,13 @@ function rateCandidates(reads: Read[], changeDim: Dimension, except: readonly Qu
   const out: Candidate[] = [];
   for (const a of reads) {
     for (const c of changesIn(a, changeDim, except)) {
+      // A change told with the time it took ("rose 76 ppm in 6,000 years", "took thousands of years")
+      // takes no other sentence's time.
+      const ownTime = a.qs.some((q) => !except.includes(q) && q.dimension === 'duration' && !NOT_A_SPAN.test(a.text.slice(Math.max(0, q.start - 12), q.start)));
       for (const b of reads) {
         // From one sentence, from this one and one before, or from two sentences next to each other.
         if (a !== b && a.distance !== 0 && b.distance !== 0 && Math.abs(a.distance - b.distance) > 1) continue;
+        if (a !== b && ownTime) continue;
         for (const d of durationsIn(b, except)) {
           const r = divide(c.value, d.value);
           if (r !== undefined) out.push({ value: r, measures: `${c.text} divided by ${d.text}`, distance: a.distance + b.distance });

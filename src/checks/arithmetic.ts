@@ -13,6 +13,7 @@ import type { Derived } from './arithmetic-derive.js';
 import { disjoint, levelFor } from './arithmetic-levels.js';
 import { ARITHMETIC_RULES, findPairs } from './arithmetic-rules.js';
 import { shownClaim } from './reference-format.js';
+import { operandsOf } from './arithmetic-vague.js';
 
 /**
  * The replacement for a stated quantity: its own words with the right value. An approximation
@@ -60,6 +61,58 @@ function answerTo(text: string, quantities: Quantity[], context: readonly string
 
 const shown = (q: Quantity, d: Derived): string => formatQuantity(d.value, q.unit, q.statedUnit, correctionFigures(q));
 
+/** A contradiction one rule found, with the inputs of earlier sentences it took at their right value. */
+interface RuleFinding {
+  rule: (typeof ARITHMETIC_RULES)[number];
+  stated: Quantity;
+  computed: Derived;
+  measures: string;
+  basis: string | undefined;
+  corrected: readonly Corrected[];
+}
+
+/** A figure of an earlier sentence that its own figures contradict, and the value they give it. */
+interface Corrected {
+  q: Quantity;
+  right: Derived;
+}
+
+/**
+ * The quantities of a context sentence, each result its own paragraph's figures contradict taken at
+ * the value they give ("76 ppm in 6,000 years. That is 0.13 ppm a year. Today's 2.4 ppm a year is
+ * 19 times faster.": the 0.13 is 0.0127, so the multiple is 190, not 19). A later sum on a wrong
+ * result inherits the slip; the draft's own figures say what the result should have been.
+ */
+function correctedQuantities(context: readonly string[], index: number): { quantities: Quantity[]; corrected: Corrected[] } {
+  const text = context[index] ?? '';
+  const quantities = operandsOf(text, parseQuantities(text));
+  if (quantities.length === 0) return { quantities, corrected: [] };
+  const found = findingsOf(text, quantities, context.slice(0, index), false);
+  const corrected = found.map((f) => ({ q: f.stated, right: f.computed }));
+  return { quantities: quantities.map((q) => {
+    const c = corrected.find((x) => x.q === q);
+    return c === undefined ? q : { ...q, value: c.right.value, low: c.right.low, high: c.right.high };
+  }), corrected };
+}
+
+/** Every finding of every rule on one sentence; `correct` takes the context's wrong results at their right values. */
+function findingsOf(text: string, quantities: Quantity[], context: readonly string[], correct: boolean): RuleFinding[] {
+  const window = context.slice(-3);
+  const offset = context.length - window.length;
+  const read = window.map((_, i) => (correct ? correctedQuantities(context, offset + i) : { quantities: operandsOf(context[offset + i] ?? '', parseQuantities(context[offset + i] ?? '')), corrected: [] }));
+  const corrected = read.flatMap((r) => r.corrected);
+  const earlier = window.map((t, i) => ({ text: t, quantities: (read[i] as { quantities: Quantity[] }).quantities })).reverse();
+  const previous = earlier[0];
+  const pairs = findPairs(text, quantities);
+  const out: RuleFinding[] = [];
+  for (const rule of ARITHMETIC_RULES) {
+    for (const { stated, computed, measures, basis } of rule.derive(text, quantities, pairs, previous, earlier)) {
+      if (disjoint(stated, computed)) out.push({ rule, stated, computed, measures, basis, corrected });
+    }
+  }
+  return out;
+}
+
 /**
  * Every arithmetic contradiction in one sentence, with the right value in the correction.
  * `context` is the sentences before it in the same paragraph, in order; the last one may hold the
@@ -69,30 +122,22 @@ const shown = (q: Quantity, d: Derived): string => formatQuantity(d.value, q.uni
 export function checkArithmetic(text: string, quantities: Quantity[], context: readonly string[] = []): FlagDraft[] {
   const asked = askedBefore(context);
   if (asked !== undefined) return answerTo(text, quantities, asked);
-  const last = context[context.length - 1];
-  const previous = last === undefined ? undefined : { text: last, quantities: parseQuantities(last) };
-  const earlier = context
-    .slice(-3)
-    .reverse()
-    .map((t) => (t === last && previous !== undefined ? previous : { text: t, quantities: parseQuantities(t) }));
-  const pairs = findPairs(text, quantities);
   const flags: FlagDraft[] = [];
-  for (const rule of ARITHMETIC_RULES) {
-    for (const { stated, computed, measures, basis } of rule.derive(text, quantities, pairs, previous, earlier)) {
-      if (!disjoint(stated, computed)) continue;
-      const right = shown(stated, computed);
-      flags.push({
-        ruleId: rule.id,
-        level: levelFor(stated, computed),
-        start: stated.start,
-        end: stated.end,
-        reason: `By ${basis ?? "the sentence's"} own numbers, ${measures} is ${right}, not ${stated.text}.`,
-        claimed: shownClaim(stated),
-        reference: { id: rule.id, measures, text: right, low: computed.low, high: computed.high, unit: stated.unit },
-        correction: correctionFor(stated, computed.value),
-        sources: [],
-      });
-    }
+  for (const { rule, stated, computed, measures, basis, corrected } of findingsOf(text, quantities, context, true)) {
+    const right = shown(stated, computed);
+    // An input the draft itself got wrong earlier is taken at its right value, and the reason says so.
+    const owned = corrected.filter((c) => measures.includes(c.q.text)).map((c) => ` (${c.q.text} is itself ${shown(c.q, c.right)} by the figures before it)`);
+    flags.push({
+      ruleId: rule.id,
+      level: levelFor(stated, computed),
+      start: stated.start,
+      end: stated.end,
+      reason: `By ${basis ?? "the sentence's"} own numbers, ${measures} is ${right}, not ${stated.text}${owned.join('')}.`,
+      claimed: shownClaim(stated),
+      reference: { id: rule.id, measures, text: right, low: computed.low, high: computed.high, unit: stated.unit },
+      correction: correctionFor(stated, computed.value),
+      sources: [],
+    });
   }
   // One figure, one flag: a result two rules read ("12,900 take away 11,700 leaves a cold spell of
   // about 2,200 years" is a written sum and a span of dates) is flagged by the first.

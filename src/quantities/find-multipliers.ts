@@ -42,6 +42,25 @@ const TIMES = new RegExp(
  * English), read as a ratio, so the number is no amount of the unit stated beside it.
  */
 const FACTOR = new RegExp(String.raw`(?<![\p{L}])factor[\s\u00A0]+of[\s\u00A0]+(?:(?<d>\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?)(?![\d,.]*\d)|(?<w>${SMALL_WORDS})(?![\p{L}]))`, 'giu');
+/**
+ * "a ratio of roughly 18 to 1", "a ratio of 185:1", "a 20-to-1 ratio": a multiple written as a ratio
+ * to one (common practice of English), read so only next to the noun "ratio", so a range ("from 10
+ * to 1 ppm") stays a range and a bare "3:1" stays two numbers; a clock time ("10:15") has more
+ * digits after the colon.
+ */
+const TO_ONE = new RegExp(String.raw`(?<![\p{L}\p{N}.,:])(?<d>\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?)(?:[\s\u00A0]*:[\s\u00A0]*|[\s\u00A0-]+to[\s\u00A0-]+)1(?![\d.,:]\d|\d)`, 'giu');
+const RATIO_NOUN_BEFORE = /(?:^|[^\p{L}])ratios?(?:[\s\u00A0]+(?:is|was|of|at|near|about|around|roughly|some|nearly|almost|approximately|close[\s\u00A0]+to|more[\s\u00A0]+than|over|under))*[\s\u00A0]*$/iu;
+const RATIO_NOUN_AFTER = /^[\s\u00A0-]+ratios?(?![\p{L}])/iu;
+
+function toOneAtom(text: string, m: RegExpExecArray): Atom | undefined {
+  const end = m.index + m[0].length;
+  // A unit sign after "1" makes it the end of a range ("10 to 1 %").
+  if (/^[\s\u00A0]*(?:%|‰|°)/u.test(text.slice(end, end + 3))) return undefined;
+  if (!RATIO_NOUN_BEFORE.test(text.slice(Math.max(0, m.index - 60), m.index)) && !RATIO_NOUN_AFTER.test(text.slice(end))) return undefined;
+  const d = m.groups?.['d']?.replace(/,/gu, '') ?? '';
+  return atom(m.index, end, Number(d), halfPlace(d), 'precision');
+}
+
 const FRACTION = /(?<![\p{L}])(?:(?<count>a|one|two|three|four)[\s\u00A0-]+(?<part>half|third|quarter|fifth|tenth|thirds|quarters|fifths|tenths)|(?<half>half))(?![\p{L}])/giu;
 /** A fraction counts only in a ratio frame: "by a third", "about half", "half as much", "a third of". */
 const FRACTION_BEFORE = /(?:^|[^\p{L}])(?:by|to|in|about|nearly|almost|roughly|only|some|around|over|than|just|cut|fell|rose|lost|gained|barely|more|less)[\s\u00A0]+$/iu;
@@ -82,6 +101,10 @@ export function findMultipliers(text: string): Atom[] {
   for (const m of text.matchAll(FOLD)) out.push(numberAtom(m));
   for (const m of text.matchAll(TIMES)) out.push(numberAtom(m));
   for (const m of text.matchAll(FACTOR)) out.push(numberAtom(m));
+  for (const m of text.matchAll(TO_ONE)) {
+    const a = toOneAtom(text, m);
+    if (a !== undefined) out.push(a);
+  }
   for (const m of text.matchAll(FRACTION)) {
     const a = fractionAtom(text, m);
     if (a !== undefined) out.push(a);

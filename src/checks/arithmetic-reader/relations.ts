@@ -60,6 +60,19 @@ function apposed(text: string, from: number, to: number): boolean {
   return words.length <= 6 && !words.some((w) => WORDS.sequence.has(w.text));
 }
 
+/**
+ * True when the result follows a clause mark after the inputs and a few words that name the
+ * relation it measures ("..., against 0.013 ppm per year then: a ratio of roughly 18 to 1",
+ * "... — a difference of 3,300 years"): the figure is set in apposition to the clause of its inputs.
+ */
+function namedAfterMark(text: string, from: number, to: number): boolean {
+  const stretch = text.slice(from, to);
+  const mark = Math.max(stretch.lastIndexOf(':'), stretch.lastIndexOf(','), stretch.lastIndexOf('—'), stretch.lastIndexOf('–'), stretch.lastIndexOf(' - '));
+  if (mark < 0 || /[.;!?]\s/u.test(stretch)) return false;
+  const words = wordsIn(text, from + mark, to);
+  return words.length > 0 && words.length <= 5 && !words.some((w) => WORDS.sequence.has(w.text)) && words.some((w) => WORDS.askedNouns.has(w.text));
+}
+
 /** True when a negation stands just before the figure ("not 87", "no adding 32"). */
 const denied = (f: Figure): boolean => f.before.slice(-3).some((w) => WORDS.negations.has(w.text));
 
@@ -68,7 +81,7 @@ const denied = (f: Figure): boolean => f.before.slice(-3).some((w) => WORDS.nega
  * sentence dates it to 1950 or later.
  */
 function isPresent(figures: Figure[], g: Figure): boolean {
-  return g.before.some((w) => WORDS.ownTime.has(w.text)) || figures.some((d) => d.sentence === g.sentence && d.role === 'date' && d.q.value <= 0 && rangeSpan(d.q) === undefined);
+  return g.before.some((w) => WORDS.ownTime.has(w.text)) || WORDS.ownTime.has(g.after[0]?.text ?? '') || figures.some((d) => d.sentence === g.sentence && d.role === 'date' && d.q.value <= 0 && rangeSpan(d.q) === undefined);
 }
 
 /** True when the result is another quantity than a consequence of the figures before it. */
@@ -96,7 +109,7 @@ function isTied(f: Figure, text: string, lastInput: number): boolean {
   if (holdsPhrase(words, WORDS.links)) return true;
   // Inputs only in the sentences before: the sentence must say it draws on them.
   if (lastInput < 0) return false;
-  if (apposed(text, lastInput, f.q.start)) return true;
+  if (apposed(text, lastInput, f.q.start) || namedAfterMark(text, lastInput, f.q.start)) return true;
   if (f.role === 'duration' && WORDS.later.has(f.after[0]?.text ?? '')) return true;
   // A change word of the result's own ("the air gained some 110 ppm", "is a jump of") in the clause run after its levels.
   return (f.role === 'change' || f.role === 'relative') && words.length <= 10;
@@ -239,7 +252,9 @@ function checkMultiple(figures: Figure[], text: string, f: Figure): ReaderFindin
     if (f.sign > 0) candidates.push({ value: { value: up.value - 1, low: up.low - 1, high: up.high - 1 }, measures, near: -Infinity, far: -Infinity });
   }
   // Two paces set side by side with a pace word are one measure, so a slip of a factor ten is still a slip of it ("20 times" for 200).
-  const nearest = verdict(f.q, candidates, (d) => d, ROUNDED, pace ? 30 : 3);
+  // So are two rates set against each other without a pace word ("2.4 ppm a year against 0.013 ppm a year: a ratio of 18 to 1").
+  const rates = pairsOf(found.inputs).some(([a, b]) => a.role === 'rate' && b.role === 'rate' && a.family === b.family);
+  const nearest = verdict(f.q, candidates, (d) => d, ROUNDED, pace || rates ? 30 : 3);
   if (nearest === undefined) return [];
   return [{ ruleId: 'arith.ratio', stated: f.q, computed: nearest.value, measures: nearest.measures, ...basisOf(found.inputs) }];
 }

@@ -7,7 +7,7 @@
  * a comparative, a sign or a remainder word stands beside the figure.
  */
 import { parseQuantities, writtenInterval as w } from '../../quantities/index.js';
-import { divide, size, type Derived } from '../arithmetic-derive.js';
+import { divide, minus, size, type Derived } from '../arithmetic-derive.js';
 import type { Dimension, Quantity } from '../../types.js';
 import { WORDS, wordsIn, type Word } from './word-classes.js';
 
@@ -37,7 +37,7 @@ export interface Figure {
 const LEVEL_FAMILY: Partial<Record<Dimension, string>> = { concentration: 'concentration', temperature: 'temperature', 'temperature-change': 'temperature', length: 'length', count: 'count', number: 'number' };
 const RATES: Dimension[] = ['concentration-rate', 'temperature-rate', 'length-rate'];
 /** Words that may stand between a change word and its figure without changing what it is. */
-const FILLERS = new Set(['only', 'just', 'barely', 'merely', 'mere', 'a', 'an', 'the', 'by', 'of', 'some', 'another', 'good', 'full', 'whole', 'measly', 'extra']);
+const FILLERS = new Set(['only', 'just', 'barely', 'merely', 'mere', 'a', 'an', 'the', 'by', 'of', 'some', 'another', 'good', 'full', 'whole', 'measly', 'extra', 'order']);
 
 /** The first words after the figure, up to the next figure or the end of its clause. */
 function wordsAfter(text: string, q: Quantity, next: Quantity | undefined): Word[] {
@@ -67,14 +67,24 @@ function changeBefore(before: Word[]): number | undefined {
   const verb = WORDS.changeVerbs.get(word.text);
   if (verb !== undefined && last !== 'of') return verb;
   const particle = WORDS.particles.get(word.text);
-  // "up 124 ppm", but not "has taken up a quarter": a particle of a phrasal verb is no change.
-  if (particle !== undefined && word === before.at(-1) && !WORDS.phrasalHeads.has(before.at(-2)?.text ?? '')) return particle;
+  // "up 124 ppm", "up by a third", but not "has taken up a quarter": a particle of a phrasal verb is no change.
+  const at = before.lastIndexOf(word);
+  const byOnly = before.slice(at + 1).every((x) => x.text === 'by');
+  if (particle !== undefined && byOnly && !WORDS.phrasalHeads.has(before.at(at - 1)?.text ?? '')) return particle;
   // "a jump of about", "an increase of roughly".
   if (last === 'of') {
     const noun = WORDS.changeNouns.get(word.text);
     if (noun !== undefined) return noun;
   }
   if (WORDS.remainder.has(word.text)) return 0;
+  // "the swing was of the order of 110 ppm", "the rise is about 90": a change noun as the subject
+  // of a copula whose complement is the figure.
+  const k = before.lastIndexOf(word);
+  if (WORDS.copulas.has(word.text) && k > 0) {
+    const subject = lastMeaningful(before.slice(0, k));
+    const noun = subject === undefined ? undefined : WORDS.changeNouns.get(subject.text);
+    if (noun !== undefined) return noun;
+  }
   return undefined;
 }
 
@@ -137,6 +147,9 @@ export function readSentence(text: string, qs: readonly Quantity[], sentence: nu
     // "+115 ppm" is a change; "−25 °C" is a temperature below zero, a change only in other families.
     const signed = /^\+\s*\d/u.test(q.text) ? 1 : /^[−-]\s*\d/u.test(q.text) && family !== 'temperature' ? -1 : undefined;
     const change = signed ?? up;
+    // "the yearly increase was about 0.8 ppm", "annual growth of 2.4 ppm": an amount each year is a pace per year.
+    const pace = PACE_OF[family];
+    if (pace !== undefined && before.some((x) => WORDS.perYear.has(x.text))) return { ...f, role: 'rate', family: pace };
     return change === undefined ? { ...f, role: 'level', family } : { ...f, role: 'change', family, sign: change };
   });
   return withPaces(text, restatements(text, giveBareUnits(text, figures.flatMap((f) => (f.role === 'level' ? splitRange(f) : [f])))));
@@ -167,8 +180,13 @@ function withPaces(text: string, figures: Figure[]): Figure[] {
     const family = PACE_OF[g.family];
     if (d?.role !== 'duration' || family === undefined || (g.role !== 'change' && g.role !== 'level')) return [];
     if (!/^\s+(?:over|in|across|within)\s+(?:(?:the|those|these|some)\s+)?$/iu.test(text.slice(g.q.end, d.q.start))) return [];
-    const value = divide(size(w(g.q)), w(d.q));
-    return value === undefined ? [] : [{ ...g, role: 'rate', family, order: d.order, pace: { value, text: `${g.q.text} over ${d.q.text}`, end: d.q.end } }];
+    // "~190 → 280 ppm over roughly 7,000 yrs": the end of a pair of levels went up by their difference in that time.
+    const from = figures[i - 1];
+    const paired = g.role === 'level' && from?.role === 'level' && from.family === g.family && /^\s*(?:to|→|->|–|-)\s*$/u.test(text.slice(from.q.end, g.q.start));
+    const amount = paired ? size(minus(w(g.q), w(from.q))) : size(w(g.q));
+    const value = divide(amount, w(d.q));
+    const named = paired ? `${from.q.text} to ${g.q.text}` : g.q.text;
+    return value === undefined ? [] : [{ ...g, role: 'rate', family, order: d.order, pace: { value, text: `${named} over ${d.q.text}`, end: d.q.end } }];
   });
   return [...figures, ...paces].sort((a, b) => a.order - b.order);
 }
@@ -202,9 +220,14 @@ const asWritten = (q: Quantity): boolean => q.statedUnit !== '' && q.unit === q.
 function giveBareUnits(text: string, figures: Figure[]): Figure[] {
   const rates = new Set(figures.filter((f) => f.role === 'rate' && /\/yr$/u.test(f.q.unit) && f.q.statedUnit === f.q.unit).map((f) => f.family));
   const families = new Set(figures.filter((f) => (f.role === 'level' || f.role === 'change') && f.family !== 'number' && f.family !== 'count' && asWritten(f.q)).map((f) => f.family));
+  // "Vostok's 420,000 years against Dome C's 800,000": spans of time are the only figures with a unit.
+  const spans = figures.some((f) => f.role === 'duration') && families.size === 0 && !figures.some((f) => f.role === 'date' || f.role === 'rate');
   return figures.map((f) => {
     if (f.family !== 'number') return f;
     if (/^\d{4}$/u.test(f.q.text.trim()) && f.q.value >= 1000 && f.q.value <= 2100) return { ...f, role: 'other', family: '' };
+    // "gas age 14,200, ice age 17,500": a bare figure named by an age noun right before it is an age in years.
+    if (f.role === 'level' && WORDS.ageNouns.has(lastMeaningful(f.before)?.text ?? '')) return { ...f, role: 'date', family: 'age' };
+    if (f.role === 'level' && spans && f.q.value >= 100) return { ...f, role: 'duration', family: 'duration' };
     // "~0.012 a year" beside "~2.4 ppm a year": a bare figure per year takes the one per-year rate written.
     const [per, unit] = f.after.map((w) => w.text);
     if (rates.size === 1 && ['a', 'per', 'each', 'every'].includes(per ?? '') && (unit === 'year' || unit === 'yr')) return { ...f, role: 'rate', family: [...rates][0] as string };
@@ -212,12 +235,48 @@ function giveBareUnits(text: string, figures: Figure[]): Figure[] {
   });
 }
 
+/** The most words a sentence with no figure may have and still pass the figures before it on. */
+const SHORT_BRIDGE = 8;
+
+/**
+ * The sentences before (nearest first) whose figures a sentence may draw on: back to `back`
+ * sentences with figures, passing over one short sentence with none ("We call it the Younger
+ * Dryas.", a by-line "frostfern_amy - 4 Jun", an item label "D2."). A second such sentence, a
+ * longer one, or a line with no word at all (a rule between posts) ends them.
+ */
+export function reachBack<T extends { text: string; quantities: readonly Quantity[] }>(earlier: readonly T[], back: number): T[] {
+  const bridge = (p: T): boolean => {
+    const n = wordsIn(p.text, 0, p.text.length).length;
+    return n >= 1 && n <= SHORT_BRIDGE;
+  };
+  const gap = earlier.slice(0, back + 1).findIndex((p, i) => p.quantities.length === 0 && (!bridge(p) || i >= back || earlier.slice(0, i).some((e) => e.quantities.length === 0)));
+  return earlier.slice(0, gap < 0 ? back + 1 : gap);
+}
+
+/**
+ * "... held about 190 parts per million. In the warm spells it came back to something like 280.":
+ * a bare level of an earlier sentence takes the one family the paragraph's figures with a unit
+ * (written in the canonical unit) give, as a bare figure of one sentence does (giveBareUnits).
+ */
+function paragraphFamilies(figures: Figure[]): Figure[] {
+  const families = new Set(figures.filter((f) => (f.role === 'level' || f.role === 'change') && f.family !== 'number' && f.family !== 'count' && f.family !== 'duration' && asWritten(f.q)).map((f) => f.family));
+  if (families.size !== 1) return figures;
+  const family = [...families][0] as string;
+  const written = figures.filter((f) => f.family === family && asWritten(f.q)).map((f) => Math.abs(f.q.value));
+  // Of the same measure, so of its size: within a factor of three of a written figure. A numeral
+  // with a leading zero ("03 Nov", "09:12") is a day, a code or a clock time (common practice).
+  const alike = (f: Figure): boolean => !/^0\d/u.test(f.q.text.replace(/^\D+/u, '')) && written.some((v) => f.q.value > v / 3 && f.q.value < v * 3);
+  return figures.map((f) => (f.family === 'number' && (f.role === 'level' || f.role === 'change') && alike(f) ? { ...f, family } : f));
+}
+
 /** The figures of the sentence checked and of up to `back` sentences before it, oldest first. */
 export function readParagraph(text: string, qs: readonly Quantity[], earlier: readonly { text: string; quantities: Quantity[] }[], back: number): { figures: Figure[]; texts: string[] } {
   // The figures before run back without a break: a sentence with none ends them.
-  const gap = earlier.slice(0, back).findIndex((p) => p.quantities.length === 0);
-  const before = earlier.slice(0, gap < 0 ? back : gap);
-  const texts = [text, ...before.map((p) => p.text)];
-  const figures = [...before.map((p, i) => readSentence(p.text, p.quantities, i + 1, -(i + 1) * 1e6)).reverse().flat(), ...readSentence(text, qs, 0, 0)];
-  return { figures, texts };
+  // A short sentence with no figure that names or comments on the thing ("We call it the Younger
+  // Dryas.") passes the figures on; a second one, or a long one, ends them.
+  const reach = reachBack(earlier, back);
+  const before = reach.filter((p) => p.quantities.length > 0).slice(0, back).map((p) => ({ p, i: reach.indexOf(p) }));
+  const texts = [text, ...reach.map((p) => p.text)];
+  const figures = [...before.map(({ p, i }) => readSentence(p.text, p.quantities, i + 1, -(i + 1) * 1e6)).reverse().flat(), ...readSentence(text, qs, 0, 0)];
+  return { figures: paragraphFamilies(figures), texts };
 }

@@ -68,6 +68,12 @@ const BACK_REFERENCES = ['that', 'this', 'those', 'these', 'then', 'such'];
  * "including a rise of", "the first 1,500 years"): a part is no restatement of the whole.
  */
 const PART = ['with', 'including', 'includes', 'included', 'among', 'within', 'of which', 'largest', 'biggest', 'sharpest', 'steepest', 'fastest', 'greatest', 'smallest', 'first', 'final', 'single', 'individual', 'each', 'every', 'part', 'portion', 'share', 'half'];
+/** Verbs that set a figure as the complement of their subject ("the rise was 90 ppm"). */
+const COPULAS = ['is', 'was', 'were', 'are', 'be', 'been', 'being', "'s", 'stood', 'stands', 'came', 'comes', 'amounted', 'amounts'];
+/** Adjectives that make an amount one that recurs each year ("the yearly increase was 0.8 ppm"): a rate per year. */
+const PER_YEAR = ['yearly', 'annual', 'annually', 'year-on-year'];
+/** Nouns that name a figure after them as an age in years ("gas age 14,200", "an ice age of 17,500"). */
+const AGE_NOUNS = ['age', 'ages'];
 /** Units of time a change may recur in ("2 ppm a year"). */
 const TIME_UNITS = ['year', 'decade', 'century', 'millennium', 'month', 'day', 'week', 'yr', 'annum'];
 /** Words after a change that tie it to a recurring time or a start of its own ("2 ppm a year", "140 ppm since 1750"). */
@@ -147,6 +153,9 @@ export const WORDS = {
   spacingNouns: formsOf(SPACING_NOUNS),
   eachLong: new Set(EACH_LONG),
   spanBefore: new Set(SPAN_BEFORE),
+  copulas: new Set(COPULAS),
+  perYear: new Set(PER_YEAR),
+  ageNouns: new Set(AGE_NOUNS),
   operators: new Map(Object.entries(OPERATORS)),
   equals: EQUALS,
 };
