@@ -15,6 +15,11 @@ import type { Change, Directed, Relation } from './types.js';
 
 const SIZE_DOWN = new Set(['less', 'fewer', 'smaller', 'lower']);
 const SIZE_UP = new Set(['more', 'greater', 'larger', 'higher', 'extra']);
+/** Words of a quantity phrase between a verb of uptake and the gas ("a smaller share of", "half as much"). */
+const QUANTITY_WORDS = new Set(['a', 'an', 'the', 'its', 'their', 'much', 'many', 'far', 'even', 'still', 'only', 'as', 'of', 'less', 'more', 'fewer', 'smaller', 'larger', 'greater', 'bigger', 'lower', 'higher', 'share', 'amount', 'fraction', 'proportion', 'quantity', 'part', 'portion', 'volume', 'load', 'lot', 'deal', 'bit', 'half', 'twice', 'double', 'times', 'third', 'quarter']);
+/** Multiples below one and above one before "as much" ("half as much", "twice as much"). */
+const FRACTIONS = new Set(['half', 'third', 'quarter', 'fifth', 'tenth', 'fraction']);
+const MULTIPLES = new Set(['twice', 'double', 'triple', 'times']);
 
 /** Every directed thing in the sentence: temperatures, CO2 uptake, amounts. */
 export function readDirected(s: ReadSentence, previous?: ReadSentence): Directed[] {
@@ -160,7 +165,9 @@ function uptakeDirection(s: ReadSentence, h: LexHit): 1 | -1 | undefined {
     // "less dissolved CO2": a participle before CO2 describes it, and states no uptake.
     const lead = s.words[h.first - 1]?.text ?? '';
     if (/ed$/u.test(s.words[h.last]?.text ?? '') && s.of('entities', 'co2').some((c) => c.first === h.last + 1) && /^(?:less|more|of|the|a|much|little|extra|some|no)$/u.test(lead)) return undefined;
-    const objectCo2 = s.of('entities', 'co2').some((c) => c.first > h.last && c.first - h.last <= 5) || s.words.slice(h.last + 1, h.last + 4).some((w) => /^(?:it|carbon|gas|them)$/u.test(w.text));
+    // "keeps a smaller share of dissolved CO2": a quantity phrase may stand between the verb and the gas.
+    const quantityObject = s.of('entities', 'co2').find((c) => c.first > h.last && c.first - h.last <= 9 && s.words.slice(h.last + 1, c.first).every((w) => QUANTITY_WORDS.has(w.text) || /ed$/u.test(w.text)));
+    const objectCo2 = quantityObject !== undefined || s.of('entities', 'co2').some((c) => c.first > h.last && c.first - h.last <= 5) || s.words.slice(h.last + 1, h.last + 4).some((w) => /^(?:it|carbon|gas|them)$/u.test(w.text));
     // "the less carbon dioxide it can keep dissolved": CO2 stands before the verb.
     const subjectCo2 = s.of('entities', 'co2').some((c) => c.last < h.first && h.first - c.last <= 5);
     if (!objectCo2 && !subjectCo2) return undefined;
@@ -168,9 +175,18 @@ function uptakeDirection(s: ReadSentence, h: LexHit): 1 | -1 | undefined {
     const segment = s.words[h.first]?.segment;
     const co2Before = s.of('entities', 'co2').find((c) => c.last < h.first && h.first - c.last <= 5 && s.words[c.first]?.segment === segment);
     const window = [
-      ...s.words.slice(h.last + 1, h.last + 4).filter((w) => w.segment === segment),
+      ...s.words.slice(h.last + 1, Math.max(h.last + 4, quantityObject?.first ?? 0)).filter((w) => w.segment === segment),
       ...(co2Before === undefined ? [] : s.words.slice(Math.max(0, co2Before.first - 2), co2Before.first)),
     ].map((w) => w.text);
+    // "holds half as much CO2", "can't keep as much": an equality comparison with its multiple.
+    const equal = window.findIndex((w, k) => w === 'as' && (window[k + 1] === 'much' || window[k + 1] === 'many'));
+    if (equal >= 0) {
+      const multiple = window.slice(Math.max(0, equal - 2), equal);
+      if (multiple.some((w) => FRACTIONS.has(w))) return (base * -1) as 1 | -1;
+      if (multiple.some((w) => MULTIPLES.has(w))) return base;
+      // "holds as much CO2 as" states no direction; "cannot hold as much" is less (the denial turns it).
+      return denialsBefore(s, h.first, 5) % 2 === 1 ? base : undefined;
+    }
     if (window.some((w) => SIZE_DOWN.has(w))) base = (base * -1) as 1 | -1;
     else if (!window.some((w) => SIZE_UP.has(w)) && h.key === 'in' && /^(?:hold|holds|held|keep|keeps|kept|retain|retains|store|stores|stored)$/u.test(s.words[h.first]?.text ?? '')) {
       // "warm water holds CO2" states a capacity, not a change: only "more"/"less" makes it one.
@@ -226,9 +242,19 @@ function isConcessive(s: ReadSentence, d: Directed): boolean {
   return /\b(?:even as|even though|even if|although|though|despite|in spite of|even when)\b/u.test(lead);
 }
 
-/** "than warm water": the base of a comparison is no claim of its own. */
+/** "than warm water", "as much gas as warm water": the base of a comparison is no claim of its own. */
 function isAfterThan(s: ReadSentence, d: Directed): boolean {
-  return s.words.slice(Math.max(0, d.first - 3), d.first).some((w) => w.text === 'than');
+  const before = s.words.slice(Math.max(0, d.first - 3), d.first);
+  if (before.some((w) => w.text === 'than')) return true;
+  // The second "as" of "as much ... as", "as many ... as": its earlier partner stands in the clause.
+  const as = before.findLastIndex((w) => w.text === 'as');
+  if (as < 0) return false;
+  const at = d.first - before.length + as;
+  const clause = s.words[at]?.clause;
+  for (let k = Math.max(0, at - 8); k < at - 1; k += 1) {
+    if (s.words[k]?.text === 'as' && s.words[k]?.clause === clause && ['much', 'many'].includes(s.words[k + 1]?.text ?? '')) return true;
+  }
+  return false;
 }
 
 /** Changes of regions and of marginal forcing, with the period they are set in. */

@@ -4,8 +4,11 @@
  */
 import type { ReadSentence, Thing } from './sentence.js';
 
-/** The kind of `thing`, with pronouns resolved within the sentence, then in `previous`. */
-export function kindOf(s: ReadSentence, thing: Thing | undefined, previous?: ReadSentence, passOver?: ReadonlySet<string>): string | undefined {
+/**
+ * The kind of `thing`, with pronouns resolved within the sentence, then in `previous`; a pronoun
+ * stands for no thing that `unfit` rejects (an order's reader passes over the name of a core).
+ */
+export function kindOf(s: ReadSentence, thing: Thing | undefined, previous?: ReadSentence, passOver?: ReadonlySet<string>, unfit?: (r: ReadSentence, t: Thing) => boolean): string | undefined {
   if (thing === undefined) return undefined;
   if (thing.kind !== 'pronoun') return thing.kind;
   const segment = s.words[thing.first]?.segment ?? 0;
@@ -16,11 +19,11 @@ export function kindOf(s: ReadSentence, thing: Thing | undefined, previous?: Rea
   const able = (t: Thing) => passOver === undefined || !passOver.has(t.kind) || !elsewhere;
   for (let seg = segment; seg >= 0; seg -= 1) {
     // The subject, not a thing in a phrase before it ("At the start of the deglaciation CO2 ...").
-    const candidates = s.things.filter((t) => t.kind !== 'pronoun' && t.first < thing.first && s.words[t.first]?.segment === seg && able(t));
+    const candidates = s.things.filter((t) => t.kind !== 'pronoun' && t.first < thing.first && s.words[t.first]?.segment === seg && able(t) && unfit?.(s, t) !== true);
     const subject = candidates.find((t) => !inPhrase(s, t)) ?? candidates[0];
     if (subject !== undefined) return subject.kind;
   }
-  return previous?.things.find((t) => t.kind !== 'pronoun')?.kind;
+  return previous?.things.find((t) => t.kind !== 'pronoun' && unfit?.(previous, t) !== true)?.kind;
 }
 
 /** The first thing in word range [from, to] of one segment (the subject side of a clause). */

@@ -217,6 +217,22 @@ function corrected(s: ReadSentence, k: number, i: number): boolean {
   return false;
 }
 
+/** Words that open a clause of their own after an answer's "no" ("no the bubbles are older", "No, it ..."). */
+const CLAUSE_OPENERS = new Set(['the', 'a', 'an', 'this', 'that', 'these', 'those', 'it', 'they', 'we', 'i', 'you', 'he', 'she', 'there', 'its', 'their', 'actually', 'in', 'so']);
+
+/**
+ * "no the bubbles are older than the ice", "No, it was the other way": a "no" opening its clause
+ * before a comma or a clause of its own answers what was asked; it denies nothing in that clause.
+ * "No bubble is older than its ice" denies: "no" there determines its noun.
+ */
+function isAnswerNo(s: ReadSentence, k: number): boolean {
+  const w = s.words[k];
+  const next = s.words[k + 1];
+  if (w?.text !== 'no' || next === undefined) return false;
+  const opens = k === s.opening || s.words[k - 1]?.clause !== w.clause;
+  return opens && (next.segment !== w.segment || CLAUSE_OPENERS.has(next.text));
+}
+
 /** Words that deny an effect by saying it fell short ("unable to end", "insufficient to explain"). */
 const LIMITS = new Set(['unable', 'insufficient', 'failed', 'fails', 'fail', 'negligible', 'irrelevant', 'unimportant', 'insignificant', 'immaterial']);
 /**
@@ -301,7 +317,7 @@ export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
     if (NEGATIONS.has(w.text) && corrected(s, k, i)) continue;
     // "nothing else", "nothing more", "no other": a negation inside a restricting phrase restricts, it denies nothing.
     const restricting = s.inside(k, 'exclusive') || (w.text === 'nothing' && (after === 'else' || after === 'but'));
-    if (NEGATIONS.has(w.text) && after !== 'only' && !(w.text === 'no' && after === 'doubt') && !restricting) count += 1;
+    if (NEGATIONS.has(w.text) && after !== 'only' && !(w.text === 'no' && after === 'doubt') && !restricting && !isAnswerNo(s, k)) count += 1;
     else if (LIMITS.has(w.text) || tooToVerb(s, k, i)) count += 1;
     else if (DENIALS.has(w.text) && (w.text.startsWith('rul') ? after === 'out' : WITH_OFF.has(w.text) ? after === 'off' : true)) count += 1;
     // "so much for CO2 causing the warming": a dismissal.

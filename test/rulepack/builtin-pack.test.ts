@@ -37,11 +37,14 @@ describe('the built-in paleoclimate pack', () => {
     // globally CO2 rose ahead of most of the deglacial warming (Shakun et al. 2012, doi 10.1038/nature10915).
     // REFERENCE-VALUES.md "Direction facts" 6-9: logarithmic forcing (Myhre et al. 1998), polar
     // amplification, the pace of the modern rise against the deglacial ones (Marcott et al. 2014),
-    // the bipolar seesaw (Pedro et al. 2016).
+    // the bipolar seesaw (Pedro et al. 2016). Round 13: Antarctic temperature rose with CO2 or a few
+    // centuries before it, not after it (Parrenin et al. 2013, doi 10.1126/science.1226368; Pedro et
+    // al. 2012; Caillon et al. 2003, doi 10.1126/science.1078758).
     expect(packs.directions.map((d) => d.id)).toEqual([
       'co2-solubility-falls-with-warming',
       'trapped-air-younger-than-ice',
       'global-co2-ahead-of-warming',
+      'antarctic-warming-not-behind-co2',
       'polar-swings-exceed-global',
       'co2-forcing-logarithmic',
       'modern-co2-rise-faster-than-natural',
