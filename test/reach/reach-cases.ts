@@ -23,7 +23,7 @@ const wrong = (text: string, key: string | string[], rule?: string): ReachRow =>
 export const REACH: ReachCase[] = [
   // Petit et al. 1999, Nature 399, doi 10.1038/20859; Petit et al. 2001, IGBP PAGES/World Data Center for Paleoclimatology Data Contribution Series
   // Barnola et al. 1987, Nature 329, doi 10.1038/329408a0; Petit et al. 1999, Nature 399, doi 10.1038/20859
-  ['vostok-record-span-1987', [
+  ['vostok-first-record-span', [
     right('The first Vostok core, published in 1987, went back about 160,000 years.'),
     wrong('The first Vostok record, published in 1987, already went back about 800,000 years.', '160,000'),
   ]],
