@@ -23,6 +23,7 @@ import { relativeDistance } from './reference-distance.js';
 export { relativeDistance };
 import { checkEnds } from './reference-ends.js';
 import { isDeniedFigure } from './denied-figure.js';
+import { datedAfterReplacement } from './dated-after.js';
 import { endpointPairs } from '../claims/bind-role.js';
 import { statesRange } from '../quantities/range-ends.js';
 
@@ -63,7 +64,9 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     // draft gives it as today's.
     const matched = distance === 0 ? undefined : supersededMatch(r, q, packs);
     if (matched !== undefined && r.asOf === undefined) aboutToday ??= findTerms(sentence, packs).has(TODAY_TERM);
-    const older = matched !== undefined && (r.asOf !== undefined || aboutToday !== true) ? matched : undefined;
+    // "The Vostok record, published in 1999, covers 160,000 years": dated after the newer value's
+    // sources, an older figure is no longer right for its day.
+    const older = matched !== undefined && (r.asOf !== undefined || aboutToday !== true) && !datedAfterReplacement(quantities, r) ? matched : undefined;
     // A global figure that is the size of a regional change ("the whole Earth was 9 °C colder": the
     // Antarctic warming) is the regional record told as global: the scope check's flag, not a value's.
     const regional = distance === 0 || matched !== undefined ? undefined : regionalMatch(r, q, packs);

@@ -300,3 +300,62 @@ export function termsOfKind(packs: LoadedPacks, kind: string): Set<string> {
   }
   return ids;
 }
+
+/** How many sentences back a chain of back-references is followed: "Dome C ... That core ... It ...". */
+const CHAIN_STEPS = 2;
+/** How many words may open a sentence before the pronoun that carries its subject ("And over that span it ..."). */
+const OPENING_WORDS = 5;
+
+/**
+ * Whether a pronoun or possessive stands among the first words of a sentence, where its subject is:
+ * "It records eight cycles", "And its bottom 200 metres ...". One later in the sentence ("... younger
+ * than the snow around them") takes up a nearer noun, not the subject carried from further back.
+ */
+function opensWithPronoun(sentence: string, packs: LoadedPacks): boolean {
+  const v = vocabularyOf(packs);
+  return wordsOf(sentence)
+    .slice(0, OPENING_WORDS)
+    .some((w) => v.pronouns.has(w.text) || v.possessives.has(w.text));
+}
+
+/**
+ * The sentence before as a pronoun in the next one reads it, with the subjects it took from further
+ * back. "Later a team drilled at Dome C. That core goes back 800,000 years. It records eight glacial
+ * cycles": "It" takes up "that core", which is Dome C; so the text a pronoun refers to is the sentence
+ * before preceded by the subjects its own descriptions resolve to, and when it names no subject of any
+ * kind and itself refers back by a pronoun ("The core was drilled at Dome C. It holds a record of
+ * 800,000 years. Over that span it ..."), by the sentence before it, up to CHAIN_STEPS back. Only a
+ * sentence that opens with its pronoun carries the subject so (opensWithPronoun). A sentence before
+ * that names a subject of its own, or whose description is ambiguous, is read as written.
+ */
+export function carriedContext(sentence: string, context: string, history: readonly string[], packs: LoadedPacks): string {
+  const at = history.lastIndexOf(context);
+  if (at < 0 || !opensWithPronoun(sentence, packs)) return context;
+  const carried: string[] = [];
+  let index = at;
+  for (let step = 0; step < CHAIN_STEPS && index >= 0; step += 1) {
+    const text = history[index] as string;
+    if (namesSubjectOfKind(text, packs)) break;
+    const resolution = resolveBackReferences(text, history.slice(0, index), packs);
+    if (resolution.state === 'ambiguous') break;
+    if (resolution.state === 'found') {
+      carried.unshift(...resolution.referents.map((r) => r.text));
+      break;
+    }
+    // A pronoun alone: the subject is the one the sentence before it names.
+    if (!refersBack(text, packs) || index === 0) break;
+    const earlier = history[index - 1] as string;
+    if (!namesSubjectOfKind(earlier, packs)) {
+      index -= 1;
+      continue;
+    }
+    carried.unshift(...Object.keys(packs.lexicon['kinds'] ?? {}).flatMap((kind) => subjectsOfKind(earlier, kind, packs)));
+    break;
+  }
+  return carried.length === 0 ? context : `${carried.join(', ')}. ${context}`;
+}
+
+/** Whether a text names a subject of any kind of the lexicon (a core, a period, a gas, a record). */
+function namesSubjectOfKind(text: string, packs: LoadedPacks): boolean {
+  return Object.keys(packs.lexicon['kinds'] ?? {}).some((kind) => subjectsOfKind(text, kind, packs).length > 0);
+}

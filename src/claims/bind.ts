@@ -23,7 +23,7 @@ import { bindImplied } from './bind-implied.js';
 import { BOUND_TERMS, boundReadings, clauseStarts } from './bind-bound.js';
 import { withStateEvents } from './bind-events.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
-import { resolveBackReferences, type Resolution } from './back-reference.js';
+import { carriedContext, resolveBackReferences, type Resolution } from './back-reference.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
 import { bindFromSetting } from './bind-setting.js';
 import { comparedInRelativeClauses, withoutOthers } from './bind-others.js';
@@ -532,8 +532,11 @@ export function bindQuantities(
         const found = bindFromContext(sentence, q, role, view, findTerms(text, packs), packs, breaks, vetoes, subjectBefore(text), { context: text, ownTime });
         if (found !== undefined) decided.set(i, found);
       } else if (context !== undefined && context.trim() !== '' && mayReferBack(sentence, packs, context)) {
-        contextHits ??= findTerms(context, packs);
-        const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, subjectBefore(context), { context, ownTime });
+        // "That core goes back 800,000 years. It records eight glacial cycles": the sentence before
+        // took its subject from further back, and a pronoun here takes up that subject with it.
+        const before = carriedContext(sentence, context, history, packs);
+        contextHits ??= findTerms(before, packs);
+        const found = bindFromContext(sentence, q, role, view, contextHits, packs, breaks, vetoes, subjectBefore(before), { context: before, ownTime });
         if (found !== undefined) decided.set(i, found);
       }
     }

@@ -127,6 +127,16 @@ export const CASES: Case[] = [
   // Arias et al. 2021 (IPCC AR6 Technical Summary, doi 10.1017/9781009157896.002). A sensitivity is always a
   // change; the value also accepts a reading as temperature, since "is 3 °C" carries no cue for the parser.
   ['ecs-ar6-very-likely', ['Climate sensitivity is about 3 °C.', 'about 3 °C', T, 2.5, 3.5, 'degC'], ['Climate sensitivity is 8 °C.', '8 °C', T, 7.5, 8.5, 'degC']],
+  // Arias et al. 2021 (IPCC AR6 TS.3.2.1): likely 2.5-4 °C, very likely 2-5 °C, best estimate 3 °C, each with its ends.
+  ['ecs-ar6-likely-range', ['Climate sensitivity is likely about 3 °C.', 'about 3 °C', T, 2.5, 3.5, 'degC'], ['Climate sensitivity is likely 8 °C.', '8 °C', T, 7.5, 8.5, 'degC']],
+  ['ecs-ar6-very-likely-range', ['Climate sensitivity is very likely about 3 °C.', 'about 3 °C', T, 2.5, 3.5, 'degC'], ['Climate sensitivity is very likely 8 °C.', '8 °C', T, 7.5, 8.5, 'degC']],
+  ['ecs-ar6-best-estimate', ['The best estimate of climate sensitivity is 3 °C.', '3 °C', T, 2.5, 3.5, 'degC'], ['The best estimate of climate sensitivity is 8 °C.', '8 °C', T, 7.5, 8.5, 'degC']],
+  ['ecs-ar6-likely-low', ['The lower end of the likely range of climate sensitivity is 2.5 °C.', '2.5 °C', T, 2.45, 2.55, 'degC'], ['The lower end of the likely range of climate sensitivity is 0.5 °C.', '0.5 °C', T, 0.45, 0.55, 'degC']],
+  ['ecs-ar6-likely-high', ['The upper end of the likely range of climate sensitivity is 4 °C.', '4 °C', T, 3.5, 4.5, 'degC'], ['The upper end of the likely range of climate sensitivity is 9 °C.', '9 °C', T, 8.5, 9.5, 'degC']],
+  ['ecs-ar6-very-likely-low', ['The lower end of the very likely range of climate sensitivity is 2 °C.', '2 °C', T, 1.5, 2.5, 'degC'], ['The lower end of the very likely range of climate sensitivity is 0.5 °C.', '0.5 °C', T, 0.45, 0.55, 'degC']],
+  ['ecs-ar6-very-likely-high', ['The upper end of the very likely range of climate sensitivity is 5 °C.', '5 °C', T, 4.5, 5.5, 'degC'], ['The upper end of the very likely range of climate sensitivity is 12 °C.', '12 °C', T, 11.5, 12.5, 'degC']],
+  // Barnola et al. 1987 (doi 10.1038/329408a0): the first Vostok record, about 160,000 years.
+  ['vostok-first-record-span', ['The first Vostok record, published in 1987, covers about 160,000 years.', 'about 160,000 years', 'duration', 150000, 170000, 'yr'], ['The first Vostok record, published in 1987, covers about 800,000 years.', 'about 800,000 years', 'duration', 790000, 810000, 'yr']],
   // Annan & Hargreaves 2015 (EPILOG window); Mix et al. 2001 (from memory)
   ['lgm-chronozone', ['The Last Glacial Maximum peaked about 21,000 years ago.', 'about 21,000 years ago', A, 20_000, 22_000], ['The Last Glacial Maximum peaked 50,000 years ago.', '50,000 years ago', A, 49_500, 50_500]],
   // Clark et al. 2009 (doi 10.1126/science.1172873)

@@ -22,6 +22,11 @@ const wrong = (text: string, key: string | string[], rule?: string): ReachRow =>
 
 export const REACH: ReachCase[] = [
   // Petit et al. 1999, Nature 399, doi 10.1038/20859; Petit et al. 2001, IGBP PAGES/World Data Center for Paleoclimatology Data Contribution Series
+  // Barnola et al. 1987, Nature 329, doi 10.1038/329408a0; Petit et al. 1999, Nature 399, doi 10.1038/20859
+  ['vostok-first-record-span', [
+    right('The first Vostok core, published in 1987, went back about 160,000 years.'),
+    wrong('The first Vostok record, published in 1987, already went back about 800,000 years.', '160,000'),
+  ]],
   ['vostok-record-span', [
     right('The Vostok ice core holds a climate record covering about 420,000 years.'),
     wrong('Put simply, the Vostok record goes back two million years.', '420,000'),
@@ -293,9 +298,46 @@ export const REACH: ReachCase[] = [
   ]],
   // Arias et al. 2021, Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, doi 10.1017/9781009157896.002
   ['ecs-ar6-very-likely', [
-    right('Equilibrium climate sensitivity is very likely between 2 and 5 °C.'),
-    wrong('Equilibrium climate sensitivity is likely between 0.5 and 1 °C.', '3'),
+    right('Equilibrium climate sensitivity is about 3 °C.'),
+    wrong('Equilibrium climate sensitivity is between 0.5 and 1 °C.', '3'),
     wrong('According to one blog, climate sensitivity is about 9 °C.', '3'),
+  ]],
+  // Arias et al. 2021, Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, doi 10.1017/9781009157896.002, TS.3.2.1
+  ['ecs-ar6-very-likely-range', [
+    right('Equilibrium climate sensitivity is very likely between 2 and 5 °C.'),
+    wrong('The IPCC now gives a very likely range of 1 to 3 °C for climate sensitivity.', ['2 to 5', '2 °C to 5 °C', '2–5']),
+  ]],
+  // Arias et al. 2021, Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, doi 10.1017/9781009157896.002, TS.3.2.1
+  ['ecs-ar6-likely-range', [
+    right('Climate sensitivity is likely between 2.5 and 4 °C, the latest IPCC report says.'),
+    // The AR5 likely range told as AR6's: it overlaps 2.5-4 °C, but both ends are off.
+    wrong('IPCC AR6 assessed equilibrium climate sensitivity as likely 1.5 to 4.5 °C.', ['2.5 to 4', '2.5 °C to 4 °C', '2.5–4']),
+    wrong('Equilibrium climate sensitivity is likely between 0.5 and 1 °C.', ['2.5 to 4', '2.5 °C to 4 °C', '2.5–4']),
+  ]],
+  // Arias et al. 2021, Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, doi 10.1017/9781009157896.002, TS.3.2.1
+  ['ecs-ar6-best-estimate', [
+    right('The IPCC best estimate of climate sensitivity is 3 °C per doubling of CO2.'),
+    wrong('Its best estimate of climate sensitivity is 4.5 °C per doubling of CO2.', '3'),
+  ]],
+  // Arias et al. 2021, Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, doi 10.1017/9781009157896.002, TS.3.2.1
+  ['ecs-ar6-likely-low', [
+    right('The lower end of the likely range of climate sensitivity is 2.5 °C.'),
+    wrong('The lower end of the likely range of climate sensitivity is now 0.5 °C.', '2.5'),
+  ]],
+  // Arias et al. 2021, Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, doi 10.1017/9781009157896.002, TS.3.2.1
+  ['ecs-ar6-likely-high', [
+    right('The upper end of the likely range of climate sensitivity is 4 °C.'),
+    wrong('The upper end of the likely range of climate sensitivity is now 9 °C.', '4'),
+  ]],
+  // Arias et al. 2021, Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, doi 10.1017/9781009157896.002, TS.3.2.1
+  ['ecs-ar6-very-likely-low', [
+    right('The lower end of the very likely range of climate sensitivity is 2 °C.'),
+    wrong('The lower end of the very likely range of climate sensitivity is 0.5 °C.', '2'),
+  ]],
+  // Arias et al. 2021, Climate Change 2021: The Physical Science Basis. Contribution of Working Group I to the Sixth Assessment Report of the Intergovernmental Panel on Climate Change, doi 10.1017/9781009157896.002, TS.3.2.1
+  ['ecs-ar6-very-likely-high', [
+    right('The upper end of the very likely range of climate sensitivity is 5 °C.'),
+    wrong('The upper end of the very likely range of climate sensitivity is 12 °C.', '5'),
   ]],
   // Annan & Hargreaves 2015, Quaternary Science Reviews 107, doi 10.1016/j.quascirev.2014.09.019; Mix et al. 2001, Quaternary Science Reviews 20, doi 10.1016/S0277-3791(00)00145-1; Clark et al. 2009, Science 325, doi 10.1126/science.1172873; Lambeck et al. 2002, Nature 419, doi 10.1038/nature01089; Masson-Delmotte et al. 2013, Climate Change 2013: The Physical Science Basis. Contribution of Working Group I to the Fifth Assessment Report of the Intergovernmental Panel on Climate Change, doi 10.1017/CBO9781107415324.013
   ['lgm-chronozone', [
