@@ -349,7 +349,7 @@ function isHypothetical(s: ReadSentence): boolean {
 function isMythHeading(heading: string | undefined): boolean {
   if (heading === undefined) return false;
   const words = heading.trim().split(/\s+/u);
-  return words.length <= 5 && /\b(?:myths?|misconceptions?|the claim|claims|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|false)\b/iu.test(heading) && !/\b(?:fact|facts|truth|busting|debunk\w*|answer\w*|vs\.?|versus)\b/iu.test(heading);
+  return words.length <= 5 && /\b(?:myths?|misconceptions?|the claim|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|false)\b/iu.test(heading) && !/\b(?:fact|facts|truth|busting|debunk\w*|answer\w*|vs\.?|versus)\b/iu.test(heading);
 }
 
 /** True when a flag on this sentence stands as the writer's own error. */

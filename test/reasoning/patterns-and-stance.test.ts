@@ -73,6 +73,11 @@ describe('stanceOf', () => {
     [['Fact: CO2 amplified a warming that orbital changes began.'], 0, {}, 'asserted'],
     [['It is a myth that the lag rules CO2 out as a cause.'], 0, {}, 'myth'],
     [['CO2 lags, so it cannot be the cause.'], 0, { heading: 'The myth' }, 'myth'],
+    [['CO2 lags, so it cannot be the cause.'], 0, { heading: 'Myths we hear' }, 'myth'],
+    // "Claims" alone names what a section discusses, the writer's own answers included (show notes'
+    // "Claims we discussed", a review's "Claims checked"): the heading marks no sentence as a myth.
+    [['CO2 lags, so it cannot be the cause.'], 0, { heading: 'Claims we discussed' }, 'asserted'],
+    [['CO2 lags, so it cannot be the cause.'], 0, { heading: 'The claim' }, 'myth'],
     [['CO2 lags, so it cannot be the cause.'], 0, { blockKind: 'blockquote' as const }, 'quoted'],
     [['CO2 lags, so it cannot be the cause.'], 0, { marked: true }, 'marked'],
     [['If CO2 trails temperature, how could it be the cause?'], 0, {}, 'rhetorical'],
