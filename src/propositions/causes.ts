@@ -620,7 +620,10 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
   const partial =
     s.words.some((w, i) => w.clause === clause && /^(?:only|just|merely)$/u.test(w.text) && PARTIAL.test(s.words[i + 1]?.text ?? '')) ||
     // "Ocean warming alone accounts for perhaps 20 to 30 ppm of the 80 to 100 ppm rise": a share of a whole.
-    s.words.some((w, i) => i > h.last && w.clause === clause && w.text === 'of' && s.words.slice(h.last + 1, i).some((x) => /^\d/u.test(x.text)) && s.words.slice(i + 1, i + 5).some((x) => /^\d/u.test(x.text)));
+    s.words.some((w, i) => i > h.last && w.clause === clause && w.text === 'of' && s.words.slice(h.last + 1, i).some((x) => /^\d/u.test(x.text)) && s.words.slice(i + 1, i + 5).some((x) => /^\d/u.test(x.text))) ||
+    // "Ocean warming alone raised CO2 by about 20 ppm": the amount the cause word's own effect moved
+    // by, told right after it, measures what the agent did on its own, not that it was the one cause.
+    s.words.some((w, i) => i > h.last && i <= h.last + 4 && w.clause === clause && w.text === 'by' && s.words.slice(i + 1, i + 4).some((x) => /^\d/u.test(x.text)));
   if (partial || shareAfter(s, h)) return false;
   return s.of('exclusive').some((e) => {
     if (s.words[e.first]?.segment !== s.words[h.first]?.segment && s.words[e.first]?.clause !== s.words[h.first]?.clause) return false;
