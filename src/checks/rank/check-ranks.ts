@@ -3,6 +3,8 @@
  *
  *   "The longest ice-core record is Vostok's."              superlative → Vostok must rank first
  *   "Vostok's record is twice as long as EPICA Dome C's."   multiple → 420 kyr / 800 kyr ≈ 0.5, not 2
+ *   "Dome Fuji's record is second only to Vostok's."        runner-up → Vostok must rank above Dome Fuji
+ *   "No ice core has a longer record than Vostok's."        none ahead → Vostok must rank first
  *
  * The entity a superlative speaks of is tied to it by the sentence: "<entity> is/has/holds … the
  * longest …" or "the longest … is/comes from/belongs to <entity>"; a comparison joins the entity
