@@ -4,6 +4,7 @@
  * al. 2008, Nature 453, 379-382), Dome Fuji about 720,000 years (Kawamura et al. 2017, Science
  * Advances 3, e1600446), Vostok about 420,000 years (Petit et al. 1999, Nature 399, 429-436).
  * Drilled depths: Vostok 3,623 m (Petit et al. 1999), EPICA Dome C about 3,260-3,270 m (Lüthi et al. 2008).
+ * The other drilled depths are the pack's own values (rules/paleoclimate.yaml, each with its source).
  * Sentences are our own.
  */
 import { describe, expect, it } from 'vitest';
@@ -50,6 +51,19 @@ const WRONG: [sentence: string, ruleId: string, span: string, correctionHas: str
   // A tie past a description of the place ("the Russian station at"), and an equals sign in notes.
   ['The longest continuous ice-core record yet published comes from the Russian base at Vostok.', 'value.rank.record-span', 'Vostok', ['EPICA Dome C', '800,000']],
   ['quiz answer: longest ice core record = Vostok', 'value.rank.record-span', 'Vostok', ['EPICA Dome C', '800,000']],
+  // An adverb after the tie, a record noun after the entity, an apposition, "ice record" as one noun.
+  ['Vostok is still the longest ice-core record we have.', 'value.rank.record-span', 'Vostok', ['EPICA Dome C', '800,000', '420,000']],
+  ['The longest continuous ice record is still Vostok.', 'value.rank.record-span', 'Vostok', ['EPICA Dome C', '800,000']],
+  ["Vostok's record remains the longest anyone has drilled.", 'value.rank.record-span', 'Vostok', ['EPICA Dome C', '800,000']],
+  ['Vostok, the longest ice-core record of all, covers four glacial cycles.', 'value.rank.record-span', 'Vostok', ['EPICA Dome C', '800,000']],
+  ['Our poster shows Dome Fuji, still the oldest record of them all.', 'value.rank.record-span', 'Dome Fuji', ['EPICA Dome C', '800,000', '720,000']],
+  // "second only to B" puts B above A in any group that holds both, so "among" does not hedge it.
+  ["Dome Fuji's record is second only to Vostok's.", 'value.rank.record-span', 'second only to', ['720,000', '420,000']],
+  ["EPICA Dome C's record is second only to Dome Fuji's among the Antarctic cores.", 'value.rank.record-span', 'second only to', ['800,000', '720,000']],
+  // A comparison against "no …" ranks B first; a comparative may carry its noun.
+  ["No ice core anywhere has produced a longer climate record than Vostok's.", 'value.rank.record-span', 'Vostok', ['EPICA Dome C', '800,000', '420,000']],
+  ["Nothing drilled so far holds an older record than Dome Fuji's.", 'value.rank.record-span', 'Dome Fuji', ['EPICA Dome C', '800,000']],
+  ['Vostok has a longer record than EPICA Dome C.', 'value.rank.record-span', 'longer record than', ['shorter than', '420,000', '800,000']],
 ];
 
 const RIGHT: string[] = [
@@ -70,6 +84,20 @@ const RIGHT: string[] = [
   'The longest Greenland ice-core record comes from the Danish site at NGRIP.',
   // "Longer" with no measure word could be the core's length or its record: no reading is clear.
   'Vostok is longer than Dome Fuji.',
+  // Correct look-alikes of the wordings above (EPICA community members 2004, Nature 429, 623-628; Lüthi et al. 2008).
+  "Dome C's record is the longest continuous one.",
+  'Vostok reaches 420,000 years, Dome C 800,000.',
+  "EPICA Dome C's record is still the longest of any ice core.",
+  'Dome C, the longest ice-core record so far, covers eight glacial cycles.',
+  "Dome Fuji's record is second only to EPICA Dome C's.",
+  "Vostok's record is second only to EPICA Dome C's among the long Antarctic records.",
+  'Next to Vostok, the longest record comes from Dome C.',
+  "No ice core has produced a longer record than EPICA Dome C's.",
+  "No Greenland core has a longer record than GRIP's.",
+  'No core is deeper than Vostok.',
+  'EPICA Dome C has a longer record than Vostok.',
+  'Dome Fuji holds an older climate record than Vostok.',
+  'Vostok, drilled to 3,623 metres, is the deepest core.',
 ];
 
 describe('checkRanks', () => {

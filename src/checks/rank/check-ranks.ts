@@ -3,6 +3,8 @@
  *
  *   "The longest ice-core record is Vostok's."              superlative → Vostok must rank first
  *   "Vostok's record is twice as long as EPICA Dome C's."   multiple → 420 kyr / 800 kyr ≈ 0.5, not 2
+ *   "Dome Fuji's record is second only to Vostok's."        runner-up → Vostok must rank above Dome Fuji
+ *   "No ice core has a longer record than Vostok's."        none ahead → Vostok must rank first
  *
  * The entity a superlative speaks of is tied to it by the sentence: "<entity> is/has/holds … the
  * longest …" or "the longest … is/comes from/belongs to <entity>"; a comparison joins the entity
@@ -22,7 +24,11 @@ const NOT_NOW = /(?<![\p{L}])(?:not|no\s+longer|never|until|once|formerly|previo
 /** What ties an entity before a superlative to it: a verb, then "the" (and at most two words). */
 const TIES_BEFORE = /(?<![\p{L}])(?:is|was|has|had|holds?|held|gives?|gave|provides?|provided|yields?|yielded|offers?|contains?|boasts?|remains?|remained|keeps?|produced)(?![\p{L}])[^;:.!?]*\bthe(?:\s+[\p{L}'’-]+){0,2}\s*$/iu;
 /** What ties a superlative to an entity after it. */
-const TIES_AFTER = /^[^;:.!?]*?(?:(?<![\p{L}])(?:is|was|comes\s+from|came\s+from|belongs\s+to|belonged\s+to|from|at)|,|=)\s+(?:the\s+)?$/iu;
+const TIES_AFTER = /^[^;:.!?]*?(?:(?<![\p{L}])(?:is|was|comes\s+from|came\s+from|belongs\s+to|belonged\s+to|from|at)|,|=)\s+(?:(?:still|now|today|easily|clearly)\s+)?(?:the\s+)?$/iu;
+/** An apposition before a superlative: "Dome Fuji, the longest record", "Vostok, still the oldest". */
+const APPOSITION = /^\s*,\s*(?:(?:still|now|today|easily|clearly|by\s+far)\s+)?the(?:\s+[\p{L}'’-]+){0,2}\s*$/iu;
+/** A verb after a superlative's noun phrase: the phrase is a subject, not an apposition ("Beside Vostok, the longest record is …"). */
+const VERB_AFTER = /(?<![\p{L}])(?:is|was|are|were|comes|came|belongs|belonged|remains|remained|holds|held|goes|went)(?![\p{L}])/iu;
 /** The first tie word after a superlative: the superlative's own noun phrase ends there. */
 const FIRST_TIE = /(?<![\p{L}])(?:is|was|comes|came|belongs|belonged|from|at)(?![\p{L}])|[,=]/iu;
 const CLAUSE_END = /[;:.!?]|(?<![\p{L}])(?:but|while|whereas|although)(?![\p{L}])/iu;
@@ -36,7 +42,11 @@ interface Named {
 /** Flags the rank and comparison claims of `sentence` that the reference values contradict. */
 export function checkRanks(sentence: string, packs: LoadedPacks): FlagDraft[] {
   const words = findRankWords(sentence);
-  if (words.length === 0 || NOT_NOW.test(sentence)) return [];
+  const runnersUp = [...sentence.matchAll(SECOND_ONLY)];
+  if (words.length + runnersUp.length === 0) return [];
+  // "second only to" orders two entities, so a group ("among the Antarctic cores") does not change it.
+  const hedged = NOT_NOW.test(sentence);
+  if (hedged && NOT_NOW.test(sentence.replace(/(?<![\p{L}])among(?![\p{L}])/giu, ' '))) return [];
   const families = measureFamilies(packs);
   const entities = new Set(families.flatMap((f) => f.members.map((m) => m.entity)));
   const hits = findTerms(sentence, packs);
@@ -45,6 +55,11 @@ export function checkRanks(sentence: string, packs: LoadedPacks): FlagDraft[] {
     .flatMap(([entity, spans]) => spans.map(([start, end]) => ({ entity, start, end })))
     .sort((a, b) => a.start - b.start);
   const flags: FlagDraft[] = [];
+  for (const m of runnersUp) {
+    const flag = secondOnlyFlag(sentence, { dimensions: ['duration', 'age', 'length'], sign: 1, stem: 'long', kind: 'comparative', start: m.index, end: m.index + m[0].length }, named, hits, families, packs);
+    if (flag !== undefined) flags.push(flag);
+  }
+  if (hedged) return flags;
   for (const word of words) {
     const flag = word.kind === 'superlative' ? superlativeFlag(sentence, word, named, hits, families, packs) : comparisonFlag(sentence, word, named, hits, families, packs);
     if (flag !== undefined) flags.push(flag);
@@ -52,8 +67,35 @@ export function checkRanks(sentence: string, packs: LoadedPacks): FlagDraft[] {
   return flags;
 }
 
+/** "A is second only to B", "A comes second only to B": B ranks above A, in any group that holds both. */
+const SECOND_ONLY = /(?<![\p{L}])second\s+only\s+to(?![\p{L}])/giu;
+
+/** "Dome Fuji's record is second only to Vostok's": flagged when the values put A surely above B. */
+function secondOnlyFlag(sentence: string, word: FoundRankWord, named: Named[], hits: Map<string, [number, number][]>, families: MeasureFamily[], packs: LoadedPacks): FlagDraft | undefined {
+  const clauseStart = lastClauseEnd(sentence.slice(0, word.start));
+  const a = named.filter((n) => n.end <= word.start && n.start >= clauseStart).at(-1);
+  const b = named.find((n) => n.start >= word.end && !CLAUSE_END.test(sentence.slice(word.end, n.start)) && n.start - word.end <= 20);
+  if (a === undefined || b === undefined || a.entity === b.entity) return undefined;
+  const family = chooseFamily(sentence, word, [a.entity, b.entity], hits, families, sentence.slice(a.end, word.start));
+  if (family === undefined) return undefined;
+  const ra = (family.members.find((m) => m.entity === a.entity) as FamilyMember).reference;
+  const rb = (family.members.find((m) => m.entity === b.entity) as FamilyMember).reference;
+  if (!(ra.low > rb.high)) return undefined;
+  const [an, bn] = [nameOf(a.entity, packs), nameOf(b.entity, packs)];
+  return {
+    ruleId: `value.rank.${family.name}`,
+    level: 'error',
+    start: word.start,
+    end: word.end,
+    reason: `The draft ranks ${bn} above ${an} by ${measureOf(family)}; the reference values give ${an} ${ra.wording} and ${bn} ${rb.wording}.`,
+    reference: shown(ra),
+    correction: `ahead of (${an}: ${ra.wording}; ${bn}: ${rb.wording})`,
+    sources: sourcesOf([ra, rb]),
+  };
+}
+
 /** A superlative that picks out a part of one thing: "the deepest ice at Dome C", "its oldest layers". */
-const PART_OF_ONE = /^\s+(?:ice(?![\s-]+cores?(?![\p{L}]))|layers?|sections?|parts?|samples?|metres|meters|stretch|bits?|portion)(?![\p{L}])/iu;
+const PART_OF_ONE = /^\s+(?:ice(?![\s-]+(?:cores?|records?)(?![\p{L}]))|layers?|sections?|parts?|samples?|metres|meters|stretch|bits?|portion)(?![\p{L}])/iu;
 
 function superlativeFlag(sentence: string, word: FoundRankWord, named: Named[], hits: Map<string, [number, number][]>, families: MeasureFamily[], packs: LoadedPacks): FlagDraft | undefined {
   const clauseStart = lastClauseEnd(sentence.slice(0, word.start));
@@ -63,22 +105,23 @@ function superlativeFlag(sentence: string, word: FoundRankWord, named: Named[], 
   let phraseEnd: number;
   if (before !== undefined && TIES_BEFORE.test(sentence.slice(before.end, word.start))) {
     subject = before;
-    const rest = sentence.slice(word.end);
-    const stop = CLAUSE_END.exec(rest);
-    phraseEnd = word.end + (stop === null ? rest.length : stop.index);
+    phraseEnd = word.end + clauseRest(sentence, word.end).length;
   } else if (after !== undefined && TIES_AFTER.test(sentence.slice(word.end, after.start))) {
     subject = after;
     // "the longest record ... comes from the Russian station at Vostok": only the words before the tie
     // name the group the superlative ranks in.
     const tie = FIRST_TIE.exec(sentence.slice(word.end, after.start));
     phraseEnd = tie === null ? after.start : word.end + tie.index;
+  } else if (before !== undefined && APPOSITION.test(sentence.slice(before.end, word.start)) && !VERB_AFTER.test(clauseRest(sentence, word.end))) {
+    subject = before;
+    phraseEnd = word.end + clauseRest(sentence, word.end).length;
   } else return undefined;
   // "the deepest ice at Dome C", "the deepest layers": a place within one core, not a rank among cores.
   if (PART_OF_ONE.test(sentence.slice(word.end))) return undefined;
   // "the longest Greenland record", "the deepest core in Japan": a rank within a group the values do not mark.
   const phrase = sentence.slice(word.end, phraseEnd);
   if (/(?<![\p{L}])\p{Lu}/u.test(phrase.replace(/[\p{L}\p{N}-]+/gu, (w, at: number) => (named.some((n) => n.start <= word.end + at && word.end + at < n.end) ? 'x' : w)))) return undefined;
-  const family = chooseFamily(sentence, word, [subject.entity], hits, families);
+  const family = chooseFamily(sentence, word, [subject.entity], hits, families, sentence.slice(subject.end, word.start));
   if (family === undefined) return undefined;
   const own = family.members.find((m) => m.entity === subject.entity) as FamilyMember;
   const others = family.members.filter((m) => m !== own);
@@ -107,6 +150,7 @@ function comparisonFlag(sentence: string, word: FoundRankWord, named: Named[], h
   const clauseStart = lastClauseEnd(sentence.slice(0, word.start));
   const a = named.filter((n) => n.end <= word.start && n.start >= clauseStart).at(-1);
   const b = named.find((n) => n.start >= word.end && !CLAUSE_END.test(sentence.slice(word.end, n.start)) && n.start - word.end <= 40);
+  if (a === undefined && b !== undefined && word.ratio === undefined) return noneAheadFlag(sentence, word, b, clauseStart, hits, families, packs);
   if (a === undefined || b === undefined || a.entity === b.entity) return undefined;
   const family = chooseFamily(sentence, word, [a.entity, b.entity], hits, families);
   if (family === undefined) return undefined;
@@ -139,13 +183,44 @@ function comparisonFlag(sentence: string, word: FoundRankWord, named: Named[], h
   };
 }
 
+/** "No ice core has a longer record than B", "nothing reaches further back than B": B is first. */
+const NONE_BEFORE = /(?<![\p{L}])(?:no|none|nothing|nobody|no\s+one)(?![\p{L}])/iu;
+
+/** A comparison against "no …" ranks B first among all members, unless the group is narrowed by a name ("No Greenland core …"). */
+function noneAheadFlag(sentence: string, word: FoundRankWord, b: Named, clauseStart: number, hits: Map<string, [number, number][]>, families: MeasureFamily[], packs: LoadedPacks): FlagDraft | undefined {
+  const lead = sentence.slice(clauseStart, word.start);
+  const none = NONE_BEFORE.exec(lead);
+  if (none === null) return undefined;
+  // Only the quantifier's own noun phrase and verb: a capital after "No" narrows the group.
+  if (/(?<![\p{L}])\p{Lu}/u.test(lead.slice(none.index + none[0].length))) return undefined;
+  const family = chooseFamily(sentence, word, [b.entity], hits, families);
+  if (family === undefined) return undefined;
+  const own = family.members.find((m) => m.entity === b.entity) as FamilyMember;
+  const ahead = family.members.filter((m) => m !== own && (word.sign === 1 ? m.reference.low > own.reference.high : m.reference.high < own.reference.low));
+  if (ahead.length === 0) return undefined;
+  const first = [...ahead].sort((x, y) => word.sign * (middle(y.reference) - middle(x.reference)))[0] as FamilyMember;
+  const [fn, bn] = [nameOf(first.entity, packs), nameOf(b.entity, packs)];
+  return {
+    ruleId: `value.rank.${family.name}`,
+    level: 'error',
+    start: b.start,
+    end: b.end,
+    reason: `The draft ranks ${bn} first by ${measureOf(family)}; by the reference values ${fn} is ahead: ${fn} ${first.reference.wording}, ${bn} ${own.reference.wording}.`,
+    claimed: { text: sentence.slice(b.start, b.end), low: own.reference.low, high: own.reference.high, unit: own.reference.unit },
+    reference: shown(first.reference),
+    correction: `${fn} (${first.reference.wording}; ${bn}: ${own.reference.wording})`,
+    sources: sourcesOf([own.reference, first.reference]),
+  };
+}
+
 /** The family the word measures for these entities: one whose dimension fits; on a choice, the one whose measure words are in the sentence. */
-function chooseFamily(sentence: string, word: FoundRankWord, entities: string[], hits: Map<string, [number, number][]>, families: MeasureFamily[]): MeasureFamily | undefined {
+function chooseFamily(sentence: string, word: FoundRankWord, entities: string[], hits: Map<string, [number, number][]>, families: MeasureFamily[], afterEntity = ''): MeasureFamily | undefined {
   let fitting = families.filter((f) => word.dimensions.includes(f.dimension) && entities.every((e) => f.members.some((m) => m.entity === e)));
   // "the longest record": a record is long in time; "the longest core", "3,270 metres": in length.
   // The noun the rank word qualifies decides first ("the longest peer-reviewed continuous record").
   const after = sentence.slice(word.end, word.end + 50);
-  const recordNext = /^(?:\W+[\w-]+){0,3}?\W+(?:records?|history|archives?)\b/iu.test(after);
+  // "Vostok's record is the longest": the noun right after the entity names the measure as well.
+  const recordNext = /^(?:\W+[\w-]+){0,3}?\W+(?:records?|history|archives?)\b/iu.test(after) || /^(?:['’]s)?\s+(?:[\w-]+\s+)?(?:records?|history|archives?)\b/iu.test(afterEntity);
   const inTime = recordNext || /\b(?:records?|history|archives?|years?|millenni(?:um|a)|kyr|ka)\b/iu.test(sentence);
   const inLength = !recordNext && /\b(?:metres?|meters?|feet|ft|km|deep|depth|drilled|bedrock)\b|\d\s?m\b/iu.test(sentence);
   // A rank said in time is never read as one in length, nor the other way round.
@@ -155,6 +230,13 @@ function chooseFamily(sentence: string, word: FoundRankWord, entities: string[],
   const outside = (t: string): boolean => (hits.get(t) ?? []).some(([start, end]) => end <= word.start || start >= word.end);
   const spoken = fitting.filter((f) => f.measureTerms.some(outside));
   return spoken.length === 1 ? spoken[0] : undefined;
+}
+
+/** The words after `at` up to the end of its clause or the first comma: a superlative's own phrase. */
+function clauseRest(sentence: string, at: number): string {
+  const rest = sentence.slice(at);
+  const stop = /[,;:.!?]|(?<![\p{L}])(?:but|while|whereas|although)(?![\p{L}])/iu.exec(rest);
+  return stop === null ? rest : rest.slice(0, stop.index);
 }
 
 function lastClauseEnd(text: string): number {

@@ -1,6 +1,6 @@
 /**
  * The words of rank and comparison claims: a superlative ("the longest", "the second-deepest"), a
- * comparative ("older than", "reaches further back than") or a multiple ("twice as long as", "three
+ * comparative ("older than", "a longer record than", "reaches further back than") or a multiple ("twice as long as", "three
  * times older than"), each with the dimensions it can measure and which way it points.
  */
 import type { Dimension } from '../../types.js';
@@ -42,7 +42,7 @@ export interface FoundRankWord extends RankWord {
 }
 
 const SUPERLATIVE = new RegExp(String.raw`(?<![\p{L}])(?:(second|third|fourth|fifth)[\s-]+)?(${STEM_NAMES})est(?![\p{L}-])`, 'giu');
-const COMPARATIVE = new RegExp(String.raw`(?<![\p{L}])(?:(\d+(?:\.\d+)?|two|three|four|five)\s+times\s+)?(?:(${STEM_NAMES})er|(?:further|farther)\s+back)\s+than(?![\p{L}])`, 'giu');
+const COMPARATIVE = new RegExp(String.raw`(?<![\p{L}])(?:(\d+(?:\.\d+)?|two|three|four|five)\s+times\s+)?(?:(${STEM_NAMES})er|(?:further|farther)\s+back)(?:\s+(?!than(?![\p{L}]))[\p{L}-]+){0,2}\s+than(?![\p{L}])`, 'giu');
 const MULTIPLE = new RegExp(String.raw`(?<![\p{L}])(?:(twice|half|(?:\d+(?:\.\d+)?|two|three|four|five)\s+times)\s+)?as\s+(${STEM_NAMES}|far\s+back)\s+as(?![\p{L}])`, 'giu');
 
 /** Every rank or comparison word of `sentence`, in order. */
