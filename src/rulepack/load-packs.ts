@@ -97,7 +97,9 @@ export function mergePacks(packs: RulePack[]): LoadedPacks {
     patterns: all((p) => p.patterns),
     sources: all((p) => p.sources),
     lexicon: joinLexicons(packs.map((p) => p.lexicon)),
-    topicWords: [...new Set(terms.flatMap((t) => t.words.map((w) => w.toLowerCase())))],
+    // A bare figure ("1990", "66%") qualifies a value's setting (the year an assessment was published)
+    // but never puts a sentence on the subject: "open from 1990 to 2000" is about a gallery.
+    topicWords: [...new Set(terms.flatMap((t) => t.words.map((w) => w.toLowerCase())).filter((w) => /\p{L}/u.test(w)))],
     reference: (id) => byRef.get(id),
     term: (id) => byTerm.get(id),
   };
