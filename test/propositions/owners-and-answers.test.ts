@@ -308,3 +308,23 @@ describe('reports by name and shares of a whole', () => {
     expect(await serious('Warmer seas alone account for the whole glacial-to-interglacial CO2 rise.')).toContain('logic.single-cause');
   });
 });
+
+// A CO2 lag does not make CO2 a mere consequence of the warming: it amplified the deglacial warming
+// and led global temperature (Shakun et al. 2012, Nature 484, 49-54). A source stressed by "itself"
+// is the draft's own voice or its authority; a named outside voice stays a report.
+describe('a source stressed by "itself"', () => {
+  it.each([
+    'Even so, the release itself concludes that the gas was a consequence of the warming rather than a cause of it.',
+    'In the end the bulletin itself states that CO2 was merely a by-product of the warming, never a driver.',
+    'The museum panel itself maintains that carbon dioxide was only a consequence of the warming, not a cause.',
+  ])('is the writer\'s claim: %s', async (text) => {
+    expect(await serious(text)).toContain('logic.either-or-causation');
+  });
+
+  it.each([
+    'The op-ed itself claims that the gas was a consequence of the warming rather than a cause of it. That does not follow from the lag.',
+    'Critics themselves argue that CO2 was merely a by-product of the warming. The cores show otherwise.',
+  ])('stays a report: %s', async (text) => {
+    expect(await serious(text)).not.toContain('logic.either-or-causation');
+  });
+});
