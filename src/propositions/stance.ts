@@ -62,8 +62,12 @@ export interface StanceContext {
 const JOINS = new Set(['so', 'and', 'but', 'then', 'or', 'yet']);
 const AUX = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const WH = new Set(['how', 'why']);
-/** Subjects whose report the writer relies on rather than answers. */
-const AUTHORITIES = new Set(['we', 'i', 'scientists', 'researchers', 'study', 'studies', 'data', 'evidence', 'cores', 'core', 'record', 'records', 'team', 'authors', 'our', 'measurements', 'this', 'that', 'it', 'which', 'analysis', 'results', 'paper', 'ipcc', 'report', 'assessment', 'lag', 'physics']);
+/**
+ * Subjects whose report the writer relies on rather than answers. "The release itself concludes
+ * that...": a source stressed by "itself" is the draft's own or one it cites as authority (an outside
+ * voice named by lexicon `stance.reporters`, "the op-ed itself claims", stays a report).
+ */
+const AUTHORITIES = new Set(['itself', 'we', 'i', 'scientists', 'researchers', 'study', 'studies', 'data', 'evidence', 'cores', 'core', 'record', 'records', 'team', 'authors', 'our', 'measurements', 'this', 'that', 'it', 'which', 'analysis', 'results', 'paper', 'ipcc', 'report', 'assessment', 'lag', 'physics']);
 /** Whom a record or the writer tells ("tells us that"): no outside source. */
 const SELF = new Set(['us', 'me', 'you', 'is', 'was', 'are']);
 /**

@@ -89,7 +89,8 @@ function splitLines(sentences: Sentence[], whole: string, blockIndex: number, fr
   for (let match = BOUNDARY.exec(text); match !== null; match = BOUNDARY.exec(text)) {
     const stopAt = match.index + match[1]!.length + match[2]!.length;
     const next = match.index + match[0].length;
-    if (stopAt <= start || !endsSentence(text, match.index, match[1]!, match[3]!, next)) continue;
+    if (stopAt <= start) continue;
+    if (!endsSentence(text, match.index, match[1]!, match[3]!, next) && !endsLowerCaseSentence(text, start, match.index, match[1]!, next)) continue;
     push(sentences, text, blockIndex, start, stopAt);
     start = next;
   }
@@ -109,6 +110,29 @@ function endsSentence(text: string, dotAt: number, marks: string, space: string,
   if (capital) return OPENS_NOT_NAME.test(text.slice(next, next + 12));
   return startsSentence(text.slice(next, next + 1));
 }
+
+/**
+ * A writer who opens sentences in lower case (chat logs, comment threads: "its antarctic temp tho.
+ * the global number was smaller") ends one with a full stop before a lower-case word as well. The
+ * sentence so far must open in lower case after its utterance label, and the word before the stop
+ * must be a word of two letters or more that is no known abbreviation, so "c. 21,000", "e.g. the"
+ * and "et al. found" stay joined, and a writer who capitalises keeps the ordinary rule.
+ */
+function endsLowerCaseSentence(text: string, start: number, dotAt: number, marks: string, next: number): boolean {
+  if (marks !== '.' || !/^\p{Ll}/u.test(text.slice(next, next + 1))) return false;
+  const word = /([\p{L}.]+)$/u.exec(text.slice(Math.max(0, dotAt - 12), dotAt))?.[1] ?? '';
+  if (word.length < 2 || word.includes('.') || ABBREVIATIONS.has(word.toLowerCase())) return false;
+  return opensInLowerCase(text.slice(start, dotAt));
+}
+
+/** The sentence's first word, after a time stamp, a handle or a speaker label, is in lower case. */
+function opensInLowerCase(sentence: string): boolean {
+  const body = sentence.replace(UTTERANCE_PREFIX, '');
+  return /^\p{Ll}/u.test(body);
+}
+
+/** A time stamp, a handle, a reply arrow or a speaker label that opens an utterance ("[19:13] oskarflint: "). */
+const UTTERANCE_PREFIX = /^\s*(?:\[[^\]\n]{1,24}\]\s*)?(?:[↳•▶►]\s*)?(?:@?[\p{L}\d_.'’-]{1,32}:\s+)?/u;
 
 /**
  * After a full stop, what may open a new sentence: anything but a lower-case letter or a mark that

@@ -124,6 +124,31 @@ describe('one utterance a line', () => {
   });
 });
 
+// A writer who opens sentences in lower case ends them before a lower-case word too (chat logs and
+// comment threads; common practice of reading informal English). A writer who capitalises, an
+// abbreviation ("c.", "e.g.", "et al.") or an initial keeps the sentence whole.
+describe('a lower-case writer\'s full stop', () => {
+  const texts = (text: string) => splitSentences(text, 0).map((s) => s.text);
+  it.each([
+    ['[20:01] fennick: thats the greenland core tho. the global figure is much smaller', ['[20:01] fennick: thats the greenland core tho.', 'the global figure is much smaller']],
+    ['miro_k: vostok is one site. the whole planet cooled less', ['miro_k: vostok is one site.', 'the whole planet cooled less']],
+    ['ok so co2 was about 180 ppm. then it climbed to 280 ppm', ['ok so co2 was about 180 ppm.', 'then it climbed to 280 ppm']],
+  ])('splits %j', (input, expected) => {
+    expect(texts(input)).toEqual(expected);
+  });
+
+  it.each([
+    'The ice at the bottom dates to c. 800,000 years ago.',
+    'Some sites, e.g. the Dome C borehole, reach bedrock.',
+    'Petit et al. found the same lag in the Vostok record.',
+    'the ice dates to c. 21,000 BCE at that depth',
+    'the lag is short, e.g. under 400 years at the onset',
+    'The record is long. the next sentence opens in lower case by mistake',
+  ])('keeps whole: %s', (input) => {
+    expect(texts(input)).toEqual([input]);
+  });
+});
+
 // Antarctica warmed while Greenland cooled in the Younger Dryas (bipolar seesaw): Pedro et al.
 // 2016, Nature Geoscience 9, 51-55 (from memory); WAIS Divide Project Members 2013, Nature 500,
 // 440-444 (from memory).
@@ -281,5 +306,25 @@ describe('reports by name and shares of a whole', () => {
   it('"alone accounts for 20 to 30 ppm of the 80 to 100 ppm rise" is a share, not a single cause', async () => {
     expect(await serious('Warmer seas alone account for perhaps 20 to 30 ppm of the 80 to 100 ppm glacial-to-interglacial rise.')).not.toContain('logic.single-cause');
     expect(await serious('Warmer seas alone account for the whole glacial-to-interglacial CO2 rise.')).toContain('logic.single-cause');
+  });
+});
+
+// A CO2 lag does not make CO2 a mere consequence of the warming: it amplified the deglacial warming
+// and led global temperature (Shakun et al. 2012, Nature 484, 49-54). A source stressed by "itself"
+// is the draft's own voice or its authority; a named outside voice stays a report.
+describe('a source stressed by "itself"', () => {
+  it.each([
+    'Even so, the release itself concludes that the gas was a consequence of the warming rather than a cause of it.',
+    'In the end the bulletin itself states that CO2 was merely a by-product of the warming, never a driver.',
+    'The museum panel itself maintains that carbon dioxide was only a consequence of the warming, not a cause.',
+  ])('is the writer\'s claim: %s', async (text) => {
+    expect(await serious(text)).toContain('logic.either-or-causation');
+  });
+
+  it.each([
+    'The op-ed itself claims that the gas was a consequence of the warming rather than a cause of it. That does not follow from the lag.',
+    'Critics themselves argue that CO2 was merely a by-product of the warming. The cores show otherwise.',
+  ])('stays a report: %s', async (text) => {
+    expect(await serious(text)).not.toContain('logic.either-or-causation');
   });
 });
