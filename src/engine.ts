@@ -239,6 +239,11 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     if (!TWO_NUMBERS.test(block.text) && !nextTo && !subjects.test(block.text) && !hasTwoNumerals(block.text)) return;
     const sentences = splitSentences(block.text, blockIndex);
     const paragraph = sentences.map((s) => s.text);
+    // What each sentence asserts, its opening title or label lines blanked (offsets kept): the
+    // figure checks read a label as the sentence's own words (it names the subject or the date of
+    // the text under it), the reasoning checks and the stance reader read only what it asserts.
+    const asserted = sentences.map((s) => (s.label === undefined ? s.text : s.text.slice(0, s.label).replace(/\S/gu, ' ') + s.text.slice(s.label)));
+    const assertedWindowOf = paragraphWindows(asserted);
     const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
     // The period the blocks just before named sets the scene of this block's opening sentences.
     const scene = sceneBefore(draft.blocks, blockIndex, packs);
@@ -261,7 +266,8 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       // A block's first sentence reads on from a sentence that introduces it with a colon as from
       // the sentence before it in its own paragraph (a list after its lead-in sentence).
       const previousOnTopic = (): boolean => inWindow && topic.test(window[at - 1] ?? (index === 0 ? introOf(lead, block.kind === 'list-item') : undefined) ?? '');
-      const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic, here, previousOnTopic, lead) : examineCached(window, at, packs, onTopic, here, previousOnTopic, lead);
+      const reading = assertedWindowOf(index).window;
+      const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic, here, previousOnTopic, lead, reading) : examineCached(window, at, packs, onTopic, here, previousOnTopic, lead, reading);
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -335,10 +341,11 @@ function examineCached(
   context: ParagraphContext,
   previousOnTopic: () => boolean,
   leadIn: readonly string[],
+  asserted: string[] = paragraph,
 ): SentenceFindings | undefined {
   const previous = previousOnTopic();
-  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.scene ?? '', leadIn, context.leadIn ?? []], () =>
-    examineSentence(paragraph, index, packs, onTopic, context, () => previous, leadIn),
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
+    examineSentence(paragraph, index, packs, onTopic, context, () => previous, leadIn, asserted),
   );
 }
 
@@ -380,6 +387,7 @@ function examineSentence(
   context: ParagraphContext,
   previousOnTopic: () => boolean,
   leadIn: readonly string[] = [],
+  asserted: string[] = paragraph,
 ): SentenceFindings | undefined {
   const text = paragraph[index] ?? '';
   // Only the last few sentences are context (the checks read the one before): copying every
@@ -409,7 +417,7 @@ function examineSentence(
     const slips = worked ? [...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)] : checkUnits(text, quantities, before);
     if (slips.length === 0) return undefined;
     // A slip in a quotation or a marked passage is the quoted writer's, not the draft's.
-    const reading = paragraphReader(paragraph, packs, ownBlock(context))(index);
+    const reading = paragraphReader(asserted, packs, ownBlock(context))(index);
     const drafts = reading === undefined ? slips : judgeByStance(slips, reading.stance);
     return { quantities, bindings: [], verdicts: [], drafts };
   }
@@ -420,9 +428,9 @@ function examineSentence(
   // The texts a description of a kind ("that core", "the cold snap") may take its subject from, oldest first.
   const { bindings } = bindQuantities(text, quantities, packs, previous, historyOf(before, previous, context, packs));
   const reference = checkReferences(text, quantities, bindings, packs);
-  const reading = paragraphReader(paragraph, packs, ownBlock(context))(index);
+  const reading = paragraphReader(asserted, packs, ownBlock(context))(index);
   const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before), ...checkRanks(text, packs)]);
-  const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(paragraph, index, packs, context)];
+  const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(asserted, index, packs, context)];
   const p = reading?.props;
   // A causal or order statement is a claim to sign off even without a number.
   const asserts = p !== undefined && p.causes.length + p.orders.length + p.relations.length + p.comparisons.length + p.evidence.length > 0;

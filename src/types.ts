@@ -75,6 +75,12 @@ export interface Sentence {
   blockIndex: number;
   start: number;
   end: number;
+  /**
+   * How many characters of the text are title, by-line or label lines that open it, each on a line
+   * of its own (prose/split-sentences.ts labelCuts): context for the figures under them, not part
+   * of what the sentence asserts.
+   */
+  label?: number;
 }
 
 // ---------------------------------------------------------------------------------------------

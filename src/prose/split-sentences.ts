@@ -57,7 +57,54 @@ function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, fr
     lineFrom = at;
   }
   splitLines(sentences, whole, blockIndex, lineFrom, to);
+  // A title, a by-line or a label on a line of its own opens the sentence it stands over: the
+  // sentence keeps it (a label gives the subject or the date of the text under it), and records
+  // how long it is, so that the checks that read what the sentence asserts skip it.
+  const labels = labelCuts(whole, from, to);
+  for (const sentence of sentences) {
+    if (sentence.end <= from || sentence.start < from) continue;
+    const last = labels.filter((at) => at > sentence.start && at < sentence.end).at(-1);
+    if (last !== undefined) sentence.label = last - sentence.start;
+  }
 }
+
+/**
+ * Where a chunk's lines that stand on their own end: a title, a by-line or a panel label on a line of
+ * its own ("B-04  Solubility is not the whole story", "J. Hale, L. Crowe (Ocean Centre)", "Panel 10 |
+ * 1992"). A line is one when it was broken on purpose by the greedy line-filling rule every wrapping
+ * writer and editor follows (common practice): it left room for the next line's first word, yet that
+ * word went on the next line. Slack keeps hard-wrapped prose whole: the line with the next word must
+ * be shorter than `LABEL_SLACK` of the chunk's widest line, the line must end in no mark or word that
+ * carries a sentence on (a comma, a dash, "and", "of"), and the next line must open with a capital.
+ * Each cut is the offset where the next line starts.
+ */
+export function labelCuts(whole: string, from: number, to: number): number[] {
+  const lines = [...whole.slice(from, to).matchAll(LINE)].map((m) => ({ text: m[0], at: from + m.index }));
+  if (lines.length < 2) return [];
+  const widest = Math.max(...lines.map((l) => l.text.trim().length));
+  const cuts: number[] = [];
+  for (let i = 0; i + 1 < lines.length; i += 1) {
+    const line = (lines[i] as { text: string }).text.trim();
+    const next = lines[i + 1] as { text: string; at: number };
+    const first = /^\S+/u.exec(next.text.trimStart())?.[0] ?? '';
+    if (line === '' || !OPENS_CAPITAL.test(first) || CARRIES_ON.test(line)) continue;
+    if (line.length + 1 + first.length < LABEL_SLACK * widest) cuts.push(next.at);
+  }
+  return cuts;
+}
+
+/** How much shorter than the chunk's widest line a line and the next word must be to be a line of its own. */
+const LABEL_SLACK = 0.8;
+
+/** A first word that opens with a capital, after an opening quote, bracket or emphasis mark. */
+const OPENS_CAPITAL = /^["'“‘([*_]*\p{Lu}/u;
+
+/**
+ * The end of a line that carries a sentence on to the next: end punctuation (already a boundary), a
+ * comma, colon, semicolon, dash, slash, ampersand or opening bracket, or a word that cannot end a
+ * sentence (an article, a conjunction, a preposition: a closed class of English).
+ */
+const CARRIES_ON = /(?:[.!?…,;:\-–—/&(+=]["'”’)\]*_]*|(?<![\p{L}'’])(?:a|an|the|and|or|nor|but|of|to|in|on|at|by|for|from|with|as|than|that|which|who|whose|into|onto|per|via|is|are|was|were)(?:[*_]*))$/iu;
 
 /** One line of a chunk (without its line break). */
 const LINE = /[^\n]+/gu;
