@@ -111,6 +111,17 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-z-2': { recall: 0.56, falseFlags: 0.05 },
   'tuning-z-3': { recall: 0.57, falseFlags: 0.06 },
   'tuning-z-4': { recall: 0.68, falseFlags: 0.08 },
+  // tuning-aa-1..4 were the blind hold-out holdout-p, spent at the end of the thirteenth round (read
+  // on its first and last code: 93/126 and 25/44 caught at the start, 101/126 and 28/44 at the end,
+  // false flags 7/234 then 6/234 and 3/85). tuning-ab-1..2 were written fresh at that round's start
+  // and read, totals only, to judge each branch before merging (34/41 and 28/42 caught at the start,
+  // 35/41 and 30/42 at the end, false flags 1/72 and 2/75 throughout).
+  'tuning-aa-1': { recall: 0.7, falseFlags: 0.04 },
+  'tuning-aa-2': { recall: 0.78, falseFlags: 0.05 },
+  'tuning-aa-3': { recall: 0.8, falseFlags: 0.06 },
+  'tuning-aa-4': { recall: 0.59, falseFlags: 0.06 },
+  'tuning-ab-1': { recall: 0.8, falseFlags: 0.04 },
+  'tuning-ab-2': { recall: 0.66, falseFlags: 0.05 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -141,12 +152,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (84.2% measured over 62 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (85.1% measured over 72 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.9% measured over 62 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.7% measured over 72 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
