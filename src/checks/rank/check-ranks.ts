@@ -78,18 +78,27 @@ function secondOnlyFlag(sentence: string, word: FoundRankWord, named: Named[], h
   if (a === undefined || b === undefined || a.entity === b.entity) return undefined;
   const family = chooseFamily(sentence, word, [a.entity, b.entity], hits, families, sentence.slice(a.end, word.start));
   if (family === undefined) return undefined;
-  const ra = (family.members.find((m) => m.entity === a.entity) as FamilyMember).reference;
-  const rb = (family.members.find((m) => m.entity === b.entity) as FamilyMember).reference;
+  const [ra, rb] = [memberOf(family, a), memberOf(family, b)];
   if (!(ra.low > rb.high)) return undefined;
   const [an, bn] = [nameOf(a.entity, packs), nameOf(b.entity, packs)];
+  return pairFlag(word, family, ra, rb, `The draft ranks ${bn} above ${an} by ${measureOf(family)}`, `ahead of (${an}: ${ra.wording}; ${bn}: ${rb.wording})`, [an, bn]);
+}
+
+/** The reference value a measure family holds for a named subject. */
+function memberOf(family: MeasureFamily, subject: Named): FamilyMember['reference'] {
+  return (family.members.find((m) => m.entity === subject.entity) as FamilyMember).reference;
+}
+
+/** The flag on a rank or comparison word that two subjects' reference values contradict. */
+function pairFlag(word: FoundRankWord, family: MeasureFamily, ra: FamilyMember['reference'], rb: FamilyMember['reference'], claim: string, correction: string, [an, bn]: [string, string]): FlagDraft {
   return {
     ruleId: `value.rank.${family.name}`,
     level: 'error',
     start: word.start,
     end: word.end,
-    reason: `The draft ranks ${bn} above ${an} by ${measureOf(family)}; the reference values give ${an} ${ra.wording} and ${bn} ${rb.wording}.`,
+    reason: `${claim}; the reference values give ${an} ${ra.wording} and ${bn} ${rb.wording}.`,
     reference: shown(ra),
-    correction: `ahead of (${an}: ${ra.wording}; ${bn}: ${rb.wording})`,
+    correction,
     sources: sourcesOf([ra, rb]),
   };
 }
@@ -154,8 +163,7 @@ function comparisonFlag(sentence: string, word: FoundRankWord, named: Named[], h
   if (a === undefined || b === undefined || a.entity === b.entity) return undefined;
   const family = chooseFamily(sentence, word, [a.entity, b.entity], hits, families);
   if (family === undefined) return undefined;
-  const ra = (family.members.find((m) => m.entity === a.entity) as FamilyMember).reference;
-  const rb = (family.members.find((m) => m.entity === b.entity) as FamilyMember).reference;
+  const [ra, rb] = [memberOf(family, a), memberOf(family, b)];
   let wrong: boolean;
   let phrase: string;
   if (word.ratio !== undefined) {
@@ -171,16 +179,7 @@ function comparisonFlag(sentence: string, word: FoundRankWord, named: Named[], h
   }
   if (!wrong) return undefined;
   const [an, bn] = [nameOf(a.entity, packs), nameOf(b.entity, packs)];
-  return {
-    ruleId: `value.rank.${family.name}`,
-    level: 'error',
-    start: word.start,
-    end: word.end,
-    reason: `The draft compares the ${measureOf(family)} of ${an} and ${bn}; the reference values give ${an} ${ra.wording} and ${bn} ${rb.wording}.`,
-    reference: shown(ra),
-    correction: `${phrase} (${an}: ${ra.wording}; ${bn}: ${rb.wording})`,
-    sources: sourcesOf([ra, rb]),
-  };
+  return pairFlag(word, family, ra, rb, `The draft compares the ${measureOf(family)} of ${an} and ${bn}`, `${phrase} (${an}: ${ra.wording}; ${bn}: ${rb.wording})`, [an, bn]);
 }
 
 /** "No ice core has a longer record than B", "nothing reaches further back than B": B is first. */
