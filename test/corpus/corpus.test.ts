@@ -122,6 +122,12 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-aa-4': { recall: 0.59, falseFlags: 0.06 },
   'tuning-ab-1': { recall: 0.8, falseFlags: 0.04 },
   'tuning-ab-2': { recall: 0.66, falseFlags: 0.05 },
+  // tuning-ac-1..4 were the blind hold-out holdout-q, spent at the start of the fourteenth round (read
+  // once, on that round's first code: 90/122 and 29/43 caught, false flags 9/231 and 3/74).
+  'tuning-ac-1': { recall: 0.76, falseFlags: 0.05 },
+  'tuning-ac-2': { recall: 0.68, falseFlags: 0.05 },
+  'tuning-ac-3': { recall: 0.64, falseFlags: 0.08 },
+  'tuning-ac-4': { recall: 0.63, falseFlags: 0.06 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
