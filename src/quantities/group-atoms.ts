@@ -44,6 +44,10 @@ const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[^\s\d]+${S}*){0,2}
 const TO_HEDGED = new RegExp(String.raw`^${S}*(?:to|through|until|till)${S}+(?:${HEDGE_PREFIX_PATTERN})${S}*$`, 'iu');
 /** "from 190 up to 280", "from 280 down to 190": the far end of a from-to pair after a direction word. */
 const TO_DIRECTED = new RegExp(String.raw`^${S}*(?:up|down)${S}+to${S}+(?:(?:about|around|roughly|some|nearly|almost)${S}+)?$`, 'iu');
+/** A dash between two numbers, the joiner of a written range ("1.5–4.5"), not the word "to". */
+const DASH_JOIN = new RegExp(String.raw`^(?:-|${S}*[–—]${S}*)$`, 'u');
+/** After a dashed pair, "to" and another number, a bracketed note first allowed: "from 1.5–4.5 °C (AR5) to 2.5–4 °C". */
+const THEN_TO = new RegExp(String.raw`^(?:${S}*\([^()]{0,40}\))?${S}*,?${S}*(?:to|up${S}+to|down${S}+to)${S}+(?:(?:about|around|roughly|some)${S}+)?\d`, 'iu');
 const RANGE_VERB = new RegExp(String.raw`(?:rang(?:e|es|ed|ing)|var(?:y|ies|ied|ying)|anywhere|estimates?)${S}+from${S}+(?:[^\s\d]+${S}*){0,2}$`, 'iu');
 
 const joinable = (a: Atom): boolean => a.form === 'digits' || a.form === 'words';
@@ -87,6 +91,14 @@ function shareScale(from: Atom, to: Atom): Atom {
   return { ...from, value: from.value * to.scale, half: from.half * to.scale, scale: to.scale, plainInteger: false };
 }
 
+/**
+ * True when a dashed pair after "from" is itself the first end of a change whose far end follows:
+ * in "narrowed from 1.5–4.5 °C to 2.5–4 °C" the pair 1.5–4.5 is a range, not 1.5 rising to 4.5.
+ */
+function rangeThenTo(text: string, joiner: string, second: Part): boolean {
+  return DASH_JOIN.test(joiner) && THEN_TO.test(text.slice(second.unit?.end ?? second.atom.end, (second.unit?.end ?? second.atom.end) + 60));
+}
+
 /** Groups the parts of `text` into quantities-to-be, in order. */
 export function groupParts(text: string, parts: Part[]): Group[] {
   const groups: Group[] = [];
@@ -104,7 +116,7 @@ export function groupParts(text: string, parts: Part[]): Group[] {
     const second: Part = { ...q, unit: q.unit ?? p.unit };
     if (PLUS_MINUS.test(joiner) || PLUS_MINUS_WORDS.test(joiner)) {
       groups.push({ kind: 'plus-minus', parts: [shared, second], role: 'alone', prefixStart: undefined });
-    } else if ((RANGE_JOIN.test(joiner) || TO_HEDGED.test(joiner) || TO_DIRECTED.test(joiner)) && FROM.test(before) && !RANGE_VERB.test(before)) {
+    } else if ((RANGE_JOIN.test(joiner) || TO_HEDGED.test(joiner) || TO_DIRECTED.test(joiner)) && FROM.test(before) && !RANGE_VERB.test(before) && !rangeThenTo(text, joiner, second)) {
       groups.push({ kind: 'single', parts: [shared], role: 'from', prefixStart: undefined });
       groups.push({ kind: 'single', parts: [second], role: 'to', prefixStart: undefined });
     } else if (RANGE_JOIN.test(joiner) || between !== null || orRange(joiner, p, q)) {
