@@ -130,9 +130,16 @@ function nearFits(q: Quantity, reading: Reading, r: Pick<ReferenceValue, 'low' |
 
 /** Every other reading of `q`'s number, in the order tried. */
 function readingsOf(q: Quantity): Reading[] {
+  // One quantity is tried against every reference its sentence may bind: its readings are made once.
+  const kept = readingsKept.get(q);
+  if (kept !== undefined) return kept;
   // A scale word written ("2.58 thousand years") is the slip before the unit it scales.
-  return [...scaleWordReadings(q), ...swapReadings(q), ...eraReadings(q), ...offsetReadings(q)];
+  const made = [...scaleWordReadings(q), ...swapReadings(q), ...eraReadings(q), ...offsetReadings(q)];
+  readingsKept.set(q, made);
+  return made;
 }
+
+const readingsKept = new WeakMap<Quantity, Reading[]>();
 
 /** The unit ids `id` is confused with in `dimension`, a rate's derived from its amount and its per-time unit. */
 export function confusedWith(id: string, dimension: Dimension): string[] {
@@ -178,8 +185,11 @@ function factorWords(written: string, meant: string, ratio: number, writtenSmall
 }
 
 function formatRatio(ratio: number): string {
-  return ratio >= 100 ? ratio.toLocaleString('en-GB', { maximumFractionDigits: 0 }) : String(Number(ratio.toPrecision(4)));
+  return ratio >= 100 ? WHOLE_NUMBER.format(ratio) : String(Number(ratio.toPrecision(4)));
 }
+
+/** `toLocaleString('en-GB', { maximumFractionDigits: 0 })`'s formatter, made once: the call made one per reading. */
+const WHOLE_NUMBER = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 0 });
 
 /** A scale word read as its neighbour: "2.58 thousand years ago" as 2.58 million, "1.2 billion years" as million. */
 function scaleWordReadings(q: Quantity): Reading[] {

@@ -102,11 +102,10 @@ const foundTerms = new WeakMap<LoadedPacks, Map<string, TermHits>>();
 
 function searchTerms(sentence: string, packs: LoadedPacks): TermHits {
   const terms = compiledTerms(packs);
-  const present = keyWordsIn(foldedLower(sentence), terms);
+  const holding = termsHolding(keyWordsIn(foldedLower(sentence), terms), terms);
   const hits: TermHits = new Map();
   for (const [id, term] of terms) {
-    const { keyWords } = term;
-    if (keyWords !== undefined && !keyWords.some((w) => present.has(w))) continue;
+    if (term.keyWords !== undefined && !holding.has(id)) continue;
     const spans = (term.search ??= termSearch(term.words))(sentence);
     if (spans.length === 0) continue;
     const as = extendedTerm(id, packs);
@@ -181,6 +180,25 @@ export function keyWordsIn(lower: string, terms: Map<string, CompiledTerm>): Set
     }
   }
   return present;
+}
+
+const termsByKeyWord = new WeakMap<Map<string, CompiledTerm>, Map<string, string[]>>();
+
+/**
+ * The ids of the terms one of whose key words is in `present`: the same terms as asking each term
+ * whether any of its key words is present, from the few words a sentence holds rather than the
+ * key words of every term.
+ */
+function termsHolding(present: ReadonlySet<string>, terms: Map<string, CompiledTerm>): Set<string> {
+  let byWord = termsByKeyWord.get(terms);
+  if (byWord === undefined) {
+    byWord = new Map();
+    for (const [id, term] of terms) for (const w of term.keyWords ?? []) byWord.set(w, [...(byWord.get(w) ?? []), id]);
+    termsByKeyWord.set(terms, byWord);
+  }
+  const ids = new Set<string>();
+  for (const w of present) for (const id of byWord.get(w) ?? []) ids.add(id);
+  return ids;
 }
 
 /** The compiled terms of `packs` (each with its key words), made once per packs. */
