@@ -67,7 +67,7 @@ const MORE_IRREGULAR: Readonly<Record<string, readonly string[]>> = {
  * So a word may match when it is the cue word, when it starts with the cue word's first three
  * letters (all but the last of a word of three or fewer: "aging" for "age"), when it is one of
  * the cue word's irregular forms (propositions/inflect.ts and `MORE_IRREGULAR`: "went" for "go",
- * "feet" for "foot"), when the cue word is the copula ("is", "be": any form of it, "'s" too),
+ * "feet" for "foot"), when it is the plural in -es of a cue word in -is ("axes" for "axis"), when the cue word is the copula ("is", "be": any form of it, "'s" too),
  * and whenever the word holds an apostrophe (compromise splits "it's" and "we've" and gives the
  * word the root of a part). A word ending in `*` matches the text alone, as `wordMatches` does.
  * test/claims/cue-presence.test.ts tries every word form of compromise's lexicon under each root
@@ -78,6 +78,8 @@ export function mayMatchWord(test: string, text: string): boolean {
   if (test.endsWith('*')) return text.startsWith(test.slice(0, -1));
   if (text === test || test === 'is' || test === 'be' || text.includes("'") || text.includes('’')) return true;
   if (text.startsWith(test.slice(0, Math.max(1, Math.min(3, test.length - 1))))) return true;
+  // Greek and Latin plurals in -es of a word in -is ("axes" of "axis", "bases" of "basis").
+  if (test.endsWith('is') && text === `${test.slice(0, -2)}es`) return true;
   return (IRREGULAR[test]?.includes(text) ?? false) || (MORE_IRREGULAR[test]?.includes(text) ?? false);
 }
 
