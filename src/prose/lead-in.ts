@@ -35,10 +35,17 @@ export function leadInOf(text: string, blocks: readonly ProseBlock[], index: num
   for (let i = index - 1; i >= 0 && here !== undefined && out.length < LEAD_IN_SENTENCES; i -= 1) {
     const block = blocks[i] as ProseBlock;
     if (NOT_PROSE.has(block.kind) || NOT_PROSE.has(here.kind) || block.heading !== here.heading) break;
-    // A table's cell reads on from the cells of its own row only (they open with the same row
-    // header, source/markdown-published.ts); other rows are other records.
+    // A table's cell reads on from the cells of its own table: its own row, then the rows above
+    // it. A summary row often works on the rows above ("Today's rise compared with the deglacial
+    // average | about 240 times faster"); a row of another record gives no result, as the checks
+    // that read lead-ins take an earlier sentence's figure only when the result says it draws on it.
     if (here.kind === 'table-cell' || block.kind === 'table-cell') {
-      if (here.kind !== block.kind || here.offsets[0] !== block.offsets[0]) break;
+      if (here.kind !== block.kind) break;
+      // A row header is read again at the head of each cell of its row: it adds no sentence.
+      if (blocks[i + 1]?.text.startsWith(`${block.text}, `) === true) {
+        here = block;
+        continue;
+      }
     } else {
       const end = (block.offsets[block.offsets.length - 1] ?? 0) + 1;
       const start = here.offsets[0] ?? 0;

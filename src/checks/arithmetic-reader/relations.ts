@@ -102,9 +102,18 @@ function isOtherQuantity(f: Figure, figures: Figure[]): boolean {
  */
 function isTied(f: Figure, text: string, lastInput: number): boolean {
   const words = between(text, Math.max(0, lastInput), f.q.start);
+  // Inputs only in the sentences before, set against each other by the multiple's own sentence
+  // ("today's rise compared with the deglacial average": "with" here is no part word).
+  if (lastInput < 0 && f.role === 'multiple' && holdsPhrase(words, WORDS.setAgainst)) return true;
   if (words.some((w) => CONTRAST.includes(w.text)) || holdsPhrase(words, WORDS.part)) return false;
-  // A semicolon closes the clause of the figures, except for what is left of them ("...; the remaining 50").
-  if (/;/u.test(text.slice(Math.max(0, lastInput), f.q.start)) && !f.remainder) return false;
+  // A semicolon closes the clause of the figures, except for what is left of them ("...; the remaining 50")
+  // and for a clause that says it draws on them ("...; the polar change was therefore three times").
+  const stretch = text.slice(Math.max(0, lastInput), f.q.start);
+  const semicolon = stretch.lastIndexOf(';');
+  if (semicolon >= 0 && !f.remainder) {
+    const from = Math.max(0, lastInput) + semicolon + 1;
+    return holdsPhrase(wordsIn(text, from, f.q.start), WORDS.links);
+  }
   if (f.remainder) return true;
   if (holdsPhrase(words, WORDS.links)) return true;
   // Inputs only in the sentences before: the sentence must say it draws on them.
@@ -153,7 +162,8 @@ function usable(figures: Figure[], f: Figure, text: string, accept: (g: Figure) 
   if (inputs.some((g) => g.sentence > 0)) {
     const head = wordsIn(text, 0, f.q.start);
     const later = f.role === 'duration' && WORDS.later.has(f.after[0]?.text ?? '');
-    if (!later && !holdsPhrase(head, WORDS.links) && !holdsPhrase(head, WORDS.backReferences)) return undefined;
+    const against = f.role === 'multiple' && holdsPhrase(head, WORDS.setAgainst);
+    if (!later && !against && !holdsPhrase(head, WORDS.links) && !holdsPhrase(head, WORDS.backReferences)) return undefined;
   }
   return { inputs, lastInput };
 }
@@ -230,8 +240,9 @@ function checkRelative(figures: Figure[], text: string, f: Figure): ReaderFindin
 /** A multiple ("20 times faster", "two and a half times the 1750 figure") against the ratios of two rates or two levels. */
 function checkMultiple(figures: Figure[], text: string, f: Figure): ReaderFinding[] {
   if (f.q.value <= 1 || denied(f)) return [];
-  // Spans of time compare as levels do: "800,000 against 420,000 years, so about twice as long".
-  const compared = (g: Figure): boolean => (g.role === 'rate' || g.role === 'level' || g.role === 'duration') && g.q.value > 0;
+  // Spans of time compare as levels do: "800,000 against 420,000 years, so about twice as long";
+  // so do two changes of one family: "warmed by 9 °C while the globe warmed by 6 °C, so 1.5 times".
+  const compared = (g: Figure): boolean => (g.role === 'rate' || g.role === 'level' || g.role === 'duration' || g.role === 'change') && g.q.value !== 0;
   const found = usable(figures, f, text, compared);
   if (found === undefined) return [];
   const pace = f.after.some((w) => WORDS.pace.has(w.text));
@@ -240,7 +251,7 @@ function checkMultiple(figures: Figure[], text: string, f: Figure): ReaderFindin
     if (a.role !== b.role || a.family !== b.family || (pace && a.role !== 'rate')) continue;
     if (a.q.statedUnit !== b.q.statedUnit && a.q.statedUnit !== '' && b.q.statedUnit !== '' && a.role === 'level') continue;
     // A pace worked out from an amount and its time ("100 ppm over 7,000 years") counts as a rate.
-    const r = divide(a.pace?.value ?? w(a.q), b.pace?.value ?? w(b.q));
+    const r = a.role === 'change' ? divide(size(w(a.q)), size(w(b.q))) : divide(a.pace?.value ?? w(a.q), b.pace?.value ?? w(b.q));
     if (r === undefined) continue;
     const up = r.value >= 1 ? r : invert(r);
     const named = (g: Figure): string => g.pace?.text ?? g.q.text;

@@ -163,8 +163,11 @@ function restatements(text: string, figures: Figure[]): Figure[] {
   return figures.map((f, i) => {
     // A date of the change may stand between: "a rise of 47 percent since 1750, or roughly 130 ppm".
     const prev = figures.slice(0, i).reverse().find((g) => g.role !== 'date');
-    if (f.role !== 'level' || prev === undefined || (prev.role !== 'change' && prev.role !== 'relative')) return f;
-    return /^\s*(?:(?:since|from|in|by|over)\s+[^,;.]{0,30})?,?\s*(?:or|i\.e\.,?|that is,?)\s*$/iu.test(text.slice(prev.q.end, f.q.start)) ? { ...f, role: 'change', sign: prev.sign } : f;
+    // "a rise of 132 ppm, or about 47 per cent": a share after it restates the change as relative to where it started.
+    const share = f.role === 'other' && (f.q.dimension === 'percent' || (f.q.dimension === 'ratio' && f.q.value < 1)) && prev?.role === 'change';
+    if ((f.role !== 'level' && !share) || prev === undefined || (prev.role !== 'change' && prev.role !== 'relative')) return f;
+    if (!/^\s*(?:(?:since|from|in|by|over)\s+[^,;.]{0,30})?,?\s*(?:or|i\.e\.,?|that is,?)\s*$/iu.test(text.slice(prev.q.end, f.q.start))) return f;
+    return share ? { ...f, role: 'relative', sign: prev.sign } : { ...f, role: 'change', sign: prev.sign };
   });
 }
 

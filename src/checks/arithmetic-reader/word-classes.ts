@@ -80,6 +80,11 @@ const TIME_UNITS = ['year', 'decade', 'century', 'millennium', 'month', 'day', '
 const OWN_PERIOD = ['annually', 'yearly', 'since', 'per'];
 /** Words that make a figure another time's ("today", "now"): the figures before are not its inputs. */
 const OWN_TIME = ['today', "today's", 'today’s', 'now', 'nowadays', 'currently', 'current', 'modern', 'present', 'recent', 'recently', 'lately'];
+/**
+ * Words that set one figure against another named before ("today's rise compared with the
+ * deglacial average", "relative to", "versus"): a multiple after them is the ratio of the two.
+ */
+const SET_AGAINST = ['compared with', 'compared to', 'comparing', 'relative to', 'set against', 'against', 'versus', 'vs', 'next to', 'beside'];
 /** Words that give the multiple's measure a pace ("times faster", "as fast"). */
 const PACE_WORDS = ['faster', 'slower', 'quicker', 'quickly', 'rapidly', 'fast', 'pace', 'rate', 'speed', 'tempo'];
 
@@ -147,6 +152,7 @@ export const WORDS = {
   yardstick: new Set(YARDSTICK),
   ownTime: new Set(OWN_TIME),
   pace: new Set(PACE_WORDS),
+  setAgainst: SET_AGAINST,
   askedMeasures: new Set(ASKED_MEASURES),
   askedNouns: formsOf(ASKED_NOUNS),
   spacingBefore: new Set(SPACING_BEFORE),
