@@ -137,7 +137,8 @@ export function readSentence(text: string, qs: readonly Quantity[], sentence: nu
       return { ...f, role: 'duration', family: 'duration' };
     }
     if (RATES.includes(d)) return { ...f, role: 'rate', family: d };
-    const up = changeBefore(before) ?? changeAfter(after);
+    // "about 420 ppm, up 50 percent": a comparative after a comma speaks of the figure after it.
+    const up = changeBefore(before) ?? (/^\s*[,;:]/u.test(text.slice(q.end, q.end + 3)) ? undefined : changeAfter(after));
     // "a quarter of our emissions", "20 percent of the rise": a share of something named after it, not a change.
     if (d === 'percent' || (d === 'ratio' && q.value < 1)) return up === undefined || after[0]?.text === 'of' ? f : { ...f, role: 'relative', sign: up };
     // "per doubling", "each doubling", "a doubling": the multiple is a measure's unit, not a claim.
