@@ -14,7 +14,7 @@
  */
 import { toCanonical, writtenInterval as w } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
-import { divide, type Derived } from './arithmetic-derive.js';
+import { divide, rangeSpan, size, type Derived } from './arithmetic-derive.js';
 import type { Pair } from './arithmetic-frames.js';
 import { spanOfDates } from './arithmetic-spans.js';
 import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
@@ -34,7 +34,26 @@ const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined
 function isSpacing(text: string, q: Quantity): boolean {
   if (q.dimension !== 'duration') return false;
   if (WORDS.spacingBefore.has(wordBefore(text, q))) return true;
+  // "each panel spans 100,000 years", "every cycle lasts about": the member named, then its verb.
+  const near = wordsIn(text, Math.max(0, q.start - 30), q.start).slice(-3).map((x) => x.text);
+  if (near.length === 3 && WORDS.spacingBefore.has(near[0] ?? '') && !WORDS.notASpan.has(near[1] ?? '') && !qsBetween(text, q)) return true;
   return /^-?[\p{L}]*$/u.test(q.text.split(/[\s\u00A0-]/u).at(-1) ?? '') && /-/u.test(q.text) && WORDS.spacingNouns.has(wordsAfter(text, q, 1)[0] ?? '');
+}
+
+/** True when a digit stands in the few words before the figure (then "each" belongs to another figure). */
+const qsBetween = (text: string, q: Quantity): boolean => /\d/u.test(text.slice(Math.max(0, q.start - 30), q.start).split(/\b(?:each|every|per|apiece)\b/iu).at(-1) ?? '');
+
+/**
+ * "800,000 years ago ... today": one date and the present mark out the time since that date.
+ * Undefined unless the sentence holds exactly one date and a word of the present.
+ */
+function spanToPresent(text: string, qs: Quantity[]): { value: Derived; text: string; end: number } | undefined {
+  const dates = qs.filter((q) => q.dimension === 'age');
+  const date = only(dates);
+  if (date === undefined || rangeSpan(date) !== undefined) return undefined;
+  const now = wordsIn(text, 0, text.length).find((x) => WORDS.ownTime.has(x.text) && ['today', 'now', 'present'].includes(x.text));
+  if (now === undefined) return undefined;
+  return { value: size(w(date)), text: `from ${date.text} to ${now.text}`, end: Math.max(date.end, now.end) };
 }
 
 /** "8 cycles", "about 70 samples": a count of things. */
@@ -55,7 +74,12 @@ export function seriesSpacings(text: string, qs: Quantity[], pairs: Pair[]): Ser
   const counts = qs.filter((q) => isCount(text, q));
   const span: { value: Derived; text: string; end: number } | undefined =
     spans.length === 1 && dated === undefined ? { value: w(spans[0] as Quantity), text: (spans[0] as Quantity).text, end: (spans[0] as Quantity).end } : spans.length === 0 && dated !== undefined ? { value: dated.span, text: dated.measures.replace(/^the time /u, ''), end: Math.max(...qs.filter((q) => q.dimension === 'age').map((q) => q.end)) } : undefined;
-  if (span === undefined || counts.length > 1 || spacings.length > 1) return [];
+  const whole = span ?? (spans.length === 0 && dated === undefined ? spanToPresent(text, qs) : undefined);
+  if (whole === undefined || counts.length > 1 || spacings.length > 1) return [];
+  return fromSpan(text, qs, whole, counts, spacings);
+}
+
+function fromSpan(text: string, qs: Quantity[], span: { value: Derived; text: string; end: number }, counts: Quantity[], spacings: Quantity[]): SeriesFinding[] {
   const count = counts[0];
   const spacing = spacings[0];
   // The result: the last of the three, after both inputs.

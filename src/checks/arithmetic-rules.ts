@@ -160,10 +160,22 @@ function changeAndSpan(text: string, qs: Quantity[], pairs: Pair[], changeDim: D
   return change === undefined || duration === undefined ? undefined : { change, duration };
 }
 
+/**
+ * True when a rate is the other side of a comparison with a rate of its kind before it ("= 0.012
+ * ppm/yr (vs ~2.4 ppm/yr in the 2010s)", "against 2.4 ppm a year today"): another time's pace,
+ * not the sentence's change divided by its time.
+ */
+function isComparedRate(text: string, qs: Quantity[], rate: Quantity): boolean {
+  const earlier = qs.filter((q) => q.dimension === rate.dimension && q.end <= rate.start).at(-1);
+  if (earlier === undefined) return false;
+  const words = wordsIn(text, earlier.end, rate.start);
+  return holdsPhrase(words, [...WORDS.setAgainst, 'than']);
+}
+
 function rates(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return qs.flatMap((rate) => {
     const changeDim = RATE_OF[rate.dimension];
-    if (changeDim === undefined) return [];
+    if (changeDim === undefined || isComparedRate(text, qs, rate)) return [];
     const found = changeAndSpan(text, qs, pairs, changeDim);
     const computed = found === undefined ? undefined : divide(size(found.change), found.duration);
     return computed === undefined ? [] : [{ stated: rate, computed: facing(computed, rate.value), measures: 'the change divided by the time it took' }];

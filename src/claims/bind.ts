@@ -47,6 +47,22 @@ const SEGMENT = /\b(?:the|its|their|a|an)\s+(?:very\s+)?(?:lowest|bottom|bottomm
 /** A single unit, the base of a rate stated beside it ("one metre ... stores 750 years", "each metre holds"). */
 const ONE_UNIT = /^(?:one|a|an|each|every|per|a\s+single)\s+\p{L}+$/iu;
 /** One unit length named just before a figure, in its clause: "each metre there holds", "one metre near the bottom stores". */
+/** The functions a written formula applies to its operands (common practice: the names of the mathematical functions). */
+const FORMULA_FUNCTIONS = ['ln', 'log', 'log10', 'exp', 'sqrt'];
+/**
+ * True when a number is an operand of a written formula, not a measure the sentence states:
+ * inside a function's brackets ("5.35 ln(280/190)") or beside a sign of multiplication or
+ * division between numbers ("2 × 3.7", "76 ÷ 6,500"). "180/280 ppm" outside a function is a pair.
+ */
+export function isFormulaOperand(sentence: string, q: { start: number; end: number }): boolean {
+  const head = sentence.slice(0, q.start);
+  const open = head.lastIndexOf('(');
+  if (open >= 0 && !head.slice(open).includes(')')) {
+    const name = /([\p{L}\d]+)\s*$/u.exec(head.slice(0, open))?.[1]?.toLowerCase();
+    if (name !== undefined && FORMULA_FUNCTIONS.includes(name)) return true;
+  }
+  return /\d\s*[×*÷]\s*$/u.test(head.slice(-8)) || /^\s*[×*÷]\s*\d/u.test(sentence.slice(q.end, q.end + 8));
+}
 const PER_UNIT_BEFORE = /(?:^|[^\p{L}])(?:each|every|one|a\s+single|a)\s+(?:metre|meter|m)(?![\p{L}])[^\d,;:.!?()]{0,36}$/iu;
 const compiled = new WeakMap<object, Map<string, CompiledTerm>>();
 
@@ -505,6 +521,8 @@ export function bindQuantities(
     if (isSegment(q)) return;
     // "one metre near the bottom stores some 750 years": one unit of a rate, not a measure of anything.
     if (ONE_UNIT.test(q.text)) return;
+    // "forcing = 5.35 ln(280/190) = 2.1 W/m2": an operand of a formula is worked on, not claimed.
+    if (isFormulaOperand(sentence, q)) return;
     // "each metre there holds about 750 years": the years of one unit length are that rate, no span of the core.
     if (q.dimension === 'duration' && PER_UNIT_BEFORE.test(sentence.slice(Math.max(0, q.start - 60), q.start))) return;
     const view = views[i] as TermHits;

@@ -35,10 +35,18 @@ export function leadInOf(text: string, blocks: readonly ProseBlock[], index: num
   for (let i = index - 1; i >= 0 && here !== undefined && out.length < LEAD_IN_SENTENCES; i -= 1) {
     const block = blocks[i] as ProseBlock;
     if (NOT_PROSE.has(block.kind) || NOT_PROSE.has(here.kind) || block.heading !== here.heading) break;
-    // A table's cell reads on from the cells of its own row only (they open with the same row
-    // header, source/markdown-published.ts); other rows are other records.
+    // A table's cell reads on from the cells of its own row; a row of another record is no premise
+    // of it. A row with no figure but the result ("Today's rise compared with the deglacial average
+    // | about 240 times faster") works on the rows above, and reads on from them too.
     if (here.kind === 'table-cell' || block.kind === 'table-cell') {
-      if (here.kind !== block.kind || here.offsets[0] !== block.offsets[0]) break;
+      if (here.kind !== block.kind) break;
+      const row = (blocks[index] as ProseBlock).offsets[0];
+      if (block.offsets[0] !== row && here.offsets[0] === row && !readsRowsAbove(blocks, index)) break;
+      // A row header is read again at the head of each cell of its row: it adds no sentence.
+      if (blocks[i + 1]?.text.startsWith(`${block.text}, `) === true) {
+        here = block;
+        continue;
+      }
     } else {
       const end = (block.offsets[block.offsets.length - 1] ?? 0) + 1;
       const start = here.offsets[0] ?? 0;
@@ -50,6 +58,24 @@ export function leadInOf(text: string, blocks: readonly ProseBlock[], index: num
     here = block;
   }
   return out;
+}
+
+/**
+ * True when a cell of a table with row headers may read on from the rows above: its row header
+ * and the other cells of its row hold no figure, so the cell's figure is drawn from elsewhere.
+ */
+function readsRowsAbove(blocks: readonly ProseBlock[], index: number): boolean {
+  const cell = blocks[index] as ProseBlock;
+  const row = cell.offsets[0];
+  const digit = /\d/u;
+  // The row header is read at the head of each cell of its row; without one, rows are not told apart.
+  const header = blocks.slice(0, index).reverse().find((b) => b.kind === 'table-cell' && b.offsets[0] === row && cell.text.startsWith(`${b.text}, `));
+  if (header === undefined || digit.test(header.text)) return false;
+  for (let i = index - 1; i >= 0 && blocks[i]?.kind === 'table-cell' && blocks[i]?.offsets[0] === row; i -= 1) {
+    const other = blocks[i] as ProseBlock;
+    if (other !== header && digit.test(other.text.slice(header.text.length))) return false;
+  }
+  return true;
 }
 
 /**

@@ -73,11 +73,21 @@ function orRange(joiner: string, p: Part, q: Part): boolean {
 const sameUnit = (a: UnitMatch | undefined, b: UnitMatch | undefined): boolean =>
   a === undefined || b === undefined || a.defs[0]?.id === b.defs[0]?.id;
 
+/** "0.75 of a degree", "0.3 of a metre": a part of one unit, written with "of a" between. */
+const OF_A = /^[\s\u00A0]+of[\s\u00A0]+an?(?=[\s\u00A0])/u;
+
+/** The unit after "of a" when the number is a part of one (above 0, below 1), or undefined. */
+function partOfUnit(text: string, atom: Atom): UnitMatch | undefined {
+  if (!(atom.value > 0 && atom.value < 1)) return undefined;
+  const gap = OF_A.exec(text.slice(atom.end, atom.end + 12));
+  return gap === null ? undefined : matchUnit(text, atom.end + gap[0].length);
+}
+
 /** The numbers of `text` with their units, dropping labels ("MIS 11") and numbers glued to words ("1990s"). */
 export function partsOf(text: string, atoms: Atom[]): Part[] {
   const parts: Part[] = [];
   for (const atom of atoms) {
-    const unit = atom.form === 'multiplier' ? undefined : matchUnit(text, atom.end);
+    const unit = atom.form === 'multiplier' ? undefined : (matchUnit(text, atom.end) ?? partOfUnit(text, atom));
     const glued = /[\p{L}\p{N}]/u.test(text[atom.end] ?? '');
     if (glued && unit?.start !== atom.end) continue;
     if (unit === undefined && atom.form === 'digits' && isLabelCue(text.slice(Math.max(0, atom.start - 16), atom.start))) continue;

@@ -102,9 +102,18 @@ function isOtherQuantity(f: Figure, figures: Figure[]): boolean {
  */
 function isTied(f: Figure, text: string, lastInput: number): boolean {
   const words = between(text, Math.max(0, lastInput), f.q.start);
+  // Inputs only in the sentences before, set against each other by the multiple's own sentence
+  // ("today's rise compared with the deglacial average": "with" here is no part word).
+  if (lastInput < 0 && f.role === 'multiple' && holdsPhrase(words, WORDS.setAgainst)) return true;
   if (words.some((w) => CONTRAST.includes(w.text)) || holdsPhrase(words, WORDS.part)) return false;
-  // A semicolon closes the clause of the figures, except for what is left of them ("...; the remaining 50").
-  if (/;/u.test(text.slice(Math.max(0, lastInput), f.q.start)) && !f.remainder) return false;
+  // A semicolon closes the clause of the figures, except for what is left of them ("...; the remaining 50")
+  // and for a clause that says it draws on them ("...; the polar change was therefore three times").
+  const stretch = text.slice(Math.max(0, lastInput), f.q.start);
+  const semicolon = stretch.lastIndexOf(';');
+  if (semicolon >= 0 && !f.remainder) {
+    const from = Math.max(0, lastInput) + semicolon + 1;
+    return holdsPhrase(wordsIn(text, from, f.q.start), WORDS.links);
+  }
   if (f.remainder) return true;
   if (holdsPhrase(words, WORDS.links)) return true;
   // Inputs only in the sentences before: the sentence must say it draws on them.
@@ -153,7 +162,8 @@ function usable(figures: Figure[], f: Figure, text: string, accept: (g: Figure) 
   if (inputs.some((g) => g.sentence > 0)) {
     const head = wordsIn(text, 0, f.q.start);
     const later = f.role === 'duration' && WORDS.later.has(f.after[0]?.text ?? '');
-    if (!later && !holdsPhrase(head, WORDS.links) && !holdsPhrase(head, WORDS.backReferences)) return undefined;
+    const against = f.role === 'multiple' && holdsPhrase(head, WORDS.setAgainst);
+    if (!later && !against && !holdsPhrase(head, WORDS.links) && !holdsPhrase(head, WORDS.backReferences)) return undefined;
   }
   return { inputs, lastInput };
 }
@@ -191,8 +201,64 @@ function checkChange(figures: Figure[], text: string, f: Figure): ReaderFinding[
   return [{ ruleId: 'arith.change', stated: f.q, computed: facing(nearest.value, f.q.value), measures: nearest.measures, ...basisOf(pairs.flat()) }];
 }
 
+/** How many letters two words of a named base must share at their start to name one time ("industrial", "industrialisation"). */
+const SAME_STEM = 7;
+
+/**
+ * The words that name the base a relative change is counted from, after "on", "over", "since"...
+ * ("a 47% increase on 1750", "up 50 percent over pre-industrial levels"): a year, or the content
+ * words of the phrase. Undefined when no base is named.
+ */
+function baseNamed(text: string, f: Figure): string[] | undefined {
+  // The base word comes first, or after the change noun: "47% on 1750", "a 47% increase on 1750".
+  // "32 percent higher than in 1750": after a comparative, "than" names it.
+  const at = f.after.findIndex((x) => WORDS.baseAfter.has(x.text) || x.text === 'since' || x.text === 'than');
+  const word = f.after[at];
+  const first = f.after[0]?.text ?? '';
+  if (word === undefined || at > 1 || (at === 1 && !WORDS.changeNouns.has(first) && !WORDS.comparatives.has(first)) || (word.text === 'than' && at !== 1)) return undefined;
+  const rest = text.slice(word.end, word.end + 40).split(/[,;.:!?()]/u)[0] ?? '';
+  const year = /^\s+(?:(?:the|its|in|about|around|c\.|circa)\s+)*(1[5-9]\d\d|20\d\d)\b/iu.exec(rest);
+  if (year !== null) return [year[1] as string];
+  const words = wordsIn(rest, 0, rest.length).map((x) => x.text).filter((x) => !WORDS.baseKind.has(x) && x.length >= 4).slice(0, 2);
+  return words.length > 0 ? words : undefined;
+}
+
+/** True when a sentence names the base: the year itself, or a word of one stem ("industrial", "industrialisation"). */
+function namesBase(sentence: string, base: string[]): boolean {
+  if (/^\d{4}$/u.test(base[0] ?? '')) return new RegExp(`(?<!\\d)${base[0]}(?!\\d)`, 'u').test(sentence);
+  const words = wordsIn(sentence, 0, sentence.length).map((x) => x.text);
+  return base.every((b) => words.some((x) => x.slice(0, SAME_STEM) === b.slice(0, SAME_STEM) && x.length >= Math.min(b.length, SAME_STEM)));
+}
+
+/**
+ * A relative change counted from a base it names by the time of its measurement ("410 ppm, a 47%
+ * increase on 1750", "up 50 percent over pre-industrial levels"): the base is the paragraph's
+ * level whose sentence names that time, and the change runs from it to the level nearest before
+ * the result. Undefined when the base names no level of the paragraph (then it is another
+ * quantity, counted from a start of its own).
+ */
+function checkNamedBase(figures: Figure[], texts: string[], text: string, f: Figure): ReaderFinding[] | undefined {
+  const base = baseNamed(text, f);
+  if (base === undefined || denied(f) || WORDS.added.has(f.before.at(-1)?.text ?? '')) return undefined;
+  const levels = figures.filter((g) => g.order < f.order && g.role === 'level' && g.family !== '' && g.q.value > 0);
+  // The base level: one of a sentence before that names the base's time, the nearest such.
+  const from = levels.filter((g) => g.sentence > 0 && namesBase(texts[g.sentence] ?? '', base)).at(-1);
+  if (from === undefined) return undefined;
+  const to = levels.filter((g) => g !== from && g.family === from.family && g.order > from.order && (g.q.statedUnit === from.q.statedUnit || g.q.statedUnit === '' || from.q.statedUnit === '')).at(-1);
+  if (to === undefined || to.q.value === from.q.value) return [];
+  const r = divide(w(to.q), w(from.q));
+  if (r === undefined) return [];
+  const scale = f.q.dimension === 'percent' ? 100 : 1;
+  const rel = r.value >= 1 ? { value: r.value - 1, low: r.low - 1, high: r.high - 1 } : { value: 1 - r.value, low: 1 - r.high, high: 1 - r.low };
+  const candidate: Candidate = { value: { value: rel.value * scale, low: rel.low * scale, high: rel.high * scale }, measures: `the relative change from ${from.q.text} to ${to.q.text}`, near: to.order, far: from.order };
+  const nearest = verdict(f.q, [candidate], (d) => d, ROUNDED);
+  return nearest === undefined ? [] : [{ ruleId: 'arith.ratio', stated: f.q, computed: nearest.value, measures: nearest.measures, basis: "the paragraph's" }];
+}
+
 /** A percentage or fraction stated as a change, against the relative changes between the levels before it. */
-function checkRelative(figures: Figure[], text: string, f: Figure): ReaderFinding[] {
+function checkRelative(figures: Figure[], text: string, f: Figure, texts: string[] = [text]): ReaderFinding[] {
+  const named = checkNamedBase(figures, texts, text, f);
+  if (named !== undefined) return named;
   if (isOtherQuantity(f, figures)) return [];
   const scale = f.q.dimension === 'percent' ? 100 : 1;
   const levels = (g: Figure): boolean => g.role === 'level' && g.family !== '' && g.q.value > 0;
@@ -230,8 +296,9 @@ function checkRelative(figures: Figure[], text: string, f: Figure): ReaderFindin
 /** A multiple ("20 times faster", "two and a half times the 1750 figure") against the ratios of two rates or two levels. */
 function checkMultiple(figures: Figure[], text: string, f: Figure): ReaderFinding[] {
   if (f.q.value <= 1 || denied(f)) return [];
-  // Spans of time compare as levels do: "800,000 against 420,000 years, so about twice as long".
-  const compared = (g: Figure): boolean => (g.role === 'rate' || g.role === 'level' || g.role === 'duration') && g.q.value > 0;
+  // Spans of time compare as levels do: "800,000 against 420,000 years, so about twice as long";
+  // so do two changes of one family: "warmed by 9 °C while the globe warmed by 6 °C, so 1.5 times".
+  const compared = (g: Figure): boolean => (g.role === 'rate' || g.role === 'level' || g.role === 'duration' || g.role === 'change') && g.q.value !== 0;
   const found = usable(figures, f, text, compared);
   if (found === undefined) return [];
   const pace = f.after.some((w) => WORDS.pace.has(w.text));
@@ -240,7 +307,7 @@ function checkMultiple(figures: Figure[], text: string, f: Figure): ReaderFindin
     if (a.role !== b.role || a.family !== b.family || (pace && a.role !== 'rate')) continue;
     if (a.q.statedUnit !== b.q.statedUnit && a.q.statedUnit !== '' && b.q.statedUnit !== '' && a.role === 'level') continue;
     // A pace worked out from an amount and its time ("100 ppm over 7,000 years") counts as a rate.
-    const r = divide(a.pace?.value ?? w(a.q), b.pace?.value ?? w(b.q));
+    const r = a.role === 'change' ? divide(size(w(a.q)), size(w(b.q))) : divide(a.pace?.value ?? w(a.q), b.pace?.value ?? w(b.q));
     if (r === undefined) continue;
     const up = r.value >= 1 ? r : invert(r);
     const named = (g: Figure): string => g.pace?.text ?? g.q.text;
@@ -298,11 +365,11 @@ export function readArithmetic(text: string, qs: readonly Quantity[], earlier: r
 const memo = new WeakMap<readonly Quantity[], { text: string; found: ReaderFinding[] }>();
 
 function readAll(text: string, qs: readonly Quantity[], earlier: readonly { text: string; quantities: Quantity[] }[]): ReaderFinding[] {
-  const { figures } = readParagraph(text, qs, earlier, BACK);
+  const { figures, texts } = readParagraph(text, qs, earlier, BACK);
   const own = figures.filter((f) => f.sentence === 0);
   return own.flatMap((f) => {
     if (f.role === 'change') return checkChange(figures, text, f);
-    if (f.role === 'relative') return checkRelative(figures, text, f);
+    if (f.role === 'relative') return checkRelative(figures, text, f, texts);
     if (f.role === 'multiple') return checkMultiple(figures, text, f);
     if (f.role === 'duration') return checkDuration(figures, text, f);
     return [];

@@ -137,7 +137,8 @@ export function readSentence(text: string, qs: readonly Quantity[], sentence: nu
       return { ...f, role: 'duration', family: 'duration' };
     }
     if (RATES.includes(d)) return { ...f, role: 'rate', family: d };
-    const up = changeBefore(before) ?? changeAfter(after);
+    // "about 420 ppm, up 50 percent": a comparative after a comma speaks of the figure after it.
+    const up = changeBefore(before) ?? (/^\s*[,;:]/u.test(text.slice(q.end, q.end + 3)) ? undefined : changeAfter(after));
     // "a quarter of our emissions", "20 percent of the rise": a share of something named after it, not a change.
     if (d === 'percent' || (d === 'ratio' && q.value < 1)) return up === undefined || after[0]?.text === 'of' ? f : { ...f, role: 'relative', sign: up };
     // "per doubling", "each doubling", "a doubling": the multiple is a measure's unit, not a claim.
@@ -163,8 +164,11 @@ function restatements(text: string, figures: Figure[]): Figure[] {
   return figures.map((f, i) => {
     // A date of the change may stand between: "a rise of 47 percent since 1750, or roughly 130 ppm".
     const prev = figures.slice(0, i).reverse().find((g) => g.role !== 'date');
-    if (f.role !== 'level' || prev === undefined || (prev.role !== 'change' && prev.role !== 'relative')) return f;
-    return /^\s*(?:(?:since|from|in|by|over)\s+[^,;.]{0,30})?,?\s*(?:or|i\.e\.,?|that is,?)\s*$/iu.test(text.slice(prev.q.end, f.q.start)) ? { ...f, role: 'change', sign: prev.sign } : f;
+    // "a rise of 132 ppm, or about 47 per cent": a share after it restates the change as relative to where it started.
+    const share = f.role === 'other' && (f.q.dimension === 'percent' || (f.q.dimension === 'ratio' && f.q.value < 1)) && prev?.role === 'change';
+    if ((f.role !== 'level' && !share) || prev === undefined || (prev.role !== 'change' && prev.role !== 'relative')) return f;
+    if (!/^\s*(?:(?:since|from|in|by|over)\s+[^,;.]{0,30})?,?\s*(?:or|i\.e\.,?|that is,?)\s*$/iu.test(text.slice(prev.q.end, f.q.start))) return f;
+    return share ? { ...f, role: 'relative', sign: prev.sign } : { ...f, role: 'change', sign: prev.sign };
   });
 }
 

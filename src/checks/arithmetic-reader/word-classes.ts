@@ -56,6 +56,11 @@ const BEARINGS = ['n', 's', 'e', 'w', 'north', 'south', 'east', 'west', 'latitud
 const YARDSTICK = ['per', 'each', 'every', 'a', 'an', 'one'];
 /** Words after a change that name the base it is counted from ("a rise of 40 ppm over the ice age", "80 ppm on 1750"). */
 const BASE_AFTER = ['over', 'from', 'on', 'compared', 'relative', 'against'];
+/**
+ * Words of a named base that say what kind of figure it is, not which ("on pre-industrial levels",
+ * "over the 1750 value"): the rest ("1750", "industrial") names the time the base was measured.
+ */
+const BASE_KIND = ['the', 'a', 'an', 'its', 'their', 'our', 'that', 'this', 'of', 'in', 'at', 'level', 'value', 'figure', 'mark', 'baseline', 'base', 'times', 'era', 'age', 'period', 'concentration', 'average', 'mean', 'reading', 'year', 'around', 'about', 'what', 'it', 'was', 'pre'];
 /** Words that set what follows after what came before ("after which came 600 years"): a new stretch, not a restatement. */
 const SEQUENCE = ['after', 'afterwards', 'then', 'which', 'followed', 'until', 'till', 'when', 'before', 'whereupon', 'next'];
 /**
@@ -80,6 +85,11 @@ const TIME_UNITS = ['year', 'decade', 'century', 'millennium', 'month', 'day', '
 const OWN_PERIOD = ['annually', 'yearly', 'since', 'per'];
 /** Words that make a figure another time's ("today", "now"): the figures before are not its inputs. */
 const OWN_TIME = ['today', "today's", 'today’s', 'now', 'nowadays', 'currently', 'current', 'modern', 'present', 'recent', 'recently', 'lately'];
+/**
+ * Words that set one figure against another named before ("today's rise compared with the
+ * deglacial average", "relative to", "versus"): a multiple after them is the ratio of the two.
+ */
+const SET_AGAINST = ['compared with', 'compared to', 'comparing', 'relative to', 'set against', 'against', 'versus', 'vs', 'next to', 'beside'];
 /** Words that give the multiple's measure a pace ("times faster", "as fast"). */
 const PACE_WORDS = ['faster', 'slower', 'quicker', 'quickly', 'rapidly', 'fast', 'pace', 'rate', 'speed', 'tempo'];
 
@@ -141,12 +151,14 @@ export const WORDS = {
   negations: new Set(NEGATIONS),
   part: PART,
   baseAfter: new Set(BASE_AFTER),
+  baseKind: formsOf(BASE_KIND),
   sequence: new Set(SEQUENCE),
   backReferences: BACK_REFERENCES,
   bearings: new Set(BEARINGS),
   yardstick: new Set(YARDSTICK),
   ownTime: new Set(OWN_TIME),
   pace: new Set(PACE_WORDS),
+  setAgainst: SET_AGAINST,
   askedMeasures: new Set(ASKED_MEASURES),
   askedNouns: formsOf(ASKED_NOUNS),
   spacingBefore: new Set(SPACING_BEFORE),

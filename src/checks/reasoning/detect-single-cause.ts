@@ -32,6 +32,26 @@ function warmingOcean(s: ReadSentence, c: Cause): boolean {
   return waters.some((w) => s.of('changes', 'warm').some((h) => h.first >= w.first - 2 && h.last <= w.last + 2));
 }
 
+/** How many words after an amount its "of" may stand ("15 to 30 ppm of the rise"). */
+const AMOUNT_TO_OF = 4;
+/** Words that name an amount as the whole of the effect, not a part of it. */
+const WHOLE = new Set(['whole', 'all', 'entire', 'full', 'total', 'complete']);
+
+/**
+ * True when the cause is said to give an amount of its effect ("ocean warming alone can explain
+ * perhaps 15 to 30 ppm of the CO2 rise", "accounts alone for 20 ppm of it"): what the agent does
+ * alone is a part, so the sentence says the opposite of a single cause. Read from structure: a
+ * numeral after the cause word, then "of" within a few words, in the cause's clause.
+ */
+function amountOfEffect(s: ReadSentence, c: Cause): boolean {
+  const at = s.words.findIndex((w) => w.start >= c.start);
+  if (at < 0) return false;
+  const clause = s.words[at]?.clause;
+  const after = s.words.slice(at).filter((w) => w.clause === clause);
+  // "the whole 80 ppm of the rise", "all 80 ppm of it": the amount named as the whole is no part.
+  return after.some((w, i) => /^\d/u.test(w.text) && !WHOLE.has(after[i - 1]?.text ?? '') && after.slice(i + 1, i + 1 + AMOUNT_TO_OF).some((x) => x.text === 'of'));
+}
+
 function detect({ index, read }: DetectInput): Cue[] {
   const here = read(index);
   if (here === undefined || isAboutModernRise(here.s)) return [];
@@ -41,7 +61,7 @@ function detect({ index, read }: DetectInput): Cue[] {
   const mentioned = (c: Cause) => isMention(here.s, here.s.words.findIndex((w) => w.start >= c.start));
   const single = here.props.causes.find(
     // The orbit alone *starting* the warming is what the sources say; any other agent alone starting it is not.
-    (c) => c.polarity === 'asserted' && !mentioned(c) && c.exclusive && !(c.role === 'start' && c.agent === 'orbit') && c.role !== 'amplify' && SINGLE_AGENTS.has(c.agent ?? '') && (c.patient !== 'co2' || warmingOcean(here.s, c)),
+    (c) => c.polarity === 'asserted' && !mentioned(c) && c.exclusive && !(c.role === 'start' && c.agent === 'orbit') && c.role !== 'amplify' && SINGLE_AGENTS.has(c.agent ?? '') && (c.patient !== 'co2' || warmingOcean(here.s, c)) && !amountOfEffect(here.s, c),
   );
   // "It was CO2 that pulled the planet out, after the orbit set things in motion": the other factor keeps a role.
   const other = single === undefined ? undefined : here.props.causes.find((c) => c.polarity === 'asserted' && c !== single && FACTORS.has(c.agent ?? '') && c.agent !== single.agent);
