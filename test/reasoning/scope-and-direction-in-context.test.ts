@@ -127,3 +127,25 @@ describe('a reply in a thread, opened by a display name and a handle', () => {
     expect(await rulesOf(text, 'thread.md')).not.toContain(FACT);
   });
 });
+
+describe('a bare answer under a question that offers a comparison', () => {
+  // The air in a bubble is younger than the ice around it: bubbles close only at the base of the
+  // firn, tens of metres down (Caillon et al. 2003, Science 299, 1728-1731; common practice of
+  // ice-core dating, the gas-age/ice-age difference).
+  const FACT = 'direction.trapped-air-younger-than-ice';
+  it.each([
+    '**3. Is the air in an ice-core bubble younger or older than the ice around it?**\n\n**Older.** It gets sealed in first and the snow piles up on top later.\n',
+    'Q: Is the air in an ice-core bubble older or younger than the surrounding ice?\nA: Older, of course.\n',
+    'Quiz: is the air trapped in an ice-core bubble older than the ice that holds it?\n\nOlder.\n',
+  ])('flags the answer: %s', async (text) => {
+    const result = await checkText(text, { path: 'quiz.md', packs });
+    const answer = result.flags.find((f) => f.ruleId === FACT && f.level === 'warning');
+    expect(answer?.span.start.line).toBeGreaterThan(1);
+  });
+  it.each([
+    '**3. Is the air in an ice-core bubble younger or older than the ice around it?**\n\n**Younger.** The bubbles close off only deep in the firn.\n',
+    'Q: Is the air in an ice-core bubble older or younger than the surrounding ice?\nA: Younger, by centuries or more.\n',
+  ])('leaves a right answer clean: %s', async (text) => {
+    expect(await rulesOf(text, 'quiz.md')).not.toContain(FACT);
+  });
+});
