@@ -258,7 +258,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       // ("the air in the bubbles", "seawater"), counts only where the sentence's window, or a block
       // beside its block, names a subject.
       const inWindow = nextTo || named(index - at, window.length);
-      const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text)));
+      const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text))) || answersQuestion(sentence.text, () => (at > 0 ? window[at - 1] : index === 0 ? leadInHere().at(-1) : undefined), (t) => subjects.test(t));
       // A block's first sentence reads on from the blocks just before it in the reasoning checks too.
       const here = at === index ? (index === 0 ? withLeadIn(opening, leadInHere()) : opening) : context;
       // The first sentences of a block read on from the blocks just before it (its lead-in).
@@ -355,6 +355,20 @@ interface SentenceFindings {
   bindings: Binding[];
   verdicts: Verdict[];
   drafts: FlagDraft[];
+}
+
+/** The most words a bare answer holds ("Older.", "Younger, by far."). */
+const ANSWER_WORDS = 4;
+
+/**
+ * "Q: Is the trapped air older or younger than the ice? A: Older.": a short answer right under a
+ * question that names a subject is on that question's topic, though it names none itself.
+ * `question` gives the sentence before (the block's lead-in for a block's first sentence).
+ */
+function answersQuestion(text: string, question: () => string | undefined, namesSubject: (t: string) => boolean): boolean {
+  if (text.split(/\s+/u).filter((w) => /\p{L}/u.test(w)).length > ANSWER_WORDS) return false;
+  const asked = question();
+  return asked !== undefined && asked.trimEnd().replace(/[*_]+$/u, '').endsWith('?') && namesSubject(asked);
 }
 
 /** `context` with the lead-in the reasoning checks read a block's first sentence with, when there is one. */

@@ -32,7 +32,9 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     // "orbital forcing" names the orbit: its "forcing" is no cause word of its own, and "within a few
     // centuries of each other" is a timing, not a feedback.
     // "end of story", "full stop": a restriction's own words cause nothing.
-    .filter((h) => ![...entities, ...s.of('order')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first))
+    // "temperature and CO2 moved together": the verb of a co-variation phrase (lexicon `correlation`)
+    // says the two went together, not that one moved the other.
+    .filter((h) => ![...entities, ...s.of('order'), ...s.of('correlation')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first))
     .filter((h) => !s.of('exclusive').some((e) => e.first <= h.first && e.last >= h.last && e.last - e.first > h.last - h.first));
   const causes: Cause[] = [];
   for (const h of [...hits, ...doingHits(s)].sort((a, b) => a.first - b.first)) {

@@ -15,8 +15,11 @@ import type { Change, Directed, Relation } from './types.js';
 
 const SIZE_DOWN = new Set(['less', 'fewer', 'smaller', 'lower']);
 const SIZE_UP = new Set(['more', 'greater', 'larger', 'higher', 'extra']);
-/** Words of a quantity phrase between a verb of uptake and the gas ("a smaller share of", "half as much"). */
-const QUANTITY_WORDS = new Set(['a', 'an', 'the', 'its', 'their', 'much', 'many', 'far', 'even', 'still', 'only', 'as', 'of', 'less', 'more', 'fewer', 'smaller', 'larger', 'greater', 'bigger', 'lower', 'higher', 'share', 'amount', 'fraction', 'proportion', 'quantity', 'part', 'portion', 'volume', 'load', 'lot', 'deal', 'bit', 'half', 'twice', 'double', 'times', 'third', 'quarter']);
+/**
+ * Words of a quantity phrase between a verb of uptake and the gas ("a smaller share of", "half as much",
+ * "more and more of their": "and" joins a repeated comparative).
+ */
+const QUANTITY_WORDS = new Set(['a', 'an', 'the', 'its', 'their', 'and', 'much', 'many', 'far', 'even', 'still', 'only', 'as', 'of', 'less', 'more', 'fewer', 'smaller', 'larger', 'greater', 'bigger', 'lower', 'higher', 'share', 'amount', 'fraction', 'proportion', 'quantity', 'part', 'portion', 'volume', 'load', 'lot', 'deal', 'bit', 'half', 'twice', 'double', 'times', 'third', 'quarter']);
 /** Multiples below one and above one before "as much" ("half as much", "twice as much"). */
 const FRACTIONS = new Set(['half', 'third', 'quarter', 'fifth', 'tenth', 'fraction']);
 const MULTIPLES = new Set(['twice', 'double', 'triple', 'times']);

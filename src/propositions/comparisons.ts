@@ -3,6 +3,7 @@
  * than the global mean", "the air is the same age as the ice".
  */
 import { inPhrase, kindOf, subjectOf, thingAfter, thingBefore } from './resolve.js';
+import type { LexHit } from './lexicon.js';
 import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Comparison } from './types.js';
 
@@ -43,7 +44,29 @@ export function readComparisons(s: ReadSentence, previous?: ReadSentence): Compa
     const name = (t: Thing) => t.region ?? placed(t) ?? kindOf(s, t, previous) ?? t.kind;
     out.push({ kind: 'comparison', a: name(a), b: name(b), attribute, sign, start: s.words[a.first]?.start ?? 0, end: s.words[b.last]?.end ?? 0 });
   }
-  return [...out, ...datedAges(s, previous)];
+  return [...out, ...datedAges(s, previous), ...answeredComparison(s, longest, previous)];
+}
+
+/** Words an answer of one comparative may carry besides it ("Definitely older.", "Older, actually."). */
+const ANSWER_WORDS = 4;
+
+/**
+ * "Is the air in a bubble younger or older than the ice around it? Older.": an answer made of one
+ * comparative, naming nothing else, under a question whose comparisons offer it takes the question's
+ * comparison with the sign it picks, at the answer's own word. The question itself states no
+ * comparison (its stance is asked); the answer asserts one.
+ */
+function answeredComparison(s: ReadSentence, hits: readonly LexHit[], previous?: ReadSentence): Comparison[] {
+  if (previous === undefined || !previous.text.trimEnd().endsWith('?') || hits.length !== 1 || s.things.length > 0 || s.words.length > ANSWER_WORDS) return [];
+  const h = hits[0] as LexHit;
+  const sign = SIGN[h.key];
+  if (sign === undefined || denialsBefore(s, h.first, 4) % 2 === 1) return [];
+  const attribute = h.key.startsWith('age') ? 'age' : h.key.startsWith('rate') ? 'rate' : 'size';
+  const offered = readComparisons(previous).filter((c) => c.attribute === attribute);
+  // The question offers the comparison the answer's word picks ("younger or older", or "is it older?").
+  const chosen = offered.find((c) => c.sign === sign);
+  if (chosen === undefined) return [];
+  return [{ ...chosen, start: s.words[h.first]?.start ?? 0, end: s.words[h.last]?.end ?? 0 }];
 }
 
 /** Verbs that place a thing in time ("the air dates from before the snow"). */

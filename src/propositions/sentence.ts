@@ -288,6 +288,24 @@ function farTooTo(s: ReadSentence, i: number, window: number): boolean {
 export const DENIALS = new Set(['rule', 'rules', 'ruled', 'ruling', 'exclude', 'excludes', 'excluded', 'deny', 'denies', 'denied', 'disprove', 'disproves', 'disproved', 'refute', 'refutes', 'refuted', 'dismiss', 'dismisses', 'dismissed', 'exonerate', 'exonerates', 'exonerated', 'acquit', 'acquits', 'acquitted', 'eliminate', 'eliminates', 'eliminated', 'eliminating', 'discount', 'discounts', 'discounted', 'strike', 'strikes', 'struck', 'cross', 'crosses', 'crossed']);
 /** Denials that need the particle after them ("struck off the list", "crossed off"). */
 const WITH_OFF = new Set(['strike', 'strikes', 'struck', 'cross', 'crosses', 'crossed']);
+/** How many words of an object may stand between a phrasal denial and its particle ("rule **the gas** out"). */
+const PARTICLE_GAP = 3;
+
+/**
+ * The particle a phrasal denial at `k` needs ("out" for "rule", "off" for "strike"), just after it or
+ * past a short object in its segment ("rule CO2 out", "struck the orbit off"): the index of the
+ * particle, else -1. A denial that needs no particle has it at `k`.
+ */
+function denialParticle(s: ReadSentence, k: number): number {
+  const verb = s.words[k]?.text ?? '';
+  const particle = verb.startsWith('rul') ? 'out' : WITH_OFF.has(verb) ? 'off' : undefined;
+  if (particle === undefined) return k;
+  for (let j = k + 1; j <= k + 1 + PARTICLE_GAP && j < s.words.length; j += 1) {
+    if (s.words[j]?.segment !== s.words[k]?.segment) return -1;
+    if (s.words[j]?.text === particle) return j;
+  }
+  return -1;
+}
 
 /**
  * How many denials stand before word `i` in its clause, within `window` words and not past a linking
@@ -304,7 +322,7 @@ export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
     const w = s.words[k] as Word;
     // "cannot, by definition, have caused": a denial reaches across a parenthetical comma, not past "so" or "because".
     if (w.clause !== clause || LINKS.has(s.words[k + 1]?.text ?? '') && k + 1 < i) break;
-    const phrasal = DENIALS.has(w.text) && ['off', 'out'].includes(s.words[k + 1]?.text ?? '');
+    const phrasal = DENIALS.has(w.text) && denialParticle(s, k) > k;
     if (k < reach && !(phrasal && k >= i - window - 4)) continue;
     if (phrasal) reach = Math.min(reach, k - 3);
     if (k === s.questionNot) continue;
@@ -319,7 +337,8 @@ export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
     const restricting = s.inside(k, 'exclusive') || (w.text === 'nothing' && (after === 'else' || after === 'but'));
     if (NEGATIONS.has(w.text) && after !== 'only' && !(w.text === 'no' && after === 'doubt') && !restricting && !isAnswerNo(s, k)) count += 1;
     else if (LIMITS.has(w.text) || tooToVerb(s, k, i)) count += 1;
-    else if (DENIALS.has(w.text) && (w.text.startsWith('rul') ? after === 'out' : WITH_OFF.has(w.text) ? after === 'off' : true)) count += 1;
+    // "rules out CO2", "doesn't rule CO2 out as a cause": the particle may follow a short object.
+    else if (DENIALS.has(w.text) && denialParticle(s, k) >= 0) count += 1;
     // "so much for CO2 causing the warming": a dismissal.
     else if (w.text === 'much' && s.words[k - 1]?.text === 'so' && after === 'for') count += 1;
     // "an effect of the warming rather than a cause of it", "instead of driving it": the contrast

@@ -45,6 +45,9 @@ const ELLIPSIS_OPENERS = new Set(['so', 'as', 'nor', 'neither']);
 const ELLIPSIS_AUX = new Set(['did', 'does', 'do', 'was', 'were', 'is', 'are', 'had', 'has', 'have']);
 const ELLIPSIS_CLOSERS = new Set(['too', 'also', 'likewise']);
 
+/** Contrast words that, opening a sentence, link it to the one before ("But the core shows..."). */
+const CONNECTIVES = new Set(['but', 'yet']);
+
 /** Words before "local" or "regional" that put the place away from it ("far from local influences"). */
 const AWAY_FROM = new Set(['far from', 'free of', 'free from', 'away from', 'immune to', 'shielded from', 'sheltered from']);
 
@@ -106,9 +109,14 @@ function detectRegional(input: DetectInput): Cue[] {
     return records.length === 0 && (copula || same) && recordIn(before);
   };
   // "Earth's changing orbit": a globe that owns an entity is no temperature of the globe.
-  const global = s.of('regions', 'global').filter((g) => !regionOwnsEntity(s, g)).find(
-    (g) => anaphoric || attributed || carriedOver(g) || (recordClauses.has(s.words[g.first]?.clause) && readAs(g)) || isotopes.some((w) => s.words[w.first]?.clause === s.words[g.first]?.clause) || (isotopes.length > 0 && readAs(g)),
-  );
+  // Of the globes read as the record, the one nearest a record is what it is read as ("... was 11 °C lower
+  // than now, which is insane the codex calls EPICA Dome C a thermometer for the whole planet").
+  const distance = (g: { first: number }) => (records.length === 0 ? 0 : Math.min(...records.map((r) => Math.abs(r.first - g.first))));
+  const global = s
+    .of('regions', 'global')
+    .filter((g) => !regionOwnsEntity(s, g))
+    .filter((g) => anaphoric || attributed || carriedOver(g) || (recordClauses.has(s.words[g.first]?.clause) && readAs(g)) || isotopes.some((w) => s.words[w.first]?.clause === s.words[g.first]?.clause) || (isotopes.length > 0 && readAs(g)))
+    .reduce<{ first: number; last: number } | undefined>((best, g) => (best === undefined || distance(g) < distance(best) ? g : best), undefined);
   const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text));
   if (global === undefined || !temperature || !(record || carriedOver(global))) return [];
   // "colder than today" compares two times, not the record with the globe: no contrast.
@@ -117,9 +125,27 @@ function detectRegional(input: DetectInput): Cue[] {
   // "than" compares only when a place or a record follows it ("larger than the global mean"); "than it
   // is today", "than before industrialisation" compare two times. "not just Greenland's" widens.
   const places = [...s.of('regions'), ...s.of('entities', 'ice-core'), ...s.of('entities', 'temperature')];
+  // Where the record and the globe stand: a contrast sets them apart only in their segments, between
+  // them, or in a later segment that names a place of its own ("..., while Antarctica swung twice as
+  // far"); "..., so I'd put 9 on the poster, not 6" contrasts two figures, not the record with the globe.
+  const segmentOf = (offset: number) => s.words.find((w) => w.start >= offset)?.segment ?? 0;
+  const standing = [global, ...records].map((r) => s.words[r.first]?.segment ?? 0);
+  const lastStanding = Math.max(...standing);
+  const firstWord = Math.min(...[global, ...records].map((r) => r.first));
   const contrast = findPhrases(sentence, words('contrast')).filter((c) => {
     if (times.some((t) => t.first <= c.first && t.last >= c.last)) return false;
     const phrase = sentence.text.slice(c.start, c.end).toLowerCase();
+    const at = segmentOf(c.start);
+    if (at > lastStanding && !places.some((p) => s.words[p.first]?.segment === at)) return false;
+    // "Sorry but the Vostok core shows...": a "but" before anything is named links the sentence to the
+    // one before; it sets nothing of this sentence apart.
+    const word = s.words.findIndex((w) => w.start >= c.start);
+    if (CONNECTIVES.has(phrase) && word < firstWord && !s.things.some((t) => t.first < word)) return false;
+    // "global temperature and CO2 moved together", "rose together": two curves moving as one, a
+    // co-variation or an order told together, combine no records.
+    if (s.of('correlation').some((h) => h.first <= word && word <= h.last)) return false;
+    if (here.props.orders.some((o) => o.together && o.start <= c.start && c.end <= o.end)) return false;
+    if (s.of('order', 'together').some((t) => t.first === word && s.of('changes').some((m) => m.last === word - 1))) return false;
     const next = s.words.findIndex((w) => w.start >= c.end);
     const previous = s.words.filter((w) => w.end <= c.start).at(-1)?.text;
     if (phrase === 'than') return next >= 0 && places.some((p) => p.first >= next && p.first - next <= 4);
