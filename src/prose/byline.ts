@@ -26,8 +26,8 @@ const WHEN = new RegExp(
 /** One field that counts the writer's posts or the post's standing ("9,870 posts", "♥ 12", "12 votes"). */
 const COUNT = /^(?:[♥❤▲↑+]\s*\d[\d,]*|\d[\d,]*\s+(?:posts?|votes?|points?|likes?|replies|reply|comments?|upvotes?|karma))$/iu;
 
-/** The first field: a name of up to four words or a handle, with no sentence in it. */
-const NAME = /^[@]?[\p{L}\p{N}_.'’-]+(?:\s[\p{L}\p{N}_.'’-]+){0,3}$/u;
+/** The first field: a name of up to four words or a handle, or a name and a handle ("Ana Ruiz @ana_r"), with no sentence in it. */
+const NAME = /^[@]?[\p{L}\p{N}_.'’-]+(?:\s@?[\p{L}\p{N}_.'’-]+){0,3}$/u;
 
 /** Markup and reply marks around a byline: emphasis, a quote mark, a reply arrow. */
 const DECORATION = /^[\s>↳*_]+|[\s*_:]+$/gu;
