@@ -19,7 +19,7 @@ const OPENS_NOT_NAME = /^(?:the|a|an|it|its|it's|this|that|these|those|there|the
  * ends a line (its modifiers and joiners with it), which informal writers put where a full stop
  * would go ("... at the peak of the ice age 🥶\nalso Vostok ...").
  */
-const BOUNDARY = /([.!?…]+|\p{Extended_Pictographic}[\p{Extended_Pictographic}\p{Emoji_Modifier}\u200d\ufe0f]*(?=[ \t]*\n))(["'”’)\]]*)(\s+)/gu;
+const BOUNDARY = /([.!?…]+|\p{Extended_Pictographic}(?:\p{Extended_Pictographic}|\p{Emoji_Modifier}|\u200d|\ufe0f)*(?=[ \t]*\n))(["'”’)\]]*)(\s+)/gu;
 /** An emoji that ends a line: a sentence's end, whatever case the next line opens in. */
 const EMOJI_END = /^\p{Extended_Pictographic}/u;
 
