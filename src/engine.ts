@@ -2,7 +2,7 @@ import { topicalThroughout } from './prose/topical-throughout.js';
 import { bindQuantities, findTerms } from './claims/bind.js';
 import { restoreElidedUnits } from './claims/elided-units.js';
 import { restoreTermUnits } from './claims/term-units.js';
-import { checkArithmetic } from './checks/arithmetic.js';
+import { asksForFigure, checkArithmetic } from './checks/arithmetic.js';
 import { checkRanks } from './checks/rank/index.js';
 import { checkReasoning, judgeByStance, paragraphReader, type ParagraphContext } from './checks/reasoning/index.js';
 import { checkReferences } from './checks/reference.js';
@@ -265,7 +265,9 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       const lead = at === index && index < CONTEXT_SENTENCES && (DIGIT.test(sentence.text) || hasTwoNumerals(sentence.text)) ? leadInHere() : [];
       // A block's first sentence reads on from a sentence that introduces it with a colon as from
       // the sentence before it in its own paragraph (a list after its lead-in sentence).
-      const previousOnTopic = (): boolean => inWindow && topic.test(window[at - 1] ?? (index === 0 ? introOf(lead, block.kind === 'list-item') : undefined) ?? '');
+      // So does an answer from the question above it that asks for a figure (a quiz's "How far below
+      // today was sea level ...?" over "About 120 metres.").
+      const previousOnTopic = (): boolean => inWindow && topic.test(window[at - 1] ?? (index === 0 ? (introOf(lead, block.kind === 'list-item') ?? questionOf(lead)) : undefined) ?? '');
       const reading = assertedWindowOf(index).window;
       const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic, here, previousOnTopic, lead, reading) : examineCached(window, at, packs, onTopic, here, previousOnTopic, lead, reading);
       if (found === undefined) return;
@@ -456,6 +458,19 @@ function examineSentence(
 }
 
 const DIGIT = /\d/u;
+
+/** A sentence that ends as a question, past closing quotes, brackets and emphasis marks. */
+const QUESTION = /\?[\s"'”’)*_]*$/u;
+
+/**
+ * The question a block answers: the last sentence of its lead-in when it asks for a figure ("How
+ * far below today was sea level at the height of the last ice age?" over "About 120 metres."). The
+ * answer reads on from it as a list item reads on from the sentence ending in a colon above it.
+ */
+function questionOf(leadIn: readonly string[]): string | undefined {
+  const last = leadIn.at(-1);
+  return last !== undefined && QUESTION.test(last) && asksForFigure(last) ? last : undefined;
+}
 
 /**
  * The sentence a sentence reads on from: the one before it in its paragraph; for a block's first

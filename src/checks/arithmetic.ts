@@ -44,7 +44,7 @@ function askedBefore(context: readonly string[]): readonly string[] | undefined 
 }
 
 /** True when a question asks for a figure: "how long", "by how much", "what was the average rate?" (word-classes.ts). */
-function asksForFigure(question: string): boolean {
+export function asksForFigure(question: string): boolean {
   const words = wordsIn(question, 0, question.length);
   return words.some((x, i) => (x.text === 'how' && WORDS.askedMeasures.has(words[i + 1]?.text ?? '')) || WORDS.askedNouns.has(x.text));
 }

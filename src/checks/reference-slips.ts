@@ -24,7 +24,8 @@ import { relativeDistance } from './reference-distance.js';
 /** The units a writer confuses within one dimension, as unit-table ids. */
 export const CONFUSED_UNITS: readonly { dimension: Dimension; units: readonly string[] }[] = [
   { dimension: 'length', units: ['m', 'ft', 'km', 'mi'] },
-  { dimension: 'temperature-change', units: ['K', 'degC', 'degF'] },
+  // °C before K: a difference meant in Celsius is shown as a writer writes it (a difference of 1 °C is 1 K).
+  { dimension: 'temperature-change', units: ['degC', 'K', 'degF'] },
   { dimension: 'concentration', units: ['%', 'permille', 'ppm', 'ppb'] },
   // Years, thousands and millions of years: the thousand-fold ladder of a time.
   { dimension: 'duration', units: ['yr', 'kyr', 'Myr'] },
@@ -64,12 +65,15 @@ const NEAR_MIN_DISTANCE = 0.3;
 /**
  * How far outside its reference a figure on the reference's best estimate must be: when the number as
  * written (without its hedge) read in the other unit holds the best estimate itself, and is a precise
- * figure (its reading no wider than half the reference range), a chance fit is unlikely, and a figure
- * a little outside the range is enough: "around 18 °C" of Greenland warming is 18 °F, 9.7-10.3 °C,
- * on the central 10 °C of 6-14 °C. "About two kilometres" of a 3,623 m core read as miles (2.4-4.0 km)
- * holds the figure only because "two" is coarse, and stays a wrong value.
+ * figure (its reading no wider than half the reference range), the number is the reference's own and
+ * only its unit is wrong, so any distance outside the range is enough: "around 18 °C" of Greenland
+ * warming is 18 °F, 9.7-10.3 °C, on the central 10 °C of 6-14 °C; "about 10 °F" of it is 10 °C written
+ * as °F (5.6 °C, just under 6 °C); "some 22 °F" of Greenland's glacial cooling is the central 22 °C
+ * written as °F (12.2 °C against 15-25 °C). A figure inside the range is never a slip (distance 0).
+ * "About two kilometres" of a 3,623 m core read as miles (2.4-4.0 km) holds the figure only because
+ * "two" is coarse, and stays a wrong value.
  */
-const NEAR_MIN_DISTANCE_ON_BEST = 0.1;
+const NEAR_MIN_DISTANCE_ON_BEST = 0;
 
 function nearMinDistance(q: Quantity, reading: Reading, r: Pick<ReferenceValue, 'central' | 'low' | 'high'>): number {
   if (r.central === undefined || reading.read === undefined) return NEAR_MIN_DISTANCE;
@@ -105,6 +109,9 @@ export function unitSlip(r: Pick<ReferenceValue, 'low' | 'high' | 'unit' | 'cent
   if (q.statedUnit === 'CE' || q.unit === '') return undefined;
   for (const reading of readingsOf(q)) {
     if (!(reading.low <= r.high && r.low <= reading.high)) continue;
+    // "probably under 400 years" is 0-400 years; read in kyr it overlaps any span up to 400,000
+    // years. The number as written, without its hedge or bound, must fit in the other unit too.
+    if (reading.read !== undefined && !writtenFits(q, reading.read, r)) continue;
     if (reading.ratio < NEAR_RATIO && !(nearFits(q, reading, r) && relativeDistance(q.low, q.high, r) >= nearMinDistance(q, reading, r))) continue;
     return { what: reading.what, correction: reading.shown(reading.value), low: reading.low, high: reading.high };
   }
@@ -126,6 +133,13 @@ function nearFits(q: Quantity, reading: Reading, r: Pick<ReferenceValue, 'low' |
   // as 9 °F (4.7-5.3 °C) misses Annan et al.'s 4.5 °C and stays a wrong figure.
   const best = r.central ?? middle;
   return low <= middle + quarter && middle - quarter <= high && reading.low <= best && best <= reading.high;
+}
+
+/** Whether the number as written (writtenInterval: no hedge, no bound), read by `read`, overlaps the reference. */
+function writtenFits(q: Quantity, read: (x: number) => number, r: Pick<ReferenceValue, 'low' | 'high'>): boolean {
+  const w = writtenInterval(q);
+  const [low, high] = [read(w.low), read(w.high)].sort((a, b) => a - b) as [number, number];
+  return low <= r.high && r.low <= high;
 }
 
 /** Every other reading of `q`'s number, in the order tried. */

@@ -26,6 +26,7 @@ import { isDeniedFigure } from './denied-figure.js';
 import { datedAfterReplacement } from './dated-after.js';
 import { endpointPairs } from '../claims/bind-role.js';
 import { statesRange } from '../quantities/range-ends.js';
+import { findRestatements } from './units-pairs.js';
 
 /** The pack term whose words mark a claim about the present ("today", "now"...). */
 export const TODAY_TERM = 'today';
@@ -37,9 +38,16 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
   let aboutToday: boolean | undefined;
   // "never got above 250 ppm": a number stated as a bound is the extreme itself (claims/bind-bound.ts).
   const bounds = bindings.length === 0 ? [] : boundReadings(sentence, quantities, packs, findTerms(sentence, packs));
+  const shares = bindings.length === 0 ? new Set<Quantity>() : restatedShares(sentence, quantities);
   for (const binding of bindings) {
     const stated = quantities[binding.quantityIndex];
     const r = packs.reference(binding.referenceId);
+    // "420 ppm is only 0.042% of the air", "past 420 ppm (about 0.042 percent)": the share restates
+    // the level beside it; the unit check holds it to that level, whose own value check speaks for both.
+    if (stated !== undefined && shares.has(stated)) {
+      verdicts.push('no reference');
+      continue;
+    }
     // "In 2023 the global average was around 410 ppm": one year's measurement leaves little slack.
     const dated = stated === undefined || r === undefined || !isOneYearMeasurement(r, packs) ? stated : { ...stated, ...oneYearInterval(stated) };
     const q = dated === undefined || bounds[binding.quantityIndex] === undefined ? dated : { ...dated, ...boundInterval(dated) };
@@ -114,6 +122,16 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     });
   }
   return { flags, verdicts };
+}
+
+/** The percentages of a sentence that restate a CO2 level in ppm beside them (units-pairs.ts). */
+function restatedShares(sentence: string, quantities: Quantity[]): Set<Quantity> {
+  const shares = new Set<Quantity>();
+  for (const { first, second } of findRestatements(sentence, quantities)) {
+    if (first.dimension === 'concentration' && second.dimension === 'percent') shares.add(second);
+    if (first.dimension === 'percent' && second.dimension === 'concentration') shares.add(first);
+  }
+  return shares;
 }
 
 /**

@@ -86,7 +86,25 @@ const scaleOf = (q: Quantity): string => /(?:thousand|million|billion|trillion)/
 const SCALE_JOINER = new RegExp(String.raw`^(?:${S}+(?:old|long))?${S}*(?:\(|\[|,?${S}*or${S}+|,?${S}*i\.e\.,?${S}*|,?${S}*that is,?${S}*|=${S}*)$`, 'iu');
 
 /** "are roughly 50 percent higher": a percentage that is a relative change, not the amount again. */
-const relativeChange = (text: string, q: Quantity): boolean => q.dimension === 'percent' && (RELATIVE_AFTER.test(text.slice(q.end)) || shareOfAnother(text, q));
+const relativeChange = (text: string, q: Quantity): boolean =>
+  q.dimension === 'percent' && (RELATIVE_AFTER.test(text.slice(q.end)) || shareOfAnother(text, q) || (CHANGE_OF_BEFORE.test(text.slice(Math.max(0, q.start - 48), q.start)) && !ofTheAir(text, q)));
+
+/** A change named just before a figure, as what the figure is: "a rise of 132 ppm", "the increase, 140 ppm". */
+const CHANGE_OF_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:${CHANGE_SUBJECT_NOUNS.join('|')})(?:${S}+of|${S}*,|${S}+(?:was|is|came${S}+to|comes${S}+to|amounted${S}+to))${S}+(?:(?:about|roughly|around|some|nearly|almost|just|only)${S}+)?$`, 'iu');
+
+/**
+ * "a rise of 132 ppm, or about 32 per cent": a percentage after a change told in ppm is that change
+ * relative to where it started (the arithmetic checks' share of a change), not the change again as
+ * a share of the air.
+ */
+const changeAsShare = (text: string, first: Quantity, second: Quantity): boolean =>
+  first.dimension === 'concentration' && second.dimension === 'percent' && CHANGE_OF_BEFORE.test(text.slice(Math.max(0, first.start - 48), first.start)) && !ofTheAir(text, second);
+
+/** "0.0132 per cent of the air": a percentage that names the air as its whole. */
+function ofTheAir(text: string, q: Quantity): boolean {
+  const m = SHARE_OF.exec(text.slice(q.end));
+  return m !== null && (m[1] ?? '').toLowerCase().split(/[\s\u00A0]+/u).some((w) => AIR_WORDS.test(w.replace(/['’]s$/u, '')));
+}
 
 /** The words after "of" that name a percentage's whole ("of the starting value", "of the air"). */
 const SHARE_OF = new RegExp(String.raw`^${S}*of${S}+((?:[\p{L}'’-]+${S}*){1,5})`, 'iu');
@@ -134,7 +152,16 @@ const sameThing = (a: Quantity, b: Quantity): boolean =>
 function closeDates(a: Quantity, b: Quantity): boolean {
   if (a.dimension !== 'age') return true;
   const [x, y] = [Math.abs(a.value), Math.abs(b.value)].sort((m, n) => m - n) as [number, number];
-  return y <= 2 * x + 100;
+  return y <= 2 * x + 100 || thousandFold(x, y);
+}
+
+/**
+ * A date restated a thousand times too large or too small: the same number with the neighbouring
+ * scale word ("800 ka, is eight hundred million years ago": ka are thousands of years), the slip the
+ * unit checks name (units-scale.ts); no era offset or reference year is ever that far off.
+ */
+function thousandFold(x: number, y: number): boolean {
+  return x > 0 && Math.abs(y / x / 1e3 - 1) < 1e-6;
 }
 
 /**
@@ -191,7 +218,7 @@ export function findRestatements(text: string, qs: Quantity[], previous?: Previo
       continue;
     }
     // "above 420 ppm, roughly 50 percent higher than ...": a relative change is not the amount again.
-    if (relativeChange(text, second) || startsAnEquation(text, second)) continue;
+    if (relativeChange(text, second) || startsAnEquation(text, second) || changeAsShare(text, first, second)) continue;
     if (JOINER.test(gap)) out.push(ordered(first, second, false));
     // "Today's 420 ppm is about 0.042 percent of the air": one amount, the copula, the same amount.
     else if (COPULA_GAP.test(gap) && closeDates(first, second) && !relativeChange(text, second)) out.push(ordered(first, second, true));
@@ -236,7 +263,8 @@ function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentenc
   const original = qs.find((q) => q.start === second.start) ?? second;
   if (found.some((r) => r.second === second || r.first === second)) return undefined;
   // "fifty percent above where it stood in 1750": a relative change, not the amount again.
-  if (second.dimension === 'percent' && RELATIVE_AFTER.test(text.slice(second.end))) return undefined;
+  // "That is a rise of about 32 per cent": after a change noun, too.
+  if (relativeChange(text, second)) return undefined;
   const head = text.slice(0, second.start);
   // "For readers who think in Fahrenheit, that makes it about 43 °F colder": a °F figure that
   // points back restates the last °C or K figure before it.
@@ -245,6 +273,12 @@ function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentenc
   const eraBack = second.dimension === 'age' && ERA_NAMED_BACK.test(head);
   const systemBack = namesSystemBack(head, previous.text) && !qs.some((q) => q !== original && q.dimension === second.dimension);
   if (!OPENING.test(head) || !(LOOSE_END.test(head) || fahrenheitBack || eraBack || systemBack)) return undefined;
+  // "That is a rise of 132 ppm, or about 32 per cent": a figure of the same thing before it in this
+  // sentence is what it restates, if anything, not the last figure of the sentence before.
+  if (qs.some((q) => q.end <= second.start && sameThing(q, first))) return undefined;
+  // "0.042 per cent. (One ppm is one ten-thousandth of one per cent.)": a bracket that opens the
+  // sentence opens an aside; only one right after its figure restates it.
+  if (/^[\s\u00A0]*[([][\s\u00A0]*$/u.test(head)) return undefined;
   // Only a number in this sentence can be flagged here, so it must be the conversion.
   const pair = ordered(first, second, true);
   return pair.second === second ? pair : undefined;

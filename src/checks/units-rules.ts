@@ -172,6 +172,21 @@ function offsetSumSlips(text: string, qs: Quantity[]): UnitFinding[] {
 }
 const eras = (a: Quantity, b: Quantity): Source[] => (a.statedUnit.includes('b2k') || b.statedUnit.includes('b2k') ? [BP_CONVENTION, B2K_CONVENTION] : [BP_CONVENTION]);
 
+/** A date restated a thousand times too large or small: a scale slip, not an era's offset ("800 ka, is eight hundred million years ago"). */
+const scaledApart = (a: Quantity, b: Quantity): boolean => {
+  const [x, y] = [Math.abs(a.value), Math.abs(b.value)].sort((m, n) => m - n) as [number, number];
+  return x > 0 && Math.abs(y / x / 1e3 - 1) < 1e-6;
+};
+
+/** What a date restated in another era should be, and why: the eras' offsets, or the scale of ka and Ma. */
+function eraWhy(a: Quantity, b: Quantity): string {
+  if (scaledApart(a, b)) return `${a.text} is ${formatQuantity(a.value, 'yr BP', 'yr ago')}: ka counts thousands of years and Ma millions (SI prefixes: k = 10^3, M = 10^6), so ${b.text} is a thousand times off.`;
+  return 'BP counts years before AD 1950 and b2k before AD 2000; Y BCE is 1949 + Y years before 1950 (there is no year 0).';
+}
+
+/** The eras' conventions, or the SI prefixes for a thousand-fold slip. */
+const eraSources = (a: Quantity, b: Quantity): Source[] => (scaledApart(a, b) ? [NIST_SP_811] : eras(a, b));
+
 /** The unit rule table. */
 export const UNIT_RULES: readonly UnitRule[] = [
   { id: 'unit.percent-ppm', summary: 'A CO2 level restated between ppm and percent converts at 1% = 10,000 ppm; a CO2 share in percent is a level someone has measured.',
@@ -190,7 +205,7 @@ export const UNIT_RULES: readonly UnitRule[] = [
   { id: 'unit.temperature', summary: 'A temperature reading restated in °F is 1.8 × °C + 32.',
     find: restated(['temperature'], nist, () => 'A temperature reading converts as °F = 1.8 × °C + 32.') },
   { id: 'unit.age-era', summary: 'A date restated in another era converts through years before AD 1950 (BP); b2k counts from AD 2000; there is no year 0.',
-    find: restated(['age'], eras, () => 'BP counts years before AD 1950 and b2k before AD 2000; Y BCE is 1949 + Y years before 1950 (there is no year 0).', () => true, asWrittenDate) },
+    find: restated(['age'], eraSources, eraWhy, () => true, asWrittenDate) },
   { id: 'unit.era-reference-year', summary: 'BP counts years before AD 1950 and b2k years before AD 2000: an age scale defined with the other year shifts every date by 50 years.',
     find: (text, qs) => eraDefinitionSlips(text, qs) },
   { id: 'unit.length', summary: 'A length restated in feet or miles converts at 1 ft = 0.3048 m and 1 mile = 1609.344 m.',

@@ -70,6 +70,9 @@ export function checkUnits(text: string, parsed: Quantity[], context: readonly s
       const single = f.level !== undefined;
       if (!single && !disjoint(f.stated, f.computed)) continue;
       const q: Quantity = f.stated;
+      // One explanation per figure: "800 ka, which is 800 million years ago" is a restatement a
+      // thousand times off (unit.age-era) and a span no core holds (unit.age-scale); the first rule says it.
+      if (flags.some((o) => o.start === q.start && o.end === q.end)) continue;
       const figures = f.figures ?? correctionFigures(q);
       const right = single ? (f.correction ?? q.text) : formatQuantity(f.computed.value, q.unit, q.statedUnit, figures);
       flags.push({

@@ -9,7 +9,11 @@
  * A value's group is a **setting group** when every term of it is a member of one setting kind of
  * the pack's lexicon (`settings`: `time` names periods and events, `place` regions; a term that
  * also names a thing a value measures, listed under `settings.not`, is no setting: "Vostok" is an
- * Antarctic word but a core). Such a group may be filled from the passage's current setting of its
+ * Antarctic word but a core). A group that offers other words beside its setting terms is filled
+ * as one when its setting terms are all of one kind and the sentence is told in the past
+ * (told-in-past.ts; [lgm, glacial, below-present]: a glacial period named before fills it in "Sea
+ * level was about 120 metres lower" as the sentence's own "lower than today" would, not in "sea
+ * level stands 125 metres higher", told from today). Such a group may be filled from the passage's current setting of its
  * kind: the setting terms of the most recent text before the sentence that names one (the sentence
  * before, the earlier sentences of the block, its lead-in, its section heading), when:
  *
@@ -37,6 +41,7 @@ import { CONTEXT_PENALTY, ownSubjects, ownSubjectsServe } from './bind-context.j
 import { canState, nearness } from './bind-match.js';
 import { withoutOthers } from './bind-others.js';
 import { roleFits, type ReadRole } from './bind-role.js';
+import { toldInPast } from './told-in-past.js';
 import type { TermHits } from './bind-view.js';
 
 /** A year or a decade in a sentence: a date of its own ("in 2019", "the 1990s"). */
@@ -113,6 +118,20 @@ function settingOf(group: readonly string[], kinds: SettingKinds): string | unde
   if (group.length === 0) return undefined;
   for (const [kind, members] of kinds) if (group.every((id) => members.has(id))) return kind;
   return undefined;
+}
+
+/**
+ * The kind a missing group may be filled from: a setting group's, or, for a group that offers a
+ * setting or another word for the same thing ([lgm, glacial, below-present]: the glacial low, or a
+ * level told against today's), the kind of its setting terms when they are all of one kind. The
+ * other words are alternatives the sentence did not use; the setting fills the group as one of its
+ * own setting terms would.
+ */
+function fillableKind(group: readonly string[], kinds: SettingKinds): string | undefined {
+  const whole = settingOf(group, kinds);
+  if (whole !== undefined) return whole;
+  const inSome = group.filter((id) => [...kinds.values()].some((m) => m.has(id)));
+  return inSome.length === 0 ? undefined : settingOf(inSome, kinds);
 }
 
 /** The passage's current setting of one kind: the setting terms of the latest text that names one, and all its terms. */
@@ -223,8 +242,12 @@ export function bindFromSetting(
     const missing = r.binding.all.filter((g) => !g.some((id) => view.has(id)));
     if (missing.length === 0 || missing.length === r.binding.all.length) continue;
     // Every missing group a setting group, and at least one group of the value's own not a setting: its measure or subject.
-    const missingKinds = missing.map((g) => settingOf(g, kinds));
+    const missingKinds = missing.map((g) => fillableKind(g, kinds));
     if (missingKinds.some((k) => k === undefined)) continue;
+    // A group that offers other words beside its settings ("lower than today") is filled only in a
+    // sentence told in the past: "At the time of writing, sea level stands some 125 metres higher"
+    // and "sea level has risen some 60 metres since" speak from today, whatever period came before.
+    if (missing.some((g) => settingOf(g, kinds) === undefined) && !toldInPast(sentence)) continue;
     if (!r.binding.all.some((g) => !missing.includes(g) && settingOf(g, kinds) === undefined)) continue;
     const from: TermHits[] = [];
     let filled = 0;

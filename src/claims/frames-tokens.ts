@@ -68,7 +68,9 @@ export function tokenizeSentence(text: string, clauseBreaks: readonly string[], 
     if (!isWord) {
       if (OPENERS.has(raw)) quoted = true;
       else if (CLOSERS.has(raw)) quoted = false;
-      else if (TOGGLES.has(raw)) quoted = !quoted;
+      // "the panels' labels": a straight apostrophe right after a word, outside a quotation, is a
+      // plural's possessive; a quotation opens after a space or a bracket, never inside a word's end.
+      else if (TOGGLES.has(raw) && !(raw === "'" && !quoted && /\p{L}/u.test(text[start - 1] ?? ''))) quoted = !quoted;
       if (CLAUSE_PUNCT.has(raw)) clause += 1;
       tokens.push({ text: raw, root: raw, start, end: start + raw.length, isWord, clause, quoted });
       continue;

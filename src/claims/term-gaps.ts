@@ -21,9 +21,14 @@
  *   compound ("ice age", "sea level") take nothing between them: "the ice core age" is no ice age.
  * - a **particle gap** between a verb and its particle ("back", "up", "out", "off", "down"): an
  *   object pronoun, a short adverb from a closed list, or both ("takes us right back").
+ * - a **clause gap** after "than": the subject pronoun and auxiliary of a comparison clause whose
+ *   verb is left out ("lower than **it does** today", "colder than **it is** now", "lower than
+ *   **they were** at present" for the pack's "lower than today", "lower than at present").
  *
  * Common practice of English grammar (pre-modifiers of a noun; the object of a phrasal verb stands
- * before its particle when it is a pronoun); the lists are closed classes, not sentences.
+ * before its particle when it is a pronoun; a comparison clause after "than" keeps its subject and
+ * auxiliary and drops the rest, "than it does today" = "than today"); the lists are closed classes,
+ * not sentences.
  */
 import { NUMBER_WORDS } from '../quantities/number-words.js';
 import { isWordCode } from '../prose/phrase-trie.js';
@@ -68,10 +73,15 @@ const OBJECT_PRONOUNS = new Set(['us', 'you', 'them', 'me', 'him', 'her', 'it'])
 /** Short adverbs that stand before a particle ("goes all the way back", "reaches right back"). */
 const PARTICLE_ADVERBS = [['all', 'the', 'way'], ['right'], ['straight'], ['way'], ['well'], ['even'], ['much'], ['far'], ['nearly'], ['almost'], ['fully']];
 
+/** Subject pronouns that open a comparison clause after "than" ("than it does today"). */
+const CLAUSE_SUBJECTS = new Set(['it', 'they', 'we', 'he', 'she', 'you', 'i']);
+/** Auxiliaries that stand for a comparison clause's verb ("than it does today", "than they were then"). */
+const CLAUSE_AUXILIARIES = new Set(['is', 'are', 'was', 'were', 'am', 'does', 'do', 'did', 'has', 'have', 'had']);
+
 /** Words a modifier gap may hold at most, in all. */
 const MAX_INSERTED = 2;
 
-type Gap = 'none' | 'modifier' | 'particle';
+type Gap = 'none' | 'modifier' | 'particle' | 'clause';
 
 /** A term phrase with at least one pair of neighbouring words that may take words between them. */
 interface GappedPhrase {
@@ -104,6 +114,7 @@ function modifies(w: string): boolean {
 
 /** What may stand between neighbouring words `a` and `b` of a phrase. */
 function gapBetween(a: string, b: string): Gap {
+  if (a === 'than') return 'clause';
   if (PARTICLES.has(b) && isContent(a)) return 'particle';
   if (isContent(a) && isContent(b) && !PARTICLES.has(a) && modifies(a)) return 'modifier';
   return 'none';
@@ -223,7 +234,7 @@ export class GappedTerms {
         continue;
       }
       const gap = entry.gaps[k - 1];
-      const width = gap === 'modifier' ? this.modifierGap(tokens, at + 1, want, MAX_INSERTED - inserted, taken) : gap === 'particle' ? particleGap(tokens, at + 1, want) : undefined;
+      const width = gap === 'modifier' ? this.modifierGap(tokens, at + 1, want, MAX_INSERTED - inserted, taken) : gap === 'particle' ? particleGap(tokens, at + 1, want) : gap === 'clause' ? clauseGap(tokens, at + 1, want) : undefined;
       if (width === undefined) return undefined;
       inserted += width;
       at += width + 1;
@@ -268,4 +279,12 @@ function particleGap(tokens: readonly Token[], from: number, want: string): numb
     if (adverb.every((w, k) => inside[pronoun + k]?.text === w)) return width;
   }
   return undefined;
+}
+
+/** Two words from `from` that are a comparison clause's subject pronoun and auxiliary before `want` ("than it does today"); undefined for none. */
+function clauseGap(tokens: readonly Token[], from: number, want: string): number | undefined {
+  const [subject, auxiliary, after] = [tokens[from], tokens[from + 1], tokens[from + 2]];
+  if (subject === undefined || auxiliary === undefined || after === undefined) return undefined;
+  if (!subject.joined || !auxiliary.joined || !after.joined || after.text !== want) return undefined;
+  return CLAUSE_SUBJECTS.has(subject.text) && CLAUSE_AUXILIARIES.has(auxiliary.text) ? 2 : undefined;
 }

@@ -14,8 +14,14 @@ const ABBREVIATIONS = new Set([
  */
 const OPENS_NOT_NAME = /^(?:the|a|an|it|its|it's|this|that|these|those|there|they|we|i|you|he|she|but|and|so|yet|or|if|in|on|at|for|from|to|with|as|its|not|no)(?![\p{L}'’])/iu;
 
-/** Sentence-final punctuation, then closing quotes or brackets, then white space. */
-const BOUNDARY = /([.!?…]+)(["'”’)\]]*)(\s+)/gu;
+/**
+ * Sentence-final punctuation, then closing quotes or brackets, then white space; or an emoji that
+ * ends a line (its modifiers and joiners with it), which informal writers put where a full stop
+ * would go ("... at the peak of the ice age 🥶\nalso Vostok ...").
+ */
+const BOUNDARY = /([.!?…]+|\p{Extended_Pictographic}(?:\p{Extended_Pictographic}|\p{Emoji_Modifier}|\u200d|\ufe0f)*(?=[ \t]*\n))(["'”’)\]]*)(\s+)/gu;
+/** An emoji that ends a line: a sentence's end, whatever case the next line opens in. */
+const EMOJI_END = /^\p{Extended_Pictographic}/u;
 
 /**
  * Splits one prose block into sentences with their offsets in the block. A full stop ends a sentence
@@ -146,6 +152,7 @@ function splitLines(sentences: Sentence[], whole: string, blockIndex: number, fr
 
 function endsSentence(text: string, dotAt: number, marks: string, space: string, next: number): boolean {
   if (next >= text.length) return true;
+  if (EMOJI_END.test(marks)) return space.includes('\n');
   if (marks !== '.') return startsSentence(text.slice(next, next + 1));
   const word = /([\p{L}.]+)$/u.exec(text.slice(Math.max(0, dotAt - 12), dotAt))?.[1]?.toLowerCase() ?? '';
   // "about 9 °C.", "by 5 K." and "about 420 kyr." end with a unit symbol, not with "c." (circa), an
