@@ -6,6 +6,7 @@
  *    "The lag rules out carbon dioxide as a driver."                 agent co2, denied
  *    "Orbital changes alone ended the ice ages."                     agent orbit, exclusive
  */
+import { answerCauses, choiceOf } from './answers.js';
 import { phraseWords, type LexHit } from './lexicon.js';
 import { appositionSubject, clauseSubject, kindOf, PREPOSITIONS, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
 import { denialsBefore, NEGATIONS, PARTICIPANTS, type ReadSentence, type Thing } from './sentence.js';
@@ -70,7 +71,11 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     }
     causes.push(...causeAt(s, h, previous));
   }
-  return [...causes, ...identityCauses(s)];
+  const own = [...causes, ...identityCauses(s)];
+  // "Whether the orbit or CO2 ended the ice ages ... It was the orbit, not CO2.": an answer with no
+  // cause word of its own takes the predicate of the choice before it (answers.ts).
+  if (own.length > 0 || previous === undefined) return own;
+  return answerCauses(s, choiceOf(previous, readCauses(previous)));
 }
 
 /** The forms of "do", the verb whose object names a part in a cause ("did the work", "does nothing"). */
