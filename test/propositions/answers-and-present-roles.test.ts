@@ -91,3 +91,34 @@ describe('an effect then, a cause only now', () => {
     expect(flags).toContain('logic.either-or-causation');
   });
 });
+
+describe('one cause named by counting, and a subject set against a rival in an aside', () => {
+  it.each([
+    ['The ice cores show that the ice ages were ended by one thing: rising CO2.', 'logic.single-cause'],
+    ['The last ice age ended because of one thing, stronger summer sunshine from the orbit.', 'logic.single-cause'],
+    ['The glaciations were ended by a single factor: the orbit.', 'logic.single-cause'],
+    // "X, not Y, VERB" after an opening clause of its own: the subject is X, Y is denied.
+    ['Because CO2 lagged Antarctic warming by centuries, the lag shows that orbital forcing, not CO2, explains the deglacial warming.', 'logic.lag-rules-out-cause'],
+    ['Since the gas trailed the warmth, the cores prove that the orbit, rather than CO2, ended the ice ages.', 'logic.lag-rules-out-cause'],
+  ])('%s → %s', async (text, ruleId) => {
+    expect(await serious(text)).toContain(ruleId);
+  });
+
+  it.each([
+    'The ice ages were not ended by one thing: the orbit started the warming and CO2 amplified it.',
+    'The ice ages ended because of more than one thing: the orbit set them off and CO2 spread the warming.',
+    // The rival as a clause of its own, with no comma before its verb, keeps its own subject.
+    'Although the gas trailed the warmth in Antarctica, the orbit, not CO2 alone, set the pace, and CO2 amplified the warming.',
+  ])('stays clean: %s', async (text) => {
+    const flags = await serious(text);
+    expect(flags).not.toContain('logic.single-cause');
+    expect(flags).not.toContain('logic.lag-rules-out-cause');
+  });
+
+  it('keeps a rival that opens its own clause as that clause’s subject', () => {
+    const lexicon = compileLexicon(packs);
+    const s = readSentence('It is temperature that controls CO2, rather than CO2 controlling temperature.', lexicon);
+    const controlling = readCauses(s).find((c) => s.text.slice(c.start, c.end) === 'CO2 controlling');
+    expect(controlling).toMatchObject({ agent: 'co2', patient: 'temperature' });
+  });
+});
