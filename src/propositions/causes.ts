@@ -6,6 +6,7 @@
  *    "The lag rules out carbon dioxide as a driver."                 agent co2, denied
  *    "Orbital changes alone ended the ice ages."                     agent orbit, exclusive
  */
+import { answerCauses, choiceOf } from './answers.js';
 import { phraseWords, type LexHit } from './lexicon.js';
 import { appositionSubject, clauseSubject, kindOf, PREPOSITIONS, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
 import { denialsBefore, NEGATIONS, PARTICIPANTS, type ReadSentence, type Thing } from './sentence.js';
@@ -72,7 +73,11 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     }
     causes.push(...causeAt(s, h, previous));
   }
-  return [...causes, ...identityCauses(s)];
+  const own = [...causes, ...identityCauses(s)];
+  // "Whether the orbit or CO2 ended the ice ages ... It was the orbit, not CO2.": an answer with no
+  // cause word of its own takes the predicate of the choice before it (answers.ts).
+  if (own.length > 0 || previous === undefined) return own;
+  return answerCauses(s, choiceOf(previous, readCauses(previous)));
 }
 
 /** The forms of "do", the verb whose object names a part in a cause ("did the work", "does nothing"). */
@@ -231,7 +236,7 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     // predicate's subject is its copula's, past the asides between them.
     const copula = h.key === 'sufficient' ? linkingVerbOf(s, h) : undefined;
     const predicated = copula === undefined ? undefined : (subjectOf(s, copula) ?? subjectBefore(s, copula));
-    agentThing = predicated ?? subjectBefore(s, h.first) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first) ?? thingBefore(s, h.first, 'clause');
+    agentThing = predicated ?? subjectBefore(s, h.first) ?? setAgainstRival(s, h) ?? subjectOf(s, h.first) ?? clauseSubject(s, h.first) ?? thingBefore(s, h.first, 'clause');
     // "it's the sun doing it, not CO2": a phrase that holds its own object ("do it") takes no other.
     patientThing = s.words[h.last]?.text === 'it' && h.last > h.first ? undefined : thingAfter(s, h.last);
   }
@@ -420,6 +425,28 @@ function contrastedThing(s: ReadSentence, h: LexHit): Thing | undefined {
     const lead = s.words.slice(Math.max(0, t.first - 2), t.first).map((w) => w.text).join(' ');
     return /(?:^|\s)not$|rather than$|instead of$|and not$|but not$/u.test(lead) && !/^(?:only|just|merely)$/u.test(s.words[t.first - 1]?.text ?? '');
   });
+}
+
+/**
+ * "..., the lag shows that orbital forcing, not CO2, explains the warming": the subject is the thing
+ * just before the rival a "not" sets aside between it and the verb, whatever the clause opened with.
+ */
+function setAgainstRival(s: ReadSentence, h: LexHit): Thing | undefined {
+  const rival = contrastedThing(s, h);
+  if (rival === undefined || rival.last >= h.first) return undefined;
+  // The rival is an aside closed by a comma before the verb ("X, not Y, explains"); "rather than CO2
+  // controlling temperature" is a clause of its own whose subject is the rival.
+  if (s.things.some((t) => t.first > rival.last && t.last < h.first)) return undefined;
+  if (!s.text.slice(s.words[rival.last]?.end ?? 0, s.words[h.first]?.start ?? 0).includes(',')) return undefined;
+  let k = rival.first - 1;
+  while (k >= 0 && ['the', 'a', 'an'].includes(s.words[k]?.text ?? '')) k -= 1;
+  const mark = s.words[k]?.text ?? '';
+  if (mark === 'not') k -= 1;
+  else if (mark === 'than' && s.words[k - 1]?.text === 'rather') k -= 2;
+  else if (mark === 'of' && s.words[k - 1]?.text === 'instead') k -= 2;
+  else return undefined;
+  const before = s.things.find((t) => t.last === k && t.kind !== 'pronoun');
+  return before;
 }
 
 /** The thing before the copula that links word `i` (a predicate noun) to its subject. */

@@ -12,6 +12,7 @@ import type { Cause, LexHit, ReadSentence } from '../../propositions/index.js';
 import { opensUtterance } from '../../prose/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
+import { roleKeptForToday } from './role-for-today.js';
 
 const REVERSE = /\b(?:not|never|rather than|instead of)\s+(?:\w+\s+){0,2}(?:the other way (?:round|around|about)|vice versa|the reverse|the opposite way)\b|\b(?:one-way|one way street|only one way)\b/iu;
 
@@ -47,6 +48,9 @@ function detect({ index, own, read }: DetectInput): Cue[] {
   // A list item or a post before this block (its lead-in) is a claim of its own, and answers nothing here.
   const sameVoice = (i: number) => i >= own && !opensUtterance((i > index ? read(i) : here)?.s.text ?? '');
   if ((sameVoice(index - 1) && loopAt(index - 1)) || (sameVoice(index + 1) && loopAt(index + 1))) return [];
+  // "Back then CO2 was a result of the warming; today it's the cause": the cause kept for the present.
+  const today = roleKeptForToday(here, sameVoice(index + 1) ? read(index + 1) : undefined);
+  if (today !== undefined) return [today];
   const frame = framedInWords(here.s, read(index - 1)?.s);
   if (frame !== undefined) return [frame];
   // The answer's own propositions take one side only: "The evidence points to passenger."
