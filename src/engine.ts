@@ -266,8 +266,11 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       // A block's first sentence reads on from a sentence that introduces it with a colon as from
       // the sentence before it in its own paragraph (a list after its lead-in sentence).
       const previousOnTopic = (): boolean => inWindow && topic.test(window[at - 1] ?? (index === 0 ? introOf(lead, block.kind === 'list-item') : undefined) ?? '');
+      // "When did the Pleistocene begin?" then "About 1.8 million years ago.": a block that opens by
+      // answering the question just before it is on the question's topic.
+      const answers = index === 0 && at === index && answersOnTopic(lead, subjects, topic);
       const reading = assertedWindowOf(index).window;
-      const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic, here, previousOnTopic, lead, reading) : examineCached(window, at, packs, onTopic, here, previousOnTopic, lead, reading);
+      const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic || answers, here, previousOnTopic, lead, reading) : examineCached(window, at, packs, onTopic || answers, here, previousOnTopic, lead, reading);
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -443,6 +446,15 @@ function examineSentence(
 
 const DIGIT = /\d/u;
 
+/** The last sentence of a lead-in asks a question on the packs' topic: the block after it answers it. */
+function answersOnTopic(lead: readonly string[], subjects: { test(text: string): boolean }, topic: { test(text: string): boolean }): boolean {
+  const question = lead.at(-1);
+  return question !== undefined && QUESTION_END.test(question) && (subjects.test(question) || topic.test(question));
+}
+
+/** A sentence that ends as a question, before closing quotes, brackets or emphasis marks. */
+const QUESTION_END = /\?[\s"'”’)\]*_]*$/u;
+
 /**
  * The sentence a sentence reads on from: the one before it in its paragraph; for a block's first
  * sentence, the lead-in sentence that introduces the block with a colon (prose/lead-in.ts introOf),
@@ -450,7 +462,12 @@ const DIGIT = /\d/u;
  * before), else the subjects its section heading names.
  */
 function sentenceBefore(paragraph: readonly string[], index: number, leadIn: readonly string[], context: ParagraphContext, packs: LoadedPacks): string | undefined {
-  return index > 0 ? paragraph[index - 1] : (introOf(leadIn, context.blockKind === 'list-item') ?? leadIn.at(-1) ?? headingSubjects(context.heading, packs));
+  if (index > 0) return paragraph[index - 1];
+  // An answer reads on from its whole question: "At Mauna Loa, CO2 peaks each May. What was the May
+  // 2024 average?" sets the place in the sentence before the one that asks.
+  const last = leadIn.at(-1);
+  if (last !== undefined && QUESTION_END.test(last) && leadIn.length > 1) return leadIn.slice(-2).join(' ');
+  return introOf(leadIn, context.blockKind === 'list-item') ?? last ?? headingSubjects(context.heading, packs);
 }
 
 /**
