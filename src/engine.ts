@@ -268,8 +268,11 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       // So does an answer from the question above it that asks for a figure (a quiz's "How far below
       // today was sea level ...?" over "About 120 metres.").
       const previousOnTopic = (): boolean => inWindow && topic.test(window[at - 1] ?? (index === 0 ? (introOf(lead, block.kind === 'list-item') ?? questionOf(lead)) : undefined) ?? '');
+      // "When did the Pleistocene begin?" then "About 1.8 million years ago.": a block that opens by
+      // answering the question just before it is on the question's topic.
+      const answers = index === 0 && at === index && answersOnTopic(lead, subjects, topic);
       const reading = assertedWindowOf(index).window;
-      const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic, here, previousOnTopic, lead, reading) : examineCached(window, at, packs, onTopic, here, previousOnTopic, lead, reading);
+      const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic || answers, here, previousOnTopic, lead, reading) : examineCached(window, at, packs, onTopic || answers, here, previousOnTopic, lead, reading);
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -460,7 +463,7 @@ function examineSentence(
 const DIGIT = /\d/u;
 
 /** A sentence that ends as a question, past closing quotes, brackets and emphasis marks. */
-const QUESTION = /\?[\s"'”’)*_]*$/u;
+const QUESTION = /\?[\s"'”’)\]*_]*$/u;
 
 /**
  * The question a block answers: the last sentence of its lead-in when it asks for a figure ("How
@@ -472,6 +475,12 @@ function questionOf(leadIn: readonly string[]): string | undefined {
   return last !== undefined && QUESTION.test(last) && asksForFigure(last) ? last : undefined;
 }
 
+/** The last sentence of a lead-in asks a question on the packs' topic: the block after it answers it. */
+function answersOnTopic(lead: readonly string[], subjects: { test(text: string): boolean }, topic: { test(text: string): boolean }): boolean {
+  const question = lead.at(-1);
+  return question !== undefined && QUESTION.test(question) && (subjects.test(question) || topic.test(question));
+}
+
 /**
  * The sentence a sentence reads on from: the one before it in its paragraph; for a block's first
  * sentence, the lead-in sentence that introduces the block with a colon (prose/lead-in.ts introOf),
@@ -479,7 +488,12 @@ function questionOf(leadIn: readonly string[]): string | undefined {
  * before), else the subjects its section heading names.
  */
 function sentenceBefore(paragraph: readonly string[], index: number, leadIn: readonly string[], context: ParagraphContext, packs: LoadedPacks): string | undefined {
-  return index > 0 ? paragraph[index - 1] : (introOf(leadIn, context.blockKind === 'list-item') ?? leadIn.at(-1) ?? headingSubjects(context.heading, packs));
+  if (index > 0) return paragraph[index - 1];
+  // An answer reads on from its whole question: "At Mauna Loa, CO2 peaks each May. What was the May
+  // 2024 average?" sets the place in the sentence before the one that asks.
+  const last = leadIn.at(-1);
+  if (last !== undefined && QUESTION.test(last) && leadIn.length > 1) return leadIn.slice(-2).join(' ');
+  return introOf(leadIn, context.blockKind === 'list-item') ?? last ?? headingSubjects(context.heading, packs);
 }
 
 /**

@@ -133,7 +133,7 @@ export function mayReferBack(sentence: string, packs: LoadedPacks, before?: stri
 }
 
 /** A sentence that asks: the next one answers it, and its subject is the question's. */
-const ASKS = /\?[\s"'”’)\]]*$/u;
+const ASKS = /\?[\s"'”’)\]*_]*$/u;
 /**
  * A sentence that ends in a colon introduces what follows (a list, its items): each item is elliptic,
  * the measure or the subject the lead-in names is its own. The sentence splitter ends no sentence at a

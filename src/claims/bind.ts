@@ -463,6 +463,13 @@ export function bindQuantities(
     if (b === undefined) return;
     ownWords(views, j, b.span);
     const own = views[j] as TermHits;
+    // "CO2 never fell below about 220 ppm": the verb of a bound states the extreme, not a change, so
+    // the words inside it name no other term for its number (and veto none of its values).
+    for (const [id, spans] of own) {
+      const outside = spans.filter(([s0, e0]) => s0 < b.span[0] || e0 > b.span[1]);
+      if (outside.length === 0) own.delete(id);
+      else if (outside.length < spans.length) own.set(id, outside);
+    }
     own.set(BOUND_TERMS[b.kind], [...(own.get(BOUND_TERMS[b.kind]) ?? []), b.span]);
   });
   // "~100,000 years (orbit shape), 41,000 (tilt) and 23,000 (precession)": a parenthesis right after a

@@ -157,5 +157,41 @@ export function findAtoms(text: string): Atom[] {
     const prev = kept[kept.length - 1];
     if (prev === undefined || atom.start >= prev.end) kept.push(atom);
   }
-  return kept;
+  return fractionsOfScales(text, kept);
 }
+
+/**
+ * A fraction of a scale word, read as one number (common practice of English):
+ *
+ *   "around two-thirds of a million years ago"   "a quarter of a million years"
+ *           ^^^^^^^^^^^^^^^^^^^^^^^^^ 666,667             ^^^^^^^^^^^^^^^^^^^^^^^ 250,000
+ *
+ * The fraction alone is a multiplier and "a million" a number of its own; read apart, the sentence
+ * would state a million years. The whole is read to two digits of the scale, as "half a million" is.
+ */
+function fractionsOfScales(text: string, atoms: Atom[]): Atom[] {
+  const out: Atom[] = [];
+  for (let i = 0; i < atoms.length; i += 1) {
+    const part = atoms[i] as Atom;
+    const whole = atoms[i + 1];
+    const joined =
+      whole !== undefined &&
+      part.form === 'multiplier' &&
+      part.value > 0 &&
+      part.value < 1 &&
+      whole.form === 'words' &&
+      whole.scale >= 1000 &&
+      whole.value === whole.scale &&
+      OF_ONE.test(text.slice(part.end, whole.start + 3));
+    if (!joined) {
+      out.push(part);
+      continue;
+    }
+    out.push({ ...whole, start: part.start, value: part.value * whole.scale, half: whole.scale * 0.005 });
+    i += 1;
+  }
+  return out;
+}
+
+/** What joins a fraction to the scale it is of: "of a", "of an", "of one". */
+const OF_ONE = /^[\s\u00A0]+of[\s\u00A0]+(?:a|an|one)(?![\p{L}])/iu;

@@ -92,6 +92,8 @@ export function readNumberWords(tokens: readonly string[]): WordNumber | undefin
     } else if (w === 'half') {
       const next = tokens[i + 1];
       if (last === 'none' && (next === 'a' || next === 'an') && isScale(tokens[i + 2])) current = 0.5;
+      // "a million and a half": half of the scale just read; "two and a half": half of one.
+      else if (last === 'article' && tokens[i - 2] === 'and' && current === 0 && lastScale !== Infinity) total += lastScale / 2;
       else if (last === 'article' && tokens[i - 2] === 'and') current += 0.5;
       else break;
       last = 'half';

@@ -65,6 +65,6 @@ describe('predicates that share a subject', () => {
 
   it('flags the end of the deglaciation given in a coordinated clause', async () => {
     const result = await checkText('The last ice age began to fade 18,000 years ago and was over by 3,000 years ago.\n');
-    expect(result.flags.map((f) => [f.ruleId, f.excerpt, f.correction])).toEqual([['value.termination-1-end', '3,000 years ago', 'about 11,500 years ago']]);
+    expect(result.flags.map((f) => [f.ruleId, f.excerpt, f.correction])).toEqual([['value.termination-1-end', '3,000 years ago', 'about 11,500 to 11,700 years ago']]);
   });
 });

@@ -40,6 +40,6 @@ describe('a glacial period named in other words', () => {
   it('flags glacial CO2 given at an interglacial level, with the glacial range as correction', async () => {
     // Lüthi et al. 2008: glacial minima about 172-200 ppm, so 240 ppm in the coldest spells is wrong.
     const result = await checkText('During the coldest spells, carbon dioxide fell to about 240 parts per million.\n');
-    expect(result.flags.map((f) => [f.ruleId, f.correction])).toEqual([['value.co2-glacial-minimum-typical', 'about 180 to 200 ppm']]);
+    expect(result.flags.map((f) => [f.ruleId, f.correction])).toEqual([['value.co2-glacial-minimum-typical', 'about 190 ppm (180 to 200 ppm)']]);
   });
 });

@@ -34,7 +34,7 @@ export const LABELLED_SET: LabelledSentence[] = [
   s("The Halden Ice Gallery's centrepiece core covers 800,000 years of snowfall.", d('800,000 years', 795000, 805000)),
   s('Our newsletter once said the record spans about 800,000 years.', d('about 800,000 years', 775000, 825000)),
   s('The EPICA Dome C record reaches back roughly 800 kyr.', d('roughly 800 kyr', 775000, 825000)),
-  s('A glacial cycle lasted nearly 100,000 years.', d('nearly 100,000 years', 90000, 100000)),
+  s('A glacial cycle lasted nearly 100,000 years.', d('nearly 100,000 years', 92500, 100000)),
   s('The older cycles lasted some 41,000 years each.', d('some 41,000 years', 39475, 42525)),
   s('Interglacials typically lasted 10,000 to 30,000 years.', d('10,000 to 30,000 years', 10000, 30000)),
   s('The Holocene has lasted more than 11,000 years.', d('more than 11,000 years', 11000, 16500)),
@@ -103,8 +103,8 @@ export const LABELLED_SET: LabelledSentence[] = [
   s('At least 80 ppm separates glacial and interglacial air.', ppm('At least 80 ppm', 80, 160)),
   s('Some 2,500 ppm filled the Eocene air.', ppm('Some 2,500 ppm', 2387.5, 2612.5)),
   s('Less than 300 ppm was normal before industry.', ppm('Less than 300 ppm', 0, 300)),
-  s('Just over 400 ppm was first logged at the station in 2013.', ppm('Just over 400 ppm', 400, 440), age('2013', -63.5, -62.5)),
-  s('The record low was just under 175 ppm.', ppm('just under 175 ppm', 157.5, 175)),
+  s('Just over 400 ppm was first logged at the station in 2013.', ppm('Just over 400 ppm', 400, 415), age('2013', -63.5, -62.5)),
+  s('The record low was just under 175 ppm.', ppm('just under 175 ppm', 170.125, 175)),
   s('CO2 was c. 280 ppm for millennia.', ppm('c. 280 ppm', 268, 292)),
   s('We rounded 278.6 ppm to 280 ppm on the panel.', ppm('278.6 ppm', 278.55, 278.65), ppm('280 ppm', 275, 285)),
   s('The air is ~420 ppm CO2.', ppm('~420 ppm', 404.5, 435.5)),
@@ -130,7 +130,7 @@ export const LABELLED_SET: LabelledSentence[] = [
   s('Glacial Antarctica was 9 ± 1 °C colder.', dT('9 ± 1 °C', 8, 10)),
   s('Temperatures of −30 °C keep the firn dry.', T('−30 °C', -30.5, -29.5)),
   s('The air there was -40 °C, or -40 °F.', T('-40 °C', -40.5, -39.5), T('-40 °F', (-40.5 - 32) * (5 / 9), (-39.5 - 32) * (5 / 9))),
-  s('A swing of nearly 10 °C shook Greenland.', dT('nearly 10 °C', 9, 10)),
+  s('A swing of nearly 10 °C shook Greenland.', dT('nearly 10 °C', 9.25, 10)),
   s('Warming of more than 2 °C worries the curators.', dT('more than 2 °C', 2, 3)),
   s('The anomaly reached 0.8 K.', dT('0.8 K', 0.75, 0.85)),
   s('Ice melts at 273.15 K.', T('273.15 K', -0.005, 0.005)),
@@ -206,7 +206,7 @@ export const LABELLED_SET: LabelledSentence[] = [
   s('The pack says 8,000 years, i.e. 8 kyr.', d('8,000 years', 7950, 8050), d('8 kyr', 7500, 8500)),
   // The far end of a from-to pair may carry its own hedge; the near end still takes its unit.
   s('At Halden the panel says CO2 went from about 185 to about 290 ppm.', ppm('about 185', 179.875, 190.125), ppm('about 290 ppm', 277.75, 302.25)),
-  s('The Northmoor log has CO2 going from 190 to nearly 300 ppm.', ppm('190', 185, 195), ppm('nearly 300 ppm', 270, 300)),
+  s('The Northmoor log has CO2 going from 190 to nearly 300 ppm.', ppm('190', 185, 195), ppm('nearly 300 ppm', 287.5, 300)),
   // A calendar year is a date, not the low end of a ppm range: "in 1850 to 300 ppm" is two things.
   // A °F figure after "that is" or "which is" is a difference when its partner is (NIST SP 811: °F interval = 5/9 K).
   s('The Halden guide puts the ice-age world about 6 °C colder than before industry, that is, roughly 43 °F colder.', dT('about 6 °C', 5.35, 6.65), dT('roughly 43 °F', 23.013888889, 24.763888889)),
