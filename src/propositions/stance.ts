@@ -184,9 +184,6 @@ function bareLabel(s: ReadSentence | undefined): 'myth' | 'fact' | undefined {
 function questionStance(s: ReadSentence, context: StanceContext, make: (k: StanceKind, flips?: boolean) => SentenceStance): SentenceStance {
   const first = s.words[0]?.text ?? '';
   if (first === 'q' || isReported(s)) return make('asked');
-  // "That curve is the whole planet's temperature, isn't it?": a tag question asks the listener to
-  // confirm the statement before it, which the speaker holds (English grammar, common practice).
-  if (isTagQuestion(s)) return make('asserted');
   // "the question she hears at every talk: if CO2 rose after ..., how can it be a cause?": a question
   // that a saying's name before a colon introduces is someone's question, set out to be answered.
   const colon = s.text.indexOf(':');
@@ -197,6 +194,10 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   // "[18:21] Jess: no, ...", "↳ @lin: Easily, ...": the answer opens past its speaker's label, and
   // another speaker taking the floor right after a question answers it.
   const answeredNext = next !== undefined && (ANSWER_OPENERS.has(next.words[0]?.text ?? '') || ANSWER_OPENERS.has(next.words[next.opening]?.text ?? '') || anotherVoice(s.text, next.text));
+  // "That curve is the whole planet's temperature, isn't it?": a tag question asks the listener to
+  // confirm the statement before it, which the speaker holds (English grammar, common practice),
+  // unless the next sentence answers it ("Not quite. ..."), as an answered question is.
+  if (isTagQuestion(s) && !answeredNext) return make('asserted');
   // A segment opens a question with a wh-word or an auxiliary, after a joining word if any.
   const opens = (i: number) => {
     const at = JOINS.has(s.words[i]?.text ?? '') ? i + 1 : i;
