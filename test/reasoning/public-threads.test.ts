@@ -4,16 +4,14 @@
  * 20 degrees colder"), a discourse "but" that answers another poster ("Fair enough, but ..."), a
  * figure corrected at the end ("..., not 6"), a closing "that's what the Greenland cores show", a
  * tag question ("..., isn't it?"), the apostrophe left out ("thats", "cant"), the either/or frame
- * standing alone as a reply ("It can't be both."), and a sea-level figure that takes the glacial
- * scene of the post before. Each wording has a correct look-alike that must stay clean. Posts of
- * our own invention.
+ * standing alone as a reply ("It can't be both."). Each wording has a correct look-alike that must
+ * stay clean. Posts of our own invention.
  *
  * Sources: Greenland summit about 20 °C and Antarctica about 8-10 °C colder at the LGM, against a
  * global cooling of about 6 °C (Tierney et al. 2020, Nature 584, 569-573; Jouzel et al. 2007,
  * Science 317, 793-796; Buizert et al. 2021, Science 372, 1097-1101); CO2 and temperature each drove
  * the other in the glacial cycles (Shakun et al. 2012, Nature 484, 49-54; Masson-Delmotte et al.
- * 2013, IPCC AR5 WGI chapter 5); global mean sea level about 120-135 m below present at the LGM
- * (Lambeck et al. 2014, PNAS 111, 15296-15303), so "120 feet" (about 37 m) is a unit slip.
+ * 2013, IPCC AR5 WGI chapter 5).
  */
 import { describe, expect, it } from 'vitest';
 import { checkText } from '../../src/engine.js';
@@ -82,23 +80,5 @@ describe('the either/or frame standing alone as a reply', () => {
     'The cores hold CO2 and dust. Which of the two is easier to measure depends on the lab.',
   ])('leaves clean: %s', async (text) => {
     expect(await rulesOf(text)).not.toContain(EITHER_OR);
-  });
-});
-
-describe('a glacial sea-level figure that takes its scene from the post before', () => {
-  it.each([
-    'The coldest part of the last ice age was about 21,000 years ago. Sea level was about 120 feet lower, so you could have walked to the island.',
-    'The last ice age peaked about 21,000 years ago. Sea level was about 50 metres lower.',
-  ])('flags: %s', async (text) => {
-    const rules = await rulesOf(text);
-    expect(rules.some((r) => r === 'unit.scale-slip' || r === 'value.lgm-sea-level-lowstand')).toBe(true);
-  });
-
-  it.each([
-    'The last ice age peaked about 21,000 years ago. Sea level was about 125 metres lower.',
-    'Ice sheets were at their largest then. Sea level was roughly 400 feet lower.',
-    'CO2 was far lower than today, about 190 ppm. Sea level stood about 130 m lower.',
-  ])('leaves clean: %s', async (text) => {
-    expect(await rulesOf(text)).toEqual([]);
   });
 });

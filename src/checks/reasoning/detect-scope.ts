@@ -104,11 +104,11 @@ function detectRegional(input: DetectInput): Cue[] {
     const all = s.words.filter((w) => w.segment === segment);
     const own = /^(?:and|but|yet)$/u.test(all[0]?.text ?? '') ? all.slice(1) : all;
     const opener = own[0]?.text ?? '';
-    const copula = (opener === 'that' || opener === 'this') && /^(?:is|was)$/u.test(own[1]?.text ?? '');
+    // "so thats how much the whole planet warmed": the demonstrative copula after an inference word too.
+    const body = INFERENCE.has(opener) ? own.slice(1) : own;
+    const copula = (body[0]?.text === 'that' || body[0]?.text === 'this') && /^(?:is|was)$/u.test(body[1]?.text ?? '');
     const same = own.some((w) => w.text === 'same');
-    // "so thats how much the whole planet warmed": a change of temperature told as a verb counts too.
-    const changes = [...s.of('changes', 'warm'), ...s.of('changes', 'cool')].some((h) => s.words[h.first]?.segment === segment);
-    const inference = INFERENCE.has(opener) && (changes || own.some((w) => /^\d/u.test(w.text) || TEMPERATURE_WORDS.test(w.text)));
+    const inference = INFERENCE.has(opener) && own.some((w) => /^\d/u.test(w.text) || TEMPERATURE_WORDS.test(w.text));
     // "..., so did the planet", "as did the whole Earth", "and the globe did too": an elliptic clause
     // whose subject is the globe repeats the record's own change for it.
     const elliptic = (ELLIPSIS_OPENERS.has(opener) && ELLIPSIS_AUX.has(own[1]?.text ?? '')) || (ELLIPSIS_AUX.has(own.at(-2)?.text ?? '') && ELLIPSIS_CLOSERS.has(own.at(-1)?.text ?? ''));
