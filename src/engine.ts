@@ -16,7 +16,8 @@ import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/i
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
 import { introOf, leadInOf } from './prose/lead-in.js';
-import { entityWordsOf, subjectWordsOf } from './propositions/index.js';
+import { classWordsOf, entityWordsOf, subjectWordsOf } from './propositions/index.js';
+import { tokenizeSentence } from './claims/frames-tokens.js';
 import { parseQuantities } from './quantities/index.js';
 import { claimIdOf, foldClaimText } from './review/claim-id.js';
 import { describeRule, loadPacks } from './rulepack/index.js';
@@ -258,7 +259,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       // ("the air in the bubbles", "seawater"), counts only where the sentence's window, or a block
       // beside its block, names a subject.
       const inWindow = nextTo || named(index - at, window.length);
-      const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text))) || answersQuestion(sentence.text, () => (at > 0 ? window[at - 1] : index === 0 ? leadInHere().at(-1) : undefined), (t) => subjects.test(t));
+      const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text) || standsAloneAsFrame(sentence.text, packs))) || answersQuestion(sentence.text, () => (at > 0 ? window[at - 1] : index === 0 ? leadInHere().at(-1) : undefined), (t) => subjects.test(t));
       // A block's first sentence reads on from the blocks just before it in the reasoning checks too.
       const here = at === index ? (index === 0 ? withLeadIn(opening, leadInHere()) : opening) : context;
       // The first sentences of a block read on from the blocks just before it (its lead-in).
@@ -638,6 +639,24 @@ function factMatcherOf(packs: LoadedPacks): TopicMatcher {
     factMatchers.set(packs, matcher);
   }
   return matcher;
+}
+
+const frameMatchers = new WeakMap<LoadedPacks, TopicMatcher>();
+
+/**
+ * The frames of a reasoning check that stand as a sentence of their own in a thread, with no subject
+ * word: the either/or frame ("It can't be both.", "cant be both, pick one": lexicon
+ * `causes.either-or`). Read in the words as the tokenizer cuts them, so "can't" and "cant" are
+ * "can not" as the lexicon writes it; only where the sentence's window names a subject.
+ */
+function standsAloneAsFrame(text: string, packs: LoadedPacks): boolean {
+  let matcher = frameMatchers.get(packs);
+  if (matcher === undefined) {
+    matcher = createTopicMatcher(classWordsOf(packs.lexicon, 'causes', ['either-or']));
+    frameMatchers.set(packs, matcher);
+  }
+  const words = tokenizeSentence(text, [], null);
+  return matcher.test(words.words.map((i) => words.tokens[i]?.text ?? '').join(' '));
 }
 
 /** The lexicon entity keys a direction fact's form names. */

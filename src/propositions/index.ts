@@ -12,7 +12,7 @@ import type { ReadSentence } from './sentence.js';
 import type { SentenceStance } from './stance.js';
 import type { Cause, Propositions } from './types.js';
 
-export { compileLexicon, compile, formsOf, phraseWords, subjectWordsOf, entityWordsOf, type CompiledLexicon, type LexHit } from './lexicon.js';
+export { compileLexicon, compile, formsOf, phraseWords, subjectWordsOf, entityWordsOf, classWordsOf, type CompiledLexicon, type LexHit } from './lexicon.js';
 export { readSentence, type ReadSentence, type Word, type Thing } from './sentence.js';
 export { isOwnClaim, stanceOf, STANCES, type SentenceStance, type StanceContext, type StanceKind } from './stance.js';
 export type * from './types.js';

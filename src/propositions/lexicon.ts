@@ -245,6 +245,12 @@ export function entityWordsOf(lexicon: Lexicon, keys: readonly string[]): string
   return formsOfPhrases(Object.entries(lexicon['entities'] ?? {}).filter(([key]) => wanted.has(key)).flatMap(([, words]) => words));
 }
 
+/** The written forms of the phrases of lexicon class `cls` under `keys` ("causes", ["either-or"]). */
+export function classWordsOf(lexicon: Lexicon, cls: string, keys: readonly string[]): string[] {
+  const wanted = new Set(keys);
+  return formsOfPhrases(Object.entries(lexicon[cls] ?? {}).filter(([key]) => wanted.has(key)).flatMap(([, words]) => words));
+}
+
 function formsOfPhrases(phrases: readonly string[]): string[] {
   // "that glacial max": a clipped word names the subject as the whole word does (claims/term-variants.ts).
   // A form of two or three words is also written as a compound ("the ice-age globe"): the words of a

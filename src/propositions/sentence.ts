@@ -71,7 +71,8 @@ const LINKS = new Set(['so', 'therefore', 'thus', 'hence', 'because', 'since', '
 /** Words after which "that" opens a clause of its own ("shows that temperature drives CO2"). */
 const COMPLEMENT_TAKERS = /^(?:show|prove|mean|say|said|know|knew|think|thought|argue|claim|suggest|find|found|note|clear|plain|true|evident|obvious|likely|so|insist|assert|believe|tell|told|demonstrate|confirm|establish|reveal|indicate|impl(?:y|ies|ied)|conclude|maintain|contend|write|wrote|hear|heard|fact|idea|notion|view|belief|myth|argument|sure|certain|agree|recogni[sz]e|shown|proof|evidence|sign|means)\w*$/u;
 /** Pronouns whose "'s" is "is": "that's global temperature". */
-const COPULA_CONTRACTION = /^(that|this)'s$/u;
+// "thats" is the same contraction with the apostrophe left out, as informal posts write it.
+const COPULA_CONTRACTION = /^(that|this)'s$|^(that)s$/u;
 const AUXILIARIES = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const PRONOUNS = new Set(['it', 'they', 'this', 'that', 'these', 'those', 'its', 'their']);
 /** Pronouns that are a determiner when a thing follows them ("this wobble", "those glaciations"). */
@@ -119,8 +120,9 @@ export function readSentence(text: string, lexicon: CompiledLexicon): ReadSenten
     pendingBreak = false;
     lastClause = token.clause;
     const word = { start: token.start, end: token.end, clause: token.clause, segment, quoted: token.quoted };
-    if (copula?.[1] === undefined) words.push({ ...word, text });
-    else words.push({ ...word, text: copula[1], end: token.start + copula[1].length }, { ...word, text: 'is', start: token.start + copula[1].length });
+    const pronoun = copula?.[1] ?? copula?.[2];
+    if (pronoun === undefined) words.push({ ...word, text });
+    else words.push({ ...word, text: pronoun, end: token.start + pronoun.length }, { ...word, text: 'is', start: token.start + pronoun.length });
   }
   // "how on earth could it...": a place after a question word is an intensifier, no region.
   const hits = lexicon.find(words.map((w) => w.text)).filter((h) => h.cls !== 'regions' || !afterQuestionWord(words, h));

@@ -194,6 +194,10 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   // "[18:21] Jess: no, ...", "↳ @lin: Easily, ...": the answer opens past its speaker's label, and
   // another speaker taking the floor right after a question answers it.
   const answeredNext = next !== undefined && (ANSWER_OPENERS.has(next.words[0]?.text ?? '') || ANSWER_OPENERS.has(next.words[next.opening]?.text ?? '') || anotherVoice(s.text, next.text));
+  // "That curve is the whole planet's temperature, isn't it?": a tag question asks the listener to
+  // confirm the statement before it, which the speaker holds (English grammar, common practice),
+  // unless the next sentence answers it ("Not quite. ..."), as an answered question is.
+  if (isTagQuestion(s) && !answeredNext) return make('asserted');
   // A segment opens a question with a wh-word or an auxiliary, after a joining word if any.
   const opens = (i: number) => {
     const at = JOINS.has(s.words[i]?.text ?? '') ? i + 1 : i;
@@ -213,6 +217,31 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   if ((how || negative) && !answeredNext) return { ...make('rhetorical', how), ...premise };
   return { ...make('asked'), ...premise };
 }
+
+/** Pronouns that close a tag question ("isn't it?", "didn't they?"). */
+const TAG_PRONOUNS = new Set(['it', 'they', 'he', 'she', 'we', 'you', 'there', 'that', 'this', 'i']);
+/** Words that make a tag of their own after a statement ("..., right?"). */
+const TAG_WORDS = new Set(['right', 'eh', 'innit', 'yes', 'no', 'correct', 'true']);
+
+/**
+ * A statement closed by a tag: its last segment is an auxiliary, "not" if any, and a pronoun
+ * ("isn't it", "did they", "wasn't there") or a one-word tag ("right"), after a statement that
+ * opens with neither a question word nor an auxiliary.
+ */
+function isTagQuestion(s: ReadSentence): boolean {
+  const last = s.words.at(-1);
+  if (last === undefined || last.segment === 0) return false;
+  const tag = s.words.filter((w) => w.segment === last.segment).map((w) => w.text);
+  const body = s.words.filter((w) => w.segment < last.segment);
+  const opener = body[0]?.text ?? '';
+  if (body.length < 3 || WH.has(opener) || AUX.has(opener) || QUESTION_OPENERS.has(opener)) return false;
+  if (tag.length === 1) return TAG_WORDS.has(tag[0] ?? '');
+  const [aux, second, third] = tag;
+  if (!AUX.has(aux ?? '')) return false;
+  return (tag.length === 2 && TAG_PRONOUNS.has(second ?? '')) || (tag.length === 3 && second === 'not' && TAG_PRONOUNS.has(third ?? ''));
+}
+
+const QUESTION_OPENERS = new Set(['what', 'which', 'who', 'where', 'when', 'whether', 'if']);
 
 /** "how on earth could...", "why in the world would...", "how ever can...": the word past an intensifier after a question word. */
 function pastIntensifier(s: ReadSentence, i: number): number {

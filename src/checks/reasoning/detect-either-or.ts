@@ -51,7 +51,7 @@ function detect({ index, own, read }: DetectInput): Cue[] {
   // "Back then CO2 was a result of the warming; today it's the cause": the cause kept for the present.
   const today = roleKeptForToday(here, sameVoice(index + 1) ? read(index + 1) : undefined);
   if (today !== undefined) return [today];
-  const frame = framedInWords(here.s, read(index - 1)?.s);
+  const frame = framedInWords(here.s, earlierSentences(read, index));
   if (frame !== undefined) return [frame];
   // The answer's own propositions take one side only: "The evidence points to passenger."
   const asserted = new Set(here.props.causes.filter((c) => c.polarity === 'asserted' && c.role !== 'start').map(direction).filter((d) => d !== undefined));
@@ -92,17 +92,38 @@ function joinedByOr(s: ReadSentence, a: Cause, b: Cause): boolean {
   return s.words.some((w) => w.text === 'or' && w.start > from && w.end < to);
 }
 
+/** How far back a frame that names neither side looks for the cause and CO2 it is about. */
+const FRAME_REACH = 6;
+
+/** The sentences before sentence `index` of its paragraph, nearest first, as far as FRAME_REACH. */
+function earlierSentences(read: DetectInput['read'], index: number): ReadSentence[] {
+  const out: ReadSentence[] = [];
+  for (let i = index - 1; i >= 0 && i >= index - FRAME_REACH; i--) {
+    const r = read(i);
+    if (r !== undefined) out.push(r.s);
+  }
+  return out;
+}
+
 /**
  * The either/or frame stated in words (lexicon `causes.either-or`: "which of the two", "the two
- * roles exclude each other"), undenied, about a cause of CO2's: the sentence or the one before
- * names a cause and CO2. "The two roles do not exclude each other" passes.
+ * roles exclude each other", "can't be both"), undenied, about a cause of CO2's: the sentence or one
+ * before it names a cause and CO2. In a thread the frame often stands alone ("It can't be both.",
+ * "its either a cause or an effect, cant be both") and takes its subject from the posts above: the
+ * nearest earlier sentence of the paragraph that names CO2, and a cause there or in between.
+ * "The two roles do not exclude each other" passes.
  */
-function framedInWords(s: ReadSentence, previous: ReadSentence | undefined): Cue | undefined {
+function framedInWords(s: ReadSentence, earlier: readonly ReadSentence[]): Cue | undefined {
   const frame = s.of('causes', 'either-or').find((h) => polarityAt(s, h.first) === 'asserted');
   if (frame === undefined) return undefined;
   const causal = (r: ReadSentence | undefined) => r !== undefined && r.of('causes').some((h) => h.key !== 'either-or' && h.key !== 'passive');
   const co2 = (r: ReadSentence | undefined) => r !== undefined && r.of('entities', 'co2').length > 0;
-  if (!(causal(s) || causal(previous)) || !(co2(s) || co2(previous))) return undefined;
+  if (co2(s)) {
+    if (!causal(s) && !causal(earlier[0])) return undefined;
+  } else {
+    const at = earlier.findIndex(co2);
+    if (at < 0 || (!causal(s) && !earlier.slice(0, at + 1).some(causal))) return undefined;
+  }
   const clause = s.words[frame.first]?.clause;
   const end = s.words.filter((w) => w.clause === clause).at(-1)?.end ?? s.text.length;
   return { start: s.words[frame.first]?.start ?? 0, end };

@@ -37,6 +37,9 @@ const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|
 const ISOTOPES = /^(?:deuterium|isotope|isotopes|δd|δ18o|d18o)$/u;
 const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degrees?|°c|°f|k|cooler|warmer|colder)$/u;
 
+/** Words that open a segment pointing back at the clause before it ("that's what...", "which is what..."). */
+const POINTING_BACK = new Set(['that', 'this', 'which']);
+
 /** Words that open an inference from what comes before ("..., so the whole world..."). */
 const INFERENCE = new Set(['so', 'therefore', 'thus', 'hence', 'meaning', 'consequently']);
 
@@ -78,9 +81,14 @@ function detectRegional(input: DetectInput): Cue[] {
   // is what the record is read as.
   const readAfter = (r: { first: number }) => readFrom.some((w) => w !== undefined && w.segment === s.words[r.first]?.segment && w.start < (s.words[r.first]?.start ?? 0));
   const readFromOnly = records.some(readAfter) && records.every(readAfter);
+  // "..., that's what the Greenland cores show", "which is what Vostok records": a closing segment
+  // that points back with a demonstrative and reads the record after naming it does the same.
   const attributed = readFromOnly || records.some((r) => {
     const segment = s.words.filter((w) => w.segment === s.words[r.first]?.segment);
-    return segment[0]?.text === 'as' && segment.some((w) => READING.test(w.text) && w.text !== 'is' && w.text !== 'was');
+    const reads = (w: { text: string }) => READING.test(w.text) && w.text !== 'is' && w.text !== 'was';
+    if (segment[0]?.text === 'as' && segment.some(reads)) return true;
+    const pointsBack = POINTING_BACK.has(segment[0]?.text ?? '') && (segment[0]?.segment ?? 0) > 0;
+    return pointsBack && segment.some((w) => w.text === 'what') && s.words.slice(r.last + 1).some((w) => w.segment === s.words[r.first]?.segment && reads(w));
   });
   // The record must be read as the globe: both in one segment, or a reading verb between them
   // ("the Vostok core shows that global...", "...is a fair measure of how much the whole Earth warmed").
@@ -99,14 +107,20 @@ function detectRegional(input: DetectInput): Cue[] {
     const all = s.words.filter((w) => w.segment === segment);
     const own = /^(?:and|but|yet)$/u.test(all[0]?.text ?? '') ? all.slice(1) : all;
     const opener = own[0]?.text ?? '';
-    const copula = (opener === 'that' || opener === 'this') && /^(?:is|was)$/u.test(own[1]?.text ?? '');
+    // "so thats how much the whole planet warmed": the demonstrative copula after an inference word too.
+    const body = INFERENCE.has(opener) ? own.slice(1) : own;
+    const copula = (body[0]?.text === 'that' || body[0]?.text === 'this') && /^(?:is|was)$/u.test(body[1]?.text ?? '');
     const same = own.some((w) => w.text === 'same');
     const inference = INFERENCE.has(opener) && own.some((w) => /^\d/u.test(w.text) || TEMPERATURE_WORDS.test(w.text));
     // "..., so did the planet", "as did the whole Earth", "and the globe did too": an elliptic clause
     // whose subject is the globe repeats the record's own change for it.
     const elliptic = (ELLIPSIS_OPENERS.has(opener) && ELLIPSIS_AUX.has(own[1]?.text ?? '')) || (ELLIPSIS_AUX.has(own.at(-2)?.text ?? '') && ELLIPSIS_CLOSERS.has(own.at(-1)?.text ?? ''));
     if (records.some((r) => (s.words[r.first]?.segment ?? 0) < segment)) return copula || same || inference || elliptic;
-    return records.length === 0 && (copula || same) && recordIn(before);
+    // "Greenland was about 20 degrees colder. So the planet as a whole was roughly 20 degrees
+    // colder": an inference that hands the record's own figure, named in the sentence before, to
+    // the globe. A figure of the globe's own ("So the globe cooled about 5") scales, and passes.
+    const handedOn = inference && before !== undefined && sharesFigure(own, before.s);
+    return records.length === 0 && ((copula || same) || handedOn) && recordIn(before);
   };
   // "Earth's changing orbit": a globe that owns an entity is no temperature of the globe.
   // Of the globes read as the record, the one nearest a record is what it is read as ("... was 11 °C lower
@@ -117,8 +131,10 @@ function detectRegional(input: DetectInput): Cue[] {
     .filter((g) => !regionOwnsEntity(s, g))
     .filter((g) => anaphoric || attributed || carriedOver(g) || (recordClauses.has(s.words[g.first]?.clause) && readAs(g)) || isotopes.some((w) => s.words[w.first]?.clause === s.words[g.first]?.clause) || (isotopes.length > 0 && readAs(g)))
     .reduce<{ first: number; last: number } | undefined>((best, g) => (best === undefined || distance(g) < distance(best) ? g : best), undefined);
-  const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text));
-  if (global === undefined || !temperature || !(record || carriedOver(global))) return [];
+  if (global === undefined) return [];
+  // "jumped about 10°C": a figure in a unit of temperature says it, whatever verb goes with it.
+  const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text)) || parseQuantities(input.sentence.text).some((q) => q.dimension.startsWith('temperature'));
+  if (!temperature || !(record || carriedOver(global))) return [];
   // "colder than today" compares two times, not the record with the globe: no contrast.
   const sentence = input.sentence;
   const times = findPhrases(sentence, words('time-comparison'));
@@ -134,7 +150,9 @@ function detectRegional(input: DetectInput): Cue[] {
   const firstWord = Math.min(...[global, ...records].map((r) => r.first));
   const contrast = findPhrases(sentence, words('contrast')).filter((c) => {
     if (times.some((t) => t.first <= c.first && t.last >= c.last)) return false;
-    const phrase = sentence.text.slice(c.start, c.end).toLowerCase();
+    // "isn't": the contraction's "n't" is the phrase "not".
+    const written = sentence.text.slice(c.start, c.end).toLowerCase();
+    const phrase = /^n['’]t$/u.test(written) ? 'not' : written;
     const at = segmentOf(c.start);
     if (at > lastStanding && !places.some((p) => s.words[p.first]?.segment === at)) return false;
     // "Sorry but the Vostok core shows...": a "but" before anything is named links the sentence to the
@@ -149,6 +167,14 @@ function detectRegional(input: DetectInput): Cue[] {
     const next = s.words.findIndex((w) => w.start >= c.end);
     const previous = s.words.filter((w) => w.end <= c.start).at(-1)?.text;
     if (phrase === 'than') return next >= 0 && places.some((p) => p.first >= next && p.first - next <= 4);
+    // "so I'd put 9 on the poster not 6": "not" before a figure after the record and the globe
+    // corrects a figure; it sets no place apart.
+    if (phrase === 'not' && next > Math.max(global.last, ...records.map((r) => r.last)) && figuresIn(s, next, next + 1).length > 0) return false;
+    // "Fair enough, but the Greenland cores show the planet...": a "but" before the record and the
+    // globe both turns against what came before (another post), not one against the other.
+    if (phrase === 'but' && next >= 0 && next <= Math.min(global.first, ...records.map((r) => r.first))) return false;
+    // "..., isn't it?": the "not" of a closing tag question before its last word negates nothing.
+    if (phrase === 'not' && s.question && next === s.words.length - 1) return false;
     if (phrase === 'not' || phrase === 'only') return !/^(?:just|only|merely|simply)$/u.test(s.words[next]?.text ?? '') && previous !== 'not';
     // "doubles as a history of...": serving as, no multiple.
     if (s.words[next]?.text === 'as' && /^doubl/u.test(phrase)) return false;
@@ -179,8 +205,15 @@ function detectRegional(input: DetectInput): Cue[] {
   return [{ start: s.words[global.first]?.start ?? 0, end: s.words[last]?.end ?? 0 }];
 }
 
+/** A figure of `own` (words of the sentence being read) is also one of sentence `before`. */
+function sharesFigure(own: readonly { text: string }[], before: ReadSentence): boolean {
+  const here = figuresIn({ words: own }, 0, own.length);
+  const there = figuresIn(before, 0, before.words.length);
+  return here.some((v) => v !== 1 && there.includes(v));
+}
+
 /** The figures of words `from` to `to` (exclusive) of `s`: digits and numbers in words, each as its value. */
-function figuresIn(s: ReadSentence, from: number, to: number): number[] {
+function figuresIn(s: { words: readonly { text: string }[] }, from: number, to: number): number[] {
   const out: number[] = [];
   for (let i = Math.max(0, from); i < Math.min(to, s.words.length); i++) {
     const text = s.words[i]?.text ?? '';
