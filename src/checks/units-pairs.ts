@@ -274,8 +274,9 @@ function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentenc
   const systemBack = namesSystemBack(head, previous.text) && !qs.some((q) => q !== original && q.dimension === second.dimension);
   if (!OPENING.test(head) || !(LOOSE_END.test(head) || fahrenheitBack || eraBack || systemBack)) return undefined;
   // "That is a rise of 132 ppm, or about 32 per cent": a figure of the same thing before it in this
-  // sentence is what it restates, if anything, not the last figure of the sentence before.
-  if (qs.some((q) => q.end <= second.start && sameThing(q, first))) return undefined;
+  // sentence is what it restates, if anything, not the last figure of the sentence before. A calendar
+  // year names an era's reference ("counting back from 1950, that is 8,250 years BP"), no date restated.
+  if (qs.some((q) => q.end <= second.start && q.statedUnit !== 'CE' && sameThing(q, first))) return undefined;
   // "0.042 per cent. (One ppm is one ten-thousandth of one per cent.)": a bracket that opens the
   // sentence opens an aside; only one right after its figure restates it.
   if (/^[\s\u00A0]*[([][\s\u00A0]*$/u.test(head)) return undefined;

@@ -60,7 +60,10 @@ const restatementsOf = (dimensions: Dimension[], text: string, qs: Quantity[], p
 type Keep = (text: string, r: Restatement) => boolean;
 
 /** How the first figure of a restatement is held: as its interval, or (a date moved between eras) as written. */
-type Held = (first: Quantity, second: Quantity) => { computed: Derived; stated: Derived; figures?: number };
+type Held = (first: Quantity, second: Quantity) => { computed: Derived; stated: Derived; figures?: number; correction?: string };
+
+/** The other SI prefix of an age a thousand times off: ka for Ma, Ma for ka. */
+const SWAPPED_PREFIX: Readonly<Record<string, string>> = { Ma: 'ka', ka: 'Ma' };
 
 const asIntervals: Held = (first, second) => ({ computed: second.dimension === first.dimension ? heldAs(first) : percentOf(first), stated: heldAs(second) });
 
@@ -72,6 +75,9 @@ const asIntervals: Held = (first, second) => ({ computed: second.dimension === f
  * ("11,700 b2k, in other words 11,700 BP") put the offset at zero: both are read as written.
  */
 const asWrittenDate: Held = (first, second) => {
+  // "21,000 years ago, or 21 Ma": the restated figure keeps its digits and takes the other prefix (21 ka).
+  const prefix = SWAPPED_PREFIX[second.statedUnit];
+  if (prefix !== undefined && scaledApart(first, second)) return { computed: asWritten(first), stated: heldAs(second), correction: formatQuantity(first.value, second.unit, prefix) };
   const sameDigits = first.statedUnit !== second.statedUnit && writtenValue(first) === writtenValue(second);
   const computed = asWritten(first);
   if (!sameDigits) return { computed, stated: heldAs(second) };
@@ -103,8 +109,8 @@ const writtenValue = (q: Quantity): number => Math.round(fromCanonical(q.value, 
 function restated(dimensions: Dimension[], sources: (a: Quantity, b: Quantity) => Source[], why: (a: Quantity, b: Quantity) => string, keep: Keep = () => true, held: Held = asIntervals) {
   return (text: string, qs: Quantity[], previous?: PreviousSentence): UnitFinding[] =>
     restatementsOf(dimensions, text, qs, previous).filter((r) => keep(text, r)).map(({ first, second }) => {
-      const { computed, stated, figures } = held(first, second);
-      return { stated: { ...second, ...stated }, computed, reason: why(first, second), sources: sources(first, second), ...(figures === undefined ? {} : { figures }) };
+      const { computed, stated, figures, correction } = held(first, second);
+      return { stated: { ...second, ...stated }, computed, reason: why(first, second), sources: sources(first, second), ...(figures === undefined ? {} : { figures }), ...(correction === undefined ? {} : { correction }) };
     });
 }
 

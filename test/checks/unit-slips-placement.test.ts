@@ -85,6 +85,11 @@ describe('a date restated a thousand times off', () => {
     expect(flags.map(([id]) => id)).toEqual(['unit.age-era']);
   });
 
+  it('corrects a figure written with the wrong prefix to the same digits with the other one', async () => {
+    const flags = await flagsOf('The last ice age peaked around 21,000 years ago, or 21 Ma in the jargon.');
+    expect(flags).toEqual([['unit.age-era', '21 ka']]);
+  });
+
   it("keeps the right restatement clean", async () => {
     expect(await idsOf("The panels' labels use ka, so on the EPICA Dome C chart the far left, 800 ka, is eight hundred thousand years ago.")).toEqual([]);
   });
