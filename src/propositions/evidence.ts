@@ -12,7 +12,7 @@ export function readEvidence(s: ReadSentence, causes: readonly Cause[]): Evidenc
   const out: Evidence[] = [];
   for (const c of s.of('correlation')) {
     if (denialsBefore(s, c.first, 4) % 2 === 1) continue;
-    const proof = s.of('proof').find((p) => p.first > c.last && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first) && !deniedObject(s, p.last));
+    const proof = s.of('proof', 'all').find((p) => p.first > c.last && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first) && !deniedObject(s, p.last));
     if (proof === undefined) continue;
     const proofEnd = s.words[proof.last]?.end ?? 0;
     const cause = causes.find((k) => k.end > proofEnd && k.polarity !== 'open' && k.role !== 'feedback');
@@ -22,7 +22,27 @@ export function readEvidence(s: ReadSentence, causes: readonly Cause[]): Evidenc
     if (end === undefined) continue;
     out.push({ kind: 'evidence', start: s.words[c.first]?.start ?? 0, end });
   }
+  if (out.length === 0) out.push(...causeOnItsGrounds(s, causes));
   return out;
+}
+
+/**
+ * "We know CO2 warms the planet because the two lines go up and down together": an asserted cause,
+ * then a word that gives its ground (lexicon `proof.reasons`), then an undenied co-variation as
+ * that ground, in the reason word's own segment. A ground that is not a co-variation ("because CO2
+ * traps heat, and the curves match") is no such evidence.
+ */
+function causeOnItsGrounds(s: ReadSentence, causes: readonly Cause[]): Evidence[] {
+  // "..., though a match alone proves nothing": the sentence itself denies that the match proves it.
+  if (s.of('proof', 'all').some((p) => deniedObject(s, p.last) || denialsBefore(s, p.first, 4) % 2 === 1)) return [];
+  for (const reason of s.of('proof', 'reasons')) {
+    const at = s.words[reason.first]?.start ?? 0;
+    const cause = causes.find((k) => k.end <= at && k.polarity === 'asserted' && k.role !== 'feedback');
+    if (cause === undefined || hedged(s, reason.first)) continue;
+    const ground = s.of('correlation').find((c) => c.first > reason.last && s.words[c.first]?.segment === s.words[reason.first]?.segment && denialsBefore(s, c.first, 4) % 2 === 0);
+    if (ground !== undefined) return [{ kind: 'evidence', start: cause.start, end: s.words[ground.last]?.end ?? at }];
+  }
+  return [];
 }
 
 /**
@@ -33,7 +53,7 @@ export function readEvidence(s: ReadSentence, causes: readonly Cause[]): Evidenc
 export function proofOfWhatCameBefore(s: ReadSentence, causes: readonly Cause[]): { start: number; end: number } | undefined {
   const pointer = s.words.findIndex((w, i) => i <= 1 && POINTERS.has(w.text));
   if (pointer < 0) return undefined;
-  const proof = s.of('proof').find((p) => p.first > pointer && p.first <= pointer + 4 && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first) && !deniedObject(s, p.last));
+  const proof = s.of('proof', 'all').find((p) => p.first > pointer && p.first <= pointer + 4 && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first) && !deniedObject(s, p.last));
   if (proof === undefined) return undefined;
   const proofEnd = s.words[proof.last]?.end ?? 0;
   const cause = causes.find((k) => k.end > proofEnd && k.polarity === 'asserted' && k.role !== 'feedback');

@@ -39,12 +39,14 @@ describe('the built-in paleoclimate pack', () => {
     // amplification, the pace of the modern rise against the deglacial ones (Marcott et al. 2014),
     // the bipolar seesaw (Pedro et al. 2016). Round 13: Antarctic temperature rose with CO2 or a few
     // centuries before it, not after it (Parrenin et al. 2013, doi 10.1126/science.1226368; Pedro et
-    // al. 2012; Caillon et al. 2003, doi 10.1126/science.1078758).
+    // al. 2012; Caillon et al. 2003, doi 10.1126/science.1078758). Round 14: the Southern Hemisphere
+    // stack warmed before CO2 over the last deglaciation (Shakun et al. 2012, Figure 2b).
     expect(packs.directions.map((d) => d.id)).toEqual([
       'co2-solubility-falls-with-warming',
       'trapped-air-younger-than-ice',
       'global-co2-ahead-of-warming',
       'antarctic-warming-not-behind-co2',
+      'southern-warming-not-behind-co2',
       'polar-swings-exceed-global',
       'co2-forcing-logarithmic',
       'modern-co2-rise-faster-than-natural',

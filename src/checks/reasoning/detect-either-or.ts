@@ -173,7 +173,7 @@ function picksOne(s: ReadSentence, from: number): boolean {
   // The sides as the lexicon names them: temperature (or a warming) and CO2.
   const temperature = [...s.of('entities', 'temperature'), ...s.of('changes', 'warm'), ...s.of('changes', 'cool')].some(after);
   const co2 = s.of('entities', 'co2').some(after);
-  const answered = /[:—–]|\banswers?\b|\bsays?\b/iu.test(rest) || s.of('proof').some(after);
+  const answered = /[:—–]|\banswers?\b|\bsays?\b/iu.test(rest) || s.of('proof', 'all').some(after);
   return temperature !== co2 && answered;
 }
 
