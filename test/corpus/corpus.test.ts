@@ -128,6 +128,17 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-ac-2': { recall: 0.68, falseFlags: 0.05 },
   'tuning-ac-3': { recall: 0.64, falseFlags: 0.08 },
   'tuning-ac-4': { recall: 0.63, falseFlags: 0.06 },
+  // tuning-ad-1..2 were written fresh at that round's start and read to judge each branch before
+  // merging (32/40 and 23/41 caught at the start, 33/40 and 24/41 at the end, false flags 3/80 and
+  // 3/85 throughout). tuning-ae-1..4 were the blind hold-out holdout-r, written at that round's start
+  // and read, totals only, on its first and last code (100/133 and 27/43 caught at the start,
+  // 101/133 and 28/43 at the end; false flags 11/229 then 10/229, and 3/82).
+  'tuning-ad-1': { recall: 0.78, falseFlags: 0.05 },
+  'tuning-ad-2': { recall: 0.54, falseFlags: 0.05 },
+  'tuning-ae-1': { recall: 0.77, falseFlags: 0.05 },
+  'tuning-ae-2': { recall: 0.64, falseFlags: 0.04 },
+  'tuning-ae-3': { recall: 0.73, falseFlags: 0.08 },
+  'tuning-ae-4': { recall: 0.6, falseFlags: 0.05 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -158,12 +169,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (85.1% measured over 72 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (84.8% measured over 82 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.7% measured over 72 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.8% measured over 82 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
