@@ -259,21 +259,22 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
       // ("the air in the bubbles", "seawater"), counts only where the sentence's window, or a block
       // beside its block, names a subject.
       const inWindow = nextTo || named(index - at, window.length);
-      const onTopic = named.at(index) || (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text) || standsAloneAsFrame(sentence.text, packs))) || answersQuestion(sentence.text, () => (at > 0 ? window[at - 1] : index === 0 ? leadInHere().at(-1) : undefined), (t) => subjects.test(t));
-      // A block's first sentence reads on from the blocks just before it in the reasoning checks too.
-      const here = at === index ? (index === 0 ? withLeadIn(opening, leadInHere()) : opening) : context;
       // The first sentences of a block read on from the blocks just before it (its lead-in).
       const lead = at === index && index < CONTEXT_SENTENCES && (DIGIT.test(sentence.text) || hasTwoNumerals(sentence.text)) ? leadInHere() : [];
+      const asked = (): string | undefined => (at > 0 ? window[at - 1] : index === 0 ? leadInHere().at(-1) : undefined);
+      const onTopic =
+        named.at(index) ||
+        (inWindow && (topic.test(sentence.text) || factMatcherOf(packs).test(sentence.text) || standsAloneAsFrame(sentence.text, packs))) ||
+        answersQuestion(sentence.text, asked, index === 0 && lead.length > 0, subjects, topic);
+      // A block's first sentence reads on from the blocks just before it in the reasoning checks too.
+      const here = at === index ? (index === 0 ? withLeadIn(opening, leadInHere()) : opening) : context;
       // A block's first sentence reads on from a sentence that introduces it with a colon as from
       // the sentence before it in its own paragraph (a list after its lead-in sentence).
       // So does an answer from the question above it that asks for a figure (a quiz's "How far below
       // today was sea level ...?" over "About 120 metres.").
       const previousOnTopic = (): boolean => inWindow && topic.test(window[at - 1] ?? (index === 0 ? (introOf(lead, block.kind === 'list-item') ?? questionOf(lead)) : undefined) ?? '');
-      // "When did the Pleistocene begin?" then "About 1.8 million years ago.": a block that opens by
-      // answering the question just before it is on the question's topic.
-      const answers = index === 0 && at === index && answersOnTopic(lead, subjects, topic);
       const reading = assertedWindowOf(index).window;
-      const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic || answers, here, previousOnTopic, lead, reading) : examineCached(window, at, packs, onTopic || answers, here, previousOnTopic, lead, reading);
+      const found = options.reuseSentences === false ? examineSentence(window, at, packs, onTopic, here, previousOnTopic, lead, reading) : examineCached(window, at, packs, onTopic, here, previousOnTopic, lead, reading);
       if (found === undefined) return;
       const { quantities, bindings, verdicts, drafts } = found;
 
@@ -367,14 +368,18 @@ interface SentenceFindings {
 const ANSWER_WORDS = 4;
 
 /**
- * "Q: Is the trapped air older or younger than the ice? A: Older.": a short answer right under a
- * question that names a subject is on that question's topic, though it names none itself.
- * `question` gives the sentence before (the block's lead-in for a block's first sentence).
+ * An answer right under a question is on the question's topic, though it names no subject itself:
+ * a short one ("Q: Is the trapped air older or younger than the ice? A: Older.") under a question
+ * that names a subject, and a block that opens with a figure ("When did the Pleistocene begin?"
+ * then "About 1.8 million years ago.") under one that names a subject or a topic word. `question`
+ * gives the sentence before (the block's lead-in for a block's first sentence).
  */
-function answersQuestion(text: string, question: () => string | undefined, namesSubject: (t: string) => boolean): boolean {
-  if (text.split(/\s+/u).filter((w) => /\p{L}/u.test(w)).length > ANSWER_WORDS) return false;
+function answersQuestion(text: string, question: () => string | undefined, opensWithFigure: boolean, subjects: { test(text: string): boolean }, topic: { test(text: string): boolean }): boolean {
+  const short = text.split(/\s+/u).filter((w) => /\p{L}/u.test(w)).length <= ANSWER_WORDS;
+  if (!short && !opensWithFigure) return false;
   const asked = question();
-  return asked !== undefined && asked.trimEnd().replace(/[*_]+$/u, '').endsWith('?') && namesSubject(asked);
+  if (asked === undefined || !QUESTION.test(asked)) return false;
+  return subjects.test(asked) || (opensWithFigure && topic.test(asked));
 }
 
 /** `context` with the lead-in the reasoning checks read a block's first sentence with, when there is one. */
@@ -474,12 +479,6 @@ const QUESTION = /\?[\s"'”’)\]*_]*$/u;
 function questionOf(leadIn: readonly string[]): string | undefined {
   const last = leadIn.at(-1);
   return last !== undefined && QUESTION.test(last) && asksForFigure(last) ? last : undefined;
-}
-
-/** The last sentence of a lead-in asks a question on the packs' topic: the block after it answers it. */
-function answersOnTopic(lead: readonly string[], subjects: { test(text: string): boolean }, topic: { test(text: string): boolean }): boolean {
-  const question = lead.at(-1);
-  return question !== undefined && QUESTION.test(question) && (subjects.test(question) || topic.test(question));
 }
 
 /**
