@@ -1,6 +1,7 @@
 import { topicalThroughout } from './prose/topical-throughout.js';
 import { bindQuantities, findTerms } from './claims/bind.js';
 import { readAnnualRates } from './claims/annual-rates.js';
+import { readPartitiveCounts } from './claims/partitive-counts.js';
 import { restoreElidedUnits } from './claims/elided-units.js';
 import { restoreTermUnits } from './claims/term-units.js';
 import { asksForFigure, checkArithmetic } from './checks/arithmetic.js';
@@ -451,8 +452,9 @@ function examineSentence(
   // "CO2 was around 350": a bare number after a term the pack gives one unit takes that unit.
   const read = restoreTermUnits(text, restoreElidedUnits(text, parseQuantities(text)), packs);
   // "it rose 1.2 ppm between 2023 and 2024": a change told over one year binds as that year's rate;
-  // the arithmetic and unit checks read the change as written.
-  const quantities = readAnnualRates(text, read, packs);
+  // "one of those cycles lasted ...": a partitive naming members counts no total. The arithmetic and
+  // unit checks read the figures as written.
+  const quantities = readAnnualRates(text, readPartitiveCounts(text, read), packs);
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
   // The texts a description of a kind ("that core", "the cold snap") may take its subject from, oldest first.
   const { bindings } = bindQuantities(text, quantities, packs, previous, historyOf(before, previous, context, packs));
@@ -549,7 +551,7 @@ function subjectsNamed(paragraph: string[], subjects: TopicMatcher): SubjectsNam
  */
 function carriedSubject(text: string, previous: string | undefined, packs: LoadedPacks, before: readonly string[]): SentenceFindings | undefined {
   const read = restoreElidedUnits(text, parseQuantities(text));
-  const quantities = readAnnualRates(text, read, packs);
+  const quantities = readAnnualRates(text, readPartitiveCounts(text, read), packs);
   const { bindings } = bindQuantities(text, quantities, packs, previous);
   if (bindings.length === 0) return undefined;
   const reference = checkReferences(text, quantities, bindings, packs);
