@@ -1,5 +1,7 @@
 import { topicalThroughout } from './prose/topical-throughout.js';
 import { bindQuantities, findTerms } from './claims/bind.js';
+import { readAnnualRates } from './claims/annual-rates.js';
+import { readPartitiveCounts } from './claims/partitive-counts.js';
 import { restoreElidedUnits } from './claims/elided-units.js';
 import { restoreTermUnits } from './claims/term-units.js';
 import { asksForFigure, checkArithmetic } from './checks/arithmetic.js';
@@ -448,13 +450,17 @@ function examineSentence(
   }
   // "four cycles and EPICA Dome C eight": a number whose unit a neighbour states takes that unit;
   // "CO2 was around 350": a bare number after a term the pack gives one unit takes that unit.
-  const quantities = restoreTermUnits(text, restoreElidedUnits(text, parseQuantities(text)), packs);
+  const read = restoreTermUnits(text, restoreElidedUnits(text, parseQuantities(text)), packs);
+  // "it rose 1.2 ppm between 2023 and 2024": a change told over one year binds as that year's rate;
+  // "one of those cycles lasted ...": a partitive naming members counts no total. The arithmetic and
+  // unit checks read the figures as written.
+  const quantities = readAnnualRates(text, readPartitiveCounts(text, read), packs);
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
   // The texts a description of a kind ("that core", "the cold snap") may take its subject from, oldest first.
   const { bindings } = bindQuantities(text, quantities, packs, previous, historyOf(before, previous, context, packs));
   const reference = checkReferences(text, quantities, bindings, packs);
   const reading = paragraphReader(asserted, packs, ownBlock(context))(index);
-  const own = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before), ...checkRanks(text, packs)]);
+  const own = preferSpecific([...reference.flags, ...checkArithmetic(text, read, before), ...checkUnits(text, read, before), ...checkRanks(text, packs)]);
   const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(asserted, index, packs, context)];
   const p = reading?.props;
   // A causal or order statement is a claim to sign off even without a number.
@@ -544,11 +550,12 @@ function subjectsNamed(paragraph: string[], subjects: TopicMatcher): SubjectsNam
  * binds, checked like any other; undefined otherwise.
  */
 function carriedSubject(text: string, previous: string | undefined, packs: LoadedPacks, before: readonly string[]): SentenceFindings | undefined {
-  const quantities = restoreElidedUnits(text, parseQuantities(text));
+  const read = restoreElidedUnits(text, parseQuantities(text));
+  const quantities = readAnnualRates(text, readPartitiveCounts(text, read), packs);
   const { bindings } = bindQuantities(text, quantities, packs, previous);
   if (bindings.length === 0) return undefined;
   const reference = checkReferences(text, quantities, bindings, packs);
-  const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, quantities, before), ...checkUnits(text, quantities, before)]);
+  const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, read, before), ...checkUnits(text, read, before)]);
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }
 

@@ -24,8 +24,11 @@ const LIST_JOIN = /^\s*(?:\([^()]{1,40}\)\s*)?(?:,\s*(?:and\s+|or\s+)?|and\s+|or
 const LABELLED_JOIN = /^\s*\([^()]{1,40}\)\s*(?:,\s*(?:and\s+|or\s+)?|and\s+|or\s+)$/iu;
 const LABEL_AFTER = /^\s*\([^()]{1,40}\)/u;
 const CLAUSE_JOIN = /(?:^|[^\p{L}])(?:and|but|while|whereas)(?![\p{L}])|,/iu;
-/** What may follow the last number of a gapped clause: the end of the clause. */
-const CLAUSE_CLOSE = /^\s*(?:[.;,:!?)]|$|(?:and|but|while|whereas|respectively)(?![\p{L}]))/iu;
+/**
+ * What may follow the last number of a gapped clause: the end of the clause, after a partitive
+ * pronoun that counts the things named before ("and Vostok covers six of them").
+ */
+const CLAUSE_CLOSE = /^(?:\s+of\s+(?:them|those|these))?\s*(?:[.;,:!?)]|$|(?:and|but|while|whereas|respectively)(?![\p{L}]))/iu;
 
 /** "a century or ", "one year or ": an approximate count of the noun named just before. */
 const A_NOUN_OR = /(?:^|[^\p{L}])(?:a|an|one)\s+\p{L}+\s+or\s+$/iu;

@@ -113,9 +113,10 @@ const BASE_UNITS: UnitDef[] = [
   u('mm', 'length', 1e-3, 'mm', ['mm', words('(?:millimetres?|millimeters?)')]),
   u('ft', 'length', 0.3048, 'ft', ['ft', words('(?:feet|foot)')]),
   u('mi', 'length', 1609.344, 'miles', [words('miles?')]),
+  // A partitive counts the same things: "eight of those ice-age cycles", "ten of these cycles".
   u('count', 'count', 1, '', [
     words(
-      '(?:(?:full|major|complete|distinct|separate|great|big|large) )?(?:glacial(?:[-–]| )interglacial (?:cycles?|periods?)|glacial (?:cycles?|periods?)|ice(?:-| )age cycles|ice(?:-| )ages?|glaciations?|interglacials?|glacials|terminations?|cycles)',
+      '(?:of (?:those|these|the|its|their) )?(?:(?:full|major|complete|distinct|separate|great|big|large) )?(?:glacial(?:[-–]| )interglacial (?:cycles?|periods?)|glacial (?:cycles?|periods?)|ice(?:-| )age cycles|ice(?:-| )ages?|glaciations?|interglacials?|glacials|terminations?|cycles)',
     ),
   ]),
   u('ratio', 'ratio', 1, 'times', []),
