@@ -50,6 +50,8 @@ export interface StanceContext {
   heading?: string;
   /** The block carries the deliberate-quotation marker (`<!-- firnline: reported -->`). */
   marked?: boolean;
+  /** A block quote that is a post under its byline (prose/reply-quote.ts): its writer's own voice. */
+  reply?: boolean;
   /** The next sentence of the paragraph, read (it can answer a question or endorse a report). */
   next?: ReadSentence;
   /** The paragraph's first sentence, read, when it is not this one (a block quote's label). */
@@ -98,7 +100,7 @@ function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance
   const make = (kind: StanceKind, flips = false): SentenceStance => ({ kind, endorsed: kind !== 'asserted' && endorsed, flips });
   if (context.marked === true) return make('marked');
   // A block quote that opens with a byline ("BigSkyBarb · 5h") is a reply in a thread, in its writer's voice.
-  if (context.blockKind === 'blockquote' && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
+  if (context.blockKind === 'blockquote' && context.reply !== true && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
   // "**Myth.** CO2 lags, so ...": a label that ends with a full stop is a sentence of its own, and labels the one after it.
   const label = bareLabel(context.previous);
   if (FACT_LABEL.test(s.text) || label === 'fact') return make('asserted');
