@@ -18,6 +18,7 @@ import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/i
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
 import { introOf, leadInOf } from './prose/lead-in.js';
+import { isReplyQuote } from './prose/reply-quote.js';
 import { classWordsOf, entityWordsOf, subjectWordsOf } from './propositions/index.js';
 import { tokenizeSentence } from './claims/frames-tokens.js';
 import { parseQuantities } from './quantities/index.js';
@@ -247,7 +248,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     // the text under it), the reasoning checks and the stance reader read only what it asserts.
     const asserted = sentences.map((s) => (s.label === undefined ? s.text : s.text.slice(0, s.label).replace(/\S/gu, ' ') + s.text.slice(s.label)));
     const assertedWindowOf = paragraphWindows(asserted);
-    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
+    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(isReplyQuote(draft.text, draft.blocks, blockIndex) ? { reply: true } : {}) };
     // The period the blocks just before named sets the scene of this block's opening sentences.
     const scene = sceneBefore(draft.blocks, blockIndex, packs);
     const opening: ParagraphContext = scene === undefined ? context : { ...context, scene };
@@ -353,7 +354,7 @@ function examineCached(
   asserted: string[] = paragraph,
 ): SentenceFindings | undefined {
   const previous = previousOnTopic();
-  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.reply === true, context.heading ?? '', context.marked === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
     examineSentence(paragraph, index, packs, onTopic, context, () => previous, leadIn, asserted),
   );
 }

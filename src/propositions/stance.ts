@@ -50,6 +50,8 @@ export interface StanceContext {
   heading?: string;
   /** The block carries the deliberate-quotation marker (`<!-- firnline: reported -->`). */
   marked?: boolean;
+  /** A block quote that is a post under its byline (prose/reply-quote.ts): its writer's own voice. */
+  reply?: boolean;
   /** The next sentence of the paragraph, read (it can answer a question or endorse a report). */
   next?: ReadSentence;
   /** The paragraph's first sentence, read, when it is not this one (a block quote's label). */
@@ -81,6 +83,8 @@ const QUOTATIVE = new Set(['runs', 'ran', 'goes', 'went']);
 /** Copulas before a quotation that a noun before them names ("The line I hear most is "...""). */
 const COPULAS = new Set(['is', 'was', 'are', 'were']);
 const ANSWER_OPENERS = new Set(['no', 'not', 'nope', 'actually', 'yes', 'well', 'short', 'a', 'answer', 'in', 'it', 'they', 'that', 'this', 'quite', 'hardly', 'far', 'nothing', 'partly', 'only', 'both', 'neither', 'sort', 'kind']);
+/** Response words that answer a yes-no question outright ("Not quite.", "Nope,", "Actually, ..."): English grammar, common practice. */
+const RESPONSE_WORDS = new Set(['no', 'not', 'nope', 'nah', 'yes', 'yeah', 'yep', 'yup', 'actually', 'correct', 'wrong', 'exactly', 'true', 'false', 'indeed']);
 const LABEL = /^\s*(?:[*_#>\s]*)(myth|misconception|claim|the claim|fiction|false|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|you might hear|you'll hear|the myth|the misconception|misunderstanding|mistake|rumou?r)\b(?:[^:.]{0,12}:|[*_]*\.)/iu;
 const FACT_LABEL = /^\s*(?:[*_#>\s]*)(fact|reality|the facts?|the science|the evidence|truth|answer|a)\b(?:[^:.]{0,12}:|[*_]*\.(?=[*_\s]))/iu;
 
@@ -96,7 +100,7 @@ function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance
   const make = (kind: StanceKind, flips = false): SentenceStance => ({ kind, endorsed: kind !== 'asserted' && endorsed, flips });
   if (context.marked === true) return make('marked');
   // A block quote that opens with a byline ("BigSkyBarb · 5h") is a reply in a thread, in its writer's voice.
-  if (context.blockKind === 'blockquote' && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
+  if (context.blockKind === 'blockquote' && context.reply !== true && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
   // "**Myth.** CO2 lags, so ...": a label that ends with a full stop is a sentence of its own, and labels the one after it.
   const label = bareLabel(context.previous);
   if (FACT_LABEL.test(s.text) || label === 'fact') return make('asserted');
@@ -208,14 +212,75 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
     return at >= 0 && WH.has(s.words[at]?.text ?? '') && AUX.has(s.words[pastIntensifier(s, at + 1)]?.text ?? '');
   });
   const negative = AUX.has(first) && s.words[1]?.text === 'not';
-  // "X, so how can you trust it?": a question after a statement leaves the statement asserted.
-  const start = s.words.findIndex((_, i) => {
+  // "X, so how can you trust it?", "X, so what's the fuss?", "X, right?": a question after a
+  // statement leaves the statement asserted (a trailing tag asks only for agreement).
+  const opened = s.words.findIndex((_, i) => {
     const at = opens(i);
-    return at >= 0 && (WH.has(s.words[at]?.text ?? '') || AUX.has(s.words[at]?.text ?? ''));
+    return at >= 0 && (WH.has(s.words[at]?.text ?? '') || AUX.has(s.words[at]?.text ?? '') || isPremiseQuestionWord(s.words[at]?.text ?? ''));
   });
-  const premise = start > 2 && !WH.has(first) && !AUX.has(first) ? { questionFrom: s.words[start]?.start ?? 0 } : {};
+  // A tag answered yes or no by the next sentence ("..., right?" "Not quite. ...") was put up to be
+  // answered, as an interviewer prompts a guest; one that the next voice merely goes on from keeps
+  // its statement.
+  const directAnswer = next !== undefined && (RESPONSE_WORDS.has(next.words[0]?.text ?? '') || RESPONSE_WORDS.has(next.words[next.opening]?.text ?? ''));
+  const start = opened >= 0 ? opened : directAnswer ? -1 : tagStart(s);
+  const own = s.opening;
+  const ownFirst = s.words[own]?.text ?? '';
+  const premise = start > own + 2 && !WH.has(ownFirst) && !AUX.has(ownFirst) ? { questionFrom: s.words[start]?.start ?? 0 } : {};
+  // "so each one's about 150k long??", "Greenland was maybe 5 degrees colder than now?": a
+  // statement in statement order that only ends in a question mark (a declarative question, English
+  // grammar, common practice) puts its content forward as the speaker's own, as a tag question does.
+  if (start < 0 && !directAnswer && isDeclarativeQuestion(s)) return make('asserted');
   if ((how || negative) && !answeredNext) return { ...make('rhetorical', how), ...premise };
   return { ...make('asked'), ...premise };
+}
+
+/**
+ * Question words that open a question after a statement ("..., so what's the fuss?", "..., so who
+ * cares?", "..., where's the problem?"), with the "'s" a writer attaches. Not "how" and "why", which
+ * WH reads (and which can make the question rhetorical), nor "which", "when" and "that", which open
+ * relative and time clauses as often as questions.
+ */
+const PREMISE_QUESTION_WORDS = new Set(['what', 'who', 'where', "what's", "who's", "where's", 'whats', 'wheres']);
+
+function isPremiseQuestionWord(word: string): boolean {
+  return PREMISE_QUESTION_WORDS.has(word) || /^(?:how|why)['’]s$/u.test(word);
+}
+
+/**
+ * Where a trailing tag begins: "..., right?", "... 0.42% right??", "..., is that right?", "... isn't
+ * it?", "..., didn't they?" (an auxiliary, "not" if any, and a pronoun; or a one-word tag after a
+ * word that is no copula, so "is that figure right?" asks about the figure). -1 without one.
+ */
+function tagStart(s: ReadSentence): number {
+  const n = s.words.length;
+  const at = (k: number) => s.words[k]?.text ?? '';
+  if (n < 4) return -1;
+  if (TAG_WORDS.has(at(n - 1))) {
+    // "is that right", "am i right", "that right": a tag of its own clause.
+    if (AUX.has(at(n - 3)) && TAG_PRONOUNS.has(at(n - 2))) return n - 3;
+    if (at(n - 3) === 'am' && at(n - 2) === 'i') return n - 3;
+    if (at(n - 2) === 'that') return n - 2;
+    const own = s.words[n - 1]?.segment !== s.words[n - 2]?.segment;
+    return own || !(AUX.has(at(n - 2)) || at(n - 2) === 'not') ? n - 1 : -1;
+  }
+  if (TAG_PRONOUNS.has(at(n - 1))) {
+    if (at(n - 2) === 'not' && AUX.has(at(n - 3))) return n - 3;
+    // "..., did they?": the auxiliary opens a segment of its own (a comma before it).
+    if (AUX.has(at(n - 2)) && s.words[n - 2]?.segment !== s.words[n - 3]?.segment) return n - 2;
+  }
+  return -1;
+}
+
+/**
+ * A sentence in statement order that ends in a question mark: its own wording opens with neither a
+ * question word nor an auxiliary, holds no "whether" or "if", and says something (four words or more).
+ */
+function isDeclarativeQuestion(s: ReadSentence): boolean {
+  const own = s.words.slice(s.opening);
+  const lead = own[0]?.text ?? '';
+  if (own.length < 4 || WH.has(lead) || AUX.has(lead) || QUESTION_OPENERS.has(lead) || isPremiseQuestionWord(lead) || lead === 'q') return false;
+  // "so how do we know?", "and which one is it?": a question word opening a later clause makes it a question.
+  return !own.some((w) => WH.has(w.text) || QUESTION_OPENERS.has(w.text) || isPremiseQuestionWord(w.text));
 }
 
 /** Pronouns that close a tag question ("isn't it?", "didn't they?"). */

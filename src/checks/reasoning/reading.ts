@@ -20,6 +20,8 @@ export interface ParagraphContext {
   heading?: string;
   /** The block carries the deliberate-quotation marker. */
   marked?: boolean;
+  /** A block quote that is a post under its byline (prose/reply-quote.ts), in its writer's own voice. */
+  reply?: boolean;
   /** The period (lexicon `periods` key) the block before named, under the same heading. */
   scene?: string;
   /**
