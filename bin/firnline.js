@@ -5,9 +5,11 @@
 // `firnline --version` alone costs about what `node -e 0` costs. It is answered here, as commander
 // would answer it (the version from package.json, the file dist/version.js reads, and a newline,
 // exit 0), without loading the command line's modules: it is the cheapest call a script makes.
-// Every other command runs the bundled command line (dist/bundle/cli.js, scripts/build-bundle.js:
-// the same modules in a few files), unless it is missing or older than dist/cli/main.js, as after a
-// build by tsc alone; then dist/ itself runs, with the same results, only slower to start.
+// Every other command runs the bundled command line: dist/bundle/cli.cjs (scripts/build-bundle.js: the
+// same modules in one CommonJS file, which a `check` compiles with V8's code cache made by the
+// build, bin/bundle-loader.js), else dist/bundle/cli.js (the same as ES modules in a few files),
+// each only while it is not older than dist/cli/main.js, as after a build by tsc alone; then dist/
+// itself runs, with the same results, only slower to start.
 const { readFileSync, statSync } = require('node:fs');
 const { join } = require('node:path');
 const { pathToFileURL } = require('node:url');
@@ -17,16 +19,28 @@ const root = join(__dirname, '..');
 if (args.length === 1 && (args[0] === '--version' || args[0] === '-V')) {
   process.stdout.write(`${JSON.parse(readFileSync(join(root, 'package.json'), 'utf8')).version}\n`);
 } else {
+  const single = join(root, 'dist', 'bundle', 'cli.cjs');
   const bundle = join(root, 'dist', 'bundle', 'cli.js');
   const plain = join(root, 'dist', 'cli', 'main.js');
   let entry = plain;
-  try {
-    if (statSync(bundle).mtimeMs >= statSync(plain).mtimeMs) entry = bundle;
-  } catch {
-    // No bundle: run dist/ itself.
+  // A bundle runs only while it is not older than dist/cli/main.js (without dist/, the import
+  // below says so).
+  const ok = (file) => {
+    try {
+      return statSync(file).mtimeMs >= statSync(plain).mtimeMs;
+    } catch {
+      return false;
+    }
+  };
+  let main;
+  if (ok(single)) {
+    // The one-file bundle, with V8's code cache for a check (bin/bundle-loader.js).
+    main = require('./bundle-loader.js').loadBundle(single, join(root, 'dist', 'bundle', 'cli.code-cache'), args[0] === 'check').exports.main;
+  } else if (ok(bundle)) {
+    entry = bundle;
   }
   // A CommonJS script has no top-level await; a failure to load is thrown as before.
-  void import(pathToFileURL(entry).href).then(async ({ main }) => {
-    process.exitCode = await main(args);
+  void (main !== undefined ? Promise.resolve({ main }) : import(pathToFileURL(entry).href)).then(async ({ main: run }) => {
+    process.exitCode = await run(args);
   });
 }

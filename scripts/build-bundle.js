@@ -32,24 +32,29 @@ const posix = (path) => path.split(sep).join('/');
 /** Packages left to Node's loader at run time. */
 export const EXTERNAL = ['tinypool', 'vscode-languageserver', 'vscode-languageserver/node', 'vscode-languageserver-textdocument'];
 
+/** A module of dist/ as the bundle reads it (see above); `import.meta.url` left for the caller. */
+async function keepPathsLoad(b, args) {
+  if (args.path === join(dist, 'source', 'micromark-initial-text.js')) {
+    const entry = await b.resolve('micromark', { kind: 'import-statement', resolveDir: dirname(args.path) });
+    if (entry.errors.length > 0) throw new Error(`micromark: ${entry.errors[0].text}`);
+    const file = posix(join(dirname(entry.path), 'lib', 'initialize', 'text.js'));
+    return {
+      contents: `import * as lib from ${JSON.stringify(file)};\nexport const initialTextModules = [lib];\n`,
+      loader: 'js',
+      resolveDir: dirname(args.path),
+    };
+  }
+  const text = await readFile(args.path, 'utf8');
+  const own = JSON.stringify(posix(relative(out, args.path)));
+  return { contents: text.replaceAll('import.meta.url', `new URL(${own}, import.meta.url).href`), loader: 'js' };
+}
+
 const keepPaths = {
   name: 'firnline-paths',
   setup(b) {
     b.onLoad({ filter: /\.js$/ }, async (args) => {
       if (!args.path.startsWith(dist + sep) || args.path.startsWith(out + sep)) return undefined;
-      if (args.path === join(dist, 'source', 'micromark-initial-text.js')) {
-        const entry = await b.resolve('micromark', { kind: 'import-statement', resolveDir: dirname(args.path) });
-        if (entry.errors.length > 0) throw new Error(`micromark: ${entry.errors[0].text}`);
-        const file = posix(join(dirname(entry.path), 'lib', 'initialize', 'text.js'));
-        return {
-          contents: `import * as lib from ${JSON.stringify(file)};\nexport const initialTextModules = [lib];\n`,
-          loader: 'js',
-          resolveDir: dirname(args.path),
-        };
-      }
-      const text = await readFile(args.path, 'utf8');
-      const own = JSON.stringify(posix(relative(out, args.path)));
-      return { contents: text.replaceAll('import.meta.url', `new URL(${own}, import.meta.url).href`), loader: 'js' };
+      return keepPathsLoad(b, args);
     });
   },
 };
@@ -98,6 +103,76 @@ for (const output of Object.keys(result.metafile.outputs)) {
   const { code } = await transform(await readFile(join(root, output), 'utf8'), { minifyWhitespace: true, format: 'esm', legalComments: 'none' });
   if (/\b__dirname\b|\b__filename\b/u.test(code)) throw new Error(`${output}: the bundle uses __dirname or __filename, which an ES module does not have`);
 }
+// The command line once more as one CommonJS file, dist/bundle/cli.cjs, which the launcher runs with
+// V8's code cache (bin/bundle-loader.js): Node 20 takes a code cache only for a script, not for an ES
+// module. Built from the same modules with the same paths; no splitting, so every `import()` of
+// dist/ is bundled in. It exports the linear-text wrapper too, so the tests can see its parse go
+// through it. Its one external dynamic import (tinypool) becomes the launcher's own import().
+const cjsPaths = {
+  name: 'firnline-paths-cjs',
+  setup(b) {
+    b.onLoad({ filter: /\.js$/ }, async (args) => {
+      if (!args.path.startsWith(dist + sep) || args.path.startsWith(out + sep)) return undefined;
+      const loaded = await keepPathsLoad(b, args);
+      return { ...loaded, contents: loaded.contents.replaceAll('import.meta.url', '__firnlineUrl') };
+    });
+  },
+};
+const single = join(out, 'cli.cjs');
+await build({
+  absWorkingDir: root,
+  stdin: {
+    contents: "export { main } from './dist/cli/main.js';\nexport { linearTextResolver } from './dist/source/micromark-linear-text.js';\n",
+    resolveDir: root,
+    sourcefile: 'cli-entry.js',
+    loader: 'js',
+  },
+  outfile: single,
+  // ES modules are strict code; so is the bundle made of them (esbuild adds no directive for an
+  // entry read from stdin).
+  // `__firnlineUrl` is the bundle's own URL, from which each module's is made (a module of dist/ may
+  // name a `require` of its own, so the replacement names nothing a module could shadow).
+  banner: { js: '"use strict";\nconst __firnlineUrl = require("node:url").pathToFileURL(__filename).href;' },
+  bundle: true,
+  format: 'cjs',
+  platform: 'node',
+  target: 'node20',
+  external: EXTERNAL,
+  plugins: [cjsPaths],
+  logLevel: 'warning',
+  legalComments: 'none',
+});
+{
+  const code = await readFile(single, 'utf8');
+  const imports = code.match(/\bimport\(/gu) ?? [];
+  const tinypool = code.split('import("tinypool")').length - 1;
+  if (!code.startsWith('"use strict";')) throw new Error('cli.cjs: expected to start with "use strict" (its modules are ES modules)');
+  if (tinypool !== 1 || imports.length !== 1) throw new Error(`cli.cjs: expected one dynamic import, of tinypool; found ${imports.length}`);
+  await writeFile(`${single}.tmp`, code.replace('import("tinypool")', '__firnlineImport("tinypool")'));
+  await rename(`${single}.tmp`, single);
+}
+
 const stamp = join(out, 'inputs.json');
 await writeFile(`${stamp}.tmp`, `${JSON.stringify({ format: 'firnline-bundle/1', external: EXTERNAL, inputs }, null, 2)}\n`);
 await rename(`${stamp}.tmp`, stamp);
+
+// V8's code cache for cli.cjs (bin/bundle-loader.js), made in a child process that runs the bundled
+// command line as the launcher does, with the check command's V8 flag, over the demo drafts
+// (examples/, --no-cache, one thread, the report discarded), then asks V8 for the code of every
+// function compiled so far. A build that cannot make it leaves none: the launcher then compiles.
+{
+  const { spawnSync } = await import('node:child_process');
+  const cacheFile = join(out, 'cli.code-cache');
+  const loader = join(root, 'bin', 'bundle-loader.js');
+  const script = `
+    const { writeFileSync, renameSync, readFileSync } = require('node:fs');
+    const { loadBundle, encodeCache } = require(${JSON.stringify(loader)});
+    const file = ${JSON.stringify(single)}, cacheFile = ${JSON.stringify(cacheFile)};
+    const { exports, script } = loadBundle(file, cacheFile + '.none', true);
+    exports.main(['check', 'examples', '--no-cache', '--jobs', '1', '--format', 'json']).then(() => {
+      writeFileSync(cacheFile + '.tmp', encodeCache(readFileSync(file, 'utf8'), script.createCachedData()));
+      renameSync(cacheFile + '.tmp', cacheFile);
+    });`;
+  const made = spawnSync(process.execPath, ['-e', script], { cwd: root, stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
+  if (made.status !== 0) console.error(`build-bundle: no code cache (${(made.stderr ?? '').split('\n')[0]}); the command line will compile at start`);
+}

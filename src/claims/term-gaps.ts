@@ -161,40 +161,73 @@ export function tokensOf(text: string): Token[] {
 /** The pack's term phrases that may take words inside, indexed by their first word; and the lexicon's region and period words. */
 export class GappedTerms {
   private readonly byFirst = new Map<string, GappedPhrase[]>();
-  private readonly places: Set<string>;
+  /**
+   * The phrases of each first word not yet read into `byFirst`: a word's entries are made when a
+   * sentence first holds it (a 2 KB draft meets a few dozen of the some 3,800 phrases' first
+   * words), in the order the constructor met them, so each list is the one made up front before.
+   */
+  private readonly pending = new Map<string, { term: string; words: string[]; names: () => ReadonlySet<string> }[]>();
+  private placesMade: Set<string> | undefined;
 
   /**
    * `terms`: each term (its id as its hits count), with its forms (variants and inflections) and
    * the phrases the pack wrote: a word the pack writes with a capital is a name ("Dronning Maud
    * Land", "Younger Dryas"), which takes no modifier beside it.
    */
-  constructor(terms: Iterable<{ term: string; forms: readonly string[]; written: readonly string[] }>, packs: LoadedPacks) {
+  constructor(
+    terms: Iterable<{ term: string; forms: readonly string[]; written: readonly string[] }>,
+    private readonly packs: LoadedPacks,
+  ) {
     for (const { term, forms, written } of terms) {
-      const names = new Set(written.flatMap((p) => p.split(/\s+/u).filter((w) => w !== w.toLowerCase()).map((w) => w.toLowerCase())));
+      let names: Set<string> | undefined;
+      const namesOf = (): ReadonlySet<string> => (names ??= new Set(written.flatMap((p) => p.split(/\s+/u).filter((w) => w !== w.toLowerCase()).map((w) => w.toLowerCase()))));
       for (const phrase of forms) {
         if (!phrase.includes(' ')) continue;
         const words = phrase.toLowerCase().replaceAll('’', "'").split(/\s+/u);
-        // Only words the sentence's tokens can equal: letters and digits, joined by a hyphen or an apostrophe.
-        if (!words.every((w) => ONE_TOKEN.test(w))) continue;
-        const gaps = words.slice(1).map((b, k) => {
-          const gap = gapBetween(words[k] as string, b);
-          return gap === 'modifier' && (names.has(words[k] as string) || names.has(b)) ? 'none' : gap;
-        });
-        if (gaps.every((g) => g === 'none')) continue;
-        const list = this.byFirst.get(words[0] as string);
-        const entry = { term, words, gaps };
-        if (list === undefined) this.byFirst.set(words[0] as string, [entry]);
+        const list = this.pending.get(words[0] as string);
+        const entry = { term, words, names: namesOf };
+        if (list === undefined) this.pending.set(words[0] as string, [entry]);
         else list.push(entry);
       }
     }
-    // "the longest polar record", "the oldest deglacial record": a region or a period narrows the subject.
-    const lexicon = packs.lexicon;
-    const phrases = [...Object.values(lexicon['regions'] ?? {}), ...Object.values(lexicon['periods'] ?? {})].flat();
-    this.places = new Set(phrases.flatMap((p) => variantsOf(phraseWords(p)).map((w) => w.join(' '))));
+  }
+
+  /** The phrases that start with `word` and may take words inside, made on the word's first question. */
+  entriesOf(word: string): readonly GappedPhrase[] | undefined {
+    const made = this.byFirst.get(word);
+    if (made !== undefined) return made;
+    const waiting = this.pending.get(word);
+    if (waiting === undefined) return undefined;
+    this.pending.delete(word);
+    const list: GappedPhrase[] = [];
+    for (const { term, words, names } of waiting) {
+      // Only words the sentence's tokens can equal: letters and digits, joined by a hyphen or an apostrophe.
+      if (!words.every((w) => ONE_TOKEN.test(w))) continue;
+      const gaps = words.slice(1).map((b, k) => {
+        const gap = gapBetween(words[k] as string, b);
+        return gap === 'modifier' && (names().has(words[k] as string) || names().has(b)) ? 'none' : gap;
+      });
+      if (gaps.every((g) => g === 'none')) continue;
+      list.push({ term, words, gaps });
+    }
+    if (list.length === 0) return undefined;
+    this.byFirst.set(word, list);
+    return list;
+  }
+
+  /** "the longest polar record", "the oldest deglacial record": a region or a period narrows the subject. */
+  private get places(): Set<string> {
+    if (this.placesMade === undefined) {
+      const lexicon = this.packs.lexicon;
+      const phrases = [...Object.values(lexicon['regions'] ?? {}), ...Object.values(lexicon['periods'] ?? {})].flat();
+      this.placesMade = new Set(phrases.flatMap((p) => variantsOf(phraseWords(p)).map((w) => w.join(' '))));
+    }
+    return this.placesMade;
   }
 
   /** How many phrases may take words inside (for tests). */
   get size(): number {
+    for (const word of [...this.pending.keys()]) this.entriesOf(word);
     return [...this.byFirst.values()].reduce((n, l) => n + l.length, 0);
   }
 
@@ -207,7 +240,7 @@ export class GappedTerms {
     const found = new Map<string, [number, number][]>();
     const tokens = tokensOf(sentence);
     for (let i = 0; i < tokens.length; i += 1) {
-      const entries = this.byFirst.get((tokens[i] as Token).text);
+      const entries = this.entriesOf((tokens[i] as Token).text);
       if (entries === undefined) continue;
       for (const entry of entries) {
         const end = this.matchFrom(tokens, i, entry, taken);

@@ -4,6 +4,7 @@
  * form belongs to two dimensions (°C as a temperature and as a change, ka as a date and as a
  * duration) every reading is returned and the cue tables decide.
  */
+import { firstChars } from './first-chars.js';
 import { NUMBER_UNIT_GAP, UNIT_END } from './unit-forms.js';
 import { UNIT_TABLE, type UnitDef } from './unit-table.js';
 
@@ -17,11 +18,15 @@ export interface UnitMatch {
 }
 
 const GAP = new RegExp(NUMBER_UNIT_GAP, 'uy');
-/** One sticky matcher per unit, compiled once at module load. */
-const MATCHERS: { def: UnitDef; re: RegExp }[] = UNIT_TABLE.filter((d) => d.forms.length > 0).map((def) => ({
-  def,
-  re: new RegExp(`(?:${def.forms.join('|')})${UNIT_END}`, 'uy'),
-}));
+/**
+ * One sticky matcher per unit, made once at module load, with the characters its match can start
+ * with (undefined: any). V8 compiles a matcher on its first run, so matchUnit runs only those that
+ * can match at the character found, and a run compiles the few its drafts meet (first-chars.ts).
+ */
+const MATCHERS: { def: UnitDef; re: RegExp; first: ReadonlySet<number> | undefined }[] = UNIT_TABLE.filter((d) => d.forms.length > 0).map((def) => {
+  const source = `(?:${def.forms.join('|')})${UNIT_END}`;
+  return { def, re: new RegExp(source, 'uy'), first: firstChars(source) };
+});
 
 /** The unit starting at `from` (after an optional space or hyphen), or undefined. */
 export function matchUnit(text: string, from: number): UnitMatch | undefined {
@@ -29,7 +34,11 @@ export function matchUnit(text: string, from: number): UnitMatch | undefined {
   const gap = GAP.exec(text);
   const start = from + (gap?.[0].length ?? 0);
   let best: UnitMatch | undefined;
-  for (const { def, re } of MATCHERS) {
+  // No match is empty (an empty one is skipped below), so one at the text's end is none.
+  const at = text.codePointAt(start);
+  if (at === undefined) return undefined;
+  for (const { def, re, first } of MATCHERS) {
+    if (first !== undefined && !first.has(at)) continue;
     re.lastIndex = start;
     const m = re.exec(text);
     if (m === null || m[0].length === 0) continue;
