@@ -64,7 +64,9 @@ const ERA_LEAD = /(?:^|[^\p{L}])(?:in|on|as)[\s\u00A0]+(?:the[\s\u00A0]+)?(?:bp|
  */
 function withNamedEra(text: string, qs: Quantity[], era: string): Quantity[] {
   return qs.map((q) => {
-    if (q.dimension !== 'duration' || q.statedUnit !== 'yr' || !ERA_LEAD.test(text.slice(Math.max(0, q.start - 48), q.start))) return q;
+    // "which in BP terms is 11,750": a bare number after the era named is a date in it too.
+    const plain = (q.dimension === 'duration' && q.statedUnit === 'yr') || (q.dimension === 'number' && q.statedUnit === '');
+    if (!plain || !ERA_LEAD.test(text.slice(Math.max(0, q.start - 48), q.start))) return q;
     const [read] = parseQuantities(`${q.text} ${era.toUpperCase() === 'BP' ? 'BP' : 'b2k'}`);
     return read === undefined || read.dimension !== 'age' ? q : { ...read, start: q.start, end: q.end, text: q.text };
   });
