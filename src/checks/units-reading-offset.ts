@@ -65,7 +65,7 @@ const OWN_READING = beforeMatcher(
 /** Words that open another clause, whose reading is its own. */
 const NEW_CLAUSE = /(?:^|[^\p{L}])(?:and|but|while|whereas|when|where|though|although)(?![\p{L}])/iu;
 /** Words that point back at a figure said before, or that restate it ("in other words", "works out"). */
-const POINTER = new RegExp(String.raw`(?:^|[^\p{L}])(?:that|this|which|it|its|it['’]s|that['’]s|in${'[\s\u00A0]'}+other${'[\s\u00A0]'}+words|${RESTATING_VERB_PATTERN})(?![\p{L}])`, 'iu');
+const POINTER = new RegExp(String.raw`(?:^|[^\p{L}])(?:that|this|which|it|its|it['’]s|that['’]s|in[\s\u00A0]+other[\s\u00A0]+words|${RESTATING_VERB_PATTERN})(?![\p{L}])`, 'iu');
 /** A scale named in words: the sentence says which one it converts to. */
 const SCALE_WORD = /(?:^|[^\p{L}])(?:fahrenheit|kelvin)(?![\p{L}])/iu;
 
