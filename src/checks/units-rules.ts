@@ -4,7 +4,7 @@
  * wrong unit are also caught on their own (units-co2-share.ts).
  */
 import { afterMatcher, beforeMatcher } from '../quantities/reading-cues.js';
-import { convert, correctionFigures, formatQuantity, namesChangeBefore, TEMPERATURE_CUES } from '../quantities/index.js';
+import { convert, correctionFigures, formatNumber, formatQuantity, namesChangeBefore, TEMPERATURE_CUES } from '../quantities/index.js';
 import { fromCanonical } from '../quantities/convert.js';
 import type { Dimension, Level, Quantity, Source } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
@@ -13,6 +13,7 @@ import { co2PpbSlips, co2UnitSlips } from './units-co2-share.js';
 import { scaleSlips } from './units-scale.js';
 import { offsetSums } from './units-offset-sums.js';
 import { eraDefinitionSlips } from './units-era-definition.js';
+import { readingOffsetSlips } from './units-reading-offset.js';
 import { findRestatements, pointsAtChange, type PreviousSentence, type Restatement } from './units-pairs.js';
 
 /** A quantity whose unit use is in doubt, with the value it should have. */
@@ -176,6 +177,23 @@ function offsetSumSlips(text: string, qs: Quantity[]): UnitFinding[] {
     sources: [NIST_SP_811],
   }));
 }
+/**
+ * "about 6 °C colder ... in Fahrenheit, that's about 43 degrees": a change stated before, in this
+ * sentence or the paragraph's last few, converted as a reading (units-reading-offset.ts).
+ */
+function readingOffsets(text: string, qs: Quantity[], previous?: PreviousSentence): UnitFinding[] {
+  const earlier = previous?.earlier ?? (previous === undefined ? [] : [previous.text]);
+  return readingOffsetSlips(text, qs, earlier).map(({ stated, computed, change, offset }) => {
+    const unit = stated.statedUnit === 'degF' ? 'degF' : 'K';
+    const right = formatQuantity(computed.value, 'K', unit);
+    const how = offset === 32 ? '× 1.8 + 32' : '+ 273.15';
+    const cause = offset === 32 ? 'differences convert by 9/5 alone; the 32 belongs to readings' : 'as a difference 1 K equals 1 °C; the 273.15 belongs to readings';
+    // A range converts end by end: "5-7 °C" is a change of 9-12.6 °F.
+    const range = computed.low !== computed.high ? `${formatNumber(fromCanonical(computed.low, unit, 'temperature-change'))}-${formatQuantity(computed.high, 'K', unit)}` : undefined;
+    const said = range ?? right;
+    return { stated, computed, reason: `A change of ${change.text} is a change of ${said}: ${cause}. ${stated.text} is ${change.text} converted as a reading (${how}).`, sources: [NIST_SP_811], ...(range === undefined ? {} : { correction: range }) };
+  });
+}
 const eras = (a: Quantity, b: Quantity): Source[] => (a.statedUnit.includes('b2k') || b.statedUnit.includes('b2k') ? [BP_CONVENTION, B2K_CONVENTION] : [BP_CONVENTION]);
 
 /** A date restated a thousand times too large or small: a scale slip, not an era's offset ("800 ka, is eight hundred million years ago"). */
@@ -206,7 +224,9 @@ export const UNIT_RULES: readonly UnitRule[] = [
   { id: 'unit.temperature-difference', summary: 'A temperature change restated in °F is 1.8 times the change in °C or K, with no 32 added; restated in K it is the same number as in °C, with no 273.15 added.',
     find: (text, qs, previous) => {
       const pairs = restated(['temperature-change'], nist, temperatureChangeWhy, cuedAsChange)(text, qs, previous);
-      return [...pairs, ...offsetSumSlips(text, qs).filter((f) => !pairs.some((p) => p.stated.start === f.stated.start))];
+      const sums = offsetSumSlips(text, qs).filter((f) => !pairs.some((p) => p.stated.start === f.stated.start));
+      const found = [...pairs, ...sums];
+      return [...found, ...readingOffsets(text, qs, previous).filter((f) => !found.some((p) => p.stated.start === f.stated.start))];
     } },
   { id: 'unit.temperature', summary: 'A temperature reading restated in °F is 1.8 × °C + 32.',
     find: restated(['temperature'], nist, () => 'A temperature reading converts as °F = 1.8 × °C + 32.') },

@@ -4,7 +4,7 @@
  * the wrong unit. Each flag carries the right value in the correction and cites the definition
  * (NIST SP 811 for factors; Stuiver & Polach 1977 for BP; Walker et al. 2009 for b2k).
  */
-import { correctionFigures, formatQuantity, parseQuantities } from '../quantities/index.js';
+import { correctionFigures, formatQuantity, fromCanonical, parseQuantities, toCanonical } from '../quantities/index.js';
 import type { FlagDraft, Quantity } from '../types.js';
 import { correctionFor } from './arithmetic.js';
 import { disjoint, levelFor } from './arithmetic-levels.js';
@@ -27,7 +27,12 @@ function withNamedScale(text: string, qs: Quantity[]): Quantity[] {
   const dated = eras.size === 1 ? withNamedEra(text, qs, [...eras][0] as string) : qs;
   if (named.size !== 1) return dated;
   const [scale] = [...named] as [string];
+  const temperatures = dated.filter((q) => q.dimension === 'temperature' || q.dimension === 'temperature-change');
+  // "In Fahrenheit, that's about 43 degrees colder": a figure of bare degrees took the default
+  // scale; when no figure of the sentence marks a scale of its own, it is in the scale named.
+  const unmarked = temperatures.length > 0 && temperatures.every((q) => UNMARKED_DEGREES.test(q.text));
   return dated.map((q) => {
+    if (unmarked && temperatures.includes(q)) return inScale(q, scale);
     const degrees = q.dimension === 'number' ? BARE_DEGREES.exec(text.slice(q.end)) : null;
     if (degrees === null) return q;
     const end = q.end + degrees[0].length;
@@ -35,6 +40,18 @@ function withNamedScale(text: string, qs: Quantity[]): Quantity[] {
     if (read === undefined || (read.dimension !== 'temperature' && read.dimension !== 'temperature-change')) return q;
     return { ...read, start: q.start, end, text: text.slice(q.start, end) };
   });
+}
+
+/** A temperature figure written as bare degrees, with no scale of its own: "about 43 degrees". */
+const UNMARKED_DEGREES = /^[^°℃℉]*[\s\u00A0]degrees?$/iu;
+
+/** `q`, written in bare degrees, read in the scale `scale` with its reading (change or temperature) kept. */
+function inScale(q: Quantity, scale: string): Quantity {
+  const [read] = parseQuantities(`${q.text} ${scale}`);
+  if (read === undefined || (read.dimension !== 'temperature' && read.dimension !== 'temperature-change')) return q;
+  const unit = read.statedUnit;
+  const again = (x: number): number => toCanonical(fromCanonical(x, unit, read.dimension), unit, q.dimension);
+  return { ...q, statedUnit: unit, value: again(read.value), low: again(read.low), high: again(read.high) };
 }
 
 const ERA_NAME = /(?:^|[^\p{L}])(bp|b2k)(?![\p{L}])/giu;
@@ -47,7 +64,9 @@ const ERA_LEAD = /(?:^|[^\p{L}])(?:in|on|as)[\s\u00A0]+(?:the[\s\u00A0]+)?(?:bp|
  */
 function withNamedEra(text: string, qs: Quantity[], era: string): Quantity[] {
   return qs.map((q) => {
-    if (q.dimension !== 'duration' || q.statedUnit !== 'yr' || !ERA_LEAD.test(text.slice(Math.max(0, q.start - 48), q.start))) return q;
+    // "which in BP terms is 11,750": a bare number after the era named is a date in it too.
+    const plain = (q.dimension === 'duration' && q.statedUnit === 'yr') || (q.dimension === 'number' && q.statedUnit === '');
+    if (!plain || !ERA_LEAD.test(text.slice(Math.max(0, q.start - 48), q.start))) return q;
     const [read] = parseQuantities(`${q.text} ${era.toUpperCase() === 'BP' ? 'BP' : 'b2k'}`);
     return read === undefined || read.dimension !== 'age' ? q : { ...read, start: q.start, end: q.end, text: q.text };
   });

@@ -94,7 +94,7 @@ export const DURATION_CUES: readonly Cue[] = [
 export const CALENDAR_CUES: readonly string[] = ['in', 'by', 'for', 'since', 'from', 'until', 'till', 'to', 'after', 'before', 'around', 'about', 'circa', 'c.', 'ca.', 'of', 'between', 'and', 'during', 'year', 'early', 'late', 'mid', 'mid-', 'through', '–', '—', '-', 'january', 'february', 'march', 'april', 'may', 'june', 'july', 'august', 'september', 'october', 'november', 'december', 'spring', 'summer', 'autumn', 'winter'];
 
 /** Words before a bare number that make it a label, not a quantity ("MIS 11", "Figure 3"). */
-export const LABEL_CUES: readonly string[] = ['MIS', 'stage', 'termination', 'figure', 'fig.', 'table', 'page', 'p.', 'pp.', 'chapter', 'section', 'no.', 'issue', 'volume', 'vol.', 'panel', 'room', 'gallery', '#'];
+export const LABEL_CUES: readonly string[] = ['MIS', 'stage', 'termination', 'figure', 'fig.', 'table', 'page', 'p.', 'pp.', 'chapter', 'section', 'no.', 'issue', 'volume', 'vol.', 'panel', 'room', 'gallery', '#', 'worked example', 'exercise', 'question', 'step', 'slide', 'episode'];
 
 const escape = (s: string): string => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&').replace(/ /g, String.raw`[\s\u00A0]+`);
 const wordList = (words: readonly string[]): string => [...words].sort((a, b) => b.length - a.length).map(escape).join('|');

@@ -77,8 +77,8 @@ const BASE_UNITS: UnitDef[] = [
   u('yr BP', 'age', 1, 'years BP', [
     String.raw`(?:[cC]al(?:ibrated)?\.?[\s\u00A0]+)?(?:${YEAR_WORD}[\s\u00A0]+)?${BP}`,
     words('(?:years?|yrs?) before present'),
-    // "11,750 years before 1950": the BP convention's reference year written out (Stuiver & Polach 1977).
-    words('(?:years?|yrs?) before (?:ad )?1950'),
+    // "11,750 years before 1950", "... before the year 1950": the BP convention's reference year written out (Stuiver & Polach 1977).
+    words('(?:years?|yrs?) before (?:the year |ad )?1950'),
   ]),
   u('yr ago', 'age', 1, 'years ago', [words(`(?:years?|yrs?) ${AGO_WORDS}`)]),
   // "fifty millennia ago", "twelve centuries ago": an age counted in longer units.
@@ -88,7 +88,8 @@ const BASE_UNITS: UnitDef[] = [
   u('Ma', 'age', 1e6, 'Ma', [String.raw`(?:Ma|Myrs?|My)[\s\u00A0]+(?:${BP}|${AGO})`, 'Ma']),
   u('yr b2k', 'age', 1, 'years b2k', [
     String.raw`(?:${YEAR_WORD}[\s\u00A0]+)?b2k`,
-    words('(?:years?|yrs?) before (?:ad )?2000'),
+    // "11,700 years before the year 2000": the b2k reference year written out (Walker et al. 2009).
+    words('(?:years?|yrs?) before (?:the year |ad )?2000'),
   ], -50),
   u('ka b2k', 'age', 1e3, 'ka b2k', [String.raw`(?:ka|kyrs?)[\s\u00A0]+b2k`], -50),
   // "11,700 years BCE", "9700 yrs BC": a year word before the era is still a date.
