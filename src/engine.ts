@@ -12,7 +12,7 @@ import { FirnlineError } from './errors.js';
 import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { isChecklistText } from './report/checklist-lines.js';
-import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
+import { createTopicMatcher, repeatsEarlierText, splitSentences, type TopicMatcher } from './prose/index.js';
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
 import { introOf, leadInOf } from './prose/lead-in.js';
@@ -245,7 +245,10 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     // the text under it), the reasoning checks and the stance reader read only what it asserts.
     const asserted = sentences.map((s) => (s.label === undefined ? s.text : s.text.slice(0, s.label).replace(/\S/gu, ' ') + s.text.slice(s.label)));
     const assertedWindowOf = paragraphWindows(asserted);
-    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}) };
+    // A block quote of one sentence, or one that repeats earlier words of the draft (a reply quoting
+    // the post it answers), quotes what it holds; a passage of its own is a voice of the draft.
+    const voiced = block.kind === 'blockquote' && sentences.length >= 2 && !repeatsEarlierText(draft.text, block);
+    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(voiced ? { voiced } : {}) };
     // The period the blocks just before named sets the scene of this block's opening sentences.
     const scene = sceneBefore(draft.blocks, blockIndex, packs);
     const opening: ParagraphContext = scene === undefined ? context : { ...context, scene };
@@ -351,7 +354,7 @@ function examineCached(
   asserted: string[] = paragraph,
 ): SentenceFindings | undefined {
   const previous = previousOnTopic();
-  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.voiced === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
     examineSentence(paragraph, index, packs, onTopic, context, () => previous, leadIn, asserted),
   );
 }

@@ -41,7 +41,7 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
   for (const h of [...hits, ...doingHits(s)].sort((a, b) => a.first - b.first)) {
     // `passive` only qualifies an `effects` word at the same place; it states nothing of its own;
     // `deeds` are read with their "do" (doingHits).
-    if (h.key === 'reverse' || h.key === 'either-or' || h.key === 'passive' || h.key === 'deeds') continue;
+    if (h.key === 'reverse' || h.key === 'either-or' || h.key === 'passive' || h.key === 'deeds' || h.key === 'needed-without') continue;
     // "the resulting warming", "a forced response": a part noun's verb forms are no noun.
     if (NOUN_KEYS.has(h.key) && !asNoun(s, h)) continue;
     const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify' || h.key === 'sufficient-verbs';
@@ -282,6 +282,15 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   // "the sun did it all": a verb of doing everything with no object named is said of the whole event.
   const sufficed = (SUFFICIENT_KEYS.has(h.key) || sufficientBefore(s, h, agentThing)) && (patient === 'ice-age' || (h.key === 'sufficient-verbs' && patient === undefined));
   const exclusive = isExclusive(s, h, agentThing) || (cleft !== undefined && h.key !== 'amplify') || h.key === 'because-only' || sufficed;
+  // "the ice-age cooling can't be explained without it": a cause denied save for a thing the clause
+  // names after it (lexicon `causes.needed-without`) grants that thing a part in what the subject did.
+  const needed = polarity === 'denied' ? neededThing(s, h) : undefined;
+  if (needed !== undefined) {
+    const holder = kindOf(s, needed, previous, RECORDS);
+    const subject = kind(agentThing);
+    if (holder === undefined) return [];
+    return [{ kind: 'cause', role: 'cause', polarity: 'asserted', exclusive: false, start, end: s.words[needed.last]?.end ?? end, agent: holder, ...(subject === undefined || subject === holder ? {} : { patient: subject }) }];
+  }
   // "CO2 rides in the back", "CO2 merely reading the dial": a follower's part denies its subject a
   // cause; "CO2 is not just along for the ride" grants one.
   if (h.key === 'follower' && polarity !== 'open') {
@@ -307,6 +316,17 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     out.push({ kind: 'cause', agent: patient, role: 'cause', polarity: 'denied', exclusive: false, start, end });
   }
   return out;
+}
+
+/**
+ * The thing named just after a cause word by a phrase of lexicon `causes.needed-without` ("explained
+ * without it", "ended but for the CO2"): within two words of the cause word, its thing within three
+ * words of the phrase, in the same clause.
+ */
+function neededThing(s: ReadSentence, h: LexHit): Thing | undefined {
+  const phrase = s.of('causes', 'needed-without').find((n) => n.first > h.last && n.first - h.last <= 3 && s.words[n.first]?.clause === s.words[h.last]?.clause);
+  if (phrase === undefined) return undefined;
+  return s.things.find((t) => t.first > phrase.last && t.first - phrase.last <= 3 && s.words[t.first]?.clause === s.words[phrase.first]?.clause);
 }
 
 /** Words that may stand between a verb of coming from and its "from" ("came largely from", "stems entirely from"). */

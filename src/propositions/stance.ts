@@ -50,6 +50,8 @@ export interface StanceContext {
   heading?: string;
   /** The block carries the deliberate-quotation marker (`<!-- firnline: reported -->`). */
   marked?: boolean;
+  /** A block quote that holds a passage of its own, repeating nothing said before: a voice of the draft (ParagraphContext). */
+  voiced?: boolean;
   /** The next sentence of the paragraph, read (it can answer a question or endorse a report). */
   next?: ReadSentence;
   /** The paragraph's first sentence, read, when it is not this one (a block quote's label). */
@@ -95,8 +97,12 @@ function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance
   const endorsed = s.of('stance', 'endorse').length > 0 || (context.next?.of('stance', 'endorse').some((h) => h.first <= 4) ?? false);
   const make = (kind: StanceKind, flips = false): SentenceStance => ({ kind, endorsed: kind !== 'asserted' && endorsed, flips });
   if (context.marked === true) return make('marked');
-  // A block quote that opens with a byline ("BigSkyBarb · 5h") is a reply in a thread, in its writer's voice.
-  if (context.blockKind === 'blockquote' && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
+  // A block quote of one sentence, or a reply repeating words said earlier in the draft, quotes it; a
+  // block quote that holds a passage of its own (a reader's letter, a comment, a speaker's lines) is
+  // a voice of the draft, read like any utterance by what its own words mark (quotation marks, a
+  // myth label, a report). One that opens with a byline ("BigSkyBarb · 5h") or a label of its own
+  // ("Did you know?") is in its writer's voice.
+  if (context.blockKind === 'blockquote' && context.voiced !== true && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
   // "**Myth.** CO2 lags, so ...": a label that ends with a full stop is a sentence of its own, and labels the one after it.
   const label = bareLabel(context.previous);
   if (FACT_LABEL.test(s.text) || label === 'fact') return make('asserted');
