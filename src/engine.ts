@@ -643,22 +643,30 @@ function factMatcherOf(packs: LoadedPacks): TopicMatcher {
   return matcher;
 }
 
-const frameMatchers = new WeakMap<LoadedPacks, TopicMatcher>();
+const frameMatchers = new WeakMap<LoadedPacks, { either: TopicMatcher; condition: TopicMatcher; later: TopicMatcher }>();
 
 /**
  * The frames of a reasoning check that stand as a sentence of their own in a thread, with no subject
  * word: the either/or frame ("It can't be both.", "cant be both, pick one": lexicon
- * `causes.either-or`). Read in the words as the tokenizer cuts them, so "can't" and "cant" are
+ * `causes.either-or`) and the lag put as a condition ("If the effect comes after, it cannot be the
+ * cause": `stance.condition` with `order.after`). Read in the words as the tokenizer cuts them, so "can't" and "cant" are
  * "can not" as the lexicon writes it; only where the sentence's window names a subject.
  */
 function standsAloneAsFrame(text: string, packs: LoadedPacks): boolean {
-  let matcher = frameMatchers.get(packs);
-  if (matcher === undefined) {
-    matcher = createTopicMatcher(classWordsOf(packs.lexicon, 'causes', ['either-or']));
-    frameMatchers.set(packs, matcher);
+  let matchers = frameMatchers.get(packs);
+  if (matchers === undefined) {
+    matchers = {
+      either: createTopicMatcher(classWordsOf(packs.lexicon, 'causes', ['either-or'])),
+      condition: createTopicMatcher(classWordsOf(packs.lexicon, 'stance', ['condition'])),
+      later: createTopicMatcher(classWordsOf(packs.lexicon, 'order', ['after'])),
+    };
+    frameMatchers.set(packs, matchers);
   }
-  const words = tokenizeSentence(text, [], null);
-  return matcher.test(words.words.map((i) => words.tokens[i]?.text ?? '').join(' '));
+  const tokens = tokenizeSentence(text, [], null);
+  const words = tokens.words.map((i) => tokens.tokens[i]?.text ?? '').join(' ');
+  // "If it comes afterwards, it isn't driving anything": the lag put as a condition (lexicon
+  // `stance.condition` with `order.after`), its latecomer left to the sentences before.
+  return matchers.either.test(words) || (matchers.condition.test(words) && matchers.later.test(words));
 }
 
 /** The lexicon entity keys a direction fact's form names. */

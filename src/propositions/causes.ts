@@ -53,6 +53,9 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     // "global warming", "Antarctic cooling": a region word before it makes the -ing form a noun.
     if (verbLike && s.words[h.first]?.text.endsWith('ing') && regions.some((r) => r.last === h.first - 1)) continue;
     if (h.key === 'effects' && s.words[h.first - 1]?.text === 'in') continue;
+    // "CO2 only started rising", "temperature began to climb": a verb of starting before a change
+    // word (lexicon `changes`) tells when the change began, not what began it.
+    if ((h.key === 'start' || h.key === 'verbs') && beginsChange(s, h)) continue;
     // "does not make CO2 a bystander", "turns it into a mere follower": a casting verb puts its object
     // in the part the noun after it names; the verb itself causes nothing.
     if (h.key === 'verbs' && CASTING.has(s.words[h.first]?.text ?? '') && s.of('causes').some((o) => ['effects', 'roles', 'nouns'].includes(o.key) && o.first > h.last && o.first - h.last <= 4)) continue;
@@ -79,6 +82,20 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
   if (own.length > 0 || previous === undefined) return own;
   return answerCauses(s, choiceOf(previous, readCauses(previous)));
 }
+
+/**
+ * A verb of starting or ending whose object is a change told as a verb ("started rising", "began
+ * to climb", "stopped falling"): the change word of lexicon `changes` opens right after it, or
+ * after "to". The words of the hit are themselves a single verb ("start", "begin", "end").
+ */
+function beginsChange(s: ReadSentence, h: LexHit): boolean {
+  if (h.last !== h.first || !ASPECT_VERBS.has(h.base ?? '')) return false;
+  const next = s.words[h.last + 1]?.text === 'to' ? h.last + 2 : h.last + 1;
+  return s.of('changes').some((c) => c.first === next && c.key !== 'increment');
+}
+
+/** Verbs of a change's course: before a change word they tell when it began or ended (common practice of English grammar: aspectual verbs). */
+const ASPECT_VERBS = new Set(['start', 'begin', 'end', 'kick off', 'set off']);
 
 /** The forms of "do", the verb whose object names a part in a cause ("did the work", "does nothing"). */
 const DO_FORMS = new Set(['do', 'does', 'did', 'done', 'doing']);

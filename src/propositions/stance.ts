@@ -64,6 +64,8 @@ export interface StanceContext {
 const JOINS = new Set(['so', 'and', 'but', 'then', 'or', 'yet']);
 const AUX = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const WH = new Set(['how', 'why']);
+/** Words that open a question after a joining word ("..., so which is it?", "..., so maybe we ...?"). */
+const JOINED_OPENERS = new Set(['which', 'what', 'who', 'maybe', 'perhaps']);
 /**
  * Subjects whose report the writer relies on rather than answers. "The release itself concludes
  * that...": a source stressed by "itself" is the draft's own or one it cites as authority (an outside
@@ -215,9 +217,12 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   });
   const negative = AUX.has(first) && s.words[1]?.text === 'not';
   // "X, so how can you trust it?": a question after a statement leaves the statement asserted.
+  // "..., so which is it?", "..., so maybe we drop the point?": after a joining word, a question word
+  // of any kind or a word of proposing opens the question too.
+  const joined = (at: number) => JOINED_OPENERS.has(s.words[at]?.text ?? '') && JOINS.has(s.words[at - 1]?.text ?? '');
   const start = s.words.findIndex((_, i) => {
     const at = opens(i);
-    return at >= 0 && (WH.has(s.words[at]?.text ?? '') || AUX.has(s.words[at]?.text ?? ''));
+    return at >= 0 && (WH.has(s.words[at]?.text ?? '') || AUX.has(s.words[at]?.text ?? '') || joined(at));
   });
   const premise = start > 2 && !WH.has(first) && !AUX.has(first) ? { questionFrom: s.words[start]?.start ?? 0 } : {};
   if ((how || negative) && !answeredNext) return { ...make('rhetorical', how), ...premise };
