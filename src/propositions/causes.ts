@@ -36,7 +36,10 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     // "temperature and CO2 moved together": the verb of a co-variation phrase (lexicon `correlation`)
     // says the two went together, not that one moved the other.
     .filter((h) => ![...entities, ...s.of('order'), ...s.of('correlation')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first))
-    .filter((h) => !s.of('exclusive').some((e) => e.first <= h.first && e.last >= h.last && e.last - e.first > h.last - h.first));
+    .filter((h) => !s.of('exclusive').some((e) => e.first <= h.first && e.last >= h.last && e.last - e.first > h.last - h.first))
+    // "tracked each other", "mirror one another": a reciprocal object right after a co-variation
+    // word (lexicon `correlation`) says the two went together, not that each drove the other.
+    .filter((h) => h.key !== 'feedback' || !s.of('correlation').some((c) => c.last + 1 === h.first));
   const causes: Cause[] = [];
   for (const h of [...hits, ...doingHits(s)].sort((a, b) => a.first - b.first)) {
     // `passive` only qualifies an `effects` word at the same place; it states nothing of its own;
