@@ -14,7 +14,7 @@ import { FirnlineError } from './errors.js';
 import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { isChecklistText } from './report/checklist-lines.js';
-import { createTopicMatcher, splitSentences, type TopicMatcher } from './prose/index.js';
+import { createTopicMatcher, repeatsEarlierText, splitSentences, type TopicMatcher } from './prose/index.js';
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
 import { introOf, leadInOf } from './prose/lead-in.js';
@@ -248,7 +248,10 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     // the text under it), the reasoning checks and the stance reader read only what it asserts.
     const asserted = sentences.map((s) => (s.label === undefined ? s.text : s.text.slice(0, s.label).replace(/\S/gu, ' ') + s.text.slice(s.label)));
     const assertedWindowOf = paragraphWindows(asserted);
-    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(isReplyQuote(draft.text, draft.blocks, blockIndex) ? { reply: true } : {}) };
+    // A block quote of one sentence, or one that repeats earlier words of the draft (a reply quoting
+    // the post it answers), quotes what it holds; a passage of its own is a voice of the draft.
+    const voiced = block.kind === 'blockquote' && sentences.length >= 2 && !repeatsEarlierText(draft.text, block);
+    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(isReplyQuote(draft.text, draft.blocks, blockIndex) ? { reply: true } : {}), ...(voiced ? { voiced } : {}) };
     // The period the blocks just before named sets the scene of this block's opening sentences.
     const scene = sceneBefore(draft.blocks, blockIndex, packs);
     const opening: ParagraphContext = scene === undefined ? context : { ...context, scene };
@@ -354,7 +357,7 @@ function examineCached(
   asserted: string[] = paragraph,
 ): SentenceFindings | undefined {
   const previous = previousOnTopic();
-  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.reply === true, context.heading ?? '', context.marked === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.reply === true, context.heading ?? '', context.marked === true, context.voiced === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
     examineSentence(paragraph, index, packs, onTopic, context, () => previous, leadIn, asserted),
   );
 }
@@ -648,22 +651,30 @@ function factMatcherOf(packs: LoadedPacks): TopicMatcher {
   return matcher;
 }
 
-const frameMatchers = new WeakMap<LoadedPacks, TopicMatcher>();
+const frameMatchers = new WeakMap<LoadedPacks, { either: TopicMatcher; condition: TopicMatcher; later: TopicMatcher }>();
 
 /**
  * The frames of a reasoning check that stand as a sentence of their own in a thread, with no subject
  * word: the either/or frame ("It can't be both.", "cant be both, pick one": lexicon
- * `causes.either-or`). Read in the words as the tokenizer cuts them, so "can't" and "cant" are
+ * `causes.either-or`) and the lag put as a condition ("If the effect comes after, it cannot be the
+ * cause": `stance.condition` with `order.after`). Read in the words as the tokenizer cuts them, so "can't" and "cant" are
  * "can not" as the lexicon writes it; only where the sentence's window names a subject.
  */
 function standsAloneAsFrame(text: string, packs: LoadedPacks): boolean {
-  let matcher = frameMatchers.get(packs);
-  if (matcher === undefined) {
-    matcher = createTopicMatcher(classWordsOf(packs.lexicon, 'causes', ['either-or']));
-    frameMatchers.set(packs, matcher);
+  let matchers = frameMatchers.get(packs);
+  if (matchers === undefined) {
+    matchers = {
+      either: createTopicMatcher(classWordsOf(packs.lexicon, 'causes', ['either-or'])),
+      condition: createTopicMatcher(classWordsOf(packs.lexicon, 'stance', ['condition'])),
+      later: createTopicMatcher(classWordsOf(packs.lexicon, 'order', ['after'])),
+    };
+    frameMatchers.set(packs, matchers);
   }
-  const words = tokenizeSentence(text, [], null);
-  return matcher.test(words.words.map((i) => words.tokens[i]?.text ?? '').join(' '));
+  const tokens = tokenizeSentence(text, [], null);
+  const words = tokens.words.map((i) => tokens.tokens[i]?.text ?? '').join(' ');
+  // "If it comes afterwards, it isn't driving anything": the lag put as a condition (lexicon
+  // `stance.condition` with `order.after`), its latecomer left to the sentences before.
+  return matchers.either.test(words) || (matchers.condition.test(words) && matchers.later.test(words));
 }
 
 /** The lexicon entity keys a direction fact's form names. */

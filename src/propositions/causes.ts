@@ -36,12 +36,15 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     // "temperature and CO2 moved together": the verb of a co-variation phrase (lexicon `correlation`)
     // says the two went together, not that one moved the other.
     .filter((h) => ![...entities, ...s.of('order'), ...s.of('correlation')].some((e) => e.first <= h.first && e.last >= h.last && e.last > e.first))
-    .filter((h) => !s.of('exclusive').some((e) => e.first <= h.first && e.last >= h.last && e.last - e.first > h.last - h.first));
+    .filter((h) => !s.of('exclusive').some((e) => e.first <= h.first && e.last >= h.last && e.last - e.first > h.last - h.first))
+    // "tracked each other", "mirror one another": a reciprocal object right after a co-variation
+    // word (lexicon `correlation`) says the two went together, not that each drove the other.
+    .filter((h) => h.key !== 'feedback' || !s.of('correlation').some((c) => c.last + 1 === h.first));
   const causes: Cause[] = [];
   for (const h of [...hits, ...doingHits(s)].sort((a, b) => a.first - b.first)) {
     // `passive` only qualifies an `effects` word at the same place; it states nothing of its own;
     // `deeds` are read with their "do" (doingHits).
-    if (h.key === 'reverse' || h.key === 'either-or' || h.key === 'passive' || h.key === 'deeds') continue;
+    if (h.key === 'reverse' || h.key === 'either-or' || h.key === 'passive' || h.key === 'deeds' || h.key === 'needed-without') continue;
     // "the resulting warming", "a forced response": a part noun's verb forms are no noun.
     if (NOUN_KEYS.has(h.key) && !asNoun(s, h)) continue;
     const verbLike = h.key === 'verbs' || h.key === 'start' || h.key === 'amplify' || h.key === 'sufficient-verbs';
@@ -53,6 +56,9 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
     // "global warming", "Antarctic cooling": a region word before it makes the -ing form a noun.
     if (verbLike && s.words[h.first]?.text.endsWith('ing') && regions.some((r) => r.last === h.first - 1)) continue;
     if (h.key === 'effects' && s.words[h.first - 1]?.text === 'in') continue;
+    // "CO2 only started rising", "temperature began to climb": a verb of starting before a change
+    // word (lexicon `changes`) tells when the change began, not what began it.
+    if ((h.key === 'start' || h.key === 'verbs') && beginsChange(s, h)) continue;
     // "does not make CO2 a bystander", "turns it into a mere follower": a casting verb puts its object
     // in the part the noun after it names; the verb itself causes nothing.
     if (h.key === 'verbs' && CASTING.has(s.words[h.first]?.text ?? '') && s.of('causes').some((o) => ['effects', 'roles', 'nouns'].includes(o.key) && o.first > h.last && o.first - h.last <= 4)) continue;
@@ -79,6 +85,20 @@ export function readCauses(s: ReadSentence, previous?: ReadSentence): Cause[] {
   if (own.length > 0 || previous === undefined) return own;
   return answerCauses(s, choiceOf(previous, readCauses(previous)));
 }
+
+/**
+ * A verb of starting or ending whose object is a change told as a verb ("started rising", "began
+ * to climb", "stopped falling"): the change word of lexicon `changes` opens right after it, or
+ * after "to". The words of the hit are themselves a single verb ("start", "begin", "end").
+ */
+function beginsChange(s: ReadSentence, h: LexHit): boolean {
+  if (h.last !== h.first || !ASPECT_VERBS.has(h.base ?? '')) return false;
+  const next = s.words[h.last + 1]?.text === 'to' ? h.last + 2 : h.last + 1;
+  return s.of('changes').some((c) => c.first === next && c.key !== 'increment');
+}
+
+/** Verbs of a change's course: before a change word they tell when it began or ended (common practice of English grammar: aspectual verbs). */
+const ASPECT_VERBS = new Set(['start', 'begin', 'end', 'kick off', 'set off']);
 
 /** The forms of "do", the verb whose object names a part in a cause ("did the work", "does nothing"). */
 const DO_FORMS = new Set(['do', 'does', 'did', 'done', 'doing']);
@@ -282,6 +302,15 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
   // "the sun did it all": a verb of doing everything with no object named is said of the whole event.
   const sufficed = (SUFFICIENT_KEYS.has(h.key) || sufficientBefore(s, h, agentThing)) && (patient === 'ice-age' || (h.key === 'sufficient-verbs' && patient === undefined));
   const exclusive = isExclusive(s, h, agentThing) || (cleft !== undefined && h.key !== 'amplify') || h.key === 'because-only' || sufficed;
+  // "the ice-age cooling can't be explained without it": a cause denied save for a thing the clause
+  // names after it (lexicon `causes.needed-without`) grants that thing a part in what the subject did.
+  const needed = polarity === 'denied' ? neededThing(s, h) : undefined;
+  if (needed !== undefined) {
+    const holder = kindOf(s, needed, previous, RECORDS);
+    const subject = kind(agentThing);
+    if (holder === undefined) return [];
+    return [{ kind: 'cause', role: 'cause', polarity: 'asserted', exclusive: false, start, end: s.words[needed.last]?.end ?? end, agent: holder, ...(subject === undefined || subject === holder ? {} : { patient: subject }) }];
+  }
   // "CO2 rides in the back", "CO2 merely reading the dial": a follower's part denies its subject a
   // cause; "CO2 is not just along for the ride" grants one.
   if (h.key === 'follower' && polarity !== 'open') {
@@ -307,6 +336,17 @@ function causeAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Cause[] {
     out.push({ kind: 'cause', agent: patient, role: 'cause', polarity: 'denied', exclusive: false, start, end });
   }
   return out;
+}
+
+/**
+ * The thing named just after a cause word by a phrase of lexicon `causes.needed-without` ("explained
+ * without it", "ended but for the CO2"): within two words of the cause word, its thing within three
+ * words of the phrase, in the same clause.
+ */
+function neededThing(s: ReadSentence, h: LexHit): Thing | undefined {
+  const phrase = s.of('causes', 'needed-without').find((n) => n.first > h.last && n.first - h.last <= 3 && s.words[n.first]?.clause === s.words[h.last]?.clause);
+  if (phrase === undefined) return undefined;
+  return s.things.find((t) => t.first > phrase.last && t.first - phrase.last <= 3 && s.words[t.first]?.clause === s.words[phrase.first]?.clause);
 }
 
 /** Words that may stand between a verb of coming from and its "from" ("came largely from", "stems entirely from"). */

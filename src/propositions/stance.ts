@@ -52,6 +52,8 @@ export interface StanceContext {
   marked?: boolean;
   /** A block quote that is a post under its byline (prose/reply-quote.ts): its writer's own voice. */
   reply?: boolean;
+  /** A block quote that holds a passage of its own, repeating nothing said before: a voice of the draft (ParagraphContext). */
+  voiced?: boolean;
   /** The next sentence of the paragraph, read (it can answer a question or endorse a report). */
   next?: ReadSentence;
   /** The paragraph's first sentence, read, when it is not this one (a block quote's label). */
@@ -64,6 +66,8 @@ export interface StanceContext {
 const JOINS = new Set(['so', 'and', 'but', 'then', 'or', 'yet']);
 const AUX = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const WH = new Set(['how', 'why']);
+/** Words that open a question after a joining word ("..., so which is it?", "..., so maybe we ...?"). */
+const JOINED_OPENERS = new Set(['which', 'what', 'who', 'maybe', 'perhaps']);
 /**
  * Subjects whose report the writer relies on rather than answers. "The release itself concludes
  * that...": a source stressed by "itself" is the draft's own or one it cites as authority (an outside
@@ -99,8 +103,12 @@ function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance
   const endorsed = s.of('stance', 'endorse').length > 0 || (context.next?.of('stance', 'endorse').some((h) => h.first <= 4) ?? false);
   const make = (kind: StanceKind, flips = false): SentenceStance => ({ kind, endorsed: kind !== 'asserted' && endorsed, flips });
   if (context.marked === true) return make('marked');
-  // A block quote that opens with a byline ("BigSkyBarb · 5h") is a reply in a thread, in its writer's voice.
-  if (context.blockKind === 'blockquote' && context.reply !== true && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
+  // A block quote of one sentence, or a reply repeating words said earlier in the draft, quotes it; a
+  // block quote that holds a passage of its own (a reader's letter, a comment, a speaker's lines) is
+  // a voice of the draft, read like any utterance by what its own words mark (quotation marks, a
+  // myth label, a report). One that opens with a byline ("BigSkyBarb · 5h") or a label of its own
+  // ("Did you know?") is in its writer's voice.
+  if (context.blockKind === 'blockquote' && context.reply !== true && context.voiced !== true && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
   // "**Myth.** CO2 lags, so ...": a label that ends with a full stop is a sentence of its own, and labels the one after it.
   const label = bareLabel(context.previous);
   if (FACT_LABEL.test(s.text) || label === 'fact') return make('asserted');
@@ -214,9 +222,12 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   const negative = AUX.has(first) && s.words[1]?.text === 'not';
   // "X, so how can you trust it?", "X, so what's the fuss?", "X, right?": a question after a
   // statement leaves the statement asserted (a trailing tag asks only for agreement).
+  // "..., so which is it?", "..., so maybe we drop the point?": after a joining word, a question word
+  // of any kind or a word of proposing opens the question too.
+  const joined = (at: number) => JOINED_OPENERS.has(s.words[at]?.text ?? '') && JOINS.has(s.words[at - 1]?.text ?? '');
   const opened = s.words.findIndex((_, i) => {
     const at = opens(i);
-    return at >= 0 && (WH.has(s.words[at]?.text ?? '') || AUX.has(s.words[at]?.text ?? '') || isPremiseQuestionWord(s.words[at]?.text ?? ''));
+    return at >= 0 && (WH.has(s.words[at]?.text ?? '') || AUX.has(s.words[at]?.text ?? '') || isPremiseQuestionWord(s.words[at]?.text ?? '') || joined(at));
   });
   // A tag answered yes or no by the next sentence ("..., right?" "Not quite. ...") was put up to be
   // answered, as an interviewer prompts a guest; one that the next voice merely goes on from keeps

@@ -1,2 +1,3 @@
 export { opensUtterance, splitSentences } from './split-sentences.js';
 export { createTopicMatcher, type TopicMatcher } from './topic-matcher.js';
+export { repeatsEarlierText } from './quoted-reply.js';

@@ -116,7 +116,7 @@ function earlierSentences(read: DetectInput['read'], index: number): ReadSentenc
 function framedInWords(s: ReadSentence, earlier: readonly ReadSentence[]): Cue | undefined {
   const frame = s.of('causes', 'either-or').find((h) => polarityAt(s, h.first) === 'asserted');
   if (frame === undefined) return undefined;
-  const causal = (r: ReadSentence | undefined) => r !== undefined && r.of('causes').some((h) => h.key !== 'either-or' && h.key !== 'passive');
+  const causal = (r: ReadSentence | undefined) => r !== undefined && r.of('causes').some((h) => h.key !== 'either-or' && h.key !== 'passive' && h.key !== 'needed-without');
   const co2 = (r: ReadSentence | undefined) => r !== undefined && r.of('entities', 'co2').length > 0;
   if (co2(s)) {
     if (!causal(s) && !causal(earlier[0])) return undefined;

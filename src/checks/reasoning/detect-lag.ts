@@ -10,7 +10,7 @@
  * Denying only the trigger is right (orbital changes started each deglaciation): a denied `start`
  * role passes, and so does a sentence that grants CO2 an amplifying or feedback role.
  */
-import type { ReadSentence } from '../../propositions/index.js';
+import type { Cause, ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isBareFragment } from './reading.js';
 import { isCo2OnWarming, isTemperatureFirst, opensWithInference } from './queries.js';
@@ -32,6 +32,12 @@ function detect({ index, read }: DetectInput): Cue[] {
   // "A gas that turns up late can't be the one who lit it": the latecomer named is CO2 itself.
   const context = maxim !== undefined && (maxim.co2 || [here, read(index - 1), read(index - 2)].some((r) => r?.props.orders.some(isTemperatureFirst) ?? false));
   const latecomer = maxim !== undefined && context ? [{ start: maxim.start, end: maxim.end }] : [];
+  // "If the effect comes after, it cannot be the cause.", "If it came after the warming it can't be
+  // driving it": the lag put as a condition, its latecomer unnamed, after a sentence that puts
+  // temperature first; or named CO2 itself ("if CO2 really lagged then it can't have done the warming").
+  const conditional = conditionalLatecomer(here.s, here.props.causes);
+  const premised = conditional !== undefined && (conditional.co2 || [here, read(index - 1), read(index - 2)].some((r) => r?.props.orders.some(isTemperatureFirst) ?? false));
+  if (conditional !== undefined && premised && latecomer.length === 0) latecomer.push({ start: conditional.start, end: conditional.end });
   if (!ordered) return latecomer;
   // "a consequence cannot also be a cause": an agent left unnamed in a sentence about CO2 is CO2.
   const aboutCo2 = here.s.of('entities', 'co2').length > 0;
@@ -63,6 +69,32 @@ function latecomerDenied(s: ReadSentence): (Cue & { co2: boolean }) | undefined 
   if (!late || verb === undefined) return undefined;
   const co2 = s.things.some((t) => t.kind === 'co2' && t.last === rel - 1);
   return { start: s.words[modal]?.start ?? 0, end: s.words.at(-1)?.end ?? 0, co2 };
+}
+
+/** Words that may open the latecomer of a condition: a pronoun, or a part's name ("the effect", "the follower"). */
+const STAND_INS = new Set(['it', 'they', 'something', 'anything', 'whatever', 'one', 'the', 'a', 'an']);
+
+/**
+ * A condition (lexicon `stance.condition`: "if", "given that") holding an order word that puts its
+ * subject later (lexicon `order.after`: "comes after", "lagged", "shows up late"), then a cause
+ * denied, not only the start, whose subject is a stand-in (a pronoun, "the effect") or CO2.
+ * Returns the denial's span, and whether the condition names CO2 as the latecomer.
+ */
+function conditionalLatecomer(s: ReadSentence, causes: readonly Cause[]): (Cue & { co2: boolean }) | undefined {
+  const condition = s.of('stance', 'condition')[0];
+  if (condition === undefined) return undefined;
+  const late = s.of('order', 'after').find((h) => h.first > condition.last && h.first - condition.last <= 8);
+  if (late === undefined) return undefined;
+  const lateEnd = s.words[late.last]?.end ?? 0;
+  const denial = causes.find((c) => c.polarity === 'denied' && c.role !== 'start' && c.role !== 'feedback' && c.start >= lateEnd && !onlyTheStart(s.text, c.end));
+  if (denial === undefined) return undefined;
+  const subject = s.words.find((w) => w.start >= denial.start);
+  const co2Subject = s.of('entities', 'co2').some((e) => s.words[e.first]?.start === denial.start);
+  if (subject === undefined || (!STAND_INS.has(subject.text) && !co2Subject)) return undefined;
+  // Another thing named as the denied agent ("it cannot be the orbit that..."): not the latecomer.
+  if (denial.agent !== undefined && denial.agent !== 'co2' && !STAND_INS.has(subject.text)) return undefined;
+  const co2 = s.of('entities', 'co2').some((e) => e.first > condition.last && e.last < late.first);
+  return { start: denial.start, end: denial.end, co2 };
 }
 
 /** "played no part in starting it": a denial about the start only. */
