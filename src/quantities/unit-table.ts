@@ -35,12 +35,12 @@ const BP = String.raw`(?:BP|B\.P\.)`;
 /**
  * The words that count an age back from now: "ago", and as people also write it, "back" ("fifty
  * thousand years back"; not "back then", "back in", which date a time and speak of no span),
- * "before present", "before now", "before today", "in the past" (common practice); for years,
+ * "before present" (or "before the present"), "before now", "before today", "in the past" (common practice); for years,
  * millennia and centuries. After kyr or Ma only "ago" and "before present" make an age ("reaches
  * 420 kyr back" stays the span it was read as).
  */
-const AGO_WORDS = '(?:ago|back(?! (?:then|in(?! (?:time|the past)\\b)|when|to|from|at|during|before|after|and|or|of|by|up|down|out|over)\\b)|before (?:present|now|today)|in the past)';
-const AGO = words('(?:ago|before present)');
+const AGO_WORDS = '(?:ago|back(?! (?:then|in(?! (?:time|the past)\\b)|when|to|from|at|during|before|after|and|or|of|by|up|down|out|over)\\b)|before (?:the present|present|now|today)|in the past)';
+const AGO = words('(?:ago|before (?:the )?present)');
 /**
  * A bare "degrees" is a temperature (read as Celsius, the science writer's default: common practice)
  * only in a clause about temperature: a comparative or a warming word right after it ("one degree
@@ -76,7 +76,7 @@ const BASE_UNITS: UnitDef[] = [
   u('millennium', 'duration', 1e3, 'millennia', [words('(?:millennium|millennia|millenniums)')]),
   u('yr BP', 'age', 1, 'years BP', [
     String.raw`(?:[cC]al(?:ibrated)?\.?[\s\u00A0]+)?(?:${YEAR_WORD}[\s\u00A0]+)?${BP}`,
-    words('(?:years?|yrs?) before present'),
+    words('(?:years?|yrs?) before (?:the )?present'),
     // "11,750 years before 1950", "... before the year 1950": the BP convention's reference year written out (Stuiver & Polach 1977).
     words('(?:years?|yrs?) before (?:the year |ad )?1950'),
   ]),

@@ -77,6 +77,9 @@ export const LABELLED_SET: LabelledSentence[] = [
   s('The glacial inception began 115,000 years ago.', age('115,000 years ago', 114500, 115500)),
   s('A volcanic layer from 74 ka marks the Toba eruption.', age('74 ka', 73500, 74500)),
   s('The Laacher See eruption left ash 12,900 years before present.', age('12,900 years before present', 12850, 12950)),
+  // "before the present" is the same age as "before present" (common practice), never a span of years.
+  s('The cold spell set in 12,900 years before the present and held for 1,200 years.', age('12,900 years before the present', 12850, 12950), d('1,200 years', 1150, 1250)),
+  s('Ash from 74 ka before the present marks the eruption.', age('74 ka before the present', 73500, 74500)),
   s('Dates given as 12,850 b2k appear in the Greenland tables.', age('12,850 b2k', 12795, 12805)),
   s('The sea began to rise after 19 kyr BP.', age('19 kyr BP', 18500, 19500)),
   s('Since 1958 the Mauna Loa record has grown each year.', age('1958', -8.5, -7.5)),
