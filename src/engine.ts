@@ -250,8 +250,11 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     const assertedWindowOf = paragraphWindows(asserted);
     // A block quote of one sentence, or one that repeats earlier words of the draft (a reply quoting
     // the post it answers), quotes what it holds; a passage of its own is a voice of the draft.
-    const voiced = block.kind === 'blockquote' && sentences.length >= 2 && !repeatsEarlierText(draft.text, block);
-    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(isReplyQuote(draft.text, draft.blocks, blockIndex) ? { reply: true } : {}), ...(voiced ? { voiced } : {}) };
+    // A reply under a byline that repeats the post it answers quotes it too.
+    const repeats = block.kind === 'blockquote' && repeatsEarlierText(draft.text, block);
+    const voiced = block.kind === 'blockquote' && sentences.length >= 2 && !repeats;
+    const reply = !repeats && isReplyQuote(draft.text, draft.blocks, blockIndex);
+    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(reply ? { reply } : {}), ...(voiced ? { voiced } : {}) };
     // The period the blocks just before named sets the scene of this block's opening sentences.
     const scene = sceneBefore(draft.blocks, blockIndex, packs);
     const opening: ParagraphContext = scene === undefined ? context : { ...context, scene };

@@ -84,12 +84,34 @@ function detect({ index, own, read }: DetectInput): Cue[] {
 /**
  * Two directions set up as a choice: an "or" stands between them, inside the stretch the two causes
  * cover ("Either the ocean warmed and released CO2, or CO2 warmed the ocean"). An "or" elsewhere in
- * the sentence ("..., so it's not one or the other") joins no choice of theirs.
+ * the sentence ("..., so it's not one or the other") joins no choice of theirs, nor does one in the
+ * words both causes share, joining two modifiers of a common agent ("CO2 and shrinking or growing
+ * ice sheets then amplified the changes").
  */
 function joinedByOr(s: ReadSentence, a: Cause, b: Cause): boolean {
-  const from = Math.min(a.start, b.start);
-  const to = Math.max(a.end, b.end);
-  return s.words.some((w) => w.text === 'or' && w.start > from && w.end < to);
+  const shared: [number, number] = [Math.max(a.start, b.start), Math.min(a.end, b.end)];
+  const inShared = (w: { start: number; end: number }) => w.start >= shared[0] && w.end <= shared[1];
+  return s.words.some((w, i) => w.text === 'or' && w.start > Math.min(a.start, b.start) && w.end < Math.max(a.end, b.end) && !inShared(w) && !joinsModifiers(s, i));
+}
+
+/**
+ * Words that open a verb's object or complement rather than stand as the head noun of a phrase:
+ * determiners, pronouns and prepositions (English grammar, common practice).
+ */
+const OBJECT_OPENERS = new Set(['the', 'a', 'an', 'it', 'its', 'them', 'their', 'this', 'that', 'these', 'those', 'by', 'on', 'of', 'to', 'in', 'from', 'with', 'behind', 'after', 'before', 'each', 'one']);
+
+/**
+ * Whether the "or" at word `i` joins two participles that modify the noun after them, in a phrase
+ * joined to another ("CO2 and spreading or shrinking ice", "CO2 and shrinking or growing ice
+ * sheets"), not two verbs with an object ("driving or following the warming") nor a noun in -ing and
+ * a new clause ("the warming or rising temperatures drove CO2").
+ */
+function joinsModifiers(s: ReadSentence, i: number): boolean {
+  if (!['and', 'with', 'plus'].includes(s.words[i - 2]?.text ?? '')) return false;
+  const before = s.words[i - 1]?.text ?? '';
+  const after = s.words[i + 1]?.text ?? '';
+  const head = s.words[i + 2]?.text;
+  return before.endsWith('ing') && after.endsWith('ing') && head !== undefined && /^\p{L}/u.test(head) && !OBJECT_OPENERS.has(head) && s.words[i + 2]?.segment === s.words[i]?.segment;
 }
 
 /** How far back a frame that names neither side looks for the cause and CO2 it is about. */
