@@ -139,6 +139,20 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-ae-2': { recall: 0.64, falseFlags: 0.04 },
   'tuning-ae-3': { recall: 0.73, falseFlags: 0.08 },
   'tuning-ae-4': { recall: 0.6, falseFlags: 0.05 },
+  // tuning-af-1..4 were written fresh at the fifteenth round's start and read, totals only, to judge
+  // each branch before merging (124/171 caught, false flags 22/327, at the start and through all five
+  // merges), then read in full at the end; three false flags they showed were fixed (19/327).
+  // tuning-ag-1..4 were the blind hold-out holdout-s, written in the fourteenth round and read, totals
+  // only, on the fifteenth round's first and last code (89/121 and 28/42 caught at the start, 90/121
+  // and 30/42 at the end; false flags 5/230 and 3/83 throughout).
+  'tuning-af-1': { recall: 0.8, falseFlags: 0.12 },
+  'tuning-af-2': { recall: 0.55, falseFlags: 0.06 },
+  'tuning-af-3': { recall: 0.8, falseFlags: 0.04 },
+  'tuning-af-4': { recall: 0.55, falseFlags: 0.1 },
+  'tuning-ag-1': { recall: 0.65, falseFlags: 0.03 },
+  'tuning-ag-2': { recall: 0.78, falseFlags: 0.05 },
+  'tuning-ag-3': { recall: 0.65, falseFlags: 0.07 },
+  'tuning-ag-4': { recall: 0.66, falseFlags: 0.06 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -169,12 +183,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (84.8% measured over 82 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (85.8% measured over 90 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.8% measured over 82 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.9% measured over 90 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
