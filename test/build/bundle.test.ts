@@ -7,6 +7,7 @@ import { existsSync, readFileSync, statSync } from 'node:fs';
 import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { type Main, run } from './run-main.js';
 
 const root = fileURLToPath(new URL('../../', import.meta.url));
 const dist = join(root, 'dist');
@@ -31,16 +32,6 @@ function moduleGraph(entry: string): string[] {
     for (const m of text.matchAll(/(?:\bfrom\s*|\bimport\s*\(\s*|\bimport\s+)['"](\.{1,2}\/[^'"]+)['"]/gu)) todo.push(resolve(dirname(file), m[1] as string));
   }
   return [...seen].map((f) => relative(root, f).split('\\').join('/')).sort();
-}
-
-type Main = (argv: string[], context: Record<string, unknown>) => Promise<number>;
-
-/** One in-memory run of a build of the command line. */
-async function run(main: Main, argv: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
-  let stdout = '';
-  let stderr = '';
-  const code = await main(argv, { cwd: root, env: {}, isTTY: false, stdout: (t: string) => void (stdout += t), stderr: (t: string) => void (stderr += t), readStdin: async () => '' });
-  return { code, stdout, stderr };
 }
 
 describe('the bundled command line (dist/bundle/)', () => {

@@ -12,6 +12,7 @@ import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
 import { HEAP_GROWING_PERCENT } from '../../src/cli/speed-options.js';
+import { type Main, run } from './run-main.js';
 
 const root = fileURLToPath(new URL('../../', import.meta.url));
 const bundleDir = join(root, 'dist', 'bundle');
@@ -23,15 +24,6 @@ const loader = createRequire(import.meta.url)(loaderPath) as {
   FORMAT: string;
   decodeCache: (bytes: Buffer | undefined, source: string) => Buffer | undefined;
 };
-
-type Main = (argv: string[], context: Record<string, unknown>) => Promise<number>;
-
-async function run(main: Main, argv: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
-  let stdout = '';
-  let stderr = '';
-  const code = await main(argv, { cwd: root, env: {}, isTTY: false, stdout: (t: string) => void (stdout += t), stderr: (t: string) => void (stderr += t), readStdin: async () => '' });
-  return { code, stdout, stderr };
-}
 
 /** A check of one demo draft in a fresh process, as the launcher runs it, with the cache file given. */
 function checkWith(cache: string): { used: boolean; code: number; stdout: string; stderr: string } {
