@@ -14,11 +14,10 @@ import { FirnlineError } from './errors.js';
 import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { isChecklistText } from './report/checklist-lines.js';
-import { createTopicMatcher, repeatsEarlierText, splitSentences, type TopicMatcher } from './prose/index.js';
+import { createTopicMatcher, isVoicedQuote, splitSentences, type TopicMatcher } from './prose/index.js';
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
 import { introOf, leadInOf } from './prose/lead-in.js';
-import { isReplyQuote } from './prose/reply-quote.js';
 import { classWordsOf, entityWordsOf, subjectWordsOf } from './propositions/index.js';
 import { tokenizeSentence } from './claims/frames-tokens.js';
 import { parseQuantities } from './quantities/index.js';
@@ -248,13 +247,10 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     // the text under it), the reasoning checks and the stance reader read only what it asserts.
     const asserted = sentences.map((s) => (s.label === undefined ? s.text : s.text.slice(0, s.label).replace(/\S/gu, ' ') + s.text.slice(s.label)));
     const assertedWindowOf = paragraphWindows(asserted);
-    // A block quote of one sentence, or one that repeats earlier words of the draft (a reply quoting
-    // the post it answers), quotes what it holds; a passage of its own is a voice of the draft.
-    // A reply under a byline that repeats the post it answers quotes it too.
-    const repeats = block.kind === 'blockquote' && repeatsEarlierText(draft.text, block);
-    const voiced = block.kind === 'blockquote' && sentences.length >= 2 && !repeats;
-    const reply = !repeats && isReplyQuote(draft.text, draft.blocks, blockIndex);
-    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(reply ? { reply } : {}), ...(voiced ? { voiced } : {}) };
+    // A block quote that is a post under its byline or a passage of its own is a voice of the draft;
+    // one of a single sentence, or one repeating earlier words of the draft, quotes what it holds.
+    const voiced = isVoicedQuote(draft.text, draft.blocks, blockIndex, sentences.length);
+    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(voiced ? { voiced } : {}) };
     // The period the blocks just before named sets the scene of this block's opening sentences.
     const scene = sceneBefore(draft.blocks, blockIndex, packs);
     const opening: ParagraphContext = scene === undefined ? context : { ...context, scene };
@@ -360,7 +356,7 @@ function examineCached(
   asserted: string[] = paragraph,
 ): SentenceFindings | undefined {
   const previous = previousOnTopic();
-  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.reply === true, context.heading ?? '', context.marked === true, context.voiced === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.voiced === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
     examineSentence(paragraph, index, packs, onTopic, context, () => previous, leadIn, asserted),
   );
 }

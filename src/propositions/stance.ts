@@ -50,9 +50,7 @@ export interface StanceContext {
   heading?: string;
   /** The block carries the deliberate-quotation marker (`<!-- firnline: reported -->`). */
   marked?: boolean;
-  /** A block quote that is a post under its byline (prose/reply-quote.ts): its writer's own voice. */
-  reply?: boolean;
-  /** A block quote that holds a passage of its own, repeating nothing said before: a voice of the draft (ParagraphContext). */
+  /** A block quote that is a post under its byline or holds a passage of its own, repeating nothing said before: a voice of the draft (prose/reply-quote.ts isVoicedQuote). */
   voiced?: boolean;
   /** The next sentence of the paragraph, read (it can answer a question or endorse a report). */
   next?: ReadSentence;
@@ -108,7 +106,7 @@ function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance
   // a voice of the draft, read like any utterance by what its own words mark (quotation marks, a
   // myth label, a report). One that opens with a byline ("BigSkyBarb · 5h") or a label of its own
   // ("Did you know?") is in its writer's voice.
-  if (context.blockKind === 'blockquote' && context.reply !== true && context.voiced !== true && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
+  if (context.blockKind === 'blockquote' && context.voiced !== true && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
   // "**Myth.** CO2 lags, so ...": a label that ends with a full stop is a sentence of its own, and labels the one after it.
   const label = bareLabel(context.previous);
   if (FACT_LABEL.test(s.text) || label === 'fact') return make('asserted');

@@ -1,3 +1,3 @@
 export { opensUtterance, splitSentences } from './split-sentences.js';
 export { createTopicMatcher, type TopicMatcher } from './topic-matcher.js';
-export { repeatsEarlierText } from './quoted-reply.js';
+export { isVoicedQuote, repeatsEarlierText } from './reply-quote.js';

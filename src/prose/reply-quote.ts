@@ -1,14 +1,21 @@
 /**
- * A block quote that is a post, not a quotation: comment and forum software (and writers pasting
- * from it) put a reply's body in a block quote under its byline, either as the quote's own first
- * paragraph or on the line just above the quote (common practice of comment sections):
+ * Whose voice a block quote speaks in. Comment and forum software (and writers pasting from it) put a
+ * reply's body in a block quote under its byline, either as the quote's own first paragraph or on the
+ * line just above the quote (common practice of comment sections); a reader's letter, a comment or a
+ * speaker's lines in a script stand in a block quote as a passage of their own. Both are voices of
+ * the draft, read like any utterance (propositions/stance.ts):
  *
  *   > **frostbyte_77** · 3 hours ago        **skeptic_sandra** · 2 days ago
  *   >                                       > Either CO2 drives temperature or ...
  *   > Sounds right. And 280 ppm is ...
  *
- * Such a block speaks in its writer's own voice. A quote nested deeper than a byline inside a quote
- * (someone else's words quoted inside the reply) stays a quotation.
+ * A block quote that repeats words said earlier in the draft quotes them (a reply quoting the post it
+ * answers), whatever stands above it; so does a block quote of one sentence pulled out to be
+ * answered, and a quote nested deeper than a byline inside a quote (someone else's words inside the
+ * reply):
+ *
+ *   harlan_v: So CO2 can't be what's driving the warming now, end of story.
+ *   MOkafor: > So CO2 can't be what's driving the warming now      ← repeats harlan_v: a quotation
  */
 import type { ProseBlock } from '../types.js';
 import { isByline } from './byline.js';
@@ -45,4 +52,33 @@ export function isReplyQuote(text: string, blocks: readonly ProseBlock[], index:
     start = before.offsets[0] ?? 0;
   }
   return false;
+}
+
+/** Fewest words a repeated stretch needs: shorter ones ("CO2 lagged") repeat by chance. */
+const MIN_WORDS = 4;
+/** Words of the block's opening compared: a reply quotes the start of what it answers, or a part of it. */
+const MAX_WORDS = 12;
+
+/** Lower-case words joined by single spaces, punctuation and markup dropped. */
+function wordsOf(text: string): string[] {
+  return text.toLowerCase().split(/[^\p{L}\p{N}'’]+/u).filter((w) => w.length > 0);
+}
+
+/** True when the opening words of `block` (a block quote) stand earlier in `text`, the draft's original text. */
+export function repeatsEarlierText(text: string, block: ProseBlock): boolean {
+  const opening = wordsOf(block.text).slice(0, MAX_WORDS);
+  if (opening.length < MIN_WORDS) return false;
+  const before = ` ${wordsOf(text.slice(0, block.offsets[0] ?? 0)).join(' ')} `;
+  return before.includes(` ${opening.join(' ')} `);
+}
+
+/**
+ * True when block `index` of `blocks`, a block quote of `sentences` sentences, speaks in a voice of the
+ * draft: it repeats nothing said earlier, and a post's byline opens or heads it or it holds a passage
+ * of two sentences or more.
+ */
+export function isVoicedQuote(text: string, blocks: readonly ProseBlock[], index: number, sentences: number): boolean {
+  const block = blocks[index];
+  if (block?.kind !== 'blockquote' || repeatsEarlierText(text, block)) return false;
+  return sentences >= 2 || isReplyQuote(text, blocks, index);
 }

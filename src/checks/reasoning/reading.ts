@@ -20,11 +20,9 @@ export interface ParagraphContext {
   heading?: string;
   /** The block carries the deliberate-quotation marker. */
   marked?: boolean;
-  /** A block quote that is a post under its byline (prose/reply-quote.ts), in its writer's own voice. */
-  reply?: boolean;
   /**
    * A block quote that holds a passage of its own (two sentences or more: a reader's letter, a
-   * comment, a speaker's lines), repeating nothing said earlier in the draft (prose/quoted-reply.ts):
+   * comment, a speaker's lines), repeating nothing said earlier in the draft, or a post under its byline (prose/reply-quote.ts isVoicedQuote):
    * a voice of the draft. One sentence pulled out to be answered, or a reply quoting the post it
    * answers, quotes what it holds.
    */
