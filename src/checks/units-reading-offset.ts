@@ -110,6 +110,8 @@ function asChange(q: Quantity): Quantity {
  * `earlier` is the sentences before it in the paragraph, nearest last.
  */
 export function readingOffsetSlips(text: string, qs: readonly Quantity[], earlier: readonly string[] = []): ReadingOffsetSlip[] {
+  // Only a Fahrenheit or kelvin figure can be a slip: without one, the sentences before are not read.
+  if (!qs.some((q) => q.statedUnit === 'degF' || q.statedUnit === 'K')) return [];
   const before = earlier.flatMap((s) => changesOf(s, parseQuantities(s)));
   const here = changesOf(text, qs);
   const out: ReadingOffsetSlip[] = [];
