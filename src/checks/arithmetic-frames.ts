@@ -213,8 +213,13 @@ export function isPaceRatio(text: string, q: Quantity): boolean {
   return q.dimension === 'ratio' && PACE_AFTER.test(text.slice(q.end, q.end + 24));
 }
 
+/**
+ * Participles that say an amount was laid out across a time ("80 ppm spread over 7,000 years",
+ * "stretched across", "drawn out over"): the amount is still the change the time took.
+ */
+const SPREAD_WORDS = ['spread', 'spread out', 'stretched', 'stretched out', 'drawn out', 'strung out', 'spaced out', 'distributed', 'accumulated', 'built up', 'piled up', 'added'];
 /** "[76 ppm] over [6,000 years]": an amount followed at once by the time it took is a change. */
-const OVER_SPAN = new RegExp(String.raw`^${S}+(?:over|in|across|within|during)${S}+(?:the${S}+)?$`, 'iu');
+const OVER_SPAN = new RegExp(String.raw`^${S}+(?:(?:${list(SPREAD_WORDS)})${S}+)?(?:over|in|across|within|during)${S}+(?:the${S}+)?$`, 'iu');
 
 /** True when `amount` is followed at once by `span`, the time it took: "76 ppm over 6,000 years". */
 export function changesOver(text: string, amount: Quantity, span: Quantity): boolean {

@@ -208,13 +208,53 @@ function paces(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
     }
     const unitWord = ONE_UNIT_EVERY.exec(text.slice(Math.max(0, interval.start - 40), interval.start))?.[1];
     if (unitWord === undefined) return [];
-    const unit = parseQuantities(`1 ${unitWord}`)[0];
-    if (unit === undefined || !RATE_CHANGES.includes(unit.dimension) || qs.some((q) => q.end > interval.start - unitWord.length - 8 && q.end <= interval.start)) return [];
+    const unit = oneUnit(unitWord);
+    if (unit === undefined || qs.some((q) => q.end > interval.start - unitWord.length - 8 && q.end <= interval.start)) return [];
     const found = changeAndSpan(text, qs, pairs, unit.dimension, [interval]);
     const years = found === undefined ? undefined : divide(found.duration, size(found.change));
     if (years === undefined) return [];
     const u = unit.value;
     return [{ stated: interval, computed: { value: years.value * u, low: years.low * u, high: years.high * u }, measures: `the time it took divided by the change, for each ${unitWord}` }];
+  });
+}
+
+/**
+ * One unit named in words before "every", as an amount of change: "a metre", "one ppm", and "a
+ * degree", which in a pace is a degree of warming or cooling (a change of 1 °C, common practice).
+ */
+function oneUnit(unitWord: string): { dimension: Dimension; value: number } | undefined {
+  const lower = unitWord.toLowerCase();
+  if (lower === 'degree' || lower === 'degrees') return { dimension: 'temperature-change', value: 1 };
+  const unit = parseQuantities(`1 ${unitWord}`)[0];
+  return unit === undefined || !RATE_CHANGES.includes(unit.dimension) ? undefined : { dimension: unit.dimension, value: unit.value };
+}
+
+const RATE_FOR: Partial<Record<Dimension, { dimension: Dimension; unit: string }>> = {
+  concentration: { dimension: 'concentration-rate', unit: 'ppm/yr' }, 'temperature-change': { dimension: 'temperature-rate', unit: 'K/yr' }, length: { dimension: 'length-rate', unit: 'm/yr' },
+};
+
+/**
+ * A pace written as an amount per interval in a sentence drawn from the change and time of the
+ * sentences before ("Across the thaw CO2 rose 80 ppm over 7,000 years. That's about one ppm every
+ * ten years."): the amount over the interval is read as a rate, set against the paragraph's
+ * changes and times as any drawn rate is (ratesInParagraph), and the finding is given back as the
+ * amount for one interval.
+ */
+function pacesInParagraph(text: string, qs: Quantity[], pairs: Pair[], earlier: readonly Previous[]): Finding[] {
+  return qs.flatMap((interval, k) => {
+    const amount = k > 0 ? (qs[k - 1] as Quantity) : undefined;
+    const rate = amount === undefined ? undefined : RATE_FOR[amount.dimension];
+    if (amount === undefined || rate === undefined || interval.dimension !== 'duration' || !EVERY.test(text.slice(amount.end, interval.start)) || isStatedChange(text, amount)) return [];
+    const n = w(interval).value;
+    if (!(n > 0)) return [];
+    const paced: Quantity = { ...amount, dimension: rate.dimension, unit: rate.unit, value: amount.value / n, low: amount.low / n, high: amount.high / n, end: interval.end };
+    const rest = qs.filter((q) => q !== amount && q !== interval);
+    return ratesInParagraph(text, [...rest, paced], pairs, earlier).map((f) => ({
+      ...f,
+      stated: amount,
+      computed: facing({ value: f.computed.value * n, low: f.computed.low * n, high: f.computed.high * n }, amount.value),
+      measures: `${f.measures}, for each ${interval.text}`,
+    }));
   });
 }
 
@@ -313,7 +353,8 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
   } },
   { id: 'arith.rate', summary: 'A stated rate equals the stated change divided by the time it took; the years a length of ice holds equal its metres times the years per metre.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...rates(t, qs, p), ...paces(t, qs, p), ...perLength(t, qs, prev, earlier)];
-    const all = [...found, ...notYet(found, ratesInParagraph(t, qs, p, earlier))];
+    const drawn = [...found, ...notYet(found, ratesInParagraph(t, qs, p, earlier))];
+    const all = [...drawn, ...notYet(drawn, pacesInParagraph(t, qs, p, earlier))];
     // "At 2.4 ppm a year, adding 100 ppm takes about 4 years": a time worked from the pace makes the
     // pace its premise, not a result of the amount and the time.
     const premise = amountsAtPace(t, qs, earlier).some((f) => f.stated.dimension === 'duration');

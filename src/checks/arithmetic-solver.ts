@@ -60,12 +60,12 @@ const basis = "the paragraph's";
 
 /**
  * Words that present a figure as worked out from what came before: a consequence ("so", "thus",
- * "which means"), an equation ("that's", "works out to", "comes to", "equals"), a mean ("on
+ * "which means"), an equation ("that's", "works out to", "work that out and you get", "comes to", "equals"), a mean ("on
  * average", "an average of", "averaged over") or the sum itself ("do the division", "by my
  * arithmetic"). Matched anywhere before the figure in its sentence.
  */
 const DRAWN = new RegExp(
-  String.raw`(?:^|[^\p{L}])(?:so|thus|hence|therefore|that${S}+means|which${S}+means|meaning|that's|that’s|that${S}+is|which${S}+is|i\.e\.|works?${S}+out|worked${S}+out|comes?${S}+to|came${S}+to|equals|averag(?:e|es|ed|ing)|on${S}+average|divid(?:e|ed|ing)|division|arithmetic|math|maths|sum|in${S}+all|all${S}+told|in${S}+other${S}+words|put${S}+another${S}+way|or${S}+about|or${S}+roughly)(?![\p{L}])`,
+  String.raw`(?:^|[^\p{L}])(?:so|thus|hence|therefore|that${S}+means|which${S}+means|meaning|that's|that’s|that${S}+is|which${S}+is|i\.e\.|works?${S}+out|worked${S}+out|work(?:s|ed|ing)?${S}+(?:it|that|this|those|these)${S}+out|(?:you|we|I)${S}+get|that${S}+gives|which${S}+gives|giving|comes?${S}+to|came${S}+to|equals|averag(?:e|es|ed|ing)|on${S}+average|divid(?:e|ed|ing)|division|arithmetic|math|maths|sum|in${S}+all|all${S}+told|in${S}+other${S}+words|put${S}+another${S}+way|or${S}+about|or${S}+roughly)(?![\p{L}])`,
   'iu',
 );
 /** Words that give a figure a time of its own: it is about another period than the figures before. */
