@@ -38,13 +38,23 @@ const NOT_A_SPAN = new RegExp(String.raw`(?:^|[^\p{L}])(?:past|last|previous|nex
 const RATES = new Set(['concentration-rate', 'temperature-rate', 'length-rate']);
 const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
 
+/**
+ * "So about seven hundred years of stalling", "so ~2,200 years of cold": a duration named as a
+ * stretch of something, "of" and a word after it, with no word before it but the opening that refers
+ * back and its punctuation.
+ */
+function spanOfWhat(text: string, q: Quantity): boolean {
+  const before = text.slice(0, q.start).replace(OPENS_BY_REFERRING, '');
+  return /^[\s\u00A0,;:—–-]*(?:\p{L}+[\s\u00A0,;:—–-]*)?$/u.test(before) && new RegExp(String.raw`^${S}+of${S}+\p{L}`, 'u').test(text.slice(q.end));
+}
+
 /** "That is a transition of roughly 3,000 years": a duration restating the span of the sentence before. */
 export function durationsAcross(text: string, qs: Quantity[], previous: Previous | undefined): AcrossFinding[] {
   if (previous === undefined || qs.some((q) => q.dimension === 'age')) return [];
   const stated = only(qs.filter((q) => q.dimension === 'duration'));
   if (stated === undefined || !OPENS_BY_REFERRING.test(text)) return [];
   const head = text.slice(Math.max(0, stated.start - 40), stated.start);
-  if (!SPAN_WORDS.test(head) || NOT_A_SPAN.test(head)) return [];
+  if (!(SPAN_WORDS.test(head) || spanOfWhat(text, stated)) || NOT_A_SPAN.test(head)) return [];
   const earlier = only(spanOfDates(previous.quantities, findPairs(previous.text, previous.quantities)));
   if (earlier === undefined) return [];
   return [{ stated, computed: earlier.span, measures: `${earlier.measures} in the sentence before`, basis: "the paragraph's" }];

@@ -56,8 +56,10 @@ export function percentChange(r: Derived, like: number): Derived {
  * for every input to a sum: the writer subtracted the two numbers written.
  */
 export function rangeSpan(q: Quantity): Derived | undefined {
-  // "18–11.7 ka", or in words: "between nineteen thousand and eleven thousand years ago".
-  if (!/\d[^\d]*(?:to|–|—|-|and)[^\d]*\d/iu.test(q.text) && !/(?:^|[^\p{L}])(?:between|from)[\s\u00A0].+[\s\u00A0](?:and|to)[\s\u00A0]/iu.test(q.text)) return undefined;
+  // "18–11.7 ka", or in words: "between nineteen thousand and eleven thousand years ago", "eighteen
+  // thousand years ago to eleven and a half thousand" (a number in words never holds "to").
+  const inWords = /(?:^|[^\p{L}])(?:between|from)[\s\u00A0].+[\s\u00A0](?:and|to)[\s\u00A0]/iu.test(q.text) || /\p{L}[\s\u00A0]+(?:to|through|until|till)[\s\u00A0]+\p{L}/iu.test(q.text);
+  if (!/\d[^\d]*(?:to|–|—|-|and)[^\d]*\d/iu.test(q.text) && !inWords) return undefined;
   const { low, high } = q.hedge === undefined ? q : writtenInterval(q);
   const span = high - low;
   return { value: span, low: span, high: span };

@@ -78,7 +78,7 @@ export function findPairs(text: string, qs: Quantity[]): Pair[] {
     if (to !== undefined && FROM.test(head(text, a))) pairs.push({ from: i, to });
     // "~190 → 280 ppm": an arrow is "from ... to" in one sign; the unit may be written once, at the end.
     else if (ARROW.test(text.slice(a.end, b.start)) && b.dimension !== 'number' && b.dimension !== 'ratio' && b.dimension !== 'percent' && (a.dimension === b.dimension || a.dimension === 'number')) pairs.push({ from: i, to: i + 1 });
-    else if (a.dimension === 'age' && datesFromTo(text, qs, i)) pairs.push({ from: i, to: i + 1 });
+    else if ((a.dimension === 'age' || a.dimension === 'number') && datesFromTo(text, qs, i)) pairs.push({ from: i, to: i + 1 });
     else {
       const end = startEnd(text, qs, i) ?? datesBetween(text, qs, i) ?? endOfTwoDates(text, qs, i);
       if (end !== undefined) pairs.push({ from: i, to: end });
@@ -103,8 +103,11 @@ function toEnd(text: string, qs: Quantity[], i: number): number | undefined {
   return TO.test(between) || WHEN_TO.test(between) ? j : undefined;
 }
 
-/** "from the end of the last warm period, about 115,000 years ago, to its peak": "from" and a short noun phrase before a date. */
-const FROM_PHRASE = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[\p{L}'’-]+${S}+){1,7}?[\p{L}'’-]+,${S}*(?:(?:about|around|some|roughly|circa|c\.)${S}+)?$`, 'iu');
+/**
+ * "from the end of the last warm period, about 115,000 years ago, to its peak", "from its start at
+ * about 14,700 to its end near 13,000 years ago": "from" and a short noun phrase before a date.
+ */
+const FROM_PHRASE = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[\p{L}'’-]+${S}+){1,7}?[\p{L}'’-]+(?:,|${S}+(?:at|around|near|circa|c\.))${S}*(?:(?:about|around|some|roughly|circa|c\.)${S}+)?$`, 'iu');
 /** ", to its peak some", ", to the start of the Holocene at": "to" and a short noun phrase before the second date. */
 const TO_PHRASE = new RegExp(String.raw`^,?${S}+(?:up${S}+)?to${S}+(?:[\p{L}'’-]+${S}+){0,6}$`, 'iu');
 
@@ -116,6 +119,8 @@ function datesFromTo(text: string, qs: Quantity[], i: number): boolean {
   const a = qs[i] as Quantity;
   const b = qs[i + 1];
   if (b?.dimension !== 'age') return false;
+  // A bare number whose unit the end date carries ("at about 14,700 to its end near 13,000 years ago").
+  if (a.dimension !== 'age' && !(a.dimension === 'number' && a.value / b.value < 3 && b.value / a.value < 3)) return false;
   const gap = text.slice(a.end, b.start);
   return FROM_PHRASE.test(text.slice(Math.max(0, a.start - 80), a.start)) && TO_PHRASE.test(gap);
 }

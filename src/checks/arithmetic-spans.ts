@@ -15,9 +15,25 @@ export interface DateSpan {
   measures: string;
 }
 
+/**
+ * True when the start of a pair is a bare number whose date unit is written at the end only
+ * ("12,900 → 11,700 years ago", "from its start at about 14,700 to its end near 13,000 years
+ * ago"): a number of the end date's size, in the end date's unit as written, is that date.
+ */
+function datedByEnd(a: Quantity | undefined, b: Quantity | undefined): boolean {
+  if (a?.dimension !== 'number' || b?.dimension !== 'age' || !(a.value > 0) || !(b.value > 0)) return false;
+  return b.statedUnit !== '' && toCanonicalOfEnd(b) === 1 && a.value / b.value < 3 && b.value / a.value < 3;
+}
+
+/** The factor from the end date's written unit to years, 1 when its numbers are years as written. */
+function toCanonicalOfEnd(b: Quantity): number {
+  const written = Number(b.text.replace(/[^\d.]/gu, ''));
+  return written > 0 ? Math.round((b.value / written) * 1000) / 1000 : 0;
+}
+
 /** Every span of dates in a sentence, from its date pairs and its ranges of dates. */
 export function spanOfDates(qs: Quantity[], pairs: Pair[]): DateSpan[] {
-  const fromPairs = pairs.filter((p) => qs[p.from]?.dimension === 'age').map((p) => {
+  const fromPairs = pairs.filter((p) => qs[p.from]?.dimension === 'age' || datedByEnd(qs[p.from], qs[p.to])).map((p) => {
     const a = qs[p.from] as Quantity;
     const b = qs[p.to] as Quantity;
     return { span: size(minus(w(a), w(b))), after: b.end, measures: `the time from ${a.text} to ${b.text}` };
