@@ -255,10 +255,55 @@ function checkNamedBase(figures: Figure[], texts: string[], text: string, f: Fig
   return nearest === undefined ? [] : [{ ruleId: 'arith.ratio', stated: f.q, computed: nearest.value, measures: nearest.measures, basis: "the paragraph's" }];
 }
 
+/**
+ * True when level `g` of the sentence checked is named as the base of a comparison: the words of its
+ * clause before it open with a base word ("Against the 1750 level of roughly 278 ppm, ...", "an
+ * increase of about 75% on the pre-industrial 280 ppm", "relative to the glacial 190 ppm").
+ */
+function namedAsBase(text: string, g: Figure): boolean {
+  const chunk = text.slice(Math.max(0, g.q.start - 50), g.q.start);
+  const clause = chunk.slice(Math.max(...[',', ';', ':', '(', '—', '–'].map((m) => chunk.lastIndexOf(m))) + 1);
+  const words = wordsIn(clause, 0, clause.length);
+  // Up to six words of the base's own noun phrase may follow the base word ("on the pre-industrial", "against the 1750 level of").
+  const at = words.findIndex((x) => WORDS.baseAfter.has(x.text) && x.text !== 'from');
+  return at >= 0 && words.length - at <= 7;
+}
+
+/**
+ * A relative change whose own sentence names the level it is counted from ("The 2024 average was
+ * 424 ppm. That is an increase of about 75% on the pre-industrial 280 ppm."): it runs from that
+ * base to a level before it (or beside it in the sentence), and to no other pair of the paragraph's
+ * levels. Undefined when the sentence names no base level, or no other level stands with it.
+ */
+function checkOwnBase(figures: Figure[], text: string, f: Figure): ReaderFinding[] | undefined {
+  const isLevel = (g: Figure): boolean => g !== f && g.role === 'level' && g.family !== '' && g.q.value > 0;
+  const bases = figures.filter((g) => g.sentence === 0 && isLevel(g) && namedAsBase(text, g));
+  const base = bases.length === 1 ? bases[0] : undefined;
+  if (base === undefined || denied(f)) return undefined;
+  const sameUnit = (g: Figure): boolean => g.q.statedUnit === base.q.statedUnit || g.q.statedUnit === '' || base.q.statedUnit === '';
+  const others = figures.filter((g) => isLevel(g) && g !== base && g.family === base.family && sameUnit(g) && g.q.value !== base.q.value && (g.sentence === 0 || g.order < f.order) && g.sentence <= 2);
+  if (others.length === 0) return undefined;
+  // A level from a sentence before: this one must refer back to it ("That is", "so").
+  if (others.every((g) => g.sentence > 0)) {
+    const head = wordsIn(text, 0, f.q.start);
+    if (!holdsPhrase(head, WORDS.links) && !holdsPhrase(head, WORDS.backReferences)) return undefined;
+  }
+  const scale = f.q.dimension === 'percent' ? 100 : 1;
+  const candidates = others.map((to): Candidate => {
+    const r = divide(w(to.q), w(base.q)) as Derived;
+    const rel = r.value >= 1 ? { value: r.value - 1, low: r.low - 1, high: r.high - 1 } : { value: 1 - r.value, low: 1 - r.high, high: 1 - r.low };
+    return { value: { value: rel.value * scale, low: rel.low * scale, high: rel.high * scale }, measures: `the relative change from ${base.q.text} to ${to.q.text}`, near: to.order, far: base.order };
+  });
+  const nearest = verdict(f.q, candidates, (d) => d, ROUNDED);
+  return nearest === undefined ? [] : [{ ruleId: 'arith.ratio', stated: f.q, computed: nearest.value, measures: nearest.measures, ...basisOf(others) }];
+}
+
 /** A percentage or fraction stated as a change, against the relative changes between the levels before it. */
 function checkRelative(figures: Figure[], text: string, f: Figure, texts: string[] = [text]): ReaderFinding[] {
   const named = checkNamedBase(figures, texts, text, f);
   if (named !== undefined) return named;
+  const own = checkOwnBase(figures, text, f);
+  if (own !== undefined) return own;
   if (isOtherQuantity(f, figures)) return [];
   const scale = f.q.dimension === 'percent' ? 100 : 1;
   const levels = (g: Figure): boolean => g.role === 'level' && g.family !== '' && g.q.value > 0;
