@@ -259,11 +259,15 @@ function pacesInParagraph(text: string, qs: Quantity[], pairs: Pair[], earlier: 
 }
 
 function ratios(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
-  const pair = only(pairs.filter((p) => RATIOED.includes(qs[p.from]?.dimension ?? 'number')));
+  // "280 → 420 ppm": a pair whose unit is written at its end only takes the end's dimension.
+  const pairDim = (p: Pair): Dimension => (qs[p.from]?.dimension === 'number' ? qs[p.to]?.dimension : qs[p.from]?.dimension) ?? 'number';
+  const pair = only(pairs.filter((p) => RATIOED.includes(pairDim(p))));
   return qs.flatMap((stated, i) => {
     const after = qs.slice(i + 1).find((q) => RATIOED.includes(q.dimension));
     const fraction = after !== undefined && fractionOf(text, stated, after);
-    const isPercent = stated.dimension === 'percent' && (isStatedChange(text, stated) || comparesToNext(text, stated));
+    // "an increase of 140 ppm, roughly 33 per cent": a percentage set right after a stated change restates it.
+    const restated = qs.some((c) => c.end <= stated.start && c.dimension !== 'percent' && isStatedChange(text, c) && /^[\s\u00A0]*[,(—–][\s\u00A0]*(?:or[\s\u00A0]+)?$/u.test(text.slice(c.end, stated.start)));
+    const isPercent = stated.dimension === 'percent' && (isStatedChange(text, stated) || comparesToNext(text, stated) || (restated && pair !== undefined));
     const multiple = timesTheMeasure(text, stated);
     // "more than half of a doubling": a ratio named as the yardstick of a fraction is no claim.
     const yardstick = /(?:^|[^\p{L}])of[\s\u00A0]+(?:a|an|the|one)[\s\u00A0]*$/iu.test(text.slice(Math.max(0, stated.start - 12), stated.start));
