@@ -225,7 +225,9 @@ export function changesFromLevels(text: string, qs: Quantity[], pairs: Pair[], e
       // From the earlier level to this sentence's; without one, from the lower level for a rise
       // and from the higher for a drop.
       const down = DOWNWARD.test(text.slice(0, stated.start)) || DOWNWARD.test(text.slice(stated.end, stated.end + 12));
-      const [x, y] = own.length === 1 || (a.value < b.value) !== down ? [a, b] : [b, a];
+      // A level of its own named as the base ("Against the 1750 level of 278 ppm, that is ...") is where it runs from.
+      const ownBase = own.length === 1 && NAMED_BASE.test(text.slice(0, (own[0] as Quantity).start));
+      const [x, y] = ownBase ? [b, a] : own.length === 1 || (a.value < b.value) !== down ? [a, b] : [b, a];
       const r = divide(w(y), w(x));
       if (r !== undefined) candidates.push({ value: size(percentOf(r)), measures: `the percentage change from ${x.text} to ${y.text}${where}`, distance });
     };
@@ -243,6 +245,9 @@ export function changesFromLevels(text: string, qs: Quantity[], pairs: Pair[], e
     return [{ stated, computed: facing(found.value, stated.value), measures: found.measures, basis }];
   });
 }
+
+/** A clause that opens by naming a base before the level: "Against the 1750 level of", "relative to the glacial". */
+const NAMED_BASE = new RegExp(String.raw`(?:^|[,;:(—–])${S}*(?:against|relative${S}+to|compared${S}+(?:with|to)|measured${S}+against|set${S}+against)${S}+[^\d,;:.!?]{0,40}(?:\d{4}${S}+[^\d,;:.!?]{0,30})?$`, 'iu');
 
 /** Words of a change downward; any other change is read as a rise. */
 const DOWNWARD = /(?:^|[^\p{L}])(?:drop|dropped|fall|fell|fallen|decline|declined|decrease|decreased|loss|lost|reduction|cut|plunge|plunged|sank|lower|below|less|down|cooling|cooled)(?![\p{L}])/iu;
