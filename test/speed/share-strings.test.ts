@@ -36,3 +36,13 @@ describe('shareStrings: one string per content in an outcome copied from a worke
     expect([...strings.keys()].sort()).toEqual(['other', 'same']);
   });
 });
+
+describe('shareStrings on frozen data', () => {
+  it('leaves a frozen object as it is and walks on below it', () => {
+    const strings = new Map<string, string>([['unit', 'unit']]);
+    const inner = { unit: 'unit' };
+    const frozen = Object.freeze({ unit: 'unit', inner });
+    expect(() => shareStrings({ frozen }, strings)).not.toThrow();
+    expect(frozen).toEqual({ unit: 'unit', inner: { unit: 'unit' } });
+  });
+});
