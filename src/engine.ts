@@ -303,7 +303,10 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
         ...place,
         text: sentence.text,
         heading: block.heading,
-        quantities,
+        // Copies: the checks keep what they read from a quantity object or list for as long as it lives
+        // (reference-slips.ts readingsKept, arithmetic-reader/relations.ts memo), some 1.2 MiB per 128 KB
+        // of on-topic prose that a run would otherwise hold to its report. The copies hold the same data.
+        quantities: quantities.map((q) => ({ ...q })),
         bindings,
         verdict: verdictOf(verdicts),
         flags,
