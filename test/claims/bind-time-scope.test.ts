@@ -49,6 +49,42 @@ describe('a clause set at an earlier time', () => {
   });
 });
 
+describe('the former state of a change, and a clause set at a later time', () => {
+  // Glacial cycles of about 41,000 years before the Mid-Pleistocene Transition and about 100,000
+  // after it (Lisiecki & Raymo 2005, doi:10.1029/2004PA001071; Clark et al. 2006, doi:10.1016/j.quascirev.2006.07.008).
+  const lengthened = (a: string, b: string) => `During the Mid-Pleistocene Transition the rhythm of the glacial cycles lengthened from roughly ${a} years to nearly ${b} years.`;
+
+  it('reads the figure after "from" in a change of state as the earlier stretch', () => {
+    expect(read(lengthened('41,000', '100,000'))).toMatchObject({
+      'roughly 41,000 years': 'glacial-cycle-period-before-mpt',
+      'nearly 100,000 years': 'glacial-cycle-period-after-mpt',
+    });
+    expect(at('The beat of the glacial cycles shifted abruptly from a 41,000-year rhythm to a 100,000-year one.', '41,000-year')).toBe('glacial-cycle-period-before-mpt');
+  });
+
+  it('reads the figure replaced in "gave way to" as the earlier stretch', () => {
+    expect(at('In the middle Pleistocene a 41,000-year rhythm of glacial cycles gave way to a 100,000-year rhythm.', '41,000-year')).toBe('glacial-cycle-period-before-mpt');
+  });
+
+  it('still binds both ends of a change told the wrong way round, each to its own stretch', () => {
+    expect(read(lengthened('100,000', '41,000'))).toMatchObject({
+      'roughly 100,000 years': 'glacial-cycle-period-before-mpt',
+      'nearly 41,000 years': 'glacial-cycle-period-after-mpt',
+    });
+  });
+
+  it('does not read a range without a verb of change as a change', () => {
+    expect(at('Glacial cycles have had a rhythm of 80,000 to 120,000 years since the Mid-Pleistocene Transition.', '80,000 to 120,000 years')).toBe('glacial-cycle-period-after-mpt');
+  });
+
+  it('keeps a clause set after a turn ("afterwards", "since then") from the earlier period', () => {
+    const told = (b: string) => `Before the Mid-Pleistocene Transition the glacial cycles came every 41,000 years; afterwards they recurred every ${b} years or so.`;
+    expect(read(told('100,000'))).toMatchObject({ '41,000 years': 'glacial-cycle-period-before-mpt', '100,000 years or so': '-' });
+    // A wrong figure in the earlier clause is still read as the earlier period.
+    expect(at('Before the Mid-Pleistocene Transition, glacial cycles recurred every 70,000 years; since then they have run to about 100,000 years.', '70,000 years')).toBe('glacial-cycle-period-before-mpt');
+  });
+});
+
 describe('a time frame that opens a sentence', () => {
   // Glacial cycles of about 100,000 years since the Mid-Pleistocene Transition (Lisiecki & Raymo 2005).
   it('yields to the number of the sentence that states the same value', () => {
