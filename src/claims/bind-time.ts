@@ -112,3 +112,28 @@ function isTimeFrame(sentence: string, quantities: Quantity[], i: number): boole
 export function framesYield(sentence: string, quantities: Quantity[], bindings: Binding[]): Binding[] {
   return bindings.filter((b) => !(isTimeFrame(sentence, quantities, b.quantityIndex) && bindings.some((o) => o !== b && o.referenceId === b.referenceId && !isTimeFrame(sentence, quantities, o.quantityIndex))));
 }
+
+/** The pack's term for a span that is not how long an event took (a lead, a lag, a pace). */
+export const NOT_A_DURATION = 'not-a-duration';
+/** "within" just before a figure (a hedge may stand between; it is part of the figure's text). */
+const WITHIN_BEFORE = /(?:^|[^\p{L}])within\s+$/iu;
+/** "of" just after it: the figure measures nearness to what follows. */
+const OF_AFTER = /^\s+of(?![\p{L}])/iu;
+
+/**
+ * Adds the not-a-duration term to the view of each span told as a nearness in time: "within about
+ * 400 years of Antarctic temperature" measures how far apart two things were, not how long anything
+ * lasted, so the durations of events veto it while leads and lags still bind it.
+ *
+ *     "Pedro et al. put CO2 within about 400 years of Antarctic temperature"
+ *                           ^^^^^^ └ nearness ┘ ^^
+ */
+export function addNearness(sentence: string, quantities: Quantity[], views: TermHits[], packs: LoadedPacks): void {
+  if (packs.term(NOT_A_DURATION) === undefined) return;
+  quantities.forEach((q, i) => {
+    if (q.dimension !== 'duration') return;
+    if (!WITHIN_BEFORE.test(sentence.slice(Math.max(0, q.start - 12), q.start)) || !OF_AFTER.test(sentence.slice(q.end, q.end + 8))) return;
+    const view = views[i] as TermHits;
+    view.set(NOT_A_DURATION, [...(view.get(NOT_A_DURATION) ?? []), [q.start, q.end]]);
+  });
+}

@@ -85,6 +85,25 @@ describe('the former state of a change, and a clause set at a later time', () =>
   });
 });
 
+describe('a span told as a lead or as a nearness in time', () => {
+  // The last deglaciation took about 6,000-9,000 years (Clark et al. 2012, doi:10.1073/pnas.1116619109);
+  // leads and lags between Antarctic temperature and CO2 were centuries (Pedro et al. 2012, doi:10.5194/cp-8-1213-2012).
+  it('does not read a lead as how long the deglaciation took', () => {
+    expect(at('Newer dating puts the southern lead at roughly 600 years at the start of the last deglaciation.', 'roughly 600 years')).toBe('-');
+    expect(at('By one estimate the deglaciation leads the northern warming by roughly 600 years.', 'roughly 600 years')).toBe('-');
+  });
+
+  it('does not read "within N years of" as how long anything lasted', () => {
+    expect(at('A newer study placed the CO2 rise within roughly 300 years of Antarctic warming during the last deglaciation.', 'roughly 300 years')).toBe('-');
+  });
+
+  it('still reads a duration told outright, or "within N years" with no "of"', () => {
+    expect(at('The last deglaciation took roughly 300 years.', 'roughly 300 years')).toBe('termination-1-duration');
+    expect(at('Within roughly 300 years the last deglaciation was over.', 'roughly 300 years')).toBe('termination-1-duration');
+    expect(at('The deglacial rise in CO2 took roughly 300 years.', 'roughly 300 years')).toBe('co2-deglacial-rise-duration');
+  });
+});
+
 describe('a time frame that opens a sentence', () => {
   // Glacial cycles of about 100,000 years since the Mid-Pleistocene Transition (Lisiecki & Raymo 2005).
   it('yields to the number of the sentence that states the same value', () => {
