@@ -104,6 +104,30 @@ function isDate(id: string, packs: LoadedPacks): boolean {
   return timeTermsOf(packs).dates.has(id);
 }
 
+/** Whether the value fills a group made of time terms only (its period) from the sentence before. */
+function takesTime(r: ReferenceValue, view: TermHits, context: TermHits, packs: LoadedPacks): boolean {
+  const { times } = timeTermsOf(packs);
+  return r.binding.all.some((g) => g.length > 0 && g.every((id) => times.has(id)) && !g.some((id) => view.has(id)) && g.some((id) => context.has(id)));
+}
+
+/** A preposition of time opening a sentence, after an adverb of nearness: "By the eve of ...", "Just before ...". */
+const OPENS_ON_TIME = /^[\s"'“‘*_(-]*(?:(?:just|shortly|right|soon|long|not\s+long|well|only)\s+)?(?:by|before|after|until|till|since|prior\s+to)(?![\p{L}])/iu;
+
+/**
+ * Whether the sentence opens on a time of its own: a preposition of time whose phrase (up to the first
+ * comma, or the whole sentence) does not refer back ("By the eve of the industrial age it had reached
+ * ...", "Just before the first factories, it stood at ..."; not "By then, it had ...").
+ */
+export function opensOnOwnTime(sentence: string, packs: LoadedPacks): boolean {
+  const open = OPENS_ON_TIME.exec(sentence);
+  if (open === null) return false;
+  const rest = sentence.slice(open[0].length);
+  const comma = rest.search(/[,;:]/u);
+  // Without a comma the phrase runs to the subject pronoun: read up to the first pronoun of the sentence.
+  const phrase = comma >= 0 ? rest.slice(0, comma) : rest.split(/\s+(?=(?:it|they|this|these|those|there)\s)/iu)[0] ?? rest;
+  return /\p{L}{3}/u.test(phrase) && !refersBack(`${open[0]}${phrase}`, packs);
+}
+
 /** A year or a decade written alone. */
 const DATE = /^\d{4}(?:s|'s)?$/u;
 
@@ -178,7 +202,10 @@ export function bindFromContext(
     // us to 420 kyr." takes "longest" with "Dome C", which rules out a longest record told of Vostok.
     // A subject taken up by a pronoun ("CO2 ... It lagged by ...") brings only itself.
     .filter((r) => !borrowsAttribute(r) || !r.binding.none.some((id) => context.has(id)))
-    .filter((r) => frame?.ownTime !== true || !takesDate(r));
+    .filter((r) => frame?.ownTime !== true || !takesDate(r))
+    // "At the peak of the last ice age it stood near 190 ppm. By the eve of the industrial age it had
+    // reached about 280 ppm": a sentence that opens on a time of its own takes no time from the one before.
+    .filter((r) => !takesTime(r, view, context, packs) || !opensOnOwnTime(sentence, packs));
   // The more specific reading wins: a value that vetoes a word present in either sentence gives way
   // to one that needs it ("at that time" after "the Last Glacial Maximum": the LGM level, not the typical glacial one).
   const present = (id: string): boolean => view.has(id) || context.has(id);

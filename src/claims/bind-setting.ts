@@ -37,7 +37,7 @@ import type { Quantity } from '../types.js';
 import { findTerms } from './bind.js';
 import { describedTimes } from './bind-descriptions.js';
 import { lexiconWords } from '../prose/lexicon-words.js';
-import { CONTEXT_PENALTY, ownSubjects, ownSubjectsServe } from './bind-context.js';
+import { CONTEXT_PENALTY, opensOnOwnTime, ownSubjects, ownSubjectsServe } from './bind-context.js';
 import { canState, nearness } from './bind-match.js';
 import { withoutOthers } from './bind-others.js';
 import { roleFits, type ReadRole } from './bind-role.js';
@@ -208,7 +208,7 @@ function ownsSetting(sentence: string, q: Quantity, kind: string, kinds: Setting
   if ([...frame.hits.keys()].some((id) => members.has(id))) return true;
   // A date of its own (a year, another age or stretch of time, or the number itself a date), or a
   // period described that no value dates: "At the start of the last glaciation, CO2 trailed ...".
-  return kind === 'time' && (YEAR.test(sentence) || frame.ownTime || q.dimension === 'age' || describedTimes(sentence, packs.lexicon).length > 0 || opensBefore(sentence, packs));
+  return kind === 'time' && (YEAR.test(sentence) || frame.ownTime || q.dimension === 'age' || describedTimes(sentence, packs.lexicon).length > 0 || opensBefore(sentence, packs) || opensOnOwnTime(sentence, packs));
 }
 
 /**

@@ -28,7 +28,7 @@ import { bindFromContext, mayReferBack } from './bind-context.js';
 import { bindFromSetting } from './bind-setting.js';
 import { comparedInRelativeClauses, withoutOthers } from './bind-others.js';
 import { partsOfWholes, wholesApart, withoutWholes } from './bind-part.js';
-import { addEarlierTime, framesYield } from './bind-time.js';
+import { addEarlierTime, addNearness, framesYield } from './bind-time.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
@@ -502,6 +502,8 @@ export function bindQuantities(
   withoutWholes(parts, views);
   // "Before about a million years ago, the cycles came every 41,000 years": a clause set at an earlier time.
   addEarlierTime(sentence, quantities, views, hits, packs);
+  // "within about 400 years of Antarctic temperature": a nearness in time, not how long anything lasted.
+  addNearness(sentence, quantities, views, packs);
   const breaks = clauseBreaks(sentence);
   // Per quantity: the value it binds, AMBIGUOUS, or null when its list left it unbound.
   const decided = new Map<number, string | null>();

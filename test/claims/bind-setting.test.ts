@@ -110,3 +110,17 @@ describe('a relapse is a period', () => {
     expect(await readingOf('The ice cores tell the story of the air. That relapse lasted about 3,000 years.', '3,000 years')).toEqual({ value: '-', flagged: false });
   });
 });
+
+// CO2 stood near 190 ppm at the Last Glacial Maximum and near 280 ppm before industry (IPCC AR6 WGI
+// Chapter 2, Gulev et al. 2021, doi:10.1017/9781009157896.004: the pack's co2-lgm and co2-preindustrial-1750).
+describe('a sentence that opens on a time of its own', () => {
+  const coldest = 'In the depths of the last glacial maximum, carbon dioxide stood near 190 ppm.';
+  it('takes no period from the sentence before', async () => {
+    expect(await readingOf(`${coldest} By the dawn of the steam age it had crept up to about 280 ppm.`, 'about 280 ppm')).toEqual({ value: '-', flagged: false });
+    expect(await readingOf(`${coldest} Shortly before the first coal furnaces were lit, it had about 280 ppm.`, 'about 280 ppm')).toEqual({ value: '-', flagged: false });
+  });
+
+  it('still takes the period when its opening refers back ("by then", "at that time")', async () => {
+    expect(await readingOf(`${coldest} By then it had dropped to about 280 ppm.`, 'about 280 ppm')).toEqual({ value: 'co2-lgm', flagged: true });
+  });
+});

@@ -49,6 +49,61 @@ describe('a clause set at an earlier time', () => {
   });
 });
 
+describe('the former state of a change, and a clause set at a later time', () => {
+  // Glacial cycles of about 41,000 years before the Mid-Pleistocene Transition and about 100,000
+  // after it (Lisiecki & Raymo 2005, doi:10.1029/2004PA001071; Clark et al. 2006, doi:10.1016/j.quascirev.2006.07.008).
+  const lengthened = (a: string, b: string) => `During the Mid-Pleistocene Transition the rhythm of the glacial cycles lengthened from roughly ${a} years to nearly ${b} years.`;
+
+  it('reads the figure after "from" in a change of state as the earlier stretch', () => {
+    expect(read(lengthened('41,000', '100,000'))).toMatchObject({
+      'roughly 41,000 years': 'glacial-cycle-period-before-mpt',
+      'nearly 100,000 years': 'glacial-cycle-period-after-mpt',
+    });
+    expect(at('The beat of the glacial cycles shifted abruptly from a 41,000-year rhythm to a 100,000-year one.', '41,000-year')).toBe('glacial-cycle-period-before-mpt');
+  });
+
+  it('reads the figure replaced in "gave way to" as the earlier stretch', () => {
+    expect(at('In the middle Pleistocene a 41,000-year rhythm of glacial cycles gave way to a 100,000-year rhythm.', '41,000-year')).toBe('glacial-cycle-period-before-mpt');
+  });
+
+  it('still binds both ends of a change told the wrong way round, each to its own stretch', () => {
+    expect(read(lengthened('100,000', '41,000'))).toMatchObject({
+      'roughly 100,000 years': 'glacial-cycle-period-before-mpt',
+      'nearly 41,000 years': 'glacial-cycle-period-after-mpt',
+    });
+  });
+
+  it('does not read a range without a verb of change as a change', () => {
+    expect(at('Glacial cycles have had a rhythm of 80,000 to 120,000 years since the Mid-Pleistocene Transition.', '80,000 to 120,000 years')).toBe('glacial-cycle-period-after-mpt');
+  });
+
+  it('keeps a clause set after a turn ("afterwards", "since then") from the earlier period', () => {
+    const told = (b: string) => `Before the Mid-Pleistocene Transition the glacial cycles came every 41,000 years; afterwards they recurred every ${b} years or so.`;
+    expect(read(told('100,000'))).toMatchObject({ '41,000 years': 'glacial-cycle-period-before-mpt', '100,000 years or so': '-' });
+    // A wrong figure in the earlier clause is still read as the earlier period.
+    expect(at('Before the Mid-Pleistocene Transition, glacial cycles recurred every 70,000 years; since then they have run to about 100,000 years.', '70,000 years')).toBe('glacial-cycle-period-before-mpt');
+  });
+});
+
+describe('a span told as a lead or as a nearness in time', () => {
+  // The last deglaciation took about 6,000-9,000 years (Clark et al. 2012, doi:10.1073/pnas.1116619109);
+  // leads and lags between Antarctic temperature and CO2 were centuries (Pedro et al. 2012, doi:10.5194/cp-8-1213-2012).
+  it('does not read a lead as how long the deglaciation took', () => {
+    expect(at('Newer dating puts the southern lead at roughly 600 years at the start of the last deglaciation.', 'roughly 600 years')).toBe('-');
+    expect(at('By one estimate the deglaciation leads the northern warming by roughly 600 years.', 'roughly 600 years')).toBe('-');
+  });
+
+  it('does not read "within N years of" as how long anything lasted', () => {
+    expect(at('A newer study placed the CO2 rise within roughly 300 years of Antarctic warming during the last deglaciation.', 'roughly 300 years')).toBe('-');
+  });
+
+  it('still reads a duration told outright, or "within N years" with no "of"', () => {
+    expect(at('The last deglaciation took roughly 300 years.', 'roughly 300 years')).toBe('termination-1-duration');
+    expect(at('Within roughly 300 years the last deglaciation was over.', 'roughly 300 years')).toBe('termination-1-duration');
+    expect(at('The deglacial rise in CO2 took roughly 300 years.', 'roughly 300 years')).toBe('co2-deglacial-rise-duration');
+  });
+});
+
 describe('a time frame that opens a sentence', () => {
   // Glacial cycles of about 100,000 years since the Mid-Pleistocene Transition (Lisiecki & Raymo 2005).
   it('yields to the number of the sentence that states the same value', () => {
