@@ -17,6 +17,8 @@ interface Choice {
   agents: ReadonlySet<string>;
   patient?: string;
   role: Cause['role'];
+  /** A question that asks for the agent ("What ended the last ice age?") and offers no alternatives of its own. */
+  asked?: boolean;
 }
 
 /** How many words before a cause's span its alternatives may stand. */
@@ -48,8 +50,21 @@ export function choiceOf(previous: ReadSentence, causes: readonly Cause[]): Choi
     const kinds = new Set(inSpan.map((t) => t.kind));
     const joined = previous.words.slice(begin, to + 1).some((w) => w.text === 'or');
     if (kinds.size >= 2 && (c.agent === undefined || kinds.has(c.agent)) && joined) return { agents: kinds, ...(c.patient === undefined ? {} : { patient: c.patient }), role: c.role };
+    // "What ended the last ice age?": a question whose asking word stands as the cause's subject asks
+    // for its agent; every thing that can act is an answer it offers.
+    if (previous.question && c.agent === undefined && c.patient !== undefined && kinds.size === 0 && asksForAgent(previous, from)) return { agents: AGENTS, patient: c.patient, role: c.role, asked: true };
   }
   return undefined;
+}
+
+/** Question words that ask for a thing ("what", "which"): as a cause's subject they ask for its agent. */
+const ASKING = new Set(['what', 'which']);
+
+/** The cause whose span opens at word `from` of question `s` has an asking word as its subject: it opens the question, or the cause's span. */
+function asksForAgent(s: ReadSentence, from: number): boolean {
+  const clause = s.words[from]?.clause;
+  const opening = s.words.findIndex((w) => w.clause === clause);
+  return [s.words[opening], s.words[from], s.words[from - 1]].some((w) => w !== undefined && ASKING.has(w.text));
 }
 
 /** Whether thing `t` of `s` is set aside by a word just before it. */
@@ -76,6 +91,15 @@ export function answerCauses(s: ReadSentence, choice: Choice | undefined): Cause
   const named = s.things.filter((t) => choice.agents.has(t.kind));
   const aside = named.filter((t) => setAside(s, t));
   const kept = named.filter((t) => !aside.includes(t) && !aside.some((a) => a.kind === t.kind));
+  // "What ended the last ice age? Rising carbon dioxide, on its own.": an answer to a question that
+  // asks for the agent, naming one thing and restricting it ("on its own", "alone", "nothing else was
+  // needed"), names that thing the one cause. Naming two things, or none restricted, answers with no one cause.
+  if (choice.asked === true && aside.length === 0) {
+    const kinds = new Set(named.map((t) => t.kind));
+    const first = named[0];
+    if (first === undefined || kinds.size !== 1 || s.of('exclusive').length === 0) return [];
+    return [{ kind: 'cause', agent: first.kind, patient: choice.patient as string, role: choice.role, polarity: 'asserted', exclusive: true, start: s.words[first.first]?.start ?? 0, end: s.words[first.last]?.end ?? 0 }];
+  }
   if (aside.length === 0 || kept.length === 0) return [];
   const cause = (t: Thing, polarity: Cause['polarity']): Cause => ({
     kind: 'cause',

@@ -69,6 +69,9 @@ function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Orde
   // "the once-popular estimate", "the second-longest record", "Japan's second core", "later work":
   // an order word inside a compound or before its noun ranks or dates a thing; it orders no events.
   if (isModifier(s, h)) return undefined;
+  // "the warm spell that followed", "the Holocene, which came after": an order verb whose subject is a
+  // relative pronoun after a period orders that period, not CO2 and temperature.
+  if (ordersPeriod(s, h.first)) return undefined;
   const event = (t: Thing | undefined) => (t !== undefined && !namesRecord(s, t) ? t : undefined);
   let a: Thing | undefined = event(subjectBefore(s, pastMeasure(s, h.first))) ?? event(subjectOf(s, h.first)) ?? event(elidedSubject(s, h.first)) ?? event(nearestBefore(s, h.first));
   let b: Thing | undefined;
@@ -100,6 +103,19 @@ function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Orde
   const second = kind(b);
   if (first === undefined || second === undefined || first === second) return undefined;
   return withRelation(key, first, second, s, a?.region !== undefined ? a : b, span);
+}
+
+/** Relative pronouns that stand as the subject of the clause they open. */
+const RELATIVES = new Set(['that', 'which']);
+
+/**
+ * The order word at `i` is the verb of a relative clause ("that followed", "which came after") whose
+ * antecedent is a period (lexicon `periods` or a period noun of `kinds.period`: "the warm spell", "the
+ * Holocene"), a comma between them or none.
+ */
+function ordersPeriod(s: ReadSentence, i: number): boolean {
+  if (!RELATIVES.has(s.words[i - 1]?.text ?? '')) return false;
+  return [...s.of('periods'), ...s.of('kinds', 'period')].some((p) => p.last === i - 2);
 }
 
 /** Words of a span of time told before an order word ("a few centuries later", "some 800 years after"). */

@@ -10,7 +10,9 @@
  *   temperature, and no contrast (cue words `contrast`: "than", "not", "unlike", "while",
  *   "combined"...) sets them apart; a "than" inside a comparison of two times (`time-comparison`:
  *   "colder than today") is no contrast. A sentence that reads "this/it shows..." takes its record
- *   from the sentence before. CO2 from Antarctic ice is a global signal: a sentence without a
+ *   from the sentence before, and a display of a record ("the blue line", "Graph B": cue words
+ *   `display`) stands for the regional record one of the three sentences before showed with a
+ *   display of its own (shownRecords). CO2 from Antarctic ice is a global signal: a sentence without a
  *   temperature passes, and so does one where CO2 acts ("the CO2 then warmed the planet"). A record
  *   scaled to the globe passes too: a multiple just before the global words ("1.5-2x the global
  *   mean"), a figure of the globe's own unlike the record's ("swings of ten degrees correspond to a
@@ -24,6 +26,7 @@
  *   CO2 after, the temperature's region global, and a lag figure or an Antarctic record named.
  */
 import { findPhrases } from '../../claims/frames-match.js';
+import { tokenizeSentence } from '../../claims/frames-tokens.js';
 import { readsBack } from '../reads-back.js';
 import { regionOwnsEntity } from '../../propositions/sentence.js';
 import type { ReadSentence } from '../../propositions/index.js';
@@ -33,7 +36,7 @@ import { parseQuantities } from '../../quantities/index.js';
 import { readNumberWords } from '../../quantities/number-words.js';
 
 /** Verbs and nouns that read a record as something: "shows", "tells us", "is a measure of". */
-const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|recorded|indicates?|measures?|measure|gives?|gave|means?|suggests?|proves?|is|are|was|were|says?|said|thermometers?|stands?|represents?|reflects?|equals?|reads?|written|preserved|captured|logged|registered|history|doubles)$/u;
+const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|recorded|indicates?|measures?|measure|gives?|gave|means?|suggests?|proves?|is|are|was|were|says?|said|thermometers?|stands?|represents?|reflects?|equals?|reads?|written|preserved|captured|logged|registered|history|doubles|traces?|traced|tracks?|tracked|charts?|charted|plots?|plotted|depicts?|depicted|displays?|displayed)$/u;
 const ISOTOPES = /^(?:deuterium|isotope|isotopes|δd|δ18o|d18o)$/u;
 const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degrees?|°c|°f|k|cooler|warmer|colder)$/u;
 
@@ -70,7 +73,10 @@ function detectRegional(input: DetectInput): Cue[] {
   const recordClauses = new Set([...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].map((h) => s.words[h.first]?.clause));
   const anaphoric = !recordIn(here) && record;
   const isotopes = s.words.flatMap((w, i) => (ISOTOPES.test(w.text) ? [{ first: i, last: i }] : []));
-  const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland'), ...isotopes];
+  // "The blue line is temperature at Dome C. ... The blue line shows how the whole planet's temperature
+  // swung": a display that a sentence just before showed a regional record as stands for that record.
+  const shown = recordIn(here) ? [] : shownRecords(input, here.s, (j) => recordIn(read(j)));
+  const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland'), ...isotopes, ...shown];
   // "…the whole globe warmed by 10 °C, as Greenland's ice records": a closing "as" clause names the
   // record the whole sentence is read from.
   // "Going by Vostok, the planet was 9 °C colder": a record after a read-from phrase (`read-from`) in its
@@ -129,12 +135,12 @@ function detectRegional(input: DetectInput): Cue[] {
   const global = s
     .of('regions', 'global')
     .filter((g) => !regionOwnsEntity(s, g))
-    .filter((g) => anaphoric || attributed || carriedOver(g) || (recordClauses.has(s.words[g.first]?.clause) && readAs(g)) || isotopes.some((w) => s.words[w.first]?.clause === s.words[g.first]?.clause) || (isotopes.length > 0 && readAs(g)))
+    .filter((g) => anaphoric || attributed || carriedOver(g) || ((recordClauses.has(s.words[g.first]?.clause) || shown.some((d) => s.words[d.first]?.clause === s.words[g.first]?.clause)) && readAs(g)) || isotopes.some((w) => s.words[w.first]?.clause === s.words[g.first]?.clause) || (isotopes.length > 0 && readAs(g)))
     .reduce<{ first: number; last: number } | undefined>((best, g) => (best === undefined || distance(g) < distance(best) ? g : best), undefined);
   if (global === undefined) return [];
   // "jumped about 10°C": a figure in a unit of temperature says it, whatever verb goes with it.
   const temperature = s.of('entities', 'temperature').length + s.of('changes', 'warm').length + s.of('changes', 'cool').length > 0 || s.words.some((w) => TEMPERATURE_WORDS.test(w.text)) || parseQuantities(input.sentence.text).some((q) => q.dimension.startsWith('temperature'));
-  if (!temperature || !(record || carriedOver(global))) return [];
+  if (!temperature || !(record || shown.length > 0 || carriedOver(global))) return [];
   // "colder than today" compares two times, not the record with the globe: no contrast.
   const sentence = input.sentence;
   const times = findPhrases(sentence, words('time-comparison'));
@@ -203,6 +209,37 @@ function detectRegional(input: DetectInput): Cue[] {
   const next = s.words.slice(global.last + 1, global.last + 4).findIndex((w) => /^(?:temperatures?|climate|average|mean|warming|cooling)$/u.test(w.text));
   const last = next < 0 ? global.last : global.last + 1 + next;
   return [{ start: s.words[global.first]?.start ?? 0, end: s.words[last]?.end ?? 0 }];
+}
+
+/** Determiners and possessives that make a display noun a particular one ("the blue line", "that curve", "our graph"). */
+const DISPLAY_DETERMINERS = new Set(['the', 'this', 'that', 'these', 'those', 'our', 'its', 'their', 'each']);
+
+/** How many sentences back a display may have been tied to a regional record. */
+const DISPLAY_REACH = 3;
+
+/**
+ * The displays of a record in sentence `s` (cue words `display`: "the blue line", "that curve", "Graph B",
+ * "the temperature column in Table 1") that stand for a regional record: one of the `DISPLAY_REACH`
+ * sentences before names a regional record and a display of its own ("The blue line is temperature at
+ * Dome C."), so the passage has shown that record as a display. A display noun must be a particular one:
+ * a determiner within two words before it, or a label after it ("Graph B", "Figure 2"). `recordAt(j)`
+ * tells whether sentence j of the paragraph names a regional record.
+ */
+function shownRecords(input: DetectInput, s: ReadSentence, recordAt: (j: number) => boolean): { first: number; last: number }[] {
+  const { index, paragraph, words } = input;
+  if (s.of('regions', 'global').length === 0 || !input.mayHold('display')) return [];
+  const displays = words('display');
+  const tied = Array.from({ length: DISPLAY_REACH }, (_, k) => index - 1 - k).some(
+    (j) => j >= 0 && paragraph[j] !== undefined && recordAt(j) && findPhrases(tokenizeSentence(paragraph[j] as string, [], null), displays).length > 0,
+  );
+  if (!tied) return [];
+  return findPhrases(input.sentence, displays).flatMap((p) => {
+    const first = s.words.findIndex((w) => w.start >= p.start);
+    const last = s.words.findIndex((w) => w.end >= p.end);
+    if (first < 0 || last < first) return [];
+    const particular = [s.words[first - 1], s.words[first - 2]].some((w) => w !== undefined && DISPLAY_DETERMINERS.has(w.text)) || /^(?:[a-z]|\d+)$/u.test(s.words[last + 1]?.text ?? '');
+    return particular ? [{ first, last }] : [];
+  });
 }
 
 /** A figure of `own` (words of the sentence being read) is also one of sentence `before`. */
