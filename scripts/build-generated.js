@@ -5,7 +5,9 @@
 //   - <name>.validate.cjs: the JSON Schema validators of schemas/ (rule pack, settings, ledger) as standalone code;
 //   - builtin-pack.json: rules/paleoclimate.yaml loaded (validated, resolved, citations rendered);
 //   - word-forms.json: the written forms of the built-in pack's terms and subject phrases
-//     (src/propositions/word-forms.ts), made after the pack is compiled.
+//     (src/propositions/word-forms.ts), made after the pack is compiled;
+//   - unit-first-chars.json: the characters each unit matcher's match can start with
+//     (src/quantities/stored-first-chars.ts).
 import { mkdir, readFile, writeFile, rename, rm } from 'node:fs/promises';
 import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -16,6 +18,7 @@ const out = join(dist, 'generated');
 await mkdir(out, { recursive: true });
 // Made again below from what this build derives, never read by it.
 await rm(join(out, 'word-forms.json'), { force: true });
+await rm(join(out, 'unit-first-chars.json'), { force: true });
 
 /** Writes through a temporary file, so a reader never sees half a file. */
 async function writeWhole(file, text) {
@@ -25,6 +28,17 @@ async function writeWhole(file, text) {
 
 const { SCHEMA_OPTIONS, validatorModuleCode } = await import('../dist/rulepack/validator-code.js');
 for (const name of Object.keys(SCHEMA_OPTIONS)) await writeWhole(join(out, `${name}.validate.cjs`), validatorModuleCode(name));
+
+// The unit matchers' first characters (the old file was removed above, so match-unit.js read them
+// from the sources here).
+{
+  const { firstChars } = await import('../dist/quantities/first-chars.js');
+  const { MATCHED_UNITS, unitSource } = await import('../dist/quantities/match-unit.js');
+  const { firstCharsCode, firstCharsText } = await import('../dist/quantities/stored-first-chars.js');
+  const code = firstCharsCode(new URL('../dist/quantities/match-unit.js', import.meta.url));
+  if (code === undefined) throw new Error('build-generated: cannot read the unit matchers\' first-character reader');
+  await writeWhole(join(out, 'unit-first-chars.json'), firstCharsText(MATCHED_UNITS.map(unitSource), firstChars, code));
+}
 
 /** The modules of dist/ that `entry` loads, following relative static and dynamic imports, sorted. */
 async function moduleGraph(entry) {

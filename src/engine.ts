@@ -14,6 +14,7 @@ import { FirnlineError } from './errors.js';
 import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { isChecklistText } from './report/checklist-lines.js';
+import { sortById } from './report/sort.js';
 import { createTopicMatcher, isVoicedQuote, splitSentences, type TopicMatcher } from './prose/index.js';
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
@@ -727,7 +728,7 @@ function describeFlaggedRules(flags: Flag[], packs: LoadedPacks): RuleInfo[] {
     if (rules.has(flag.ruleId)) continue;
     rules.set(flag.ruleId, describeRule(packs, flag.ruleId) ?? describeFromFlag(flag));
   }
-  return [...rules.values()].sort((a, b) => a.id.localeCompare(b.id));
+  return sortById([...rules.values()]);
 }
 
 /** Rules that live in code (arith.*, unit.*) describe themselves through their first flag. */

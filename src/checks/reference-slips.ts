@@ -16,6 +16,7 @@
  * era read for "ago" (BCE, whose offset is in the table) and a difference written with the offset of
  * an absolute temperature (the table's offsets of K and °F).
  */
+import { groupedNumberFormat } from '../format/grouped-number.js';
 import { convert, correctionFigures, findUnit, formatQuantity, rewriteQuantity, writtenInterval } from '../quantities/index.js';
 import type { ReferenceValue } from '../rulepack/types.js';
 import type { Dimension, Quantity } from '../types.js';
@@ -202,8 +203,11 @@ function formatRatio(ratio: number): string {
   return ratio >= 100 ? WHOLE_NUMBER.format(ratio) : String(Number(ratio.toPrecision(4)));
 }
 
-/** `toLocaleString('en-GB', { maximumFractionDigits: 0 })`'s formatter, made once: the call made one per reading. */
-const WHOLE_NUMBER = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 0 });
+/**
+ * `toLocaleString('en-GB', { maximumFractionDigits: 0 })`'s formatter, made once (the call made one
+ * per reading), and ICU loaded only for a number whose digits need it (format/grouped-number.ts).
+ */
+const WHOLE_NUMBER = groupedNumberFormat('en-GB', 0);
 
 /** A scale word read as its neighbour: "2.58 thousand years ago" as 2.58 million, "1.2 billion years" as million. */
 function scaleWordReadings(q: Quantity): Reading[] {

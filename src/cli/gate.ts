@@ -12,6 +12,7 @@ import { describeReview } from '../review/describe-review.js';
 import { readLedger } from '../review/read-ledger.js';
 import { reviewClaims, type ReviewSummary } from '../review/review-claims.js';
 import { SIGNOFF_RULES, signoffFlags } from '../review/review-flags.js';
+import { sortById } from '../report/sort.js';
 import type { CheckResult, Claim, Flag } from '../types.js';
 
 /** How the gate is set up; `ledgerFile` is absolute. */
@@ -69,7 +70,7 @@ export async function applyGate(result: CheckResult, options: GateOptions): Prom
   }
   const claims = scoped.claims.map((c) => ({ ...c, flags: flagsOf.get(c.id) ?? [] }));
   const ruleIds = new Set(stateFlags.map((f) => f.ruleId));
-  const rules = [...scoped.rules, ...SIGNOFF_RULES.filter((r) => ruleIds.has(r.id))].sort((a, b) => a.id.localeCompare(b.id));
+  const rules = sortById([...scoped.rules, ...SIGNOFF_RULES.filter((r) => ruleIds.has(r.id))]);
   const excused = flags.length - (failingFlags.length - stateFlags.length);
   if (options.requireSignoff) {
     summary.push(...describeReview(review));

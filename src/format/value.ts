@@ -5,6 +5,7 @@
  * Values are given in the unit they are shown in; `fromCanonical` converts first when needed.
  */
 import { unitDef } from '../rulepack/units.js';
+import { groupedNumberFormat } from './grouped-number.js';
 
 /** Words for units that have no pack label (internal names of the unit table). */
 const UNIT_WORDS: Record<string, string> = {
@@ -34,8 +35,11 @@ export function formatNumber(value: number, digits = 10): string {
   return NUMBER_FORMAT.format(rounded);
 }
 
-/** What `toLocaleString('en-US', { maximumFractionDigits: 12 })` uses, made once (making one per number was a hot spot). */
-const NUMBER_FORMAT = new Intl.NumberFormat('en-US', { maximumFractionDigits: 12 });
+/**
+ * What `toLocaleString('en-US', { maximumFractionDigits: 12 })` writes, made once (making one per
+ * number was a hot spot), and ICU loaded only for a number whose digits need it (grouped-number.ts).
+ */
+const NUMBER_FORMAT = groupedNumberFormat('en-US', 12);
 
 /** The word written after a number in `unit` (`years`, `kyr`, `ppm`, `°F`, `years ago`), or the unit name. */
 export function unitWord(unit: string): string {
