@@ -12,7 +12,7 @@ import { checkText } from '../../src/engine.js';
 import { loadPacks } from '../../src/rulepack/index.js';
 
 const packs = await loadPacks([]);
-const flagsOf = async (text: string) => (await checkText(text, { packs, format: 'text' })).flags.map((f) => [f.ruleId, f.correction ?? '']);
+const flagsOf = async (text: string) => (await checkText(text, { packs, format: 'text' })).flags.map((f): [string, string] => [f.ruleId, f.correction ?? '']);
 
 describe('a slip that only the hedge kept in range', () => {
   it('reads "about 6 °F colder" of the global glacial cooling as 6 °C written in Fahrenheit', async () => {

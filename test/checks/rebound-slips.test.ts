@@ -13,7 +13,7 @@ import { parseQuantities } from '../../src/quantities/index.js';
 import { loadPacks } from '../../src/rulepack/index.js';
 
 const packs = await loadPacks([]);
-const flagsOf = async (text: string) => (await checkText(text, { packs, format: 'markdown' })).flags.map((f) => [f.ruleId, f.correction ?? '']);
+const flagsOf = async (text: string) => (await checkText(text, { packs, format: 'markdown' })).flags.map((f): [string, string] => [f.ruleId, f.correction ?? '']);
 
 describe('a figure bound in the unit it was meant in', () => {
   it.each([
