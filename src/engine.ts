@@ -8,6 +8,7 @@ import { asksForFigure, checkArithmetic } from './checks/arithmetic.js';
 import { checkRanks } from './checks/rank/index.js';
 import { checkReasoning, judgeByStance, paragraphReader, type ParagraphContext } from './checks/reasoning/index.js';
 import { checkReferences } from './checks/reference.js';
+import { reboundSlips } from './checks/rebound-slips.js';
 import { checkUnits } from './checks/units.js';
 import { hasNumeral, hasTwoNumerals } from './quantities/two-numerals.js';
 import { FirnlineError } from './errors.js';
@@ -464,10 +465,13 @@ function examineSentence(
   const quantities = readAnnualRates(text, readPartitiveCounts(text, read), packs);
   // The previous sentence of the paragraph may name the subject of a number ("They drilled down 2,000 m").
   // The texts a description of a kind ("that core", "the cold snap") may take its subject from, oldest first.
-  const { bindings } = bindQuantities(text, quantities, packs, previous, historyOf(before, previous, context, packs));
+  const history = historyOf(before, previous, context, packs);
+  const { bindings } = bindQuantities(text, quantities, packs, previous, history);
   const reference = checkReferences(text, quantities, bindings, packs);
+  // "today's air carries some 420 parts per billion": a figure that binds only in the unit it was meant in.
+  const rebound = reboundSlips(text, quantities, bindings, packs, (again) => bindQuantities(text, again, packs, previous, history).bindings, before);
   const reading = paragraphReader(asserted, packs, ownBlock(context))(index);
-  const own = preferSpecific([...reference.flags, ...checkArithmetic(text, read, before), ...checkUnits(text, read, before), ...checkRanks(text, packs)]);
+  const own = preferSpecific([...reference.flags, ...rebound, ...checkArithmetic(text, read, before), ...checkUnits(text, read, before), ...checkRanks(text, packs)]);
   const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(asserted, index, packs, context)];
   const p = reading?.props;
   // A causal or order statement is a claim to sign off even without a number.

@@ -77,12 +77,19 @@ const NEAR_MIN_DISTANCE = 0.3;
 const NEAR_MIN_DISTANCE_ON_BEST = 0;
 
 function nearMinDistance(q: Quantity, reading: Reading, r: Pick<ReferenceValue, 'central' | 'low' | 'high'>): number {
-  if (r.central === undefined || reading.read === undefined) return NEAR_MIN_DISTANCE;
+  if (reading.read === undefined) return NEAR_MIN_DISTANCE;
   const w = writtenInterval(q);
   const [low, high] = [reading.read(w.low), reading.read(w.high)].sort((a, b) => a - b) as [number, number];
+  // "only 4 to 7 °F colder" of a 4-7 °C cooling: both ends as written are the reference's own ends
+  // in the other unit, which no wrong figure matches by chance.
+  if (w.low !== w.high && sameFigure(low, r.low) && sameFigure(high, r.high)) return NEAR_MIN_DISTANCE_ON_BEST;
+  if (r.central === undefined) return NEAR_MIN_DISTANCE;
   const precise = high - low <= (r.high - r.low) / 2;
   return precise && low <= r.central && r.central <= high ? NEAR_MIN_DISTANCE_ON_BEST : NEAR_MIN_DISTANCE;
 }
+
+/** Two figures equal up to rounding in the last of about four significant digits. */
+const sameFigure = (a: number, b: number): boolean => Math.abs(a - b) <= Math.max(Math.abs(a), Math.abs(b)) * 5e-4;
 
 /** What a slip found says and the reading that fits. */
 export interface UnitSlip {

@@ -26,6 +26,7 @@ import { isDeniedFigure } from './denied-figure.js';
 import { datedAfterReplacement } from './dated-after.js';
 import { endpointPairs } from '../claims/bind-role.js';
 import { statesRange } from '../quantities/range-ends.js';
+import { findUnit, writtenInterval } from '../quantities/index.js';
 import { findRestatements } from './units-pairs.js';
 
 /** The pack term whose words mark a claim about the present ("today", "now"...). */
@@ -65,7 +66,11 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
       continue;
     }
     const distance = relativeDistance(q.low, q.high, r);
-    verdicts.push(distance === 0 ? 'agrees' : 'conflicts');
+    // "about 6 °F colder" of a 3.5-7.5 °C cooling: only the hedge reaches the range; the number as
+    // written lies outside it, and may be the reference's own figure in a confused unit.
+    const hedgedIn = distance === 0 && q.hedge !== undefined && writtenOutside(q, r);
+    const hedgedSlip = hedgedIn ? unitSlip(r, q) : undefined;
+    verdicts.push(distance === 0 && hedgedSlip === undefined ? 'agrees' : 'conflicts');
     // A superseded figure is right for its day. A figure that only aged (the 2019 level, when the
     // value changes with time and carries an as-of date) stays a note when told as today's; a figure
     // that later work corrected ("currently reaches back about 740,000 years") is an error when the
@@ -83,7 +88,7 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     // A figure that is a regional record's own value as written is no unit slip when the sentence
     // names that record; when it names none ("the world as a whole was about 11 °C colder"), the
     // regional size is a coincidence and a reading in the confusable unit (11 °F, 6.1 °C) explains it.
-    const slip = distance === 0 || matched !== undefined || namesRegion ? undefined : unitSlip(r, q);
+    const slip = hedgedSlip ?? (distance === 0 || matched !== undefined || namesRegion ? undefined : unitSlip(r, q));
     if (slip !== undefined) {
       flags.push({
         ruleId: 'unit.scale-slip',
@@ -122,6 +127,14 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     });
   }
   return { flags, verdicts };
+}
+
+/** Whether the figure as written, without its hedge or its last digit's rounding, lies outside the reference. */
+function writtenOutside(q: Quantity, r: ReferenceValue): boolean {
+  // A figure read as another dimension than its words ("rose 1.2 ppm in 2024" as a rate) has no written reading here.
+  if (findUnit(q.statedUnit, q.dimension) === undefined) return false;
+  const w = writtenInterval(q);
+  return relativeDistance(w.value, w.value, r) > 0;
 }
 
 /** The percentages of a sentence that restate a CO2 level in ppm beside them (units-pairs.ts). */
