@@ -90,6 +90,13 @@ describe('a dated yearly rate in ppm names CO2', () => {
     expect(bound('Today the air gains about 1 ppm per century in that reconstruction.')).toEqual([]);
   });
 
+  it('dates only the rate beside the date: a pace set against it past another rate stays unbound', () => {
+    const sentence = 'In 2024 it was 3.5 ppm a year against some 0.01 ppm a year.';
+    const quantities = restoreElidedUnits(sentence, parseQuantities(sentence));
+    const far = quantities.findIndex((q) => q.text.includes('0.01'));
+    expect(bindQuantities(sentence, quantities, packs).bindings.find((b) => b.quantityIndex === far)).toBeUndefined();
+  });
+
   it('binds nothing when another gas is named', () => {
     expect(bound('In the 2010s methane rose by about 8 ppb a year.')).toEqual([]);
   });
