@@ -47,6 +47,9 @@ import type { TermHits } from './bind-view.js';
 /** A year or a decade in a sentence: a date of its own ("in 2019", "the 1990s"). */
 const YEAR = /(?<!\d)\d{4}(?:s|'s)?(?!\d)/u;
 
+/** The setting kind of the gas a passage speaks of (the lexicon's `settings.gas`): filled only alone. */
+const LONE_KIND = 'gas';
+
 /** Per setting kind, the pack terms that are its members. */
 type SettingKinds = Map<string, Set<string>>;
 
@@ -244,11 +247,16 @@ export function bindFromSetting(
     // Every missing group a setting group, and at least one group of the value's own not a setting: its measure or subject.
     const missingKinds = missing.map((g) => fillableKind(g, kinds));
     if (missingKinds.some((k) => k === undefined)) continue;
+    // The gas a passage speaks of fills a value's gas only when that is all the sentence lacks ("A
+    // 2013 study found a lag of about 1,500 years" after a paragraph on CO2): taken with a period or
+    // a region of the passage as well, the figure's own words would name only what it measures.
+    if (missingKinds.includes(LONE_KIND) && missing.length > 1) continue;
     // A group that offers other words beside its settings ("lower than today") is filled only in a
     // sentence told in the past: "At the time of writing, sea level stands some 125 metres higher"
     // and "sea level has risen some 60 metres since" speak from today, whatever period came before.
     if (missing.some((g) => settingOf(g, kinds) === undefined) && !toldInPast(sentence)) continue;
-    if (!r.binding.all.some((g) => !missing.includes(g) && settingOf(g, kinds) === undefined)) continue;
+    // The gas, when the sentence names it, is its subject ("Carbon dioxide took about 2,000 years to climb").
+    if (!r.binding.all.some((g) => !missing.includes(g) && [undefined, LONE_KIND].includes(settingOf(g, kinds)))) continue;
     const from: TermHits[] = [];
     let filled = 0;
     let fits = true;

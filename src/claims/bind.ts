@@ -25,7 +25,7 @@ import { withStateEvents } from './bind-events.js';
 import { clauseView, sharedSubjects, subjectSpan } from './bind-clauses.js';
 import { carriedContext, resolveBackReferences, type Resolution } from './back-reference.js';
 import { bindFromContext, mayReferBack } from './bind-context.js';
-import { bindFromSetting } from './bind-setting.js';
+import { bindFromSetting, settingKindsOf } from './bind-setting.js';
 import { comparedInRelativeClauses, withoutOthers } from './bind-others.js';
 import { partsOfWholes, wholesApart, withoutWholes } from './bind-part.js';
 import { addEarlierTime, addNearness, framesYield } from './bind-time.js';
@@ -413,6 +413,35 @@ function withoutEarlierClauses(vetoes: TermHits, from: number | undefined, start
   return kept;
 }
 
+/** A year or a decade written in digits ("in 2019", "the 2010s"): the sentence dates what it tells. */
+const DATED = /(?<!\d)\d{4}(?:s|'s)?(?!\d)/gu;
+/** The pack term of the writer's present ("today", "now", "these days"). */
+const PRESENT_TERM = 'today';
+/** Marks that close a clause or open an aside: a date beyond one dates another figure. */
+const ASIDE = /[;:()[\]]/u;
+
+/**
+ * The amount unit of a yearly rate ("ppm" of "ppm/yr") when the unit may name its gas as the amount's
+ * unit does: "it is now rising by about 2 ppm a year", "in the 2010s it averaged 2.4 ppm a year". The
+ * growth of the instrumental era is told per year and dated to the present or to a year or decade,
+ * with no other rate and no clause mark between the date and the figure ("2024 3.5 ppm/yr against
+ * 0.013 ppm/yr" dates the first); a sentence that names a period of the past ("the deglacial
+ * average"), or no time at all ("modern growth"), gives its pace against another, and the unit alone
+ * does not say whose it is.
+ */
+function yearlyAmountUnit(sentence: string, quantities: readonly Quantity[], q: Quantity, hits: TermHits, times: ReadonlySet<string>): string | undefined {
+  if (!q.dimension.endsWith('-rate') || !q.statedUnit.endsWith('/yr')) return undefined;
+  if ([...hits.keys()].some((id) => id !== PRESENT_TERM && times.has(id))) return undefined;
+  const marks: [number, number][] = [...(hits.get(PRESENT_TERM) ?? []), ...[...sentence.matchAll(DATED)].map((m): [number, number] => [m.index, m.index + m[0].length])];
+  const reaches = ([start, end]: [number, number]): boolean => {
+    const [from, to] = end <= q.start ? [end, q.start] : [q.end, start];
+    if (from > to || ASIDE.test(sentence.slice(from, to))) return false;
+    return !quantities.some((o) => o !== q && o.dimension === q.dimension && o.start >= from && o.end <= to);
+  };
+  if (!marks.some(reaches)) return undefined;
+  return q.statedUnit.slice(0, q.statedUnit.indexOf('/'));
+}
+
 /**
  * Binds `quantities` (parsed from `sentence`) to reference values of `packs`. `context` is the
  * previous sentence of the same paragraph, if any: its terms may name the subject of a quantity
@@ -449,10 +478,12 @@ export function bindQuantities(
     roles[i] = 'level';
     view.delete('change');
   }
-  // "at the warm peaks it topped out near 350 ppm": the unit names the gas.
+  // "at the warm peaks it topped out near 350 ppm": the unit names the gas; so does a dated yearly
+  // rate of it, "in the 2010s the global level rose by about 2 ppm a year" (yearlyAmountUnit).
   quantities.forEach((q, i) => {
+    const amount = yearlyAmountUnit(sentence, quantities, q, hits, settingKindsOf(packs).get('time') ?? new Set());
     for (const term of packs.terms) {
-      if (term.units?.includes(q.statedUnit ?? '') !== true || (term.unless ?? []).some((id) => hits.has(id))) continue;
+      if (term.units?.some((u) => u === q.statedUnit || u === amount) !== true || (term.unless ?? []).some((id) => hits.has(id))) continue;
       const view = views[i] as TermHits;
       if (!view.has(term.id)) view.set(term.id, [[q.start, q.end]]);
     }

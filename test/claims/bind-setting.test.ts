@@ -124,3 +124,34 @@ describe('a sentence that opens on a time of its own', () => {
     expect(await readingOf(`${coldest} By then it had dropped to about 280 ppm.`, 'about 280 ppm')).toEqual({ value: 'co2-lgm', flagged: true });
   });
 });
+
+// The gas a passage speaks of (`settings.gas`): a study's lag told without naming the gas again.
+// Caillon et al. 2003 (Science 299:1728-1731): CO2 lagged Antarctic temperature by 800 ± 200 years
+// across Termination III; Parrenin et al. 2013 (Science 339:1060-1063): no lag beyond about 200
+// years either way at the breakpoints of Termination I (the pack's lag values and sources).
+const GAS: Row[] = [
+  ['Everyone quotes the CO2 lag. Caillon and his team later measured a lag of about 3,000 years at Termination III.', '3,000 years', 'lag-caillon2003-termination-iii', true],
+  ['Carbon dioxide rose as the south warmed. In 2013 Parrenin and co-authors found a lag of about 2,000 years at the breakpoints.', '2,000 years', 'lag-parrenin2013', true],
+  // Inside the study's range: bound and clean.
+  ['Everyone quotes the CO2 lag. Caillon and his team later measured a lag of about 800 years at Termination III.', '800 years', 'lag-caillon2003-termination-iii', false],
+];
+// The gas fills a value's gas only when that is all its sentence lacks: a share of the air whose period
+// and gas both come from the passage (280 ppm before 1750 is 0.028% of the air: IPCC AR6 WGI ch. 2,
+// Gulev et al. 2021) stays unbound.
+const GAS_KEPT: Row[] = [
+  ['Before the industrial era the air held about 280 ppm of CO2. That is roughly 0.05 percent of the air.', '0.05 percent', '-', false],
+  // No gas named before: nothing to fill.
+  ['The ice tells of warm and cold. Caillon and his team later measured a lag of about 3,000 years at Termination III.', '3,000 years', '-', false],
+];
+
+describe('the gas a passage speaks of', () => {
+  it.each(GAS)('%s → %s binds %s', async (draft, number, value, flagged) => {
+    expect(await readingOf(draft, number)).toEqual({ value, flagged });
+  });
+  it.each(GAS_KEPT)('%s → %s stays %s', async (draft, number, value, flagged) => {
+    expect(await readingOf(draft, number)).toEqual({ value, flagged });
+  });
+  it('reads the gas kind from the lexicon', () => {
+    expect([...(settingKindsOf(packs).get('gas') ?? [])]).toEqual(['co2']);
+  });
+});

@@ -59,3 +59,45 @@ describe('a date beside one end of a change belongs to that end', () => {
     expect(bindings.map((b) => b.referenceId)).toContain('co2-preindustrial-1750');
   });
 });
+
+/**
+ * A yearly rate in ppm names CO2 as a level in ppm does, when the sentence dates it to the present
+ * or to a decade: NOAA GML reports the growth of CO2 per year, about 0.8 ppm/yr in the 1960s and about
+ * 2.4 ppm/yr in the 2010s (Lan et al., NOAA GML "Trends in CO2", annual mean growth rates), and about
+ * 2-3.5 ppm/yr in 2020-2024. A pace set against a period of the past, or told with no time, says
+ * nothing of whose pace it is by its unit alone.
+ */
+describe('a dated yearly rate in ppm names CO2', () => {
+  it('binds a decade\'s growth told of "the level"', () => {
+    expect(bound('Through the 1960s the level crept up by roughly 0.8 ppm each year.')).toEqual(['co2-growth-1960s']);
+  });
+
+  it('flags a wrong decade growth told with a pronoun', async () => {
+    expect(await valueFlags('Back when I started at the observatory, CO2 was the talk of the lab. In the 2010s it climbed by about 0.6 ppm per year.')).toContain(
+      'value.co2-growth-2010s',
+    );
+  });
+
+  it('binds the present growth told with "now"', () => {
+    expect(bound('Out on the mountain the readings are now going up by roughly 2.5 ppm a year.')).toEqual(['co2-growth-recent']);
+  });
+
+  it('binds nothing for an undated pace set against the deglaciation', () => {
+    expect(bound('That pace, about 2 ppm a year, dwarfs anything in the deglaciation.')).toEqual([]);
+  });
+
+  it('binds nothing for a pace per century', () => {
+    expect(bound('Today the air gains about 1 ppm per century in that reconstruction.')).toEqual([]);
+  });
+
+  it('dates only the rate beside the date: a pace set against it past another rate stays unbound', () => {
+    const sentence = 'In 2024 it was 3.5 ppm a year against some 0.01 ppm a year.';
+    const quantities = restoreElidedUnits(sentence, parseQuantities(sentence));
+    const far = quantities.findIndex((q) => q.text.includes('0.01'));
+    expect(bindQuantities(sentence, quantities, packs).bindings.find((b) => b.quantityIndex === far)).toBeUndefined();
+  });
+
+  it('binds nothing when another gas is named', () => {
+    expect(bound('In the 2010s methane rose by about 8 ppb a year.')).toEqual([]);
+  });
+});
