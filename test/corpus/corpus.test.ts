@@ -153,6 +153,18 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-ag-2': { recall: 0.78, falseFlags: 0.05 },
   'tuning-ag-3': { recall: 0.65, falseFlags: 0.07 },
   'tuning-ag-4': { recall: 0.66, falseFlags: 0.06 },
+  // tuning-ah-1..4 were written fresh at the sixteenth round's start and read, totals only, to judge
+  // each branch before merging (94/121 and 33/40 caught at the start, 94/121 and 34/40 at the end;
+  // false flags 10/246 and 9/82 throughout). tuning-ai-1..4 were the blind hold-out holdout-u, written
+  // in the fifteenth round and read, totals only, on the sixteenth round's first and last code (95/126
+  // and 31/40 caught at the start, 97/126 and 31/40 at the end; false flags 8/242 and 5/81 throughout).
+  'tuning-ah-1': { recall: 0.75, falseFlags: 0.07 },
+  'tuning-ah-2': { recall: 0.68, falseFlags: 0.07 },
+  'tuning-ah-3': { recall: 0.75, falseFlags: 0.05 },
+  'tuning-ah-4': { recall: 0.8, falseFlags: 0.13 },
+  'tuning-ai-1': { recall: 0.7, falseFlags: 0.07 },
+  'tuning-ai-3': { recall: 0.6, falseFlags: 0.04 },
+  'tuning-ai-4': { recall: 0.72, falseFlags: 0.08 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -183,12 +195,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (85.8% measured over 90 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (86.1% measured over 98 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.9% measured over 90 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.2% measured over 98 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
