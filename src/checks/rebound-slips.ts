@@ -46,12 +46,15 @@ function termUnits(packs: LoadedPacks): Map<string, string[]> {
 export function reboundSlips(sentence: string, quantities: Quantity[], bindings: readonly Binding[], packs: LoadedPacks, bindAgain: BindAgain, passage: readonly string[]): FlagDraft[] {
   const units = termUnits(packs);
   const flags: FlagDraft[] = [];
+  // The terms the sentence and its passage name, found once, on the first figure that needs them.
+  let named: Set<string> | undefined;
+  const names = (id: string): boolean => (named ??= new Set([sentence, ...passage].flatMap((text) => [...findTerms(text, packs).keys()]))).has(id);
   quantities.forEach((q, i) => {
     if (q.statedUnit === '' || units.has(q.statedUnit) || bindings.some((b) => b.quantityIndex === i)) return;
     for (const to of confusedWith(q.statedUnit, q.dimension)) {
       const unless = units.get(to);
       if (unless === undefined) continue;
-      if ([sentence, ...passage].some((text) => unless.some((id) => findTerms(text, packs).has(id)))) continue;
+      if (unless.some(names)) continue;
       const again = quantities.map((o, j) => (j === i ? readAs(q, to) : o));
       const bound = bindAgain(again).find((b) => b.quantityIndex === i);
       if (bound === undefined) continue;
