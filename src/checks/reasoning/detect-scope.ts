@@ -35,6 +35,8 @@ import { isTemperatureFirst, isWarmingSide } from './queries.js';
 import { parseQuantities } from '../../quantities/index.js';
 import { readNumberWords } from '../../quantities/number-words.js';
 
+/** Verbs and nouns that read a record as something: "shows", "tells us", "is a measure of". */
+const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|recorded|indicates?|measures?|measure|gives?|gave|means?|suggests?|proves?|is|are|was|were|says?|said|thermometers?|stands?|represents?|reflects?|equals?|reads?|written|preserved|captured|logged|registered|history|doubles|traces?|traced|tracks?|tracked|charts?|charted|plots?|plotted|depicts?|depicted|displays?|displayed)$/u;
 const ISOTOPES = /^(?:deuterium|isotope|isotopes|δd|δ18o|d18o)$/u;
 const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degrees?|°c|°f|k|cooler|warmer|colder)$/u;
 
@@ -71,8 +73,6 @@ function detectRegional(input: DetectInput): Cue[] {
   const recordClauses = new Set([...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].map((h) => s.words[h.first]?.clause));
   const anaphoric = !recordIn(here) && record;
   const isotopes = s.words.flatMap((w, i) => (ISOTOPES.test(w.text) ? [{ first: i, last: i }] : []));
-  // Verbs and nouns that read a record as something (cue words `reading`: "shows", "is a measure of", "traces").
-  const reading = new Set(words('reading').map((p) => p.source.toLowerCase()));
   // "The blue line is temperature at Dome C. ... The blue line shows how the whole planet's temperature
   // swung": a display that a sentence just before showed a regional record as stands for that record.
   const shown = recordIn(here) ? [] : shownRecords(input, here.s, (j) => recordIn(read(j)));
@@ -91,7 +91,7 @@ function detectRegional(input: DetectInput): Cue[] {
   // that points back with a demonstrative and reads the record after naming it does the same.
   const attributed = readFromOnly || records.some((r) => {
     const segment = s.words.filter((w) => w.segment === s.words[r.first]?.segment);
-    const reads = (w: { text: string }) => reading.has(w.text) && w.text !== 'is' && w.text !== 'was';
+    const reads = (w: { text: string }) => READING.test(w.text) && w.text !== 'is' && w.text !== 'was';
     if (segment[0]?.text === 'as' && segment.some(reads)) return true;
     const pointsBack = POINTING_BACK.has(segment[0]?.text ?? '') && (segment[0]?.segment ?? 0) > 0;
     return pointsBack && segment.some((w) => w.text === 'what') && s.words.slice(r.last + 1).some((w) => w.segment === s.words[r.first]?.segment && reads(w));
@@ -102,7 +102,7 @@ function detectRegional(input: DetectInput): Cue[] {
     records.some((r) => {
       if (s.words[r.first]?.segment === s.words[g.first]?.segment) return true;
       const [from, to] = r.first < g.first ? [r.last + 1, g.first] : [g.last + 1, r.first];
-      return s.words.slice(from, to).some((w) => reading.has(w.text));
+      return s.words.slice(from, to).some((w) => READING.test(w.text));
     });
   // "..., and that's the cooling the whole planet went through", "so the whole world's temperature leapt 10
   // degrees", "the entire globe warmed by those same ten degrees": a segment that names the globe and
