@@ -442,6 +442,14 @@ function yearlyAmountUnit(sentence: string, quantities: readonly Quantity[], q: 
   return q.statedUnit.slice(0, q.statedUnit.indexOf('/'));
 }
 
+/** "at" right before a rate figure: the pace a time is worked from. */
+const AT_PACE = /(?:^|[^\p{L}])at\s+$/iu;
+
+/** A rate figure told as the pace something goes at ("at 2.4 ppm a year"). */
+function isPace(sentence: string, q: Quantity): boolean {
+  return q.dimension.endsWith('-rate') && AT_PACE.test(sentence.slice(Math.max(0, q.start - 12), q.start));
+}
+
 /**
  * `hits` less the spans that lie inside a longer term the value vetoes: "today" in "lower than
  * today" is the yardstick of a comparison, not the time the figure is of, so it does not name the
@@ -583,6 +591,8 @@ export function bindQuantities(
     if (isFormulaOperand(sentence, q)) return;
     // "each metre there holds about 750 years": the years of one unit length are that rate, no span of the core.
     if (q.dimension === 'duration' && PER_UNIT_BEFORE.test(sentence.slice(Math.max(0, q.start - 60), q.start))) return;
+    // "At 2.4 ppm a year, a rise that size takes roughly 33 years": a time worked from a pace is that pace's, no event's length.
+    if (q.dimension === 'duration' && quantities.some((o, j) => j < i && isPace(sentence, o))) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const bound = bounds[i];
