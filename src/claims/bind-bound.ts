@@ -61,8 +61,11 @@ function frontedNegation(head: string): boolean {
   return m !== null && !/,|(?:^|[^\p{L}])that(?![\p{L}])/iu.test(head.slice(m.index + m[0].length));
 }
 
-/** Where a clause ends: a bound's words and its number stand in one clause. */
-const CLAUSE_END = /[;:()–—]|,\s*(?:and|but|while|whereas|although|though|where|which|when)\b/giu;
+/**
+ * Where a clause ends: a bound's words and its number stand in one clause. A relative clause may open
+ * on a preposition before "which" (", during which the gas never exceeded 300 ppm").
+ */
+const CLAUSE_END = /[;:()–—]|,\s*(?:and|but|while|whereas|although|though|where|when|(?:(?:during|in|over|across|throughout|through|for|at|by|from|after|before|since|of|within)\s+)?which)\b/giu;
 
 /** Where each clause of `sentence` begins after the first (a semicolon, a bracket, ", where", ", but"...). */
 export function clauseStarts(sentence: string): number[] {

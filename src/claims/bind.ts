@@ -16,7 +16,7 @@ import { termVariants } from './term-variants.js';
 import { GappedTerms } from './term-gaps.js';
 import { withDescribedTimes } from './bind-descriptions.js';
 import { phraseWords, variantsOf } from '../propositions/lexicon.js';
-import type { LoadedPacks } from '../rulepack/types.js';
+import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
 import type { Binding, Quantity } from '../types.js';
 import { bindApposition } from './bind-apposition.js';
 import { bindImplied } from './bind-implied.js';
@@ -442,6 +442,32 @@ function yearlyAmountUnit(sentence: string, quantities: readonly Quantity[], q: 
   return q.statedUnit.slice(0, q.statedUnit.indexOf('/'));
 }
 
+/** "at" right before a rate figure: the pace a time is worked from. */
+const AT_PACE = /(?:^|[^\p{L}])at\s+$/iu;
+
+/** A rate figure told as the pace something goes at ("at 2.4 ppm a year"). */
+function isPace(sentence: string, q: Quantity): boolean {
+  return q.dimension.endsWith('-rate') && AT_PACE.test(sentence.slice(Math.max(0, q.start - 12), q.start));
+}
+
+/**
+ * `hits` less the spans that lie inside a longer term the value vetoes: "today" in "lower than
+ * today" is the yardstick of a comparison, not the time the figure is of, so it does not name the
+ * present for the present-day level, even where the veto itself stands in a later clause and so
+ * stops nothing (bind-veto.ts).
+ */
+function withoutNestedInVetoes(r: ReferenceValue, hits: TermHits): TermHits {
+  const vetoSpans = r.binding.none.flatMap((id) => hits.get(id) ?? []);
+  if (vetoSpans.length === 0) return hits;
+  const inside = ([s, e]: [number, number]): boolean => vetoSpans.some(([vs, ve]) => vs <= s && e <= ve && ve - vs > e - s);
+  const out: TermHits = new Map();
+  for (const [id, spans] of hits) {
+    const left = spans.filter((span) => !inside(span));
+    if (left.length > 0) out.set(id, left);
+  }
+  return out;
+}
+
 /**
  * Binds `quantities` (parsed from `sentence`) to reference values of `packs`. `context` is the
  * previous sentence of the same paragraph, if any: its terms may name the subject of a quantity
@@ -565,6 +591,8 @@ export function bindQuantities(
     if (isFormulaOperand(sentence, q)) return;
     // "each metre there holds about 750 years": the years of one unit length are that rate, no span of the core.
     if (q.dimension === 'duration' && PER_UNIT_BEFORE.test(sentence.slice(Math.max(0, q.start - 60), q.start))) return;
+    // "At 2.4 ppm a year, a rise that size takes roughly 33 years": a time worked from a pace is that pace's, no event's length.
+    if (q.dimension === 'duration' && quantities.some((o, j) => j < i && isPace(sentence, o))) return;
     const view = views[i] as TermHits;
     const role = roles[i] ?? 'unknown';
     const bound = bounds[i];
@@ -574,7 +602,7 @@ export function bindQuantities(
     const difference = isDifference(sentence, quantities, i, role);
     const scoreIn = (seen: TermHits, vetoed: TermHits) =>
       packs.references
-        .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role, q) && (!difference || r.binding.role === 'change') && satisfies(r, seen, vetoed) && canState(r, q))
+        .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role, q) && (!difference || r.binding.role === 'change') && satisfies(r, withoutNestedInVetoes(r, seen), vetoed) && canState(r, q))
         .map((r) => ({ r, score: nearness(r, seen, q, breaks) }))
         .sort((a, b) => a.score - b.score);
     // "The end of the last deglaciation (about 5,000 years ago) opened the Holocene": a number alone in

@@ -30,6 +30,9 @@ describe('a ceiling binds the highest natural CO2 level and is read as the numbe
     ['Before industry, carbon dioxide never rose above about 300 ppm.', 'about 300 ppm', 'agrees'],
     ['In the ice-core record, carbon dioxide had a natural upper limit of roughly 290 ppm.', 'roughly 290 ppm', 'agrees'],
     ['Pre-industrial CO2 topped out at about 300 ppm in the warmest interglacials.', 'about 300 ppm', 'agrees'],
+    // A relative clause opened by a preposition and "which": the present named before it vetoes nothing there.
+    ['Today the air holds more CO2 than in the whole ice record, over which the gas never rose above 300 ppm.', '300 ppm', 'agrees'],
+    ['Our air now beats every layer of the ice, in which carbon dioxide never climbed above 390 ppm.', '390 ppm', 'conflicts'],
   ])('%s', (sentence, text, verdict) => {
     expect(boundAt(sentence, text)).toEqual({ bound: 'ceiling', value: HIGHEST, verdict });
   });

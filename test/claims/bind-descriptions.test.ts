@@ -25,7 +25,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import { describedTimes } from '../../src/claims/bind-descriptions.js';
-import { judge } from './judge-at.js';
+import { loadPacks } from '../../src/rulepack/index.js';
+import { judge, judgeAt } from './judge-at.js';
+
+const loadedLexicon = (await loadPacks([])).lexicon;
 
 describe('the deepest cold of the last ice age, in any wording, is the Last Glacial Maximum', () => {
   it.each([
@@ -71,6 +74,26 @@ describe('interglacials and the Holocene in other words', () => {
     ['The opening of the Holocene came about 11,700 years ago.', 'holocene-start', 'agrees'],
   ])('%s', (sentence, value, verdict) => {
     expect(judge(sentence)).toEqual({ value, verdict });
+  });
+});
+
+describe('the recurring warm and cold periods, told by their warmth or cold and a stretch of time in the plural', () => {
+  it.each([
+    // Typical interglacial peaks 240-300 ppm, glacial lows 172-200 ppm (Lüthi et al. 2008; Siegenthaler et al. 2005).
+    ['In the warm breaks of the last 800,000 years, carbon dioxide reached about 280 ppm.', 'about 280 ppm', 'co2-interglacial-maximum-typical', 'agrees'],
+    ['In the milder stretches, carbon dioxide climbed to about 390 ppm.', 'about 390 ppm', 'co2-interglacial-maximum-typical', 'conflicts'],
+    ['During the warm peaks between ice ages, CO2 held near 285 ppm.', '285 ppm', 'co2-interglacial-maximum-typical', 'agrees'],
+    ['During the warm times between the glacials, CO2 held near 360 ppm.', '360 ppm', 'co2-interglacial-maximum-typical', 'conflicts'],
+    ['In the colder times the ice held about 185 ppm of carbon dioxide.', 'about 185 ppm', 'co2-glacial-minimum-typical', 'agrees'],
+    ['In the icy phases, CO2 sank to some 120 ppm.', 'some 120 ppm', 'co2-glacial-minimum-typical', 'conflicts'],
+    // The glacial lows and the warm peaks of one sentence each keep their own figure.
+    ['Glacial lows sat at about 185 ppm and the warm peaks near 290 ppm.', '290 ppm', 'co2-interglacial-maximum-typical', 'agrees'],
+  ])('%s', (sentence, figure, value, verdict) => {
+    expect(judgeAt(sentence, figure)).toEqual({ value, verdict });
+  });
+  it('takes the adjective only as written: a warming spell names no interglacial (common practice of English)', () => {
+    const found = describedTimes('A warming spell of a few decades raised CO2 by 3 ppm.', loadedLexicon);
+    expect(found).toEqual([]);
   });
 });
 
