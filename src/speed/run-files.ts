@@ -17,7 +17,6 @@ import type { Draft, Flag, Level, Source } from '../types.js';
 import { VERSION } from '../version.js';
 import { cacheKeyOf, packsDigest, type FileOutcome, type ResultCache } from './cache.js';
 import type { PoolTask } from './pool-worker.js';
-import { packOutcome, unpackOutcome, type PackedOutcome } from './packed-outcome.js';
 
 export type { FileOutcome } from './cache.js';
 
@@ -81,8 +80,7 @@ function workerFile(): string {
 }
 
 export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Promise<(FileOutcome | undefined)[]> {
-  // A checked file's outcome is held packed (speed/packed-outcome.ts) until every file is done.
-  const outcomes: (FileOutcome | PackedOutcome | undefined)[] = new Array<FileOutcome | PackedOutcome | undefined>(tasks.length);
+  const outcomes: (FileOutcome | undefined)[] = new Array<FileOutcome | undefined>(tasks.length);
   const packsKey = options.cache === undefined ? '' : packsDigest(options.packs);
   const jobs = Math.max(1, Math.floor(options.jobs ?? availableParallelism()));
   const worker = jobs > 1 ? workerFile() : '';
@@ -90,12 +88,9 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
   let done = 0;
   // The source entries of outcomes that were copied (from a worker or the cache), one object each.
   const sources = new Map<string, Source>();
-  const finish = (index: number, outcome: FileOutcome | PackedOutcome, key?: string): void => {
+  const finish = (index: number, outcome: FileOutcome, key?: string): void => {
     outcomes[index] = outcome;
-    if (key !== undefined && options.cache !== undefined) {
-      const found = outcome instanceof Uint8Array ? unpackOutcome(outcome) : outcome;
-      if (found.unchecked === undefined) void options.cache.set(key, found);
-    }
+    if (key !== undefined && options.cache !== undefined && outcome.unchecked === undefined) void options.cache.set(key, outcome);
     done += 1;
     options.onProgress?.(done, tasks.length);
   };
@@ -124,7 +119,8 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
       packFiles: options.packs.packs.map((p) => p.file).filter((f) => f !== BUILTIN_PACK_FILE),
       builtin: options.packs.packs[0]?.file === BUILTIN_PACK_FILE,
     };
-    finish(item.index, (await (pool as TinypoolType).run(message)) as PackedOutcome, item.key);
+    const outcome = (await (pool as TinypoolType).run(message)) as FileOutcome;
+    finish(item.index, shareSources(outcome, sources), item.key);
   };
   // Each worker has one file running and one queued, so it never waits for this thread to hand on the next.
   const pump = (): void => {
@@ -141,7 +137,9 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
   };
   const checkHere = (item: { index: number; text: string; key: string | undefined }): void => {
     const task = tasks[item.index] as FileTask;
-    finish(item.index, packOutcome(checkFileText({ path: task.path, text: item.text, format: task.format }, options.packs, draftOptions(task))), item.key);
+    const outcome = checkFileText({ path: task.path, text: item.text, format: task.format }, options.packs, draftOptions(task));
+    shareOutcomeStrings(outcome);
+    finish(item.index, outcome, item.key);
   };
   // Between two files this thread lets the workers' answers in, and with them the next dispatches.
   const nextTurn = (): Promise<void> => new Promise((resolve) => setImmediate(resolve));
@@ -200,12 +198,7 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
   } finally {
     await pool?.destroy();
   }
-  // Unpacked once the workers are gone, one at a time, each packed copy let go as it is read.
-  return outcomes.map((outcome, index) => {
-    if (!(outcome instanceof Uint8Array)) return outcome;
-    outcomes[index] = undefined;
-    return shareSources(unpackOutcome(outcome), sources);
-  });
+  return outcomes;
 }
 
 /**
