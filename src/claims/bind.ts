@@ -29,6 +29,7 @@ import { bindFromSetting, settingKindsOf } from './bind-setting.js';
 import { comparedInRelativeClauses, withoutOthers } from './bind-others.js';
 import { partsOfWholes, wholesApart, withoutWholes } from './bind-part.js';
 import { addEarlierTime, addNearness, framesYield } from './bind-time.js';
+import { withoutNextEvents } from './bind-next-event.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
@@ -561,6 +562,8 @@ export function bindQuantities(
   addEarlierTime(sentence, quantities, views, hits, packs);
   // "within about 400 years of Antarctic temperature": a nearness in time, not how long anything lasted.
   addNearness(sentence, quantities, views, packs);
+  // "It lasted about 3,000 years before warming resumed": the clause after a lasting names the next event.
+  withoutNextEvents(sentence, quantities, views);
   const breaks = clauseBreaks(sentence);
   // Per quantity: the value it binds, AMBIGUOUS, or null when its list left it unbound.
   const decided = new Map<number, string | null>();
