@@ -123,7 +123,7 @@ const single = join(out, 'cli.cjs');
 await build({
   absWorkingDir: root,
   stdin: {
-    contents: "export { main } from './dist/cli/main.js';\nexport { linearTextResolver } from './dist/source/micromark-linear-text.js';\n",
+    contents: "export { main } from './dist/cli/main.js';\nexport { linearTextResolver } from './dist/source/micromark-linear-text.js';\nexport { writeScriptCaches } from './dist/speed/script-cache.js';\n",
     resolveDir: root,
     sourcefile: 'cli-entry.js',
     loader: 'js',
@@ -177,6 +177,8 @@ await rename(`${stamp}.tmp`, stamp);
     exports.main(['check', 'examples', '--no-cache', '--jobs', '1', '--format', 'json']).then(() => {
       writeFileSync(cacheFile + '.tmp', encodeCache(readFileSync(file, 'utf8'), script.createCachedData()));
       renameSync(cacheFile + '.tmp', cacheFile);
+      // The generated files the check required with speed/script-cache.ts (the stored tagger).
+      exports.writeScriptCaches();
     });`;
   const made = spawnSync(process.execPath, ['-e', script], { cwd: root, stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
   if (made.status !== 0) console.error(`build-bundle: no code cache (${(made.stderr ?? '').split('\n')[0]}); the command line will compile at start`);
