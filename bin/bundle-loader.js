@@ -9,6 +9,7 @@
 // Nothing is written at run time: the cache sits beside the code it was made from, as trusted as
 // that code, and a run never leaves a file behind.
 'use strict';
+const { isAscii } = require('node:buffer');
 const { createHash } = require('node:crypto');
 const { readFileSync } = require('node:fs');
 const { createRequire } = require('node:module');
@@ -36,7 +37,10 @@ function encodeCache(source, payload) {
   return Buffer.concat([Buffer.from(`${JSON.stringify(headerFor(source, payload))}\n`), payload]);
 }
 
-/** V8's payload from a cache file's bytes, or undefined when anything about it does not match. */
+/**
+ * V8's payload from a cache file's bytes, or undefined when anything about it does not match.
+ * `source` is the bundle's text or its bytes as read (the same digest: text is hashed as UTF-8).
+ */
 function decodeCache(bytes, source) {
   if (bytes === undefined) return undefined;
   const end = bytes.indexOf(10);
@@ -61,7 +65,10 @@ function decodeCache(bytes, source) {
  */
 function loadBundle(file, cacheFile, forCheck) {
   if (forCheck) setFlagsFromString(CHECK_FLAG);
-  const source = readFileSync(file, 'utf8');
+  // The bundle is written in ASCII (scripts/ascii-source.js): its bytes are hashed as read and taken
+  // as one-byte text without decoding; a bundle with any other byte is decoded as UTF-8.
+  const bytesOfSource = readFileSync(file);
+  const source = isAscii(bytesOfSource) ? bytesOfSource.toString('latin1') : bytesOfSource.toString('utf8');
   let bytes;
   if (forCheck) {
     try {
@@ -70,7 +77,7 @@ function loadBundle(file, cacheFile, forCheck) {
       // No cache: compile from the text.
     }
   }
-  const cachedData = decodeCache(bytes, source);
+  const cachedData = decodeCache(bytes, bytesOfSource);
   const script = new vm.Script(`(function (exports, require, module, __filename, __dirname, __firnlineImport) {${source}\n})`, { filename: file, cachedData });
   const module = { exports: {} };
   // The bundle's one dynamic import (tinypool, an ES module package) is the launcher's own.

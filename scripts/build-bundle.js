@@ -23,6 +23,7 @@ import { createHash } from 'node:crypto';
 import { readFile, rm, writeFile, rename } from 'node:fs/promises';
 import { dirname, join, relative, sep } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { asciiSource } from './ascii-source.js';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 const dist = join(root, 'dist');
@@ -122,7 +123,7 @@ const single = join(out, 'cli.cjs');
 await build({
   absWorkingDir: root,
   stdin: {
-    contents: "export { main } from './dist/cli/main.js';\nexport { linearTextResolver } from './dist/source/micromark-linear-text.js';\n",
+    contents: "export { main } from './dist/cli/main.js';\nexport { linearTextResolver } from './dist/source/micromark-linear-text.js';\nexport { writeScriptCaches } from './dist/speed/script-cache.js';\n",
     resolveDir: root,
     sourcefile: 'cli-entry.js',
     loader: 'js',
@@ -148,7 +149,11 @@ await build({
   const tinypool = code.split('import("tinypool")').length - 1;
   if (!code.startsWith('"use strict";')) throw new Error('cli.cjs: expected to start with "use strict" (its modules are ES modules)');
   if (tinypool !== 1 || imports.length !== 1) throw new Error(`cli.cjs: expected one dynamic import, of tinypool; found ${imports.length}`);
-  await writeFile(`${single}.tmp`, code.replace('import("tinypool")', '__firnlineImport("tinypool")'));
+  // Written in ASCII alone (scripts/ascii-source.js): V8 then keeps the text one byte a character and
+  // the launcher reads it without decoding.
+  const ascii = asciiSource(code.replace('import("tinypool")', '__firnlineImport("tinypool")'), 'cli.cjs');
+  if (/\P{ASCII}/u.test(ascii)) throw new Error('cli.cjs: a character past ASCII is left');
+  await writeFile(`${single}.tmp`, ascii);
   await rename(`${single}.tmp`, single);
 }
 
@@ -172,6 +177,8 @@ await rename(`${stamp}.tmp`, stamp);
     exports.main(['check', 'examples', '--no-cache', '--jobs', '1', '--format', 'json']).then(() => {
       writeFileSync(cacheFile + '.tmp', encodeCache(readFileSync(file, 'utf8'), script.createCachedData()));
       renameSync(cacheFile + '.tmp', cacheFile);
+      // The generated files the check required with speed/script-cache.ts (the stored tagger).
+      exports.writeScriptCaches();
     });`;
   const made = spawnSync(process.execPath, ['-e', script], { cwd: root, stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
   if (made.status !== 0) console.error(`build-bundle: no code cache (${(made.stderr ?? '').split('\n')[0]}); the command line will compile at start`);

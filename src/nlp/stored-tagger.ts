@@ -15,6 +15,7 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import type nlpType from 'compromise';
+import { requireCached } from '../speed/script-cache.js';
 
 type Nlp = typeof nlpType;
 
@@ -176,7 +177,8 @@ export function loadStoredTagger(require: NodeJS.Require, code: string): Nlp | u
   const digest = compromiseDigest(require);
   if (digest === undefined) return undefined;
   try {
-    const stored = require(code) as { nlp?: Nlp; compromiseDigest?: unknown };
+    // Compiled with the code cache the build made for it (speed/script-cache.ts), else from its text.
+    const stored = requireCached(code) as { nlp?: Nlp; compromiseDigest?: unknown };
     if (typeof stored.nlp !== 'function' || stored.compromiseDigest !== digest) return undefined;
     return stored.nlp;
   } catch {
