@@ -108,6 +108,16 @@ function detectRegional(input: DetectInput): Cue[] {
   // degrees", "the entire globe warmed by those same ten degrees": a segment that names the globe and
   // points back (a demonstrative copula, an inference, "same") to a record's figure before it.
   const before = read(index - 1);
+  // The restatement phrases of the sentence, read (with compromise's roots) only where one may stand.
+  let restatements: { start: number; end: number }[] | undefined;
+  const restates = (segment: number) => {
+    if (segment === 0 && s.words[0]?.segment !== 0) return false;
+    restatements ??= input.mayHold('restatement') ? findPhrases(input.sentence, words('restatement')) : [];
+    // The phrase is the whole segment before the globe's ("In other words, the planet ...") or opens it.
+    const opening = s.words.find((w) => w.segment === segment);
+    const previous = s.words.filter((w) => w.segment === segment - 1);
+    return restatements.some((r) => (opening !== undefined && r.start === opening.start) || (previous.length > 0 && r.start === previous[0]?.start && r.end === previous.at(-1)?.end));
+  };
   const carriedOver = (g: { first: number }) => {
     const segment = s.words[g.first]?.segment ?? 0;
     const all = s.words.filter((w) => w.segment === segment);
@@ -117,7 +127,9 @@ function detectRegional(input: DetectInput): Cue[] {
     const body = INFERENCE.has(opener) ? own.slice(1) : own;
     const copula = (body[0]?.text === 'that' || body[0]?.text === 'this') && /^(?:is|was)$/u.test(body[1]?.text ?? '');
     const same = own.some((w) => w.text === 'same');
-    const inference = INFERENCE.has(opener) && own.some((w) => /^\d/u.test(w.text) || TEMPERATURE_WORDS.test(w.text));
+    // "In other words, the whole planet was nine or ten degrees colder": a restatement (cue words
+    // `restatement`) just before the globe's segment hands it what was said before, as "so" does.
+    const inference = (INFERENCE.has(opener) || restates(segment)) && own.some((w) => /^\d/u.test(w.text) || TEMPERATURE_WORDS.test(w.text));
     // "..., so did the planet", "as did the whole Earth", "and the globe did too": an elliptic clause
     // whose subject is the globe repeats the record's own change for it.
     const elliptic = (ELLIPSIS_OPENERS.has(opener) && ELLIPSIS_AUX.has(own[1]?.text ?? '')) || (ELLIPSIS_AUX.has(own.at(-2)?.text ?? '') && ELLIPSIS_CLOSERS.has(own.at(-1)?.text ?? ''));
@@ -125,7 +137,7 @@ function detectRegional(input: DetectInput): Cue[] {
     // "Greenland was about 20 degrees colder. So the planet as a whole was roughly 20 degrees
     // colder": an inference that hands the record's own figure, named in the sentence before, to
     // the globe. A figure of the globe's own ("So the globe cooled about 5") scales, and passes.
-    const handedOn = inference && before !== undefined && sharesFigure(own, before.s);
+    const handedOn = inference && before !== undefined && sharesFigure(own, before.s, input.paragraph[index - 1] ?? before.s.text);
     return records.length === 0 && ((copula || same) || handedOn) && recordIn(before);
   };
   // "Earth's changing orbit": a globe that owns an entity is no temperature of the globe.
@@ -195,7 +207,9 @@ function detectRegional(input: DetectInput): Cue[] {
     return true;
   });
   // "the swing at Vostok understates the global change": the record is compared with the globe, not read as it.
-  if (contrast.length > 0 || here.props.comparisons.some((c) => c.attribute === 'size')) return [];
+  // A size comparison of the globe with a time ("the Earth was more than 20 °C colder during the ice
+  // age", where "more than" bounds the figure) sets no place against the globe.
+  if (contrast.length > 0 || here.props.comparisons.some((c) => c.attribute === 'size' && comparesPlaces(c))) return [];
   // "Antarctica swings 1.5-2x the global mean", "Antarctic swings of eight to ten degrees correspond to
   // a global change of five or six": a multiple of the globe's figure, or a figure of the globe's own
   // unlike the record's, scales the record to the globe; it does not read the record as the globe.
@@ -242,27 +256,46 @@ function shownRecords(input: DetectInput, s: ReadSentence, recordAt: (j: number)
   });
 }
 
-/** A figure of `own` (words of the sentence being read) is also one of sentence `before`. */
-function sharesFigure(own: readonly { text: string }[], before: ReadSentence): boolean {
-  const here = figuresIn({ words: own }, 0, own.length);
+/** The regions and records a size comparison may set against the globe. */
+const PLACES = new Set(['antarctic', 'greenland', 'polar', 'tropics', 'south', 'north', 'ice-core']);
+
+/** A comparison between two places (a record's region and the globe), not of a place with a time. */
+function comparesPlaces(c: { a: string; b: string }): boolean {
+  return PLACES.has(c.a) || PLACES.has(c.b);
+}
+
+/**
+ * A figure of `own` (words of the sentence being read) is also one of sentence `before` (whose text is
+ * `text`), or lies inside a range of temperatures it states ("swinging by 8 to 10 °C. So the planet
+ * ... about 9 °C colder": the middle of the record's own range).
+ */
+function sharesFigure(own: readonly { text: string }[], before: ReadSentence, text: string): boolean {
+  const here = figuresIn({ words: own }, 0, own.length).filter((v) => v !== 1);
   const there = figuresIn(before, 0, before.words.length);
-  return here.some((v) => v !== 1 && there.includes(v));
+  if (here.some((v) => there.includes(v))) return true;
+  const ranges = parseQuantities(text).filter((q) => q.dimension.startsWith('temperature') && q.high > q.low);
+  return here.some((v) => ranges.some((q) => q.low <= v && v <= q.high));
 }
 
 /** The figures of words `from` to `to` (exclusive) of `s`: digits and numbers in words, each as its value. */
 function figuresIn(s: { words: readonly { text: string }[] }, from: number, to: number): number[] {
-  const out: number[] = [];
+  return figuresAt(s, from, to).map((f) => f.value);
+}
+
+/** figuresIn's figures, each with the index of its first word. */
+function figuresAt(s: { words: readonly { text: string }[] }, from: number, to: number): { value: number; at: number }[] {
+  const out: { value: number; at: number }[] = [];
   for (let i = Math.max(0, from); i < Math.min(to, s.words.length); i++) {
     const text = s.words[i]?.text ?? '';
     const digits = /^\d[\d,]*(?:\.\d+)?/u.exec(text);
     if (digits !== null) {
-      out.push(Number(digits[0].replace(/,/gu, '')));
+      out.push({ value: Number(digits[0].replace(/,/gu, '')), at: i });
       continue;
     }
     const read = readNumberWords(s.words.slice(i, to).map((w) => w.text));
     // "from it one may fairly say": a lone "one" is a pronoun as often as a figure, and counts as none.
     if (read !== undefined && read.used > 0 && !(read.used === 1 && text === 'one')) {
-      out.push(read.value);
+      out.push({ value: read.value, at: i });
       i += read.used - 1;
     }
   }
@@ -284,12 +317,35 @@ function scaledToGlobe(s: ReadSentence, text: string, global: { first: number; l
   const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].filter((r) => r.last < global.first);
   if (records.length === 0) return false;
   const fromRecord = Math.max(...records.map((r) => r.last + 1));
-  const own = figuresIn(s, fromRecord, global.first);
+  // Only temperatures scale: "the stack funded in 2023", "the graph in episode 2", "its thermometer for
+  // 420,000 years" name a year, a label and a span, none of them the record's swing.
+  const quantities = parseQuantities(text);
+  const own = temperatureFigures(s, quantities, fromRecord, global.first, true);
   const clause = s.words[global.first]?.clause;
   let end = global.last + 1;
   while (end < s.words.length && end <= global.last + 8 && s.words[end]?.clause === clause) end++;
-  const theirs = figuresIn(s, global.last + 1, end);
+  const theirs = temperatureFigures(s, quantities, global.last + 1, end, false);
   return own.length > 0 && theirs.length > 0 && own.every((v) => !theirs.includes(v));
+}
+
+/** Words that give a bare figure before them the unit of a temperature ("eight to ten degrees"). */
+const DEGREE_WORDS = /^(?:degrees?|°c|°f|c|f|k|celsius|fahrenheit|kelvin)$/u;
+
+/**
+ * The figures of words `from` to `to` of `s` that may be temperatures: none read as a quantity of
+ * another dimension (a year, a span, a concentration); a bare one, when `unitNeeded`, only with a
+ * degree word within three words after it ("eight to ten degrees"), else as it stands ("a global
+ * change of about six").
+ */
+function temperatureFigures(s: ReadSentence, quantities: readonly { start: number; end: number; dimension: string }[], from: number, to: number, unitNeeded: boolean): number[] {
+  return figuresAt(s, from, to).flatMap(({ value, at }) => {
+    const start = s.words[at]?.start ?? -1;
+    // A bare number ("9 degrees" read without its unit) is judged by the words after it.
+    const quantity = quantities.find((q) => q.start <= start && start < q.end && q.dimension !== 'number');
+    if (quantity !== undefined) return quantity.dimension.startsWith('temperature') ? [value] : [];
+    if (!unitNeeded) return [value];
+    return s.words.slice(at + 1, at + 4).some((w) => DEGREE_WORDS.test(w.text)) ? [value] : [];
+  });
 }
 
 /**
