@@ -35,8 +35,6 @@ import { isTemperatureFirst, isWarmingSide } from './queries.js';
 import { parseQuantities } from '../../quantities/index.js';
 import { readNumberWords } from '../../quantities/number-words.js';
 
-/** Verbs and nouns that read a record as something: "shows", "tells us", "is a measure of". */
-const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|recorded|indicates?|measures?|measure|gives?|gave|means?|suggests?|proves?|is|are|was|were|says?|said|thermometers?|stands?|represents?|reflects?|equals?|reads?|written|preserved|captured|logged|registered|history|doubles|traces?|traced|tracks?|tracked|charts?|charted|plots?|plotted|depicts?|depicted|displays?|displayed)$/u;
 const ISOTOPES = /^(?:deuterium|isotope|isotopes|δd|δ18o|d18o)$/u;
 const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degrees?|°c|°f|k|cooler|warmer|colder)$/u;
 
@@ -65,18 +63,18 @@ function detectRegional(input: DetectInput): Cue[] {
   if (here === undefined) return [];
   const s = here.s;
   const recordIn = (r: typeof here | undefined) =>
-    r !== undefined && (r.s.of('entities', 'ice-core').length + r.s.of('regions', 'antarctic').length + r.s.of('regions', 'greenland').length > 0 || r.s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text)));
+    r !== undefined && (regionalRecords(r.s).length > 0 || r.s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text)));
   // "This tells us that the whole Earth was 9 °C colder": the record read may be named one sentence back.
   const record = recordIn(here) || (readsBack(s.text) && recordIn(read(index - 1)));
   // A record in one clause and the globe in the next ("At Dome C, ...: for the planet as a whole, ...")
   // set the two side by side; only a record and the globe in one clause equate them.
-  const recordClauses = new Set([...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].map((h) => s.words[h.first]?.clause));
+  const recordClauses = new Set(regionalRecords(s).map((h) => s.words[h.first]?.clause));
   const anaphoric = !recordIn(here) && record;
   const isotopes = s.words.flatMap((w, i) => (ISOTOPES.test(w.text) ? [{ first: i, last: i }] : []));
   // "The blue line is temperature at Dome C. ... The blue line shows how the whole planet's temperature
   // swung": a display that a sentence just before showed a regional record as stands for that record.
   const shown = recordIn(here) ? [] : shownRecords(input, here.s, (j) => recordIn(read(j)));
-  const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland'), ...isotopes, ...shown];
+  const records = [...regionalRecords(s), ...isotopes, ...shown];
   // "…the whole globe warmed by 10 °C, as Greenland's ice records": a closing "as" clause names the
   // record the whole sentence is read from.
   // "Going by Vostok, the planet was 9 °C colder": a record after a read-from phrase (`read-from`) in its
@@ -89,9 +87,12 @@ function detectRegional(input: DetectInput): Cue[] {
   const readFromOnly = records.some(readAfter) && records.every(readAfter);
   // "..., that's what the Greenland cores show", "which is what Vostok records": a closing segment
   // that points back with a demonstrative and reads the record after naming it does the same.
+  // Verbs and nouns that read a record as something ("shows", "tells us", "is a measure of"): the
+  // lexicon's `reading` words, every inflection derived (no compromise root needed).
+  const reading = new Set(s.of('reading').flatMap((h) => s.words.slice(h.first, h.last + 1)));
   const attributed = readFromOnly || records.some((r) => {
     const segment = s.words.filter((w) => w.segment === s.words[r.first]?.segment);
-    const reads = (w: { text: string }) => READING.test(w.text) && w.text !== 'is' && w.text !== 'was';
+    const reads = (w: (typeof s.words)[number]) => reading.has(w) && w.text !== 'is' && w.text !== 'was';
     if (segment[0]?.text === 'as' && segment.some(reads)) return true;
     const pointsBack = POINTING_BACK.has(segment[0]?.text ?? '') && (segment[0]?.segment ?? 0) > 0;
     return pointsBack && segment.some((w) => w.text === 'what') && s.words.slice(r.last + 1).some((w) => w.segment === s.words[r.first]?.segment && reads(w));
@@ -102,7 +103,7 @@ function detectRegional(input: DetectInput): Cue[] {
     records.some((r) => {
       if (s.words[r.first]?.segment === s.words[g.first]?.segment) return true;
       const [from, to] = r.first < g.first ? [r.last + 1, g.first] : [g.last + 1, r.first];
-      return s.words.slice(from, to).some((w) => READING.test(w.text));
+      return s.words.slice(from, to).some((w) => reading.has(w));
     });
   // "..., and that's the cooling the whole planet went through", "so the whole world's temperature leapt 10
   // degrees", "the entire globe warmed by those same ten degrees": a segment that names the globe and
@@ -217,12 +218,25 @@ function detectRegional(input: DetectInput): Cue[] {
   // "the lag is an Antarctic thing and global temperature actually trailed CO2": the globe given the
   // order of its own, CO2 first, sets it against the record; nothing of the record is read as global.
   if (here.props.orders.some((o) => o.region === 'global' && !o.together && o.first === 'co2' && isWarmingSide(o.then))) return [];
+  // "Averaged over the whole globe, temperature also rose before CO2, so the lag is not just an
+  // Antarctic feature": an order of the globe's own, its record named only to be widened, reads no
+  // record as the globe (the direction facts judge the order).
+  if (regionalRecords(s).length > 0 && !asSource(s) && isotopes.length === 0 && !anaphoric && shown.length === 0 && here.props.orders.some((o) => o.region === 'global' && !o.together)) return [];
   // "...and the CO2 then warmed the planet": CO2 acting on the globe, not a record read as global.
   if (here.props.causes.some((c) => c.agent === 'co2' && c.polarity === 'asserted')) return [];
   // "global temperature": the temperature word just after the global one is part of the claim.
   const next = s.words.slice(global.last + 1, global.last + 4).findIndex((w) => /^(?:temperatures?|climate|average|mean|warming|cooling)$/u.test(w.text));
   const last = next < 0 ? global.last : global.last + 1 + next;
   return [{ start: s.words[global.first]?.start ?? 0, end: s.words[last]?.end ?? 0 }];
+}
+
+/**
+ * The ice cores and polar regions a sentence names, but not the word of an event's name ("the
+ * Antarctic Cold Reversal" is a time, not a record of Antarctica).
+ */
+function regionalRecords(s: ReadSentence): { first: number; last: number }[] {
+  const periods = s.of('periods');
+  return [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].filter((h) => !periods.some((p) => p.first <= h.first && h.last <= p.last));
 }
 
 /** Determiners and possessives that make a display noun a particular one ("the blue line", "that curve", "our graph"). */
@@ -314,7 +328,7 @@ function scaledToGlobe(s: ReadSentence, text: string, global: { first: number; l
   const at = s.words[global.first]?.start ?? 0;
   const multiple = parseQuantities(text).some((q) => q.dimension === 'ratio' && q.end <= at && s.words.filter((w) => w.start >= q.end && w.end <= at).length <= 4);
   if (multiple) return true;
-  const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].filter((r) => r.last < global.first);
+  const records = regionalRecords(s).filter((r) => r.last < global.first);
   if (records.length === 0) return false;
   const fromRecord = Math.max(...records.map((r) => r.last + 1));
   // Only temperatures scale: "the stack funded in 2023", "the graph in episode 2", "its thermometer for
@@ -357,8 +371,12 @@ function detectLag({ index, read }: DetectInput): Cue[] {
   const here = read(index);
   // The lag read as global: a record named, or the lag's own figure ("about 800 years", "600 to 800
   // years": a number of years, as the Antarctic studies give it). A global order with no record and
-  // no figure ("several centuries before") is the direction fact global-co2-ahead-of-warming.
-  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && (o.recordNamed || (here !== undefined && countedSpan(here.s, o.start))));
+  // no figure ("several centuries before") is the direction fact global-co2-ahead-of-warming; so is
+  // one whose record is named only to be widened ("..., so the lag is not just an Antarctic feature")
+  // or that opens on an expletive "it" ("It is quite true that the globe warmed first"), which
+  // reads no record of the sentence before.
+  const sourced = here !== undefined && (asSource(here.s) || (readsRecordBefore(here.s) && asSource(read(index - 1)?.s)));
+  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && ((o.recordNamed && sourced) || (here !== undefined && countedSpan(here.s, o.start))));
   if (here === undefined || order === undefined) return [];
   // "about 800 years before": the lag figure just before the order word is part of the claim.
   const at = here.s.words.findIndex((w) => w.start === order.start);
@@ -366,6 +384,39 @@ function detectLag({ index, read }: DetectInput): Cue[] {
   const figure = lead.findIndex((w) => /^(?:\d[\d,.]*|years?|centur(?:y|ies)|millenni(?:um|a)|decades?|few|several|hundreds?)$/u.test(w.text));
   const start = figure < 0 ? order.start : (lead[figure]?.start ?? order.start);
   return [{ start, end: order.end }];
+}
+
+/** Words after "not" that widen what follows ("not just an Antarctic feature", "not only Antarctica"). */
+const WIDENERS = new Set(['just', 'only', 'merely', 'simply', 'solely', 'purely']);
+
+/**
+ * A record or Antarctic region of `s` that the sentence may be read from: one not named only to be
+ * widened ("not just an Antarctic feature", "not only Antarctica": the claim is the globe's own) and
+ * not the word of an event's name.
+ */
+function asSource(s: ReadSentence | undefined): boolean {
+  if (s === undefined) return false;
+  return regionalRecords(s).some((r) => {
+    for (let k = Math.max(0, r.first - 4); k < r.first - 1; k++) {
+      if (s.words[k]?.text === 'not' && WIDENERS.has(s.words[k + 1]?.text ?? '')) return false;
+    }
+    return true;
+  });
+}
+
+/** Copulas and verbs of seeming after an expletive "it" ("It is true that", "It seems that"). */
+const EXPLETIVE_VERBS = new Set(['is', 'was', "it's", 'seems', 'seemed', 'appears', 'appeared', 'turns', 'turned']);
+
+/**
+ * The sentence opens on a word that reads the record named before it ("It shows...", "This means..."),
+ * as src/propositions/orders.ts reads it, but not on an expletive "it" ("It is also true that ...",
+ * "It seems that ...": a copula or a verb of seeming and then "that" within a few words).
+ */
+function readsRecordBefore(s: ReadSentence): boolean {
+  const first = s.words[s.opening];
+  if (first === undefined || !['it', 'this', 'that', 'these', 'those', 'they', 'here'].includes(first.text)) return false;
+  if (first.text !== 'it' || !EXPLETIVE_VERBS.has(s.words[s.opening + 1]?.text ?? '')) return true;
+  return !s.words.slice(s.opening + 2, s.opening + 7).some((w) => w.text === 'that');
 }
 
 const SPAN_UNITS = /^(?:years?|centur(?:y|ies)|millenni(?:um|a)|decades?|kyr)$/u;
