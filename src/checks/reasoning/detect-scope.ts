@@ -35,8 +35,6 @@ import { isTemperatureFirst, isWarmingSide } from './queries.js';
 import { parseQuantities } from '../../quantities/index.js';
 import { readNumberWords } from '../../quantities/number-words.js';
 
-/** Verbs and nouns that read a record as something: "shows", "tells us", "is a measure of". */
-const READING = /^(?:shows?|showed|shown|tells?|told|reveals?|revealed|records?|recorded|indicates?|measures?|measure|gives?|gave|means?|suggests?|proves?|is|are|was|were|says?|said|thermometers?|stands?|represents?|reflects?|equals?|reads?|written|preserved|captured|logged|registered|history|doubles|traces?|traced|tracks?|tracked|charts?|charted|plots?|plotted|depicts?|depicted|displays?|displayed)$/u;
 const ISOTOPES = /^(?:deuterium|isotope|isotopes|δd|δ18o|d18o)$/u;
 const TEMPERATURE_WORDS = /^(?:swing|swings|swung|thermometer|thermometers|degrees?|°c|°f|k|cooler|warmer|colder)$/u;
 
@@ -65,18 +63,18 @@ function detectRegional(input: DetectInput): Cue[] {
   if (here === undefined) return [];
   const s = here.s;
   const recordIn = (r: typeof here | undefined) =>
-    r !== undefined && (r.s.of('entities', 'ice-core').length + r.s.of('regions', 'antarctic').length + r.s.of('regions', 'greenland').length > 0 || r.s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text)));
+    r !== undefined && (regionalRecords(r.s).length > 0 || r.s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text)));
   // "This tells us that the whole Earth was 9 °C colder": the record read may be named one sentence back.
   const record = recordIn(here) || (readsBack(s.text) && recordIn(read(index - 1)));
   // A record in one clause and the globe in the next ("At Dome C, ...: for the planet as a whole, ...")
   // set the two side by side; only a record and the globe in one clause equate them.
-  const recordClauses = new Set([...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].map((h) => s.words[h.first]?.clause));
+  const recordClauses = new Set(regionalRecords(s).map((h) => s.words[h.first]?.clause));
   const anaphoric = !recordIn(here) && record;
   const isotopes = s.words.flatMap((w, i) => (ISOTOPES.test(w.text) ? [{ first: i, last: i }] : []));
   // "The blue line is temperature at Dome C. ... The blue line shows how the whole planet's temperature
   // swung": a display that a sentence just before showed a regional record as stands for that record.
   const shown = recordIn(here) ? [] : shownRecords(input, here.s, (j) => recordIn(read(j)));
-  const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland'), ...isotopes, ...shown];
+  const records = [...regionalRecords(s), ...isotopes, ...shown];
   // "…the whole globe warmed by 10 °C, as Greenland's ice records": a closing "as" clause names the
   // record the whole sentence is read from.
   // "Going by Vostok, the planet was 9 °C colder": a record after a read-from phrase (`read-from`) in its
@@ -89,9 +87,12 @@ function detectRegional(input: DetectInput): Cue[] {
   const readFromOnly = records.some(readAfter) && records.every(readAfter);
   // "..., that's what the Greenland cores show", "which is what Vostok records": a closing segment
   // that points back with a demonstrative and reads the record after naming it does the same.
+  // Verbs and nouns that read a record as something ("shows", "tells us", "is a measure of"): the
+  // lexicon's `reading` words, every inflection derived (no compromise root needed).
+  const reading = new Set(s.of('reading').flatMap((h) => s.words.slice(h.first, h.last + 1)));
   const attributed = readFromOnly || records.some((r) => {
     const segment = s.words.filter((w) => w.segment === s.words[r.first]?.segment);
-    const reads = (w: { text: string }) => READING.test(w.text) && w.text !== 'is' && w.text !== 'was';
+    const reads = (w: (typeof s.words)[number]) => reading.has(w) && w.text !== 'is' && w.text !== 'was';
     if (segment[0]?.text === 'as' && segment.some(reads)) return true;
     const pointsBack = POINTING_BACK.has(segment[0]?.text ?? '') && (segment[0]?.segment ?? 0) > 0;
     return pointsBack && segment.some((w) => w.text === 'what') && s.words.slice(r.last + 1).some((w) => w.segment === s.words[r.first]?.segment && reads(w));
@@ -102,12 +103,22 @@ function detectRegional(input: DetectInput): Cue[] {
     records.some((r) => {
       if (s.words[r.first]?.segment === s.words[g.first]?.segment) return true;
       const [from, to] = r.first < g.first ? [r.last + 1, g.first] : [g.last + 1, r.first];
-      return s.words.slice(from, to).some((w) => READING.test(w.text));
+      return s.words.slice(from, to).some((w) => reading.has(w));
     });
   // "..., and that's the cooling the whole planet went through", "so the whole world's temperature leapt 10
   // degrees", "the entire globe warmed by those same ten degrees": a segment that names the globe and
   // points back (a demonstrative copula, an inference, "same") to a record's figure before it.
   const before = read(index - 1);
+  // The restatement phrases of the sentence, read (with compromise's roots) only where one may stand.
+  let restatements: { start: number; end: number }[] | undefined;
+  const restates = (segment: number) => {
+    if (segment === 0 && s.words[0]?.segment !== 0) return false;
+    restatements ??= input.mayHold('restatement') ? findPhrases(input.sentence, words('restatement')) : [];
+    // The phrase is the whole segment before the globe's ("In other words, the planet ...") or opens it.
+    const opening = s.words.find((w) => w.segment === segment);
+    const previous = s.words.filter((w) => w.segment === segment - 1);
+    return restatements.some((r) => (opening !== undefined && r.start === opening.start) || (previous.length > 0 && r.start === previous[0]?.start && r.end === previous.at(-1)?.end));
+  };
   const carriedOver = (g: { first: number }) => {
     const segment = s.words[g.first]?.segment ?? 0;
     const all = s.words.filter((w) => w.segment === segment);
@@ -117,7 +128,9 @@ function detectRegional(input: DetectInput): Cue[] {
     const body = INFERENCE.has(opener) ? own.slice(1) : own;
     const copula = (body[0]?.text === 'that' || body[0]?.text === 'this') && /^(?:is|was)$/u.test(body[1]?.text ?? '');
     const same = own.some((w) => w.text === 'same');
-    const inference = INFERENCE.has(opener) && own.some((w) => /^\d/u.test(w.text) || TEMPERATURE_WORDS.test(w.text));
+    // "In other words, the whole planet was nine or ten degrees colder": a restatement (cue words
+    // `restatement`) just before the globe's segment hands it what was said before, as "so" does.
+    const inference = (INFERENCE.has(opener) || restates(segment)) && own.some((w) => /^\d/u.test(w.text) || TEMPERATURE_WORDS.test(w.text));
     // "..., so did the planet", "as did the whole Earth", "and the globe did too": an elliptic clause
     // whose subject is the globe repeats the record's own change for it.
     const elliptic = (ELLIPSIS_OPENERS.has(opener) && ELLIPSIS_AUX.has(own[1]?.text ?? '')) || (ELLIPSIS_AUX.has(own.at(-2)?.text ?? '') && ELLIPSIS_CLOSERS.has(own.at(-1)?.text ?? ''));
@@ -125,7 +138,7 @@ function detectRegional(input: DetectInput): Cue[] {
     // "Greenland was about 20 degrees colder. So the planet as a whole was roughly 20 degrees
     // colder": an inference that hands the record's own figure, named in the sentence before, to
     // the globe. A figure of the globe's own ("So the globe cooled about 5") scales, and passes.
-    const handedOn = inference && before !== undefined && sharesFigure(own, before.s);
+    const handedOn = inference && before !== undefined && sharesFigure(own, before.s, input.paragraph[index - 1] ?? before.s.text);
     return records.length === 0 && ((copula || same) || handedOn) && recordIn(before);
   };
   // "Earth's changing orbit": a globe that owns an entity is no temperature of the globe.
@@ -195,7 +208,9 @@ function detectRegional(input: DetectInput): Cue[] {
     return true;
   });
   // "the swing at Vostok understates the global change": the record is compared with the globe, not read as it.
-  if (contrast.length > 0 || here.props.comparisons.some((c) => c.attribute === 'size')) return [];
+  // A size comparison of the globe with a time ("the Earth was more than 20 °C colder during the ice
+  // age", where "more than" bounds the figure) sets no place against the globe.
+  if (contrast.length > 0 || here.props.comparisons.some((c) => c.attribute === 'size' && comparesPlaces(c))) return [];
   // "Antarctica swings 1.5-2x the global mean", "Antarctic swings of eight to ten degrees correspond to
   // a global change of five or six": a multiple of the globe's figure, or a figure of the globe's own
   // unlike the record's, scales the record to the globe; it does not read the record as the globe.
@@ -203,12 +218,25 @@ function detectRegional(input: DetectInput): Cue[] {
   // "the lag is an Antarctic thing and global temperature actually trailed CO2": the globe given the
   // order of its own, CO2 first, sets it against the record; nothing of the record is read as global.
   if (here.props.orders.some((o) => o.region === 'global' && !o.together && o.first === 'co2' && isWarmingSide(o.then))) return [];
+  // "Averaged over the whole globe, temperature also rose before CO2, so the lag is not just an
+  // Antarctic feature": an order of the globe's own, its record named only to be widened, reads no
+  // record as the globe (the direction facts judge the order).
+  if (regionalRecords(s).length > 0 && !asSource(s) && isotopes.length === 0 && !anaphoric && shown.length === 0 && here.props.orders.some((o) => o.region === 'global' && !o.together)) return [];
   // "...and the CO2 then warmed the planet": CO2 acting on the globe, not a record read as global.
   if (here.props.causes.some((c) => c.agent === 'co2' && c.polarity === 'asserted')) return [];
   // "global temperature": the temperature word just after the global one is part of the claim.
   const next = s.words.slice(global.last + 1, global.last + 4).findIndex((w) => /^(?:temperatures?|climate|average|mean|warming|cooling)$/u.test(w.text));
   const last = next < 0 ? global.last : global.last + 1 + next;
   return [{ start: s.words[global.first]?.start ?? 0, end: s.words[last]?.end ?? 0 }];
+}
+
+/**
+ * The ice cores and polar regions a sentence names, but not the word of an event's name ("the
+ * Antarctic Cold Reversal" is a time, not a record of Antarctica).
+ */
+function regionalRecords(s: ReadSentence): { first: number; last: number }[] {
+  const periods = s.of('periods');
+  return [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].filter((h) => !periods.some((p) => p.first <= h.first && h.last <= p.last));
 }
 
 /** Determiners and possessives that make a display noun a particular one ("the blue line", "that curve", "our graph"). */
@@ -242,27 +270,46 @@ function shownRecords(input: DetectInput, s: ReadSentence, recordAt: (j: number)
   });
 }
 
-/** A figure of `own` (words of the sentence being read) is also one of sentence `before`. */
-function sharesFigure(own: readonly { text: string }[], before: ReadSentence): boolean {
-  const here = figuresIn({ words: own }, 0, own.length);
+/** The regions and records a size comparison may set against the globe. */
+const PLACES = new Set(['antarctic', 'greenland', 'polar', 'tropics', 'south', 'north', 'ice-core']);
+
+/** A comparison between two places (a record's region and the globe), not of a place with a time. */
+function comparesPlaces(c: { a: string; b: string }): boolean {
+  return PLACES.has(c.a) || PLACES.has(c.b);
+}
+
+/**
+ * A figure of `own` (words of the sentence being read) is also one of sentence `before` (whose text is
+ * `text`), or lies inside a range of temperatures it states ("swinging by 8 to 10 °C. So the planet
+ * ... about 9 °C colder": the middle of the record's own range).
+ */
+function sharesFigure(own: readonly { text: string }[], before: ReadSentence, text: string): boolean {
+  const here = figuresIn({ words: own }, 0, own.length).filter((v) => v !== 1);
   const there = figuresIn(before, 0, before.words.length);
-  return here.some((v) => v !== 1 && there.includes(v));
+  if (here.some((v) => there.includes(v))) return true;
+  const ranges = parseQuantities(text).filter((q) => q.dimension.startsWith('temperature') && q.high > q.low);
+  return here.some((v) => ranges.some((q) => q.low <= v && v <= q.high));
 }
 
 /** The figures of words `from` to `to` (exclusive) of `s`: digits and numbers in words, each as its value. */
 function figuresIn(s: { words: readonly { text: string }[] }, from: number, to: number): number[] {
-  const out: number[] = [];
+  return figuresAt(s, from, to).map((f) => f.value);
+}
+
+/** figuresIn's figures, each with the index of its first word. */
+function figuresAt(s: { words: readonly { text: string }[] }, from: number, to: number): { value: number; at: number }[] {
+  const out: { value: number; at: number }[] = [];
   for (let i = Math.max(0, from); i < Math.min(to, s.words.length); i++) {
     const text = s.words[i]?.text ?? '';
     const digits = /^\d[\d,]*(?:\.\d+)?/u.exec(text);
     if (digits !== null) {
-      out.push(Number(digits[0].replace(/,/gu, '')));
+      out.push({ value: Number(digits[0].replace(/,/gu, '')), at: i });
       continue;
     }
     const read = readNumberWords(s.words.slice(i, to).map((w) => w.text));
     // "from it one may fairly say": a lone "one" is a pronoun as often as a figure, and counts as none.
     if (read !== undefined && read.used > 0 && !(read.used === 1 && text === 'one')) {
-      out.push(read.value);
+      out.push({ value: read.value, at: i });
       i += read.used - 1;
     }
   }
@@ -281,15 +328,38 @@ function scaledToGlobe(s: ReadSentence, text: string, global: { first: number; l
   const at = s.words[global.first]?.start ?? 0;
   const multiple = parseQuantities(text).some((q) => q.dimension === 'ratio' && q.end <= at && s.words.filter((w) => w.start >= q.end && w.end <= at).length <= 4);
   if (multiple) return true;
-  const records = [...s.of('entities', 'ice-core'), ...s.of('regions', 'antarctic'), ...s.of('regions', 'greenland')].filter((r) => r.last < global.first);
+  const records = regionalRecords(s).filter((r) => r.last < global.first);
   if (records.length === 0) return false;
   const fromRecord = Math.max(...records.map((r) => r.last + 1));
-  const own = figuresIn(s, fromRecord, global.first);
+  // Only temperatures scale: "the stack funded in 2023", "the graph in episode 2", "its thermometer for
+  // 420,000 years" name a year, a label and a span, none of them the record's swing.
+  const quantities = parseQuantities(text);
+  const own = temperatureFigures(s, quantities, fromRecord, global.first, true);
   const clause = s.words[global.first]?.clause;
   let end = global.last + 1;
   while (end < s.words.length && end <= global.last + 8 && s.words[end]?.clause === clause) end++;
-  const theirs = figuresIn(s, global.last + 1, end);
+  const theirs = temperatureFigures(s, quantities, global.last + 1, end, false);
   return own.length > 0 && theirs.length > 0 && own.every((v) => !theirs.includes(v));
+}
+
+/** Words that give a bare figure before them the unit of a temperature ("eight to ten degrees"). */
+const DEGREE_WORDS = /^(?:degrees?|°c|°f|c|f|k|celsius|fahrenheit|kelvin)$/u;
+
+/**
+ * The figures of words `from` to `to` of `s` that may be temperatures: none read as a quantity of
+ * another dimension (a year, a span, a concentration); a bare one, when `unitNeeded`, only with a
+ * degree word within three words after it ("eight to ten degrees"), else as it stands ("a global
+ * change of about six").
+ */
+function temperatureFigures(s: ReadSentence, quantities: readonly { start: number; end: number; dimension: string }[], from: number, to: number, unitNeeded: boolean): number[] {
+  return figuresAt(s, from, to).flatMap(({ value, at }) => {
+    const start = s.words[at]?.start ?? -1;
+    // A bare number ("9 degrees" read without its unit) is judged by the words after it.
+    const quantity = quantities.find((q) => q.start <= start && start < q.end && q.dimension !== 'number');
+    if (quantity !== undefined) return quantity.dimension.startsWith('temperature') ? [value] : [];
+    if (!unitNeeded) return [value];
+    return s.words.slice(at + 1, at + 4).some((w) => DEGREE_WORDS.test(w.text)) ? [value] : [];
+  });
 }
 
 /**
@@ -301,8 +371,12 @@ function detectLag({ index, read }: DetectInput): Cue[] {
   const here = read(index);
   // The lag read as global: a record named, or the lag's own figure ("about 800 years", "600 to 800
   // years": a number of years, as the Antarctic studies give it). A global order with no record and
-  // no figure ("several centuries before") is the direction fact global-co2-ahead-of-warming.
-  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && (o.recordNamed || (here !== undefined && countedSpan(here.s, o.start))));
+  // no figure ("several centuries before") is the direction fact global-co2-ahead-of-warming; so is
+  // one whose record is named only to be widened ("..., so the lag is not just an Antarctic feature")
+  // or that opens on an expletive "it" ("It is quite true that the globe warmed first"), which
+  // reads no record of the sentence before.
+  const sourced = here !== undefined && (asSource(here.s) || (readsRecordBefore(here.s) && asSource(read(index - 1)?.s)));
+  const order = here?.props.orders.find((o) => isTemperatureFirst(o) && o.region === 'global' && ((o.recordNamed && sourced) || (here !== undefined && countedSpan(here.s, o.start))));
   if (here === undefined || order === undefined) return [];
   // "about 800 years before": the lag figure just before the order word is part of the claim.
   const at = here.s.words.findIndex((w) => w.start === order.start);
@@ -310,6 +384,39 @@ function detectLag({ index, read }: DetectInput): Cue[] {
   const figure = lead.findIndex((w) => /^(?:\d[\d,.]*|years?|centur(?:y|ies)|millenni(?:um|a)|decades?|few|several|hundreds?)$/u.test(w.text));
   const start = figure < 0 ? order.start : (lead[figure]?.start ?? order.start);
   return [{ start, end: order.end }];
+}
+
+/** Words after "not" that widen what follows ("not just an Antarctic feature", "not only Antarctica"). */
+const WIDENERS = new Set(['just', 'only', 'merely', 'simply', 'solely', 'purely']);
+
+/**
+ * A record or Antarctic region of `s` that the sentence may be read from: one not named only to be
+ * widened ("not just an Antarctic feature", "not only Antarctica": the claim is the globe's own) and
+ * not the word of an event's name.
+ */
+function asSource(s: ReadSentence | undefined): boolean {
+  if (s === undefined) return false;
+  return regionalRecords(s).some((r) => {
+    for (let k = Math.max(0, r.first - 4); k < r.first - 1; k++) {
+      if (s.words[k]?.text === 'not' && WIDENERS.has(s.words[k + 1]?.text ?? '')) return false;
+    }
+    return true;
+  });
+}
+
+/** Copulas and verbs of seeming after an expletive "it" ("It is true that", "It seems that"). */
+const EXPLETIVE_VERBS = new Set(['is', 'was', "it's", 'seems', 'seemed', 'appears', 'appeared', 'turns', 'turned']);
+
+/**
+ * The sentence opens on a word that reads the record named before it ("It shows...", "This means..."),
+ * as src/propositions/orders.ts reads it, but not on an expletive "it" ("It is also true that ...",
+ * "It seems that ...": a copula or a verb of seeming and then "that" within a few words).
+ */
+function readsRecordBefore(s: ReadSentence): boolean {
+  const first = s.words[s.opening];
+  if (first === undefined || !['it', 'this', 'that', 'these', 'those', 'they', 'here'].includes(first.text)) return false;
+  if (first.text !== 'it' || !EXPLETIVE_VERBS.has(s.words[s.opening + 1]?.text ?? '')) return true;
+  return !s.words.slice(s.opening + 2, s.opening + 7).some((w) => w.text === 'that');
 }
 
 const SPAN_UNITS = /^(?:years?|centur(?:y|ies)|millenni(?:um|a)|decades?|kyr)$/u;

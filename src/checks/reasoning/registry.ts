@@ -7,6 +7,7 @@ import { correlationAsProof } from './detect-correlation.js';
 import { eitherOrCausation } from './detect-either-or.js';
 import { iceCoreCertainty } from './detect-certainty.js';
 import { lagRulesOutCause } from './detect-lag.js';
+import { regionalEventAsGlobal } from './detect-regional-event.js';
 import { antarcticLagAsGlobal, regionalRecordAsGlobal } from './detect-scope.js';
 import { singleCause } from './detect-single-cause.js';
 import type { DetectorEntry } from './detector.js';
@@ -20,4 +21,5 @@ export const DETECTORS: Readonly<Record<string, DetectorEntry>> = {
   'logic.ice-core-certainty': iceCoreCertainty,
   'scope.regional-record-as-global': regionalRecordAsGlobal,
   'scope.antarctic-lag-as-global': antarcticLagAsGlobal,
+  'scope.regional-event-as-global': regionalEventAsGlobal,
 };
