@@ -386,11 +386,17 @@ const ANSWER_WORDS = 4;
  */
 function answersQuestion(text: string, question: () => string | undefined, opensWithFigure: boolean, subjects: { test(text: string): boolean }, topic: { test(text: string): boolean }): boolean {
   const short = text.split(/\s+/u).filter((w) => /\p{L}/u.test(w)).length <= ANSWER_WORDS;
-  if (!short && !opensWithFigure) return false;
   const asked = question();
   if (asked === undefined || !QUESTION.test(asked)) return false;
+  // A question that offers a choice ("Was CO2 a driver, or a passenger?") is answered at any length:
+  // "The evidence already points firmly to passenger." takes up its subject.
+  if (subjects.test(asked) && OFFERS_CHOICE.test(asked)) return true;
+  if (!short && !opensWithFigure) return false;
   return subjects.test(asked) || (opensWithFigure && topic.test(asked));
 }
+
+/** A question that offers alternatives: an "or" between them. */
+const OFFERS_CHOICE = /\bor\b/iu;
 
 /** `context` with the lead-in the reasoning checks read a block's first sentence with, when there is one. */
 function withLeadIn(context: ParagraphContext, leadIn: readonly string[]): ParagraphContext {
