@@ -88,7 +88,9 @@ export function proofWithoutObject(s: ReadSentence): { start: number; end: numbe
   const correlation = s.of('correlation').find((c) => denialsBefore(s, c.first, 4) % 2 === 0);
   if (correlation === undefined) return undefined;
   const clause = s.words[correlation.first]?.clause;
-  const proof = s.of('proof', 'all').find((p) => s.words[p.last]?.clause === clause && PROOF_NOUNS.has(s.words[p.last]?.text ?? '') && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first) && !deniedObject(s, p.last) && !statesObject(s, p.last));
+  // "correlation-as-proof" is a compound's name, no claim: a proof word joined by a hyphen is part of a word.
+  const hyphened = (i: number) => s.text[(s.words[i]?.start ?? 0) - 1] === '-';
+  const proof = s.of('proof', 'all').find((p) => !hyphened(p.first) && s.words[p.last]?.clause === clause && PROOF_NOUNS.has(s.words[p.last]?.text ?? '') && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first) && !deniedObject(s, p.last) && !statesObject(s, p.last));
   if (proof === undefined) return undefined;
   const first = Math.min(correlation.first, proof.first);
   const last = Math.max(correlation.last, proof.last);
