@@ -386,11 +386,17 @@ const ANSWER_WORDS = 4;
  */
 function answersQuestion(text: string, question: () => string | undefined, opensWithFigure: boolean, subjects: { test(text: string): boolean }, topic: { test(text: string): boolean }): boolean {
   const short = text.split(/\s+/u).filter((w) => /\p{L}/u.test(w)).length <= ANSWER_WORDS;
-  if (!short && !opensWithFigure) return false;
   const asked = question();
   if (asked === undefined || !QUESTION.test(asked)) return false;
+  // A question that offers a choice ("Was CO2 a driver, or a passenger?") is answered at any length:
+  // "The evidence already points firmly to passenger." takes up its subject.
+  if (subjects.test(asked) && OFFERS_CHOICE.test(asked)) return true;
+  if (!short && !opensWithFigure) return false;
   return subjects.test(asked) || (opensWithFigure && topic.test(asked));
 }
+
+/** A question that offers alternatives: an "or" between them. */
+const OFFERS_CHOICE = /\bor\b/iu;
 
 /** `context` with the lead-in the reasoning checks read a block's first sentence with, when there is one. */
 function withLeadIn(context: ParagraphContext, leadIn: readonly string[]): ParagraphContext {
@@ -658,13 +664,14 @@ function factMatcherOf(packs: LoadedPacks): TopicMatcher {
   return matcher;
 }
 
-const frameMatchers = new WeakMap<LoadedPacks, { either: TopicMatcher; condition: TopicMatcher; later: TopicMatcher }>();
+const frameMatchers = new WeakMap<LoadedPacks, { either: TopicMatcher; condition: TopicMatcher; later: TopicMatcher; correlation: TopicMatcher; proof: TopicMatcher }>();
 
 /**
  * The frames of a reasoning check that stand as a sentence of their own in a thread, with no subject
  * word: the either/or frame ("It can't be both.", "cant be both, pick one": lexicon
- * `causes.either-or`) and the lag put as a condition ("If the effect comes after, it cannot be the
- * cause": `stance.condition` with `order.after`). Read in the words as the tokenizer cuts them, so "can't" and "cant" are
+ * `causes.either-or`), the lag put as a condition ("If the effect comes after, it cannot be the
+ * cause": `stance.condition` with `order.after`) and a co-variation called proof ("the correlation
+ * itself is the proof": `correlation` with `proof.all`). Read in the words as the tokenizer cuts them, so "can't" and "cant" are
  * "can not" as the lexicon writes it; only where the sentence's window names a subject.
  */
 function standsAloneAsFrame(text: string, packs: LoadedPacks): boolean {
@@ -674,6 +681,8 @@ function standsAloneAsFrame(text: string, packs: LoadedPacks): boolean {
       either: createTopicMatcher(classWordsOf(packs.lexicon, 'causes', ['either-or'])),
       condition: createTopicMatcher(classWordsOf(packs.lexicon, 'stance', ['condition'])),
       later: createTopicMatcher(classWordsOf(packs.lexicon, 'order', ['after'])),
+      correlation: createTopicMatcher(classWordsOf(packs.lexicon, 'correlation', ['all'])),
+      proof: createTopicMatcher(classWordsOf(packs.lexicon, 'proof', ['all'])),
     };
     frameMatchers.set(packs, matchers);
   }
@@ -681,7 +690,9 @@ function standsAloneAsFrame(text: string, packs: LoadedPacks): boolean {
   const words = tokens.words.map((i) => tokens.tokens[i]?.text ?? '').join(' ');
   // "If it comes afterwards, it isn't driving anything": the lag put as a condition (lexicon
   // `stance.condition` with `order.after`), its latecomer left to the sentences before.
-  return matchers.either.test(words) || (matchers.condition.test(words) && matchers.later.test(words));
+  // "..., the correlation itself is the proof": a co-variation called proof (lexicon `correlation`
+  // with `proof.all`), the causal claim it proves left to the passage.
+  return matchers.either.test(words) || (matchers.condition.test(words) && matchers.later.test(words)) || (matchers.correlation.test(words) && matchers.proof.test(words));
 }
 
 /** The lexicon entity keys a direction fact's form names. */

@@ -75,3 +75,35 @@ function deniedObject(s: ReadSentence, i: number): boolean {
 function hedged(s: ReadSentence, i: number): boolean {
   return s.words.slice(Math.max(0, i - 3), i).some((w) => ['necessarily', 'hardly', 'need', 'may', 'might', 'whether'].includes(w.text));
 }
+
+/**
+ * A co-variation called proof with nothing said to be proved: "the correlation itself is the proof",
+ * "That tight match is the proof we need", "the lines move in lockstep, that's all the proof anyone
+ * needs". The proof word is a noun (the lexicon's `proof.all` words that are no verb or adverb)
+ * whose clause states no object: no "that", "of" or "for" after it. Both are undenied and unhedged,
+ * in one clause, either order; "a match is no proof", "the match alone proves nothing" pass.
+ * Returns the span from the first of the two to the last, or undefined.
+ */
+export function proofWithoutObject(s: ReadSentence): { start: number; end: number } | undefined {
+  const correlation = s.of('correlation').find((c) => denialsBefore(s, c.first, 4) % 2 === 0);
+  if (correlation === undefined) return undefined;
+  const clause = s.words[correlation.first]?.clause;
+  // "correlation-as-proof" is a compound's name, no claim: a proof word joined by a hyphen is part of a word.
+  const hyphened = (i: number) => s.text[(s.words[i]?.start ?? 0) - 1] === '-';
+  const proof = s.of('proof', 'all').find((p) => !hyphened(p.first) && s.words[p.last]?.clause === clause && PROOF_NOUNS.has(s.words[p.last]?.text ?? '') && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first) && !deniedObject(s, p.last) && !statesObject(s, p.last));
+  if (proof === undefined) return undefined;
+  const first = Math.min(correlation.first, proof.first);
+  const last = Math.max(correlation.last, proof.last);
+  return { start: s.words[first]?.start ?? 0, end: s.words[last]?.end ?? 0 };
+}
+
+/** The nouns of proof ("the proof", "the smoking gun"): a proof word that can stand as a predicate noun. */
+const PROOF_NOUNS = new Set(['proof', 'proofs', 'gun']);
+
+/** Words that open what a proof proves: "proof that ...", "proof of ...", "proof for ...". */
+const PROOF_OBJECTS = new Set(['that', 'of', 'for', 'to']);
+
+/** Whether the proof noun at word `i` is followed, at most past one word ("proof enough that"), by what it proves. */
+function statesObject(s: ReadSentence, i: number): boolean {
+  return s.words.slice(i + 1, i + 3).some((w) => PROOF_OBJECTS.has(w.text));
+}

@@ -29,8 +29,9 @@ const VOWEL = /[aeiou]/u;
 /** A word with its verb forms and noun plural. */
 export function inflect(word: string): string[] {
   if (!/^[a-z]+$/u.test(word)) return [word];
-  // "do", "be", "go": short irregular verbs still have their forms ("did the whole job").
-  if (word.length < 3) return [word, ...(IRREGULAR[word] ?? [])];
+  // "do", "be", "go": short irregular verbs still have their forms ("did the whole job") and their
+  // participle in -ing ("going up and down together"); other short words (up, in) have none.
+  if (word.length < 3) return IRREGULAR[word] === undefined ? [word] : [...new Set([word, ...IRREGULAR[word], gerund(word)])];
   const forms = new Set([word, plural(word), past(word), gerund(word), ...(IRREGULAR[word] ?? [])]);
   if (IRREGULAR[word] !== undefined) forms.delete(past(word));
   return [...forms];

@@ -29,7 +29,8 @@ export interface SentenceStance {
    */
   questionFrom?: number;
   /**
-   * For a view made earlier by the sentence after it ("Studies in 2001 put the lag at 800 years.
+   * For a view made earlier by the sentence after it, or a question reported before its answer
+   * ("People ask whether ..., and the cores answer: ...") ("Studies in 2001 put the lag at 800 years.
    * Later work ..."): where the view ends. Words after it (an apposition of the writer's own: ", a
    * deglaciation that ended ...") stay the draft's claim.
    */
@@ -116,7 +117,12 @@ function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance
   if (opensWithNamedQuotation(s)) return make('quoted');
   if (s.question) return questionStance(s, context, make);
   if (isTrueOrFalseItem(s.text) || (context.next !== undefined && TRUE_OR_FALSE_ALONE.test(context.next.text)) || asksWhether(s)) return make('asked');
-  if (isReported(s)) return make('reported');
+  if (isReported(s)) {
+    // "People ask me whether CO2 was the cause or the effect, and the cores answer that: ...": a
+    // question reported ends at its clause; the answer joined after it is the writer's own.
+    const answerFrom = answerAfterReportedQuestion(s);
+    return answerFrom === undefined ? make('reported') : { ...make('reported'), viewEnd: answerFrom };
+  }
   if (s.of('stance', 'myth').length > 0) return make('myth');
   if (s.of('stance', 'superseded').length > 0 || isFormerOwnView(s)) return make('superseded');
   const viewEnd = outdatedViewEnd(s, context.next);
@@ -462,4 +468,26 @@ function isMythHeading(heading: string | undefined): boolean {
 /** True when a flag on this sentence stands as the writer's own error. */
 export function isOwnClaim(stance: SentenceStance): boolean {
   return stance.kind === 'asserted' || stance.kind === 'rhetorical' || stance.endorsed;
+}
+
+/**
+ * Where the answer to a question that `s` reports begins: past the "whether" that opens the question
+ * (after a report verb), the first word of another clause, or an "and"/"but" after a comma, that does
+ * not open a further part of the question ("and whether", "or"). Undefined when `s` reports no question.
+ *
+ *   "People ask me whether CO2 was the cause or the effect, and the cores answer that: ..."
+ *                  ^ whether                             ^ the answer begins
+ */
+function answerAfterReportedQuestion(s: ReadSentence): number | undefined {
+  const verb = s.of('stance', 'report-verbs')[0];
+  const whether = s.words.findIndex((w, i) => w.text === 'whether' && verb !== undefined && i > verb.last && i - verb.last <= 3);
+  if (whether < 0) return undefined;
+  const clause = s.words[whether]?.clause;
+  for (let k = whether + 1; k < s.words.length; k++) {
+    const w = s.words[k];
+    if (w === undefined) break;
+    const joined = (w.text === 'and' || w.text === 'but') && s.text.slice(s.words[k - 1]?.end ?? 0, w.start).includes(',');
+    if ((w.clause !== clause || joined) && !['whether', 'or', 'if'].includes(s.words[k + 1]?.text ?? '')) return w.start;
+  }
+  return undefined;
 }

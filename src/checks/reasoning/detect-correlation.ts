@@ -10,7 +10,7 @@
  * "The match alone does not prove it" and "the curves move together, as expected when each
  * amplifies the other" pass: the proof is denied, or there is none.
  */
-import { proofOfWhatCameBefore } from '../../propositions/evidence.js';
+import { proofOfWhatCameBefore, proofWithoutObject } from '../../propositions/evidence.js';
 import { denialsBefore } from '../../propositions/sentence.js';
 import { opensUtterance } from '../../prose/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
@@ -19,6 +19,13 @@ function detect({ index, read }: DetectInput): Cue[] {
   const here = read(index);
   const evidence = here?.props.evidence[0];
   if (evidence !== undefined) return [{ start: evidence.start, end: evidence.end }];
+  // "When two curves track each other that closely, the correlation itself is the proof.": a
+  // co-variation called proof with no object stated proves the causal claim the passage is about.
+  if (here !== undefined && !here.s.question) {
+    const aboutCo2 = [here, read(index - 1), read(index - 2)].some((r) => r !== undefined && r.s.of('entities', 'co2').length > 0);
+    const proof = aboutCo2 ? proofWithoutObject(here.s) : undefined;
+    if (proof !== undefined) return [proof];
+  }
   // "CO2 and temperature line up in the cores. That's proof CO2 controls temperature.": the proof
   // points back to a correlation the same voice stated just before.
   if (here === undefined || opensUtterance(here.s.text)) return [];

@@ -13,6 +13,7 @@ import { opensUtterance } from '../../prose/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
 import { roleKeptForToday } from './role-for-today.js';
+import { choicePickedInSentence, pickedPart, roleChoiceEnd } from './role-choice.js';
 
 const REVERSE = /\b(?:not|never|rather than|instead of)\s+(?:\w+\s+){0,2}(?:the other way (?:round|around|about)|vice versa|the reverse|the opposite way)\b|\b(?:one-way|one way street|only one way)\b/iu;
 
@@ -44,6 +45,10 @@ function detect({ index, own, read }: DetectInput): Cue[] {
   // second": a sentence that picks one side is the draft's pick, whatever a neighbour grants.
   const picked = pickedSide(here.s, here.props.causes, direction);
   if (picked !== undefined) return [picked];
+  // "whether CO2 was the cause or the effect ..., and the cores answer: it was the effect": a choice
+  // of parts and its answer in one sentence (role-choice.ts).
+  const partAnswer = choicePickedInSentence(here.s);
+  if (partAnswer !== undefined) return [partAnswer];
   // A neighbour answers only in the same voice: in a thread, the next reply is someone else's.
   // A list item or a post before this block (its lead-in) is a claim of its own, and answers nothing here.
   const sameVoice = (i: number) => i >= own && !opensUtterance((i > index ? read(i) : here)?.s.text ?? '');
@@ -57,6 +62,9 @@ function detect({ index, own, read }: DetectInput): Cue[] {
   const asserted = new Set(here.props.causes.filter((c) => c.polarity === 'asserted' && c.role !== 'start').map(direction).filter((d) => d !== undefined));
   const answer = answersEitherOr(read(index - 1), here.s.text, asserted.size === 1);
   if (answer) return [{ start: 0, end: here.s.text.length }];
+  // "Was CO2 a driver of the warming, or merely a passenger? The record points to passenger.": the
+  // sentence after a choice of parts picks one, by its part nouns or by causes of one direction.
+  if (answersRoleChoice(read(index - 1), read(index - 2), here.s, asserted.size === 1)) return [{ start: 0, end: here.s.text.length }];
   // "it was warming that moved CO2, not CO2 that moved temperature": both directions set against
   // each other in one sentence, one set aside.
   const all = here.props.causes.filter((c) => c.role !== 'start' && direction(c) !== undefined);
@@ -164,6 +172,17 @@ function answersEitherOr(question: ReturnType<DetectInput['read']>, text: string
   // "The cores give a clear answer: temperature." picks one side, as "the latter" does.
   const short = text.split(/\s+/u).length <= 12 && /\b(?:temperature|warming|co2|co₂|carbon dioxide)\b/iu.test(text) && !/\b(?:both|each|feedback|loop|and)\b/iu.test(text);
   return short || /\b(?:the (?:first|second|former|latter)|the one|only one)\b/iu.test(text);
+}
+
+/**
+ * Whether `s` answers the choice of parts that the sentence before it offers and leaves open ("Was it
+ * a cause or a consequence?", "People ask whether CO2 is a cause or an effect."), by holding one part
+ * only or (`oneSide`) by asserting causes of one direction only.
+ */
+function answersRoleChoice(choice: ReturnType<DetectInput['read']>, before: ReturnType<DetectInput['read']>, s: ReadSentence, oneSide: boolean): boolean {
+  if (choice === undefined || roleChoiceEnd(choice.s, before?.s) === undefined || choicePickedInSentence(choice.s) !== undefined) return false;
+  if (s.words.some((w) => w.text === 'both') || s.of('causes', 'feedback').length > 0) return false;
+  return pickedPart(s) !== undefined || oneSide;
 }
 
 /**

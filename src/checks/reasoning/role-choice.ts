@@ -1,0 +1,74 @@
+/**
+ * A choice of CO2's part, and an answer that picks one side of it: the either/or framing told with
+ * the part nouns of the lexicon rather than with two directed causes.
+ *
+ *   "Was CO2 a driver of the warming, or merely a passenger?"      choice: cause noun "or" effect noun
+ *   "The record points to passenger."                              answer: one side, asserted
+ *
+ *   "Ask whether the gas was the cause or the effect, and the cores answer: the effect."
+ *    choice ──────────────────────────────────────   answer, past a segment of its own ──
+ *
+ * A side is a part noun of the lexicon (`causes.nouns`: cause, driver...; `causes.effects`: effect,
+ * consequence, passenger...) held by the answer undenied. An answer that holds both sides undenied,
+ * "both", or a loop (`causes.feedback`) picks none; one that names a side only to deny it ("it was
+ * no passenger") picks none either.
+ */
+import { polarityAt } from '../../propositions/causes.js';
+import type { LexHit, ReadSentence } from '../../propositions/index.js';
+
+/** The two sides of a choice of parts. */
+export type Side = 'cause' | 'effect';
+
+/** How many words may stand between the two part nouns of one choice ("a driver of deglacial warming, or merely a passenger"). */
+const CHOICE_SPAN = 9;
+
+/** The part nouns of a sentence with their side, in order. */
+function partNouns(s: ReadSentence): { hit: LexHit; side: Side }[] {
+  const causes = s.of('causes', 'nouns').map((hit) => ({ hit, side: 'cause' as const }));
+  const effects = s.of('causes', 'effects').map((hit) => ({ hit, side: 'effect' as const }));
+  return [...causes, ...effects].sort((a, b) => a.hit.first - b.hit.first);
+}
+
+/**
+ * Where the choice of parts in `s` ends (the index of its last word), or undefined when `s` offers
+ * none: a cause noun and an effect noun joined by an "or" between them, within one clause, in a
+ * sentence about CO2 (named in it, or in `before` when `s` refers back with a pronoun).
+ */
+export function roleChoiceEnd(s: ReadSentence, before?: ReadSentence): number | undefined {
+  const aboutCo2 = s.of('entities', 'co2').length > 0 || (before !== undefined && before.of('entities', 'co2').length > 0 && s.words.some((w) => w.text === 'it'));
+  if (!aboutCo2) return undefined;
+  const nouns = partNouns(s);
+  for (const a of nouns) {
+    const b = nouns.find((n) => n.side !== a.side && n.hit.first > a.hit.last && n.hit.first - a.hit.last <= CHOICE_SPAN);
+    if (b === undefined) continue;
+    const between = s.words.slice(a.hit.last + 1, b.hit.first);
+    const sameClause = s.words[a.hit.first]?.clause === s.words[b.hit.first]?.clause;
+    if (sameClause && between.some((w) => w.text === 'or') && !between.some((w) => w.text === 'and' || w.text === 'both')) return b.hit.last;
+  }
+  return undefined;
+}
+
+/**
+ * The one side that the words of `s` from word `from` on hold undenied, or undefined when they hold
+ * none, both, "both" or a loop.
+ */
+export function pickedPart(s: ReadSentence, from = 0): Side | undefined {
+  const after = (h: LexHit) => h.first >= from;
+  if (s.words.slice(from).some((w) => w.text === 'both') || s.of('causes', 'feedback').some(after)) return undefined;
+  const held = new Set(partNouns(s).filter((n) => after(n.hit) && polarityAt(s, n.hit.first) === 'asserted').map((n) => n.side));
+  return held.size === 1 ? [...held][0] : undefined;
+}
+
+/**
+ * Both parts offered and one picked in one sentence: the answer stands past the choice, in a
+ * segment of its own ("..., and concluded that it was the cause"; "...: it was the effect").
+ */
+export function choicePickedInSentence(s: ReadSentence): { start: number; end: number } | undefined {
+  const end = roleChoiceEnd(s);
+  if (end === undefined) return undefined;
+  const segment = s.words[end]?.segment;
+  const from = s.words.findIndex((w, i) => i > end && w.segment !== segment);
+  if (from < 0 || pickedPart(s, from) === undefined) return undefined;
+  // The flag covers the answer: a reported question before it ("People ask whether ...") is not the draft's.
+  return { start: s.words[from]?.start ?? 0, end: s.text.length };
+}
