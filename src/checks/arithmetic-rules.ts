@@ -171,7 +171,8 @@ function isComparedRate(text: string, qs: Quantity[], rate: Quantity): boolean {
   const earlier = qs.filter((q) => q.dimension === rate.dimension && q.end <= rate.start).at(-1);
   if (earlier === undefined) return false;
   const words = wordsIn(text, earlier.end, rate.start);
-  return holdsPhrase(words, [...WORDS.setAgainst, 'than']);
+  // "..., while today it climbs 2.4 ppm a year": a clause turned to another time sets its rate against the one before.
+  return holdsPhrase(words, [...WORDS.setAgainst, 'than', 'while', 'whereas']);
 }
 
 function rates(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
