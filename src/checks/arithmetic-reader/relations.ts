@@ -385,14 +385,16 @@ function checkNamedComparand(figures: Figure[], texts: string[], text: string, f
   const comparand = comparandOf(text, f);
   if (comparand === undefined) return undefined;
   const measured = (g: Figure): boolean => (g.role === 'level' || g.role === 'change' || g.role === 'rate' || g.role === 'duration') && g.family !== '' && g.q.value > 0;
+  // The multiple's own sentence up to the multiple: its name after it points to no figure of that sentence.
+  const sentenceOf = (g: Figure): string => (g.sentence === 0 ? text.slice(0, f.q.start) : (texts[g.sentence] ?? ''));
   const wordsOf = (g: Figure): string[] => {
     const own = [...g.before, ...g.after].map((x) => x.text);
     const alone = figures.filter((h) => h.sentence === g.sentence && measured(h) && h.family === g.family).length === 1;
-    const sentence = texts[g.sentence] ?? '';
+    const sentence = sentenceOf(g);
     return alone ? [...own, ...wordsIn(sentence, 0, sentence.length).map((x) => x.text)] : own;
   };
   const pointsTo = (g: Figure, names: readonly string[]): boolean => {
-    const sentence = texts[g.sentence] ?? '';
+    const sentence = sentenceOf(g);
     const alone = figures.filter((h) => h.sentence === g.sentence && measured(h) && h.family === g.family).length === 1;
     return named(names, wordsOf(g), alone ? sentence : '');
   };
@@ -409,8 +411,12 @@ function checkNamedComparand(figures: Figure[], texts: string[], text: string, f
   for (const c of targets) {
     const alike = before.filter((g) => g !== c && g.family === c.family && (g.q.statedUnit === c.q.statedUnit || g.q.statedUnit === '' || c.q.statedUnit === '' || g.q.unit === c.q.unit));
     const byName = alike.filter((g) => pointsTo(g, subjectNames) && !pointsTo(g, comparand.names));
-    const subjects = byName.length > 0 ? byName : alike.filter((g) => g.order < f.order).slice(-1);
+    // Unnamed, the subject is a figure of the multiple's own sentence, else the nearest before it.
+    const own = alike.filter((g) => g.sentence === 0);
+    const subjects = byName.length > 0 ? byName : own.length > 0 ? own : alike.slice(-1);
     for (const s of subjects) {
+      // The comparand restated is no subject of it.
+      if (s.q.value === c.q.value) continue;
       const r = divide(s.pace?.value ?? w(s.q), c.pace?.value ?? w(c.q));
       if (r === undefined || r.value < 1) continue;
       candidates.push({ value: r, measures: `the ratio of ${s.q.text} to ${c.q.text}`, near: Math.max(s.order, c.order), far: Math.min(s.order, c.order) });
@@ -418,7 +424,8 @@ function checkNamedComparand(figures: Figure[], texts: string[], text: string, f
   }
   if (candidates.length === 0) return undefined;
   const nearest = verdict(f.q, candidates, (d) => d, ROUNDED);
-  if (nearest === undefined) return [];
+  // A reading that agrees settles it; one that disagrees beyond a rounding's reach leaves the other readings to judge.
+  if (nearest === undefined) return verdict(f.q, candidates, (d) => d, ROUNDED, Infinity) === undefined ? [] : undefined;
   const inputs = figures.filter((g) => nearest.measures.includes(g.q.text) && g.order <= f.order);
   return [{ ruleId: 'arith.ratio', stated: f.q, computed: nearest.value, measures: nearest.measures, ...basisOf(inputs) }];
 }
