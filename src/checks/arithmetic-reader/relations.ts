@@ -384,7 +384,8 @@ function named(names: readonly string[], words: readonly string[], sentence: str
 function checkNamedComparand(figures: Figure[], texts: string[], text: string, f: Figure): ReaderFinding[] | undefined {
   const comparand = comparandOf(text, f);
   if (comparand === undefined) return undefined;
-  const measured = (g: Figure): boolean => (g.role === 'level' || g.role === 'change' || g.role === 'rate' || g.role === 'duration') && g.family !== '' && g.q.value > 0;
+  // Only figures with a unit: bare numbers name no measure a name can point to.
+  const measured = (g: Figure): boolean => (g.role === 'level' || g.role === 'change' || g.role === 'rate' || g.role === 'duration') && g.family !== '' && g.family !== 'number' && g.family !== 'count' && g.q.value > 0;
   // The multiple's own sentence up to the multiple: its name after it points to no figure of that sentence.
   const sentenceOf = (g: Figure): string => (g.sentence === 0 ? text.slice(0, f.q.start) : (texts[g.sentence] ?? ''));
   const wordsOf = (g: Figure): string[] => {
