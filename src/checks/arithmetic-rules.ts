@@ -11,6 +11,7 @@ import { divide, facing, invert, minus, percentChange, rangeSpan, size, type Der
 import { spanOfDates } from './arithmetic-spans.js';
 import { durationsAcross, paceRatiosAcross, spansAcross } from './arithmetic-across.js';
 import { writtenSums } from './arithmetic-equations.js';
+import { writtenFormulas } from './arithmetic-formulas.js';
 import { perLength } from './arithmetic-per-length.js';
 import { changeShares } from './arithmetic-shares.js';
 import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragraph.js';
@@ -54,7 +55,8 @@ const words = (a: Quantity, b: Quantity): string => `from ${a.text} to ${b.text}
 const others = (qs: Quantity[], p: Pair | undefined): Quantity[] => qs.filter((_, i) => p === undefined || (i !== p.from && i !== p.to));
 
 function changes(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
-  return [...pairChanges(text, qs, pairs), ...apposedChanges(text, qs, pairs), ...writtenSums(text, qs)];
+  const found = [...pairChanges(text, qs, pairs), ...apposedChanges(text, qs, pairs), ...writtenSums(text, qs)];
+  return [...found, ...notYet(found, writtenFormulas(text, qs))];
 }
 
 /** Dimensions whose two levels name a change between them, and the dimension of that change. */
@@ -169,7 +171,8 @@ function isComparedRate(text: string, qs: Quantity[], rate: Quantity): boolean {
   const earlier = qs.filter((q) => q.dimension === rate.dimension && q.end <= rate.start).at(-1);
   if (earlier === undefined) return false;
   const words = wordsIn(text, earlier.end, rate.start);
-  return holdsPhrase(words, [...WORDS.setAgainst, 'than']);
+  // "..., while today it climbs 2.4 ppm a year": a clause turned to another time sets its rate against the one before.
+  return holdsPhrase(words, [...WORDS.setAgainst, 'than', 'while', 'whereas']);
 }
 
 function rates(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {

@@ -154,7 +154,15 @@ function verdict(stated: Quantity, candidates: Candidate[], like: (c: Derived) =
 export function ratesInParagraph(text: string, qs: Quantity[], pairs: Pair[], earlier: readonly Previous[]): SolverFinding[] {
   return qs.flatMap((rate) => {
     const changeDim = RATE_OF[rate.dimension];
-    if (changeDim === undefined || qs.some((q) => q !== rate && q.dimension === rate.dimension)) return [];
+    if (changeDim === undefined) return [];
+    // "That works out at about 0.1 ppm per year, while today's rate is about 2.4 ppm per year": the
+    // drawn rate's clause ends where another time's rate is set against it; what follows is not its.
+    const against = comparedAfter(text, qs, rate);
+    if (against !== undefined) {
+      const own = qs.filter((q) => q.end <= against);
+      return ratesInParagraph(text.slice(0, against), own, findPairs(text.slice(0, against), own), earlier).filter((f) => f.stated === rate);
+    }
+    if (qs.some((q) => q !== rate && q.dimension === rate.dimension)) return [];
     const head = text.slice(0, rate.start);
     // A single date of its own ("the 2010s averaged 2.4 ppm/yr") makes it another period's rate.
     const dates = qs.filter((q) => q.dimension === 'age');
@@ -164,6 +172,22 @@ export function ratesInParagraph(text: string, qs: Quantity[], pairs: Pair[], ea
     const found = verdict(rate, rateCandidates(reads, changeDim, [rate]));
     return found === undefined ? [] : [{ stated: rate, computed: facing(found.value, rate.value), measures: `the change divided by the time it took (${found.measures})`, ...(found.distance === 0 ? {} : { basis }) }];
   });
+}
+
+/** Words that set what follows against what came before: another time's figure, not a part of this one's sum. */
+const SET_AFTER = [...WORDS.setAgainst, 'while', 'whereas', 'but', 'than'];
+
+/**
+ * Where the clause that sets another rate of the same kind against `rate` begins ("..., while
+ * today's rate is about 2.4 ppm per year", "..., against about 2.4 ppm per year in the 2010s"):
+ * the offset of its setting word, or undefined when no rate of its kind follows so.
+ */
+function comparedAfter(text: string, qs: Quantity[], rate: Quantity): number | undefined {
+  const next = qs.find((q) => q.start >= rate.end && q.dimension === rate.dimension);
+  if (next === undefined || qs.some((q) => q.end <= rate.start && q.dimension === rate.dimension)) return undefined;
+  const words = wordsIn(text, rate.end, next.start);
+  const at = words.findIndex((x, i) => SET_AFTER.some((p) => p.split(' ').every((part, k) => words[i + k]?.text === part)));
+  return at < 0 ? undefined : (words[at] as { start: number }).start;
 }
 
 /** Levels of `dimension` in a sentence in the unit `unit` as written; a bare figure of the same size counts too. */

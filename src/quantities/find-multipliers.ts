@@ -29,12 +29,15 @@ const FRACTIONS: Record<string, number> = { half: 1 / 2, third: 1 / 3, quarter: 
 const COUNTS: Record<string, number> = { a: 1, one: 1, two: 2, three: 3, four: 4 };
 const SMALL_WORDS = `(?:${Object.keys(TENS).join('|')})[-\\s\\u00A0](?:${ONES.join('|')})|${Object.keys(SMALL).join('|')}`;
 
+/** "two and a half times", "one and a half times": a multiplier in words with a half added (number words of English). */
+const AND_A_HALF = String.raw`[\s\u00A0-]+and[\s\u00A0-]+an?[\s\u00A0-]+half`;
+
 const VERB = /(?<![\p{L}])(?:twice|thrice|double[sd]?|doubling|triple[sd]?|tripling|quadruple[sd]?|quadrupling|halved|halves|halving|halve)(?![\p{L}])/giu;
 const FOLD = new RegExp(String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS}))[-\s]?fold(?![\p{L}])`, 'giu');
 // "20 times", "1,000 times", "twenty-odd times", "20x faster", "20× the pace" ("-odd" and "x" read as
 // the number written; a comma groups thousands).
 const TIMES = new RegExp(
-  String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS})(?:-odd)?)(?:[\s\u00A0]+times|[\s\u00A0]?[x×])(?=[\s\u00A0]+(?:as|more|higher|greater|larger|bigger|lower|smaller|less|faster|slower|longer|shorter|that|the|what|its|their|above|below|over)(?![\p{L}]))`,
+  String.raw`(?<![\p{L}\p{N}.])(?:(?<d>\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?)|(?<w>${SMALL_WORDS}|one(?=${AND_A_HALF}))(?<half>${AND_A_HALF})?(?:-odd)?)(?:[\s\u00A0]+times|[\s\u00A0]?[x×])(?=[\s\u00A0]+(?:as|more|higher|greater|larger|bigger|lower|smaller|less|faster|slower|longer|shorter|that|the|what|its|their|above|below|over)(?![\p{L}]))`,
   'giu',
 );
 /**
@@ -76,7 +79,8 @@ function numberAtom(m: RegExpExecArray): Atom {
   const end = m.index + m[0].length;
   if (d !== undefined) return atom(m.index, end, Number(d), halfPlace(d), 'precision');
   // "twenty-odd": twenty and some more, below thirty (read by the precision row as 25 ± 5).
-  const word = wordValue(m.groups?.['w'] ?? '');
+  const w = m.groups?.['w'] ?? '';
+  const word = (w.toLowerCase() === 'one' ? 1 : wordValue(w)) + (m.groups?.['half'] === undefined ? 0 : 0.5);
   if (/-odd/iu.test(m[0])) return atom(m.index, end, word * 1.25, word / 4, 'precision');
   return atom(m.index, end, word, 0, 'multiplier-word');
 }

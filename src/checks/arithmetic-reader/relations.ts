@@ -338,9 +338,104 @@ function checkRelative(figures: Figure[], text: string, f: Figure, texts: string
   return [{ ruleId: 'arith.ratio', stated: f.q, computed: nearest.value, measures: nearest.measures, ...basisOf(found.inputs) }];
 }
 
+/** Words that end the name of a multiple's comparand ("twice the global one in the record"). */
+const NAME_ENDS = new Set(['of', 'in', 'at', 'on', 'for', 'to', 'and', 'or', 'than', 'from', 'by', 'with', 'during', 'since', 'is', 'was', 'which', 'that']);
+/** Words of a comparand's name that say what kind of figure it is, not which one ("the global one", "the 1750 figure"). */
+const NAME_KIND = new Set(['one', 'ones', 'record', 'records', 'core', 'cores', 'number', 'numbers']);
+
+/**
+ * What a multiple is a multiple of, when it names it after itself ("twice the global one", "two
+ * and a half times the 1750 figure", "three times as long as Vostok's", "five times the 0.8 ppm a
+ * year of the 1960s"): the offset of a figure that follows at once, or the words (and a year) of
+ * the name. Undefined when no comparand is named so.
+ */
+function comparandOf(text: string, f: Figure): { at?: number; names: string[] } | undefined {
+  const rest = (text.slice(f.q.end, f.q.end + 60).split(/[,;:!?()]|\.\s|\.$/u)[0] ?? '');
+  const lead = /^\s+(?:as\s+\p{L}+\s+as\s+(?:the\s+|that\s+of\s+(?:the\s+)?)?|the\s+|that\s+of\s+(?:the\s+)?)/iu.exec(rest);
+  if (lead === null) return undefined;
+  const from = f.q.end + lead[0].length;
+  const at = /^\d/u.test(text.slice(from, from + 1)) ? { at: from } : {};
+  const names: string[] = [];
+  for (const token of text.slice(from, f.q.end + rest.length).split(/[\s\u00A0]+/u).slice(0, 4)) {
+    const year = /^(1[5-9]\d\d|20\d\d)$/u.exec(token);
+    if (year !== null) {
+      names.push(year[1] as string);
+      continue;
+    }
+    const words = wordsIn(token.replace(/['’]s$/u, ''), 0, token.length).map((x) => x.text);
+    if (words.some((x) => NAME_ENDS.has(x))) break;
+    names.push(...words.filter((x) => x.length >= 4 && !WORDS.baseKind.has(x) && !NAME_KIND.has(x)));
+  }
+  return names.length > 0 || at.at !== undefined ? { ...at, names } : undefined;
+}
+
+/** True when one of `names` is a word of `words` (one stem: "Antarctic", "Antarctica") or, for a year, stands in `sentence`. */
+function named(names: readonly string[], words: readonly string[], sentence: string): boolean {
+  return names.some((n) => (/^\d{4}$/u.test(n) ? new RegExp(`(?<!\\d)${n}(?!\\d)`, 'u').test(sentence) : words.some((x) => x.slice(0, SAME_STEM) === n.slice(0, SAME_STEM) && x.length >= Math.min(n.length, SAME_STEM))));
+}
+
+/**
+ * A multiple of a comparand it names after itself ("That Greenland swing is roughly twice the global
+ * one"; "today's 420 ppm, about two and a half times the 1750 figure"): the comparand is the figure
+ * of the paragraph its name points to (the words around it, or its sentence when that holds no
+ * other figure of its family), the subject the figure the multiple's own clause names before it, or
+ * else the nearest figure of that family before it. Undefined when the name points to no figure.
+ */
+function checkNamedComparand(figures: Figure[], texts: string[], text: string, f: Figure): ReaderFinding[] | undefined {
+  const comparand = comparandOf(text, f);
+  if (comparand === undefined) return undefined;
+  // Only figures with a unit: bare numbers name no measure a name can point to.
+  const measured = (g: Figure): boolean => (g.role === 'level' || g.role === 'change' || g.role === 'rate' || g.role === 'duration') && g.family !== '' && g.family !== 'number' && g.family !== 'count' && g.q.value > 0;
+  // The multiple's own sentence up to the multiple: its name after it points to no figure of that sentence.
+  const sentenceOf = (g: Figure): string => (g.sentence === 0 ? text.slice(0, f.q.start) : (texts[g.sentence] ?? ''));
+  const wordsOf = (g: Figure): string[] => {
+    const own = [...g.before, ...g.after].map((x) => x.text);
+    const alone = figures.filter((h) => h.sentence === g.sentence && measured(h) && h.family === g.family).length === 1;
+    const sentence = sentenceOf(g);
+    return alone ? [...own, ...wordsIn(sentence, 0, sentence.length).map((x) => x.text)] : own;
+  };
+  const pointsTo = (g: Figure, names: readonly string[]): boolean => {
+    const sentence = sentenceOf(g);
+    const alone = figures.filter((h) => h.sentence === g.sentence && measured(h) && h.family === g.family).length === 1;
+    return named(names, wordsOf(g), alone ? sentence : '');
+  };
+  const before = figures.filter((g) => g.order < f.order && measured(g) && g.sentence <= 2);
+  // A figure right after it ("five times the 0.8 ppm a year"), else the figure its name points to (a year names its sentence's).
+  const next = figures.filter((g) => g.sentence === 0 && g.q.start === comparand.at && measured(g));
+  const targets = next.length > 0 ? next : comparand.names.length === 0 ? [] : before.filter((g) => pointsTo(g, comparand.names));
+  if (targets.length === 0) return undefined;
+  // The subject: what the multiple's clause names before it ("That Greenland swing", "Dome C's record").
+  const head = text.slice(0, f.q.start);
+  const clause = head.slice(Math.max(head.lastIndexOf(', '), head.lastIndexOf('; '), head.lastIndexOf(': ')) + 1);
+  const subjectNames = wordsIn(clause, 0, clause.length).map((x) => x.text).filter((x) => x.length >= 4 && !WORDS.baseKind.has(x) && !WORDS.links.includes(x) && !WORDS.copulas.has(x));
+  const candidates: Candidate[] = [];
+  for (const c of targets) {
+    const alike = before.filter((g) => g !== c && g.family === c.family && (g.q.statedUnit === c.q.statedUnit || g.q.statedUnit === '' || c.q.statedUnit === '' || g.q.unit === c.q.unit));
+    const byName = alike.filter((g) => pointsTo(g, subjectNames) && !pointsTo(g, comparand.names));
+    // Unnamed, the subject is a figure of the multiple's own sentence, else the nearest before it.
+    const own = alike.filter((g) => g.sentence === 0);
+    const subjects = byName.length > 0 ? byName : own.length > 0 ? own : alike.slice(-1);
+    for (const s of subjects) {
+      // The comparand restated is no subject of it.
+      if (s.q.value === c.q.value) continue;
+      const r = divide(s.pace?.value ?? w(s.q), c.pace?.value ?? w(c.q));
+      if (r === undefined || r.value < 1) continue;
+      candidates.push({ value: r, measures: `the ratio of ${s.q.text} to ${c.q.text}`, near: Math.max(s.order, c.order), far: Math.min(s.order, c.order) });
+    }
+  }
+  if (candidates.length === 0) return undefined;
+  const nearest = verdict(f.q, candidates, (d) => d, ROUNDED);
+  // A reading that agrees settles it; one that disagrees beyond a rounding's reach leaves the other readings to judge.
+  if (nearest === undefined) return verdict(f.q, candidates, (d) => d, ROUNDED, Infinity) === undefined ? [] : undefined;
+  const inputs = figures.filter((g) => nearest.measures.includes(g.q.text) && g.order <= f.order);
+  return [{ ruleId: 'arith.ratio', stated: f.q, computed: nearest.value, measures: nearest.measures, ...basisOf(inputs) }];
+}
+
 /** A multiple ("20 times faster", "two and a half times the 1750 figure") against the ratios of two rates or two levels. */
-function checkMultiple(figures: Figure[], text: string, f: Figure): ReaderFinding[] {
+function checkMultiple(figures: Figure[], text: string, f: Figure, texts: string[] = [text]): ReaderFinding[] {
   if (f.q.value <= 1 || denied(f)) return [];
+  const ofNamed = checkNamedComparand(figures, texts, text, f);
+  if (ofNamed !== undefined) return ofNamed;
   // Spans of time compare as levels do: "800,000 against 420,000 years, so about twice as long";
   // so do two changes of one family: "warmed by 9 °C while the globe warmed by 6 °C, so 1.5 times".
   const compared = (g: Figure): boolean => (g.role === 'rate' || g.role === 'level' || g.role === 'duration' || g.role === 'change') && g.q.value !== 0;
@@ -415,7 +510,7 @@ function readAll(text: string, qs: readonly Quantity[], earlier: readonly { text
   return own.flatMap((f) => {
     if (f.role === 'change') return checkChange(figures, text, f);
     if (f.role === 'relative') return checkRelative(figures, text, f, texts);
-    if (f.role === 'multiple') return checkMultiple(figures, text, f);
+    if (f.role === 'multiple') return checkMultiple(figures, text, f, texts);
     if (f.role === 'duration') return checkDuration(figures, text, f);
     return [];
   });
