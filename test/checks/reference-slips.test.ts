@@ -21,6 +21,15 @@ describe('a unit slip against a reference', () => {
     expect(unitSlip({ low: 3260, high: 3280, unit: 'm' }, q!)?.correction).toBe('3,270 m (10,700 feet)');
   });
 
+  it('keeps every figure the draft wrote in the meant unit', () => {
+    // The Vostok core reached 3,623 m (Petit et al. 1999, Nature 399, 429-436, doi 10.1038/20859);
+    // 1 ft = 0.3048 m (NIST SP 811): 3,623 m is 11,890 ft to four figures.
+    const [q] = parseQuantities('3,623 ft');
+    expect(unitSlip({ low: 3623, high: 3623, unit: 'm' }, q!)?.correction).toBe('3,623 m (11,890 ft)');
+    const [p] = parseQuantities('3.62 miles');
+    expect(unitSlip({ low: 3600, high: 3650, unit: 'm' }, p!)?.correction).toBe('3.62 km (2.25 miles)');
+  });
+
   it('reads a thousand-fold slip of a date', () => {
     const [q] = parseQuantities('2.58 kyr ago');
     expect(unitSlip({ low: 2_580_000, high: 2_580_000, unit: 'yr BP' }, q!)?.correction).toBe('2.58 Ma');
