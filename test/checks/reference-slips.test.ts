@@ -60,6 +60,15 @@ describe('a unit slip against a reference', () => {
   });
 });
 
+describe('feet written for metres where the period is set before a comparison', () => {
+  // Sea level at the Last Glacial Maximum about 120-130 m lower than today (Clark et al. 2009,
+  // Science 325, 710-714); 1 ft = 0.3048 m (NIST SP 811): 125 m is 410 ft.
+  it('reads the period past a sentence that only compares with today', async () => {
+    const flags = await flagsOf('During the last ice age thick ice covered Canada. Back then the world ran a few degrees colder than it is today. Sea level fell some 125 feet.');
+    expect(flags).toContainEqual(['unit.scale-slip', '125 m (some 410 feet)']);
+  });
+});
+
 describe('metres written for feet', () => {
   // Sea level at the Last Glacial Maximum about 120-130 m lower than today (Clark et al. 2009,
   // Science 325, 710-714, doi 10.1126/science.1172873); 1 ft = 0.3048 m (NIST SP 811).
