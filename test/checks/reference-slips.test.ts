@@ -67,6 +67,11 @@ describe('feet written for metres where the period is set before a comparison', 
     const flags = await flagsOf('During the last ice age thick ice covered Canada. Back then the world ran a few degrees colder than it is today. Sea level fell some 125 feet.');
     expect(flags).toContainEqual(['unit.scale-slip', '125 m (some 410 feet)']);
   });
+
+  it('reads the sea told at a level without its article ("Seas stood") as sea level', async () => {
+    const flags = await flagsOf('During the last ice age great ice sheets covered Canada. Seas stood about 125 feet lower, and the coast lay far out.');
+    expect(flags).toContainEqual(['unit.scale-slip', '125 m (about 410 feet)']);
+  });
 });
 
 describe('metres written for feet', () => {
