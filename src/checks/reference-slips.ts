@@ -193,9 +193,12 @@ function swapReadings(q: Quantity): Reading[] {
     // A time's thousand-fold slip keeps the draft's own words ("800 years" → "800,000 years").
     const time = q.dimension === 'age' || q.dimension === 'duration';
     const ownWords = q.statedUnit === 'yr' || q.statedUnit.startsWith('yr ');
+    // The meant figure is the draft's own number, so it keeps every figure the draft wrote: "3,623 feet"
+    // is 3,623 m, not 3,620 m; "423.9 ppb" is 423.9 ppm.
+    const figures = correctionFigures(q);
     const shown = time
-      ? (value: number) => (ownWords ? `${formatQuantity(value, q.unit, q.statedUnit)} (${formatQuantity(value, q.unit, to)}, not ${q.text})` : formatQuantity(value, q.unit, to))
-      : (value: number) => `${formatQuantity(value, q.unit, to)} (${rewriteQuantity(q, value, correctionFigures(q, 2))})`;
+      ? (value: number) => (ownWords ? `${formatQuantity(value, q.unit, q.statedUnit, figures)} (${formatQuantity(value, q.unit, to, figures)}, not ${q.text})` : formatQuantity(value, q.unit, to, figures))
+      : (value: number) => `${formatQuantity(value, q.unit, to, figures)} (${rewriteQuantity(q, value, correctionFigures(q, 2))})`;
     return [{ low, high, value: read(q.value), ratio, read, what: `${other.display} meant where ${from.display} was written (${factorWords(from.display, other.display, ratio, from.factor < other.factor)})`, shown }];
   });
 }

@@ -44,7 +44,13 @@ const RELATIVE_AFTER = new RegExp(String.raw`^${S}*(?:above|below|higher|lower|m
 const COMPARATIVE = String.raw`(?:lower|higher|below|above|deeper|shallower|colder|warmer|cooler|hotter|longer|shorter|older|younger|thicker|thinner|taller|more|less)`;
 const PARALLEL_GAP = new RegExp(String.raw`^${S}+${COMPARATIVE}(?:${S}+than${S}+(?:[\p{L}'’-]+${S}*){1,4})?${S}*,${S}*(?:or${S}+)?$`, 'iu');
 const PARALLEL_AFTER = new RegExp(String.raw`^${S}+${COMPARATIVE}(?![\p{L}])`, 'iu');
-const parallelComparison = (text: string, gap: string, second: Quantity): boolean => PARALLEL_GAP.test(gap) && PARALLEL_AFTER.test(text.slice(second.end)) && second.dimension !== 'percent';
+/**
+ * Or the second figure alone closes the clause after the comma, an appositive of the first: "about
+ * 130 metres lower, roughly 430 feet." (common practice of giving a conversion).
+ */
+const CLAUSE_CLOSES = new RegExp(String.raw`^${S}*(?:[.;:!?)\]—–]|$)`, 'u');
+const parallelComparison = (text: string, gap: string, second: Quantity): boolean =>
+  PARALLEL_GAP.test(gap) && (PARALLEL_AFTER.test(text.slice(second.end)) || CLAUSE_CLOSES.test(text.slice(second.end))) && second.dimension !== 'percent';
 
 /** A copula alone between two amounts in different units: "420 ppm is 0.042 percent". */
 const COPULA_GAP = new RegExp(String.raw`^${OF_WHAT},?${S}+(?:is|was|are|were|equals|makes${S}+up|made${S}+up)(?:${S}+(?:still|just|only|roughly|about|around|some))?${S}+$`, 'iu');

@@ -158,13 +158,37 @@ export interface SettingFrame {
   referredTo?: string;
 }
 
+/**
+ * What a comparison is set against: "than" with the subject and verb it may repeat ("colder than it
+ * is today", "lower than now", "higher than at present").
+ */
+const STANDARD_BEFORE = /(?:^|[^\p{L}])than(?:\s+(?:it|they|we|there|that|those|this|he|she)(?:\s+(?:is|are|was|were|does|do|did|has|have|stands?|sits?))?)?(?:\s+(?:at|in|during))?(?:\s+the)?\s+$/iu;
+
+/**
+ * The terms of `text` less those that name only what a comparison is set against: in "Back then the
+ * world was some 6 °C colder than it is today" the scene is "back then", not today, so a later
+ * figure takes no setting from "today" (a sentence's own terms are read as before: this is for the
+ * passage's setting only).
+ */
+function withoutStandards(text: string, hits: TermHits): TermHits {
+  let kept: TermHits | undefined;
+  for (const [id, spans] of hits) {
+    const left = spans.filter(([start]) => !STANDARD_BEFORE.test(text.slice(Math.max(0, start - 30), start)));
+    if (left.length === spans.length) continue;
+    kept ??= new Map(hits);
+    if (left.length > 0) kept.set(id, left);
+    else kept.delete(id);
+  }
+  return kept ?? hits;
+}
+
 /** The latest setting of `kind` named in `history`, read most recent first; undefined when none is. */
 function currentSetting(history: readonly string[], kind: string, kinds: SettingKinds, packs: LoadedPacks): Setting | undefined {
   const members = kinds.get(kind) ?? new Set<string>();
   for (let k = history.length - 1; k >= 0; k -= 1) {
     const text = history[k] ?? '';
     // "Termination III, not the end of the last ice age": a denied or compared subject sets no scene.
-    const hits = withoutOthers(text, findTerms(text, packs));
+    const hits = withoutStandards(text, withoutOthers(text, findTerms(text, packs)));
     // Where each setting of the kind is named; a period described but dated by no value ("the start
     // of the last glaciation", "the penultimate deglaciation") is a setting too, of no value's.
     const named: [string | undefined, number, number][] = [...hits].flatMap(([id, spans]) => (members.has(id) ? spans.map(([a, b]): [string, number, number] => [id, a, b]) : []));
@@ -208,7 +232,8 @@ function since(history: readonly string[], k: number, hits: TermHits, packs: Loa
 /** Whether the sentence names a setting of `kind` of its own. */
 function ownsSetting(sentence: string, q: Quantity, kind: string, kinds: SettingKinds, frame: SettingFrame, packs: LoadedPacks): boolean {
   const members = kinds.get(kind) ?? new Set<string>();
-  if ([...frame.hits.keys()].some((id) => members.has(id))) return true;
+  // "colder than today": what the sentence compares with is no setting of its own.
+  if ([...withoutStandards(sentence, frame.hits).keys()].some((id) => members.has(id))) return true;
   // A date of its own (a year, another age or stretch of time, or the number itself a date), or a
   // period described that no value dates: "At the start of the last glaciation, CO2 trailed ...".
   return kind === 'time' && (YEAR.test(sentence) || frame.ownTime || q.dimension === 'age' || describedTimes(sentence, packs.lexicon).length > 0 || opensBefore(sentence, packs) || opensOnOwnTime(sentence, packs));

@@ -21,6 +21,15 @@ describe('a unit slip against a reference', () => {
     expect(unitSlip({ low: 3260, high: 3280, unit: 'm' }, q!)?.correction).toBe('3,270 m (10,700 feet)');
   });
 
+  it('keeps every figure the draft wrote in the meant unit', () => {
+    // The Vostok core reached 3,623 m (Petit et al. 1999, Nature 399, 429-436, doi 10.1038/20859);
+    // 1 ft = 0.3048 m (NIST SP 811): 3,623 m is 11,890 ft to four figures.
+    const [q] = parseQuantities('3,623 ft');
+    expect(unitSlip({ low: 3623, high: 3623, unit: 'm' }, q!)?.correction).toBe('3,623 m (11,890 ft)');
+    const [p] = parseQuantities('3.62 miles');
+    expect(unitSlip({ low: 3600, high: 3650, unit: 'm' }, p!)?.correction).toBe('3.62 km (2.25 miles)');
+  });
+
   it('reads a thousand-fold slip of a date', () => {
     const [q] = parseQuantities('2.58 kyr ago');
     expect(unitSlip({ low: 2_580_000, high: 2_580_000, unit: 'yr BP' }, q!)?.correction).toBe('2.58 Ma');
@@ -48,6 +57,20 @@ describe('a unit slip against a reference', () => {
     const flags = await flagsOf('The EPICA Dome C ice core was drilled to a depth of 1,200 metres.');
     expect(flags.map(([id]) => id).some((id) => id?.startsWith('value.'))).toBe(true);
     expect(flags.map(([id]) => id)).not.toContain('unit.scale-slip');
+  });
+});
+
+describe('feet written for metres where the period is set before a comparison', () => {
+  // Sea level at the Last Glacial Maximum about 120-130 m lower than today (Clark et al. 2009,
+  // Science 325, 710-714); 1 ft = 0.3048 m (NIST SP 811): 125 m is 410 ft.
+  it('reads the period past a sentence that only compares with today', async () => {
+    const flags = await flagsOf('During the last ice age thick ice covered Canada. Back then the world ran a few degrees colder than it is today. Sea level fell some 125 feet.');
+    expect(flags).toContainEqual(['unit.scale-slip', '125 m (some 410 feet)']);
+  });
+
+  it('reads the sea told at a level without its article ("Seas stood") as sea level', async () => {
+    const flags = await flagsOf('During the last ice age great ice sheets covered Canada. Seas stood about 125 feet lower, and the coast lay far out.');
+    expect(flags).toContainEqual(['unit.scale-slip', '125 m (about 410 feet)']);
   });
 });
 

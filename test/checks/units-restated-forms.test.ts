@@ -50,6 +50,28 @@ describe('one comparison written twice in two units ("130 m lower than now, 430 
   });
 });
 
+describe('a comparison whose conversion alone closes the clause ("130 m lower, about 430 feet.")', () => {
+  it.each([
+    // 90 m = 295 ft (1 ft = 0.3048 m); the conversion run backwards gives 90 × 0.3048 = 27 ft.
+    ['At the stadial peak the fjord lay about 90 metres lower, some 27 feet.', 'some 27 feet', 'some 295 feet'],
+    // 250 m = 820 ft.
+    ['The moraine crest sits 250 m higher than the outwash plain, roughly 76 ft; the lake fills the hollow.', 'roughly 76 ft', 'roughly 820 ft'],
+    // A change of 5 °C is 9 °F; 41 °F adds the offset of a reading.
+    ['In the stadial the valley ran 5 °C colder than now, about 41 °F.', 'about 41 °F', 'about 9 °F'],
+  ])('%s flags %s', (sentence, text, correction) => {
+    expect(flagged(sentence)).toEqual([[expect.stringMatching(/^unit\./u), text, correction]]);
+  });
+
+  it.each([
+    'At the stadial peak the fjord lay about 90 metres lower, some 295 feet.',
+    'In the stadial the valley ran 5 °C colder than now, about 9 °F.',
+    // The second figure goes on to a clause of its own: another measure, not the first again.
+    'At the stadial peak the fjord lay about 90 metres lower, some 27 feet of mud settling on its floor.',
+  ])('leaves alone: %s', (sentence) => {
+    expect(flagged(sentence)).toEqual([]);
+  });
+});
+
 describe('a Fahrenheit figure that points back at a change ("that six-degree drop works out to")', () => {
   it.each([
     // 4 °C as a difference is 7.2 °F; 39 °F adds 32.

@@ -74,6 +74,22 @@ describe('a setting carried by the passage (bind-setting.ts)', () => {
   });
 });
 
+// What a comparison is set against ("colder than it is today") names no setting, neither the
+// passage's nor the sentence's own. Glacial sea level some 120-135 m below today's (Lambeck et al. 2014,
+// PNAS 111:15296-15303); glacial cooling about 6 °C, 4-7 °C (the pack's gmst value, Tierney et al. 2020).
+const STANDARDS: Row[] = [
+  ['During the last ice age thick ice covered Canada. Back then the world ran a few degrees colder than it is today. Sea level fell some 40 metres.', '40 metres', 'lgm-sea-level-lowstand', true],
+  ['In the depths of the last glacial, great ice sheets spread over Canada. The whole Earth was about 2 °C colder than today.', '2 °C', 'gmst-lgm-to-preindustrial-warming', true],
+  // "Today" as the time the sentence speaks from is a setting still: no glacial figure.
+  ['During the last ice age thick ice covered Canada. Today sea level sits some 40 metres above the old shore.', '40 metres', '-', false],
+];
+
+describe('a comparison standard is no setting', () => {
+  it.each(STANDARDS)('%s → %s binds %s', async (draft, number, value, flagged) => {
+    expect(await readingOf(draft, number)).toEqual({ value, flagged });
+  });
+});
+
 // The duration of the deglacial CO2 rise: about 6,500 years (Monnin et al. 2001, Science 291:112-114,
 // as the pack's co2-deglacial-rise-duration cites it).
 describe('durations in a passage that set the period', () => {
