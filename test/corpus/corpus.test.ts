@@ -165,6 +165,13 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-ai-1': { recall: 0.7, falseFlags: 0.07 },
   'tuning-ai-3': { recall: 0.6, falseFlags: 0.04 },
   'tuning-ai-4': { recall: 0.72, falseFlags: 0.08 },
+  // tuning-ak-1..4 were the blind hold-out holdout-w, written in the sixteenth round and read, totals
+  // only, on the seventeenth round's first and last code (97/123 and 26/40 caught at the start,
+  // 98/123 and 26/40 at the end; false flags 12/241 and 4/92 throughout).
+  'tuning-ak-1': { recall: 0.75, falseFlags: 0.1 },
+  'tuning-ak-2': { recall: 0.72, falseFlags: 0.07 },
+  'tuning-ak-3': { recall: 0.75, falseFlags: 0.05 },
+  'tuning-ak-4': { recall: 0.6, falseFlags: 0.07 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -195,12 +202,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (86.1% measured over 98 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (87.0% measured over 102 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.2% measured over 98 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.6% measured over 102 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
