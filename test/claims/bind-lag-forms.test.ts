@@ -4,18 +4,12 @@
  * as "lagged". Sentences of our own; quantities built by hand (quantity-at.ts).
  */
 import { describe, expect, it } from 'vitest';
-import { bindQuantities } from '../../src/claims/bind.js';
 import { loadPacks } from '../../src/rulepack/index.js';
-import { quantitiesIn, type Written } from './quantity-at.js';
+import { boundIn, type Row, type Written } from './quantity-at.js';
 
 const packs = await loadPacks([]);
 
-type Row = [sentence: string, written: Written[], expected: string[]];
-
-function bound(sentence: string, written: Written[]): string[] {
-  const { bindings, ambiguous } = bindQuantities(sentence, quantitiesIn(sentence, written), packs);
-  return written.map((_, i) => bindings.find((b) => b.quantityIndex === i)?.referenceId ?? (ambiguous.includes(i) ? '?' : '-'));
-}
+const bound = (sentence: string, written: Written[]): string[] => boundIn(packs, sentence, written);
 
 // Chowdhry Beeman et al. (2019, doi:10.5194/cp-15-913-2019): Antarctic temperature led CO2 by about
 // 570 years at the onset of Termination I; Pedro et al. (2012, doi:10.5194/cp-8-1213-2012): any lag

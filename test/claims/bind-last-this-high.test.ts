@@ -6,18 +6,12 @@
  * quantities built by hand (quantity-at.ts).
  */
 import { describe, expect, it } from 'vitest';
-import { bindQuantities } from '../../src/claims/bind.js';
 import { loadPacks } from '../../src/rulepack/index.js';
-import { quantitiesIn, type Written } from './quantity-at.js';
+import { boundIn, type Row, type Written } from './quantity-at.js';
 
 const packs = await loadPacks([]);
 
-type Row = [sentence: string, written: Written[], expected: string[]];
-
-function bound(sentence: string, written: Written[]): string[] {
-  const { bindings, ambiguous } = bindQuantities(sentence, quantitiesIn(sentence, written), packs);
-  return written.map((_, i) => bindings.find((b) => b.quantityIndex === i)?.referenceId ?? (ambiguous.includes(i) ? '?' : '-'));
-}
+const bound = (sentence: string, written: Written[]): string[] => boundIn(packs, sentence, written);
 
 // IPCC AR6 WGI SPM A.2.1 (2021, doi:10.1017/9781009157896.001): CO2 in 2019 was higher than at any
 // time in at least 2 million years.

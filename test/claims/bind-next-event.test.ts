@@ -5,19 +5,13 @@
  * CO2 began to rise" tells a lag). Sentences of our own; quantities built by hand (quantity-at.ts).
  */
 import { describe, expect, it } from 'vitest';
-import { bindQuantities } from '../../src/claims/bind.js';
 import { nextEventClause } from '../../src/claims/bind-next-event.js';
 import { loadPacks } from '../../src/rulepack/index.js';
-import { quantitiesIn, type Written } from './quantity-at.js';
+import { boundIn, type Row, type Written } from './quantity-at.js';
 
 const packs = await loadPacks([]);
 
-type Row = [sentence: string, written: Written[], expected: string[]];
-
-function bound(sentence: string, written: Written[]): string[] {
-  const { bindings, ambiguous } = bindQuantities(sentence, quantitiesIn(sentence, written), packs);
-  return written.map((_, i) => bindings.find((b) => b.quantityIndex === i)?.referenceId ?? (ambiguous.includes(i) ? '?' : '-'));
-}
+const bound = (sentence: string, written: Written[]): string[] => boundIn(packs, sentence, written);
 
 // The Younger Dryas lasted about 1,200 years, 12,900-11,700 years ago (Rasmussen et al. 2006,
 // doi:10.1029/2005JD006079); the last deglaciation took about 7,000 years (Chowdhry Beeman et al. 2019,

@@ -4,18 +4,12 @@
  * vetoes. Sentences of our own; quantities built by hand (quantity-at.ts).
  */
 import { describe, expect, it } from 'vitest';
-import { bindQuantities } from '../../src/claims/bind.js';
 import { loadPacks } from '../../src/rulepack/index.js';
-import { quantitiesIn, type Written } from './quantity-at.js';
+import { boundIn, type Row, type Written } from './quantity-at.js';
 
 const packs = await loadPacks([]);
 
-type Row = [sentence: string, written: Written[], expected: string[]];
-
-function bound(sentence: string, written: Written[]): string[] {
-  const { bindings, ambiguous } = bindQuantities(sentence, quantitiesIn(sentence, written), packs);
-  return written.map((_, i) => bindings.find((b) => b.quantityIndex === i)?.referenceId ?? (ambiguous.includes(i) ? '?' : '-'));
-}
+const bound = (sentence: string, written: Written[]): string[] => boundIn(packs, sentence, written);
 
 const ROWS: Row[] = [
   // "faster" belongs to the comparison after the comma; today's growth is about 2.2-3.8 ppm a year

@@ -25,8 +25,16 @@ export function quantitiesIn(sentence: string, written: Written[]): Quantity[] {
 /** Previous sentence, sentence, its quantities, and per quantity the reference id ('-' none, '?' ambiguous). */
 export type ContextRow = [context: string, sentence: string, written: Written[], expected: string[]];
 
-/** Per quantity of `sentence` read after `context`: the reference id it binds, '?' when ambiguous, '-' when none. */
-export function boundAfter(packs: LoadedPacks, context: string, sentence: string, written: Written[]): string[] {
+/** A sentence, its quantities, and per quantity the reference id ('-' none, '?' ambiguous). */
+export type Row = [sentence: string, written: Written[], expected: string[]];
+
+/** Per quantity of `sentence` (read after `context`, if any): the reference id it binds, '?' when ambiguous, '-' when none. */
+export function boundIn(packs: LoadedPacks, sentence: string, written: Written[], context?: string): string[] {
   const { bindings, ambiguous } = bindQuantities(sentence, quantitiesIn(sentence, written), packs, context);
   return written.map((_, i) => bindings.find((b) => b.quantityIndex === i)?.referenceId ?? (ambiguous.includes(i) ? '?' : '-'));
+}
+
+/** Per quantity of `sentence` read after `context`: the reference id it binds, '?' when ambiguous, '-' when none. */
+export function boundAfter(packs: LoadedPacks, context: string, sentence: string, written: Written[]): string[] {
+  return boundIn(packs, sentence, written, context);
 }
