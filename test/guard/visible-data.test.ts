@@ -1,3 +1,8 @@
+/**
+ * Control characters in report data are shown as their pictures from the Unicode Control Pictures
+ * block (U+2400-U+243F: U+241B SYMBOL FOR ESCAPE, U+2407 SYMBOL FOR BELL; The Unicode Standard, code
+ * chart U2400), so a file name or message cannot drive the terminal.
+ */
 import { describe, expect, it } from 'vitest';
 import { visibleData } from '../../src/guard/visible-text.js';
 
