@@ -9,7 +9,7 @@
 import { answerCauses, choiceOf } from './answers.js';
 import { phraseWords, type LexHit } from './lexicon.js';
 import { appositionSubject, clauseSubject, kindOf, PREPOSITIONS, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
-import { denialsBefore, NEGATIONS, PARTICIPANTS, type ReadSentence, type Thing } from './sentence.js';
+import { denialsBefore, isPartitiveOne, NEGATIONS, PARTICIPANTS, type ReadSentence, type Thing } from './sentence.js';
 import type { Cause, Polarity } from './types.js';
 
 /** Words that make the next word a noun ("the end", "of warming"): no verb follows them. */
@@ -594,7 +594,8 @@ const PART_JOINS = new Set(['not', 'and', 'or', 'nor', 'than', 'of', 'but']);
  */
 function coordinatedPart(s: ReadSentence, h: LexHit): LexHit | undefined {
   let k = h.first - 1;
-  while (k >= 0 && (ARTICLES.has(s.words[k]?.text ?? '') || RESTRICTORS.has(s.words[k]?.text ?? ''))) k -= 1;
+  // "rather than one of its drivers": a partitive "one of" stands between as a determiner does.
+  while (k >= 0 && (ARTICLES.has(s.words[k]?.text ?? '') || RESTRICTORS.has(s.words[k]?.text ?? '') || isPartitiveOne(s, k) || isPartitiveOne(s, k - 1))) k -= 1;
   const join = s.words[k]?.text ?? '';
   if (!PART_JOINS.has(join)) return undefined;
   if (join === 'than' && s.words[k - 1]?.text !== 'rather') return undefined;
@@ -697,6 +698,7 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
   return s.of('exclusive').some((e) => {
     if (s.words[e.first]?.segment !== s.words[h.first]?.segment && s.words[e.first]?.clause !== s.words[h.first]?.clause) return false;
     if (['not', 'no'].includes(s.words[e.first - 1]?.text ?? '')) return false;
+    if (isPronounOne(s, e)) return false;
     // "switched off by the orbit and by nothing else": a restriction joined to the agent by linking words only.
     // "Nothing but the Earth's orbit": only the agent's own noun phrase stands between.
     const joined = agent !== undefined && ((e.first > agent.last && linksOnly(s, agent.last, e.first)) || (e.last < agent.first && linksOnly(s, e.last, agent.first)));
@@ -710,10 +712,31 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
     // "the orbit ended the ice age, full stop, and ...": a restriction set off on its own after the cause.
     const tail = e.first > h.last && s.words[e.first]?.clause === s.words[h.first]?.clause && s.words[e.first - 1]?.segment !== s.words[e.first]?.segment && s.words[e.last + 1]?.segment !== s.words[e.last]?.segment;
     if (tail) return true;
-    const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by (?:itself|themselves)|in (?:itself|themselves)|on (?:its|their) own|alone|solely|entirely|exclusively|wholly|purely|the only|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
+    // "happened only because of the wobbles", "solely due to the orbit": a restriction just before a
+    // reason cue restricts the reason it names. "just because" opens an idiom of denied inference
+    // ("Just because CO2 lagged doesn't mean ...") and restricts nothing.
+    if (h.key === 'because' && e.last === h.first - 1) return !SOFT_RESTRICTORS.has(s.words[e.first]?.text ?? '');
+    const strong = /sole|single|only one|one thing|nothing but|all down|no other|nothing else|by (?:itself|themselves)|in (?:itself|themselves)|on (?:its|their) own|alone|solely|entirely|exclusively|wholly|purely|the only|the one|one and only/u.test(s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' '));
     return nearAgent || ((nearCue || between) && strong);
   });
 }
+
+/**
+ * "the one" that stands for a noun ("a bigger punch than the one before it", "the one that rose
+ * later") rather than counting one before its noun ("the one driver"): nothing of its own segment
+ * follows it, or a function word does (English grammar, common practice).
+ */
+function isPronounOne(s: ReadSentence, e: LexHit): boolean {
+  if (s.words.slice(e.first, e.last + 1).map((w) => w.text).join(' ') !== 'the one') return false;
+  const next = s.words[e.last + 1];
+  return next === undefined || next.segment !== s.words[e.last]?.segment || !/^\p{L}/u.test(next.text) || AFTER_PRONOUN_ONE.has(next.text);
+}
+
+/** Words after "the one" that show it stands for a noun: prepositions, relatives, verbs of being, pronouns. */
+const AFTER_PRONOUN_ONE = new Set(['before', 'after', 'that', 'which', 'who', 'whose', 'where', 'when', 'of', 'in', 'on', 'at', 'to', 'from', 'with', 'by', 'for', 'than', 'and', 'or', 'but', 'is', 'was', 'are', 'were', 'be', 'we', 'you', 'i', 'they', 'it', 'he', 'she', 'people', 'most', 'everyone', 'behind', 'ahead', 'below', 'above', 'here', 'there', 'now', 'then', 'today']);
+
+/** Restrictions that before a reason cue make an idiom, not a restriction ("just because", "simply because"). */
+const SOFT_RESTRICTORS = new Set(['just', 'simply', 'merely']);
 
 /** Keys whose phrases say their subject sufficed on its own. */
 const SUFFICIENT_KEYS = new Set(['sufficient', 'sufficient-verbs']);

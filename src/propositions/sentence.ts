@@ -254,6 +254,14 @@ function tooToVerb(s: ReadSentence, k: number, i: number): boolean {
 /** Words that may stand between a contrast and the word it sets aside ("rather than a real cause"); "rather than just an effect" sets aside only the "just". */
 const ASIDE_FILLERS = new Set(['a', 'an', 'the', 'any', 'its', 'their', 'real', 'true', 'main', 'primary', 'direct']);
 
+/** Possessive determiners among the fillers: they stand before the noun set aside. */
+const POSSESSIVE_DETERMINERS = new Set(['its', 'their']);
+
+/** "one of" at word `j`: a partitive that takes one member of the plural noun after it ("one of its drivers"). */
+export function isPartitiveOne(s: ReadSentence, j: number): boolean {
+  return s.words[j]?.text === 'one' && s.words[j + 1]?.text === 'of';
+}
+
 /**
  * "rather than" or "instead of" at word `k` (its last word) sets aside word `i`: only articles and
  * restricting words stand between, no thing.
@@ -261,9 +269,13 @@ const ASIDE_FILLERS = new Set(['a', 'an', 'the', 'any', 'its', 'their', 'real', 
 function setAside(s: ReadSentence, k: number, i: number): boolean {
   const w = s.words[k]?.text;
   const pair = (w === 'than' && s.words[k - 1]?.text === 'rather') || (w === 'of' && s.words[k - 1]?.text === 'instead');
-  if (!pair || i - k > 4) return false;
+  // "rather than one of its causes": a partitive "one of" before the fillers sets aside the noun it takes a member of.
+  if (!pair || i - k > 4 + (isPartitiveOne(s, k + 1) ? 2 : 0)) return false;
   for (let j = k + 1; j < i; j += 1) {
-    if (!ASIDE_FILLERS.has(s.words[j]?.text ?? '') || s.things.some((t) => t.first <= j && j <= t.last)) return false;
+    if (isPartitiveOne(s, j) || isPartitiveOne(s, j - 1)) continue;
+    // A possessive determiner ("its", "their") is read as a pronoun thing, but it names no rival here.
+    const text = s.words[j]?.text ?? '';
+    if (!ASIDE_FILLERS.has(text) || (!POSSESSIVE_DETERMINERS.has(text) && s.things.some((t) => t.first <= j && j <= t.last))) return false;
   }
   // Only a part in a cause is set aside so: "releases CO2 rather than absorbing it" states one uptake, read by the relation reader.
   return !s.things.some((t) => t.first <= i && i <= t.last) && s.inside(i, 'causes');
