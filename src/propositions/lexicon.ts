@@ -50,7 +50,9 @@ const WORD = /[\p{L}\p{N}₂]+(?:['’][\p{L}]+)*/gu;
 
 /** Splits a phrase into lower-case words the way sentences are split. */
 export function phraseWords(phrase: string): string[] {
-  return [...phrase.toLowerCase().replace(/’/gu, "'").matchAll(WORD)].map((m) => m[0]);
+  // `match` with the global flag gives each match's text, as matchAll's m[0] would, without a
+  // match object for each word (called for every phrase of the lexicon on a run's first sentence).
+  return phrase.toLowerCase().replace(/’/gu, "'").match(WORD) ?? [];
 }
 
 /** A word with its inflections, unless it is a grammar word that keeps its form. */
