@@ -111,7 +111,12 @@ function formsOfWords(words: string[]): string[][] {
   if (words.length === 0) return [];
   const content = words.filter((w) => !FIXED.has(w)).length;
   if (content <= 3) {
-    return words.reduce<string[][]>((acc, word) => acc.flatMap((prefix) => formsOf(word).map((f) => [...prefix, f])), [[]]);
+    // A word's forms are derived once, not once for each form of the words before it (inflect is a
+    // pure function of the word): the same products in the same order.
+    return words.reduce<string[][]>((acc, word) => {
+      const forms = formsOf(word);
+      return acc.flatMap((prefix) => forms.map((f) => [...prefix, f]));
+    }, [[]]);
   }
   const first = formsOf(words[0] as string);
   if (words.length === 1) return first.map((f) => [f]);
