@@ -184,7 +184,10 @@ export function keyWordsIn(lower: string, terms: Map<string, CompiledTerm>): Set
     index = new Map();
     for (const key of new Set([...terms.values()].flatMap((t) => t.keyWords ?? []))) {
       const head = headKey(key, 0, Math.min(3, key.length));
-      index.set(head, [...(index.get(head) ?? []), key]);
+      // Appended in place: a list copied on every key cost some 4 MB of garbage per run.
+      const keys = index.get(head);
+      if (keys === undefined) index.set(head, [key]);
+      else keys.push(key);
     }
     keyIndexes.set(terms, index);
   }
@@ -210,7 +213,14 @@ function termsHolding(present: ReadonlySet<string>, terms: Map<string, CompiledT
   let byWord = termsByKeyWord.get(terms);
   if (byWord === undefined) {
     byWord = new Map();
-    for (const [id, term] of terms) for (const w of term.keyWords ?? []) byWord.set(w, [...(byWord.get(w) ?? []), id]);
+    for (const [id, term] of terms) {
+      for (const w of term.keyWords ?? []) {
+        // Appended in place, in the same order: copying the list for each id made it quadratic.
+        const ids = byWord.get(w);
+        if (ids === undefined) byWord.set(w, [id]);
+        else ids.push(id);
+      }
+    }
     termsByKeyWord.set(terms, byWord);
   }
   const ids = new Set<string>();
@@ -236,7 +246,10 @@ export function compiledTerms(packs: LoadedPacks): Map<string, CompiledTerm> {
     terms = new Map(
       packs.terms.map((t): [string, CompiledTerm] => {
         const own = extendedTerm(t.id, packs);
-        const othersWrite = (form: string): boolean => [...(writers.get(form) ?? [])].some((id) => id !== own);
+        const othersWrite = (form: string): boolean => {
+          for (const id of writers.get(form) ?? []) if (id !== own) return true;
+          return false;
+        };
         const words = inflectedTerm(termVariants(t.words), othersWrite);
         return [t.id, { words, keyWords: keyWordsOf(words) }];
       }),

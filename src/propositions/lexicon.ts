@@ -50,7 +50,9 @@ const WORD = /[\p{L}\p{N}₂]+(?:['’][\p{L}]+)*/gu;
 
 /** Splits a phrase into lower-case words the way sentences are split. */
 export function phraseWords(phrase: string): string[] {
-  return [...phrase.toLowerCase().replace(/’/gu, "'").matchAll(WORD)].map((m) => m[0]);
+  // `match` with the global flag gives each match's text, as matchAll's m[0] would, without a
+  // match object for each word (called for every phrase of the lexicon on a run's first sentence).
+  return phrase.toLowerCase().replace(/’/gu, "'").match(WORD) ?? [];
 }
 
 /** A word with its inflections, unless it is a grammar word that keeps its form. */
@@ -109,7 +111,12 @@ function formsOfWords(words: string[]): string[][] {
   if (words.length === 0) return [];
   const content = words.filter((w) => !FIXED.has(w)).length;
   if (content <= 3) {
-    return words.reduce<string[][]>((acc, word) => acc.flatMap((prefix) => formsOf(word).map((f) => [...prefix, f])), [[]]);
+    // A word's forms are derived once, not once for each form of the words before it (inflect is a
+    // pure function of the word): the same products in the same order.
+    return words.reduce<string[][]>((acc, word) => {
+      const forms = formsOf(word);
+      return acc.flatMap((prefix) => forms.map((f) => [...prefix, f]));
+    }, [[]]);
   }
   const first = formsOf(words[0] as string);
   if (words.length === 1) return first.map((f) => [f]);
