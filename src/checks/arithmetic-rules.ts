@@ -29,6 +29,11 @@ export interface Finding {
   measures: string;
   /** Whose numbers these are, when not the sentence's own alone: "the paragraph's". */
   basis?: string;
+  /**
+   * The yearly rate behind a pace told as an amount every interval ("one ppm every ten years"), in
+   * its canonical rate unit: the correction states it beside the amount, as an editor restates a pace.
+   */
+  yearly?: { value: number; unit: string };
 }
 
 /** One arithmetic rule. */
@@ -207,7 +212,8 @@ function paces(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
       const per = found === undefined ? undefined : divide(size(found.change), found.duration);
       if (per === undefined) return [];
       const n = w(interval).value;
-      return [{ stated: amount, computed: facing({ value: per.value * n, low: per.low * n, high: per.high * n }, amount.value), measures: `the change divided by the time it took, for each ${interval.text}` }];
+      const rate = RATE_FOR[amount.dimension];
+      return [{ stated: amount, computed: facing({ value: per.value * n, low: per.low * n, high: per.high * n }, amount.value), measures: `the change divided by the time it took, for each ${interval.text}`, ...(rate === undefined ? {} : { yearly: { value: per.value, unit: rate.unit } }) }];
     }
     const unitWord = ONE_UNIT_EVERY.exec(text.slice(Math.max(0, interval.start - 40), interval.start))?.[1];
     if (unitWord === undefined) return [];
@@ -257,6 +263,7 @@ function pacesInParagraph(text: string, qs: Quantity[], pairs: Pair[], earlier: 
       stated: amount,
       computed: facing({ value: f.computed.value * n, low: f.computed.low * n, high: f.computed.high * n }, amount.value),
       measures: `${f.measures}, for each ${interval.text}`,
+      yearly: { value: f.computed.value, unit: rate.unit },
     }));
   });
 }

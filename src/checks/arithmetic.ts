@@ -7,7 +7,7 @@
  */
 import { hasNumeral } from '../quantities/two-numerals.js';
 import { WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
-import { correctionFigures, derivedFigures, formatQuantity, hedgeRule, parseQuantities, rewriteQuantity } from '../quantities/index.js';
+import { correctionFigures, derivedFigures, dimensionOfCanonical, findUnit, formatQuantity, hedgeRule, parseQuantities, rewriteQuantity } from '../quantities/index.js';
 import type { FlagDraft, Quantity } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
 import { disjoint, levelFor } from './arithmetic-levels.js';
@@ -28,6 +28,28 @@ export function correctionFor(q: Quantity, value: number, figures = derivedFigur
   if (lower.startsWith(hedge)) return rewritten.slice(hedge.length).trimStart();
   const at = lower.lastIndexOf(hedge);
   return at > 0 ? rewritten.slice(0, at).replace(/[\s,]+$/u, '') : rewritten;
+}
+
+/**
+ * A rate's correction with the yearly rate beside it when the draft told its pace over another
+ * stretch: an amount every interval ("about 0.11 ppm every ten years") or a rate per decade or
+ * century ("0.11 ppm per decade"). An editor restates such a pace per year, the unit the reference
+ * values keep: "about 0.11 ppm (about 0.011 ppm per year)".
+ */
+export function withYearlyRate(correction: string, stated: Quantity, value: number, yearly: { value: number; unit: string } | undefined): string {
+  const [base, per] = rateParts(stated.statedUnit);
+  // The draft's own amount unit, now per year: "mm per decade" gives "mm per year".
+  const perYear = yearly !== undefined ? { ...yearly, shown: `${stated.statedUnit}/yr` } : stated.unit.endsWith('/yr') && per !== undefined && per !== 'yr' ? { value, unit: stated.unit, shown: `${base}/yr` } : undefined;
+  if (perYear === undefined || !(perYear.value > 0)) return correction;
+  const dimension = dimensionOfCanonical(perYear.unit);
+  const shown = dimension !== undefined && findUnit(perYear.shown, dimension) !== undefined ? perYear.shown : perYear.unit;
+  return `${correction} (about ${formatQuantity(perYear.value, perYear.unit, shown, 2)})`;
+}
+
+/** A rate unit's amount and period: "ppm/decade" is ["ppm", "decade"]; a unit of no period, [unit, undefined]. */
+function rateParts(unit: string): [string, string | undefined] {
+  const at = unit.lastIndexOf('/');
+  return at < 0 ? [unit, undefined] : [unit.slice(0, at), unit.slice(at + 1)];
 }
 
 /**
@@ -69,6 +91,7 @@ interface RuleFinding {
   measures: string;
   basis: string | undefined;
   corrected: readonly Corrected[];
+  yearly: { value: number; unit: string } | undefined;
 }
 
 /** A figure of an earlier sentence that its own figures contradict, and the value they give it. */
@@ -106,8 +129,8 @@ function findingsOf(text: string, quantities: Quantity[], context: readonly stri
   const pairs = findPairs(text, quantities);
   const out: RuleFinding[] = [];
   for (const rule of ARITHMETIC_RULES) {
-    for (const { stated, computed, measures, basis } of rule.derive(text, quantities, pairs, previous, earlier)) {
-      if (disjoint(stated, computed)) out.push({ rule, stated, computed, measures, basis, corrected });
+    for (const { stated, computed, measures, basis, yearly } of rule.derive(text, quantities, pairs, previous, earlier)) {
+      if (disjoint(stated, computed)) out.push({ rule, stated, computed, measures, basis, corrected, yearly });
     }
   }
   return out;
@@ -123,7 +146,7 @@ export function checkArithmetic(text: string, quantities: Quantity[], context: r
   const asked = askedBefore(context);
   if (asked !== undefined) return answerTo(text, quantities, asked);
   const flags: FlagDraft[] = [];
-  for (const { rule, stated, computed, measures, basis, corrected } of findingsOf(text, quantities, context, true)) {
+  for (const { rule, stated, computed, measures, basis, corrected, yearly } of findingsOf(text, quantities, context, true)) {
     const right = shown(stated, computed);
     // An input the draft itself got wrong earlier is taken at its right value, and the reason says so.
     const owned = corrected.filter((c) => measures.includes(c.q.text)).map((c) => ` (${c.q.text} is itself ${shown(c.q, c.right)} by the figures before it)`);
@@ -135,7 +158,7 @@ export function checkArithmetic(text: string, quantities: Quantity[], context: r
       reason: `By ${basis ?? "the sentence's"} own numbers, ${measures} is ${right}, not ${stated.text}${owned.join('')}.`,
       claimed: shownClaim(stated),
       reference: { id: rule.id, measures, text: right, low: computed.low, high: computed.high, unit: stated.unit },
-      correction: correctionFor(stated, computed.value),
+      correction: withYearlyRate(correctionFor(stated, computed.value), stated, computed.value, yearly),
       sources: [],
     });
   }

@@ -13,7 +13,7 @@ const check = (sentence: string, context: string[] = []) => checkArithmetic(sent
 const WRONG: [string, string, string, string, string][] = [
   // A rate of a length (sea level, a shoreline, ice thickness) in m, cm or mm per year or century.
   // Common practice: 60 m / 6,000 years = 1 m per century; 30 m / 1,000 years = 30 mm a year.
-  ['length rate', 'The Morrow coast sank about 60 metres between 16,000 and 10,000 years ago, on average some 5 metres per century.', 'arith.rate', 'some 5 metres per century', 'some 1 metres per century'],
+  ['length rate', 'The Morrow coast sank about 60 metres between 16,000 and 10,000 years ago, on average some 5 metres per century.', 'arith.rate', 'some 5 metres per century', 'some 1 metres per century (about 0.01 m per year)'],
   ['length rate', 'Between 12,000 and 11,000 years ago the lake rose by 30 m, a rate of about 3 mm a year.', 'arith.rate', 'about 3 mm a year', 'about 30 mm a year'],
   // A span restated after a date pair in more ways: a lead of two words, a filler, an adjectival
   // figure with its article, "lay" after "between ... and ...", and two dates whose second ends

@@ -37,7 +37,7 @@ describe('a pace told as an amount every interval, after the sentence with its c
   // 90 ppm over 9,000 years is 1 ppm every hundred years, 0.1 ppm every ten.
   it('flags a wrong amount', () => {
     const flags = check('Through the warm-up the gas climbed 90 ppm over 9,000 years.', "That's about one ppm every ten years.");
-    expect(flags.map((f) => [f.ruleId, f.correction])).toEqual([['arith.rate', 'about 0.1 ppm']]);
+    expect(flags.map((f) => [f.ruleId, f.correction])).toEqual([['arith.rate', 'about 0.1 ppm (about 0.01 ppm per year)']]);
   });
   it('keeps a right amount clean', () => {
     expect(ids('Through the warm-up the gas climbed 90 ppm over 9,000 years.', "That's about one ppm every hundred years.")).toEqual([]);

@@ -22,7 +22,7 @@ const WRONG: [string, string[], string, string][] = [
   // A written sum: 420 − 280 = 140.
   ['arith.change', ['Answer: 420 − 280 = 160, so the rise since 1750 is about 160 ppm.'], '160', '140'],
   // An amount followed at once by its span is the change a rate divides: 90 ppm / 7,000 yr = 1.29 ppm per century.
-  ['arith.rate', ['Roughly 90 ppm over some 7,000 years: close to 3 ppm a century.'], 'close to 3 ppm a century', 'close to 1.3 ppm a century'],
+  ['arith.rate', ['Roughly 90 ppm over some 7,000 years: close to 3 ppm a century.'], 'close to 3 ppm a century', 'close to 1.3 ppm a century (about 0.013 ppm per year)'],
   // A fraction "of" a value: 180 / 420 = 0.429.
   ['arith.ratio', ['Glacial air held 180 ppm of CO2, roughly a quarter of the 420 ppm measured today.'], 'roughly a quarter', 'roughly 43 percent'],
   // A percentage of a base: 140 / 280 = 50 percent.

@@ -17,7 +17,7 @@ const WRONG: [string, string, string, string, string][] = [
   ['arith.duration', 'Between 1750 and 1850 (150 years) coal use grew.', '150 years', '100 years', 'error'],
   ['arith.rate', 'CO2 rose by 80 ppm over 8,000 years, or 0.1 ppm per year.', '0.1 ppm per year', '0.01 ppm per year', 'warning'],
   ['arith.rate', 'From 1750 to 2019, CO2 rose 130 ppm, about 2 ppm per year.', 'about 2 ppm per year', 'about 0.48 ppm per year', 'warning'],
-  ['arith.rate', 'Antarctica warmed by 8 °C in 8,000 years, a pace of 1 °C per century.', '1 °C per century', '0.1 °C per century', 'warning'],
+  ['arith.rate', 'Antarctica warmed by 8 °C in 8,000 years, a pace of 1 °C per century.', '1 °C per century', '0.1 °C per century (about 0.001 °C per year)', 'warning'],
   ['arith.ratio', 'CO2 rose from 180 to 280 ppm, an increase of 80 percent.', '80 percent', '56 percent', 'error'],
   ['arith.ratio', 'CO2 rose from 190 to 280 ppm; it doubled.', 'doubled', '1.5 times', 'error'],
   ['arith.ratio', 'CO2 fell from 280 to 180 ppm, a drop of 50 percent.', '50 percent', '36 percent', 'error'],
@@ -37,10 +37,10 @@ const WRONG: [string, string, string, string, string][] = [
   ['arith.duration', 'Meltwater began to pour out of the Alder basin about 16,500 years ago and the lake had drained by 12,000 years ago, an outflow of some 2,500 years.', 'some 2,500 years', 'some 4,500 years', 'error'],
   // An amount equated with a rate over a span named earlier: 100 ppm / 5,000 years = 0.2 ppm per decade;
   // 80 ppm / 6,300 years = 1.27 ppm per century, shown to the two figures the draft's numbers allow.
-  ['arith.rate', 'Spread across the 5,000 years of the warming, the Alder Hall team\'s 100 ppm of CO2 would be about 0.5 ppm per decade.', 'about 0.5 ppm per decade', 'about 0.2 ppm per decade', 'error'],
-  ['arith.rate', 'Over the 6,300 years of the thaw, those 80 ppm work out at 4 ppm per century.', '4 ppm per century', '1.3 ppm per century', 'error'],
+  ['arith.rate', 'Spread across the 5,000 years of the warming, the Alder Hall team\'s 100 ppm of CO2 would be about 0.5 ppm per decade.', 'about 0.5 ppm per decade', 'about 0.2 ppm per decade (about 0.02 ppm per year)', 'error'],
+  ['arith.rate', 'Over the 6,300 years of the thaw, those 80 ppm work out at 4 ppm per century.', '4 ppm per century', '1.3 ppm per century (about 0.013 ppm per year)', 'error'],
   // The precision of "one" does not stretch to four: 80 / 2,000 = 4 ppm per century.
-  ['arith.rate', 'The Brackwater display says CO2 rose 80 ppm over 2,000 years, which comes to a little over one ppm per century.', 'a little over one ppm per century', '4 ppm per century', 'error'],
+  ['arith.rate', 'The Brackwater display says CO2 rose 80 ppm over 2,000 years, which comes to a little over one ppm per century.', 'a little over one ppm per century', '4 ppm per century (about 0.04 ppm per year)', 'error'],
 ];
 
 // Right arithmetic, never flagged.

@@ -112,6 +112,16 @@ describe('a default setting declared by a value', () => {
   it('never overrides a period the passage names', async () => {
     expect(await readingOf('The last glacial period set in slowly. In Antarctica, CO2 lagged temperature by about 5,000 years.', '5,000 years')).toEqual({ value: '-', flagged: false });
   });
+  // The lag in the cores is measured against Antarctic temperature (Pedro et al. 2012; Parrenin et al.
+  // 2013 as above), so the pack declares the Antarctic the lag's default region as well.
+  it('fills the region and the period when the passage names neither', async () => {
+    expect(await readingOf('Old air sits in bubbles in the ice. In those bubbles, carbon dioxide trailed the warming by roughly 7,000 years.', '7,000 years')).toEqual({ value: LAG, flagged: true });
+    expect(await readingOf('Old air sits in bubbles in the ice. In those bubbles, carbon dioxide trailed the warming by roughly 300 years.', '300 years')).toEqual({ value: LAG, flagged: false });
+  });
+  it('never overrides a region the sentence or the passage names', async () => {
+    expect(await readingOf('Old air sits in bubbles in the ice. Over the whole globe, carbon dioxide trailed the warming by roughly 7,000 years.', '7,000 years')).toEqual({ value: '-', flagged: false });
+    expect(await readingOf('Greenland holds the best northern record. There, carbon dioxide trailed the warming by roughly 7,000 years.', '7,000 years')).not.toEqual({ value: LAG, flagged: true });
+  });
 });
 
 // The Younger Dryas lasted about 1,100-1,300 years (Rasmussen et al. 2006, JGR 111:D06102; Rasmussen
