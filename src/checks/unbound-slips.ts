@@ -82,7 +82,6 @@ export function unboundSlips(sentence: string, quantities: Quantity[], bindings:
     const [only] = fitting;
     if (only === undefined || fitting.length > 1) return;
     const slip = checkReferences(sentence, quantities, [{ quantityIndex: i, referenceId: only.id }], packs).flags.find((f) => f.ruleId === 'unit.scale-slip');
-    if (process.env.UNB) console.error('UNB', q.text, only.id, only.binding.all.map((g) => g.some((id) => terms!.own.has(id)) ? 'own' : g.some((id) => terms!.named.has(id)) ? 'passage' : 'missing').join(','), '|', sentence.slice(0, 120));
     if (slip !== undefined) flags.push(slip);
   });
   return flags;
