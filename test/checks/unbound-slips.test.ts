@@ -22,7 +22,7 @@ describe('a figure that binds nothing, read in the unit it was meant in', () => 
   it.each([
     // Vostok is named but no word for depth: the drilled depth and the lake borehole are both Vostok lengths.
     ['Our guide said the Vostok borehole went down 3,623 ft before the Russians paused above the water.', '3,623 m'],
-    ['At Dome C the drill ran for eight summers. The crew kept going until they stood some 3,270 feet below the snow.', '3,270 m'],
+    ['At Dome C the team drilled for eight summers. They drove the drill down through the ice sheet until they stood some 3,270 feet below the snow.', '3,270 m'],
   ])('flags a depth in feet that is the metres figure of the core the passage names: %s', async (text, meant) => {
     const slips = await slipsOf(text);
     expect(slips).toHaveLength(1);
