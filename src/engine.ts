@@ -9,6 +9,7 @@ import { checkRanks } from './checks/rank/index.js';
 import { checkReasoning, judgeByStance, paragraphReader, type ParagraphContext } from './checks/reasoning/index.js';
 import { checkReferences } from './checks/reference.js';
 import { reboundSlips } from './checks/rebound-slips.js';
+import { unboundSlips } from './checks/unbound-slips.js';
 import { checkUnits } from './checks/units.js';
 import { hasNumeral, hasTwoNumerals } from './quantities/two-numerals.js';
 import { FirnlineError } from './errors.js';
@@ -476,8 +477,10 @@ function examineSentence(
   const reference = checkReferences(text, quantities, bindings, packs);
   // "today's air carries some 420 parts per billion": a figure that binds only in the unit it was meant in.
   const rebound = reboundSlips(text, quantities, bindings, packs, (again) => bindQuantities(text, again, packs, previous, history).bindings, before);
+  // "The Vostok hole went down 3,623 ft": a figure that binds nothing but fits, read in metres, the one value its passage names.
+  const unbound = unboundSlips(text, quantities, bindings, rebound, packs, before);
   const reading = paragraphReader(asserted, packs, ownBlock(context))(index);
-  const own = preferSpecific([...reference.flags, ...rebound, ...checkArithmetic(text, read, before), ...checkUnits(text, read, before), ...checkRanks(text, packs)]);
+  const own = preferSpecific([...reference.flags, ...rebound, ...unbound, ...checkArithmetic(text, read, before), ...checkUnits(text, read, before), ...checkRanks(text, packs)]);
   const drafts = [...(reading === undefined ? own : judgeByStance(own, reading.stance)), ...checkReasoning(asserted, index, packs, context)];
   const p = reading?.props;
   // A causal or order statement is a claim to sign off even without a number.

@@ -78,6 +78,16 @@ function dataOf(packs: LoadedPacks): ImpliedData {
   return data;
 }
 
+/**
+ * The pack's subject terms (a term whose name holds a subject word: "Vostok", "sea level") and, for
+ * `dimension`, the attribute terms some value of that dimension needs ("depth", "lag"), as this
+ * reading sorts them; checks/unbound-slips.ts sorts a figure's named values by them.
+ */
+export function termSorts(packs: LoadedPacks, dimension: string): { subjects: ReadonlySet<string>; attributes: ReadonlySet<string> } {
+  const { subjects, attributes } = dataOf(packs);
+  return { subjects, attributes: attributes.get(dimension) ?? new Set<string>() };
+}
+
 /** The groups of `r` that `view` fills none of. */
 function missingGroups(r: ReferenceValue, view: TermHits): string[][] {
   return r.binding.all.filter((g) => !g.some((id) => view.has(id)));

@@ -1,0 +1,104 @@
+/**
+ * A figure that binds nothing, whose passage names what it measures, and whose number fits that
+ * measure only in the unit a writer confuses with the one written:
+ *
+ *   "The Vostok hole went down 3,623 ft."      Vostok named, no word for depth: the drilled depth
+ *                            ^^^^^^^^^         and the borehole into the lake are both Vostok
+ *                                              lengths, so nothing binds; read as metres, 3,623
+ *                                              fits the drilled depth alone (unit.scale-slip)
+ *   "Sea level fell by roughly 120 feet." (after a sentence on the glacial peak)
+ *
+ * The figure's candidates are the pack's values of its dimension whose binding groups the sentence
+ * and its passage (the sentences before, a question above) fill: every subject group (a core, the
+ * sea level, a period: bind-implied.ts termSorts) and every attribute group but one at most, with a
+ * term of one group in the sentence itself (or the sentence, naming no term, answers a question),
+ * no veto in the sentence, and no other attribute of the dimension named (in the sentence, or in
+ * the passage too when the value's own attribute is unnamed). The figure is held to them as written first: when it fits one, it is
+ * a right figure that merely did not bind, and nothing is said. Otherwise, when exactly one
+ * candidate takes the figure read in a confused unit (reference-slips.ts unitSlip, with its guards
+ * for near units and hedges), the slip is flagged against that value; two or more: nothing.
+ * Unlike a binding, the reading decides only between the values the passage names, and the number
+ * as written must miss every one of them: it names the slip, never a wrong value.
+ */
+import { findTerms } from '../claims/bind.js';
+import { termSorts } from '../claims/bind-implied.js';
+import type { LoadedPacks, ReferenceValue } from '../rulepack/types.js';
+import type { Binding, FlagDraft, Quantity } from '../types.js';
+import { checkReferences } from './reference.js';
+import { relativeDistance } from './reference-distance.js';
+import { unitSlip } from './reference-slips.js';
+import { isVagueTime } from './arithmetic-vague.js';
+
+/** A sentence that ends as a question, past closing quotes, brackets and emphasis marks. */
+const QUESTION = /\?[\s"'”’)\]*_]*$/u;
+
+/**
+ * The values `q`'s passage names: every subject group filled (in the sentence or its passage), one
+ * attribute group missing at most, one group named in the sentence itself (unless it answers a
+ * question), no veto in the sentence, and no attribute of the dimension named in the sentence that
+ * the value lacks ("a lag of 800 years" beside Dome C is no record span of Dome C).
+ */
+function candidatesOf(q: Quantity, terms: NamedTerms, packs: LoadedPacks): ReferenceValue[] {
+  const { subjects, attributes } = termSorts(packs, q.dimension);
+  const { own, named, answers } = terms;
+  return packs.references.filter((r) => {
+    if (r.dimension !== q.dimension || r.binding.implied === false || r.binding.none.some((id) => own.has(id))) return false;
+    const groups = r.binding.all;
+    const missing = groups.filter((g) => !g.some((id) => named.has(id)));
+    if (missing.length > 1 || missing.some((g) => g.some((id) => subjects.has(id))) || missing.length === groups.length) return false;
+    // With its own attribute unnamed, an attribute the passage names speaks for the figure too ("The
+    // lag ... Older estimates, such as 800 ± 600 years from Dome C").
+    const its = new Set(groups.flat());
+    const speaking = missing.length === 0 ? own : named;
+    if ([...speaking].some((id) => attributes.has(id) && !subjects.has(id) && !its.has(id))) return false;
+    return answers || groups.some((g) => g.some((id) => own.has(id)));
+  });
+}
+
+/**
+ * The unit-slip flags of the figures of `sentence` that bind nothing and fit, in a confused unit, the
+ * one value their passage names. `taken` holds the flags already made on the sentence's figures. `passage` is the text before the sentence (its last sentences, the
+ * lead-in or the question it answers).
+ */
+export function unboundSlips(sentence: string, quantities: Quantity[], bindings: readonly Binding[], taken: readonly FlagDraft[], packs: LoadedPacks, passage: readonly string[]): FlagDraft[] {
+  const flags: FlagDraft[] = [];
+  let terms: NamedTerms | undefined;
+  quantities.forEach((q, i) => {
+    if (q.statedUnit === '' || q.statedUnit === 'CE' || q.dimension === 'number' || q.dimension === 'ratio' || bindings.some((b) => b.quantityIndex === i)) return;
+    // A figure another reading has already flagged (a rebound slip) is not read twice.
+    if (taken.some((f) => f.start <= q.start && q.end <= f.end)) return;
+    // "a few thousand years", "centuries": a time told vaguely names no figure to mistake.
+    if (isVagueTime(q.text)) return;
+    terms ??= termsOf(sentence, passage, packs);
+    const candidates = candidatesOf(q, terms, packs);
+    // A figure that fits a value it may speak of as written is right, only unbound; and a figure of
+    // its sentence that fits the value as written is the writer's own right one ("3,270 feet can't
+    // be right: Dome C is 3,270 metres") or the figure it restates, which the restatement check reads.
+    // "20 °C colder is a 36 °F drop": a figure that restates another of its sentence is that figure's.
+    if (quantities.some((o) => o !== q && o.dimension === q.dimension && o.low <= q.high && q.low <= o.high)) return;
+    const fitsAsWritten = (r: ReferenceValue) => quantities.some((o) => o.dimension === q.dimension && relativeDistance(o.low, o.high, r) === 0);
+    if (candidates.length === 0 || candidates.some(fitsAsWritten)) return;
+    const fitting = candidates.filter((r) => unitSlip(r, q) !== undefined);
+    const [only] = fitting;
+    if (only === undefined || fitting.length > 1) return;
+    const slip = checkReferences(sentence, quantities, [{ quantityIndex: i, referenceId: only.id }], packs).flags.find((f) => f.ruleId === 'unit.scale-slip');
+    if (slip !== undefined) flags.push(slip);
+  });
+  return flags;
+}
+
+/** The terms the sentence names, those it and its passage name, and whether it answers a question naming nothing itself. */
+interface NamedTerms {
+  own: ReadonlySet<string>;
+  named: ReadonlySet<string>;
+  answers: boolean;
+}
+
+function termsOf(sentence: string, passage: readonly string[], packs: LoadedPacks): NamedTerms {
+  const own = new Set(findTerms(sentence, packs).keys());
+  const named = new Set([...own, ...passage.flatMap((text) => [...findTerms(text, packs).keys()])]);
+  // "How deep did the drill reach?" over "3,623 feet.": an answer that names nothing reads on from its question.
+  const last = passage.at(-1);
+  const answers = own.size === 0 && last !== undefined && QUESTION.test(last);
+  return { own, named, answers };
+}
