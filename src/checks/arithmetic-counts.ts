@@ -35,9 +35,15 @@ function isSpacing(text: string, q: Quantity): boolean {
   if (q.dimension !== 'duration') return false;
   if (WORDS.spacingBefore.has(wordBefore(text, q))) return true;
   // "each panel spans 100,000 years", "every cycle lasts about": the member named, then its verb.
-  const near = wordsIn(text, Math.max(0, q.start - 30), q.start).slice(-3).map((x) => x.text);
-  if (near.length === 3 && WORDS.spacingBefore.has(near[0] ?? '') && !WORDS.notASpan.has(near[1] ?? '') && !qsBetween(text, q)) return true;
-  return /^-?[\p{L}]*$/u.test(q.text.split(/[\s\u00A0-]/u).at(-1) ?? '') && /-/u.test(q.text) && WORDS.spacingNouns.has(wordsAfter(text, q, 1)[0] ?? '');
+  const nearWords = wordsIn(text, Math.max(0, q.start - 40), q.start);
+  const near = nearWords.slice(-3).map((x) => x.text);
+  // "100,000 years each gives 800,000 years": an "each" after a span of time belongs to that span.
+  const eachOfFigure = WORDS.timeUnits.has(nearWords.at(-4)?.text ?? '');
+  if (near.length === 3 && !eachOfFigure && WORDS.spacingBefore.has(near[0] ?? '') && !WORDS.notASpan.has(near[1] ?? '') && !qsBetween(text, q)) return true;
+  // "cycles of 100,000 years each", "at about 100,000 years apiece": the length of each member.
+  const next = wordsAfter(text, q, 1)[0] ?? '';
+  if (next === 'each' || next === 'apiece') return true;
+  return /^-?[\p{L}]*$/u.test(q.text.split(/[\s\u00A0-]/u).at(-1) ?? '') && /-/u.test(q.text) && WORDS.spacingNouns.has(next);
 }
 
 /** True when a digit stands in the few words before the figure (then "each" belongs to another figure). */
@@ -75,7 +81,10 @@ export function seriesSpacings(text: string, qs: Quantity[], pairs: Pair[]): Ser
   const span: { value: Derived; text: string; end: number } | undefined =
     spans.length === 1 && dated === undefined ? { value: w(spans[0] as Quantity), text: (spans[0] as Quantity).text, end: (spans[0] as Quantity).end } : spans.length === 0 && dated !== undefined ? { value: dated.span, text: dated.measures.replace(/^the time /u, ''), end: Math.max(...qs.filter((q) => q.dimension === 'age').map((q) => q.end)) } : undefined;
   const whole = span ?? (spans.length === 0 && dated === undefined ? spanToPresent(text, qs) : undefined);
-  if (whole === undefined || counts.length > 1 || spacings.length > 1) return [];
+  if (counts.length > 1 || spacings.length > 1) return [];
+  const total = totalOfSeries(text, qs, counts[0], spacings[0]);
+  if (total !== undefined) return [total];
+  if (whole === undefined) return [];
   return fromSpan(text, qs, whole, counts, spacings);
 }
 
@@ -102,6 +111,22 @@ function fromSpan(text: string, qs: Quantity[], span: { value: Derived; text: st
     return [{ stated: { ...each, dimension: 'duration', unit: 'yr', statedUnit: 'yr', value: c(each.value), low: c(each.low), high: c(each.high) }, computed: length, measures: `${span.text} divided by ${count.text}` }];
   }
   return [];
+}
+
+/**
+ * "eight cycles of about 100,000 years each, a total of some 600,000 years", "eight cycles at
+ * 100,000 years apiece give 800,000 years of record": the span as the result, after its count and
+ * spacing and drawn from them, is their product. It must be the only span of time after both, and
+ * no other figure may stand before it.
+ */
+function totalOfSeries(text: string, qs: Quantity[], count: Quantity | undefined, spacing: Quantity | undefined): SeriesFinding | undefined {
+  if (count === undefined || spacing === undefined || count.start > spacing.start) return undefined;
+  if (qs.some((q) => q.end <= spacing.end && q !== count && q !== spacing)) return undefined;
+  const result = only(qs.filter((q) => q.start >= spacing.end));
+  if (result === undefined || result.dimension !== 'duration' || isSpacing(text, result) || !drawn(text, spacing.end, result.start)) return undefined;
+  const n = exact(count);
+  const each = w(spacing);
+  return { stated: result, computed: { value: n.value * each.value, low: n.low * each.low, high: n.high * each.high }, measures: `${count.text} of ${spacing.text}` };
 }
 
 /** A count is exact: eight cycles are eight. */

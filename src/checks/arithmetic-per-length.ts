@@ -63,9 +63,33 @@ function withUnitMetres(text: string, qs: Quantity[]): Quantity[] {
   return extra.length === 0 ? qs : [...qs, ...extra].sort((a, b) => a.start - b.start);
 }
 
+/**
+ * "75 years of climate history per metre of ice", "750 years of record for every metre": years of
+ * a named record before the length they are counted on. Up to three words may name what the years
+ * are of; the length is one metre named by "per", "a", "each" or "(for/in) every".
+ */
+const OF_RECORD_PER_METRE = new RegExp(String.raw`^${S}+of${S}+(?:[\p{L}'’-]+${S}+){1,3}(?:per|a|an|each|(?:for${S}+|in${S}+)?every)${S}+(?:metre|meter|m)(?![\p{L}])`, 'iu');
+
+/** A span of time counted on each metre after its record's name is read as years per metre. */
+function withRecordPerMetre(text: string, qs: Quantity[]): Quantity[] {
+  return qs.map((q) => {
+    if (q.dimension !== 'duration' || isVagueTime(q.text)) return q;
+    const m = OF_RECORD_PER_METRE.exec(text.slice(q.end, q.end + 80));
+    return m === null ? q : { ...q, dimension: 'duration-per-length', unit: 'yr/m', perMetreEnd: q.end + m[0].length } as Quantity;
+  });
+}
+
+/** The quantities a gradient is read from: one metre named in words, years of a record per metre. */
+const readLengths = (text: string, qs: Quantity[]): Quantity[] => {
+  const read = withRecordPerMetre(text, qs);
+  // "every metre" inside a gradient of years per metre is its unit, not a length of its own.
+  const within = read.filter((q) => (q as Quantity & { perMetreEnd?: number }).perMetreEnd !== undefined);
+  return withUnitMetres(text, read).filter((q) => !(q.value === 1 && q.dimension === 'length' && within.some((g) => q.start >= g.end && q.end <= ((g as Quantity & { perMetreEnd?: number }).perMetreEnd ?? 0))));
+};
+
 /** Every gradient a sentence states: "75 years per metre", or "one metre ... holds 750 years". */
 function gradients(text: string, all: Quantity[]): Gradient[] {
-  const qs = withUnitMetres(text, all);
+  const qs = readLengths(text, all);
   const stated = qs.filter((q) => q.dimension === 'duration-per-length').map((q) => ({ perMetre: w(q), words: q.text, parts: [q] }));
   const units = qs.flatMap((q, i) => {
     const next = qs[i + 1];
@@ -92,7 +116,12 @@ function lengthAndYears(qs: Quantity[], lengthFirst: boolean): [Quantity, Quanti
 
 /** Every contradiction between a gradient and the years and metres beside it. */
 export function perLength(text: string, parsed: Quantity[], last?: Previous, earlier: readonly Previous[] = []): PerLengthFinding[] {
-  const qs = withUnitMetres(text, parsed);
+  // A figure read as years per metre is flagged as the years it was written as.
+  return gradientFindings(text, parsed, last, earlier).map((f) => ({ ...f, stated: parsed.find((q) => q.start === f.stated.start && q.end === f.stated.end) ?? f.stated }));
+}
+
+function gradientFindings(text: string, parsed: Quantity[], last?: Previous, earlier: readonly Previous[] = []): PerLengthFinding[] {
+  const qs = readLengths(text, parsed);
   // The sentence before with figures, past one short line with none ("frostfern_amy - 4 Jun").
   const previous = earlier.length === 0 ? last : reachBack(earlier, 1).find((p) => p.quantities.length > 0);
   const found = only(gradients(text, qs));
@@ -118,6 +147,13 @@ export function perLength(text: string, parsed: Quantity[], last?: Previous, ear
     // "...; near the surface a metre holds only 10 years": another clause, or a metre with no word
     // that draws it from the figures before ("so", "therefore"), is another place in the ice.
     // "each" and "every" metre distribute over the length just named.
+    // "The lowest 200 m hold 150,000 years. So one metre there is about 750 years.": the sentence
+    // before gives the years and the metres when this one draws on it and has no figure before its metre.
+    if (earlier === undefined) {
+      const back = previous === undefined || qs.some((q) => q.end <= unit.start) || !DRAWS_ON.test(text.slice(0, unit.start)) ? undefined : lengthAndYears(previous.quantities, false);
+      const perBack = back === undefined ? undefined : divide(w(back[1]), w(back[0]));
+      return back === undefined || perBack === undefined ? [] : [{ stated: years, computed: times(perBack, { value: unit.value, low: unit.value, high: unit.value }), measures: `${back[1].text} over ${back[0].text} in the sentence before, for ${unit.text}`, basis: "the paragraph's" }];
+    }
     const gap = earlier === undefined ? '' : text.slice(Math.max(earlier[0].end, earlier[1].end), unit.start);
     if (/;/u.test(gap) || (!/^(?:each|every)(?![\p{L}])/iu.test(unit.text) && !/^\d/u.test(unit.text) && !/^one(?![\p{L}])/iu.test(unit.text) && !DRAWS_ON.test(gap))) return [];
     const per = earlier === undefined ? undefined : divide(w(earlier[1]), w(earlier[0]));

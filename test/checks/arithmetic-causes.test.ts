@@ -93,6 +93,11 @@ describe('years per metre of ice', () => {
     ['Near the bed one metre of the Harnby ice holds about 400 years, so the lowest 50 metres hold some 2,000 years.', 'some 2,000 years', 'some 20,000 years', 'arith.rate', []],
     ['At Harnby 300 m of ice hold 120,000 years, so one metre there holds some 40 years.', 'some 40 years', 'some 400 years', 'arith.rate', []],
     ['A 50-metre stretch of that ice therefore spans about 2,000 years.', 'about 2,000 years', 'about 20,000 years', 'arith.rate', ['Near the bed one metre of the Harnby ice holds about 400 years.']],
+    // Years of a named record counted per metre, the record's name between them.
+    ['The last 300 m of the Harnby core hold some 120,000 years, about 40 years of climate record per metre.', 'about 40 years', 'about 400 years', 'arith.rate', []],
+    ['That comes to roughly 40 years of snowfall for every metre of ice.', 'roughly 40 years', 'roughly 400 years', 'arith.rate', ['The last 300 m of the Harnby core hold some 120,000 years.']],
+    // One metre and its years drawn from the sentence before ("so").
+    ['So a single metre down there holds some 40 years.', 'some 40 years', 'some 400 years', 'arith.rate', ['The last 300 m of the Harnby core hold some 120,000 years.']],
   ];
   it.each(WRONG_GRADIENT)('flags: %s', (sentence, flagged, correction, ruleId, context) => {
     const flags = check(sentence, context);
@@ -106,6 +111,10 @@ describe('years per metre of ice', () => {
     ['The top 100 m hold 1,000 years and the lowest 300 m some 120,000 years, about 400 years per metre at the bed.', []],
     // No word draws the second sentence from the first: the core's whole span is another matter.
     ['The Harnby core is 2,900 m long and covers about 800,000 years.', ['Near the bed one metre of the Harnby ice holds about 400 years.']],
+    ['That comes to roughly 400 years of snowfall for every metre of ice.', ['The last 300 m of the Harnby core hold some 120,000 years.']],
+    ['So a single metre down there holds some 400 years.', ['The last 300 m of the Harnby core hold some 120,000 years.']],
+    // No word draws the metre from the sentence before: another place in the ice.
+    ['Near the surface a single metre holds some 10 years.', ['The last 300 m of the Harnby core hold some 120,000 years.']],
   ];
   it.each(RIGHT_GRADIENT)('leaves alone: %s', (sentence, context) => {
     expect(check(sentence, context)).toEqual([]);

@@ -168,3 +168,24 @@ describe('a change restated in another unit after "or"', () => {
     expect(flagged(...sentences)).toEqual([]);
   });
 });
+
+describe('a change noun heading the subject, the figure its complement', () => {
+  // Sums (common practice): 276 − 183 = 93; 690 − 380 = 310; 282 − 194 = 88.
+  it.each([
+    ['a pair inside the subject, after a comma', ['The usual swing, from roughly 183 ppm in a cold stage to roughly 276 ppm in a warm stage, is about 130 ppm.'], 'about 130 ppm', 'about 93 ppm'],
+    ['a pair inside the subject', ['The climb from 380 ppb to 690 ppb was some 200 ppb in the Tarnwick methane record.'], 'some 200 ppb', 'some 310 ppb'],
+    ['a parenthesis and "comes to"', ['The Pellam core held about 282 ppm in its warm stages.', 'Its cold stages sat nearer 194 ppm.', 'So the gap between cold and warm, on my reckoning, comes to 120 ppm.'], '120 ppm', '88 ppm'],
+  ] as [string, string[], string, string][])('%s', (_why, sentences, words, correction) => {
+    expect(flagged(...sentences)).toEqual([['arith.change', words, correction]]);
+  });
+
+  // The same frames with the right sum, and nouns that are no subject of the copula, stay clean.
+  it.each([
+    ['right', ['The usual swing, from roughly 183 ppm in a cold stage to roughly 276 ppm in a warm stage, is about 93 ppm.']],
+    ['a noun in a phrase before the subject', ['At the start of the rise, CO2 at the Brask site was 190 ppm and by its end 265 ppm.']],
+    ['a noun after a preposition', ['During the climb in temperature the Brask air was 240 ppm, against 190 ppm at the glacial floor.']],
+    ['a range as the complement', ['The spread of the Pellam readings was 180 to 300 ppm, from a floor of 180 ppm to a ceiling of 300 ppm.']],
+  ] as [string, string[]][])('leaves alone: %s', (_why, sentences) => {
+    expect(flagged(...sentences)).toEqual([]);
+  });
+});

@@ -108,6 +108,9 @@ describe('a count or a spacing of a series worked from its span', () => {
     ['500k yrs of ice ÷ ~100k-yr cycles = about 9 cycles in the Orrin core.', 'about 9 cycles', 'about 5 cycles'],
     ['The survey covers 16,000 to 12,000 years BP at a 40-year spacing, about 50 samples in all.', 'about 50', 'about 100'],
     ['The Kell core holds 3 cycles in 300,000 years, so each one is about 150k long.', 'about 150k', expect.stringMatching(/^about 100/u)],
+    // The span as the result of its count and spacing (common practice: 6 × 40,000 = 240,000; 5 × 23,000 = 115,000).
+    ['The Orrin core shows six cycles of about 40,000 years each, a total of some 300,000 years.', 'some 300,000 years', 'some 240,000 years'],
+    ['Five cycles at roughly 23,000 years apiece gives us about 90,000 years of record.', 'about 90,000 years', 'about 115,000 years'],
   ] as [string, string, unknown][])('%s: flags %s', (sentence, text, correction) => {
     expect(flagged(sentence)).toEqual([[expect.stringMatching(/^arith\./u), text, correction]]);
   });
@@ -118,6 +121,9 @@ describe('a count or a spacing of a series worked from its span', () => {
     ['The survey covers 16,000 to 12,000 years BP sampled every 40 years, which gives about 100 samples.'],
     // The count and the spacing are not drawn from each other: no link between them.
     ['Over 600,000 years the core shows six cycles and the 41,000-year cycle before them.'],
+    ['The Orrin core shows six cycles of about 40,000 years each, a total of some 240,000 years.'],
+    // The span is no result drawn from the series: no link word or mark before it.
+    ['The Orrin core shows six cycles of about 40,000 years each before the record ends 300,000 years ago.'],
   ])('leaves alone: %s', (sentence) => {
     expect(check(sentence)).toEqual([]);
   });

@@ -62,8 +62,8 @@ function changeBefore(before: Word[]): number | undefined {
   const last = before.at(-1)?.text;
   const word = lastMeaningful(before);
   if (word === undefined) return undefined;
-  // "up to 280" is a bound or an end, not a change.
-  if (last === 'to') return undefined;
+  // "up to 280" is a bound or an end, not a change; "comes to", "amounts to" join a complement.
+  if (last === 'to') return WORDS.copulas.has(before.at(-2)?.text ?? '') ? copulaSubject(before.slice(0, -1)) : undefined;
   const verb = WORDS.changeVerbs.get(word.text);
   if (verb !== undefined && last !== 'of') return verb;
   const particle = WORDS.particles.get(word.text);
@@ -77,13 +77,80 @@ function changeBefore(before: Word[]): number | undefined {
     if (noun !== undefined) return noun;
   }
   if (WORDS.remainder.has(word.text)) return 0;
-  // "the swing was of the order of 110 ppm", "the rise is about 90": a change noun as the subject
-  // of a copula whose complement is the figure.
+  return copulaSubject(before);
+}
+
+/**
+ * "the swing was of the order of 110 ppm", "the rise is about 90": a change noun as the subject
+ * of a copula whose complement is the figure. `before` ends at the copula or at fillers after it.
+ */
+function copulaSubject(before: Word[]): number | undefined {
+  const word = lastMeaningful(before);
+  if (word === undefined) return undefined;
   const k = before.lastIndexOf(word);
   if (WORDS.copulas.has(word.text) && k > 0) {
     const subject = lastMeaningful(before.slice(0, k));
     const noun = subject === undefined ? undefined : WORDS.changeNouns.get(subject.text);
     if (noun !== undefined) return noun;
+  }
+  return undefined;
+}
+
+/** True when the figure is written as a range ("172 to 300 ppm", "180–190"): a span of readings, no amount of change. */
+const isRange = (q: Quantity): boolean => /\d[^\d]{0,12}?(?:to|–|—|-|and)\s*[~≈]?\d/u.test(q.text);
+
+/** Words that open a noun's modifier after it: a preposition or a comma's parenthesis ("the jump out of each ice age"). */
+const MODIFIER_OPENERS = new Set(['of', 'from', 'out', 'between', 'in', 'across', 'over', 'during', 'at', 'since', 'through', 'into', 'for', 'after', 'around']);
+/** Modifier openers that may hold the levels the change runs between ("the swing from 185 to 280 ppm was"). */
+const PAIR_OPENERS = new Set(['from', 'between']);
+/** Words that end the subject of a copula looked back from it: a clause break, a verb, a relative word. */
+const SUBJECT_BREAKS = new Set(['so', 'and', 'but', 'while', 'whereas', 'which', 'that', 'who', 'because', 'thus', 'hence', 'then', 'if', 'when', 'or', 'yet']);
+/** Prepositions that put a noun after them in a phrase, not the subject ("during the rise", "by the end of the climb"). */
+const SUBJECT_LEADS = new Set(['during', 'by', 'with', 'on', 'to', 'before', 'until', 'till', 'within', 'about', 'like', 'than', 'as']);
+/** Change verbs whose base form is also an adjective ("a warm period", "cool water"): no verb inside a subject. */
+const ADJECTIVE_FORMS = new Set(['warm', 'cool', 'thin', 'lower', 'deep', 'deepen']);
+/** How many words the subject's noun may stand before its copula. */
+const SUBJECT_REACH = 20;
+
+/**
+ * "A typical swing, from about 185 ppm in a cold phase to 280 ppm in a warm one, is some 90 ppm",
+ * "the jump out of each glacial was roughly 100 ppm", "the swing between cold and warm, by my sums,
+ * comes to 90 ppm": a change noun heads the subject of the copula before the figure, with a
+ * modifier (a preposition's phrase or a parenthesis after a comma) between the noun and the copula.
+ * The subject is read back from the copula to a clause break; figures in the modifier are allowed
+ * only when it opens with "from" or "between" (the levels the change runs between).
+ */
+function subjectChange(text: string, q: Quantity, qs: readonly Quantity[]): number | undefined {
+  const clauseStart = Math.max(0, ...['. ', '; ', '? ', '! ', ': '].map((m) => text.lastIndexOf(m, q.start) + 2));
+  const words = wordsIn(text, clauseStart, q.start);
+  let c = words.length - 1;
+  while (c >= 0 && FILLERS.has((words[c] as Word).text)) c--;
+  let copula = words[c];
+  // "comes to", "amounts to": the copula is the word before "to".
+  if (copula?.text === 'to' && WORDS.copulas.has(words[c - 1]?.text ?? '')) copula = words[--c];
+  if (copula === undefined || !WORDS.copulas.has(copula.text)) return undefined;
+  for (let i = c - 1; i >= 0 && c - i <= SUBJECT_REACH; i--) {
+    const x = words[i] as Word;
+    // "the swing between cold and warm": "and" inside a "between" phrase joins its two ends.
+    const joinsBetween = x.text === 'and' && words.slice(Math.max(0, i - 6), i).some((y) => y.text === 'between');
+    if ((SUBJECT_BREAKS.has(x.text) && !joinsBetween) || WORDS.copulas.has(x.text) || (WORDS.changeVerbs.has(x.text) && !WORDS.changeNouns.has(x.text) && !ADJECTIVE_FORMS.has(x.text))) return undefined;
+    const noun = WORDS.changeNouns.get(x.text);
+    if (noun === undefined) continue;
+    const next = words[i + 1] as Word;
+    // The noun right before the copula is copulaSubject's reading.
+    if (i + 1 === c) return undefined;
+    // A comma in the modifier must close it (", by my sums,"): "At the peak of the rise, CO2 was" has no subject noun.
+    const modifier = text.slice(x.end, copula.start).trim();
+    if (modifier.includes(',') && !modifier.endsWith(',')) return undefined;
+    const opener = MODIFIER_OPENERS.has(next.text) || modifier.startsWith(',');
+    if (!opener) return undefined;
+    // A noun after a preposition ("during the rise in temperature") is no subject.
+    const lead = words.slice(Math.max(0, i - 3), i).map((y) => y.text);
+    if (lead.some((y) => MODIFIER_OPENERS.has(y) || SUBJECT_LEADS.has(y))) return undefined;
+    const held = qs.filter((g) => g.start >= x.end && g.end <= copula.start);
+    const pairOpener = PAIR_OPENERS.has(next.text);
+    if (held.length > 0 && !pairOpener) return undefined;
+    return noun;
   }
   return undefined;
 }
@@ -138,7 +205,7 @@ export function readSentence(text: string, qs: readonly Quantity[], sentence: nu
     }
     if (RATES.includes(d)) return { ...f, role: 'rate', family: d };
     // "about 420 ppm, up 50 percent": a comparative after a comma speaks of the figure after it.
-    const up = changeBefore(before) ?? (/^\s*[,;:]/u.test(text.slice(q.end, q.end + 3)) ? undefined : changeAfter(after));
+    const up = changeBefore(before) ?? (/^\s*[,;:]/u.test(text.slice(q.end, q.end + 3)) ? undefined : changeAfter(after)) ?? (isRange(q) ? undefined : subjectChange(text, q, qs));
     // "a quarter of our emissions", "20 percent of the rise": a share of something named after it, not a change.
     if (d === 'percent' || (d === 'ratio' && q.value < 1)) return up === undefined || after[0]?.text === 'of' ? f : { ...f, role: 'relative', sign: up };
     // "per doubling", "each doubling", "a doubling": the multiple is a measure's unit, not a claim.
