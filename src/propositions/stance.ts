@@ -113,7 +113,7 @@ function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance
   if (FACT_LABEL.test(s.text) || label === 'fact') return make('asserted');
   if (LABEL.test(s.text) || label === 'myth' || isMythHeading(context.heading) || (context.blockKind === 'heading' && s.of('stance', 'myth').length > 0)) return make('myth');
   const quotedWords = s.words.filter((w) => w.quoted).length;
-  if (s.words.length > 0 && quotedWords / s.words.length >= 0.6) return make(insiderSpeaks(s) ? 'asserted' : 'quoted');
+  if (s.words.length > 0 && quotedWords / s.words.length >= 0.6 && !isLabelledUtterance(s)) return make(insiderSpeaks(s) ? 'asserted' : 'quoted');
   if (opensWithNamedQuotation(s)) return make('quoted');
   if (s.question) return questionStance(s, context, make);
   if (isTrueOrFalseItem(s.text) || (context.next !== undefined && TRUE_OR_FALSE_ALONE.test(context.next.text)) || asksWhether(s)) return make('asked');
@@ -338,6 +338,30 @@ const SPEAKER = /^\s*(?:[-*+>↳]\s+)?(?:\[[^\]\n]{1,24}\]\s*)?(?:(@[\p{L}\p{N}_
 function speakerOf(text: string): string | undefined {
   const m = SPEAKER.exec(text);
   return (m?.[1] ?? m?.[2])?.toLowerCase();
+}
+
+/** How many words a label before a colon may hold ("EMAIL (Col)", "MARISA: Text from Sunil in Old Harbour"). */
+const LABEL_WORDS = 8;
+
+/**
+ * 'EMAIL (Col): "The GRIP core shows ...', 'KOFI: Text from Sunil: "So the whole Earth ..."', 'Then: "So
+ * the entire planet ..."': a quotation that makes up all the rest of an utterance after a speaker's
+ * label (SPEAKER) is that utterance, a voice of the draft as a speaker's own line in a script, log or
+ * thread is, read for what its own words mark (a myth label, a report). Between the label and the
+ * quotation a short description of the message may stand, ending in a colon; none of the words before
+ * the quotation may name a saying (lexicon `stance.quotation-names`: "HOST: The usual line: "..."") or
+ * report one (`stance.report-verbs`, `stance.myth`: "HOST: A caller insists: "...""). A lead-in that is
+ * no speaker's label ("Several submissions put it this way: "..."", "Now the famous objection: "..."")
+ * keeps the quotation a quotation.
+ */
+function isLabelledUtterance(s: ReadSentence): boolean {
+  if (speakerOf(s.text) === undefined) return false;
+  const open = s.words.findIndex((w) => w.quoted === true);
+  if (open <= 0 || open > LABEL_WORDS || !s.words.slice(open).every((w) => w.quoted === true)) return false;
+  const before = s.words[open - 1];
+  if (before === undefined || !s.text.slice(before.end, s.words[open]?.start ?? before.end).includes(':')) return false;
+  const inLabel = (h: { first: number }) => h.first < open;
+  return ![...s.of('stance', 'quotation-names'), ...s.of('stance', 'report-verbs'), ...s.of('stance', 'myth')].some(inLabel);
 }
 
 /** The next sentence opens with a speaker's label, and not this sentence's speaker. */
