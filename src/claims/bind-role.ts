@@ -38,8 +38,14 @@ export function isChangeVerb(word: string): boolean {
   return CHANGE_VERB.test(word.trim());
 }
 
+/**
+ * A loose hedge a writer puts between the words that give a number its role and the number, which the
+ * quantity reader does not take into the number: "went up by something like 76 ppm", "fell to
+ * somewhere around 185 ppm" (common practice: English approximators).
+ */
+const LOOSE_HEDGE = String.raw`(?:\s+(?:something\s+like|somewhere|in\s+the\s+region\s+of|on\s+the\s+order\s+of|of\s+the\s+order\s+of))?`;
 /** Change words just before the quantity: "by", "a rise of", "the swing was", "rose", "fell", "up". */
-const CHANGE_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:by|(?:${CHANGE_NOUNS})\s+(?:of|was|is|were|came to|amounted to)|${CHANGE_VERBS})\s*$`, 'iu');
+const CHANGE_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:by|(?:${CHANGE_NOUNS})\s+(?:of|was|is|were|came to|amounted to)|${CHANGE_VERBS})${LOOSE_HEDGE}\s*$`, 'iu');
 /** Change words just after the quantity: "an 80 ppm rise", "90 ppm higher", "130 metres above the lake". */
 const CHANGE_AFTER = /^[\s-]*(?:rise|increase|drop|fall|decline|swing|jump|step|gain|higher|lower|more|less|greater|smaller|above|below|beneath|short of|deeper|shallower)(?![\p{L}])/iu;
 /** An amount per stretch of time is a change, however it is worded: "2 ppm of CO2 every year", "0.5 ppm a year". */
@@ -50,7 +56,7 @@ const DATUM_AFTER = /^\s*(?:below|beneath|under|above)\s+(?:the\s+)?(?:ice\s+|sn
  * Level words just before the quantity: "fell to", "stood at", "reached", "from"; "fell to a meagre"
  * (an article and one word of description); "fell as far as" (how far a fall went: where it ended).
  */
-const LEVEL_BEFORE = /(?:^|[^\p{L}])(?:from|to|to\s+(?:a|an)\s+\p{L}+|at|between|reached|reaching|hovered around|(?<!by\s+)as\s+far\s+as)\s*$/iu;
+const LEVEL_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:from|to|to\s+(?:a|an)\s+\p{L}+|at|between|reached|reaching|hovered around|(?<!by\s+)as\s+far\s+as)${LOOSE_HEDGE}\s*$`, 'iu');
 /** A loose word of place on the scale between a word of staying and its number: "sat around 190", "a low near 185". */
 const NEAR = String.raw`(?:\s+(?:at|around|near|about|of|close\s+to|roughly|just\s+under|just\s+over|as\s+low\s+as|as\s+high\s+as|somewhere(?:\s+(?:around|near))?))?`;
 /**
@@ -95,12 +101,31 @@ export function endpointPairs(sentence: string, quantities: Quantity[]): Endpoin
   return pairs;
 }
 
+const PLUS_SIGNED = /^\+\s*\d/u;
+/** A copula or a verb of amounting between the second figure of a "from ... to ..." and the next figure. */
+const COMES_TO = /^[\s\u00A0]*(?:is|was|are|were|makes|made|gives|gave|comes\s+to|came\s+to|amounts\s+to|amounted\s+to)[\s\u00A0]*$/iu;
+/** "from" opening a phrase before the first figure, a few words back at most: "From a glacial 190". */
+const FROM_OPEN = /(?:^|[^\p{L}])from(?:\s+[\p{L}-]+){0,2}\s*$/iu;
+/** "to" a few words before the second figure: "to an interglacial 280". */
+const TO_OPEN = /(?:^|[^\p{L}])to(?:\s+[\p{L}-]+){0,2}\s*$/iu;
+
+/** Whether quantity `i` states what a "from A to B" just before it comes to: "from 190 to 280 is 90 ppm". */
+function isWayBetween(sentence: string, quantities: Quantity[], i: number): boolean {
+  const [a, b, q] = [quantities[i - 2], quantities[i - 1], quantities[i]];
+  if (a === undefined || b === undefined || q === undefined) return false;
+  return COMES_TO.test(sentence.slice(b.end, q.start)) && TO_OPEN.test(sentence.slice(a.end, b.start)) && FROM_OPEN.test(sentence.slice(Math.max(0, a.start - 30), a.start));
+}
+
 /** The role of each quantity, in order. */
 export function quantityRoles(sentence: string, quantities: Quantity[]): ReadRole[] {
   const endpoints = new Set(endpointPairs(sentence, quantities).flatMap((p) => [p.first, p.second]));
   return quantities.map((q, i) => {
     const before = sentence.slice(Math.max(0, q.start - 40), q.start);
     if (LEVEL_HEDGE.test(q.text)) return 'level';
+    // "+90 ppm": a figure signed with a plus is an amount added, a change.
+    if (PLUS_SIGNED.test(q.text)) return 'change';
+    // "From a glacial 190 to an interglacial 280 is about 90 ppm": what the way from one figure to the next comes to is their difference.
+    if (isWayBetween(sentence, quantities, i)) return 'change';
     // "swung between 180 and 300 ppm", "went from 190 to 280 ppm": the span a quantity moved over
     // names its levels, whatever verb stands before; only "by between 80 and 100 ppm" sizes a change.
     if (SPAN_OPEN.test(q.text) && !BY_BEFORE.test(before)) return 'level';

@@ -34,6 +34,7 @@ import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
 import { addSpanEdges } from './bind-edges.js';
+import { withAmountWords } from './bind-amount-time.js';
 import { spanOrEnds } from './bind-span.js';
 import { withoutOtherSide } from './bind-turn.js';
 import { vetoView } from './bind-veto.js';
@@ -528,6 +529,8 @@ export function bindQuantities(
       if (!view.has(term.id)) view.set(term.id, [[q.start, q.end]]);
     }
   });
+  // "10 to 15 ppm in under two centuries": the time an amount took speaks of the amount's gas or temperature.
+  withAmountWords(sentence, quantities, views, packs);
   // "CO2 never climbed above 300 ppm": a bound's words are its number's alone, and name the extreme.
   const bounds = boundReadings(sentence, quantities, packs, hits);
   bounds.forEach((b, j) => {

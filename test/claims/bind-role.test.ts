@@ -40,6 +40,15 @@ const ROLES: [sentence: string, written: Written[], roles: ReadRole[]][] = [
   // Words of change after the number still make it a difference: "sits 140 ppm above".
   ['Today the level sits 140 ppm above that interglacial peak.', [['140 ppm', C]], ['change']],
   ['The new high is 60 ppm higher than any before.', [['60 ppm', C]], ['change']],
+  // A loose hedge between the role's words and the number keeps the role (common practice: English
+  // approximators the quantity reader leaves outside the number).
+  ['At the Orra site the gas went up by something like 70 ppm.', [['70 ppm', C]], ['change']],
+  ['In every cold phase the gas dropped to somewhere near 190 ppm.', [['near 190 ppm', C]], ['level']],
+  ['Over the thaw CO2 rose by on the order of 80 ppm.', [['80 ppm', C]], ['change']],
+  // A figure signed with a plus is an amount added; what "from A to B" comes to is the difference.
+  ['Cold phase 185 ppm, warm phase 275 ppm: +90 ppm in all.', [['185 ppm', C], ['275 ppm', C], ['+90 ppm', C]], ['unknown', 'unknown', 'change']],
+  ['From a cold-phase 185 to a warm-phase 270 is roughly 85 ppm.', [['185', C], ['270', C], ['roughly 85 ppm', C]], ['unknown', 'unknown', 'change']],
+  ['It went from 185 to 270, which was 85 ppm.', [['185', C], ['270', C], ['85 ppm', C]], ['level', 'level', 'unknown']],
 ];
 
 describe('quantityRoles', () => {
