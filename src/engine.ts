@@ -20,6 +20,7 @@ import { sortById } from './report/sort.js';
 import { createTopicMatcher, isVoicedQuote, splitSentences, type TopicMatcher } from './prose/index.js';
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
+import { draftLineWidth } from './prose/line-width.js';
 import { introOf, leadInOf } from './prose/lead-in.js';
 import { classWordsOf, entityWordsOf, subjectWordsOf } from './propositions/index.js';
 import { tokenizeSentence } from './claims/frames-tokens.js';
@@ -243,7 +244,7 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     // them it is not even split.
     const nextTo = beside[blockIndex] === true;
     if (!TWO_NUMBERS.test(block.text) && !nextTo && !subjects.test(block.text) && !hasTwoNumerals(block.text)) return;
-    const sentences = splitSentences(block.text, blockIndex);
+    const sentences = splitSentences(block.text, blockIndex, draftLineWidth(draft.text));
     const paragraph = sentences.map((s) => s.text);
     // What each sentence asserts, its opening title or label lines blanked (offsets kept): the
     // figure checks read a label as the sentence's own words (it names the subject or the date of

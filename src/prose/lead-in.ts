@@ -13,6 +13,7 @@
  */
 import type { ProseBlock } from '../types.js';
 import { splitSentences } from './split-sentences.js';
+import { draftLineWidth } from './line-width.js';
 
 /** How many sentences a lead-in holds at most: as many as the checks read of their own paragraph. */
 export const LEAD_IN_SENTENCES = 4;
@@ -52,7 +53,7 @@ export function leadInOf(text: string, blocks: readonly ProseBlock[], index: num
       const start = here.offsets[0] ?? 0;
       if (end > start || !FOLLOWS_ON.test(text.slice(end, start))) break;
     }
-    const sentences = splitSentences(block.text, i).map((s) => s.text);
+    const sentences = splitSentences(block.text, i, draftLineWidth(text)).map((s) => s.text);
     if (!namesSubject(block.text) && !sentences.some((s) => TWO_NUMBERS.test(s))) break;
     out.unshift(...sentences.slice(-(LEAD_IN_SENTENCES - out.length)));
     here = block;

@@ -31,20 +31,20 @@ const EMOJI_END = /^\p{Extended_Pictographic}/u;
  *   splitSentences('Vostok spans c. 420,000 years. EPICA is longer.', 0)
  *   → ['Vostok spans c. 420,000 years.', 'EPICA is longer.']
  */
-export function splitSentences(text: string, blockIndex: number): Sentence[] {
+export function splitSentences(text: string, blockIndex: number, width = 0): Sentence[] {
   const sentences: Sentence[] = [];
   let chunkStart = 0;
   for (const gap of text.matchAll(BLANK_LINE)) {
-    splitChunk(sentences, text, blockIndex, chunkStart, gap.index);
+    splitChunk(sentences, text, blockIndex, chunkStart, gap.index, width);
     chunkStart = gap.index + gap[0].length;
   }
-  splitChunk(sentences, text, blockIndex, chunkStart, text.length);
+  splitChunk(sentences, text, blockIndex, chunkStart, text.length, width);
   return sentences;
 }
 
 const BLANK_LINE = /\n[ \t]*\n/gu;
 
-function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, from: number, to: number): void {
+function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, from: number, to: number, width: number): void {
   // A line that opens with a speaker, a time stamp, a handle or a bullet is an utterance of its own,
   // full stop or not: chat logs, scripts and thread dumps put one on each line.
   // A post's byline ("BigSkyBarb · 5h") is a line of its own: the post starts on the next line.
@@ -57,6 +57,7 @@ function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, fr
     const colon = line[0].indexOf(': ');
     if (colon > 0 && isByline(line[0].slice(0, colon))) cuts.add(from + line.index + colon + 2);
   }
+  for (const at of unwrappedLineEnds(whole, from, to, width)) cuts.add(at);
   let lineFrom = from;
   for (const at of [...cuts].sort((a, b) => a - b)) {
     splitLines(sentences, whole, blockIndex, lineFrom, at);
@@ -99,6 +100,50 @@ export function labelCuts(whole: string, from: number, to: number): number[] {
   return cuts;
 }
 
+/**
+ * Where a writer who opens sentences in lower case (chat logs, comment threads, forum posts) ends one
+ * at a line break without a mark: such writers break a line where a thought ends, not to wrap it.
+ * The sentence the line ends in opened in lower case, the line ends in no mark or word that carries
+ * a sentence on, the next line opens with no capital (a short line over a capitalised one is a label,
+ * labelCuts) and no word that carries the sentence on ("which", "of"), and the line with the next
+ * line's first word falls well short (`LABEL_SLACK`) of the draft's widest line (`width`), so it was
+ * no line wrapped to fill it. "the vostok record goes back 800k yrs\nis that right?" is two
+ * sentences. Each cut is the offset where the next line starts.
+ */
+function unwrappedLineEnds(whole: string, from: number, to: number, width: number): number[] {
+  const lines = [...whole.slice(from, to).matchAll(LINE)].map((m) => ({ text: m[0], at: from + m.index }));
+  if (lines.length < 2) return [];
+  const widest = Math.max(...lines.map((l) => l.text.trim().length));
+  const cuts: number[] = [];
+  // Whether the sentence the line ends in opened in lower case: a line with no end mark of its own
+  // carries on the sentence of the line before.
+  let lower = false;
+  let opensSentence = true;
+  for (let i = 0; i + 1 < lines.length; i += 1) {
+    const line = (lines[i] as { text: string }).text.trim();
+    const next = lines[i + 1] as { text: string; at: number };
+    const first = /^\S+/u.exec(next.text.trimStart())?.[0] ?? '';
+    const piece = lastSentenceOf(line, opensSentence);
+    if (piece !== undefined) lower = opensInLowerCase(piece);
+    const ended = /[.!?…]["'”’)\]]*$/u.test(line) || OPENER_LINE.test(next.text) || isByline(line);
+    const cut = lower && !ended && line !== '' && first !== '' && !OPENS_CAPITAL.test(first) && !CARRIES_ON.test(line) && !OPENS_ON.test(first) && line.length + 1 + first.length < LABEL_SLACK * Math.max(width, widest);
+    if (cut) cuts.push(next.at);
+    opensSentence = ended || cut;
+  }
+  return cuts;
+}
+
+/** The line's last sentence, when it opens one: after its last end mark, or the whole line when the line opens a sentence. */
+function lastSentenceOf(line: string, opensSentence: boolean): string | undefined {
+  const marks = [...line.matchAll(/[.!?…]["'”’)\]]*\s+/gu)];
+  const last = marks.at(-1);
+  if (last === undefined) return opensSentence ? line : undefined;
+  return line.slice(last.index + last[0].length);
+}
+
+/** A word that opens a line and carries the sentence before it on: a relative pronoun, "of", "than" (an "and" opening a chat line opens a new thought). */
+const OPENS_ON = /^(?:which|who|whose|whom|of|than)(?![\p{L}'’])/u;
+
 /** How much shorter than the chunk's widest line a line and the next word must be to be a line of its own. */
 const LABEL_SLACK = 0.8;
 
@@ -120,6 +165,9 @@ const LINE = /[^\n]+/gu;
  * A speaker label is one to three capitalised words, or one word in capitals, before a colon.
  */
 const OPENER = String.raw`[ \t]*(?:\[[^\]\n]{1,24}\]|[@↳•▶►]|[-*+>][ \t]|\d{1,3}\/[ \t]|\p{Lu}[\p{L}'’.-]*(?:[ \t]\p{Lu}[\p{L}'’.-]*){0,2}:[ \t])`;
+/** A line that opens an utterance of its own (a speaker, a time stamp, a handle, a bullet). */
+const OPENER_LINE = new RegExp(String.raw`^${OPENER}`, 'u');
+
 const UTTERANCE_LINE = new RegExp(String.raw`\n(?=${OPENER})`, 'gu');
 const OPENS_UTTERANCE = new RegExp(String.raw`^${OPENER.replace('[@↳•▶►]', '[@↳▶►]')}`, 'u');
 
