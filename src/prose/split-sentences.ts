@@ -104,7 +104,7 @@ export function labelCuts(whole: string, from: number, to: number): number[] {
  * Where a writer who opens sentences in lower case (chat logs, comment threads, forum posts) ends one
  * at a line break without a mark: such writers break a line where a thought ends, not to wrap it.
  * The sentence the line ends in opened in lower case, the line ends in no mark or word that carries
- * a sentence on, the next line opens with no capital (a short line over a capitalised one is a label,
+ * a sentence on or in a number (its unit may open the next line), the next line opens with no capital (a short line over a capitalised one is a label,
  * labelCuts) and no word that carries the sentence on ("which", "of"), and the line with the next
  * line's first word falls well short (`LABEL_SLACK`) of the draft's widest line (`width`), so it was
  * no line wrapped to fill it. "the vostok record goes back 800k yrs\nis that right?" is two
@@ -126,7 +126,7 @@ function unwrappedLineEnds(whole: string, from: number, to: number, width: numbe
     const piece = lastSentenceOf(line, opensSentence);
     if (piece !== undefined) lower = opensInLowerCase(piece);
     const ended = /[.!?…]["'”’)\]]*$/u.test(line) || OPENER_LINE.test(next.text) || isByline(line);
-    const cut = lower && !ended && line !== '' && first !== '' && !OPENS_CAPITAL.test(first) && !CARRIES_ON.test(line) && !OPENS_ON.test(first) && line.length + 1 + first.length < LABEL_SLACK * Math.max(width, widest);
+    const cut = lower && !ended && line !== '' && !/\d$/u.test(line) && first !== '' && !OPENS_CAPITAL.test(first) && !CARRIES_ON.test(line) && !OPENS_ON.test(first) && line.length + 1 + first.length < LABEL_SLACK * Math.max(width, widest);
     if (cut) cuts.push(next.at);
     opensSentence = ended || cut;
   }
