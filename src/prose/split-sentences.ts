@@ -113,6 +113,7 @@ export function labelCuts(whole: string, from: number, to: number): number[] {
 function unwrappedLineEnds(whole: string, from: number, to: number, width: number): number[] {
   const lines = [...whole.slice(from, to).matchAll(LINE)].map((m) => ({ text: m[0], at: from + m.index }));
   if (lines.length < 2) return [];
+  if (!writesInLowerCase(whole.slice(from, to))) return [];
   const widest = Math.max(...lines.map((l) => l.text.trim().length));
   const cuts: number[] = [];
   // Whether the sentence the line ends in opened in lower case: a line with no end mark of its own
@@ -133,9 +134,32 @@ function unwrappedLineEnds(whole: string, from: number, to: number, width: numbe
   return cuts;
 }
 
+/**
+ * Whether the chunk's writer opens sentences in lower case: as many of its sentence openings (its
+ * start, and the word after each end mark) open in lower case as with a capital, at least one ("I" counts for
+ * neither). One lower-case opening in edited prose (a quoted sentence's full stop, a name written in
+ * lower case) does not make its writer one who breaks lines where a thought ends.
+ *
+ *   writesInLowerCase('the record goes back 800k yrs\nis that right? what am i missing') → true
+ *   writesInLowerCase('It reads "CO2 rose." then falls\nback. So it goes.') → false
+ */
+function writesInLowerCase(chunk: string): boolean {
+  let lower = 0;
+  let upper = 0;
+  for (const at of [0, ...[...chunk.matchAll(SENTENCE_GAP)].map((m) => m.index + m[0].length)]) {
+    const word = /^\S+/u.exec(chunk.slice(at).replace(UTTERANCE_PREFIX, ''))?.[0] ?? '';
+    if (/^\p{Ll}/u.test(word)) lower += 1;
+    else if (/^\p{Lu}/u.test(word) && !/^I(?:['’]\p{L}+)?$/u.test(word)) upper += 1;
+  }
+  return lower > 0 && lower >= upper;
+}
+
+/** An end mark, any closing quote or bracket after it, and the space before the next sentence. */
+const SENTENCE_GAP = /[.!?…]["'”’)\]]*\s+/gu;
+
 /** The line's last sentence, when it opens one: after its last end mark, or the whole line when the line opens a sentence. */
 function lastSentenceOf(line: string, opensSentence: boolean): string | undefined {
-  const marks = [...line.matchAll(/[.!?…]["'”’)\]]*\s+/gu)];
+  const marks = [...line.matchAll(SENTENCE_GAP)];
   const last = marks.at(-1);
   if (last === undefined) return opensSentence ? line : undefined;
   return line.slice(last.index + last[0].length);

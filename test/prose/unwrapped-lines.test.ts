@@ -50,6 +50,13 @@ describe('line breaks of a writer who does not wrap', () => {
     expect(split(text)).toEqual([text]);
   });
 
+  it('keeps the lines of edited prose whose one lower-case opening follows a quoted full stop', () => {
+    // A wrapped paragraph that quotes a whole sentence: the word after the quotation's stop opens in
+    // lower case, but the writer opens sentences with capitals, so its short lines are wrapped lines.
+    const text = 'The guide quotes: "Snow turns to ice within a century." is the line\nthey chose. The panel beside it names the drill site.\nIt closes with the team\nin the summer of that year. Then the guide moves on.';
+    expect(split(`${LONG}\n\n${text}`)).toEqual([LONG, ...splitSentences(text, 0).map((s) => s.text)]);
+  });
+
   it('cuts nothing with no width given (a caller that knows no draft)', () => {
     expect(splitSentences('the ice is old\nthe air is older', 0).map((s) => s.text)).toEqual(['the ice is old\nthe air is older']);
   });
