@@ -172,6 +172,13 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-ak-2': { recall: 0.72, falseFlags: 0.07 },
   'tuning-ak-3': { recall: 0.75, falseFlags: 0.05 },
   'tuning-ak-4': { recall: 0.6, falseFlags: 0.07 },
+  // tuning-al-1..4 were the blind hold-out holdout-y, written in the seventeenth round and read, totals
+  // only, on the eighteenth round's first and last code (102/122 and 28/41 caught at the start,
+  // 103/122 and 28/41 at the end; false flags 14/260 throughout, 4/89 then 3/89).
+  'tuning-al-1': { recall: 0.75, falseFlags: 0.1 },
+  'tuning-al-2': { recall: 0.78, falseFlags: 0.1 },
+  'tuning-al-3': { recall: 0.8, falseFlags: 0.06 },
+  'tuning-al-4': { recall: 0.62, falseFlags: 0.07 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
@@ -202,12 +209,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (87.0% measured over 102 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (87.6% measured over 106 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.6% measured over 102 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (94.1% measured over 106 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
