@@ -30,7 +30,15 @@ export function derivedFigures(q: Quantity, value: number): number {
   const stated = fromCanonical(value, q.statedUnit === '' ? q.unit : q.statedUnit, q.dimension);
   const whole = Math.round(stated);
   const exact = Math.abs(stated) >= 1 && Math.abs(stated - whole) <= 1e-9 * Math.abs(stated);
+  // A multiple of 100 or more is given to the whole number, as the finding's own message gives it
+  // ("is 185 times, not about 50 times" corrects to "about 185 times", not "about 180 times").
+  if (q.dimension === 'ratio' && Math.abs(stated) >= 100) return multipleFigures(stated);
   return exact ? Math.max(1, String(Math.abs(whole)).replace(/0+$/u, '').length) : correctionFigures(q, 2);
+}
+
+/** Significant figures of a multiple in a correction: two, or every whole digit from 100 up. */
+function multipleFigures(x: number): number {
+  return Math.abs(x) >= 100 ? String(Math.round(Math.abs(x))).length : 2;
 }
 
 /**
@@ -45,8 +53,10 @@ export function rewriteQuantity(q: Quantity, value: number, significant?: number
   if (atom === undefined || atoms.length > 1 || atom.form === 'vague') return formatQuantity(value, q.unit, q.statedUnit, figures);
   const stated = fromCanonical(value, id, q.dimension);
   let written: string;
-  // A ratio below one reads as a share ("roughly 45 percent of today's 420 ppm", not "0.45 times").
-  if (atom.form === 'multiplier') written = Math.abs(stated) < 1 ? `${formatNumber(stated * 100, 2)} percent` : `${formatNumber(stated, 2)} times`;
+  // A ratio below one reads as a share ("roughly 45 percent of today's 420 ppm", not "0.45 times");
+  // a ratio of 100 or more is given to the whole number ("185 times", not "180 times" for 184.6), as
+  // the reference-slip corrections give theirs.
+  if (atom.form === 'multiplier') written = Math.abs(stated) < 1 ? `${formatNumber(stated * 100, 2)} percent` : `${formatNumber(stated, multipleFigures(stated))} times`;
   else if (q.statedUnit === 'CE') {
     if (Math.round(stated) < 1) return formatQuantity(value, q.unit, q.statedUnit);
     written = String(Math.round(stated));
