@@ -69,13 +69,14 @@ export function unboundSlips(sentence: string, quantities: Quantity[], bindings:
     if (taken.some((f) => f.start <= q.start && q.end <= f.end)) return;
     // "a few thousand years", "centuries": a time told vaguely names no figure to mistake.
     if (isVagueTime(q.text)) return;
+    // "20 °C colder is a 36 °F drop": a figure that restates another of its sentence is that figure's
+    // (tested before the passage's terms are looked up, which costs more).
+    if (quantities.some((o) => o !== q && o.dimension === q.dimension && o.low <= q.high && q.low <= o.high)) return;
     terms ??= termsOf(sentence, passage, packs);
     const candidates = candidatesOf(q, terms, packs);
     // A figure that fits a value it may speak of as written is right, only unbound; and a figure of
     // its sentence that fits the value as written is the writer's own right one ("3,270 feet can't
     // be right: Dome C is 3,270 metres") or the figure it restates, which the restatement check reads.
-    // "20 °C colder is a 36 °F drop": a figure that restates another of its sentence is that figure's.
-    if (quantities.some((o) => o !== q && o.dimension === q.dimension && o.low <= q.high && q.low <= o.high)) return;
     const fitsAsWritten = (r: ReferenceValue) => quantities.some((o) => o.dimension === q.dimension && relativeDistance(o.low, o.high, r) === 0);
     if (candidates.length === 0 || candidates.some(fitsAsWritten)) return;
     const fitting = candidates.filter((r) => unitSlip(r, q) !== undefined);
