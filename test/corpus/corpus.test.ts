@@ -179,6 +179,14 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-al-2': { recall: 0.78, falseFlags: 0.1 },
   'tuning-al-3': { recall: 0.8, falseFlags: 0.06 },
   'tuning-al-4': { recall: 0.62, falseFlags: 0.07 },
+  // tuning-ao-1..4 were written at the start of the nineteenth round by four new independent writers,
+  // weighted toward reasoning errors (logic, scope, direction), to give the engineers fresh phrasings to
+  // read; on the round's first code they caught 25/42, 27/42, 27/41 and 27/41, with false flags 3/83,
+  // 3/91, 9/98 and 8/105 (ao-3 and ao-4 are in public phrasing).
+  'tuning-ao-1': { recall: 0.55, falseFlags: 0.06 },
+  'tuning-ao-2': { recall: 0.6, falseFlags: 0.06 },
+  'tuning-ao-3': { recall: 0.6, falseFlags: 0.12 },
+  'tuning-ao-4': { recall: 0.6, falseFlags: 0.1 },
 };
 const DEFAULT_FLOOR = { recall: 0.75, falseFlags: 0.06 };
 beforeAll(async () => {
