@@ -4,6 +4,8 @@
  * deglaciation. The pack's lexicon class `states` keys a thing's term and an event's term
  * (`ice-sheets:lgm`); a word of the key (every inflection derived) that follows the thing's term in
  * its clause, with at most a few words between, adds a hit of the event's term over both.
+ * The state's word is then a word of the event's name and names nothing of its own: "the tilt
+ * wobbles" is the tilt's cycle (obliquity:obliquity), and its "wobbles" no precession.
  *
  *   "The ice sheets of the north reached their greatest size some 45,000 years ago"
  *        ^^^^^^^^^^ ─────────────────────── ^^^^^^^^^^^^^ → lgm (with ice-sheets: the ice-sheet maximum)
@@ -55,6 +57,14 @@ export function withStateEvents(sentence: string, hits: TermHits, packs: LoadedP
       const between = rest.slice(0, first[0]);
       if (!BETWEEN.test(between) || between.trim().split(/\s+/u).filter(Boolean).length > MAX_WORDS) continue;
       out ??= new Map(hits);
+      const word: [number, number] = [end + first[0], end + first[1]];
+      for (const [id, spans] of out) {
+        if (id === thing || id === event) continue;
+        const left = spans.filter(([s, e]) => !(word[0] <= s && e <= word[1]));
+        if (left.length === spans.length) continue;
+        if (left.length === 0) out.delete(id);
+        else out.set(id, left);
+      }
       out.set(event, [...(out.get(event) ?? []), [start, end + first[1]] as [number, number]].sort((a, b) => a[0] - b[0]));
     }
   }

@@ -9,7 +9,7 @@
  * doi:10.5194/cp-15-913-2019; Clark et al. 2009).
  */
 import { describe, expect, it } from 'vitest';
-import { judge } from './judge-at.js';
+import { judge, judgeAt } from './judge-at.js';
 
 
 describe('ice sheets at their greatest are the ice-sheet maximum of the last glacial', () => {
@@ -45,5 +45,44 @@ describe('other words about ice sheets name no event', () => {
     const value = judge(sentence).value;
     expect(value).not.toBe('lgm-ice-sheet-maximum');
     expect(value).not.toBe('termination-1-start');
+  });
+});
+
+/**
+ * The orbit's cycles told by what they do (pack lexicon `states`): the tilt that wobbles or nods is
+ * the tilt's own cycle, and its wobble names no precession; the orbit that stretches or changes
+ * shape is the eccentricity cycle. Sentences of our own. Periods: obliquity about 41,000 years,
+ * eccentricity about 100,000 years, climatic precession about 19,000-23,000 years (Berger, A. (1978),
+ * J. Atmos. Sci. 35, 2362-2367; Hays, Imbrie & Shackleton (1976), Science 194, 1121-1132).
+ */
+describe('a wobble told of the tilt is the tilt cycle, not precession', () => {
+  it.each([
+    ['The tilt of the planet wobbles back and forth roughly every 26,000 years.', 'milankovitch-obliquity-period', 'conflicts'],
+    ["Earth's tilt wobbles on a cycle of about 100,000 years.", 'milankovitch-obliquity-period', 'conflicts'],
+    ['The axial tilt nods slowly, one full swing every 41,000 years or so.', 'milankovitch-obliquity-period', 'agrees'],
+    ['The tilt wobble takes about 22,000 years to come round.', 'milankovitch-obliquity-period', 'conflicts'],
+  ])('%s', (sentence, value, verdict) => {
+    expect(judge(sentence)).toEqual({ value, verdict });
+  });
+
+  it('a wobble with no tilt before it stays precession', () => {
+    expect(judge('The wobble of the axis comes round every 41,000 years.')).toEqual({ value: 'milankovitch-precession-period', verdict: 'conflicts' });
+  });
+
+  it('precession named beside the tilt keeps its own figure', () => {
+    expect(judgeAt('The tilt goes through its cycle in 41,000 years and precession in about 21,000 years.', '21,000')).toEqual({
+      value: 'milankovitch-precession-period',
+      verdict: 'agrees',
+    });
+  });
+});
+
+describe('the orbit changing shape is the eccentricity cycle', () => {
+  it.each([
+    ["Earth's orbit stretches out and relaxes again over roughly 23,000 years.", 'conflicts'],
+    ['The path around the Sun slowly changes shape about every 41,000 years.', 'conflicts'],
+    ['The orbit becomes more elliptical and then rounder again over about 100,000 years.', 'agrees'],
+  ])('%s', (sentence, verdict) => {
+    expect(judge(sentence)).toEqual({ value: 'milankovitch-eccentricity-period', verdict });
   });
 });
