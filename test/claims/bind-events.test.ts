@@ -86,3 +86,29 @@ describe('the orbit changing shape is the eccentricity cycle', () => {
     expect(judge(sentence)).toEqual({ value: 'milankovitch-eccentricity-period', verdict });
   });
 });
+
+/**
+ * A peak or a low told of the recurring warm or cold periods is each period's own extreme, no ceiling
+ * or floor of the whole record (pack lexicon `states`, interglacial:interglacial and glacial:glacial).
+ * Sentences of our own. Values: interglacial CO2 peaks near 280 ppm (240-300), glacial lows near
+ * 185 ppm (172-200), the whole 800,000-year record 172-300 ppm (Lüthi, D. et al. (2008), Nature 453,
+ * 379-382; Siegenthaler, U. et al. (2005), Science 310, 1313-1317).
+ */
+describe('a peak told of the interglacials is their typical peak', () => {
+  it.each([
+    ['In the warm interglacials carbon dioxide peaked at close to 280 ppm.', 'co2-interglacial-maximum-typical', 'agrees'],
+    ['During interglacials the gas typically topped out near 390 ppm.', 'co2-interglacial-maximum-typical', 'conflicts'],
+    ['In the cold glacials CO2 bottomed out at around 190 ppm.', 'co2-glacial-minimum-typical', 'agrees'],
+  ])('%s', (sentence, value, verdict) => {
+    expect(judge(sentence)).toEqual({ value, verdict });
+  });
+
+  it.each([
+    // No recurring period named: the peak of the whole record.
+    ['Across the whole ice-core record, CO2 peaked at roughly 360 ppm before industry.', 'co2-highest-preindustrial-800kyr', 'conflicts'],
+    // A superlative is the record's ceiling, whichever interglacial reached it.
+    ['The highest level in the ice, about 380 ppm, came in one of the interglacials.', 'co2-highest-preindustrial-800kyr', 'conflicts'],
+  ])('the ceiling of the record stays: %s', (sentence, value, verdict) => {
+    expect(judge(sentence)).toEqual({ value, verdict });
+  });
+});
