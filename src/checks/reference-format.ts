@@ -66,5 +66,17 @@ export function correctionFor(r: ReferenceValue, q: Quantity): string {
   if (def === undefined || (def.factor === 1 && def.offset === 0)) return r.wording;
   if (r.central === undefined) return formatRange(r.low, r.high, unit);
   // Four significant digits: a correction restates a reference value, it does not add precision.
-  return `about ${formatAmount(Number(fromCanonical(r.central, unit).toPrecision(4)), unit)}`;
+  const shown = Number(fromCanonical(r.central, unit).toPrecision(4));
+  // A length measured to the metre that the draft's larger unit turns into a decimal ("3.623 km" of
+  // 3,623 m, "3.27 km" of 3,270 m) is rounded as an editor would write it, with the figure as the
+  // source gives it beside it: "about 3.6 km (3,623 metres)".
+  if (q.dimension === 'length' && Number.isInteger(r.central) && Math.abs(r.central) >= 1000 && decimalPlaces(shown) >= 2) return `about ${formatAmount(Number(shown.toPrecision(2)), unit)} (${r.wording})`;
+  return `about ${formatAmount(shown, unit)}`;
+}
+
+/** How many digits a number has after its decimal point. */
+function decimalPlaces(n: number): number {
+  const text = String(n);
+  const point = text.indexOf('.');
+  return point < 0 || text.includes('e') ? 0 : text.length - point - 1;
 }

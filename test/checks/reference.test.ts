@@ -77,6 +77,14 @@ describe('checkReferences', () => {
     expect(flag).toMatchObject({ claimed: { low: 395, high: 405, unit: 'kyr' }, reference: { text: '790–810 kyr', low: 790, high: 810, unit: 'kyr' }, correction: 'about 800 kyr' });
   });
 
+  it('rounds a depth measured to the metre in kilometres as an editor would, with the metres beside it', () => {
+    // Vostok drilled to 3,623 m (Petit et al. 1999, doi 10.1038/20859); EPICA Dome C to 3,270 m (Lüthi et al. 2008, doi 10.1038/nature06949).
+    const deep = 'The Vostok borehole went down some 4.1 km.';
+    expect(check(deep, q(deep, '4.1 km', 'length', 4050, 4150, 'km')).flags[0]?.correction).toBe('about 3.6 km (3,623 metres)');
+    const shallow = 'EPICA Dome C was drilled to a depth of 2.2 km.';
+    expect(check(shallow, q(shallow, '2.2 km', 'length', 2150, 2250, 'km')).flags[0]?.correction).toBe('about 3.3 km (about 3,270 metres)');
+  });
+
   it('converts temperature differences to °F for a draft that writes °F', () => {
     // 1 K difference = 1.8 °F difference (NIST SP 811 B.8). West Antarctica 8-13 K (Buizert et al. 2021; Cuffey et al. 2016).
     const s = 'West Antarctica was 5 °F colder then.';
