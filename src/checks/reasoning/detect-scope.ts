@@ -52,6 +52,9 @@ const ELLIPSIS_CLOSERS = new Set(['too', 'also', 'likewise']);
 /** Contrast words that, opening a sentence, link it to the one before ("But the core shows..."). */
 const CONNECTIVES = new Set(['but', 'yet']);
 
+/** Words that count a multiple without a figure ("many times", "several times the global swing"). */
+const MULTIPLE_COUNTS = new Set(['many', 'several', 'few', 'some', 'numerous', 'umpteen']);
+
 /** Words before "local" or "regional" that put the place away from it ("far from local influences"). */
 const AWAY_FROM = new Set(['far from', 'free of', 'free from', 'away from', 'immune to', 'shielded from', 'sheltered from']);
 
@@ -65,7 +68,11 @@ function detectRegional(input: DetectInput): Cue[] {
   const recordIn = (r: typeof here | undefined) =>
     r !== undefined && (regionalRecords(r.s).length > 0 || r.s.words.some((w) => /^(?:deuterium|isotope|isotopes)$/u.test(w.text)));
   // "This tells us that the whole Earth was 9 °C colder": the record read may be named one sentence back.
-  const record = recordIn(here) || (readsBack(s.text) && recordIn(read(index - 1)));
+  // "Q13. What does the Vostok record tell us? / It is a direct record of global mean temperature": an
+  // answer opening on a pronoun reads the record its question asks about (named in the question, or
+  // in the sentence before a question that points back to it: "The GRIP curve swings 20 °C. What does
+  // this tell us?").
+  const record = recordIn(here) || (readsBack(s.text) && recordIn(read(index - 1))) || (answersOnPronoun(s.text) && askedAbout(index, read, recordIn));
   // A record in one clause and the globe in the next ("At Dome C, ...: for the planet as a whole, ...")
   // set the two side by side; only a record and the globe in one clause equate them.
   const recordClauses = new Set(regionalRecords(s).map((h) => s.words[h.first]?.clause));
@@ -101,7 +108,7 @@ function detectRegional(input: DetectInput): Cue[] {
   // ("the Vostok core shows that global...", "...is a fair measure of how much the whole Earth warmed").
   const readAs = (g: { first: number; last: number }) =>
     records.some((r) => {
-      if (s.words[r.first]?.segment === s.words[g.first]?.segment) return true;
+      if (s.words[r.first]?.segment === s.words[g.first]?.segment || appositionJoins(s, r, g)) return true;
       const [from, to] = r.first < g.first ? [r.last + 1, g.first] : [g.last + 1, r.first];
       return s.words.slice(from, to).some((w) => reading.has(w));
     });
@@ -127,6 +134,10 @@ function detectRegional(input: DetectInput): Cue[] {
     // "so thats how much the whole planet warmed": the demonstrative copula after an inference word too.
     const body = INFERENCE.has(opener) ? own.slice(1) : own;
     const copula = (body[0]?.text === 'that' || body[0]?.text === 'this') && /^(?:is|was)$/u.test(body[1]?.text ?? '');
+    // "...Dome C chart on our website: it's the global temperature record": after a record named earlier
+    // in its sentence, "it" stands for that record as "that" does (a sentence of its own may open on the
+    // "it" of the weather: "It was 6 °C colder worldwide").
+    const pronoun = (body[0]?.text === 'it' && /^(?:is|was)$/u.test(body[1]?.text ?? '')) || /^it['’]s$/u.test(body[0]?.text ?? '');
     const same = own.some((w) => w.text === 'same');
     // "In other words, the whole planet was nine or ten degrees colder": a restatement (cue words
     // `restatement`) just before the globe's segment hands it what was said before, as "so" does.
@@ -134,7 +145,7 @@ function detectRegional(input: DetectInput): Cue[] {
     // "..., so did the planet", "as did the whole Earth", "and the globe did too": an elliptic clause
     // whose subject is the globe repeats the record's own change for it.
     const elliptic = (ELLIPSIS_OPENERS.has(opener) && ELLIPSIS_AUX.has(own[1]?.text ?? '')) || (ELLIPSIS_AUX.has(own.at(-2)?.text ?? '') && ELLIPSIS_CLOSERS.has(own.at(-1)?.text ?? ''));
-    if (records.some((r) => (s.words[r.first]?.segment ?? 0) < segment)) return copula || same || inference || elliptic;
+    if (records.some((r) => (s.words[r.first]?.segment ?? 0) < segment)) return copula || pronoun || same || inference || elliptic;
     // "Greenland was about 20 degrees colder. So the planet as a whole was roughly 20 degrees
     // colder": an inference that hands the record's own figure, named in the sentence before, to
     // the globe. A figure of the globe's own ("So the globe cooled about 5") scales, and passes.
@@ -185,7 +196,12 @@ function detectRegional(input: DetectInput): Cue[] {
     if (s.of('order', 'together').some((t) => t.first === word && s.of('changes').some((m) => m.last === word - 1))) return false;
     const next = s.words.findIndex((w) => w.start >= c.end);
     const previous = s.words.filter((w) => w.end <= c.start).at(-1)?.text;
-    if (phrase === 'than') return next >= 0 && places.some((p) => p.first >= next && p.first - next <= 4);
+    // "more than 20 degrees on the Greenland panel": a "than" before a figure bounds the figure; it sets
+    // no place against another, whatever place follows the figure.
+    if (phrase === 'than') return next >= 0 && figuresIn(s, next, next + 2).length === 0 && places.some((p) => p.first >= next && p.first - next <= 4);
+    // "warmer than pre-industrial times", "in glacial times": "times" is a multiple only after a count
+    // ("two times", "1.5 times"); after any other word it names an era.
+    if (phrase === 'times' && figuresIn(s, word - 1, word).length === 0 && !MULTIPLE_COUNTS.has(previous ?? '')) return false;
     // "so I'd put 9 on the poster not 6": "not" before a figure after the record and the globe
     // corrects a figure; it sets no place apart.
     if (phrase === 'not' && next > Math.max(global.last, ...records.map((r) => r.last)) && figuresIn(s, next, next + 1).length > 0) return false;
@@ -195,6 +211,9 @@ function detectRegional(input: DetectInput): Cue[] {
     // "..., isn't it?": the "not" of a closing tag question before its last word negates nothing.
     if (phrase === 'not' && s.question && next === s.words.length - 1) return false;
     if (phrase === 'not' || phrase === 'only') return !/^(?:just|only|merely|simply)$/u.test(s.words[next]?.text ?? '') && previous !== 'not';
+    // "Dome C and WAIS Divide are both Antarctic sites": a "both" joining records of one kind, with no
+    // global word in its reach, sets nothing against the globe.
+    if (phrase === 'both' && records.some((r) => r.first > word && r.first - word <= 2) && !(global.first > word && global.first - word <= 4)) return false;
     // "doubles as a history of...": serving as, no multiple.
     if (s.words[next]?.text === 'as' && /^doubl/u.test(phrase)) return false;
     // "far from local influences": a place said to be free of the local is no contrast with the globe.
@@ -203,6 +222,10 @@ function detectRegional(input: DetectInput): Cue[] {
     // "..., which we will adopt as the benchmark": the future reaches only the segment it stands in.
     if (phrase === 'will' || phrase === 'would') {
       const at = s.words.find((w) => w.start >= c.start)?.segment;
+      // "Our site's isotopes will give the global temperature": a record that will be read as the globe
+      // (a reading verb just after the future, no CO2 in the segment) is still read as it.
+      const readsNext = [...reading].some((w) => w.segment === at && w.start > c.start && s.words.indexOf(w) - word <= 2);
+      if (readsNext && records.some((r) => s.words[r.first]?.segment === at) && !s.of('entities', 'co2').some((h) => s.words[h.first]?.segment === at)) return false;
       return at === s.words[global.first]?.segment || records.some((r) => s.words[r.first]?.segment === at);
     }
     return true;
@@ -228,6 +251,63 @@ function detectRegional(input: DetectInput): Cue[] {
   const next = s.words.slice(global.last + 1, global.last + 4).findIndex((w) => /^(?:temperatures?|climate|average|mean|warming|cooling)$/u.test(w.text));
   const last = next < 0 ? global.last : global.last + 1 + next;
   return [{ start: s.words[global.first]?.start ?? 0, end: s.words[last]?.end ?? 0 }];
+}
+
+/** Words that open an apposition after a comma ("Dome Fuji, a single spot on the plateau, ..."). */
+const APPOSITION_OPENERS = new Set(['the', 'a', 'an']);
+
+/**
+ * Record `r` and global words `g` are one reading across an apposition: the record ends its segment
+ * (within two words: "The Dome Fuji core"), the next segment, in the same clause, opens on an article,
+ * and the globe stands in the segment after it, which resumes the record's clause ("Dome Fuji, a single
+ * spot on the East Antarctic plateau, effectively hands us the global mean temperature"). A segment
+ * opening on a link ("so", "but", "and", "that") is a clause of its own, no resumption. (The globe
+ * inside the apposition itself, "Vostok, the closest thing to a global thermometer, ...", is left
+ * alone: the validation split's false flags rose with it.)
+ */
+function appositionJoins(s: ReadSentence, r: { first: number; last: number }, g: { first: number }): boolean {
+  const at = s.words[r.first];
+  const there = s.words[g.first];
+  if (at === undefined || there === undefined || at.clause !== there.clause || there.segment !== at.segment + 2) return false;
+  const lastOf = (k: number) => s.words.findLastIndex((w) => w.segment === k);
+  const firstOf = (k: number) => s.words.find((w) => w.segment === k);
+  if (lastOf(at.segment) - r.last > 2 || !APPOSITION_OPENERS.has(firstOf(at.segment + 1)?.text ?? '')) return false;
+  const resumed = firstOf(at.segment + 2);
+  return resumed !== undefined && resumed.clause === at.clause && !INFERENCE.has(resumed.text) && !CONNECTIVES.has(resumed.text) && !POINTING_BACK.has(resumed.text) && resumed.text !== 'and';
+}
+
+/** An answer's opening: an item label ("A16.", "Answer:", "*A:") and then a pronoun standing for what was asked about. */
+const ANSWER_PRONOUN = /^\W*(?:\p{L}{1,8}\d{0,3}[.:)]\W*)?(?:it|this|that|these|those|they)(?![\p{L}])/iu;
+
+/** True when `text` opens, past an answer's label, on a pronoun ("It shows...", "*Answer: It is...*"). */
+function answersOnPronoun(text: string): boolean {
+  return ANSWER_PRONOUN.test(text);
+}
+
+/**
+ * True when the sentence before sentence `index` is a question about a record (`recordIn`): one that
+ * names it, or that points back to the sentence before it ("What does this tell us?") which does.
+ */
+function askedAbout(index: number, read: DetectInput['read'], recordIn: (r: ReturnType<DetectInput['read']>) => boolean): boolean {
+  const question = questionBefore(index, read);
+  if (question === undefined) return false;
+  if (recordIn(question.reading)) return true;
+  const pointsBack = question.s.words.some((w) => POINTING_BACK.has(w.text) || w.text === 'it');
+  return pointsBack && recordIn(read(question.at - 1));
+}
+
+/** An item label read as a sentence of its own ("A16.", "Q3)"): one word of letters and digits. */
+const ITEM_LABEL = /^\W*\p{L}{0,8}\d{1,3}[.:)]?\W*$/u;
+
+/**
+ * The question sentence `index` answers: the sentence before it when that is a question, past an item
+ * label of the answer's own ("Q16. How much colder ...? A16. About 20 °C ..."). `at` is its index.
+ */
+function questionBefore(index: number, read: DetectInput['read']): { s: ReadSentence; reading: ReturnType<DetectInput['read']>; at: number } | undefined {
+  let at = index - 1;
+  if (ITEM_LABEL.test(read(at)?.s.text ?? '')) at -= 1;
+  const reading = read(at);
+  return reading !== undefined && reading.s.question ? { s: reading.s, reading, at } : undefined;
 }
 
 /**
@@ -476,8 +556,43 @@ function detectCarriedOrder(input: DetectInput): Cue[] {
   return [];
 }
 
+/**
+ * A question about the whole planet's temperature answered from a regional record: the answer names
+ * no globe of its own (its subject is the question's) but a record and one temperature figure, with
+ * no contrast.
+ *
+ *   "How much colder was the whole planet at the glacial maximum? About 20 °C, straight from the GISP2 core."
+ *                                                                  ^^^^^ flagged
+ * A question that names a record itself ("How much colder was Greenland?") is answered for that record.
+ */
+function detectAnsweredFromRecord(input: DetectInput): Cue[] {
+  const { index, read, words } = input;
+  const here = read(index);
+  const question = questionBefore(index, read);
+  if (here === undefined || question === undefined || here.s.question) return [];
+  const s = here.s;
+  if (s.of('regions', 'global').length > 0 || regionalRecords(s).length === 0) return [];
+  const q = question.s;
+  if (q.of('regions', 'global').length === 0 || regionalRecords(q).length > 0) return [];
+  const asks = q.of('entities', 'temperature').length + q.of('changes', 'warm').length + q.of('changes', 'cool').length > 0 || q.words.some((w) => TEMPERATURE_WORDS.test(w.text));
+  const figures = parseQuantities(s.text).filter((f) => f.dimension.startsWith('temperature'));
+  if (!asks || figures.length !== 1) return [];
+  const sentence = input.sentence;
+  const times = findPhrases(sentence, words('time-comparison'));
+  const contrast = findPhrases(sentence, words('contrast')).filter((c) => !times.some((t) => t.first <= c.first && t.last >= c.last));
+  if (contrast.length > 0) return [];
+  const figure = figures[0] as (typeof figures)[number];
+  return [{ start: figure.start, end: figure.end }];
+}
+
 /** `scope.regional-record-as-global` for the registry. */
-export const regionalRecordAsGlobal: DetectorEntry = { detect: detectRegional, keys: [] };
+export const regionalRecordAsGlobal: DetectorEntry = {
+  detect: (input) => {
+    const found = detectRegional(input);
+    return found.length > 0 ? found : detectAnsweredFromRecord(input);
+  },
+  keys: [],
+};
 
 /** `scope.antarctic-lag-as-global` for the registry. */
 export const antarcticLagAsGlobal: DetectorEntry = {
