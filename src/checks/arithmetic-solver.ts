@@ -340,9 +340,12 @@ export function paceRatiosInParagraph(text: string, qs: Quantity[], earlier: rea
     const near = reads.find((r) => PACE_DIMENSIONS.some((d) => ratesOf(r, d).length > 0));
     const dimension = PACE_DIMENSIONS.find((d) => near !== undefined && ratesOf(near, d).length > 0);
     if (near === undefined || dimension === undefined) return [];
-    // The paces of the nearest sentence that gives one; a pace told only as an amount that recurs
-    // there ("we add about 2.4 ppm every single year") is set against the paces of the sentence before too.
-    const told = recurringPaces(near, dimension).length > 0 && ratesOf(near, dimension).length === 1;
+    // The paces of the nearest sentence that gives one; when that sentence or the one before it tells
+    // its pace only as an amount that recurs ("we add about 2.4 ppm every single year"), the paces of
+    // the two sentences are set against each other.
+    const before = reads.find((r) => r.distance === near.distance + 1);
+    const recurs = (r: Read | undefined): boolean => r !== undefined && recurringPaces(r, dimension).length > 0 && ratesOf(r, dimension).length === 1;
+    const told = recurs(near) || recurs(before);
     const paces = reads.filter((r) => r.distance >= near.distance && r.distance <= near.distance + (told ? 1 : 0)).flatMap((r) => ratesOf(r, dimension));
     const candidates: Candidate[] = [];
     for (const [i, a] of paces.entries()) {
