@@ -18,7 +18,7 @@ import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragra
 import { amountsAtPace, changesFromLevels, paceRatiosInParagraph, paceRatiosInSentence, ratesInParagraph } from './arithmetic-solver.js';
 import { readArithmetic } from './arithmetic-reader/relations.js';
 import { seriesSpacings } from './arithmetic-counts.js';
-import { holdsPhrase, namesPart, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
+import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
 /** A stated quantity next to the value the draft's other numbers give it. */
@@ -108,7 +108,7 @@ function pairChanges(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {
   return pairs.flatMap((p) => {
     const [a, b] = ends(qs, p);
     // "from 190 to 280 ppm, with the sharpest jump of 40 ppm": a part of the change is no restatement of it.
-    const part = (q: Quantity): boolean => q.start > b.end && namesPart(wordsIn(text, b.end, q.start));
+    const part = (q: Quantity): boolean => q.start > b.end && holdsPhrase(wordsIn(text, b.end, q.start), WORDS.part);
     const stated = only(others(qs, p).filter((q) => sameChangeUnit(q, a, b) && isStatedChange(text, q) && !part(q)));
     if (stated === undefined) return [];
     return [{ stated, computed: facing(minus(w(b), w(a)), stated.value), measures: `the change ${words(a, b)}` }];

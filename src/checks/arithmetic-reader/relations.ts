@@ -19,7 +19,7 @@ import type { Quantity } from '../../types.js';
 import { disjoint } from '../arithmetic-levels.js';
 import { divide, facing, invert, minus, rangeSpan, size, type Derived } from '../arithmetic-derive.js';
 import { readParagraph, type Figure } from './roles.js';
-import { holdsPhrase, namesPart, WORDS, wordsIn } from './word-classes.js';
+import { holdsPhrase, WORDS, wordsIn } from './word-classes.js';
 
 /** A result the reader found wrong: the stated figure, the value its inputs give, what that value measures, and the rule it falls under. */
 export interface ReaderFinding {
@@ -105,7 +105,7 @@ function isTied(f: Figure, text: string, lastInput: number): boolean {
   // Inputs only in the sentences before, set against each other by the multiple's own sentence
   // ("today's rise compared with the deglacial average": "with" here is no part word).
   if (lastInput < 0 && f.role === 'multiple' && holdsPhrase(words, WORDS.setAgainst)) return true;
-  if (words.some((w) => CONTRAST.includes(w.text)) || namesPart(words)) return false;
+  if (words.some((w) => CONTRAST.includes(w.text)) || holdsPhrase(words, WORDS.part)) return false;
   // A semicolon closes the clause of the figures, except for what is left of them ("...; the remaining 50")
   // and for a clause that says it draws on them ("...; the polar change was therefore three times").
   const stretch = text.slice(Math.max(0, lastInput), f.q.start);

@@ -74,13 +74,7 @@ const BACK_REFERENCES = ['that', 'this', 'those', 'these', 'then', 'such', 'from
  * Words that make a result one part of the change before it ("with the sharpest jump of 40 ppm",
  * "including a rise of", "the first 1,500 years"): a part is no restatement of the whole.
  */
-const PART = ['with', 'including', 'includes', 'included', 'among', 'within', 'of which', 'largest', 'biggest', 'sharpest', 'steepest', 'fastest', 'greatest', 'smallest', 'first', 'final', 'single', 'individual', 'part', 'portion', 'share', 'half'];
-/**
- * Words that make a result one of several like it ("each step of 10 ppm", "every one of the jumps"):
- * a part only when a change noun or "of", or the figure itself, follows them. Before any other noun
- * they say the result recurs ("the jump out of each ice age"), no part of it.
- */
-const DISTRIBUTIVES = ['each', 'every'];
+const PART = ['with', 'including', 'includes', 'included', 'among', 'within', 'of which', 'largest', 'biggest', 'sharpest', 'steepest', 'fastest', 'greatest', 'smallest', 'first', 'final', 'single', 'individual', 'each', 'every', 'part', 'portion', 'share', 'half'];
 /** Verbs that set a figure as the complement of their subject ("the rise was 90 ppm"). */
 const COPULAS = ['is', 'was', 'were', 'are', 'be', 'been', 'being', "'s", 'stood', 'stands', 'came', 'comes', 'amounted', 'amounts'];
 /** Adjectives that make an amount one that recurs each year ("the yearly increase was 0.8 ppm"): a rate per year. */
@@ -158,7 +152,6 @@ export const WORDS = {
   ownPeriod: new Set(OWN_PERIOD),
   negations: new Set(NEGATIONS),
   part: PART,
-  distributives: new Set(DISTRIBUTIVES),
   baseAfter: new Set(BASE_AFTER),
   baseKind: formsOf(BASE_KIND),
   sequence: new Set(SEQUENCE),
@@ -195,20 +188,6 @@ export function wordsIn(text: string, from: number, to: number): Word[] {
     out.push({ text: m[0].toLowerCase().replace(/\.$/u, ''), start: from + (m.index ?? 0), end: from + (m.index ?? 0) + m[0].length });
   }
   return out;
-}
-
-/**
- * True when the words make what follows them a part of a change before it: a part word ("the
- * largest", "including"), or "each"/"every" before a change noun, "of", or the figure (the words'
- * end): "each step of", "each of", "10 ppm each" read so; "each ice age", "every cycle" do not.
- */
-export function namesPart(words: readonly Word[]): boolean {
-  if (holdsPhrase(words, PART)) return true;
-  return words.some((x, i) => {
-    if (!DISTRIBUTIVES.includes(x.text)) return false;
-    const next = words[i + 1]?.text;
-    return next === undefined || next === 'of' || next === 'one' || WORDS.changeNouns.has(next);
-  });
 }
 
 /** True when the words hold one of `phrases` (single words or word sequences) as whole words. */
