@@ -283,9 +283,37 @@ const COMPARED_ALONE = new RegExp(String.raw`^${S}*(?:higher|lower|more|less|gre
 /** r as a percentage change (r − 1) × 100. */
 const percentOf = (r: Derived): Derived => ({ value: (r.value - 1) * 100, low: (r.low - 1) * 100, high: (r.high - 1) * 100 });
 
-/** The rates a sentence gives: stated, or a change over the time it took. A rate of a time that reaches the present is left out. */
+/** The dimensions of a pace. */
+const PACE_DIMENSIONS: Dimension[] = ['concentration-rate', 'temperature-rate', 'length-rate'];
+/** Two paces within this factor of each other are one pace told twice ("0.013 ppm per year, roughly 1.3 ppm per century"), no pair to set against each other. */
+const RESTATED = 1.25;
+
+/** Years in one of the units of time an amount may recur in ("2.4 ppm every single year", "a metre each century"). */
+const YEARS_IN: Record<string, number> = { year: 1, yr: 1, annum: 1, decade: 10, century: 100, millennium: 1000 };
+/** The unit of time right after an amount that recurs in it: "every single year", "each decade", "per century", "a year". */
+const RECURS_IN = new RegExp(String.raw`^${S}+(?:of${S}+[\p{L}\p{N}₂]+${S}+)?(?:a|an|per|each|every)${S}+(?:single${S}+)?(year|yr|annum|decade|century|millennium)(?![\p{L}])`, 'iu');
+
+/**
+ * The paces a sentence gives as an amount that recurs in a unit of time ("today we add about 2.4
+ * ppm every single year", "it climbs a metre each century"): the amount over the years of that unit,
+ * in the rate's canonical unit per year.
+ */
+function recurringPaces(s: Read, dimension: Dimension): Candidate[] {
+  const amountDim = RATE_OF[dimension];
+  if (amountDim === undefined) return [];
+  return s.qs.flatMap((q) => {
+    if (q.dimension !== amountDim && LEVEL_OF[q.dimension] !== amountDim) return [];
+    const recurs = RECURS_IN.exec(s.text.slice(q.end, q.end + 40));
+    const years = recurs === null ? undefined : YEARS_IN[(recurs[1] ?? '').toLowerCase()];
+    if (recurs === null || years === undefined) return [];
+    const d = size(w(q));
+    return [{ value: { value: d.value / years, low: d.low / years, high: d.high / years }, measures: `${q.text}${recurs[0]}`, distance: s.distance }];
+  });
+}
+
+/** The rates a sentence gives: stated, told as an amount that recurs, or a change over the time it took. A rate of a time that reaches the present is left out. */
 function ratesOf(s: Read, dimension: Dimension): Candidate[] {
-  const stated = s.qs.filter((q) => q.dimension === dimension).map((q) => ({ value: w(q), measures: q.text, distance: s.distance }));
+  const stated = [...s.qs.filter((q) => q.dimension === dimension).map((q) => ({ value: w(q), measures: q.text, distance: s.distance })), ...recurringPaces(s, dimension)];
   const changeDim = RATE_OF[dimension];
   if (changeDim === undefined || OWN_TIME.test(s.text) || s.qs.some((q) => q.dimension === 'age' && q.high < 0)) return stated;
   // A stated rate whose own sentence gives another ("90 ppm over 7,000 yrs, so about 0.13 ppm per
@@ -305,14 +333,31 @@ export function paceRatiosInParagraph(text: string, qs: Quantity[], earlier: rea
   const reads = readAll(text, qs, [], earlier).slice(1);
   // "... rising by about 2.5 ppm per year, while in the deglaciation it rose by about 0.01 ppm per
   // year. That is some 25 times faster.": no pace here, both in the nearest sentence that gives one.
+  // A pace may be told as an amount that recurs ("we add about 2.4 ppm every single year"), and the
+  // two paces may stand in two sentences; two readings of one pace ("0.013 ppm per year, roughly 1.3
+  // ppm per century") restate it and give no multiple.
   if (now === undefined && qs.length === 1 && isPaceRatio(text, stated) && DRAWN.test(text.slice(0, stated.start))) {
-    const near = reads.find((r) => r.qs.some((q) => RATE_OF[q.dimension] !== undefined));
-    const two = near?.qs.filter((q) => RATE_OF[q.dimension] !== undefined) ?? [];
-    const [a, b] = two as [Quantity, Quantity];
-    if (two.length !== 2 || a.dimension !== b.dimension) return [];
-    const r = divide(w(a), w(b));
-    if (r === undefined) return [];
-    const found = verdict(stated, [{ value: (stated.value < 1) === (r.value < 1) ? r : invert(r), measures: `the ratio of ${a.text} to ${b.text} in the sentence before`, distance: 1 }]);
+    const near = reads.find((r) => PACE_DIMENSIONS.some((d) => ratesOf(r, d).length > 0));
+    const dimension = PACE_DIMENSIONS.find((d) => near !== undefined && ratesOf(near, d).length > 0);
+    if (near === undefined || dimension === undefined) return [];
+    // The paces of the nearest sentence that gives one; when that sentence or the one before it tells
+    // its pace only as an amount that recurs ("we add about 2.4 ppm every single year"), the paces of
+    // the two sentences are set against each other.
+    const before = reads.find((r) => r.distance === near.distance + 1);
+    const recurs = (r: Read | undefined): boolean => r !== undefined && recurringPaces(r, dimension).length > 0 && ratesOf(r, dimension).length === 1;
+    const told = recurs(near) || recurs(before);
+    const paces = reads.filter((r) => r.distance >= near.distance && r.distance <= near.distance + (told ? 1 : 0)).flatMap((r) => ratesOf(r, dimension));
+    const candidates: Candidate[] = [];
+    for (const [i, a] of paces.entries()) {
+      for (const b of paces.slice(i + 1)) {
+        const [hi, lo] = a.value.value >= b.value.value ? [a, b] : [b, a];
+        const r = divide(hi.value, lo.value);
+        if (r === undefined || r.value < RESTATED) continue;
+        const where = a.distance === b.distance ? 'in the sentence before' : 'in the sentences before';
+        candidates.push({ value: stated.value < 1 ? invert(r) : r, measures: `the ratio of ${hi.measures} to ${lo.measures} ${where}`, distance: a.distance + b.distance });
+      }
+    }
+    const found = verdict(stated, candidates.sort((x, y) => x.distance - y.distance));
     return found === undefined ? [] : [{ stated, computed: found.value, measures: found.measures, basis }];
   }
   if (now === undefined || now.start > stated.start) return [];
@@ -408,7 +453,10 @@ export function paceRatiosInSentence(text: string, qs: Quantity[]): SolverFindin
   if (!before.every((q) => RATE_OF[q.dimension] !== undefined || q.dimension === 'number')) return [];
   if (rates.length === 2 && a.dimension !== b.dimension) return [];
   const signed = /[=≈→]/u.test(text.slice(b.end, stated.start)) || stated.hedge === '≈' || stated.hedge === '~';
-  if (!signed && !linkedBetween(text, b.end, stated.start)) return [];
+  // "2.4 ppm a year now against 0.012 a year then is about twenty times faster": two paces set
+  // against each other make the multiple that follows them their ratio, with or without a link word.
+  const against = holdsPhrase(wordsIn(text, a.end, b.start), WORDS.setAgainst) && !/[;:]/u.test(text.slice(b.end, stated.start));
+  if (!signed && !against && !linkedBetween(text, b.end, stated.start)) return [];
   // In one unit: each pace in its canonical unit, a bare figure in the unit of the pace beside it.
   const unit = rates[0];
   const inUnit = (q: Quantity): Derived => {

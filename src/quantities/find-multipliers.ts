@@ -68,7 +68,22 @@ const FRACTION = /(?<![\p{L}])(?:(?<count>a|one|two|three|four)[\s\u00A0-]+(?<pa
 /** A fraction counts only in a ratio frame: "by a third", "about half", "half as much", "a third of". */
 const FRACTION_BEFORE = /(?:^|[^\p{L}])(?:by|to|in|about|nearly|almost|roughly|only|some|around|over|than|just|cut|fell|rose|lost|gained|barely|more|less)[\s\u00A0]+$/iu;
 const FRACTION_AFTER = /^[\s\u00A0]+(?:as|of|that)(?![\p{L}])/iu;
+/**
+ * A change noun and "of" before a fraction make it a relative change: "a rise of one third", "an
+ * increase of two-thirds", "a drop of a quarter" (plurals of the nouns too).
+ */
+const FRACTION_OF_CHANGE = /(?:^|[^\p{L}])(?:rise|increase|jump|gain|climb|growth|drop|fall|decline|decrease|loss|reduction|cut|change|swing)s?[\s\u00A0]+of[\s\u00A0]+$/iu;
 const NOT_FRACTION_BEFORE = /(?:^|[^\p{L}])(?:the|first|second|latter|former|other|last|next|and|southern|northern|eastern|western)[\s\u00A0]+$/iu;
+
+/**
+ * Where a fraction written in words stands in a quantity's own text ("one third", "about two-thirds",
+ * "half"), for a correction that rewrites it: the quantity was read as a fraction in its sentence's
+ * frame, which its text alone no longer holds.
+ */
+export function fractionWordsIn(text: string): { start: number; end: number } | undefined {
+  const m = new RegExp(FRACTION.source, 'iu').exec(text);
+  return m === null ? undefined : { start: m.index, end: m.index + m[0].length };
+}
 
 function atom(start: number, end: number, value: number, half: number, rule: string): Atom {
   return { start, end, value, half, scale: 1, form: 'multiplier', rule, plainInteger: false, sign: '' };
@@ -89,7 +104,7 @@ function fractionAtom(text: string, m: RegExpExecArray): Atom | undefined {
   const end = m.index + m[0].length;
   const before = text.slice(Math.max(0, m.index - 24), m.index);
   if (NOT_FRACTION_BEFORE.test(before)) return undefined;
-  if (!FRACTION_BEFORE.test(before) && !FRACTION_AFTER.test(text.slice(end, end + 8))) return undefined;
+  if (!FRACTION_BEFORE.test(before) && !FRACTION_OF_CHANGE.test(before) && !FRACTION_AFTER.test(text.slice(end, end + 8))) return undefined;
   const g = m.groups ?? {};
   const value = g['half'] !== undefined ? 0.5 : (COUNTS[(g['count'] ?? '').toLowerCase()] ?? 1) * (FRACTIONS[(g['part'] ?? '').toLowerCase()] ?? Number.NaN);
   return atom(m.index, end, value, 0, 'multiplier-word');

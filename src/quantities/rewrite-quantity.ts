@@ -6,6 +6,7 @@
 import type { Quantity } from '../types.js';
 import { fromCanonical } from './convert.js';
 import { findAtoms } from './find-atoms.js';
+import { fractionWordsIn } from './find-multipliers.js';
 import { formatNumber, formatQuantity } from './format-quantity.js';
 
 /** Significant digits as written: "11,703" → 5, "10,000" → 1, "0.040" → 2. */
@@ -46,6 +47,12 @@ function multipleFigures(x: number): number {
  * by default as many as the draft wrote, and at least 3.
  */
 export function rewriteQuantity(q: Quantity, value: number, significant?: number): string {
+  // "a rise of one third" corrected to 0.5 reads "a rise of 50 percent", not "0.5 third".
+  const fraction = q.dimension === 'ratio' && !/\d/u.test(q.text) ? fractionWordsIn(q.text) : undefined;
+  if (fraction !== undefined) {
+    const shown = Math.abs(value) < 1 ? `${formatNumber(value * 100, 2)} percent` : `${formatNumber(value, multipleFigures(value))} times`;
+    return q.text.slice(0, fraction.start) + shown + q.text.slice(fraction.end);
+  }
   const atoms = findAtoms(q.text);
   const atom = atoms[0];
   const figures = significant ?? correctionFigures(q);

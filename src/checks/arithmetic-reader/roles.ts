@@ -37,7 +37,12 @@ export interface Figure {
 const LEVEL_FAMILY: Partial<Record<Dimension, string>> = { concentration: 'concentration', temperature: 'temperature', 'temperature-change': 'temperature', length: 'length', count: 'count', number: 'number' };
 const RATES: Dimension[] = ['concentration-rate', 'temperature-rate', 'length-rate'];
 /** Words that may stand between a change word and its figure without changing what it is. */
-const FILLERS = new Set(['only', 'just', 'barely', 'merely', 'mere', 'a', 'an', 'the', 'by', 'of', 'some', 'another', 'good', 'full', 'whole', 'measly', 'extra', 'order']);
+/**
+ * Loose hedges the quantity reader leaves outside the number ("went up by something like 130 ppm",
+ * "added like 200 ppm", "rose somewhere about 90") (common practice: English approximators).
+ */
+const LOOSE_HEDGES = new Set(['something', 'like', 'somewhere']);
+const FILLERS = new Set(['only', 'just', 'barely', 'merely', 'mere', 'a', 'an', 'the', 'by', 'of', 'some', 'another', 'good', 'full', 'whole', 'measly', 'extra', 'order', ...LOOSE_HEDGES]);
 
 /** The first words after the figure, up to the next figure or the end of its clause. */
 function wordsAfter(text: string, q: Quantity, next: Quantity | undefined): Word[] {
@@ -69,7 +74,7 @@ function changeBefore(before: Word[]): number | undefined {
   const particle = WORDS.particles.get(word.text);
   // "up 124 ppm", "up by a third", but not "has taken up a quarter": a particle of a phrasal verb is no change.
   const at = before.lastIndexOf(word);
-  const byOnly = before.slice(at + 1).every((x) => x.text === 'by');
+  const byOnly = before.slice(at + 1).every((x) => x.text === 'by' || LOOSE_HEDGES.has(x.text));
   if (particle !== undefined && byOnly && !WORDS.phrasalHeads.has(before.at(at - 1)?.text ?? '')) return particle;
   // "a jump of about", "an increase of roughly".
   if (last === 'of') {

@@ -41,6 +41,8 @@ const LINKS = [
   'comes to', 'came to', 'come to', 'works out', 'worked out', 'amounts to', 'amounted to', 'all told', 'in all', 'in total', 'total', 'totalling', 'totaling',
   'adds up to', 'add up to', 'added up to', 'comes out at', 'came out at', 'come out at', 'works out at', 'worked out at',
   'call it', 'in other words', 'put another way', 'put differently', 'that makes', 'which makes', 'net', 'altogether', 'overall',
+  // The same contraction with its apostrophe left out, as informal posts write it ("280 to 424 thats +144").
+  'thats',
 ];
 /** Words after a span of time that place it between the date before and the date of its clause ("some 4,500 years later"). */
 const LATER = ['later', 'earlier', 'afterwards', 'afterward', 'on'];
@@ -67,7 +69,7 @@ const SEQUENCE = ['after', 'afterwards', 'then', 'which', 'followed', 'until', '
  * Words that refer back to what the sentence before said ("above that", "by then"). A pronoun for
  * the subject ("it", "its") is not enough: it carries the thing over, not the figure.
  */
-const BACK_REFERENCES = ['that', 'this', 'those', 'these', 'then', 'such'];
+const BACK_REFERENCES = ['that', 'this', 'those', 'these', 'then', 'such', 'from there', 'from here'];
 /**
  * Words that make a result one part of the change before it ("with the sharpest jump of 40 ppm",
  * "including a rise of", "the first 1,500 years"): a part is no restatement of the whole.
