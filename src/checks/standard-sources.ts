@@ -89,5 +89,16 @@ export const HAYS_1976: Source = {
   how: 'read in the source: spectral peaks at 42,000-43,000, 24,000 and 19,500 years and near 100,000 years (DOI from memory)',
 };
 
+/**
+ * The first lasting ice sheet on Antarctica, at the Eocene-Oligocene boundary about 34 million years
+ * ago: no ice on Earth today is older than that.
+ */
+export const ZACHOS_2001: Source = {
+  id: 'zachos-2001',
+  cite: 'Zachos, J., Pagani, M., Sloan, L., Thomas, E. & Billups, K. (2001). Trends, rhythms, and aberrations in global climate 65 Ma to present. Science 292, 686-693.',
+  doi: '10.1126/science.1059412',
+  how: 'from memory',
+};
+
 /** Every standard source, by id, for reporters and `firnline explain`. */
-export const STANDARD_SOURCES: readonly Source[] = [NIST_SP_811, BP_CONVENTION, B2K_CONVENTION, LUTHI_2008, NOAA_2024, CLARK_2009, YAN_2019, HAYS_1976];
+export const STANDARD_SOURCES: readonly Source[] = [NIST_SP_811, BP_CONVENTION, B2K_CONVENTION, LUTHI_2008, NOAA_2024, CLARK_2009, YAN_2019, HAYS_1976, ZACHOS_2001];

@@ -72,6 +72,20 @@ function nearestGasIsCo2(text: string, at: number, co2ByContext = false): boolea
 
 /** "Expressed as a share of the air, today's level is ...": a share of the air named in words. */
 const SHARE_OF_AIR = new RegExp(String.raw`(?:share|fraction|proportion|percentage)${S}+of${S}+${AIR}|of${S}+${AIR}`, 'iu');
+/** The air named as what holds the gas: "today's air holds", "the atmosphere contains". */
+const AIR_HOLDS = String.raw`(?:^|[^\p{L}])${AIR}${S}+(?:(?:now|today|still|only)${S}+)?(?:holds|held|contains|contained|has|had|carries|carried)(?![\p{L}])`;
+/**
+ * "today's air holds a mere 0.42 per cent of it": a figure the air holds, up to two words after
+ * the verb, is a share of the air; the gas is the one named after it, or by "it", the sentence's
+ * or the passage's gas.
+ */
+const HELD_BY_AIR = new RegExp(String.raw`${AIR_HOLDS}(?:${S}+[\p{Ll}]+){0,2}${S}*$`, 'iu');
+const GAS_PRONOUN_AFTER = new RegExp(String.raw`^${S}*of${S}+(?:it|them|this|that|the${S}+gas|that${S}+gas|this${S}+gas)(?![\p{L}])`, 'iu');
+/**
+ * "and today's level is 0.42%": a level or concentration, with no other thing named before it,
+ * completed by the figure through a copula: the gas it is of is the passage's.
+ */
+const LEVEL_IS = new RegExp(String.raw`(?:^|[^\p{L}])(?:the|its|today's|today’s|current|present|modern|our)${S}+(?:level|concentration)(?:${S}+(?:now|today|currently))?${S}+(?:is|was|sits${S}+at|stands${S}+at|stood${S}+at)${S}*(?:(?:about|around|roughly|like|only|just|some|nearly|almost)${S}+)?$`, 'iu');
 const PPM_WORDS = /(?:ppmv?|parts[\s\u00A0]+per[\s\u00A0]+million)(?![\p{L}])/iu;
 
 /**
@@ -82,7 +96,9 @@ const PPM_WORDS = /(?:ppmv?|parts[\s\u00A0]+per[\s\u00A0]+million)(?![\p{L}])/iu
  * per million. - And before industry? - Two-eighty, and that's about 2.8 percent of the air.").
  */
 function co2FromContext(text: string, earlier: readonly string[]): boolean {
-  if ([...text.matchAll(GAS)].length > 0 || !SHARE_OF_AIR.test(text)) return false;
+  const levelIs = (q: RegExpMatchArray): boolean => LEVEL_IS.test(text.slice(0, q.index ?? 0));
+  const statesShare = SHARE_OF_AIR.test(text) || new RegExp(AIR_HOLDS, 'iu').test(text) || [...text.matchAll(/\d/gu)].some(levelIs);
+  if ([...text.matchAll(GAS)].length > 0 || !statesShare) return false;
   const nearest = [...earlier].reverse().find((s) => PPM_WORDS.test(s) || [...s.matchAll(GAS)].length > 0);
   if (nearest === undefined || OTHER_GAS.test(nearest)) return false;
   // "CO2 tags along after. It's a trace gas anyway, like 0.4% of the air.": the gas the sentence
@@ -95,7 +111,14 @@ function co2FromContext(text: string, earlier: readonly string[]): boolean {
 function isCo2Share(text: string, q: Quantity, byContext = false): boolean {
   const before = text.slice(Math.max(0, q.start - 24), q.start);
   const after = text.slice(q.end, q.end + 40);
-  if (isStatedChange(text, q) || comparesToNext(text, q) || RATE_AFTER.test(after) || OF_SOMETHING_ELSE.test(after)) return false;
+  if (isStatedChange(text, q) || comparesToNext(text, q) || RATE_AFTER.test(after)) return false;
+  // A share the air holds: the gas is named after it ("of CO2"), pointed to ("of it"), or the sentence's or passage's.
+  if (HELD_BY_AIR.test(text.slice(Math.max(0, q.start - 60), q.start))) {
+    if (GAS_AFTER.test(after.replace(/^[\s\u00A0]*of(?=[\s\u00A0])/u, ''))) return true;
+    return (GAS_PRONOUN_AFTER.test(after) || !/^[\s\u00A0]*of(?![\p{L}])/u.test(after)) && nearestGasIsCo2(text, q.start, byContext);
+  }
+  if (OF_SOMETHING_ELSE.test(after)) return false;
+  if (LEVEL_IS.test(text.slice(Math.max(0, q.start - 60), q.start)) && byContext) return true;
   if (SHARE_AFTER.test(after)) return nearestGasIsCo2(text, q.start, byContext);
   // "the air holds about 0.42 percent carbon dioxide": the gas named right after the share.
   if (GAS_AFTER.test(after)) return LEVEL_BEFORE.test(before) && !CHANGE_SUBJECT.test(text.slice(0, q.start));

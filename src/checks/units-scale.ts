@@ -8,7 +8,7 @@
  * another record (a lake, rock, sediment, the ice sheet's birth) keep the rule quiet.
  */
 import type { Quantity, Source } from '../types.js';
-import { CLARK_2009, HAYS_1976, LUTHI_2008, NIST_SP_811, YAN_2019 } from './standard-sources.js';
+import { CLARK_2009, HAYS_1976, LUTHI_2008, NIST_SP_811, YAN_2019, ZACHOS_2001 } from './standard-sources.js';
 import type { UnitFinding } from './units-rules.js';
 
 /** A kind of subject with the oldest age or longest span it can have, in years. */
@@ -21,6 +21,10 @@ export interface TimescaleSubject {
   sources: Source[];
   /** When given, the figure counts only right after one of these words ("a cycle of", "every"). */
   lead?: string[];
+  /** Phrases that hold a name but name another thing ("ice age", "ice sheet" for "ice"): no name where they stand. */
+  others?: string[];
+  /** When true, only the thing's own age or the span it holds counts ("800 million years old", "holds 800 million years"), never a date ("... years ago"). */
+  spansOnly?: boolean;
 }
 
 /** Periods before the ice ages and other records whose ages run to millions of years. */
@@ -70,6 +74,20 @@ export const TIMESCALE_SUBJECTS: readonly TimescaleSubject[] = [
     ceiling: 1e7,
     sources: [HAYS_1976, NIST_SP_811],
   },
+  {
+    // Ice itself, as an archive: its own age or the span of history it holds ("ice can be 800
+    // million years old", "Antarctic ice holds 800 million years of history"). No ice on Earth is
+    // older than the first lasting Antarctic ice sheet, about 34 million years ago (Zachos et al.
+    // 2001), so a span in millions above 40 is the same number in thousands. Dates are left to the
+    // named subjects above: ice reaching a place in deep time is an event, no age of the ice.
+    what: 'ice on Earth today',
+    names: ['ice'],
+    others: ['ice age', 'ice ages', 'ice-age', 'ice sheet', 'ice sheets', 'ice cap', 'ice caps', 'ice shelf', 'ice shelves', 'sea ice', 'ice-free', 'ice free', 'icehouse', 'ice house', 'snowball'],
+    unless: [...DEEP_TIME, 'Snowball', 'Cryogenian', 'glaciation', 'glaciations', 'Mars', 'Martian', 'comet', 'comets', 'moon', 'moons', 'planet', 'planets'],
+    ceiling: 4e7,
+    spansOnly: true,
+    sources: [ZACHOS_2001, YAN_2019, NIST_SP_811],
+  },
 ];
 
 const S = String.raw`[\s\u00A0]`;
@@ -78,6 +96,7 @@ const words = (list: readonly string[]): RegExp =>
 const COMPILED = TIMESCALE_SUBJECTS.map((s) => ({
   subject: s,
   name: words(s.names),
+  others: s.others === undefined ? undefined : new RegExp(words(s.others).source, 'giu'),
   unless: words(s.unless),
   lead: s.lead === undefined ? undefined : new RegExp(String.raw`(?:^|[^\p{L}])(?:${s.lead.map((w) => w.replace(/ /g, `${S}+`)).join('|')})${S}+(?:(?:about|around|roughly|some|nearly)${S}+)?$`, 'iu'),
 }));
@@ -88,6 +107,8 @@ const SWAPS: [RegExp, string][] = [
   [/(?<![\p{L}])Myr(?![\p{L}])/u, 'kyr'],
   [/(?<![\p{L}])My(?![\p{L}])/u, 'ky'],
 ];
+/** A date counted back from now, right after its figure. */
+const AGO = /^[\s\u00A0]*(?:ago|before[\s\u00A0]+(?:present|now|today))(?![\p{L}])/iu;
 /** How far before the figure its subject may be named. */
 const REACH = 120;
 
@@ -105,10 +126,13 @@ export function scaleSlips(text: string, qs: Quantity[], previous?: string): Uni
     const swap = SWAPS.find(([re]) => re.test(q.text));
     if (swap === undefined) return [];
     const own = text.slice(Math.max(0, q.start - REACH), q.start);
-    const named = COMPILED.some(({ name }) => name.test(text));
+    // A phrase that holds the name but names another thing ("the last ice age" for "ice") is blanked first.
+    const names = (name: RegExp, others: RegExp | undefined, where: string): boolean => name.test(others === undefined ? where : where.replace(others, (m) => ' '.repeat(m.length)));
+    const named = COMPILED.some(({ name, others }) => names(name, others, text));
     const before = !named && previous !== undefined && REFERS_BACK.test(own) ? previous : own;
     const led = (lead: RegExp | undefined): boolean => lead === undefined || lead.test(text.slice(Math.max(0, q.start - 40), q.start));
-    const hit = COMPILED.find(({ subject, name, unless, lead }) => q.low > subject.ceiling && name.test(before) && !unless.test(text) && !unless.test(before) && led(lead));
+    const span = q.dimension === 'duration' && !AGO.test(text.slice(q.end, q.end + 12));
+    const hit = COMPILED.find(({ subject, name, others, unless, lead }) => q.low > subject.ceiling && (subject.spansOnly !== true || span) && names(name, others, before) && !unless.test(text) && !unless.test(before) && led(lead));
     if (hit === undefined) return [];
     const correction = q.text.replace(swap[0], swap[1]);
     const k = 1e-3;

@@ -33,14 +33,21 @@ function withNamedScale(text: string, qs: Quantity[]): Quantity[] {
   const unmarked = temperatures.length > 0 && temperatures.every((q) => UNMARKED_DEGREES.test(q.text));
   return dated.map((q) => {
     if (unmarked && temperatures.includes(q)) return inScale(q, scale);
-    const degrees = q.dimension === 'number' ? BARE_DEGREES.exec(text.slice(q.end)) : null;
-    if (degrees === null) return q;
-    const end = q.end + degrees[0].length;
-    const [read] = parseQuantities(`${text.slice(q.start, end)} ${scale}`);
+    const bare = q.dimension === 'number' ? BARE_DEGREES.exec(text.slice(q.end)) : null;
+    const after = bare ?? (q.dimension === 'number' ? IN_NAMED_SCALE.exec(text.slice(q.end)) : null);
+    if (after === null) return q;
+    const end = q.end + after[0].length;
+    const [read] = parseQuantities(bare === null ? `${q.text} degrees ${scale}` : `${text.slice(q.start, end)} ${scale}`);
     if (read === undefined || (read.dimension !== 'temperature' && read.dimension !== 'temperature-change')) return q;
     return { ...read, start: q.start, end, text: text.slice(q.start, end) };
   });
 }
+
+/**
+ * "6 degrees C of cooling is 43 in fahrenheit": a bare number followed by "in" and the scale named
+ * in words is a figure on that scale (the scale named right after the number, not on it).
+ */
+const IN_NAMED_SCALE = /^(?:[\s\u00A0]+degrees?)?[\s\u00A0]+in[\s\u00A0]+(?:degrees[\s\u00A0]+)?(?:fahrenheit|celsius|centigrade)(?![\p{L}])/iu;
 
 /** A temperature figure written as bare degrees, with no scale of its own: "about 43 degrees". */
 const UNMARKED_DEGREES = /^[^°℃℉]*[\s\u00A0]degrees?$/iu;

@@ -48,7 +48,7 @@ export const INTERVAL_RULES: readonly IntervalRule[] = [
     why: '"A couple of degrees", "a couple thousand years" = 2 to 3 of them, as people say it; the value is the middle.' },
   { id: 'several', kind: 'stated', words: ['several'], low: { s: 3 }, high: { s: 7 },
     why: '"Several millennia" = 3 to 7 millennia; the value is the middle.' },
-  { id: 'about', kind: 'hedge', words: ['about', 'around', 'roughly', 'some', 'approximately', 'approx.', '~', '∼', '≈', 'c.', 'ca.', 'circa', 'close to', 'an estimated', 'or so'], low: { L: 1, absV: -0.025 }, high: { H: 1, absV: 0.025 },
+  { id: 'about', kind: 'hedge', words: ['about', 'around', 'roughly', 'some', 'approximately', 'approx.', '~', '∼', '≈', 'c.', 'ca.', 'circa', 'close to', 'an estimated', 'or so', 'like', 'something like', 'more like'], low: { L: 1, absV: -0.025 }, high: { H: 1, absV: 0.025 },
     why: 'An approximation: the stated precision, widened by a further 2.5% of the value each way: "about 310 ppm" is 297–323 ppm, too high for the pre-industrial 278 ppm; "about 800,000 years" is 775,000–825,000 years. A 10% margin let errors of 10–15% pass.' },
   { id: 'nearly', kind: 'hedge', words: ['nearly', 'almost', 'just under', 'just below', 'not quite', 'slightly less than', 'slightly under', 'a little under', 'a little less than'], low: { L: 1, absV: -0.025 }, high: { v: 1 },
     why: 'Close to the value from below: within its stated precision under it and a further 2.5% of the value, the margin "about" adds ("nearly two ppm per century" allows 1.5; "nearly 3,800 metres" is 3,655–3,800 m, too deep for the 3,623 m Vostok reached). A 10% margin let overstatements of 5–10% pass.' },

@@ -34,7 +34,7 @@ export const ESTIMATE_WORDS: readonly string[] = ['put at', 'puts at', 'putting 
  * Antarctica between glacial and interglacial was about 9 °C", "the warming across the
  * deglaciation amounted to 8 °C". The value is a change even after "was" or "is".
  */
-export const CHANGE_SUBJECT_NOUNS: readonly string[] = ['change', 'difference', 'warming', 'cooling', 'rise', 'drop', 'fall', 'swing', 'amplitude', 'anomaly', 'shift', 'increase', 'decrease'];
+export const CHANGE_SUBJECT_NOUNS: readonly string[] = ['change', 'difference', 'warming', 'cooling', 'rise', 'drop', 'fall', 'swing', 'amplitude', 'anomaly', 'shift', 'increase', 'decrease', 'jump', 'leap', 'climb', 'plunge', 'dip', 'warm-up', 'cool-down'];
 const CHANGE_SUBJECT = new RegExp(
   String.raw`(?:^|[^\p{L}])(?:${CHANGE_SUBJECT_NOUNS.join('|')})(?:[\s\u00A0]+(?:in|of|between|across|from|during|over|at)[\s\u00A0][^,;:()]{0,80}?)?[\s\u00A0]+(?:was|were|is|are|amounted[\s\u00A0]+to|amounts[\s\u00A0]+to|came[\s\u00A0]+to|comes[\s\u00A0]+to|reached|measured)[\s\u00A0]*$`,
   'iu',
@@ -74,7 +74,7 @@ export function namesChangeBefore(clause: string): boolean {
  * Words that say the next amount is the one before in other words, when a verb does it: "which
  * works out at", "equals", "corresponds to". A change noun may follow: "equals a warming of".
  */
-export const RESTATING_VERBS: readonly string[] = ['write as', 'written as', 'expressed as', 'works out at', 'works out to', 'work out at', 'work out to', 'comes to', 'come to', 'amounts to', 'amount to', 'corresponds to', 'correspond to', 'equals', 'equal to', 'is equal to', 'is the same as', 'the same as', 'translates to', 'translates into', 'becomes', 'which makes it', 'that makes it', 'making it'];
+export const RESTATING_VERBS: readonly string[] = ['write as', 'written as', 'expressed as', ...['convert', 'converts', 'converted', 'converting'].flatMap((v) => [`${v} to`, `${v} into`]), 'works out at', 'works out to', 'work out at', 'work out to', 'comes to', 'come to', 'amounts to', 'amount to', 'corresponds to', 'correspond to', 'equals', 'equal to', 'is equal to', 'is the same as', 'the same as', 'translates to', 'translates into', 'becomes', 'which makes it', 'that makes it', 'making it'];
 /** The restating verbs as one pattern, with an optional "a warming of" after them. */
 export const RESTATING_VERB_PATTERN = String.raw`(?:${[...RESTATING_VERBS].sort((a, b) => b.length - a.length).map((w) => w.replace(/ /g, String.raw`[\s\u00A0]+`)).join('|')})(?:[\s\u00A0]+(?:a|an)[\s\u00A0]+(?:${CHANGE_SUBJECT_NOUNS.join('|')}|reading|temperature|date|level|depth)[\s\u00A0]+of)?`;
 
