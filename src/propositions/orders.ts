@@ -257,8 +257,12 @@ const SET_AGAINST = new Set(['unlike', 'like', 'not', 'versus', 'vs']);
 function setAgainst(s: ReadSentence, k: number, i: number): boolean {
   const segment = s.words[k]?.segment;
   const opener = s.words.findIndex((w) => w.segment === segment);
-  return segment !== s.words[i]?.segment && SET_AGAINST.has(s.words[opener]?.text ?? '');
+  const lead = s.words.slice(opener, opener + 3).map((w) => w.text);
+  return segment !== s.words[i]?.segment && (SET_AGAINST.has(lead[0] ?? '') || SET_AGAINST_PHRASES.has(lead.slice(0, 2).join(' ')) || SET_AGAINST_PHRASES.has(lead.join(' ')));
 }
+
+/** Phrases that open a segment setting its thing against the subject ("..., as opposed to Antarctica's, ..."). */
+const SET_AGAINST_PHRASES = new Set(['as opposed to', 'in contrast to', 'in contrast with', 'compared with', 'compared to', 'rather than', 'instead of', 'contrary to']);
 
 /** The nearest thing before word `i` in its clause, passing over one set against the subject in a segment of its own. */
 function nearestBefore(s: ReadSentence, i: number): Thing | undefined {

@@ -35,6 +35,11 @@ describe('the two sides of an order', () => {
     expect(orders).toContain('co2>temperature@global');
   });
 
+  it('a region after "as opposed to" sets no region either', () => {
+    const orders = ordersOf("In the last thaw the world's mean temperature, as opposed to Greenland's, mostly climbed after the gas did.");
+    expect(orders.filter((o) => o.endsWith('@greenland'))).toEqual([]);
+  });
+
   it.each([
     'arriving second in Antarctica does not make the gas powerless',
     'Turning up a little late in Antarctica never stopped carbon dioxide from heating the rest of the world.',
