@@ -50,15 +50,18 @@ function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Orde
   const phrase = h.base ?? s.words.slice(h.first, h.last + 1).map((w) => w.text).join(' ');
   const kind = (t: Thing | undefined) => kindOf(s, t, previous, undefined, namesRecord);
   const span = { start: s.words[h.first]?.start ?? 0, end: s.words[h.last]?.end ?? 0 };
-  const isNoun = h.first === h.last && SEQUENCE_NOUNS.has(s.words[h.first]?.text ?? '') && isNounAt(s, h.first);
+  // "the Antarctic head start": a noun of sequence in two words is a noun wherever it stands.
+  const isNoun = (h.first === h.last && SEQUENCE_NOUNS.has(s.words[h.first]?.text ?? '') && isNounAt(s, h.first)) || phrase === 'head start';
   const after = s.words[h.last + 1]?.text;
   const ofThing = after === 'of' && s.things.some((t) => t.first === h.last + 2 || t.first === h.last + 3);
   if (isNoun && after !== 'behind' && !ofThing) {
     // "Antarctica had a lead of 300 years": a lead is its subject's when only grammar words stand
     // between; "any lead or lag" names no order until its events are named.
-    if (s.words[h.first]?.text.startsWith('lead') === true) {
+    if (s.words[h.first]?.text.startsWith('lead') === true || phrase === 'head start') {
       const holder = subjectBefore(s, h.first);
-      const first = holder === undefined || namesRecord(s, holder) ? undefined : kind(holder);
+      // "the Antarctic head start", "an Antarctic lead": a region that modifies the noun is its holder.
+      const modifier = holder !== undefined && holder.region !== undefined && holder.last === h.first - 1;
+      const first = holder === undefined || (namesRecord(s, holder) && !modifier) ? undefined : kind(holder);
       const other = first === undefined ? undefined : COUNTERPART[first];
       return first === undefined || other === undefined ? undefined : withRelation('before', first, other, s, holder, span);
     }
@@ -72,11 +75,18 @@ function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Orde
   // "the warm spell that followed", "the Holocene, which came after": an order verb whose subject is a
   // relative pronoun after a period orders that period, not CO2 and temperature.
   if (ordersPeriod(s, h.first)) return undefined;
-  const event = (t: Thing | undefined) => (t !== undefined && !namesRecord(s, t) ? t : undefined);
-  let a: Thing | undefined = event(subjectBefore(s, pastMeasure(s, h.first))) ?? event(subjectOf(s, h.first)) ?? event(elidedSubject(s, h.first)) ?? event(nearestBefore(s, h.first));
+  const event = (t: Thing | undefined) => (t !== undefined && !namesRecord(s, t) && !compoundModifier(s, t) ? t : undefined);
+  // "the global warming that followed": an order verb whose subject is a relative pronoun describes
+  // the thing before it, and with no object it names nothing that thing came after.
+  const relative = RELATIVES.has(s.words[h.first - 1]?.text ?? '');
+  if (relative && thingAfter(s, h.last, 6) === undefined) return undefined;
+  const antecedent = relative ? s.things.find((t) => t.last === h.first - 2 && t.kind !== 'pronoun') : undefined;
+  let a: Thing | undefined = event(antecedent) ?? event(subjectBefore(s, pastMeasure(s, h.first))) ?? event(subjectOf(s, h.first)) ?? event(elidedSubject(s, h.first)) ?? event(nearestBefore(s, h.first));
   let b: Thing | undefined;
   if (ABSOLUTE.test(phrase)) {
-    a ??= event(thingAfter(s, h.last, 4));
+    // "coming second in Antarctica": a thing in a phrase after the order word is where, not what, came second.
+    const following = thingAfter(s, h.last, 4);
+    a ??= following === undefined || inPhrase(s, following) ? undefined : event(following);
     const first = kind(a);
     const other = first === undefined ? undefined : COUNTERPART[first];
     if (first === undefined || other === undefined) return undefined;
@@ -103,6 +113,16 @@ function orderAt(s: ReadSentence, h: LexHit, previous?: ReadSentence): Omit<Orde
   const second = kind(b);
   if (first === undefined || second === undefined || first === second) return undefined;
   return withRelation(key, first, second, s, a?.region !== undefined ? a : b, span);
+}
+
+/**
+ * A thing joined by a hyphen to a word that names no thing is a modifier of a compound ("the gas-age
+ * issue", "a CO2-free world"): it names no event of an order.
+ */
+function compoundModifier(s: ReadSentence, t: Thing): boolean {
+  const last = s.words[t.last];
+  const next = s.words[t.last + 1];
+  return last !== undefined && next !== undefined && s.text[last.end] === '-' && next.start === last.end + 1 && !s.things.some((o) => o.first === t.last + 1);
 }
 
 /** Relative pronouns that stand as the subject of the clause they open. */
@@ -233,15 +253,21 @@ function elidedSubject(s: ReadSentence, i: number): Thing | undefined {
 /** Words that open a segment setting its thing against the clause's subject ("world temperature, unlike Antarctic temperature, rose..."). */
 const SET_AGAINST = new Set(['unlike', 'like', 'not', 'versus', 'vs']);
 
+/** Word `k` stands in a segment of its own, other than word `i`'s, opened by a word that sets its thing against the subject. */
+function setAgainst(s: ReadSentence, k: number, i: number): boolean {
+  const segment = s.words[k]?.segment;
+  const opener = s.words.findIndex((w) => w.segment === segment);
+  const lead = s.words.slice(opener, opener + 3).map((w) => w.text);
+  return segment !== s.words[i]?.segment && (SET_AGAINST.has(lead[0] ?? '') || SET_AGAINST_PHRASES.has(lead.slice(0, 2).join(' ')) || SET_AGAINST_PHRASES.has(lead.join(' ')));
+}
+
+/** Phrases that open a segment setting its thing against the subject ("..., as opposed to Antarctica's, ..."). */
+const SET_AGAINST_PHRASES = new Set(['as opposed to', 'in contrast to', 'in contrast with', 'compared with', 'compared to', 'rather than', 'instead of', 'contrary to']);
+
 /** The nearest thing before word `i` in its clause, passing over one set against the subject in a segment of its own. */
 function nearestBefore(s: ReadSentence, i: number): Thing | undefined {
   const clause = s.words[i]?.clause;
-  const aside = (t: Thing) => {
-    const segment = s.words[t.first]?.segment;
-    const opener = s.words.findIndex((w) => w.segment === segment);
-    return segment !== s.words[i]?.segment && SET_AGAINST.has(s.words[opener]?.text ?? '');
-  };
-  return s.things.filter((t) => t.last < i && s.words[t.first]?.clause === clause && !aside(t)).at(-1);
+  return s.things.filter((t) => t.last < i && s.words[t.first]?.clause === clause && !setAgainst(s, t.first, i)).at(-1);
 }
 
 /** True when word `i` opens its segment, past at most a degree word ("After", "Long before", "Only once"). */
@@ -261,7 +287,9 @@ function opensSegment(s: ReadSentence, i: number): boolean {
  */
 function regionOf(s: ReadSentence, h: LexHit): string | undefined {
   const clause = s.words[h.first]?.clause;
-  const regions = s.of('regions');
+  // "the global stack, unlike Antarctica, lagged CO2, with the warming coming after CO2": a region
+  // set against the subject in an aside of its own is not where the order happened.
+  const regions = s.of('regions').filter((r) => !setAgainst(s, r.first, h.first));
   const before = regions.filter((r) => r.last < h.first);
   const inClause = before.filter((r) => s.words[r.first]?.clause === clause).at(-1);
   if (inClause !== undefined) return inClause.key;

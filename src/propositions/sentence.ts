@@ -148,7 +148,9 @@ function thingsOf(words: readonly Word[], hits: readonly LexHit[]): Thing[] {
       // "the warming", "Antarctic cooling": a temperature change named as a thing.
       const near = regions.find((r) => r.last === h.first - 1 || r.first === h.last + 2);
       things.push({ kind: 'temperature', first: h.first, last: h.last, ...(near === undefined ? {} : { region: near.key }) });
-    } else if (h.cls === 'regions' && !hits.some((o) => o.cls === 'entities' && o.key === 'temperature' && Math.abs(o.first - h.first) <= 3) && !ownsNext(words, hits, h) && !insideRegion(hits, h)) {
+    } else if (h.cls === 'regions' && !hits.some((o) => o.cls === 'entities' && o.key === 'temperature' && Math.abs(o.first - h.first) <= 3 && words[o.first]?.segment === words[h.first]?.segment) && !ownsNext(words, hits, h) && !insideRegion(hits, h)) {
+      // A temperature word near the region names it only in the region's own segment: in "global temp
+      // lagged co2, antarctica warmed earlier" Antarctica is a temperature of its own.
       things.push({ kind: 'temperature', region: h.key, first: h.first, last: h.last });
     }
   }

@@ -99,7 +99,7 @@ export function stanceOf(s: ReadSentence, context: StanceContext = {}): Sentence
 }
 
 function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance {
-  const endorsed = s.of('stance', 'endorse').length > 0 || (context.next?.of('stance', 'endorse').some((h) => h.first <= 4) ?? false);
+  const endorsed = s.of('stance', 'endorse').length > 0 || endorsesPerson(s, s.words.length) || (context.next !== undefined && (context.next.of('stance', 'endorse').some((h) => h.first <= 4) || endorsesPerson(context.next, 6)));
   const make = (kind: StanceKind, flips = false): SentenceStance => ({ kind, endorsed: kind !== 'asserted' && endorsed, flips });
   if (context.marked === true) return make('marked');
   // A block quote of one sentence, or a reply repeating words said earlier in the draft, quotes it; a
@@ -127,7 +127,12 @@ function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance
   if (s.of('stance', 'superseded').length > 0 || isFormerOwnView(s)) return make('superseded');
   const viewEnd = outdatedViewEnd(s, context.next);
   if (viewEnd !== undefined) return { ...make('superseded'), viewEnd };
-  if (isHypothetical(s)) return make('hypothetical');
+  if (isHypothetical(s)) {
+    // "If CO2 had driven the ice ages it would have moved first, and it didn't, so the orbit did the
+    // work": the conclusion drawn after the supposed case is the writer's own.
+    const conclusion = conclusionAfterSupposition(s);
+    return conclusion === undefined ? make('hypothetical') : { ...make('hypothetical'), viewEnd: conclusion };
+  }
   return make('asserted');
 }
 
@@ -328,7 +333,8 @@ function pastIntensifier(s: ReadSentence, i: number): number {
   const at = (k: number) => s.words[k]?.text ?? '';
   if (at(i) === 'on' && at(i + 1) === 'earth') return i + 2;
   if (at(i) === 'in' && at(i + 1) === 'the' && at(i + 2) === 'world') return i + 3;
-  if (at(i) === 'ever') return i + 1;
+  // "how exactly is it supposed to...", "why then would...": a word of emphasis after the question word.
+  if (at(i) === 'ever' || at(i) === 'exactly' || at(i) === 'then' || at(i) === 'precisely') return i + 1;
   return i;
 }
 
@@ -395,15 +401,22 @@ function isReported(s: ReadSentence): boolean {
   // read the answer in the cores" is the writer's own pointer; "the highest reading" is a measurement).
   const introduces = (v: LexHit) =>
     v.base !== 'read' || (!/^readings?$/u.test(s.words[v.first]?.text ?? '') && s.words.slice(v.last + 1, v.last + 4).some((w) => w.text === 'that' || w.quoted === true));
-  const verbs = s.of('stance', 'report-verbs').filter((v) => v.first <= 10 && !(s.inside(v.first, 'uptake') && s.words[v.last + 1]?.text !== 'that') && introduces(v));
+  // The verb stands near the opening of what the sentence itself says, past a speaker's label or a byline.
+  // "worth saying that ...", "worth noting that ...": a verb the writer recommends has no other speaker.
+  const verbs = s.of('stance', 'report-verbs').filter((v) => v.first - s.opening <= 10 && s.words[v.first - 1]?.text !== 'worth' && !(s.inside(v.first, 'uptake') && s.words[v.last + 1]?.text !== 'that') && introduces(v));
   // "For readers who think in Fahrenheit, ...": a reporter inside a phrase is nobody's report.
   const reporters = s.of('stance', 'reporters').filter((r) => !/^(?:for|to|with|among|of|from)$/u.test(s.words[r.first - 1]?.text ?? ''));
   if (verbs.some((v) => reporters.some((r) => r.last < v.first && v.first - r.last <= 4))) return true;
+  // "I keep hearing two stories. One says ..., the other says ...": a pronoun of choice ("one",
+  // "another", "the other") standing alone as the verb's subject at the sentence's opening is one of
+  // several voices the writer sets out.
+  const chooser = ONE_OF_SEVERAL.has(s.words.slice(s.opening, s.opening + 2).map((w) => w.text).join(' ')) ? s.opening + 2 : ONE_OF_SEVERAL.has(s.words[s.opening]?.text ?? '') ? s.opening + 1 : -1;
+  if (chooser > 0 && verbs.some((v) => v.first === chooser)) return true;
   // "My neighbour insists...", "Her uncle keeps saying...": someone of a person's circle, named as the
   // verb's subject, is an outside source with or without "that".
   // The subject may be a compound noun and a name ("My brother-in-law Clive insists"): six words back.
   const circle = (v: LexHit) => s.words.slice(Math.max(0, v.first - 6), v.first).some((w, k, all) => /^(?:my|your|his|her|their)$/u.test(w.text) && k < all.length - 1);
-  if (verbs.some((v) => v.first <= 6 && circle(v))) return true;
+  if (verbs.some((v) => v.first - s.opening <= 6 && circle(v))) return true;
   // "Mr Pell's central claim is that...", "the letter's argument is that...": a report told as a noun
   // that someone owns, then "is that".
   const owned = verbs.some((v) => s.words[v.last + 1]?.text === 'is' && s.words[v.last + 2]?.text === 'that' && s.words.slice(Math.max(0, v.first - 3), v.first).some((w) => /['’]s$/u.test(w.text) || /^(?:his|her|their|the)$/u.test(w.text)));
@@ -480,6 +493,47 @@ function isHypothetical(s: ReadSentence): boolean {
   const first = s.words[0]?.text ?? '';
   if (!['if', 'suppose', 'supposing', 'imagine', 'were'].includes(first)) return false;
   return s.words.some((w) => ['would', 'might'].includes(w.text));
+}
+
+/** Personal pronouns that stand for the person whose words were reported ("he", "him", "she's"). */
+const PERSONS = new Set(['he', 'she', 'they', 'him', 'her', 'them', "he's", "she's", "they're", 'hes', 'shes', 'theyre']);
+/** Words that deny what follows them in a short predicate. */
+const DENIALS = new Set(['not', 'never', 'no', 'hardly']);
+
+/**
+ * "..., and honestly I think he's right", "your panel proves him right", "he's got a point": a
+ * predicate of rightness ("right", "correct", "a point") said of a person named by a pronoun, within
+ * the first `within` words and with no denial just before, in a sentence that asks nothing, endorses
+ * the view reported of that person.
+ */
+function endorsesPerson(s: ReadSentence, within: number): boolean {
+  // "Is he right?" asks; it endorses nothing.
+  if (s.question) return false;
+  return s.words.some((w, k) => {
+    if (k >= within) return false;
+    const rightness = w.text === 'right' || w.text === 'correct' || (w.text === 'point' && s.words[k - 1]?.text === 'a');
+    if (!rightness) return false;
+    const before = s.words.slice(Math.max(0, k - 4), k);
+    const person = before.findLastIndex((b) => PERSONS.has(b.text));
+    return person >= 0 && !s.words.slice(Math.max(0, k - 6), k).some((b) => DENIALS.has(b.text));
+  });
+}
+
+/** Pronouns that pick one of several voices or views named before ("One says ...", "The other claims ..."). */
+const ONE_OF_SEVERAL = new Set(['one', 'another', 'the other', 'the first', 'the second', 'a second', 'a third']);
+
+/** Words that open a conclusion drawn from what came before (English grammar, common practice). */
+const CONCLUSION_OPENERS = new Set(['so', 'therefore', 'hence', 'thus', 'consequently']);
+
+/**
+ * Where a supposed case gives way to the writer's own conclusion: the first segment past the
+ * supposition's consequence ("would", "might") opened by a word of concluding. Undefined without one.
+ */
+function conclusionAfterSupposition(s: ReadSentence): number | undefined {
+  const consequence = s.words.findIndex((w) => w.text === 'would' || w.text === 'might');
+  if (consequence < 0) return undefined;
+  const at = s.words.findIndex((w, i) => i > consequence && CONCLUSION_OPENERS.has(w.text) && s.words[i - 1]?.segment !== w.segment);
+  return at < 0 ? undefined : s.words[at]?.start;
 }
 
 /** A short heading that labels its section as the myth ("The myth", "What you may hear"). */
