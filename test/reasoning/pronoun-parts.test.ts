@@ -50,3 +50,36 @@ describe('a pronoun focus restricted at once', () => {
     expect(await logic('It\'s the orbit, mostly, and CO2 amplified the warming that ended each ice age.')).toEqual([]);
   });
 });
+
+describe('a choice of parts answered past a coordinator, a term held up in quotation marks', () => {
+  it.each([
+    // the loop word is only mentioned, in quotation marks, and the answer follows "and"
+    'CO2 rose centuries late in the cores. "Feedback" is a buzzword; CO2 is either the driver or the follower and the bubbles plainly say follower.',
+    'CO2 rose late. CO2 was either the cause or the effect and the cores say effect.',
+  ])('%s', async (text) => {
+    expect(await logic(text)).toContain('logic.either-or-causation');
+  });
+
+  it.each([
+    // a loop granted, unquoted, answers the choice
+    'CO2 rose centuries late in the cores. It is a feedback; CO2 is either the driver or the follower and the bubbles plainly say both.',
+    // the clause after "and" picks no part
+    'CO2 rose late. Whether CO2 was the cause or the effect and how much it mattered are both open.',
+  ])('%s stays clean of logic flags', async (text) => {
+    expect(await logic(text)).toEqual([]);
+  });
+});
+
+describe('the latecomer maxim after another denial in its sentence', () => {
+  // Temperature led CO2 at Termination III by about 800 years (Caillon et al. 2003, Science 299,
+  // 1728-1731, doi 10.1126/science.1078758); a late CO2 rise still amplified the warming (Shakun et al. 2012).
+  it('flags the second "can\'t" whose subject came late', async () => {
+    expect(await logic('Temperature led CO2 by some 800 years in that core. A result can\'t come before its cause, so a gas that arrives 800 years late can\'t have done the warming.')).toContain(
+      'logic.lag-rules-out-cause',
+    );
+  });
+
+  it('leaves a latecomer granted a part alone', async () => {
+    expect(await logic('Temperature led CO2 by some 800 years in that core. A result can\'t come before its cause, but a gas that arrives late can still amplify the warming.')).toEqual([]);
+  });
+});
