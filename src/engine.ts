@@ -668,14 +668,16 @@ function factMatcherOf(packs: LoadedPacks): TopicMatcher {
   return matcher;
 }
 
-const frameMatchers = new WeakMap<LoadedPacks, { either: TopicMatcher; condition: TopicMatcher; later: TopicMatcher; correlation: TopicMatcher; proof: TopicMatcher }>();
+const frameMatchers = new WeakMap<LoadedPacks, { either: TopicMatcher; condition: TopicMatcher; later: TopicMatcher; correlation: TopicMatcher; proof: TopicMatcher; causeNoun: TopicMatcher; effectNoun: TopicMatcher }>();
 
 /**
  * The frames of a reasoning check that stand as a sentence of their own in a thread, with no subject
  * word: the either/or frame ("It can't be both.", "cant be both, pick one": lexicon
  * `causes.either-or`), the lag put as a condition ("If the effect comes after, it cannot be the
  * cause": `stance.condition` with `order.after`) and a co-variation called proof ("the correlation
- * itself is the proof": `correlation` with `proof.all`). Read in the words as the tokenizer cuts them, so "can't" and "cant" are
+ * itself is the proof": `correlation` with `proof.all`) and a thing's two parts set against each other
+ * ("It's an effect, not a cause.", "it's either the driver or the passenger": a part noun of each side,
+ * `causes.nouns` and `causes.effects`, its subject a pronoun the sentences before resolve). Read in the words as the tokenizer cuts them, so "can't" and "cant" are
  * "can not" as the lexicon writes it; only where the sentence's window names a subject.
  */
 function standsAloneAsFrame(text: string, packs: LoadedPacks): boolean {
@@ -687,6 +689,8 @@ function standsAloneAsFrame(text: string, packs: LoadedPacks): boolean {
       later: createTopicMatcher(classWordsOf(packs.lexicon, 'order', ['after'])),
       correlation: createTopicMatcher(classWordsOf(packs.lexicon, 'correlation', ['all'])),
       proof: createTopicMatcher(classWordsOf(packs.lexicon, 'proof', ['all'])),
+      causeNoun: createTopicMatcher(classWordsOf(packs.lexicon, 'causes', ['nouns'])),
+      effectNoun: createTopicMatcher(classWordsOf(packs.lexicon, 'causes', ['effects'])),
     };
     frameMatchers.set(packs, matchers);
   }
@@ -696,7 +700,13 @@ function standsAloneAsFrame(text: string, packs: LoadedPacks): boolean {
   // `stance.condition` with `order.after`), its latecomer left to the sentences before.
   // "..., the correlation itself is the proof": a co-variation called proof (lexicon `correlation`
   // with `proof.all`), the causal claim it proves left to the passage.
-  return matchers.either.test(words) || (matchers.condition.test(words) && matchers.later.test(words)) || (matchers.correlation.test(words) && matchers.proof.test(words));
+  // "It was an effect, not a cause.": both parts of a thing named, what it is and what it is not.
+  return (
+    matchers.either.test(words) ||
+    (matchers.condition.test(words) && matchers.later.test(words)) ||
+    (matchers.correlation.test(words) && matchers.proof.test(words)) ||
+    (matchers.causeNoun.test(words) && matchers.effectNoun.test(words))
+  );
 }
 
 /** The lexicon entity keys a direction fact's form names. */

@@ -539,7 +539,10 @@ function cleftFocus(s: ReadSentence, agent: Thing | undefined): Thing | undefine
   if (focus === undefined) return undefined;
   // "It was the orbit, and nothing else, that warmed...": the relative word may follow an aside.
   const rest = s.words.slice(focus.last + 1, focus.last + 9).map((w) => w.text);
-  return rest.some((w) => /^(?:that|which|who|doing|driving|setting|making)$/u.test(w)) ? focus : undefined;
+  if (rest.some((w) => /^(?:that|which|who|doing|driving|setting|making)$/u.test(w))) return focus;
+  // "it's the orbit, full stop, the wobble dragged us out": the focus restricted right after it
+  // (lexicon `exclusive`) is singled out as a cleft's is, whatever clause follows.
+  return s.of('exclusive').some((h) => h.first > focus.last && h.first <= focus.last + 2) ? focus : undefined;
 }
 
 /**

@@ -70,9 +70,10 @@ const CONTRAST = ['but', 'while', 'whereas', 'although', 'though', 'yet', 'howev
 const LINKS = new Set(['so', 'therefore', 'thus', 'hence', 'because', 'since', 'when', 'if', 'which', 'meaning', 'means', 'whereby', 'once', 'unless', 'until', 'consequently']);
 /** Words after which "that" opens a clause of its own ("shows that temperature drives CO2"). */
 const COMPLEMENT_TAKERS = /^(?:show|prove|mean|say|said|know|knew|think|thought|argue|claim|suggest|find|found|note|clear|plain|true|evident|obvious|likely|so|insist|assert|believe|tell|told|demonstrate|confirm|establish|reveal|indicate|impl(?:y|ies|ied)|conclude|maintain|contend|write|wrote|hear|heard|fact|idea|notion|view|belief|myth|argument|sure|certain|agree|recogni[sz]e|shown|proof|evidence|sign|means)\w*$/u;
-/** Pronouns whose "'s" is "is": "that's global temperature". */
+/** Pronouns whose "'s" is "is": "that's global temperature", "it's an effect, not a cause". */
 // "thats" is the same contraction with the apostrophe left out, as informal posts write it.
-const COPULA_CONTRACTION = /^(that|this)'s$|^(that)s$/u;
+// "its" without the apostrophe stays the possessive it usually is.
+const COPULA_CONTRACTION = /^(that|this|it)'s$|^(that)s$/u;
 const AUXILIARIES = new Set(['is', 'does', 'did', 'was', 'are', 'do', 'can', 'could', 'would', 'should', 'has', 'have', 'were', 'will']);
 const PRONOUNS = new Set(['it', 'they', 'this', 'that', 'these', 'those', 'its', 'their']);
 /** Pronouns that are a determiner when a thing follows them ("this wobble", "those glaciations"). */
@@ -112,7 +113,8 @@ export function readSentence(text: string, lexicon: CompiledLexicon): ReadSenten
       continue;
     }
     joinDigits = false;
-    // "Greenland’s" reads as "greenland's"; "that's" as "that is" (the copula reads a record as something).
+    // "Greenland’s" reads as "greenland's"; "that's" as "that is" (the copula reads a record as
+    // something), "it's" as "it is" (so the pronoun resolves: "It's an effect, not a cause").
     const text = token.text.replace(/’/gu, "'");
     const copula = COPULA_CONTRACTION.exec(text);
     const complement = text === 'that' && COMPLEMENT_TAKERS.test(words.at(-1)?.text ?? '');

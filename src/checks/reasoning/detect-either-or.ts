@@ -25,7 +25,7 @@ function detect({ index, own, read }: DetectInput): Cue[] {
     // "it cannot be both" denies the loop; "both" alone grants it.
     const both = r?.s.words.findIndex((w) => w.text === 'both') ?? -1;
     const bothGranted = r !== undefined && both >= 0 && !r.s.words.slice(Math.max(0, both - 3), both).some((w) => ['not', 'never', 'no'].includes(w.text));
-    return r !== undefined && (r.props.causes.some((c) => c.role === 'feedback' && c.polarity === 'asserted') || bothGranted);
+    return r !== undefined && (r.props.causes.some((c) => c.role === 'feedback' && c.polarity === 'asserted' && !scareQuoted(r.s, c.start)) || bothGranted);
   };
   if (loopAt(index)) return [];
   const causes = here.props.causes.filter((c) => c.polarity !== 'open' && c.role !== 'start');
@@ -47,7 +47,9 @@ function detect({ index, own, read }: DetectInput): Cue[] {
   if (picked !== undefined) return [picked];
   // "whether CO2 was the cause or the effect ..., and the cores answer: it was the effect": a choice
   // of parts and its answer in one sentence (role-choice.ts).
-  const partAnswer = choicePickedInSentence(here.s);
+  // "it's either the driver or the passenger, and the cores say passenger": the pronoun may stand for
+  // the CO2 of the sentences just before (a post's lead-in too).
+  const partAnswer = choicePickedInSentence(here.s, earlierSentences(read, index).slice(0, PRONOUN_REACH));
   if (partAnswer !== undefined) return [partAnswer];
   // A neighbour answers only in the same voice: in a thread, the next reply is someone else's.
   // A list item or a post before this block (its lead-in) is a claim of its own, and answers nothing here.
@@ -89,6 +91,24 @@ function detect({ index, own, read }: DetectInput): Cue[] {
   return [];
 }
 
+/** The most words a quotation may hold and still be a term held up, not a saying. */
+const TERM_WORDS = 2;
+
+/**
+ * The word at `start` is a term held up in quotation marks ('"feedback" is a cope word', '"feedback"
+ * lmao'): a quotation of one or two words in a sentence with words of its own mentions the term and
+ * grants nothing.
+ */
+function scareQuoted(s: ReadSentence, start: number): boolean {
+  const at = s.words.findIndex((w) => w.end > start);
+  if (at < 0 || s.words[at]?.quoted !== true) return false;
+  let first = at;
+  while (first > 0 && s.words[first - 1]?.quoted === true) first -= 1;
+  let last = at;
+  while (last + 1 < s.words.length && s.words[last + 1]?.quoted === true) last += 1;
+  return last - first + 1 <= TERM_WORDS && s.words.some((w) => w.quoted !== true);
+}
+
 /**
  * Two directions set up as a choice: an "or" stands between them, inside the stretch the two causes
  * cover ("Either the ocean warmed and released CO2, or CO2 warmed the ocean"). An "or" elsewhere in
@@ -121,6 +141,9 @@ function joinsModifiers(s: ReadSentence, i: number): boolean {
   const head = s.words[i + 2]?.text;
   return before.endsWith('ing') && after.endsWith('ing') && head !== undefined && /^\p{L}/u.test(head) && !OBJECT_OPENERS.has(head) && s.words[i + 2]?.segment === s.words[i]?.segment;
 }
+
+/** How many sentences back a choice of parts told of "it" looks for the CO2 it stands for. */
+const PRONOUN_REACH = 3;
 
 /** How far back a frame that names neither side looks for the cause and CO2 it is about. */
 const FRAME_REACH = 6;

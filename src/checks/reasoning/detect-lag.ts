@@ -60,9 +60,20 @@ const DENYING_MODAL = new Set(['cannot', "can't", 'couldn’t', "couldn't", 'can
 function latecomerDenied(s: ReadSentence): (Cue & { co2: boolean }) | undefined {
   const words = s.words.map((w) => w.text);
   const denying = (i: number) => DENYING_MODAL.has(words[i] ?? '') || (['can', 'could'].includes(words[i] ?? '') && words[i + 1] === 'not');
-  const modal = words.findIndex((_, i) => denying(i));
+  // "An effect can't come before its cause, so a gas that turns up late can't have done it": each
+  // denying modal is tried, the maxim may follow another denial.
+  for (const [modal] of words.entries()) {
+    if (!denying(modal)) continue;
+    const found = latecomerAt(s, words, modal);
+    if (found !== undefined) return found;
+  }
+  return undefined;
+}
+
+/** The latecomer maxim whose denying modal is word `modal`. */
+function latecomerAt(s: ReadSentence, words: readonly string[], modal: number): (Cue & { co2: boolean }) | undefined {
   // The relative clause opens at most 12 words before the modal, in its segment or just before it.
-  const rel = modal < 0 ? -1 : words.findLastIndex((w, i) => i < modal - 1 && modal - i <= 12 && i >= 1 && RELATIVE.has(w));
+  const rel = words.findLastIndex((w, i) => i < modal - 1 && modal - i <= 12 && i >= 1 && RELATIVE.has(w));
   if (rel < 0) return undefined;
   const late = s.of('order', 'after').some((h) => h.first > rel && h.first < modal) || words.slice(rel, modal).includes('late');
   const verb = words.slice(modal + 1, modal + 4).find((w) => ['be', 'have', 'been'].includes(w));

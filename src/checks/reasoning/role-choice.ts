@@ -19,6 +19,9 @@ import type { LexHit, ReadSentence } from '../../propositions/index.js';
 /** The two sides of a choice of parts. */
 export type Side = 'cause' | 'effect';
 
+/** Words that join a clause of its own to the choice before it. */
+const COORDINATORS = new Set(['and', 'but', 'so']);
+
 /** How many words may stand between the two part nouns of one choice ("a driver of deglacial warming, or merely a passenger"). */
 const CHOICE_SPAN = 9;
 
@@ -32,10 +35,12 @@ function partNouns(s: ReadSentence): { hit: LexHit; side: Side }[] {
 /**
  * Where the choice of parts in `s` ends (the index of its last word), or undefined when `s` offers
  * none: a cause noun and an effect noun joined by an "or" between them, within one clause, in a
- * sentence about CO2 (named in it, or in `before` when `s` refers back with a pronoun).
+ * sentence about CO2 (named in it, or in one of the sentences `before` it when `s` refers back with
+ * a pronoun).
  */
-export function roleChoiceEnd(s: ReadSentence, before?: ReadSentence): number | undefined {
-  const aboutCo2 = s.of('entities', 'co2').length > 0 || (before !== undefined && before.of('entities', 'co2').length > 0 && s.words.some((w) => w.text === 'it'));
+export function roleChoiceEnd(s: ReadSentence, before: ReadSentence | readonly ReadSentence[] = []): number | undefined {
+  const earlier = Array.isArray(before) ? (before as readonly ReadSentence[]) : [before as ReadSentence];
+  const aboutCo2 = s.of('entities', 'co2').length > 0 || (s.words.some((w) => w.text === 'it') && earlier.some((b) => b.of('entities', 'co2').length > 0));
   if (!aboutCo2) return undefined;
   const nouns = partNouns(s);
   for (const a of nouns) {
@@ -62,12 +67,16 @@ export function pickedPart(s: ReadSentence, from = 0): Side | undefined {
 /**
  * Both parts offered and one picked in one sentence: the answer stands past the choice, in a
  * segment of its own ("..., and concluded that it was the cause"; "...: it was the effect").
+ * `before`: the sentences a pronoun of `s` may refer back to ("it's either the driver or the
+ * passenger, and the cores say passenger" after a post about CO2).
  */
-export function choicePickedInSentence(s: ReadSentence): { start: number; end: number } | undefined {
-  const end = roleChoiceEnd(s);
+export function choicePickedInSentence(s: ReadSentence, before: readonly ReadSentence[] = []): { start: number; end: number } | undefined {
+  const end = roleChoiceEnd(s, before);
   if (end === undefined) return undefined;
   const segment = s.words[end]?.segment;
-  const from = s.words.findIndex((w, i) => i > end && w.segment !== segment);
+  // "..., or the passenger and the ice cores say passenger": a clause joined by a coordinator after
+  // the choice is an answer as a segment of its own is.
+  const from = s.words.findIndex((w, i) => i > end && (w.segment !== segment || (COORDINATORS.has(w.text) && i === end + 1)));
   if (from < 0 || pickedPart(s, from) === undefined) return undefined;
   // The flag covers the answer: a reported question before it ("People ask whether ...") is not the draft's.
   return { start: s.words[from]?.start ?? 0, end: s.text.length };
