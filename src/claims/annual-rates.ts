@@ -103,11 +103,15 @@ export function readAnnualRates(sentence: string, quantities: Quantity[], packs:
     }
     return false;
   };
+  // A noun of change names one figure: the first gas figure after it, else the last one before it.
+  // "the mean was about 419 ppm in 2023, and the 2024 increase was about 3.5 ppm" names 3.5 ppm; the
+  // level before the noun stays a level.
+  const named = noun ? namedByNoun(sentence, quantities, gas) : new Set<number>();
   let rated = false;
   const out = quantities.map((q, i) => {
     if (gas[i] !== true) return q;
     const role = roles[i];
-    const change = role === 'change' || (role !== 'level' && ((noun && (pair || yearly)) || afterVerb(q)));
+    const change = role === 'change' || (role !== 'level' && ((noun && (pair || yearly) && named.has(i)) || afterVerb(q)));
     if (!change) return q;
     rated = true;
     return { ...q, dimension: 'concentration-rate' as const, unit: 'ppm/yr' };
@@ -115,4 +119,18 @@ export function readAnnualRates(sentence: string, quantities: Quantity[], packs:
   if (!rated) return quantities;
   // "the largest one-year jump": the year of a one-year word is the rate's own "per year", no span of time claimed.
   return out.map((q) => (q.dimension === 'duration' && marks.some(([at, to]) => at <= q.start && to >= q.end) ? { ...q, dimension: 'number' as const, unit: '' } : q));
+}
+
+/** The gas figures each noun of change of `sentence` names: the first after it, else the last before it. */
+function namedByNoun(sentence: string, quantities: readonly Quantity[], gas: readonly boolean[]): Set<number> {
+  const named = new Set<number>();
+  const gases = quantities.map((q, i) => ({ q, i })).filter(({ i }) => gas[i] === true);
+  for (const m of sentence.matchAll(new RegExp(CHANGE_NOUN.source, 'giu'))) {
+    const at = m.index + m[0].length;
+    const after = gases.find(({ q }) => q.start >= at);
+    const before = gases.filter(({ q }) => q.end <= m.index).at(-1);
+    const pick = after ?? before;
+    if (pick !== undefined) named.add(pick.i);
+  }
+  return named;
 }

@@ -91,6 +91,9 @@ const RESPONSE_WORDS = new Set(['no', 'not', 'nope', 'nah', 'yes', 'yeah', 'yep'
 const LABEL = /^\s*(?:[*_#>\s]*)(myth|misconception|claim|the claim|fiction|false|what (?:they|you|people|some) (?:say|hear|claim)|you may hear|you might hear|you'll hear|the myth|the misconception|misunderstanding|mistake|rumou?r)\b(?:[^:.]{0,12}:|[*_]*\.)/iu;
 const FACT_LABEL = /^\s*(?:[*_#>\s]*)(fact|reality|the facts?|the science|the evidence|truth|answer|a)\b(?:[^:.]{0,12}:|[*_]*\.(?=[*_\s]))/iu;
 
+/** A forum quotation's opening tag ("[quote]", "[quote=name]"), common practice of forum software. */
+const QUOTE_TAG = /^\s*\[quote(?:[=\s][^\]\n]*)?\]/iu;
+
 /** The stance of `s` in its context. */
 export function stanceOf(s: ReadSentence, context: StanceContext = {}): SentenceStance {
   const named = namedQuotations(s);
@@ -108,6 +111,9 @@ function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance
   // myth label, a report). One that opens with a byline ("BigSkyBarb · 5h") or a label of its own
   // ("Did you know?") is in its writer's voice.
   if (context.blockKind === 'blockquote' && context.voiced !== true && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
+  // "[quote=fen_walker]the air is older than the ice[/quote]": forum software's quotation of the post
+  // a reply answers, the reply's words after it.
+  if (QUOTE_TAG.test(s.text)) return make('quoted');
   // "**Myth.** CO2 lags, so ...": a label that ends with a full stop is a sentence of its own, and labels the one after it.
   const label = bareLabel(context.previous);
   if (FACT_LABEL.test(s.text) || label === 'fact') return make('asserted');

@@ -215,7 +215,7 @@ function splitLines(sentences: Sentence[], whole: string, blockIndex: number, fr
     const stopAt = match.index + match[1]!.length + match[2]!.length;
     const next = match.index + match[0].length;
     if (stopAt <= start) continue;
-    if (!endsSentence(text, match.index, match[1]!, match[3]!, next) && !endsLowerCaseSentence(text, start, match.index, match[1]!, next)) continue;
+    if (!endsSentence(text, match.index, match[1]!, match[3]!, next) && !endsLowerCaseSentence(text, start, match.index, match[1]!, next) && !endsAtLineBreak(text, match.index, match[1]!, match[2]!, match[3]!, next)) continue;
     push(sentences, text, blockIndex, start, stopAt);
     start = next;
   }
@@ -250,6 +250,30 @@ function endsLowerCaseSentence(text: string, start: number, dotAt: number, marks
   if (word.length < 2 || word.includes('.') || ABBREVIATIONS.has(word.toLowerCase())) return false;
   return opensInLowerCase(text.slice(start, dotAt));
 }
+
+/**
+ * An end mark that ends its line ends the sentence when the next line opens in lower case: a writer
+ * who breaks the line after a full stop, a question or an exclamation has ended a thought, whatever
+ * case the line before opened in ("...the global stack mostly lagged co2.\nantarctica warmed early",
+ * "...back in 76.\nthe orbit sets the timing"). Wrapped edited prose breaks a line inside a sentence
+ * only after a word, so a mark there ends one; kept joined are a closing quote after the mark (a
+ * quoted sentence inside the writer's own: '"CO2 rose."\nthen it fell'), an initial, a word with a
+ * dot inside ("e.g.") and the abbreviations that stand before a lower-case word in a sentence
+ * ("et al.", "cf.", "approx.").
+ */
+function endsAtLineBreak(text: string, dotAt: number, marks: string, closing: string, space: string, next: number): boolean {
+  if (/["'”’]/u.test(closing) || !space.includes('\n') || !/^\p{Ll}/u.test(text.slice(next, next + 1))) return false;
+  if (!/^(?:[.!?]|\.\.\.|…)$|^[!?]+$/u.test(marks)) return false;
+  if (marks !== '.') return true;
+  // The token before the stop: a figure or a word with a digit ("back in 76.", "lagged co2.") ends a
+  // sentence as a word does.
+  const token = /[^\s"'“‘([]+$/u.exec(text.slice(Math.max(0, dotAt - 24), dotAt))?.[0] ?? '';
+  if (/\d/u.test(token)) return true;
+  return token.length >= 2 && /^[\p{L}'’-]+$/u.test(token) && !RUNS_ON.has(token.toLowerCase());
+}
+
+/** Abbreviations after which a sentence runs on in lower case ("et al. found", "cf. the", "approx. the"). */
+const RUNS_ON = new Set(['al', 'cf', 'ca', 'approx', 'vs', 'incl', 'resp', 'est', 'etc', 'viz', 'esp', 'fig', 'figs', 'eq', 'eqs', 'ref', 'refs', 'sect', 'ch', 'vol', 'pp', 'no', 'dr', 'prof', 'mr', 'mrs', 'ms', 'st']);
 
 /** The sentence's first word, after a time stamp, a handle or a speaker label, is in lower case. */
 function opensInLowerCase(sentence: string): boolean {

@@ -85,4 +85,13 @@ describe('a level told with a year stays a level', () => {
   it('reads the change, not the level, in one sentence holding both', () => {
     expect(rates('In 2024 CO2 rose by about 3.5 ppm, to about 424 ppm.')).toEqual(['about 3.5 ppm']);
   });
+
+  it('gives a noun of change the figure after it, and leaves a level before the noun a level', () => {
+    // The global mean was about 421 ppm in 2023 and the 2023-2024 increase about 3.5 ppm (WMO 2025; NOAA GML).
+    expect(rates('the global mean sat near 421 ppm in 2023, and the 2024 increase came to about 3.5 ppm.')).toEqual(['about 3.5 ppm']);
+  });
+
+  it('flags neither figure of a level and a yearly increase told together', async () => {
+    expect(await valueFlags('The global mean sat near 421 ppm in 2023, and the 2024 increase came to about 3.5 ppm.')).toEqual([]);
+  });
 });
