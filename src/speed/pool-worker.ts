@@ -1,6 +1,7 @@
 /**
  * A worker of the file pool (src/speed/run-files.ts): loads the run's packs once, then checks one
- * file per task exactly as the main thread would (engine.checkFileText) and sends back its outcome.
+ * file per task exactly as the main thread would (engine.checkFileText) and sends back its outcome
+ * packed by V8's serializer (cache.ts packOutcome), which the main thread keeps as bytes until the run ends.
  */
 import { checkFileText } from '../engine.js';
 import { createTopicMatcher, type TopicMatcher } from '../prose/index.js';
@@ -8,7 +9,7 @@ import { loadPacks } from '../rulepack/index.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import { loadHtmlReader } from '../source/index.js';
 import type { Draft, Level } from '../types.js';
-import type { FileOutcome } from './cache.js';
+import { packOutcome } from './cache.js';
 
 /** What the main thread sends for one file (never a Word draft: those are checked in the main thread). */
 export interface PoolTask {
@@ -24,16 +25,16 @@ export interface PoolTask {
 
 let loaded: { key: string; packs: Promise<LoadedPacks>; topic?: TopicMatcher } | undefined;
 
-export default async function checkInWorker(task: PoolTask): Promise<FileOutcome> {
+export default async function checkInWorker(task: PoolTask): Promise<Uint8Array> {
   const key = JSON.stringify([task.builtin, task.packFiles]);
   if (loaded?.key !== key) loaded = { key, packs: loadPacks(task.packFiles, { builtin: task.builtin, validated: true }) };
   const packs = await loaded.packs;
   loaded.topic ??= createTopicMatcher(packs.topicWords);
   if (task.format === 'html') await loadHtmlReader();
-  return checkFileText({ path: task.path, text: task.text, format: task.format }, packs, {
+  return packOutcome(checkFileText({ path: task.path, text: task.text, format: task.format }, packs, {
     topic: loaded.topic,
     levels: task.levels,
     reuseSentences: false,
     ...(task.projectPath === task.path ? {} : { projectPath: task.projectPath }),
-  });
+  }));
 }
