@@ -10,7 +10,6 @@ import { createHash } from 'node:crypto';
 import { mkdirSync, readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { deserialize, serialize } from 'node:v8';
 import type { LoadedPacks } from '../rulepack/types.js';
 import type { Claim, Flag, Level } from '../types.js';
 import { writeFileAtomic } from '../write-file-atomic.js';
@@ -26,20 +25,6 @@ export interface FileOutcome {
   skipped?: string;
   /** Could not be checked (not UTF-8, too large, nested too deep...): the run fails (exit 2). */
   unchecked?: { reason: string; line?: number; column?: number };
-}
-
-/**
- * An outcome as bytes: V8's serializer, the structured clone a worker's answer went through anyway.
- * A pooled run (run-files.ts) holds each checked file's outcome so, outside the heap, until its
- * last file is checked and its workers have ended (docs/speed.md, Session 19).
- */
-export function packOutcome(outcome: FileOutcome): Uint8Array {
-  return serialize(outcome);
-}
-
-/** The outcome `packOutcome` packed (a copy: its sources and strings are its own). */
-export function unpackOutcome(bytes: Uint8Array): FileOutcome {
-  return deserialize(bytes) as FileOutcome;
 }
 
 const ENTRY_FORMAT = 'firnline-cache/1';

@@ -1,7 +1,6 @@
 /**
  * A worker of the file pool (src/speed/run-files.ts): loads the run's packs once, then checks one
- * file per task exactly as the main thread would (engine.checkFileText) and sends back its outcome
- * packed by V8's serializer (cache.ts packOutcome), which the main thread keeps as bytes until the run ends.
+ * file per task exactly as the main thread would (engine.checkFileText) and sends back its outcome.
  */
 import { checkFileText } from '../engine.js';
 import { createTopicMatcher, type TopicMatcher } from '../prose/index.js';
@@ -9,7 +8,7 @@ import { loadPacks } from '../rulepack/index.js';
 import type { LoadedPacks } from '../rulepack/types.js';
 import { loadHtmlReader } from '../source/index.js';
 import type { Draft, Level } from '../types.js';
-import { packOutcome } from './cache.js';
+import type { FileOutcome } from './cache.js';
 
 /** What the main thread sends for one file (never a Word draft: those are checked in the main thread). */
 export interface PoolTask {
@@ -25,16 +24,16 @@ export interface PoolTask {
 
 let loaded: { key: string; packs: Promise<LoadedPacks>; topic?: TopicMatcher } | undefined;
 
-export default async function checkInWorker(task: PoolTask): Promise<Uint8Array> {
+export default async function checkInWorker(task: PoolTask): Promise<FileOutcome> {
   const key = JSON.stringify([task.builtin, task.packFiles]);
   if (loaded?.key !== key) loaded = { key, packs: loadPacks(task.packFiles, { builtin: task.builtin, validated: true }) };
   const packs = await loaded.packs;
   loaded.topic ??= createTopicMatcher(packs.topicWords);
   if (task.format === 'html') await loadHtmlReader();
-  return packOutcome(checkFileText({ path: task.path, text: task.text, format: task.format }, packs, {
+  return checkFileText({ path: task.path, text: task.text, format: task.format }, packs, {
     topic: loaded.topic,
     levels: task.levels,
     reuseSentences: false,
     ...(task.projectPath === task.path ? {} : { projectPath: task.projectPath }),
-  }));
+  });
 }

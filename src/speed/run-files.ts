@@ -15,7 +15,7 @@ import type { LoadedPacks } from '../rulepack/types.js';
 import { readDraftText, readWordDraft } from '../source/index.js';
 import type { Draft, Flag, Level, Source } from '../types.js';
 import { VERSION } from '../version.js';
-import { cacheKeyOf, packOutcome, packsDigest, unpackOutcome, type FileOutcome, type ResultCache } from './cache.js';
+import { cacheKeyOf, packsDigest, type FileOutcome, type ResultCache } from './cache.js';
 import type { PoolTask } from './pool-worker.js';
 
 export type { FileOutcome } from './cache.js';
@@ -80,11 +80,7 @@ function workerFile(): string {
 }
 
 export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Promise<(FileOutcome | undefined)[]> {
-  // Once a pool runs, a checked file's outcome is held packed (bytes outside the heap, cache.ts
-  // packOutcome) until the last file is checked and the workers have ended: the threads' heaps and
-  // every outcome were held at once before, the run's peak of memory (docs/speed.md, Session 19).
-  const outcomes: (FileOutcome | Uint8Array | undefined)[] = new Array<FileOutcome | Uint8Array | undefined>(tasks.length);
-  const keys: (string | undefined)[] = [];
+  const outcomes: (FileOutcome | undefined)[] = new Array<FileOutcome | undefined>(tasks.length);
   const packsKey = options.cache === undefined ? '' : packsDigest(options.packs);
   const jobs = Math.max(1, Math.floor(options.jobs ?? availableParallelism()));
   const worker = jobs > 1 ? workerFile() : '';
@@ -92,13 +88,9 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
   let done = 0;
   // The source entries of outcomes that were copied (from a worker or the cache), one object each.
   const sources = new Map<string, Source>();
-  const store = (key: string | undefined, outcome: FileOutcome): void => {
-    if (key !== undefined && options.cache !== undefined && outcome.unchecked === undefined) void options.cache.set(key, outcome);
-  };
-  const finish = (index: number, outcome: FileOutcome | Uint8Array, key?: string): void => {
+  const finish = (index: number, outcome: FileOutcome, key?: string): void => {
     outcomes[index] = outcome;
-    if (outcome instanceof Uint8Array) keys[index] = key;
-    else store(key, outcome);
+    if (key !== undefined && options.cache !== undefined && outcome.unchecked === undefined) void options.cache.set(key, outcome);
     done += 1;
     options.onProgress?.(done, tasks.length);
   };
@@ -127,7 +119,8 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
       packFiles: options.packs.packs.map((p) => p.file).filter((f) => f !== BUILTIN_PACK_FILE),
       builtin: options.packs.packs[0]?.file === BUILTIN_PACK_FILE,
     };
-    finish(item.index, (await (pool as TinypoolType).run(message)) as Uint8Array, item.key);
+    const outcome = (await (pool as TinypoolType).run(message)) as FileOutcome;
+    finish(item.index, shareSources(outcome, sources), item.key);
   };
   // Each worker has one file running and one queued, so it never waits for this thread to hand on the next.
   const pump = (): void => {
@@ -145,12 +138,8 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
   const checkHere = (item: { index: number; text: string; key: string | undefined }): void => {
     const task = tasks[item.index] as FileTask;
     const outcome = checkFileText({ path: task.path, text: item.text, format: task.format }, options.packs, draftOptions(task));
-    if (pool !== undefined) {
-      finish(item.index, packOutcome(outcome), item.key);
-    } else {
-      shareOutcomeStrings(outcome);
-      finish(item.index, outcome, item.key);
-    }
+    shareOutcomeStrings(outcome);
+    finish(item.index, outcome, item.key);
   };
   // Between two files this thread lets the workers' answers in, and with them the next dispatches.
   const nextTurn = (): Promise<void> => new Promise((resolve) => setImmediate(resolve));
@@ -209,15 +198,7 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
   } finally {
     await pool?.destroy();
   }
-  // Unpacked in file order, each one's bytes let go as it comes: the workers' heaps are gone by now.
-  for (let index = 0; index < outcomes.length; index += 1) {
-    const packed = outcomes[index];
-    if (!(packed instanceof Uint8Array)) continue;
-    const outcome = shareSources(unpackOutcome(packed), sources);
-    outcomes[index] = outcome;
-    store(keys[index], outcome);
-  }
-  return outcomes as (FileOutcome | undefined)[];
+  return outcomes;
 }
 
 /**
