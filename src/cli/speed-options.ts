@@ -52,8 +52,9 @@ export const HEAP_GROWING_PERCENT = 50;
  * can only be lowered when Node starts (`--max-semi-space-size`, which the launcher cannot give its
  * own process); a factor of 1, set at run time, keeps them at their first size instead. V8 refuses
  * a factor under 2 on the command line (a flag implication), not at run time, and reads the factor
- * each time it grows the space (Node 20, V8 11.3); test/speed/young-generation.test.ts fails if a
- * Node release stops honouring it. Session 19 (docs/speed.md): one 128 KB file of the bench's topical
+ * each time it grows the space (Node 20, V8 11.3), and making a worker's heap raises it to 2 again,
+ * so a pooled run sets it once more when its workers are running (speed/run-files.ts
+ * onWorkersStarted); test/speed/young-generation.test.ts fails if a Node release stops honouring it. Session 19 (docs/speed.md): one 128 KB file of the bench's topical
  * prose in one thread peaked at 150 instead of 195 MiB for 6 percent more CPU (more scavenges);
  * the pool's workers share the flag (their young generation is bounded anyway, WORKER_YOUNG_MB).
  */
@@ -81,6 +82,8 @@ export async function speedOptionsOf(
   ctx: Pick<CliContext, 'env' | 'stderr' | 'stderrIsTTY'>,
 ): Promise<{ options: Partial<CheckOptions>; done: () => void }> {
   const options = parseSpeedFlags(flags);
+  // Making a worker's heap sets V8's flags back to their bounds: the young generation's is set again.
+  options.onWorkersStarted = boundHeapGrowth;
   if (flags.cache !== false) {
     const { CACHE_FOLDER, ResultCache } = await import('../speed/cache.js');
     options.cache = new ResultCache(join(projectRoot, CACHE_FOLDER), VERSION);
