@@ -58,6 +58,8 @@ export interface CheckOptions {
   shard?: Shard;
   /** Called as files are done: how many of how many. */
   onProgress?: (done: number, total: number) => void;
+  /** Called once a run's pool workers are running (speed/run-files.ts); the command line sets its V8 flags again there. */
+  onWorkersStarted?: () => void;
   /** The folder `include`/`exclude` patterns are relative to (default: `cwd`). */
   filterRoot?: string;
 }
@@ -765,8 +767,9 @@ function describeFromFlag(flag: Flag): RuleInfo {
   return { id: flag.ruleId, summary: flag.reason, description: flag.reason, defaultLevel: flag.level, sources: flag.sources };
 }
 
-function pickRun(options: CheckOptions): Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress'> {
-  const picked: Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress'> = {};
+function pickRun(options: CheckOptions): Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress' | 'onWorkersStarted'> {
+  const picked: Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress' | 'onWorkersStarted'> = {};
+  if (options.onWorkersStarted !== undefined) picked.onWorkersStarted = options.onWorkersStarted;
   if (options.jobs !== undefined) picked.jobs = options.jobs;
   if (options.cache !== undefined) picked.cache = options.cache;
   if (options.onProgress !== undefined) picked.onProgress = options.onProgress;

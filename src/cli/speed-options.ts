@@ -44,9 +44,31 @@ export function parseSpeedFlags(flags: SpeedFlags): Partial<CheckOptions> {
  */
 export const HEAP_GROWING_PERCENT = 50;
 
-/** Bounds heap growth for this process (see HEAP_GROWING_PERCENT); the findings are not affected. */
+/**
+ * How much V8 multiplies a heap's young generation by each time it grows it. V8 starts the main
+ * thread's two semi-spaces at 1 MiB each and doubles them, up to 16 MiB each, whenever much of the
+ * young data survives a scavenge: a check's start-up (the packs, the tagger's model, the word lists,
+ * all kept) grows them to their largest within seconds, and they stay resident at 32 MiB. The limit
+ * can only be lowered when Node starts (`--max-semi-space-size`, which the launcher cannot give its
+ * own process); a factor of 1, set at run time, keeps them at their first size instead. V8 refuses
+ * a factor under 2 on the command line (a flag implication), not at run time, and reads the factor
+ * each time it grows the space (Node 20, V8 11.3), and making a worker's heap raises it to 2 again,
+ * so a pooled run sets it once more when its workers are running (speed/run-files.ts
+ * onWorkersStarted); test/speed/young-generation.test.ts fails if a Node release stops honouring it. Session 19 (docs/speed.md): one 128 KB file of the bench's topical
+ * prose in one thread peaked at 150 instead of 195 MiB for 6 percent more CPU (more scavenges);
+ * the pool's workers share the flag (their young generation is bounded anyway, WORKER_YOUNG_MB).
+ */
+export const YOUNG_GROWTH_FACTOR = 1;
+
+/**
+ * The V8 flags `firnline check` sets, before the bundle loads (bin/bundle-loader.js CHECK_FLAG, which
+ * V8 hashes into the code caches the build makes with them) and again here.
+ */
+export const CHECK_V8_FLAGS = `--heap-growing-percent=${HEAP_GROWING_PERCENT} --semi-space-growth-factor=${YOUNG_GROWTH_FACTOR}`;
+
+/** Bounds heap growth for this process (see HEAP_GROWING_PERCENT, YOUNG_GROWTH_FACTOR); the findings are not affected. */
 export function boundHeapGrowth(): void {
-  setFlagsFromString(`--heap-growing-percent=${HEAP_GROWING_PERCENT}`);
+  setFlagsFromString(CHECK_V8_FLAGS);
 }
 
 /** How long a run goes before it shows progress, and how often the line is redrawn. */
@@ -60,6 +82,8 @@ export async function speedOptionsOf(
   ctx: Pick<CliContext, 'env' | 'stderr' | 'stderrIsTTY'>,
 ): Promise<{ options: Partial<CheckOptions>; done: () => void }> {
   const options = parseSpeedFlags(flags);
+  // Making a worker's heap sets V8's flags back to their bounds: the young generation's is set again.
+  options.onWorkersStarted = boundHeapGrowth;
   if (flags.cache !== false) {
     const { CACHE_FOLDER, ResultCache } = await import('../speed/cache.js');
     options.cache = new ResultCache(join(projectRoot, CACHE_FOLDER), VERSION);

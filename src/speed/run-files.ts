@@ -5,6 +5,7 @@
  * this thread and `jobs - 1` pool workers side by side. Outcomes come back in the order of the input whatever ran them, so the report does
  * not depend on the pool, the cache or the number of cores.
  */
+import { EventEmitter } from 'node:events';
 import { existsSync, statSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
@@ -35,6 +36,12 @@ export interface RunFilesOptions {
   jobs?: number;
   cache?: ResultCache;
   onProgress?: (done: number, total: number) => void;
+  /**
+   * Called once the pool's workers are running, before this thread checks a file beside them. V8
+   * sets its process-wide flags back to their bounds when it makes a worker's heap, so the command
+   * line sets its young generation's flag again here (cli/speed-options.ts YOUNG_GROWTH_FACTOR).
+   */
+  onWorkersStarted?: () => void;
 }
 
 /**
@@ -174,6 +181,10 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
       if (pool === undefined && poolable && enough()) {
         const { Tinypool } = await import('tinypool');
         pool = new Tinypool({ filename: worker, minThreads: workers, maxThreads: workers, idleTimeout: 1000, resourceLimits: { maxYoungGenerationSizeMb: WORKER_YOUNG_MB } });
+        if (options.onWorkersStarted !== undefined) {
+          await workersOnline(pool);
+          options.onWorkersStarted();
+        }
       }
       if (pool !== undefined) {
         pump();
@@ -199,6 +210,25 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
     await pool?.destroy();
   }
   return outcomes;
+}
+
+/**
+ * Resolves once each thread of `pool` runs its code (Node's `online`), or has ended or failed:
+ * its heap is made by then. Listened for in the tick the pool was made in, so none is missed.
+ */
+function workersOnline(pool: TinypoolType): Promise<void> {
+  return Promise.all(pool.threads.map((worker) => {
+    // tinypool's worker keeps its Node thread as `thread` (not in its types).
+    const thread = (worker as unknown as { thread?: unknown }).thread;
+    if (!(thread instanceof EventEmitter)) return undefined;
+    return new Promise<void>((resolve) => {
+      const done = (): void => {
+        for (const event of ['online', 'exit', 'error']) thread.off(event, done);
+        resolve();
+      };
+      for (const event of ['online', 'exit', 'error']) thread.once(event, done);
+    });
+  })).then(() => undefined);
 }
 
 /**
