@@ -48,12 +48,13 @@ function multipleFigures(x: number): number {
  */
 export function rewriteQuantity(q: Quantity, value: number, significant?: number): string {
   // "a rise of one third" corrected to 0.5 reads "a rise of 50 percent", not "0.5 third".
+  // Only a fraction no wider figure holds: "two and a half times" is a multiple of its own.
   const fraction = q.dimension === 'ratio' && !/\d/u.test(q.text) ? fractionWordsIn(q.text) : undefined;
-  if (fraction !== undefined) {
+  const atoms = findAtoms(q.text);
+  if (fraction !== undefined && !atoms.some((a) => a.start < fraction.end && a.end > fraction.start && (a.start < fraction.start || a.end > fraction.end))) {
     const shown = Math.abs(value) < 1 ? `${formatNumber(value * 100, 2)} percent` : `${formatNumber(value, multipleFigures(value))} times`;
     return q.text.slice(0, fraction.start) + shown + q.text.slice(fraction.end);
   }
-  const atoms = findAtoms(q.text);
   const atom = atoms[0];
   const figures = significant ?? correctionFigures(q);
   const id = q.statedUnit === '' ? q.unit : q.statedUnit;

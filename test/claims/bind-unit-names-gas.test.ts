@@ -28,7 +28,10 @@ describe('a figure in ppm names CO2', () => {
   });
 
   it('flags the highest natural level given only in ppm', async () => {
-    expect(await valueFlags('Over 800,000 years of ice-core air, the warm interglacials topped out at roughly 360 ppm.')).toContain('value.co2-highest-preindustrial-800kyr');
+    // "The interglacials topped out at" is each warm period's own peak (240-300 ppm, Lüthi et al. 2008),
+    // which the record's ceiling (about 300 ppm) bounds: either reference corrects the 360 ppm.
+    const flags = await valueFlags('Over 800,000 years of ice-core air, the warm interglacials topped out at roughly 360 ppm.');
+    expect(flags.filter((id) => ['value.co2-highest-preindustrial-800kyr', 'value.co2-interglacial-maximum-typical'].includes(id))).toHaveLength(1);
   });
 
   it('binds nothing when the sentence names another gas', () => {
