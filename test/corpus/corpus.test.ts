@@ -183,6 +183,13 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   // weighted toward reasoning errors (logic, scope, direction), to give the engineers fresh phrasings to
   // read; on the round's first code they caught 25/42, 27/42, 27/41 and 27/41, with false flags 3/83,
   // 3/91, 9/98 and 8/105 (ao-3 and ao-4 are in public phrasing).
+  // tuning-am-1..4 were the blind hold-out holdout-z, written in the eighteenth round and read, totals
+  // only, on the nineteenth round's first and last code (89/120 and 30/42 caught both times; false
+  // flags 3/258 and 6/85 both times).
+  'tuning-am-1': { recall: 0.68, falseFlags: 0.05 },
+  'tuning-am-2': { recall: 0.65, falseFlags: 0.05 },
+  'tuning-am-3': { recall: 0.75, falseFlags: 0.05 },
+  'tuning-am-4': { recall: 0.66, falseFlags: 0.1 },
   'tuning-ao-1': { recall: 0.55, falseFlags: 0.06 },
   'tuning-ao-2': { recall: 0.6, falseFlags: 0.06 },
   'tuning-ao-3': { recall: 0.6, falseFlags: 0.12 },
@@ -217,12 +224,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (87.6% measured over 106 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (87.1% measured over 114 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (94.6% measured over 106 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (94.4% measured over 114 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
