@@ -5,6 +5,7 @@
  */
 import type { Atom } from './find-atoms.js';
 import { halfPlace } from './precision.js';
+import { CHANGE_SUBJECT_NOUNS } from './reading-cues.js';
 
 /** Cardinals in words a multiplier is written with: units and teens, tens, and a ten joined to a unit ("twenty-five"). */
 const UNITS: Record<string, number> = {
@@ -70,9 +71,10 @@ const FRACTION_BEFORE = /(?:^|[^\p{L}])(?:by|to|in|about|nearly|almost|roughly|o
 const FRACTION_AFTER = /^[\s\u00A0]+(?:as|of|that)(?![\p{L}])/iu;
 /**
  * A change noun and "of" before a fraction make it a relative change: "a rise of one third", "an
- * increase of two-thirds", "a drop of a quarter" (plurals of the nouns too).
+ * increase of two-thirds", "a drop of a quarter" (plurals of the nouns too). The nouns are the ones the
+ * quantity reader already knows as a change (reading-cues.ts CHANGE_SUBJECT_NOUNS).
  */
-const FRACTION_OF_CHANGE = /(?:^|[^\p{L}])(?:rise|increase|jump|gain|climb|growth|drop|fall|decline|decrease|loss|reduction|cut|change|swing)s?[\s\u00A0]+of[\s\u00A0]+$/iu;
+const FRACTION_OF_CHANGE = new RegExp(String.raw`(?:^|[^\p{L}])(?:${CHANGE_SUBJECT_NOUNS.join('|')})s?[\s\u00A0]+of[\s\u00A0]+$`, 'iu');
 const NOT_FRACTION_BEFORE = /(?:^|[^\p{L}])(?:the|first|second|latter|former|other|last|next|and|southern|northern|eastern|western)[\s\u00A0]+$/iu;
 
 /**
