@@ -190,6 +190,13 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-am-2': { recall: 0.65, falseFlags: 0.05 },
   'tuning-am-3': { recall: 0.75, falseFlags: 0.05 },
   'tuning-am-4': { recall: 0.66, falseFlags: 0.1 },
+  // tuning-an-1..4 were the blind hold-out holdout-an, written in the nineteenth round and read, totals
+  // only, once on the twentieth round's first code (92/123 and 30/40 caught; false flags 12/251 and
+  // 8/92), then opened for tuning at that round's start; per set 32/43, 31/40, 29/40, 30/40 caught,
+  // false flags 7/84, 2/85, 3/82, 8/92.
+  'tuning-an-1': { recall: 0.7, falseFlags: 0.1 },
+  'tuning-an-3': { recall: 0.7, falseFlags: 0.06 },
+  'tuning-an-4': { recall: 0.7, falseFlags: 0.1 },
   'tuning-ao-1': { recall: 0.55, falseFlags: 0.06 },
   'tuning-ao-2': { recall: 0.6, falseFlags: 0.06 },
   'tuning-ao-3': { recall: 0.6, falseFlags: 0.12 },
