@@ -28,6 +28,7 @@ import { checkReferences } from './reference.js';
 import { relativeDistance } from './reference-distance.js';
 import { unitSlip } from './reference-slips.js';
 import { isVagueTime } from './arithmetic-vague.js';
+import { writtenInterval } from '../quantities/index.js';
 
 /** A sentence that ends as a question, past closing quotes, brackets and emphasis marks. */
 const QUESTION = /\?[\s"'”’)\]*_]*$/u;
@@ -78,14 +79,67 @@ export function unboundSlips(sentence: string, quantities: Quantity[], bindings:
     // its sentence that fits the value as written is the writer's own right one ("3,270 feet can't
     // be right: Dome C is 3,270 metres") or the figure it restates, which the restatement check reads.
     const fitsAsWritten = (r: ReferenceValue) => quantities.some((o) => o.dimension === q.dimension && relativeDistance(o.low, o.high, r) === 0);
-    if (candidates.length === 0 || candidates.some(fitsAsWritten)) return;
-    const fitting = candidates.filter((r) => unitSlip(r, q) !== undefined);
+    if (candidates.some(fitsAsWritten)) return;
+    // With no value its passage names in full that a confused reading fits, the figure may still be
+    // one value's own figure in a confused unit, a value the sentence names in part ("Peak ice was around 21 Ma").
+    const named = candidates.filter((r) => unitSlip(r, q) !== undefined);
+    const fitting = named.length > 0 ? named : ownFigureValues(q, terms, packs);
+    // A value the number as written fits (its hedge apart, reference.ts writtenOutside), or another
+    // figure of the sentence fits, is no slip's.
+    const written = writtenInterval(q).value;
+    const fitsOwn = (r: ReferenceValue) => relativeDistance(written, written, r) === 0 || quantities.some((o) => o !== q && o.dimension === q.dimension && relativeDistance(o.low, o.high, r) === 0);
+    if (named.length === 0 && fitting.some(fitsOwn)) return;
     const [only] = fitting;
     if (only === undefined || fitting.length > 1) return;
     const slip = checkReferences(sentence, quantities, [{ quantityIndex: i, referenceId: only.id }], packs).flags.find((f) => f.ruleId === 'unit.scale-slip');
     if (slip !== undefined) flags.push(slip);
   });
   return flags;
+}
+
+/**
+ * How close a confused reading must come to a value's own figure, as a share of that figure: "about
+ * 6 °F" read as °C (5.35-6.65) holds the 6 °C of the global glacial cooling; "some 4 km" read as
+ * miles (6.0-6.9 km) is no figure's own reading but a wrong number.
+ */
+const OWN_FIGURE_WIDTH = 0.25;
+
+/**
+ * The values a figure that its passage leaves unbound is the own figure of, read in a confused unit:
+ * the value's best estimate, or its one figure, lies inside the figure's other reading, which is
+ * narrow, and the sentence names one of the value's groups with no veto and no other attribute of
+ * the dimension. "Peak ice was around 21 Ma" (the glacial peak, 21 ka; "peak" names it only in
+ * part), "a long run of ice ages that started about 2.58 thousand years ago" (the base of the
+ * Quaternary, 2.58 million). Of several such values, those the passage leaves fewest groups of
+ * unnamed are kept, then those it names most groups of, and only one of them may be left: a figure that is the own figure of two values says nothing.
+ * A share written in percent is left alone: it is as often a relative change as a share of the air.
+ */
+function ownFigureValues(q: Quantity, terms: NamedTerms, packs: LoadedPacks): ReferenceValue[] {
+  if (q.statedUnit === '%') return [];
+  const { subjects, attributes } = termSorts(packs, q.dimension);
+  const { own, named } = terms;
+  const written = writtenInterval(q).value;
+  const unnamed = (r: ReferenceValue) => r.binding.all.filter((g) => !g.some((id) => named.has(id))).length;
+  // "that 800 yr number is old" in a thread on the lag: a value the number fits as written, which
+  // the passage names as fully as the slip's value, may be what the figure speaks of.
+  const asWritten = packs.references.filter((r) => r.dimensions.includes(q.dimension) && relativeDistance(written, written, r) === 0 && unnamed(r) < r.binding.all.length);
+  const scored = packs.references.flatMap((r) => {
+    if (!r.dimensions.includes(q.dimension) || r.binding.implied === false || r.binding.none.some((id) => own.has(id))) return [];
+    const groups = r.binding.all;
+    if (!groups.some((g) => g.some((id) => own.has(id)))) return [];
+    if (asWritten.some((w) => unnamed(w) <= unnamed(r))) return [];
+    const its = new Set(groups.flat());
+    if ([...own].some((id) => attributes.has(id) && !subjects.has(id) && !its.has(id))) return [];
+    const figure = r.central ?? (r.low === r.high ? r.low : undefined);
+    if (figure === undefined || figure === 0) return [];
+    const slip = unitSlip(r, q);
+    if (slip === undefined || figure < slip.low || slip.high < figure || slip.high - slip.low > Math.abs(figure) * OWN_FIGURE_WIDTH) return [];
+    const filled = groups.filter((g) => g.some((id) => named.has(id))).length;
+    return [{ r, missing: groups.length - filled, filled }];
+  });
+  const fewest = Math.min(...scored.map((s) => s.missing));
+  const most = Math.max(...scored.filter((s) => s.missing === fewest).map((s) => s.filled));
+  return scored.filter((s) => s.missing === fewest && s.filled === most).map((s) => s.r);
 }
 
 /** The terms the sentence names, those it and its passage name, and whether it answers a question naming nothing itself. */
