@@ -75,3 +75,37 @@ describe('what it leaves alone', () => {
     expect(unboundSlips(text, qs, [], [], packs, [])).toHaveLength(1);
   });
 });
+
+/**
+ * A figure that is one value's own figure in a confused unit, the value named only in part.
+ * Values: global mean cooling at the Last Glacial Maximum about 6 °C, within about 4-7 °C (IPCC AR6
+ * WG1, Gulev et al. 2021; Tierney et al. 2020, Nature 584); the base of the Quaternary 2.58 million
+ * years ago (Gibbard et al. 2010, Journal of Quaternary Science 25); the Last Glacial Maximum
+ * chronozone centred on about 21,000 years ago (Clark et al. 2009, Science 325, from memory).
+ * Factors: a difference of 1 °F = 5/9 K (NIST SP 811, 2008, Appendix B.9); k = 10^3, M = 10^6 (SI).
+ */
+describe("a figure that is one value's own figure in a confused unit", () => {
+  const onTopic = 'Ice cores from Antarctica hold bubbles of old air.';
+  it.each([
+    [`${onTopic}\n\nAveraged over the whole planet, it was about 6 °F colder than in the eighteenth century.`, '6 °C'],
+    [`${onTopic} Geologists date the start of the present run of ice ages to some 2.58 thousand years ago.`, '2.58 million years ago'],
+    [`${onTopic} The great freeze peaked around 21 Ma, when ice buried most of Canada.`, '21 ka'],
+  ])('flags it against that value: %s', async (text, meant) => {
+    const slips = await slipsOf(text);
+    expect(slips).toHaveLength(1);
+    expect(slips[0]?.[1]).toContain(meant);
+  });
+
+  it.each([
+    // Right as written: 11 °F is 6.1 °C.
+    `${onTopic}\n\nAveraged over the whole planet, it was about 11 °F colder than in the eighteenth century.`,
+    // Read as °C, 4 lies in the range but is no value's own figure: a wrong number, not a slip.
+    `${onTopic}\n\nAveraged over the whole planet, it was roughly 4 °F colder than in the eighteenth century.`,
+    // 1.8 million years ago was the Pleistocene's older base, no figure of the pack's.
+    `${onTopic} Geologists date the start of the present run of ice ages to some 1.8 thousand years ago.`,
+    // 800 years is the lag the passage speaks of, as written; read as 800,000 it would be a record span.
+    'The thread turned to the CO2 lag. That 800 yr number is old, and it came from a different record.',
+  ])('no unit slip: %s', async (text) => {
+    expect(await slipsOf(text)).toEqual([]);
+  });
+});
