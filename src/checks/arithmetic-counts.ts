@@ -40,10 +40,35 @@ function isSpacing(text: string, q: Quantity): boolean {
   // "100,000 years each gives 800,000 years": an "each" after a span of time belongs to that span.
   const eachOfFigure = WORDS.timeUnits.has(nearWords.at(-4)?.text ?? '');
   if (near.length === 3 && !eachOfFigure && WORDS.spacingBefore.has(near[0] ?? '') && !WORDS.notASpan.has(near[1] ?? '') && !qsBetween(text, q)) return true;
+  // "each glacial cycle lasted about 80,000 years", "each one ran for 150,000 years": a member named
+  // after "each" or "every", then what it did, in the clause before the figure.
+  if (memberBefore(text, q)) return true;
   // "cycles of 100,000 years each", "at about 100,000 years apiece": the length of each member.
-  const next = wordsAfter(text, q, 1)[0] ?? '';
+  const [next = '', member = ''] = wordsAfter(text, q, 2);
   if (next === 'each' || next === 'apiece') return true;
+  // "about 125,000 years per cycle": the figure per member, the member a noun and no unit of time.
+  if (next === 'per' && member !== '' && !WORDS.timeUnits.has(member) && /^\s*[\p{L}]+\s+[\p{L}]+/u.test(text.slice(q.end))) return true;
   return /^-?[\p{L}]*$/u.test(q.text.split(/[\s\u00A0-]/u).at(-1) ?? '') && /-/u.test(q.text) && WORDS.spacingNouns.has(next);
+}
+
+/**
+ * True when the clause before a span of time opens its subject with "each" or "every" and names a
+ * member that is no unit of time: "each glacial cycle lasted about", "each one ran for". The words
+ * between are at most five, with no figure, punctuation or word of a span ("last", "past") among them.
+ */
+function memberBefore(text: string, q: Quantity): boolean {
+  const from = Math.max(0, q.start - 60);
+  const clause = text.slice(from, q.start);
+  const cut = Math.max(...[',', ';', ':', '(', '\n'].map((c) => clause.lastIndexOf(c)));
+  const words = wordsIn(text, from + cut + 1, q.start).slice(-6);
+  const at = words.findLastIndex((x) => x.text === 'each' || x.text === 'every');
+  if (at < 0 || at === words.length - 1 || /\d/u.test(text.slice(words[at]?.end ?? 0, q.start))) return false;
+  // "100,000 years each gives": an "each" after a figure or its unit belongs to that figure.
+  const eachAt = words[at]?.start ?? 0;
+  if (WORDS.timeUnits.has(wordsIn(text, Math.max(0, eachAt - 16), eachAt).at(-1)?.text ?? '') || /\d[\s\u00A0]*$/u.test(text.slice(0, eachAt))) return false;
+  const member = words[at + 1]?.text ?? '';
+  if (WORDS.timeUnits.has(member) || WORDS.notASpan.has(member)) return false;
+  return words.slice(at + 1).every((x) => !WORDS.notASpan.has(x.text) && !WORDS.timeUnits.has(x.text));
 }
 
 /** True when a digit stands in the few words before the figure (then "each" belongs to another figure). */
@@ -64,7 +89,11 @@ function spanToPresent(text: string, qs: Quantity[]): { value: Derived; text: st
 
 /** "8 cycles", "about 70 samples": a count of things. */
 const isCount = (text: string, q: Quantity): boolean =>
-  q.dimension === 'count' || (q.dimension === 'number' && /s$/u.test(wordsAfter(text, q, 1)[0] ?? '') && !WORDS.timeUnits.has(wordsAfter(text, q, 1)[0] ?? ''));
+  q.dimension === 'count' || (q.dimension === 'number' && (/s$/u.test(wordsAfter(text, q, 1)[0] ?? '') || partitive(wordsAfter(text, q, 2))) && !WORDS.timeUnits.has(wordsAfter(text, q, 1)[0] ?? ''));
+
+/** "twelve of them", "nine of those": a count of the members a pronoun stands for. */
+const partitive = ([of, which]: string[]): boolean => of === 'of' && PARTITIVE_PRONOUNS.has(which ?? '');
+const PARTITIVE_PRONOUNS = new Set(['them', 'those', 'these']);
 
 /** True when the text between the inputs and the result draws it from them. */
 function drawn(text: string, from: number, to: number): boolean {
@@ -78,6 +107,13 @@ export function seriesSpacings(text: string, qs: Quantity[], pairs: Pair[]): Ser
   const spans = qs.filter((q) => q.dimension === 'duration' && !isSpacing(text, q) && (WORDS.spanBefore.has(wordBefore(text, q)) || wordsAfter(text, q, 1)[0] === 'of'));
   const spacings = qs.filter((q) => isSpacing(text, q));
   const counts = qs.filter((q) => isCount(text, q));
+  // "800,000 years and eight cycles, so each cycle lasted ...": with a count and a spacing, the one
+  // other span of time before the later of them is the whole, whatever word stands before it.
+  if (spans.length === 0 && dated === undefined && counts.length === 1 && spacings.length === 1) {
+    const later = Math.max((counts[0] as Quantity).start, (spacings[0] as Quantity).start);
+    const loose = qs.filter((q) => q.dimension === 'duration' && !isSpacing(text, q));
+    if (loose.length === 1 && (loose[0] as Quantity).end <= later) spans.push(loose[0] as Quantity);
+  }
   const span: { value: Derived; text: string; end: number } | undefined =
     spans.length === 1 && dated === undefined ? { value: w(spans[0] as Quantity), text: (spans[0] as Quantity).text, end: (spans[0] as Quantity).end } : spans.length === 0 && dated !== undefined ? { value: dated.span, text: dated.measures.replace(/^the time /u, ''), end: Math.max(...qs.filter((q) => q.dimension === 'age').map((q) => q.end)) } : undefined;
   const whole = span ?? (spans.length === 0 && dated === undefined ? spanToPresent(text, qs) : undefined);

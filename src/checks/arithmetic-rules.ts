@@ -18,6 +18,7 @@ import { changesInParagraph, comparisonsInParagraph } from './arithmetic-paragra
 import { amountsAtPace, changesFromLevels, paceRatiosInParagraph, paceRatiosInSentence, ratesInParagraph } from './arithmetic-solver.js';
 import { readArithmetic } from './arithmetic-reader/relations.js';
 import { seriesSpacings } from './arithmetic-counts.js';
+import { periodAmounts } from './arithmetic-periods.js';
 import { holdsPhrase, WORDS, wordsIn } from './arithmetic-reader/word-classes.js';
 import { changesOver, comesToRate, comparesToNext, findPairs, fractionOf, isApposedChange, isConsequenceChange, isPaceRatio, isSpanOfChange, isSpanOfPair, isStatedChange, isStatedRatio, timesTheMeasure, type Pair } from './arithmetic-frames.js';
 
@@ -356,7 +357,8 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     const paragraph = [...found, ...notYet(found, changesInParagraph(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
     const levels = [...paragraph, ...notYet(paragraph, changesFromLevels(t, qs, p, earlier).filter((f) => f.stated.dimension !== 'percent'))];
     const read_ = [...levels, ...notYet(levels, read('arith.change', t, qs, earlier))];
-    return [...read_, ...notYet(read_, amountsAtPace(t, qs, earlier).filter((f) => f.stated.dimension !== 'duration'))];
+    const paced = [...read_, ...notYet(read_, amountsAtPace(t, qs, earlier).filter((f) => f.stated.dimension !== 'duration'))];
+    return [...paced, ...notYet(paced, periodAmounts(t, qs, earlier).filter((f) => !RATE_OF[f.stated.dimension]))];
   } },
   { id: 'arith.duration', summary: 'A stated duration equals the time between the stated start and end dates.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...durations(t, qs, p), ...durationsAcross(t, qs, prev)];
@@ -372,7 +374,9 @@ export const ARITHMETIC_RULES: readonly ArithmeticRule[] = [
     // "At 2.4 ppm a year, adding 100 ppm takes about 4 years": a time worked from the pace makes the
     // pace its premise, not a result of the amount and the time.
     const premise = amountsAtPace(t, qs, earlier).some((f) => f.stated.dimension === 'duration');
-    return premise ? all.filter((f) => !RATE_OF[f.stated.dimension]) : all;
+    const kept = premise ? all.filter((f) => !RATE_OF[f.stated.dimension]) : all;
+    // "at 3 ppb per yr, that's about 40 ppb a decade": a pace told again per a longer period.
+    return [...kept, ...notYet(kept, periodAmounts(t, qs, earlier).filter((f) => RATE_OF[f.stated.dimension] !== undefined))];
   } },
   { id: 'arith.ratio', summary: 'A stated ratio or percentage change agrees with the two values it compares.', derive: (t, qs, p, prev, earlier = []) => {
     const found = [...ratios(t, qs, p), ...paceRatiosAcross(t, qs, prev)];

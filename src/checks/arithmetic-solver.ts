@@ -220,7 +220,8 @@ export function changesFromLevels(text: string, qs: Quantity[], pairs: Pair[], e
     if (stated === undefined || (change !== undefined && percent !== undefined)) return [];
     const isPercent = stated === percent;
     if (PER_TIME_AFTER.test(text.slice(stated.end))) return [];
-    if (qs.some((q) => q.dimension === 'duration' || RATE_OF[q.dimension] !== undefined || (q.dimension === 'age' && q.start > stated.start))) return [];
+    // "a rise of about 30 percent in two centuries": the time the change took, right after it, keeps it the change.
+    if (qs.some((q) => (q.dimension === 'duration' && !isTimeTaken(text, stated, q)) || RATE_OF[q.dimension] !== undefined || (q.dimension === 'age' && q.start > stated.start))) return [];
     const here: Read = { text, qs: qs.filter((q) => q !== stated), pairs, distance: 0 };
     const just = here.qs.filter((q) => q.end <= stated.start).at(-1);
     // "By 2021 they held 412 ppm, an increase of about 30 percent": a percentage in apposition to a
@@ -269,6 +270,10 @@ export function changesFromLevels(text: string, qs: Quantity[], pairs: Pair[], e
     return [{ stated, computed: facing(found.value, stated.value), measures: found.measures, basis }];
   });
 }
+
+/** The time a stated change took, right after it: "30 percent in two centuries", "140 ppm over about 250 years". */
+const isTimeTaken = (text: string, change: Quantity, q: Quantity): boolean => q.start >= change.end && TIME_TAKEN.test(text.slice(change.end, q.start));
+const TIME_TAKEN = new RegExp(String.raw`^${S}+(?:in|over|across|within|during)${S}+$`, 'iu');
 
 /** A clause that opens by naming a base before the level: "Against the 1750 level of", "relative to the glacial". */
 const NAMED_BASE = new RegExp(String.raw`(?:^|[,;:(—–])${S}*(?:against|relative${S}+to|compared${S}+(?:with|to)|measured${S}+against|set${S}+against)${S}+[^\d,;:.!?]{0,40}(?:\d{4}${S}+[^\d,;:.!?]{0,30})?$`, 'iu');

@@ -93,7 +93,8 @@ function scaledNumber(stated: number, scale: number, word: string, figures: numb
   // million, digits with separators say it plainly (common practice in copy-editing), unless the draft
   // itself wrote a decimal ("2.5 thousand years").
   if (!decimals && word.toLowerCase() === 'thousand' && Math.abs(stated) < 1e6) return formatNumber(stated, figures);
-  if (Math.abs(stated) >= scale || word === '') return `${formatNumber(stated / scale, figures)} ${word}`.trimEnd();
+  // "80k" corrected reads "100k", as the draft wrote it, with no space before a scale letter.
+  if (Math.abs(stated) >= scale || word === '') return `${formatNumber(stated / scale, figures)}${word.length === 1 ? '' : ' '}${word}`.trimEnd();
   const [smaller, size] = SCALE_WORDS.find(([, size]) => Math.abs(stated) >= size) ?? ['', 1];
   return size === 1 ? formatNumber(stated, figures) : `${formatNumber(stated / size, figures)} ${smaller}`;
 }
