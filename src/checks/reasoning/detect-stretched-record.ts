@@ -9,11 +9,13 @@
  * Two structures:
  *   - A record's span, a number of years said of a record (a record word, cue words `record`, or a
  *     record of the lexicon: an ice core, a CO2 station, within its clause) or the years since its
- *     first year ("running since 1958"), in the sentence or one of the two before, and in the sentence
- *     a CO2 claim over a span at least three times as long: all of the Earth's history (cue words
- *     `all-history`: "the whole history of the planet", "ever" after a negation) or a number of years
- *     ("for the last million years", "Earth's 4.5-billion-year history"). A sentence that names a
- *     record of the longer span too (an ice core beside a station's years) passes.
+ *     first year in a clause naming a record ("running since 1958"), and in the sentence a CO2 claim
+ *     over a span at least three times as long: all of the Earth's history (cue words `all-history`:
+ *     "the whole history of the planet", "ever" after a negation or a superlative; a span of a billion
+ *     years or more, "Earth's 4.5-billion-year history"), whose record may stand in one of the two
+ *     sentences before, or any span named before it in its sentence; or a number of years ("for the
+ *     last million years"), whose record must stand before it in its own sentence. A sentence that
+ *     names an ice core beside a station's years passes.
  *   - One year's change of CO2 ("the 2024 jump of 3.5 ppm": a year beside a change word and a ppm
  *     figure), in the sentence or the one before, told as every year's (cue words `every-year`:
  *     "every single year", "year after year") with the same figure or "that fast" (cue words
@@ -55,8 +57,11 @@ function recordSpan(s: ReadSentence, isRecord: (i: number) => boolean, now: numb
     const clause = s.words[at]?.clause;
     return s.words.some((w, i) => w.clause === clause && isRecord(i) && Math.abs(i - at) <= 8);
   });
+  // "running since 1958" counts only for a record named in its clause ("careful dating since 2012" is none).
   const since = SINCE.exec(s.text);
-  const fromSince = since === null ? [] : [now - Number(since[1])];
+  const sinceAt = since === null ? -1 : s.words.findIndex((w) => w.start >= (since.index ?? 0));
+  const sinceRecord = since !== null && s.words.some((w, i) => w.clause === s.words[sinceAt]?.clause && isRecord(i));
+  const fromSince = since === null || !sinceRecord ? [] : [now - Number(since[1])];
   const all = [...spans.map((x) => x.years), ...fromSince].filter((y) => y > 0);
   return all.length === 0 ? undefined : Math.min(...all);
 }
@@ -73,8 +78,9 @@ function detectLongerSpan(input: DetectInput, now: number): Cue[] {
   // "ever" claims all time only after a negation or a superlative ("never ... ever", "highest ever"),
   // not as a record's own reach ("ever recorded", "ever measured").
   const claims = [
-    ...history.filter((h) => !/^ever$/iu.test(s.text.slice(h.start, h.end)) || everClaimsAllTime(s, h.start)).map((h) => ({ years: Infinity, start: h.start, end: h.end })),
-    ...claimSpans,
+    ...history.filter((h) => !/^ever$/iu.test(s.text.slice(h.start, h.end)) || everClaimsAllTime(s, h.start)).map((h) => ({ years: Infinity, start: h.start, end: h.end, all: true })),
+    // "Earth's whole 4.5-billion-year history": a span of the Earth's age is all of its history.
+    ...claimSpans.map((c) => ({ ...c, all: c.years >= 1e9 })),
   ];
   if (claims.length === 0) return [];
   const recordWords = input.mayHold('record') ? findPhrases(input.sentence, input.words('record')).map((r) => r.start) : [];
@@ -83,9 +89,15 @@ function detectLongerSpan(input: DetectInput, now: number): Cue[] {
   for (const claim of claims) {
     // The record's span: in this sentence before the claim, else in one of the two sentences before.
     const before = s.text.slice(0, claim.start);
-    const ownSpan = spansIn(before).length > 0 || SINCE.test(before) ? recordSpan({ ...s, text: before, words: s.words.filter((w) => w.end <= claim.start) } as ReadSentence, isRecordHere, now) : undefined;
+    const beforeSpans = spansIn(before);
+    const recordHere = beforeSpans.length > 0 || SINCE.test(before) ? recordSpan({ ...s, text: before, words: s.words.filter((w) => w.end <= claim.start) } as ReadSentence, isRecordHere, now) : undefined;
+    // "Never above 300 ppm in 800,000 years; so never in Earth's whole history": before a claim of all
+    // history, a span the sentence names first is what it reasons from, record word or not.
+    const ownSpan = recordHere ?? (claim.all && beforeSpans.length > 0 ? Math.min(...beforeSpans.map((x) => x.years)) : undefined);
     const earlier = [read(index - 1), read(index - 2)].flatMap((r) => (r === undefined ? [] : [r.s]));
-    const span = ownSpan ?? earlier.map((b) => recordSpan(b, isRecordElsewhere(b), now)).find((x) => x !== undefined);
+    // A number of years is set against a record's span of its own sentence only: spans of the sentences
+    // before ("the age gap is only about 50 years") need not be the record's whole reach.
+    const span = ownSpan ?? (claim.all ? earlier.map((b) => recordSpan(b, isRecordElsewhere(b), now)).find((x) => x !== undefined) : undefined);
     if (span === undefined || claim.years < 3 * span) continue;
     // A record of the longer span named beside a station's years ("Mauna Loa since 1958 and the ice cores").
     if (ownSpan !== undefined && span < 1000 && s.of('entities', 'ice-core').length > 0) continue;
