@@ -35,6 +35,10 @@ describe('a figure handed unchanged across scales', () => {
     'The ice cores of Greenland tell us this dale was about 20 degrees colder at the glacial peak.',
     // a polar figure to the globe, "that much" standing for it
     'Antarctica was about 9 °C colder at the glacial maximum.\nIt stands to reason the entire Earth was that much colder too.',
+    // one place's figure handed to the globe, "which is how much" pointing back to it
+    'Out here on the ice plateau the thermometer swung by about 9 °C between glacial maximum and interglacial, which is how much the entire planet changed.',
+    // a clause opened by "therefore" after the target
+    'The whole globe was roughly 6 °C colder at the glacial maximum.\nThe top of the Antarctic ice sheet would therefore have been about 6 °C colder as well.',
     // a wider scale after a sameness phrase
     'At the glacial maximum our parish was about 6 °C colder, the same as the global average.',
   ])('flags %s', async (text) => {
@@ -51,6 +55,8 @@ describe('each figure kept with its scale, or scaled', () => {
     // the same figure restated at its own scale with no word that hands it on
     'Global average cooling at the glacial maximum was about 6 °C.\nCentral Greenland cooled by about 20 °C, far more than the global average.',
     'Some say the whole globe was 20 °C colder at the glacial maximum.\nGreenland\'s summit really did run about twenty degrees colder, but that is one spot on a high ice sheet.',
+    // one place's own figure beside a different global one
+    'Our valley was about 12 °C colder at the glacial maximum, while the world as a whole was about 6 °C colder.',
     // the same figure, scaled by a multiple
     'At the glacial maximum global temperature was about 5 °C lower than today, so Antarctic temperature swung by roughly 10 °C, around twice the global change.',
   ])('leaves clean: %s', async (text) => {

@@ -26,6 +26,8 @@ describe('a short record stretched to a longer span', () => {
     'Our 800,000-year core record keeps CO2 under 300 ppm.\nSo CO2 has not passed 300 ppm at any point in the history of the planet.',
     'In 800,000 years it never passed 300 ppm, hence CO2 has never passed 300 ppm in the planet\'s 4.5-billion-year history.',
     'Measurements at Mauna Loa, running since 1958, prove that CO2 has risen without a pause for the last million years.',
+    // the span named in a sentence about CO2 just before the claim of all history
+    'The bubbles show CO2 held below about 300 ppm for those 800,000 years.\nSo CO2 never passed 300 ppm in the entire history of the Earth.',
     // one year's change told as every year's, or over a century
     'The 2023 rise of 3 ppm in CO2 shows that we now add 3 ppm every single year.',
     'The 2024 increase of 3.5 ppm sets the pace, so CO2 will climb by roughly 350 ppm in the next century.',

@@ -40,7 +40,8 @@ const WRONG_MOVES: Readonly<Record<Scale, readonly Scale[]>> = {
   global: ['polar', 'place'],
   hemisphere: ['place'],
   polar: ['global', 'hemisphere', 'place'],
-  place: [],
+  // "Temperatures here swung by 9 °C, which is how much the whole Earth cooled": one place's figure is no wider one.
+  place: ['global', 'hemisphere'],
 };
 
 /** Words after a bare figure that say it is a temperature or a height ("6 C", "twenty degrees", "134 m"). */
@@ -103,7 +104,8 @@ function detect(input: DetectInput): Cue[] {
   if (here === undefined) return [];
   const s = here.s;
   const figures = scaleFigures(s);
-  const muchAt = s.words.findIndex((w, k) => (w.text === 'that' || w.text === 'as') && s.words[k + 1]?.text === 'much');
+  // "that much", "as much", and "which is how much" pointing back: the source's figure as it stands.
+  const muchAt = s.words.findIndex((w, k) => ((w.text === 'that' || w.text === 'as') && s.words[k + 1]?.text === 'much') || (w.text === 'how' && s.words[k + 1]?.text === 'much' && COPULAS.has(s.words[k - 1]?.text ?? '')));
   if (figures.length === 0 && muchAt < 0) return [];
   const scales = lexiconScales(s);
   const before = [read(index - 1), read(index - 2)].flatMap((r) => (r === undefined ? [] : [r.s]));
@@ -123,23 +125,25 @@ function detect(input: DetectInput): Cue[] {
 
   for (const target of targets) {
     const segment = s.words[target.first]?.segment;
-    // A scale that owns the words before it in its own segment is a target only as the segment's subject.
-    const own = figures.filter((f) => s.words[f.at]?.segment === segment && f.at > target.last);
-    const much = muchAt > target.last && s.words[muchAt]?.segment === segment;
+    // The target's figures follow it in its clause ("The summit would therefore have been about 6 °C colder").
+    const clause = s.words[target.first]?.clause;
+    const own = figures.filter((f) => s.words[f.at]?.clause === clause && f.at > target.last);
+    // "that much" after the target, or "which is how much" opening its segment before it.
+    const much = muchAt >= 0 && s.words[muchAt]?.clause === clause && (muchAt > target.last || s.words[muchAt]?.segment === segment);
     if (own.length === 0 && !much) continue;
     // A scale of the target's kind in the same segment is the target itself ("here at Dome C").
     const kind = scales.find((o) => o.scale !== 'place' && ((o.first > target.last && o.first - target.last <= 3) || (o.last < target.first && target.first - o.last <= 2)))?.scale;
     const scale = target.scale === 'place' && kind !== undefined ? kind : target.scale;
     // A contrast between the source and the target, or anywhere after the source ("..., around twice the global change").
     const apart = (from: number) => setApart.some((k) => k >= from);
-    const segmentEnd = s.words.findIndex((w, k) => k > target.last && w.segment !== segment);
+    const segmentEnd = s.words.findIndex((w, k) => k > target.last && w.clause !== clause);
     const handsOn = (from: number) => carried.some((k) => k >= from && (segmentEnd < 0 || k < segmentEnd));
     const figureEnd = (own[0]?.at ?? muchAt) + 1;
     const opener = ['our', 'my', 'your', 'this', 'these'].includes(s.words[target.first - 1]?.text ?? '') ? target.first - 1 : target.first;
     const cue = { start: s.words[opener]?.start ?? 0, end: s.words[Math.max(figureEnd, target.last)]?.end ?? s.text.length };
     // The source in an earlier segment of this sentence.
-    for (const source of scales) {
-      if (source.last >= target.first || !WRONG_MOVES[source.scale].includes(scale)) continue;
+    for (const source of targets) {
+      if (source === target || source.last >= target.first || !WRONG_MOVES[source.scale].includes(scale)) continue;
       if (apart(source.first)) continue;
       // The source's own figures stand between it and the target ("Globally it was 6 °C colder, so our valley ...").
       const theirs = figures.filter((f) => f.at > source.last && f.at < target.first);

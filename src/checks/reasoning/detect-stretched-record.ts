@@ -97,13 +97,22 @@ function detectLongerSpan(input: DetectInput, now: number): Cue[] {
     const earlier = [read(index - 1), read(index - 2)].flatMap((r) => (r === undefined ? [] : [r.s]));
     // A number of years is set against a record's span of its own sentence only: spans of the sentences
     // before ("the age gap is only about 50 years") need not be the record's whole reach.
-    const span = ownSpan ?? (claim.all ? earlier.map((b) => recordSpan(b, isRecordElsewhere(b), now)).find((x) => x !== undefined) : undefined);
+    // Before a claim of all history, a sentence about CO2 that names a span ("CO2 never went above
+    // 300 ppm in all those 800,000 years. So 300 ppm was never beaten in the history of the planet")
+    // is what it reasons from, record word or not.
+    const reasonedFrom = (b: ReadSentence) => recordSpan(b, isRecordElsewhere(b), now) ?? (b.of('entities', 'co2').length > 0 ? minimum(spansIn(b.text).map((x) => x.years)) : undefined);
+    const span = ownSpan ?? (claim.all ? earlier.map(reasonedFrom).find((x) => x !== undefined) : undefined);
     if (span === undefined || claim.years < 3 * span) continue;
     // A record of the longer span named beside a station's years ("Mauna Loa since 1958 and the ice cores").
     if (ownSpan !== undefined && span < 1000 && s.of('entities', 'ice-core').length > 0) continue;
     return [{ start: claim.start, end: claim.end }];
   }
   return [];
+}
+
+/** The least of `values`, or undefined when there are none. */
+function minimum(values: readonly number[]): number | undefined {
+  return values.length === 0 ? undefined : Math.min(...values);
 }
 
 /** "never ... ever", "highest ever": an "ever" at `offset` after a negation or a superlative, not before a verb of recording. */
