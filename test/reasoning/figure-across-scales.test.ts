@@ -57,6 +57,8 @@ describe('each figure kept with its scale, or scaled', () => {
     'Some say the whole globe was 20 °C colder at the glacial maximum.\nGreenland\'s summit really did run about twenty degrees colder, but that is one spot on a high ice sheet.',
     // one place's own figure beside a different global one
     'Our valley was about 12 °C colder at the glacial maximum, while the world as a whole was about 6 °C colder.',
+    // "that much" that measures no change
+    'Antarctica swings about twice as much as the global mean, so nine degrees there is about five for the whole planet.\nAnd in the Younger Dryas Antarctica warmed a little, I recall that much.',
     // the same figure, scaled by a multiple
     'At the glacial maximum global temperature was about 5 °C lower than today, so Antarctic temperature swung by roughly 10 °C, around twice the global change.',
   ])('leaves clean: %s', async (text) => {

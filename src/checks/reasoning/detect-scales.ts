@@ -13,8 +13,9 @@
  * `here`: "round here"). A figure of the globe or a hemisphere is no figure of one place, and the
  * globe's mean is no polar figure either; a polar figure is no figure of a hemisphere, the globe or
  * another place (the polar swings are two to four times the global mean, and local change varied
- * widely). The target is a scale named in a segment that carries a temperature or height figure (or
- * "that much"); the source is another scale that:
+ * widely); nor is one place's figure a hemisphere's or the globe's. The target is a scale whose
+ * clause carries a temperature or height figure after it (or "that much", or "which is how much"
+ * opening its segment); the source is another scale that:
  *   - states the same figure (or a range holding it) in an earlier segment of the sentence or in one
  *     of the two sentences before ("Global sea level was about 134 m lower, so the shoreline here was
  *     134 m lower as well"); "that much" takes the source's figure as it stands;
@@ -23,8 +24,8 @@
  *   - or follows the target's figure after a sameness phrase (cue words `same`: "about 6 °C colder,
  *     the same as the global average").
  * A contrast between them or in the target's segment (cue words `contrast`: "unlike", "twice",
- * "not", "than" before a scale) scales the figure, and passes. A polar figure handed to the globe
- * inside one sentence is `scope.regional-record-as-global`'s, which stands first in the pack.
+ * "not", "than" before a scale) scales the figure, and passes. Where `scope.regional-record-as-global`
+ * flags the same words (a polar figure handed to the globe), its flag stands first in the pack and wins.
  */
 import { findPhrases, type PhraseHit } from '../../claims/frames-match.js';
 import { parseQuantities } from '../../quantities/index.js';
@@ -105,7 +106,10 @@ function detect(input: DetectInput): Cue[] {
   const s = here.s;
   const figures = scaleFigures(s);
   // "that much", "as much", and "which is how much" pointing back: the source's figure as it stands.
-  const muchAt = s.words.findIndex((w, k) => ((w.text === 'that' || w.text === 'as') && s.words[k + 1]?.text === 'much') || (w.text === 'how' && s.words[k + 1]?.text === 'much' && COPULAS.has(s.words[k - 1]?.text ?? '')));
+  // "that much" measures a change only beside one: a comparative after it ("that much colder") or a
+  // change word before it ("jumped that much"); "I remember that much" measures nothing.
+  const measures = (k: number) => /er$/u.test(s.words[k + 2]?.text ?? '') || s.inside(k - 1, 'changes');
+  const muchAt = s.words.findIndex((w, k) => ((w.text === 'that' || w.text === 'as') && s.words[k + 1]?.text === 'much' && measures(k)) || (w.text === 'how' && s.words[k + 1]?.text === 'much' && COPULAS.has(s.words[k - 1]?.text ?? '')));
   if (figures.length === 0 && muchAt < 0) return [];
   const scales = lexiconScales(s);
   const before = [read(index - 1), read(index - 2)].flatMap((r) => (r === undefined ? [] : [r.s]));
