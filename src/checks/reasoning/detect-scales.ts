@@ -94,11 +94,6 @@ function sameFigure(t: number, source: readonly Figure[]): boolean {
   });
 }
 
-/** Words that stand for the source's figure as it stands ("that much colder", "as much"). */
-function takesFigure(s: ReadSentence, from: number, to: number): boolean {
-  return s.words.slice(from, to).some((w, k, all) => (w.text === 'that' || w.text === 'as' || w.text === 'the') && (all[k + 1]?.text === 'much' || all[k + 1]?.text === 'same'));
-}
-
 function detect(input: DetectInput): Cue[] {
   const { index, read } = input;
   const here = read(index);

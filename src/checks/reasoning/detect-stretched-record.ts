@@ -11,7 +11,7 @@
  *     record of the lexicon: an ice core, a CO2 station, within its clause) or the years since its
  *     first year in a clause naming a record ("running since 1958"), and in the sentence a CO2 claim
  *     over a span at least three times as long: all of the Earth's history (cue words `all-history`:
- *     "the whole history of the planet", "ever" after a negation or a superlative; a span of a billion
+ *     "the whole history of the planet"; a span of a billion
  *     years or more, "Earth's 4.5-billion-year history"), whose record may stand in one of the two
  *     sentences before, or any span named before it in its sentence; or a number of years ("for the
  *     last million years"), whose record must stand before it in its own sentence. A sentence that
@@ -75,10 +75,8 @@ function detectLongerSpan(input: DetectInput, now: number): Cue[] {
   if (!co2) return [];
   const claimSpans = spansIn(s.text);
   const history = input.mayHold('all-history') ? findPhrases(input.sentence, input.words('all-history')) : [];
-  // "ever" claims all time only after a negation or a superlative ("never ... ever", "highest ever"),
-  // not as a record's own reach ("ever recorded", "ever measured").
   const claims = [
-    ...history.filter((h) => !/^ever$/iu.test(s.text.slice(h.start, h.end)) || everClaimsAllTime(s, h.start)).map((h) => ({ years: Infinity, start: h.start, end: h.end, all: true })),
+    ...history.map((h) => ({ years: Infinity, start: h.start, end: h.end, all: true })),
     // "Earth's whole 4.5-billion-year history": a span of the Earth's age is all of its history.
     ...claimSpans.map((c) => ({ ...c, all: c.years >= 1e9 })),
   ];
@@ -113,14 +111,6 @@ function detectLongerSpan(input: DetectInput, now: number): Cue[] {
 /** The least of `values`, or undefined when there are none. */
 function minimum(values: readonly number[]): number | undefined {
   return values.length === 0 ? undefined : Math.min(...values);
-}
-
-/** "never ... ever", "highest ever": an "ever" at `offset` after a negation or a superlative, not before a verb of recording. */
-function everClaimsAllTime(s: ReadSentence, offset: number): boolean {
-  const at = s.words.findIndex((w) => w.start >= offset);
-  const next = s.words[at + 1]?.text ?? '';
-  if (/^(?:recorded|measured|observed|seen|logged|noted|sampled|drilled)$/u.test(next)) return false;
-  return s.words.slice(0, at).some((w) => /^(?:never|not|no|highest|lowest|most|least)$/u.test(w.text) || /est$/u.test(w.text));
 }
 
 /** One year's change of CO2 in `s`: the ppm figure of "the 2024 jump of 3.5 ppm" or "rose 3.5 ppm in 2024". */
