@@ -61,6 +61,10 @@ describe('claims read as propositions, in wordings of our own', () => {
     // Jouzel et al. 2007; global LGM cooling about 6 °C: Tierney et al. 2020).
     ['The deuterium in the Vostok ice shows that Earth as a whole was about 9 °C colder at the glacial peak than before industry.', 'scope.regional-record-as-global'],
     ['The Talos Dome core shows it was far colder in the last glacial, and that is the whole world, not just Antarctica.', 'scope.regional-record-as-global'],
+    // A global figure handed to one place, and a short record told of all history (global LGM
+    // cooling about 6 °C: Gulev et al. 2021; ice-core CO2 spans 800,000 years: Lüthi et al. 2008).
+    ['Earth as a whole ran about 6 °C cooler in the last glacial maximum, hence the Brenmoor fells were exactly 6 °C cooler too.', 'scope.figure-across-scales'],
+    ['Our ice holds 800,000 years of CO2, all under 300 ppm, so CO2 has not been this high at any time in the history of the earth.', 'scope.short-record-stretched'],
     // A global order stated in its own words is a direction error, even after a sentence that
     // named an Antarctic record (global temperature lagged CO2: Shakun et al. 2012).
     ['Antarctic temperature rose by about 9 °C in that time. Averaged over the globe, temperature started rising before the carbon dioxide did.', 'direction.global-co2-ahead-of-warming'],

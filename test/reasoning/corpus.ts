@@ -28,6 +28,11 @@ const EITHER = 'logic.either-or-causation';
 const CORR = 'logic.correlation-as-proof';
 const REGIONAL = 'scope.regional-record-as-global';
 const ANT_LAG = 'scope.antarctic-lag-as-global';
+// Session 20: a figure handed across scales, and a short record stretched (global LGM cooling about
+// 6 °C, central Greenland about 20 °C: Gulev et al. 2021, Dahl-Jensen et al. 1998; ice-core CO2 covers
+// 800,000 years: Lüthi et al. 2008; the 2024 CO2 rise of 3.5 ppm a record: WMO 2025).
+const SCALES = 'scope.figure-across-scales';
+const STRETCHED = 'scope.short-record-stretched';
 const SINGLE = 'logic.single-cause';
 const CERTAIN = 'logic.ice-core-certainty';
 const SOLUBILITY = 'direction.co2-solubility-falls-with-warming';
@@ -37,6 +42,10 @@ const GLOBAL_ORDER = 'direction.global-co2-ahead-of-warming';
 
 /** Errors: each paragraph makes (or reports without answering) at least one argument error. */
 const errors: Row[] = [
+  ['newsletter', 'At the glacial maximum the globe was about 6 °C colder, so our village green was 6 °C colder too.', [SCALES]],
+  ['audio guide', ['Central Greenland was some 20 °C colder at the glacial maximum.', 'So the northern hemisphere must have been 20 °C colder as well.'], [SCALES]],
+  ['science desk', 'The 800,000 years of Dome C air never held more than 300 ppm of CO2, so CO2 has never topped 300 ppm in the history of the planet.', [STRETCHED]],
+  ['newsletter', 'The 2024 jump of 3.5 ppm in CO2 means we are adding 3.5 ppm every single year.', [STRETCHED]],
   ['science desk', 'In the Vostok core, CO2 rose about 800 years after Antarctic temperature, so CO2 cannot have caused the warming.', [LAG]],
   ['science desk', 'Carbon dioxide lagged the warming by centuries, which means it could not have been the cause.', [LAG]],
   ['newsletter', "Since CO2 came after the temperature rise, it can't be what drove the end of the ice age.", [LAG]],
@@ -129,6 +138,10 @@ const errors: Row[] = [
 
 /** Correct statements: lags, leads, feedbacks, Antarctic records, the orbital trigger, rebuttals. */
 const correct: Row[] = [
+  ['newsletter', 'At the glacial maximum the globe was about 6 °C colder, but our village, near the ice sheet, cooled far more.', []],
+  ['audio guide', ['Central Greenland was some 20 °C colder at the glacial maximum.', 'The northern hemisphere as a whole cooled much less than that.'], []],
+  ['science desk', 'The 800,000 years of Dome C air never held more than 300 ppm of CO2; older evidence puts today above any level in at least 2 million years.', []],
+  ['newsletter', 'The 2024 jump of 3.5 ppm in CO2 was a record; through the 2010s CO2 rose about 2.4 ppm a year.', []],
   ['science desk', 'In Antarctic ice cores, CO2 rose within a few centuries of Antarctic temperature at the end of the last ice age.', []],
   ['science desk', 'The lag does not rule out CO2 as a cause: once the ocean began to release CO2, the extra CO2 amplified the warming.', []],
   ['audio guide', 'Orbital changes triggered the warming, and CO2 released from the Southern Ocean then amplified it and spread it around the globe.', []],

@@ -376,8 +376,8 @@ function figuresIn(s: { words: readonly { text: string }[] }, from: number, to: 
   return figuresAt(s, from, to).map((f) => f.value);
 }
 
-/** figuresIn's figures, each with the index of its first word. */
-function figuresAt(s: { words: readonly { text: string }[] }, from: number, to: number): { value: number; at: number }[] {
+/** figuresIn's figures, each with the index of its first word (detect-scales.ts reads them too). */
+export function figuresAt(s: { words: readonly { text: string }[] }, from: number, to: number): { value: number; at: number }[] {
   const out: { value: number; at: number }[] = [];
   for (let i = Math.max(0, from); i < Math.min(to, s.words.length); i++) {
     const text = s.words[i]?.text ?? '';

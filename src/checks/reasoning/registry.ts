@@ -9,6 +9,8 @@ import { iceCoreCertainty } from './detect-certainty.js';
 import { lagRulesOutCause } from './detect-lag.js';
 import { regionalEventAsGlobal } from './detect-regional-event.js';
 import { antarcticLagAsGlobal, regionalRecordAsGlobal } from './detect-scope.js';
+import { figureAcrossScales } from './detect-scales.js';
+import { shortRecordStretched } from './detect-stretched-record.js';
 import { singleCause } from './detect-single-cause.js';
 import type { DetectorEntry } from './detector.js';
 
@@ -22,4 +24,6 @@ export const DETECTORS: Readonly<Record<string, DetectorEntry>> = {
   'scope.regional-record-as-global': regionalRecordAsGlobal,
   'scope.antarctic-lag-as-global': antarcticLagAsGlobal,
   'scope.regional-event-as-global': regionalEventAsGlobal,
+  'scope.figure-across-scales': figureAcrossScales,
+  'scope.short-record-stretched': shortRecordStretched,
 };
