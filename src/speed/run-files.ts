@@ -129,6 +129,7 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
   // starts one worker (its own packs and NLP library), not two beside an idle main thread.
   const waiting: { index: number; text: string; key: string | undefined }[] = [];
   let waitingBytes = 0;
+  let onTopicBytes = 0;
   let large = false;
   const enough = (): boolean => waiting.length >= POOL_MIN_FILES && (options.jobs !== undefined || waitingBytes >= POOL_MIN_BYTES);
   const workers = jobs - 1;
@@ -185,6 +186,12 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
         finish(index, passed);
         continue;
       }
+      // An on-topic file's outcome is held to the report whether checked or taken from the cache.
+      onTopicBytes += text.length;
+      if (!large && onTopicBytes >= LARGE_RUN_BYTES) {
+        large = true;
+        options.onLargeRun?.();
+      }
       const key = options.cache === undefined ? undefined
         : cacheKeyOf({ version: VERSION, packs: packsKey, path: task.path, projectPath: task.projectPath, format: task.format, levels: options.levels, text });
       const cached = key === undefined ? undefined : options.cache?.get(key);
@@ -194,10 +201,6 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
       }
       waiting.push({ index, text, key });
       waitingBytes += text.length;
-      if (!large && waitingBytes >= LARGE_RUN_BYTES) {
-        large = true;
-        options.onLargeRun?.();
-      }
       if (pool === undefined && poolable && enough()) {
         const { Tinypool } = await import('tinypool');
         pool = new Tinypool({ filename: worker, minThreads: workers, maxThreads: workers, idleTimeout: 1000, resourceLimits: { maxYoungGenerationSizeMb: WORKER_YOUNG_MB } });

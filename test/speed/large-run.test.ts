@@ -11,7 +11,9 @@ import { describe, expect, it } from 'vitest';
 import { CHECK_V8_FLAGS, LARGE_RUN_V8_FLAGS, boundHeapGrowth, boundYoungGeneration, speedOptionsOf } from '../../src/cli/speed-options.js';
 import { checkPaths } from '../../src/engine.js';
 import { loadPacks } from '../../src/rulepack/index.js';
+import { ResultCache, type FileOutcome } from '../../src/speed/cache.js';
 import { LARGE_RUN_BYTES } from '../../src/speed/run-files.js';
+import { VERSION } from '../../src/version.js';
 
 const packs = await loadPacks([]);
 
@@ -25,16 +27,38 @@ const ON_TOPIC = [
 ].join(' ');
 const OFF_TOPIC = 'The team met on Tuesday to plan the spring release of the garden guide and its photographs. ';
 
-/** A folder of `files` drafts of `each` characters made from `paragraph`, and the run's hook calls. */
-async function runOver(files: number, each: number, paragraph: string): Promise<{ large: number; doneAtLarge: number[] }> {
-  const root = mkdtempSync(join(tmpdir(), 'firnline-large-run-'));
-  mkdirSync(join(root, 'drafts'));
-  const text = `# Notes\n\n${`${paragraph}\n\n`.repeat(Math.ceil(each / (paragraph.length + 2)))}`.slice(0, each);
-  for (let f = 0; f < files; f += 1) writeFileSync(join(root, 'drafts', `part-${f}.md`), text);
+/** A result cache that counts the outcomes it gives and lets a test wait for its writes. */
+class CountingCache extends ResultCache {
+  hits = 0;
+  private readonly writes: Promise<void>[] = [];
+  override get(key: string): FileOutcome | undefined {
+    const found = super.get(key);
+    if (found !== undefined) this.hits += 1;
+    return found;
+  }
+  override set(key: string, outcome: FileOutcome): Promise<void> {
+    const write = super.set(key, outcome);
+    this.writes.push(write);
+    return write;
+  }
+  async written(): Promise<void> {
+    await Promise.all(this.writes);
+  }
+}
+
+/** A folder of `files` drafts of `each` characters made from `paragraph` (or `root`'s, made before), and the run's hook calls. */
+async function runOver(files: number, each: number, paragraph: string, reuse?: { root?: string; cache: CountingCache }): Promise<{ large: number; doneAtLarge: number[]; root: string }> {
+  const root = reuse?.root ?? mkdtempSync(join(tmpdir(), 'firnline-large-run-'));
+  if (reuse?.root === undefined) {
+    mkdirSync(join(root, 'drafts'));
+    const text = `# Notes\n\n${`${paragraph}\n\n`.repeat(Math.ceil(each / (paragraph.length + 2)))}`.slice(0, each);
+    for (let f = 0; f < files; f += 1) writeFileSync(join(root, 'drafts', `part-${f}.md`), text);
+  }
   let done = 0;
   const doneAtLarge: number[] = [];
   await checkPaths(['drafts'], {
     cwd: root, packs, jobs: 1,
+    ...(reuse === undefined ? {} : { cache: reuse.cache }),
     onProgress: (n) => {
       done = n;
     },
@@ -42,7 +66,7 @@ async function runOver(files: number, each: number, paragraph: string): Promise<
       doneAtLarge.push(done);
     },
   });
-  return { large: doneAtLarge.length, doneAtLarge };
+  return { large: doneAtLarge.length, doneAtLarge, root };
 }
 
 /** Full collections in a fresh Node that sets `flags` at run time and then keeps a growing heap. */
@@ -78,6 +102,17 @@ describe('a run bounds its heap growth only once it is large', () => {
     const run = await runOver(4, each, ON_TOPIC);
     expect(run.large).toBe(1);
     expect(run.doneAtLarge).toEqual([0]);
+  }, SLOW);
+
+  it('counts on-topic text whose outcome comes from the result cache, since the run holds it as well', async () => {
+    const each = Math.ceil(LARGE_RUN_BYTES / 3) + 1_000;
+    const cache = new CountingCache(mkdtempSync(join(tmpdir(), 'firnline-large-run-cache-')), VERSION);
+    const first = await runOver(4, each, ON_TOPIC, { cache });
+    await cache.written();
+    expect(cache.hits).toBe(0);
+    const warm = await runOver(4, each, ON_TOPIC, { root: first.root, cache });
+    expect(cache.hits).toBe(4);
+    expect(warm.large).toBe(1);
   }, SLOW);
 
   it('does not count text that is passed over (no subject of the packs)', async () => {
