@@ -60,6 +60,8 @@ export interface CheckOptions {
   onProgress?: (done: number, total: number) => void;
   /** Called once a run's pool workers are running (speed/run-files.ts); the command line sets its V8 flags again there. */
   onWorkersStarted?: () => void;
+  /** Called once when the run's on-topic text reaches speed/run-files.ts LARGE_RUN_BYTES; the command line bounds its heap's growth there. */
+  onLargeRun?: () => void;
   /** The folder `include`/`exclude` patterns are relative to (default: `cwd`). */
   filterRoot?: string;
 }
@@ -767,9 +769,10 @@ function describeFromFlag(flag: Flag): RuleInfo {
   return { id: flag.ruleId, summary: flag.reason, description: flag.reason, defaultLevel: flag.level, sources: flag.sources };
 }
 
-function pickRun(options: CheckOptions): Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress' | 'onWorkersStarted'> {
-  const picked: Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress' | 'onWorkersStarted'> = {};
+function pickRun(options: CheckOptions): Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress' | 'onWorkersStarted' | 'onLargeRun'> {
+  const picked: Pick<CheckOptions, 'jobs' | 'cache' | 'onProgress' | 'onWorkersStarted' | 'onLargeRun'> = {};
   if (options.onWorkersStarted !== undefined) picked.onWorkersStarted = options.onWorkersStarted;
+  if (options.onLargeRun !== undefined) picked.onLargeRun = options.onLargeRun;
   if (options.jobs !== undefined) picked.jobs = options.jobs;
   if (options.cache !== undefined) picked.cache = options.cache;
   if (options.onProgress !== undefined) picked.onProgress = options.onProgress;

@@ -40,7 +40,9 @@ export function parseSpeedFlags(flags: SpeedFlags): Partial<CheckOptions> {
  * heap). At 50 percent the same run peaked at about 335 MiB instead of 400 to 455 (with the pool,
  * CPU time within the noise of the machine); 20 percent gave 315 MiB and more collections. Set by
  * the command line only (a process-wide V8 flag; the pool's workers start after it and share it),
- * never by the library, whose host process keeps its own settings.
+ * never by the library, whose host process keeps its own settings; and only once a run is large
+ * (speed/run-files.ts LARGE_RUN_BYTES, boundHeapGrowth below): a check of a 2.1 KB draft ran four full
+ * collections with it and two without, some 8 percent of its CPU time (docs/speed.md, Session 20).
  */
 export const HEAP_GROWING_PERCENT = 50;
 
@@ -61,14 +63,27 @@ export const HEAP_GROWING_PERCENT = 50;
 export const YOUNG_GROWTH_FACTOR = 1;
 
 /**
- * The V8 flags `firnline check` sets, before the bundle loads (bin/bundle-loader.js CHECK_FLAG, which
- * V8 hashes into the code caches the build makes with them) and again here.
+ * The V8 flag `firnline check` sets from its start, before the bundle loads (bin/bundle-loader.js
+ * CHECK_FLAG, which V8 hashes into the code caches the build makes with it) and again here.
  */
-export const CHECK_V8_FLAGS = `--heap-growing-percent=${HEAP_GROWING_PERCENT} --semi-space-growth-factor=${YOUNG_GROWTH_FACTOR}`;
+export const CHECK_V8_FLAGS = `--semi-space-growth-factor=${YOUNG_GROWTH_FACTOR}`;
 
-/** Bounds heap growth for this process (see HEAP_GROWING_PERCENT, YOUNG_GROWTH_FACTOR); the findings are not affected. */
-export function boundHeapGrowth(): void {
+/** The V8 flag a large run sets besides (speed/run-files.ts onLargeRun). */
+export const LARGE_RUN_V8_FLAGS = `--heap-growing-percent=${HEAP_GROWING_PERCENT}`;
+
+/** Bounds the young generation for this process (YOUNG_GROWTH_FACTOR); the findings are not affected. */
+export function boundYoungGeneration(): void {
   setFlagsFromString(CHECK_V8_FLAGS);
+}
+
+/**
+ * Bounds the heap's growth for this process (HEAP_GROWING_PERCENT) once a run is large; the findings
+ * are not affected. A code cache made before (the stored tagger's, speed/script-cache.ts) no longer
+ * matches V8's flags after it, so a large run that has not yet loaded the tagger compiles it from its
+ * text, with the same results.
+ */
+export function boundHeapGrowth(): void {
+  setFlagsFromString(LARGE_RUN_V8_FLAGS);
 }
 
 /** How long a run goes before it shows progress, and how often the line is redrawn. */
@@ -83,7 +98,9 @@ export async function speedOptionsOf(
 ): Promise<{ options: Partial<CheckOptions>; done: () => void }> {
   const options = parseSpeedFlags(flags);
   // Making a worker's heap sets V8's flags back to their bounds: the young generation's is set again.
-  options.onWorkersStarted = boundHeapGrowth;
+  options.onWorkersStarted = boundYoungGeneration;
+  // A run past LARGE_RUN_BYTES of on-topic text bounds its heap's growth from there on.
+  options.onLargeRun = boundHeapGrowth;
   if (flags.cache !== false) {
     const { CACHE_FOLDER, ResultCache } = await import('../speed/cache.js');
     options.cache = new ResultCache(join(projectRoot, CACHE_FOLDER), VERSION);

@@ -42,7 +42,22 @@ export interface RunFilesOptions {
    * line sets its young generation's flag again here (cli/speed-options.ts YOUNG_GROWTH_FACTOR).
    */
   onWorkersStarted?: () => void;
+  /**
+   * Called once, before this thread or a worker checks more, when the on-topic text the run has
+   * met reaches LARGE_RUN_BYTES: the command line bounds its heap's growth from there on
+   * (cli/speed-options.ts boundHeapGrowth). A smaller run never calls it.
+   */
+  onLargeRun?: () => void;
 }
+
+/**
+ * How much on-topic text (UTF-16 code units, as read) a run meets before it is a large run
+ * (RunFilesOptions.onLargeRun). A run of a draft or a few keeps little to its report, and the bound on
+ * its heap's growth only cost it full collections: a 2.1 KB check ran four where it runs two without
+ * it (docs/speed.md, Session 20). A run past this keeps its claims and flags file after file and
+ * bounds its heap from the next file on, before its peak.
+ */
+export const LARGE_RUN_BYTES = 64 * 1024;
 
 /**
  * How many on-topic files must wait before a pool is worth its start: below this, one thread does
@@ -114,6 +129,8 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
   // starts one worker (its own packs and NLP library), not two beside an idle main thread.
   const waiting: { index: number; text: string; key: string | undefined }[] = [];
   let waitingBytes = 0;
+  let onTopicBytes = 0;
+  let large = false;
   const enough = (): boolean => waiting.length >= POOL_MIN_FILES && (options.jobs !== undefined || waitingBytes >= POOL_MIN_BYTES);
   const workers = jobs - 1;
   let pool: TinypoolType | undefined;
@@ -168,6 +185,12 @@ export async function runFiles(tasks: FileTask[], options: RunFilesOptions): Pro
       if (passed !== undefined) {
         finish(index, passed);
         continue;
+      }
+      // An on-topic file's outcome is held to the report whether checked or taken from the cache.
+      onTopicBytes += text.length;
+      if (!large && onTopicBytes >= LARGE_RUN_BYTES) {
+        large = true;
+        options.onLargeRun?.();
       }
       const key = options.cache === undefined ? undefined
         : cacheKeyOf({ version: VERSION, packs: packsKey, path: task.path, projectPath: task.projectPath, format: task.format, levels: options.levels, text });

@@ -11,7 +11,7 @@ import { describeBreakdown, wantsBreakdown } from '../../report/run-breakdown.js
 import { outputTarget } from '../../guard/output-target.js';
 import { visibleData, visibleText } from '../../guard/visible-text.js';
 import { reportUnchecked } from '../unchecked.js';
-import { boundHeapGrowth, CHECK_FORMATS, parseSpeedFlags, speedOptionsOf, type SpeedFlags } from '../speed-options.js';
+import { boundYoungGeneration, CHECK_FORMATS, parseSpeedFlags, speedOptionsOf, type SpeedFlags } from '../speed-options.js';
 
 // The engine, the packs' schemas, the reporters and the ledger reader load inside the action
 // (dynamic import), so `--version` and `--help` start in a few hundredths of a second (bench/).
@@ -52,7 +52,7 @@ export function registerCheck(program: Command, ctx: CliContext): void {
     .option('--shard <k/n>', 'check only the k-th of n parts of the files (split by path), for CI matrix jobs; join the reports with `firnline merge`')
     .action(async (paths: string[] | undefined, flags: CheckFlags) => {
       parseSpeedFlags(flags);
-      boundHeapGrowth();
+      boundYoungGeneration();
       const [{ checkPaths }, { jsonReportPieces, renderReport }, { renderChecklistOf }, { applyGate }, { checkOptionsOf, loadRunSettings }, { writeFileAtomic }, { exitCodeFor }, { guardChecklistOutput }] =
         await Promise.all([
           import('../../engine.js'), import('../../report/index.js'), import('../render-checklist.js'), import('../gate.js'),
