@@ -52,7 +52,11 @@ function splitChunk(sentences: Sentence[], whole: string, blockIndex: number, fr
   for (const line of whole.slice(from, to).matchAll(UTTERANCE_LINE)) cuts.add(from + line.index + 1);
   for (const line of whole.slice(from, to).matchAll(LINE)) {
     const end = from + line.index + line[0].length;
-    if (end < to && isByline(line[0])) cuts.add(end + 1);
+    // A byline or a signature stands on its line between two posts: cut on both sides of it.
+    if (isByline(line[0])) {
+      if (line.index > 0) cuts.add(from + line.index);
+      if (end < to) cuts.add(end + 1);
+    }
     // "↳ @ana · 2 days ago · ♥ 14: Nope, ...": a byline that leads its post on the same line.
     const colon = line[0].indexOf(': ');
     if (colon > 0 && isByline(line[0].slice(0, colon))) cuts.add(from + line.index + colon + 2);
@@ -184,11 +188,19 @@ const CARRIES_ON = /(?:[.!?…,;:\-–—/&(+=]["'”’)\]*_]*|(?<![\p{L}'’])
 /** One line of a chunk (without its line break). */
 const LINE = /[^\n]+/gu;
 
+/** A clock time as chat software stamps a line: "14:12", "09:05:33", "2:41 pm". */
+const CLOCK_TIME = String.raw`(?:[01]?\d|2[0-3]):[0-5]\d(?::[0-5]\d)?(?:[ \t]?[ap]\.?m\.?)?`;
+
 /**
- * A new line that opens an utterance: "[18:58] ", "AMARA: ", "@ana ", "↳ ", "• ", "- ", "3/ ".
- * A speaker label is one to three capitalised words, or one word in capitals, before a colon.
+ * A new line that opens an utterance: "[18:58] ", "14:12 ", "AMARA: ", "@ana ", "↳ ", "• ", "- ",
+ * "3/ ", a reply's quote marks ">> " and a wiki talk page's indent "::". A speaker label is one to
+ * three capitalised words, or one word in capitals, before a colon. A clock time with no brackets
+ * opens a chat log's line as a bracketed one does when a speaker's label or a field separator
+ * follows it ("14:12 wren_m: ...", "21:04 | text"), not a wrapped line ("10:30 talk ..."); a reply's quote marks and a
+ * talk page's colons are how those threads set one post under another (common practice of mail
+ * software and of wiki talk pages).
  */
-const OPENER = String.raw`[ \t]*(?:\[[^\]\n]{1,24}\]|[@↳•▶►]|[-*+>][ \t]|\d{1,3}\/[ \t]|\p{Lu}[\p{L}'’.-]*(?:[ \t]\p{Lu}[\p{L}'’.-]*){0,2}:[ \t])`;
+const OPENER = String.raw`[ \t]*(?:\[[^\]\n]{1,24}\]|${CLOCK_TIME}[ \t]+(?=[|·•]|[^\n:]{1,40}:[ \t])|[@↳•▶►]|[-*+][ \t]|>{1,8}[ \t]|:{1,8}(?=[^\s:])|\d{1,3}\/[ \t]|\p{Lu}[\p{L}'’.-]*(?:[ \t]\p{Lu}[\p{L}'’.-]*){0,2}:[ \t])`;
 /** A line that opens an utterance of its own (a speaker, a time stamp, a handle, a bullet). */
 const OPENER_LINE = new RegExp(String.raw`^${OPENER}`, 'u');
 
@@ -201,7 +213,7 @@ const OPENS_UTTERANCE = new RegExp(String.raw`^${OPENER.replace('[@↳•▶►]
  * sentence before on its speaker's behalf.
  */
 export function opensUtterance(sentence: string): boolean {
-  return OPENS_UTTERANCE.test(sentence) && !/^\s*[-*+>]/u.test(sentence) && !LAYOUT_LABEL.test(sentence);
+  return OPENS_UTTERANCE.test(sentence) && !/^\s*[-*+>:]/u.test(sentence) && !LAYOUT_LABEL.test(sentence);
 }
 
 /** Labels of a question-and-answer or myth-and-fact layout: the same writer answering, not another voice. */
@@ -282,7 +294,7 @@ function opensInLowerCase(sentence: string): boolean {
 }
 
 /** A time stamp, a handle, a reply arrow or a speaker label that opens an utterance ("[19:13] oskarflint: "). */
-const UTTERANCE_PREFIX = /^\s*(?:\[[^\]\n]{1,24}\]\s*)?(?:[↳•▶►]\s*)?(?:@?[\p{L}\d_.'’-]{1,32}:\s+)?/u;
+const UTTERANCE_PREFIX = new RegExp(String.raw`^\s*(?:(?:\[[^\]\n]{1,24}\]|${CLOCK_TIME})\s*)?(?:[↳•▶►]\s*|>{1,8}\s+|:{1,8})?(?:@?[\p{L}\d_.'’-]{1,32}(?:\s\([^)\n]{1,40}\))?:\s+)?`, 'u');
 
 /**
  * After a full stop, what may open a new sentence: anything but a lower-case letter or a mark that

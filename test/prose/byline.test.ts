@@ -82,3 +82,44 @@ describe('splitSentences: a byline that leads its post on one line, and a site l
     ['C. 1750 the air held 280 ppm.'],
   ])('keeps %s whole', (text) => expect(splitSentences(text, 0).map((s) => s.text)).toEqual([text]));
 });
+
+// Round 20: headers of threads in the shapes their software writes (common practice of comment,
+// chat, mail and wiki software; names and posts are our own).
+describe('isByline: wider headers of public threads', () => {
+  it.each([
+    '@heron_watch . 9:41 am', // a full stop with space around it as the separator
+    '↪ @saltpan_sue · 5h', // a reply arrow before the handle
+    'Puffin & Pine 🐧 @puffin_pine · 2h', // a display name with "&" and a pictograph
+    'Orla_Geo  ·  12 Apr 2026 08:15', // a date and a clock time in one field
+    '[Teodor M] 2 Nov, 7:05pm', // a bracketed name and its stamp with no separator
+    'Fenwick.Ray  ·  4h  ↳ replying to moss_lamp', // a reply arrow as a separator
+    '--Cairn_Walker (talk) 17:40, 9 June 2024 (UTC)', // a wiki signature
+    '— Larkspur (talk) 08:02, 1 July 2024 (UTC)',
+    'Ines Okafor (3 hours ago):', // a name and a stamp in brackets, before its post
+  ])('reads %s as a byline', (line) => expect(isByline(line)).toBe(true));
+
+  it.each([
+    'Doors open 9:30 am', // a notice: its words are no name
+    'Meeting at 10:30',
+    'EPICA Dome C (Antarctica) 3 May 2025', // a date with no clock time and no separator
+    'Vostok . 3,623 m', // a separator, but no time stamp after it
+    'The thaw began about 18,000 years ago',
+  ])('leaves %s alone', (line) => expect(isByline(line)).toBe(false));
+});
+
+describe('splitSentences: a thread header or signature is cut on both sides', () => {
+  it('cuts a wiki signature line from the post under it', () => {
+    const text = 'Tilt sets the beat. --Cairn_Walker (talk) 17:40, 9 June 2024 (UTC)\n--Larkspur (talk) 18:02, 9 June 2024 (UTC)\nthe co2 peak was near 280 ppm';
+    const pieces = splitSentences(text, 0).map((s) => s.text);
+    expect(pieces.at(-1)).toBe('the co2 peak was near 280 ppm');
+  });
+
+  it('cuts a byline from the unmarked line above it', () => {
+    const text = 'the lag was a few centuries at most\n@heron_watch · 9:41 am\nglacial co2 sat near 190 ppm';
+    expect(splitSentences(text, 0).map((s) => s.text)).toEqual([
+      'the lag was a few centuries at most',
+      '@heron_watch · 9:41 am',
+      'glacial co2 sat near 190 ppm',
+    ]);
+  });
+});

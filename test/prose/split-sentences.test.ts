@@ -61,3 +61,36 @@ describe('splitSentences', () => {
     expect(texts('It dates from c. 800 years ago.')).toEqual(['It dates from c. 800 years ago.']);
   });
 });
+
+// Round 20: utterances of chat logs, mail replies and wiki talk pages, one per line with no end
+// mark (common practice of that software; the lines are our own).
+describe('splitSentences: a line that opens with a clock time, quote marks or a talk-page indent', () => {
+  it('cuts a chat log whose lines open with a bare clock time', () => {
+    const text = '09:14 Ruth (Guide): the orbit starts the thaw\n09:15 kit_b: and co2 keeps it going\n9:16 pm Ruth (Guide): yes, as a feedback';
+    expect(splitSentences(text, 0).map((s) => s.text)).toEqual([
+      '09:14 Ruth (Guide): the orbit starts the thaw',
+      '09:15 kit_b: and co2 keeps it going',
+      '9:16 pm Ruth (Guide): yes, as a feedback',
+    ]);
+  });
+
+  it('ends a lower-case chat line at a full stop after its clock time and speaker', () => {
+    const text = '10:02 Ruth (Guide): co2 fell to about 190 ppm. the ice sheets grew';
+    expect(splitSentences(text, 0).map((s) => s.text)).toEqual(['10:02 Ruth (Guide): co2 fell to about 190 ppm.', 'the ice sheets grew']);
+  });
+
+  it('cuts lines set under a reply with two or more quote marks', () => {
+    const text = '>> antarctica warmed a little first\n>> the north lagged behind';
+    expect(splitSentences(text, 0).map((s) => s.text)).toEqual(['>> antarctica warmed a little first', '>> the north lagged behind']);
+  });
+
+  it('cuts the indented replies of a wiki talk page', () => {
+    const text = ':the record covers eight cycles\n::not all of them the same length';
+    expect(splitSentences(text, 0).map((s) => s.text)).toEqual([':the record covers eight cycles', '::not all of them the same length']);
+  });
+
+  it('keeps a clock time inside a line and a time range joined to their sentence', () => {
+    const text = 'The gallery opens at 10:00 and the\n10:30 talk covers the Vostok core.';
+    expect(splitSentences(text, 0).map((s) => s.text)).toEqual([text]);
+  });
+});
