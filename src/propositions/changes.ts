@@ -9,6 +9,7 @@
 import type { LexHit } from './lexicon.js';
 import { readMarginal } from './marginal.js';
 import { echoedNorthernCold } from './seesaw.js';
+import { readTransitionChanges } from './transitions.js';
 import { kindOf, thingAfter, thingBefore } from './resolve.js';
 import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Change, Directed, Relation } from './types.js';
@@ -280,6 +281,8 @@ export function readChanges(s: ReadSentence, directed: Directed[], previous?: Re
     .filter((d) => d.attribute === 'temperature')
     .map((d) => ({ kind: 'change', of: d.of, attribute: 'temperature', dir: (d.negated ? -d.dir : d.dir) as 1 | -1, start: d.start, end: d.end, ...(during(d) === undefined ? {} : { during: during(d) as string }) }));
   changes.push(...readMarginal(s));
+  // "As the ice melted back, CO2 fell": a CO2 change set in the end or the start of an ice age.
+  changes.push(...readTransitionChanges(s, previous));
   // "the warming effect of CO2 grows exponentially": the effect per ppm said to speed up.
   const effect = s.of('causes', 'roles').find((r) => /effect|forcing|power/u.test(s.words[r.last]?.text ?? ''));
   const speeding = s.of('changes', 'accelerating')[0];
