@@ -9,6 +9,7 @@
 import type { LexHit } from './lexicon.js';
 import { readMarginal } from './marginal.js';
 import { echoedNorthernCold } from './seesaw.js';
+import { readTransitionChanges } from './transitions.js';
 import { kindOf, thingAfter, thingBefore } from './resolve.js';
 import { denialsBefore, type ReadSentence, type Thing } from './sentence.js';
 import type { Change, Directed, Relation } from './types.js';
@@ -88,6 +89,10 @@ const COMPANIONS = /^(?:(?:right |just )?(?:alongside|along with|together with|i
 function temperatureHolder(s: ReadSentence, h: LexHit): Thing | undefined {
   const next = s.words[h.last + 1]?.text;
   if (next === 'of') return thingAfter(s, h.last, 3);
+  // "the North Atlantic was locked in cold", "Europe lay in the deep cold": a cold or warmth told as
+  // a state the subject is in belongs to the subject of its segment.
+  const stateOf = stateSubject(s, h);
+  if (stateOf !== undefined) return stateOf;
   // "cold polar oceans": the water, not the region that qualifies it.
   const water = s.things.find((t) => t.kind === 'water' && t.first > h.last && t.first - h.last <= 3);
   if (water !== undefined && s.things.every((t) => t === water || t.first <= h.last || t.first > water.first || t.region !== undefined || t.kind === 'temperature')) return water;
@@ -100,6 +105,23 @@ function temperatureHolder(s: ReadSentence, h: LexHit): Thing | undefined {
   const after = following !== undefined && (s.words[following.first]?.segment === s.words[h.last]?.segment || !ownClause(following)) ? following : undefined;
   if (after !== undefined && (!adjacentBefore || h.first - (before?.last ?? 0) > 1) && after.kind !== 'pronoun') return after;
   return adjacentBefore ? before : undefined;
+}
+
+/** Words that put a subject in a state ("in", "into", "through"), and what may stand before the state's noun. */
+const STATE_PREPOSITIONS = new Set(['in', 'into', 'through']);
+const STATE_MODIFIERS = new Set(['the', 'a', 'same', 'deep', 'deepest', 'bitter', 'severe', 'harsh', 'renewed', 'that', 'this', 'its', 'their', 'near-glacial', 'glacial', 'intense']);
+
+/** The subject of the segment when warm/cool word `h` is a noun after "in", "into" or "through". */
+function stateSubject(s: ReadSentence, h: LexHit): Thing | undefined {
+  let k = h.first - 1;
+  while (k >= 0 && k >= h.first - 3 && STATE_MODIFIERS.has(s.words[k]?.text ?? '')) k -= 1;
+  if (!STATE_PREPOSITIONS.has(s.words[k]?.text ?? '') || s.things.some((t) => t.first <= h.first && h.last <= t.last && t.kind !== 'temperature')) return undefined;
+  // The noun ends its phrase: "in cold water" is a water, "in the cold" a state.
+  if (s.things.some((t) => t.first === h.last + 1)) return undefined;
+  // The nearest place before the preposition in its segment, not a region word of an event's name ("the Antarctic Cold Reversal").
+  const segment = s.words[k]?.segment;
+  const subject = s.things.filter((t) => t.last < k && s.words[t.first]?.segment === segment && !s.inside(t.first, 'periods')).at(-1);
+  return subject !== undefined && subject.region !== undefined ? subject : undefined;
 }
 
 /** Words that join two places into one subject: "Antarctica and Greenland", "the Arctic as well as the Antarctic". */
@@ -280,6 +302,8 @@ export function readChanges(s: ReadSentence, directed: Directed[], previous?: Re
     .filter((d) => d.attribute === 'temperature')
     .map((d) => ({ kind: 'change', of: d.of, attribute: 'temperature', dir: (d.negated ? -d.dir : d.dir) as 1 | -1, start: d.start, end: d.end, ...(during(d) === undefined ? {} : { during: during(d) as string }) }));
   changes.push(...readMarginal(s));
+  // "As the ice melted back, CO2 fell": a CO2 change set in the end or the start of an ice age.
+  changes.push(...readTransitionChanges(s, previous));
   // "the warming effect of CO2 grows exponentially": the effect per ppm said to speed up.
   const effect = s.of('causes', 'roles').find((r) => /effect|forcing|power/u.test(s.words[r.last]?.text ?? ''));
   const speeding = s.of('changes', 'accelerating')[0];
