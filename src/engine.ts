@@ -479,7 +479,7 @@ function examineSentence(
   // The texts a description of a kind ("that core", "the cold snap") may take its subject from, oldest first.
   const history = historyOf(before, previous, context, packs);
   const { bindings } = bindQuantities(text, quantities, packs, previous, history);
-  const reference = checkReferences(text, quantities, bindings, packs);
+  const reference = checkReferences(text, quantities, bindings, packs, before);
   // "today's air carries some 420 parts per billion": a figure that binds only in the unit it was meant in.
   const rebound = reboundSlips(text, quantities, bindings, packs, (again) => bindQuantities(text, again, packs, previous, history).bindings, before);
   // "The Vostok hole went down 3,623 ft": a figure that binds nothing but fits, read in metres, the one value its passage names.
@@ -579,7 +579,7 @@ function carriedSubject(text: string, previous: string | undefined, packs: Loade
   const quantities = readAnnualRates(text, readPartitiveCounts(text, read), packs);
   const { bindings } = bindQuantities(text, quantities, packs, previous);
   if (bindings.length === 0) return undefined;
-  const reference = checkReferences(text, quantities, bindings, packs);
+  const reference = checkReferences(text, quantities, bindings, packs, before);
   const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, read, before), ...checkUnits(text, read, before)]);
   return { quantities, bindings, verdicts: reference.verdicts, drafts };
 }

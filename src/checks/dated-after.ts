@@ -11,6 +11,8 @@
  */
 import type { ReferenceValue } from '../rulepack/types.js';
 import type { Quantity } from '../types.js';
+import { figureToldInPast } from '../claims/told-in-past.js';
+import { parseQuantities } from '../quantities/index.js';
 
 /** A calendar year as written. */
 const YEAR = /(?<!\d)(1[6-9]\d\d|20\d\d)(?!\d)/u;
@@ -24,13 +26,36 @@ export function replacedIn(newer: ReferenceValue): number | undefined {
   return years.length === 0 ? undefined : Math.min(...years);
 }
 
+/** A bare year, four digits with nothing else: "T15  2004", "(EPICA 2004)". */
+const BARE_YEAR = /^(?:1[6-9]\d\d|20\d\d)$/u;
+
+/** The calendar years the sentence's quantities read in CE state, and with `bare`, its bare years. */
+function calendarYears(quantities: readonly Quantity[], bare = false): number[] {
+  return quantities.flatMap((q) => {
+    const year = q.statedUnit === 'CE' || (bare && q.statedUnit === '' && BARE_YEAR.test(q.text)) ? YEAR.exec(q.text)?.[1] : undefined;
+    return year === undefined ? [] : [Number(year)];
+  });
+}
+
 /** True when one of the sentence's calendar years (quantities read in CE) is `newer`'s year of replacement or later. */
 export function datedAfterReplacement(quantities: readonly Quantity[], newer: ReferenceValue): boolean {
   const since = replacedIn(newer);
-  if (since === undefined) return false;
-  return quantities.some((q) => {
-    if (q.statedUnit !== 'CE') return false;
-    const year = YEAR.exec(q.text)?.[1];
-    return year !== undefined && Number(year) >= since;
-  });
+  return since !== undefined && calendarYears(quantities).some((year) => year >= since);
+}
+
+/**
+ * Whether a sentence tells an older figure of its own day: it names a calendar year before the newer
+ * value's replacement ("Copy from 2004 says 740,000 years") or tells the figure in the past tense
+ * ("the first record covered about 160,000 years"). One told in the present with no such year
+ * ("Vostok's record goes back about 160,000 years", "Dome C reaches back 740,000 years") gives it as
+ * today's figure, as "currently" does: later work corrected it, so it is an error, no note. The
+ * sentences `before` it in its passage date it too.
+ */
+export function toldOfItsDay(sentence: string, quantities: readonly Quantity[], q: Pick<Quantity, 'start'>, newer: ReferenceValue, before: readonly string[] = []): boolean {
+  const since = replacedIn(newer);
+  // A passage dated before the replacement ("T15  2004" heading a timeline's caption, "In 2004 ...
+  // The team reports ...") tells its figures of that day, in the present of a timeline or not.
+  const passage = since === undefined ? [] : before.flatMap((s) => calendarYears(parseQuantities(s), true));
+  if (since !== undefined && [...calendarYears(quantities, true), ...passage].some((year) => year < since)) return true;
+  return figureToldInPast(sentence, q.start);
 }

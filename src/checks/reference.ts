@@ -23,7 +23,7 @@ import { relativeDistance } from './reference-distance.js';
 export { relativeDistance };
 import { checkEnds } from './reference-ends.js';
 import { isDeniedFigure } from './denied-figure.js';
-import { datedAfterReplacement } from './dated-after.js';
+import { datedAfterReplacement, toldOfItsDay } from './dated-after.js';
 import { endpointPairs } from '../claims/bind-role.js';
 import { statesRange } from '../quantities/range-ends.js';
 import { findUnit, writtenInterval } from '../quantities/index.js';
@@ -33,7 +33,7 @@ import { findRestatements } from './units-pairs.js';
 export const TODAY_TERM = 'today';
 
 /** Checks each binding; returns the flags of conflicting claims and a verdict per binding. */
-export function checkReferences(sentence: string, quantities: Quantity[], bindings: Binding[], packs: LoadedPacks): { flags: FlagDraft[]; verdicts: Verdict[] } {
+export function checkReferences(sentence: string, quantities: Quantity[], bindings: Binding[], packs: LoadedPacks, before: readonly string[] = []): { flags: FlagDraft[]; verdicts: Verdict[] } {
   const flags: FlagDraft[] = [];
   const verdicts: Verdict[] = [];
   let aboutToday: boolean | undefined;
@@ -79,7 +79,9 @@ export function checkReferences(sentence: string, quantities: Quantity[], bindin
     if (matched !== undefined && r.asOf === undefined) aboutToday ??= findTerms(sentence, packs).has(TODAY_TERM);
     // "The Vostok record, published in 1999, covers 160,000 years": dated after the newer value's
     // sources, an older figure is no longer right for its day.
-    const older = matched !== undefined && (r.asOf !== undefined || aboutToday !== true) && !datedAfterReplacement(quantities, r) ? matched : undefined;
+    // A figure told in the present with no date of its own ("Vostok's record goes back about 160,000
+    // years") is given as today's, as "currently" gives it; a figure that only aged keeps its note.
+    const older = matched !== undefined && (r.asOf !== undefined || (aboutToday !== true && toldOfItsDay(sentence, quantities, q, r, before))) && !datedAfterReplacement(quantities, r) ? matched : undefined;
     // A global figure that is the size of a regional change ("the whole Earth was 9 °C colder": the
     // Antarctic warming) is the regional record told as global: the scope check's flag, not a value's.
     const regional = distance === 0 || matched !== undefined ? undefined : regionalMatch(r, q, packs);

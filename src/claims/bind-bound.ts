@@ -24,6 +24,7 @@ import type { Quantity } from '../types.js';
 import { applyRule, hedgeRule, intervalRule } from '../quantities/interval-rules.js';
 import { writtenInterval } from '../quantities/written-interval.js';
 import { type FormsTrie, phrasesTrie } from './forms-trie.js';
+import { isChangeVerb } from './bind-role.js';
 
 /** The pack terms a ceiling and a floor stand for. */
 export const BOUND_TERMS = { ceiling: 'highest', floor: 'lowest' } as const;
@@ -35,7 +36,12 @@ export type BoundKind = keyof typeof BOUND_TERMS;
 export interface BoundReading {
   kind: BoundKind;
   span: [number, number];
+  /** A verb of change before the bound's words carries the number to it ("fell as low as"): a level. */
+  carried?: true;
 }
+
+/** The word right before a bound's words: "dropped" in "dropped as low as". */
+const VERB_BEFORE = /(?:^|[^\p{L}])(\p{L}+)\s+$/u;
 
 /** Dimensions of levels, which have extremes; ages, spans and counts are not read as bounds. */
 const LEVELS = new Set<Quantity['dimension']>(['concentration', 'temperature', 'temperature-change', 'length', 'concentration-rate', 'temperature-rate', 'length-rate', 'number']);
@@ -133,6 +139,10 @@ export function boundReadings(sentence: string, quantities: readonly Quantity[],
     };
     for (const { kind, words } of plain) consider(kind, words, false);
     for (const { kind, words } of negated) consider(kind, words, true);
+    // "it dropped as low as about 100 ppm", "peaks climbed as high as 350 ppm": the verb of change
+    // right before the bound's words carries the number to the extreme; it is the bound's, no change.
+    const verb = best === undefined ? null : VERB_BEFORE.exec(sentence.slice(from, best.span[0]));
+    if (best !== undefined && verb !== null && verb[1] !== undefined && isChangeVerb(verb[1])) best = { ...best, span: [from + verb.index + verb[0].indexOf(verb[1]), best.span[1]], carried: true };
     return best;
   });
 }

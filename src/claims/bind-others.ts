@@ -1,8 +1,9 @@
 /**
  * Words that name another subject, held up for comparison: "comparable to other East Antarctic
  * records", "unlike Vostok", "similar to that of Greenland", or denied: "Termination III, not the end
- * of the last ice age". Such a term says what the number is compared with or is not about, not what
- * it is about, so it neither binds nor vetoes.
+ * of the last ice age", or set as the standard of a rank: "second only to EPICA Dome C", "the
+ * second-longest record after Dome C". Such a term says what the number is compared with or is not
+ * about, not what it is about, so it neither binds nor vetoes.
  *
  *   "a local warming of about 9 °C, comparable to other East Antarctic isotope records"
  *                                                  ^^^^^^^^^^^^^^ another subject: not bound
@@ -10,7 +11,7 @@
 import type { Quantity } from '../types.js';
 import type { TermHits } from './bind-view.js';
 
-const ANOTHER = /(?:^|[^\p{L}])(?:other|not(?:\s+(?:at|in|during|for|from|of|about))?(?:\s+the)?|rather\s+than(?:\s+(?:at|in|during))?(?:\s+the)?|instead\s+of(?:\s+the)?|unlike(?:\s+(?:the|those\s+of|that\s+of))?|(?:comparable|similar)\s+(?:to|with)(?:\s+(?:the|those\s+of|that\s+of|other))?|like\s+(?:the|those\s+of|that\s+of))\s+$/iu;
+const ANOTHER = /(?:^|[^\p{L}])(?:other|not(?:\s+(?:at|in|during|for|from|of|about))?(?:\s+the)?|rather\s+than(?:\s+(?:at|in|during))?(?:\s+the)?|instead\s+of(?:\s+the)?|unlike(?:\s+(?:the|those\s+of|that\s+of))?|(?:comparable|similar)\s+(?:to|with)(?:\s+(?:the|those\s+of|that\s+of|other))?|like\s+(?:the|those\s+of|that\s+of)|second\s+only\s+to(?:\s+the)?|(?:second|third|next)(?:[\s-]+[\p{L}-]+){0,3}\s+(?:after|behind)(?:\s+the)?)\s+$/iu;
 
 /** `hits` without the terms that name a subject held up for comparison (and the terms inside those). */
 export function withoutOthers(sentence: string, hits: TermHits): TermHits {

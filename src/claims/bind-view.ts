@@ -56,7 +56,7 @@ export function termViews(sentence: string, quantities: Quantity[], hits: TermHi
       // A term inside a quantity's own words is every quantity's, except a calendar year ("1750"),
       // which dates the figure beside it: in "from 280 ppm in 1750 to 420 ppm" it is 280's.
       const shared = end <= firstOwned || quantities.some((q) => q.statedUnit !== 'CE' && start < q.end && q.start < end);
-      const claimants = shared ? [] : claimantsOf(start, end, owners, quantities, breaks, pairs);
+      const claimants = shared ? [] : claimantsOf(sentence, start, end, owners, quantities, breaks, pairs);
       quantities.forEach((_, i) => {
         if (shared || !owned.has(i) || claimants.includes(i)) add(i, id, span);
       });
@@ -110,11 +110,29 @@ export function opensAsTimeFrame(sentence: string, quantities: Quantity[], i: nu
   return i === 0 && q !== undefined && (q.dimension === 'duration' || q.dimension === 'age') && OPENING_TIME.test(sentence.slice(0, q.start));
 }
 
+/**
+ * A verb of being or staying that makes the words before it the subject of the figure after it, with
+ * at most three words of description between ("pre-industrial **is the usual** 280 ppm", "the
+ * interglacial level **sat at about** 280 ppm"; common practice of English grammar: a subject and its
+ * predicate). No digit, mark of a clause or second verb may stand between.
+ */
+const PREDICATE_TO_FIGURE = /^[\s\p{L}'’-]{0,24}?(?:^|\s)(?:is|was|are|were|sat|sits|stood|stands|stayed|stays|remained|remains|hovered|hovers|came\s+in\s+at|comes\s+in\s+at)(?:\s+[\p{L}'’~-]+){0,3}\s*$/iu;
+
+/** What opens a clause between a figure and the words after it: a line break, a clause mark, a conjunction. */
+const CLAUSE_OPENS = /^[^\p{L}\p{N}]*(?:\n|[,;:–—]|(?:^|\s)(?:and|but|while|whereas)\s)[^\p{N}]*$/iu;
+
 /** The owner quantities nearest a term span that stands after the first owner (all of them on a tie). */
-function claimantsOf(start: number, end: number, owners: number[][], quantities: Quantity[], breaks: number[], pairs: EndpointPair[]): number[] {
+function claimantsOf(sentence: string, start: number, end: number, owners: number[][], quantities: Quantity[], breaks: number[], pairs: EndpointPair[]): number[] {
   // Between the endpoints of "from X to Y", words before "to" speak of X and words after it of Y.
   const pair = pairs.find((p) => (quantities[p.first] as Quantity).end <= start && end <= (quantities[p.second] as Quantity).start);
   if (pair !== undefined) return groupOf(owners, end <= pair.join ? pair.first : pair.second);
+  // "... 190 ppm, give or take 10 / pre-industrial is the usual 280 ppm": the subject that opens the
+  // next figure's clause (after a line break or a clause mark) is that figure's, however near the
+  // figure before it stands; "the max in 800,000 years before industry was 300 ppm" opens none.
+  const next = owners.find((g) => (quantities[g[0] as number] as Quantity).start >= end);
+  const nextStart = next === undefined ? undefined : (quantities[next[0] as number] as Quantity).start;
+  const previousEnd = Math.max(-1, ...quantities.filter((q) => q.end <= start).map((q) => q.end));
+  if (next !== undefined && nextStart !== undefined && previousEnd >= 0 && CLAUSE_OPENS.test(sentence.slice(previousEnd, start)) && PREDICATE_TO_FIGURE.test(sentence.slice(end, nextStart))) return [...next];
   let best = Infinity;
   let chosen: number[] = [];
   for (const group of owners) {

@@ -535,6 +535,8 @@ export function bindQuantities(
   const bounds = boundReadings(sentence, quantities, packs, hits);
   bounds.forEach((b, j) => {
     if (b === undefined) return;
+    // "it dropped as low as about 100 ppm": a level reached, no change.
+    if (b.carried === true && roles[j] === 'unknown') roles[j] = 'level';
     ownWords(views, j, b.span);
     const own = views[j] as TermHits;
     // "CO2 never fell below about 220 ppm": the verb of a bound states the extreme, not a change, so

@@ -22,3 +22,30 @@ export function toldInPast(sentence: string): boolean {
   }
   return false;
 }
+
+/** Auxiliaries of the present perfect, which make a past participle after them run up to today ("has reached"). */
+const PERFECT_AUXILIARIES = new Set(['has', 'have', "'s", '’s', 've', "'ve", '’ve']);
+
+/**
+ * True when the verb that tells the figure starting at `at` is in the past tense: the last finite
+ * verb before it ("the first core **covered** 160,000 years", "the record then **reached** 740,000
+ * years"), not one in the present or the present perfect ("Vostok's record **goes** back 160,000
+ * years", "it **has** reached back 740,000 years"). A participle opening a phrase set off by a comma
+ * ("The Vostok core, drilled in the 1990s, ...") describes its noun and tells nothing; a figure with
+ * no finite verb before it is told as it stands (common practice of English grammar, as toldInPast).
+ */
+export function figureToldInPast(sentence: string, at: number): boolean {
+  const terms = termsOf(sentence);
+  for (let k = terms.length - 1; k >= 0; k--) {
+    const t = terms[k] as (typeof terms)[number];
+    if (t.start >= at || !t.tags.includes('Verb') || t.tags.includes('Gerund') || t.tags.includes('Infinitive') || t.tags.includes('Participle') || t.tags.includes('Particle')) continue;
+    const word = t.text.toLowerCase();
+    if (PAST_AUXILIARIES.has(word)) return true;
+    if (!t.tags.includes('PastTense') || t.tags.includes('Auxiliary')) return false;
+    // "The Vostok core, drilled in the 1990s, covers ...": a participle after a comma describes its noun.
+    if (/,\s*$/u.test(sentence.slice(0, t.start))) continue;
+    const previous = terms[k - 1]?.text.toLowerCase();
+    return previous === undefined || !PERFECT_AUXILIARIES.has(previous);
+  }
+  return false;
+}

@@ -36,8 +36,24 @@ describe('an older figure dated by its own publication is right for its date', (
     expect(flags[0]?.[1]).not.toBe('note');
   });
 
-  it('an undated older figure keeps its note, and one dated to its own year stays clean', async () => {
-    expect(await valueFlags('The Dome C record reaches back about 740,000 years.')).toEqual([['value.edc-record-span', 'note']]);
+  it('an older figure told in the past keeps its note, and one dated to its own year stays clean', async () => {
+    expect(await valueFlags('The first Dome C record reached back about 740,000 years.')).toEqual([['value.edc-record-span', 'note']]);
     expect(await valueFlags('The 2004 EPICA paper put the Dome C record at about 740,000 years.')).toEqual([]);
+  });
+
+  // Told in the present with no date of its own, the older figure is given as today's, as
+  // "currently" gives it: later work corrected it.
+  it.each([
+    ['The Dome C record reaches back about 740,000 years.', 'value.edc-record-span'],
+    ['Our display explains that the Vostok record spans roughly 160,000 years of climate.', 'value.vostok-record-span'],
+    ['The Vostok ice has given us a record that goes back some 160,000 years.', 'value.vostok-record-span'],
+  ])('%j → %s, no note', async (text, ruleId) => {
+    const flags = await valueFlags(text);
+    expect(flags.map(([id]) => id)).toEqual([ruleId]);
+    expect(flags[0]?.[1]).not.toBe('note');
+  });
+
+  it('a passage dated before the newer work tells its figures of that day, in the present or not', async () => {
+    expect(await valueFlags('Panel 6: 2004.\nThe EPICA team announces a Dome C record of 740,000 years.')).toEqual([['value.edc-record-span', 'note']]);
   });
 });

@@ -39,7 +39,8 @@ describe('checkReferences', () => {
   it('gives a figure that was right when published a note naming the newer value, not a warning', () => {
     // EPICA community members 2004 (doi 10.1038/nature02599): about 740,000 years; extended to about
     // 800,000 years by Jouzel et al. 2007 and Lüthi et al. 2008.
-    const s = 'The EPICA Dome C record spans 740,000 years.';
+    // Told in the past: of its day (told in the present, it is today's figure: dated-after.test.ts).
+    const s = 'The EPICA Dome C record spanned 740,000 years.';
     const { flags, verdicts } = check(s, q(s, '740,000 years', 'duration', 735e3, 745e3));
     expect(verdicts).toEqual(['conflicts']);
     expect(flags[0]).toMatchObject({ ruleId: 'value.edc-record-span', level: 'note', correction: 'about 800,000 years' });

@@ -26,6 +26,10 @@ describe('a verb of change inside a bound is the bound, not a change', () => {
     // A ceiling told with a verb of rising (Lüthi et al. 2008: about 300 ppm).
     ['Before industry, CO2 in the ice never rose above about 380 ppm.', 'about 380 ppm', 'ceiling', HIGHEST, 'conflicts'],
     ['Before industry, CO2 in the ice never rose above about 300 ppm.', 'about 300 ppm', 'ceiling', HIGHEST, 'agrees'],
+    // A verb of change right before a plain bound carries the number to the extreme: a level, no
+    // change and no glacial-interglacial swing (Lüthi et al. 2008: lowest about 172 ppm).
+    ['In the deepest cold phases carbon dioxide sank as low as about 100 ppm.', 'about 100 ppm', 'floor', LOWEST, 'conflicts'],
+    ['In the deepest cold phases carbon dioxide sank as low as roughly 175 ppm.', 'roughly 175 ppm', 'floor', LOWEST, 'agrees'],
   ])('%s', (sentence, text, bound, value, verdict) => {
     expect(boundAt(sentence, text)).toEqual({ bound, value, verdict });
   });

@@ -23,6 +23,10 @@ const ROWS: [sentence: string, expected: string[]][] = [
   ['Unlike Vostok, the EPICA Dome C record reaches back 800,000 years.', ['edc-record-span']],
   // Named as the subject, East Antarctica still binds (Buizert et al. 2021: East Antarctic LGM cooling about 4-7 °C).
   ['East Antarctica warmed by about 6 °C across the deglaciation.', ['east-antarctic-lgm-cooling-buizert2021']],
+  // The standard of a rank is another subject: the span is Dome Fuji's, not Dome C's (Dome Fuji
+  // Ice Core Project Members 2017: about 720,000 years; Jouzel et al. 2007: Dome C about 800,000).
+  ['The Dome Fuji record, the second-longest from Antarctica after Dome C, reaches back about 720,000 years.', ['dome-fuji-record-span']],
+  ['Dome Fuji holds a record reaching back about 720,000 years, second only to EPICA Dome C.', ['dome-fuji-record-span']],
 ];
 
 describe('terms that name another subject', () => {
