@@ -9,7 +9,7 @@
 import { answerCauses, choiceOf } from './answers.js';
 import { phraseWords, type LexHit } from './lexicon.js';
 import { appositionSubject, clauseSubject, kindOf, PREPOSITIONS, subjectBefore, subjectOf, thingAfter, thingBefore } from './resolve.js';
-import { denialsBefore, isPartitiveOne, NEGATIONS, PARTICIPANTS, type ReadSentence, type Thing } from './sentence.js';
+import { denialsBefore, isPartitiveOne, NEGATIONS, PARTICIPANTS, splicedClauseStart, type ReadSentence, type Thing } from './sentence.js';
 import type { Cause, Polarity } from './types.js';
 
 /** Words that make the next word a noun ("the end", "of warming"): no verb follows them. */
@@ -135,6 +135,17 @@ function doingHits(s: ReadSentence): LexHit[] {
         out.push({ cls: 'causes', key: 'verbs', first: k, last: deed.last });
         return;
       }
+      // "did all of it", "did most of that": a pronoun after a quantifier's "of" stands for the deed
+      // the passage is about.
+      const pronoun = s.words[j - 1]?.text === 'of' && j - 2 > k && s.things.some((t) => t.kind === 'pronoun' && t.first === j && t.last === j);
+      // It closes the phrase: its segment ends, or a joining word and a new subject follow ("... and CO2 played no part").
+      const closes = s.words[j + 1]?.segment !== segment || s.things.some((t) => t.first === j + 2);
+      if (pronoun && closes) {
+        out.push({ cls: 'causes', key: 'verbs', first: k, last: j });
+        return;
+      }
+      // "did essentially all the work": an adverb of degree (an -ly word, English morphology) may stand before the object.
+      if (j === k + 1 && at.text.endsWith('ly') && !s.things.some((t) => t.first <= j && j <= t.last)) continue;
       if (!DEED_LEAD.has(at.text)) return;
     }
   });
@@ -700,6 +711,9 @@ function isExclusive(s: ReadSentence, h: LexHit, agent: Thing | undefined): bool
   if (partial || shareAfter(s, h)) return false;
   return s.of('exclusive').some((e) => {
     if (s.words[e.first]?.segment !== s.words[h.first]?.segment && s.words[e.first]?.clause !== s.words[h.first]?.clause) return false;
+    // "The orbit did not end it on its own, the CO2 feedback did much of it": a restriction of the clause before a spliced one.
+    const spliced = splicedClauseStart(s, h.first);
+    if (spliced >= 0 && e.last < spliced) return false;
     if (['not', 'no'].includes(s.words[e.first - 1]?.text ?? '')) return false;
     if (isPronounOne(s, e)) return false;
     // "switched off by the orbit and by nothing else": a restriction joined to the agent by linking words only.

@@ -4,6 +4,7 @@
  *   "The two curves rise and fall together, which proves that CO2 controls the climate."
  *    correlation ──────────────────────   proof ──  cause ───────────────────────
  */
+import type { LexHit } from './lexicon.js';
 import { denialsBefore, type ReadSentence } from './sentence.js';
 import type { Cause, Evidence } from './types.js';
 
@@ -23,7 +24,40 @@ export function readEvidence(s: ReadSentence, causes: readonly Cause[]): Evidenc
     out.push({ kind: 'evidence', start: s.words[c.first]?.start ?? 0, end });
   }
   if (out.length === 0) out.push(...causeOnItsGrounds(s, causes));
+  if (out.length === 0) out.push(...proofWithGroundAfter(s, causes));
   return out;
+}
+
+/**
+ * "the ice cores prove CO2 causes ice ages, the lines on your graph match perfectly", "the record on
+ * its own proves that CO2 controls temperature: the two curves move in lockstep": a proof of a cause
+ * whose ground, a co-variation, is set beside it after a comma or a colon with no joining word (an
+ * asyndetic clause gives the reason for the one before it; English grammar, common practice), in the
+ * proof's clause or after a colon (a contrast, "but the curves match", sets the match against the proof). The
+ * proof word is one word that takes the claim as its object ("prove that", "proves CO2 ..."): no adverb
+ * of certainty ("clearly") or modal ("must be").
+ */
+function proofWithGroundAfter(s: ReadSentence, causes: readonly Cause[]): Evidence[] {
+  for (const proof of s.of('proof', 'all')) {
+    const word = s.words[proof.first]?.text ?? '';
+    // A verb of proving takes its claim as its object: "that" or the claim's subject follows it ("must be" does not).
+    const takesClaim = s.words[proof.last + 1]?.text === 'that' || s.things.some((t) => t.first === proof.last + 1);
+    if (proof.first !== proof.last || word.endsWith('ly') || !takesClaim) continue;
+    if (denialsBefore(s, proof.first, 4) % 2 === 1 || hedged(s, proof.first) || deniedObject(s, proof.last)) continue;
+    const proofEnd = s.words[proof.last]?.end ?? 0;
+    const cause = causes.find((k) => k.start >= proofEnd - 1 && k.polarity === 'asserted' && k.role !== 'feedback' && k.role !== 'amplify');
+    if (cause === undefined) continue;
+    const ground = s.of('correlation').find((c) => {
+      const first = s.words[c.first];
+      if (first === undefined || first.start < cause.end || denialsBefore(s, c.first, 4) % 2 === 1) return false;
+      // The ground's clause opens after a comma or a colon, with no joining word before its subject.
+      const opening = s.words.findIndex((w) => w.segment === first.segment);
+      const gap = s.text.slice(s.words[opening - 1]?.end ?? 0, s.words[opening]?.start ?? 0);
+      return opening > proof.last && (first.clause === s.words[proof.first]?.clause || gap.includes(':')) && /[,:]/u.test(gap) && !s.of('proof', 'reasons').some((r) => r.first === opening);
+    });
+    if (ground !== undefined) return [{ kind: 'evidence', start: s.words[proof.first]?.start ?? 0, end: s.words[ground.last]?.end ?? proofEnd }];
+  }
+  return [];
 }
 
 /**
@@ -90,11 +124,19 @@ export function proofWithoutObject(s: ReadSentence): { start: number; end: numbe
   const clause = s.words[correlation.first]?.clause;
   // "correlation-as-proof" is a compound's name, no claim: a proof word joined by a hyphen is part of a word.
   const hyphened = (i: number) => s.text[(s.words[i]?.start ?? 0) - 1] === '-';
-  const proof = s.of('proof', 'all').find((p) => !hyphened(p.first) && s.words[p.last]?.clause === clause && PROOF_NOUNS.has(s.words[p.last]?.text ?? '') && denialsBefore(s, p.first, 4) % 2 === 0 && !hedged(s, p.first) && !deniedObject(s, p.last) && !statesObject(s, p.last));
+  // "the viewer won't need any more proof than that", "no further proof is needed": more proof denied
+  // is a verdict that the proof at hand is enough, said of the co-variation before it in the sentence.
+  const enough = (p: LexHit) => moreOf(s, p.first) && denialsBefore(s, p.first - 1, 6) % 2 === 1 && (s.words[correlation.first]?.start ?? 0) < (s.words[p.first]?.start ?? 0);
+  const proof = s.of('proof', 'all').find((p) => !hyphened(p.first) && (s.words[p.last]?.clause === clause || enough(p)) && PROOF_NOUNS.has(s.words[p.last]?.text ?? '') && (denialsBefore(s, p.first, 4) % 2 === 0 || enough(p)) && !hedged(s, p.first) && !deniedObject(s, p.last) && !statesObject(s, p.last));
   if (proof === undefined) return undefined;
   const first = Math.min(correlation.first, proof.first);
   const last = Math.max(correlation.last, proof.last);
   return { start: s.words[first]?.start ?? 0, end: s.words[last]?.end ?? 0 };
+}
+
+/** Word `i` is preceded by one of more ("more proof", "further proof", "extra evidence": lexicon `changes` `up` or `increment`). */
+function moreOf(s: ReadSentence, i: number): boolean {
+  return s.of('changes').some((h) => h.first === h.last && h.last === i - 1 && (h.key === 'up' || h.key === 'increment'));
 }
 
 /** The nouns of proof ("the proof", "the smoking gun"): a proof word that can stand as a predicate noun. */
@@ -105,5 +147,6 @@ const PROOF_OBJECTS = new Set(['that', 'of', 'for', 'to']);
 
 /** Whether the proof noun at word `i` is followed, at most past one word ("proof enough that"), by what it proves. */
 function statesObject(s: ReadSentence, i: number): boolean {
-  return s.words.slice(i + 1, i + 3).some((w) => PROOF_OBJECTS.has(w.text));
+  // "more proof than that": a "that" after "than" points back to the proof at hand; it opens no object.
+  return s.words.slice(i + 1, i + 3).some((w, k) => PROOF_OBJECTS.has(w.text) && s.words[i + k]?.text !== 'than');
 }

@@ -131,8 +131,8 @@ export function readSentence(text: string, lexicon: CompiledLexicon): ReadSenten
   const of = (cls: string, key?: string) => hits.filter((h) => h.cls === cls && (key === undefined || h.key === key));
   const inside = (i: number, cls: string, key?: string) => of(cls, key).some((h) => h.first <= i && i <= h.last);
   const question = /\?\s*["”’)]*\s*$/u.test(text);
-  const questionNot = question && AUXILIARIES.has(words[0]?.text ?? '') && words[1]?.text === 'not' ? 1 : -1;
-  return { text, words, hits, of, inside, things: thingsOf(words, hits), question, questionNot, opening: openingOf(text, words) };
+  const things = thingsOf(words, hits);
+  return { text, words, hits, of, inside, things, question, questionNot: question ? negativeQuestionNot(words, things) : -1, opening: openingOf(text, words) };
 }
 
 /** Entities, regions (as the temperature of that region) and pronouns, left to right. */
@@ -302,6 +302,40 @@ function farTooTo(s: ReadSentence, i: number, window: number): boolean {
   return false;
 }
 
+/**
+ * The "not" of a negative question ("Doesn't that prove it?", "..., so doesn't the lag settle it?",
+ * "I might be wrong, but doesn't CO2 ...?"): an auxiliary and "not" opening the sentence or a segment,
+ * past one word that opens the segment and names no thing (a joining word). -1 without one.
+ */
+function negativeQuestionNot(words: readonly Word[], things: readonly Thing[]): number {
+  return words.findIndex((w, k) => {
+    const aux = k - 1;
+    if (w.text !== 'not' || aux < 0 || !AUXILIARIES.has(words[aux]?.text ?? '')) return false;
+    const opens = (i: number) => i === 0 || words[i - 1]?.segment !== words[i]?.segment;
+    return opens(aux) || (aux >= 1 && opens(aux - 1) && words[aux - 1]?.segment === words[aux]?.segment && !things.some((t) => t.first <= aux - 1 && aux - 1 <= t.last));
+  });
+}
+
+/** Determiners that may open a subject's noun phrase before its thing ("the orbital changes", "its tilt"): English grammar, common practice. */
+const SUBJECT_DETERMINERS = new Set(['the', 'a', 'an', 'its', 'their', 'this', 'that', 'these', 'those', 'our']);
+
+/**
+ * Where the clause holding word `i` begins when it is spliced onto the one before by a comma alone
+ * and names a subject of its own before `i` ("it didn't drive anything, the orbital changes did all
+ * the work"): a denial of the clause before does not reach into it. -1 otherwise: a parenthetical
+ * ("cannot, by definition, have caused") or a verb phrase after a comma has no subject of its own.
+ */
+export function splicedClauseStart(s: ReadSentence, i: number): number {
+  const segment = s.words[i]?.segment;
+  const first = s.words.findIndex((w) => w.segment === segment);
+  if (first <= 0 || first >= i) return -1;
+  const gap = s.text.slice(s.words[first - 1]?.end ?? 0, s.words[first]?.start ?? 0);
+  if (!gap.includes(',')) return -1;
+  const opening = SUBJECT_DETERMINERS.has(s.words[first]?.text ?? '') ? first + 1 : first;
+  const subject = s.things.find((t) => t.first === opening || t.first === first);
+  return subject !== undefined && subject.last < i ? first : -1;
+}
+
 /** Verbs that deny their object ("rules out CO2 as a driver"). */
 export const DENIALS = new Set(['rule', 'rules', 'ruled', 'ruling', 'exclude', 'excludes', 'excluded', 'deny', 'denies', 'denied', 'disprove', 'disproves', 'disproved', 'refute', 'refutes', 'refuted', 'dismiss', 'dismisses', 'dismissed', 'exonerate', 'exonerates', 'exonerated', 'acquit', 'acquits', 'acquitted', 'eliminate', 'eliminates', 'eliminated', 'eliminating', 'discount', 'discounts', 'discounted', 'strike', 'strikes', 'struck', 'cross', 'crosses', 'crossed']);
 /** Denials that need the particle after them ("struck off the list", "crossed off"). */
@@ -336,10 +370,13 @@ export function denialsBefore(s: ReadSentence, i: number, window = 6): number {
   // "struck off the list of suspects for what melted...": a phrasal denial reaches past its own object.
   // A phrasal denial counted past the window brings the words that govern it ("cannot be struck off").
   let reach = i - window;
+  const spliced = splicedClauseStart(s, i);
   for (let k = i - 1; k >= 0 && k >= i - window - 7; k -= 1) {
     const w = s.words[k] as Word;
     // "cannot, by definition, have caused": a denial reaches across a parenthetical comma, not past "so" or "because".
     if (w.clause !== clause || LINKS.has(s.words[k + 1]?.text ?? '') && k + 1 < i) break;
+    // "it didn't drive anything, the orbit did all the work": not into a clause spliced on with a subject of its own.
+    if (k < spliced) break;
     const phrasal = DENIALS.has(w.text) && denialParticle(s, k) > k;
     if (k < reach && !(phrasal && k >= i - window - 4)) continue;
     if (phrasal) reach = Math.min(reach, k - 3);

@@ -213,8 +213,8 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
   if (first === 'q' || isReported(s)) return make('asked');
   // "the question she hears at every talk: if CO2 rose after ..., how can it be a cause?": a question
   // that a saying's name before a colon introduces is someone's question, set out to be answered.
-  const colon = s.text.indexOf(':');
-  if (colon > 0 && s.of('stance', 'quotation-names').some((h) => (s.words[h.last]?.end ?? Infinity) <= colon)) return make('asked');
+  // Any colon after the name counts: a speaker's label may hold the first ("ROZ: Okay, the question we get every week: ...?").
+  if (s.of('stance', 'quotation-names').some((h) => s.text.indexOf(':', s.words[h.last]?.end ?? Infinity) > 0)) return make('asked');
   // "Did you know the poles swing less?": a teaser that states its content as a fact.
   if ((first === 'did' || first === 'do') && s.words[1]?.text === 'you' && s.words[2]?.text === 'know') return make('asserted');
   const next = context.next;
@@ -234,7 +234,8 @@ function questionStance(s: ReadSentence, context: StanceContext, make: (k: Stanc
     const at = opens(i);
     return at >= 0 && WH.has(s.words[at]?.text ?? '') && AUX.has(s.words[pastIntensifier(s, at + 1)]?.text ?? '');
   });
-  const negative = AUX.has(first) && s.words[1]?.text === 'not';
+  // "Doesn't that prove it?", "..., so doesn't the lag settle it?": a negative question, at the opening or after a joining word.
+  const negative = s.questionNot > 0;
   // "X, so how can you trust it?", "X, so what's the fuss?", "X, right?": a question after a
   // statement leaves the statement asserted (a trailing tag asks only for agreement).
   // "..., so which is it?", "..., so maybe we drop the point?": after a joining word, a question word

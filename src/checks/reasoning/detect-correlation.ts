@@ -15,6 +15,9 @@ import { denialsBefore } from '../../propositions/sentence.js';
 import { opensUtterance } from '../../prose/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 
+/** How many sentences back a proof with no object looks for the CO2 its passage is about. */
+const PASSAGE_REACH = 8;
+
 function detect({ index, read }: DetectInput): Cue[] {
   const here = read(index);
   const evidence = here?.props.evidence[0];
@@ -22,7 +25,10 @@ function detect({ index, read }: DetectInput): Cue[] {
   // "When two curves track each other that closely, the correlation itself is the proof.": a
   // co-variation called proof with no object stated proves the causal claim the passage is about.
   if (here !== undefined && !here.s.question) {
-    const aboutCo2 = [here, read(index - 1), read(index - 2)].some((r) => r !== undefined && r.s.of('entities', 'co2').length > 0);
+    // The passage is about CO2 when the sentence or one of the paragraph's sentences before it names the gas
+    // ("Those two lines track each other so well, that's all the proof anybody needs" in a script on CO2).
+    const passage = Array.from({ length: PASSAGE_REACH + 1 }, (_, k) => read(index - k));
+    const aboutCo2 = passage.some((r) => r !== undefined && r.s.of('entities', 'co2').length > 0);
     const proof = aboutCo2 ? proofWithoutObject(here.s) : undefined;
     if (proof !== undefined) return [proof];
   }
