@@ -56,6 +56,8 @@ const MORE_IRREGULAR: Readonly<Record<string, readonly string[]>> = {
   sing: ['sang', 'sung'], ring: ['rang', 'rung'], spring: ['sprang', 'sprung'], sting: ['stung'], stink: ['stank', 'stunk'],
   steal: ['stole', 'stolen'], strive: ['strove', 'striven'], sneak: ['snuck'], speed: ['sped'], bleed: ['bled'], creep: ['crept'],
   cling: ['clung'], wring: ['wrung'], dive: ['dove'], behold: ['beheld'], uphold: ['upheld'], seek: ['sought'],
+  // Roots compromise's suffix rules give words of another stem: "fold" read as a past "fell", "look" as "lake".
+  fell: ['fold'], lake: ['look'],
 };
 
 /**

@@ -40,7 +40,9 @@ describe('the built-in paleoclimate pack', () => {
     // the bipolar seesaw (Pedro et al. 2016). Round 13: Antarctic temperature rose with CO2 or a few
     // centuries before it, not after it (Parrenin et al. 2013, doi 10.1126/science.1226368; Pedro et
     // al. 2012; Caillon et al. 2003, doi 10.1126/science.1078758). Round 14: the Southern Hemisphere
-    // stack warmed before CO2 over the last deglaciation (Shakun et al. 2012, Figure 2b).
+    // stack warmed before CO2 over the last deglaciation (Shakun et al. 2012, Figure 2b). Round 20:
+    // CO2 rose as each ice age ended and fell as the ice sheets grew (Monnin et al. 2001, doi
+    // 10.1126/science.291.5501.112; Petit et al. 1999; Lüthi et al. 2008).
     expect(packs.directions.map((d) => d.id)).toEqual([
       'co2-solubility-falls-with-warming',
       'trapped-air-younger-than-ice',
@@ -51,6 +53,7 @@ describe('the built-in paleoclimate pack', () => {
       'co2-forcing-logarithmic',
       'modern-co2-rise-faster-than-natural',
       'bipolar-seesaw-younger-dryas',
+      'co2-rises-as-ice-ages-end',
     ]);
     expect(packs.directions.find((d) => d.id === 'co2-forcing-logarithmic')?.sources.map((s) => s.doi)).toContain('10.1029/98GL01908');
   });

@@ -81,8 +81,10 @@ function detectLongerSpan(input: DetectInput, now: number): Cue[] {
     ...claimSpans.map((c) => ({ ...c, all: c.years >= 1e9 })),
   ];
   if (claims.length === 0) return [];
-  const recordWords = input.mayHold('record') ? findPhrases(input.sentence, input.words('record')).map((r) => r.start) : [];
-  const isRecordHere = (i: number) => recordWords.includes(s.words[i]?.start ?? -1) || s.inside(i, 'entities', 'ice-core') || s.inside(i, 'entities', 'co2-station');
+  // The record words are found (and compromise's roots read) only when a span before a claim asks.
+  let recordWords: number[] | undefined;
+  const recordWordsHere = () => (recordWords ??= input.mayHold('record') ? findPhrases(input.sentence, input.words('record')).map((r) => r.start) : []);
+  const isRecordHere = (i: number) => s.inside(i, 'entities', 'ice-core') || s.inside(i, 'entities', 'co2-station') || recordWordsHere().includes(s.words[i]?.start ?? -1);
   const isRecordElsewhere = (b: ReadSentence) => (i: number) => b.inside(i, 'entities', 'ice-core') || b.inside(i, 'entities', 'co2-station') || /^(?:record|records|core|cores|archive)$/u.test(b.words[i]?.text ?? '');
   for (const claim of claims) {
     // The record's span: in this sentence before the claim, else in one of the two sentences before.
