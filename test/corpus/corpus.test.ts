@@ -197,6 +197,10 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   'tuning-an-1': { recall: 0.7, falseFlags: 0.1 },
   'tuning-an-3': { recall: 0.7, falseFlags: 0.06 },
   'tuning-an-4': { recall: 0.7, falseFlags: 0.1 },
+  // tuning-ap-1..4 were the blind hold-out holdout-ap, written at the twentieth round's start by four
+  // new writers and read, totals only, on that round's first and last code (93/121 then 99/121, and
+  // 31/40 both times; false flags 11/287 and 4/113 both times); per set on the last code 34/41, 33/40,
+  // 32/40, 31/40 caught, false flags 3/98, 4/90, 4/99, 4/113: the default floors hold.
   'tuning-ao-1': { recall: 0.55, falseFlags: 0.06 },
   'tuning-ao-2': { recall: 0.6, falseFlags: 0.06 },
   'tuning-ao-3': { recall: 0.6, falseFlags: 0.12 },
@@ -231,12 +235,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (87.1% measured over 114 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (88.0% measured over 122 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (94.4% measured over 114 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.8% measured over 122 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
