@@ -62,7 +62,7 @@ function isBareName(text: string): boolean {
 const DECORATION = /^[\s>↳↪*_]+|^(?:--|[—–])\s*|[\s*_:]+$/gu;
 
 /** Pictographs a display name carries ("Kelp & Kettles 🌊"), and the joiners inside them. */
-const PICTOGRAPHS = /[\p{Extended_Pictographic}\u200d\ufe0f]+/gu;
+const PICTOGRAPHS = /(?:\p{Extended_Pictographic}|\u200d|\ufe0f)+/gu;
 
 /** True when `line` (one line, markup stripped or not) is a post's byline. */
 export function isByline(line: string): boolean {
