@@ -201,6 +201,10 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   // new writers and read, totals only, on that round's first and last code (93/121 then 99/121, and
   // 31/40 both times; false flags 11/287 and 4/113 both times); per set on the last code 34/41, 33/40,
   // 32/40, 31/40 caught, false flags 3/98, 4/90, 4/99, 4/113: the default floors hold.
+  // tuning-aq-1..4 were the blind hold-out holdout-aq, written at the end of the twentieth round by four
+  // new writers and read once, totals only, on the twenty-first round's first code (33/40, 36/41, 35/42
+  // and 27/40 caught; false flags 2/90, 1/82, 2/88, 5/96), then opened for tuning.
+  'tuning-aq-4': { recall: 0.65, falseFlags: 0.06 },
   'tuning-ao-1': { recall: 0.55, falseFlags: 0.06 },
   'tuning-ao-2': { recall: 0.6, falseFlags: 0.06 },
   'tuning-ao-3': { recall: 0.6, falseFlags: 0.12 },
