@@ -206,4 +206,8 @@ function placesOf(input: DetectInput, s: ReadSentence): PhraseHit[] {
 }
 
 /** `scope.figure-across-scales` for the registry. */
-export const figureAcrossScales: DetectorEntry = { detect, keys: [] };
+export const figureAcrossScales: DetectorEntry = {
+  detect,
+  // Every flag falls on a scale the sentence names: a region or an ice core of the lexicon, or a place.
+  keys: [['lexicon.regions', 'lexicon.entities.ice-core', 'places', 'here']],
+};

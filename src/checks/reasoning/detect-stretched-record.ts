@@ -180,5 +180,7 @@ export const shortRecordStretched: DetectorEntry = {
     const longer = detectLongerSpan(input, new Date().getUTCFullYear());
     return longer.length > 0 ? longer : detectOneYear(input);
   },
-  keys: [],
+  // Every flag needs a claim of all history, one year's change told as every year's, or a span of
+  // years or a span noun (cue words `spans`) in the sentence.
+  keys: [['all-history', 'every-year', 'spans']],
 };
