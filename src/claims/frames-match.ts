@@ -101,7 +101,7 @@ export function mayMatchPhrase(sentence: SentenceTokens, phrase: Phrase): boolea
 const HYPHENS = new Set(['-', '\u2010', '\u2011']);
 const textsOf = new WeakMap<SentenceTokens, string[]>();
 
-/** The words of a sentence, and each word joined with the words after it across hyphens. */
+/** The words of a sentence (and the letters of a word that opens with a number), and each word joined with the words after it across hyphens. */
 function wordTexts(sentence: SentenceTokens): string[] {
   const known = textsOf.get(sentence);
   if (known !== undefined) return known;
@@ -109,6 +109,9 @@ function wordTexts(sentence: SentenceTokens): string[] {
   const words = sentence.words.map((w) => sentence.tokens[w] as Token);
   words.forEach((t, i) => {
     texts.push(t.text);
+    // A unit written onto its number ("800kyr", "6c"): its letters are a word too.
+    const tail = /^\d[\d.,]*(\p{L}.*)$/u.exec(t.text)?.[1];
+    if (tail !== undefined) texts.push(tail);
     let joined = t.text;
     for (let j = i; j + 1 < words.length && HYPHENS.has(sentence.text.charAt((words[j] as Token).end)); j += 1) {
       joined += (words[j + 1] as Token).text;

@@ -41,6 +41,10 @@ describe('a figure handed unchanged across scales', () => {
     'The whole globe was roughly 6 °C colder at the glacial maximum.\nThe top of the Antarctic ice sheet would therefore have been about 6 °C colder as well.',
     // a wider scale after a sameness phrase
     'At the glacial maximum our parish was about 6 °C colder, the same as the global average.',
+    // "that much" before a comparative: one of the lexicon ("lower", which compromise tags no
+    // Comparative), or one compromise tags so ("frostier", which the lexicon lacks) (session 21)
+    'Global sea level fell by about 120 metres at the glacial maximum.\nSo our bay was that much lower in the ice age too.',
+    'The world was some 6 °C colder at the glacial maximum.\nSo our glen was that much frostier in the ice age too.',
   ])('flags %s', async (text) => {
     expect(await rulesOf(text)).toContain(RULE);
   });
@@ -57,6 +61,9 @@ describe('each figure kept with its scale, or scaled', () => {
     'Some say the whole globe was 20 °C colder at the glacial maximum.\nGreenland\'s summit really did run about twenty degrees colder, but that is one spot on a high ice sheet.',
     // one place's own figure beside a different global one
     'Our valley was about 12 °C colder at the glacial maximum, while the world as a whole was about 6 °C colder.',
+    // "that much" before a word that merely ends in "-er", comparing nothing (session 21)
+    'The whole planet was about 6 °C colder at the glacial maximum.\nOur valley farmers still remember that much winter from the ice age too.',
+    'The whole planet was about 6 °C colder at the glacial maximum.\nSo our valley saw that much water in the ice age too.',
     // "that much" that measures no change
     'Antarctica swings about twice as much as the global mean, so nine degrees there is about five for the whole planet.\nAnd in the Younger Dryas Antarctica warmed a little, I recall that much.',
     // the same figure, scaled by a multiple

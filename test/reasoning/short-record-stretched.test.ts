@@ -32,6 +32,8 @@ describe('a short record stretched to a longer span', () => {
     'The 2023 rise of 3 ppm in CO2 shows that we now add 3 ppm every single year.',
     'The 2024 increase of 3.5 ppm sets the pace, so CO2 will climb by roughly 350 ppm in the next century.',
     'CO2 jumped by 3.5 ppm in 2024.\nIt has been climbing that fast year after year since the 1960s.',
+    // a record word of the pack's list in the sentence before, one the old word test lacked (session 21)
+    'Our measurements reach back 800,000 years.\nSo CO2 has never been this high in the history of the planet.',
   ])('flags %s', async (text) => {
     expect(await rulesOf(text)).toContain(RULE);
   });

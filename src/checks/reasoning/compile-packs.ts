@@ -6,7 +6,7 @@
 import { FirnlineError } from '../../errors.js';
 import { regexProblem } from '../../rulepack/regex-problem.js';
 import type { DirectionFact, LoadedPacks, PatternRule, ReasoningCheck } from '../../rulepack/types.js';
-import { compileSlots, type DetectorEntry, type Slots } from './detector.js';
+import { compileSlots, keyNames, LEXICON_KEY, type DetectorEntry, type Slots } from './detector.js';
 import { DETECTORS } from './registry.js';
 import { MAX_PATTERN_LENGTH } from './time-limit.js';
 
@@ -15,7 +15,7 @@ export interface CompiledCheck {
   check: ReasoningCheck;
   entry: DetectorEntry;
   words: Slots;
-  /** One regex per key cue list; the detector runs only when all of them match. */
+  /** One regex per key of cue lists (any of its lists' words); the detector runs only when all of them match. */
   prefilter: RegExp[];
 }
 
@@ -38,7 +38,9 @@ export function compilePacks(packs: LoadedPacks): CompiledPacks {
       const entry = Object.hasOwn(DETECTORS, check.id) ? DETECTORS[check.id] : undefined;
       if (entry === undefined || !check.enabled) return [];
       const words = compileSlots(check.words);
-      return [{ check, entry, words, prefilter: entry.keys.map((k) => prefilterFor(check.words[k] ?? [])) }];
+      // A key with a lexicon class among its names has no cue words to test the text for.
+      const keys = entry.keys.map(keyNames).filter((names) => !names.some((n) => n.startsWith(LEXICON_KEY)));
+      return [{ check, entry, words, prefilter: keys.map((names) => prefilterFor(names.flatMap((n) => check.words[n] ?? []))) }];
     }),
     directions: packs.directions.filter((fact) => fact.wrong.length > 0).map((fact) => {
       const file = fileOf((p) => p.directions.includes(fact));
@@ -81,5 +83,6 @@ function prefilterFor(phrases: readonly string[]): RegExp {
     return [...first].slice(0, 4).join('').replace(/[.*+?^${}()|[\]\\]/gu, '\\$&');
   });
   const body = [...new Set(stems.filter((s) => s.length > 0 && s !== '...'))].join('|');
-  return body.length === 0 ? /(?!)/u : new RegExp(`(?<![\\p{L}\\p{N}])(?:${body})`, 'iu');
+  // A stem may follow a number it is written onto ("800kyr"), never a letter.
+  return body.length === 0 ? /(?!)/u : new RegExp(`(?<!\\p{L})(?:${body})`, 'iu');
 }

@@ -28,6 +28,7 @@
  * flags the same words (a polar figure handed to the globe), its flag stands first in the pack and wins.
  */
 import { findPhrases, type PhraseHit } from '../../claims/frames-match.js';
+import { termsOf } from '../../nlp/sentence-terms.js';
 import { parseQuantities } from '../../quantities/index.js';
 import type { ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
@@ -85,6 +86,17 @@ function lexiconScales(s: ReadSentence): { scale: Scale; first: number; last: nu
   return out.sort((a, b) => a.first - b.first);
 }
 
+/**
+ * True when the word at `at` compares: a word of the lexicon's `changes` or `comparatives` ("lower",
+ * "colder", "more", "sharper"), else one compromise tags Comparative ("deeper", "chillier").
+ */
+function comparativeAt(s: ReadSentence, at: number): boolean {
+  const word = s.words[at];
+  if (word === undefined) return false;
+  if (s.inside(at, 'changes') || s.inside(at, 'comparatives')) return true;
+  return termsOf(s.text).some((t) => t.start === word.start && t.tags.includes('Comparative'));
+}
+
 /** True when `t` equals one of `values` (within 2 %) or lies between two of them named as a range. */
 function sameFigure(t: number, source: readonly Figure[]): boolean {
   if (source.some((f) => Math.abs(f.value - t) <= 0.02 * Math.max(Math.abs(f.value), Math.abs(t)))) return true;
@@ -103,7 +115,7 @@ function detect(input: DetectInput): Cue[] {
   // "that much", "as much", and "which is how much" pointing back: the source's figure as it stands.
   // "that much" measures a change only beside one: a comparative after it ("that much colder") or a
   // change word before it ("jumped that much"); "I remember that much" measures nothing.
-  const measures = (k: number) => /er$/u.test(s.words[k + 2]?.text ?? '') || s.inside(k - 1, 'changes');
+  const measures = (k: number) => comparativeAt(s, k + 2) || s.inside(k - 1, 'changes');
   const muchAt = s.words.findIndex((w, k) => ((w.text === 'that' || w.text === 'as') && s.words[k + 1]?.text === 'much' && measures(k)) || (w.text === 'how' && s.words[k + 1]?.text === 'much' && COPULAS.has(s.words[k - 1]?.text ?? '')));
   if (figures.length === 0 && muchAt < 0) return [];
   const scales = lexiconScales(s);
@@ -194,4 +206,8 @@ function placesOf(input: DetectInput, s: ReadSentence): PhraseHit[] {
 }
 
 /** `scope.figure-across-scales` for the registry. */
-export const figureAcrossScales: DetectorEntry = { detect, keys: [] };
+export const figureAcrossScales: DetectorEntry = {
+  detect,
+  // Every flag falls on a scale the sentence names: a region or an ice core of the lexicon, or a place.
+  keys: [['lexicon.regions', 'lexicon.entities.ice-core', 'places', 'here']],
+};

@@ -23,12 +23,16 @@
  *     times the span's years).
  */
 import { findPhrases } from '../../claims/frames-match.js';
+import { tokenizeSentence } from '../../claims/frames-tokens.js';
 import { parseQuantities } from '../../quantities/index.js';
 import type { ReadSentence } from '../../propositions/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 
-/** A span of years written with its number ("800,000 years", "800k years", "4.5-billion-year", "the last million years"). */
-const YEARS = /(?<![\p{L}\d.,])(?:(\d[\d,]*(?:\.\d+)?)\s*-?\s*)?(k|kyr|thousand|million|billion)?\+?\s*-?\s*(?:years?|yrs?)(?![\p{L}])(?!\s+(?:ago|old|before|bp)\b)/giu;
+/**
+ * A span of years written with its number ("800,000 years", "800k years", "800kyr", "4.5-billion-year",
+ * "the last million years"); its year word is one of the cue words `spans`, the check's prefilter.
+ */
+const YEARS = /(?<![\p{L}\d.,])(?:(\d[\d,]*(?:\.\d+)?)\s*-?\s*)?(k|kyr|(?:thousand|million|billion)(?!\p{L}))?\+?\s*-?\s*(?:years?|yrs?)(?![\p{L}])(?!\s+(?:ago|old|before|bp)\b)/giu;
 const SCALE: Readonly<Record<string, number>> = { k: 1e3, kyr: 1e3, thousand: 1e3, million: 1e6, billion: 1e9 };
 /** A record's first year ("running since 1958", "records began in 1958"). */
 const SINCE = /\bsince\s+(?:the\s+)?((?:1[89]|20)\d\d)\b/iu;
@@ -85,7 +89,12 @@ function detectLongerSpan(input: DetectInput, now: number): Cue[] {
   let recordWords: number[] | undefined;
   const recordWordsHere = () => (recordWords ??= input.mayHold('record') ? findPhrases(input.sentence, input.words('record')).map((r) => r.start) : []);
   const isRecordHere = (i: number) => s.inside(i, 'entities', 'ice-core') || s.inside(i, 'entities', 'co2-station') || recordWordsHere().includes(s.words[i]?.start ?? -1);
-  const isRecordElsewhere = (b: ReadSentence) => (i: number) => b.inside(i, 'entities', 'ice-core') || b.inside(i, 'entities', 'co2-station') || /^(?:record|records|core|cores|archive)$/u.test(b.words[i]?.text ?? '');
+  // A sentence before is read for the same record words, as written (its words alone: no compromise roots).
+  const isRecordElsewhere = (b: ReadSentence) => {
+    let starts: Set<number> | undefined;
+    const recordWord = (i: number) => (starts ??= new Set(findPhrases(tokenizeSentence(b.text, [], null), input.words('record')).map((r) => r.start))).has(b.words[i]?.start ?? -1);
+    return (i: number) => b.inside(i, 'entities', 'ice-core') || b.inside(i, 'entities', 'co2-station') || recordWord(i);
+  };
   for (const claim of claims) {
     // The record's span: in this sentence before the claim, else in one of the two sentences before.
     const before = s.text.slice(0, claim.start);
@@ -171,5 +180,7 @@ export const shortRecordStretched: DetectorEntry = {
     const longer = detectLongerSpan(input, new Date().getUTCFullYear());
     return longer.length > 0 ? longer : detectOneYear(input);
   },
-  keys: [],
+  // Every flag needs a claim of all history, one year's change told as every year's, or a span of
+  // years or a span noun (cue words `spans`) in the sentence.
+  keys: [['all-history', 'every-year', 'spans']],
 };

@@ -33,10 +33,27 @@ export interface Cue {
   end: number;
 }
 
-/** A detector and the cue-word lists that must all occur for it to fire (the cheap prefilter). */
+/**
+ * One prefilter key: the name of a cue list of the check, or several names of which any one will do
+ * (`['all-history', 'every-year', 'spans']`). A name `lexicon.<class>` or `lexicon.<class>.<key>` is
+ * a class of the pack's lexicon (`lexicon.regions`, `lexicon.entities.ice-core`), held when the
+ * sentence's reading has a hit of it; the reading is made for every sentence anyway, so such a key
+ * costs nothing more.
+ */
+export type DetectorKey = string | readonly string[];
+
+/** The prefix of a key that names a class of the pack's lexicon. */
+export const LEXICON_KEY = 'lexicon.';
+
+/** A detector and the keys that must all hold for it to fire (the cheap prefilter). */
 export interface DetectorEntry {
   detect: (input: DetectInput) => Cue[];
-  keys: string[];
+  keys: readonly DetectorKey[];
+}
+
+/** The names of one key: itself, or the names any one of which will do. */
+export function keyNames(key: DetectorKey): readonly string[] {
+  return typeof key === 'string' ? [key] : key;
 }
 
 /** Compiles a check's `words` once. */

@@ -12,9 +12,10 @@ import { checkDirections } from './check-directions.js';
 import { checkFacts } from './check-facts.js';
 import { checkPatterns } from './check-patterns.js';
 import { compilePacks } from './compile-packs.js';
+import { keyNames, LEXICON_KEY } from './detector.js';
 import { dropOutranked } from './flag-precedence.js';
 import { paragraphDirectionMatches } from './paragraph-matches.js';
-import { paragraphReader, type ParagraphContext } from './reading.js';
+import { paragraphReader, type ParagraphContext, type SentenceReading } from './reading.js';
 import { judgeByStance } from './stance-flags.js';
 
 export { compilePacks, unknownReasoningChecks } from './compile-packs.js';
@@ -67,7 +68,9 @@ export function checkReasoning(own: string[], at: number, packs: LoadedPacks, co
     // each list has a phrase all of whose words may be there in some inflection ("show" alone is
     // no "show exactly").
     const mayHold = (name: string) => words(name).some((phrase) => mayMatchPhrase(plainWords(), phrase));
-    if (!entry.keys.every(mayHold)) continue;
+    // A key names a cue list, or a class of the lexicon the sentence's reading holds; a list of names, any one of them.
+    const holds = (name: string) => (name.startsWith(LEXICON_KEY) ? readingHolds(reading, name.slice(LEXICON_KEY.length)) : mayHold(name));
+    if (!entry.keys.every((key) => keyNames(key).some(holds))) continue;
     const input = { get sentence() { return sentence(); }, words, paragraph, index, own: lead.length, read, mayHold };
     for (const cue of entry.detect(input)) {
       found.push({ flag: { ruleId: check.id, level: check.level, ...cue, reason: check.reason, suggestion: check.suggestion, sources: check.sources } });
@@ -83,4 +86,11 @@ export function checkReasoning(own: string[], at: number, packs: LoadedPacks, co
     kept.push(flag);
   }
   return reading === undefined ? kept : judgeByStance(kept, reading.stance);
+}
+
+/** True when the reading has a hit of the lexicon class `name` ("regions", "entities.ice-core"). */
+function readingHolds(reading: SentenceReading | undefined, name: string): boolean {
+  if (reading === undefined) return false;
+  const dot = name.indexOf('.');
+  return (dot < 0 ? reading.s.of(name) : reading.s.of(name.slice(0, dot), name.slice(dot + 1))).length > 0;
 }
