@@ -107,6 +107,26 @@ interface Corrected {
  * result inherits the slip; the draft's own figures say what the result should have been.
  */
 function correctedQuantities(context: readonly string[], index: number): { quantities: Quantity[]; corrected: Corrected[] } {
+  // What it reads depends on the sentence and the three before it alone (findingsOf's window), and
+  // each sentence of a paragraph asks for the three before it: kept for the last few windows, so a
+  // paragraph's sentence is read once as context, not three times (copies out, as parseQuantities).
+  const key = JSON.stringify(context.slice(Math.max(0, index - CONTEXT_WINDOW), index + 1));
+  let read = correctedKept.get(key);
+  if (read === undefined) {
+    read = readCorrected(context, index);
+    if (correctedKept.size >= CORRECTED_KEPT) correctedKept.delete(correctedKept.keys().next().value as string);
+    correctedKept.set(key, read);
+  }
+  return { quantities: read.quantities.map((q) => ({ ...q })), corrected: read.corrected.map((c) => ({ q: { ...c.q }, right: { ...c.right } })) };
+}
+
+/** The sentences before a sentence that its arithmetic reads on from (findingsOf's window). */
+const CONTEXT_WINDOW = 3;
+/** How many context readings are kept: a paragraph's next sentence asks for the last three again. */
+const CORRECTED_KEPT = 64;
+const correctedKept = new Map<string, { quantities: Quantity[]; corrected: Corrected[] }>();
+
+function readCorrected(context: readonly string[], index: number): { quantities: Quantity[]; corrected: Corrected[] } {
   const text = context[index] ?? '';
   const quantities = operandsOf(text, parseQuantities(text));
   if (quantities.length === 0) return { quantities, corrected: [] };
@@ -120,7 +140,7 @@ function correctedQuantities(context: readonly string[], index: number): { quant
 
 /** Every finding of every rule on one sentence; `correct` takes the context's wrong results at their right values. */
 function findingsOf(text: string, quantities: Quantity[], context: readonly string[], correct: boolean): RuleFinding[] {
-  const window = context.slice(-3);
+  const window = context.slice(-CONTEXT_WINDOW);
   const offset = context.length - window.length;
   const read = window.map((_, i) => (correct ? correctedQuantities(context, offset + i) : { quantities: operandsOf(context[offset + i] ?? '', parseQuantities(context[offset + i] ?? '')), corrected: [] }));
   const corrected = read.flatMap((r) => r.corrected);
