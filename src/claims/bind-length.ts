@@ -65,3 +65,46 @@ export function toldAsLength(sentence: string, q: Pick<Quantity, 'start' | 'dime
   const ids = new Set(r.binding.all.flat());
   return [...view].some(([id, spans]) => ids.has(id) && spans.some(([s]) => s >= from && s < verb));
 }
+
+/** Nouns of a point in a period's course: a figure set at one is no length of the period. */
+const POINT_PHASES = ['start', 'onset', 'beginning', 'outset', 'end', 'close', 'height', 'peak'];
+/**
+ * What opens a frame after a figure: "for" (the event a figure is given for) or "at the <phase> of"
+ * (a point in the event's course), with an optional article; the frame's words follow.
+ */
+const FRAME_OPENERS = ['for', ...POINT_PHASES.map((p) => `at the ${p} of`), ...POINT_PHASES.map((p) => `at its ${p} of`)].flatMap((o) => [o, `${o} the`]);
+
+/** Qualifiers of a period that may stand between a frame's opener and its noun. */
+const QUALIFIERS = new Set(['last', 'most', 'recent', 'latest', 'previous', 'whole', 'entire']);
+
+/** Whether the words right before `at` close with a frame opener (or `at` starts a phase after "at the"). */
+function opensFrame(sentence: string, at: number): boolean {
+  const before = lexiconWords(sentence.slice(Math.max(0, at - 60), at)).map((w) => w.text);
+  // "for the last deglaciation", "at the start of the most recent one": a qualifier is the frame's.
+  while (before.length > 0 && QUALIFIERS.has(before[before.length - 1] as string)) before.pop();
+  const tail = (n: number) => before.slice(-n).join(' ');
+  if (FRAME_OPENERS.some((o) => tail(o.split(' ').length) === o)) return true;
+  // "at the start of the last deglaciation" matched as one term: "at the" before its phase word.
+  const first = lexiconWords(sentence.slice(at, at + 12))[0]?.text;
+  return first !== undefined && POINT_PHASES.includes(first) && (tail(2) === 'at the' || tail(2) === 'at its');
+}
+
+/**
+ * A period named only after a figure, as the frame it is given for or the point of its course it is
+ * set at, when no verb of length governs the figure:
+ *
+ *   "Monnin's team got roughly 800 years, give or take 600, at the start of the last deglaciation"
+ *   "later work put it under 400 years for the last deglaciation"
+ *
+ * The figure is a finding set at or given for that period (a lag, a gap), not the period's length:
+ * a value the period alone names (one term group: how long the period lasted) is not its value.
+ * "The deglaciation lasted about 7,000 years" (subject, verb of length) is read as before.
+ */
+export function framedAfter(sentence: string, q: Pick<Quantity, 'start' | 'end' | 'dimension'>, r: Pick<ReferenceValue, 'binding'>, view: TermHits): boolean {
+  if (q.dimension !== 'duration' || r.binding.all.length !== 1) return false;
+  const ids = new Set(r.binding.all.flat());
+  const spans = [...view].filter(([id]) => ids.has(id)).flatMap(([, s]) => s);
+  if (spans.length === 0 || toldAsLength(sentence, q, r, view)) return false;
+  // "It took 300 years for the deglaciation to run its course": "for" opens the subject of an infinitive.
+  return spans.every(([s, e]) => s >= q.end && opensFrame(sentence, s) && lexiconWords(sentence.slice(e, e + 12))[0]?.text !== 'to');
+}
