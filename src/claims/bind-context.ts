@@ -16,7 +16,6 @@
  * lacks, never lift a veto, and brings its own vetoes; a group filled from there counts as far. Two values reachable this way
  * with the same score tie, and bind nothing.
  */
-import { framedAfter } from './bind-length.js';
 import { createTopicMatcher, type TopicMatcher } from '../prose/topic-matcher.js';
 import { lexiconWords, type LexiconWord } from '../prose/lexicon-words.js';
 import { afterDemonstrative, measureSubject, refersBack, termsOfKind } from './back-reference.js';
@@ -192,7 +191,7 @@ export function bindFromContext(
   const attribute = (id: string): boolean => (context.get(id) ?? []).some(([start, end]) => !namesSubject(contextText.slice(start, end), packs));
   const borrowsAttribute = (r: ReferenceValue): boolean => r.binding.all.some((g) => !g.some((id) => view.has(id)) && g.some((id) => attribute(id)));
   const candidates = packs.references
-    .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && canState(r, q) && !framedAfter(sentence, q, r, view))
+    .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role) && canState(r, q))
     .filter((r) => !r.binding.none.some((id) => vetoes.has(id)))
     // "The core was drilled through the early 2000s until it reached 3,623 metres": a date is the
     // time frame of what the sentence tells, not a subject of its own, unless the value is itself dated.

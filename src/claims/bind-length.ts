@@ -57,7 +57,7 @@ function lengthVerbAt(sentence: string, q: Pick<Quantity, 'start'>): number | un
  * Whether the duration `q` is told as the length of the value's subject: a verb of length governs
  * it, and a term of one of the value's groups stands before that verb in the figure's clause.
  */
-export function toldAsLength(sentence: string, q: Pick<Quantity, 'start' | 'dimension'>, r: { binding: Pick<ReferenceValue['binding'], 'all'> }, view: TermHits): boolean {
+export function toldAsLength(sentence: string, q: Pick<Quantity, 'start' | 'dimension'>, r: Pick<ReferenceValue, 'binding'>, view: TermHits): boolean {
   if (q.dimension !== 'duration') return false;
   const verb = lengthVerbAt(sentence, q);
   if (verb === undefined) return false;
@@ -97,16 +97,14 @@ function opensFrame(sentence: string, at: number): boolean {
  *   "later work put it under 400 years for the last deglaciation"
  *
  * The figure is a finding set at or given for that period (a lag, a gap), not the period's length:
- * a value whose words the sentence gives only so is not its value (the others may come from the
- * sentence before: "Better dating of the gas shrank it. Pedro put it under 400 years for the last
- * termination" is no length of the deglacial CO2 rise).
+ * a value the period alone names (one term group: how long the period lasted) is not its value.
  * "The deglaciation lasted about 7,000 years" (subject, verb of length) is read as before.
  */
-export function framedAfter(sentence: string, q: Pick<Quantity, 'start' | 'end' | 'dimension'>, r: { binding: Pick<ReferenceValue['binding'], 'all'> }, view: TermHits): boolean {
-  if (q.dimension !== 'duration' || toldAsLength(sentence, q, r, view)) return false;
-  // The groups the sentence itself fills (others may come from the sentence before or the passage).
-  const own = r.binding.all.map((group) => [...view].filter(([id]) => group.includes(id)).flatMap(([, s]) => s)).filter((spans) => spans.length > 0);
+export function framedAfter(sentence: string, q: Pick<Quantity, 'start' | 'end' | 'dimension'>, r: Pick<ReferenceValue, 'binding'>, view: TermHits): boolean {
+  if (q.dimension !== 'duration' || r.binding.all.length !== 1) return false;
+  const ids = new Set(r.binding.all.flat());
+  const spans = [...view].filter(([id]) => ids.has(id)).flatMap(([, s]) => s);
+  if (spans.length === 0 || toldAsLength(sentence, q, r, view)) return false;
   // "It took 300 years for the deglaciation to run its course": "for" opens the subject of an infinitive.
-  const framed = ([s, e]: [number, number]) => s >= q.end && opensFrame(sentence, s) && lexiconWords(sentence.slice(e, e + 12))[0]?.text !== 'to';
-  return own.length > 0 && own.every((spans) => spans.every(framed));
+  return spans.every(([s, e]) => s >= q.end && opensFrame(sentence, s) && lexiconWords(sentence.slice(e, e + 12))[0]?.text !== 'to');
 }

@@ -31,7 +31,6 @@
  * terms a setting group of it is filled with when neither the sentence nor the passage names any
  * setting of that kind. It counts twice `CONTEXT_PENALTY`.
  */
-import { framedAfter } from './bind-length.js';
 import { compile, phraseWords } from '../propositions/lexicon.js';
 import type { Lexicon, LoadedPacks, ReferenceValue } from '../rulepack/types.js';
 import type { Quantity } from '../types.js';
@@ -264,7 +263,7 @@ export function bindFromSetting(
   let own: ReturnType<typeof ownSubjects> | undefined;
   const candidates: { r: ReferenceValue; filled: number; from: TermHits[] }[] = [];
   for (const r of packs.references) {
-    if (!r.dimensions.includes(q.dimension) || !roleFits(r.binding.role, role, q) || !canState(r, q) || framedAfter(sentence, q, r, view)) continue;
+    if (!r.dimensions.includes(q.dimension) || !roleFits(r.binding.role, role, q) || !canState(r, q)) continue;
     if (r.binding.none.some((id) => vetoes.has(id))) continue;
     // "420 ppm is 0.042 percent", "from 190 to 280 ppm": figures of one another, not of a setting.
     if (frame.others.some((o) => o.dimension !== 'number' && o.statedUnit !== 'CE')) continue;

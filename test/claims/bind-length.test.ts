@@ -7,7 +7,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { bindQuantities } from '../../src/claims/bind.js';
-import { framedAfter, toldAsLength } from '../../src/claims/bind-length.js';
+import { toldAsLength } from '../../src/claims/bind-length.js';
 import { parseQuantities } from '../../src/quantities/index.js';
 import { loadPacks } from '../../src/rulepack/index.js';
 
@@ -42,7 +42,7 @@ describe('a vague length told of its subject', () => {
 });
 
 describe('toldAsLength', () => {
-  const value = { binding: { all: [['deglaciation']] } };
+  const value = { binding: { all: [['deglaciation']], none: [] } };
   it('needs the subject before the verb, in the figure\'s clause', () => {
     const s = 'Even so, the deglaciation lasted only a few centuries.';
     const q = { start: s.indexOf('a few'), dimension: 'duration' as const };
@@ -54,33 +54,5 @@ describe('toldAsLength', () => {
     const q = { start: s.indexOf('a few'), dimension: 'duration' as const };
     expect(toldAsLength(s, q, value, new Map([['deglaciation', [[4, 16]]]]))).toBe(false);
     expect(toldAsLength(s, { ...q, dimension: 'length' as const }, value, new Map([['deglaciation', [[4, 16]]]]))).toBe(false);
-  });
-});
-
-/**
- * A period named only after a figure, as the frame it is given for or the point of its course it is
- * set at (framedAfter): a finding for that period, not its length. The lag of CO2 behind Antarctic
- * temperature over Termination I is a few centuries at most (Pedro et al. 2012, Climate of the Past 8;
- * Parrenin et al. 2013, Science 339), the deglaciation's length about 7,000 years (Clark et al. 2012).
- */
-const FRAMED: [string, string, string][] = [
-  ['The Pellow group put it at under 300 years for the last deglaciation.', 'under 300 years', '-'],
-  ['Their first estimate was about 900 years, plus or minus 500, at the onset of the last deglaciation.', 'about 900 years', '-'],
-  // The period as subject, or a verb of length: still its length (and flagged).
-  ['At Pellow Moss the last deglaciation lasted about 900 years.', 'about 900 years', 'termination-1-duration'],
-  ['It took about 900 years for the last deglaciation to run its course at Pellow Moss.', 'about 900 years', 'termination-1-duration'],
-  ['For the last deglaciation, Pellow Moss guides quote about 900 years.', 'about 900 years', 'termination-1-duration'],
-];
-
-describe('a period framed after a figure', () => {
-  it.each(FRAMED)('%s [%s]', (sentence, text, expected) => {
-    expect(boundTo(sentence, text)).toBe(expected);
-  });
-  it('reads only a value the period alone names', () => {
-    const s = 'They put it near 300 years for the last deglaciation.';
-    const q = { start: s.indexOf('near'), end: s.indexOf(' for'), dimension: 'duration' as const };
-    const view = new Map([['deglaciation', [[s.indexOf('deglaciation'), s.indexOf('deglaciation') + 12]]]]) as Map<string, [number, number][]>;
-    expect(framedAfter(s, q, { binding: { all: [['deglaciation']] } }, view)).toBe(true);
-    expect(framedAfter(s, q, { binding: { all: [['deglaciation'], ['co2']] } }, view)).toBe(false);
   });
 });
