@@ -32,6 +32,7 @@ import { addEarlierTime, addNearness, framesYield } from './bind-time.js';
 import { withoutNextEvents } from './bind-next-event.js';
 import { bindList, parallelLists } from './bind-list.js';
 import { canState, nearness, satisfies } from './bind-match.js';
+import { toldAsLength } from './bind-length.js';
 import { endpointPairs, quantityRoles, roleFits } from './bind-role.js';
 import { addSpanEdges } from './bind-edges.js';
 import { withAmountWords } from './bind-amount-time.js';
@@ -623,7 +624,7 @@ export function bindQuantities(
     const difference = isDifference(sentence, quantities, i, role);
     const scoreIn = (seen: TermHits, vetoed: TermHits) =>
       packs.references
-        .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role, q) && (!difference || r.binding.role === 'change') && satisfies(r, withoutNestedInVetoes(r, seen), vetoed) && canState(r, q))
+        .filter((r) => r.dimensions.includes(q.dimension) && roleFits(r.binding.role, role, q) && (!difference || r.binding.role === 'change') && satisfies(r, withoutNestedInVetoes(r, seen), vetoed) && (canState(r, q) || toldAsLength(sentence, q, r, seen)))
         .map((r) => ({ r, score: nearness(r, seen, q, breaks) }))
         .sort((a, b) => a.score - b.score);
     // "The end of the last deglaciation (about 5,000 years ago) opened the Holocene": a number alone in
