@@ -11,7 +11,8 @@ const list = (words: string[]): string => words.map((w) => w.replace(/[.*+?^${}(
 const before = (words: string[]): RegExp => new RegExp(String.raw`(?:^|[^\p{L}])(?:${list(words)})${S}*$`, 'iu');
 const after = (words: string[]): RegExp => new RegExp(String.raw`^[\s\u00A0-]*(?:${list(words)})(?![\p{L}])`, 'iu');
 
-const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+$`, 'iu');
+/** "from 190", "from a glacial 190", "from the pre-industrial 280": an article and up to two words may name the start. */
+const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2})?$`, 'iu');
 const TO = new RegExp(String.raw`^${S}*(?:(?:up|down)${S}+to|to|until|till|through|–|—|-)${S}*$`, 'iu');
 /** A phrase of time or place between the start of a from-to pair and its "to" (a date in it reads DATE). */
 const WHEN_TO = new RegExp(String.raw`^,?${S}+(?:in|by|at|around|circa|during|before|after|near)${S}+[^\d.;:!?()]{1,40}?${S}+(?:to|until|till)${S}+$`, 'iu');
@@ -109,8 +110,14 @@ function toEnd(text: string, qs: Quantity[], i: number): number | undefined {
   const middle = j === i + 2 ? (qs[i + 1] as Quantity) : undefined;
   if (middle !== undefined && middle.dimension !== 'age') return undefined;
   const between = middle === undefined ? text.slice(a.end, b.start) : `${text.slice(a.end, middle.start)}DATE${text.slice(middle.end, b.start)}`;
-  return TO.test(between) || WHEN_TO.test(between) ? j : undefined;
+  if (TO.test(between) || WHEN_TO.test(between)) return j;
+  // "from 190 ppm up to 280 ppm": the reader took "up to" for a bound, but right
+  // after a start it is the end of the pair (its written number is the end level).
+  return middle === undefined && /^[\s\u00A0]*$/u.test(between) && UP_TO.test(b.text) && !UP_TO.test(a.text) ? j : undefined;
 }
+
+/** The opening of a figure that reads "up to" or "down to": "up to 280 ppm". */
+const UP_TO = new RegExp(String.raw`^(?:up|down)${S}+to${S}`, 'iu');
 
 /**
  * "from the end of the last warm period, about 115,000 years ago, to its peak", "from its start at
