@@ -12,7 +12,7 @@
 import { writtenInterval as w } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
 import { divide, invert, minus, rangeSpan, size, type Derived } from './arithmetic-derive.js';
-import { findPairs, isPaceRatio, timesTheMeasure } from './arithmetic-frames.js';
+import { findPairs, isPaceRatio, startsAt, timesTheMeasure } from './arithmetic-frames.js';
 import type { Previous } from './arithmetic-context.js';
 import { spanOfDates } from './arithmetic-spans.js';
 import { disjoint } from './arithmetic-levels.js';
@@ -66,10 +66,22 @@ const END_BEFORE = new RegExp(String.raw`(?:^|[^\p{L}])(?:ended|ends|finished|cl
 const DRAWN_SPAN = new RegExp(String.raw`^[^.;!?\d]{0,12}?[,;:—–]${S}*(?:and${S}+)?(?:so|thus|hence|which${S}+means|meaning)(?![\p{L}])[^.;!?\d]{0,40}$`, 'iu');
 
 /**
+ * ", a span of some 4,300 years", "(a stretch of 6,000 years)": a duration set in apposition to the
+ * end date, naming the stretch its figure measures. Read across two sentences only when the date
+ * before follows a start word ("began", "started"), so the two dates are the stretch's two ends.
+ */
+const APPOSED_SPAN = new RegExp(String.raw`^[^.;!?\d]{0,12}?[,;:—–(]${S}*(?:(?:a|an|the|some)${S}+)?(?:[\p{L}-]+${S}+)?(?:span|stretch|period|interval|spell|transition|gap)${S}+of${S}*(?:(?:only|just|barely|merely|a${S}+mere|a${S}+good|a${S}+full|fully)${S}+)?$`, 'iu');
+
+/** An opening that carries on the sentence before: "and was over by", "It ended", "- which closed", or a lower-case word. */
+const CARRIES_ON = new RegExp(String.raw`^[^\p{L}\p{N}]*(?:(?:[Aa]nd|[Ii]t|[Ww]hich|[Tt]hen|[Tt]his|[Tt]hat)(?![\p{L}])|\p{Ll})`, 'u');
+
+/**
  * "About 12,900 years ago the region plunged back into cold. The cold snap ended around 11,700 years
  * ago, so it lasted some 2,200 years." The start date stands alone in the sentence before, the end
  * date alone here after a word that ends something, and the span is drawn from them as their
- * consequence ("so", "which means") right after the end date.
+ * consequence ("so", "which means") right after the end date, or set in apposition to the end date
+ * (", a span of") when the date before follows a start word ("The warming began about 18,000 years
+ * ago / and was complete by 11,700 years ago, a span of some 4,300 years").
  */
 export function spansAcross(text: string, qs: Quantity[], previous: Previous | undefined): AcrossFinding[] {
   if (previous === undefined) return [];
@@ -79,7 +91,13 @@ export function spansAcross(text: string, qs: Quantity[], previous: Previous | u
   if (end === undefined || start === undefined || !END_BEFORE.test(text.slice(Math.max(0, end.start - 30), end.start))) return [];
   if (rangeSpan(end) !== undefined || rangeSpan(start) !== undefined) return [];
   const stated = only(qs.filter((q) => q.dimension === 'duration' && q.start > end.end));
-  if (stated === undefined || !DRAWN_SPAN.test(text.slice(end.end, stated.start)) || !SPAN_WORDS.test(text.slice(Math.max(0, stated.start - 40), stated.start))) return [];
+  if (stated === undefined) return [];
+  const gap = text.slice(end.end, stated.start);
+  const drawn = DRAWN_SPAN.test(gap) && SPAN_WORDS.test(text.slice(Math.max(0, stated.start - 40), stated.start));
+  // An apposed span reads across only when this sentence carries on the one before ("and was over
+  // by", "It ended"), so both dates are of one stretch, and the start is the older date.
+  const carriesOn = CARRIES_ON.test(text.slice(0, end.start));
+  if (!drawn && !(APPOSED_SPAN.test(gap) && startsAt(previous.text, start) && carriesOn && start.value > end.value)) return [];
   const span = size(minus(w(start), w(end)));
   return [{ stated, computed: span, measures: `the time from ${start.text} in the sentence before to ${end.text}`, basis: "the paragraph's" }];
 }

@@ -11,7 +11,8 @@ const list = (words: string[]): string => words.map((w) => w.replace(/[.*+?^${}(
 const before = (words: string[]): RegExp => new RegExp(String.raw`(?:^|[^\p{L}])(?:${list(words)})${S}*$`, 'iu');
 const after = (words: string[]): RegExp => new RegExp(String.raw`^[\s\u00A0-]*(?:${list(words)})(?![\p{L}])`, 'iu');
 
-const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+$`, 'iu');
+/** "from 190", "from a glacial 190", "from the pre-industrial 280": an article and up to two words may name the start. */
+const FROM = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2})?$`, 'iu');
 const TO = new RegExp(String.raw`^${S}*(?:(?:up|down)${S}+to|to|until|till|through|–|—|-)${S}*$`, 'iu');
 /** A phrase of time or place between the start of a from-to pair and its "to" (a date in it reads DATE). */
 const WHEN_TO = new RegExp(String.raw`^,?${S}+(?:in|by|at|around|circa|during|before|after|near)${S}+[^\d.;:!?()]{1,40}?${S}+(?:to|until|till)${S}+$`, 'iu');
@@ -43,6 +44,15 @@ const SPAN_FILLERS = ['only', 'just', 'barely', 'merely', 'a mere', 'a good', 'a
  */
 const PAIR_GAP = new RegExp(
   String.raw`^${S}*(?:[,:;(—–]|${S}-)${S}*(?:(?:${list(SPAN_LEADS)})(?![\p{L}])[,\s\u00A0]+){0,2}(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+|(?:a|an)${S}+(?!(?:further|additional|extra|past|last|next|previous|later|earlier)(?![\p{L}]))\p{L}+(?:ly)?${S}+)?(?:(?:${list(SPAN_FILLERS)})${S}+)?$`,
+  'iu',
+);
+/**
+ * Between the end date and a duration that completes a copula whose subject is the from-to pair
+ * ("From the LGM, 21,000 years ago, to the Holocene, 11,700 years ago, is 9,300 years", "from 12,900
+ * to 11,700 years ago was a span of 1,200 years"): the pair names the stretch, the figure its length.
+ */
+const COPULA_GAP = new RegExp(
+  String.raw`^${S}*\)?,?${S}*(?:is|was|comes${S}+to|came${S}+to|makes|made|equals|gives|gave)${S}+(?:(?:a|an|the)${S}+(?:[\p{L}-]+${S}+){0,2}(?:of|lasting|spanning)${S}+)?(?:(?:${list(SPAN_FILLERS)})${S}+)?$`,
   'iu',
 );
 const NOT_A_SPAN = before(['past', 'last', 'previous', 'preceding', 'next', 'every', 'each', 'per']);
@@ -100,16 +110,27 @@ function toEnd(text: string, qs: Quantity[], i: number): number | undefined {
   const middle = j === i + 2 ? (qs[i + 1] as Quantity) : undefined;
   if (middle !== undefined && middle.dimension !== 'age') return undefined;
   const between = middle === undefined ? text.slice(a.end, b.start) : `${text.slice(a.end, middle.start)}DATE${text.slice(middle.end, b.start)}`;
-  return TO.test(between) || WHEN_TO.test(between) ? j : undefined;
+  if (TO.test(between) || WHEN_TO.test(between)) return j;
+  // "from 190 ppm up to 280 ppm": the reader took "up to" for a bound, but right
+  // after a start it is the end of the pair (its written number is the end level).
+  return middle === undefined && /^[\s\u00A0]*$/u.test(between) && UP_TO.test(b.text) && !UP_TO.test(a.text) ? j : undefined;
 }
+
+/** The opening of a figure that reads "up to" or "down to": "up to 280 ppm". */
+const UP_TO = new RegExp(String.raw`^(?:up|down)${S}+to${S}`, 'iu');
 
 /**
  * "from the end of the last warm period, about 115,000 years ago, to its peak", "from its start at
  * about 14,700 to its end near 13,000 years ago": "from" and a short noun phrase before a date.
  */
-const FROM_PHRASE = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[\p{L}'’-]+${S}+){1,7}?[\p{L}'’-]+(?:,|${S}+(?:at|around|near|circa|c\.))${S}*(?:(?:about|around|some|roughly|circa|c\.)${S}+)?$`, 'iu');
+const FROM_PHRASE = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[\p{L}'’-]+${S}+){1,7}?[\p{L}'’-]+(?:,|${S}*\(|${S}+(?:at|around|near|circa|c\.))${S}*(?:(?:about|around|some|roughly|circa|c\.)${S}+)?$`, 'iu');
+/**
+ * "from the Last Glacial Maximum 21,000 years ago": the event's name and its date with nothing
+ * between. Read so only for a date in years ago or BP, the one kind of figure such a name is dated by.
+ */
+const FROM_NAMED = new RegExp(String.raw`(?:^|[^\p{L}])from${S}+(?:[\p{L}'’-]+${S}+){1,6}$`, 'iu');
 /** ", to its peak some", ", to the start of the Holocene at": "to" and a short noun phrase before the second date. */
-const TO_PHRASE = new RegExp(String.raw`^,?${S}+(?:up${S}+)?to${S}+(?:[\p{L}'’-]+${S}+){0,6}$`, 'iu');
+const TO_PHRASE = new RegExp(String.raw`^\)?,?${S}+(?:up${S}+)?to${S}+(?:[\p{L}'’-]+${S}+){0,6}\(?$`, 'iu');
 
 /**
  * True when dates A (index i) and the next date B are the ends of "from [a phrase], A, to [a
@@ -122,7 +143,15 @@ function datesFromTo(text: string, qs: Quantity[], i: number): boolean {
   // A bare number whose unit the end date carries ("at about 14,700 to its end near 13,000 years ago").
   if (a.dimension !== 'age' && !(a.dimension === 'number' && a.value / b.value < 3 && b.value / a.value < 3)) return false;
   const gap = text.slice(a.end, b.start);
-  return FROM_PHRASE.test(text.slice(Math.max(0, a.start - 80), a.start)) && TO_PHRASE.test(gap);
+  const lead = text.slice(Math.max(0, a.start - 80), a.start);
+  // A name with its date straight after it ("from the LGM 21,000 years ago"): only ages in years ago.
+  const named = a.dimension === 'age' && /ago|bp/iu.test(a.text) && FROM_NAMED.test(lead);
+  return (FROM_PHRASE.test(lead) || named) && TO_PHRASE.test(gap);
+}
+
+/** True when a start word stands just before `q`: "began about 18,000 years ago", "the warming started at". */
+export function startsAt(text: string, q: Quantity): boolean {
+  return START_CUE.test(head(text, q));
 }
 
 /** The index of B in "began A ... ended B" (the next quantity of A's dimension), or undefined. */
@@ -178,7 +207,7 @@ export function isSpanOfPair(text: string, q: Quantity, pairEnd: number): boolea
   let gap = text.slice(pairEnd, q.start);
   // ", a 3,000-year thaw": an adjectival figure keeps its article.
   if (/\d-(?:years?|yr)$/iu.test(q.text)) gap = gap.replace(/(?:^|[^\p{L}])an?[\s\u00A0]+$/iu, (m) => m.slice(0, m.length - m.trimStart().length));
-  return SPAN_OF_PAIR.test(head(text, q)) || PAIR_GAP.test(gap);
+  return SPAN_OF_PAIR.test(head(text, q)) || PAIR_GAP.test(gap) || COPULA_GAP.test(gap);
 }
 
 /** A demonstrative or article between a span word and its figure: "over those 8,000 years". */

@@ -57,7 +57,8 @@ const RATIOED: Dimension[] = ['concentration', 'temperature-change', 'length', '
 
 const ends = (qs: Quantity[], p: Pair): [Quantity, Quantity] => [qs[p.from] as Quantity, qs[p.to] as Quantity];
 const only = <T>(xs: T[]): T | undefined => (xs.length === 1 ? xs[0] : undefined);
-const words = (a: Quantity, b: Quantity): string => `from ${a.text} to ${b.text}`;
+// "from 190 ppm up to 280 ppm" names its end "280 ppm", not "up to 280 ppm".
+const words = (a: Quantity, b: Quantity): string => `from ${a.text} to ${b.text.replace(/^(?:up|down)[\s\u00A0]+to[\s\u00A0]+/iu, '')}`;
 const others = (qs: Quantity[], p: Pair | undefined): Quantity[] => qs.filter((_, i) => p === undefined || (i !== p.from && i !== p.to));
 
 function changes(text: string, qs: Quantity[], pairs: Pair[]): Finding[] {

@@ -241,8 +241,11 @@ function checkNamedBase(figures: Figure[], texts: string[], text: string, f: Fig
   const base = baseNamed(text, f);
   if (base === undefined || denied(f) || WORDS.added.has(f.before.at(-1)?.text ?? '')) return undefined;
   const levels = figures.filter((g) => g.order < f.order && g.role === 'level' && g.family !== '' && g.q.value > 0);
-  // The base level: one of a sentence before that names the base's time, the nearest such.
-  const from = levels.filter((g) => g.sentence > 0 && namesBase(texts[g.sentence] ?? '', base)).at(-1);
+  // The base level: one of a sentence before that names the base's time, the nearest such; of a
+  // sentence with two levels ("Glacial CO2 of 185 ppm rising to 280 ppm"), the one its own words name.
+  const naming = levels.filter((g) => g.sentence > 0 && namesBase(texts[g.sentence] ?? '', base));
+  const ownWords = naming.filter((g) => namesBase([...g.before, ...g.after].map((x) => x.text).join(' '), base));
+  const from = (ownWords.length > 0 ? ownWords : naming).at(-1);
   if (from === undefined) return undefined;
   const to = levels.filter((g) => g !== from && g.family === from.family && g.order > from.order && (g.q.statedUnit === from.q.statedUnit || g.q.statedUnit === '' || from.q.statedUnit === '')).at(-1);
   if (to === undefined || to.q.value === from.q.value) return [];

@@ -167,6 +167,9 @@ function changeAfter(after: Word[]): number | undefined {
   const comparative = WORDS.comparatives.get(a.text);
   // "80 ppm over 7,000 years" is an amount over a time, not a comparison.
   if (comparative !== undefined && !(a.text === 'over' || a.text === 'under') && !(a.text === 'up' && b?.text === 'to')) return comparative;
+  // "185 ppm rising to 280 ppm", "190 ppm, climbing up to 280": a verb of change going on to an end
+  // level makes the figure where the change starts, a level.
+  if (/(?:ing|ed)$|^(?:rose|fell|grew|sank)$/u.test(a.text) && (b?.text === 'to' || (b?.text === 'up' && c?.text === 'to'))) return undefined;
   // "140 ppm more CO2 than", "190 ppm more carbon dioxide": a noun may stand between.
   const noun = WORDS.changeNouns.get(a.text) ?? (a.text === 'of' ? (WORDS.changeNouns.get(b?.text ?? '') ?? WORDS.changeNouns.get(c?.text ?? '')) : undefined);
   return noun;
