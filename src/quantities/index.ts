@@ -9,4 +9,5 @@ export { INTERVAL_RULES, applyRule, intervalRule, hedgeRule, type IntervalRule, 
 export { TEMPERATURE_CUES, DURATION_CUES, CALENDAR_CUES, LABEL_CUES, TEMPERATURE_DEFAULT, RESTATING_VERBS, RESTATING_VERB_PATTERN, namesChangeBefore } from './reading-cues.js';
 export { renderIntervalTable } from './interval-table-markdown.js';
 export { correctionFigures, derivedFigures, rewriteQuantity } from './rewrite-quantity.js';
+export { rewriteEnds, writtenEnds } from './rewrite-ends.js';
 export { writtenInterval, type WrittenInterval } from './written-interval.js';
