@@ -8,11 +8,11 @@
  * 372, 1097-1101); global glacial cooling about 6 °C, 5 to 7 °C (IPCC AR6 WGI, ch. 2); glacial sea
  * level some 120-135 m below today's (the pack's lgm-sea-level-lowstand); delta-age at Dome C
  * 1,500-5,500 years (the pack's delta-age-edc). Factors: 1% = 10,000 ppm, 1 °F difference = 5/9 K,
- * 1 ft = 0.3048 m (NIST SP 811, 2008).
+ * 1 ft = 0.3048 m (NIST SP 811, 2008). Rounding: a correction within one percent of the worked value (common practice).
  */
 import { describe, expect, it } from 'vitest';
 import { checkText } from '../../src/engine.js';
-import { parseQuantities, rewriteEnds, writtenEnds } from '../../src/quantities/index.js';
+import { closeFigures, parseQuantities, rewriteEnds, writtenEnds } from '../../src/quantities/index.js';
 import { loadPacks } from '../../src/rulepack/index.js';
 
 const packs = await loadPacks([]);
@@ -74,5 +74,34 @@ describe('a difference read off an absolute temperature keeps the draft\'s decim
   ])('%s', async (text, correction) => {
     const slip = (await flagsOf(text)).find(([id]) => id === 'unit.scale-slip');
     expect(slip?.[1]).toMatch(correction);
+  });
+});
+
+describe('a large multiple and a share of the air rounded as a writer rounds, never more than one percent off', () => {
+  it.each([
+    // 2.5 ÷ 0.0131 = 190.8 times: two figures are within one percent, so no third (was "191 times").
+    ['CO2 now rises by 2.5 ppm a year, about 20 times faster than the 0.0131 ppm a year of the deglaciation.', 'arith.ratio', 'about 190 times'],
+    // 418 ppm is 0.0418 percent of the air (1% = 10,000 ppm), given as the draft gives a share: two figures.
+    ['Mauna Loa read 418 ppm of carbon dioxide last spring, or 0.42 percent of the air.', 'unit.percent-ppm', '0.042 percent'],
+  ])('%s', async (text, rule, correction) => {
+    expect(await flagsOf(text)).toContainEqual([rule, correction]);
+  });
+
+  it('adds figures only while rounding would move the value more than one percent', () => {
+    expect(closeFigures(244.6, 2)).toBe(3);
+    expect(closeFigures(188.98, 2)).toBe(2);
+    expect(closeFigures(0.0418, 2)).toBe(2);
+    expect(closeFigures(1.2698, 2)).toBe(3);
+  });
+});
+
+describe('a bare change corrected with the unit of the figures it is the difference of', () => {
+  it.each([
+    // Glacial to interglacial CO2, 190 to 270 ppm, is a rise of 80 ppm (numbers of our own, inside Lüthi et al. 2008's range).
+    ['CO2 climbed from 190 to 270 parts per million as the glacial ended; that is 100 more.', 'arith.change', '80 ppm'],
+    // A relative change has no unit of its operands: 200 to 300 ppm is a rise of 50 percent.
+    ['CO2 went from 200 to 300 ppm over the termination, a rise of 20 percent.', 'arith.ratio', '50 percent'],
+  ])('%s', async (text, rule, correction) => {
+    expect(await flagsOf(text)).toContainEqual([rule, correction]);
   });
 });
