@@ -31,6 +31,20 @@ export function correctionFor(q: Quantity, value: number, figures = derivedFigur
 }
 
 /**
+ * A bare change's correction with the unit of the figures it is the difference of: "from 180 to 280
+ * parts per million; that's 80 more" is corrected to "100 ppm", so the editor reads the amount, not
+ * a bare number. Only a difference takes its operands' unit, and only one unit they all share.
+ */
+function withOperandUnit(correction: string, stated: Quantity, ruleId: string, measures: string): string {
+  if (ruleId !== 'arith.change' || stated.dimension !== 'number' || stated.statedUnit !== '' || !/^[^\p{L}]*[\d.,]+$/u.test(correction)) return correction;
+  const units = new Set(parseQuantities(measures).filter((q) => q.statedUnit !== '' && q.dimension !== 'number').map((q) => `${q.dimension} ${q.unit}`));
+  const operand = parseQuantities(measures).find((q) => q.statedUnit !== '' && q.dimension !== 'number');
+  if (units.size !== 1 || operand === undefined) return correction;
+  const word = formatQuantity(1, operand.unit, operand.statedUnit).replace(/^1\s*/u, '');
+  return word === '' ? correction : `${correction} ${word}`;
+}
+
+/**
  * A rate's correction with the yearly rate beside it when the draft told its pace over another
  * stretch: an amount every interval ("about 0.11 ppm every ten years") or a rate per decade or
  * century ("0.11 ppm per decade"). An editor restates such a pace per year, the unit the reference
@@ -178,7 +192,7 @@ export function checkArithmetic(text: string, quantities: Quantity[], context: r
       reason: `By ${basis ?? "the sentence's"} own numbers, ${measures} is ${right}, not ${stated.text}${owned.join('')}.`,
       claimed: shownClaim(stated),
       reference: { id: rule.id, measures, text: right, low: computed.low, high: computed.high, unit: stated.unit },
-      correction: withYearlyRate(correctionFor(stated, computed.value), stated, computed.value, yearly),
+      correction: withYearlyRate(withOperandUnit(correctionFor(stated, computed.value), stated, rule.id, measures), stated, computed.value, yearly),
       sources: [],
     });
   }

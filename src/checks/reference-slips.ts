@@ -17,7 +17,8 @@
  * an absolute temperature (the table's offsets of K and °F).
  */
 import { groupedNumberFormat } from '../format/grouped-number.js';
-import { convert, correctionFigures, findUnit, formatQuantity, rewriteQuantity, writtenInterval } from '../quantities/index.js';
+import { convert, correctionFigures, findUnit, formatQuantity, fromCanonical, rewriteEnds, rewriteQuantity, writtenInterval } from '../quantities/index.js';
+import { findAtoms } from '../quantities/find-atoms.js';
 import type { ReferenceValue } from '../rulepack/types.js';
 import type { Dimension, Quantity } from '../types.js';
 import { relativeDistance } from './reference-distance.js';
@@ -196,9 +197,12 @@ function swapReadings(q: Quantity): Reading[] {
     // The meant figure is the draft's own number, so it keeps every figure the draft wrote: "3,623 feet"
     // is 3,623 m, not 3,620 m; "423.9 ppb" is 423.9 ppm.
     const figures = correctionFigures(q);
+    // A range the draft wrote is put right end by end ("4 to 7 °F" meant in °C is "4 to 7 °C"), not as its middle.
+    const inTo = (value: number): string => rewriteEnds(q, read, figures, to) ?? formatQuantity(value, q.unit, to, figures);
+    const asWritten = (value: number, least: number): string => rewriteEnds(q, read, least) ?? rewriteQuantity(q, value, correctionFigures(q, least));
     const shown = time
-      ? (value: number) => (ownWords ? `${formatQuantity(value, q.unit, q.statedUnit, figures)} (${formatQuantity(value, q.unit, to, figures)}, not ${q.text})` : formatQuantity(value, q.unit, to, figures))
-      : (value: number) => `${formatQuantity(value, q.unit, to, figures)} (${rewriteQuantity(q, value, correctionFigures(q, 2))})`;
+      ? (value: number) => (ownWords ? `${rewriteEnds(q, read, figures) ?? formatQuantity(value, q.unit, q.statedUnit, figures)} (${inTo(value)}, not ${q.text})` : inTo(value))
+      : (value: number) => `${hedgeOf(q)}${inTo(value)} (${asWritten(value, 2)})`;
     return [{ low, high, value: read(q.value), ratio, read, what: `${other.display} meant where ${from.display} was written (${factorWords(from.display, other.display, ratio, from.factor < other.factor)})`, shown }];
   });
 }
@@ -248,7 +252,7 @@ function eraReadings(q: Quantity): Reading[] {
       value: read(q.value),
       ratio: Infinity,
       what: 'BCE written for years before present (Y BCE is 1,949 + Y years BP)',
-      shown: (value: number) => `${formatQuantity(value, q.unit, 'yr ago')} (${rewriteQuantity(q, value, correctionFigures(q, 4))})`,
+      shown: (value: number) => `${hedgeOf(q)}${formatQuantity(value, q.unit, 'yr ago')} (${rewriteQuantity(q, value, correctionFigures(q, 4))})`,
     },
   ];
 }
@@ -271,11 +275,25 @@ function offsetReadings(q: Quantity): Reading[] {
       ratio: Infinity,
       what: `an absolute temperature in ${absolute.display} written for a difference (a difference of 1 °C is 1 K; only an absolute temperature adds 273.15 K or 32 °F)`,
       shown: (value: number) => {
-        const figures = placesKept(q, value);
-        return `${rewriteQuantity(q, value, figures)} (${q.text} is an absolute temperature, ${formatQuantity(value, 'degC', 'degC', figures)}, not a difference)`;
+        // Each figure keeps the draft's decimal places in its own unit: "42.8 F" read as 6 °C is a change of 10.8 F, not 11 F.
+        const stated = fromCanonical(value, q.statedUnit, q.dimension);
+        return `${rewriteQuantity(q, value, placesKept(q, stated))} (${q.text} is an absolute temperature, ${formatQuantity(value, 'degC', 'degC', placesKept(q, value))}, not a difference)`;
       },
     },
   ];
+}
+
+/**
+ * The words a figure's hedge or bound takes before its number, as the draft wrote them ("about ",
+ * "~", "nearly "), so a figure corrected into another unit keeps them: "about 9 degrees F" meant in
+ * °C is "about 9 °C", as the draft's own sentence would say it. Empty for a bare figure or a range.
+ */
+function hedgeOf(q: Quantity): string {
+  const atoms = findAtoms(q.text);
+  const first = atoms[0];
+  if (q.hedge === undefined || first === undefined || atoms.length > 1) return '';
+  const before = q.text.slice(0, first.start);
+  return /\d/u.test(before) ? '' : before;
 }
 
 /** Significant figures that keep the decimal places the draft wrote: taking off an offset keeps them ("295 K" less 273.15 is 22 K). */

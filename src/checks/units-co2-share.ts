@@ -8,7 +8,7 @@
  * something else ("30 percent of emissions"), nor the size of a change named before it ("the rise
  * in CO2 since 1750 was 47 percent").
  */
-import { formatNumber, rewriteQuantity } from '../quantities/index.js';
+import { formatNumber, rewriteEnds, rewriteQuantity } from '../quantities/index.js';
 import type { Quantity } from '../types.js';
 import { comparesToNext, isStatedChange } from './arithmetic-frames.js';
 import { LUTHI_2008, NIST_SP_811, NOAA_2024 } from './standard-sources.js';
@@ -146,9 +146,14 @@ function iceAgeSlip(q: Quantity, ppm: number): UnitFinding | undefined {
   const k = nearestIceCore(ppm);
   if (k === 0) return undefined;
   const value = q.value * 10 ** k;
-  const correction = rewriteQuantity(q, value);
+  const correction = tenfold(q, k) ?? rewriteQuantity(q, value);
   return { stated: q, computed: { value, low: q.low * 10 ** k, high: q.high * 10 ** k }, level: 'error', sources: [NIST_SP_811, LUTHI_2008], correction,
     reason: `${q.text} of the air would be ${formatNumber(ppm)} ppm of CO2 (1% = 10,000 ppm), outside the ${ICE_CORE_CO2_PPM.low}-${ICE_CORE_CO2_PPM.high} ppm of 800,000 years of ice cores, where the sentence places it; ${correction} is ${formatNumber(value * PPM_PER_PERCENT)} ppm.` };
+}
+
+/** A range of shares put right end by end, each `10 ** k` times its figure: "between 0.18% and 0.28%" → "between 0.018% and 0.028%". */
+function tenfold(q: Quantity, k: number): string | undefined {
+  return rewriteEnds(q, (x) => x * 10 ** k);
 }
 
 function percentSlip(q: Quantity, iceAge = false): UnitFinding | undefined {
@@ -165,7 +170,7 @@ function percentSlip(q: Quantity, iceAge = false): UnitFinding | undefined {
   const k = nearestPlausible(ppm);
   if (k === 0) return undefined;
   const value = q.value * 10 ** k;
-  const correction = rewriteQuantity(q, value);
+  const correction = tenfold(q, k) ?? rewriteQuantity(q, value);
   return { stated: q, computed: { value, low: q.low * 10 ** k, high: q.high * 10 ** k }, level: 'error', sources, correction,
     reason: `${q.text} of the air would be ${formatNumber(ppm)} ppm of CO2 (1% = 10,000 ppm), outside every level measured or projected (${range}: 172-300 ppm in 800,000 years of ice cores, about 420 ppm today); ${correction} is ${formatNumber(value * PPM_PER_PERCENT)} ppm.` };
 }

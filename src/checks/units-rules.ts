@@ -4,7 +4,7 @@
  * wrong unit are also caught on their own (units-co2-share.ts).
  */
 import { afterMatcher, beforeMatcher } from '../quantities/reading-cues.js';
-import { convert, correctionFigures, formatNumber, formatQuantity, namesChangeBefore, TEMPERATURE_CUES } from '../quantities/index.js';
+import { convert, correctionFigures, formatNumber, formatQuantity, namesChangeBefore, rewriteEnds, TEMPERATURE_CUES, writtenEnds } from '../quantities/index.js';
 import { fromCanonical } from '../quantities/convert.js';
 import type { Dimension, Level, Quantity, Source } from '../types.js';
 import type { Derived } from './arithmetic-derive.js';
@@ -107,10 +107,23 @@ const asWritten = (q: Quantity): Derived => ({ value: q.value, low: q.value - (q
 /** The number as the draft wrote it, in its own stated unit: "11,700 b2k" → 11,700. */
 const writtenValue = (q: Quantity): number => Math.round(fromCanonical(q.value, q.statedUnit, q.dimension) * 1e6) / 1e6;
 
+/**
+ * A range restating a range, put right end by end: "5 to 7 °C ... about 41 to 45 °F" is "about 9
+ * to 13 °F", each end of the first converted, not the one figure at the middle of both.
+ */
+function restatedEnds(first: Quantity, second: Quantity): string | undefined {
+  const ends = writtenEnds(first);
+  if (ends === undefined) return undefined;
+  const k = second.dimension === first.dimension ? 1 : percentOf({ ...first, value: 1, low: 1, high: 1 }).value;
+  return rewriteEnds(second, [ends[0] * k, ends[1] * k]);
+}
+
 function restated(dimensions: Dimension[], sources: (a: Quantity, b: Quantity) => Source[], why: (a: Quantity, b: Quantity) => string, keep: Keep = () => true, held: Held = asIntervals) {
   return (text: string, qs: Quantity[], previous?: PreviousSentence): UnitFinding[] =>
     restatementsOf(dimensions, text, qs, previous).filter((r) => keep(text, r)).map(({ first, second }) => {
-      const { computed, stated, figures, correction } = held(first, second);
+      const held_ = held(first, second);
+      const { computed, stated, figures } = held_;
+      const correction = held_.correction ?? restatedEnds(first, second);
       return { stated: { ...second, ...stated }, computed, reason: why(first, second), sources: sources(first, second), ...(figures === undefined ? {} : { figures }), ...(correction === undefined ? {} : { correction }) };
     });
 }

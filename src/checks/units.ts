@@ -4,7 +4,7 @@
  * the wrong unit. Each flag carries the right value in the correction and cites the definition
  * (NIST SP 811 for factors; Stuiver & Polach 1977 for BP; Walker et al. 2009 for b2k).
  */
-import { correctionFigures, formatQuantity, fromCanonical, parseQuantities, toCanonical } from '../quantities/index.js';
+import { closeFigures, correctionFigures, formatQuantity, fromCanonical, parseQuantities, toCanonical } from '../quantities/index.js';
 import type { FlagDraft, Quantity } from '../types.js';
 import { correctionFor } from './arithmetic.js';
 import { disjoint, levelFor } from './arithmetic-levels.js';
@@ -99,7 +99,11 @@ export function checkUnits(text: string, parsed: Quantity[], context: readonly s
       // One explanation per figure: "800 ka, which is 800 million years ago" is a restatement a
       // thousand times off (unit.age-era) and a span no core holds (unit.age-scale); the first rule says it.
       if (flags.some((o) => o.start === q.start && o.end === q.end)) continue;
-      const figures = f.figures ?? correctionFigures(q);
+      // A share of the air is rounded as the draft rounded its own, unless that moves it more than one
+      // percent (closeFigures): "0.42 percent" of 424 ppm is "0.042 percent", as a writer gives a share.
+      // Dates, lengths and temperatures keep three figures at least: "11,949 years ago" is "11,900".
+      const share = q.dimension === 'percent' && f.unit === undefined;
+      const figures = f.figures ?? (share ? closeFigures(f.computed.value, correctionFigures(q, 2)) : correctionFigures(q));
       const right = single ? (f.correction ?? q.text) : formatQuantity(f.computed.value, q.unit, q.statedUnit, figures);
       flags.push({
         ruleId: rule.id,

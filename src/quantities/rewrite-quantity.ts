@@ -33,13 +33,28 @@ export function derivedFigures(q: Quantity, value: number): number {
   const exact = Math.abs(stated) >= 1 && Math.abs(stated - whole) <= 1e-9 * Math.abs(stated);
   // A multiple of 100 or more is given to the whole number, as the finding's own message gives it
   // ("is 185 times, not about 50 times" corrects to "about 185 times", not "about 180 times").
-  if (q.dimension === 'ratio' && Math.abs(stated) >= 100) return multipleFigures(stated);
+  if (q.dimension === 'ratio' && Math.abs(stated) >= 100) return closeFigures(stated, 2);
   return exact ? Math.max(1, String(Math.abs(whole)).replace(/0+$/u, '').length) : correctionFigures(q, 2);
 }
 
-/** Significant figures of a multiple in a correction: two, or every whole digit from 100 up. */
+/** How far a correction's rounding may move it from the value worked out: one part in a hundred. */
+const ROUNDING_SLACK = 0.01;
+
+/**
+ * The fewest significant figures, from `least` up, that write `x` within one percent of itself: a
+ * multiple of 100 or more and a share of the air are rounded as a writer rounds them unless that
+ * moves them more than one percent (2.4 ÷ 0.0127 = 189 is "190 times", 184.6 is "185 times"; 424
+ * ppm as a share is "0.042 percent"). Other worked values keep the draft's own figures (derivedFigures).
+ */
+export function closeFigures(x: number, least: number): number {
+  if (!Number.isFinite(x) || x === 0) return least;
+  for (let n = Math.max(1, least); n < 15; n++) if (Math.abs(Number(x.toPrecision(n)) - x) <= ROUNDING_SLACK * Math.abs(x)) return n;
+  return 15;
+}
+
+/** Significant figures of a multiple in a correction: two, or from 100 up as many as keep it within one percent (closeFigures: 184.6 is "185 times", 189 "190 times"). */
 function multipleFigures(x: number): number {
-  return Math.abs(x) >= 100 ? String(Math.round(Math.abs(x))).length : 2;
+  return Math.abs(x) >= 100 ? closeFigures(x, 2) : 2;
 }
 
 /**

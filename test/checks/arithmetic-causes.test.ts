@@ -38,7 +38,7 @@ const WRONG: [string, string, string, string, string][] = [
   // A unit left off one side: bare ends beside a change in ppm, or a bare change beside ends in ppm;
   // a filler ("barely", "only") between the change word and the figure. Common practice: 300 − 220 = 80.
   ['unit left off', 'In the Dunholm run the model gives a jump of about 120 ppm, from 220 up to 300.', 'arith.change', 'about 120 ppm', 'about 80 ppm'],
-  ['unit left off', 'In the Dunholm run CO2 went from 220 to 300 ppm, an increase of barely 40.', 'arith.change', '40', '80'],
+  ['unit left off', 'In the Dunholm run CO2 went from 220 to 300 ppm, an increase of barely 40.', 'arith.change', '40', '80 ppm'],
   // A ratio verb in the present tense after the two figures it joins. Common practice: 900 / 300 = 3.
   ['ratio verb', 'The Harnby delay is about 300 years near the top and about 900 years near the bed, so it roughly doubles with depth.', 'arith.ratio', 'roughly doubles', 'roughly 3 times'],
 ];

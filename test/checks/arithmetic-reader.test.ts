@@ -20,7 +20,7 @@ describe('a change between two levels, loosely linked', () => {
     ['a change verb of its own', ['Between a glacial floor of 185 ppm and an interglacial ceiling of 285 ppm the air gained some 140 ppm of CO2.'], 'some 140 ppm', 'some 100 ppm'],
     ['all bare, a jump of', ['The Vell Ridge curve goes from 190 in the cold phase to about 265 at the thaw, which is a jump of about 120.'], 'about 120', 'about 75'],
     ['the rest of a stated whole', ['Of the 95 ppm gained, ocean warming supplied about 25 ppm, and the rest, some 90 ppm, came from the deep ocean.'], 'some 90 ppm', 'some 70 ppm'],
-    ['the remaining part', ['Suppose cooler seas took up 20 of the 90 ppm; the land and the deep ocean would then hold the remaining 50.'], '50', '70'],
+    ['the remaining part', ['Suppose cooler seas took up 20 of the 90 ppm; the land and the deep ocean would then hold the remaining 50.'], '50', '70 ppm'],
     ['more than a level named after it', ['By 2020 the Corran inlet read about 410 ppm.', 'In other words, it held some 170 ppm more CO2 than the pre-industrial 280 ppm.'], 'some 170 ppm', 'some 130 ppm'],
   ] as [string, string[], string, string][])('%s', (_why, sentences, words, correction) => {
     expect(flagged(...sentences)).toEqual([['arith.change', words, correction]]);

@@ -65,12 +65,12 @@ describe('feet written for metres where the period is set before a comparison', 
   // Science 325, 710-714); 1 ft = 0.3048 m (NIST SP 811): 125 m is 410 ft.
   it('reads the period past a sentence that only compares with today', async () => {
     const flags = await flagsOf('During the last ice age thick ice covered Canada. Back then the world ran a few degrees colder than it is today. Sea level fell some 125 feet.');
-    expect(flags).toContainEqual(['unit.scale-slip', '125 m (some 410 feet)']);
+    expect(flags).toContainEqual(['unit.scale-slip', 'some 125 m (some 410 feet)']);
   });
 
   it('reads the sea told at a level without its article ("Seas stood") as sea level', async () => {
     const flags = await flagsOf('During the last ice age great ice sheets covered Canada. Seas stood about 125 feet lower, and the coast lay far out.');
-    expect(flags).toContainEqual(['unit.scale-slip', '125 m (about 410 feet)']);
+    expect(flags).toContainEqual(['unit.scale-slip', 'about 125 m (about 410 feet)']);
   });
 });
 
@@ -106,7 +106,7 @@ describe('BCE written for years before present', () => {
   ])('%s', async (text) => {
     const flags = await flagsOf(text);
     expect(flags.map(([id]) => id)).toContain('unit.scale-slip');
-    expect(flags.find(([id]) => id === 'unit.scale-slip')?.[1]).toMatch(/^11,700 years ago \((?:about |around )?975\d (?:years )?B\.?C/u);
+    expect(flags.find(([id]) => id === 'unit.scale-slip')?.[1]).toMatch(/^(?<hedge>(?:about |around )?)11,700 years ago \(\k<hedge>975\d (?:years )?B\.?C/u);
     expect(flags.map(([id]) => id)).not.toContain('value.holocene-start');
   });
 
@@ -174,16 +174,16 @@ describe('unit slips of every dimension, through the engine', () => {
   // 96-102); the EPICA Dome C record spans 800,000 years (Jouzel et al. 2007, Science 317, 793-796);
   // CO2 grew by about 2.4 ppm a year in the 2010s (NOAA GML global growth rates, from memory).
   it.each([
-    ['At the Last Glacial Maximum sea level stood some 120 feet lower than today.', /^120 m \(.*feet\)$/u],
+    ['At the Last Glacial Maximum sea level stood some 120 feet lower than today.', /^some 120 m \(some .*feet\)$/u],
     ['The Vostok ice core was drilled to a depth of 3.6 miles.', /^3\.6 km \(.*miles\)$/u],
-    ['At the Last Glacial Maximum central Greenland was about 40 °C colder than today.', /^40 °F \(about 22 °C\)$/u],
+    ['At the Last Glacial Maximum central Greenland was about 40 °C colder than today.', /^about 40 °F \(about 22 °C\)$/u],
     ['Greenland at the Last Glacial Maximum: a cooling of 40 degrees Celsius at the summit.', /^40 °F \(22 degrees Celsius\)$/u],
     ['At the Last Glacial Maximum the Greenland summit saw a drop of 295 K.', /^22 K \(295 K is an absolute temperature, 22 °C, not a difference\)$/u],
     ['Before industry, CO2 stood at 280 parts per billion.', /^280 ppm \(280,000 parts per billion\)$/u],
     ['The Pleistocene began 2.58 thousand years ago.', /^2\.58 million years ago \(million, not thousand\)$/u],
     ['The ice sheets held their greatest extent between 26.5 and 19 million years ago.', /^between 26\.5 and 19 thousand years ago \(thousand, not million\)$/u],
     ['Examiners should accept 800 million years for the EPICA Dome C record.', /^800 thousand years \(thousand, not million\)$/u],
-    ['In the 2010s CO2 grew by about 2.4 ppm per decade.', /^2\.4 ppm per year \(about 24 ppm per decade\)$/u],
+    ['In the 2010s CO2 grew by about 2.4 ppm per decade.', /^about 2\.4 ppm per year \(about 24 ppm per decade\)$/u],
   ])('%s', async (text, correction) => {
     const flags = await flagsOf(text);
     expect(flags.map(([id]) => id)).toEqual(['unit.scale-slip']);

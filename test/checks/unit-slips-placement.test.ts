@@ -58,8 +58,8 @@ describe('a post whose byline gives a name and a handle, and lines that end in a
 
 describe('a difference in °F whose number is the best estimate in °C', () => {
   it.each([
-    ['Greenland ice cores show that at the glacial peak, Summit ran some 22°F colder than today.', '22 °C (some 40°F)'],
-    ['When the Younger Dryas ended, Greenland warmed by about 10°F within a few decades.', '10 °C (about 18°F)'],
+    ['Greenland ice cores show that at the glacial peak, Summit ran some 22°F colder than today.', 'some 22 °C (some 40°F)'],
+    ['When the Younger Dryas ended, Greenland warmed by about 10°F within a few decades.', 'about 10 °C (about 18°F)'],
   ])('%s is a unit slip', async (text, correction) => {
     expect(await flagsOf(text)).toEqual([['unit.scale-slip', correction]]);
   });
