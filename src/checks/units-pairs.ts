@@ -305,7 +305,8 @@ function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentenc
   if (qs.some((q) => q.end <= second.start && q.statedUnit !== 'CE' && sameThing(q, first))) return undefined;
   // "we sat at about 280, which is, um, 0.028 percent": a bare number of this sentence right before
   // the pointing words is what they point at, not a figure of the sentence before.
-  if (qs.some((q) => q.end <= second.start && q.dimension === 'number' && LOOSE_END.test(text.slice(q.end, second.start)))) return undefined;
+  // A post's counter ("Mon 4/ that's well over ...") points at nothing.
+  if (qs.some((q) => q.end <= second.start && q.dimension === 'number' && /^[,\s\u00A0]/u.test(text.slice(q.end, second.start)) && LOOSE_END.test(text.slice(q.end, second.start)))) return undefined;
   // "0.042 per cent. (One ppm is one ten-thousandth of one per cent.)": a bracket that opens the
   // sentence opens an aside; only one right after its figure restates it.
   if (/^[\s\u00A0]*[([][\s\u00A0]*$/u.test(head)) return undefined;

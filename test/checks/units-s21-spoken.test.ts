@@ -29,6 +29,13 @@ describe('a conversion spoken or posted with fillers between the pointing word a
   ])('leaves alone: %j', (sentences) => {
     expect(flagged(...sentences)).toEqual([]);
   });
+
+  it("reads past a post's counter before the pointing word", () => {
+    // 900 m = 0.56 miles, not 90.
+    expect(flagged('- Tue 3/ and the drill on the saddle went down ~900 m', "- Tue 4/ that's well over 90 miles of ice if you laid it out")).toEqual([
+      ['unit.length', 'well over 90 miles', '0.559 miles'],
+    ]);
+  });
 });
 
 describe('a restatement that names the thing measured before the amount ("that is a column of ice roughly")', () => {
