@@ -30,8 +30,27 @@ const JOINER = new RegExp(
  * unit or scale ("in X units", "in X terms", "in X"), then a copula or a restating verb.
  */
 const FRAMED = String.raw`(?:which|that|this)${S}*,?${S}+in${S}+(?:[\p{L}-]+${S}+){0,2}?(?:[\p{L}-]+)${S}*,?${S}+(?:is|was|comes${S}+to|works${S}+out${S}+(?:to|at)|becomes|reads)`;
-const LEAD = String.raw`(?:(?:or|i\.e\.,?|that is,?|that's|that’s|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|(?:would|might|will|can|could)${S}+call|call${S}+it|=|\(|—|${FRAMED})(?:${S}*(?:a|an)${S}+(?:${CHANGE_SUBJECT_NOUNS.join('|')})${S}+of)?|${RESTATING_VERB_PATTERN})`;
-const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}(?:${S}+(?:still|just|only|merely|roughly|about|around|some|barely|nearly|almost|approximately)){0,2}${S}*$`, 'iu');
+/**
+ * What a pointing word may name before the amount again: "a drop of", or a noun phrase of the
+ * thing measured, "that is a column of ice roughly 1,070 feet long".
+ */
+const NAMED_AGAIN = String.raw`(?:${S}*(?:a|an)${S}+(?:(?:${CHANGE_SUBJECT_NOUNS.join('|')})${S}+of|[\p{L}-]+(?:${S}+of(?:${S}+[\p{L}-]+){1,2})?))`;
+const LEAD = String.raw`(?:(?:or|i\.e\.,?|that is,?|that's|that’s|thats|this is|which is|which was|which comes to|equivalent to|in other words,?|or about|(?:would|might|will|can|could)${S}+call|call${S}+it|=|\(|—|${FRAMED})${NAMED_AGAIN}?|${RESTATING_VERB_PATTERN})`;
+/**
+ * Words a speaker or a poster drops between the pointing word and the amount, each with its commas:
+ * "that's, uh, roughly thirty-three hundred feet", "that's, what, twelve hundred feet", "thats like
+ * 3.2 miles" (common practice of speech and chat).
+ */
+const FILLERS = String.raw`(?:uh|um|er|erm|what|like|you${S}+know|so)`;
+const HEDGES = String.raw`(?:still|just|only|merely|roughly|about|around|some|barely|nearly|almost|approximately)`;
+const LOOSE_END = new RegExp(String.raw`(?:^|[^\p{L}])${LEAD}(?:,?${S}*(?:${HEDGES}|${FILLERS})(?![\p{L}])){0,3},?${S}*$`, 'iu');
+/**
+ * "She says the core went down 3,623 m. So about three and a half miles of ice": a sentence that
+ * opens with "so" right before a hedged amount draws that amount from the one before: the amount
+ * again, in another unit (the hedge is the quantity's own, so it is read from the figure).
+ */
+const SO_OPENS = new RegExp(String.raw`(?:^|[:>\]])${S}*so,?${S}*$`, 'iu');
+const HEDGED = new RegExp(String.raw`^(?:${HEDGES}|like|~)`, 'iu');
 /** A loose gap: short, with no clause break that would end the thought (no other quantity: they are adjacent). */
 const LOOSE_GAP = /^[^;:!?]{0,80}$/u;
 /** Words after a percentage that make it a relative change ("50 percent above", "30 percent higher"). */
@@ -278,11 +297,16 @@ function acrossSentences(text: string, qs: Quantity[], previous: PreviousSentenc
   // "BP counts from 1950, so in BP it is 11,750 years": a date after the era it is restated in.
   const eraBack = second.dimension === 'age' && ERA_NAMED_BACK.test(head);
   const systemBack = namesSystemBack(head, previous.text) && !qs.some((q) => q !== original && q.dimension === second.dimension);
-  if (!OPENING.test(head) || !(LOOSE_END.test(head) || fahrenheitBack || eraBack || systemBack)) return undefined;
+  const soBack = SO_OPENS.test(head) && HEDGED.test(second.text);
+  if (!OPENING.test(head) || !(LOOSE_END.test(head) || fahrenheitBack || eraBack || systemBack || soBack)) return undefined;
   // "That is a rise of 132 ppm, or about 32 per cent": a figure of the same thing before it in this
   // sentence is what it restates, if anything, not the last figure of the sentence before. A calendar
   // year names an era's reference ("counting back from 1950, that is 8,250 years BP"), no date restated.
   if (qs.some((q) => q.end <= second.start && q.statedUnit !== 'CE' && sameThing(q, first))) return undefined;
+  // "we sat at about 280, which is, um, 0.028 percent": a bare number of this sentence right before
+  // the pointing words is what they point at, not a figure of the sentence before.
+  // A post's counter ("Mon 4/ that's well over ...") points at nothing.
+  if (qs.some((q) => q.end <= second.start && q.dimension === 'number' && /^[,\s\u00A0]/u.test(text.slice(q.end, second.start)) && LOOSE_END.test(text.slice(q.end, second.start)))) return undefined;
   // "0.042 per cent. (One ppm is one ten-thousandth of one per cent.)": a bracket that opens the
   // sentence opens an aside; only one right after its figure restates it.
   if (/^[\s\u00A0]*[([][\s\u00A0]*$/u.test(head)) return undefined;

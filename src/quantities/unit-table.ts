@@ -55,12 +55,21 @@ const TEMPERATURE_CUE = `(?:${['temperature', 'thermometer', 'warm', 'cool', 'co
 const TEMPERATURE_AFTER = words('(?:colder|warmer|cooler|hotter|chillier|of (?:warming|cooling|cold|warmth)|of (?:eventual|further|extra|additional|equilibrium|long-term) warming|(?:per|for (?:a|each|every|one|such a)) doubling)');
 const BARE_DEGREES = String.raw`(?<!(?<![\p{L}])${ANGLE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,80})${words('degrees?')}(?![\s\u00A0]+(?:[nN]orth|[sS]outh|[eE]ast|[wW]est|[NSEW](?![\p{L}])))(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,60}[\p{N}\p{L}][\s\u00A0-]*${words('degrees?')})|(?=[\s\u00A0]+${TEMPERATURE_AFTER}(?![\p{L}])))`;
 /**
+ * A bare capital C after a number is a Celsius figure in a clause about temperature, as people write
+ * it in posts and chat ("the world was ~6C colder", "warmed something like 8-10 C coming out of the
+ * last glacial", "a 6C drop"): a comparative, a warming word or a noun of change right after it, or a
+ * temperature word shortly before it, as for bare degrees (common practice). With neither it is not
+ * read, and "14C" written solid is radiocarbon whatever follows.
+ */
+const C_CHANGE_AFTER = words('(?:drop|swing|rise|fall|change|difference|shift|jump|increase|decrease|cooling|warming|warm-?up|cool-?down|colder|warmer|cooler|hotter)');
+const BARE_C = String.raw`(?<!(?<![\p{N}.,])14)C(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,60}\p{N}[\s\u00A0-]*C)|(?=[\s\u00A0]+(?:${TEMPERATURE_AFTER}|${C_CHANGE_AFTER})(?![\p{L}])))`;
+/**
  * The scale's name alone after a number is its degree too, as people write it ("about 43 Fahrenheit",
  * "minus 40 Celsius"), and a bare capital F after a number is a Fahrenheit figure ("9 F for the folks
- * back home"; common practice in US writing). A bare capital C is not read: "14C" is radiocarbon.
+ * back home"; common practice in US writing); "deg F" and "deg. C" are the abbreviated degree.
  */
-const DEG_C = [symbol('° C'), 'ºC', '℃', words('(?:degrees? )?(?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C'), BARE_DEGREES];
-const DEG_F = [symbol('° F'), 'ºF', '℉', words('(?:degrees? )?fahrenheit'), symbol('degrees? F'), 'F'];
+const DEG_C = [symbol('° C'), 'ºC', '℃', words('(?:degrees? )?(?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C'), BARE_DEGREES, BARE_C];
+const DEG_F = [symbol('° F'), 'ºF', '℉', words('(?:degrees? )?fahrenheit'), symbol('degrees? F'), symbol('deg\\.? F'), 'F'];
 const KELVIN = ['K', words('kelvins?')];
 const PPM = ['ppmv?', words('parts? per million(?: by volume)?')];
 const PPB = ['ppbv?', words('parts? per billion(?: by volume)?')];
