@@ -53,13 +53,19 @@ const ANGLE_CUE = `(?:${['tilt', 'obliquit', 'axi', 'latitude', 'longitude', 'an
 // "doubling" before, "per doubling" or "of eventual warming" after, make bare degrees a temperature.
 const TEMPERATURE_CUE = `(?:${['temperature', 'thermometer', 'warm', 'cool', 'cold', 'heat', 'hotter', 'chill', 'sensitivit', 'doubl'].map((w) => words(w) + LETTERS).join('|')})`;
 const TEMPERATURE_AFTER = words('(?:colder|warmer|cooler|hotter|chillier|of (?:warming|cooling|cold|warmth)|of (?:eventual|further|extra|additional|equilibrium|long-term) warming|(?:per|for (?:a|each|every|one|such a)) doubling)');
-const BARE_DEGREES = String.raw`(?<!(?<![\p{L}])${ANGLE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,80})${words('degrees?')}(?![\s\u00A0]+(?:[nN]orth|[sS]outh|[eE]ast|[wW]est|[NSEW](?![\p{L}])))(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,60}[\p{N}\p{L}][\s\u00A0-]*${words('degrees?')})|(?=[\s\u00A0]+${TEMPERATURE_AFTER}(?![\p{L}])))`;
+/** "degrees", and its clippings "deg" and "degs" as people type them ("4-7deg colder", "about 6 degs warmer"). */
+const BARE_DEGREE_WORD = words('(?:degrees?|degs?)');
+const BARE_DEGREES = String.raw`(?<!(?<![\p{L}])${ANGLE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,80})${BARE_DEGREE_WORD}(?![\s\u00A0]+(?:[nN]orth|[sS]outh|[eE]ast|[wW]est|[NSEW](?![\p{L}])))(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,60}[\p{N}\p{L}][\s\u00A0-]*${BARE_DEGREE_WORD})|(?=[\s\u00A0]+${TEMPERATURE_AFTER}(?![\p{L}])))`;
 /**
  * The scale's name alone after a number is its degree too, as people write it ("about 43 Fahrenheit",
  * "minus 40 Celsius"), and a bare capital F after a number is a Fahrenheit figure ("9 F for the folks
- * back home"; common practice in US writing). A bare capital C is not read: "14C" is radiocarbon.
+ * back home"; common practice in US writing). So is a bare capital C a Celsius one, as people type
+ * it in posts and chats with no degree sign ("about 6C colder", "2.5 to 4 C"), except glued to a
+ * lone 14: "14C" is radiocarbon. A label's letter ("Figure 3C", "Room 2F") is no unit
+ * (group-atoms.ts partsOf).
  */
-const DEG_C = [symbol('° C'), 'ºC', '℃', words('(?:degrees? )?(?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C'), BARE_DEGREES];
+const BARE_C = String.raw`(?<!(?<![\p{N}.,])14)C`;
+const DEG_C = [symbol('° C'), 'ºC', '℃', words('(?:degrees? )?(?:celsius|centigrade)'), symbol('degrees? C'), symbol('deg\\.? C'), BARE_C, BARE_DEGREES];
 const DEG_F = [symbol('° F'), 'ºF', '℉', words('(?:degrees? )?fahrenheit'), symbol('degrees? F'), 'F'];
 const KELVIN = ['K', words('kelvins?')];
 const PPM = ['ppmv?', words('parts? per million(?: by volume)?')];
