@@ -17,7 +17,7 @@ import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { isChecklistText } from './report/checklist-lines.js';
 import { sortById } from './report/sort.js';
-import { createTopicMatcher, isVoicedQuote, splitSentences, type TopicMatcher } from './prose/index.js';
+import { createTopicMatcher, isVoicedQuote, quotesEarlierLine, splitSentences, type TopicMatcher } from './prose/index.js';
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
 import { draftLineWidth } from './prose/line-width.js';
@@ -258,7 +258,9 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     // A block quote that is a post under its byline or a passage of its own is a voice of the draft;
     // one of a single sentence, or one repeating earlier words of the draft, quotes what it holds.
     const voiced = isVoicedQuote(draft.text, draft.blocks, blockIndex, sentences.length);
-    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(voiced ? { voiced } : {}) };
+    // "> so the core goes back 800,000 yrs" in a plain-text thread, under the post that said it: a quotation.
+    const quotedLines = block.kind === 'text' ? asserted.filter((_t, i) => quotesEarlierLine(draft.text, block.offsets[sentences[i]?.start ?? 0] ?? 0)) : [];
+    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(voiced ? { voiced } : {}), ...(quotedLines.length > 0 ? { quotedLines } : {}) };
     // The period the blocks just before named sets the scene of this block's opening sentences.
     const scene = sceneBefore(draft.blocks, blockIndex, packs);
     const opening: ParagraphContext = scene === undefined ? context : { ...context, scene };
@@ -367,7 +369,7 @@ function examineCached(
   asserted: string[] = paragraph,
 ): SentenceFindings | undefined {
   const previous = previousOnTopic();
-  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.voiced === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.voiced === true, context.quotedLines ?? [], context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
     examineSentence(paragraph, index, packs, onTopic, context, () => previous, leadIn, asserted),
   );
 }
