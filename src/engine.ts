@@ -451,7 +451,7 @@ function examineSentence(
     // introduce it: "I've been doing these threads for 3 years" after a post on the deglaciation is
     // no claim about it).
     const carries = previousOnTopic() || (index === 0 && leadIn.length === 0 && previous !== undefined);
-    const carried = DIGIT.test(text) && carries ? carriedSubject(text, previous, packs, before) : undefined;
+    const carried = DIGIT.test(text) && carries ? carriedSubject(text, previous, packs, before, historyOf(before, previous, context, packs)) : undefined;
     if (carried !== undefined) return carried;
     // One number reads on from the sentences before only in the unit checks: "2. Its record covers
     // about 800 million years" after an item naming the core is a thousand-for-million slip.
@@ -576,10 +576,12 @@ function subjectsNamed(paragraph: string[], subjects: TopicMatcher): SubjectsNam
  * Dome C core was drilled by ten nations. It reaches down 3,270 metres."): a claim when that number
  * binds, checked like any other; undefined otherwise.
  */
-function carriedSubject(text: string, previous: string | undefined, packs: LoadedPacks, before: readonly string[]): SentenceFindings | undefined {
+function carriedSubject(text: string, previous: string | undefined, packs: LoadedPacks, before: readonly string[], history: readonly string[]): SentenceFindings | undefined {
   const read = restoreElidedUnits(text, parseQuantities(text));
   const quantities = readAnnualRates(text, readPartitiveCounts(text, read), packs);
-  const { bindings } = bindQuantities(text, quantities, packs, previous);
+  // "[19:13] Sinead: my section is the younger dryas. it started 12,900 years ago" / "it lasted about
+  // 3,000 years": a pronoun takes up the subject the sentence before took up, as in an on-topic sentence.
+  const { bindings } = bindQuantities(text, quantities, packs, previous, history);
   if (bindings.length === 0) return undefined;
   const reference = checkReferences(text, quantities, bindings, packs, before);
   const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, read, before), ...checkUnits(text, read, before)]);
