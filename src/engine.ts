@@ -17,7 +17,7 @@ import { relative, resolve, sep } from 'node:path';
 import { CHECKLIST_MARKER } from './report/checklist-markdown.js';
 import { isChecklistText } from './report/checklist-lines.js';
 import { sortById } from './report/sort.js';
-import { createTopicMatcher, isVoicedQuote, splitSentences, type TopicMatcher } from './prose/index.js';
+import { createTopicMatcher, isVoicedQuote, quotesEarlierLine, splitSentences, type TopicMatcher } from './prose/index.js';
 import { topicPattern } from './prose/topic-matcher.js';
 import { paragraphWindows } from './prose/paragraph-windows.js';
 import { draftLineWidth } from './prose/line-width.js';
@@ -258,7 +258,9 @@ export function checkDraft(draft: Draft, packs: LoadedPacks, options: DraftOptio
     // A block quote that is a post under its byline or a passage of its own is a voice of the draft;
     // one of a single sentence, or one repeating earlier words of the draft, quotes what it holds.
     const voiced = isVoicedQuote(draft.text, draft.blocks, blockIndex, sentences.length);
-    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(voiced ? { voiced } : {}) };
+    // "> so the core goes back 800,000 yrs" in a plain-text thread, under the post that said it: a quotation.
+    const quotedLines = block.kind === 'text' ? asserted.filter((_t, i) => quotesEarlierLine(draft.text, block.offsets[sentences[i]?.start ?? 0] ?? 0)) : [];
+    const context: ParagraphContext = { blockKind: block.kind, heading: block.heading, ...(block.marked === true ? { marked: true } : {}), ...(voiced ? { voiced } : {}), ...(quotedLines.length > 0 ? { quotedLines } : {}) };
     // The period the blocks just before named sets the scene of this block's opening sentences.
     const scene = sceneBefore(draft.blocks, blockIndex, packs);
     const opening: ParagraphContext = scene === undefined ? context : { ...context, scene };
@@ -367,7 +369,7 @@ function examineCached(
   asserted: string[] = paragraph,
 ): SentenceFindings | undefined {
   const previous = previousOnTopic();
-  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.voiced === true, context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
+  return cachedFindings(packs, paragraph, index, [onTopic, previous, context.blockKind ?? '', context.heading ?? '', context.marked === true, context.voiced === true, context.quotedLines ?? [], context.scene ?? '', leadIn, context.leadIn ?? [], asserted.some((t, i) => t !== paragraph[i]) ? asserted : []], () =>
     examineSentence(paragraph, index, packs, onTopic, context, () => previous, leadIn, asserted),
   );
 }
@@ -449,7 +451,7 @@ function examineSentence(
     // introduce it: "I've been doing these threads for 3 years" after a post on the deglaciation is
     // no claim about it).
     const carries = previousOnTopic() || (index === 0 && leadIn.length === 0 && previous !== undefined);
-    const carried = DIGIT.test(text) && carries ? carriedSubject(text, previous, packs, before) : undefined;
+    const carried = DIGIT.test(text) && carries ? carriedSubject(text, previous, packs, before, historyOf(before, previous, context, packs)) : undefined;
     if (carried !== undefined) return carried;
     // One number reads on from the sentences before only in the unit checks: "2. Its record covers
     // about 800 million years" after an item naming the core is a thousand-for-million slip.
@@ -574,10 +576,12 @@ function subjectsNamed(paragraph: string[], subjects: TopicMatcher): SubjectsNam
  * Dome C core was drilled by ten nations. It reaches down 3,270 metres."): a claim when that number
  * binds, checked like any other; undefined otherwise.
  */
-function carriedSubject(text: string, previous: string | undefined, packs: LoadedPacks, before: readonly string[]): SentenceFindings | undefined {
+function carriedSubject(text: string, previous: string | undefined, packs: LoadedPacks, before: readonly string[], history: readonly string[]): SentenceFindings | undefined {
   const read = restoreElidedUnits(text, parseQuantities(text));
   const quantities = readAnnualRates(text, readPartitiveCounts(text, read), packs);
-  const { bindings } = bindQuantities(text, quantities, packs, previous);
+  // "[19:13] Sinead: my section is the younger dryas. it started 12,900 years ago" / "it lasted about
+  // 3,000 years": a pronoun takes up the subject the sentence before took up, as in an on-topic sentence.
+  const { bindings } = bindQuantities(text, quantities, packs, previous, history);
   if (bindings.length === 0) return undefined;
   const reference = checkReferences(text, quantities, bindings, packs, before);
   const drafts = preferSpecific([...reference.flags, ...checkArithmetic(text, read, before), ...checkUnits(text, read, before)]);

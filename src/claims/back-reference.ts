@@ -17,6 +17,7 @@ import type { LoadedPacks, Lexicon } from '../rulepack/types.js';
 import { compile, phraseWords, type CompiledLexicon } from '../propositions/lexicon.js';
 import { findTerms } from './bind.js';
 import { lexiconWords, type LexiconWord } from '../prose/lexicon-words.js';
+import { utteranceLabelLength } from '../prose/split-sentences.js';
 
 /** A word of a sentence: lower-case (’ as '), with its offsets. */
 type Word = LexiconWord;
@@ -313,7 +314,10 @@ const OPENING_WORDS = 5;
  */
 function opensWithPronoun(sentence: string, packs: LoadedPacks): boolean {
   const v = vocabularyOf(packs);
+  // A chat line's time stamp and speaker ("[9 Nov, 19:13] Sinead: it lasted ...") are no words of its own.
+  const label = utteranceLabelLength(sentence);
   return wordsOf(sentence)
+    .filter((w) => w.start >= label)
     .slice(0, OPENING_WORDS)
     .some((w) => v.pronouns.has(w.text) || v.possessives.has(w.text));
 }

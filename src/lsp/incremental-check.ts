@@ -13,6 +13,7 @@ import { checkDraft, namesSubject, subjectNearby } from '../engine.js';
 import { claimIdOf, foldClaimText } from '../review/claim-id.js';
 import { CHECKLIST_MARKER } from '../report/checklist-markdown.js';
 import { leadInOf } from '../prose/lead-in.js';
+import { quotesEarlierLine } from '../prose/reply-quote.js';
 import { createLineIndex, draftFromText, type LineIndex } from '../source/index.js';
 import type { Claim, Draft, Flag, ProseBlock, Span } from '../types.js';
 import { joinSignoffs, type CheckSetup, type DocumentCheck } from './check-document.js';
@@ -84,7 +85,9 @@ function blockKey(text: string, block: ProseBlock, subjectBeside: boolean, leadI
   const start = block.offsets[0] ?? 0;
   const end = block.offsets[block.offsets.length - 1] ?? start;
   const shape = block.offsets.map((o) => o - start).join(',');
-  return [block.kind, block.heading, text.slice(start, end), block.text, shape, subjectBeside, ...leadIn].join('\u0000');
+  // Whether each of a plain-text block's lines quotes words said earlier in the draft ("> ..."): an edit above can change it.
+  const quoting = block.kind === 'text' ? [...block.text.matchAll(/^|\n/gu)].map((m) => quotesEarlierLine(text, block.offsets[m.index + m[0].length] ?? start)) : [];
+  return [block.kind, block.heading, text.slice(start, end), block.text, shape, subjectBeside, quoting.join(','), ...leadIn].join('\u0000');
 }
 
 /** The claims of `fresh` grouped by the block (of `blocks`) their sentence starts in. */

@@ -53,6 +53,8 @@ export interface StanceContext {
   marked?: boolean;
   /** A block quote that is a post under its byline or holds a passage of its own, repeating nothing said before: a voice of the draft (prose/reply-quote.ts isVoicedQuote). */
   voiced?: boolean;
+  /** The block's lines that a plain-text reply quotes from the post it answers (prose/reply-quote.ts quotesEarlierLine). */
+  quotedLines?: readonly string[];
   /** The next sentence of the paragraph, read (it can answer a question or endorse a report). */
   next?: ReadSentence;
   /** The paragraph's first sentence, read, when it is not this one (a block quote's label). */
@@ -111,6 +113,8 @@ function sentenceStance(s: ReadSentence, context: StanceContext): SentenceStance
   // myth label, a report). One that opens with a byline ("BigSkyBarb · 5h") or a label of its own
   // ("Did you know?") is in its writer's voice.
   if (context.blockKind === 'blockquote' && context.voiced !== true && !isCallout(context.first) && !isByline(context.first?.text ?? s.text)) return make('quoted');
+  // "> so the core goes back 800,000 yrs" under the post that said it: a reply quoting what it answers.
+  if (context.quotedLines?.includes(s.text) === true) return make('quoted');
   // "[quote=fen_walker]the air is older than the ice[/quote]": forum software's quotation of the post
   // a reply answers, the reply's words after it.
   if (QUOTE_TAG.test(s.text)) return make('quoted');

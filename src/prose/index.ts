@@ -1,3 +1,3 @@
-export { opensUtterance, splitSentences } from './split-sentences.js';
+export { opensUtterance, splitSentences, utteranceLabelLength } from './split-sentences.js';
 export { createTopicMatcher, type TopicMatcher } from './topic-matcher.js';
-export { isVoicedQuote, repeatsEarlierText } from './reply-quote.js';
+export { isVoicedQuote, quotesEarlierLine, repeatsEarlierText } from './reply-quote.js';

@@ -72,6 +72,31 @@ export function repeatsEarlierText(text: string, block: ProseBlock): boolean {
   return before.includes(` ${opening.join(' ')} `);
 }
 
+/** The reply-quote marks that open a line of plain text ("> ", ">> "), after any indent. */
+const QUOTE_MARKS = /^[ \t]*(?:>[ \t]*)+/u;
+
+/**
+ * True when the line of `text` where `at` stands, in a plain-text draft, is a line a reply quotes: it
+ * opens with the quote marks mail and forum software put before quoted words ("> so the core goes
+ * back 800,000 years"), and the words after them stand earlier in the draft, where the post it
+ * answers said them. Quote marks before words said nowhere earlier set a post under another or
+ * forward a message: those words are a voice of the draft.
+ *
+ *   dave.k: so the vostok core goes back like 800,000 yrs, which is nuts
+ *   tamsin_w: > so the vostok core goes back like 800,000 yrs      ← repeats dave.k: a quotation
+ */
+export function quotesEarlierLine(text: string, at: number): boolean {
+  const lineStart = text.lastIndexOf('\n', at - 1) + 1;
+  const lineEnd = text.indexOf('\n', at);
+  const line = text.slice(lineStart, lineEnd < 0 ? text.length : lineEnd);
+  const marks = QUOTE_MARKS.exec(line);
+  if (marks === null) return false;
+  const opening = wordsOf(line.slice(marks[0].length)).slice(0, MAX_WORDS);
+  if (opening.length < MIN_WORDS) return false;
+  const before = ` ${wordsOf(text.slice(0, lineStart)).join(' ')} `;
+  return before.includes(` ${opening.join(' ')} `);
+}
+
 /**
  * True when block `index` of `blocks`, a block quote of `sentences` sentences, speaks in a voice of the
  * draft: it repeats nothing said earlier, and a post's byline opens or heads it or it holds a passage

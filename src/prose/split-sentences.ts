@@ -293,6 +293,15 @@ function opensInLowerCase(sentence: string): boolean {
   return /^\p{Ll}/u.test(body);
 }
 
+/**
+ * How long the utterance label that opens a sentence is: a time stamp, a handle, a reply arrow or
+ * a speaker label ("[9 Nov, 19:13] Sinead: ", "dave.k: ", "@lin "), 0 when there is none. The
+ * sentence's own words start after it.
+ */
+export function utteranceLabelLength(sentence: string): number {
+  return UTTERANCE_PREFIX.exec(sentence)?.[0].length ?? 0;
+}
+
 /** A time stamp, a handle, a reply arrow or a speaker label that opens an utterance ("[19:13] oskarflint: "). */
 const UTTERANCE_PREFIX = new RegExp(String.raw`^\s*(?:(?:\[[^\]\n]{1,24}\]|${CLOCK_TIME})\s*)?(?:[↳•▶►]\s*|>{1,8}\s+|:{1,8})?(?:@?[\p{L}\d_.'’-]{1,32}(?:\s\([^)\n]{1,40}\))?:\s+)?`, 'u');
 

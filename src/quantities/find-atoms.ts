@@ -23,6 +23,8 @@ export interface Atom {
   /** A whole number of 3 or 4 digits with no separator, sign, exponent or scale: maybe a calendar year. */
   plainInteger: boolean;
   sign: '' | '+' | '-';
+  /** Where a hedge written onto the digits starts ("420ish", "280-ish"); it ends with the atom. */
+  glued?: number;
 }
 
 const SEP = String.raw`[,\u2009\u202F\u00A0 ]`;
@@ -38,8 +40,10 @@ const SCALE = String.raw`[\s\u00A0]+(?<scale>hundred|thousand|million|billion)(?
 const LETTER_SCALE = String.raw`(?<letter>k|m(?=[\s\u00A0]*(?:years?|yrs?)(?![\p{L}])))(?![\p{L}\p{N}])`;
 /** The case the pattern (case-blind) cannot tell: a lower-case k, or a capital K or M before years. */
 const LETTER_OK = /^(?:k|[KMm][\s\u00A0]*(?:years?|yrs?)(?![\p{L}]))/u;
+/** "420ish", "280-ish", "9-ish": an approximation written onto the number, as people write it in posts (common practice). */
+const ISH = String.raw`(?<ish>-?ish(?![\p{L}\p{N}]))`;
 const DIGITS = new RegExp(
-  String.raw`(?<sign>(?<![\p{L}\p{N}.])[-−+])?(?<![\p{L}\p{N}_.])(?<num>${NUM})(?:${EXP})?(?:${SCALE}|${LETTER_SCALE})?`,
+  String.raw`(?<sign>(?<![\p{L}\p{N}.])[-−+])?(?<![\p{L}\p{N}_.])(?<num>${NUM})(?:${EXP})?(?:${SCALE}|${LETTER_SCALE})?${ISH}?`,
   'giu',
 );
 const WORD_PHRASE = new RegExp(
@@ -62,13 +66,17 @@ function digitAtom(m: RegExpExecArray): Atom {
   const exponent = expText === '' ? 0 : Number(expText.replace('−', '-'));
   // "5K" is kelvin, not a thousand: a scale letter the case-blind pattern took wrongly is left to the units.
   const letter = g['letter'] !== undefined && LETTER_OK.test(m.input.slice(m.index + m[0].length - 1)) ? g['letter'] : undefined;
-  const end = m.index + m[0].length - (g['letter'] !== undefined && letter === undefined ? 1 : 0);
+  const ish = g['ish']?.length ?? 0;
+  // A scale letter the units take back ("5K") stands before any glued hedge; then none is read.
+  const dropped = g['letter'] !== undefined && letter === undefined;
+  const end = m.index + m[0].length - (dropped ? 1 + ish : 0);
   const scale = g['scale'] !== undefined ? (SCALES[g['scale'].toLowerCase()] ?? 1) : letter !== undefined ? (LETTERS[letter.toLowerCase()] ?? 1) : 1;
   const magnitude = Number(digits) * 10 ** exponent * scale;
   const plainInteger = /^\d{3,4}$/.test(g['num'] ?? '') && expText === '' && scale === 1 && sign === '';
   return {
     start: m.index, end, value: sign === '-' ? -magnitude : magnitude,
     half: halfPlace(digits) * 10 ** exponent * scale, scale, form: 'digits', rule: 'precision', plainInteger, sign,
+    ...(ish > 0 && !dropped ? { glued: end - ish } : {}),
   };
 }
 

@@ -21,7 +21,9 @@ const escape = (s: string): string => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&').r
 const HEDGE_WORDS = INTERVAL_RULES.filter((r) => r.kind === 'hedge').flatMap((r) => r.words);
 const byLength = (a: string, b: string): number => b.length - a.length;
 const SUFFIXES = HEDGE_WORDS.filter((w) => w.startsWith('or ')).sort(byLength);
-const PREFIXES = HEDGE_WORDS.filter((w) => !w.startsWith('or ')).sort(byLength);
+/** Hedges written onto the number itself ("420ish", "280-ish"): find-atoms.ts reads them with the digits. */
+const GLUED = HEDGE_WORDS.filter((w) => w.startsWith('-'));
+const PREFIXES = HEDGE_WORDS.filter((w) => !w.startsWith('or ') && !GLUED.includes(w)).sort(byLength);
 
 /** Every hedge word written before a number, longest first, as a regular-expression alternation. */
 export const HEDGE_PREFIX_PATTERN = PREFIXES.map(escape).join('|');
@@ -64,4 +66,13 @@ export function hedgeAfter(text: string, at: number): HedgeMatch | undefined {
   const rule = hedgeRule(word);
   const end = at + m[0].length;
   return rule === undefined ? undefined : { word, rule, start: end - word.length, end };
+}
+
+/**
+ * The hedge written onto a number's digits ("420ish", "280-ish"), which find-atoms.ts reads as part
+ * of the number: from `start` (where the suffix begins) to `end`, or undefined.
+ */
+export function gluedHedge(text: string, start: number, end: number): HedgeMatch | undefined {
+  const rule = hedgeRule('-ish');
+  return start >= end || rule === undefined || !/^-?ish$/iu.test(text.slice(start, end)) ? undefined : { word: '-ish', rule, start, end };
 }

@@ -90,7 +90,9 @@ export function partsOf(text: string, atoms: Atom[]): Part[] {
     const unit = atom.form === 'multiplier' ? undefined : (matchUnit(text, atom.end) ?? partOfUnit(text, atom));
     const glued = /[\p{L}\p{N}]/u.test(text[atom.end] ?? '');
     if (glued && unit?.start !== atom.end) continue;
-    if (unit === undefined && atom.form === 'digits' && isLabelCue(text.slice(Math.max(0, atom.start - 16), atom.start))) continue;
+    // "Figure 3C", "Room 2F": a label's number with its letter, no temperature.
+    const bareLetter = unit !== undefined && unit.end - unit.start === 1;
+    if ((unit === undefined || bareLetter) && atom.form === 'digits' && isLabelCue(text.slice(Math.max(0, atom.start - 16), atom.start))) continue;
     parts.push({ atom, unit, ownUnit: unit !== undefined });
   }
   return parts;

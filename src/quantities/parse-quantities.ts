@@ -8,7 +8,7 @@
 import type { Dimension, Quantity } from '../types.js';
 import { toCanonical } from './convert.js';
 import { findAtoms } from './find-atoms.js';
-import { HEDGE_PREFIX_PATTERN, hedgeAfter, hedgeBefore, type HedgeMatch } from './find-hedge.js';
+import { gluedHedge, HEDGE_PREFIX_PATTERN, hedgeAfter, hedgeBefore, type HedgeMatch } from './find-hedge.js';
 import { groupParts, partsOf, type Group } from './group-atoms.js';
 import { applyRule, intervalRule } from './interval-rules.js';
 import { isCalendarCue, readKiloAnnum, readTemperature, RESTATING_VERB_PATTERN } from './reading-cues.js';
@@ -140,7 +140,8 @@ function readQuantities(text: string): Quantity[] {
     const hedge =
       hedgeBefore(text, numberStart, def.dimension) ??
       (numberStart < a.start ? hedgeBefore(text, a.start, def.dimension) : undefined) ??
-      (g.role === 'from' ? undefined : hedgeAfter(text, ownEnd));
+      (g.role === 'from' ? undefined : hedgeAfter(text, ownEnd)) ??
+      (last(g).atom.glued === undefined ? undefined : gluedHedge(text, last(g).atom.glued as number, last(g).atom.end));
     const start = Math.min(numberStart, hedge?.start ?? numberStart);
     const end = Math.max(ownEnd, hedge?.end ?? ownEnd);
     const { value, low, high } = interval(g, reading.rule, def, hedge);

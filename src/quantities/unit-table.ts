@@ -53,16 +53,18 @@ const ANGLE_CUE = `(?:${['tilt', 'obliquit', 'axi', 'latitude', 'longitude', 'an
 // "doubling" before, "per doubling" or "of eventual warming" after, make bare degrees a temperature.
 const TEMPERATURE_CUE = `(?:${['temperature', 'thermometer', 'warm', 'cool', 'cold', 'heat', 'hotter', 'chill', 'sensitivit', 'doubl'].map((w) => words(w) + LETTERS).join('|')})`;
 const TEMPERATURE_AFTER = words('(?:colder|warmer|cooler|hotter|chillier|of (?:warming|cooling|cold|warmth)|of (?:eventual|further|extra|additional|equilibrium|long-term) warming|(?:per|for (?:a|each|every|one|such a)) doubling)');
-const BARE_DEGREES = String.raw`(?<!(?<![\p{L}])${ANGLE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,80})${words('degrees?')}(?![\s\u00A0]+(?:[nN]orth|[sS]outh|[eE]ast|[wW]est|[NSEW](?![\p{L}])))(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,60}[\p{N}\p{L}][\s\u00A0-]*${words('degrees?')})|(?=[\s\u00A0]+${TEMPERATURE_AFTER}(?![\p{L}])))`;
+/** "degrees", and its clippings "deg" and "degs" as people type them ("4-7deg colder", "about 6 degs warmer"). */
+const BARE_DEGREE_WORD = words('(?:degrees?|degs?)');
+const BARE_DEGREES = String.raw`(?<!(?<![\p{L}])${ANGLE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,80})${BARE_DEGREE_WORD}(?![\s\u00A0]+(?:[nN]orth|[sS]outh|[eE]ast|[wW]est|[NSEW](?![\p{L}])))(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,60}[\p{N}\p{L}][\s\u00A0-]*${BARE_DEGREE_WORD})|(?=[\s\u00A0]+${TEMPERATURE_AFTER}(?![\p{L}])))`;
 /**
  * A bare capital C after a number is a Celsius figure in a clause about temperature, as people write
  * it in posts and chat ("the world was ~6C colder", "warmed something like 8-10 C coming out of the
  * last glacial", "a 6C drop"): a comparative, a warming word or a noun of change right after it, or a
- * temperature word shortly before it, as for bare degrees (common practice). With neither it is not
- * read, and "14C" written solid is radiocarbon whatever follows.
+ * temperature word shortly before it, as for bare degrees (common practice); or a minus sign before
+ * the number ("-12 C": below zero is a temperature). With none of these it is not read, and "14C" written solid is radiocarbon whatever follows.
  */
 const C_CHANGE_AFTER = words('(?:drop|swing|rise|fall|change|difference|shift|jump|increase|decrease|cooling|warming|warm-?up|cool-?down|colder|warmer|cooler|hotter)');
-const BARE_C = String.raw`(?<!(?<![\p{N}.,])14)C(?:(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,60}\p{N}[\s\u00A0-]*C)|(?=[\s\u00A0]+(?:${TEMPERATURE_AFTER}|${C_CHANGE_AFTER})(?![\p{L}])))`;
+const BARE_C = String.raw`(?<!(?<![\p{N}.,])14)C(?:(?<=(?<![\p{N}\p{L}])[-\u2212]\p{N}[\p{N}.,]*[\s\u00A0]?C)|(?<=(?<![\p{L}])${TEMPERATURE_CUE}(?![\p{L}])(?:[^.;:!?]|\.(?=\d)){0,60}\p{N}[\s\u00A0-]*C)|(?=[\s\u00A0]+(?:${TEMPERATURE_AFTER}|${C_CHANGE_AFTER})(?![\p{L}])))`;
 /**
  * The scale's name alone after a number is its degree too, as people write it ("about 43 Fahrenheit",
  * "minus 40 Celsius"), and a bare capital F after a number is a Fahrenheit figure ("9 F for the folks

@@ -36,3 +36,17 @@ describe('a pronoun takes up the subject the sentence before took from further b
     expect(await valueFlags(text)).toEqual([]);
   });
 });
+
+// The Younger Dryas lasted about 1,200 years, from about 12,900 to 11,700 years ago (Rasmussen et al.
+// 2006, J. Geophys. Res. 111, D06102, doi 10.1029/2005JD006079).
+describe('a chat line carries its subject past the time stamp and speaker that open it', () => {
+  it('reads "it" after a speaker label as the pronoun that opens the line', async () => {
+    const chat = '[3 Mar, 20:01] Ferg: my bit of the poster is the younger dryas. it kicked off about 12,900 years ago\n[3 Mar, 20:02] Ferg: it lasted about 4,000 years in the end';
+    expect(await valueFlags(chat)).toEqual(['value.younger-dryas-duration']);
+  });
+
+  it('reads it in prose with no label too, and passes the right figure', async () => {
+    expect(await valueFlags('Our poster covers the Younger Dryas. It kicked off about 12,900 years ago. It lasted about 4,000 years.')).toEqual(['value.younger-dryas-duration']);
+    expect(await valueFlags('[3 Mar, 20:01] Ferg: my bit of the poster is the younger dryas. it kicked off about 12,900 years ago\n[3 Mar, 20:02] Ferg: it lasted about 1,200 years in the end')).toEqual([]);
+  });
+});

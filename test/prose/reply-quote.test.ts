@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest';
 import { checkText } from '../../src/engine.js';
 import { loadPacks } from '../../src/rulepack/index.js';
 import { readMarkdownBlocks } from '../../src/source/markdown.js';
-import { isReplyQuote } from '../../src/prose/reply-quote.js';
+import { isReplyQuote, quotesEarlierLine } from '../../src/prose/reply-quote.js';
 
 const packs = await loadPacks([]);
 const SPAN = 'value.edc-record-span';
@@ -53,5 +53,37 @@ describe('a block quote under a byline is a reply', () => {
     const blocks = readMarkdownBlocks(text);
     const kinds = blocks.map((b, i) => [b.kind, isReplyQuote(text, blocks, i)]);
     expect(kinds).toEqual([['paragraph', false], ['blockquote', true], ['paragraph', false], ['blockquote', false]]);
+  });
+});
+
+describe('a plain-text line a reply quotes from the post it answers', () => {
+  async function flagsOf(text: string): Promise<{ line: number; level: string }[]> {
+    const result = await checkText(text, { path: 'thread.txt', packs });
+    return result.flags.filter((f) => f.ruleId === SPAN).map((f) => ({ line: f.span.start.line, level: f.level }));
+  }
+
+  it('keeps the flag on the post and makes the quoted line a note', async () => {
+    const thread = [
+      'wren_k . 3h',
+      'apparently the dome c ice only covers about 400,000 years of air',
+      '',
+      'pollard_j . 2h',
+      '> the dome c ice only covers about 400,000 years of air',
+      'nope, twice that, it goes back about 800,000',
+    ].join('\n');
+    expect(await flagsOf(thread)).toEqual([{ line: 2, level: 'error' }, { line: 5, level: 'note' }]);
+  });
+
+  it('reads quote marks before words said nowhere earlier as a voice of the draft (a forwarded message)', async () => {
+    const mail = ['fwd from my cousin, thoughts?', '', '> From: Gil', '> the dome c ice only covers about 400,000 years of air', '> so the scientists are guessing'].join('\n');
+    expect(await flagsOf(mail)).toEqual([{ line: 4, level: 'error' }]);
+  });
+
+  it('needs four words repeated: a short quote repeats by chance', () => {
+    const text = 'not 800 years, more like 400\n\n> not 800\nwhy not?';
+    expect(quotesEarlierLine(text, text.indexOf('> not'))).toBe(false);
+    const longer = 'the core goes back 400,000 years\n\n>> the core goes back 400,000 years\nno it does not';
+    expect(quotesEarlierLine(longer, longer.indexOf('>>'))).toBe(true);
+    expect(quotesEarlierLine(longer, longer.indexOf('no it'))).toBe(false);
   });
 });

@@ -87,3 +87,42 @@ describe('bare degrees of warming per doubling of CO2 (climate sensitivity)', ()
     expect(parseQuantities(sentence).filter((q) => q.statedUnit === 'degC')).toEqual([]);
   });
 });
+
+// People type a Celsius figure with no degree sign in posts and chats ("about 6C colder", "2.5 to 4 C");
+// a bare capital C after a number is then the scale, as a bare F already is (common practice), in a
+// clause about temperature (a temperature word before it, a comparative or change after it) or after a
+// minus sign; a bare C with none of these is not read.
+describe('a bare capital C after a number', () => {
+  it.each([
+    ['our allotment froze at about 3C colder than the forecast', 'about 3C', 'temperature-change', 3],
+    ['the reservoir ran 7 C warmer than last spring', '7 C', 'temperature-change', 7],
+    ['models put the warming somewhere in the 2-4 C range', '2-4 C', 'temperature-change', 3],
+    ['it hit -12 C on the plateau that night', '-12 C', 'temperature', -12],
+  ])('%s', (sentence, text, dimension, value) => {
+    const [q] = parseQuantities(sentence);
+    expect(q).toMatchObject({ text, dimension, statedUnit: 'degC', value });
+  });
+
+  it.each([
+    // Radiocarbon is written 14C (the isotope's mass number before its symbol; IUPAC, common practice).
+    'the 14C dates put the peat at the end of the cold spell',
+    // A label's number and letter.
+    'see Figure 3C for the drill log',
+    'the talk is in Room 12C after lunch',
+  ])('%s reads no temperature', (sentence) => {
+    expect(parseQuantities(sentence).filter((q) => q.statedUnit === 'degC')).toEqual([]);
+  });
+
+  it('reads "deg" and "degs" as bare degrees in a temperature clause', () => {
+    expect(parseQuantities('the bay was about 5 degs warmer by evening')[0]).toMatchObject({ text: 'about 5 degs', statedUnit: 'degC' });
+    expect(parseQuantities('the slope ran 3-6deg cooler in the shade')[0]).toMatchObject({ statedUnit: 'degC', low: 3, high: 6 });
+  });
+
+  // Global mean LGM cooling about 6 °C (5-7 °C): Gulev et al. (2021), IPCC AR6 WGI Chapter 2, doi:10.1017/9781009157896.004.
+  it('checks a global cooling typed with a bare C like one with a degree sign', () => {
+    const sentence = 'at the last glacial maximum the globe was only about 2C colder than now';
+    const quantities = parseQuantities(sentence);
+    const { bindings } = bindQuantities(sentence, quantities, packs);
+    expect(checkReferences(sentence, quantities, bindings, packs).verdicts).toEqual(['conflicts']);
+  });
+});

@@ -27,6 +27,12 @@ export interface ParagraphContext {
    * answers, quotes what it holds.
    */
   voiced?: boolean;
+  /**
+   * The block's sentences (as the stance reader reads them) that are lines a plain-text reply quotes
+   * from the post it answers ("> so the core goes back 800,000 yrs": prose/reply-quote.ts
+   * quotesEarlierLine): each quotes what it holds.
+   */
+  quotedLines?: readonly string[];
   /** The period (lexicon `periods` key) the block before named, under the same heading. */
   scene?: string;
   /**
