@@ -17,9 +17,7 @@ export function readEvidence(s: ReadSentence, causes: readonly Cause[]): Evidenc
     if (proof === undefined) continue;
     const proofEnd = s.words[proof.last]?.end ?? 0;
     const cause = causes.find((k) => k.end > proofEnd && k.polarity !== 'open' && k.role !== 'feedback');
-    // "a match that close settles the question": the question the draft is about is the causal one.
-    const question = s.words.findIndex((w, i) => i > proof.last && i <= proof.last + 3 && QUESTION.test(w.text) && /^(?:the|this|that)$/u.test(s.words[i - 1]?.text ?? ''));
-    const end = cause?.end ?? (question >= 0 ? s.words[question]?.end : undefined);
+    const end = cause?.end ?? (provedByCorrelation(s, c, proof) ? causalObjectEnd(s, proof) : undefined);
     if (end === undefined) continue;
     out.push({ kind: 'evidence', start: s.words[c.first]?.start ?? 0, end });
   }
@@ -96,8 +94,48 @@ export function proofOfWhatCameBefore(s: ReadSentence, causes: readonly Cause[])
 
 const POINTERS = new Set(['that', 'this', 'which', 'it', 'that’s', "that's"]);
 
-/** What a proof word may settle instead of a stated cause: "settles the question", "the matter". */
-const QUESTION = /^(?:question|matter|debate|argument|issue|case)$/u;
+/** Words that open a segment by pointing back to what the segment before said ("..., which settles ..."). */
+const POINTING_BACK = new Set(['which', 'that', 'this', 'it']);
+
+/**
+ * Whether the proof word's subject is the co-variation: both stand in one segment ("the tight match
+ * ... proves the link"), or the proof's segment opens by pointing back ("..., which on its own settles
+ * that"). "The curves match, and physics establishes the link" gives the proof another subject.
+ */
+function provedByCorrelation(s: ReadSentence, correlation: LexHit, proof: LexHit): boolean {
+  const segment = s.words[proof.first]?.segment;
+  const opening = s.words.findIndex((w) => w.segment === segment);
+  if (POINTING_BACK.has(s.words[opening]?.text ?? '')) return true;
+  // An aside between them ("is, by itself, proof of ...") keeps the subject; a clause joined by a
+  // coordinator ("..., and physics establishes the link") brings its own.
+  const between = s.words.slice(correlation.last + 1, proof.first + 1);
+  const joined = between.some((w, k) => k > 0 && w.segment !== between[k - 1]?.segment && JOINERS.has(w.text));
+  return s.words[correlation.first]?.clause === s.words[proof.first]?.clause && !joined;
+}
+
+/** Coordinators that open a clause of its own (English grammar, common practice). */
+const JOINERS = new Set(['and', 'but', 'so', 'yet', 'while', 'whereas', 'although', 'though']);
+
+/** How many words after a proof word its object's noun may stand ("proof of how sensitive ..."). */
+const OBJECT_REACH = 3;
+
+/**
+ * Where the object of a proof word ends when it names the causal claim instead of stating it, or
+ * undefined: the causal question itself after a determiner ("settles the question", "that matter":
+ * lexicon `proof.questions`), or the causal relation as a noun ("proves the link", "proof of how
+ * sensitive the climate is to CO2": `proof.links`), within a few words after a proof verb or noun of
+ * its clause. An adverb of certainty ("clearly") or a modal ("must") takes no object.
+ */
+function causalObjectEnd(s: ReadSentence, proof: LexHit): number | undefined {
+  const word = s.words[proof.last]?.text ?? '';
+  if (word.endsWith('ly') || word === 'must') return undefined;
+  const clause = s.words[proof.last]?.clause;
+  const near = (h: LexHit) => h.first > proof.last && h.first <= proof.last + OBJECT_REACH && s.words[h.first]?.clause === clause;
+  const question = s.of('proof', 'questions').find((h) => near(h) && /^(?:the|this|that)$/u.test(s.words[h.first - 1]?.text ?? ''));
+  const link = s.of('proof', 'links').find((h) => near(h) && denialsBefore(s, h.first, 3) % 2 === 0);
+  const hit = question ?? link;
+  return hit === undefined ? undefined : s.words[hit.last]?.end;
+}
 
 /** "proves nothing", "proves no such thing": the proof word's object denies it. */
 function deniedObject(s: ReadSentence, i: number): boolean {

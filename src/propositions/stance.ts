@@ -75,6 +75,8 @@ const JOINED_OPENERS = new Set(['which', 'what', 'who', 'maybe', 'perhaps']);
  * voice named by lexicon `stance.reporters`, "the op-ed itself claims", stays a report).
  */
 const AUTHORITIES = new Set(['itself', 'we', 'i', 'scientists', 'researchers', 'study', 'studies', 'data', 'evidence', 'cores', 'core', 'record', 'records', 'team', 'authors', 'our', 'measurements', 'this', 'that', 'it', 'which', 'analysis', 'results', 'paper', 'ipcc', 'report', 'assessment', 'lag', 'physics']);
+/** The writer as the subject right before a report verb ("I wrote", "we argued"): English's first-person pronouns. */
+const WRITER = new Set(['i', 'we']);
 /** Whom a record or the writer tells ("tells us that"): no outside source. */
 const SELF = new Set(['us', 'me', 'you', 'is', 'was', 'are']);
 /**
@@ -426,7 +428,8 @@ function isReported(s: ReadSentence): boolean {
   // "My neighbour insists...", "Her uncle keeps saying...": someone of a person's circle, named as the
   // verb's subject, is an outside source with or without "that".
   // The subject may be a compound noun and a name ("My brother-in-law Clive insists"): six words back.
-  const circle = (v: LexHit) => s.words.slice(Math.max(0, v.first - 6), v.first).some((w, k, all) => /^(?:my|your|his|her|their)$/u.test(w.text) && k < all.length - 1);
+  // "In my notes I wrote that ...": the writer as the verb's own subject is no one of the circle.
+  const circle = (v: LexHit) => !WRITER.has(s.words[v.first - 1]?.text ?? '') && s.words.slice(Math.max(0, v.first - 6), v.first).some((w, k, all) => /^(?:my|your|his|her|their)$/u.test(w.text) && k < all.length - 1);
   if (verbs.some((v) => v.first - s.opening <= 6 && circle(v))) return true;
   // "Mr Pell's central claim is that...", "the letter's argument is that...": a report told as a noun
   // that someone owns, then "is that".

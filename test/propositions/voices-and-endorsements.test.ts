@@ -65,3 +65,19 @@ describe('voices and endorsements', () => {
     expect(stance('If the warmth came first, how exactly is the gas supposed to have caused it?').kind).toBe('rhetorical');
   });
 });
+
+describe('the writer as the subject of a report verb (session 21)', () => {
+  it.each([
+    'In my own report I wrote that carbon dioxide alone ended the last glaciation.',
+    'On my blog we argued that the orbit did all the work by itself.',
+  ])('a possessive before the writer is no outside source: %s', (text) => {
+    expect(stance(text).kind).toBe('asserted');
+  });
+
+  it.each([
+    'My cousin wrote that carbon dioxide alone ended the last glaciation.',
+    'In my street my neighbour insists the orbit did all the work.',
+  ])('someone of the writer\'s circle still reports: %s', (text) => {
+    expect(stance(text).kind).toBe('reported');
+  });
+});

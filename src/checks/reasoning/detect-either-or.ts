@@ -13,7 +13,7 @@ import { opensUtterance } from '../../prose/index.js';
 import type { Cue, DetectInput, DetectorEntry } from './detector.js';
 import { isCo2OnWarming, isWarmingOnCo2, isWarmingSide } from './queries.js';
 import { roleKeptForToday } from './role-for-today.js';
-import { choicePickedInSentence, pickedPart, roleChoiceEnd } from './role-choice.js';
+import { choicePickedInSentence, eitherChoiceAsserted, pickedPart, roleChoiceEnd } from './role-choice.js';
 
 const REVERSE = /\b(?:not|never|rather than|instead of)\s+(?:\w+\s+){0,2}(?:the other way (?:round|around|about)|vice versa|the reverse|the opposite way)\b|\b(?:one-way|one way street|only one way)\b/iu;
 
@@ -49,17 +49,24 @@ function detect({ index, own, read }: DetectInput): Cue[] {
   // of parts and its answer in one sentence (role-choice.ts).
   // "it's either the driver or the passenger, and the cores say passenger": the pronoun may stand for
   // the CO2 of the sentences just before (a post's lead-in too).
-  const partAnswer = choicePickedInSentence(here.s, earlierSentences(read, index).slice(0, PRONOUN_REACH));
-  if (partAnswer !== undefined) return [partAnswer];
   // A neighbour answers only in the same voice: in a thread, the next reply is someone else's.
   // A list item or a post before this block (its lead-in) is a claim of its own, and answers nothing here.
   const sameVoice = (i: number) => i >= own && !opensUtterance((i > index ? read(i) : here)?.s.text ?? '');
+  // The sentences a pronoun of a choice of parts may stand for: the few just before, and the next
+  // one in the same voice (a post that names the gas after its opening line).
+  const nextSame = sameVoice(index + 1) ? read(index + 1)?.s : undefined;
+  const referents = [...earlierSentences(read, index).slice(0, PRONOUN_REACH), ...(nextSame === undefined ? [] : [nextSame])];
+  const partAnswer = choicePickedInSentence(here.s, referents);
+  if (partAnswer !== undefined) return [partAnswer];
   if ((sameVoice(index - 1) && loopAt(index - 1)) || (sameVoice(index + 1) && loopAt(index + 1))) return [];
   // "Back then CO2 was a result of the warming; today it's the cause": the cause kept for the present.
   const today = roleKeptForToday(here, sameVoice(index + 1) ? read(index + 1) : undefined);
   if (today !== undefined) return [today];
   const frame = framedInWords(here.s, earlierSentences(read, index));
   if (frame !== undefined) return [frame];
+  // "it's either the cause or the effect, pick one": the choice of parts set up as exhaustive and said, not asked.
+  const either = eitherChoiceAsserted(here.s, referents);
+  if (either !== undefined) return [{ start: here.s.words[either.first]?.start ?? 0, end: here.s.words[either.last]?.end ?? here.s.text.length }];
   // The answer's own propositions take one side only: "The evidence points to passenger."
   const asserted = new Set(here.props.causes.filter((c) => c.polarity === 'asserted' && c.role !== 'start').map(direction).filter((d) => d !== undefined));
   const answer = answersEitherOr(read(index - 1), here.s.text, asserted.size === 1);
@@ -175,7 +182,10 @@ function framedInWords(s: ReadSentence, earlier: readonly ReadSentence[]): Cue |
     if (!causal(s) && !causal(earlier[0])) return undefined;
   } else {
     const at = earlier.findIndex(co2);
-    if (at < 0 || (!causal(s) && !earlier.slice(0, at + 1).some(causal))) return undefined;
+    // "The orbit kicked off each ending. So which is it: the orbit or the CO2? It can't be both.": a
+    // question naming the gas asks about the cause told just before it.
+    const reach = earlier[at]?.question === true ? at + 2 : at + 1;
+    if (at < 0 || (!causal(s) && !earlier.slice(0, reach).some(causal))) return undefined;
   }
   const clause = s.words[frame.first]?.clause;
   const end = s.words.filter((w) => w.clause === clause).at(-1)?.end ?? s.text.length;

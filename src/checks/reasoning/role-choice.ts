@@ -39,6 +39,14 @@ function partNouns(s: ReadSentence): { hit: LexHit; side: Side }[] {
  * a pronoun).
  */
 export function roleChoiceEnd(s: ReadSentence, before: ReadSentence | readonly ReadSentence[] = []): number | undefined {
+  return roleChoiceOf(s, before)?.last;
+}
+
+/**
+ * The choice of parts in `s` (roleChoiceEnd) as the indices of its first and last words, or
+ * undefined when `s` offers none.
+ */
+export function roleChoiceOf(s: ReadSentence, before: ReadSentence | readonly ReadSentence[] = []): { first: number; last: number } | undefined {
   const earlier = Array.isArray(before) ? (before as readonly ReadSentence[]) : [before as ReadSentence];
   const aboutCo2 = s.of('entities', 'co2').length > 0 || (s.words.some((w) => w.text === 'it') && earlier.some((b) => b.of('entities', 'co2').length > 0));
   if (!aboutCo2) return undefined;
@@ -48,9 +56,30 @@ export function roleChoiceEnd(s: ReadSentence, before: ReadSentence | readonly R
     if (b === undefined) continue;
     const between = s.words.slice(a.hit.last + 1, b.hit.first);
     const sameClause = s.words[a.hit.first]?.clause === s.words[b.hit.first]?.clause;
-    if (sameClause && between.some((w) => w.text === 'or') && !between.some((w) => w.text === 'and' || w.text === 'both')) return b.hit.last;
+    if (sameClause && between.some((w) => w.text === 'or') && !between.some((w) => w.text === 'and' || w.text === 'both')) return { first: a.hit.first, last: b.hit.last };
   }
   return undefined;
+}
+
+/** How many words may stand between "either" and the first part noun it opens ("either the main driver"). */
+const EITHER_REACH = 3;
+
+/**
+ * A choice of parts that "either" sets up as exhaustive, said and not asked: "it's either a cause or
+ * a result", "CO2 is either the driver or the passenger, pick one". The writer holds that one part
+ * excludes the other, which is the either/or framing whether or not a side is picked. "either" must
+ * open the choice in its clause, undenied ("it is not either a cause or an effect" passes), in a
+ * sentence that is no question; `before` as for roleChoiceEnd. Returns the words from "either" to the
+ * choice's end.
+ */
+export function eitherChoiceAsserted(s: ReadSentence, before: readonly ReadSentence[] = []): { first: number; last: number } | undefined {
+  if (s.question) return undefined;
+  const choice = roleChoiceOf(s, before);
+  if (choice === undefined) return undefined;
+  const clause = s.words[choice.first]?.clause;
+  const either = s.words.findIndex((w, i) => w.text === 'either' && i < choice.first && choice.first - i <= EITHER_REACH && s.words[i]?.clause === clause);
+  if (either < 0 || polarityAt(s, either) !== 'asserted') return undefined;
+  return { first: either, last: choice.last };
 }
 
 /**
