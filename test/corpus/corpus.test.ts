@@ -205,6 +205,10 @@ const FLOORS: Record<string, { recall: number; falseFlags: number }> = {
   // new writers and read once, totals only, on the twenty-first round's first code (33/40, 36/41, 35/42
   // and 27/40 caught; false flags 2/90, 1/82, 2/88, 5/96), then opened for tuning.
   'tuning-aq-4': { recall: 0.65, falseFlags: 0.06 },
+  // tuning-ar-1..4 were the blind hold-out holdout-ar, written at the twenty-first round's start by four
+  // new writers and read, totals only, on that round's first and last code (102/122 and 34/41 caught
+  // both times; false flags 9/269 and 5/89 both times); per set on the last code 38/42, 33/40, 31/40,
+  // 34/41 caught, false flags 1/95, 3/88, 5/86, 5/89: the default floors hold.
   'tuning-ao-1': { recall: 0.55, falseFlags: 0.06 },
   'tuning-ao-2': { recall: 0.6, falseFlags: 0.06 },
   'tuning-ao-3': { recall: 0.6, falseFlags: 0.12 },
@@ -239,12 +243,12 @@ describe('the evaluation corpus', () => {
     corrected.of += score.correctionValue.of;
   });
 
-  it('catches at least 83% of the seeded errors over all the sets to tune on (88.0% measured over 122 sets)', () => {
+  it('catches at least 83% of the seeded errors over all the sets to tune on (88.2% measured over 130 sets)', () => {
     expect(caught.of).toBeGreaterThan(0);
     expect(caught.hit / caught.of).toBeGreaterThanOrEqual(0.83);
   });
 
-  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.8% measured over 122 sets)', () => {
+  it('gives the reference number in at least 90% of the corrections of caught numeric errors (93.7% measured over 130 sets)', () => {
     expect(corrected.of).toBeGreaterThan(0);
     expect(corrected.hit / corrected.of).toBeGreaterThanOrEqual(0.9);
   });
